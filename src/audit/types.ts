@@ -1,0 +1,55 @@
+import type { StructureFacts } from '../chem/facts.js';
+
+export type Severity = 'error' | 'warning' | 'note';
+
+export interface Finding {
+  /** Check id (kebab-case), e.g. 'form-matches-structure'. */
+  check: string;
+  /** Stable message id within the check, e.g. 'racemate-needs-chiral'. Tests assert these, not wording. */
+  messageId: string;
+  severity: Severity;
+  /** Rendered message: what was declared, what was computed, what the chemist can do. */
+  message: string;
+  /** The data the message template was filled with (declared/computed values). */
+  data: Record<string, string | number | boolean | null>;
+  /** 1-based line in the record file (or bulk input), null when the finding has no single line. */
+  line: number | null;
+  /** Record field the finding is about, e.g. 'stereo.form'. */
+  field: string | null;
+  /** Set when a waiver in the record accepts this finding. */
+  waived: { reason: string; approvedBy: string } | null;
+}
+
+/** One check that passed, for the checklist (ticked items). */
+export interface PassedCheck {
+  check: string;
+  /** Short evidence, e.g. "structure is chiral (2 defined stereocentres)". */
+  evidence: string;
+}
+
+export interface RecordResult {
+  id: string | null;
+  file: string;
+  /** null when the structure could not be read. */
+  computed: StructureFacts | null;
+  findings: Finding[];
+  passed: PassedCheck[];
+  declared: { form: string | null; descriptors: string | null };
+}
+
+export interface AuditSummary {
+  records: number;
+  errors: number;
+  warnings: number;
+  notes: number;
+  /** Findings accepted by waivers (not counted above). */
+  waived: number;
+}
+
+export interface AuditResult {
+  tool: { name: 'stereogate'; version: string };
+  records: RecordResult[];
+  summary: AuditSummary;
+  /** The caution printed once in every report. */
+  caution: string;
+}

@@ -1,0 +1,148 @@
+/**
+ * What the engine computes about a structure: the stable facts that `stereogate describe` prints as JSON and
+ * that every check reads. Atom numbers here are the 1-based input numbers (see types.ts), never internal indices.
+ */
+
+export type CipLabel = 'R' | 'S' | 'r' | 's' | 'E' | 'Z' | 'M' | 'P' | 'm' | 'p';
+
+export type UnitKind = 'tetrahedral' | 'double-bond' | 'allene' | 'cumulene' | 'biaryl';
+
+export interface StereoUnitFact {
+  kind: UnitKind;
+  /** Centre: [n]. Double bond / axis / cumulene: its two end atoms (those the CIP validation suite labels). */
+  atoms: number[];
+  /** Element of the centre (first end atom for bonds/axes). */
+  element: string;
+  /** The input fixes this unit's configuration. */
+  defined: boolean;
+  /** CIP descriptor for a defined unit; null when undefined or when the CIP rules cannot rank the ligands. */
+  label: CipLabel | null;
+  /** Pseudoasymmetric (r/s) unit: invariant under reflection. */
+  pseudoasymmetric: boolean;
+  /** Atom-map numbers of the unit's atoms as locants (`[C@@H:2]` gives 2), null where unmapped. */
+  locants: (number | null)[];
+  /** Enhanced-stereo group the unit belongs to, if any. */
+  group: { type: 'abs' | 'and' | 'or'; id: number } | null;
+  /** Index (0-based) of the constitutional-equivalence class of this unit; equal numbers = equivalent units. */
+  equivalenceClass: number;
+  /** Index of the connected component (0-based, in input order of first atom) the unit lies in. */
+  component: number;
+}
+
+/** An ordinary amine nitrogen drawn with a configuration: not a stereocentre (rapid pyramidal inversion). */
+export interface InvertibleNitrogenFact {
+  atom: number;
+  /** The input drew a configuration on it (wedge or @/@@). */
+  drawnWithStereo: boolean;
+}
+
+export interface StereoisomerCount {
+  /** All stereoisomers of the constitution (enantiomers counted separately). */
+  total: number;
+  chiral: number;
+  achiral: number;
+  /** Enantiomer pairs = chiral / 2. */
+  pairs: number;
+  /** Achiral members that are meso in the Gold Book sense (only possible when chiral > 0). */
+  meso: number;
+  /** Number of potential stereo units the count is built on. */
+  units: number;
+}
+
+export interface StereoisomerEntry {
+  smiles: string;
+  labels: { atoms: number[]; label: CipLabel | null }[];
+  chiral: boolean;
+  /** The entry that matches the input structure (only when the input is fully defined). */
+  isInput: boolean;
+}
+
+/** How the mirror image relates to the structure, with evidence a chemist can check. */
+export interface MirrorFacts {
+  /** true: the mirror image is a different molecule (chiral); false: superimposable (achiral); null: open. */
+  chiral: boolean | null;
+  /**
+   * When achiral: the atoms and bonds that an improper symmetry (mirror plane, inversion centre, S2n axis)
+   * maps onto themselves, as 1-based atom numbers. Empty atoms and bonds suggest an inversion centre.
+   */
+  fixedAtoms: number[];
+  fixedBonds: [number, number][];
+  /** Plain words, e.g. "mirror plane through C3 (atom 5)". */
+  explanation: string;
+}
+
+/** What an enhanced-stereo drawing stands for. */
+export interface EnhancedStereoFacts {
+  groups: { type: 'abs' | 'and' | 'or'; id: number; atoms: number[] }[];
+  /**
+   * absolute: one stereoisomer, as drawn; racemic: drawn + mirror image (all units in one AND group);
+   * relative: drawn or mirror image, unknown which (all in one OR group, or a molfile without the chiral flag);
+   * mixture: several AND groups (more than two stereoisomers); mixed: any other combination; none: no stereo.
+   */
+  meaning: 'absolute' | 'racemic' | 'relative' | 'mixture' | 'mixed' | 'none';
+}
+
+export interface ComponentFacts {
+  index: number;
+  /** Molecular formula in Hill order, e.g. "C4H6O6". */
+  formula: string;
+  heavyAtoms: number;
+  /** The largest organic component is the parent; the rest are counter-ions / solvents. */
+  role: 'parent' | 'other';
+  smiles: string;
+}
+
+export interface StructureFacts {
+  stereocenters: { atom: number; label: CipLabel | null; element: string; defined: boolean }[];
+  stereobonds: { atoms: [number, number]; label: CipLabel | null; kind: UnitKind; defined: boolean }[];
+  /** Every stereo unit with all its facts (stereocenters/stereobonds are views of this list). */
+  units: StereoUnitFact[];
+  /** As drawn: true chiral, false achiral, null when undefined units leave it open (see `mirror`). */
+  chiral: boolean | null;
+  /** Gold Book meso: achiral, and the constitution has chiral stereoisomers. null when open. */
+  meso: boolean | null;
+  /** Number of undefined stereo units. */
+  undefined: number;
+  stereoisomers: StereoisomerCount;
+  /** Present only when requested (describe --list, or a check that needs it). */
+  stereoisomerList?: StereoisomerEntry[];
+  mirror: MirrorFacts;
+  enhanced: EnhancedStereoFacts;
+  invertibleNitrogens: InvertibleNitrogenFact[];
+  components: ComponentFacts[];
+  /** Canonical-ish constitution key (no stereo) for lookups; equal structures give equal keys. */
+  constitutionKey: string;
+  formula: string;
+  /** Non-fatal remarks from reading and perception (e.g. "wedge on a non-stereogenic atom 7"). */
+  remarks: string[];
+}
+
+export type Relation =
+  | 'identical'
+  | 'enantiomers'
+  | 'diastereomers'
+  | 'constitutional-isomers'
+  | 'different-compounds'
+  | 'same-constitution';
+
+export interface DifferingUnit {
+  kind: UnitKind;
+  /** Atom numbers in structure A. */
+  atomsA: number[];
+  /** The matching atom numbers in structure B. */
+  atomsB: number[];
+  labelA: CipLabel | null;
+  labelB: CipLabel | null;
+}
+
+export interface RelationFacts {
+  relation: Relation;
+  /** Units whose configuration differs (diastereomers), or every unit (enantiomers). */
+  differingUnits: DifferingUnit[];
+  /** Diastereomers differing at exactly one tetrahedral centre. */
+  epimers: boolean;
+  /** For salts/solvates: the parents are related as `relation`; these describe the other components. */
+  otherComponents: { onlyInA: string[]; onlyInB: string[] };
+  /** Plain words for a chemist. */
+  explanation: string;
+}

@@ -1,0 +1,87 @@
+/**
+ * A registry record as submitted (our own format, see schema/record.schema.json) plus where each field stood in
+ * its source file, so that findings can point at the exact line.
+ */
+
+export type StereoForm =
+  | 'achiral'
+  | 'meso'
+  | 'single-enantiomer'
+  | 'enantioenriched'
+  | 'racemate'
+  | 'single-diastereomer'
+  | 'diastereomer-mixture'
+  | 'unknown';
+
+export const STEREO_FORMS: readonly StereoForm[] = [
+  'achiral',
+  'meso',
+  'single-enantiomer',
+  'enantioenriched',
+  'racemate',
+  'single-diastereomer',
+  'diastereomer-mixture',
+  'unknown',
+];
+
+export interface StructureRef {
+  smiles?: string;
+  /** Path relative to the record file. */
+  molfile?: string;
+}
+
+export interface Component {
+  smiles?: string;
+  molfile?: string;
+  descriptors?: string;
+}
+
+export interface Rotation {
+  value: number;
+  wavelength_nm?: number;
+  temperature_c?: number;
+  solvent?: string;
+  concentration?: number;
+}
+
+export interface Waiver {
+  check: string;
+  reason?: string;
+  approved_by?: string;
+}
+
+export interface CompoundRecord {
+  id: string;
+  name?: string;
+  structure: StructureRef;
+  stereo: {
+    form: StereoForm;
+    descriptors?: string;
+    ee?: number;
+    ratio?: string;
+    components?: Component[];
+    rotation?: Rotation;
+    evidence?: string[];
+  };
+  waivers?: Waiver[];
+}
+
+/** 1-based line (and column) of a field in the record's source file, by JSON-pointer-like path. */
+export interface FieldPositions {
+  /** e.g. positions.get('stereo.form') -> { line: 7, column: 3 }; 'stereo.components.0.smiles' etc. */
+  get(path: string): { line: number; column: number } | undefined;
+}
+
+/** A record file after loading: either a record that passed the schema, or the reason it did not. */
+export interface LoadedRecord {
+  /** Path relative to the registry root, forward slashes. */
+  file: string;
+  /** The id if one could be read (even from an invalid record), else null. */
+  id: string | null;
+  record: CompoundRecord | null;
+  positions: FieldPositions;
+  /** Schema / syntax problems; a record with any is not audited further. */
+  problems: { message: string; path: string; line: number | null }[];
+  /** Where this record came from: a record file, or row/record n of a bulk input. */
+  origin: { kind: 'file' } | { kind: 'bulk'; source: string; record: number; line: number };
+}
