@@ -1,0 +1,98 @@
+/**
+ * The contract between the audit and the check modules. A check is data: one module per file, exporting a
+ * `CheckModule`; src/checks/index.ts lists them. Adding a check never means editing a switch elsewhere.
+ */
+import type { StructureFacts, RelationFacts } from '../chem/facts.js';
+import type { Structure } from '../chem/types.js';
+import type { CompoundRecord, LoadedRecord } from '../registry/types.js';
+import type { Severity } from '../audit/types.js';
+
+/** Tolerances and thresholds; every one configurable (schema/config.schema.json), defaults in src/audit/config.ts. */
+export interface AuditConfig {
+  /** Where record files live, relative to the registry root. */
+  recordDirs: string[];
+  /** Per-check severity overrides, or 'off'. */
+  severities: Record<string, Severity | 'off'>;
+  /** Parts of a ratio must sum to 100 within this many percentage points. */
+  ratioSumTolerance: number;
+  /** A racemate's enantiomer ratio may deviate from 50:50 by this many percentage points. */
+  racemateRatioTolerance: number;
+  /** Stated ee and ee computed from a ratio may differ by this many percentage points. */
+  eeTolerance: number;
+  /** A single-enantiomer claim needs at least this ee (percent). */
+  singleEnantiomerMinEe: number;
+  /** |specific rotation| at or below this (degrees) counts as zero. */
+  zeroRotationTolerance: number;
+}
+
+/** The structure of one record, read and described (or the reason it could not be). */
+export interface ReadStructure {
+  structure: Structure | null;
+  facts: StructureFacts | null;
+  /** Why reading failed, with where (line/offset) when known. */
+  error: { message: string; line: number | null; offset: number | null } | null;
+}
+
+/** A record of the registry as the cross-record checks see it. */
+export interface RegistryEntry {
+  id: string | null;
+  file: string;
+  record: CompoundRecord;
+  main: ReadStructure;
+  /** True for records being audited now (changed in the pull request / named on the command line). */
+  underReview: boolean;
+}
+
+export interface RegistryView {
+  entries: readonly RegistryEntry[];
+  /** Entries whose parent constitution key equals `key` (fast lookup for duplicate/enantiomer checks). */
+  withConstitution(key: string): readonly RegistryEntry[];
+}
+
+/** The engine functions a check may call (so checks stay pure and testable). */
+export interface EngineApi {
+  relate(a: Structure, b: Structure): RelationFacts;
+}
+
+export interface CheckContext {
+  loaded: LoadedRecord;
+  /** Null when the record failed the schema (only the structure/schema checks run then). */
+  record: CompoundRecord | null;
+  main: ReadStructure;
+  /** `stereo.components`, read and described, in record order. */
+  components: ReadStructure[];
+  registry: RegistryView;
+  config: AuditConfig;
+  engine: EngineApi;
+}
+
+/** What a check reports before the audit adds severity overrides, positions and waivers. */
+export interface RawFinding {
+  messageId: string;
+  data: Record<string, string | number | boolean | null>;
+  /** Record field the finding is about ('stereo.form', 'stereo.ratio', …); the audit turns it into a line. */
+  field: string | null;
+  /** Overrides the check's default severity for this message (e.g. a note-level message in a warning check). */
+  severity?: Severity;
+}
+
+export interface CheckOutcome {
+  findings: RawFinding[];
+  /** When the check applied and found nothing: short evidence for the ticked checklist item. */
+  passed?: string;
+  /** When the check did not apply to this record (e.g. no rotation given): omitted from the checklist. */
+  notApplicable?: boolean;
+}
+
+export interface CheckModule {
+  /** kebab-case, our own, self-explanatory. */
+  id: string;
+  defaultSeverity: Severity;
+  /** One line. */
+  summary: string;
+  /** The chemistry, with its source (IUPAC section, paper, handbook, or "common practice, no source"). */
+  explanation: string;
+  /** Message templates by message id; `{name}` placeholders are filled from RawFinding.data. */
+  messages: Record<string, string>;
+  run(ctx: CheckContext): CheckOutcome;
+}
