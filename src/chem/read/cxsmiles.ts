@@ -1,0 +1,116 @@
+/**
+ * The CXSMILES extension block `|...|` that may follow a SMILES. Only enhanced stereo is read:
+ * `a:0,2` (absolute), `&1:3,5` (AND group 1), `o1:7` (OR group 1). Atom indices there are 0-based in the order
+ * atoms are written, explicit `[H]` atoms included, which is exactly our atom index. Every other field
+ * (coordinates `(...)`, labels `$...$`, `r`, `c:`, `t:`, `wU:`, `^1:`, `Sg:`, ...) is skipped.
+ * Field syntax as published with the format (ChemAxon's CXSMILES documentation); the skip rule is our own.
+ */
+import type { ReadError, StereoGroup } from '../types.js';
+
+export type CxResult = { ok: true; groups: StereoGroup[]; end: number } | { ok: false; error: ReadError };
+
+function isDigit(c: number): boolean {
+  return c >= 48 && c <= 57;
+}
+
+function fail(code: string, message: string, offset: number): CxResult {
+  return { ok: false, error: { code, message, at: { offset } } };
+}
+
+/**
+ * Reads the block whose opening '|' is at `start`. `atomCount` bounds the indices.
+ * Returns the groups and the offset just past the closing '|'.
+ */
+export function parseCxExtension(s: string, start: number, atomCount: number): CxResult {
+  const n = s.length;
+  const groups: StereoGroup[] = [];
+  let i = start + 1;
+  for (;;) {
+    if (i >= n) return fail('cxsmiles-unclosed', "CXSMILES block is not closed with '|'", start);
+    const c = s.charCodeAt(i);
+    if (c === 124) return { ok: true, groups, end: i + 1 };
+    if (c === 44) {
+      i++;
+      continue;
+    }
+    let type: StereoGroup['type'] | null = null;
+    let id = 0;
+    let j = i;
+    if (c === 97 && s.charCodeAt(i + 1) === 58) {
+      type = 'abs';
+      j = i + 2;
+    } else if ((c === 111 || c === 38) && isDigit(s.charCodeAt(i + 1))) {
+      j = i + 1;
+      while (isDigit(s.charCodeAt(j))) id = id * 10 + s.charCodeAt(j++) - 48;
+      if (s.charCodeAt(j) === 58) {
+        type = c === 111 ? 'or' : 'and';
+        j++;
+      } else if (c === 38) {
+        return fail('cxsmiles-bad-group', "stereo group '&n' must be followed by ':'", j);
+      }
+    } else if (c === 38) {
+      return fail('cxsmiles-bad-group', "stereo group '&' must be followed by a group number", i);
+    }
+    if (type !== null) {
+      const atoms: number[] = [];
+      for (;;) {
+        if (!isDigit(s.charCodeAt(j))) return fail('cxsmiles-bad-group', 'expected an atom index in the stereo group', j);
+        let v = 0;
+        const at = j;
+        while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
+        if (v >= atomCount) {
+          return fail('cxsmiles-bad-group', `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at);
+        }
+        atoms.push(v);
+        const d = s.charCodeAt(j);
+        if (d === 44 && isDigit(s.charCodeAt(j + 1))) {
+          j++;
+          continue;
+        }
+        if (d === 44 || d === 124) break;
+        return fail('cxsmiles-bad-group', `unexpected '${s[j] ?? 'end of text'}' in the stereo group`, j);
+      }
+      const same = groups.find((g) => g.type === type && g.id === id);
+      if (same) {
+        for (const a of atoms) if (!same.atoms.includes(a)) same.atoms.push(a);
+      } else {
+        groups.push({ type, id, atoms });
+      }
+      i = j;
+      continue;
+    }
+    i = skipField(s, i);
+  }
+}
+
+/** Skips one field we do not read; returns the offset of the ',' or '|' that ends it (or n). */
+function skipField(s: string, start: number): number {
+  const n = s.length;
+  let i = start;
+  while (i < n) {
+    const c = s.charCodeAt(i);
+    if (c === 40) {
+      // ( ... ) coordinates; may contain ',' and ';'
+      const close = s.indexOf(')', i + 1);
+      i = close < 0 ? n : close + 1;
+      continue;
+    }
+    if (c === 36) {
+      // $ ... $ atom labels / values
+      const close = s.indexOf('$', i + 1);
+      i = close < 0 ? n : close + 1;
+      continue;
+    }
+    if (c === 124) return i;
+    if (c === 44) {
+      const d = s.charCodeAt(i + 1);
+      if (isDigit(d) || d === 46 || d === 45) {
+        i++;
+        continue;
+      }
+      return i;
+    }
+    i++;
+  }
+  return n;
+}

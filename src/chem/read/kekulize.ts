@@ -1,0 +1,148 @@
+/**
+ * Kekulization: choose which aromatic bonds become double so that every aromatic atom that needs a double bond
+ * gets exactly one. That is a perfect matching on the graph of those atoms joined by aromatic bonds; fused and
+ * odd-membered systems (azulene, indolizine) make the graph non-bipartite, so this uses Edmonds' blossom
+ * algorithm (J. Edmonds, "Paths, trees, and flowers", Can. J. Math. 1965, 17, 449-467) after a greedy start.
+ */
+
+export interface KekuleInput {
+  atomCount: number;
+  /** Both atoms of every bond, by bond index. */
+  bondA: ArrayLike<number>;
+  bondB: ArrayLike<number>;
+  /** Indices of aromatic bonds that may become double. */
+  aromaticBonds: readonly number[];
+  /** Atoms that must receive exactly one double bond. */
+  needsDouble: ArrayLike<boolean>;
+}
+
+/** The bonds to make double, or an atom that cannot get its double bond. */
+export type KekuleResult = { ok: true; doubleBonds: number[] } | { ok: false; atom: number };
+
+export function kekulize(inp: KekuleInput): KekuleResult {
+  // local numbering over atoms that need a double bond
+  const local = new Int32Array(inp.atomCount).fill(-1);
+  const globalOf: number[] = [];
+  for (let i = 0; i < inp.atomCount; i++) {
+    if (inp.needsDouble[i]) {
+      local[i] = globalOf.length;
+      globalOf.push(i);
+    }
+  }
+  const m = globalOf.length;
+  if (m === 0) return { ok: true, doubleBonds: [] };
+  const adj: number[][] = Array.from({ length: m }, () => []);
+  const adjBond: number[][] = Array.from({ length: m }, () => []);
+  for (const bi of inp.aromaticBonds) {
+    const u = local[inp.bondA[bi]!]!;
+    const v = local[inp.bondB[bi]!]!;
+    if (u < 0 || v < 0) continue;
+    adj[u]!.push(v);
+    adjBond[u]!.push(bi);
+    adj[v]!.push(u);
+    adjBond[v]!.push(bi);
+  }
+  const match = new Int32Array(m).fill(-1);
+  // Greedy start, fewest choices first (forced pairs at ring fusions and chain ends go first).
+  const byDegree = Array.from({ length: m }, (_, i) => i).sort((x, y) => adj[x]!.length - adj[y]!.length);
+  for (const v of byDegree) {
+    if (match[v] !== -1) continue;
+    let best = -1;
+    for (const u of adj[v]!) {
+      if (match[u] === -1 && (best === -1 || adj[u]!.length < adj[best]!.length)) best = u;
+    }
+    if (best !== -1) {
+      match[v] = best;
+      match[best] = v;
+    }
+  }
+  for (const v of byDegree) {
+    if (match[v] !== -1) continue;
+    if (!augment(v, adj, match)) return { ok: false, atom: globalOf[v]! };
+  }
+  const doubleBonds: number[] = [];
+  for (let u = 0; u < m; u++) {
+    const v = match[u]!;
+    if (v > u) doubleBonds.push(adjBond[u]![adj[u]!.indexOf(v)]!);
+  }
+  return { ok: true, doubleBonds };
+}
+
+/** Edmonds: grow an alternating tree from `root`, shrinking blossoms; augment if an exposed vertex is found. */
+function augment(root: number, adj: number[][], match: Int32Array): boolean {
+  const m = match.length;
+  const used = new Uint8Array(m);
+  const parent = new Int32Array(m).fill(-1);
+  const base = new Int32Array(m);
+  for (let i = 0; i < m; i++) base[i] = i;
+  const queue: number[] = [root];
+  used[root] = 1;
+  let head = 0;
+
+  const lca = (a0: number, b0: number): number => {
+    const seen = new Uint8Array(m);
+    let a = a0;
+    for (;;) {
+      a = base[a]!;
+      seen[a] = 1;
+      if (match[a] === -1) break;
+      a = parent[match[a]!]!;
+    }
+    let b = b0;
+    for (;;) {
+      b = base[b]!;
+      if (seen[b]) return b;
+      b = parent[match[b]!]!;
+    }
+  };
+  const markPath = (v0: number, b: number, child0: number, blossom: Uint8Array): void => {
+    let v = v0;
+    let child = child0;
+    while (base[v] !== b) {
+      blossom[base[v]!] = 1;
+      blossom[base[match[v]!]!] = 1;
+      parent[v] = child;
+      child = match[v]!;
+      v = parent[match[v]!]!;
+    }
+  };
+
+  while (head < queue.length) {
+    const v = queue[head++]!;
+    for (const to of adj[v]!) {
+      if (base[v] === base[to] || match[v] === to) continue;
+      if (to === root || (match[to] !== -1 && parent[match[to]!] !== -1)) {
+        const cur = lca(v, to);
+        const blossom = new Uint8Array(m);
+        markPath(v, cur, to, blossom);
+        markPath(to, cur, v, blossom);
+        for (let i = 0; i < m; i++) {
+          if (blossom[base[i]!]) {
+            base[i] = cur;
+            if (!used[i]) {
+              used[i] = 1;
+              queue.push(i);
+            }
+          }
+        }
+      } else if (parent[to] === -1) {
+        parent[to] = v;
+        if (match[to] === -1) {
+          // flip the alternating path root ... to
+          let x = to;
+          while (x !== -1) {
+            const px = parent[x]!;
+            const next = match[px]!;
+            match[x] = px;
+            match[px] = x;
+            x = next;
+          }
+          return true;
+        }
+        used[match[to]!] = 1;
+        queue.push(match[to]!);
+      }
+    }
+  }
+  return false;
+}

@@ -1,0 +1,227 @@
+/**
+ * SMILES (with optional CXSMILES block and title) -> Structure.
+ * Steps: syntax (smiles-parse.ts) -> aromatic bonds outside rings become single -> kekulization
+ * (kekulize.ts) -> implicit hydrogens from the Kekulé form (valence.ts, OpenSMILES organic-subset rule) ->
+ * stereo (smiles-stereo.ts) -> CXSMILES enhanced stereo (cxsmiles.ts). Bad input is returned as an error
+ * with a 0-based offset; nothing here throws on any input.
+ */
+import type { Atom, Bond, BondOrder, ReadError, ReadResult, Structure } from '../types.js';
+import { parseCxExtension } from './cxsmiles.js';
+import { kekulize } from './kekulize.js';
+import { parseSmilesGraph, type SmilesGraph } from './smiles-parse.js';
+import { buildStereo } from './smiles-stereo.js';
+import { defaultValences, implicitHydrogens } from './valence.js';
+
+function isSpace(c: number): boolean {
+  return c === 32 || c === 9 || c === 10 || c === 13;
+}
+
+function failure(code: string, message: string, offset: number): ReadResult {
+  return { ok: false, error: { code, message, at: { offset } } };
+}
+
+export function parseSmiles(text: string): ReadResult {
+  try {
+    return parse(text);
+  } catch (e) {
+    // A bug, not bad input; still report it as data so a bulk audit carries on.
+    return failure('smiles-internal-error', `internal error while reading SMILES: ${(e as Error).message}`, 0);
+  }
+}
+
+function parse(text: string): ReadResult {
+  let start = 0;
+  while (start < text.length && isSpace(text.charCodeAt(start))) start++;
+  const g = parseSmilesGraph(text, start);
+  if ('error' in g) return { ok: false, error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } } };
+  const warnings: ReadError[] = [];
+  const n = g.atoms.length;
+  const m = g.bonds.length;
+
+  // after the SMILES: optional CXSMILES block, then an optional title
+  let i = g.end;
+  while (i < text.length && isSpace(text.charCodeAt(i))) i++;
+  let groups: Structure['groups'] = [];
+  if (i < text.length && text.charCodeAt(i) === 124) {
+    const cx = parseCxExtension(text, i, n);
+    if (!cx.ok) return cx;
+    groups = cx.groups;
+    i = cx.end;
+  }
+  const title = text.slice(i).trim();
+
+  // bond orders (Kekulé) and aromatic flags
+  const order = new Uint8Array(m);
+  let anyAromatic = false;
+  for (let k = 0; k < m; k++) {
+    const b = g.bonds[k]!;
+    order[k] = b.order;
+    if (b.aromatic) anyAromatic = true;
+  }
+  if (anyAromatic) {
+    const err = kekulizeGraph(g, order);
+    if (err) return err;
+  }
+
+  // hydrogens and radicals
+  const hCount = new Int32Array(n);
+  const radical = new Uint8Array(n);
+  for (let a = 0; a < n; a++) {
+    const ra = g.atoms[a]!;
+    let sum = 0;
+    for (const bi of g.nbrBond[a]!) sum += order[bi]!;
+    if (ra.hCount < 0) {
+      hCount[a] = ra.atomicNumber === 0 ? 0 : implicitHydrogens(ra.atomicNumber, 0, sum);
+    } else {
+      hCount[a] = ra.hCount;
+      const vals = defaultValences(ra.atomicNumber, ra.charge);
+      const used = sum + ra.hCount;
+      if (vals.length > 0 && used < vals[0]!) radical[a] = Math.min(2, vals[0]! - used);
+    }
+  }
+
+  const stereo = buildStereo(g, order, hCount, warnings);
+
+  const atoms: Atom[] = new Array(n);
+  for (let a = 0; a < n; a++) {
+    const ra = g.atoms[a]!;
+    atoms[a] = {
+      element: ra.element,
+      atomicNumber: ra.atomicNumber,
+      charge: ra.charge,
+      isotope: ra.isotope,
+      hCount: hCount[a]!,
+      aromatic: ra.aromatic,
+      radical: radical[a]!,
+      mapNumber: ra.mapNumber,
+      inputNumber: a + 1,
+      coords: null,
+    };
+  }
+  const bonds: Bond[] = new Array(m);
+  for (let k = 0; k < m; k++) {
+    const b = g.bonds[k]!;
+    bonds[k] = { a: b.a, b: b.b, order: order[k]! as BondOrder, aromatic: b.aromatic, wedge: null };
+  }
+  const structure: Structure = {
+    atoms,
+    bonds,
+    stereo,
+    groups,
+    chiralFlag: null,
+    title: title === '' ? null : title,
+    properties: {},
+    dimension: 0,
+  };
+  return { ok: true, structure, warnings };
+}
+
+/**
+ * Aromatic bonds outside rings become plain single bonds (`c1ccccc1c1ccccc1`: the biphenyl link); the rest get
+ * a Kekulé assignment. Mutates `order` and the graph's aromatic flags. Returns an error result if impossible.
+ */
+function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
+  const n = g.atoms.length;
+  const m = g.bonds.length;
+  const bridge = findBridges(g);
+  const aromaticBonds: number[] = [];
+  for (let k = 0; k < m; k++) {
+    const b = g.bonds[k]!;
+    if (!b.aromatic) continue;
+    if (bridge[k] && !b.explicit) {
+      b.aromatic = false;
+      continue;
+    }
+    aromaticBonds.push(k);
+  }
+  const needsDouble = new Uint8Array(n);
+  let any = false;
+  for (let a = 0; a < n; a++) {
+    const ra = g.atoms[a]!;
+    if (!ra.aromatic) continue;
+    let sum = ra.hCount > 0 ? ra.hCount : 0;
+    let hasAromaticBond = false;
+    for (const bi of g.nbrBond[a]!) {
+      sum += g.bonds[bi]!.aromatic ? 1 : order[bi]!;
+      if (g.bonds[bi]!.aromatic) hasAromaticBond = true;
+    }
+    const vals = defaultValences(ra.atomicNumber, ra.charge);
+    let v = -1;
+    for (const x of vals) {
+      if (x >= sum) {
+        v = x;
+        break;
+      }
+    }
+    if (v - sum >= 1) {
+      if (!hasAromaticBond) {
+        return failure('smiles-kekulize', `cannot kekulize: aromatic atom ${ra.element} (atom ${a + 1}) is not in a ring`, ra.offset);
+      }
+      needsDouble[a] = 1;
+      any = true;
+    }
+  }
+  if (!any || aromaticBonds.length === 0) return null;
+  const bondA = new Int32Array(m);
+  const bondB = new Int32Array(m);
+  for (let k = 0; k < m; k++) {
+    bondA[k] = g.bonds[k]!.a;
+    bondB[k] = g.bonds[k]!.b;
+  }
+  const res = kekulize({ atomCount: n, bondA, bondB, aromaticBonds, needsDouble: Array.from(needsDouble, (x) => x === 1) });
+  if (!res.ok) {
+    const ra = g.atoms[res.atom]!;
+    return failure(
+      'smiles-kekulize',
+      `cannot kekulize: no alternating single/double bond pattern gives aromatic atom ${ra.element} (atom ${res.atom + 1}) a double bond`,
+      ra.offset,
+    );
+  }
+  for (const k of res.doubleBonds) order[k] = 2;
+  return null;
+}
+
+/** Bridges (bonds in no ring) by iterative Tarjan low-link over the whole graph. */
+function findBridges(g: SmilesGraph): Uint8Array {
+  const n = g.atoms.length;
+  const bridge = new Uint8Array(g.bonds.length);
+  const disc = new Int32Array(n).fill(-1);
+  const low = new Int32Array(n);
+  const parentBond = new Int32Array(n).fill(-1);
+  const iter = new Int32Array(n);
+  let time = 0;
+  const stack: number[] = [];
+  for (let s = 0; s < n; s++) {
+    if (disc[s] !== -1) continue;
+    disc[s] = low[s] = time++;
+    stack.push(s);
+    while (stack.length > 0) {
+      const v = stack[stack.length - 1]!;
+      const nb = g.nbr[v]!;
+      const bs = g.nbrBond[v]!;
+      if (iter[v]! < nb.length) {
+        const k = iter[v]!++;
+        const w = nb[k]!;
+        const bi = bs[k]!;
+        if (bi === parentBond[v]) continue;
+        if (disc[w] === -1) {
+          disc[w] = low[w] = time++;
+          parentBond[w] = bi;
+          stack.push(w);
+        } else if (disc[w]! < low[v]!) {
+          low[v] = disc[w]!;
+        }
+      } else {
+        stack.pop();
+        const pb = parentBond[v]!;
+        if (pb >= 0) {
+          const b = g.bonds[pb]!;
+          const p = b.a === v ? b.b : b.a;
+          if (low[v]! < low[p]!) low[p] = low[v]!;
+          if (low[v]! > disc[p]!) bridge[pb] = 1;
+        }
+      }
+    }
+  }
+  return bridge;
+}
