@@ -52,4 +52,6 @@ export interface AuditResult {
   summary: AuditSummary;
   /** The caution printed once in every report. */
   caution: string;
+  /** Paths asked for that named no record file, folder or molfile (runAudit only). */
+  unmatched?: string[];
 }

@@ -5,7 +5,7 @@
 import type { StructureFacts, RelationFacts } from '../chem/facts.js';
 import type { Structure } from '../chem/types.js';
 import type { CompoundRecord, LoadedRecord } from '../registry/types.js';
-import type { Severity } from '../audit/types.js';
+import type { Finding, Severity } from '../audit/types.js';
 
 /** Tolerances and thresholds; every one configurable (schema/config.schema.json), defaults in src/audit/config.ts. */
 export interface AuditConfig {
@@ -64,6 +64,11 @@ export interface CheckContext {
   registry: RegistryView;
   config: AuditConfig;
   engine: EngineApi;
+  /**
+   * Findings of the checks that ran before this one on the same record (in CHECKS order), with severity, line
+   * and `waived` already set by the audit. A check listed last (e.g. the waiver check) sees all the others.
+   */
+  findings?: readonly Finding[];
 }
 
 /** What a check reports before the audit adds severity overrides, positions and waivers. */

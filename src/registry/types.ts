@@ -84,4 +84,22 @@ export interface LoadedRecord {
   problems: { message: string; path: string; line: number | null }[];
   /** Where this record came from: a record file, or row/record n of a bulk input. */
   origin: { kind: 'file' } | { kind: 'bulk'; source: string; record: number; line: number };
+  /**
+   * The text of the main structure and of each component, ready for the reader (the loader fetches molfiles,
+   * safely, relative to the record file). When absent, the audit takes SMILES straight from `record`.
+   */
+  sources?: { main: StructureSource | null; components: StructureSource[] };
+}
+
+/** Where a structure's text came from, before it is read. */
+export interface StructureSource {
+  /** Record field holding it: 'structure' or 'stereo.components.0'. */
+  field: string;
+  format: 'smiles' | 'molfile';
+  /** The SMILES or the molfile text; null when the text could not be had (see `error`). */
+  text: string | null;
+  /** Molfile path relative to the registry root (forward slashes), when it came from a file. */
+  file?: string;
+  /** Why `text` is null: the path leaves the registry, does not exist, is not UTF-8 text, ... */
+  error?: string;
 }

@@ -1,0 +1,139 @@
+/**
+ * Files of a registry on disk: finding record files, reading text safely (binary / non-UTF-8 / oversized files
+ * are reported, not thrown), and resolving molfile paths so that they never leave the registry root.
+ */
+import { lstatSync, readdirSync, readFileSync, realpathSync, statSync } from 'node:fs';
+import { isAbsolute, join, relative, resolve, sep } from 'node:path';
+
+/** Record files larger than this are refused (a record is a few hundred bytes; molfiles a few hundred kB). */
+export const MAX_FILE_BYTES = 8 * 1024 * 1024;
+
+const RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
+
+export type TextResult = { ok: true; text: string } | { ok: false; error: string };
+
+/** Reads a file as UTF-8 text; a byte-order mark is dropped. */
+export function readTextFile(abs: string): TextResult {
+  let bytes: Buffer;
+  try {
+    const st = statSync(abs);
+    if (!st.isFile()) return { ok: false, error: 'is not a regular file' };
+    if (st.size > MAX_FILE_BYTES) return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
+    bytes = readFileSync(abs);
+  } catch (e) {
+    return { ok: false, error: `cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})` };
+  }
+  if (bytes.includes(0)) return { ok: false, error: 'is a binary file, not text' };
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    return { ok: false, error: 'is not valid UTF-8 text' };
+  }
+  return { ok: true, text: text.startsWith('\uFEFF') ? text.slice(1) : text };
+}
+
+/** Forward-slash path of `abs` relative to `root`. */
+export function relativeTo(root: string, abs: string): string {
+  return relative(root, abs).split(sep).join('/');
+}
+
+function escapes(root: string, abs: string): boolean {
+  const rel = relative(root, abs);
+  return rel === '..' || rel.startsWith(`..${sep}`) || isAbsolute(rel);
+}
+
+export type Resolved = { ok: true; abs: string; rel: string } | { ok: false; error: string };
+
+/**
+ * Resolves `path` (as written in a record) against `fromDir`. Refuses absolute paths, paths that climb out of
+ * `root` (which must already be a real path), and symlinks whose target lies outside it.
+ */
+export function resolveInside(root: string, fromDir: string, path: string): Resolved {
+  if (isAbsolute(path) || /^[a-zA-Z]:[\\/]/.test(path) || path.startsWith('\\') || path.startsWith('~')) {
+    return { ok: false, error: `'${path}' is an absolute path; give a path relative to the record file` };
+  }
+  if (path.includes('\0')) return { ok: false, error: 'the path contains a NUL character' };
+  const abs = resolve(fromDir, path);
+  if (escapes(root, abs)) return { ok: false, error: `'${path}' leaves the registry folder` };
+  let real: string;
+  try {
+    real = realpathSync(abs);
+  } catch {
+    return { ok: false, error: `'${path}' does not exist (looked for ${relativeTo(root, abs)})` };
+  }
+  if (escapes(root, real)) return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
+  return { ok: true, abs: real, rel: relativeTo(root, abs) };
+}
+
+export interface FoundFiles {
+  /** Absolute paths, sorted by their path relative to the root. */
+  files: string[];
+  /** Files that were seen but refused (a link out of the registry), by path relative to the root. */
+  refused: { file: string; message: string }[];
+  /** Record folders that do not exist. */
+  missingDirs: string[];
+}
+
+/** All record files (*.yml, *.yaml, *.json) under the record folders; hidden folders and node_modules skipped. */
+export function findRecordFiles(root: string, recordDirs: readonly string[]): FoundFiles {
+  const found = new Map<string, string>();
+  const refused: FoundFiles['refused'] = [];
+  const missingDirs: string[] = [];
+  const visited = new Set<string>();
+  const walk = (dir: string, depth: number): void => {
+    if (depth > 32) return;
+    let real: string;
+    try {
+      real = realpathSync(dir);
+    } catch {
+      return;
+    }
+    if (visited.has(real) || escapes(root, real)) return;
+    visited.add(real);
+    let names: string[];
+    try {
+      names = readdirSync(dir).sort();
+    } catch {
+      return;
+    }
+    for (const name of names) {
+      if (name.startsWith('.') || name === 'node_modules') continue;
+      const abs = join(dir, name);
+      let st;
+      try {
+        st = lstatSync(abs);
+      } catch {
+        continue;
+      }
+      if (st.isSymbolicLink()) {
+        let target;
+        try {
+          target = realpathSync(abs);
+        } catch {
+          if (RECORD_EXTENSIONS.test(name)) refused.push({ file: relativeTo(root, abs), message: 'is a broken link' });
+          continue;
+        }
+        if (escapes(root, target)) {
+          if (RECORD_EXTENSIONS.test(name)) {
+            refused.push({ file: relativeTo(root, abs), message: 'is a link to a place outside the registry folder' });
+          }
+          continue;
+        }
+        st = statSync(abs);
+      }
+      if (st.isDirectory()) walk(abs, depth + 1);
+      else if (st.isFile() && RECORD_EXTENSIONS.test(name)) found.set(relativeTo(root, abs), abs);
+    }
+  };
+  for (const d of recordDirs) {
+    const r = resolveInside(root, root, d);
+    if (!r.ok) {
+      missingDirs.push(d);
+      continue;
+    }
+    walk(r.abs === root ? root : resolve(root, d), 0);
+  }
+  const files = [...found.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, abs]) => abs);
+  return { files, refused, missingDirs };
+}
