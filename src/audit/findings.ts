@@ -1,0 +1,111 @@
+/**
+ * RawFinding -> Finding: message from the check's template, severity after config overrides, line from the
+ * record's field positions, and the waiver (if the record carries a complete one for this check).
+ */
+import type { AuditConfig, CheckModule, RawFinding } from '../checks/types.js';
+import { lineOf } from '../registry/positions.js';
+import type { LoadedRecord } from '../registry/types.js';
+import type { Finding, Severity } from './types.js';
+
+const RANK: Record<Severity, number> = { note: 0, warning: 1, error: 2 };
+
+/** Id of the findings the audit itself makes from a record's schema / syntax problems. */
+export const SCHEMA_CHECK_ID = 'record-schema';
+/** Id of the finding made when a check throws. */
+export const INTERNAL_ERROR_ID = 'internal-error';
+
+/** Fills `{name}` placeholders from data; unknown placeholders are left as written. */
+export function fillTemplate(template: string, data: RawFinding['data']): string {
+  return template.replace(/\{([A-Za-z0-9_]+)\}/g, (whole, name: string) => {
+    if (!(name in data)) return whole;
+    const v = data[name];
+    return v === null ? 'none' : String(v);
+  });
+}
+
+/**
+ * The severity of a finding: the message's own severity, else the check's default. A configured severity
+ * replaces the default; a message that carries its own severity keeps it but never rises above the configured one.
+ */
+export function resolveSeverity(base: Severity, own: Severity | undefined, configured: Severity | undefined): Severity {
+  if (configured === undefined) return own ?? base;
+  if (own === undefined) return configured;
+  return RANK[own] <= RANK[configured] ? own : configured;
+}
+
+export function configuredSeverity(config: AuditConfig, checkId: string): Severity | 'off' | undefined {
+  return Object.prototype.hasOwnProperty.call(config.severities, checkId) ? config.severities[checkId] : undefined;
+}
+
+/** Line of a field in the record's source; for bulk records without positions, the row/record line. */
+export function lineFor(loaded: LoadedRecord, field: string | null): number | null {
+  if (field !== null) {
+    const line = lineOf(loaded.positions, field);
+    if (line !== null) return line;
+  }
+  return loaded.origin.kind === 'bulk' ? loaded.origin.line : null;
+}
+
+export function toFinding(check: CheckModule, raw: RawFinding, loaded: LoadedRecord, config: AuditConfig): Finding {
+  const configured = configuredSeverity(config, check.id);
+  const template = check.messages[raw.messageId];
+  const message =
+    template !== undefined
+      ? fillTemplate(template, raw.data ?? {})
+      : `${raw.messageId}${Object.keys(raw.data ?? {}).length ? ` (${JSON.stringify(raw.data)})` : ''}`;
+  return {
+    check: check.id,
+    messageId: raw.messageId,
+    severity: resolveSeverity(check.defaultSeverity, raw.severity, configured === 'off' ? undefined : configured),
+    message,
+    data: raw.data ?? {},
+    line: lineFor(loaded, raw.field ?? null),
+    field: raw.field ?? null,
+    waived: null,
+  };
+}
+
+function nonEmpty(s: unknown): s is string {
+  return typeof s === 'string' && s.trim() !== '';
+}
+
+/** Marks findings accepted by a complete waiver (check id matches; reason and approver given). */
+export function applyWaivers(findings: Finding[], loaded: LoadedRecord): void {
+  const waivers = loaded.record?.waivers ?? [];
+  for (const f of findings) {
+    if (f.check === INTERNAL_ERROR_ID) continue;
+    const w = waivers.find((x) => x.check === f.check && nonEmpty(x.reason) && nonEmpty(x.approved_by));
+    if (w) f.waived = { reason: w.reason!.trim(), approvedBy: w.approved_by!.trim() };
+  }
+}
+
+export function internalError(check: CheckModule, error: unknown, loaded: LoadedRecord): Finding {
+  const text = error instanceof Error ? error.message : String(error);
+  return {
+    check: INTERNAL_ERROR_ID,
+    messageId: 'check-failed',
+    severity: 'error',
+    message:
+      `The check ${check.id} failed with an internal error (${text}), so this record was not fully checked. ` +
+      'This is a fault in stereogate, not in the record: please report it with the record attached.',
+    data: { check: check.id, error: text },
+    line: loaded.origin.kind === 'bulk' ? loaded.origin.line : null,
+    field: null,
+    waived: null,
+  };
+}
+
+export function schemaFindings(loaded: LoadedRecord, config: AuditConfig): Finding[] {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  if (configured === 'off') return [];
+  return loaded.problems.map((p) => ({
+    check: SCHEMA_CHECK_ID,
+    messageId: 'record-problem',
+    severity: configured ?? 'error',
+    message: p.message,
+    data: { path: p.path, problem: p.message },
+    line: p.line ?? (loaded.origin.kind === 'bulk' ? loaded.origin.line : null),
+    field: p.path === '' ? null : p.path,
+    waived: null,
+  }));
+}

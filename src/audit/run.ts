@@ -1,0 +1,145 @@
+/**
+ * The audit: records -> structures -> facts -> check findings -> results. Knows nothing about where the output
+ * goes. `runAudit` loads a registry from disk; `auditRecords` is the pure core (records from anywhere).
+ */
+import { existsSync, realpathSync, statSync } from 'node:fs';
+import { resolve } from 'node:path';
+import type { AuditConfig, CheckContext, CheckModule } from '../checks/types.js';
+import { closestWord } from '../registry/closest.js';
+import { loadRegistry } from '../registry/load.js';
+import type { LoadedRecord } from '../registry/types.js';
+import { CAUTION } from './caution.js';
+import { ConfigError, DEFAULT_CONFIG, checkSeverityIds, loadConfig } from './config.js';
+import { defaultEngine, type AuditEngine } from './engine.js';
+import { SCHEMA_CHECK_ID, applyWaivers, configuredSeverity, internalError, schemaFindings, toFinding } from './findings.js';
+import { selectRecords } from './select.js';
+import { StructureCache } from './structures.js';
+import type { AuditResult, AuditSummary, Finding, PassedCheck, RecordResult } from './types.js';
+import { VERSION } from './version.js';
+import { buildRegistryView } from './view.js';
+
+export interface AuditRecordsOptions {
+  checks: readonly CheckModule[];
+  config?: AuditConfig;
+  engine: AuditEngine;
+  /** The whole registry the records belong to (for cross-record checks); default: the audited records. */
+  registry?: readonly LoadedRecord[];
+}
+
+/** Audits `records` (each must also be in `registry` when one is given). Pure apart from the engine. */
+export function auditRecords(records: readonly LoadedRecord[], options: AuditRecordsOptions): AuditResult {
+  const config = options.config ?? { ...DEFAULT_CONFIG };
+  const cache = new StructureCache(options.engine);
+  const audited = new Set(records);
+  const registryRecords = options.registry ?? records;
+  const registry = buildRegistryView(registryRecords, cache, (r) => audited.has(r));
+  const engineApi = { relate: options.engine.relate.bind(options.engine) };
+  const results = records.map((loaded) => auditOne(loaded, options.checks, config, cache, registry, engineApi));
+  return { tool: { name: 'stereogate', version: VERSION }, records: results, summary: summarize(results), caution: CAUTION };
+}
+
+function auditOne(
+  loaded: LoadedRecord,
+  checks: readonly CheckModule[],
+  config: AuditConfig,
+  cache: StructureCache,
+  registry: CheckContext['registry'],
+  engine: CheckContext['engine'],
+): RecordResult {
+  const { main, components } = cache.all(loaded);
+  const findings: Finding[] = schemaFindings(loaded, config);
+  applyWaivers(findings, loaded);
+  const passed: PassedCheck[] = [];
+  for (const check of checks) {
+    if (configuredSeverity(config, check.id) === 'off') continue;
+    const ctx: CheckContext = { loaded, record: loaded.record, main, components, registry, config, engine, findings: [...findings] };
+    let produced: Finding[];
+    let outcome;
+    try {
+      outcome = check.run(ctx);
+      if (!outcome || !Array.isArray(outcome.findings)) throw new Error('the check returned no findings list');
+      produced = outcome.findings.map((raw) => toFinding(check, raw, loaded, config));
+    } catch (e) {
+      findings.push(internalError(check, e, loaded));
+      continue;
+    }
+    applyWaivers(produced, loaded);
+    findings.push(...produced);
+    if (produced.length === 0 && !outcome.notApplicable) {
+      passed.push({ check: check.id, evidence: outcome.passed ?? '' });
+    }
+  }
+  const record = loaded.record;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: main.facts,
+    findings,
+    passed,
+    declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null },
+  };
+}
+
+export function summarize(records: readonly RecordResult[]): AuditSummary {
+  const s: AuditSummary = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  for (const r of records) {
+    for (const f of r.findings) {
+      if (f.waived) s.waived++;
+      else if (f.severity === 'error') s.errors++;
+      else if (f.severity === 'warning') s.warnings++;
+      else s.notes++;
+    }
+  }
+  return s;
+}
+
+export interface RunAuditOptions {
+  /** Registry root (the folder holding stereogate.config.yml and the record folders). */
+  root: string;
+  /** Record files, folders or molfiles to audit, relative to the root; default all records. */
+  paths?: string[];
+  /** Overrides on top of the config file. */
+  config?: Partial<AuditConfig>;
+  /** Config file to read instead of the one at the root. */
+  configFile?: string;
+  /** Check modules; default CHECKS from src/checks/index.ts. */
+  checks?: CheckModule[];
+  /** Engine; default src/chem. */
+  engine?: AuditEngine;
+}
+
+/** Loads every record under `root` as the registry and audits those named by `paths`. Throws ConfigError on usage errors. */
+export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
+  const rootAbs = resolve(options.root);
+  if (!existsSync(rootAbs) || !statSync(rootAbs).isDirectory()) {
+    throw new ConfigError(`registry folder ${options.root} does not exist`);
+  }
+  const root = realpathSync(rootAbs);
+  const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
+  const checks = options.checks ?? (await import('../checks/index.js')).CHECKS;
+  const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
+  checkSeverityIds(config, ids, (w) => closestWord(w, ids));
+  const engine = options.engine ?? (await defaultEngine());
+  const load = loadRegistry(root, { recordDirs: config.recordDirs });
+  if (load.missingDirs.length > 0) {
+    throw new ConfigError(
+      `record folder${load.missingDirs.length > 1 ? 's' : ''} ${load.missingDirs.map((d) => `'${d}'`).join(', ')} ` +
+        `not found in ${options.root} (set recordDirs in stereogate.config.yml)`,
+    );
+  }
+  let toAudit: LoadedRecord[] = load.records;
+  let unmatched: string[] = [];
+  if (options.paths && options.paths.length > 0) {
+    const sel = selectRecords(load.records, root, options.paths);
+    toAudit = load.records.filter((r) => sel.selected.has(r));
+    unmatched = sel.unmatched;
+  }
+  const result = auditRecords(toAudit, { checks, config, engine, registry: load.records });
+  if (unmatched.length > 0) result.unmatched = unmatched;
+  return result;
+}
+
+function stripUndefined(o: Partial<AuditConfig> | undefined): Partial<AuditConfig> | undefined {
+  if (!o) return undefined;
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<AuditConfig>;
+}

@@ -1,0 +1,92 @@
+/**
+ * Reads and describes the structures of a record, once per record (cached), turning reader errors and engine
+ * failures into `ReadStructure.error` instead of exceptions.
+ */
+import type { ReadStructure } from '../checks/types.js';
+import type { LoadedRecord, StructureSource } from '../registry/types.js';
+import type { AuditEngine } from './engine.js';
+
+export interface RecordStructures {
+  main: ReadStructure;
+  components: ReadStructure[];
+}
+
+const NOTHING: ReadStructure = Object.freeze({
+  structure: null,
+  facts: null,
+  error: { message: 'the record gives no structure (structure.smiles or structure.molfile)', line: null, offset: null },
+});
+
+function failed(message: string, line: number | null = null, offset: number | null = null): ReadStructure {
+  return { structure: null, facts: null, error: { message, line, offset } };
+}
+
+/** Reads one structure source; never throws. */
+export function readSource(source: StructureSource | null, engine: AuditEngine): ReadStructure {
+  if (source === null) return NOTHING;
+  if (source.text === null) return failed(source.error ?? 'the structure could not be read');
+  let read;
+  try {
+    read = engine.readStructure(source.text, { format: source.format });
+  } catch (e) {
+    return failed(`internal error while reading the ${source.format === 'smiles' ? 'SMILES' : 'molfile'}: ${(e as Error).message}`);
+  }
+  if (!read.ok) {
+    const what = source.format === 'smiles' ? 'SMILES' : source.file ? `molfile ${source.file}` : 'molfile';
+    return failed(`${what}: ${read.error.message}`, read.error.at.line ?? null, read.error.at.offset ?? null);
+  }
+  try {
+    return { structure: read.structure, facts: engine.describe(read.structure), error: null };
+  } catch (e) {
+    return { structure: read.structure, facts: null, error: { message: `internal error while describing the structure: ${(e as Error).message}`, line: null, offset: null } };
+  }
+}
+
+/** The sources of a record: as the loader fetched them, else SMILES straight from the record. */
+export function sourcesOf(loaded: LoadedRecord): NonNullable<LoadedRecord['sources']> {
+  if (loaded.sources) return loaded.sources;
+  const rec = loaded.record;
+  const one = (ref: { smiles?: string; molfile?: string } | undefined, field: string): StructureSource | null => {
+    if (!ref) return null;
+    if (typeof ref.smiles === 'string') return { field, format: 'smiles', text: ref.smiles };
+    if (typeof ref.molfile === 'string') {
+      return { field, format: 'molfile', text: null, error: `molfile '${ref.molfile}' was not fetched (no file context)` };
+    }
+    return null;
+  };
+  const components = (rec?.stereo.components ?? []).map(
+    (c, i) =>
+      one(c, `stereo.components.${i}`) ?? { field: `stereo.components.${i}`, format: 'smiles' as const, text: null, error: 'no structure given' },
+  );
+  return { main: one(rec?.structure, 'structure'), components };
+}
+
+/** Reads and describes every structure of a record once; later calls return the same objects. */
+export class StructureCache {
+  private readonly mains = new WeakMap<LoadedRecord, ReadStructure>();
+  private readonly comps = new WeakMap<LoadedRecord, ReadStructure[]>();
+
+  constructor(private readonly engine: AuditEngine) {}
+
+  main(loaded: LoadedRecord): ReadStructure {
+    let m = this.mains.get(loaded);
+    if (!m) {
+      m = readSource(sourcesOf(loaded).main, this.engine);
+      this.mains.set(loaded, m);
+    }
+    return m;
+  }
+
+  components(loaded: LoadedRecord): ReadStructure[] {
+    let c = this.comps.get(loaded);
+    if (!c) {
+      c = sourcesOf(loaded).components.map((s) => readSource(s, this.engine));
+      this.comps.set(loaded, c);
+    }
+    return c;
+  }
+
+  all(loaded: LoadedRecord): RecordStructures {
+    return { main: this.main(loaded), components: this.components(loaded) };
+  }
+}
