@@ -1,0 +1,101 @@
+/**
+ * One bulk item -> one audited record (runs inside a worker, or inline). SD records: the molfile block plus data
+ * fields; CSV rows: the mapped columns. Cross-record checks see only the record itself in a bulk run (the
+ * registry-wide checks belong to the pull-request audit of record files).
+ */
+import type { AuditConfig, CheckModule } from '../checks/types.js';
+import type { AuditEngine } from '../audit/engine.js';
+import { auditRecords } from '../audit/run.js';
+import type { RecordResult } from '../audit/types.js';
+import type { LoadedRecord } from '../registry/types.js';
+import type { BulkMapping, VocabularyResult } from './mapping.js';
+import type { BulkItem } from './sources.js';
+import { toRecord } from './to-record.js';
+
+export interface BulkRecordResult extends RecordResult {
+  /** Position of the record in the whole input (1-based, across all inputs): the merge order. */
+  seq: number;
+  origin: { source: string; record: number; line: number };
+  form_word: { word: string | null; how: VocabularyResult['how'] };
+}
+
+/** Splits an SD record into its molfile block and its data fields (`> <NAME>` headers). */
+export function splitSdRecord(text: string): { molfile: string; fields: Record<string, string>; problem: string | null } {
+  const lines = text.split('\n');
+  let end = lines.findIndex((l) => l.startsWith('M  END'));
+  let problem: string | null = null;
+  if (end < 0) {
+    // V2000 without properties block still needs M  END; find the first data header instead
+    end = lines.findIndex((l) => l.startsWith('>'));
+    problem = 'the molfile block has no M  END line';
+    if (end < 0) end = lines.length;
+    else end -= 1;
+  }
+  const molfile = lines.slice(0, end + 1).join('\n') + '\n';
+  const fields: Record<string, string> = {};
+  let name: string | null = null;
+  let value: string[] = [];
+  const flush = () => {
+    if (name !== null) fields[name] = value.join('\n').trim();
+    name = null;
+    value = [];
+  };
+  for (const l of lines.slice(end + 1)) {
+    if (l.startsWith('>')) {
+      flush();
+      const m = /<([^>]*)>/.exec(l);
+      name = m ? m[1] : l.slice(1).trim();
+    } else if (name !== null) {
+      if (l.trim() === '') flush();
+      else value.push(l);
+    }
+  }
+  flush();
+  return { molfile, fields, problem };
+}
+
+export interface ItemContext {
+  mapping: BulkMapping;
+  vocabulary: (word: string | undefined) => VocabularyResult;
+  checks: readonly CheckModule[];
+  config: AuditConfig;
+  engine: AuditEngine;
+}
+
+export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): BulkRecordResult {
+  let fields: Record<string, string>;
+  let molfile: string | null = null;
+  const problems: LoadedRecord['problems'] = [];
+  if (item.text !== undefined) {
+    const sd = splitSdRecord(item.text);
+    fields = sd.fields;
+    molfile = sd.molfile;
+    if (sd.problem) problems.push({ message: sd.problem, path: 'structure', line: item.line });
+  } else {
+    fields = item.fields ?? {};
+  }
+  if (item.splitProblem) problems.push({ message: item.splitProblem, path: '', line: item.line });
+  const title = molfile !== null ? molfile.split('\n', 1)[0].trim() : '';
+  const fallbackId = title || `${item.source}#${item.record}`;
+  const conv = toRecord(fields, fallbackId, ctx.mapping, ctx.vocabulary, molfile);
+  for (const p of conv.problems) problems.push({ message: p.message, path: p.path, line: item.line });
+  const loaded: LoadedRecord = {
+    file: item.source,
+    id: conv.record.id,
+    record: conv.record,
+    positions: { get: () => ({ line: item.line, column: 1 }) },
+    problems,
+    origin: { kind: 'bulk', source: item.source, record: item.record, line: item.line },
+    sources: {
+      main: conv.structureText === null ? null : { field: 'structure', format: molfile !== null ? 'molfile' : 'smiles', text: conv.structureText },
+      components: [],
+    },
+  };
+  const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
+  return {
+    ...result,
+    seq: item.seq,
+    origin: { source: item.source, record: item.record, line: item.line },
+    form_word: { word: conv.formWord, how: conv.formHow },
+  };
+}

@@ -1,0 +1,150 @@
+/**
+ * The bulk audit: stream SD/CSV/TSV inputs through worker threads, write results in input order, keep memory
+ * flat. `--shard i/N` audits every N-th record; `mergeShards` (merge.ts) recombines shard outputs into the
+ * result of a single run.
+ */
+import { createReadStream } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import type { AuditConfig } from '../checks/types.js';
+import { auditItem, type BulkRecordResult } from './audit-item.js';
+import { makeItemContext } from './context.js';
+import type { BulkMapping } from './mapping.js';
+import { BulkAccumulator } from './accumulate.js';
+import { mapOrdered } from './pool.js';
+import { makeProgress, type ProgressMode } from './progress.js';
+import { formatOf, readItems, shardFilter, type BulkItem } from './sources.js';
+import type { BulkTrailer, RecordWriter } from './writers.js';
+
+export interface BulkOptions {
+  inputs: string[];
+  mapping: BulkMapping;
+  config: AuditConfig;
+  /** Worker threads; default: all cores. 0 = in this thread. */
+  workers?: number;
+  shard?: { index: number; count: number } | null;
+  /** Per-record time limit in ms (default 20 s). */
+  timeoutMs?: number;
+  progress?: ProgressMode;
+  writers: RecordWriter[];
+  /** Called for every result in order (e.g. to keep flagged records for the HTML report). */
+  onRecord?: (r: BulkRecordResult) => void;
+}
+
+export function isBulkInput(path: string): boolean {
+  return formatOf(path) !== null;
+}
+
+/** Fast pre-count of records (for the progress bar's time left): `$$$$` lines, or data lines of a CSV. */
+export async function countRecords(path: string): Promise<number> {
+  const f = formatOf(path);
+  let count = 0;
+  let atLineStart = true;
+  let lineHasText = false;
+  let dollars = 0;
+  for await (const chunk of createReadStream(path) as AsyncIterable<Buffer>) {
+    for (let i = 0; i < chunk.length; i++) {
+      const c = chunk[i];
+      if (c === 10) {
+        if (f !== 'sd' && lineHasText) count++;
+        atLineStart = true;
+        lineHasText = false;
+        dollars = 0;
+        continue;
+      }
+      if (c !== 13 && c !== 32) lineHasText = true;
+      if (f === 'sd' && (atLineStart || dollars > 0)) {
+        if (c === 36) {
+          dollars++;
+          if (dollars === 4) count++;
+        } else dollars = 0;
+      }
+      atLineStart = false;
+    }
+  }
+  if (f !== 'sd' && lineHasText) count++;
+  return f === 'sd' ? count : Math.max(0, count - 1); // minus the header row
+}
+
+async function* allItems(inputs: string[]): AsyncGenerator<BulkItem & { seq: number }> {
+  let seq = 0;
+  for (const path of inputs) for await (const item of readItems(path)) yield { ...item, seq: ++seq };
+}
+
+export function timeoutResult(item: BulkItem & { seq: number }, limitMs: number, crashed: string | null): BulkRecordResult {
+  const message = crashed
+    ? `the audit of this record crashed its worker (${crashed}); it was not audited, the run went on`
+    : `the audit of this record took longer than the ${Math.round(limitMs / 1000)} s limit; it was stopped and the run went on`;
+  return {
+    seq: item.seq,
+    id: null,
+    file: item.source,
+    computed: null,
+    findings: [
+      {
+        check: 'record-time-limit',
+        messageId: crashed ? 'worker-crashed' : 'time-limit-exceeded',
+        severity: 'error',
+        message: message + ` (record ${item.record}, line ${item.line}). Audit it on its own with a longer --record-timeout, or simplify the structure.`,
+        data: { record: item.record, line: item.line, limit_ms: limitMs },
+        line: item.line,
+        field: null,
+        waived: null,
+      },
+    ],
+    passed: [],
+    declared: { form: null, descriptors: null },
+    origin: { source: item.source, record: item.record, line: item.line },
+    form_word: { word: null, how: 'empty' },
+  };
+}
+
+export interface BulkRunSummary {
+  trailer: BulkTrailer;
+  seconds: number;
+}
+
+export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
+  const started = Date.now();
+  const workers = opts.workers ?? Math.max(1, availableParallelism());
+  const timeoutMs = opts.timeoutMs ?? 20_000;
+  const progressMode = opts.progress ?? 'auto';
+  let total: number | null = null;
+  if (progressMode !== 'none') {
+    total = 0;
+    for (const p of opts.inputs) total += await countRecords(p);
+    if (opts.shard) total = Math.ceil(total / opts.shard.count);
+  }
+  const progress = makeProgress(progressMode, total);
+  const setup = { mapping: opts.mapping, config: opts.config };
+  const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
+  const script = new URL(`./worker${ext}`, import.meta.url);
+  let inline: ((item: BulkItem & { seq: number }) => BulkRecordResult) | undefined;
+  if (workers === 0) {
+    const ctx = await makeItemContext(setup);
+    inline = (item) => auditItem(item, ctx);
+  }
+  const acc = new BulkAccumulator();
+  const results = mapOrdered<BulkItem & { seq: number }, BulkRecordResult>(shardFilter(allItems(opts.inputs), opts.shard ?? null), {
+    workers,
+    script,
+    workerData: setup,
+    timeoutMs,
+    onTimeout: (item) => timeoutResult(item, timeoutMs, null),
+    onCrash: (item, _i, error) => timeoutResult(item, timeoutMs, error),
+    inline,
+    batchSize: 16,
+  });
+  try {
+    for await (const r of results) {
+      acc.add(r);
+      for (const w of opts.writers) await w.write(r);
+      opts.onRecord?.(r);
+      progress.tick();
+    }
+  } finally {
+    progress.stop();
+  }
+  const trailer = acc.trailer(opts.shard ? `${opts.shard.index}/${opts.shard.count}` : null);
+  for (const w of opts.writers) await w.finish(trailer);
+  return { trailer, seconds: (Date.now() - started) / 1000 };
+}
