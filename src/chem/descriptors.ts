@@ -1,0 +1,438 @@
+/**
+ * IUPAC stereodescriptor strings: parse them (IUPAC 2013 recommendations P-93.1.3 to P-93.5, P-91 for the
+ * terms) and compare them with the labels the engine computed. A descriptor may stand alone — `(2R,3S)`,
+ * `rac-(1R,2S)`, `(1R*,2S*)` — or at the front of a whole name — `(1R,2S,5R)-(−)-menthol`, `meso-2,3-dibromobutane`.
+ * Bad input is data: every problem comes back with the character offset where it was found.
+ */
+import type { CipLabel, StereoUnitFact } from './facts.js';
+
+export type DescriptorMode = 'absolute' | 'racemic' | 'relative' | 'none';
+export type RotationSign = '+' | '-' | '±';
+
+export interface DescriptorItem {
+  /** As written: '2', "2'", '4a'; null for a descriptor without locant, `(R)`. */
+  locant: string | null;
+  /** For `RS`/`SR` the first letter (the configuration of the enantiomer cited first). */
+  label: CipLabel;
+  /** Written with a star, `2S*` (P-93.1.3: relative configuration). */
+  relativeStar?: boolean;
+  /** Written `2RS` / `2SR` (P-93.1.3: racemate). */
+  pair?: 'RS' | 'SR';
+  /** Axial chirality written `Ra`/`Sa` (IUPAC 2013, P-93); the label keeps R/S. */
+  axial?: boolean;
+  /** Character offset of the item in the input. */
+  offset: number;
+}
+
+export interface DescriptorProblem {
+  offset: number;
+  message: string;
+}
+
+export interface ParsedDescriptors {
+  mode: DescriptorMode;
+  rotationSign: RotationSign | null;
+  items: DescriptorItem[];
+  /** Each problem as "at character N: …" (N 0-based); `problemDetails` holds the same with numeric offsets. */
+  problems: string[];
+  problemDetails: DescriptorProblem[];
+  /** Style remarks that are not errors (e.g. P-93.1.3 cites the lowest locant as R* / RS). */
+  remarks: string[];
+  /** `rac-` / `rel-` prefixes as written. */
+  prefixes: ('rac' | 'rel')[];
+  /** meso, cis, trans, erythro, threo, endo, exo, syn, anti (lower case). */
+  words: string[];
+  /** Fischer–Rosanoff D/L (not comparable with CIP labels); DL marks a racemate. */
+  fischer: 'D' | 'L' | 'DL' | null;
+  /** The name after the stereo prefixes; '' for a bare descriptor. */
+  rest: string;
+  /** The rest of the name carries further descriptors (on substituents): counts then cover only the front. */
+  embeddedDescriptors: boolean;
+}
+
+const WORDS = ['meso', 'cis', 'trans', 'erythro', 'threo', 'endo', 'exo', 'syn', 'anti'];
+const HYPHENS = '-\u2010\u2011\u2012\u2013\u2212';
+const SIGNS: Record<string, RotationSign> = {
+  '+': '+',
+  '-': '-',
+  '\u2212': '-',
+  '\u2013': '-',
+  '±': '±',
+  '+/-': '±',
+  '+/\u2212': '±',
+  '+/\u2013': '±',
+  '+-': '±',
+};
+const ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
+
+/**
+ * Parses a descriptor string or the front of a name. `context: 'descriptor'` (the default) reports leftover
+ * text as a problem; `context: 'name'` returns it in `rest`.
+ */
+export function parseDescriptors(input: string, options: { context?: 'descriptor' | 'name' } = {}): ParsedDescriptors {
+  const context = options.context ?? 'descriptor';
+  const out: ParsedDescriptors = {
+    mode: 'none',
+    rotationSign: null,
+    items: [],
+    problems: [],
+    problemDetails: [],
+    remarks: [],
+    prefixes: [],
+    words: [],
+    fischer: null,
+    rest: '',
+    embeddedDescriptors: false,
+  };
+  const problem = (offset: number, message: string): void => {
+    out.problemDetails.push({ offset, message });
+    out.problems.push(`at character ${offset}: ${message}`);
+  };
+  const signs: { sign: RotationSign; offset: number }[] = [];
+  let i = skipSpace(input, 0);
+  for (;;) {
+    if (i >= input.length) break;
+    const ch = input[i];
+    let consumed = false;
+    if (ch === '(' || ch === '[') {
+      const close = ch === '(' ? ')' : ']';
+      const end = input.indexOf(close, i + 1);
+      const inner = end < 0 ? '' : input.slice(i + 1, end);
+      if (end >= 0 && !/[([]/.test(inner)) {
+        const g = parseGroup(inner, i + 1, context, problem);
+        if (g.kind !== 'not-stereo') {
+          consumed = true;
+          if (g.sign) signs.push({ sign: g.sign, offset: i });
+          out.items.push(...g.items);
+          for (const w of g.words) addWord(out, w);
+          i = end + 1;
+        }
+      } else if (end < 0 && context === 'descriptor') {
+        problem(i, `'${ch}' is never closed`);
+        i = input.length;
+        break;
+      }
+    } else {
+      const m = /^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\s\-\u2010\u2011\u2012\u2013\u2212(]|$)/.exec(
+        input.slice(i),
+      );
+      const word = m?.[1];
+      const next = m ? input[i + m[0].length] : undefined;
+      // A lone word must be followed by a hyphen in a name ('cis-', 'L-'), so 'd' in 'd-glucose' counts but not
+      // the 'l' of 'l ethyl'.
+      if (word && (context === 'descriptor' || (next !== undefined && HYPHENS.includes(next)))) {
+        consumed = true;
+        if (word === 'rac' || word === 'rel') out.prefixes.push(word);
+        else if (word === 'D' || word === 'L') out.fischer = word;
+        else if (word === 'DL' || word === 'D,L') out.fischer = 'DL';
+        else if (word === 'd') signs.push({ sign: '+', offset: i });
+        else if (word === 'l') signs.push({ sign: '-', offset: i });
+        else if (word === 'dl' || word === 'd,l') signs.push({ sign: '±', offset: i });
+        else addWord(out, word);
+        if (word === 'd' || word === 'l' || word === 'dl' || word === 'd,l') {
+          out.remarks.push(`'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`);
+        }
+        i += word.length;
+      }
+    }
+    if (!consumed) break;
+    // Separator: a hyphen (any dash), spaces, or directly the next parenthesis.
+    i = skipSpace(input, i);
+    if (i < input.length && HYPHENS.includes(input[i])) i = skipSpace(input, i + 1);
+  }
+  out.rest = input.slice(i).trim();
+  if (context === 'descriptor' && out.rest !== '') {
+    problem(i, `'${out.rest.slice(0, 20)}' is not a stereodescriptor`);
+  }
+  out.embeddedDescriptors = /[([](?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?(?:,\s*(?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?)*[)\]]/.test(
+    out.rest,
+  );
+  finish(out, signs, problem);
+  return out;
+}
+
+function skipSpace(s: string, i: number): number {
+  while (i < s.length && /\s/.test(s[i])) i++;
+  return i;
+}
+
+function addWord(out: ParsedDescriptors, w: string): void {
+  if (!out.words.includes(w)) out.words.push(w);
+}
+
+interface Group {
+  kind: 'sign' | 'items' | 'not-stereo';
+  sign?: RotationSign;
+  items: DescriptorItem[];
+  words: string[];
+}
+
+function parseGroup(
+  inner: string,
+  base: number,
+  context: 'descriptor' | 'name',
+  problem: (offset: number, message: string) => void,
+): Group {
+  const compact = inner.replace(/\s+/g, '');
+  const sign = SIGNS[compact];
+  if (sign) return { kind: 'sign', sign, items: [], words: [] };
+  const parts: { text: string; offset: number }[] = [];
+  let start = 0;
+  for (let k = 0; k <= inner.length; k++) {
+    if (k === inner.length || inner[k] === ',') {
+      const raw = inner.slice(start, k);
+      const lead = raw.length - raw.trimStart().length;
+      parts.push({ text: raw.trim(), offset: base + start + lead });
+      start = k + 1;
+    }
+  }
+  const items: DescriptorItem[] = [];
+  const words: string[] = [];
+  const bad: { text: string; offset: number }[] = [];
+  for (const p of parts) {
+    const m = ITEM.exec(p.text);
+    if (m) {
+      const [, loc, lab, ax, star] = m;
+      const item: DescriptorItem = { locant: loc ?? null, label: lab[0] as CipLabel, offset: p.offset };
+      if (lab === 'RS' || lab === 'SR') item.pair = lab;
+      if (star) item.relativeStar = true;
+      if (ax) {
+        if (lab === 'R' || lab === 'S') item.axial = true;
+        else {
+          bad.push(p);
+          continue;
+        }
+      }
+      items.push(item);
+    } else if (WORDS.includes(p.text.toLowerCase())) {
+      words.push(p.text.toLowerCase());
+    } else {
+      bad.push(p);
+    }
+  }
+  if (items.length === 0 && words.length === 0) {
+    // '(2-chloroethyl)…' in a name is the start of the name, not a broken descriptor.
+    if (context === 'name') return { kind: 'not-stereo', items: [], words: [] };
+  }
+  for (const b of bad) {
+    problem(b.offset, b.text === '' ? 'empty stereodescriptor' : `'${b.text}' is not a stereodescriptor (P-93)`);
+  }
+  return { kind: 'items', items, words };
+}
+
+function finish(
+  out: ParsedDescriptors,
+  signs: { sign: RotationSign; offset: number }[],
+  problem: (offset: number, message: string) => void,
+): void {
+  const distinct = [...new Set(signs.map((s) => s.sign))];
+  if (distinct.length > 1) {
+    problem(signs[1].offset, `conflicting signs of rotation: ${distinct.map((s) => `(${s})`).join(' and ')}`);
+  }
+  out.rotationSign = signs[0]?.sign ?? null;
+
+  const seen = new Map<string, number>();
+  for (const it of out.items) {
+    if (it.locant === null) continue;
+    if (seen.has(it.locant)) problem(it.offset, `locant ${it.locant} is given twice`);
+    seen.set(it.locant, it.offset);
+  }
+  const stars = out.items.filter((it) => it.relativeStar).length;
+  const pairs = out.items.filter((it) => it.pair).length;
+  const chiralItems = out.items.filter((it) => it.label === 'R' || it.label === 'S' || it.label === 'M' || it.label === 'P');
+  if (stars > 0 && stars < chiralItems.length) {
+    problem(out.items.find((it) => !it.relativeStar && chiralItems.includes(it))!.offset, 'some descriptors carry * and others do not');
+  }
+  if (pairs > 0 && pairs < chiralItems.length) {
+    out.remarks.push('RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate');
+  }
+  const racemic = out.prefixes.includes('rac') || pairs > 0 || out.rotationSign === '±' || out.fischer === 'DL';
+  const relative = out.prefixes.includes('rel') || stars > 0;
+  if (racemic && relative) {
+    problem(0, 'racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed; P-93.1.3 uses one of them');
+  }
+  if (out.prefixes.includes('rel') && pairs > 0) problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
+  if (out.prefixes.length > 0 && out.items.length === 0) {
+    problem(0, `'${out.prefixes[0]}-' must be followed by descriptors such as (1R,2S)`);
+  }
+  if (out.rotationSign === '±' && chiralItems.length > 0 && !out.prefixes.includes('rac') && pairs === 0) {
+    const it = chiralItems[0];
+    problem(it.offset, '(±) marks a racemate but the descriptors are absolute; write (…RS,…SR) or rac-(…)');
+  }
+  if (racemic) out.mode = 'racemic';
+  else if (relative) out.mode = 'relative';
+  else if (out.items.length > 0) out.mode = 'absolute';
+  else out.mode = 'none';
+
+  if ((racemic || relative) && chiralItems.length > 0) {
+    const first = [...chiralItems].sort((a, b) => locantOrder(a.locant) - locantOrder(b.locant))[0];
+    if (first.label === 'S' || first.label === 'P') {
+      out.remarks.push(
+        `P-93.1.3 cites the lowest-locant centre as R (R* or RS); ${first.locant ?? ''}${first.pair ?? first.label} comes first here`,
+      );
+    }
+  }
+  const unlocated = out.items.filter((it) => it.locant === null);
+  if (unlocated.length > 1 && unlocated.some((it) => it.label === 'R') && unlocated.some((it) => it.label === 'S')) {
+    out.remarks.push('(R,S) without locants is ambiguous: for a racemate P-93.1.3 writes (RS)');
+  }
+}
+
+function locantOrder(locant: string | null): number {
+  if (locant === null) return Number.MAX_SAFE_INTEGER;
+  const n = parseInt(locant, 10);
+  return Number.isNaN(n) ? Number.MAX_SAFE_INTEGER : n * 100 + locant.length;
+}
+
+// ---------------------------------------------------------------------------------------------------------------
+// Comparison with computed labels
+// ---------------------------------------------------------------------------------------------------------------
+
+export interface LabelMismatch {
+  locant: string;
+  declared: string;
+  computed: string;
+  atoms: number[];
+}
+
+export interface DescriptorComparison {
+  /** per-locant: items matched to units through atom-map numbers; counts: how many R, S, E, Z…; none: nothing to compare. */
+  method: 'per-locant' | 'counts' | 'none';
+  /** When method is 'counts' or 'none': why per-locant matching was not possible. */
+  whyNotPerLocant: string | null;
+  agrees: boolean;
+  /** Relative or racemic descriptors matched the structure's mirror-image labels (allowed for those modes). */
+  matchedInverted: boolean;
+  mismatches: LabelMismatch[];
+  /** Declared locants that are not stereo units of the structure (per-locant only). */
+  notStereoUnits: string[];
+  /** Declared locants whose unit the structure leaves undefined (per-locant only). */
+  undefinedAt: string[];
+  /** Defined, labelled units the descriptor does not cite (per-locant only). */
+  unlisted: { locant: string | null; label: CipLabel; atoms: number[] }[];
+  /** Counts by label ('R', 'S', 'E', 'Z', 'M', 'P', 'r', 's', …); axial Ra/Sa counted as M/P. */
+  declaredCounts: Record<string, number>;
+  computedCounts: Record<string, number>;
+}
+
+/**
+ * Axial descriptors: Ra corresponds to M and Sa to P (from memory: Eliel & Wilen, Stereochemistry of Organic
+ * Compounds, 1994, section 14-5). The engine labels axial units with M/P; an R/S label on an axial unit is read
+ * as Ra/Sa.
+ */
+function key(label: CipLabel, axialUnit: boolean): string {
+  if (axialUnit && label === 'R') return 'M';
+  if (axialUnit && label === 'S') return 'P';
+  return label;
+}
+
+const MIRROR: Record<string, string> = { R: 'S', S: 'R', M: 'P', P: 'M' };
+/** Reflection swaps R/S and M/P; E/Z and the pseudoasymmetric r/s, m/p stay (IUPAC 2013, P-93). */
+function mirrored(k: string): string {
+  return MIRROR[k] ?? k;
+}
+
+const AXIAL_KINDS = new Set(['allene', 'biaryl', 'cumulene']);
+
+function unitKey(u: StereoUnitFact): string | null {
+  return u.label === null ? null : key(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== 'cumulene');
+}
+
+function itemKey(it: DescriptorItem): string {
+  return key(it.label, it.axial === true);
+}
+
+/** The locant a unit answers to: the centre's map number; for a bond/axis the lower of its two ends. */
+function unitLocants(u: StereoUnitFact): number[] {
+  return u.locants.filter((l): l is number => l !== null).sort((a, b) => a - b);
+}
+
+function count(keys: string[]): Record<string, number> {
+  const c: Record<string, number> = {};
+  for (const k of keys) c[k] = (c[k] ?? 0) + 1;
+  return c;
+}
+
+function sameCounts(a: Record<string, number>, b: Record<string, number>): boolean {
+  const ks = new Set([...Object.keys(a), ...Object.keys(b)]);
+  for (const k of ks) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
+  return true;
+}
+
+function invertCounts(c: Record<string, number>): Record<string, number> {
+  const o: Record<string, number> = {};
+  for (const [k, v] of Object.entries(c)) o[mirrored(k)] = (o[mirrored(k)] ?? 0) + v;
+  return o;
+}
+
+/**
+ * Compares parsed descriptors with the computed units. Per locant when every cited locant is a plain number and
+ * the structure carries atom-map numbers on its stereo units; otherwise by counts. Racemic and relative
+ * descriptors are compared up to overall inversion (P-93.1.3: they describe the drawn stereoisomer or its
+ * mirror image).
+ */
+export function compareDescriptors(parsed: ParsedDescriptors, units: readonly StereoUnitFact[]): DescriptorComparison {
+  const defined = units.filter((u) => u.defined && u.label !== null);
+  const result: DescriptorComparison = {
+    method: 'none',
+    whyNotPerLocant: null,
+    agrees: true,
+    matchedInverted: false,
+    mismatches: [],
+    notStereoUnits: [],
+    undefinedAt: [],
+    unlisted: [],
+    declaredCounts: count(parsed.items.map(itemKey)),
+    computedCounts: count(defined.map((u) => unitKey(u)!)),
+  };
+  if (parsed.items.length === 0) {
+    result.whyNotPerLocant = 'the descriptor cites no configurations';
+    return result;
+  }
+  const mayInvert = parsed.mode === 'racemic' || parsed.mode === 'relative';
+  const mapped = units.some((u) => unitLocants(u).length > 0);
+  const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
+  if (mapped && numeric) {
+    result.method = 'per-locant';
+    const byLocant = (n: number): StereoUnitFact | undefined =>
+      units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
+    const pairs: { it: DescriptorItem; u: StereoUnitFact }[] = [];
+    for (const it of parsed.items) {
+      const u = byLocant(Number(it.locant));
+      if (!u) result.notStereoUnits.push(it.locant!);
+      else if (!u.defined || u.label === null) result.undefinedAt.push(it.locant!);
+      else pairs.push({ it, u });
+    }
+    const mismatchesFor = (invert: boolean): LabelMismatch[] =>
+      pairs
+        .filter(({ it, u }) => (invert ? mirrored(unitKey(u)!) : unitKey(u)) !== itemKey(it))
+        .map(({ it, u }) => ({
+          locant: it.locant!,
+          declared: it.pair ?? it.label + (it.axial ? 'a' : ''),
+          computed: u.label!,
+          atoms: u.atoms,
+        }));
+    const direct = mismatchesFor(false);
+    const inverted = mayInvert ? mismatchesFor(true) : direct;
+    result.matchedInverted = mayInvert && inverted.length < direct.length;
+    result.mismatches = result.matchedInverted ? inverted : direct;
+    const cited = new Set(pairs.map((p) => p.u));
+    for (const u of defined) {
+      if (!cited.has(u)) {
+        result.unlisted.push({ locant: unitLocants(u)[0]?.toString() ?? null, label: u.label!, atoms: u.atoms });
+      }
+    }
+    result.agrees =
+      result.mismatches.length === 0 && result.notStereoUnits.length === 0 && result.undefinedAt.length === 0;
+    return result;
+  }
+  result.method = 'counts';
+  result.whyNotPerLocant = !mapped
+    ? 'the structure carries no atom-map numbers on its stereo units'
+    : 'not every descriptor has a plain numeric locant';
+  const direct = sameCounts(result.declaredCounts, result.computedCounts);
+  const inverted = mayInvert && sameCounts(invertCounts(result.declaredCounts), result.computedCounts);
+  result.agrees = direct || inverted;
+  result.matchedInverted = !direct && inverted;
+  return result;
+}
