@@ -1,0 +1,73 @@
+/**
+ * The checklist of one record as plain data, shared by the text and Markdown reports: open findings first (the
+ * work to do), then findings accepted by waivers, then the checks that passed; plus one line of computed evidence.
+ */
+import type { StructureFacts } from '../chem/facts.js';
+import type { Finding, RecordResult } from '../audit/types.js';
+
+export type ChecklistItem =
+  | { kind: 'open'; finding: Finding }
+  | { kind: 'accepted'; finding: Finding; reason: string; approvedBy: string }
+  | { kind: 'passed'; check: string; evidence: string };
+
+const ORDER: Record<Finding['severity'], number> = { error: 0, warning: 1, note: 2 };
+
+export function checklistItems(r: RecordResult): ChecklistItem[] {
+  const open = r.findings.filter((f) => !f.waived).sort((a, b) => ORDER[a.severity] - ORDER[b.severity]);
+  const items: ChecklistItem[] = open.map((finding) => ({ kind: 'open', finding }));
+  for (const f of r.findings) {
+    if (f.waived) items.push({ kind: 'accepted', finding: f, reason: f.waived.reason, approvedBy: f.waived.approvedBy });
+  }
+  for (const p of r.passed) items.push({ kind: 'passed', check: p.check, evidence: p.evidence });
+  return items;
+}
+
+/** Counts of open findings by severity. */
+export function openCounts(r: RecordResult): { errors: number; warnings: number; notes: number; waived: number } {
+  const c = { errors: 0, warnings: 0, notes: 0, waived: 0 };
+  for (const f of r.findings) {
+    if (f.waived) c.waived++;
+    else if (f.severity === 'error') c.errors++;
+    else if (f.severity === 'warning') c.warnings++;
+    else c.notes++;
+  }
+  return c;
+}
+
+export function plural(n: number, one: string, many = `${one}s`): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
+/** The declared claim in a few words: "single-enantiomer, (2R,3R)". */
+export function declaredText(r: RecordResult): string | null {
+  const parts = [r.declared.form, r.declared.descriptors].filter((x): x is string => typeof x === 'string' && x !== '');
+  return parts.length ? parts.join(', ') : null;
+}
+
+function unitName(atoms: number[], locants: (number | null)[] | undefined, element: string): string {
+  const loc = locants?.[0];
+  return loc !== null && loc !== undefined ? `${element}${loc}` : `${element} atom ${atoms.join('/')}`;
+}
+
+/** The computed facts in one line: "chiral; 2 stereocentres (C2 R, C3 R); 3 stereoisomers; C4H6O6". */
+export function computedText(facts: StructureFacts | null): string | null {
+  if (!facts) return null;
+  const parts: string[] = [];
+  parts.push(facts.chiral === true ? 'chiral' : facts.chiral === false ? (facts.meso ? 'achiral (meso)' : 'achiral') : 'chirality open (undefined units)');
+  const units = facts.units ?? [];
+  if (units.length === 0) parts.push('no stereo units');
+  else {
+    const shown = units.slice(0, 8).map((u) => {
+      const name = unitName(u.atoms, u.locants, u.element);
+      return `${name} ${u.defined ? (u.label ?? 'defined, no CIP label') : 'undefined'}`;
+    });
+    const more = units.length > 8 ? `, … ${units.length - 8} more` : '';
+    parts.push(`${plural(units.length, 'stereo unit')} (${shown.join(', ')}${more})`);
+  }
+  if (facts.stereoisomers) parts.push(`${plural(facts.stereoisomers.total, 'stereoisomer')} of this constitution`);
+  if (facts.enhanced && facts.enhanced.meaning !== 'none' && facts.enhanced.meaning !== 'absolute') {
+    parts.push(`enhanced stereo: ${facts.enhanced.meaning}`);
+  }
+  if (facts.formula) parts.push(facts.formula);
+  return parts.join('; ');
+}

@@ -1,0 +1,97 @@
+/**
+ * SARIF 2.1.0 (OASIS standard) log of an audit: one run, tool.driver with one rule per check (and the audit's
+ * own record-schema / internal-error rules), one result per finding with a physical location in the record file.
+ * Waived findings are results with an in-source suppression carrying the reason and the approver.
+ */
+import { BUILTIN_RULES, type RuleInfo } from '../audit/builtin-rules.js';
+import type { AuditResult, Finding, Severity } from '../audit/types.js';
+import type { CheckModule } from '../checks/types.js';
+
+export const SARIF_SCHEMA = 'https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json';
+
+export interface SarifOptions {
+  /** Prefix for artifact URIs when the registry root is a subfolder of the repository, e.g. 'registry/'. */
+  uriPrefix?: string;
+}
+
+type Level = 'error' | 'warning' | 'note';
+
+function level(s: Severity): Level {
+  return s;
+}
+
+function rule(info: RuleInfo): Record<string, unknown> {
+  const r: Record<string, unknown> = {
+    id: info.id,
+    name: info.id.replace(/(^|-)([a-z])/g, (_m, _d, c: string) => c.toUpperCase()),
+    shortDescription: { text: info.summary },
+    fullDescription: { text: info.explanation },
+    help: { text: `${info.summary}\n\n${info.explanation}` },
+    defaultConfiguration: { level: level(info.defaultSeverity) },
+  };
+  return r;
+}
+
+function encodeUri(path: string): string {
+  return path.split('/').map(encodeURIComponent).join('/');
+}
+
+export function renderSarif(result: AuditResult, checks: readonly CheckModule[], options: SarifOptions = {}): string {
+  return `${JSON.stringify(sarifLog(result, checks, options), null, 2)}\n`;
+}
+
+export function sarifLog(result: AuditResult, checks: readonly CheckModule[], options: SarifOptions = {}): Record<string, unknown> {
+  const infos: { info: RuleInfo }[] = [
+    ...checks.map((c) => ({ info: c as RuleInfo })),
+    ...BUILTIN_RULES.filter((b) => !checks.some((c) => c.id === b.id)).map((info) => ({ info })),
+  ];
+  // A finding of a check not in `checks` (e.g. a caller passed a shorter list) still gets a rule.
+  for (const r of result.records) {
+    for (const f of r.findings) {
+      if (!infos.some((x) => x.info.id === f.check)) {
+        infos.push({ info: { id: f.check, defaultSeverity: f.severity, summary: f.check, explanation: f.check } });
+      }
+    }
+  }
+  const rules = infos.map((x) => rule(x.info));
+  const index = new Map(infos.map((x, i) => [x.info.id, i]));
+  const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, '/') : '';
+  const results = result.records.flatMap((r) =>
+    r.findings.map((f: Finding) => {
+      const physical: Record<string, unknown> = { artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) } };
+      if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
+      const res: Record<string, unknown> = {
+        ruleId: f.check,
+        ruleIndex: index.get(f.check),
+        level: level(f.severity),
+        message: { text: f.message },
+        locations: [{ physicalLocation: physical }],
+        properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data },
+      };
+      if (f.waived) {
+        res.suppressions = [
+          { kind: 'inSource', status: 'accepted', justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})` },
+        ];
+      }
+      return res;
+    }),
+  );
+  return {
+    $schema: SARIF_SCHEMA,
+    version: '2.1.0',
+    runs: [
+      {
+        tool: {
+          driver: {
+            name: result.tool.name,
+            version: result.tool.version,
+            semanticVersion: result.tool.version,
+            rules,
+          },
+        },
+        results,
+        properties: { caution: result.caution, summary: result.summary },
+      },
+    ],
+  };
+}
