@@ -3,7 +3,7 @@
  * image?" — parse the SMILES with 2D coordinates, canonical id code, parse the mirror SMILES (every @ swapped
  * with @@), id code, compare.
  */
-import OCL from 'openchemlib';
+import { Molecule } from 'openchemlib';
 
 export function mirrorSmilesText(smiles: string): string {
   return smiles.replace(/@@|@/g, (m) => (m === '@@' ? '@' : '@@'));
@@ -15,9 +15,9 @@ export function oclDefaultPath(smiles: readonly string[]): { done: number; chira
   let done = 0;
   for (const smi of smiles) {
     try {
-      const mol = OCL.Molecule.fromSmiles(smi);
+      const mol = Molecule.fromSmiles(smi);
       const id = mol.getIDCode();
-      const mir = OCL.Molecule.fromSmiles(mirrorSmilesText(smi));
+      const mir = Molecule.fromSmiles(mirrorSmilesText(smi));
       if (mir.getIDCode() !== id) chiral++;
     } catch {
       // unparsable for OpenChemLib: still counts as processed
