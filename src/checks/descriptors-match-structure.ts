@@ -1,0 +1,173 @@
+/**
+ * Check: the IUPAC stereodescriptors a record states (stereo.descriptors, the front of its name, and each
+ * component's descriptors) against the CIP labels computed from the structure, and their prefixes (rac, rel,
+ * RS/SR, *, (±), (+)/(−), meso) against the declared form.
+ */
+import { compareDescriptors, type DescriptorComparison, type ParsedDescriptors } from '../chem/descriptors.js';
+import type { StructureFacts } from '../chem/facts.js';
+import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
+import { declaredDescriptors, finding, labelList } from './words.js';
+import { parseDescriptors } from '../chem/descriptors.js';
+import { prefixFindings, prefixMessages } from './descriptor-prefixes.js';
+
+const messages = {
+  'descriptor-unreadable':
+    "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, " +
+    'e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).',
+  'descriptor-label-mismatch':
+    '{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} (compared per ' +
+    'locant through atom-map numbers). Either the drawing or the descriptors are wrong: check the wedges / @ marks ' +
+    'at those atoms, or correct the descriptors.',
+  'descriptor-not-stereo-unit':
+    '{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those ' +
+    'atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.',
+  'descriptor-at-undefined-unit':
+    '{field} declares configurations at locant(s) {locants}, but the structure leaves those units undefined. Draw ' +
+    'the configuration the descriptors state.',
+  'descriptor-counts-mismatch':
+    '{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ' +
+    '({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; ' +
+    'atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.',
+  'descriptors-incomplete':
+    '{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every ' +
+    'stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.',
+  'name-and-descriptors-disagree':
+    "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
+  'descriptor-remark': '{field}: {remark}.',
+  'fischer-not-compared':
+    '{field} uses the Fischer–Rosanoff descriptor {fischer}, which is defined by analogy with glyceraldehyde and ' +
+    'is not comparable with CIP labels, so it was not checked against the structure. Add CIP descriptors, e.g. ' +
+    '(S) for L-alanine, to have them checked.',
+  ...prefixMessages,
+} as const;
+
+type Id = keyof typeof messages;
+
+function countsText(c: Record<string, number>): string {
+  const e = Object.entries(c).filter(([, v]) => v > 0);
+  return e.length ? e.map(([k, v]) => `${v} ${k}`).join(', ') : 'no labelled units';
+}
+
+function compareOne(
+  field: string,
+  text: string,
+  parsed: ParsedDescriptors,
+  facts: StructureFacts,
+  out: RawFinding[],
+): DescriptorComparison | null {
+  const add = (id: Id, data: RawFinding['data'], severity?: RawFinding['severity']): void => {
+    out.push(finding(id, field, { field, text, ...data }, severity));
+  };
+  for (const p of parsed.problemDetails) add('descriptor-unreadable', { problem: p.message, offset: p.offset });
+  for (const r of parsed.remarks) add('descriptor-remark', { remark: r }, 'note');
+  if (parsed.fischer && parsed.items.length === 0) add('fischer-not-compared', { fischer: parsed.fischer }, 'note');
+  if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
+  const cmp = compareDescriptors(parsed, facts.units);
+  const computed = labelList(facts.units);
+  if (cmp.method === 'per-locant') {
+    if (cmp.mismatches.length) {
+      const mismatches = cmp.mismatches
+        .map((m) => `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join('–')})`)
+        .join('; ');
+      add('descriptor-label-mismatch', { count: cmp.mismatches.length, mismatches, method: cmp.method });
+    }
+    if (cmp.notStereoUnits.length) add('descriptor-not-stereo-unit', { locants: cmp.notStereoUnits.join(', '), computed });
+    if (cmp.undefinedAt.length) add('descriptor-at-undefined-unit', { locants: cmp.undefinedAt.join(', ') });
+    if (cmp.agrees && cmp.unlisted.length) {
+      const missing = cmp.unlisted.map((u) => `${u.locant ?? `atom ${u.atoms.join('–')}`} (${u.label})`).join(', ');
+      add('descriptors-incomplete', { missing, computed, method: cmp.method }, 'warning');
+    }
+    return cmp;
+  }
+  if (parsed.embeddedDescriptors) return cmp; // the name cites more units further in; counts would mislead
+  if (!cmp.agrees) {
+    const subset = (d: Record<string, number>): boolean =>
+      Object.entries(d).every(([k, v]) => v <= (cmp.computedCounts[k] ?? 0));
+    const inv = Object.fromEntries(
+      Object.entries(cmp.declaredCounts).map(([k, v]) => [({ R: 'S', S: 'R', M: 'P', P: 'M' } as Record<string, string>)[k] ?? k, v]),
+    );
+    const mayInvert = parsed.mode === 'racemic' || parsed.mode === 'relative';
+    const direct = subset(cmp.declaredCounts);
+    if (direct || (mayInvert && subset(inv))) {
+      const used = direct ? cmp.declaredCounts : inv;
+      const rest: Record<string, number> = {};
+      for (const [k, v] of Object.entries(cmp.computedCounts)) rest[k] = v - (used[k] ?? 0);
+      add('descriptors-incomplete', { missing: countsText(rest), computed, method: cmp.method }, 'warning');
+    } else {
+      add('descriptor-counts-mismatch', {
+        declaredCounts: countsText(cmp.declaredCounts),
+        computedCounts: countsText(cmp.computedCounts),
+        computed,
+        whyNotPerLocant: cmp.whyNotPerLocant ?? '',
+        invertNote: mayInvert ? '; relative/racemic descriptors were also tried against the mirror image' : '',
+        method: cmp.method,
+      });
+    }
+  }
+  return cmp;
+}
+
+function sameItems(a: ParsedDescriptors, b: ParsedDescriptors): boolean {
+  const k = (p: ParsedDescriptors): string =>
+    p.mode + '|' + p.items.map((i) => `${i.locant ?? ''}${i.pair ?? i.label}${i.relativeStar ? '*' : ''}`).sort().join(',');
+  return k(a) === k(b);
+}
+
+function run(ctx: CheckContext): CheckOutcome {
+  const record = ctx.record;
+  const f = ctx.main.facts;
+  if (!record || !f) return { findings: [], notApplicable: true };
+  const decl = declaredDescriptors(record);
+  const out: RawFinding[] = [];
+  const evidence: string[] = [];
+  const note = (what: string, cmp: DescriptorComparison | null): void => {
+    if (!cmp || cmp.method === 'none') return;
+    const how = cmp.method === 'per-locant' ? 'per locant (atom maps)' : `as counts (${cmp.whyNotPerLocant})`;
+    evidence.push(`${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`);
+  };
+  const fieldText = record.stereo.descriptors ?? '';
+  if (decl.field) note(fieldText, compareOne('stereo.descriptors', fieldText, decl.field, f, out));
+  if (decl.name && decl.name.items.length > 0) {
+    if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
+      const nameText = (record.name ?? '').slice(0, (record.name ?? '').length - decl.name.rest.length).replace(/[-\s]+$/, '');
+      out.push(finding('name-and-descriptors-disagree', 'name', { nameText, fieldText }, 'warning'));
+    } else if (!decl.field || decl.field.items.length === 0) {
+      note(record.name ?? '', compareOne('name', record.name ?? '', decl.name, f, out));
+    }
+  } else if (decl.name) {
+    for (const p of decl.name.problemDetails) {
+      out.push(finding('descriptor-unreadable', 'name', { field: 'name', text: record.name ?? '', problem: p.message, offset: p.offset }));
+    }
+    if (decl.name.fischer && !decl.field) {
+      out.push(finding('fischer-not-compared', 'name', { field: 'name', fischer: decl.name.fischer }, 'note'));
+    }
+  }
+  (record.stereo.components ?? []).forEach((c, i) => {
+    const cf = ctx.components[i]?.facts;
+    if (!c.descriptors || !cf) return;
+    const field = `stereo.components.${i}.descriptors`;
+    note(`component ${i + 1} ${c.descriptors}`, compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out));
+  });
+  out.push(...prefixFindings(ctx, decl, f));
+  const hasAny = decl.field !== null || (decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== 'none' || decl.name.words.length > 0 || decl.name.rotationSign !== null));
+  const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
+  if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
+  if (out.some((x) => x.severity !== 'note')) return { findings: out };
+  return { findings: out, passed: evidence.join('; ') || 'descriptor prefixes agree with the declared form' };
+}
+
+export const descriptorsMatchStructure: CheckModule = {
+  id: 'descriptors-match-structure',
+  defaultSeverity: 'error',
+  summary: 'Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.',
+  explanation:
+    'Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for ' +
+    'pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and ' +
+    'rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared ' +
+    'up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map ' +
+    'numbers equal to the locants ([C@@H:2]) the comparison is per atom; otherwise only the numbers of R, S, E, Z … ' +
+    'can be compared. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP ' +
+    'descriptors and are not compared.',
+  messages,
+  run,
+};

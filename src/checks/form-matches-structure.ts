@@ -1,0 +1,152 @@
+/**
+ * Check: the declared stereo form (stereo.form) against what the structure says — chirality, meso, defined and
+ * undefined stereo units, and for mixtures the relation between the components.
+ */
+import type { StructureFacts } from '../chem/facts.js';
+import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
+import { definedUnits, finding, listUnits, undefinedUnits, unitSummary } from './words.js';
+import { mixtureFindings, mixtureMessages } from './form-mixtures.js';
+
+const messages = {
+  'achiral-but-chiral':
+    'Declared achiral, but the structure is chiral: it defines {units} and its mirror image is a different ' +
+    'molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.',
+  'achiral-but-open':
+    'Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the ' +
+    'substance is chiral is open. Define those units in the structure, or declare the form unknown.',
+  'achiral-is-meso':
+    'Declared achiral. The structure is indeed achiral ({mirror}), but its constitution also has chiral ' +
+    'stereoisomers ({chiralIsomers} of {totalIsomers}), which makes this one a meso compound. Declare meso.',
+  'meso-but-chiral':
+    'Declared meso, but the structure is chiral: it defines {units} and its mirror image is a different molecule ' +
+    '({mirror}). A meso compound is achiral. Check the configurations ({labels}) or declare single-enantiomer.',
+  'meso-but-no-chiral-isomers':
+    'Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all ' +
+    'achiral), so the compound is simply achiral: meso applies only to an achiral member of a set that includes ' +
+    'chiral members. Declare achiral.',
+  'meso-but-open':
+    'Declared meso, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}); the drawing also covers ' +
+    'chiral stereoisomers. Define every unit as in the meso form.',
+  'enantiomer-but-achiral':
+    'Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and ' +
+    'no enantiomeric excess. Declare achiral or meso, or correct the configurations ({labels}).',
+  'enantiomer-undefined-units':
+    'Declared {form}, but {undefinedCount} stereo unit(s) are undefined: {undefinedUnits}. The structure then ' +
+    'stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.',
+  'racemate-but-achiral':
+    'Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a ' +
+    'racemate. Declare achiral or meso, or correct the configurations ({labels}).',
+  'racemate-no-chiral-isomers':
+    'Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), ' +
+    'all achiral), so there are no enantiomers to mix. Declare achiral.',
+  'racemate-which-diastereomer':
+    'Declared racemate, drawn with {undefinedCount} undefined stereo unit(s) ({undefinedUnits}). This ' +
+    'constitution has {pairs} pair(s) of enantiomers{achiralPart}, so the drawing does not say which ' +
+    "diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
+  'diastereomer-too-few-units':
+    'Declared single-diastereomer, but the structure defines {definedCount} stereo unit(s) ({units}); ' +
+    'diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, ' +
+    'achiral or unknown, or define the missing units.',
+  'diastereomer-undefined-units':
+    'Declared single-diastereomer, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}), so the ' +
+    'drawing covers several diastereomers. Define them, or declare diastereomer-mixture.',
+  ...mixtureMessages,
+} as const;
+
+export type FormMessageId = keyof typeof messages;
+
+function evidence(f: StructureFacts) {
+  const defined = definedUnits(f);
+  const undef = undefinedUnits(f);
+  return {
+    units: unitSummary(defined),
+    labels: defined.map((u) => `${u.label ?? '?'}`).join(',') || 'none',
+    mirror: f.mirror.explanation || (f.chiral ? 'not superimposable on its mirror image' : 'superimposable'),
+    undefinedCount: undef.length,
+    undefinedUnits: listUnits(undef),
+    definedCount: defined.length,
+    totalIsomers: f.stereoisomers.total,
+    chiralIsomers: f.stereoisomers.chiral,
+    pairs: f.stereoisomers.pairs,
+    isomers: Math.max(f.stereoisomers.total, 2 ** undef.length),
+  };
+}
+
+function run(ctx: CheckContext): CheckOutcome {
+  const f = ctx.main.facts;
+  const record = ctx.record;
+  if (!record || !f) return { findings: [], notApplicable: true };
+  const form = record.stereo.form;
+  const e = evidence(f);
+  const out: RawFinding[] = [];
+  const add = (id: FormMessageId, extra: RawFinding['data'] = {}, severity?: RawFinding['severity']): void => {
+    out.push(finding(id, 'stereo.form', { form, ...e, ...extra }, severity));
+  };
+  const defined = definedUnits(f);
+  const bonds = defined.filter((u) => u.kind === 'double-bond').length;
+  switch (form) {
+    case 'achiral':
+      if (f.chiral === true) add('achiral-but-chiral');
+      else if (f.chiral === null || e.undefinedCount > 0) {
+        if (f.stereoisomers.chiral > 0 || f.chiral === null) add('achiral-but-open', {}, 'warning');
+      } else if (f.meso === true) add('achiral-is-meso', {}, 'note');
+      break;
+    case 'meso':
+      if (f.chiral === true) add('meso-but-chiral');
+      else if (e.undefinedCount > 0 || f.meso === null) add('meso-but-open');
+      else if (f.meso === false) add('meso-but-no-chiral-isomers', {}, 'warning');
+      break;
+    case 'single-enantiomer':
+    case 'enantioenriched':
+      if (f.chiral === false && e.undefinedCount === 0) add('enantiomer-but-achiral');
+      else if (e.undefinedCount > 0) add('enantiomer-undefined-units', {}, form === 'enantioenriched' ? 'warning' : undefined);
+      break;
+    case 'racemate':
+      if (f.chiral === false && e.undefinedCount === 0) add('racemate-but-achiral');
+      else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) add('racemate-no-chiral-isomers');
+      else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
+        const a = f.stereoisomers.achiral;
+        add('racemate-which-diastereomer', { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : '' }, 'warning');
+      }
+      break;
+    case 'single-diastereomer':
+      if (defined.length < 2 && bonds === 0) add('diastereomer-too-few-units');
+      else if (e.undefinedCount > 0) add('diastereomer-undefined-units', {}, 'warning');
+      break;
+    case 'diastereomer-mixture':
+    case 'unknown':
+      break;
+  }
+  out.push(...mixtureFindings(ctx, f));
+  if (out.some((x) => x.severity !== 'note')) return { findings: out };
+  return { findings: out, passed: passedEvidence(form, f, e) };
+}
+
+function passedEvidence(form: string, f: StructureFacts, e: ReturnType<typeof evidence>): string {
+  if (form === 'unknown') {
+    return e.undefinedCount
+      ? `form unknown; undefined stereo units: ${e.undefinedUnits}`
+      : `form unknown; the structure defines ${e.units} and leaves none undefined`;
+  }
+  const chir = f.chiral === true ? 'chiral' : f.chiral === false ? (f.meso ? 'meso (achiral)' : 'achiral') : 'open';
+  const why = f.chiral !== null && f.mirror.explanation ? `; ${f.mirror.explanation}` : '';
+  return `declared ${form}; structure is ${chir} (${e.units}${e.undefinedCount ? `, ${e.undefinedCount} undefined` : ''})${why}`;
+}
+
+export const formMatchesStructure: CheckModule = {
+  id: 'form-matches-structure',
+  defaultSeverity: 'error',
+  summary: 'The declared stereo form agrees with the chirality, meso character and defined units of the structure.',
+  explanation:
+    'IUPAC Gold Book definitions: a chiral molecule is not superimposable on its mirror image; enantiomers are ' +
+    'mirror-image stereoisomers; a racemate is an equimolar mixture of a pair of enantiomers, so it needs a ' +
+    'chiral structure; a meso compound is the achiral member of a set of diastereoisomers that also includes ' +
+    'chiral members; diastereoisomers are stereoisomers that are not enantiomers (cis-trans isomers included). ' +
+    'A single enantiomer therefore needs a chiral structure with every stereo unit defined, a single ' +
+    'diastereomer two or more stereogenic units (or a stereogenic double bond), and a diastereomer mixture two ' +
+    'or more components that are pairwise diastereomers with the constitution of the parent. The evidence is ' +
+    "the engine's mirror-image analysis (the symmetry element that makes a structure achiral) and its " +
+    'stereoisomer count.',
+  messages,
+  run,
+};

@@ -1,0 +1,61 @@
+/**
+ * Check: a stereo claim that rests only on an ordinary amine nitrogen, which inverts rapidly and is therefore
+ * not a stereocentre at room temperature.
+ */
+import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
+import { definedUnits, finding, STEREO_CLAIM_FORMS } from './words.js';
+
+const messages = {
+  'claim-rests-on-invertible-nitrogen':
+    'Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. ' +
+    'Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier ' +
+    'about 25 kJ/mol for simple amines), so its two configurations interconvert and cannot be isolated: the ' +
+    'structure has no stereocentre. Declare achiral, or, if the nitrogen is locked (a bridgehead as in Tröger\'s ' +
+    'base, an aziridine, a quaternary ammonium ion), draw that feature.',
+  'stereo-drawn-on-invertible-nitrogen':
+    'The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at ' +
+    'room temperature; that configuration means nothing. The claim rests on the other stereo units, which is fine; ' +
+    'remove the wedge or @ mark at that nitrogen.',
+} as const;
+
+function run(ctx: CheckContext): CheckOutcome {
+  const record = ctx.record;
+  const f = ctx.main.facts;
+  if (!record || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
+  const form = record.stereo.form;
+  const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
+  const out: RawFinding[] = [];
+  const claims = STEREO_CLAIM_FORMS.includes(form);
+  const others = definedUnits(f).filter((u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === 'tetrahedral'));
+  const atomsOf = (list: typeof f.invertibleNitrogens): string => list.map((n) => `atom ${n.atom}`).join(', ');
+  if (claims && others.length === 0) {
+    const list = drawn.length ? drawn : f.invertibleNitrogens;
+    out.push(
+      finding('claim-rests-on-invertible-nitrogen', 'stereo.form', {
+        form,
+        atoms: atomsOf(list),
+        drawnWithStereo: drawn.length > 0,
+      }),
+    );
+  } else if (drawn.length > 0) {
+    out.push(finding('stereo-drawn-on-invertible-nitrogen', 'structure', { form, atoms: atomsOf(drawn) }, 'note'));
+  }
+  if (out.some((x) => x.severity !== 'note')) return { findings: out };
+  if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
+  return { findings: out, passed: `the claim rests on ${others.length} stereo unit(s) other than amine nitrogens` };
+}
+
+export const nitrogenInversion: CheckModule = {
+  id: 'nitrogen-inversion',
+  defaultSeverity: 'error',
+  summary: 'A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.',
+  explanation:
+    'A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar ' +
+    'transition state with a low barrier (about 20–30 kJ/mol for simple amines; from memory, e.g. Clayden, ' +
+    'Greeves & Warren, Organic Chemistry), so its enantiomers interconvert rapidly at room temperature and ' +
+    'cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is ' +
+    'blocked: a bridgehead (Tröger\'s base), a small ring (aziridines, slowly), or four substituents (ammonium ' +
+    'ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres.',
+  messages,
+  run,
+};

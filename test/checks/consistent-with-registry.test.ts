@@ -1,0 +1,67 @@
+import { describe, expect, it } from 'vitest';
+import { consistentWithRegistry as check } from '../../src/checks/consistent-with-registry.js';
+import type { Relation } from '../../src/chem/facts.js';
+import type { CompoundRecord, Rotation } from '../../src/registry/types.js';
+import { centre, chiralFacts, ctx, entry, ids, read, record, runCheck } from './facts.js';
+
+// Enantiomers have equal and opposite specific rotations under the same conditions (IUPAC Gold Book,
+// enantiomer / optical activity). Carvone enantiomers: (R)-(−) and (S)-(+), about ±61° neat (handbook, from memory).
+const rot = (value: number, p: Partial<Rotation> = {}): Rotation => ({ value, wavelength_nm: 589, temperature_c: 20, solvent: 'neat', ...p });
+const mine = (stereo: Partial<CompoundRecord['stereo']> = {}) =>
+  record({ form: 'single-enantiomer', ...stereo }, { id: 'LX-00020', name: '(S)-(+)-carvone' });
+const theirs = (stereo: Partial<CompoundRecord['stereo']> = {}) =>
+  record({ form: 'single-enantiomer', ...stereo }, { id: 'LX-00019', name: '(R)-(−)-carvone' });
+
+function setup(rel: Relation, me: CompoundRecord, other: CompoundRecord, underReview = true) {
+  const f = chiralFacts([centre(7, 'S')]);
+  const selfRead = read(f, 'me');
+  const otherRead = read(chiralFacts([centre(7, 'R')]), 'other');
+  const entries = [
+    entry(me, selfRead, 'compounds/LX-00020.yml', underReview),
+    entry(other, otherRead, 'compounds/LX-00019.yml', false),
+  ];
+  return ctx({ record: me, main: selfRead, entries, relations: { 'me|other': rel }, file: 'compounds/LX-00020.yml' });
+}
+
+describe('consistent-with-registry', () => {
+  it('passes a record with no relative in the registry', () => {
+    const o = runCheck(check, setup('diastereomers', mine(), theirs()));
+    expect(o.findings).toEqual([]);
+    expect(o.passed).toMatch(/compared with 1/);
+  });
+  it('flags a structure identical to a registered one; a different form is an error', () => {
+    expect(runCheck(check, setup('identical', mine(), theirs())).findings).toMatchObject([
+      { messageId: 'already-registered', severity: 'warning', data: { otherId: 'LX-00019' } },
+    ]);
+    expect(ids(runCheck(check, setup('identical', mine(), theirs({ form: 'racemate' }))))).toEqual(['same-structure-different-form']);
+  });
+  it('names a registered enantiomer and accepts opposite rotations', () => {
+    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(-61) })));
+    expect(o.findings).toMatchObject([{ messageId: 'enantiomer-registered', severity: 'note', data: { otherId: 'LX-00019' } }]);
+  });
+  it('fails enantiomers measured alike with the same sign', () => {
+    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(58) })));
+    expect(ids(o)).toEqual(['enantiomer-registered', 'enantiomer-rotation-same-sign']);
+  });
+  it('does not compare rotations measured differently', () => {
+    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(58, { solvent: 'ethanol' }) })));
+    expect(ids(o)).toEqual(['enantiomer-registered']);
+  });
+  it('notes enantiomers of unequal rotation size', () => {
+    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(-30) })));
+    expect(ids(o)).toEqual(['enantiomer-registered', 'enantiomer-rotation-magnitude']);
+  });
+  it('warns when a registered enantiomer has a conflicting form', () => {
+    expect(ids(runCheck(check, setup('enantiomers', mine(), theirs({ form: 'racemate' }))))).toEqual([
+      'enantiomer-form-conflict',
+      'enantiomer-registered',
+    ]);
+  });
+  it('only checks records under review, never against themselves', () => {
+    expect(runCheck(check, setup('identical', mine(), theirs(), false)).notApplicable).toBe(true);
+    const me = mine();
+    const selfRead = read(chiralFacts([centre(7, 'S')]), 'me');
+    const c = ctx({ record: me, main: selfRead, entries: [entry(me, selfRead, 'compounds/LX-00001.yml', true)], relations: { 'me|me': 'identical' } });
+    expect(runCheck(check, c).findings).toEqual([]);
+  });
+});

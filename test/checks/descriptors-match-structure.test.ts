@@ -1,0 +1,95 @@
+import { describe, expect, it } from 'vitest';
+import { descriptorsMatchStructure as check } from '../../src/checks/descriptors-match-structure.js';
+import type { StructureFacts } from '../../src/chem/facts.js';
+import { centre, chiralFacts, ctx, facts, ids, read, record, runCheck } from './facts.js';
+
+// Descriptor notation: IUPAC 2013 recommendations P-93.1.3 (R/S, RS/SR, rac-, rel-, R*), signs of rotation
+// (+)/(−)/(±) and meso as used in P-93; Fischer D/L are not CIP descriptors (P-93).
+const mapped = chiralFacts([centre(4, 'R', 2), centre(6, 'R', 3)]);
+const unmapped = chiralFacts([centre(4, 'R'), centre(6, 'R')]);
+const run = (f: StructureFacts, stereo: Parameters<typeof record>[0], name?: string) =>
+  runCheck(check, ctx({ record: record(stereo, name ? { name } : {}), main: read(f) }));
+
+describe('descriptors-match-structure: labels', () => {
+  it('passes matching descriptors per locant and says so', () => {
+    const o = run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3R)' });
+    expect(o.findings).toEqual([]);
+    expect(o.passed).toMatch(/per locant/);
+  });
+  it('fails a per-locant mismatch and names the locant', () => {
+    const o = run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3S)' });
+    expect(ids(o)).toEqual(['descriptor-label-mismatch']);
+    expect(o.findings[0].data).toMatchObject({ count: 1, method: 'per-locant' });
+    expect(String(o.findings[0].data.mismatches)).toMatch(/locant 3: declared S, computed R/);
+  });
+  it('compares as counts without atom maps, and says why', () => {
+    const ok = run(unmapped, { form: 'single-enantiomer', descriptors: '(2R,3R)' });
+    expect(ok.passed).toMatch(/as counts/);
+    const bad = run(unmapped, { form: 'single-enantiomer', descriptors: '(2R,3S)' });
+    expect(ids(bad)).toEqual(['descriptor-counts-mismatch']);
+    expect(bad.findings[0].data).toMatchObject({ declaredCounts: '1 R, 1 S', computedCounts: '2 R', method: 'counts' });
+  });
+  it('warns when descriptors leave units out', () => {
+    expect(ids(run(mapped, { form: 'single-enantiomer', descriptors: '(2R)' }))).toEqual(['descriptors-incomplete']);
+    expect(ids(run(unmapped, { form: 'single-enantiomer', descriptors: '(R)' }))).toEqual(['descriptors-incomplete']);
+  });
+  it('fails a locant that is not a stereo unit', () => {
+    expect(ids(run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3R,5S)' }))).toEqual(['descriptor-not-stereo-unit']);
+  });
+  it('reports unreadable descriptors with their offset', () => {
+    const o = run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3X)' });
+    expect(o.findings).toMatchObject([{ messageId: 'descriptor-unreadable', data: { offset: 4 } }]);
+  });
+  it('reads descriptors from the front of the name when there is no descriptor field', () => {
+    expect(run(mapped, { form: 'single-enantiomer' }, '(2R,3R)-2,3-dihydroxybutanedioic acid').findings).toEqual([]);
+    expect(ids(run(mapped, { form: 'single-enantiomer' }, '(2S,3S)-2,3-dihydroxybutanedioic acid'))).toEqual(['descriptor-label-mismatch']);
+  });
+  it('flags a name that disagrees with the descriptor field', () => {
+    const o = run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3R)' }, '(2S,3S)-tartaric acid');
+    expect(ids(o)).toEqual(['name-and-descriptors-disagree']);
+  });
+  it('relative descriptors agree up to inversion (P-93.1.3)', () => {
+    const drawn = chiralFacts([centre(4, 'S', 1), centre(6, 'R', 2)]);
+    expect(run(drawn, { form: 'single-enantiomer', descriptors: '(1R*,2S*)' }, undefined).findings.map((f) => f.messageId)).not.toContain(
+      'descriptor-label-mismatch',
+    );
+  });
+  it('compares component descriptors with component structures', () => {
+    const r = record({ form: 'diastereomer-mixture', components: [{ smiles: 'C', descriptors: '(2R,3S)' }] });
+    const o = runCheck(check, ctx({ record: r, main: read(facts()), components: [read(mapped)] }));
+    expect(o.findings).toMatchObject([{ messageId: 'descriptor-label-mismatch', field: 'stereo.components.0.descriptors' }]);
+  });
+  it('notes Fischer D/L as not comparable', () => {
+    const o = run(chiralFacts([centre(2, 'S')]), { form: 'single-enantiomer' }, 'L-alanine');
+    expect(o.findings).toMatchObject([{ messageId: 'fischer-not-compared', severity: 'note' }]);
+  });
+});
+
+describe('descriptors-match-structure: prefixes against the form', () => {
+  const one = chiralFacts([centre(2, 'R', 2)]);
+  it('racemic notation needs a racemate', () => {
+    for (const d of ['(2RS)', 'rac-(2R)', '(±)']) {
+      expect([d, ids(run(one, { form: 'single-enantiomer', descriptors: d }))]).toEqual([d, ['racemic-notation-needs-racemate']]);
+      expect([d, run(one, { form: 'racemate', descriptors: d }).findings]).toEqual([d, []]);
+    }
+  });
+  it('absolute descriptors with a racemate fail', () => {
+    expect(ids(run(one, { form: 'racemate', descriptors: '(2R)' }))).toEqual(['absolute-descriptors-with-racemate']);
+  });
+  it('relative notation with a racemate is a warning', () => {
+    const o = run(chiralFacts([centre(4, 'R', 1), centre(6, 'S', 2)]), { form: 'racemate', descriptors: 'rel-(1R,2S)' });
+    expect(o.findings).toMatchObject([{ messageId: 'relative-notation-with-racemate', severity: 'warning' }]);
+  });
+  it('a sign of rotation with an optically inactive form fails', () => {
+    expect(ids(run(one, { form: 'racemate' }, '(+)-2-butanol'))).toEqual(['optical-sign-with-inactive-form']);
+    expect(run(one, { form: 'single-enantiomer' }, '(R)-(−)-2-butanol').findings).toEqual([]);
+  });
+  it('meso in the name with a chiral form fails', () => {
+    const mesoLike = facts({ units: [centre(2, 'R', 2), centre(3, 'S', 3)] });
+    expect(ids(run(mesoLike, { form: 'racemate' }, 'meso-2,3-dibromobutane'))).toContain('meso-prefix-with-chiral-form');
+    expect(run(mesoLike, { form: 'meso' }, 'meso-2,3-dibromobutane').findings).toEqual([]);
+  });
+  it('does not apply when nothing is declared', () => {
+    expect(run(one, { form: 'single-enantiomer' }).notApplicable).toBe(true);
+  });
+});

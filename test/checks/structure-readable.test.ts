@@ -1,0 +1,52 @@
+import { describe, expect, it } from 'vitest';
+import { structureReadable as check } from '../../src/checks/structure-readable.js';
+import { ctx, facts, failedRead, loaded, read, record, runCheck, ids } from './facts.js';
+
+describe('structure-readable', () => {
+  it('passes a readable structure, with evidence', () => {
+    const o = runCheck(check, ctx({ main: read(facts({ formula: 'C4H10O' })) }));
+    expect(o.findings).toEqual([]);
+    expect(o.passed).toMatch(/C4H10O/);
+  });
+  it('turns a SMILES reader error into a finding with the character offset', () => {
+    const o = runCheck(check, ctx({ main: failedRead('SMILES: ring bond 1 is never closed', null, 4) }));
+    expect(ids(o)).toEqual(['structure-unreadable']);
+    expect(o.findings[0].field).toBe('structure.smiles');
+    expect(o.findings[0].data).toMatchObject({ errorOffset: 4, errorLine: null });
+  });
+  it('turns a molfile reader error into a finding with the molfile line', () => {
+    const r = record({}, { structure: { molfile: 'LX-00001.mol' } });
+    const o = runCheck(check, ctx({ record: r, main: failedRead('molfile: bad counts line', 4, null) }));
+    expect(o.findings[0]).toMatchObject({ messageId: 'structure-unreadable', field: 'structure.molfile' });
+    expect(o.findings[0].data.errorLine).toBe(4);
+  });
+  it('reports a molfile path the loader refused, once', () => {
+    const r = record({}, { structure: { molfile: '../../etc/passwd' } });
+    const l = loaded(r);
+    l.sources = { main: { field: 'structure', format: 'molfile', text: null, error: "'../../etc/passwd' leaves the registry folder" }, components: [] };
+    const o = runCheck(check, ctx({ record: r, loaded: l, main: failedRead("'../../etc/passwd' leaves the registry folder", null, null) }));
+    expect(ids(o)).toEqual(['structure-source-refused']);
+  });
+  it('catches an escaping molfile path even without the loader (defence in depth)', () => {
+    const r = record({}, { structure: { molfile: '../../secret.mol' } });
+    const o = runCheck(check, ctx({ record: r, main: read(facts()) }));
+    expect(ids(o)).toEqual(['molfile-path-outside']);
+    expect(o.findings[0].data.resolved).toBe('../secret.mol');
+    const inside = record({}, { structure: { molfile: '../compounds/x.mol' } });
+    expect(runCheck(check, ctx({ record: inside, main: read(facts()) })).findings).toEqual([]);
+  });
+  it('reports unreadable components by index', () => {
+    const r = record({ form: 'diastereomer-mixture', components: [{ smiles: 'C' }, { smiles: 'C1' }] });
+    const o = runCheck(check, ctx({ record: r, components: [read(facts()), failedRead('unclosed ring', null, 1)] }));
+    expect(o.findings).toMatchObject([{ messageId: 'component-unreadable', field: 'stereo.components.1.smiles', data: { index: 2 } }]);
+  });
+  it('passes reader remarks on as notes without failing the check', () => {
+    const o = runCheck(check, ctx({ main: read(facts({ remarks: ['wedge on a non-stereogenic atom 7'] })) }));
+    expect(o.findings).toMatchObject([{ messageId: 'reader-remark', severity: 'note' }]);
+    expect(o.passed).toBeDefined();
+  });
+  it('still runs when the record failed the schema', () => {
+    const o = runCheck(check, ctx({ record: null, main: failedRead('no structure', null, null) }));
+    expect(ids(o)).toEqual(['structure-unreadable']);
+  });
+});
