@@ -17,6 +17,8 @@ export interface BulkRecordResult extends RecordResult {
   seq: number;
   origin: { source: string; record: number; line: number };
   form_word: { word: string | null; how: VocabularyResult['how'] };
+  /** The structure as given (SMILES or molfile), kept for flagged records only (for depictions). */
+  structure_text?: string;
 }
 
 /** Splits an SD record into its molfile block and its data fields (`> <NAME>` headers). */
@@ -92,10 +94,12 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
     },
   };
   const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
-  return {
+  const out: BulkRecordResult = {
     ...result,
     seq: item.seq,
     origin: { source: item.source, record: item.record, line: item.line },
     form_word: { word: conv.formWord, how: conv.formHow },
   };
+  if (conv.structureText !== null && result.findings.some((f) => !f.waived)) out.structure_text = conv.structureText;
+  return out;
 }
