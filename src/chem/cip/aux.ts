@@ -1,0 +1,114 @@
+/**
+ * Auxiliary descriptors (P-92.1.4 / P-92.5, IUPAC 2013; procedure of Hanson et al. 2018): each stereogenic unit
+ * met inside a branch gets a descriptor computed in the root's digraph re-rooted at the unit's node, so ring
+ * paths are seen as the root sees them. They are what Rules 3, 4a, 4b, 4c and 5 compare. Computed on demand and
+ * memoised on the node; a unit whose ranking would need its own descriptor (a cycle) counts as having none.
+ */
+import type { CipLabel } from '../facts.js';
+import { IMPLICIT_H, LONE_PAIR, type DoubleBondStereo, type TetrahedralStereo } from '../types.js';
+import { CipNode, Digraph, H_ATOM } from './digraph.js';
+import { Ranker } from './compare.js';
+import { handedness, rankLigands } from './rank.js';
+import { RULE_5 } from './rules.js';
+
+/** The branch of `centre` (re-rooted there) that leads to ligand `lig` of a stereo element. */
+export function ligandBranch(dg: Digraph, centre: CipNode, lig: number, used: Set<CipNode>): CipNode | null {
+  const br = dg.branches(centre, null);
+  if (lig === LONE_PAIR) return dg.phantom(centre);
+  if (lig === IMPLICIT_H) {
+    for (const b of br) if (b.atom === H_ATOM && !used.has(b)) return b;
+    return null;
+  }
+  for (const b of br) if (b.atom === lig && !b.dup && !used.has(b)) return b;
+  for (const b of br) if (b.atom === lig && !used.has(b)) return b;
+  return null;
+}
+
+/** R/S (or r/s) of a tetrahedral element at `centre`, or null when two ligands tie. */
+export function tetrahedralLabel(rk: Ranker, centre: CipNode, e: TetrahedralStereo, level = RULE_5): CipLabel | null {
+  const used = new Set<CipNode>();
+  const ligs: CipNode[] = [];
+  for (const l of e.ligands) {
+    const b = ligandBranch(rk.dg, centre, l, used);
+    if (b === null) return null;
+    used.add(b);
+    ligs.push(b);
+  }
+  const r = rankLigands(rk, centre, ligs, level);
+  if (r.tied) return null;
+  const rankOf = [0, 0, 0, 0];
+  r.order.forEach((li, pos) => (rankOf[li] = pos));
+  const h = handedness(e.winding, rankOf);
+  return r.pseudo ? (h === 'R' ? 'r' : 's') : h;
+}
+
+/** The branches at one end of a double bond, leaving out the other end and its duplicates. */
+export function endBranches(dg: Digraph, end: CipNode, from: CipNode | null, other: number): CipNode[] {
+  return dg.branches(end, from).filter((b) => b.atom !== other);
+}
+
+/**
+ * Is `ref` (an atom index or IMPLICIT_H) the higher-ranked of `cands` at one end? null when they tie.
+ * With one candidate it is the higher by default (the other place is a phantom or lone pair).
+ */
+export function refIsHigher(rk: Ranker, end: CipNode, cands: CipNode[], ref: number, level = RULE_5): boolean | null {
+  if (cands.length === 0) return null;
+  let top = cands[0];
+  if (cands.length >= 2) {
+    const c = rk.compareUpTo(level, cands[0], end, cands[1], end);
+    if (c === 0) return null;
+    top = c > 0 ? cands[0] : cands[1];
+  }
+  return ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
+}
+
+/** E/Z from which ends' higher ligands are the reference ligands, and the input's cis/trans relation. */
+export function ezLabel(e: DoubleBondStereo, refHigh0: boolean, refHigh1: boolean): CipLabel {
+  const cis = e.relation === 'cis' ? refHigh0 === refHigh1 : refHigh0 !== refHigh1;
+  return cis ? 'Z' : 'E';
+}
+
+function doubleBondLabel(rk: Ranker, node: CipNode, e: DoubleBondStereo): CipLabel | null {
+  const dg = rk.dg;
+  const i = e.ends[0] === node.atom ? 0 : 1;
+  const other = e.ends[1 - i];
+  let partner: CipNode | null = null;
+  if (node.parent !== null && node.parent.atom === other && !node.parent.dup) partner = node.parent;
+  else for (const k of dg.kids(node)) if (k.atom === other && !k.dup) partner = k;
+  if (partner === null) return null;
+  const here = refIsHigher(rk, node, endBranches(dg, node, null, other), e.refs[i]);
+  if (here === null) return null;
+  const there = refIsHigher(rk, partner, endBranches(dg, partner, null, node.atom), e.refs[1 - i]);
+  if (there === null) return null;
+  const label = i === 0 ? ezLabel(e, here, there) : ezLabel(e, there, here);
+  if (partner.aux === undefined) partner.aux = label;
+  return label;
+}
+
+/** Make the auxiliary-descriptor function for one digraph. */
+export function auxFor(dg: Digraph): (rk: Ranker) => (node: CipNode) => CipLabel | null {
+  return (rk: Ranker) =>
+    (node: CipNode): CipLabel | null => {
+      if (node.aux !== undefined) return node.aux;
+      if (node.auxBusy || node === dg.root || node.dup || node.atom < 0) return null;
+      const g = dg.g;
+      node.auxBusy = true;
+      let label: CipLabel | null = null;
+      const t = g.tetraAt[node.atom];
+      const b = g.bondAt[node.atom];
+      if (t >= 0 && t !== dg.rootElement) {
+        label = tetrahedralLabel(rk, node, g.s.stereo[t] as TetrahedralStereo);
+      } else if (b >= 0 && b !== dg.rootElement) {
+        label = doubleBondLabel(rk, node, g.s.stereo[b] as DoubleBondStereo);
+      }
+      node.auxBusy = false;
+      node.aux = label;
+      return label;
+    };
+}
+
+export function newRanker(dg: Digraph): Ranker {
+  const rk: Ranker = new Ranker(dg, (n) => aux(n));
+  const aux = auxFor(dg)(rk);
+  return rk;
+}

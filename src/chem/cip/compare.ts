@@ -1,0 +1,156 @@
+/**
+ * Hierarchical comparison of two branches of a digraph (P-92.1.4, "exploration" of the digraph; Hanson et al.
+ * 2018, "sphere by sphere"): compare the branch atoms; then, sphere after sphere, the sets of substituents of
+ * each pair of corresponding nodes, the sets taken in the order of rank of the nodes they hang from. Stops at
+ * the first difference, so only the spheres needed are ever grown.
+ *
+ * Ranking the substituents of a node (which fixes the exploration order) uses the rules up to the one being
+ * applied; the sorted lists are cached per node, per direction of travel and per rule level.
+ */
+import type { CipLabel } from '../facts.js';
+import { CipNode, Digraph, type SortedBranches } from './digraph.js';
+import {
+  RULE_1A,
+  RULE_1B,
+  RULE_2,
+  RULE_3,
+  RULE_4A,
+  RULE_4B,
+  RULE_4C,
+  RULE_5,
+  RULE_6,
+  rule1a,
+  rule1b,
+  rule2,
+  rule3,
+  rule4a,
+  rule4c,
+  rule5,
+  rule6,
+} from './rules.js';
+import { compareRule4b } from './rule4b.js';
+
+export type AuxFn = (node: CipNode) => CipLabel | null;
+
+export class Ranker {
+  /** Rules that cannot separate anything in this structure are skipped (saves exploring tied branches). */
+  private readonly active: boolean[];
+
+  constructor(
+    readonly dg: Digraph,
+    readonly aux: AuxFn,
+  ) {
+    const g = dg.g;
+    const several = g.stereoCount > 1;
+    const isotopes = g.s.atoms.some((a) => a.isotope !== null);
+    this.active = [true, true, isotopes, g.hasBondStereo && several, several, several, several, several, false];
+  }
+
+  setRule6(ref: number): void {
+    this.dg.rule6Ref = ref;
+    this.active[RULE_6] = ref >= 0;
+  }
+
+  value(rule: number, n: CipNode): number {
+    switch (rule) {
+      case RULE_1A:
+        return rule1a(n);
+      case RULE_1B:
+        return rule1b(n);
+      case RULE_2:
+        return rule2(n);
+      case RULE_3:
+        return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
+      case RULE_4A:
+        return this.stereoValue(n, rule4a);
+      case RULE_4C:
+        return this.stereoValue(n, rule4c);
+      case RULE_5:
+        return this.stereoValue(n, rule5);
+      case RULE_6:
+        return rule6(n, this.dg.rule6Ref);
+      default:
+        return 0;
+    }
+  }
+
+  private stereoValue(n: CipNode, f: (l: CipLabel | null) => number): number {
+    if (n.dup || n.atom < 0) return 0;
+    const g = this.dg.g;
+    if (g.tetraAt[n.atom] < 0 && g.bondAt[n.atom] < 0 && g.axialAt[n.atom] < 0) return 0;
+    return f(this.aux(n));
+  }
+
+  /**
+   * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
+   * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
+   */
+  compareRule(rule: number, x: CipNode, fx: CipNode | null, y: CipNode | null, fy: CipNode | null): number {
+    if (y === null) return 1;
+    if (rule === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+    let c = this.value(rule, x) - this.value(rule, y);
+    if (c !== 0) return c > 0 ? 1 : -1;
+    const qx: CipNode[] = [x];
+    const qfx: (CipNode | null)[] = [fx];
+    const qy: CipNode[] = [y];
+    const qfy: (CipNode | null)[] = [fy];
+    for (let i = 0; i < qx.length; i++) {
+      const sx = this.sorted(qx[i], qfx[i], rule).nodes;
+      const sy = this.sorted(qy[i], qfy[i], rule).nodes;
+      const m = Math.min(sx.length, sy.length);
+      for (let j = 0; j < m; j++) {
+        c = this.value(rule, sx[j]) - this.value(rule, sy[j]);
+        if (c !== 0) return c > 0 ? 1 : -1;
+      }
+      // a missing substituent is a phantom atom (atomic number 0, nothing else)
+      if (sx.length !== sy.length && rule === RULE_1A) {
+        const longer = sx.length > sy.length ? sx : sy;
+        for (let j = m; j < longer.length; j++) {
+          if (this.value(rule, longer[j]) > 0) return longer === sx ? 1 : -1;
+        }
+      }
+      for (let j = 0; j < m; j++) {
+        qx.push(sx[j]);
+        qfx.push(qx[i]);
+        qy.push(sy[j]);
+        qfy.push(qy[i]);
+      }
+    }
+    return 0;
+  }
+
+  /** Compare under every active rule up to `level`: ±(rule index + 1) for the deciding rule, 0 for a tie. */
+  compareUpTo(level: number, x: CipNode, fx: CipNode | null, y: CipNode, fy: CipNode | null): number {
+    for (let r = 0; r <= level; r++) {
+      if (!this.active[r]) continue;
+      const c = this.compareRule(r, x, fx, y, fy);
+      if (c !== 0) return c > 0 ? r + 1 : -(r + 1);
+    }
+    return 0;
+  }
+
+  /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
+  sorted(node: CipNode, from: CipNode | null, level: number): SortedBranches {
+    const key = (from === null ? 0 : from.id + 1) * 16 + level;
+    if (node.sorted === null) node.sorted = new Map();
+    const hit = node.sorted.get(key);
+    if (hit) return hit;
+    const nodes = this.dg.branches(node, from).slice();
+    // insertion sort: branch lists are short and comparisons are the expensive part
+    for (let i = 1; i < nodes.length; i++) {
+      const v = nodes[i];
+      let j = i - 1;
+      while (j >= 0 && this.compareUpTo(level, nodes[j], node, v, node) < 0) {
+        nodes[j + 1] = nodes[j];
+        j--;
+      }
+      nodes[j + 1] = v;
+    }
+    const tie = nodes.map((v, i) => i > 0 && this.compareUpTo(level, nodes[i - 1], node, v, node) === 0);
+    const out = { nodes, tie };
+    node.sorted.set(key, out);
+    return out;
+  }
+}
+
+export { CipNode };

@@ -1,0 +1,133 @@
+/**
+ * The hierarchical digraph of P-92.1.4 (IUPAC 2013), grown lazily from a root atom: a node's children are made
+ * only when a comparison first asks for them. Ring closures and multiple bonds give duplicate atoms
+ * (P-92.1.4.2), which carry the duplicated atom's atomic number and have no substituents of their own (their
+ * three phantom substituents, atomic number 0, are the padding of every comparison). Implicit hydrogens are
+ * nodes of atomic number 1; a lone pair is a phantom node of atomic number 0.
+ *
+ * Following Hanson et al. 2018, auxiliary descriptors of stereo units inside a branch are found in the root's
+ * digraph re-rooted at the unit's node: a traversal is therefore a directed step (node, the node we came from),
+ * and a node's branches are all its tree neighbours except the one we came from.
+ */
+import type { CipGraph } from './graph.js';
+import type { CipLabel } from '../facts.js';
+
+export const H_ATOM = -1;
+export const PHANTOM = -2;
+
+/** Upper bound on nodes grown for one root, so pathological cages terminate (ties stay ties beyond it). */
+/** Rule 2 mass of a duplicate atom (Hanson et al. 2018): that of the duplicated atom. */
+export let DUPLICATE_MASS = (m: number): number => m;
+export function setDuplicateMass(f: (m: number) => number): void {
+  DUPLICATE_MASS = f;
+}
+
+export const NODE_BUDGET = 200_000;
+
+export class CipNode {
+  kids: CipNode[] | null = null;
+  /** Sorted branch lists per (came-from, rule level); see compare.ts. */
+  sorted: Map<number, SortedBranches> | null = null;
+  /** Auxiliary descriptor: undefined = not yet computed, null = none. */
+  aux: CipLabel | null | undefined = undefined;
+  auxBusy = false;
+  constructor(
+    readonly id: number,
+    readonly atom: number,
+    readonly z: number,
+    readonly mass: number,
+    readonly depth: number,
+    /** Rule 1b distance: the depth of the corresponding non-duplicated node (own depth when not a duplicate). */
+    readonly dist: number,
+    readonly dup: boolean,
+    readonly parent: CipNode | null,
+  ) {}
+}
+
+export interface SortedBranches {
+  nodes: CipNode[];
+  /** tie[i] is true when nodes[i] ties with nodes[i-1] under the rules of this level. */
+  tie: boolean[];
+}
+
+export class Digraph {
+  readonly root: CipNode;
+  private nextId = 0;
+  count = 0;
+  /** Index into s.stereo of the unit being labelled: its own nodes carry no auxiliary descriptor. */
+  readonly rootElement: number;
+  /** Proposed Rule 6 reference atom (Hanson et al. 2018), or -1 when unset. */
+  rule6Ref = -1;
+
+  constructor(
+    readonly g: CipGraph,
+    rootAtom: number,
+    rootElement: number,
+  ) {
+    this.rootElement = rootElement;
+    this.root = this.make(rootAtom, 0, 0, false, null);
+  }
+
+  private make(atom: number, depth: number, dist: number, dup: boolean, parent: CipNode | null, z = -1): CipNode {
+    this.count++;
+    const g = this.g;
+    if (z >= 0) return new CipNode(this.nextId++, atom, z, DUPLICATE_MASS(g.mass[atom]), depth, dist, true, parent);
+    if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
+    if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
+    return new CipNode(this.nextId++, atom, g.z[atom], dup ? DUPLICATE_MASS(g.mass[atom]) : g.mass[atom], depth, dist, dup, parent);
+  }
+
+  /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */
+  phantom(parent: CipNode): CipNode {
+    return this.make(PHANTOM, parent.depth + 1, parent.depth + 1, false, parent);
+  }
+
+  /** Children of `node` in the root's digraph, made on first use (P-92.1.4.2 duplicates included). */
+  kids(node: CipNode): CipNode[] {
+    if (node.kids) return node.kids;
+    const out: CipNode[] = [];
+    node.kids = out;
+    if (node.dup || node.atom < 0 || this.count > NODE_BUDGET) return out;
+    const g = this.g;
+    const a = node.atom;
+    const parent = node.parent;
+    const d = node.depth + 1;
+    const nb = g.nbr[a];
+    const od = g.dupOrd[a];
+    for (let i = 0; i < nb.length; i++) {
+      const b = nb[i];
+      const order = od[i];
+      // a double bond in a mancude ring: one duplicate of mean atomic number, wherever the Kekulé bond lies
+      const mz = order === 2 && g.mancude.bond.has(a * g.n + b) ? g.mancude.dupZ[a] : -1;
+      if (parent !== null && b === parent.atom) {
+        if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
+        else for (let k = 1; k < order; k++) out.push(this.make(b, d, parent.depth, true, node));
+        continue;
+      }
+      let anc: CipNode | null = parent;
+      while (anc !== null && anc.atom !== b) anc = anc.parent;
+      if (anc !== null) {
+        // ring closure: a duplicate of the atom already on the path, plus one per extra bond order
+        out.push(this.make(b, d, anc.depth, true, node));
+        if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
+        else for (let k = 1; k < order; k++) out.push(this.make(b, d, anc.depth, true, node));
+      } else {
+        out.push(this.make(b, d, d, false, node));
+        if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
+        else for (let k = 1; k < order; k++) out.push(this.make(b, d, d, true, node));
+      }
+    }
+    for (let h = 0; h < g.hCount[a]; h++) out.push(this.make(H_ATOM, d, d, false, node));
+    return out;
+  }
+
+  /** Branches of `node` when it is entered from `from` (null: `node` is the root of the traversal). */
+  branches(node: CipNode, from: CipNode | null): CipNode[] {
+    const kids = this.kids(node);
+    if (from !== null && from === node.parent) return kids;
+    const out: CipNode[] = [];
+    if (node.parent !== null && node.parent !== from) out.push(node.parent);
+    for (const k of kids) if (k !== from) out.push(k);
+    return out;
+  }
+}

@@ -1,0 +1,29 @@
+/**
+ * The CIP labeler: IUPAC 2013 recommendations P-92 (sequence rules) and P-93 (descriptors), with the revisions
+ * and the machine-implementation guide of Hanson et al., J. Chem. Inf. Model. 2018, 58, 1755-1765.
+ *
+ * `assignCip` gives one result per element of `s.stereo`, in the same order. The label is null when the unit is
+ * not stereogenic by the rules (two ligands tie completely), which is how units that a reader records from
+ * geometry alone (every sp3 atom of a 3D file) drop out.
+ */
+import type { CipLabel } from '../facts.js';
+import type { Structure } from '../types.js';
+import { buildGraph } from './graph.js';
+import { labelElement } from './label.js';
+
+export interface CipResult {
+  /** Index into s.stereo. */
+  element: number;
+  label: CipLabel | null;
+  /** Atom indices that carry the label: the centre, or the two end atoms of a double bond or axis. */
+  atoms: number[];
+}
+
+export function assignCip(s: Structure): CipResult[] {
+  const g = buildGraph(s);
+  return s.stereo.map((e, element) => ({
+    element,
+    label: labelElement(g, element),
+    atoms: e.kind === 'tetrahedral' ? [e.centre] : [e.ends[0], e.ends[1]],
+  }));
+}

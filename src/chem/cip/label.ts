@@ -1,0 +1,138 @@
+/**
+ * The descriptor of one stereo element of the structure, from a digraph grown from the unit itself:
+ * tetrahedral centres (R/S, r/s), double bonds and odd cumulenes (E/Z), allenes, even cumulenes and biaryl axes
+ * (M/P, m/p). When the rules of 2013 leave ligands tied, the proposed Rule 6 of Hanson et al. 2018 is tried with
+ * each tied ligand as the reference; it decides only when every choice gives the same descriptor.
+ */
+import type { CipLabel } from '../facts.js';
+import type { AxialStereo, DoubleBondStereo, StereoElement, TetrahedralStereo } from '../types.js';
+import { Digraph } from './digraph.js';
+import { ringSizeThrough, type CipGraph } from './graph.js';
+import { endBranches, ezLabel, ligandBranch, newRanker, refIsHigher, tetrahedralLabel } from './aux.js';
+import { handedness, rankLigands } from './rank.js';
+import { RULE_5, RULE_6 } from './rules.js';
+import type { Ranker } from './compare.js';
+
+function ranker(g: CipGraph, root: number, element: number, ref: number): Ranker {
+  const dg = new Digraph(g, root, element);
+  const rk = newRanker(dg);
+  if (ref >= 0) rk.setRule6(ref);
+  return rk;
+}
+
+/** The neighbour of `end` along the unit: the other end itself, or the first atom of a cumulated chain. */
+function towardOther(g: CipGraph, end: number, other: number): number {
+  const nb = g.nbr[end];
+  if (nb.includes(other)) return other;
+  for (let i = 0; i < nb.length; i++) if (g.ord[end][i] >= 2) return nb[i];
+  return -1;
+}
+
+function tetrahedral(g: CipGraph, index: number, e: TetrahedralStereo, ref: number): CipLabel | null {
+  const rk = ranker(g, e.centre, index, ref);
+  return tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
+}
+
+/** Ligands of a tetrahedral centre that tie under Rules 1-5 (candidates for the Rule 6 reference). */
+function tiedTetrahedral(g: CipGraph, index: number, e: TetrahedralStereo): number[] {
+  const rk = ranker(g, e.centre, index, -1);
+  const used = new Set<ReturnType<typeof rk.dg.phantom>>();
+  const ligs = [];
+  for (const l of e.ligands) {
+    const b = ligandBranch(rk.dg, rk.dg.root, l, used);
+    if (b === null) return [];
+    used.add(b);
+    ligs.push(b);
+  }
+  const r = rankLigands(rk, rk.dg.root, ligs, RULE_5);
+  const out: number[] = [];
+  for (let i = 1; i < r.order.length; i++) {
+    if (!r.tieWithPrev[i]) continue;
+    for (const k of [r.order[i - 1], r.order[i]]) if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
+  }
+  return out;
+}
+
+function doubleBond(g: CipGraph, index: number, e: DoubleBondStereo, ref: number): CipLabel | null {
+  const level = ref >= 0 ? RULE_6 : RULE_5;
+  const high: boolean[] = [];
+  for (let i = 0; i < 2; i++) {
+    const end = e.ends[i];
+    const excl = towardOther(g, end, e.ends[1 - i]);
+    const rk = ranker(g, end, index, ref);
+    const h = refIsHigher(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level);
+    if (h === null) return null;
+    high.push(h);
+  }
+  return ezLabel(e, high[0], high[1]);
+}
+
+function axial(g: CipGraph, index: number, e: AxialStereo, ref: number): CipLabel | null {
+  const level = ref >= 0 ? RULE_6 : RULE_5;
+  const rankOf = [0, 0, 0, 0];
+  let pseudo = false;
+  for (let i = 0; i < 2; i++) {
+    const rk = ranker(g, e.ends[i], index, ref);
+    const root = rk.dg.root;
+    const used = new Set<typeof root>();
+    const a = ligandBranch(rk.dg, root, e.ligands[2 * i], used);
+    if (a !== null) used.add(a);
+    const b = ligandBranch(rk.dg, root, e.ligands[2 * i + 1], used);
+    if (a === null || b === null) return null;
+    const r = rankLigands(rk, root, [a, b], level);
+    if (r.tied) return null;
+    pseudo = pseudo !== r.pseudo;
+    rankOf[2 * i + r.order[0]] = 2 * i;
+    rankOf[2 * i + r.order[1]] = 2 * i + 1;
+  }
+  // near ligands precede far ones; aR corresponds to M and aS to P (P-93.5.7.1, from memory)
+  const h = handedness(e.winding, rankOf);
+  const label = h === 'R' ? 'M' : 'P';
+  return pseudo ? (label === 'M' ? 'm' : 'p') : label;
+}
+
+function labelWith(g: CipGraph, index: number, e: StereoElement, ref: number): CipLabel | null {
+  if (e.kind === 'tetrahedral') return tetrahedral(g, index, e, ref);
+  if (e.kind === 'double-bond') return doubleBond(g, index, e, ref);
+  return axial(g, index, e, ref);
+}
+
+/** Candidate Rule 6 references: the ligand atoms of the unit that Rules 1-5 leave tied. */
+function rule6Candidates(g: CipGraph, index: number, e: StereoElement): number[] {
+  if (e.kind === 'tetrahedral') return tiedTetrahedral(g, index, e);
+  if (e.kind === 'double-bond') {
+    const out: number[] = [];
+    for (let i = 0; i < 2; i++) {
+      const excl = towardOther(g, e.ends[i], e.ends[1 - i]);
+      for (const b of g.nbr[e.ends[i]]) if (b !== excl) out.push(b);
+    }
+    return out;
+  }
+  return e.ligands.filter((l) => l >= 0);
+}
+
+/**
+ * Geometry that a small ring fixes is not a stereogenic unit: a double bond in a ring of fewer than 8 atoms
+ * (only the cis form exists), an axis bond inside a ring (no rotation about it). Common practice, no source.
+ */
+function fixedByRing(g: CipGraph, e: StereoElement): boolean {
+  if (e.kind === 'double-bond') {
+    const [u, v] = e.ends;
+    return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
+  }
+  if (e.kind === 'axial' && e.subtype === 'biaryl') return ringSizeThrough(g, e.ends[0], e.ends[1], 64) > 0;
+  return false;
+}
+
+export function labelElement(g: CipGraph, index: number): CipLabel | null {
+  const e = g.s.stereo[index];
+  if (fixedByRing(g, e)) return null;
+  const plain = labelWith(g, index, e, -1);
+  if (plain !== null) return plain;
+  const found = new Set<CipLabel>();
+  for (const ref of rule6Candidates(g, index, e)) {
+    const l = labelWith(g, index, e, ref);
+    if (l !== null) found.add(l);
+  }
+  return found.size === 1 ? [...found][0] : null;
+}
