@@ -39,7 +39,11 @@ export const DEFAULT_SOURCES: Readonly<Record<keyof AuditConfig, string>> = Obje
     'is ±1° of specific rotation ([α] = 100·α / (l·c))',
 });
 
-export const CONFIG_FILE_NAMES = ['stereogate.config.yml', 'stereogate.config.yaml', 'stereogate.config.json'];
+export const CONFIG_FILE_NAMES = [
+  'stereogate.config.yml',
+  'stereogate.config.yaml',
+  'stereogate.config.json',
+];
 
 /** A config file that cannot be used, or options that make no sense: a usage error, not a finding. */
 export class ConfigError extends Error {
@@ -53,7 +57,11 @@ export interface LoadedConfig {
 }
 
 /** Defaults, then the config file (explicit, or found at the root), then `overrides`. */
-export function loadConfig(root: string, configFile?: string, overrides?: Partial<AuditConfig>): LoadedConfig {
+export function loadConfig(
+  root: string,
+  configFile?: string,
+  overrides?: Partial<AuditConfig>,
+): LoadedConfig {
   let file: string | null = null;
   if (configFile !== undefined) {
     file = isAbsolute(configFile) ? configFile : resolve(configFile);
@@ -68,7 +76,11 @@ export function loadConfig(root: string, configFile?: string, overrides?: Partia
     recordDirs: [...DEFAULT_CONFIG.recordDirs],
     ...fromFile,
     ...(overrides ?? {}),
-    severities: { ...DEFAULT_CONFIG.severities, ...(fromFile.severities ?? {}), ...(overrides?.severities ?? {}) },
+    severities: {
+      ...DEFAULT_CONFIG.severities,
+      ...(fromFile.severities ?? {}),
+      ...(overrides?.severities ?? {}),
+    },
   };
   return { config, file };
 }
@@ -90,12 +102,18 @@ function readConfigFile(abs: string, shown: string): Partial<AuditConfig> {
 }
 
 /** Severities naming a check that does not exist are a usage error (a typo would silently do nothing). */
-export function checkSeverityIds(config: AuditConfig, knownIds: readonly string[], suggest: (w: string) => string | null): void {
+export function checkSeverityIds(
+  config: AuditConfig,
+  knownIds: readonly string[],
+  suggest: (w: string) => string | null,
+): void {
   const unknown = Object.keys(config.severities).filter((id) => !knownIds.includes(id));
   if (unknown.length === 0) return;
   const parts = unknown.map((id) => {
     const guess = suggest(id);
     return guess ? `'${id}' (did you mean '${guess}'?)` : `'${id}'`;
   });
-  throw new ConfigError(`severities: no check is called ${parts.join(', ')}; known checks: ${knownIds.join(', ')}`);
+  throw new ConfigError(
+    `severities: no check is called ${parts.join(', ')}; known checks: ${knownIds.join(', ')}`,
+  );
 }

@@ -27,14 +27,20 @@ export function fillTemplate(template: string, data: RawFinding['data']): string
  * The severity of a finding: the message's own severity, else the check's default. A configured severity
  * replaces the default; a message that carries its own severity keeps it but never rises above the configured one.
  */
-export function resolveSeverity(base: Severity, own: Severity | undefined, configured: Severity | undefined): Severity {
+export function resolveSeverity(
+  base: Severity,
+  own: Severity | undefined,
+  configured: Severity | undefined,
+): Severity {
   if (configured === undefined) return own ?? base;
   if (own === undefined) return configured;
   return RANK[own] <= RANK[configured] ? own : configured;
 }
 
 export function configuredSeverity(config: AuditConfig, checkId: string): Severity | 'off' | undefined {
-  return Object.prototype.hasOwnProperty.call(config.severities, checkId) ? config.severities[checkId] : undefined;
+  return Object.prototype.hasOwnProperty.call(config.severities, checkId)
+    ? config.severities[checkId]
+    : undefined;
 }
 
 /** Line of a field in the record's source; for bulk records without positions, the row/record line. */
@@ -46,7 +52,12 @@ export function lineFor(loaded: LoadedRecord, field: string | null): number | nu
   return loaded.origin.kind === 'bulk' ? loaded.origin.line : null;
 }
 
-export function toFinding(check: CheckModule, raw: RawFinding, loaded: LoadedRecord, config: AuditConfig): Finding {
+export function toFinding(
+  check: CheckModule,
+  raw: RawFinding,
+  loaded: LoadedRecord,
+  config: AuditConfig,
+): Finding {
   const configured = configuredSeverity(config, check.id);
   const template = check.messages[raw.messageId];
   const message =
@@ -56,7 +67,11 @@ export function toFinding(check: CheckModule, raw: RawFinding, loaded: LoadedRec
   return {
     check: check.id,
     messageId: raw.messageId,
-    severity: resolveSeverity(check.defaultSeverity, raw.severity, configured === 'off' ? undefined : configured),
+    severity: resolveSeverity(
+      check.defaultSeverity,
+      raw.severity,
+      configured === 'off' ? undefined : configured,
+    ),
     message,
     data: raw.data ?? {},
     line: lineFor(loaded, raw.field ?? null),

@@ -11,7 +11,14 @@ import type { LoadedRecord } from '../registry/types.js';
 import { CAUTION } from './caution.js';
 import { ConfigError, DEFAULT_CONFIG, checkSeverityIds, loadConfig } from './config.js';
 import { defaultEngine, type AuditEngine } from './engine.js';
-import { SCHEMA_CHECK_ID, applyWaivers, configuredSeverity, internalError, schemaFindings, toFinding } from './findings.js';
+import {
+  SCHEMA_CHECK_ID,
+  applyWaivers,
+  configuredSeverity,
+  internalError,
+  schemaFindings,
+  toFinding,
+} from './findings.js';
 import { selectRecords } from './select.js';
 import { StructureCache } from './structures.js';
 import type { AuditResult, AuditSummary, Finding, PassedCheck, RecordResult } from './types.js';
@@ -34,8 +41,15 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
   const registryRecords = options.registry ?? records;
   const registry = buildRegistryView(registryRecords, cache, (r) => audited.has(r));
   const engineApi = { relate: options.engine.relate.bind(options.engine) };
-  const results = records.map((loaded) => auditOne(loaded, options.checks, config, cache, registry, engineApi));
-  return { tool: { name: 'stereogate', version: VERSION }, records: results, summary: summarize(results), caution: CAUTION };
+  const results = records.map((loaded) =>
+    auditOne(loaded, options.checks, config, cache, registry, engineApi),
+  );
+  return {
+    tool: { name: 'stereogate', version: VERSION },
+    records: results,
+    summary: summarize(results),
+    caution: CAUTION,
+  };
 }
 
 function auditOne(
@@ -52,12 +66,22 @@ function auditOne(
   const passed: PassedCheck[] = [];
   for (const check of checks) {
     if (configuredSeverity(config, check.id) === 'off') continue;
-    const ctx: CheckContext = { loaded, record: loaded.record, main, components, registry, config, engine, findings: [...findings] };
+    const ctx: CheckContext = {
+      loaded,
+      record: loaded.record,
+      main,
+      components,
+      registry,
+      config,
+      engine,
+      findings: [...findings],
+    };
     let produced: Finding[];
     let outcome;
     try {
       outcome = check.run(ctx);
-      if (!outcome || !Array.isArray(outcome.findings)) throw new Error('the check returned no findings list');
+      if (!outcome || !Array.isArray(outcome.findings))
+        throw new Error('the check returned no findings list');
       produced = outcome.findings.map((raw) => toFinding(check, raw, loaded, config));
     } catch (e) {
       findings.push(internalError(check, e, loaded));

@@ -26,12 +26,17 @@ export interface Selection {
   unmatched: string[];
 }
 
-export function selectRecords(records: readonly LoadedRecord[], root: string, paths: readonly string[]): Selection {
+export function selectRecords(
+  records: readonly LoadedRecord[],
+  root: string,
+  paths: readonly string[],
+): Selection {
   const selected = new Set<LoadedRecord>();
   const unmatched: string[] = [];
   for (const given of paths) {
     const p = normalizePath(root, given);
-    const escapes = isAbsolute(given) && (relative(root, given).startsWith(`..${sep}`) || relative(root, given) === '..');
+    const escapes =
+      isAbsolute(given) && (relative(root, given).startsWith(`..${sep}`) || relative(root, given) === '..');
     let hit = false;
     if (!escapes) {
       for (const r of records) {

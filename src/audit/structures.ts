@@ -14,7 +14,11 @@ export interface RecordStructures {
 const NOTHING: ReadStructure = Object.freeze({
   structure: null,
   facts: null,
-  error: { message: 'the record gives no structure (structure.smiles or structure.molfile)', line: null, offset: null },
+  error: {
+    message: 'the record gives no structure (structure.smiles or structure.molfile)',
+    line: null,
+    offset: null,
+  },
 });
 
 function failed(message: string, line: number | null = null, offset: number | null = null): ReadStructure {
@@ -29,7 +33,9 @@ export function readSource(source: StructureSource | null, engine: AuditEngine):
   try {
     read = engine.readStructure(source.text, { format: source.format });
   } catch (e) {
-    return failed(`internal error while reading the ${source.format === 'smiles' ? 'SMILES' : 'molfile'}: ${(e as Error).message}`);
+    return failed(
+      `internal error while reading the ${source.format === 'smiles' ? 'SMILES' : 'molfile'}: ${(e as Error).message}`,
+    );
   }
   if (!read.ok) {
     const what = source.format === 'smiles' ? 'SMILES' : source.file ? `molfile ${source.file}` : 'molfile';
@@ -38,7 +44,15 @@ export function readSource(source: StructureSource | null, engine: AuditEngine):
   try {
     return { structure: read.structure, facts: engine.describe(read.structure), error: null };
   } catch (e) {
-    return { structure: read.structure, facts: null, error: { message: `internal error while describing the structure: ${(e as Error).message}`, line: null, offset: null } };
+    return {
+      structure: read.structure,
+      facts: null,
+      error: {
+        message: `internal error while describing the structure: ${(e as Error).message}`,
+        line: null,
+        offset: null,
+      },
+    };
   }
 }
 
@@ -46,17 +60,30 @@ export function readSource(source: StructureSource | null, engine: AuditEngine):
 export function sourcesOf(loaded: LoadedRecord): NonNullable<LoadedRecord['sources']> {
   if (loaded.sources) return loaded.sources;
   const rec = loaded.record;
-  const one = (ref: { smiles?: string; molfile?: string } | undefined, field: string): StructureSource | null => {
+  const one = (
+    ref: { smiles?: string; molfile?: string } | undefined,
+    field: string,
+  ): StructureSource | null => {
     if (!ref) return null;
     if (typeof ref.smiles === 'string') return { field, format: 'smiles', text: ref.smiles };
     if (typeof ref.molfile === 'string') {
-      return { field, format: 'molfile', text: null, error: `molfile '${ref.molfile}' was not fetched (no file context)` };
+      return {
+        field,
+        format: 'molfile',
+        text: null,
+        error: `molfile '${ref.molfile}' was not fetched (no file context)`,
+      };
     }
     return null;
   };
   const components = (rec?.stereo.components ?? []).map(
     (c, i) =>
-      one(c, `stereo.components.${i}`) ?? { field: `stereo.components.${i}`, format: 'smiles' as const, text: null, error: 'no structure given' },
+      one(c, `stereo.components.${i}`) ?? {
+        field: `stereo.components.${i}`,
+        format: 'smiles' as const,
+        text: null,
+        error: 'no structure given',
+      },
   );
   return { main: one(rec?.structure, 'structure'), components };
 }

@@ -18,7 +18,8 @@ export function readTextFile(abs: string): TextResult {
   try {
     const st = statSync(abs);
     if (!st.isFile()) return { ok: false, error: 'is not a regular file' };
-    if (st.size > MAX_FILE_BYTES) return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
+    if (st.size > MAX_FILE_BYTES)
+      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
     bytes = readFileSync(abs);
   } catch (e) {
     return { ok: false, error: `cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})` };
@@ -62,7 +63,8 @@ export function resolveInside(root: string, fromDir: string, path: string): Reso
   } catch {
     return { ok: false, error: `'${path}' does not exist (looked for ${relativeTo(root, abs)})` };
   }
-  if (escapes(root, real)) return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
+  if (escapes(root, real))
+    return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
   return { ok: true, abs: real, rel: relativeTo(root, abs) };
 }
 
@@ -111,12 +113,16 @@ export function findRecordFiles(root: string, recordDirs: readonly string[]): Fo
         try {
           target = realpathSync(abs);
         } catch {
-          if (RECORD_EXTENSIONS.test(name)) refused.push({ file: relativeTo(root, abs), message: 'is a broken link' });
+          if (RECORD_EXTENSIONS.test(name))
+            refused.push({ file: relativeTo(root, abs), message: 'is a broken link' });
           continue;
         }
         if (escapes(root, target)) {
           if (RECORD_EXTENSIONS.test(name)) {
-            refused.push({ file: relativeTo(root, abs), message: 'is a link to a place outside the registry folder' });
+            refused.push({
+              file: relativeTo(root, abs),
+              message: 'is a link to a place outside the registry folder',
+            });
           }
           continue;
         }

@@ -103,7 +103,9 @@ function structureSources(
   if (Array.isArray(comps)) {
     comps.forEach((c, i) => {
       const s = sourceOf(asObject(c), `stereo.components.${i}`, fetchMolfile);
-      components.push(s ?? { field: `stereo.components.${i}`, format: 'smiles', text: null, error: 'no structure given' });
+      components.push(
+        s ?? { field: `stereo.components.${i}`, format: 'smiles', text: null, error: 'no structure given' },
+      );
     });
   }
   return { main, components };

@@ -26,20 +26,33 @@ export interface ParsedDocument {
 /** Parses YAML or JSON text, keeping positions; syntax errors become problems with their line. */
 export function parseDocumentText(text: string): ParsedDocument {
   const counter = new LineCounter();
-  const doc = parseDocument(text, { lineCounter: counter, prettyErrors: true, uniqueKeys: true, version: '1.2' });
+  const doc = parseDocument(text, {
+    lineCounter: counter,
+    prettyErrors: true,
+    uniqueKeys: true,
+    version: '1.2',
+  });
   const positions = positionsOf(doc, counter);
   const problems: Problem[] = [];
   for (const err of doc.errors) {
     const line = err.linePos?.[0]?.line ?? counter.linePos(err.pos[0]).line;
     const first = err.message.split('\n')[0] ?? err.message;
-    problems.push({ path: '', line, message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, '')}` });
+    problems.push({
+      path: '',
+      line,
+      message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, '')}`,
+    });
   }
   if (problems.length > 0) return { value: null, positions, problems };
   let value: unknown;
   try {
     value = doc.toJS({ maxAliasCount: 50 });
   } catch (e) {
-    return { value: null, positions, problems: [{ path: '', line: 1, message: `cannot be read: ${(e as Error).message}` }] };
+    return {
+      value: null,
+      positions,
+      problems: [{ path: '', line: 1, message: `cannot be read: ${(e as Error).message}` }],
+    };
   }
   return { value, positions, problems };
 }
@@ -47,13 +60,20 @@ export function parseDocumentText(text: string): ParsedDocument {
 export function parseRecordText(text: string): ParsedRecord {
   const parsed = parseDocumentText(text);
   const { value, positions } = parsed;
-  if (parsed.problems.length > 0) return { value, record: null, id: null, positions, problems: parsed.problems };
+  if (parsed.problems.length > 0)
+    return { value, record: null, id: null, positions, problems: parsed.problems };
   if (value === null || value === undefined) {
-    return { value, record: null, id: null, positions, problems: [{ path: '', line: 1, message: 'the file is empty' }] };
+    return {
+      value,
+      record: null,
+      id: null,
+      positions,
+      problems: [{ path: '', line: 1, message: 'the file is empty' }],
+    };
   }
   const id =
     typeof value === 'object' && !Array.isArray(value) && typeof (value as { id?: unknown }).id === 'string'
-      ? ((value as { id: string }).id.trim() || null)
+      ? (value as { id: string }).id.trim() || null
       : null;
   const shape = validateRecordShape(value);
   const problems = shape.map((p) => ({ path: p.path, message: p.message, line: lineOf(positions, p.path) }));

@@ -13,7 +13,13 @@ export interface SchemaProblem {
   message: string;
 }
 
-const ajv = new Ajv({ allErrors: true, strict: true, strictRequired: false, allowUnionTypes: true, verbose: true });
+const ajv = new Ajv({
+  allErrors: true,
+  strict: true,
+  strictRequired: false,
+  allowUnionTypes: true,
+  verbose: true,
+});
 let recordValidator: ValidateFunction | null = null;
 let configValidator: ValidateFunction | null = null;
 
@@ -86,14 +92,24 @@ function explainOne(e: ErrorObject, value: unknown, what: string): SchemaProblem
   switch (e.keyword) {
     case 'required': {
       const missing = String((e.params as { missingProperty: string }).missingProperty);
-      return { path: join(path, missing), message: `${join(path, missing)}: this field is required but missing` };
+      return {
+        path: join(path, missing),
+        message: `${join(path, missing)}: this field is required but missing`,
+      };
     }
     case 'additionalProperties': {
       const extra = String((e.params as { additionalProperty: string }).additionalProperty);
       const allowed = allowedProperties(e.parentSchema);
       const guess = closestWord(extra, allowed);
-      const hint = guess ? `; did you mean '${guess}'?` : allowed.length ? ` (allowed: ${allowed.join(', ')})` : '';
-      return { path: join(path, extra), message: `${join(path, extra)}: '${extra}' is not a field of ${path === '' ? `a ${what}` : path}${hint}` };
+      const hint = guess
+        ? `; did you mean '${guess}'?`
+        : allowed.length
+          ? ` (allowed: ${allowed.join(', ')})`
+          : '';
+      return {
+        path: join(path, extra),
+        message: `${join(path, extra)}: '${extra}' is not a field of ${path === '' ? `a ${what}` : path}${hint}`,
+      };
     }
     case 'enum': {
       const allowed = ((e.params as { allowedValues: unknown[] }).allowedValues ?? []).map(String);
@@ -106,7 +122,8 @@ function explainOne(e: ErrorObject, value: unknown, what: string): SchemaProblem
         .split(',')
         .map((t) => TYPE_WORDS[t] ?? t)
         .join(' or ');
-      const tip = want === 'text' && (typeof got === 'number' || typeof got === 'boolean') ? ' (put it in quotes)' : '';
+      const tip =
+        want === 'text' && (typeof got === 'number' || typeof got === 'boolean') ? ' (put it in quotes)' : '';
       return { path, message: `${label}: must be ${want}, found ${kindOf(got)}${tip}` };
     }
     case 'minimum':
@@ -114,13 +131,21 @@ function explainOne(e: ErrorObject, value: unknown, what: string): SchemaProblem
     case 'exclusiveMinimum':
     case 'exclusiveMaximum': {
       const limit = (e.params as { limit: number }).limit;
-      const words = { minimum: 'at least', maximum: 'at most', exclusiveMinimum: 'more than', exclusiveMaximum: 'less than' };
+      const words = {
+        minimum: 'at least',
+        maximum: 'at most',
+        exclusiveMinimum: 'more than',
+        exclusiveMaximum: 'less than',
+      };
       return { path, message: `${label}: must be ${words[e.keyword]} ${limit}, found ${String(got)}` };
     }
     case 'minLength':
       return { path, message: `${label}: must not be empty` };
     case 'maxLength':
-      return { path, message: `${label}: is too long (at most ${(e.params as { limit: number }).limit} characters)` };
+      return {
+        path,
+        message: `${label}: is too long (at most ${(e.params as { limit: number }).limit} characters)`,
+      };
     case 'pattern':
       return { path, message: `${label}: ${quote(got)} must not start or end with spaces` };
     case 'minItems':
@@ -128,7 +153,10 @@ function explainOne(e: ErrorObject, value: unknown, what: string): SchemaProblem
     case 'oneOf': {
       const obj = (got ?? {}) as Record<string, unknown>;
       const both = 'smiles' in obj && 'molfile' in obj;
-      return { path, message: `${label}: give exactly one of smiles or molfile (found ${both ? 'both' : 'neither'})` };
+      return {
+        path,
+        message: `${label}: give exactly one of smiles or molfile (found ${both ? 'both' : 'neither'})`,
+      };
     }
     default:
       return { path, message: `${label}: ${e.message ?? 'is not valid'}` };

@@ -16,14 +16,20 @@ export function checklistItems(r: RecordResult): ChecklistItem[] {
   const open = r.findings.filter((f) => !f.waived).sort((a, b) => ORDER[a.severity] - ORDER[b.severity]);
   const items: ChecklistItem[] = open.map((finding) => ({ kind: 'open', finding }));
   for (const f of r.findings) {
-    if (f.waived) items.push({ kind: 'accepted', finding: f, reason: f.waived.reason, approvedBy: f.waived.approvedBy });
+    if (f.waived)
+      items.push({ kind: 'accepted', finding: f, reason: f.waived.reason, approvedBy: f.waived.approvedBy });
   }
   for (const p of r.passed) items.push({ kind: 'passed', check: p.check, evidence: p.evidence });
   return items;
 }
 
 /** Counts of open findings by severity. */
-export function openCounts(r: RecordResult): { errors: number; warnings: number; notes: number; waived: number } {
+export function openCounts(r: RecordResult): {
+  errors: number;
+  warnings: number;
+  notes: number;
+  waived: number;
+} {
   const c = { errors: 0, warnings: 0, notes: 0, waived: 0 };
   for (const f of r.findings) {
     if (f.waived) c.waived++;
@@ -40,7 +46,9 @@ export function plural(n: number, one: string, many = `${one}s`): string {
 
 /** The declared claim in a few words: "single-enantiomer, (2R,3R)". */
 export function declaredText(r: RecordResult): string | null {
-  const parts = [r.declared.form, r.declared.descriptors].filter((x): x is string => typeof x === 'string' && x !== '');
+  const parts = [r.declared.form, r.declared.descriptors].filter(
+    (x): x is string => typeof x === 'string' && x !== '',
+  );
   return parts.length ? parts.join(', ') : null;
 }
 
@@ -53,7 +61,15 @@ function unitName(atoms: number[], locants: (number | null)[] | undefined, eleme
 export function computedText(facts: StructureFacts | null): string | null {
   if (!facts) return null;
   const parts: string[] = [];
-  parts.push(facts.chiral === true ? 'chiral' : facts.chiral === false ? (facts.meso ? 'achiral (meso)' : 'achiral') : 'chirality open (undefined units)');
+  parts.push(
+    facts.chiral === true
+      ? 'chiral'
+      : facts.chiral === false
+        ? facts.meso
+          ? 'achiral (meso)'
+          : 'achiral'
+        : 'chirality open (undefined units)',
+  );
   const units = facts.units ?? [];
   if (units.length === 0) parts.push('no stereo units');
   else {
@@ -64,7 +80,8 @@ export function computedText(facts: StructureFacts | null): string | null {
     const more = units.length > 8 ? `, … ${units.length - 8} more` : '';
     parts.push(`${plural(units.length, 'stereo unit')} (${shown.join(', ')}${more})`);
   }
-  if (facts.stereoisomers) parts.push(`${plural(facts.stereoisomers.total, 'stereoisomer')} of this constitution`);
+  if (facts.stereoisomers)
+    parts.push(`${plural(facts.stereoisomers.total, 'stereoisomer')} of this constitution`);
   if (facts.enhanced && facts.enhanced.meaning !== 'none' && facts.enhanced.meaning !== 'absolute') {
     parts.push(`enhanced stereo: ${facts.enhanced.meaning}`);
   }

@@ -10,6 +10,7 @@ export function escapeMarkdown(s: string): string {
   return (
     s
       // control characters and line breaks would end the list item or the heading
+      // eslint-disable-next-line no-control-regex
       .replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029]+/g, ' ')
       .replace(/&/g, '&amp;')
       .replace(/</g, '&lt;')
@@ -31,6 +32,6 @@ export function escapeComment(s: string): string {
 
 /** Escapes a URL we put into a link ourselves (detailsUrl): only http(s) and no characters that end the link. */
 export function safeUrl(url: string): string | null {
-  if (!/^https?:\/\/[^\s<>()\[\]"'`]+$/i.test(url)) return null;
+  if (!/^https?:\/\/[^\s<>()[\]"'`]+$/i.test(url)) return null;
   return url;
 }

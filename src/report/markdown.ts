@@ -27,7 +27,8 @@ function summaryText(result: AuditResult): string {
     `${SEVERITY_MARK.note} ${plural(s.notes, 'note')}`,
   ];
   if (s.waived > 0) parts.push(`${s.waived} accepted by waiver${s.waived === 1 ? '' : 's'}`);
-  const verdict = s.errors + s.warnings === 0 ? 'no stereochemical inconsistencies found' : 'please review the items below';
+  const verdict =
+    s.errors + s.warnings === 0 ? 'no stereochemical inconsistencies found' : 'please review the items below';
   return `**${plural(s.records, 'record')} audited** · ${parts.join(' · ')} — ${verdict}`;
 }
 
@@ -51,7 +52,9 @@ function recordBlock(r: RecordResult): string {
   for (const item of checklistItems(r)) {
     if (item.kind === 'open') {
       const f = item.finding;
-      out.push(`- [ ] ${SEVERITY_MARK[f.severity]} **${f.severity}** \`${f.check}\`${lineRef(f.line)}: ${esc(f.message)}`);
+      out.push(
+        `- [ ] ${SEVERITY_MARK[f.severity]} **${f.severity}** \`${f.check}\`${lineRef(f.line)}: ${esc(f.message)}`,
+      );
     } else if (item.kind === 'accepted') {
       const f = item.finding;
       out.push(
@@ -80,7 +83,12 @@ function head(result: AuditResult): string[] {
 
 export function renderMarkdown(result: AuditResult, options: MarkdownOptions = {}): string {
   const maxChars = options.maxChars ?? DEFAULT_MAX_CHARS;
-  const full = [...head(result), ...result.records.flatMap((r) => [recordBlock(r), '']), cautionBlock(result), ''].join('\n');
+  const full = [
+    ...head(result),
+    ...result.records.flatMap((r) => [recordBlock(r), '']),
+    cautionBlock(result),
+    '',
+  ].join('\n');
   if (full.length <= maxChars) return full;
   return summarised(result, maxChars, options.detailsUrl);
 }
@@ -99,7 +107,11 @@ function summarised(result: AuditResult, maxChars: number, detailsUrl: string | 
   let shown = 0;
   for (const r of flagged) {
     const c = openCounts(r);
-    const counts = [c.errors && plural(c.errors, 'error'), c.warnings && plural(c.warnings, 'warning'), c.notes && plural(c.notes, 'note')]
+    const counts = [
+      c.errors && plural(c.errors, 'error'),
+      c.warnings && plural(c.warnings, 'warning'),
+      c.notes && plural(c.notes, 'note'),
+    ]
       .filter(Boolean)
       .join(', ');
     const checks = [...new Set(r.findings.filter((f) => !f.waived).map((f) => `\`${f.check}\``))].join(', ');
@@ -110,7 +122,8 @@ function summarised(result: AuditResult, maxChars: number, detailsUrl: string | 
     used += line.length + 1;
     shown++;
   }
-  if (shown < flagged.length) lines.push(`- … and ${plural(flagged.length - shown, 'more record')} with findings`);
+  if (shown < flagged.length)
+    lines.push(`- … and ${plural(flagged.length - shown, 'more record')} with findings`);
   const clean = result.records.length - flagged.length;
   if (clean > 0) lines.push(`- [x] ${plural(clean, 'record')} without open findings`);
   const text = `${top}${lines.join('\n')}\n${bottom}`;

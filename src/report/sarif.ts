@@ -7,7 +7,8 @@ import { BUILTIN_RULES, type RuleInfo } from '../audit/builtin-rules.js';
 import type { AuditResult, Finding, Severity } from '../audit/types.js';
 import type { CheckModule } from '../checks/types.js';
 
-export const SARIF_SCHEMA = 'https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json';
+export const SARIF_SCHEMA =
+  'https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json';
 
 export interface SarifOptions {
   /** Prefix for artifact URIs when the registry root is a subfolder of the repository, e.g. 'registry/'. */
@@ -36,11 +37,19 @@ function encodeUri(path: string): string {
   return path.split('/').map(encodeURIComponent).join('/');
 }
 
-export function renderSarif(result: AuditResult, checks: readonly CheckModule[], options: SarifOptions = {}): string {
+export function renderSarif(
+  result: AuditResult,
+  checks: readonly CheckModule[],
+  options: SarifOptions = {},
+): string {
   return `${JSON.stringify(sarifLog(result, checks, options), null, 2)}\n`;
 }
 
-export function sarifLog(result: AuditResult, checks: readonly CheckModule[], options: SarifOptions = {}): Record<string, unknown> {
+export function sarifLog(
+  result: AuditResult,
+  checks: readonly CheckModule[],
+  options: SarifOptions = {},
+): Record<string, unknown> {
   const infos: { info: RuleInfo }[] = [
     ...checks.map((c) => ({ info: c as RuleInfo })),
     ...BUILTIN_RULES.filter((b) => !checks.some((c) => c.id === b.id)).map((info) => ({ info })),
@@ -49,7 +58,9 @@ export function sarifLog(result: AuditResult, checks: readonly CheckModule[], op
   for (const r of result.records) {
     for (const f of r.findings) {
       if (!infos.some((x) => x.info.id === f.check)) {
-        infos.push({ info: { id: f.check, defaultSeverity: f.severity, summary: f.check, explanation: f.check } });
+        infos.push({
+          info: { id: f.check, defaultSeverity: f.severity, summary: f.check, explanation: f.check },
+        });
       }
     }
   }
@@ -58,7 +69,9 @@ export function sarifLog(result: AuditResult, checks: readonly CheckModule[], op
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, '/') : '';
   const results = result.records.flatMap((r) =>
     r.findings.map((f: Finding) => {
-      const physical: Record<string, unknown> = { artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) } };
+      const physical: Record<string, unknown> = {
+        artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) },
+      };
       if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
       const res: Record<string, unknown> = {
         ruleId: f.check,
@@ -70,7 +83,11 @@ export function sarifLog(result: AuditResult, checks: readonly CheckModule[], op
       };
       if (f.waived) {
         res.suppressions = [
-          { kind: 'inSource', status: 'accepted', justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})` },
+          {
+            kind: 'inSource',
+            status: 'accepted',
+            justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})`,
+          },
         ];
       }
       return res;

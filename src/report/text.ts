@@ -16,7 +16,13 @@ export function shouldColor(stream: { isTTY?: boolean }, env: NodeJS.ProcessEnv 
 
 /** Control characters from records would move the cursor or recolour the terminal: show them as \\xNN. */
 export function safeText(s: string): string {
-  return s.replace(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/g, (c) => `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`).replace(/\n/g, ' ');
+  return s
+    .replace(
+      // eslint-disable-next-line no-control-regex
+      /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/g,
+      (c) => `\\x${c.charCodeAt(0).toString(16).padStart(2, '0')}`,
+    )
+    .replace(/\n/g, ' ');
 }
 
 function block(r: RecordResult, paint: Paint): string[] {
@@ -32,7 +38,9 @@ function block(r: RecordResult, paint: Paint): string[] {
       const colour = f.severity === 'error' ? 'red' : f.severity === 'warning' ? 'yellow' : 'cyan';
       const mark = f.severity === 'note' ? 'i' : '✗';
       const at = f.line !== null ? paint('dim', ` line ${f.line}`) : '';
-      lines.push(`  ${paint(colour, `${mark} ${f.severity.padEnd(7)}`)} ${f.check}${at}: ${safeText(f.message)}`);
+      lines.push(
+        `  ${paint(colour, `${mark} ${f.severity.padEnd(7)}`)} ${f.check}${at}: ${safeText(f.message)}`,
+      );
     } else if (item.kind === 'accepted') {
       const f = item.finding;
       lines.push(
@@ -55,7 +63,9 @@ export function summaryLine(result: AuditResult): string {
 }
 
 export function renderText(result: AuditResult, options: TextOptions = {}): string {
-  const paint: Paint = options.color ? (style, s) => `\u001b[${CODES[style]}m${s}\u001b[0m` : (_style, s) => s;
+  const paint: Paint = options.color
+    ? (style, s) => `\u001b[${CODES[style]}m${s}\u001b[0m`
+    : (_style, s) => s;
   const out: string[] = [];
   for (const r of result.records) {
     out.push(...block(r, paint), '');

@@ -11,7 +11,9 @@ export const formCheck: CheckModule = {
   run(ctx) {
     if (!ctx.record) return { findings: [], notApplicable: true };
     if (ctx.record.stereo.form === 'achiral') return { findings: [], passed: 'form is achiral' };
-    return { findings: [{ messageId: 'not-achiral', data: { form: ctx.record.stereo.form }, field: 'stereo.form' }] };
+    return {
+      findings: [{ messageId: 'not-achiral', data: { form: ctx.record.stereo.form }, field: 'stereo.form' }],
+    };
   },
 };
 
@@ -25,8 +27,11 @@ export const ratioNote: CheckModule = {
   run(ctx) {
     const ratio = ctx.record?.stereo.ratio;
     if (ratio === undefined) return { findings: [], notApplicable: true };
-    if (ratio === '1:2') return { findings: [{ messageId: 'bad-ratio', data: { ratio }, field: 'stereo.ratio' }] };
-    return { findings: [{ messageId: 'has-ratio', data: { ratio }, field: 'stereo.ratio', severity: 'note' }] };
+    if (ratio === '1:2')
+      return { findings: [{ messageId: 'bad-ratio', data: { ratio }, field: 'stereo.ratio' }] };
+    return {
+      findings: [{ messageId: 'has-ratio', data: { ratio }, field: 'stereo.ratio', severity: 'note' }],
+    };
   },
 };
 

@@ -49,7 +49,11 @@ export function fakeEngine(): FakeEngine {
     describeCalls,
     readStructure(text: string): ReadResult {
       const bad = text.indexOf('!');
-      if (bad >= 0) return { ok: false, error: { code: 'fake-bad', message: 'bad character', at: { offset: bad, line: 1 } } };
+      if (bad >= 0)
+        return {
+          ok: false,
+          error: { code: 'fake-bad', message: 'bad character', at: { offset: bad, line: 1 } },
+        };
       return { ok: true, structure: fakeStructure(text.trim()), warnings: [] };
     },
     describe(s: Structure): StructureFacts {

@@ -78,7 +78,10 @@ describe('runAudit', () => {
       'compounds/b.yml': rec('LX-00002', 'meso', waivers('')),
     });
     const result = await runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine() });
-    expect(result.records[0]!.findings[0]!.waived).toEqual({ reason: 'confirmed by X-ray', approvedBy: 'Dr. A. Larkspur' });
+    expect(result.records[0]!.findings[0]!.waived).toEqual({
+      reason: 'confirmed by X-ray',
+      approvedBy: 'Dr. A. Larkspur',
+    });
     expect(result.records[1]!.findings[0]!.waived).toBeNull();
     expect(result.summary).toMatchObject({ errors: 1, waived: 1 });
   });
@@ -103,24 +106,35 @@ describe('runAudit', () => {
   });
 
   it('an unknown check id in severities is a usage error with a suggestion', async () => {
-    reg = tmpRegistry({ 'stereogate.config.yml': 'severities:\n  fake-fom: warning\n', 'compounds/a.yml': rec('LX-1', 'achiral') });
-    await expect(runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine() })).rejects.toThrow(/did you mean 'fake-form'/);
+    reg = tmpRegistry({
+      'stereogate.config.yml': 'severities:\n  fake-fom: warning\n',
+      'compounds/a.yml': rec('LX-1', 'achiral'),
+    });
+    await expect(runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine() })).rejects.toThrow(
+      /did you mean 'fake-form'/,
+    );
   });
 
   it('an invalid config file is a ConfigError naming the line', async () => {
-    reg = tmpRegistry({ 'stereogate.config.yml': 'recordDirs: [compounds]\neeTolerance: lots\n', 'compounds/a.yml': rec('LX-1', 'achiral') });
+    reg = tmpRegistry({
+      'stereogate.config.yml': 'recordDirs: [compounds]\neeTolerance: lots\n',
+      'compounds/a.yml': rec('LX-1', 'achiral'),
+    });
     const p = runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine() });
     await expect(p).rejects.toBeInstanceOf(ConfigError);
     await expect(p).rejects.toThrow(/line 2: eeTolerance: must be a number/);
   });
 
   it('recordDirs from a JSON config; a missing record folder is a ConfigError', async () => {
-    reg = tmpRegistry({ 'stereogate.config.json': '{"recordDirs": ["reg"]}', 'reg/a.yml': rec('LX-1', 'achiral') });
+    reg = tmpRegistry({
+      'stereogate.config.json': '{"recordDirs": ["reg"]}',
+      'reg/a.yml': rec('LX-1', 'achiral'),
+    });
     const r = await runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine() });
     expect(r.records.map((x) => x.file)).toEqual(['reg/a.yml']);
-    await expect(runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine(), config: { recordDirs: ['nope'] } })).rejects.toThrow(
-      /'nope' not found/,
-    );
+    await expect(
+      runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine(), config: { recordDirs: ['nope'] } }),
+    ).rejects.toThrow(/'nope' not found/);
   });
 
   it('paths select records (file, folder, or a molfile they use); the registry still holds all records', async () => {
@@ -132,13 +146,28 @@ describe('runAudit', () => {
       'compounds/sub/c.mol': 'CCO',
     });
     const checks = [formCheck, spyCheck(seen)];
-    const byFile = await runAudit({ root: reg.root, paths: ['compounds/a.yml'], checks, engine: fakeEngine() });
+    const byFile = await runAudit({
+      root: reg.root,
+      paths: ['compounds/a.yml'],
+      checks,
+      engine: fakeEngine(),
+    });
     expect(byFile.records.map((r) => r.id)).toEqual(['LX-00001']);
     // a and b share the fake constitution key: the registry view indexes records that are not audited
     expect(seen).toEqual([{ id: 'LX-00001', priorChecks: ['fake-form'], sameKey: 2 }]);
-    const byMol = await runAudit({ root: reg.root, paths: ['compounds/sub/c.mol'], checks, engine: fakeEngine() });
+    const byMol = await runAudit({
+      root: reg.root,
+      paths: ['compounds/sub/c.mol'],
+      checks,
+      engine: fakeEngine(),
+    });
     expect(byMol.records.map((r) => r.id)).toEqual(['LX-00003']);
-    const byDir = await runAudit({ root: reg.root, paths: ['compounds/sub/', 'README.md'], checks, engine: fakeEngine() });
+    const byDir = await runAudit({
+      root: reg.root,
+      paths: ['compounds/sub/', 'README.md'],
+      checks,
+      engine: fakeEngine(),
+    });
     expect(byDir.records.map((r) => r.id)).toEqual(['LX-00003']);
     expect(byDir.unmatched).toEqual(['README.md']);
   });
@@ -157,12 +186,19 @@ describe('runAudit', () => {
   });
 
   it('an engine failure while describing becomes a structure error, not a crash', async () => {
-    reg = tmpRegistry({ 'compounds/a.yml': rec('LX-00001', 'achiral', '', 'BOOM'), 'compounds/b.yml': rec('LX-2', 'achiral', '', 'C!C') });
+    reg = tmpRegistry({
+      'compounds/a.yml': rec('LX-00001', 'achiral', '', 'BOOM'),
+      'compounds/b.yml': rec('LX-2', 'achiral', '', 'C!C'),
+    });
     let errors: (string | undefined)[] = [];
-    const probe = { ...formCheck, id: 'probe', run: (ctx: Parameters<typeof formCheck.run>[0]) => {
-      errors.push(ctx.main.error?.message);
-      return { findings: [] };
-    } };
+    const probe = {
+      ...formCheck,
+      id: 'probe',
+      run: (ctx: Parameters<typeof formCheck.run>[0]) => {
+        errors.push(ctx.main.error?.message);
+        return { findings: [] };
+      },
+    };
     errors = [];
     const r = await runAudit({ root: reg.root, checks: [probe], engine: fakeEngine() });
     expect(r.records[0]!.computed).toBeNull();
@@ -171,7 +207,9 @@ describe('runAudit', () => {
   });
 
   it('a missing registry folder is a ConfigError', async () => {
-    await expect(runAudit({ root: '/nonexistent/stereogate', checks: CHECKS, engine: fakeEngine() })).rejects.toBeInstanceOf(ConfigError);
+    await expect(
+      runAudit({ root: '/nonexistent/stereogate', checks: CHECKS, engine: fakeEngine() }),
+    ).rejects.toBeInstanceOf(ConfigError);
   });
 });
 

@@ -98,7 +98,8 @@ describe('record positions and schema problems', () => {
   });
 
   it('a YAML syntax error is a problem with its line', () => {
-    const r = load({ 'compounds/a.yml': 'id: LX-1\nstereo:\n  form: [achiral\nstructure: {smiles: C}\n' }).records[0]!;
+    const r = load({ 'compounds/a.yml': 'id: LX-1\nstereo:\n  form: [achiral\nstructure: {smiles: C}\n' })
+      .records[0]!;
     expect(r.record).toBeNull();
     expect(r.problems.length).toBeGreaterThan(0);
     expect(r.problems[0]!.message).toMatch(/^not valid YAML\/JSON/);
@@ -119,7 +120,8 @@ describe('record positions and schema problems', () => {
 
 describe('JSON records', () => {
   it('JSON goes through the same parser and keeps lines (tabs allowed, RFC 8259 §2 whitespace)', () => {
-    const json = '{\n\t"id": "LX-00003",\n\t"structure": {"smiles": "OCC"},\n\t"stereo": {\n\t\t"form": "meso"\n\t}\n}\n';
+    const json =
+      '{\n\t"id": "LX-00003",\n\t"structure": {"smiles": "OCC"},\n\t"stereo": {\n\t\t"form": "meso"\n\t}\n}\n';
     const r = load({ 'compounds/c.json': json }).records[0]!;
     expect(r.problems).toEqual([]);
     expect(r.positions.get('stereo.form')?.line).toBe(5);
@@ -127,7 +129,8 @@ describe('JSON records', () => {
   });
 
   it('a JSON schema error points at the JSON line', () => {
-    const json = '{\n  "id": "LX-00003",\n  "structure": {"smiles": "OCC"},\n  "stereo": {"form": "mesoo"}\n}\n';
+    const json =
+      '{\n  "id": "LX-00003",\n  "structure": {"smiles": "OCC"},\n  "stereo": {"form": "mesoo"}\n}\n';
     const r = load({ 'compounds/c.json': json }).records[0]!;
     expect(r.problems[0]).toMatchObject({ path: 'stereo.form', line: 4 });
     expect(r.problems[0]!.message).toContain("did you mean 'meso'?");
@@ -136,7 +139,10 @@ describe('JSON records', () => {
 
 describe('registry-wide problems', () => {
   it('a duplicate id is a problem on both records, naming the other file', () => {
-    const { records } = load({ 'compounds/a.yml': GOOD, 'compounds/sub/b.yml': GOOD.replace('ee: 99', 'ee: 98') });
+    const { records } = load({
+      'compounds/a.yml': GOOD,
+      'compounds/sub/b.yml': GOOD.replace('ee: 99', 'ee: 98'),
+    });
     expect(records.map((r) => r.file)).toEqual(['compounds/a.yml', 'compounds/sub/b.yml']);
     expect(records[0]!.problems[0]).toMatchObject({ path: 'id', line: 1 });
     expect(records[0]!.problems[0]!.message).toContain('compounds/sub/b.yml');
@@ -174,7 +180,11 @@ describe('molfile paths stay inside the registry', () => {
 
   it('a molfile beside the record is read', () => {
     const { records } = load({ 'compounds/a.yml': withMolfile('a.mol'), 'compounds/a.mol': 'MOLTEXT\n' });
-    expect(records[0]!.sources?.main).toMatchObject({ format: 'molfile', text: 'MOLTEXT\n', file: 'compounds/a.mol' });
+    expect(records[0]!.sources?.main).toMatchObject({
+      format: 'molfile',
+      text: 'MOLTEXT\n',
+      file: 'compounds/a.mol',
+    });
   });
 
   it('a path that climbs out with .. is refused', () => {
@@ -184,7 +194,10 @@ describe('molfile paths stay inside the registry', () => {
   });
 
   it('.. that stays inside is fine', () => {
-    const { records } = load({ 'compounds/a.yml': withMolfile('../structures/a.mol'), 'structures/a.mol': 'M\n' });
+    const { records } = load({
+      'compounds/a.yml': withMolfile('../structures/a.mol'),
+      'structures/a.mol': 'M\n',
+    });
     expect(records[0]!.sources?.main).toMatchObject({ text: 'M\n', file: 'structures/a.mol' });
   });
 

@@ -37,7 +37,9 @@ describe('escapeMarkdown', () => {
     expect(escapeMarkdown('a\n# heading\r\n- item')).not.toMatch(/[\r\n]/);
   });
   it('escapes emphasis, code and table syntax', () => {
-    expect(escapeMarkdown('**b** `c` |t| ~~s~~ _i_')).toBe('\\*\\*b\\*\\* \\`c\\` \\|t\\| \\~\\~s\\~\\~ \\_i\\_');
+    expect(escapeMarkdown('**b** `c` |t| ~~s~~ _i_')).toBe(
+      '\\*\\*b\\*\\* \\`c\\` \\|t\\| \\~\\~s\\~\\~ \\_i\\_',
+    );
   });
 });
 
@@ -62,8 +64,12 @@ describe('renderMarkdown', () => {
   });
 
   it('shows a waived finding as accepted with who and why', () => {
-    expect(md).toMatch(/^- \[x\] `rotation-check` accepted by waiver \(line 9\): Rotation sign disagrees\\\./m);
-    expect(md).toContain(`Reason: literature value @${ZWJ}chem\\-leads &lt;b&gt;x&lt;/b&gt; · approved by Dr\\. R\\. Vale`);
+    expect(md).toMatch(
+      /^- \[x\] `rotation-check` accepted by waiver \(line 9\): Rotation sign disagrees\\\./m,
+    );
+    expect(md).toContain(
+      `Reason: literature value @${ZWJ}chem\\-leads &lt;b&gt;x&lt;/b&gt; · approved by Dr\\. R\\. Vale`,
+    );
   });
 
   it('shows declared against computed evidence', () => {
@@ -82,7 +88,10 @@ describe('renderMarkdown', () => {
   it('summarises when longer than maxChars and points to the job summary', () => {
     const big: AuditResult = sampleResult();
     const template = big.records[0]!;
-    big.records = Array.from({ length: 1000 }, (_, i) => ({ ...template, id: `LX-${String(i).padStart(5, '0')}` }));
+    big.records = Array.from({ length: 1000 }, (_, i) => ({
+      ...template,
+      id: `LX-${String(i).padStart(5, '0')}`,
+    }));
     big.summary = { records: 1000, errors: 1000, warnings: 0, notes: 1000, waived: 1000 };
     const full = renderMarkdown(big, { maxChars: 10_000_000 });
     expect(full.length).toBeGreaterThan(60_000);

@@ -17,7 +17,8 @@ export function finding(over: Partial<Finding>): Finding {
   };
 }
 
-export const HOSTILE = 'ping @team <img src=x onerror=alert(1)> [x](javascript:alert(1)) ![i](http://evil/i.png) **bold** `code`';
+export const HOSTILE =
+  'ping @team <img src=x onerror=alert(1)> [x](javascript:alert(1)) ![i](http://evil/i.png) **bold** `code`';
 
 export function sampleResult(): AuditResult {
   return {
@@ -29,7 +30,13 @@ export function sampleResult(): AuditResult {
         computed: fakeFacts('C[C@H](O)N'),
         findings: [
           finding({ message: `Declared ${HOSTILE}` }),
-          finding({ check: 'ratio-check', severity: 'note', line: null, field: null, message: 'A 1:1 mixture; was it measured?' }),
+          finding({
+            check: 'ratio-check',
+            severity: 'note',
+            line: null,
+            field: null,
+            message: 'A 1:1 mixture; was it measured?',
+          }),
           finding({
             check: 'rotation-check',
             severity: 'warning',

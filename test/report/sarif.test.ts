@@ -33,7 +33,10 @@ function sarifViolations(log: unknown): string[] {
     need(isObj(run) && isObj(run.tool), `runs[${i}].tool`);
     if (!isObj(run) || !isObj(run.tool)) continue;
     const driver = run.tool.driver;
-    need(isObj(driver) && typeof driver.name === 'string' && driver.name !== '', `runs[${i}].tool.driver.name`);
+    need(
+      isObj(driver) && typeof driver.name === 'string' && driver.name !== '',
+      `runs[${i}].tool.driver.name`,
+    );
     const rules = (isObj(driver) && Array.isArray(driver.rules) ? driver.rules : []) as unknown[];
     rules.forEach((r, k) => {
       need(isObj(r) && typeof r.id === 'string', `rules[${k}].id`);
@@ -42,24 +45,42 @@ function sarifViolations(log: unknown): string[] {
         if (m !== undefined) need(isObj(m) && typeof m.text === 'string', `rules[${k}].${key}.text`);
       }
       const dc = isObj(r) ? r.defaultConfiguration : undefined;
-      if (dc !== undefined) need(isObj(dc) && LEVELS.includes(String(dc.level)), `rules[${k}].defaultConfiguration.level`);
+      if (dc !== undefined)
+        need(isObj(dc) && LEVELS.includes(String(dc.level)), `rules[${k}].defaultConfiguration.level`);
     });
     const results = (Array.isArray(run.results) ? run.results : []) as unknown[];
     results.forEach((res, k) => {
-      need(isObj(res) && isObj(res.message) && (typeof res.message.text === 'string' || typeof res.message.id === 'string'), `results[${k}].message`);
+      need(
+        isObj(res) &&
+          isObj(res.message) &&
+          (typeof res.message.text === 'string' || typeof res.message.id === 'string'),
+        `results[${k}].message`,
+      );
       if (!isObj(res)) return;
       if (res.level !== undefined) need(LEVELS.includes(String(res.level)), `results[${k}].level`);
       if (res.ruleIndex !== undefined) {
-        need(Number.isInteger(res.ruleIndex) && (res.ruleIndex as number) >= 0 && (res.ruleIndex as number) < rules.length, `results[${k}].ruleIndex in range`);
+        need(
+          Number.isInteger(res.ruleIndex) &&
+            (res.ruleIndex as number) >= 0 &&
+            (res.ruleIndex as number) < rules.length,
+          `results[${k}].ruleIndex in range`,
+        );
         const rule = rules[res.ruleIndex as number];
         need(isObj(rule) && rule.id === res.ruleId, `results[${k}].ruleIndex points at ruleId`);
       }
       for (const loc of (Array.isArray(res.locations) ? res.locations : []) as unknown[]) {
         const pl = isObj(loc) ? loc.physicalLocation : undefined;
         if (!isObj(pl)) continue;
-        need(pl.artifactLocation === undefined || isObj(pl.artifactLocation), `results[${k}] artifactLocation`);
+        need(
+          pl.artifactLocation === undefined || isObj(pl.artifactLocation),
+          `results[${k}] artifactLocation`,
+        );
         const region = pl.region;
-        if (region !== undefined) need(isObj(region) && Number.isInteger(region.startLine) && (region.startLine as number) >= 1, `results[${k}] region.startLine`);
+        if (region !== undefined)
+          need(
+            isObj(region) && Number.isInteger(region.startLine) && (region.startLine as number) >= 1,
+            `results[${k}] region.startLine`,
+          );
       }
       for (const s of (Array.isArray(res.suppressions) ? res.suppressions : []) as unknown[]) {
         need(isObj(s) && (s.kind === 'inSource' || s.kind === 'external'), `results[${k}] suppression.kind`);
@@ -97,7 +118,10 @@ describe('renderSarif', () => {
   it('meets the required properties of SARIF 2.1.0', () => {
     expect(sarifViolations(log)).toEqual([]);
     // the validator itself catches faults
-    expect(sarifViolations({ version: '2.0.0', runs: [{ tool: { driver: {} }, results: [{ level: 'fatal' }] }] }).length).toBe(4);
+    expect(
+      sarifViolations({ version: '2.0.0', runs: [{ tool: { driver: {} }, results: [{ level: 'fatal' }] }] })
+        .length,
+    ).toBe(4);
   });
 
   it('has rules from the check metadata, plus the audit’s own rules and any check seen only in findings', () => {
@@ -132,7 +156,11 @@ describe('renderSarif', () => {
   it('marks a waived finding as suppressed in source with the justification', () => {
     const waived = results[2]!;
     expect(waived.suppressions).toEqual([
-      { kind: 'inSource', status: 'accepted', justification: 'literature value @chem-leads <b>x</b> (approved by Dr. R. Vale)' },
+      {
+        kind: 'inSource',
+        status: 'accepted',
+        justification: 'literature value @chem-leads <b>x</b> (approved by Dr. R. Vale)',
+      },
     ]);
   });
 
