@@ -17,7 +17,7 @@ export function editDistance(a: string, b: string): number {
 
 /**
  * The candidate closest to `word` (case-insensitive), or null when none is reasonably close: at most about
- * half the length of the word in edits, or the word is a prefix of a candidate (racem -> racemate).
+ * 40 % of the length of the word in edits, or the word is a prefix of a candidate (racem -> racemate).
  */
 export function closestWord(word: string, candidates: readonly string[]): string | null {
   const w = word.toLowerCase();
@@ -32,6 +32,6 @@ export function closestWord(word: string, candidates: readonly string[]): string
     }
   }
   if (best === null) return null;
-  const limit = Math.max(2, Math.ceil(w.length / 2));
+  const limit = Math.max(2, Math.round(w.length * 0.4));
   return bestDistance <= limit ? best : null;
 }

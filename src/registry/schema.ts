@@ -6,6 +6,7 @@ import { Ajv, type ErrorObject, type ValidateFunction } from 'ajv';
 import recordSchema from '../../schema/record.schema.json' with { type: 'json' };
 import configSchema from '../../schema/config.schema.json' with { type: 'json' };
 import { closestWord } from './closest.js';
+import { formSynonym } from './form-words.js';
 
 export interface SchemaProblem {
   /** Dotted field path; '' for the whole document. */
@@ -113,7 +114,13 @@ function explainOne(e: ErrorObject, value: unknown, what: string): SchemaProblem
     }
     case 'enum': {
       const allowed = ((e.params as { allowedValues: unknown[] }).allowedValues ?? []).map(String);
-      const guess = typeof got === 'string' ? closestWord(got, allowed) : null;
+      const synonym = typeof got === 'string' ? formSynonym(got) : null;
+      const guess =
+        synonym !== null && allowed.includes(synonym)
+          ? synonym
+          : typeof got === 'string'
+            ? closestWord(got, allowed)
+            : null;
       const hint = guess ? `; did you mean '${guess}'?` : '';
       return { path, message: `${label}: ${quote(got)} is not one of ${allowed.join(', ')}${hint}` };
     }
