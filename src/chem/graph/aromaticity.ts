@@ -10,7 +10,7 @@
  */
 import type { Structure } from '../types.js';
 import { buildGraph, type Graph } from './adjacency.js';
-import { bridges, ringInfo, ringSubgraph, type RingInfo } from './rings.js';
+import { bridges, ringInfo, type RingInfo } from './rings.js';
 
 const NOT_PI = -1;
 
@@ -131,8 +131,8 @@ export function conjugatedRingBonds(s: Structure, g: Graph = buildGraph(s)): boo
   const keep: boolean[] = s.bonds.map(
     (b, k) => !bridge[k] && b.order <= 2 && hasRingDouble[b.a] === 1 && hasRingDouble[b.b] === 1,
   );
-  const sub = ringSubgraph(g, keep);
-  const subBridge = bridges(sub, m);
+  if (!keep.some((x) => x)) return out;
+  const subBridge = bridges(g, m, keep);
   for (let k = 0; k < m; k++) out[k] = keep[k] && !subBridge[k];
   return out;
 }

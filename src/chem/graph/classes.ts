@@ -9,38 +9,37 @@ import type { Structure } from '../types.js';
 import { conjugatedRingBonds } from './aromaticity.js';
 import { buildGraph } from './adjacency.js';
 import { csrOf } from './csr.js';
-import { rankKeys, Refiner } from './refine.js';
-import { ringInfo, type RingInfo } from './rings.js';
+import { cellIndex, partitionOf, rankKeys, Refiner } from './refine.js';
+import { bridges } from './rings.js';
 
 /** Element, charge, isotope, hydrogens, degree, radical, aromatic and ring flags, packed into one number. */
 export function atomInvariants(s: Structure, aromatic?: boolean[]): number[] {
   return invariantsWith(s, aromatic);
 }
 
-/** As atomInvariants, reusing ring information the caller already has. */
-export function invariantsWith(s: Structure, aromatic?: readonly boolean[], rings?: RingInfo): number[] {
+/** As atomInvariants; `inRing` (per atom) may be passed when the caller has ring information. */
+export function invariantsWith(s: Structure, aromatic?: readonly boolean[], inRing?: ArrayLike<boolean>): number[] {
   const n = s.atoms.length;
-  let info = rings;
-  let arom = aromatic;
-  if (!info) info = ringInfo(s);
-  if (!arom) arom = conjugatedRingBonds(s);
-  const degree = new Array<number>(n).fill(0);
+  const g = buildGraph(s);
+  const arom = aromatic ?? conjugatedRingBonds(s, g);
+  let ring = inRing;
+  if (!ring) {
+    const bridge = bridges(g, s.bonds.length);
+    const r = new Array<boolean>(n).fill(false);
+    for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (!bridge[k]) r[i] = true;
+    ring = r;
+  }
   const aromaticAtom = new Array<boolean>(n).fill(false);
-  s.bonds.forEach((b, k) => {
-    if (b.a < 0 || b.b < 0 || b.a >= n || b.b >= n || b.a === b.b) return;
-    degree[b.a]++;
-    degree[b.b]++;
-    if (arom![k]) aromaticAtom[b.a] = aromaticAtom[b.b] = true;
-  });
+  for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (arom[k]) aromaticAtom[i] = true;
   return s.atoms.map((a, i) => {
     let v = clamp(a.atomicNumber, 0, 127);
     v = v * 32 + clamp(a.charge + 16, 0, 31);
     v = v * 512 + clamp(a.isotope ?? 0, 0, 511);
     v = v * 32 + clamp(a.hCount, 0, 31);
-    v = v * 32 + clamp(degree[i], 0, 31);
+    v = v * 32 + clamp(g.nbrs[i].length, 0, 31);
     v = v * 4 + clamp(a.radical, 0, 3);
     v = v * 2 + (aromaticAtom[i] ? 1 : 0);
-    v = v * 2 + (info!.atomInRing[i] ? 1 : 0);
+    v = v * 2 + (ring![i] ? 1 : 0);
     return v;
   });
 }
@@ -60,10 +59,9 @@ export interface ClassOptions {
 export function equivalenceClasses(s: Structure, opts: ClassOptions = {}): Int32Array {
   const n = s.atoms.length;
   if (n === 0) return new Int32Array(0);
-  const info = ringInfo(s, buildGraph(s));
   const aromatic = opts.aromatic ?? conjugatedRingBonds(s);
-  const inv = invariantsWith(s, aromatic, info);
-  const colour = rankKeys(opts.extra ? [inv, opts.extra] : [inv], n);
-  new Refiner(csrOf([{ s, aromatic }])).refine(colour);
-  return colour;
+  const inv = invariantsWith(s, aromatic);
+  const p = partitionOf(rankKeys(opts.extra ? [inv, opts.extra] : [inv], n));
+  new Refiner(csrOf([{ s, aromatic }])).refine(p);
+  return cellIndex(p);
 }

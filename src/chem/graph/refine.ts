@@ -1,7 +1,14 @@
 /**
- * Colour refinement (Morgan's extended connectivity in its exact form, the 1-dimensional Weisfeiler–Leman
- * algorithm): an atom's new colour is its old colour plus the sorted multiset of (bond code, neighbour colour).
- * Colours are dense ranks of the sorted signatures, so they depend only on the graph, never on atom order.
+ * Colour refinement to the coarsest equitable partition (the stable colouring of the 1-dimensional
+ * Weisfeiler–Leman algorithm, the exact form of Morgan's extended connectivity), computed cell by cell with a
+ * queue of splitter cells as in McKay's partition refinement (Congr. Numer. 30 (1981) 45) and Hopcroft's
+ * "all but the largest fragment" rule. Atoms are counted per bond code, so a neighbour through a double bond
+ * differs from one through a single bond.
+ *
+ * Cells are kept in an order that depends only on the graph (initial cells sorted by key, fragments sorted by
+ * their counts, splitters taken in order of creation), so the final cell index of an atom is independent of
+ * atom order. With `split` > 0 the graph is a disjoint union A ∪ B (A = atoms [0, split)) and refinement fails
+ * as soon as a cell has different numbers of A and B atoms.
  */
 
 /** Compressed adjacency: neighbours of atom i are adj[offs[i] .. offs[i+1]), with a bond code each. */
@@ -14,7 +21,22 @@ export interface CsrGraph {
 
 /** Bond code: 1..4 for the Kekulé order, 5 for an aromatic bond. */
 export const AROMATIC_CODE = 5;
-const CODES = 8;
+/** Count weight per bond code (up to 63 neighbours per code and cell are counted exactly). */
+const WEIGHT = [0, 1, 1 << 6, 1 << 12, 1 << 18, 1 << 24, 1 << 27];
+
+/** An ordered partition: cells are contiguous runs of `lab`; `start[v]` is the first position of v's cell. */
+export interface Partition {
+  lab: Int32Array;
+  /** First position of the cell of each atom. */
+  start: Int32Array;
+  /** Cell length, stored at the cell's first position. */
+  len: Int32Array;
+  cells: number;
+}
+
+export function clonePartition(p: Partition): Partition {
+  return { lab: p.lab.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+}
 
 /** Dense ranks (0 = lowest) of per-atom keys compared lexicographically. */
 export function rankKeys(keys: ArrayLike<number>[], n: number): Int32Array {
@@ -36,95 +58,220 @@ export function rankKeys(keys: ArrayLike<number>[], n: number): Int32Array {
   return out;
 }
 
-export function countColours(colour: Int32Array): number {
-  let max = -1;
-  for (let i = 0; i < colour.length; i++) if (colour[i] > max) max = colour[i];
-  return max + 1;
+/** Partition whose cells are the atoms of equal rank, in rank order. */
+export function partitionOf(rank: Int32Array): Partition {
+  const n = rank.length;
+  const lab = new Int32Array(n);
+  const start = new Int32Array(n);
+  const len = new Int32Array(n);
+  let cells = 0;
+  for (let i = 0; i < n; i++) if (rank[i] + 1 > cells) cells = rank[i] + 1;
+  const first = new Int32Array(cells + 1);
+  for (let i = 0; i < n; i++) first[rank[i] + 1]++;
+  for (let c = 0; c < cells; c++) first[c + 1] += first[c];
+  const fill = first.slice(0, cells);
+  for (let i = 0; i < n; i++) {
+    const c = rank[i];
+    lab[fill[c]++] = i;
+    start[i] = first[c];
+  }
+  for (let c = 0; c < cells; c++) len[first[c]] = first[c + 1] - first[c];
+  return { lab, start, len, cells };
 }
 
-/**
- * Workspace for repeated refinement of one graph (the search refines at every node).
- * `split` > 0 marks a disjoint union A ∪ B with A = atoms [0, split): refinement then fails (returns -1) as
- * soon as some colour has different numbers of A and B atoms.
- */
+/** Cell index (0-based, in partition order) of every atom. */
+export function cellIndex(p: Partition): Int32Array {
+  const n = p.lab.length;
+  const out = new Int32Array(n);
+  let c = -1;
+  for (let i = 0; i < n; i = i + p.len[i]) {
+    c++;
+    for (let t = i; t < i + p.len[i]; t++) out[p.lab[t]] = c;
+  }
+  return out;
+}
+
+const ascending = (x: number, y: number): number => x - y;
+
+/** Reusable workspace for refining partitions of one graph. */
 export class Refiner {
-  private readonly sig: Int32Array;
-  private readonly order: Int32Array;
-  private readonly next: Int32Array;
-  private readonly countA: Int32Array;
-  private readonly countB: Int32Array;
+  private readonly count: Int32Array;
+  private readonly touched: Int32Array;
+  private readonly queue: Int32Array;
+  private readonly inQueue: Uint8Array;
+  private readonly touchedCells: number[] = [];
+  private readonly sortBuf: Float64Array;
+  private readonly starts: number[] = [];
+  private head = 0;
+  private tail = 0;
+  private queued = 0;
 
   constructor(
     readonly g: CsrGraph,
     readonly split = 0,
   ) {
-    this.sig = new Int32Array(g.adj.length);
-    this.order = new Int32Array(g.n);
-    this.next = new Int32Array(g.n);
-    this.countA = new Int32Array(g.n + 1);
-    this.countB = new Int32Array(g.n + 1);
+    const n = g.n;
+    this.count = new Int32Array(n);
+    this.touched = new Int32Array(n);
+    this.queue = new Int32Array(n + 1);
+    this.inQueue = new Uint8Array(n);
+    this.sortBuf = new Float64Array(n);
   }
 
-  /** Refines `colour` (dense ranks) in place to the stable colouring; returns the class count or -1. */
-  refine(colour: Int32Array, classes = countColours(colour)): number {
-    const { n, offs, adj, code } = this.g;
-    const sig = this.sig;
-    const order = this.order;
-    if (this.split > 0 && !this.balanced(colour, classes)) return -1;
-    for (;;) {
-      if (classes === n) return classes;
-      for (let i = 0; i < n; i++) {
-        const lo = offs[i];
-        const hi = offs[i + 1];
-        for (let e = lo; e < hi; e++) {
-          const v = colour[adj[e]] * CODES + code[e];
-          let p = e;
-          while (p > lo && sig[p - 1] > v) {
-            sig[p] = sig[p - 1];
-            p--;
-          }
-          sig[p] = v;
-        }
-        order[i] = i;
-      }
-      const cmp = (i: number, j: number): number => {
-        let d = colour[i] - colour[j];
-        if (d !== 0) return d;
-        const li = offs[i];
-        const lj = offs[j];
-        d = offs[i + 1] - li - (offs[j + 1] - lj);
-        if (d !== 0) return d;
-        const len = offs[i + 1] - li;
-        for (let t = 0; t < len; t++) {
-          d = sig[li + t] - sig[lj + t];
-          if (d !== 0) return d;
-        }
-        return 0;
-      };
-      order.sort(cmp);
-      const next = this.next;
-      let r = 0;
-      next[order[0]] = 0;
-      for (let t = 1; t < n; t++) {
-        if (cmp(order[t - 1], order[t]) !== 0) r++;
-        next[order[t]] = r;
-      }
-      const fresh = r + 1;
-      if (fresh === classes) return classes;
-      colour.set(next);
-      classes = fresh;
-      if (this.split > 0 && !this.balanced(colour, classes)) return -1;
-    }
+  /** Moves atoms x (of A) and y (of B) of one cell into a cell of their own at the cell's start; refines. */
+  individualise(p: Partition, x: number, y: number): boolean {
+    const { lab, start, len } = p;
+    const s = start[x];
+    const L = len[s];
+    const place = (v: number, at: number) => {
+      const from = lab.indexOf(v, s);
+      lab[from] = lab[at];
+      lab[at] = v;
+    };
+    place(x, s);
+    place(y, s + 1);
+    len[s] = 2;
+    len[s + 2] = L - 2;
+    for (let t = s + 2; t < s + L; t++) start[lab[t]] = s + 2;
+    p.cells++;
+    return this.refine(p, [s]);
   }
 
-  private balanced(colour: Int32Array, classes: number): boolean {
-    const a = this.countA;
-    const b = this.countB;
-    a.fill(0, 0, classes);
-    b.fill(0, 0, classes);
-    for (let i = 0; i < this.split; i++) a[colour[i]]++;
-    for (let i = this.split; i < this.g.n; i++) b[colour[i]]++;
-    for (let c = 0; c < classes; c++) if (a[c] !== b[c]) return false;
+  /** Balanced A/B counts in every cell (always true without a split). */
+  balanced(p: Partition): boolean {
+    if (this.split === 0) return true;
+    for (let s = 0; s < p.lab.length; s += p.len[s]) if (!this.cellBalanced(p, s, p.len[s])) return false;
     return true;
+  }
+
+  /**
+   * Refines p in place until equitable. `splitters` are the first positions of the cells to start from (all
+   * cells when omitted). Returns false when A and B were found to differ.
+   */
+  refine(p: Partition, splitters?: number[]): boolean {
+    const { offs, adj, code } = this.g;
+    const { lab, start, len } = p;
+    const count = this.count;
+    const touched = this.touched;
+    const queue = this.queue;
+    const inQueue = this.inQueue;
+    const qsize = queue.length;
+    this.head = 0;
+    this.tail = 0;
+    this.queued = 0;
+    if (splitters) for (const s of splitters) this.push(s);
+    else for (let s = 0; s < lab.length; s += len[s]) this.push(s);
+    const n = lab.length;
+    while (this.queued > 0) {
+      if (p.cells === n) break; // discrete: nothing left to split
+      const w = queue[this.head];
+      this.head = this.head + 1 === qsize ? 0 : this.head + 1;
+      this.queued--;
+      inQueue[w] = 0;
+      // Count, for every atom, its neighbours in cell w per bond code.
+      let nt = 0;
+      const wEnd = w + len[w];
+      for (let t = w; t < wEnd; t++) {
+        const v = lab[t];
+        for (let e = offs[v]; e < offs[v + 1]; e++) {
+          const u = adj[e];
+          if (count[u] === 0) touched[nt++] = u;
+          count[u] += WEIGHT[code[e]];
+        }
+      }
+      const cellsToSplit = this.touchedCells;
+      cellsToSplit.length = 0;
+      for (let t = 0; t < nt; t++) {
+        const s = start[touched[t]];
+        if (len[s] > 1 && !cellsToSplit.includes(s)) cellsToSplit.push(s);
+      }
+      if (cellsToSplit.length > 1) cellsToSplit.sort(ascending);
+      let ok = true;
+      for (const s of cellsToSplit) {
+        if (this.splitCell(p, s) < 0) {
+          ok = false;
+          break;
+        }
+      }
+      for (let t = 0; t < nt; t++) count[touched[t]] = 0;
+      if (!ok) {
+        this.drain();
+        return false;
+      }
+    }
+    this.drain();
+    return true;
+  }
+
+  private push(s: number): void {
+    this.queue[this.tail] = s;
+    this.tail = this.tail + 1 === this.queue.length ? 0 : this.tail + 1;
+    this.inQueue[s] = 1;
+    this.queued++;
+  }
+
+  private drain(): void {
+    const queue = this.queue;
+    while (this.head !== this.tail) {
+      this.inQueue[queue[this.head]] = 0;
+      this.head = this.head + 1 === queue.length ? 0 : this.head + 1;
+    }
+    this.queued = 0;
+  }
+
+  /** Splits the cell at s by count; returns the number of fragments, or -1 on an A/B imbalance. */
+  private splitCell(p: Partition, s: number): number {
+    const { lab, start, len } = p;
+    const count = this.count;
+    const L = len[s];
+    const first = count[lab[s]];
+    let uniform = true;
+    for (let t = s + 1; t < s + L; t++) {
+      if (count[lab[t]] !== first) {
+        uniform = false;
+        break;
+      }
+    }
+    if (uniform) return 1;
+    // Sort the cell by (count, atom): counts < 2^30, atoms < 2^22.
+    const buf = this.sortBuf.subarray(0, L);
+    for (let t = 0; t < L; t++) buf[t] = count[lab[s + t]] * 4194304 + lab[s + t];
+    buf.sort();
+    for (let t = 0; t < L; t++) lab[s + t] = buf[t] % 4194304;
+    const wasQueued = this.inQueue[s] === 1;
+    let fragStart = s;
+    let fragments = 0;
+    let largest = s;
+    let largestLen = 0;
+    const starts = this.starts;
+    starts.length = 0;
+    for (let t = s; t <= s + L; t++) {
+      if (t === s + L || (t > s && count[lab[t]] !== count[lab[t - 1]])) {
+        const fl = t - fragStart;
+        len[fragStart] = fl;
+        for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
+        if (this.split > 0 && !this.cellBalanced(p, fragStart, fl)) return -1;
+        starts.push(fragStart);
+        if (fl > largestLen) {
+          largestLen = fl;
+          largest = fragStart;
+        }
+        fragments++;
+        fragStart = t;
+      }
+    }
+    p.cells += fragments - 1;
+    for (const f of starts) {
+      if (wasQueued) {
+        if (f !== s) this.push(f);
+      } else if (f !== largest) this.push(f);
+    }
+    return fragments;
+  }
+
+  private cellBalanced(p: Partition, s: number, L: number): boolean {
+    let a = 0;
+    for (let t = s; t < s + L; t++) if (p.lab[t] < this.split) a++;
+    return 2 * a === L;
   }
 }

@@ -79,7 +79,7 @@ function smallestRings(s: Structure, g: Graph): number[] {
 }
 
 /** Bridges (bonds in no cycle) by the low-link method, iteratively. */
-export function bridges(g: Graph, m: number): Uint8Array {
+export function bridges(g: Graph, m: number, keep?: ArrayLike<boolean>): Uint8Array {
   const n = g.n;
   const isBridge = new Uint8Array(m);
   const disc = new Int32Array(n).fill(-1);
@@ -98,7 +98,7 @@ export function bridges(g: Graph, m: number): Uint8Array {
         const i = iter[u]++;
         const v = g.nbrs[u][i];
         const k = g.nbrBonds[u][i];
-        if (k === parentBond[u]) continue;
+        if (k === parentBond[u] || (keep && !keep[k])) continue;
         if (disc[v] < 0) {
           disc[v] = low[v] = time++;
           parentBond[v] = k;
