@@ -3,7 +3,8 @@
  * that every check reads. Atom numbers here are the 1-based input numbers (see types.ts), never internal indices.
  */
 
-export type CipLabel = 'R' | 'S' | 'r' | 's' | 'E' | 'Z' | 'M' | 'P' | 'm' | 'p';
+/** 'e'/'z': a double bond whose ranking at one end rests on Rule 5 (Hanson et al. 2018, as the CIP suite labels). */
+export type CipLabel = 'R' | 'S' | 'r' | 's' | 'E' | 'Z' | 'M' | 'P' | 'm' | 'p' | 'e' | 'z';
 
 export type UnitKind = 'tetrahedral' | 'double-bond' | 'allene' | 'cumulene' | 'biaryl';
 

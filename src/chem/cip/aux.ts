@@ -48,24 +48,37 @@ export function endBranches(dg: Digraph, end: CipNode, from: CipNode | null, oth
 }
 
 /**
- * Is `ref` (an atom index or IMPLICIT_H) the higher-ranked of `cands` at one end? null when they tie.
- * With one candidate it is the higher by default (the other place is a phantom or lone pair).
+ * At one end: is `ref` (an atom index or IMPLICIT_H) the higher-ranked of `cands`, and did Rule 5 decide it?
+ * null when they tie. With one candidate it is the higher by default (the other place is a phantom or lone pair).
  */
-export function refIsHigher(rk: Ranker, end: CipNode, cands: CipNode[], ref: number, level = RULE_5): boolean | null {
+export function endRank(
+  rk: Ranker,
+  end: CipNode,
+  cands: CipNode[],
+  ref: number,
+  level = RULE_5,
+): { refHigh: boolean; rule5: boolean } | null {
   if (cands.length === 0) return null;
   let top = cands[0];
+  let rule5 = false;
   if (cands.length >= 2) {
     const c = rk.compareUpTo(level, cands[0], end, cands[1], end);
     if (c === 0) return null;
     top = c > 0 ? cands[0] : cands[1];
+    rule5 = Math.abs(c) - 1 === RULE_5;
   }
-  return ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
+  const refHigh = ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
+  return { refHigh, rule5 };
 }
 
-/** E/Z from which ends' higher ligands are the reference ligands, and the input's cis/trans relation. */
-export function ezLabel(e: DoubleBondStereo, refHigh0: boolean, refHigh1: boolean): CipLabel {
-  const cis = e.relation === 'cis' ? refHigh0 === refHigh1 : refHigh0 !== refHigh1;
-  return cis ? 'Z' : 'E';
+/**
+ * E/Z from which ends' higher ligands are the reference ligands and the input's cis/trans relation; 'e'/'z'
+ * when Rule 5 ranked exactly one end (the descriptor then rests on enantiomorphic ligands).
+ */
+export function ezLabel(e: DoubleBondStereo, end0: { refHigh: boolean; rule5: boolean }, end1: { refHigh: boolean; rule5: boolean }): CipLabel {
+  const cis = e.relation === 'cis' ? end0.refHigh === end1.refHigh : end0.refHigh !== end1.refHigh;
+  const lower = end0.rule5 !== end1.rule5;
+  return cis ? (lower ? 'z' : 'Z') : lower ? 'e' : 'E';
 }
 
 function doubleBondLabel(rk: Ranker, node: CipNode, e: DoubleBondStereo): CipLabel | null {
@@ -76,9 +89,9 @@ function doubleBondLabel(rk: Ranker, node: CipNode, e: DoubleBondStereo): CipLab
   if (node.parent !== null && node.parent.atom === other && !node.parent.dup) partner = node.parent;
   else for (const k of dg.kids(node)) if (k.atom === other && !k.dup) partner = k;
   if (partner === null) return null;
-  const here = refIsHigher(rk, node, endBranches(dg, node, null, other), e.refs[i]);
+  const here = endRank(rk, node, endBranches(dg, node, null, other), e.refs[i]);
   if (here === null) return null;
-  const there = refIsHigher(rk, partner, endBranches(dg, partner, null, node.atom), e.refs[1 - i]);
+  const there = endRank(rk, partner, endBranches(dg, partner, null, node.atom), e.refs[1 - i]);
   if (there === null) return null;
   const label = i === 0 ? ezLabel(e, here, there) : ezLabel(e, there, here);
   if (partner.aux === undefined) partner.aux = label;
@@ -98,7 +111,7 @@ export function auxFor(dg: Digraph): (rk: Ranker) => (node: CipNode) => CipLabel
       const b = g.bondAt[node.atom];
       if (t >= 0 && t !== dg.rootElement) {
         label = tetrahedralLabel(rk, node, g.s.stereo[t] as TetrahedralStereo);
-      } else if (b >= 0 && b !== dg.rootElement) {
+      } else if (b >= 0 && b !== dg.rootElement && !g.ringFixed[b]) {
         label = doubleBondLabel(rk, node, g.s.stereo[b] as DoubleBondStereo);
       }
       node.auxBusy = false;

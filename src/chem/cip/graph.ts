@@ -2,7 +2,7 @@
  * The molecular graph as the CIP labeler sees it: neighbours with bond orders, atomic numbers, the mass each atom
  * carries for Rule 2, and which stereo element sits on which atom or bond. Built once per structure.
  */
-import type { Structure } from '../types.js';
+import type { StereoElement, Structure } from '../types.js';
 import { averageMass } from './masses.js';
 import { perceiveMancude, type Mancude } from './mancude.js';
 
@@ -31,6 +31,8 @@ export interface CipGraph {
   axialAt: number[];
   /** Mancude ring bonds and the mean atomic number of each mancude atom's duplicate (P-92.1.4.4). */
   mancude: Mancude;
+  /** Per stereo element: its geometry is fixed by a small ring, so it is no stereogenic unit. */
+  ringFixed: boolean[];
   hasBondStereo: boolean;
   /** Number of stereo elements: when it is 1, Rules 3-5 cannot separate anything. */
   stereoCount: number;
@@ -76,7 +78,7 @@ export function buildGraph(s: Structure): CipGraph {
       for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
     }
   });
-  return {
+  const g: CipGraph = {
     s,
     n,
     z: s.atoms.map((a) => a.atomicNumber),
@@ -91,7 +93,28 @@ export function buildGraph(s: Structure): CipGraph {
     mancude: perceiveMancude(s, nbr, ord),
     hasBondStereo,
     stereoCount: s.stereo.length,
+    ringFixed: [],
   };
+  g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
+  g.hasBondStereo = s.stereo.some((e, i) => e.kind === 'double-bond' && !g.ringFixed[i]);
+  bondAt.fill(-1);
+  s.stereo.forEach((e, i) => {
+    if (e.kind === 'double-bond' && !g.ringFixed[i]) for (const end of e.ends) if (bondAt[end] < 0) bondAt[end] = i;
+  });
+  return g;
+}
+
+/**
+ * Geometry that a small ring fixes is not a stereogenic unit: a double bond in a ring of fewer than 8 atoms
+ * (only the cis form exists), an axis bond inside a ring (no rotation about it). Common practice, no source.
+ */
+function fixedByRing(g: CipGraph, e: StereoElement): boolean {
+  if (e.kind === 'double-bond') {
+    const [u, v] = e.ends;
+    return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
+  }
+  if (e.kind === 'axial' && e.subtype === 'biaryl') return ringSizeThrough(g, e.ends[0], e.ends[1], 64) > 0;
+  return false;
 }
 
 export function bondOrder(g: CipGraph, a: number, b: number): number {

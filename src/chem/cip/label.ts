@@ -7,8 +7,8 @@
 import type { CipLabel } from '../facts.js';
 import type { AxialStereo, DoubleBondStereo, StereoElement, TetrahedralStereo } from '../types.js';
 import { Digraph } from './digraph.js';
-import { ringSizeThrough, type CipGraph } from './graph.js';
-import { endBranches, ezLabel, ligandBranch, newRanker, refIsHigher, tetrahedralLabel } from './aux.js';
+import type { CipGraph } from './graph.js';
+import { endBranches, ezLabel, ligandBranch, newRanker, endRank, tetrahedralLabel } from './aux.js';
 import { handedness, rankLigands } from './rank.js';
 import { RULE_5, RULE_6 } from './rules.js';
 import type { Ranker } from './compare.js';
@@ -55,12 +55,12 @@ function tiedTetrahedral(g: CipGraph, index: number, e: TetrahedralStereo): numb
 
 function doubleBond(g: CipGraph, index: number, e: DoubleBondStereo, ref: number): CipLabel | null {
   const level = ref >= 0 ? RULE_6 : RULE_5;
-  const high: boolean[] = [];
+  const high: { refHigh: boolean; rule5: boolean }[] = [];
   for (let i = 0; i < 2; i++) {
     const end = e.ends[i];
     const excl = towardOther(g, end, e.ends[1 - i]);
     const rk = ranker(g, end, index, ref);
-    const h = refIsHigher(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level);
+    const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level);
     if (h === null) return null;
     high.push(h);
   }
@@ -111,22 +111,9 @@ function rule6Candidates(g: CipGraph, index: number, e: StereoElement): number[]
   return e.ligands.filter((l) => l >= 0);
 }
 
-/**
- * Geometry that a small ring fixes is not a stereogenic unit: a double bond in a ring of fewer than 8 atoms
- * (only the cis form exists), an axis bond inside a ring (no rotation about it). Common practice, no source.
- */
-function fixedByRing(g: CipGraph, e: StereoElement): boolean {
-  if (e.kind === 'double-bond') {
-    const [u, v] = e.ends;
-    return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
-  }
-  if (e.kind === 'axial' && e.subtype === 'biaryl') return ringSizeThrough(g, e.ends[0], e.ends[1], 64) > 0;
-  return false;
-}
-
 export function labelElement(g: CipGraph, index: number): CipLabel | null {
   const e = g.s.stereo[index];
-  if (fixedByRing(g, e)) return null;
+  if (g.ringFixed[index]) return null;
   const plain = labelWith(g, index, e, -1);
   if (plain !== null) return plain;
   const found = new Set<CipLabel>();

@@ -12,16 +12,13 @@ export interface Ranking {
   order: number[];
   /** Some neighbours in `order` tie under every rule applied. */
   tied: boolean;
-  /** Rule 5 ordered an odd number of pairs: the unit is pseudoasymmetric (its descriptor is lower-case). */
+  /** The mirror image ranks the ligands by an odd permutation of this order: pseudoasymmetric (lower-case). */
   pseudo: boolean;
   /** tieWithPrev[i]: order[i] ties with order[i-1]. */
   tieWithPrev: boolean[];
 }
 
-/** Rank the branches `ligands` of `centre` (each explored away from `centre`) under rules up to `level`. */
-export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], level: number): Ranking {
-  const order = ligands.map((_, i) => i);
-  const cmp = (a: number, b: number): number => rk.compareUpTo(level, ligands[a], centre, ligands[b], centre);
+function insertionSort(order: number[], cmp: (a: number, b: number) => number): number[] {
   for (let i = 1; i < order.length; i++) {
     const v = order[i];
     let j = i - 1;
@@ -31,18 +28,37 @@ export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], lev
     }
     order[j + 1] = v;
   }
-  let tied = false;
-  let rule5Pairs = 0;
-  const tieWithPrev = order.map(() => false);
-  for (let i = 1; i < order.length; i++) {
-    const c = cmp(order[i - 1], order[i]);
-    if (c === 0) {
-      tied = true;
-      tieWithPrev[i] = true;
-    } else if (Math.abs(c) - 1 === RULE_5) rule5Pairs++;
+  return order;
+}
+
+/**
+ * Rank the branches `ligands` of `centre` (each explored away from `centre`) under rules up to `level`.
+ * Pseudoasymmetry: reflection inverts every chiral descriptor, which reverses exactly the comparisons that Rule 5
+ * decides; when the mirror-image ranking is an odd permutation of this one the descriptor does not change on
+ * reflection, so the unit is pseudoasymmetric (P-92.1.1 / P-93.5.1.4, r/s).
+ */
+export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], level: number): Ranking {
+  const k = ligands.length;
+  const m: number[][] = ligands.map(() => new Array<number>(k).fill(0));
+  for (let i = 0; i < k; i++) {
+    for (let j = i + 1; j < k; j++) {
+      const c = rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
+      m[i][j] = c;
+      m[j][i] = -c;
+    }
   }
-  // Reflection swaps every pair that Rule 5 orders: an odd number of swaps keeps the descriptor (pseudoasymmetry)
-  return { order, tied, pseudo: rule5Pairs % 2 === 1, tieWithPrev };
+  const order = insertionSort(ligands.map((_, i) => i), (a, b) => m[a][b]);
+  const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
+  const tied = tieWithPrev.some((t) => t);
+  let pseudo = false;
+  if (!tied && m.some((row) => row.some((c) => Math.abs(c) - 1 === RULE_5))) {
+    const mirrored = (a: number, b: number): number => (Math.abs(m[a][b]) - 1 === RULE_5 ? -m[a][b] : m[a][b]);
+    const mirror = insertionSort(ligands.map((_, i) => i), mirrored);
+    const pos = new Array<number>(k);
+    order.forEach((li, p) => (pos[li] = p));
+    pseudo = !isEvenPermutation(mirror.map((li) => pos[li]));
+  }
+  return { order, tied, pseudo, tieWithPrev };
 }
 
 function isEvenPermutation(p: number[]): boolean {

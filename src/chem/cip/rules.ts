@@ -43,7 +43,7 @@ export function rule2(n: CipNode): number {
 
 /** Rule 3 (P-92.4, Rule 3): seqcis ('Z') precedes seqtrans ('E'), which precedes a non-stereogenic bond. */
 export function rule3(label: CipLabel | null): number {
-  return label === 'Z' ? 2 : label === 'E' ? 1 : 0;
+  return label === 'Z' || label === 'z' ? 2 : label === 'E' || label === 'e' ? 1 : 0;
 }
 
 /**
@@ -72,7 +72,7 @@ export function rule6(n: CipNode, ref: number): number {
 
 /** Descriptor class for like/unlike pairing (P-92.5.2, Rule 4b): R, M and r, m are "like" each other. */
 export function likeClass(label: CipLabel): number {
-  return label === 'R' || label === 'M' || label === 'r' || label === 'm' ? 1 : label === 'Z' || label === 'E' ? 0 : 2;
+  return label === 'R' || label === 'M' || label === 'r' || label === 'm' ? 1 : label === 'S' || label === 'P' || label === 's' || label === 'p' ? 2 : 0;
 }
 
 export function isChiralLabel(label: CipLabel | null): boolean {
