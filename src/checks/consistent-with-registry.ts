@@ -3,6 +3,7 @@
  * again, the enantiomer of a registered compound (with the rotation signs compared), and the same structure
  * registered under a different form.
  */
+import type { StructureFacts } from '../chem/facts.js';
 import type { Rotation, StereoForm } from '../registry/types.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding, RegistryEntry } from './types.js';
 import { conditions } from './rotation-consistent.js';
@@ -16,6 +17,10 @@ const messages = {
     'This structure is identical to {otherId} ({otherFile}), but {otherId} is registered as {otherForm} and this ' +
     'record declares {form}. The same drawn structure cannot be both; decide which form is right and correct the ' +
     'other record.',
+  'same-structure-other-purity':
+    'This structure is identical to {otherId} ({otherFile}), registered as {otherForm}; this record declares ' +
+    '{form}. The same enantiomer at another enantiomeric purity: register it as a batch of {otherId} if your SOP ' +
+    'allows, or keep it separate on purpose.',
   'enantiomer-registered':
     'This compound is the enantiomer of {otherId} ({otherFile}{otherName}): {explanation}. That is fine if the ' +
     'enantiomer is meant; confirm that the configuration was not drawn inverted by mistake.',
@@ -57,6 +62,18 @@ function measuredAlike(a: Rotation, b: Rotation): boolean {
   return true;
 }
 
+/**
+ * What the drawing stands for: one stereoisomer as drawn, the drawn one and its mirror image together (AND
+ * groups), or one of the two, unknown which (OR groups / no chiral flag). Drawings of different kinds are
+ * different substances even when the drawn configurations coincide, so they are not compared.
+ */
+function drawingKind(f: StructureFacts): 'as-drawn' | 'racemic' | 'relative' {
+  const m = f.enhanced.meaning;
+  if (m === 'racemic' || m === 'mixture') return 'racemic';
+  if (m === 'relative') return 'relative';
+  return 'as-drawn';
+}
+
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
   const f = ctx.main.facts;
@@ -80,12 +97,17 @@ function run(ctx: CheckContext): CheckOutcome {
   };
   let compared = 0;
   for (const other of ctx.registry.withConstitution(f.constitutionKey)) {
-    if (isSelf(ctx, other) || !other.main.structure) continue;
+    const otherFacts = other.main.facts;
+    if (isSelf(ctx, other) || !other.main.structure || !otherFacts) continue;
+    if (drawingKind(otherFacts) !== drawingKind(f)) continue;
     compared++;
     const rel = ctx.engine.relate(structure, other.main.structure);
     if (rel.relation === 'identical') {
-      if (other.record.stereo.form === form) add('already-registered', other, {}, 'warning');
-      else add('same-structure-different-form', other, {});
+      const otherForm = other.record.stereo.form;
+      if (otherForm === form) add('already-registered', other, {}, 'warning');
+      else if (ENANTIOPURE.includes(form) && ENANTIOPURE.includes(otherForm)) {
+        add('same-structure-other-purity', other, {}, 'note');
+      } else add('same-structure-different-form', other, {});
     } else if (rel.relation === 'enantiomers' && f.chiral === true) {
       add('enantiomer-registered', other, { explanation: rel.explanation }, 'note');
       const otherForm = other.record.stereo.form;
@@ -128,7 +150,8 @@ export const consistentWithRegistry: CheckModule = {
     'record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: ' +
     'measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in ' +
     'size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). Only records under review are ' +
-    'checked, each against the other records in the checkout.',
+    'checked, each against the other records in the checkout; a racemic drawing (AND group) is compared only with ' +
+    'racemic drawings, a relative one (OR group) only with relative ones.',
   messages,
   run,
 };

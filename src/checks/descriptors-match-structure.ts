@@ -28,6 +28,10 @@ const messages = {
     '{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ' +
     '({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; ' +
     'atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.',
+  'descriptors-cite-undefined-units':
+    '{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} ' +
+    'stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the ' +
+    'configurations the descriptors state (for a racemate: one enantiomer with an AND group).',
   'descriptors-incomplete':
     '{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every ' +
     'stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.',
@@ -62,7 +66,7 @@ function compareOne(
   for (const r of parsed.remarks) add('descriptor-remark', { remark: r }, 'note');
   if (parsed.fischer && parsed.items.length === 0) add('fischer-not-compared', { fischer: parsed.fischer }, 'note');
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
-  const cmp = compareDescriptors(parsed, facts.units);
+  const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
   const computed = labelList(facts.units);
   if (cmp.method === 'per-locant') {
     if (cmp.mismatches.length) {
@@ -80,6 +84,16 @@ function compareOne(
     return cmp;
   }
   if (parsed.embeddedDescriptors) return cmp; // the name cites more units further in; counts would mislead
+  const definedCount = Object.values(cmp.computedCounts).reduce((a, b) => a + b, 0);
+  if (!cmp.agrees && facts.undefined > 0 && parsed.items.length > definedCount) {
+    // A racemate drawn without stereo marks is common practice; other claims should draw what they state.
+    add(
+      'descriptors-cite-undefined-units',
+      { undefinedCount: facts.undefined, declaredCount: parsed.items.length, definedCount, mode: parsed.mode },
+      parsed.mode === 'racemic' ? 'note' : undefined,
+    );
+    return cmp;
+  }
   if (!cmp.agrees) {
     const subset = (d: Record<string, number>): boolean =>
       Object.entries(d).every(([k, v]) => v <= (cmp.computedCounts[k] ?? 0));
@@ -107,9 +121,16 @@ function compareOne(
   return cmp;
 }
 
+/** The same configurations: locant by locant when both cite locants, else the same labels in any order. */
 function sameItems(a: ParsedDescriptors, b: ParsedDescriptors): boolean {
+  const withLocants = a.items.every((i) => i.locant !== null) && b.items.every((i) => i.locant !== null);
   const k = (p: ParsedDescriptors): string =>
-    p.mode + '|' + p.items.map((i) => `${i.locant ?? ''}${i.pair ?? i.label}${i.relativeStar ? '*' : ''}`).sort().join(',');
+    p.mode +
+    '|' +
+    p.items
+      .map((i) => `${withLocants ? i.locant : ''}${i.pair ?? i.label}${i.relativeStar ? '*' : ''}`)
+      .sort()
+      .join(',');
   return k(a) === k(b);
 }
 

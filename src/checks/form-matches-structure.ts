@@ -9,7 +9,7 @@ import { mixtureFindings, mixtureMessages } from './form-mixtures.js';
 
 const messages = {
   'achiral-but-chiral':
-    'Declared achiral, but the structure is chiral: it defines {units} and its mirror image is a different ' +
+    'Declared achiral, but the structure is chiral: it has {allUnits} and its mirror image is a different ' +
     'molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.',
   'achiral-but-open':
     'Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the ' +
@@ -60,6 +60,7 @@ function evidence(f: StructureFacts) {
   const undef = undefinedUnits(f);
   return {
     units: unitSummary(defined),
+    allUnits: unitSummary(f.units) + (undef.length ? ` (${undef.length} undefined)` : ''),
     labels: defined.map((u) => `${u.label ?? '?'}`).join(',') || 'none',
     mirror: f.mirror.explanation || (f.chiral ? 'not superimposable on its mirror image' : 'superimposable'),
     undefinedCount: undef.length,

@@ -369,9 +369,13 @@ function invertCounts(c: Record<string, number>): Record<string, number> {
  * Compares parsed descriptors with the computed units. Per locant when every cited locant is a plain number and
  * the structure carries atom-map numbers on its stereo units; otherwise by counts. Racemic and relative
  * descriptors are compared up to overall inversion (P-93.1.3: they describe the drawn stereoisomer or its
- * mirror image).
+ * mirror image); so are the descriptors of an achiral structure (`options.achiral`), which is its own mirror image.
  */
-export function compareDescriptors(parsed: ParsedDescriptors, units: readonly StereoUnitFact[]): DescriptorComparison {
+export function compareDescriptors(
+  parsed: ParsedDescriptors,
+  units: readonly StereoUnitFact[],
+  options: { achiral?: boolean } = {},
+): DescriptorComparison {
   const defined = units.filter((u) => u.defined && u.label !== null);
   const result: DescriptorComparison = {
     method: 'none',
@@ -389,7 +393,9 @@ export function compareDescriptors(parsed: ParsedDescriptors, units: readonly St
     result.whyNotPerLocant = 'the descriptor cites no configurations';
     return result;
   }
-  const mayInvert = parsed.mode === 'racemic' || parsed.mode === 'relative';
+  // An achiral (meso) structure is its own mirror image: (2R,3S) and (2S,3R) name the same compound, numbered
+  // from either end.
+  const mayInvert = parsed.mode === 'racemic' || parsed.mode === 'relative' || options.achiral === true;
   const mapped = units.some((u) => unitLocants(u).length > 0);
   const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
   if (mapped && numeric) {

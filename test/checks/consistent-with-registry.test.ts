@@ -65,3 +65,21 @@ describe('consistent-with-registry', () => {
     expect(runCheck(check, c).findings).toEqual([]);
   });
 });
+
+describe('consistent-with-registry: purity', () => {
+  it('the same enantiomer at another purity is a note, not a conflict', () => {
+    const o = runCheck(check, setup('identical', mine({ form: 'enantioenriched', ee: 80 }), theirs()));
+    expect(o.findings).toMatchObject([{ messageId: 'same-structure-other-purity', severity: 'note' }]);
+  });
+});
+
+describe('consistent-with-registry: what the drawings stand for', () => {
+  it('does not compare a racemic (AND group) drawing with an absolute one', () => {
+    const me = mine({ form: 'racemate' });
+    const selfRead = read(chiralFacts([centre(7, 'S')], { enhanced: { groups: [{ type: 'and', id: 1, atoms: [7] }], meaning: 'racemic' } }), 'me');
+    const other = theirs();
+    const entries = [entry(me, selfRead, 'compounds/LX-00020.yml', true), entry(other, read(chiralFacts([centre(7, 'S')]), 'other'), 'compounds/LX-00019.yml')];
+    const c = ctx({ record: me, main: selfRead, entries, relations: { 'me|other': 'identical' }, file: 'compounds/LX-00020.yml' });
+    expect(runCheck(check, c).findings).toEqual([]);
+  });
+});

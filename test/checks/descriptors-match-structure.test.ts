@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { descriptorsMatchStructure as check } from '../../src/checks/descriptors-match-structure.js';
 import type { StructureFacts } from '../../src/chem/facts.js';
-import { centre, chiralFacts, ctx, facts, ids, read, record, runCheck } from './facts.js';
+import { centre, chiralFacts, ctx, facts, ids, read, record, runCheck, unit } from './facts.js';
 
 // Descriptor notation: IUPAC 2013 recommendations P-93.1.3 (R/S, RS/SR, rac-, rel-, R*), signs of rotation
 // (+)/(−)/(±) and meso as used in P-93; Fischer D/L are not CIP descriptors (P-93).
@@ -47,6 +47,18 @@ describe('descriptors-match-structure: labels', () => {
   it('flags a name that disagrees with the descriptor field', () => {
     const o = run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3R)' }, '(2S,3S)-tartaric acid');
     expect(ids(o)).toEqual(['name-and-descriptors-disagree']);
+  });
+  it('a name without locants agrees with a descriptor field with locants', () => {
+    const one = chiralFacts([centre(2, 'R', 2)]);
+    expect(run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(R)-(−)-butan-2-ol').findings).toEqual([]);
+    expect(ids(run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(S)-butan-2-ol'))).toEqual(['name-and-descriptors-disagree']);
+  });
+  it('descriptors on a flat drawing cannot be checked: a note for a racemate, an error otherwise', () => {
+    const flat = facts({ units: [unit({ atoms: [2], defined: false })], chiral: true, stereoisomers: { total: 2, chiral: 2, achiral: 0, pairs: 1, meso: 0, units: 1 } });
+    expect(run(flat, { form: 'racemate', descriptors: '(RS)' }).findings).toMatchObject([{ messageId: 'descriptors-cite-undefined-units', severity: 'note' }]);
+    const o = run(flat, { form: 'single-enantiomer', descriptors: '(R)' });
+    expect(ids(o)).toEqual(['descriptors-cite-undefined-units']);
+    expect(o.findings[0].severity).toBeUndefined();
   });
   it('relative descriptors agree up to inversion (P-93.1.3)', () => {
     const drawn = chiralFacts([centre(4, 'S', 1), centre(6, 'R', 2)]);

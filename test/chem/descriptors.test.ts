@@ -152,6 +152,14 @@ describe('compareDescriptors', () => {
     expect(compareDescriptors(parseDescriptors('(Sa)'), axis).agrees).toBe(false);
     expect(compareDescriptors(parseDescriptors('(M)'), axis).agrees).toBe(true);
   });
+  // meso-2,3-dibromobutane is (2R,3S) numbered from one end and (2S,3R) from the other (IUPAC Gold Book, meso):
+  // for an achiral structure the comparison allows overall inversion.
+  it('compares the descriptors of an achiral (meso) structure up to inversion', () => {
+    const meso = [centre(2, 'S', 2), centre(4, 'R', 3)];
+    expect(compareDescriptors(parseDescriptors('(2R,3S)'), meso).agrees).toBe(false);
+    expect(compareDescriptors(parseDescriptors('(2R,3S)'), meso, { achiral: true }).agrees).toBe(true);
+    expect(compareDescriptors(parseDescriptors('(2R,3R)'), meso, { achiral: true }).agrees).toBe(false);
+  });
   it('has nothing to compare for a descriptor without configurations', () => {
     expect(compareDescriptors(parseDescriptors('(+)'), tartaric).method).toBe('none');
   });
