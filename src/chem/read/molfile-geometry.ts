@@ -155,10 +155,34 @@ export function biarylCandidates(s: Structure, adj: Adjacency, ring: readonly bo
     if (oa === null) continue;
     const ob = sp2RingEnd(b.b, b.a);
     if (ob === null) continue;
-    // A ring bond is kept (bridged biaryls); geometry decides: a flat fused system gives no configuration.
+    // A ring bond is kept (bridged biaryls) unless it lies in a ring of at most six sp2 atoms: then it is a
+    // bond of a Kekulé aromatic ring, not an axis.
+    if (ring[k] && inSmallSp2Ring(s, adj, k)) continue;
     out.push([k, oa, ob]);
   }
   return out;
+}
+
+/** Is bond k on a cycle of at most six atoms that all have a double or aromatic bond? (BFS, depth-limited) */
+function inSmallSp2Ring(s: Structure, adj: Adjacency, k: number): boolean {
+  const sp2 = (i: number): boolean => adj.bnd[i]!.some((x) => s.bonds[x]!.order === 2 || s.bonds[x]!.aromatic);
+  const { a, b } = s.bonds[k]!;
+  let frontier = [a];
+  const seen = new Set([a]);
+  for (let depth = 1; depth <= 5; depth++) {
+    const next: number[] = [];
+    for (const v of frontier) {
+      for (let j = 0; j < adj.nbr[v]!.length; j++) {
+        const w = adj.nbr[v]![j]!;
+        if (adj.bnd[v]![j] === k || seen.has(w) || !sp2(w)) continue;
+        if (w === b) return true;
+        seen.add(w);
+        next.push(w);
+      }
+    }
+    frontier = next;
+  }
+  return false;
 }
 
 export { IMPLICIT_H, LONE_PAIR };

@@ -5,9 +5,12 @@
  * Tetrahedral centres. Every atom at the narrow end (bond.a) of a wedge or hash is read. Its neighbours become
  * points (unit 2D bond vector, z = +1 for a wedge starting at the centre, -1 for a hash, 0 otherwise: a wedge
  * seen from its wide end does not count). A three-neighbour centre gets its fourth ligand (implicit H, lone
- * pair) at minus the sum of the three bond vectors, where a real tetrahedron puts it. The sign of the signed
- * volume of the four points gives the winding; a volume near zero (e.g. a wedge and a hash drawn in one
- * straight line, overlapping atoms) is ambiguous: no configuration, a warning. A wavy bond ('either') at its
+ * pair) at minus the sum of the three bond vectors, where a real tetrahedron puts it. Each wedged bond is read
+ * on its own (that bond lifted, the others plain): the sign of the signed volume of the four points gives the
+ * winding; if that is flat (a T-shape with the wedge on its stem) the plain bonds lean slightly away from the
+ * wedge (z = -0.5 z_wedge) and it is read again. All readings must agree: two adjacent wedges of one kind, or
+ * a wedge and a hash in one straight line, contradict each other (no projection of a tetrahedron looks like
+ * that) and give no configuration and a warning; so does a drawing where no reading fixes anything. A wavy bond ('either') at its
  * narrow end leaves the atom explicitly undefined.
  *
  * Double bonds. For each non-aromatic double bond (or odd cumulene) with a substituent on each end, the side of
@@ -95,29 +98,55 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
       return null;
     }
     const pc = xy(c);
-    const pts: Vec[] = [];
+    const flat: Vec[] = [];
+    const zs: number[] = [];
     for (let j = 0; j < deg; j++) {
       const u = unit([...sub2(xy(ns[j]!), pc), 0] as Vec);
       if (u === null) {
         warn('stereo-ambiguous-wedge', `${label}: a neighbour is drawn on top of it; configuration not read`, c);
         return null;
       }
-      u[2] = zFrom(c, adj.bnd[c]![j]!);
-      pts.push(u);
+      flat.push(u);
+      zs.push(zFrom(c, adj.bnd[c]![j]!));
     }
     const ligands = [...ns];
-    if (fourth !== null) {
-      const sum: Vec = [0, 0, 0];
-      for (const p of pts) for (let d = 0; d < 3; d++) sum[d]! -= p[d]!;
-      pts.push(unit(sum) ?? sum);
-      ligands.push(fourth);
+    if (fourth !== null) ligands.push(fourth);
+    // One reading per wedged bond, the others taken as plain; they must agree.
+    let sign = 0;
+    for (let w = 0; w < deg; w++) {
+      if (zs[w] === 0) continue;
+      const v = reading(flat, w, zs[w]!, fourth !== null);
+      if (v === 0) continue;
+      if (sign !== 0 && v !== sign) {
+        warn('stereo-conflicting-wedges', `${label}: its wedges, read one at a time, imply opposite configurations; configuration not read`, c);
+        return null;
+      }
+      sign = v;
     }
-    const vol = signedVolume(pts);
-    if (Math.abs(vol) < MIN_VOLUME) {
+    if (sign === 0) {
       warn('stereo-ambiguous-wedge', `${label}: the wedges and bond directions do not fix a configuration`, c);
       return null;
     }
+    const vol = sign;
     return { kind: 'tetrahedral', centre: c, ligands: ligands as [number, number, number, number], winding: windingOf(vol) };
+  }
+
+  /**
+   * Sign of the signed volume (-1, +1; 0 = flat) with only bond w lifted by z. Plain bonds lie in the plane;
+   * if that is flat (a T-shape with the wedge on its stem), they lean slightly away from the wedge.
+   */
+  function reading(flat: Vec[], w: number, z: number, addFourth: boolean): number {
+    for (const plainZ of [0, -0.5 * z]) {
+      const pts: Vec[] = flat.map((u, j) => [u[0], u[1], j === w ? z : plainZ]);
+      if (addFourth) {
+        const sum: Vec = [0, 0, 0];
+        for (const p of pts) for (let d = 0; d < 3; d++) sum[d] = sum[d]! - p[d]!;
+        pts.push(unit(sum) ?? sum);
+      }
+      const vol = signedVolume(pts);
+      if (Math.abs(vol) >= MIN_VOLUME) return Math.sign(vol);
+    }
+    return 0;
   }
 
   // Double bonds and cumulenes
