@@ -1,0 +1,201 @@
+/**
+ * describe(): a structure in, every stereo fact the engine knows out (facts.ts StructureFacts). Atom numbers in
+ * the facts are the 1-based input numbers.
+ */
+import type { CipLabel, ComponentFacts, EnhancedStereoFacts, StereoUnitFact, StructureFacts } from './facts.js';
+import { constitutionKey, molecularFormula } from './graph/index.js';
+import { countStereoisomers } from './isomers.js';
+import { labelUnits } from './labels.js';
+import { extractAtoms, normalize, type Normalized } from './normalize.js';
+import { perceive, type Perception } from './perceive.js';
+import { atomName } from './perceive-input.js';
+import type { State } from './perceive-units.js';
+import { chiralityOf, stereogenicIn, unitGroup, type Chirality, type UnitGroup } from './symmetry.js';
+import { mirrorFacts } from './symmetry-evidence.js';
+import { listStereoisomers } from './isomers-list.js';
+import type { Structure } from './types.js';
+import { writeSmiles } from './write/smiles.js';
+
+export interface DescribeOptions {
+  listIsomers?: boolean;
+  maxIsomers?: number;
+}
+
+/** Everything describe() and relate() compute once per structure. */
+export interface Analysis {
+  norm: Normalized;
+  p: Perception;
+  group: UnitGroup;
+  state: State;
+  defined: Uint8Array;
+  /** Units reported as stereo units (stereogenic in at least one completion of the drawing). */
+  reported: boolean[];
+  chirality: Chirality;
+}
+
+export function analyse(input: Structure): Analysis {
+  const norm = normalize(input);
+  const p = perceive(norm.structure);
+  const group = unitGroup(p);
+  const m = p.units.length;
+  const state = Uint8Array.from(p.units, (u) => u.bit);
+  const defined = Uint8Array.from(p.units, (u) => (u.defined ? 1 : 0));
+  const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
+  for (let k = 0; k < m; k++) {
+    if (!reported[k] && p.units[k].defined) {
+      p.remarks.push(
+        `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`,
+      );
+    }
+  }
+  if (!group.complete) p.remarks.push('symmetry search stopped at its limit: stereoisomer counts may be too high');
+  const chirality = chiralityOf(group, state, defined);
+  return { norm, p, group, state, defined, reported, chirality };
+}
+
+/** Is unit k stereogenic in some completion of the drawing? (Exact up to 2^10 completions, else assumed.) */
+function stereogenicSomewhere(g: UnitGroup, x: State, defined: Uint8Array, k: number): boolean {
+  if (!g.perms.some((perm) => perm[k] === k)) return true;
+  const open: number[] = [];
+  for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
+  if (open.length > 10) return true;
+  const y = Uint8Array.from(x);
+  for (let mask = 0; mask < 1 << open.length; mask++) {
+    for (let b = 0; b < open.length; b++) y[open[b]] = (mask >> b) & 1;
+    if (stereogenicIn(g, y, k)) return true;
+  }
+  return false;
+}
+
+export function unitName(p: Perception, k: number): string {
+  const u = p.units[k];
+  const s = p.structure;
+  return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
+}
+
+const unitKey = (atoms: number[]): string => [...atoms].sort((a, b) => a - b).join(',');
+
+export function describe(input: Structure, opts: DescribeOptions = {}): StructureFacts {
+  const a = analyse(input);
+  const { p, group } = a;
+  const s = p.structure;
+  const labels = new Map<string, CipLabel>();
+  for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
+
+  const units = unitFacts(a, labels);
+  const stereoisomers = countStereoisomers(group, p.units.length);
+  const chiral = a.chirality.chiral;
+  const meso = chiral === null ? null : chiral === false && stereoisomers.chiral > 0;
+  const facts: StructureFacts = {
+    stereocenters: units
+      .filter((u) => u.kind === 'tetrahedral')
+      .map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
+    stereobonds: units
+      .filter((u) => u.kind !== 'tetrahedral')
+      .map((u) => ({ atoms: [u.atoms[0], u.atoms[1]] as [number, number], label: u.label, kind: u.kind, defined: u.defined })),
+    units,
+    chiral,
+    meso,
+    undefined: units.filter((u) => !u.defined).length,
+    stereoisomers,
+    mirror: mirrorFacts(a),
+    enhanced: enhancedFacts(a),
+    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({ atom: s.atoms[i].inputNumber, drawnWithStereo: true })),
+    components: componentFacts(a),
+    constitutionKey: constitutionKey(s),
+    formula: molecularFormula(s),
+    remarks: p.remarks.slice(),
+  };
+  if (p.invertibleNitrogens.length > 0 && units.length === 0) {
+    facts.remarks.push('the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre');
+  }
+  if (opts.listIsomers) facts.stereoisomerList = listStereoisomers(a, opts.maxIsomers ?? 64);
+  return facts;
+}
+
+function unitFacts(a: Analysis, labels: Map<string, CipLabel>): StereoUnitFact[] {
+  const { p, group, state } = a;
+  const s = p.structure;
+  const classIds = new Map<string, number>();
+  const groupOf = new Map<number, { type: 'abs' | 'and' | 'or'; id: number }>();
+  for (const g of s.groups) for (const x of g.atoms) groupOf.set(x, { type: g.type, id: g.id });
+  const fullyDefined = a.defined.every((d) => d === 1);
+  const out: StereoUnitFact[] = [];
+  p.units.forEach((u, k) => {
+    if (!a.reported[k]) return;
+    const ck = u.atoms.map((x) => p.classes[x]).sort((x, y) => x - y).join(',') + u.kind;
+    if (!classIds.has(ck)) classIds.set(ck, classIds.size);
+    const label = u.defined ? (labels.get(unitKey(u.atoms)) ?? null) : null;
+    let pseudo = label !== null && label === label.toLowerCase();
+    if (fullyDefined && u.mode === 'parity' && !pseudo) {
+      // reflection-invariant: an improper symmetry maps the unit onto itself (P-93.5.1.3, pseudoasymmetry)
+      pseudo = group.perms.some((perm, h) => perm[k] === k && mirrorFixed(group, h, state));
+    }
+    out.push({
+      kind: u.kind,
+      atoms: u.atoms.map((x) => s.atoms[x].inputNumber),
+      element: s.atoms[u.atoms[0]].element,
+      defined: u.defined,
+      label,
+      pseudoasymmetric: pseudo,
+      locants: u.atoms.map((x) => s.atoms[x].mapNumber),
+      group: groupOf.get(u.atoms[0]) ?? null,
+      equivalenceClass: classIds.get(ck)!,
+      component: p.componentOfAtom[u.atoms[0]],
+    });
+  });
+  return out;
+}
+
+/** (σ_h · M)(x) = x ? */
+function mirrorFixed(g: UnitGroup, h: number, x: State): boolean {
+  const perm = g.perms[h];
+  const flip = g.flips[h];
+  for (let i = 0; i < x.length; i++) if ((x[i] ^ flip[i] ^ g.reflect[i]) !== x[perm[i]]) return false;
+  return true;
+}
+
+function enhancedFacts(a: Analysis): EnhancedStereoFacts {
+  const s = a.p.structure;
+  const groups = s.groups.map((g) => ({ type: g.type, id: g.id, atoms: g.atoms.map((x) => s.atoms[x].inputNumber) }));
+  const definedParity = a.p.units.filter((u, k) => u.defined && u.mode === 'parity' && a.reported[k]);
+  if (definedParity.length === 0 && !a.p.units.some((u) => u.defined)) return { groups, meaning: 'none' };
+  if (definedParity.length === 0) return { groups, meaning: 'absolute' };
+  const member = new Map<number, string>();
+  for (const g of s.groups) for (const x of g.atoms) member.set(x, g.type === 'abs' ? 'abs' : `${g.type}${g.id}`);
+  const kinds = new Set(definedParity.map((u) => member.get(u.atoms[0]) ?? 'abs'));
+  if (s.groups.length === 0) return { groups, meaning: s.chiralFlag === false ? 'relative' : 'absolute' };
+  const list = [...kinds];
+  if (list.length === 1 && list[0] === 'abs') return { groups, meaning: 'absolute' };
+  if (list.length === 1 && list[0].startsWith('and')) return { groups, meaning: 'racemic' };
+  if (list.length === 1 && list[0].startsWith('or')) return { groups, meaning: 'relative' };
+  if (list.every((k) => k.startsWith('and'))) return { groups, meaning: 'mixture' };
+  return { groups, meaning: 'mixed' };
+}
+
+/** Index of the parent component: the largest component holding carbon (else the largest). */
+export function parentComponent(s: Structure, comps: number[][]): number {
+  const organic = (c: number[]): boolean => c.some((x) => s.atoms[x].atomicNumber === 6);
+  let parent = -1;
+  comps.forEach((c, k) => {
+    const better =
+      parent < 0 ||
+      (organic(c) && !organic(comps[parent])) ||
+      (organic(c) === organic(comps[parent]) && c.length > comps[parent].length);
+    if (better) parent = k;
+  });
+  return parent;
+}
+
+function componentFacts(a: Analysis): ComponentFacts[] {
+  const s = a.p.structure;
+  const comps = a.p.components;
+  const parent = parentComponent(s, comps);
+  return comps.map((c, k) => ({
+    index: k,
+    formula: molecularFormula(s, c),
+    heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
+    role: k === parent ? 'parent' : 'other',
+    smiles: writeSmiles(extractAtoms(s, c)),
+  }));
+}

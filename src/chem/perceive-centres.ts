@@ -1,0 +1,140 @@
+/**
+ * Which atoms can be tetrahedral stereocentres, judged from the constitution alone (ligand equivalence is
+ * decided later, in perceive.ts). The rules, element by element:
+ *
+ *   C, Si, Ge, Sn   four single-bonded σ-neighbours (hydrogens included), at most one H, neutral, no radical.
+ *   N+  / P+ / As+  four single-bonded heavy neighbours, no H (quaternary ammonium, N-oxides drawn N+–O−,
+ *                   phosphonium). Protonated amines ([NH+]) are not centres: proton exchange inverts them.
+ *   N (neutral)     three single-bonded heavy neighbours, no H, not aromatic, and either in a three-membered ring
+ *                   (aziridines invert slowly) or a bridgehead of a small bridged ring system (two rings of at
+ *                   most 8 atoms through N sharing at least three atoms, as in Tröger's base or quinuclidines).
+ *                   Any other such N is an ordinary, rapidly inverting amine (reported apart).
+ *   P, As (neutral) three single-bonded σ-neighbours (at most one H) with a lone pair (phosphines), or four
+ *                   σ-neighbours with exactly one double bond (phosphine oxides/sulfides, phosphates, P(V) esters).
+ *   S, Se           three σ-neighbours with exactly one double bond and no charge (sulfoxides, sulfinates,
+ *                   sulfinamides), three single bonds and charge +1 (sulfonium; sulfoxides drawn S+–O−),
+ *                   each with a lone pair; or four σ-neighbours with two double bonds (sulfoximines).
+ *
+ * Excluded everywhere: an atom carrying a terminal chalcogen double bond together with a terminal single-bonded
+ * chalcogen of the same element that bears H or a negative charge (R–S(=O)–O−, R2P(=O)OH): the two are one
+ * resonance / tautomer pair, so the "two ligands" are the same. Sources: the element rules are common practice
+ * (no single source); nitrogen inversion barriers: Eliel & Wilen, Stereochemistry of Organic Compounds (1994),
+ * ch. 8 (from memory).
+ */
+import type { Graph, RingInfo } from './graph/index.js';
+import type { Structure } from './types.js';
+import { hToken, lpToken } from './perceive-units.js';
+
+export type CentreVerdict =
+  | { kind: 'centre'; tokens: [number, number, number, number] }
+  | { kind: 'invertible-nitrogen' }
+  | null;
+
+export function tetrahedralCandidate(
+  s: Structure,
+  g: Graph,
+  rings: RingInfo,
+  aromaticBond: boolean[],
+  i: number,
+): CentreVerdict {
+  const atom = s.atoms[i];
+  const z = atom.atomicNumber;
+  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50) return null;
+  if (atom.radical !== 0 || atom.hCount > 1) return null;
+  const nb = g.nbrs[i];
+  const nbB = g.nbrBonds[i];
+  const heavy = nb.length;
+  if (heavy < 2 || heavy > 4) return null;
+  const h = atom.hCount;
+  const sigma = heavy + h;
+  if (sigma < 3 || sigma > 4) return null;
+  let doubles = 0;
+  for (let k = 0; k < nbB.length; k++) {
+    const b = s.bonds[nbB[k]];
+    if (aromaticBond[nbB[k]] || b.aromatic) return null;
+    if (b.order === 2) doubles++;
+    else if (b.order !== 1) return null;
+  }
+  const n = s.atoms.length;
+  const centre = (withLonePair: boolean): CentreVerdict => {
+    const t: number[] = Array.from(nb);
+    if (h === 1) t.push(hToken(n, i));
+    if (withLonePair) t.push(lpToken(n, i));
+    return t.length === 4 ? { kind: 'centre', tokens: [t[0], t[1], t[2], t[3]] } : null;
+  };
+  if (h > 1) return null;
+  const c = atom.charge;
+  switch (z) {
+    case 6:
+    case 14:
+    case 32:
+    case 50:
+      return c === 0 && sigma === 4 && doubles === 0 ? centre(false) : null;
+    case 7:
+      if (doubles > 0 || h > 0) return null;
+      if (c === 1 && heavy === 4) return centre(false);
+      if (c === 0 && heavy === 3) {
+        if (atom.aromatic) return null;
+        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i)) return centre(true);
+        return { kind: 'invertible-nitrogen' };
+      }
+      return null;
+    case 15:
+    case 33:
+      if (resonancePair(s, g, i)) return null;
+      if (c === 0 && doubles === 0 && sigma === 3) return centre(true);
+      if (c === 0 && doubles === 1 && sigma === 4 && h === 0) return centre(false);
+      if (c === 1 && doubles === 0 && sigma === 4 && h === 0) return centre(false);
+      return null;
+    case 16:
+    case 34:
+      if (h > 0 || resonancePair(s, g, i)) return null;
+      if (c === 0 && doubles === 1 && heavy === 3) return centre(true);
+      if (c === 1 && doubles === 0 && heavy === 3) return centre(true);
+      if (c === 0 && doubles === 2 && heavy === 4) return centre(false);
+      return null;
+    default:
+      return null;
+  }
+}
+
+/** N in two SSSR rings of at most 8 atoms that share at least three atoms (a bridged, not merely fused, system). */
+function isSmallBridgehead(rings: RingInfo, i: number): boolean {
+  const mine = rings.rings.filter((r) => r.length <= 8 && r.includes(i));
+  for (let a = 0; a < mine.length; a++) {
+    for (let b = a + 1; b < mine.length; b++) {
+      const set = new Set(mine[a]);
+      let shared = 0;
+      for (const x of mine[b]) if (set.has(x)) shared++;
+      if (shared >= 3) return true;
+    }
+  }
+  // In a bridged bicycle any two SSSR rings through a bridgehead share it, the other bridgehead and a bridge.
+  return false;
+}
+
+/** Terminal X= together with terminal X–H or X− of the same element on atom i (one resonance pair). */
+function resonancePair(s: Structure, g: Graph, i: number): boolean {
+  const doubleEl = new Set<number>();
+  const singleEl = new Set<number>();
+  const nb = g.nbrs[i];
+  for (let k = 0; k < nb.length; k++) {
+    const x = s.atoms[nb[k]];
+    if (g.nbrs[nb[k]].length !== 1 || (x.atomicNumber !== 8 && x.atomicNumber !== 16 && x.atomicNumber !== 34))
+      continue;
+    const order = s.bonds[g.nbrBonds[i][k]].order;
+    if (order === 2) doubleEl.add(x.atomicNumber);
+    else if (order === 1 && (x.hCount > 0 || x.charge < 0)) singleEl.add(x.atomicNumber);
+  }
+  for (const e of doubleEl) if (singleEl.has(e)) return true;
+  // Charge-separated form: S+/P+ with a terminal O− and another terminal O− / OH of the same element.
+  if (s.atoms[i].charge > 0) {
+    let count = 0;
+    for (let k = 0; k < nb.length; k++) {
+      const x = s.atoms[nb[k]];
+      if (g.nbrs[nb[k]].length === 1 && x.atomicNumber === 8 && (x.charge < 0 || x.hCount > 0)) count++;
+    }
+    if (count >= 2) return true;
+  }
+  return false;
+}

@@ -1,0 +1,166 @@
+/**
+ * Perception: every potential stereogenic unit of a (normalized) structure and whether the input defines it.
+ *
+ * A candidate (perceive-centres.ts, perceive-bonds.ts) is kept when its ligands are constitutionally distinct,
+ * or when a pair of them is constitutionally equivalent but the branch behind that pair holds another unit
+ * (pseudoasymmetric centres such as C3 of 2,3,4-trihydroxyglutaric acid, "para" units such as C1/C4 of
+ * 1,4-dimethylcyclohexane). That second rule refers to the set being built, so it is applied to a fixed point
+ * from the optimistic side: start with every candidate, drop the unsupported ones, repeat until nothing changes.
+ * Whether such a unit is stereogenic in a given configuration is decided later by the symmetry group
+ * (symmetry.ts), not here.
+ */
+import { aromaticBonds, buildGraph, connectedComponents, equivalenceClasses, ringInfo } from './graph/index.js';
+import type { Graph, RingInfo } from './graph/index.js';
+import { IMPLICIT_H, type Structure } from './types.js';
+import { bondCandidates } from './perceive-bonds.js';
+import { tetrahedralCandidate } from './perceive-centres.js';
+import { hToken, lpToken, type PerceivedUnit } from './perceive-units.js';
+import { applyInputStereo } from './perceive-input.js';
+import { bridgeCouplings, type Coupling } from './perceive-bridges.js';
+
+export interface Perception {
+  structure: Structure;
+  graph: Graph;
+  rings: RingInfo;
+  aromaticBond: boolean[];
+  /** Constitutional equivalence class per atom. */
+  classes: Int32Array;
+  units: PerceivedUnit[];
+  /** atom -> index of the unit it is a centre / end of, or -1 */
+  unitOfAtom: Int32Array;
+  /** Ordinary amine nitrogens the input drew with a configuration (atom indices). */
+  invertibleNitrogens: number[];
+  /** Bridgehead pairs whose configurations are tied (x_a ⊕ x_b = c). */
+  couplings: Coupling[];
+  components: number[][];
+  componentOfAtom: Int32Array;
+  remarks: string[];
+}
+
+interface Draft extends PerceivedUnit {
+  /** Pairs of token positions holding equivalent ligands, each with the atom the pair hangs on. */
+  pairs: { anchor: number; token: number }[];
+}
+
+export function perceive(s: Structure): Perception {
+  const n = s.atoms.length;
+  const graph = buildGraph(s);
+  const rings = ringInfo(s, graph);
+  const aromaticBond = aromaticBonds(s, rings, graph);
+  const classes = equivalenceClasses(s, { aromatic: aromaticBond });
+  const tokenClass = (t: number): number => (t < n ? classes[t] : t < 2 * n ? -1 : -2);
+
+  const drafts: Draft[] = [];
+  const invertibleAll = new Set<number>();
+  for (let i = 0; i < n; i++) {
+    const v = tetrahedralCandidate(s, graph, rings, aromaticBond, i);
+    if (v === null) continue;
+    if (v.kind === 'invertible-nitrogen') {
+      invertibleAll.add(i);
+      continue;
+    }
+    const pairs = equalPairs(v.tokens, tokenClass, [i, i]);
+    if (pairs === null) continue;
+    drafts.push({ kind: 'tetrahedral', mode: 'parity', atoms: [i], tokens: v.tokens, defined: false, bit: 0,
+      equivalentPair: pairs.length > 0, pairs });
+  }
+  for (const c of bondCandidates(s, graph, rings, aromaticBond)) {
+    const pairs = equalPairs(c.tokens, tokenClass, c.ends, true);
+    if (pairs === null) continue;
+    drafts.push({ kind: c.kind, mode: c.mode, atoms: [...c.ends], tokens: c.tokens, defined: false, bit: 0,
+      equivalentPair: pairs.length > 0, pairs });
+  }
+  // Biaryl axes: only when the input defines them (a constitution alone does not say the rotation is hindered).
+  for (const e of s.stereo) {
+    if (e.kind !== 'axial' || e.subtype !== 'biaryl') continue;
+    const t = e.ligands.map((x, k) => (x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])));
+    drafts.push({ kind: 'biaryl', mode: 'parity', atoms: [...e.ends], tokens: [t[0], t[1], t[2], t[3]],
+      defined: false, bit: 0, equivalentPair: false, pairs: [] });
+  }
+
+  const kept = fixedPoint(drafts, graph, n);
+  kept.sort((a, b) => Math.min(...a.atoms) - Math.min(...b.atoms));
+  const units: PerceivedUnit[] = kept.map(({ pairs: _p, ...u }) => u);
+  const unitOfAtom = new Int32Array(n).fill(-1);
+  units.forEach((u, k) => {
+    for (const a of u.atoms) unitOfAtom[a] = k;
+  });
+
+  const components = connectedComponents(s, graph);
+  const componentOfAtom = new Int32Array(n);
+  components.forEach((c, k) => {
+    for (const a of c) componentOfAtom[a] = k;
+  });
+  const remarks: string[] = [];
+  const invertibleNitrogens = applyInputStereo(s, units, unitOfAtom, invertibleAll, remarks);
+  const couplings = bridgeCouplings(s, graph, rings, units);
+  for (const c of couplings) {
+    const [ua, ub] = [units[c.a], units[c.b]];
+    if (ua.defined && ub.defined && (ua.bit ^ ub.bit) !== c.c) {
+      const name = (u: PerceivedUnit): string => `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
+      remarks.push(
+        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are bridgeheads of a small bridged ring system, which fixes their relative configuration`,
+      );
+    }
+  }
+  return { structure: s, graph, rings, aromaticBond, classes, units, unitOfAtom, invertibleNitrogens, couplings,
+    components, componentOfAtom, remarks };
+}
+
+/**
+ * Positions of equivalent ligand pairs, or null when three or more ligands are equivalent (never stereogenic).
+ * For bond units the two ends are judged separately (tokens 0,1 on ends[0]; 2,3 on ends[1]).
+ */
+function equalPairs(
+  tokens: number[],
+  cls: (t: number) => number,
+  anchors: number[],
+  perEnd = false,
+): { anchor: number; token: number }[] | null {
+  const out: { anchor: number; token: number }[] = [];
+  if (perEnd) {
+    for (const k of [0, 2]) if (cls(tokens[k]) === cls(tokens[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens[k] });
+    return out;
+  }
+  const c = tokens.map(cls);
+  for (let i = 0; i < 4; i++) {
+    let same = 0;
+    for (let j = 0; j < 4; j++) if (c[j] === c[i]) same++;
+    if (same >= 3) return null;
+    if (same === 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens[i] });
+  }
+  return out;
+}
+
+function fixedPoint(drafts: Draft[], g: Graph, n: number): Draft[] {
+  let alive = drafts.slice();
+  for (;;) {
+    const unitAtom = new Int32Array(n).fill(-1);
+    alive.forEach((d, k) => {
+      for (const a of d.atoms) unitAtom[a] = k;
+    });
+    const next = alive.filter((d, k) =>
+      d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k)),
+    );
+    if (next.length === alive.length) return next;
+    alive = next;
+  }
+}
+
+function branchHoldsUnit(g: Graph, anchor: number, start: number, unitAtom: Int32Array, self: number): boolean {
+  const seen = new Uint8Array(g.n);
+  seen[anchor] = 1;
+  seen[start] = 1;
+  const stack = [start];
+  while (stack.length) {
+    const x = stack.pop()!;
+    if (unitAtom[x] >= 0 && unitAtom[x] !== self) return true;
+    for (const y of g.nbrs[x]) {
+      if (!seen[y]) {
+        seen[y] = 1;
+        stack.push(y);
+      }
+    }
+  }
+  return false;
+}

@@ -1,0 +1,151 @@
+/**
+ * relate(a, b): how two structures are related, as a chemist names it (IUPAC Gold Book terms: enantiomers,
+ * diastereoisomers, epimers, constitutional isomers).
+ *
+ * Salts and solvates: the parent components (largest component with carbon) are related; the other components
+ * are compared by constitution and listed apart. Same constitution: an isomorphism σ: A -> B carries A's
+ * configuration onto B's units (perceive-units.ts `rebase`); then A and B are identical when σ(x_A) lies in the
+ * orbit of x_B under B's symmetry group, enantiomers when its mirror image does, diastereomers otherwise.
+ */
+import type { CipLabel, DifferingUnit, RelationFacts } from './facts.js';
+import { constitutionKey, isomorphic, molecularFormula } from './graph/index.js';
+import { analyse, parentComponent, unitName, type Analysis } from './describe.js';
+import { labelUnits } from './labels.js';
+import { extractAtoms } from './normalize.js';
+import { mapToken, rebase } from './perceive-units.js';
+import { act, elementMapping, mirrorState, stereogenicIn } from './symmetry.js';
+import type { Structure } from './types.js';
+import { writeSmiles } from './write/smiles.js';
+
+interface Side {
+  whole: Analysis;
+  parent: Analysis;
+  others: { key: string; smiles: string }[];
+}
+
+function side(s: Structure): Side {
+  const whole = analyse(s);
+  const ns = whole.p.structure;
+  const comps = whole.p.components;
+  const k = parentComponent(ns, comps);
+  const parent = comps.length <= 1 ? whole : analyse(extractAtoms(ns, comps[k] ?? []));
+  const others = comps
+    .filter((_c, i) => i !== k)
+    .map((c) => {
+      const sub = extractAtoms(ns, c);
+      return { key: constitutionKey(sub), smiles: writeSmiles(sub) };
+    });
+  return { whole, parent, others };
+}
+
+function otherDifferences(a: Side, b: Side): { onlyInA: string[]; onlyInB: string[] } {
+  const left = b.others.slice();
+  const onlyInA: string[] = [];
+  for (const o of a.others) {
+    const j = left.findIndex((x) => x.key === o.key);
+    if (j >= 0) left.splice(j, 1);
+    else onlyInA.push(o.smiles);
+  }
+  return { onlyInA, onlyInB: left.map((x) => x.smiles) };
+}
+
+const labelMap = (a: Analysis): Map<string, CipLabel> => {
+  const m = new Map<string, CipLabel>();
+  for (const r of labelUnits(a.p.structure)) if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
+  return m;
+};
+
+export function relate(sa: Structure, sb: Structure): RelationFacts {
+  const A = side(sa);
+  const B = side(sb);
+  const otherComponents = otherDifferences(A, B);
+  const salt = otherComponents.onlyInA.length + otherComponents.onlyInB.length > 0 ? ' (parent components; the other components differ)' : '';
+  const pa = A.parent;
+  const pb = B.parent;
+  const base = { differingUnits: [] as DifferingUnit[], epimers: false, otherComponents };
+  const iso = isomorphic(pa.p.structure, pb.p.structure);
+  if (!iso) {
+    const same = molecularFormula(pa.p.structure) === molecularFormula(pb.p.structure);
+    return same
+      ? { ...base, relation: 'constitutional-isomers', explanation: `same molecular formula, different constitution${salt}` }
+      : { ...base, relation: 'different-compounds', explanation: `different molecular formulas${salt}` };
+  }
+  const nA = pa.p.structure.atoms.length;
+  const nB = pb.p.structure.atoms.length;
+  const mB = pb.p.units.length;
+  // A's configuration carried onto B's units.
+  const y = new Uint8Array(mB);
+  const yDefined = new Uint8Array(mB);
+  const fromA = new Int32Array(mB).fill(-1);
+  let open = false;
+  pa.p.units.forEach((u, i) => {
+    const j = pb.p.unitOfAtom[iso[u.atoms[0]]];
+    const bit = j < 0 ? -1 : rebase(pb.p.units[j], u.tokens.map((t) => mapToken(t, nA, iso, nB)), u.bit);
+    if (bit < 0) {
+      if (pa.reported[i]) open = true;
+      return;
+    }
+    y[j] = bit;
+    yDefined[j] = u.defined ? 1 : 0;
+    fromA[j] = i;
+  });
+  for (let j = 0; j < mB; j++) {
+    const relevant = pb.reported[j] || (fromA[j] >= 0 && pa.reported[fromA[j]]);
+    if (relevant && (!yDefined[j] || !pb.defined[j])) open = true;
+  }
+  if (open) {
+    return { ...base, relation: 'same-constitution',
+      explanation: `same constitution; undefined stereo leaves the relation open${salt}` };
+  }
+  const g = pb.group;
+  const xB = pb.state;
+  if (elementMapping(g, y, xB) >= 0) {
+    return { ...base, relation: 'identical', explanation: `the same stereoisomer${salt}` };
+  }
+  const labA = labelMap(pa);
+  const labB = labelMap(pb);
+  const unitFact = (j: number, iA: number): DifferingUnit => {
+    const ub = pb.p.units[j];
+    const ua = pa.p.units[iA];
+    const key = (xs: number[]): string => [...xs].sort((p, q) => p - q).join(',');
+    return {
+      kind: ub.kind,
+      atomsA: ua.atoms.map((x) => pa.p.structure.atoms[x].inputNumber),
+      atomsB: ub.atoms.map((x) => pb.p.structure.atoms[x].inputNumber),
+      labelA: labA.get(key(ua.atoms)) ?? null,
+      labelB: labB.get(key(ub.atoms)) ?? null,
+    };
+  };
+  if (elementMapping(g, mirrorState(g, y), xB) >= 0) {
+    const differingUnits: DifferingUnit[] = [];
+    for (let j = 0; j < mB; j++) {
+      if (pb.p.units[j].mode === 'parity' && stereogenicIn(g, xB, j) && fromA[j] >= 0) {
+        differingUnits.push(unitFact(j, fromA[j]));
+      }
+    }
+    return { ...base, relation: 'enantiomers', differingUnits, explanation: `mirror images that are not superimposable${salt}` };
+  }
+  // Diastereomers: name the units that differ, choosing B's symmetry image of A that differs least.
+  let best: number[] = [];
+  let bestH = 0;
+  for (let h = 0; h < g.perms.length; h++) {
+    const z = act(g, h, y);
+    const diff: number[] = [];
+    for (let j = 0; j < mB; j++) if (z[j] !== xB[j] && stereogenicIn(g, xB, j)) diff.push(j);
+    if (h === 0 || diff.length < best.length) {
+      best = diff;
+      bestH = h;
+    }
+  }
+  const perm = g.perms[bestH];
+  const aOf = new Int32Array(mB).fill(-1);
+  for (let j = 0; j < mB; j++) if (fromA[j] >= 0) aOf[perm[j]] = fromA[j];
+  const differingUnits = best.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
+  const epimers = differingUnits.length === 1 && differingUnits[0].kind === 'tetrahedral' &&
+    pb.p.units.filter((u, j) => u.mode === 'parity' && pb.reported[j]).length >= 2;
+  const names = best.map((j) => unitName(pb.p, j)).join(', ');
+  const explanation = epimers
+    ? `epimers: diastereomers differing only at ${names} (numbered as in B)${salt}`
+    : `diastereomers: configurations differ at ${names} (numbered as in B)${salt}`;
+  return { ...base, relation: 'diastereomers', differingUnits, epimers, explanation };
+}

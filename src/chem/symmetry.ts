@@ -1,0 +1,271 @@
+/**
+ * Symmetry of a stereo configuration: the group the constitutional automorphisms induce on the stereo units,
+ * the mirror image, and chirality.
+ *
+ * Each automorphism σ of the constitution maps unit i onto unit π(i) and carries its configuration along; stated
+ * against the reference ligands of π(i), the bit changes by the parity of the permutation σ induces on the
+ * ligand list (perceive-units.ts `rebase`). So σ acts on a state x ∈ {0,1}^units as a signed permutation:
+ * (σ·x)[π(i)] = x[i] ⊕ f(i). Reflection M flips every 'parity' unit and keeps cis/trans units; it commutes with
+ * the group. A fully defined configuration x is achiral iff M(x) lies in the orbit of x (some σ with σ·x = M(x));
+ * that σ·M⁻¹ is an improper symmetry, and the atoms it fixes are the evidence we print.
+ */
+import { automorphisms } from './graph/index.js';
+import { mapToken, rebase, type State } from './perceive-units.js';
+import type { Perception } from './perceive.js';
+import type { StereoElement, Structure } from './types.js';
+import type { Coupling } from './perceive-bridges.js';
+import { ParityUnion } from './symmetry-solve.js';
+
+export interface UnitGroup {
+  /** Distinct signed permutations of the units; element 0 is the identity. */
+  perms: Int32Array[];
+  flips: Uint8Array[];
+  /** One automorphism (atom map) realizing each element. */
+  atomMaps: Int32Array[];
+  /** 1 for 'parity' units (reflection flips them), 0 for cis/trans units. */
+  reflect: Uint8Array;
+  /** Bridgehead couplings: only states with x_a ⊕ x_b = c exist. */
+  couplings: Coupling[];
+  /** false when the automorphism search stopped at its limit (counts are then lower bounds of the symmetry). */
+  complete: boolean;
+}
+
+const MAX_GROUP = 20000;
+
+export function unitGroup(p: Perception): UnitGroup {
+  const { units, unitOfAtom } = p;
+  const n = p.structure.atoms.length;
+  const m = units.length;
+  const reflect = Uint8Array.from(units, (u) => (u.mode === 'parity' ? 1 : 0));
+  const id = new Int32Array(n);
+  for (let i = 0; i < n; i++) id[i] = i;
+  const group: UnitGroup = {
+    perms: [Int32Array.from(units, (_u, i) => i)],
+    flips: [new Uint8Array(m)],
+    atomMaps: [id],
+    reflect,
+    couplings: p.couplings,
+    complete: true,
+  };
+  if (m === 0 || trivialOnUnits(p)) return group;
+  const seen = new Set<string>([signature(group.perms[0], group.flips[0])]);
+  const key: number[] = [];
+  for (const u of units) key.push(...u.atoms);
+  const res = automorphisms(p.structure, {
+    key,
+    colour: p.classes,
+    maxResults: MAX_GROUP * 4,
+    onMapping: (map: Int32Array) => {
+      const perm = new Int32Array(m);
+      const flip = new Uint8Array(m);
+      for (let i = 0; i < m; i++) {
+        const u = units[i];
+        const j = unitOfAtom[map[u.atoms[0]]];
+        if (j < 0) return true; // does not preserve the unit set (a biaryl axis drawn on one side only)
+        const f = rebase(units[j], u.tokens.map((t) => mapToken(t, n, map)), 0);
+        if (f < 0) return true;
+        perm[i] = j;
+        flip[i] = f;
+      }
+      const sig = signature(perm, flip);
+      if (!seen.has(sig)) {
+        seen.add(sig);
+        group.perms.push(perm);
+        group.flips.push(flip);
+        group.atomMaps.push(Int32Array.from(map));
+      }
+      return group.perms.length < MAX_GROUP;
+    },
+  });
+  group.complete = res.complete && group.perms.length < MAX_GROUP;
+  return group;
+}
+
+/**
+ * Every automorphism fixes every unit and its ligands when each unit atom is alone in its equivalence class and
+ * no unit has equivalent ligands (refinement never separates equivalent atoms, so a singleton class is fixed):
+ * the induced group is trivial and the search can be skipped.
+ */
+function trivialOnUnits(p: Perception): boolean {
+  const size = new Map<number, number>();
+  for (let i = 0; i < p.classes.length; i++) size.set(p.classes[i], (size.get(p.classes[i]) ?? 0) + 1);
+  return p.units.every((u) => !u.equivalentPair && u.atoms.every((a) => size.get(p.classes[a]) === 1));
+}
+
+function signature(perm: Int32Array, flip: Uint8Array): string {
+  let s = '';
+  for (let i = 0; i < perm.length; i++) s += `${perm[i]}${flip[i] ? '-' : '+'},`;
+  return s;
+}
+
+/** Does the state satisfy every coupling (can it exist)? */
+export function feasible(g: UnitGroup, x: State): boolean {
+  for (const c of g.couplings) if ((x[c.a] ^ x[c.b]) !== c.c) return false;
+  return true;
+}
+
+/** σ_k · x (optionally composed with the reflection M). */
+export function act(g: UnitGroup, k: number, x: State, withMirror = false): State {
+  const perm = g.perms[k];
+  const flip = g.flips[k];
+  const out = new Uint8Array(x.length);
+  for (let i = 0; i < x.length; i++) out[perm[i]] = x[i] ^ flip[i] ^ (withMirror ? g.reflect[i] : 0);
+  return out;
+}
+
+export function mirrorState(g: UnitGroup, x: State): State {
+  return Uint8Array.from(x, (v, i) => v ^ g.reflect[i]);
+}
+
+export function sameState(a: State, b: State): boolean {
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+/** Index of a group element σ with σ·x = y, or -1. */
+export function elementMapping(g: UnitGroup, x: State, y: State): number {
+  outer: for (let k = 0; k < g.perms.length; k++) {
+    const perm = g.perms[k];
+    const flip = g.flips[k];
+    for (let i = 0; i < x.length; i++) if ((x[i] ^ flip[i]) !== y[perm[i]]) continue outer;
+    return k;
+  }
+  return -1;
+}
+
+/** Lexicographically smallest member of the orbit of x: a canonical name for the stereoisomer. */
+export function canonicalState(g: UnitGroup, x: State): State {
+  let best = x;
+  for (let k = 1; k < g.perms.length; k++) {
+    const y = act(g, k, x);
+    for (let i = 0; i < y.length; i++) {
+      if (y[i] !== best[i]) {
+        if (y[i] < best[i]) best = y;
+        break;
+      }
+    }
+  }
+  return best;
+}
+
+/**
+ * Can some completion y of the partial state (x on the `defined` units) satisfy (σ_k M)·y = y (mirror = true)
+ * or σ_k·y = y (mirror = false)? Checked cycle by cycle of π_k.
+ */
+export function fixedCompletionExists(g: UnitGroup, k: number, x: State, defined: Uint8Array, mirror: boolean): boolean {
+  const perm = g.perms[k];
+  const flip = g.flips[k];
+  const m = x.length;
+  if (g.couplings.length > 0) {
+    const u = solver(g, k, mirror, m + 1);
+    for (let i = 0; i < m; i++) if (defined[i]) u.add(i, m, x[i]);
+    return u.consistent;
+  }
+  const done = new Uint8Array(m);
+  for (let s = 0; s < m; s++) {
+    if (done[s]) continue;
+    // Walk the cycle; rel[i] = y[i] ⊕ y[s].
+    let i = s;
+    let rel = 0;
+    let want = -1; // required value of y[s], from a defined unit
+    do {
+      done[i] = 1;
+      if (defined[i]) {
+        const need = x[i] ^ rel;
+        if (want >= 0 && want !== need) return false;
+        want = need;
+      }
+      rel ^= flip[i] ^ (mirror ? g.reflect[i] : 0);
+      i = perm[i];
+    } while (i !== s);
+    if (rel !== 0) return false;
+  }
+  return true;
+}
+
+/** Number of states fixed by σ_k (or σ_k M): 2^cycles when every cycle is consistent, else 0. */
+export function fixedCount(g: UnitGroup, k: number, mirror: boolean): bigint {
+  const perm = g.perms[k];
+  const flip = g.flips[k];
+  const m = perm.length;
+  if (g.couplings.length > 0) {
+    const u = solver(g, k, mirror, m);
+    return u.consistent ? 1n << BigInt(u.classes) : 0n;
+  }
+  const done = new Uint8Array(m);
+  let cycles = 0n;
+  for (let s = 0; s < m; s++) {
+    if (done[s]) continue;
+    let i = s;
+    let rel = 0;
+    do {
+      done[i] = 1;
+      rel ^= flip[i] ^ (mirror ? g.reflect[i] : 0);
+      i = perm[i];
+    } while (i !== s);
+    if (rel !== 0) return 0n;
+    cycles++;
+  }
+  return 1n << cycles;
+}
+
+/** Constraints of "σ_k (M) fixes y" plus the couplings, on `size` nodes (units, and an optional zero node). */
+function solver(g: UnitGroup, k: number, mirror: boolean, size: number): ParityUnion {
+  const u = new ParityUnion(size);
+  const perm = g.perms[k];
+  const flip = g.flips[k];
+  for (let i = 0; i < perm.length; i++) u.add(i, perm[i], flip[i] ^ (mirror ? g.reflect[i] : 0));
+  for (const c of g.couplings) u.add(c.a, c.b, c.c);
+  return u;
+}
+
+export interface Chirality {
+  chiral: boolean | null;
+  /** Group element σ with σ·x = M(x) when x is fully defined and achiral; -1 otherwise. */
+  witness: number;
+}
+
+const MAX_ENUMERATED_UNDEFINED = 14;
+
+/** Chirality of the drawing: with undefined units, true if every completion is chiral, false if none is. */
+export function chiralityOf(g: UnitGroup, x: State, defined: Uint8Array): Chirality {
+  const m = x.length;
+  const open: number[] = [];
+  for (let i = 0; i < m; i++) if (!defined[i]) open.push(i);
+  if (open.length === 0) {
+    const k = elementMapping(g, x, mirrorState(g, x));
+    return { chiral: k < 0, witness: k };
+  }
+  let someAchiral = false;
+  for (let k = 0; k < g.perms.length && !someAchiral; k++) someAchiral = fixedCompletionExists(g, k, x, defined, true);
+  if (!someAchiral) return { chiral: true, witness: -1 };
+  if (!g.reflect.some((r) => r === 1)) return { chiral: false, witness: -1 };
+  if (open.length > MAX_ENUMERATED_UNDEFINED) return { chiral: null, witness: -1 };
+  const y = Uint8Array.from(x);
+  for (let mask = 0; mask < 1 << open.length; mask++) {
+    for (let b = 0; b < open.length; b++) y[open[b]] = (mask >> b) & 1;
+    if (!feasible(g, y)) continue;
+    if (elementMapping(g, y, mirrorState(g, y)) < 0) return { chiral: null, witness: -1 };
+  }
+  return { chiral: false, witness: -1 };
+}
+
+/**
+ * Is unit k stereogenic in the fully defined state x: does inverting it alone give another stereoisomer? A
+ * coupled bridgehead cannot be inverted alone, yet it is stereogenic (inverting the whole system gives another
+ * stereoisomer), so an infeasible inversion counts as stereogenic.
+ */
+export function stereogenicIn(g: UnitGroup, x: State, k: number): boolean {
+  const y = Uint8Array.from(x);
+  y[k] ^= 1;
+  if (!feasible(g, y)) return true;
+  return elementMapping(g, x, y) < 0;
+}
+
+/** The mirror image: tetrahedral and axial windings inverted, cis/trans kept. Groups and flags unchanged. */
+export function mirror(s: Structure): Structure {
+  const stereo = s.stereo.map((e): StereoElement =>
+    e.kind === 'double-bond' ? e : { ...e, winding: e.winding === '@' ? '@@' : '@' },
+  );
+  return { ...s, stereo };
+}

@@ -1,0 +1,26 @@
+/** What every CLI command provides. The command table (commands/index.ts) is a plain list of these. */
+export interface Io {
+  out: (text: string) => void;
+  err: (text: string) => void;
+  /** Reads a file as UTF-8; throws like fs.readFileSync when it cannot. */
+  readFile: (path: string) => string;
+  /** true when `path` names an existing file. */
+  isFile: (path: string) => boolean;
+  readStdin: () => string;
+}
+
+export interface Command {
+  name: string;
+  /** One line for `stereogate --help`. */
+  summary: string;
+  /** Full usage text for `stereogate <name> --help`. */
+  usage: string;
+  run: (args: string[], io: Io) => number | Promise<number>;
+}
+
+/** A usage error: main prints the message and the command's usage and exits with code 2. */
+export class UsageError extends Error {}
+
+export const EXIT_OK = 0;
+export const EXIT_BAD_INPUT = 1;
+export const EXIT_USAGE = 2;

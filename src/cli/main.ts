@@ -1,0 +1,58 @@
+/**
+ * stereogate command line: `stereogate <command> [arguments]`. The commands are data (commands/index.ts).
+ * Exit codes: 0 done, 1 a structure could not be read (or the command's own failure code), 2 usage error.
+ */
+import { existsSync, readFileSync, statSync } from 'node:fs';
+import { pathToFileURL } from 'node:url';
+import { commands } from './commands/index.js';
+import { EXIT_OK, EXIT_USAGE, UsageError, type Io } from './command.js';
+
+export const nodeIo: Io = {
+  out: (t) => process.stdout.write(t.endsWith('\n') ? t : `${t}\n`),
+  err: (t) => process.stderr.write(t.endsWith('\n') ? t : `${t}\n`),
+  readFile: (p) => readFileSync(p, 'utf8'),
+  isFile: (p) => p.length < 4096 && existsSync(p) && statSync(p).isFile(),
+  readStdin: () => readFileSync(0, 'utf8'),
+};
+
+function overview(): string {
+  const width = Math.max(...commands.map((c) => c.name.length));
+  return [
+    'Usage: stereogate <command> [arguments]',
+    '',
+    'Commands:',
+    ...commands.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
+    '',
+    'Run `stereogate <command> --help` for the arguments of one command.',
+  ].join('\n');
+}
+
+export async function run(argv: string[], io: Io = nodeIo): Promise<number> {
+  const [name, ...rest] = argv;
+  if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
+    (name === undefined ? io.err : io.out)(overview());
+    return name === undefined ? EXIT_USAGE : EXIT_OK;
+  }
+  const command = commands.find((c) => c.name === name);
+  if (!command) {
+    io.err(`stereogate: unknown command "${name}"\n\n${overview()}`);
+    return EXIT_USAGE;
+  }
+  if (rest.includes('--help') || rest.includes('-h')) {
+    io.out(command.usage);
+    return EXIT_OK;
+  }
+  try {
+    return await command.run(rest, io);
+  } catch (e) {
+    if (e instanceof UsageError) {
+      io.err(`stereogate ${command.name}: ${e.message}\n\n${command.usage}`);
+      return EXIT_USAGE;
+    }
+    throw e;
+  }
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  process.exitCode = await run(process.argv.slice(2));
+}
