@@ -52,7 +52,8 @@ export async function listChangedFiles(
   try {
     const path = `/repos/${enc(pr.owner)}/${enc(pr.repo)}/pulls/${pr.number}/files`;
     const listed = await client.paginate<ApiFile>(path);
-    const capped = listed.length >= API_FILE_CAP || (pr.changedFiles !== null && pr.changedFiles > listed.length);
+    const capped =
+      listed.length >= API_FILE_CAP || (pr.changedFiles !== null && pr.changedFiles > listed.length);
     if (!capped) {
       const files = listed.map((f) => ({
         path: f.filename,

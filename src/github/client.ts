@@ -12,7 +12,13 @@ export interface ClientOptions {
   /** Injected so tests need not wait; defaults to setTimeout. */
   sleep?: (ms: number) => Promise<void>;
   /** Told about each retry (the action logs it). */
-  onRetry?: (info: { method: string; path: string; status: number | null; delayMs: number; attempt: number }) => void;
+  onRetry?: (info: {
+    method: string;
+    path: string;
+    status: number | null;
+    delayMs: number;
+    attempt: number;
+  }) => void;
   /** Largest number of pages `paginate` follows (a guard against a server that never stops). */
   maxPages?: number;
 }
@@ -32,7 +38,9 @@ export class GitHubApiError extends Error {
     readonly status: number | null,
     readonly body: string,
   ) {
-    super(`GitHub API ${method} ${path} failed: ${status === null ? 'no answer' : `HTTP ${status}`}${apiMessage(body)}`);
+    super(
+      `GitHub API ${method} ${path} failed: ${status === null ? 'no answer' : `HTTP ${status}`}${apiMessage(body)}`,
+    );
     this.name = 'GitHubApiError';
   }
 }
@@ -51,7 +59,8 @@ export function createClient(options: ClientOptions): GitHubClient {
 
   function resolveUrl(path: string): URL {
     const url = /^https?:\/\//i.test(path) ? new URL(path) : new URL(path.replace(/^\/+/, ''), base);
-    if (url.origin !== base.origin) throw new Error(`refusing to send the token to another origin: ${url.origin}`);
+    if (url.origin !== base.origin)
+      throw new Error(`refusing to send the token to another origin: ${url.origin}`);
     return url;
   }
 
@@ -81,10 +90,17 @@ export function createClient(options: ClientOptions): GitHubClient {
         const data = (text === '' ? null : JSON.parse(text)) as T;
         return { status: response.status, data, headers: response.headers };
       }
-      const seen = response === null ? null : { status: response.status, headers: response.headers, bodyText: text };
+      const seen =
+        response === null ? null : { status: response.status, headers: response.headers, bodyText: text };
       const delay = retryDelayMs(seen, attempt, policy);
       if (delay === null) throw new GitHubApiError(method, url.pathname, response?.status ?? null, text);
-      options.onRetry?.({ method, path: url.pathname, status: response?.status ?? null, delayMs: delay, attempt });
+      options.onRetry?.({
+        method,
+        path: url.pathname,
+        status: response?.status ?? null,
+        delayMs: delay,
+        attempt,
+      });
       await sleep(delay);
     }
   }

@@ -33,8 +33,18 @@ const STATUS: Record<string, FileStatus> = {
 };
 
 /** `git diff --name-status base...head`: the files the head side changed since the merge base. */
-export async function gitChangedFiles(workspace: string, baseSha: string, headSha: string): Promise<ChangedFile[]> {
-  const out = await git(workspace, ['diff', '--name-status', '-M', '-z', `${checkSha(baseSha)}...${checkSha(headSha)}`]);
+export async function gitChangedFiles(
+  workspace: string,
+  baseSha: string,
+  headSha: string,
+): Promise<ChangedFile[]> {
+  const out = await git(workspace, [
+    'diff',
+    '--name-status',
+    '-M',
+    '-z',
+    `${checkSha(baseSha)}...${checkSha(headSha)}`,
+  ]);
   return parseNameStatus(out);
 }
 
@@ -42,7 +52,7 @@ export async function gitChangedFiles(workspace: string, baseSha: string, headSh
 export function parseNameStatus(out: string): ChangedFile[] {
   const parts = out.split('\0');
   const files: ChangedFile[] = [];
-  for (let i = 0; i < parts.length; ) {
+  for (let i = 0; i < parts.length;) {
     const code = parts[i++] ?? '';
     if (code === '') continue;
     const status = STATUS[code[0] ?? ''] ?? 'changed';
@@ -58,9 +68,20 @@ export function parseNameStatus(out: string): ChangedFile[] {
 }
 
 /** The unified diff of one file between the merge base and head (hunks only matter), or null on failure. */
-export async function gitPatch(workspace: string, baseSha: string, headSha: string, path: string): Promise<string | null> {
+export async function gitPatch(
+  workspace: string,
+  baseSha: string,
+  headSha: string,
+  path: string,
+): Promise<string | null> {
   try {
-    return await git(workspace, ['diff', '--unified=3', `${checkSha(baseSha)}...${checkSha(headSha)}`, '--', path]);
+    return await git(workspace, [
+      'diff',
+      '--unified=3',
+      `${checkSha(baseSha)}...${checkSha(headSha)}`,
+      '--',
+      path,
+    ]);
   } catch {
     return null;
   }

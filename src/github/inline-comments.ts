@@ -36,7 +36,9 @@ export async function postInlineComments(
   if (comments.length === 0) return outcome;
   const path = `/repos/${enc(pr.owner)}/${enc(pr.repo)}/pulls/${pr.number}/comments`;
   const existing = await client.paginate<ApiReviewComment>(path);
-  const seen = new Set(existing.filter((c) => c.line != null).map((c) => key(c.path, c.line as number, c.body)));
+  const seen = new Set(
+    existing.filter((c) => c.line != null).map((c) => key(c.path, c.line as number, c.body)),
+  );
   for (const [index, comment] of comments.entries()) {
     if (seen.has(key(comment.path, comment.line, comment.body))) {
       outcome.alreadyThere.push(comment);
@@ -55,7 +57,7 @@ export async function postInlineComments(
     } catch (error) {
       if (error instanceof GitHubApiError && error.status === 422) {
         outcome.rejected.push({ comment, message: error.message });
-      } else if (error instanceof GitHubApiError && (error.status === 403)) {
+      } else if (error instanceof GitHubApiError && error.status === 403) {
         outcome.notAllowed.push(...comments.slice(index));
         break;
       } else {

@@ -1,10 +1,11 @@
 /**
  * Which findings become inline review comments, and their text. Pure. A finding qualifies when it is not waived,
  * names a line, and that line of its record file is shown in the pull request's diff; the rest stay in the
- * checklist. Findings on the same line share one comment. Errors come first, then warnings, then notes.
+ * checklist. Findings on the same line share one comment. Errors come first, then warnings, then notes. Text
+ * from records is escaped exactly as in the checklist comment (src/report/escape.ts).
  */
 import type { AuditResult, Finding, Severity } from '../audit/types.js';
-import { codeSpan, escapeText } from './escape.js';
+import { escapeMarkdown } from '../report/escape.js';
 import type { InlineComment } from './inline-comments.js';
 import type { DiffLines } from './patch.js';
 import { toRepoPath } from './paths.js';
@@ -77,10 +78,17 @@ function commentBody(group: Located[], caution: string): string {
   const record = group[0]!.recordId;
   const lines = group.map(
     ({ finding }) =>
-      `**${LABEL[finding.severity]}** ${codeSpan(finding.check)}` +
-      (finding.field === null ? '' : ` on ${codeSpan(finding.field)}`) +
-      `: ${escapeText(finding.message)}`,
+      `**${LABEL[finding.severity]}** \`${finding.check}\`` +
+      (finding.field === null ? '' : ` on ${escapeMarkdown(finding.field)}`) +
+      `: ${escapeMarkdown(finding.message)}`,
   );
-  const head = record === null ? '**stereogate**' : `**stereogate** · record ${codeSpan(record, 60)}`;
-  return [head, '', ...lines.map((l) => `- ${l}`), '', `<sub>${escapeText(caution)}</sub>`, INLINE_MARKER].join('\n');
+  const head = record === null ? '**stereogate**' : `**stereogate** · record ${escapeMarkdown(record)}`;
+  return [
+    head,
+    '',
+    ...lines.map((l) => `- ${l}`),
+    '',
+    `<sub>${escapeMarkdown(caution)}</sub>`,
+    INLINE_MARKER,
+  ].join('\n');
 }

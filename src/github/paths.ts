@@ -3,7 +3,9 @@ import { posix } from 'node:path';
 
 /** `registryDir` is the registry root relative to the repository root ('' or '.' for the root itself). */
 export function toRepoPath(registryDir: string, file: string): string {
-  const joined = posix.normalize(posix.join(registryDir === '' ? '.' : registryDir, file.replace(/\\/g, '/')));
+  const joined = posix.normalize(
+    posix.join(registryDir === '' ? '.' : registryDir, file.replace(/\\/g, '/')),
+  );
   return joined.replace(/^\.\//, '');
 }
 

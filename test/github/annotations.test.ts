@@ -23,7 +23,12 @@ describe('buildAnnotations', () => {
   });
 
   it('caps the number and counts the rest', () => {
-    const audit = result([record('a.yaml', Array.from({ length: 5 }, (_, i) => finding('warning', i + 1)))]);
+    const audit = result([
+      record(
+        'a.yaml',
+        Array.from({ length: 5 }, (_, i) => finding('warning', i + 1)),
+      ),
+    ]);
     const { annotations, omitted } = buildAnnotations(audit, '', 3);
     expect(annotations).toHaveLength(3);
     expect(omitted).toBe(2);

@@ -11,20 +11,36 @@ const filesPath = '/repos/larkspur/registry/pulls/7/files';
 
 describe('listChangedFiles through the API', () => {
   it('reads every page, 100 per page, keeping status, previous name and patch', async () => {
-    const page1 = Array.from({ length: 100 }, (_, i) => ({ filename: `compounds/LX-${i}.yaml`, status: 'added', patch: '@@ -0,0 +1 @@\n+id: x' }));
+    const page1 = Array.from({ length: 100 }, (_, i) => ({
+      filename: `compounds/LX-${i}.yaml`,
+      status: 'added',
+      patch: '@@ -0,0 +1 @@\n+id: x',
+    }));
     nock(API)
       .get(filesPath)
       .query({ per_page: '100' })
       .reply(200, page1, { link: `<${API}${filesPath}?per_page=100&page=2>; rel="next"` })
       .get(filesPath)
       .query({ per_page: '100', page: '2' })
-      .reply(200, [{ filename: 'compounds/b.yaml', previous_filename: 'compounds/a.yaml', status: 'renamed' }]);
+      .reply(200, [
+        { filename: 'compounds/b.yaml', previous_filename: 'compounds/a.yaml', status: 'renamed' },
+      ]);
     const { client } = testClient();
     const listed = await listChangedFiles(client, pr, '/nonexistent');
     expect(listed.source).toBe('api');
     expect(listed.files).toHaveLength(101);
-    expect(listed.files[0]).toEqual({ path: 'compounds/LX-0.yaml', status: 'added', previousPath: null, patch: '@@ -0,0 +1 @@\n+id: x' });
-    expect(listed.files[100]).toEqual({ path: 'compounds/b.yaml', status: 'renamed', previousPath: 'compounds/a.yaml', patch: null });
+    expect(listed.files[0]).toEqual({
+      path: 'compounds/LX-0.yaml',
+      status: 'added',
+      previousPath: null,
+      patch: '@@ -0,0 +1 @@\n+id: x',
+    });
+    expect(listed.files[100]).toEqual({
+      path: 'compounds/b.yaml',
+      status: 'renamed',
+      previousPath: 'compounds/a.yaml',
+      patch: null,
+    });
   });
 });
 
@@ -36,7 +52,10 @@ describe('listChangedFiles past the API cap, or with the API down', () => {
     repo = tempRepo();
     repo.write({ 'compounds/LX-00001.yaml': 'id: LX-00001\n', 'compounds/LX-00002.yaml': 'id: LX-00002\n' });
     base = repo.commit('base');
-    repo.write({ 'compounds/LX-00001.yaml': 'id: LX-00001\nname: changed\n', 'compounds/LX-00003.yaml': 'id: LX-00003\n' });
+    repo.write({
+      'compounds/LX-00001.yaml': 'id: LX-00001\nname: changed\n',
+      'compounds/LX-00003.yaml': 'id: LX-00003\n',
+    });
     repo.remove('compounds/LX-00002.yaml');
     head = repo.commit('head');
   });
@@ -48,11 +67,18 @@ describe('listChangedFiles past the API cap, or with the API down', () => {
     const scope = nock(API);
     for (let page = 1; page <= API_FILE_CAP / 100; page++) {
       const query = page === 1 ? { per_page: '100' } : { per_page: '100', page: String(page) };
-      const link: Record<string, string> = page < API_FILE_CAP / 100 ? { link: `<${API}${filesPath}?per_page=100&page=${page + 1}>; rel="next"` } : {};
+      const link: Record<string, string> =
+        page < API_FILE_CAP / 100
+          ? { link: `<${API}${filesPath}?per_page=100&page=${page + 1}>; rel="next"` }
+          : {};
       scope.get(filesPath).query(query).reply(200, full, link);
     }
     const { client } = testClient();
-    const listed = await listChangedFiles(client, { ...pr, baseSha: base, headSha: head, changedFiles: 3500 }, repo.dir);
+    const listed = await listChangedFiles(
+      client,
+      { ...pr, baseSha: base, headSha: head, changedFiles: 3500 },
+      repo.dir,
+    );
     expect(listed.source).toBe('git');
     expect(listed.reason).toMatch(/3000/);
     expect(listed.files.map((f) => [f.path, f.status])).toEqual([
@@ -74,7 +100,9 @@ describe('listChangedFiles past the API cap, or with the API down', () => {
   it('refuses a commit id that could pass as a git option', async () => {
     nock(API).get(filesPath).query(true).reply(404, {});
     const { client } = testClient();
-    await expect(listChangedFiles(client, { ...pr, baseSha: '--output=/tmp/x', headSha: head }, repo.dir)).rejects.toThrow(/not a commit id/);
+    await expect(
+      listChangedFiles(client, { ...pr, baseSha: '--output=/tmp/x', headSha: head }, repo.dir),
+    ).rejects.toThrow(/not a commit id/);
   });
 });
 

@@ -11,7 +11,11 @@ const body = `${CHECKLIST_MARKER}\n## stereogate checklist\n- [x] LX-00001`;
 
 describe('upsertChecklistComment', () => {
   it('updates the existing comment found by its marker on a later page, and creates none', async () => {
-    const others = Array.from({ length: 100 }, (_, i) => ({ id: i + 1, body: 'looks good', user: { login: 'chemist', type: 'User' } }));
+    const others = Array.from({ length: 100 }, (_, i) => ({
+      id: i + 1,
+      body: 'looks good',
+      user: { login: 'chemist', type: 'User' },
+    }));
     nock(API)
       .get(comments)
       .query({ per_page: '100' })
@@ -41,7 +45,10 @@ describe('upsertChecklistComment', () => {
   });
 
   it('leaves an identical comment alone', async () => {
-    nock(API).get(comments).query(true).reply(200, [{ id: 3, body, user: { type: 'Bot' } }]);
+    nock(API)
+      .get(comments)
+      .query(true)
+      .reply(200, [{ id: 3, body, user: { type: 'Bot' } }]);
     const { client } = testClient();
     expect((await upsertChecklistComment(client, pr, body)).action).toBe('unchanged');
   });
@@ -49,7 +56,11 @@ describe('upsertChecklistComment', () => {
   it('creates nothing when asked to only update', async () => {
     nock(API).get(comments).query(true).reply(200, []);
     const { client } = testClient();
-    expect(await upsertChecklistComment(client, pr, body, { createIfMissing: false })).toEqual({ action: 'none', id: null, url: null });
+    expect(await upsertChecklistComment(client, pr, body, { createIfMissing: false })).toEqual({
+      action: 'none',
+      id: null,
+      url: null,
+    });
   });
 
   it('reports a 403 from a read-only token (pull request from a fork) as an API error, without retrying', async () => {

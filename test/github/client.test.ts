@@ -20,7 +20,9 @@ describe('client', () => {
     nock(API)
       .get('/items')
       .query({ per_page: '100' })
-      .reply(200, [1, 2], { link: `<${API}/items?per_page=100&page=2>; rel="next", <${API}/items?per_page=100&page=3>; rel="last"` })
+      .reply(200, [1, 2], {
+        link: `<${API}/items?per_page=100&page=2>; rel="next", <${API}/items?per_page=100&page=3>; rel="last"`,
+      })
       .get('/items')
       .query({ per_page: '100', page: '2' })
       .reply(200, [3], { link: `<${API}/items?per_page=100&page=3>; rel="next"` })
@@ -68,7 +70,10 @@ describe('client', () => {
   });
 
   it('never sends the token to another origin (a Link header pointing elsewhere)', async () => {
-    nock(API).get('/items').query(true).reply(200, [1], { link: '<https://elsewhere.test/steal>; rel="next"' });
+    nock(API)
+      .get('/items')
+      .query(true)
+      .reply(200, [1], { link: '<https://elsewhere.test/steal>; rel="next"' });
     const { client } = testClient();
     await expect(client.paginate('/items')).rejects.toThrow(/another origin/);
   });

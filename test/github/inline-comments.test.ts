@@ -46,7 +46,12 @@ describe('postInlineComments', () => {
   });
 
   it('stops at the first 403 and marks the rest as not allowed', async () => {
-    nock(API).get(path).query(true).reply(200, []).post(path).reply(403, { message: 'Resource not accessible by integration' });
+    nock(API)
+      .get(path)
+      .query(true)
+      .reply(200, [])
+      .post(path)
+      .reply(403, { message: 'Resource not accessible by integration' });
     const { client } = testClient();
     const done = await postInlineComments(client, pr, [a, b]);
     expect(done.posted).toEqual([]);

@@ -23,7 +23,14 @@ describe('parsePatch', () => {
   });
 
   it('handles a new file and ignores git file headers', () => {
-    const patch = ['diff --git a/x.yaml b/x.yaml', '--- /dev/null', '+++ b/x.yaml', '@@ -0,0 +1,2 @@', '+id: LX-1', '+name: a'].join('\n');
+    const patch = [
+      'diff --git a/x.yaml b/x.yaml',
+      '--- /dev/null',
+      '+++ b/x.yaml',
+      '@@ -0,0 +1,2 @@',
+      '+id: LX-1',
+      '+name: a',
+    ].join('\n');
     const lines = parsePatch(patch);
     expect([...lines.added]).toEqual([1, 2]);
     expect(lines.commentable.has(3)).toBe(false);

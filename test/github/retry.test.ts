@@ -19,14 +19,22 @@ describe('retryDelayMs', () => {
   // GitHub REST docs, "Rate limits for the REST API": on a secondary limit wait Retry-After seconds.
   it('honours Retry-After seconds on a secondary rate limit (403 and 429)', () => {
     const body = JSON.stringify({ message: 'You have exceeded a secondary rate limit.' });
-    expect(retryDelayMs({ status: 403, headers: headers({ 'retry-after': '3' }), bodyText: body }, 1, policy)).toBe(3000);
-    expect(retryDelayMs({ status: 429, headers: headers({ 'retry-after': '2' }), bodyText: '' }, 1, policy)).toBe(2000);
+    expect(
+      retryDelayMs({ status: 403, headers: headers({ 'retry-after': '3' }), bodyText: body }, 1, policy),
+    ).toBe(3000);
+    expect(
+      retryDelayMs({ status: 429, headers: headers({ 'retry-after': '2' }), bodyText: '' }, 1, policy),
+    ).toBe(2000);
   });
 
   // RFC 9110 §10.2.3: Retry-After may be an HTTP date.
   it('reads Retry-After given as an HTTP date', () => {
     const now = Date.parse('2026-01-01T00:00:00Z');
-    const answer = { status: 429, headers: headers({ 'retry-after': 'Thu, 01 Jan 2026 00:00:05 GMT' }), bodyText: '' };
+    const answer = {
+      status: 429,
+      headers: headers({ 'retry-after': 'Thu, 01 Jan 2026 00:00:05 GMT' }),
+      bodyText: '',
+    };
     expect(retryDelayMs(answer, 1, policy, now)).toBe(5000);
   });
 
@@ -47,7 +55,11 @@ describe('retryDelayMs', () => {
   });
 
   it('does not retry a plain permission refusal or a validation error', () => {
-    const forbidden = { status: 403, headers: headers({}), bodyText: '{"message":"Resource not accessible by integration"}' };
+    const forbidden = {
+      status: 403,
+      headers: headers({}),
+      bodyText: '{"message":"Resource not accessible by integration"}',
+    };
     expect(isRateLimit(forbidden)).toBe(false);
     expect(retryDelayMs(forbidden, 1, policy)).toBeNull();
     expect(retryDelayMs({ status: 422, headers: headers({}), bodyText: '' }, 1, policy)).toBeNull();

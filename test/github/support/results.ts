@@ -16,7 +16,14 @@ export function finding(severity: Severity, line: number | null, extra: Partial<
 }
 
 export function record(file: string, findings: Finding[], id: string | null = 'LX-00001'): RecordResult {
-  return { id, file, computed: null, findings, passed: [], declared: { form: 'racemate', descriptors: null } };
+  return {
+    id,
+    file,
+    computed: null,
+    findings,
+    passed: [],
+    declared: { form: 'racemate', descriptors: null },
+  };
 }
 
 export function result(records: RecordResult[]): AuditResult {
