@@ -68,6 +68,7 @@ export function parseCxExtension(s: string, start: number, atomCount: number): C
           continue;
         }
         if (d === 44 || d === 124) break;
+        if (j >= n) return fail('cxsmiles-unclosed', "CXSMILES block is not closed with '|'", start);
         return fail('cxsmiles-bad-group', `unexpected '${s[j] ?? 'end of text'}' in the stereo group`, j);
       }
       const same = groups.find((g) => g.type === type && g.id === id);

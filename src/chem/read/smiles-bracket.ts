@@ -1,6 +1,6 @@
 /**
  * One SMILES atom token: a bracket atom `[13C@@H2+:7]` or an organic-subset atom (`C`, `Cl`, `c`, `*`).
- * OpenSMILES specification, sections 3.1 (atoms) and 3.9 (chirality); plain char-code scanning, no regexes.
+ * OpenSMILES specification, sections on atoms and on chirality; plain char-code scanning, no regexes.
  */
 import { atomicNumberOf } from './valence.js';
 
@@ -133,7 +133,7 @@ export function readBracketAtom(s: string, start: number): AtomToken {
     } else {
       element = s[i]!;
       const zz = atomicNumberOf(element);
-      if (zz === undefined) {
+      if (zz === undefined || two !== null) {
         return { error: { code: 'smiles-unknown-element', message: `unknown element '${two ?? element}'`, offset: i } };
       }
       z = zz;

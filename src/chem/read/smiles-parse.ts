@@ -1,7 +1,7 @@
 /**
  * SMILES string -> atoms, bonds and each atom's neighbours in written order (the order OpenSMILES chirality
  * refers to). Syntax only: valence, kekulization and stereo come afterwards (smiles.ts).
- * OpenSMILES specification sections 3.2-3.6 (bonds, branches, ring closures, disconnected structures).
+ * OpenSMILES specification: bonds, branches, ring closures, disconnected structures.
  */
 import { readBracketAtom, readOrganicAtom, type RawAtom, type TokenError } from './smiles-bracket.js';
 
@@ -30,6 +30,8 @@ export interface SmilesGraph {
   preceded: boolean[];
   /** Offset where the SMILES proper ends (first whitespace or end of text). */
   end: number;
+  /** Tolerated oddities (e.g. a doubled backslash). */
+  warnings: TokenError[];
 }
 
 interface PendingBond {
@@ -74,6 +76,7 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
   const nbr: number[][] = [];
   const nbrBond: number[][] = [];
   const preceded: boolean[] = [];
+  const warnings: TokenError[] = [];
   const rings: (OpenRing | undefined)[] = [];
   let openRings = 0;
   const branchStack: { atom: number; offset: number; atomsBefore: number }[] = [];
@@ -126,6 +129,11 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
       if (pending) return err('smiles-dangling-bond', 'two bond symbols in a row', i);
       pending = bs;
       i++;
+      if (c === 92 && s.charCodeAt(i) === 92) {
+        // '\\': a backslash escaped for a programming language or CSV; read as one '\' (RDKit does too)
+        warnings.push({ code: 'smiles-doubled-backslash', message: "'\\\\' read as a single '\\'", offset: i - 1 });
+        i++;
+      }
       continue;
     }
     if (c === 40) {
@@ -233,5 +241,5 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
     for (const r of rings) if (r && (!first || r.offset < first.offset)) first = r;
     return err('smiles-unclosed-ring', 'ring-closure number is never closed', first!.offset);
   }
-  return { atoms, bonds, nbr, nbrBond, preceded, end };
+  return { atoms, bonds, nbr, nbrBond, preceded, end, warnings };
 }

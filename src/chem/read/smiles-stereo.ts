@@ -1,8 +1,8 @@
 /**
- * SMILES stereo marks -> stereo elements. OpenSMILES specification section 3.9 (tetrahedral `@`/`@@`,
+ * SMILES stereo marks -> stereo elements. OpenSMILES specification, stereochemistry (tetrahedral `@`/`@@`,
  * extended tetrahedral allenes, `/` `\` double-bond configuration). Ligand order is the written order at the
  * atom: the preceding atom, then implicit/bracket H, then ring closures in the order their digits appear, then
- * branches and the following atom. A three-connected centre gets a LONE_PAIR where an implicit H would stand.
+ * branches and the following atom. A three-connected centre gets a LONE_PAIR second in its list (see below).
  */
 import {
   IMPLICIT_H,
@@ -82,7 +82,10 @@ export function buildStereo(
       continue;
     }
     const lig = ligandsOf(g, hCount, i);
-    if (lig.length === 3) lig.splice(g.preceded[i] ? 1 : 0, 0, LONE_PAIR);
+    // Three ligands: the lone pair goes second, i.e. where an implicit H would stand after a preceding atom.
+    // For a leading atom (`[S@](C)(=O)c1ccccc1`) that is not the H-first slot: RDKit reads such a centre from
+    // its three written neighbours alone (checked: it equals `C[S@](=O)c1ccccc1`), and OpenSMILES is silent.
+    if (lig.length === 3) lig.splice(1, 0, LONE_PAIR);
     if (lig.length !== 4) {
       warnings.push(
         warn('smiles-stereo-ignored', `chirality mark ignored: the atom has ${lig.length} neighbours, a tetrahedral centre needs 3 or 4`, a.offset),

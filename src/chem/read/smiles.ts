@@ -34,7 +34,7 @@ function parse(text: string): ReadResult {
   while (start < text.length && isSpace(text.charCodeAt(start))) start++;
   const g = parseSmilesGraph(text, start);
   if ('error' in g) return { ok: false, error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } } };
-  const warnings: ReadError[] = [];
+  const warnings: ReadError[] = g.warnings.map((w) => ({ code: w.code, message: w.message, at: { offset: w.offset } }));
   const n = g.atoms.length;
   const m = g.bonds.length;
 
@@ -52,12 +52,9 @@ function parse(text: string): ReadResult {
 
   // bond orders (Kekulé) and aromatic flags
   const order = new Uint8Array(m);
+  for (let k = 0; k < m; k++) order[k] = g.bonds[k]!.order;
   let anyAromatic = false;
-  for (let k = 0; k < m; k++) {
-    const b = g.bonds[k]!;
-    order[k] = b.order;
-    if (b.aromatic) anyAromatic = true;
-  }
+  for (let a = 0; a < n && !anyAromatic; a++) if (g.atoms[a]!.aromatic) anyAromatic = true;
   if (anyAromatic) {
     const err = kekulizeGraph(g, order);
     if (err) return err;
