@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import initRDKitModule from '@rdkit/rdkit';
+import { loadRDKit } from '../chem/read/smiles-rdkit-helper.js';
 import { CHECKS } from '../../src/checks/index.js';
 import type { CheckModule } from '../../src/checks/types.js';
 import type { CompoundRecord } from '../../src/registry/types.js';
@@ -23,7 +23,7 @@ const MESO_TARTARIC = 'OC(=O)[C@H:2](O)[C@H:3](O)C(=O)O';
 
 describe('checks on real structures (through the engine)', () => {
   it('RDKit agrees with the engine on the tartaric acid labels', async () => {
-    const rdkit = await initRDKitModule();
+    const rdkit = await loadRDKit();
     for (const s of [RR_TARTARIC, SS_TARTARIC, MESO_TARTARIC, 'C[C@@H:2](O)CC', 'CC(C)[C@@H:2]1CC[C@@H:5](C)C[C@H:1]1O']) {
       const unmapped = s.replace(/:\d+\]/g, ']');
       const mol = rdkit.get_mol(unmapped)!;
