@@ -116,11 +116,11 @@ function piElectrons(s: Structure, g: Graph, info: RingInfo, i: number): number 
  * kind makes two Kekulé drawings, or drawings from writers with different aromaticity models, compare equal.
  * Input aromatic flags are not used: the readers kekulize, and flags differ between writers.
  */
-export function conjugatedRingBonds(s: Structure, g: Graph = buildGraph(s)): boolean[] {
+export function conjugatedRingBonds(s: Structure, g: Graph = buildGraph(s), bridgeOf?: Uint8Array): boolean[] {
   const m = s.bonds.length;
   const out = new Array<boolean>(m).fill(false);
   if (!s.bonds.some((b) => b.order === 2)) return out;
-  const bridge = bridges(g, m);
+  const bridge = bridgeOf ?? bridges(g, m);
   const n = g.n;
   const hasRingDouble = new Uint8Array(n);
   s.bonds.forEach((b, k) => {

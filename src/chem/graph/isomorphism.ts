@@ -10,8 +10,7 @@
  */
 import type { Structure } from '../types.js';
 import { conjugatedRingBonds } from './aromaticity.js';
-import { invariantsWith } from './classes.js';
-import { csrOf } from './csr.js';
+import { prepare } from './prepared.js';
 import { clonePartition, partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
 
 export interface IsomorphismOptions {
@@ -47,43 +46,105 @@ export function findIsomorphisms(a: Structure, b: Structure, opts: IsomorphismOp
     opts.onMapping(new Int32Array(0));
     return { complete: true };
   }
-  const aromA = opts.aromaticA ?? conjugatedRingBonds(a);
-  const same = a === b && opts.colourA === opts.colourB && opts.aromaticA === opts.aromaticB;
-  const aromB = same ? aromA : (opts.aromaticB ?? conjugatedRingBonds(b));
-  const invA = invariantsWith(a, aromA);
-  const invB = same ? invA : invariantsWith(b, aromB);
-  const inv = new Float64Array(2 * n);
-  inv.set(invA, 0);
-  inv.set(invB, n);
-  const keys: ArrayLike<number>[] = [inv];
-  if (opts.colourA || opts.colourB) {
-    const col = new Float64Array(2 * n);
-    for (let i = 0; i < n; i++) {
-      col[i] = opts.colourA ? opts.colourA[i] : 0;
-      col[n + i] = opts.colourB ? opts.colourB[i] : 0;
-    }
-    keys.push(col);
-  }
-  const g = csrOf([
-    { s: a, aromatic: aromA },
-    { s: b, aromatic: aromB },
-  ]);
-  const refiner = new Refiner(g, n);
-  const p = partitionOf(rankKeys(keys, 2 * n));
-  if (!refiner.balanced(p) || !refiner.refine(p)) return { complete: true };
+  const pa = prepare(a, opts.aromaticA);
+  const same = a === b && sameColours(opts.colourA, opts.colourB, n) && opts.aromaticA === opts.aromaticB;
+  const pb = same ? pa : prepare(b, opts.aromaticB);
 
   const inKey = new Uint8Array(n);
+  const g1 = pa.csr;
   if (opts.key) {
     for (const x of opts.key) {
       if (x < 0 || x >= n) continue;
       inKey[x] = 1;
-      for (let e = g.offs[x]; e < g.offs[x + 1]; e++) inKey[g.adj[e]] = 1;
+      for (let e = g1.offs[x]; e < g1.offs[x + 1]; e++) inKey[g1.adj[e]] = 1;
     }
   } else inKey.fill(1);
 
+  let p: Partition;
+  let g: CsrGraph;
+  let refiner: Refiner;
+  if (same) {
+    // Automorphisms: refine one copy; when every key atom is alone in its cell, the identity is the only
+    // restriction to key ∪ N(key), so there is nothing to search.
+    const single = partitionOf(rankKeys(opts.colourA ? [pa.inv, opts.colourA] : [pa.inv], n));
+    new Refiner(pa.csr).refine(single);
+    let fixed = true;
+    for (let i = 0; i < n && fixed; i++) if (inKey[i] && single.len[single.start[i]] > 1) fixed = false;
+    if (fixed) {
+      const id = new Int32Array(n);
+      for (let i = 0; i < n; i++) id[i] = i;
+      opts.onMapping(id);
+      return { complete: true };
+    }
+    p = doubled(single, n);
+    g = unionCsr(pa.csr, pb.csr);
+    refiner = new Refiner(g, n);
+  } else {
+    g = unionCsr(pa.csr, pb.csr);
+    refiner = new Refiner(g, n);
+    const keys: ArrayLike<number>[] = [concat(pa.inv, pb.inv)];
+    if (opts.colourA || opts.colourB) {
+      const col = new Float64Array(2 * n);
+      for (let i = 0; i < n; i++) {
+        col[i] = opts.colourA ? opts.colourA[i] : 0;
+        col[n + i] = opts.colourB ? opts.colourB[i] : 0;
+      }
+      keys.push(col);
+    }
+    p = partitionOf(rankKeys(keys, 2 * n));
+    if (!refiner.balanced(p) || !refiner.refine(p)) return { complete: true };
+  }
   const search = new Search(g, n, refiner, inKey, opts);
   search.run(p, opts.key ? opts.key.length > 0 : true);
   return { complete: !search.budgetHit && !search.maxHit };
+}
+
+function sameColours(x: ArrayLike<number> | undefined, y: ArrayLike<number> | undefined, n: number): boolean {
+  if (x === y) return true;
+  if (!x || !y) return false;
+  for (let i = 0; i < n; i++) if (x[i] !== y[i]) return false;
+  return true;
+}
+
+function concat(x: number[], y: number[]): Float64Array {
+  const out = new Float64Array(x.length + y.length);
+  out.set(x, 0);
+  out.set(y, x.length);
+  return out;
+}
+
+/** The union partition of A ∪ A' from an equitable partition of A: each cell followed by its copies. */
+function doubled(p: Partition, n: number): Partition {
+  const lab = new Int32Array(2 * n);
+  const start = new Int32Array(2 * n);
+  const len = new Int32Array(2 * n);
+  for (let s = 0; s < n; s += p.len[s]) {
+    const L = p.len[s];
+    for (let t = 0; t < L; t++) {
+      const v = p.lab[s + t];
+      lab[2 * s + t] = v;
+      lab[2 * s + L + t] = v + n;
+      start[v] = start[v + n] = 2 * s;
+    }
+    len[2 * s] = 2 * L;
+  }
+  return { lab, start, len, cells: p.cells };
+}
+
+/** Disjoint union of two compressed graphs (atoms of y follow those of x). */
+function unionCsr(x: CsrGraph, y: CsrGraph): CsrGraph {
+  const n = x.n + y.n;
+  const offs = new Int32Array(n + 1);
+  const ex = x.adj.length;
+  offs.set(x.offs, 0);
+  for (let i = 1; i <= y.n; i++) offs[x.n + i] = ex + y.offs[i];
+  const adj = new Int32Array(ex + y.adj.length);
+  adj.set(x.adj, 0);
+  for (let e = 0; e < y.adj.length; e++) adj[ex + e] = y.adj[e] + x.n;
+  const code = new Int32Array(adj.length);
+  code.set(x.code, 0);
+  code.set(y.code, ex);
+  return { n, offs, adj, code };
 }
 
 /** One isomorphism from A to B, or null (also null when the search budget runs out). */

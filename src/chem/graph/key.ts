@@ -5,9 +5,7 @@
  * but callers that need certainty confirm with isomorphic().
  */
 import type { Structure } from '../types.js';
-import { conjugatedRingBonds } from './aromaticity.js';
-import { invariantsWith } from './classes.js';
-import { csrOf } from './csr.js';
+import { prepare } from './prepared.js';
 import { cellIndex, partitionOf, rankKeys, Refiner } from './refine.js';
 
 /** Hill order (C, H, then alphabetical; alphabetical throughout without carbon), implicit H included. */
@@ -51,9 +49,7 @@ export function constitutionKey(s: Structure): string {
   const n = s.atoms.length;
   const formula = molecularFormula(s);
   if (n === 0) return `${formula}/0000000000000000`;
-  const aromatic = conjugatedRingBonds(s);
-  const inv = invariantsWith(s, aromatic);
-  const g = csrOf([{ s, aromatic }]);
+  const { inv, csr: g } = prepare(s);
   const p = partitionOf(rankKeys([inv], n));
   new Refiner(g).refine(p);
   const cell = cellIndex(p);

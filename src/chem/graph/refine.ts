@@ -40,20 +40,35 @@ export function clonePartition(p: Partition): Partition {
 
 /** Dense ranks (0 = lowest) of per-atom keys compared lexicographically. */
 export function rankKeys(keys: ArrayLike<number>[], n: number): Int32Array {
-  const idx = Array.from({ length: n }, (_, i) => i);
-  const cmp = (i: number, j: number): number => {
-    for (const k of keys) {
-      const d = k[i] - k[j];
-      if (d !== 0) return d;
-    }
-    return 0;
-  };
-  idx.sort(cmp);
+  let rank = rankOne(keys[0], n);
+  for (let k = 1; k < keys.length; k++) {
+    const next = rankOne(keys[k], n);
+    let m = 0;
+    for (let i = 0; i < n; i++) if (next[i] >= m) m = next[i] + 1;
+    const combined = new Float64Array(n);
+    for (let i = 0; i < n; i++) combined[i] = rank[i] * m + next[i];
+    rank = rankOne(combined, n);
+  }
+  return rank;
+}
+
+function rankOne(values: ArrayLike<number>, n: number): Int32Array {
+  const sorted = new Float64Array(n);
+  for (let i = 0; i < n; i++) sorted[i] = values[i];
+  sorted.sort();
+  let u = 0;
+  for (let i = 0; i < n; i++) if (i === 0 || sorted[i] !== sorted[u - 1]) sorted[u++] = sorted[i];
   const out = new Int32Array(n);
-  let r = 0;
-  for (let t = 0; t < n; t++) {
-    if (t > 0 && cmp(idx[t - 1], idx[t]) !== 0) r++;
-    out[idx[t]] = r;
+  for (let i = 0; i < n; i++) {
+    const v = values[i];
+    let lo = 0;
+    let hi = u - 1;
+    while (lo < hi) {
+      const mid = (lo + hi) >>> 1;
+      if (sorted[mid] < v) lo = mid + 1;
+      else hi = mid;
+    }
+    out[i] = lo;
   }
   return out;
 }
