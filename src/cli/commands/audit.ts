@@ -1,0 +1,129 @@
+/**
+ * `stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif] [--output FILE]
+ *  [--fail-on error|warning|never]` — audits the registry's records and prints the report.
+ * Exit 1 when open (not waived) findings reach --fail-on, 0 otherwise, 2 for usage errors.
+ */
+import { existsSync, writeFileSync } from 'node:fs';
+import { isAbsolute, relative, resolve, sep } from 'node:path';
+import { ConfigError } from '../../audit/config.js';
+import type { AuditEngine } from '../../audit/engine.js';
+import { runAudit } from '../../audit/run.js';
+import type { AuditResult } from '../../audit/types.js';
+import type { CheckModule } from '../../checks/types.js';
+import { renderJson } from '../../report/json.js';
+import { renderMarkdown } from '../../report/markdown.js';
+import { renderSarif } from '../../report/sarif.js';
+import { renderText, shouldColor } from '../../report/text.js';
+import { parseCommandArgs } from '../args.js';
+import { EXIT_OK, UsageError, type Command } from '../command.js';
+
+export const EXIT_FINDINGS = 1;
+
+const USAGE = [
+  'Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]',
+  '                        [--output FILE] [--fail-on error|warning|never]',
+  '',
+  '  paths…               record files, folders or molfiles to audit (default: every record); the whole',
+  '                       registry is still loaded for the cross-record checks',
+  '  --root DIR           registry root, holding stereogate.config.yml and the record folders (default .)',
+  '  --config FILE        config file to use instead of stereogate.config.yml at the root',
+  '  --format FORMAT      text (default), json, markdown (the pull-request checklist) or sarif (2.1.0)',
+  '  --output FILE        write the report to FILE instead of standard output',
+  '  --fail-on LEVEL      exit 1 when a finding not accepted by a waiver is at least this severe:',
+  '                       error (default), warning, or never',
+  '',
+  'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error.',
+].join('\n');
+
+/** Whether open findings reach the threshold (waived findings never count). */
+export function reachesThreshold(result: AuditResult, failOn: 'error' | 'warning' | 'never'): boolean {
+  if (failOn === 'never') return false;
+  const s = result.summary;
+  return failOn === 'error' ? s.errors > 0 : s.errors + s.warnings > 0;
+}
+
+/** Paths as typed: one that exists relative to the working folder is taken from there, else from the root. */
+function toRootPaths(paths: string[], root: string): string[] {
+  const rootAbs = resolve(root);
+  return paths.map((p) => {
+    const abs = resolve(p);
+    if (!existsSync(abs)) return p;
+    const rel = relative(rootAbs, abs);
+    if (rel === '..' || rel.startsWith(`..${sep}`) || isAbsolute(rel)) {
+      if (existsSync(resolve(rootAbs, p))) return p;
+      throw new UsageError(`${p} is outside the registry root ${root}`);
+    }
+    return rel.split(sep).join('/') || '.';
+  });
+}
+
+export interface AuditCommandDeps {
+  checks?: CheckModule[];
+  engine?: AuditEngine;
+}
+
+export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
+  return {
+    name: 'audit',
+    summary: 'audit registry records for stereochemical consistency and print the checklist',
+    usage: USAGE,
+    async run(args, io) {
+      const { values, positionals } = parseCommandArgs(
+        args,
+        {
+          root: { type: 'string', default: '.' },
+          config: { type: 'string' },
+          format: { type: 'string', choices: ['text', 'json', 'markdown', 'sarif'], default: 'text' },
+          output: { type: 'string' },
+          'fail-on': { type: 'string', choices: ['error', 'warning', 'never'], default: 'error' },
+        },
+        { min: 0, max: Infinity, names: 'paths' },
+      );
+      const root = values.root as string;
+      const format = values.format as 'text' | 'json' | 'markdown' | 'sarif';
+      const failOn = values['fail-on'] as 'error' | 'warning' | 'never';
+      const output = values.output as string | undefined;
+      if (output === '') throw new UsageError('--output needs a file name');
+      const paths = toRootPaths(positionals, root);
+      let result: AuditResult;
+      try {
+        result = await runAudit({
+          root,
+          paths,
+          configFile: values.config as string | undefined,
+          checks: deps.checks,
+          engine: deps.engine,
+        });
+      } catch (e) {
+        if (e instanceof ConfigError) throw new UsageError(e.message);
+        throw e;
+      }
+      if (result.unmatched?.length) {
+        throw new UsageError(
+          `no record file, record folder or molfile in ${root} matches: ${result.unmatched.join(', ')}`,
+        );
+      }
+      const checks = deps.checks ?? (await import('../../checks/index.js')).CHECKS;
+      const report =
+        format === 'json'
+          ? renderJson(result)
+          : format === 'markdown'
+            ? renderMarkdown(result)
+            : format === 'sarif'
+              ? renderSarif(result, checks)
+              : renderText(result, { color: output === undefined && shouldColor(process.stdout) });
+      if (output !== undefined) {
+        try {
+          writeFileSync(output, report);
+        } catch (e) {
+          throw new UsageError(`cannot write ${output}: ${(e as NodeJS.ErrnoException).code ?? String(e)}`);
+        }
+      } else {
+        io.out(report);
+      }
+      return reachesThreshold(result, failOn) ? EXIT_FINDINGS : EXIT_OK;
+    },
+  };
+}
+
+export const auditCommand: Command = makeAuditCommand();
