@@ -240,3 +240,10 @@ export async function mergeCommand(args: string[], io: Io): Promise<number> {
 }
 
 export type { BulkRecordResult };
+
+export const mergeShardsCommand = {
+  name: 'merge',
+  summary: 'combine the JSON Lines outputs of sharded bulk audits into one report',
+  usage: BULK_USAGE,
+  run: mergeCommand,
+};
