@@ -20,7 +20,7 @@ import { writeSmiles } from './write/smiles.js';
 interface Side {
   whole: Analysis;
   parent: Analysis;
-  others: { key: string; smiles: string }[];
+  others: { key: string; smiles: string; structure: Structure }[];
 }
 
 function side(s: Structure): Side {
@@ -33,16 +33,17 @@ function side(s: Structure): Side {
     .filter((_c, i) => i !== k)
     .map((c) => {
       const sub = extractAtoms(ns, c);
-      return { key: constitutionKey(sub), smiles: writeSmiles(sub) };
+      return { key: constitutionKey(sub), smiles: writeSmiles(sub), structure: sub };
     });
   return { whole, parent, others };
 }
 
+/** Other components matched by constitution, then by configuration; the unmatched ones on each side. */
 function otherDifferences(a: Side, b: Side): { onlyInA: string[]; onlyInB: string[] } {
   const left = b.others.slice();
   const onlyInA: string[] = [];
   for (const o of a.others) {
-    const j = left.findIndex((x) => x.key === o.key);
+    const j = left.findIndex((x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === 'identical'));
     if (j >= 0) left.splice(j, 1);
     else onlyInA.push(o.smiles);
   }
