@@ -58,6 +58,8 @@ function compareOne(
   parsed: ParsedDescriptors,
   facts: StructureFacts,
   out: RawFinding[],
+  form: string,
+  evidence: string[],
 ): DescriptorComparison | null {
   const add = (id: Id, data: RawFinding['data'], severity?: RawFinding['severity']): void => {
     out.push(finding(id, field, { field, text, ...data }, severity));
@@ -86,6 +88,11 @@ function compareOne(
   if (parsed.embeddedDescriptors) return cmp; // the name cites more units further in; counts would mislead
   const definedCount = Object.values(cmp.computedCounts).reduce((a, b) => a + b, 0);
   if (!cmp.agrees && facts.undefined > 0 && parsed.items.length > definedCount) {
+    if (parsed.mode === 'racemic' && form === 'racemate' && definedCount === 0) {
+      // A racemate drawn flat (common practice, accepted by form-matches-structure): nothing to compare.
+      evidence.push(`${text} names a racemate; the drawing shows no configuration, as usual for a racemate`);
+      return null;
+    }
     // A racemate drawn without stereo marks is common practice; other claims should draw what they state.
     add(
       'descriptors-cite-undefined-units',
@@ -147,13 +154,15 @@ function run(ctx: CheckContext): CheckOutcome {
     evidence.push(`${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`);
   };
   const fieldText = record.stereo.descriptors ?? '';
-  if (decl.field) note(fieldText, compareOne('stereo.descriptors', fieldText, decl.field, f, out));
+  if (decl.field) note(fieldText, compareOne('stereo.descriptors', fieldText, decl.field, f, out, record.stereo.form, evidence));
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
       const nameText = (record.name ?? '').slice(0, (record.name ?? '').length - decl.name.rest.length).replace(/[-\s]+$/, '');
       out.push(finding('name-and-descriptors-disagree', 'name', { nameText, fieldText }, 'warning'));
     } else if (!decl.field || decl.field.items.length === 0) {
-      note(record.name ?? '', compareOne('name', record.name ?? '', decl.name, f, out));
+      const name = record.name ?? '';
+      const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2013\u2212]+$/, '');
+      note(front, compareOne('name', front, decl.name, f, out, record.stereo.form, evidence));
     }
   } else if (decl.name) {
     for (const p of decl.name.problemDetails) {
@@ -167,7 +176,7 @@ function run(ctx: CheckContext): CheckOutcome {
     const cf = ctx.components[i]?.facts;
     if (!c.descriptors || !cf) return;
     const field = `stereo.components.${i}.descriptors`;
-    note(`component ${i + 1} ${c.descriptors}`, compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out));
+    note(`component ${i + 1} ${c.descriptors}`, compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, 'component', evidence));
   });
   out.push(...prefixFindings(ctx, decl, f));
   const hasAny = decl.field !== null || (decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== 'none' || decl.name.words.length > 0 || decl.name.rotationSign !== null));

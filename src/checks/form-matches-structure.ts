@@ -61,7 +61,7 @@ function evidence(f: StructureFacts) {
   return {
     units: unitSummary(defined),
     allUnits: unitSummary(f.units) + (undef.length ? ` (${undef.length} undefined)` : ''),
-    labels: defined.map((u) => `${u.label ?? '?'}`).join(',') || 'none',
+    labels: defined.length ? defined.map((u) => `${u.label ?? '?'}`).join(',') : 'none are drawn',
     mirror: f.mirror.explanation || (f.chiral ? 'not superimposable on its mirror image' : 'superimposable'),
     undefinedCount: undef.length,
     undefinedUnits: listUnits(undef),
@@ -130,8 +130,8 @@ function passedEvidence(form: string, f: StructureFacts, e: ReturnType<typeof ev
       : `form unknown; the structure defines ${e.units} and leaves none undefined`;
   }
   const chir = f.chiral === true ? 'chiral' : f.chiral === false ? (f.meso ? 'meso (achiral)' : 'achiral') : 'open';
-  const why = f.chiral !== null && f.mirror.explanation ? `; ${f.mirror.explanation}` : '';
-  return `declared ${form}; structure is ${chir} (${e.units}${e.undefinedCount ? `, ${e.undefinedCount} undefined` : ''})${why}`;
+  const why = f.chiral !== null && f.mirror.explanation ? ` — ${f.mirror.explanation}` : '';
+  return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
 
 export const formMatchesStructure: CheckModule = {

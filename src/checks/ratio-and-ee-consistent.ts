@@ -115,7 +115,7 @@ function run(ctx: CheckContext): CheckOutcome {
     if (form === 'enantioenriched' && effectiveEe <= cfg.eeTolerance) {
       add('enantioenriched-ee-zero', field, { ee: fmt(effectiveEe), source, tolerance: cfg.eeTolerance }, 'warning');
     }
-    evidence.push(`ee ${fmt(effectiveEe)}% (${source})`);
+    if (ee !== undefined) evidence.push(`ee ${fmt(effectiveEe)}% (stated)`);
   }
   if (out.some((x) => x.severity !== 'note')) return { findings: out };
   if (parts.length && evidence.length === 0) evidence.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);

@@ -53,9 +53,12 @@ describe('descriptors-match-structure: labels', () => {
     expect(run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(R)-(−)-butan-2-ol').findings).toEqual([]);
     expect(ids(run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(S)-butan-2-ol'))).toEqual(['name-and-descriptors-disagree']);
   });
-  it('descriptors on a flat drawing cannot be checked: a note for a racemate, an error otherwise', () => {
+  it('descriptors on a flat drawing cannot be checked: fine for a racemate, a note for racemic notation otherwise, an error for absolute ones', () => {
     const flat = facts({ units: [unit({ atoms: [2], defined: false })], chiral: true, stereoisomers: { total: 2, chiral: 2, achiral: 0, pairs: 1, meso: 0, units: 1 } });
-    expect(run(flat, { form: 'racemate', descriptors: '(RS)' }).findings).toMatchObject([{ messageId: 'descriptors-cite-undefined-units', severity: 'note' }]);
+    const rac = run(flat, { form: 'racemate', descriptors: '(RS)' });
+    expect(rac.findings).toEqual([]);
+    expect(rac.passed).toMatch(/as usual for a racemate/);
+    expect(run(flat, { form: 'unknown', descriptors: '(RS)' }).findings).toMatchObject([{ messageId: 'descriptors-cite-undefined-units', severity: 'note' }]);
     const o = run(flat, { form: 'single-enantiomer', descriptors: '(R)' });
     expect(ids(o)).toEqual(['descriptors-cite-undefined-units']);
     expect(o.findings[0].severity).toBeUndefined();
