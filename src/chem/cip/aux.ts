@@ -109,10 +109,10 @@ export function auxFor(dg: Digraph): (rk: Ranker) => (node: CipNode) => CipLabel
       let label: CipLabel | null = null;
       const t = g.tetraAt[node.atom];
       const b = g.bondAt[node.atom];
-      if (t >= 0 && t !== dg.rootElement) {
-        label = tetrahedralLabel(rk, node, g.s.stereo[t] as TetrahedralStereo);
-      } else if (b >= 0 && b !== dg.rootElement && !g.ringFixed[b]) {
-        label = doubleBondLabel(rk, node, g.s.stereo[b] as DoubleBondStereo);
+      if (t >= 0 && t !== dg.rootElement && g.auxAllowed[t]) {
+        label = rk.within(node, () => tetrahedralLabel(rk, node, g.s.stereo[t] as TetrahedralStereo));
+      } else if (b >= 0 && b !== dg.rootElement && g.auxAllowed[b]) {
+        label = rk.within(node, () => doubleBondLabel(rk, node, g.s.stereo[b] as DoubleBondStereo));
       }
       node.auxBusy = false;
       node.aux = label;

@@ -36,14 +36,48 @@ export class Ranker {
   /** Rules that cannot separate anything in this structure are skipped (saves exploring tied branches). */
   private readonly active: boolean[];
 
+  /**
+   * The node whose descriptor is being found (the root at top level). Following Hanson et al. 2018, descriptors
+   * are assigned from the outermost nodes inward: while ranking at `scope`, only the descriptors of nodes
+   * farther out on the same branch (its descendants in the root's digraph) are known; any other node counts as
+   * non-stereogenic. This makes every auxiliary descriptor independent of the order of computation.
+   */
+  scope: CipNode;
+
   constructor(
     readonly dg: Digraph,
-    readonly aux: AuxFn,
+    private readonly auxOf: AuxFn,
   ) {
+    this.scope = dg.root;
     const g = dg.g;
     const several = g.stereoCount > 1;
     const isotopes = g.s.atoms.some((a) => a.isotope !== null);
     this.active = [true, true, isotopes, g.hasBondStereo && several, several, several, several, several, false];
+  }
+
+  /** Is `n` the scope node or farther out on its branch? */
+  inScope(n: CipNode): boolean {
+    const sc = this.scope;
+    if (sc === this.dg.root) return true;
+    let x: CipNode | null = n;
+    while (x !== null && x.depth > sc.depth) x = x.parent;
+    return x === sc;
+  }
+
+  /** The auxiliary descriptor of `n` as seen from the current scope. */
+  aux(n: CipNode): CipLabel | null {
+    return this.inScope(n) ? this.auxOf(n) : null;
+  }
+
+  /** Run `f` with `node` as the scope (while finding the auxiliary descriptor of `node`). */
+  within<T>(node: CipNode, f: () => T): T {
+    const saved = this.scope;
+    this.scope = node;
+    try {
+      return f();
+    } finally {
+      this.scope = saved;
+    }
   }
 
   setRule6(ref: number): void {
@@ -131,7 +165,9 @@ export class Ranker {
 
   /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
   sorted(node: CipNode, from: CipNode | null, level: number): SortedBranches {
-    const key = (from === null ? 0 : from.id + 1) * 16 + level;
+    // outside the scope every descriptor is hidden, so such traversals are cached apart
+    const hidden = level >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
+    const key = ((from === null ? 0 : from.id + 1) * 16 + level) * 2 + hidden;
     if (node.sorted === null) node.sorted = new Map();
     const hit = node.sorted.get(key);
     if (hit) return hit;

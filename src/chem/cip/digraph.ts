@@ -71,7 +71,9 @@ export class Digraph {
   private make(atom: number, depth: number, dist: number, dup: boolean, parent: CipNode | null, z = -1): CipNode {
     this.count++;
     const g = this.g;
-    if (z >= 0) return new CipNode(this.nextId++, atom, z, DUPLICATE_MASS(g.mass[atom]), depth, dist, true, parent);
+    if (z >= 0 && parent !== null) {
+      return new CipNode(this.nextId++, atom, z, g.mancude.dupMass[parent.atom], depth, dist, true, parent);
+    }
     if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
     if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
     return new CipNode(this.nextId++, atom, g.z[atom], dup ? DUPLICATE_MASS(g.mass[atom]) : g.mass[atom], depth, dist, dup, parent);

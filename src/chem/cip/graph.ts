@@ -31,6 +31,11 @@ export interface CipGraph {
   axialAt: number[];
   /** Mancude ring bonds and the mean atomic number of each mancude atom's duplicate (P-92.1.4.4). */
   mancude: Mancude;
+  /**
+   * Per stereo element: may it carry an auxiliary descriptor? All units but ring-fixed ones at first; while
+   * Rule 6 is tried, only those that Rules 1-5 found stereogenic (see label.ts).
+   */
+  auxAllowed: boolean[];
   /** Per stereo element: its geometry is fixed by a small ring, so it is no stereogenic unit. */
   ringFixed: boolean[];
   hasBondStereo: boolean;
@@ -78,11 +83,12 @@ export function buildGraph(s: Structure): CipGraph {
       for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
     }
   });
+  const mass = s.atoms.map((a) => (a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)));
   const g: CipGraph = {
     s,
     n,
     z: s.atoms.map((a) => a.atomicNumber),
-    mass: s.atoms.map((a) => (a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber))),
+    mass,
     hCount: s.atoms.map((a) => a.hCount),
     nbr,
     ord,
@@ -90,12 +96,14 @@ export function buildGraph(s: Structure): CipGraph {
     tetraAt,
     bondAt,
     axialAt,
-    mancude: perceiveMancude(s, nbr, ord),
+    mancude: perceiveMancude(s, nbr, ord, mass),
     hasBondStereo,
     stereoCount: s.stereo.length,
     ringFixed: [],
+    auxAllowed: [],
   };
   g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
+  g.auxAllowed = g.ringFixed.map((f) => !f);
   g.hasBondStereo = s.stereo.some((e, i) => e.kind === 'double-bond' && !g.ringFixed[i]);
   bondAt.fill(-1);
   s.stereo.forEach((e, i) => {

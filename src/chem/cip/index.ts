@@ -9,7 +9,7 @@
 import type { CipLabel } from '../facts.js';
 import type { Structure } from '../types.js';
 import { buildGraph } from './graph.js';
-import { labelElement } from './label.js';
+import { labelPlain, labelRule6 } from './label.js';
 
 export interface CipResult {
   /** Index into s.stereo. */
@@ -21,9 +21,14 @@ export interface CipResult {
 
 export function assignCip(s: Structure): CipResult[] {
   const g = buildGraph(s);
+  const labels = s.stereo.map((_, i) => labelPlain(g, i));
+  if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
+    g.auxAllowed = labels.map((l) => l !== null);
+    for (let i = 0; i < labels.length; i++) if (labels[i] === null) labels[i] = labelRule6(g, i);
+  }
   return s.stereo.map((e, element) => ({
     element,
-    label: labelElement(g, element),
+    label: labels[element],
     atoms: e.kind === 'tetrahedral' ? [e.centre] : [e.ends[0], e.ends[1]],
   }));
 }

@@ -111,11 +111,20 @@ function rule6Candidates(g: CipGraph, index: number, e: StereoElement): number[]
   return e.ligands.filter((l) => l >= 0);
 }
 
-export function labelElement(g: CipGraph, index: number): CipLabel | null {
-  const e = g.s.stereo[index];
+/** Descriptors by Rules 1-5 alone (null where ligands tie). */
+export function labelPlain(g: CipGraph, index: number): CipLabel | null {
   if (g.ringFixed[index]) return null;
-  const plain = labelWith(g, index, e, -1);
-  if (plain !== null) return plain;
+  return labelWith(g, index, g.s.stereo[index], -1);
+}
+
+/**
+ * Proposed Rule 6 for a unit that Rules 1-5 leave tied: each tied ligand is tried as the reference, and the
+ * descriptor stands when every choice gives the same one. Call with `g.auxAllowed` limited to the units Rules 1-5
+ * found stereogenic, so that a unit that is no stereocentre (an adamantane bridgehead) lends no descriptor.
+ */
+export function labelRule6(g: CipGraph, index: number): CipLabel | null {
+  if (g.ringFixed[index]) return null;
+  const e = g.s.stereo[index];
   const found = new Set<CipLabel>();
   for (const ref of rule6Candidates(g, index, e)) {
     const l = labelWith(g, index, e, ref);
