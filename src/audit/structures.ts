@@ -25,22 +25,41 @@ function failed(message: string, line: number | null = null, offset: number | nu
   return { structure: null, facts: null, error: { message, line, offset } };
 }
 
-/** Reads one structure source; never throws. */
-export function readSource(source: StructureSource | null, engine: AuditEngine): ReadStructure {
-  if (source === null) return NOTHING;
-  if (source.text === null) return failed(source.error ?? 'the structure could not be read');
+/** A structure read but not yet described: the structure, or why it could not be read. */
+export type ReadOnly = { structure: ReadStructure['structure']; failure: ReadStructure | null };
+
+/** Reads one structure source without describing it; never throws. */
+export function readOnly(source: StructureSource | null, engine: AuditEngine): ReadOnly {
+  if (source === null) return { structure: null, failure: NOTHING };
+  if (source.text === null)
+    return { structure: null, failure: failed(source.error ?? 'the structure could not be read') };
   let read;
   try {
     read = engine.readStructure(source.text, { format: source.format });
   } catch (e) {
-    return failed(
-      `internal error while reading the ${source.format === 'smiles' ? 'SMILES' : 'molfile'}: ${(e as Error).message}`,
-    );
+    const what = source.format === 'smiles' ? 'SMILES' : 'molfile';
+    return {
+      structure: null,
+      failure: failed(`internal error while reading the ${what}: ${(e as Error).message}`),
+    };
   }
   if (!read.ok) {
     const what = source.format === 'smiles' ? 'SMILES' : source.file ? `molfile ${source.file}` : 'molfile';
-    return failed(`${what}: ${read.error.message}`, read.error.at.line ?? null, read.error.at.offset ?? null);
+    return {
+      structure: null,
+      failure: failed(
+        `${what}: ${read.error.message}`,
+        read.error.at.line ?? null,
+        read.error.at.offset ?? null,
+      ),
+    };
   }
+  return { structure: read.structure, failure: null };
+}
+
+/** Describes a read structure; an engine failure becomes the error of the result. */
+export function describeRead(read: ReadOnly, engine: AuditEngine): ReadStructure {
+  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
   try {
     return { structure: read.structure, facts: engine.describe(read.structure), error: null };
   } catch (e) {
@@ -54,6 +73,11 @@ export function readSource(source: StructureSource | null, engine: AuditEngine):
       },
     };
   }
+}
+
+/** Reads and describes one structure source; never throws. */
+export function readSource(source: StructureSource | null, engine: AuditEngine): ReadStructure {
+  return describeRead(readOnly(source, engine), engine);
 }
 
 /** The sources of a record: as the loader fetched them, else SMILES straight from the record. */
@@ -90,15 +114,26 @@ export function sourcesOf(loaded: LoadedRecord): NonNullable<LoadedRecord['sourc
 
 /** Reads and describes every structure of a record once; later calls return the same objects. */
 export class StructureCache {
+  private readonly reads = new WeakMap<LoadedRecord, ReadOnly>();
   private readonly mains = new WeakMap<LoadedRecord, ReadStructure>();
   private readonly comps = new WeakMap<LoadedRecord, ReadStructure[]>();
 
-  constructor(private readonly engine: AuditEngine) {}
+  constructor(readonly engine: AuditEngine) {}
+
+  /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
+  read(loaded: LoadedRecord): ReadOnly {
+    let r = this.reads.get(loaded);
+    if (!r) {
+      r = readOnly(sourcesOf(loaded).main, this.engine);
+      this.reads.set(loaded, r);
+    }
+    return r;
+  }
 
   main(loaded: LoadedRecord): ReadStructure {
     let m = this.mains.get(loaded);
     if (!m) {
-      m = readSource(sourcesOf(loaded).main, this.engine);
+      m = describeRead(this.read(loaded), this.engine);
       this.mains.set(loaded, m);
     }
     return m;

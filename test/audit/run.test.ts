@@ -185,6 +185,28 @@ describe('runAudit', () => {
     expect(seen.map((s) => s.sameKey)).toEqual([1, 1, 1, 1, 1, 1]);
   });
 
+  it('with a cheap formula, the registry index describes only records of the asked-for formula', async () => {
+    const seen: { id: string | null; priorChecks: string[]; sameKey: number }[] = [];
+    reg = tmpRegistry({
+      'compounds/a.yml': rec('LX-00001', 'achiral', '', 'AAA'),
+      'compounds/b.yml': rec('LX-00002', 'achiral', '', 'AAB'),
+      'compounds/c.yml': rec('LX-00003', 'achiral', '', 'BBB'),
+      'compounds/d.yml': rec('LX-00004', 'achiral', '', 'AAA'),
+    });
+    const base = fakeEngine();
+    const engine = {
+      ...base,
+      describe: (s: Parameters<typeof base.describe>[0]) => {
+        const facts = base.describe(s);
+        return { ...facts, constitutionKey: `${facts.constitutionKey[0]}/${facts.constitutionKey}` };
+      },
+      formula: (s: Parameters<typeof base.describe>[0]) => (s.title ?? '')[0]!,
+    };
+    await runAudit({ root: reg.root, paths: ['compounds/a.yml'], checks: [spyCheck(seen)], engine });
+    expect(seen).toEqual([{ id: 'LX-00001', priorChecks: [], sameKey: 2 }]);
+    expect([...base.describeCalls].sort()).toEqual(['AAA', 'AAA', 'AAB']); // BBB never described
+  });
+
   it('an engine failure while describing becomes a structure error, not a crash', async () => {
     reg = tmpRegistry({
       'compounds/a.yml': rec('LX-00001', 'achiral', '', 'BOOM'),
