@@ -60,7 +60,7 @@ function evidence(f: StructureFacts) {
   const undef = undefinedUnits(f);
   return {
     units: unitSummary(defined),
-    allUnits: unitSummary(f.units) + (undef.length ? ` (${undef.length} undefined)` : ''),
+    allUnits: unitSummary(f.units) + (undef.length ? `, ${undef.length} undefined` : ''),
     labels: defined.length ? defined.map((u) => `${u.label ?? '?'}`).join(',') : 'none are drawn',
     mirror: f.mirror.explanation || (f.chiral ? 'not superimposable on its mirror image' : 'superimposable'),
     undefinedCount: undef.length,

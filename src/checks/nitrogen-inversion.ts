@@ -27,7 +27,7 @@ function run(ctx: CheckContext): CheckOutcome {
   const out: RawFinding[] = [];
   const claims = STEREO_CLAIM_FORMS.includes(form);
   const others = definedUnits(f).filter((u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === 'tetrahedral'));
-  const atomsOf = (list: typeof f.invertibleNitrogens): string => list.map((n) => `atom ${n.atom}`).join(', ');
+  const atomsOf = (list: typeof f.invertibleNitrogens): string => list.map((n) => `(atom ${n.atom})`).join(', ');
   if (claims && others.length === 0) {
     const list = drawn.length ? drawn : f.invertibleNitrogens;
     out.push(

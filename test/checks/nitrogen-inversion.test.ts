@@ -10,7 +10,7 @@ describe('nitrogen-inversion', () => {
   it('fails a stereo claim resting only on an amine nitrogen', () => {
     const o = runCheck(check, ctx({ record: record({ form: 'single-enantiomer' }), main: read(amine(true)) }));
     expect(ids(o)).toEqual(['claim-rests-on-invertible-nitrogen']);
-    expect(o.findings[0].data).toMatchObject({ atoms: 'atom 2', drawnWithStereo: true });
+    expect(o.findings[0].data).toMatchObject({ atoms: '(atom 2)', drawnWithStereo: true });
   });
   it('also when the nitrogen is not drawn with stereo but is the only candidate', () => {
     expect(ids(runCheck(check, ctx({ record: record({ form: 'racemate' }), main: read(amine(false)) })))).toEqual([
