@@ -6,6 +6,7 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { makeAuditCommand } from '../../src/cli/commands/audit.js';
+import { run } from '../../src/cli/main.js';
 import { UsageError, type Io } from '../../src/cli/command.js';
 import { tmpRegistry, type TmpRegistry } from '../registry/tmp-registry.js';
 import { fakeEngine } from './fake-engine.js';
@@ -116,5 +117,22 @@ describe('stereogate audit output', () => {
     );
     expect(code).toBe(0);
     expect(JSON.parse(t.out.join('')).records.map((r: { id: string }) => r.id)).toEqual(['LX-1']);
+  });
+});
+
+describe('stereogate audit through the CLI entry (real engine and checks)', () => {
+  it('exit 2 with a message for usage errors, 1 for an error finding, 0 with --fail-on never', async () => {
+    // meso-tartaric acid is achiral (IUPAC Gold Book, "meso-compound"), so "racemate" is an error
+    reg = tmpRegistry({
+      'compounds/a.yml':
+        'id: LX-00002\nstructure:\n  smiles: "OC(=O)[C@@H](O)[C@@H](O)C(=O)O"\nstereo:\n  form: racemate\n',
+    });
+    const t = io();
+    expect(await run(['audit', '--root', reg.root, '--fail-on', 'sometimes'], t.io)).toBe(2);
+    expect(t.err.join('')).toContain('--fail-on must be one of error, warning, never');
+    const t2 = io();
+    expect(await run(['audit', '--root', reg.root], t2.io)).toBe(1);
+    expect(t2.out.join('')).toMatch(/✗ error +form-matches-structure line 5/);
+    expect(await run(['audit', '--root', reg.root, '--fail-on', 'never'], io().io)).toBe(0);
   });
 });
