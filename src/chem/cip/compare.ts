@@ -43,6 +43,11 @@ export class Ranker {
    * non-stereogenic. This makes every auxiliary descriptor independent of the order of computation.
    */
   scope: CipNode;
+  /**
+   * Mirror mode: compare as in the mirror image, where every chiral descriptor is inverted (R/S, M/P) and the
+   * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
+   */
+  mirror = false;
 
   constructor(
     readonly dg: Digraph,
@@ -72,11 +77,14 @@ export class Ranker {
   /** Run `f` with `node` as the scope (while finding the auxiliary descriptor of `node`). */
   within<T>(node: CipNode, f: () => T): T {
     const saved = this.scope;
+    const savedMirror = this.mirror;
     this.scope = node;
+    this.mirror = false;
     try {
       return f();
     } finally {
       this.scope = saved;
+      this.mirror = savedMirror;
     }
   }
 
@@ -100,7 +108,7 @@ export class Ranker {
       case RULE_4C:
         return this.stereoValue(n, rule4c);
       case RULE_5:
-        return this.stereoValue(n, rule5);
+        return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
       case RULE_6:
         return rule6(n, this.dg.rule6Ref);
       default:
@@ -167,7 +175,8 @@ export class Ranker {
   sorted(node: CipNode, from: CipNode | null, level: number): SortedBranches {
     // outside the scope every descriptor is hidden, so such traversals are cached apart
     const hidden = level >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
-    const key = ((from === null ? 0 : from.id + 1) * 16 + level) * 2 + hidden;
+    const mirrored = this.mirror && level >= RULE_5 ? 2 : 0;
+    const key = ((from === null ? 0 : from.id + 1) * 16 + level) * 4 + hidden + mirrored;
     if (node.sorted === null) node.sorted = new Map();
     const hit = node.sorted.get(key);
     if (hit) return hit;
@@ -190,3 +199,9 @@ export class Ranker {
 }
 
 export { CipNode };
+
+function invertChiral(l: CipLabel | null): CipLabel | null {
+  if (l === 'e') return 'z';
+  if (l === 'z') return 'e';
+  return l === 'R' ? 'S' : l === 'S' ? 'R' : l === 'M' ? 'P' : l === 'P' ? 'M' : l;
+}

@@ -114,14 +114,15 @@ export function buildGraph(s: Structure): CipGraph {
 
 /**
  * Geometry that a small ring fixes is not a stereogenic unit: a double bond in a ring of fewer than 8 atoms
- * (only the cis form exists), an axis bond inside a ring (no rotation about it). Common practice, no source.
+ * (only the cis form exists), an axis bond inside a ring of up to 6 atoms (fluorene, phenanthrene: planar;
+ * a bridged biaryl with a 7-membered ring stays axially chiral, as the suite's VS023). Common practice, no source.
  */
 function fixedByRing(g: CipGraph, e: StereoElement): boolean {
   if (e.kind === 'double-bond') {
     const [u, v] = e.ends;
     return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
   }
-  if (e.kind === 'axial' && e.subtype === 'biaryl') return ringSizeThrough(g, e.ends[0], e.ends[1], 64) > 0;
+  if (e.kind === 'axial' && e.subtype === 'biaryl') return ringSizeThrough(g, e.ends[0], e.ends[1], 6) > 0;
   return false;
 }
 

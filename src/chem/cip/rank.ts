@@ -33,9 +33,9 @@ function insertionSort(order: number[], cmp: (a: number, b: number) => number): 
 
 /**
  * Rank the branches `ligands` of `centre` (each explored away from `centre`) under rules up to `level`.
- * Pseudoasymmetry: reflection inverts every chiral descriptor, which reverses exactly the comparisons that Rule 5
- * decides; when the mirror-image ranking is an odd permutation of this one the descriptor does not change on
- * reflection, so the unit is pseudoasymmetric (P-92.1.1 / P-93.5.1.4, r/s).
+ * Pseudoasymmetry: reflection inverts every chiral descriptor, so the ligands are ranked again as in the mirror
+ * image (only comparisons that Rule 5 or later decided can change); when the mirror-image ranking is an odd
+ * permutation of this one the descriptor does not change on reflection: the unit is pseudoasymmetric (r/s).
  */
 export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], level: number): Ranking {
   const k = ligands.length;
@@ -51,9 +51,23 @@ export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], lev
   const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
   const tied = tieWithPrev.some((t) => t);
   let pseudo = false;
-  if (!tied && m.some((row) => row.some((c) => Math.abs(c) - 1 === RULE_5))) {
-    const mirrored = (a: number, b: number): number => (Math.abs(m[a][b]) - 1 === RULE_5 ? -m[a][b] : m[a][b]);
-    const mirror = insertionSort(ligands.map((_, i) => i), mirrored);
+  if (!tied && m.some((row) => row.some((c) => Math.abs(c) - 1 >= RULE_5))) {
+    // rank again as in the mirror image (chiral descriptors inverted)
+    const mm: number[][] = ligands.map(() => new Array<number>(k).fill(0));
+    const saved = rk.mirror;
+    rk.mirror = true;
+    try {
+      for (let i = 0; i < k; i++) {
+        for (let j = i + 1; j < k; j++) {
+          const c = Math.abs(m[i][j]) - 1 < RULE_5 ? m[i][j] : rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
+          mm[i][j] = c;
+          mm[j][i] = -c;
+        }
+      }
+    } finally {
+      rk.mirror = saved;
+    }
+    const mirror = insertionSort(ligands.map((_, i) => i), (a, b) => mm[a][b]);
     const pos = new Array<number>(k);
     order.forEach((li, p) => (pos[li] = p));
     pseudo = !isEvenPermutation(mirror.map((li) => pos[li]));

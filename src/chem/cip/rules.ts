@@ -41,9 +41,13 @@ export function rule2(n: CipNode): number {
   return n.mass;
 }
 
-/** Rule 3 (P-92.4, Rule 3): seqcis ('Z') precedes seqtrans ('E'), which precedes a non-stereogenic bond. */
+/**
+ * Rule 3 (P-92.4, Rule 3): seqcis ('Z') precedes seqtrans ('E'), which precedes a non-stereogenic bond. A bond
+ * whose own ranking rests on Rule 5 ('z'/'e') counts only as pseudoasymmetric unit (Rule 4a), as the suite's VS214
+ * requires.
+ */
 export function rule3(label: CipLabel | null): number {
-  return label === 'Z' || label === 'z' ? 2 : label === 'E' || label === 'e' ? 1 : 0;
+  return label === 'Z' ? 2 : label === 'E' ? 1 : 0;
 }
 
 /**
@@ -60,9 +64,12 @@ export function rule4c(label: CipLabel | null): number {
   return label === 'r' || label === 'm' ? 2 : label === 's' || label === 'p' ? 1 : 0;
 }
 
-/** Rule 5 (P-92.6, Rule 5): 'R' precedes 'S' and 'M' precedes 'P'. */
+/**
+ * Rule 5 (P-92.6, Rule 5): 'R' precedes 'S', 'M' precedes 'P', seqcis precedes seqtrans for a double bond
+ * whose own ranking rests on Rule 5 ('z' before 'e'; these invert on reflection like R and S).
+ */
 export function rule5(label: CipLabel | null): number {
-  return label === 'R' || label === 'M' ? 2 : label === 'S' || label === 'P' ? 1 : 0;
+  return label === 'R' || label === 'M' || label === 'z' ? 2 : label === 'S' || label === 'P' || label === 'e' ? 1 : 0;
 }
 
 /** Proposed Rule 6 (Hanson et al. 2018): an undifferentiated reference node has priority over any other. */

@@ -38,7 +38,11 @@ function byAtom(a: string, b: string): number {
 }
 
 function split(labels: string | undefined): string[] {
-  return (labels ?? '').trim().split(/\s+/).filter((x) => x.length > 0).sort(byAtom);
+  return (labels ?? '')
+    .trim()
+    .split(/\s+/)
+    .filter((x) => x.length > 0)
+    .sort(byAtom);
 }
 
 export function loadSmiles(): SuiteRecord[] {
@@ -60,11 +64,20 @@ export function loadSdf(name: 'compounds_2d.sdf' | 'compounds_3d.sdf'): SuiteRec
   const out: SuiteRecord[] = [];
   for (const rec of readSdRecords(text)) {
     if (!rec.result.ok) {
-      out.push({ id: `record ${rec.record}`, expected: [], structure: null, error: rec.result.error.message });
+      out.push({
+        id: `record ${rec.record}`,
+        expected: [],
+        structure: null,
+        error: rec.result.error.message,
+      });
       continue;
     }
     const s = rec.result.structure;
-    out.push({ id: s.properties['STRUCTURE_ID'] ?? s.title ?? `record ${rec.record}`, expected: split(s.properties['CIP_LABELS']), structure: s });
+    out.push({
+      id: s.properties['STRUCTURE_ID'] ?? s.title ?? `record ${rec.record}`,
+      expected: split(s.properties['CIP_LABELS']),
+      structure: s,
+    });
   }
   return out;
 }
