@@ -115,7 +115,7 @@ export function schemaFindings(loaded: LoadedRecord, config: AuditConfig): Findi
   if (configured === 'off') return [];
   return loaded.problems.map((p) => ({
     check: SCHEMA_CHECK_ID,
-    messageId: 'record-problem',
+    messageId: p.code ?? 'record-problem',
     severity: configured ?? 'error',
     message: p.message,
     data: { path: p.path, problem: p.message },

@@ -28,7 +28,7 @@ export function loadRegistry(root: string, options: { recordDirs: readonly strin
       id: null,
       record: null,
       positions: NO_POSITIONS,
-      problems: [{ path: '', line: null, message: `the record file ${r.message}` }],
+      problems: [{ path: '', line: null, code: 'unreadable-file', message: `the record file ${r.message}` }],
       origin: { kind: 'file' },
     });
   }
@@ -47,7 +47,7 @@ export function loadRecordFile(realRoot: string, abs: string): LoadedRecord {
       id: null,
       record: null,
       positions: NO_POSITIONS,
-      problems: [{ path: '', line: null, message: `the record file ${read.error}` }],
+      problems: [{ path: '', line: null, code: 'unreadable-file', message: `the record file ${read.error}` }],
       origin: { kind: 'file' },
     };
   }
@@ -132,6 +132,7 @@ export function markDuplicateIds(records: LoadedRecord[]): void {
       r.problems.push({
         path: 'id',
         line: lineOf(r.positions, 'id'),
+        code: 'duplicate-id',
         message: `id: '${id}' is also used by ${others.join(', ')}; every record needs its own id`,
       });
     }

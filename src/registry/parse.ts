@@ -40,6 +40,7 @@ export function parseDocumentText(text: string): ParsedDocument {
     problems.push({
       path: '',
       line,
+      code: 'yaml-syntax',
       message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, '')}`,
     });
   }
@@ -51,7 +52,9 @@ export function parseDocumentText(text: string): ParsedDocument {
     return {
       value: null,
       positions,
-      problems: [{ path: '', line: 1, message: `cannot be read: ${(e as Error).message}` }],
+      problems: [
+        { path: '', line: 1, code: 'yaml-syntax', message: `cannot be read: ${(e as Error).message}` },
+      ],
     };
   }
   return { value, positions, problems };
@@ -68,7 +71,7 @@ export function parseRecordText(text: string): ParsedRecord {
       record: null,
       id: null,
       positions,
-      problems: [{ path: '', line: 1, message: 'the file is empty' }],
+      problems: [{ path: '', line: 1, code: 'empty-file', message: 'the file is empty' }],
     };
   }
   const id =
@@ -76,7 +79,12 @@ export function parseRecordText(text: string): ParsedRecord {
       ? (value as { id: string }).id.trim() || null
       : null;
   const shape = validateRecordShape(value);
-  const problems = shape.map((p) => ({ path: p.path, message: p.message, line: lineOf(positions, p.path) }));
+  const problems = shape.map((p) => ({
+    path: p.path,
+    message: p.message,
+    line: lineOf(positions, p.path),
+    code: p.code,
+  }));
   problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0));
   return { value, record: problems.length === 0 ? (value as CompoundRecord) : null, id, positions, problems };
 }

@@ -12,7 +12,26 @@ export interface SchemaProblem {
   /** Dotted field path; '' for the whole document. */
   path: string;
   message: string;
+  /** Stable id of the kind of problem (see PROBLEM_CODES). */
+  code: string;
 }
+
+/** ajv keyword -> our problem id. */
+export const PROBLEM_CODES: Record<string, string> = {
+  required: 'missing-field',
+  additionalProperties: 'unknown-field',
+  enum: 'not-allowed-value',
+  type: 'wrong-type',
+  minimum: 'out-of-range',
+  maximum: 'out-of-range',
+  exclusiveMinimum: 'out-of-range',
+  exclusiveMaximum: 'out-of-range',
+  minLength: 'empty-value',
+  maxLength: 'too-long',
+  pattern: 'spaces-around',
+  minItems: 'too-few-items',
+  oneOf: 'structure-choice',
+};
 
 const ajv = new Ajv({
   allErrors: true,
@@ -86,7 +105,7 @@ const TYPE_WORDS: Record<string, string> = {
   boolean: 'true or false',
 };
 
-function explainOne(e: ErrorObject, value: unknown, what: string): SchemaProblem | null {
+function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaProblem, 'code'> | null {
   const path = pointerToPath(e.instancePath);
   const label = path === '' ? `the ${what}` : path;
   const got = at(value, path);
@@ -180,7 +199,7 @@ function explain(errors: ErrorObject[], value: unknown, what: string): SchemaPro
     const p = explainOne(e, value, what);
     if (!p || seen.has(p.message)) continue;
     seen.add(p.message);
-    out.push(p);
+    out.push({ ...p, code: PROBLEM_CODES[e.keyword] ?? 'schema' });
   }
   return out;
 }

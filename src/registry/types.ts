@@ -80,8 +80,17 @@ export interface LoadedRecord {
   id: string | null;
   record: CompoundRecord | null;
   positions: FieldPositions;
-  /** Schema / syntax problems; a record with any is not audited further. */
-  problems: { message: string; path: string; line: number | null }[];
+  /**
+   * Schema / syntax / registry problems (the audit reports them as 'record-schema' findings). A record that
+   * fails the schema has `record` null and only the structure check runs on it.
+   */
+  problems: {
+    message: string;
+    path: string;
+    line: number | null;
+    /** Stable problem id, e.g. 'not-allowed-value', 'unknown-field', 'yaml-syntax', 'duplicate-id'. */
+    code?: string;
+  }[];
   /** Where this record came from: a record file, or row/record n of a bulk input. */
   origin: { kind: 'file' } | { kind: 'bulk'; source: string; record: number; line: number };
   /**

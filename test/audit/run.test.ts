@@ -66,7 +66,12 @@ describe('runAudit', () => {
     const result = await runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine() });
     const f = result.records[0]!.findings.filter((x) => x.check === 'record-schema');
     expect(f).toHaveLength(1);
-    expect(f[0]).toMatchObject({ severity: 'error', line: 5, field: 'stereo.form' });
+    expect(f[0]).toMatchObject({
+      severity: 'error',
+      line: 5,
+      field: 'stereo.form',
+      messageId: 'not-allowed-value',
+    });
     expect(result.records[0]!.declared.form).toBeNull();
   });
 

@@ -49,7 +49,7 @@ describe('record positions and schema problems', () => {
     expect(r.record).toBeNull();
     expect(r.id).toBe('LX-00001');
     expect(r.problems).toHaveLength(1);
-    expect(r.problems[0]).toMatchObject({ path: 'stereo.form', line: 6 });
+    expect(r.problems[0]).toMatchObject({ path: 'stereo.form', line: 6, code: 'not-allowed-value' });
     expect(r.problems[0]!.message).toContain("'racemic' is not one of achiral, meso");
     expect(r.problems[0]!.message).toContain("did you mean 'racemate'?");
   });
@@ -77,7 +77,10 @@ describe('record positions and schema problems', () => {
     expect(byPath['stereo.form']!.message).toContain('required');
     expect(byPath['stereo.ee']).toMatchObject({ line: 6 });
     expect(byPath['stereo.ee']!.message).toContain('at most 100');
-    expect(byPath['stereo.colour']).toMatchObject({ line: 7 });
+    expect(byPath['stereo.colour']).toMatchObject({ line: 7, code: 'unknown-field' });
+    expect(byPath['stereo.form']!.code).toBe('missing-field');
+    expect(byPath['stereo.ee']!.code).toBe('out-of-range');
+    expect(byPath['structure']!.code).toBe('structure-choice');
     expect(byPath['stereo.colour']!.message).toContain('not a field');
     expect(byPath['structure']).toMatchObject({ line: 2 });
     expect(byPath['structure']!.message).toContain('exactly one of smiles or molfile (found both)');
@@ -103,6 +106,7 @@ describe('record positions and schema problems', () => {
     expect(r.record).toBeNull();
     expect(r.problems.length).toBeGreaterThan(0);
     expect(r.problems[0]!.message).toMatch(/^not valid YAML\/JSON/);
+    expect(r.problems[0]!.code).toBe('yaml-syntax');
     expect(r.problems[0]!.line).toBeGreaterThanOrEqual(3);
   });
 
@@ -144,7 +148,7 @@ describe('registry-wide problems', () => {
       'compounds/sub/b.yml': GOOD.replace('ee: 99', 'ee: 98'),
     });
     expect(records.map((r) => r.file)).toEqual(['compounds/a.yml', 'compounds/sub/b.yml']);
-    expect(records[0]!.problems[0]).toMatchObject({ path: 'id', line: 1 });
+    expect(records[0]!.problems[0]).toMatchObject({ path: 'id', line: 1, code: 'duplicate-id' });
     expect(records[0]!.problems[0]!.message).toContain('compounds/sub/b.yml');
     expect(records[1]!.problems[0]!.message).toContain('compounds/a.yml');
   });
