@@ -56,7 +56,11 @@ function measuredAlike(a: Rotation, b: Rotation): boolean {
   const nm = (r: Rotation): number => r.wavelength_nm ?? 589;
   if (Math.abs(nm(a) - nm(b)) > 1) return false;
   if ((a.solvent ?? '').trim().toLowerCase() !== (b.solvent ?? '').trim().toLowerCase()) return false;
-  if (a.temperature_c !== undefined && b.temperature_c !== undefined && Math.abs(a.temperature_c - b.temperature_c) > 5) {
+  if (
+    a.temperature_c !== undefined &&
+    b.temperature_c !== undefined &&
+    Math.abs(a.temperature_c - b.temperature_c) > 5
+  ) {
     return false;
   }
   return true;
@@ -83,16 +87,26 @@ function run(ctx: CheckContext): CheckOutcome {
   if (me && !me.underReview) return { findings: [], notApplicable: true };
   const form = record.stereo.form;
   const out: RawFinding[] = [];
-  const add = (id: Id, other: RegistryEntry, data: RawFinding['data'], severity?: RawFinding['severity']): void => {
+  const add = (
+    id: Id,
+    other: RegistryEntry,
+    data: RawFinding['data'],
+    severity?: RawFinding['severity'],
+  ): void => {
     out.push(
-      finding(id, id.startsWith('enantiomer-rotation') ? 'stereo.rotation.value' : 'structure', {
-        form,
-        otherId: other.id ?? other.file,
-        otherFile: other.file,
-        otherName: other.record.name ? `, ${other.record.name}` : '',
-        otherForm: other.record.stereo.form,
-        ...data,
-      }, severity),
+      finding(
+        id,
+        id.startsWith('enantiomer-rotation') ? 'stereo.rotation.value' : 'structure',
+        {
+          form,
+          otherId: other.id ?? other.file,
+          otherFile: other.file,
+          otherName: other.record.name ? `, ${other.record.name}` : '',
+          otherForm: other.record.stereo.form,
+          ...data,
+        },
+        severity,
+      ),
     );
   };
   let compared = 0;
@@ -123,7 +137,8 @@ function run(ctx: CheckContext): CheckOutcome {
         else if (
           form === 'single-enantiomer' &&
           otherForm === 'single-enantiomer' &&
-          Math.abs(Math.abs(a.value) - Math.abs(b.value)) > Math.max(tol, 0.1 * Math.max(Math.abs(a.value), Math.abs(b.value)))
+          Math.abs(Math.abs(a.value) - Math.abs(b.value)) >
+            Math.max(tol, 0.1 * Math.max(Math.abs(a.value), Math.abs(b.value)))
         ) {
           add('enantiomer-rotation-magnitude', other, data, 'note');
         }
@@ -143,7 +158,8 @@ function run(ctx: CheckContext): CheckOutcome {
 export const consistentWithRegistry: CheckModule = {
   id: 'consistent-with-registry',
   defaultSeverity: 'error',
-  summary: 'A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.',
+  summary:
+    'A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.',
   explanation:
     'Records of the same constitution are related by the engine (identical, enantiomers, diastereomers). An ' +
     'identical structure is the same compound: register a batch, not a new number; under a different form one ' +

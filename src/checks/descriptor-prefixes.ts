@@ -43,13 +43,18 @@ function notation(p: ParsedDescriptors): string {
   return parts.join(', ');
 }
 
-export function prefixFindings(ctx: CheckContext, decl: DeclaredDescriptors, facts: StructureFacts): RawFinding[] {
+export function prefixFindings(
+  ctx: CheckContext,
+  decl: DeclaredDescriptors,
+  facts: StructureFacts,
+): RawFinding[] {
   const record = ctx.record;
   if (!record) return [];
   const form = record.stereo.form;
   const out: RawFinding[] = [];
   const sources: { field: string; text: string; p: ParsedDescriptors }[] = [];
-  if (decl.field) sources.push({ field: 'stereo.descriptors', text: record.stereo.descriptors ?? '', p: decl.field });
+  if (decl.field)
+    sources.push({ field: 'stereo.descriptors', text: record.stereo.descriptors ?? '', p: decl.field });
   if (decl.name) sources.push({ field: 'name', text: record.name ?? '', p: decl.name });
   const seen = new Set<Id>();
   const add = (id: Id, field: string, data: RawFinding['data'], severity?: RawFinding['severity']): void => {
@@ -58,7 +63,9 @@ export function prefixFindings(ctx: CheckContext, decl: DeclaredDescriptors, fac
     out.push(finding(id, field, { field, form, ...data }, severity));
   };
   const drawnAbsolute =
-    facts.enhanced.meaning === 'absolute' && ctx.main.structure?.chiralFlag !== false && facts.chiral === true;
+    facts.enhanced.meaning === 'absolute' &&
+    ctx.main.structure?.chiralFlag !== false &&
+    facts.chiral === true;
   for (const { field, text, p } of sources) {
     if (p.problemDetails.length > 0 && p.items.length === 0 && p.mode === 'none') continue;
     if (p.mode === 'racemic') {
@@ -72,12 +79,16 @@ export function prefixFindings(ctx: CheckContext, decl: DeclaredDescriptors, fac
       add('absolute-descriptors-with-racemate', field, { text });
     }
     if (p.mode === 'relative') {
-      if (form === 'racemate') add('relative-notation-with-racemate', field, { notation: notation(p), text }, 'warning');
+      if (form === 'racemate')
+        add('relative-notation-with-racemate', field, { notation: notation(p), text }, 'warning');
       else if ((form === 'single-enantiomer' || form === 'enantioenriched') && drawnAbsolute) {
         add('relative-notation-with-absolute-drawing', field, { notation: notation(p), text }, 'note');
       }
     }
-    if ((p.rotationSign === '+' || p.rotationSign === '-') && ['racemate', 'meso', 'achiral'].includes(form)) {
+    if (
+      (p.rotationSign === '+' || p.rotationSign === '-') &&
+      ['racemate', 'meso', 'achiral'].includes(form)
+    ) {
       add('optical-sign-with-inactive-form', field, { sign: p.rotationSign === '+' ? '(+)' : '(−)', text });
     }
     if (p.words.includes('meso') && ['single-enantiomer', 'enantioenriched', 'racemate'].includes(form)) {

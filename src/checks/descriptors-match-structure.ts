@@ -3,7 +3,11 @@
  * component's descriptors) against the CIP labels computed from the structure, and their prefixes (rac, rel,
  * RS/SR, *, (±), (+)/(−), meso) against the declared form.
  */
-import { compareDescriptors, type DescriptorComparison, type ParsedDescriptors } from '../chem/descriptors.js';
+import {
+  compareDescriptors,
+  type DescriptorComparison,
+  type ParsedDescriptors,
+} from '../chem/descriptors.js';
 import type { StructureFacts } from '../chem/facts.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
 import { declaredDescriptors, finding, labelList } from './words.js';
@@ -36,7 +40,7 @@ const messages = {
     '{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every ' +
     'stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.',
   'name-and-descriptors-disagree':
-    "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
+    'The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.',
   'descriptor-remark': '{field}: {remark}.',
   'fischer-not-compared':
     '{field} uses the Fischer–Rosanoff descriptor {fischer}, which is defined by analogy with glyceraldehyde and ' +
@@ -64,23 +68,31 @@ function compareOne(
   const add = (id: Id, data: RawFinding['data'], severity?: RawFinding['severity']): void => {
     out.push(finding(id, field, { field, text, ...data }, severity));
   };
-  for (const p of parsed.problemDetails) add('descriptor-unreadable', { problem: p.message, offset: p.offset });
+  for (const p of parsed.problemDetails)
+    add('descriptor-unreadable', { problem: p.message, offset: p.offset });
   for (const r of parsed.remarks) add('descriptor-remark', { remark: r }, 'note');
-  if (parsed.fischer && parsed.items.length === 0) add('fischer-not-compared', { fischer: parsed.fischer }, 'note');
+  if (parsed.fischer && parsed.items.length === 0)
+    add('fischer-not-compared', { fischer: parsed.fischer }, 'note');
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
   const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
   const computed = labelList(facts.units);
   if (cmp.method === 'per-locant') {
     if (cmp.mismatches.length) {
       const mismatches = cmp.mismatches
-        .map((m) => `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join('–')})`)
+        .map(
+          (m) =>
+            `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join('–')})`,
+        )
         .join('; ');
       add('descriptor-label-mismatch', { count: cmp.mismatches.length, mismatches, method: cmp.method });
     }
-    if (cmp.notStereoUnits.length) add('descriptor-not-stereo-unit', { locants: cmp.notStereoUnits.join(', '), computed });
+    if (cmp.notStereoUnits.length)
+      add('descriptor-not-stereo-unit', { locants: cmp.notStereoUnits.join(', '), computed });
     if (cmp.undefinedAt.length) add('descriptor-at-undefined-unit', { locants: cmp.undefinedAt.join(', ') });
     if (cmp.agrees && cmp.unlisted.length) {
-      const missing = cmp.unlisted.map((u) => `${u.locant ?? `atom ${u.atoms.join('–')}`} (${u.label})`).join(', ');
+      const missing = cmp.unlisted
+        .map((u) => `${u.locant ?? `atom ${u.atoms.join('–')}`} (${u.label})`)
+        .join(', ');
       add('descriptors-incomplete', { missing, computed, method: cmp.method }, 'warning');
     }
     return cmp;
@@ -96,7 +108,12 @@ function compareOne(
     // A racemate drawn without stereo marks is common practice; other claims should draw what they state.
     add(
       'descriptors-cite-undefined-units',
-      { undefinedCount: facts.undefined, declaredCount: parsed.items.length, definedCount, mode: parsed.mode },
+      {
+        undefinedCount: facts.undefined,
+        declaredCount: parsed.items.length,
+        definedCount,
+        mode: parsed.mode,
+      },
       parsed.mode === 'racemic' ? 'note' : undefined,
     );
     return cmp;
@@ -105,7 +122,10 @@ function compareOne(
     const subset = (d: Record<string, number>): boolean =>
       Object.entries(d).every(([k, v]) => v <= (cmp.computedCounts[k] ?? 0));
     const inv = Object.fromEntries(
-      Object.entries(cmp.declaredCounts).map(([k, v]) => [({ R: 'S', S: 'R', M: 'P', P: 'M' } as Record<string, string>)[k] ?? k, v]),
+      Object.entries(cmp.declaredCounts).map(([k, v]) => [
+        ({ R: 'S', S: 'R', M: 'P', P: 'M' } as Record<string, string>)[k] ?? k,
+        v,
+      ]),
     );
     const mayInvert = parsed.mode === 'racemic' || parsed.mode === 'relative';
     const direct = subset(cmp.declaredCounts);
@@ -120,7 +140,9 @@ function compareOne(
         computedCounts: countsText(cmp.computedCounts),
         computed,
         whyNotPerLocant: cmp.whyNotPerLocant ?? '',
-        invertNote: mayInvert ? '; relative/racemic descriptors were also tried against the mirror image' : '',
+        invertNote: mayInvert
+          ? '; relative/racemic descriptors were also tried against the mirror image'
+          : '',
         method: cmp.method,
       });
     }
@@ -151,35 +173,63 @@ function run(ctx: CheckContext): CheckOutcome {
   const note = (what: string, cmp: DescriptorComparison | null): void => {
     if (!cmp || cmp.method === 'none') return;
     const how = cmp.method === 'per-locant' ? 'per locant (atom maps)' : `as counts (${cmp.whyNotPerLocant})`;
-    evidence.push(`${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`);
+    evidence.push(
+      `${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`,
+    );
   };
   const fieldText = record.stereo.descriptors ?? '';
-  if (decl.field) note(fieldText, compareOne('stereo.descriptors', fieldText, decl.field, f, out, record.stereo.form, evidence));
+  if (decl.field)
+    note(
+      fieldText,
+      compareOne('stereo.descriptors', fieldText, decl.field, f, out, record.stereo.form, evidence),
+    );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
-      const nameText = (record.name ?? '').slice(0, (record.name ?? '').length - decl.name.rest.length).replace(/[-\s]+$/, '');
+      const nameText = (record.name ?? '')
+        .slice(0, (record.name ?? '').length - decl.name.rest.length)
+        .replace(/[-\s]+$/, '');
       out.push(finding('name-and-descriptors-disagree', 'name', { nameText, fieldText }, 'warning'));
     } else if (!decl.field || decl.field.items.length === 0) {
       const name = record.name ?? '';
-      const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2013\u2212]+$/, '');
+      const front = name
+        .slice(0, name.length - decl.name.rest.length)
+        .replace(/[-\s\u2010-\u2013\u2212]+$/, '');
       note(front, compareOne('name', front, decl.name, f, out, record.stereo.form, evidence));
     }
   } else if (decl.name) {
     for (const p of decl.name.problemDetails) {
-      out.push(finding('descriptor-unreadable', 'name', { field: 'name', text: record.name ?? '', problem: p.message, offset: p.offset }));
+      out.push(
+        finding('descriptor-unreadable', 'name', {
+          field: 'name',
+          text: record.name ?? '',
+          problem: p.message,
+          offset: p.offset,
+        }),
+      );
     }
     if (decl.name.fischer && !decl.field) {
-      out.push(finding('fischer-not-compared', 'name', { field: 'name', fischer: decl.name.fischer }, 'note'));
+      out.push(
+        finding('fischer-not-compared', 'name', { field: 'name', fischer: decl.name.fischer }, 'note'),
+      );
     }
   }
   (record.stereo.components ?? []).forEach((c, i) => {
     const cf = ctx.components[i]?.facts;
     if (!c.descriptors || !cf) return;
     const field = `stereo.components.${i}.descriptors`;
-    note(`component ${i + 1} ${c.descriptors}`, compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, 'component', evidence));
+    note(
+      `component ${i + 1} ${c.descriptors}`,
+      compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, 'component', evidence),
+    );
   });
   out.push(...prefixFindings(ctx, decl, f));
-  const hasAny = decl.field !== null || (decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== 'none' || decl.name.words.length > 0 || decl.name.rotationSign !== null));
+  const hasAny =
+    decl.field !== null ||
+    (decl.name !== null &&
+      (decl.name.items.length > 0 ||
+        decl.name.mode !== 'none' ||
+        decl.name.words.length > 0 ||
+        decl.name.rotationSign !== null));
   const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
   if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
   if (out.some((x) => x.severity !== 'note')) return { findings: out };
@@ -189,7 +239,8 @@ function run(ctx: CheckContext): CheckOutcome {
 export const descriptorsMatchStructure: CheckModule = {
   id: 'descriptors-match-structure',
   defaultSeverity: 'error',
-  summary: 'Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.',
+  summary:
+    'Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.',
   explanation:
     'Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for ' +
     'pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and ' +

@@ -61,32 +61,52 @@ function run(ctx: CheckContext): CheckOutcome {
     out.push(finding(id, field, { form, meaning: f.enhanced.meaning, ...data }, severity));
   };
   if (form === 'single-enantiomer' && and.length > 0) {
-    add('and-group-with-single-enantiomer', 'stereo.form', { atoms: atomList(and[0].atoms), group: and[0].id });
+    add('and-group-with-single-enantiomer', 'stereo.form', {
+      atoms: atomList(and[0].atoms),
+      group: and[0].id,
+    });
   }
   if (form === 'racemate') {
-    if (or.length > 0) add('or-group-with-racemate', 'stereo.form', { atoms: atomList(or[0].atoms), group: or[0].id });
-    else if (and.length > 1) add('several-and-groups-with-racemate', 'stereo.form', { count: and.length }, 'warning');
+    if (or.length > 0)
+      add('or-group-with-racemate', 'stereo.form', { atoms: atomList(or[0].atoms), group: or[0].id });
+    else if (and.length > 1)
+      add('several-and-groups-with-racemate', 'stereo.form', { count: and.length }, 'warning');
     else if (and.length === 0 && f.enhanced.meaning === 'absolute' && f.chiral === true) {
       const flag = ctx.main.structure?.chiralFlag === true ? '; the molfile chiral flag is set' : '';
       const labels = defined.map((u) => u.label ?? '?').join(',');
       // With rac-/RS descriptors the record says what the drawing means; without them it reads as one enantiomer.
       const racemicNamed = parsed?.mode === 'racemic';
-      add('racemate-drawn-absolute', 'stereo.form', { labels, flag, racemicDescriptors: racemicNamed }, racemicNamed ? 'note' : 'warning');
+      add(
+        'racemate-drawn-absolute',
+        'stereo.form',
+        { labels, flag, racemicDescriptors: racemicNamed },
+        racemicNamed ? 'note' : 'warning',
+      );
     }
   }
   if (parsed && parsed.mode === 'absolute' && parsed.items.some((it) => 'RSMP'.includes(it.label))) {
     if (or.length > 0) {
-      add('or-group-with-absolute-descriptors', descField, {
-        descriptors: descText,
-        atoms: atomList(or[0].atoms),
-        group: or[0].id,
-      }, 'warning');
+      add(
+        'or-group-with-absolute-descriptors',
+        descField,
+        {
+          descriptors: descText,
+          atoms: atomList(or[0].atoms),
+          group: or[0].id,
+        },
+        'warning',
+      );
     } else if (and.length > 0 && form !== 'single-enantiomer') {
-      add('and-group-with-absolute-descriptors', descField, {
-        descriptors: descText,
-        atoms: atomList(and[0].atoms),
-        group: and[0].id,
-      }, 'warning');
+      add(
+        'and-group-with-absolute-descriptors',
+        descField,
+        {
+          descriptors: descText,
+          atoms: atomList(and[0].atoms),
+          group: and[0].id,
+        },
+        'warning',
+      );
     } else if (
       form === 'single-enantiomer' &&
       groups.length === 0 &&
@@ -98,9 +118,14 @@ function run(ctx: CheckContext): CheckOutcome {
   }
   if (out.some((x) => x.severity !== 'note')) return { findings: out };
   const groupText = groups.length
-    ? groups.map((g) => `${g.type.toUpperCase()}${g.type === 'abs' ? '' : g.id} (${atomList(g.atoms)})`).join(', ')
+    ? groups
+        .map((g) => `${g.type.toUpperCase()}${g.type === 'abs' ? '' : g.id} (${atomList(g.atoms)})`)
+        .join(', ')
     : 'no enhanced-stereo groups';
-  return { findings: out, passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}` };
+  return {
+    findings: out,
+    passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}`,
+  };
 }
 
 export const enhancedStereoMatchesForm: CheckModule = {

@@ -80,7 +80,11 @@ function run(ctx: CheckContext): CheckOutcome {
   const form = record.stereo.form;
   const e = evidence(f);
   const out: RawFinding[] = [];
-  const add = (id: FormMessageId, extra: RawFinding['data'] = {}, severity?: RawFinding['severity']): void => {
+  const add = (
+    id: FormMessageId,
+    extra: RawFinding['data'] = {},
+    severity?: RawFinding['severity'],
+  ): void => {
     out.push(finding(id, 'stereo.form', { form, ...e, ...extra }, severity));
   };
   const defined = definedUnits(f);
@@ -100,14 +104,19 @@ function run(ctx: CheckContext): CheckOutcome {
     case 'single-enantiomer':
     case 'enantioenriched':
       if (f.chiral === false && e.undefinedCount === 0) add('enantiomer-but-achiral');
-      else if (e.undefinedCount > 0) add('enantiomer-undefined-units', {}, form === 'enantioenriched' ? 'warning' : undefined);
+      else if (e.undefinedCount > 0)
+        add('enantiomer-undefined-units', {}, form === 'enantioenriched' ? 'warning' : undefined);
       break;
     case 'racemate':
       if (f.chiral === false && e.undefinedCount === 0) add('racemate-but-achiral');
       else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) add('racemate-no-chiral-isomers');
       else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
         const a = f.stereoisomers.achiral;
-        add('racemate-which-diastereomer', { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : '' }, 'warning');
+        add(
+          'racemate-which-diastereomer',
+          { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : '' },
+          'warning',
+        );
       }
       break;
     case 'single-diastereomer':
@@ -129,7 +138,8 @@ function passedEvidence(form: string, f: StructureFacts, e: ReturnType<typeof ev
       ? `form unknown; undefined stereo units: ${e.undefinedUnits}`
       : `form unknown; the structure defines ${e.units} and leaves none undefined`;
   }
-  const chir = f.chiral === true ? 'chiral' : f.chiral === false ? (f.meso ? 'meso (achiral)' : 'achiral') : 'open';
+  const chir =
+    f.chiral === true ? 'chiral' : f.chiral === false ? (f.meso ? 'meso (achiral)' : 'achiral') : 'open';
   const why = f.chiral !== null && f.mirror.explanation ? ` — ${f.mirror.explanation}` : '';
   return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
@@ -137,7 +147,8 @@ function passedEvidence(form: string, f: StructureFacts, e: ReturnType<typeof ev
 export const formMatchesStructure: CheckModule = {
   id: 'form-matches-structure',
   defaultSeverity: 'error',
-  summary: 'The declared stereo form agrees with the chirality, meso character and defined units of the structure.',
+  summary:
+    'The declared stereo form agrees with the chirality, meso character and defined units of the structure.',
   explanation:
     'IUPAC Gold Book definitions: a chiral molecule is not superimposable on its mirror image; enantiomers are ' +
     'mirror-image stereoisomers; a racemate is an equimolar mixture of a pair of enantiomers, so it needs a ' +

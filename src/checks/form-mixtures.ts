@@ -69,7 +69,8 @@ export function mixtureFindings(ctx: CheckContext, parent: StructureFacts): RawF
       const data = { form, a: i + 1, b: j + 1, relation: rel.relation, explanation: rel.explanation };
       const at = `stereo.components.${j}`;
       if (form === 'racemate') {
-        if (rel.relation !== 'enantiomers') out.push(finding('racemate-components-not-enantiomers', at, data));
+        if (rel.relation !== 'enantiomers')
+          out.push(finding('racemate-components-not-enantiomers', at, data));
         continue;
       }
       if (rel.relation === 'diastereomers') continue;

@@ -10,7 +10,7 @@ const messages = {
     'Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. ' +
     'Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier ' +
     'about 25 kJ/mol for simple amines), so its two configurations interconvert and cannot be isolated: the ' +
-    'structure has no stereocentre. Declare achiral, or, if the nitrogen is locked (a bridgehead as in Tröger\'s ' +
+    "structure has no stereocentre. Declare achiral, or, if the nitrogen is locked (a bridgehead as in Tröger's " +
     'base, an aziridine, a quaternary ammonium ion), draw that feature.',
   'stereo-drawn-on-invertible-nitrogen':
     'The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at ' +
@@ -26,8 +26,11 @@ function run(ctx: CheckContext): CheckOutcome {
   const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
   const out: RawFinding[] = [];
   const claims = STEREO_CLAIM_FORMS.includes(form);
-  const others = definedUnits(f).filter((u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === 'tetrahedral'));
-  const atomsOf = (list: typeof f.invertibleNitrogens): string => list.map((n) => `(atom ${n.atom})`).join(', ');
+  const others = definedUnits(f).filter(
+    (u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === 'tetrahedral'),
+  );
+  const atomsOf = (list: typeof f.invertibleNitrogens): string =>
+    list.map((n) => `(atom ${n.atom})`).join(', ');
   if (claims && others.length === 0) {
     const list = drawn.length ? drawn : f.invertibleNitrogens;
     out.push(
@@ -38,11 +41,16 @@ function run(ctx: CheckContext): CheckOutcome {
       }),
     );
   } else if (drawn.length > 0) {
-    out.push(finding('stereo-drawn-on-invertible-nitrogen', 'structure', { form, atoms: atomsOf(drawn) }, 'note'));
+    out.push(
+      finding('stereo-drawn-on-invertible-nitrogen', 'structure', { form, atoms: atomsOf(drawn) }, 'note'),
+    );
   }
   if (out.some((x) => x.severity !== 'note')) return { findings: out };
   if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
-  return { findings: out, passed: `the claim rests on ${others.length} stereo unit(s) other than amine nitrogens` };
+  return {
+    findings: out,
+    passed: `the claim rests on ${others.length} stereo unit(s) other than amine nitrogens`,
+  };
 }
 
 export const nitrogenInversion: CheckModule = {
@@ -54,7 +62,7 @@ export const nitrogenInversion: CheckModule = {
     'transition state with a low barrier (about 20–30 kJ/mol for simple amines; from memory, e.g. Clayden, ' +
     'Greeves & Warren, Organic Chemistry), so its enantiomers interconvert rapidly at room temperature and ' +
     'cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is ' +
-    'blocked: a bridgehead (Tröger\'s base), a small ring (aziridines, slowly), or four substituents (ammonium ' +
+    "blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium " +
     'ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres.',
   messages,
   run,

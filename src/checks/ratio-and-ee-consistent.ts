@@ -8,7 +8,7 @@ import { finding, fmt } from './words.js';
 const messages = {
   'ratio-unreadable':
     "The ratio '{ratio}' could not be read: {problem} (at character {offset}). Write it as parts separated by " +
-    "colons, e.g. 70:30 or 97.5:2.5.",
+    'colons, e.g. 70:30 or 97.5:2.5.',
   'ratio-parts-not-100':
     'The ratio {ratio} reads as percentages but its parts sum to {sum}, not 100 (tolerance ±{tolerance}). Correct ' +
     'the parts; if relative amounts were meant, write them as small whole numbers (e.g. 2:1).',
@@ -59,15 +59,22 @@ function run(ctx: CheckContext): CheckOutcome {
   let parts: number[] = [];
   if (ratio !== undefined) {
     const r = parseRatio(ratio);
-    for (const p of r.problems) add('ratio-unreadable', 'stereo.ratio', { ratio, problem: p.message, offset: p.offset + 1 });
+    for (const p of r.problems)
+      add('ratio-unreadable', 'stereo.ratio', { ratio, problem: p.message, offset: p.offset + 1 });
     if (r.problems.length === 0) {
       parts = r.parts;
       const sum = parts.reduce((a, b) => a + b, 0);
       if (r.looksLikePercent && Math.abs(sum - 100) > cfg.ratioSumTolerance) {
-        add('ratio-parts-not-100', 'stereo.ratio', { ratio, sum: fmt(sum), tolerance: cfg.ratioSumTolerance }, 'warning');
+        add(
+          'ratio-parts-not-100',
+          'stereo.ratio',
+          { ratio, sum: fmt(sum), tolerance: cfg.ratioSumTolerance },
+          'warning',
+        );
       }
       const nComp = components?.length ?? 0;
-      const enantiomerForm = form === 'racemate' || form === 'enantioenriched' || form === 'single-enantiomer';
+      const enantiomerForm =
+        form === 'racemate' || form === 'enantioenriched' || form === 'single-enantiomer';
       if (nComp > 0 && parts.length !== nComp) {
         add('ratio-components-count', 'stereo.ratio', { ratio, parts: parts.length, components: nComp });
       } else if (enantiomerForm && parts.length !== 2) {
@@ -103,22 +110,33 @@ function run(ctx: CheckContext): CheckOutcome {
         tolerance: cfg.eeTolerance,
       });
     }
-    if (form === 'racemate' && ee > cfg.eeTolerance) add('racemate-ee-not-zero', 'stereo.ee', { ee, tolerance: cfg.eeTolerance });
+    if (form === 'racemate' && ee > cfg.eeTolerance)
+      add('racemate-ee-not-zero', 'stereo.ee', { ee, tolerance: cfg.eeTolerance });
   }
   const effectiveEe = ee ?? ratioEe;
   const source = ee !== undefined ? 'stated' : `from the ratio ${ratio ?? ''}`;
   if (effectiveEe !== null) {
     const field = ee !== undefined ? 'stereo.ee' : 'stereo.ratio';
     if (form === 'single-enantiomer' && effectiveEe < cfg.singleEnantiomerMinEe) {
-      add('single-enantiomer-ee-low', field, { ee: fmt(effectiveEe), source, threshold: cfg.singleEnantiomerMinEe });
+      add('single-enantiomer-ee-low', field, {
+        ee: fmt(effectiveEe),
+        source,
+        threshold: cfg.singleEnantiomerMinEe,
+      });
     }
     if (form === 'enantioenriched' && effectiveEe <= cfg.eeTolerance) {
-      add('enantioenriched-ee-zero', field, { ee: fmt(effectiveEe), source, tolerance: cfg.eeTolerance }, 'warning');
+      add(
+        'enantioenriched-ee-zero',
+        field,
+        { ee: fmt(effectiveEe), source, tolerance: cfg.eeTolerance },
+        'warning',
+      );
     }
     if (ee !== undefined) evidence.push(`ee ${fmt(effectiveEe)}% (stated)`);
   }
   if (out.some((x) => x.severity !== 'note')) return { findings: out };
-  if (parts.length && evidence.length === 0) evidence.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
+  if (parts.length && evidence.length === 0)
+    evidence.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
   return { findings: out, passed: `${evidence.join('; ')}; consistent with ${form}` };
 }
 

@@ -48,7 +48,10 @@ export function parseRatio(text: string): ParsedRatio {
     offset += piece.length + 1;
   }
   if (pieces.length < 2 && out.problems.length === 0) {
-    out.problems.push({ offset: 0, message: "a ratio needs two or more parts separated by ':' (e.g. 70:30)" });
+    out.problems.push({
+      offset: 0,
+      message: "a ratio needs two or more parts separated by ':' (e.g. 70:30)",
+    });
   }
   if (withPercent > 0 && withPercent < pieces.length) {
     out.problems.push({ offset: 0, message: "some parts carry '%' and others do not" });

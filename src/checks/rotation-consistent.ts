@@ -25,7 +25,8 @@ const messages = {
 type Id = keyof typeof messages;
 
 const WHY: Record<string, string> = {
-  racemate: 'a racemate holds equal amounts of two enantiomers, whose rotations are equal and opposite and cancel',
+  racemate:
+    'a racemate holds equal amounts of two enantiomers, whose rotations are equal and opposite and cancel',
   meso: 'a meso compound is achiral, and achiral substances are optically inactive',
   achiral: 'achiral substances are optically inactive',
 };
@@ -79,10 +80,15 @@ function run(ctx: CheckContext): CheckOutcome {
       );
     }
   }
-  if (form === 'single-enantiomer' && zero) add('single-enantiomer-zero-rotation', 'stereo.rotation.value', {}, 'note');
+  if (form === 'single-enantiomer' && zero)
+    add('single-enantiomer-zero-rotation', 'stereo.rotation.value', {}, 'note');
   if (out.some((x) => x.severity !== 'note')) return { findings: out };
-  const s = sign && sign.sign !== '±' ? `; sign ${sign.sign === '+' ? '(+)' : '(−)'} in ${sign.field} agrees` : '';
-  return { findings: out, passed: `specific rotation ${fmt(rot.value)}° (${conditions(rot)}) fits ${form}${s}` };
+  const s =
+    sign && sign.sign !== '±' ? `; sign ${sign.sign === '+' ? '(+)' : '(−)'} in ${sign.field} agrees` : '';
+  return {
+    findings: out,
+    passed: `specific rotation ${fmt(rot.value)}° (${conditions(rot)}) fits ${form}${s}`,
+  };
 }
 
 export const rotationConsistent: CheckModule = {

@@ -21,7 +21,8 @@ const messages = {
     "The molfile path '{path}' in {field} resolves to '{resolved}', outside the registry folder. Give a path " +
     'relative to the record file that stays inside the registry.',
   'reader-remark': 'Reading the structure in {field} gave a remark: {remark}. Check the drawing.',
-  'no-structure': 'The record gives no structure ({field}). Add exactly one of structure.smiles or structure.molfile.',
+  'no-structure':
+    'The record gives no structure ({field}). Add exactly one of structure.smiles or structure.molfile.',
 } as const;
 
 type Id = keyof typeof messages;
@@ -61,12 +62,19 @@ function run(ctx: CheckContext): CheckOutcome {
     add('structure-source-refused', mainField(ctx), { field: mainField(ctx), error: sources.main.error });
   }
   sources?.components.forEach((s, i) => {
-    if (s.error) add('structure-source-refused', componentField(ctx, i), { field: componentField(ctx, i), error: s.error });
+    if (s.error)
+      add('structure-source-refused', componentField(ctx, i), {
+        field: componentField(ctx, i),
+        error: s.error,
+      });
   });
   // Defence in depth for records that did not come through the loader's resolver.
   const paths: { field: string; path: string | undefined }[] = [
     { field: 'structure.molfile', path: ctx.record?.structure.molfile },
-    ...(ctx.record?.stereo.components ?? []).map((c, i) => ({ field: `stereo.components.${i}.molfile`, path: c.molfile })),
+    ...(ctx.record?.stereo.components ?? []).map((c, i) => ({
+      field: `stereo.components.${i}.molfile`,
+      path: c.molfile,
+    })),
   ];
   for (const p of paths) {
     if (p.path === undefined || findings.some((f) => f.field === p.field)) continue;
@@ -105,7 +113,9 @@ function run(ctx: CheckContext): CheckOutcome {
   if (findings.some((f) => f.severity !== 'note')) return { findings };
   const facts = ctx.main.facts;
   const atoms = ctx.main.structure?.atoms.length;
-  const what = [atoms !== undefined ? `${atoms} atoms` : null, facts?.formula || null].filter(Boolean).join(', ');
+  const what = [atoms !== undefined ? `${atoms} atoms` : null, facts?.formula || null]
+    .filter(Boolean)
+    .join(', ');
   const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : '';
   return { findings, passed: `structure read${what ? ` (${what})` : ''}${comps}` };
 }

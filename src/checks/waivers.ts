@@ -39,11 +39,18 @@ export function reviewWaivers(
   const firstIndex = new Map<string, number>();
   waivers.forEach((w, index) => {
     const field = `waivers.${index}`;
-    const missing = [blank(w.reason) ? 'reason' : null, blank(w.approved_by) ? 'approver (approved_by)' : null].filter(
-      (x): x is string => x !== null,
-    );
+    const missing = [
+      blank(w.reason) ? 'reason' : null,
+      blank(w.approved_by) ? 'approver (approved_by)' : null,
+    ].filter((x): x is string => x !== null);
     if (missing.length) {
-      out.push(finding('waiver-incomplete', field, { waivedCheck: w.check, index, missing: missing.join(' and no ') }));
+      out.push(
+        finding('waiver-incomplete', field, {
+          waivedCheck: w.check,
+          index,
+          missing: missing.join(' and no '),
+        }),
+      );
     }
     const seen = firstIndex.get(w.check);
     if (seen !== undefined) {
@@ -57,7 +64,12 @@ export function reviewWaivers(
         finding(
           'waiver-matches-nothing',
           field,
-          { waivedCheck: w.check, index, knownCheck: !unknown, known: unknown ? ' (and no check has that id)' : '' },
+          {
+            waivedCheck: w.check,
+            index,
+            knownCheck: !unknown,
+            known: unknown ? ' (and no check has that id)' : '',
+          },
           'note',
         ),
       );
@@ -72,7 +84,10 @@ function run(ctx: CheckContext): CheckOutcome {
   const findings = reviewWaivers(ctx.record, ctx.findings ?? []);
   if (findings.some((f) => f.severity !== 'note')) return { findings };
   const accepted = waivers.filter((w) => (ctx.findings ?? []).some((f) => f.check === w.check)).length;
-  return { findings, passed: `${waivers.length} waiver(s) complete; ${accepted} accept findings of this record` };
+  return {
+    findings,
+    passed: `${waivers.length} waiver(s) complete; ${accepted} accept findings of this record`,
+  };
 }
 
 export const waiverReview: CheckModule = {

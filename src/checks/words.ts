@@ -10,10 +10,12 @@ import type { Severity } from '../audit/types.js';
 
 /** "C2 (atom 3)" with an atom-map locant, "C (atom 3)" without; "C2=C3 double bond (atoms 2, 3)" for a bond. */
 export function unitName(u: StereoUnitFact): string {
-  const loc = (k: number): string => (u.locants[k] !== null && u.locants[k] !== undefined ? String(u.locants[k]) : '');
+  const loc = (k: number): string =>
+    u.locants[k] !== null && u.locants[k] !== undefined ? String(u.locants[k]) : '';
   if (u.kind === 'tetrahedral') return `${u.element}${loc(0)} (atom ${u.atoms[0]})`;
   const ends = u.atoms.join(', ');
-  const what = u.kind === 'double-bond' ? 'double bond' : u.kind === 'biaryl' ? 'biaryl axis' : `${u.kind} axis`;
+  const what =
+    u.kind === 'double-bond' ? 'double bond' : u.kind === 'biaryl' ? 'biaryl axis' : `${u.kind} axis`;
   const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join('=C')}` : '';
   return `${what}${mapped} (atoms ${ends})`;
 }

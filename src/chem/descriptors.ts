@@ -69,7 +69,10 @@ const ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m
  * Parses a descriptor string or the front of a name. `context: 'descriptor'` (the default) reports leftover
  * text as a problem; `context: 'name'` returns it in `rest`.
  */
-export function parseDescriptors(input: string, options: { context?: 'descriptor' | 'name' } = {}): ParsedDescriptors {
+export function parseDescriptors(
+  input: string,
+  options: { context?: 'descriptor' | 'name' } = {},
+): ParsedDescriptors {
   const context = options.context ?? 'descriptor';
   const out: ParsedDescriptors = {
     mode: 'none',
@@ -113,9 +116,10 @@ export function parseDescriptors(input: string, options: { context?: 'descriptor
         break;
       }
     } else {
-      const m = /^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\s\-\u2010\u2011\u2012\u2013\u2212(]|$)/.exec(
-        input.slice(i),
-      );
+      const m =
+        /^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\s\-\u2010\u2011\u2012\u2013\u2212(]|$)/.exec(
+          input.slice(i),
+        );
       const word = m?.[1];
       const next = m ? input[i + m[0].length] : undefined;
       // A lone word must be followed by a hyphen in a name ('cis-', 'L-'), so 'd' in 'd-glucose' counts but not
@@ -130,7 +134,9 @@ export function parseDescriptors(input: string, options: { context?: 'descriptor
         else if (word === 'dl' || word === 'd,l') signs.push({ sign: '±', offset: i });
         else addWord(out, word);
         if (word === 'd' || word === 'l' || word === 'dl' || word === 'd,l') {
-          out.remarks.push(`'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`);
+          out.remarks.push(
+            `'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`,
+          );
         }
         i += word.length;
       }
@@ -144,9 +150,10 @@ export function parseDescriptors(input: string, options: { context?: 'descriptor
   if (context === 'descriptor' && out.rest !== '') {
     problem(i, `'${out.rest.slice(0, 20)}' is not a stereodescriptor`);
   }
-  out.embeddedDescriptors = /[([](?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?(?:,\s*(?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?)*[)\]]/.test(
-    out.rest,
-  );
+  out.embeddedDescriptors =
+    /[([](?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?(?:,\s*(?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?)*[)\]]/.test(
+      out.rest,
+    );
   finish(out, signs, problem);
   return out;
 }
@@ -215,7 +222,10 @@ function parseGroup(
     if (context === 'name') return { kind: 'not-stereo', items: [], words: [] };
   }
   for (const b of bad) {
-    problem(b.offset, b.text === '' ? 'empty stereodescriptor' : `'${b.text}' is not a stereodescriptor (P-93)`);
+    problem(
+      b.offset,
+      b.text === '' ? 'empty stereodescriptor' : `'${b.text}' is not a stereodescriptor (P-93)`,
+    );
   }
   return { kind: 'items', items, words };
 }
@@ -239,19 +249,28 @@ function finish(
   }
   const stars = out.items.filter((it) => it.relativeStar).length;
   const pairs = out.items.filter((it) => it.pair).length;
-  const chiralItems = out.items.filter((it) => it.label === 'R' || it.label === 'S' || it.label === 'M' || it.label === 'P');
+  const chiralItems = out.items.filter(
+    (it) => it.label === 'R' || it.label === 'S' || it.label === 'M' || it.label === 'P',
+  );
   if (stars > 0 && stars < chiralItems.length) {
-    problem(out.items.find((it) => !it.relativeStar && chiralItems.includes(it))!.offset, 'some descriptors carry * and others do not');
+    problem(
+      out.items.find((it) => !it.relativeStar && chiralItems.includes(it))!.offset,
+      'some descriptors carry * and others do not',
+    );
   }
   if (pairs > 0 && pairs < chiralItems.length) {
-    out.remarks.push('RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate');
+    out.remarks.push(
+      'RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate',
+    );
   }
-  const racemic = out.prefixes.includes('rac') || pairs > 0 || out.rotationSign === '±' || out.fischer === 'DL';
+  const racemic =
+    out.prefixes.includes('rac') || pairs > 0 || out.rotationSign === '±' || out.fischer === 'DL';
   const relative = out.prefixes.includes('rel') || stars > 0;
   if (racemic && relative) {
     problem(0, 'racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed; P-93.1.3 uses one of them');
   }
-  if (out.prefixes.includes('rel') && pairs > 0) problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
+  if (out.prefixes.includes('rel') && pairs > 0)
+    problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
   if (out.prefixes.length > 0 && out.items.length === 0) {
     problem(0, `'${out.prefixes[0]}-' must be followed by descriptors such as (1R,2S)`);
   }
@@ -273,7 +292,11 @@ function finish(
     }
   }
   const unlocated = out.items.filter((it) => it.locant === null);
-  if (unlocated.length > 1 && unlocated.some((it) => it.label === 'R') && unlocated.some((it) => it.label === 'S')) {
+  if (
+    unlocated.length > 1 &&
+    unlocated.some((it) => it.label === 'R') &&
+    unlocated.some((it) => it.label === 'S')
+  ) {
     out.remarks.push('(R,S) without locants is ambiguous: for a racemate P-93.1.3 writes (RS)');
   }
 }
@@ -425,7 +448,11 @@ export function compareDescriptors(
     const cited = new Set(pairs.map((p) => p.u));
     for (const u of defined) {
       if (!cited.has(u)) {
-        result.unlisted.push({ locant: unitLocants(u)[0]?.toString() ?? null, label: u.label!, atoms: u.atoms });
+        result.unlisted.push({
+          locant: unitLocants(u)[0]?.toString() ?? null,
+          label: u.label!,
+          atoms: u.atoms,
+        });
       }
     }
     result.agrees =

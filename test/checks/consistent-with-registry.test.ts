@@ -6,7 +6,13 @@ import { centre, chiralFacts, ctx, entry, ids, read, record, runCheck } from './
 
 // Enantiomers have equal and opposite specific rotations under the same conditions (IUPAC Gold Book,
 // enantiomer / optical activity). Carvone enantiomers: (R)-(−) and (S)-(+), about ±61° neat (handbook, from memory).
-const rot = (value: number, p: Partial<Rotation> = {}): Rotation => ({ value, wavelength_nm: 589, temperature_c: 20, solvent: 'neat', ...p });
+const rot = (value: number, p: Partial<Rotation> = {}): Rotation => ({
+  value,
+  wavelength_nm: 589,
+  temperature_c: 20,
+  solvent: 'neat',
+  ...p,
+});
 const mine = (stereo: Partial<CompoundRecord['stereo']> = {}) =>
   record({ form: 'single-enantiomer', ...stereo }, { id: 'LX-00020', name: '(S)-(+)-carvone' });
 const theirs = (stereo: Partial<CompoundRecord['stereo']> = {}) =>
@@ -20,7 +26,13 @@ function setup(rel: Relation, me: CompoundRecord, other: CompoundRecord, underRe
     entry(me, selfRead, 'compounds/LX-00020.yml', underReview),
     entry(other, otherRead, 'compounds/LX-00019.yml', false),
   ];
-  return ctx({ record: me, main: selfRead, entries, relations: { 'me|other': rel }, file: 'compounds/LX-00020.yml' });
+  return ctx({
+    record: me,
+    main: selfRead,
+    entries,
+    relations: { 'me|other': rel },
+    file: 'compounds/LX-00020.yml',
+  });
 }
 
 describe('consistent-with-registry', () => {
@@ -33,22 +45,42 @@ describe('consistent-with-registry', () => {
     expect(runCheck(check, setup('identical', mine(), theirs())).findings).toMatchObject([
       { messageId: 'already-registered', severity: 'warning', data: { otherId: 'LX-00019' } },
     ]);
-    expect(ids(runCheck(check, setup('identical', mine(), theirs({ form: 'racemate' }))))).toEqual(['same-structure-different-form']);
+    expect(ids(runCheck(check, setup('identical', mine(), theirs({ form: 'racemate' }))))).toEqual([
+      'same-structure-different-form',
+    ]);
   });
   it('names a registered enantiomer and accepts opposite rotations', () => {
-    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(-61) })));
-    expect(o.findings).toMatchObject([{ messageId: 'enantiomer-registered', severity: 'note', data: { otherId: 'LX-00019' } }]);
+    const o = runCheck(
+      check,
+      setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(-61) })),
+    );
+    expect(o.findings).toMatchObject([
+      { messageId: 'enantiomer-registered', severity: 'note', data: { otherId: 'LX-00019' } },
+    ]);
   });
   it('fails enantiomers measured alike with the same sign', () => {
-    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(58) })));
+    const o = runCheck(
+      check,
+      setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(58) })),
+    );
     expect(ids(o)).toEqual(['enantiomer-registered', 'enantiomer-rotation-same-sign']);
   });
   it('does not compare rotations measured differently', () => {
-    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(58, { solvent: 'ethanol' }) })));
+    const o = runCheck(
+      check,
+      setup(
+        'enantiomers',
+        mine({ rotation: rot(61) }),
+        theirs({ rotation: rot(58, { solvent: 'ethanol' }) }),
+      ),
+    );
     expect(ids(o)).toEqual(['enantiomer-registered']);
   });
   it('notes enantiomers of unequal rotation size', () => {
-    const o = runCheck(check, setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(-30) })));
+    const o = runCheck(
+      check,
+      setup('enantiomers', mine({ rotation: rot(61) }), theirs({ rotation: rot(-30) })),
+    );
     expect(ids(o)).toEqual(['enantiomer-registered', 'enantiomer-rotation-magnitude']);
   });
   it('warns when a registered enantiomer has a conflicting form', () => {
@@ -61,7 +93,12 @@ describe('consistent-with-registry', () => {
     expect(runCheck(check, setup('identical', mine(), theirs(), false)).notApplicable).toBe(true);
     const me = mine();
     const selfRead = read(chiralFacts([centre(7, 'S')]), 'me');
-    const c = ctx({ record: me, main: selfRead, entries: [entry(me, selfRead, 'compounds/LX-00001.yml', true)], relations: { 'me|me': 'identical' } });
+    const c = ctx({
+      record: me,
+      main: selfRead,
+      entries: [entry(me, selfRead, 'compounds/LX-00001.yml', true)],
+      relations: { 'me|me': 'identical' },
+    });
     expect(runCheck(check, c).findings).toEqual([]);
   });
 });
@@ -76,10 +113,24 @@ describe('consistent-with-registry: purity', () => {
 describe('consistent-with-registry: what the drawings stand for', () => {
   it('does not compare a racemic (AND group) drawing with an absolute one', () => {
     const me = mine({ form: 'racemate' });
-    const selfRead = read(chiralFacts([centre(7, 'S')], { enhanced: { groups: [{ type: 'and', id: 1, atoms: [7] }], meaning: 'racemic' } }), 'me');
+    const selfRead = read(
+      chiralFacts([centre(7, 'S')], {
+        enhanced: { groups: [{ type: 'and', id: 1, atoms: [7] }], meaning: 'racemic' },
+      }),
+      'me',
+    );
     const other = theirs();
-    const entries = [entry(me, selfRead, 'compounds/LX-00020.yml', true), entry(other, read(chiralFacts([centre(7, 'S')]), 'other'), 'compounds/LX-00019.yml')];
-    const c = ctx({ record: me, main: selfRead, entries, relations: { 'me|other': 'identical' }, file: 'compounds/LX-00020.yml' });
+    const entries = [
+      entry(me, selfRead, 'compounds/LX-00020.yml', true),
+      entry(other, read(chiralFacts([centre(7, 'S')]), 'other'), 'compounds/LX-00019.yml'),
+    ];
+    const c = ctx({
+      record: me,
+      main: selfRead,
+      entries,
+      relations: { 'me|other': 'identical' },
+      file: 'compounds/LX-00020.yml',
+    });
     expect(runCheck(check, c).findings).toEqual([]);
   });
 });

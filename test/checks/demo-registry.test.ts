@@ -17,9 +17,15 @@ const EXPECTED: Record<string, string[]> = {
   'LX-00012': ['consistent-with-registry/enantiomer-rotation-same-sign'], // its enantiomer LX-00023 is wrong
   'LX-00008': ['consistent-with-registry/same-structure-different-form'], // LX-00024 draws (S) as a "racemate"
   'LX-00016': ['consistent-with-registry/same-structure-different-form'], // LX-00021 calls it a racemate
-  'LX-00021': ['form-matches-structure/racemate-but-achiral', 'consistent-with-registry/same-structure-different-form'],
+  'LX-00021': [
+    'form-matches-structure/racemate-but-achiral',
+    'consistent-with-registry/same-structure-different-form',
+  ],
   'LX-00022': ['descriptors-match-structure/descriptor-label-mismatch'],
-  'LX-00023': ['rotation-consistent/sign-disagrees-with-rotation', 'consistent-with-registry/enantiomer-rotation-same-sign'],
+  'LX-00023': [
+    'rotation-consistent/sign-disagrees-with-rotation',
+    'consistent-with-registry/enantiomer-rotation-same-sign',
+  ],
   'LX-00024': [
     'enhanced-stereo-matches-form/racemate-drawn-absolute',
     'ratio-and-ee-consistent/racemate-ratio-not-even',
@@ -64,7 +70,10 @@ describe('demo registry (Larkspur Chemistry Lab)', () => {
   });
   it('every record marked wrong on purpose is in the expectations, and the others are not', () => {
     const wrong = readdirSync(join(ROOT, 'compounds'))
-      .filter((f) => f.endsWith('.yml') && /WRONG ON PURPOSE/.test(readFileSync(join(ROOT, 'compounds', f), 'utf8')))
+      .filter(
+        (f) =>
+          f.endsWith('.yml') && /WRONG ON PURPOSE/.test(readFileSync(join(ROOT, 'compounds', f), 'utf8')),
+      )
       .map((f) => f.replace('.yml', ''));
     for (const id of wrong) expect([id, id in EXPECTED]).toEqual([id, true]);
   });
@@ -75,7 +84,9 @@ describe('demo registry (Larkspur Chemistry Lab)', () => {
   });
   it('shows the complete waiver as accepted and notes the useless one', () => {
     const waived = byId('LX-00035').findings.filter((f) => f.waived);
-    expect(waived).toMatchObject([{ check: 'form-matches-structure', waived: { approvedBy: 'M. Lindqvist' } }]);
+    expect(waived).toMatchObject([
+      { check: 'form-matches-structure', waived: { approvedBy: 'M. Lindqvist' } },
+    ]);
     expect(byId('LX-00017').findings.map((f) => f.messageId)).toContain('waiver-matches-nothing');
   });
   it('asks whether an exactly 1:1 diastereomer ratio was measured', () => {
@@ -83,7 +94,9 @@ describe('demo registry (Larkspur Chemistry Lab)', () => {
   });
   it('names registered enantiomers: the carvones, the tartaric acids', () => {
     const enantiomerOf = (id: string) =>
-      byId(id).findings.filter((f) => f.messageId === 'enantiomer-registered').map((f) => f.data.otherId);
+      byId(id)
+        .findings.filter((f) => f.messageId === 'enantiomer-registered')
+        .map((f) => f.data.otherId);
     expect(enantiomerOf('LX-00011')).toEqual(['LX-00010']);
     expect(enantiomerOf('LX-00001')).toEqual(['LX-00002']);
   });

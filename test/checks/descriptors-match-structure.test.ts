@@ -27,22 +27,36 @@ describe('descriptors-match-structure: labels', () => {
     expect(ok.passed).toMatch(/as counts/);
     const bad = run(unmapped, { form: 'single-enantiomer', descriptors: '(2R,3S)' });
     expect(ids(bad)).toEqual(['descriptor-counts-mismatch']);
-    expect(bad.findings[0].data).toMatchObject({ declaredCounts: '1 R, 1 S', computedCounts: '2 R', method: 'counts' });
+    expect(bad.findings[0].data).toMatchObject({
+      declaredCounts: '1 R, 1 S',
+      computedCounts: '2 R',
+      method: 'counts',
+    });
   });
   it('warns when descriptors leave units out', () => {
-    expect(ids(run(mapped, { form: 'single-enantiomer', descriptors: '(2R)' }))).toEqual(['descriptors-incomplete']);
-    expect(ids(run(unmapped, { form: 'single-enantiomer', descriptors: '(R)' }))).toEqual(['descriptors-incomplete']);
+    expect(ids(run(mapped, { form: 'single-enantiomer', descriptors: '(2R)' }))).toEqual([
+      'descriptors-incomplete',
+    ]);
+    expect(ids(run(unmapped, { form: 'single-enantiomer', descriptors: '(R)' }))).toEqual([
+      'descriptors-incomplete',
+    ]);
   });
   it('fails a locant that is not a stereo unit', () => {
-    expect(ids(run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3R,5S)' }))).toEqual(['descriptor-not-stereo-unit']);
+    expect(ids(run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3R,5S)' }))).toEqual([
+      'descriptor-not-stereo-unit',
+    ]);
   });
   it('reports unreadable descriptors with their offset', () => {
     const o = run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3X)' });
     expect(o.findings).toMatchObject([{ messageId: 'descriptor-unreadable', data: { offset: 4 } }]);
   });
   it('reads descriptors from the front of the name when there is no descriptor field', () => {
-    expect(run(mapped, { form: 'single-enantiomer' }, '(2R,3R)-2,3-dihydroxybutanedioic acid').findings).toEqual([]);
-    expect(ids(run(mapped, { form: 'single-enantiomer' }, '(2S,3S)-2,3-dihydroxybutanedioic acid'))).toEqual(['descriptor-label-mismatch']);
+    expect(
+      run(mapped, { form: 'single-enantiomer' }, '(2R,3R)-2,3-dihydroxybutanedioic acid').findings,
+    ).toEqual([]);
+    expect(ids(run(mapped, { form: 'single-enantiomer' }, '(2S,3S)-2,3-dihydroxybutanedioic acid'))).toEqual([
+      'descriptor-label-mismatch',
+    ]);
   });
   it('flags a name that disagrees with the descriptor field', () => {
     const o = run(mapped, { form: 'single-enantiomer', descriptors: '(2R,3R)' }, '(2S,3S)-tartaric acid');
@@ -50,29 +64,43 @@ describe('descriptors-match-structure: labels', () => {
   });
   it('a name without locants agrees with a descriptor field with locants', () => {
     const one = chiralFacts([centre(2, 'R', 2)]);
-    expect(run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(R)-(−)-butan-2-ol').findings).toEqual([]);
-    expect(ids(run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(S)-butan-2-ol'))).toEqual(['name-and-descriptors-disagree']);
+    expect(
+      run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(R)-(−)-butan-2-ol').findings,
+    ).toEqual([]);
+    expect(ids(run(one, { form: 'single-enantiomer', descriptors: '(2R)' }, '(S)-butan-2-ol'))).toEqual([
+      'name-and-descriptors-disagree',
+    ]);
   });
   it('descriptors on a flat drawing cannot be checked: fine for a racemate, a note for racemic notation otherwise, an error for absolute ones', () => {
-    const flat = facts({ units: [unit({ atoms: [2], defined: false })], chiral: true, stereoisomers: { total: 2, chiral: 2, achiral: 0, pairs: 1, meso: 0, units: 1 } });
+    const flat = facts({
+      units: [unit({ atoms: [2], defined: false })],
+      chiral: true,
+      stereoisomers: { total: 2, chiral: 2, achiral: 0, pairs: 1, meso: 0, units: 1 },
+    });
     const rac = run(flat, { form: 'racemate', descriptors: '(RS)' });
     expect(rac.findings).toEqual([]);
     expect(rac.passed).toMatch(/as usual for a racemate/);
-    expect(run(flat, { form: 'unknown', descriptors: '(RS)' }).findings).toMatchObject([{ messageId: 'descriptors-cite-undefined-units', severity: 'note' }]);
+    expect(run(flat, { form: 'unknown', descriptors: '(RS)' }).findings).toMatchObject([
+      { messageId: 'descriptors-cite-undefined-units', severity: 'note' },
+    ]);
     const o = run(flat, { form: 'single-enantiomer', descriptors: '(R)' });
     expect(ids(o)).toEqual(['descriptors-cite-undefined-units']);
     expect(o.findings[0].severity).toBeUndefined();
   });
   it('relative descriptors agree up to inversion (P-93.1.3)', () => {
     const drawn = chiralFacts([centre(4, 'S', 1), centre(6, 'R', 2)]);
-    expect(run(drawn, { form: 'single-enantiomer', descriptors: '(1R*,2S*)' }, undefined).findings.map((f) => f.messageId)).not.toContain(
-      'descriptor-label-mismatch',
-    );
+    expect(
+      run(drawn, { form: 'single-enantiomer', descriptors: '(1R*,2S*)' }, undefined).findings.map(
+        (f) => f.messageId,
+      ),
+    ).not.toContain('descriptor-label-mismatch');
   });
   it('compares component descriptors with component structures', () => {
     const r = record({ form: 'diastereomer-mixture', components: [{ smiles: 'C', descriptors: '(2R,3S)' }] });
     const o = runCheck(check, ctx({ record: r, main: read(facts()), components: [read(mapped)] }));
-    expect(o.findings).toMatchObject([{ messageId: 'descriptor-label-mismatch', field: 'stereo.components.0.descriptors' }]);
+    expect(o.findings).toMatchObject([
+      { messageId: 'descriptor-label-mismatch', field: 'stereo.components.0.descriptors' },
+    ]);
   });
   it('notes Fischer D/L as not comparable', () => {
     const o = run(chiralFacts([centre(2, 'S')]), { form: 'single-enantiomer' }, 'L-alanine');
@@ -84,15 +112,23 @@ describe('descriptors-match-structure: prefixes against the form', () => {
   const one = chiralFacts([centre(2, 'R', 2)]);
   it('racemic notation needs a racemate', () => {
     for (const d of ['(2RS)', 'rac-(2R)', '(±)']) {
-      expect([d, ids(run(one, { form: 'single-enantiomer', descriptors: d }))]).toEqual([d, ['racemic-notation-needs-racemate']]);
+      expect([d, ids(run(one, { form: 'single-enantiomer', descriptors: d }))]).toEqual([
+        d,
+        ['racemic-notation-needs-racemate'],
+      ]);
       expect([d, run(one, { form: 'racemate', descriptors: d }).findings]).toEqual([d, []]);
     }
   });
   it('absolute descriptors with a racemate fail', () => {
-    expect(ids(run(one, { form: 'racemate', descriptors: '(2R)' }))).toEqual(['absolute-descriptors-with-racemate']);
+    expect(ids(run(one, { form: 'racemate', descriptors: '(2R)' }))).toEqual([
+      'absolute-descriptors-with-racemate',
+    ]);
   });
   it('relative notation with a racemate is a warning', () => {
-    const o = run(chiralFacts([centre(4, 'R', 1), centre(6, 'S', 2)]), { form: 'racemate', descriptors: 'rel-(1R,2S)' });
+    const o = run(chiralFacts([centre(4, 'R', 1), centre(6, 'S', 2)]), {
+      form: 'racemate',
+      descriptors: 'rel-(1R,2S)',
+    });
     expect(o.findings).toMatchObject([{ messageId: 'relative-notation-with-racemate', severity: 'warning' }]);
   });
   it('a sign of rotation with an optically inactive form fails', () => {
@@ -101,7 +137,9 @@ describe('descriptors-match-structure: prefixes against the form', () => {
   });
   it('meso in the name with a chiral form fails', () => {
     const mesoLike = facts({ units: [centre(2, 'R', 2), centre(3, 'S', 3)] });
-    expect(ids(run(mesoLike, { form: 'racemate' }, 'meso-2,3-dibromobutane'))).toContain('meso-prefix-with-chiral-form');
+    expect(ids(run(mesoLike, { form: 'racemate' }, 'meso-2,3-dibromobutane'))).toContain(
+      'meso-prefix-with-chiral-form',
+    );
     expect(run(mesoLike, { form: 'meso' }, 'meso-2,3-dibromobutane').findings).toEqual([]);
   });
   it('does not apply when nothing is declared', () => {

@@ -4,7 +4,13 @@
  */
 import type { RelationFacts, Relation, StereoUnitFact, StructureFacts } from '../../src/chem/facts.js';
 import type { Structure } from '../../src/chem/types.js';
-import type { CheckContext, CheckModule, CheckOutcome, ReadStructure, RegistryEntry } from '../../src/checks/types.js';
+import type {
+  CheckContext,
+  CheckModule,
+  CheckOutcome,
+  ReadStructure,
+  RegistryEntry,
+} from '../../src/checks/types.js';
 import type { CompoundRecord, LoadedRecord } from '../../src/registry/types.js';
 import type { Finding } from '../../src/audit/types.js';
 import { DEFAULT_CONFIG } from '../../src/audit/config.js';
@@ -25,7 +31,11 @@ export function unit(p: Partial<StereoUnitFact> & { atoms: number[] }): StereoUn
 }
 
 /** A centre at `atom` with `label`; `map` gives it an atom-map locant. */
-export function centre(atom: number, label: StereoUnitFact['label'], map: number | null = null): StereoUnitFact {
+export function centre(
+  atom: number,
+  label: StereoUnitFact['label'],
+  map: number | null = null,
+): StereoUnitFact {
   return unit({ atoms: [atom], label, defined: label !== null, locants: [map] });
 }
 
@@ -37,13 +47,23 @@ export function facts(p: Partial<StructureFacts> = {}): StructureFacts {
       .map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
     stereobonds: units
       .filter((u) => u.kind !== 'tetrahedral')
-      .map((u) => ({ atoms: [u.atoms[0], u.atoms[1]] as [number, number], label: u.label, kind: u.kind, defined: u.defined })),
+      .map((u) => ({
+        atoms: [u.atoms[0], u.atoms[1]] as [number, number],
+        label: u.label,
+        kind: u.kind,
+        defined: u.defined,
+      })),
     units,
     chiral: false,
     meso: false,
     undefined: units.filter((u) => !u.defined).length,
     stereoisomers: { total: 1, chiral: 0, achiral: 1, pairs: 0, meso: 0, units: units.length },
-    mirror: { chiral: false, fixedAtoms: [], fixedBonds: [], explanation: 'superimposable on its mirror image' },
+    mirror: {
+      chiral: false,
+      fixedAtoms: [],
+      fixedBonds: [],
+      explanation: 'superimposable on its mirror image',
+    },
     enhanced: { groups: [], meaning: units.some((u) => u.defined) ? 'absolute' : 'none' },
     invertibleNitrogens: [],
     components: [],
@@ -64,16 +84,34 @@ export function chiralFacts(units: StereoUnitFact[], p: Partial<StructureFacts> 
     chiral: true,
     meso: false,
     stereoisomers: { total: 2 ** n, chiral: 2 ** n, achiral: 0, pairs: 2 ** (n - 1), meso: 0, units: n },
-    mirror: { chiral: true, fixedAtoms: [], fixedBonds: [], explanation: 'not superimposable on its mirror image' },
+    mirror: {
+      chiral: true,
+      fixedAtoms: [],
+      fixedBonds: [],
+      explanation: 'not superimposable on its mirror image',
+    },
     ...p,
   });
 }
 
 export function structure(tag: string, chiralFlag: boolean | null = null): Structure {
-  return { atoms: [], bonds: [], stereo: [], groups: [], chiralFlag, title: tag, properties: {}, dimension: 0 };
+  return {
+    atoms: [],
+    bonds: [],
+    stereo: [],
+    groups: [],
+    chiralFlag,
+    title: tag,
+    properties: {},
+    dimension: 0,
+  };
 }
 
-export function read(f: StructureFacts | null, tag = 'main', chiralFlag: boolean | null = null): ReadStructure {
+export function read(
+  f: StructureFacts | null,
+  tag = 'main',
+  chiralFlag: boolean | null = null,
+): ReadStructure {
   return { structure: f ? structure(tag, chiralFlag) : null, facts: f, error: null };
 }
 
@@ -81,7 +119,10 @@ export function failedRead(message: string, line: number | null, offset: number 
   return { structure: null, facts: null, error: { message, line, offset } };
 }
 
-export function record(stereo: Partial<CompoundRecord['stereo']> = {}, p: Partial<CompoundRecord> = {}): CompoundRecord {
+export function record(
+  stereo: Partial<CompoundRecord['stereo']> = {},
+  p: Partial<CompoundRecord> = {},
+): CompoundRecord {
   return { id: 'LX-00001', structure: { smiles: 'CC' }, stereo: { form: 'achiral', ...stereo }, ...p };
 }
 
@@ -100,7 +141,8 @@ export function loaded(r: CompoundRecord | null, file = 'compounds/LX-00001.yml'
 export function fakeEngine(relations: Record<string, Relation> = {}): CheckContext['engine'] {
   return {
     relate(a: Structure, b: Structure): RelationFacts {
-      const rel = relations[`${a.title}|${b.title}`] ?? relations[`${b.title}|${a.title}`] ?? 'different-compounds';
+      const rel =
+        relations[`${a.title}|${b.title}`] ?? relations[`${b.title}|${a.title}`] ?? 'different-compounds';
       return {
         relation: rel,
         differingUnits: [],
@@ -142,7 +184,12 @@ export function ctx(o: CtxOptions = {}): CheckContext {
   };
 }
 
-export function entry(r: CompoundRecord, main: ReadStructure, file: string, underReview = false): RegistryEntry {
+export function entry(
+  r: CompoundRecord,
+  main: ReadStructure,
+  file: string,
+  underReview = false,
+): RegistryEntry {
   return { id: r.id, file, record: r, main, underReview };
 }
 

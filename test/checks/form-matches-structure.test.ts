@@ -15,7 +15,12 @@ const mesoFacts = facts({
   chiral: false,
   meso: true,
   stereoisomers: { total: 3, chiral: 2, achiral: 1, pairs: 1, meso: 1, units: 2 },
-  mirror: { chiral: false, fixedAtoms: [], fixedBonds: [[4, 6]], explanation: 'mirror plane through the C2–C3 bond' },
+  mirror: {
+    chiral: false,
+    fixedAtoms: [],
+    fixedBonds: [[4, 6]],
+    explanation: 'mirror plane through the C2–C3 bond',
+  },
 });
 const rTartaric = chiralFacts([centre(4, 'R', 2), centre(6, 'R', 3)], {
   stereoisomers: { total: 3, chiral: 2, achiral: 1, pairs: 1, meso: 1, units: 2 },
@@ -48,7 +53,10 @@ describe('form-matches-structure', () => {
     expect(ids(run('meso', rTartaric))).toEqual(['meso-but-chiral']);
   });
   it('meso: an achiral compound whose constitution has no chiral isomer is not meso', () => {
-    const o = run('meso', facts({ stereoisomers: { total: 2, chiral: 0, achiral: 2, pairs: 0, meso: 0, units: 2 } }));
+    const o = run(
+      'meso',
+      facts({ stereoisomers: { total: 2, chiral: 0, achiral: 2, pairs: 0, meso: 0, units: 2 } }),
+    );
     expect(ids(o)).toEqual(['meso-but-no-chiral-isomers']);
   });
   it('single-enantiomer: passes a chiral fully defined structure', () => {
@@ -75,7 +83,11 @@ describe('form-matches-structure', () => {
     expect(o.findings[0].data.mirror).toMatch(/mirror plane/);
   });
   it('racemate: no chiral stereoisomer at all', () => {
-    const f = facts({ units: [unit({ atoms: [2], defined: false })], chiral: null, stereoisomers: { total: 2, chiral: 0, achiral: 2, pairs: 0, meso: 0, units: 1 } });
+    const f = facts({
+      units: [unit({ atoms: [2], defined: false })],
+      chiral: null,
+      stereoisomers: { total: 2, chiral: 0, achiral: 2, pairs: 0, meso: 0, units: 1 },
+    });
     expect(ids(run('racemate', f))).toEqual(['racemate-no-chiral-isomers']);
   });
   it('racemate: a flat drawing of a constitution with several diastereomers is ambiguous', () => {
@@ -90,7 +102,9 @@ describe('form-matches-structure', () => {
     expect(run('single-diastereomer', rTartaric).findings).toEqual([]);
     const stilbene = facts({ units: [unit({ atoms: [2, 3], kind: 'double-bond', label: 'E' })] });
     expect(run('single-diastereomer', stilbene).findings).toEqual([]);
-    expect(ids(run('single-diastereomer', chiralFacts([centre(2, 'R')])))).toEqual(['diastereomer-too-few-units']);
+    expect(ids(run('single-diastereomer', chiralFacts([centre(2, 'R')])))).toEqual([
+      'diastereomer-too-few-units',
+    ]);
   });
   it('unknown passes and lists undefined units', () => {
     const o = run('unknown', flatButanol);
@@ -100,31 +114,68 @@ describe('form-matches-structure', () => {
 });
 
 describe('form-matches-structure: mixtures', () => {
-  const comp = (tag: string, key = 'K1') => read(chiralFacts([centre(2, 'R')], { constitutionKey: key }), tag);
-  const mixture = (n: number) => record({ form: 'diastereomer-mixture', components: Array.from({ length: n }, () => ({ smiles: 'C' })) });
+  const comp = (tag: string, key = 'K1') =>
+    read(chiralFacts([centre(2, 'R')], { constitutionKey: key }), tag);
+  const mixture = (n: number) =>
+    record({ form: 'diastereomer-mixture', components: Array.from({ length: n }, () => ({ smiles: 'C' })) });
   it('needs two or more components', () => {
-    expect(ids(runCheck(check, ctx({ record: mixture(1), main: read(flatButanol), components: [comp('a')] })))).toEqual([
-      'mixture-needs-components',
-    ]);
+    expect(
+      ids(runCheck(check, ctx({ record: mixture(1), main: read(flatButanol), components: [comp('a')] }))),
+    ).toEqual(['mixture-needs-components']);
   });
   it('passes pairwise diastereomers of the parent constitution', () => {
-    const o = runCheck(check, ctx({ record: mixture(2), main: read(flatButanol), components: [comp('a'), comp('b')], relations: { 'a|b': 'diastereomers' } }));
+    const o = runCheck(
+      check,
+      ctx({
+        record: mixture(2),
+        main: read(flatButanol),
+        components: [comp('a'), comp('b')],
+        relations: { 'a|b': 'diastereomers' },
+      }),
+    );
     expect(o.findings).toEqual([]);
   });
   it('fails identical, enantiomeric and unrelated components', () => {
-    const base = { record: mixture(3), main: read(flatButanol), components: [comp('a'), comp('b'), comp('c')] };
-    const o = runCheck(check, ctx({ ...base, relations: { 'a|b': 'identical', 'a|c': 'enantiomers', 'b|c': 'constitutional-isomers' } }));
-    expect(ids(o)).toEqual(['mixture-components-enantiomers', 'mixture-components-identical', 'mixture-components-unrelated']);
-    expect(o.findings.find((f) => f.messageId === 'mixture-components-enantiomers')!.data).toMatchObject({ a: 1, b: 3 });
+    const base = {
+      record: mixture(3),
+      main: read(flatButanol),
+      components: [comp('a'), comp('b'), comp('c')],
+    };
+    const o = runCheck(
+      check,
+      ctx({
+        ...base,
+        relations: { 'a|b': 'identical', 'a|c': 'enantiomers', 'b|c': 'constitutional-isomers' },
+      }),
+    );
+    expect(ids(o)).toEqual([
+      'mixture-components-enantiomers',
+      'mixture-components-identical',
+      'mixture-components-unrelated',
+    ]);
+    expect(o.findings.find((f) => f.messageId === 'mixture-components-enantiomers')!.data).toMatchObject({
+      a: 1,
+      b: 3,
+    });
   });
   it('fails a component of another constitution', () => {
-    const o = runCheck(check, ctx({ record: mixture(2), main: read(flatButanol), components: [comp('a'), comp('b', 'K2')], relations: { 'a|b': 'diastereomers' } }));
+    const o = runCheck(
+      check,
+      ctx({
+        record: mixture(2),
+        main: read(flatButanol),
+        components: [comp('a'), comp('b', 'K2')],
+        relations: { 'a|b': 'diastereomers' },
+      }),
+    );
     expect(ids(o)).toEqual(['mixture-component-constitution']);
   });
   it('a racemate that lists components needs two enantiomers', () => {
     const r = record({ form: 'racemate', components: [{ smiles: 'C' }, { smiles: 'C' }] });
     const base = { record: r, main: read(flatButanol), components: [comp('a'), comp('b')] };
     expect(runCheck(check, ctx({ ...base, relations: { 'a|b': 'enantiomers' } })).findings).toEqual([]);
-    expect(ids(runCheck(check, ctx({ ...base, relations: { 'a|b': 'identical' } })))).toEqual(['racemate-components-not-enantiomers']);
+    expect(ids(runCheck(check, ctx({ ...base, relations: { 'a|b': 'identical' } })))).toEqual([
+      'racemate-components-not-enantiomers',
+    ]);
   });
 });

@@ -22,7 +22,10 @@ describe('CHECKS', () => {
   });
   it('names a source or says "no source" in every explanation', () => {
     for (const c of CHECKS) {
-      expect([c.id, /IUPAC|Gold Book|specification|no source|from memory|OpenSMILES|CTfile/.test(c.explanation)]).toEqual([c.id, true]);
+      expect([
+        c.id,
+        /IUPAC|Gold Book|specification|no source|from memory|OpenSMILES|CTfile/.test(c.explanation),
+      ]).toEqual([c.id, true]);
     }
   });
 });

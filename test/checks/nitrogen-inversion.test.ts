@@ -8,24 +8,36 @@ const amine = (drawn: boolean) => facts({ invertibleNitrogens: [{ atom: 2, drawn
 
 describe('nitrogen-inversion', () => {
   it('fails a stereo claim resting only on an amine nitrogen', () => {
-    const o = runCheck(check, ctx({ record: record({ form: 'single-enantiomer' }), main: read(amine(true)) }));
+    const o = runCheck(
+      check,
+      ctx({ record: record({ form: 'single-enantiomer' }), main: read(amine(true)) }),
+    );
     expect(ids(o)).toEqual(['claim-rests-on-invertible-nitrogen']);
     expect(o.findings[0].data).toMatchObject({ atoms: '(atom 2)', drawnWithStereo: true });
   });
   it('also when the nitrogen is not drawn with stereo but is the only candidate', () => {
-    expect(ids(runCheck(check, ctx({ record: record({ form: 'racemate' }), main: read(amine(false)) })))).toEqual([
-      'claim-rests-on-invertible-nitrogen',
-    ]);
+    expect(
+      ids(runCheck(check, ctx({ record: record({ form: 'racemate' }), main: read(amine(false)) }))),
+    ).toEqual(['claim-rests-on-invertible-nitrogen']);
   });
   it('passes an achiral claim for the same amine', () => {
-    expect(runCheck(check, ctx({ record: record({ form: 'achiral' }), main: read(amine(false)) })).findings).toEqual([]);
+    expect(
+      runCheck(check, ctx({ record: record({ form: 'achiral' }), main: read(amine(false)) })).findings,
+    ).toEqual([]);
   });
   it('a drawn nitrogen next to a real stereocentre gets a note only', () => {
     const f = chiralFacts([centre(5, 'S')], { invertibleNitrogens: [{ atom: 2, drawnWithStereo: true }] });
     const o = runCheck(check, ctx({ record: record({ form: 'single-enantiomer' }), main: read(f) }));
-    expect(o.findings).toMatchObject([{ messageId: 'stereo-drawn-on-invertible-nitrogen', severity: 'note' }]);
+    expect(o.findings).toMatchObject([
+      { messageId: 'stereo-drawn-on-invertible-nitrogen', severity: 'note' },
+    ]);
   });
   it('does not apply without amine nitrogens', () => {
-    expect(runCheck(check, ctx({ record: record({ form: 'single-enantiomer' }), main: read(chiralFacts([centre(2, 'R')])) })).notApplicable).toBe(true);
+    expect(
+      runCheck(
+        check,
+        ctx({ record: record({ form: 'single-enantiomer' }), main: read(chiralFacts([centre(2, 'R')])) }),
+      ).notApplicable,
+    ).toBe(true);
   });
 });

@@ -6,7 +6,8 @@ import { ctx, ids, record, runCheck } from './facts.js';
 // ee = |F(+) − F(−)| (IUPAC Gold Book, enantiomer excess); racemate = equimolar mixture of enantiomers
 // (Gold Book, racemate). Tolerances are the registry defaults (common practice, no source): ratio sum ±1,
 // racemate ±2 points from 50:50, ee ±1, single enantiomer from 98 % ee.
-const run = (stereo: Parameters<typeof record>[0], config = {}) => runCheck(check, ctx({ record: record(stereo), config }));
+const run = (stereo: Parameters<typeof record>[0], config = {}) =>
+  runCheck(check, ctx({ record: record(stereo), config }));
 
 describe('parseRatio', () => {
   it('reads colon ratios, percentages and a single percentage', () => {
@@ -34,12 +35,16 @@ describe('ratio-and-ee-consistent', () => {
     expect(run({ form: 'racemate' }).notApplicable).toBe(true);
   });
   it('ratio parts must sum to 100 when they read as percentages', () => {
-    expect(ids(run({ form: 'diastereomer-mixture', ratio: '70:20', components: [{}, {}] }))).toEqual(['ratio-parts-not-100']);
+    expect(ids(run({ form: 'diastereomer-mixture', ratio: '70:20', components: [{}, {}] }))).toEqual([
+      'ratio-parts-not-100',
+    ]);
     expect(run({ form: 'diastereomer-mixture', ratio: '70:30', components: [{}, {}] }).findings).toEqual([]);
     expect(run({ form: 'diastereomer-mixture', ratio: '3:1', components: [{}, {}] }).findings).toEqual([]);
   });
   it('parts must match the components', () => {
-    expect(ids(run({ form: 'diastereomer-mixture', ratio: '60:30:10', components: [{}, {}] }))).toEqual(['ratio-components-count']);
+    expect(ids(run({ form: 'diastereomer-mixture', ratio: '60:30:10', components: [{}, {}] }))).toEqual([
+      'ratio-components-count',
+    ]);
   });
   it('a racemate is 50:50 within tolerance', () => {
     expect(run({ form: 'racemate', ratio: '51:49' }).findings).toEqual([]);

@@ -9,7 +9,12 @@ import { ctx, loaded } from './facts.js';
 
 export function readSmiles(smiles: string): ReadStructure {
   const r = readStructure(smiles, { format: 'smiles' });
-  if (!r.ok) return { structure: null, facts: null, error: { message: r.error.message, line: null, offset: r.error.at.offset ?? null } };
+  if (!r.ok)
+    return {
+      structure: null,
+      facts: null,
+      error: { message: r.error.message, line: null, offset: r.error.at.offset ?? null },
+    };
   return { structure: r.structure, facts: describeStructure(r.structure), error: null };
 }
 

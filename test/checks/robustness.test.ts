@@ -4,14 +4,29 @@ import { CHECKS } from '../../src/checks/index.js';
 import { STEREO_FORMS } from '../../src/registry/types.js';
 import { parseDescriptors } from '../../src/chem/descriptors.js';
 import { parseRatio } from '../../src/checks/ratio.js';
-import { assertRenderable, centre, chiralFacts, ctx, facts, failedRead, read, record, unit } from './facts.js';
+import {
+  assertRenderable,
+  centre,
+  chiralFacts,
+  ctx,
+  facts,
+  failedRead,
+  read,
+  record,
+  unit,
+} from './facts.js';
 
 // Bad input is data: no check throws on any record, and every finding fills its template.
 const FACTS = [
   read(facts()),
   read(chiralFacts([centre(2, 'R', 2), centre(3, null, 3)])),
   read(facts({ units: [unit({ atoms: [2], defined: false })], chiral: null, meso: null })),
-  read(facts({ invertibleNitrogens: [{ atom: 1, drawnWithStereo: true }], enhanced: { groups: [{ type: 'or', id: 1, atoms: [2] }], meaning: 'relative' } })),
+  read(
+    facts({
+      invertibleNitrogens: [{ atom: 1, drawnWithStereo: true }],
+      enhanced: { groups: [{ type: 'or', id: 1, atoms: [2] }], meaning: 'relative' },
+    }),
+  ),
   failedRead('broken', 3, null),
 ];
 
@@ -41,7 +56,8 @@ describe('checks never throw', () => {
     );
   });
   it('on a record that failed the schema (record null)', () => {
-    for (const c of CHECKS) for (const m of FACTS) expect(() => c.run(ctx({ record: null, main: m, findings: [] }))).not.toThrow();
+    for (const c of CHECKS)
+      for (const m of FACTS) expect(() => c.run(ctx({ record: null, main: m, findings: [] }))).not.toThrow();
   });
   it('the parsers return problems, not exceptions', () => {
     fc.assert(

@@ -6,7 +6,12 @@ import { ctx, ids, record, runCheck } from './facts.js';
 // Optical activity (IUPAC Gold Book): achiral and meso compounds are optically inactive; a racemate's
 // enantiomers cancel. Carvone: (R)-(−) and (S)-(+), [α]D about ±61 (neat) — handbook value, from memory.
 // zeroRotationTolerance default 1° (from memory: polarimeter resolution, see src/audit/config.ts).
-const rot = (value: number, p: Partial<Rotation> = {}): Rotation => ({ value, wavelength_nm: 589, temperature_c: 20, ...p });
+const rot = (value: number, p: Partial<Rotation> = {}): Rotation => ({
+  value,
+  wavelength_nm: 589,
+  temperature_c: 20,
+  ...p,
+});
 const run = (stereo: Parameters<typeof record>[0], name?: string) =>
   runCheck(check, ctx({ record: record(stereo, name ? { name } : {}) }));
 
@@ -26,14 +31,21 @@ describe('rotation-consistent', () => {
     const o = run({ form: 'single-enantiomer', rotation: rot(-61) }, '(S)-(+)-carvone');
     expect(o.findings).toMatchObject([{ messageId: 'sign-disagrees-with-rotation', field: 'name' }]);
     expect(o.findings[0].severity).toBeUndefined(); // the check's default, error
-    expect(ids(run({ form: 'single-enantiomer', descriptors: '(R)-(−)', rotation: rot(61) }))).toEqual(['sign-disagrees-with-rotation']);
+    expect(ids(run({ form: 'single-enantiomer', descriptors: '(R)-(−)', rotation: rot(61) }))).toEqual([
+      'sign-disagrees-with-rotation',
+    ]);
   });
   it('a sign disagreement away from the sodium D line is only a note (optical rotatory dispersion)', () => {
-    const o = run({ form: 'single-enantiomer', rotation: rot(-20, { wavelength_nm: 365 }) }, '(S)-(+)-carvone');
+    const o = run(
+      { form: 'single-enantiomer', rotation: rot(-20, { wavelength_nm: 365 }) },
+      '(S)-(+)-carvone',
+    );
     expect(o.findings).toMatchObject([{ messageId: 'sign-disagrees-with-rotation', severity: 'note' }]);
   });
   it('a sign with a zero rotation is a warning', () => {
-    expect(ids(run({ form: 'single-enantiomer', rotation: rot(0.2) }, '(+)-x'))).toContain('sign-with-zero-rotation');
+    expect(ids(run({ form: 'single-enantiomer', rotation: rot(0.2) }, '(+)-x'))).toContain(
+      'sign-with-zero-rotation',
+    );
   });
   it('a single enantiomer with zero rotation gets a note', () => {
     const o = run({ form: 'single-enantiomer', rotation: rot(0) });

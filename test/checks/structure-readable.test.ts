@@ -23,8 +23,23 @@ describe('structure-readable', () => {
   it('reports a molfile path the loader refused, once', () => {
     const r = record({}, { structure: { molfile: '../../etc/passwd' } });
     const l = loaded(r);
-    l.sources = { main: { field: 'structure', format: 'molfile', text: null, error: "'../../etc/passwd' leaves the registry folder" }, components: [] };
-    const o = runCheck(check, ctx({ record: r, loaded: l, main: failedRead("'../../etc/passwd' leaves the registry folder", null, null) }));
+    l.sources = {
+      main: {
+        field: 'structure',
+        format: 'molfile',
+        text: null,
+        error: "'../../etc/passwd' leaves the registry folder",
+      },
+      components: [],
+    };
+    const o = runCheck(
+      check,
+      ctx({
+        record: r,
+        loaded: l,
+        main: failedRead("'../../etc/passwd' leaves the registry folder", null, null),
+      }),
+    );
     expect(ids(o)).toEqual(['structure-source-refused']);
   });
   it('catches an escaping molfile path even without the loader (defence in depth)', () => {
@@ -37,8 +52,13 @@ describe('structure-readable', () => {
   });
   it('reports unreadable components by index', () => {
     const r = record({ form: 'diastereomer-mixture', components: [{ smiles: 'C' }, { smiles: 'C1' }] });
-    const o = runCheck(check, ctx({ record: r, components: [read(facts()), failedRead('unclosed ring', null, 1)] }));
-    expect(o.findings).toMatchObject([{ messageId: 'component-unreadable', field: 'stereo.components.1.smiles', data: { index: 2 } }]);
+    const o = runCheck(
+      check,
+      ctx({ record: r, components: [read(facts()), failedRead('unclosed ring', null, 1)] }),
+    );
+    expect(o.findings).toMatchObject([
+      { messageId: 'component-unreadable', field: 'stereo.components.1.smiles', data: { index: 2 } },
+    ]);
   });
   it('passes reader remarks on as notes without failing the check', () => {
     const o = runCheck(check, ctx({ main: read(facts({ remarks: ['wedge on a non-stereogenic atom 7'] })) }));

@@ -22,14 +22,22 @@ describe('waiver-review', () => {
     expect(runCheck(check, ctx({ record: record() })).notApplicable).toBe(true);
   });
   it('passes a complete waiver that matches a finding', () => {
-    const r = withWaivers([{ check: 'rotation-consistent', reason: 'measured at 365 nm only', approved_by: 'A. Chemist' }]);
+    const r = withWaivers([
+      { check: 'rotation-consistent', reason: 'measured at 365 nm only', approved_by: 'A. Chemist' },
+    ]);
     const o = runCheck(check, ctx({ record: r, findings: [f('rotation-consistent')] }));
     expect(o.findings).toEqual([]);
     expect(o.passed).toMatch(/1 accept/);
   });
   it('flags a waiver without reason or approver', () => {
-    const r = withWaivers([{ check: 'rotation-consistent' }, { check: 'ratio-and-ee-consistent', reason: 'ok' }]);
-    const o = runCheck(check, ctx({ record: r, findings: [f('rotation-consistent'), f('ratio-and-ee-consistent')] }));
+    const r = withWaivers([
+      { check: 'rotation-consistent' },
+      { check: 'ratio-and-ee-consistent', reason: 'ok' },
+    ]);
+    const o = runCheck(
+      check,
+      ctx({ record: r, findings: [f('rotation-consistent'), f('ratio-and-ee-consistent')] }),
+    );
     expect(ids(o)).toEqual(['waiver-incomplete', 'waiver-incomplete']);
     expect(o.findings.map((x) => x.field)).toEqual(['waivers.0', 'waivers.1']);
     expect(String(o.findings[0].data.missing)).toMatch(/reason.*approver/);
@@ -43,6 +51,8 @@ describe('waiver-review', () => {
   });
   it('notes a repeated waiver', () => {
     const w = { check: 'rotation-consistent', reason: 'r', approved_by: 'a' };
-    expect(ids(runCheck(check, ctx({ record: withWaivers([w, w]), findings: [f('rotation-consistent')] })))).toEqual(['waiver-duplicate']);
+    expect(
+      ids(runCheck(check, ctx({ record: withWaivers([w, w]), findings: [f('rotation-consistent')] }))),
+    ).toEqual(['waiver-duplicate']);
   });
 });

@@ -3,7 +3,9 @@ import { compareDescriptors, parseDescriptors } from '../../src/chem/descriptors
 import { centre, unit } from '../checks/facts.js';
 
 const items = (s: string, context?: 'descriptor' | 'name') =>
-  parseDescriptors(s, { context }).items.map((i) => `${i.locant ?? ''}${i.pair ?? i.label}${i.axial ? 'a' : ''}${i.relativeStar ? '*' : ''}`);
+  parseDescriptors(s, { context }).items.map(
+    (i) => `${i.locant ?? ''}${i.pair ?? i.label}${i.axial ? 'a' : ''}${i.relativeStar ? '*' : ''}`,
+  );
 
 describe('parseDescriptors: IUPAC 2013 P-93 notation', () => {
   // Source: IUPAC 2013 recommendations P-93.1.3 (R/S with locants, RS/SR, rac-, rel-, R*); examples written in
@@ -76,7 +78,9 @@ describe('parseDescriptors: IUPAC 2013 P-93 notation', () => {
     expect(parseDescriptors('cisplatin', { context: 'name' }).words).toEqual([]);
   });
   it('notices descriptors embedded further into a name', () => {
-    expect(parseDescriptors('(R)-2-[(S)-1-hydroxyethyl]pyrrolidine', { context: 'name' }).embeddedDescriptors).toBe(true);
+    expect(
+      parseDescriptors('(R)-2-[(S)-1-hydroxyethyl]pyrrolidine', { context: 'name' }).embeddedDescriptors,
+    ).toBe(true);
     expect(parseDescriptors('(R)-butan-2-ol', { context: 'name' }).embeddedDescriptors).toBe(false);
   });
   it('reports problems with character positions', () => {
@@ -89,10 +93,26 @@ describe('parseDescriptors: IUPAC 2013 P-93 notation', () => {
     expect(parseDescriptors('(1R*,2S)').problemDetails[0].message).toMatch(/\*/);
     expect(parseDescriptors('rel-').problemDetails.length).toBeGreaterThan(0);
     expect(parseDescriptors('(±)-(R)').problemDetails[0].message).toMatch(/racemate/);
-    expect(parseDescriptors('(2R,3S) extra').problemDetails[0]).toEqual({ offset: 8, message: expect.any(String) });
+    expect(parseDescriptors('(2R,3S) extra').problemDetails[0]).toEqual({
+      offset: 8,
+      message: expect.any(String),
+    });
   });
   it('never throws on arbitrary text (bad input is data)', () => {
-    for (const s of ['', '(', ')', '((R))', '(,)', 'rac', '(R)-', '-(R)', '(1R,)', '[2S]', '(+/-', '\u0000(R)']) {
+    for (const s of [
+      '',
+      '(',
+      ')',
+      '((R))',
+      '(,)',
+      'rac',
+      '(R)-',
+      '-(R)',
+      '(1R,)',
+      '[2S]',
+      '(+/-',
+      '\u0000(R)',
+    ]) {
       expect(() => parseDescriptors(s)).not.toThrow();
       expect(() => parseDescriptors(s, { context: 'name' })).not.toThrow();
     }
@@ -122,7 +142,10 @@ describe('compareDescriptors', () => {
   });
   it('falls back to counts for locants with letters or primes', () => {
     const c = compareDescriptors(parseDescriptors('(4aR,8aS)'), [centre(1, 'R', 4), centre(2, 'S', 8)]);
-    expect([c.method, c.whyNotPerLocant]).toEqual(['counts', 'not every descriptor has a plain numeric locant']);
+    expect([c.method, c.whyNotPerLocant]).toEqual([
+      'counts',
+      'not every descriptor has a plain numeric locant',
+    ]);
   });
   // IUPAC 2013 P-93.1.3: rel/R* and RS/SR describe the drawn stereoisomer or its mirror image.
   it('compares relative and racemic descriptors up to overall inversion', () => {
@@ -136,7 +159,10 @@ describe('compareDescriptors', () => {
     expect(compareDescriptors(parseDescriptors('rel-(1R,2R)'), drawn).agrees).toBe(false);
   });
   it('keeps E/Z and pseudoasymmetric r/s under inversion', () => {
-    const units = [centre(2, 'R', 2), unit({ atoms: [4, 5], kind: 'double-bond', label: 'E', locants: [4, 5] })];
+    const units = [
+      centre(2, 'R', 2),
+      unit({ atoms: [4, 5], kind: 'double-bond', label: 'E', locants: [4, 5] }),
+    ];
     expect(compareDescriptors(parseDescriptors('rel-(2S,4E)'), units).agrees).toBe(true);
     expect(compareDescriptors(parseDescriptors('rel-(2S,4Z)'), units).agrees).toBe(false);
   });
