@@ -5,7 +5,7 @@
  * memoised on the node; a unit whose ranking would need its own descriptor (a cycle) counts as having none.
  */
 import type { CipLabel } from '../facts.js';
-import { IMPLICIT_H, LONE_PAIR, type DoubleBondStereo, type TetrahedralStereo } from '../types.js';
+import { IMPLICIT_H, LONE_PAIR, type AxialStereo, type DoubleBondStereo, type TetrahedralStereo } from '../types.js';
 import { CipNode, Digraph, H_ATOM } from './digraph.js';
 import { Ranker } from './compare.js';
 import { handedness, rankLigands } from './rank.js';
@@ -98,6 +98,64 @@ function doubleBondLabel(rk: Ranker, node: CipNode, e: DoubleBondStereo): CipLab
   return label;
 }
 
+/**
+ * M/P (or m/p) of an axis from its two end nodes, each with the ranker of its digraph: near ligands (on ends[0])
+ * precede far ones; aR corresponds to M and aS to P (P-93.5.7.1, from memory). null when a pair ties.
+ */
+export function axialLabel(rks: Ranker[], ends: CipNode[], e: AxialStereo, level = RULE_5): CipLabel | null {
+  const rankOf = [0, 0, 0, 0];
+  let pseudo = false;
+  for (let i = 0; i < 2; i++) {
+    const rk = rks[i];
+    const end = ends[i];
+    const used = new Set<CipNode>();
+    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], used);
+    if (a !== null) used.add(a);
+    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], used);
+    if (a === null || b === null) return null;
+    const r = rankLigands(rk, end, [a, b], level);
+    if (r.tied) return null;
+    pseudo = pseudo !== r.pseudo;
+    rankOf[2 * i + r.order[0]] = 2 * i;
+    rankOf[2 * i + r.order[1]] = 2 * i + 1;
+  }
+  const h = handedness(e.winding, rankOf);
+  const label = h === 'R' ? 'M' : 'P';
+  return pseudo ? (label === 'M' ? 'm' : 'p') : label;
+}
+
+/** The node of the axis's other end, reached from `node` along the cumulated chain (or the axis bond). */
+function farEnd(dg: Digraph, node: CipNode, other: number): CipNode | null {
+  const g = dg.g;
+  let frontier: CipNode[] = [node];
+  const seen = new Set<CipNode>([node]);
+  for (let step = 0; step < 8 && frontier.length > 0; step++) {
+    const next: CipNode[] = [];
+    for (const x of frontier) {
+      if (x !== node && x.atom !== other && g.nbr[x.atom].length !== 2) continue;
+      const around = [...dg.kids(x), ...(x.parent ? [x.parent] : [])];
+      for (const y of around) {
+        if (y.dup || y.atom < 0 || seen.has(y)) continue;
+        if (y.atom === other) return y;
+        seen.add(y);
+        if (g.nbr[y.atom].length === 2 && g.dupOrd[y.atom].every((o) => o === 2)) next.push(y);
+      }
+    }
+    frontier = next;
+  }
+  return null;
+}
+
+function axialAux(rk: Ranker, node: CipNode, e: AxialStereo): CipLabel | null {
+  const i = e.ends[0] === node.atom ? 0 : 1;
+  const far = farEnd(rk.dg, node, e.ends[1 - i]);
+  if (far === null) return null;
+  const ends = i === 0 ? [node, far] : [far, node];
+  const label = axialLabel([rk, rk], ends, e);
+  if (far.aux === undefined) far.aux = label;
+  return label;
+}
+
 /** Make the auxiliary-descriptor function for one digraph. */
 export function auxFor(dg: Digraph): (rk: Ranker) => (node: CipNode) => CipLabel | null {
   return (rk: Ranker) =>
@@ -109,10 +167,13 @@ export function auxFor(dg: Digraph): (rk: Ranker) => (node: CipNode) => CipLabel
       let label: CipLabel | null = null;
       const t = g.tetraAt[node.atom];
       const b = g.bondAt[node.atom];
+      const x = g.axialAt[node.atom];
       if (t >= 0 && t !== dg.rootElement && g.auxAllowed[t]) {
         label = rk.within(node, () => tetrahedralLabel(rk, node, g.s.stereo[t] as TetrahedralStereo));
       } else if (b >= 0 && b !== dg.rootElement && g.auxAllowed[b]) {
         label = rk.within(node, () => doubleBondLabel(rk, node, g.s.stereo[b] as DoubleBondStereo));
+      } else if (x >= 0 && x !== dg.rootElement && g.auxAllowed[x]) {
+        label = rk.within(node, () => axialAux(rk, node, g.s.stereo[x] as AxialStereo));
       }
       node.auxBusy = false;
       node.aux = label;

@@ -8,8 +8,8 @@ import type { CipLabel } from '../facts.js';
 import type { AxialStereo, DoubleBondStereo, StereoElement, TetrahedralStereo } from '../types.js';
 import { Digraph } from './digraph.js';
 import type { CipGraph } from './graph.js';
-import { endBranches, ezLabel, ligandBranch, newRanker, endRank, tetrahedralLabel } from './aux.js';
-import { handedness, rankLigands } from './rank.js';
+import { axialLabel, endBranches, ezLabel, ligandBranch, newRanker, endRank, tetrahedralLabel } from './aux.js';
+import { rankLigands } from './rank.js';
 import { RULE_5, RULE_6 } from './rules.js';
 import type { Ranker } from './compare.js';
 
@@ -69,26 +69,9 @@ function doubleBond(g: CipGraph, index: number, e: DoubleBondStereo, ref: number
 
 function axial(g: CipGraph, index: number, e: AxialStereo, ref: number): CipLabel | null {
   const level = ref >= 0 ? RULE_6 : RULE_5;
-  const rankOf = [0, 0, 0, 0];
-  let pseudo = false;
-  for (let i = 0; i < 2; i++) {
-    const rk = ranker(g, e.ends[i], index, ref);
-    const root = rk.dg.root;
-    const used = new Set<typeof root>();
-    const a = ligandBranch(rk.dg, root, e.ligands[2 * i], used);
-    if (a !== null) used.add(a);
-    const b = ligandBranch(rk.dg, root, e.ligands[2 * i + 1], used);
-    if (a === null || b === null) return null;
-    const r = rankLigands(rk, root, [a, b], level);
-    if (r.tied) return null;
-    pseudo = pseudo !== r.pseudo;
-    rankOf[2 * i + r.order[0]] = 2 * i;
-    rankOf[2 * i + r.order[1]] = 2 * i + 1;
-  }
-  // near ligands precede far ones; aR corresponds to M and aS to P (P-93.5.7.1, from memory)
-  const h = handedness(e.winding, rankOf);
-  const label = h === 'R' ? 'M' : 'P';
-  return pseudo ? (label === 'M' ? 'm' : 'p') : label;
+  const r0 = ranker(g, e.ends[0], index, ref);
+  const r1 = ranker(g, e.ends[1], index, ref);
+  return axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level);
 }
 
 function labelWith(g: CipGraph, index: number, e: StereoElement, ref: number): CipLabel | null {
