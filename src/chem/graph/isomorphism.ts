@@ -11,7 +11,7 @@
 import type { Structure } from '../types.js';
 import { conjugatedRingBonds } from './aromaticity.js';
 import { prepare } from './prepared.js';
-import { clonePartition, partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
+import { clonePartition, copyPartition, partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
 
 export interface IsomorphismOptions {
   /** Atoms of A whose images (and the images of their neighbours) distinguish mappings. */
@@ -33,6 +33,8 @@ export interface IsomorphismOptions {
 export interface SearchResult {
   /** false when the node budget or maxResults cut the search short (stopping via onMapping keeps it true). */
   complete: boolean;
+  /** Search nodes visited (refinements after individualising a pair), for diagnostics. */
+  nodes?: number;
 }
 
 const NONE = 0;
@@ -95,8 +97,9 @@ export function findIsomorphisms(a: Structure, b: Structure, opts: IsomorphismOp
     if (!refiner.balanced(p) || !refiner.refine(p)) return { complete: true };
   }
   const search = new Search(g, n, refiner, inKey, opts);
+  search.root = p;
   search.run(p, opts.key ? opts.key.length > 0 : true);
-  return { complete: !search.budgetHit && !search.maxHit };
+  return { complete: !search.budgetHit && !search.maxHit, nodes: search.nodes };
 }
 
 function sameColours(x: ArrayLike<number> | undefined, y: ArrayLike<number> | undefined, n: number): boolean {
@@ -116,6 +119,7 @@ function concat(x: number[], y: number[]): Float64Array {
 /** The union partition of A ∪ A' from an equitable partition of A: each cell followed by its copies. */
 function doubled(p: Partition, n: number): Partition {
   const lab = new Int32Array(2 * n);
+  const pos = new Int32Array(2 * n);
   const start = new Int32Array(2 * n);
   const len = new Int32Array(2 * n);
   for (let s = 0; s < n; s += p.len[s]) {
@@ -124,11 +128,13 @@ function doubled(p: Partition, n: number): Partition {
       const v = p.lab[s + t];
       lab[2 * s + t] = v;
       lab[2 * s + L + t] = v + n;
+      pos[v] = 2 * s + t;
+      pos[v + n] = 2 * s + L + t;
       start[v] = start[v + n] = 2 * s;
     }
     len[2 * s] = 2 * L;
   }
-  return { lab, start, len, cells: p.cells };
+  return { lab, pos, start, len, cells: p.cells };
 }
 
 /** Disjoint union of two compressed graphs (atoms of y follow those of x). */
@@ -182,6 +188,8 @@ class Search {
   budgetHit = false;
   maxHit = false;
   private readonly maxNodes: number;
+  private readonly pool: Partition[] = [];
+  root: Partition | null = null;
   private readonly maxResults: number;
 
   constructor(
@@ -196,7 +204,7 @@ class Search {
   }
 
   /** `exhaustive`: still branching over key images. Returns NONE, FOUND or STOP. */
-  run(p: Partition, exhaustive: boolean): number {
+  run(p: Partition, exhaustive: boolean, depth = 0): number {
     const n = this.n;
     if (p.cells === n) return this.leaf(p);
     const { lab, len } = p;
@@ -240,9 +248,10 @@ class Search {
         this.budgetHit = true;
         return STOP;
       }
-      const child = clonePartition(p);
+      const child = this.scratch(depth);
+      copyPartition(p, child);
       if (!this.refiner.individualise(child, x, y)) continue;
-      const r = this.run(child, exhaustive);
+      const r = this.run(child, exhaustive, depth + 1);
       if (r === STOP) return STOP;
       if (r === FOUND) {
         any = FOUND;
@@ -250,6 +259,12 @@ class Search {
       }
     }
     return any;
+  }
+
+  /** One partition per search depth, reused. */
+  private scratch(depth: number): Partition {
+    while (this.pool.length <= depth) this.pool.push(clonePartition(this.pool[0] ?? this.root!));
+    return this.pool[depth];
   }
 
   private leaf(p: Partition): number {

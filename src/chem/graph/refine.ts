@@ -27,6 +27,8 @@ const WEIGHT = [0, 1, 1 << 6, 1 << 12, 1 << 18, 1 << 24, 1 << 27];
 /** An ordered partition: cells are contiguous runs of `lab`; `start[v]` is the first position of v's cell. */
 export interface Partition {
   lab: Int32Array;
+  /** Position of each atom in `lab`. */
+  pos: Int32Array;
   /** First position of the cell of each atom. */
   start: Int32Array;
   /** Cell length, stored at the cell's first position. */
@@ -35,7 +37,15 @@ export interface Partition {
 }
 
 export function clonePartition(p: Partition): Partition {
-  return { lab: p.lab.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+  return { lab: p.lab.slice(), pos: p.pos.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+}
+
+export function copyPartition(from: Partition, to: Partition): void {
+  to.lab.set(from.lab);
+  to.pos.set(from.pos);
+  to.start.set(from.start);
+  to.len.set(from.len);
+  to.cells = from.cells;
 }
 
 /** Dense ranks (0 = lowest) of per-atom keys compared lexicographically. */
@@ -77,6 +87,7 @@ function rankOne(values: ArrayLike<number>, n: number): Int32Array {
 export function partitionOf(rank: Int32Array): Partition {
   const n = rank.length;
   const lab = new Int32Array(n);
+  const pos = new Int32Array(n);
   const start = new Int32Array(n);
   const len = new Int32Array(n);
   let cells = 0;
@@ -87,11 +98,12 @@ export function partitionOf(rank: Int32Array): Partition {
   const fill = first.slice(0, cells);
   for (let i = 0; i < n; i++) {
     const c = rank[i];
+    pos[i] = fill[c];
     lab[fill[c]++] = i;
     start[i] = first[c];
   }
   for (let c = 0; c < cells; c++) len[first[c]] = first[c + 1] - first[c];
-  return { lab, start, len, cells };
+  return { lab, pos, start, len, cells };
 }
 
 /** Cell index (0-based, in partition order) of every atom. */
@@ -114,12 +126,17 @@ export class Refiner {
   private readonly touched: Int32Array;
   private readonly queue: Int32Array;
   private readonly inQueue: Uint8Array;
-  private readonly touchedCells: number[] = [];
+  private readonly cellHits: Int32Array;
+  private readonly cellBase: Int32Array;
+  private readonly members: Int32Array;
+  private readonly cellsToSplit: number[] = [];
   private readonly sortBuf: Float64Array;
   private readonly starts: number[] = [];
   private head = 0;
   private tail = 0;
   private queued = 0;
+  /** Work done so far (neighbour visits), for search budgets. */
+  work = 0;
 
   constructor(
     readonly g: CsrGraph,
@@ -130,24 +147,22 @@ export class Refiner {
     this.touched = new Int32Array(n);
     this.queue = new Int32Array(n + 1);
     this.inQueue = new Uint8Array(n);
+    this.cellHits = new Int32Array(n);
+    this.cellBase = new Int32Array(n);
+    this.members = new Int32Array(n);
     this.sortBuf = new Float64Array(n);
   }
 
   /** Moves atoms x (of A) and y (of B) of one cell into a cell of their own at the cell's start; refines. */
   individualise(p: Partition, x: number, y: number): boolean {
-    const { lab, start, len } = p;
+    const { start, len } = p;
     const s = start[x];
     const L = len[s];
-    const place = (v: number, at: number) => {
-      const from = lab.indexOf(v, s);
-      lab[from] = lab[at];
-      lab[at] = v;
-    };
-    place(x, s);
-    place(y, s + 1);
+    swapTo(p, x, s);
+    swapTo(p, y, s + 1);
     len[s] = 2;
     len[s + 2] = L - 2;
-    for (let t = s + 2; t < s + L; t++) start[lab[t]] = s + 2;
+    for (let t = s + 2; t < s + L; t++) start[p.lab[t]] = s + 2;
     p.cells++;
     return this.refine(p, [s]);
   }
@@ -166,10 +181,7 @@ export class Refiner {
   refine(p: Partition, splitters?: number[]): boolean {
     const { offs, adj, code } = this.g;
     const { lab, start, len } = p;
-    const count = this.count;
-    const touched = this.touched;
-    const queue = this.queue;
-    const inQueue = this.inQueue;
+    const { count, touched, queue, inQueue, cellHits, cellBase, members } = this;
     const qsize = queue.length;
     this.head = 0;
     this.tail = 0;
@@ -177,7 +189,8 @@ export class Refiner {
     if (splitters) for (const s of splitters) this.push(s);
     else for (let s = 0; s < lab.length; s += len[s]) this.push(s);
     const n = lab.length;
-    while (this.queued > 0) {
+    let ok = true;
+    while (this.queued > 0 && ok) {
       if (p.cells === n) break; // discrete: nothing left to split
       const w = queue[this.head];
       this.head = this.head + 1 === qsize ? 0 : this.head + 1;
@@ -188,34 +201,43 @@ export class Refiner {
       const wEnd = w + len[w];
       for (let t = w; t < wEnd; t++) {
         const v = lab[t];
+        this.work += offs[v + 1] - offs[v] + 1;
         for (let e = offs[v]; e < offs[v + 1]; e++) {
           const u = adj[e];
           if (count[u] === 0) touched[nt++] = u;
           count[u] += WEIGHT[code[e]];
         }
       }
-      const cellsToSplit = this.touchedCells;
-      cellsToSplit.length = 0;
+      // Group the touched atoms by cell (cells in position order, so the result does not depend on atom order).
+      const cells = this.cellsToSplit;
+      cells.length = 0;
       for (let t = 0; t < nt; t++) {
         const s = start[touched[t]];
-        if (len[s] > 1 && !cellsToSplit.includes(s)) cellsToSplit.push(s);
+        if (len[s] === 1) continue;
+        if (cellHits[s] === 0) cells.push(s);
+        cellHits[s]++;
       }
-      if (cellsToSplit.length > 1) cellsToSplit.sort(ascending);
-      let ok = true;
-      for (const s of cellsToSplit) {
-        if (this.splitCell(p, s) < 0) {
-          ok = false;
-          break;
-        }
+      if (cells.length > 1) cells.sort(ascending);
+      let off = 0;
+      for (const s of cells) {
+        cellBase[s] = off;
+        off += cellHits[s];
+        cellHits[s] = 0;
+      }
+      for (let t = 0; t < nt; t++) {
+        const u = touched[t];
+        const s = start[u];
+        if (len[s] === 1) continue;
+        members[cellBase[s] + cellHits[s]++] = u;
+      }
+      for (const s of cells) {
+        if (ok && this.splitCell(p, s, cellBase[s], cellHits[s]) < 0) ok = false;
+        cellHits[s] = 0;
       }
       for (let t = 0; t < nt; t++) count[touched[t]] = 0;
-      if (!ok) {
-        this.drain();
-        return false;
-      }
     }
     this.drain();
-    return true;
+    return ok;
   }
 
   private push(s: number): void {
@@ -234,34 +256,50 @@ export class Refiner {
     this.queued = 0;
   }
 
-  /** Splits the cell at s by count; returns the number of fragments, or -1 on an A/B imbalance. */
-  private splitCell(p: Partition, s: number): number {
+  /**
+   * Splits the cell at s by count; the cell's touched atoms are members[from .. from+k). Untouched atoms (count
+   * 0) stay at the front as the first fragment. Returns the number of fragments, or -1 on an A/B imbalance.
+   */
+  private splitCell(p: Partition, s: number, from: number, k: number): number {
     const { lab, start, len } = p;
     const count = this.count;
     const L = len[s];
-    const first = count[lab[s]];
-    let uniform = true;
-    for (let t = s + 1; t < s + L; t++) {
-      if (count[lab[t]] !== first) {
-        uniform = false;
-        break;
+    if (k === L) {
+      const first = count[lab[s]];
+      let uniform = true;
+      for (let t = s + 1; t < s + L; t++) {
+        if (count[lab[t]] !== first) {
+          uniform = false;
+          break;
+        }
       }
+      if (uniform) return 1;
     }
-    if (uniform) return 1;
-    // Sort the cell by (count, atom): counts < 2^30, atoms < 2^22.
-    const buf = this.sortBuf.subarray(0, L);
-    for (let t = 0; t < L; t++) buf[t] = count[lab[s + t]] * 4194304 + lab[s + t];
-    buf.sort();
-    for (let t = 0; t < L; t++) lab[s + t] = buf[t] % 4194304;
+    // Touched atoms to the end of the cell, then sorted there by (count, atom).
+    let end = s + L;
+    for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
+    this.work += k;
+    const buf = this.sortBuf.subarray(0, k);
+    for (let t = 0; t < k; t++) buf[t] = count[lab[end + t]] * 4194304 + lab[end + t];
+    if (k > 1) buf.sort();
+    for (let t = 0; t < k; t++) {
+      const v = buf[t] % 4194304;
+      lab[end + t] = v;
+      p.pos[v] = end + t;
+    }
     const wasQueued = this.inQueue[s] === 1;
-    let fragStart = s;
-    let fragments = 0;
-    let largest = s;
-    let largestLen = 0;
     const starts = this.starts;
     starts.length = 0;
-    for (let t = s; t <= s + L; t++) {
-      if (t === s + L || (t > s && count[lab[t]] !== count[lab[t - 1]])) {
+    let largest = s;
+    let largestLen = 0;
+    if (end > s) {
+      len[s] = end - s; // untouched atoms: their start is unchanged, and the cell stays balanced
+      starts.push(s);
+      largestLen = end - s;
+    }
+    let fragStart = end;
+    for (let t = end; t <= s + L; t++) {
+      if (t === s + L || (t > end && count[lab[t]] !== count[lab[t - 1]])) {
         const fl = t - fragStart;
         len[fragStart] = fl;
         for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
@@ -271,17 +309,16 @@ export class Refiner {
           largestLen = fl;
           largest = fragStart;
         }
-        fragments++;
         fragStart = t;
       }
     }
-    p.cells += fragments - 1;
+    p.cells += starts.length - 1;
     for (const f of starts) {
       if (wasQueued) {
         if (f !== s) this.push(f);
       } else if (f !== largest) this.push(f);
     }
-    return fragments;
+    return starts.length;
   }
 
   private cellBalanced(p: Partition, s: number, L: number): boolean {
@@ -289,4 +326,14 @@ export class Refiner {
     for (let t = s; t < s + L; t++) if (p.lab[t] < this.split) a++;
     return 2 * a === L;
   }
+}
+
+/** Moves atom v to position `at` (swapping with the atom there). */
+function swapTo(p: Partition, v: number, at: number): void {
+  const from = p.pos[v];
+  const w = p.lab[at];
+  p.lab[from] = w;
+  p.pos[w] = from;
+  p.lab[at] = v;
+  p.pos[v] = at;
 }

@@ -57,30 +57,34 @@ describe('Kekulé-independent conjugated ring bonds', () => {
 
 const NET = ['bbbp.csv', 'clintox.csv', 'sider.csv', 'tox21.csv'];
 
-describe.skipIf(!haveSharedData('moleculenet'))('aromatic ring counts against RDKit over MoleculeNet (Wu et al., Chem. Sci. 2018)', () => {
-  // RDKit's aromaticity model (RDKit Book, "Aromaticity") also judges larger fused systems and treats some
-  // exocyclic double bonds differently; this simple model agrees with it on nearly all drug-like molecules.
-  it('agrees with RDKit NumAromaticRings on at least 99% of the molecules', async () => {
-    const rd = await loadRdkit();
-    let compared = 0;
-    const disagree: string[] = [];
-    for (const file of NET) {
-      const all = moleculeNetSmiles(sharedDataPath('moleculenet', file));
-      for (let i = 3; i < all.length; i += 10) {
-        const ref = fromRdkit(rd, all[i]);
-        if (!ref) continue;
-        compared++;
-        const s = ref.structure;
-        const g = buildGraph(s);
-        const info = ringInfo(s, g);
-        const arom = aromaticBonds(s, info);
-        const mine = info.rings.filter((r) =>
-          r.every((a, j) => arom[g.nbrBonds[a][g.nbrs[a].indexOf(r[(j + 1) % r.length])]]),
-        ).length;
-        if (mine !== ref.numAromaticRings) disagree.push(`${all[i]} mine ${mine} RDKit ${ref.numAromaticRings}`);
+describe.skipIf(!haveSharedData('moleculenet'))(
+  'aromatic ring counts against RDKit over MoleculeNet (Wu et al., Chem. Sci. 2018)',
+  () => {
+    // RDKit's aromaticity model (RDKit Book, "Aromaticity") also judges larger fused systems and treats some
+    // exocyclic double bonds differently; this simple model agrees with it on nearly all drug-like molecules.
+    it('agrees with RDKit NumAromaticRings on at least 99% of the molecules', async () => {
+      const rd = await loadRdkit();
+      let compared = 0;
+      const disagree: string[] = [];
+      for (const file of NET) {
+        const all = moleculeNetSmiles(sharedDataPath('moleculenet', file));
+        for (let i = 3; i < all.length; i += 10) {
+          const ref = fromRdkit(rd, all[i]);
+          if (!ref) continue;
+          compared++;
+          const s = ref.structure;
+          const g = buildGraph(s);
+          const info = ringInfo(s, g);
+          const arom = aromaticBonds(s, info);
+          const mine = info.rings.filter((r) =>
+            r.every((a, j) => arom[g.nbrBonds[a][g.nbrs[a].indexOf(r[(j + 1) % r.length])]]),
+          ).length;
+          if (mine !== ref.numAromaticRings)
+            disagree.push(`${all[i]} mine ${mine} RDKit ${ref.numAromaticRings}`);
+        }
       }
-    }
-    expect(compared).toBeGreaterThan(1200);
-    expect(disagree.length / compared).toBeLessThan(0.01);
-  }, 120_000);
-});
+      expect(compared).toBeGreaterThan(1200);
+      expect(disagree.length / compared).toBeLessThan(0.01);
+    }, 120_000);
+  },
+);

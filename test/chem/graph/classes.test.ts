@@ -52,9 +52,16 @@ describe('constitutional equivalence classes', () => {
 });
 
 const MOLECULES = [
-  'CC1=CC=CC=C1', 'OC1C(O)C(O)C(O)C(O)C1O', 'C12C3C4C1C5C2C3C45', 'CC(C)(C)C1=CC=C(O)C=C1',
-  'CN1C=NC2=C1C(=O)N(C)C(=O)N2C', 'OC(=O)C(O)C(O)C(=O)O', 'C1CC2CCC1CC2', 'CC(=O)OC1=CC=CC=C1C(=O)O',
-  'NC(CC1=CC=CC=C1)C(=O)O.Cl', 'C1COCCOCCOCCOCCOCCO1',
+  'CC1=CC=CC=C1',
+  'OC1C(O)C(O)C(O)C(O)C1O',
+  'C12C3C4C1C5C2C3C45',
+  'CC(C)(C)C1=CC=C(O)C=C1',
+  'CN1C=NC2=C1C(=O)N(C)C(=O)N2C',
+  'OC(=O)C(O)C(O)C(=O)O',
+  'C1CC2CCC1CC2',
+  'CC(=O)OC1=CC=CC=C1C(=O)O',
+  'NC(CC1=CC=CC=C1)C(=O)O.Cl',
+  'C1COCCOCCOCCOCCOCCO1',
 ];
 
 describe('property: renumbering atoms changes no class (fast-check)', () => {

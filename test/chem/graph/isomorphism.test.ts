@@ -6,7 +6,10 @@ import { build } from './build.js';
 import { permute, shuffle } from './permute.js';
 import { c60 } from './solids.js';
 
-function all(s: Structure, extra: Partial<Parameters<typeof automorphisms>[1]> = {}): { maps: Int32Array[]; complete: boolean } {
+function all(
+  s: Structure,
+  extra: Partial<Parameters<typeof automorphisms>[1]> = {},
+): { maps: Int32Array[]; complete: boolean } {
   const maps: Int32Array[] = [];
   const r = automorphisms(s, { ...extra, onMapping: (m) => (maps.push(m), true) });
   return { maps, complete: r.complete };
@@ -16,8 +19,10 @@ function all(s: Structure, extra: Partial<Parameters<typeof automorphisms>[1]> =
 function isMapping(a: Structure, b: Structure, map: Int32Array): boolean {
   if (new Set(map).size !== a.atoms.length) return false;
   const bonds = new Set(b.bonds.map((x) => `${Math.min(x.a, x.b)}-${Math.max(x.a, x.b)}`));
-  return a.bonds.every((x) => bonds.has(`${Math.min(map[x.a], map[x.b])}-${Math.max(map[x.a], map[x.b])}`)) &&
-    a.atoms.every((x, i) => x.element === b.atoms[map[i]].element && x.hCount === b.atoms[map[i]].hCount);
+  return (
+    a.bonds.every((x) => bonds.has(`${Math.min(map[x.a], map[x.b])}-${Math.max(map[x.a], map[x.b])}`)) &&
+    a.atoms.every((x, i) => x.element === b.atoms[map[i]].element && x.hCount === b.atoms[map[i]].hCount)
+  );
 }
 
 // Group orders of the molecular graphs: the full point groups of the symmetric conformations, from point-group
@@ -64,28 +69,40 @@ describe('automorphism group orders', () => {
 });
 
 const SYMMETRIC = [
-  'OC1C(O)C(O)C(O)C(O)C1O', 'CC(C)(C)C(C(C)(C)C)O', 'C12C3C4C1C5C2C3C45', 'OC(=O)C(O)C(O)C(=O)O',
-  'CC(C)C(C)C(C)C', 'C1CC2CCC1CC2', 'CC1=CC(C)=CC(C)=C1', 'OC1CCC(O)CC1', 'CC(O)C(C)(C)C(C)O',
+  'OC1C(O)C(O)C(O)C(O)C1O',
+  'CC(C)(C)C(C(C)(C)C)O',
+  'C12C3C4C1C5C2C3C45',
+  'OC(=O)C(O)C(O)C(=O)O',
+  'CC(C)C(C)C(C)C',
+  'C1CC2CCC1CC2',
+  'CC1=CC(C)=CC(C)=C1',
+  'OC1CCC(O)CC1',
+  'CC(O)C(C)(C)C(C)O',
 ];
 
 describe('key semantics: one mapping per distinct restriction to key ∪ N(key) (checked against full enumeration)', () => {
   it('matches the restrictions of the full automorphism group', () => {
     fc.assert(
-      fc.property(fc.constantFrom(...SYMMETRIC), fc.nat(), fc.integer({ min: 1, max: 3 }), (smi, seed, size) => {
-        const s = build(smi);
-        const key = shuffle(s.atoms.length, seed).slice(0, size);
-        const near = new Set(key);
-        for (const b of s.bonds) {
-          if (key.includes(b.a)) near.add(b.b);
-          if (key.includes(b.b)) near.add(b.a);
-        }
-        const atoms = [...near].sort((x, y) => x - y);
-        const restrict = (m: Int32Array) => atoms.map((i) => m[i]).join(',');
-        const full = new Set(all(s).maps.map(restrict));
-        const keyed = all(s, { key }).maps.map(restrict);
-        expect(new Set(keyed).size).toBe(keyed.length);
-        expect(new Set(keyed)).toEqual(full);
-      }),
+      fc.property(
+        fc.constantFrom(...SYMMETRIC),
+        fc.nat(),
+        fc.integer({ min: 1, max: 3 }),
+        (smi, seed, size) => {
+          const s = build(smi);
+          const key = shuffle(s.atoms.length, seed).slice(0, size);
+          const near = new Set(key);
+          for (const b of s.bonds) {
+            if (key.includes(b.a)) near.add(b.b);
+            if (key.includes(b.b)) near.add(b.a);
+          }
+          const atoms = [...near].sort((x, y) => x - y);
+          const restrict = (m: Int32Array) => atoms.map((i) => m[i]).join(',');
+          const full = new Set(all(s).maps.map(restrict));
+          const keyed = all(s, { key }).maps.map(restrict);
+          expect(new Set(keyed).size).toBe(keyed.length);
+          expect(new Set(keyed)).toEqual(full);
+        },
+      ),
       { numRuns: 150 },
     );
   });
@@ -98,10 +115,14 @@ describe('key semantics: one mapping per distinct restriction to key ∪ N(key) 
 });
 
 const DRUGS = [
-  'CC(=O)OC1=CC=CC=C1C(=O)O', 'CN1C=NC2=C1C(=O)N(C)C(=O)N2C', 'CC(C)CC1=CC=C(C=C1)C(C)C(=O)O',
+  'CC(=O)OC1=CC=CC=C1C(=O)O',
+  'CN1C=NC2=C1C(=O)N(C)C(=O)N2C',
+  'CC(C)CC1=CC=C(C=C1)C(C)C(=O)O',
   'CC(C)C1=C(C(=C(N1CCC(CC(CC(=O)O)O)O)C2=CC=C(C=C2)F)C3=CC=CC=C3)C(=O)NC4=CC=CC=C4',
   'CCC1C(C(C(C(=O)C(CC(C(C(C(C(C(=O)O1)C)OC2CC(C(C(O2)C)O)(C)OC)C)OC3C(C(CC(O3)C)N(C)C)O)(C)O)C)C)O)(C)O',
-  'OC1C(O)C(O)C(O)C(O)C1O', 'C1COCCOCCOCCOCCOCCO1', 'NC(CC1=CC=CC=C1)C(=O)O.Cl',
+  'OC1C(O)C(O)C(O)C(O)C1O',
+  'C1COCCOCCOCCOCCOCCO1',
+  'NC(CC1=CC=CC=C1)C(=O)O.Cl',
 ];
 
 describe('isomorphic()', () => {
@@ -138,11 +159,15 @@ describe('isomorphic()', () => {
   it('A onto B with colours: only atoms of equal colour are paired', () => {
     const a = build('OCCO');
     let count = 0;
-    findIsomorphisms(a, a, { colourA: [1, 0, 0, 0], colourB: [0, 0, 0, 1], onMapping: (m) => {
-      expect(m[0]).toBe(3);
-      count++;
-      return true;
-    } });
+    findIsomorphisms(a, a, {
+      colourA: [1, 0, 0, 0],
+      colourB: [0, 0, 0, 1],
+      onMapping: (m) => {
+        expect(m[0]).toBe(3);
+        count++;
+        return true;
+      },
+    });
     expect(count).toBe(1);
   });
 });

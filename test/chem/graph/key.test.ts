@@ -30,8 +30,13 @@ describe('molecular formula (Hill order)', () => {
 });
 
 const MOLECULES = [
-  'CC(=O)OC1=CC=CC=C1C(=O)O', 'CN1C=NC2=C1C(=O)N(C)C(=O)N2C', 'OC1C(O)C(O)C(O)C(O)C1O',
-  'CC(C)CC1=CC=C(C=C1)C(C)C(=O)O', 'C1COCCOCCOCCOCCOCCO1', 'NC(CC1=CC=CC=C1)C(=O)O.Cl', 'CCCCO.CCC(C)O',
+  'CC(=O)OC1=CC=CC=C1C(=O)O',
+  'CN1C=NC2=C1C(=O)N(C)C(=O)N2C',
+  'OC1C(O)C(O)C(O)C(O)C1O',
+  'CC(C)CC1=CC=C(C=C1)C(C)C(=O)O',
+  'C1COCCOCCOCCOCCOCCO1',
+  'NC(CC1=CC=CC=C1)C(=O)O.Cl',
+  'CCCCO.CCC(C)O',
 ];
 
 describe('constitution key', () => {

@@ -10,6 +10,7 @@ import type { BondOrder, Structure } from '../../../src/chem/types.js';
 
 export interface RdkitMol {
   get_json(): string;
+  get_smiles(details?: string): string;
   get_descriptors(): string;
   is_valid?(): boolean;
   delete(): void;
@@ -59,18 +60,55 @@ export function fromRdkit(rd: RdkitModule, smiles: string): RdkitReference | nul
       atoms: m.atoms.map((a, i) => {
         const z = a.z ?? da.z;
         return {
-          element: ELEMENTS[z] ?? '*', atomicNumber: z, charge: a.chg ?? da.chg, isotope: (a.isotope ?? da.isotope) || null,
-          hCount: a.impHs ?? da.impHs, aromatic: false, radical: a.nRad ?? da.nRad, mapNumber: null, inputNumber: i + 1,
+          element: ELEMENTS[z] ?? '*',
+          atomicNumber: z,
+          charge: a.chg ?? da.chg,
+          isotope: (a.isotope ?? da.isotope) || null,
+          hCount: a.impHs ?? da.impHs,
+          aromatic: false,
+          radical: a.nRad ?? da.nRad,
+          mapNumber: null,
+          inputNumber: i + 1,
           coords: null,
         };
       }),
       bonds: (m.bonds ?? []).map((b) => ({
-        a: b.atoms[0], b: b.atoms[1], order: ((b.bo ?? 1) || 1) as BondOrder, aromatic: false, wedge: null,
+        a: b.atoms[0],
+        b: b.atoms[1],
+        order: ((b.bo ?? 1) || 1) as BondOrder,
+        aromatic: false,
+        wedge: null,
       })),
-      stereo: [], groups: [], chiralFlag: null, title: null, properties: {}, dimension: 0,
+      stereo: [],
+      groups: [],
+      chiralFlag: null,
+      title: null,
+      properties: {},
+      dimension: 0,
     };
     const ext = m.extensions?.find((e) => e.name === 'rdkitRepresentation');
-    return { structure, rings: ext?.atomRings ?? [], numRings: desc.NumRings, numAromaticRings: desc.NumAromaticRings };
+    return {
+      structure,
+      rings: ext?.atomRings ?? [],
+      numRings: desc.NumRings,
+      numAromaticRings: desc.NumAromaticRings,
+    };
+  } finally {
+    mol.delete();
+  }
+}
+
+/** RDKit's SMILES for the molecule, with writer options (doKekule, doRandom, rootedAtAtom, canonical). */
+export function rdkitSmiles(
+  rd: RdkitModule,
+  smiles: string,
+  details?: Record<string, unknown>,
+): string | null {
+  const mol = rd.get_mol(smiles);
+  if (!mol) return null;
+  try {
+    if (mol.is_valid && !mol.is_valid()) return null;
+    return details ? mol.get_smiles(JSON.stringify(details)) : mol.get_smiles();
   } finally {
     mol.delete();
   }
@@ -78,6 +116,9 @@ export function fromRdkit(rd: RdkitModule, smiles: string): RdkitReference | nul
 
 /** SMILES column of a MoleculeNet CSV (Wu et al., Chem. Sci. 9 (2018) 513). */
 export function moleculeNetSmiles(path: string): string[] {
-  const rows = parse(readFileSync(path, 'utf8'), { columns: true, skip_empty_lines: true }) as Record<string, string>[];
+  const rows = parse(readFileSync(path, 'utf8'), { columns: true, skip_empty_lines: true }) as Record<
+    string,
+    string
+  >[];
   return rows.map((r) => r.smiles).filter((x): x is string => typeof x === 'string' && x.length > 0);
 }

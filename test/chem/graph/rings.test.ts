@@ -4,7 +4,10 @@ import { haveSharedData, sharedDataPath } from '../../support/shared-data.js';
 import { build } from './build.js';
 import { fromRdkit, loadRdkit, moleculeNetSmiles } from './rdkit.js';
 
-const sizes = (smi: string) => ringInfo(build(smi)).rings.map((r) => r.length).sort((a, b) => a - b);
+const sizes = (smi: string) =>
+  ringInfo(build(smi))
+    .rings.map((r) => r.length)
+    .sort((a, b) => a - b);
 
 describe('ring perception (SSSR sizes from memory; SSSR size = bonds - atoms + components)', () => {
   it.each([
@@ -57,34 +60,40 @@ describe('ring perception (SSSR sizes from memory; SSSR size = bonds - atoms + c
 const NONMETALS = new Set([1, 5, 6, 7, 8, 9, 14, 15, 16, 17, 33, 34, 35, 52, 53]);
 const NET = ['bbbp.csv', 'clintox.csv', 'sider.csv', 'tox21.csv'];
 
-describe.skipIf(!haveSharedData('moleculenet'))('ring sizes against RDKit over MoleculeNet (Wu et al., Chem. Sci. 2018)', () => {
-  it('SSSR size counts match RDKit ring info (RDKit adds symmetry-equivalent rings to bridged systems)', async () => {
-    const rd = await loadRdkit();
-    let compared = 0;
-    const problems: string[] = [];
-    for (const file of NET) {
-      const all = moleculeNetSmiles(sharedDataPath('moleculenet', file));
-      for (let i = 0; i < all.length; i += 10) {
-        const ref = fromRdkit(rd, all[i]);
-        // Metal complexes are left out: RDKit leaves bonds to metals out of its rings (vitamin B12 differs).
-        if (!ref || ref.structure.atoms.some((a) => !NONMETALS.has(a.atomicNumber))) continue;
-        compared++;
-        const s = ref.structure;
-        const info = ringInfo(s);
-        const mine = info.rings.map((r) => r.length).sort((a, b) => a - b);
-        const theirs = ref.rings.map((r) => r.length).sort((a, b) => a - b);
-        const cyclomatic = s.bonds.length - s.atoms.length + connectedComponents(s).length;
-        const rest = [...theirs];
-        const contained = mine.every((x) => {
-          const at = rest.indexOf(x);
-          if (at >= 0) rest.splice(at, 1);
-          return at >= 0;
-        });
-        const ok = mine.length === cyclomatic && contained && (theirs.length === cyclomatic ? rest.length === 0 : true);
-        if (!ok) problems.push(`${all[i]} mine ${mine} RDKit ${theirs}`);
+describe.skipIf(!haveSharedData('moleculenet'))(
+  'ring sizes against RDKit over MoleculeNet (Wu et al., Chem. Sci. 2018)',
+  () => {
+    it('SSSR size counts match RDKit ring info (RDKit adds symmetry-equivalent rings to bridged systems)', async () => {
+      const rd = await loadRdkit();
+      let compared = 0;
+      const problems: string[] = [];
+      for (const file of NET) {
+        const all = moleculeNetSmiles(sharedDataPath('moleculenet', file));
+        for (let i = 0; i < all.length; i += 10) {
+          const ref = fromRdkit(rd, all[i]);
+          // Metal complexes are left out: RDKit leaves bonds to metals out of its rings (vitamin B12 differs).
+          if (!ref || ref.structure.atoms.some((a) => !NONMETALS.has(a.atomicNumber))) continue;
+          compared++;
+          const s = ref.structure;
+          const info = ringInfo(s);
+          const mine = info.rings.map((r) => r.length).sort((a, b) => a - b);
+          const theirs = ref.rings.map((r) => r.length).sort((a, b) => a - b);
+          const cyclomatic = s.bonds.length - s.atoms.length + connectedComponents(s).length;
+          const rest = [...theirs];
+          const contained = mine.every((x) => {
+            const at = rest.indexOf(x);
+            if (at >= 0) rest.splice(at, 1);
+            return at >= 0;
+          });
+          const ok =
+            mine.length === cyclomatic &&
+            contained &&
+            (theirs.length === cyclomatic ? rest.length === 0 : true);
+          if (!ok) problems.push(`${all[i]} mine ${mine} RDKit ${theirs}`);
+        }
       }
-    }
-    expect(compared).toBeGreaterThan(1200);
-    expect(problems).toEqual([]);
-  }, 120_000);
-});
+      expect(compared).toBeGreaterThan(1200);
+      expect(problems).toEqual([]);
+    }, 120_000);
+  },
+);

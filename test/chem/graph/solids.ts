@@ -9,7 +9,8 @@ import type { Atom, Bond, Structure } from '../../../src/chem/types.js';
 export function icosahedron(): number[][] {
   const p = (1 + Math.sqrt(5)) / 2;
   const v: number[][] = [];
-  for (const s1 of [-1, 1]) for (const s2 of [-1, 1]) v.push([0, s1, s2 * p], [s1, s2 * p, 0], [s2 * p, 0, s1]);
+  for (const s1 of [-1, 1])
+    for (const s2 of [-1, 1]) v.push([0, s1, s2 * p], [s1, s2 * p, 0], [s2 * p, 0, s1]);
   const nbrs: number[][] = v.map(() => []);
   for (let i = 0; i < v.length; i++) {
     for (let j = 0; j < v.length; j++) {
@@ -25,8 +26,16 @@ export function c60(): Structure {
   const index = new Map<string, number>();
   ico.forEach((ns, u) => ns.forEach((v) => index.set(`${u}>${v}`, index.size)));
   const atoms: Atom[] = [...index.keys()].map((_, i) => ({
-    element: 'C', atomicNumber: 6, charge: 0, isotope: null, hCount: 0, aromatic: false, radical: 0,
-    mapNumber: null, inputNumber: i + 1, coords: null,
+    element: 'C',
+    atomicNumber: 6,
+    charge: 0,
+    isotope: null,
+    hCount: 0,
+    aromatic: false,
+    radical: 0,
+    mapNumber: null,
+    inputNumber: i + 1,
+    coords: null,
   }));
   const bonds: Bond[] = [];
   ico.forEach((ns, u) =>
@@ -40,5 +49,14 @@ export function c60(): Structure {
       }
     }),
   );
-  return { atoms, bonds, stereo: [], groups: [], chiralFlag: null, title: 'C60', properties: {}, dimension: 0 };
+  return {
+    atoms,
+    bonds,
+    stereo: [],
+    groups: [],
+    chiralFlag: null,
+    title: 'C60',
+    properties: {},
+    dimension: 0,
+  };
 }

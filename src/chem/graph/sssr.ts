@@ -1,0 +1,188 @@
+/**
+ * A smallest set of smallest rings: a minimum cycle basis chosen from Horton's candidate cycles (Horton, SIAM J.
+ * Comput. 16 (1987) 358) — for every root atom r and every non-tree bond x–y of a breadth-first tree from r, the
+ * cycle P(r,x) + xy + P(y,r) — sorted by size and kept when independent of the rings already kept (Gaussian
+ * elimination over GF(2) on bond bit sets). Each ring system is handled on its own; a system with one
+ * independent cycle is that cycle.
+ */
+import type { Structure } from '../types.js';
+import type { Graph } from './adjacency.js';
+
+interface Candidate {
+  size: number;
+  atoms: number[];
+  bits: Uint32Array;
+  hash: number;
+}
+
+export function minimumCycleBasis(s: Structure, g: Graph, bondInRing: readonly boolean[]): number[][] {
+  const n = g.n;
+  const m = s.bonds.length;
+  // Ring systems by union-find over ring bonds.
+  const parent = Int32Array.from({ length: n }, (_, i) => i);
+  const find = (x: number): number => {
+    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+    return x;
+  };
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const ra = find(s.bonds[k].a);
+    const rb = find(s.bonds[k].b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  const atomsOf = new Map<number, number[]>();
+  const bondsOf = new Map<number, number>();
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const r = find(s.bonds[k].a);
+    bondsOf.set(r, (bondsOf.get(r) ?? 0) + 1);
+  }
+  const inRing = new Uint8Array(n);
+  for (let k = 0; k < m; k++) if (bondInRing[k]) inRing[s.bonds[k].a] = inRing[s.bonds[k].b] = 1;
+  for (let i = 0; i < n; i++) {
+    if (!inRing[i]) continue;
+    const r = find(i);
+    const list = atomsOf.get(r);
+    if (list) list.push(i);
+    else atomsOf.set(r, [i]);
+  }
+  const rings: number[][] = [];
+  for (const [root, atoms] of atomsOf) {
+    const nullity = bondsOf.get(root)! - atoms.length + 1;
+    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
+    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m));
+  }
+  return rings.sort((p, q) => p.length - q.length);
+}
+
+/** The single cycle of a ring system with one independent cycle, from `start`. */
+function walkCycle(start: number, g: Graph, bondInRing: readonly boolean[]): number[] {
+  const out = [start];
+  let prevBond = -1;
+  let u = start;
+  for (;;) {
+    let next = -1;
+    for (let i = 0; i < g.nbrs[u].length; i++) {
+      const k = g.nbrBonds[u][i];
+      if (bondInRing[k] && k !== prevBond) {
+        next = g.nbrs[u][i];
+        prevBond = k;
+        break;
+      }
+    }
+    if (next < 0 || next === start) return out;
+    out.push(next);
+    u = next;
+  }
+}
+
+function hortonBasis(
+  atoms: number[],
+  nullity: number,
+  g: Graph,
+  bondInRing: readonly boolean[],
+  m: number,
+): number[][] {
+  const n = g.n;
+  const words = (m + 31) >>> 5;
+  const cands: Candidate[] = [];
+  const seen = new Map<number, Candidate[]>();
+  const dist = new Int32Array(n).fill(-1);
+  const parent = new Int32Array(n);
+  const parentBond = new Int32Array(n);
+  const branch = new Int32Array(n);
+  const order = new Int32Array(n);
+  for (const r of atoms) {
+    dist[r] = 0;
+    parent[r] = -1;
+    parentBond[r] = -1;
+    branch[r] = r;
+    let head = 0;
+    let tail = 0;
+    order[tail++] = r;
+    while (head < tail) {
+      const u = order[head++];
+      const nb = g.nbrs[u];
+      for (let i = 0; i < nb.length; i++) {
+        const k = g.nbrBonds[u][i];
+        if (!bondInRing[k]) continue;
+        const v = nb[i];
+        if (dist[v] >= 0) continue;
+        dist[v] = dist[u] + 1;
+        parent[v] = u;
+        parentBond[v] = k;
+        branch[v] = u === r ? v : branch[u];
+        order[tail++] = v;
+      }
+    }
+    // Every non-tree ring bond x–y closes a candidate when the two tree paths meet only at r.
+    for (let t = 0; t < tail; t++) {
+      const x = order[t];
+      const nb = g.nbrs[x];
+      for (let i = 0; i < nb.length; i++) {
+        const k = g.nbrBonds[x][i];
+        const y = nb[i];
+        if (!bondInRing[k] || parentBond[x] === k || parentBond[y] === k) continue;
+        if (dist[y] < dist[x] || (dist[y] === dist[x] && y < x)) continue; // each bond once per root
+        if (x !== r && y !== r && branch[x] === branch[y]) continue;
+        const bits = new Uint32Array(words);
+        const path: number[] = [];
+        for (let u = x; u !== r; u = parent[u]) {
+          path.push(u);
+          bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+        }
+        path.push(r);
+        path.reverse(); // r .. x
+        for (let u = y; u !== r; u = parent[u]) {
+          path.push(u);
+          bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+        }
+        bits[k >>> 5] ^= 1 << (k & 31);
+        let hash = 0;
+        for (let w = 0; w < words; w++) hash = (Math.imul(hash, 31) + bits[w]) | 0;
+        const bucket = seen.get(hash);
+        if (bucket?.some((c) => equalBits(c.bits, bits))) continue;
+        const cand = { size: path.length, atoms: path, bits, hash };
+        if (bucket) bucket.push(cand);
+        else seen.set(hash, [cand]);
+        cands.push(cand);
+      }
+    }
+    for (let t = 0; t < tail; t++) dist[order[t]] = -1;
+  }
+  cands.sort((p, q) => p.size - q.size);
+
+  // Gaussian elimination over GF(2); the basis is kept reduced on its pivot columns.
+  const basis: Uint32Array[] = [];
+  const pivots: number[] = [];
+  const rings: number[][] = [];
+  for (const c of cands) {
+    const v = c.bits.slice();
+    for (let j = 0; j < basis.length; j++) {
+      const p = pivots[j];
+      if (v[p >>> 5] & (1 << (p & 31))) xorInto(v, basis[j]);
+    }
+    const p = firstBit(v);
+    if (p < 0) continue;
+    for (let j = 0; j < basis.length; j++) if (basis[j][p >>> 5] & (1 << (p & 31))) xorInto(basis[j], v);
+    basis.push(v);
+    pivots.push(p);
+    rings.push(c.atoms);
+    if (rings.length === nullity) break;
+  }
+  return rings;
+}
+
+function equalBits(x: Uint32Array, y: Uint32Array): boolean {
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false;
+  return true;
+}
+
+function xorInto(v: Uint32Array, w: Uint32Array): void {
+  for (let i = 0; i < v.length; i++) v[i] ^= w[i];
+}
+
+function firstBit(v: Uint32Array): number {
+  for (let i = 0; i < v.length; i++) if (v[i] !== 0) return i * 32 + (31 - Math.clz32(v[i] & -v[i]));
+  return -1;
+}
