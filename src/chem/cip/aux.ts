@@ -9,7 +9,7 @@ import { IMPLICIT_H, LONE_PAIR, type AxialStereo, type DoubleBondStereo, type Te
 import { CipNode, Digraph, H_ATOM } from './digraph.js';
 import { Ranker } from './compare.js';
 import { handedness, rankLigands } from './rank.js';
-import { RULE_5 } from './rules.js';
+import { RULE_5, RULE_6 } from './rules.js';
 
 /** The branch of `centre` (re-rooted there) that leads to ligand `lig` of a stereo element. */
 export function ligandBranch(dg: Digraph, centre: CipNode, lig: number, used: Set<CipNode>): CipNode | null {
@@ -40,6 +40,35 @@ export function tetrahedralLabel(rk: Ranker, centre: CipNode, e: TetrahedralSter
   r.order.forEach((li, pos) => (rankOf[li] = pos));
   const h = handedness(e.winding, rankOf);
   return r.pseudo ? (h === 'R' ? 'r' : 's') : h;
+}
+
+/** Rule 6 inside a branch: each tied ligand as the reference; the descriptor stands when all choices agree. */
+function tetrahedralRule6(rk: Ranker, centre: CipNode, e: TetrahedralStereo): CipLabel | null {
+  const used = new Set<CipNode>();
+  const ligs: CipNode[] = [];
+  for (const l of e.ligands) {
+    const b = ligandBranch(rk.dg, centre, l, used);
+    if (b === null) return null;
+    used.add(b);
+    ligs.push(b);
+  }
+  const r = rankLigands(rk, centre, ligs, RULE_5);
+  const found = new Set<CipLabel>();
+  const savedRef = rk.dg.rule6Ref;
+  try {
+    for (let i = 1; i < r.order.length; i++) {
+      if (!r.tieWithPrev[i]) continue;
+      for (const k of [r.order[i - 1], r.order[i]]) {
+        if (ligs[k].atom < 0) continue;
+        rk.setRule6(ligs[k].atom);
+        const l = tetrahedralLabel(rk, centre, e, RULE_6);
+        if (l !== null) found.add(l);
+      }
+    }
+  } finally {
+    rk.setRule6(savedRef);
+  }
+  return found.size === 1 ? [...found][0] : null;
 }
 
 /** The branches at one end of a double bond, leaving out the other end and its duplicates. */
@@ -169,7 +198,9 @@ export function auxFor(dg: Digraph): (rk: Ranker) => (node: CipNode) => CipLabel
       const b = g.bondAt[node.atom];
       const x = g.axialAt[node.atom];
       if (t >= 0 && t !== dg.rootElement && g.auxAllowed[t]) {
-        label = rk.within(node, () => tetrahedralLabel(rk, node, g.s.stereo[t] as TetrahedralStereo));
+        const e = g.s.stereo[t] as TetrahedralStereo;
+        label = rk.within(node, () => tetrahedralLabel(rk, node, e));
+        if (label === null && g.auxRule6[t]) label = rk.within(node, () => tetrahedralRule6(rk, node, e));
       } else if (b >= 0 && b !== dg.rootElement && g.auxAllowed[b]) {
         label = rk.within(node, () => doubleBondLabel(rk, node, g.s.stereo[b] as DoubleBondStereo));
       } else if (x >= 0 && x !== dg.rootElement && g.auxAllowed[x]) {

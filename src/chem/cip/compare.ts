@@ -176,7 +176,8 @@ export class Ranker {
     // outside the scope every descriptor is hidden, so such traversals are cached apart
     const hidden = level >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
     const mirrored = this.mirror && level >= RULE_5 ? 2 : 0;
-    const key = ((from === null ? 0 : from.id + 1) * 16 + level) * 4 + hidden + mirrored;
+    const num = ((from === null ? 0 : from.id + 1) * 16 + level) * 4 + hidden + mirrored;
+    const key = level >= RULE_6 ? `${num}:${this.dg.rule6Ref}` : num;
     if (node.sorted === null) node.sorted = new Map();
     const hit = node.sorted.get(key);
     if (hit) return hit;

@@ -27,7 +27,7 @@ export const NODE_BUDGET = 200_000;
 export class CipNode {
   kids: CipNode[] | null = null;
   /** Sorted branch lists per (came-from, rule level); see compare.ts. */
-  sorted: Map<number, SortedBranches> | null = null;
+  sorted: Map<number | string, SortedBranches> | null = null;
   /** Auxiliary descriptor: undefined = not yet computed, null = none. */
   aux: CipLabel | null | undefined = undefined;
   auxBusy = false;

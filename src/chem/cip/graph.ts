@@ -36,6 +36,8 @@ export interface CipGraph {
    * Rule 6 is tried, only those that Rules 1-5 found stereogenic (see label.ts).
    */
   auxAllowed: boolean[];
+  /** Per stereo element: its auxiliary descriptor may need Rule 6 (it got its own descriptor by Rule 6). */
+  auxRule6: boolean[];
   /** Per stereo element: its geometry is fixed by a small ring, so it is no stereogenic unit. */
   ringFixed: boolean[];
   hasBondStereo: boolean;
@@ -101,9 +103,11 @@ export function buildGraph(s: Structure): CipGraph {
     stereoCount: s.stereo.length,
     ringFixed: [],
     auxAllowed: [],
+    auxRule6: [],
   };
   g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
   g.auxAllowed = g.ringFixed.map((f) => !f);
+  g.auxRule6 = g.ringFixed.map(() => false);
   g.hasBondStereo = s.stereo.some((e, i) => e.kind === 'double-bond' && !g.ringFixed[i]);
   bondAt.fill(-1);
   s.stereo.forEach((e, i) => {

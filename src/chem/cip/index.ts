@@ -23,8 +23,23 @@ export function assignCip(s: Structure): CipResult[] {
   const g = buildGraph(s);
   const labels = s.stereo.map((_, i) => labelPlain(g, i));
   if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
+    // Rule 6 (Hanson et al. 2018) only for what Rules 1-5 leave tied, lending descriptors only from units
+    // found stereogenic; a unit labelled by Rule 6 may in turn settle another one, so repeat once more.
     g.auxAllowed = labels.map((l) => l !== null);
-    for (let i = 0; i < labels.length; i++) if (labels[i] === null) labels[i] = labelRule6(g, i);
+    const by6: number[] = [];
+    for (let i = 0; i < labels.length; i++) {
+      if (labels[i] !== null) continue;
+      labels[i] = labelRule6(g, i);
+      if (labels[i] !== null) by6.push(i);
+    }
+    const open = labels.some((l, i) => l === null && !g.ringFixed[i]);
+    if (by6.length > 0 && open) {
+      g.auxAllowed = labels.map((l) => l !== null);
+      for (const i of by6) g.auxRule6[i] = true;
+      for (let i = 0; i < labels.length; i++) {
+        if (labels[i] === null && !g.ringFixed[i]) labels[i] = labelPlain(g, i) ?? labelRule6(g, i);
+      }
+    }
   }
   return s.stereo.map((e, element) => ({
     element,
