@@ -11,6 +11,8 @@ import type { Structure } from '../types.js';
 import { buildGraph } from './graph.js';
 import { labelPlain, labelRule6 } from './label.js';
 
+export { findHelices, type HelixResult } from './helix.js';
+
 export interface CipResult {
   /** Index into s.stereo. */
   element: number;

@@ -4,7 +4,7 @@
  * written `<atom number><descriptor>`, are exactly the expected ones, no more and no fewer.
  */
 import { readFileSync } from 'node:fs';
-import { assignCip } from '../../../src/chem/cip/index.js';
+import { assignCip, findHelices } from '../../../src/chem/cip/index.js';
 import { parseSmiles } from '../../../src/chem/read/smiles.js';
 import { readSdRecords } from '../../../src/chem/read/sdf.js';
 import type { Structure } from '../../../src/chem/types.js';
@@ -30,6 +30,7 @@ export function computedLabels(s: Structure): string[] {
     if (r.label === null) continue;
     for (const a of r.atoms) out.push(`${s.atoms[a].inputNumber}${r.label}`);
   }
+  for (const h of findHelices(s)) for (const a of h.atoms) out.push(`${s.atoms[a].inputNumber}${h.label}`);
   return [...new Set(out)].sort(byAtom);
 }
 
