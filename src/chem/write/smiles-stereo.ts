@@ -1,9 +1,7 @@
 /**
- * Stereo marks for a chosen SMILES traversal: `@`/`@@` from the permutation parity between the stored ligand
- * list and the emitted neighbour order (OpenSMILES, tetrahedral centres), allene `@` on the central atom (OpenSMILES,
- * extended tetrahedral), and `/` `\` on single bonds so that every double-bond configuration reads back as stored
- * (OpenSMILES, cis/trans). Bonds shared by two double bonds (conjugated dienes) are solved together as a parity
- * problem over the bonds (union-find with parity).
+ * Chirality marks for a chosen SMILES traversal: `@`/`@@` from the permutation parity between the stored ligand
+ * list and the emitted neighbour order (OpenSMILES, tetrahedral centres), and allene `@` on the central atom
+ * (OpenSMILES, extended tetrahedral). The `/` `\` marks are smiles-directions.ts.
  */
 import { IMPLICIT_H, LONE_PAIR, type AxialStereo, type Structure, type TetrahedralStereo } from '../types.js';
 
@@ -135,72 +133,4 @@ function allene(s: Structure, em: Emission, ax: AxialStereo, marks: Map<number, 
   const p = permutationParity(stored, emitted);
   if (p === null) return;
   marks.set(centre, flip(ax.winding, p));
-}
-
-/**
- * Direction per single bond: +1 writes '/', -1 writes '\', relative to the emitted order of the bond's atoms
- * (parent -> child; ring opening -> ring closing, the mark being written at the opening digit).
- */
-export function assignBondDirections(s: Structure, em: Emission): Map<number, number> {
-  const res = new Map<number, number>();
-  const dbs = s.stereo.filter((x) => x.kind === 'double-bond');
-  if (dbs.length === 0) return res;
-  const n = s.atoms.length;
-  const first = new Int32Array(s.bonds.length).fill(-1);
-  for (let u = 0; u < n; u++) {
-    if (em.parentBond[u]! >= 0) first[em.parentBond[u]!] = em.parent[u]!;
-    for (const k of em.ringOpen[u]!) first[k] = u;
-  }
-  const singles: { to: number; bond: number }[][] = Array.from({ length: n }, () => []);
-  s.bonds.forEach((b, k) => {
-    if (b.order !== 1 || b.a === b.b) return;
-    singles[b.a]?.push({ to: b.b, bond: k });
-    singles[b.b]?.push({ to: b.a, bond: k });
-  });
-  // union-find with parity: value(bond) = value(root) * sign
-  const up = new Map<number, number>();
-  const sign = new Map<number, number>();
-  const find = (k: number): [number, number] => {
-    let sg = 1;
-    let r = k;
-    while (up.has(r) && up.get(r) !== r) {
-      sg *= sign.get(r)!;
-      r = up.get(r)!;
-    }
-    return [r, sg];
-  };
-  const ensure = (k: number): void => {
-    if (!up.has(k)) {
-      up.set(k, k);
-      sign.set(k, 1);
-    }
-  };
-  for (const d of dbs) {
-    const sides: { bond: number; factor: number }[] = [];
-    for (let e = 0; e < 2; e++) {
-      const t = d.ends[e]!;
-      const ref = d.refs[e]!;
-      const opts = singles[t] ?? [];
-      const direct = opts.find((o) => o.to === ref);
-      if (direct) sides.push({ bond: direct.bond, factor: 1 });
-      else {
-        const other = opts.find((o) => o.to !== ref && o.to !== d.ends[1 - e]);
-        if (other && (ref === IMPLICIT_H || ref >= 0)) sides.push({ bond: other.bond, factor: -1 });
-      }
-    }
-    if (sides.length !== 2 || sides[0]!.bond === sides[1]!.bond) continue;
-    const rel = d.relation === 'cis' ? 1 : -1;
-    const sigma = (k: number, t: number): number => (first[k] === t ? 1 : -1);
-    const want = rel * sides[0]!.factor * sides[1]!.factor * sigma(sides[0]!.bond, d.ends[0]) * sigma(sides[1]!.bond, d.ends[1]);
-    const [b0, b1] = [sides[0]!.bond, sides[1]!.bond];
-    ensure(b0);
-    ensure(b1);
-    const [r0, s0] = find(b0);
-    const [r1, s1] = find(b1);
-    if (r0 === r1) continue; // already fixed (consistently or not); keep the first reading
-    up.set(r1, r0);
-    sign.set(r1, want * s0 * s1);
-  }
-  for (const k of up.keys()) res.set(k, find(k)[1]);
-  return res;
 }

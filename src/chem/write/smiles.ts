@@ -7,7 +7,8 @@
  */
 import type { Atom, Structure } from '../types.js';
 import { implicitHydrogens, atomicNumberOf } from '../read/valence.js';
-import { assignBondDirections, chiralMarks, type Emission } from './smiles-stereo.js';
+import { assignBondDirections } from './smiles-directions.js';
+import { chiralMarks, type Emission } from './smiles-stereo.js';
 
 export interface WriteSmilesOptions {
   /** Atom priority for the traversal: a permutation (or prefix) of atom indices. */

@@ -117,7 +117,13 @@ describe('writeSmiles stereo against RDKit', () => {
 });
 
 describe('writeSmiles stereo against our reader (allenes, cumulenes, implicit-H references)', () => {
-  const ALLENES = ['NC(Br)=[C@]=C(O)C', 'CC=[C@@]=CC', 'ClC=[C@]=CCl', 'OC(=O)C=C=[C@@]=C=CC', 'C[C@H](O)C=[C@]=CC'];
+  const ALLENES = [
+    'NC(Br)=[C@]=C(O)C',
+    'CC=[C@@]=CC',
+    'ClC=[C@]=CCl',
+    'OC(=O)C=C=[C@@]=C=CC',
+    'C[C@H](O)C=[C@]=CC',
+  ];
   it('keeps every configuration in any atom order', () => {
     const cases = fc.record({
       smi: fc.constantFrom(...ALLENES, ...STEREO_SET, 'F/C=C=C=C/F'),
@@ -145,5 +151,16 @@ describe('writeSmiles stereo against our reader (allenes, cumulenes, implicit-H 
     const back = read(writeSmiles(t));
     // cis to the H of C1 = trans to Cl
     expect(back.stereo).toEqual([{ kind: 'double-bond', ends: [1, 2], refs: [0, 3], relation: 'trans' }]);
+  });
+  it('does not mark bonds next to an unspecified double bond when another substituent can carry the mark', () => {
+    // F0 C1(=C2 C3) C4(C5)=C6(C7) C8(Cl9)=C10 C11: C4=C6 stays unspecified; the stored references (C4, C6)
+    // would put marks on both sides of it, so the writer must go through F0 and Cl9 instead.
+    const s = read('FC(=CC)C(C)=C(C)C(Cl)=CC');
+    s.stereo.push({ kind: 'double-bond', ends: [1, 2], refs: [4, 3], relation: 'trans' });
+    s.stereo.push({ kind: 'double-bond', ends: [8, 10], refs: [6, 11], relation: 'cis' });
+    const w = writeSmilesWithOrder(s);
+    const back = read(w.smiles);
+    expect(back.stereo).toHaveLength(2);
+    expect(stereoDifferences(s, back, w.atomOrder)).toEqual([]);
   });
 });

@@ -15,8 +15,10 @@ export function stereoDifferences(a: Structure, b: Structure, map: number[]): st
   const m = (x: number): number => (x >= 0 ? map[x]! : x);
   const diffs: string[] = [];
   const bt = b.stereo.map((e) => {
-    if (e.kind === 'tetrahedral') return { ...e, centre: m(e.centre), ligands: e.ligands.map(m) as typeof e.ligands };
-    if (e.kind === 'double-bond') return { ...e, ends: e.ends.map(m) as [number, number], refs: e.refs.map(m) as [number, number] };
+    if (e.kind === 'tetrahedral')
+      return { ...e, centre: m(e.centre), ligands: e.ligands.map(m) as typeof e.ligands };
+    if (e.kind === 'double-bond')
+      return { ...e, ends: e.ends.map(m) as [number, number], refs: e.refs.map(m) as [number, number] };
     return { ...e, ends: e.ends.map(m) as [number, number], ligands: e.ligands.map(m) as typeof e.ligands };
   });
   if (bt.length !== a.stereo.length) diffs.push(`count ${a.stereo.length} vs ${bt.length}`);
@@ -30,7 +32,9 @@ export function stereoDifferences(a: Structure, b: Structure, map: number[]): st
       const p = permutationParity(e.ligands, f.ligands);
       if (p === null || (p === 0) !== (e.winding === f.winding)) diffs.push(`centre ${e.centre} differs`);
     } else if (e.kind === 'double-bond') {
-      const f = bt.find((x) => x.kind === 'double-bond' && x.ends.includes(e.ends[0]) && x.ends.includes(e.ends[1]));
+      const f = bt.find(
+        (x) => x.kind === 'double-bond' && x.ends.includes(e.ends[0]) && x.ends.includes(e.ends[1]),
+      );
       if (!f || f.kind !== 'double-bond') {
         diffs.push(`missing ${describeIn(a, e)}`);
         continue;
@@ -42,16 +46,20 @@ export function stereoDifferences(a: Structure, b: Structure, map: number[]): st
       const rel = flips % 2 === 0 ? f.relation : f.relation === 'cis' ? 'trans' : 'cis';
       if (rel !== e.relation) diffs.push(`double bond ${e.ends.join('=')} differs`);
     } else {
-      const f = bt.find((x) => x.kind === 'axial' && x.ends.includes(e.ends[0]) && x.ends.includes(e.ends[1]));
+      const f = bt.find(
+        (x) => x.kind === 'axial' && x.ends.includes(e.ends[0]) && x.ends.includes(e.ends[1]),
+      );
       if (!f || f.kind !== 'axial') {
         diffs.push(`missing ${describeIn(a, e)}`);
         continue;
       }
-      const key = (x: number, i: number, ends: [number, number]): number => (x >= 0 ? x : x - 10 * (ends[i < 2 ? 0 : 1] + 1));
+      const key = (x: number, i: number, ends: [number, number]): number =>
+        x >= 0 ? x : x - 10 * (ends[i < 2 ? 0 : 1] + 1);
       const ka = e.ligands.map((x, i) => key(x, i, e.ends));
       const kb = f.ligands.map((x, i) => key(x, i, f.ends));
       const p = permutationParity(ka, kb);
-      if (p === null || (p === 0) !== (e.winding === f.winding)) diffs.push(`axis ${e.ends.join('-')} differs`);
+      if (p === null || (p === 0) !== (e.winding === f.winding))
+        diffs.push(`axis ${e.ends.join('-')} differs`);
     }
   }
   return diffs;
