@@ -39,16 +39,37 @@ const molecules: [string, string, string][] = [
 writeFileSync(
   sd,
   molecules
-    .map(([id, smi, form]) => `${Molecule.fromSmiles(smi).toMolfile().replace(/^[^\n]*/, id)}\n> <FORM>\n${form}\n\n$$$$\n`)
+    .map(
+      ([id, smi, form]) =>
+        `${Molecule.fromSmiles(smi)
+          .toMolfile()
+          .replace(/^[^\n]*/, id)}\n> <FORM>\n${form}\n\n$$$$\n`,
+    )
     .join('') +
     // a broken record in the middle of the file, then one more good record
     'LX-104\n  broken\n\n  3  2  0  0  0  0  0  0  0  0999 V2000\n    0.0 x\nM  END\n> <FORM>\nrac\n\n$$$$\n' +
-    `${Molecule.fromSmiles('C[C@@H](N)C(=O)O').toMolfile().replace(/^[^\n]*/, 'LX-105')}\n> <FORM>\nabs\n\n$$$$\n`,
+    `${Molecule.fromSmiles('C[C@@H](N)C(=O)O')
+      .toMolfile()
+      .replace(/^[^\n]*/, 'LX-105')}\n> <FORM>\nabs\n\n$$$$\n`,
 );
 const config = { ...DEFAULT_CONFIG };
 
-async function runTo(file: string, inputs: string[], mapping: object, workers: number, shard: { index: number; count: number } | null = null) {
-  const run = await runBulkAudit({ inputs, mapping, config, workers, shard, progress: 'none', writers: [jsonlWriter(file), jsonWriter(file + '.json')] });
+async function runTo(
+  file: string,
+  inputs: string[],
+  mapping: object,
+  workers: number,
+  shard: { index: number; count: number } | null = null,
+) {
+  const run = await runBulkAudit({
+    inputs,
+    mapping,
+    config,
+    workers,
+    shard,
+    progress: 'none',
+    writers: [jsonlWriter(file), jsonWriter(file + '.json')],
+  });
   return run.trailer;
 }
 const csvMapping = { id: 'REG_NO', structure: 'SMILES', form: 'STEREO', ee: 'EE' };
@@ -65,17 +86,31 @@ describe('bulk audit', () => {
   it('audits a CSV export in input order, each bad record a finding with its line', async () => {
     const out = join(dir, 'csv.jsonl');
     const trailer = await runTo(out, [csv], csvMapping, 2);
-    const lines = readFileSync(out, 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    const lines = readFileSync(out, 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
     const recs = lines.filter((l) => l.kind === 'record');
     expect(recs.map((r) => r.id)).toEqual(['LX-1', 'LX-2', 'LX-3', 'LX-4', 'LX-5', 'LX-6', 'LX-7', 'LX-8']);
     expect(recs.map((r) => r.origin.line)).toEqual([2, 3, 4, 5, 6, 7, 8, 9]);
-    const checksOf = (id: string) => recs.find((r) => r.id === id).findings.map((f: { check: string }) => f.check);
+    const checksOf = (id: string) =>
+      recs.find((r) => r.id === id).findings.map((f: { check: string }) => f.check);
     expect(checksOf('LX-2')).toContain('form-matches-structure');
     expect(checksOf('LX-4')).toContain('structure-readable');
-    expect(recs.find((r) => r.id === 'LX-4').findings.find((f: { check: string }) => f.check === 'structure-readable').line).toBe(5);
+    expect(
+      recs
+        .find((r) => r.id === 'LX-4')
+        .findings.find((f: { check: string }) => f.check === 'structure-readable').line,
+    ).toBe(5);
     expect(checksOf('LX-6')).toContain('record-schema'); // the form word 'chiral' is not guessed
     expect(trailer.vocabulary.notUnderstood).toEqual([['chiral', 1]]);
-    expect(trailer.vocabulary.mapped.map(([w]) => w)).toEqual(['abs', 'enantiopure', 'rac', 'racemic', 'single enantiomer']);
+    expect(trailer.vocabulary.mapped.map(([w]) => w)).toEqual([
+      'abs',
+      'enantiopure',
+      'rac',
+      'racemic',
+      'single enantiomer',
+    ]);
     expect(lines.at(-1).kind).toBe('summary');
     expect(trailer.summary.records).toBe(8);
   });
@@ -83,7 +118,11 @@ describe('bulk audit', () => {
   it('audits an SD file; the broken record does not stop the run', async () => {
     const out = join(dir, 'sd.jsonl');
     const trailer = await runTo(out, [sd], { form: 'FORM' }, 1);
-    const recs = readFileSync(out, 'utf8').trim().split('\n').map((l) => JSON.parse(l)).filter((l) => l.kind === 'record');
+    const recs = readFileSync(out, 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l))
+      .filter((l) => l.kind === 'record');
     expect(recs.map((r) => r.id)).toEqual(['LX-101', 'LX-102', 'LX-103', 'LX-104', 'LX-105']);
     expect(recs[3].findings.map((f: { check: string }) => f.check)).toContain('structure-readable');
     expect(recs[4].findings.filter((f: { severity: string }) => f.severity === 'error')).toEqual([]);

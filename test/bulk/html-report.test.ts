@@ -12,21 +12,32 @@ import type { AuditResult, Finding, RecordResult } from '../../src/audit/types.j
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 const requireBrowser = process.env.STEREOGATE_REQUIRE_SHARED_DATA === '1';
 const haveBrowser = existsSync(CHROMIUM);
-if (!haveBrowser && !requireBrowser) console.warn(`[stereogate tests] skipping browser test: no chromium at ${CHROMIUM}`);
+if (!haveBrowser && !requireBrowser)
+  console.warn(`[stereogate tests] skipping browser test: no chromium at ${CHROMIUM}`);
 
 function finding(check: string, severity: Finding['severity'], message: string): Finding {
   return { check, messageId: 'm', severity, message, data: {}, line: 7, field: 'stereo.form', waived: null };
 }
 function rec(id: string, form: string, findings: Finding[]): RecordResult {
-  return { id, file: `compounds/${id}.yml`, computed: null, findings, passed: [], declared: { form, descriptors: null } };
+  return {
+    id,
+    file: `compounds/${id}.yml`,
+    computed: null,
+    findings,
+    passed: [],
+    declared: { form, descriptors: null },
+  };
 }
-const svg = '<svg xmlns="http://www.w3.org/2000/svg" width="60" height="30"><text x="5" y="20">R</text></svg>';
+const svg =
+  '<svg xmlns="http://www.w3.org/2000/svg" width="60" height="30"><text x="5" y="20">R</text></svg>';
 const result: AuditResult = {
   tool: { name: 'stereogate', version: 'test' },
   caution: 'Computed result; the responsible chemist confirms.',
   summary: { records: 4, errors: 2, warnings: 1, notes: 1, waived: 0 },
   records: [
-    rec('LX-00001', 'racemate', [finding('form-matches-structure', 'error', 'racemate but achiral <script>alert(1)</script>')]),
+    rec('LX-00001', 'racemate', [
+      finding('form-matches-structure', 'error', 'racemate but achiral <script>alert(1)</script>'),
+    ]),
     rec('LX-00002', 'single-enantiomer', [finding('ratio-and-ee', 'warning', 'ee below threshold')]),
     rec('LX-00003', 'meso', []),
     rec('LX-00004', 'diastereomer-mixture', [
@@ -46,12 +57,22 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report in chromium', () =
     writeFileSync(file, html);
     const browser = await chromium.launch({
       executablePath: CHROMIUM,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
     });
     try {
       const page = await browser.newPage();
       const problems: string[] = [];
-      page.on('console', (m) => { if (m.type() === 'error') problems.push(m.text()); });
+      page.on('console', (m) => {
+        if (m.type() === 'error') problems.push(m.text());
+      });
       page.on('pageerror', (e) => problems.push(String(e)));
       await page.goto('file://' + file);
       const visible = async () => page.locator('article.rec:not([hidden])').count();

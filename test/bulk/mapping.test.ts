@@ -31,7 +31,10 @@ describe('legacy form vocabulary (common practice, no source)', () => {
     const b = new VocabularyTally();
     b.merge(a.toJSON());
     b.merge(a.toJSON());
-    expect(b.toJSON()).toEqual({ mapped: [['rac', { form: 'racemate', count: 4 }]], notUnderstood: [['chiral', 2]] });
+    expect(b.toJSON()).toEqual({
+      mapped: [['rac', { form: 'racemate', count: 4 }]],
+      notUnderstood: [['chiral', 2]],
+    });
   });
 });
 
@@ -46,7 +49,13 @@ describe('bulk field conversion', () => {
   });
   it('maps a CSV row onto a record', () => {
     const row = { REG: 'LX-1', SMILES: 'C[C@H](O)CC', Stereo: 'rac', EE: '0', ROT: '+0.1' };
-    const r = toRecord(row, 'x#1', { id: 'REG', structure: 'SMILES', form: 'Stereo', ee: 'EE', rotation: 'ROT' }, vocab, null);
+    const r = toRecord(
+      row,
+      'x#1',
+      { id: 'REG', structure: 'SMILES', form: 'Stereo', ee: 'EE', rotation: 'ROT' },
+      vocab,
+      null,
+    );
     expect(r.problems).toEqual([]);
     expect(r.record).toEqual({
       id: 'LX-1',

@@ -5,14 +5,21 @@
 import { readFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { parse as parseYaml } from 'yaml';
-import { loadConfig } from '../../audit/config.js';
+import { ConfigError, loadConfig } from '../../audit/config.js';
+import type { AuditConfig } from '../../checks/types.js';
 import type { BulkRecordResult } from '../../bulk/audit-item.js';
 import { STEREO_FORMS, type StereoForm } from '../../registry/types.js';
 import type { BulkMapping } from '../../bulk/mapping.js';
 import { runBulkAudit } from '../../bulk/run.js';
 import { mergeShards, MergeError } from '../../bulk/merge.js';
 import { parseShard } from '../../bulk/sources.js';
-import { csvWriter, jsonWriter, jsonlWriter, type BulkTrailer, type RecordWriter } from '../../bulk/writers.js';
+import {
+  csvWriter,
+  jsonWriter,
+  jsonlWriter,
+  type BulkTrailer,
+  type RecordWriter,
+} from '../../bulk/writers.js';
 import { sarifWriter } from '../../bulk/sarif-writer.js';
 import { HtmlCollector } from '../../bulk/html-collector.js';
 import { UsageError, type Io } from '../command.js';
@@ -68,12 +75,19 @@ function parse(
   extra: Record<string, { type: 'string' | 'boolean'; multiple?: boolean }>,
 ): { values: Values; positionals: string[] } {
   try {
-    const r = parseArgs({ args, options: { ...OUTPUT_OPTIONS, ...extra }, allowPositionals: true, strict: true });
+    const r = parseArgs({
+      args,
+      options: { ...OUTPUT_OPTIONS, ...extra },
+      allowPositionals: true,
+      strict: true,
+    });
     return { values: r.values as Values, positionals: r.positionals };
   } catch (e) {
     throw new UsageError((e as Error).message.replace(/\. To specify a positional.*$/s, ''));
   }
 }
+
+const FIELD_KEYS = ['id', 'structure', 'name', 'form', 'descriptors', 'ratio', 'ee', 'rotation'] as const;
 
 function readMapping(path: string): BulkMapping {
   let data: unknown;
@@ -82,15 +96,32 @@ function readMapping(path: string): BulkMapping {
   } catch (e) {
     throw new UsageError(`--mapping ${path}: ${(e as Error).message}`);
   }
-  if (!data || typeof data !== 'object') throw new UsageError(`--mapping ${path}: expected a map of field names`);
+  if (!data || typeof data !== 'object')
+    throw new UsageError(`--mapping ${path}: expected a map of field names`);
   const m = data as Record<string, unknown>;
   const out: BulkMapping = {};
-  for (const k of ['id', 'structure', 'name', 'form', 'descriptors', 'ratio', 'ee', 'rotation'] as const) {
-    if (m[k] === undefined) continue;
-    if (typeof m[k] !== 'string') throw new UsageError(`--mapping ${path}: '${k}' must be a field name`);
-    out[k] = m[k] as string;
+  for (const k of Object.keys(m)) {
+    if (k !== 'vocabulary' && !(FIELD_KEYS as readonly string[]).includes(k)) {
+      throw new UsageError(
+        `--mapping ${path}: unknown key '${k}' (known: ${FIELD_KEYS.join(', ')}, vocabulary)`,
+      );
+    }
   }
-  if (m.vocabulary !== undefined) out.vocabulary = checkVocabulary(m.vocabulary as Record<string, string>, `--mapping ${path}`);
+  for (const k of FIELD_KEYS) {
+    if (m[k] === undefined) continue;
+    if (typeof m[k] !== 'string' && typeof m[k] !== 'number')
+      throw new UsageError(`--mapping ${path}: '${k}' must be a field name`);
+    out[k] = String(m[k]);
+  }
+  if (m.vocabulary !== undefined && m.vocabulary !== null) {
+    const v = m.vocabulary;
+    if (typeof v !== 'object' || Array.isArray(v) || Object.values(v).some((f) => typeof f !== 'string')) {
+      throw new UsageError(
+        `--mapping ${path}: 'vocabulary' must map legacy words to forms, e.g. rac: racemate`,
+      );
+    }
+    out.vocabulary = checkVocabulary(v as Record<string, string>, `--mapping ${path}`);
+  }
   return out;
 }
 
@@ -103,12 +134,16 @@ function checkVocabulary(v: Record<string, string>, where: string): Record<strin
   return v as Record<string, StereoForm>;
 }
 
-function writersFor(values: Record<string, unknown>, checks: Parameters<typeof sarifWriter>[1]): { writers: RecordWriter[]; html: HtmlCollector | null } {
+function writersFor(
+  values: Record<string, unknown>,
+  checks: Parameters<typeof sarifWriter>[1],
+): { writers: RecordWriter[]; html: HtmlCollector | null } {
   const writers: RecordWriter[] = [];
   if (typeof values.jsonl === 'string') writers.push(jsonlWriter(values.jsonl));
   if (typeof values.json === 'string') writers.push(jsonWriter(values.json));
   if (typeof values.csv === 'string') writers.push(csvWriter(values.csv));
-  if (typeof values.sarif === 'string') writers.push(sarifWriter(values.sarif, checks, { name: 'stereogate', version: VERSION }, CAUTION));
+  if (typeof values.sarif === 'string')
+    writers.push(sarifWriter(values.sarif, checks, { name: 'stereogate', version: VERSION }, CAUTION));
   const html = typeof values.html === 'string' ? new HtmlCollector(values.html) : null;
   if (html) writers.push(html);
   return { writers, html };
@@ -121,13 +156,17 @@ export function summaryTable(t: BulkTrailer, seconds: number | null): string {
     `stereogate bulk audit: ${s.records} records${seconds !== null ? ` in ${seconds.toFixed(1)} s (${(s.records / Math.max(seconds, 0.001)).toFixed(0)} records/s)` : ''}` +
       `${t.shard ? `, shard ${t.shard}` : ''}`,
   );
-  lines.push(`  ${s.errors} errors, ${s.warnings} warnings, ${s.notes} notes, ${s.waived} accepted by waiver`);
+  lines.push(
+    `  ${s.errors} errors, ${s.warnings} warnings, ${s.notes} notes, ${s.waived} accepted by waiver`,
+  );
   const rows = Object.entries(t.byCheck);
   if (rows.length > 0) {
     const w = Math.max(5, ...rows.map(([c]) => c.length));
     lines.push('', `  ${'check'.padEnd(w)}  errors  warnings  notes  waived`);
     for (const [c, n] of rows) {
-      lines.push(`  ${c.padEnd(w)}  ${String(n.error).padStart(6)}  ${String(n.warning).padStart(8)}  ${String(n.note).padStart(5)}  ${String(n.waived).padStart(6)}`);
+      lines.push(
+        `  ${c.padEnd(w)}  ${String(n.error).padStart(6)}  ${String(n.warning).padStart(8)}  ${String(n.note).padStart(5)}  ${String(n.waived).padStart(6)}`,
+      );
     }
   }
   if (t.vocabulary.mapped.length > 0) {
@@ -135,7 +174,10 @@ export function summaryTable(t: BulkTrailer, seconds: number | null): string {
     for (const [w, e] of t.vocabulary.mapped) lines.push(`    "${w}" -> ${e.form} (${e.count})`);
   }
   if (t.vocabulary.notUnderstood.length > 0) {
-    lines.push('', '  form words NOT understood (records audited as form unknown; map them with --form-word):');
+    lines.push(
+      '',
+      '  form words NOT understood (records audited as form unknown; map them with --form-word):',
+    );
     for (const [w, n] of t.vocabulary.notUnderstood) lines.push(`    "${w}" (${n})`);
   }
   lines.push('', `Caution: ${t.caution}`);
@@ -150,7 +192,8 @@ function exitCode(t: BulkTrailer, failOn: string): number {
 }
 
 function checkFailOn(v: unknown): string {
-  if (v !== 'error' && v !== 'warning' && v !== 'never') throw new UsageError(`--fail-on must be error, warning or never (got "${String(v)}")`);
+  if (v !== 'error' && v !== 'warning' && v !== 'never')
+    throw new UsageError(`--fail-on must be error, warning or never (got "${String(v)}")`);
   return v;
 }
 
@@ -176,7 +219,7 @@ export async function bulkAudit(args: string[], io: Io): Promise<number> {
   if (positionals.length === 0) throw new UsageError('no bulk input given');
   const failOn = checkFailOn(values['fail-on']);
   const mapping: BulkMapping = typeof values.mapping === 'string' ? readMapping(values.mapping) : {};
-  for (const k of ['id', 'structure', 'form', 'descriptors', 'ratio', 'ee', 'rotation', 'name'] as const) {
+  for (const k of FIELD_KEYS) {
     const v = values[`map-${k}`];
     if (typeof v === 'string') mapping[k] = v;
   }
@@ -186,20 +229,32 @@ export async function bulkAudit(args: string[], io: Io): Promise<number> {
     if (at <= 0) throw new UsageError(`--form-word expects WORD=FORM (got "${fw}")`);
     words[fw.slice(0, at)] = fw.slice(at + 1);
   }
-  if (Object.keys(words).length > 0) mapping.vocabulary = { ...mapping.vocabulary, ...checkVocabulary(words, '--form-word') };
+  if (Object.keys(words).length > 0)
+    mapping.vocabulary = { ...mapping.vocabulary, ...checkVocabulary(words, '--form-word') };
   let shard = null;
   if (typeof values.shard === 'string') {
     shard = parseShard(values.shard);
     if (!shard) throw new UsageError(`--shard expects I/N with 1 <= I <= N (got "${values.shard}")`);
   }
   const workers = typeof values.workers === 'string' ? Number(values.workers) : undefined;
-  if (workers !== undefined && (!Number.isInteger(workers) || workers < 0)) throw new UsageError('--workers expects a whole number');
+  if (workers !== undefined && (!Number.isInteger(workers) || workers < 0))
+    throw new UsageError('--workers expects a whole number');
   const timeout = typeof values['record-timeout'] === 'string' ? Number(values['record-timeout']) : 20;
   if (!(timeout > 0)) throw new UsageError('--record-timeout expects a positive number of seconds');
   const progress = values.progress as string;
-  if (!['auto', 'bar', 'lines', 'none'].includes(progress)) throw new UsageError('--progress must be auto, bar, lines or none');
+  if (!['auto', 'bar', 'lines', 'none'].includes(progress))
+    throw new UsageError('--progress must be auto, bar, lines or none');
   for (const p of positionals) if (!io.isFile(p)) throw new UsageError(`bulk input ${p} not found`);
-  const { config } = loadConfig(typeof values.root === 'string' ? values.root : process.cwd(), typeof values.config === 'string' ? values.config : undefined);
+  let config: AuditConfig;
+  try {
+    config = loadConfig(
+      typeof values.root === 'string' ? values.root : process.cwd(),
+      typeof values.config === 'string' ? values.config : undefined,
+    ).config;
+  } catch (e) {
+    if (e instanceof ConfigError) throw new UsageError(e.message);
+    throw e;
+  }
   const { CHECKS } = await import('../../checks/index.js');
   const { writers, html } = writersFor(values, CHECKS);
   const run = await runBulkAudit({

@@ -2,7 +2,10 @@
 import { serveWorker } from '../../../src/bulk/worker-entry.js';
 
 serveWorker<number, number>((n) => {
-  if (n === -1) for (;;) { /* stall */ }
+  if (n === -1)
+    for (;;) {
+      /* stall */
+    }
   if (n === -2) process.exit(3);
   return n * n;
 });
