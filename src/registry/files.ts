@@ -2,7 +2,7 @@
  * Files of a registry on disk: finding record files, reading text safely (binary / non-UTF-8 / oversized files
  * are reported, not thrown), and resolving molfile paths so that they never leave the registry root.
  */
-import { lstatSync, readdirSync, readFileSync, realpathSync, statSync } from 'node:fs';
+import { lstatSync, readdirSync, readFileSync, realpathSync, statSync, type Dirent } from 'node:fs';
 import { isAbsolute, join, relative, resolve, sep } from 'node:path';
 
 /** Record files larger than this are refused (a record is a few hundred bytes; molfiles a few hundred kB). */
@@ -93,20 +93,25 @@ export function findRecordFiles(root: string, recordDirs: readonly string[]): Fo
     }
     if (visited.has(real) || escapes(root, real)) return;
     visited.add(real);
-    let names: string[];
+    let dirents: Dirent[];
     try {
-      names = readdirSync(dir).sort();
+      dirents = readdirSync(dir, { withFileTypes: true }).sort((a, b) =>
+        a.name < b.name ? -1 : a.name > b.name ? 1 : 0,
+      );
     } catch {
       return;
     }
-    for (const name of names) {
+    for (const dirent of dirents) {
+      const name = dirent.name;
       if (name.startsWith('.') || name === 'node_modules') continue;
       const abs = join(dir, name);
-      let st;
-      try {
-        st = lstatSync(abs);
-      } catch {
-        continue;
+      let st: { isDirectory(): boolean; isFile(): boolean; isSymbolicLink(): boolean } = dirent;
+      if (!dirent.isDirectory() && !dirent.isFile() && !dirent.isSymbolicLink()) {
+        try {
+          st = lstatSync(abs);
+        } catch {
+          continue;
+        }
       }
       if (st.isSymbolicLink()) {
         let target;
