@@ -54,12 +54,17 @@ export function parseCxExtension(s: string, start: number, atomCount: number): C
     if (type !== null) {
       const atoms: number[] = [];
       for (;;) {
-        if (!isDigit(s.charCodeAt(j))) return fail('cxsmiles-bad-group', 'expected an atom index in the stereo group', j);
+        if (!isDigit(s.charCodeAt(j)))
+          return fail('cxsmiles-bad-group', 'expected an atom index in the stereo group', j);
         let v = 0;
         const at = j;
         while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
         if (v >= atomCount) {
-          return fail('cxsmiles-bad-group', `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at);
+          return fail(
+            'cxsmiles-bad-group',
+            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
+            at,
+          );
         }
         atoms.push(v);
         const d = s.charCodeAt(j);

@@ -41,7 +41,17 @@ function isLower(c: number): boolean {
 }
 
 function raw(element: string, z: number, aromatic: boolean, offset: number): RawAtom {
-  return { element, atomicNumber: z, charge: 0, isotope: null, hCount: -1, aromatic, mapNumber: null, chirality: null, offset };
+  return {
+    element,
+    atomicNumber: z,
+    charge: 0,
+    isotope: null,
+    hCount: -1,
+    aromatic,
+    mapNumber: null,
+    chirality: null,
+    offset,
+  };
 }
 
 /**
@@ -134,7 +144,13 @@ export function readBracketAtom(s: string, start: number): AtomToken {
       element = s[i]!;
       const zz = atomicNumberOf(element);
       if (zz === undefined || two !== null) {
-        return { error: { code: 'smiles-unknown-element', message: `unknown element '${two ?? element}'`, offset: i } };
+        return {
+          error: {
+            code: 'smiles-unknown-element',
+            message: `unknown element '${two ?? element}'`,
+            offset: i,
+          },
+        };
       }
       z = zz;
       i++;
@@ -148,14 +164,26 @@ export function readBracketAtom(s: string, start: number): AtomToken {
       element = s[i]!.toUpperCase();
       i++;
     } else {
-      return { error: { code: 'smiles-unknown-element', message: `unknown aromatic element '${s[i]}'`, offset: i } };
+      return {
+        error: { code: 'smiles-unknown-element', message: `unknown aromatic element '${s[i]}'`, offset: i },
+      };
     }
     aromatic = true;
     z = atomicNumberOf(element)!;
   } else {
     return bad(i < n ? i : start, 'bracket atom without an element symbol');
   }
-  const atom: RawAtom = { element, atomicNumber: z, charge: 0, isotope, hCount: 0, aromatic, mapNumber: null, chirality: null, offset: start };
+  const atom: RawAtom = {
+    element,
+    atomicNumber: z,
+    charge: 0,
+    isotope,
+    hCount: 0,
+    aromatic,
+    mapNumber: null,
+    chirality: null,
+    offset: start,
+  };
   // chirality
   if (s.charCodeAt(i) === 64) {
     i++;
@@ -165,7 +193,8 @@ export function readBracketAtom(s: string, start: number): AtomToken {
     } else if (isUpper(s.charCodeAt(i)) && isUpper(s.charCodeAt(i + 1)) && s.charCodeAt(i) !== 72) {
       const cls = s.substring(i, i + 2);
       const num = readInt(s, i + 2);
-      if (!num || !['TH', 'AL', 'SP', 'TB', 'OH'].includes(cls)) return bad(i, `unknown chirality class '@${cls}'`);
+      if (!num || !['TH', 'AL', 'SP', 'TB', 'OH'].includes(cls))
+        return bad(i, `unknown chirality class '@${cls}'`);
       if (cls === 'TH' || cls === 'AL') {
         if (num[0] !== 1 && num[0] !== 2) return bad(i, `chirality '@${cls}${num[0]}' must be 1 or 2`);
         atom.chirality = num[0] === 1 ? '@' : '@@';

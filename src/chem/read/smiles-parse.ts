@@ -54,14 +54,22 @@ function err(code: string, message: string, offset: number): { error: TokenError
 
 function bondSymbol(c: number, offset: number): PendingBond | null {
   switch (c) {
-    case 45: return { order: 1, aromatic: false, dir: 0, offset }; // -
-    case 61: return { order: 2, aromatic: false, dir: 0, offset }; // =
-    case 35: return { order: 3, aromatic: false, dir: 0, offset }; // #
-    case 36: return { order: 4, aromatic: false, dir: 0, offset }; // $
-    case 58: return { order: 1, aromatic: true, dir: 0, offset }; // :
-    case 47: return { order: 1, aromatic: false, dir: 1, offset }; // /
-    case 92: return { order: 1, aromatic: false, dir: -1, offset }; // \
-    default: return null;
+    case 45:
+      return { order: 1, aromatic: false, dir: 0, offset }; // -
+    case 61:
+      return { order: 2, aromatic: false, dir: 0, offset }; // =
+    case 35:
+      return { order: 3, aromatic: false, dir: 0, offset }; // #
+    case 36:
+      return { order: 4, aromatic: false, dir: 0, offset }; // $
+    case 58:
+      return { order: 1, aromatic: true, dir: 0, offset }; // :
+    case 47:
+      return { order: 1, aromatic: false, dir: 1, offset }; // /
+    case 92:
+      return { order: 1, aromatic: false, dir: -1, offset }; // \
+    default:
+      return null;
   }
 }
 
@@ -87,7 +95,15 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
 
   const addBond = (a: number, b: number, p: PendingBond | null, offset: number): number => {
     const arom = p ? p.aromatic : atoms[a]!.aromatic && atoms[b]!.aromatic;
-    bonds.push({ a, b, order: p ? p.order : 1, aromatic: arom, explicit: p !== null, dir: p ? p.dir : 0, offset });
+    bonds.push({
+      a,
+      b,
+      order: p ? p.order : 1,
+      aromatic: arom,
+      explicit: p !== null,
+      dir: p ? p.dir : 0,
+      offset,
+    });
     return bonds.length - 1;
   };
 
@@ -131,7 +147,11 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
       i++;
       if (c === 92 && s.charCodeAt(i) === 92) {
         // '\\': a backslash escaped for a programming language or CSV; read as one '\' (RDKit does too)
-        warnings.push({ code: 'smiles-doubled-backslash', message: "'\\\\' read as a single '\\'", offset: i - 1 });
+        warnings.push({
+          code: 'smiles-doubled-backslash',
+          message: "'\\\\' read as a single '\\'",
+          offset: i - 1,
+        });
         i++;
       }
       continue;
@@ -150,7 +170,8 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
       const top = branchStack.pop();
       if (!top) return err('smiles-unmatched-parenthesis', "')' without a matching '('", i);
       if (pending) return err('smiles-dangling-bond', "bond symbol before ')'", pending.offset);
-      if (atoms.length === top.atomsBefore) return err('smiles-empty-branch', 'branch with no atom in it', top.offset);
+      if (atoms.length === top.atomsBefore)
+        return err('smiles-empty-branch', 'branch with no atom in it', top.offset);
       prev = top.atom;
       i++;
       continue;
@@ -169,8 +190,10 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
           // %(nnn) ring-closure extension
           let j = i + 2;
           num = 0;
-          while (j < n && s.charCodeAt(j) >= 48 && s.charCodeAt(j) <= 57 && j - i < 8) num = num * 10 + s.charCodeAt(j++) - 48;
-          if (j === i + 2 || s.charCodeAt(j) !== 41) return err('smiles-bad-ring-number', "'%(' must be followed by digits and ')'", i);
+          while (j < n && s.charCodeAt(j) >= 48 && s.charCodeAt(j) <= 57 && j - i < 8)
+            num = num * 10 + s.charCodeAt(j++) - 48;
+          if (j === i + 2 || s.charCodeAt(j) !== 41)
+            return err('smiles-bad-ring-number', "'%(' must be followed by digits and ')'", i);
           i = j + 1;
         } else {
           return err('smiles-bad-ring-number', "'%' must be followed by two digits", i);
@@ -190,18 +213,28 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
         rings[num] = undefined;
         openRings--;
         const a = open.atom;
-        if (a === prev) return err('smiles-ring-bond-to-self', `ring closure ${num} bonds an atom to itself`, at);
-        if (nbr[prev]!.includes(a)) return err('smiles-duplicate-bond', `ring closure ${num} repeats an existing bond`, at);
+        if (a === prev)
+          return err('smiles-ring-bond-to-self', `ring closure ${num} bonds an atom to itself`, at);
+        if (nbr[prev]!.includes(a))
+          return err('smiles-duplicate-bond', `ring closure ${num} repeats an existing bond`, at);
         // combine the symbols written at the two ends
         let p: PendingBond | null = open.bond;
         const q = pending;
         if (q) {
           if (p) {
             if (p.order !== q.order || p.aromatic !== q.aromatic) {
-              return err('smiles-conflicting-ring-bond', `ring closure ${num} has different bond symbols at its two ends`, at);
+              return err(
+                'smiles-conflicting-ring-bond',
+                `ring closure ${num} has different bond symbols at its two ends`,
+                at,
+              );
             }
             if (p.dir !== 0 && q.dir !== 0 && p.dir !== -q.dir) {
-              return err('smiles-conflicting-ring-bond', `ring closure ${num} has contradicting '/' '\\' marks`, at);
+              return err(
+                'smiles-conflicting-ring-bond',
+                `ring closure ${num} has contradicting '/' '\\' marks`,
+                at,
+              );
             }
             if (p.dir === 0 && q.dir !== 0) p = { ...p, dir: -q.dir };
           } else {
@@ -234,7 +267,11 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
   if (pending) return err('smiles-dangling-bond', 'bond symbol at the end of the SMILES', pending.offset);
   if (prev < 0) return err('smiles-empty-component', "'.' at the end of the SMILES", end - 1);
   if (branchStack.length > 0) {
-    return err('smiles-unmatched-parenthesis', "'(' is never closed", branchStack[branchStack.length - 1]!.offset);
+    return err(
+      'smiles-unmatched-parenthesis',
+      "'(' is never closed",
+      branchStack[branchStack.length - 1]!.offset,
+    );
   }
   if (openRings > 0) {
     let first: OpenRing | undefined;

@@ -31,10 +31,17 @@ function warn(code: string, message: string, offset: number): ReadError {
 }
 
 /** An inner cumulene atom: exactly two neighbours, both by non-aromatic double bonds, no hydrogens. */
-function isCumuleneInner(g: SmilesGraph, order: ArrayLike<number>, hCount: ArrayLike<number>, i: number): boolean {
+function isCumuleneInner(
+  g: SmilesGraph,
+  order: ArrayLike<number>,
+  hCount: ArrayLike<number>,
+  i: number,
+): boolean {
   const bs = g.nbrBond[i]!;
   if (bs.length !== 2 || hCount[i] !== 0) return false;
-  return order[bs[0]!] === 2 && order[bs[1]!] === 2 && !g.bonds[bs[0]!]!.aromatic && !g.bonds[bs[1]!]!.aromatic;
+  return (
+    order[bs[0]!] === 2 && order[bs[1]!] === 2 && !g.bonds[bs[0]!]!.aromatic && !g.bonds[bs[1]!]!.aromatic
+  );
 }
 
 /** Walks from `from` through `to` along cumulated double bonds; returns [terminal, its chain neighbour, bonds]. */
@@ -72,13 +79,22 @@ export function buildStereo(
     const a = g.atoms[i]!;
     if (a.chirality === null) continue;
     if (a.chirality === 'other') {
-      warnings.push(warn('smiles-stereo-unsupported', 'square-planar, trigonal-bipyramidal and octahedral marks are ignored', a.offset));
+      warnings.push(
+        warn(
+          'smiles-stereo-unsupported',
+          'square-planar, trigonal-bipyramidal and octahedral marks are ignored',
+          a.offset,
+        ),
+      );
       continue;
     }
     if (isCumuleneInner(g, order, hCount, i)) {
       const ax = allene(g, order, hCount, i, a.chirality);
       if (ax) out.push(ax);
-      else warnings.push(warn('smiles-stereo-ignored', 'allene mark ignored: each end needs two substituents', a.offset));
+      else
+        warnings.push(
+          warn('smiles-stereo-ignored', 'allene mark ignored: each end needs two substituents', a.offset),
+        );
       continue;
     }
     const lig = ligandsOf(g, hCount, i);
@@ -88,11 +104,20 @@ export function buildStereo(
     if (lig.length === 3) lig.splice(1, 0, LONE_PAIR);
     if (lig.length !== 4) {
       warnings.push(
-        warn('smiles-stereo-ignored', `chirality mark ignored: the atom has ${lig.length} neighbours, a tetrahedral centre needs 3 or 4`, a.offset),
+        warn(
+          'smiles-stereo-ignored',
+          `chirality mark ignored: the atom has ${lig.length} neighbours, a tetrahedral centre needs 3 or 4`,
+          a.offset,
+        ),
       );
       continue;
     }
-    const t: TetrahedralStereo = { kind: 'tetrahedral', centre: i, ligands: lig as [number, number, number, number], winding: a.chirality };
+    const t: TetrahedralStereo = {
+      kind: 'tetrahedral',
+      centre: i,
+      ligands: lig as [number, number, number, number],
+      winding: a.chirality,
+    };
     out.push(t);
   }
   doubleBonds(g, order, hCount, warnings, out);
@@ -129,7 +154,12 @@ function allene(
 }
 
 /** For terminal `t` (chain neighbour `c`): marked neighbours and whether each lies "up" from t. */
-function marksAt(g: SmilesGraph, order: ArrayLike<number>, t: number, c: number): { x: number; up: boolean }[] {
+function marksAt(
+  g: SmilesGraph,
+  order: ArrayLike<number>,
+  t: number,
+  c: number,
+): { x: number; up: boolean }[] {
   const res: { x: number; up: boolean }[] = [];
   const nb = g.nbr[t]!;
   const bs = g.nbrBond[t]!;
@@ -165,7 +195,10 @@ function doubleBonds(
     const doubles = d0 + d1 - 1;
     if (doubles > 1) {
       // mark the whole chain as seen
-      for (const [s, e] of [[b.b, b.a], [b.a, b.b]] as const) {
+      for (const [s, e] of [
+        [b.b, b.a],
+        [b.a, b.b],
+      ] as const) {
         let prev = s;
         let cur = e;
         while (isCumuleneInner(g, order, hCount, cur)) {
@@ -186,7 +219,11 @@ function doubleBonds(
     if (m0.length === 0 || m1.length === 0) continue;
     if ((m0.length === 2 && m0[0]!.up === m0[1]!.up) || (m1.length === 2 && m1[0]!.up === m1[1]!.up)) {
       warnings.push(
-        warn('smiles-conflicting-bond-direction', "two '/' '\\' marks put both substituents on the same side; double-bond configuration ignored", b.offset),
+        warn(
+          'smiles-conflicting-bond-direction',
+          "two '/' '\\' marks put both substituents on the same side; double-bond configuration ignored",
+          b.offset,
+        ),
       );
       continue;
     }

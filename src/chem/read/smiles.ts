@@ -25,7 +25,11 @@ export function parseSmiles(text: string): ReadResult {
     return parse(text);
   } catch (e) {
     // A bug, not bad input; still report it as data so a bulk audit carries on.
-    return failure('smiles-internal-error', `internal error while reading SMILES: ${(e as Error).message}`, 0);
+    return failure(
+      'smiles-internal-error',
+      `internal error while reading SMILES: ${(e as Error).message}`,
+      0,
+    );
   }
 }
 
@@ -33,8 +37,16 @@ function parse(text: string): ReadResult {
   let start = 0;
   while (start < text.length && isSpace(text.charCodeAt(start))) start++;
   const g = parseSmilesGraph(text, start);
-  if ('error' in g) return { ok: false, error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } } };
-  const warnings: ReadError[] = g.warnings.map((w) => ({ code: w.code, message: w.message, at: { offset: w.offset } }));
+  if ('error' in g)
+    return {
+      ok: false,
+      error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } },
+    };
+  const warnings: ReadError[] = g.warnings.map((w) => ({
+    code: w.code,
+    message: w.message,
+    at: { offset: w.offset },
+  }));
   const n = g.atoms.length;
   const m = g.bonds.length;
 
@@ -152,7 +164,11 @@ function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
     }
     if (v - sum >= 1) {
       if (!hasAromaticBond) {
-        return failure('smiles-kekulize', `cannot kekulize: aromatic atom ${ra.element} (atom ${a + 1}) is not in a ring`, ra.offset);
+        return failure(
+          'smiles-kekulize',
+          `cannot kekulize: aromatic atom ${ra.element} (atom ${a + 1}) is not in a ring`,
+          ra.offset,
+        );
       }
       needsDouble[a] = 1;
       any = true;
@@ -165,7 +181,13 @@ function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
     bondA[k] = g.bonds[k]!.a;
     bondB[k] = g.bonds[k]!.b;
   }
-  const res = kekulize({ atomCount: n, bondA, bondB, aromaticBonds, needsDouble: Array.from(needsDouble, (x) => x === 1) });
+  const res = kekulize({
+    atomCount: n,
+    bondA,
+    bondB,
+    aromaticBonds,
+    needsDouble: Array.from(needsDouble, (x) => x === 1),
+  });
   if (!res.ok) {
     const ra = g.atoms[res.atom]!;
     return failure(

@@ -71,13 +71,19 @@ export function assignBondDirections(s: Structure, em: Emission): Map<number, nu
   }
   const singles: { to: number; bond: number }[][] = Array.from({ length: n }, () => []);
   const unspecifiedDouble = new Uint8Array(n); // atom has a double bond with no stored configuration
-  const specified = new Set(dbs.map((d) => `${Math.min(d.ends[0], d.ends[1])}-${Math.max(d.ends[0], d.ends[1])}`));
+  const specified = new Set(
+    dbs.map((d) => `${Math.min(d.ends[0], d.ends[1])}-${Math.max(d.ends[0], d.ends[1])}`),
+  );
   s.bonds.forEach((b, k) => {
     if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) return;
     if (b.order === 1) {
       singles[b.a]!.push({ to: b.b, bond: k });
       singles[b.b]!.push({ to: b.a, bond: k });
-    } else if (b.order === 2 && !b.aromatic && !specified.has(`${Math.min(b.a, b.b)}-${Math.max(b.a, b.b)}`)) {
+    } else if (
+      b.order === 2 &&
+      !b.aromatic &&
+      !specified.has(`${Math.min(b.a, b.b)}-${Math.max(b.a, b.b)}`)
+    ) {
       unspecifiedDouble[b.a] = 1;
       unspecifiedDouble[b.b] = 1;
     }

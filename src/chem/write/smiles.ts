@@ -113,7 +113,10 @@ export function writeSmiles(s: Structure, opts: WriteSmilesOptions = {}): string
 }
 
 /** As writeSmiles, also returning `atomOrder`: the input atom index of each written atom, in output order. */
-export function writeSmilesWithOrder(s: Structure, opts: WriteSmilesOptions = {}): { smiles: string; atomOrder: number[] } {
+export function writeSmilesWithOrder(
+  s: Structure,
+  opts: WriteSmilesOptions = {},
+): { smiles: string; atomOrder: number[] } {
   const withStereo = opts.stereo !== false;
   const em = traverse(s, opts.order);
   const chir = withStereo ? chiralMarks(s, em) : new Map<number, string>();
@@ -138,10 +141,14 @@ export function writeSmilesWithOrder(s: Structure, opts: WriteSmilesOptions = {}
     const d = dir.get(k);
     if (d !== undefined) return d > 0 ? '/' : '\\';
     switch (s.bonds[k]!.order) {
-      case 2: return '=';
-      case 3: return '#';
-      case 4: return '$';
-      default: return '';
+      case 2:
+        return '=';
+      case 3:
+        return '#';
+      case 4:
+        return '$';
+      default:
+        return '';
     }
   };
   em.roots.forEach((r, ci) => {

@@ -39,54 +39,58 @@ function entries(): Entry[] {
 /** What our reader must show at a labelled atom (index = number - 1). */
 function carries(s: Structure, idx: number, descriptor: string): boolean {
   if ('RSrs'.includes(descriptor)) return s.stereo.some((e) => e.kind === 'tetrahedral' && e.centre === idx);
-  if ('EZez'.includes(descriptor)) return s.stereo.some((e) => e.kind === 'double-bond' && e.ends.includes(idx));
+  if ('EZez'.includes(descriptor))
+    return s.stereo.some((e) => e.kind === 'double-bond' && e.ends.includes(idx));
   return s.stereo.some((e) => e.kind === 'axial' && e.ends.includes(idx));
 }
 
-describe.skipIf(!haveSharedData('cip-validation-suite'))('CIP validation suite SMILES (Hanson et al. 2018)', () => {
-  it('reads all 300 entries', () => {
-    const all = entries();
-    expect(all).toHaveLength(300);
-    const failed = all.filter((e) => !parseSmiles(e.smiles).ok).map((e) => e.id);
-    expect(failed).toEqual([]);
-  });
+describe.skipIf(!haveSharedData('cip-validation-suite'))(
+  'CIP validation suite SMILES (Hanson et al. 2018)',
+  () => {
+    it('reads all 300 entries', () => {
+      const all = entries();
+      expect(all).toHaveLength(300);
+      const failed = all.filter((e) => !parseSmiles(e.smiles).ok).map((e) => e.id);
+      expect(failed).toEqual([]);
+    });
 
-  it('finds a stereo unit of the right kind at every labelled atom (helicenes and atropisomers excepted)', () => {
-    // HE/AT units cannot be written in SMILES (suite README): only their atoms must exist and be carbon.
-    const missing: string[] = [];
-    let checked = 0;
-    for (const e of entries()) {
-      const r = parseSmiles(e.smiles);
-      if (!r.ok) continue;
-      const s = r.structure;
-      const axisOnly = /\b(AT|HE)\b/.test(e.units);
-      for (const { atom, descriptor } of e.labels) {
-        const a = s.atoms[atom - 1];
-        if (!a) {
-          missing.push(`${e.id} ${atom}${descriptor}: no such atom`);
-          continue;
+    it('finds a stereo unit of the right kind at every labelled atom (helicenes and atropisomers excepted)', () => {
+      // HE/AT units cannot be written in SMILES (suite README): only their atoms must exist and be carbon.
+      const missing: string[] = [];
+      let checked = 0;
+      for (const e of entries()) {
+        const r = parseSmiles(e.smiles);
+        if (!r.ok) continue;
+        const s = r.structure;
+        const axisOnly = /\b(AT|HE)\b/.test(e.units);
+        for (const { atom, descriptor } of e.labels) {
+          const a = s.atoms[atom - 1];
+          if (!a) {
+            missing.push(`${e.id} ${atom}${descriptor}: no such atom`);
+            continue;
+          }
+          if (axisOnly && 'MP'.includes(descriptor)) {
+            if (a.element !== 'C') missing.push(`${e.id} ${atom}${descriptor}: ${a.element}`);
+            continue;
+          }
+          checked++;
+          if (!carries(s, atom - 1, descriptor)) missing.push(`${e.id} ${atom}${descriptor} on ${a.element}`);
         }
-        if (axisOnly && 'MP'.includes(descriptor)) {
-          if (a.element !== 'C') missing.push(`${e.id} ${atom}${descriptor}: ${a.element}`);
-          continue;
-        }
-        checked++;
-        if (!carries(s, atom - 1, descriptor)) missing.push(`${e.id} ${atom}${descriptor} on ${a.element}`);
       }
-    }
-    expect(checked).toBeGreaterThan(400);
-    expect(missing).toEqual([]);
-  });
+      expect(checked).toBeGreaterThan(400);
+      expect(missing).toEqual([]);
+    });
 
-  it('skips bracket H in the numbering, as the suite does (VS016: labels 3R 5R fall on [C@H] carbons)', () => {
-    const e = entries().find((x) => x.id === 'VS016')!;
-    const r = parseSmiles(e.smiles);
-    expect(e.labels.map((l) => l.atom)).toEqual([3, 5]);
-    expect(r.ok).toBe(true);
-    if (!r.ok) return;
-    for (const { atom } of e.labels) {
-      expect(r.structure.atoms[atom - 1]).toMatchObject({ element: 'C', hCount: 1 });
-      expect(r.structure.stereo.some((x) => x.kind === 'tetrahedral' && x.centre === atom - 1)).toBe(true);
-    }
-  });
-});
+    it('skips bracket H in the numbering, as the suite does (VS016: labels 3R 5R fall on [C@H] carbons)', () => {
+      const e = entries().find((x) => x.id === 'VS016')!;
+      const r = parseSmiles(e.smiles);
+      expect(e.labels.map((l) => l.atom)).toEqual([3, 5]);
+      expect(r.ok).toBe(true);
+      if (!r.ok) return;
+      for (const { atom } of e.labels) {
+        expect(r.structure.atoms[atom - 1]).toMatchObject({ element: 'C', hCount: 1 });
+        expect(r.structure.stereo.some((x) => x.kind === 'tetrahedral' && x.centre === atom - 1)).toBe(true);
+      }
+    });
+  },
+);

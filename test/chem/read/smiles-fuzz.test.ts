@@ -36,9 +36,15 @@ function check(s: string): void {
 
 describe('parseSmiles never throws', () => {
   it('on random strings over the SMILES alphabet', () => {
-    fc.assert(fc.property(fc.array(fc.constantFrom(...ALPHABET), { maxLength: 40 }).map((a) => a.join('')), check), {
-      numRuns: 3000,
-    });
+    fc.assert(
+      fc.property(
+        fc.array(fc.constantFrom(...ALPHABET), { maxLength: 40 }).map((a) => a.join('')),
+        check,
+      ),
+      {
+        numRuns: 3000,
+      },
+    );
   });
   it('on arbitrary unicode strings', () => {
     fc.assert(fc.property(fc.string({ unit: 'binary', maxLength: 30 }), check), { numRuns: 1000 });
@@ -47,7 +53,11 @@ describe('parseSmiles never throws', () => {
     const mutation = fc.record({
       seed: fc.constantFrom(...SEEDS),
       edits: fc.array(
-        fc.record({ kind: fc.constantFrom('ins', 'del', 'rep'), at: fc.nat(), ch: fc.constantFrom(...ALPHABET) }),
+        fc.record({
+          kind: fc.constantFrom('ins', 'del', 'rep'),
+          at: fc.nat(),
+          ch: fc.constantFrom(...ALPHABET),
+        }),
         { minLength: 1, maxLength: 4 },
       ),
     });

@@ -10,13 +10,20 @@ import type { MainModule } from '@rdkit/rdkit';
 import { parseSmiles } from '../../../src/chem/read/smiles.js';
 import { writeSmiles } from '../../../src/chem/write/smiles.js';
 import { haveSharedData } from '../../support/shared-data.js';
-import { loadRDKit, moleculeNetSmiles, rdkitCanonical, rdkitCanonicalAndTags } from './smiles-rdkit-helper.js';
+import {
+  loadRDKit,
+  moleculeNetSmiles,
+  rdkitCanonical,
+  rdkitCanonicalAndTags,
+} from './smiles-rdkit-helper.js';
 
 interface Allow {
   parseFailures: { smiles: string; reason: string }[];
   roundTrip: { smiles: string; reason: string }[];
 }
-const allow = JSON.parse(readFileSync(new URL('./smiles-moleculenet-allow.json', import.meta.url), 'utf8')) as Allow;
+const allow = JSON.parse(
+  readFileSync(new URL('./smiles-moleculenet-allow.json', import.meta.url), 'utf8'),
+) as Allow;
 
 describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet SMILES against RDKit (Wu et al. 2018)', () => {
   let rd: MainModule;
@@ -39,7 +46,9 @@ describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet SMILES against RDKi
     const tagMismatch: string[] = [];
     for (const x of all) {
       const hasMarks = x.includes('@');
-      const ref = hasMarks ? rdkitCanonicalAndTags(rd, x) : { canonical: rdkitCanonical(rd, x), chiralTags: 0 };
+      const ref = hasMarks
+        ? rdkitCanonicalAndTags(rd, x)
+        : { canonical: rdkitCanonical(rd, x), chiralTags: 0 };
       if (ref === null || ref.canonical === null) continue;
       rdkitRead++;
       const r = parseSmiles(x);
@@ -64,7 +73,8 @@ describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet SMILES against RDKi
         if (ref.chiralTags === marks) {
           tagsCompared++;
           if (centres !== ref.chiralTags) tagMismatch.push(`${x}: RDKit ${ref.chiralTags}, ours ${centres}`);
-        } else if (centres < ref.chiralTags) tagMismatch.push(`${x}: RDKit ${ref.chiralTags} > ours ${centres}`);
+        } else if (centres < ref.chiralTags)
+          tagMismatch.push(`${x}: RDKit ${ref.chiralTags} > ours ${centres}`);
       }
     }
     console.info(

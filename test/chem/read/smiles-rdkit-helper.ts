@@ -13,7 +13,9 @@ let instance: Promise<MainModule> | null = null;
 export function loadRDKit(): Promise<MainModule> {
   // The package is CommonJS (module.exports = initRDKitModule); its .d.ts declares an ES default export.
   instance ??= import('@rdkit/rdkit').then((m) => {
-    const mod = m as unknown as { default: (() => Promise<MainModule>) | { default: () => Promise<MainModule> } };
+    const mod = m as unknown as {
+      default: (() => Promise<MainModule>) | { default: () => Promise<MainModule> };
+    };
     const init = typeof mod.default === 'function' ? mod.default : mod.default.default;
     return init();
   });
@@ -35,7 +37,10 @@ export function rdkitCanonical(rd: MainModule, smiles: string): string | null {
  * Canonical SMILES plus the count of atoms RDKit keeps a tetrahedral chiral tag on (commonchem JSON
  * "stereo": cw/ccw), from one RDKit read; null when RDKit cannot read the input.
  */
-export function rdkitCanonicalAndTags(rd: MainModule, smiles: string): { canonical: string; chiralTags: number } | null {
+export function rdkitCanonicalAndTags(
+  rd: MainModule,
+  smiles: string,
+): { canonical: string; chiralTags: number } | null {
   const mol = rd.get_mol(smiles);
   if (!mol) return null;
   try {
@@ -52,7 +57,10 @@ export function rdkitCanonicalAndTags(rd: MainModule, smiles: string): { canonic
 export function moleculeNetSmiles(): string[] {
   const out: string[] = [];
   for (const f of ['bbbp.csv', 'clintox.csv', 'sider.csv', 'tox21.csv']) {
-    const rows = parse(readFileSync(sharedDataPath('moleculenet', f), 'utf8'), { columns: true }) as Record<string, string>[];
+    const rows = parse(readFileSync(sharedDataPath('moleculenet', f), 'utf8'), { columns: true }) as Record<
+      string,
+      string
+    >[];
     for (const r of rows) if (r.smiles) out.push(r.smiles);
   }
   return out;

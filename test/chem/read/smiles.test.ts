@@ -131,7 +131,12 @@ describe('aromaticity and kekulization (OpenSMILES aromaticity; RDKit reads the 
 
 describe('tetrahedral stereo ligand order (OpenSMILES chirality)', () => {
   it('orders ligands: preceding atom, implicit H, ring closures, branches/following atoms', () => {
-    expect(ok('N[C@@H](C)C(=O)O').stereo[0]).toEqual({ kind: 'tetrahedral', centre: 1, ligands: [0, IMPLICIT_H, 2, 3], winding: '@@' });
+    expect(ok('N[C@@H](C)C(=O)O').stereo[0]).toEqual({
+      kind: 'tetrahedral',
+      centre: 1,
+      ligands: [0, IMPLICIT_H, 2, 3],
+      winding: '@@',
+    });
     // a leading atom has no preceding atom: its H comes first
     expect(ok('[C@@H](N)(C)C(=O)O').stereo[0]).toMatchObject({ ligands: [IMPLICIT_H, 1, 2, 3] });
     // F0 C1 ring-1 Cl2 C3 C4 C5 C6(closes 1) Br7: the ring partner C6 follows F, then Cl, then C3
@@ -146,10 +151,18 @@ describe('tetrahedral stereo ligand order (OpenSMILES chirality)', () => {
     expect(r.ok && r.structure.stereo.length === 0 && r.warnings[0]!.code).toBe('smiles-stereo-unsupported');
   });
   it('puts the lone pair of a three-connected S or P second, as RDKit reads it', () => {
-    expect(ok('C[S@](=O)c1ccccc1').stereo[0]).toMatchObject({ centre: 1, ligands: [0, LONE_PAIR, 2, 3], winding: '@' });
+    expect(ok('C[S@](=O)c1ccccc1').stereo[0]).toMatchObject({
+      centre: 1,
+      ligands: [0, LONE_PAIR, 2, 3],
+      winding: '@',
+    });
     // A leading atom: OpenSMILES says nothing about lone pairs; RDKit reads [S@](C)(=O)c1ccccc1 as the same
     // molecule as C[S@](=O)c1ccccc1 (checked with @rdkit/rdkit), so the lone pair is not put first.
-    expect(ok('[S@](C)(=O)c1ccccc1').stereo[0]).toMatchObject({ centre: 0, ligands: [1, LONE_PAIR, 2, 3], winding: '@' });
+    expect(ok('[S@](C)(=O)c1ccccc1').stereo[0]).toMatchObject({
+      centre: 0,
+      ligands: [1, LONE_PAIR, 2, 3],
+      winding: '@',
+    });
     expect(ok('[P@](C)(CC)c1ccccc1').stereo[0]).toMatchObject({ centre: 0, ligands: [1, LONE_PAIR, 2, 4] });
   });
   it('keeps marks on atoms with 3-4 ligands and warns on fewer', () => {
@@ -178,17 +191,25 @@ describe('double-bond and allene stereo (OpenSMILES cis/trans and extended tetra
     expect(db('C/C=C\\C=C/C').map((e) => e.relation)).toEqual(['cis', 'cis']);
   });
   it('reads an odd cumulene between its terminal atoms', () => {
-    expect(db('F/C=C=C=C/F')).toEqual([{ kind: 'double-bond', ends: [1, 4], refs: [0, 5], relation: 'trans' }]);
+    expect(db('F/C=C=C=C/F')).toEqual([
+      { kind: 'double-bond', ends: [1, 4], refs: [0, 5], relation: 'trans' },
+    ]);
   });
   it('warns on marks that put both substituents on one side', () => {
     const r = parseSmiles('F/C(\\Cl)=C/F');
-    expect(r.ok && r.structure.stereo.length === 0 && r.warnings[0]!.code).toBe('smiles-conflicting-bond-direction');
+    expect(r.ok && r.structure.stereo.length === 0 && r.warnings[0]!.code).toBe(
+      'smiles-conflicting-bond-direction',
+    );
   });
   it('reads allenes as axial stereo: ends, near/near/far/far ligands (spec example NC(Br)=[C@]=C(O)C)', () => {
     expect(ok('NC(Br)=[C@]=C(O)C').stereo).toEqual([
       { kind: 'axial', subtype: 'allene', ends: [1, 4], ligands: [0, 2, 5, 6], winding: '@' },
     ]);
-    expect(ok('CC=[C@AL2]=CC').stereo[0]).toMatchObject({ ends: [1, 3], ligands: [0, IMPLICIT_H, IMPLICIT_H, 4], winding: '@@' });
+    expect(ok('CC=[C@AL2]=CC').stereo[0]).toMatchObject({
+      ends: [1, 3],
+      ligands: [0, IMPLICIT_H, IMPLICIT_H, 4],
+      winding: '@@',
+    });
   });
   it('agrees with the CIP validation suite helicity of two simple allenes (Hanson et al. 2018, VS079 M, VS144 P)', () => {
     // Helicity rule (IUPAC 2013 P-93.5.7.1, from memory): look along the axis from the near end; turning from
