@@ -21,11 +21,18 @@ export function buildGraph(s: Structure): Graph {
     deg[b.a]++;
     deg[b.b]++;
   }
+  // One buffer for all lists; each atom's list is a view into it.
+  let total = 0;
+  for (let i = 0; i < n; i++) total += deg[i];
+  const flatNbrs = new Int32Array(total);
+  const flatBonds = new Int32Array(total);
   const nbrs: Int32Array[] = new Array(n);
   const nbrBonds: Int32Array[] = new Array(n);
+  let at = 0;
   for (let i = 0; i < n; i++) {
-    nbrs[i] = new Int32Array(deg[i]);
-    nbrBonds[i] = new Int32Array(deg[i]);
+    nbrs[i] = flatNbrs.subarray(at, at + deg[i]);
+    nbrBonds[i] = flatBonds.subarray(at, at + deg[i]);
+    at += deg[i];
   }
   const fill = new Int32Array(n);
   s.bonds.forEach((b, k) => {

@@ -6,7 +6,7 @@
  * regular graphs refinement alone may leave inequivalent atoms together (the search in isomorphism.ts is exact).
  */
 import type { Structure } from '../types.js';
-import { prepare } from './prepared.js';
+import { prepare, refinedPartition } from './prepared.js';
 import { cellIndex, partitionOf, rankKeys, Refiner } from './refine.js';
 
 export { atomInvariants } from './invariants.js';
@@ -23,8 +23,9 @@ export interface ClassOptions {
 export function equivalenceClasses(s: Structure, opts: ClassOptions = {}): Int32Array {
   const n = s.atoms.length;
   if (n === 0) return new Int32Array(0);
-  const { inv, csr } = prepare(s, opts.aromatic);
-  const p = partitionOf(rankKeys(opts.extra ? [inv, opts.extra] : [inv], n));
-  new Refiner(csr).refine(p);
+  const prep = prepare(s, opts.aromatic);
+  if (!opts.extra) return cellIndex(refinedPartition(prep));
+  const p = partitionOf(rankKeys([prep.inv, opts.extra], n));
+  new Refiner(prep.csr).refine(p);
   return cellIndex(p);
 }

@@ -10,7 +10,7 @@
  */
 import type { Structure } from '../types.js';
 import { conjugatedRingBonds } from './aromaticity.js';
-import { prepare } from './prepared.js';
+import { prepare, refinedPartition, type Prepared } from './prepared.js';
 import { clonePartition, copyPartition, partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
 
 export interface IsomorphismOptions {
@@ -68,8 +68,7 @@ export function findIsomorphisms(a: Structure, b: Structure, opts: IsomorphismOp
   if (same) {
     // Automorphisms: refine one copy; when every key atom is alone in its cell, the identity is the only
     // restriction to key ∪ N(key), so there is nothing to search.
-    const single = partitionOf(rankKeys(opts.colourA ? [pa.inv, opts.colourA] : [pa.inv], n));
-    new Refiner(pa.csr).refine(single);
+    const single = singlePartition(pa, opts.colourA, n);
     let fixed = true;
     for (let i = 0; i < n && fixed; i++) if (inKey[i] && single.len[single.start[i]] > 1) fixed = false;
     if (fixed) {
@@ -100,6 +99,29 @@ export function findIsomorphisms(a: Structure, b: Structure, opts: IsomorphismOp
   search.root = p;
   search.run(p, opts.key ? opts.key.length > 0 : true);
   return { complete: !search.budgetHit && !search.maxHit, nodes: search.nodes };
+}
+
+/** Refined partition of one structure with optional colours (the cached one when colours add nothing). */
+function singlePartition(pa: Prepared, colour: ArrayLike<number> | undefined, n: number): Partition {
+  const base = refinedPartition(pa);
+  if (colour) {
+    let constant = true;
+    for (let s = 0; s < n && constant; s += base.len[s]) {
+      const c = colour[base.lab[s]];
+      for (let t = s + 1; t < s + base.len[s]; t++) {
+        if (colour[base.lab[t]] !== c) {
+          constant = false;
+          break;
+        }
+      }
+    }
+    if (!constant) {
+      const p = partitionOf(rankKeys([pa.inv, colour], n));
+      new Refiner(pa.csr).refine(p);
+      return p;
+    }
+  }
+  return base;
 }
 
 function sameColours(x: ArrayLike<number> | undefined, y: ArrayLike<number> | undefined, n: number): boolean {

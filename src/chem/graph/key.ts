@@ -5,8 +5,8 @@
  * but callers that need certainty confirm with isomorphic().
  */
 import type { Structure } from '../types.js';
-import { prepare } from './prepared.js';
-import { cellIndex, partitionOf, rankKeys, Refiner } from './refine.js';
+import { prepare, refinedPartition } from './prepared.js';
+import { cellIndex } from './refine.js';
 
 /** Hill order (C, H, then alphabetical; alphabetical throughout without carbon), implicit H included. */
 export function molecularFormula(s: Structure, atoms?: number[]): string {
@@ -49,9 +49,9 @@ export function constitutionKey(s: Structure): string {
   const n = s.atoms.length;
   const formula = molecularFormula(s);
   if (n === 0) return `${formula}/0000000000000000`;
-  const { inv, csr: g } = prepare(s);
-  const p = partitionOf(rankKeys([inv], n));
-  new Refiner(g).refine(p);
+  const prep = prepare(s);
+  const { inv, csr: g } = prep;
+  const p = refinedPartition(prep);
   const cell = cellIndex(p);
   let h1 = 0x811c9dc5;
   let h2 = 0x01000193 ^ n;

@@ -7,7 +7,7 @@ import { buildGraph, type Graph } from './adjacency.js';
 import { conjugatedRingBonds } from './aromaticity.js';
 import { invariantsWith } from './invariants.js';
 import { csrOf } from './csr.js';
-import type { CsrGraph } from './refine.js';
+import { partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
 import { bridges } from './rings.js';
 
 export interface Prepared {
@@ -16,9 +16,63 @@ export interface Prepared {
   aromatic: readonly boolean[];
   inv: number[];
   csr: CsrGraph;
+  /** The equitable partition refined from the invariants alone (computed on first use; do not modify). */
+  refined?: Partition;
 }
 
+/** The refined partition of the invariants (no extra colours), cached on the prepared structure. */
+export function refinedPartition(p: Prepared): Partition {
+  if (!p.refined) {
+    const part = partitionOf(rankKeys([p.inv], p.inv.length));
+    new Refiner(p.csr).refine(part);
+    p.refined = part;
+  }
+  return p.refined;
+}
+
+/**
+ * Cache per Structure object: the engine asks for key, classes and automorphisms of one structure in a row.
+ * An entry is used only while a checksum over everything the preparation reads still matches, so a structure
+ * changed in place is prepared afresh.
+ */
+const cache = new WeakMap<Structure, { sum: number; aromatic: readonly boolean[] | undefined; prepared: Prepared }[]>();
+
 export function prepare(s: Structure, aromatic?: readonly boolean[]): Prepared {
+  const sum = checksum(s, aromatic);
+  const entries = cache.get(s);
+  const hit = entries?.find((e) => e.aromatic === aromatic && e.sum === sum);
+  if (hit) return hit.prepared;
+  const prepared = prepareFresh(s, aromatic);
+  if (entries) {
+    if (entries.length >= 4) entries.shift();
+    entries.push({ sum, aromatic, prepared });
+  } else cache.set(s, [{ sum, aromatic, prepared }]);
+  return prepared;
+}
+
+function checksum(s: Structure, aromatic: readonly boolean[] | undefined): number {
+  let h = 0x9e3779b9 ^ s.atoms.length;
+  const mix = (x: number) => {
+    h = Math.imul(h ^ x, 0x01000193);
+  };
+  for (const a of s.atoms) {
+    mix(a.atomicNumber);
+    mix(a.charge);
+    mix(a.hCount);
+    mix(a.isotope ?? -1);
+    mix(a.radical);
+  }
+  mix(s.bonds.length);
+  for (const b of s.bonds) {
+    mix(b.a);
+    mix(b.b);
+    mix(b.order);
+  }
+  if (aromatic) for (let k = 0; k < aromatic.length; k++) mix(aromatic[k] ? 1 : 2);
+  return h;
+}
+
+function prepareFresh(s: Structure, aromatic?: readonly boolean[]): Prepared {
   const g = buildGraph(s);
   const bridge = bridges(g, s.bonds.length);
   const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
