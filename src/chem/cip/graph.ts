@@ -122,6 +122,7 @@ export function buildGraph(s: Structure): CipGraph {
  * a bridged biaryl with a 7-membered ring stays axially chiral, as the suite's VS023). Common practice, no source.
  */
 function fixedByRing(g: CipGraph, e: StereoElement): boolean {
+  if (e.kind === 'tetrahedral' && invertibleNitrogen(g, e.centre, e.ligands)) return true;
   if (e.kind === 'double-bond') {
     const [u, v] = e.ends;
     return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
@@ -156,6 +157,19 @@ function expandedValence(s: Structure, a: number, orders: number[]): boolean {
     default:
       return false;
   }
+}
+
+/**
+ * A neutral three-coordinate nitrogen inverts fast, so it is no stereocentre unless a ring system locks it: all
+ * three bonds in rings (bridgehead, as in the suite's VS128 and Tröger's base VS132) or a three-membered ring
+ * (aziridine). Common practice, no source; readers of 3D files give every such nitrogen a configuration.
+ */
+function invertibleNitrogen(g: CipGraph, centre: number, ligands: number[]): boolean {
+  const at = g.s.atoms[centre];
+  if (at.atomicNumber !== 7 || at.charge !== 0 || !ligands.includes(-2)) return false;
+  const nb = g.nbr[centre];
+  if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
+  return !(nb.length === 3 && nb.every((b) => ringSizeThrough(g, centre, b, 64) > 0));
 }
 
 /** Size of the smallest ring through the bond a-b, or 0 when there is none of at most `max` atoms. */
