@@ -134,16 +134,18 @@ function allene(
   const nb = g.nbr[c]!;
   const ends: number[] = [];
   const ligs: number[] = [];
+  const lengths: number[] = [];
   for (const first of nb) {
     const [t, p, doubles] = walkCumulene(g, order, hCount, c, first);
     if (isCumuleneInner(g, order, hCount, t)) return null;
-    void doubles;
+    lengths.push(doubles);
     const subs = ligandsOf(g, hCount, t).filter((x) => x !== p);
     if (subs.length !== 2) return null;
     ends.push(t);
     ligs.push(...subs);
   }
-  if (ends[0] === ends[1]) return null;
+  // the mark belongs on the central atom of an even cumulene: as many double bonds on each side
+  if (ends[0] === ends[1] || lengths[0] !== lengths[1]) return null;
   return {
     kind: 'axial',
     subtype: 'allene',
