@@ -64,7 +64,9 @@ function auditOne(
   const findings: Finding[] = schemaFindings(loaded, config);
   applyWaivers(findings, loaded);
   const passed: PassedCheck[] = [];
-  for (const check of checks) {
+  // A file that could not be parsed at all (syntax error, unreadable) has only its record-schema findings.
+  const unparsed = loaded.record === null && loaded.sources === undefined && loaded.problems.length > 0;
+  for (const check of unparsed ? [] : checks) {
     if (configuredSeverity(config, check.id) === 'off') continue;
     const ctx: CheckContext = {
       loaded,

@@ -60,7 +60,8 @@ export function loadRecordFile(realRoot: string, abs: string): LoadedRecord {
     problems: parsed.problems,
     origin: { kind: 'file' },
   };
-  loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  // A file that did not parse has nothing to read structures from; the audit then runs no check on it.
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
   return loaded;
 }
 

@@ -75,6 +75,19 @@ describe('runAudit', () => {
     expect(result.records[0]!.declared.form).toBeNull();
   });
 
+  it('a file that does not parse gets only its record-schema finding, no check runs on it', async () => {
+    reg = tmpRegistry({
+      'compounds/a.yml': 'id: LX-1\nstereo:\n  form: [achiral\n',
+      'compounds/b.yml': '- a list\n',
+    });
+    const result = await runAudit({ root: reg.root, checks: CHECKS, engine: fakeEngine() });
+    for (const r of result.records) {
+      expect(r.findings.map((f) => f.check)).toEqual(['record-schema']);
+      expect(r.passed).toEqual([]);
+    }
+    expect(result.records.map((r) => r.findings[0]!.messageId)).toEqual(['yaml-syntax', 'wrong-type']);
+  });
+
   it('complete waivers accept findings of their check; incomplete ones do not', async () => {
     const waivers = (reason: string) =>
       `waivers:\n  - check: fake-form\n    reason: "${reason}"\n    approved_by: Dr. A. Larkspur\n`;
