@@ -80,12 +80,13 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   const { p, group } = a;
   const s = p.structure;
   const labels = new Map<string, CipLabel>();
-  for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
+  if (s.stereo.length > 0) for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
 
   const units = unitFacts(a, labels);
   const stereoisomers = countStereoisomers(group, p.units.length);
   const chiral = a.chirality.chiral;
   const meso = chiral === null ? null : chiral === false && stereoisomers.chiral > 0;
+  const components = componentFacts(a);
   const facts: StructureFacts = {
     stereocenters: units
       .filter((u) => u.kind === 'tetrahedral')
@@ -101,9 +102,9 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
     mirror: mirrorFacts(a),
     enhanced: enhancedFacts(a),
     invertibleNitrogens: p.invertibleNitrogens.map((i) => ({ atom: s.atoms[i].inputNumber, drawnWithStereo: true })),
-    components: componentFacts(a),
+    components,
     constitutionKey: constitutionKey(s),
-    formula: molecularFormula(s),
+    formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice(),
   };
   if (p.invertibleNitrogens.length > 0 && units.length === 0) {
@@ -191,11 +192,21 @@ function componentFacts(a: Analysis): ComponentFacts[] {
   const s = a.p.structure;
   const comps = a.p.components;
   const parent = parentComponent(s, comps);
-  return comps.map((c, k) => ({
-    index: k,
-    formula: molecularFormula(s, c),
-    heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
-    role: k === parent ? 'parent' : 'other',
-    smiles: writeSmiles(extractAtoms(s, c)),
-  }));
+  const single = comps.length === 1;
+  return comps.map((c, k) => {
+    const f = {
+      index: k,
+      formula: single ? molecularFormula(s) : molecularFormula(s, c),
+      heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
+      role: k === parent ? 'parent' : 'other',
+    } as Omit<ComponentFacts, 'smiles'> as ComponentFacts;
+    // Written on first read (JSON output, a report): most consumers never look at it, and writing SMILES is
+    // a large share of describe()'s time. Enumerable, so JSON and structured clone see a plain field.
+    let smiles: string | null = null;
+    Object.defineProperty(f, 'smiles', {
+      get: () => (smiles ??= writeSmiles(single ? s : extractAtoms(s, c))),
+      enumerable: true,
+    });
+    return f;
+  });
 }

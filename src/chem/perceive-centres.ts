@@ -17,7 +17,7 @@
  *
  * Excluded everywhere: an atom carrying a terminal chalcogen double bond together with a terminal single-bonded
  * chalcogen of the same element that bears H or a negative charge (R–S(=O)–O−, R2P(=O)OH): the two are one
- * resonance / tautomer pair, so the "two ligands" are the same. Sources: the element rules are common practice
+ * resonance / tautomer pair, so the "two ligands" are the same — unless isotopes tell them apart. Sources: the element rules are common practice
  * (no single source); nitrogen inversion barriers: Eliel & Wilen, Stereochemistry of Organic Compounds (1994),
  * ch. 8 (from memory).
  */
@@ -123,18 +123,20 @@ function resonancePair(s: Structure, g: Graph, i: number): boolean {
     if (g.nbrs[nb[k]].length !== 1 || (x.atomicNumber !== 8 && x.atomicNumber !== 16 && x.atomicNumber !== 34))
       continue;
     const order = s.bonds[g.nbrBonds[i][k]].order;
-    if (order === 2) doubleEl.add(x.atomicNumber);
-    else if (order === 1 && (x.hCount > 0 || x.charge < 0)) singleEl.add(x.atomicNumber);
+    const key = x.atomicNumber * 1000 + (x.isotope ?? 0); // isotopes tell the two apart (P-93.2.4, 17O/18O)
+    if (order === 2) doubleEl.add(key);
+    else if (order === 1 && (x.hCount > 0 || x.charge < 0)) singleEl.add(key);
   }
   for (const e of doubleEl) if (singleEl.has(e)) return true;
   // Charge-separated form: S+/P+ with a terminal O− and another terminal O− / OH of the same element.
   if (s.atoms[i].charge > 0) {
-    let count = 0;
+    const seen = new Set<number>();
     for (let k = 0; k < nb.length; k++) {
       const x = s.atoms[nb[k]];
-      if (g.nbrs[nb[k]].length === 1 && x.atomicNumber === 8 && (x.charge < 0 || x.hCount > 0)) count++;
+      if (g.nbrs[nb[k]].length !== 1 || x.atomicNumber !== 8 || (x.charge >= 0 && x.hCount === 0)) continue;
+      if (seen.has(x.isotope ?? 0)) return true;
+      seen.add(x.isotope ?? 0);
     }
-    if (count >= 2) return true;
   }
   return false;
 }

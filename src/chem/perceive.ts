@@ -16,6 +16,7 @@ import { bondCandidates } from './perceive-bonds.js';
 import { tetrahedralCandidate } from './perceive-centres.js';
 import { hToken, lpToken, type PerceivedUnit } from './perceive-units.js';
 import { applyInputStereo } from './perceive-input.js';
+import { survivesSymmetry, swapsTerminalPair } from './perceive-rescue.js';
 import { bridgeCouplings, type Coupling } from './perceive-bridges.js';
 
 export interface Perception {
@@ -23,7 +24,7 @@ export interface Perception {
   graph: Graph;
   rings: RingInfo;
   aromaticBond: boolean[];
-  /** Constitutional equivalence class per atom. */
+  /** Constitutional equivalence class per atom (computed on first use). */
   classes: Int32Array;
   units: PerceivedUnit[];
   /** atom -> index of the unit it is a centre / end of, or -1 */
@@ -47,8 +48,11 @@ export function perceive(s: Structure): Perception {
   const graph = buildGraph(s);
   const rings = ringInfo(s, graph);
   const aromaticBond = aromaticBonds(s, rings, graph);
-  const classes = equivalenceClasses(s, { aromatic: aromaticBond });
-  const tokenClass = (t: number): number => (t < n ? classes[t] : t < 2 * n ? -1 : -2);
+  // Default (Kekulé-independent) bond coding, the same the automorphism search uses, so classes are a valid
+  // colouring. Computed only when some atom or bond is a candidate (a third of real structures have none).
+  let classCache: Int32Array | null = null;
+  const classesOf = (): Int32Array => (classCache ??= equivalenceClasses(s));
+  const tokenClass = (t: number): number => (t < n ? classesOf()[t] : t < 2 * n ? -1 : -2);
 
   const drafts: Draft[] = [];
   const invertibleAll = new Set<number>();
@@ -78,7 +82,20 @@ export function perceive(s: Structure): Perception {
       defined: false, bit: 0, equivalentPair: false, pairs: [] });
   }
 
-  const kept = fixedPoint(drafts, graph, n);
+  let kept = fixedPoint(drafts, graph, n);
+  // Second look at what the branch rule dropped (perceive-rescue.ts); rescued units may support others.
+  const tried = new Set<Draft>();
+  for (let round = 0; round < 4 && kept.length < drafts.length; round++) {
+    const keptSet = new Set(kept);
+    const rescued = drafts.filter((d) => {
+      if (keptSet.has(d) || tried.has(d)) return false;
+      tried.add(d);
+      return !swapsTerminalPair(d, graph, classesOf(), n) && survivesSymmetry(s, d, classesOf());
+    });
+    if (rescued.length === 0) break;
+    for (const d of rescued) d.pairs = [];
+    kept = fixedPoint(drafts, graph, n);
+  }
   kept.sort((a, b) => Math.min(...a.atoms) - Math.min(...b.atoms));
   const units: PerceivedUnit[] = kept.map(({ pairs: _p, ...u }) => u);
   const unitOfAtom = new Int32Array(n).fill(-1);
@@ -103,13 +120,16 @@ export function perceive(s: Structure): Perception {
       );
     }
   }
-  return { structure: s, graph, rings, aromaticBond, classes, units, unitOfAtom, invertibleNitrogens, couplings,
-    components, componentOfAtom, remarks };
+  const result = { structure: s, graph, rings, aromaticBond, units, unitOfAtom, invertibleNitrogens, couplings,
+    components, componentOfAtom, remarks } as Omit<Perception, 'classes'> as Perception;
+  Object.defineProperty(result, 'classes', { get: classesOf, enumerable: true });
+  return result;
 }
 
 /**
- * Positions of equivalent ligand pairs, or null when three or more ligands are equivalent (never stereogenic).
- * For bond units the two ends are judged separately (tokens 0,1 on ends[0]; 2,3 on ends[1]).
+ * One entry per group of equivalent ligands (two, three or four alike), naming a ligand of the group; null when
+ * the unit can never be stereogenic (two or more implicit hydrogens cannot occur here). For bond units the two
+ * ends are judged separately (tokens 0,1 on ends[0]; 2,3 on ends[1]).
  */
 function equalPairs(
   tokens: number[],
@@ -126,8 +146,7 @@ function equalPairs(
   for (let i = 0; i < 4; i++) {
     let same = 0;
     for (let j = 0; j < 4; j++) if (c[j] === c[i]) same++;
-    if (same >= 3) return null;
-    if (same === 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens[i] });
+    if (same >= 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens[i] });
   }
   return out;
 }

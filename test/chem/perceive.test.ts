@@ -13,7 +13,9 @@ import { smiles } from './stereo-helpers.js';
 function units(smi: string): string[] {
   const s = normalize(smiles(smi)).structure;
   const p = perceive(s);
-  return p.units.map((u) => `${u.kind}:${u.atoms.map((a) => s.atoms[a].inputNumber).join('-')}:${u.defined ? 'def' : 'undef'}`);
+  return p.units.map(
+    (u) => `${u.kind}:${u.atoms.map((a) => s.atoms[a].inputNumber).join('-')}:${u.defined ? 'def' : 'undef'}`,
+  );
 }
 
 suite('tetrahedral centres', () => {
@@ -42,7 +44,7 @@ suite('tetrahedral centres', () => {
     expect(p.invertibleNitrogens.map((i) => s.atoms[i].inputNumber)).toEqual([2]);
     expect(p.remarks.join(' ')).toMatch(/inverts/);
   });
-  it('aziridine N and the bridgehead N of Tröger\'s base are centres (slow inversion; from memory)', () => {
+  it("aziridine N and the bridgehead N of Tröger's base are centres (slow inversion; from memory)", () => {
     expect(units('CN1CC1C')).toEqual(['tetrahedral:2:undef', 'tetrahedral:4:undef']);
     // Tröger's base: two bridgehead N, the whole molecule has one pair of enantiomers
     const troger = 'Cc1ccc2c(c1)CN1Cc3cc(C)ccc3N(C2)C1';
@@ -79,7 +81,11 @@ suite('double bonds and cumulenes', () => {
 
 suite('pseudoasymmetric and para units (greatest fixed point)', () => {
   it('C3 of 2,3,4-trihydroxyglutaric acid is kept: its equivalent branches hold C2 and C4 (P-93.5.1.3)', () => {
-    expect(units('OC(=O)C(O)C(O)C(O)C(O)=O')).toEqual(['tetrahedral:4:undef', 'tetrahedral:6:undef', 'tetrahedral:8:undef']);
+    expect(units('OC(=O)C(O)C(O)C(O)C(O)=O')).toEqual([
+      'tetrahedral:4:undef',
+      'tetrahedral:6:undef',
+      'tetrahedral:8:undef',
+    ]);
   });
   it('C1 and C4 of 1,4-dimethylcyclohexane support each other; methylcyclohexane has none', () => {
     expect(units('CC1CCC(C)CC1')).toEqual(['tetrahedral:2:undef', 'tetrahedral:5:undef']);
@@ -87,6 +93,20 @@ suite('pseudoasymmetric and para units (greatest fixed point)', () => {
   });
   it('3-methylpentane C3 has equal ethyl branches with no unit: not a centre', () => {
     expect(units('CCC(C)CC')).toEqual([]);
+  });
+  it('2,6-dichlorospiro[3.3]heptane: the spiro centre with four equivalent ring ligands is kept (VS298, Hanson et al. 2018)', () => {
+    expect(units('Cl[C@H]1C[C@]2(C1)C[C@H](C2)Cl')).toEqual(['tetrahedral:2:def', 'tetrahedral:4:def', 'tetrahedral:7:def']);
+  });
+  it('a spiro centre whose equivalent rings are exchanged only by an even permutation is kept (VS281, rule 6)', () => {
+    expect(units('C1=C2[C@@]34C(=C1)CCCCC3=CC=C4CCCC2')).toEqual(['tetrahedral:3:def']);
+  });
+  it('isotopes tell resonance partners apart: [18O-]P(=O)(OC)[17O-] is a centre (VS177, P-93.2.4)', () => {
+    expect(units('[18O-][P@@](=O)(OC)[17O-]')).toEqual(['tetrahedral:2:def']);
+    expect(units('[O-]P(=O)(OC)CC')).toEqual([]);
+  });
+  it('tert-butyl and triethylmethyl carbons are never centres', () => {
+    expect(units('CC(C)(C)O')).toEqual([]);
+    expect(units('CCC(CC)(CC)C')).toEqual([]);
   });
   it('an allene ending in a 4-substituted cyclohexylidene (CIP validation suite VS231, Hanson et al. 2018)', () => {
     expect(units('CC=[C@]=C1CC[C@H](CC1)CC')).toEqual(['allene:2-4:def', 'tetrahedral:7:def']);
