@@ -14894,7 +14894,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     return { kind: "tetrahedral", centre: c, ligands, winding: windingOf(vol) };
   }
   function reading(flat, w, z, addFourth) {
-    for (const plainZ of [0, -0.5 * z]) {
+    for (const plainZ of [0, -PLAIN_LEAN * z]) {
       const pts = flat.map((u, j) => [u[0], u[1], j === w ? z : plainZ]);
       if (addFourth) {
         const sum = [0, 0, 0];
@@ -15030,14 +15030,15 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
 function sub2(a, b) {
   return [a[0] - b[0], a[1] - b[1]];
 }
-var MIN_VOLUME, MIN_SIDE;
+var MIN_VOLUME, PLAIN_LEAN, MIN_SIDE;
 var init_stereo_2d = __esm({
   "src/chem/read/stereo-2d.ts"() {
     "use strict";
     init_types();
     init_molfile_graph();
     init_molfile_geometry();
-    MIN_VOLUME = 0.2;
+    MIN_VOLUME = 0.01;
+    PLAIN_LEAN = 0.3;
     MIN_SIDE = 0.1;
   }
 });
@@ -15194,7 +15195,7 @@ function finishMolecule(raw2) {
     let sum = 0;
     for (const k of adj.bnd[i]) sum += bonds[k].order;
     const v = raw2.valences[i];
-    if (v !== null && v !== void 0) atom.hCount = Math.max(0, v - sum - atom.radical);
+    if (v !== null && v !== void 0) atom.hCount = Math.max(0, v - sum);
     else atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
   }
   let dimension = 0;
@@ -15264,15 +15265,35 @@ function intField(line, start, end) {
   return digits === 0 ? NaN : sign * value;
 }
 function floatField(line, start, end) {
-  const s = line.slice(start, end);
-  let blank2 = true;
-  for (let i = 0; i < s.length; i++) {
-    if (s.charCodeAt(i) !== 32) {
-      blank2 = false;
-      break;
-    }
+  if (end > line.length) end = line.length;
+  let i = start;
+  while (i < end && line.charCodeAt(i) === 32) i++;
+  let j = end;
+  while (j > i && line.charCodeAt(j - 1) === 32) j--;
+  if (i >= j) return NaN;
+  let k = i;
+  let neg = false;
+  const c0 = line.charCodeAt(k);
+  if (c0 === 45 || c0 === 43) {
+    neg = c0 === 45;
+    k++;
   }
-  return blank2 ? NaN : Number(s);
+  let mant = 0;
+  let scale = 1;
+  let digits = 0;
+  let dot2 = false;
+  for (; k < j; k++) {
+    const c = line.charCodeAt(k);
+    if (c >= 48 && c <= 57) {
+      mant = mant * 10 + (c - 48);
+      if (dot2) scale *= 10;
+      digits++;
+    } else if (c === 46 && !dot2) dot2 = true;
+    else return Number(line.slice(i, j));
+  }
+  if (digits === 0 || digits > 15) return Number(line.slice(i, j));
+  const v = mant / scale;
+  return neg ? -v : v;
 }
 function tokens(line) {
   const out = [];
@@ -15912,12 +15933,17 @@ function parseCxExtension(s, start, atomCount) {
     if (type !== null) {
       const atoms = [];
       for (; ; ) {
-        if (!isDigit(s.charCodeAt(j))) return fail3("cxsmiles-bad-group", "expected an atom index in the stereo group", j);
+        if (!isDigit(s.charCodeAt(j)))
+          return fail3("cxsmiles-bad-group", "expected an atom index in the stereo group", j);
         let v = 0;
         const at = j;
         while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
         if (v >= atomCount) {
-          return fail3("cxsmiles-bad-group", `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at);
+          return fail3(
+            "cxsmiles-bad-group",
+            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
+            at
+          );
         }
         atoms.push(v);
         const d = s.charCodeAt(j);
@@ -16011,9 +16037,33 @@ function kekulize(inp) {
       match[best] = v;
     }
   }
-  for (const v of byDegree) {
-    if (match[v] !== -1) continue;
-    if (!augment(v, adj, match)) return { ok: false, atom: globalOf[v] };
+  const comp = new Int32Array(m).fill(-1);
+  const pos = new Int32Array(m);
+  for (let s0 = 0; s0 < m; s0++) {
+    if (comp[s0] !== -1) continue;
+    const members = [s0];
+    comp[s0] = s0;
+    let exposed = false;
+    for (let h = 0; h < members.length; h++) {
+      const u = members[h];
+      if (match[u] === -1) exposed = true;
+      for (const w of adj[u]) {
+        if (comp[w] === -1) {
+          comp[w] = s0;
+          members.push(w);
+        }
+      }
+    }
+    if (!exposed) continue;
+    members.forEach((u, k) => pos[u] = k);
+    const subAdj = members.map((u) => adj[u].map((w) => pos[w]));
+    const subMatch = new Int32Array(members.length);
+    members.forEach((u, k) => subMatch[k] = match[u] === -1 ? -1 : pos[match[u]]);
+    for (let k = 0; k < members.length; k++) {
+      if (subMatch[k] !== -1) continue;
+      if (!augment(k, subAdj, subMatch)) return { ok: false, atom: globalOf[members[k]] };
+    }
+    members.forEach((u, k) => match[u] = members[subMatch[k]]);
   }
   const doubleBonds2 = [];
   for (let u = 0; u < m; u++) {
@@ -16113,7 +16163,17 @@ function isLower(c) {
   return c >= 97 && c <= 122;
 }
 function raw(element, z, aromatic, offset) {
-  return { element, atomicNumber: z, charge: 0, isotope: null, hCount: -1, aromatic, mapNumber: null, chirality: null, offset };
+  return {
+    element,
+    atomicNumber: z,
+    charge: 0,
+    isotope: null,
+    hCount: -1,
+    aromatic,
+    mapNumber: null,
+    chirality: null,
+    offset
+  };
 }
 function readOrganicAtom(s, i) {
   const c = s.charCodeAt(i);
@@ -16195,7 +16255,13 @@ function readBracketAtom(s, start) {
       element = s[i];
       const zz = atomicNumberOf(element);
       if (zz === void 0 || two !== null) {
-        return { error: { code: "smiles-unknown-element", message: `unknown element '${two ?? element}'`, offset: i } };
+        return {
+          error: {
+            code: "smiles-unknown-element",
+            message: `unknown element '${two ?? element}'`,
+            offset: i
+          }
+        };
       }
       z = zz;
       i++;
@@ -16209,14 +16275,26 @@ function readBracketAtom(s, start) {
       element = s[i].toUpperCase();
       i++;
     } else {
-      return { error: { code: "smiles-unknown-element", message: `unknown aromatic element '${s[i]}'`, offset: i } };
+      return {
+        error: { code: "smiles-unknown-element", message: `unknown aromatic element '${s[i]}'`, offset: i }
+      };
     }
     aromatic = true;
     z = atomicNumberOf(element);
   } else {
     return bad(i < n ? i : start, "bracket atom without an element symbol");
   }
-  const atom = { element, atomicNumber: z, charge: 0, isotope, hCount: 0, aromatic, mapNumber: null, chirality: null, offset: start };
+  const atom = {
+    element,
+    atomicNumber: z,
+    charge: 0,
+    isotope,
+    hCount: 0,
+    aromatic,
+    mapNumber: null,
+    chirality: null,
+    offset: start
+  };
   if (s.charCodeAt(i) === 64) {
     i++;
     if (s.charCodeAt(i) === 64) {
@@ -16225,7 +16303,8 @@ function readBracketAtom(s, start) {
     } else if (isUpper(s.charCodeAt(i)) && isUpper(s.charCodeAt(i + 1)) && s.charCodeAt(i) !== 72) {
       const cls = s.substring(i, i + 2);
       const num = readInt(s, i + 2);
-      if (!num || !["TH", "AL", "SP", "TB", "OH"].includes(cls)) return bad(i, `unknown chirality class '@${cls}'`);
+      if (!num || !["TH", "AL", "SP", "TB", "OH"].includes(cls))
+        return bad(i, `unknown chirality class '@${cls}'`);
       if (cls === "TH" || cls === "AL") {
         if (num[0] !== 1 && num[0] !== 2) return bad(i, `chirality '@${cls}${num[0]}' must be 1 or 2`);
         atom.chirality = num[0] === 1 ? "@" : "@@";
@@ -16331,7 +16410,15 @@ function parseSmilesGraph(s, start = 0) {
   const n = s.length;
   const addBond = (a, b, p, offset) => {
     const arom = p ? p.aromatic : atoms[a].aromatic && atoms[b].aromatic;
-    bonds.push({ a, b, order: p ? p.order : 1, aromatic: arom, explicit: p !== null, dir: p ? p.dir : 0, offset });
+    bonds.push({
+      a,
+      b,
+      order: p ? p.order : 1,
+      aromatic: arom,
+      explicit: p !== null,
+      dir: p ? p.dir : 0,
+      offset
+    });
     return bonds.length - 1;
   };
   while (i < n) {
@@ -16373,7 +16460,11 @@ function parseSmilesGraph(s, start = 0) {
       pending = bs;
       i++;
       if (c === 92 && s.charCodeAt(i) === 92) {
-        warnings.push({ code: "smiles-doubled-backslash", message: "'\\\\' read as a single '\\'", offset: i - 1 });
+        warnings.push({
+          code: "smiles-doubled-backslash",
+          message: "'\\\\' read as a single '\\'",
+          offset: i - 1
+        });
         i++;
       }
       continue;
@@ -16390,7 +16481,8 @@ function parseSmilesGraph(s, start = 0) {
       const top = branchStack.pop();
       if (!top) return err("smiles-unmatched-parenthesis", "')' without a matching '('", i);
       if (pending) return err("smiles-dangling-bond", "bond symbol before ')'", pending.offset);
-      if (atoms.length === top.atomsBefore) return err("smiles-empty-branch", "branch with no atom in it", top.offset);
+      if (atoms.length === top.atomsBefore)
+        return err("smiles-empty-branch", "branch with no atom in it", top.offset);
       prev = top.atom;
       i++;
       continue;
@@ -16407,8 +16499,10 @@ function parseSmilesGraph(s, start = 0) {
         } else if (s.charCodeAt(i + 1) === 40) {
           let j = i + 2;
           num = 0;
-          while (j < n && s.charCodeAt(j) >= 48 && s.charCodeAt(j) <= 57 && j - i < 8) num = num * 10 + s.charCodeAt(j++) - 48;
-          if (j === i + 2 || s.charCodeAt(j) !== 41) return err("smiles-bad-ring-number", "'%(' must be followed by digits and ')'", i);
+          while (j < n && s.charCodeAt(j) >= 48 && s.charCodeAt(j) <= 57 && j - i < 8)
+            num = num * 10 + s.charCodeAt(j++) - 48;
+          if (j === i + 2 || s.charCodeAt(j) !== 41)
+            return err("smiles-bad-ring-number", "'%(' must be followed by digits and ')'", i);
           i = j + 1;
         } else {
           return err("smiles-bad-ring-number", "'%' must be followed by two digits", i);
@@ -16428,17 +16522,27 @@ function parseSmilesGraph(s, start = 0) {
         rings[num] = void 0;
         openRings--;
         const a = open.atom;
-        if (a === prev) return err("smiles-ring-bond-to-self", `ring closure ${num} bonds an atom to itself`, at);
-        if (nbr[prev].includes(a)) return err("smiles-duplicate-bond", `ring closure ${num} repeats an existing bond`, at);
+        if (a === prev)
+          return err("smiles-ring-bond-to-self", `ring closure ${num} bonds an atom to itself`, at);
+        if (nbr[prev].includes(a))
+          return err("smiles-duplicate-bond", `ring closure ${num} repeats an existing bond`, at);
         let p = open.bond;
         const q = pending;
         if (q) {
           if (p) {
             if (p.order !== q.order || p.aromatic !== q.aromatic) {
-              return err("smiles-conflicting-ring-bond", `ring closure ${num} has different bond symbols at its two ends`, at);
+              return err(
+                "smiles-conflicting-ring-bond",
+                `ring closure ${num} has different bond symbols at its two ends`,
+                at
+              );
             }
             if (p.dir !== 0 && q.dir !== 0 && p.dir !== -q.dir) {
-              return err("smiles-conflicting-ring-bond", `ring closure ${num} has contradicting '/' '\\' marks`, at);
+              return err(
+                "smiles-conflicting-ring-bond",
+                `ring closure ${num} has contradicting '/' '\\' marks`,
+                at
+              );
             }
             if (p.dir === 0 && q.dir !== 0) p = { ...p, dir: -q.dir };
           } else {
@@ -16469,7 +16573,11 @@ function parseSmilesGraph(s, start = 0) {
   if (pending) return err("smiles-dangling-bond", "bond symbol at the end of the SMILES", pending.offset);
   if (prev < 0) return err("smiles-empty-component", "'.' at the end of the SMILES", end - 1);
   if (branchStack.length > 0) {
-    return err("smiles-unmatched-parenthesis", "'(' is never closed", branchStack[branchStack.length - 1].offset);
+    return err(
+      "smiles-unmatched-parenthesis",
+      "'(' is never closed",
+      branchStack[branchStack.length - 1].offset
+    );
   }
   if (openRings > 0) {
     let first;
@@ -16525,24 +16633,42 @@ function buildStereo(g, order, hCount, warnings) {
     const a = g.atoms[i];
     if (a.chirality === null) continue;
     if (a.chirality === "other") {
-      warnings.push(warn("smiles-stereo-unsupported", "square-planar, trigonal-bipyramidal and octahedral marks are ignored", a.offset));
+      warnings.push(
+        warn(
+          "smiles-stereo-unsupported",
+          "square-planar, trigonal-bipyramidal and octahedral marks are ignored",
+          a.offset
+        )
+      );
       continue;
     }
     if (isCumuleneInner(g, order, hCount, i)) {
       const ax = allene(g, order, hCount, i, a.chirality);
       if (ax) out.push(ax);
-      else warnings.push(warn("smiles-stereo-ignored", "allene mark ignored: each end needs two substituents", a.offset));
+      else
+        warnings.push(
+          warn("smiles-stereo-ignored", "allene mark ignored: each end needs two substituents", a.offset)
+        );
       continue;
     }
     const lig = ligandsOf(g, hCount, i);
     if (lig.length === 3) lig.splice(1, 0, LONE_PAIR);
     if (lig.length !== 4) {
       warnings.push(
-        warn("smiles-stereo-ignored", `chirality mark ignored: the atom has ${lig.length} neighbours, a tetrahedral centre needs 3 or 4`, a.offset)
+        warn(
+          "smiles-stereo-ignored",
+          `chirality mark ignored: the atom has ${lig.length} neighbours, a tetrahedral centre needs 3 or 4`,
+          a.offset
+        )
       );
       continue;
     }
-    const t = { kind: "tetrahedral", centre: i, ligands: lig, winding: a.chirality };
+    const t = {
+      kind: "tetrahedral",
+      centre: i,
+      ligands: lig,
+      winding: a.chirality
+    };
     out.push(t);
   }
   doubleBonds(g, order, hCount, warnings, out);
@@ -16552,16 +16678,17 @@ function allene(g, order, hCount, c, winding) {
   const nb = g.nbr[c];
   const ends = [];
   const ligs = [];
+  const lengths = [];
   for (const first of nb) {
     const [t, p, doubles] = walkCumulene(g, order, hCount, c, first);
     if (isCumuleneInner(g, order, hCount, t)) return null;
-    void doubles;
+    lengths.push(doubles);
     const subs = ligandsOf(g, hCount, t).filter((x) => x !== p);
     if (subs.length !== 2) return null;
     ends.push(t);
     ligs.push(...subs);
   }
-  if (ends[0] === ends[1]) return null;
+  if (ends[0] === ends[1] || lengths[0] !== lengths[1]) return null;
   return {
     kind: "axial",
     subtype: "allene",
@@ -16597,7 +16724,10 @@ function doubleBonds(g, order, hCount, warnings, out) {
     const [t1, c1, d1] = walkCumulene(g, order, hCount, b.a, b.b);
     const doubles = d0 + d1 - 1;
     if (doubles > 1) {
-      for (const [s, e2] of [[b.b, b.a], [b.a, b.b]]) {
+      for (const [s, e2] of [
+        [b.b, b.a],
+        [b.a, b.b]
+      ]) {
         let prev = s;
         let cur = e2;
         while (isCumuleneInner(g, order, hCount, cur)) {
@@ -16618,7 +16748,11 @@ function doubleBonds(g, order, hCount, warnings, out) {
     if (m0.length === 0 || m1.length === 0) continue;
     if (m0.length === 2 && m0[0].up === m0[1].up || m1.length === 2 && m1[0].up === m1[1].up) {
       warnings.push(
-        warn("smiles-conflicting-bond-direction", "two '/' '\\' marks put both substituents on the same side; double-bond configuration ignored", b.offset)
+        warn(
+          "smiles-conflicting-bond-direction",
+          "two '/' '\\' marks put both substituents on the same side; double-bond configuration ignored",
+          b.offset
+        )
       );
       continue;
     }
@@ -16649,15 +16783,27 @@ function parseSmiles(text) {
   try {
     return parse(text);
   } catch (e) {
-    return failure("smiles-internal-error", `internal error while reading SMILES: ${e.message}`, 0);
+    return failure(
+      "smiles-internal-error",
+      `internal error while reading SMILES: ${e.message}`,
+      0
+    );
   }
 }
 function parse(text) {
   let start = 0;
   while (start < text.length && isSpace2(text.charCodeAt(start))) start++;
   const g = parseSmilesGraph(text, start);
-  if ("error" in g) return { ok: false, error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } } };
-  const warnings = g.warnings.map((w) => ({ code: w.code, message: w.message, at: { offset: w.offset } }));
+  if ("error" in g)
+    return {
+      ok: false,
+      error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } }
+    };
+  const warnings = g.warnings.map((w) => ({
+    code: w.code,
+    message: w.message,
+    at: { offset: w.offset }
+  }));
   const n = g.atoms.length;
   const m = g.bonds.length;
   let i = g.end;
@@ -16762,7 +16908,11 @@ function kekulizeGraph(g, order) {
     }
     if (v - sum >= 1) {
       if (!hasAromaticBond) {
-        return failure("smiles-kekulize", `cannot kekulize: aromatic atom ${ra.element} (atom ${a + 1}) is not in a ring`, ra.offset);
+        return failure(
+          "smiles-kekulize",
+          `cannot kekulize: aromatic atom ${ra.element} (atom ${a + 1}) is not in a ring`,
+          ra.offset
+        );
       }
       needsDouble[a] = 1;
       any = true;
@@ -16775,7 +16925,13 @@ function kekulizeGraph(g, order) {
     bondA[k] = g.bonds[k].a;
     bondB[k] = g.bonds[k].b;
   }
-  const res = kekulize({ atomCount: n, bondA, bondB, aromaticBonds: aromaticBonds2, needsDouble: Array.from(needsDouble, (x) => x === 1) });
+  const res = kekulize({
+    atomCount: n,
+    bondA,
+    bondB,
+    aromaticBonds: aromaticBonds2,
+    needsDouble: Array.from(needsDouble, (x) => x === 1)
+  });
   if (!res.ok) {
     const ra = g.atoms[res.atom];
     return failure(
@@ -16943,6 +17099,133 @@ var init_read = __esm({
   }
 });
 
+// src/chem/write/smiles-directions.ts
+function assignBondDirections(s, em) {
+  const dbs = s.stereo.filter((x) => x.kind === "double-bond");
+  if (dbs.length === 0) return /* @__PURE__ */ new Map();
+  const n = s.atoms.length;
+  const first = new Int32Array(s.bonds.length).fill(-1);
+  for (let u = 0; u < n; u++) {
+    if (em.parentBond[u] >= 0) first[em.parentBond[u]] = em.parent[u];
+    for (const k of em.ringOpen[u]) first[k] = u;
+  }
+  const singles = Array.from({ length: n }, () => []);
+  const unspecifiedDouble = new Uint8Array(n);
+  const specified = new Set(
+    dbs.map((d) => `${Math.min(d.ends[0], d.ends[1])}-${Math.max(d.ends[0], d.ends[1])}`)
+  );
+  s.bonds.forEach((b, k) => {
+    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) return;
+    if (b.order === 1) {
+      singles[b.a].push({ to: b.b, bond: k });
+      singles[b.b].push({ to: b.a, bond: k });
+    } else if (b.order === 2 && !b.aromatic && !specified.has(`${Math.min(b.a, b.b)}-${Math.max(b.a, b.b)}`)) {
+      unspecifiedDouble[b.a] = 1;
+      unspecifiedDouble[b.b] = 1;
+    }
+  });
+  const forest = new ParityForest();
+  const sigma = (k, t) => first[k] === t ? 1 : -1;
+  const options = (d, e) => {
+    const t = d.ends[e];
+    const ref = d.refs[e];
+    const subs = singles[t].filter((o) => o.to !== d.ends[1 - e]);
+    const out = [];
+    for (const o of subs) {
+      if (o.to === ref) out.push({ bond: o.bond, factor: 1 });
+      else if (ref === IMPLICIT_H || subs.some((x) => x.to === ref)) out.push({ bond: o.bond, factor: -1 });
+    }
+    const score = (x) => {
+      if (forest.has(x.bond)) return 0;
+      const b = s.bonds[x.bond];
+      return unspecifiedDouble[b.a === t ? b.b : b.a] ? 2 : 1;
+    };
+    return out.sort((x, y) => score(x) - score(y));
+  };
+  for (const d of dbs) {
+    const rel = d.relation === "cis" ? 1 : -1;
+    let done = false;
+    for (const o0 of options(d, 0)) {
+      for (const o1 of options(d, 1)) {
+        if (o0.bond === o1.bond) continue;
+        const want = rel * o0.factor * o1.factor * sigma(o0.bond, d.ends[0]) * sigma(o1.bond, d.ends[1]);
+        if (forest.consistent(o0.bond, o1.bond, want)) {
+          forest.join(o0.bond, o1.bond, want);
+          done = true;
+          break;
+        }
+      }
+      if (done) break;
+    }
+  }
+  for (let changed = true, round = 0; changed && round < 4; round++) {
+    changed = false;
+    for (const d of dbs) {
+      for (const e of [0, 1]) {
+        const t = d.ends[e];
+        const marked = singles[t].filter((o) => o.to !== d.ends[1 - e] && forest.has(o.bond));
+        if (marked.length !== 2) continue;
+        const [x, y] = [marked[0].bond, marked[1].bond];
+        const want = -1 * sigma(x, t) * sigma(y, t);
+        const [rx] = forest.find(x);
+        const [ry] = forest.find(y);
+        if (rx !== ry && forest.join(x, y, want)) changed = true;
+      }
+    }
+  }
+  return forest.values();
+}
+var ParityForest;
+var init_smiles_directions = __esm({
+  "src/chem/write/smiles-directions.ts"() {
+    "use strict";
+    init_types();
+    ParityForest = class {
+      up = /* @__PURE__ */ new Map();
+      sign = /* @__PURE__ */ new Map();
+      has(k) {
+        return this.up.has(k);
+      }
+      find(k) {
+        if (!this.up.has(k)) return [k, 1];
+        let sg = 1;
+        let r = k;
+        while (this.up.get(r) !== r) {
+          sg *= this.sign.get(r);
+          r = this.up.get(r);
+        }
+        return [r, sg];
+      }
+      /** Would value(a) * value(b) = want be consistent? */
+      consistent(a, b, want) {
+        const [ra, sa] = this.find(a);
+        const [rb, sb] = this.find(b);
+        return ra !== rb || sa * sb === want;
+      }
+      /** Requires value(a) * value(b) = want; returns false (and changes nothing) when that contradicts. */
+      join(a, b, want) {
+        for (const k of [a, b]) {
+          if (!this.up.has(k)) {
+            this.up.set(k, k);
+            this.sign.set(k, 1);
+          }
+        }
+        const [ra, sa] = this.find(a);
+        const [rb, sb] = this.find(b);
+        if (ra === rb) return sa * sb === want;
+        this.up.set(rb, ra);
+        this.sign.set(rb, want * sa * sb);
+        return true;
+      }
+      values() {
+        const res = /* @__PURE__ */ new Map();
+        for (const k of this.up.keys()) res.set(k, this.find(k)[1]);
+        return res;
+      }
+    };
+  }
+});
+
 // src/chem/write/smiles-stereo.ts
 function permutationParity(from, to) {
   if (from.length !== to.length) return null;
@@ -17047,68 +17330,6 @@ function allene2(s, em, ax, marks) {
   const p = permutationParity(stored, emitted);
   if (p === null) return;
   marks.set(centre, flip(ax.winding, p));
-}
-function assignBondDirections(s, em) {
-  const res = /* @__PURE__ */ new Map();
-  const dbs = s.stereo.filter((x) => x.kind === "double-bond");
-  if (dbs.length === 0) return res;
-  const n = s.atoms.length;
-  const first = new Int32Array(s.bonds.length).fill(-1);
-  for (let u = 0; u < n; u++) {
-    if (em.parentBond[u] >= 0) first[em.parentBond[u]] = em.parent[u];
-    for (const k of em.ringOpen[u]) first[k] = u;
-  }
-  const singles = Array.from({ length: n }, () => []);
-  s.bonds.forEach((b, k) => {
-    if (b.order !== 1 || b.a === b.b) return;
-    singles[b.a]?.push({ to: b.b, bond: k });
-    singles[b.b]?.push({ to: b.a, bond: k });
-  });
-  const up = /* @__PURE__ */ new Map();
-  const sign = /* @__PURE__ */ new Map();
-  const find = (k) => {
-    let sg = 1;
-    let r = k;
-    while (up.has(r) && up.get(r) !== r) {
-      sg *= sign.get(r);
-      r = up.get(r);
-    }
-    return [r, sg];
-  };
-  const ensure = (k) => {
-    if (!up.has(k)) {
-      up.set(k, k);
-      sign.set(k, 1);
-    }
-  };
-  for (const d of dbs) {
-    const sides = [];
-    for (let e = 0; e < 2; e++) {
-      const t = d.ends[e];
-      const ref = d.refs[e];
-      const opts = singles[t] ?? [];
-      const direct = opts.find((o) => o.to === ref);
-      if (direct) sides.push({ bond: direct.bond, factor: 1 });
-      else {
-        const other = opts.find((o) => o.to !== ref && o.to !== d.ends[1 - e]);
-        if (other && (ref === IMPLICIT_H || ref >= 0)) sides.push({ bond: other.bond, factor: -1 });
-      }
-    }
-    if (sides.length !== 2 || sides[0].bond === sides[1].bond) continue;
-    const rel = d.relation === "cis" ? 1 : -1;
-    const sigma = (k, t) => first[k] === t ? 1 : -1;
-    const want = rel * sides[0].factor * sides[1].factor * sigma(sides[0].bond, d.ends[0]) * sigma(sides[1].bond, d.ends[1]);
-    const [b0, b1] = [sides[0].bond, sides[1].bond];
-    ensure(b0);
-    ensure(b1);
-    const [r0, s0] = find(b0);
-    const [r1, s1] = find(b1);
-    if (r0 === r1) continue;
-    up.set(r1, r0);
-    sign.set(r1, want * s0 * s1);
-  }
-  for (const k of up.keys()) res.set(k, find(k)[1]);
-  return res;
 }
 var init_smiles_stereo2 = __esm({
   "src/chem/write/smiles-stereo.ts"() {
@@ -17328,6 +17549,7 @@ var init_smiles2 = __esm({
   "src/chem/write/smiles.ts"() {
     "use strict";
     init_valence();
+    init_smiles_directions();
     init_smiles_stereo2();
     ORGANIC = /* @__PURE__ */ new Set(["B", "C", "N", "O", "P", "S", "F", "Cl", "Br", "I"]);
   }
@@ -17343,11 +17565,17 @@ function buildGraph(s) {
     deg[b.a]++;
     deg[b.b]++;
   }
+  let total = 0;
+  for (let i = 0; i < n; i++) total += deg[i];
+  const flatNbrs = new Int32Array(total);
+  const flatBonds = new Int32Array(total);
   const nbrs = new Array(n);
   const nbrBonds = new Array(n);
+  let at = 0;
   for (let i = 0; i < n; i++) {
-    nbrs[i] = new Int32Array(deg[i]);
-    nbrBonds[i] = new Int32Array(deg[i]);
+    nbrs[i] = flatNbrs.subarray(at, at + deg[i]);
+    nbrBonds[i] = flatBonds.subarray(at, at + deg[i]);
+    at += deg[i];
   }
   const fill = new Int32Array(n);
   s.bonds.forEach((b, k) => {
@@ -17404,6 +17632,179 @@ var init_components = __esm({
   }
 });
 
+// src/chem/graph/sssr.ts
+function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) {
+  const n = g.n;
+  const m = s.bonds.length;
+  const parent = Int32Array.from({ length: n }, (_, i) => i);
+  const find = (x) => {
+    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+    return x;
+  };
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const ra = find(s.bonds[k].a);
+    const rb = find(s.bonds[k].b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  const atomsOf = /* @__PURE__ */ new Map();
+  const bondsOf = /* @__PURE__ */ new Map();
+  const smallestOf = /* @__PURE__ */ new Map();
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const r = find(s.bonds[k].a);
+    bondsOf.set(r, (bondsOf.get(r) ?? 0) + 1);
+    const z = smallestRingOfBond[k];
+    if (z < (smallestOf.get(r) ?? Infinity)) smallestOf.set(r, z);
+  }
+  const inRing = new Uint8Array(n);
+  for (let k = 0; k < m; k++) if (bondInRing[k]) inRing[s.bonds[k].a] = inRing[s.bonds[k].b] = 1;
+  for (let i = 0; i < n; i++) {
+    if (!inRing[i]) continue;
+    const r = find(i);
+    const list = atomsOf.get(r);
+    if (list) list.push(i);
+    else atomsOf.set(r, [i]);
+  }
+  const rings = [];
+  for (const [root, atoms] of atomsOf) {
+    const nullity = bondsOf.get(root) - atoms.length + 1;
+    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
+    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallestOf.get(root)));
+  }
+  return rings.sort((p, q) => p.length - q.length);
+}
+function walkCycle(start, g, bondInRing) {
+  const out = [start];
+  let prevBond = -1;
+  let u = start;
+  for (; ; ) {
+    let next = -1;
+    for (let i = 0; i < g.nbrs[u].length; i++) {
+      const k = g.nbrBonds[u][i];
+      if (bondInRing[k] && k !== prevBond) {
+        next = g.nbrs[u][i];
+        prevBond = k;
+        break;
+      }
+    }
+    if (next < 0 || next === start) return out;
+    out.push(next);
+    u = next;
+  }
+}
+function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
+  const n = g.n;
+  const words = m + 31 >>> 5;
+  const seen = /* @__PURE__ */ new Map();
+  const dist = new Int32Array(n).fill(-1);
+  const parent = new Int32Array(n);
+  const parentBond = new Int32Array(n);
+  const branch = new Int32Array(n);
+  const order = new Int32Array(n);
+  const basis = [];
+  const pivots = [];
+  const rings = [];
+  let below = 0;
+  for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
+    const depth = limit + 1 >> 1;
+    const cands = [];
+    for (const r of atoms) {
+      dist[r] = 0;
+      parent[r] = -1;
+      parentBond[r] = -1;
+      branch[r] = r;
+      let head = 0;
+      let tail = 0;
+      order[tail++] = r;
+      while (head < tail) {
+        const u = order[head++];
+        if (dist[u] >= depth) continue;
+        const nb = g.nbrs[u];
+        for (let i = 0; i < nb.length; i++) {
+          const k = g.nbrBonds[u][i];
+          if (!bondInRing[k]) continue;
+          const v = nb[i];
+          if (dist[v] >= 0) continue;
+          dist[v] = dist[u] + 1;
+          parent[v] = u;
+          parentBond[v] = k;
+          branch[v] = u === r ? v : branch[u];
+          order[tail++] = v;
+        }
+      }
+      for (let t = 0; t < tail; t++) {
+        const x = order[t];
+        const nb = g.nbrs[x];
+        for (let i = 0; i < nb.length; i++) {
+          const k = g.nbrBonds[x][i];
+          const y = nb[i];
+          if (!bondInRing[k] || dist[y] < 0 || parentBond[x] === k || parentBond[y] === k) continue;
+          if (dist[y] < dist[x] || dist[y] === dist[x] && y < x) continue;
+          if (x !== r && y !== r && branch[x] === branch[y]) continue;
+          const size = dist[x] + dist[y] + 1;
+          if (size <= below || size > limit) continue;
+          const bits = new Uint32Array(words);
+          const path = [];
+          for (let u = x; u !== r; u = parent[u]) {
+            path.push(u);
+            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          }
+          path.push(r);
+          path.reverse();
+          for (let u = y; u !== r; u = parent[u]) {
+            path.push(u);
+            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          }
+          bits[k >>> 5] ^= 1 << (k & 31);
+          let hash = 0;
+          for (let w = 0; w < words; w++) hash = Math.imul(hash, 31) + bits[w] | 0;
+          const bucket = seen.get(hash);
+          if (bucket?.some((c) => equalBits(c, bits))) continue;
+          if (bucket) bucket.push(bits);
+          else seen.set(hash, [bits]);
+          cands.push({ size, atoms: path, bits, hash });
+        }
+      }
+      for (let t = 0; t < tail; t++) dist[order[t]] = -1;
+    }
+    cands.sort((p, q) => p.size - q.size);
+    for (const c of cands) {
+      const v = c.bits.slice();
+      for (let j = 0; j < basis.length; j++) {
+        const p2 = pivots[j];
+        if (v[p2 >>> 5] & 1 << (p2 & 31)) xorInto(v, basis[j]);
+      }
+      const p = firstBit(v);
+      if (p < 0) continue;
+      for (let j = 0; j < basis.length; j++) if (basis[j][p >>> 5] & 1 << (p & 31)) xorInto(basis[j], v);
+      basis.push(v);
+      pivots.push(p);
+      rings.push(c.atoms);
+      if (rings.length === nullity) break;
+    }
+    below = limit;
+    if (limit > 2 * n + 2) break;
+  }
+  return rings;
+}
+function equalBits(x, y) {
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false;
+  return true;
+}
+function xorInto(v, w) {
+  for (let i = 0; i < v.length; i++) v[i] ^= w[i];
+}
+function firstBit(v) {
+  for (let i = 0; i < v.length; i++) if (v[i] !== 0) return i * 32 + (31 - Math.clz32(v[i] & -v[i]));
+  return -1;
+}
+var init_sssr = __esm({
+  "src/chem/graph/sssr.ts"() {
+    "use strict";
+  }
+});
+
 // src/chem/graph/rings.ts
 function ringInfo(s, g = buildGraph(s)) {
   const n = g.n;
@@ -17420,7 +17821,7 @@ function ringInfo(s, g = buildGraph(s)) {
     }
   }
   const atomInRing = smallestRingOfAtom.map((x) => x > 0);
-  const rings = bondInRing.some((x) => x) ? sssr(s, g, bondInRing) : [];
+  const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
   return { rings, atomInRing, bondInRing, smallestRingOfBond, smallestRingOfAtom, ringSystems: systems(rings, n) };
 }
 function smallestRings(s, g) {
@@ -17497,128 +17898,6 @@ function bridges(g, m, keep) {
   }
   return isBridge;
 }
-function sssr(s, g, bondInRing) {
-  const n = g.n;
-  const m = s.bonds.length;
-  let ringAtoms = 0;
-  let ringBonds3 = 0;
-  for (let k = 0; k < m; k++) if (bondInRing[k]) ringBonds3++;
-  const inRing = new Uint8Array(n);
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    inRing[s.bonds[k].a] = 1;
-    inRing[s.bonds[k].b] = 1;
-  }
-  for (let i = 0; i < n; i++) ringAtoms += inRing[i];
-  const comp = componentIds(s, ringSubgraph(g, bondInRing));
-  const compSet = /* @__PURE__ */ new Set();
-  for (let i = 0; i < n; i++) if (inRing[i]) compSet.add(comp[i]);
-  const nullity = ringBonds3 - ringAtoms + compSet.size;
-  if (nullity <= 0) return [];
-  const words = m + 31 >>> 5;
-  const cands = [];
-  const seenKeys = /* @__PURE__ */ new Set();
-  const dist = new Int32Array(n);
-  const parent = new Int32Array(n);
-  const parentBond = new Int32Array(n);
-  const branch = new Int32Array(n);
-  const order = new Int32Array(n);
-  for (let r = 0; r < n; r++) {
-    if (!inRing[r]) continue;
-    dist.fill(-1);
-    dist[r] = 0;
-    parent[r] = -1;
-    parentBond[r] = -1;
-    branch[r] = r;
-    let head = 0;
-    let tail = 0;
-    order[tail++] = r;
-    while (head < tail) {
-      const u = order[head++];
-      const nb = g.nbrs[u];
-      for (let i = 0; i < nb.length; i++) {
-        const k = g.nbrBonds[u][i];
-        if (!bondInRing[k]) continue;
-        const v = nb[i];
-        if (dist[v] >= 0) continue;
-        dist[v] = dist[u] + 1;
-        parent[v] = u;
-        parentBond[v] = k;
-        branch[v] = u === r ? v : branch[u];
-        order[tail++] = v;
-      }
-    }
-    for (let t = 0; t < tail; t++) {
-      const x = order[t];
-      const nb = g.nbrs[x];
-      for (let i = 0; i < nb.length; i++) {
-        const k = g.nbrBonds[x][i];
-        const y = nb[i];
-        if (!bondInRing[k] || parentBond[x] === k || parentBond[y] === k || dist[y] < 0) continue;
-        if (dist[y] < dist[x] || dist[y] === dist[x] && y < x) continue;
-        if (x !== r && y !== r && branch[x] === branch[y]) continue;
-        const bits = new Uint32Array(words);
-        const path = [];
-        for (let u = x; u !== r; u = parent[u]) {
-          path.push(u);
-          bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-        }
-        path.push(r);
-        path.reverse();
-        const back = [];
-        for (let u = y; u !== r; u = parent[u]) {
-          back.push(u);
-          bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-        }
-        bits[k >>> 5] ^= 1 << (k & 31);
-        const atoms = path.concat(back);
-        const key3 = Array.from(bits).join(",");
-        if (seenKeys.has(key3)) continue;
-        seenKeys.add(key3);
-        cands.push({ size: atoms.length, atoms, bits });
-      }
-    }
-  }
-  cands.sort((p, q) => p.size - q.size);
-  const basis = [];
-  const pivots = [];
-  const rings = [];
-  for (const c of cands) {
-    const v = c.bits.slice();
-    for (let j = 0; j < basis.length; j++) {
-      const p2 = pivots[j];
-      if (v[p2 >>> 5] & 1 << (p2 & 31)) xorInto(v, basis[j]);
-    }
-    const p = firstBit(v);
-    if (p < 0) continue;
-    for (let j = 0; j < basis.length; j++) {
-      if (basis[j][p >>> 5] & 1 << (p & 31)) xorInto(basis[j], v);
-    }
-    basis.push(v);
-    pivots.push(p);
-    rings.push(c.atoms);
-    if (rings.length === nullity) break;
-  }
-  return rings;
-}
-function xorInto(v, w) {
-  for (let i = 0; i < v.length; i++) v[i] ^= w[i];
-}
-function firstBit(v) {
-  for (let i = 0; i < v.length; i++) if (v[i] !== 0) return i * 32 + (31 - Math.clz32(v[i] & -v[i]));
-  return -1;
-}
-function ringSubgraph(g, bondInRing) {
-  const nbrs = [];
-  const nbrBonds = [];
-  for (let u = 0; u < g.n; u++) {
-    const keep = [];
-    for (let i = 0; i < g.nbrs[u].length; i++) if (bondInRing[g.nbrBonds[u][i]]) keep.push(i);
-    nbrs.push(Int32Array.from(keep, (i) => g.nbrs[u][i]));
-    nbrBonds.push(Int32Array.from(keep, (i) => g.nbrBonds[u][i]));
-  }
-  return { n: g.n, nbrs, nbrBonds };
-}
 function systems(rings, n) {
   const parent = Int32Array.from({ length: n }, (_, i) => i);
   const find = (x) => {
@@ -17648,7 +17927,7 @@ var init_rings = __esm({
   "src/chem/graph/rings.ts"() {
     "use strict";
     init_adjacency();
-    init_components();
+    init_sssr();
   }
 });
 
@@ -17770,6 +18049,9 @@ var init_aromaticity = __esm({
 });
 
 // src/chem/graph/invariants.ts
+function atomInvariants(s, aromatic) {
+  return invariantsWith(s, aromatic);
+}
 function invariantsWith(s, aromatic, graph, bridgeOf) {
   const n = s.atoms.length;
   const g = graph ?? buildGraph(s);
@@ -17805,7 +18087,14 @@ var init_invariants = __esm({
 
 // src/chem/graph/refine.ts
 function clonePartition(p) {
-  return { lab: p.lab.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+  return { lab: p.lab.slice(), pos: p.pos.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+}
+function copyPartition(from, to) {
+  to.lab.set(from.lab);
+  to.pos.set(from.pos);
+  to.start.set(from.start);
+  to.len.set(from.len);
+  to.cells = from.cells;
 }
 function rankKeys(keys, n) {
   let rank = rankOne(keys[0], n);
@@ -17842,6 +18131,7 @@ function rankOne(values, n) {
 function partitionOf(rank) {
   const n = rank.length;
   const lab = new Int32Array(n);
+  const pos = new Int32Array(n);
   const start = new Int32Array(n);
   const len = new Int32Array(n);
   let cells = 0;
@@ -17852,11 +18142,12 @@ function partitionOf(rank) {
   const fill = first.slice(0, cells);
   for (let i = 0; i < n; i++) {
     const c = rank[i];
+    pos[i] = fill[c];
     lab[fill[c]++] = i;
     start[i] = first[c];
   }
   for (let c = 0; c < cells; c++) len[first[c]] = first[c + 1] - first[c];
-  return { lab, start, len, cells };
+  return { lab, pos, start, len, cells };
 }
 function cellIndex(p) {
   const n = p.lab.length;
@@ -17867,6 +18158,14 @@ function cellIndex(p) {
     for (let t = i; t < i + p.len[i]; t++) out[p.lab[t]] = c;
   }
   return out;
+}
+function swapTo(p, v, at) {
+  const from = p.pos[v];
+  const w = p.lab[at];
+  p.lab[from] = w;
+  p.pos[w] = from;
+  p.lab[at] = v;
+  p.pos[v] = at;
 }
 var AROMATIC_CODE, WEIGHT, ascending, Refiner;
 var init_refine = __esm({
@@ -17884,6 +18183,9 @@ var init_refine = __esm({
         this.touched = new Int32Array(n);
         this.queue = new Int32Array(n + 1);
         this.inQueue = new Uint8Array(n);
+        this.cellHits = new Int32Array(n);
+        this.cellBase = new Int32Array(n);
+        this.members = new Int32Array(n);
         this.sortBuf = new Float64Array(n);
       }
       g;
@@ -17892,27 +18194,27 @@ var init_refine = __esm({
       touched;
       queue;
       inQueue;
-      touchedCells = [];
+      cellHits;
+      cellBase;
+      members;
+      cellsToSplit = [];
       sortBuf;
       starts = [];
       head = 0;
       tail = 0;
       queued = 0;
+      /** Work done so far (neighbour visits), for search budgets. */
+      work = 0;
       /** Moves atoms x (of A) and y (of B) of one cell into a cell of their own at the cell's start; refines. */
       individualise(p, x, y) {
-        const { lab, start, len } = p;
+        const { start, len } = p;
         const s = start[x];
         const L = len[s];
-        const place = (v, at) => {
-          const from = lab.indexOf(v, s);
-          lab[from] = lab[at];
-          lab[at] = v;
-        };
-        place(x, s);
-        place(y, s + 1);
+        swapTo(p, x, s);
+        swapTo(p, y, s + 1);
         len[s] = 2;
         len[s + 2] = L - 2;
-        for (let t = s + 2; t < s + L; t++) start[lab[t]] = s + 2;
+        for (let t = s + 2; t < s + L; t++) start[p.lab[t]] = s + 2;
         p.cells++;
         return this.refine(p, [s]);
       }
@@ -17929,10 +18231,7 @@ var init_refine = __esm({
       refine(p, splitters) {
         const { offs, adj, code } = this.g;
         const { lab, start, len } = p;
-        const count2 = this.count;
-        const touched = this.touched;
-        const queue = this.queue;
-        const inQueue = this.inQueue;
+        const { count: count2, touched, queue, inQueue, cellHits, cellBase, members } = this;
         const qsize = queue.length;
         this.head = 0;
         this.tail = 0;
@@ -17940,7 +18239,8 @@ var init_refine = __esm({
         if (splitters) for (const s of splitters) this.push(s);
         else for (let s = 0; s < lab.length; s += len[s]) this.push(s);
         const n = lab.length;
-        while (this.queued > 0) {
+        let ok = true;
+        while (this.queued > 0 && ok) {
           if (p.cells === n) break;
           const w = queue[this.head];
           this.head = this.head + 1 === qsize ? 0 : this.head + 1;
@@ -17950,34 +18250,42 @@ var init_refine = __esm({
           const wEnd = w + len[w];
           for (let t = w; t < wEnd; t++) {
             const v = lab[t];
+            this.work += offs[v + 1] - offs[v] + 1;
             for (let e = offs[v]; e < offs[v + 1]; e++) {
               const u = adj[e];
               if (count2[u] === 0) touched[nt++] = u;
               count2[u] += WEIGHT[code[e]];
             }
           }
-          const cellsToSplit = this.touchedCells;
-          cellsToSplit.length = 0;
+          const cells = this.cellsToSplit;
+          cells.length = 0;
           for (let t = 0; t < nt; t++) {
             const s = start[touched[t]];
-            if (len[s] > 1 && !cellsToSplit.includes(s)) cellsToSplit.push(s);
+            if (len[s] === 1) continue;
+            if (cellHits[s] === 0) cells.push(s);
+            cellHits[s]++;
           }
-          if (cellsToSplit.length > 1) cellsToSplit.sort(ascending);
-          let ok = true;
-          for (const s of cellsToSplit) {
-            if (this.splitCell(p, s) < 0) {
-              ok = false;
-              break;
-            }
+          if (cells.length > 1) cells.sort(ascending);
+          let off = 0;
+          for (const s of cells) {
+            cellBase[s] = off;
+            off += cellHits[s];
+            cellHits[s] = 0;
+          }
+          for (let t = 0; t < nt; t++) {
+            const u = touched[t];
+            const s = start[u];
+            if (len[s] === 1) continue;
+            members[cellBase[s] + cellHits[s]++] = u;
+          }
+          for (const s of cells) {
+            if (ok && this.splitCell(p, s, cellBase[s], cellHits[s]) < 0) ok = false;
+            cellHits[s] = 0;
           }
           for (let t = 0; t < nt; t++) count2[touched[t]] = 0;
-          if (!ok) {
-            this.drain();
-            return false;
-          }
         }
         this.drain();
-        return true;
+        return ok;
       }
       push(s) {
         this.queue[this.tail] = s;
@@ -17993,33 +18301,49 @@ var init_refine = __esm({
         }
         this.queued = 0;
       }
-      /** Splits the cell at s by count; returns the number of fragments, or -1 on an A/B imbalance. */
-      splitCell(p, s) {
+      /**
+       * Splits the cell at s by count; the cell's touched atoms are members[from .. from+k). Untouched atoms (count
+       * 0) stay at the front as the first fragment. Returns the number of fragments, or -1 on an A/B imbalance.
+       */
+      splitCell(p, s, from, k) {
         const { lab, start, len } = p;
         const count2 = this.count;
         const L = len[s];
-        const first = count2[lab[s]];
-        let uniform = true;
-        for (let t = s + 1; t < s + L; t++) {
-          if (count2[lab[t]] !== first) {
-            uniform = false;
-            break;
+        if (k === L) {
+          const first = count2[lab[s]];
+          let uniform = true;
+          for (let t = s + 1; t < s + L; t++) {
+            if (count2[lab[t]] !== first) {
+              uniform = false;
+              break;
+            }
           }
+          if (uniform) return 1;
         }
-        if (uniform) return 1;
-        const buf = this.sortBuf.subarray(0, L);
-        for (let t = 0; t < L; t++) buf[t] = count2[lab[s + t]] * 4194304 + lab[s + t];
-        buf.sort();
-        for (let t = 0; t < L; t++) lab[s + t] = buf[t] % 4194304;
+        let end = s + L;
+        for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
+        this.work += k;
+        const buf = this.sortBuf.subarray(0, k);
+        for (let t = 0; t < k; t++) buf[t] = count2[lab[end + t]] * 4194304 + lab[end + t];
+        if (k > 1) buf.sort();
+        for (let t = 0; t < k; t++) {
+          const v = buf[t] % 4194304;
+          lab[end + t] = v;
+          p.pos[v] = end + t;
+        }
         const wasQueued = this.inQueue[s] === 1;
-        let fragStart = s;
-        let fragments = 0;
-        let largest = s;
-        let largestLen = 0;
         const starts = this.starts;
         starts.length = 0;
-        for (let t = s; t <= s + L; t++) {
-          if (t === s + L || t > s && count2[lab[t]] !== count2[lab[t - 1]]) {
+        let largest = s;
+        let largestLen = 0;
+        if (end > s) {
+          len[s] = end - s;
+          starts.push(s);
+          largestLen = end - s;
+        }
+        let fragStart = end;
+        for (let t = end; t <= s + L; t++) {
+          if (t === s + L || t > end && count2[lab[t]] !== count2[lab[t - 1]]) {
             const fl = t - fragStart;
             len[fragStart] = fl;
             for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
@@ -18029,17 +18353,16 @@ var init_refine = __esm({
               largestLen = fl;
               largest = fragStart;
             }
-            fragments++;
             fragStart = t;
           }
         }
-        p.cells += fragments - 1;
+        p.cells += starts.length - 1;
         for (const f of starts) {
           if (wasQueued) {
             if (f !== s) this.push(f);
           } else if (f !== largest) this.push(f);
         }
-        return fragments;
+        return starts.length;
       }
       cellBalanced(p, s, L) {
         let a = 0;
@@ -18100,13 +18423,55 @@ var init_csr = __esm({
 });
 
 // src/chem/graph/prepared.ts
+function refinedPartition(p) {
+  if (!p.refined) {
+    const part = partitionOf(rankKeys([p.inv], p.inv.length));
+    new Refiner(p.csr).refine(part);
+    p.refined = part;
+  }
+  return p.refined;
+}
 function prepare(s, aromatic) {
+  const sum = checksum(s, aromatic);
+  const entries = cache.get(s);
+  const hit = entries?.find((e) => e.aromatic === aromatic && e.sum === sum);
+  if (hit) return hit.prepared;
+  const prepared = prepareFresh(s, aromatic);
+  if (entries) {
+    if (entries.length >= 4) entries.shift();
+    entries.push({ sum, aromatic, prepared });
+  } else cache.set(s, [{ sum, aromatic, prepared }]);
+  return prepared;
+}
+function checksum(s, aromatic) {
+  let h = 2654435769 ^ s.atoms.length;
+  const mix = (x) => {
+    h = Math.imul(h ^ x, 16777619);
+  };
+  for (const a of s.atoms) {
+    mix(a.atomicNumber);
+    mix(a.charge);
+    mix(a.hCount);
+    mix(a.isotope ?? -1);
+    mix(a.radical);
+  }
+  mix(s.bonds.length);
+  for (const b of s.bonds) {
+    mix(b.a);
+    mix(b.b);
+    mix(b.order);
+  }
+  if (aromatic) for (let k = 0; k < aromatic.length; k++) mix(aromatic[k] ? 1 : 2);
+  return h;
+}
+function prepareFresh(s, aromatic) {
   const g = buildGraph(s);
   const bridge = bridges(g, s.bonds.length);
   const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
   const inv = invariantsWith(s, arom, g, bridge);
   return { s, g, aromatic: arom, inv, csr: csrOf([{ s, aromatic: arom }]) };
 }
+var cache;
 var init_prepared = __esm({
   "src/chem/graph/prepared.ts"() {
     "use strict";
@@ -18114,7 +18479,9 @@ var init_prepared = __esm({
     init_aromaticity();
     init_invariants();
     init_csr();
+    init_refine();
     init_rings();
+    cache = /* @__PURE__ */ new WeakMap();
   }
 });
 
@@ -18122,9 +18489,10 @@ var init_prepared = __esm({
 function equivalenceClasses(s, opts = {}) {
   const n = s.atoms.length;
   if (n === 0) return new Int32Array(0);
-  const { inv, csr } = prepare(s, opts.aromatic);
-  const p = partitionOf(rankKeys(opts.extra ? [inv, opts.extra] : [inv], n));
-  new Refiner(csr).refine(p);
+  const prep = prepare(s, opts.aromatic);
+  if (!opts.extra) return cellIndex(refinedPartition(prep));
+  const p = partitionOf(rankKeys([prep.inv, opts.extra], n));
+  new Refiner(prep.csr).refine(p);
   return cellIndex(p);
 }
 var init_classes = __esm({
@@ -18144,41 +18512,119 @@ function findIsomorphisms(a, b, opts) {
     opts.onMapping(new Int32Array(0));
     return { complete: true };
   }
-  const aromA = opts.aromaticA ?? conjugatedRingBonds(a);
-  const same = a === b && opts.colourA === opts.colourB && opts.aromaticA === opts.aromaticB;
-  const aromB = same ? aromA : opts.aromaticB ?? conjugatedRingBonds(b);
-  const invA = invariantsWith(a, aromA);
-  const invB = same ? invA : invariantsWith(b, aromB);
-  const inv = new Float64Array(2 * n);
-  inv.set(invA, 0);
-  inv.set(invB, n);
-  const keys = [inv];
-  if (opts.colourA || opts.colourB) {
-    const col = new Float64Array(2 * n);
-    for (let i = 0; i < n; i++) {
-      col[i] = opts.colourA ? opts.colourA[i] : 0;
-      col[n + i] = opts.colourB ? opts.colourB[i] : 0;
-    }
-    keys.push(col);
-  }
-  const g = csrOf([
-    { s: a, aromatic: aromA },
-    { s: b, aromatic: aromB }
-  ]);
-  const refiner = new Refiner(g, n);
-  const p = partitionOf(rankKeys(keys, 2 * n));
-  if (!refiner.balanced(p) || !refiner.refine(p)) return { complete: true };
+  const pa = prepare(a, opts.aromaticA);
+  const same = a === b && sameColours(opts.colourA, opts.colourB, n) && opts.aromaticA === opts.aromaticB;
+  const pb = same ? pa : prepare(b, opts.aromaticB);
   const inKey = new Uint8Array(n);
+  const g1 = pa.csr;
   if (opts.key) {
     for (const x of opts.key) {
       if (x < 0 || x >= n) continue;
       inKey[x] = 1;
-      for (let e = g.offs[x]; e < g.offs[x + 1]; e++) inKey[g.adj[e]] = 1;
+      for (let e = g1.offs[x]; e < g1.offs[x + 1]; e++) inKey[g1.adj[e]] = 1;
     }
   } else inKey.fill(1);
+  let p;
+  let g;
+  let refiner;
+  if (same) {
+    const single = singlePartition(pa, opts.colourA, n);
+    let fixed = true;
+    for (let i = 0; i < n && fixed; i++) if (inKey[i] && single.len[single.start[i]] > 1) fixed = false;
+    if (fixed) {
+      const id = new Int32Array(n);
+      for (let i = 0; i < n; i++) id[i] = i;
+      opts.onMapping(id);
+      return { complete: true };
+    }
+    p = doubled(single, n);
+    g = unionCsr(pa.csr, pb.csr);
+    refiner = new Refiner(g, n);
+  } else {
+    g = unionCsr(pa.csr, pb.csr);
+    refiner = new Refiner(g, n);
+    const keys = [concat(pa.inv, pb.inv)];
+    if (opts.colourA || opts.colourB) {
+      const col = new Float64Array(2 * n);
+      for (let i = 0; i < n; i++) {
+        col[i] = opts.colourA ? opts.colourA[i] : 0;
+        col[n + i] = opts.colourB ? opts.colourB[i] : 0;
+      }
+      keys.push(col);
+    }
+    p = partitionOf(rankKeys(keys, 2 * n));
+    if (!refiner.balanced(p) || !refiner.refine(p)) return { complete: true };
+  }
   const search = new Search(g, n, refiner, inKey, opts);
+  search.root = p;
   search.run(p, opts.key ? opts.key.length > 0 : true);
-  return { complete: !search.budgetHit && !search.maxHit };
+  return { complete: !search.budgetHit && !search.maxHit, nodes: search.nodes };
+}
+function singlePartition(pa, colour, n) {
+  const base = refinedPartition(pa);
+  if (colour) {
+    let constant = true;
+    for (let s = 0; s < n && constant; s += base.len[s]) {
+      const c = colour[base.lab[s]];
+      for (let t = s + 1; t < s + base.len[s]; t++) {
+        if (colour[base.lab[t]] !== c) {
+          constant = false;
+          break;
+        }
+      }
+    }
+    if (!constant) {
+      const p = partitionOf(rankKeys([pa.inv, colour], n));
+      new Refiner(pa.csr).refine(p);
+      return p;
+    }
+  }
+  return base;
+}
+function sameColours(x, y, n) {
+  if (x === y) return true;
+  if (!x || !y) return false;
+  for (let i = 0; i < n; i++) if (x[i] !== y[i]) return false;
+  return true;
+}
+function concat(x, y) {
+  const out = new Float64Array(x.length + y.length);
+  out.set(x, 0);
+  out.set(y, x.length);
+  return out;
+}
+function doubled(p, n) {
+  const lab = new Int32Array(2 * n);
+  const pos = new Int32Array(2 * n);
+  const start = new Int32Array(2 * n);
+  const len = new Int32Array(2 * n);
+  for (let s = 0; s < n; s += p.len[s]) {
+    const L = p.len[s];
+    for (let t = 0; t < L; t++) {
+      const v = p.lab[s + t];
+      lab[2 * s + t] = v;
+      lab[2 * s + L + t] = v + n;
+      pos[v] = 2 * s + t;
+      pos[v + n] = 2 * s + L + t;
+      start[v] = start[v + n] = 2 * s;
+    }
+    len[2 * s] = 2 * L;
+  }
+  return { lab, pos, start, len, cells: p.cells };
+}
+function unionCsr(x, y) {
+  const n = x.n + y.n;
+  const offs = new Int32Array(n + 1);
+  const ex = x.adj.length;
+  offs.set(x.offs, 0);
+  for (let i = 1; i <= y.n; i++) offs[x.n + i] = ex + y.offs[i];
+  const adj = new Int32Array(ex + y.adj.length);
+  adj.set(x.adj, 0);
+  for (let e = 0; e < y.adj.length; e++) adj[ex + e] = y.adj[e] + x.n;
+  const code = new Int32Array(adj.length);
+  code.set(x.code, 0);
+  code.set(y.code, ex);
+  return { n, offs, adj, code };
 }
 function isomorphic(a, b) {
   let found = null;
@@ -18207,8 +18653,7 @@ var init_isomorphism = __esm({
   "src/chem/graph/isomorphism.ts"() {
     "use strict";
     init_aromaticity();
-    init_invariants();
-    init_csr();
+    init_prepared();
     init_refine();
     NONE = 0;
     FOUND = 1;
@@ -18233,9 +18678,11 @@ var init_isomorphism = __esm({
       budgetHit = false;
       maxHit = false;
       maxNodes;
+      pool = [];
+      root = null;
       maxResults;
       /** `exhaustive`: still branching over key images. Returns NONE, FOUND or STOP. */
-      run(p, exhaustive) {
+      run(p, exhaustive, depth = 0) {
         const n = this.n;
         if (p.cells === n) return this.leaf(p);
         const { lab, len } = p;
@@ -18278,9 +18725,10 @@ var init_isomorphism = __esm({
             this.budgetHit = true;
             return STOP;
           }
-          const child = clonePartition(p);
+          const child = this.scratch(depth);
+          copyPartition(p, child);
           if (!this.refiner.individualise(child, x, y)) continue;
-          const r = this.run(child, exhaustive);
+          const r = this.run(child, exhaustive, depth + 1);
           if (r === STOP) return STOP;
           if (r === FOUND) {
             any = FOUND;
@@ -18288,6 +18736,11 @@ var init_isomorphism = __esm({
           }
         }
         return any;
+      }
+      /** One partition per search depth, reused. */
+      scratch(depth) {
+        while (this.pool.length <= depth) this.pool.push(clonePartition(this.pool[0] ?? this.root));
+        return this.pool[depth];
       }
       leaf(p) {
         const n = this.n;
@@ -18364,9 +18817,9 @@ function constitutionKey(s) {
   const n = s.atoms.length;
   const formula = molecularFormula(s);
   if (n === 0) return `${formula}/0000000000000000`;
-  const { inv, csr: g } = prepare(s);
-  const p = partitionOf(rankKeys([inv], n));
-  new Refiner(g).refine(p);
+  const prep = prepare(s);
+  const { inv, csr: g } = prep;
+  const p = refinedPartition(prep);
   const cell = cellIndex(p);
   let h1 = 2166136261;
   let h2 = 16777619 ^ n;
@@ -18399,6 +18852,22 @@ var init_key = __esm({
 });
 
 // src/chem/graph/index.ts
+var graph_exports = {};
+__export(graph_exports, {
+  aromaticBonds: () => aromaticBonds,
+  atomInvariants: () => atomInvariants,
+  automorphisms: () => automorphisms,
+  buildGraph: () => buildGraph,
+  componentIds: () => componentIds,
+  conjugatedRingBonds: () => conjugatedRingBonds,
+  connectedComponents: () => connectedComponents,
+  constitutionKey: () => constitutionKey,
+  equivalenceClasses: () => equivalenceClasses,
+  findIsomorphisms: () => findIsomorphisms,
+  isomorphic: () => isomorphic,
+  molecularFormula: () => molecularFormula,
+  ringInfo: () => ringInfo
+});
 var init_graph = __esm({
   "src/chem/graph/index.ts"() {
     "use strict";
@@ -41289,11 +41758,12 @@ var init_masses = __esm({
 });
 
 // src/chem/cip/mancude.ts
-function perceiveMancude(s, nbr, ord) {
+function perceiveMancude(s, nbr, ord, mass) {
   const n = s.atoms.length;
   const bond = /* @__PURE__ */ new Set();
   const dupZ = new Array(n).fill(0);
-  if (!nbr.some((o, a) => ord[a].some((x, i) => x === 2 && o[i] > a))) return { bond, dupZ };
+  const dupMass = new Array(n).fill(0);
+  if (!nbr.some((o, a) => ord[a].some((x, i) => x === 2 && o[i] > a))) return { bond, dupZ, dupMass };
   const ring = ringBonds2(n, nbr);
   const piDouble = (a) => nbr[a].some((b, i) => ord[a][i] === 2 && ring.has(key(n, a, b)));
   const pi = new Array(n).fill(false);
@@ -41313,16 +41783,21 @@ function perceiveMancude(s, nbr, ord) {
   for (let a = 0; a < n; a++) {
     if (!pi[a] || !piDouble(a)) continue;
     let sum = 0;
+    let msum = 0;
     let cnt = 0;
     for (const b of piNbr[a]) {
       if (piRing.has(key(n, a, b)) && piDouble(b)) {
         sum += s.atoms[b].atomicNumber;
+        msum += mass[b];
         cnt++;
       }
     }
-    if (cnt > 0) dupZ[a] = sum / cnt;
+    if (cnt > 0) {
+      dupZ[a] = sum / cnt;
+      dupMass[a] = msum / cnt;
+    }
   }
-  return { bond, dupZ };
+  return { bond, dupZ, dupMass };
 }
 function key(n, a, b) {
   return a * n + b;
@@ -41412,11 +41887,12 @@ function buildGraph2(s) {
       for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
     }
   });
+  const mass = s.atoms.map((a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber));
   const g = {
     s,
     n,
     z: s.atoms.map((a) => a.atomicNumber),
-    mass: s.atoms.map((a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)),
+    mass,
     hCount: s.atoms.map((a) => a.hCount),
     nbr,
     ord,
@@ -41424,12 +41900,16 @@ function buildGraph2(s) {
     tetraAt,
     bondAt,
     axialAt,
-    mancude: perceiveMancude(s, nbr, ord),
+    mancude: perceiveMancude(s, nbr, ord, mass),
     hasBondStereo,
     stereoCount: s.stereo.length,
-    ringFixed: []
+    ringFixed: [],
+    auxAllowed: [],
+    auxRule6: []
   };
   g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
+  g.auxAllowed = g.ringFixed.map((f) => !f);
+  g.auxRule6 = g.ringFixed.map(() => false);
   g.hasBondStereo = s.stereo.some((e, i) => e.kind === "double-bond" && !g.ringFixed[i]);
   bondAt.fill(-1);
   s.stereo.forEach((e, i) => {
@@ -41440,11 +41920,12 @@ function buildGraph2(s) {
   return g;
 }
 function fixedByRing(g, e) {
+  if (e.kind === "tetrahedral" && invertibleNitrogen(g, e.centre, e.ligands)) return true;
   if (e.kind === "double-bond") {
     const [u, v] = e.ends;
     return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
   }
-  if (e.kind === "axial" && e.subtype === "biaryl") return ringSizeThrough(g, e.ends[0], e.ends[1], 64) > 0;
+  if (e.kind === "axial" && e.subtype === "biaryl") return ringSizeThrough(g, e.ends[0], e.ends[1], 6) > 0;
   return false;
 }
 function expandedValence(s, a, orders) {
@@ -41465,6 +41946,13 @@ function expandedValence(s, a, orders) {
     default:
       return false;
   }
+}
+function invertibleNitrogen(g, centre, ligands) {
+  const at = g.s.atoms[centre];
+  if (at.atomicNumber !== 7 || at.charge !== 0 || !ligands.includes(-2)) return false;
+  const nb = g.nbr[centre];
+  if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
+  return !(nb.length === 3 && nb.every((b) => ringSizeThrough(g, centre, b, 64) > 0));
 }
 function ringSizeThrough(g, a, b, max) {
   const dist = /* @__PURE__ */ new Map([[a, 0]]);
@@ -41546,7 +42034,9 @@ var init_digraph = __esm({
       make(atom, depth, dist, dup, parent, z = -1) {
         this.count++;
         const g = this.g;
-        if (z >= 0) return new CipNode(this.nextId++, atom, z, DUPLICATE_MASS(g.mass[atom]), depth, dist, true, parent);
+        if (z >= 0 && parent !== null) {
+          return new CipNode(this.nextId++, atom, z, g.mancude.dupMass[parent.atom], depth, dist, true, parent);
+        }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
         return new CipNode(this.nextId++, atom, g.z[atom], dup ? DUPLICATE_MASS(g.mass[atom]) : g.mass[atom], depth, dist, dup, parent);
@@ -41615,7 +42105,7 @@ function rule2(n) {
   return n.mass;
 }
 function rule3(label) {
-  return label === "Z" || label === "z" ? 2 : label === "E" || label === "e" ? 1 : 0;
+  return label === "Z" ? 2 : label === "E" ? 1 : 0;
 }
 function rule4a(label) {
   if (label === null) return 0;
@@ -41625,7 +42115,7 @@ function rule4c(label) {
   return label === "r" || label === "m" ? 2 : label === "s" || label === "p" ? 1 : 0;
 }
 function rule5(label) {
-  return label === "R" || label === "M" ? 2 : label === "S" || label === "P" ? 1 : 0;
+  return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
 }
 function rule6(n, ref) {
   return n.atom === ref ? 1 : 0;
@@ -41731,6 +42221,11 @@ var init_rule4b = __esm({
 });
 
 // src/chem/cip/compare.ts
+function invertChiral(l) {
+  if (l === "e") return "z";
+  if (l === "z") return "e";
+  return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
+}
 var Ranker;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
@@ -41739,18 +42234,56 @@ var init_compare = __esm({
     init_rules();
     init_rule4b();
     Ranker = class {
-      constructor(dg, aux) {
+      constructor(dg, auxOf) {
         this.dg = dg;
-        this.aux = aux;
+        this.auxOf = auxOf;
+        this.scope = dg.root;
         const g = dg.g;
         const several = g.stereoCount > 1;
         const isotopes = g.s.atoms.some((a) => a.isotope !== null);
         this.active = [true, true, isotopes, g.hasBondStereo && several, several, several, several, several, false];
       }
       dg;
-      aux;
+      auxOf;
       /** Rules that cannot separate anything in this structure are skipped (saves exploring tied branches). */
       active;
+      /**
+       * The node whose descriptor is being found (the root at top level). Following Hanson et al. 2018, descriptors
+       * are assigned from the outermost nodes inward: while ranking at `scope`, only the descriptors of nodes
+       * farther out on the same branch (its descendants in the root's digraph) are known; any other node counts as
+       * non-stereogenic. This makes every auxiliary descriptor independent of the order of computation.
+       */
+      scope;
+      /**
+       * Mirror mode: compare as in the mirror image, where every chiral descriptor is inverted (R/S, M/P) and the
+       * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
+       */
+      mirror = false;
+      /** Is `n` the scope node or farther out on its branch? */
+      inScope(n) {
+        const sc = this.scope;
+        if (sc === this.dg.root) return true;
+        let x = n;
+        while (x !== null && x.depth > sc.depth) x = x.parent;
+        return x === sc;
+      }
+      /** The auxiliary descriptor of `n` as seen from the current scope. */
+      aux(n) {
+        return this.inScope(n) ? this.auxOf(n) : null;
+      }
+      /** Run `f` with `node` as the scope (while finding the auxiliary descriptor of `node`). */
+      within(node, f) {
+        const saved = this.scope;
+        const savedMirror = this.mirror;
+        this.scope = node;
+        this.mirror = false;
+        try {
+          return f();
+        } finally {
+          this.scope = saved;
+          this.mirror = savedMirror;
+        }
+      }
       setRule6(ref) {
         this.dg.rule6Ref = ref;
         this.active[RULE_6] = ref >= 0;
@@ -41770,7 +42303,7 @@ var init_compare = __esm({
           case RULE_4C:
             return this.stereoValue(n, rule4c);
           case RULE_5:
-            return this.stereoValue(n, rule5);
+            return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
           case RULE_6:
             return rule6(n, this.dg.rule6Ref);
           default:
@@ -41830,23 +42363,62 @@ var init_compare = __esm({
       }
       /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
       sorted(node, from, level) {
-        const key3 = (from === null ? 0 : from.id + 1) * 16 + level;
+        const hidden = level >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
+        const mirrored2 = this.mirror && level >= RULE_5 ? 2 : 0;
+        const num = ((from === null ? 0 : from.id + 1) * 16 + level) * 4 + hidden + mirrored2;
+        const key3 = level >= RULE_6 ? `${num}:${this.dg.rule6Ref}` : num;
         if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
         const hit = node.sorted.get(key3);
         if (hit) return hit;
-        const nodes = this.dg.branches(node, from).slice();
-        for (let i = 1; i < nodes.length; i++) {
-          const v = nodes[i];
-          let j = i - 1;
-          while (j >= 0 && this.compareUpTo(level, nodes[j], node, v, node) < 0) {
-            nodes[j + 1] = nodes[j];
-            j--;
+        let out;
+        if (level === 0) {
+          const nodes = this.dg.branches(node, from);
+          out = this.sortRun(nodes, 0, nodes.length, node, 0, { nodes: nodes.slice(), tie: nodes.map(() => true) });
+        } else {
+          const base = this.sorted(node, from, level - 1);
+          if (!this.active[level] || !base.tie.some((t) => t)) out = base;
+          else {
+            out = { nodes: base.nodes.slice(), tie: base.tie.slice() };
+            for (let i = 0; i < out.nodes.length; ) {
+              let j = i + 1;
+              while (j < out.nodes.length && base.tie[j]) j++;
+              if (j - i > 1) this.sortRun(out.nodes, i, j, node, level, out);
+              i = j;
+            }
           }
-          nodes[j + 1] = v;
         }
-        const tie = nodes.map((v, i) => i > 0 && this.compareUpTo(level, nodes[i - 1], node, v, node) === 0);
-        const out = { nodes, tie };
         node.sorted.set(key3, out);
+        return out;
+      }
+      /**
+       * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
+       * first, writing them and their ties into `out` at the same places.
+       */
+      sortRun(nodes, i, j, centre, rule, out) {
+        const run10 = nodes.slice(i, j);
+        const k = run10.length;
+        const m = new Array(k * k).fill(0);
+        for (let a = 0; a < k; a++) {
+          for (let b = a + 1; b < k; b++) {
+            const c = this.compareRule(rule, run10[a], centre, run10[b], centre);
+            m[a * k + b] = c;
+            m[b * k + a] = -c;
+          }
+        }
+        const order = run10.map((_, x) => x);
+        for (let x = 1; x < k; x++) {
+          const v = order[x];
+          let y = x - 1;
+          while (y >= 0 && m[order[y] * k + v] < 0) {
+            order[y + 1] = order[y];
+            y--;
+          }
+          order[y + 1] = v;
+        }
+        for (let x = 0; x < k; x++) {
+          out.nodes[i + x] = run10[order[x]];
+          out.tie[i + x] = x > 0 && m[order[x - 1] * k + order[x]] === 0;
+        }
         return out;
       }
     };
@@ -41880,9 +42452,22 @@ function rankLigands(rk, centre, ligands, level) {
   const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
   const tied = tieWithPrev.some((t) => t);
   let pseudo = false;
-  if (!tied && m.some((row) => row.some((c) => Math.abs(c) - 1 === RULE_5))) {
-    const mirrored2 = (a, b) => Math.abs(m[a][b]) - 1 === RULE_5 ? -m[a][b] : m[a][b];
-    const mirror2 = insertionSort(ligands.map((_, i) => i), mirrored2);
+  if (!tied && m.some((row) => row.some((c) => Math.abs(c) - 1 >= RULE_5))) {
+    const mm = ligands.map(() => new Array(k).fill(0));
+    const saved = rk.mirror;
+    rk.mirror = true;
+    try {
+      for (let i = 0; i < k; i++) {
+        for (let j = i + 1; j < k; j++) {
+          const c = Math.abs(m[i][j]) - 1 < RULE_5 ? m[i][j] : rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
+          mm[i][j] = c;
+          mm[j][i] = -c;
+        }
+      }
+    } finally {
+      rk.mirror = saved;
+    }
+    const mirror2 = insertionSort(ligands.map((_, i) => i), (a, b) => mm[a][b]);
     const pos = new Array(k);
     order.forEach((li, p) => pos[li] = p);
     pseudo = !isEvenPermutation(mirror2.map((li) => pos[li]));
@@ -41948,6 +42533,33 @@ function tetrahedralLabel(rk, centre, e, level = RULE_5) {
   const h = handedness(e.winding, rankOf);
   return r.pseudo ? h === "R" ? "r" : "s" : h;
 }
+function tetrahedralRule6(rk, centre, e) {
+  const used = /* @__PURE__ */ new Set();
+  const ligs = [];
+  for (const l of e.ligands) {
+    const b = ligandBranch(rk.dg, centre, l, used);
+    if (b === null) return null;
+    used.add(b);
+    ligs.push(b);
+  }
+  const r = rankLigands(rk, centre, ligs, RULE_5);
+  const found = /* @__PURE__ */ new Set();
+  const savedRef = rk.dg.rule6Ref;
+  try {
+    for (let i = 1; i < r.order.length; i++) {
+      if (!r.tieWithPrev[i]) continue;
+      for (const k of [r.order[i - 1], r.order[i]]) {
+        if (ligs[k].atom < 0) continue;
+        rk.setRule6(ligs[k].atom);
+        const l = tetrahedralLabel(rk, centre, e, RULE_6);
+        if (l !== null) found.add(l);
+      }
+    }
+  } finally {
+    rk.setRule6(savedRef);
+  }
+  return found.size === 1 ? [...found][0] : null;
+}
 function endBranches(dg, end, from, other) {
   return dg.branches(end, from).filter((b) => b.atom !== other);
 }
@@ -41985,6 +42597,56 @@ function doubleBondLabel(rk, node, e) {
   if (partner.aux === void 0) partner.aux = label;
   return label;
 }
+function axialLabel(rks, ends, e, level = RULE_5) {
+  const rankOf = [0, 0, 0, 0];
+  let pseudo = false;
+  for (let i = 0; i < 2; i++) {
+    const rk = rks[i];
+    const end = ends[i];
+    const used = /* @__PURE__ */ new Set();
+    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], used);
+    if (a !== null) used.add(a);
+    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], used);
+    if (a === null || b === null) return null;
+    const r = rankLigands(rk, end, [a, b], level);
+    if (r.tied) return null;
+    pseudo = pseudo !== r.pseudo;
+    rankOf[2 * i + r.order[0]] = 2 * i;
+    rankOf[2 * i + r.order[1]] = 2 * i + 1;
+  }
+  const h = handedness(e.winding, rankOf);
+  const label = h === "R" ? "M" : "P";
+  return pseudo ? label === "M" ? "m" : "p" : label;
+}
+function farEnd(dg, node, other) {
+  const g = dg.g;
+  let frontier = [node];
+  const seen = /* @__PURE__ */ new Set([node]);
+  for (let step = 0; step < 8 && frontier.length > 0; step++) {
+    const next = [];
+    for (const x of frontier) {
+      if (x !== node && x.atom !== other && g.nbr[x.atom].length !== 2) continue;
+      const around = [...dg.kids(x), ...x.parent ? [x.parent] : []];
+      for (const y of around) {
+        if (y.dup || y.atom < 0 || seen.has(y)) continue;
+        if (y.atom === other) return y;
+        seen.add(y);
+        if (g.nbr[y.atom].length === 2 && g.dupOrd[y.atom].every((o) => o === 2)) next.push(y);
+      }
+    }
+    frontier = next;
+  }
+  return null;
+}
+function axialAux(rk, node, e) {
+  const i = e.ends[0] === node.atom ? 0 : 1;
+  const far = farEnd(rk.dg, node, e.ends[1 - i]);
+  if (far === null) return null;
+  const ends = i === 0 ? [node, far] : [far, node];
+  const label = axialLabel([rk, rk], ends, e);
+  if (far.aux === void 0) far.aux = label;
+  return label;
+}
 function auxFor(dg) {
   return (rk) => (node) => {
     if (node.aux !== void 0) return node.aux;
@@ -41994,10 +42656,15 @@ function auxFor(dg) {
     let label = null;
     const t = g.tetraAt[node.atom];
     const b = g.bondAt[node.atom];
-    if (t >= 0 && t !== dg.rootElement) {
-      label = tetrahedralLabel(rk, node, g.s.stereo[t]);
-    } else if (b >= 0 && b !== dg.rootElement && !g.ringFixed[b]) {
-      label = doubleBondLabel(rk, node, g.s.stereo[b]);
+    const x = g.axialAt[node.atom];
+    if (t >= 0 && t !== dg.rootElement && g.auxAllowed[t]) {
+      const e = g.s.stereo[t];
+      label = rk.within(node, () => tetrahedralLabel(rk, node, e));
+      if (label === null && g.auxRule6[t]) label = rk.within(node, () => tetrahedralRule6(rk, node, e));
+    } else if (b >= 0 && b !== dg.rootElement && g.auxAllowed[b]) {
+      label = rk.within(node, () => doubleBondLabel(rk, node, g.s.stereo[b]));
+    } else if (x >= 0 && x !== dg.rootElement && g.auxAllowed[x]) {
+      label = rk.within(node, () => axialAux(rk, node, g.s.stereo[x]));
     }
     node.auxBusy = false;
     node.aux = label;
@@ -42070,25 +42737,9 @@ function doubleBond(g, index, e, ref) {
 }
 function axial(g, index, e, ref) {
   const level = ref >= 0 ? RULE_6 : RULE_5;
-  const rankOf = [0, 0, 0, 0];
-  let pseudo = false;
-  for (let i = 0; i < 2; i++) {
-    const rk = ranker(g, e.ends[i], index, ref);
-    const root = rk.dg.root;
-    const used = /* @__PURE__ */ new Set();
-    const a = ligandBranch(rk.dg, root, e.ligands[2 * i], used);
-    if (a !== null) used.add(a);
-    const b = ligandBranch(rk.dg, root, e.ligands[2 * i + 1], used);
-    if (a === null || b === null) return null;
-    const r = rankLigands(rk, root, [a, b], level);
-    if (r.tied) return null;
-    pseudo = pseudo !== r.pseudo;
-    rankOf[2 * i + r.order[0]] = 2 * i;
-    rankOf[2 * i + r.order[1]] = 2 * i + 1;
-  }
-  const h = handedness(e.winding, rankOf);
-  const label = h === "R" ? "M" : "P";
-  return pseudo ? label === "M" ? "m" : "p" : label;
+  const r0 = ranker(g, e.ends[0], index, ref);
+  const r1 = ranker(g, e.ends[1], index, ref);
+  return axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level);
 }
 function labelWith(g, index, e, ref) {
   if (e.kind === "tetrahedral") return tetrahedral2(g, index, e, ref);
@@ -42107,11 +42758,13 @@ function rule6Candidates(g, index, e) {
   }
   return e.ligands.filter((l) => l >= 0);
 }
-function labelElement(g, index) {
-  const e = g.s.stereo[index];
+function labelPlain(g, index) {
   if (g.ringFixed[index]) return null;
-  const plain = labelWith(g, index, e, -1);
-  if (plain !== null) return plain;
+  return labelWith(g, index, g.s.stereo[index], -1);
+}
+function labelRule6(g, index) {
+  if (g.ringFixed[index]) return null;
+  const e = g.s.stereo[index];
   const found = /* @__PURE__ */ new Set();
   for (const ref of rule6Candidates(g, index, e)) {
     const l = labelWith(g, index, e, ref);
@@ -42129,12 +42782,37 @@ var init_label = __esm({
   }
 });
 
+// src/chem/cip/helix.ts
+var init_helix = __esm({
+  "src/chem/cip/helix.ts"() {
+    "use strict";
+  }
+});
+
 // src/chem/cip/index.ts
 function assignCip(s) {
   const g = buildGraph2(s);
+  const labels = s.stereo.map((_, i) => labelPlain(g, i));
+  if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
+    g.auxAllowed = labels.map((l) => l !== null);
+    const by6 = [];
+    for (let i = 0; i < labels.length; i++) {
+      if (labels[i] !== null) continue;
+      labels[i] = labelRule6(g, i);
+      if (labels[i] !== null) by6.push(i);
+    }
+    const open = labels.some((l, i) => l === null && !g.ringFixed[i]);
+    if (by6.length > 0 && open) {
+      g.auxAllowed = labels.map((l) => l !== null);
+      for (const i of by6) g.auxRule6[i] = true;
+      for (let i = 0; i < labels.length; i++) {
+        if (labels[i] === null && !g.ringFixed[i]) labels[i] = labelPlain(g, i) ?? labelRule6(g, i);
+      }
+    }
+  }
   return s.stereo.map((e, element) => ({
     element,
-    label: labelElement(g, element),
+    label: labels[element],
     atoms: e.kind === "tetrahedral" ? [e.centre] : [e.ends[0], e.ends[1]]
   }));
 }
@@ -42143,6 +42821,7 @@ var init_cip = __esm({
     "use strict";
     init_graph2();
     init_label();
+    init_helix();
   }
 });
 
@@ -42421,17 +43100,19 @@ function resonancePair(s, g, i) {
     if (g.nbrs[nb[k]].length !== 1 || x.atomicNumber !== 8 && x.atomicNumber !== 16 && x.atomicNumber !== 34)
       continue;
     const order = s.bonds[g.nbrBonds[i][k]].order;
-    if (order === 2) doubleEl.add(x.atomicNumber);
-    else if (order === 1 && (x.hCount > 0 || x.charge < 0)) singleEl.add(x.atomicNumber);
+    const key3 = x.atomicNumber * 1e3 + (x.isotope ?? 0);
+    if (order === 2) doubleEl.add(key3);
+    else if (order === 1 && (x.hCount > 0 || x.charge < 0)) singleEl.add(key3);
   }
   for (const e of doubleEl) if (singleEl.has(e)) return true;
   if (s.atoms[i].charge > 0) {
-    let count2 = 0;
+    const seen = /* @__PURE__ */ new Set();
     for (let k = 0; k < nb.length; k++) {
       const x = s.atoms[nb[k]];
-      if (g.nbrs[nb[k]].length === 1 && x.atomicNumber === 8 && (x.charge < 0 || x.hCount > 0)) count2++;
+      if (g.nbrs[nb[k]].length !== 1 || x.atomicNumber !== 8 || x.charge >= 0 && x.hCount === 0) continue;
+      if (seen.has(x.isotope ?? 0)) return true;
+      seen.add(x.isotope ?? 0);
     }
-    if (count2 >= 2) return true;
   }
   return false;
 }
@@ -42508,6 +43189,47 @@ var init_perceive_input = __esm({
   "src/chem/perceive-input.ts"() {
     "use strict";
     init_types();
+    init_perceive_units();
+  }
+});
+
+// src/chem/perceive-rescue.ts
+function swapsTerminalPair(u, g, classes, n) {
+  for (let i = 0; i < 4; i++) {
+    const a = u.tokens[i];
+    if (a >= n || g.nbrs[a].length !== 1) continue;
+    for (let j = i + 1; j < 4; j++) {
+      const b = u.tokens[j];
+      if (b < n && g.nbrs[b].length === 1 && classes[a] === classes[b] && sameSide(u, i, j)) return true;
+    }
+  }
+  return false;
+}
+function sameSide(u, i, j) {
+  return u.kind === "tetrahedral" || i < 2 === j < 2;
+}
+function survivesSymmetry(s, u, classes) {
+  const n = s.atoms.length;
+  const colour = Int32Array.from(classes);
+  let top = 0;
+  for (const c of classes) if (c > top) top = c;
+  for (const a of u.atoms) colour[a] = ++top;
+  let inverted = false;
+  const res = automorphisms(s, {
+    key: [...u.atoms],
+    colour,
+    maxResults: 2e3,
+    onMapping: (map) => {
+      if (rebase(u, u.tokens.map((t) => mapToken(t, n, map)), 0) === 1) inverted = true;
+      return !inverted;
+    }
+  });
+  return !inverted && res.complete;
+}
+var init_perceive_rescue = __esm({
+  "src/chem/perceive-rescue.ts"() {
+    "use strict";
+    init_graph();
     init_perceive_units();
   }
 });
@@ -42604,8 +43326,9 @@ function perceive(s) {
   const graph = buildGraph(s);
   const rings = ringInfo(s, graph);
   const aromaticBond = aromaticBonds(s, rings, graph);
-  const classes = equivalenceClasses(s, { aromatic: aromaticBond });
-  const tokenClass = (t) => t < n ? classes[t] : t < 2 * n ? -1 : -2;
+  let classCache = null;
+  const classesOf = () => classCache ??= equivalenceClasses(s);
+  const tokenClass = (t) => t < n ? classesOf()[t] : t < 2 * n ? -1 : -2;
   const drafts = [];
   const invertibleAll = /* @__PURE__ */ new Set();
   for (let i = 0; i < n; i++) {
@@ -42656,7 +43379,19 @@ function perceive(s) {
       pairs: []
     });
   }
-  const kept = fixedPoint(drafts, graph, n);
+  let kept = fixedPoint(drafts, graph, n);
+  const tried = /* @__PURE__ */ new Set();
+  for (let round = 0; round < 4 && kept.length < drafts.length; round++) {
+    const keptSet = new Set(kept);
+    const rescued = drafts.filter((d) => {
+      if (keptSet.has(d) || tried.has(d)) return false;
+      tried.add(d);
+      return !swapsTerminalPair(d, graph, classesOf(), n) && survivesSymmetry(s, d, classesOf());
+    });
+    if (rescued.length === 0) break;
+    for (const d of rescued) d.pairs = [];
+    kept = fixedPoint(drafts, graph, n);
+  }
   kept.sort((a, b) => Math.min(...a.atoms) - Math.min(...b.atoms));
   const units = kept.map(({ pairs: _p, ...u }) => u);
   const unitOfAtom = new Int32Array(n).fill(-1);
@@ -42680,12 +43415,11 @@ function perceive(s) {
       );
     }
   }
-  return {
+  const result = {
     structure: s,
     graph,
     rings,
     aromaticBond,
-    classes,
     units,
     unitOfAtom,
     invertibleNitrogens,
@@ -42694,6 +43428,8 @@ function perceive(s) {
     componentOfAtom,
     remarks
   };
+  Object.defineProperty(result, "classes", { get: classesOf, enumerable: true });
+  return result;
 }
 function equalPairs(tokens2, cls, anchors, perEnd = false) {
   const out = [];
@@ -42705,8 +43441,7 @@ function equalPairs(tokens2, cls, anchors, perEnd = false) {
   for (let i = 0; i < 4; i++) {
     let same = 0;
     for (let j = 0; j < 4; j++) if (c[j] === c[i]) same++;
-    if (same >= 3) return null;
-    if (same === 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens2[i] });
+    if (same >= 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens2[i] });
   }
   return out;
 }
@@ -42750,6 +43485,7 @@ var init_perceive = __esm({
     init_perceive_centres();
     init_perceive_units();
     init_perceive_input();
+    init_perceive_rescue();
     init_perceive_bridges();
   }
 });
@@ -42890,11 +43626,14 @@ function describe(input, opts = {}) {
   const { p, group } = a;
   const s = p.structure;
   const labels = /* @__PURE__ */ new Map();
-  for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
+  if (s.stereo.length > 0) {
+    for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
+  }
   const units = unitFacts(a, labels);
   const stereoisomers = countStereoisomers(group, p.units.length);
   const chiral = a.chirality.chiral;
   const meso = chiral === null ? null : chiral === false && stereoisomers.chiral > 0;
+  const components = componentFacts(a);
   const facts = {
     stereocenters: units.filter((u) => u.kind === "tetrahedral").map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
     stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({ atoms: [u.atoms[0], u.atoms[1]], label: u.label, kind: u.kind, defined: u.defined })),
@@ -42906,9 +43645,9 @@ function describe(input, opts = {}) {
     mirror: mirrorFacts(a),
     enhanced: enhancedFacts(a),
     invertibleNitrogens: p.invertibleNitrogens.map((i) => ({ atom: s.atoms[i].inputNumber, drawnWithStereo: true })),
-    components: componentFacts(a),
+    components,
     constitutionKey: constitutionKey(s),
-    formula: molecularFormula(s),
+    formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice()
   };
   if (p.invertibleNitrogens.length > 0 && units.length === 0) {
@@ -42985,13 +43724,21 @@ function componentFacts(a) {
   const s = a.p.structure;
   const comps = a.p.components;
   const parent = parentComponent(s, comps);
-  return comps.map((c, k) => ({
-    index: k,
-    formula: molecularFormula(s, c),
-    heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
-    role: k === parent ? "parent" : "other",
-    smiles: writeSmiles(extractAtoms(s, c))
-  }));
+  const single = comps.length === 1;
+  return comps.map((c, k) => {
+    const f = {
+      index: k,
+      formula: single ? molecularFormula(s) : molecularFormula(s, c),
+      heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
+      role: k === parent ? "parent" : "other"
+    };
+    let smiles = null;
+    Object.defineProperty(f, "smiles", {
+      get: () => smiles ??= writeSmiles(single ? s : extractAtoms(s, c)),
+      enumerable: true
+    });
+    return f;
+  });
 }
 var unitKey;
 var init_describe = __esm({
@@ -43020,7 +43767,7 @@ function side(s) {
   const parent = comps.length <= 1 ? whole : analyse(extractAtoms(ns, comps[k] ?? []));
   const others2 = comps.filter((_c, i) => i !== k).map((c) => {
     const sub3 = extractAtoms(ns, c);
-    return { key: constitutionKey(sub3), smiles: writeSmiles(sub3) };
+    return { key: constitutionKey(sub3), smiles: writeSmiles(sub3), structure: sub3 };
   });
   return { whole, parent, others: others2 };
 }
@@ -43028,7 +43775,7 @@ function otherDifferences(a, b) {
   const left = b.others.slice();
   const onlyInA = [];
   for (const o of a.others) {
-    const j = left.findIndex((x) => x.key === o.key);
+    const j = left.findIndex((x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === "identical"));
     if (j >= 0) left.splice(j, 1);
     else onlyInA.push(o.smiles);
   }
@@ -43237,7 +43984,9 @@ function parseDescriptors(input, options = {}) {
         else if (word === "dl" || word === "d,l") signs.push({ sign: "±", offset: i });
         else addWord(out, word);
         if (word === "d" || word === "l" || word === "dl" || word === "d,l") {
-          out.remarks.push(`'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`);
+          out.remarks.push(
+            `'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`
+          );
         }
         i += word.length;
       }
@@ -43305,7 +44054,10 @@ function parseGroup(inner, base, context, problem) {
     if (context === "name") return { kind: "not-stereo", items: [], words: [] };
   }
   for (const b of bad2) {
-    problem(b.offset, b.text === "" ? "empty stereodescriptor" : `'${b.text}' is not a stereodescriptor (P-93)`);
+    problem(
+      b.offset,
+      b.text === "" ? "empty stereodescriptor" : `'${b.text}' is not a stereodescriptor (P-93)`
+    );
   }
   return { kind: "items", items, words };
 }
@@ -43323,19 +44075,27 @@ function finish(out, signs, problem) {
   }
   const stars = out.items.filter((it) => it.relativeStar).length;
   const pairs2 = out.items.filter((it) => it.pair).length;
-  const chiralItems = out.items.filter((it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P");
+  const chiralItems = out.items.filter(
+    (it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P"
+  );
   if (stars > 0 && stars < chiralItems.length) {
-    problem(out.items.find((it) => !it.relativeStar && chiralItems.includes(it)).offset, "some descriptors carry * and others do not");
+    problem(
+      out.items.find((it) => !it.relativeStar && chiralItems.includes(it)).offset,
+      "some descriptors carry * and others do not"
+    );
   }
   if (pairs2 > 0 && pairs2 < chiralItems.length) {
-    out.remarks.push("RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate");
+    out.remarks.push(
+      "RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate"
+    );
   }
   const racemic = out.prefixes.includes("rac") || pairs2 > 0 || out.rotationSign === "±" || out.fischer === "DL";
   const relative = out.prefixes.includes("rel") || stars > 0;
   if (racemic && relative) {
     problem(0, "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed; P-93.1.3 uses one of them");
   }
-  if (out.prefixes.includes("rel") && pairs2 > 0) problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
+  if (out.prefixes.includes("rel") && pairs2 > 0)
+    problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
   if (out.prefixes.length > 0 && out.items.length === 0) {
     problem(0, `'${out.prefixes[0]}-' must be followed by descriptors such as (1R,2S)`);
   }
@@ -43441,7 +44201,11 @@ function compareDescriptors(parsed, units, options = {}) {
     const cited = new Set(pairs2.map((p) => p.u));
     for (const u of defined) {
       if (!cited.has(u)) {
-        result.unlisted.push({ locant: unitLocants(u)[0]?.toString() ?? null, label: u.label, atoms: u.atoms });
+        result.unlisted.push({
+          locant: unitLocants(u)[0]?.toString() ?? null,
+          label: u.label,
+          atoms: u.atoms
+        });
       }
     }
     result.agrees = result.mismatches.length === 0 && result.notStereoUnits.length === 0 && result.undefinedAt.length === 0;
@@ -43579,11 +44343,18 @@ function run(ctx) {
     add("structure-source-refused", mainField(ctx), { field: mainField(ctx), error: sources.main.error });
   }
   sources?.components.forEach((s, i) => {
-    if (s.error) add("structure-source-refused", componentField(ctx, i), { field: componentField(ctx, i), error: s.error });
+    if (s.error)
+      add("structure-source-refused", componentField(ctx, i), {
+        field: componentField(ctx, i),
+        error: s.error
+      });
   });
   const paths = [
     { field: "structure.molfile", path: ctx.record?.structure.molfile },
-    ...(ctx.record?.stereo.components ?? []).map((c, i) => ({ field: `stereo.components.${i}.molfile`, path: c.molfile }))
+    ...(ctx.record?.stereo.components ?? []).map((c, i) => ({
+      field: `stereo.components.${i}.molfile`,
+      path: c.molfile
+    }))
   ];
   for (const p of paths) {
     if (p.path === void 0 || findings.some((f) => f.field === p.field)) continue;
@@ -43690,7 +44461,8 @@ function mixtureFindings(ctx, parent) {
       const data = { form, a: i + 1, b: j + 1, relation: rel.relation, explanation: rel.explanation };
       const at = `stereo.components.${j}`;
       if (form === "racemate") {
-        if (rel.relation !== "enantiomers") out.push(finding("racemate-components-not-enantiomers", at, data));
+        if (rel.relation !== "enantiomers")
+          out.push(finding("racemate-components-not-enantiomers", at, data));
         continue;
       }
       if (rel.relation === "diastereomers") continue;
@@ -43724,8 +44496,8 @@ function evidence(f) {
   const undef = undefinedUnits(f);
   return {
     units: unitSummary(defined),
-    allUnits: unitSummary(f.units) + (undef.length ? ` (${undef.length} undefined)` : ""),
-    labels: defined.map((u) => `${u.label ?? "?"}`).join(",") || "none",
+    allUnits: unitSummary(f.units) + (undef.length ? `, ${undef.length} undefined` : ""),
+    labels: defined.length ? defined.map((u) => `${u.label ?? "?"}`).join(",") : "none are drawn",
     mirror: f.mirror.explanation || (f.chiral ? "not superimposable on its mirror image" : "superimposable"),
     undefinedCount: undef.length,
     undefinedUnits: listUnits(undef),
@@ -43763,14 +44535,19 @@ function run2(ctx) {
     case "single-enantiomer":
     case "enantioenriched":
       if (f.chiral === false && e.undefinedCount === 0) add("enantiomer-but-achiral");
-      else if (e.undefinedCount > 0) add("enantiomer-undefined-units", {}, form === "enantioenriched" ? "warning" : void 0);
+      else if (e.undefinedCount > 0)
+        add("enantiomer-undefined-units", {}, form === "enantioenriched" ? "warning" : void 0);
       break;
     case "racemate":
       if (f.chiral === false && e.undefinedCount === 0) add("racemate-but-achiral");
       else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) add("racemate-no-chiral-isomers");
       else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
         const a = f.stereoisomers.achiral;
-        add("racemate-which-diastereomer", { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : "" }, "warning");
+        add(
+          "racemate-which-diastereomer",
+          { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : "" },
+          "warning"
+        );
       }
       break;
     case "single-diastereomer":
@@ -43790,8 +44567,8 @@ function passedEvidence(form, f, e) {
     return e.undefinedCount ? `form unknown; undefined stereo units: ${e.undefinedUnits}` : `form unknown; the structure defines ${e.units} and leaves none undefined`;
   }
   const chir = f.chiral === true ? "chiral" : f.chiral === false ? f.meso ? "meso (achiral)" : "achiral" : "open";
-  const why = f.chiral !== null && f.mirror.explanation ? `; ${f.mirror.explanation}` : "";
-  return `declared ${form}; structure is ${chir} (${e.units}${e.undefinedCount ? `, ${e.undefinedCount} undefined` : ""})${why}`;
+  const why = f.chiral !== null && f.mirror.explanation ? ` — ${f.mirror.explanation}` : "";
+  return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
 var messages2, formMatchesStructure;
 var init_form_matches_structure = __esm({
@@ -43849,38 +44626,61 @@ function run3(ctx) {
     out.push(finding(id, field2, { form, meaning: f.enhanced.meaning, ...data }, severity));
   };
   if (form === "single-enantiomer" && and.length > 0) {
-    add("and-group-with-single-enantiomer", "stereo.form", { atoms: atomList(and[0].atoms), group: and[0].id });
+    add("and-group-with-single-enantiomer", "stereo.form", {
+      atoms: atomList(and[0].atoms),
+      group: and[0].id
+    });
   }
   if (form === "racemate") {
-    if (or.length > 0) add("or-group-with-racemate", "stereo.form", { atoms: atomList(or[0].atoms), group: or[0].id });
-    else if (and.length > 1) add("several-and-groups-with-racemate", "stereo.form", { count: and.length }, "warning");
+    if (or.length > 0)
+      add("or-group-with-racemate", "stereo.form", { atoms: atomList(or[0].atoms), group: or[0].id });
+    else if (and.length > 1)
+      add("several-and-groups-with-racemate", "stereo.form", { count: and.length }, "warning");
     else if (and.length === 0 && f.enhanced.meaning === "absolute" && f.chiral === true) {
       const flag = ctx.main.structure?.chiralFlag === true ? "; the molfile chiral flag is set" : "";
       const labels = defined.map((u) => u.label ?? "?").join(",");
       const racemicNamed = parsed?.mode === "racemic";
-      add("racemate-drawn-absolute", "stereo.form", { labels, flag, racemicDescriptors: racemicNamed }, racemicNamed ? "note" : "warning");
+      add(
+        "racemate-drawn-absolute",
+        "stereo.form",
+        { labels, flag, racemicDescriptors: racemicNamed },
+        racemicNamed ? "note" : "warning"
+      );
     }
   }
   if (parsed && parsed.mode === "absolute" && parsed.items.some((it) => "RSMP".includes(it.label))) {
     if (or.length > 0) {
-      add("or-group-with-absolute-descriptors", descField, {
-        descriptors: descText,
-        atoms: atomList(or[0].atoms),
-        group: or[0].id
-      }, "warning");
+      add(
+        "or-group-with-absolute-descriptors",
+        descField,
+        {
+          descriptors: descText,
+          atoms: atomList(or[0].atoms),
+          group: or[0].id
+        },
+        "warning"
+      );
     } else if (and.length > 0 && form !== "single-enantiomer") {
-      add("and-group-with-absolute-descriptors", descField, {
-        descriptors: descText,
-        atoms: atomList(and[0].atoms),
-        group: and[0].id
-      }, "warning");
+      add(
+        "and-group-with-absolute-descriptors",
+        descField,
+        {
+          descriptors: descText,
+          atoms: atomList(and[0].atoms),
+          group: and[0].id
+        },
+        "warning"
+      );
     } else if (form === "single-enantiomer" && groups.length === 0 && ctx.main.structure?.chiralFlag === false && f.chiral === true) {
       add("relative-flag-with-single-enantiomer", "structure.molfile", { descriptors: descText }, "note");
     }
   }
   if (out.some((x) => x.severity !== "note")) return { findings: out };
   const groupText = groups.length ? groups.map((g) => `${g.type.toUpperCase()}${g.type === "abs" ? "" : g.id} (${atomList(g.atoms)})`).join(", ") : "no enhanced-stereo groups";
-  return { findings: out, passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}` };
+  return {
+    findings: out,
+    passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}`
+  };
 }
 var messages3, enhancedStereoMatchesForm;
 var init_enhanced_stereo_matches_form = __esm({
@@ -43923,7 +44723,8 @@ function prefixFindings(ctx, decl, facts) {
   const form = record.stereo.form;
   const out = [];
   const sources = [];
-  if (decl.field) sources.push({ field: "stereo.descriptors", text: record.stereo.descriptors ?? "", p: decl.field });
+  if (decl.field)
+    sources.push({ field: "stereo.descriptors", text: record.stereo.descriptors ?? "", p: decl.field });
   if (decl.name) sources.push({ field: "name", text: record.name ?? "", p: decl.name });
   const seen = /* @__PURE__ */ new Set();
   const add = (id, field2, data, severity) => {
@@ -43945,7 +44746,8 @@ function prefixFindings(ctx, decl, facts) {
       add("absolute-descriptors-with-racemate", field2, { text });
     }
     if (p.mode === "relative") {
-      if (form === "racemate") add("relative-notation-with-racemate", field2, { notation: notation(p), text }, "warning");
+      if (form === "racemate")
+        add("relative-notation-with-racemate", field2, { notation: notation(p), text }, "warning");
       else if ((form === "single-enantiomer" || form === "enantioenriched") && drawnAbsolute) {
         add("relative-notation-with-absolute-drawing", field2, { notation: notation(p), text }, "note");
       }
@@ -43980,22 +44782,27 @@ function countsText(c) {
   const e = Object.entries(c).filter(([, v]) => v > 0);
   return e.length ? e.map(([k, v]) => `${v} ${k}`).join(", ") : "no labelled units";
 }
-function compareOne(field2, text, parsed, facts, out) {
+function compareOne(field2, text, parsed, facts, out, form, evidence2) {
   const add = (id, data, severity) => {
     out.push(finding(id, field2, { field: field2, text, ...data }, severity));
   };
-  for (const p of parsed.problemDetails) add("descriptor-unreadable", { problem: p.message, offset: p.offset });
+  for (const p of parsed.problemDetails)
+    add("descriptor-unreadable", { problem: p.message, offset: p.offset });
   for (const r of parsed.remarks) add("descriptor-remark", { remark: r }, "note");
-  if (parsed.fischer && parsed.items.length === 0) add("fischer-not-compared", { fischer: parsed.fischer }, "note");
+  if (parsed.fischer && parsed.items.length === 0)
+    add("fischer-not-compared", { fischer: parsed.fischer }, "note");
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
   const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
   const computed = labelList(facts.units);
   if (cmp.method === "per-locant") {
     if (cmp.mismatches.length) {
-      const mismatches = cmp.mismatches.map((m) => `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join("–")})`).join("; ");
+      const mismatches = cmp.mismatches.map(
+        (m) => `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join("–")})`
+      ).join("; ");
       add("descriptor-label-mismatch", { count: cmp.mismatches.length, mismatches, method: cmp.method });
     }
-    if (cmp.notStereoUnits.length) add("descriptor-not-stereo-unit", { locants: cmp.notStereoUnits.join(", "), computed });
+    if (cmp.notStereoUnits.length)
+      add("descriptor-not-stereo-unit", { locants: cmp.notStereoUnits.join(", "), computed });
     if (cmp.undefinedAt.length) add("descriptor-at-undefined-unit", { locants: cmp.undefinedAt.join(", ") });
     if (cmp.agrees && cmp.unlisted.length) {
       const missing = cmp.unlisted.map((u) => `${u.locant ?? `atom ${u.atoms.join("–")}`} (${u.label})`).join(", ");
@@ -44006,9 +44813,18 @@ function compareOne(field2, text, parsed, facts, out) {
   if (parsed.embeddedDescriptors) return cmp;
   const definedCount = Object.values(cmp.computedCounts).reduce((a, b) => a + b, 0);
   if (!cmp.agrees && facts.undefined > 0 && parsed.items.length > definedCount) {
+    if (parsed.mode === "racemic" && form === "racemate" && definedCount === 0) {
+      evidence2.push(`${text} names a racemate; the drawing shows no configuration, as usual for a racemate`);
+      return null;
+    }
     add(
       "descriptors-cite-undefined-units",
-      { undefinedCount: facts.undefined, declaredCount: parsed.items.length, definedCount, mode: parsed.mode },
+      {
+        undefinedCount: facts.undefined,
+        declaredCount: parsed.items.length,
+        definedCount,
+        mode: parsed.mode
+      },
       parsed.mode === "racemic" ? "note" : void 0
     );
     return cmp;
@@ -44016,7 +44832,10 @@ function compareOne(field2, text, parsed, facts, out) {
   if (!cmp.agrees) {
     const subset = (d) => Object.entries(d).every(([k, v]) => v <= (cmp.computedCounts[k] ?? 0));
     const inv = Object.fromEntries(
-      Object.entries(cmp.declaredCounts).map(([k, v]) => [{ R: "S", S: "R", M: "P", P: "M" }[k] ?? k, v])
+      Object.entries(cmp.declaredCounts).map(([k, v]) => [
+        { R: "S", S: "R", M: "P", P: "M" }[k] ?? k,
+        v
+      ])
     );
     const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative";
     const direct = subset(cmp.declaredCounts);
@@ -44053,30 +44872,50 @@ function run4(ctx) {
   const note = (what, cmp) => {
     if (!cmp || cmp.method === "none") return;
     const how = cmp.method === "per-locant" ? "per locant (atom maps)" : `as counts (${cmp.whyNotPerLocant})`;
-    evidence2.push(`${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ", up to inversion" : ""}`);
+    evidence2.push(
+      `${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ", up to inversion" : ""}`
+    );
   };
   const fieldText = record.stereo.descriptors ?? "";
-  if (decl.field) note(fieldText, compareOne("stereo.descriptors", fieldText, decl.field, f, out));
+  if (decl.field)
+    note(
+      fieldText,
+      compareOne("stereo.descriptors", fieldText, decl.field, f, out, record.stereo.form, evidence2)
+    );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
       const nameText = (record.name ?? "").slice(0, (record.name ?? "").length - decl.name.rest.length).replace(/[-\s]+$/, "");
       out.push(finding("name-and-descriptors-disagree", "name", { nameText, fieldText }, "warning"));
     } else if (!decl.field || decl.field.items.length === 0) {
-      note(record.name ?? "", compareOne("name", record.name ?? "", decl.name, f, out));
+      const name = record.name ?? "";
+      const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2013\u2212]+$/, "");
+      note(front, compareOne("name", front, decl.name, f, out, record.stereo.form, evidence2));
     }
   } else if (decl.name) {
     for (const p of decl.name.problemDetails) {
-      out.push(finding("descriptor-unreadable", "name", { field: "name", text: record.name ?? "", problem: p.message, offset: p.offset }));
+      out.push(
+        finding("descriptor-unreadable", "name", {
+          field: "name",
+          text: record.name ?? "",
+          problem: p.message,
+          offset: p.offset
+        })
+      );
     }
     if (decl.name.fischer && !decl.field) {
-      out.push(finding("fischer-not-compared", "name", { field: "name", fischer: decl.name.fischer }, "note"));
+      out.push(
+        finding("fischer-not-compared", "name", { field: "name", fischer: decl.name.fischer }, "note")
+      );
     }
   }
   (record.stereo.components ?? []).forEach((c, i) => {
     const cf = ctx.components[i]?.facts;
     if (!c.descriptors || !cf) return;
     const field2 = `stereo.components.${i}.descriptors`;
-    note(`component ${i + 1} ${c.descriptors}`, compareOne(field2, c.descriptors, parseDescriptors(c.descriptors), cf, out));
+    note(
+      `component ${i + 1} ${c.descriptors}`,
+      compareOne(field2, c.descriptors, parseDescriptors(c.descriptors), cf, out, "component", evidence2)
+    );
   });
   out.push(...prefixFindings(ctx, decl, f));
   const hasAny = decl.field !== null || decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== "none" || decl.name.words.length > 0 || decl.name.rotationSign !== null);
@@ -44154,7 +44993,10 @@ function parseRatio(text) {
     offset += piece.length + 1;
   }
   if (pieces.length < 2 && out.problems.length === 0) {
-    out.problems.push({ offset: 0, message: "a ratio needs two or more parts separated by ':' (e.g. 70:30)" });
+    out.problems.push({
+      offset: 0,
+      message: "a ratio needs two or more parts separated by ':' (e.g. 70:30)"
+    });
   }
   if (withPercent > 0 && withPercent < pieces.length) {
     out.problems.push({ offset: 0, message: "some parts carry '%' and others do not" });
@@ -44189,12 +45031,18 @@ function run5(ctx) {
   let parts = [];
   if (ratio !== void 0) {
     const r = parseRatio(ratio);
-    for (const p of r.problems) add("ratio-unreadable", "stereo.ratio", { ratio, problem: p.message, offset: p.offset + 1 });
+    for (const p of r.problems)
+      add("ratio-unreadable", "stereo.ratio", { ratio, problem: p.message, offset: p.offset + 1 });
     if (r.problems.length === 0) {
       parts = r.parts;
       const sum = parts.reduce((a, b) => a + b, 0);
       if (r.looksLikePercent && Math.abs(sum - 100) > cfg.ratioSumTolerance) {
-        add("ratio-parts-not-100", "stereo.ratio", { ratio, sum: fmt(sum), tolerance: cfg.ratioSumTolerance }, "warning");
+        add(
+          "ratio-parts-not-100",
+          "stereo.ratio",
+          { ratio, sum: fmt(sum), tolerance: cfg.ratioSumTolerance },
+          "warning"
+        );
       }
       const nComp = components?.length ?? 0;
       const enantiomerForm = form === "racemate" || form === "enantioenriched" || form === "single-enantiomer";
@@ -44233,22 +45081,33 @@ function run5(ctx) {
         tolerance: cfg.eeTolerance
       });
     }
-    if (form === "racemate" && ee > cfg.eeTolerance) add("racemate-ee-not-zero", "stereo.ee", { ee, tolerance: cfg.eeTolerance });
+    if (form === "racemate" && ee > cfg.eeTolerance)
+      add("racemate-ee-not-zero", "stereo.ee", { ee, tolerance: cfg.eeTolerance });
   }
   const effectiveEe = ee ?? ratioEe;
   const source = ee !== void 0 ? "stated" : `from the ratio ${ratio ?? ""}`;
   if (effectiveEe !== null) {
     const field2 = ee !== void 0 ? "stereo.ee" : "stereo.ratio";
     if (form === "single-enantiomer" && effectiveEe < cfg.singleEnantiomerMinEe) {
-      add("single-enantiomer-ee-low", field2, { ee: fmt(effectiveEe), source, threshold: cfg.singleEnantiomerMinEe });
+      add("single-enantiomer-ee-low", field2, {
+        ee: fmt(effectiveEe),
+        source,
+        threshold: cfg.singleEnantiomerMinEe
+      });
     }
     if (form === "enantioenriched" && effectiveEe <= cfg.eeTolerance) {
-      add("enantioenriched-ee-zero", field2, { ee: fmt(effectiveEe), source, tolerance: cfg.eeTolerance }, "warning");
+      add(
+        "enantioenriched-ee-zero",
+        field2,
+        { ee: fmt(effectiveEe), source, tolerance: cfg.eeTolerance },
+        "warning"
+      );
     }
-    evidence2.push(`ee ${fmt(effectiveEe)}% (${source})`);
+    if (ee !== void 0) evidence2.push(`ee ${fmt(effectiveEe)}% (stated)`);
   }
   if (out.some((x) => x.severity !== "note")) return { findings: out };
-  if (parts.length && evidence2.length === 0) evidence2.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
+  if (parts.length && evidence2.length === 0)
+    evidence2.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
   return { findings: out, passed: `${evidence2.join("; ")}; consistent with ${form}` };
 }
 var messages5, ratioAndEeConsistent;
@@ -44325,10 +45184,14 @@ function run6(ctx) {
       );
     }
   }
-  if (form === "single-enantiomer" && zero) add("single-enantiomer-zero-rotation", "stereo.rotation.value", {}, "note");
+  if (form === "single-enantiomer" && zero)
+    add("single-enantiomer-zero-rotation", "stereo.rotation.value", {}, "note");
   if (out.some((x) => x.severity !== "note")) return { findings: out };
   const s = sign && sign.sign !== "±" ? `; sign ${sign.sign === "+" ? "(+)" : "(−)"} in ${sign.field} agrees` : "";
-  return { findings: out, passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}` };
+  return {
+    findings: out,
+    passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}`
+  };
 }
 var messages6, WHY, rotationConsistent;
 var init_rotation_consistent = __esm({
@@ -44366,8 +45229,10 @@ function run7(ctx) {
   const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
   const out = [];
   const claims = STEREO_CLAIM_FORMS.includes(form);
-  const others2 = definedUnits(f).filter((u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === "tetrahedral"));
-  const atomsOf = (list) => list.map((n) => `atom ${n.atom}`).join(", ");
+  const others2 = definedUnits(f).filter(
+    (u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === "tetrahedral")
+  );
+  const atomsOf = (list) => list.map((n) => `(atom ${n.atom})`).join(", ");
   if (claims && others2.length === 0) {
     const list = drawn.length ? drawn : f.invertibleNitrogens;
     out.push(
@@ -44378,11 +45243,16 @@ function run7(ctx) {
       })
     );
   } else if (drawn.length > 0) {
-    out.push(finding("stereo-drawn-on-invertible-nitrogen", "structure", { form, atoms: atomsOf(drawn) }, "note"));
+    out.push(
+      finding("stereo-drawn-on-invertible-nitrogen", "structure", { form, atoms: atomsOf(drawn) }, "note")
+    );
   }
   if (out.some((x) => x.severity !== "note")) return { findings: out };
   if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
-  return { findings: out, passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens` };
+  return {
+    findings: out,
+    passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens`
+  };
 }
 var messages7, nitrogenInversion;
 var init_nitrogen_inversion = __esm({
@@ -44438,14 +45308,19 @@ function run8(ctx) {
   const out = [];
   const add = (id, other, data, severity) => {
     out.push(
-      finding(id, id.startsWith("enantiomer-rotation") ? "stereo.rotation.value" : "structure", {
-        form,
-        otherId: other.id ?? other.file,
-        otherFile: other.file,
-        otherName: other.record.name ? `, ${other.record.name}` : "",
-        otherForm: other.record.stereo.form,
-        ...data
-      }, severity)
+      finding(
+        id,
+        id.startsWith("enantiomer-rotation") ? "stereo.rotation.value" : "structure",
+        {
+          form,
+          otherId: other.id ?? other.file,
+          otherFile: other.file,
+          otherName: other.record.name ? `, ${other.record.name}` : "",
+          otherForm: other.record.stereo.form,
+          ...data
+        },
+        severity
+      )
     );
   };
   let compared = 0;
@@ -44522,11 +45397,18 @@ function reviewWaivers(record, findings, knownChecks) {
   const firstIndex = /* @__PURE__ */ new Map();
   waivers.forEach((w, index) => {
     const field2 = `waivers.${index}`;
-    const missing = [blank(w.reason) ? "reason" : null, blank(w.approved_by) ? "approver (approved_by)" : null].filter(
-      (x) => x !== null
-    );
+    const missing = [
+      blank(w.reason) ? "reason" : null,
+      blank(w.approved_by) ? "approver (approved_by)" : null
+    ].filter((x) => x !== null);
     if (missing.length) {
-      out.push(finding("waiver-incomplete", field2, { waivedCheck: w.check, index, missing: missing.join(" and no ") }));
+      out.push(
+        finding("waiver-incomplete", field2, {
+          waivedCheck: w.check,
+          index,
+          missing: missing.join(" and no ")
+        })
+      );
     }
     const seen = firstIndex.get(w.check);
     if (seen !== void 0) {
@@ -44540,7 +45422,12 @@ function reviewWaivers(record, findings, knownChecks) {
         finding(
           "waiver-matches-nothing",
           field2,
-          { waivedCheck: w.check, index, knownCheck: !unknown, known: unknown ? " (and no check has that id)" : "" },
+          {
+            waivedCheck: w.check,
+            index,
+            knownCheck: !unknown,
+            known: unknown ? " (and no check has that id)" : ""
+          },
           "note"
         )
       );
@@ -44554,7 +45441,10 @@ function run9(ctx) {
   const findings = reviewWaivers(ctx.record, ctx.findings ?? []);
   if (findings.some((f) => f.severity !== "note")) return { findings };
   const accepted = waivers.filter((w) => (ctx.findings ?? []).some((f) => f.check === w.check)).length;
-  return { findings, passed: `${waivers.length} waiver(s) complete; ${accepted} accept findings of this record` };
+  return {
+    findings,
+    passed: `${waivers.length} waiver(s) complete; ${accepted} accept findings of this record`
+  };
 }
 var WAIVER_CHECK_ID, messages9, waiverReview;
 var init_waivers = __esm({
@@ -44669,10 +45559,12 @@ var DEFAULT_SOURCES = Object.freeze({
 // src/audit/engine.ts
 async function defaultEngine() {
   const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
+  const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
   return {
     readStructure: (text, options) => chem.readStructure(text, options),
     describe: (s) => chem.describe(s),
-    relate: (a, b) => chem.relate(a, b)
+    relate: (a, b) => chem.relate(a, b),
+    formula: (s) => graph.molecularFormula(s)
   };
 }
 
@@ -44750,7 +45642,7 @@ function schemaFindings(loaded, config) {
   if (configured === "off") return [];
   return loaded.problems.map((p) => ({
     check: SCHEMA_CHECK_ID,
-    messageId: "record-problem",
+    messageId: p.code ?? "record-problem",
     severity: configured ?? "error",
     message: p.message,
     data: { path: p.path, problem: p.message },
@@ -44773,21 +45665,35 @@ var NOTHING = Object.freeze({
 function failed(message, line = null, offset = null) {
   return { structure: null, facts: null, error: { message, line, offset } };
 }
-function readSource(source, engine) {
-  if (source === null) return NOTHING;
-  if (source.text === null) return failed(source.error ?? "the structure could not be read");
+function readOnly(source, engine) {
+  if (source === null) return { structure: null, failure: NOTHING };
+  if (source.text === null)
+    return { structure: null, failure: failed(source.error ?? "the structure could not be read") };
   let read;
   try {
     read = engine.readStructure(source.text, { format: source.format });
   } catch (e) {
-    return failed(
-      `internal error while reading the ${source.format === "smiles" ? "SMILES" : "molfile"}: ${e.message}`
-    );
+    const what = source.format === "smiles" ? "SMILES" : "molfile";
+    return {
+      structure: null,
+      failure: failed(`internal error while reading the ${what}: ${e.message}`)
+    };
   }
   if (!read.ok) {
     const what = source.format === "smiles" ? "SMILES" : source.file ? `molfile ${source.file}` : "molfile";
-    return failed(`${what}: ${read.error.message}`, read.error.at.line ?? null, read.error.at.offset ?? null);
+    return {
+      structure: null,
+      failure: failed(
+        `${what}: ${read.error.message}`,
+        read.error.at.line ?? null,
+        read.error.at.offset ?? null
+      )
+    };
   }
+  return { structure: read.structure, failure: null };
+}
+function describeRead(read, engine) {
+  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
   try {
     return { structure: read.structure, facts: engine.describe(read.structure), error: null };
   } catch (e) {
@@ -44801,6 +45707,9 @@ function readSource(source, engine) {
       }
     };
   }
+}
+function readSource(source, engine) {
+  return describeRead(readOnly(source, engine), engine);
 }
 function sourcesOf(loaded) {
   if (loaded.sources) return loaded.sources;
@@ -44833,12 +45742,22 @@ var StructureCache = class {
     this.engine = engine;
   }
   engine;
+  reads = /* @__PURE__ */ new WeakMap();
   mains = /* @__PURE__ */ new WeakMap();
   comps = /* @__PURE__ */ new WeakMap();
+  /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
+  read(loaded) {
+    let r = this.reads.get(loaded);
+    if (!r) {
+      r = readOnly(sourcesOf(loaded).main, this.engine);
+      this.reads.set(loaded, r);
+    }
+    return r;
+  }
   main(loaded) {
     let m = this.mains.get(loaded);
     if (!m) {
-      m = readSource(sourcesOf(loaded).main, this.engine);
+      m = describeRead(this.read(loaded), this.engine);
       this.mains.set(loaded, m);
     }
     return m;
@@ -44913,36 +45832,55 @@ var package_default = {
 var VERSION = package_default.version;
 
 // src/audit/view.ts
-function buildRegistryView(records, cache, underReview) {
+function formulaPart(key3) {
+  const cut = key3.lastIndexOf("/");
+  return cut < 0 ? key3 : key3.slice(0, cut);
+}
+function buildRegistryView(records, cache2, underReview) {
   const entries = [];
+  const sourceOf = /* @__PURE__ */ new Map();
   for (const loaded of records) {
     const record = loaded.record;
     if (record === null) continue;
-    entries.push({
+    const entry = {
       id: loaded.id,
       file: loaded.file,
       record,
       get main() {
-        return cache.main(loaded);
+        return cache2.main(loaded);
       },
       underReview: underReview(loaded)
-    });
+    };
+    entries.push(entry);
+    sourceOf.set(entry, loaded);
   }
+  const formula = cache2.engine.formula?.bind(cache2.engine);
   let index = null;
+  const indexKey = (e) => {
+    if (!formula) return e.main.facts?.constitutionKey;
+    const read = cache2.read(sourceOf.get(e));
+    if (!read.structure) return void 0;
+    try {
+      return formula(read.structure);
+    } catch {
+      return e.main.facts?.constitutionKey === void 0 ? void 0 : formulaPart(e.main.facts.constitutionKey);
+    }
+  };
   return {
     entries,
     withConstitution(key3) {
       if (index === null) {
         index = /* @__PURE__ */ new Map();
         for (const e of entries) {
-          const k = e.main.facts?.constitutionKey;
+          const k = indexKey(e);
           if (k === void 0) continue;
           const list = index.get(k);
           if (list) list.push(e);
           else index.set(k, [e]);
         }
       }
-      return index.get(key3) ?? [];
+      const hits = index.get(formula ? formulaPart(key3) : key3) ?? [];
+      return formula ? hits.filter((e) => e.main.facts?.constitutionKey === key3) : hits;
     }
   };
 }
@@ -44950,13 +45888,13 @@ function buildRegistryView(records, cache, underReview) {
 // src/audit/run.ts
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
-  const cache = new StructureCache(options.engine);
+  const cache2 = new StructureCache(options.engine);
   const audited = new Set(records);
   const registryRecords = options.registry ?? records;
-  const registry = buildRegistryView(registryRecords, cache, (r) => audited.has(r));
+  const registry = buildRegistryView(registryRecords, cache2, (r) => audited.has(r));
   const engineApi = { relate: options.engine.relate.bind(options.engine) };
   const results = records.map(
-    (loaded) => auditOne(loaded, options.checks, config, cache, registry, engineApi)
+    (loaded) => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
   );
   return {
     tool: { name: "stereogate", version: VERSION },
@@ -44965,12 +45903,13 @@ function auditRecords(records, options) {
     caution: CAUTION
   };
 }
-function auditOne(loaded, checks, config, cache, registry, engine) {
-  const { main, components } = cache.all(loaded);
+function auditOne(loaded, checks, config, cache2, registry, engine) {
+  const { main, components } = cache2.all(loaded);
   const findings = schemaFindings(loaded, config);
   applyWaivers(findings, loaded);
   const passed = [];
-  for (const check of checks) {
+  const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
+  for (const check of unparsed ? [] : checks) {
     if (configuredSeverity(config, check.id) === "off") continue;
     const ctx = {
       loaded,

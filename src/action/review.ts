@@ -15,8 +15,8 @@ import type { Engine, Runner } from './ports.js';
 import { postReview } from './post-review.js';
 import type { ActionSettings, FailOn } from './settings.js';
 
-/** The job summary may hold 1 MiB; leave room for the lines about what was posted. */
-export const SUMMARY_MAX_CHARS = 900_000;
+/** The job summary may hold 1 MiB (bytes, and emoji take four); leave room for the lines about what was posted. */
+export const SUMMARY_MAX_CHARS = 500_000;
 
 export interface ReviewOutcome {
   result: AuditResult;
