@@ -56,9 +56,35 @@ export function kekulize(inp: KekuleInput): KekuleResult {
       match[best] = v;
     }
   }
-  for (const v of byDegree) {
-    if (match[v] !== -1) continue;
-    if (!augment(v, adj, match)) return { ok: false, atom: globalOf[v]! };
+  // Augment per connected component, so that a large molecule with many separate aromatic systems costs
+  // the size of each system, not of the whole molecule, per augmenting search.
+  const comp = new Int32Array(m).fill(-1);
+  const pos = new Int32Array(m);
+  for (let s0 = 0; s0 < m; s0++) {
+    if (comp[s0] !== -1) continue;
+    const members = [s0];
+    comp[s0] = s0;
+    let exposed = false;
+    for (let h = 0; h < members.length; h++) {
+      const u = members[h]!;
+      if (match[u] === -1) exposed = true;
+      for (const w of adj[u]!) {
+        if (comp[w] === -1) {
+          comp[w] = s0;
+          members.push(w);
+        }
+      }
+    }
+    if (!exposed) continue;
+    members.forEach((u, k) => (pos[u] = k));
+    const subAdj = members.map((u) => adj[u]!.map((w) => pos[w]!));
+    const subMatch = new Int32Array(members.length);
+    members.forEach((u, k) => (subMatch[k] = match[u] === -1 ? -1 : pos[match[u]!]!));
+    for (let k = 0; k < members.length; k++) {
+      if (subMatch[k] !== -1) continue;
+      if (!augment(k, subAdj, subMatch)) return { ok: false, atom: globalOf[members[k]!]! };
+    }
+    members.forEach((u, k) => (match[u] = members[subMatch[k]!]!));
   }
   const doubleBonds: number[] = [];
   for (let u = 0; u < m; u++) {
