@@ -3468,7 +3468,7 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
   const branch = new Int32Array(n);
   const order = new Int32Array(n);
   const basis = [];
-  const pivots = [];
+  const owner = new Int32Array(m).fill(-1);
   const rings = [];
   let below = 0;
   for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
@@ -3536,15 +3536,14 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
     cands.sort((p, q) => p.size - q.size);
     for (const c of cands) {
       const v = c.bits.slice();
-      for (let j = 0; j < basis.length; j++) {
-        const p2 = pivots[j];
-        if (v[p2 >>> 5] & 1 << (p2 & 31)) xorInto(v, basis[j]);
+      let p = firstBit(v);
+      while (p >= 0 && owner[p] >= 0) {
+        xorInto(v, basis[owner[p]]);
+        p = firstBit(v);
       }
-      const p = firstBit(v);
       if (p < 0) continue;
-      for (let j = 0; j < basis.length; j++) if (basis[j][p >>> 5] & 1 << (p & 31)) xorInto(basis[j], v);
+      owner[p] = basis.length;
       basis.push(v);
-      pivots.push(p);
       rings.push(c.atoms);
       if (rings.length === nullity) break;
     }
@@ -27665,7 +27664,7 @@ function buildGraph2(s) {
     tetraAt,
     bondAt,
     axialAt,
-    mancude: perceiveMancude(s, nbr, ord, mass),
+    mancude: null,
     hasBondStereo,
     stereoCount: s.stereo.length,
     ringFixed: [],
@@ -27737,6 +27736,10 @@ function ringSizeThrough(g, a, b, max) {
   }
   return 0;
 }
+function mancudeOf(g) {
+  if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
+  return g.mancude;
+}
 var CHALCOGEN_OR_N;
 var init_graph2 = __esm({
   "src/chem/cip/graph.ts"() {
@@ -27752,6 +27755,7 @@ var H_ATOM, PHANTOM, DUPLICATE_MASS, NODE_BUDGET, CipNode, Digraph;
 var init_digraph = __esm({
   "src/chem/cip/digraph.ts"() {
     "use strict";
+    init_graph2();
     H_ATOM = -1;
     PHANTOM = -2;
     DUPLICATE_MASS = (m) => m;
@@ -27800,7 +27804,7 @@ var init_digraph = __esm({
         this.count++;
         const g = this.g;
         if (z >= 0 && parent !== null) {
-          return new CipNode(this.nextId++, atom, z, g.mancude.dupMass[parent.atom], depth, dist, true, parent);
+          return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
@@ -27825,7 +27829,7 @@ var init_digraph = __esm({
         for (let i = 0; i < nb.length; i++) {
           const b = nb[i];
           const order = od[i];
-          const mz = order === 2 && g.mancude.bond.has(a * g.n + b) ? g.mancude.dupZ[a] : -1;
+          const mz = order === 2 && mancudeOf(g).bond.has(a * g.n + b) ? mancudeOf(g).dupZ[a] : -1;
           if (parent !== null && b === parent.atom) {
             if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
             else for (let k = 1; k < order; k++) out.push(this.make(b, d, parent.depth, true, node));
@@ -27860,15 +27864,6 @@ var init_digraph = __esm({
 });
 
 // src/chem/cip/rules.ts
-function rule1a(n) {
-  return n.z;
-}
-function rule1b(n) {
-  return -n.dist;
-}
-function rule2(n) {
-  return n.mass;
-}
 function rule3(label) {
   return label === "Z" ? 2 : label === "E" ? 1 : 0;
 }
@@ -27882,26 +27877,17 @@ function rule4c(label) {
 function rule5(label) {
   return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
 }
-function rule6(n, ref) {
-  return n.atom === ref ? 1 : 0;
-}
 function likeClass(label) {
   return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
 }
 function isChiralLabel(label) {
   return label === "R" || label === "S" || label === "M" || label === "P";
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A, RULE_4B, RULE_4C, RULE_5, RULE_6;
+var RULE_4A, RULE_5, RULE_6;
 var init_rules = __esm({
   "src/chem/cip/rules.ts"() {
     "use strict";
-    RULE_1A = 0;
-    RULE_1B = 1;
-    RULE_2 = 2;
-    RULE_3 = 3;
     RULE_4A = 4;
-    RULE_4B = 5;
-    RULE_4C = 6;
     RULE_5 = 7;
     RULE_6 = 8;
   }
@@ -27991,13 +27977,22 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var Ranker;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
     init_digraph();
     init_rules();
     init_rule4b();
+    RULE_1A = 0;
+    RULE_1B = 1;
+    RULE_2 = 2;
+    RULE_3 = 3;
+    RULE_4A2 = 4;
+    RULE_4B = 5;
+    RULE_4C = 6;
+    RULE_52 = 7;
+    RULE_62 = 8;
     Ranker = class {
       constructor(dg, auxOf) {
         this.dg = dg;
@@ -28051,26 +28046,26 @@ var init_compare = __esm({
       }
       setRule6(ref) {
         this.dg.rule6Ref = ref;
-        this.active[RULE_6] = ref >= 0;
+        this.active[RULE_62] = ref >= 0;
       }
-      value(rule4, n) {
-        switch (rule4) {
+      value(rule2, n) {
+        switch (rule2) {
           case RULE_1A:
-            return rule1a(n);
+            return n.z;
           case RULE_1B:
-            return rule1b(n);
+            return -n.dist;
           case RULE_2:
-            return rule2(n);
+            return n.mass;
           case RULE_3:
             return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
-          case RULE_4A:
+          case RULE_4A2:
             return this.stereoValue(n, rule4a);
           case RULE_4C:
             return this.stereoValue(n, rule4c);
-          case RULE_5:
+          case RULE_52:
             return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
-          case RULE_6:
-            return rule6(n, this.dg.rule6Ref);
+          case RULE_62:
+            return n.atom === this.dg.rule6Ref ? 1 : 0;
           default:
             return 0;
         }
@@ -28085,27 +28080,27 @@ var init_compare = __esm({
        * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
        * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
        */
-      compareRule(rule4, x, fx, y, fy) {
+      compareRule(rule2, x, fx, y, fy) {
         if (y === null) return 1;
-        if (rule4 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
-        let c = this.value(rule4, x) - this.value(rule4, y);
+        if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+        let c = this.value(rule2, x) - this.value(rule2, y);
         if (c !== 0) return c > 0 ? 1 : -1;
         const qx = [x];
         const qfx = [fx];
         const qy = [y];
         const qfy = [fy];
         for (let i = 0; i < qx.length; i++) {
-          const sx = this.sorted(qx[i], qfx[i], rule4).nodes;
-          const sy = this.sorted(qy[i], qfy[i], rule4).nodes;
+          const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
+          const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
           const m = Math.min(sx.length, sy.length);
           for (let j = 0; j < m; j++) {
-            c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
+            c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
             if (c !== 0) return c > 0 ? 1 : -1;
           }
-          if (sx.length !== sy.length && rule4 === RULE_1A) {
+          if (sx.length !== sy.length && rule2 === RULE_1A) {
             const longer = sx.length > sy.length ? sx : sy;
             for (let j = m; j < longer.length; j++) {
-              if (this.value(rule4, longer[j]) > 0) return longer === sx ? 1 : -1;
+              if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
             }
           }
           for (let j = 0; j < m; j++) {
@@ -28129,9 +28124,9 @@ var init_compare = __esm({
       /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
       sorted(node, from, level2) {
         const hidden = level2 >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
-        const mirrored2 = this.mirror && level2 >= RULE_5 ? 2 : 0;
+        const mirrored2 = this.mirror && level2 >= RULE_52 ? 2 : 0;
         const num = ((from === null ? 0 : from.id + 1) * 16 + level2) * 4 + hidden + mirrored2;
-        const key3 = level2 >= RULE_6 ? `${num}:${this.dg.rule6Ref}` : num;
+        const key3 = level2 >= RULE_62 ? `${num}:${this.dg.rule6Ref}` : num;
         if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
         const hit = node.sorted.get(key3);
         if (hit) return hit;
@@ -28159,13 +28154,13 @@ var init_compare = __esm({
        * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
        * first, writing them and their ties into `out` at the same places.
        */
-      sortRun(nodes, i, j, centre, rule4, out) {
+      sortRun(nodes, i, j, centre, rule2, out) {
         const run11 = nodes.slice(i, j);
         const k = run11.length;
         const m = new Array(k * k).fill(0);
         for (let a = 0; a < k; a++) {
           for (let b = a + 1; b < k; b++) {
-            const c = this.compareRule(rule4, run11[a], centre, run11[b], centre);
+            const c = this.compareRule(rule2, run11[a], centre, run11[b], centre);
             m[a * k + b] = c;
             m[b * k + a] = -c;
           }
@@ -28556,6 +28551,7 @@ var init_helix = __esm({
 
 // src/chem/cip/index.ts
 function assignCip(s) {
+  if (s.stereo.length === 0) return [];
   const g = buildGraph2(s);
   const labels = s.stereo.map((_, i) => labelPlain(g, i));
   if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
@@ -29370,7 +29366,7 @@ function analyse(input) {
   return { norm, p, group, state, defined, reported, chirality };
 }
 function stereogenicSomewhere(g, x, defined, k) {
-  if (!g.perms.some((perm) => perm[k] === k)) return true;
+  if (g.perms.length === 1) return true;
   const open = [];
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
   if (open.length > 10) return true;
@@ -38460,12 +38456,12 @@ var require_applicability = __commonJS({
     }
     exports.schemaHasRulesForType = schemaHasRulesForType;
     function shouldUseGroup(schema, group) {
-      return group.rules.some((rule4) => shouldUseRule(schema, rule4));
+      return group.rules.some((rule2) => shouldUseRule(schema, rule2));
     }
     exports.shouldUseGroup = shouldUseGroup;
-    function shouldUseRule(schema, rule4) {
+    function shouldUseRule(schema, rule2) {
       var _a;
-      return schema[rule4.keyword] !== void 0 || ((_a = rule4.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
+      return schema[rule2.keyword] !== void 0 || ((_a = rule2.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
     }
     exports.shouldUseRule = shouldUseRule;
   }
@@ -39517,9 +39513,9 @@ var require_validate = __commonJS({
       if (useDefaults)
         (0, defaults_1.assignDefaults)(it, group.type);
       gen.block(() => {
-        for (const rule4 of group.rules) {
-          if ((0, applicability_1.shouldUseRule)(schema, rule4)) {
-            keywordCode(it, rule4.keyword, rule4.definition, group.type);
+        for (const rule2 of group.rules) {
+          if ((0, applicability_1.shouldUseRule)(schema, rule2)) {
+            keywordCode(it, rule2.keyword, rule2.definition, group.type);
           }
         }
       });
@@ -39554,9 +39550,9 @@ var require_validate = __commonJS({
     function checkKeywordTypes(it, ts) {
       const rules = it.self.RULES.all;
       for (const keyword in rules) {
-        const rule4 = rules[keyword];
-        if (typeof rule4 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule4)) {
-          const { type } = rule4.definition;
+        const rule2 = rules[keyword];
+        if (typeof rule2 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule2)) {
+          const { type } = rule2.definition;
           if (type.length && !type.some((t) => hasApplicableType(ts, t))) {
             strictTypesError(it, `missing type "${type.join(",")}" for keyword "${keyword}"`);
           }
@@ -41642,8 +41638,8 @@ var require_core = __commonJS({
         return this;
       }
       getKeyword(keyword) {
-        const rule4 = this.RULES.all[keyword];
-        return typeof rule4 == "object" ? rule4.definition : !!rule4;
+        const rule2 = this.RULES.all[keyword];
+        return typeof rule2 == "object" ? rule2.definition : !!rule2;
       }
       // Remove keyword
       removeKeyword(keyword) {
@@ -41651,7 +41647,7 @@ var require_core = __commonJS({
         delete RULES.keywords[keyword];
         delete RULES.all[keyword];
         for (const group of RULES.rules) {
-          const i = group.rules.findIndex((rule4) => rule4.keyword === keyword);
+          const i = group.rules.findIndex((rule2) => rule2.keyword === keyword);
           if (i >= 0)
             group.rules.splice(i, 1);
         }
@@ -41678,10 +41674,10 @@ var require_core = __commonJS({
           for (const seg of segments)
             keywords = keywords[seg];
           for (const key3 in rules) {
-            const rule4 = rules[key3];
-            if (typeof rule4 != "object")
+            const rule2 = rules[key3];
+            if (typeof rule2 != "object")
               continue;
-            const { $data } = rule4.definition;
+            const { $data } = rule2.definition;
             const schema = keywords[key3];
             if ($data && schema)
               keywords[key3] = schemaOrData(schema);
@@ -41845,7 +41841,7 @@ var require_core = __commonJS({
       RULES.keywords[keyword] = true;
       if (!definition)
         return;
-      const rule4 = {
+      const rule2 = {
         keyword,
         definition: {
           ...definition,
@@ -41854,18 +41850,18 @@ var require_core = __commonJS({
         }
       };
       if (definition.before)
-        addBeforeRule.call(this, ruleGroup, rule4, definition.before);
+        addBeforeRule.call(this, ruleGroup, rule2, definition.before);
       else
-        ruleGroup.rules.push(rule4);
-      RULES.all[keyword] = rule4;
+        ruleGroup.rules.push(rule2);
+      RULES.all[keyword] = rule2;
       (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
     }
-    function addBeforeRule(ruleGroup, rule4, before) {
+    function addBeforeRule(ruleGroup, rule2, before) {
       const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
       if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule4);
+        ruleGroup.rules.splice(i, 0, rule2);
       } else {
-        ruleGroup.rules.push(rule4);
+        ruleGroup.rules.push(rule2);
         this.logger.warn(`rule ${before} is not defined`);
       }
     }
@@ -48427,128 +48423,6 @@ var VocabularyTally = class {
   }
 };
 
-// src/bulk/accumulate.ts
-var BulkAccumulator = class {
-  summary = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
-  byCheck = {};
-  tally = new VocabularyTally();
-  add(r) {
-    this.summary.records++;
-    for (const f of r.findings) {
-      const c = this.byCheck[f.check] ??= { error: 0, warning: 0, note: 0, waived: 0 };
-      if (f.waived) {
-        this.summary.waived++;
-        c.waived++;
-      } else {
-        c[f.severity]++;
-        if (f.severity === "error") this.summary.errors++;
-        else if (f.severity === "warning") this.summary.warnings++;
-        else this.summary.notes++;
-      }
-    }
-    if (r.form_word.word) {
-      this.tally.add(r.form_word.word, { form: r.declared.form ?? null, how: r.form_word.how });
-    }
-  }
-  trailer(shard) {
-    return {
-      kind: "summary",
-      summary: { ...this.summary },
-      byCheck: Object.fromEntries(Object.entries(this.byCheck).sort((a, b) => a[0] < b[0] ? -1 : 1)),
-      vocabulary: this.tally.toJSON(),
-      caution: CAUTION,
-      tool: { name: "stereogate", version: VERSION },
-      shard
-    };
-  }
-};
-
-// src/bulk/progress.ts
-var import_cli_progress = __toESM(require_cli_progress(), 1);
-
-// node_modules/csv-parse/lib/api/index.js
-var boms = {
-  // Note, the following are equals:
-  // Buffer.from("\ufeff")
-  // Buffer.from([239, 187, 191])
-  // Buffer.from('EFBBBF', 'hex')
-  utf8: Buffer.from([239, 187, 191]),
-  // Note, the following are equals:
-  // Buffer.from "\ufeff", 'utf16le
-  // Buffer.from([255, 254])
-  utf16le: Buffer.from([255, 254])
-};
-
-// src/bulk/merge.ts
-import { createReadStream } from "node:fs";
-import { createInterface } from "node:readline";
-var MergeError = class extends Error {
-};
-async function* readShard(path) {
-  const rl = createInterface({ input: createReadStream(path, "utf8"), crlfDelay: Infinity });
-  let n = 0;
-  for await (const line of rl) {
-    n++;
-    if (line.trim() === "") continue;
-    let v;
-    try {
-      v = JSON.parse(line);
-    } catch {
-      throw new MergeError(`${path}:${n}: not a JSON line of a stereogate bulk output`);
-    }
-    if (v.kind === "record") {
-      const { kind: _k, ...rest } = v;
-      yield rest;
-    } else if (v.kind === "summary") yield v;
-    else throw new MergeError(`${path}:${n}: unknown line kind '${String(v.kind)}'`);
-  }
-}
-async function mergeShards(paths, writers, onRecord) {
-  const streams = paths.map((p) => readShard(p));
-  const heads = [];
-  const shards = paths.map(() => null);
-  const advance = async (i) => {
-    for (; ; ) {
-      const next = await streams[i].next();
-      if (next.done) return null;
-      if ("kind" in next.value && next.value.kind === "summary") {
-        shards[i] = next.value.shard;
-        continue;
-      }
-      return next.value;
-    }
-  };
-  for (let i = 0; i < streams.length; i++) heads.push(await advance(i));
-  const acc = new BulkAccumulator();
-  let lastSeq = 0;
-  for (; ; ) {
-    let best = -1;
-    for (let i = 0; i < heads.length; i++) if (heads[i] && (best < 0 || heads[i].seq < heads[best].seq)) best = i;
-    if (best < 0) break;
-    const r = heads[best];
-    if (r.seq === lastSeq) throw new MergeError(`record ${r.seq} appears in more than one shard output (${paths[best]})`);
-    lastSeq = r.seq;
-    acc.add(r);
-    for (const w of writers) await w.write(r);
-    onRecord?.(r);
-    heads[best] = await advance(best);
-  }
-  const missing = shards.map((s, i) => s === null ? paths[i] : null).filter(Boolean);
-  if (missing.length > 0) throw new MergeError(`no summary line in ${missing.join(", ")} (an unfinished shard run?)`);
-  const counts = new Set(shards.map((s) => s.split("/")[1]));
-  if (counts.size > 1) throw new MergeError(`the shard outputs come from different splits: ${shards.join(", ")}`);
-  const n = Number([...counts][0]);
-  const have = new Set(shards.map((s) => Number(s.split("/")[0])));
-  const absent = Array.from({ length: n }, (_, i) => i + 1).filter((i) => !have.has(i));
-  if (absent.length > 0) throw new MergeError(`shard${absent.length > 1 ? "s" : ""} ${absent.map((i) => `${i}/${n}`).join(", ")} missing from the merge`);
-  const trailer = acc.trailer(null);
-  for (const w of writers) await w.finish(trailer);
-  return trailer;
-}
-
-// src/bulk/writers.ts
-import { createWriteStream } from "node:fs";
-
 // src/report/html/page-script.ts
 var PAGE_SCRIPT = `
 (function () {
@@ -48652,7 +48526,10 @@ ul.findings { margin: .25rem 0 0; padding-left: 1.1rem; }
 
 // src/report/html/render.ts
 function escapeHtml(text) {
-  return text.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]);
+  return text.replace(
+    /[&<>"']/g,
+    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]
+  );
 }
 function scriptJson(value) {
   return JSON.stringify(value).replace(/</g, "\\u003c").replace(/\u2028/g, "\\u2028").replace(/\u2029/g, "\\u2029");
@@ -48664,7 +48541,9 @@ function computedSummary(r) {
   const parts = [chir];
   if (c.meso) parts.push("meso");
   parts.push(`${c.units.length} stereo unit${c.units.length === 1 ? "" : "s"}, ${c.undefined} undefined`);
-  parts.push(`${c.stereoisomers.total} stereoisomers (${c.stereoisomers.chiral} chiral, ${c.stereoisomers.achiral} achiral)`);
+  parts.push(
+    `${c.stereoisomers.total} stereoisomers (${c.stereoisomers.chiral} chiral, ${c.stereoisomers.achiral} achiral)`
+  );
   const labels = c.units.filter((u) => u.label).map((u) => `${u.atoms.join("=")}${u.label}`).join(", ");
   return { text: parts.join("; "), labels };
 }
@@ -48672,7 +48551,10 @@ var RANK2 = { error: 0, warning: 1, note: 2 };
 function htmlRow(r) {
   const open = r.findings.filter((f) => !f.waived);
   if (open.length === 0) return null;
-  const worst = open.reduce((w, f) => RANK2[f.severity] < RANK2[w] ? f.severity : w, "note");
+  const worst = open.reduce(
+    (w, f) => RANK2[f.severity] < RANK2[w] ? f.severity : w,
+    "note"
+  );
   const cs = computedSummary(r);
   return {
     id: r.id ?? "(no id)",
@@ -48690,31 +48572,6 @@ function htmlRow(r) {
       waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` : null
     }))
   };
-}
-function countByCheck(records) {
-  const byCheck = {};
-  for (const r of records) {
-    for (const f of r.findings) {
-      const e = byCheck[f.check] ??= { error: 0, warning: 0, note: 0, waived: 0 };
-      if (f.waived) e.waived++;
-      else e[f.severity]++;
-    }
-  }
-  return byCheck;
-}
-function renderHtml(result, opts = {}) {
-  const rows = [];
-  result.records.forEach((r, i) => {
-    const row = htmlRow(r);
-    if (row) rows.push({ ...row, svg: opts.depictions?.get(i) ?? null });
-  });
-  return renderHtmlPage(rows, {
-    tool: result.tool,
-    caution: result.caution,
-    summary: result.summary,
-    byCheck: countByCheck(result.records),
-    ...opts
-  });
 }
 function renderHtmlPage(rows, page) {
   const opts = page;
@@ -48782,8 +48639,77 @@ function jsonOf(r) {
   return "{" + r.jsonl.slice(JSONL_PREFIX.length);
 }
 var CSV_HEADER = "seq,source,record,line,id,declared_form,form_word,chiral,meso,stereo_units,undefined_units,errors,warnings,notes,waived,checks";
+function csvCell(v) {
+  const t = v === null ? "" : String(v);
+  const safe = /^[=+\-@\t\r]/.test(t) ? `'${t}` : t;
+  return `"${safe.replace(/"/g, '""')}"`;
+}
+function csvRow(r) {
+  const open = r.findings.filter((f) => !f.waived);
+  const c = r.computed;
+  const count2 = (s) => open.filter((f) => f.severity === s).length;
+  return [
+    r.seq,
+    r.origin.source,
+    r.origin.record,
+    r.origin.line,
+    r.id,
+    r.declared.form,
+    r.form_word.word,
+    c ? c.chiral === null ? "open" : String(c.chiral) : null,
+    c ? c.meso === null ? "open" : String(c.meso) : null,
+    c ? c.units.length : null,
+    c ? c.undefined : null,
+    count2("error"),
+    count2("warning"),
+    count2("note"),
+    r.findings.length - open.length,
+    [...new Set(open.map((f) => f.check))].join(" ")
+  ].map(csvCell).join(",");
+}
+function makeRenderer(wants, checks) {
+  const tool = { name: "stereogate", version: "" };
+  const none = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  return (r) => {
+    const out = {
+      seq: r.seq,
+      jsonl: JSONL_PREFIX + JSON.stringify(r).slice(1),
+      tally: {
+        findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),
+        word: r.form_word.word,
+        how: r.form_word.how,
+        form: r.declared.form
+      }
+    };
+    if (wants.csv) out.csv = csvRow(r);
+    if (wants.sarif && r.findings.length > 0) {
+      const log = sarifLog({ tool, records: [r], summary: none, caution: "" }, checks);
+      const results = log.runs[0].results;
+      out.sarif = results.map((res) => {
+        res.properties.record = r.origin.record;
+        return JSON.stringify(res);
+      });
+    }
+    if (wants.html) {
+      const row = htmlRow(r);
+      if (row) {
+        const labels = (r.computed?.units ?? []).filter((u) => u.label).flatMap((u) => u.atoms.map((a) => ({ atom: a, text: u.label })));
+        out.html = { row, structure: r.structure_text ?? null, labels };
+      }
+    }
+    return out;
+  };
+}
+
+// src/bulk/sarif-writer.ts
+import { createWriteStream as createWriteStream2 } from "node:fs";
 
 // src/bulk/writers.ts
+import { createWriteStream } from "node:fs";
+function wantsOf(writers) {
+  const has = (n) => writers.some((w) => w.needs === n);
+  return { csv: has("csv"), sarif: has("sarif"), html: has("html") };
+}
 function drainWrite(stream, text) {
   return stream.write(text) ? Promise.resolve() : new Promise((res) => stream.once("drain", () => res()));
 }
@@ -48853,7 +48779,6 @@ function csvWriter(path) {
 }
 
 // src/bulk/sarif-writer.ts
-import { createWriteStream as createWriteStream2 } from "node:fs";
 var TIME_LIMIT_RULE = {
   id: "record-time-limit",
   defaultSeverity: "error",
@@ -48886,11 +48811,141 @@ function sarifWriter(path, checks, tool, caution) {
     },
     async finish(t) {
       if (!started) await drainWrite(s, before);
-      const tail = after.replace(/\}\]\}$/, `,"properties":${JSON.stringify({ caution: t.caution, summary: t.summary })}}]}`);
+      const tail = after.replace(
+        /\}\]\}$/,
+        `,"properties":${JSON.stringify({ caution: t.caution, summary: t.summary })}}]}`
+      );
       await drainWrite(s, tail + "\n");
       await close(s);
     }
   };
+}
+
+// src/bulk/accumulate.ts
+var BulkAccumulator = class {
+  summary = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  byCheck = {};
+  tally = new VocabularyTally();
+  add(t) {
+    this.summary.records++;
+    for (const [check, severity, waived] of t.findings) {
+      const c = this.byCheck[check] ??= { error: 0, warning: 0, note: 0, waived: 0 };
+      if (waived) {
+        this.summary.waived++;
+        c.waived++;
+      } else {
+        c[severity]++;
+        if (severity === "error") this.summary.errors++;
+        else if (severity === "warning") this.summary.warnings++;
+        else this.summary.notes++;
+      }
+    }
+    if (t.word) this.tally.add(t.word, { form: t.form ?? null, how: t.how });
+  }
+  trailer(shard) {
+    return {
+      kind: "summary",
+      summary: { ...this.summary },
+      byCheck: Object.fromEntries(Object.entries(this.byCheck).sort((a, b) => a[0] < b[0] ? -1 : 1)),
+      vocabulary: this.tally.toJSON(),
+      caution: CAUTION,
+      tool: { name: "stereogate", version: VERSION },
+      shard
+    };
+  }
+};
+
+// src/bulk/progress.ts
+var import_cli_progress = __toESM(require_cli_progress(), 1);
+
+// node_modules/csv-parse/lib/api/index.js
+var boms = {
+  // Note, the following are equals:
+  // Buffer.from("\ufeff")
+  // Buffer.from([239, 187, 191])
+  // Buffer.from('EFBBBF', 'hex')
+  utf8: Buffer.from([239, 187, 191]),
+  // Note, the following are equals:
+  // Buffer.from "\ufeff", 'utf16le
+  // Buffer.from([255, 254])
+  utf16le: Buffer.from([255, 254])
+};
+
+// src/bulk/merge.ts
+import { createReadStream } from "node:fs";
+import { createInterface } from "node:readline";
+var MergeError = class extends Error {
+};
+async function* readShard(path) {
+  const rl = createInterface({ input: createReadStream(path, "utf8"), crlfDelay: Infinity });
+  let n = 0;
+  for await (const line of rl) {
+    n++;
+    if (line.trim() === "") continue;
+    let v;
+    try {
+      v = JSON.parse(line);
+    } catch {
+      throw new MergeError(`${path}:${n}: not a JSON line of a stereogate bulk output`);
+    }
+    if (v.kind === "record") {
+      const { kind: _k, ...rest } = v;
+      yield rest;
+    } else if (v.kind === "summary") yield v;
+    else throw new MergeError(`${path}:${n}: unknown line kind '${String(v.kind)}'`);
+  }
+}
+async function mergeShards(paths, writers, onRecord) {
+  const { CHECKS: CHECKS2 } = await Promise.resolve().then(() => (init_checks(), checks_exports));
+  const render = makeRenderer(wantsOf(writers), bulkSarifRules(CHECKS2));
+  const streams = paths.map((p) => readShard(p));
+  const heads = [];
+  const shards = paths.map(() => null);
+  const advance = async (i) => {
+    for (; ; ) {
+      const next = await streams[i].next();
+      if (next.done) return null;
+      if ("kind" in next.value && next.value.kind === "summary") {
+        shards[i] = next.value.shard;
+        continue;
+      }
+      return next.value;
+    }
+  };
+  for (let i = 0; i < streams.length; i++) heads.push(await advance(i));
+  const acc = new BulkAccumulator();
+  let lastSeq = 0;
+  for (; ; ) {
+    let best = -1;
+    for (let i = 0; i < heads.length; i++)
+      if (heads[i] && (best < 0 || heads[i].seq < heads[best].seq)) best = i;
+    if (best < 0) break;
+    const r = heads[best];
+    if (r.seq === lastSeq)
+      throw new MergeError(`record ${r.seq} appears in more than one shard output (${paths[best]})`);
+    lastSeq = r.seq;
+    const rendered = render(r);
+    acc.add(rendered.tally);
+    for (const w of writers) await w.write(rendered);
+    onRecord?.(rendered);
+    heads[best] = await advance(best);
+  }
+  const missing = shards.map((s, i) => s === null ? paths[i] : null).filter(Boolean);
+  if (missing.length > 0)
+    throw new MergeError(`no summary line in ${missing.join(", ")} (an unfinished shard run?)`);
+  const counts = new Set(shards.map((s) => s.split("/")[1]));
+  if (counts.size > 1)
+    throw new MergeError(`the shard outputs come from different splits: ${shards.join(", ")}`);
+  const n = Number([...counts][0]);
+  const have = new Set(shards.map((s) => Number(s.split("/")[0])));
+  const absent = Array.from({ length: n }, (_, i) => i + 1).filter((i) => !have.has(i));
+  if (absent.length > 0)
+    throw new MergeError(
+      `shard${absent.length > 1 ? "s" : ""} ${absent.map((i) => `${i}/${n}`).join(", ")} missing from the merge`
+    );
+  const trailer = acc.trailer(null);
+  for (const w of writers) await w.finish(trailer);
+  return trailer;
 }
 
 // src/bulk/html-collector.ts
@@ -48944,34 +48999,54 @@ var HtmlCollector = class {
   path;
   maxRecords;
   maxDepictions;
+  needs = "html";
   kept = [];
   flaggedCount = 0;
   async write(r) {
-    if (!r.findings.some((f) => !f.waived)) return;
+    if (!r.html) return;
     this.flaggedCount++;
-    if (this.kept.length < this.maxRecords) this.kept.push(r);
+    if (this.kept.length < this.maxRecords) this.kept.push(r.html);
   }
   async finish(t) {
-    const depictions = /* @__PURE__ */ new Map();
-    this.kept.slice(0, this.maxDepictions).forEach((r, i) => {
-      if (!r.structure_text) return;
-      const read = readStructure(r.structure_text, { format: r.structure_text.includes("\n") ? "molfile" : "smiles" });
-      if (!read.ok) return;
-      const labels = (r.computed?.units ?? []).filter((u) => u.label).flatMap((u) => u.atoms.map((a) => ({ atom: a - 1, text: u.label })));
-      const svg = depict(read.structure, labels, { id: `d${i}` });
-      if (svg) depictions.set(i, svg);
-    });
-    const result = { tool: t.tool, caution: t.caution, summary: t.summary, records: this.kept };
+    const rows = this.kept.map((e, i) => ({
+      ...e.row,
+      svg: i < this.maxDepictions ? drawing(e, i) : null
+    }));
     const notes = [
       `${t.summary.records} records audited${t.shard ? ` (shard ${t.shard})` : ""}; ${this.flaggedCount} flagged.`
     ];
-    if (this.flaggedCount > this.kept.length) notes.push(`Only the first ${this.kept.length} flagged records are listed; see the JSON output for all.`);
-    if (this.kept.length > this.maxDepictions) notes.push(`Depictions are drawn for the first ${this.maxDepictions} flagged records.`);
-    for (const [w, e] of t.vocabulary.mapped) notes.push(`legacy form word "${w}" read as ${e.form} (${e.count} records)`);
-    for (const [w, n] of t.vocabulary.notUnderstood) notes.push(`form word "${w}" not understood (${n} records; audited as unknown)`);
-    writeFileSync2(this.path, renderHtml(result, { depictions, notes, title: "stereogate bulk audit" }));
+    if (this.flaggedCount > this.kept.length)
+      notes.push(
+        `Only the first ${this.kept.length} flagged records are listed; see the JSON output for all.`
+      );
+    if (this.kept.length > this.maxDepictions)
+      notes.push(`Depictions are drawn for the first ${this.maxDepictions} flagged records.`);
+    for (const [w, e] of t.vocabulary.mapped)
+      notes.push(`legacy form word "${w}" read as ${e.form} (${e.count} records)`);
+    for (const [w, n] of t.vocabulary.notUnderstood)
+      notes.push(`form word "${w}" not understood (${n} records; audited as unknown)`);
+    const page = renderHtmlPage(rows, {
+      tool: t.tool,
+      caution: t.caution,
+      summary: t.summary,
+      byCheck: t.byCheck,
+      flaggedTotal: this.flaggedCount,
+      notes,
+      title: "stereogate bulk audit"
+    });
+    writeFileSync2(this.path, page);
   }
 };
+function drawing(e, i) {
+  if (!e.structure) return null;
+  const read = readStructure(e.structure, { format: e.structure.includes("\n") ? "molfile" : "smiles" });
+  if (!read.ok) return null;
+  return depict(
+    read.structure,
+    e.labels.map((l) => ({ atom: l.atom - 1, text: l.text })),
+    { id: `d${i}` }
+  );
+}
 
 // src/cli/commands/bulk-audit.ts
 var BULK_USAGE = `Bulk audit of legacy registries (SD files, CSV/TSV exports):

@@ -27933,12 +27933,12 @@ var require_applicability = __commonJS({
     }
     exports.schemaHasRulesForType = schemaHasRulesForType;
     function shouldUseGroup(schema, group) {
-      return group.rules.some((rule4) => shouldUseRule(schema, rule4));
+      return group.rules.some((rule2) => shouldUseRule(schema, rule2));
     }
     exports.shouldUseGroup = shouldUseGroup;
-    function shouldUseRule(schema, rule4) {
+    function shouldUseRule(schema, rule2) {
       var _a;
-      return schema[rule4.keyword] !== void 0 || ((_a = rule4.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
+      return schema[rule2.keyword] !== void 0 || ((_a = rule2.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
     }
     exports.shouldUseRule = shouldUseRule;
   }
@@ -28990,9 +28990,9 @@ var require_validate = __commonJS({
       if (useDefaults)
         (0, defaults_1.assignDefaults)(it, group.type);
       gen.block(() => {
-        for (const rule4 of group.rules) {
-          if ((0, applicability_1.shouldUseRule)(schema, rule4)) {
-            keywordCode(it, rule4.keyword, rule4.definition, group.type);
+        for (const rule2 of group.rules) {
+          if ((0, applicability_1.shouldUseRule)(schema, rule2)) {
+            keywordCode(it, rule2.keyword, rule2.definition, group.type);
           }
         }
       });
@@ -29027,9 +29027,9 @@ var require_validate = __commonJS({
     function checkKeywordTypes(it, ts) {
       const rules = it.self.RULES.all;
       for (const keyword in rules) {
-        const rule4 = rules[keyword];
-        if (typeof rule4 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule4)) {
-          const { type } = rule4.definition;
+        const rule2 = rules[keyword];
+        if (typeof rule2 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule2)) {
+          const { type } = rule2.definition;
           if (type.length && !type.some((t) => hasApplicableType(ts, t))) {
             strictTypesError(it, `missing type "${type.join(",")}" for keyword "${keyword}"`);
           }
@@ -31115,8 +31115,8 @@ var require_core = __commonJS({
         return this;
       }
       getKeyword(keyword) {
-        const rule4 = this.RULES.all[keyword];
-        return typeof rule4 == "object" ? rule4.definition : !!rule4;
+        const rule2 = this.RULES.all[keyword];
+        return typeof rule2 == "object" ? rule2.definition : !!rule2;
       }
       // Remove keyword
       removeKeyword(keyword) {
@@ -31124,7 +31124,7 @@ var require_core = __commonJS({
         delete RULES.keywords[keyword];
         delete RULES.all[keyword];
         for (const group of RULES.rules) {
-          const i = group.rules.findIndex((rule4) => rule4.keyword === keyword);
+          const i = group.rules.findIndex((rule2) => rule2.keyword === keyword);
           if (i >= 0)
             group.rules.splice(i, 1);
         }
@@ -31151,10 +31151,10 @@ var require_core = __commonJS({
           for (const seg of segments)
             keywords = keywords[seg];
           for (const key4 in rules) {
-            const rule4 = rules[key4];
-            if (typeof rule4 != "object")
+            const rule2 = rules[key4];
+            if (typeof rule2 != "object")
               continue;
-            const { $data } = rule4.definition;
+            const { $data } = rule2.definition;
             const schema = keywords[key4];
             if ($data && schema)
               keywords[key4] = schemaOrData(schema);
@@ -31318,7 +31318,7 @@ var require_core = __commonJS({
       RULES.keywords[keyword] = true;
       if (!definition)
         return;
-      const rule4 = {
+      const rule2 = {
         keyword,
         definition: {
           ...definition,
@@ -31327,18 +31327,18 @@ var require_core = __commonJS({
         }
       };
       if (definition.before)
-        addBeforeRule.call(this, ruleGroup, rule4, definition.before);
+        addBeforeRule.call(this, ruleGroup, rule2, definition.before);
       else
-        ruleGroup.rules.push(rule4);
-      RULES.all[keyword] = rule4;
+        ruleGroup.rules.push(rule2);
+      RULES.all[keyword] = rule2;
       (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
     }
-    function addBeforeRule(ruleGroup, rule4, before) {
+    function addBeforeRule(ruleGroup, rule2, before) {
       const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
       if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule4);
+        ruleGroup.rules.splice(i, 0, rule2);
       } else {
-        ruleGroup.rules.push(rule4);
+        ruleGroup.rules.push(rule2);
         this.logger.warn(`rule ${before} is not defined`);
       }
     }
@@ -36817,7 +36817,7 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
   const branch = new Int32Array(n);
   const order = new Int32Array(n);
   const basis = [];
-  const pivots = [];
+  const owner = new Int32Array(m).fill(-1);
   const rings = [];
   let below = 0;
   for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
@@ -36885,15 +36885,14 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
     cands.sort((p, q) => p.size - q.size);
     for (const c of cands) {
       const v = c.bits.slice();
-      for (let j = 0; j < basis.length; j++) {
-        const p2 = pivots[j];
-        if (v[p2 >>> 5] & 1 << (p2 & 31)) xorInto(v, basis[j]);
+      let p = firstBit(v);
+      while (p >= 0 && owner[p] >= 0) {
+        xorInto(v, basis[owner[p]]);
+        p = firstBit(v);
       }
-      const p = firstBit(v);
       if (p < 0) continue;
-      for (let j = 0; j < basis.length; j++) if (basis[j][p >>> 5] & 1 << (p & 31)) xorInto(basis[j], v);
+      owner[p] = basis.length;
       basis.push(v);
-      pivots.push(p);
       rings.push(c.atoms);
       if (rings.length === nullity) break;
     }
@@ -61014,7 +61013,7 @@ function buildGraph2(s) {
     tetraAt,
     bondAt,
     axialAt,
-    mancude: perceiveMancude(s, nbr, ord, mass),
+    mancude: null,
     hasBondStereo,
     stereoCount: s.stereo.length,
     ringFixed: [],
@@ -61086,6 +61085,10 @@ function ringSizeThrough(g, a, b, max) {
   }
   return 0;
 }
+function mancudeOf(g) {
+  if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
+  return g.mancude;
+}
 var CHALCOGEN_OR_N;
 var init_graph2 = __esm({
   "src/chem/cip/graph.ts"() {
@@ -61101,6 +61104,7 @@ var H_ATOM, PHANTOM, DUPLICATE_MASS, NODE_BUDGET, CipNode, Digraph;
 var init_digraph = __esm({
   "src/chem/cip/digraph.ts"() {
     "use strict";
+    init_graph2();
     H_ATOM = -1;
     PHANTOM = -2;
     DUPLICATE_MASS = (m) => m;
@@ -61149,7 +61153,7 @@ var init_digraph = __esm({
         this.count++;
         const g = this.g;
         if (z >= 0 && parent !== null) {
-          return new CipNode(this.nextId++, atom, z, g.mancude.dupMass[parent.atom], depth, dist, true, parent);
+          return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
@@ -61174,7 +61178,7 @@ var init_digraph = __esm({
         for (let i = 0; i < nb.length; i++) {
           const b = nb[i];
           const order = od[i];
-          const mz = order === 2 && g.mancude.bond.has(a * g.n + b) ? g.mancude.dupZ[a] : -1;
+          const mz = order === 2 && mancudeOf(g).bond.has(a * g.n + b) ? mancudeOf(g).dupZ[a] : -1;
           if (parent !== null && b === parent.atom) {
             if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
             else for (let k = 1; k < order; k++) out.push(this.make(b, d, parent.depth, true, node));
@@ -61209,15 +61213,6 @@ var init_digraph = __esm({
 });
 
 // src/chem/cip/rules.ts
-function rule1a(n) {
-  return n.z;
-}
-function rule1b(n) {
-  return -n.dist;
-}
-function rule2(n) {
-  return n.mass;
-}
 function rule3(label) {
   return label === "Z" ? 2 : label === "E" ? 1 : 0;
 }
@@ -61231,26 +61226,17 @@ function rule4c(label) {
 function rule5(label) {
   return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
 }
-function rule6(n, ref) {
-  return n.atom === ref ? 1 : 0;
-}
 function likeClass(label) {
   return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
 }
 function isChiralLabel(label) {
   return label === "R" || label === "S" || label === "M" || label === "P";
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A, RULE_4B, RULE_4C, RULE_5, RULE_6;
+var RULE_4A, RULE_5, RULE_6;
 var init_rules = __esm({
   "src/chem/cip/rules.ts"() {
     "use strict";
-    RULE_1A = 0;
-    RULE_1B = 1;
-    RULE_2 = 2;
-    RULE_3 = 3;
     RULE_4A = 4;
-    RULE_4B = 5;
-    RULE_4C = 6;
     RULE_5 = 7;
     RULE_6 = 8;
   }
@@ -61340,13 +61326,22 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var Ranker;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
     init_digraph();
     init_rules();
     init_rule4b();
+    RULE_1A = 0;
+    RULE_1B = 1;
+    RULE_2 = 2;
+    RULE_3 = 3;
+    RULE_4A2 = 4;
+    RULE_4B = 5;
+    RULE_4C = 6;
+    RULE_52 = 7;
+    RULE_62 = 8;
     Ranker = class {
       constructor(dg, auxOf) {
         this.dg = dg;
@@ -61400,26 +61395,26 @@ var init_compare = __esm({
       }
       setRule6(ref) {
         this.dg.rule6Ref = ref;
-        this.active[RULE_6] = ref >= 0;
+        this.active[RULE_62] = ref >= 0;
       }
-      value(rule4, n) {
-        switch (rule4) {
+      value(rule2, n) {
+        switch (rule2) {
           case RULE_1A:
-            return rule1a(n);
+            return n.z;
           case RULE_1B:
-            return rule1b(n);
+            return -n.dist;
           case RULE_2:
-            return rule2(n);
+            return n.mass;
           case RULE_3:
             return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
-          case RULE_4A:
+          case RULE_4A2:
             return this.stereoValue(n, rule4a);
           case RULE_4C:
             return this.stereoValue(n, rule4c);
-          case RULE_5:
+          case RULE_52:
             return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
-          case RULE_6:
-            return rule6(n, this.dg.rule6Ref);
+          case RULE_62:
+            return n.atom === this.dg.rule6Ref ? 1 : 0;
           default:
             return 0;
         }
@@ -61434,27 +61429,27 @@ var init_compare = __esm({
        * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
        * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
        */
-      compareRule(rule4, x, fx, y, fy) {
+      compareRule(rule2, x, fx, y, fy) {
         if (y === null) return 1;
-        if (rule4 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
-        let c = this.value(rule4, x) - this.value(rule4, y);
+        if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+        let c = this.value(rule2, x) - this.value(rule2, y);
         if (c !== 0) return c > 0 ? 1 : -1;
         const qx = [x];
         const qfx = [fx];
         const qy = [y];
         const qfy = [fy];
         for (let i = 0; i < qx.length; i++) {
-          const sx = this.sorted(qx[i], qfx[i], rule4).nodes;
-          const sy = this.sorted(qy[i], qfy[i], rule4).nodes;
+          const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
+          const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
           const m = Math.min(sx.length, sy.length);
           for (let j = 0; j < m; j++) {
-            c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
+            c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
             if (c !== 0) return c > 0 ? 1 : -1;
           }
-          if (sx.length !== sy.length && rule4 === RULE_1A) {
+          if (sx.length !== sy.length && rule2 === RULE_1A) {
             const longer = sx.length > sy.length ? sx : sy;
             for (let j = m; j < longer.length; j++) {
-              if (this.value(rule4, longer[j]) > 0) return longer === sx ? 1 : -1;
+              if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
             }
           }
           for (let j = 0; j < m; j++) {
@@ -61478,9 +61473,9 @@ var init_compare = __esm({
       /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
       sorted(node, from, level2) {
         const hidden = level2 >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
-        const mirrored2 = this.mirror && level2 >= RULE_5 ? 2 : 0;
+        const mirrored2 = this.mirror && level2 >= RULE_52 ? 2 : 0;
         const num = ((from === null ? 0 : from.id + 1) * 16 + level2) * 4 + hidden + mirrored2;
-        const key4 = level2 >= RULE_6 ? `${num}:${this.dg.rule6Ref}` : num;
+        const key4 = level2 >= RULE_62 ? `${num}:${this.dg.rule6Ref}` : num;
         if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
         const hit = node.sorted.get(key4);
         if (hit) return hit;
@@ -61508,13 +61503,13 @@ var init_compare = __esm({
        * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
        * first, writing them and their ties into `out` at the same places.
        */
-      sortRun(nodes, i, j, centre, rule4, out) {
+      sortRun(nodes, i, j, centre, rule2, out) {
         const run12 = nodes.slice(i, j);
         const k = run12.length;
         const m = new Array(k * k).fill(0);
         for (let a = 0; a < k; a++) {
           for (let b = a + 1; b < k; b++) {
-            const c = this.compareRule(rule4, run12[a], centre, run12[b], centre);
+            const c = this.compareRule(rule2, run12[a], centre, run12[b], centre);
             m[a * k + b] = c;
             m[b * k + a] = -c;
           }
@@ -61905,6 +61900,7 @@ var init_helix = __esm({
 
 // src/chem/cip/index.ts
 function assignCip(s) {
+  if (s.stereo.length === 0) return [];
   const g = buildGraph2(s);
   const labels = s.stereo.map((_, i) => labelPlain(g, i));
   if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
@@ -62719,7 +62715,7 @@ function analyse(input) {
   return { norm, p, group, state, defined, reported, chirality };
 }
 function stereogenicSomewhere(g, x, defined, k) {
-  if (!g.perms.some((perm) => perm[k] === k)) return true;
+  if (g.perms.length === 1) return true;
   const open2 = [];
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open2.push(i);
   if (open2.length > 10) return true;

@@ -8819,12 +8819,12 @@ var require_applicability = __commonJS({
     }
     exports.schemaHasRulesForType = schemaHasRulesForType;
     function shouldUseGroup(schema, group) {
-      return group.rules.some((rule) => shouldUseRule(schema, rule));
+      return group.rules.some((rule2) => shouldUseRule(schema, rule2));
     }
     exports.shouldUseGroup = shouldUseGroup;
-    function shouldUseRule(schema, rule) {
+    function shouldUseRule(schema, rule2) {
       var _a;
-      return schema[rule.keyword] !== void 0 || ((_a = rule.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
+      return schema[rule2.keyword] !== void 0 || ((_a = rule2.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
     }
     exports.shouldUseRule = shouldUseRule;
   }
@@ -9876,9 +9876,9 @@ var require_validate = __commonJS({
       if (useDefaults)
         (0, defaults_1.assignDefaults)(it, group.type);
       gen.block(() => {
-        for (const rule of group.rules) {
-          if ((0, applicability_1.shouldUseRule)(schema, rule)) {
-            keywordCode(it, rule.keyword, rule.definition, group.type);
+        for (const rule2 of group.rules) {
+          if ((0, applicability_1.shouldUseRule)(schema, rule2)) {
+            keywordCode(it, rule2.keyword, rule2.definition, group.type);
           }
         }
       });
@@ -9913,9 +9913,9 @@ var require_validate = __commonJS({
     function checkKeywordTypes(it, ts) {
       const rules = it.self.RULES.all;
       for (const keyword in rules) {
-        const rule = rules[keyword];
-        if (typeof rule == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule)) {
-          const { type } = rule.definition;
+        const rule2 = rules[keyword];
+        if (typeof rule2 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule2)) {
+          const { type } = rule2.definition;
           if (type.length && !type.some((t) => hasApplicableType(ts, t))) {
             strictTypesError(it, `missing type "${type.join(",")}" for keyword "${keyword}"`);
           }
@@ -12001,8 +12001,8 @@ var require_core = __commonJS({
         return this;
       }
       getKeyword(keyword) {
-        const rule = this.RULES.all[keyword];
-        return typeof rule == "object" ? rule.definition : !!rule;
+        const rule2 = this.RULES.all[keyword];
+        return typeof rule2 == "object" ? rule2.definition : !!rule2;
       }
       // Remove keyword
       removeKeyword(keyword) {
@@ -12010,7 +12010,7 @@ var require_core = __commonJS({
         delete RULES.keywords[keyword];
         delete RULES.all[keyword];
         for (const group of RULES.rules) {
-          const i = group.rules.findIndex((rule) => rule.keyword === keyword);
+          const i = group.rules.findIndex((rule2) => rule2.keyword === keyword);
           if (i >= 0)
             group.rules.splice(i, 1);
         }
@@ -12037,10 +12037,10 @@ var require_core = __commonJS({
           for (const seg of segments)
             keywords = keywords[seg];
           for (const key3 in rules) {
-            const rule = rules[key3];
-            if (typeof rule != "object")
+            const rule2 = rules[key3];
+            if (typeof rule2 != "object")
               continue;
-            const { $data } = rule.definition;
+            const { $data } = rule2.definition;
             const schema = keywords[key3];
             if ($data && schema)
               keywords[key3] = schemaOrData(schema);
@@ -12204,7 +12204,7 @@ var require_core = __commonJS({
       RULES.keywords[keyword] = true;
       if (!definition)
         return;
-      const rule = {
+      const rule2 = {
         keyword,
         definition: {
           ...definition,
@@ -12213,18 +12213,18 @@ var require_core = __commonJS({
         }
       };
       if (definition.before)
-        addBeforeRule.call(this, ruleGroup, rule, definition.before);
+        addBeforeRule.call(this, ruleGroup, rule2, definition.before);
       else
-        ruleGroup.rules.push(rule);
-      RULES.all[keyword] = rule;
+        ruleGroup.rules.push(rule2);
+      RULES.all[keyword] = rule2;
       (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
     }
-    function addBeforeRule(ruleGroup, rule, before) {
+    function addBeforeRule(ruleGroup, rule2, before) {
       const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
       if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule);
+        ruleGroup.rules.splice(i, 0, rule2);
       } else {
-        ruleGroup.rules.push(rule);
+        ruleGroup.rules.push(rule2);
         this.logger.warn(`rule ${before} is not defined`);
       }
     }
@@ -15973,13 +15973,13 @@ function skipField(s, start) {
   while (i < n) {
     const c = s.charCodeAt(i);
     if (c === 40) {
-      const close = s.indexOf(")", i + 1);
-      i = close < 0 ? n : close + 1;
+      const close2 = s.indexOf(")", i + 1);
+      i = close2 < 0 ? n : close2 + 1;
       continue;
     }
     if (c === 36) {
-      const close = s.indexOf("$", i + 1);
-      i = close < 0 ? n : close + 1;
+      const close2 = s.indexOf("$", i + 1);
+      i = close2 < 0 ? n : close2 + 1;
       continue;
     }
     if (c === 124) return i;
@@ -17062,9 +17062,9 @@ function readRecord(lines, start, end, firstLine, record) {
 function fieldName(l) {
   const open = l.indexOf("<", 1);
   if (open === -1) return null;
-  const close = l.indexOf(">", open + 1);
-  if (close === -1) return null;
-  return l.slice(open + 1, close);
+  const close2 = l.indexOf(">", open + 1);
+  if (close2 === -1) return null;
+  return l.slice(open + 1, close2);
 }
 var init_sdf = __esm({
   "src/chem/read/sdf.ts"() {
@@ -17703,7 +17703,7 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
   const branch = new Int32Array(n);
   const order = new Int32Array(n);
   const basis = [];
-  const pivots = [];
+  const owner = new Int32Array(m).fill(-1);
   const rings = [];
   let below = 0;
   for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
@@ -17771,15 +17771,14 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
     cands.sort((p, q) => p.size - q.size);
     for (const c of cands) {
       const v = c.bits.slice();
-      for (let j = 0; j < basis.length; j++) {
-        const p2 = pivots[j];
-        if (v[p2 >>> 5] & 1 << (p2 & 31)) xorInto(v, basis[j]);
+      let p = firstBit(v);
+      while (p >= 0 && owner[p] >= 0) {
+        xorInto(v, basis[owner[p]]);
+        p = firstBit(v);
       }
-      const p = firstBit(v);
       if (p < 0) continue;
-      for (let j = 0; j < basis.length; j++) if (basis[j][p >>> 5] & 1 << (p & 31)) xorInto(basis[j], v);
+      owner[p] = basis.length;
       basis.push(v);
-      pivots.push(p);
       rings.push(c.atoms);
       if (rings.length === nullity) break;
     }
@@ -41900,7 +41899,7 @@ function buildGraph2(s) {
     tetraAt,
     bondAt,
     axialAt,
-    mancude: perceiveMancude(s, nbr, ord, mass),
+    mancude: null,
     hasBondStereo,
     stereoCount: s.stereo.length,
     ringFixed: [],
@@ -41972,6 +41971,10 @@ function ringSizeThrough(g, a, b, max) {
   }
   return 0;
 }
+function mancudeOf(g) {
+  if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
+  return g.mancude;
+}
 var CHALCOGEN_OR_N;
 var init_graph2 = __esm({
   "src/chem/cip/graph.ts"() {
@@ -41987,6 +41990,7 @@ var H_ATOM, PHANTOM, DUPLICATE_MASS, NODE_BUDGET, CipNode, Digraph;
 var init_digraph = __esm({
   "src/chem/cip/digraph.ts"() {
     "use strict";
+    init_graph2();
     H_ATOM = -1;
     PHANTOM = -2;
     DUPLICATE_MASS = (m) => m;
@@ -42035,7 +42039,7 @@ var init_digraph = __esm({
         this.count++;
         const g = this.g;
         if (z >= 0 && parent !== null) {
-          return new CipNode(this.nextId++, atom, z, g.mancude.dupMass[parent.atom], depth, dist, true, parent);
+          return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
@@ -42060,7 +42064,7 @@ var init_digraph = __esm({
         for (let i = 0; i < nb.length; i++) {
           const b = nb[i];
           const order = od[i];
-          const mz = order === 2 && g.mancude.bond.has(a * g.n + b) ? g.mancude.dupZ[a] : -1;
+          const mz = order === 2 && mancudeOf(g).bond.has(a * g.n + b) ? mancudeOf(g).dupZ[a] : -1;
           if (parent !== null && b === parent.atom) {
             if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
             else for (let k = 1; k < order; k++) out.push(this.make(b, d, parent.depth, true, node));
@@ -42095,15 +42099,6 @@ var init_digraph = __esm({
 });
 
 // src/chem/cip/rules.ts
-function rule1a(n) {
-  return n.z;
-}
-function rule1b(n) {
-  return -n.dist;
-}
-function rule2(n) {
-  return n.mass;
-}
 function rule3(label) {
   return label === "Z" ? 2 : label === "E" ? 1 : 0;
 }
@@ -42117,26 +42112,17 @@ function rule4c(label) {
 function rule5(label) {
   return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
 }
-function rule6(n, ref) {
-  return n.atom === ref ? 1 : 0;
-}
 function likeClass(label) {
   return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
 }
 function isChiralLabel(label) {
   return label === "R" || label === "S" || label === "M" || label === "P";
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A, RULE_4B, RULE_4C, RULE_5, RULE_6;
+var RULE_4A, RULE_5, RULE_6;
 var init_rules = __esm({
   "src/chem/cip/rules.ts"() {
     "use strict";
-    RULE_1A = 0;
-    RULE_1B = 1;
-    RULE_2 = 2;
-    RULE_3 = 3;
     RULE_4A = 4;
-    RULE_4B = 5;
-    RULE_4C = 6;
     RULE_5 = 7;
     RULE_6 = 8;
   }
@@ -42226,13 +42212,22 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var Ranker;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
     init_digraph();
     init_rules();
     init_rule4b();
+    RULE_1A = 0;
+    RULE_1B = 1;
+    RULE_2 = 2;
+    RULE_3 = 3;
+    RULE_4A2 = 4;
+    RULE_4B = 5;
+    RULE_4C = 6;
+    RULE_52 = 7;
+    RULE_62 = 8;
     Ranker = class {
       constructor(dg, auxOf) {
         this.dg = dg;
@@ -42286,26 +42281,26 @@ var init_compare = __esm({
       }
       setRule6(ref) {
         this.dg.rule6Ref = ref;
-        this.active[RULE_6] = ref >= 0;
+        this.active[RULE_62] = ref >= 0;
       }
-      value(rule, n) {
-        switch (rule) {
+      value(rule2, n) {
+        switch (rule2) {
           case RULE_1A:
-            return rule1a(n);
+            return n.z;
           case RULE_1B:
-            return rule1b(n);
+            return -n.dist;
           case RULE_2:
-            return rule2(n);
+            return n.mass;
           case RULE_3:
             return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
-          case RULE_4A:
+          case RULE_4A2:
             return this.stereoValue(n, rule4a);
           case RULE_4C:
             return this.stereoValue(n, rule4c);
-          case RULE_5:
+          case RULE_52:
             return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
-          case RULE_6:
-            return rule6(n, this.dg.rule6Ref);
+          case RULE_62:
+            return n.atom === this.dg.rule6Ref ? 1 : 0;
           default:
             return 0;
         }
@@ -42320,27 +42315,27 @@ var init_compare = __esm({
        * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
        * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
        */
-      compareRule(rule, x, fx, y, fy) {
+      compareRule(rule2, x, fx, y, fy) {
         if (y === null) return 1;
-        if (rule === RULE_4B) return compareRule4b(this, x, fx, y, fy);
-        let c = this.value(rule, x) - this.value(rule, y);
+        if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+        let c = this.value(rule2, x) - this.value(rule2, y);
         if (c !== 0) return c > 0 ? 1 : -1;
         const qx = [x];
         const qfx = [fx];
         const qy = [y];
         const qfy = [fy];
         for (let i = 0; i < qx.length; i++) {
-          const sx = this.sorted(qx[i], qfx[i], rule).nodes;
-          const sy = this.sorted(qy[i], qfy[i], rule).nodes;
+          const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
+          const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
           const m = Math.min(sx.length, sy.length);
           for (let j = 0; j < m; j++) {
-            c = this.value(rule, sx[j]) - this.value(rule, sy[j]);
+            c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
             if (c !== 0) return c > 0 ? 1 : -1;
           }
-          if (sx.length !== sy.length && rule === RULE_1A) {
+          if (sx.length !== sy.length && rule2 === RULE_1A) {
             const longer = sx.length > sy.length ? sx : sy;
             for (let j = m; j < longer.length; j++) {
-              if (this.value(rule, longer[j]) > 0) return longer === sx ? 1 : -1;
+              if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
             }
           }
           for (let j = 0; j < m; j++) {
@@ -42353,8 +42348,8 @@ var init_compare = __esm({
         return 0;
       }
       /** Compare under every active rule up to `level`: ±(rule index + 1) for the deciding rule, 0 for a tie. */
-      compareUpTo(level, x, fx, y, fy) {
-        for (let r = 0; r <= level; r++) {
+      compareUpTo(level2, x, fx, y, fy) {
+        for (let r = 0; r <= level2; r++) {
           if (!this.active[r]) continue;
           const c = this.compareRule(r, x, fx, y, fy);
           if (c !== 0) return c > 0 ? r + 1 : -(r + 1);
@@ -42362,27 +42357,27 @@ var init_compare = __esm({
         return 0;
       }
       /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
-      sorted(node, from, level) {
-        const hidden = level >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
-        const mirrored2 = this.mirror && level >= RULE_5 ? 2 : 0;
-        const num = ((from === null ? 0 : from.id + 1) * 16 + level) * 4 + hidden + mirrored2;
-        const key3 = level >= RULE_6 ? `${num}:${this.dg.rule6Ref}` : num;
+      sorted(node, from, level2) {
+        const hidden = level2 >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
+        const mirrored2 = this.mirror && level2 >= RULE_52 ? 2 : 0;
+        const num = ((from === null ? 0 : from.id + 1) * 16 + level2) * 4 + hidden + mirrored2;
+        const key3 = level2 >= RULE_62 ? `${num}:${this.dg.rule6Ref}` : num;
         if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
         const hit = node.sorted.get(key3);
         if (hit) return hit;
         let out;
-        if (level === 0) {
+        if (level2 === 0) {
           const nodes = this.dg.branches(node, from);
           out = this.sortRun(nodes, 0, nodes.length, node, 0, { nodes: nodes.slice(), tie: nodes.map(() => true) });
         } else {
-          const base = this.sorted(node, from, level - 1);
-          if (!this.active[level] || !base.tie.some((t) => t)) out = base;
+          const base = this.sorted(node, from, level2 - 1);
+          if (!this.active[level2] || !base.tie.some((t) => t)) out = base;
           else {
             out = { nodes: base.nodes.slice(), tie: base.tie.slice() };
             for (let i = 0; i < out.nodes.length; ) {
               let j = i + 1;
               while (j < out.nodes.length && base.tie[j]) j++;
-              if (j - i > 1) this.sortRun(out.nodes, i, j, node, level, out);
+              if (j - i > 1) this.sortRun(out.nodes, i, j, node, level2, out);
               i = j;
             }
           }
@@ -42394,13 +42389,13 @@ var init_compare = __esm({
        * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
        * first, writing them and their ties into `out` at the same places.
        */
-      sortRun(nodes, i, j, centre, rule, out) {
+      sortRun(nodes, i, j, centre, rule2, out) {
         const run10 = nodes.slice(i, j);
         const k = run10.length;
         const m = new Array(k * k).fill(0);
         for (let a = 0; a < k; a++) {
           for (let b = a + 1; b < k; b++) {
-            const c = this.compareRule(rule, run10[a], centre, run10[b], centre);
+            const c = this.compareRule(rule2, run10[a], centre, run10[b], centre);
             m[a * k + b] = c;
             m[b * k + a] = -c;
           }
@@ -42438,12 +42433,12 @@ function insertionSort(order, cmp) {
   }
   return order;
 }
-function rankLigands(rk, centre, ligands, level) {
+function rankLigands(rk, centre, ligands, level2) {
   const k = ligands.length;
   const m = ligands.map(() => new Array(k).fill(0));
   for (let i = 0; i < k; i++) {
     for (let j = i + 1; j < k; j++) {
-      const c = rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
+      const c = rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
       m[i][j] = c;
       m[j][i] = -c;
     }
@@ -42459,7 +42454,7 @@ function rankLigands(rk, centre, ligands, level) {
     try {
       for (let i = 0; i < k; i++) {
         for (let j = i + 1; j < k; j++) {
-          const c = Math.abs(m[i][j]) - 1 < RULE_5 ? m[i][j] : rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
+          const c = Math.abs(m[i][j]) - 1 < RULE_5 ? m[i][j] : rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
           mm[i][j] = c;
           mm[j][i] = -c;
         }
@@ -42517,7 +42512,7 @@ function ligandBranch(dg, centre, lig, used) {
   for (const b of br) if (b.atom === lig && !used.has(b)) return b;
   return null;
 }
-function tetrahedralLabel(rk, centre, e, level = RULE_5) {
+function tetrahedralLabel(rk, centre, e, level2 = RULE_5) {
   const used = /* @__PURE__ */ new Set();
   const ligs = [];
   for (const l of e.ligands) {
@@ -42526,7 +42521,7 @@ function tetrahedralLabel(rk, centre, e, level = RULE_5) {
     used.add(b);
     ligs.push(b);
   }
-  const r = rankLigands(rk, centre, ligs, level);
+  const r = rankLigands(rk, centre, ligs, level2);
   if (r.tied) return null;
   const rankOf = [0, 0, 0, 0];
   r.order.forEach((li, pos) => rankOf[li] = pos);
@@ -42563,12 +42558,12 @@ function tetrahedralRule6(rk, centre, e) {
 function endBranches(dg, end, from, other) {
   return dg.branches(end, from).filter((b) => b.atom !== other);
 }
-function endRank(rk, end, cands, ref, level = RULE_5) {
+function endRank(rk, end, cands, ref, level2 = RULE_5) {
   if (cands.length === 0) return null;
   let top = cands[0];
   let rule52 = false;
   if (cands.length >= 2) {
-    const c = rk.compareUpTo(level, cands[0], end, cands[1], end);
+    const c = rk.compareUpTo(level2, cands[0], end, cands[1], end);
     if (c === 0) return null;
     top = c > 0 ? cands[0] : cands[1];
     rule52 = Math.abs(c) - 1 === RULE_5;
@@ -42597,7 +42592,7 @@ function doubleBondLabel(rk, node, e) {
   if (partner.aux === void 0) partner.aux = label;
   return label;
 }
-function axialLabel(rks, ends, e, level = RULE_5) {
+function axialLabel(rks, ends, e, level2 = RULE_5) {
   const rankOf = [0, 0, 0, 0];
   let pseudo = false;
   for (let i = 0; i < 2; i++) {
@@ -42608,7 +42603,7 @@ function axialLabel(rks, ends, e, level = RULE_5) {
     if (a !== null) used.add(a);
     const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], used);
     if (a === null || b === null) return null;
-    const r = rankLigands(rk, end, [a, b], level);
+    const r = rankLigands(rk, end, [a, b], level2);
     if (r.tied) return null;
     pseudo = pseudo !== r.pseudo;
     rankOf[2 * i + r.order[0]] = 2 * i;
@@ -42723,23 +42718,23 @@ function tiedTetrahedral(g, index, e) {
   return out;
 }
 function doubleBond(g, index, e, ref) {
-  const level = ref >= 0 ? RULE_6 : RULE_5;
+  const level2 = ref >= 0 ? RULE_6 : RULE_5;
   const high = [];
   for (let i = 0; i < 2; i++) {
     const end = e.ends[i];
     const excl = towardOther(g, end, e.ends[1 - i]);
     const rk = ranker(g, end, index, ref);
-    const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level);
+    const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level2);
     if (h === null) return null;
     high.push(h);
   }
   return ezLabel(e, high[0], high[1]);
 }
 function axial(g, index, e, ref) {
-  const level = ref >= 0 ? RULE_6 : RULE_5;
+  const level2 = ref >= 0 ? RULE_6 : RULE_5;
   const r0 = ranker(g, e.ends[0], index, ref);
   const r1 = ranker(g, e.ends[1], index, ref);
-  return axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level);
+  return axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level2);
 }
 function labelWith(g, index, e, ref) {
   if (e.kind === "tetrahedral") return tetrahedral2(g, index, e, ref);
@@ -42791,6 +42786,7 @@ var init_helix = __esm({
 
 // src/chem/cip/index.ts
 function assignCip(s) {
+  if (s.stereo.length === 0) return [];
   const g = buildGraph2(s);
   const labels = s.stereo.map((_, i) => labelPlain(g, i));
   if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
@@ -43605,7 +43601,7 @@ function analyse(input) {
   return { norm, p, group, state, defined, reported, chirality };
 }
 function stereogenicSomewhere(g, x, defined, k) {
-  if (!g.perms.some((perm) => perm[k] === k)) return true;
+  if (g.perms.length === 1) return true;
   const open = [];
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
   if (open.length > 10) return true;
@@ -43951,8 +43947,8 @@ function parseDescriptors(input, options = {}) {
     const ch = input[i];
     let consumed = false;
     if (ch === "(" || ch === "[") {
-      const close = ch === "(" ? ")" : "]";
-      const end = input.indexOf(close, i + 1);
+      const close2 = ch === "(" ? ")" : "]";
+      const end = input.indexOf(close2, i + 1);
       const inner = end < 0 ? "" : input.slice(i + 1, end);
       if (end >= 0 && !/[([]/.test(inner)) {
         const g = parseGroup(inner, i + 1, context, problem);
@@ -45985,36 +45981,36 @@ var DEFAULT_COLUMNS = {
   rotation: "rotation"
 };
 var BUILT_IN = {
-  "rac": "racemate",
-  "racemic": "racemate",
-  "racemate": "racemate",
+  rac: "racemate",
+  racemic: "racemate",
+  racemate: "racemate",
   "(+/-)": "racemate",
   "+/-": "racemate",
   "(±)": "racemate",
   "±": "racemate",
-  "dl": "racemate",
-  "meso": "meso",
-  "achiral": "achiral",
+  dl: "racemate",
+  meso: "meso",
+  achiral: "achiral",
   "no stereo": "achiral",
   "not chiral": "achiral",
   "single enantiomer": "single-enantiomer",
-  "enantiopure": "single-enantiomer",
+  enantiopure: "single-enantiomer",
   "enantiomerically pure": "single-enantiomer",
-  "homochiral": "single-enantiomer",
-  "abs": "single-enantiomer",
-  "absolute": "single-enantiomer",
-  "enantioenriched": "enantioenriched",
-  "scalemic": "enantioenriched",
-  "enriched": "enantioenriched",
+  homochiral: "single-enantiomer",
+  abs: "single-enantiomer",
+  absolute: "single-enantiomer",
+  enantioenriched: "enantioenriched",
+  scalemic: "enantioenriched",
+  enriched: "enantioenriched",
   "single diastereomer": "single-diastereomer",
-  "diastereomer": "single-diastereomer",
+  diastereomer: "single-diastereomer",
   "diastereomerically pure": "single-diastereomer",
   "diastereomer mixture": "diastereomer-mixture",
   "mixture of diastereomers": "diastereomer-mixture",
-  "dr": "diastereomer-mixture",
-  "unknown": "unknown",
-  "undefined": "unknown",
-  "unk": "unknown",
+  dr: "diastereomer-mixture",
+  unknown: "unknown",
+  undefined: "unknown",
+  unk: "unknown",
   "?": "unknown"
 };
 function normalise(word) {
@@ -46053,15 +46049,20 @@ function parseRotation(text) {
   return parseNumber(t.replace(/°$/, ""));
 }
 function toRecord(fields, fallbackId, mapping, vocabulary, molfileText) {
-  const col = { ...DEFAULT_COLUMNS, ...Object.fromEntries(Object.entries(mapping).filter(([, v]) => typeof v === "string")) };
+  const col = {
+    ...DEFAULT_COLUMNS,
+    ...Object.fromEntries(Object.entries(mapping).filter(([, v]) => typeof v === "string"))
+  };
   const problems = [];
   const idText = field(fields, col.id)?.trim();
   const id = idText && idText !== "" ? idText : fallbackId;
   let structureText = molfileText;
   if (structureText === null) {
     const s = field(fields, col.structure);
-    if (s === void 0) problems.push({ message: `no structure column '${col.structure}' in this row`, path: "structure" });
-    else if (s.trim() === "") problems.push({ message: `the structure column '${col.structure}' is empty`, path: "structure" });
+    if (s === void 0)
+      problems.push({ message: `no structure column '${col.structure}' in this row`, path: "structure" });
+    else if (s.trim() === "")
+      problems.push({ message: `the structure column '${col.structure}' is empty`, path: "structure" });
     else structureText = s.trim();
   }
   const formWordRaw = field(fields, col.form);
@@ -46085,13 +46086,18 @@ function toRecord(fields, fallbackId, mapping, vocabulary, molfileText) {
   const ee = field(fields, col.ee)?.trim();
   if (ee) {
     const v = parseNumber(ee);
-    if (v === null || v < 0 || v > 100) problems.push({ message: `ee '${ee}' is not a percentage between 0 and 100`, path: "stereo.ee" });
+    if (v === null || v < 0 || v > 100)
+      problems.push({ message: `ee '${ee}' is not a percentage between 0 and 100`, path: "stereo.ee" });
     else record.stereo.ee = v;
   }
   const rot2 = field(fields, col.rotation)?.trim();
   if (rot2) {
     const v = parseRotation(rot2);
-    if (v === null) problems.push({ message: `rotation '${rot2}' has no number stereogate can read`, path: "stereo.rotation" });
+    if (v === null)
+      problems.push({
+        message: `rotation '${rot2}' has no number stereogate can read`,
+        path: "stereo.rotation"
+      });
     else record.stereo.rotation = { value: v };
   }
   return { record, structureText, formWord: formWordRaw?.trim() || null, formHow: understood.how, problems };
@@ -46166,8 +46172,225 @@ function auditItem(item, ctx) {
     origin: { source: item.source, record: item.record, line: item.line },
     form_word: { word: conv.formWord, how: conv.formHow }
   };
-  if (conv.structureText !== null && result.findings.some((f) => !f.waived)) out.structure_text = conv.structureText;
+  if (conv.structureText !== null && result.findings.some((f) => !f.waived))
+    out.structure_text = conv.structureText;
   return out;
+}
+
+// src/audit/builtin-rules.ts
+var BUILTIN_RULES = [
+  {
+    id: SCHEMA_CHECK_ID,
+    defaultSeverity: "error",
+    summary: "The record file is readable and follows the record format.",
+    explanation: "Each record file must be UTF-8 YAML or JSON that follows schema/record.schema.json: the fields id, structure (exactly one of smiles or molfile) and stereo.form are required, no other fields are allowed, and the id must be unique in the registry. A record that fails the format is not checked further."
+  },
+  {
+    id: INTERNAL_ERROR_ID,
+    defaultSeverity: "error",
+    summary: "A check failed with an internal error.",
+    explanation: "A check module threw while checking this record. The other checks and records were still audited. This is a fault in stereogate, not in the record; report it with the record attached."
+  }
+];
+
+// src/report/sarif.ts
+var SARIF_SCHEMA = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json";
+function level(s) {
+  return s;
+}
+function rule(info) {
+  const r = {
+    id: info.id,
+    name: info.id.replace(/(^|-)([a-z])/g, (_m, _d, c) => c.toUpperCase()),
+    shortDescription: { text: info.summary },
+    fullDescription: { text: info.explanation },
+    help: { text: `${info.summary}
+
+${info.explanation}` },
+    defaultConfiguration: { level: level(info.defaultSeverity) }
+  };
+  return r;
+}
+function encodeUri(path) {
+  return path.split("/").map(encodeURIComponent).join("/");
+}
+function sarifLog(result, checks, options = {}) {
+  const infos = [
+    ...checks.map((c) => ({ info: c })),
+    ...BUILTIN_RULES.filter((b) => !checks.some((c) => c.id === b.id)).map((info) => ({ info }))
+  ];
+  for (const r of result.records) {
+    for (const f of r.findings) {
+      if (!infos.some((x) => x.info.id === f.check)) {
+        infos.push({
+          info: { id: f.check, defaultSeverity: f.severity, summary: f.check, explanation: f.check }
+        });
+      }
+    }
+  }
+  const rules = infos.map((x) => rule(x.info));
+  const index = new Map(infos.map((x, i) => [x.info.id, i]));
+  const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
+  const results = result.records.flatMap(
+    (r) => r.findings.map((f) => {
+      const physical = {
+        artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
+      };
+      if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
+      const res = {
+        ruleId: f.check,
+        ruleIndex: index.get(f.check),
+        level: level(f.severity),
+        message: { text: f.message },
+        locations: [{ physicalLocation: physical }],
+        properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data }
+      };
+      if (f.waived) {
+        res.suppressions = [
+          {
+            kind: "inSource",
+            status: "accepted",
+            justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})`
+          }
+        ];
+      }
+      return res;
+    })
+  );
+  return {
+    $schema: SARIF_SCHEMA,
+    version: "2.1.0",
+    runs: [
+      {
+        tool: {
+          driver: {
+            name: result.tool.name,
+            version: result.tool.version,
+            semanticVersion: result.tool.version,
+            rules
+          }
+        },
+        results,
+        properties: { caution: result.caution, summary: result.summary }
+      }
+    ]
+  };
+}
+
+// src/report/html/render.ts
+function computedSummary(r) {
+  const c = r.computed;
+  if (!c) return { text: "structure not read", labels: "" };
+  const chir = c.chiral === null ? "chirality open (undefined units)" : c.chiral ? "chiral" : "achiral";
+  const parts = [chir];
+  if (c.meso) parts.push("meso");
+  parts.push(`${c.units.length} stereo unit${c.units.length === 1 ? "" : "s"}, ${c.undefined} undefined`);
+  parts.push(
+    `${c.stereoisomers.total} stereoisomers (${c.stereoisomers.chiral} chiral, ${c.stereoisomers.achiral} achiral)`
+  );
+  const labels = c.units.filter((u) => u.label).map((u) => `${u.atoms.join("=")}${u.label}`).join(", ");
+  return { text: parts.join("; "), labels };
+}
+var RANK2 = { error: 0, warning: 1, note: 2 };
+function htmlRow(r) {
+  const open = r.findings.filter((f) => !f.waived);
+  if (open.length === 0) return null;
+  const worst = open.reduce(
+    (w, f) => RANK2[f.severity] < RANK2[w] ? f.severity : w,
+    "note"
+  );
+  const cs = computedSummary(r);
+  return {
+    id: r.id ?? "(no id)",
+    file: r.file,
+    form: r.declared.form ?? "(none)",
+    descriptors: r.declared.descriptors ?? "",
+    computed: cs.text,
+    labels: cs.labels,
+    worst,
+    findings: r.findings.map((f) => ({
+      check: f.check,
+      severity: f.severity,
+      message: f.message,
+      line: f.line,
+      waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` : null
+    }))
+  };
+}
+
+// src/bulk/render-record.ts
+var JSONL_PREFIX = '{"kind":"record",';
+function csvCell(v) {
+  const t = v === null ? "" : String(v);
+  const safe = /^[=+\-@\t\r]/.test(t) ? `'${t}` : t;
+  return `"${safe.replace(/"/g, '""')}"`;
+}
+function csvRow(r) {
+  const open = r.findings.filter((f) => !f.waived);
+  const c = r.computed;
+  const count2 = (s) => open.filter((f) => f.severity === s).length;
+  return [
+    r.seq,
+    r.origin.source,
+    r.origin.record,
+    r.origin.line,
+    r.id,
+    r.declared.form,
+    r.form_word.word,
+    c ? c.chiral === null ? "open" : String(c.chiral) : null,
+    c ? c.meso === null ? "open" : String(c.meso) : null,
+    c ? c.units.length : null,
+    c ? c.undefined : null,
+    count2("error"),
+    count2("warning"),
+    count2("note"),
+    r.findings.length - open.length,
+    [...new Set(open.map((f) => f.check))].join(" ")
+  ].map(csvCell).join(",");
+}
+function makeRenderer(wants, checks) {
+  const tool = { name: "stereogate", version: "" };
+  const none = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  return (r) => {
+    const out = {
+      seq: r.seq,
+      jsonl: JSONL_PREFIX + JSON.stringify(r).slice(1),
+      tally: {
+        findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),
+        word: r.form_word.word,
+        how: r.form_word.how,
+        form: r.declared.form
+      }
+    };
+    if (wants.csv) out.csv = csvRow(r);
+    if (wants.sarif && r.findings.length > 0) {
+      const log = sarifLog({ tool, records: [r], summary: none, caution: "" }, checks);
+      const results = log.runs[0].results;
+      out.sarif = results.map((res) => {
+        res.properties.record = r.origin.record;
+        return JSON.stringify(res);
+      });
+    }
+    if (wants.html) {
+      const row = htmlRow(r);
+      if (row) {
+        const labels = (r.computed?.units ?? []).filter((u) => u.label).flatMap((u) => u.atoms.map((a) => ({ atom: a, text: u.label })));
+        out.html = { row, structure: r.structure_text ?? null, labels };
+      }
+    }
+    return out;
+  };
+}
+
+// src/bulk/sarif-writer.ts
+var TIME_LIMIT_RULE = {
+  id: "record-time-limit",
+  defaultSeverity: "error",
+  summary: "A bulk record whose audit exceeded the per-record time limit or crashed its worker",
+  explanation: "The bulk audit gives each record a time limit so that one pathological structure cannot stall a run; such a record is reported instead of audited and the worker is replaced. Audit it on its own with a longer limit."
+};
+function bulkSarifRules(checks) {
+  return [...checks, TIME_LIMIT_RULE];
 }
 
 // src/bulk/context.ts
@@ -46178,7 +46401,8 @@ async function makeItemContext(setup) {
     vocabulary: makeVocabulary(setup.mapping.vocabulary),
     checks: CHECKS2,
     config: setup.config,
-    engine
+    engine,
+    render: makeRenderer(setup.wants, bulkSarifRules(CHECKS2))
   };
 }
 
@@ -46203,5 +46427,6 @@ function serveWorker(handler) {
 var ready = null;
 serveWorker(async (item, data) => {
   ready ??= makeItemContext(data);
-  return auditItem(item, await ready);
+  const ctx = await ready;
+  return ctx.render(auditItem(item, ctx));
 });
