@@ -56,7 +56,8 @@ export function finishMolecule(raw: RawMolecule): ReadResult {
     let sum = 0;
     for (const k of adj.bnd[i]!) sum += bonds[k]!.order;
     const v = raw.valences[i];
-    if (v !== null && v !== undefined) atom.hCount = Math.max(0, v - sum - atom.radical);
+    // The valence field counts bonds plus hydrogens; unpaired electrons are not part of it (as RDKit writes it).
+    if (v !== null && v !== undefined) atom.hCount = Math.max(0, v - sum);
     else atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
   }
 

@@ -31,17 +31,41 @@ export function intField(line: string, start: number, end: number): number {
   return digits === 0 ? NaN : sign * value;
 }
 
-/** Decimal number in columns [start, end). Blank -> NaN (coordinates are required). */
+/**
+ * Decimal number in columns [start, end). Blank -> NaN (coordinates are required). Plain decimals
+ * ("-12.3456") are read digit by digit as (integer / 10^k), which rounds exactly like Number(); anything else
+ * (exponents, stray characters) goes to Number().
+ */
 export function floatField(line: string, start: number, end: number): number {
-  const s = line.slice(start, end);
-  let blank = true;
-  for (let i = 0; i < s.length; i++) {
-    if (s.charCodeAt(i) !== 32) {
-      blank = false;
-      break;
-    }
+  if (end > line.length) end = line.length;
+  let i = start;
+  while (i < end && line.charCodeAt(i) === 32) i++;
+  let j = end;
+  while (j > i && line.charCodeAt(j - 1) === 32) j--;
+  if (i >= j) return NaN;
+  let k = i;
+  let neg = false;
+  const c0 = line.charCodeAt(k);
+  if (c0 === 45 || c0 === 43) {
+    neg = c0 === 45;
+    k++;
   }
-  return blank ? NaN : Number(s);
+  let mant = 0;
+  let scale = 1;
+  let digits = 0;
+  let dot = false;
+  for (; k < j; k++) {
+    const c = line.charCodeAt(k);
+    if (c >= 48 && c <= 57) {
+      mant = mant * 10 + (c - 48);
+      if (dot) scale *= 10;
+      digits++;
+    } else if (c === 46 && !dot) dot = true;
+    else return Number(line.slice(i, j));
+  }
+  if (digits === 0 || digits > 15) return Number(line.slice(i, j));
+  const v = mant / scale;
+  return neg ? -v : v;
 }
 
 /** Whitespace tokens of a line (for free-format fallbacks and the properties block, not the hot loop). */

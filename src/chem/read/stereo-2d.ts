@@ -6,9 +6,9 @@
  * points (unit 2D bond vector, z = +1 for a wedge starting at the centre, -1 for a hash, 0 otherwise: a wedge
  * seen from its wide end does not count). A three-neighbour centre gets its fourth ligand (implicit H, lone
  * pair) at minus the sum of the three bond vectors, where a real tetrahedron puts it. Each wedged bond is read
- * on its own (that bond lifted, the others plain): the sign of the signed volume of the four points gives the
- * winding; if that is flat (a T-shape with the wedge on its stem) the plain bonds lean slightly away from the
- * wedge (z = -0.5 z_wedge) and it is read again. All readings must agree: two adjacent wedges of one kind, or
+ * on its own: that bond lifted (z = +1 wedge, -1 hash), the other bonds in the plane; the sign of the signed
+ * volume of the four points gives the winding. If that is flat (a T-shape with the wedge on its stem) the
+ * plain bonds lean slightly away from the wedge (z = -0.3 z_wedge) and it is read again. All readings must agree: two adjacent wedges of one kind, or
  * a wedge and a hash in one straight line, contradict each other (no projection of a tetrahedron looks like
  * that) and give no configuration and a warning; so does a drawing where no reading fixes anything. A wavy bond ('either') at its
  * narrow end leaves the atom explicitly undefined.
@@ -43,7 +43,9 @@ import {
 } from './molfile-geometry.js';
 
 /** Below this |signed volume| (unit vectors, x6) the drawing does not fix a configuration. */
-const MIN_VOLUME = 0.2;
+const MIN_VOLUME = 0.01;
+/** How far plain bonds lean away from the wedge being read (z units, wedge = 1). */
+const PLAIN_LEAN = 0.3;
 /** Below this |sin| of the angle to the bond line a double-bond substituent counts as on the line. */
 const MIN_SIDE = 0.1;
 
@@ -132,11 +134,13 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
   }
 
   /**
-   * Sign of the signed volume (-1, +1; 0 = flat) with only bond w lifted by z. Plain bonds lie in the plane;
-   * if that is flat (a T-shape with the wedge on its stem), they lean slightly away from the wedge.
+   * Sign of the signed volume (-1, +1; 0 = flat) with only bond w lifted by z and the other bonds in the
+   * plane. If that is flat (a T-shape with the wedge on its stem), the plain bonds lean slightly the other way
+   * (z = -0.3 z_w, as the other three bonds of a tetrahedron do when one points at the viewer) and it is read
+   * again. (Leaning always would misplace the implicit H of unevenly drawn three-neighbour centres.)
    */
   function reading(flat: Vec[], w: number, z: number, addFourth: boolean): number {
-    for (const plainZ of [0, -0.5 * z]) {
+    for (const plainZ of [0, -PLAIN_LEAN * z]) {
       const pts: Vec[] = flat.map((u, j) => [u[0], u[1], j === w ? z : plainZ]);
       if (addFourth) {
         const sum: Vec = [0, 0, 0];

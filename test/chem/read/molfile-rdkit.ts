@@ -3,6 +3,8 @@ export interface RdMol {
   get_smiles(): string;
   remove_hs_in_place(): void;
   get_substruct_matches(q: RdMol, details?: string): string;
+  get_molblock(): string;
+  get_json(): string;
   delete(): void;
 }
 export interface Rd {
