@@ -6,6 +6,9 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { writeSmilesWithOrder } from '../../../src/chem/write/smiles.js';
+import { stereoDifferences } from '../write/stereo-same.js';
+import { loadRDKit, rdkitCanonical } from './smiles-rdkit-helper.js';
 import { parseSmiles } from '../../../src/chem/read/smiles.js';
 import type { Structure } from '../../../src/chem/types.js';
 import { haveSharedData, sharedDataPath } from '../../support/shared-data.js';
@@ -92,5 +95,38 @@ describe.skipIf(!haveSharedData('cip-validation-suite'))(
         expect(r.structure.stereo.some((x) => x.kind === 'tetrahedral' && x.centre === atom - 1)).toBe(true);
       }
     });
+
+    it('writes every entry back in three atom orders without changing it (RDKit canonical SMILES; our reader)', async () => {
+      // RDKit (@rdkit/rdkit) judges tetrahedral and cis/trans stereo; it drops allene marks, which our own
+      // reader checks through stereoDifferences.
+      const rd = await loadRDKit();
+      let seed = 12345;
+      const random = (): number => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
+      const problems: string[] = [];
+      let written = 0;
+      for (const e of entries()) {
+        const r = parseSmiles(e.smiles);
+        if (!r.ok) continue;
+        const s = r.structure;
+        const n = s.atoms.length;
+        const ref = rdkitCanonical(rd, e.smiles);
+        const keys = s.atoms.map(() => random());
+        const orders = [
+          undefined,
+          s.atoms.map((_, i) => n - 1 - i),
+          s.atoms.map((_, i) => i).sort((x, y) => keys[x]! - keys[y]!),
+        ];
+        for (const order of orders) {
+          const w = writeSmilesWithOrder(s, { order });
+          written++;
+          if (rdkitCanonical(rd, w.smiles) !== ref) problems.push(`${e.id} RDKit: ${w.smiles}`);
+          const back = parseSmiles(w.smiles);
+          const diffs = back.ok ? stereoDifferences(s, back.structure, w.atomOrder) : ['unreadable'];
+          if (diffs.length > 0) problems.push(`${e.id} ours: ${w.smiles} ${diffs.join('; ')}`);
+        }
+      }
+      expect(written).toBe(900);
+      expect(problems).toEqual([]);
+    }, 60_000);
   },
 );
