@@ -55,7 +55,7 @@ export function analyse(input: Structure): Analysis {
 
 /** Is unit k stereogenic in some completion of the drawing? (Exact up to 2^10 completions, else assumed.) */
 function stereogenicSomewhere(g: UnitGroup, x: State, defined: Uint8Array, k: number): boolean {
-  if (!g.perms.some((perm) => perm[k] === k)) return true;
+  if (g.perms.length === 1) return true;
   const open: number[] = [];
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
   if (open.length > 10) return true;
