@@ -205,12 +205,14 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
 }
 
 function readAtom(
-  t: string[],
+  tokens: string[],
   line: number,
   position: number,
   indexOf: Map<number, number>,
   warnings: ReadError[],
 ): { atom: Atom; valence: number | null } | ReadError {
+  let t = tokens;
+  if ((t[1] ?? '').toUpperCase() === 'NOT' && t.length > 2) t = [t[0]!, `NOT ${t[2]}`, ...t.slice(3)]; // NOT [O,S]
   if (t.length < 6) return { code: 'molfile-atom-line-short', message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`, at: { line } };
   const index = Number(t[0]);
   if (!Number.isInteger(index) || index < 1) return { code: 'molfile-bad-atom-line', message: `atom index "${t[0]}" is not a positive integer`, at: { line } };
@@ -223,7 +225,7 @@ function readAtom(
   }
   let sym = t[1]!;
   if (sym.startsWith('"') && sym.endsWith('"') && sym.length >= 2) sym = sym.slice(1, -1);
-  const isList = sym.startsWith('[') || sym.toUpperCase() === 'NOT';
+  const isList = sym.startsWith('[') || sym.toUpperCase().startsWith('NOT ');
   const el = isList ? elementOf('*') : elementOf(sym);
   if (el === null) return { code: 'molfile-unknown-element', message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`, at: { line } };
   const map = Number(t[5]);

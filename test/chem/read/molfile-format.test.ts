@@ -114,7 +114,9 @@ M  END`;
     const syms = ['R#', 'A', 'Q', 'L', '*', 'C', 'D', 'T'];
     const lines = ['', '', '', `  ${syms.length}  0  0  0  0  0  0  0  0  0999 V2000`];
     syms.forEach((sym, i) => {
-      lines.push(`    ${i}.0000    0.0000    0.0000 ${sym.padEnd(3)} 0${'  0'.repeat(8)}${String(i + 1).padStart(3)}  0  0`);
+      lines.push(
+        `    ${i}.0000    0.0000    0.0000 ${sym.padEnd(3)} 0${'  0'.repeat(8)}${String(i + 1).padStart(3)}  0  0`,
+      );
     });
     lines.push('M  ALS   6  2 F C   N   ', 'M  END');
     const s = ok(parseMolfile(lines.join('\n')));
@@ -138,13 +140,23 @@ M  END`;
   it('aromatic bond type 4 is kekulized (benzene, pyridine, pyrrole with open N-H, indole) and RDKit agrees', () => {
     const ring = (els: string[], extra = ''): string => {
       const n = els.length;
-      const lines = ['', '', '', `${String(n).padStart(3)}${String(n).padStart(3)}  0  0  0  0  0  0  0  0999 V2000`];
+      const lines = [
+        '',
+        '',
+        '',
+        `${String(n).padStart(3)}${String(n).padStart(3)}  0  0  0  0  0  0  0  0999 V2000`,
+      ];
       els.forEach((e, i) => {
-        const x = Math.cos((2 * Math.PI * i) / n).toFixed(4).padStart(10);
-        const y = Math.sin((2 * Math.PI * i) / n).toFixed(4).padStart(10);
+        const x = Math.cos((2 * Math.PI * i) / n)
+          .toFixed(4)
+          .padStart(10);
+        const y = Math.sin((2 * Math.PI * i) / n)
+          .toFixed(4)
+          .padStart(10);
         lines.push(`${x}${y}    0.0000 ${e.padEnd(3)} 0  0  0  0  0  0  0  0  0  0  0  0`);
       });
-      for (let i = 0; i < n; i++) lines.push(`${String(i + 1).padStart(3)}${String(((i + 1) % n) + 1).padStart(3)}  4  0  0  0  0`);
+      for (let i = 0; i < n; i++)
+        lines.push(`${String(i + 1).padStart(3)}${String(((i + 1) % n) + 1).padStart(3)}  4  0  0  0  0`);
       return lines.join('\n') + extra + '\nM  END\n';
     };
     for (const [els, ref] of [
@@ -187,6 +199,20 @@ M  END`;
     expect(ok(readStructure(ALANINE_V2000)).atoms).toHaveLength(6);
     expect(ok(readStructure(ALANINE_V3000)).atoms).toHaveLength(6);
     expect(ok(readStructure('C[C@H](N)C(=O)O')).dimension).toBe(0);
+  });
+});
+
+describe('V3000 atom types and counts (CTfile format specification, V3000 atom block)', () => {
+  it('atom lists, NOT lists and quoted pseudo-atoms... become wildcards; a COUNTS mismatch is a warning', () => {
+    const t = ['', '', '', '  0  0  0     0  0            999 V3000', 'M  V30 BEGIN CTAB', 'M  V30 COUNTS 4 2 0 0 1',
+      'M  V30 BEGIN ATOM', 'M  V30 1 [C,N] 0 0 0 0', 'M  V30 2 NOT [O,S] 1.5 0 0 0', 'M  V30 3 "R#" 3 0 0 0', 'M  V30 4 Cl 4.5 0 0 7',
+      'M  V30 END ATOM', 'M  V30 BEGIN BOND', 'M  V30 1 1 1 2', 'M  V30 END BOND', 'M  V30 END CTAB', 'M  END'].join('\n');
+    const r = parseMolfile(t);
+    if (!r.ok) throw new Error(r.error.message);
+    expect(r.structure.atoms.map((a) => a.element)).toEqual(['*', '*', '*', 'Cl']);
+    expect(r.structure.atoms[3]!.mapNumber).toBe(7);
+    expect(r.structure.chiralFlag).toBe(true);
+    expect(r.warnings.map((w) => w.code)).toEqual(['molfile-counts-mismatch']);
   });
 });
 
