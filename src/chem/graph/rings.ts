@@ -35,7 +35,7 @@ export function ringInfo(s: Structure, g: Graph = buildGraph(s)): RingInfo {
     }
   }
   const atomInRing = smallestRingOfAtom.map((x) => x > 0);
-  const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing) : [];
+  const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
   return { rings, atomInRing, bondInRing, smallestRingOfBond, smallestRingOfAtom, ringSystems: systems(rings, n) };
 }
 

@@ -15,7 +15,12 @@ interface Candidate {
   hash: number;
 }
 
-export function minimumCycleBasis(s: Structure, g: Graph, bondInRing: readonly boolean[]): number[][] {
+export function minimumCycleBasis(
+  s: Structure,
+  g: Graph,
+  bondInRing: readonly boolean[],
+  smallestRingOfBond: readonly number[],
+): number[][] {
   const n = g.n;
   const m = s.bonds.length;
   // Ring systems by union-find over ring bonds.
@@ -32,10 +37,13 @@ export function minimumCycleBasis(s: Structure, g: Graph, bondInRing: readonly b
   }
   const atomsOf = new Map<number, number[]>();
   const bondsOf = new Map<number, number>();
+  const smallestOf = new Map<number, number>();
   for (let k = 0; k < m; k++) {
     if (!bondInRing[k]) continue;
     const r = find(s.bonds[k].a);
     bondsOf.set(r, (bondsOf.get(r) ?? 0) + 1);
+    const z = smallestRingOfBond[k];
+    if (z < (smallestOf.get(r) ?? Infinity)) smallestOf.set(r, z);
   }
   const inRing = new Uint8Array(n);
   for (let k = 0; k < m; k++) if (bondInRing[k]) inRing[s.bonds[k].a] = inRing[s.bonds[k].b] = 1;
@@ -50,7 +58,7 @@ export function minimumCycleBasis(s: Structure, g: Graph, bondInRing: readonly b
   for (const [root, atoms] of atomsOf) {
     const nullity = bondsOf.get(root)! - atoms.length + 1;
     if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
-    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m));
+    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallestOf.get(root)!));
   }
   return rings.sort((p, q) => p.length - q.length);
 }
@@ -76,99 +84,112 @@ function walkCycle(start: number, g: Graph, bondInRing: readonly boolean[]): num
   }
 }
 
+/**
+ * Horton candidates are generated in rounds of growing size limit, from the system's smallest ring (exact, per
+ * bond) up, with the breadth-first search cut at half the limit, so large
+ * fused systems (fullerenes, big polycycles) do not pay for every long candidate; each round's candidates are
+ * longer than all earlier ones, so elimination stays in size order.
+ */
 function hortonBasis(
   atoms: number[],
   nullity: number,
   g: Graph,
   bondInRing: readonly boolean[],
   m: number,
+  smallest: number,
 ): number[][] {
   const n = g.n;
   const words = (m + 31) >>> 5;
-  const cands: Candidate[] = [];
-  const seen = new Map<number, Candidate[]>();
+  const seen = new Map<number, Uint32Array[]>();
   const dist = new Int32Array(n).fill(-1);
   const parent = new Int32Array(n);
   const parentBond = new Int32Array(n);
   const branch = new Int32Array(n);
   const order = new Int32Array(n);
-  for (const r of atoms) {
-    dist[r] = 0;
-    parent[r] = -1;
-    parentBond[r] = -1;
-    branch[r] = r;
-    let head = 0;
-    let tail = 0;
-    order[tail++] = r;
-    while (head < tail) {
-      const u = order[head++];
-      const nb = g.nbrs[u];
-      for (let i = 0; i < nb.length; i++) {
-        const k = g.nbrBonds[u][i];
-        if (!bondInRing[k]) continue;
-        const v = nb[i];
-        if (dist[v] >= 0) continue;
-        dist[v] = dist[u] + 1;
-        parent[v] = u;
-        parentBond[v] = k;
-        branch[v] = u === r ? v : branch[u];
-        order[tail++] = v;
-      }
-    }
-    // Every non-tree ring bond x–y closes a candidate when the two tree paths meet only at r.
-    for (let t = 0; t < tail; t++) {
-      const x = order[t];
-      const nb = g.nbrs[x];
-      for (let i = 0; i < nb.length; i++) {
-        const k = g.nbrBonds[x][i];
-        const y = nb[i];
-        if (!bondInRing[k] || parentBond[x] === k || parentBond[y] === k) continue;
-        if (dist[y] < dist[x] || (dist[y] === dist[x] && y < x)) continue; // each bond once per root
-        if (x !== r && y !== r && branch[x] === branch[y]) continue;
-        const bits = new Uint32Array(words);
-        const path: number[] = [];
-        for (let u = x; u !== r; u = parent[u]) {
-          path.push(u);
-          bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-        }
-        path.push(r);
-        path.reverse(); // r .. x
-        for (let u = y; u !== r; u = parent[u]) {
-          path.push(u);
-          bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-        }
-        bits[k >>> 5] ^= 1 << (k & 31);
-        let hash = 0;
-        for (let w = 0; w < words; w++) hash = (Math.imul(hash, 31) + bits[w]) | 0;
-        const bucket = seen.get(hash);
-        if (bucket?.some((c) => equalBits(c.bits, bits))) continue;
-        const cand = { size: path.length, atoms: path, bits, hash };
-        if (bucket) bucket.push(cand);
-        else seen.set(hash, [cand]);
-        cands.push(cand);
-      }
-    }
-    for (let t = 0; t < tail; t++) dist[order[t]] = -1;
-  }
-  cands.sort((p, q) => p.size - q.size);
-
-  // Gaussian elimination over GF(2); the basis is kept reduced on its pivot columns.
   const basis: Uint32Array[] = [];
-  const pivots: number[] = [];
+  const owner = new Int32Array(m).fill(-1);
   const rings: number[][] = [];
-  for (const c of cands) {
-    const v = c.bits.slice();
-    for (let j = 0; j < basis.length; j++) {
-      const p = pivots[j];
-      if (v[p >>> 5] & (1 << (p & 31))) xorInto(v, basis[j]);
+  let below = 0;
+  for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
+    const depth = (limit + 1) >> 1;
+    const cands: Candidate[] = [];
+    for (const r of atoms) {
+      dist[r] = 0;
+      parent[r] = -1;
+      parentBond[r] = -1;
+      branch[r] = r;
+      let head = 0;
+      let tail = 0;
+      order[tail++] = r;
+      while (head < tail) {
+        const u = order[head++];
+        if (dist[u] >= depth) continue;
+        const nb = g.nbrs[u];
+        for (let i = 0; i < nb.length; i++) {
+          const k = g.nbrBonds[u][i];
+          if (!bondInRing[k]) continue;
+          const v = nb[i];
+          if (dist[v] >= 0) continue;
+          dist[v] = dist[u] + 1;
+          parent[v] = u;
+          parentBond[v] = k;
+          branch[v] = u === r ? v : branch[u];
+          order[tail++] = v;
+        }
+      }
+      // Every non-tree ring bond x–y closes a candidate when the two tree paths meet only at r.
+      for (let t = 0; t < tail; t++) {
+        const x = order[t];
+        const nb = g.nbrs[x];
+        for (let i = 0; i < nb.length; i++) {
+          const k = g.nbrBonds[x][i];
+          const y = nb[i];
+          if (!bondInRing[k] || dist[y] < 0 || parentBond[x] === k || parentBond[y] === k) continue;
+          if (dist[y] < dist[x] || (dist[y] === dist[x] && y < x)) continue; // each bond once per root
+          if (x !== r && y !== r && branch[x] === branch[y]) continue;
+          const size = dist[x] + dist[y] + 1;
+          if (size <= below || size > limit) continue;
+          const bits = new Uint32Array(words);
+          const path: number[] = [];
+          for (let u = x; u !== r; u = parent[u]) {
+            path.push(u);
+            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          }
+          path.push(r);
+          path.reverse(); // r .. x
+          for (let u = y; u !== r; u = parent[u]) {
+            path.push(u);
+            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          }
+          bits[k >>> 5] ^= 1 << (k & 31);
+          let hash = 0;
+          for (let w = 0; w < words; w++) hash = (Math.imul(hash, 31) + bits[w]) | 0;
+          const bucket = seen.get(hash);
+          if (bucket?.some((c) => equalBits(c, bits))) continue;
+          if (bucket) bucket.push(bits);
+          else seen.set(hash, [bits]);
+          cands.push({ size, atoms: path, bits, hash });
+        }
+      }
+      for (let t = 0; t < tail; t++) dist[order[t]] = -1;
     }
-    const p = firstBit(v);
-    if (p < 0) continue;
-    for (let j = 0; j < basis.length; j++) if (basis[j][p >>> 5] & (1 << (p & 31))) xorInto(basis[j], v);
-    basis.push(v);
-    pivots.push(p);
-    rings.push(c.atoms);
-    if (rings.length === nullity) break;
+    cands.sort((p, q) => p.size - q.size);
+    // Gaussian elimination over GF(2) in echelon form: each basis vector owns its lowest bit.
+    for (const c of cands) {
+      const v = c.bits.slice();
+      let p = firstBit(v);
+      while (p >= 0 && owner[p] >= 0) {
+        xorInto(v, basis[owner[p]]);
+        p = firstBit(v);
+      }
+      if (p < 0) continue;
+      owner[p] = basis.length;
+      basis.push(v);
+      rings.push(c.atoms);
+      if (rings.length === nullity) break;
+    }
+    below = limit;
+    if (limit > 2 * n + 2) break; // every candidate has been generated
   }
   return rings;
 }
