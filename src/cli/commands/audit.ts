@@ -15,6 +15,8 @@ import { renderMarkdown } from '../../report/markdown.js';
 import { renderSarif } from '../../report/sarif.js';
 import { renderText, shouldColor } from '../../report/text.js';
 import { parseCommandArgs } from '../args.js';
+import { isBulkInput } from '../../bulk/run.js';
+import { bulkAudit } from './bulk-audit.js';
 import { EXIT_OK, UsageError, type Command } from '../command.js';
 
 export const EXIT_FINDINGS = 1;
@@ -33,6 +35,8 @@ const USAGE = [
   '                       error (default), warning, or never',
   '',
   'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error.',
+  '',
+  'Legacy exports (.sdf, .csv, .tsv) are audited in bulk; `stereogate merge --help` lists the bulk options.',
 ].join('\n');
 
 /** Whether open findings reach the threshold (waived findings never count). */
@@ -68,6 +72,8 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
     summary: 'audit registry records for stereochemical consistency and print the checklist',
     usage: USAGE,
     async run(args, io) {
+      // SD / CSV / TSV inputs are legacy exports: the bulk audit takes them (streamed, parallel, shardable).
+      if (args.some((a) => !a.startsWith('-') && isBulkInput(a))) return bulkAudit(args, io);
       const { values, positionals } = parseCommandArgs(
         args,
         {
