@@ -68,7 +68,7 @@ describe.skipIf(!haveSharedData('moleculenet'))(
       const disagree: string[] = [];
       for (const file of NET) {
         const all = moleculeNetSmiles(sharedDataPath('moleculenet', file));
-        for (let i = 3; i < all.length; i += 10) {
+        for (let i = 3; i < all.length; i += 16) {
           const ref = fromRdkit(rd, all[i]);
           if (!ref) continue;
           compared++;
@@ -83,7 +83,7 @@ describe.skipIf(!haveSharedData('moleculenet'))(
             disagree.push(`${all[i]} mine ${mine} RDKit ${ref.numAromaticRings}`);
         }
       }
-      expect(compared).toBeGreaterThan(1200);
+      expect(compared).toBeGreaterThan(700);
       expect(disagree.length / compared).toBeLessThan(0.01);
     }, 120_000);
   },

@@ -107,6 +107,18 @@ describe('key semantics: one mapping per distinct restriction to key ∪ N(key) 
     );
   });
 
+  it('erythromycin A: 18 stereocentres as key give the identity only; unkeyed, the N-methyl swap too', () => {
+    // Structure of erythromycin A (PubChem CID 12560 isomeric SMILES, from memory); its only constitutional
+    // symmetry is the exchange of the two N-methyl groups of desosamine.
+    const s = build(
+      'CC[C@@H]1[C@@]([C@@H]([C@H](C(=O)[C@@H](C[C@@]([C@@H]([C@H]([C@@H]([C@H](C(=O)O1)C)O[C@H]2C[C@@]([C@H]([C@@H](O2)C)O)(C)OC)C)O[C@H]3[C@@H]([C@H](C[C@H](O3)C)N(C)C)O)(C)O)C)C)O)(C)O',
+    );
+    const key = s.stereo.flatMap((u) => (u.kind === 'tetrahedral' ? [u.centre] : []));
+    expect(key.length).toBe(18);
+    expect(all(s, { key }).maps.length).toBe(1);
+    expect(all(s).maps.length).toBe(2);
+  });
+
   it('inositol with its six ring carbons as key gives the 12 ring symmetries', () => {
     const s = build('OC1C(O)C(O)C(O)C(O)C1O');
     const key = s.atoms.map((a, i) => i).filter((i) => s.atoms[i].element === 'C');

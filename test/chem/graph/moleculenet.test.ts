@@ -56,7 +56,7 @@ describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet against RDKit', () 
     const wrong: string[] = [];
     let used = 0;
     for (const group of groups) {
-      if (used > 1500) break;
+      if (used > 900) break;
       used += group.length;
       const items = group
         .map((smi) => ({ smi, s: read(smi)!, canon: rdkitSmiles(rd, smi) }))
@@ -73,8 +73,8 @@ describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet against RDKit', () 
         }
       }
     }
-    expect(pairs).toBeGreaterThan(1000);
-    expect(samePairs).toBeGreaterThan(100);
+    expect(pairs).toBeGreaterThan(500);
+    expect(samePairs).toBeGreaterThan(50);
     expect(wrong).toEqual([]);
   }, 300_000);
 
@@ -83,7 +83,7 @@ describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet against RDKit', () 
     const smiles = allSmiles();
     let compared = 0;
     const wrong: string[] = [];
-    for (let i = 0; i < smiles.length; i += 40) {
+    for (let i = 0; i < smiles.length; i += 60) {
       const base = noStereo(smiles[i]);
       const a = read(base);
       const kek = rdkitSmiles(rd, base, { canonical: false, doRandom: true, doKekule: true });
@@ -104,7 +104,7 @@ describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet against RDKit', () 
         if (groupOrder(a) !== groupOrder(b)) wrong.push(`group order ${base} | ${other}`);
       }
     }
-    expect(compared).toBeGreaterThan(500);
+    expect(compared).toBeGreaterThan(350);
     expect(wrong).toEqual([]);
   }, 300_000);
 });

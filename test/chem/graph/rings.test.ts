@@ -69,7 +69,7 @@ describe.skipIf(!haveSharedData('moleculenet'))(
       const problems: string[] = [];
       for (const file of NET) {
         const all = moleculeNetSmiles(sharedDataPath('moleculenet', file));
-        for (let i = 0; i < all.length; i += 10) {
+        for (let i = 0; i < all.length; i += 16) {
           const ref = fromRdkit(rd, all[i]);
           // Metal complexes are left out: RDKit leaves bonds to metals out of its rings (vitamin B12 differs).
           if (!ref || ref.structure.atoms.some((a) => !NONMETALS.has(a.atomicNumber))) continue;
@@ -92,7 +92,7 @@ describe.skipIf(!haveSharedData('moleculenet'))(
           if (!ok) problems.push(`${all[i]} mine ${mine} RDKit ${theirs}`);
         }
       }
-      expect(compared).toBeGreaterThan(1200);
+      expect(compared).toBeGreaterThan(700);
       expect(problems).toEqual([]);
     }, 120_000);
   },
