@@ -9,25 +9,18 @@
  */
 import type { CipLabel } from '../facts.js';
 import { CipNode, Digraph, type SortedBranches } from './digraph.js';
-import {
-  RULE_1A,
-  RULE_1B,
-  RULE_2,
-  RULE_3,
-  RULE_4A,
-  RULE_4B,
-  RULE_4C,
-  RULE_5,
-  RULE_6,
-  rule1a,
-  rule1b,
-  rule2,
-  rule3,
-  rule4a,
-  rule4c,
-  rule5,
-  rule6,
-} from './rules.js';
+import { rule3, rule4a, rule4c, rule5 } from './rules.js';
+
+// rule indices (as in rules.ts), local so the hot comparison loop reads plain constants
+const RULE_1A = 0;
+const RULE_1B = 1;
+const RULE_2 = 2;
+const RULE_3 = 3;
+const RULE_4A = 4;
+const RULE_4B = 5;
+const RULE_4C = 6;
+const RULE_5 = 7;
+const RULE_6 = 8;
 import { compareRule4b } from './rule4b.js';
 
 export type AuxFn = (node: CipNode) => CipLabel | null;
@@ -48,6 +41,8 @@ export class Ranker {
    * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
    */
   mirror = false;
+  private depth = 0;
+  private readonly pool: { x: CipNode[]; fx: (CipNode | null)[]; y: CipNode[]; fy: (CipNode | null)[] }[] = [];
 
   constructor(
     readonly dg: Digraph,
@@ -95,12 +90,12 @@ export class Ranker {
 
   value(rule: number, n: CipNode): number {
     switch (rule) {
-      case RULE_1A:
-        return rule1a(n);
-      case RULE_1B:
-        return rule1b(n);
-      case RULE_2:
-        return rule2(n);
+      case RULE_1A: // Rule 1a: atomic number (rules.ts rule1a)
+        return n.z;
+      case RULE_1B: // Rule 1b: duplicate nearer the root first (rules.ts rule1b)
+        return -n.dist;
+      case RULE_2: // Rule 2: mass (rules.ts rule2)
+        return n.mass;
       case RULE_3:
         return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
       case RULE_4A:
@@ -109,8 +104,8 @@ export class Ranker {
         return this.stereoValue(n, rule4c);
       case RULE_5:
         return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
-      case RULE_6:
-        return rule6(n, this.dg.rule6Ref);
+      case RULE_6: // proposed Rule 6 (rules.ts rule6)
+        return n.atom === this.dg.rule6Ref ? 1 : 0;
       default:
         return 0;
     }
@@ -132,31 +127,49 @@ export class Ranker {
     if (rule === RULE_4B) return compareRule4b(this, x, fx, y, fy);
     let c = this.value(rule, x) - this.value(rule, y);
     if (c !== 0) return c > 0 ? 1 : -1;
-    const qx: CipNode[] = [x];
-    const qfx: (CipNode | null)[] = [fx];
-    const qy: CipNode[] = [y];
-    const qfy: (CipNode | null)[] = [fy];
-    for (let i = 0; i < qx.length; i++) {
-      const sx = this.sorted(qx[i], qfx[i], rule).nodes;
-      const sy = this.sorted(qy[i], qfy[i], rule).nodes;
-      const m = Math.min(sx.length, sy.length);
-      for (let j = 0; j < m; j++) {
-        c = this.value(rule, sx[j]) - this.value(rule, sy[j]);
-        if (c !== 0) return c > 0 ? 1 : -1;
-      }
-      // a missing substituent is a phantom atom (atomic number 0, nothing else)
-      if (sx.length !== sy.length && rule === RULE_1A) {
-        const longer = sx.length > sy.length ? sx : sy;
-        for (let j = m; j < longer.length; j++) {
-          if (this.value(rule, longer[j]) > 0) return longer === sx ? 1 : -1;
+    // hydrogens, phantoms and duplicates have nothing beyond them
+    if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
+    // breadth-first queues of node pairs, reused per nesting depth (sorting below may compare again)
+    const d = this.depth++;
+    let q = this.pool[d];
+    if (q === undefined) q = this.pool[d] = { x: [], fx: [], y: [], fy: [] };
+    const qx = q.x;
+    const qfx = q.fx;
+    const qy = q.y;
+    const qfy = q.fy;
+    qx.length = qfx.length = qy.length = qfy.length = 0;
+    qx.push(x);
+    qfx.push(fx);
+    qy.push(y);
+    qfy.push(fy);
+    try {
+      for (let i = 0; i < qx.length; i++) {
+        const sx = this.sorted(qx[i], qfx[i], rule).nodes;
+        const sy = this.sorted(qy[i], qfy[i], rule).nodes;
+        const m = Math.min(sx.length, sy.length);
+        for (let j = 0; j < m; j++) {
+          c = this.value(rule, sx[j]) - this.value(rule, sy[j]);
+          if (c !== 0) return c > 0 ? 1 : -1;
+        }
+        // a missing substituent is a phantom atom (atomic number 0, nothing else)
+        if (sx.length !== sy.length && rule === RULE_1A) {
+          const longer = sx.length > sy.length ? sx : sy;
+          for (let j = m; j < longer.length; j++) {
+            if (this.value(rule, longer[j]) > 0) return longer === sx ? 1 : -1;
+          }
+        }
+        for (let j = 0; j < m; j++) {
+          const a = sx[j];
+          const b = sy[j];
+          if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+          qx.push(a);
+          qfx.push(qx[i]);
+          qy.push(b);
+          qfy.push(qy[i]);
         }
       }
-      for (let j = 0; j < m; j++) {
-        qx.push(sx[j]);
-        qfx.push(qx[i]);
-        qy.push(sy[j]);
-        qfy.push(qy[i]);
-      }
+    } finally {
+      this.depth--;
     }
     return 0;
   }
@@ -173,6 +186,17 @@ export class Ranker {
 
   /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
   sorted(node: CipNode, from: CipNode | null, level: number): SortedBranches {
+    if (node.dup || node.atom < 0) return EMPTY;
+    // the usual case, downwards inside the scope in plain mode: an array by level
+    const plain = from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level < RULE_3 || this.inScope(node));
+    if (plain) {
+      if (node.down === null) node.down = [];
+      const hit = node.down[level];
+      if (hit !== undefined) return hit;
+      const out = this.sortAt(node, from, level);
+      node.down[level] = out;
+      return out;
+    }
     // outside the scope every descriptor is hidden, so such traversals are cached apart
     const hidden = level >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
     const mirrored = this.mirror && level >= RULE_5 ? 2 : 0;
@@ -181,25 +205,96 @@ export class Ranker {
     if (node.sorted === null) node.sorted = new Map();
     const hit = node.sorted.get(key);
     if (hit) return hit;
-    const nodes = this.dg.branches(node, from).slice();
-    // insertion sort: branch lists are short and comparisons are the expensive part
-    for (let i = 1; i < nodes.length; i++) {
-      const v = nodes[i];
-      let j = i - 1;
-      while (j >= 0 && this.compareUpTo(level, nodes[j], node, v, node) < 0) {
-        nodes[j + 1] = nodes[j];
-        j--;
-      }
-      nodes[j + 1] = v;
-    }
-    const tie = nodes.map((v, i) => i > 0 && this.compareUpTo(level, nodes[i - 1], node, v, node) === 0);
-    const out = { nodes, tie };
+    const out = this.sortAt(node, from, level);
     node.sorted.set(key, out);
+    return out;
+  }
+
+  private sortAt(node: CipNode, from: CipNode | null, level: number): SortedBranches {
+    let out: SortedBranches;
+    if (level === 0) {
+      // by atomic number first (cheap), then runs of equal atomic number by the whole branch
+      const nodes = this.dg.branches(node, from).slice();
+      for (let i = 1; i < nodes.length; i++) {
+        const v = nodes[i];
+        let j = i - 1;
+        while (j >= 0 && nodes[j].z < v.z) {
+          nodes[j + 1] = nodes[j];
+          j--;
+        }
+        nodes[j + 1] = v;
+      }
+      out = { nodes, tie: nodes.map(() => false) };
+      for (let i = 0; i < nodes.length; ) {
+        let j = i + 1;
+        while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
+        if (j - i > 1) this.sortRun(nodes, i, j, node, 0, out);
+        i = j;
+      }
+    } else {
+      // the order under rules up to `level` refines the order under the rules before it: only runs that tie
+      // there need sorting, and only by this rule
+      const base = this.sorted(node, from, level - 1);
+      if (!this.active[level] || !base.tie.some((t) => t)) out = base;
+      else {
+        out = { nodes: base.nodes.slice(), tie: base.tie.slice() };
+        for (let i = 0; i < out.nodes.length; ) {
+          let j = i + 1;
+          while (j < out.nodes.length && base.tie[j]) j++;
+          if (j - i > 1) this.sortRun(out.nodes, i, j, node, level, out);
+          i = j;
+        }
+      }
+    }
+    return out;
+  }
+
+  /**
+   * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
+   * first, writing them and their ties into `out` at the same places.
+   */
+  private sortRun(nodes: CipNode[], i: number, j: number, centre: CipNode, rule: number, out: SortedBranches): SortedBranches {
+    if (j - i === 2) {
+      const a = nodes[i];
+      const b = nodes[i + 1];
+      const c = this.compareRule(rule, a, centre, b, centre);
+      out.nodes[i] = c < 0 ? b : a;
+      out.nodes[i + 1] = c < 0 ? a : b;
+      out.tie[i] = false;
+      out.tie[i + 1] = c === 0;
+      return out;
+    }
+    const run = nodes.slice(i, j);
+    const k = run.length;
+    const m: number[] = new Array<number>(k * k).fill(0);
+    for (let a = 0; a < k; a++) {
+      for (let b = a + 1; b < k; b++) {
+        const c = this.compareRule(rule, run[a], centre, run[b], centre);
+        m[a * k + b] = c;
+        m[b * k + a] = -c;
+      }
+    }
+    const order = run.map((_, x) => x);
+    for (let x = 1; x < k; x++) {
+      const v = order[x];
+      let y = x - 1;
+      while (y >= 0 && m[order[y] * k + v] < 0) {
+        order[y + 1] = order[y];
+        y--;
+      }
+      order[y + 1] = v;
+    }
+    for (let x = 0; x < k; x++) {
+      out.nodes[i + x] = run[order[x]];
+      out.tie[i + x] = x > 0 && m[order[x - 1] * k + order[x]] === 0;
+    }
     return out;
   }
 }
 
 export { CipNode };
+
+const EMPTY: SortedBranches = { nodes: [], tie: [] };
 
 function invertChiral(l: CipLabel | null): CipLabel | null {
   if (l === 'e') return 'z';

@@ -9,7 +9,7 @@
  * digraph re-rooted at the unit's node: a traversal is therefore a directed step (node, the node we came from),
  * and a node's branches are all its tree neighbours except the one we came from.
  */
-import type { CipGraph } from './graph.js';
+import { mancudeOf, type CipGraph } from './graph.js';
 import type { CipLabel } from '../facts.js';
 
 export const H_ATOM = -1;
@@ -28,6 +28,8 @@ export class CipNode {
   kids: CipNode[] | null = null;
   /** Sorted branch lists per (came-from, rule level); see compare.ts. */
   sorted: Map<number | string, SortedBranches> | null = null;
+  /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode). */
+  down: SortedBranches[] | null = null;
   /** Auxiliary descriptor: undefined = not yet computed, null = none. */
   aux: CipLabel | null | undefined = undefined;
   auxBusy = false;
@@ -72,7 +74,7 @@ export class Digraph {
     this.count++;
     const g = this.g;
     if (z >= 0 && parent !== null) {
-      return new CipNode(this.nextId++, atom, z, g.mancude.dupMass[parent.atom], depth, dist, true, parent);
+      return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
     }
     if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
     if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
@@ -100,7 +102,7 @@ export class Digraph {
       const b = nb[i];
       const order = od[i];
       // a double bond in a mancude ring: one duplicate of mean atomic number, wherever the Kekulé bond lies
-      const mz = order === 2 && g.mancude.bond.has(a * g.n + b) ? g.mancude.dupZ[a] : -1;
+      const mz = order === 2 && mancudeOf(g).bond.has(a * g.n + b) ? mancudeOf(g).dupZ[a] : -1;
       if (parent !== null && b === parent.atom) {
         if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
         else for (let k = 1; k < order; k++) out.push(this.make(b, d, parent.depth, true, node));

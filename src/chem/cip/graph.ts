@@ -29,8 +29,8 @@ export interface CipGraph {
   bondAt: number[];
   /** Index into s.stereo of the axial element with this atom as an end, or -1. */
   axialAt: number[];
-  /** Mancude ring bonds and the mean atomic number of each mancude atom's duplicate (P-92.1.4.4). */
-  mancude: Mancude;
+  /** Mancude ring bonds and mean duplicate atomic numbers (P-92.1.4.4); found on first use, see `mancudeOf`. */
+  mancude: Mancude | null;
   /**
    * Per stereo element: may it carry an auxiliary descriptor? All units but ring-fixed ones at first; while
    * Rule 6 is tried, only those that Rules 1-5 found stereogenic (see label.ts).
@@ -98,7 +98,7 @@ export function buildGraph(s: Structure): CipGraph {
     tetraAt,
     bondAt,
     axialAt,
-    mancude: perceiveMancude(s, nbr, ord, mass),
+    mancude: null,
     hasBondStereo,
     stereoCount: s.stereo.length,
     ringFixed: [],
@@ -141,8 +141,10 @@ const CHALCOGEN_OR_N = new Set([7, 8, 16, 34, 52]);
 /** P, As with valence 5; S, Se, Te with valence 4 or 6; Cl, Br, I above 1. */
 function expandedValence(s: Structure, a: number, orders: number[]): boolean {
   const at = s.atoms[a];
+  const z = at.atomicNumber;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53) return false;
   const v = orders.reduce((x, y) => x + y, 0) + at.hCount;
-  switch (at.atomicNumber) {
+  switch (z) {
     case 15:
     case 33:
       return v >= 5;
@@ -190,4 +192,9 @@ export function ringSizeThrough(g: CipGraph, a: number, b: number, max: number):
     frontier = next;
   }
   return 0;
+}
+
+export function mancudeOf(g: CipGraph): Mancude {
+  if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
+  return g.mancude;
 }

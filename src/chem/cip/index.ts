@@ -22,6 +22,7 @@ export interface CipResult {
 }
 
 export function assignCip(s: Structure): CipResult[] {
+  if (s.stereo.length === 0) return [];
   const g = buildGraph(s);
   const labels = s.stereo.map((_, i) => labelPlain(g, i));
   if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
