@@ -58,7 +58,9 @@ export function finishMolecule(raw: RawMolecule): ReadResult {
     const v = raw.valences[i];
     // The valence field counts bonds plus hydrogens; unpaired electrons are not part of it (as RDKit writes it).
     if (v !== null && v !== undefined) atom.hCount = Math.max(0, v - sum);
-    else atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
+    else
+      atom.hCount =
+        atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
   }
 
   let dimension: 0 | 2 | 3 = 0;

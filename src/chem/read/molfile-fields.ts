@@ -120,8 +120,26 @@ export function elementOf(sym: string): ElementInfo | null {
  * atomic weights). Other elements with a mass difference get a warning.
  */
 const ROUNDED_MASS: Record<number, number> = {
-  1: 1, 5: 11, 6: 12, 7: 14, 8: 16, 9: 19, 11: 23, 12: 24, 14: 28, 15: 31, 16: 32, 17: 35, 19: 39, 20: 40,
-  26: 56, 29: 64, 30: 65, 34: 79, 35: 80, 53: 127,
+  1: 1,
+  5: 11,
+  6: 12,
+  7: 14,
+  8: 16,
+  9: 19,
+  11: 23,
+  12: 24,
+  14: 28,
+  15: 31,
+  16: 32,
+  17: 35,
+  19: 39,
+  20: 40,
+  26: 56,
+  29: 64,
+  30: 65,
+  34: 79,
+  35: 80,
+  53: 127,
 };
 
 export function roundedMass(z: number): number | undefined {

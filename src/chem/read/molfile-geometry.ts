@@ -12,7 +12,11 @@ export function sub(a: Vec, b: Vec): Vec {
 }
 
 export function det3(a: Vec, b: Vec, c: Vec): number {
-  return a[0] * (b[1] * c[2] - b[2] * c[1]) - a[1] * (b[0] * c[2] - b[2] * c[0]) + a[2] * (b[0] * c[1] - b[1] * c[0]);
+  return (
+    a[0] * (b[1] * c[2] - b[2] * c[1]) -
+    a[1] * (b[0] * c[2] - b[2] * c[0]) +
+    a[2] * (b[0] * c[1] - b[1] * c[0])
+  );
 }
 
 export function unit(v: Vec): Vec | null {
@@ -76,7 +80,10 @@ export function cumulenes(s: Structure, adj: Adjacency): Cumulene[] {
     if (done[k] || !isDoubleNonAromatic(s, k)) continue;
     const b = s.bonds[k]!;
     // walk both ways from bond k through inner atoms
-    const walk = (from: number, via: number): { end: number; toward: number; atoms: number[]; bonds: number[] } | null => {
+    const walk = (
+      from: number,
+      via: number,
+    ): { end: number; toward: number; atoms: number[]; bonds: number[] } | null => {
       const atoms: number[] = [];
       const bonds: number[] = [];
       let prev = via;
@@ -131,7 +138,11 @@ export function preferHeavy(s: Structure, subs: number[]): number[] {
  * other bonds of each end lie in rings, and each end has a double or aromatic ring bond (sp2 ring atom).
  * Returns [bond index, ortho atoms of end a (2), ortho atoms of end b (2)].
  */
-export function biarylCandidates(s: Structure, adj: Adjacency, ring: readonly boolean[]): [number, number[], number[]][] {
+export function biarylCandidates(
+  s: Structure,
+  adj: Adjacency,
+  ring: readonly boolean[],
+): [number, number[], number[]][] {
   const out: [number, number[], number[]][] = [];
   const sp2RingEnd = (e: number, partner: number): number[] | null => {
     if (adj.nbr[e]!.length !== 3) return null;
@@ -165,7 +176,8 @@ export function biarylCandidates(s: Structure, adj: Adjacency, ring: readonly bo
 
 /** Is bond k on a cycle of at most six atoms that all have a double or aromatic bond? (BFS, depth-limited) */
 function inSmallSp2Ring(s: Structure, adj: Adjacency, k: number): boolean {
-  const sp2 = (i: number): boolean => adj.bnd[i]!.some((x) => s.bonds[x]!.order === 2 || s.bonds[x]!.aromatic);
+  const sp2 = (i: number): boolean =>
+    adj.bnd[i]!.some((x) => s.bonds[x]!.order === 2 || s.bonds[x]!.aromatic);
   const { a, b } = s.bonds[k]!;
   let frontier = [a];
   const seen = new Set([a]);

@@ -19,7 +19,13 @@ const STEP_LIMIT = 200_000;
 
 type Need = 0 | 1 | 2; // 0 never, 1 optional, 2 must
 
-function classify(atom: Atom, i: number, bonds: readonly Bond[], adj: Adjacency, valence: number | null): Need {
+function classify(
+  atom: Atom,
+  i: number,
+  bonds: readonly Bond[],
+  adj: Adjacency,
+  valence: number | null,
+): Need {
   let aromaticCount = 0;
   let other = 0;
   let exoMultiple = false;

@@ -6,7 +6,7 @@
 import type { Atom, Bond, ReadError, ReadResult, StereoGroup } from '../types.js';
 import { finishMolecule } from './molfile-build.js';
 import { elementOf } from './molfile-fields.js';
-import { makeBond } from './molfile.js';
+import { makeBond } from './molfile-bond.js';
 
 interface V30Line {
   text: string;
@@ -64,7 +64,13 @@ function parseList(v: string): number[] | null {
 /**
  * Reads from lines[idx] (absolute line number firstLine) to `M  END`. `title` comes from the header.
  */
-export function parseV3000(lines: readonly string[], idx: number, end: number, firstLine: number, title: string | null): ReadResult {
+export function parseV3000(
+  lines: readonly string[],
+  idx: number,
+  end: number,
+  firstLine: number,
+  title: string | null,
+): ReadResult {
   const base = idx;
   const lineNo = (i: number): number => firstLine + (i - base);
   // Join continuation lines into logical V30 lines.
@@ -77,20 +83,29 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
       break;
     }
     if (!l.startsWith('M  V30')) {
-      return fail('molfile-v3000-bad-line', `V3000 lines must start with "M  V30", found "${l.slice(0, 20)}"`, lineNo(i));
+      return fail(
+        'molfile-v3000-bad-line',
+        `V3000 lines must start with "M  V30", found "${l.slice(0, 20)}"`,
+        lineNo(i),
+      );
     }
     const first = lineNo(i);
     let text = l.slice(7);
     while (text.endsWith('-')) {
       i++;
       if (i >= end || !lines[i]!.startsWith('M  V30')) {
-        return fail('molfile-v3000-bad-continuation', 'a V3000 line ends with "-" but no "M  V30" continuation line follows', lineNo(i));
+        return fail(
+          'molfile-v3000-bad-continuation',
+          'a V3000 line ends with "-" but no "M  V30" continuation line follows',
+          lineNo(i),
+        );
       }
       text = text.slice(0, -1) + lines[i]!.slice(7);
     }
     logical.push({ text: text.trim(), line: first });
   }
-  if (endLine === -1) return fail('molfile-missing-end', 'the V3000 molfile ends without its "M  END" line', lineNo(end));
+  if (endLine === -1)
+    return fail('molfile-missing-end', 'the V3000 molfile ends without its "M  END" line', lineNo(end));
 
   const warnings: ReadError[] = [];
   const atoms: Atom[] = [];
@@ -120,13 +135,22 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
     if (head === 'BEGIN') {
       const what = (t[1] ?? '').toUpperCase();
       if (what === 'CTAB') {
-        if (inCtab || ctabDone) return fail('molfile-v3000-unexpected', 'a second "BEGIN CTAB" (only one connection table is read)', line);
+        if (inCtab || ctabDone)
+          return fail(
+            'molfile-v3000-unexpected',
+            'a second "BEGIN CTAB" (only one connection table is read)',
+            line,
+          );
         inCtab = true;
         blockLine = line;
       } else if (!inCtab) {
         return fail('molfile-v3000-unexpected', `"BEGIN ${what}" outside the CTAB block`, line);
       } else if (block !== null) {
-        return fail('molfile-v3000-block-not-closed', `"BEGIN ${what}" inside the ${block} block opened at line ${blockLine}, which is not closed`, line);
+        return fail(
+          'molfile-v3000-block-not-closed',
+          `"BEGIN ${what}" inside the ${block} block opened at line ${blockLine}, which is not closed`,
+          line,
+        );
       } else if (what === 'ATOM' || what === 'BOND' || what === 'COLLECTION') {
         block = what;
         blockLine = line;
@@ -140,7 +164,11 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
         inCtab = false;
         ctabDone = true;
       } else {
-        return fail('molfile-v3000-block-not-closed', `"END ${what}" while the ${block ?? (inCtab ? 'CTAB' : 'no')} block is open (opened at line ${blockLine})`, line);
+        return fail(
+          'molfile-v3000-block-not-closed',
+          `"END ${what}" while the ${block ?? (inCtab ? 'CTAB' : 'no')} block is open (opened at line ${blockLine})`,
+          line,
+        );
       }
       continue;
     }
@@ -148,8 +176,17 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
     if (head === 'COUNTS') {
       expectAtoms = Number(t[1]);
       expectBonds = Number(t[2]);
-      if (!Number.isInteger(expectAtoms) || !Number.isInteger(expectBonds) || expectAtoms < 0 || expectBonds < 0) {
-        return fail('molfile-bad-counts-line', `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`, line);
+      if (
+        !Number.isInteger(expectAtoms) ||
+        !Number.isInteger(expectBonds) ||
+        expectAtoms < 0 ||
+        expectBonds < 0
+      ) {
+        return fail(
+          'molfile-bad-counts-line',
+          `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`,
+          line,
+        );
       }
       chiralFlag = t[5] === '1';
       continue;
@@ -161,21 +198,36 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
       valences.push(r.valence);
       atomLines.push(line);
     } else if (block === 'BOND') {
-      if (t.length < 4) return fail('molfile-bad-bond-line', `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`, line);
+      if (t.length < 4)
+        return fail(
+          'molfile-bad-bond-line',
+          `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`,
+          line,
+        );
       const type = Number(t[1]);
       const a = indexOf.get(Number(t[2]));
       const b = indexOf.get(Number(t[3]));
       if (a === undefined || b === undefined) {
-        return fail('molfile-bond-atom-missing', `bond ${t[0]} refers to atom ${a === undefined ? t[2] : t[3]}, which is not in the ATOM block`, line);
+        return fail(
+          'molfile-bond-atom-missing',
+          `bond ${t[0]} refers to atom ${a === undefined ? t[2] : t[3]}, which is not in the ATOM block`,
+          line,
+        );
       }
-      if (!Number.isInteger(type)) return fail('molfile-bad-bond-type', `bond ${t[0]} has type "${t[1]}"`, line);
+      if (!Number.isInteger(type))
+        return fail('molfile-bad-bond-type', `bond ${t[0]} has type "${t[1]}"`, line);
       const cfg = Number(keyed(t, 4).get('CFG') ?? 0);
       const stereo = cfg === 1 ? 1 : cfg === 3 ? 6 : cfg === 2 ? (type === 2 ? 3 : 4) : 0;
       const r = makeBond(a + 1, b + 1, type, stereo, atoms.length, bonds.length + 1, line, warnings);
       if ('code' in r) return { ok: false, error: r };
       if (r.bond === null) continue;
       const key = Math.min(a, b) * 1_000_003 + Math.max(a, b);
-      if (seenBonds.has(key)) return fail('molfile-duplicate-bond', `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`, line);
+      if (seenBonds.has(key))
+        return fail(
+          'molfile-duplicate-bond',
+          `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`,
+          line,
+        );
       seenBonds.add(key);
       bonds.push(r.bond);
     } else if (block === 'COLLECTION') {
@@ -183,11 +235,17 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
       const m = /^MDLV30\/STE(ABS|RAC|REL)(\d*)$/.exec(name);
       if (m === null) continue; // other collections (highlighting, ...) are not stereo
       const list = parseList(keyed(t, 1).get('ATOMS') ?? '');
-      if (list === null) return fail('molfile-bad-collection', `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
+      if (list === null)
+        return fail('molfile-bad-collection', `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
       const members: number[] = [];
       for (const n of list) {
         const ai = indexOf.get(n);
-        if (ai === undefined) return fail('molfile-bad-collection', `collection ${t[0]} names atom ${n}, which is not in the ATOM block`, line);
+        if (ai === undefined)
+          return fail(
+            'molfile-bad-collection',
+            `collection ${t[0]} names atom ${n}, which is not in the ATOM block`,
+            line,
+          );
         members.push(ai);
       }
       const type = m[1] === 'ABS' ? 'abs' : m[1] === 'RAC' ? 'and' : 'or';
@@ -195,11 +253,26 @@ export function parseV3000(lines: readonly string[], idx: number, end: number, f
       groups.push({ type, id, atoms: members });
     }
   }
-  if (block !== null) return fail('molfile-v3000-block-not-closed', `the ${block} block opened at line ${blockLine} is not closed before "M  END"`, lineNo(endLine));
-  if (inCtab) return fail('molfile-v3000-block-not-closed', `the CTAB block opened at line ${blockLine} is not closed before "M  END"`, lineNo(endLine));
-  if (!ctabDone) return fail('molfile-v3000-no-ctab', 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
+  if (block !== null)
+    return fail(
+      'molfile-v3000-block-not-closed',
+      `the ${block} block opened at line ${blockLine} is not closed before "M  END"`,
+      lineNo(endLine),
+    );
+  if (inCtab)
+    return fail(
+      'molfile-v3000-block-not-closed',
+      `the CTAB block opened at line ${blockLine} is not closed before "M  END"`,
+      lineNo(endLine),
+    );
+  if (!ctabDone)
+    return fail('molfile-v3000-no-ctab', 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
   if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bonds.length)) {
-    warnings.push({ code: 'molfile-counts-mismatch', message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`, at: { line: blockLine } });
+    warnings.push({
+      code: 'molfile-counts-mismatch',
+      message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`,
+      at: { line: blockLine },
+    });
   }
   return finishMolecule({ atoms, bonds, valences, atomLines, groups, chiralFlag, title, warnings });
 }
@@ -213,21 +286,41 @@ function readAtom(
 ): { atom: Atom; valence: number | null } | ReadError {
   let t = tokens;
   if ((t[1] ?? '').toUpperCase() === 'NOT' && t.length > 2) t = [t[0]!, `NOT ${t[2]}`, ...t.slice(3)]; // NOT [O,S]
-  if (t.length < 6) return { code: 'molfile-atom-line-short', message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`, at: { line } };
+  if (t.length < 6)
+    return {
+      code: 'molfile-atom-line-short',
+      message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`,
+      at: { line },
+    };
   const index = Number(t[0]);
-  if (!Number.isInteger(index) || index < 1) return { code: 'molfile-bad-atom-line', message: `atom index "${t[0]}" is not a positive integer`, at: { line } };
-  if (indexOf.has(index)) return { code: 'molfile-bad-atom-line', message: `atom index ${index} appears twice`, at: { line } };
+  if (!Number.isInteger(index) || index < 1)
+    return {
+      code: 'molfile-bad-atom-line',
+      message: `atom index "${t[0]}" is not a positive integer`,
+      at: { line },
+    };
+  if (indexOf.has(index))
+    return { code: 'molfile-bad-atom-line', message: `atom index ${index} appears twice`, at: { line } };
   const x = Number(t[2]);
   const y = Number(t[3]);
   const z = Number(t[4]);
   if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
-    return { code: 'molfile-bad-coordinate', message: `atom ${index}: the coordinates "${t[2]} ${t[3]} ${t[4]}" are not numbers`, at: { line } };
+    return {
+      code: 'molfile-bad-coordinate',
+      message: `atom ${index}: the coordinates "${t[2]} ${t[3]} ${t[4]}" are not numbers`,
+      at: { line },
+    };
   }
   let sym = t[1]!;
   if (sym.startsWith('"') && sym.endsWith('"') && sym.length >= 2) sym = sym.slice(1, -1);
   const isList = sym.startsWith('[') || sym.toUpperCase().startsWith('NOT ');
   const el = isList ? elementOf('*') : elementOf(sym);
-  if (el === null) return { code: 'molfile-unknown-element', message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`, at: { line } };
+  if (el === null)
+    return {
+      code: 'molfile-unknown-element',
+      message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`,
+      at: { line },
+    };
   const map = Number(t[5]);
   const kv = keyed(t, 6);
   const num = (k: string): number => {
@@ -235,7 +328,11 @@ function readAtom(
     if (v === undefined) return 0;
     const n = Number(v);
     if (!Number.isInteger(n)) {
-      warnings.push({ code: 'molfile-bad-atom-property', message: `atom ${index}: ${k}=${v} is not an integer; ignored`, at: { line } });
+      warnings.push({
+        code: 'molfile-bad-atom-property',
+        message: `atom ${index}: ${k}=${v} is not an integer; ignored`,
+        at: { line },
+      });
       return 0;
     }
     return n;
@@ -245,7 +342,11 @@ function readAtom(
   const mass = num('MASS');
   const val = num('VAL');
   if (index !== position + 1) {
-    warnings.push({ code: 'molfile-atom-index-out-of-order', message: `atom index ${index} is at position ${position + 1}; atoms are numbered by position`, at: { line } });
+    warnings.push({
+      code: 'molfile-atom-index-out-of-order',
+      message: `atom index ${index} is at position ${position + 1}; atoms are numbered by position`,
+      at: { line },
+    });
   }
   indexOf.set(index, position);
   return {

@@ -7,6 +7,7 @@ import type { Atom, Bond, ReadError, ReadResult } from '../types.js';
 import { finishMolecule, type RawMolecule } from './molfile-build.js';
 import { elementOf, floatField, intField, roundedMass, tokens } from './molfile-fields.js';
 import { parseV3000 } from './molfile-v3000.js';
+import { makeBond } from './molfile-bond.js';
 
 export interface MolfileOptions {
   /** Line number of the molfile's first line within a larger file (for error positions); default 1. */
@@ -40,10 +41,19 @@ const CHARGE_CODE = [0, 3, 2, 1, 0, -1, -2, -3];
  * Reads the molfile in lines[start, end); lines[start] has absolute line number firstLine. Lines after
  * `M  END` are not looked at.
  */
-export function parseMolfileLines(lines: readonly string[], start: number, end: number, firstLine: number): ReadResult {
+export function parseMolfileLines(
+  lines: readonly string[],
+  start: number,
+  end: number,
+  firstLine: number,
+): ReadResult {
   const lineNo = (idx: number): number => firstLine + (idx - start);
   if (end - start < 4) {
-    return fail('molfile-truncated', `the molfile ends after ${end - start} lines, before its counts line (line 4)`, lineNo(end));
+    return fail(
+      'molfile-truncated',
+      `the molfile ends after ${end - start} lines, before its counts line (line 4)`,
+      lineNo(end),
+    );
   }
   const title = lines[start]!.trim() || null;
   const counts = lines[start + 3]!;
@@ -70,7 +80,11 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
     nBonds = b;
     nLists = Number(t[2]) || 0;
     chiral = Number(t[4]) || 0;
-    warnings.push({ code: 'molfile-counts-not-fixed-width', message: 'the counts line does not keep the fixed columns of the format', at: { line: lineNo(start + 3) } });
+    warnings.push({
+      code: 'molfile-counts-not-fixed-width',
+      message: 'the counts line does not keep the fixed columns of the format',
+      at: { line: lineNo(start + 3) },
+    });
   }
   if (!(nLists >= 0)) nLists = 0;
 
@@ -80,7 +94,11 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
   let idx = start + 4;
   for (let i = 0; i < nAtoms; i++, idx++) {
     if (idx >= end) {
-      return fail('molfile-truncated', `the molfile ends after ${i} of its ${nAtoms} atom lines`, lineNo(idx));
+      return fail(
+        'molfile-truncated',
+        `the molfile ends after ${i} of its ${nAtoms} atom lines`,
+        lineNo(idx),
+      );
     }
     const line = lines[idx]!;
     let x = floatField(line, 0, 10);
@@ -95,9 +113,17 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
       const fz = Number(free[2]);
       if (free.length < 4 || !Number.isFinite(fx) || !Number.isFinite(fy) || !Number.isFinite(fz)) {
         if (line.length < 32 && free.length < 4) {
-          return fail('molfile-atom-line-short', `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`, lineNo(idx));
+          return fail(
+            'molfile-atom-line-short',
+            `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`,
+            lineNo(idx),
+          );
         }
-        return fail('molfile-bad-coordinate', `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`, lineNo(idx));
+        return fail(
+          'molfile-bad-coordinate',
+          `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`,
+          lineNo(idx),
+        );
       }
       x = fx;
       y = fy;
@@ -105,11 +131,19 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
       sym = free[3]!;
     }
     if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
-      return fail('molfile-bad-coordinate', `atom line ${i + 1}: the coordinates are not finite numbers`, lineNo(idx));
+      return fail(
+        'molfile-bad-coordinate',
+        `atom line ${i + 1}: the coordinates are not finite numbers`,
+        lineNo(idx),
+      );
     }
     const el = elementOf(sym);
     if (el === null) {
-      return fail('molfile-unknown-element', `atom line ${i + 1}: "${sym}" is not an element symbol or a known query/R-group symbol`, lineNo(idx));
+      return fail(
+        'molfile-unknown-element',
+        `atom line ${i + 1}: "${sym}" is not an element symbol or a known query/R-group symbol`,
+        lineNo(idx),
+      );
     }
     let massDiff = 0;
     let chargeCode = 0;
@@ -135,13 +169,21 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
       charge = CHARGE_CODE[chargeCode]!;
       if (chargeCode === 4) radical = 1;
     } else {
-      warnings.push({ code: 'molfile-bad-charge-code', message: `atom ${i + 1}: charge code "${chargeCode}" is not 0-7; read as no charge`, at: { line: lineNo(idx) } });
+      warnings.push({
+        code: 'molfile-bad-charge-code',
+        message: `atom ${i + 1}: charge code "${chargeCode}" is not 0-7; read as no charge`,
+        at: { line: lineNo(idx) },
+      });
     }
     let isotope = el.isotope;
     if (massDiff !== 0 && el.atomicNumber > 0) {
       const m = roundedMass(el.atomicNumber);
       if (m === undefined) {
-        warnings.push({ code: 'molfile-mass-difference-unknown', message: `atom ${i + 1}: a mass difference is given for ${el.element}, whose reference mass this reader does not know; isotope ignored`, at: { line: lineNo(idx) } });
+        warnings.push({
+          code: 'molfile-mass-difference-unknown',
+          message: `atom ${i + 1}: a mass difference is given for ${el.element}, whose reference mass this reader does not know; isotope ignored`,
+          at: { line: lineNo(idx) },
+        });
       } else isotope = m + massDiff;
     }
     atoms.push({
@@ -163,7 +205,12 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
   const bonds: Bond[] = [];
   const seen = new Set<number>();
   for (let i = 0; i < nBonds; i++, idx++) {
-    if (idx >= end) return fail('molfile-truncated', `the molfile ends after ${i} of its ${nBonds} bond lines`, lineNo(idx));
+    if (idx >= end)
+      return fail(
+        'molfile-truncated',
+        `the molfile ends after ${i} of its ${nBonds} bond lines`,
+        lineNo(idx),
+      );
     const line = lines[idx]!;
     let a = intField(line, 0, 3);
     let b = intField(line, 3, 6);
@@ -176,7 +223,11 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
       type = Number(t[2]);
       stereo = Number(t[3] ?? 0);
       if (t.length < 3 || !Number.isInteger(a) || !Number.isInteger(b) || !Number.isInteger(type)) {
-        return fail('molfile-bad-bond-line', `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`, lineNo(idx));
+        return fail(
+          'molfile-bad-bond-line',
+          `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`,
+          lineNo(idx),
+        );
       }
       if (!Number.isInteger(stereo)) stereo = 0;
     }
@@ -184,90 +235,51 @@ export function parseMolfileLines(lines: readonly string[], start: number, end: 
     if ('code' in r) return { ok: false, error: r };
     if (r.bond === null) continue;
     const key = Math.min(r.bond.a, r.bond.b) * 1_000_003 + Math.max(r.bond.a, r.bond.b);
-    if (seen.has(key)) return fail('molfile-duplicate-bond', `bond line ${i + 1}: atoms ${a} and ${b} are already bonded`, lineNo(idx));
+    if (seen.has(key))
+      return fail(
+        'molfile-duplicate-bond',
+        `bond line ${i + 1}: atoms ${a} and ${b} are already bonded`,
+        lineNo(idx),
+      );
     seen.add(key);
     bonds.push(r.bond);
   }
   idx += nLists; // obsolete atom-list block; the M  ALS lines carry the same information
 
-  const raw: RawMolecule = { atoms, bonds, valences, atomLines, groups: [], chiralFlag: chiral === 1, title, warnings };
+  const raw: RawMolecule = {
+    atoms,
+    bonds,
+    valences,
+    atomLines,
+    groups: [],
+    chiralFlag: chiral === 1,
+    title,
+    warnings,
+  };
   const propError = readProperties(lines, idx, end, lineNo, raw);
   if (propError !== null) return { ok: false, error: propError };
   return finishMolecule(raw);
 }
 
-/** Bond from molfile numbers; shared with V3000 (which passes its own stereo codes mapped to V2000 ones). */
-export function makeBond(
-  a: number,
-  b: number,
-  type: number,
-  stereo: number,
-  nAtoms: number,
-  bondNo: number,
-  line: number,
-  warnings: ReadError[],
-): { bond: Bond | null } | ReadError {
-  if (a < 1 || a > nAtoms || b < 1 || b > nAtoms) {
-    const bad = a < 1 || a > nAtoms ? a : b;
-    return { code: 'molfile-bond-atom-missing', message: `bond ${bondNo} refers to atom ${bad}, but there are ${nAtoms} atoms`, at: { line } };
-  }
-  if (a === b) return { code: 'molfile-bond-to-itself', message: `bond ${bondNo} joins atom ${a} to itself`, at: { line } };
-  let order: 1 | 2 | 3 = 1;
-  let aromatic = false;
-  switch (type) {
-    case 1:
-      break;
-    case 2:
-      order = 2;
-      break;
-    case 3:
-      order = 3;
-      break;
-    case 4:
-      aromatic = true;
-      break;
-    case 5:
-    case 8:
-    case 9:
-      warnings.push({ code: 'molfile-query-bond', message: `bond ${bondNo} has type ${type} (${type === 9 ? 'coordination' : 'query'} bond); read as a single bond`, at: { line } });
-      break;
-    case 6:
-    case 7:
-      aromatic = true;
-      warnings.push({ code: 'molfile-query-bond', message: `bond ${bondNo} has query type ${type}; read as aromatic`, at: { line } });
-      break;
-    case 10:
-      warnings.push({ code: 'molfile-hydrogen-bond', message: `bond ${bondNo} is a hydrogen bond (type 10); left out`, at: { line } });
-      return { bond: null };
-    default:
-      return { code: 'molfile-bad-bond-type', message: `bond ${bondNo} has type ${type}; the format defines types 1-10`, at: { line } };
-  }
-  let wedge: Bond['wedge'] = null;
-  if (stereo !== 0) {
-    if (order === 2) {
-      if (stereo === 3) wedge = 'either';
-      else warnings.push({ code: 'molfile-bad-bond-stereo', message: `double bond ${bondNo} has stereo code ${stereo}; only 0 and 3 apply to double bonds`, at: { line } });
-    } else if (order === 1) {
-      if (stereo === 1) wedge = 'up';
-      else if (stereo === 6) wedge = 'down';
-      else if (stereo === 4) wedge = 'either';
-      else warnings.push({ code: 'molfile-bad-bond-stereo', message: `single bond ${bondNo} has stereo code ${stereo}; only 0, 1, 4 and 6 apply`, at: { line } });
-    } else {
-      warnings.push({ code: 'molfile-bad-bond-stereo', message: `bond ${bondNo} of order ${order} carries a stereo mark; ignored`, at: { line } });
-    }
-  }
-  return { bond: { a: a - 1, b: b - 1, order, aromatic, wedge } };
-}
-
 /** Properties block up to `M  END`. Returns an error or null. */
-function readProperties(lines: readonly string[], idx: number, end: number, lineNo: (i: number) => number, raw: RawMolecule): ReadError | null {
+function readProperties(
+  lines: readonly string[],
+  idx: number,
+  end: number,
+  lineNo: (i: number) => number,
+  raw: RawMolecule,
+): ReadError | null {
   const { atoms } = raw;
   let chgSeen = false;
   let isoSeen = false;
   const atomRef = (s: string | undefined, i: number): number | ReadError => {
     const n = Number(s);
     if (!Number.isInteger(n) || n < 1 || n > atoms.length) {
-      return { code: 'molfile-bad-property', message: `"${lines[i]!.slice(0, 6)}" line refers to atom "${s ?? ''}", which does not exist`, at: { line: lineNo(i) } };
+      return {
+        code: 'molfile-bad-property',
+        message: `"${lines[i]!.slice(0, 6)}" line refers to atom "${s ?? ''}", which does not exist`,
+        at: { line: lineNo(i) },
+      };
     }
     return n - 1;
   };
@@ -279,7 +291,11 @@ function readProperties(lines: readonly string[], idx: number, end: number, line
       const t = tokens(line);
       const n = Number(t[2]);
       if (!Number.isInteger(n) || n < 0 || t.length < 3 + 2 * n) {
-        return { code: 'molfile-bad-property', message: `"${tag}" line: the entry count does not match the entries`, at: { line: lineNo(idx) } };
+        return {
+          code: 'molfile-bad-property',
+          message: `"${tag}" line: the entry count does not match the entries`,
+          at: { line: lineNo(idx) },
+        };
       }
       if (tag === 'M  CHG' || tag === 'M  RAD') {
         if (!chgSeen) {
@@ -299,7 +315,11 @@ function readProperties(lines: readonly string[], idx: number, end: number, line
         if (typeof ai !== 'number') return ai;
         const v = Number(t[4 + 2 * k]);
         if (!Number.isInteger(v)) {
-          return { code: 'molfile-bad-property', message: `"${tag}" line: value "${t[4 + 2 * k]}" is not an integer`, at: { line: lineNo(idx) } };
+          return {
+            code: 'molfile-bad-property',
+            message: `"${tag}" line: value "${t[4 + 2 * k]}" is not an integer`,
+            at: { line: lineNo(idx) },
+          };
         }
         if (tag === 'M  CHG') atoms[ai]!.charge = v;
         else if (tag === 'M  ISO') atoms[ai]!.isotope = v;
@@ -318,9 +338,17 @@ function readProperties(lines: readonly string[], idx: number, end: number, line
       const n = Number(tokens(line)[2]);
       if (Number.isInteger(n) && n > 0) idx += n;
     } else if (line.startsWith('$$$$') || line.startsWith('>')) {
-      return { code: 'molfile-missing-end', message: 'the molfile has no "M  END" line before this line', at: { line: lineNo(idx) } };
+      return {
+        code: 'molfile-missing-end',
+        message: 'the molfile has no "M  END" line before this line',
+        at: { line: lineNo(idx) },
+      };
     }
     // other M lines (Sgroups, R-group logic, ...) and V lines are not needed here
   }
-  return { code: 'molfile-missing-end', message: 'the molfile ends without its "M  END" line', at: { line: lineNo(end) } };
+  return {
+    code: 'molfile-missing-end',
+    message: 'the molfile ends without its "M  END" line',
+    at: { line: lineNo(end) },
+  };
 }

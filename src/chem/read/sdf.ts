@@ -58,7 +58,13 @@ function allBlank(lines: readonly string[], start: number, end: number): boolean
 }
 
 /** One record in lines[start, end) whose first line is absolute line firstLine. */
-export function readRecord(lines: readonly string[], start: number, end: number, firstLine: number, record: number): ReadResult {
+export function readRecord(
+  lines: readonly string[],
+  start: number,
+  end: number,
+  firstLine: number,
+  record: number,
+): ReadResult {
   let mend = -1;
   for (let i = start; i < end; i++) {
     if (lines[i]!.startsWith('M  END')) {
@@ -80,7 +86,13 @@ export function readRecord(lines: readonly string[], start: number, end: number,
       continue;
     }
     if (!l.startsWith('>')) {
-      warnings.push(tag({ code: 'sdf-stray-line', message: `a line outside any data field: "${l.slice(0, 30)}"`, at: { line: firstLine + (i - start) } }));
+      warnings.push(
+        tag({
+          code: 'sdf-stray-line',
+          message: `a line outside any data field: "${l.slice(0, 30)}"`,
+          at: { line: firstLine + (i - start) },
+        }),
+      );
       i++;
       continue;
     }
@@ -90,11 +102,23 @@ export function readRecord(lines: readonly string[], start: number, end: number,
     const value: string[] = [];
     while (i < end && lines[i]!.trim() !== '') value.push(lines[i++]!);
     if (name === null) {
-      warnings.push(tag({ code: 'sdf-field-without-name', message: 'a data-field header without a <NAME>; its value is skipped', at: { line: at } }));
+      warnings.push(
+        tag({
+          code: 'sdf-field-without-name',
+          message: 'a data-field header without a <NAME>; its value is skipped',
+          at: { line: at },
+        }),
+      );
       continue;
     }
     if (name in props) {
-      warnings.push(tag({ code: 'sdf-duplicate-field', message: `data field <${name}> appears twice; the first value is kept`, at: { line: at } }));
+      warnings.push(
+        tag({
+          code: 'sdf-duplicate-field',
+          message: `data field <${name}> appears twice; the first value is kept`,
+          at: { line: at },
+        }),
+      );
       continue;
     }
     props[name] = value.join('\n');

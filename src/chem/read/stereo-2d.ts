@@ -27,7 +27,14 @@
  * outside the ring; the other ortho atom of the same ring gets the opposite z; the other ring stays flat unless
  * it is marked too. The signed volume of [ortho a1, ortho a2, ortho b1, ortho b2] gives the winding.
  */
-import type { AxialStereo, DoubleBondStereo, ReadError, StereoElement, Structure, TetrahedralStereo } from '../types.js';
+import type {
+  AxialStereo,
+  DoubleBondStereo,
+  ReadError,
+  StereoElement,
+  Structure,
+  TetrahedralStereo,
+} from '../types.js';
 import { IMPLICIT_H } from '../types.js';
 import { ringBonds, type Adjacency } from './molfile-graph.js';
 import {
@@ -49,7 +56,12 @@ const PLAIN_LEAN = 0.3;
 /** Below this |sin| of the angle to the bond line a double-bond substituent counts as on the line. */
 const MIN_SIDE = 0.1;
 
-export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[], atomLines: number[]): StereoElement[] {
+export function stereoFrom2d(
+  s: Structure,
+  adj: Adjacency,
+  warnings: ReadError[],
+  atomLines: number[],
+): StereoElement[] {
   const out: StereoElement[] = [];
   const wavyAt = new Uint8Array(s.atoms.length); // narrow end of a wavy single bond
   const wavyTouch = new Uint8Array(s.atoms.length); // any end of a wavy single bond
@@ -92,11 +104,20 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
       fourth = fourthLigand(s, c);
       if (fourth === null) {
         const sp2 = adj.bnd[c]!.some((k) => s.bonds[k]!.order > 1 || s.bonds[k]!.aromatic);
-        if (!sp2) warn('stereo-wedge-not-a-centre', `${label} has a wedge but three neighbours and no hydrogen or lone pair`, c);
+        if (!sp2)
+          warn(
+            'stereo-wedge-not-a-centre',
+            `${label} has a wedge but three neighbours and no hydrogen or lone pair`,
+            c,
+          );
         return null;
       }
     } else if (deg !== 4) {
-      warn('stereo-wedge-not-a-centre', `${label} has a wedge but ${deg} neighbours; only 3 or 4 are read`, c);
+      warn(
+        'stereo-wedge-not-a-centre',
+        `${label} has a wedge but ${deg} neighbours; only 3 or 4 are read`,
+        c,
+      );
       return null;
     }
     const pc = xy(c);
@@ -105,7 +126,11 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
     for (let j = 0; j < deg; j++) {
       const u = unit([...sub2(xy(ns[j]!), pc), 0] as Vec);
       if (u === null) {
-        warn('stereo-ambiguous-wedge', `${label}: a neighbour is drawn on top of it; configuration not read`, c);
+        warn(
+          'stereo-ambiguous-wedge',
+          `${label}: a neighbour is drawn on top of it; configuration not read`,
+          c,
+        );
         return null;
       }
       flat.push(u);
@@ -120,17 +145,30 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
       const v = reading(flat, w, zs[w]!, fourth !== null);
       if (v === 0) continue;
       if (sign !== 0 && v !== sign) {
-        warn('stereo-conflicting-wedges', `${label}: its wedges, read one at a time, imply opposite configurations; configuration not read`, c);
+        warn(
+          'stereo-conflicting-wedges',
+          `${label}: its wedges, read one at a time, imply opposite configurations; configuration not read`,
+          c,
+        );
         return null;
       }
       sign = v;
     }
     if (sign === 0) {
-      warn('stereo-ambiguous-wedge', `${label}: the wedges and bond directions do not fix a configuration`, c);
+      warn(
+        'stereo-ambiguous-wedge',
+        `${label}: the wedges and bond directions do not fix a configuration`,
+        c,
+      );
       return null;
     }
     const vol = sign;
-    return { kind: 'tetrahedral', centre: c, ligands: ligands as [number, number, number, number], winding: windingOf(vol) };
+    return {
+      kind: 'tetrahedral',
+      centre: c,
+      ligands: ligands as [number, number, number, number],
+      winding: windingOf(vol),
+    };
   }
 
   /**
@@ -162,7 +200,11 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
     const s0 = others(adj, e0, cu.toward[0]);
     const s1 = others(adj, e1, cu.toward[1]);
     if (s0.length === 0 || s1.length === 0 || s0.length > 2 || s1.length > 2) continue;
-    if (adj.bnd[e0]!.some((k) => s.bonds[k]!.order === 3) || adj.bnd[e1]!.some((k) => s.bonds[k]!.order === 3)) continue;
+    if (
+      adj.bnd[e0]!.some((k) => s.bonds[k]!.order === 3) ||
+      adj.bnd[e1]!.some((k) => s.bonds[k]!.order === 3)
+    )
+      continue;
     if (cu.inner.length % 2 === 0) {
       const d = doubleBond(cu.ends, s0, s1);
       if (d !== null) out.push(d);
@@ -196,14 +238,22 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
     const a = endSide(s0, p0, [...dir, 0] as Vec);
     const b = endSide(s1, p0, [...dir, 0] as Vec);
     if (a === null || b === null) {
-      warn('stereo-double-bond-geometry', `double bond at atoms ${ends[0] + 1}-${ends[1] + 1}: a substituent is drawn on the bond line or both on one side; geometry not read`, ends[0]);
+      warn(
+        'stereo-double-bond-geometry',
+        `double bond at atoms ${ends[0] + 1}-${ends[1] + 1}: a substituent is drawn on the bond line or both on one side; geometry not read`,
+        ends[0],
+      );
       return null;
     }
     return { kind: 'double-bond', ends, refs: [a[0], b[0]], relation: a[1] === b[1] ? 'cis' : 'trans' };
   }
 
   /** Pseudo-3D points of an allene end's two ligands (second may be IMPLICIT_H). */
-  function allenePoints(end: number, toward: number, subs: number[]): { ligands: number[]; pts: Vec[]; lifted: boolean } {
+  function allenePoints(
+    end: number,
+    toward: number,
+    subs: number[],
+  ): { ligands: number[]; pts: Vec[]; lifted: boolean } {
     const pe = xy(end);
     const ligands: number[] = [];
     const pts: Vec[] = [];
@@ -226,17 +276,31 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
     return { ligands, pts, lifted };
   }
 
-  function allene(ends: [number, number], toward: [number, number], s0: number[], s1: number[]): AxialStereo | null {
+  function allene(
+    ends: [number, number],
+    toward: [number, number],
+    s0: number[],
+    s1: number[],
+  ): AxialStereo | null {
     const a = allenePoints(ends[0], toward[0], s0);
     const b = allenePoints(ends[1], toward[1], s1);
     if (!a.lifted && !b.lifted) return null; // drawn without wedges: undefined
     const vol = signedVolume([a.pts[0]!, a.pts[1]!, b.pts[0]!, b.pts[1]!]);
     const scale = Math.pow(Math.hypot(...sub2(xy(ends[1]), xy(ends[0]))), 3) || 1;
     if (Math.abs(vol) / scale < 0.01) {
-      warn('stereo-ambiguous-wedge', `allene ${ends[0] + 1}=…=${ends[1] + 1}: the wedges do not fix a configuration`, ends[0]);
+      warn(
+        'stereo-ambiguous-wedge',
+        `allene ${ends[0] + 1}=…=${ends[1] + 1}: the wedges do not fix a configuration`,
+        ends[0],
+      );
       return null;
     }
-    const ligands = [a.ligands[0]!, a.ligands[1]!, b.ligands[0]!, b.ligands[1]!] as [number, number, number, number];
+    const ligands = [a.ligands[0]!, a.ligands[1]!, b.ligands[0]!, b.ligands[1]!] as [
+      number,
+      number,
+      number,
+      number,
+    ];
     return { kind: 'axial', subtype: 'allene', ends, ligands, winding: windingOf(vol) };
   }
 
@@ -246,22 +310,38 @@ export function stereoFrom2d(s: Structure, adj: Adjacency, warnings: ReadError[]
     const za = orthoLift(bond.a, oa);
     const zb = orthoLift(bond.b, ob);
     if (za === null || zb === null) {
-      warn('stereo-ambiguous-wedge', `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`, bond.a);
+      warn(
+        'stereo-ambiguous-wedge',
+        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
+        bond.a,
+      );
       continue;
     }
     if (za[0] === 0 && zb[0] === 0) continue;
     const len = Math.hypot(...sub2(xy(bond.b), xy(bond.a))) || 1;
     const pts: Vec[] = [];
-    [...oa.map((o, i) => [o, za[i]!] as const), ...ob.map((o, i) => [o, zb[i]!] as const)].forEach(([o, z]) => {
-      const p = xy(o);
-      pts.push([p[0], p[1], z * len]);
-    });
+    [...oa.map((o, i) => [o, za[i]!] as const), ...ob.map((o, i) => [o, zb[i]!] as const)].forEach(
+      ([o, z]) => {
+        const p = xy(o);
+        pts.push([p[0], p[1], z * len]);
+      },
+    );
     const vol = signedVolume(pts);
     if (Math.abs(vol) / (len * len * len) < 0.01) {
-      warn('stereo-ambiguous-wedge', `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`, bond.a);
+      warn(
+        'stereo-ambiguous-wedge',
+        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
+        bond.a,
+      );
       continue;
     }
-    out.push({ kind: 'axial', subtype: 'biaryl', ends: [bond.a, bond.b], ligands: [oa[0]!, oa[1]!, ob[0]!, ob[1]!], winding: windingOf(vol) });
+    out.push({
+      kind: 'axial',
+      subtype: 'biaryl',
+      ends: [bond.a, bond.b],
+      ligands: [oa[0]!, oa[1]!, ob[0]!, ob[1]!],
+      winding: windingOf(vol),
+    });
   }
 
   /** z lift of the two ortho atoms of an axis end from wedges; [0,0] when unmarked, null when contradictory. */

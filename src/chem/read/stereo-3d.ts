@@ -30,7 +30,12 @@ import {
 const MIN_VOLUME = 0.1;
 const MIN_SIN = 0.1;
 
-export function stereoFrom3d(s: Structure, adj: Adjacency, _warnings: ReadError[], _atomLines: number[]): StereoElement[] {
+export function stereoFrom3d(
+  s: Structure,
+  adj: Adjacency,
+  _warnings: ReadError[],
+  _atomLines: number[],
+): StereoElement[] {
   const out: StereoElement[] = [];
   const pos = (i: number): Vec => s.atoms[i]!.coords!;
   const wavyAt = new Uint8Array(s.atoms.length);
@@ -71,7 +76,12 @@ export function stereoFrom3d(s: Structure, adj: Adjacency, _warnings: ReadError[
     }
     const vol = signedVolume(pts);
     if (Math.abs(vol) < MIN_VOLUME) continue;
-    out.push({ kind: 'tetrahedral', centre: c, ligands: ligands as [number, number, number, number], winding: windingOf(vol) });
+    out.push({
+      kind: 'tetrahedral',
+      centre: c,
+      ligands: ligands as [number, number, number, number],
+      winding: windingOf(vol),
+    });
   }
 
   for (const cu of cumulenes(s, adj)) {
@@ -85,7 +95,12 @@ export function stereoFrom3d(s: Structure, adj: Adjacency, _warnings: ReadError[
       const r1 = preferHeavy(s, s1)[0]!;
       const d = dihedralSin(pos(r0), pos(e0), pos(e1), pos(r1));
       if (d === null || Math.abs(d.cos) < MIN_SIN) continue;
-      out.push({ kind: 'double-bond', ends: [e0, e1], refs: [r0, r1], relation: d.cos > 0 ? 'cis' : 'trans' });
+      out.push({
+        kind: 'double-bond',
+        ends: [e0, e1],
+        refs: [r0, r1],
+        relation: d.cos > 0 ? 'cis' : 'trans',
+      });
     } else {
       const a = endPoints(e0, cu.toward[0], s0);
       const b = endPoints(e1, cu.toward[1], s1);
@@ -109,7 +124,13 @@ export function stereoFrom3d(s: Structure, adj: Adjacency, _warnings: ReadError[
     const d = dihedralSin(pos(oa[0]!), pos(a), pos(b), pos(ob[0]!));
     if (d === null || Math.abs(d.sin) < MIN_SIN) continue;
     const vol = signedVolume([pos(oa[0]!), pos(oa[1]!), pos(ob[0]!), pos(ob[1]!)]);
-    out.push({ kind: 'axial', subtype: 'biaryl', ends: [a, b], ligands: [oa[0]!, oa[1]!, ob[0]!, ob[1]!], winding: windingOf(vol) });
+    out.push({
+      kind: 'axial',
+      subtype: 'biaryl',
+      ends: [a, b],
+      ligands: [oa[0]!, oa[1]!, ob[0]!, ob[1]!],
+      winding: windingOf(vol),
+    });
   }
   return out;
 

@@ -204,9 +204,25 @@ M  END`;
 
 describe('V3000 atom types and counts (CTfile format specification, V3000 atom block)', () => {
   it('atom lists, NOT lists and quoted pseudo-atoms... become wildcards; a COUNTS mismatch is a warning', () => {
-    const t = ['', '', '', '  0  0  0     0  0            999 V3000', 'M  V30 BEGIN CTAB', 'M  V30 COUNTS 4 2 0 0 1',
-      'M  V30 BEGIN ATOM', 'M  V30 1 [C,N] 0 0 0 0', 'M  V30 2 NOT [O,S] 1.5 0 0 0', 'M  V30 3 "R#" 3 0 0 0', 'M  V30 4 Cl 4.5 0 0 7',
-      'M  V30 END ATOM', 'M  V30 BEGIN BOND', 'M  V30 1 1 1 2', 'M  V30 END BOND', 'M  V30 END CTAB', 'M  END'].join('\n');
+    const t = [
+      '',
+      '',
+      '',
+      '  0  0  0     0  0            999 V3000',
+      'M  V30 BEGIN CTAB',
+      'M  V30 COUNTS 4 2 0 0 1',
+      'M  V30 BEGIN ATOM',
+      'M  V30 1 [C,N] 0 0 0 0',
+      'M  V30 2 NOT [O,S] 1.5 0 0 0',
+      'M  V30 3 "R#" 3 0 0 0',
+      'M  V30 4 Cl 4.5 0 0 7',
+      'M  V30 END ATOM',
+      'M  V30 BEGIN BOND',
+      'M  V30 1 1 1 2',
+      'M  V30 END BOND',
+      'M  V30 END CTAB',
+      'M  END',
+    ].join('\n');
     const r = parseMolfile(t);
     if (!r.ok) throw new Error(r.error.message);
     expect(r.structure.atoms.map((a) => a.element)).toEqual(['*', '*', '*', 'Cl']);

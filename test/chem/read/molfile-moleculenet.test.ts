@@ -66,7 +66,8 @@ describe.skipIf(!haveSharedData('moleculenet'))('MoleculeNet structures through 
       for (const b of json.molecules[0]!.bonds ?? []) {
         if ((b.stereo !== 'cis' && b.stereo !== 'trans') || !b.stereoAtoms) continue;
         const e = s.stereo.find(
-          (x): x is DoubleBondStereo => x.kind === 'double-bond' && x.ends.includes(b.atoms[0]) && x.ends.includes(b.atoms[1]),
+          (x): x is DoubleBondStereo =>
+            x.kind === 'double-bond' && x.ends.includes(b.atoms[0]) && x.ends.includes(b.atoms[1]),
         );
         if (!e) {
           dbDiffer.push(`${smiles}: bond ${b.atoms} missing`);

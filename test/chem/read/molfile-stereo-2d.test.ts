@@ -17,14 +17,25 @@ type B = [number, number, number, number?]; // 1-based atoms, order, stereo code
 
 export function molblock(atoms: A[], bonds: B[]): string {
   const p = (n: number, w: number): string => String(n).padStart(w);
-  const out = ['generated', '  test', '', `${p(atoms.length, 3)}${p(bonds.length, 3)}  0  0  0  0  0  0  0  0999 V2000`];
-  for (const [s, x, y] of atoms) out.push(`${x.toFixed(4).padStart(10)}${y.toFixed(4).padStart(10)}    0.0000 ${s.padEnd(3)} 0  0  0  0  0  0  0  0  0  0  0  0`);
+  const out = [
+    'generated',
+    '  test',
+    '',
+    `${p(atoms.length, 3)}${p(bonds.length, 3)}  0  0  0  0  0  0  0  0999 V2000`,
+  ];
+  for (const [s, x, y] of atoms)
+    out.push(
+      `${x.toFixed(4).padStart(10)}${y.toFixed(4).padStart(10)}    0.0000 ${s.padEnd(3)} 0  0  0  0  0  0  0  0  0  0  0  0`,
+    );
   for (const [a, b, o, st] of bonds) out.push(`${p(a, 3)}${p(b, 3)}${p(o, 3)}${p(st ?? 0, 3)}  0  0  0`);
   out.push('M  END');
   return out.join('\n') + '\n';
 }
 
-const at = (deg: number, r = 1): [number, number] => [r * Math.cos((deg * Math.PI) / 180), r * Math.sin((deg * Math.PI) / 180)];
+const at = (deg: number, r = 1): [number, number] => [
+  r * Math.cos((deg * Math.PI) / 180),
+  r * Math.sin((deg * Math.PI) / 180),
+];
 
 /** Centre C (atom 1) with substituents F, Cl, Br, I (as many as angles) at the given angles and stereo codes. */
 function centre(angles: number[], codes: number[], el = 'C'): string {
@@ -76,8 +87,21 @@ describe('tetrahedral centres from wedges, compared with RDKit', () => {
   it('a wedge between two possible centres counts only for its narrow end', () => {
     // C1(F)(Cl)-C2(Br)(I), wedge drawn from C1 to C2: C1 defined, C2 not.
     const block = molblock(
-      [['C', 0, 0], ['C', 1, 0], ['F', ...at(120)], ['Cl', ...at(240)], ['Br', 1.5, 0.87], ['I', 1.5, -0.87]],
-      [[1, 2, 1, 1], [1, 3, 1], [1, 4, 1], [2, 5, 1], [2, 6, 1]],
+      [
+        ['C', 0, 0],
+        ['C', 1, 0],
+        ['F', ...at(120)],
+        ['Cl', ...at(240)],
+        ['Br', 1.5, 0.87],
+        ['I', 1.5, -0.87],
+      ],
+      [
+        [1, 2, 1, 1],
+        [1, 3, 1],
+        [1, 4, 1],
+        [2, 5, 1],
+        [2, 6, 1],
+      ],
     );
     const s = agree(block);
     expect(s.stereo.map((e) => (e.kind === 'tetrahedral' ? e.centre : -1))).toEqual([0]);
@@ -100,9 +124,18 @@ describe('tetrahedral centres from wedges, compared with RDKit', () => {
     // front bonds are not neighbours around the centre; read one wedge at a time such drawings give opposite
     // answers. (RDKit picks one; the IUPAC 2006 recommendations advise against such drawings, from memory.)
     for (const [angles, codes] of [
-      [[45, 135, 225, 315], [1, 1, 0, 0]],
-      [[30, 100, 200, 300], [1, 1, 0, 0]],
-      [[10, 120, 190, 280], [6, 6, 0, 0]],
+      [
+        [45, 135, 225, 315],
+        [1, 1, 0, 0],
+      ],
+      [
+        [30, 100, 200, 300],
+        [1, 1, 0, 0],
+      ],
+      [
+        [10, 120, 190, 280],
+        [6, 6, 0, 0],
+      ],
     ] as [number[], number[]][]) {
       const r = parseMolfile(centre(angles, codes));
       if (!r.ok) throw new Error(r.error.message);
@@ -115,8 +148,19 @@ describe('tetrahedral centres from wedges, compared with RDKit', () => {
     // The SMILES is written starting from the ethyl carbon: for a lone-pair centre written first, RDKit and
     // writeSmiles place the lone pair differently (reported to the SMILES writer).
     const block = molblock(
-      [['S', 0, 0], ['O', ...at(90)], ['C', ...at(210)], ['C', ...at(330)], ['C', 1.7, -1.2]],
-      [[1, 2, 2], [1, 3, 1, 1], [1, 4, 1], [4, 5, 1]],
+      [
+        ['S', 0, 0],
+        ['O', ...at(90)],
+        ['C', ...at(210)],
+        ['C', ...at(330)],
+        ['C', 1.7, -1.2],
+      ],
+      [
+        [1, 2, 2],
+        [1, 3, 1, 1],
+        [1, 4, 1],
+        [4, 5, 1],
+      ],
     );
     const s = agree(block, [4]);
     expect(s.stereo).toHaveLength(1);
@@ -144,13 +188,24 @@ describe('double bonds from 2D geometry, compared with RDKit', () => {
   // 1,2-dichloroethene: C1=C2, Cl3 on C1, Cl4 on C2
   const dce = (cl4y: number, code = 0, wavy = false): string =>
     molblock(
-      [['C', 0, 0], ['C', 1.3, 0], ['Cl', -0.7, 1.1], ['Cl', 2.0, cl4y]],
-      [[1, 2, 2, code], [1, 3, 1, wavy ? 4 : 0], [2, 4, 1]],
+      [
+        ['C', 0, 0],
+        ['C', 1.3, 0],
+        ['Cl', -0.7, 1.1],
+        ['Cl', 2.0, cl4y],
+      ],
+      [
+        [1, 2, 2, code],
+        [1, 3, 1, wavy ? 4 : 0],
+        [2, 4, 1],
+      ],
     );
   it('cis and trans from the side of the bond line each substituent lies on', () => {
     for (const y of [1.1, -1.1]) {
       const s = ok(parseMolfile(dce(y)));
-      expect(s.stereo).toEqual([{ kind: 'double-bond', ends: [0, 1], refs: [2, 3], relation: y > 0 ? 'cis' : 'trans' }]);
+      expect(s.stereo).toEqual([
+        { kind: 'double-bond', ends: [0, 1], refs: [2, 3], relation: y > 0 ? 'cis' : 'trans' },
+      ]);
       expect(canon(writeSmiles(s))).toBe(canon(dce(y)));
     }
   });

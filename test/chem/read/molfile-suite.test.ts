@@ -42,7 +42,9 @@ function kindFor(d: string): StereoElement['kind'] {
 }
 
 function elementAt(s: Structure, atom: number, kind: StereoElement['kind']): StereoElement | undefined {
-  return s.stereo.find((e) => e.kind === kind && (e.kind === 'tetrahedral' ? e.centre === atom : e.ends.includes(atom)));
+  return s.stereo.find(
+    (e) => e.kind === kind && (e.kind === 'tetrahedral' ? e.centre === atom : e.ends.includes(atom)),
+  );
 }
 
 /** Helicenes (unit HE) label two atoms that are not bonded; Structure has no element for them (see report). */
@@ -54,7 +56,10 @@ function formula(s: Structure): string {
     c.set(a.element, (c.get(a.element) ?? 0) + 1);
     if (a.hCount > 0) c.set('H', (c.get('H') ?? 0) + a.hCount);
   }
-  return [...c.entries()].sort().map(([e, n]) => `${e}${n}`).join('');
+  return [...c.entries()]
+    .sort()
+    .map(([e, n]) => `${e}${n}`)
+    .join('');
 }
 
 /** Parity (0 even, 1 odd) of the permutation taking list a to list b (same members). */
@@ -95,7 +100,15 @@ function sameConfiguration(e2: StereoElement, e3: StereoElement, m: number[], s3
   };
   if (e2.kind === 'tetrahedral' && e3.kind === 'tetrahedral') {
     const l2 = mapLigands(e2.ligands, [e2.centre], [e3.centre]);
-    const l3 = e3.ligands.map((l) => (l === IMPLICIT_H ? hOf(-1, e3.centre, e3.ligands.filter((x) => x >= 0)) : l));
+    const l3 = e3.ligands.map((l) =>
+      l === IMPLICIT_H
+        ? hOf(
+            -1,
+            e3.centre,
+            e3.ligands.filter((x) => x >= 0),
+          )
+        : l,
+    );
     const p = parity(l2, l3);
     return p !== null && (p === 0) === (e2.winding === e3.winding);
   }
@@ -103,7 +116,13 @@ function sameConfiguration(e2: StereoElement, e3: StereoElement, m: number[], s3
     const ends3 = m[e2.ends[0]] === e3.ends[0] ? e3.ends : [e3.ends[1], e3.ends[0]];
     const l2 = mapLigands(e2.ligands, [...e2.ends], [...ends3]);
     const l3 = e3.ligands.map((l, i) =>
-      l === IMPLICIT_H ? hOf(-1, e3.ends[i < 2 ? 0 : 1], e3.ligands.filter((x) => x >= 0)) : l,
+      l === IMPLICIT_H
+        ? hOf(
+            -1,
+            e3.ends[i < 2 ? 0 : 1],
+            e3.ligands.filter((x) => x >= 0),
+          )
+        : l,
     );
     const p = parity(l2, l3);
     return p !== null && (p === 0) === (e2.winding === e3.winding);
@@ -117,93 +136,101 @@ function sameConfiguration(e2: StereoElement, e3: StereoElement, m: number[], s3
   return false;
 }
 
-describe.skipIf(!have)('CIP validation suite (Hanson et al., J. Chem. Inf. Model. 2018, 58, 1755-1765)', () => {
-  let d2: Rec[] = [];
-  let d3: Rec[] = [];
-  let RDKit: Rd;
-  beforeAll(async () => {
-    d2 = load('compounds_2d.sdf');
-    d3 = load('compounds_3d.sdf');
-    RDKit = await rdkit();
-  });
+describe.skipIf(!have)(
+  'CIP validation suite (Hanson et al., J. Chem. Inf. Model. 2018, 58, 1755-1765)',
+  () => {
+    let d2: Rec[] = [];
+    let d3: Rec[] = [];
+    let RDKit: Rd;
+    beforeAll(async () => {
+      d2 = load('compounds_2d.sdf');
+      d3 = load('compounds_3d.sdf');
+      RDKit = await rdkit();
+    });
 
-  it('reads all 300 records of each file, with STRUCTURE_ID in the same order', () => {
-    expect(d2.length).toBe(300);
-    expect(d3.length).toBe(300);
-    for (let i = 0; i < 300; i++) expect(d3[i]!.s.properties['STRUCTURE_ID']).toBe(d2[i]!.s.properties['STRUCTURE_ID']);
-  });
+    it('reads all 300 records of each file, with STRUCTURE_ID in the same order', () => {
+      expect(d2.length).toBe(300);
+      expect(d3.length).toBe(300);
+      for (let i = 0; i < 300; i++)
+        expect(d3[i]!.s.properties['STRUCTURE_ID']).toBe(d2[i]!.s.properties['STRUCTURE_ID']);
+    });
 
-  it('gives the same molecular formula from the 2D file (implicit H) and the 3D file (explicit H atoms)', () => {
-    // The 3D file lists hydrogens as atoms and orders atoms differently, so element sequences cannot agree;
-    // the formula checks the implicit-hydrogen counts of the 2D reading against the 3D hydrogens.
-    for (let i = 0; i < 300; i++) expect(formula(d3[i]!.s), d2[i]!.s.title ?? '').toBe(formula(d2[i]!.s));
-  });
+    it('gives the same molecular formula from the 2D file (implicit H) and the 3D file (explicit H atoms)', () => {
+      // The 3D file lists hydrogens as atoms and orders atoms differently, so element sequences cannot agree;
+      // the formula checks the implicit-hydrogen counts of the 2D reading against the 3D hydrogens.
+      for (let i = 0; i < 300; i++) expect(formula(d3[i]!.s), d2[i]!.s.title ?? '').toBe(formula(d2[i]!.s));
+    });
 
-  it('puts a stereo element of the right kind on every atom named in CIP_LABELS, in both files', () => {
-    const missing: string[] = [];
-    for (const recs of [d2, d3]) {
-      for (const { s } of recs) {
-        if (isHelicene(s)) continue;
-        for (const [atom, d] of labels(s)) {
-          if (!elementAt(s, atom, kindFor(d))) missing.push(`${s.title} ${atom + 1}${d} (${s.dimension}D)`);
+    it('puts a stereo element of the right kind on every atom named in CIP_LABELS, in both files', () => {
+      const missing: string[] = [];
+      for (const recs of [d2, d3]) {
+        for (const { s } of recs) {
+          if (isHelicene(s)) continue;
+          for (const [atom, d] of labels(s)) {
+            if (!elementAt(s, atom, kindFor(d))) missing.push(`${s.title} ${atom + 1}${d} (${s.dimension}D)`);
+          }
         }
       }
-    }
-    expect(missing).toEqual([]);
-  });
+      expect(missing).toEqual([]);
+    });
 
-  it('reads the same configuration from the wedges (2D) and the coordinates (3D) for every labelled unit', () => {
-    // Atom map 2D -> 3D from RDKit substructure matching (all matches, so symmetric molecules may pick any).
-    const disagree: string[] = [];
-    for (let i = 0; i < 300; i++) {
-      const { s: s2, block: b2 } = d2[i]!;
-      const { s: s3, block: b3 } = d3[i]!;
-      const units = labels(s2).map(([a, d]) => elementAt(s2, a, kindFor(d))).filter((e): e is StereoElement => !!e);
-      if (units.length === 0) continue;
-      const q = RDKit.get_mol(b2, JSON.stringify({ removeHs: false }))!;
-      const t = RDKit.get_mol(b3, JSON.stringify({ removeHs: false }))!;
-      const matches: { atoms: number[] }[] = JSON.parse(t.get_substruct_matches(q, JSON.stringify({ uniquify: false, maxMatches: 2000 })));
-      q.delete();
-      t.delete();
-      const ok = matches.some(({ atoms: m }) =>
-        units.every((e2) => {
-          const key = e2.kind === 'tetrahedral' ? m[e2.centre]! : m[e2.ends[0]]!;
-          const e3 = elementAt(s3, key, e2.kind);
-          return e3 !== undefined && sameConfiguration(e2, e3, m, s3);
-        }),
-      );
-      if (!ok) disagree.push(`${s2.title} (${matches.length} matches)`);
-    }
-    expect(disagree).toEqual([]);
-  });
+    it('reads the same configuration from the wedges (2D) and the coordinates (3D) for every labelled unit', () => {
+      // Atom map 2D -> 3D from RDKit substructure matching (all matches, so symmetric molecules may pick any).
+      const disagree: string[] = [];
+      for (let i = 0; i < 300; i++) {
+        const { s: s2, block: b2 } = d2[i]!;
+        const { s: s3, block: b3 } = d3[i]!;
+        const units = labels(s2)
+          .map(([a, d]) => elementAt(s2, a, kindFor(d)))
+          .filter((e): e is StereoElement => !!e);
+        if (units.length === 0) continue;
+        const q = RDKit.get_mol(b2, JSON.stringify({ removeHs: false }))!;
+        const t = RDKit.get_mol(b3, JSON.stringify({ removeHs: false }))!;
+        const matches: { atoms: number[] }[] = JSON.parse(
+          t.get_substruct_matches(q, JSON.stringify({ uniquify: false, maxMatches: 2000 })),
+        );
+        q.delete();
+        t.delete();
+        const ok = matches.some(({ atoms: m }) =>
+          units.every((e2) => {
+            const key = e2.kind === 'tetrahedral' ? m[e2.centre]! : m[e2.ends[0]]!;
+            const e3 = elementAt(s3, key, e2.kind);
+            return e3 !== undefined && sameConfiguration(e2, e3, m, s3);
+          }),
+        );
+        if (!ok) disagree.push(`${s2.title} (${matches.length} matches)`);
+      }
+      expect(disagree).toEqual([]);
+    });
 
-  it('RDKit canonical SMILES of the 2D and 3D molblocks agree (sanity check of the data)', () => {
-    const differ: string[] = [];
-    for (let i = 0; i < 300; i++) {
-      const a = RDKit.get_mol(d2[i]!.block)!;
-      const b = RDKit.get_mol(d3[i]!.block)!;
-      a.remove_hs_in_place();
-      b.remove_hs_in_place();
-      if (a.get_smiles() !== b.get_smiles()) differ.push(d2[i]!.s.title ?? '');
-      a.delete();
-      b.delete();
-    }
-    // RDKit itself does not read every 3D unit the same way as the 2D drawing (e.g. some P/S centres);
-    // the point here is that the files describe the same compounds for nearly all records.
-    expect(differ.length).toBeLessThan(10);
-  });
+    it('RDKit canonical SMILES of the 2D and 3D molblocks agree (sanity check of the data)', () => {
+      const differ: string[] = [];
+      for (let i = 0; i < 300; i++) {
+        const a = RDKit.get_mol(d2[i]!.block)!;
+        const b = RDKit.get_mol(d3[i]!.block)!;
+        a.remove_hs_in_place();
+        b.remove_hs_in_place();
+        if (a.get_smiles() !== b.get_smiles()) differ.push(d2[i]!.s.title ?? '');
+        a.delete();
+        b.delete();
+      }
+      // RDKit itself does not read every 3D unit the same way as the 2D drawing (e.g. some P/S centres);
+      // the point here is that the files describe the same compounds for nearly all records.
+      expect(differ.length).toBeLessThan(10);
+    });
 
-  it('RDKit-canonical(writeSmiles(read 2D record)) equals RDKit-canonical(2D molblock) for all 300 records', () => {
-    const differ: string[] = [];
-    for (const { s, block } of d2) {
-      const ref = RDKit.get_mol(block)!;
-      ref.remove_hs_in_place();
-      const ours = RDKit.get_mol(writeSmiles(s));
-      const got = ours ? (ours.remove_hs_in_place(), ours.get_smiles()) : 'unreadable';
-      if (got !== ref.get_smiles()) differ.push(`${s.title}: ${got} vs ${ref.get_smiles()}`);
-      ref.delete();
-      ours?.delete();
-    }
-    expect(differ).toEqual([]);
-  });
-});
+    it('RDKit-canonical(writeSmiles(read 2D record)) equals RDKit-canonical(2D molblock) for all 300 records', () => {
+      const differ: string[] = [];
+      for (const { s, block } of d2) {
+        const ref = RDKit.get_mol(block)!;
+        ref.remove_hs_in_place();
+        const ours = RDKit.get_mol(writeSmiles(s));
+        const got = ours ? (ours.remove_hs_in_place(), ours.get_smiles()) : 'unreadable';
+        if (got !== ref.get_smiles()) differ.push(`${s.title}: ${got} vs ${ref.get_smiles()}`);
+        ref.delete();
+        ours?.delete();
+      }
+      expect(differ).toEqual([]);
+    });
+  },
+);
