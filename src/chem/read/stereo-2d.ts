@@ -8,10 +8,11 @@
  * pair) at minus the sum of the three bond vectors, where a real tetrahedron puts it. Each wedged bond is read
  * on its own: that bond lifted (z = +1 wedge, -1 hash), the other bonds in the plane; the sign of the signed
  * volume of the four points gives the winding. If that is flat (a T-shape with the wedge on its stem) the
- * plain bonds lean slightly away from the wedge (z = -0.3 z_wedge) and it is read again. All readings must agree: two adjacent wedges of one kind, or
- * a wedge and a hash in one straight line, contradict each other (no projection of a tetrahedron looks like
- * that) and give no configuration and a warning; so does a drawing where no reading fixes anything. A wavy bond ('either') at its
- * narrow end leaves the atom explicitly undefined.
+ * plain bonds lean slightly away from the wedge (z = -0.3 z_wedge) and it is read again. All readings must
+ * agree: two adjacent wedges of one kind, or a wedge and a hash in one straight line, contradict each other
+ * (no projection of a tetrahedron looks like that) and give no configuration and a warning; so does a drawing
+ * where no reading fixes anything (two neighbours drawn in one direction). A wavy bond ('either') at its narrow
+ * end leaves the atom explicitly undefined.
  *
  * Double bonds. For each non-aromatic double bond (or odd cumulene) with a substituent on each end, the side of
  * the bond line each substituent lies on gives cis/trans, unless the bond is crossed (stereo 3), a wavy bond
