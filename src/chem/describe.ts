@@ -2,7 +2,13 @@
  * describe(): a structure in, every stereo fact the engine knows out (facts.ts StructureFacts). Atom numbers in
  * the facts are the 1-based input numbers.
  */
-import type { CipLabel, ComponentFacts, EnhancedStereoFacts, StereoUnitFact, StructureFacts } from './facts.js';
+import type {
+  CipLabel,
+  ComponentFacts,
+  EnhancedStereoFacts,
+  StereoUnitFact,
+  StructureFacts,
+} from './facts.js';
 import { constitutionKey, molecularFormula } from './graph/index.js';
 import { countStereoisomers } from './isomers.js';
 import { labelUnits } from './labels.js';
@@ -48,7 +54,8 @@ export function analyse(input: Structure): Analysis {
       );
     }
   }
-  if (!group.complete) p.remarks.push('symmetry search stopped at its limit: stereoisomer counts may be too high');
+  if (!group.complete)
+    p.remarks.push('symmetry search stopped at its limit: stereoisomer counts may be too high');
   const chirality = chiralityOf(group, state, defined);
   return { norm, p, group, state, defined, reported, chirality };
 }
@@ -70,7 +77,9 @@ function stereogenicSomewhere(g: UnitGroup, x: State, defined: Uint8Array, k: nu
 export function unitName(p: Perception, k: number): string {
   const u = p.units[k];
   const s = p.structure;
-  return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
+  return u.atoms.length === 1
+    ? atomName(s, u.atoms[0])
+    : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
 }
 
 const unitKey = (atoms: number[]): string => [...atoms].sort((a, b) => a - b).join(',');
@@ -93,7 +102,12 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
       .map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
     stereobonds: units
       .filter((u) => u.kind !== 'tetrahedral')
-      .map((u) => ({ atoms: [u.atoms[0], u.atoms[1]] as [number, number], label: u.label, kind: u.kind, defined: u.defined })),
+      .map((u) => ({
+        atoms: [u.atoms[0], u.atoms[1]] as [number, number],
+        label: u.label,
+        kind: u.kind,
+        defined: u.defined,
+      })),
     units,
     chiral,
     meso,
@@ -101,14 +115,19 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
     stereoisomers,
     mirror: mirrorFacts(a),
     enhanced: enhancedFacts(a),
-    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({ atom: s.atoms[i].inputNumber, drawnWithStereo: true })),
+    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({
+      atom: s.atoms[i].inputNumber,
+      drawnWithStereo: true,
+    })),
     components,
     constitutionKey: constitutionKey(s),
     formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice(),
   };
   if (p.invertibleNitrogens.length > 0 && units.length === 0) {
-    facts.remarks.push('the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre');
+    facts.remarks.push(
+      'the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre',
+    );
   }
   if (opts.listIsomers) facts.stereoisomerList = listStereoisomers(a, opts.maxIsomers ?? 64);
   return facts;
@@ -124,7 +143,11 @@ function unitFacts(a: Analysis, labels: Map<string, CipLabel>): StereoUnitFact[]
   const out: StereoUnitFact[] = [];
   p.units.forEach((u, k) => {
     if (!a.reported[k]) return;
-    const ck = u.atoms.map((x) => p.classes[x]).sort((x, y) => x - y).join(',') + u.kind;
+    const ck =
+      u.atoms
+        .map((x) => p.classes[x])
+        .sort((x, y) => x - y)
+        .join(',') + u.kind;
     if (!classIds.has(ck)) classIds.set(ck, classIds.size);
     const label = u.defined ? (labels.get(unitKey(u.atoms)) ?? null) : null;
     let pseudo = label !== null && label === label.toLowerCase();
@@ -158,12 +181,17 @@ function mirrorFixed(g: UnitGroup, h: number, x: State): boolean {
 
 function enhancedFacts(a: Analysis): EnhancedStereoFacts {
   const s = a.p.structure;
-  const groups = s.groups.map((g) => ({ type: g.type, id: g.id, atoms: g.atoms.map((x) => s.atoms[x].inputNumber) }));
+  const groups = s.groups.map((g) => ({
+    type: g.type,
+    id: g.id,
+    atoms: g.atoms.map((x) => s.atoms[x].inputNumber),
+  }));
   const definedParity = a.p.units.filter((u, k) => u.defined && u.mode === 'parity' && a.reported[k]);
   if (definedParity.length === 0 && !a.p.units.some((u) => u.defined)) return { groups, meaning: 'none' };
   if (definedParity.length === 0) return { groups, meaning: 'absolute' };
   const member = new Map<number, string>();
-  for (const g of s.groups) for (const x of g.atoms) member.set(x, g.type === 'abs' ? 'abs' : `${g.type}${g.id}`);
+  for (const g of s.groups)
+    for (const x of g.atoms) member.set(x, g.type === 'abs' ? 'abs' : `${g.type}${g.id}`);
   const kinds = new Set(definedParity.map((u) => member.get(u.atoms[0]) ?? 'abs'));
   if (s.groups.length === 0) return { groups, meaning: s.chiralFlag === false ? 'relative' : 'absolute' };
   const list = [...kinds];

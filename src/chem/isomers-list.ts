@@ -20,9 +20,14 @@ export function listStereoisomers(a: Analysis, max: number): StereoisomerEntry[]
   const fully = a.defined.every((d) => d === 1);
   const inputCanon = fully ? canonicalState(group, a.state) : null;
   return enumerateStereoisomers(group, m, max).map(({ state, chiral }) => {
-    const stereo = p.units.flatMap((u, k) => (stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : []));
+    const stereo = p.units.flatMap((u, k) =>
+      stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : [],
+    );
     const t: Structure = { ...s, stereo, groups: [] };
-    const labels = labelUnits(t).map((r) => ({ atoms: r.atoms.map((x) => s.atoms[x].inputNumber), label: r.label }));
+    const labels = labelUnits(t).map((r) => ({
+      atoms: r.atoms.map((x) => s.atoms[x].inputNumber),
+      label: r.label,
+    }));
     labels.sort((x, y) => x.atoms[0] - y.atoms[0]);
     return {
       smiles: writeSmiles(t),

@@ -13,7 +13,15 @@
  */
 import type { StereoisomerCount } from './facts.js';
 import type { State } from './perceive-units.js';
-import { act, canonicalState, feasible, fixedCount, mirrorState, sameState, type UnitGroup } from './symmetry.js';
+import {
+  act,
+  canonicalState,
+  feasible,
+  fixedCount,
+  mirrorState,
+  sameState,
+  type UnitGroup,
+} from './symmetry.js';
 
 const toNumber = (b: bigint): number => Number(b);
 

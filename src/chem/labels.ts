@@ -72,8 +72,12 @@ export function labelWithOpenChemLib(s: Structure): CipResult[] {
     if (ends.some((e) => e < 0)) continue;
     const axis = mol.getBondOrder(b) === 1;
     const label: CipLabel = axis
-      ? p === M.cBondCIPParityEorP ? 'P' : 'M'
-      : p === M.cBondCIPParityEorP ? 'E' : 'Z';
+      ? p === M.cBondCIPParityEorP
+        ? 'P'
+        : 'M'
+      : p === M.cBondCIPParityEorP
+        ? 'E'
+        : 'Z';
     out.push({ element: elementAt(ends), label, atoms: ends });
   }
   return out;

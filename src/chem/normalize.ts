@@ -65,12 +65,19 @@ export function normalize(s: Structure): Normalized {
       return { ...e, centre: fromInput[e.centre], ligands: [a, b, c, d] };
     }
     if (e.kind === 'double-bond') {
-      return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], refs: [lig(e.refs[0]), lig(e.refs[1])] };
+      return {
+        ...e,
+        ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]],
+        refs: [lig(e.refs[0]), lig(e.refs[1])],
+      };
     }
     const [a, b, c, d] = e.ligands.map(lig);
     return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], ligands: [a, b, c, d] };
   });
-  const groups = s.groups.map((g) => ({ ...g, atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x]) }));
+  const groups = s.groups.map((g) => ({
+    ...g,
+    atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x]),
+  }));
   return { structure: { ...s, atoms, bonds, stereo, groups }, toInput, fromInput, folded };
 }
 
@@ -88,7 +95,11 @@ export function extractAtoms(s: Structure, atoms: number[]): Structure {
       stereo.push({ ...e, centre: index[e.centre], ligands: [a, b, c, d] });
     } else if (e.kind === 'double-bond') {
       if (!e.ends.every(keep) || !e.refs.every(keep)) continue;
-      stereo.push({ ...e, ends: [index[e.ends[0]], index[e.ends[1]]], refs: [lig(e.refs[0]), lig(e.refs[1])] });
+      stereo.push({
+        ...e,
+        ends: [index[e.ends[0]], index[e.ends[1]]],
+        refs: [lig(e.refs[0]), lig(e.refs[1])],
+      });
     } else {
       if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
       const [a, b, c, d] = e.ligands.map(lig);
@@ -98,7 +109,9 @@ export function extractAtoms(s: Structure, atoms: number[]): Structure {
   return {
     ...s,
     atoms: atoms.map((a) => s.atoms[a]),
-    bonds: s.bonds.filter((b) => index[b.a] >= 0 && index[b.b] >= 0).map((b) => ({ ...b, a: index[b.a], b: index[b.b] })),
+    bonds: s.bonds
+      .filter((b) => index[b.a] >= 0 && index[b.b] >= 0)
+      .map((b) => ({ ...b, a: index[b.a], b: index[b.b] })),
     stereo,
     groups: s.groups
       .map((g) => ({ ...g, atoms: g.atoms.filter((x) => index[x] >= 0).map((x) => index[x]) }))

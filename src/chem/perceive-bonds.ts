@@ -66,7 +66,12 @@ function ringOk(rings: RingInfo, bond: number): boolean {
   return r === 0 || r >= 8;
 }
 
-export function bondCandidates(s: Structure, g: Graph, rings: RingInfo, aromaticBond: boolean[]): BondCandidate[] {
+export function bondCandidates(
+  s: Structure,
+  g: Graph,
+  rings: RingInfo,
+  aromaticBond: boolean[],
+): BondCandidate[] {
   const out: BondCandidate[] = [];
   const seen = new Uint8Array(s.bonds.length);
   for (let bi = 0; bi < s.bonds.length; bi++) {

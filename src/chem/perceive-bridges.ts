@@ -92,7 +92,8 @@ function threeBridges(a: number, b: number, ringNbrs: (x: number) => number[]): 
     for (let j = i + 1; j < paths.length; j++) {
       if (!disjoint(paths[i], paths[j])) continue;
       for (let k = j + 1; k < paths.length; k++) {
-        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k])) return [paths[i], paths[j], paths[k]];
+        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k]))
+          return [paths[i], paths[j], paths[k]];
       }
     }
   }

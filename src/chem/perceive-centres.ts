@@ -26,9 +26,7 @@ import type { Structure } from './types.js';
 import { hToken, lpToken } from './perceive-units.js';
 
 export type CentreVerdict =
-  | { kind: 'centre'; tokens: [number, number, number, number] }
-  | { kind: 'invertible-nitrogen' }
-  | null;
+  { kind: 'centre'; tokens: [number, number, number, number] } | { kind: 'invertible-nitrogen' } | null;
 
 export function tetrahedralCandidate(
   s: Structure,
@@ -39,7 +37,8 @@ export function tetrahedralCandidate(
 ): CentreVerdict {
   const atom = s.atoms[i];
   const z = atom.atomicNumber;
-  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50) return null;
+  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50)
+    return null;
   if (atom.radical !== 0 || atom.hCount > 1) return null;
   const nb = g.nbrs[i];
   const nbB = g.nbrBonds[i];
@@ -120,7 +119,10 @@ function resonancePair(s: Structure, g: Graph, i: number): boolean {
   const nb = g.nbrs[i];
   for (let k = 0; k < nb.length; k++) {
     const x = s.atoms[nb[k]];
-    if (g.nbrs[nb[k]].length !== 1 || (x.atomicNumber !== 8 && x.atomicNumber !== 16 && x.atomicNumber !== 34))
+    if (
+      g.nbrs[nb[k]].length !== 1 ||
+      (x.atomicNumber !== 8 && x.atomicNumber !== 16 && x.atomicNumber !== 34)
+    )
       continue;
     const order = s.bonds[g.nbrBonds[i][k]].order;
     const key = x.atomicNumber * 1000 + (x.isotope ?? 0); // isotopes tell the two apart (P-93.2.4, 17O/18O)

@@ -46,14 +46,21 @@ export function applyInputStereo(
       continue;
     }
     const where =
-      e.kind === 'tetrahedral' ? atomName(s, e.centre) : `the ${atomName(s, e.ends[0])}–${atomName(s, e.ends[1])} unit`;
+      e.kind === 'tetrahedral'
+        ? atomName(s, e.centre)
+        : `the ${atomName(s, e.ends[0])}–${atomName(s, e.ends[1])} unit`;
     // 3D input records a configuration for every atom from its coordinates: silence, not a drawing error.
-    if (s.dimension !== 3) remarks.push(`configuration drawn on ${where}, which is not a stereogenic unit; ignored`);
+    if (s.dimension !== 3)
+      remarks.push(`configuration drawn on ${where}, which is not a stereogenic unit; ignored`);
   }
   return drawnN;
 }
 
-function bitFor(u: PerceivedUnit, e: StereoElement, pseudo: (u: PerceivedUnit, atom: number, x: number) => number): number {
+function bitFor(
+  u: PerceivedUnit,
+  e: StereoElement,
+  pseudo: (u: PerceivedUnit, atom: number, x: number) => number,
+): number {
   if (e.kind === 'tetrahedral') {
     if (u.kind !== 'tetrahedral') return -1;
     const list = e.ligands.map((x) => pseudo(u, e.centre, x));
@@ -67,7 +74,8 @@ function bitFor(u: PerceivedUnit, e: StereoElement, pseudo: (u: PerceivedUnit, a
     if (u.mode !== 'cistrans') return -1;
     const ra = pseudo(u, a, e.refs[0]);
     const rb = pseudo(u, b, e.refs[1]);
-    const other = (t: number, side: number): number => (u.tokens[side] === t ? u.tokens[side + 1] : u.tokens[side]);
+    const other = (t: number, side: number): number =>
+      u.tokens[side] === t ? u.tokens[side + 1] : u.tokens[side];
     const sideA = sameOrder ? 0 : 2;
     const sideB = sameOrder ? 2 : 0;
     if (!u.tokens.includes(ra) || !u.tokens.includes(rb)) return -1;

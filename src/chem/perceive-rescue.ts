@@ -27,7 +27,7 @@ export function swapsTerminalPair(u: PerceivedUnit, g: Graph, classes: Int32Arra
 }
 
 function sameSide(u: PerceivedUnit, i: number, j: number): boolean {
-  return u.kind === 'tetrahedral' || (i < 2) === (j < 2);
+  return u.kind === 'tetrahedral' || i < 2 === j < 2;
 }
 
 /** true when no automorphism fixing the unit's atoms inverts its configuration (so it can be stereogenic). */
@@ -43,7 +43,14 @@ export function survivesSymmetry(s: Structure, u: PerceivedUnit, classes: Int32A
     colour,
     maxResults: 2000,
     onMapping: (map: Int32Array) => {
-      if (rebase(u, u.tokens.map((t) => mapToken(t, n, map)), 0) === 1) inverted = true;
+      if (
+        rebase(
+          u,
+          u.tokens.map((t) => mapToken(t, n, map)),
+          0,
+        ) === 1
+      )
+        inverted = true;
       return !inverted;
     },
   });

@@ -77,7 +77,7 @@ export function rebase(unit: PerceivedUnit, list: ArrayLike<number>, bit: number
   }
   const p = R.indexOf(list[0]);
   const q = R.indexOf(list[2]);
-  if (p < 0 || q < 0 || (p < 2) === (q < 2)) return -1;
+  if (p < 0 || q < 0 || p < 2 === q < 2) return -1;
   return bit ^ ((p & 1) ^ (q & 1));
 }
 
@@ -92,7 +92,8 @@ export function unitStereo(unit: PerceivedUnit, bit: number, n: number): StereoE
     return { kind: 'tetrahedral', centre: unit.atoms[0], ligands: [a, b, c, d], winding: bit ? '@@' : '@' };
   }
   const ends: [number, number] = [unit.atoms[0], unit.atoms[1]];
-  if (unit.mode === 'cistrans') return { kind: 'double-bond', ends, refs: [a, c], relation: bit ? 'trans' : 'cis' };
+  if (unit.mode === 'cistrans')
+    return { kind: 'double-bond', ends, refs: [a, c], relation: bit ? 'trans' : 'cis' };
   const subtype = unit.kind === 'biaryl' ? 'biaryl' : 'allene';
   return { kind: 'axial', subtype, ends, ligands: [a, b, c, d], winding: bit ? '@@' : '@' };
 }

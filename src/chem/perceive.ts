@@ -9,7 +9,13 @@
  * Whether such a unit is stereogenic in a given configuration is decided later by the symmetry group
  * (symmetry.ts), not here.
  */
-import { aromaticBonds, buildGraph, connectedComponents, equivalenceClasses, ringInfo } from './graph/index.js';
+import {
+  aromaticBonds,
+  buildGraph,
+  connectedComponents,
+  equivalenceClasses,
+  ringInfo,
+} from './graph/index.js';
 import type { Graph, RingInfo } from './graph/index.js';
 import { IMPLICIT_H, type Structure } from './types.js';
 import { bondCandidates } from './perceive-bonds.js';
@@ -65,21 +71,47 @@ export function perceive(s: Structure): Perception {
     }
     const pairs = equalPairs(v.tokens, tokenClass, [i, i]);
     if (pairs === null) continue;
-    drafts.push({ kind: 'tetrahedral', mode: 'parity', atoms: [i], tokens: v.tokens, defined: false, bit: 0,
-      equivalentPair: pairs.length > 0, pairs });
+    drafts.push({
+      kind: 'tetrahedral',
+      mode: 'parity',
+      atoms: [i],
+      tokens: v.tokens,
+      defined: false,
+      bit: 0,
+      equivalentPair: pairs.length > 0,
+      pairs,
+    });
   }
   for (const c of bondCandidates(s, graph, rings, aromaticBond)) {
     const pairs = equalPairs(c.tokens, tokenClass, c.ends, true);
     if (pairs === null) continue;
-    drafts.push({ kind: c.kind, mode: c.mode, atoms: [...c.ends], tokens: c.tokens, defined: false, bit: 0,
-      equivalentPair: pairs.length > 0, pairs });
+    drafts.push({
+      kind: c.kind,
+      mode: c.mode,
+      atoms: [...c.ends],
+      tokens: c.tokens,
+      defined: false,
+      bit: 0,
+      equivalentPair: pairs.length > 0,
+      pairs,
+    });
   }
   // Biaryl axes: only when the input defines them (a constitution alone does not say the rotation is hindered).
   for (const e of s.stereo) {
     if (e.kind !== 'axial' || e.subtype !== 'biaryl') continue;
-    const t = e.ligands.map((x, k) => (x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])));
-    drafts.push({ kind: 'biaryl', mode: 'parity', atoms: [...e.ends], tokens: [t[0], t[1], t[2], t[3]],
-      defined: false, bit: 0, equivalentPair: false, pairs: [] });
+    const t = e.ligands.map((x, k) =>
+      x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1]),
+    );
+    drafts.push({
+      kind: 'biaryl',
+      mode: 'parity',
+      atoms: [...e.ends],
+      tokens: [t[0], t[1], t[2], t[3]],
+      defined: false,
+      bit: 0,
+      equivalentPair: false,
+      pairs: [],
+    });
   }
 
   let kept = fixedPoint(drafts, graph, n);
@@ -114,14 +146,26 @@ export function perceive(s: Structure): Perception {
   for (const c of couplings) {
     const [ua, ub] = [units[c.a], units[c.b]];
     if (ua.defined && ub.defined && (ua.bit ^ ub.bit) !== c.c) {
-      const name = (u: PerceivedUnit): string => `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
+      const name = (u: PerceivedUnit): string =>
+        `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
       remarks.push(
         `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are bridgeheads of a small bridged ring system, which fixes their relative configuration`,
       );
     }
   }
-  const result = { structure: s, graph, rings, aromaticBond, units, unitOfAtom, invertibleNitrogens, couplings,
-    components, componentOfAtom, remarks } as Omit<Perception, 'classes'> as Perception;
+  const result = {
+    structure: s,
+    graph,
+    rings,
+    aromaticBond,
+    units,
+    unitOfAtom,
+    invertibleNitrogens,
+    couplings,
+    components,
+    componentOfAtom,
+    remarks,
+  } as Omit<Perception, 'classes'> as Perception;
   Object.defineProperty(result, 'classes', { get: classesOf, enumerable: true });
   return result;
 }
@@ -139,7 +183,8 @@ function equalPairs(
 ): { anchor: number; token: number }[] | null {
   const out: { anchor: number; token: number }[] = [];
   if (perEnd) {
-    for (const k of [0, 2]) if (cls(tokens[k]) === cls(tokens[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens[k] });
+    for (const k of [0, 2])
+      if (cls(tokens[k]) === cls(tokens[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens[k] });
     return out;
   }
   const c = tokens.map(cls);
@@ -166,7 +211,13 @@ function fixedPoint(drafts: Draft[], g: Graph, n: number): Draft[] {
   }
 }
 
-function branchHoldsUnit(g: Graph, anchor: number, start: number, unitAtom: Int32Array, self: number): boolean {
+function branchHoldsUnit(
+  g: Graph,
+  anchor: number,
+  start: number,
+  unitAtom: Int32Array,
+  self: number,
+): boolean {
   const seen = new Uint8Array(g.n);
   seen[anchor] = 1;
   seen[start] = 1;

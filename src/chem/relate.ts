@@ -43,7 +43,12 @@ function otherDifferences(a: Side, b: Side): { onlyInA: string[]; onlyInB: strin
   const left = b.others.slice();
   const onlyInA: string[] = [];
   for (const o of a.others) {
-    const j = left.findIndex((x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === 'identical'));
+    const j = left.findIndex(
+      (x) =>
+        x.key === o.key &&
+        (x.structure.stereo.length + o.structure.stereo.length === 0 ||
+          relate(o.structure, x.structure).relation === 'identical'),
+    );
     if (j >= 0) left.splice(j, 1);
     else onlyInA.push(o.smiles);
   }
@@ -52,7 +57,8 @@ function otherDifferences(a: Side, b: Side): { onlyInA: string[]; onlyInB: strin
 
 const labelMap = (a: Analysis): Map<string, CipLabel> => {
   const m = new Map<string, CipLabel>();
-  for (const r of labelUnits(a.p.structure)) if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
+  for (const r of labelUnits(a.p.structure))
+    if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(','), r.label);
   return m;
 };
 
@@ -60,7 +66,10 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
   const A = side(sa);
   const B = side(sb);
   const otherComponents = otherDifferences(A, B);
-  const salt = otherComponents.onlyInA.length + otherComponents.onlyInB.length > 0 ? ' (parent components; the other components differ)' : '';
+  const salt =
+    otherComponents.onlyInA.length + otherComponents.onlyInB.length > 0
+      ? ' (parent components; the other components differ)'
+      : '';
   const pa = A.parent;
   const pb = B.parent;
   const base = { differingUnits: [] as DifferingUnit[], epimers: false, otherComponents };
@@ -68,7 +77,11 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
   if (!iso) {
     const same = molecularFormula(pa.p.structure) === molecularFormula(pb.p.structure);
     return same
-      ? { ...base, relation: 'constitutional-isomers', explanation: `same molecular formula, different constitution${salt}` }
+      ? {
+          ...base,
+          relation: 'constitutional-isomers',
+          explanation: `same molecular formula, different constitution${salt}`,
+        }
       : { ...base, relation: 'different-compounds', explanation: `different molecular formulas${salt}` };
   }
   const nA = pa.p.structure.atoms.length;
@@ -81,7 +94,14 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
   let open = false;
   pa.p.units.forEach((u, i) => {
     const j = pb.p.unitOfAtom[iso[u.atoms[0]]];
-    const bit = j < 0 ? -1 : rebase(pb.p.units[j], u.tokens.map((t) => mapToken(t, nA, iso, nB)), u.bit);
+    const bit =
+      j < 0
+        ? -1
+        : rebase(
+            pb.p.units[j],
+            u.tokens.map((t) => mapToken(t, nA, iso, nB)),
+            u.bit,
+          );
     if (bit < 0) {
       if (pa.reported[i]) open = true;
       return;
@@ -95,8 +115,11 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
     if (relevant && (!yDefined[j] || !pb.defined[j])) open = true;
   }
   if (open) {
-    return { ...base, relation: 'same-constitution',
-      explanation: `same constitution; undefined stereo leaves the relation open${salt}` };
+    return {
+      ...base,
+      relation: 'same-constitution',
+      explanation: `same constitution; undefined stereo leaves the relation open${salt}`,
+    };
   }
   const g = pb.group;
   const xB = pb.state;
@@ -124,7 +147,12 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
         differingUnits.push(unitFact(j, fromA[j]));
       }
     }
-    return { ...base, relation: 'enantiomers', differingUnits, explanation: `mirror images that are not superimposable${salt}` };
+    return {
+      ...base,
+      relation: 'enantiomers',
+      differingUnits,
+      explanation: `mirror images that are not superimposable${salt}`,
+    };
   }
   // Diastereomers: name the units that differ, choosing B's symmetry image of A that differs least.
   let best: number[] = [];
@@ -142,7 +170,9 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
   const aOf = new Int32Array(mB).fill(-1);
   for (let j = 0; j < mB; j++) if (fromA[j] >= 0) aOf[perm[j]] = fromA[j];
   const differingUnits = best.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
-  const epimers = differingUnits.length === 1 && differingUnits[0].kind === 'tetrahedral' &&
+  const epimers =
+    differingUnits.length === 1 &&
+    differingUnits[0].kind === 'tetrahedral' &&
     pb.p.units.filter((u, j) => u.mode === 'parity' && pb.reported[j]).length >= 2;
   const names = best.map((j) => unitName(pb.p, j)).join(', ');
   const explanation = epimers

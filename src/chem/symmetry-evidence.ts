@@ -15,19 +15,29 @@ export function mirrorFacts(a: Analysis): MirrorFacts {
   const none = { fixedAtoms: [] as number[], fixedBonds: [] as [number, number][] };
   const hasUndefined = a.defined.some((d, k) => d === 0 && a.reported[k]);
   if (chirality.chiral === null) {
-    return { chiral: null, ...none,
-      explanation: 'open: some ways of completing the undefined stereo units give a chiral molecule, others an achiral one' };
+    return {
+      chiral: null,
+      ...none,
+      explanation:
+        'open: some ways of completing the undefined stereo units give a chiral molecule, others an achiral one',
+    };
   }
   if (chirality.chiral) {
-    return { chiral: true, ...none,
+    return {
+      chiral: true,
+      ...none,
       explanation: hasUndefined
         ? 'chiral whatever the undefined units are: no completion is superimposable on its mirror image'
-        : 'chiral: no symmetry of the constitution maps the configuration onto its mirror image' };
+        : 'chiral: no symmetry of the constitution maps the configuration onto its mirror image',
+    };
   }
   const parityUnits = p.units.filter((u, k) => u.mode === 'parity' && a.reported[k]);
   if (parityUnits.length === 0) {
-    return { chiral: false, ...none,
-      explanation: 'achiral: no stereocentre or stereogenic axis, so reflection changes no configuration' };
+    return {
+      chiral: false,
+      ...none,
+      explanation: 'achiral: no stereocentre or stereogenic axis, so reflection changes no configuration',
+    };
   }
   if (chirality.witness < 0) {
     return { chiral: false, ...none, explanation: 'achiral whatever the undefined units are' };
@@ -48,7 +58,8 @@ export function mirrorFacts(a: Analysis): MirrorFacts {
   let explanation: string;
   if (named.length > 0) {
     explanation = `achiral: mirror plane through ${named.map((i) => atomName(s, i)).join(', ')}`;
-    if (bondNames.length > 0) explanation += ` and the middle of the ${bondNames.join(' and ')} bond${bondNames.length > 1 ? 's' : ''}`;
+    if (bondNames.length > 0)
+      explanation += ` and the middle of the ${bondNames.join(' and ')} bond${bondNames.length > 1 ? 's' : ''}`;
   } else if (bondNames.length > 0) {
     explanation = `achiral: mirror plane or inversion centre at the middle of the ${bondNames.join(' and ')} bond${bondNames.length > 1 ? 's' : ''}`;
   } else {

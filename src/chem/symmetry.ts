@@ -62,7 +62,11 @@ export function unitGroup(p: Perception): UnitGroup {
         const u = units[i];
         const j = unitOfAtom[map[u.atoms[0]]];
         if (j < 0) return true; // does not preserve the unit set (a biaryl axis drawn on one side only)
-        const f = rebase(units[j], u.tokens.map((t) => mapToken(t, n, map)), 0);
+        const f = rebase(
+          units[j],
+          u.tokens.map((t) => mapToken(t, n, map)),
+          0,
+        );
         if (f < 0) return true;
         perm[i] = j;
         flip[i] = f;
@@ -152,7 +156,13 @@ export function canonicalState(g: UnitGroup, x: State): State {
  * Can some completion y of the partial state (x on the `defined` units) satisfy (σ_k M)·y = y (mirror = true)
  * or σ_k·y = y (mirror = false)? Checked cycle by cycle of π_k.
  */
-export function fixedCompletionExists(g: UnitGroup, k: number, x: State, defined: Uint8Array, mirror: boolean): boolean {
+export function fixedCompletionExists(
+  g: UnitGroup,
+  k: number,
+  x: State,
+  defined: Uint8Array,
+  mirror: boolean,
+): boolean {
   const perm = g.perms[k];
   const flip = g.flips[k];
   const m = x.length;
@@ -237,7 +247,8 @@ export function chiralityOf(g: UnitGroup, x: State, defined: Uint8Array): Chiral
     return { chiral: k < 0, witness: k };
   }
   let someAchiral = false;
-  for (let k = 0; k < g.perms.length && !someAchiral; k++) someAchiral = fixedCompletionExists(g, k, x, defined, true);
+  for (let k = 0; k < g.perms.length && !someAchiral; k++)
+    someAchiral = fixedCompletionExists(g, k, x, defined, true);
   if (!someAchiral) return { chiral: true, witness: -1 };
   if (!g.reflect.some((r) => r === 1)) return { chiral: false, witness: -1 };
   if (open.length > MAX_ENUMERATED_UNDEFINED) return { chiral: null, witness: -1 };

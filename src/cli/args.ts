@@ -3,7 +3,12 @@ import { parseArgs } from 'node:util';
 import { UsageError } from './command.js';
 
 export interface OptionSpec {
-  [name: string]: { type: 'string' | 'boolean'; short?: string; choices?: readonly string[]; default?: string | boolean };
+  [name: string]: {
+    type: 'string' | 'boolean';
+    short?: string;
+    choices?: readonly string[];
+    default?: string | boolean;
+  };
 }
 
 export function parseCommandArgs(
@@ -16,7 +21,11 @@ export function parseCommandArgs(
     const options = Object.fromEntries(
       Object.entries(spec).map(([k, v]) => [
         k,
-        { type: v.type, ...(v.short ? { short: v.short } : {}), ...(v.default !== undefined ? { default: v.default } : {}) },
+        {
+          type: v.type,
+          ...(v.short ? { short: v.short } : {}),
+          ...(v.default !== undefined ? { default: v.default } : {}),
+        },
       ]),
     );
     parsed = parseArgs({ args, options, allowPositionals: true, strict: true });
@@ -31,6 +40,7 @@ export function parseCommandArgs(
   }
   const pos = parsed.positionals;
   if (pos.length < positionals.min) throw new UsageError(`missing ${positionals.names}`);
-  if (pos.length > positionals.max) throw new UsageError(`too many arguments: ${pos.slice(positionals.max).join(' ')}`);
+  if (pos.length > positionals.max)
+    throw new UsageError(`too many arguments: ${pos.slice(positionals.max).join(' ')}`);
   return { values: parsed.values as Record<string, string | boolean | undefined>, positionals: pos };
 }

@@ -8,7 +8,9 @@ export function compareText(f: RelationFacts): string {
   if (f.differingUnits.length > 0) {
     out.push(f.relation === 'enantiomers' ? 'Every stereo unit is inverted:' : 'Units that differ:');
     for (const u of f.differingUnits) {
-      out.push(`  A ${u.atomsA.join('–')} ${u.labelA ?? '?'}  <->  B ${u.atomsB.join('–')} ${u.labelB ?? '?'}  (${u.kind})`);
+      out.push(
+        `  A ${u.atomsA.join('–')} ${u.labelA ?? '?'}  <->  B ${u.atomsB.join('–')} ${u.labelB ?? '?'}  (${u.kind})`,
+      );
     }
   }
   const { onlyInA, onlyInB } = f.otherComponents;

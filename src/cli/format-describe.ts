@@ -1,14 +1,18 @@
 /** describe facts -> plain text for a chemist. */
 import type { StructureFacts, StereoUnitFact } from '../chem/index.js';
 
-const yesNo = (v: boolean | null, open = 'open (undefined stereo)'): string => (v === null ? open : v ? 'yes' : 'no');
+const yesNo = (v: boolean | null, open = 'open (undefined stereo)'): string =>
+  v === null ? open : v ? 'yes' : 'no';
 
 function unitLine(u: StereoUnitFact): string {
   const where = u.atoms.length === 1 ? `${u.element}${u.atoms[0]}` : `${u.kind} ${u.atoms.join('–')}`;
   const conf = u.defined ? (u.label ?? 'defined (no CIP label)') : 'undefined';
   const extra: string[] = [];
   if (u.pseudoasymmetric) extra.push('pseudoasymmetric');
-  if (u.group) extra.push(u.group.type === 'abs' ? 'absolute' : `${u.group.type === 'and' ? 'AND' : 'OR'} group ${u.group.id}`);
+  if (u.group)
+    extra.push(
+      u.group.type === 'abs' ? 'absolute' : `${u.group.type === 'and' ? 'AND' : 'OR'} group ${u.group.id}`,
+    );
   return `  ${where.padEnd(18)} ${conf}${extra.length ? `  (${extra.join(', ')})` : ''}`;
 }
 
@@ -19,9 +23,13 @@ export function describeText(f: StructureFacts, what: string): string {
   const centres = f.units.filter((u) => u.kind === 'tetrahedral');
   const bonds = f.units.filter((u) => u.kind !== 'tetrahedral');
   const nDef = (us: StereoUnitFact[]): number => us.filter((u) => u.defined).length;
-  out.push(`Stereocentres: ${centres.length === 0 ? 'none' : `${centres.length} (${nDef(centres)} defined)`}`);
+  out.push(
+    `Stereocentres: ${centres.length === 0 ? 'none' : `${centres.length} (${nDef(centres)} defined)`}`,
+  );
   for (const u of centres) out.push(unitLine(u));
-  out.push(`Stereogenic double bonds and axes: ${bonds.length === 0 ? 'none' : `${bonds.length} (${nDef(bonds)} defined)`}`);
+  out.push(
+    `Stereogenic double bonds and axes: ${bonds.length === 0 ? 'none' : `${bonds.length} (${nDef(bonds)} defined)`}`,
+  );
   for (const u of bonds) out.push(unitLine(u));
   out.push(`Chiral: ${yesNo(f.chiral)} — ${f.mirror.explanation.replace(/^(achiral|chiral|open): /, '')}`);
   out.push(`Meso: ${yesNo(f.meso)}`);
@@ -34,16 +42,22 @@ export function describeText(f: StructureFacts, what: string): string {
   if (f.enhanced.meaning !== 'none' && (f.enhanced.groups.length > 0 || f.enhanced.meaning !== 'absolute')) {
     out.push(`Enhanced stereo: the drawing stands for ${enhancedWords(f.enhanced.meaning)}`);
   }
-  for (const n of f.invertibleNitrogens) out.push(`Note: N${n.atom} is an invertible amine nitrogen, not a stereocentre`);
+  for (const n of f.invertibleNitrogens)
+    out.push(`Note: N${n.atom} is an invertible amine nitrogen, not a stereocentre`);
   if (f.components.length > 1) {
     out.push('Components:');
-    for (const k of f.components) out.push(`  ${k.role === 'parent' ? 'parent' : 'other '}  ${k.formula.padEnd(14)} ${k.smiles}`);
+    for (const k of f.components)
+      out.push(`  ${k.role === 'parent' ? 'parent' : 'other '}  ${k.formula.padEnd(14)} ${k.smiles}`);
   }
   if (f.stereoisomerList) {
-    out.push(`Stereoisomers${f.stereoisomerList.length < c.total ? ` (first ${f.stereoisomerList.length})` : ''}:`);
+    out.push(
+      `Stereoisomers${f.stereoisomerList.length < c.total ? ` (first ${f.stereoisomerList.length})` : ''}:`,
+    );
     for (const e of f.stereoisomerList) {
       const labels = e.labels.map((l) => `${l.atoms.join('/')}${l.label ?? '?'}`).join(' ') || '-';
-      out.push(`  ${e.smiles}   ${labels}   ${e.chiral ? 'chiral' : 'achiral'}${e.isInput ? '   <- input' : ''}`);
+      out.push(
+        `  ${e.smiles}   ${labels}   ${e.chiral ? 'chiral' : 'achiral'}${e.isInput ? '   <- input' : ''}`,
+      );
     }
   }
   for (const r of f.remarks) out.push(`Remark: ${r}`);

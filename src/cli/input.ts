@@ -7,7 +7,8 @@ import { looksLikeMolfile } from '../chem/read/index.js';
 import type { ReadError, Structure } from '../chem/index.js';
 import type { Io } from './command.js';
 
-export type Loaded = { ok: true; structure: Structure; source: string; warnings: ReadError[] } | { ok: false; message: string };
+export type Loaded =
+  { ok: true; structure: Structure; source: string; warnings: ReadError[] } | { ok: false; message: string };
 
 export function loadStructure(arg: string, io: Io): Loaded {
   let text = arg;
@@ -26,8 +27,14 @@ export function loadStructure(arg: string, io: Io): Loaded {
   if (/\n\$\$\$\$\s*(\n|$)/.test(text)) {
     const first = readSdRecords(text).next().value;
     if (!first) return { ok: false, message: `${source}: no SD record found` };
-    if (!first.result.ok) return { ok: false, message: `${source}, record 1: ${describeError(first.result.error)}` };
-    return { ok: true, structure: first.result.structure, source: `${source} (record 1)`, warnings: first.result.warnings };
+    if (!first.result.ok)
+      return { ok: false, message: `${source}, record 1: ${describeError(first.result.error)}` };
+    return {
+      ok: true,
+      structure: first.result.structure,
+      source: `${source} (record 1)`,
+      warnings: first.result.warnings,
+    };
   }
   const isSmilesFile = source !== 'SMILES argument' && !looksLikeMolfile(text);
   const body = isSmilesFile ? (text.split(/\r?\n/).find((l) => l.trim() !== '') ?? '') : text;
@@ -37,6 +44,11 @@ export function loadStructure(arg: string, io: Io): Loaded {
 }
 
 export function describeError(e: ReadError): string {
-  const at = e.at.line !== undefined ? ` (line ${e.at.line})` : e.at.offset !== undefined ? ` (character ${e.at.offset + 1})` : '';
+  const at =
+    e.at.line !== undefined
+      ? ` (line ${e.at.line})`
+      : e.at.offset !== undefined
+        ? ` (character ${e.at.offset + 1})`
+        : '';
   return `${e.message}${at} [${e.code}]`;
 }

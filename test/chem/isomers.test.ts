@@ -12,19 +12,44 @@ const count = (smi: string) => describe(smiles(smi)).stereoisomers;
 
 suite('stereoisomer counts of textbook constitutions', () => {
   it('tartaric acid: 3, one meso form and one enantiomer pair (Eliel & Wilen 1994, from memory)', () => {
-    expect(count('OC(=O)C(O)C(O)C(O)=O')).toMatchObject({ total: 3, chiral: 2, achiral: 1, pairs: 1, meso: 1, units: 2 });
+    expect(count('OC(=O)C(O)C(O)C(O)=O')).toMatchObject({
+      total: 3,
+      chiral: 2,
+      achiral: 1,
+      pairs: 1,
+      meso: 1,
+      units: 2,
+    });
   });
   it('inositol: 9, seven meso forms and one pair (chiro-inositol) (Eliel & Wilen 1994, from memory)', () => {
-    expect(count('OC1C(O)C(O)C(O)C(O)C1O')).toMatchObject({ total: 9, chiral: 2, achiral: 7, pairs: 1, meso: 7 });
+    expect(count('OC1C(O)C(O)C(O)C(O)C1O')).toMatchObject({
+      total: 9,
+      chiral: 2,
+      achiral: 7,
+      pairs: 1,
+      meso: 7,
+    });
   });
   it('2,3,4-trihydroxyglutaric acid: 4, two meso (C3 r/s) and one pair (Eliel & Wilen 1994, from memory)', () => {
-    expect(count('OC(=O)C(O)C(O)C(O)C(O)=O')).toMatchObject({ total: 4, chiral: 2, achiral: 2, meso: 2, units: 3 });
+    expect(count('OC(=O)C(O)C(O)C(O)C(O)=O')).toMatchObject({
+      total: 4,
+      chiral: 2,
+      achiral: 2,
+      meso: 2,
+      units: 3,
+    });
   });
   it('pentane-2,3,4-triol behaves the same way: 4, two meso (from memory)', () => {
     expect(count('CC(O)C(O)C(O)C')).toMatchObject({ total: 4, chiral: 2, achiral: 2, meso: 2 });
   });
   it('open-chain aldohexoses: 16, eight enantiomer pairs (D/L glucose, mannose, ...; from memory)', () => {
-    expect(count('O=CC(O)C(O)C(O)C(O)CO')).toMatchObject({ total: 16, chiral: 16, achiral: 0, pairs: 8, meso: 0 });
+    expect(count('O=CC(O)C(O)C(O)C(O)CO')).toMatchObject({
+      total: 16,
+      chiral: 16,
+      achiral: 0,
+      pairs: 8,
+      meso: 0,
+    });
   });
   it('1,4-dimethylcyclohexane: 2 (cis, trans), both achiral, neither meso (Gold Book "meso-compound")', () => {
     expect(count('CC1CCC(C)CC1')).toMatchObject({ total: 2, chiral: 0, achiral: 2, meso: 0 });

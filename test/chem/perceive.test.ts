@@ -95,7 +95,11 @@ suite('pseudoasymmetric and para units (greatest fixed point)', () => {
     expect(units('CCC(C)CC')).toEqual([]);
   });
   it('2,6-dichlorospiro[3.3]heptane: the spiro centre with four equivalent ring ligands is kept (VS298, Hanson et al. 2018)', () => {
-    expect(units('Cl[C@H]1C[C@]2(C1)C[C@H](C2)Cl')).toEqual(['tetrahedral:2:def', 'tetrahedral:4:def', 'tetrahedral:7:def']);
+    expect(units('Cl[C@H]1C[C@]2(C1)C[C@H](C2)Cl')).toEqual([
+      'tetrahedral:2:def',
+      'tetrahedral:4:def',
+      'tetrahedral:7:def',
+    ]);
   });
   it('a spiro centre whose equivalent rings are exchanged only by an even permutation is kept (VS281, rule 6)', () => {
     expect(units('C1=C2[C@@]34C(=C1)CCCCC3=CC=C4CCCC2')).toEqual(['tetrahedral:3:def']);

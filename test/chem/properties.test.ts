@@ -33,7 +33,8 @@ function pool(): Structure[] {
   const smiles = [...TEXTBOOK];
   if (haveSharedData('moleculenet')) {
     const rows = loadMoleculeNet().filter((r) => /[@/\\]/.test(r.smiles) && r.smiles.length < 90);
-    for (let i = 0; i < rows.length; i += Math.max(1, Math.floor(rows.length / 150))) smiles.push(rows[i].smiles);
+    for (let i = 0; i < rows.length; i += Math.max(1, Math.floor(rows.length / 150)))
+      smiles.push(rows[i].smiles);
   }
   return smiles.flatMap((s) => {
     const r = parseSmiles(s);
@@ -50,7 +51,13 @@ function portable(f: StructureFacts, s: Structure): unknown {
   const mapped = (n: number): number | null | undefined => byInput.get(n);
   return {
     units: f.units
-      .map((u) => ({ kind: u.kind, atoms: u.atoms.map(mapped).sort(), label: u.label, defined: u.defined, pseudo: u.pseudoasymmetric }))
+      .map((u) => ({
+        kind: u.kind,
+        atoms: u.atoms.map(mapped).sort(),
+        label: u.label,
+        defined: u.defined,
+        pseudo: u.pseudoasymmetric,
+      }))
       .sort((x, y) => JSON.stringify(x).localeCompare(JSON.stringify(y))),
     chiral: f.chiral,
     meso: f.meso,
@@ -80,13 +87,19 @@ suite('properties of the stereo engine', () => {
 
   it('relate is symmetric (a structure vs its mirror image, vs itself with some centres inverted, vs another)', () => {
     fc.assert(
-      fc.property(anyStructure, anyStructure, fc.constantFrom('mirror', 'invert-some', 'other'), fc.integer(), (a, b, how, bits) => {
-        const other = how === 'mirror' ? mirror(a) : how === 'other' ? b : invertSome(a, bits);
-        const ab = relate(a, other);
-        const ba = relate(other, a);
-        expect(ba.relation).toBe(ab.relation);
-        expect(ba.differingUnits.length).toBe(ab.differingUnits.length);
-      }),
+      fc.property(
+        anyStructure,
+        anyStructure,
+        fc.constantFrom('mirror', 'invert-some', 'other'),
+        fc.integer(),
+        (a, b, how, bits) => {
+          const other = how === 'mirror' ? mirror(a) : how === 'other' ? b : invertSome(a, bits);
+          const ab = relate(a, other);
+          const ba = relate(other, a);
+          expect(ba.relation).toBe(ab.relation);
+          expect(ba.differingUnits.length).toBe(ab.differingUnits.length);
+        },
+      ),
       { numRuns: 60 },
     );
   });
@@ -112,7 +125,11 @@ function invertSome(s: Structure, bits: number): Structure {
   let k = 0;
   return {
     ...s,
-    stereo: s.stereo.map((e) => (e.kind === 'tetrahedral' && (bits >> k++ % 31) & 1 ? { ...e, winding: e.winding === '@' ? '@@' : '@' } : e)),
+    stereo: s.stereo.map((e) =>
+      e.kind === 'tetrahedral' && (bits >> (k++ % 31)) & 1
+        ? { ...e, winding: e.winding === '@' ? '@@' : '@' }
+        : e,
+    ),
   };
 }
 

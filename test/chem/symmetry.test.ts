@@ -54,13 +54,19 @@ suite('chirality of fully defined structures', () => {
   it('C3 of (2R,4R)-trihydroxyglutaric acid is not stereogenic: the drawn C3 is dropped with a remark (P-93.5.1.3)', () => {
     const f = facts('OC(=O)[C@H](O)[C@H](O)[C@@H](O)C(O)=O');
     expect(f.chiral).toBe(true);
-    expect(f.stereocenters.map((c) => [c.atom, c.label])).toEqual([[4, 'R'], [8, 'R']]);
+    expect(f.stereocenters.map((c) => [c.atom, c.label])).toEqual([
+      [4, 'R'],
+      [8, 'R'],
+    ]);
     expect(f.remarks.join(' ')).toMatch(/C6 is drawn with a configuration but is not stereogenic/);
   });
   it('the two meso forms of trihydroxyglutaric acid carry a pseudoasymmetric C3, r and s (P-93.5.1.3)', () => {
     const r = facts('OC(=O)[C@@H](O)[C@@H](O)[C@@H](O)C(O)=O');
     const s = facts('OC(=O)[C@@H](O)[C@H](O)[C@@H](O)C(O)=O');
-    for (const [f, label] of [[r, 'r'], [s, 's']] as const) {
+    for (const [f, label] of [
+      [r, 'r'],
+      [s, 's'],
+    ] as const) {
       expect(f).toMatchObject({ chiral: false, meso: true });
       const c3 = f.units.find((u) => u.atoms[0] === 6);
       expect(c3).toMatchObject({ pseudoasymmetric: true, label });
@@ -99,6 +105,9 @@ suite('enhanced stereo (CXSMILES groups)', () => {
   });
   it('group membership is reported per unit', () => {
     const f = facts('C[C@H](O)[C@@H](C)Cl |o1:1,3|');
-    expect(f.units.map((u) => u.group)).toEqual([{ type: 'or', id: 1 }, { type: 'or', id: 1 }]);
+    expect(f.units.map((u) => u.group)).toEqual([
+      { type: 'or', id: 1 },
+      { type: 'or', id: 1 },
+    ]);
   });
 });

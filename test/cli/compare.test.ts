@@ -16,7 +16,9 @@ suite('stereogate compare', () => {
     const j = JSON.parse(r.out);
     expect(j.relation).toBe('diastereomers');
     expect(j.epimers).toBe(true);
-    expect(j.differingUnits).toEqual([expect.objectContaining({ kind: 'tetrahedral', atomsA: [5], atomsB: [5] })]);
+    expect(j.differingUnits).toEqual([
+      expect.objectContaining({ kind: 'tetrahedral', atomsA: [5], atomsB: [5] }),
+    ]);
   });
   it('text: enantiomers and the inverted centres', async () => {
     const r = await cli(['compare', 'C[C@H](N)C(=O)O', 'C[C@@H](N)C(=O)O']);

@@ -43,10 +43,14 @@ suite('stereogate describe', () => {
     expect(r.out).toMatch(/Stereocentres: 2 \(2 defined\)/);
     expect(r.out).toMatch(/Chiral: no — mirror plane or inversion centre/);
     expect(r.out).toMatch(/Meso: yes/);
-    expect(r.out).toMatch(/Stereoisomers of this constitution: 3 \(2 chiral = 1 enantiomer pair, 1 achiral, of which 1 meso\)/);
+    expect(r.out).toMatch(
+      /Stereoisomers of this constitution: 3 \(2 chiral = 1 enantiomer pair, 1 achiral, of which 1 meso\)/,
+    );
   });
   it('--list gives every stereoisomer with SMILES and labels, the input marked', async () => {
-    const j = JSON.parse((await cli(['describe', 'OC(=O)[C@@H](O)[C@@H](O)C(O)=O', '--list', '--format', 'json'])).out);
+    const j = JSON.parse(
+      (await cli(['describe', 'OC(=O)[C@@H](O)[C@@H](O)C(O)=O', '--list', '--format', 'json'])).out,
+    );
     expect(j.stereoisomerList).toHaveLength(3);
     expect(j.stereoisomerList.filter((e: { isInput: boolean }) => e.isInput)).toHaveLength(1);
     expect(j.stereoisomerList.filter((e: { chiral: boolean }) => !e.chiral)).toHaveLength(1);

@@ -7,7 +7,8 @@ import { compareText } from '../format-compare.js';
 
 export const compareCommand: Command = {
   name: 'compare',
-  summary: 'how two structures are related: identical, enantiomers, diastereomers, constitutional isomers, ...',
+  summary:
+    'how two structures are related: identical, enantiomers, diastereomers, constitutional isomers, ...',
   usage: [
     'Usage: stereogate compare <A> <B> [--format json|text]',
     '',
@@ -26,7 +27,10 @@ export const compareCommand: Command = {
     );
     const a = loadStructure(positionals[0], io);
     const b = loadStructure(positionals[1], io);
-    for (const [name, r] of [['A', a], ['B', b]] as const) {
+    for (const [name, r] of [
+      ['A', a],
+      ['B', b],
+    ] as const) {
       if (!r.ok) {
         io.err(`stereogate compare: structure ${name}: ${r.message}`);
         return EXIT_BAD_INPUT;

@@ -21,7 +21,11 @@ export const describeCommand: Command = {
   run(args, io) {
     const { values, positionals } = parseCommandArgs(
       args,
-      { format: { type: 'string', choices: ['json', 'text'], default: 'text' }, list: { type: 'boolean' }, max: { type: 'string' } },
+      {
+        format: { type: 'string', choices: ['json', 'text'], default: 'text' },
+        list: { type: 'boolean' },
+        max: { type: 'string' },
+      },
       { min: 1, max: 1, names: 'structure (SMILES or file)' },
     );
     const max = values.max === undefined ? 64 : Number(values.max);
