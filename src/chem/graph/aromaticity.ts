@@ -21,7 +21,8 @@ export function aromaticBonds(s: Structure, rings?: RingInfo, g?: Graph): boolea
   const info = rings ?? ringInfo(s, graph);
   if (info.rings.length === 0) return out;
   const donation = new Int8Array(s.atoms.length).fill(NOT_PI);
-  for (let i = 0; i < s.atoms.length; i++) if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
+  for (let i = 0; i < s.atoms.length; i++)
+    if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
 
   const ringBonds = info.rings.map((r) => ringBondList(r, graph));
   const aromaticRing = info.rings.map((r) => huckel(r, donation));
@@ -116,7 +117,11 @@ function piElectrons(s: Structure, g: Graph, info: RingInfo, i: number): number 
  * kind makes two Kekulé drawings, or drawings from writers with different aromaticity models, compare equal.
  * Input aromatic flags are not used: the readers kekulize, and flags differ between writers.
  */
-export function conjugatedRingBonds(s: Structure, g: Graph = buildGraph(s), bridgeOf?: Uint8Array): boolean[] {
+export function conjugatedRingBonds(
+  s: Structure,
+  g: Graph = buildGraph(s),
+  bridgeOf?: Uint8Array,
+): boolean[] {
   const m = s.bonds.length;
   const out = new Array<boolean>(m).fill(false);
   if (!s.bonds.some((b) => b.order === 2)) return out;

@@ -11,7 +11,6 @@ import { cellIndex, partitionOf, rankKeys, Refiner } from './refine.js';
 
 export { atomInvariants } from './invariants.js';
 
-
 export interface ClassOptions {
   /** Extra colour per atom (e.g. stereo descriptors); atoms of different colour never share a class. */
   extra?: ArrayLike<number>;

@@ -2,9 +2,9 @@
 import type { Structure } from '../types.js';
 import { buildGraph, type Graph } from './adjacency.js';
 import { conjugatedRingBonds } from './aromaticity.js';
-import { bridges } from './rings.js';
+import { bridges, smallestRings } from './rings.js';
 
-/** Element, charge, isotope, hydrogens, degree, radical, aromatic and ring flags, packed into one number. */
+/** Element, charge, isotope, hydrogens, degree, radical, aromatic flag and smallest ring size, packed in one number. */
 export function atomInvariants(s: Structure, aromatic?: boolean[]): number[] {
   return invariantsWith(s, aromatic);
 }
@@ -20,8 +20,14 @@ export function invariantsWith(
   const g = graph ?? buildGraph(s);
   const bridge = bridgeOf ?? bridges(g, s.bonds.length);
   const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
-  const ring = new Array<boolean>(n).fill(false);
-  for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (!bridge[k]) ring[i] = true;
+  // Smallest ring through each atom (0 = none): tells decalin from bicyclopentyl, which colour refinement
+  // alone cannot.
+  const bondRing = smallestRings(s, g, bridge);
+  const ring = new Array<number>(n).fill(0);
+  for (let i = 0; i < n; i++) {
+    for (const k of g.nbrBonds[i])
+      if (bondRing[k] > 0 && (ring[i] === 0 || bondRing[k] < ring[i])) ring[i] = bondRing[k];
+  }
   const aromaticAtom = new Array<boolean>(n).fill(false);
   for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (arom[k]) aromaticAtom[i] = true;
   return s.atoms.map((a, i) => {
@@ -32,7 +38,7 @@ export function invariantsWith(
     v = v * 32 + clamp(g.nbrs[i].length, 0, 31);
     v = v * 4 + clamp(a.radical, 0, 3);
     v = v * 2 + (aromaticAtom[i] ? 1 : 0);
-    v = v * 2 + (ring[i] ? 1 : 0);
+    v = v * 32 + clamp(ring[i], 0, 31);
     return v;
   });
 }
@@ -40,4 +46,3 @@ export function invariantsWith(
 function clamp(x: number, lo: number, hi: number): number {
   return x < lo ? lo : x > hi ? hi : x;
 }
-

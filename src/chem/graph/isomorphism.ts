@@ -11,7 +11,15 @@
 import type { Structure } from '../types.js';
 import { conjugatedRingBonds } from './aromaticity.js';
 import { prepare, refinedPartition, type Prepared } from './prepared.js';
-import { clonePartition, copyPartition, partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
+import {
+  clonePartition,
+  copyPartition,
+  partitionOf,
+  rankKeys,
+  Refiner,
+  type CsrGraph,
+  type Partition,
+} from './refine.js';
 
 export interface IsomorphismOptions {
   /** Atoms of A whose images (and the images of their neighbours) distinguish mappings. */
@@ -175,26 +183,46 @@ function unionCsr(x: CsrGraph, y: CsrGraph): CsrGraph {
   return { n, offs, adj, code };
 }
 
-/** One isomorphism from A to B, or null (also null when the search budget runs out). */
+/** One isomorphism from A to B, or null (also null when the search budget runs out; see isomorphism()). */
 export function isomorphic(a: Structure, b: Structure): Int32Array | null {
+  return isomorphism(a, b).map;
+}
+
+/**
+ * One isomorphism or null, and whether the answer is certain: `decided` is false only when the search budget
+ * ran out before a mapping was found (then "not isomorphic" is not proven).
+ */
+export function isomorphism(
+  a: Structure,
+  b: Structure,
+  maxNodes?: number,
+): { map: Int32Array | null; decided: boolean } {
   let found: Int32Array | null = null;
-  findIsomorphisms(a, b, {
-    maxResults: 1,
+  const r = findIsomorphisms(a, b, {
+    maxNodes,
     onMapping: (m) => {
       found = m;
       return false;
     },
   });
-  return found;
+  return { map: found, decided: found !== null || r.complete };
 }
 
-export type AutomorphismOptions = Omit<IsomorphismOptions, 'colourB' | 'aromaticB'> & { colour?: ArrayLike<number> };
+export type AutomorphismOptions = Omit<IsomorphismOptions, 'colourB' | 'aromaticB'> & {
+  colour?: ArrayLike<number>;
+};
 
 /** Automorphisms of s (same semantics as findIsomorphisms with B = A). */
 export function automorphisms(s: Structure, opts: AutomorphismOptions): SearchResult {
   const colour = opts.colour ?? opts.colourA;
   const aromatic = opts.aromaticA ?? conjugatedRingBonds(s);
-  return findIsomorphisms(s, s, { ...opts, colourA: colour, colourB: colour, aromaticA: aromatic, aromaticB: aromatic });
+  return findIsomorphisms(s, s, {
+    ...opts,
+    colourA: colour,
+    colourB: colour,
+    aromaticA: aromatic,
+    aromaticB: aromatic,
+  });
 }
 
 function validBonds(s: Structure): number {
@@ -259,7 +287,11 @@ class Search {
     for (let t = target; t < target + best; t++) {
       const v = lab[t];
       if (v >= n) ys.push(v);
-      else if (x < 0 || (exhaustive && this.inKey[v] && !this.inKey[x]) || (v < x && this.inKey[v] === this.inKey[x])) {
+      else if (
+        x < 0 ||
+        (exhaustive && this.inKey[v] && !this.inKey[x]) ||
+        (v < x && this.inKey[v] === this.inKey[x])
+      ) {
         if (!exhaustive || this.inKey[v] || x < 0) x = v;
       }
     }

@@ -35,7 +35,10 @@ export function refinedPartition(p: Prepared): Partition {
  * An entry is used only while a checksum over everything the preparation reads still matches, so a structure
  * changed in place is prepared afresh.
  */
-const cache = new WeakMap<Structure, { sum: number; aromatic: readonly boolean[] | undefined; prepared: Prepared }[]>();
+const cache = new WeakMap<
+  Structure,
+  { sum: number; aromatic: readonly boolean[] | undefined; prepared: Prepared }[]
+>();
 
 export function prepare(s: Structure, aromatic?: readonly boolean[]): Prepared {
   const sum = checksum(s, aromatic);

@@ -37,7 +37,13 @@ export interface Partition {
 }
 
 export function clonePartition(p: Partition): Partition {
-  return { lab: p.lab.slice(), pos: p.pos.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+  return {
+    lab: p.lab.slice(),
+    pos: p.pos.slice(),
+    start: p.start.slice(),
+    len: p.len.slice(),
+    cells: p.cells,
+  };
 }
 
 export function copyPartition(from: Partition, to: Partition): void {

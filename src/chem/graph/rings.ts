@@ -36,16 +36,23 @@ export function ringInfo(s: Structure, g: Graph = buildGraph(s)): RingInfo {
   }
   const atomInRing = smallestRingOfAtom.map((x) => x > 0);
   const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
-  return { rings, atomInRing, bondInRing, smallestRingOfBond, smallestRingOfAtom, ringSystems: systems(rings, n) };
+  return {
+    rings,
+    atomInRing,
+    bondInRing,
+    smallestRingOfBond,
+    smallestRingOfAtom,
+    ringSystems: systems(rings, n),
+  };
 }
 
 /** For each bond u–v: 1 + the shortest u..v path that avoids the bond itself (0 when there is none). */
-function smallestRings(s: Structure, g: Graph): number[] {
+export function smallestRings(s: Structure, g: Graph, bridgeOf?: Uint8Array): number[] {
   const n = g.n;
   const out = new Array<number>(s.bonds.length).fill(0);
   const dist = new Int32Array(n).fill(-1);
   const queue = new Int32Array(n);
-  const bridge = bridges(g, s.bonds.length);
+  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
   for (let k = 0; k < s.bonds.length; k++) {
     const { a, b } = s.bonds[k];
     if (bridge[k] || a === b || a < 0 || b < 0 || a >= n || b >= n) continue;

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { automorphisms, findIsomorphisms, isomorphic } from '../../../src/chem/graph/index.js';
+import { automorphisms, findIsomorphisms, isomorphic, isomorphism } from '../../../src/chem/graph/index.js';
 import type { Structure } from '../../../src/chem/types.js';
 import { build } from './build.js';
 import { permute, shuffle } from './permute.js';
@@ -181,5 +181,19 @@ describe('isomorphic()', () => {
       },
     });
     expect(count).toBe(1);
+  });
+});
+
+describe('isomorphism() says when the answer is not proven', () => {
+  it('a budget too small to finish leaves C60 onto a renumbered C60 undecided', () => {
+    const s = c60();
+    const t = permute(s, shuffle(s.atoms.length, 42));
+    expect(isomorphism(s, t, 1).decided).toBe(false);
+    const full = isomorphism(s, t);
+    expect(full.decided).toBe(true);
+    expect(isMapping(s, t, full.map!)).toBe(true);
+  });
+  it('a proven negative is decided', () => {
+    expect(isomorphism(build('CCCCO'), build('CCC(C)O'))).toEqual({ map: null, decided: true });
   });
 });
