@@ -61,4 +61,14 @@ suite.skipIf(!haveSharedData('cip-validation-suite'))('describe reads molfiles',
     const r = await describeFile(`${record('VS079')}$$$$\n${record('VS003')}$$$$\n`, 'two.sdf');
     expect(r.json.stereobonds[0].kind).toBe('allene');
   });
+  it('the molfile chiral flag: 1 = absolute configuration, 0 = relative (CTfile format spec, counts line)', async () => {
+    const lines = record('VS177').split('\n');
+    const withFlag = (flag: string): string => {
+      const l = lines.slice();
+      l[3] = `${l[3].slice(0, 12)}  ${flag}${l[3].slice(15)}`;
+      return l.join('\n');
+    };
+    expect((await describeFile(withFlag('1'), 'abs.mol')).json.enhanced.meaning).toBe('absolute');
+    expect((await describeFile(withFlag('0'), 'rel.mol')).json.enhanced.meaning).toBe('relative');
+  });
 });
