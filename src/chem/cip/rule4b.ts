@@ -57,20 +57,49 @@ function descriptors(rk: Ranker, x: CipNode, fx: CipNode | null): Entry[] {
   return out;
 }
 
-/** Like (1) / unlike (0) sequence of the branch against one reference class, like pairs first within ties. */
-function pairs(entries: Entry[], refClass: number): number[] {
+function chiralLabel(rk: Ranker, n: CipNode): CipLabel | null {
+  if (n.dup || n.atom < 0 || rk.value(RULE_4A, n) !== 2) return null;
+  const l = rk.aux(n);
+  return l !== null && isChiralLabel(l) ? l : null;
+}
+
+/**
+ * Like (1) / unlike (0) sequence of the branch x against one reference class, in hierarchical order. Branches
+ * that Rules 1-4a cannot order are put like-first: by their own descriptor, then by their own sequence, so that
+ * units deeper down keep following the unit they hang from (the pairing of Hanson et al. 2018).
+ */
+function orderedPairs(rk: Ranker, x: CipNode, fx: CipNode | null, refClass: number, memo: Map<CipNode, number[]>): number[] {
+  const hit = memo.get(x);
+  if (hit) return hit;
   const seq: number[] = [];
-  let i = 0;
-  while (i < entries.length) {
-    let j = i;
-    let likes = 0;
-    while (j < entries.length && entries[j].group === entries[i].group) {
-      if (likeClass(entries[j].label) === refClass) likes++;
-      j++;
+  const q: CipNode[] = [x];
+  const qf: (CipNode | null)[] = [fx];
+  const own = (n: CipNode): number => {
+    const l = chiralLabel(rk, n);
+    return l === null ? 0 : likeClass(l) === refClass ? 2 : 1;
+  };
+  for (let i = 0; i < q.length; i++) {
+    const n = q[i];
+    const l = chiralLabel(rk, n);
+    if (l !== null) seq.push(likeClass(l) === refClass ? 1 : 0);
+    const s = rk.sorted(n, qf[i], RULE_4A);
+    const nodes = s.nodes.slice();
+    for (let a = 0; a < nodes.length; ) {
+      let b = a + 1;
+      while (b < nodes.length && s.tie[b]) b++;
+      if (b - a > 1) {
+        const run = nodes.slice(a, b);
+        run.sort((u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)));
+        for (let k = a; k < b; k++) nodes[k] = run[k - a];
+      }
+      a = b;
     }
-    for (let k = i; k < j; k++) seq.push(k - i < likes ? 1 : 0);
-    i = j;
+    for (const c of nodes) {
+      q.push(c);
+      qf.push(n);
+    }
   }
+  memo.set(x, seq);
   return seq;
 }
 
@@ -80,21 +109,25 @@ function lexCompare(a: number[], b: number[]): number {
   return a.length - b.length;
 }
 
-function bestPairs(entries: Entry[]): number[] {
+/** The best like/unlike sequence of a branch over the candidate reference descriptors of its first units. */
+function bestPairs(rk: Ranker, x: CipNode, fx: CipNode | null): number[] {
+  const entries = descriptors(rk, x, fx);
   if (entries.length === 0) return [];
   const first = entries[0].group;
-  let best: number[] | null = null;
+  const classes = new Set<number>();
   for (const e of entries) {
     if (e.group !== first) break;
-    const seq = pairs(entries, likeClass(e.label));
+    classes.add(likeClass(e.label));
+  }
+  let best: number[] | null = null;
+  for (const cls of classes) {
+    const seq = orderedPairs(rk, x, fx, cls, new Map());
     if (best === null || lexCompare(seq, best) > 0) best = seq;
   }
   return best ?? [];
 }
 
 export function compareRule4b(rk: Ranker, x: CipNode, fx: CipNode | null, y: CipNode, fy: CipNode | null): number {
-  const a = bestPairs(descriptors(rk, x, fx));
-  const b = bestPairs(descriptors(rk, y, fy));
-  const c = lexCompare(a, b);
+  const c = lexCompare(bestPairs(rk, x, fx), bestPairs(rk, y, fy));
   return c > 0 ? 1 : c < 0 ? -1 : 0;
 }
