@@ -5,7 +5,7 @@
  */
 import type { Structure } from '../types.js';
 import { buildGraph, type Graph } from './adjacency.js';
-import { minimumCycleBasis } from './sssr.js';
+import { minimumCycleBasis, ringSystemsOf } from './sssr.js';
 
 export interface RingInfo {
   /** A smallest set of smallest rings; atoms in ring order. Sorted by size. */
@@ -42,7 +42,7 @@ export function ringInfo(s: Structure, g: Graph = buildGraph(s)): RingInfo {
     bondInRing,
     smallestRingOfBond,
     smallestRingOfAtom,
-    ringSystems: systems(rings, n),
+    ringSystems: ringSystemsOf(s, n, bondInRing).systems,
   };
 }
 
@@ -122,31 +122,4 @@ export function bridges(g: Graph, m: number, keep?: ArrayLike<boolean>): Uint8Ar
     }
   }
   return isBridge;
-}
-
-/** Rings sharing an atom belong to one system. */
-function systems(rings: number[][], n: number): number[][] {
-  const parent = Int32Array.from({ length: n }, (_, i) => i);
-  const find = (x: number): number => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  const inRing = new Uint8Array(n);
-  for (const r of rings) {
-    for (const a of r) {
-      inRing[a] = 1;
-      const ra = find(a);
-      const r0 = find(r[0]);
-      if (ra !== r0) parent[Math.max(ra, r0)] = Math.min(ra, r0);
-    }
-  }
-  const byRoot = new Map<number, number[]>();
-  for (let i = 0; i < n; i++) {
-    if (!inRing[i]) continue;
-    const root = find(i);
-    const list = byRoot.get(root);
-    if (list) list.push(i);
-    else byRoot.set(root, [i]);
-  }
-  return [...byRoot.values()].sort((p, q) => p[0] - q[0]);
 }

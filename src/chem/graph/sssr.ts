@@ -23,44 +23,59 @@ export function minimumCycleBasis(
 ): number[][] {
   const n = g.n;
   const m = s.bonds.length;
-  // Ring systems by union-find over ring bonds.
+  const { systems, systemOf } = ringSystemsOf(s, n, bondInRing);
+  const bondCount = new Int32Array(systems.length);
+  const smallest = new Int32Array(systems.length).fill(0x7fffffff);
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const r = systemOf[s.bonds[k].a];
+    bondCount[r]++;
+    smallest[r] = Math.min(smallest[r], smallestRingOfBond[k]);
+  }
+  const rings: number[][] = [];
+  systems.forEach((atoms, r) => {
+    const nullity = bondCount[r] - atoms.length + 1;
+    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
+    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallest[r]));
+  });
+  return rings.sort((p, q) => p.length - q.length);
+}
+
+/**
+ * Ring systems (fused, spiro, bridged): atoms joined by ring bonds, transitively. Systems are ordered by their
+ * smallest atom, atoms ascending; systemOf is -1 for atoms in no ring.
+ */
+export function ringSystemsOf(
+  s: Structure,
+  n: number,
+  bondInRing: readonly boolean[],
+): { systems: number[][]; systemOf: Int32Array } {
   const parent = Int32Array.from({ length: n }, (_, i) => i);
   const find = (x: number): number => {
     while (parent[x] !== x) x = parent[x] = parent[parent[x]];
     return x;
   };
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    const ra = find(s.bonds[k].a);
-    const rb = find(s.bonds[k].b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  }
-  const atomsOf = new Map<number, number[]>();
-  const bondsOf = new Map<number, number>();
-  const smallestOf = new Map<number, number>();
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    const r = find(s.bonds[k].a);
-    bondsOf.set(r, (bondsOf.get(r) ?? 0) + 1);
-    const z = smallestRingOfBond[k];
-    if (z < (smallestOf.get(r) ?? Infinity)) smallestOf.set(r, z);
-  }
   const inRing = new Uint8Array(n);
-  for (let k = 0; k < m; k++) if (bondInRing[k]) inRing[s.bonds[k].a] = inRing[s.bonds[k].b] = 1;
+  s.bonds.forEach((b, k) => {
+    if (!bondInRing[k]) return;
+    inRing[b.a] = inRing[b.b] = 1;
+    const ra = find(b.a);
+    const rb = find(b.b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  });
+  const systems: number[][] = [];
+  const systemOf = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
     if (!inRing[i]) continue;
-    const r = find(i);
-    const list = atomsOf.get(r);
-    if (list) list.push(i);
-    else atomsOf.set(r, [i]);
+    const root = find(i);
+    if (systemOf[root] < 0) {
+      systemOf[root] = systems.length;
+      systems.push([]);
+    }
+    systemOf[i] = systemOf[root];
+    systems[systemOf[i]].push(i);
   }
-  const rings: number[][] = [];
-  for (const [root, atoms] of atomsOf) {
-    const nullity = bondsOf.get(root)! - atoms.length + 1;
-    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
-    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallestOf.get(root)!));
-  }
-  return rings.sort((p, q) => p.length - q.length);
+  return { systems, systemOf };
 }
 
 /** The single cycle of a ring system with one independent cycle, from `start`. */
