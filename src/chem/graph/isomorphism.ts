@@ -237,10 +237,10 @@ class Search {
   results = 0;
   budgetHit = false;
   maxHit = false;
-  private readonly maxNodes: number;
-  private readonly pool: Partition[] = [];
   root: Partition | null = null;
+  private readonly maxNodes: number;
   private readonly maxResults: number;
+  private readonly pool: Partition[] = [];
 
   constructor(
     private readonly g: CsrGraph,
@@ -282,18 +282,14 @@ class Search {
         }
       }
     }
+    // x: the lowest A atom of the cell (a key atom while exhaustive, so that its images are distinct
+    // restrictions); ys: the B atoms it may map to.
     let x = -1;
     const ys: number[] = [];
     for (let t = target; t < target + best; t++) {
       const v = lab[t];
       if (v >= n) ys.push(v);
-      else if (
-        x < 0 ||
-        (exhaustive && this.inKey[v] && !this.inKey[x]) ||
-        (v < x && this.inKey[v] === this.inKey[x])
-      ) {
-        if (!exhaustive || this.inKey[v] || x < 0) x = v;
-      }
+      else if ((!exhaustive || this.inKey[v]) && (x < 0 || v < x)) x = v;
     }
     ys.sort((u, v) => u - v);
     let any = NONE;
