@@ -162,16 +162,37 @@ function expandedValence(s: Structure, a: number, orders: number[]): boolean {
 }
 
 /**
- * A neutral three-coordinate nitrogen inverts fast, so it is no stereocentre unless a ring system locks it: all
- * three bonds in rings (bridgehead, as in the suite's VS128 and Tröger's base VS132) or a three-membered ring
- * (aziridine). Common practice, no source; readers of 3D files give every such nitrogen a configuration.
+ * A neutral three-coordinate nitrogen inverts fast, so it is no stereocentre unless a ring system locks it: a
+ * bridgehead of a bridged system (the suite's VS128, Tröger's base VS132) or a three-membered ring (aziridine). Common practice, no source; readers of 3D files give every such nitrogen a configuration.
  */
 function invertibleNitrogen(g: CipGraph, centre: number, ligands: number[]): boolean {
   const at = g.s.atoms[centre];
   if (at.atomicNumber !== 7 || at.charge !== 0 || !ligands.includes(-2)) return false;
   const nb = g.nbr[centre];
   if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
-  return !(nb.length === 3 && nb.every((b) => ringSizeThrough(g, centre, b, 64) > 0));
+  if (nb.length !== 3) return true;
+  // a bridgehead of a bridged ring system: with the nitrogen and any one neighbour taken away, the other two
+  // neighbours still meet (quinuclidine, Tröger's base); a ring-fusion nitrogen (indolizidine) can still invert
+  for (const x of nb) {
+    const [p, q] = nb.filter((b) => b !== x);
+    if (!connectedWithout(g, p, q, centre, x)) return true;
+  }
+  return false;
+}
+
+function connectedWithout(g: CipGraph, p: number, q: number, skip1: number, skip2: number): boolean {
+  const seen = new Set<number>([p, skip1, skip2]);
+  const stack = [p];
+  while (stack.length > 0) {
+    const v = stack.pop() as number;
+    for (const w of g.nbr[v]) {
+      if (w === q) return true;
+      if (seen.has(w)) continue;
+      seen.add(w);
+      stack.push(w);
+    }
+  }
+  return false;
 }
 
 /** Size of the smallest ring through the bond a-b, or 0 when there is none of at most `max` atoms. */
