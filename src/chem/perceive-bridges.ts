@@ -1,5 +1,5 @@
 /**
- * Bridgehead coupling: in a small bridged ring system (norbornane, bicyclo[2.2.2]octane, camphor, Tröger's base,
+ * Bridgehead coupling (and cis-only small ring fusion, see fusedPairs): in a small bridged ring system (norbornane, bicyclo[2.2.2]octane, camphor, Tröger's base,
  * adamantane) the two bridgeheads cannot be inverted independently — only one relative configuration closes the
  * rings. Two tetrahedral units a and b are coupled when three internally disjoint ring paths of 1 to 3 inner
  * atoms join them (larger bridges allow in/out isomers, so they are left free; common practice, no source).
@@ -23,6 +23,68 @@ export interface Coupling {
 const MAX_INNER = 3;
 
 export function bridgeCouplings(s: Structure, g: Graph, rings: RingInfo, units: PerceivedUnit[]): Coupling[] {
+  return [...bridgedPairs(s, g, rings, units), ...fusedPairs(g, rings, units)];
+}
+
+/**
+ * Ring fusion to a three-membered ring (in a bicycle whose other ring has at most 6 atoms) or of two
+ * four-membered rings is cis only (trans-fused bicyclo[n.1.0] with n <= 4 and bicyclo[2.2.0] are too strained to
+ * exist; common practice, no source). With a, b the fusion atoms, a1/b1 their neighbours in the first ring and
+ * a2/b2 in the second, cis fusion makes the winding of [X_a, b, a1, a2] the opposite of that of [X_b, a, b1, b2]
+ * (worked out on model coordinates).
+ */
+function fusedPairs(g: Graph, rings: RingInfo, units: PerceivedUnit[]): Coupling[] {
+  const out: Coupling[] = [];
+  const unitAt = new Map<number, number>();
+  units.forEach((u, k) => {
+    if (u.kind === 'tetrahedral') unitAt.set(u.atoms[0], k);
+  });
+  for (const [a, ka] of unitAt) {
+    for (let i = 0; i < g.nbrs[a].length; i++) {
+      const b = g.nbrs[a][i];
+      const kb = unitAt.get(b);
+      if (kb === undefined || b < a) continue;
+      const r = rings.smallestRingOfBond[g.nbrBonds[a][i]];
+      if (r !== 3 && r !== 4) continue;
+      const through = rings.rings.filter((ring) => adjacentIn(ring, a, b));
+      if (through.length !== 2) continue;
+      through.sort((x, y) => x.length - y.length);
+      const [r1, r2] = [through[0].length, through[1].length];
+      if (!((r1 === 3 && r2 <= 6) || (r1 === 4 && r2 === 4))) continue;
+      const a1 = ringNeighbour(through[0], a, b);
+      const a2 = ringNeighbour(through[1], a, b);
+      const b1 = ringNeighbour(through[0], b, a);
+      const b2 = ringNeighbour(through[1], b, a);
+      const ua = units[ka];
+      const ub = units[kb];
+      const xa = ua.tokens.find((t) => t !== b && t !== a1 && t !== a2);
+      const xb = ub.tokens.find((t) => t !== a && t !== b1 && t !== b2);
+      if (xa === undefined || xb === undefined) continue;
+      const pa = permutationParity([xa, b, a1, a2], ua.tokens);
+      const pb = permutationParity([xb, a, b1, b2], ub.tokens);
+      if (pa < 0 || pb < 0) continue;
+      out.push({ a: ka, b: kb, c: (1 ^ pa ^ pb) as 0 | 1 });
+    }
+  }
+  return out;
+}
+
+function adjacentIn(ring: number[], a: number, b: number): boolean {
+  const i = ring.indexOf(a);
+  if (i < 0) return false;
+  const L = ring.length;
+  return ring[(i + 1) % L] === b || ring[(i + L - 1) % L] === b;
+}
+
+/** The neighbour of a in the ring other than b. */
+function ringNeighbour(ring: number[], a: number, b: number): number {
+  const i = ring.indexOf(a);
+  const L = ring.length;
+  const next = ring[(i + 1) % L];
+  return next === b ? ring[(i + L - 1) % L] : next;
+}
+
+function bridgedPairs(s: Structure, g: Graph, rings: RingInfo, units: PerceivedUnit[]): Coupling[] {
   let possible = 0;
   for (const u of units) {
     if (u.kind !== 'tetrahedral') continue;

@@ -81,4 +81,28 @@ suite('stereoisomer counts of textbook constitutions', () => {
     expect(r.units).toBe(20);
     expect(r.total).toBe(2 ** 20);
   });
+
+  it('camphor: 2 stereoisomers, not 4 — the bridgeheads of bicyclo[2.2.1] are coupled (from memory: (+)/(−)-camphor)', () => {
+    expect(count('CC1(C)C2CCC1(C)C(=O)C2')).toMatchObject({ total: 2, chiral: 2, achiral: 0 });
+  });
+  it('norbornan-2-ol: exo and endo, each a pair, 4 in all; norbornane itself 1 (from memory)', () => {
+    expect(count('OC1CC2CCC1C2')).toMatchObject({ total: 4, chiral: 4 });
+    expect(count('C1CC2CCC1C2')).toMatchObject({ total: 1, achiral: 1 });
+  });
+  it("Tröger's base: one pair of enantiomers (two coupled bridgehead N; from memory)", () => {
+    expect(count('CC1=CC2=C(C=C1)N3CC4=C(C=CC(=C4)C)N(C2)C3')).toMatchObject({ total: 2, chiral: 2 });
+  });
+  it('3-carene: one pair (the cyclopropane fusion is cis only; from memory)', () => {
+    expect(count('CC1=CCC2C(C1)C2(C)C')).toMatchObject({ total: 2, chiral: 2 });
+  });
+  it('bicyclo[3.1.0]hexane: one, achiral (cis only); bicyclo[4.4.0]decane (decalin) cis and trans (from memory)', () => {
+    expect(count('C1CC2CC2C1')).toMatchObject({ total: 1, achiral: 1 });
+    expect(count('C1CCC2CCCCC2C1')).toMatchObject({ total: 2, achiral: 2 });
+  });
+  it('α-cyclodextrin: Burnside over the six rotations (5,472 achiral of 178,962,784; exact group arithmetic)', () => {
+    const smi =
+      'OCC1OC2OC3C(CO)OC(OC4C(CO)OC(OC5C(CO)OC(OC6C(CO)OC(OC7C(CO)OC(OC1C(O)C2O)C(O)C7O)C(O)C6O)C(O)C5O)C(O)C4O)C(O)C3O';
+    // (2^30 + 2·2^5 + 2·2^10 + 2^15) / 6 and (2·2^5 + 2^15) / 6
+    expect(count(smi)).toMatchObject({ units: 30, total: 178962784, achiral: 5472 });
+  });
 });
