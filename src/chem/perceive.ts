@@ -149,7 +149,7 @@ export function perceive(s: Structure): Perception {
       const name = (u: PerceivedUnit): string =>
         `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
       remarks.push(
-        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are bridgeheads of a small bridged ring system, which fixes their relative configuration`,
+        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are the bridgeheads or fusion atoms of a small ring system, which fixes their relative configuration`,
       );
     }
   }

@@ -74,6 +74,18 @@ suite('chirality of fully defined structures', () => {
   });
 });
 
+suite('geometrically impossible drawings', () => {
+  it('trans-fused bicyclo[3.1.0]hexane is flagged; the cis form (achiral, as RDKit also finds) is not', () => {
+    // RDKit MinimalLib: canonical SMILES of C1C[C@H]2C[C@H]2C1 equals that of its mirror image (achiral, cis)
+    expect(facts('C1C[C@H]2C[C@H]2C1')).toMatchObject({ chiral: false, remarks: [] });
+    expect(facts('C1C[C@@H]2C[C@H]2C1').remarks.join(' ')).toMatch(/cannot both hold/);
+  });
+  it('(1R,4R)-camphor as drawn is possible; inverting one bridgehead alone is not (from memory)', () => {
+    expect(facts('CC1(C)[C@@H]2CC[C@@]1(C)C(=O)C2').remarks).toEqual([]);
+    expect(facts('CC1(C)[C@H]2CC[C@@]1(C)C(=O)C2').remarks.join(' ')).toMatch(/cannot both hold/);
+  });
+});
+
 suite('chirality with undefined units', () => {
   it('2-butanol undefined: every completion is chiral, so chiral = true; one undefined unit', () => {
     expect(facts('CC(O)CC')).toMatchObject({ chiral: true, undefined: 1 });
