@@ -3,8 +3,8 @@ import { CAUTION } from '../audit/caution.js';
 import type { AuditSummary } from '../audit/types.js';
 import { VERSION } from '../audit/version.js';
 import type { StereoForm } from '../registry/types.js';
-import type { BulkRecordResult } from './audit-item.js';
 import { VocabularyTally } from './mapping.js';
+import type { Tally } from './render-record.js';
 import type { BulkTrailer } from './writers.js';
 
 export class BulkAccumulator {
@@ -12,23 +12,21 @@ export class BulkAccumulator {
   private readonly byCheck: BulkTrailer['byCheck'] = {};
   private readonly tally = new VocabularyTally();
 
-  add(r: BulkRecordResult): void {
+  add(t: Tally): void {
     this.summary.records++;
-    for (const f of r.findings) {
-      const c = (this.byCheck[f.check] ??= { error: 0, warning: 0, note: 0, waived: 0 });
-      if (f.waived) {
+    for (const [check, severity, waived] of t.findings) {
+      const c = (this.byCheck[check] ??= { error: 0, warning: 0, note: 0, waived: 0 });
+      if (waived) {
         this.summary.waived++;
         c.waived++;
       } else {
-        c[f.severity]++;
-        if (f.severity === 'error') this.summary.errors++;
-        else if (f.severity === 'warning') this.summary.warnings++;
+        c[severity]++;
+        if (severity === 'error') this.summary.errors++;
+        else if (severity === 'warning') this.summary.warnings++;
         else this.summary.notes++;
       }
     }
-    if (r.form_word.word) {
-      this.tally.add(r.form_word.word, { form: (r.declared.form as StereoForm | null) ?? null, how: r.form_word.how });
-    }
+    if (t.word) this.tally.add(t.word, { form: (t.form as StereoForm | null) ?? null, how: t.how });
   }
 
   trailer(shard: string | null): BulkTrailer {

@@ -22,7 +22,11 @@ export interface BulkRecordResult extends RecordResult {
 }
 
 /** Splits an SD record into its molfile block and its data fields (`> <NAME>` headers). */
-export function splitSdRecord(text: string): { molfile: string; fields: Record<string, string>; problem: string | null } {
+export function splitSdRecord(text: string): {
+  molfile: string;
+  fields: Record<string, string>;
+  problem: string | null;
+} {
   const lines = text.split('\n');
   let end = lines.findIndex((l) => l.startsWith('M  END'));
   let problem: string | null = null;
@@ -89,17 +93,22 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
     problems,
     origin: { kind: 'bulk', source: item.source, record: item.record, line: item.line },
     sources: {
-      main: conv.structureText === null ? null : { field: 'structure', format: molfile !== null ? 'molfile' : 'smiles', text: conv.structureText },
+      main:
+        conv.structureText === null
+          ? null
+          : { field: 'structure', format: molfile !== null ? 'molfile' : 'smiles', text: conv.structureText },
       components: [],
     },
   };
-  const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
+  const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine })
+    .records[0];
   const out: BulkRecordResult = {
     ...result,
     seq: item.seq,
     origin: { source: item.source, record: item.record, line: item.line },
     form_word: { word: conv.formWord, how: conv.formHow },
   };
-  if (conv.structureText !== null && result.findings.some((f) => !f.waived)) out.structure_text = conv.structureText;
+  if (conv.structureText !== null && result.findings.some((f) => !f.waived))
+    out.structure_text = conv.structureText;
   return out;
 }

@@ -1,15 +1,23 @@
-/** What a bulk worker (or the inline path) needs to audit items: engine, checks, config, mapping. */
+/** What a bulk worker (or the inline path) needs: engine, checks, config, mapping, and the output renderer. */
 import { defaultEngine } from '../audit/engine.js';
 import type { AuditConfig } from '../checks/types.js';
 import type { ItemContext } from './audit-item.js';
 import { makeVocabulary, type BulkMapping } from './mapping.js';
+import { makeRenderer, type Renderer, type RenderWants } from './render-record.js';
+import { bulkSarifRules } from './sarif-writer.js';
 
+/** Sent once to every worker (structured-cloneable). */
 export interface WorkerSetup {
   mapping: BulkMapping;
   config: AuditConfig;
+  wants: RenderWants;
 }
 
-export async function makeItemContext(setup: WorkerSetup): Promise<ItemContext> {
+export interface BulkContext extends ItemContext {
+  render: Renderer;
+}
+
+export async function makeItemContext(setup: WorkerSetup): Promise<BulkContext> {
   const [{ CHECKS }, engine] = await Promise.all([import('../checks/index.js'), defaultEngine()]);
   return {
     mapping: setup.mapping,
@@ -17,5 +25,6 @@ export async function makeItemContext(setup: WorkerSetup): Promise<ItemContext> 
     checks: CHECKS,
     config: setup.config,
     engine,
+    render: makeRenderer(setup.wants, bulkSarifRules(CHECKS)),
   };
 }

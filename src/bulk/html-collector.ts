@@ -6,13 +6,13 @@
 import { writeFileSync } from 'node:fs';
 import { readStructure } from '../chem/read/index.js';
 import { depict } from '../chem/depict.js';
-import type { AuditResult } from '../audit/types.js';
-import { renderHtml } from '../report/html/render.js';
-import type { BulkRecordResult } from './audit-item.js';
+import { renderHtmlPage, type HtmlRow } from '../report/html/render.js';
+import type { HtmlEntry, RenderedRecord } from './render-record.js';
 import type { BulkTrailer, RecordWriter } from './writers.js';
 
 export class HtmlCollector implements RecordWriter {
-  private readonly kept: BulkRecordResult[] = [];
+  readonly needs = 'html' as const;
+  private readonly kept: HtmlEntry[] = [];
   flaggedCount = 0;
 
   constructor(
@@ -21,32 +21,51 @@ export class HtmlCollector implements RecordWriter {
     private readonly maxDepictions = 2_000,
   ) {}
 
-  async write(r: BulkRecordResult): Promise<void> {
-    if (!r.findings.some((f) => !f.waived)) return;
+  async write(r: RenderedRecord): Promise<void> {
+    if (!r.html) return;
     this.flaggedCount++;
-    if (this.kept.length < this.maxRecords) this.kept.push(r);
+    if (this.kept.length < this.maxRecords) this.kept.push(r.html);
   }
 
   async finish(t: BulkTrailer): Promise<void> {
-    const depictions = new Map<number, string>();
-    this.kept.slice(0, this.maxDepictions).forEach((r, i) => {
-      if (!r.structure_text) return;
-      const read = readStructure(r.structure_text, { format: r.structure_text.includes('\n') ? 'molfile' : 'smiles' });
-      if (!read.ok) return;
-      const labels = (r.computed?.units ?? [])
-        .filter((u) => u.label)
-        .flatMap((u) => u.atoms.map((a) => ({ atom: a - 1, text: u.label as string })));
-      const svg = depict(read.structure, labels, { id: `d${i}` });
-      if (svg) depictions.set(i, svg);
-    });
-    const result: AuditResult = { tool: t.tool, caution: t.caution, summary: t.summary, records: this.kept };
+    const rows: (HtmlRow & { svg: string | null })[] = this.kept.map((e, i) => ({
+      ...e.row,
+      svg: i < this.maxDepictions ? drawing(e, i) : null,
+    }));
     const notes = [
       `${t.summary.records} records audited${t.shard ? ` (shard ${t.shard})` : ''}; ${this.flaggedCount} flagged.`,
     ];
-    if (this.flaggedCount > this.kept.length) notes.push(`Only the first ${this.kept.length} flagged records are listed; see the JSON output for all.`);
-    if (this.kept.length > this.maxDepictions) notes.push(`Depictions are drawn for the first ${this.maxDepictions} flagged records.`);
-    for (const [w, e] of t.vocabulary.mapped) notes.push(`legacy form word "${w}" read as ${e.form} (${e.count} records)`);
-    for (const [w, n] of t.vocabulary.notUnderstood) notes.push(`form word "${w}" not understood (${n} records; audited as unknown)`);
-    writeFileSync(this.path, renderHtml(result, { depictions, notes, title: 'stereogate bulk audit' }));
+    if (this.flaggedCount > this.kept.length)
+      notes.push(
+        `Only the first ${this.kept.length} flagged records are listed; see the JSON output for all.`,
+      );
+    if (this.kept.length > this.maxDepictions)
+      notes.push(`Depictions are drawn for the first ${this.maxDepictions} flagged records.`);
+    for (const [w, e] of t.vocabulary.mapped)
+      notes.push(`legacy form word "${w}" read as ${e.form} (${e.count} records)`);
+    for (const [w, n] of t.vocabulary.notUnderstood)
+      notes.push(`form word "${w}" not understood (${n} records; audited as unknown)`);
+    const page = renderHtmlPage(rows, {
+      tool: t.tool,
+      caution: t.caution,
+      summary: t.summary,
+      byCheck: t.byCheck,
+      flaggedTotal: this.flaggedCount,
+      notes,
+      title: 'stereogate bulk audit',
+    });
+    writeFileSync(this.path, page);
   }
+}
+
+/** The depiction of a kept record with our CIP labels at the atoms, or null when it cannot be drawn. */
+function drawing(e: HtmlEntry, i: number): string | null {
+  if (!e.structure) return null;
+  const read = readStructure(e.structure, { format: e.structure.includes('\n') ? 'molfile' : 'smiles' });
+  if (!read.ok) return null;
+  return depict(
+    read.structure,
+    e.labels.map((l) => ({ atom: l.atom - 1, text: l.text })),
+    { id: `d${i}` },
+  );
 }

@@ -38,36 +38,36 @@ export const DEFAULT_COLUMNS: Required<Omit<BulkMapping, 'vocabulary'>> = {
  * abbreviate on labels and in notebooks; extend per registry with `vocabulary` in the config.
  */
 const BUILT_IN: Record<string, StereoForm> = {
-  'rac': 'racemate',
-  'racemic': 'racemate',
-  'racemate': 'racemate',
+  rac: 'racemate',
+  racemic: 'racemate',
+  racemate: 'racemate',
   '(+/-)': 'racemate',
   '+/-': 'racemate',
   '(±)': 'racemate',
   '±': 'racemate',
-  'dl': 'racemate',
-  'meso': 'meso',
-  'achiral': 'achiral',
+  dl: 'racemate',
+  meso: 'meso',
+  achiral: 'achiral',
   'no stereo': 'achiral',
   'not chiral': 'achiral',
   'single enantiomer': 'single-enantiomer',
-  'enantiopure': 'single-enantiomer',
+  enantiopure: 'single-enantiomer',
   'enantiomerically pure': 'single-enantiomer',
-  'homochiral': 'single-enantiomer',
-  'abs': 'single-enantiomer',
-  'absolute': 'single-enantiomer',
-  'enantioenriched': 'enantioenriched',
-  'scalemic': 'enantioenriched',
-  'enriched': 'enantioenriched',
+  homochiral: 'single-enantiomer',
+  abs: 'single-enantiomer',
+  absolute: 'single-enantiomer',
+  enantioenriched: 'enantioenriched',
+  scalemic: 'enantioenriched',
+  enriched: 'enantioenriched',
   'single diastereomer': 'single-diastereomer',
-  'diastereomer': 'single-diastereomer',
+  diastereomer: 'single-diastereomer',
   'diastereomerically pure': 'single-diastereomer',
   'diastereomer mixture': 'diastereomer-mixture',
   'mixture of diastereomers': 'diastereomer-mixture',
-  'dr': 'diastereomer-mixture',
-  'unknown': 'unknown',
-  'undefined': 'unknown',
-  'unk': 'unknown',
+  dr: 'diastereomer-mixture',
+  unknown: 'unknown',
+  undefined: 'unknown',
+  unk: 'unknown',
   '?': 'unknown',
 };
 
@@ -78,10 +78,16 @@ export interface VocabularyResult {
 }
 
 function normalise(word: string): string {
-  return word.trim().toLowerCase().replace(/[_\s]+/g, ' ').replace(/\s*-\s*(?=[a-z])/g, ' ');
+  return word
+    .trim()
+    .toLowerCase()
+    .replace(/[_\s]+/g, ' ')
+    .replace(/\s*-\s*(?=[a-z])/g, ' ');
 }
 
-export function makeVocabulary(extra: Record<string, StereoForm> = {}): (word: string | undefined) => VocabularyResult {
+export function makeVocabulary(
+  extra: Record<string, StereoForm> = {},
+): (word: string | undefined) => VocabularyResult {
   const table = new Map<string, StereoForm>();
   for (const [k, v] of Object.entries(BUILT_IN)) table.set(normalise(k), v);
   for (const [k, v] of Object.entries(extra)) table.set(normalise(k), v);
@@ -111,7 +117,10 @@ export class VocabularyTally {
     }
   }
 
-  merge(other: { mapped: [string, { form: StereoForm; count: number }][]; notUnderstood: [string, number][] }): void {
+  merge(other: {
+    mapped: [string, { form: StereoForm; count: number }][];
+    notUnderstood: [string, number][];
+  }): void {
     for (const [w, e] of other.mapped) {
       const mine = this.mapped.get(w) ?? { form: e.form, count: 0 };
       mine.count += e.count;

@@ -6,7 +6,9 @@ import { createReadStream } from 'node:fs';
 import { createInterface } from 'node:readline';
 import type { BulkRecordResult } from './audit-item.js';
 import { BulkAccumulator } from './accumulate.js';
-import type { BulkTrailer, RecordWriter } from './writers.js';
+import { makeRenderer, type RenderedRecord } from './render-record.js';
+import { bulkSarifRules } from './sarif-writer.js';
+import { wantsOf, type BulkTrailer, type RecordWriter } from './writers.js';
 
 export class MergeError extends Error {}
 
@@ -33,8 +35,10 @@ async function* readShard(path: string): AsyncGenerator<BulkRecordResult | BulkT
 export async function mergeShards(
   paths: string[],
   writers: RecordWriter[],
-  onRecord?: (r: BulkRecordResult) => void,
+  onRecord?: (r: RenderedRecord) => void,
 ): Promise<BulkTrailer> {
+  const { CHECKS } = await import('../checks/index.js');
+  const render = makeRenderer(wantsOf(writers), bulkSarifRules(CHECKS));
   const streams = paths.map((p) => readShard(p));
   const heads: (BulkRecordResult | null)[] = [];
   const shards: (string | null)[] = paths.map(() => null);
@@ -54,24 +58,32 @@ export async function mergeShards(
   let lastSeq = 0;
   for (;;) {
     let best = -1;
-    for (let i = 0; i < heads.length; i++) if (heads[i] && (best < 0 || heads[i]!.seq < heads[best]!.seq)) best = i;
+    for (let i = 0; i < heads.length; i++)
+      if (heads[i] && (best < 0 || heads[i]!.seq < heads[best]!.seq)) best = i;
     if (best < 0) break;
     const r = heads[best]!;
-    if (r.seq === lastSeq) throw new MergeError(`record ${r.seq} appears in more than one shard output (${paths[best]})`);
+    if (r.seq === lastSeq)
+      throw new MergeError(`record ${r.seq} appears in more than one shard output (${paths[best]})`);
     lastSeq = r.seq;
-    acc.add(r);
-    for (const w of writers) await w.write(r);
-    onRecord?.(r);
+    const rendered = render(r);
+    acc.add(rendered.tally);
+    for (const w of writers) await w.write(rendered);
+    onRecord?.(rendered);
     heads[best] = await advance(best);
   }
   const missing = shards.map((s, i) => (s === null ? paths[i] : null)).filter(Boolean);
-  if (missing.length > 0) throw new MergeError(`no summary line in ${missing.join(', ')} (an unfinished shard run?)`);
+  if (missing.length > 0)
+    throw new MergeError(`no summary line in ${missing.join(', ')} (an unfinished shard run?)`);
   const counts = new Set(shards.map((s) => s!.split('/')[1]));
-  if (counts.size > 1) throw new MergeError(`the shard outputs come from different splits: ${shards.join(', ')}`);
+  if (counts.size > 1)
+    throw new MergeError(`the shard outputs come from different splits: ${shards.join(', ')}`);
   const n = Number([...counts][0]);
   const have = new Set(shards.map((s) => Number(s!.split('/')[0])));
   const absent = Array.from({ length: n }, (_, i) => i + 1).filter((i) => !have.has(i));
-  if (absent.length > 0) throw new MergeError(`shard${absent.length > 1 ? 's' : ''} ${absent.map((i) => `${i}/${n}`).join(', ')} missing from the merge`);
+  if (absent.length > 0)
+    throw new MergeError(
+      `shard${absent.length > 1 ? 's' : ''} ${absent.map((i) => `${i}/${n}`).join(', ')} missing from the merge`,
+    );
   const trailer = acc.trailer(null);
   for (const w of writers) await w.finish(trailer);
   return trailer;

@@ -25,7 +25,8 @@ export function makeProgress(
     const bar = new cliProgress.SingleBar(
       {
         stream,
-        format: ' auditing |{bar}| {percentage}% | {value}/{total} records | {rate} rec/s | {eta_formatted} left',
+        format:
+          ' auditing |{bar}| {percentage}% | {value}/{total} records | {rate} rec/s | {eta_formatted} left',
         barCompleteChar: '\u2588',
         barIncompleteChar: '\u2591',
         hideCursor: true,

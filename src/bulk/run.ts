@@ -7,13 +7,15 @@ import { createReadStream } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import type { AuditConfig } from '../checks/types.js';
 import { auditItem, type BulkRecordResult } from './audit-item.js';
-import { makeItemContext } from './context.js';
+import { makeItemContext, type WorkerSetup } from './context.js';
 import type { BulkMapping } from './mapping.js';
 import { BulkAccumulator } from './accumulate.js';
-import { mapOrdered } from './pool.js';
+import { mapOrdered, type PoolStats } from './pool.js';
 import { makeProgress, type ProgressMode } from './progress.js';
 import { formatOf, readItems, shardFilter, type BulkItem } from './sources.js';
-import type { BulkTrailer, RecordWriter } from './writers.js';
+import { makeRenderer, type RenderedRecord } from './render-record.js';
+import { bulkSarifRules } from './sarif-writer.js';
+import { wantsOf, type BulkTrailer, type RecordWriter } from './writers.js';
 
 export interface BulkOptions {
   inputs: string[];
@@ -26,8 +28,12 @@ export interface BulkOptions {
   timeoutMs?: number;
   progress?: ProgressMode;
   writers: RecordWriter[];
-  /** Called for every result in order (e.g. to keep flagged records for the HTML report). */
-  onRecord?: (r: BulkRecordResult) => void;
+  /** Items per message to a worker (default 16). */
+  batchSize?: number;
+  /** Pool accounting at the end of the run (items read ahead, in flight, buffered: the memory window). */
+  onPoolStats?: (stats: PoolStats) => void;
+  /** Called for every rendered record in order. */
+  onRecord?: (r: RenderedRecord) => void;
 }
 
 export function isBulkInput(path: string): boolean {
@@ -70,7 +76,11 @@ async function* allItems(inputs: string[]): AsyncGenerator<BulkItem & { seq: num
   for (const path of inputs) for await (const item of readItems(path)) yield { ...item, seq: ++seq };
 }
 
-export function timeoutResult(item: BulkItem & { seq: number }, limitMs: number, crashed: string | null): BulkRecordResult {
+export function timeoutResult(
+  item: BulkItem & { seq: number },
+  limitMs: number,
+  crashed: string | null,
+): BulkRecordResult {
   const message = crashed
     ? `the audit of this record crashed its worker (${crashed}); it was not audited, the run went on`
     : `the audit of this record took longer than the ${Math.round(limitMs / 1000)} s limit; it was stopped and the run went on`;
@@ -84,7 +94,9 @@ export function timeoutResult(item: BulkItem & { seq: number }, limitMs: number,
         check: 'record-time-limit',
         messageId: crashed ? 'worker-crashed' : 'time-limit-exceeded',
         severity: 'error',
-        message: message + ` (record ${item.record}, line ${item.line}). Audit it on its own with a longer --record-timeout, or simplify the structure.`,
+        message:
+          message +
+          ` (record ${item.record}, line ${item.line}). Audit it on its own with a longer --record-timeout, or simplify the structure.`,
         data: { record: item.record, line: item.line, limit_ms: limitMs },
         line: item.line,
         field: null,
@@ -115,28 +127,36 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
     if (opts.shard) total = Math.ceil(total / opts.shard.count);
   }
   const progress = makeProgress(progressMode, total);
-  const setup = { mapping: opts.mapping, config: opts.config };
+  const wants = wantsOf(opts.writers);
+  const setup: WorkerSetup = { mapping: opts.mapping, config: opts.config, wants };
   const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
   const script = new URL(`./worker${ext}`, import.meta.url);
-  let inline: ((item: BulkItem & { seq: number }) => BulkRecordResult) | undefined;
+  // Time-limit and crash results are made here, so this thread renders them too (same rules as the workers).
+  const { CHECKS } = await import('../checks/index.js');
+  const render = makeRenderer(wants, bulkSarifRules(CHECKS));
+  let inline: ((item: BulkItem & { seq: number }) => RenderedRecord) | undefined;
   if (workers === 0) {
     const ctx = await makeItemContext(setup);
-    inline = (item) => auditItem(item, ctx);
+    inline = (item) => ctx.render(auditItem(item, ctx));
   }
   const acc = new BulkAccumulator();
-  const results = mapOrdered<BulkItem & { seq: number }, BulkRecordResult>(shardFilter(allItems(opts.inputs), opts.shard ?? null), {
-    workers,
-    script,
-    workerData: setup,
-    timeoutMs,
-    onTimeout: (item) => timeoutResult(item, timeoutMs, null),
-    onCrash: (item, _i, error) => timeoutResult(item, timeoutMs, error),
-    inline,
-    batchSize: 16,
-  });
+  const results = mapOrdered<BulkItem & { seq: number }, RenderedRecord>(
+    shardFilter(allItems(opts.inputs), opts.shard ?? null),
+    {
+      workers,
+      script,
+      workerData: setup,
+      timeoutMs,
+      onTimeout: (item) => render(timeoutResult(item, timeoutMs, null)),
+      onCrash: (item, _i, error) => render(timeoutResult(item, timeoutMs, error)),
+      inline,
+      batchSize: opts.batchSize ?? 16,
+      onStats: opts.onPoolStats,
+    },
+  );
   try {
     for await (const r of results) {
-      acc.add(r);
+      acc.add(r.tally);
       for (const w of opts.writers) await w.write(r);
       opts.onRecord?.(r);
       progress.tick();

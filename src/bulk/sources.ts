@@ -52,7 +52,9 @@ export async function* readSdItems(path: string): AsyncGenerator<BulkItem> {
         record,
         line: startLine,
         text,
-        splitProblem: text.includes(REPLACEMENT) ? 'the record is not valid UTF-8 text (bad bytes replaced)' : undefined,
+        splitProblem: text.includes(REPLACEMENT)
+          ? 'the record is not valid UTF-8 text (bad bytes replaced)'
+          : undefined,
       };
       lines = [];
       continue;
@@ -87,7 +89,10 @@ export async function* readDelimitedItems(path: string, delimiter: ',' | '\t'): 
     }),
   );
   let record = 0;
-  for await (const row of parser as AsyncIterable<{ record: Record<string, string>; info: { lines: number; invalid_field_length: number } }>) {
+  for await (const row of parser as AsyncIterable<{
+    record: Record<string, string>;
+    info: { lines: number; invalid_field_length: number };
+  }>) {
     record++;
     const fields = row.record;
     const values = Object.values(fields).join('');

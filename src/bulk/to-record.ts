@@ -27,14 +27,23 @@ export function field(fields: Record<string, string>, name: string | undefined):
 
 /** "99.5", "99.5 %", "99,5" -> 99.5; null when not a number. */
 export function parseNumber(text: string): number | null {
-  const t = text.trim().replace(/%$/, '').trim().replace(/^\+/, '').replace(/[\u2212\u2013]/g, '-').replace(/,(?=\d+$)/, '.');
+  const t = text
+    .trim()
+    .replace(/%$/, '')
+    .trim()
+    .replace(/^\+/, '')
+    .replace(/[\u2212\u2013]/g, '-')
+    .replace(/,(?=\d+$)/, '.');
   if (!/^-?\d+(\.\d+)?$/.test(t)) return null;
   return Number(t);
 }
 
 /** "+12.3", "−5.1 (c 1.0, CHCl3)", "[α]D −5.1" -> the signed number before any bracket; null otherwise. */
 export function parseRotation(text: string): number | null {
-  const t = text.replace(/\[α\]\s*\S*/u, '').replace(/\(.*$/, '').trim();
+  const t = text
+    .replace(/\[α\]\s*\S*/u, '')
+    .replace(/\(.*$/, '')
+    .trim();
   return parseNumber(t.replace(/°$/, ''));
 }
 
@@ -45,7 +54,10 @@ export function toRecord(
   vocabulary: (word: string | undefined) => VocabularyResult,
   molfileText: string | null,
 ): ConvertedRecord {
-  const col = { ...DEFAULT_COLUMNS, ...Object.fromEntries(Object.entries(mapping).filter(([, v]) => typeof v === 'string')) };
+  const col = {
+    ...DEFAULT_COLUMNS,
+    ...Object.fromEntries(Object.entries(mapping).filter(([, v]) => typeof v === 'string')),
+  };
   const problems: ConvertedRecord['problems'] = [];
   const idText = field(fields, col.id)?.trim();
   const id = idText && idText !== '' ? idText : fallbackId;
@@ -53,8 +65,10 @@ export function toRecord(
   let structureText: string | null = molfileText;
   if (structureText === null) {
     const s = field(fields, col.structure);
-    if (s === undefined) problems.push({ message: `no structure column '${col.structure}' in this row`, path: 'structure' });
-    else if (s.trim() === '') problems.push({ message: `the structure column '${col.structure}' is empty`, path: 'structure' });
+    if (s === undefined)
+      problems.push({ message: `no structure column '${col.structure}' in this row`, path: 'structure' });
+    else if (s.trim() === '')
+      problems.push({ message: `the structure column '${col.structure}' is empty`, path: 'structure' });
     else structureText = s.trim();
   }
 
@@ -80,13 +94,18 @@ export function toRecord(
   const ee = field(fields, col.ee)?.trim();
   if (ee) {
     const v = parseNumber(ee);
-    if (v === null || v < 0 || v > 100) problems.push({ message: `ee '${ee}' is not a percentage between 0 and 100`, path: 'stereo.ee' });
+    if (v === null || v < 0 || v > 100)
+      problems.push({ message: `ee '${ee}' is not a percentage between 0 and 100`, path: 'stereo.ee' });
     else record.stereo.ee = v;
   }
   const rot = field(fields, col.rotation)?.trim();
   if (rot) {
     const v = parseRotation(rot);
-    if (v === null) problems.push({ message: `rotation '${rot}' has no number stereogate can read`, path: 'stereo.rotation' });
+    if (v === null)
+      problems.push({
+        message: `rotation '${rot}' has no number stereogate can read`,
+        path: 'stereo.rotation',
+      });
     else record.stereo.rotation = { value: v };
   }
   return { record, structureText, formWord: formWordRaw?.trim() || null, formHow: understood.how, problems };

@@ -1,12 +1,17 @@
-/** Worker thread of the bulk audit: loads the engine and the checks once, then audits items as they come. */
-import { auditItem, type ItemContext } from './audit-item.js';
-import { makeItemContext, type WorkerSetup } from './context.js';
+/**
+ * Worker thread of the bulk audit: loads the engine and the checks once, then audits items as they come and
+ * hands back each record already rendered for the outputs (a few strings: cheap to pass to the main thread).
+ */
+import { auditItem } from './audit-item.js';
+import { makeItemContext, type BulkContext, type WorkerSetup } from './context.js';
+import type { RenderedRecord } from './render-record.js';
 import type { BulkItem } from './sources.js';
 import { serveWorker } from './worker-entry.js';
 
-let ready: Promise<ItemContext> | null = null;
+let ready: Promise<BulkContext> | null = null;
 
-serveWorker<BulkItem & { seq: number }, unknown>(async (item, data) => {
+serveWorker<BulkItem & { seq: number }, RenderedRecord>(async (item, data) => {
   ready ??= makeItemContext(data as WorkerSetup);
-  return auditItem(item, await ready);
+  const ctx = await ready;
+  return ctx.render(auditItem(item, ctx));
 });

@@ -5,7 +5,7 @@
  */
 import { createWriteStream, type WriteStream } from 'node:fs';
 import type { AuditSummary } from '../audit/types.js';
-import type { BulkRecordResult } from './audit-item.js';
+import { CSV_HEADER, jsonOf, type RenderedRecord, type RenderWants } from './render-record.js';
 
 export interface BulkTrailer {
   kind: 'summary';
@@ -18,22 +18,30 @@ export interface BulkTrailer {
 }
 
 export interface RecordWriter {
-  write(r: BulkRecordResult): Promise<void>;
+  /** The optional rendering this writer reads (made in the workers only when some writer asks for it). */
+  needs?: keyof RenderWants;
+  write(r: RenderedRecord): Promise<void>;
   finish(t: BulkTrailer): Promise<void>;
 }
 
-function drainWrite(stream: WriteStream, text: string): Promise<void> {
+/** The optional renderings the given writers read. */
+export function wantsOf(writers: readonly RecordWriter[]): RenderWants {
+  const has = (n: keyof RenderWants) => writers.some((w) => w.needs === n);
+  return { csv: has('csv'), sarif: has('sarif'), html: has('html') };
+}
+
+export function drainWrite(stream: WriteStream, text: string): Promise<void> {
   return stream.write(text) ? Promise.resolve() : new Promise((res) => stream.once('drain', () => res()));
 }
 
-function close(stream: WriteStream): Promise<void> {
+export function close(stream: WriteStream): Promise<void> {
   return new Promise((res, rej) => stream.end((err?: Error | null) => (err ? rej(err) : res())));
 }
 
 export function jsonlWriter(path: string): RecordWriter {
   const s = createWriteStream(path, 'utf8');
   return {
-    write: (r) => drainWrite(s, JSON.stringify({ kind: 'record', ...r }) + '\n'),
+    write: (r) => drainWrite(s, r.jsonl + '\n'),
     finish: async (t) => {
       await drainWrite(s, JSON.stringify(t) + '\n');
       await close(s);
@@ -55,7 +63,7 @@ export function jsonWriter(path: string): RecordWriter {
   return {
     write: async (r) => {
       await start();
-      await drainWrite(s, (first ? '' : ',\n') + JSON.stringify(r));
+      await drainWrite(s, (first ? '' : ',\n') + jsonOf(r));
       first = false;
     },
     finish: async (t) => {
@@ -70,45 +78,20 @@ export function jsonWriter(path: string): RecordWriter {
   };
 }
 
-export function csvCell(v: string | number | null): string {
-  const t = v === null ? '' : String(v);
-  // Quote always-safe; neutralise spreadsheet formula injection (cells starting with = + - @ tab CR).
-  const safe = /^[=+\-@\t\r]/.test(t) ? `'${t}` : t;
-  return `"${safe.replace(/"/g, '""')}"`;
-}
-
 export function csvWriter(path: string): RecordWriter {
   const s = createWriteStream(path, 'utf8');
   let header = false;
   return {
+    needs: 'csv',
     write: async (r) => {
       if (!header) {
         header = true;
-        await drainWrite(s, 'seq,source,record,line,id,declared_form,form_word,chiral,meso,stereo_units,undefined_units,errors,warnings,notes,waived,checks\n');
+        await drainWrite(s, CSV_HEADER + '\n');
       }
-      const open = r.findings.filter((f) => !f.waived);
-      const c = r.computed;
-      const row = [
-        r.seq,
-        r.origin.source,
-        r.origin.record,
-        r.origin.line,
-        r.id,
-        r.declared.form,
-        r.form_word.word,
-        c ? (c.chiral === null ? 'open' : String(c.chiral)) : null,
-        c ? (c.meso === null ? 'open' : String(c.meso)) : null,
-        c ? c.units.length : null,
-        c ? c.undefined : null,
-        open.filter((f) => f.severity === 'error').length,
-        open.filter((f) => f.severity === 'warning').length,
-        open.filter((f) => f.severity === 'note').length,
-        r.findings.length - open.length,
-        [...new Set(open.map((f) => f.check))].join(' '),
-      ];
-      await drainWrite(s, row.map(csvCell).join(',') + '\n');
+      await drainWrite(s, (r.csv ?? '') + '\n');
     },
     finish: async () => {
+      if (!header) await drainWrite(s, CSV_HEADER + '\n');
       await close(s);
     },
   };

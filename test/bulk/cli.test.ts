@@ -203,7 +203,9 @@ describe('bulk audit command line: exit codes, outputs, summary', () => {
 describe('stereogate merge through the CLI entry', () => {
   it('merges shard outputs into the single-run output, exit code by --fail-on; refuses an incomplete set', async () => {
     const single = join(dir, 'single.jsonl');
-    await bulkAudit([csv, ...base, '--jsonl', single], memoryIo());
+    const outs = (stem: string) =>
+      ['json', 'csv', 'sarif', 'html'].flatMap((k) => [`--${k}`, join(dir, `${stem}.${k}`)]);
+    await bulkAudit([csv, ...base, '--jsonl', single, ...outs('single')], memoryIo());
     const shards = [1, 2].map((i) => join(dir, `shard-${i}.jsonl`));
     for (const [i, p] of shards.entries()) {
       const io = memoryIo();
@@ -212,8 +214,14 @@ describe('stereogate merge through the CLI entry', () => {
     }
     const merged = join(dir, 'merged.jsonl');
     const io = memoryIo();
-    expect(await run(['merge', shards[1], shards[0], '--jsonl', merged], io)).toBe(1);
+    expect(await run(['merge', shards[1], shards[0], '--jsonl', merged, ...outs('merged')], io)).toBe(1);
     expect(readFileSync(merged, 'utf8')).toBe(readFileSync(single, 'utf8'));
+    // every other output of the merge is byte for byte that of the single run
+    for (const k of ['json', 'csv', 'sarif', 'html']) {
+      expect(readFileSync(join(dir, `merged.${k}`), 'utf8'), k).toBe(
+        readFileSync(join(dir, `single.${k}`), 'utf8'),
+      );
+    }
     expect(io.stdout.join('\n')).toMatch(/stereogate bulk audit: 6 records/);
     expect(await run(['merge', ...shards, '--fail-on', 'never'], memoryIo())).toBe(0);
     const partial = memoryIo();

@@ -23,16 +23,22 @@ export interface HtmlReportOptions {
 }
 
 export function escapeHtml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string);
+  return text.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string,
+  );
 }
 
 /** JSON safe inside a <script> element: no `</script>`, no `<!--`. */
 function scriptJson(value: unknown): string {
-  return JSON.stringify(value).replace(/</g, '\\u003c').replace(/\u2028/g, '\\u2028').replace(/\u2029/g, '\\u2029');
+  return JSON.stringify(value)
+    .replace(/</g, '\\u003c')
+    .replace(/\u2028/g, '\\u2028')
+    .replace(/\u2029/g, '\\u2029');
 }
 
-interface RowData {
-  i: number;
+/** One flagged record as the page shows it (plain data; the page script builds the DOM from it). */
+export interface HtmlRow {
   id: string;
   file: string;
   form: string;
@@ -40,9 +46,16 @@ interface RowData {
   computed: string;
   labels: string;
   worst: 'error' | 'warning' | 'note';
-  findings: { check: string; severity: string; message: string; line: number | null; waived: string | null }[];
-  svg: string | null;
+  findings: {
+    check: string;
+    severity: string;
+    message: string;
+    line: number | null;
+    waived: string | null;
+  }[];
 }
+
+export type CheckCounts = Record<string, { error: number; warning: number; note: number; waived: number }>;
 
 function computedSummary(r: RecordResult): { text: string; labels: string } {
   const c = r.computed;
@@ -51,7 +64,9 @@ function computedSummary(r: RecordResult): { text: string; labels: string } {
   const parts = [chir];
   if (c.meso) parts.push('meso');
   parts.push(`${c.units.length} stereo unit${c.units.length === 1 ? '' : 's'}, ${c.undefined} undefined`);
-  parts.push(`${c.stereoisomers.total} stereoisomers (${c.stereoisomers.chiral} chiral, ${c.stereoisomers.achiral} achiral)`);
+  parts.push(
+    `${c.stereoisomers.total} stereoisomers (${c.stereoisomers.chiral} chiral, ${c.stereoisomers.achiral} achiral)`,
+  );
   const labels = c.units
     .filter((u) => u.label)
     .map((u) => `${u.atoms.join('=')}${u.label}`)
@@ -61,43 +76,81 @@ function computedSummary(r: RecordResult): { text: string; labels: string } {
 
 const RANK = { error: 0, warning: 1, note: 2 } as const;
 
-export function renderHtml(result: AuditResult, opts: HtmlReportOptions = {}): string {
-  const rows: RowData[] = [];
-  const byCheck = new Map<string, { error: number; warning: number; note: number; waived: number }>();
-  result.records.forEach((r, i) => {
-    const open = r.findings.filter((f) => !f.waived);
+/** The page row of a record, or null when it has no open finding (only flagged records are listed). */
+export function htmlRow(r: RecordResult): HtmlRow | null {
+  const open = r.findings.filter((f) => !f.waived);
+  if (open.length === 0) return null;
+  const worst = open.reduce<'error' | 'warning' | 'note'>(
+    (w, f) => (RANK[f.severity] < RANK[w] ? f.severity : w),
+    'note',
+  );
+  const cs = computedSummary(r);
+  return {
+    id: r.id ?? '(no id)',
+    file: r.file,
+    form: r.declared.form ?? '(none)',
+    descriptors: r.declared.descriptors ?? '',
+    computed: cs.text,
+    labels: cs.labels,
+    worst,
+    findings: r.findings.map((f) => ({
+      check: f.check,
+      severity: f.severity,
+      message: f.message,
+      line: f.line,
+      waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` : null,
+    })),
+  };
+}
+
+/** Counts by check over all records (waived findings counted apart). */
+export function countByCheck(records: readonly RecordResult[]): CheckCounts {
+  const byCheck: CheckCounts = {};
+  for (const r of records) {
     for (const f of r.findings) {
-      const e = byCheck.get(f.check) ?? { error: 0, warning: 0, note: 0, waived: 0 };
+      const e = (byCheck[f.check] ??= { error: 0, warning: 0, note: 0, waived: 0 });
       if (f.waived) e.waived++;
       else e[f.severity]++;
-      byCheck.set(f.check, e);
     }
-    if (open.length === 0) return;
-    const worst = open.reduce<'error' | 'warning' | 'note'>((w, f) => (RANK[f.severity] < RANK[w] ? f.severity : w), 'note');
-    const cs = computedSummary(r);
-    const svg = opts.depictions?.get(i) ?? null;
-    rows.push({
-      i,
-      id: r.id ?? '(no id)',
-      file: r.file,
-      form: r.declared.form ?? '(none)',
-      descriptors: r.declared.descriptors ?? '',
-      computed: cs.text,
-      labels: cs.labels,
-      worst,
-      findings: r.findings.map((f) => ({
-        check: f.check,
-        severity: f.severity,
-        message: f.message,
-        line: f.line,
-        waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` : null,
-      })),
-      svg: svg ? `data:image/svg+xml;base64,${Buffer.from(svg, 'utf8').toString('base64')}` : null,
-    });
+  }
+  return byCheck;
+}
+
+export function renderHtml(result: AuditResult, opts: HtmlReportOptions = {}): string {
+  const rows: (HtmlRow & { svg?: string | null })[] = [];
+  result.records.forEach((r, i) => {
+    const row = htmlRow(r);
+    if (row) rows.push({ ...row, svg: opts.depictions?.get(i) ?? null });
   });
-  const checks = [...byCheck.entries()].sort((a, b) => (a[0] < b[0] ? -1 : 1));
+  return renderHtmlPage(rows, {
+    tool: result.tool,
+    caution: result.caution,
+    summary: result.summary,
+    byCheck: countByCheck(result.records),
+    ...opts,
+  });
+}
+
+export interface HtmlPage extends Omit<HtmlReportOptions, 'depictions'> {
+  tool: AuditResult['tool'];
+  caution: string;
+  summary: AuditResult['summary'];
+  byCheck: CheckCounts;
+  /** Flagged records in all, when only some are listed (a capped bulk report). */
+  flaggedTotal?: number;
+}
+
+/** The page from rows already made (bulk runs keep rows, not whole results); `svg` is the depiction, if any. */
+export function renderHtmlPage(rows: readonly (HtmlRow & { svg?: string | null })[], page: HtmlPage): string {
+  const opts = page;
+  const data = rows.map((r, i) => ({
+    ...r,
+    i,
+    svg: r.svg ? `data:image/svg+xml;base64,${Buffer.from(r.svg, 'utf8').toString('base64')}` : null,
+  }));
+  const checks = Object.entries(page.byCheck).sort((a, b) => (a[0] < b[0] ? -1 : 1));
   const title = opts.title ?? 'stereogate audit report';
-  const s = result.summary;
+  const s = page.summary;
   const countsRows = checks
     .map(
       ([check, c]) =>
@@ -118,8 +171,8 @@ export function renderHtml(result: AuditResult, opts: HtmlReportOptions = {}): s
 <body>
 <header>
 <h1>${escapeHtml(title)}</h1>
-<p class="meta">${escapeHtml(result.tool.name)} ${escapeHtml(result.tool.version)}${opts.generatedAt ? ` · ${escapeHtml(opts.generatedAt)}` : ''}</p>
-<p class="caution" role="note"><strong>Caution.</strong> ${escapeHtml(result.caution)}</p>
+<p class="meta">${escapeHtml(page.tool.name)} ${escapeHtml(page.tool.version)}${opts.generatedAt ? ` · ${escapeHtml(opts.generatedAt)}` : ''}</p>
+<p class="caution" role="note"><strong>Caution.</strong> ${escapeHtml(page.caution)}</p>
 ${notes ? `<ul class="notes">${notes}</ul>` : ''}
 </header>
 <section aria-label="summary" class="summary">
@@ -135,7 +188,11 @@ ${notes ? `<ul class="notes">${notes}</ul>` : ''}
 <tbody>${countsRows}</tbody></table>
 </section>
 <section aria-label="flagged records">
-<h2>Flagged records <span id="shown-count">${rows.length}</span> of ${rows.length}</h2>
+<h2>Flagged records <span id="shown-count">${rows.length}</span> of ${rows.length}${
+    page.flaggedTotal !== undefined && page.flaggedTotal > rows.length
+      ? ` listed (${page.flaggedTotal} flagged in all)`
+      : ''
+  }</h2>
 <form id="filters" onsubmit="return false">
 <label>search id <input id="search" type="search" placeholder="e.g. LX-00042" autocomplete="off"></label>
 <label>check <select id="filter-check"><option value="">all checks</option></select></label>
@@ -145,7 +202,7 @@ ${notes ? `<ul class="notes">${notes}</ul>` : ''}
 <div id="records"></div>
 <p id="empty" hidden>No flagged record matches these filters.</p>
 </section>
-<script type="application/json" id="report-data">${scriptJson(rows)}</script>
+<script type="application/json" id="report-data">${scriptJson(data)}</script>
 <script>${PAGE_SCRIPT}</script>
 </body>
 </html>

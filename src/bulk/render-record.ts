@@ -1,0 +1,135 @@
+/**
+ * One audited bulk record -> everything the outputs need, as strings and small numbers. This runs in the worker
+ * that audited the record, so a result crosses to the main thread as a few strings (cheap to copy) instead of a
+ * deep object graph (structured clone of the full facts cost about as much as the audit itself), and the main
+ * thread only writes. The merge of shard outputs renders the records it reads with the same function, so a
+ * merged output is byte for byte the output of a single run.
+ */
+import type { Severity } from '../audit/types.js';
+import type { CheckModule } from '../checks/types.js';
+import { sarifLog } from '../report/sarif.js';
+import { htmlRow, type HtmlRow } from '../report/html/render.js';
+import type { BulkRecordResult } from './audit-item.js';
+import type { VocabularyResult } from './mapping.js';
+
+/** Which optional renderings the run's outputs need (JSON Lines/JSON and the tally are always made). */
+export interface RenderWants {
+  csv: boolean;
+  sarif: boolean;
+  html: boolean;
+}
+
+export const NO_EXTRAS: RenderWants = { csv: false, sarif: false, html: false };
+
+/** What the totals need of a record: its findings' check, severity and waived flag, and its form word. */
+export interface Tally {
+  findings: [check: string, severity: Severity, waived: boolean][];
+  word: string | null;
+  how: VocabularyResult['how'];
+  form: string | null;
+}
+
+/** A flagged record for the HTML report: its row, and what to depict (drawn at the end, for the first few). */
+export interface HtmlEntry {
+  row: HtmlRow;
+  structure: string | null;
+  /** CIP labels at 1-based input atom numbers. */
+  labels: { atom: number; text: string }[];
+}
+
+export interface RenderedRecord {
+  seq: number;
+  /** The JSON Lines line, without the newline: {"kind":"record", …the whole result…}. */
+  jsonl: string;
+  tally: Tally;
+  csv?: string;
+  /** One SARIF result object (JSON text) per finding. */
+  sarif?: string[];
+  /** Only for flagged records. */
+  html?: HtmlEntry;
+}
+
+export const JSONL_PREFIX = '{"kind":"record",';
+
+/** The record in the audit's JSON (no `kind`), cut from its JSON Lines line without a second stringify. */
+export function jsonOf(r: RenderedRecord): string {
+  return '{' + r.jsonl.slice(JSONL_PREFIX.length);
+}
+
+export const CSV_HEADER =
+  'seq,source,record,line,id,declared_form,form_word,chiral,meso,stereo_units,undefined_units,errors,warnings,notes,waived,checks';
+
+export function csvCell(v: string | number | null): string {
+  const t = v === null ? '' : String(v);
+  // Quote always; neutralise spreadsheet formula injection (cells starting with = + - @ tab CR).
+  const safe = /^[=+\-@\t\r]/.test(t) ? `'${t}` : t;
+  return `"${safe.replace(/"/g, '""')}"`;
+}
+
+export function csvRow(r: BulkRecordResult): string {
+  const open = r.findings.filter((f) => !f.waived);
+  const c = r.computed;
+  const count = (s: Severity) => open.filter((f) => f.severity === s).length;
+  return [
+    r.seq,
+    r.origin.source,
+    r.origin.record,
+    r.origin.line,
+    r.id,
+    r.declared.form,
+    r.form_word.word,
+    c ? (c.chiral === null ? 'open' : String(c.chiral)) : null,
+    c ? (c.meso === null ? 'open' : String(c.meso)) : null,
+    c ? c.units.length : null,
+    c ? c.undefined : null,
+    count('error'),
+    count('warning'),
+    count('note'),
+    r.findings.length - open.length,
+    [...new Set(open.map((f) => f.check))].join(' '),
+  ]
+    .map(csvCell)
+    .join(',');
+}
+
+export type Renderer = (r: BulkRecordResult) => RenderedRecord;
+
+/**
+ * A renderer for the outputs asked for. `checks` is the full rule list of the SARIF log (the same list in the
+ * workers and in the main thread, so rule indexes agree).
+ */
+export function makeRenderer(wants: RenderWants, checks: readonly CheckModule[]): Renderer {
+  const tool = { name: 'stereogate' as const, version: '' };
+  const none = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  return (r) => {
+    const out: RenderedRecord = {
+      seq: r.seq,
+      jsonl: JSONL_PREFIX + JSON.stringify(r).slice(1),
+      tally: {
+        findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),
+        word: r.form_word.word,
+        how: r.form_word.how,
+        form: r.declared.form,
+      },
+    };
+    if (wants.csv) out.csv = csvRow(r);
+    if (wants.sarif && r.findings.length > 0) {
+      const log = sarifLog({ tool, records: [r], summary: none, caution: '' }, checks);
+      const results = (log.runs as { results: Record<string, unknown>[] }[])[0].results;
+      out.sarif = results.map((res) => {
+        (res.properties as Record<string, unknown>).record = r.origin.record;
+        return JSON.stringify(res);
+      });
+    }
+    if (wants.html) {
+      const row = htmlRow(r);
+      if (row) {
+        const labels = (r.computed?.units ?? [])
+          .filter((u) => u.label)
+          .flatMap((u) => u.atoms.map((a) => ({ atom: a, text: u.label as string })));
+        out.html = { row, structure: r.structure_text ?? null, labels };
+      }
+    }
+    return out;
+  };
+}
