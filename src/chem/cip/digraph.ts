@@ -16,11 +16,6 @@ export const H_ATOM = -1;
 export const PHANTOM = -2;
 
 /** Upper bound on nodes grown for one root, so pathological cages terminate (ties stay ties beyond it). */
-/** Rule 2 mass of a duplicate atom (Hanson et al. 2018): that of the duplicated atom. */
-export let DUPLICATE_MASS = (m: number): number => m;
-export function setDuplicateMass(f: (m: number) => number): void {
-  DUPLICATE_MASS = f;
-}
 
 export const NODE_BUDGET = 200_000;
 
@@ -78,7 +73,8 @@ export class Digraph {
     }
     if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
     if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
-    return new CipNode(this.nextId++, atom, g.z[atom], dup ? DUPLICATE_MASS(g.mass[atom]) : g.mass[atom], depth, dist, dup, parent);
+    // Rule 2: a duplicate carries the mass of the atom it duplicates (a mancude one the mean, see above)
+    return new CipNode(this.nextId++, atom, g.z[atom], g.mass[atom], depth, dist, dup, parent);
   }
 
   /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */

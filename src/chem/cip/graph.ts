@@ -197,7 +197,12 @@ function connectedWithout(g: CipGraph, p: number, q: number, skip1: number, skip
 
 /** Size of the smallest ring through the bond a-b, or 0 when there is none of at most `max` atoms. */
 export function ringSizeThrough(g: CipGraph, a: number, b: number, max: number): number {
-  const dist = new Map<number, number>([[a, 0]]);
+  if (seenBuf.length < g.n) {
+    seenBuf = new Int32Array(g.n * 2);
+    stamp = 0;
+  }
+  const mark = ++stamp;
+  seenBuf[a] = mark;
   let frontier = [a];
   for (let d = 0; frontier.length > 0 && d < max - 1; d++) {
     const next: number[] = [];
@@ -205,8 +210,8 @@ export function ringSizeThrough(g: CipGraph, a: number, b: number, max: number):
       for (const y of g.nbr[x]) {
         if (x === a && y === b) continue;
         if (y === b) return d + 2;
-        if (dist.has(y)) continue;
-        dist.set(y, d + 1);
+        if (seenBuf[y] === mark) continue;
+        seenBuf[y] = mark;
         next.push(y);
       }
     }
@@ -214,6 +219,9 @@ export function ringSizeThrough(g: CipGraph, a: number, b: number, max: number):
   }
   return 0;
 }
+
+let seenBuf = new Int32Array(256);
+let stamp = 0;
 
 export function mancudeOf(g: CipGraph): Mancude {
   if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);

@@ -13,7 +13,7 @@ import type { Structure } from '../types.js';
 
 export interface Mancude {
   /** Per bond key (a * n + b, both orders), whether the bond lies in a mancude ring. */
-  bond: Set<number>;
+  bond: PairSet;
   /** Mean atomic number for the duplicate of each mancude atom; 0 elsewhere. */
   dupZ: number[];
   /** Mean Rule 2 mass for the same duplicate (so an isotope label does not depend on the Kekulé form either). */
@@ -22,7 +22,7 @@ export interface Mancude {
 
 export function perceiveMancude(s: Structure, nbr: number[][], ord: number[][], mass: number[]): Mancude {
   const n = s.atoms.length;
-  const bond = new Set<number>();
+  const bond = new PairSet(n);
   const dupZ = new Array<number>(n).fill(0);
   const dupMass = new Array<number>(n).fill(0);
   if (!nbr.some((o, a) => ord[a].some((x, i) => x === 2 && o[i] > a))) return { bond, dupZ, dupMass };
@@ -42,7 +42,7 @@ export function perceiveMancude(s: Structure, nbr: number[][], ord: number[][], 
   // bonds on a cycle of π atoms: the conjugated (mancude) ring systems, whatever their size
   const piNbr = nbr.map((o, a) => (pi[a] ? o.filter((b) => pi[b] && ring.has(key(n, a, b))) : []));
   const piRing = ringBonds(n, piNbr);
-  for (const k of piRing) bond.add(k);
+  bond.addAll(piRing);
   for (let a = 0; a < n; a++) {
     if (!pi[a] || !piDouble(a)) continue;
     let sum = 0;
@@ -68,8 +68,8 @@ export function key(n: number, a: number, b: number): number {
 }
 
 /** Bonds that lie on a cycle (not bridges), both directions, by an iterative depth-first search. */
-function ringBonds(n: number, nbr: number[][]): Set<number> {
-  const out = new Set<number>();
+function ringBonds(n: number, nbr: number[][]): PairSet {
+  const out = new PairSet(n);
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   let t = 0;
@@ -105,4 +105,29 @@ function ringBonds(n: number, nbr: number[][]): Set<number> {
     }
   }
   return out;
+}
+
+/** A set of atom pairs (keys a * n + b): a byte table for ordinary molecules, a hash set for huge ones. */
+export class PairSet {
+  private readonly table: Uint8Array | null;
+  private readonly set: Set<number> | null;
+  size = 0;
+  constructor(n: number) {
+    this.table = n <= 512 ? new Uint8Array(n * n) : null;
+    this.set = this.table === null ? new Set<number>() : null;
+  }
+  has(k: number): boolean {
+    return this.table !== null ? this.table[k] === 1 : (this.set as Set<number>).has(k);
+  }
+  add(k: number): void {
+    if (this.has(k)) return;
+    this.size++;
+    if (this.table !== null) this.table[k] = 1;
+    else (this.set as Set<number>).add(k);
+  }
+  addAll(o: PairSet): void {
+    if (o.table !== null) {
+      for (let k = 0; k < o.table.length; k++) if (o.table[k] === 1) this.add(k);
+    } else for (const k of o.set as Set<number>) this.add(k);
+  }
 }

@@ -36,7 +36,7 @@ export function rule1b(n: CipNode): number {
   return -n.dist;
 }
 
-/** Rule 2 (P-92.3, Rule 2): higher atomic mass number precedes lower; duplicates count 0 (Hanson et al.). */
+/** Rule 2 (P-92.3, Rule 2): higher atomic mass number precedes lower; a duplicate has its atom's mass. */
 export function rule2(n: CipNode): number {
   return n.mass;
 }
