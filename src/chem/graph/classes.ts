@@ -1,7 +1,7 @@
 /**
  * Constitutional equivalence classes by iterative refinement of atom invariants (Morgan, J. Chem. Doc. 5
  * (1965) 107, in the exact partition-refinement form): atoms in one class cannot be told apart by any
- * combination of element, charge, isotope, hydrogens, degree, radical, ring/aromatic flags and the
+ * combination of element, charge, isotope, hydrogens, degree, radical, aromatic flag, smallest ring and the
  * same data of their neighbours, bond by bond. Topologically equivalent atoms always share a class; in rare
  * regular graphs refinement alone may leave inequivalent atoms together (the search in isomorphism.ts is exact).
  */
