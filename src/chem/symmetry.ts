@@ -91,9 +91,11 @@ export function unitGroup(p: Perception): UnitGroup {
  * the induced group is trivial and the search can be skipped.
  */
 function trivialOnUnits(p: Perception): boolean {
-  const size = new Map<number, number>();
-  for (let i = 0; i < p.classes.length; i++) size.set(p.classes[i], (size.get(p.classes[i]) ?? 0) + 1);
-  return p.units.every((u) => !u.equivalentPair && u.atoms.every((a) => size.get(p.classes[a]) === 1));
+  if (p.units.some((u) => u.equivalentPair)) return false;
+  const classes = p.classes;
+  const size = new Int32Array(classes.length + 1);
+  for (let i = 0; i < classes.length; i++) size[classes[i]]++;
+  return p.units.every((u) => u.atoms.every((a) => size[classes[a]] === 1));
 }
 
 function signature(perm: Int32Array, flip: Uint8Array): string {
