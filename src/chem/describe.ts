@@ -16,7 +16,14 @@ import { extractAtoms, normalize, type Normalized } from './normalize.js';
 import { perceive, type Perception } from './perceive.js';
 import { atomName } from './perceive-input.js';
 import type { State } from './perceive-units.js';
-import { chiralityOf, stereogenicIn, unitGroup, type Chirality, type UnitGroup } from './symmetry.js';
+import {
+  chiralityOf,
+  feasible,
+  stereogenicIn,
+  unitGroup,
+  type Chirality,
+  type UnitGroup,
+} from './symmetry.js';
 import { mirrorFacts } from './symmetry-evidence.js';
 import { listStereoisomers } from './isomers-list.js';
 import type { Structure } from './types.js';
@@ -48,7 +55,8 @@ export function analyse(input: Structure): Analysis {
   const defined = Uint8Array.from(p.units, (u) => (u.defined ? 1 : 0));
   const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
   for (let k = 0; k < m; k++) {
-    if (!reported[k] && p.units[k].defined) {
+    // 3D input states a configuration for every sp3 atom from its coordinates: nothing to remark on there.
+    if (!reported[k] && p.units[k].defined && p.structure.dimension !== 3) {
       p.remarks.push(
         `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`,
       );
@@ -67,11 +75,14 @@ function stereogenicSomewhere(g: UnitGroup, x: State, defined: Uint8Array, k: nu
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
   if (open.length > 10) return true;
   const y = Uint8Array.from(x);
+  let seenFeasible = false;
   for (let mask = 0; mask < 1 << open.length; mask++) {
     for (let b = 0; b < open.length; b++) y[open[b]] = (mask >> b) & 1;
+    if (!feasible(g, y)) continue;
+    seenFeasible = true;
     if (stereogenicIn(g, y, k)) return true;
   }
-  return false;
+  return !seenFeasible;
 }
 
 export function unitName(p: Perception, k: number): string {
