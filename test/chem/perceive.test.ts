@@ -2,7 +2,7 @@
  * Perception of potential stereogenic units. Sources beside each case: IUPAC 2013 recommendations (Favre &
  * Powell, "Nomenclature of Organic Chemistry", RSC 2014) P-93.5 (stereogenic centres and units), P-93.5.1.4
  * (ring double bonds), P-93.5.7 (allenes); nitrogen inversion: Eliel & Wilen, "Stereochemistry of Organic
- * Compounds" (1994) §8-? (from memory).
+ * Compounds" (1994), ch. 8 (from memory).
  */
 import { describe as suite, expect, it } from 'vitest';
 import { normalize } from '../../src/chem/normalize.js';
