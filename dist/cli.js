@@ -619,11 +619,20 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
       fourth = fourthLigand(s, c);
       if (fourth === null) {
         const sp2 = adj.bnd[c].some((k) => s.bonds[k].order > 1 || s.bonds[k].aromatic);
-        if (!sp2) warn2("stereo-wedge-not-a-centre", `${label} has a wedge but three neighbours and no hydrogen or lone pair`, c);
+        if (!sp2)
+          warn2(
+            "stereo-wedge-not-a-centre",
+            `${label} has a wedge but three neighbours and no hydrogen or lone pair`,
+            c
+          );
         return null;
       }
     } else if (deg !== 4) {
-      warn2("stereo-wedge-not-a-centre", `${label} has a wedge but ${deg} neighbours; only 3 or 4 are read`, c);
+      warn2(
+        "stereo-wedge-not-a-centre",
+        `${label} has a wedge but ${deg} neighbours; only 3 or 4 are read`,
+        c
+      );
       return null;
     }
     const pc = xy(c);
@@ -632,7 +641,11 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     for (let j = 0; j < deg; j++) {
       const u = unit([...sub2(xy(ns[j]), pc), 0]);
       if (u === null) {
-        warn2("stereo-ambiguous-wedge", `${label}: a neighbour is drawn on top of it; configuration not read`, c);
+        warn2(
+          "stereo-ambiguous-wedge",
+          `${label}: a neighbour is drawn on top of it; configuration not read`,
+          c
+        );
         return null;
       }
       flat.push(u);
@@ -646,17 +659,30 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
       const v = reading(flat, w, zs[w], fourth !== null);
       if (v === 0) continue;
       if (sign !== 0 && v !== sign) {
-        warn2("stereo-conflicting-wedges", `${label}: its wedges, read one at a time, imply opposite configurations; configuration not read`, c);
+        warn2(
+          "stereo-conflicting-wedges",
+          `${label}: its wedges, read one at a time, imply opposite configurations; configuration not read`,
+          c
+        );
         return null;
       }
       sign = v;
     }
     if (sign === 0) {
-      warn2("stereo-ambiguous-wedge", `${label}: the wedges and bond directions do not fix a configuration`, c);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `${label}: the wedges and bond directions do not fix a configuration`,
+        c
+      );
       return null;
     }
     const vol = sign;
-    return { kind: "tetrahedral", centre: c, ligands, winding: windingOf(vol) };
+    return {
+      kind: "tetrahedral",
+      centre: c,
+      ligands,
+      winding: windingOf(vol)
+    };
   }
   function reading(flat, w, z, addFourth) {
     for (const plainZ of [0, -PLAIN_LEAN * z]) {
@@ -679,7 +705,8 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const s0 = others(adj, e0, cu.toward[0]);
     const s1 = others(adj, e1, cu.toward[1]);
     if (s0.length === 0 || s1.length === 0 || s0.length > 2 || s1.length > 2) continue;
-    if (adj.bnd[e0].some((k) => s.bonds[k].order === 3) || adj.bnd[e1].some((k) => s.bonds[k].order === 3)) continue;
+    if (adj.bnd[e0].some((k) => s.bonds[k].order === 3) || adj.bnd[e1].some((k) => s.bonds[k].order === 3))
+      continue;
     if (cu.inner.length % 2 === 0) {
       const d = doubleBond2(cu.ends, s0, s1);
       if (d !== null) out.push(d);
@@ -709,7 +736,11 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const a = endSide(s0, p0, [...dir, 0]);
     const b = endSide(s1, p0, [...dir, 0]);
     if (a === null || b === null) {
-      warn2("stereo-double-bond-geometry", `double bond at atoms ${ends[0] + 1}-${ends[1] + 1}: a substituent is drawn on the bond line or both on one side; geometry not read`, ends[0]);
+      warn2(
+        "stereo-double-bond-geometry",
+        `double bond at atoms ${ends[0] + 1}-${ends[1] + 1}: a substituent is drawn on the bond line or both on one side; geometry not read`,
+        ends[0]
+      );
       return null;
     }
     return { kind: "double-bond", ends, refs: [a[0], b[0]], relation: a[1] === b[1] ? "cis" : "trans" };
@@ -743,7 +774,11 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const vol = signedVolume([a.pts[0], a.pts[1], b.pts[0], b.pts[1]]);
     const scale = Math.pow(Math.hypot(...sub2(xy(ends[1]), xy(ends[0]))), 3) || 1;
     if (Math.abs(vol) / scale < 0.01) {
-      warn2("stereo-ambiguous-wedge", `allene ${ends[0] + 1}=…=${ends[1] + 1}: the wedges do not fix a configuration`, ends[0]);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `allene ${ends[0] + 1}=…=${ends[1] + 1}: the wedges do not fix a configuration`,
+        ends[0]
+      );
       return null;
     }
     const ligands = [a.ligands[0], a.ligands[1], b.ligands[0], b.ligands[1]];
@@ -754,22 +789,38 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const za = orthoLift(bond.a, oa);
     const zb = orthoLift(bond.b, ob);
     if (za === null || zb === null) {
-      warn2("stereo-ambiguous-wedge", `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`, bond.a);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
+        bond.a
+      );
       continue;
     }
     if (za[0] === 0 && zb[0] === 0) continue;
     const len = Math.hypot(...sub2(xy(bond.b), xy(bond.a))) || 1;
     const pts = [];
-    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(([o, z]) => {
-      const p = xy(o);
-      pts.push([p[0], p[1], z * len]);
-    });
+    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
+      ([o, z]) => {
+        const p = xy(o);
+        pts.push([p[0], p[1], z * len]);
+      }
+    );
     const vol = signedVolume(pts);
     if (Math.abs(vol) / (len * len * len) < 0.01) {
-      warn2("stereo-ambiguous-wedge", `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`, bond.a);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
+        bond.a
+      );
       continue;
     }
-    out.push({ kind: "axial", subtype: "biaryl", ends: [bond.a, bond.b], ligands: [oa[0], oa[1], ob[0], ob[1]], winding: windingOf(vol) });
+    out.push({
+      kind: "axial",
+      subtype: "biaryl",
+      ends: [bond.a, bond.b],
+      ligands: [oa[0], oa[1], ob[0], ob[1]],
+      winding: windingOf(vol)
+    });
   }
   function orthoLift(end, orth) {
     const z = orth.map((o) => {
@@ -849,7 +900,12 @@ function stereoFrom3d(s, adj, _warnings, _atomLines) {
     }
     const vol = signedVolume(pts);
     if (Math.abs(vol) < MIN_VOLUME2) continue;
-    out.push({ kind: "tetrahedral", centre: c, ligands, winding: windingOf(vol) });
+    out.push({
+      kind: "tetrahedral",
+      centre: c,
+      ligands,
+      winding: windingOf(vol)
+    });
   }
   for (const cu of cumulenes(s, adj)) {
     const [e0, e1] = cu.ends;
@@ -862,7 +918,12 @@ function stereoFrom3d(s, adj, _warnings, _atomLines) {
       const r1 = preferHeavy(s, s1)[0];
       const d = dihedralSin(pos(r0), pos(e0), pos(e1), pos(r1));
       if (d === null || Math.abs(d.cos) < MIN_SIN) continue;
-      out.push({ kind: "double-bond", ends: [e0, e1], refs: [r0, r1], relation: d.cos > 0 ? "cis" : "trans" });
+      out.push({
+        kind: "double-bond",
+        ends: [e0, e1],
+        refs: [r0, r1],
+        relation: d.cos > 0 ? "cis" : "trans"
+      });
     } else {
       const a = endPoints(e0, cu.toward[0], s0);
       const b = endPoints(e1, cu.toward[1], s1);
@@ -885,7 +946,13 @@ function stereoFrom3d(s, adj, _warnings, _atomLines) {
     const d = dihedralSin(pos(oa[0]), pos(a), pos(b), pos(ob[0]));
     if (d === null || Math.abs(d.sin) < MIN_SIN) continue;
     const vol = signedVolume([pos(oa[0]), pos(oa[1]), pos(ob[0]), pos(ob[1])]);
-    out.push({ kind: "axial", subtype: "biaryl", ends: [a, b], ligands: [oa[0], oa[1], ob[0], ob[1]], winding: windingOf(vol) });
+    out.push({
+      kind: "axial",
+      subtype: "biaryl",
+      ends: [a, b],
+      ligands: [oa[0], oa[1], ob[0], ob[1]],
+      winding: windingOf(vol)
+    });
   }
   return out;
   function endPoints(end, toward, subs) {
@@ -961,7 +1028,8 @@ function finishMolecule(raw2) {
     for (const k of adj.bnd[i]) sum += bonds[k].order;
     const v = raw2.valences[i];
     if (v !== null && v !== void 0) atom.hCount = Math.max(0, v - sum);
-    else atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
+    else
+      atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
   }
   let dimension = 0;
   for (const atom of atoms) {
@@ -1126,6 +1194,104 @@ var init_molfile_fields = __esm({
   }
 });
 
+// src/chem/read/molfile-bond.ts
+function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
+  if (a < 1 || a > nAtoms || b < 1 || b > nAtoms) {
+    const bad2 = a < 1 || a > nAtoms ? a : b;
+    return {
+      code: "molfile-bond-atom-missing",
+      message: `bond ${bondNo} refers to atom ${bad2}, but there are ${nAtoms} atoms`,
+      at: { line }
+    };
+  }
+  if (a === b)
+    return {
+      code: "molfile-bond-to-itself",
+      message: `bond ${bondNo} joins atom ${a} to itself`,
+      at: { line }
+    };
+  let order = 1;
+  let aromatic = false;
+  switch (type) {
+    case 1:
+      break;
+    case 2:
+      order = 2;
+      break;
+    case 3:
+      order = 3;
+      break;
+    case 4:
+      aromatic = true;
+      break;
+    case 5:
+    case 8:
+    case 9:
+      warnings.push({
+        code: "molfile-query-bond",
+        message: `bond ${bondNo} has type ${type} (${type === 9 ? "coordination" : "query"} bond); read as a single bond`,
+        at: { line }
+      });
+      break;
+    case 6:
+    case 7:
+      aromatic = true;
+      warnings.push({
+        code: "molfile-query-bond",
+        message: `bond ${bondNo} has query type ${type}; read as aromatic`,
+        at: { line }
+      });
+      break;
+    case 10:
+      warnings.push({
+        code: "molfile-hydrogen-bond",
+        message: `bond ${bondNo} is a hydrogen bond (type 10); left out`,
+        at: { line }
+      });
+      return { bond: null };
+    default:
+      return {
+        code: "molfile-bad-bond-type",
+        message: `bond ${bondNo} has type ${type}; the format defines types 1-10`,
+        at: { line }
+      };
+  }
+  let wedge = null;
+  if (stereo !== 0) {
+    if (order === 2) {
+      if (stereo === 3) wedge = "either";
+      else
+        warnings.push({
+          code: "molfile-bad-bond-stereo",
+          message: `double bond ${bondNo} has stereo code ${stereo}; only 0 and 3 apply to double bonds`,
+          at: { line }
+        });
+    } else if (order === 1) {
+      if (stereo === 1) wedge = "up";
+      else if (stereo === 6) wedge = "down";
+      else if (stereo === 4) wedge = "either";
+      else
+        warnings.push({
+          code: "molfile-bad-bond-stereo",
+          message: `single bond ${bondNo} has stereo code ${stereo}; only 0, 1, 4 and 6 apply`,
+          at: { line }
+        });
+    } else {
+      warnings.push({
+        code: "molfile-bad-bond-stereo",
+        message: `bond ${bondNo} of order ${order} carries a stereo mark; ignored`,
+        at: { line }
+      });
+    }
+  }
+  return { bond: { a: a - 1, b: b - 1, order, aromatic, wedge } };
+}
+var init_molfile_bond = __esm({
+  "src/chem/read/molfile-bond.ts"() {
+    "use strict";
+  }
+});
+
 // src/chem/read/molfile-v3000.ts
 function fail(code, message, line) {
   return { ok: false, error: { code, message, at: { line } } };
@@ -1180,20 +1346,29 @@ function parseV3000(lines, idx, end, firstLine, title) {
       break;
     }
     if (!l.startsWith("M  V30")) {
-      return fail("molfile-v3000-bad-line", `V3000 lines must start with "M  V30", found "${l.slice(0, 20)}"`, lineNo(i));
+      return fail(
+        "molfile-v3000-bad-line",
+        `V3000 lines must start with "M  V30", found "${l.slice(0, 20)}"`,
+        lineNo(i)
+      );
     }
     const first = lineNo(i);
     let text = l.slice(7);
     while (text.endsWith("-")) {
       i++;
       if (i >= end || !lines[i].startsWith("M  V30")) {
-        return fail("molfile-v3000-bad-continuation", 'a V3000 line ends with "-" but no "M  V30" continuation line follows', lineNo(i));
+        return fail(
+          "molfile-v3000-bad-continuation",
+          'a V3000 line ends with "-" but no "M  V30" continuation line follows',
+          lineNo(i)
+        );
       }
       text = text.slice(0, -1) + lines[i].slice(7);
     }
     logical.push({ text: text.trim(), line: first });
   }
-  if (endLine === -1) return fail("molfile-missing-end", 'the V3000 molfile ends without its "M  END" line', lineNo(end));
+  if (endLine === -1)
+    return fail("molfile-missing-end", 'the V3000 molfile ends without its "M  END" line', lineNo(end));
   const warnings = [];
   const atoms = [];
   const atomLines = [];
@@ -1221,13 +1396,22 @@ function parseV3000(lines, idx, end, firstLine, title) {
     if (head2 === "BEGIN") {
       const what = (t[1] ?? "").toUpperCase();
       if (what === "CTAB") {
-        if (inCtab || ctabDone) return fail("molfile-v3000-unexpected", 'a second "BEGIN CTAB" (only one connection table is read)', line);
+        if (inCtab || ctabDone)
+          return fail(
+            "molfile-v3000-unexpected",
+            'a second "BEGIN CTAB" (only one connection table is read)',
+            line
+          );
         inCtab = true;
         blockLine = line;
       } else if (!inCtab) {
         return fail("molfile-v3000-unexpected", `"BEGIN ${what}" outside the CTAB block`, line);
       } else if (block2 !== null) {
-        return fail("molfile-v3000-block-not-closed", `"BEGIN ${what}" inside the ${block2} block opened at line ${blockLine}, which is not closed`, line);
+        return fail(
+          "molfile-v3000-block-not-closed",
+          `"BEGIN ${what}" inside the ${block2} block opened at line ${blockLine}, which is not closed`,
+          line
+        );
       } else if (what === "ATOM" || what === "BOND" || what === "COLLECTION") {
         block2 = what;
         blockLine = line;
@@ -1241,7 +1425,11 @@ function parseV3000(lines, idx, end, firstLine, title) {
         inCtab = false;
         ctabDone = true;
       } else {
-        return fail("molfile-v3000-block-not-closed", `"END ${what}" while the ${block2 ?? (inCtab ? "CTAB" : "no")} block is open (opened at line ${blockLine})`, line);
+        return fail(
+          "molfile-v3000-block-not-closed",
+          `"END ${what}" while the ${block2 ?? (inCtab ? "CTAB" : "no")} block is open (opened at line ${blockLine})`,
+          line
+        );
       }
       continue;
     }
@@ -1250,7 +1438,11 @@ function parseV3000(lines, idx, end, firstLine, title) {
       expectAtoms = Number(t[1]);
       expectBonds = Number(t[2]);
       if (!Number.isInteger(expectAtoms) || !Number.isInteger(expectBonds) || expectAtoms < 0 || expectBonds < 0) {
-        return fail("molfile-bad-counts-line", `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`, line);
+        return fail(
+          "molfile-bad-counts-line",
+          `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`,
+          line
+        );
       }
       chiralFlag = t[5] === "1";
       continue;
@@ -1262,21 +1454,36 @@ function parseV3000(lines, idx, end, firstLine, title) {
       valences.push(r.valence);
       atomLines.push(line);
     } else if (block2 === "BOND") {
-      if (t.length < 4) return fail("molfile-bad-bond-line", `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`, line);
+      if (t.length < 4)
+        return fail(
+          "molfile-bad-bond-line",
+          `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`,
+          line
+        );
       const type = Number(t[1]);
       const a = indexOf.get(Number(t[2]));
       const b = indexOf.get(Number(t[3]));
       if (a === void 0 || b === void 0) {
-        return fail("molfile-bond-atom-missing", `bond ${t[0]} refers to atom ${a === void 0 ? t[2] : t[3]}, which is not in the ATOM block`, line);
+        return fail(
+          "molfile-bond-atom-missing",
+          `bond ${t[0]} refers to atom ${a === void 0 ? t[2] : t[3]}, which is not in the ATOM block`,
+          line
+        );
       }
-      if (!Number.isInteger(type)) return fail("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line);
+      if (!Number.isInteger(type))
+        return fail("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line);
       const cfg = Number(keyed(t, 4).get("CFG") ?? 0);
       const stereo = cfg === 1 ? 1 : cfg === 3 ? 6 : cfg === 2 ? type === 2 ? 3 : 4 : 0;
       const r = makeBond(a + 1, b + 1, type, stereo, atoms.length, bonds.length + 1, line, warnings);
       if ("code" in r) return { ok: false, error: r };
       if (r.bond === null) continue;
       const key3 = Math.min(a, b) * 1000003 + Math.max(a, b);
-      if (seenBonds.has(key3)) return fail("molfile-duplicate-bond", `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`, line);
+      if (seenBonds.has(key3))
+        return fail(
+          "molfile-duplicate-bond",
+          `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`,
+          line
+        );
       seenBonds.add(key3);
       bonds.push(r.bond);
     } else if (block2 === "COLLECTION") {
@@ -1284,11 +1491,17 @@ function parseV3000(lines, idx, end, firstLine, title) {
       const m = /^MDLV30\/STE(ABS|RAC|REL)(\d*)$/.exec(name);
       if (m === null) continue;
       const list = parseList(keyed(t, 1).get("ATOMS") ?? "");
-      if (list === null) return fail("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
+      if (list === null)
+        return fail("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
       const members = [];
       for (const n of list) {
         const ai = indexOf.get(n);
-        if (ai === void 0) return fail("molfile-bad-collection", `collection ${t[0]} names atom ${n}, which is not in the ATOM block`, line);
+        if (ai === void 0)
+          return fail(
+            "molfile-bad-collection",
+            `collection ${t[0]} names atom ${n}, which is not in the ATOM block`,
+            line
+          );
         members.push(ai);
       }
       const type = m[1] === "ABS" ? "abs" : m[1] === "RAC" ? "and" : "or";
@@ -1296,30 +1509,67 @@ function parseV3000(lines, idx, end, firstLine, title) {
       groups.push({ type, id, atoms: members });
     }
   }
-  if (block2 !== null) return fail("molfile-v3000-block-not-closed", `the ${block2} block opened at line ${blockLine} is not closed before "M  END"`, lineNo(endLine));
-  if (inCtab) return fail("molfile-v3000-block-not-closed", `the CTAB block opened at line ${blockLine} is not closed before "M  END"`, lineNo(endLine));
-  if (!ctabDone) return fail("molfile-v3000-no-ctab", 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
+  if (block2 !== null)
+    return fail(
+      "molfile-v3000-block-not-closed",
+      `the ${block2} block opened at line ${blockLine} is not closed before "M  END"`,
+      lineNo(endLine)
+    );
+  if (inCtab)
+    return fail(
+      "molfile-v3000-block-not-closed",
+      `the CTAB block opened at line ${blockLine} is not closed before "M  END"`,
+      lineNo(endLine)
+    );
+  if (!ctabDone)
+    return fail("molfile-v3000-no-ctab", 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
   if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bonds.length)) {
-    warnings.push({ code: "molfile-counts-mismatch", message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`, at: { line: blockLine } });
+    warnings.push({
+      code: "molfile-counts-mismatch",
+      message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`,
+      at: { line: blockLine }
+    });
   }
   return finishMolecule({ atoms, bonds, valences, atomLines, groups, chiralFlag, title, warnings });
 }
-function readAtom(t, line, position, indexOf, warnings) {
-  if (t.length < 6) return { code: "molfile-atom-line-short", message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`, at: { line } };
+function readAtom(tokens2, line, position, indexOf, warnings) {
+  let t = tokens2;
+  if ((t[1] ?? "").toUpperCase() === "NOT" && t.length > 2) t = [t[0], `NOT ${t[2]}`, ...t.slice(3)];
+  if (t.length < 6)
+    return {
+      code: "molfile-atom-line-short",
+      message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`,
+      at: { line }
+    };
   const index = Number(t[0]);
-  if (!Number.isInteger(index) || index < 1) return { code: "molfile-bad-atom-line", message: `atom index "${t[0]}" is not a positive integer`, at: { line } };
-  if (indexOf.has(index)) return { code: "molfile-bad-atom-line", message: `atom index ${index} appears twice`, at: { line } };
+  if (!Number.isInteger(index) || index < 1)
+    return {
+      code: "molfile-bad-atom-line",
+      message: `atom index "${t[0]}" is not a positive integer`,
+      at: { line }
+    };
+  if (indexOf.has(index))
+    return { code: "molfile-bad-atom-line", message: `atom index ${index} appears twice`, at: { line } };
   const x = Number(t[2]);
   const y = Number(t[3]);
   const z = Number(t[4]);
   if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
-    return { code: "molfile-bad-coordinate", message: `atom ${index}: the coordinates "${t[2]} ${t[3]} ${t[4]}" are not numbers`, at: { line } };
+    return {
+      code: "molfile-bad-coordinate",
+      message: `atom ${index}: the coordinates "${t[2]} ${t[3]} ${t[4]}" are not numbers`,
+      at: { line }
+    };
   }
   let sym = t[1];
   if (sym.startsWith('"') && sym.endsWith('"') && sym.length >= 2) sym = sym.slice(1, -1);
-  const isList = sym.startsWith("[") || sym.toUpperCase() === "NOT";
+  const isList = sym.startsWith("[") || sym.toUpperCase().startsWith("NOT ");
   const el = isList ? elementOf("*") : elementOf(sym);
-  if (el === null) return { code: "molfile-unknown-element", message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`, at: { line } };
+  if (el === null)
+    return {
+      code: "molfile-unknown-element",
+      message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`,
+      at: { line }
+    };
   const map = Number(t[5]);
   const kv = keyed(t, 6);
   const num = (k) => {
@@ -1327,7 +1577,11 @@ function readAtom(t, line, position, indexOf, warnings) {
     if (v === void 0) return 0;
     const n = Number(v);
     if (!Number.isInteger(n)) {
-      warnings.push({ code: "molfile-bad-atom-property", message: `atom ${index}: ${k}=${v} is not an integer; ignored`, at: { line } });
+      warnings.push({
+        code: "molfile-bad-atom-property",
+        message: `atom ${index}: ${k}=${v} is not an integer; ignored`,
+        at: { line }
+      });
       return 0;
     }
     return n;
@@ -1337,7 +1591,11 @@ function readAtom(t, line, position, indexOf, warnings) {
   const mass = num("MASS");
   const val = num("VAL");
   if (index !== position + 1) {
-    warnings.push({ code: "molfile-atom-index-out-of-order", message: `atom index ${index} is at position ${position + 1}; atoms are numbered by position`, at: { line } });
+    warnings.push({
+      code: "molfile-atom-index-out-of-order",
+      message: `atom index ${index} is at position ${position + 1}; atoms are numbered by position`,
+      at: { line }
+    });
   }
   indexOf.set(index, position);
   return {
@@ -1362,7 +1620,7 @@ var init_molfile_v3000 = __esm({
     "use strict";
     init_molfile_build();
     init_molfile_fields();
-    init_molfile();
+    init_molfile_bond();
   }
 });
 
@@ -1386,7 +1644,11 @@ function fail2(code, message, line) {
 function parseMolfileLines(lines, start, end, firstLine) {
   const lineNo = (idx2) => firstLine + (idx2 - start);
   if (end - start < 4) {
-    return fail2("molfile-truncated", `the molfile ends after ${end - start} lines, before its counts line (line 4)`, lineNo(end));
+    return fail2(
+      "molfile-truncated",
+      `the molfile ends after ${end - start} lines, before its counts line (line 4)`,
+      lineNo(end)
+    );
   }
   const title = lines[start].trim() || null;
   const counts = lines[start + 3];
@@ -1411,7 +1673,11 @@ function parseMolfileLines(lines, start, end, firstLine) {
     nBonds = b;
     nLists = Number(t[2]) || 0;
     chiral = Number(t[4]) || 0;
-    warnings.push({ code: "molfile-counts-not-fixed-width", message: "the counts line does not keep the fixed columns of the format", at: { line: lineNo(start + 3) } });
+    warnings.push({
+      code: "molfile-counts-not-fixed-width",
+      message: "the counts line does not keep the fixed columns of the format",
+      at: { line: lineNo(start + 3) }
+    });
   }
   if (!(nLists >= 0)) nLists = 0;
   const atoms = [];
@@ -1420,7 +1686,11 @@ function parseMolfileLines(lines, start, end, firstLine) {
   let idx = start + 4;
   for (let i = 0; i < nAtoms; i++, idx++) {
     if (idx >= end) {
-      return fail2("molfile-truncated", `the molfile ends after ${i} of its ${nAtoms} atom lines`, lineNo(idx));
+      return fail2(
+        "molfile-truncated",
+        `the molfile ends after ${i} of its ${nAtoms} atom lines`,
+        lineNo(idx)
+      );
     }
     const line = lines[idx];
     let x = floatField(line, 0, 10);
@@ -1435,9 +1705,17 @@ function parseMolfileLines(lines, start, end, firstLine) {
       const fz = Number(free[2]);
       if (free.length < 4 || !Number.isFinite(fx) || !Number.isFinite(fy) || !Number.isFinite(fz)) {
         if (line.length < 32 && free.length < 4) {
-          return fail2("molfile-atom-line-short", `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`, lineNo(idx));
+          return fail2(
+            "molfile-atom-line-short",
+            `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`,
+            lineNo(idx)
+          );
         }
-        return fail2("molfile-bad-coordinate", `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`, lineNo(idx));
+        return fail2(
+          "molfile-bad-coordinate",
+          `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`,
+          lineNo(idx)
+        );
       }
       x = fx;
       y = fy;
@@ -1445,11 +1723,19 @@ function parseMolfileLines(lines, start, end, firstLine) {
       sym = free[3];
     }
     if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
-      return fail2("molfile-bad-coordinate", `atom line ${i + 1}: the coordinates are not finite numbers`, lineNo(idx));
+      return fail2(
+        "molfile-bad-coordinate",
+        `atom line ${i + 1}: the coordinates are not finite numbers`,
+        lineNo(idx)
+      );
     }
     const el = elementOf(sym);
     if (el === null) {
-      return fail2("molfile-unknown-element", `atom line ${i + 1}: "${sym}" is not an element symbol or a known query/R-group symbol`, lineNo(idx));
+      return fail2(
+        "molfile-unknown-element",
+        `atom line ${i + 1}: "${sym}" is not an element symbol or a known query/R-group symbol`,
+        lineNo(idx)
+      );
     }
     let massDiff = 0;
     let chargeCode = 0;
@@ -1475,13 +1761,21 @@ function parseMolfileLines(lines, start, end, firstLine) {
       charge = CHARGE_CODE[chargeCode];
       if (chargeCode === 4) radical = 1;
     } else {
-      warnings.push({ code: "molfile-bad-charge-code", message: `atom ${i + 1}: charge code "${chargeCode}" is not 0-7; read as no charge`, at: { line: lineNo(idx) } });
+      warnings.push({
+        code: "molfile-bad-charge-code",
+        message: `atom ${i + 1}: charge code "${chargeCode}" is not 0-7; read as no charge`,
+        at: { line: lineNo(idx) }
+      });
     }
     let isotope = el.isotope;
     if (massDiff !== 0 && el.atomicNumber > 0) {
       const m = roundedMass(el.atomicNumber);
       if (m === void 0) {
-        warnings.push({ code: "molfile-mass-difference-unknown", message: `atom ${i + 1}: a mass difference is given for ${el.element}, whose reference mass this reader does not know; isotope ignored`, at: { line: lineNo(idx) } });
+        warnings.push({
+          code: "molfile-mass-difference-unknown",
+          message: `atom ${i + 1}: a mass difference is given for ${el.element}, whose reference mass this reader does not know; isotope ignored`,
+          at: { line: lineNo(idx) }
+        });
       } else isotope = m + massDiff;
     }
     atoms.push({
@@ -1502,7 +1796,12 @@ function parseMolfileLines(lines, start, end, firstLine) {
   const bonds = [];
   const seen = /* @__PURE__ */ new Set();
   for (let i = 0; i < nBonds; i++, idx++) {
-    if (idx >= end) return fail2("molfile-truncated", `the molfile ends after ${i} of its ${nBonds} bond lines`, lineNo(idx));
+    if (idx >= end)
+      return fail2(
+        "molfile-truncated",
+        `the molfile ends after ${i} of its ${nBonds} bond lines`,
+        lineNo(idx)
+      );
     const line = lines[idx];
     let a = intField(line, 0, 3);
     let b = intField(line, 3, 6);
@@ -1515,7 +1814,11 @@ function parseMolfileLines(lines, start, end, firstLine) {
       type = Number(t[2]);
       stereo = Number(t[3] ?? 0);
       if (t.length < 3 || !Number.isInteger(a) || !Number.isInteger(b) || !Number.isInteger(type)) {
-        return fail2("molfile-bad-bond-line", `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`, lineNo(idx));
+        return fail2(
+          "molfile-bad-bond-line",
+          `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`,
+          lineNo(idx)
+        );
       }
       if (!Number.isInteger(stereo)) stereo = 0;
     }
@@ -1523,67 +1826,29 @@ function parseMolfileLines(lines, start, end, firstLine) {
     if ("code" in r) return { ok: false, error: r };
     if (r.bond === null) continue;
     const key3 = Math.min(r.bond.a, r.bond.b) * 1000003 + Math.max(r.bond.a, r.bond.b);
-    if (seen.has(key3)) return fail2("molfile-duplicate-bond", `bond line ${i + 1}: atoms ${a} and ${b} are already bonded`, lineNo(idx));
+    if (seen.has(key3))
+      return fail2(
+        "molfile-duplicate-bond",
+        `bond line ${i + 1}: atoms ${a} and ${b} are already bonded`,
+        lineNo(idx)
+      );
     seen.add(key3);
     bonds.push(r.bond);
   }
   idx += nLists;
-  const raw2 = { atoms, bonds, valences, atomLines, groups: [], chiralFlag: chiral === 1, title, warnings };
+  const raw2 = {
+    atoms,
+    bonds,
+    valences,
+    atomLines,
+    groups: [],
+    chiralFlag: chiral === 1,
+    title,
+    warnings
+  };
   const propError = readProperties(lines, idx, end, lineNo, raw2);
   if (propError !== null) return { ok: false, error: propError };
   return finishMolecule(raw2);
-}
-function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
-  if (a < 1 || a > nAtoms || b < 1 || b > nAtoms) {
-    const bad2 = a < 1 || a > nAtoms ? a : b;
-    return { code: "molfile-bond-atom-missing", message: `bond ${bondNo} refers to atom ${bad2}, but there are ${nAtoms} atoms`, at: { line } };
-  }
-  if (a === b) return { code: "molfile-bond-to-itself", message: `bond ${bondNo} joins atom ${a} to itself`, at: { line } };
-  let order = 1;
-  let aromatic = false;
-  switch (type) {
-    case 1:
-      break;
-    case 2:
-      order = 2;
-      break;
-    case 3:
-      order = 3;
-      break;
-    case 4:
-      aromatic = true;
-      break;
-    case 5:
-    case 8:
-    case 9:
-      warnings.push({ code: "molfile-query-bond", message: `bond ${bondNo} has type ${type} (${type === 9 ? "coordination" : "query"} bond); read as a single bond`, at: { line } });
-      break;
-    case 6:
-    case 7:
-      aromatic = true;
-      warnings.push({ code: "molfile-query-bond", message: `bond ${bondNo} has query type ${type}; read as aromatic`, at: { line } });
-      break;
-    case 10:
-      warnings.push({ code: "molfile-hydrogen-bond", message: `bond ${bondNo} is a hydrogen bond (type 10); left out`, at: { line } });
-      return { bond: null };
-    default:
-      return { code: "molfile-bad-bond-type", message: `bond ${bondNo} has type ${type}; the format defines types 1-10`, at: { line } };
-  }
-  let wedge = null;
-  if (stereo !== 0) {
-    if (order === 2) {
-      if (stereo === 3) wedge = "either";
-      else warnings.push({ code: "molfile-bad-bond-stereo", message: `double bond ${bondNo} has stereo code ${stereo}; only 0 and 3 apply to double bonds`, at: { line } });
-    } else if (order === 1) {
-      if (stereo === 1) wedge = "up";
-      else if (stereo === 6) wedge = "down";
-      else if (stereo === 4) wedge = "either";
-      else warnings.push({ code: "molfile-bad-bond-stereo", message: `single bond ${bondNo} has stereo code ${stereo}; only 0, 1, 4 and 6 apply`, at: { line } });
-    } else {
-      warnings.push({ code: "molfile-bad-bond-stereo", message: `bond ${bondNo} of order ${order} carries a stereo mark; ignored`, at: { line } });
-    }
-  }
-  return { bond: { a: a - 1, b: b - 1, order, aromatic, wedge } };
 }
 function readProperties(lines, idx, end, lineNo, raw2) {
   const { atoms } = raw2;
@@ -1592,7 +1857,11 @@ function readProperties(lines, idx, end, lineNo, raw2) {
   const atomRef = (s, i) => {
     const n = Number(s);
     if (!Number.isInteger(n) || n < 1 || n > atoms.length) {
-      return { code: "molfile-bad-property", message: `"${lines[i].slice(0, 6)}" line refers to atom "${s ?? ""}", which does not exist`, at: { line: lineNo(i) } };
+      return {
+        code: "molfile-bad-property",
+        message: `"${lines[i].slice(0, 6)}" line refers to atom "${s ?? ""}", which does not exist`,
+        at: { line: lineNo(i) }
+      };
     }
     return n - 1;
   };
@@ -1604,7 +1873,11 @@ function readProperties(lines, idx, end, lineNo, raw2) {
       const t = tokens(line);
       const n = Number(t[2]);
       if (!Number.isInteger(n) || n < 0 || t.length < 3 + 2 * n) {
-        return { code: "molfile-bad-property", message: `"${tag}" line: the entry count does not match the entries`, at: { line: lineNo(idx) } };
+        return {
+          code: "molfile-bad-property",
+          message: `"${tag}" line: the entry count does not match the entries`,
+          at: { line: lineNo(idx) }
+        };
       }
       if (tag === "M  CHG" || tag === "M  RAD") {
         if (!chgSeen) {
@@ -1623,7 +1896,11 @@ function readProperties(lines, idx, end, lineNo, raw2) {
         if (typeof ai !== "number") return ai;
         const v = Number(t[4 + 2 * k]);
         if (!Number.isInteger(v)) {
-          return { code: "molfile-bad-property", message: `"${tag}" line: value "${t[4 + 2 * k]}" is not an integer`, at: { line: lineNo(idx) } };
+          return {
+            code: "molfile-bad-property",
+            message: `"${tag}" line: value "${t[4 + 2 * k]}" is not an integer`,
+            at: { line: lineNo(idx) }
+          };
         }
         if (tag === "M  CHG") atoms[ai].charge = v;
         else if (tag === "M  ISO") atoms[ai].isotope = v;
@@ -1642,10 +1919,18 @@ function readProperties(lines, idx, end, lineNo, raw2) {
       const n = Number(tokens(line)[2]);
       if (Number.isInteger(n) && n > 0) idx += n;
     } else if (line.startsWith("$$$$") || line.startsWith(">")) {
-      return { code: "molfile-missing-end", message: 'the molfile has no "M  END" line before this line', at: { line: lineNo(idx) } };
+      return {
+        code: "molfile-missing-end",
+        message: 'the molfile has no "M  END" line before this line',
+        at: { line: lineNo(idx) }
+      };
     }
   }
-  return { code: "molfile-missing-end", message: 'the molfile ends without its "M  END" line', at: { line: lineNo(end) } };
+  return {
+    code: "molfile-missing-end",
+    message: 'the molfile ends without its "M  END" line',
+    at: { line: lineNo(end) }
+  };
 }
 var CHARGE_CODE;
 var init_molfile = __esm({
@@ -1654,6 +1939,7 @@ var init_molfile = __esm({
     init_molfile_build();
     init_molfile_fields();
     init_molfile_v3000();
+    init_molfile_bond();
     CHARGE_CODE = [0, 3, 2, 1, 0, -1, -2, -3];
   }
 });
@@ -2126,6 +2412,10 @@ var init_smiles_bracket = __esm({
 });
 
 // src/chem/read/smiles-parse.ts
+var smiles_parse_exports = {};
+__export(smiles_parse_exports, {
+  parseSmilesGraph: () => parseSmilesGraph
+});
 function err(code, message, offset) {
   return { error: { code, message, offset } };
 }
@@ -2802,7 +3092,13 @@ function readRecord(lines, start, end, firstLine, record2) {
       continue;
     }
     if (!l.startsWith(">")) {
-      warnings.push(tag({ code: "sdf-stray-line", message: `a line outside any data field: "${l.slice(0, 30)}"`, at: { line: firstLine + (i - start) } }));
+      warnings.push(
+        tag({
+          code: "sdf-stray-line",
+          message: `a line outside any data field: "${l.slice(0, 30)}"`,
+          at: { line: firstLine + (i - start) }
+        })
+      );
       i++;
       continue;
     }
@@ -2812,11 +3108,23 @@ function readRecord(lines, start, end, firstLine, record2) {
     const value = [];
     while (i < end && lines[i].trim() !== "") value.push(lines[i++]);
     if (name === null) {
-      warnings.push(tag({ code: "sdf-field-without-name", message: "a data-field header without a <NAME>; its value is skipped", at: { line: at2 } }));
+      warnings.push(
+        tag({
+          code: "sdf-field-without-name",
+          message: "a data-field header without a <NAME>; its value is skipped",
+          at: { line: at2 }
+        })
+      );
       continue;
     }
     if (name in props) {
-      warnings.push(tag({ code: "sdf-duplicate-field", message: `data field <${name}> appears twice; the first value is kept`, at: { line: at2 } }));
+      warnings.push(
+        tag({
+          code: "sdf-duplicate-field",
+          message: `data field <${name}> appears twice; the first value is kept`,
+          at: { line: at2 }
+        })
+      );
       continue;
     }
     props[name] = value.join("\n");
@@ -3401,43 +3709,50 @@ var init_components = __esm({
 function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) {
   const n = g.n;
   const m = s.bonds.length;
+  const { systems, systemOf } = ringSystemsOf(s, n, bondInRing);
+  const bondCount = new Int32Array(systems.length);
+  const smallest = new Int32Array(systems.length).fill(2147483647);
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const r = systemOf[s.bonds[k].a];
+    bondCount[r]++;
+    smallest[r] = Math.min(smallest[r], smallestRingOfBond[k]);
+  }
+  const rings = [];
+  systems.forEach((atoms, r) => {
+    const nullity = bondCount[r] - atoms.length + 1;
+    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
+    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallest[r]));
+  });
+  return rings.sort((p, q) => p.length - q.length);
+}
+function ringSystemsOf(s, n, bondInRing) {
   const parent = Int32Array.from({ length: n }, (_, i) => i);
   const find = (x) => {
     while (parent[x] !== x) x = parent[x] = parent[parent[x]];
     return x;
   };
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    const ra = find(s.bonds[k].a);
-    const rb = find(s.bonds[k].b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  }
-  const atomsOf = /* @__PURE__ */ new Map();
-  const bondsOf = /* @__PURE__ */ new Map();
-  const smallestOf = /* @__PURE__ */ new Map();
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    const r = find(s.bonds[k].a);
-    bondsOf.set(r, (bondsOf.get(r) ?? 0) + 1);
-    const z = smallestRingOfBond[k];
-    if (z < (smallestOf.get(r) ?? Infinity)) smallestOf.set(r, z);
-  }
   const inRing = new Uint8Array(n);
-  for (let k = 0; k < m; k++) if (bondInRing[k]) inRing[s.bonds[k].a] = inRing[s.bonds[k].b] = 1;
+  s.bonds.forEach((b, k) => {
+    if (!bondInRing[k]) return;
+    inRing[b.a] = inRing[b.b] = 1;
+    const ra = find(b.a);
+    const rb = find(b.b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  });
+  const systems = [];
+  const systemOf = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
     if (!inRing[i]) continue;
-    const r = find(i);
-    const list = atomsOf.get(r);
-    if (list) list.push(i);
-    else atomsOf.set(r, [i]);
+    const root = find(i);
+    if (systemOf[root] < 0) {
+      systemOf[root] = systems.length;
+      systems.push([]);
+    }
+    systemOf[i] = systemOf[root];
+    systems[systemOf[i]].push(i);
   }
-  const rings = [];
-  for (const [root, atoms] of atomsOf) {
-    const nullity = bondsOf.get(root) - atoms.length + 1;
-    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
-    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallestOf.get(root)));
-  }
-  return rings.sort((p, q) => p.length - q.length);
+  return { systems, systemOf };
 }
 function walkCycle(start, g, bondInRing) {
   const out = [start];
@@ -3586,14 +3901,21 @@ function ringInfo(s, g = buildGraph(s)) {
   }
   const atomInRing = smallestRingOfAtom.map((x) => x > 0);
   const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
-  return { rings, atomInRing, bondInRing, smallestRingOfBond, smallestRingOfAtom, ringSystems: systems(rings, n) };
+  return {
+    rings,
+    atomInRing,
+    bondInRing,
+    smallestRingOfBond,
+    smallestRingOfAtom,
+    ringSystems: ringSystemsOf(s, n, bondInRing).systems
+  };
 }
-function smallestRings(s, g) {
+function smallestRings(s, g, bridgeOf) {
   const n = g.n;
   const out = new Array(s.bonds.length).fill(0);
   const dist = new Int32Array(n).fill(-1);
   const queue = new Int32Array(n);
-  const bridge = bridges(g, s.bonds.length);
+  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
   for (let k = 0; k < s.bonds.length; k++) {
     const { a, b } = s.bonds[k];
     if (bridge[k] || a === b || a < 0 || b < 0 || a >= n || b >= n) continue;
@@ -3662,31 +3984,6 @@ function bridges(g, m, keep) {
   }
   return isBridge;
 }
-function systems(rings, n) {
-  const parent = Int32Array.from({ length: n }, (_, i) => i);
-  const find = (x) => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  const inRing = new Uint8Array(n);
-  for (const r of rings) {
-    for (const a of r) {
-      inRing[a] = 1;
-      const ra = find(a);
-      const r0 = find(r[0]);
-      if (ra !== r0) parent[Math.max(ra, r0)] = Math.min(ra, r0);
-    }
-  }
-  const byRoot = /* @__PURE__ */ new Map();
-  for (let i = 0; i < n; i++) {
-    if (!inRing[i]) continue;
-    const root = find(i);
-    const list = byRoot.get(root);
-    if (list) list.push(i);
-    else byRoot.set(root, [i]);
-  }
-  return [...byRoot.values()].sort((p, q) => p[0] - q[0]);
-}
 var init_rings = __esm({
   "src/chem/graph/rings.ts"() {
     "use strict";
@@ -3703,7 +4000,8 @@ function aromaticBonds(s, rings, g) {
   const info = rings ?? ringInfo(s, graph);
   if (info.rings.length === 0) return out;
   const donation = new Int8Array(s.atoms.length).fill(NOT_PI);
-  for (let i = 0; i < s.atoms.length; i++) if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
+  for (let i = 0; i < s.atoms.length; i++)
+    if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
   const ringBonds3 = info.rings.map((r) => ringBondList(r, graph));
   const aromaticRing = info.rings.map((r) => huckel(r, donation));
   for (let i = 0; i < info.rings.length; i++) {
@@ -3821,8 +4119,12 @@ function invariantsWith(s, aromatic, graph, bridgeOf) {
   const g = graph ?? buildGraph(s);
   const bridge = bridgeOf ?? bridges(g, s.bonds.length);
   const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
-  const ring = new Array(n).fill(false);
-  for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (!bridge[k]) ring[i] = true;
+  const bondRing = smallestRings(s, g, bridge);
+  const ring = new Array(n).fill(0);
+  for (let i = 0; i < n; i++) {
+    for (const k of g.nbrBonds[i])
+      if (bondRing[k] > 0 && (ring[i] === 0 || bondRing[k] < ring[i])) ring[i] = bondRing[k];
+  }
   const aromaticAtom = new Array(n).fill(false);
   for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (arom[k]) aromaticAtom[i] = true;
   return s.atoms.map((a, i) => {
@@ -3833,7 +4135,7 @@ function invariantsWith(s, aromatic, graph, bridgeOf) {
     v = v * 32 + clamp(g.nbrs[i].length, 0, 31);
     v = v * 4 + clamp(a.radical, 0, 3);
     v = v * 2 + (aromaticAtom[i] ? 1 : 0);
-    v = v * 2 + (ring[i] ? 1 : 0);
+    v = v * 32 + clamp(ring[i], 0, 31);
     return v;
   });
 }
@@ -3851,7 +4153,13 @@ var init_invariants = __esm({
 
 // src/chem/graph/refine.ts
 function clonePartition(p) {
-  return { lab: p.lab.slice(), pos: p.pos.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+  return {
+    lab: p.lab.slice(),
+    pos: p.pos.slice(),
+    start: p.start.slice(),
+    len: p.len.slice(),
+    cells: p.cells
+  };
 }
 function copyPartition(from, to) {
   to.lab.set(from.lab);
@@ -4391,20 +4699,29 @@ function unionCsr(x, y) {
   return { n, offs, adj, code };
 }
 function isomorphic(a, b) {
+  return isomorphism(a, b).map;
+}
+function isomorphism(a, b, maxNodes) {
   let found = null;
-  findIsomorphisms(a, b, {
-    maxResults: 1,
+  const r = findIsomorphisms(a, b, {
+    maxNodes,
     onMapping: (m) => {
       found = m;
       return false;
     }
   });
-  return found;
+  return { map: found, decided: found !== null || r.complete };
 }
 function automorphisms(s, opts) {
   const colour = opts.colour ?? opts.colourA;
   const aromatic = opts.aromaticA ?? conjugatedRingBonds(s);
-  return findIsomorphisms(s, s, { ...opts, colourA: colour, colourB: colour, aromaticA: aromatic, aromaticB: aromatic });
+  return findIsomorphisms(s, s, {
+    ...opts,
+    colourA: colour,
+    colourB: colour,
+    aromaticA: aromatic,
+    aromaticB: aromatic
+  });
 }
 function validBonds(s) {
   const n = s.atoms.length;
@@ -4441,10 +4758,10 @@ var init_isomorphism = __esm({
       results = 0;
       budgetHit = false;
       maxHit = false;
-      maxNodes;
-      pool = [];
       root = null;
+      maxNodes;
       maxResults;
+      pool = [];
       /** `exhaustive`: still branching over key images. Returns NONE, FOUND or STOP. */
       run(p, exhaustive, depth = 0) {
         const n = this.n;
@@ -4478,9 +4795,7 @@ var init_isomorphism = __esm({
         for (let t = target; t < target + best; t++) {
           const v = lab[t];
           if (v >= n) ys.push(v);
-          else if (x < 0 || exhaustive && this.inKey[v] && !this.inKey[x] || v < x && this.inKey[v] === this.inKey[x]) {
-            if (!exhaustive || this.inKey[v] || x < 0) x = v;
-          }
+          else if ((!exhaustive || this.inKey[v]) && (x < 0 || v < x)) x = v;
         }
         ys.sort((u, v) => u - v);
         let any = NONE;
@@ -4629,6 +4944,7 @@ __export(graph_exports, {
   equivalenceClasses: () => equivalenceClasses,
   findIsomorphisms: () => findIsomorphisms,
   isomorphic: () => isomorphic,
+  isomorphism: () => isomorphism,
   molecularFormula: () => molecularFormula,
   ringInfo: () => ringInfo
 });
@@ -4681,7 +4997,8 @@ function unitStereo(unit2, bit, n) {
     return { kind: "tetrahedral", centre: unit2.atoms[0], ligands: [a, b, c, d], winding: bit ? "@@" : "@" };
   }
   const ends = [unit2.atoms[0], unit2.atoms[1]];
-  if (unit2.mode === "cistrans") return { kind: "double-bond", ends, refs: [a, c], relation: bit ? "trans" : "cis" };
+  if (unit2.mode === "cistrans")
+    return { kind: "double-bond", ends, refs: [a, c], relation: bit ? "trans" : "cis" };
   const subtype = unit2.kind === "biaryl" ? "biaryl" : "allene";
   return { kind: "axial", subtype, ends, ligands: [a, b, c, d], winding: bit ? "@@" : "@" };
 }
@@ -4779,7 +5096,11 @@ function unitGroup(p) {
         const u = units[i];
         const j = unitOfAtom[map[u.atoms[0]]];
         if (j < 0) return true;
-        const f = rebase(units[j], u.tokens.map((t) => mapToken(t, n, map)), 0);
+        const f = rebase(
+          units[j],
+          u.tokens.map((t) => mapToken(t, n, map)),
+          0
+        );
         if (f < 0) return true;
         perm[i] = j;
         flip2[i] = f;
@@ -4798,9 +5119,11 @@ function unitGroup(p) {
   return group;
 }
 function trivialOnUnits(p) {
-  const size = /* @__PURE__ */ new Map();
-  for (let i = 0; i < p.classes.length; i++) size.set(p.classes[i], (size.get(p.classes[i]) ?? 0) + 1);
-  return p.units.every((u) => !u.equivalentPair && u.atoms.every((a) => size.get(p.classes[a]) === 1));
+  if (p.units.some((u) => u.equivalentPair)) return false;
+  const classes = p.classes;
+  const size = new Int32Array(classes.length + 1);
+  for (let i = 0; i < classes.length; i++) size[classes[i]]++;
+  return p.units.every((u) => u.atoms.every((a) => size[classes[a]] === 1));
 }
 function signature(perm, flip2) {
   let s = "";
@@ -4917,7 +5240,8 @@ function chiralityOf(g, x, defined) {
     return { chiral: k < 0, witness: k };
   }
   let someAchiral = false;
-  for (let k = 0; k < g.perms.length && !someAchiral; k++) someAchiral = fixedCompletionExists(g, k, x, defined, true);
+  for (let k = 0; k < g.perms.length && !someAchiral; k++)
+    someAchiral = fixedCompletionExists(g, k, x, defined, true);
   if (!someAchiral) return { chiral: true, witness: -1 };
   if (!g.reflect.some((r) => r === 1)) return { chiral: false, witness: -1 };
   if (open.length > MAX_ENUMERATED_UNDEFINED) return { chiral: null, witness: -1 };
@@ -5002,7 +5326,7 @@ var init_isomers = __esm({
   }
 });
 
-// node_modules/openchemlib/dist/openchemlib.js
+// ../../work/main/node_modules/openchemlib/dist/openchemlib.js
 function _S(w) {
   let Y = w.length * 0.75, vt = w.length, ot, kt = 0, C1, jt, T1, u1;
   w.at(-1) === "=" && (Y--, w.at(-2) === "=" && Y--);
@@ -10117,7 +10441,7 @@ function ert(w) {
   function pz(t) {
     Rk();
     var e;
-    e = nl, (e.startsWith(Pl) || e.startsWith(rl) || e.startsWith(il)) && QY(t, KE);
+    e = nl2, (e.startsWith(Pl) || e.startsWith(rl) || e.startsWith(il)) && QY(t, KE);
   }
   function hk(t, e) {
     xr.call(this, t), this.a = c(Ut, Tt, 6, 2, 15, 1), this.a[0] = e, this.a[1] = Ge, this.c = -1;
@@ -17516,7 +17840,7 @@ function ert(w) {
     e.e > A.e && (e2(e, A), HT(e, A));
   }
   function aR() {
-    aR = v1, uS = m(k(Ut, 1), Tt, 6, 15, [5.55, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, FA, FA, FA, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, 7.1, Qe, Qe, 17.78, cr, 3.82, 6.66, 6.66, 7.78, 11.68, FA, 6.66, FA, FA, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, FA, FA, 11.68, 11.68, 11.68, Qe, 20.3, cr, cr, Yf, Yf, cr, 12.22, 15.56, Yf, FA, 10, cr, Qe, 16.66, Yf, 15.56, cr, 15.56, Yf, cr, 12.22, Yf, cr, 18.88, cr, cr, 12.22, FA, FA, FA, 9.38, Qe, 6.66, Qe, Qe, 10, Qe, Qe, FA, Qe, Qe, 4.44, 4.44, 10, 4.44, 16.66, Qe, Qe, Qe, Qe, 6.66, 10, FA, Qe, 10, Yf, 10, 10, 10, 6.68, 5.2, 6.68, 11.68, 10.5]);
+    aR = v1, uS = m(k(Ut, 1), Tt, 6, 15, [5.55, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, FA, FA, FA, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, 7.1, Qe, Qe, 17.78, cr2, 3.82, 6.66, 6.66, 7.78, 11.68, FA, 6.66, FA, FA, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, FA, FA, 11.68, 11.68, 11.68, Qe, 20.3, cr2, cr2, Yf, Yf, cr2, 12.22, 15.56, Yf, FA, 10, cr2, Qe, 16.66, Yf, 15.56, cr2, 15.56, Yf, cr2, 12.22, Yf, cr2, 18.88, cr2, cr2, 12.22, FA, FA, FA, 9.38, Qe, 6.66, Qe, Qe, 10, Qe, Qe, FA, Qe, Qe, 4.44, 4.44, 10, 4.44, 16.66, Qe, Qe, Qe, Qe, 6.66, 10, FA, Qe, 10, Yf, 10, 10, 10, 6.68, 5.2, 6.68, 11.68, 10.5]);
   }
   function Ua(t, e) {
     var A, n, P, r, i, f, D, Q, o, L;
@@ -21697,7 +22021,7 @@ function ert(w) {
   function T1t(t, e) {
     var A, n, P, r, i, f, D, Q, o, L, s, y, l, h, T, g, v, d, b, j, R, C, E, S, I, a, H, K, tt, X, W, $, st, ht, wt, rt, ct;
     if ((t.fb != ND(t.k) || t.N != Y9(t.k)) && (t.fb = ND(t.k), t.N = Y9(t.k), t.eb < 3 && (t.eb = 3)), P = k3(e), f = xB(e), nA(e, P), K3(e, 0, 0, t.fb, t.N), (t.U & 4) != 0 && t.I.a.length == 0 && (y = 0.5 * t.fb, l = 0.5 * t.N, r = 0.03999999910593033 * t.fb, A = new _D(), G3(A, y - r, l, y + r, l), A.j = true, Ft(t.I, A)), o = false, t.eb != 0) {
-      switch ((t.U & 1) != 0 && t.eb != 5 && rm(t), t.G = (t.U & 4) != 0 ? new zj(new qT(t.L, t.Y), t.I) : (t.U & 2) != 0 ? new Qv(t.L, t.Y, t.I) : (t.U & 1) != 0 ? new kB(t.L, t.I) : new HF(t.V, t.I), UY(t.G, f, P), hI(t.G, t.T), cI(t.G, (t.U & 1) == 0 ? 0 : (L = nl, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? S5(P, co) : (ni(), P & qn | Bt(w.Math.round(co * ((P & QP) >> 16))) << 16 | Bt(w.Math.round(co * ((P & DP) >> 8))) << 8 | Bt(w.Math.round(co * (P & 255)))))), Nq(t.G, t.$), TI(t.G, t.H | 8 | (t.w == 19 ? 80 : 0)), t.eb) {
+      switch ((t.U & 1) != 0 && t.eb != 5 && rm(t), t.G = (t.U & 4) != 0 ? new zj(new qT(t.L, t.Y), t.I) : (t.U & 2) != 0 ? new Qv(t.L, t.Y, t.I) : (t.U & 1) != 0 ? new kB(t.L, t.I) : new HF(t.V, t.I), UY(t.G, f, P), hI(t.G, t.T), cI(t.G, (t.U & 1) == 0 ? 0 : (L = nl2, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? S5(P, co) : (ni(), P & qn | Bt(w.Math.round(co * ((P & QP) >> 16))) << 16 | Bt(w.Math.round(co * ((P & DP) >> 8))) << 8 | Bt(w.Math.round(co * (P & 255)))))), Nq(t.G, t.$), TI(t.G, t.H | 8 | (t.w == 19 ? 80 : 0)), t.eb) {
         case 6:
         case 4:
         case 5:
@@ -21728,10 +22052,10 @@ function ert(w) {
         if (t.q > 0 && Z9(e, Bt(t.hb), Bt(t.kb), Bt(t.o[0]), Bt(t.p[0])), t.q > 1) for (Q = 1; Q < t.q; Q++) Z9(e, Bt(t.o[Q - 1]), Bt(t.p[Q - 1]), Bt(t.o[Q]), Bt(t.p[Q]));
         break;
       case 5:
-        nA(e, (v = (d = KD(e), d != 0 ? d : Al), F5(v, (s = nl, s.startsWith(Pl) || s.startsWith(rl) || s.startsWith(il) ? AE : nE)))), dG(e, new uD(t.R)), nA(e, f);
+        nA(e, (v = (d = KD(e), d != 0 ? d : Al), F5(v, (s = nl2, s.startsWith(Pl) || s.startsWith(rl) || s.startsWith(il) ? AE : nE)))), dG(e, new uD(t.R)), nA(e, f);
         break;
       case 6:
-        S = t.hb < t.ib ? Bt(t.hb) : Bt(t.ib), X = t.kb < t.lb ? Bt(t.kb) : Bt(t.lb), E = Bt(w.Math.abs(t.ib - t.hb)), D = Bt(w.Math.abs(t.lb - t.kb)), nA(e, (b = (g = KD(e), g != 0 ? g : Al), F5(b, (L = nl, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? AE : nE)))), ct = e.Lc(), ct.drawRectangle(S, X, E, D), nA(e, f);
+        S = t.hb < t.ib ? Bt(t.hb) : Bt(t.ib), X = t.kb < t.lb ? Bt(t.kb) : Bt(t.lb), E = Bt(w.Math.abs(t.ib - t.hb)), D = Bt(w.Math.abs(t.lb - t.kb)), nA(e, (b = (g = KD(e), g != 0 ? g : Al), F5(b, (L = nl2, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? AE : nE)))), ct = e.Lc(), ct.drawRectangle(S, X, E, D), nA(e, f);
         break;
       case 8:
         I = Bt(t.hb), W = Bt(t.kb), t.t == -1 || t.t == t.e ? (a = Bt(t.ib), $ = Bt(t.lb)) : (a = Bt(mt(t.V, t.t)), $ = Bt(Rt(t.V, t.t))), nA(e, (n = k3(e), as(-8388608, n))), Z9(e, I, W, a, $), nA(e, f);
@@ -23564,7 +23888,7 @@ function ert(w) {
 Actelion Java MolfileCreator 2.0
 
   0  0  0  0  0  0              0 V3000
-`, ZC = "M  V30 BEGIN PRODUCT", WC = 2475109711874, _C = 2475109711875, $C = 2887426572290, aC = 2887426572291, tH = 2887627898882, eH = 2887627898883, AH = 2887627997186, nH = 3437182386178, PH = 3437182386179, rH = 3437383712770, iH = 3437383811074, fH = 3437652148226, DH = 3437652377602, uH = 4674132967426, QH = 4674334294018, oH = 4674334392322, UH = 4674602729474, LH = 4674602958850, sH = 5086449827842, yH = 5086449827848, lH = 5086651154434, hH = 5086651252738, TH = 5086651252743, cH = 5086919589890, wH = 5086919688194, gH = 5636406968322, dH = 5636407066626, BH = 5636675502082, vH = { l: 589826, m: 590112, h: 4 }, FH = { l: 589827, m: 590112, h: 4 }, kH = { l: 589826, m: 590160, h: 4 }, mH = { l: 589827, m: 590160, h: 4 }, bH = { l: 688130, m: 590160, h: 4 }, jH = { l: 589826, m: 590224, h: 4 }, RH = { l: 589827, m: 590224, h: 4 }, pH = { l: 819203, m: 590224, h: 4 }, MH = { l: 589826, m: 590368, h: 4 }, CH = { l: 688130, m: 590368, h: 4 }, HH = { l: 819202, m: 590368, h: 4 }, VH = { l: 819208, m: 590368, h: 4 }, EH = { l: 589826, m: 590416, h: 4 }, SH = { l: 589832, m: 590416, h: 4 }, IH = { l: 688130, m: 590416, h: 4 }, xH = { l: 819202, m: 590416, h: 4 }, NH = { l: 589826, m: 598304, h: 4 }, GH = { l: 589827, m: 598304, h: 4 }, OH = { l: 688130, m: 598304, h: 4 }, qH = { l: 1114114, m: 598304, h: 4 }, zH = { l: 1212418, m: 598304, h: 4 }, KH = { l: 589826, m: 598308, h: 4 }, JH = { l: 589826, m: 688416, h: 4 }, YH = { l: 589826, m: 688464, h: 4 }, XH = { l: 589826, m: 688720, h: 4 }, ZH = { l: 688130, m: 688720, h: 4 }, WH = { l: 589826, m: 590112, h: 288 }, _H = { l: 589826, m: 590112, h: 336 }, $H = { l: 589826, m: 688416, h: 336 }, aH = { l: 589826, m: 688464, h: 336 }, tV = { l: 688130, m: 688464, h: 336 }, eV = { l: 589826, m: 590112, h: 400 }, AV = { l: 589826, m: 688416, h: 400 }, nV = { l: 589826, m: 688464, h: 400 }, PV = { l: 688130, m: 688464, h: 400 }, rV = { l: 589826, m: 819488, h: 400 }, iV = { l: 589826, m: 819536, h: 400 }, fV = { l: 589826, m: 819600, h: 400 }, DV = { l: 688130, m: 819600, h: 400 }, uV = { l: 819202, m: 819600, h: 400 }, QV = { l: 589831, m: 688416, h: 592 }, oV = { l: 589831, m: 688464, h: 592 }, UV = { l: 688135, m: 688464, h: 592 }, LV = { l: 589831, m: 819536, h: 592 }, sV = { l: 688135, m: 819536, h: 592 }, yV = { l: 688135, m: 819600, h: 592 }, lV = { l: 589832, m: 1212704, h: 592 }, hV = { l: 589832, m: 1212752, h: 592 }, TV = { l: 688136, m: 1212752, h: 592 }, cV = { l: 589831, m: 688464, h: 656 }, wV = { l: 589826, m: 590112, h: 8480 }, gV = { l: 589826, m: 688416, h: 8480 }, dV = { l: 589826, m: 688464, h: 8480 }, BV = { l: 688130, m: 688464, h: 8480 }, vV = { l: 819202, m: 819600, h: 8480 }, FV = { l: 688135, m: 1212752, h: 8480 }, kV = { l: 589832, m: 1213008, h: 8480 }, mV = { l: 688136, m: 1213008, h: 8480 }, bV = { l: 589826, m: 590112, h: 8484 }, jV = { l: 589826, m: 590160, h: 8484 }, RV = { l: 688130, m: 598304, h: 8484 }, pV = 0.6262000203132629, MV = -1.3825000524520874, Zy = 0.33169999718666077, CV = -1.4915000200271606, HV = 0.3540000021457672, VV = 0.38179999589920044, EV = -0.6019999980926514, SV = 0.07999999821186066, IV = -0.7379999756813049, xV = "Atom-types are 64-bit numbers describing atoms and their near surrounding.", k4 = "Recognized atom types and their contributions are:", NV = "Druglikeness predictor not properly initialized.", GV = 3.009999990463257, OV = -0.17000000178813934, qV = -0.1809999942779541, zV = -0.2029999941587448, ko = 2147483648, KV = "ene-Metathesis", JV = "Halogenation ring closure", YV = " (rootPairSets:", Wy = -1e10, _y = { 208: 1, 4: 1, 9: 1, 5: 1, 8: 1, 30: 1 }, $y = -99999, b8 = "any", XV = "is not in a ring", m4 = "Excluded atoms:", ay = "exactly 1", tl = "exactly 2", b4 = "less than 3", ZV = "less than 4", el = "at least 1", j4 = "at least 2", R4 = "at least 3", WV = "at least 4", p4 = "1 or 2", _V = "less than 2", $V = "Allowed atoms:", qf = { 138: 1 }, aV = "Atom Properties", Al = -8346432, tE = "/html/editor/editor.html", eE = "Structure Editor Help", nl = "Dummy look and feel", Pl = "Substance Graphite", rl = "Radiance Graphite", il = "Radiance Night", AE = 0.6499999761581421, nE = 0.3499999940395355, zf = 0.800000011920929, M4 = "editorButtons.png", PE = "esrButtons.png", C4 = -1774190527, H4 = -1438646166, x2 = -1433403286, fl = -1431655766, Dl = -1448432982, Tr = 1073741866, Kf = 1073741930, V4 = "MMFF94", E4 = "MMFF94s", rE = "/resources/forcefield/mmff94/94s/outofplane.csv", iE = "cleaveRings", ul = { 152: 1, 4: 1, 5: 1, 8: 1 }, mo = "undefined", fE = 0.08726646502812703, DE = "overlapping", S4 = 0.003921568859368563, I4 = "anonymous", x4 = "Unknown", Pn = 1048575, UP = 17592186044416, Jf = 1e9, N2 = -17592186044416, FA = 5.56, Qe = 11.12, cr = 13.34, Yf = 14.44, bo = 0.3010299956639812, uE = "BigInteger divide by zero", g1 = 4294967295, QE = { l: 0, m: 0, h: 524288 }, Ql = { 32: 1, 115: 1 }, N4 = { 107: 1, 111: 1 }, G2 = { 35: 1, 41: 1, 37: 1, 87: 1 }, ol = 16777619, oE = { 35: 1, 37: 1, 87: 1 }, Ul = 15525485, UE = 5960464477539063e-23, G4 = 16777216, Ll = { 4: 1, 32: 1, 55: 1, 83: 1 }, O4 = "Invalid UTF8 sequence", q4 = 0.20000000298023224, LE = " distance:", sE = { 4: 1, 5: 1, 10: 1, 8: 1, 475: 1 }, O2 = { 50: 1 }, U, jo, sl, b1t = -1;
+`, ZC = "M  V30 BEGIN PRODUCT", WC = 2475109711874, _C = 2475109711875, $C = 2887426572290, aC = 2887426572291, tH = 2887627898882, eH = 2887627898883, AH = 2887627997186, nH = 3437182386178, PH = 3437182386179, rH = 3437383712770, iH = 3437383811074, fH = 3437652148226, DH = 3437652377602, uH = 4674132967426, QH = 4674334294018, oH = 4674334392322, UH = 4674602729474, LH = 4674602958850, sH = 5086449827842, yH = 5086449827848, lH = 5086651154434, hH = 5086651252738, TH = 5086651252743, cH = 5086919589890, wH = 5086919688194, gH = 5636406968322, dH = 5636407066626, BH = 5636675502082, vH = { l: 589826, m: 590112, h: 4 }, FH = { l: 589827, m: 590112, h: 4 }, kH = { l: 589826, m: 590160, h: 4 }, mH = { l: 589827, m: 590160, h: 4 }, bH = { l: 688130, m: 590160, h: 4 }, jH = { l: 589826, m: 590224, h: 4 }, RH = { l: 589827, m: 590224, h: 4 }, pH = { l: 819203, m: 590224, h: 4 }, MH = { l: 589826, m: 590368, h: 4 }, CH = { l: 688130, m: 590368, h: 4 }, HH = { l: 819202, m: 590368, h: 4 }, VH = { l: 819208, m: 590368, h: 4 }, EH = { l: 589826, m: 590416, h: 4 }, SH = { l: 589832, m: 590416, h: 4 }, IH = { l: 688130, m: 590416, h: 4 }, xH = { l: 819202, m: 590416, h: 4 }, NH = { l: 589826, m: 598304, h: 4 }, GH = { l: 589827, m: 598304, h: 4 }, OH = { l: 688130, m: 598304, h: 4 }, qH = { l: 1114114, m: 598304, h: 4 }, zH = { l: 1212418, m: 598304, h: 4 }, KH = { l: 589826, m: 598308, h: 4 }, JH = { l: 589826, m: 688416, h: 4 }, YH = { l: 589826, m: 688464, h: 4 }, XH = { l: 589826, m: 688720, h: 4 }, ZH = { l: 688130, m: 688720, h: 4 }, WH = { l: 589826, m: 590112, h: 288 }, _H = { l: 589826, m: 590112, h: 336 }, $H = { l: 589826, m: 688416, h: 336 }, aH = { l: 589826, m: 688464, h: 336 }, tV = { l: 688130, m: 688464, h: 336 }, eV = { l: 589826, m: 590112, h: 400 }, AV = { l: 589826, m: 688416, h: 400 }, nV = { l: 589826, m: 688464, h: 400 }, PV = { l: 688130, m: 688464, h: 400 }, rV = { l: 589826, m: 819488, h: 400 }, iV = { l: 589826, m: 819536, h: 400 }, fV = { l: 589826, m: 819600, h: 400 }, DV = { l: 688130, m: 819600, h: 400 }, uV = { l: 819202, m: 819600, h: 400 }, QV = { l: 589831, m: 688416, h: 592 }, oV = { l: 589831, m: 688464, h: 592 }, UV = { l: 688135, m: 688464, h: 592 }, LV = { l: 589831, m: 819536, h: 592 }, sV = { l: 688135, m: 819536, h: 592 }, yV = { l: 688135, m: 819600, h: 592 }, lV = { l: 589832, m: 1212704, h: 592 }, hV = { l: 589832, m: 1212752, h: 592 }, TV = { l: 688136, m: 1212752, h: 592 }, cV = { l: 589831, m: 688464, h: 656 }, wV = { l: 589826, m: 590112, h: 8480 }, gV = { l: 589826, m: 688416, h: 8480 }, dV = { l: 589826, m: 688464, h: 8480 }, BV = { l: 688130, m: 688464, h: 8480 }, vV = { l: 819202, m: 819600, h: 8480 }, FV = { l: 688135, m: 1212752, h: 8480 }, kV = { l: 589832, m: 1213008, h: 8480 }, mV = { l: 688136, m: 1213008, h: 8480 }, bV = { l: 589826, m: 590112, h: 8484 }, jV = { l: 589826, m: 590160, h: 8484 }, RV = { l: 688130, m: 598304, h: 8484 }, pV = 0.6262000203132629, MV = -1.3825000524520874, Zy = 0.33169999718666077, CV = -1.4915000200271606, HV = 0.3540000021457672, VV = 0.38179999589920044, EV = -0.6019999980926514, SV = 0.07999999821186066, IV = -0.7379999756813049, xV = "Atom-types are 64-bit numbers describing atoms and their near surrounding.", k4 = "Recognized atom types and their contributions are:", NV = "Druglikeness predictor not properly initialized.", GV = 3.009999990463257, OV = -0.17000000178813934, qV = -0.1809999942779541, zV = -0.2029999941587448, ko = 2147483648, KV = "ene-Metathesis", JV = "Halogenation ring closure", YV = " (rootPairSets:", Wy = -1e10, _y = { 208: 1, 4: 1, 9: 1, 5: 1, 8: 1, 30: 1 }, $y = -99999, b8 = "any", XV = "is not in a ring", m4 = "Excluded atoms:", ay = "exactly 1", tl = "exactly 2", b4 = "less than 3", ZV = "less than 4", el = "at least 1", j4 = "at least 2", R4 = "at least 3", WV = "at least 4", p4 = "1 or 2", _V = "less than 2", $V = "Allowed atoms:", qf = { 138: 1 }, aV = "Atom Properties", Al = -8346432, tE = "/html/editor/editor.html", eE = "Structure Editor Help", nl2 = "Dummy look and feel", Pl = "Substance Graphite", rl = "Radiance Graphite", il = "Radiance Night", AE = 0.6499999761581421, nE = 0.3499999940395355, zf = 0.800000011920929, M4 = "editorButtons.png", PE = "esrButtons.png", C4 = -1774190527, H4 = -1438646166, x2 = -1433403286, fl = -1431655766, Dl = -1448432982, Tr = 1073741866, Kf = 1073741930, V4 = "MMFF94", E4 = "MMFF94s", rE = "/resources/forcefield/mmff94/94s/outofplane.csv", iE = "cleaveRings", ul = { 152: 1, 4: 1, 5: 1, 8: 1 }, mo = "undefined", fE = 0.08726646502812703, DE = "overlapping", S4 = 0.003921568859368563, I4 = "anonymous", x4 = "Unknown", Pn = 1048575, UP = 17592186044416, Jf = 1e9, N2 = -17592186044416, FA = 5.56, Qe = 11.12, cr2 = 13.34, Yf = 14.44, bo = 0.3010299956639812, uE = "BigInteger divide by zero", g1 = 4294967295, QE = { l: 0, m: 0, h: 524288 }, Ql = { 32: 1, 115: 1 }, N4 = { 107: 1, 111: 1 }, G2 = { 35: 1, 41: 1, 37: 1, 87: 1 }, ol = 16777619, oE = { 35: 1, 37: 1, 87: 1 }, Ul = 15525485, UE = 5960464477539063e-23, G4 = 16777216, Ll = { 4: 1, 32: 1, 55: 1, 83: 1 }, O4 = "Invalid UTF8 sequence", q4 = 0.20000000298023224, LE = " distance:", sE = { 4: 1, 5: 1, 10: 1, 8: 1, 475: 1 }, O2 = { 50: 1 }, U, jo, sl, b1t = -1;
   w.goog = w.goog || {}, w.goog.global = w.goog.global || w, jo = {}, p(1, null, {}, u1), U.mb = function(e) {
     return zg(this, e);
   }, U.nb = function() {
@@ -27008,7 +27332,7 @@ function Prt() {
 }
 var Kl, WS, tU, R9, $2, Yl, W8t, Qw, Xl, tI, Uw, eI, Zl, Wl, a2, Lw, sw, yw, lw, eU, _l, trt, Art, E8, nrt, X0, not, Pot, rot, iot, fot, Dot, uot, Qot, oot, Uot, Lot, sot, yot, lot, hot, Tot, cot, wot, got, dot, Bot, vot, Fot, kot;
 var init_openchemlib = __esm({
-  "node_modules/openchemlib/dist/openchemlib.js"() {
+  "../../work/main/node_modules/openchemlib/dist/openchemlib.js"() {
     Kl = class {
       copyMolecule(Y) {
         let vt = Y.getIDCodeAndCoordinates();
@@ -27524,7 +27848,7 @@ var init_masses = __esm({
 // src/chem/cip/mancude.ts
 function perceiveMancude(s, nbr, ord, mass) {
   const n = s.atoms.length;
-  const bond = /* @__PURE__ */ new Set();
+  const bond = new PairSet(n);
   const dupZ = new Array(n).fill(0);
   const dupMass = new Array(n).fill(0);
   if (!nbr.some((o, a) => ord[a].some((x, i) => x === 2 && o[i] > a))) return { bond, dupZ, dupMass };
@@ -27543,7 +27867,7 @@ function perceiveMancude(s, nbr, ord, mass) {
   }
   const piNbr = nbr.map((o, a) => pi[a] ? o.filter((b) => pi[b] && ring.has(key(n, a, b))) : []);
   const piRing = ringBonds2(n, piNbr);
-  for (const k of piRing) bond.add(k);
+  bond.addAll(piRing);
   for (let a = 0; a < n; a++) {
     if (!pi[a] || !piDouble(a)) continue;
     let sum = 0;
@@ -27567,7 +27891,7 @@ function key(n, a, b) {
   return a * n + b;
 }
 function ringBonds2(n, nbr) {
-  const out = /* @__PURE__ */ new Set();
+  const out = new PairSet(n);
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   let t = 0;
@@ -27604,9 +27928,33 @@ function ringBonds2(n, nbr) {
   }
   return out;
 }
+var PairSet;
 var init_mancude = __esm({
   "src/chem/cip/mancude.ts"() {
     "use strict";
+    PairSet = class {
+      table;
+      set;
+      size = 0;
+      constructor(n) {
+        this.table = n <= 512 ? new Uint8Array(n * n) : null;
+        this.set = this.table === null ? /* @__PURE__ */ new Set() : null;
+      }
+      has(k) {
+        return this.table !== null ? this.table[k] === 1 : this.set.has(k);
+      }
+      add(k) {
+        if (this.has(k)) return;
+        this.size++;
+        if (this.table !== null) this.table[k] = 1;
+        else this.set.add(k);
+      }
+      addAll(o) {
+        if (o.table !== null) {
+          for (let k = 0; k < o.table.length; k++) if (o.table[k] === 1) this.add(k);
+        } else for (const k of o.set) this.add(k);
+      }
+    };
   }
 });
 
@@ -27694,8 +28042,10 @@ function fixedByRing(g, e) {
 }
 function expandedValence(s, a, orders) {
   const at2 = s.atoms[a];
+  const z = at2.atomicNumber;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53) return false;
   const v = orders.reduce((x, y) => x + y, 0) + at2.hCount;
-  switch (at2.atomicNumber) {
+  switch (z) {
     case 15:
     case 33:
       return v >= 5;
@@ -27716,10 +28066,34 @@ function invertibleNitrogen(g, centre, ligands) {
   if (at2.atomicNumber !== 7 || at2.charge !== 0 || !ligands.includes(-2)) return false;
   const nb = g.nbr[centre];
   if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
-  return !(nb.length === 3 && nb.every((b) => ringSizeThrough(g, centre, b, 64) > 0));
+  if (nb.length !== 3) return true;
+  for (const x of nb) {
+    const [p, q] = nb.filter((b) => b !== x);
+    if (!connectedWithout(g, p, q, centre, x)) return true;
+  }
+  return false;
+}
+function connectedWithout(g, p, q, skip1, skip2) {
+  const seen = /* @__PURE__ */ new Set([p, skip1, skip2]);
+  const stack = [p];
+  while (stack.length > 0) {
+    const v = stack.pop();
+    for (const w of g.nbr[v]) {
+      if (w === q) return true;
+      if (seen.has(w)) continue;
+      seen.add(w);
+      stack.push(w);
+    }
+  }
+  return false;
 }
 function ringSizeThrough(g, a, b, max) {
-  const dist = /* @__PURE__ */ new Map([[a, 0]]);
+  if (seenBuf.length < g.n) {
+    seenBuf = new Int32Array(g.n * 2);
+    stamp = 0;
+  }
+  const mark = ++stamp;
+  seenBuf[a] = mark;
   let frontier = [a];
   for (let d = 0; frontier.length > 0 && d < max - 1; d++) {
     const next = [];
@@ -27727,8 +28101,8 @@ function ringSizeThrough(g, a, b, max) {
       for (const y of g.nbr[x]) {
         if (x === a && y === b) continue;
         if (y === b) return d + 2;
-        if (dist.has(y)) continue;
-        dist.set(y, d + 1);
+        if (seenBuf[y] === mark) continue;
+        seenBuf[y] = mark;
         next.push(y);
       }
     }
@@ -27740,25 +28114,26 @@ function mancudeOf(g) {
   if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
   return g.mancude;
 }
-var CHALCOGEN_OR_N;
+var CHALCOGEN_OR_N, seenBuf, stamp;
 var init_graph2 = __esm({
   "src/chem/cip/graph.ts"() {
     "use strict";
     init_masses();
     init_mancude();
     CHALCOGEN_OR_N = /* @__PURE__ */ new Set([7, 8, 16, 34, 52]);
+    seenBuf = new Int32Array(256);
+    stamp = 0;
   }
 });
 
 // src/chem/cip/digraph.ts
-var H_ATOM, PHANTOM, DUPLICATE_MASS, NODE_BUDGET, CipNode, Digraph;
+var H_ATOM, PHANTOM, NODE_BUDGET, CipNode, Digraph;
 var init_digraph = __esm({
   "src/chem/cip/digraph.ts"() {
     "use strict";
     init_graph2();
     H_ATOM = -1;
     PHANTOM = -2;
-    DUPLICATE_MASS = (m) => m;
     NODE_BUDGET = 2e5;
     CipNode = class {
       constructor(id, atom, z, mass, depth, dist, dup, parent) {
@@ -27782,6 +28157,8 @@ var init_digraph = __esm({
       kids = null;
       /** Sorted branch lists per (came-from, rule level); see compare.ts. */
       sorted = null;
+      /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode). */
+      down = null;
       /** Auxiliary descriptor: undefined = not yet computed, null = none. */
       aux = void 0;
       auxBusy = false;
@@ -27808,7 +28185,7 @@ var init_digraph = __esm({
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
-        return new CipNode(this.nextId++, atom, g.z[atom], dup ? DUPLICATE_MASS(g.mass[atom]) : g.mass[atom], depth, dist, dup, parent);
+        return new CipNode(this.nextId++, atom, g.z[atom], g.mass[atom], depth, dist, dup, parent);
       }
       /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */
       phantom(parent) {
@@ -27927,19 +28304,43 @@ function descriptors(rk, x, fx) {
   }
   return out;
 }
-function pairs(entries, refClass) {
+function chiralLabel(rk, n) {
+  if (n.dup || n.atom < 0 || rk.value(RULE_4A, n) !== 2) return null;
+  const l = rk.aux(n);
+  return l !== null && isChiralLabel(l) ? l : null;
+}
+function orderedPairs(rk, x, fx, refClass, memo) {
+  const hit = memo.get(x);
+  if (hit) return hit;
   const seq = [];
-  let i = 0;
-  while (i < entries.length) {
-    let j = i;
-    let likes = 0;
-    while (j < entries.length && entries[j].group === entries[i].group) {
-      if (likeClass(entries[j].label) === refClass) likes++;
-      j++;
+  const q = [x];
+  const qf = [fx];
+  const own = (n) => {
+    const l = chiralLabel(rk, n);
+    return l === null ? 0 : likeClass(l) === refClass ? 2 : 1;
+  };
+  for (let i = 0; i < q.length; i++) {
+    const n = q[i];
+    const l = chiralLabel(rk, n);
+    if (l !== null) seq.push(likeClass(l) === refClass ? 1 : 0);
+    const s = rk.sorted(n, qf[i], RULE_4A);
+    const nodes = s.nodes.slice();
+    for (let a = 0; a < nodes.length; ) {
+      let b = a + 1;
+      while (b < nodes.length && s.tie[b]) b++;
+      if (b - a > 1) {
+        const run11 = nodes.slice(a, b);
+        run11.sort((u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)));
+        for (let k = a; k < b; k++) nodes[k] = run11[k - a];
+      }
+      a = b;
     }
-    for (let k = i; k < j; k++) seq.push(k - i < likes ? 1 : 0);
-    i = j;
+    for (const c of nodes) {
+      q.push(c);
+      qf.push(n);
+    }
   }
+  memo.set(x, seq);
   return seq;
 }
 function lexCompare(a, b) {
@@ -27947,21 +28348,24 @@ function lexCompare(a, b) {
   for (let i = 0; i < m; i++) if (a[i] !== b[i]) return a[i] - b[i];
   return a.length - b.length;
 }
-function bestPairs(entries) {
+function bestPairs(rk, x, fx) {
+  const entries = descriptors(rk, x, fx);
   if (entries.length === 0) return [];
   const first = entries[0].group;
-  let best = null;
+  const classes = /* @__PURE__ */ new Set();
   for (const e of entries) {
     if (e.group !== first) break;
-    const seq = pairs(entries, likeClass(e.label));
+    classes.add(likeClass(e.label));
+  }
+  let best = null;
+  for (const cls of classes) {
+    const seq = orderedPairs(rk, x, fx, cls, /* @__PURE__ */ new Map());
     if (best === null || lexCompare(seq, best) > 0) best = seq;
   }
   return best ?? [];
 }
 function compareRule4b(rk, x, fx, y, fy) {
-  const a = bestPairs(descriptors(rk, x, fx));
-  const b = bestPairs(descriptors(rk, y, fy));
-  const c = lexCompare(a, b);
+  const c = lexCompare(bestPairs(rk, x, fx), bestPairs(rk, y, fy));
   return c > 0 ? 1 : c < 0 ? -1 : 0;
 }
 var init_rule4b = __esm({
@@ -27977,7 +28381,7 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker, EMPTY;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
@@ -28019,6 +28423,8 @@ var init_compare = __esm({
        * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
        */
       mirror = false;
+      depth = 0;
+      pool = [];
       /** Is `n` the scope node or farther out on its branch? */
       inScope(n) {
         const sc = this.scope;
@@ -28085,30 +28491,46 @@ var init_compare = __esm({
         if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
         let c = this.value(rule2, x) - this.value(rule2, y);
         if (c !== 0) return c > 0 ? 1 : -1;
-        const qx = [x];
-        const qfx = [fx];
-        const qy = [y];
-        const qfy = [fy];
-        for (let i = 0; i < qx.length; i++) {
-          const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
-          const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
-          const m = Math.min(sx.length, sy.length);
-          for (let j = 0; j < m; j++) {
-            c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
-            if (c !== 0) return c > 0 ? 1 : -1;
-          }
-          if (sx.length !== sy.length && rule2 === RULE_1A) {
-            const longer = sx.length > sy.length ? sx : sy;
-            for (let j = m; j < longer.length; j++) {
-              if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
+        if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
+        const d = this.depth++;
+        let q = this.pool[d];
+        if (q === void 0) q = this.pool[d] = { x: [], fx: [], y: [], fy: [] };
+        const qx = q.x;
+        const qfx = q.fx;
+        const qy = q.y;
+        const qfy = q.fy;
+        qx.length = qfx.length = qy.length = qfy.length = 0;
+        qx.push(x);
+        qfx.push(fx);
+        qy.push(y);
+        qfy.push(fy);
+        try {
+          for (let i = 0; i < qx.length; i++) {
+            const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
+            const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
+            const m = Math.min(sx.length, sy.length);
+            for (let j = 0; j < m; j++) {
+              c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
+              if (c !== 0) return c > 0 ? 1 : -1;
+            }
+            if (sx.length !== sy.length && rule2 === RULE_1A) {
+              const longer = sx.length > sy.length ? sx : sy;
+              for (let j = m; j < longer.length; j++) {
+                if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
+              }
+            }
+            for (let j = 0; j < m; j++) {
+              const a = sx[j];
+              const b = sy[j];
+              if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+              qx.push(a);
+              qfx.push(qx[i]);
+              qy.push(b);
+              qfy.push(qy[i]);
             }
           }
-          for (let j = 0; j < m; j++) {
-            qx.push(sx[j]);
-            qfx.push(qx[i]);
-            qy.push(sy[j]);
-            qfy.push(qy[i]);
-          }
+        } finally {
+          this.depth--;
         }
         return 0;
       }
@@ -28123,6 +28545,16 @@ var init_compare = __esm({
       }
       /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
       sorted(node, from, level2) {
+        if (node.dup || node.atom < 0) return EMPTY;
+        const plain = from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level2 < RULE_3 || this.inScope(node));
+        if (plain) {
+          if (node.down === null) node.down = [];
+          const hit2 = node.down[level2];
+          if (hit2 !== void 0) return hit2;
+          const out2 = this.sortAt(node, from, level2);
+          node.down[level2] = out2;
+          return out2;
+        }
         const hidden = level2 >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
         const mirrored2 = this.mirror && level2 >= RULE_52 ? 2 : 0;
         const num = ((from === null ? 0 : from.id + 1) * 16 + level2) * 4 + hidden + mirrored2;
@@ -28130,10 +28562,30 @@ var init_compare = __esm({
         if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
         const hit = node.sorted.get(key3);
         if (hit) return hit;
+        const out = this.sortAt(node, from, level2);
+        node.sorted.set(key3, out);
+        return out;
+      }
+      sortAt(node, from, level2) {
         let out;
         if (level2 === 0) {
-          const nodes = this.dg.branches(node, from);
-          out = this.sortRun(nodes, 0, nodes.length, node, 0, { nodes: nodes.slice(), tie: nodes.map(() => true) });
+          const nodes = this.dg.branches(node, from).slice();
+          for (let i = 1; i < nodes.length; i++) {
+            const v = nodes[i];
+            let j = i - 1;
+            while (j >= 0 && nodes[j].z < v.z) {
+              nodes[j + 1] = nodes[j];
+              j--;
+            }
+            nodes[j + 1] = v;
+          }
+          out = { nodes, tie: nodes.map(() => false) };
+          for (let i = 0; i < nodes.length; ) {
+            let j = i + 1;
+            while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
+            if (j - i > 1) this.sortRun(nodes, i, j, node, 0, out);
+            i = j;
+          }
         } else {
           const base = this.sorted(node, from, level2 - 1);
           if (!this.active[level2] || !base.tie.some((t) => t)) out = base;
@@ -28147,7 +28599,6 @@ var init_compare = __esm({
             }
           }
         }
-        node.sorted.set(key3, out);
         return out;
       }
       /**
@@ -28155,6 +28606,16 @@ var init_compare = __esm({
        * first, writing them and their ties into `out` at the same places.
        */
       sortRun(nodes, i, j, centre, rule2, out) {
+        if (j - i === 2) {
+          const a = nodes[i];
+          const b = nodes[i + 1];
+          const c = this.compareRule(rule2, a, centre, b, centre);
+          out.nodes[i] = c < 0 ? b : a;
+          out.nodes[i + 1] = c < 0 ? a : b;
+          out.tie[i] = false;
+          out.tie[i + 1] = c === 0;
+          return out;
+        }
         const run11 = nodes.slice(i, j);
         const k = run11.length;
         const m = new Array(k * k).fill(0);
@@ -28182,6 +28643,7 @@ var init_compare = __esm({
         return out;
       }
     };
+    EMPTY = { nodes: [], tie: [] };
   }
 });
 
@@ -28643,12 +29105,19 @@ function normalize(s) {
       return { ...e, centre: fromInput[e.centre], ligands: [a3, b2, c2, d2] };
     }
     if (e.kind === "double-bond") {
-      return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], refs: [lig(e.refs[0]), lig(e.refs[1])] };
+      return {
+        ...e,
+        ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]],
+        refs: [lig(e.refs[0]), lig(e.refs[1])]
+      };
     }
     const [a, b, c, d] = e.ligands.map(lig);
     return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], ligands: [a, b, c, d] };
   });
-  const groups = s.groups.map((g) => ({ ...g, atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x]) }));
+  const groups = s.groups.map((g) => ({
+    ...g,
+    atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x])
+  }));
   return { structure: { ...s, atoms, bonds, stereo, groups }, toInput, fromInput, folded };
 }
 function extractAtoms(s, atoms) {
@@ -28664,7 +29133,11 @@ function extractAtoms(s, atoms) {
       stereo.push({ ...e, centre: index[e.centre], ligands: [a, b, c, d] });
     } else if (e.kind === "double-bond") {
       if (!e.ends.every(keep) || !e.refs.every(keep)) continue;
-      stereo.push({ ...e, ends: [index[e.ends[0]], index[e.ends[1]]], refs: [lig(e.refs[0]), lig(e.refs[1])] });
+      stereo.push({
+        ...e,
+        ends: [index[e.ends[0]], index[e.ends[1]]],
+        refs: [lig(e.refs[0]), lig(e.refs[1])]
+      });
     } else {
       if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
       const [a, b, c, d] = e.ligands.map(lig);
@@ -28782,7 +29255,8 @@ var init_perceive_bonds = __esm({
 function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
   const atom = s.atoms[i];
   const z = atom.atomicNumber;
-  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50) return null;
+  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50)
+    return null;
   if (atom.radical !== 0 || atom.hCount > 1) return null;
   const nb = g.nbrs[i];
   const nbB = g.nbrBonds[i];
@@ -28917,7 +29391,8 @@ function applyInputStereo(s, units, unitOfAtom, invertible, remarks) {
       continue;
     }
     const where2 = e.kind === "tetrahedral" ? atomName(s, e.centre) : `the ${atomName(s, e.ends[0])}–${atomName(s, e.ends[1])} unit`;
-    if (s.dimension !== 3) remarks.push(`configuration drawn on ${where2}, which is not a stereogenic unit; ignored`);
+    if (s.dimension !== 3)
+      remarks.push(`configuration drawn on ${where2}, which is not a stereogenic unit; ignored`);
   }
   return drawnN;
 }
@@ -28981,7 +29456,12 @@ function survivesSymmetry(s, u, classes) {
     colour,
     maxResults: 2e3,
     onMapping: (map) => {
-      if (rebase(u, u.tokens.map((t) => mapToken(t, n, map)), 0) === 1) inverted = true;
+      if (rebase(
+        u,
+        u.tokens.map((t) => mapToken(t, n, map)),
+        0
+      ) === 1)
+        inverted = true;
       return !inverted;
     }
   });
@@ -28997,6 +29477,56 @@ var init_perceive_rescue = __esm({
 
 // src/chem/perceive-bridges.ts
 function bridgeCouplings(s, g, rings, units) {
+  return [...bridgedPairs(s, g, rings, units), ...fusedPairs(g, rings, units)];
+}
+function fusedPairs(g, rings, units) {
+  const out = [];
+  const unitAt = /* @__PURE__ */ new Map();
+  units.forEach((u, k) => {
+    if (u.kind === "tetrahedral") unitAt.set(u.atoms[0], k);
+  });
+  for (const [a, ka] of unitAt) {
+    for (let i = 0; i < g.nbrs[a].length; i++) {
+      const b = g.nbrs[a][i];
+      const kb = unitAt.get(b);
+      if (kb === void 0 || b < a) continue;
+      const r = rings.smallestRingOfBond[g.nbrBonds[a][i]];
+      if (r !== 3 && r !== 4) continue;
+      const through = rings.rings.filter((ring) => adjacentIn(ring, a, b));
+      if (through.length !== 2) continue;
+      through.sort((x, y) => x.length - y.length);
+      const [r1, r2] = [through[0].length, through[1].length];
+      if (!(r1 === 3 && r2 <= 6 || r1 === 4 && r2 === 4)) continue;
+      const a1 = ringNeighbour(through[0], a, b);
+      const a22 = ringNeighbour(through[1], a, b);
+      const b1 = ringNeighbour(through[0], b, a);
+      const b2 = ringNeighbour(through[1], b, a);
+      const ua = units[ka];
+      const ub = units[kb];
+      const xa = ua.tokens.find((t) => t !== b && t !== a1 && t !== a22);
+      const xb = ub.tokens.find((t) => t !== a && t !== b1 && t !== b2);
+      if (xa === void 0 || xb === void 0) continue;
+      const pa = permutationParity2([xa, b, a1, a22], ua.tokens);
+      const pb = permutationParity2([xb, a, b1, b2], ub.tokens);
+      if (pa < 0 || pb < 0) continue;
+      out.push({ a: ka, b: kb, c: 1 ^ pa ^ pb });
+    }
+  }
+  return out;
+}
+function adjacentIn(ring, a, b) {
+  const i = ring.indexOf(a);
+  if (i < 0) return false;
+  const L = ring.length;
+  return ring[(i + 1) % L] === b || ring[(i + L - 1) % L] === b;
+}
+function ringNeighbour(ring, a, b) {
+  const i = ring.indexOf(a);
+  const L = ring.length;
+  const next = ring[(i + 1) % L];
+  return next === b ? ring[(i + L - 1) % L] : next;
+}
+function bridgedPairs(s, g, rings, units) {
   let possible = 0;
   for (const u of units) {
     if (u.kind !== "tetrahedral") continue;
@@ -29062,7 +29592,8 @@ function threeBridges(a, b, ringNbrs) {
     for (let j = i + 1; j < paths.length; j++) {
       if (!disjoint(paths[i], paths[j])) continue;
       for (let k = j + 1; k < paths.length; k++) {
-        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k])) return [paths[i], paths[j], paths[k]];
+        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k]))
+          return [paths[i], paths[j], paths[k]];
       }
     }
   }
@@ -29099,8 +29630,8 @@ function perceive(s) {
       invertibleAll.add(i);
       continue;
     }
-    const pairs2 = equalPairs(v.tokens, tokenClass, [i, i]);
-    if (pairs2 === null) continue;
+    const pairs = equalPairs(v.tokens, tokenClass, [i, i]);
+    if (pairs === null) continue;
     drafts.push({
       kind: "tetrahedral",
       mode: "parity",
@@ -29108,13 +29639,13 @@ function perceive(s) {
       tokens: v.tokens,
       defined: false,
       bit: 0,
-      equivalentPair: pairs2.length > 0,
-      pairs: pairs2
+      equivalentPair: pairs.length > 0,
+      pairs
     });
   }
   for (const c of bondCandidates(s, graph, rings, aromaticBond)) {
-    const pairs2 = equalPairs(c.tokens, tokenClass, c.ends, true);
-    if (pairs2 === null) continue;
+    const pairs = equalPairs(c.tokens, tokenClass, c.ends, true);
+    if (pairs === null) continue;
     drafts.push({
       kind: c.kind,
       mode: c.mode,
@@ -29122,13 +29653,15 @@ function perceive(s) {
       tokens: c.tokens,
       defined: false,
       bit: 0,
-      equivalentPair: pairs2.length > 0,
-      pairs: pairs2
+      equivalentPair: pairs.length > 0,
+      pairs
     });
   }
   for (const e of s.stereo) {
     if (e.kind !== "axial" || e.subtype !== "biaryl") continue;
-    const t = e.ligands.map((x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1]));
+    const t = e.ligands.map(
+      (x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])
+    );
     drafts.push({
       kind: "biaryl",
       mode: "parity",
@@ -29172,7 +29705,7 @@ function perceive(s) {
     if (ua.defined && ub.defined && (ua.bit ^ ub.bit) !== c.c) {
       const name = (u) => `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
       remarks.push(
-        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are bridgeheads of a small bridged ring system, which fixes their relative configuration`
+        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are the bridgeheads or fusion atoms of a small ring system, which fixes their relative configuration`
       );
     }
   }
@@ -29195,7 +29728,8 @@ function perceive(s) {
 function equalPairs(tokens2, cls, anchors, perEnd = false) {
   const out = [];
   if (perEnd) {
-    for (const k of [0, 2]) if (cls(tokens2[k]) === cls(tokens2[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens2[k] });
+    for (const k of [0, 2])
+      if (cls(tokens2[k]) === cls(tokens2[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens2[k] });
     return out;
   }
   const c = tokens2.map(cls);
@@ -29298,7 +29832,8 @@ function mirrorFacts(a) {
   let explanation;
   if (named.length > 0) {
     explanation = `achiral: mirror plane through ${named.map((i) => atomName(s, i)).join(", ")}`;
-    if (bondNames.length > 0) explanation += ` and the middle of the ${bondNames.join(" and ")} bond${bondNames.length > 1 ? "s" : ""}`;
+    if (bondNames.length > 0)
+      explanation += ` and the middle of the ${bondNames.join(" and ")} bond${bondNames.length > 1 ? "s" : ""}`;
   } else if (bondNames.length > 0) {
     explanation = `achiral: mirror plane or inversion centre at the middle of the ${bondNames.join(" and ")} bond${bondNames.length > 1 ? "s" : ""}`;
   } else {
@@ -29322,9 +29857,14 @@ function listStereoisomers(a, max) {
   const fully = a.defined.every((d) => d === 1);
   const inputCanon = fully ? canonicalState(group, a.state) : null;
   return enumerateStereoisomers(group, m, max).map(({ state, chiral }) => {
-    const stereo = p.units.flatMap((u, k) => stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : []);
+    const stereo = p.units.flatMap(
+      (u, k) => stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : []
+    );
     const t = { ...s, stereo, groups: [] };
-    const labels = labelUnits(t).map((r) => ({ atoms: r.atoms.map((x) => s.atoms[x].inputNumber), label: r.label }));
+    const labels = labelUnits(t).map((r) => ({
+      atoms: r.atoms.map((x) => s.atoms[x].inputNumber),
+      label: r.label
+    }));
     labels.sort((x, y) => x.atoms[0] - y.atoms[0]);
     return {
       smiles: writeSmiles(t),
@@ -29361,7 +29901,8 @@ function analyse(input) {
       );
     }
   }
-  if (!group.complete) p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
+  if (!group.complete)
+    p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
   const chirality = chiralityOf(group, state, defined);
   return { norm, p, group, state, defined, reported, chirality };
 }
@@ -29397,7 +29938,12 @@ function describe(input, opts = {}) {
   const components = componentFacts(a);
   const facts = {
     stereocenters: units.filter((u) => u.kind === "tetrahedral").map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
-    stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({ atoms: [u.atoms[0], u.atoms[1]], label: u.label, kind: u.kind, defined: u.defined })),
+    stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({
+      atoms: [u.atoms[0], u.atoms[1]],
+      label: u.label,
+      kind: u.kind,
+      defined: u.defined
+    })),
     units,
     chiral,
     meso,
@@ -29405,14 +29951,19 @@ function describe(input, opts = {}) {
     stereoisomers,
     mirror: mirrorFacts(a),
     enhanced: enhancedFacts(a),
-    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({ atom: s.atoms[i].inputNumber, drawnWithStereo: true })),
+    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({
+      atom: s.atoms[i].inputNumber,
+      drawnWithStereo: true
+    })),
     components,
     constitutionKey: constitutionKey(s),
     formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice()
   };
   if (p.invertibleNitrogens.length > 0 && units.length === 0) {
-    facts.remarks.push("the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre");
+    facts.remarks.push(
+      "the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre"
+    );
   }
   if (opts.listIsomers) facts.stereoisomerList = listStereoisomers(a, opts.maxIsomers ?? 64);
   return facts;
@@ -29457,12 +30008,17 @@ function mirrorFixed(g, h, x) {
 }
 function enhancedFacts(a) {
   const s = a.p.structure;
-  const groups = s.groups.map((g) => ({ type: g.type, id: g.id, atoms: g.atoms.map((x) => s.atoms[x].inputNumber) }));
+  const groups = s.groups.map((g) => ({
+    type: g.type,
+    id: g.id,
+    atoms: g.atoms.map((x) => s.atoms[x].inputNumber)
+  }));
   const definedParity = a.p.units.filter((u, k) => u.defined && u.mode === "parity" && a.reported[k]);
   if (definedParity.length === 0 && !a.p.units.some((u) => u.defined)) return { groups, meaning: "none" };
   if (definedParity.length === 0) return { groups, meaning: "absolute" };
   const member = /* @__PURE__ */ new Map();
-  for (const g of s.groups) for (const x of g.atoms) member.set(x, g.type === "abs" ? "abs" : `${g.type}${g.id}`);
+  for (const g of s.groups)
+    for (const x of g.atoms) member.set(x, g.type === "abs" ? "abs" : `${g.type}${g.id}`);
   const kinds = new Set(definedParity.map((u) => member.get(u.atoms[0]) ?? "abs"));
   if (s.groups.length === 0) return { groups, meaning: s.chiralFlag === false ? "relative" : "absolute" };
   const list = [...kinds];
@@ -29536,7 +30092,9 @@ function otherDifferences(a, b) {
   const left = b.others.slice();
   const onlyInA = [];
   for (const o of a.others) {
-    const j = left.findIndex((x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === "identical"));
+    const j = left.findIndex(
+      (x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === "identical")
+    );
     if (j >= 0) left.splice(j, 1);
     else onlyInA.push(o.smiles);
   }
@@ -29553,7 +30111,11 @@ function relate(sa, sb) {
   const iso = isomorphic(pa.p.structure, pb.p.structure);
   if (!iso) {
     const same = molecularFormula(pa.p.structure) === molecularFormula(pb.p.structure);
-    return same ? { ...base, relation: "constitutional-isomers", explanation: `same molecular formula, different constitution${salt}` } : { ...base, relation: "different-compounds", explanation: `different molecular formulas${salt}` };
+    return same ? {
+      ...base,
+      relation: "constitutional-isomers",
+      explanation: `same molecular formula, different constitution${salt}`
+    } : { ...base, relation: "different-compounds", explanation: `different molecular formulas${salt}` };
   }
   const nA = pa.p.structure.atoms.length;
   const nB = pb.p.structure.atoms.length;
@@ -29564,7 +30126,11 @@ function relate(sa, sb) {
   let open = false;
   pa.p.units.forEach((u, i) => {
     const j = pb.p.unitOfAtom[iso[u.atoms[0]]];
-    const bit = j < 0 ? -1 : rebase(pb.p.units[j], u.tokens.map((t) => mapToken(t, nA, iso, nB)), u.bit);
+    const bit = j < 0 ? -1 : rebase(
+      pb.p.units[j],
+      u.tokens.map((t) => mapToken(t, nA, iso, nB)),
+      u.bit
+    );
     if (bit < 0) {
       if (pa.reported[i]) open = true;
       return;
@@ -29610,7 +30176,12 @@ function relate(sa, sb) {
         differingUnits2.push(unitFact(j, fromA[j]));
       }
     }
-    return { ...base, relation: "enantiomers", differingUnits: differingUnits2, explanation: `mirror images that are not superimposable${salt}` };
+    return {
+      ...base,
+      relation: "enantiomers",
+      differingUnits: differingUnits2,
+      explanation: `mirror images that are not superimposable${salt}`
+    };
   }
   let best = [];
   let bestH = 0;
@@ -29645,7 +30216,8 @@ var init_relate = __esm({
     init_smiles2();
     labelMap = (a) => {
       const m = /* @__PURE__ */ new Map();
-      for (const r of labelUnits(a.p.structure)) if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
+      for (const r of labelUnits(a.p.structure))
+        if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
       return m;
     };
   }
@@ -29685,9 +30257,9 @@ var init_chem = __esm({
   }
 });
 
-// node_modules/yaml/dist/nodes/identity.js
+// ../../work/main/node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
-  "node_modules/yaml/dist/nodes/identity.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/identity.js"(exports) {
     "use strict";
     var ALIAS = /* @__PURE__ */ Symbol.for("yaml.alias");
     var DOC = /* @__PURE__ */ Symbol.for("yaml.document");
@@ -29742,9 +30314,9 @@ var require_identity = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/visit.js
+// ../../work/main/node_modules/yaml/dist/visit.js
 var require_visit = __commonJS({
-  "node_modules/yaml/dist/visit.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/visit.js"(exports) {
     "use strict";
     var identity = require_identity();
     var BREAK = /* @__PURE__ */ Symbol("break visit");
@@ -29900,9 +30472,9 @@ var require_visit = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/directives.js
+// ../../work/main/node_modules/yaml/dist/doc/directives.js
 var require_directives = __commonJS({
-  "node_modules/yaml/dist/doc/directives.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/directives.js"(exports) {
     "use strict";
     var identity = require_identity();
     var visit = require_visit();
@@ -30071,9 +30643,9 @@ var require_directives = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/anchors.js
+// ../../work/main/node_modules/yaml/dist/doc/anchors.js
 var require_anchors = __commonJS({
-  "node_modules/yaml/dist/doc/anchors.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/anchors.js"(exports) {
     "use strict";
     var identity = require_identity();
     var visit = require_visit();
@@ -30141,9 +30713,9 @@ var require_anchors = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/applyReviver.js
+// ../../work/main/node_modules/yaml/dist/doc/applyReviver.js
 var require_applyReviver = __commonJS({
-  "node_modules/yaml/dist/doc/applyReviver.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/applyReviver.js"(exports) {
     "use strict";
     function applyReviver(reviver, obj, key3, val) {
       if (val && typeof val === "object") {
@@ -30191,9 +30763,9 @@ var require_applyReviver = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/toJS.js
+// ../../work/main/node_modules/yaml/dist/nodes/toJS.js
 var require_toJS = __commonJS({
-  "node_modules/yaml/dist/nodes/toJS.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
     function toJS(value, arg, ctx) {
@@ -30221,9 +30793,9 @@ var require_toJS = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Node.js
+// ../../work/main/node_modules/yaml/dist/nodes/Node.js
 var require_Node = __commonJS({
-  "node_modules/yaml/dist/nodes/Node.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Node.js"(exports) {
     "use strict";
     var applyReviver = require_applyReviver();
     var identity = require_identity();
@@ -30262,9 +30834,9 @@ var require_Node = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Alias.js
+// ../../work/main/node_modules/yaml/dist/nodes/Alias.js
 var require_Alias = __commonJS({
-  "node_modules/yaml/dist/nodes/Alias.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Alias.js"(exports) {
     "use strict";
     var anchors = require_anchors();
     var visit = require_visit();
@@ -30380,9 +30952,9 @@ var require_Alias = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Scalar.js
+// ../../work/main/node_modules/yaml/dist/nodes/Scalar.js
 var require_Scalar = __commonJS({
-  "node_modules/yaml/dist/nodes/Scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Scalar.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Node = require_Node();
@@ -30410,9 +30982,9 @@ var require_Scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/createNode.js
+// ../../work/main/node_modules/yaml/dist/doc/createNode.js
 var require_createNode = __commonJS({
-  "node_modules/yaml/dist/doc/createNode.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/createNode.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var identity = require_identity();
@@ -30485,9 +31057,9 @@ var require_createNode = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Collection.js
+// ../../work/main/node_modules/yaml/dist/nodes/Collection.js
 var require_Collection = __commonJS({
-  "node_modules/yaml/dist/nodes/Collection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Collection.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var identity = require_identity();
@@ -30628,9 +31200,9 @@ var require_Collection = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyComment.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyComment.js
 var require_stringifyComment = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
     "use strict";
     var stringifyComment = (str) => str.replace(/^(?!$)(?: $)?/gm, "#");
     function indentComment(comment, indent) {
@@ -30645,9 +31217,9 @@ var require_stringifyComment = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/foldFlowLines.js
+// ../../work/main/node_modules/yaml/dist/stringify/foldFlowLines.js
 var require_foldFlowLines = __commonJS({
-  "node_modules/yaml/dist/stringify/foldFlowLines.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/foldFlowLines.js"(exports) {
     "use strict";
     var FOLD_FLOW = "flow";
     var FOLD_BLOCK = "block";
@@ -30781,9 +31353,9 @@ ${indent}${text.slice(fold + 1, end2)}`;
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyString.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyString.js
 var require_stringifyString = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyString.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyString.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var foldFlowLines = require_foldFlowLines();
@@ -31064,9 +31636,9 @@ ${indent}`);
   }
 });
 
-// node_modules/yaml/dist/stringify/stringify.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringify.js
 var require_stringify = __commonJS({
-  "node_modules/yaml/dist/stringify/stringify.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringify.js"(exports) {
     "use strict";
     var anchors = require_anchors();
     var identity = require_identity();
@@ -31188,9 +31760,9 @@ ${ctx.indent}${str}`;
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyPair.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyPair.js
 var require_stringifyPair = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyPair.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyPair.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -31321,9 +31893,9 @@ ${ctx.indent}`;
   }
 });
 
-// node_modules/yaml/dist/log.js
+// ../../work/main/node_modules/yaml/dist/log.js
 var require_log = __commonJS({
-  "node_modules/yaml/dist/log.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/log.js"(exports) {
     "use strict";
     var node_process = __require("process");
     function debug(logLevel, ...messages10) {
@@ -31343,9 +31915,9 @@ var require_log = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/merge.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/merge.js
 var require_merge = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/merge.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/merge.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -31403,9 +31975,9 @@ var require_merge = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/addPairToJSMap.js
+// ../../work/main/node_modules/yaml/dist/nodes/addPairToJSMap.js
 var require_addPairToJSMap = __commonJS({
-  "node_modules/yaml/dist/nodes/addPairToJSMap.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/addPairToJSMap.js"(exports) {
     "use strict";
     var log = require_log();
     var merge = require_merge();
@@ -31467,9 +32039,9 @@ var require_addPairToJSMap = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Pair.js
+// ../../work/main/node_modules/yaml/dist/nodes/Pair.js
 var require_Pair = __commonJS({
-  "node_modules/yaml/dist/nodes/Pair.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Pair.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var stringifyPair = require_stringifyPair();
@@ -31507,9 +32079,9 @@ var require_Pair = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyCollection.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyCollection.js
 var require_stringifyCollection = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyCollection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyCollection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var stringify = require_stringify();
@@ -31658,9 +32230,9 @@ ${indent}${end}`;
   }
 });
 
-// node_modules/yaml/dist/nodes/YAMLMap.js
+// ../../work/main/node_modules/yaml/dist/nodes/YAMLMap.js
 var require_YAMLMap = __commonJS({
-  "node_modules/yaml/dist/nodes/YAMLMap.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/YAMLMap.js"(exports) {
     "use strict";
     var stringifyCollection = require_stringifyCollection();
     var addPairToJSMap = require_addPairToJSMap();
@@ -31802,9 +32374,9 @@ var require_YAMLMap = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/map.js
+// ../../work/main/node_modules/yaml/dist/schema/common/map.js
 var require_map = __commonJS({
-  "node_modules/yaml/dist/schema/common/map.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/map.js"(exports) {
     "use strict";
     var identity = require_identity();
     var YAMLMap = require_YAMLMap();
@@ -31824,9 +32396,9 @@ var require_map = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/YAMLSeq.js
+// ../../work/main/node_modules/yaml/dist/nodes/YAMLSeq.js
 var require_YAMLSeq = __commonJS({
-  "node_modules/yaml/dist/nodes/YAMLSeq.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/YAMLSeq.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var stringifyCollection = require_stringifyCollection();
@@ -31940,9 +32512,9 @@ var require_YAMLSeq = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/seq.js
+// ../../work/main/node_modules/yaml/dist/schema/common/seq.js
 var require_seq = __commonJS({
-  "node_modules/yaml/dist/schema/common/seq.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/seq.js"(exports) {
     "use strict";
     var identity = require_identity();
     var YAMLSeq = require_YAMLSeq();
@@ -31962,9 +32534,9 @@ var require_seq = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/string.js
+// ../../work/main/node_modules/yaml/dist/schema/common/string.js
 var require_string = __commonJS({
-  "node_modules/yaml/dist/schema/common/string.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/string.js"(exports) {
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
@@ -31981,9 +32553,9 @@ var require_string = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/null.js
+// ../../work/main/node_modules/yaml/dist/schema/common/null.js
 var require_null = __commonJS({
-  "node_modules/yaml/dist/schema/common/null.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/null.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
@@ -31999,9 +32571,9 @@ var require_null = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/bool.js
+// ../../work/main/node_modules/yaml/dist/schema/core/bool.js
 var require_bool = __commonJS({
-  "node_modules/yaml/dist/schema/core/bool.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
@@ -32023,9 +32595,9 @@ var require_bool = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyNumber.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyNumber.js
 var require_stringifyNumber = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
     function stringifyNumber({ format, minFractionDigits, tag, value }) {
       if (typeof value === "bigint")
@@ -32050,9 +32622,9 @@ var require_stringifyNumber = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/float.js
+// ../../work/main/node_modules/yaml/dist/schema/core/float.js
 var require_float = __commonJS({
-  "node_modules/yaml/dist/schema/core/float.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/float.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
@@ -32096,9 +32668,9 @@ var require_float = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/int.js
+// ../../work/main/node_modules/yaml/dist/schema/core/int.js
 var require_int = __commonJS({
-  "node_modules/yaml/dist/schema/core/int.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
@@ -32141,9 +32713,9 @@ var require_int = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/schema.js
+// ../../work/main/node_modules/yaml/dist/schema/core/schema.js
 var require_schema = __commonJS({
-  "node_modules/yaml/dist/schema/core/schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/schema.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -32169,9 +32741,9 @@ var require_schema = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/json/schema.js
+// ../../work/main/node_modules/yaml/dist/schema/json/schema.js
 var require_schema2 = __commonJS({
-  "node_modules/yaml/dist/schema/json/schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/json/schema.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var map = require_map();
@@ -32236,9 +32808,9 @@ var require_schema2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/binary.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/binary.js
 var require_binary = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/binary.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/binary.js"(exports) {
     "use strict";
     var node_buffer = __require("buffer");
     var Scalar = require_Scalar();
@@ -32302,9 +32874,9 @@ var require_binary = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/pairs.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/pairs.js
 var require_pairs = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/pairs.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/pairs.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -32338,8 +32910,8 @@ ${cn.comment}` : item.comment;
     }
     function createPairs(schema, iterable, ctx) {
       const { replacer } = ctx;
-      const pairs3 = new YAMLSeq.YAMLSeq(schema);
-      pairs3.tag = "tag:yaml.org,2002:pairs";
+      const pairs2 = new YAMLSeq.YAMLSeq(schema);
+      pairs2.tag = "tag:yaml.org,2002:pairs";
       let i = 0;
       if (iterable && Symbol.iterator in Object(iterable))
         for (let it of iterable) {
@@ -32363,11 +32935,11 @@ ${cn.comment}` : item.comment;
           } else {
             key3 = it;
           }
-          pairs3.items.push(Pair.createPair(key3, value, ctx));
+          pairs2.items.push(Pair.createPair(key3, value, ctx));
         }
-      return pairs3;
+      return pairs2;
     }
-    var pairs2 = {
+    var pairs = {
       collection: "seq",
       default: false,
       tag: "tag:yaml.org,2002:pairs",
@@ -32375,20 +32947,20 @@ ${cn.comment}` : item.comment;
       createNode: createPairs
     };
     exports.createPairs = createPairs;
-    exports.pairs = pairs2;
+    exports.pairs = pairs;
     exports.resolvePairs = resolvePairs;
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/omap.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/omap.js
 var require_omap = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/omap.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/omap.js"(exports) {
     "use strict";
     var identity = require_identity();
     var toJS = require_toJS();
     var YAMLMap = require_YAMLMap();
     var YAMLSeq = require_YAMLSeq();
-    var pairs2 = require_pairs();
+    var pairs = require_pairs();
     var YAMLOMap = class _YAMLOMap extends YAMLSeq.YAMLSeq {
       constructor() {
         super();
@@ -32424,7 +32996,7 @@ var require_omap = __commonJS({
         return map;
       }
       static from(schema, iterable, ctx) {
-        const pairs$1 = pairs2.createPairs(schema, iterable, ctx);
+        const pairs$1 = pairs.createPairs(schema, iterable, ctx);
         const omap2 = new this();
         omap2.items = pairs$1.items;
         return omap2;
@@ -32438,7 +33010,7 @@ var require_omap = __commonJS({
       default: false,
       tag: "tag:yaml.org,2002:omap",
       resolve(seq, onError) {
-        const pairs$1 = pairs2.resolvePairs(seq, onError);
+        const pairs$1 = pairs.resolvePairs(seq, onError);
         const seenKeys = [];
         for (const { key: key3 } of pairs$1.items) {
           if (identity.isScalar(key3)) {
@@ -32458,9 +33030,9 @@ var require_omap = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/bool.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/bool.js
 var require_bool2 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     function boolStringify({ value, source }, ctx) {
@@ -32490,9 +33062,9 @@ var require_bool2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/float.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/float.js
 var require_float2 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/float.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/float.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
@@ -32539,9 +33111,9 @@ var require_float2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/int.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/int.js
 var require_int2 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
@@ -32618,9 +33190,9 @@ var require_int2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/set.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/set.js
 var require_set = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/set.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/set.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -32707,9 +33279,9 @@ var require_set = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/timestamp.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/timestamp.js
 var require_timestamp = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/timestamp.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/timestamp.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     function parseSexagesimal(str, asBigInt) {
@@ -32795,9 +33367,9 @@ var require_timestamp = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/schema.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/schema.js
 var require_schema3 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/schema.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -32809,7 +33381,7 @@ var require_schema3 = __commonJS({
     var int = require_int2();
     var merge = require_merge();
     var omap = require_omap();
-    var pairs2 = require_pairs();
+    var pairs = require_pairs();
     var set = require_set();
     var timestamp = require_timestamp();
     var schema = [
@@ -32829,7 +33401,7 @@ var require_schema3 = __commonJS({
       binary.binary,
       merge.merge,
       omap.omap,
-      pairs2.pairs,
+      pairs.pairs,
       set.set,
       timestamp.intTime,
       timestamp.floatTime,
@@ -32839,9 +33411,9 @@ var require_schema3 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/tags.js
+// ../../work/main/node_modules/yaml/dist/schema/tags.js
 var require_tags = __commonJS({
-  "node_modules/yaml/dist/schema/tags.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/tags.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -32855,7 +33427,7 @@ var require_tags = __commonJS({
     var binary = require_binary();
     var merge = require_merge();
     var omap = require_omap();
-    var pairs2 = require_pairs();
+    var pairs = require_pairs();
     var schema$2 = require_schema3();
     var set = require_set();
     var timestamp = require_timestamp();
@@ -32881,7 +33453,7 @@ var require_tags = __commonJS({
       merge: merge.merge,
       null: _null.nullTag,
       omap: omap.omap,
-      pairs: pairs2.pairs,
+      pairs: pairs.pairs,
       seq: seq.seq,
       set: set.set,
       timestamp: timestamp.timestamp
@@ -32890,7 +33462,7 @@ var require_tags = __commonJS({
       "tag:yaml.org,2002:binary": binary.binary,
       "tag:yaml.org,2002:merge": merge.merge,
       "tag:yaml.org,2002:omap": omap.omap,
-      "tag:yaml.org,2002:pairs": pairs2.pairs,
+      "tag:yaml.org,2002:pairs": pairs.pairs,
       "tag:yaml.org,2002:set": set.set,
       "tag:yaml.org,2002:timestamp": timestamp.timestamp
     };
@@ -32933,9 +33505,9 @@ var require_tags = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/Schema.js
+// ../../work/main/node_modules/yaml/dist/schema/Schema.js
 var require_Schema = __commonJS({
-  "node_modules/yaml/dist/schema/Schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/Schema.js"(exports) {
     "use strict";
     var identity = require_identity();
     var map = require_map();
@@ -32965,9 +33537,9 @@ var require_Schema = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyDocument.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyDocument.js
 var require_stringifyDocument = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyDocument.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyDocument.js"(exports) {
     "use strict";
     var identity = require_identity();
     var stringify = require_stringify();
@@ -33045,9 +33617,9 @@ var require_stringifyDocument = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/Document.js
+// ../../work/main/node_modules/yaml/dist/doc/Document.js
 var require_Document = __commonJS({
-  "node_modules/yaml/dist/doc/Document.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/Document.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var Collection = require_Collection();
@@ -33354,9 +33926,9 @@ var require_Document = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/errors.js
+// ../../work/main/node_modules/yaml/dist/errors.js
 var require_errors = __commonJS({
-  "node_modules/yaml/dist/errors.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/errors.js"(exports) {
     "use strict";
     var YAMLError = class extends Error {
       constructor(name, pos, code, message) {
@@ -33419,9 +33991,9 @@ ${pointer}
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-props.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-props.js
 var require_resolve_props = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-props.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-props.js"(exports) {
     "use strict";
     function resolveProps(tokens2, { flow, indicator, next, offset, onError, parentIndent, startOnNewline }) {
       let spaceBefore = false;
@@ -33553,9 +34125,9 @@ var require_resolve_props = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-contains-newline.js
+// ../../work/main/node_modules/yaml/dist/compose/util-contains-newline.js
 var require_util_contains_newline = __commonJS({
-  "node_modules/yaml/dist/compose/util-contains-newline.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-contains-newline.js"(exports) {
     "use strict";
     function containsNewline(key3) {
       if (!key3)
@@ -33595,9 +34167,9 @@ var require_util_contains_newline = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-flow-indent-check.js
+// ../../work/main/node_modules/yaml/dist/compose/util-flow-indent-check.js
 var require_util_flow_indent_check = __commonJS({
-  "node_modules/yaml/dist/compose/util-flow-indent-check.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-flow-indent-check.js"(exports) {
     "use strict";
     var utilContainsNewline = require_util_contains_newline();
     function flowIndentCheck(indent, fc, onError) {
@@ -33613,9 +34185,9 @@ var require_util_flow_indent_check = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-map-includes.js
+// ../../work/main/node_modules/yaml/dist/compose/util-map-includes.js
 var require_util_map_includes = __commonJS({
-  "node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
     "use strict";
     var identity = require_identity();
     function mapIncludes(ctx, items, search) {
@@ -33629,9 +34201,9 @@ var require_util_map_includes = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-block-map.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-block-map.js
 var require_resolve_block_map = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-block-map.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-block-map.js"(exports) {
     "use strict";
     var Pair = require_Pair();
     var YAMLMap = require_YAMLMap();
@@ -33737,9 +34309,9 @@ var require_resolve_block_map = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-block-seq.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-block-seq.js
 var require_resolve_block_seq = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-block-seq.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-block-seq.js"(exports) {
     "use strict";
     var YAMLSeq = require_YAMLSeq();
     var resolveProps = require_resolve_props();
@@ -33788,9 +34360,9 @@ var require_resolve_block_seq = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-end.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-end.js
 var require_resolve_end = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-end.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-end.js"(exports) {
     "use strict";
     function resolveEnd(end, offset, reqSpace, onError) {
       let comment = "";
@@ -33831,9 +34403,9 @@ var require_resolve_end = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-flow-collection.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-flow-collection.js
 var require_resolve_flow_collection = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-flow-collection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-flow-collection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -34025,9 +34597,9 @@ var require_resolve_flow_collection = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-collection.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-collection.js
 var require_compose_collection = __commonJS({
-  "node_modules/yaml/dist/compose/compose-collection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-collection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -34051,9 +34623,9 @@ var require_compose_collection = __commonJS({
       const tagToken = props.tag;
       const tagName = !tagToken ? null : ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg));
       if (token.type === "block-seq") {
-        const { anchor, newlineAfterProp: nl } = props;
+        const { anchor, newlineAfterProp: nl2 } = props;
         const lastProp = anchor && tagToken ? anchor.offset > tagToken.offset ? anchor : tagToken : anchor ?? tagToken;
-        if (lastProp && (!nl || nl.offset < lastProp.offset)) {
+        if (lastProp && (!nl2 || nl2.offset < lastProp.offset)) {
           const message = "Missing newline after block sequence props";
           onError(lastProp, "MISSING_CHAR", message);
         }
@@ -34090,18 +34662,18 @@ var require_compose_collection = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-block-scalar.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-block-scalar.js
 var require_resolve_block_scalar = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-block-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-block-scalar.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
-    function resolveBlockScalar(ctx, scalar, onError) {
-      const start = scalar.offset;
-      const header = parseBlockScalarHeader(scalar, ctx.options.strict, onError);
+    function resolveBlockScalar(ctx, scalar2, onError) {
+      const start = scalar2.offset;
+      const header = parseBlockScalarHeader(scalar2, ctx.options.strict, onError);
       if (!header)
         return { value: "", type: null, comment: "", range: [start, start, start] };
       const type = header.mode === ">" ? Scalar.Scalar.BLOCK_FOLDED : Scalar.Scalar.BLOCK_LITERAL;
-      const lines = scalar.source ? splitLines2(scalar.source) : [];
+      const lines = scalar2.source ? splitLines2(scalar2.source) : [];
       let chompStart = lines.length;
       for (let i = lines.length - 1; i >= 0; --i) {
         const content = lines[i][1];
@@ -34113,12 +34685,12 @@ var require_resolve_block_scalar = __commonJS({
       if (chompStart === 0) {
         const value2 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
         let end2 = start + header.length;
-        if (scalar.source)
-          end2 += scalar.source.length;
+        if (scalar2.source)
+          end2 += scalar2.source.length;
         return { value: value2, type, comment: header.comment, range: [start, end2, end2] };
       }
-      let trimIndent = scalar.indent + header.indent;
-      let offset = scalar.offset + header.length;
+      let trimIndent = scalar2.indent + header.indent;
+      let offset = scalar2.offset + header.length;
       let contentStart = 0;
       for (let i = 0; i < chompStart; ++i) {
         const [indent, content] = lines[i];
@@ -34196,7 +34768,7 @@ var require_resolve_block_scalar = __commonJS({
         default:
           value += "\n";
       }
-      const end = start + header.length + scalar.source.length;
+      const end = start + header.length + scalar2.source.length;
       return { value, type, comment: header.comment, range: [start, end, end] };
     }
     function parseBlockScalarHeader({ offset, props }, strict, onError) {
@@ -34273,14 +34845,14 @@ var require_resolve_block_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-flow-scalar.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-flow-scalar.js
 var require_resolve_flow_scalar = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-flow-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-flow-scalar.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var resolveEnd = require_resolve_end();
-    function resolveFlowScalar(scalar, strict, onError) {
-      const { offset, type, source, end } = scalar;
+    function resolveFlowScalar(scalar2, strict, onError) {
+      const { offset, type, source, end } = scalar2;
       let _type;
       let value;
       const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
@@ -34299,7 +34871,7 @@ var require_resolve_flow_scalar = __commonJS({
           break;
         /* istanbul ignore next should not happen */
         default:
-          onError(scalar, "UNEXPECTED_TOKEN", `Expected a flow scalar value, but found: ${type}`);
+          onError(scalar2, "UNEXPECTED_TOKEN", `Expected a flow scalar value, but found: ${type}`);
           return {
             value: "",
             type: null,
@@ -34494,9 +35066,9 @@ var require_resolve_flow_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-scalar.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-scalar.js
 var require_compose_scalar = __commonJS({
-  "node_modules/yaml/dist/compose/compose-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-scalar.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -34514,26 +35086,26 @@ var require_compose_scalar = __commonJS({
         tag = findScalarTagByTest(ctx, value, token, onError);
       else
         tag = ctx.schema[identity.SCALAR];
-      let scalar;
+      let scalar2;
       try {
         const res = tag.resolve(value, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
-        scalar = identity.isScalar(res) ? res : new Scalar.Scalar(res);
+        scalar2 = identity.isScalar(res) ? res : new Scalar.Scalar(res);
       } catch (error) {
         const msg = error instanceof Error ? error.message : String(error);
         onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg);
-        scalar = new Scalar.Scalar(value);
+        scalar2 = new Scalar.Scalar(value);
       }
-      scalar.range = range;
-      scalar.source = value;
+      scalar2.range = range;
+      scalar2.source = value;
       if (type)
-        scalar.type = type;
+        scalar2.type = type;
       if (tagName)
-        scalar.tag = tagName;
+        scalar2.tag = tagName;
       if (tag.format)
-        scalar.format = tag.format;
+        scalar2.format = tag.format;
       if (comment)
-        scalar.comment = comment;
-      return scalar;
+        scalar2.comment = comment;
+      return scalar2;
     }
     function findScalarTagByName(schema, value, tagName, tagToken, onError) {
       if (tagName === "!")
@@ -34575,9 +35147,9 @@ var require_compose_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-empty-scalar-position.js
+// ../../work/main/node_modules/yaml/dist/compose/util-empty-scalar-position.js
 var require_util_empty_scalar_position = __commonJS({
-  "node_modules/yaml/dist/compose/util-empty-scalar-position.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-empty-scalar-position.js"(exports) {
     "use strict";
     function emptyScalarPosition(offset, before, pos) {
       if (before) {
@@ -34605,9 +35177,9 @@ var require_util_empty_scalar_position = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-node.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-node.js
 var require_compose_node = __commonJS({
-  "node_modules/yaml/dist/compose/compose-node.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-node.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var identity = require_identity();
@@ -34711,9 +35283,9 @@ var require_compose_node = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-doc.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-doc.js
 var require_compose_doc = __commonJS({
-  "node_modules/yaml/dist/compose/compose-doc.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-doc.js"(exports) {
     "use strict";
     var Document = require_Document();
     var composeNode = require_compose_node();
@@ -34754,9 +35326,9 @@ var require_compose_doc = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/composer.js
+// ../../work/main/node_modules/yaml/dist/compose/composer.js
 var require_composer = __commonJS({
-  "node_modules/yaml/dist/compose/composer.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/composer.js"(exports) {
     "use strict";
     var node_process = __require("process");
     var directives = require_directives();
@@ -34962,9 +35534,9 @@ ${end.comment}` : end.comment;
   }
 });
 
-// node_modules/yaml/dist/parse/cst-scalar.js
+// ../../work/main/node_modules/yaml/dist/parse/cst-scalar.js
 var require_cst_scalar = __commonJS({
-  "node_modules/yaml/dist/parse/cst-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst-scalar.js"(exports) {
     "use strict";
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
@@ -35126,9 +35698,9 @@ var require_cst_scalar = __commonJS({
         case "block-map":
         case "block-seq": {
           const offset = token.offset + source.length;
-          const nl = { type: "newline", offset, indent: token.indent, source: "\n" };
+          const nl2 = { type: "newline", offset, indent: token.indent, source: "\n" };
           delete token.items;
-          Object.assign(token, { type, source, end: [nl] });
+          Object.assign(token, { type, source, end: [nl2] });
           break;
         }
         default: {
@@ -35147,9 +35719,9 @@ var require_cst_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/cst-stringify.js
+// ../../work/main/node_modules/yaml/dist/parse/cst-stringify.js
 var require_cst_stringify = __commonJS({
-  "node_modules/yaml/dist/parse/cst-stringify.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst-stringify.js"(exports) {
     "use strict";
     var stringify = (cst) => "type" in cst ? stringifyToken(cst) : stringifyItem(cst);
     function stringifyToken(token) {
@@ -35208,9 +35780,9 @@ var require_cst_stringify = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/cst-visit.js
+// ../../work/main/node_modules/yaml/dist/parse/cst-visit.js
 var require_cst_visit = __commonJS({
-  "node_modules/yaml/dist/parse/cst-visit.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst-visit.js"(exports) {
     "use strict";
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
@@ -35225,8 +35797,8 @@ var require_cst_visit = __commonJS({
     visit.REMOVE = REMOVE;
     visit.itemAtPath = (cst, path) => {
       let item = cst;
-      for (const [field, index] of path) {
-        const tok = item?.[field];
+      for (const [field2, index] of path) {
+        const tok = item?.[field2];
         if (tok && "items" in tok) {
           item = tok.items[index];
         } else
@@ -35236,8 +35808,8 @@ var require_cst_visit = __commonJS({
     };
     visit.parentCollection = (cst, path) => {
       const parent = visit.itemAtPath(cst, path.slice(0, -1));
-      const field = path[path.length - 1][0];
-      const coll = parent?.[field];
+      const field2 = path[path.length - 1][0];
+      const coll = parent?.[field2];
       if (coll && "items" in coll)
         return coll;
       throw new Error("Parent collection not found");
@@ -35246,11 +35818,11 @@ var require_cst_visit = __commonJS({
       let ctrl = visitor(item, path);
       if (typeof ctrl === "symbol")
         return ctrl;
-      for (const field of ["key", "value"]) {
-        const token = item[field];
+      for (const field2 of ["key", "value"]) {
+        const token = item[field2];
         if (token && "items" in token) {
           for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path.concat([[field, i]])), token.items[i], visitor);
+            const ci = _visit(Object.freeze(path.concat([[field2, i]])), token.items[i], visitor);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -35260,7 +35832,7 @@ var require_cst_visit = __commonJS({
               i -= 1;
             }
           }
-          if (typeof ctrl === "function" && field === "key")
+          if (typeof ctrl === "function" && field2 === "key")
             ctrl = ctrl(item, path);
         }
       }
@@ -35270,9 +35842,9 @@ var require_cst_visit = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/cst.js
+// ../../work/main/node_modules/yaml/dist/parse/cst.js
 var require_cst = __commonJS({
-  "node_modules/yaml/dist/parse/cst.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst.js"(exports) {
     "use strict";
     var cstScalar = require_cst_scalar();
     var cstStringify = require_cst_stringify();
@@ -35372,9 +35944,9 @@ var require_cst = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/lexer.js
+// ../../work/main/node_modules/yaml/dist/parse/lexer.js
 var require_lexer = __commonJS({
-  "node_modules/yaml/dist/parse/lexer.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/lexer.js"(exports) {
     "use strict";
     var cst = require_cst();
     function isEmpty(ch) {
@@ -35619,18 +36191,18 @@ var require_lexer = __commonJS({
         }
       }
       *parseFlowCollection() {
-        let nl, sp;
+        let nl2, sp;
         let indent = -1;
         do {
-          nl = yield* this.pushNewline();
-          if (nl > 0) {
+          nl2 = yield* this.pushNewline();
+          if (nl2 > 0) {
             sp = yield* this.pushSpaces(false);
             this.indentValue = indent = sp;
           } else {
             sp = 0;
           }
           sp += yield* this.pushSpaces(true);
-        } while (nl + sp > 0);
+        } while (nl2 + sp > 0);
         const line = this.getLine();
         if (line === null)
           return this.setNext("flow");
@@ -35706,16 +36278,16 @@ var require_lexer = __commonJS({
           }
         }
         const qb = this.buffer.substring(0, end);
-        let nl = qb.indexOf("\n", this.pos);
-        if (nl !== -1) {
-          while (nl !== -1) {
-            const cs = this.continueScalar(nl + 1);
+        let nl2 = qb.indexOf("\n", this.pos);
+        if (nl2 !== -1) {
+          while (nl2 !== -1) {
+            const cs = this.continueScalar(nl2 + 1);
             if (cs === -1)
               break;
-            nl = qb.indexOf("\n", cs);
+            nl2 = qb.indexOf("\n", cs);
           }
-          if (nl !== -1) {
-            end = nl - (qb[nl - 1] === "\r" ? 2 : 1);
+          if (nl2 !== -1) {
+            end = nl2 - (qb[nl2 - 1] === "\r" ? 2 : 1);
           }
         }
         if (end === -1) {
@@ -35742,7 +36314,7 @@ var require_lexer = __commonJS({
         return yield* this.pushUntil((ch) => isEmpty(ch) || ch === "#");
       }
       *parseBlockScalar() {
-        let nl = this.pos - 1;
+        let nl2 = this.pos - 1;
         let indent = 0;
         let ch;
         loop: for (let i2 = this.pos; ch = this.buffer[i2]; ++i2) {
@@ -35751,7 +36323,7 @@ var require_lexer = __commonJS({
               indent += 1;
               break;
             case "\n":
-              nl = i2;
+              nl2 = i2;
               indent = 0;
               break;
             case "\r": {
@@ -35775,28 +36347,28 @@ var require_lexer = __commonJS({
             this.indentNext = this.blockScalarIndent + (this.indentNext === 0 ? 1 : this.indentNext);
           }
           do {
-            const cs = this.continueScalar(nl + 1);
+            const cs = this.continueScalar(nl2 + 1);
             if (cs === -1)
               break;
-            nl = this.buffer.indexOf("\n", cs);
-          } while (nl !== -1);
-          if (nl === -1) {
+            nl2 = this.buffer.indexOf("\n", cs);
+          } while (nl2 !== -1);
+          if (nl2 === -1) {
             if (!this.atEnd)
               return this.setNext("block-scalar");
-            nl = this.buffer.length;
+            nl2 = this.buffer.length;
           }
         }
-        let i = nl + 1;
+        let i = nl2 + 1;
         ch = this.buffer[i];
         while (ch === " ")
           ch = this.buffer[++i];
         if (ch === "	") {
           while (ch === "	" || ch === " " || ch === "\r" || ch === "\n")
             ch = this.buffer[++i];
-          nl = i - 1;
+          nl2 = i - 1;
         } else if (!this.blockScalarKeep) {
           do {
-            let i2 = nl - 1;
+            let i2 = nl2 - 1;
             let ch2 = this.buffer[i2];
             if (ch2 === "\r")
               ch2 = this.buffer[--i2];
@@ -35804,13 +36376,13 @@ var require_lexer = __commonJS({
             while (ch2 === " ")
               ch2 = this.buffer[--i2];
             if (ch2 === "\n" && i2 >= this.pos && i2 + 1 + indent > lastChar)
-              nl = i2;
+              nl2 = i2;
             else
               break;
           } while (true);
         }
         yield cst.SCALAR;
-        yield* this.pushToIndex(nl + 1, true);
+        yield* this.pushToIndex(nl2 + 1, true);
         return yield* this.parseLineStart();
       }
       *parsePlainScalar() {
@@ -35961,9 +36533,9 @@ var require_lexer = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/line-counter.js
+// ../../work/main/node_modules/yaml/dist/parse/line-counter.js
 var require_line_counter = __commonJS({
-  "node_modules/yaml/dist/parse/line-counter.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/line-counter.js"(exports) {
     "use strict";
     var LineCounter2 = class {
       constructor() {
@@ -35992,9 +36564,9 @@ var require_line_counter = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/parser.js
+// ../../work/main/node_modules/yaml/dist/parse/parser.js
 var require_parser = __commonJS({
-  "node_modules/yaml/dist/parse/parser.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/parser.js"(exports) {
     "use strict";
     var node_process = __require("process");
     var cst = require_cst();
@@ -36089,7 +36661,7 @@ var require_parser = __commonJS({
         }
       }
     }
-    var Parser = class {
+    var Parser2 = class {
       /**
        * @param onNewLine - If defined, called separately with the start position of
        *   each new line (in `parse()`, including the start of input).
@@ -36361,44 +36933,44 @@ var require_parser = __commonJS({
           };
         }
       }
-      *scalar(scalar) {
+      *scalar(scalar2) {
         if (this.type === "map-value-ind") {
           const prev = getPrevProps(this.peek(2));
           const start = getFirstKeyStartProps(prev);
           let sep4;
-          if (scalar.end) {
-            sep4 = scalar.end;
+          if (scalar2.end) {
+            sep4 = scalar2.end;
             sep4.push(this.sourceToken);
-            delete scalar.end;
+            delete scalar2.end;
           } else
             sep4 = [this.sourceToken];
           const map = {
             type: "block-map",
-            offset: scalar.offset,
-            indent: scalar.indent,
-            items: [{ start, key: scalar, sep: sep4 }]
+            offset: scalar2.offset,
+            indent: scalar2.indent,
+            items: [{ start, key: scalar2, sep: sep4 }]
           };
           this.onKeyLine = true;
           this.stack[this.stack.length - 1] = map;
         } else
-          yield* this.lineEnd(scalar);
+          yield* this.lineEnd(scalar2);
       }
-      *blockScalar(scalar) {
+      *blockScalar(scalar2) {
         switch (this.type) {
           case "space":
           case "comment":
           case "newline":
-            scalar.props.push(this.sourceToken);
+            scalar2.props.push(this.sourceToken);
             return;
           case "scalar":
-            scalar.source = this.source;
+            scalar2.source = this.source;
             this.atNewLine = true;
             this.indent = 0;
             if (this.onNewLine) {
-              let nl = this.source.indexOf("\n") + 1;
-              while (nl !== 0) {
-                this.onNewLine(this.offset + nl);
-                nl = this.source.indexOf("\n", nl) + 1;
+              let nl2 = this.source.indexOf("\n") + 1;
+              while (nl2 !== 0) {
+                this.onNewLine(this.offset + nl2);
+                nl2 = this.source.indexOf("\n", nl2) + 1;
               }
             }
             yield* this.pop();
@@ -36453,25 +37025,25 @@ var require_parser = __commonJS({
           const atNextItem = atMapIndent && (it.sep || it.explicitKey) && this.type !== "seq-item-ind";
           let start = [];
           if (atNextItem && it.sep && !it.value) {
-            const nl = [];
+            const nl2 = [];
             for (let i = 0; i < it.sep.length; ++i) {
               const st = it.sep[i];
               switch (st.type) {
                 case "newline":
-                  nl.push(i);
+                  nl2.push(i);
                   break;
                 case "space":
                   break;
                 case "comment":
                   if (st.indent > map.indent)
-                    nl.length = 0;
+                    nl2.length = 0;
                   break;
                 default:
-                  nl.length = 0;
+                  nl2.length = 0;
               }
             }
-            if (nl.length >= 2)
-              start = it.sep.splice(nl[1]);
+            if (nl2.length >= 2)
+              start = it.sep.splice(nl2[1]);
           }
           switch (this.type) {
             case "anchor":
@@ -36748,10 +37320,10 @@ var require_parser = __commonJS({
       }
       flowScalar(type) {
         if (this.onNewLine) {
-          let nl = this.source.indexOf("\n") + 1;
-          while (nl !== 0) {
-            this.onNewLine(this.offset + nl);
-            nl = this.source.indexOf("\n", nl) + 1;
+          let nl2 = this.source.indexOf("\n") + 1;
+          while (nl2 !== 0) {
+            this.onNewLine(this.offset + nl2);
+            nl2 = this.source.indexOf("\n", nl2) + 1;
           }
         }
         return {
@@ -36862,13 +37434,13 @@ var require_parser = __commonJS({
         }
       }
     };
-    exports.Parser = Parser;
+    exports.Parser = Parser2;
   }
 });
 
-// node_modules/yaml/dist/public-api.js
+// ../../work/main/node_modules/yaml/dist/public-api.js
 var require_public_api = __commonJS({
-  "node_modules/yaml/dist/public-api.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/public-api.js"(exports) {
     "use strict";
     var composer = require_composer();
     var Document = require_Document();
@@ -36963,9 +37535,9 @@ var require_public_api = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/index.js
+// ../../work/main/node_modules/yaml/dist/index.js
 var require_dist = __commonJS({
-  "node_modules/yaml/dist/index.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/index.js"(exports) {
     "use strict";
     var composer = require_composer();
     var Document = require_Document();
@@ -37015,9 +37587,9 @@ var require_dist = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/codegen/code.js
+// ../../work/main/node_modules/ajv/dist/compile/codegen/code.js
 var require_code = __commonJS({
-  "node_modules/ajv/dist/compile/codegen/code.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/codegen/code.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.regexpCode = exports.getEsmExportName = exports.getProperty = exports.safeStringify = exports.stringify = exports.strConcat = exports.addCodeArg = exports.str = exports._ = exports.nil = exports._Code = exports.Name = exports.IDENTIFIER = exports._CodeOrName = void 0;
@@ -37169,9 +37741,9 @@ var require_code = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/codegen/scope.js
+// ../../work/main/node_modules/ajv/dist/compile/codegen/scope.js
 var require_scope = __commonJS({
-  "node_modules/ajv/dist/compile/codegen/scope.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/codegen/scope.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.ValueScope = exports.ValueScopeName = exports.Scope = exports.varKinds = exports.UsedValueState = void 0;
@@ -37314,9 +37886,9 @@ var require_scope = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/codegen/index.js
+// ../../work/main/node_modules/ajv/dist/compile/codegen/index.js
 var require_codegen = __commonJS({
-  "node_modules/ajv/dist/compile/codegen/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/codegen/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.or = exports.and = exports.not = exports.CodeGen = exports.operators = exports.varKinds = exports.ValueScopeName = exports.ValueScope = exports.Scope = exports.Name = exports.regexpCode = exports.stringify = exports.getProperty = exports.nil = exports.strConcat = exports.str = exports._ = void 0;
@@ -37392,11 +37964,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         if (!names[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants);
+          this.rhs = optimizeExpr(this.rhs, names, constants2);
         return this;
       }
       get names() {
@@ -37413,10 +37985,10 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants);
+        this.rhs = optimizeExpr(this.rhs, names, constants2);
         return this;
       }
       get names() {
@@ -37477,8 +38049,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants) {
-        this.code = optimizeExpr(this.code, names, constants);
+      optimizeNames(names, constants2) {
+        this.code = optimizeExpr(this.code, names, constants2);
         return this;
       }
       get names() {
@@ -37507,12 +38079,12 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         const { nodes } = this;
         let i = nodes.length;
         while (i--) {
           const n = nodes[i];
-          if (n.optimizeNames(names, constants))
+          if (n.optimizeNames(names, constants2))
             continue;
           subtractNames(names, n.names);
           nodes.splice(i, 1);
@@ -37565,12 +38137,12 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        if (!(super.optimizeNames(names, constants) || this.else))
+        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
+        if (!(super.optimizeNames(names, constants2) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants);
+        this.condition = optimizeExpr(this.condition, names, constants2);
         return this;
       }
       get names() {
@@ -37593,10 +38165,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names, constants2) {
+        if (!super.optimizeNames(names, constants2))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants);
+        this.iteration = optimizeExpr(this.iteration, names, constants2);
         return this;
       }
       get names() {
@@ -37632,10 +38204,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names, constants2) {
+        if (!super.optimizeNames(names, constants2))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants);
+        this.iterable = optimizeExpr(this.iterable, names, constants2);
         return this;
       }
       get names() {
@@ -37677,11 +38249,11 @@ var require_codegen = __commonJS({
         (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         var _a, _b;
-        super.optimizeNames(names, constants);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants);
+        super.optimizeNames(names, constants2);
+        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
+        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants2);
         return this;
       }
       get names() {
@@ -37982,7 +38554,7 @@ var require_codegen = __commonJS({
     function addExprNames(names, from) {
       return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
     }
-    function optimizeExpr(expr, names, constants) {
+    function optimizeExpr(expr, names, constants2) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -37997,14 +38569,14 @@ var require_codegen = __commonJS({
         return items;
       }, []));
       function replaceName(n) {
-        const c = constants[n.str];
+        const c = constants2[n.str];
         if (c === void 0 || names[n.str] !== 1)
           return n;
         delete names[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants2[c.str] !== void 0);
       }
     }
     function subtractNames(names, from) {
@@ -38034,9 +38606,9 @@ var require_codegen = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/util.js
+// ../../work/main/node_modules/ajv/dist/compile/util.js
 var require_util = __commonJS({
-  "node_modules/ajv/dist/compile/util.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/util.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.checkStrictMode = exports.getErrorPath = exports.Type = exports.useFunc = exports.setEvaluated = exports.evaluatedPropsToName = exports.mergeEvaluated = exports.eachItem = exports.unescapeJsonPointer = exports.escapeJsonPointer = exports.escapeFragment = exports.unescapeFragment = exports.schemaRefOrVal = exports.schemaHasRulesButRef = exports.schemaHasRules = exports.checkUnknownRules = exports.alwaysValidSchema = exports.toHash = void 0;
@@ -38201,9 +38773,9 @@ var require_util = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/names.js
+// ../../work/main/node_modules/ajv/dist/compile/names.js
 var require_names = __commonJS({
-  "node_modules/ajv/dist/compile/names.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/names.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -38240,9 +38812,9 @@ var require_names = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/errors.js
+// ../../work/main/node_modules/ajv/dist/compile/errors.js
 var require_errors2 = __commonJS({
-  "node_modules/ajv/dist/compile/errors.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/errors.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.extendErrors = exports.resetErrorsCount = exports.reportExtraError = exports.reportError = exports.keyword$DataError = exports.keywordError = void 0;
@@ -38362,9 +38934,9 @@ var require_errors2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/boolSchema.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/boolSchema.js
 var require_boolSchema = __commonJS({
-  "node_modules/ajv/dist/compile/validate/boolSchema.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/boolSchema.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.boolOrEmptySchema = exports.topBoolOrEmptySchema = void 0;
@@ -38413,9 +38985,9 @@ var require_boolSchema = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/rules.js
+// ../../work/main/node_modules/ajv/dist/compile/rules.js
 var require_rules = __commonJS({
-  "node_modules/ajv/dist/compile/rules.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/rules.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getRules = exports.isJSONType = void 0;
@@ -38444,9 +39016,9 @@ var require_rules = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/applicability.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/applicability.js
 var require_applicability = __commonJS({
-  "node_modules/ajv/dist/compile/validate/applicability.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/applicability.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.shouldUseRule = exports.shouldUseGroup = exports.schemaHasRulesForType = void 0;
@@ -38467,9 +39039,9 @@ var require_applicability = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/dataType.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/dataType.js
 var require_dataType = __commonJS({
-  "node_modules/ajv/dist/compile/validate/dataType.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/dataType.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.reportTypeError = exports.checkDataTypes = exports.checkDataType = exports.coerceAndCheckDataType = exports.getJSONTypes = exports.getSchemaTypes = exports.DataType = void 0;
@@ -38651,9 +39223,9 @@ var require_dataType = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/defaults.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/defaults.js
 var require_defaults = __commonJS({
-  "node_modules/ajv/dist/compile/validate/defaults.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/defaults.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.assignDefaults = void 0;
@@ -38688,9 +39260,9 @@ var require_defaults = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/code.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/code.js
 var require_code2 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/code.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/code.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateUnion = exports.validateArray = exports.usePattern = exports.callValidateCode = exports.schemaProperties = exports.allSchemaProperties = exports.noPropertyInData = exports.propertyInData = exports.isOwnProperty = exports.hasPropFunc = exports.reportMissingProp = exports.checkMissingProp = exports.checkReportMissingProp = void 0;
@@ -38821,9 +39393,9 @@ var require_code2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/keyword.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/keyword.js
 var require_keyword = __commonJS({
-  "node_modules/ajv/dist/compile/validate/keyword.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/keyword.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateKeywordUsage = exports.validSchemaType = exports.funcKeywordCode = exports.macroKeywordCode = void 0;
@@ -38939,9 +39511,9 @@ var require_keyword = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/subschema.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/subschema.js
 var require_subschema = __commonJS({
-  "node_modules/ajv/dist/compile/validate/subschema.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/subschema.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.extendSubschemaMode = exports.extendSubschemaData = exports.getSubschema = void 0;
@@ -39022,9 +39594,9 @@ var require_subschema = __commonJS({
   }
 });
 
-// node_modules/fast-deep-equal/index.js
+// ../../work/main/node_modules/fast-deep-equal/index.js
 var require_fast_deep_equal = __commonJS({
-  "node_modules/fast-deep-equal/index.js"(exports, module) {
+  "../../work/main/node_modules/fast-deep-equal/index.js"(exports, module) {
     "use strict";
     module.exports = function equal(a, b) {
       if (a === b) return true;
@@ -39057,9 +39629,9 @@ var require_fast_deep_equal = __commonJS({
   }
 });
 
-// node_modules/json-schema-traverse/index.js
+// ../../work/main/node_modules/json-schema-traverse/index.js
 var require_json_schema_traverse = __commonJS({
-  "node_modules/json-schema-traverse/index.js"(exports, module) {
+  "../../work/main/node_modules/json-schema-traverse/index.js"(exports, module) {
     "use strict";
     var traverse2 = module.exports = function(schema, opts, cb) {
       if (typeof opts == "function") {
@@ -39145,9 +39717,9 @@ var require_json_schema_traverse = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/resolve.js
+// ../../work/main/node_modules/ajv/dist/compile/resolve.js
 var require_resolve = __commonJS({
-  "node_modules/ajv/dist/compile/resolve.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/resolve.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getSchemaRefs = exports.resolveUrl = exports.normalizeId = exports._getFullPath = exports.getFullPath = exports.inlineRef = void 0;
@@ -39301,9 +39873,9 @@ var require_resolve = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/index.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/index.js
 var require_validate = __commonJS({
-  "node_modules/ajv/dist/compile/validate/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getData = exports.KeywordCxt = exports.validateFunctionCode = void 0;
@@ -39809,9 +40381,9 @@ var require_validate = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/validation_error.js
+// ../../work/main/node_modules/ajv/dist/runtime/validation_error.js
 var require_validation_error = __commonJS({
-  "node_modules/ajv/dist/runtime/validation_error.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/validation_error.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var ValidationError = class extends Error {
@@ -39825,9 +40397,9 @@ var require_validation_error = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/ref_error.js
+// ../../work/main/node_modules/ajv/dist/compile/ref_error.js
 var require_ref_error = __commonJS({
-  "node_modules/ajv/dist/compile/ref_error.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/ref_error.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var resolve_1 = require_resolve();
@@ -39842,9 +40414,9 @@ var require_ref_error = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/index.js
+// ../../work/main/node_modules/ajv/dist/compile/index.js
 var require_compile = __commonJS({
-  "node_modules/ajv/dist/compile/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.resolveSchema = exports.getCompilingSchema = exports.resolveRef = exports.compileSchema = exports.SchemaEnv = void 0;
@@ -40066,9 +40638,9 @@ var require_compile = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/refs/data.json
+// ../../work/main/node_modules/ajv/dist/refs/data.json
 var require_data = __commonJS({
-  "node_modules/ajv/dist/refs/data.json"(exports, module) {
+  "../../work/main/node_modules/ajv/dist/refs/data.json"(exports, module) {
     module.exports = {
       $id: "https://raw.githubusercontent.com/ajv-validator/ajv/master/lib/refs/data.json#",
       description: "Meta-schema for $data reference (JSON AnySchema extension proposal)",
@@ -40085,9 +40657,9 @@ var require_data = __commonJS({
   }
 });
 
-// node_modules/fast-uri/lib/utils.js
+// ../../work/main/node_modules/fast-uri/lib/utils.js
 var require_utils = __commonJS({
-  "node_modules/fast-uri/lib/utils.js"(exports, module) {
+  "../../work/main/node_modules/fast-uri/lib/utils.js"(exports, module) {
     "use strict";
     var isUUID = RegExp.prototype.test.bind(/^[\da-f]{8}-[\da-f]{4}-[\da-f]{4}-[\da-f]{4}-[\da-f]{12}$/iu);
     var isIPv4 = RegExp.prototype.test.bind(/^(?:(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)$/u);
@@ -40619,9 +41191,9 @@ var require_utils = __commonJS({
   }
 });
 
-// node_modules/fast-uri/lib/schemes.js
+// ../../work/main/node_modules/fast-uri/lib/schemes.js
 var require_schemes = __commonJS({
-  "node_modules/fast-uri/lib/schemes.js"(exports, module) {
+  "../../work/main/node_modules/fast-uri/lib/schemes.js"(exports, module) {
     "use strict";
     var { isUUID } = require_utils();
     var URN_REG = /^([\da-z][\d\-a-z]{0,31}):((?:[\w!$'()*+,\-./:;=@]|%[\da-f]{2})+)$/iu;
@@ -40830,9 +41402,9 @@ var require_schemes = __commonJS({
   }
 });
 
-// node_modules/fast-uri/index.js
+// ../../work/main/node_modules/fast-uri/index.js
 var require_fast_uri = __commonJS({
-  "node_modules/fast-uri/index.js"(exports, module) {
+  "../../work/main/node_modules/fast-uri/index.js"(exports, module) {
     "use strict";
     var { normalizeIPv6, removeDotSegments, removeDotSegmentsRelative, recomposeAuthority, normalizePercentEncoding, normalizePathEncoding, serializePathEncoding, normalizeQueryFragmentEncoding, encodeQuery, encodeFragment, reescapeHostDelimiters, isIPv4, nonSimpleDomain } = require_utils();
     var { SCHEMES, getSchemeHandler } = require_schemes();
@@ -41260,9 +41832,9 @@ var require_fast_uri = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/uri.js
+// ../../work/main/node_modules/ajv/dist/runtime/uri.js
 var require_uri = __commonJS({
-  "node_modules/ajv/dist/runtime/uri.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/uri.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var uri = require_fast_uri();
@@ -41271,9 +41843,9 @@ var require_uri = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/core.js
+// ../../work/main/node_modules/ajv/dist/core.js
 var require_core = __commonJS({
-  "node_modules/ajv/dist/core.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/core.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = void 0;
@@ -41882,9 +42454,9 @@ var require_core = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/core/id.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/core/id.js
 var require_id = __commonJS({
-  "node_modules/ajv/dist/vocabularies/core/id.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/core/id.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var def = {
@@ -41897,9 +42469,9 @@ var require_id = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/core/ref.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/core/ref.js
 var require_ref = __commonJS({
-  "node_modules/ajv/dist/vocabularies/core/ref.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/core/ref.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.callRef = exports.getValidate = void 0;
@@ -42019,9 +42591,9 @@ var require_ref = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/core/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/core/index.js
 var require_core2 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/core/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/core/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var id_1 = require_id();
@@ -42040,9 +42612,9 @@ var require_core2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitNumber.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitNumber.js
 var require_limitNumber = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitNumber.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitNumber.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42072,9 +42644,9 @@ var require_limitNumber = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/multipleOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/multipleOf.js
 var require_multipleOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/multipleOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/multipleOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42100,9 +42672,9 @@ var require_multipleOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/ucs2length.js
+// ../../work/main/node_modules/ajv/dist/runtime/ucs2length.js
 var require_ucs2length = __commonJS({
-  "node_modules/ajv/dist/runtime/ucs2length.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/ucs2length.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     function ucs2length(str) {
@@ -42126,9 +42698,9 @@ var require_ucs2length = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitLength.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitLength.js
 var require_limitLength = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitLength.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitLength.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42158,9 +42730,9 @@ var require_limitLength = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/pattern.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/pattern.js
 var require_pattern = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/pattern.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/pattern.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -42195,9 +42767,9 @@ var require_pattern = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitProperties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitProperties.js
 var require_limitProperties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitProperties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42224,9 +42796,9 @@ var require_limitProperties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/required.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/required.js
 var require_required = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/required.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/required.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -42306,9 +42878,9 @@ var require_required = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitItems.js
 var require_limitItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42335,9 +42907,9 @@ var require_limitItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/equal.js
+// ../../work/main/node_modules/ajv/dist/runtime/equal.js
 var require_equal = __commonJS({
-  "node_modules/ajv/dist/runtime/equal.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/equal.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var equal = require_fast_deep_equal();
@@ -42346,9 +42918,9 @@ var require_equal = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/uniqueItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/uniqueItems.js
 var require_uniqueItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/uniqueItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/uniqueItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var dataType_1 = require_dataType();
@@ -42413,9 +42985,9 @@ var require_uniqueItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/const.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/const.js
 var require_const = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/const.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/const.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42442,9 +43014,9 @@ var require_const = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/enum.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/enum.js
 var require_enum = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/enum.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/enum.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42491,9 +43063,9 @@ var require_enum = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/index.js
 var require_validation = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var limitNumber_1 = require_limitNumber();
@@ -42529,9 +43101,9 @@ var require_validation = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/additionalItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalItems.js
 var require_additionalItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/additionalItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateAdditionalItems = void 0;
@@ -42582,9 +43154,9 @@ var require_additionalItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/items.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/items.js
 var require_items = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/items.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/items.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateTuple = void 0;
@@ -42639,9 +43211,9 @@ var require_items = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/prefixItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/prefixItems.js
 var require_prefixItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/prefixItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/prefixItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var items_1 = require_items();
@@ -42656,9 +43228,9 @@ var require_prefixItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/items2020.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/items2020.js
 var require_items2020 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/items2020.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/items2020.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42691,9 +43263,9 @@ var require_items2020 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/contains.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/contains.js
 var require_contains = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/contains.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/contains.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42785,9 +43357,9 @@ var require_contains = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/dependencies.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/dependencies.js
 var require_dependencies = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/dependencies.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/dependencies.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateSchemaDeps = exports.validatePropertyDeps = exports.error = void 0;
@@ -42879,9 +43451,9 @@ var require_dependencies = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/propertyNames.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/propertyNames.js
 var require_propertyNames = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/propertyNames.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/propertyNames.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42922,9 +43494,9 @@ var require_propertyNames = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js
 var require_additionalProperties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -43028,9 +43600,9 @@ var require_additionalProperties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/properties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/properties.js
 var require_properties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/properties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/properties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var validate_1 = require_validate();
@@ -43086,9 +43658,9 @@ var require_properties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/patternProperties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/patternProperties.js
 var require_patternProperties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/patternProperties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/patternProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -43160,9 +43732,9 @@ var require_patternProperties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/not.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/not.js
 var require_not = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/not.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/not.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -43191,9 +43763,9 @@ var require_not = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/anyOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/anyOf.js
 var require_anyOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/anyOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/anyOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -43208,9 +43780,9 @@ var require_anyOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/oneOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/oneOf.js
 var require_oneOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/oneOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/oneOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43266,9 +43838,9 @@ var require_oneOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/allOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/allOf.js
 var require_allOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/allOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/allOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -43293,9 +43865,9 @@ var require_allOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/if.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/if.js
 var require_if = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/if.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/if.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43362,9 +43934,9 @@ var require_if = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/thenElse.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/thenElse.js
 var require_thenElse = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/thenElse.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/thenElse.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -43380,9 +43952,9 @@ var require_thenElse = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/index.js
 var require_applicator = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var additionalItems_1 = require_additionalItems();
@@ -43428,9 +44000,9 @@ var require_applicator = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/format/format.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/format/format.js
 var require_format = __commonJS({
-  "node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43518,9 +44090,9 @@ var require_format = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/format/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/format/index.js
 var require_format2 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var format_1 = require_format();
@@ -43529,9 +44101,9 @@ var require_format2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/metadata.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/metadata.js
 var require_metadata = __commonJS({
-  "node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.contentVocabulary = exports.metadataVocabulary = void 0;
@@ -43552,9 +44124,9 @@ var require_metadata = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/draft7.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/draft7.js
 var require_draft7 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var core_1 = require_core2();
@@ -43574,9 +44146,9 @@ var require_draft7 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/discriminator/types.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/discriminator/types.js
 var require_types = __commonJS({
-  "node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.DiscrError = void 0;
@@ -43588,9 +44160,9 @@ var require_types = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/discriminator/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/discriminator/index.js
 var require_discriminator = __commonJS({
-  "node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43693,9 +44265,9 @@ var require_discriminator = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/refs/json-schema-draft-07.json
+// ../../work/main/node_modules/ajv/dist/refs/json-schema-draft-07.json
 var require_json_schema_draft_07 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
+  "../../work/main/node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
     module.exports = {
       $schema: "http://json-schema.org/draft-07/schema#",
       $id: "http://json-schema.org/draft-07/schema#",
@@ -43850,9 +44422,9 @@ var require_json_schema_draft_07 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/ajv.js
+// ../../work/main/node_modules/ajv/dist/ajv.js
 var require_ajv = __commonJS({
-  "node_modules/ajv/dist/ajv.js"(exports, module) {
+  "../../work/main/node_modules/ajv/dist/ajv.js"(exports, module) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv = void 0;
@@ -44070,7 +44642,7 @@ function finish(out, signs, problem) {
     seen.set(it.locant, it.offset);
   }
   const stars = out.items.filter((it) => it.relativeStar).length;
-  const pairs2 = out.items.filter((it) => it.pair).length;
+  const pairs = out.items.filter((it) => it.pair).length;
   const chiralItems = out.items.filter(
     (it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P"
   );
@@ -44080,22 +44652,22 @@ function finish(out, signs, problem) {
       "some descriptors carry * and others do not"
     );
   }
-  if (pairs2 > 0 && pairs2 < chiralItems.length) {
+  if (pairs > 0 && pairs < chiralItems.length) {
     out.remarks.push(
       "RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate"
     );
   }
-  const racemic = out.prefixes.includes("rac") || pairs2 > 0 || out.rotationSign === "±" || out.fischer === "DL";
+  const racemic = out.prefixes.includes("rac") || pairs > 0 || out.rotationSign === "±" || out.fischer === "DL";
   const relative4 = out.prefixes.includes("rel") || stars > 0;
   if (racemic && relative4) {
     problem(0, "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed; P-93.1.3 uses one of them");
   }
-  if (out.prefixes.includes("rel") && pairs2 > 0)
+  if (out.prefixes.includes("rel") && pairs > 0)
     problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
   if (out.prefixes.length > 0 && out.items.length === 0) {
     problem(0, `'${out.prefixes[0]}-' must be followed by descriptors such as (1R,2S)`);
   }
-  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs2 === 0) {
+  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs === 0) {
     const it = chiralItems[0];
     problem(it.offset, "(±) marks a racemate but the descriptors are absolute; write (…RS,…SR) or rac-(…)");
   }
@@ -44177,14 +44749,14 @@ function compareDescriptors(parsed, units, options = {}) {
   if (mapped && numeric) {
     result.method = "per-locant";
     const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
-    const pairs2 = [];
+    const pairs = [];
     for (const it of parsed.items) {
       const u = byLocant(Number(it.locant));
       if (!u) result.notStereoUnits.push(it.locant);
       else if (!u.defined || u.label === null) result.undefinedAt.push(it.locant);
-      else pairs2.push({ it, u });
+      else pairs.push({ it, u });
     }
-    const mismatchesFor = (invert) => pairs2.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
+    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
       locant: it.locant,
       declared: it.pair ?? it.label + (it.axial ? "a" : ""),
       computed: u.label,
@@ -44194,7 +44766,7 @@ function compareDescriptors(parsed, units, options = {}) {
     const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
     result.matchedInverted = mayInvert && inverted2.length < direct2.length;
     result.mismatches = result.matchedInverted ? inverted2 : direct2;
-    const cited = new Set(pairs2.map((p) => p.u));
+    const cited = new Set(pairs.map((p) => p.u));
     for (const u of defined) {
       if (!cited.has(u)) {
         result.unlisted.push({
@@ -44279,13 +44851,13 @@ function declaredDescriptors(record2) {
   };
 }
 function declaredSign(record2) {
-  const { field, name } = declaredDescriptors(record2);
-  if (field?.rotationSign) return { sign: field.rotationSign, field: "stereo.descriptors" };
+  const { field: field2, name } = declaredDescriptors(record2);
+  if (field2?.rotationSign) return { sign: field2.rotationSign, field: "stereo.descriptors" };
   if (name?.rotationSign) return { sign: name.rotationSign, field: "name" };
   return null;
 }
-function finding(messageId, field, data, severity) {
-  const f = { messageId, field, data };
+function finding(messageId, field2, data, severity) {
+  const f = { messageId, field: field2, data };
   if (severity) f.severity = severity;
   return f;
 }
@@ -44331,8 +44903,8 @@ function escapingPath(recordFile, path) {
 }
 function run(ctx) {
   const findings = [];
-  const add = (id, field2, data) => {
-    findings.push(finding(id, field2, data));
+  const add = (id, field3, data) => {
+    findings.push(finding(id, field3, data));
   };
   const sources = ctx.loaded.sources;
   if (sources?.main?.error) {
@@ -44357,12 +44929,12 @@ function run(ctx) {
     const out = escapingPath(ctx.loaded.file, p.path);
     if (out !== null) add("molfile-path-outside", p.field, { field: p.field, path: p.path, resolved: out });
   }
-  const field = mainField(ctx);
+  const field2 = mainField(ctx);
   if (ctx.record && ctx.record.structure.smiles === void 0 && ctx.record.structure.molfile === void 0) {
     add("no-structure", "structure", { field: "structure" });
-  } else if (ctx.main.error && !findings.some((f) => f.field === field)) {
-    add("structure-unreadable", field, {
-      field,
+  } else if (ctx.main.error && !findings.some((f) => f.field === field2)) {
+    add("structure-unreadable", field2, {
+      field: field2,
       error: ctx.main.error.message,
       where: where(ctx.main),
       errorLine: ctx.main.error.line,
@@ -44383,7 +44955,7 @@ function run(ctx) {
     }
   });
   for (const remark of ctx.main.facts?.remarks ?? []) {
-    findings.push(finding("reader-remark", field, { field, remark }, "note"));
+    findings.push(finding("reader-remark", field2, { field: field2, remark }, "note"));
   }
   if (findings.some((f) => f.severity !== "note")) return { findings };
   const facts = ctx.main.facts;
@@ -44423,13 +44995,13 @@ function mixtureFindings(ctx, parent) {
   const form = record2.stereo.form;
   const comps = record2.stereo.components ?? [];
   const out = [];
-  const field = "stereo.components";
+  const field2 = "stereo.components";
   if (form === "diastereomer-mixture" && comps.length < 2) {
-    out.push(finding("mixture-needs-components", field, { form, count: comps.length }));
+    out.push(finding("mixture-needs-components", field2, { form, count: comps.length }));
     return out;
   }
   if (form === "racemate" && comps.length > 0 && comps.length !== 2) {
-    out.push(finding("racemate-components-count", field, { form, count: comps.length }, "warning"));
+    out.push(finding("racemate-components-count", field2, { form, count: comps.length }, "warning"));
     return out;
   }
   if (form !== "diastereomer-mixture" && form !== "racemate") return out;
@@ -44618,8 +45190,8 @@ function run3(ctx) {
   const descField = decl.field ? "stereo.descriptors" : "name";
   const descText = decl.field ? record2.stereo.descriptors ?? "" : record2.name ?? "";
   const out = [];
-  const add = (id, field, data, severity) => {
-    out.push(finding(id, field, { form, meaning: f.enhanced.meaning, ...data }, severity));
+  const add = (id, field2, data, severity) => {
+    out.push(finding(id, field2, { form, meaning: f.enhanced.meaning, ...data }, severity));
   };
   if (form === "single-enantiomer" && and.length > 0) {
     add("and-group-with-single-enantiomer", "stereo.form", {
@@ -44723,36 +45295,36 @@ function prefixFindings(ctx, decl, facts) {
     sources.push({ field: "stereo.descriptors", text: record2.stereo.descriptors ?? "", p: decl.field });
   if (decl.name) sources.push({ field: "name", text: record2.name ?? "", p: decl.name });
   const seen = /* @__PURE__ */ new Set();
-  const add = (id, field, data, severity) => {
+  const add = (id, field2, data, severity) => {
     if (seen.has(id)) return;
     seen.add(id);
-    out.push(finding(id, field, { field, form, ...data }, severity));
+    out.push(finding(id, field2, { field: field2, form, ...data }, severity));
   };
   const drawnAbsolute = facts.enhanced.meaning === "absolute" && ctx.main.structure?.chiralFlag !== false && facts.chiral === true;
-  for (const { field, text, p } of sources) {
+  for (const { field: field2, text, p } of sources) {
     if (p.problemDetails.length > 0 && p.items.length === 0 && p.mode === "none") continue;
     if (p.mode === "racemic") {
       if (["single-enantiomer", "enantioenriched", "achiral", "meso"].includes(form)) {
-        add("racemic-notation-needs-racemate", field, { notation: notation(p), text });
+        add("racemic-notation-needs-racemate", field2, { notation: notation(p), text });
       } else if (form === "single-diastereomer") {
-        add("racemic-notation-needs-racemate", field, { notation: notation(p), text }, "warning");
+        add("racemic-notation-needs-racemate", field2, { notation: notation(p), text }, "warning");
       }
     }
     if (p.mode === "absolute" && form === "racemate" && p.items.some((i) => "RSMP".includes(i.label))) {
-      add("absolute-descriptors-with-racemate", field, { text });
+      add("absolute-descriptors-with-racemate", field2, { text });
     }
     if (p.mode === "relative") {
       if (form === "racemate")
-        add("relative-notation-with-racemate", field, { notation: notation(p), text }, "warning");
+        add("relative-notation-with-racemate", field2, { notation: notation(p), text }, "warning");
       else if ((form === "single-enantiomer" || form === "enantioenriched") && drawnAbsolute) {
-        add("relative-notation-with-absolute-drawing", field, { notation: notation(p), text }, "note");
+        add("relative-notation-with-absolute-drawing", field2, { notation: notation(p), text }, "note");
       }
     }
     if ((p.rotationSign === "+" || p.rotationSign === "-") && ["racemate", "meso", "achiral"].includes(form)) {
-      add("optical-sign-with-inactive-form", field, { sign: p.rotationSign === "+" ? "(+)" : "(−)", text });
+      add("optical-sign-with-inactive-form", field2, { sign: p.rotationSign === "+" ? "(+)" : "(−)", text });
     }
     if (p.words.includes("meso") && ["single-enantiomer", "enantioenriched", "racemate"].includes(form)) {
-      add("meso-prefix-with-chiral-form", field, { text });
+      add("meso-prefix-with-chiral-form", field2, { text });
     }
   }
   return out;
@@ -44778,9 +45350,9 @@ function countsText(c) {
   const e = Object.entries(c).filter(([, v]) => v > 0);
   return e.length ? e.map(([k, v]) => `${v} ${k}`).join(", ") : "no labelled units";
 }
-function compareOne(field, text, parsed, facts, out, form, evidence2) {
+function compareOne(field2, text, parsed, facts, out, form, evidence2) {
   const add = (id, data, severity) => {
-    out.push(finding(id, field, { field, text, ...data }, severity));
+    out.push(finding(id, field2, { field: field2, text, ...data }, severity));
   };
   for (const p of parsed.problemDetails)
     add("descriptor-unreadable", { problem: p.message, offset: p.offset });
@@ -44907,10 +45479,10 @@ function run4(ctx) {
   (record2.stereo.components ?? []).forEach((c, i) => {
     const cf = ctx.components[i]?.facts;
     if (!c.descriptors || !cf) return;
-    const field = `stereo.components.${i}.descriptors`;
+    const field2 = `stereo.components.${i}.descriptors`;
     note(
       `component ${i + 1} ${c.descriptors}`,
-      compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, "component", evidence2)
+      compareOne(field2, c.descriptors, parseDescriptors(c.descriptors), cf, out, "component", evidence2)
     );
   });
   out.push(...prefixFindings(ctx, decl, f));
@@ -45019,8 +45591,8 @@ function run5(ctx) {
   if (ratio === void 0 && ee === void 0) return { findings: [], notApplicable: true };
   const cfg = ctx.config;
   const out = [];
-  const add = (id, field, data, severity) => {
-    out.push(finding(id, field, { form, ...data }, severity));
+  const add = (id, field2, data, severity) => {
+    out.push(finding(id, field2, { form, ...data }, severity));
   };
   const evidence2 = [];
   let ratioEe = null;
@@ -45083,9 +45655,9 @@ function run5(ctx) {
   const effectiveEe = ee ?? ratioEe;
   const source = ee !== void 0 ? "stated" : `from the ratio ${ratio ?? ""}`;
   if (effectiveEe !== null) {
-    const field = ee !== void 0 ? "stereo.ee" : "stereo.ratio";
+    const field2 = ee !== void 0 ? "stereo.ee" : "stereo.ratio";
     if (form === "single-enantiomer" && effectiveEe < cfg.singleEnantiomerMinEe) {
-      add("single-enantiomer-ee-low", field, {
+      add("single-enantiomer-ee-low", field2, {
         ee: fmt(effectiveEe),
         source,
         threshold: cfg.singleEnantiomerMinEe
@@ -45094,7 +45666,7 @@ function run5(ctx) {
     if (form === "enantioenriched" && effectiveEe <= cfg.eeTolerance) {
       add(
         "enantioenriched-ee-zero",
-        field,
+        field2,
         { ee: fmt(effectiveEe), source, tolerance: cfg.eeTolerance },
         "warning"
       );
@@ -45158,8 +45730,8 @@ function run6(ctx) {
   const tol = ctx.config.zeroRotationTolerance;
   const out = [];
   const base = { form, value: rot2.value, conditions: conditions(rot2), tolerance: tol };
-  const add = (id, field, data, severity) => {
-    out.push(finding(id, field, { ...base, ...data }, severity));
+  const add = (id, field2, data, severity) => {
+    out.push(finding(id, field2, { ...base, ...data }, severity));
   };
   const zero = Math.abs(rot2.value) <= tol;
   if (WHY[form] && !zero) add("rotation-should-be-zero", "stereo.rotation.value", { why: WHY[form] });
@@ -45392,14 +45964,14 @@ function reviewWaivers(record2, findings, knownChecks) {
   const out = [];
   const firstIndex = /* @__PURE__ */ new Map();
   waivers.forEach((w, index) => {
-    const field = `waivers.${index}`;
+    const field2 = `waivers.${index}`;
     const missing = [
       blank(w.reason) ? "reason" : null,
       blank(w.approved_by) ? "approver (approved_by)" : null
     ].filter((x) => x !== null);
     if (missing.length) {
       out.push(
-        finding("waiver-incomplete", field, {
+        finding("waiver-incomplete", field2, {
           waivedCheck: w.check,
           index,
           missing: missing.join(" and no ")
@@ -45408,7 +45980,7 @@ function reviewWaivers(record2, findings, knownChecks) {
     }
     const seen = firstIndex.get(w.check);
     if (seen !== void 0) {
-      out.push(finding("waiver-duplicate", field, { waivedCheck: w.check, index, first: seen }, "note"));
+      out.push(finding("waiver-duplicate", field2, { waivedCheck: w.check, index, first: seen }, "note"));
       return;
     }
     firstIndex.set(w.check, index);
@@ -45417,7 +45989,7 @@ function reviewWaivers(record2, findings, knownChecks) {
       out.push(
         finding(
           "waiver-matches-nothing",
-          field,
+          field2,
           {
             waivedCheck: w.check,
             index,
@@ -45499,9 +46071,9 @@ var init_checks = __esm({
   }
 });
 
-// node_modules/cli-progress/lib/eta.js
+// ../../work/main/node_modules/cli-progress/lib/eta.js
 var require_eta = __commonJS({
-  "node_modules/cli-progress/lib/eta.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/eta.js"(exports, module) {
     var ETA = class {
       constructor(length, initTime, initValue) {
         this.etaBufferLength = length || 100;
@@ -45546,9 +46118,9 @@ var require_eta = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/terminal.js
+// ../../work/main/node_modules/cli-progress/lib/terminal.js
 var require_terminal = __commonJS({
-  "node_modules/cli-progress/lib/terminal.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/terminal.js"(exports, module) {
     var _readline = __require("readline");
     var Terminal = class {
       constructor(outputStream) {
@@ -45665,9 +46237,9 @@ var require_terminal = __commonJS({
   }
 });
 
-// node_modules/ansi-regex/index.js
+// ../../work/main/node_modules/ansi-regex/index.js
 var require_ansi_regex = __commonJS({
-  "node_modules/ansi-regex/index.js"(exports, module) {
+  "../../work/main/node_modules/ansi-regex/index.js"(exports, module) {
     "use strict";
     module.exports = ({ onlyFirst = false } = {}) => {
       const pattern = [
@@ -45679,18 +46251,18 @@ var require_ansi_regex = __commonJS({
   }
 });
 
-// node_modules/strip-ansi/index.js
+// ../../work/main/node_modules/strip-ansi/index.js
 var require_strip_ansi = __commonJS({
-  "node_modules/strip-ansi/index.js"(exports, module) {
+  "../../work/main/node_modules/strip-ansi/index.js"(exports, module) {
     "use strict";
     var ansiRegex = require_ansi_regex();
     module.exports = (string) => typeof string === "string" ? string.replace(ansiRegex(), "") : string;
   }
 });
 
-// node_modules/is-fullwidth-code-point/index.js
+// ../../work/main/node_modules/is-fullwidth-code-point/index.js
 var require_is_fullwidth_code_point = __commonJS({
-  "node_modules/is-fullwidth-code-point/index.js"(exports, module) {
+  "../../work/main/node_modules/is-fullwidth-code-point/index.js"(exports, module) {
     "use strict";
     var isFullwidthCodePoint = (codePoint) => {
       if (Number.isNaN(codePoint)) {
@@ -45721,9 +46293,9 @@ var require_is_fullwidth_code_point = __commonJS({
   }
 });
 
-// node_modules/emoji-regex/index.js
+// ../../work/main/node_modules/emoji-regex/index.js
 var require_emoji_regex = __commonJS({
-  "node_modules/emoji-regex/index.js"(exports, module) {
+  "../../work/main/node_modules/emoji-regex/index.js"(exports, module) {
     "use strict";
     module.exports = function() {
       return /\uD83C\uDFF4\uDB40\uDC67\uDB40\uDC62(?:\uDB40\uDC65\uDB40\uDC6E\uDB40\uDC67|\uDB40\uDC73\uDB40\uDC63\uDB40\uDC74|\uDB40\uDC77\uDB40\uDC6C\uDB40\uDC73)\uDB40\uDC7F|\uD83D\uDC68(?:\uD83C\uDFFC\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68\uD83C\uDFFB|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFF\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFE])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFE\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFD])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFD\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFC])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\u200D(?:\u2764\uFE0F\u200D(?:\uD83D\uDC8B\u200D)?\uD83D\uDC68|(?:\uD83D[\uDC68\uDC69])\u200D(?:\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67]))|\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67])|(?:\uD83D[\uDC68\uDC69])\u200D(?:\uD83D[\uDC66\uDC67])|[\u2695\u2696\u2708]\uFE0F|\uD83D[\uDC66\uDC67]|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|(?:\uD83C\uDFFB\u200D[\u2695\u2696\u2708]|\uD83C\uDFFF\u200D[\u2695\u2696\u2708]|\uD83C\uDFFE\u200D[\u2695\u2696\u2708]|\uD83C\uDFFD\u200D[\u2695\u2696\u2708]|\uD83C\uDFFC\u200D[\u2695\u2696\u2708])\uFE0F|\uD83C\uDFFB\u200D(?:\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C[\uDFFB-\uDFFF])|(?:\uD83E\uDDD1\uD83C\uDFFB\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFC\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)\uD83C\uDFFB|\uD83E\uDDD1(?:\uD83C\uDFFF\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1(?:\uD83C[\uDFFB-\uDFFF])|\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1)|(?:\uD83E\uDDD1\uD83C\uDFFE\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFF\u200D\uD83E\uDD1D\u200D(?:\uD83D[\uDC68\uDC69]))(?:\uD83C[\uDFFB-\uDFFE])|(?:\uD83E\uDDD1\uD83C\uDFFC\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFD\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)(?:\uD83C[\uDFFB\uDFFC])|\uD83D\uDC69(?:\uD83C\uDFFE\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFD\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFC\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFD-\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFB\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFC-\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFD\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFC\uDFFE\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\u200D(?:\u2764\uFE0F\u200D(?:\uD83D\uDC8B\u200D(?:\uD83D[\uDC68\uDC69])|\uD83D[\uDC68\uDC69])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFF\u200D(?:\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD]))|\uD83D\uDC69\u200D\uD83D\uDC69\u200D(?:\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67]))|(?:\uD83E\uDDD1\uD83C\uDFFD\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFE\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)(?:\uD83C[\uDFFB-\uDFFD])|\uD83D\uDC69\u200D\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC69\u200D\uD83D\uDC69\u200D(?:\uD83D[\uDC66\uDC67])|(?:\uD83D\uDC41\uFE0F\u200D\uD83D\uDDE8|\uD83D\uDC69(?:\uD83C\uDFFF\u200D[\u2695\u2696\u2708]|\uD83C\uDFFE\u200D[\u2695\u2696\u2708]|\uD83C\uDFFC\u200D[\u2695\u2696\u2708]|\uD83C\uDFFB\u200D[\u2695\u2696\u2708]|\uD83C\uDFFD\u200D[\u2695\u2696\u2708]|\u200D[\u2695\u2696\u2708])|(?:(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)\uFE0F|\uD83D\uDC6F|\uD83E[\uDD3C\uDDDE\uDDDF])\u200D[\u2640\u2642]|(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)(?:\uD83C[\uDFFB-\uDFFF])\u200D[\u2640\u2642]|(?:\uD83C[\uDFC3\uDFC4\uDFCA]|\uD83D[\uDC6E\uDC71\uDC73\uDC77\uDC81\uDC82\uDC86\uDC87\uDE45-\uDE47\uDE4B\uDE4D\uDE4E\uDEA3\uDEB4-\uDEB6]|\uD83E[\uDD26\uDD37-\uDD39\uDD3D\uDD3E\uDDB8\uDDB9\uDDCD-\uDDCF\uDDD6-\uDDDD])(?:(?:\uD83C[\uDFFB-\uDFFF])\u200D[\u2640\u2642]|\u200D[\u2640\u2642])|\uD83C\uDFF4\u200D\u2620)\uFE0F|\uD83D\uDC69\u200D\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67])|\uD83C\uDFF3\uFE0F\u200D\uD83C\uDF08|\uD83D\uDC15\u200D\uD83E\uDDBA|\uD83D\uDC69\u200D\uD83D\uDC66|\uD83D\uDC69\u200D\uD83D\uDC67|\uD83C\uDDFD\uD83C\uDDF0|\uD83C\uDDF4\uD83C\uDDF2|\uD83C\uDDF6\uD83C\uDDE6|[#\*0-9]\uFE0F\u20E3|\uD83C\uDDE7(?:\uD83C[\uDDE6\uDDE7\uDDE9-\uDDEF\uDDF1-\uDDF4\uDDF6-\uDDF9\uDDFB\uDDFC\uDDFE\uDDFF])|\uD83C\uDDF9(?:\uD83C[\uDDE6\uDDE8\uDDE9\uDDEB-\uDDED\uDDEF-\uDDF4\uDDF7\uDDF9\uDDFB\uDDFC\uDDFF])|\uD83C\uDDEA(?:\uD83C[\uDDE6\uDDE8\uDDEA\uDDEC\uDDED\uDDF7-\uDDFA])|\uD83E\uDDD1(?:\uD83C[\uDFFB-\uDFFF])|\uD83C\uDDF7(?:\uD83C[\uDDEA\uDDF4\uDDF8\uDDFA\uDDFC])|\uD83D\uDC69(?:\uD83C[\uDFFB-\uDFFF])|\uD83C\uDDF2(?:\uD83C[\uDDE6\uDDE8-\uDDED\uDDF0-\uDDFF])|\uD83C\uDDE6(?:\uD83C[\uDDE8-\uDDEC\uDDEE\uDDF1\uDDF2\uDDF4\uDDF6-\uDDFA\uDDFC\uDDFD\uDDFF])|\uD83C\uDDF0(?:\uD83C[\uDDEA\uDDEC-\uDDEE\uDDF2\uDDF3\uDDF5\uDDF7\uDDFC\uDDFE\uDDFF])|\uD83C\uDDED(?:\uD83C[\uDDF0\uDDF2\uDDF3\uDDF7\uDDF9\uDDFA])|\uD83C\uDDE9(?:\uD83C[\uDDEA\uDDEC\uDDEF\uDDF0\uDDF2\uDDF4\uDDFF])|\uD83C\uDDFE(?:\uD83C[\uDDEA\uDDF9])|\uD83C\uDDEC(?:\uD83C[\uDDE6\uDDE7\uDDE9-\uDDEE\uDDF1-\uDDF3\uDDF5-\uDDFA\uDDFC\uDDFE])|\uD83C\uDDF8(?:\uD83C[\uDDE6-\uDDEA\uDDEC-\uDDF4\uDDF7-\uDDF9\uDDFB\uDDFD-\uDDFF])|\uD83C\uDDEB(?:\uD83C[\uDDEE-\uDDF0\uDDF2\uDDF4\uDDF7])|\uD83C\uDDF5(?:\uD83C[\uDDE6\uDDEA-\uDDED\uDDF0-\uDDF3\uDDF7-\uDDF9\uDDFC\uDDFE])|\uD83C\uDDFB(?:\uD83C[\uDDE6\uDDE8\uDDEA\uDDEC\uDDEE\uDDF3\uDDFA])|\uD83C\uDDF3(?:\uD83C[\uDDE6\uDDE8\uDDEA-\uDDEC\uDDEE\uDDF1\uDDF4\uDDF5\uDDF7\uDDFA\uDDFF])|\uD83C\uDDE8(?:\uD83C[\uDDE6\uDDE8\uDDE9\uDDEB-\uDDEE\uDDF0-\uDDF5\uDDF7\uDDFA-\uDDFF])|\uD83C\uDDF1(?:\uD83C[\uDDE6-\uDDE8\uDDEE\uDDF0\uDDF7-\uDDFB\uDDFE])|\uD83C\uDDFF(?:\uD83C[\uDDE6\uDDF2\uDDFC])|\uD83C\uDDFC(?:\uD83C[\uDDEB\uDDF8])|\uD83C\uDDFA(?:\uD83C[\uDDE6\uDDEC\uDDF2\uDDF3\uDDF8\uDDFE\uDDFF])|\uD83C\uDDEE(?:\uD83C[\uDDE8-\uDDEA\uDDF1-\uDDF4\uDDF6-\uDDF9])|\uD83C\uDDEF(?:\uD83C[\uDDEA\uDDF2\uDDF4\uDDF5])|(?:\uD83C[\uDFC3\uDFC4\uDFCA]|\uD83D[\uDC6E\uDC71\uDC73\uDC77\uDC81\uDC82\uDC86\uDC87\uDE45-\uDE47\uDE4B\uDE4D\uDE4E\uDEA3\uDEB4-\uDEB6]|\uD83E[\uDD26\uDD37-\uDD39\uDD3D\uDD3E\uDDB8\uDDB9\uDDCD-\uDDCF\uDDD6-\uDDDD])(?:\uD83C[\uDFFB-\uDFFF])|(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)(?:\uD83C[\uDFFB-\uDFFF])|(?:[\u261D\u270A-\u270D]|\uD83C[\uDF85\uDFC2\uDFC7]|\uD83D[\uDC42\uDC43\uDC46-\uDC50\uDC66\uDC67\uDC6B-\uDC6D\uDC70\uDC72\uDC74-\uDC76\uDC78\uDC7C\uDC83\uDC85\uDCAA\uDD74\uDD7A\uDD90\uDD95\uDD96\uDE4C\uDE4F\uDEC0\uDECC]|\uD83E[\uDD0F\uDD18-\uDD1C\uDD1E\uDD1F\uDD30-\uDD36\uDDB5\uDDB6\uDDBB\uDDD2-\uDDD5])(?:\uD83C[\uDFFB-\uDFFF])|(?:[\u231A\u231B\u23E9-\u23EC\u23F0\u23F3\u25FD\u25FE\u2614\u2615\u2648-\u2653\u267F\u2693\u26A1\u26AA\u26AB\u26BD\u26BE\u26C4\u26C5\u26CE\u26D4\u26EA\u26F2\u26F3\u26F5\u26FA\u26FD\u2705\u270A\u270B\u2728\u274C\u274E\u2753-\u2755\u2757\u2795-\u2797\u27B0\u27BF\u2B1B\u2B1C\u2B50\u2B55]|\uD83C[\uDC04\uDCCF\uDD8E\uDD91-\uDD9A\uDDE6-\uDDFF\uDE01\uDE1A\uDE2F\uDE32-\uDE36\uDE38-\uDE3A\uDE50\uDE51\uDF00-\uDF20\uDF2D-\uDF35\uDF37-\uDF7C\uDF7E-\uDF93\uDFA0-\uDFCA\uDFCF-\uDFD3\uDFE0-\uDFF0\uDFF4\uDFF8-\uDFFF]|\uD83D[\uDC00-\uDC3E\uDC40\uDC42-\uDCFC\uDCFF-\uDD3D\uDD4B-\uDD4E\uDD50-\uDD67\uDD7A\uDD95\uDD96\uDDA4\uDDFB-\uDE4F\uDE80-\uDEC5\uDECC\uDED0-\uDED2\uDED5\uDEEB\uDEEC\uDEF4-\uDEFA\uDFE0-\uDFEB]|\uD83E[\uDD0D-\uDD3A\uDD3C-\uDD45\uDD47-\uDD71\uDD73-\uDD76\uDD7A-\uDDA2\uDDA5-\uDDAA\uDDAE-\uDDCA\uDDCD-\uDDFF\uDE70-\uDE73\uDE78-\uDE7A\uDE80-\uDE82\uDE90-\uDE95])|(?:[#\*0-9\xA9\xAE\u203C\u2049\u2122\u2139\u2194-\u2199\u21A9\u21AA\u231A\u231B\u2328\u23CF\u23E9-\u23F3\u23F8-\u23FA\u24C2\u25AA\u25AB\u25B6\u25C0\u25FB-\u25FE\u2600-\u2604\u260E\u2611\u2614\u2615\u2618\u261D\u2620\u2622\u2623\u2626\u262A\u262E\u262F\u2638-\u263A\u2640\u2642\u2648-\u2653\u265F\u2660\u2663\u2665\u2666\u2668\u267B\u267E\u267F\u2692-\u2697\u2699\u269B\u269C\u26A0\u26A1\u26AA\u26AB\u26B0\u26B1\u26BD\u26BE\u26C4\u26C5\u26C8\u26CE\u26CF\u26D1\u26D3\u26D4\u26E9\u26EA\u26F0-\u26F5\u26F7-\u26FA\u26FD\u2702\u2705\u2708-\u270D\u270F\u2712\u2714\u2716\u271D\u2721\u2728\u2733\u2734\u2744\u2747\u274C\u274E\u2753-\u2755\u2757\u2763\u2764\u2795-\u2797\u27A1\u27B0\u27BF\u2934\u2935\u2B05-\u2B07\u2B1B\u2B1C\u2B50\u2B55\u3030\u303D\u3297\u3299]|\uD83C[\uDC04\uDCCF\uDD70\uDD71\uDD7E\uDD7F\uDD8E\uDD91-\uDD9A\uDDE6-\uDDFF\uDE01\uDE02\uDE1A\uDE2F\uDE32-\uDE3A\uDE50\uDE51\uDF00-\uDF21\uDF24-\uDF93\uDF96\uDF97\uDF99-\uDF9B\uDF9E-\uDFF0\uDFF3-\uDFF5\uDFF7-\uDFFF]|\uD83D[\uDC00-\uDCFD\uDCFF-\uDD3D\uDD49-\uDD4E\uDD50-\uDD67\uDD6F\uDD70\uDD73-\uDD7A\uDD87\uDD8A-\uDD8D\uDD90\uDD95\uDD96\uDDA4\uDDA5\uDDA8\uDDB1\uDDB2\uDDBC\uDDC2-\uDDC4\uDDD1-\uDDD3\uDDDC-\uDDDE\uDDE1\uDDE3\uDDE8\uDDEF\uDDF3\uDDFA-\uDE4F\uDE80-\uDEC5\uDECB-\uDED2\uDED5\uDEE0-\uDEE5\uDEE9\uDEEB\uDEEC\uDEF0\uDEF3-\uDEFA\uDFE0-\uDFEB]|\uD83E[\uDD0D-\uDD3A\uDD3C-\uDD45\uDD47-\uDD71\uDD73-\uDD76\uDD7A-\uDDA2\uDDA5-\uDDAA\uDDAE-\uDDCA\uDDCD-\uDDFF\uDE70-\uDE73\uDE78-\uDE7A\uDE80-\uDE82\uDE90-\uDE95])\uFE0F|(?:[\u261D\u26F9\u270A-\u270D]|\uD83C[\uDF85\uDFC2-\uDFC4\uDFC7\uDFCA-\uDFCC]|\uD83D[\uDC42\uDC43\uDC46-\uDC50\uDC66-\uDC78\uDC7C\uDC81-\uDC83\uDC85-\uDC87\uDC8F\uDC91\uDCAA\uDD74\uDD75\uDD7A\uDD90\uDD95\uDD96\uDE45-\uDE47\uDE4B-\uDE4F\uDEA3\uDEB4-\uDEB6\uDEC0\uDECC]|\uD83E[\uDD0F\uDD18-\uDD1F\uDD26\uDD30-\uDD39\uDD3C-\uDD3E\uDDB5\uDDB6\uDDB8\uDDB9\uDDBB\uDDCD-\uDDCF\uDDD1-\uDDDD])/g;
@@ -45731,9 +46303,9 @@ var require_emoji_regex = __commonJS({
   }
 });
 
-// node_modules/string-width/index.js
+// ../../work/main/node_modules/string-width/index.js
 var require_string_width = __commonJS({
-  "node_modules/string-width/index.js"(exports, module) {
+  "../../work/main/node_modules/string-width/index.js"(exports, module) {
     "use strict";
     var stripAnsi = require_strip_ansi();
     var isFullwidthCodePoint = require_is_fullwidth_code_point();
@@ -45768,9 +46340,9 @@ var require_string_width = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/format-value.js
+// ../../work/main/node_modules/cli-progress/lib/format-value.js
 var require_format_value = __commonJS({
-  "node_modules/cli-progress/lib/format-value.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/format-value.js"(exports, module) {
     module.exports = function formatValue(v, options, type) {
       if (options.autopadding !== true) {
         return v;
@@ -45788,9 +46360,9 @@ var require_format_value = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/format-bar.js
+// ../../work/main/node_modules/cli-progress/lib/format-bar.js
 var require_format_bar = __commonJS({
-  "node_modules/cli-progress/lib/format-bar.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/format-bar.js"(exports, module) {
     module.exports = function formatBar(progress, options) {
       const completeSize = Math.round(progress * options.barsize);
       const incompleteSize = options.barsize - completeSize;
@@ -45799,9 +46371,9 @@ var require_format_bar = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/format-time.js
+// ../../work/main/node_modules/cli-progress/lib/format-time.js
 var require_format_time = __commonJS({
-  "node_modules/cli-progress/lib/format-time.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/format-time.js"(exports, module) {
     module.exports = function formatTime(t, options, roundToMultipleOf) {
       function round(input) {
         if (roundToMultipleOf) {
@@ -45826,9 +46398,9 @@ var require_format_time = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/formatter.js
+// ../../work/main/node_modules/cli-progress/lib/formatter.js
 var require_formatter = __commonJS({
-  "node_modules/cli-progress/lib/formatter.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/formatter.js"(exports, module) {
     var _stringWidth = require_string_width();
     var _defaultFormatValue = require_format_value();
     var _defaultFormatBar = require_format_bar();
@@ -45878,9 +46450,9 @@ var require_formatter = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/options.js
+// ../../work/main/node_modules/cli-progress/lib/options.js
 var require_options = __commonJS({
-  "node_modules/cli-progress/lib/options.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/options.js"(exports, module) {
     function mergeOption(v, defaultValue) {
       if (typeof v === "undefined" || v === null) {
         return defaultValue;
@@ -45932,9 +46504,9 @@ var require_options = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/generic-bar.js
+// ../../work/main/node_modules/cli-progress/lib/generic-bar.js
 var require_generic_bar = __commonJS({
-  "node_modules/cli-progress/lib/generic-bar.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/generic-bar.js"(exports, module) {
     var _ETA = require_eta();
     var _Terminal = require_terminal();
     var _formatter = require_formatter();
@@ -46059,9 +46631,9 @@ var require_generic_bar = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/single-bar.js
+// ../../work/main/node_modules/cli-progress/lib/single-bar.js
 var require_single_bar = __commonJS({
-  "node_modules/cli-progress/lib/single-bar.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/single-bar.js"(exports, module) {
     var _GenericBar = require_generic_bar();
     var _options = require_options();
     module.exports = class SingleBar extends _GenericBar {
@@ -46147,9 +46719,9 @@ var require_single_bar = __commonJS({
   }
 });
 
-// node_modules/cli-progress/lib/multi-bar.js
+// ../../work/main/node_modules/cli-progress/lib/multi-bar.js
 var require_multi_bar = __commonJS({
-  "node_modules/cli-progress/lib/multi-bar.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/lib/multi-bar.js"(exports, module) {
     var _Terminal = require_terminal();
     var _BarElement = require_generic_bar();
     var _options = require_options();
@@ -46285,9 +46857,9 @@ var require_multi_bar = __commonJS({
   }
 });
 
-// node_modules/cli-progress/presets/legacy.js
+// ../../work/main/node_modules/cli-progress/presets/legacy.js
 var require_legacy = __commonJS({
-  "node_modules/cli-progress/presets/legacy.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/presets/legacy.js"(exports, module) {
     module.exports = {
       format: "progress [{bar}] {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "=",
@@ -46296,9 +46868,9 @@ var require_legacy = __commonJS({
   }
 });
 
-// node_modules/cli-progress/presets/shades-classic.js
+// ../../work/main/node_modules/cli-progress/presets/shades-classic.js
 var require_shades_classic = __commonJS({
-  "node_modules/cli-progress/presets/shades-classic.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/presets/shades-classic.js"(exports, module) {
     module.exports = {
       format: " {bar} {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "█",
@@ -46307,9 +46879,9 @@ var require_shades_classic = __commonJS({
   }
 });
 
-// node_modules/cli-progress/presets/shades-grey.js
+// ../../work/main/node_modules/cli-progress/presets/shades-grey.js
 var require_shades_grey = __commonJS({
-  "node_modules/cli-progress/presets/shades-grey.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/presets/shades-grey.js"(exports, module) {
     module.exports = {
       format: " \x1B[90m{bar}\x1B[0m {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "█",
@@ -46318,9 +46890,9 @@ var require_shades_grey = __commonJS({
   }
 });
 
-// node_modules/cli-progress/presets/rect.js
+// ../../work/main/node_modules/cli-progress/presets/rect.js
 var require_rect = __commonJS({
-  "node_modules/cli-progress/presets/rect.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/presets/rect.js"(exports, module) {
     module.exports = {
       format: " {bar}■ {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "■",
@@ -46329,9 +46901,9 @@ var require_rect = __commonJS({
   }
 });
 
-// node_modules/cli-progress/presets/index.js
+// ../../work/main/node_modules/cli-progress/presets/index.js
 var require_presets = __commonJS({
-  "node_modules/cli-progress/presets/index.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/presets/index.js"(exports, module) {
     var _legacy = require_legacy();
     var _shades_classic = require_shades_classic();
     var _shades_grey = require_shades_grey();
@@ -46345,9 +46917,9 @@ var require_presets = __commonJS({
   }
 });
 
-// node_modules/cli-progress/cli-progress.js
+// ../../work/main/node_modules/cli-progress/cli-progress.js
 var require_cli_progress = __commonJS({
-  "node_modules/cli-progress/cli-progress.js"(exports, module) {
+  "../../work/main/node_modules/cli-progress/cli-progress.js"(exports, module) {
     var _SingleBar = require_single_bar();
     var _MultiBar = require_multi_bar();
     var _Presets = require_presets();
@@ -46394,7 +46966,11 @@ function parseCommandArgs(args, spec, positionals) {
     const options = Object.fromEntries(
       Object.entries(spec).map(([k, v]) => [
         k,
-        { type: v.type, ...v.short ? { short: v.short } : {}, ...v.default !== void 0 ? { default: v.default } : {} }
+        {
+          type: v.type,
+          ...v.short ? { short: v.short } : {},
+          ...v.default !== void 0 ? { default: v.default } : {}
+        }
       ])
     );
     parsed = parseArgs({ args, options, allowPositionals: true, strict: true });
@@ -46409,7 +46985,8 @@ function parseCommandArgs(args, spec, positionals) {
   }
   const pos = parsed.positionals;
   if (pos.length < positionals.min) throw new UsageError(`missing ${positionals.names}`);
-  if (pos.length > positionals.max) throw new UsageError(`too many arguments: ${pos.slice(positionals.max).join(" ")}`);
+  if (pos.length > positionals.max)
+    throw new UsageError(`too many arguments: ${pos.slice(positionals.max).join(" ")}`);
   return { values: parsed.values, positionals: pos };
 }
 
@@ -46433,8 +47010,14 @@ function loadStructure(arg, io) {
   if (/\n\$\$\$\$\s*(\n|$)/.test(text)) {
     const first = readSdRecords(text).next().value;
     if (!first) return { ok: false, message: `${source}: no SD record found` };
-    if (!first.result.ok) return { ok: false, message: `${source}, record 1: ${describeError(first.result.error)}` };
-    return { ok: true, structure: first.result.structure, source: `${source} (record 1)`, warnings: first.result.warnings };
+    if (!first.result.ok)
+      return { ok: false, message: `${source}, record 1: ${describeError(first.result.error)}` };
+    return {
+      ok: true,
+      structure: first.result.structure,
+      source: `${source} (record 1)`,
+      warnings: first.result.warnings
+    };
   }
   const isSmilesFile = source !== "SMILES argument" && !looksLikeMolfile(text);
   const body = isSmilesFile ? text.split(/\r?\n/).find((l) => l.trim() !== "") ?? "" : text;
@@ -46455,7 +47038,9 @@ function compareText(f) {
   if (f.differingUnits.length > 0) {
     out.push(f.relation === "enantiomers" ? "Every stereo unit is inverted:" : "Units that differ:");
     for (const u of f.differingUnits) {
-      out.push(`  A ${u.atomsA.join("–")} ${u.labelA ?? "?"}  <->  B ${u.atomsB.join("–")} ${u.labelB ?? "?"}  (${u.kind})`);
+      out.push(
+        `  A ${u.atomsA.join("–")} ${u.labelA ?? "?"}  <->  B ${u.atomsB.join("–")} ${u.labelB ?? "?"}  (${u.kind})`
+      );
     }
   }
   const { onlyInA, onlyInB } = f.otherComponents;
@@ -46486,7 +47071,10 @@ var compareCommand = {
     );
     const a = loadStructure(positionals[0], io);
     const b = loadStructure(positionals[1], io);
-    for (const [name, r] of [["A", a], ["B", b]]) {
+    for (const [name, r] of [
+      ["A", a],
+      ["B", b]
+    ]) {
       if (!r.ok) {
         io.err(`stereogate compare: structure ${name}: ${r.message}`);
         return EXIT_BAD_INPUT;
@@ -46510,7 +47098,10 @@ function unitLine(u) {
   const conf = u.defined ? u.label ?? "defined (no CIP label)" : "undefined";
   const extra = [];
   if (u.pseudoasymmetric) extra.push("pseudoasymmetric");
-  if (u.group) extra.push(u.group.type === "abs" ? "absolute" : `${u.group.type === "and" ? "AND" : "OR"} group ${u.group.id}`);
+  if (u.group)
+    extra.push(
+      u.group.type === "abs" ? "absolute" : `${u.group.type === "and" ? "AND" : "OR"} group ${u.group.id}`
+    );
   return `  ${where2.padEnd(18)} ${conf}${extra.length ? `  (${extra.join(", ")})` : ""}`;
 }
 function describeText(f, what) {
@@ -46520,9 +47111,13 @@ function describeText(f, what) {
   const centres = f.units.filter((u) => u.kind === "tetrahedral");
   const bonds = f.units.filter((u) => u.kind !== "tetrahedral");
   const nDef = (us) => us.filter((u) => u.defined).length;
-  out.push(`Stereocentres: ${centres.length === 0 ? "none" : `${centres.length} (${nDef(centres)} defined)`}`);
+  out.push(
+    `Stereocentres: ${centres.length === 0 ? "none" : `${centres.length} (${nDef(centres)} defined)`}`
+  );
   for (const u of centres) out.push(unitLine(u));
-  out.push(`Stereogenic double bonds and axes: ${bonds.length === 0 ? "none" : `${bonds.length} (${nDef(bonds)} defined)`}`);
+  out.push(
+    `Stereogenic double bonds and axes: ${bonds.length === 0 ? "none" : `${bonds.length} (${nDef(bonds)} defined)`}`
+  );
   for (const u of bonds) out.push(unitLine(u));
   out.push(`Chiral: ${yesNo(f.chiral)} — ${f.mirror.explanation.replace(/^(achiral|chiral|open): /, "")}`);
   out.push(`Meso: ${yesNo(f.meso)}`);
@@ -46534,16 +47129,22 @@ function describeText(f, what) {
   if (f.enhanced.meaning !== "none" && (f.enhanced.groups.length > 0 || f.enhanced.meaning !== "absolute")) {
     out.push(`Enhanced stereo: the drawing stands for ${enhancedWords(f.enhanced.meaning)}`);
   }
-  for (const n of f.invertibleNitrogens) out.push(`Note: N${n.atom} is an invertible amine nitrogen, not a stereocentre`);
+  for (const n of f.invertibleNitrogens)
+    out.push(`Note: N${n.atom} is an invertible amine nitrogen, not a stereocentre`);
   if (f.components.length > 1) {
     out.push("Components:");
-    for (const k of f.components) out.push(`  ${k.role === "parent" ? "parent" : "other "}  ${k.formula.padEnd(14)} ${k.smiles}`);
+    for (const k of f.components)
+      out.push(`  ${k.role === "parent" ? "parent" : "other "}  ${k.formula.padEnd(14)} ${k.smiles}`);
   }
   if (f.stereoisomerList) {
-    out.push(`Stereoisomers${f.stereoisomerList.length < c.total ? ` (first ${f.stereoisomerList.length})` : ""}:`);
+    out.push(
+      `Stereoisomers${f.stereoisomerList.length < c.total ? ` (first ${f.stereoisomerList.length})` : ""}:`
+    );
     for (const e of f.stereoisomerList) {
       const labels = e.labels.map((l) => `${l.atoms.join("/")}${l.label ?? "?"}`).join(" ") || "-";
-      out.push(`  ${e.smiles}   ${labels}   ${e.chiral ? "chiral" : "achiral"}${e.isInput ? "   <- input" : ""}`);
+      out.push(
+        `  ${e.smiles}   ${labels}   ${e.chiral ? "chiral" : "achiral"}${e.isInput ? "   <- input" : ""}`
+      );
     }
   }
   for (const r of f.remarks) out.push(`Remark: ${r}`);
@@ -46584,7 +47185,11 @@ var describeCommand = {
   run(args, io) {
     const { values, positionals } = parseCommandArgs(
       args,
-      { format: { type: "string", choices: ["json", "text"], default: "text" }, list: { type: "boolean" }, max: { type: "string" } },
+      {
+        format: { type: "string", choices: ["json", "text"], default: "text" },
+        list: { type: "boolean" },
+        max: { type: "string" }
+      },
       { min: 1, max: 1, names: "structure (SMILES or file)" }
     );
     const max = values.max === void 0 ? 64 : Number(values.max);
@@ -46603,7 +47208,7 @@ var describeCommand = {
 };
 
 // src/cli/commands/audit.ts
-import { existsSync as existsSync3, writeFileSync } from "node:fs";
+import { existsSync as existsSync3, writeFileSync as writeFileSync2 } from "node:fs";
 import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve4, sep as sep3 } from "node:path";
 
 // src/audit/config.ts
@@ -46611,31 +47216,72 @@ import { existsSync } from "node:fs";
 import { isAbsolute as isAbsolute2, join as join3, resolve as resolve2 } from "node:path";
 
 // src/registry/files.ts
-import { lstatSync, readdirSync, readFileSync, realpathSync, statSync } from "node:fs";
+import {
+  closeSync,
+  constants,
+  fstatSync,
+  lstatSync,
+  openSync,
+  readdirSync,
+  readSync,
+  realpathSync,
+  statSync
+} from "node:fs";
 import { isAbsolute, join, relative, resolve, sep } from "node:path";
 var MAX_FILE_BYTES = 8 * 1024 * 1024;
 var RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
-function readTextFile(abs) {
-  let bytes;
+var UTF8 = new TextDecoder("utf-8", { fatal: true });
+var OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
+function readRegularFile(abs) {
+  const fd = openSync(abs, OPEN_FLAGS);
   try {
-    const st = statSync(abs);
+    const st = fstatSync(fd);
     if (!st.isFile()) return { ok: false, error: "is not a regular file" };
     if (st.size > MAX_FILE_BYTES)
       return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
-    bytes = readFileSync(abs);
+    const chunks = [];
+    let total = 0;
+    let buf = Buffer.allocUnsafe(st.size + 1);
+    for (; ; ) {
+      const n = readSync(fd, buf, 0, buf.length, null);
+      if (n === 0) break;
+      chunks.push(buf.subarray(0, n));
+      total += n;
+      if (total > MAX_FILE_BYTES)
+        return {
+          ok: false,
+          error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+        };
+      buf = Buffer.allocUnsafe(64 * 1024);
+    }
+    return { ok: true, bytes: chunks.length === 1 ? chunks[0] : Buffer.concat(chunks, total) };
+  } finally {
+    closeSync(fd);
+  }
+}
+function readTextFile(abs) {
+  let bytes;
+  try {
+    const read = readRegularFile(abs);
+    if (!read.ok) return read;
+    bytes = read.bytes;
   } catch (e) {
     return { ok: false, error: `cannot be read (${e.code ?? String(e)})` };
   }
   if (bytes.includes(0)) return { ok: false, error: "is a binary file, not text" };
   let text;
   try {
-    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes);
+    text = UTF8.decode(bytes);
   } catch {
     return { ok: false, error: "is not valid UTF-8 text" };
   }
   return { ok: true, text: text.startsWith("\uFEFF") ? text.slice(1) : text };
 }
 function relativeTo(root, abs) {
+  if (abs.startsWith(root) && abs[root.length] === sep && !abs.includes(`${sep}.`) && !abs.endsWith(sep)) {
+    const rest = abs.slice(root.length + 1);
+    if (rest !== "" && !rest.includes(`${sep}${sep}`)) return sep === "/" ? rest : rest.split(sep).join("/");
+  }
   return relative(root, abs).split(sep).join("/");
 }
 function escapes(root, abs) {
@@ -46750,6 +47396,10 @@ var PositionMap = class {
   get size() {
     return this.map.size;
   }
+  /** Every known path with its position, in document order. */
+  entries() {
+    return [...this.map];
+  }
 };
 function lineOf(positions, path) {
   if (path === null) return null;
@@ -46795,6 +47445,198 @@ function positionsOf(doc, counter) {
   if (positions.get("") === void 0) positions.set("", { line: 1, column: 1 });
   walk(doc.contents, "", 0);
   return positions;
+}
+
+// src/registry/quick-yaml.ts
+var NotPlain = class extends Error {
+};
+var KEY = /^[A-Za-z][A-Za-z0-9_-]*(?=:(?: |$))/;
+var NOT_STRING_KEY = /^(?:[Nn]ull|NULL|[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
+var NULL = /^(?:~|[Nn]ull|NULL)$/;
+var TRUE = /^(?:[Tt]rue|TRUE)$/;
+var FALSE = /^(?:[Ff]alse|FALSE)$/;
+var INT = /^[-+]?[0-9]+$/;
+var FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
+var FLOAT_EXP = /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/;
+var OTHER_NUMBER = /^(?:0o|0x|[-+]?\.(?:inf|Inf|INF)$|\.(?:nan|NaN|NAN)$)/;
+var BAD_START = /^(?:[-?:](?![0-9.])|[,[\]{}#&*!|>'"%@`])/;
+var CONTROL = /[\x00-\x08\x0b-\x1f\x7f-\x9f\u2028\u2029\ufeff\ufffe\uffff]/;
+function fail4() {
+  throw new NotPlain();
+}
+function quoted(text, start) {
+  const q = text[start];
+  let out = "";
+  let i = start + 1;
+  for (; ; ) {
+    if (i >= text.length) fail4();
+    const ch = text[i];
+    if (ch === q) {
+      if (q === '"' || text[i + 1] !== "'") break;
+      out += "'";
+      i += 2;
+    } else if (ch === "\\" && q === '"') {
+      const next = text[i + 1];
+      if (next !== "\\" && next !== '"') fail4();
+      out += next;
+      i += 2;
+    } else {
+      out += ch;
+      i++;
+    }
+  }
+  return { value: out, end: i + 1 };
+}
+function resolvePlain(plain) {
+  if (plain === "" || BAD_START.test(plain) || plain.includes(": ") || plain.endsWith(":")) fail4();
+  if (NULL.test(plain)) return null;
+  if (TRUE.test(plain)) return true;
+  if (FALSE.test(plain)) return false;
+  if (INT.test(plain)) return parseInt(plain, 10);
+  if (FLOAT.test(plain) || FLOAT_EXP.test(plain)) return parseFloat(plain);
+  if (OTHER_NUMBER.test(plain)) fail4();
+  return plain;
+}
+function scalar(text) {
+  if (text[0] === '"' || text[0] === "'") {
+    const q = quoted(text, 0);
+    trailing(text.slice(q.end));
+    return q.value;
+  }
+  const hash = text.indexOf(" #");
+  return resolvePlain((hash < 0 ? text : text.slice(0, hash)).replace(/ +$/, ""));
+}
+function flowList(text, at2) {
+  const out = [];
+  let i = 1;
+  const spaces = () => {
+    while (text[i] === " ") i++;
+  };
+  spaces();
+  if (text[i] === "]") {
+    trailing(text.slice(i + 1));
+    return out;
+  }
+  for (; ; ) {
+    spaces();
+    at2(out.length, i);
+    const c = text[i];
+    if (c === '"' || c === "'") {
+      const q = quoted(text, i);
+      out.push(q.value);
+      i = q.end;
+    } else {
+      let j = i;
+      while (j < text.length && !",[]{}".includes(text[j])) j++;
+      const plain = text.slice(i, j).replace(/ +$/, "");
+      if (plain.includes(":") || plain.includes(" #")) fail4();
+      out.push(resolvePlain(plain));
+      i = j;
+    }
+    spaces();
+    if (text[i] === "]") break;
+    if (text[i] !== ",") fail4();
+    i++;
+    spaces();
+    if (text[i] === "]") fail4();
+  }
+  trailing(text.slice(i + 1));
+  return out;
+}
+function trailing(rest) {
+  const t = rest.replace(/^ +/, "");
+  if (t !== "" && !(t.startsWith("#") && t.length < rest.length)) fail4();
+}
+function contentLines(text) {
+  if (text.includes("	") || text.includes("\r") || CONTROL.test(text)) return null;
+  const lines = [];
+  const raw2 = text.split("\n");
+  for (let k = 0; k < raw2.length; k++) {
+    const s = raw2[k];
+    let indent = 0;
+    while (s.charCodeAt(indent) === 32) indent++;
+    if (indent === s.length || s[indent] === "#") continue;
+    if (indent === 0 && (s.startsWith("---") || s.startsWith("...") || s.startsWith("%"))) return null;
+    lines.push({ no: k + 1, indent, text: s.slice(indent) });
+  }
+  return lines;
+}
+function quickParse(text) {
+  const lines = contentLines(text);
+  if (lines === null || lines.length === 0 || lines[0].indent !== 0) return null;
+  const positions = new PositionMap();
+  let at2 = 0;
+  const put = (path, line, column) => positions.set(path, { line: line.no, column });
+  const mapping = (indent, path, firstText) => {
+    const out = {};
+    const seen = /* @__PURE__ */ new Set();
+    let first = firstText !== void 0;
+    while (at2 < lines.length) {
+      const line = lines[at2];
+      const body = first ? firstText : line.text;
+      if (!first) {
+        if (line.indent < indent) break;
+        if (line.indent > indent) fail4();
+      }
+      first = false;
+      const m = KEY.exec(body);
+      if (!m) fail4();
+      const key3 = m[0];
+      if (NOT_STRING_KEY.test(key3) || seen.has(key3) || key3.length > 1e3) fail4();
+      seen.add(key3);
+      const childPath = path === "" ? key3 : `${path}.${key3}`;
+      put(childPath, line, indent + 1);
+      at2++;
+      const rest = body.slice(key3.length + 1).replace(/^ +/, "");
+      if (rest.startsWith("[")) {
+        const restColumn = indent + body.length - rest.length;
+        out[key3] = flowList(rest, (i, offset) => put(`${childPath}.${i}`, line, restColumn + offset + 1));
+        continue;
+      }
+      if (rest !== "" && !rest.startsWith("#")) {
+        out[key3] = scalar(rest);
+        continue;
+      }
+      const next = lines[at2];
+      if (next && next.indent > indent) out[key3] = block2(next.indent, childPath);
+      else if (next && next.indent === indent && isItem(next.text)) out[key3] = list(indent, childPath);
+      else out[key3] = null;
+    }
+    return out;
+  };
+  const isItem = (t) => t === "-" || t.startsWith("- ");
+  const list = (indent, path) => {
+    const out = [];
+    while (at2 < lines.length) {
+      const line = lines[at2];
+      if (line.indent < indent) break;
+      if (line.indent > indent) fail4();
+      if (!isItem(line.text)) break;
+      const itemPath = path === "" ? String(out.length) : `${path}.${out.length}`;
+      let gap = 1;
+      while (line.text.charCodeAt(gap) === 32) gap++;
+      const body = line.text.slice(gap);
+      if (body === "" || body.startsWith("#") || isItem(body)) fail4();
+      const column = indent + gap;
+      put(itemPath, line, column + 1);
+      if (KEY.test(body)) out.push(mapping(column, itemPath, body));
+      else {
+        out.push(scalar(body));
+        at2++;
+      }
+    }
+    return out;
+  };
+  const block2 = (indent, path) => isItem(lines[at2].text) ? list(indent, path) : mapping(indent, path);
+  try {
+    put("", lines[0], 1);
+    const value = mapping(0, "");
+    if (at2 !== lines.length) return null;
+    return { value, positions };
+  } catch (e) {
+    if (e instanceof NotPlain) return null;
+    throw e;
+  }
 }
 
 // src/registry/schema.ts
@@ -47194,6 +48036,11 @@ function explain(errors, value, what) {
 
 // src/registry/parse.ts
 function parseDocumentText(text) {
+  const quick = quickParse(text);
+  if (quick) return { value: quick.value, positions: quick.positions, problems: [] };
+  return parseFullText(text);
+}
+function parseFullText(text) {
   const counter = new import_yaml2.LineCounter();
   const doc = (0, import_yaml2.parseDocument)(text, {
     lineCounter: counter,
@@ -47385,13 +48232,13 @@ function loadRecordFile(realRoot, abs) {
 function asObject(v) {
   return v !== null && typeof v === "object" && !Array.isArray(v) ? v : null;
 }
-function sourceOf(ref, field, fetchMolfile) {
+function sourceOf(ref, field2, fetchMolfile) {
   if (!ref) return null;
   if (typeof ref.smiles === "string" && typeof ref.molfile !== "string") {
-    return { field, format: "smiles", text: ref.smiles };
+    return { field: field2, format: "smiles", text: ref.smiles };
   }
   if (typeof ref.molfile === "string" && typeof ref.smiles !== "string") {
-    return { field, format: "molfile", ...fetchMolfile(ref.molfile) };
+    return { field: field2, format: "molfile", ...fetchMolfile(ref.molfile) };
   }
   return null;
 }
@@ -47446,14 +48293,64 @@ function markDuplicateIds(records) {
 var CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
 
 // src/audit/engine.ts
+function heavyAtomCandidates(formula) {
+  const bases = [];
+  const sign = formula.endsWith("+") || formula.endsWith("-");
+  if (!sign) bases.push(formula);
+  else {
+    const body = formula.slice(0, -1);
+    const digits = /\d*$/.exec(body)[0];
+    const prefix = body.slice(0, body.length - digits.length);
+    const count2 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
+    for (let i = 0; i <= digits.length; i++) {
+      const own = digits.slice(0, i);
+      if (count2(own) && count2(digits.slice(i))) bases.push(prefix + own);
+    }
+  }
+  return [...new Set(bases.map((b) => b.replace(/H(?![a-z])\d*/g, "")))];
+}
+function heavyFormula(elements, wildcards) {
+  const counts = /* @__PURE__ */ new Map();
+  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
+  const order = [...counts.keys()].sort((x, y) => {
+    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
+    return x < y ? -1 : x > y ? 1 : 0;
+  });
+  let out = "";
+  for (const e of order) {
+    const c = counts.get(e);
+    out += c === 1 ? e : `${e}${c}`;
+  }
+  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
+  return out;
+}
 async function defaultEngine() {
   const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
   const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
+  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
   return {
     readStructure: (text, options) => chem.readStructure(text, options),
     describe: (s) => chem.describe(s),
     relate: (a, b) => chem.relate(a, b),
-    formula: (s) => graph.molecularFormula(s)
+    formula: (s) => graph.molecularFormula(s),
+    smilesHeavyAtoms: (smiles) => {
+      let start = 0;
+      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
+      let g;
+      try {
+        g = syntax.parseSmilesGraph(smiles, start);
+      } catch {
+        return null;
+      }
+      if ("error" in g) return null;
+      const heavy = [];
+      let wildcards = 0;
+      for (const a of g.atoms) {
+        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
+        else if (a.atomicNumber !== 1) heavy.push(a.element);
+      }
+      return heavyFormula(heavy, wildcards);
+    }
   };
 }
 
@@ -47476,9 +48373,9 @@ function resolveSeverity(base, own, configured) {
 function configuredSeverity(config, checkId) {
   return Object.prototype.hasOwnProperty.call(config.severities, checkId) ? config.severities[checkId] : void 0;
 }
-function lineFor(loaded, field) {
-  if (field !== null) {
-    const line = lineOf(loaded.positions, field);
+function lineFor(loaded, field2) {
+  if (field2 !== null) {
+    const line = lineOf(loaded.positions, field2);
     if (line !== null) return line;
   }
   return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
@@ -47640,12 +48537,12 @@ function readSource(source, engine) {
 function sourcesOf(loaded) {
   if (loaded.sources) return loaded.sources;
   const rec = loaded.record;
-  const one = (ref, field) => {
+  const one = (ref, field2) => {
     if (!ref) return null;
-    if (typeof ref.smiles === "string") return { field, format: "smiles", text: ref.smiles };
+    if (typeof ref.smiles === "string") return { field: field2, format: "smiles", text: ref.smiles };
     if (typeof ref.molfile === "string") {
       return {
-        field,
+        field: field2,
         format: "molfile",
         text: null,
         error: `molfile '${ref.molfile}' was not fetched (no file context)`
@@ -47717,7 +48614,7 @@ var package_default = {
   scripts: {
     build: "tsc -p tsconfig.build.json",
     typecheck: "tsc -p tsconfig.json --noEmit",
-    demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry",
+    demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
     test: "vitest run",
     bench: "node --import tsx bench/run.ts",
     lint: "eslint .",
@@ -47780,33 +48677,63 @@ function buildRegistryView(records, cache2, underReview) {
     entries.push(entry);
     sourceOf2.set(entry, loaded);
   }
-  const formula = cache2.engine.formula?.bind(cache2.engine);
-  let index = null;
-  const indexKey = (e) => {
-    if (!formula) return e.main.facts?.constitutionKey;
+  const engine = cache2.engine;
+  const formula = engine.formula?.bind(engine);
+  const quick = formula ? engine.smilesHeavyAtoms?.bind(engine) : void 0;
+  const formulaOf = /* @__PURE__ */ new Map();
+  const fullFormula = (e) => {
+    if (formulaOf.has(e)) return formulaOf.get(e);
+    let f;
     const read = cache2.read(sourceOf2.get(e));
-    if (!read.structure) return void 0;
-    try {
-      return formula(read.structure);
-    } catch {
-      return e.main.facts?.constitutionKey === void 0 ? void 0 : formulaPart(e.main.facts.constitutionKey);
+    if (read.structure) {
+      try {
+        f = formula(read.structure);
+      } catch {
+        f = e.main.facts?.constitutionKey === void 0 ? void 0 : formulaPart(e.main.facts.constitutionKey);
+      }
     }
+    formulaOf.set(e, f);
+    return f;
   };
+  const indexKeys = (e) => {
+    if (!formula) {
+      const k = e.main.facts?.constitutionKey;
+      return k === void 0 ? [] : [k];
+    }
+    if (quick) {
+      const main = sourcesOf(sourceOf2.get(e)).main;
+      const fromSyntax = main?.format === "smiles" && main.text !== null ? quick(main.text) : null;
+      if (fromSyntax !== null) return [fromSyntax];
+    }
+    const f = fullFormula(e);
+    return f === void 0 ? [] : quick ? heavyAtomCandidates(f) : [f];
+  };
+  const lookupKeys = (key3) => !formula ? [key3] : !quick ? [formulaPart(key3)] : heavyAtomCandidates(formulaPart(key3));
+  let index = null;
+  const order = /* @__PURE__ */ new Map();
   return {
     entries,
     withConstitution(key3) {
       if (index === null) {
         index = /* @__PURE__ */ new Map();
-        for (const e of entries) {
-          const k = indexKey(e);
-          if (k === void 0) continue;
-          const list = index.get(k);
-          if (list) list.push(e);
-          else index.set(k, [e]);
-        }
+        entries.forEach((e, i) => {
+          order.set(e, i);
+          for (const k of indexKeys(e)) {
+            const list = index.get(k);
+            if (list) list.push(e);
+            else index.set(k, [e]);
+          }
+        });
       }
-      const hits = index.get(formula ? formulaPart(key3) : key3) ?? [];
-      return formula ? hits.filter((e) => e.main.facts?.constitutionKey === key3) : hits;
+      const keys = lookupKeys(key3);
+      let hits = index.get(keys[0]) ?? [];
+      if (keys.length > 1) {
+        const all = new Set(keys.flatMap((k) => index.get(k) ?? []));
+        hits = [...all].sort((a, b) => order.get(a) - order.get(b));
+      }
+      if (!formula) return hits;
+      const wanted = formulaPart(key3);
+      return hits.filter((e) => fullFormula(e) === wanted && e.main.facts?.constitutionKey === key3);
     }
   };
 }
@@ -48299,104 +49226,83 @@ function renderText(result, options = {}) {
 `;
 }
 
-// src/cli/commands/audit.ts
-var EXIT_FINDINGS = 1;
-var USAGE = [
-  "Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]",
-  "                        [--output FILE] [--fail-on error|warning|never]",
-  "",
-  "  paths…               record files, folders or molfiles to audit (default: every record); the whole",
-  "                       registry is still loaded for the cross-record checks",
-  "  --root DIR           registry root, holding stereogate.config.yml and the record folders (default .)",
-  "  --config FILE        config file to use instead of stereogate.config.yml at the root",
-  "  --format FORMAT      text (default), json, markdown (the pull-request checklist) or sarif (2.1.0)",
-  "  --output FILE        write the report to FILE instead of standard output",
-  "  --fail-on LEVEL      exit 1 when a finding not accepted by a waiver is at least this severe:",
-  "                       error (default), warning, or never",
-  "",
-  "Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error."
-].join("\n");
-function reachesThreshold(result, failOn) {
-  if (failOn === "never") return false;
-  const s = result.summary;
-  return failOn === "error" ? s.errors > 0 : s.errors + s.warnings > 0;
-}
-function toRootPaths(paths, root) {
-  const rootAbs = resolve4(root);
-  return paths.map((p) => {
-    const abs = resolve4(p);
-    if (!existsSync3(abs)) return p;
-    const rel = relative3(rootAbs, abs);
-    if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
-      if (existsSync3(resolve4(rootAbs, p))) return p;
-      throw new UsageError(`${p} is outside the registry root ${root}`);
-    }
-    return rel.split(sep3).join("/") || ".";
-  });
-}
-function makeAuditCommand(deps = {}) {
-  return {
-    name: "audit",
-    summary: "audit registry records for stereochemical consistency and print the checklist",
-    usage: USAGE,
-    async run(args, io) {
-      const { values, positionals } = parseCommandArgs(
-        args,
-        {
-          root: { type: "string", default: "." },
-          config: { type: "string" },
-          format: { type: "string", choices: ["text", "json", "markdown", "sarif"], default: "text" },
-          output: { type: "string" },
-          "fail-on": { type: "string", choices: ["error", "warning", "never"], default: "error" }
-        },
-        { min: 0, max: Infinity, names: "paths" }
-      );
-      const root = values.root;
-      const format = values.format;
-      const failOn = values["fail-on"];
-      const output = values.output;
-      if (output === "") throw new UsageError("--output needs a file name");
-      const paths = toRootPaths(positionals, root);
-      let result;
-      try {
-        result = await runAudit({
-          root,
-          paths,
-          configFile: values.config,
-          checks: deps.checks,
-          engine: deps.engine
-        });
-      } catch (e) {
-        if (e instanceof ConfigError) throw new UsageError(e.message);
-        throw e;
-      }
-      if (result.unmatched?.length) {
-        throw new UsageError(
-          `no record file, record folder or molfile in ${root} matches: ${result.unmatched.join(", ")}`
-        );
-      }
-      const checks = deps.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
-      const report = format === "json" ? renderJson(result) : format === "markdown" ? renderMarkdown(result) : format === "sarif" ? renderSarif(result, checks) : renderText(result, { color: output === void 0 && shouldColor(process.stdout) });
-      if (output !== void 0) {
-        try {
-          writeFileSync(output, report);
-        } catch (e) {
-          throw new UsageError(`cannot write ${output}: ${e.code ?? String(e)}`);
-        }
-      } else {
-        io.out(report);
-      }
-      return reachesThreshold(result, failOn) ? EXIT_FINDINGS : EXIT_OK;
-    }
-  };
-}
-var auditCommand = makeAuditCommand();
+// src/bulk/run.ts
+import { createReadStream as createReadStream2 } from "node:fs";
+import { availableParallelism } from "node:os";
 
-// src/cli/commands/bulk-audit.ts
-var import_yaml3 = __toESM(require_dist(), 1);
-import { parseArgs as parseArgs2 } from "node:util";
+// src/registry/types.ts
+var STEREO_FORMS = [
+  "achiral",
+  "meso",
+  "single-enantiomer",
+  "enantioenriched",
+  "racemate",
+  "single-diastereomer",
+  "diastereomer-mixture",
+  "unknown"
+];
 
 // src/bulk/mapping.ts
+var DEFAULT_COLUMNS = {
+  id: "id",
+  structure: "smiles",
+  name: "name",
+  form: "stereo_form",
+  descriptors: "descriptors",
+  ratio: "ratio",
+  ee: "ee",
+  rotation: "rotation"
+};
+var BUILT_IN = {
+  rac: "racemate",
+  racemic: "racemate",
+  racemate: "racemate",
+  "(+/-)": "racemate",
+  "+/-": "racemate",
+  "(±)": "racemate",
+  "±": "racemate",
+  dl: "racemate",
+  meso: "meso",
+  achiral: "achiral",
+  "no stereo": "achiral",
+  "not chiral": "achiral",
+  "single enantiomer": "single-enantiomer",
+  enantiopure: "single-enantiomer",
+  "enantiomerically pure": "single-enantiomer",
+  homochiral: "single-enantiomer",
+  abs: "single-enantiomer",
+  absolute: "single-enantiomer",
+  enantioenriched: "enantioenriched",
+  scalemic: "enantioenriched",
+  enriched: "enantioenriched",
+  "single diastereomer": "single-diastereomer",
+  diastereomer: "single-diastereomer",
+  "diastereomerically pure": "single-diastereomer",
+  "diastereomer mixture": "diastereomer-mixture",
+  "mixture of diastereomers": "diastereomer-mixture",
+  dr: "diastereomer-mixture",
+  unknown: "unknown",
+  undefined: "unknown",
+  unk: "unknown",
+  "?": "unknown"
+};
+function normalise(word) {
+  return word.trim().toLowerCase().replace(/[_\s]+/g, " ").replace(/\s*-\s*(?=[a-z])/g, " ");
+}
+function makeVocabulary(extra = {}) {
+  const table = /* @__PURE__ */ new Map();
+  for (const [k, v] of Object.entries(BUILT_IN)) table.set(normalise(k), v);
+  for (const [k, v] of Object.entries(extra)) table.set(normalise(k), v);
+  const ours = new Set(STEREO_FORMS);
+  return (word) => {
+    if (word === void 0 || word.trim() === "") return { form: null, how: "empty" };
+    const trimmed = word.trim();
+    if (ours.has(trimmed)) return { form: trimmed, how: "ours" };
+    const hit = table.get(normalise(trimmed)) ?? table.get(normalise(trimmed.replace(/^\((.*)\)$/, "$1")));
+    if (hit) return { form: hit, how: "mapped" };
+    return { form: null, how: "not-understood" };
+  };
+}
 var VocabularyTally = class {
   mapped = /* @__PURE__ */ new Map();
   notUnderstood = /* @__PURE__ */ new Map();
@@ -48422,6 +49328,152 @@ var VocabularyTally = class {
     return { mapped: [...this.mapped].sort(byWord), notUnderstood: [...this.notUnderstood].sort(byWord) };
   }
 };
+
+// src/bulk/to-record.ts
+function field(fields, name) {
+  if (!name) return void 0;
+  if (name in fields) return fields[name];
+  const lower = name.toLowerCase();
+  for (const k of Object.keys(fields)) if (k.toLowerCase() === lower) return fields[k];
+  return void 0;
+}
+function parseNumber(text) {
+  const t = text.trim().replace(/%$/, "").trim().replace(/^\+/, "").replace(/[\u2212\u2013]/g, "-").replace(/,(?=\d+$)/, ".");
+  if (!/^-?\d+(\.\d+)?$/.test(t)) return null;
+  return Number(t);
+}
+function parseRotation(text) {
+  const t = text.replace(/\[α\]\s*\S*/u, "").replace(/\(.*$/, "").trim();
+  return parseNumber(t.replace(/°$/, ""));
+}
+function toRecord(fields, fallbackId, mapping, vocabulary, molfileText) {
+  const col = {
+    ...DEFAULT_COLUMNS,
+    ...Object.fromEntries(Object.entries(mapping).filter(([, v]) => typeof v === "string"))
+  };
+  const problems = [];
+  const idText = field(fields, col.id)?.trim();
+  const id = idText && idText !== "" ? idText : fallbackId;
+  let structureText = molfileText;
+  if (structureText === null) {
+    const s = field(fields, col.structure);
+    if (s === void 0)
+      problems.push({ message: `no structure column '${col.structure}' in this row`, path: "structure" });
+    else if (s.trim() === "")
+      problems.push({ message: `the structure column '${col.structure}' is empty`, path: "structure" });
+    else structureText = s.trim();
+  }
+  const formWordRaw = field(fields, col.form);
+  const understood = vocabulary(formWordRaw);
+  let form = "unknown";
+  if (understood.form) form = understood.form;
+  else if (understood.how === "not-understood")
+    problems.push({
+      message: `stereo form '${formWordRaw}' (field '${col.form}') is not a word stereogate knows; add it to the mapping vocabulary`,
+      path: "stereo.form"
+    });
+  const record2 = { id, structure: {}, stereo: { form } };
+  if (structureText !== null && molfileText === null) record2.structure.smiles = structureText;
+  if (molfileText !== null) record2.structure.molfile = "(embedded molfile)";
+  const name = field(fields, col.name)?.trim();
+  if (name) record2.name = name;
+  const descriptors2 = field(fields, col.descriptors)?.trim();
+  if (descriptors2) record2.stereo.descriptors = descriptors2;
+  const ratio = field(fields, col.ratio)?.trim();
+  if (ratio) record2.stereo.ratio = ratio;
+  const ee = field(fields, col.ee)?.trim();
+  if (ee) {
+    const v = parseNumber(ee);
+    if (v === null || v < 0 || v > 100)
+      problems.push({ message: `ee '${ee}' is not a percentage between 0 and 100`, path: "stereo.ee" });
+    else record2.stereo.ee = v;
+  }
+  const rot2 = field(fields, col.rotation)?.trim();
+  if (rot2) {
+    const v = parseRotation(rot2);
+    if (v === null)
+      problems.push({
+        message: `rotation '${rot2}' has no number stereogate can read`,
+        path: "stereo.rotation"
+      });
+    else record2.stereo.rotation = { value: v };
+  }
+  return { record: record2, structureText, formWord: formWordRaw?.trim() || null, formHow: understood.how, problems };
+}
+
+// src/bulk/audit-item.ts
+function splitSdRecord(text) {
+  const lines = text.split("\n");
+  let end = lines.findIndex((l) => l.startsWith("M  END"));
+  let problem = null;
+  if (end < 0) {
+    end = lines.findIndex((l) => l.startsWith(">"));
+    problem = "the molfile block has no M  END line";
+    if (end < 0) end = lines.length;
+    else end -= 1;
+  }
+  const molfile = lines.slice(0, end + 1).join("\n") + "\n";
+  const fields = {};
+  let name = null;
+  let value = [];
+  const flush = () => {
+    if (name !== null) fields[name] = value.join("\n").trim();
+    name = null;
+    value = [];
+  };
+  for (const l of lines.slice(end + 1)) {
+    if (l.startsWith(">")) {
+      flush();
+      const m = /<([^>]*)>/.exec(l);
+      name = m ? m[1] : l.slice(1).trim();
+    } else if (name !== null) {
+      if (l.trim() === "") flush();
+      else value.push(l);
+    }
+  }
+  flush();
+  return { molfile, fields, problem };
+}
+function auditItem(item, ctx) {
+  let fields;
+  let molfile = null;
+  const problems = [];
+  if (item.text !== void 0) {
+    const sd = splitSdRecord(item.text);
+    fields = sd.fields;
+    molfile = sd.molfile;
+    if (sd.problem) problems.push({ message: sd.problem, path: "structure", line: item.line });
+  } else {
+    fields = item.fields ?? {};
+  }
+  if (item.splitProblem) problems.push({ message: item.splitProblem, path: "", line: item.line });
+  const title = molfile !== null ? molfile.split("\n", 1)[0].trim() : "";
+  const fallbackId = title || `${item.source}#${item.record}`;
+  const conv = toRecord(fields, fallbackId, ctx.mapping, ctx.vocabulary, molfile);
+  for (const p of conv.problems) problems.push({ message: p.message, path: p.path, line: item.line });
+  const loaded = {
+    file: item.source,
+    id: conv.record.id,
+    record: conv.record,
+    positions: { get: () => ({ line: item.line, column: 1 }) },
+    problems,
+    origin: { kind: "bulk", source: item.source, record: item.record, line: item.line },
+    sources: {
+      main: conv.structureText === null ? null : { field: "structure", format: molfile !== null ? "molfile" : "smiles", text: conv.structureText },
+      components: []
+    }
+  };
+  const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
+  const out = {
+    ...result,
+    seq: item.seq,
+    origin: { source: item.source, record: item.record, line: item.line },
+    form_word: { word: conv.formWord, how: conv.formHow }
+  };
+  if (conv.structureText !== null && result.findings.some((f) => !f.waived))
+    out.structure_text = conv.structureText;
+  return out;
+}
 
 // src/report/html/page-script.ts
 var PAGE_SCRIPT = `
@@ -48821,6 +49873,19 @@ function sarifWriter(path, checks, tool, caution) {
   };
 }
 
+// src/bulk/context.ts
+async function makeItemContext(setup) {
+  const [{ CHECKS: CHECKS2 }, engine] = await Promise.all([Promise.resolve().then(() => (init_checks(), checks_exports)), defaultEngine()]);
+  return {
+    mapping: setup.mapping,
+    vocabulary: makeVocabulary(setup.mapping.vocabulary),
+    checks: CHECKS2,
+    config: setup.config,
+    engine,
+    render: makeRenderer(setup.wants, bulkSarifRules(CHECKS2))
+  };
+}
+
 // src/bulk/accumulate.ts
 var BulkAccumulator = class {
   summary = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
@@ -48855,10 +49920,1138 @@ var BulkAccumulator = class {
   }
 };
 
+// src/bulk/pool.ts
+import { Worker } from "node:worker_threads";
+var STARTUP_LIMIT_MS = 12e4;
+async function* mapOrdered(items, opts) {
+  if (opts.workers <= 0) {
+    if (!opts.inline) throw new Error("mapOrdered: workers=0 needs an inline handler");
+    let n = 0;
+    for await (const item of items) {
+      n++;
+      yield opts.inline(item);
+    }
+    opts.onStats?.({ window: 1, maxAhead: 1, maxBuffered: 0, maxPending: 0, items: n, replaced: 0 });
+    return;
+  }
+  const batchSize = Math.max(1, opts.batchSize ?? 16);
+  const window2 = Math.max(batchSize * opts.workers * 2, opts.window ?? batchSize * opts.workers * 4);
+  const iterator = Symbol.asyncIterator in items ? items[Symbol.asyncIterator]() : toAsync(items);
+  const done = /* @__PURE__ */ new Map();
+  const stats = { window: window2, maxAhead: 0, maxBuffered: 0, maxPending: 0, items: 0, replaced: 0 };
+  const record2 = (at2, result) => {
+    done.set(at2, result);
+    if (done.size > stats.maxBuffered) stats.maxBuffered = done.size;
+  };
+  const pending = [];
+  let nextIndex = 0;
+  let nextOut = 0;
+  let inputDone = false;
+  let wake = null;
+  let failure2 = null;
+  const notify = () => {
+    const w = wake;
+    wake = null;
+    if (w) w();
+  };
+  const slots = [];
+  const spawn = () => {
+    const shared = new SharedArrayBuffer(8);
+    const progress = new Int32Array(shared);
+    progress[0] = -1;
+    const data = { user: opts.workerData, progress: shared };
+    const worker = startWorker(opts.script, opts.execArgv, data);
+    const slot = {
+      worker,
+      progress,
+      seen: 0,
+      queue: [],
+      lastProgress: Date.now(),
+      dead: false,
+      ready: false,
+      started: Date.now()
+    };
+    worker.on("message", (msg) => {
+      if ("ready" in msg) {
+        slot.ready = true;
+        slot.lastProgress = Date.now();
+        return;
+      }
+      if (slot.dead) return;
+      slot.lastProgress = Date.now();
+      const finished = /* @__PURE__ */ new Set();
+      for (const [index, result] of msg.results) {
+        finished.add(index);
+        record2(index, result);
+      }
+      slot.queue = slot.queue.filter((j) => !finished.has(j.index));
+      notify();
+    });
+    worker.on("error", (err2) => {
+      if (slot.dead) return;
+      slot.dead = true;
+      const [current, rest] = takeCurrent(slot);
+      if (current) {
+        const result = opts.onCrash ? opts.onCrash(current.item, current.index, String(err2?.message ?? err2)) : opts.onTimeout(current.item, current.index);
+        record2(current.index, result);
+      }
+      pending.unshift(...rest);
+      replace(slot);
+      notify();
+    });
+    worker.on("exit", () => {
+      if (!slot.dead && slot.queue.length > 0) worker.emit("error", new Error("worker exited"));
+    });
+    return slot;
+  };
+  const takeCurrent = (slot) => {
+    const on = Atomics.load(slot.progress, 0);
+    const at2 = slot.queue.findIndex((j) => j.index === on);
+    const current = at2 >= 0 ? slot.queue[at2] : slot.queue[0];
+    const rest = slot.queue.filter((j) => j !== current);
+    slot.queue = [];
+    return [current, rest];
+  };
+  const replace = (slot) => {
+    const i = slots.indexOf(slot);
+    stats.replaced++;
+    void slot.worker.terminate();
+    if (i >= 0) slots[i] = spawn();
+  };
+  for (let i = 0; i < opts.workers; i++) slots.push(spawn());
+  const timer = setInterval(
+    () => {
+      const now = Date.now();
+      for (const slot of slots) {
+        if (slot.dead || slot.queue.length === 0) continue;
+        const finished = Atomics.load(slot.progress, 1);
+        if (finished !== slot.seen) {
+          slot.seen = finished;
+          slot.lastProgress = now;
+        }
+        const stalled = slot.ready ? now - slot.lastProgress > opts.timeoutMs : now - slot.started > Math.max(STARTUP_LIMIT_MS, opts.timeoutMs);
+        if (stalled) {
+          slot.dead = true;
+          const [current, rest] = takeCurrent(slot);
+          if (current) record2(current.index, opts.onTimeout(current.item, current.index));
+          pending.unshift(...rest);
+          replace(slot);
+          notify();
+        }
+      }
+    },
+    Math.max(20, Math.min(1e3, Math.floor(opts.timeoutMs / 4)))
+  );
+  timer.unref();
+  const canRead = () => !inputDone && nextIndex - nextOut < window2 && pending.length < batchSize * opts.workers * 2;
+  const readMore = async () => {
+    while (canRead()) {
+      const r = await iterator.next();
+      if (r.done) {
+        inputDone = true;
+        break;
+      }
+      pending.push({ index: nextIndex++, item: r.value });
+      if (nextIndex - nextOut > stats.maxAhead) stats.maxAhead = nextIndex - nextOut;
+      if (pending.length > stats.maxPending) stats.maxPending = pending.length;
+    }
+  };
+  const dispatch = () => {
+    for (const slot of slots) {
+      if (slot.dead || slot.queue.length >= batchSize || pending.length === 0) continue;
+      const batch = pending.splice(0, batchSize - slot.queue.length);
+      if (slot.queue.length === 0) slot.lastProgress = Date.now();
+      slot.queue.push(...batch);
+      slot.worker.postMessage({ jobs: batch });
+    }
+  };
+  try {
+    for (; ; ) {
+      if (failure2) throw failure2;
+      await readMore();
+      dispatch();
+      while (done.has(nextOut)) {
+        const value = done.get(nextOut);
+        done.delete(nextOut);
+        nextOut++;
+        yield value;
+      }
+      if (inputDone && nextOut >= nextIndex) break;
+      await new Promise((resolve5) => {
+        wake = resolve5;
+        if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some((s) => !s.dead && s.queue.length < batchSize))
+          notify();
+      });
+    }
+  } catch (e) {
+    failure2 = e;
+    throw e;
+  } finally {
+    stats.items = nextIndex;
+    opts.onStats?.(stats);
+    clearInterval(timer);
+    await Promise.all(slots.map((s) => s.worker.terminate()));
+  }
+}
+function startWorker(script, execArgv, data) {
+  if (!script.pathname.endsWith(".ts")) return new Worker(script, { execArgv, workerData: data });
+  const tsx = import.meta.resolve("tsx/esm/api");
+  const code = `import(${JSON.stringify(tsx)}).then((m) => { m.register(); return import(${JSON.stringify(script.href)}); }).catch((e) => { setImmediate(() => { throw e; }); });`;
+  return new Worker(code, { eval: true, execArgv, workerData: data });
+}
+async function* toAsync(items) {
+  for (const item of items) yield item;
+}
+
 // src/bulk/progress.ts
 var import_cli_progress = __toESM(require_cli_progress(), 1);
+function makeProgress(mode, total, stream = process.stderr, every = { ms: 1e4 }) {
+  const resolved = mode === "auto" ? stream.isTTY && !process.env.CI ? "bar" : "lines" : mode;
+  if (resolved === "none") return { tick() {
+  }, stop() {
+  } };
+  const started = Date.now();
+  let done = 0;
+  if (resolved === "bar") {
+    const bar = new import_cli_progress.default.SingleBar(
+      {
+        stream,
+        format: " auditing |{bar}| {percentage}% | {value}/{total} records | {rate} rec/s | {eta_formatted} left",
+        barCompleteChar: "█",
+        barIncompleteChar: "░",
+        hideCursor: true,
+        etaBuffer: 200
+      },
+      import_cli_progress.default.Presets.shades_classic
+    );
+    bar.start(total ?? 0, 0, { rate: "0" });
+    return {
+      tick(n = 1) {
+        done += n;
+        const rate = done / Math.max(1e-3, (Date.now() - started) / 1e3);
+        if (total === null) bar.setTotal(done);
+        bar.update(done, { rate: rate.toFixed(0) });
+      },
+      stop() {
+        bar.stop();
+      }
+    };
+  }
+  let last = started;
+  const line = (final) => {
+    const secs = (Date.now() - started) / 1e3;
+    const rate = done / Math.max(1e-3, secs);
+    const pct = total ? ` (${Math.floor(100 * done / total)}%)` : "";
+    const left = total && rate > 0 && !final ? `, about ${Math.ceil((total - done) / rate)} s left` : "";
+    stream.write(
+      `stereogate: ${done.toLocaleString("en-US")}${total ? " / " + total.toLocaleString("en-US") : ""} records${pct}, ${rate.toFixed(0)} records/s${left}${final ? `, done in ${secs.toFixed(1)} s` : ""}
+`
+    );
+  };
+  return {
+    tick(n = 1) {
+      done += n;
+      const now = Date.now();
+      if (now - last >= every.ms) {
+        last = now;
+        line(false);
+      }
+    },
+    stop() {
+      line(true);
+    }
+  };
+}
 
-// node_modules/csv-parse/lib/api/index.js
+// src/bulk/sources.ts
+import { createReadStream } from "node:fs";
+import { createInterface } from "node:readline";
+
+// ../../work/main/node_modules/csv-parse/lib/index.js
+import { Transform } from "stream";
+
+// ../../work/main/node_modules/csv-parse/lib/utils/is_object.js
+var is_object = function(obj) {
+  return typeof obj === "object" && obj !== null && !Array.isArray(obj);
+};
+
+// ../../work/main/node_modules/csv-parse/lib/api/CsvError.js
+var CsvError = class _CsvError extends Error {
+  constructor(code, message, options, ...contexts) {
+    if (Array.isArray(message)) message = message.join(" ").trim();
+    super(message);
+    if (Error.captureStackTrace !== void 0) {
+      Error.captureStackTrace(this, _CsvError);
+    }
+    this.code = code;
+    for (const context of contexts) {
+      for (const key3 in context) {
+        const value = context[key3];
+        this[key3] = Buffer.isBuffer(value) ? value.toString(options.encoding) : value == null ? value : JSON.parse(JSON.stringify(value));
+      }
+    }
+  }
+};
+
+// ../../work/main/node_modules/csv-parse/lib/api/normalize_columns_array.js
+var normalize_columns_array = function(columns) {
+  const normalizedColumns = [];
+  for (let i = 0, l = columns.length; i < l; i++) {
+    const column = columns[i];
+    if (column === void 0 || column === null || column === false) {
+      normalizedColumns[i] = { disabled: true };
+    } else if (typeof column === "string" || typeof column === "number") {
+      normalizedColumns[i] = { name: `${column}` };
+    } else if (is_object(column)) {
+      if (typeof column.name !== "string") {
+        throw new CsvError("CSV_OPTION_COLUMNS_MISSING_NAME", [
+          "Option columns missing name:",
+          `property "name" is required at position ${i}`,
+          "when column is an object literal"
+        ]);
+      }
+      normalizedColumns[i] = column;
+    } else {
+      throw new CsvError("CSV_INVALID_COLUMN_DEFINITION", [
+        "Invalid column definition:",
+        "expect a string or a literal object,",
+        `got ${JSON.stringify(column)} at position ${i}`
+      ]);
+    }
+  }
+  return normalizedColumns;
+};
+
+// ../../work/main/node_modules/csv-parse/lib/utils/ResizeableBuffer.js
+var ResizeableBuffer = class {
+  constructor(size = 100) {
+    this.size = size;
+    this.length = 0;
+    this.buf = Buffer.allocUnsafe(size);
+  }
+  prepend(val) {
+    if (Buffer.isBuffer(val)) {
+      const length = this.length + val.length;
+      if (length >= this.size) {
+        this.resize();
+        if (length >= this.size) {
+          throw Error("INVALID_BUFFER_STATE");
+        }
+      }
+      const buf = this.buf;
+      this.buf = Buffer.allocUnsafe(this.size);
+      val.copy(this.buf, 0);
+      buf.copy(this.buf, val.length);
+      this.length += val.length;
+    } else {
+      const length = this.length++;
+      if (length === this.size) {
+        this.resize();
+      }
+      const buf = this.clone();
+      this.buf[0] = val;
+      buf.copy(this.buf, 1, 0, length);
+    }
+  }
+  append(val) {
+    const length = this.length++;
+    if (length === this.size) {
+      this.resize();
+    }
+    this.buf[length] = val;
+  }
+  clone() {
+    return Buffer.from(this.buf.slice(0, this.length));
+  }
+  resize() {
+    const length = this.length;
+    this.size = this.size * 2;
+    const buf = Buffer.allocUnsafe(this.size);
+    this.buf.copy(buf, 0, 0, length);
+    this.buf = buf;
+  }
+  toString(encoding) {
+    if (encoding) {
+      return this.buf.toString(encoding, 0, this.length);
+    } else {
+      return Uint8Array.prototype.slice.call(this.buf.slice(0, this.length));
+    }
+  }
+  toJSON() {
+    return this.toString("utf8");
+  }
+  reset() {
+    this.length = 0;
+  }
+};
+var ResizeableBuffer_default = ResizeableBuffer;
+
+// ../../work/main/node_modules/csv-parse/lib/api/init_state.js
+var init_state = function(options) {
+  const timchars = [
+    // Basic Latin
+    32,
+    // [Space](https://www.fileformat.info/info/unicode/char/0020/index.htm)
+    9,
+    // [CHARACTER TABULATION (HT)](https://www.fileformat.info/info/unicode/char/0009/index.htm)
+    10,
+    // [LINE FEED (LF)](https://www.fileformat.info/info/unicode/char/000a/index.htm)
+    13,
+    // [CARRIAGE RETURN (CR)](https://www.fileformat.info/info/unicode/char/000d/index.htm)
+    12,
+    // [FORM FEED (FF)](https://www.fileformat.info/info/unicode/char/000c/index.htm)
+    11,
+    // [LINE TABULATION (VT)](https://www.fileformat.info/info/unicode/char/000b/index.htm)
+    // Latin-1 Supplement
+    160,
+    // [NO-BREAK SPACE (NBSP)](https://www.fileformat.info/info/unicode/char/00a0/index.htm)
+    // Ogham
+    5760,
+    // [OGHAM SPACE MARK](https://www.fileformat.info/info/unicode/char/1680/index.htm)
+    // General Punctuation
+    8192,
+    // [EN QUAD](https://www.fileformat.info/info/unicode/char/2000/index.htm)
+    8193,
+    // [EM QUAD](https://www.fileformat.info/info/unicode/char/2001/index.htm)
+    8194,
+    // [EN SPACE](https://www.fileformat.info/info/unicode/char/2002/index.htm)
+    8195,
+    // [EM SPACE](https://www.fileformat.info/info/unicode/char/2003/index.htm)
+    8196,
+    // [THREE-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2004/index.htm)
+    8197,
+    // [FOUR-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2005/index.htm)
+    8198,
+    // [SIX-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2006/index.htm)
+    8199,
+    // [FIGURE SPACE](https://www.fileformat.info/info/unicode/char/2007/index.htm)
+    8200,
+    // [PUNCTUATION SPACE](https://www.fileformat.info/info/unicode/char/2008/index.htm)
+    8201,
+    // [THIN SPACE](https://www.fileformat.info/info/unicode/char/2009/index.htm)
+    8202,
+    // [HAIR SPACE](https://www.fileformat.info/info/unicode/char/200a/index.htm)
+    8232,
+    // [LINE SEPARATOR](https://www.fileformat.info/info/unicode/char/2028/index.htm)
+    8233,
+    // [PARAGRAPH SEPARATOR](https://www.fileformat.info/info/unicode/char/2029/index.htm)
+    8239,
+    // [NARROW NO-BREAK SPACE (NNBSP)](https://www.fileformat.info/info/unicode/char/202f/index.htm)
+    8287,
+    // [MEDIUM MATHEMATICAL SPACE (MMSP)](https://www.fileformat.info/info/unicode/char/205f/index.htm)
+    12288,
+    // [IDEOGRAPHIC SPACE](https://www.fileformat.info/info/unicode/char/3000/index.htm)
+    65279
+    // [ZERO WIDTH NO-BREAK SPACE (BOM)](https://www.fileformat.info/info/unicode/char/feff/index.htm)
+  ].reduce((acc, codepoint) => {
+    const encoded = Buffer.from(
+      String.fromCharCode(codepoint),
+      options.encoding
+    );
+    if (codepoint !== 63 && encoded.length === 1 && encoded[0] === 63) {
+      return acc;
+    }
+    acc.push(encoded);
+    return acc;
+  }, []);
+  const timcharFirstBytes = new Uint8Array(256);
+  for (const t of timchars) timcharFirstBytes[t[0]] = 1;
+  return {
+    bomSkipped: false,
+    bufBytesStart: 0,
+    castField: options.cast_function,
+    commenting: false,
+    delimiterBufPrevious: void 0,
+    delimiterDiscovered: false,
+    // Current error encountered by a record
+    error: void 0,
+    enabled: options.from_line === 1,
+    escaping: false,
+    escapeIsQuote: Buffer.isBuffer(options.escape) && Buffer.isBuffer(options.quote) && Buffer.compare(options.escape, options.quote) === 0,
+    // columns can be `false`, `true`, `Array`
+    expectedRecordLength: Array.isArray(options.columns) ? options.columns.length : void 0,
+    field: new ResizeableBuffer_default(20),
+    firstLineToHeaders: options.cast_first_line_to_header,
+    needMoreDataSize: Math.max(
+      // Skip if the remaining buffer smaller than comment
+      options.comment !== null ? options.comment.length : 0,
+      ...options.delimiter ? options.delimiter.map((delimiter) => delimiter.length) : [],
+      // Auto discovery of delimiter is limited to 1 character
+      options.delimiter_auto ? 1 : 0,
+      // Skip if the remaining buffer can be escape sequence
+      options.quote !== null ? options.quote.length : 0,
+      ...timchars.map((t) => t.length)
+    ),
+    previousBuf: void 0,
+    quoting: false,
+    stop: false,
+    rawBuffer: new ResizeableBuffer_default(100),
+    record: [],
+    recordHasError: false,
+    record_length: 0,
+    recordDelimiterMaxLength: options.record_delimiter.length === 0 ? 0 : Math.max(...options.record_delimiter.map((v) => v.length)),
+    trimChars: [
+      Buffer.from(" ", options.encoding)[0],
+      Buffer.from("	", options.encoding)[0]
+    ],
+    wasQuoting: false,
+    wasRowDelimiter: false,
+    timchars,
+    timcharFirstBytes
+  };
+};
+
+// ../../work/main/node_modules/csv-parse/lib/utils/underscore.js
+var underscore = function(str) {
+  return str.replace(/([A-Z])/g, function(_, match) {
+    return "_" + match.toLowerCase();
+  });
+};
+
+// ../../work/main/node_modules/csv-parse/lib/api/normalize_options.js
+var normalize_options = function(opts) {
+  const options = {};
+  for (const opt in opts) {
+    options[underscore(opt)] = opts[opt];
+  }
+  if (options.encoding === void 0 || options.encoding === true) {
+    options.encoding = "utf8";
+  } else if (options.encoding === null || options.encoding === false) {
+    options.encoding = null;
+  } else if (typeof options.encoding !== "string" && options.encoding !== null) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_ENCODING",
+      [
+        "Invalid option encoding:",
+        "encoding must be a string or null to return a buffer,",
+        `got ${JSON.stringify(options.encoding)}`
+      ],
+      options
+    );
+  }
+  if (options.bom === void 0 || options.bom === null || options.bom === false) {
+    options.bom = false;
+  } else if (options.bom !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_BOM",
+      [
+        "Invalid option bom:",
+        "bom must be true,",
+        `got ${JSON.stringify(options.bom)}`
+      ],
+      options
+    );
+  }
+  options.cast_function = null;
+  if (options.cast === void 0 || options.cast === null || options.cast === false || options.cast === "") {
+    options.cast = void 0;
+  } else if (typeof options.cast === "function") {
+    options.cast_function = options.cast;
+    options.cast = true;
+  } else if (options.cast !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_CAST",
+      [
+        "Invalid option cast:",
+        "cast must be true or a function,",
+        `got ${JSON.stringify(options.cast)}`
+      ],
+      options
+    );
+  }
+  if (options.cast_date === void 0 || options.cast_date === null || options.cast_date === false || options.cast_date === "") {
+    options.cast_date = false;
+  } else if (options.cast_date === true) {
+    options.cast_date = function(value) {
+      const date = Date.parse(value);
+      return !isNaN(date) ? new Date(date) : value;
+    };
+  } else if (typeof options.cast_date !== "function") {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_CAST_DATE",
+      [
+        "Invalid option cast_date:",
+        "cast_date must be true or a function,",
+        `got ${JSON.stringify(options.cast_date)}`
+      ],
+      options
+    );
+  }
+  options.cast_first_line_to_header = void 0;
+  if (options.columns === true) {
+    options.cast_first_line_to_header = void 0;
+  } else if (typeof options.columns === "function") {
+    options.cast_first_line_to_header = options.columns;
+    options.columns = true;
+  } else if (Array.isArray(options.columns)) {
+    options.columns = normalize_columns_array(options.columns);
+  } else if (options.columns === void 0 || options.columns === null || options.columns === false) {
+    options.columns = false;
+  } else {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_COLUMNS",
+      [
+        "Invalid option columns:",
+        "expect an array, a function or true,",
+        `got ${JSON.stringify(options.columns)}`
+      ],
+      options
+    );
+  }
+  if (options.group_columns_by_name === void 0 || options.group_columns_by_name === null || options.group_columns_by_name === false) {
+    options.group_columns_by_name = false;
+  } else if (options.group_columns_by_name !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
+      [
+        "Invalid option group_columns_by_name:",
+        "expect an boolean,",
+        `got ${JSON.stringify(options.group_columns_by_name)}`
+      ],
+      options
+    );
+  } else if (options.columns === false) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
+      [
+        "Invalid option group_columns_by_name:",
+        "the `columns` mode must be activated."
+      ],
+      options
+    );
+  }
+  if (options.comment === void 0 || options.comment === null || options.comment === false || options.comment === "") {
+    options.comment = null;
+  } else {
+    if (typeof options.comment === "string") {
+      options.comment = Buffer.from(options.comment, options.encoding);
+    }
+    if (!Buffer.isBuffer(options.comment)) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_COMMENT",
+        [
+          "Invalid option comment:",
+          "comment must be a buffer or a string,",
+          `got ${JSON.stringify(options.comment)}`
+        ],
+        options
+      );
+    }
+  }
+  if (options.comment_no_infix === void 0 || options.comment_no_infix === null || options.comment_no_infix === false) {
+    options.comment_no_infix = false;
+  } else if (options.comment_no_infix !== true) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_COMMENT",
+      [
+        "Invalid option comment_no_infix:",
+        "value must be a boolean,",
+        `got ${JSON.stringify(options.comment_no_infix)}`
+      ],
+      options
+    );
+  }
+  if (options.delimiter_auto === void 0 || options.delimiter_auto === null || options.delimiter_auto === false) {
+    options.delimiter_auto = false;
+  } else if (options.delimiter_auto === true) {
+    options.delimiter_auto = {};
+  } else if (!is_object(options.delimiter_auto)) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_DELIMITER_AUTO",
+      [
+        "Invalid option delimiter_auto:",
+        "delimiter_auto must be a boolean or a configuration object,",
+        `got ${JSON.stringify(options.delimiter_auto)}`
+      ],
+      options
+    );
+  }
+  if (options.delimiter_auto) {
+    if (options.delimiter_auto.preferred === void 0)
+      options.delimiter_auto.preferred = {
+        [",".charCodeAt(0)]: 1.8,
+        ["	".charCodeAt(0)]: 1.8,
+        [";".charCodeAt(0)]: 1.6,
+        [" ".charCodeAt(0)]: 1.6,
+        [":".charCodeAt(0)]: 1.5,
+        [".".charCodeAt(0)]: 1.4,
+        ["/".charCodeAt(0)]: 1.4
+      };
+    else if (!is_object(options.delimiter_auto.preferred)) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER_AUTO",
+        [
+          "Invalid option delimiter_auto:",
+          "preferred must be an object,",
+          `got ${JSON.stringify(options.delimiter_auto.preferred)}`
+        ],
+        options
+      );
+    }
+    if (options.delimiter_auto.score === void 0)
+      options.delimiter_auto.score = (info, options2) => {
+        return (info.total - info.std) * (options2.preferred[info.char_code] || 1);
+      };
+    else if (typeof options.delimiter_auto.score !== "function") {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER_AUTO",
+        [
+          "Invalid option delimiter_auto:",
+          "score must be a function,",
+          `got ${JSON.stringify(options.delimiter_auto.score)}`
+        ],
+        options
+      );
+    }
+    if (options.delimiter_auto.size === void 0)
+      options.delimiter_auto.size = 2048;
+    else if (typeof options.delimiter_auto.size !== "number") {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER_AUTO",
+        [
+          "Invalid option delimiter_auto:",
+          "size must be a number,",
+          `got ${JSON.stringify(options.delimiter_auto.size)}`
+        ],
+        options
+      );
+    }
+  }
+  const delimiter_json = JSON.stringify(options.delimiter);
+  if (options.delimiter_auto !== false) {
+    options.delimiter = [];
+  }
+  if (!Array.isArray(options.delimiter)) {
+    if (options.delimiter === void 0 || options.delimiter === null || options.delimiter === false) {
+      options.delimiter = Buffer.from(",", options.encoding);
+    }
+    options.delimiter = [options.delimiter];
+  }
+  options.delimiter = options.delimiter.map(function(delimiter) {
+    if (typeof delimiter === "string") {
+      delimiter = Buffer.from(delimiter, options.encoding);
+    }
+    if (!Buffer.isBuffer(delimiter) || delimiter.length === 0) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_DELIMITER",
+        [
+          "Invalid option delimiter:",
+          "delimiter must be a non empty string or buffer or array of string|buffer,",
+          `got ${delimiter_json}`
+        ],
+        options
+      );
+    }
+    return delimiter;
+  });
+  if (options.escape === void 0 || options.escape === true) {
+    options.escape = Buffer.from('"', options.encoding);
+  } else if (typeof options.escape === "string") {
+    options.escape = Buffer.from(options.escape, options.encoding);
+  } else if (options.escape === null || options.escape === false) {
+    options.escape = null;
+  }
+  if (options.escape !== null) {
+    if (!Buffer.isBuffer(options.escape)) {
+      throw new Error(
+        `Invalid Option: escape must be a buffer, a string or a boolean, got ${JSON.stringify(options.escape)}`
+      );
+    }
+  }
+  if (options.from === void 0 || options.from === null) {
+    options.from = 1;
+  } else {
+    if (typeof options.from === "string" && /\d+/.test(options.from)) {
+      options.from = parseInt(options.from);
+    }
+    if (Number.isInteger(options.from)) {
+      if (options.from < 0) {
+        throw new Error(
+          `Invalid Option: from must be a positive integer, got ${JSON.stringify(opts.from)}`
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: from must be an integer, got ${JSON.stringify(options.from)}`
+      );
+    }
+  }
+  if (options.from_line === void 0 || options.from_line === null) {
+    options.from_line = 1;
+  } else {
+    if (typeof options.from_line === "string" && /\d+/.test(options.from_line)) {
+      options.from_line = parseInt(options.from_line);
+    }
+    if (Number.isInteger(options.from_line)) {
+      if (options.from_line <= 0) {
+        throw new Error(
+          `Invalid Option: from_line must be a positive integer greater than 0, got ${JSON.stringify(opts.from_line)}`
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: from_line must be an integer, got ${JSON.stringify(opts.from_line)}`
+      );
+    }
+  }
+  if (options.ignore_last_delimiters === void 0 || options.ignore_last_delimiters === null) {
+    options.ignore_last_delimiters = false;
+  } else if (typeof options.ignore_last_delimiters === "number") {
+    options.ignore_last_delimiters = Math.floor(options.ignore_last_delimiters);
+    if (options.ignore_last_delimiters === 0) {
+      options.ignore_last_delimiters = false;
+    }
+  } else if (typeof options.ignore_last_delimiters !== "boolean") {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_IGNORE_LAST_DELIMITERS",
+      [
+        "Invalid option `ignore_last_delimiters`:",
+        "the value must be a boolean value or an integer,",
+        `got ${JSON.stringify(options.ignore_last_delimiters)}`
+      ],
+      options
+    );
+  }
+  if (options.ignore_last_delimiters === true && options.columns === false) {
+    throw new CsvError(
+      "CSV_IGNORE_LAST_DELIMITERS_REQUIRES_COLUMNS",
+      [
+        "The option `ignore_last_delimiters`",
+        "requires the activation of the `columns` option"
+      ],
+      options
+    );
+  }
+  if (options.info === void 0 || options.info === null || options.info === false) {
+    options.info = false;
+  } else if (options.info !== true) {
+    throw new Error(
+      `Invalid Option: info must be true, got ${JSON.stringify(options.info)}`
+    );
+  }
+  if (options.max_record_size === void 0 || options.max_record_size === null || options.max_record_size === false) {
+    options.max_record_size = 0;
+  } else if (Number.isInteger(options.max_record_size) && options.max_record_size >= 0) {
+  } else if (typeof options.max_record_size === "string" && /\d+/.test(options.max_record_size)) {
+    options.max_record_size = parseInt(options.max_record_size);
+  } else {
+    throw new Error(
+      `Invalid Option: max_record_size must be a positive integer, got ${JSON.stringify(options.max_record_size)}`
+    );
+  }
+  if (options.objname === void 0 || options.objname === null || options.objname === false) {
+    options.objname = void 0;
+  } else if (Buffer.isBuffer(options.objname)) {
+    if (options.objname.length === 0) {
+      throw new Error(`Invalid Option: objname must be a non empty buffer`);
+    }
+    if (options.encoding === null) {
+    } else {
+      options.objname = options.objname.toString(options.encoding);
+    }
+  } else if (typeof options.objname === "string") {
+    if (options.objname.length === 0) {
+      throw new Error(`Invalid Option: objname must be a non empty string`);
+    }
+  } else if (typeof options.objname === "number") {
+  } else {
+    throw new Error(
+      `Invalid Option: objname must be a string or a buffer, got ${options.objname}`
+    );
+  }
+  if (options.objname !== void 0) {
+    if (typeof options.objname === "number") {
+      if (options.columns !== false) {
+        throw Error(
+          "Invalid Option: objname index cannot be combined with columns or be defined as a field"
+        );
+      }
+    } else {
+      if (options.columns === false) {
+        throw Error(
+          "Invalid Option: objname field must be combined with columns or be defined as an index"
+        );
+      }
+    }
+  }
+  if (options.on_record === void 0 || options.on_record === null) {
+    options.on_record = void 0;
+  } else if (typeof options.on_record !== "function") {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_ON_RECORD",
+      [
+        "Invalid option `on_record`:",
+        "expect a function,",
+        `got ${JSON.stringify(options.on_record)}`
+      ],
+      options
+    );
+  }
+  if (options.on_skip !== void 0 && options.on_skip !== null && typeof options.on_skip !== "function") {
+    throw new Error(
+      `Invalid Option: on_skip must be a function, got ${JSON.stringify(options.on_skip)}`
+    );
+  }
+  if (options.quote === null || options.quote === false || options.quote === "") {
+    options.quote = null;
+  } else {
+    if (options.quote === void 0 || options.quote === true) {
+      options.quote = Buffer.from('"', options.encoding);
+    } else if (typeof options.quote === "string") {
+      options.quote = Buffer.from(options.quote, options.encoding);
+    }
+    if (!Buffer.isBuffer(options.quote)) {
+      throw new Error(
+        `Invalid Option: quote must be a buffer or a string, got ${JSON.stringify(options.quote)}`
+      );
+    }
+  }
+  if (options.raw === void 0 || options.raw === null || options.raw === false) {
+    options.raw = false;
+  } else if (options.raw !== true) {
+    throw new Error(
+      `Invalid Option: raw must be true, got ${JSON.stringify(options.raw)}`
+    );
+  }
+  if (options.record_delimiter === void 0) {
+    options.record_delimiter = [];
+  } else if (typeof options.record_delimiter === "string" || Buffer.isBuffer(options.record_delimiter)) {
+    if (options.record_delimiter.length === 0) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_RECORD_DELIMITER",
+        [
+          "Invalid option `record_delimiter`:",
+          "value must be a non empty string or buffer,",
+          `got ${JSON.stringify(options.record_delimiter)}`
+        ],
+        options
+      );
+    }
+    options.record_delimiter = [options.record_delimiter];
+  } else if (!Array.isArray(options.record_delimiter)) {
+    throw new CsvError(
+      "CSV_INVALID_OPTION_RECORD_DELIMITER",
+      [
+        "Invalid option `record_delimiter`:",
+        "value must be a string, a buffer or array of string|buffer,",
+        `got ${JSON.stringify(options.record_delimiter)}`
+      ],
+      options
+    );
+  }
+  options.record_delimiter = options.record_delimiter.map(function(rd, i) {
+    if (typeof rd !== "string" && !Buffer.isBuffer(rd)) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_RECORD_DELIMITER",
+        [
+          "Invalid option `record_delimiter`:",
+          "value must be a string, a buffer or array of string|buffer",
+          `at index ${i},`,
+          `got ${JSON.stringify(rd)}`
+        ],
+        options
+      );
+    } else if (rd.length === 0) {
+      throw new CsvError(
+        "CSV_INVALID_OPTION_RECORD_DELIMITER",
+        [
+          "Invalid option `record_delimiter`:",
+          "value must be a non empty string or buffer",
+          `at index ${i},`,
+          `got ${JSON.stringify(rd)}`
+        ],
+        options
+      );
+    }
+    if (typeof rd === "string") {
+      rd = Buffer.from(rd, options.encoding);
+    }
+    return rd;
+  });
+  if (typeof options.relax_column_count === "boolean") {
+  } else if (options.relax_column_count === void 0 || options.relax_column_count === null) {
+    options.relax_column_count = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_column_count must be a boolean, got ${JSON.stringify(options.relax_column_count)}`
+    );
+  }
+  if (typeof options.relax_column_count_less === "boolean") {
+  } else if (options.relax_column_count_less === void 0 || options.relax_column_count_less === null) {
+    options.relax_column_count_less = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_column_count_less must be a boolean, got ${JSON.stringify(options.relax_column_count_less)}`
+    );
+  }
+  if (typeof options.relax_column_count_more === "boolean") {
+  } else if (options.relax_column_count_more === void 0 || options.relax_column_count_more === null) {
+    options.relax_column_count_more = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_column_count_more must be a boolean, got ${JSON.stringify(options.relax_column_count_more)}`
+    );
+  }
+  if (typeof options.relax_quotes === "boolean") {
+  } else if (options.relax_quotes === void 0 || options.relax_quotes === null) {
+    options.relax_quotes = false;
+  } else {
+    throw new Error(
+      `Invalid Option: relax_quotes must be a boolean, got ${JSON.stringify(options.relax_quotes)}`
+    );
+  }
+  if (typeof options.skip_empty_lines === "boolean") {
+  } else if (options.skip_empty_lines === void 0 || options.skip_empty_lines === null) {
+    options.skip_empty_lines = false;
+  } else {
+    throw new Error(
+      `Invalid Option: skip_empty_lines must be a boolean, got ${JSON.stringify(options.skip_empty_lines)}`
+    );
+  }
+  if (typeof options.skip_records_with_empty_values === "boolean") {
+  } else if (options.skip_records_with_empty_values === void 0 || options.skip_records_with_empty_values === null) {
+    options.skip_records_with_empty_values = false;
+  } else {
+    throw new Error(
+      `Invalid Option: skip_records_with_empty_values must be a boolean, got ${JSON.stringify(options.skip_records_with_empty_values)}`
+    );
+  }
+  if (typeof options.skip_records_with_error === "boolean") {
+  } else if (options.skip_records_with_error === void 0 || options.skip_records_with_error === null) {
+    options.skip_records_with_error = false;
+  } else {
+    throw new Error(
+      `Invalid Option: skip_records_with_error must be a boolean, got ${JSON.stringify(options.skip_records_with_error)}`
+    );
+  }
+  if (options.rtrim === void 0 || options.rtrim === null || options.rtrim === false) {
+    options.rtrim = false;
+  } else if (options.rtrim !== true) {
+    throw new Error(
+      `Invalid Option: rtrim must be a boolean, got ${JSON.stringify(options.rtrim)}`
+    );
+  }
+  if (options.ltrim === void 0 || options.ltrim === null || options.ltrim === false) {
+    options.ltrim = false;
+  } else if (options.ltrim !== true) {
+    throw new Error(
+      `Invalid Option: ltrim must be a boolean, got ${JSON.stringify(options.ltrim)}`
+    );
+  }
+  if (options.trim === void 0 || options.trim === null || options.trim === false) {
+    options.trim = false;
+  } else if (options.trim !== true) {
+    throw new Error(
+      `Invalid Option: trim must be a boolean, got ${JSON.stringify(options.trim)}`
+    );
+  }
+  if (options.trim === true && opts.ltrim !== false) {
+    options.ltrim = true;
+  } else if (options.ltrim !== true) {
+    options.ltrim = false;
+  }
+  if (options.trim === true && opts.rtrim !== false) {
+    options.rtrim = true;
+  } else if (options.rtrim !== true) {
+    options.rtrim = false;
+  }
+  if (options.to === void 0 || options.to === null) {
+    options.to = -1;
+  } else if (options.to !== -1) {
+    if (typeof options.to === "string" && /\d+/.test(options.to)) {
+      options.to = parseInt(options.to);
+    }
+    if (Number.isInteger(options.to)) {
+      if (options.to <= 0) {
+        throw new Error(
+          `Invalid Option: to must be a positive integer greater than 0, got ${JSON.stringify(opts.to)}`
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: to must be an integer, got ${JSON.stringify(opts.to)}`
+      );
+    }
+  }
+  if (options.to_line === void 0 || options.to_line === null) {
+    options.to_line = -1;
+  } else if (options.to_line !== -1) {
+    if (typeof options.to_line === "string" && /\d+/.test(options.to_line)) {
+      options.to_line = parseInt(options.to_line);
+    }
+    if (Number.isInteger(options.to_line)) {
+      if (options.to_line <= 0) {
+        throw new Error(
+          `Invalid Option: to_line must be a positive integer greater than 0, got ${JSON.stringify(opts.to_line)}`
+        );
+      }
+    } else {
+      throw new Error(
+        `Invalid Option: to_line must be an integer, got ${JSON.stringify(opts.to_line)}`
+      );
+    }
+  }
+  return options;
+};
+
+// ../../work/main/node_modules/csv-parse/lib/utils/delimiter_discover.js
+var delimiter_discover = function(records, options) {
+  if (!options) {
+    ({ delimiter_auto: options } = normalize_options({ delimiter_auto: true }));
+  }
+  if (typeof records === "string") {
+    records = Buffer.from(records);
+  }
+  if (Buffer.isBuffer(records)) {
+    records = ((data) => {
+      const records2 = [];
+      const parser = transform({ delimiter: [] });
+      const push = (record2) => records2.push(record2);
+      const close2 = () => {
+      };
+      const error = parser.parse(data, true, push, close2);
+      if (error !== void 0) throw error;
+      return records2;
+    })(records);
+  }
+  const info = Array(127).fill().map(() => ({ lines: [] }));
+  records.map(([record2], line) => {
+    for (let i = 0, l = record2.length; i < l; i++) {
+      const code = record2.charCodeAt(i);
+      if (info[code].lines[line] === void 0) info[code].lines[line] = 0;
+      info[code].lines[line]++;
+    }
+  });
+  info.map((info2, i) => {
+    info2.char_code = i;
+    info2.std = std(info2.lines);
+    info2.total = info2.lines.reduce((acc, val) => acc + val, 0);
+    info2.preferred = !!options.preferred[i];
+    info2.score = options.score(info2, options);
+  });
+  const result = info.reduce(
+    (acc, info2) => acc.score > info2.score ? acc : info2,
+    {}
+  );
+  return String.fromCharCode(result.char_code);
+};
+var std = function(array) {
+  const n = array.length;
+  if (n === 0) return 0;
+  const mean = array.reduce((a, b) => a + b) / n;
+  return Math.sqrt(
+    array.map((x) => Math.pow(x - mean, 2)).reduce((a, b) => a + b) / n
+  );
+};
+
+// ../../work/main/node_modules/csv-parse/lib/api/index.js
+var isRecordEmpty = function(record2) {
+  return record2.every(
+    (field2) => field2 == null || field2.toString && field2.toString().trim() === ""
+  );
+};
+var cr = 13;
+var nl = 10;
 var boms = {
   // Note, the following are equals:
   // Buffer.from("\ufeff")
@@ -48870,14 +51063,1131 @@ var boms = {
   // Buffer.from([255, 254])
   utf16le: Buffer.from([255, 254])
 };
+var transform = function(original_options = {}) {
+  const info = {
+    bytes: 0,
+    bytes_records: 0,
+    comment_lines: 0,
+    empty_lines: 0,
+    invalid_field_length: 0,
+    lines: 1,
+    records: 0
+  };
+  const options = normalize_options(original_options);
+  return {
+    info,
+    original_options,
+    options,
+    state: init_state(options),
+    __needMoreData: function(i, bufLen, end) {
+      if (end) return false;
+      const { encoding, escape: escape2, quote: quote2 } = this.options;
+      const { quoting, needMoreDataSize, recordDelimiterMaxLength } = this.state;
+      const numOfCharLeft = bufLen - i - 1;
+      const requiredLength = Math.max(
+        needMoreDataSize,
+        // Skip if the remaining buffer smaller than record delimiter
+        // If "record_delimiter" is yet to be discovered:
+        // 1. It is equals to `[]` and "recordDelimiterMaxLength" equals `0`
+        // 2. We set the length to windows line ending in the current encoding
+        // Note, that encoding is known from user or bom discovery at that point
+        // recordDelimiterMaxLength,
+        recordDelimiterMaxLength === 0 ? Buffer.from("\r\n", encoding).length : recordDelimiterMaxLength,
+        // Skip if remaining buffer can be an escaped quote
+        quoting ? (escape2 === null ? 0 : escape2.length) + quote2.length : 0,
+        // Skip if remaining buffer can be record delimiter following the closing quote
+        quoting ? quote2.length + recordDelimiterMaxLength : 0
+      );
+      return numOfCharLeft < requiredLength;
+    },
+    // Central parser implementation
+    parse: function(nextBuf, end, push, close2) {
+      const {
+        bom,
+        comment_no_infix,
+        delimiter_auto,
+        encoding,
+        from_line,
+        ltrim,
+        max_record_size,
+        raw: raw2,
+        relax_quotes,
+        rtrim,
+        skip_empty_lines,
+        to,
+        to_line
+      } = this.options;
+      let { comment, escape: escape2, quote: quote2, record_delimiter } = this.options;
+      const {
+        bomSkipped,
+        delimiterDiscovered,
+        delimiterBufPrevious,
+        rawBuffer,
+        escapeIsQuote
+      } = this.state;
+      if (!delimiterDiscovered && delimiter_auto) {
+        let delimiterBuf;
+        if (delimiterBufPrevious === void 0) {
+          delimiterBuf = nextBuf;
+        } else if (delimiterBufPrevious !== void 0 && nextBuf === void 0) {
+          delimiterBuf = delimiterBufPrevious;
+        } else {
+          delimiterBuf = Buffer.concat([delimiterBufPrevious, nextBuf]);
+        }
+        nextBuf = void 0;
+        if (end || delimiterBuf.length > delimiter_auto.size) {
+          this.options.delimiter = [
+            Buffer.from(
+              delimiter_discover(delimiterBuf, this.options.delimiter_auto)
+            )
+          ];
+          this.state.previousBuf = delimiterBuf;
+          this.state.delimiterBufPrevious = void 0;
+          this.state.delimiterDiscovered = true;
+        } else {
+          this.state.delimiterBufPrevious = delimiterBuf;
+          return;
+        }
+      }
+      const { previousBuf } = this.state;
+      let buf;
+      if (previousBuf === void 0) {
+        if (nextBuf === void 0) {
+          close2();
+          return;
+        } else {
+          buf = nextBuf;
+        }
+      } else if (previousBuf !== void 0 && nextBuf === void 0) {
+        buf = previousBuf;
+      } else {
+        buf = Buffer.concat([previousBuf, nextBuf]);
+      }
+      if (bomSkipped === false) {
+        if (bom === false) {
+          this.state.bomSkipped = true;
+        } else if (buf.length < 3) {
+          if (end === false) {
+            this.state.previousBuf = buf;
+            return;
+          }
+        } else {
+          for (const encoding2 in boms) {
+            if (boms[encoding2].compare(buf, 0, boms[encoding2].length) === 0) {
+              const bomLength = boms[encoding2].length;
+              this.state.bufBytesStart += bomLength;
+              buf = buf.slice(bomLength);
+              const options2 = normalize_options({
+                ...this.original_options,
+                encoding: encoding2
+              });
+              for (const key3 in options2) {
+                this.options[key3] = options2[key3];
+              }
+              ({ comment, escape: escape2, quote: quote2 } = this.options);
+              break;
+            }
+          }
+          this.state.bomSkipped = true;
+        }
+      }
+      const bufLen = buf.length;
+      let pos;
+      for (pos = 0; pos < bufLen; pos++) {
+        if (this.__needMoreData(pos, bufLen, end)) {
+          break;
+        }
+        if (this.state.wasRowDelimiter === true) {
+          this.info.lines++;
+          this.state.wasRowDelimiter = false;
+        }
+        if (to_line !== -1 && this.info.lines > to_line) {
+          this.state.stop = true;
+          close2();
+          return;
+        }
+        if (this.state.quoting === false && record_delimiter.length === 0) {
+          const record_delimiterCount = this.__autoDiscoverRecordDelimiter(
+            buf,
+            pos
+          );
+          if (record_delimiterCount) {
+            record_delimiter = this.options.record_delimiter;
+          }
+        }
+        const chr = buf[pos];
+        if (raw2 === true) {
+          rawBuffer.append(chr);
+        }
+        if ((chr === cr || chr === nl) && this.state.wasRowDelimiter === false) {
+          this.state.wasRowDelimiter = true;
+        }
+        if (this.state.escaping === true) {
+          this.state.escaping = false;
+        } else {
+          if (escape2 !== null && this.state.quoting === true && this.__isEscape(buf, pos, chr) && pos + escape2.length < bufLen) {
+            if (escapeIsQuote) {
+              if (this.__isQuote(buf, pos + escape2.length)) {
+                this.state.escaping = true;
+                pos += escape2.length - 1;
+                continue;
+              }
+            } else {
+              this.state.escaping = true;
+              pos += escape2.length - 1;
+              continue;
+            }
+          }
+          if (this.state.commenting === false && this.__isQuote(buf, pos)) {
+            if (this.state.quoting === true) {
+              const nextChr = buf[pos + quote2.length];
+              const isNextChrTrimable = rtrim && this.__isCharTrimable(buf, pos + quote2.length);
+              const isNextChrComment = comment !== null && this.__compareBytes(comment, buf, pos + quote2.length, nextChr);
+              const isNextChrDelimiter = this.__isDelimiter(
+                buf,
+                pos + quote2.length,
+                nextChr
+              );
+              const isNextChrRecordDelimiter = record_delimiter.length === 0 ? this.__autoDiscoverRecordDelimiter(buf, pos + quote2.length) : this.__isRecordDelimiter(nextChr, buf, pos + quote2.length);
+              if (escape2 !== null && this.__isEscape(buf, pos, chr) && this.__isQuote(buf, pos + escape2.length)) {
+                pos += escape2.length - 1;
+              } else if (!nextChr || isNextChrDelimiter || isNextChrRecordDelimiter || isNextChrComment || isNextChrTrimable) {
+                this.state.quoting = false;
+                this.state.wasQuoting = true;
+                pos += quote2.length - 1;
+                continue;
+              } else if (relax_quotes === false) {
+                const err2 = this.__error(
+                  new CsvError(
+                    "CSV_INVALID_CLOSING_QUOTE",
+                    [
+                      "Invalid Closing Quote:",
+                      `got "${String.fromCharCode(nextChr)}"`,
+                      `at line ${this.info.lines}`,
+                      "instead of delimiter, record delimiter, trimable character",
+                      "(if activated) or comment"
+                    ],
+                    this.options,
+                    this.__infoField()
+                  )
+                );
+                if (err2 !== void 0) return err2;
+              } else {
+                this.state.quoting = false;
+                this.state.wasQuoting = true;
+                this.state.field.prepend(quote2);
+                pos += quote2.length - 1;
+              }
+            } else {
+              if (this.state.field.length !== 0) {
+                if (relax_quotes === false) {
+                  const info2 = this.__infoField();
+                  const bom2 = Object.keys(boms).map(
+                    (b) => boms[b].equals(this.state.field.toString()) ? b : false
+                  ).filter(Boolean)[0];
+                  const err2 = this.__error(
+                    new CsvError(
+                      "INVALID_OPENING_QUOTE",
+                      [
+                        "Invalid Opening Quote:",
+                        `a quote is found on field ${JSON.stringify(info2.column)} at line ${info2.lines}, value is ${JSON.stringify(this.state.field.toString(encoding))}`,
+                        bom2 ? `(${bom2} bom)` : void 0
+                      ],
+                      this.options,
+                      info2,
+                      {
+                        field: this.state.field
+                      }
+                    )
+                  );
+                  if (err2 !== void 0) return err2;
+                }
+              } else {
+                this.state.quoting = true;
+                pos += quote2.length - 1;
+                continue;
+              }
+            }
+          }
+          if (this.state.quoting === false) {
+            const recordDelimiterLength = this.__isRecordDelimiter(
+              chr,
+              buf,
+              pos
+            );
+            if (recordDelimiterLength !== 0) {
+              const skipCommentLine = this.state.commenting && this.state.wasQuoting === false && this.state.record.length === 0 && this.state.field.length === 0;
+              if (skipCommentLine) {
+                this.info.comment_lines++;
+              } else {
+                if (this.state.enabled === false && this.info.lines + (this.state.wasRowDelimiter === true ? 1 : 0) >= from_line) {
+                  this.state.enabled = true;
+                  this.__resetField();
+                  this.__resetRecord();
+                  pos += recordDelimiterLength - 1;
+                  continue;
+                }
+                if (skip_empty_lines === true && this.state.wasQuoting === false && this.state.record.length === 0 && this.state.field.length === 0) {
+                  this.info.empty_lines++;
+                  pos += recordDelimiterLength - 1;
+                  continue;
+                }
+                this.info.bytes = this.state.bufBytesStart + pos;
+                const errField = this.__onField();
+                if (errField !== void 0) return errField;
+                this.info.bytes = this.state.bufBytesStart + pos + recordDelimiterLength;
+                const errRecord = this.__onRecord(push);
+                if (errRecord !== void 0) return errRecord;
+                if (to !== -1 && this.info.records >= to) {
+                  this.state.stop = true;
+                  close2();
+                  return;
+                }
+              }
+              this.state.commenting = false;
+              pos += recordDelimiterLength - 1;
+              continue;
+            }
+            if (this.state.commenting) {
+              continue;
+            }
+            if (comment !== null && (comment_no_infix === false || this.state.record.length === 0 && this.state.field.length === 0)) {
+              const commentCount = this.__compareBytes(comment, buf, pos, chr);
+              if (commentCount !== 0) {
+                this.state.commenting = true;
+                continue;
+              }
+            }
+            const delimiterLength = this.__isDelimiter(buf, pos, chr);
+            if (delimiterLength !== 0) {
+              this.info.bytes = this.state.bufBytesStart + pos;
+              const errField = this.__onField();
+              if (errField !== void 0) return errField;
+              pos += delimiterLength - 1;
+              continue;
+            }
+          }
+        }
+        if (this.state.commenting === false) {
+          if (max_record_size !== 0 && this.state.record_length + this.state.field.length > max_record_size) {
+            return this.__error(
+              new CsvError(
+                "CSV_MAX_RECORD_SIZE",
+                [
+                  "Max Record Size:",
+                  "record exceed the maximum number of tolerated bytes",
+                  `of ${max_record_size}`,
+                  `at line ${this.info.lines}`
+                ],
+                this.options,
+                this.__infoField()
+              )
+            );
+          }
+        }
+        const lappend = ltrim === false || this.state.quoting === true || this.state.field.length !== 0 || !this.__isCharTrimable(buf, pos);
+        const rappend = rtrim === false || this.state.wasQuoting === false;
+        if (lappend === true && rappend === true) {
+          this.state.field.append(chr);
+        } else if (rtrim === true && !this.__isCharTrimable(buf, pos)) {
+          return this.__error(
+            new CsvError(
+              "CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE",
+              [
+                "Invalid Closing Quote:",
+                "found non trimable byte after quote",
+                `at line ${this.info.lines}`
+              ],
+              this.options,
+              this.__infoField()
+            )
+          );
+        } else {
+          if (lappend === false) {
+            pos += this.__isCharTrimable(buf, pos) - 1;
+          }
+          continue;
+        }
+      }
+      if (end === true) {
+        if (this.state.quoting === true) {
+          const err2 = this.__error(
+            new CsvError(
+              "CSV_QUOTE_NOT_CLOSED",
+              [
+                "Quote Not Closed:",
+                `the parsing is finished with an opening quote at line ${this.info.lines}`
+              ],
+              this.options,
+              this.__infoField()
+            )
+          );
+          if (err2 !== void 0) return err2;
+        } else {
+          if (this.state.wasQuoting === true || this.state.record.length !== 0 || this.state.field.length !== 0) {
+            this.info.bytes = this.state.bufBytesStart + pos;
+            const errField = this.__onField();
+            if (errField !== void 0) return errField;
+            const errRecord = this.__onRecord(push);
+            if (errRecord !== void 0) return errRecord;
+          } else if (this.state.wasRowDelimiter === true) {
+            this.info.empty_lines++;
+          } else if (this.state.commenting === true) {
+            this.info.comment_lines++;
+          }
+        }
+      } else {
+        this.state.bufBytesStart += pos;
+        this.state.previousBuf = buf.slice(pos);
+      }
+      if (this.state.wasRowDelimiter === true) {
+        this.info.lines++;
+        this.state.wasRowDelimiter = false;
+      }
+    },
+    __onRecord: function(push) {
+      const {
+        columns,
+        group_columns_by_name,
+        encoding,
+        info: info2,
+        from,
+        relax_column_count,
+        relax_column_count_less,
+        relax_column_count_more,
+        raw: raw2,
+        skip_records_with_empty_values
+      } = this.options;
+      const { enabled, record: record2 } = this.state;
+      if (enabled === false) {
+        return this.__resetRecord();
+      }
+      const recordLength = record2.length;
+      if (columns === true) {
+        if (skip_records_with_empty_values === true && isRecordEmpty(record2)) {
+          this.__resetRecord();
+          return;
+        }
+        return this.__firstLineToColumns(record2);
+      }
+      if (columns === false && this.info.records === 0) {
+        this.state.expectedRecordLength = recordLength;
+      }
+      if (recordLength !== this.state.expectedRecordLength) {
+        const err2 = columns === false ? new CsvError(
+          "CSV_RECORD_INCONSISTENT_FIELDS_LENGTH",
+          [
+            "Invalid Record Length:",
+            `expect ${this.state.expectedRecordLength},`,
+            `got ${recordLength} on line ${this.info.lines}`
+          ],
+          this.options,
+          this.__infoField(),
+          {
+            record: record2
+          }
+        ) : new CsvError(
+          "CSV_RECORD_INCONSISTENT_COLUMNS",
+          [
+            "Invalid Record Length:",
+            `columns length is ${columns.length},`,
+            // rename columns
+            `got ${recordLength} on line ${this.info.lines}`
+          ],
+          this.options,
+          this.__infoField(),
+          {
+            record: record2
+          }
+        );
+        if (relax_column_count === true || relax_column_count_less === true && recordLength < this.state.expectedRecordLength || relax_column_count_more === true && recordLength > this.state.expectedRecordLength) {
+          this.info.invalid_field_length++;
+          this.state.error = err2;
+        } else {
+          const finalErr = this.__error(err2);
+          if (finalErr) return finalErr;
+        }
+      }
+      if (skip_records_with_empty_values === true && isRecordEmpty(record2)) {
+        this.__resetRecord();
+        return;
+      }
+      if (this.state.recordHasError === true) {
+        this.__resetRecord();
+        this.state.recordHasError = false;
+        return;
+      }
+      this.info.records++;
+      if (from === 1 || this.info.records >= from) {
+        const { objname } = this.options;
+        if (columns !== false) {
+          const obj = {};
+          for (let i = 0, l = record2.length; i < l; i++) {
+            if (columns[i] === void 0 || columns[i].disabled) continue;
+            if (group_columns_by_name === true && Object.hasOwn(obj, columns[i].name)) {
+              if (Array.isArray(obj[columns[i].name])) {
+                obj[columns[i].name] = obj[columns[i].name].concat(record2[i]);
+              } else {
+                obj[columns[i].name] = [obj[columns[i].name], record2[i]];
+              }
+            } else {
+              Object.defineProperty(obj, columns[i].name, {
+                value: record2[i],
+                enumerable: true,
+                writable: true,
+                configurable: true
+              });
+            }
+          }
+          if (raw2 === true || info2 === true) {
+            const extRecord = Object.assign(
+              { record: obj },
+              raw2 === true ? { raw: this.state.rawBuffer.toString(encoding) } : {},
+              info2 === true ? { info: this.__infoRecord() } : {}
+            );
+            const err2 = this.__push(
+              objname === void 0 ? extRecord : [obj[objname], extRecord],
+              push
+            );
+            if (err2) {
+              return err2;
+            }
+          } else {
+            const err2 = this.__push(
+              objname === void 0 ? obj : [obj[objname], obj],
+              push
+            );
+            if (err2) {
+              return err2;
+            }
+          }
+        } else {
+          if (raw2 === true || info2 === true) {
+            const extRecord = Object.assign(
+              { record: record2 },
+              raw2 === true ? { raw: this.state.rawBuffer.toString(encoding) } : {},
+              info2 === true ? { info: this.__infoRecord() } : {}
+            );
+            const err2 = this.__push(
+              objname === void 0 ? extRecord : [record2[objname], extRecord],
+              push
+            );
+            if (err2) {
+              return err2;
+            }
+          } else {
+            const err2 = this.__push(
+              objname === void 0 ? record2 : [record2[objname], record2],
+              push
+            );
+            if (err2) {
+              return err2;
+            }
+          }
+        }
+      }
+      this.__resetRecord();
+    },
+    __firstLineToColumns: function(record2) {
+      const { firstLineToHeaders } = this.state;
+      try {
+        const headers = firstLineToHeaders === void 0 ? record2 : firstLineToHeaders.call(null, record2);
+        if (!Array.isArray(headers)) {
+          return this.__error(
+            new CsvError(
+              "CSV_INVALID_COLUMN_MAPPING",
+              [
+                "Invalid Column Mapping:",
+                "expect an array from column function,",
+                `got ${JSON.stringify(headers)}`
+              ],
+              this.options,
+              this.__infoField(),
+              {
+                headers
+              }
+            )
+          );
+        }
+        const normalizedHeaders = normalize_columns_array(headers);
+        this.state.expectedRecordLength = normalizedHeaders.length;
+        this.options.columns = normalizedHeaders;
+        this.__resetRecord();
+        return;
+      } catch (err2) {
+        return err2;
+      }
+    },
+    __resetRecord: function() {
+      if (this.options.raw === true) {
+        this.state.rawBuffer.reset();
+      }
+      this.state.error = void 0;
+      this.state.record = [];
+      this.state.record_length = 0;
+    },
+    __onField: function() {
+      const { cast, encoding, rtrim, max_record_size } = this.options;
+      const { enabled, wasQuoting } = this.state;
+      if (enabled === false) {
+        return this.__resetField();
+      }
+      let field2 = this.state.field.toString(encoding);
+      if (rtrim === true && wasQuoting === false) {
+        field2 = field2.trimRight();
+      }
+      if (cast === true) {
+        const [err2, f] = this.__cast(field2);
+        if (err2 !== void 0) return err2;
+        field2 = f;
+      }
+      this.state.record.push(field2);
+      if (max_record_size !== 0 && typeof field2 === "string") {
+        this.state.record_length += field2.length;
+      }
+      this.__resetField();
+    },
+    __resetField: function() {
+      this.state.field.reset();
+      this.state.wasQuoting = false;
+    },
+    __push: function(record2, push) {
+      const { on_record } = this.options;
+      if (on_record !== void 0) {
+        const info2 = this.__infoRecord();
+        try {
+          record2 = on_record.call(null, record2, info2);
+        } catch (err2) {
+          return err2;
+        }
+        if (record2 === void 0 || record2 === null) {
+          return;
+        }
+      }
+      this.info.bytes_records += this.info.bytes;
+      push(record2);
+    },
+    // Return a tuple with the error and the casted value
+    __cast: function(field2) {
+      const { columns, relax_column_count } = this.options;
+      const isColumns = Array.isArray(columns);
+      if (isColumns === true && relax_column_count && this.options.columns.length <= this.state.record.length) {
+        return [void 0, void 0];
+      }
+      if (this.state.castField !== null) {
+        try {
+          const info2 = this.__infoField();
+          return [void 0, this.state.castField.call(null, field2, info2)];
+        } catch (err2) {
+          return [err2];
+        }
+      }
+      if (this.__isFloat(field2)) {
+        return [void 0, parseFloat(field2)];
+      } else if (this.options.cast_date !== false) {
+        const info2 = this.__infoField();
+        return [void 0, this.options.cast_date.call(null, field2, info2)];
+      }
+      return [void 0, field2];
+    },
+    __compareBytes: function(sourceBuf, targetBuf, targetPos, firstByte) {
+      if (sourceBuf[0] !== firstByte) return 0;
+      const sourceLength = sourceBuf.length;
+      for (let i = 1; i < sourceLength; i++) {
+        if (sourceBuf[i] !== targetBuf[targetPos + i]) return 0;
+      }
+      return sourceLength;
+    },
+    // Helper to test if a character is trimable
+    __isCharTrimable: function(buf, pos) {
+      const { timchars, timcharFirstBytes } = this.state;
+      const first = buf[pos];
+      if (first === void 0 || timcharFirstBytes[first] === 0) return 0;
+      loop1: for (let i = 0; i < timchars.length; i++) {
+        const timchar = timchars[i];
+        for (let j = 0; j < timchar.length; j++) {
+          if (timchar[j] !== buf[pos + j]) continue loop1;
+        }
+        return timchar.length;
+      }
+      return 0;
+    },
+    __isDelimiter: function(buf, pos, chr) {
+      const { delimiter, ignore_last_delimiters } = this.options;
+      if (ignore_last_delimiters === true && this.state.record.length === this.options.columns.length - 1) {
+        return 0;
+      } else if (ignore_last_delimiters !== false && typeof ignore_last_delimiters === "number" && this.state.record.length === ignore_last_delimiters - 1) {
+        return 0;
+      }
+      loop1: for (let i = 0; i < delimiter.length; i++) {
+        const del = delimiter[i];
+        if (del[0] === chr) {
+          for (let j = 1; j < del.length; j++) {
+            if (del[j] !== buf[pos + j]) continue loop1;
+          }
+          return del.length;
+        }
+      }
+      return 0;
+    },
+    __isEscape: function(buf, pos, chr) {
+      const { escape: escape2 } = this.options;
+      if (escape2 === null) return false;
+      const l = escape2.length;
+      if (escape2[0] === chr) {
+        for (let i = 0; i < l; i++) {
+          if (escape2[i] !== buf[pos + i]) {
+            return false;
+          }
+        }
+        return true;
+      }
+      return false;
+    },
+    __isFloat: function(value) {
+      return value - parseFloat(value) + 1 >= 0;
+    },
+    // Keep it in case we implement the `cast_int` option
+    // __isInt(value){
+    //   // return Number.isInteger(parseInt(value))
+    //   // return !isNaN( parseInt( obj ) );
+    //   return /^(\-|\+)?[1-9][0-9]*$/.test(value)
+    // }
+    __isQuote: function(buf, pos) {
+      const { quote: quote2 } = this.options;
+      if (quote2 === null) return false;
+      const l = quote2.length;
+      for (let i = 0; i < l; i++) {
+        if (quote2[i] !== buf[pos + i]) {
+          return false;
+        }
+      }
+      return true;
+    },
+    __isRecordDelimiter: function(chr, buf, pos) {
+      const { record_delimiter } = this.options;
+      const recordDelimiterLength = record_delimiter.length;
+      loop1: for (let i = 0; i < recordDelimiterLength; i++) {
+        const rd = record_delimiter[i];
+        const rdLength = rd.length;
+        if (rd[0] !== chr) {
+          continue;
+        }
+        for (let j = 1; j < rdLength; j++) {
+          if (rd[j] !== buf[pos + j]) {
+            continue loop1;
+          }
+        }
+        return rd.length;
+      }
+      return 0;
+    },
+    __autoDiscoverRecordDelimiter: function(buf, pos) {
+      const { encoding } = this.options;
+      const rds = [
+        // Important, the windows line ending must be before mac os 9
+        Buffer.from("\r\n", encoding),
+        Buffer.from("\n", encoding),
+        Buffer.from("\r", encoding)
+      ];
+      loop: for (let i = 0; i < rds.length; i++) {
+        const l = rds[i].length;
+        for (let j = 0; j < l; j++) {
+          if (rds[i][j] !== buf[pos + j]) {
+            continue loop;
+          }
+        }
+        this.options.record_delimiter.push(rds[i]);
+        this.state.recordDelimiterMaxLength = rds[i].length;
+        return rds[i].length;
+      }
+      return 0;
+    },
+    __error: function(msg) {
+      const { encoding, raw: raw2, skip_records_with_error } = this.options;
+      const err2 = typeof msg === "string" ? new Error(msg) : msg;
+      if (skip_records_with_error) {
+        this.state.recordHasError = true;
+        if (this.options.on_skip !== void 0) {
+          try {
+            this.options.on_skip(
+              err2,
+              raw2 ? this.state.rawBuffer.toString(encoding) : void 0
+            );
+          } catch (err3) {
+            return err3;
+          }
+        }
+        return void 0;
+      } else {
+        return err2;
+      }
+    },
+    __infoDataSet: function() {
+      return {
+        ...this.info,
+        columns: this.options.columns
+      };
+    },
+    __infoRecord: function() {
+      const { columns, raw: raw2, encoding } = this.options;
+      return {
+        ...this.__infoDataSet(),
+        bytes_records: this.info.bytes,
+        error: this.state.error,
+        header: columns === true,
+        index: this.state.record.length,
+        raw: raw2 ? this.state.rawBuffer.toString(encoding) : void 0
+      };
+    },
+    __infoField: function() {
+      const { columns } = this.options;
+      const isColumns = Array.isArray(columns);
+      const bytes_records = this.info.bytes_records;
+      return {
+        ...this.__infoRecord(),
+        bytes_records,
+        column: isColumns === true ? columns.length > this.state.record.length ? columns[this.state.record.length].name : null : this.state.record.length,
+        quoting: this.state.wasQuoting
+      };
+    }
+  };
+};
+
+// ../../work/main/node_modules/csv-parse/lib/index.js
+var Parser = class extends Transform {
+  constructor(opts = {}) {
+    super({ ...{ readableObjectMode: true }, ...opts, encoding: null });
+    this.api = transform({
+      on_skip: (err2, chunk) => {
+        this.emit("skip", err2, chunk);
+      },
+      ...opts
+    });
+    this.state = this.api.state;
+    this.options = this.api.options;
+    this.info = this.api.info;
+  }
+  // Implementation of `Transform._transform`
+  _transform(buf, _, callback) {
+    if (this.state.stop === true) {
+      return;
+    }
+    const err2 = this.api.parse(
+      buf,
+      false,
+      (record2) => {
+        this.push(record2);
+      },
+      () => {
+        this.push(null);
+        this.end();
+        this.on("end", this.destroy);
+      }
+    );
+    if (err2 !== void 0) {
+      this.state.stop = true;
+    }
+    callback(err2);
+  }
+  // Implementation of `Transform._flush`
+  _flush(callback) {
+    if (this.state.stop === true) {
+      return;
+    }
+    const err2 = this.api.parse(
+      void 0,
+      true,
+      (record2) => {
+        this.push(record2);
+      },
+      () => {
+        this.push(null);
+        this.on("end", this.destroy);
+      }
+    );
+    callback(err2);
+  }
+};
+var parse2 = function() {
+  let data, options, callback;
+  for (const i in arguments) {
+    const argument = arguments[i];
+    const type = typeof argument;
+    if (data === void 0 && (typeof argument === "string" || Buffer.isBuffer(argument))) {
+      data = argument;
+    } else if (options === void 0 && is_object(argument)) {
+      options = argument;
+    } else if (callback === void 0 && type === "function") {
+      callback = argument;
+    } else {
+      throw new CsvError(
+        "CSV_INVALID_ARGUMENT",
+        ["Invalid argument:", `got ${JSON.stringify(argument)} at index ${i}`],
+        options || {}
+      );
+    }
+  }
+  const parser = new Parser(options);
+  if (callback) {
+    const records = options === void 0 || options.objname === void 0 ? [] : /* @__PURE__ */ Object.create(null);
+    parser.on("readable", function() {
+      let record2;
+      while ((record2 = this.read()) !== null) {
+        if (options === void 0 || options.objname === void 0) {
+          records.push(record2);
+        } else {
+          Object.assign(records, {
+            [record2[0]]: record2[1]
+            // writable: true,
+            // enumerable: true,
+            // configurable: true
+          });
+        }
+      }
+    });
+    parser.on("error", function(err2) {
+      callback(err2, void 0, parser.api.__infoDataSet());
+    });
+    parser.on("end", function() {
+      callback(void 0, records, parser.api.__infoDataSet());
+    });
+  }
+  if (data !== void 0) {
+    const writer = function() {
+      parser.write(data);
+      parser.end();
+    };
+    if (typeof setImmediate === "function") {
+      setImmediate(writer);
+    } else {
+      setTimeout(writer, 0);
+    }
+  }
+  return parser;
+};
+
+// src/bulk/sources.ts
+function formatOf(path) {
+  const p = path.toLowerCase();
+  if (p.endsWith(".sdf") || p.endsWith(".sd") || p.endsWith(".sdfile")) return "sd";
+  if (p.endsWith(".csv")) return "csv";
+  if (p.endsWith(".tsv") || p.endsWith(".tab")) return "tsv";
+  return null;
+}
+var REPLACEMENT = "�";
+async function* readSdItems(path) {
+  const rl = createInterface({ input: createReadStream(path, { encoding: "utf8" }), crlfDelay: Infinity });
+  let lines = [];
+  let startLine = 1;
+  let lineNo = 0;
+  let record2 = 0;
+  for await (const raw2 of rl) {
+    lineNo++;
+    if (lines.length === 0) startLine = lineNo;
+    if (raw2.startsWith("$$$$")) {
+      record2++;
+      const text = lines.join("\n") + "\n";
+      yield {
+        source: path,
+        record: record2,
+        line: startLine,
+        text,
+        splitProblem: text.includes(REPLACEMENT) ? "the record is not valid UTF-8 text (bad bytes replaced)" : void 0
+      };
+      lines = [];
+      continue;
+    }
+    lines.push(raw2);
+  }
+  if (lines.some((l) => l.trim() !== "")) {
+    record2++;
+    const text = lines.join("\n") + "\n";
+    yield {
+      source: path,
+      record: record2,
+      line: startLine,
+      text,
+      splitProblem: text.includes(REPLACEMENT) ? "the record is not valid UTF-8 text (bad bytes replaced)" : "the last record has no $$$$ terminator (file truncated?)"
+    };
+  }
+}
+async function* readDelimitedItems(path, delimiter) {
+  const parser = createReadStream(path, { encoding: "utf8" }).pipe(
+    parse2({
+      delimiter,
+      columns: (header) => header.map((h) => h.trim()),
+      relax_column_count: true,
+      relax_quotes: true,
+      skip_empty_lines: true,
+      bom: true,
+      info: true
+    })
+  );
+  let record2 = 0;
+  for await (const row of parser) {
+    record2++;
+    const fields = row.record;
+    const values = Object.values(fields).join("");
+    yield {
+      source: path,
+      record: record2,
+      line: row.info.lines,
+      fields,
+      splitProblem: values.includes(REPLACEMENT) ? "the row is not valid UTF-8 text (bad bytes replaced)" : row.info.invalid_field_length > 0 ? "the row has a different number of columns from the header" : void 0
+    };
+  }
+}
+function readItems(path) {
+  const f = formatOf(path);
+  if (f === "sd") return readSdItems(path);
+  if (f === "csv") return readDelimitedItems(path, ",");
+  if (f === "tsv") return readDelimitedItems(path, "	");
+  throw new Error(`not a bulk input: ${path}`);
+}
+function parseShard(text) {
+  const m = /^(\d+)\/(\d+)$/.exec(text.trim());
+  if (!m) return null;
+  const index = Number(m[1]);
+  const count2 = Number(m[2]);
+  if (count2 < 1 || index < 1 || index > count2) return null;
+  return { index, count: count2 };
+}
+async function* shardFilter(items, shard) {
+  let n = 0;
+  for await (const item of items) {
+    n++;
+    if (!shard || (n - 1) % shard.count === shard.index - 1) yield item;
+  }
+}
+
+// src/bulk/run.ts
+function isBulkInput(path) {
+  return formatOf(path) !== null;
+}
+async function countRecords(path) {
+  const f = formatOf(path);
+  let count2 = 0;
+  let atLineStart = true;
+  let lineHasText = false;
+  let dollars = 0;
+  for await (const chunk of createReadStream2(path)) {
+    for (let i = 0; i < chunk.length; i++) {
+      const c = chunk[i];
+      if (c === 10) {
+        if (f !== "sd" && lineHasText) count2++;
+        atLineStart = true;
+        lineHasText = false;
+        dollars = 0;
+        continue;
+      }
+      if (c !== 13 && c !== 32) lineHasText = true;
+      if (f === "sd" && (atLineStart || dollars > 0)) {
+        if (c === 36) {
+          dollars++;
+          if (dollars === 4) count2++;
+        } else dollars = 0;
+      }
+      atLineStart = false;
+    }
+  }
+  if (f !== "sd" && lineHasText) count2++;
+  return f === "sd" ? count2 : Math.max(0, count2 - 1);
+}
+async function* allItems(inputs) {
+  let seq = 0;
+  for (const path of inputs) for await (const item of readItems(path)) yield { ...item, seq: ++seq };
+}
+function timeoutResult(item, limitMs, crashed) {
+  const message = crashed ? `the audit of this record crashed its worker (${crashed}); it was not audited, the run went on` : `the audit of this record took longer than the ${Math.round(limitMs / 1e3)} s limit; it was stopped and the run went on`;
+  return {
+    seq: item.seq,
+    id: null,
+    file: item.source,
+    computed: null,
+    findings: [
+      {
+        check: "record-time-limit",
+        messageId: crashed ? "worker-crashed" : "time-limit-exceeded",
+        severity: "error",
+        message: message + ` (record ${item.record}, line ${item.line}). Audit it on its own with a longer --record-timeout, or simplify the structure.`,
+        data: { record: item.record, line: item.line, limit_ms: limitMs },
+        line: item.line,
+        field: null,
+        waived: null
+      }
+    ],
+    passed: [],
+    declared: { form: null, descriptors: null },
+    origin: { source: item.source, record: item.record, line: item.line },
+    form_word: { word: null, how: "empty" }
+  };
+}
+async function runBulkAudit(opts) {
+  const started = Date.now();
+  const workers = opts.workers ?? Math.max(1, availableParallelism());
+  const timeoutMs = opts.timeoutMs ?? 2e4;
+  const progressMode = opts.progress ?? "auto";
+  let total = null;
+  if (progressMode !== "none") {
+    total = 0;
+    for (const p of opts.inputs) total += await countRecords(p);
+    if (opts.shard) total = Math.ceil(total / opts.shard.count);
+  }
+  const progress = makeProgress(progressMode, total);
+  const wants = wantsOf(opts.writers);
+  const setup = { mapping: opts.mapping, config: opts.config, wants };
+  const ext = import.meta.url.endsWith(".ts") ? ".ts" : ".js";
+  const script = new URL(`./worker${ext}`, import.meta.url);
+  const { CHECKS: CHECKS2 } = await Promise.resolve().then(() => (init_checks(), checks_exports));
+  const render = makeRenderer(wants, bulkSarifRules(CHECKS2));
+  let inline;
+  if (workers === 0) {
+    const ctx = await makeItemContext(setup);
+    inline = (item) => ctx.render(auditItem(item, ctx));
+  }
+  const acc = new BulkAccumulator();
+  const results = mapOrdered(
+    shardFilter(allItems(opts.inputs), opts.shard ?? null),
+    {
+      workers,
+      script,
+      workerData: setup,
+      timeoutMs,
+      onTimeout: (item) => render(timeoutResult(item, timeoutMs, null)),
+      onCrash: (item, _i, error) => render(timeoutResult(item, timeoutMs, error)),
+      inline,
+      batchSize: opts.batchSize ?? 16,
+      onStats: opts.onPoolStats
+    }
+  );
+  try {
+    for await (const r of results) {
+      acc.add(r.tally);
+      for (const w of opts.writers) await w.write(r);
+      opts.onRecord?.(r);
+      progress.tick();
+    }
+  } finally {
+    progress.stop();
+  }
+  const trailer = acc.trailer(opts.shard ? `${opts.shard.index}/${opts.shard.count}` : null);
+  for (const w of opts.writers) await w.finish(trailer);
+  return { trailer, seconds: (Date.now() - started) / 1e3 };
+}
+
+// src/cli/commands/bulk-audit.ts
+var import_yaml3 = __toESM(require_dist(), 1);
+import { readFileSync } from "node:fs";
+import { parseArgs as parseArgs2 } from "node:util";
 
 // src/bulk/merge.ts
-import { createReadStream } from "node:fs";
-import { createInterface } from "node:readline";
+import { createReadStream as createReadStream3 } from "node:fs";
+import { createInterface as createInterface2 } from "node:readline";
 var MergeError = class extends Error {
 };
 async function* readShard(path) {
-  const rl = createInterface({ input: createReadStream(path, "utf8"), crlfDelay: Infinity });
+  const rl = createInterface2({ input: createReadStream3(path, "utf8"), crlfDelay: Infinity });
   let n = 0;
   for await (const line of rl) {
     n++;
@@ -48950,7 +52260,7 @@ async function mergeShards(paths, writers, onRecord) {
 
 // src/bulk/html-collector.ts
 init_read();
-import { writeFileSync as writeFileSync2 } from "node:fs";
+import { writeFileSync } from "node:fs";
 
 // src/chem/depict.ts
 init_openchemlib();
@@ -49034,7 +52344,7 @@ var HtmlCollector = class {
       notes,
       title: "stereogate bulk audit"
     });
-    writeFileSync2(this.path, page);
+    writeFileSync(this.path, page);
   }
 };
 function drawing(e, i) {
@@ -49102,6 +52412,50 @@ function parse3(args, extra) {
     throw new UsageError(e.message.replace(/\. To specify a positional.*$/s, ""));
   }
 }
+var FIELD_KEYS = ["id", "structure", "name", "form", "descriptors", "ratio", "ee", "rotation"];
+function readMapping(path) {
+  let data;
+  try {
+    data = (0, import_yaml3.parse)(readFileSync(path, "utf8"));
+  } catch (e) {
+    throw new UsageError(`--mapping ${path}: ${e.message}`);
+  }
+  if (!data || typeof data !== "object")
+    throw new UsageError(`--mapping ${path}: expected a map of field names`);
+  const m = data;
+  const out = {};
+  for (const k of Object.keys(m)) {
+    if (k !== "vocabulary" && !FIELD_KEYS.includes(k)) {
+      throw new UsageError(
+        `--mapping ${path}: unknown key '${k}' (known: ${FIELD_KEYS.join(", ")}, vocabulary)`
+      );
+    }
+  }
+  for (const k of FIELD_KEYS) {
+    if (m[k] === void 0) continue;
+    if (typeof m[k] !== "string" && typeof m[k] !== "number")
+      throw new UsageError(`--mapping ${path}: '${k}' must be a field name`);
+    out[k] = String(m[k]);
+  }
+  if (m.vocabulary !== void 0 && m.vocabulary !== null) {
+    const v = m.vocabulary;
+    if (typeof v !== "object" || Array.isArray(v) || Object.values(v).some((f) => typeof f !== "string")) {
+      throw new UsageError(
+        `--mapping ${path}: 'vocabulary' must map legacy words to forms, e.g. rac: racemate`
+      );
+    }
+    out.vocabulary = checkVocabulary(v, `--mapping ${path}`);
+  }
+  return out;
+}
+function checkVocabulary(v, where2) {
+  for (const [w, f] of Object.entries(v)) {
+    if (!STEREO_FORMS.includes(f)) {
+      throw new UsageError(`${where2}: '${w}' maps to '${f}', which is not one of ${STEREO_FORMS.join(", ")}`);
+    }
+  }
+  return v;
+}
 function writersFor(values, checks) {
   const writers = [];
   if (typeof values.jsonl === "string") writers.push(jsonlWriter(values.jsonl));
@@ -49157,6 +52511,80 @@ function checkFailOn(v) {
     throw new UsageError(`--fail-on must be error, warning or never (got "${String(v)}")`);
   return v;
 }
+async function bulkAudit(args, io) {
+  const { values, positionals } = parse3(args, {
+    "map-id": { type: "string" },
+    "map-structure": { type: "string" },
+    "map-form": { type: "string" },
+    "map-descriptors": { type: "string" },
+    "map-ratio": { type: "string" },
+    "map-ee": { type: "string" },
+    "map-rotation": { type: "string" },
+    "map-name": { type: "string" },
+    "form-word": { type: "string", multiple: true },
+    mapping: { type: "string" },
+    workers: { type: "string" },
+    shard: { type: "string" },
+    "record-timeout": { type: "string" },
+    config: { type: "string" },
+    root: { type: "string" },
+    format: { type: "string" }
+  });
+  if (positionals.length === 0) throw new UsageError("no bulk input given");
+  const failOn = checkFailOn(values["fail-on"]);
+  const mapping = typeof values.mapping === "string" ? readMapping(values.mapping) : {};
+  for (const k of FIELD_KEYS) {
+    const v = values[`map-${k}`];
+    if (typeof v === "string") mapping[k] = v;
+  }
+  const words = {};
+  for (const fw of values["form-word"] ?? []) {
+    const at2 = fw.lastIndexOf("=");
+    if (at2 <= 0) throw new UsageError(`--form-word expects WORD=FORM (got "${fw}")`);
+    words[fw.slice(0, at2)] = fw.slice(at2 + 1);
+  }
+  if (Object.keys(words).length > 0)
+    mapping.vocabulary = { ...mapping.vocabulary, ...checkVocabulary(words, "--form-word") };
+  let shard = null;
+  if (typeof values.shard === "string") {
+    shard = parseShard(values.shard);
+    if (!shard) throw new UsageError(`--shard expects I/N with 1 <= I <= N (got "${values.shard}")`);
+  }
+  const workers = typeof values.workers === "string" ? Number(values.workers) : void 0;
+  if (workers !== void 0 && (!Number.isInteger(workers) || workers < 0))
+    throw new UsageError("--workers expects a whole number");
+  const timeout = typeof values["record-timeout"] === "string" ? Number(values["record-timeout"]) : 20;
+  if (!(timeout > 0)) throw new UsageError("--record-timeout expects a positive number of seconds");
+  const progress = values.progress;
+  if (!["auto", "bar", "lines", "none"].includes(progress))
+    throw new UsageError("--progress must be auto, bar, lines or none");
+  for (const p of positionals) if (!io.isFile(p)) throw new UsageError(`bulk input ${p} not found`);
+  let config;
+  try {
+    config = loadConfig(
+      typeof values.root === "string" ? values.root : process.cwd(),
+      typeof values.config === "string" ? values.config : void 0
+    ).config;
+  } catch (e) {
+    if (e instanceof ConfigError) throw new UsageError(e.message);
+    throw e;
+  }
+  const { CHECKS: CHECKS2 } = await Promise.resolve().then(() => (init_checks(), checks_exports));
+  const { writers, html } = writersFor(values, CHECKS2);
+  const run11 = await runBulkAudit({
+    inputs: positionals,
+    mapping,
+    config,
+    workers,
+    shard,
+    timeoutMs: timeout * 1e3,
+    progress,
+    writers
+  });
+  if (html) io.err(`stereogate: HTML report written to ${html.path} (${html.flaggedCount} flagged records)`);
+  io.out(summaryTable(run11.trailer, run11.seconds));
+  return exitCode(run11.trailer, failOn);
+}
 async function mergeCommand(args, io) {
   const { values, positionals } = parse3(args, {});
   if (positionals.length === 0) throw new UsageError("no shard outputs given");
@@ -49184,6 +52612,102 @@ var mergeShardsCommand = {
   usage: BULK_USAGE,
   run: mergeCommand
 };
+
+// src/cli/commands/audit.ts
+var EXIT_FINDINGS = 1;
+var USAGE = [
+  "Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]",
+  "                        [--output FILE] [--fail-on error|warning|never]",
+  "",
+  "  paths…               record files, folders or molfiles to audit (default: every record); the whole",
+  "                       registry is still loaded for the cross-record checks",
+  "  --root DIR           registry root, holding stereogate.config.yml and the record folders (default .)",
+  "  --config FILE        config file to use instead of stereogate.config.yml at the root",
+  "  --format FORMAT      text (default), json, markdown (the pull-request checklist) or sarif (2.1.0)",
+  "  --output FILE        write the report to FILE instead of standard output",
+  "  --fail-on LEVEL      exit 1 when a finding not accepted by a waiver is at least this severe:",
+  "                       error (default), warning, or never",
+  "",
+  "Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error.",
+  "",
+  "Legacy exports (.sdf, .csv, .tsv) are audited in bulk; `stereogate merge --help` lists the bulk options."
+].join("\n");
+function reachesThreshold(result, failOn) {
+  if (failOn === "never") return false;
+  const s = result.summary;
+  return failOn === "error" ? s.errors > 0 : s.errors + s.warnings > 0;
+}
+function toRootPaths(paths, root) {
+  const rootAbs = resolve4(root);
+  return paths.map((p) => {
+    const abs = resolve4(p);
+    if (!existsSync3(abs)) return p;
+    const rel = relative3(rootAbs, abs);
+    if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
+      if (existsSync3(resolve4(rootAbs, p))) return p;
+      throw new UsageError(`${p} is outside the registry root ${root}`);
+    }
+    return rel.split(sep3).join("/") || ".";
+  });
+}
+function makeAuditCommand(deps = {}) {
+  return {
+    name: "audit",
+    summary: "audit registry records for stereochemical consistency and print the checklist",
+    usage: USAGE,
+    async run(args, io) {
+      if (args.some((a) => !a.startsWith("-") && isBulkInput(a))) return bulkAudit(args, io);
+      const { values, positionals } = parseCommandArgs(
+        args,
+        {
+          root: { type: "string", default: "." },
+          config: { type: "string" },
+          format: { type: "string", choices: ["text", "json", "markdown", "sarif"], default: "text" },
+          output: { type: "string" },
+          "fail-on": { type: "string", choices: ["error", "warning", "never"], default: "error" }
+        },
+        { min: 0, max: Infinity, names: "paths" }
+      );
+      const root = values.root;
+      const format = values.format;
+      const failOn = values["fail-on"];
+      const output = values.output;
+      if (output === "") throw new UsageError("--output needs a file name");
+      const paths = toRootPaths(positionals, root);
+      let result;
+      try {
+        result = await runAudit({
+          root,
+          paths,
+          configFile: values.config,
+          checks: deps.checks,
+          engine: deps.engine
+        });
+      } catch (e) {
+        if (e instanceof ConfigError) throw new UsageError(e.message);
+        throw e;
+      }
+      if (result.unmatched?.length) {
+        throw new UsageError(
+          `no record file, record folder or molfile in ${root} matches: ${result.unmatched.join(", ")}`
+        );
+      }
+      const checks = deps.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
+      const report = format === "json" ? renderJson(result) : format === "markdown" ? renderMarkdown(result) : format === "sarif" ? renderSarif(result, checks) : renderText(result, { color: output === void 0 && shouldColor(process.stdout) });
+      if (output !== void 0) {
+        try {
+          writeFileSync2(output, report);
+        } catch (e) {
+          throw new UsageError(`cannot write ${output}: ${e.code ?? String(e)}`);
+        }
+      } else {
+        io.out(report);
+      }
+      return reachesThreshold(result, failOn) ? EXIT_FINDINGS : EXIT_OK;
+    }
+  };
+}
+var auditCommand = makeAuditCommand();
 
 // src/cli/commands/index.ts
 var commands = [describeCommand, compareCommand, auditCommand, mergeShardsCommand];

@@ -48,9 +48,9 @@ var __toESM = (mod, isNodeMode, target) => (target = mod != null ? __create(__ge
   mod
 ));
 
-// node_modules/yaml/dist/nodes/identity.js
+// ../../work/main/node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
-  "node_modules/yaml/dist/nodes/identity.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/identity.js"(exports) {
     "use strict";
     var ALIAS = /* @__PURE__ */ Symbol.for("yaml.alias");
     var DOC = /* @__PURE__ */ Symbol.for("yaml.document");
@@ -105,9 +105,9 @@ var require_identity = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/visit.js
+// ../../work/main/node_modules/yaml/dist/visit.js
 var require_visit = __commonJS({
-  "node_modules/yaml/dist/visit.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/visit.js"(exports) {
     "use strict";
     var identity = require_identity();
     var BREAK = /* @__PURE__ */ Symbol("break visit");
@@ -263,9 +263,9 @@ var require_visit = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/directives.js
+// ../../work/main/node_modules/yaml/dist/doc/directives.js
 var require_directives = __commonJS({
-  "node_modules/yaml/dist/doc/directives.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/directives.js"(exports) {
     "use strict";
     var identity = require_identity();
     var visit = require_visit();
@@ -434,9 +434,9 @@ var require_directives = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/anchors.js
+// ../../work/main/node_modules/yaml/dist/doc/anchors.js
 var require_anchors = __commonJS({
-  "node_modules/yaml/dist/doc/anchors.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/anchors.js"(exports) {
     "use strict";
     var identity = require_identity();
     var visit = require_visit();
@@ -504,9 +504,9 @@ var require_anchors = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/applyReviver.js
+// ../../work/main/node_modules/yaml/dist/doc/applyReviver.js
 var require_applyReviver = __commonJS({
-  "node_modules/yaml/dist/doc/applyReviver.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/applyReviver.js"(exports) {
     "use strict";
     function applyReviver(reviver, obj, key3, val) {
       if (val && typeof val === "object") {
@@ -554,9 +554,9 @@ var require_applyReviver = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/toJS.js
+// ../../work/main/node_modules/yaml/dist/nodes/toJS.js
 var require_toJS = __commonJS({
-  "node_modules/yaml/dist/nodes/toJS.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
     function toJS(value, arg, ctx) {
@@ -584,9 +584,9 @@ var require_toJS = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Node.js
+// ../../work/main/node_modules/yaml/dist/nodes/Node.js
 var require_Node = __commonJS({
-  "node_modules/yaml/dist/nodes/Node.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Node.js"(exports) {
     "use strict";
     var applyReviver = require_applyReviver();
     var identity = require_identity();
@@ -625,9 +625,9 @@ var require_Node = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Alias.js
+// ../../work/main/node_modules/yaml/dist/nodes/Alias.js
 var require_Alias = __commonJS({
-  "node_modules/yaml/dist/nodes/Alias.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Alias.js"(exports) {
     "use strict";
     var anchors = require_anchors();
     var visit = require_visit();
@@ -743,9 +743,9 @@ var require_Alias = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Scalar.js
+// ../../work/main/node_modules/yaml/dist/nodes/Scalar.js
 var require_Scalar = __commonJS({
-  "node_modules/yaml/dist/nodes/Scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Scalar.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Node = require_Node();
@@ -773,9 +773,9 @@ var require_Scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/createNode.js
+// ../../work/main/node_modules/yaml/dist/doc/createNode.js
 var require_createNode = __commonJS({
-  "node_modules/yaml/dist/doc/createNode.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/createNode.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var identity = require_identity();
@@ -848,9 +848,9 @@ var require_createNode = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Collection.js
+// ../../work/main/node_modules/yaml/dist/nodes/Collection.js
 var require_Collection = __commonJS({
-  "node_modules/yaml/dist/nodes/Collection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Collection.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var identity = require_identity();
@@ -991,9 +991,9 @@ var require_Collection = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyComment.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyComment.js
 var require_stringifyComment = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
     "use strict";
     var stringifyComment = (str) => str.replace(/^(?!$)(?: $)?/gm, "#");
     function indentComment(comment, indent) {
@@ -1008,9 +1008,9 @@ var require_stringifyComment = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/foldFlowLines.js
+// ../../work/main/node_modules/yaml/dist/stringify/foldFlowLines.js
 var require_foldFlowLines = __commonJS({
-  "node_modules/yaml/dist/stringify/foldFlowLines.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/foldFlowLines.js"(exports) {
     "use strict";
     var FOLD_FLOW = "flow";
     var FOLD_BLOCK = "block";
@@ -1144,9 +1144,9 @@ ${indent}${text.slice(fold + 1, end2)}`;
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyString.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyString.js
 var require_stringifyString = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyString.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyString.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var foldFlowLines = require_foldFlowLines();
@@ -1427,9 +1427,9 @@ ${indent}`);
   }
 });
 
-// node_modules/yaml/dist/stringify/stringify.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringify.js
 var require_stringify = __commonJS({
-  "node_modules/yaml/dist/stringify/stringify.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringify.js"(exports) {
     "use strict";
     var anchors = require_anchors();
     var identity = require_identity();
@@ -1551,9 +1551,9 @@ ${ctx.indent}${str}`;
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyPair.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyPair.js
 var require_stringifyPair = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyPair.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyPair.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -1684,9 +1684,9 @@ ${ctx.indent}`;
   }
 });
 
-// node_modules/yaml/dist/log.js
+// ../../work/main/node_modules/yaml/dist/log.js
 var require_log = __commonJS({
-  "node_modules/yaml/dist/log.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/log.js"(exports) {
     "use strict";
     var node_process = __require("process");
     function debug(logLevel, ...messages10) {
@@ -1706,9 +1706,9 @@ var require_log = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/merge.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/merge.js
 var require_merge = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/merge.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/merge.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -1766,9 +1766,9 @@ var require_merge = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/addPairToJSMap.js
+// ../../work/main/node_modules/yaml/dist/nodes/addPairToJSMap.js
 var require_addPairToJSMap = __commonJS({
-  "node_modules/yaml/dist/nodes/addPairToJSMap.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/addPairToJSMap.js"(exports) {
     "use strict";
     var log = require_log();
     var merge = require_merge();
@@ -1830,9 +1830,9 @@ var require_addPairToJSMap = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/Pair.js
+// ../../work/main/node_modules/yaml/dist/nodes/Pair.js
 var require_Pair = __commonJS({
-  "node_modules/yaml/dist/nodes/Pair.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/Pair.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var stringifyPair = require_stringifyPair();
@@ -1870,9 +1870,9 @@ var require_Pair = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyCollection.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyCollection.js
 var require_stringifyCollection = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyCollection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyCollection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var stringify = require_stringify();
@@ -2021,9 +2021,9 @@ ${indent}${end}`;
   }
 });
 
-// node_modules/yaml/dist/nodes/YAMLMap.js
+// ../../work/main/node_modules/yaml/dist/nodes/YAMLMap.js
 var require_YAMLMap = __commonJS({
-  "node_modules/yaml/dist/nodes/YAMLMap.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/YAMLMap.js"(exports) {
     "use strict";
     var stringifyCollection = require_stringifyCollection();
     var addPairToJSMap = require_addPairToJSMap();
@@ -2165,9 +2165,9 @@ var require_YAMLMap = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/map.js
+// ../../work/main/node_modules/yaml/dist/schema/common/map.js
 var require_map = __commonJS({
-  "node_modules/yaml/dist/schema/common/map.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/map.js"(exports) {
     "use strict";
     var identity = require_identity();
     var YAMLMap = require_YAMLMap();
@@ -2187,9 +2187,9 @@ var require_map = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/nodes/YAMLSeq.js
+// ../../work/main/node_modules/yaml/dist/nodes/YAMLSeq.js
 var require_YAMLSeq = __commonJS({
-  "node_modules/yaml/dist/nodes/YAMLSeq.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/nodes/YAMLSeq.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var stringifyCollection = require_stringifyCollection();
@@ -2303,9 +2303,9 @@ var require_YAMLSeq = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/seq.js
+// ../../work/main/node_modules/yaml/dist/schema/common/seq.js
 var require_seq = __commonJS({
-  "node_modules/yaml/dist/schema/common/seq.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/seq.js"(exports) {
     "use strict";
     var identity = require_identity();
     var YAMLSeq = require_YAMLSeq();
@@ -2325,9 +2325,9 @@ var require_seq = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/string.js
+// ../../work/main/node_modules/yaml/dist/schema/common/string.js
 var require_string = __commonJS({
-  "node_modules/yaml/dist/schema/common/string.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/string.js"(exports) {
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
@@ -2344,9 +2344,9 @@ var require_string = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/common/null.js
+// ../../work/main/node_modules/yaml/dist/schema/common/null.js
 var require_null = __commonJS({
-  "node_modules/yaml/dist/schema/common/null.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/common/null.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
@@ -2362,9 +2362,9 @@ var require_null = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/bool.js
+// ../../work/main/node_modules/yaml/dist/schema/core/bool.js
 var require_bool = __commonJS({
-  "node_modules/yaml/dist/schema/core/bool.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
@@ -2386,9 +2386,9 @@ var require_bool = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyNumber.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyNumber.js
 var require_stringifyNumber = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
     function stringifyNumber({ format, minFractionDigits, tag, value }) {
       if (typeof value === "bigint")
@@ -2413,9 +2413,9 @@ var require_stringifyNumber = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/float.js
+// ../../work/main/node_modules/yaml/dist/schema/core/float.js
 var require_float = __commonJS({
-  "node_modules/yaml/dist/schema/core/float.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/float.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
@@ -2459,9 +2459,9 @@ var require_float = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/int.js
+// ../../work/main/node_modules/yaml/dist/schema/core/int.js
 var require_int = __commonJS({
-  "node_modules/yaml/dist/schema/core/int.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
@@ -2504,9 +2504,9 @@ var require_int = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/core/schema.js
+// ../../work/main/node_modules/yaml/dist/schema/core/schema.js
 var require_schema = __commonJS({
-  "node_modules/yaml/dist/schema/core/schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/core/schema.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -2532,9 +2532,9 @@ var require_schema = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/json/schema.js
+// ../../work/main/node_modules/yaml/dist/schema/json/schema.js
 var require_schema2 = __commonJS({
-  "node_modules/yaml/dist/schema/json/schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/json/schema.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var map = require_map();
@@ -2599,9 +2599,9 @@ var require_schema2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/binary.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/binary.js
 var require_binary = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/binary.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/binary.js"(exports) {
     "use strict";
     var node_buffer = __require("buffer");
     var Scalar = require_Scalar();
@@ -2665,9 +2665,9 @@ var require_binary = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/pairs.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/pairs.js
 var require_pairs = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/pairs.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/pairs.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -2701,8 +2701,8 @@ ${cn.comment}` : item.comment;
     }
     function createPairs(schema, iterable, ctx) {
       const { replacer } = ctx;
-      const pairs3 = new YAMLSeq.YAMLSeq(schema);
-      pairs3.tag = "tag:yaml.org,2002:pairs";
+      const pairs2 = new YAMLSeq.YAMLSeq(schema);
+      pairs2.tag = "tag:yaml.org,2002:pairs";
       let i = 0;
       if (iterable && Symbol.iterator in Object(iterable))
         for (let it of iterable) {
@@ -2726,11 +2726,11 @@ ${cn.comment}` : item.comment;
           } else {
             key3 = it;
           }
-          pairs3.items.push(Pair.createPair(key3, value, ctx));
+          pairs2.items.push(Pair.createPair(key3, value, ctx));
         }
-      return pairs3;
+      return pairs2;
     }
-    var pairs2 = {
+    var pairs = {
       collection: "seq",
       default: false,
       tag: "tag:yaml.org,2002:pairs",
@@ -2738,20 +2738,20 @@ ${cn.comment}` : item.comment;
       createNode: createPairs
     };
     exports.createPairs = createPairs;
-    exports.pairs = pairs2;
+    exports.pairs = pairs;
     exports.resolvePairs = resolvePairs;
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/omap.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/omap.js
 var require_omap = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/omap.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/omap.js"(exports) {
     "use strict";
     var identity = require_identity();
     var toJS = require_toJS();
     var YAMLMap = require_YAMLMap();
     var YAMLSeq = require_YAMLSeq();
-    var pairs2 = require_pairs();
+    var pairs = require_pairs();
     var YAMLOMap = class _YAMLOMap extends YAMLSeq.YAMLSeq {
       constructor() {
         super();
@@ -2787,7 +2787,7 @@ var require_omap = __commonJS({
         return map;
       }
       static from(schema, iterable, ctx) {
-        const pairs$1 = pairs2.createPairs(schema, iterable, ctx);
+        const pairs$1 = pairs.createPairs(schema, iterable, ctx);
         const omap2 = new this();
         omap2.items = pairs$1.items;
         return omap2;
@@ -2801,7 +2801,7 @@ var require_omap = __commonJS({
       default: false,
       tag: "tag:yaml.org,2002:omap",
       resolve(seq, onError) {
-        const pairs$1 = pairs2.resolvePairs(seq, onError);
+        const pairs$1 = pairs.resolvePairs(seq, onError);
         const seenKeys = [];
         for (const { key: key3 } of pairs$1.items) {
           if (identity.isScalar(key3)) {
@@ -2821,9 +2821,9 @@ var require_omap = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/bool.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/bool.js
 var require_bool2 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     function boolStringify({ value, source }, ctx) {
@@ -2853,9 +2853,9 @@ var require_bool2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/float.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/float.js
 var require_float2 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/float.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/float.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
@@ -2902,9 +2902,9 @@ var require_float2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/int.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/int.js
 var require_int2 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
@@ -2981,9 +2981,9 @@ var require_int2 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/set.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/set.js
 var require_set = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/set.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/set.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -3070,9 +3070,9 @@ var require_set = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/timestamp.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/timestamp.js
 var require_timestamp = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/timestamp.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/timestamp.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     function parseSexagesimal(str, asBigInt) {
@@ -3158,9 +3158,9 @@ var require_timestamp = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/yaml-1.1/schema.js
+// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/schema.js
 var require_schema3 = __commonJS({
-  "node_modules/yaml/dist/schema/yaml-1.1/schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/schema.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -3172,7 +3172,7 @@ var require_schema3 = __commonJS({
     var int = require_int2();
     var merge = require_merge();
     var omap = require_omap();
-    var pairs2 = require_pairs();
+    var pairs = require_pairs();
     var set = require_set();
     var timestamp = require_timestamp();
     var schema = [
@@ -3192,7 +3192,7 @@ var require_schema3 = __commonJS({
       binary.binary,
       merge.merge,
       omap.omap,
-      pairs2.pairs,
+      pairs.pairs,
       set.set,
       timestamp.intTime,
       timestamp.floatTime,
@@ -3202,9 +3202,9 @@ var require_schema3 = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/tags.js
+// ../../work/main/node_modules/yaml/dist/schema/tags.js
 var require_tags = __commonJS({
-  "node_modules/yaml/dist/schema/tags.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/tags.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -3218,7 +3218,7 @@ var require_tags = __commonJS({
     var binary = require_binary();
     var merge = require_merge();
     var omap = require_omap();
-    var pairs2 = require_pairs();
+    var pairs = require_pairs();
     var schema$2 = require_schema3();
     var set = require_set();
     var timestamp = require_timestamp();
@@ -3244,7 +3244,7 @@ var require_tags = __commonJS({
       merge: merge.merge,
       null: _null.nullTag,
       omap: omap.omap,
-      pairs: pairs2.pairs,
+      pairs: pairs.pairs,
       seq: seq.seq,
       set: set.set,
       timestamp: timestamp.timestamp
@@ -3253,7 +3253,7 @@ var require_tags = __commonJS({
       "tag:yaml.org,2002:binary": binary.binary,
       "tag:yaml.org,2002:merge": merge.merge,
       "tag:yaml.org,2002:omap": omap.omap,
-      "tag:yaml.org,2002:pairs": pairs2.pairs,
+      "tag:yaml.org,2002:pairs": pairs.pairs,
       "tag:yaml.org,2002:set": set.set,
       "tag:yaml.org,2002:timestamp": timestamp.timestamp
     };
@@ -3296,9 +3296,9 @@ var require_tags = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/schema/Schema.js
+// ../../work/main/node_modules/yaml/dist/schema/Schema.js
 var require_Schema = __commonJS({
-  "node_modules/yaml/dist/schema/Schema.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/schema/Schema.js"(exports) {
     "use strict";
     var identity = require_identity();
     var map = require_map();
@@ -3328,9 +3328,9 @@ var require_Schema = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/stringify/stringifyDocument.js
+// ../../work/main/node_modules/yaml/dist/stringify/stringifyDocument.js
 var require_stringifyDocument = __commonJS({
-  "node_modules/yaml/dist/stringify/stringifyDocument.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/stringify/stringifyDocument.js"(exports) {
     "use strict";
     var identity = require_identity();
     var stringify = require_stringify();
@@ -3408,9 +3408,9 @@ var require_stringifyDocument = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/doc/Document.js
+// ../../work/main/node_modules/yaml/dist/doc/Document.js
 var require_Document = __commonJS({
-  "node_modules/yaml/dist/doc/Document.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/doc/Document.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var Collection = require_Collection();
@@ -3717,9 +3717,9 @@ var require_Document = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/errors.js
+// ../../work/main/node_modules/yaml/dist/errors.js
 var require_errors = __commonJS({
-  "node_modules/yaml/dist/errors.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/errors.js"(exports) {
     "use strict";
     var YAMLError = class extends Error {
       constructor(name, pos, code, message) {
@@ -3782,9 +3782,9 @@ ${pointer}
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-props.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-props.js
 var require_resolve_props = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-props.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-props.js"(exports) {
     "use strict";
     function resolveProps(tokens2, { flow, indicator, next, offset, onError, parentIndent, startOnNewline }) {
       let spaceBefore = false;
@@ -3916,9 +3916,9 @@ var require_resolve_props = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-contains-newline.js
+// ../../work/main/node_modules/yaml/dist/compose/util-contains-newline.js
 var require_util_contains_newline = __commonJS({
-  "node_modules/yaml/dist/compose/util-contains-newline.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-contains-newline.js"(exports) {
     "use strict";
     function containsNewline(key3) {
       if (!key3)
@@ -3958,9 +3958,9 @@ var require_util_contains_newline = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-flow-indent-check.js
+// ../../work/main/node_modules/yaml/dist/compose/util-flow-indent-check.js
 var require_util_flow_indent_check = __commonJS({
-  "node_modules/yaml/dist/compose/util-flow-indent-check.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-flow-indent-check.js"(exports) {
     "use strict";
     var utilContainsNewline = require_util_contains_newline();
     function flowIndentCheck(indent, fc, onError) {
@@ -3976,9 +3976,9 @@ var require_util_flow_indent_check = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-map-includes.js
+// ../../work/main/node_modules/yaml/dist/compose/util-map-includes.js
 var require_util_map_includes = __commonJS({
-  "node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
     "use strict";
     var identity = require_identity();
     function mapIncludes(ctx, items, search) {
@@ -3992,9 +3992,9 @@ var require_util_map_includes = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-block-map.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-block-map.js
 var require_resolve_block_map = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-block-map.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-block-map.js"(exports) {
     "use strict";
     var Pair = require_Pair();
     var YAMLMap = require_YAMLMap();
@@ -4100,9 +4100,9 @@ var require_resolve_block_map = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-block-seq.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-block-seq.js
 var require_resolve_block_seq = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-block-seq.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-block-seq.js"(exports) {
     "use strict";
     var YAMLSeq = require_YAMLSeq();
     var resolveProps = require_resolve_props();
@@ -4151,9 +4151,9 @@ var require_resolve_block_seq = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-end.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-end.js
 var require_resolve_end = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-end.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-end.js"(exports) {
     "use strict";
     function resolveEnd(end, offset, reqSpace, onError) {
       let comment = "";
@@ -4194,9 +4194,9 @@ var require_resolve_end = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-flow-collection.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-flow-collection.js
 var require_resolve_flow_collection = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-flow-collection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-flow-collection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -4388,9 +4388,9 @@ var require_resolve_flow_collection = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-collection.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-collection.js
 var require_compose_collection = __commonJS({
-  "node_modules/yaml/dist/compose/compose-collection.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-collection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -4453,9 +4453,9 @@ var require_compose_collection = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-block-scalar.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-block-scalar.js
 var require_resolve_block_scalar = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-block-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-block-scalar.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     function resolveBlockScalar(ctx, scalar, onError) {
@@ -4636,9 +4636,9 @@ var require_resolve_block_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/resolve-flow-scalar.js
+// ../../work/main/node_modules/yaml/dist/compose/resolve-flow-scalar.js
 var require_resolve_flow_scalar = __commonJS({
-  "node_modules/yaml/dist/compose/resolve-flow-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/resolve-flow-scalar.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var resolveEnd = require_resolve_end();
@@ -4857,9 +4857,9 @@ var require_resolve_flow_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-scalar.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-scalar.js
 var require_compose_scalar = __commonJS({
-  "node_modules/yaml/dist/compose/compose-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-scalar.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -4938,9 +4938,9 @@ var require_compose_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/util-empty-scalar-position.js
+// ../../work/main/node_modules/yaml/dist/compose/util-empty-scalar-position.js
 var require_util_empty_scalar_position = __commonJS({
-  "node_modules/yaml/dist/compose/util-empty-scalar-position.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/util-empty-scalar-position.js"(exports) {
     "use strict";
     function emptyScalarPosition(offset, before, pos) {
       if (before) {
@@ -4968,9 +4968,9 @@ var require_util_empty_scalar_position = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-node.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-node.js
 var require_compose_node = __commonJS({
-  "node_modules/yaml/dist/compose/compose-node.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-node.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var identity = require_identity();
@@ -5074,9 +5074,9 @@ var require_compose_node = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/compose-doc.js
+// ../../work/main/node_modules/yaml/dist/compose/compose-doc.js
 var require_compose_doc = __commonJS({
-  "node_modules/yaml/dist/compose/compose-doc.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/compose-doc.js"(exports) {
     "use strict";
     var Document = require_Document();
     var composeNode = require_compose_node();
@@ -5117,9 +5117,9 @@ var require_compose_doc = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/compose/composer.js
+// ../../work/main/node_modules/yaml/dist/compose/composer.js
 var require_composer = __commonJS({
-  "node_modules/yaml/dist/compose/composer.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/compose/composer.js"(exports) {
     "use strict";
     var node_process = __require("process");
     var directives = require_directives();
@@ -5325,9 +5325,9 @@ ${end.comment}` : end.comment;
   }
 });
 
-// node_modules/yaml/dist/parse/cst-scalar.js
+// ../../work/main/node_modules/yaml/dist/parse/cst-scalar.js
 var require_cst_scalar = __commonJS({
-  "node_modules/yaml/dist/parse/cst-scalar.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst-scalar.js"(exports) {
     "use strict";
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
@@ -5510,9 +5510,9 @@ var require_cst_scalar = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/cst-stringify.js
+// ../../work/main/node_modules/yaml/dist/parse/cst-stringify.js
 var require_cst_stringify = __commonJS({
-  "node_modules/yaml/dist/parse/cst-stringify.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst-stringify.js"(exports) {
     "use strict";
     var stringify = (cst) => "type" in cst ? stringifyToken(cst) : stringifyItem(cst);
     function stringifyToken(token) {
@@ -5571,9 +5571,9 @@ var require_cst_stringify = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/cst-visit.js
+// ../../work/main/node_modules/yaml/dist/parse/cst-visit.js
 var require_cst_visit = __commonJS({
-  "node_modules/yaml/dist/parse/cst-visit.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst-visit.js"(exports) {
     "use strict";
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
@@ -5633,9 +5633,9 @@ var require_cst_visit = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/cst.js
+// ../../work/main/node_modules/yaml/dist/parse/cst.js
 var require_cst = __commonJS({
-  "node_modules/yaml/dist/parse/cst.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/cst.js"(exports) {
     "use strict";
     var cstScalar = require_cst_scalar();
     var cstStringify = require_cst_stringify();
@@ -5735,9 +5735,9 @@ var require_cst = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/lexer.js
+// ../../work/main/node_modules/yaml/dist/parse/lexer.js
 var require_lexer = __commonJS({
-  "node_modules/yaml/dist/parse/lexer.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/lexer.js"(exports) {
     "use strict";
     var cst = require_cst();
     function isEmpty(ch) {
@@ -6324,9 +6324,9 @@ var require_lexer = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/line-counter.js
+// ../../work/main/node_modules/yaml/dist/parse/line-counter.js
 var require_line_counter = __commonJS({
-  "node_modules/yaml/dist/parse/line-counter.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/line-counter.js"(exports) {
     "use strict";
     var LineCounter2 = class {
       constructor() {
@@ -6355,9 +6355,9 @@ var require_line_counter = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/parse/parser.js
+// ../../work/main/node_modules/yaml/dist/parse/parser.js
 var require_parser = __commonJS({
-  "node_modules/yaml/dist/parse/parser.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/parse/parser.js"(exports) {
     "use strict";
     var node_process = __require("process");
     var cst = require_cst();
@@ -7229,9 +7229,9 @@ var require_parser = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/public-api.js
+// ../../work/main/node_modules/yaml/dist/public-api.js
 var require_public_api = __commonJS({
-  "node_modules/yaml/dist/public-api.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/public-api.js"(exports) {
     "use strict";
     var composer = require_composer();
     var Document = require_Document();
@@ -7326,9 +7326,9 @@ var require_public_api = __commonJS({
   }
 });
 
-// node_modules/yaml/dist/index.js
+// ../../work/main/node_modules/yaml/dist/index.js
 var require_dist = __commonJS({
-  "node_modules/yaml/dist/index.js"(exports) {
+  "../../work/main/node_modules/yaml/dist/index.js"(exports) {
     "use strict";
     var composer = require_composer();
     var Document = require_Document();
@@ -7378,9 +7378,9 @@ var require_dist = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/codegen/code.js
+// ../../work/main/node_modules/ajv/dist/compile/codegen/code.js
 var require_code = __commonJS({
-  "node_modules/ajv/dist/compile/codegen/code.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/codegen/code.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.regexpCode = exports.getEsmExportName = exports.getProperty = exports.safeStringify = exports.stringify = exports.strConcat = exports.addCodeArg = exports.str = exports._ = exports.nil = exports._Code = exports.Name = exports.IDENTIFIER = exports._CodeOrName = void 0;
@@ -7532,9 +7532,9 @@ var require_code = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/codegen/scope.js
+// ../../work/main/node_modules/ajv/dist/compile/codegen/scope.js
 var require_scope = __commonJS({
-  "node_modules/ajv/dist/compile/codegen/scope.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/codegen/scope.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.ValueScope = exports.ValueScopeName = exports.Scope = exports.varKinds = exports.UsedValueState = void 0;
@@ -7677,9 +7677,9 @@ var require_scope = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/codegen/index.js
+// ../../work/main/node_modules/ajv/dist/compile/codegen/index.js
 var require_codegen = __commonJS({
-  "node_modules/ajv/dist/compile/codegen/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/codegen/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.or = exports.and = exports.not = exports.CodeGen = exports.operators = exports.varKinds = exports.ValueScopeName = exports.ValueScope = exports.Scope = exports.Name = exports.regexpCode = exports.stringify = exports.getProperty = exports.nil = exports.strConcat = exports.str = exports._ = void 0;
@@ -7755,11 +7755,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         if (!names[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants);
+          this.rhs = optimizeExpr(this.rhs, names, constants2);
         return this;
       }
       get names() {
@@ -7776,10 +7776,10 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants);
+        this.rhs = optimizeExpr(this.rhs, names, constants2);
         return this;
       }
       get names() {
@@ -7840,8 +7840,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants) {
-        this.code = optimizeExpr(this.code, names, constants);
+      optimizeNames(names, constants2) {
+        this.code = optimizeExpr(this.code, names, constants2);
         return this;
       }
       get names() {
@@ -7870,12 +7870,12 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         const { nodes } = this;
         let i = nodes.length;
         while (i--) {
           const n = nodes[i];
-          if (n.optimizeNames(names, constants))
+          if (n.optimizeNames(names, constants2))
             continue;
           subtractNames(names, n.names);
           nodes.splice(i, 1);
@@ -7928,12 +7928,12 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        if (!(super.optimizeNames(names, constants) || this.else))
+        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
+        if (!(super.optimizeNames(names, constants2) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants);
+        this.condition = optimizeExpr(this.condition, names, constants2);
         return this;
       }
       get names() {
@@ -7956,10 +7956,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names, constants2) {
+        if (!super.optimizeNames(names, constants2))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants);
+        this.iteration = optimizeExpr(this.iteration, names, constants2);
         return this;
       }
       get names() {
@@ -7995,10 +7995,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names, constants2) {
+        if (!super.optimizeNames(names, constants2))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants);
+        this.iterable = optimizeExpr(this.iterable, names, constants2);
         return this;
       }
       get names() {
@@ -8040,11 +8040,11 @@ var require_codegen = __commonJS({
         (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         var _a, _b;
-        super.optimizeNames(names, constants);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants);
+        super.optimizeNames(names, constants2);
+        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
+        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants2);
         return this;
       }
       get names() {
@@ -8345,7 +8345,7 @@ var require_codegen = __commonJS({
     function addExprNames(names, from) {
       return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
     }
-    function optimizeExpr(expr, names, constants) {
+    function optimizeExpr(expr, names, constants2) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -8360,14 +8360,14 @@ var require_codegen = __commonJS({
         return items;
       }, []));
       function replaceName(n) {
-        const c = constants[n.str];
+        const c = constants2[n.str];
         if (c === void 0 || names[n.str] !== 1)
           return n;
         delete names[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants2[c.str] !== void 0);
       }
     }
     function subtractNames(names, from) {
@@ -8397,9 +8397,9 @@ var require_codegen = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/util.js
+// ../../work/main/node_modules/ajv/dist/compile/util.js
 var require_util = __commonJS({
-  "node_modules/ajv/dist/compile/util.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/util.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.checkStrictMode = exports.getErrorPath = exports.Type = exports.useFunc = exports.setEvaluated = exports.evaluatedPropsToName = exports.mergeEvaluated = exports.eachItem = exports.unescapeJsonPointer = exports.escapeJsonPointer = exports.escapeFragment = exports.unescapeFragment = exports.schemaRefOrVal = exports.schemaHasRulesButRef = exports.schemaHasRules = exports.checkUnknownRules = exports.alwaysValidSchema = exports.toHash = void 0;
@@ -8564,9 +8564,9 @@ var require_util = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/names.js
+// ../../work/main/node_modules/ajv/dist/compile/names.js
 var require_names = __commonJS({
-  "node_modules/ajv/dist/compile/names.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/names.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -8603,9 +8603,9 @@ var require_names = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/errors.js
+// ../../work/main/node_modules/ajv/dist/compile/errors.js
 var require_errors2 = __commonJS({
-  "node_modules/ajv/dist/compile/errors.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/errors.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.extendErrors = exports.resetErrorsCount = exports.reportExtraError = exports.reportError = exports.keyword$DataError = exports.keywordError = void 0;
@@ -8725,9 +8725,9 @@ var require_errors2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/boolSchema.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/boolSchema.js
 var require_boolSchema = __commonJS({
-  "node_modules/ajv/dist/compile/validate/boolSchema.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/boolSchema.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.boolOrEmptySchema = exports.topBoolOrEmptySchema = void 0;
@@ -8776,9 +8776,9 @@ var require_boolSchema = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/rules.js
+// ../../work/main/node_modules/ajv/dist/compile/rules.js
 var require_rules = __commonJS({
-  "node_modules/ajv/dist/compile/rules.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/rules.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getRules = exports.isJSONType = void 0;
@@ -8807,9 +8807,9 @@ var require_rules = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/applicability.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/applicability.js
 var require_applicability = __commonJS({
-  "node_modules/ajv/dist/compile/validate/applicability.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/applicability.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.shouldUseRule = exports.shouldUseGroup = exports.schemaHasRulesForType = void 0;
@@ -8830,9 +8830,9 @@ var require_applicability = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/dataType.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/dataType.js
 var require_dataType = __commonJS({
-  "node_modules/ajv/dist/compile/validate/dataType.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/dataType.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.reportTypeError = exports.checkDataTypes = exports.checkDataType = exports.coerceAndCheckDataType = exports.getJSONTypes = exports.getSchemaTypes = exports.DataType = void 0;
@@ -9014,9 +9014,9 @@ var require_dataType = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/defaults.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/defaults.js
 var require_defaults = __commonJS({
-  "node_modules/ajv/dist/compile/validate/defaults.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/defaults.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.assignDefaults = void 0;
@@ -9051,9 +9051,9 @@ var require_defaults = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/code.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/code.js
 var require_code2 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/code.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/code.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateUnion = exports.validateArray = exports.usePattern = exports.callValidateCode = exports.schemaProperties = exports.allSchemaProperties = exports.noPropertyInData = exports.propertyInData = exports.isOwnProperty = exports.hasPropFunc = exports.reportMissingProp = exports.checkMissingProp = exports.checkReportMissingProp = void 0;
@@ -9184,9 +9184,9 @@ var require_code2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/keyword.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/keyword.js
 var require_keyword = __commonJS({
-  "node_modules/ajv/dist/compile/validate/keyword.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/keyword.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateKeywordUsage = exports.validSchemaType = exports.funcKeywordCode = exports.macroKeywordCode = void 0;
@@ -9302,9 +9302,9 @@ var require_keyword = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/subschema.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/subschema.js
 var require_subschema = __commonJS({
-  "node_modules/ajv/dist/compile/validate/subschema.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/subschema.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.extendSubschemaMode = exports.extendSubschemaData = exports.getSubschema = void 0;
@@ -9385,9 +9385,9 @@ var require_subschema = __commonJS({
   }
 });
 
-// node_modules/fast-deep-equal/index.js
+// ../../work/main/node_modules/fast-deep-equal/index.js
 var require_fast_deep_equal = __commonJS({
-  "node_modules/fast-deep-equal/index.js"(exports, module) {
+  "../../work/main/node_modules/fast-deep-equal/index.js"(exports, module) {
     "use strict";
     module.exports = function equal(a, b) {
       if (a === b) return true;
@@ -9420,9 +9420,9 @@ var require_fast_deep_equal = __commonJS({
   }
 });
 
-// node_modules/json-schema-traverse/index.js
+// ../../work/main/node_modules/json-schema-traverse/index.js
 var require_json_schema_traverse = __commonJS({
-  "node_modules/json-schema-traverse/index.js"(exports, module) {
+  "../../work/main/node_modules/json-schema-traverse/index.js"(exports, module) {
     "use strict";
     var traverse2 = module.exports = function(schema, opts, cb) {
       if (typeof opts == "function") {
@@ -9508,9 +9508,9 @@ var require_json_schema_traverse = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/resolve.js
+// ../../work/main/node_modules/ajv/dist/compile/resolve.js
 var require_resolve = __commonJS({
-  "node_modules/ajv/dist/compile/resolve.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/resolve.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getSchemaRefs = exports.resolveUrl = exports.normalizeId = exports._getFullPath = exports.getFullPath = exports.inlineRef = void 0;
@@ -9664,9 +9664,9 @@ var require_resolve = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/validate/index.js
+// ../../work/main/node_modules/ajv/dist/compile/validate/index.js
 var require_validate = __commonJS({
-  "node_modules/ajv/dist/compile/validate/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/validate/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getData = exports.KeywordCxt = exports.validateFunctionCode = void 0;
@@ -10172,9 +10172,9 @@ var require_validate = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/validation_error.js
+// ../../work/main/node_modules/ajv/dist/runtime/validation_error.js
 var require_validation_error = __commonJS({
-  "node_modules/ajv/dist/runtime/validation_error.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/validation_error.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var ValidationError = class extends Error {
@@ -10188,9 +10188,9 @@ var require_validation_error = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/ref_error.js
+// ../../work/main/node_modules/ajv/dist/compile/ref_error.js
 var require_ref_error = __commonJS({
-  "node_modules/ajv/dist/compile/ref_error.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/ref_error.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var resolve_1 = require_resolve();
@@ -10205,9 +10205,9 @@ var require_ref_error = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/compile/index.js
+// ../../work/main/node_modules/ajv/dist/compile/index.js
 var require_compile = __commonJS({
-  "node_modules/ajv/dist/compile/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/compile/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.resolveSchema = exports.getCompilingSchema = exports.resolveRef = exports.compileSchema = exports.SchemaEnv = void 0;
@@ -10429,9 +10429,9 @@ var require_compile = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/refs/data.json
+// ../../work/main/node_modules/ajv/dist/refs/data.json
 var require_data = __commonJS({
-  "node_modules/ajv/dist/refs/data.json"(exports, module) {
+  "../../work/main/node_modules/ajv/dist/refs/data.json"(exports, module) {
     module.exports = {
       $id: "https://raw.githubusercontent.com/ajv-validator/ajv/master/lib/refs/data.json#",
       description: "Meta-schema for $data reference (JSON AnySchema extension proposal)",
@@ -10448,9 +10448,9 @@ var require_data = __commonJS({
   }
 });
 
-// node_modules/fast-uri/lib/utils.js
+// ../../work/main/node_modules/fast-uri/lib/utils.js
 var require_utils = __commonJS({
-  "node_modules/fast-uri/lib/utils.js"(exports, module) {
+  "../../work/main/node_modules/fast-uri/lib/utils.js"(exports, module) {
     "use strict";
     var isUUID = RegExp.prototype.test.bind(/^[\da-f]{8}-[\da-f]{4}-[\da-f]{4}-[\da-f]{4}-[\da-f]{12}$/iu);
     var isIPv4 = RegExp.prototype.test.bind(/^(?:(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)$/u);
@@ -10982,9 +10982,9 @@ var require_utils = __commonJS({
   }
 });
 
-// node_modules/fast-uri/lib/schemes.js
+// ../../work/main/node_modules/fast-uri/lib/schemes.js
 var require_schemes = __commonJS({
-  "node_modules/fast-uri/lib/schemes.js"(exports, module) {
+  "../../work/main/node_modules/fast-uri/lib/schemes.js"(exports, module) {
     "use strict";
     var { isUUID } = require_utils();
     var URN_REG = /^([\da-z][\d\-a-z]{0,31}):((?:[\w!$'()*+,\-./:;=@]|%[\da-f]{2})+)$/iu;
@@ -11193,9 +11193,9 @@ var require_schemes = __commonJS({
   }
 });
 
-// node_modules/fast-uri/index.js
+// ../../work/main/node_modules/fast-uri/index.js
 var require_fast_uri = __commonJS({
-  "node_modules/fast-uri/index.js"(exports, module) {
+  "../../work/main/node_modules/fast-uri/index.js"(exports, module) {
     "use strict";
     var { normalizeIPv6, removeDotSegments, removeDotSegmentsRelative, recomposeAuthority, normalizePercentEncoding, normalizePathEncoding, serializePathEncoding, normalizeQueryFragmentEncoding, encodeQuery, encodeFragment, reescapeHostDelimiters, isIPv4, nonSimpleDomain } = require_utils();
     var { SCHEMES, getSchemeHandler } = require_schemes();
@@ -11623,9 +11623,9 @@ var require_fast_uri = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/uri.js
+// ../../work/main/node_modules/ajv/dist/runtime/uri.js
 var require_uri = __commonJS({
-  "node_modules/ajv/dist/runtime/uri.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/uri.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var uri = require_fast_uri();
@@ -11634,9 +11634,9 @@ var require_uri = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/core.js
+// ../../work/main/node_modules/ajv/dist/core.js
 var require_core = __commonJS({
-  "node_modules/ajv/dist/core.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/core.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = void 0;
@@ -12245,9 +12245,9 @@ var require_core = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/core/id.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/core/id.js
 var require_id = __commonJS({
-  "node_modules/ajv/dist/vocabularies/core/id.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/core/id.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var def = {
@@ -12260,9 +12260,9 @@ var require_id = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/core/ref.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/core/ref.js
 var require_ref = __commonJS({
-  "node_modules/ajv/dist/vocabularies/core/ref.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/core/ref.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.callRef = exports.getValidate = void 0;
@@ -12382,9 +12382,9 @@ var require_ref = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/core/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/core/index.js
 var require_core2 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/core/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/core/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var id_1 = require_id();
@@ -12403,9 +12403,9 @@ var require_core2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitNumber.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitNumber.js
 var require_limitNumber = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitNumber.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitNumber.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -12435,9 +12435,9 @@ var require_limitNumber = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/multipleOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/multipleOf.js
 var require_multipleOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/multipleOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/multipleOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -12463,9 +12463,9 @@ var require_multipleOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/ucs2length.js
+// ../../work/main/node_modules/ajv/dist/runtime/ucs2length.js
 var require_ucs2length = __commonJS({
-  "node_modules/ajv/dist/runtime/ucs2length.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/ucs2length.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     function ucs2length(str) {
@@ -12489,9 +12489,9 @@ var require_ucs2length = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitLength.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitLength.js
 var require_limitLength = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitLength.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitLength.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -12521,9 +12521,9 @@ var require_limitLength = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/pattern.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/pattern.js
 var require_pattern = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/pattern.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/pattern.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -12558,9 +12558,9 @@ var require_pattern = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitProperties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitProperties.js
 var require_limitProperties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitProperties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -12587,9 +12587,9 @@ var require_limitProperties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/required.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/required.js
 var require_required = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/required.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/required.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -12669,9 +12669,9 @@ var require_required = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/limitItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitItems.js
 var require_limitItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -12698,9 +12698,9 @@ var require_limitItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/runtime/equal.js
+// ../../work/main/node_modules/ajv/dist/runtime/equal.js
 var require_equal = __commonJS({
-  "node_modules/ajv/dist/runtime/equal.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/runtime/equal.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var equal = require_fast_deep_equal();
@@ -12709,9 +12709,9 @@ var require_equal = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/uniqueItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/uniqueItems.js
 var require_uniqueItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/uniqueItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/uniqueItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var dataType_1 = require_dataType();
@@ -12776,9 +12776,9 @@ var require_uniqueItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/const.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/const.js
 var require_const = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/const.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/const.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -12805,9 +12805,9 @@ var require_const = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/enum.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/enum.js
 var require_enum = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/enum.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/enum.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -12854,9 +12854,9 @@ var require_enum = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/validation/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/validation/index.js
 var require_validation = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/validation/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var limitNumber_1 = require_limitNumber();
@@ -12892,9 +12892,9 @@ var require_validation = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/additionalItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalItems.js
 var require_additionalItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/additionalItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateAdditionalItems = void 0;
@@ -12945,9 +12945,9 @@ var require_additionalItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/items.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/items.js
 var require_items = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/items.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/items.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateTuple = void 0;
@@ -13002,9 +13002,9 @@ var require_items = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/prefixItems.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/prefixItems.js
 var require_prefixItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/prefixItems.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/prefixItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var items_1 = require_items();
@@ -13019,9 +13019,9 @@ var require_prefixItems = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/items2020.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/items2020.js
 var require_items2020 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/items2020.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/items2020.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -13054,9 +13054,9 @@ var require_items2020 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/contains.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/contains.js
 var require_contains = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/contains.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/contains.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -13148,9 +13148,9 @@ var require_contains = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/dependencies.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/dependencies.js
 var require_dependencies = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/dependencies.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/dependencies.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateSchemaDeps = exports.validatePropertyDeps = exports.error = void 0;
@@ -13242,9 +13242,9 @@ var require_dependencies = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/propertyNames.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/propertyNames.js
 var require_propertyNames = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/propertyNames.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/propertyNames.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -13285,9 +13285,9 @@ var require_propertyNames = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js
 var require_additionalProperties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -13391,9 +13391,9 @@ var require_additionalProperties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/properties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/properties.js
 var require_properties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/properties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/properties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var validate_1 = require_validate();
@@ -13449,9 +13449,9 @@ var require_properties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/patternProperties.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/patternProperties.js
 var require_patternProperties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/patternProperties.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/patternProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -13523,9 +13523,9 @@ var require_patternProperties = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/not.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/not.js
 var require_not = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/not.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/not.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -13554,9 +13554,9 @@ var require_not = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/anyOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/anyOf.js
 var require_anyOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/anyOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/anyOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -13571,9 +13571,9 @@ var require_anyOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/oneOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/oneOf.js
 var require_oneOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/oneOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/oneOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -13629,9 +13629,9 @@ var require_oneOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/allOf.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/allOf.js
 var require_allOf = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/allOf.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/allOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -13656,9 +13656,9 @@ var require_allOf = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/if.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/if.js
 var require_if = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/if.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/if.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -13725,9 +13725,9 @@ var require_if = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/thenElse.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/thenElse.js
 var require_thenElse = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/thenElse.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/thenElse.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -13743,9 +13743,9 @@ var require_thenElse = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/applicator/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/index.js
 var require_applicator = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var additionalItems_1 = require_additionalItems();
@@ -13791,9 +13791,9 @@ var require_applicator = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/format/format.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/format/format.js
 var require_format = __commonJS({
-  "node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -13881,9 +13881,9 @@ var require_format = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/format/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/format/index.js
 var require_format2 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var format_1 = require_format();
@@ -13892,9 +13892,9 @@ var require_format2 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/metadata.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/metadata.js
 var require_metadata = __commonJS({
-  "node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.contentVocabulary = exports.metadataVocabulary = void 0;
@@ -13915,9 +13915,9 @@ var require_metadata = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/draft7.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/draft7.js
 var require_draft7 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var core_1 = require_core2();
@@ -13937,9 +13937,9 @@ var require_draft7 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/discriminator/types.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/discriminator/types.js
 var require_types = __commonJS({
-  "node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.DiscrError = void 0;
@@ -13951,9 +13951,9 @@ var require_types = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/discriminator/index.js
+// ../../work/main/node_modules/ajv/dist/vocabularies/discriminator/index.js
 var require_discriminator = __commonJS({
-  "node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
+  "../../work/main/node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -14056,9 +14056,9 @@ var require_discriminator = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/refs/json-schema-draft-07.json
+// ../../work/main/node_modules/ajv/dist/refs/json-schema-draft-07.json
 var require_json_schema_draft_07 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
+  "../../work/main/node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
     module.exports = {
       $schema: "http://json-schema.org/draft-07/schema#",
       $id: "http://json-schema.org/draft-07/schema#",
@@ -14213,9 +14213,9 @@ var require_json_schema_draft_07 = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/ajv.js
+// ../../work/main/node_modules/ajv/dist/ajv.js
 var require_ajv = __commonJS({
-  "node_modules/ajv/dist/ajv.js"(exports, module) {
+  "../../work/main/node_modules/ajv/dist/ajv.js"(exports, module) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv = void 0;
@@ -14854,11 +14854,20 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
       fourth = fourthLigand(s, c);
       if (fourth === null) {
         const sp2 = adj.bnd[c].some((k) => s.bonds[k].order > 1 || s.bonds[k].aromatic);
-        if (!sp2) warn2("stereo-wedge-not-a-centre", `${label} has a wedge but three neighbours and no hydrogen or lone pair`, c);
+        if (!sp2)
+          warn2(
+            "stereo-wedge-not-a-centre",
+            `${label} has a wedge but three neighbours and no hydrogen or lone pair`,
+            c
+          );
         return null;
       }
     } else if (deg !== 4) {
-      warn2("stereo-wedge-not-a-centre", `${label} has a wedge but ${deg} neighbours; only 3 or 4 are read`, c);
+      warn2(
+        "stereo-wedge-not-a-centre",
+        `${label} has a wedge but ${deg} neighbours; only 3 or 4 are read`,
+        c
+      );
       return null;
     }
     const pc = xy(c);
@@ -14867,7 +14876,11 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     for (let j = 0; j < deg; j++) {
       const u = unit([...sub2(xy(ns[j]), pc), 0]);
       if (u === null) {
-        warn2("stereo-ambiguous-wedge", `${label}: a neighbour is drawn on top of it; configuration not read`, c);
+        warn2(
+          "stereo-ambiguous-wedge",
+          `${label}: a neighbour is drawn on top of it; configuration not read`,
+          c
+        );
         return null;
       }
       flat.push(u);
@@ -14881,17 +14894,30 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
       const v = reading(flat, w, zs[w], fourth !== null);
       if (v === 0) continue;
       if (sign !== 0 && v !== sign) {
-        warn2("stereo-conflicting-wedges", `${label}: its wedges, read one at a time, imply opposite configurations; configuration not read`, c);
+        warn2(
+          "stereo-conflicting-wedges",
+          `${label}: its wedges, read one at a time, imply opposite configurations; configuration not read`,
+          c
+        );
         return null;
       }
       sign = v;
     }
     if (sign === 0) {
-      warn2("stereo-ambiguous-wedge", `${label}: the wedges and bond directions do not fix a configuration`, c);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `${label}: the wedges and bond directions do not fix a configuration`,
+        c
+      );
       return null;
     }
     const vol = sign;
-    return { kind: "tetrahedral", centre: c, ligands, winding: windingOf(vol) };
+    return {
+      kind: "tetrahedral",
+      centre: c,
+      ligands,
+      winding: windingOf(vol)
+    };
   }
   function reading(flat, w, z, addFourth) {
     for (const plainZ of [0, -PLAIN_LEAN * z]) {
@@ -14914,7 +14940,8 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const s0 = others(adj, e0, cu.toward[0]);
     const s1 = others(adj, e1, cu.toward[1]);
     if (s0.length === 0 || s1.length === 0 || s0.length > 2 || s1.length > 2) continue;
-    if (adj.bnd[e0].some((k) => s.bonds[k].order === 3) || adj.bnd[e1].some((k) => s.bonds[k].order === 3)) continue;
+    if (adj.bnd[e0].some((k) => s.bonds[k].order === 3) || adj.bnd[e1].some((k) => s.bonds[k].order === 3))
+      continue;
     if (cu.inner.length % 2 === 0) {
       const d = doubleBond2(cu.ends, s0, s1);
       if (d !== null) out.push(d);
@@ -14944,7 +14971,11 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const a = endSide(s0, p0, [...dir, 0]);
     const b = endSide(s1, p0, [...dir, 0]);
     if (a === null || b === null) {
-      warn2("stereo-double-bond-geometry", `double bond at atoms ${ends[0] + 1}-${ends[1] + 1}: a substituent is drawn on the bond line or both on one side; geometry not read`, ends[0]);
+      warn2(
+        "stereo-double-bond-geometry",
+        `double bond at atoms ${ends[0] + 1}-${ends[1] + 1}: a substituent is drawn on the bond line or both on one side; geometry not read`,
+        ends[0]
+      );
       return null;
     }
     return { kind: "double-bond", ends, refs: [a[0], b[0]], relation: a[1] === b[1] ? "cis" : "trans" };
@@ -14978,7 +15009,11 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const vol = signedVolume([a.pts[0], a.pts[1], b.pts[0], b.pts[1]]);
     const scale = Math.pow(Math.hypot(...sub2(xy(ends[1]), xy(ends[0]))), 3) || 1;
     if (Math.abs(vol) / scale < 0.01) {
-      warn2("stereo-ambiguous-wedge", `allene ${ends[0] + 1}=…=${ends[1] + 1}: the wedges do not fix a configuration`, ends[0]);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `allene ${ends[0] + 1}=…=${ends[1] + 1}: the wedges do not fix a configuration`,
+        ends[0]
+      );
       return null;
     }
     const ligands = [a.ligands[0], a.ligands[1], b.ligands[0], b.ligands[1]];
@@ -14989,22 +15024,38 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const za = orthoLift(bond.a, oa);
     const zb = orthoLift(bond.b, ob);
     if (za === null || zb === null) {
-      warn2("stereo-ambiguous-wedge", `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`, bond.a);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
+        bond.a
+      );
       continue;
     }
     if (za[0] === 0 && zb[0] === 0) continue;
     const len = Math.hypot(...sub2(xy(bond.b), xy(bond.a))) || 1;
     const pts = [];
-    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(([o, z]) => {
-      const p = xy(o);
-      pts.push([p[0], p[1], z * len]);
-    });
+    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
+      ([o, z]) => {
+        const p = xy(o);
+        pts.push([p[0], p[1], z * len]);
+      }
+    );
     const vol = signedVolume(pts);
     if (Math.abs(vol) / (len * len * len) < 0.01) {
-      warn2("stereo-ambiguous-wedge", `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`, bond.a);
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
+        bond.a
+      );
       continue;
     }
-    out.push({ kind: "axial", subtype: "biaryl", ends: [bond.a, bond.b], ligands: [oa[0], oa[1], ob[0], ob[1]], winding: windingOf(vol) });
+    out.push({
+      kind: "axial",
+      subtype: "biaryl",
+      ends: [bond.a, bond.b],
+      ligands: [oa[0], oa[1], ob[0], ob[1]],
+      winding: windingOf(vol)
+    });
   }
   function orthoLift(end, orth) {
     const z = orth.map((o) => {
@@ -15084,7 +15135,12 @@ function stereoFrom3d(s, adj, _warnings, _atomLines) {
     }
     const vol = signedVolume(pts);
     if (Math.abs(vol) < MIN_VOLUME2) continue;
-    out.push({ kind: "tetrahedral", centre: c, ligands, winding: windingOf(vol) });
+    out.push({
+      kind: "tetrahedral",
+      centre: c,
+      ligands,
+      winding: windingOf(vol)
+    });
   }
   for (const cu of cumulenes(s, adj)) {
     const [e0, e1] = cu.ends;
@@ -15097,7 +15153,12 @@ function stereoFrom3d(s, adj, _warnings, _atomLines) {
       const r1 = preferHeavy(s, s1)[0];
       const d = dihedralSin(pos(r0), pos(e0), pos(e1), pos(r1));
       if (d === null || Math.abs(d.cos) < MIN_SIN) continue;
-      out.push({ kind: "double-bond", ends: [e0, e1], refs: [r0, r1], relation: d.cos > 0 ? "cis" : "trans" });
+      out.push({
+        kind: "double-bond",
+        ends: [e0, e1],
+        refs: [r0, r1],
+        relation: d.cos > 0 ? "cis" : "trans"
+      });
     } else {
       const a = endPoints(e0, cu.toward[0], s0);
       const b = endPoints(e1, cu.toward[1], s1);
@@ -15120,7 +15181,13 @@ function stereoFrom3d(s, adj, _warnings, _atomLines) {
     const d = dihedralSin(pos(oa[0]), pos(a), pos(b), pos(ob[0]));
     if (d === null || Math.abs(d.sin) < MIN_SIN) continue;
     const vol = signedVolume([pos(oa[0]), pos(oa[1]), pos(ob[0]), pos(ob[1])]);
-    out.push({ kind: "axial", subtype: "biaryl", ends: [a, b], ligands: [oa[0], oa[1], ob[0], ob[1]], winding: windingOf(vol) });
+    out.push({
+      kind: "axial",
+      subtype: "biaryl",
+      ends: [a, b],
+      ligands: [oa[0], oa[1], ob[0], ob[1]],
+      winding: windingOf(vol)
+    });
   }
   return out;
   function endPoints(end, toward, subs) {
@@ -15196,7 +15263,8 @@ function finishMolecule(raw2) {
     for (const k of adj.bnd[i]) sum += bonds[k].order;
     const v = raw2.valences[i];
     if (v !== null && v !== void 0) atom.hCount = Math.max(0, v - sum);
-    else atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
+    else
+      atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
   }
   let dimension = 0;
   for (const atom of atoms) {
@@ -15361,6 +15429,104 @@ var init_molfile_fields = __esm({
   }
 });
 
+// src/chem/read/molfile-bond.ts
+function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
+  if (a < 1 || a > nAtoms || b < 1 || b > nAtoms) {
+    const bad2 = a < 1 || a > nAtoms ? a : b;
+    return {
+      code: "molfile-bond-atom-missing",
+      message: `bond ${bondNo} refers to atom ${bad2}, but there are ${nAtoms} atoms`,
+      at: { line }
+    };
+  }
+  if (a === b)
+    return {
+      code: "molfile-bond-to-itself",
+      message: `bond ${bondNo} joins atom ${a} to itself`,
+      at: { line }
+    };
+  let order = 1;
+  let aromatic = false;
+  switch (type) {
+    case 1:
+      break;
+    case 2:
+      order = 2;
+      break;
+    case 3:
+      order = 3;
+      break;
+    case 4:
+      aromatic = true;
+      break;
+    case 5:
+    case 8:
+    case 9:
+      warnings.push({
+        code: "molfile-query-bond",
+        message: `bond ${bondNo} has type ${type} (${type === 9 ? "coordination" : "query"} bond); read as a single bond`,
+        at: { line }
+      });
+      break;
+    case 6:
+    case 7:
+      aromatic = true;
+      warnings.push({
+        code: "molfile-query-bond",
+        message: `bond ${bondNo} has query type ${type}; read as aromatic`,
+        at: { line }
+      });
+      break;
+    case 10:
+      warnings.push({
+        code: "molfile-hydrogen-bond",
+        message: `bond ${bondNo} is a hydrogen bond (type 10); left out`,
+        at: { line }
+      });
+      return { bond: null };
+    default:
+      return {
+        code: "molfile-bad-bond-type",
+        message: `bond ${bondNo} has type ${type}; the format defines types 1-10`,
+        at: { line }
+      };
+  }
+  let wedge = null;
+  if (stereo !== 0) {
+    if (order === 2) {
+      if (stereo === 3) wedge = "either";
+      else
+        warnings.push({
+          code: "molfile-bad-bond-stereo",
+          message: `double bond ${bondNo} has stereo code ${stereo}; only 0 and 3 apply to double bonds`,
+          at: { line }
+        });
+    } else if (order === 1) {
+      if (stereo === 1) wedge = "up";
+      else if (stereo === 6) wedge = "down";
+      else if (stereo === 4) wedge = "either";
+      else
+        warnings.push({
+          code: "molfile-bad-bond-stereo",
+          message: `single bond ${bondNo} has stereo code ${stereo}; only 0, 1, 4 and 6 apply`,
+          at: { line }
+        });
+    } else {
+      warnings.push({
+        code: "molfile-bad-bond-stereo",
+        message: `bond ${bondNo} of order ${order} carries a stereo mark; ignored`,
+        at: { line }
+      });
+    }
+  }
+  return { bond: { a: a - 1, b: b - 1, order, aromatic, wedge } };
+}
+var init_molfile_bond = __esm({
+  "src/chem/read/molfile-bond.ts"() {
+    "use strict";
+  }
+});
+
 // src/chem/read/molfile-v3000.ts
 function fail(code, message, line) {
   return { ok: false, error: { code, message, at: { line } } };
@@ -15415,20 +15581,29 @@ function parseV3000(lines, idx, end, firstLine, title) {
       break;
     }
     if (!l.startsWith("M  V30")) {
-      return fail("molfile-v3000-bad-line", `V3000 lines must start with "M  V30", found "${l.slice(0, 20)}"`, lineNo(i));
+      return fail(
+        "molfile-v3000-bad-line",
+        `V3000 lines must start with "M  V30", found "${l.slice(0, 20)}"`,
+        lineNo(i)
+      );
     }
     const first = lineNo(i);
     let text = l.slice(7);
     while (text.endsWith("-")) {
       i++;
       if (i >= end || !lines[i].startsWith("M  V30")) {
-        return fail("molfile-v3000-bad-continuation", 'a V3000 line ends with "-" but no "M  V30" continuation line follows', lineNo(i));
+        return fail(
+          "molfile-v3000-bad-continuation",
+          'a V3000 line ends with "-" but no "M  V30" continuation line follows',
+          lineNo(i)
+        );
       }
       text = text.slice(0, -1) + lines[i].slice(7);
     }
     logical.push({ text: text.trim(), line: first });
   }
-  if (endLine === -1) return fail("molfile-missing-end", 'the V3000 molfile ends without its "M  END" line', lineNo(end));
+  if (endLine === -1)
+    return fail("molfile-missing-end", 'the V3000 molfile ends without its "M  END" line', lineNo(end));
   const warnings = [];
   const atoms = [];
   const atomLines = [];
@@ -15456,13 +15631,22 @@ function parseV3000(lines, idx, end, firstLine, title) {
     if (head === "BEGIN") {
       const what = (t[1] ?? "").toUpperCase();
       if (what === "CTAB") {
-        if (inCtab || ctabDone) return fail("molfile-v3000-unexpected", 'a second "BEGIN CTAB" (only one connection table is read)', line);
+        if (inCtab || ctabDone)
+          return fail(
+            "molfile-v3000-unexpected",
+            'a second "BEGIN CTAB" (only one connection table is read)',
+            line
+          );
         inCtab = true;
         blockLine = line;
       } else if (!inCtab) {
         return fail("molfile-v3000-unexpected", `"BEGIN ${what}" outside the CTAB block`, line);
       } else if (block !== null) {
-        return fail("molfile-v3000-block-not-closed", `"BEGIN ${what}" inside the ${block} block opened at line ${blockLine}, which is not closed`, line);
+        return fail(
+          "molfile-v3000-block-not-closed",
+          `"BEGIN ${what}" inside the ${block} block opened at line ${blockLine}, which is not closed`,
+          line
+        );
       } else if (what === "ATOM" || what === "BOND" || what === "COLLECTION") {
         block = what;
         blockLine = line;
@@ -15476,7 +15660,11 @@ function parseV3000(lines, idx, end, firstLine, title) {
         inCtab = false;
         ctabDone = true;
       } else {
-        return fail("molfile-v3000-block-not-closed", `"END ${what}" while the ${block ?? (inCtab ? "CTAB" : "no")} block is open (opened at line ${blockLine})`, line);
+        return fail(
+          "molfile-v3000-block-not-closed",
+          `"END ${what}" while the ${block ?? (inCtab ? "CTAB" : "no")} block is open (opened at line ${blockLine})`,
+          line
+        );
       }
       continue;
     }
@@ -15485,7 +15673,11 @@ function parseV3000(lines, idx, end, firstLine, title) {
       expectAtoms = Number(t[1]);
       expectBonds = Number(t[2]);
       if (!Number.isInteger(expectAtoms) || !Number.isInteger(expectBonds) || expectAtoms < 0 || expectBonds < 0) {
-        return fail("molfile-bad-counts-line", `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`, line);
+        return fail(
+          "molfile-bad-counts-line",
+          `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`,
+          line
+        );
       }
       chiralFlag = t[5] === "1";
       continue;
@@ -15497,21 +15689,36 @@ function parseV3000(lines, idx, end, firstLine, title) {
       valences.push(r.valence);
       atomLines.push(line);
     } else if (block === "BOND") {
-      if (t.length < 4) return fail("molfile-bad-bond-line", `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`, line);
+      if (t.length < 4)
+        return fail(
+          "molfile-bad-bond-line",
+          `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`,
+          line
+        );
       const type = Number(t[1]);
       const a = indexOf.get(Number(t[2]));
       const b = indexOf.get(Number(t[3]));
       if (a === void 0 || b === void 0) {
-        return fail("molfile-bond-atom-missing", `bond ${t[0]} refers to atom ${a === void 0 ? t[2] : t[3]}, which is not in the ATOM block`, line);
+        return fail(
+          "molfile-bond-atom-missing",
+          `bond ${t[0]} refers to atom ${a === void 0 ? t[2] : t[3]}, which is not in the ATOM block`,
+          line
+        );
       }
-      if (!Number.isInteger(type)) return fail("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line);
+      if (!Number.isInteger(type))
+        return fail("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line);
       const cfg = Number(keyed(t, 4).get("CFG") ?? 0);
       const stereo = cfg === 1 ? 1 : cfg === 3 ? 6 : cfg === 2 ? type === 2 ? 3 : 4 : 0;
       const r = makeBond(a + 1, b + 1, type, stereo, atoms.length, bonds.length + 1, line, warnings);
       if ("code" in r) return { ok: false, error: r };
       if (r.bond === null) continue;
       const key3 = Math.min(a, b) * 1000003 + Math.max(a, b);
-      if (seenBonds.has(key3)) return fail("molfile-duplicate-bond", `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`, line);
+      if (seenBonds.has(key3))
+        return fail(
+          "molfile-duplicate-bond",
+          `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`,
+          line
+        );
       seenBonds.add(key3);
       bonds.push(r.bond);
     } else if (block === "COLLECTION") {
@@ -15519,11 +15726,17 @@ function parseV3000(lines, idx, end, firstLine, title) {
       const m = /^MDLV30\/STE(ABS|RAC|REL)(\d*)$/.exec(name);
       if (m === null) continue;
       const list = parseList(keyed(t, 1).get("ATOMS") ?? "");
-      if (list === null) return fail("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
+      if (list === null)
+        return fail("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
       const members = [];
       for (const n of list) {
         const ai = indexOf.get(n);
-        if (ai === void 0) return fail("molfile-bad-collection", `collection ${t[0]} names atom ${n}, which is not in the ATOM block`, line);
+        if (ai === void 0)
+          return fail(
+            "molfile-bad-collection",
+            `collection ${t[0]} names atom ${n}, which is not in the ATOM block`,
+            line
+          );
         members.push(ai);
       }
       const type = m[1] === "ABS" ? "abs" : m[1] === "RAC" ? "and" : "or";
@@ -15531,30 +15744,67 @@ function parseV3000(lines, idx, end, firstLine, title) {
       groups.push({ type, id, atoms: members });
     }
   }
-  if (block !== null) return fail("molfile-v3000-block-not-closed", `the ${block} block opened at line ${blockLine} is not closed before "M  END"`, lineNo(endLine));
-  if (inCtab) return fail("molfile-v3000-block-not-closed", `the CTAB block opened at line ${blockLine} is not closed before "M  END"`, lineNo(endLine));
-  if (!ctabDone) return fail("molfile-v3000-no-ctab", 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
+  if (block !== null)
+    return fail(
+      "molfile-v3000-block-not-closed",
+      `the ${block} block opened at line ${blockLine} is not closed before "M  END"`,
+      lineNo(endLine)
+    );
+  if (inCtab)
+    return fail(
+      "molfile-v3000-block-not-closed",
+      `the CTAB block opened at line ${blockLine} is not closed before "M  END"`,
+      lineNo(endLine)
+    );
+  if (!ctabDone)
+    return fail("molfile-v3000-no-ctab", 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
   if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bonds.length)) {
-    warnings.push({ code: "molfile-counts-mismatch", message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`, at: { line: blockLine } });
+    warnings.push({
+      code: "molfile-counts-mismatch",
+      message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`,
+      at: { line: blockLine }
+    });
   }
   return finishMolecule({ atoms, bonds, valences, atomLines, groups, chiralFlag, title, warnings });
 }
-function readAtom(t, line, position, indexOf, warnings) {
-  if (t.length < 6) return { code: "molfile-atom-line-short", message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`, at: { line } };
+function readAtom(tokens2, line, position, indexOf, warnings) {
+  let t = tokens2;
+  if ((t[1] ?? "").toUpperCase() === "NOT" && t.length > 2) t = [t[0], `NOT ${t[2]}`, ...t.slice(3)];
+  if (t.length < 6)
+    return {
+      code: "molfile-atom-line-short",
+      message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`,
+      at: { line }
+    };
   const index = Number(t[0]);
-  if (!Number.isInteger(index) || index < 1) return { code: "molfile-bad-atom-line", message: `atom index "${t[0]}" is not a positive integer`, at: { line } };
-  if (indexOf.has(index)) return { code: "molfile-bad-atom-line", message: `atom index ${index} appears twice`, at: { line } };
+  if (!Number.isInteger(index) || index < 1)
+    return {
+      code: "molfile-bad-atom-line",
+      message: `atom index "${t[0]}" is not a positive integer`,
+      at: { line }
+    };
+  if (indexOf.has(index))
+    return { code: "molfile-bad-atom-line", message: `atom index ${index} appears twice`, at: { line } };
   const x = Number(t[2]);
   const y = Number(t[3]);
   const z = Number(t[4]);
   if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
-    return { code: "molfile-bad-coordinate", message: `atom ${index}: the coordinates "${t[2]} ${t[3]} ${t[4]}" are not numbers`, at: { line } };
+    return {
+      code: "molfile-bad-coordinate",
+      message: `atom ${index}: the coordinates "${t[2]} ${t[3]} ${t[4]}" are not numbers`,
+      at: { line }
+    };
   }
   let sym = t[1];
   if (sym.startsWith('"') && sym.endsWith('"') && sym.length >= 2) sym = sym.slice(1, -1);
-  const isList = sym.startsWith("[") || sym.toUpperCase() === "NOT";
+  const isList = sym.startsWith("[") || sym.toUpperCase().startsWith("NOT ");
   const el = isList ? elementOf("*") : elementOf(sym);
-  if (el === null) return { code: "molfile-unknown-element", message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`, at: { line } };
+  if (el === null)
+    return {
+      code: "molfile-unknown-element",
+      message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`,
+      at: { line }
+    };
   const map = Number(t[5]);
   const kv = keyed(t, 6);
   const num = (k) => {
@@ -15562,7 +15812,11 @@ function readAtom(t, line, position, indexOf, warnings) {
     if (v === void 0) return 0;
     const n = Number(v);
     if (!Number.isInteger(n)) {
-      warnings.push({ code: "molfile-bad-atom-property", message: `atom ${index}: ${k}=${v} is not an integer; ignored`, at: { line } });
+      warnings.push({
+        code: "molfile-bad-atom-property",
+        message: `atom ${index}: ${k}=${v} is not an integer; ignored`,
+        at: { line }
+      });
       return 0;
     }
     return n;
@@ -15572,7 +15826,11 @@ function readAtom(t, line, position, indexOf, warnings) {
   const mass = num("MASS");
   const val = num("VAL");
   if (index !== position + 1) {
-    warnings.push({ code: "molfile-atom-index-out-of-order", message: `atom index ${index} is at position ${position + 1}; atoms are numbered by position`, at: { line } });
+    warnings.push({
+      code: "molfile-atom-index-out-of-order",
+      message: `atom index ${index} is at position ${position + 1}; atoms are numbered by position`,
+      at: { line }
+    });
   }
   indexOf.set(index, position);
   return {
@@ -15597,7 +15855,7 @@ var init_molfile_v3000 = __esm({
     "use strict";
     init_molfile_build();
     init_molfile_fields();
-    init_molfile();
+    init_molfile_bond();
   }
 });
 
@@ -15621,7 +15879,11 @@ function fail2(code, message, line) {
 function parseMolfileLines(lines, start, end, firstLine) {
   const lineNo = (idx2) => firstLine + (idx2 - start);
   if (end - start < 4) {
-    return fail2("molfile-truncated", `the molfile ends after ${end - start} lines, before its counts line (line 4)`, lineNo(end));
+    return fail2(
+      "molfile-truncated",
+      `the molfile ends after ${end - start} lines, before its counts line (line 4)`,
+      lineNo(end)
+    );
   }
   const title = lines[start].trim() || null;
   const counts = lines[start + 3];
@@ -15646,7 +15908,11 @@ function parseMolfileLines(lines, start, end, firstLine) {
     nBonds = b;
     nLists = Number(t[2]) || 0;
     chiral = Number(t[4]) || 0;
-    warnings.push({ code: "molfile-counts-not-fixed-width", message: "the counts line does not keep the fixed columns of the format", at: { line: lineNo(start + 3) } });
+    warnings.push({
+      code: "molfile-counts-not-fixed-width",
+      message: "the counts line does not keep the fixed columns of the format",
+      at: { line: lineNo(start + 3) }
+    });
   }
   if (!(nLists >= 0)) nLists = 0;
   const atoms = [];
@@ -15655,7 +15921,11 @@ function parseMolfileLines(lines, start, end, firstLine) {
   let idx = start + 4;
   for (let i = 0; i < nAtoms; i++, idx++) {
     if (idx >= end) {
-      return fail2("molfile-truncated", `the molfile ends after ${i} of its ${nAtoms} atom lines`, lineNo(idx));
+      return fail2(
+        "molfile-truncated",
+        `the molfile ends after ${i} of its ${nAtoms} atom lines`,
+        lineNo(idx)
+      );
     }
     const line = lines[idx];
     let x = floatField(line, 0, 10);
@@ -15670,9 +15940,17 @@ function parseMolfileLines(lines, start, end, firstLine) {
       const fz = Number(free[2]);
       if (free.length < 4 || !Number.isFinite(fx) || !Number.isFinite(fy) || !Number.isFinite(fz)) {
         if (line.length < 32 && free.length < 4) {
-          return fail2("molfile-atom-line-short", `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`, lineNo(idx));
+          return fail2(
+            "molfile-atom-line-short",
+            `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`,
+            lineNo(idx)
+          );
         }
-        return fail2("molfile-bad-coordinate", `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`, lineNo(idx));
+        return fail2(
+          "molfile-bad-coordinate",
+          `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`,
+          lineNo(idx)
+        );
       }
       x = fx;
       y = fy;
@@ -15680,11 +15958,19 @@ function parseMolfileLines(lines, start, end, firstLine) {
       sym = free[3];
     }
     if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
-      return fail2("molfile-bad-coordinate", `atom line ${i + 1}: the coordinates are not finite numbers`, lineNo(idx));
+      return fail2(
+        "molfile-bad-coordinate",
+        `atom line ${i + 1}: the coordinates are not finite numbers`,
+        lineNo(idx)
+      );
     }
     const el = elementOf(sym);
     if (el === null) {
-      return fail2("molfile-unknown-element", `atom line ${i + 1}: "${sym}" is not an element symbol or a known query/R-group symbol`, lineNo(idx));
+      return fail2(
+        "molfile-unknown-element",
+        `atom line ${i + 1}: "${sym}" is not an element symbol or a known query/R-group symbol`,
+        lineNo(idx)
+      );
     }
     let massDiff = 0;
     let chargeCode = 0;
@@ -15710,13 +15996,21 @@ function parseMolfileLines(lines, start, end, firstLine) {
       charge = CHARGE_CODE[chargeCode];
       if (chargeCode === 4) radical = 1;
     } else {
-      warnings.push({ code: "molfile-bad-charge-code", message: `atom ${i + 1}: charge code "${chargeCode}" is not 0-7; read as no charge`, at: { line: lineNo(idx) } });
+      warnings.push({
+        code: "molfile-bad-charge-code",
+        message: `atom ${i + 1}: charge code "${chargeCode}" is not 0-7; read as no charge`,
+        at: { line: lineNo(idx) }
+      });
     }
     let isotope = el.isotope;
     if (massDiff !== 0 && el.atomicNumber > 0) {
       const m = roundedMass(el.atomicNumber);
       if (m === void 0) {
-        warnings.push({ code: "molfile-mass-difference-unknown", message: `atom ${i + 1}: a mass difference is given for ${el.element}, whose reference mass this reader does not know; isotope ignored`, at: { line: lineNo(idx) } });
+        warnings.push({
+          code: "molfile-mass-difference-unknown",
+          message: `atom ${i + 1}: a mass difference is given for ${el.element}, whose reference mass this reader does not know; isotope ignored`,
+          at: { line: lineNo(idx) }
+        });
       } else isotope = m + massDiff;
     }
     atoms.push({
@@ -15737,7 +16031,12 @@ function parseMolfileLines(lines, start, end, firstLine) {
   const bonds = [];
   const seen = /* @__PURE__ */ new Set();
   for (let i = 0; i < nBonds; i++, idx++) {
-    if (idx >= end) return fail2("molfile-truncated", `the molfile ends after ${i} of its ${nBonds} bond lines`, lineNo(idx));
+    if (idx >= end)
+      return fail2(
+        "molfile-truncated",
+        `the molfile ends after ${i} of its ${nBonds} bond lines`,
+        lineNo(idx)
+      );
     const line = lines[idx];
     let a = intField(line, 0, 3);
     let b = intField(line, 3, 6);
@@ -15750,7 +16049,11 @@ function parseMolfileLines(lines, start, end, firstLine) {
       type = Number(t[2]);
       stereo = Number(t[3] ?? 0);
       if (t.length < 3 || !Number.isInteger(a) || !Number.isInteger(b) || !Number.isInteger(type)) {
-        return fail2("molfile-bad-bond-line", `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`, lineNo(idx));
+        return fail2(
+          "molfile-bad-bond-line",
+          `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`,
+          lineNo(idx)
+        );
       }
       if (!Number.isInteger(stereo)) stereo = 0;
     }
@@ -15758,67 +16061,29 @@ function parseMolfileLines(lines, start, end, firstLine) {
     if ("code" in r) return { ok: false, error: r };
     if (r.bond === null) continue;
     const key3 = Math.min(r.bond.a, r.bond.b) * 1000003 + Math.max(r.bond.a, r.bond.b);
-    if (seen.has(key3)) return fail2("molfile-duplicate-bond", `bond line ${i + 1}: atoms ${a} and ${b} are already bonded`, lineNo(idx));
+    if (seen.has(key3))
+      return fail2(
+        "molfile-duplicate-bond",
+        `bond line ${i + 1}: atoms ${a} and ${b} are already bonded`,
+        lineNo(idx)
+      );
     seen.add(key3);
     bonds.push(r.bond);
   }
   idx += nLists;
-  const raw2 = { atoms, bonds, valences, atomLines, groups: [], chiralFlag: chiral === 1, title, warnings };
+  const raw2 = {
+    atoms,
+    bonds,
+    valences,
+    atomLines,
+    groups: [],
+    chiralFlag: chiral === 1,
+    title,
+    warnings
+  };
   const propError = readProperties(lines, idx, end, lineNo, raw2);
   if (propError !== null) return { ok: false, error: propError };
   return finishMolecule(raw2);
-}
-function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
-  if (a < 1 || a > nAtoms || b < 1 || b > nAtoms) {
-    const bad2 = a < 1 || a > nAtoms ? a : b;
-    return { code: "molfile-bond-atom-missing", message: `bond ${bondNo} refers to atom ${bad2}, but there are ${nAtoms} atoms`, at: { line } };
-  }
-  if (a === b) return { code: "molfile-bond-to-itself", message: `bond ${bondNo} joins atom ${a} to itself`, at: { line } };
-  let order = 1;
-  let aromatic = false;
-  switch (type) {
-    case 1:
-      break;
-    case 2:
-      order = 2;
-      break;
-    case 3:
-      order = 3;
-      break;
-    case 4:
-      aromatic = true;
-      break;
-    case 5:
-    case 8:
-    case 9:
-      warnings.push({ code: "molfile-query-bond", message: `bond ${bondNo} has type ${type} (${type === 9 ? "coordination" : "query"} bond); read as a single bond`, at: { line } });
-      break;
-    case 6:
-    case 7:
-      aromatic = true;
-      warnings.push({ code: "molfile-query-bond", message: `bond ${bondNo} has query type ${type}; read as aromatic`, at: { line } });
-      break;
-    case 10:
-      warnings.push({ code: "molfile-hydrogen-bond", message: `bond ${bondNo} is a hydrogen bond (type 10); left out`, at: { line } });
-      return { bond: null };
-    default:
-      return { code: "molfile-bad-bond-type", message: `bond ${bondNo} has type ${type}; the format defines types 1-10`, at: { line } };
-  }
-  let wedge = null;
-  if (stereo !== 0) {
-    if (order === 2) {
-      if (stereo === 3) wedge = "either";
-      else warnings.push({ code: "molfile-bad-bond-stereo", message: `double bond ${bondNo} has stereo code ${stereo}; only 0 and 3 apply to double bonds`, at: { line } });
-    } else if (order === 1) {
-      if (stereo === 1) wedge = "up";
-      else if (stereo === 6) wedge = "down";
-      else if (stereo === 4) wedge = "either";
-      else warnings.push({ code: "molfile-bad-bond-stereo", message: `single bond ${bondNo} has stereo code ${stereo}; only 0, 1, 4 and 6 apply`, at: { line } });
-    } else {
-      warnings.push({ code: "molfile-bad-bond-stereo", message: `bond ${bondNo} of order ${order} carries a stereo mark; ignored`, at: { line } });
-    }
-  }
-  return { bond: { a: a - 1, b: b - 1, order, aromatic, wedge } };
 }
 function readProperties(lines, idx, end, lineNo, raw2) {
   const { atoms } = raw2;
@@ -15827,7 +16092,11 @@ function readProperties(lines, idx, end, lineNo, raw2) {
   const atomRef = (s, i) => {
     const n = Number(s);
     if (!Number.isInteger(n) || n < 1 || n > atoms.length) {
-      return { code: "molfile-bad-property", message: `"${lines[i].slice(0, 6)}" line refers to atom "${s ?? ""}", which does not exist`, at: { line: lineNo(i) } };
+      return {
+        code: "molfile-bad-property",
+        message: `"${lines[i].slice(0, 6)}" line refers to atom "${s ?? ""}", which does not exist`,
+        at: { line: lineNo(i) }
+      };
     }
     return n - 1;
   };
@@ -15839,7 +16108,11 @@ function readProperties(lines, idx, end, lineNo, raw2) {
       const t = tokens(line);
       const n = Number(t[2]);
       if (!Number.isInteger(n) || n < 0 || t.length < 3 + 2 * n) {
-        return { code: "molfile-bad-property", message: `"${tag}" line: the entry count does not match the entries`, at: { line: lineNo(idx) } };
+        return {
+          code: "molfile-bad-property",
+          message: `"${tag}" line: the entry count does not match the entries`,
+          at: { line: lineNo(idx) }
+        };
       }
       if (tag === "M  CHG" || tag === "M  RAD") {
         if (!chgSeen) {
@@ -15858,7 +16131,11 @@ function readProperties(lines, idx, end, lineNo, raw2) {
         if (typeof ai !== "number") return ai;
         const v = Number(t[4 + 2 * k]);
         if (!Number.isInteger(v)) {
-          return { code: "molfile-bad-property", message: `"${tag}" line: value "${t[4 + 2 * k]}" is not an integer`, at: { line: lineNo(idx) } };
+          return {
+            code: "molfile-bad-property",
+            message: `"${tag}" line: value "${t[4 + 2 * k]}" is not an integer`,
+            at: { line: lineNo(idx) }
+          };
         }
         if (tag === "M  CHG") atoms[ai].charge = v;
         else if (tag === "M  ISO") atoms[ai].isotope = v;
@@ -15877,10 +16154,18 @@ function readProperties(lines, idx, end, lineNo, raw2) {
       const n = Number(tokens(line)[2]);
       if (Number.isInteger(n) && n > 0) idx += n;
     } else if (line.startsWith("$$$$") || line.startsWith(">")) {
-      return { code: "molfile-missing-end", message: 'the molfile has no "M  END" line before this line', at: { line: lineNo(idx) } };
+      return {
+        code: "molfile-missing-end",
+        message: 'the molfile has no "M  END" line before this line',
+        at: { line: lineNo(idx) }
+      };
     }
   }
-  return { code: "molfile-missing-end", message: 'the molfile ends without its "M  END" line', at: { line: lineNo(end) } };
+  return {
+    code: "molfile-missing-end",
+    message: 'the molfile ends without its "M  END" line',
+    at: { line: lineNo(end) }
+  };
 }
 var CHARGE_CODE;
 var init_molfile = __esm({
@@ -15889,6 +16174,7 @@ var init_molfile = __esm({
     init_molfile_build();
     init_molfile_fields();
     init_molfile_v3000();
+    init_molfile_bond();
     CHARGE_CODE = [0, 3, 2, 1, 0, -1, -2, -3];
   }
 });
@@ -16361,6 +16647,10 @@ var init_smiles_bracket = __esm({
 });
 
 // src/chem/read/smiles-parse.ts
+var smiles_parse_exports = {};
+__export(smiles_parse_exports, {
+  parseSmilesGraph: () => parseSmilesGraph
+});
 function err(code, message, offset) {
   return { error: { code, message, offset } };
 }
@@ -17037,7 +17327,13 @@ function readRecord(lines, start, end, firstLine, record) {
       continue;
     }
     if (!l.startsWith(">")) {
-      warnings.push(tag({ code: "sdf-stray-line", message: `a line outside any data field: "${l.slice(0, 30)}"`, at: { line: firstLine + (i - start) } }));
+      warnings.push(
+        tag({
+          code: "sdf-stray-line",
+          message: `a line outside any data field: "${l.slice(0, 30)}"`,
+          at: { line: firstLine + (i - start) }
+        })
+      );
       i++;
       continue;
     }
@@ -17047,11 +17343,23 @@ function readRecord(lines, start, end, firstLine, record) {
     const value = [];
     while (i < end && lines[i].trim() !== "") value.push(lines[i++]);
     if (name === null) {
-      warnings.push(tag({ code: "sdf-field-without-name", message: "a data-field header without a <NAME>; its value is skipped", at: { line: at } }));
+      warnings.push(
+        tag({
+          code: "sdf-field-without-name",
+          message: "a data-field header without a <NAME>; its value is skipped",
+          at: { line: at }
+        })
+      );
       continue;
     }
     if (name in props) {
-      warnings.push(tag({ code: "sdf-duplicate-field", message: `data field <${name}> appears twice; the first value is kept`, at: { line: at } }));
+      warnings.push(
+        tag({
+          code: "sdf-duplicate-field",
+          message: `data field <${name}> appears twice; the first value is kept`,
+          at: { line: at }
+        })
+      );
       continue;
     }
     props[name] = value.join("\n");
@@ -17636,43 +17944,50 @@ var init_components = __esm({
 function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) {
   const n = g.n;
   const m = s.bonds.length;
+  const { systems, systemOf } = ringSystemsOf(s, n, bondInRing);
+  const bondCount = new Int32Array(systems.length);
+  const smallest = new Int32Array(systems.length).fill(2147483647);
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const r = systemOf[s.bonds[k].a];
+    bondCount[r]++;
+    smallest[r] = Math.min(smallest[r], smallestRingOfBond[k]);
+  }
+  const rings = [];
+  systems.forEach((atoms, r) => {
+    const nullity = bondCount[r] - atoms.length + 1;
+    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
+    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallest[r]));
+  });
+  return rings.sort((p, q) => p.length - q.length);
+}
+function ringSystemsOf(s, n, bondInRing) {
   const parent = Int32Array.from({ length: n }, (_, i) => i);
   const find = (x) => {
     while (parent[x] !== x) x = parent[x] = parent[parent[x]];
     return x;
   };
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    const ra = find(s.bonds[k].a);
-    const rb = find(s.bonds[k].b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  }
-  const atomsOf = /* @__PURE__ */ new Map();
-  const bondsOf = /* @__PURE__ */ new Map();
-  const smallestOf = /* @__PURE__ */ new Map();
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    const r = find(s.bonds[k].a);
-    bondsOf.set(r, (bondsOf.get(r) ?? 0) + 1);
-    const z = smallestRingOfBond[k];
-    if (z < (smallestOf.get(r) ?? Infinity)) smallestOf.set(r, z);
-  }
   const inRing = new Uint8Array(n);
-  for (let k = 0; k < m; k++) if (bondInRing[k]) inRing[s.bonds[k].a] = inRing[s.bonds[k].b] = 1;
+  s.bonds.forEach((b, k) => {
+    if (!bondInRing[k]) return;
+    inRing[b.a] = inRing[b.b] = 1;
+    const ra = find(b.a);
+    const rb = find(b.b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  });
+  const systems = [];
+  const systemOf = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
     if (!inRing[i]) continue;
-    const r = find(i);
-    const list = atomsOf.get(r);
-    if (list) list.push(i);
-    else atomsOf.set(r, [i]);
+    const root = find(i);
+    if (systemOf[root] < 0) {
+      systemOf[root] = systems.length;
+      systems.push([]);
+    }
+    systemOf[i] = systemOf[root];
+    systems[systemOf[i]].push(i);
   }
-  const rings = [];
-  for (const [root, atoms] of atomsOf) {
-    const nullity = bondsOf.get(root) - atoms.length + 1;
-    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
-    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallestOf.get(root)));
-  }
-  return rings.sort((p, q) => p.length - q.length);
+  return { systems, systemOf };
 }
 function walkCycle(start, g, bondInRing) {
   const out = [start];
@@ -17821,14 +18136,21 @@ function ringInfo(s, g = buildGraph(s)) {
   }
   const atomInRing = smallestRingOfAtom.map((x) => x > 0);
   const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
-  return { rings, atomInRing, bondInRing, smallestRingOfBond, smallestRingOfAtom, ringSystems: systems(rings, n) };
+  return {
+    rings,
+    atomInRing,
+    bondInRing,
+    smallestRingOfBond,
+    smallestRingOfAtom,
+    ringSystems: ringSystemsOf(s, n, bondInRing).systems
+  };
 }
-function smallestRings(s, g) {
+function smallestRings(s, g, bridgeOf) {
   const n = g.n;
   const out = new Array(s.bonds.length).fill(0);
   const dist = new Int32Array(n).fill(-1);
   const queue = new Int32Array(n);
-  const bridge = bridges(g, s.bonds.length);
+  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
   for (let k = 0; k < s.bonds.length; k++) {
     const { a, b } = s.bonds[k];
     if (bridge[k] || a === b || a < 0 || b < 0 || a >= n || b >= n) continue;
@@ -17897,31 +18219,6 @@ function bridges(g, m, keep) {
   }
   return isBridge;
 }
-function systems(rings, n) {
-  const parent = Int32Array.from({ length: n }, (_, i) => i);
-  const find = (x) => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  const inRing = new Uint8Array(n);
-  for (const r of rings) {
-    for (const a of r) {
-      inRing[a] = 1;
-      const ra = find(a);
-      const r0 = find(r[0]);
-      if (ra !== r0) parent[Math.max(ra, r0)] = Math.min(ra, r0);
-    }
-  }
-  const byRoot = /* @__PURE__ */ new Map();
-  for (let i = 0; i < n; i++) {
-    if (!inRing[i]) continue;
-    const root = find(i);
-    const list = byRoot.get(root);
-    if (list) list.push(i);
-    else byRoot.set(root, [i]);
-  }
-  return [...byRoot.values()].sort((p, q) => p[0] - q[0]);
-}
 var init_rings = __esm({
   "src/chem/graph/rings.ts"() {
     "use strict";
@@ -17938,7 +18235,8 @@ function aromaticBonds(s, rings, g) {
   const info = rings ?? ringInfo(s, graph);
   if (info.rings.length === 0) return out;
   const donation = new Int8Array(s.atoms.length).fill(NOT_PI);
-  for (let i = 0; i < s.atoms.length; i++) if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
+  for (let i = 0; i < s.atoms.length; i++)
+    if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
   const ringBonds3 = info.rings.map((r) => ringBondList(r, graph));
   const aromaticRing = info.rings.map((r) => huckel(r, donation));
   for (let i = 0; i < info.rings.length; i++) {
@@ -18056,8 +18354,12 @@ function invariantsWith(s, aromatic, graph, bridgeOf) {
   const g = graph ?? buildGraph(s);
   const bridge = bridgeOf ?? bridges(g, s.bonds.length);
   const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
-  const ring = new Array(n).fill(false);
-  for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (!bridge[k]) ring[i] = true;
+  const bondRing = smallestRings(s, g, bridge);
+  const ring = new Array(n).fill(0);
+  for (let i = 0; i < n; i++) {
+    for (const k of g.nbrBonds[i])
+      if (bondRing[k] > 0 && (ring[i] === 0 || bondRing[k] < ring[i])) ring[i] = bondRing[k];
+  }
   const aromaticAtom = new Array(n).fill(false);
   for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (arom[k]) aromaticAtom[i] = true;
   return s.atoms.map((a, i) => {
@@ -18068,7 +18370,7 @@ function invariantsWith(s, aromatic, graph, bridgeOf) {
     v = v * 32 + clamp(g.nbrs[i].length, 0, 31);
     v = v * 4 + clamp(a.radical, 0, 3);
     v = v * 2 + (aromaticAtom[i] ? 1 : 0);
-    v = v * 2 + (ring[i] ? 1 : 0);
+    v = v * 32 + clamp(ring[i], 0, 31);
     return v;
   });
 }
@@ -18086,7 +18388,13 @@ var init_invariants = __esm({
 
 // src/chem/graph/refine.ts
 function clonePartition(p) {
-  return { lab: p.lab.slice(), pos: p.pos.slice(), start: p.start.slice(), len: p.len.slice(), cells: p.cells };
+  return {
+    lab: p.lab.slice(),
+    pos: p.pos.slice(),
+    start: p.start.slice(),
+    len: p.len.slice(),
+    cells: p.cells
+  };
 }
 function copyPartition(from, to) {
   to.lab.set(from.lab);
@@ -18626,20 +18934,29 @@ function unionCsr(x, y) {
   return { n, offs, adj, code };
 }
 function isomorphic(a, b) {
+  return isomorphism(a, b).map;
+}
+function isomorphism(a, b, maxNodes) {
   let found = null;
-  findIsomorphisms(a, b, {
-    maxResults: 1,
+  const r = findIsomorphisms(a, b, {
+    maxNodes,
     onMapping: (m) => {
       found = m;
       return false;
     }
   });
-  return found;
+  return { map: found, decided: found !== null || r.complete };
 }
 function automorphisms(s, opts) {
   const colour = opts.colour ?? opts.colourA;
   const aromatic = opts.aromaticA ?? conjugatedRingBonds(s);
-  return findIsomorphisms(s, s, { ...opts, colourA: colour, colourB: colour, aromaticA: aromatic, aromaticB: aromatic });
+  return findIsomorphisms(s, s, {
+    ...opts,
+    colourA: colour,
+    colourB: colour,
+    aromaticA: aromatic,
+    aromaticB: aromatic
+  });
 }
 function validBonds(s) {
   const n = s.atoms.length;
@@ -18676,10 +18993,10 @@ var init_isomorphism = __esm({
       results = 0;
       budgetHit = false;
       maxHit = false;
-      maxNodes;
-      pool = [];
       root = null;
+      maxNodes;
       maxResults;
+      pool = [];
       /** `exhaustive`: still branching over key images. Returns NONE, FOUND or STOP. */
       run(p, exhaustive, depth = 0) {
         const n = this.n;
@@ -18713,9 +19030,7 @@ var init_isomorphism = __esm({
         for (let t = target; t < target + best; t++) {
           const v = lab[t];
           if (v >= n) ys.push(v);
-          else if (x < 0 || exhaustive && this.inKey[v] && !this.inKey[x] || v < x && this.inKey[v] === this.inKey[x]) {
-            if (!exhaustive || this.inKey[v] || x < 0) x = v;
-          }
+          else if ((!exhaustive || this.inKey[v]) && (x < 0 || v < x)) x = v;
         }
         ys.sort((u, v) => u - v);
         let any = NONE;
@@ -18864,6 +19179,7 @@ __export(graph_exports, {
   equivalenceClasses: () => equivalenceClasses,
   findIsomorphisms: () => findIsomorphisms,
   isomorphic: () => isomorphic,
+  isomorphism: () => isomorphism,
   molecularFormula: () => molecularFormula,
   ringInfo: () => ringInfo
 });
@@ -18916,7 +19232,8 @@ function unitStereo(unit2, bit, n) {
     return { kind: "tetrahedral", centre: unit2.atoms[0], ligands: [a, b, c, d], winding: bit ? "@@" : "@" };
   }
   const ends = [unit2.atoms[0], unit2.atoms[1]];
-  if (unit2.mode === "cistrans") return { kind: "double-bond", ends, refs: [a, c], relation: bit ? "trans" : "cis" };
+  if (unit2.mode === "cistrans")
+    return { kind: "double-bond", ends, refs: [a, c], relation: bit ? "trans" : "cis" };
   const subtype = unit2.kind === "biaryl" ? "biaryl" : "allene";
   return { kind: "axial", subtype, ends, ligands: [a, b, c, d], winding: bit ? "@@" : "@" };
 }
@@ -19014,7 +19331,11 @@ function unitGroup(p) {
         const u = units[i];
         const j = unitOfAtom[map[u.atoms[0]]];
         if (j < 0) return true;
-        const f = rebase(units[j], u.tokens.map((t) => mapToken(t, n, map)), 0);
+        const f = rebase(
+          units[j],
+          u.tokens.map((t) => mapToken(t, n, map)),
+          0
+        );
         if (f < 0) return true;
         perm[i] = j;
         flip2[i] = f;
@@ -19033,9 +19354,11 @@ function unitGroup(p) {
   return group;
 }
 function trivialOnUnits(p) {
-  const size = /* @__PURE__ */ new Map();
-  for (let i = 0; i < p.classes.length; i++) size.set(p.classes[i], (size.get(p.classes[i]) ?? 0) + 1);
-  return p.units.every((u) => !u.equivalentPair && u.atoms.every((a) => size.get(p.classes[a]) === 1));
+  if (p.units.some((u) => u.equivalentPair)) return false;
+  const classes = p.classes;
+  const size = new Int32Array(classes.length + 1);
+  for (let i = 0; i < classes.length; i++) size[classes[i]]++;
+  return p.units.every((u) => u.atoms.every((a) => size[classes[a]] === 1));
 }
 function signature(perm, flip2) {
   let s = "";
@@ -19152,7 +19475,8 @@ function chiralityOf(g, x, defined) {
     return { chiral: k < 0, witness: k };
   }
   let someAchiral = false;
-  for (let k = 0; k < g.perms.length && !someAchiral; k++) someAchiral = fixedCompletionExists(g, k, x, defined, true);
+  for (let k = 0; k < g.perms.length && !someAchiral; k++)
+    someAchiral = fixedCompletionExists(g, k, x, defined, true);
   if (!someAchiral) return { chiral: true, witness: -1 };
   if (!g.reflect.some((r) => r === 1)) return { chiral: false, witness: -1 };
   if (open.length > MAX_ENUMERATED_UNDEFINED) return { chiral: null, witness: -1 };
@@ -19237,7 +19561,7 @@ var init_isomers = __esm({
   }
 });
 
-// node_modules/openchemlib/dist/openchemlib.js
+// ../../work/main/node_modules/openchemlib/dist/openchemlib.js
 function _S(w) {
   let Y = w.length * 0.75, vt = w.length, ot, kt = 0, C1, jt, T1, u1;
   w.at(-1) === "=" && (Y--, w.at(-2) === "=" && Y--);
@@ -41243,7 +41567,7 @@ function Prt() {
 }
 var Kl, WS, tU, R9, $2, Yl, W8t, Qw, Xl, tI, Uw, eI, Zl, Wl, a2, Lw, sw, yw, lw, eU, _l, trt, Art, E8, nrt, X0, not, Pot, rot, iot, fot, Dot, uot, Qot, oot, Uot, Lot, sot, yot, lot, hot, Tot, cot, wot, got, dot, Bot, vot, Fot, kot;
 var init_openchemlib = __esm({
-  "node_modules/openchemlib/dist/openchemlib.js"() {
+  "../../work/main/node_modules/openchemlib/dist/openchemlib.js"() {
     Kl = class {
       copyMolecule(Y) {
         let vt = Y.getIDCodeAndCoordinates();
@@ -41759,7 +42083,7 @@ var init_masses = __esm({
 // src/chem/cip/mancude.ts
 function perceiveMancude(s, nbr, ord, mass) {
   const n = s.atoms.length;
-  const bond = /* @__PURE__ */ new Set();
+  const bond = new PairSet(n);
   const dupZ = new Array(n).fill(0);
   const dupMass = new Array(n).fill(0);
   if (!nbr.some((o, a) => ord[a].some((x, i) => x === 2 && o[i] > a))) return { bond, dupZ, dupMass };
@@ -41778,7 +42102,7 @@ function perceiveMancude(s, nbr, ord, mass) {
   }
   const piNbr = nbr.map((o, a) => pi[a] ? o.filter((b) => pi[b] && ring.has(key(n, a, b))) : []);
   const piRing = ringBonds2(n, piNbr);
-  for (const k of piRing) bond.add(k);
+  bond.addAll(piRing);
   for (let a = 0; a < n; a++) {
     if (!pi[a] || !piDouble(a)) continue;
     let sum = 0;
@@ -41802,7 +42126,7 @@ function key(n, a, b) {
   return a * n + b;
 }
 function ringBonds2(n, nbr) {
-  const out = /* @__PURE__ */ new Set();
+  const out = new PairSet(n);
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   let t = 0;
@@ -41839,9 +42163,33 @@ function ringBonds2(n, nbr) {
   }
   return out;
 }
+var PairSet;
 var init_mancude = __esm({
   "src/chem/cip/mancude.ts"() {
     "use strict";
+    PairSet = class {
+      table;
+      set;
+      size = 0;
+      constructor(n) {
+        this.table = n <= 512 ? new Uint8Array(n * n) : null;
+        this.set = this.table === null ? /* @__PURE__ */ new Set() : null;
+      }
+      has(k) {
+        return this.table !== null ? this.table[k] === 1 : this.set.has(k);
+      }
+      add(k) {
+        if (this.has(k)) return;
+        this.size++;
+        if (this.table !== null) this.table[k] = 1;
+        else this.set.add(k);
+      }
+      addAll(o) {
+        if (o.table !== null) {
+          for (let k = 0; k < o.table.length; k++) if (o.table[k] === 1) this.add(k);
+        } else for (const k of o.set) this.add(k);
+      }
+    };
   }
 });
 
@@ -41929,8 +42277,10 @@ function fixedByRing(g, e) {
 }
 function expandedValence(s, a, orders) {
   const at = s.atoms[a];
+  const z = at.atomicNumber;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53) return false;
   const v = orders.reduce((x, y) => x + y, 0) + at.hCount;
-  switch (at.atomicNumber) {
+  switch (z) {
     case 15:
     case 33:
       return v >= 5;
@@ -41951,10 +42301,34 @@ function invertibleNitrogen(g, centre, ligands) {
   if (at.atomicNumber !== 7 || at.charge !== 0 || !ligands.includes(-2)) return false;
   const nb = g.nbr[centre];
   if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
-  return !(nb.length === 3 && nb.every((b) => ringSizeThrough(g, centre, b, 64) > 0));
+  if (nb.length !== 3) return true;
+  for (const x of nb) {
+    const [p, q] = nb.filter((b) => b !== x);
+    if (!connectedWithout(g, p, q, centre, x)) return true;
+  }
+  return false;
+}
+function connectedWithout(g, p, q, skip1, skip2) {
+  const seen = /* @__PURE__ */ new Set([p, skip1, skip2]);
+  const stack = [p];
+  while (stack.length > 0) {
+    const v = stack.pop();
+    for (const w of g.nbr[v]) {
+      if (w === q) return true;
+      if (seen.has(w)) continue;
+      seen.add(w);
+      stack.push(w);
+    }
+  }
+  return false;
 }
 function ringSizeThrough(g, a, b, max) {
-  const dist = /* @__PURE__ */ new Map([[a, 0]]);
+  if (seenBuf.length < g.n) {
+    seenBuf = new Int32Array(g.n * 2);
+    stamp = 0;
+  }
+  const mark = ++stamp;
+  seenBuf[a] = mark;
   let frontier = [a];
   for (let d = 0; frontier.length > 0 && d < max - 1; d++) {
     const next = [];
@@ -41962,8 +42336,8 @@ function ringSizeThrough(g, a, b, max) {
       for (const y of g.nbr[x]) {
         if (x === a && y === b) continue;
         if (y === b) return d + 2;
-        if (dist.has(y)) continue;
-        dist.set(y, d + 1);
+        if (seenBuf[y] === mark) continue;
+        seenBuf[y] = mark;
         next.push(y);
       }
     }
@@ -41975,25 +42349,26 @@ function mancudeOf(g) {
   if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
   return g.mancude;
 }
-var CHALCOGEN_OR_N;
+var CHALCOGEN_OR_N, seenBuf, stamp;
 var init_graph2 = __esm({
   "src/chem/cip/graph.ts"() {
     "use strict";
     init_masses();
     init_mancude();
     CHALCOGEN_OR_N = /* @__PURE__ */ new Set([7, 8, 16, 34, 52]);
+    seenBuf = new Int32Array(256);
+    stamp = 0;
   }
 });
 
 // src/chem/cip/digraph.ts
-var H_ATOM, PHANTOM, DUPLICATE_MASS, NODE_BUDGET, CipNode, Digraph;
+var H_ATOM, PHANTOM, NODE_BUDGET, CipNode, Digraph;
 var init_digraph = __esm({
   "src/chem/cip/digraph.ts"() {
     "use strict";
     init_graph2();
     H_ATOM = -1;
     PHANTOM = -2;
-    DUPLICATE_MASS = (m) => m;
     NODE_BUDGET = 2e5;
     CipNode = class {
       constructor(id, atom, z, mass, depth, dist, dup, parent) {
@@ -42017,6 +42392,8 @@ var init_digraph = __esm({
       kids = null;
       /** Sorted branch lists per (came-from, rule level); see compare.ts. */
       sorted = null;
+      /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode). */
+      down = null;
       /** Auxiliary descriptor: undefined = not yet computed, null = none. */
       aux = void 0;
       auxBusy = false;
@@ -42043,7 +42420,7 @@ var init_digraph = __esm({
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
-        return new CipNode(this.nextId++, atom, g.z[atom], dup ? DUPLICATE_MASS(g.mass[atom]) : g.mass[atom], depth, dist, dup, parent);
+        return new CipNode(this.nextId++, atom, g.z[atom], g.mass[atom], depth, dist, dup, parent);
       }
       /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */
       phantom(parent) {
@@ -42162,19 +42539,43 @@ function descriptors(rk, x, fx) {
   }
   return out;
 }
-function pairs(entries, refClass) {
+function chiralLabel(rk, n) {
+  if (n.dup || n.atom < 0 || rk.value(RULE_4A, n) !== 2) return null;
+  const l = rk.aux(n);
+  return l !== null && isChiralLabel(l) ? l : null;
+}
+function orderedPairs(rk, x, fx, refClass, memo) {
+  const hit = memo.get(x);
+  if (hit) return hit;
   const seq = [];
-  let i = 0;
-  while (i < entries.length) {
-    let j = i;
-    let likes = 0;
-    while (j < entries.length && entries[j].group === entries[i].group) {
-      if (likeClass(entries[j].label) === refClass) likes++;
-      j++;
+  const q = [x];
+  const qf = [fx];
+  const own = (n) => {
+    const l = chiralLabel(rk, n);
+    return l === null ? 0 : likeClass(l) === refClass ? 2 : 1;
+  };
+  for (let i = 0; i < q.length; i++) {
+    const n = q[i];
+    const l = chiralLabel(rk, n);
+    if (l !== null) seq.push(likeClass(l) === refClass ? 1 : 0);
+    const s = rk.sorted(n, qf[i], RULE_4A);
+    const nodes = s.nodes.slice();
+    for (let a = 0; a < nodes.length; ) {
+      let b = a + 1;
+      while (b < nodes.length && s.tie[b]) b++;
+      if (b - a > 1) {
+        const run10 = nodes.slice(a, b);
+        run10.sort((u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)));
+        for (let k = a; k < b; k++) nodes[k] = run10[k - a];
+      }
+      a = b;
     }
-    for (let k = i; k < j; k++) seq.push(k - i < likes ? 1 : 0);
-    i = j;
+    for (const c of nodes) {
+      q.push(c);
+      qf.push(n);
+    }
   }
+  memo.set(x, seq);
   return seq;
 }
 function lexCompare(a, b) {
@@ -42182,21 +42583,24 @@ function lexCompare(a, b) {
   for (let i = 0; i < m; i++) if (a[i] !== b[i]) return a[i] - b[i];
   return a.length - b.length;
 }
-function bestPairs(entries) {
+function bestPairs(rk, x, fx) {
+  const entries = descriptors(rk, x, fx);
   if (entries.length === 0) return [];
   const first = entries[0].group;
-  let best = null;
+  const classes = /* @__PURE__ */ new Set();
   for (const e of entries) {
     if (e.group !== first) break;
-    const seq = pairs(entries, likeClass(e.label));
+    classes.add(likeClass(e.label));
+  }
+  let best = null;
+  for (const cls of classes) {
+    const seq = orderedPairs(rk, x, fx, cls, /* @__PURE__ */ new Map());
     if (best === null || lexCompare(seq, best) > 0) best = seq;
   }
   return best ?? [];
 }
 function compareRule4b(rk, x, fx, y, fy) {
-  const a = bestPairs(descriptors(rk, x, fx));
-  const b = bestPairs(descriptors(rk, y, fy));
-  const c = lexCompare(a, b);
+  const c = lexCompare(bestPairs(rk, x, fx), bestPairs(rk, y, fy));
   return c > 0 ? 1 : c < 0 ? -1 : 0;
 }
 var init_rule4b = __esm({
@@ -42212,7 +42616,7 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker, EMPTY;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
@@ -42254,6 +42658,8 @@ var init_compare = __esm({
        * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
        */
       mirror = false;
+      depth = 0;
+      pool = [];
       /** Is `n` the scope node or farther out on its branch? */
       inScope(n) {
         const sc = this.scope;
@@ -42320,30 +42726,46 @@ var init_compare = __esm({
         if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
         let c = this.value(rule2, x) - this.value(rule2, y);
         if (c !== 0) return c > 0 ? 1 : -1;
-        const qx = [x];
-        const qfx = [fx];
-        const qy = [y];
-        const qfy = [fy];
-        for (let i = 0; i < qx.length; i++) {
-          const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
-          const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
-          const m = Math.min(sx.length, sy.length);
-          for (let j = 0; j < m; j++) {
-            c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
-            if (c !== 0) return c > 0 ? 1 : -1;
-          }
-          if (sx.length !== sy.length && rule2 === RULE_1A) {
-            const longer = sx.length > sy.length ? sx : sy;
-            for (let j = m; j < longer.length; j++) {
-              if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
+        if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
+        const d = this.depth++;
+        let q = this.pool[d];
+        if (q === void 0) q = this.pool[d] = { x: [], fx: [], y: [], fy: [] };
+        const qx = q.x;
+        const qfx = q.fx;
+        const qy = q.y;
+        const qfy = q.fy;
+        qx.length = qfx.length = qy.length = qfy.length = 0;
+        qx.push(x);
+        qfx.push(fx);
+        qy.push(y);
+        qfy.push(fy);
+        try {
+          for (let i = 0; i < qx.length; i++) {
+            const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
+            const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
+            const m = Math.min(sx.length, sy.length);
+            for (let j = 0; j < m; j++) {
+              c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
+              if (c !== 0) return c > 0 ? 1 : -1;
+            }
+            if (sx.length !== sy.length && rule2 === RULE_1A) {
+              const longer = sx.length > sy.length ? sx : sy;
+              for (let j = m; j < longer.length; j++) {
+                if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
+              }
+            }
+            for (let j = 0; j < m; j++) {
+              const a = sx[j];
+              const b = sy[j];
+              if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+              qx.push(a);
+              qfx.push(qx[i]);
+              qy.push(b);
+              qfy.push(qy[i]);
             }
           }
-          for (let j = 0; j < m; j++) {
-            qx.push(sx[j]);
-            qfx.push(qx[i]);
-            qy.push(sy[j]);
-            qfy.push(qy[i]);
-          }
+        } finally {
+          this.depth--;
         }
         return 0;
       }
@@ -42358,6 +42780,16 @@ var init_compare = __esm({
       }
       /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
       sorted(node, from, level2) {
+        if (node.dup || node.atom < 0) return EMPTY;
+        const plain = from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level2 < RULE_3 || this.inScope(node));
+        if (plain) {
+          if (node.down === null) node.down = [];
+          const hit2 = node.down[level2];
+          if (hit2 !== void 0) return hit2;
+          const out2 = this.sortAt(node, from, level2);
+          node.down[level2] = out2;
+          return out2;
+        }
         const hidden = level2 >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
         const mirrored2 = this.mirror && level2 >= RULE_52 ? 2 : 0;
         const num = ((from === null ? 0 : from.id + 1) * 16 + level2) * 4 + hidden + mirrored2;
@@ -42365,10 +42797,30 @@ var init_compare = __esm({
         if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
         const hit = node.sorted.get(key3);
         if (hit) return hit;
+        const out = this.sortAt(node, from, level2);
+        node.sorted.set(key3, out);
+        return out;
+      }
+      sortAt(node, from, level2) {
         let out;
         if (level2 === 0) {
-          const nodes = this.dg.branches(node, from);
-          out = this.sortRun(nodes, 0, nodes.length, node, 0, { nodes: nodes.slice(), tie: nodes.map(() => true) });
+          const nodes = this.dg.branches(node, from).slice();
+          for (let i = 1; i < nodes.length; i++) {
+            const v = nodes[i];
+            let j = i - 1;
+            while (j >= 0 && nodes[j].z < v.z) {
+              nodes[j + 1] = nodes[j];
+              j--;
+            }
+            nodes[j + 1] = v;
+          }
+          out = { nodes, tie: nodes.map(() => false) };
+          for (let i = 0; i < nodes.length; ) {
+            let j = i + 1;
+            while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
+            if (j - i > 1) this.sortRun(nodes, i, j, node, 0, out);
+            i = j;
+          }
         } else {
           const base = this.sorted(node, from, level2 - 1);
           if (!this.active[level2] || !base.tie.some((t) => t)) out = base;
@@ -42382,7 +42834,6 @@ var init_compare = __esm({
             }
           }
         }
-        node.sorted.set(key3, out);
         return out;
       }
       /**
@@ -42390,6 +42841,16 @@ var init_compare = __esm({
        * first, writing them and their ties into `out` at the same places.
        */
       sortRun(nodes, i, j, centre, rule2, out) {
+        if (j - i === 2) {
+          const a = nodes[i];
+          const b = nodes[i + 1];
+          const c = this.compareRule(rule2, a, centre, b, centre);
+          out.nodes[i] = c < 0 ? b : a;
+          out.nodes[i + 1] = c < 0 ? a : b;
+          out.tie[i] = false;
+          out.tie[i + 1] = c === 0;
+          return out;
+        }
         const run10 = nodes.slice(i, j);
         const k = run10.length;
         const m = new Array(k * k).fill(0);
@@ -42417,6 +42878,7 @@ var init_compare = __esm({
         return out;
       }
     };
+    EMPTY = { nodes: [], tie: [] };
   }
 });
 
@@ -42878,12 +43340,19 @@ function normalize(s) {
       return { ...e, centre: fromInput[e.centre], ligands: [a3, b2, c2, d2] };
     }
     if (e.kind === "double-bond") {
-      return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], refs: [lig(e.refs[0]), lig(e.refs[1])] };
+      return {
+        ...e,
+        ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]],
+        refs: [lig(e.refs[0]), lig(e.refs[1])]
+      };
     }
     const [a, b, c, d] = e.ligands.map(lig);
     return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], ligands: [a, b, c, d] };
   });
-  const groups = s.groups.map((g) => ({ ...g, atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x]) }));
+  const groups = s.groups.map((g) => ({
+    ...g,
+    atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x])
+  }));
   return { structure: { ...s, atoms, bonds, stereo, groups }, toInput, fromInput, folded };
 }
 function extractAtoms(s, atoms) {
@@ -42899,7 +43368,11 @@ function extractAtoms(s, atoms) {
       stereo.push({ ...e, centre: index[e.centre], ligands: [a, b, c, d] });
     } else if (e.kind === "double-bond") {
       if (!e.ends.every(keep) || !e.refs.every(keep)) continue;
-      stereo.push({ ...e, ends: [index[e.ends[0]], index[e.ends[1]]], refs: [lig(e.refs[0]), lig(e.refs[1])] });
+      stereo.push({
+        ...e,
+        ends: [index[e.ends[0]], index[e.ends[1]]],
+        refs: [lig(e.refs[0]), lig(e.refs[1])]
+      });
     } else {
       if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
       const [a, b, c, d] = e.ligands.map(lig);
@@ -43017,7 +43490,8 @@ var init_perceive_bonds = __esm({
 function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
   const atom = s.atoms[i];
   const z = atom.atomicNumber;
-  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50) return null;
+  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50)
+    return null;
   if (atom.radical !== 0 || atom.hCount > 1) return null;
   const nb = g.nbrs[i];
   const nbB = g.nbrBonds[i];
@@ -43152,7 +43626,8 @@ function applyInputStereo(s, units, unitOfAtom, invertible, remarks) {
       continue;
     }
     const where2 = e.kind === "tetrahedral" ? atomName(s, e.centre) : `the ${atomName(s, e.ends[0])}–${atomName(s, e.ends[1])} unit`;
-    if (s.dimension !== 3) remarks.push(`configuration drawn on ${where2}, which is not a stereogenic unit; ignored`);
+    if (s.dimension !== 3)
+      remarks.push(`configuration drawn on ${where2}, which is not a stereogenic unit; ignored`);
   }
   return drawnN;
 }
@@ -43216,7 +43691,12 @@ function survivesSymmetry(s, u, classes) {
     colour,
     maxResults: 2e3,
     onMapping: (map) => {
-      if (rebase(u, u.tokens.map((t) => mapToken(t, n, map)), 0) === 1) inverted = true;
+      if (rebase(
+        u,
+        u.tokens.map((t) => mapToken(t, n, map)),
+        0
+      ) === 1)
+        inverted = true;
       return !inverted;
     }
   });
@@ -43232,6 +43712,56 @@ var init_perceive_rescue = __esm({
 
 // src/chem/perceive-bridges.ts
 function bridgeCouplings(s, g, rings, units) {
+  return [...bridgedPairs(s, g, rings, units), ...fusedPairs(g, rings, units)];
+}
+function fusedPairs(g, rings, units) {
+  const out = [];
+  const unitAt = /* @__PURE__ */ new Map();
+  units.forEach((u, k) => {
+    if (u.kind === "tetrahedral") unitAt.set(u.atoms[0], k);
+  });
+  for (const [a, ka] of unitAt) {
+    for (let i = 0; i < g.nbrs[a].length; i++) {
+      const b = g.nbrs[a][i];
+      const kb = unitAt.get(b);
+      if (kb === void 0 || b < a) continue;
+      const r = rings.smallestRingOfBond[g.nbrBonds[a][i]];
+      if (r !== 3 && r !== 4) continue;
+      const through = rings.rings.filter((ring) => adjacentIn(ring, a, b));
+      if (through.length !== 2) continue;
+      through.sort((x, y) => x.length - y.length);
+      const [r1, r2] = [through[0].length, through[1].length];
+      if (!(r1 === 3 && r2 <= 6 || r1 === 4 && r2 === 4)) continue;
+      const a1 = ringNeighbour(through[0], a, b);
+      const a22 = ringNeighbour(through[1], a, b);
+      const b1 = ringNeighbour(through[0], b, a);
+      const b2 = ringNeighbour(through[1], b, a);
+      const ua = units[ka];
+      const ub = units[kb];
+      const xa = ua.tokens.find((t) => t !== b && t !== a1 && t !== a22);
+      const xb = ub.tokens.find((t) => t !== a && t !== b1 && t !== b2);
+      if (xa === void 0 || xb === void 0) continue;
+      const pa = permutationParity2([xa, b, a1, a22], ua.tokens);
+      const pb = permutationParity2([xb, a, b1, b2], ub.tokens);
+      if (pa < 0 || pb < 0) continue;
+      out.push({ a: ka, b: kb, c: 1 ^ pa ^ pb });
+    }
+  }
+  return out;
+}
+function adjacentIn(ring, a, b) {
+  const i = ring.indexOf(a);
+  if (i < 0) return false;
+  const L = ring.length;
+  return ring[(i + 1) % L] === b || ring[(i + L - 1) % L] === b;
+}
+function ringNeighbour(ring, a, b) {
+  const i = ring.indexOf(a);
+  const L = ring.length;
+  const next = ring[(i + 1) % L];
+  return next === b ? ring[(i + L - 1) % L] : next;
+}
+function bridgedPairs(s, g, rings, units) {
   let possible = 0;
   for (const u of units) {
     if (u.kind !== "tetrahedral") continue;
@@ -43297,7 +43827,8 @@ function threeBridges(a, b, ringNbrs) {
     for (let j = i + 1; j < paths.length; j++) {
       if (!disjoint(paths[i], paths[j])) continue;
       for (let k = j + 1; k < paths.length; k++) {
-        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k])) return [paths[i], paths[j], paths[k]];
+        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k]))
+          return [paths[i], paths[j], paths[k]];
       }
     }
   }
@@ -43334,8 +43865,8 @@ function perceive(s) {
       invertibleAll.add(i);
       continue;
     }
-    const pairs2 = equalPairs(v.tokens, tokenClass, [i, i]);
-    if (pairs2 === null) continue;
+    const pairs = equalPairs(v.tokens, tokenClass, [i, i]);
+    if (pairs === null) continue;
     drafts.push({
       kind: "tetrahedral",
       mode: "parity",
@@ -43343,13 +43874,13 @@ function perceive(s) {
       tokens: v.tokens,
       defined: false,
       bit: 0,
-      equivalentPair: pairs2.length > 0,
-      pairs: pairs2
+      equivalentPair: pairs.length > 0,
+      pairs
     });
   }
   for (const c of bondCandidates(s, graph, rings, aromaticBond)) {
-    const pairs2 = equalPairs(c.tokens, tokenClass, c.ends, true);
-    if (pairs2 === null) continue;
+    const pairs = equalPairs(c.tokens, tokenClass, c.ends, true);
+    if (pairs === null) continue;
     drafts.push({
       kind: c.kind,
       mode: c.mode,
@@ -43357,13 +43888,15 @@ function perceive(s) {
       tokens: c.tokens,
       defined: false,
       bit: 0,
-      equivalentPair: pairs2.length > 0,
-      pairs: pairs2
+      equivalentPair: pairs.length > 0,
+      pairs
     });
   }
   for (const e of s.stereo) {
     if (e.kind !== "axial" || e.subtype !== "biaryl") continue;
-    const t = e.ligands.map((x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1]));
+    const t = e.ligands.map(
+      (x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])
+    );
     drafts.push({
       kind: "biaryl",
       mode: "parity",
@@ -43407,7 +43940,7 @@ function perceive(s) {
     if (ua.defined && ub.defined && (ua.bit ^ ub.bit) !== c.c) {
       const name = (u) => `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
       remarks.push(
-        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are bridgeheads of a small bridged ring system, which fixes their relative configuration`
+        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are the bridgeheads or fusion atoms of a small ring system, which fixes their relative configuration`
       );
     }
   }
@@ -43430,7 +43963,8 @@ function perceive(s) {
 function equalPairs(tokens2, cls, anchors, perEnd = false) {
   const out = [];
   if (perEnd) {
-    for (const k of [0, 2]) if (cls(tokens2[k]) === cls(tokens2[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens2[k] });
+    for (const k of [0, 2])
+      if (cls(tokens2[k]) === cls(tokens2[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens2[k] });
     return out;
   }
   const c = tokens2.map(cls);
@@ -43533,7 +44067,8 @@ function mirrorFacts(a) {
   let explanation;
   if (named.length > 0) {
     explanation = `achiral: mirror plane through ${named.map((i) => atomName(s, i)).join(", ")}`;
-    if (bondNames.length > 0) explanation += ` and the middle of the ${bondNames.join(" and ")} bond${bondNames.length > 1 ? "s" : ""}`;
+    if (bondNames.length > 0)
+      explanation += ` and the middle of the ${bondNames.join(" and ")} bond${bondNames.length > 1 ? "s" : ""}`;
   } else if (bondNames.length > 0) {
     explanation = `achiral: mirror plane or inversion centre at the middle of the ${bondNames.join(" and ")} bond${bondNames.length > 1 ? "s" : ""}`;
   } else {
@@ -43557,9 +44092,14 @@ function listStereoisomers(a, max) {
   const fully = a.defined.every((d) => d === 1);
   const inputCanon = fully ? canonicalState(group, a.state) : null;
   return enumerateStereoisomers(group, m, max).map(({ state, chiral }) => {
-    const stereo = p.units.flatMap((u, k) => stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : []);
+    const stereo = p.units.flatMap(
+      (u, k) => stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : []
+    );
     const t = { ...s, stereo, groups: [] };
-    const labels = labelUnits(t).map((r) => ({ atoms: r.atoms.map((x) => s.atoms[x].inputNumber), label: r.label }));
+    const labels = labelUnits(t).map((r) => ({
+      atoms: r.atoms.map((x) => s.atoms[x].inputNumber),
+      label: r.label
+    }));
     labels.sort((x, y) => x.atoms[0] - y.atoms[0]);
     return {
       smiles: writeSmiles(t),
@@ -43596,7 +44136,8 @@ function analyse(input) {
       );
     }
   }
-  if (!group.complete) p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
+  if (!group.complete)
+    p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
   const chirality = chiralityOf(group, state, defined);
   return { norm, p, group, state, defined, reported, chirality };
 }
@@ -43632,7 +44173,12 @@ function describe(input, opts = {}) {
   const components = componentFacts(a);
   const facts = {
     stereocenters: units.filter((u) => u.kind === "tetrahedral").map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
-    stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({ atoms: [u.atoms[0], u.atoms[1]], label: u.label, kind: u.kind, defined: u.defined })),
+    stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({
+      atoms: [u.atoms[0], u.atoms[1]],
+      label: u.label,
+      kind: u.kind,
+      defined: u.defined
+    })),
     units,
     chiral,
     meso,
@@ -43640,14 +44186,19 @@ function describe(input, opts = {}) {
     stereoisomers,
     mirror: mirrorFacts(a),
     enhanced: enhancedFacts(a),
-    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({ atom: s.atoms[i].inputNumber, drawnWithStereo: true })),
+    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({
+      atom: s.atoms[i].inputNumber,
+      drawnWithStereo: true
+    })),
     components,
     constitutionKey: constitutionKey(s),
     formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice()
   };
   if (p.invertibleNitrogens.length > 0 && units.length === 0) {
-    facts.remarks.push("the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre");
+    facts.remarks.push(
+      "the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre"
+    );
   }
   if (opts.listIsomers) facts.stereoisomerList = listStereoisomers(a, opts.maxIsomers ?? 64);
   return facts;
@@ -43692,12 +44243,17 @@ function mirrorFixed(g, h, x) {
 }
 function enhancedFacts(a) {
   const s = a.p.structure;
-  const groups = s.groups.map((g) => ({ type: g.type, id: g.id, atoms: g.atoms.map((x) => s.atoms[x].inputNumber) }));
+  const groups = s.groups.map((g) => ({
+    type: g.type,
+    id: g.id,
+    atoms: g.atoms.map((x) => s.atoms[x].inputNumber)
+  }));
   const definedParity = a.p.units.filter((u, k) => u.defined && u.mode === "parity" && a.reported[k]);
   if (definedParity.length === 0 && !a.p.units.some((u) => u.defined)) return { groups, meaning: "none" };
   if (definedParity.length === 0) return { groups, meaning: "absolute" };
   const member = /* @__PURE__ */ new Map();
-  for (const g of s.groups) for (const x of g.atoms) member.set(x, g.type === "abs" ? "abs" : `${g.type}${g.id}`);
+  for (const g of s.groups)
+    for (const x of g.atoms) member.set(x, g.type === "abs" ? "abs" : `${g.type}${g.id}`);
   const kinds = new Set(definedParity.map((u) => member.get(u.atoms[0]) ?? "abs"));
   if (s.groups.length === 0) return { groups, meaning: s.chiralFlag === false ? "relative" : "absolute" };
   const list = [...kinds];
@@ -43771,7 +44327,9 @@ function otherDifferences(a, b) {
   const left = b.others.slice();
   const onlyInA = [];
   for (const o of a.others) {
-    const j = left.findIndex((x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === "identical"));
+    const j = left.findIndex(
+      (x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === "identical")
+    );
     if (j >= 0) left.splice(j, 1);
     else onlyInA.push(o.smiles);
   }
@@ -43788,7 +44346,11 @@ function relate(sa, sb) {
   const iso = isomorphic(pa.p.structure, pb.p.structure);
   if (!iso) {
     const same = molecularFormula(pa.p.structure) === molecularFormula(pb.p.structure);
-    return same ? { ...base, relation: "constitutional-isomers", explanation: `same molecular formula, different constitution${salt}` } : { ...base, relation: "different-compounds", explanation: `different molecular formulas${salt}` };
+    return same ? {
+      ...base,
+      relation: "constitutional-isomers",
+      explanation: `same molecular formula, different constitution${salt}`
+    } : { ...base, relation: "different-compounds", explanation: `different molecular formulas${salt}` };
   }
   const nA = pa.p.structure.atoms.length;
   const nB = pb.p.structure.atoms.length;
@@ -43799,7 +44361,11 @@ function relate(sa, sb) {
   let open = false;
   pa.p.units.forEach((u, i) => {
     const j = pb.p.unitOfAtom[iso[u.atoms[0]]];
-    const bit = j < 0 ? -1 : rebase(pb.p.units[j], u.tokens.map((t) => mapToken(t, nA, iso, nB)), u.bit);
+    const bit = j < 0 ? -1 : rebase(
+      pb.p.units[j],
+      u.tokens.map((t) => mapToken(t, nA, iso, nB)),
+      u.bit
+    );
     if (bit < 0) {
       if (pa.reported[i]) open = true;
       return;
@@ -43845,7 +44411,12 @@ function relate(sa, sb) {
         differingUnits2.push(unitFact(j, fromA[j]));
       }
     }
-    return { ...base, relation: "enantiomers", differingUnits: differingUnits2, explanation: `mirror images that are not superimposable${salt}` };
+    return {
+      ...base,
+      relation: "enantiomers",
+      differingUnits: differingUnits2,
+      explanation: `mirror images that are not superimposable${salt}`
+    };
   }
   let best = [];
   let bestH = 0;
@@ -43880,7 +44451,8 @@ var init_relate = __esm({
     init_smiles2();
     labelMap = (a) => {
       const m = /* @__PURE__ */ new Map();
-      for (const r of labelUnits(a.p.structure)) if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
+      for (const r of labelUnits(a.p.structure))
+        if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
       return m;
     };
   }
@@ -44070,7 +44642,7 @@ function finish(out, signs, problem) {
     seen.set(it.locant, it.offset);
   }
   const stars = out.items.filter((it) => it.relativeStar).length;
-  const pairs2 = out.items.filter((it) => it.pair).length;
+  const pairs = out.items.filter((it) => it.pair).length;
   const chiralItems = out.items.filter(
     (it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P"
   );
@@ -44080,22 +44652,22 @@ function finish(out, signs, problem) {
       "some descriptors carry * and others do not"
     );
   }
-  if (pairs2 > 0 && pairs2 < chiralItems.length) {
+  if (pairs > 0 && pairs < chiralItems.length) {
     out.remarks.push(
       "RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate"
     );
   }
-  const racemic = out.prefixes.includes("rac") || pairs2 > 0 || out.rotationSign === "±" || out.fischer === "DL";
+  const racemic = out.prefixes.includes("rac") || pairs > 0 || out.rotationSign === "±" || out.fischer === "DL";
   const relative = out.prefixes.includes("rel") || stars > 0;
   if (racemic && relative) {
     problem(0, "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed; P-93.1.3 uses one of them");
   }
-  if (out.prefixes.includes("rel") && pairs2 > 0)
+  if (out.prefixes.includes("rel") && pairs > 0)
     problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
   if (out.prefixes.length > 0 && out.items.length === 0) {
     problem(0, `'${out.prefixes[0]}-' must be followed by descriptors such as (1R,2S)`);
   }
-  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs2 === 0) {
+  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs === 0) {
     const it = chiralItems[0];
     problem(it.offset, "(±) marks a racemate but the descriptors are absolute; write (…RS,…SR) or rac-(…)");
   }
@@ -44177,14 +44749,14 @@ function compareDescriptors(parsed, units, options = {}) {
   if (mapped && numeric) {
     result.method = "per-locant";
     const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
-    const pairs2 = [];
+    const pairs = [];
     for (const it of parsed.items) {
       const u = byLocant(Number(it.locant));
       if (!u) result.notStereoUnits.push(it.locant);
       else if (!u.defined || u.label === null) result.undefinedAt.push(it.locant);
-      else pairs2.push({ it, u });
+      else pairs.push({ it, u });
     }
-    const mismatchesFor = (invert) => pairs2.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
+    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
       locant: it.locant,
       declared: it.pair ?? it.label + (it.axial ? "a" : ""),
       computed: u.label,
@@ -44194,7 +44766,7 @@ function compareDescriptors(parsed, units, options = {}) {
     const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
     result.matchedInverted = mayInvert && inverted2.length < direct2.length;
     result.mismatches = result.matchedInverted ? inverted2 : direct2;
-    const cited = new Set(pairs2.map((p) => p.u));
+    const cited = new Set(pairs.map((p) => p.u));
     for (const u of defined) {
       if (!cited.has(u)) {
         result.unlisted.push({
@@ -45500,7 +46072,20 @@ var init_checks = __esm({
 });
 
 // src/registry/files.ts
+import {
+  closeSync,
+  constants,
+  fstatSync,
+  lstatSync,
+  openSync,
+  readdirSync,
+  readSync,
+  realpathSync,
+  statSync
+} from "node:fs";
 var MAX_FILE_BYTES = 8 * 1024 * 1024;
+var UTF8 = new TextDecoder("utf-8", { fatal: true });
+var OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
 
 // src/registry/parse.ts
 var import_yaml2 = __toESM(require_dist(), 1);
@@ -45553,14 +46138,64 @@ var DEFAULT_SOURCES = Object.freeze({
 });
 
 // src/audit/engine.ts
+function heavyAtomCandidates(formula) {
+  const bases = [];
+  const sign = formula.endsWith("+") || formula.endsWith("-");
+  if (!sign) bases.push(formula);
+  else {
+    const body = formula.slice(0, -1);
+    const digits = /\d*$/.exec(body)[0];
+    const prefix = body.slice(0, body.length - digits.length);
+    const count2 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
+    for (let i = 0; i <= digits.length; i++) {
+      const own = digits.slice(0, i);
+      if (count2(own) && count2(digits.slice(i))) bases.push(prefix + own);
+    }
+  }
+  return [...new Set(bases.map((b) => b.replace(/H(?![a-z])\d*/g, "")))];
+}
+function heavyFormula(elements, wildcards) {
+  const counts = /* @__PURE__ */ new Map();
+  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
+  const order = [...counts.keys()].sort((x, y) => {
+    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
+    return x < y ? -1 : x > y ? 1 : 0;
+  });
+  let out = "";
+  for (const e of order) {
+    const c = counts.get(e);
+    out += c === 1 ? e : `${e}${c}`;
+  }
+  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
+  return out;
+}
 async function defaultEngine() {
   const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
   const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
+  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
   return {
     readStructure: (text, options) => chem.readStructure(text, options),
     describe: (s) => chem.describe(s),
     relate: (a, b) => chem.relate(a, b),
-    formula: (s) => graph.molecularFormula(s)
+    formula: (s) => graph.molecularFormula(s),
+    smilesHeavyAtoms: (smiles) => {
+      let start = 0;
+      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
+      let g;
+      try {
+        g = syntax.parseSmilesGraph(smiles, start);
+      } catch {
+        return null;
+      }
+      if ("error" in g) return null;
+      const heavy = [];
+      let wildcards = 0;
+      for (const a of g.atoms) {
+        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
+        else if (a.atomicNumber !== 1) heavy.push(a.element);
+      }
+      return heavyFormula(heavy, wildcards);
+    }
   };
 }
 
@@ -45787,7 +46422,7 @@ var package_default = {
   scripts: {
     build: "tsc -p tsconfig.build.json",
     typecheck: "tsc -p tsconfig.json --noEmit",
-    demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry",
+    demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
     test: "vitest run",
     bench: "node --import tsx bench/run.ts",
     lint: "eslint .",
@@ -45850,33 +46485,63 @@ function buildRegistryView(records, cache2, underReview) {
     entries.push(entry);
     sourceOf.set(entry, loaded);
   }
-  const formula = cache2.engine.formula?.bind(cache2.engine);
-  let index = null;
-  const indexKey = (e) => {
-    if (!formula) return e.main.facts?.constitutionKey;
+  const engine = cache2.engine;
+  const formula = engine.formula?.bind(engine);
+  const quick = formula ? engine.smilesHeavyAtoms?.bind(engine) : void 0;
+  const formulaOf = /* @__PURE__ */ new Map();
+  const fullFormula = (e) => {
+    if (formulaOf.has(e)) return formulaOf.get(e);
+    let f;
     const read = cache2.read(sourceOf.get(e));
-    if (!read.structure) return void 0;
-    try {
-      return formula(read.structure);
-    } catch {
-      return e.main.facts?.constitutionKey === void 0 ? void 0 : formulaPart(e.main.facts.constitutionKey);
+    if (read.structure) {
+      try {
+        f = formula(read.structure);
+      } catch {
+        f = e.main.facts?.constitutionKey === void 0 ? void 0 : formulaPart(e.main.facts.constitutionKey);
+      }
     }
+    formulaOf.set(e, f);
+    return f;
   };
+  const indexKeys = (e) => {
+    if (!formula) {
+      const k = e.main.facts?.constitutionKey;
+      return k === void 0 ? [] : [k];
+    }
+    if (quick) {
+      const main = sourcesOf(sourceOf.get(e)).main;
+      const fromSyntax = main?.format === "smiles" && main.text !== null ? quick(main.text) : null;
+      if (fromSyntax !== null) return [fromSyntax];
+    }
+    const f = fullFormula(e);
+    return f === void 0 ? [] : quick ? heavyAtomCandidates(f) : [f];
+  };
+  const lookupKeys = (key3) => !formula ? [key3] : !quick ? [formulaPart(key3)] : heavyAtomCandidates(formulaPart(key3));
+  let index = null;
+  const order = /* @__PURE__ */ new Map();
   return {
     entries,
     withConstitution(key3) {
       if (index === null) {
         index = /* @__PURE__ */ new Map();
-        for (const e of entries) {
-          const k = indexKey(e);
-          if (k === void 0) continue;
-          const list = index.get(k);
-          if (list) list.push(e);
-          else index.set(k, [e]);
-        }
+        entries.forEach((e, i) => {
+          order.set(e, i);
+          for (const k of indexKeys(e)) {
+            const list = index.get(k);
+            if (list) list.push(e);
+            else index.set(k, [e]);
+          }
+        });
       }
-      const hits = index.get(formula ? formulaPart(key3) : key3) ?? [];
-      return formula ? hits.filter((e) => e.main.facts?.constitutionKey === key3) : hits;
+      const keys = lookupKeys(key3);
+      let hits = index.get(keys[0]) ?? [];
+      if (keys.length > 1) {
+        const all = new Set(keys.flatMap((k) => index.get(k) ?? []));
+        hits = [...all].sort((a, b) => order.get(a) - order.get(b));
+      }
+      if (!formula) return hits;
+      const wanted = formulaPart(key3);
+      return hits.filter((e) => fullFormula(e) === wanted && e.main.facts?.constitutionKey === key3);
     }
   };
 }
@@ -46411,13 +47076,19 @@ import { parentPort, workerData } from "node:worker_threads";
 function serveWorker(handler) {
   const port = parentPort;
   if (!port) throw new Error("serveWorker must run inside a worker thread");
+  const { user, progress: shared } = workerData;
+  const progress = new Int32Array(shared);
   let chain = Promise.resolve();
   port.on("message", (msg) => {
     chain = chain.then(async () => {
+      const results = [];
       for (const job of msg.jobs) {
-        const result = await handler(job.item, workerData);
-        port.postMessage({ index: job.index, result });
+        Atomics.store(progress, 0, job.index);
+        results.push([job.index, await handler(job.item, user)]);
+        Atomics.add(progress, 1, 1);
       }
+      Atomics.store(progress, 0, -1);
+      port.postMessage({ results });
     });
   });
   port.postMessage({ ready: true });

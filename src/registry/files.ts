@@ -2,7 +2,18 @@
  * Files of a registry on disk: finding record files, reading text safely (binary / non-UTF-8 / oversized files
  * are reported, not thrown), and resolving molfile paths so that they never leave the registry root.
  */
-import { lstatSync, readdirSync, readFileSync, realpathSync, statSync, type Dirent } from 'node:fs';
+import {
+  closeSync,
+  constants,
+  fstatSync,
+  lstatSync,
+  openSync,
+  readdirSync,
+  readSync,
+  realpathSync,
+  statSync,
+  type Dirent,
+} from 'node:fs';
 import { isAbsolute, join, relative, resolve, sep } from 'node:path';
 
 /** Record files larger than this are refused (a record is a few hundred bytes; molfiles a few hundred kB). */
@@ -12,22 +23,53 @@ const RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
 
 export type TextResult = { ok: true; text: string } | { ok: false; error: string };
 
+const UTF8 = new TextDecoder('utf-8', { fatal: true });
+/** Opening never waits (a FIFO among the records would otherwise block); fstat then refuses it. */
+const OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
+
+/** The bytes of a regular file of at most MAX_FILE_BYTES: one open, one fstat, reads, one close. */
+function readRegularFile(abs: string): { ok: true; bytes: Buffer } | { ok: false; error: string } {
+  const fd = openSync(abs, OPEN_FLAGS);
+  try {
+    const st = fstatSync(fd);
+    if (!st.isFile()) return { ok: false, error: 'is not a regular file' };
+    if (st.size > MAX_FILE_BYTES)
+      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
+    const chunks: Buffer[] = [];
+    let total = 0;
+    let buf = Buffer.allocUnsafe(st.size + 1);
+    for (;;) {
+      const n = readSync(fd, buf, 0, buf.length, null);
+      if (n === 0) break;
+      chunks.push(buf.subarray(0, n));
+      total += n;
+      if (total > MAX_FILE_BYTES)
+        return {
+          ok: false,
+          error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`,
+        };
+      buf = Buffer.allocUnsafe(64 * 1024);
+    }
+    return { ok: true, bytes: chunks.length === 1 ? chunks[0]! : Buffer.concat(chunks, total) };
+  } finally {
+    closeSync(fd);
+  }
+}
+
 /** Reads a file as UTF-8 text; a byte-order mark is dropped. */
 export function readTextFile(abs: string): TextResult {
   let bytes: Buffer;
   try {
-    const st = statSync(abs);
-    if (!st.isFile()) return { ok: false, error: 'is not a regular file' };
-    if (st.size > MAX_FILE_BYTES)
-      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
-    bytes = readFileSync(abs);
+    const read = readRegularFile(abs);
+    if (!read.ok) return read;
+    bytes = read.bytes;
   } catch (e) {
     return { ok: false, error: `cannot be read (${(e as NodeJS.ErrnoException).code ?? String(e)})` };
   }
   if (bytes.includes(0)) return { ok: false, error: 'is a binary file, not text' };
   let text: string;
   try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+    text = UTF8.decode(bytes);
   } catch {
     return { ok: false, error: 'is not valid UTF-8 text' };
   }
@@ -36,6 +78,11 @@ export function readTextFile(abs: string): TextResult {
 
 /** Forward-slash path of `abs` relative to `root`. */
 export function relativeTo(root: string, abs: string): string {
+  // the common case, a normalized path below the root, without path.relative
+  if (abs.startsWith(root) && abs[root.length] === sep && !abs.includes(`${sep}.`) && !abs.endsWith(sep)) {
+    const rest = abs.slice(root.length + 1);
+    if (rest !== '' && !rest.includes(`${sep}${sep}`)) return sep === '/' ? rest : rest.split(sep).join('/');
+  }
   return relative(root, abs).split(sep).join('/');
 }
 

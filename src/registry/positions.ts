@@ -25,6 +25,11 @@ export class PositionMap implements FieldPositions {
   get size(): number {
     return this.map.size;
   }
+
+  /** Every known path with its position, in document order. */
+  entries(): [string, { line: number; column: number }][] {
+    return [...this.map];
+  }
 }
 
 /** Line of a field, falling back to the nearest ancestor present; null when nothing is known. */
