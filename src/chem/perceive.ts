@@ -102,15 +102,17 @@ export function perceive(s: Structure): Perception {
     const t = e.ligands.map((x, k) =>
       x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1]),
     );
+    const tokens: [number, number, number, number] = [t[0], t[1], t[2], t[3]];
+    const pairs = equalPairs(tokens, tokenClass, e.ends, true) ?? [];
     drafts.push({
       kind: 'biaryl',
       mode: 'parity',
       atoms: [...e.ends],
-      tokens: [t[0], t[1], t[2], t[3]],
+      tokens,
       defined: false,
       bit: 0,
-      equivalentPair: false,
-      pairs: [],
+      equivalentPair: pairs.length > 0,
+      pairs,
     });
   }
 
