@@ -49,6 +49,7 @@ const SECTIONS: [string, Section][] = [
   ['bulk', async (ctx) => (await import('./bulk.js')).benchBulk(ctx)],
   ['cip', async (ctx) => (await import('./cip.js')).benchCip(ctx)],
   ['action', async (ctx) => (await import('./action.js')).benchAction(ctx)],
+  ['bulk-memory', async (ctx) => (process.argv.includes('bulk-memory') ? (await import('./bulk.js')).benchBulkMemory(ctx) : console.log('only when asked: npm run bench -- bulk-memory'))],
 ];
 
 void main();

@@ -102,6 +102,10 @@ export function makeVocabulary(
   };
 }
 
+/** Distinct not-understood words kept by name; the rest are counted under OTHER_WORDS. */
+export const MAX_WORDS = 1000;
+export const OTHER_WORDS = '(other words)';
+
 /** Tally of the form words seen in a bulk input, for the end-of-run report. */
 export class VocabularyTally {
   readonly mapped = new Map<string, { form: StereoForm; count: number }>();
@@ -113,7 +117,9 @@ export class VocabularyTally {
       e.count++;
       this.mapped.set(word, e);
     } else if (result.how === 'not-understood') {
-      this.notUnderstood.set(word, (this.notUnderstood.get(word) ?? 0) + 1);
+      // a free-text column must not fill the memory: past MAX_WORDS distinct words, the rest are counted together
+      const key = this.notUnderstood.has(word) || this.notUnderstood.size < MAX_WORDS ? word : OTHER_WORDS;
+      this.notUnderstood.set(key, (this.notUnderstood.get(key) ?? 0) + 1);
     }
   }
 
@@ -126,7 +132,10 @@ export class VocabularyTally {
       mine.count += e.count;
       this.mapped.set(w, mine);
     }
-    for (const [w, n] of other.notUnderstood) this.notUnderstood.set(w, (this.notUnderstood.get(w) ?? 0) + n);
+    for (const [w, n] of other.notUnderstood) {
+      const key = this.notUnderstood.has(w) || this.notUnderstood.size < MAX_WORDS ? w : OTHER_WORDS;
+      this.notUnderstood.set(key, (this.notUnderstood.get(key) ?? 0) + n);
+    }
   }
 
   toJSON(): { mapped: [string, { form: StereoForm; count: number }][]; notUnderstood: [string, number][] } {

@@ -5,7 +5,7 @@
  */
 import { createReadStream } from 'node:fs';
 import { createInterface } from 'node:readline';
-import { parse } from 'csv-parse';
+import { readDelimitedRows, type DelimitedLimits } from './delimited.js';
 
 export interface BulkItem {
   /** Input file as given on the command line. */
@@ -35,78 +35,79 @@ export function formatOf(path: string): BulkFormat | null {
 /** U+FFFD appears when the file was not valid UTF-8 (Node's decoder replaces bad bytes). */
 const REPLACEMENT = '\uFFFD';
 
-export async function* readSdItems(path: string): AsyncGenerator<BulkItem> {
+/** An SD record longer than this is not kept (a file without $$$$ lines must not fill the memory). */
+export const SD_RECORD_LIMITS = { maxLines: 200_000, maxChars: 64 * 2 ** 20 };
+
+export async function* readSdItems(path: string, limits = SD_RECORD_LIMITS): AsyncGenerator<BulkItem> {
   const rl = createInterface({ input: createReadStream(path, { encoding: 'utf8' }), crlfDelay: Infinity });
   let lines: string[] = [];
+  let chars = 0;
+  let dropped = 0; // lines of an over-long record not kept
   let startLine = 1;
   let lineNo = 0;
   let record = 0;
+  const item = (last: boolean): BulkItem => {
+    record++;
+    const text = dropped > 0 ? '' : lines.join('\n') + '\n';
+    const problem =
+      dropped > 0
+        ? `the record is longer than ${limits.maxLines.toLocaleString('en-US')} lines or ` +
+          `${limits.maxChars / 2 ** 20} MiB (${dropped.toLocaleString('en-US')} lines${last ? ' to the end of the file' : ''}); ` +
+          'not read (a missing $$$$ line?)'
+        : text.includes(REPLACEMENT)
+          ? 'the record is not valid UTF-8 text (bad bytes replaced)'
+          : last
+            ? 'the last record has no $$$$ terminator (file truncated?)'
+            : undefined;
+    return { source: path, record, line: startLine, text, splitProblem: problem };
+  };
   for await (const raw of rl) {
     lineNo++;
-    if (lines.length === 0) startLine = lineNo;
+    if (lines.length === 0 && dropped === 0) startLine = lineNo;
     if (raw.startsWith('$$$$')) {
-      record++;
-      const text = lines.join('\n') + '\n';
-      yield {
-        source: path,
-        record,
-        line: startLine,
-        text,
-        splitProblem: text.includes(REPLACEMENT)
-          ? 'the record is not valid UTF-8 text (bad bytes replaced)'
-          : undefined,
-      };
+      yield item(false);
       lines = [];
+      chars = 0;
+      dropped = 0;
+      continue;
+    }
+    if (dropped > 0 || lines.length >= limits.maxLines || chars + raw.length > limits.maxChars) {
+      if (dropped === 0) {
+        dropped = lines.length;
+        lines = [];
+      }
+      dropped++;
       continue;
     }
     lines.push(raw);
+    chars += raw.length + 1;
   }
-  if (lines.some((l) => l.trim() !== '')) {
-    record++;
-    const text = lines.join('\n') + '\n';
-    yield {
-      source: path,
-      record,
-      line: startLine,
-      text,
-      splitProblem: text.includes(REPLACEMENT)
-        ? 'the record is not valid UTF-8 text (bad bytes replaced)'
-        : 'the last record has no $$$$ terminator (file truncated?)',
-    };
-  }
+  if (dropped > 0 || lines.some((l) => l.trim() !== '')) yield item(true);
 }
 
-export async function* readDelimitedItems(path: string, delimiter: ',' | '\t'): AsyncGenerator<BulkItem> {
-  const parser = createReadStream(path, { encoding: 'utf8' }).pipe(
-    parse({
-      delimiter,
-      columns: (header: string[]) => header.map((h) => h.trim()),
-      relax_column_count: true,
-      relax_quotes: true,
-      skip_empty_lines: true,
-      bom: true,
-      info: true,
-    }),
-  );
+export async function* readDelimitedItems(
+  path: string,
+  delimiter: ',' | '\t',
+  limits?: DelimitedLimits,
+): AsyncGenerator<BulkItem> {
+  let header: string[] | null = null;
   let record = 0;
-  for await (const row of parser as AsyncIterable<{
-    record: Record<string, string>;
-    info: { lines: number; invalid_field_length: number };
-  }>) {
+  for await (const row of readDelimitedRows(path, delimiter, limits)) {
+    if (header === null) {
+      header = row.fields.map((h) => h.trim());
+      continue;
+    }
     record++;
-    const fields = row.record;
-    const values = Object.values(fields).join('');
-    yield {
-      source: path,
-      record,
-      line: row.info.lines,
-      fields,
-      splitProblem: values.includes(REPLACEMENT)
-        ? 'the row is not valid UTF-8 text (bad bytes replaced)'
-        : row.info.invalid_field_length > 0
-          ? 'the row has a different number of columns from the header'
-          : undefined,
-    };
+    const fields: Record<string, string> = {};
+    const n = Math.min(header.length, row.fields.length);
+    for (let i = 0; i < n; i++) fields[header[i]] = row.fields[i];
+    let splitProblem: string | undefined;
+    if (row.broken) splitProblem = `the row cannot be split: ${row.broken}`;
+    else if (row.fields.some((f) => f.includes(REPLACEMENT)))
+      splitProblem = 'the row is not valid UTF-8 text (bad bytes replaced)';
+    else if (row.fields.length !== header.length && !(row.fields.length === 1 && row.fields[0].trim() === ''))
+      splitProblem = `the row has ${row.fields.length} columns, the header ${header.length}`;
+    yield { source: path, record, line: row.line, fields, splitProblem };
   }
 }
 

@@ -178,7 +178,11 @@ export function summaryTable(t: BulkTrailer, seconds: number | null): string {
       '',
       '  form words NOT understood (records audited as form unknown; map them with --form-word):',
     );
-    for (const [w, n] of t.vocabulary.notUnderstood) lines.push(`    "${w}" (${n})`);
+    const shown = t.vocabulary.notUnderstood.slice(0, 50);
+    for (const [w, n] of shown) lines.push(`    "${w}" (${n})`);
+    if (t.vocabulary.notUnderstood.length > shown.length) {
+      lines.push(`    … and ${t.vocabulary.notUnderstood.length - shown.length} more (see the JSON summary)`);
+    }
   }
   lines.push('', `Caution: ${t.caution}`);
   return lines.join('\n');
