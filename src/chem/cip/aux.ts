@@ -5,7 +5,13 @@
  * memoised on the node; a unit whose ranking would need its own descriptor (a cycle) counts as having none.
  */
 import type { CipLabel } from '../facts.js';
-import { IMPLICIT_H, LONE_PAIR, type AxialStereo, type DoubleBondStereo, type TetrahedralStereo } from '../types.js';
+import {
+  IMPLICIT_H,
+  LONE_PAIR,
+  type AxialStereo,
+  type DoubleBondStereo,
+  type TetrahedralStereo,
+} from '../types.js';
 import { CipNode, Digraph, H_ATOM } from './digraph.js';
 import { Ranker } from './compare.js';
 import { handedness, rankLigands } from './rank.js';
@@ -25,7 +31,12 @@ export function ligandBranch(dg: Digraph, centre: CipNode, lig: number, used: Se
 }
 
 /** R/S (or r/s) of a tetrahedral element at `centre`, or null when two ligands tie. */
-export function tetrahedralLabel(rk: Ranker, centre: CipNode, e: TetrahedralStereo, level = RULE_5): CipLabel | null {
+export function tetrahedralLabel(
+  rk: Ranker,
+  centre: CipNode,
+  e: TetrahedralStereo,
+  level = RULE_5,
+): CipLabel | null {
   const used = new Set<CipNode>();
   const ligs: CipNode[] = [];
   for (const l of e.ligands) {
@@ -104,7 +115,11 @@ export function endRank(
  * E/Z from which ends' higher ligands are the reference ligands and the input's cis/trans relation; 'e'/'z'
  * when Rule 5 ranked exactly one end (the descriptor then rests on enantiomorphic ligands).
  */
-export function ezLabel(e: DoubleBondStereo, end0: { refHigh: boolean; rule5: boolean }, end1: { refHigh: boolean; rule5: boolean }): CipLabel {
+export function ezLabel(
+  e: DoubleBondStereo,
+  end0: { refHigh: boolean; rule5: boolean },
+  end1: { refHigh: boolean; rule5: boolean },
+): CipLabel {
   const cis = e.relation === 'cis' ? end0.refHigh === end1.refHigh : end0.refHigh !== end1.refHigh;
   const lower = end0.rule5 !== end1.rule5;
   return cis ? (lower ? 'z' : 'Z') : lower ? 'e' : 'E';

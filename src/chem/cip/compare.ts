@@ -9,7 +9,7 @@
  */
 import type { CipLabel } from '../facts.js';
 import { CipNode, Digraph, type SortedBranches } from './digraph.js';
-import { rule3, rule4a, rule4c, rule5 } from './rules.js';
+import * as rules from './rules.js';
 
 // rule indices (as in rules.ts), local so the hot comparison loop reads plain constants
 const RULE_1A = 0;
@@ -21,6 +21,15 @@ const RULE_4B = 5;
 const RULE_4C = 6;
 const RULE_5 = 7;
 const RULE_6 = 8;
+// the rules themselves, bound once (module namespace reads are not free in the hot loop)
+const rule1a = rules.rule1a;
+const rule1b = rules.rule1b;
+const rule2 = rules.rule2;
+const rule3 = rules.rule3;
+const rule4a = rules.rule4a;
+const rule4c = rules.rule4c;
+const rule5 = rules.rule5;
+const rule6 = rules.rule6;
 import { compareRule4b } from './rule4b.js';
 
 export type AuxFn = (node: CipNode) => CipLabel | null;
@@ -42,7 +51,8 @@ export class Ranker {
    */
   mirror = false;
   private depth = 0;
-  private readonly pool: { x: CipNode[]; fx: (CipNode | null)[]; y: CipNode[]; fy: (CipNode | null)[] }[] = [];
+  private readonly pool: { x: CipNode[]; fx: (CipNode | null)[]; y: CipNode[]; fy: (CipNode | null)[] }[] =
+    [];
 
   constructor(
     readonly dg: Digraph,
@@ -52,7 +62,17 @@ export class Ranker {
     const g = dg.g;
     const several = g.stereoCount > 1;
     const isotopes = g.s.atoms.some((a) => a.isotope !== null);
-    this.active = [true, true, isotopes, g.hasBondStereo && several, several, several, several, several, false];
+    this.active = [
+      true,
+      true,
+      isotopes,
+      g.hasBondStereo && several,
+      several,
+      several,
+      several,
+      several,
+      false,
+    ];
   }
 
   /** Is `n` the scope node or farther out on its branch? */
@@ -90,12 +110,12 @@ export class Ranker {
 
   value(rule: number, n: CipNode): number {
     switch (rule) {
-      case RULE_1A: // Rule 1a: atomic number (rules.ts rule1a)
-        return n.z;
-      case RULE_1B: // Rule 1b: duplicate nearer the root first (rules.ts rule1b)
-        return -n.dist;
-      case RULE_2: // Rule 2: mass (rules.ts rule2)
-        return n.mass;
+      case RULE_1A:
+        return rule1a(n);
+      case RULE_1B:
+        return rule1b(n);
+      case RULE_2:
+        return rule2(n);
       case RULE_3:
         return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
       case RULE_4A:
@@ -104,8 +124,8 @@ export class Ranker {
         return this.stereoValue(n, rule4c);
       case RULE_5:
         return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
-      case RULE_6: // proposed Rule 6 (rules.ts rule6)
-        return n.atom === this.dg.rule6Ref ? 1 : 0;
+      case RULE_6:
+        return rule6(n, this.dg.rule6Ref);
       default:
         return 0;
     }
@@ -188,7 +208,8 @@ export class Ranker {
   sorted(node: CipNode, from: CipNode | null, level: number): SortedBranches {
     if (node.dup || node.atom < 0) return EMPTY;
     // the usual case, downwards inside the scope in plain mode: an array by level
-    const plain = from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level < RULE_3 || this.inScope(node));
+    const plain =
+      from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level < RULE_3 || this.inScope(node));
     if (plain) {
       if (node.down === null) node.down = [];
       const hit = node.down[level];
@@ -225,7 +246,7 @@ export class Ranker {
         nodes[j + 1] = v;
       }
       out = { nodes, tie: nodes.map(() => false) };
-      for (let i = 0; i < nodes.length; ) {
+      for (let i = 0; i < nodes.length;) {
         let j = i + 1;
         while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
         if (j - i > 1) this.sortRun(nodes, i, j, node, 0, out);
@@ -238,7 +259,7 @@ export class Ranker {
       if (!this.active[level] || !base.tie.some((t) => t)) out = base;
       else {
         out = { nodes: base.nodes.slice(), tie: base.tie.slice() };
-        for (let i = 0; i < out.nodes.length; ) {
+        for (let i = 0; i < out.nodes.length;) {
           let j = i + 1;
           while (j < out.nodes.length && base.tie[j]) j++;
           if (j - i > 1) this.sortRun(out.nodes, i, j, node, level, out);
@@ -253,7 +274,14 @@ export class Ranker {
    * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
    * first, writing them and their ties into `out` at the same places.
    */
-  private sortRun(nodes: CipNode[], i: number, j: number, centre: CipNode, rule: number, out: SortedBranches): SortedBranches {
+  private sortRun(
+    nodes: CipNode[],
+    i: number,
+    j: number,
+    centre: CipNode,
+    rule: number,
+    out: SortedBranches,
+  ): SortedBranches {
     if (j - i === 2) {
       const a = nodes[i];
       const b = nodes[i + 1];

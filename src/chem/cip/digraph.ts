@@ -65,11 +65,27 @@ export class Digraph {
     this.root = this.make(rootAtom, 0, 0, false, null);
   }
 
-  private make(atom: number, depth: number, dist: number, dup: boolean, parent: CipNode | null, z = -1): CipNode {
+  private make(
+    atom: number,
+    depth: number,
+    dist: number,
+    dup: boolean,
+    parent: CipNode | null,
+    z = -1,
+  ): CipNode {
     this.count++;
     const g = this.g;
     if (z >= 0 && parent !== null) {
-      return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
+      return new CipNode(
+        this.nextId++,
+        atom,
+        z,
+        mancudeOf(g).dupMass[parent.atom],
+        depth,
+        dist,
+        true,
+        parent,
+      );
     }
     if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
     if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);

@@ -85,7 +85,9 @@ export function buildGraph(s: Structure): CipGraph {
       for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
     }
   });
-  const mass = s.atoms.map((a) => (a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)));
+  const mass = s.atoms.map((a) =>
+    a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber),
+  );
   const g: CipGraph = {
     s,
     n,
@@ -111,7 +113,8 @@ export function buildGraph(s: Structure): CipGraph {
   g.hasBondStereo = s.stereo.some((e, i) => e.kind === 'double-bond' && !g.ringFixed[i]);
   bondAt.fill(-1);
   s.stereo.forEach((e, i) => {
-    if (e.kind === 'double-bond' && !g.ringFixed[i]) for (const end of e.ends) if (bondAt[end] < 0) bondAt[end] = i;
+    if (e.kind === 'double-bond' && !g.ringFixed[i])
+      for (const end of e.ends) if (bondAt[end] < 0) bondAt[end] = i;
   });
   return g;
 }
@@ -142,7 +145,8 @@ const CHALCOGEN_OR_N = new Set([7, 8, 16, 34, 52]);
 function expandedValence(s: Structure, a: number, orders: number[]): boolean {
   const at = s.atoms[a];
   const z = at.atomicNumber;
-  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53) return false;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53)
+    return false;
   const v = orders.reduce((x, y) => x + y, 0) + at.hCount;
   switch (z) {
     case 15:

@@ -8,7 +8,15 @@ import type { CipLabel } from '../facts.js';
 import type { AxialStereo, DoubleBondStereo, StereoElement, TetrahedralStereo } from '../types.js';
 import { Digraph } from './digraph.js';
 import type { CipGraph } from './graph.js';
-import { axialLabel, endBranches, ezLabel, ligandBranch, newRanker, endRank, tetrahedralLabel } from './aux.js';
+import {
+  axialLabel,
+  endBranches,
+  ezLabel,
+  ligandBranch,
+  newRanker,
+  endRank,
+  tetrahedralLabel,
+} from './aux.js';
 import { rankLigands } from './rank.js';
 import { RULE_5, RULE_6 } from './rules.js';
 import type { Ranker } from './compare.js';
@@ -48,7 +56,8 @@ function tiedTetrahedral(g: CipGraph, index: number, e: TetrahedralStereo): numb
   const out: number[] = [];
   for (let i = 1; i < r.order.length; i++) {
     if (!r.tieWithPrev[i]) continue;
-    for (const k of [r.order[i - 1], r.order[i]]) if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
+    for (const k of [r.order[i - 1], r.order[i]])
+      if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
   }
   return out;
 }

@@ -47,7 +47,10 @@ export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], lev
       m[j][i] = -c;
     }
   }
-  const order = insertionSort(ligands.map((_, i) => i), (a, b) => m[a][b]);
+  const order = insertionSort(
+    ligands.map((_, i) => i),
+    (a, b) => m[a][b],
+  );
   const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
   const tied = tieWithPrev.some((t) => t);
   let pseudo = false;
@@ -59,7 +62,10 @@ export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], lev
     try {
       for (let i = 0; i < k; i++) {
         for (let j = i + 1; j < k; j++) {
-          const c = Math.abs(m[i][j]) - 1 < RULE_5 ? m[i][j] : rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
+          const c =
+            Math.abs(m[i][j]) - 1 < RULE_5
+              ? m[i][j]
+              : rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
           mm[i][j] = c;
           mm[j][i] = -c;
         }
@@ -67,7 +73,10 @@ export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], lev
     } finally {
       rk.mirror = saved;
     }
-    const mirror = insertionSort(ligands.map((_, i) => i), (a, b) => mm[a][b]);
+    const mirror = insertionSort(
+      ligands.map((_, i) => i),
+      (a, b) => mm[a][b],
+    );
     const pos = new Array<number>(k);
     order.forEach((li, p) => (pos[li] = p));
     pseudo = !isEvenPermutation(mirror.map((li) => pos[li]));

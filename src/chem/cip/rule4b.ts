@@ -68,7 +68,13 @@ function chiralLabel(rk: Ranker, n: CipNode): CipLabel | null {
  * that Rules 1-4a cannot order are put like-first: by their own descriptor, then by their own sequence, so that
  * units deeper down keep following the unit they hang from (the pairing of Hanson et al. 2018).
  */
-function orderedPairs(rk: Ranker, x: CipNode, fx: CipNode | null, refClass: number, memo: Map<CipNode, number[]>): number[] {
+function orderedPairs(
+  rk: Ranker,
+  x: CipNode,
+  fx: CipNode | null,
+  refClass: number,
+  memo: Map<CipNode, number[]>,
+): number[] {
   const hit = memo.get(x);
   if (hit) return hit;
   const seq: number[] = [];
@@ -84,12 +90,16 @@ function orderedPairs(rk: Ranker, x: CipNode, fx: CipNode | null, refClass: numb
     if (l !== null) seq.push(likeClass(l) === refClass ? 1 : 0);
     const s = rk.sorted(n, qf[i], RULE_4A);
     const nodes = s.nodes.slice();
-    for (let a = 0; a < nodes.length; ) {
+    for (let a = 0; a < nodes.length;) {
       let b = a + 1;
       while (b < nodes.length && s.tie[b]) b++;
       if (b - a > 1) {
         const run = nodes.slice(a, b);
-        run.sort((u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)));
+        run.sort(
+          (u, v) =>
+            own(v) - own(u) ||
+            lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)),
+        );
         for (let k = a; k < b; k++) nodes[k] = run[k - a];
       }
       a = b;
@@ -127,7 +137,13 @@ function bestPairs(rk: Ranker, x: CipNode, fx: CipNode | null): number[] {
   return best ?? [];
 }
 
-export function compareRule4b(rk: Ranker, x: CipNode, fx: CipNode | null, y: CipNode, fy: CipNode | null): number {
+export function compareRule4b(
+  rk: Ranker,
+  x: CipNode,
+  fx: CipNode | null,
+  y: CipNode,
+  fy: CipNode | null,
+): number {
   const c = lexCompare(bestPairs(rk, x, fx), bestPairs(rk, y, fy));
   return c > 0 ? 1 : c < 0 ? -1 : 0;
 }

@@ -19,8 +19,6 @@ export const RULE_4B = 5;
 export const RULE_4C = 6;
 export const RULE_5 = 7;
 export const RULE_6 = 8;
-/** The rules of the 2013 recommendations; Rule 6 is the proposal of Hanson et al. and is used last. */
-export const LAST_2013_RULE = RULE_5;
 
 /** Rule 1a (P-92.2.1.1, Rule 1a): higher atomic number precedes lower; duplicates carry the duplicated atom's. */
 export function rule1a(n: CipNode): number {
@@ -69,7 +67,11 @@ export function rule4c(label: CipLabel | null): number {
  * whose own ranking rests on Rule 5 ('z' before 'e'; these invert on reflection like R and S).
  */
 export function rule5(label: CipLabel | null): number {
-  return label === 'R' || label === 'M' || label === 'z' ? 2 : label === 'S' || label === 'P' || label === 'e' ? 1 : 0;
+  return label === 'R' || label === 'M' || label === 'z'
+    ? 2
+    : label === 'S' || label === 'P' || label === 'e'
+      ? 1
+      : 0;
 }
 
 /** Proposed Rule 6 (Hanson et al. 2018): an undifferentiated reference node has priority over any other. */
@@ -79,7 +81,11 @@ export function rule6(n: CipNode, ref: number): number {
 
 /** Descriptor class for like/unlike pairing (P-92.5.2, Rule 4b): R, M and r, m are "like" each other. */
 export function likeClass(label: CipLabel): number {
-  return label === 'R' || label === 'M' || label === 'r' || label === 'm' ? 1 : label === 'S' || label === 'P' || label === 's' || label === 'p' ? 2 : 0;
+  return label === 'R' || label === 'M' || label === 'r' || label === 'm'
+    ? 1
+    : label === 'S' || label === 'P' || label === 's' || label === 'p'
+      ? 2
+      : 0;
 }
 
 export function isChiralLabel(label: CipLabel | null): boolean {

@@ -13,7 +13,11 @@ export interface AtomSpec {
   charge?: number;
 }
 
-export function build(atoms: (string | AtomSpec)[], bonds: [number, number, number?][], stereo: StereoElement[]): Structure {
+export function build(
+  atoms: (string | AtomSpec)[],
+  bonds: [number, number, number?][],
+  stereo: StereoElement[],
+): Structure {
   const at: Atom[] = atoms.map((x, i) => {
     const a = typeof x === 'string' ? { el: x } : x;
     const z = Z[a.el];

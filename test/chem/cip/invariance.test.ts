@@ -25,9 +25,15 @@ function renumber(s: Structure, perm: number[]): Structure {
   perm.forEach((old, i) => (inv[old] = i));
   const m = (x: number): number => (x < 0 ? x : inv[x]);
   const stereo: StereoElement[] = s.stereo.map((e) => {
-    if (e.kind === 'tetrahedral') return { ...e, centre: m(e.centre), ligands: e.ligands.map(m) as [number, number, number, number] };
-    if (e.kind === 'double-bond') return { ...e, ends: [m(e.ends[0]), m(e.ends[1])], refs: [m(e.refs[0]), m(e.refs[1])] };
-    return { ...e, ends: [m(e.ends[0]), m(e.ends[1])], ligands: e.ligands.map(m) as [number, number, number, number] };
+    if (e.kind === 'tetrahedral')
+      return { ...e, centre: m(e.centre), ligands: e.ligands.map(m) as [number, number, number, number] };
+    if (e.kind === 'double-bond')
+      return { ...e, ends: [m(e.ends[0]), m(e.ends[1])], refs: [m(e.refs[0]), m(e.refs[1])] };
+    return {
+      ...e,
+      ends: [m(e.ends[0]), m(e.ends[1])],
+      ligands: e.ligands.map(m) as [number, number, number, number],
+    };
   });
   return {
     ...s,
@@ -39,7 +45,10 @@ function renumber(s: Structure, perm: number[]): Structure {
 
 function mirror(s: Structure): Structure {
   const flip = (w: '@' | '@@'): '@' | '@@' => (w === '@' ? '@@' : '@');
-  return { ...s, stereo: s.stereo.map((e) => (e.kind === 'double-bond' ? e : { ...e, winding: flip(e.winding) })) };
+  return {
+    ...s,
+    stereo: s.stereo.map((e) => (e.kind === 'double-bond' ? e : { ...e, winding: flip(e.winding) })),
+  };
 }
 
 const INVERT: Record<string, string> = { R: 'S', S: 'R', M: 'P', P: 'M', e: 'z', z: 'e' };

@@ -29,9 +29,13 @@ describe.skipIf(!haveSharedData('cip-validation-suite'))('OpenChemLib cross-chec
       if (same(mine, theirs)) continue;
       if (same(mine, r.expected)) oursRight++;
       if (same(theirs, r.expected)) oclRight++;
-      lines.push(`${r.id}: suite [${r.expected.join(' ')}] ours [${mine.join(' ')}] OpenChemLib [${theirs.join(' ')}]`);
+      lines.push(
+        `${r.id}: suite [${r.expected.join(' ')}] ours [${mine.join(' ')}] OpenChemLib [${theirs.join(' ')}]`,
+      );
     }
-    console.log(`OpenChemLib disagreements: ${lines.length}; ours right ${oursRight}, OpenChemLib right ${oclRight}\n${lines.join('\n')}`);
+    console.log(
+      `OpenChemLib disagreements: ${lines.length}; ours right ${oursRight}, OpenChemLib right ${oclRight}\n${lines.join('\n')}`,
+    );
     expect(oursRight).toBeGreaterThan(oclRight);
   });
 });

@@ -56,19 +56,85 @@ interface Case {
 }
 
 const CASES: Case[] = [
-  { name: '(R)-glyceraldehyde (D-glyceraldehyde)', smiles: 'O=C[C@H](O)CO', expected: { '3': 'R' }, source: 'from memory: D-glyceraldehyde is (R) (IUPAC 2013 P-102 carbohydrate nomenclature ties D to (R) here)' },
-  { name: 'L-alanine is (S)', smiles: 'N[C@@H](C)C(=O)O', expected: { '2': 'S' }, source: 'from memory: every proteinogenic L-amino acid but cysteine is (S)' },
-  { name: 'L-cysteine is (R)', smiles: 'N[C@@H](CS)C(=O)O', expected: { '2': 'R' }, source: 'from memory: sulfur raises CH2SH above COOH (Rule 1a), so L-cysteine is (R)' },
-  { name: '(2R,3R)-tartaric acid', smiles: 'OC(=O)[C@H](O)[C@@H](O)C(=O)O', expected: { '4': 'R', '6': 'R' }, source: 'from memory: L-(+)-tartaric acid is (2R,3R)' },
-  { name: 'meso-tartaric acid (2R,3S)', smiles: 'OC(=O)[C@H](O)[C@H](O)C(=O)O', expected: { '4': 'R', '6': 'S' }, source: 'IUPAC 2013 P-93.5.1.2 (meso compounds, from memory): meso-tartaric acid is (2R,3S)' },
-  { name: '(E)-but-2-ene', smiles: 'C/C=C/C', expected: { '2': 'E', '3': 'E' }, source: 'IUPAC 2013 P-93.4.2.1 (from memory): trans methyls are E' },
-  { name: '(Z)-but-2-ene', smiles: 'C/C=C\\C', expected: { '2': 'Z', '3': 'Z' }, source: 'IUPAC 2013 P-93.4.2.1 (from memory): cis methyls are Z' },
-  { name: '(R)-bromochlorofluoromethane', smiles: 'F[C@H](Cl)Br', expected: { '2': 'R' }, source: 'worked by hand: looking from F, H-Cl-Br anticlockwise; Br > Cl > F > H (Rule 1a) gives R' },
-  { name: '(R)-butan-2-ol', smiles: 'C[C@@H](O)CC', expected: { '2': 'R' }, source: 'from memory: (R)-(-)-butan-2-ol, SMILES C[C@@H](O)CC' },
-  { name: 'deuterium ranks above protium (Rule 2): (R)-ethan-1-d-ol', smiles: 'C[C@H](O)[2H]', expected: { '2': 'R' }, source: 'CIP validation suite VS182 (Hanson et al. 2018), Rule 2' },
-  { name: 'deuterium ranks above protium (Rule 2): (S)-ethan-1-d-ol', smiles: 'C[C@@H](O)[2H]', expected: { '2': 'S' }, source: 'mirror image of VS182 (Hanson et al. 2018)' },
-  { name: 'bromochloro-deuterio-methane', smiles: '[2H][C@@H](Br)Cl', expected: { '2': 'R' }, source: 'CIP validation suite VS181 (Hanson et al. 2018), Rule 2' },
-  { name: 'cis double bond with a ring-closure neighbour', smiles: 'OC/C=C\\CC', expected: { '3': 'Z', '4': 'Z' }, source: 'from memory: (Z)-pent-2-en-1-ol' },
+  {
+    name: '(R)-glyceraldehyde (D-glyceraldehyde)',
+    smiles: 'O=C[C@H](O)CO',
+    expected: { '3': 'R' },
+    source:
+      'from memory: D-glyceraldehyde is (R) (IUPAC 2013 P-102 carbohydrate nomenclature ties D to (R) here)',
+  },
+  {
+    name: 'L-alanine is (S)',
+    smiles: 'N[C@@H](C)C(=O)O',
+    expected: { '2': 'S' },
+    source: 'from memory: every proteinogenic L-amino acid but cysteine is (S)',
+  },
+  {
+    name: 'L-cysteine is (R)',
+    smiles: 'N[C@@H](CS)C(=O)O',
+    expected: { '2': 'R' },
+    source: 'from memory: sulfur raises CH2SH above COOH (Rule 1a), so L-cysteine is (R)',
+  },
+  {
+    name: '(2R,3R)-tartaric acid',
+    smiles: 'OC(=O)[C@H](O)[C@@H](O)C(=O)O',
+    expected: { '4': 'R', '6': 'R' },
+    source: 'from memory: L-(+)-tartaric acid is (2R,3R)',
+  },
+  {
+    name: 'meso-tartaric acid (2R,3S)',
+    smiles: 'OC(=O)[C@H](O)[C@H](O)C(=O)O',
+    expected: { '4': 'R', '6': 'S' },
+    source: 'IUPAC 2013 P-93.5.1.2 (meso compounds, from memory): meso-tartaric acid is (2R,3S)',
+  },
+  {
+    name: '(E)-but-2-ene',
+    smiles: 'C/C=C/C',
+    expected: { '2': 'E', '3': 'E' },
+    source: 'IUPAC 2013 P-93.4.2.1 (from memory): trans methyls are E',
+  },
+  {
+    name: '(Z)-but-2-ene',
+    smiles: 'C/C=C\\C',
+    expected: { '2': 'Z', '3': 'Z' },
+    source: 'IUPAC 2013 P-93.4.2.1 (from memory): cis methyls are Z',
+  },
+  {
+    name: '(R)-bromochlorofluoromethane',
+    smiles: 'F[C@H](Cl)Br',
+    expected: { '2': 'R' },
+    source: 'worked by hand: looking from F, H-Cl-Br anticlockwise; Br > Cl > F > H (Rule 1a) gives R',
+  },
+  {
+    name: '(R)-butan-2-ol',
+    smiles: 'C[C@@H](O)CC',
+    expected: { '2': 'R' },
+    source: 'from memory: (R)-(-)-butan-2-ol, SMILES C[C@@H](O)CC',
+  },
+  {
+    name: 'deuterium ranks above protium (Rule 2): (R)-ethan-1-d-ol',
+    smiles: 'C[C@H](O)[2H]',
+    expected: { '2': 'R' },
+    source: 'CIP validation suite VS182 (Hanson et al. 2018), Rule 2',
+  },
+  {
+    name: 'deuterium ranks above protium (Rule 2): (S)-ethan-1-d-ol',
+    smiles: 'C[C@@H](O)[2H]',
+    expected: { '2': 'S' },
+    source: 'mirror image of VS182 (Hanson et al. 2018)',
+  },
+  {
+    name: 'bromochloro-deuterio-methane',
+    smiles: '[2H][C@@H](Br)Cl',
+    expected: { '2': 'R' },
+    source: 'CIP validation suite VS181 (Hanson et al. 2018), Rule 2',
+  },
+  {
+    name: 'cis double bond with a ring-closure neighbour',
+    smiles: 'OC/C=C\\CC',
+    expected: { '3': 'Z', '4': 'Z' },
+    source: 'from memory: (Z)-pent-2-en-1-ol',
+  },
 ];
 
 describe('textbook CIP descriptors', () => {
