@@ -63011,15 +63011,17 @@ function perceive(s) {
     const t = e.ligands.map(
       (x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])
     );
+    const tokens2 = [t[0], t[1], t[2], t[3]];
+    const pairs = equalPairs(tokens2, tokenClass, e.ends, true) ?? [];
     drafts.push({
       kind: "biaryl",
       mode: "parity",
       atoms: [...e.ends],
-      tokens: [t[0], t[1], t[2], t[3]],
+      tokens: tokens2,
       defined: false,
       bit: 0,
-      equivalentPair: false,
-      pairs: []
+      equivalentPair: pairs.length > 0,
+      pairs
     });
   }
   let kept = fixedPoint(drafts, graph, n);
@@ -63244,7 +63246,7 @@ function analyse(input) {
   const defined = Uint8Array.from(p.units, (u) => u.defined ? 1 : 0);
   const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
   for (let k = 0; k < m; k++) {
-    if (!reported[k] && p.units[k].defined) {
+    if (!reported[k] && p.units[k].defined && p.structure.dimension !== 3) {
       p.remarks.push(
         `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
       );
@@ -63261,11 +63263,14 @@ function stereogenicSomewhere(g, x, defined, k) {
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open2.push(i);
   if (open2.length > 10) return true;
   const y = Uint8Array.from(x);
+  let seenFeasible = false;
   for (let mask = 0; mask < 1 << open2.length; mask++) {
     for (let b = 0; b < open2.length; b++) y[open2[b]] = mask >> b & 1;
+    if (!feasible(g, y)) continue;
+    seenFeasible = true;
     if (stereogenicIn(g, y, k)) return true;
   }
-  return false;
+  return !seenFeasible;
 }
 function unitName(p, k) {
   const u = p.units[k];
@@ -65855,22 +65860,29 @@ function readRegularFile(abs) {
     if (!st.isFile()) return { ok: false, error: "is not a regular file" };
     if (st.size > MAX_FILE_BYTES)
       return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
-    const chunks = [];
-    let total = 0;
     let buf = Buffer.allocUnsafe(st.size + 1);
+    let total = 0;
     for (; ; ) {
-      const n = readSync(fd, buf, 0, buf.length, null);
+      if (total === buf.length) {
+        if (total > MAX_FILE_BYTES)
+          return {
+            ok: false,
+            error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+          };
+        const bigger = Buffer.allocUnsafe(buf.length * 2);
+        buf.copy(bigger, 0, 0, total);
+        buf = bigger;
+      }
+      const n = readSync(fd, buf, total, buf.length - total, null);
       if (n === 0) break;
-      chunks.push(buf.subarray(0, n));
       total += n;
-      if (total > MAX_FILE_BYTES)
-        return {
-          ok: false,
-          error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
-        };
-      buf = Buffer.allocUnsafe(64 * 1024);
     }
-    return { ok: true, bytes: chunks.length === 1 ? chunks[0] : Buffer.concat(chunks, total) };
+    if (total > MAX_FILE_BYTES)
+      return {
+        ok: false,
+        error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+      };
+    return { ok: true, bytes: buf.subarray(0, total) };
   } finally {
     closeSync(fd);
   }
@@ -66509,13 +66521,14 @@ var PROBLEM_CODES = {
   minItems: "too-few-items",
   oneOf: "structure-choice"
 };
-var ajv = new import_ajv.Ajv({
+var AJV_OPTIONS = {
   allErrors: true,
   strict: true,
   strictRequired: false,
   allowUnionTypes: true,
   verbose: true
-});
+};
+var ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
 var recordValidator = null;
 var configValidator = null;
 function validateRecordShape(value) {

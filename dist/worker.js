@@ -43897,15 +43897,17 @@ function perceive(s) {
     const t = e.ligands.map(
       (x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])
     );
+    const tokens2 = [t[0], t[1], t[2], t[3]];
+    const pairs = equalPairs(tokens2, tokenClass, e.ends, true) ?? [];
     drafts.push({
       kind: "biaryl",
       mode: "parity",
       atoms: [...e.ends],
-      tokens: [t[0], t[1], t[2], t[3]],
+      tokens: tokens2,
       defined: false,
       bit: 0,
-      equivalentPair: false,
-      pairs: []
+      equivalentPair: pairs.length > 0,
+      pairs
     });
   }
   let kept = fixedPoint(drafts, graph, n);
@@ -44130,7 +44132,7 @@ function analyse(input) {
   const defined = Uint8Array.from(p.units, (u) => u.defined ? 1 : 0);
   const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
   for (let k = 0; k < m; k++) {
-    if (!reported[k] && p.units[k].defined) {
+    if (!reported[k] && p.units[k].defined && p.structure.dimension !== 3) {
       p.remarks.push(
         `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
       );
@@ -44147,11 +44149,14 @@ function stereogenicSomewhere(g, x, defined, k) {
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
   if (open.length > 10) return true;
   const y = Uint8Array.from(x);
+  let seenFeasible = false;
   for (let mask = 0; mask < 1 << open.length; mask++) {
     for (let b = 0; b < open.length; b++) y[open[b]] = mask >> b & 1;
+    if (!feasible(g, y)) continue;
+    seenFeasible = true;
     if (stereogenicIn(g, y, k)) return true;
   }
-  return false;
+  return !seenFeasible;
 }
 function unitName(p, k) {
   const u = p.units[k];
@@ -46106,13 +46111,14 @@ function lineOf(positions, path) {
 
 // src/registry/schema.ts
 var import_ajv = __toESM(require_ajv(), 1);
-var ajv = new import_ajv.Ajv({
+var AJV_OPTIONS = {
   allErrors: true,
   strict: true,
   strictRequired: false,
   allowUnionTypes: true,
   verbose: true
-});
+};
+var ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
 
 // src/audit/caution.ts
 var CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";

@@ -35,22 +35,30 @@ function readRegularFile(abs: string): { ok: true; bytes: Buffer } | { ok: false
     if (!st.isFile()) return { ok: false, error: 'is not a regular file' };
     if (st.size > MAX_FILE_BYTES)
       return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
-    const chunks: Buffer[] = [];
-    let total = 0;
+    // one read in the usual case; the buffer grows only if the file grew since the fstat
     let buf = Buffer.allocUnsafe(st.size + 1);
+    let total = 0;
     for (;;) {
-      const n = readSync(fd, buf, 0, buf.length, null);
+      if (total === buf.length) {
+        if (total > MAX_FILE_BYTES)
+          return {
+            ok: false,
+            error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`,
+          };
+        const bigger = Buffer.allocUnsafe(buf.length * 2);
+        buf.copy(bigger, 0, 0, total);
+        buf = bigger;
+      }
+      const n = readSync(fd, buf, total, buf.length - total, null);
       if (n === 0) break;
-      chunks.push(buf.subarray(0, n));
       total += n;
-      if (total > MAX_FILE_BYTES)
-        return {
-          ok: false,
-          error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`,
-        };
-      buf = Buffer.allocUnsafe(64 * 1024);
     }
-    return { ok: true, bytes: chunks.length === 1 ? chunks[0]! : Buffer.concat(chunks, total) };
+    if (total > MAX_FILE_BYTES)
+      return {
+        ok: false,
+        error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`,
+      };
+    return { ok: true, bytes: buf.subarray(0, total) };
   } finally {
     closeSync(fd);
   }

@@ -2,15 +2,31 @@
  * The published schemas against the TypeScript contracts: the record schema's forms are STEREO_FORMS, the config
  * schema covers every AuditConfig key and accepts the defaults; closest-word suggestions.
  */
+import { Ajv } from 'ajv';
 import { describe, expect, it } from 'vitest';
 import recordSchema from '../../schema/record.schema.json' with { type: 'json' };
 import configSchema from '../../schema/config.schema.json' with { type: 'json' };
 import { STEREO_FORMS } from '../../src/registry/types.js';
 import { DEFAULT_CONFIG, DEFAULT_SOURCES } from '../../src/audit/config.js';
-import { validateConfigShape, validateRecordShape, pointerToPath } from '../../src/registry/schema.js';
+import {
+  AJV_OPTIONS,
+  validateConfigShape,
+  validateRecordShape,
+  pointerToPath,
+} from '../../src/registry/schema.js';
 import { closestWord, editDistance } from '../../src/registry/closest.js';
 
 describe('schemas and contracts', () => {
+  it('both schemas are valid JSON Schema draft-07 (checked against its meta-schema, json-schema.org)', () => {
+    // the audit compiles them without this check (validateSchema: false), so it is made here
+    const ajv = new Ajv({ ...AJV_OPTIONS });
+    for (const schema of [recordSchema, configSchema]) {
+      expect(ajv.validateSchema(schema), JSON.stringify(ajv.errors)).toBe(true);
+      expect(() => ajv.compile({ ...schema, $id: `${schema.$id}#test` })).not.toThrow();
+    }
+    expect(ajv.validateSchema({ type: 'no-such-type' })).toBe(false);
+  });
+
   it('the record schema lists exactly the stereo forms of the TypeScript type', () => {
     expect(recordSchema.properties.stereo.properties.form.enum).toEqual([...STEREO_FORMS]);
   });
