@@ -1,0 +1,128 @@
+/**
+ * The HTML report of a real bulk run, in a real browser (Debian's chromium driven by playwright-core): a small
+ * Larkspur Chemistry Lab export of textbook molecules (structures from memory) with invented claims, audited
+ * through the bulk command. The page loads with no console errors, every flagged record with a readable
+ * structure has its depiction, the filters and the search work, and a screenshot is saved to test-output/.
+ */
+import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { chromium } from 'playwright-core';
+import { bulkAudit } from '../../src/cli/commands/bulk-audit.js';
+import { memoryIo } from '../cli/io.js';
+
+const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+const requireBrowser = process.env.STEREOGATE_REQUIRE_SHARED_DATA === '1';
+const haveBrowser = existsSync(CHROMIUM);
+
+const out = join(process.cwd(), 'test-output');
+const rows: [id: string, smiles: string, form: string, descriptors: string][] = [
+  ['LX-00001', 'C[C@@H](O)CC', 'abs', '(R)'], // (R)-butan-2-ol, claim right
+  ['LX-00002', 'C[C@@H](O)CC', 'abs', '(S)'], // (R)-butan-2-ol declared (S): descriptor wrong
+  ['LX-00003', 'OC(=O)[C@@H](O)[C@@H](O)C(=O)O', 'racemic', ''], // meso-tartaric acid declared racemic
+  ['LX-00004', 'OC(=O)[C@@H](O)[C@H](O)C(=O)O', 'single enantiomer', '(2R,3R)'], // one tartaric acid enantiomer; invented descriptors
+  ['LX-00005', 'C[C@H](N)C(=O)O', 'RAC', ''], // L-alanine drawn as one enantiomer, declared racemic
+  ['LX-00006', 'CC(C)C', 'achiral', ''], // isobutane
+  ['LX-00007', 'C/C=C/C', 'achiral', '(Z)'], // (E)-but-2-ene declared (Z)
+  ['LX-00008', 'CC1CC(C', 'achiral', ''], // broken SMILES
+  ['LX-00009', 'N[C@@H](Cc1ccccc1)C(=O)O', 'chiral', ''], // L-phenylalanine, a form word not understood
+  ['LX-00010', 'C[C@H]1CCCC[C@@H]1C', 'meso', ''], // trans-1,2-dimethylcyclohexane declared meso
+];
+
+describe.skipIf(!haveBrowser && !requireBrowser)('HTML report of a bulk run in chromium', () => {
+  it('loads cleanly with depictions; check, severity, form filters and the id search work', async () => {
+    mkdirSync(out, { recursive: true });
+    const csv = join(out, 'larkspur-export.csv');
+    writeFileSync(
+      csv,
+      ['REG_NO,SMILES,STEREO,DESCRIPTORS', ...rows.map((r) => r.map((c) => `"${c}"`).join(','))].join('\n') +
+        '\n',
+    );
+    const html = join(out, 'bulk-report.html');
+    const jsonl = join(out, 'bulk-report.jsonl');
+    const io = memoryIo();
+    await bulkAudit(
+      [
+        csv,
+        '--map-id',
+        'REG_NO',
+        '--map-structure',
+        'SMILES',
+        '--map-form',
+        'STEREO',
+        '--map-descriptors',
+        'DESCRIPTORS',
+      ].concat(['--progress', 'none', '--workers', '1', '--html', html, '--jsonl', jsonl]),
+      io,
+    );
+    const records = (await import('node:fs'))
+      .readFileSync(jsonl, 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
+    const flagged = records.filter(
+      (r) => r.kind === 'record' && r.findings.some((f: { waived: unknown }) => !f.waived),
+    );
+    const drawable = flagged.filter((r) => r.computed !== null);
+    expect(flagged.length).toBeGreaterThanOrEqual(6);
+
+    const browser = await chromium.launch({
+      executablePath: CHROMIUM,
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
+    });
+    try {
+      const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+      const problems: string[] = [];
+      page.on('console', (m) => {
+        if (m.type() === 'error') problems.push(m.text());
+      });
+      page.on('pageerror', (e) => problems.push(String(e)));
+      await page.goto('file://' + html);
+      const visible = () => page.locator('article.rec:not([hidden])').count();
+      expect(await visible()).toBe(flagged.length);
+      // every flagged record whose structure was read has a depiction, and the images decode
+      expect(await page.locator('article.rec img').count()).toBe(drawable.length);
+      const sizes = await page
+        .locator('article.rec img')
+        .evaluateAll((imgs) => imgs.map((i) => (i as HTMLImageElement).naturalWidth));
+      expect(sizes.every((w) => w > 0)).toBe(true);
+      const idsOf = async () => page.locator('article.rec:not([hidden]) h3').allTextContents();
+      const withCheck = (c: string) =>
+        flagged
+          .filter((r) =>
+            r.findings.some((f: { check: string; waived: unknown }) => f.check === c && !f.waived),
+          )
+          .map((r) => r.id);
+
+      await page.selectOption('#filter-check', 'descriptors-match-structure');
+      expect(await idsOf()).toEqual(withCheck('descriptors-match-structure'));
+      expect(await idsOf()).toContain('LX-00002');
+      await page.selectOption('#filter-check', '');
+      await page.selectOption('#filter-severity', 'error');
+      const errors = flagged.filter((r) =>
+        r.findings.some((f: { severity: string; waived: unknown }) => f.severity === 'error' && !f.waived),
+      );
+      expect(await visible()).toBe(errors.length);
+      await page.selectOption('#filter-severity', '');
+      await page.selectOption('#filter-form', 'racemate');
+      expect(await idsOf()).toEqual(flagged.filter((r) => r.declared.form === 'racemate').map((r) => r.id));
+      await page.selectOption('#filter-form', '');
+      await page.fill('#search', 'lx-00003');
+      expect(await idsOf()).toEqual(['LX-00003']);
+      await page.fill('#search', '');
+      expect(await visible()).toBe(flagged.length);
+      await page.screenshot({ path: join(out, 'bulk-report.png'), fullPage: true });
+      expect(problems).toEqual([]);
+    } finally {
+      await browser.close();
+    }
+  }, 120_000);
+});
