@@ -10441,7 +10441,7 @@ function ert(w) {
   function pz(t) {
     Rk();
     var e;
-    e = nl2, (e.startsWith(Pl) || e.startsWith(rl) || e.startsWith(il)) && QY(t, KE);
+    e = nl, (e.startsWith(Pl) || e.startsWith(rl) || e.startsWith(il)) && QY(t, KE);
   }
   function hk(t, e) {
     xr.call(this, t), this.a = c(Ut, Tt, 6, 2, 15, 1), this.a[0] = e, this.a[1] = Ge, this.c = -1;
@@ -17840,7 +17840,7 @@ function ert(w) {
     e.e > A.e && (e2(e, A), HT(e, A));
   }
   function aR() {
-    aR = v1, uS = m(k(Ut, 1), Tt, 6, 15, [5.55, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, FA, FA, FA, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, 7.1, Qe, Qe, 17.78, cr2, 3.82, 6.66, 6.66, 7.78, 11.68, FA, 6.66, FA, FA, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, FA, FA, 11.68, 11.68, 11.68, Qe, 20.3, cr2, cr2, Yf, Yf, cr2, 12.22, 15.56, Yf, FA, 10, cr2, Qe, 16.66, Yf, 15.56, cr2, 15.56, Yf, cr2, 12.22, Yf, cr2, 18.88, cr2, cr2, 12.22, FA, FA, FA, 9.38, Qe, 6.66, Qe, Qe, 10, Qe, Qe, FA, Qe, Qe, 4.44, 4.44, 10, 4.44, 16.66, Qe, Qe, Qe, Qe, 6.66, 10, FA, Qe, 10, Yf, 10, 10, 10, 6.68, 5.2, 6.68, 11.68, 10.5]);
+    aR = v1, uS = m(k(Ut, 1), Tt, 6, 15, [5.55, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, FA, FA, FA, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, 15, FA, FA, 7.1, Qe, Qe, 17.78, cr, 3.82, 6.66, 6.66, 7.78, 11.68, FA, 6.66, FA, FA, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, Qe, FA, FA, 11.68, 11.68, 11.68, Qe, 20.3, cr, cr, Yf, Yf, cr, 12.22, 15.56, Yf, FA, 10, cr, Qe, 16.66, Yf, 15.56, cr, 15.56, Yf, cr, 12.22, Yf, cr, 18.88, cr, cr, 12.22, FA, FA, FA, 9.38, Qe, 6.66, Qe, Qe, 10, Qe, Qe, FA, Qe, Qe, 4.44, 4.44, 10, 4.44, 16.66, Qe, Qe, Qe, Qe, 6.66, 10, FA, Qe, 10, Yf, 10, 10, 10, 6.68, 5.2, 6.68, 11.68, 10.5]);
   }
   function Ua(t, e) {
     var A, n, P, r, i, f, D, Q, o, L;
@@ -22021,7 +22021,7 @@ function ert(w) {
   function T1t(t, e) {
     var A, n, P, r, i, f, D, Q, o, L, s, y, l, h, T, g, v, d, b, j, R, C, E, S, I, a, H, K, tt, X, W, $, st, ht, wt, rt, ct;
     if ((t.fb != ND(t.k) || t.N != Y9(t.k)) && (t.fb = ND(t.k), t.N = Y9(t.k), t.eb < 3 && (t.eb = 3)), P = k3(e), f = xB(e), nA(e, P), K3(e, 0, 0, t.fb, t.N), (t.U & 4) != 0 && t.I.a.length == 0 && (y = 0.5 * t.fb, l = 0.5 * t.N, r = 0.03999999910593033 * t.fb, A = new _D(), G3(A, y - r, l, y + r, l), A.j = true, Ft(t.I, A)), o = false, t.eb != 0) {
-      switch ((t.U & 1) != 0 && t.eb != 5 && rm(t), t.G = (t.U & 4) != 0 ? new zj(new qT(t.L, t.Y), t.I) : (t.U & 2) != 0 ? new Qv(t.L, t.Y, t.I) : (t.U & 1) != 0 ? new kB(t.L, t.I) : new HF(t.V, t.I), UY(t.G, f, P), hI(t.G, t.T), cI(t.G, (t.U & 1) == 0 ? 0 : (L = nl2, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? S5(P, co) : (ni(), P & qn | Bt(w.Math.round(co * ((P & QP) >> 16))) << 16 | Bt(w.Math.round(co * ((P & DP) >> 8))) << 8 | Bt(w.Math.round(co * (P & 255)))))), Nq(t.G, t.$), TI(t.G, t.H | 8 | (t.w == 19 ? 80 : 0)), t.eb) {
+      switch ((t.U & 1) != 0 && t.eb != 5 && rm(t), t.G = (t.U & 4) != 0 ? new zj(new qT(t.L, t.Y), t.I) : (t.U & 2) != 0 ? new Qv(t.L, t.Y, t.I) : (t.U & 1) != 0 ? new kB(t.L, t.I) : new HF(t.V, t.I), UY(t.G, f, P), hI(t.G, t.T), cI(t.G, (t.U & 1) == 0 ? 0 : (L = nl, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? S5(P, co) : (ni(), P & qn | Bt(w.Math.round(co * ((P & QP) >> 16))) << 16 | Bt(w.Math.round(co * ((P & DP) >> 8))) << 8 | Bt(w.Math.round(co * (P & 255)))))), Nq(t.G, t.$), TI(t.G, t.H | 8 | (t.w == 19 ? 80 : 0)), t.eb) {
         case 6:
         case 4:
         case 5:
@@ -22052,10 +22052,10 @@ function ert(w) {
         if (t.q > 0 && Z9(e, Bt(t.hb), Bt(t.kb), Bt(t.o[0]), Bt(t.p[0])), t.q > 1) for (Q = 1; Q < t.q; Q++) Z9(e, Bt(t.o[Q - 1]), Bt(t.p[Q - 1]), Bt(t.o[Q]), Bt(t.p[Q]));
         break;
       case 5:
-        nA(e, (v = (d = KD(e), d != 0 ? d : Al), F5(v, (s = nl2, s.startsWith(Pl) || s.startsWith(rl) || s.startsWith(il) ? AE : nE)))), dG(e, new uD(t.R)), nA(e, f);
+        nA(e, (v = (d = KD(e), d != 0 ? d : Al), F5(v, (s = nl, s.startsWith(Pl) || s.startsWith(rl) || s.startsWith(il) ? AE : nE)))), dG(e, new uD(t.R)), nA(e, f);
         break;
       case 6:
-        S = t.hb < t.ib ? Bt(t.hb) : Bt(t.ib), X = t.kb < t.lb ? Bt(t.kb) : Bt(t.lb), E = Bt(w.Math.abs(t.ib - t.hb)), D = Bt(w.Math.abs(t.lb - t.kb)), nA(e, (b = (g = KD(e), g != 0 ? g : Al), F5(b, (L = nl2, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? AE : nE)))), ct = e.Lc(), ct.drawRectangle(S, X, E, D), nA(e, f);
+        S = t.hb < t.ib ? Bt(t.hb) : Bt(t.ib), X = t.kb < t.lb ? Bt(t.kb) : Bt(t.lb), E = Bt(w.Math.abs(t.ib - t.hb)), D = Bt(w.Math.abs(t.lb - t.kb)), nA(e, (b = (g = KD(e), g != 0 ? g : Al), F5(b, (L = nl, L.startsWith(Pl) || L.startsWith(rl) || L.startsWith(il) ? AE : nE)))), ct = e.Lc(), ct.drawRectangle(S, X, E, D), nA(e, f);
         break;
       case 8:
         I = Bt(t.hb), W = Bt(t.kb), t.t == -1 || t.t == t.e ? (a = Bt(t.ib), $ = Bt(t.lb)) : (a = Bt(mt(t.V, t.t)), $ = Bt(Rt(t.V, t.t))), nA(e, (n = k3(e), as(-8388608, n))), Z9(e, I, W, a, $), nA(e, f);
@@ -23888,7 +23888,7 @@ function ert(w) {
 Actelion Java MolfileCreator 2.0
 
   0  0  0  0  0  0              0 V3000
-`, ZC = "M  V30 BEGIN PRODUCT", WC = 2475109711874, _C = 2475109711875, $C = 2887426572290, aC = 2887426572291, tH = 2887627898882, eH = 2887627898883, AH = 2887627997186, nH = 3437182386178, PH = 3437182386179, rH = 3437383712770, iH = 3437383811074, fH = 3437652148226, DH = 3437652377602, uH = 4674132967426, QH = 4674334294018, oH = 4674334392322, UH = 4674602729474, LH = 4674602958850, sH = 5086449827842, yH = 5086449827848, lH = 5086651154434, hH = 5086651252738, TH = 5086651252743, cH = 5086919589890, wH = 5086919688194, gH = 5636406968322, dH = 5636407066626, BH = 5636675502082, vH = { l: 589826, m: 590112, h: 4 }, FH = { l: 589827, m: 590112, h: 4 }, kH = { l: 589826, m: 590160, h: 4 }, mH = { l: 589827, m: 590160, h: 4 }, bH = { l: 688130, m: 590160, h: 4 }, jH = { l: 589826, m: 590224, h: 4 }, RH = { l: 589827, m: 590224, h: 4 }, pH = { l: 819203, m: 590224, h: 4 }, MH = { l: 589826, m: 590368, h: 4 }, CH = { l: 688130, m: 590368, h: 4 }, HH = { l: 819202, m: 590368, h: 4 }, VH = { l: 819208, m: 590368, h: 4 }, EH = { l: 589826, m: 590416, h: 4 }, SH = { l: 589832, m: 590416, h: 4 }, IH = { l: 688130, m: 590416, h: 4 }, xH = { l: 819202, m: 590416, h: 4 }, NH = { l: 589826, m: 598304, h: 4 }, GH = { l: 589827, m: 598304, h: 4 }, OH = { l: 688130, m: 598304, h: 4 }, qH = { l: 1114114, m: 598304, h: 4 }, zH = { l: 1212418, m: 598304, h: 4 }, KH = { l: 589826, m: 598308, h: 4 }, JH = { l: 589826, m: 688416, h: 4 }, YH = { l: 589826, m: 688464, h: 4 }, XH = { l: 589826, m: 688720, h: 4 }, ZH = { l: 688130, m: 688720, h: 4 }, WH = { l: 589826, m: 590112, h: 288 }, _H = { l: 589826, m: 590112, h: 336 }, $H = { l: 589826, m: 688416, h: 336 }, aH = { l: 589826, m: 688464, h: 336 }, tV = { l: 688130, m: 688464, h: 336 }, eV = { l: 589826, m: 590112, h: 400 }, AV = { l: 589826, m: 688416, h: 400 }, nV = { l: 589826, m: 688464, h: 400 }, PV = { l: 688130, m: 688464, h: 400 }, rV = { l: 589826, m: 819488, h: 400 }, iV = { l: 589826, m: 819536, h: 400 }, fV = { l: 589826, m: 819600, h: 400 }, DV = { l: 688130, m: 819600, h: 400 }, uV = { l: 819202, m: 819600, h: 400 }, QV = { l: 589831, m: 688416, h: 592 }, oV = { l: 589831, m: 688464, h: 592 }, UV = { l: 688135, m: 688464, h: 592 }, LV = { l: 589831, m: 819536, h: 592 }, sV = { l: 688135, m: 819536, h: 592 }, yV = { l: 688135, m: 819600, h: 592 }, lV = { l: 589832, m: 1212704, h: 592 }, hV = { l: 589832, m: 1212752, h: 592 }, TV = { l: 688136, m: 1212752, h: 592 }, cV = { l: 589831, m: 688464, h: 656 }, wV = { l: 589826, m: 590112, h: 8480 }, gV = { l: 589826, m: 688416, h: 8480 }, dV = { l: 589826, m: 688464, h: 8480 }, BV = { l: 688130, m: 688464, h: 8480 }, vV = { l: 819202, m: 819600, h: 8480 }, FV = { l: 688135, m: 1212752, h: 8480 }, kV = { l: 589832, m: 1213008, h: 8480 }, mV = { l: 688136, m: 1213008, h: 8480 }, bV = { l: 589826, m: 590112, h: 8484 }, jV = { l: 589826, m: 590160, h: 8484 }, RV = { l: 688130, m: 598304, h: 8484 }, pV = 0.6262000203132629, MV = -1.3825000524520874, Zy = 0.33169999718666077, CV = -1.4915000200271606, HV = 0.3540000021457672, VV = 0.38179999589920044, EV = -0.6019999980926514, SV = 0.07999999821186066, IV = -0.7379999756813049, xV = "Atom-types are 64-bit numbers describing atoms and their near surrounding.", k4 = "Recognized atom types and their contributions are:", NV = "Druglikeness predictor not properly initialized.", GV = 3.009999990463257, OV = -0.17000000178813934, qV = -0.1809999942779541, zV = -0.2029999941587448, ko = 2147483648, KV = "ene-Metathesis", JV = "Halogenation ring closure", YV = " (rootPairSets:", Wy = -1e10, _y = { 208: 1, 4: 1, 9: 1, 5: 1, 8: 1, 30: 1 }, $y = -99999, b8 = "any", XV = "is not in a ring", m4 = "Excluded atoms:", ay = "exactly 1", tl = "exactly 2", b4 = "less than 3", ZV = "less than 4", el = "at least 1", j4 = "at least 2", R4 = "at least 3", WV = "at least 4", p4 = "1 or 2", _V = "less than 2", $V = "Allowed atoms:", qf = { 138: 1 }, aV = "Atom Properties", Al = -8346432, tE = "/html/editor/editor.html", eE = "Structure Editor Help", nl2 = "Dummy look and feel", Pl = "Substance Graphite", rl = "Radiance Graphite", il = "Radiance Night", AE = 0.6499999761581421, nE = 0.3499999940395355, zf = 0.800000011920929, M4 = "editorButtons.png", PE = "esrButtons.png", C4 = -1774190527, H4 = -1438646166, x2 = -1433403286, fl = -1431655766, Dl = -1448432982, Tr = 1073741866, Kf = 1073741930, V4 = "MMFF94", E4 = "MMFF94s", rE = "/resources/forcefield/mmff94/94s/outofplane.csv", iE = "cleaveRings", ul = { 152: 1, 4: 1, 5: 1, 8: 1 }, mo = "undefined", fE = 0.08726646502812703, DE = "overlapping", S4 = 0.003921568859368563, I4 = "anonymous", x4 = "Unknown", Pn = 1048575, UP = 17592186044416, Jf = 1e9, N2 = -17592186044416, FA = 5.56, Qe = 11.12, cr2 = 13.34, Yf = 14.44, bo = 0.3010299956639812, uE = "BigInteger divide by zero", g1 = 4294967295, QE = { l: 0, m: 0, h: 524288 }, Ql = { 32: 1, 115: 1 }, N4 = { 107: 1, 111: 1 }, G2 = { 35: 1, 41: 1, 37: 1, 87: 1 }, ol = 16777619, oE = { 35: 1, 37: 1, 87: 1 }, Ul = 15525485, UE = 5960464477539063e-23, G4 = 16777216, Ll = { 4: 1, 32: 1, 55: 1, 83: 1 }, O4 = "Invalid UTF8 sequence", q4 = 0.20000000298023224, LE = " distance:", sE = { 4: 1, 5: 1, 10: 1, 8: 1, 475: 1 }, O2 = { 50: 1 }, U, jo, sl, b1t = -1;
+`, ZC = "M  V30 BEGIN PRODUCT", WC = 2475109711874, _C = 2475109711875, $C = 2887426572290, aC = 2887426572291, tH = 2887627898882, eH = 2887627898883, AH = 2887627997186, nH = 3437182386178, PH = 3437182386179, rH = 3437383712770, iH = 3437383811074, fH = 3437652148226, DH = 3437652377602, uH = 4674132967426, QH = 4674334294018, oH = 4674334392322, UH = 4674602729474, LH = 4674602958850, sH = 5086449827842, yH = 5086449827848, lH = 5086651154434, hH = 5086651252738, TH = 5086651252743, cH = 5086919589890, wH = 5086919688194, gH = 5636406968322, dH = 5636407066626, BH = 5636675502082, vH = { l: 589826, m: 590112, h: 4 }, FH = { l: 589827, m: 590112, h: 4 }, kH = { l: 589826, m: 590160, h: 4 }, mH = { l: 589827, m: 590160, h: 4 }, bH = { l: 688130, m: 590160, h: 4 }, jH = { l: 589826, m: 590224, h: 4 }, RH = { l: 589827, m: 590224, h: 4 }, pH = { l: 819203, m: 590224, h: 4 }, MH = { l: 589826, m: 590368, h: 4 }, CH = { l: 688130, m: 590368, h: 4 }, HH = { l: 819202, m: 590368, h: 4 }, VH = { l: 819208, m: 590368, h: 4 }, EH = { l: 589826, m: 590416, h: 4 }, SH = { l: 589832, m: 590416, h: 4 }, IH = { l: 688130, m: 590416, h: 4 }, xH = { l: 819202, m: 590416, h: 4 }, NH = { l: 589826, m: 598304, h: 4 }, GH = { l: 589827, m: 598304, h: 4 }, OH = { l: 688130, m: 598304, h: 4 }, qH = { l: 1114114, m: 598304, h: 4 }, zH = { l: 1212418, m: 598304, h: 4 }, KH = { l: 589826, m: 598308, h: 4 }, JH = { l: 589826, m: 688416, h: 4 }, YH = { l: 589826, m: 688464, h: 4 }, XH = { l: 589826, m: 688720, h: 4 }, ZH = { l: 688130, m: 688720, h: 4 }, WH = { l: 589826, m: 590112, h: 288 }, _H = { l: 589826, m: 590112, h: 336 }, $H = { l: 589826, m: 688416, h: 336 }, aH = { l: 589826, m: 688464, h: 336 }, tV = { l: 688130, m: 688464, h: 336 }, eV = { l: 589826, m: 590112, h: 400 }, AV = { l: 589826, m: 688416, h: 400 }, nV = { l: 589826, m: 688464, h: 400 }, PV = { l: 688130, m: 688464, h: 400 }, rV = { l: 589826, m: 819488, h: 400 }, iV = { l: 589826, m: 819536, h: 400 }, fV = { l: 589826, m: 819600, h: 400 }, DV = { l: 688130, m: 819600, h: 400 }, uV = { l: 819202, m: 819600, h: 400 }, QV = { l: 589831, m: 688416, h: 592 }, oV = { l: 589831, m: 688464, h: 592 }, UV = { l: 688135, m: 688464, h: 592 }, LV = { l: 589831, m: 819536, h: 592 }, sV = { l: 688135, m: 819536, h: 592 }, yV = { l: 688135, m: 819600, h: 592 }, lV = { l: 589832, m: 1212704, h: 592 }, hV = { l: 589832, m: 1212752, h: 592 }, TV = { l: 688136, m: 1212752, h: 592 }, cV = { l: 589831, m: 688464, h: 656 }, wV = { l: 589826, m: 590112, h: 8480 }, gV = { l: 589826, m: 688416, h: 8480 }, dV = { l: 589826, m: 688464, h: 8480 }, BV = { l: 688130, m: 688464, h: 8480 }, vV = { l: 819202, m: 819600, h: 8480 }, FV = { l: 688135, m: 1212752, h: 8480 }, kV = { l: 589832, m: 1213008, h: 8480 }, mV = { l: 688136, m: 1213008, h: 8480 }, bV = { l: 589826, m: 590112, h: 8484 }, jV = { l: 589826, m: 590160, h: 8484 }, RV = { l: 688130, m: 598304, h: 8484 }, pV = 0.6262000203132629, MV = -1.3825000524520874, Zy = 0.33169999718666077, CV = -1.4915000200271606, HV = 0.3540000021457672, VV = 0.38179999589920044, EV = -0.6019999980926514, SV = 0.07999999821186066, IV = -0.7379999756813049, xV = "Atom-types are 64-bit numbers describing atoms and their near surrounding.", k4 = "Recognized atom types and their contributions are:", NV = "Druglikeness predictor not properly initialized.", GV = 3.009999990463257, OV = -0.17000000178813934, qV = -0.1809999942779541, zV = -0.2029999941587448, ko = 2147483648, KV = "ene-Metathesis", JV = "Halogenation ring closure", YV = " (rootPairSets:", Wy = -1e10, _y = { 208: 1, 4: 1, 9: 1, 5: 1, 8: 1, 30: 1 }, $y = -99999, b8 = "any", XV = "is not in a ring", m4 = "Excluded atoms:", ay = "exactly 1", tl = "exactly 2", b4 = "less than 3", ZV = "less than 4", el = "at least 1", j4 = "at least 2", R4 = "at least 3", WV = "at least 4", p4 = "1 or 2", _V = "less than 2", $V = "Allowed atoms:", qf = { 138: 1 }, aV = "Atom Properties", Al = -8346432, tE = "/html/editor/editor.html", eE = "Structure Editor Help", nl = "Dummy look and feel", Pl = "Substance Graphite", rl = "Radiance Graphite", il = "Radiance Night", AE = 0.6499999761581421, nE = 0.3499999940395355, zf = 0.800000011920929, M4 = "editorButtons.png", PE = "esrButtons.png", C4 = -1774190527, H4 = -1438646166, x2 = -1433403286, fl = -1431655766, Dl = -1448432982, Tr = 1073741866, Kf = 1073741930, V4 = "MMFF94", E4 = "MMFF94s", rE = "/resources/forcefield/mmff94/94s/outofplane.csv", iE = "cleaveRings", ul = { 152: 1, 4: 1, 5: 1, 8: 1 }, mo = "undefined", fE = 0.08726646502812703, DE = "overlapping", S4 = 0.003921568859368563, I4 = "anonymous", x4 = "Unknown", Pn = 1048575, UP = 17592186044416, Jf = 1e9, N2 = -17592186044416, FA = 5.56, Qe = 11.12, cr = 13.34, Yf = 14.44, bo = 0.3010299956639812, uE = "BigInteger divide by zero", g1 = 4294967295, QE = { l: 0, m: 0, h: 524288 }, Ql = { 32: 1, 115: 1 }, N4 = { 107: 1, 111: 1 }, G2 = { 35: 1, 41: 1, 37: 1, 87: 1 }, ol = 16777619, oE = { 35: 1, 37: 1, 87: 1 }, Ul = 15525485, UE = 5960464477539063e-23, G4 = 16777216, Ll = { 4: 1, 32: 1, 55: 1, 83: 1 }, O4 = "Invalid UTF8 sequence", q4 = 0.20000000298023224, LE = " distance:", sE = { 4: 1, 5: 1, 10: 1, 8: 1, 475: 1 }, O2 = { 50: 1 }, U, jo, sl, b1t = -1;
   w.goog = w.goog || {}, w.goog.global = w.goog.global || w, jo = {}, p(1, null, {}, u1), U.mb = function(e) {
     return zg(this, e);
   }, U.nb = function() {
@@ -27999,7 +27999,9 @@ function buildGraph2(s) {
       for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
     }
   });
-  const mass = s.atoms.map((a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber));
+  const mass = s.atoms.map(
+    (a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)
+  );
   const g = {
     s,
     n,
@@ -28043,7 +28045,8 @@ function fixedByRing(g, e) {
 function expandedValence(s, a, orders) {
   const at2 = s.atoms[a];
   const z = at2.atomicNumber;
-  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53) return false;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53)
+    return false;
   const v = orders.reduce((x, y) => x + y, 0) + at2.hCount;
   switch (z) {
     case 15:
@@ -28181,7 +28184,16 @@ var init_digraph = __esm({
         this.count++;
         const g = this.g;
         if (z >= 0 && parent !== null) {
-          return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
+          return new CipNode(
+            this.nextId++,
+            atom,
+            z,
+            mancudeOf(g).dupMass[parent.atom],
+            depth,
+            dist,
+            true,
+            parent
+          );
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
@@ -28241,6 +28253,15 @@ var init_digraph = __esm({
 });
 
 // src/chem/cip/rules.ts
+function rule1a(n) {
+  return n.z;
+}
+function rule1b(n) {
+  return -n.dist;
+}
+function rule2(n) {
+  return n.mass;
+}
 function rule3(label) {
   return label === "Z" ? 2 : label === "E" ? 1 : 0;
 }
@@ -28253,6 +28274,9 @@ function rule4c(label) {
 }
 function rule5(label) {
   return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
+}
+function rule6(n, ref) {
+  return n.atom === ref ? 1 : 0;
 }
 function likeClass(label) {
   return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
@@ -28330,7 +28354,9 @@ function orderedPairs(rk, x, fx, refClass, memo) {
       while (b < nodes.length && s.tie[b]) b++;
       if (b - a > 1) {
         const run11 = nodes.slice(a, b);
-        run11.sort((u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)));
+        run11.sort(
+          (u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo))
+        );
         for (let k = a; k < b; k++) nodes[k] = run11[k - a];
       }
       a = b;
@@ -28381,7 +28407,7 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker, EMPTY;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, Ranker, EMPTY;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
@@ -28397,6 +28423,14 @@ var init_compare = __esm({
     RULE_4C = 6;
     RULE_52 = 7;
     RULE_62 = 8;
+    rule1a2 = rule1a;
+    rule1b2 = rule1b;
+    rule22 = rule2;
+    rule32 = rule3;
+    rule4a2 = rule4a;
+    rule4c2 = rule4c;
+    rule52 = rule5;
+    rule62 = rule6;
     Ranker = class {
       constructor(dg, auxOf) {
         this.dg = dg;
@@ -28405,7 +28439,17 @@ var init_compare = __esm({
         const g = dg.g;
         const several = g.stereoCount > 1;
         const isotopes = g.s.atoms.some((a) => a.isotope !== null);
-        this.active = [true, true, isotopes, g.hasBondStereo && several, several, several, several, several, false];
+        this.active = [
+          true,
+          true,
+          isotopes,
+          g.hasBondStereo && several,
+          several,
+          several,
+          several,
+          several,
+          false
+        ];
       }
       dg;
       auxOf;
@@ -28454,24 +28498,24 @@ var init_compare = __esm({
         this.dg.rule6Ref = ref;
         this.active[RULE_62] = ref >= 0;
       }
-      value(rule2, n) {
-        switch (rule2) {
+      value(rule4, n) {
+        switch (rule4) {
           case RULE_1A:
-            return n.z;
+            return rule1a2(n);
           case RULE_1B:
-            return -n.dist;
+            return rule1b2(n);
           case RULE_2:
-            return n.mass;
+            return rule22(n);
           case RULE_3:
-            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
+            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule32(this.aux(n));
           case RULE_4A2:
-            return this.stereoValue(n, rule4a);
+            return this.stereoValue(n, rule4a2);
           case RULE_4C:
-            return this.stereoValue(n, rule4c);
+            return this.stereoValue(n, rule4c2);
           case RULE_52:
-            return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
+            return this.stereoValue(n, this.mirror ? (l) => rule52(invertChiral(l)) : rule52);
           case RULE_62:
-            return n.atom === this.dg.rule6Ref ? 1 : 0;
+            return rule62(n, this.dg.rule6Ref);
           default:
             return 0;
         }
@@ -28486,10 +28530,10 @@ var init_compare = __esm({
        * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
        * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
        */
-      compareRule(rule2, x, fx, y, fy) {
+      compareRule(rule4, x, fx, y, fy) {
         if (y === null) return 1;
-        if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
-        let c = this.value(rule2, x) - this.value(rule2, y);
+        if (rule4 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+        let c = this.value(rule4, x) - this.value(rule4, y);
         if (c !== 0) return c > 0 ? 1 : -1;
         if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
         const d = this.depth++;
@@ -28506,17 +28550,17 @@ var init_compare = __esm({
         qfy.push(fy);
         try {
           for (let i = 0; i < qx.length; i++) {
-            const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
-            const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
+            const sx = this.sorted(qx[i], qfx[i], rule4).nodes;
+            const sy = this.sorted(qy[i], qfy[i], rule4).nodes;
             const m = Math.min(sx.length, sy.length);
             for (let j = 0; j < m; j++) {
-              c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
+              c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
               if (c !== 0) return c > 0 ? 1 : -1;
             }
-            if (sx.length !== sy.length && rule2 === RULE_1A) {
+            if (sx.length !== sy.length && rule4 === RULE_1A) {
               const longer = sx.length > sy.length ? sx : sy;
               for (let j = m; j < longer.length; j++) {
-                if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
+                if (this.value(rule4, longer[j]) > 0) return longer === sx ? 1 : -1;
               }
             }
             for (let j = 0; j < m; j++) {
@@ -28605,11 +28649,11 @@ var init_compare = __esm({
        * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
        * first, writing them and their ties into `out` at the same places.
        */
-      sortRun(nodes, i, j, centre, rule2, out) {
+      sortRun(nodes, i, j, centre, rule4, out) {
         if (j - i === 2) {
           const a = nodes[i];
           const b = nodes[i + 1];
-          const c = this.compareRule(rule2, a, centre, b, centre);
+          const c = this.compareRule(rule4, a, centre, b, centre);
           out.nodes[i] = c < 0 ? b : a;
           out.nodes[i + 1] = c < 0 ? a : b;
           out.tie[i] = false;
@@ -28621,7 +28665,7 @@ var init_compare = __esm({
         const m = new Array(k * k).fill(0);
         for (let a = 0; a < k; a++) {
           for (let b = a + 1; b < k; b++) {
-            const c = this.compareRule(rule2, run11[a], centre, run11[b], centre);
+            const c = this.compareRule(rule4, run11[a], centre, run11[b], centre);
             m[a * k + b] = c;
             m[b * k + a] = -c;
           }
@@ -28670,7 +28714,10 @@ function rankLigands(rk, centre, ligands, level2) {
       m[j][i] = -c;
     }
   }
-  const order = insertionSort(ligands.map((_, i) => i), (a, b) => m[a][b]);
+  const order = insertionSort(
+    ligands.map((_, i) => i),
+    (a, b) => m[a][b]
+  );
   const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
   const tied = tieWithPrev.some((t) => t);
   let pseudo = false;
@@ -28689,7 +28736,10 @@ function rankLigands(rk, centre, ligands, level2) {
     } finally {
       rk.mirror = saved;
     }
-    const mirror2 = insertionSort(ligands.map((_, i) => i), (a, b) => mm[a][b]);
+    const mirror2 = insertionSort(
+      ligands.map((_, i) => i),
+      (a, b) => mm[a][b]
+    );
     const pos = new Array(k);
     order.forEach((li, p) => pos[li] = p);
     pseudo = !isEvenPermutation(mirror2.map((li) => pos[li]));
@@ -28788,15 +28838,15 @@ function endBranches(dg, end, from, other) {
 function endRank(rk, end, cands, ref, level2 = RULE_5) {
   if (cands.length === 0) return null;
   let top = cands[0];
-  let rule52 = false;
+  let rule53 = false;
   if (cands.length >= 2) {
     const c = rk.compareUpTo(level2, cands[0], end, cands[1], end);
     if (c === 0) return null;
     top = c > 0 ? cands[0] : cands[1];
-    rule52 = Math.abs(c) - 1 === RULE_5;
+    rule53 = Math.abs(c) - 1 === RULE_5;
   }
   const refHigh = ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
-  return { refHigh, rule5: rule52 };
+  return { refHigh, rule5: rule53 };
 }
 function ezLabel(e, end0, end1) {
   const cis = e.relation === "cis" ? end0.refHigh === end1.refHigh : end0.refHigh !== end1.refHigh;
@@ -28940,7 +28990,8 @@ function tiedTetrahedral(g, index, e) {
   const out = [];
   for (let i = 1; i < r.order.length; i++) {
     if (!r.tieWithPrev[i]) continue;
-    for (const k of [r.order[i - 1], r.order[i]]) if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
+    for (const k of [r.order[i - 1], r.order[i]])
+      if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
   }
   return out;
 }
@@ -34628,9 +34679,9 @@ var require_compose_collection = __commonJS({
       const tagToken = props.tag;
       const tagName = !tagToken ? null : ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg));
       if (token.type === "block-seq") {
-        const { anchor, newlineAfterProp: nl2 } = props;
+        const { anchor, newlineAfterProp: nl } = props;
         const lastProp = anchor && tagToken ? anchor.offset > tagToken.offset ? anchor : tagToken : anchor ?? tagToken;
-        if (lastProp && (!nl2 || nl2.offset < lastProp.offset)) {
+        if (lastProp && (!nl || nl.offset < lastProp.offset)) {
           const message = "Missing newline after block sequence props";
           onError(lastProp, "MISSING_CHAR", message);
         }
@@ -35703,9 +35754,9 @@ var require_cst_scalar = __commonJS({
         case "block-map":
         case "block-seq": {
           const offset = token.offset + source.length;
-          const nl2 = { type: "newline", offset, indent: token.indent, source: "\n" };
+          const nl = { type: "newline", offset, indent: token.indent, source: "\n" };
           delete token.items;
-          Object.assign(token, { type, source, end: [nl2] });
+          Object.assign(token, { type, source, end: [nl] });
           break;
         }
         default: {
@@ -36196,18 +36247,18 @@ var require_lexer = __commonJS({
         }
       }
       *parseFlowCollection() {
-        let nl2, sp;
+        let nl, sp;
         let indent = -1;
         do {
-          nl2 = yield* this.pushNewline();
-          if (nl2 > 0) {
+          nl = yield* this.pushNewline();
+          if (nl > 0) {
             sp = yield* this.pushSpaces(false);
             this.indentValue = indent = sp;
           } else {
             sp = 0;
           }
           sp += yield* this.pushSpaces(true);
-        } while (nl2 + sp > 0);
+        } while (nl + sp > 0);
         const line = this.getLine();
         if (line === null)
           return this.setNext("flow");
@@ -36283,16 +36334,16 @@ var require_lexer = __commonJS({
           }
         }
         const qb = this.buffer.substring(0, end);
-        let nl2 = qb.indexOf("\n", this.pos);
-        if (nl2 !== -1) {
-          while (nl2 !== -1) {
-            const cs = this.continueScalar(nl2 + 1);
+        let nl = qb.indexOf("\n", this.pos);
+        if (nl !== -1) {
+          while (nl !== -1) {
+            const cs = this.continueScalar(nl + 1);
             if (cs === -1)
               break;
-            nl2 = qb.indexOf("\n", cs);
+            nl = qb.indexOf("\n", cs);
           }
-          if (nl2 !== -1) {
-            end = nl2 - (qb[nl2 - 1] === "\r" ? 2 : 1);
+          if (nl !== -1) {
+            end = nl - (qb[nl - 1] === "\r" ? 2 : 1);
           }
         }
         if (end === -1) {
@@ -36319,7 +36370,7 @@ var require_lexer = __commonJS({
         return yield* this.pushUntil((ch) => isEmpty(ch) || ch === "#");
       }
       *parseBlockScalar() {
-        let nl2 = this.pos - 1;
+        let nl = this.pos - 1;
         let indent = 0;
         let ch;
         loop: for (let i2 = this.pos; ch = this.buffer[i2]; ++i2) {
@@ -36328,7 +36379,7 @@ var require_lexer = __commonJS({
               indent += 1;
               break;
             case "\n":
-              nl2 = i2;
+              nl = i2;
               indent = 0;
               break;
             case "\r": {
@@ -36352,28 +36403,28 @@ var require_lexer = __commonJS({
             this.indentNext = this.blockScalarIndent + (this.indentNext === 0 ? 1 : this.indentNext);
           }
           do {
-            const cs = this.continueScalar(nl2 + 1);
+            const cs = this.continueScalar(nl + 1);
             if (cs === -1)
               break;
-            nl2 = this.buffer.indexOf("\n", cs);
-          } while (nl2 !== -1);
-          if (nl2 === -1) {
+            nl = this.buffer.indexOf("\n", cs);
+          } while (nl !== -1);
+          if (nl === -1) {
             if (!this.atEnd)
               return this.setNext("block-scalar");
-            nl2 = this.buffer.length;
+            nl = this.buffer.length;
           }
         }
-        let i = nl2 + 1;
+        let i = nl + 1;
         ch = this.buffer[i];
         while (ch === " ")
           ch = this.buffer[++i];
         if (ch === "	") {
           while (ch === "	" || ch === " " || ch === "\r" || ch === "\n")
             ch = this.buffer[++i];
-          nl2 = i - 1;
+          nl = i - 1;
         } else if (!this.blockScalarKeep) {
           do {
-            let i2 = nl2 - 1;
+            let i2 = nl - 1;
             let ch2 = this.buffer[i2];
             if (ch2 === "\r")
               ch2 = this.buffer[--i2];
@@ -36381,13 +36432,13 @@ var require_lexer = __commonJS({
             while (ch2 === " ")
               ch2 = this.buffer[--i2];
             if (ch2 === "\n" && i2 >= this.pos && i2 + 1 + indent > lastChar)
-              nl2 = i2;
+              nl = i2;
             else
               break;
           } while (true);
         }
         yield cst.SCALAR;
-        yield* this.pushToIndex(nl2 + 1, true);
+        yield* this.pushToIndex(nl + 1, true);
         return yield* this.parseLineStart();
       }
       *parsePlainScalar() {
@@ -36666,7 +36717,7 @@ var require_parser = __commonJS({
         }
       }
     }
-    var Parser2 = class {
+    var Parser = class {
       /**
        * @param onNewLine - If defined, called separately with the start position of
        *   each new line (in `parse()`, including the start of input).
@@ -36972,10 +37023,10 @@ var require_parser = __commonJS({
             this.atNewLine = true;
             this.indent = 0;
             if (this.onNewLine) {
-              let nl2 = this.source.indexOf("\n") + 1;
-              while (nl2 !== 0) {
-                this.onNewLine(this.offset + nl2);
-                nl2 = this.source.indexOf("\n", nl2) + 1;
+              let nl = this.source.indexOf("\n") + 1;
+              while (nl !== 0) {
+                this.onNewLine(this.offset + nl);
+                nl = this.source.indexOf("\n", nl) + 1;
               }
             }
             yield* this.pop();
@@ -37030,25 +37081,25 @@ var require_parser = __commonJS({
           const atNextItem = atMapIndent && (it.sep || it.explicitKey) && this.type !== "seq-item-ind";
           let start = [];
           if (atNextItem && it.sep && !it.value) {
-            const nl2 = [];
+            const nl = [];
             for (let i = 0; i < it.sep.length; ++i) {
               const st = it.sep[i];
               switch (st.type) {
                 case "newline":
-                  nl2.push(i);
+                  nl.push(i);
                   break;
                 case "space":
                   break;
                 case "comment":
                   if (st.indent > map.indent)
-                    nl2.length = 0;
+                    nl.length = 0;
                   break;
                 default:
-                  nl2.length = 0;
+                  nl.length = 0;
               }
             }
-            if (nl2.length >= 2)
-              start = it.sep.splice(nl2[1]);
+            if (nl.length >= 2)
+              start = it.sep.splice(nl[1]);
           }
           switch (this.type) {
             case "anchor":
@@ -37325,10 +37376,10 @@ var require_parser = __commonJS({
       }
       flowScalar(type) {
         if (this.onNewLine) {
-          let nl2 = this.source.indexOf("\n") + 1;
-          while (nl2 !== 0) {
-            this.onNewLine(this.offset + nl2);
-            nl2 = this.source.indexOf("\n", nl2) + 1;
+          let nl = this.source.indexOf("\n") + 1;
+          while (nl !== 0) {
+            this.onNewLine(this.offset + nl);
+            nl = this.source.indexOf("\n", nl) + 1;
           }
         }
         return {
@@ -37439,7 +37490,7 @@ var require_parser = __commonJS({
         }
       }
     };
-    exports.Parser = Parser2;
+    exports.Parser = Parser;
   }
 });
 
@@ -37492,7 +37543,7 @@ var require_public_api = __commonJS({
       }
       return doc;
     }
-    function parse4(src, reviver, options) {
+    function parse3(src, reviver, options) {
       let _reviver = void 0;
       if (typeof reviver === "function") {
         _reviver = reviver;
@@ -37533,7 +37584,7 @@ var require_public_api = __commonJS({
         return value.toString(options);
       return new Document.Document(value, _replacer, options).toString(options);
     }
-    exports.parse = parse4;
+    exports.parse = parse3;
     exports.parseAllDocuments = parseAllDocuments;
     exports.parseDocument = parseDocument2;
     exports.stringify = stringify;
@@ -39033,12 +39084,12 @@ var require_applicability = __commonJS({
     }
     exports.schemaHasRulesForType = schemaHasRulesForType;
     function shouldUseGroup(schema, group) {
-      return group.rules.some((rule2) => shouldUseRule(schema, rule2));
+      return group.rules.some((rule4) => shouldUseRule(schema, rule4));
     }
     exports.shouldUseGroup = shouldUseGroup;
-    function shouldUseRule(schema, rule2) {
+    function shouldUseRule(schema, rule4) {
       var _a;
-      return schema[rule2.keyword] !== void 0 || ((_a = rule2.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
+      return schema[rule4.keyword] !== void 0 || ((_a = rule4.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
     }
     exports.shouldUseRule = shouldUseRule;
   }
@@ -40090,9 +40141,9 @@ var require_validate = __commonJS({
       if (useDefaults)
         (0, defaults_1.assignDefaults)(it, group.type);
       gen.block(() => {
-        for (const rule2 of group.rules) {
-          if ((0, applicability_1.shouldUseRule)(schema, rule2)) {
-            keywordCode(it, rule2.keyword, rule2.definition, group.type);
+        for (const rule4 of group.rules) {
+          if ((0, applicability_1.shouldUseRule)(schema, rule4)) {
+            keywordCode(it, rule4.keyword, rule4.definition, group.type);
           }
         }
       });
@@ -40127,9 +40178,9 @@ var require_validate = __commonJS({
     function checkKeywordTypes(it, ts) {
       const rules = it.self.RULES.all;
       for (const keyword in rules) {
-        const rule2 = rules[keyword];
-        if (typeof rule2 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule2)) {
-          const { type } = rule2.definition;
+        const rule4 = rules[keyword];
+        if (typeof rule4 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule4)) {
+          const { type } = rule4.definition;
           if (type.length && !type.some((t) => hasApplicableType(ts, t))) {
             strictTypesError(it, `missing type "${type.join(",")}" for keyword "${keyword}"`);
           }
@@ -41430,7 +41481,7 @@ var require_fast_uri = __commonJS({
         normalizeString(uri, options);
       } else if (typeof uri === "object") {
         uri = /** @type {T} */
-        parse4(serialize(uri, options), options);
+        parse3(serialize(uri, options), options);
       }
       return uri;
     }
@@ -41473,8 +41524,8 @@ var require_fast_uri = __commonJS({
     function resolveComponent(base, relative4, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
-        base = parse4(serialize(base, options), options);
-        relative4 = parse4(serialize(relative4, options), options);
+        base = parse3(serialize(base, options), options);
+        relative4 = parse3(serialize(relative4, options), options);
       }
       options = options || {};
       if (!options.tolerant && relative4.scheme) {
@@ -41792,7 +41843,7 @@ var require_fast_uri = __commonJS({
       }
       return { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
     }
-    function parse4(uri, opts) {
+    function parse3(uri, opts) {
       return parseWithStatus(uri, opts).parsed;
     }
     function normalizeString(uri, opts) {
@@ -41829,7 +41880,7 @@ var require_fast_uri = __commonJS({
       resolveComponent,
       equal,
       serialize,
-      parse: parse4
+      parse: parse3
     };
     module.exports = fastUri;
     module.exports.default = fastUri;
@@ -42215,8 +42266,8 @@ var require_core = __commonJS({
         return this;
       }
       getKeyword(keyword) {
-        const rule2 = this.RULES.all[keyword];
-        return typeof rule2 == "object" ? rule2.definition : !!rule2;
+        const rule4 = this.RULES.all[keyword];
+        return typeof rule4 == "object" ? rule4.definition : !!rule4;
       }
       // Remove keyword
       removeKeyword(keyword) {
@@ -42224,7 +42275,7 @@ var require_core = __commonJS({
         delete RULES.keywords[keyword];
         delete RULES.all[keyword];
         for (const group of RULES.rules) {
-          const i = group.rules.findIndex((rule2) => rule2.keyword === keyword);
+          const i = group.rules.findIndex((rule4) => rule4.keyword === keyword);
           if (i >= 0)
             group.rules.splice(i, 1);
         }
@@ -42251,10 +42302,10 @@ var require_core = __commonJS({
           for (const seg of segments)
             keywords = keywords[seg];
           for (const key3 in rules) {
-            const rule2 = rules[key3];
-            if (typeof rule2 != "object")
+            const rule4 = rules[key3];
+            if (typeof rule4 != "object")
               continue;
-            const { $data } = rule2.definition;
+            const { $data } = rule4.definition;
             const schema = keywords[key3];
             if ($data && schema)
               keywords[key3] = schemaOrData(schema);
@@ -42418,7 +42469,7 @@ var require_core = __commonJS({
       RULES.keywords[keyword] = true;
       if (!definition)
         return;
-      const rule2 = {
+      const rule4 = {
         keyword,
         definition: {
           ...definition,
@@ -42427,18 +42478,18 @@ var require_core = __commonJS({
         }
       };
       if (definition.before)
-        addBeforeRule.call(this, ruleGroup, rule2, definition.before);
+        addBeforeRule.call(this, ruleGroup, rule4, definition.before);
       else
-        ruleGroup.rules.push(rule2);
-      RULES.all[keyword] = rule2;
+        ruleGroup.rules.push(rule4);
+      RULES.all[keyword] = rule4;
       (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
     }
-    function addBeforeRule(ruleGroup, rule2, before) {
+    function addBeforeRule(ruleGroup, rule4, before) {
       const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
       if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule2);
+        ruleGroup.rules.splice(i, 0, rule4);
       } else {
-        ruleGroup.rules.push(rule2);
+        ruleGroup.rules.push(rule4);
         this.logger.warn(`rule ${before} is not defined`);
       }
     }
@@ -46467,7 +46518,7 @@ var require_options = __commonJS({
     }
     module.exports = {
       // set global options
-      parse: function parse4(rawOptions, preset) {
+      parse: function parse3(rawOptions, preset) {
         const options = {};
         const opt = Object.assign({}, preset, rawOptions);
         options.throttleTime = 1e3 / mergeOption(opt.fps, 10);
@@ -48463,24 +48514,59 @@ function normalizePath(root, path) {
   }
   return parts.join("/");
 }
-function usesFile(r, file) {
-  const s = r.sources;
-  if (!s) return false;
-  return s.main?.file === file || s.components.some((c) => c.file === file);
+function byMolfile(records) {
+  const users = /* @__PURE__ */ new Map();
+  const add = (file, r) => {
+    if (file === void 0) return;
+    const list = users.get(file);
+    if (!list) users.set(file, [r]);
+    else if (list[list.length - 1] !== r) list.push(r);
+  };
+  for (const r of records) {
+    const s = r.sources;
+    if (!s) continue;
+    add(s.main?.file, r);
+    for (const c of s.components) add(c.file, r);
+  }
+  return users;
+}
+function lowerBound(sorted, file) {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = lo + hi >>> 1;
+    if (sorted[mid].file < file) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 function selectRecords(records, root, paths) {
   const selected = /* @__PURE__ */ new Set();
   const unmatched = [];
+  let users = null;
+  let sorted = null;
   for (const given of paths) {
     const p = normalizePath(root, given);
     const escapes2 = isAbsolute3(given) && (relative2(root, given).startsWith(`..${sep2}`) || relative2(root, given) === "..");
     let hit = false;
     if (!escapes2) {
-      for (const r of records) {
-        if (p === "" || r.file === p || r.file.startsWith(`${p}/`) || usesFile(r, p)) {
+      sorted ??= [...records].sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+      if (p === "") {
+        for (const r of records) selected.add(r);
+        hit = records.length > 0;
+      }
+      for (const start of p === "" ? [] : [p, `${p}/`]) {
+        for (let i = lowerBound(sorted, start); i < sorted.length; i++) {
+          const r = sorted[i];
+          if (start === p ? r.file !== p : !r.file.startsWith(start)) break;
           selected.add(r);
           hit = true;
         }
+      }
+      users ??= byMolfile(records);
+      for (const r of users.get(p) ?? []) {
+        selected.add(r);
+        hit = true;
       }
     }
     if (!hit) unmatched.push(given);
@@ -49240,7 +49326,7 @@ function renderText(result, options = {}) {
 }
 
 // src/bulk/run.ts
-import { createReadStream as createReadStream2 } from "node:fs";
+import { createReadStream as createReadStream3 } from "node:fs";
 import { availableParallelism } from "node:os";
 
 // src/registry/types.ts
@@ -49316,6 +49402,8 @@ function makeVocabulary(extra = {}) {
     return { form: null, how: "not-understood" };
   };
 }
+var MAX_WORDS = 1e3;
+var OTHER_WORDS = "(other words)";
 var VocabularyTally = class {
   mapped = /* @__PURE__ */ new Map();
   notUnderstood = /* @__PURE__ */ new Map();
@@ -49325,7 +49413,8 @@ var VocabularyTally = class {
       e.count++;
       this.mapped.set(word, e);
     } else if (result.how === "not-understood") {
-      this.notUnderstood.set(word, (this.notUnderstood.get(word) ?? 0) + 1);
+      const key3 = this.notUnderstood.has(word) || this.notUnderstood.size < MAX_WORDS ? word : OTHER_WORDS;
+      this.notUnderstood.set(key3, (this.notUnderstood.get(key3) ?? 0) + 1);
     }
   }
   merge(other) {
@@ -49334,7 +49423,10 @@ var VocabularyTally = class {
       mine.count += e.count;
       this.mapped.set(w, mine);
     }
-    for (const [w, n] of other.notUnderstood) this.notUnderstood.set(w, (this.notUnderstood.get(w) ?? 0) + n);
+    for (const [w, n] of other.notUnderstood) {
+      const key3 = this.notUnderstood.has(w) || this.notUnderstood.size < MAX_WORDS ? w : OTHER_WORDS;
+      this.notUnderstood.set(key3, (this.notUnderstood.get(key3) ?? 0) + n);
+    }
   }
   toJSON() {
     const byWord = (a, b) => a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : 0;
@@ -50177,1808 +50269,103 @@ function makeProgress(mode, total, stream = process.stderr, every = { ms: 1e4 })
 }
 
 // src/bulk/sources.ts
+import { createReadStream as createReadStream2 } from "node:fs";
+import { createInterface as createInterface2 } from "node:readline";
+
+// src/bulk/delimited.ts
 import { createReadStream } from "node:fs";
 import { createInterface } from "node:readline";
-
-// ../../work/main/node_modules/csv-parse/lib/index.js
-import { Transform } from "stream";
-
-// ../../work/main/node_modules/csv-parse/lib/utils/is_object.js
-var is_object = function(obj) {
-  return typeof obj === "object" && obj !== null && !Array.isArray(obj);
-};
-
-// ../../work/main/node_modules/csv-parse/lib/api/CsvError.js
-var CsvError = class _CsvError extends Error {
-  constructor(code, message, options, ...contexts) {
-    if (Array.isArray(message)) message = message.join(" ").trim();
-    super(message);
-    if (Error.captureStackTrace !== void 0) {
-      Error.captureStackTrace(this, _CsvError);
-    }
-    this.code = code;
-    for (const context of contexts) {
-      for (const key3 in context) {
-        const value = context[key3];
-        this[key3] = Buffer.isBuffer(value) ? value.toString(options.encoding) : value == null ? value : JSON.parse(JSON.stringify(value));
-      }
-    }
-  }
-};
-
-// ../../work/main/node_modules/csv-parse/lib/api/normalize_columns_array.js
-var normalize_columns_array = function(columns) {
-  const normalizedColumns = [];
-  for (let i = 0, l = columns.length; i < l; i++) {
-    const column = columns[i];
-    if (column === void 0 || column === null || column === false) {
-      normalizedColumns[i] = { disabled: true };
-    } else if (typeof column === "string" || typeof column === "number") {
-      normalizedColumns[i] = { name: `${column}` };
-    } else if (is_object(column)) {
-      if (typeof column.name !== "string") {
-        throw new CsvError("CSV_OPTION_COLUMNS_MISSING_NAME", [
-          "Option columns missing name:",
-          `property "name" is required at position ${i}`,
-          "when column is an object literal"
-        ]);
-      }
-      normalizedColumns[i] = column;
-    } else {
-      throw new CsvError("CSV_INVALID_COLUMN_DEFINITION", [
-        "Invalid column definition:",
-        "expect a string or a literal object,",
-        `got ${JSON.stringify(column)} at position ${i}`
-      ]);
-    }
-  }
-  return normalizedColumns;
-};
-
-// ../../work/main/node_modules/csv-parse/lib/utils/ResizeableBuffer.js
-var ResizeableBuffer = class {
-  constructor(size = 100) {
-    this.size = size;
-    this.length = 0;
-    this.buf = Buffer.allocUnsafe(size);
-  }
-  prepend(val) {
-    if (Buffer.isBuffer(val)) {
-      const length = this.length + val.length;
-      if (length >= this.size) {
-        this.resize();
-        if (length >= this.size) {
-          throw Error("INVALID_BUFFER_STATE");
-        }
-      }
-      const buf = this.buf;
-      this.buf = Buffer.allocUnsafe(this.size);
-      val.copy(this.buf, 0);
-      buf.copy(this.buf, val.length);
-      this.length += val.length;
-    } else {
-      const length = this.length++;
-      if (length === this.size) {
-        this.resize();
-      }
-      const buf = this.clone();
-      this.buf[0] = val;
-      buf.copy(this.buf, 1, 0, length);
-    }
-  }
-  append(val) {
-    const length = this.length++;
-    if (length === this.size) {
-      this.resize();
-    }
-    this.buf[length] = val;
-  }
-  clone() {
-    return Buffer.from(this.buf.slice(0, this.length));
-  }
-  resize() {
-    const length = this.length;
-    this.size = this.size * 2;
-    const buf = Buffer.allocUnsafe(this.size);
-    this.buf.copy(buf, 0, 0, length);
-    this.buf = buf;
-  }
-  toString(encoding) {
-    if (encoding) {
-      return this.buf.toString(encoding, 0, this.length);
-    } else {
-      return Uint8Array.prototype.slice.call(this.buf.slice(0, this.length));
-    }
-  }
-  toJSON() {
-    return this.toString("utf8");
-  }
-  reset() {
-    this.length = 0;
-  }
-};
-var ResizeableBuffer_default = ResizeableBuffer;
-
-// ../../work/main/node_modules/csv-parse/lib/api/init_state.js
-var init_state = function(options) {
-  const timchars = [
-    // Basic Latin
-    32,
-    // [Space](https://www.fileformat.info/info/unicode/char/0020/index.htm)
-    9,
-    // [CHARACTER TABULATION (HT)](https://www.fileformat.info/info/unicode/char/0009/index.htm)
-    10,
-    // [LINE FEED (LF)](https://www.fileformat.info/info/unicode/char/000a/index.htm)
-    13,
-    // [CARRIAGE RETURN (CR)](https://www.fileformat.info/info/unicode/char/000d/index.htm)
-    12,
-    // [FORM FEED (FF)](https://www.fileformat.info/info/unicode/char/000c/index.htm)
-    11,
-    // [LINE TABULATION (VT)](https://www.fileformat.info/info/unicode/char/000b/index.htm)
-    // Latin-1 Supplement
-    160,
-    // [NO-BREAK SPACE (NBSP)](https://www.fileformat.info/info/unicode/char/00a0/index.htm)
-    // Ogham
-    5760,
-    // [OGHAM SPACE MARK](https://www.fileformat.info/info/unicode/char/1680/index.htm)
-    // General Punctuation
-    8192,
-    // [EN QUAD](https://www.fileformat.info/info/unicode/char/2000/index.htm)
-    8193,
-    // [EM QUAD](https://www.fileformat.info/info/unicode/char/2001/index.htm)
-    8194,
-    // [EN SPACE](https://www.fileformat.info/info/unicode/char/2002/index.htm)
-    8195,
-    // [EM SPACE](https://www.fileformat.info/info/unicode/char/2003/index.htm)
-    8196,
-    // [THREE-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2004/index.htm)
-    8197,
-    // [FOUR-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2005/index.htm)
-    8198,
-    // [SIX-PER-EM SPACE](https://www.fileformat.info/info/unicode/char/2006/index.htm)
-    8199,
-    // [FIGURE SPACE](https://www.fileformat.info/info/unicode/char/2007/index.htm)
-    8200,
-    // [PUNCTUATION SPACE](https://www.fileformat.info/info/unicode/char/2008/index.htm)
-    8201,
-    // [THIN SPACE](https://www.fileformat.info/info/unicode/char/2009/index.htm)
-    8202,
-    // [HAIR SPACE](https://www.fileformat.info/info/unicode/char/200a/index.htm)
-    8232,
-    // [LINE SEPARATOR](https://www.fileformat.info/info/unicode/char/2028/index.htm)
-    8233,
-    // [PARAGRAPH SEPARATOR](https://www.fileformat.info/info/unicode/char/2029/index.htm)
-    8239,
-    // [NARROW NO-BREAK SPACE (NNBSP)](https://www.fileformat.info/info/unicode/char/202f/index.htm)
-    8287,
-    // [MEDIUM MATHEMATICAL SPACE (MMSP)](https://www.fileformat.info/info/unicode/char/205f/index.htm)
-    12288,
-    // [IDEOGRAPHIC SPACE](https://www.fileformat.info/info/unicode/char/3000/index.htm)
-    65279
-    // [ZERO WIDTH NO-BREAK SPACE (BOM)](https://www.fileformat.info/info/unicode/char/feff/index.htm)
-  ].reduce((acc, codepoint) => {
-    const encoded = Buffer.from(
-      String.fromCharCode(codepoint),
-      options.encoding
-    );
-    if (codepoint !== 63 && encoded.length === 1 && encoded[0] === 63) {
-      return acc;
-    }
-    acc.push(encoded);
-    return acc;
-  }, []);
-  const timcharFirstBytes = new Uint8Array(256);
-  for (const t of timchars) timcharFirstBytes[t[0]] = 1;
-  return {
-    bomSkipped: false,
-    bufBytesStart: 0,
-    castField: options.cast_function,
-    commenting: false,
-    delimiterBufPrevious: void 0,
-    delimiterDiscovered: false,
-    // Current error encountered by a record
-    error: void 0,
-    enabled: options.from_line === 1,
-    escaping: false,
-    escapeIsQuote: Buffer.isBuffer(options.escape) && Buffer.isBuffer(options.quote) && Buffer.compare(options.escape, options.quote) === 0,
-    // columns can be `false`, `true`, `Array`
-    expectedRecordLength: Array.isArray(options.columns) ? options.columns.length : void 0,
-    field: new ResizeableBuffer_default(20),
-    firstLineToHeaders: options.cast_first_line_to_header,
-    needMoreDataSize: Math.max(
-      // Skip if the remaining buffer smaller than comment
-      options.comment !== null ? options.comment.length : 0,
-      ...options.delimiter ? options.delimiter.map((delimiter) => delimiter.length) : [],
-      // Auto discovery of delimiter is limited to 1 character
-      options.delimiter_auto ? 1 : 0,
-      // Skip if the remaining buffer can be escape sequence
-      options.quote !== null ? options.quote.length : 0,
-      ...timchars.map((t) => t.length)
-    ),
-    previousBuf: void 0,
-    quoting: false,
-    stop: false,
-    rawBuffer: new ResizeableBuffer_default(100),
-    record: [],
-    recordHasError: false,
-    record_length: 0,
-    recordDelimiterMaxLength: options.record_delimiter.length === 0 ? 0 : Math.max(...options.record_delimiter.map((v) => v.length)),
-    trimChars: [
-      Buffer.from(" ", options.encoding)[0],
-      Buffer.from("	", options.encoding)[0]
-    ],
-    wasQuoting: false,
-    wasRowDelimiter: false,
-    timchars,
-    timcharFirstBytes
-  };
-};
-
-// ../../work/main/node_modules/csv-parse/lib/utils/underscore.js
-var underscore = function(str) {
-  return str.replace(/([A-Z])/g, function(_, match) {
-    return "_" + match.toLowerCase();
-  });
-};
-
-// ../../work/main/node_modules/csv-parse/lib/api/normalize_options.js
-var normalize_options = function(opts) {
-  const options = {};
-  for (const opt in opts) {
-    options[underscore(opt)] = opts[opt];
-  }
-  if (options.encoding === void 0 || options.encoding === true) {
-    options.encoding = "utf8";
-  } else if (options.encoding === null || options.encoding === false) {
-    options.encoding = null;
-  } else if (typeof options.encoding !== "string" && options.encoding !== null) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_ENCODING",
-      [
-        "Invalid option encoding:",
-        "encoding must be a string or null to return a buffer,",
-        `got ${JSON.stringify(options.encoding)}`
-      ],
-      options
-    );
-  }
-  if (options.bom === void 0 || options.bom === null || options.bom === false) {
-    options.bom = false;
-  } else if (options.bom !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_BOM",
-      [
-        "Invalid option bom:",
-        "bom must be true,",
-        `got ${JSON.stringify(options.bom)}`
-      ],
-      options
-    );
-  }
-  options.cast_function = null;
-  if (options.cast === void 0 || options.cast === null || options.cast === false || options.cast === "") {
-    options.cast = void 0;
-  } else if (typeof options.cast === "function") {
-    options.cast_function = options.cast;
-    options.cast = true;
-  } else if (options.cast !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_CAST",
-      [
-        "Invalid option cast:",
-        "cast must be true or a function,",
-        `got ${JSON.stringify(options.cast)}`
-      ],
-      options
-    );
-  }
-  if (options.cast_date === void 0 || options.cast_date === null || options.cast_date === false || options.cast_date === "") {
-    options.cast_date = false;
-  } else if (options.cast_date === true) {
-    options.cast_date = function(value) {
-      const date = Date.parse(value);
-      return !isNaN(date) ? new Date(date) : value;
-    };
-  } else if (typeof options.cast_date !== "function") {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_CAST_DATE",
-      [
-        "Invalid option cast_date:",
-        "cast_date must be true or a function,",
-        `got ${JSON.stringify(options.cast_date)}`
-      ],
-      options
-    );
-  }
-  options.cast_first_line_to_header = void 0;
-  if (options.columns === true) {
-    options.cast_first_line_to_header = void 0;
-  } else if (typeof options.columns === "function") {
-    options.cast_first_line_to_header = options.columns;
-    options.columns = true;
-  } else if (Array.isArray(options.columns)) {
-    options.columns = normalize_columns_array(options.columns);
-  } else if (options.columns === void 0 || options.columns === null || options.columns === false) {
-    options.columns = false;
-  } else {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_COLUMNS",
-      [
-        "Invalid option columns:",
-        "expect an array, a function or true,",
-        `got ${JSON.stringify(options.columns)}`
-      ],
-      options
-    );
-  }
-  if (options.group_columns_by_name === void 0 || options.group_columns_by_name === null || options.group_columns_by_name === false) {
-    options.group_columns_by_name = false;
-  } else if (options.group_columns_by_name !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
-      [
-        "Invalid option group_columns_by_name:",
-        "expect an boolean,",
-        `got ${JSON.stringify(options.group_columns_by_name)}`
-      ],
-      options
-    );
-  } else if (options.columns === false) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_GROUP_COLUMNS_BY_NAME",
-      [
-        "Invalid option group_columns_by_name:",
-        "the `columns` mode must be activated."
-      ],
-      options
-    );
-  }
-  if (options.comment === void 0 || options.comment === null || options.comment === false || options.comment === "") {
-    options.comment = null;
-  } else {
-    if (typeof options.comment === "string") {
-      options.comment = Buffer.from(options.comment, options.encoding);
-    }
-    if (!Buffer.isBuffer(options.comment)) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_COMMENT",
-        [
-          "Invalid option comment:",
-          "comment must be a buffer or a string,",
-          `got ${JSON.stringify(options.comment)}`
-        ],
-        options
-      );
-    }
-  }
-  if (options.comment_no_infix === void 0 || options.comment_no_infix === null || options.comment_no_infix === false) {
-    options.comment_no_infix = false;
-  } else if (options.comment_no_infix !== true) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_COMMENT",
-      [
-        "Invalid option comment_no_infix:",
-        "value must be a boolean,",
-        `got ${JSON.stringify(options.comment_no_infix)}`
-      ],
-      options
-    );
-  }
-  if (options.delimiter_auto === void 0 || options.delimiter_auto === null || options.delimiter_auto === false) {
-    options.delimiter_auto = false;
-  } else if (options.delimiter_auto === true) {
-    options.delimiter_auto = {};
-  } else if (!is_object(options.delimiter_auto)) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_DELIMITER_AUTO",
-      [
-        "Invalid option delimiter_auto:",
-        "delimiter_auto must be a boolean or a configuration object,",
-        `got ${JSON.stringify(options.delimiter_auto)}`
-      ],
-      options
-    );
-  }
-  if (options.delimiter_auto) {
-    if (options.delimiter_auto.preferred === void 0)
-      options.delimiter_auto.preferred = {
-        [",".charCodeAt(0)]: 1.8,
-        ["	".charCodeAt(0)]: 1.8,
-        [";".charCodeAt(0)]: 1.6,
-        [" ".charCodeAt(0)]: 1.6,
-        [":".charCodeAt(0)]: 1.5,
-        [".".charCodeAt(0)]: 1.4,
-        ["/".charCodeAt(0)]: 1.4
-      };
-    else if (!is_object(options.delimiter_auto.preferred)) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "preferred must be an object,",
-          `got ${JSON.stringify(options.delimiter_auto.preferred)}`
-        ],
-        options
-      );
-    }
-    if (options.delimiter_auto.score === void 0)
-      options.delimiter_auto.score = (info, options2) => {
-        return (info.total - info.std) * (options2.preferred[info.char_code] || 1);
-      };
-    else if (typeof options.delimiter_auto.score !== "function") {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "score must be a function,",
-          `got ${JSON.stringify(options.delimiter_auto.score)}`
-        ],
-        options
-      );
-    }
-    if (options.delimiter_auto.size === void 0)
-      options.delimiter_auto.size = 2048;
-    else if (typeof options.delimiter_auto.size !== "number") {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER_AUTO",
-        [
-          "Invalid option delimiter_auto:",
-          "size must be a number,",
-          `got ${JSON.stringify(options.delimiter_auto.size)}`
-        ],
-        options
-      );
-    }
-  }
-  const delimiter_json = JSON.stringify(options.delimiter);
-  if (options.delimiter_auto !== false) {
-    options.delimiter = [];
-  }
-  if (!Array.isArray(options.delimiter)) {
-    if (options.delimiter === void 0 || options.delimiter === null || options.delimiter === false) {
-      options.delimiter = Buffer.from(",", options.encoding);
-    }
-    options.delimiter = [options.delimiter];
-  }
-  options.delimiter = options.delimiter.map(function(delimiter) {
-    if (typeof delimiter === "string") {
-      delimiter = Buffer.from(delimiter, options.encoding);
-    }
-    if (!Buffer.isBuffer(delimiter) || delimiter.length === 0) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_DELIMITER",
-        [
-          "Invalid option delimiter:",
-          "delimiter must be a non empty string or buffer or array of string|buffer,",
-          `got ${delimiter_json}`
-        ],
-        options
-      );
-    }
-    return delimiter;
-  });
-  if (options.escape === void 0 || options.escape === true) {
-    options.escape = Buffer.from('"', options.encoding);
-  } else if (typeof options.escape === "string") {
-    options.escape = Buffer.from(options.escape, options.encoding);
-  } else if (options.escape === null || options.escape === false) {
-    options.escape = null;
-  }
-  if (options.escape !== null) {
-    if (!Buffer.isBuffer(options.escape)) {
-      throw new Error(
-        `Invalid Option: escape must be a buffer, a string or a boolean, got ${JSON.stringify(options.escape)}`
-      );
-    }
-  }
-  if (options.from === void 0 || options.from === null) {
-    options.from = 1;
-  } else {
-    if (typeof options.from === "string" && /\d+/.test(options.from)) {
-      options.from = parseInt(options.from);
-    }
-    if (Number.isInteger(options.from)) {
-      if (options.from < 0) {
-        throw new Error(
-          `Invalid Option: from must be a positive integer, got ${JSON.stringify(opts.from)}`
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: from must be an integer, got ${JSON.stringify(options.from)}`
-      );
-    }
-  }
-  if (options.from_line === void 0 || options.from_line === null) {
-    options.from_line = 1;
-  } else {
-    if (typeof options.from_line === "string" && /\d+/.test(options.from_line)) {
-      options.from_line = parseInt(options.from_line);
-    }
-    if (Number.isInteger(options.from_line)) {
-      if (options.from_line <= 0) {
-        throw new Error(
-          `Invalid Option: from_line must be a positive integer greater than 0, got ${JSON.stringify(opts.from_line)}`
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: from_line must be an integer, got ${JSON.stringify(opts.from_line)}`
-      );
-    }
-  }
-  if (options.ignore_last_delimiters === void 0 || options.ignore_last_delimiters === null) {
-    options.ignore_last_delimiters = false;
-  } else if (typeof options.ignore_last_delimiters === "number") {
-    options.ignore_last_delimiters = Math.floor(options.ignore_last_delimiters);
-    if (options.ignore_last_delimiters === 0) {
-      options.ignore_last_delimiters = false;
-    }
-  } else if (typeof options.ignore_last_delimiters !== "boolean") {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_IGNORE_LAST_DELIMITERS",
-      [
-        "Invalid option `ignore_last_delimiters`:",
-        "the value must be a boolean value or an integer,",
-        `got ${JSON.stringify(options.ignore_last_delimiters)}`
-      ],
-      options
-    );
-  }
-  if (options.ignore_last_delimiters === true && options.columns === false) {
-    throw new CsvError(
-      "CSV_IGNORE_LAST_DELIMITERS_REQUIRES_COLUMNS",
-      [
-        "The option `ignore_last_delimiters`",
-        "requires the activation of the `columns` option"
-      ],
-      options
-    );
-  }
-  if (options.info === void 0 || options.info === null || options.info === false) {
-    options.info = false;
-  } else if (options.info !== true) {
-    throw new Error(
-      `Invalid Option: info must be true, got ${JSON.stringify(options.info)}`
-    );
-  }
-  if (options.max_record_size === void 0 || options.max_record_size === null || options.max_record_size === false) {
-    options.max_record_size = 0;
-  } else if (Number.isInteger(options.max_record_size) && options.max_record_size >= 0) {
-  } else if (typeof options.max_record_size === "string" && /\d+/.test(options.max_record_size)) {
-    options.max_record_size = parseInt(options.max_record_size);
-  } else {
-    throw new Error(
-      `Invalid Option: max_record_size must be a positive integer, got ${JSON.stringify(options.max_record_size)}`
-    );
-  }
-  if (options.objname === void 0 || options.objname === null || options.objname === false) {
-    options.objname = void 0;
-  } else if (Buffer.isBuffer(options.objname)) {
-    if (options.objname.length === 0) {
-      throw new Error(`Invalid Option: objname must be a non empty buffer`);
-    }
-    if (options.encoding === null) {
-    } else {
-      options.objname = options.objname.toString(options.encoding);
-    }
-  } else if (typeof options.objname === "string") {
-    if (options.objname.length === 0) {
-      throw new Error(`Invalid Option: objname must be a non empty string`);
-    }
-  } else if (typeof options.objname === "number") {
-  } else {
-    throw new Error(
-      `Invalid Option: objname must be a string or a buffer, got ${options.objname}`
-    );
-  }
-  if (options.objname !== void 0) {
-    if (typeof options.objname === "number") {
-      if (options.columns !== false) {
-        throw Error(
-          "Invalid Option: objname index cannot be combined with columns or be defined as a field"
-        );
-      }
-    } else {
-      if (options.columns === false) {
-        throw Error(
-          "Invalid Option: objname field must be combined with columns or be defined as an index"
-        );
-      }
-    }
-  }
-  if (options.on_record === void 0 || options.on_record === null) {
-    options.on_record = void 0;
-  } else if (typeof options.on_record !== "function") {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_ON_RECORD",
-      [
-        "Invalid option `on_record`:",
-        "expect a function,",
-        `got ${JSON.stringify(options.on_record)}`
-      ],
-      options
-    );
-  }
-  if (options.on_skip !== void 0 && options.on_skip !== null && typeof options.on_skip !== "function") {
-    throw new Error(
-      `Invalid Option: on_skip must be a function, got ${JSON.stringify(options.on_skip)}`
-    );
-  }
-  if (options.quote === null || options.quote === false || options.quote === "") {
-    options.quote = null;
-  } else {
-    if (options.quote === void 0 || options.quote === true) {
-      options.quote = Buffer.from('"', options.encoding);
-    } else if (typeof options.quote === "string") {
-      options.quote = Buffer.from(options.quote, options.encoding);
-    }
-    if (!Buffer.isBuffer(options.quote)) {
-      throw new Error(
-        `Invalid Option: quote must be a buffer or a string, got ${JSON.stringify(options.quote)}`
-      );
-    }
-  }
-  if (options.raw === void 0 || options.raw === null || options.raw === false) {
-    options.raw = false;
-  } else if (options.raw !== true) {
-    throw new Error(
-      `Invalid Option: raw must be true, got ${JSON.stringify(options.raw)}`
-    );
-  }
-  if (options.record_delimiter === void 0) {
-    options.record_delimiter = [];
-  } else if (typeof options.record_delimiter === "string" || Buffer.isBuffer(options.record_delimiter)) {
-    if (options.record_delimiter.length === 0) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a non empty string or buffer,",
-          `got ${JSON.stringify(options.record_delimiter)}`
-        ],
-        options
-      );
-    }
-    options.record_delimiter = [options.record_delimiter];
-  } else if (!Array.isArray(options.record_delimiter)) {
-    throw new CsvError(
-      "CSV_INVALID_OPTION_RECORD_DELIMITER",
-      [
-        "Invalid option `record_delimiter`:",
-        "value must be a string, a buffer or array of string|buffer,",
-        `got ${JSON.stringify(options.record_delimiter)}`
-      ],
-      options
-    );
-  }
-  options.record_delimiter = options.record_delimiter.map(function(rd, i) {
-    if (typeof rd !== "string" && !Buffer.isBuffer(rd)) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a string, a buffer or array of string|buffer",
-          `at index ${i},`,
-          `got ${JSON.stringify(rd)}`
-        ],
-        options
-      );
-    } else if (rd.length === 0) {
-      throw new CsvError(
-        "CSV_INVALID_OPTION_RECORD_DELIMITER",
-        [
-          "Invalid option `record_delimiter`:",
-          "value must be a non empty string or buffer",
-          `at index ${i},`,
-          `got ${JSON.stringify(rd)}`
-        ],
-        options
-      );
-    }
-    if (typeof rd === "string") {
-      rd = Buffer.from(rd, options.encoding);
-    }
-    return rd;
-  });
-  if (typeof options.relax_column_count === "boolean") {
-  } else if (options.relax_column_count === void 0 || options.relax_column_count === null) {
-    options.relax_column_count = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count must be a boolean, got ${JSON.stringify(options.relax_column_count)}`
-    );
-  }
-  if (typeof options.relax_column_count_less === "boolean") {
-  } else if (options.relax_column_count_less === void 0 || options.relax_column_count_less === null) {
-    options.relax_column_count_less = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count_less must be a boolean, got ${JSON.stringify(options.relax_column_count_less)}`
-    );
-  }
-  if (typeof options.relax_column_count_more === "boolean") {
-  } else if (options.relax_column_count_more === void 0 || options.relax_column_count_more === null) {
-    options.relax_column_count_more = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_column_count_more must be a boolean, got ${JSON.stringify(options.relax_column_count_more)}`
-    );
-  }
-  if (typeof options.relax_quotes === "boolean") {
-  } else if (options.relax_quotes === void 0 || options.relax_quotes === null) {
-    options.relax_quotes = false;
-  } else {
-    throw new Error(
-      `Invalid Option: relax_quotes must be a boolean, got ${JSON.stringify(options.relax_quotes)}`
-    );
-  }
-  if (typeof options.skip_empty_lines === "boolean") {
-  } else if (options.skip_empty_lines === void 0 || options.skip_empty_lines === null) {
-    options.skip_empty_lines = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_empty_lines must be a boolean, got ${JSON.stringify(options.skip_empty_lines)}`
-    );
-  }
-  if (typeof options.skip_records_with_empty_values === "boolean") {
-  } else if (options.skip_records_with_empty_values === void 0 || options.skip_records_with_empty_values === null) {
-    options.skip_records_with_empty_values = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_records_with_empty_values must be a boolean, got ${JSON.stringify(options.skip_records_with_empty_values)}`
-    );
-  }
-  if (typeof options.skip_records_with_error === "boolean") {
-  } else if (options.skip_records_with_error === void 0 || options.skip_records_with_error === null) {
-    options.skip_records_with_error = false;
-  } else {
-    throw new Error(
-      `Invalid Option: skip_records_with_error must be a boolean, got ${JSON.stringify(options.skip_records_with_error)}`
-    );
-  }
-  if (options.rtrim === void 0 || options.rtrim === null || options.rtrim === false) {
-    options.rtrim = false;
-  } else if (options.rtrim !== true) {
-    throw new Error(
-      `Invalid Option: rtrim must be a boolean, got ${JSON.stringify(options.rtrim)}`
-    );
-  }
-  if (options.ltrim === void 0 || options.ltrim === null || options.ltrim === false) {
-    options.ltrim = false;
-  } else if (options.ltrim !== true) {
-    throw new Error(
-      `Invalid Option: ltrim must be a boolean, got ${JSON.stringify(options.ltrim)}`
-    );
-  }
-  if (options.trim === void 0 || options.trim === null || options.trim === false) {
-    options.trim = false;
-  } else if (options.trim !== true) {
-    throw new Error(
-      `Invalid Option: trim must be a boolean, got ${JSON.stringify(options.trim)}`
-    );
-  }
-  if (options.trim === true && opts.ltrim !== false) {
-    options.ltrim = true;
-  } else if (options.ltrim !== true) {
-    options.ltrim = false;
-  }
-  if (options.trim === true && opts.rtrim !== false) {
-    options.rtrim = true;
-  } else if (options.rtrim !== true) {
-    options.rtrim = false;
-  }
-  if (options.to === void 0 || options.to === null) {
-    options.to = -1;
-  } else if (options.to !== -1) {
-    if (typeof options.to === "string" && /\d+/.test(options.to)) {
-      options.to = parseInt(options.to);
-    }
-    if (Number.isInteger(options.to)) {
-      if (options.to <= 0) {
-        throw new Error(
-          `Invalid Option: to must be a positive integer greater than 0, got ${JSON.stringify(opts.to)}`
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: to must be an integer, got ${JSON.stringify(opts.to)}`
-      );
-    }
-  }
-  if (options.to_line === void 0 || options.to_line === null) {
-    options.to_line = -1;
-  } else if (options.to_line !== -1) {
-    if (typeof options.to_line === "string" && /\d+/.test(options.to_line)) {
-      options.to_line = parseInt(options.to_line);
-    }
-    if (Number.isInteger(options.to_line)) {
-      if (options.to_line <= 0) {
-        throw new Error(
-          `Invalid Option: to_line must be a positive integer greater than 0, got ${JSON.stringify(opts.to_line)}`
-        );
-      }
-    } else {
-      throw new Error(
-        `Invalid Option: to_line must be an integer, got ${JSON.stringify(opts.to_line)}`
-      );
-    }
-  }
-  return options;
-};
-
-// ../../work/main/node_modules/csv-parse/lib/utils/delimiter_discover.js
-var delimiter_discover = function(records, options) {
-  if (!options) {
-    ({ delimiter_auto: options } = normalize_options({ delimiter_auto: true }));
-  }
-  if (typeof records === "string") {
-    records = Buffer.from(records);
-  }
-  if (Buffer.isBuffer(records)) {
-    records = ((data) => {
-      const records2 = [];
-      const parser = transform({ delimiter: [] });
-      const push = (record2) => records2.push(record2);
-      const close2 = () => {
-      };
-      const error = parser.parse(data, true, push, close2);
-      if (error !== void 0) throw error;
-      return records2;
-    })(records);
-  }
-  const info = Array(127).fill().map(() => ({ lines: [] }));
-  records.map(([record2], line) => {
-    for (let i = 0, l = record2.length; i < l; i++) {
-      const code = record2.charCodeAt(i);
-      if (info[code].lines[line] === void 0) info[code].lines[line] = 0;
-      info[code].lines[line]++;
-    }
-  });
-  info.map((info2, i) => {
-    info2.char_code = i;
-    info2.std = std(info2.lines);
-    info2.total = info2.lines.reduce((acc, val) => acc + val, 0);
-    info2.preferred = !!options.preferred[i];
-    info2.score = options.score(info2, options);
-  });
-  const result = info.reduce(
-    (acc, info2) => acc.score > info2.score ? acc : info2,
-    {}
-  );
-  return String.fromCharCode(result.char_code);
-};
-var std = function(array) {
-  const n = array.length;
-  if (n === 0) return 0;
-  const mean = array.reduce((a, b) => a + b) / n;
-  return Math.sqrt(
-    array.map((x) => Math.pow(x - mean, 2)).reduce((a, b) => a + b) / n
-  );
-};
-
-// ../../work/main/node_modules/csv-parse/lib/api/index.js
-var isRecordEmpty = function(record2) {
-  return record2.every(
-    (field2) => field2 == null || field2.toString && field2.toString().trim() === ""
-  );
-};
-var cr = 13;
-var nl = 10;
-var boms = {
-  // Note, the following are equals:
-  // Buffer.from("\ufeff")
-  // Buffer.from([239, 187, 191])
-  // Buffer.from('EFBBBF', 'hex')
-  utf8: Buffer.from([239, 187, 191]),
-  // Note, the following are equals:
-  // Buffer.from "\ufeff", 'utf16le
-  // Buffer.from([255, 254])
-  utf16le: Buffer.from([255, 254])
-};
-var transform = function(original_options = {}) {
-  const info = {
-    bytes: 0,
-    bytes_records: 0,
-    comment_lines: 0,
-    empty_lines: 0,
-    invalid_field_length: 0,
-    lines: 1,
-    records: 0
-  };
-  const options = normalize_options(original_options);
-  return {
-    info,
-    original_options,
-    options,
-    state: init_state(options),
-    __needMoreData: function(i, bufLen, end) {
-      if (end) return false;
-      const { encoding, escape: escape2, quote: quote2 } = this.options;
-      const { quoting, needMoreDataSize, recordDelimiterMaxLength } = this.state;
-      const numOfCharLeft = bufLen - i - 1;
-      const requiredLength = Math.max(
-        needMoreDataSize,
-        // Skip if the remaining buffer smaller than record delimiter
-        // If "record_delimiter" is yet to be discovered:
-        // 1. It is equals to `[]` and "recordDelimiterMaxLength" equals `0`
-        // 2. We set the length to windows line ending in the current encoding
-        // Note, that encoding is known from user or bom discovery at that point
-        // recordDelimiterMaxLength,
-        recordDelimiterMaxLength === 0 ? Buffer.from("\r\n", encoding).length : recordDelimiterMaxLength,
-        // Skip if remaining buffer can be an escaped quote
-        quoting ? (escape2 === null ? 0 : escape2.length) + quote2.length : 0,
-        // Skip if remaining buffer can be record delimiter following the closing quote
-        quoting ? quote2.length + recordDelimiterMaxLength : 0
-      );
-      return numOfCharLeft < requiredLength;
-    },
-    // Central parser implementation
-    parse: function(nextBuf, end, push, close2) {
-      const {
-        bom,
-        comment_no_infix,
-        delimiter_auto,
-        encoding,
-        from_line,
-        ltrim,
-        max_record_size,
-        raw: raw2,
-        relax_quotes,
-        rtrim,
-        skip_empty_lines,
-        to,
-        to_line
-      } = this.options;
-      let { comment, escape: escape2, quote: quote2, record_delimiter } = this.options;
-      const {
-        bomSkipped,
-        delimiterDiscovered,
-        delimiterBufPrevious,
-        rawBuffer,
-        escapeIsQuote
-      } = this.state;
-      if (!delimiterDiscovered && delimiter_auto) {
-        let delimiterBuf;
-        if (delimiterBufPrevious === void 0) {
-          delimiterBuf = nextBuf;
-        } else if (delimiterBufPrevious !== void 0 && nextBuf === void 0) {
-          delimiterBuf = delimiterBufPrevious;
-        } else {
-          delimiterBuf = Buffer.concat([delimiterBufPrevious, nextBuf]);
-        }
-        nextBuf = void 0;
-        if (end || delimiterBuf.length > delimiter_auto.size) {
-          this.options.delimiter = [
-            Buffer.from(
-              delimiter_discover(delimiterBuf, this.options.delimiter_auto)
-            )
-          ];
-          this.state.previousBuf = delimiterBuf;
-          this.state.delimiterBufPrevious = void 0;
-          this.state.delimiterDiscovered = true;
-        } else {
-          this.state.delimiterBufPrevious = delimiterBuf;
-          return;
-        }
-      }
-      const { previousBuf } = this.state;
-      let buf;
-      if (previousBuf === void 0) {
-        if (nextBuf === void 0) {
-          close2();
-          return;
-        } else {
-          buf = nextBuf;
-        }
-      } else if (previousBuf !== void 0 && nextBuf === void 0) {
-        buf = previousBuf;
-      } else {
-        buf = Buffer.concat([previousBuf, nextBuf]);
-      }
-      if (bomSkipped === false) {
-        if (bom === false) {
-          this.state.bomSkipped = true;
-        } else if (buf.length < 3) {
-          if (end === false) {
-            this.state.previousBuf = buf;
-            return;
-          }
-        } else {
-          for (const encoding2 in boms) {
-            if (boms[encoding2].compare(buf, 0, boms[encoding2].length) === 0) {
-              const bomLength = boms[encoding2].length;
-              this.state.bufBytesStart += bomLength;
-              buf = buf.slice(bomLength);
-              const options2 = normalize_options({
-                ...this.original_options,
-                encoding: encoding2
-              });
-              for (const key3 in options2) {
-                this.options[key3] = options2[key3];
-              }
-              ({ comment, escape: escape2, quote: quote2 } = this.options);
-              break;
-            }
-          }
-          this.state.bomSkipped = true;
-        }
-      }
-      const bufLen = buf.length;
-      let pos;
-      for (pos = 0; pos < bufLen; pos++) {
-        if (this.__needMoreData(pos, bufLen, end)) {
-          break;
-        }
-        if (this.state.wasRowDelimiter === true) {
-          this.info.lines++;
-          this.state.wasRowDelimiter = false;
-        }
-        if (to_line !== -1 && this.info.lines > to_line) {
-          this.state.stop = true;
-          close2();
-          return;
-        }
-        if (this.state.quoting === false && record_delimiter.length === 0) {
-          const record_delimiterCount = this.__autoDiscoverRecordDelimiter(
-            buf,
-            pos
-          );
-          if (record_delimiterCount) {
-            record_delimiter = this.options.record_delimiter;
-          }
-        }
-        const chr = buf[pos];
-        if (raw2 === true) {
-          rawBuffer.append(chr);
-        }
-        if ((chr === cr || chr === nl) && this.state.wasRowDelimiter === false) {
-          this.state.wasRowDelimiter = true;
-        }
-        if (this.state.escaping === true) {
-          this.state.escaping = false;
-        } else {
-          if (escape2 !== null && this.state.quoting === true && this.__isEscape(buf, pos, chr) && pos + escape2.length < bufLen) {
-            if (escapeIsQuote) {
-              if (this.__isQuote(buf, pos + escape2.length)) {
-                this.state.escaping = true;
-                pos += escape2.length - 1;
-                continue;
-              }
-            } else {
-              this.state.escaping = true;
-              pos += escape2.length - 1;
-              continue;
-            }
-          }
-          if (this.state.commenting === false && this.__isQuote(buf, pos)) {
-            if (this.state.quoting === true) {
-              const nextChr = buf[pos + quote2.length];
-              const isNextChrTrimable = rtrim && this.__isCharTrimable(buf, pos + quote2.length);
-              const isNextChrComment = comment !== null && this.__compareBytes(comment, buf, pos + quote2.length, nextChr);
-              const isNextChrDelimiter = this.__isDelimiter(
-                buf,
-                pos + quote2.length,
-                nextChr
-              );
-              const isNextChrRecordDelimiter = record_delimiter.length === 0 ? this.__autoDiscoverRecordDelimiter(buf, pos + quote2.length) : this.__isRecordDelimiter(nextChr, buf, pos + quote2.length);
-              if (escape2 !== null && this.__isEscape(buf, pos, chr) && this.__isQuote(buf, pos + escape2.length)) {
-                pos += escape2.length - 1;
-              } else if (!nextChr || isNextChrDelimiter || isNextChrRecordDelimiter || isNextChrComment || isNextChrTrimable) {
-                this.state.quoting = false;
-                this.state.wasQuoting = true;
-                pos += quote2.length - 1;
-                continue;
-              } else if (relax_quotes === false) {
-                const err2 = this.__error(
-                  new CsvError(
-                    "CSV_INVALID_CLOSING_QUOTE",
-                    [
-                      "Invalid Closing Quote:",
-                      `got "${String.fromCharCode(nextChr)}"`,
-                      `at line ${this.info.lines}`,
-                      "instead of delimiter, record delimiter, trimable character",
-                      "(if activated) or comment"
-                    ],
-                    this.options,
-                    this.__infoField()
-                  )
-                );
-                if (err2 !== void 0) return err2;
-              } else {
-                this.state.quoting = false;
-                this.state.wasQuoting = true;
-                this.state.field.prepend(quote2);
-                pos += quote2.length - 1;
-              }
-            } else {
-              if (this.state.field.length !== 0) {
-                if (relax_quotes === false) {
-                  const info2 = this.__infoField();
-                  const bom2 = Object.keys(boms).map(
-                    (b) => boms[b].equals(this.state.field.toString()) ? b : false
-                  ).filter(Boolean)[0];
-                  const err2 = this.__error(
-                    new CsvError(
-                      "INVALID_OPENING_QUOTE",
-                      [
-                        "Invalid Opening Quote:",
-                        `a quote is found on field ${JSON.stringify(info2.column)} at line ${info2.lines}, value is ${JSON.stringify(this.state.field.toString(encoding))}`,
-                        bom2 ? `(${bom2} bom)` : void 0
-                      ],
-                      this.options,
-                      info2,
-                      {
-                        field: this.state.field
-                      }
-                    )
-                  );
-                  if (err2 !== void 0) return err2;
-                }
-              } else {
-                this.state.quoting = true;
-                pos += quote2.length - 1;
-                continue;
-              }
-            }
-          }
-          if (this.state.quoting === false) {
-            const recordDelimiterLength = this.__isRecordDelimiter(
-              chr,
-              buf,
-              pos
-            );
-            if (recordDelimiterLength !== 0) {
-              const skipCommentLine = this.state.commenting && this.state.wasQuoting === false && this.state.record.length === 0 && this.state.field.length === 0;
-              if (skipCommentLine) {
-                this.info.comment_lines++;
-              } else {
-                if (this.state.enabled === false && this.info.lines + (this.state.wasRowDelimiter === true ? 1 : 0) >= from_line) {
-                  this.state.enabled = true;
-                  this.__resetField();
-                  this.__resetRecord();
-                  pos += recordDelimiterLength - 1;
-                  continue;
-                }
-                if (skip_empty_lines === true && this.state.wasQuoting === false && this.state.record.length === 0 && this.state.field.length === 0) {
-                  this.info.empty_lines++;
-                  pos += recordDelimiterLength - 1;
-                  continue;
-                }
-                this.info.bytes = this.state.bufBytesStart + pos;
-                const errField = this.__onField();
-                if (errField !== void 0) return errField;
-                this.info.bytes = this.state.bufBytesStart + pos + recordDelimiterLength;
-                const errRecord = this.__onRecord(push);
-                if (errRecord !== void 0) return errRecord;
-                if (to !== -1 && this.info.records >= to) {
-                  this.state.stop = true;
-                  close2();
-                  return;
-                }
-              }
-              this.state.commenting = false;
-              pos += recordDelimiterLength - 1;
-              continue;
-            }
-            if (this.state.commenting) {
-              continue;
-            }
-            if (comment !== null && (comment_no_infix === false || this.state.record.length === 0 && this.state.field.length === 0)) {
-              const commentCount = this.__compareBytes(comment, buf, pos, chr);
-              if (commentCount !== 0) {
-                this.state.commenting = true;
-                continue;
-              }
-            }
-            const delimiterLength = this.__isDelimiter(buf, pos, chr);
-            if (delimiterLength !== 0) {
-              this.info.bytes = this.state.bufBytesStart + pos;
-              const errField = this.__onField();
-              if (errField !== void 0) return errField;
-              pos += delimiterLength - 1;
-              continue;
-            }
-          }
-        }
-        if (this.state.commenting === false) {
-          if (max_record_size !== 0 && this.state.record_length + this.state.field.length > max_record_size) {
-            return this.__error(
-              new CsvError(
-                "CSV_MAX_RECORD_SIZE",
-                [
-                  "Max Record Size:",
-                  "record exceed the maximum number of tolerated bytes",
-                  `of ${max_record_size}`,
-                  `at line ${this.info.lines}`
-                ],
-                this.options,
-                this.__infoField()
-              )
-            );
-          }
-        }
-        const lappend = ltrim === false || this.state.quoting === true || this.state.field.length !== 0 || !this.__isCharTrimable(buf, pos);
-        const rappend = rtrim === false || this.state.wasQuoting === false;
-        if (lappend === true && rappend === true) {
-          this.state.field.append(chr);
-        } else if (rtrim === true && !this.__isCharTrimable(buf, pos)) {
-          return this.__error(
-            new CsvError(
-              "CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE",
-              [
-                "Invalid Closing Quote:",
-                "found non trimable byte after quote",
-                `at line ${this.info.lines}`
-              ],
-              this.options,
-              this.__infoField()
-            )
-          );
-        } else {
-          if (lappend === false) {
-            pos += this.__isCharTrimable(buf, pos) - 1;
-          }
+var DEFAULT_LIMITS = { maxLines: 1e4, maxChars: 16 * 2 ** 20 };
+function splitRow(text, delimiter, carry) {
+  if (carry === void 0 && !text.includes('"')) return { fields: text.split(delimiter), open: false };
+  const fields = [];
+  let field2 = "";
+  let i = 0;
+  const n = text.length;
+  let quoted2 = carry !== void 0;
+  if (quoted2) field2 = carry;
+  for (; ; ) {
+    if (quoted2 || text[i] === '"') {
+      if (!quoted2) i++;
+      quoted2 = false;
+      for (; ; ) {
+        const q = text.indexOf('"', i);
+        if (q < 0) return { fields: [...fields, field2 + text.slice(i)], open: true };
+        field2 += text.slice(i, q);
+        if (text[q + 1] === '"') {
+          field2 += '"';
+          i = q + 2;
           continue;
         }
+        i = q + 1;
+        break;
       }
-      if (end === true) {
-        if (this.state.quoting === true) {
-          const err2 = this.__error(
-            new CsvError(
-              "CSV_QUOTE_NOT_CLOSED",
-              [
-                "Quote Not Closed:",
-                `the parsing is finished with an opening quote at line ${this.info.lines}`
-              ],
-              this.options,
-              this.__infoField()
-            )
-          );
-          if (err2 !== void 0) return err2;
-        } else {
-          if (this.state.wasQuoting === true || this.state.record.length !== 0 || this.state.field.length !== 0) {
-            this.info.bytes = this.state.bufBytesStart + pos;
-            const errField = this.__onField();
-            if (errField !== void 0) return errField;
-            const errRecord = this.__onRecord(push);
-            if (errRecord !== void 0) return errRecord;
-          } else if (this.state.wasRowDelimiter === true) {
-            this.info.empty_lines++;
-          } else if (this.state.commenting === true) {
-            this.info.comment_lines++;
-          }
-        }
-      } else {
-        this.state.bufBytesStart += pos;
-        this.state.previousBuf = buf.slice(pos);
-      }
-      if (this.state.wasRowDelimiter === true) {
-        this.info.lines++;
-        this.state.wasRowDelimiter = false;
-      }
-    },
-    __onRecord: function(push) {
-      const {
-        columns,
-        group_columns_by_name,
-        encoding,
-        info: info2,
-        from,
-        relax_column_count,
-        relax_column_count_less,
-        relax_column_count_more,
-        raw: raw2,
-        skip_records_with_empty_values
-      } = this.options;
-      const { enabled, record: record2 } = this.state;
-      if (enabled === false) {
-        return this.__resetRecord();
-      }
-      const recordLength = record2.length;
-      if (columns === true) {
-        if (skip_records_with_empty_values === true && isRecordEmpty(record2)) {
-          this.__resetRecord();
-          return;
-        }
-        return this.__firstLineToColumns(record2);
-      }
-      if (columns === false && this.info.records === 0) {
-        this.state.expectedRecordLength = recordLength;
-      }
-      if (recordLength !== this.state.expectedRecordLength) {
-        const err2 = columns === false ? new CsvError(
-          "CSV_RECORD_INCONSISTENT_FIELDS_LENGTH",
-          [
-            "Invalid Record Length:",
-            `expect ${this.state.expectedRecordLength},`,
-            `got ${recordLength} on line ${this.info.lines}`
-          ],
-          this.options,
-          this.__infoField(),
-          {
-            record: record2
-          }
-        ) : new CsvError(
-          "CSV_RECORD_INCONSISTENT_COLUMNS",
-          [
-            "Invalid Record Length:",
-            `columns length is ${columns.length},`,
-            // rename columns
-            `got ${recordLength} on line ${this.info.lines}`
-          ],
-          this.options,
-          this.__infoField(),
-          {
-            record: record2
-          }
-        );
-        if (relax_column_count === true || relax_column_count_less === true && recordLength < this.state.expectedRecordLength || relax_column_count_more === true && recordLength > this.state.expectedRecordLength) {
-          this.info.invalid_field_length++;
-          this.state.error = err2;
-        } else {
-          const finalErr = this.__error(err2);
-          if (finalErr) return finalErr;
-        }
-      }
-      if (skip_records_with_empty_values === true && isRecordEmpty(record2)) {
-        this.__resetRecord();
-        return;
-      }
-      if (this.state.recordHasError === true) {
-        this.__resetRecord();
-        this.state.recordHasError = false;
-        return;
-      }
-      this.info.records++;
-      if (from === 1 || this.info.records >= from) {
-        const { objname } = this.options;
-        if (columns !== false) {
-          const obj = {};
-          for (let i = 0, l = record2.length; i < l; i++) {
-            if (columns[i] === void 0 || columns[i].disabled) continue;
-            if (group_columns_by_name === true && Object.hasOwn(obj, columns[i].name)) {
-              if (Array.isArray(obj[columns[i].name])) {
-                obj[columns[i].name] = obj[columns[i].name].concat(record2[i]);
-              } else {
-                obj[columns[i].name] = [obj[columns[i].name], record2[i]];
-              }
-            } else {
-              Object.defineProperty(obj, columns[i].name, {
-                value: record2[i],
-                enumerable: true,
-                writable: true,
-                configurable: true
-              });
-            }
-          }
-          if (raw2 === true || info2 === true) {
-            const extRecord = Object.assign(
-              { record: obj },
-              raw2 === true ? { raw: this.state.rawBuffer.toString(encoding) } : {},
-              info2 === true ? { info: this.__infoRecord() } : {}
-            );
-            const err2 = this.__push(
-              objname === void 0 ? extRecord : [obj[objname], extRecord],
-              push
-            );
-            if (err2) {
-              return err2;
-            }
-          } else {
-            const err2 = this.__push(
-              objname === void 0 ? obj : [obj[objname], obj],
-              push
-            );
-            if (err2) {
-              return err2;
-            }
-          }
-        } else {
-          if (raw2 === true || info2 === true) {
-            const extRecord = Object.assign(
-              { record: record2 },
-              raw2 === true ? { raw: this.state.rawBuffer.toString(encoding) } : {},
-              info2 === true ? { info: this.__infoRecord() } : {}
-            );
-            const err2 = this.__push(
-              objname === void 0 ? extRecord : [record2[objname], extRecord],
-              push
-            );
-            if (err2) {
-              return err2;
-            }
-          } else {
-            const err2 = this.__push(
-              objname === void 0 ? record2 : [record2[objname], record2],
-              push
-            );
-            if (err2) {
-              return err2;
-            }
-          }
-        }
-      }
-      this.__resetRecord();
-    },
-    __firstLineToColumns: function(record2) {
-      const { firstLineToHeaders } = this.state;
-      try {
-        const headers = firstLineToHeaders === void 0 ? record2 : firstLineToHeaders.call(null, record2);
-        if (!Array.isArray(headers)) {
-          return this.__error(
-            new CsvError(
-              "CSV_INVALID_COLUMN_MAPPING",
-              [
-                "Invalid Column Mapping:",
-                "expect an array from column function,",
-                `got ${JSON.stringify(headers)}`
-              ],
-              this.options,
-              this.__infoField(),
-              {
-                headers
-              }
-            )
-          );
-        }
-        const normalizedHeaders = normalize_columns_array(headers);
-        this.state.expectedRecordLength = normalizedHeaders.length;
-        this.options.columns = normalizedHeaders;
-        this.__resetRecord();
-        return;
-      } catch (err2) {
-        return err2;
-      }
-    },
-    __resetRecord: function() {
-      if (this.options.raw === true) {
-        this.state.rawBuffer.reset();
-      }
-      this.state.error = void 0;
-      this.state.record = [];
-      this.state.record_length = 0;
-    },
-    __onField: function() {
-      const { cast, encoding, rtrim, max_record_size } = this.options;
-      const { enabled, wasQuoting } = this.state;
-      if (enabled === false) {
-        return this.__resetField();
-      }
-      let field2 = this.state.field.toString(encoding);
-      if (rtrim === true && wasQuoting === false) {
-        field2 = field2.trimRight();
-      }
-      if (cast === true) {
-        const [err2, f] = this.__cast(field2);
-        if (err2 !== void 0) return err2;
-        field2 = f;
-      }
-      this.state.record.push(field2);
-      if (max_record_size !== 0 && typeof field2 === "string") {
-        this.state.record_length += field2.length;
-      }
-      this.__resetField();
-    },
-    __resetField: function() {
-      this.state.field.reset();
-      this.state.wasQuoting = false;
-    },
-    __push: function(record2, push) {
-      const { on_record } = this.options;
-      if (on_record !== void 0) {
-        const info2 = this.__infoRecord();
-        try {
-          record2 = on_record.call(null, record2, info2);
-        } catch (err2) {
-          return err2;
-        }
-        if (record2 === void 0 || record2 === null) {
-          return;
-        }
-      }
-      this.info.bytes_records += this.info.bytes;
-      push(record2);
-    },
-    // Return a tuple with the error and the casted value
-    __cast: function(field2) {
-      const { columns, relax_column_count } = this.options;
-      const isColumns = Array.isArray(columns);
-      if (isColumns === true && relax_column_count && this.options.columns.length <= this.state.record.length) {
-        return [void 0, void 0];
-      }
-      if (this.state.castField !== null) {
-        try {
-          const info2 = this.__infoField();
-          return [void 0, this.state.castField.call(null, field2, info2)];
-        } catch (err2) {
-          return [err2];
-        }
-      }
-      if (this.__isFloat(field2)) {
-        return [void 0, parseFloat(field2)];
-      } else if (this.options.cast_date !== false) {
-        const info2 = this.__infoField();
-        return [void 0, this.options.cast_date.call(null, field2, info2)];
-      }
-      return [void 0, field2];
-    },
-    __compareBytes: function(sourceBuf, targetBuf, targetPos, firstByte) {
-      if (sourceBuf[0] !== firstByte) return 0;
-      const sourceLength = sourceBuf.length;
-      for (let i = 1; i < sourceLength; i++) {
-        if (sourceBuf[i] !== targetBuf[targetPos + i]) return 0;
-      }
-      return sourceLength;
-    },
-    // Helper to test if a character is trimable
-    __isCharTrimable: function(buf, pos) {
-      const { timchars, timcharFirstBytes } = this.state;
-      const first = buf[pos];
-      if (first === void 0 || timcharFirstBytes[first] === 0) return 0;
-      loop1: for (let i = 0; i < timchars.length; i++) {
-        const timchar = timchars[i];
-        for (let j = 0; j < timchar.length; j++) {
-          if (timchar[j] !== buf[pos + j]) continue loop1;
-        }
-        return timchar.length;
-      }
-      return 0;
-    },
-    __isDelimiter: function(buf, pos, chr) {
-      const { delimiter, ignore_last_delimiters } = this.options;
-      if (ignore_last_delimiters === true && this.state.record.length === this.options.columns.length - 1) {
-        return 0;
-      } else if (ignore_last_delimiters !== false && typeof ignore_last_delimiters === "number" && this.state.record.length === ignore_last_delimiters - 1) {
-        return 0;
-      }
-      loop1: for (let i = 0; i < delimiter.length; i++) {
-        const del = delimiter[i];
-        if (del[0] === chr) {
-          for (let j = 1; j < del.length; j++) {
-            if (del[j] !== buf[pos + j]) continue loop1;
-          }
-          return del.length;
-        }
-      }
-      return 0;
-    },
-    __isEscape: function(buf, pos, chr) {
-      const { escape: escape2 } = this.options;
-      if (escape2 === null) return false;
-      const l = escape2.length;
-      if (escape2[0] === chr) {
-        for (let i = 0; i < l; i++) {
-          if (escape2[i] !== buf[pos + i]) {
-            return false;
-          }
-        }
-        return true;
-      }
-      return false;
-    },
-    __isFloat: function(value) {
-      return value - parseFloat(value) + 1 >= 0;
-    },
-    // Keep it in case we implement the `cast_int` option
-    // __isInt(value){
-    //   // return Number.isInteger(parseInt(value))
-    //   // return !isNaN( parseInt( obj ) );
-    //   return /^(\-|\+)?[1-9][0-9]*$/.test(value)
-    // }
-    __isQuote: function(buf, pos) {
-      const { quote: quote2 } = this.options;
-      if (quote2 === null) return false;
-      const l = quote2.length;
-      for (let i = 0; i < l; i++) {
-        if (quote2[i] !== buf[pos + i]) {
-          return false;
-        }
-      }
-      return true;
-    },
-    __isRecordDelimiter: function(chr, buf, pos) {
-      const { record_delimiter } = this.options;
-      const recordDelimiterLength = record_delimiter.length;
-      loop1: for (let i = 0; i < recordDelimiterLength; i++) {
-        const rd = record_delimiter[i];
-        const rdLength = rd.length;
-        if (rd[0] !== chr) {
-          continue;
-        }
-        for (let j = 1; j < rdLength; j++) {
-          if (rd[j] !== buf[pos + j]) {
-            continue loop1;
-          }
-        }
-        return rd.length;
-      }
-      return 0;
-    },
-    __autoDiscoverRecordDelimiter: function(buf, pos) {
-      const { encoding } = this.options;
-      const rds = [
-        // Important, the windows line ending must be before mac os 9
-        Buffer.from("\r\n", encoding),
-        Buffer.from("\n", encoding),
-        Buffer.from("\r", encoding)
-      ];
-      loop: for (let i = 0; i < rds.length; i++) {
-        const l = rds[i].length;
-        for (let j = 0; j < l; j++) {
-          if (rds[i][j] !== buf[pos + j]) {
-            continue loop;
-          }
-        }
-        this.options.record_delimiter.push(rds[i]);
-        this.state.recordDelimiterMaxLength = rds[i].length;
-        return rds[i].length;
-      }
-      return 0;
-    },
-    __error: function(msg) {
-      const { encoding, raw: raw2, skip_records_with_error } = this.options;
-      const err2 = typeof msg === "string" ? new Error(msg) : msg;
-      if (skip_records_with_error) {
-        this.state.recordHasError = true;
-        if (this.options.on_skip !== void 0) {
-          try {
-            this.options.on_skip(
-              err2,
-              raw2 ? this.state.rawBuffer.toString(encoding) : void 0
-            );
-          } catch (err3) {
-            return err3;
-          }
-        }
-        return void 0;
-      } else {
-        return err2;
-      }
-    },
-    __infoDataSet: function() {
-      return {
-        ...this.info,
-        columns: this.options.columns
-      };
-    },
-    __infoRecord: function() {
-      const { columns, raw: raw2, encoding } = this.options;
-      return {
-        ...this.__infoDataSet(),
-        bytes_records: this.info.bytes,
-        error: this.state.error,
-        header: columns === true,
-        index: this.state.record.length,
-        raw: raw2 ? this.state.rawBuffer.toString(encoding) : void 0
-      };
-    },
-    __infoField: function() {
-      const { columns } = this.options;
-      const isColumns = Array.isArray(columns);
-      const bytes_records = this.info.bytes_records;
-      return {
-        ...this.__infoRecord(),
-        bytes_records,
-        column: isColumns === true ? columns.length > this.state.record.length ? columns[this.state.record.length].name : null : this.state.record.length,
-        quoting: this.state.wasQuoting
-      };
     }
+    const d = text.indexOf(delimiter, i);
+    field2 += text.slice(i, d < 0 ? n : d);
+    i = d < 0 ? n : d;
+    fields.push(field2);
+    field2 = "";
+    if (i >= n) return { fields, open: false };
+    i += delimiter.length;
+    if (i >= n) {
+      fields.push("");
+      return { fields, open: false };
+    }
+  }
+}
+async function* readDelimitedRows(path, delimiter, limits = DEFAULT_LIMITS) {
+  const rl = createInterface({ input: createReadStream(path, { encoding: "utf8" }), crlfDelay: Infinity });
+  let lineNo = 0;
+  let held = [];
+  let start = 0;
+  let chars = 0;
+  let sofar = [];
+  const replay = [];
+  const lines = rl[Symbol.asyncIterator]();
+  const next = async () => {
+    if (replay.length > 0) return replay.shift();
+    const r = await lines.next();
+    if (r.done) return null;
+    lineNo++;
+    return { text: lineNo === 1 ? r.value.replace(/^\uFEFF/, "") : r.value, line: lineNo };
   };
-};
-
-// ../../work/main/node_modules/csv-parse/lib/index.js
-var Parser = class extends Transform {
-  constructor(opts = {}) {
-    super({ ...{ readableObjectMode: true }, ...opts, encoding: null });
-    this.api = transform({
-      on_skip: (err2, chunk) => {
-        this.emit("skip", err2, chunk);
-      },
-      ...opts
-    });
-    this.state = this.api.state;
-    this.options = this.api.options;
-    this.info = this.api.info;
-  }
-  // Implementation of `Transform._transform`
-  _transform(buf, _, callback) {
-    if (this.state.stop === true) {
-      return;
-    }
-    const err2 = this.api.parse(
-      buf,
-      false,
-      (record2) => {
-        this.push(record2);
-      },
-      () => {
-        this.push(null);
-        this.end();
-        this.on("end", this.destroy);
+  for (; ; ) {
+    const l = await next();
+    if (l === null && held.length === 0) return;
+    if (l !== null) {
+      if (held.length === 0) {
+        if (l.text.trim() === "") continue;
+        start = l.line;
+        chars = 0;
       }
-    );
-    if (err2 !== void 0) {
-      this.state.stop = true;
+      held.push(l.text);
+      chars += l.text.length + 1;
     }
-    callback(err2);
-  }
-  // Implementation of `Transform._flush`
-  _flush(callback) {
-    if (this.state.stop === true) {
-      return;
+    let split;
+    if (l === null) split = { fields: sofar, open: true };
+    else if (held.length === 1) split = splitRow(l.text, delimiter);
+    else {
+      const more = splitRow(l.text, delimiter, sofar[sofar.length - 1] + "\n");
+      split = { fields: [...sofar.slice(0, -1), ...more.fields], open: more.open };
     }
-    const err2 = this.api.parse(
-      void 0,
-      true,
-      (record2) => {
-        this.push(record2);
-      },
-      () => {
-        this.push(null);
-        this.on("end", this.destroy);
-      }
-    );
-    callback(err2);
-  }
-};
-var parse2 = function() {
-  let data, options, callback;
-  for (const i in arguments) {
-    const argument = arguments[i];
-    const type = typeof argument;
-    if (data === void 0 && (typeof argument === "string" || Buffer.isBuffer(argument))) {
-      data = argument;
-    } else if (options === void 0 && is_object(argument)) {
-      options = argument;
-    } else if (callback === void 0 && type === "function") {
-      callback = argument;
-    } else {
-      throw new CsvError(
-        "CSV_INVALID_ARGUMENT",
-        ["Invalid argument:", `got ${JSON.stringify(argument)} at index ${i}`],
-        options || {}
-      );
+    if (!split.open) {
+      yield { line: start, fields: split.fields };
+      held = [];
+      continue;
+    }
+    sofar = split.fields;
+    if (l === null || held.length >= limits.maxLines || chars >= limits.maxChars) {
+      yield {
+        line: start,
+        fields: split.fields.map((f) => f.slice(0, 200)),
+        broken: l === null ? `a quoted field opened on line ${start} does not close before the end of the file` : `a quoted field opened on line ${start} does not close within ${held.length} lines`
+      };
+      replay.unshift(...held.slice(1).map((text, k) => ({ text, line: start + 1 + k })));
+      held = [];
     }
   }
-  const parser = new Parser(options);
-  if (callback) {
-    const records = options === void 0 || options.objname === void 0 ? [] : /* @__PURE__ */ Object.create(null);
-    parser.on("readable", function() {
-      let record2;
-      while ((record2 = this.read()) !== null) {
-        if (options === void 0 || options.objname === void 0) {
-          records.push(record2);
-        } else {
-          Object.assign(records, {
-            [record2[0]]: record2[1]
-            // writable: true,
-            // enumerable: true,
-            // configurable: true
-          });
-        }
-      }
-    });
-    parser.on("error", function(err2) {
-      callback(err2, void 0, parser.api.__infoDataSet());
-    });
-    parser.on("end", function() {
-      callback(void 0, records, parser.api.__infoDataSet());
-    });
-  }
-  if (data !== void 0) {
-    const writer = function() {
-      parser.write(data);
-      parser.end();
-    };
-    if (typeof setImmediate === "function") {
-      setImmediate(writer);
-    } else {
-      setTimeout(writer, 0);
-    }
-  }
-  return parser;
-};
+}
 
 // src/bulk/sources.ts
 function formatOf(path) {
@@ -51989,66 +50376,63 @@ function formatOf(path) {
   return null;
 }
 var REPLACEMENT = "�";
-async function* readSdItems(path) {
-  const rl = createInterface({ input: createReadStream(path, { encoding: "utf8" }), crlfDelay: Infinity });
+var SD_RECORD_LIMITS = { maxLines: 2e5, maxChars: 64 * 2 ** 20 };
+async function* readSdItems(path, limits = SD_RECORD_LIMITS) {
+  const rl = createInterface2({ input: createReadStream2(path, { encoding: "utf8" }), crlfDelay: Infinity });
   let lines = [];
+  let chars = 0;
+  let dropped = 0;
   let startLine = 1;
   let lineNo = 0;
   let record2 = 0;
+  const item = (last) => {
+    record2++;
+    const text = dropped > 0 ? "" : lines.join("\n") + "\n";
+    const problem = dropped > 0 ? `the record is longer than ${limits.maxLines.toLocaleString("en-US")} lines or ${limits.maxChars / 2 ** 20} MiB (${dropped.toLocaleString("en-US")} lines${last ? " to the end of the file" : ""}); not read (a missing $$$$ line?)` : text.includes(REPLACEMENT) ? "the record is not valid UTF-8 text (bad bytes replaced)" : last ? "the last record has no $$$$ terminator (file truncated?)" : void 0;
+    return { source: path, record: record2, line: startLine, text, splitProblem: problem };
+  };
   for await (const raw2 of rl) {
     lineNo++;
-    if (lines.length === 0) startLine = lineNo;
+    if (lines.length === 0 && dropped === 0) startLine = lineNo;
     if (raw2.startsWith("$$$$")) {
-      record2++;
-      const text = lines.join("\n") + "\n";
-      yield {
-        source: path,
-        record: record2,
-        line: startLine,
-        text,
-        splitProblem: text.includes(REPLACEMENT) ? "the record is not valid UTF-8 text (bad bytes replaced)" : void 0
-      };
+      yield item(false);
       lines = [];
+      chars = 0;
+      dropped = 0;
+      continue;
+    }
+    if (dropped > 0 || lines.length >= limits.maxLines || chars + raw2.length > limits.maxChars) {
+      if (dropped === 0) {
+        dropped = lines.length;
+        lines = [];
+      }
+      dropped++;
       continue;
     }
     lines.push(raw2);
+    chars += raw2.length + 1;
   }
-  if (lines.some((l) => l.trim() !== "")) {
-    record2++;
-    const text = lines.join("\n") + "\n";
-    yield {
-      source: path,
-      record: record2,
-      line: startLine,
-      text,
-      splitProblem: text.includes(REPLACEMENT) ? "the record is not valid UTF-8 text (bad bytes replaced)" : "the last record has no $$$$ terminator (file truncated?)"
-    };
-  }
+  if (dropped > 0 || lines.some((l) => l.trim() !== "")) yield item(true);
 }
-async function* readDelimitedItems(path, delimiter) {
-  const parser = createReadStream(path, { encoding: "utf8" }).pipe(
-    parse2({
-      delimiter,
-      columns: (header) => header.map((h) => h.trim()),
-      relax_column_count: true,
-      relax_quotes: true,
-      skip_empty_lines: true,
-      bom: true,
-      info: true
-    })
-  );
+async function* readDelimitedItems(path, delimiter, limits) {
+  let header = null;
   let record2 = 0;
-  for await (const row of parser) {
+  for await (const row of readDelimitedRows(path, delimiter, limits)) {
+    if (header === null) {
+      header = row.fields.map((h) => h.trim());
+      continue;
+    }
     record2++;
-    const fields = row.record;
-    const values = Object.values(fields).join("");
-    yield {
-      source: path,
-      record: record2,
-      line: row.info.lines,
-      fields,
-      splitProblem: values.includes(REPLACEMENT) ? "the row is not valid UTF-8 text (bad bytes replaced)" : row.info.invalid_field_length > 0 ? "the row has a different number of columns from the header" : void 0
-    };
+    const fields = {};
+    const n = Math.min(header.length, row.fields.length);
+    for (let i = 0; i < n; i++) fields[header[i]] = row.fields[i];
+    let splitProblem;
+    if (row.broken) splitProblem = `the row cannot be split: ${row.broken}`;
+    else if (row.fields.some((f) => f.includes(REPLACEMENT)))
+      splitProblem = "the row is not valid UTF-8 text (bad bytes replaced)";
+    else if (row.fields.length !== header.length && !(row.fields.length === 1 && row.fields[0].trim() === ""))
+      splitProblem = `the row has ${row.fields.length} columns, the header ${header.length}`;
+    yield { source: path, record: record2, line: row.line, fields, splitProblem };
   }
 }
 function readItems(path) {
@@ -52084,7 +50468,7 @@ async function countRecords(path) {
   let atLineStart = true;
   let lineHasText = false;
   let dollars = 0;
-  for await (const chunk of createReadStream2(path)) {
+  for await (const chunk of createReadStream3(path)) {
     for (let i = 0; i < chunk.length; i++) {
       const c = chunk[i];
       if (c === 10) {
@@ -52195,12 +50579,12 @@ import { readFileSync } from "node:fs";
 import { parseArgs as parseArgs2 } from "node:util";
 
 // src/bulk/merge.ts
-import { createReadStream as createReadStream3 } from "node:fs";
-import { createInterface as createInterface2 } from "node:readline";
+import { createReadStream as createReadStream4 } from "node:fs";
+import { createInterface as createInterface3 } from "node:readline";
 var MergeError = class extends Error {
 };
 async function* readShard(path) {
-  const rl = createInterface2({ input: createReadStream3(path, "utf8"), crlfDelay: Infinity });
+  const rl = createInterface3({ input: createReadStream4(path, "utf8"), crlfDelay: Infinity });
   let n = 0;
   for await (const line of rl) {
     n++;
@@ -52412,7 +50796,7 @@ var OUTPUT_OPTIONS = {
   "fail-on": { type: "string", default: "error" },
   progress: { type: "string", default: "auto" }
 };
-function parse3(args, extra) {
+function parse2(args, extra) {
   try {
     const r = parseArgs2({
       args,
@@ -52508,7 +50892,11 @@ function summaryTable(t, seconds) {
       "",
       "  form words NOT understood (records audited as form unknown; map them with --form-word):"
     );
-    for (const [w, n] of t.vocabulary.notUnderstood) lines.push(`    "${w}" (${n})`);
+    const shown = t.vocabulary.notUnderstood.slice(0, 50);
+    for (const [w, n] of shown) lines.push(`    "${w}" (${n})`);
+    if (t.vocabulary.notUnderstood.length > shown.length) {
+      lines.push(`    … and ${t.vocabulary.notUnderstood.length - shown.length} more (see the JSON summary)`);
+    }
   }
   lines.push("", `Caution: ${t.caution}`);
   return lines.join("\n");
@@ -52525,7 +50913,7 @@ function checkFailOn(v) {
   return v;
 }
 async function bulkAudit(args, io) {
-  const { values, positionals } = parse3(args, {
+  const { values, positionals } = parse2(args, {
     "map-id": { type: "string" },
     "map-structure": { type: "string" },
     "map-form": { type: "string" },
@@ -52599,7 +50987,7 @@ async function bulkAudit(args, io) {
   return exitCode(run11.trailer, failOn);
 }
 async function mergeCommand(args, io) {
-  const { values, positionals } = parse3(args, {});
+  const { values, positionals } = parse2(args, {});
   if (positionals.length === 0) throw new UsageError("no shard outputs given");
   const failOn = checkFailOn(values["fail-on"]);
   for (const p of positionals) if (!io.isFile(p)) throw new UsageError(`shard output ${p} not found`);

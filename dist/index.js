@@ -3750,19 +3750,19 @@ var require_webidl = __commonJS({
     });
     webidl.util.ConvertToInt = function(V, bitLength, signedness, opts) {
       let upperBound;
-      let lowerBound;
+      let lowerBound2;
       if (bitLength === 64) {
         upperBound = Math.pow(2, 53) - 1;
         if (signedness === "unsigned") {
-          lowerBound = 0;
+          lowerBound2 = 0;
         } else {
-          lowerBound = Math.pow(-2, 53) + 1;
+          lowerBound2 = Math.pow(-2, 53) + 1;
         }
       } else if (signedness === "unsigned") {
-        lowerBound = 0;
+        lowerBound2 = 0;
         upperBound = Math.pow(2, bitLength) - 1;
       } else {
-        lowerBound = Math.pow(-2, bitLength) - 1;
+        lowerBound2 = Math.pow(-2, bitLength) - 1;
         upperBound = Math.pow(2, bitLength - 1) - 1;
       }
       let x = Number(V);
@@ -3777,16 +3777,16 @@ var require_webidl = __commonJS({
           });
         }
         x = webidl.util.IntegerPart(x);
-        if (x < lowerBound || x > upperBound) {
+        if (x < lowerBound2 || x > upperBound) {
           throw webidl.errors.exception({
             header: "Integer conversion",
-            message: `Value must be between ${lowerBound}-${upperBound}, got ${x}.`
+            message: `Value must be between ${lowerBound2}-${upperBound}, got ${x}.`
           });
         }
         return x;
       }
       if (!Number.isNaN(x) && opts?.clamp === true) {
-        x = Math.min(Math.max(x, lowerBound), upperBound);
+        x = Math.min(Math.max(x, lowerBound2), upperBound);
         if (Math.floor(x) % 2 === 0) {
           x = Math.floor(x);
         } else {
@@ -27933,12 +27933,12 @@ var require_applicability = __commonJS({
     }
     exports.schemaHasRulesForType = schemaHasRulesForType;
     function shouldUseGroup(schema, group) {
-      return group.rules.some((rule2) => shouldUseRule(schema, rule2));
+      return group.rules.some((rule4) => shouldUseRule(schema, rule4));
     }
     exports.shouldUseGroup = shouldUseGroup;
-    function shouldUseRule(schema, rule2) {
+    function shouldUseRule(schema, rule4) {
       var _a;
-      return schema[rule2.keyword] !== void 0 || ((_a = rule2.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
+      return schema[rule4.keyword] !== void 0 || ((_a = rule4.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
     }
     exports.shouldUseRule = shouldUseRule;
   }
@@ -28990,9 +28990,9 @@ var require_validate = __commonJS({
       if (useDefaults)
         (0, defaults_1.assignDefaults)(it, group.type);
       gen.block(() => {
-        for (const rule2 of group.rules) {
-          if ((0, applicability_1.shouldUseRule)(schema, rule2)) {
-            keywordCode(it, rule2.keyword, rule2.definition, group.type);
+        for (const rule4 of group.rules) {
+          if ((0, applicability_1.shouldUseRule)(schema, rule4)) {
+            keywordCode(it, rule4.keyword, rule4.definition, group.type);
           }
         }
       });
@@ -29027,9 +29027,9 @@ var require_validate = __commonJS({
     function checkKeywordTypes(it, ts) {
       const rules = it.self.RULES.all;
       for (const keyword in rules) {
-        const rule2 = rules[keyword];
-        if (typeof rule2 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule2)) {
-          const { type } = rule2.definition;
+        const rule4 = rules[keyword];
+        if (typeof rule4 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule4)) {
+          const { type } = rule4.definition;
           if (type.length && !type.some((t) => hasApplicableType(ts, t))) {
             strictTypesError(it, `missing type "${type.join(",")}" for keyword "${keyword}"`);
           }
@@ -31115,8 +31115,8 @@ var require_core = __commonJS({
         return this;
       }
       getKeyword(keyword) {
-        const rule2 = this.RULES.all[keyword];
-        return typeof rule2 == "object" ? rule2.definition : !!rule2;
+        const rule4 = this.RULES.all[keyword];
+        return typeof rule4 == "object" ? rule4.definition : !!rule4;
       }
       // Remove keyword
       removeKeyword(keyword) {
@@ -31124,7 +31124,7 @@ var require_core = __commonJS({
         delete RULES.keywords[keyword];
         delete RULES.all[keyword];
         for (const group of RULES.rules) {
-          const i = group.rules.findIndex((rule2) => rule2.keyword === keyword);
+          const i = group.rules.findIndex((rule4) => rule4.keyword === keyword);
           if (i >= 0)
             group.rules.splice(i, 1);
         }
@@ -31151,10 +31151,10 @@ var require_core = __commonJS({
           for (const seg of segments)
             keywords = keywords[seg];
           for (const key4 in rules) {
-            const rule2 = rules[key4];
-            if (typeof rule2 != "object")
+            const rule4 = rules[key4];
+            if (typeof rule4 != "object")
               continue;
-            const { $data } = rule2.definition;
+            const { $data } = rule4.definition;
             const schema = keywords[key4];
             if ($data && schema)
               keywords[key4] = schemaOrData(schema);
@@ -31318,7 +31318,7 @@ var require_core = __commonJS({
       RULES.keywords[keyword] = true;
       if (!definition)
         return;
-      const rule2 = {
+      const rule4 = {
         keyword,
         definition: {
           ...definition,
@@ -31327,18 +31327,18 @@ var require_core = __commonJS({
         }
       };
       if (definition.before)
-        addBeforeRule.call(this, ruleGroup, rule2, definition.before);
+        addBeforeRule.call(this, ruleGroup, rule4, definition.before);
       else
-        ruleGroup.rules.push(rule2);
-      RULES.all[keyword] = rule2;
+        ruleGroup.rules.push(rule4);
+      RULES.all[keyword] = rule4;
       (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
     }
-    function addBeforeRule(ruleGroup, rule2, before) {
+    function addBeforeRule(ruleGroup, rule4, before) {
       const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
       if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule2);
+        ruleGroup.rules.splice(i, 0, rule4);
       } else {
-        ruleGroup.rules.push(rule2);
+        ruleGroup.rules.push(rule4);
         this.logger.warn(`rule ${before} is not defined`);
       }
     }
@@ -61348,7 +61348,9 @@ function buildGraph2(s) {
       for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
     }
   });
-  const mass = s.atoms.map((a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber));
+  const mass = s.atoms.map(
+    (a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)
+  );
   const g = {
     s,
     n,
@@ -61392,7 +61394,8 @@ function fixedByRing(g, e) {
 function expandedValence(s, a, orders) {
   const at2 = s.atoms[a];
   const z = at2.atomicNumber;
-  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53) return false;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53)
+    return false;
   const v = orders.reduce((x, y) => x + y, 0) + at2.hCount;
   switch (z) {
     case 15:
@@ -61530,7 +61533,16 @@ var init_digraph = __esm({
         this.count++;
         const g = this.g;
         if (z >= 0 && parent !== null) {
-          return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
+          return new CipNode(
+            this.nextId++,
+            atom,
+            z,
+            mancudeOf(g).dupMass[parent.atom],
+            depth,
+            dist,
+            true,
+            parent
+          );
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
@@ -61590,6 +61602,15 @@ var init_digraph = __esm({
 });
 
 // src/chem/cip/rules.ts
+function rule1a(n) {
+  return n.z;
+}
+function rule1b(n) {
+  return -n.dist;
+}
+function rule2(n) {
+  return n.mass;
+}
 function rule3(label) {
   return label === "Z" ? 2 : label === "E" ? 1 : 0;
 }
@@ -61602,6 +61623,9 @@ function rule4c(label) {
 }
 function rule5(label) {
   return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
+}
+function rule6(n, ref) {
+  return n.atom === ref ? 1 : 0;
 }
 function likeClass(label) {
   return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
@@ -61679,7 +61703,9 @@ function orderedPairs(rk, x, fx, refClass, memo) {
       while (b < nodes.length && s.tie[b]) b++;
       if (b - a > 1) {
         const run12 = nodes.slice(a, b);
-        run12.sort((u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)));
+        run12.sort(
+          (u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo))
+        );
         for (let k = a; k < b; k++) nodes[k] = run12[k - a];
       }
       a = b;
@@ -61730,7 +61756,7 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker, EMPTY;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, Ranker, EMPTY;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
@@ -61746,6 +61772,14 @@ var init_compare = __esm({
     RULE_4C = 6;
     RULE_52 = 7;
     RULE_62 = 8;
+    rule1a2 = rule1a;
+    rule1b2 = rule1b;
+    rule22 = rule2;
+    rule32 = rule3;
+    rule4a2 = rule4a;
+    rule4c2 = rule4c;
+    rule52 = rule5;
+    rule62 = rule6;
     Ranker = class {
       constructor(dg, auxOf) {
         this.dg = dg;
@@ -61754,7 +61788,17 @@ var init_compare = __esm({
         const g = dg.g;
         const several = g.stereoCount > 1;
         const isotopes = g.s.atoms.some((a) => a.isotope !== null);
-        this.active = [true, true, isotopes, g.hasBondStereo && several, several, several, several, several, false];
+        this.active = [
+          true,
+          true,
+          isotopes,
+          g.hasBondStereo && several,
+          several,
+          several,
+          several,
+          several,
+          false
+        ];
       }
       dg;
       auxOf;
@@ -61803,24 +61847,24 @@ var init_compare = __esm({
         this.dg.rule6Ref = ref;
         this.active[RULE_62] = ref >= 0;
       }
-      value(rule2, n) {
-        switch (rule2) {
+      value(rule4, n) {
+        switch (rule4) {
           case RULE_1A:
-            return n.z;
+            return rule1a2(n);
           case RULE_1B:
-            return -n.dist;
+            return rule1b2(n);
           case RULE_2:
-            return n.mass;
+            return rule22(n);
           case RULE_3:
-            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
+            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule32(this.aux(n));
           case RULE_4A2:
-            return this.stereoValue(n, rule4a);
+            return this.stereoValue(n, rule4a2);
           case RULE_4C:
-            return this.stereoValue(n, rule4c);
+            return this.stereoValue(n, rule4c2);
           case RULE_52:
-            return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
+            return this.stereoValue(n, this.mirror ? (l) => rule52(invertChiral(l)) : rule52);
           case RULE_62:
-            return n.atom === this.dg.rule6Ref ? 1 : 0;
+            return rule62(n, this.dg.rule6Ref);
           default:
             return 0;
         }
@@ -61835,10 +61879,10 @@ var init_compare = __esm({
        * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
        * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
        */
-      compareRule(rule2, x, fx, y, fy) {
+      compareRule(rule4, x, fx, y, fy) {
         if (y === null) return 1;
-        if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
-        let c = this.value(rule2, x) - this.value(rule2, y);
+        if (rule4 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+        let c = this.value(rule4, x) - this.value(rule4, y);
         if (c !== 0) return c > 0 ? 1 : -1;
         if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
         const d = this.depth++;
@@ -61855,17 +61899,17 @@ var init_compare = __esm({
         qfy.push(fy);
         try {
           for (let i = 0; i < qx.length; i++) {
-            const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
-            const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
+            const sx = this.sorted(qx[i], qfx[i], rule4).nodes;
+            const sy = this.sorted(qy[i], qfy[i], rule4).nodes;
             const m = Math.min(sx.length, sy.length);
             for (let j = 0; j < m; j++) {
-              c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
+              c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
               if (c !== 0) return c > 0 ? 1 : -1;
             }
-            if (sx.length !== sy.length && rule2 === RULE_1A) {
+            if (sx.length !== sy.length && rule4 === RULE_1A) {
               const longer = sx.length > sy.length ? sx : sy;
               for (let j = m; j < longer.length; j++) {
-                if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
+                if (this.value(rule4, longer[j]) > 0) return longer === sx ? 1 : -1;
               }
             }
             for (let j = 0; j < m; j++) {
@@ -61954,11 +61998,11 @@ var init_compare = __esm({
        * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
        * first, writing them and their ties into `out` at the same places.
        */
-      sortRun(nodes, i, j, centre, rule2, out) {
+      sortRun(nodes, i, j, centre, rule4, out) {
         if (j - i === 2) {
           const a = nodes[i];
           const b = nodes[i + 1];
-          const c = this.compareRule(rule2, a, centre, b, centre);
+          const c = this.compareRule(rule4, a, centre, b, centre);
           out.nodes[i] = c < 0 ? b : a;
           out.nodes[i + 1] = c < 0 ? a : b;
           out.tie[i] = false;
@@ -61970,7 +62014,7 @@ var init_compare = __esm({
         const m = new Array(k * k).fill(0);
         for (let a = 0; a < k; a++) {
           for (let b = a + 1; b < k; b++) {
-            const c = this.compareRule(rule2, run12[a], centre, run12[b], centre);
+            const c = this.compareRule(rule4, run12[a], centre, run12[b], centre);
             m[a * k + b] = c;
             m[b * k + a] = -c;
           }
@@ -62019,7 +62063,10 @@ function rankLigands(rk, centre, ligands, level2) {
       m[j][i] = -c;
     }
   }
-  const order = insertionSort(ligands.map((_, i) => i), (a, b) => m[a][b]);
+  const order = insertionSort(
+    ligands.map((_, i) => i),
+    (a, b) => m[a][b]
+  );
   const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
   const tied = tieWithPrev.some((t) => t);
   let pseudo = false;
@@ -62038,7 +62085,10 @@ function rankLigands(rk, centre, ligands, level2) {
     } finally {
       rk.mirror = saved;
     }
-    const mirror2 = insertionSort(ligands.map((_, i) => i), (a, b) => mm[a][b]);
+    const mirror2 = insertionSort(
+      ligands.map((_, i) => i),
+      (a, b) => mm[a][b]
+    );
     const pos = new Array(k);
     order.forEach((li, p) => pos[li] = p);
     pseudo = !isEvenPermutation(mirror2.map((li) => pos[li]));
@@ -62137,15 +62187,15 @@ function endBranches(dg, end, from, other) {
 function endRank(rk, end, cands, ref, level2 = RULE_5) {
   if (cands.length === 0) return null;
   let top = cands[0];
-  let rule52 = false;
+  let rule53 = false;
   if (cands.length >= 2) {
     const c = rk.compareUpTo(level2, cands[0], end, cands[1], end);
     if (c === 0) return null;
     top = c > 0 ? cands[0] : cands[1];
-    rule52 = Math.abs(c) - 1 === RULE_5;
+    rule53 = Math.abs(c) - 1 === RULE_5;
   }
   const refHigh = ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
-  return { refHigh, rule5: rule52 };
+  return { refHigh, rule5: rule53 };
 }
 function ezLabel(e, end0, end1) {
   const cis = e.relation === "cis" ? end0.refHigh === end1.refHigh : end0.refHigh !== end1.refHigh;
@@ -62289,7 +62339,8 @@ function tiedTetrahedral(g, index, e) {
   const out = [];
   for (let i = 1; i < r.order.length; i++) {
     if (!r.tieWithPrev[i]) continue;
-    for (const k of [r.order[i - 1], r.order[i]]) if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
+    for (const k of [r.order[i - 1], r.order[i]])
+      if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
   }
   return out;
 }
@@ -67076,24 +67127,59 @@ function normalizePath(root, path) {
   }
   return parts.join("/");
 }
-function usesFile(r, file) {
-  const s = r.sources;
-  if (!s) return false;
-  return s.main?.file === file || s.components.some((c) => c.file === file);
+function byMolfile(records) {
+  const users = /* @__PURE__ */ new Map();
+  const add = (file, r) => {
+    if (file === void 0) return;
+    const list = users.get(file);
+    if (!list) users.set(file, [r]);
+    else if (list[list.length - 1] !== r) list.push(r);
+  };
+  for (const r of records) {
+    const s = r.sources;
+    if (!s) continue;
+    add(s.main?.file, r);
+    for (const c of s.components) add(c.file, r);
+  }
+  return users;
+}
+function lowerBound(sorted, file) {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = lo + hi >>> 1;
+    if (sorted[mid].file < file) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 function selectRecords(records, root, paths) {
   const selected = /* @__PURE__ */ new Set();
   const unmatched = [];
+  let users = null;
+  let sorted = null;
   for (const given of paths) {
     const p = normalizePath(root, given);
     const escapes2 = isAbsolute3(given) && (relative2(root, given).startsWith(`..${sep2}`) || relative2(root, given) === "..");
     let hit = false;
     if (!escapes2) {
-      for (const r of records) {
-        if (p === "" || r.file === p || r.file.startsWith(`${p}/`) || usesFile(r, p)) {
+      sorted ??= [...records].sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+      if (p === "") {
+        for (const r of records) selected.add(r);
+        hit = records.length > 0;
+      }
+      for (const start of p === "" ? [] : [p, `${p}/`]) {
+        for (let i = lowerBound(sorted, start); i < sorted.length; i++) {
+          const r = sorted[i];
+          if (start === p ? r.file !== p : !r.file.startsWith(start)) break;
           selected.add(r);
           hit = true;
         }
+      }
+      users ??= byMolfile(records);
+      for (const r of users.get(p) ?? []) {
+        selected.add(r);
+        hit = true;
       }
     }
     if (!hit) unmatched.push(given);

@@ -8819,12 +8819,12 @@ var require_applicability = __commonJS({
     }
     exports.schemaHasRulesForType = schemaHasRulesForType;
     function shouldUseGroup(schema, group) {
-      return group.rules.some((rule2) => shouldUseRule(schema, rule2));
+      return group.rules.some((rule4) => shouldUseRule(schema, rule4));
     }
     exports.shouldUseGroup = shouldUseGroup;
-    function shouldUseRule(schema, rule2) {
+    function shouldUseRule(schema, rule4) {
       var _a;
-      return schema[rule2.keyword] !== void 0 || ((_a = rule2.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
+      return schema[rule4.keyword] !== void 0 || ((_a = rule4.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
     }
     exports.shouldUseRule = shouldUseRule;
   }
@@ -9876,9 +9876,9 @@ var require_validate = __commonJS({
       if (useDefaults)
         (0, defaults_1.assignDefaults)(it, group.type);
       gen.block(() => {
-        for (const rule2 of group.rules) {
-          if ((0, applicability_1.shouldUseRule)(schema, rule2)) {
-            keywordCode(it, rule2.keyword, rule2.definition, group.type);
+        for (const rule4 of group.rules) {
+          if ((0, applicability_1.shouldUseRule)(schema, rule4)) {
+            keywordCode(it, rule4.keyword, rule4.definition, group.type);
           }
         }
       });
@@ -9913,9 +9913,9 @@ var require_validate = __commonJS({
     function checkKeywordTypes(it, ts) {
       const rules = it.self.RULES.all;
       for (const keyword in rules) {
-        const rule2 = rules[keyword];
-        if (typeof rule2 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule2)) {
-          const { type } = rule2.definition;
+        const rule4 = rules[keyword];
+        if (typeof rule4 == "object" && (0, applicability_1.shouldUseRule)(it.schema, rule4)) {
+          const { type } = rule4.definition;
           if (type.length && !type.some((t) => hasApplicableType(ts, t))) {
             strictTypesError(it, `missing type "${type.join(",")}" for keyword "${keyword}"`);
           }
@@ -12001,8 +12001,8 @@ var require_core = __commonJS({
         return this;
       }
       getKeyword(keyword) {
-        const rule2 = this.RULES.all[keyword];
-        return typeof rule2 == "object" ? rule2.definition : !!rule2;
+        const rule4 = this.RULES.all[keyword];
+        return typeof rule4 == "object" ? rule4.definition : !!rule4;
       }
       // Remove keyword
       removeKeyword(keyword) {
@@ -12010,7 +12010,7 @@ var require_core = __commonJS({
         delete RULES.keywords[keyword];
         delete RULES.all[keyword];
         for (const group of RULES.rules) {
-          const i = group.rules.findIndex((rule2) => rule2.keyword === keyword);
+          const i = group.rules.findIndex((rule4) => rule4.keyword === keyword);
           if (i >= 0)
             group.rules.splice(i, 1);
         }
@@ -12037,10 +12037,10 @@ var require_core = __commonJS({
           for (const seg of segments)
             keywords = keywords[seg];
           for (const key3 in rules) {
-            const rule2 = rules[key3];
-            if (typeof rule2 != "object")
+            const rule4 = rules[key3];
+            if (typeof rule4 != "object")
               continue;
-            const { $data } = rule2.definition;
+            const { $data } = rule4.definition;
             const schema = keywords[key3];
             if ($data && schema)
               keywords[key3] = schemaOrData(schema);
@@ -12204,7 +12204,7 @@ var require_core = __commonJS({
       RULES.keywords[keyword] = true;
       if (!definition)
         return;
-      const rule2 = {
+      const rule4 = {
         keyword,
         definition: {
           ...definition,
@@ -12213,18 +12213,18 @@ var require_core = __commonJS({
         }
       };
       if (definition.before)
-        addBeforeRule.call(this, ruleGroup, rule2, definition.before);
+        addBeforeRule.call(this, ruleGroup, rule4, definition.before);
       else
-        ruleGroup.rules.push(rule2);
-      RULES.all[keyword] = rule2;
+        ruleGroup.rules.push(rule4);
+      RULES.all[keyword] = rule4;
       (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
     }
-    function addBeforeRule(ruleGroup, rule2, before) {
+    function addBeforeRule(ruleGroup, rule4, before) {
       const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
       if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule2);
+        ruleGroup.rules.splice(i, 0, rule4);
       } else {
-        ruleGroup.rules.push(rule2);
+        ruleGroup.rules.push(rule4);
         this.logger.warn(`rule ${before} is not defined`);
       }
     }
@@ -42234,7 +42234,9 @@ function buildGraph2(s) {
       for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
     }
   });
-  const mass = s.atoms.map((a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber));
+  const mass = s.atoms.map(
+    (a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)
+  );
   const g = {
     s,
     n,
@@ -42278,7 +42280,8 @@ function fixedByRing(g, e) {
 function expandedValence(s, a, orders) {
   const at = s.atoms[a];
   const z = at.atomicNumber;
-  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53) return false;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53)
+    return false;
   const v = orders.reduce((x, y) => x + y, 0) + at.hCount;
   switch (z) {
     case 15:
@@ -42416,7 +42419,16 @@ var init_digraph = __esm({
         this.count++;
         const g = this.g;
         if (z >= 0 && parent !== null) {
-          return new CipNode(this.nextId++, atom, z, mancudeOf(g).dupMass[parent.atom], depth, dist, true, parent);
+          return new CipNode(
+            this.nextId++,
+            atom,
+            z,
+            mancudeOf(g).dupMass[parent.atom],
+            depth,
+            dist,
+            true,
+            parent
+          );
         }
         if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
         if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
@@ -42476,6 +42488,15 @@ var init_digraph = __esm({
 });
 
 // src/chem/cip/rules.ts
+function rule1a(n) {
+  return n.z;
+}
+function rule1b(n) {
+  return -n.dist;
+}
+function rule2(n) {
+  return n.mass;
+}
 function rule3(label) {
   return label === "Z" ? 2 : label === "E" ? 1 : 0;
 }
@@ -42488,6 +42509,9 @@ function rule4c(label) {
 }
 function rule5(label) {
   return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
+}
+function rule6(n, ref) {
+  return n.atom === ref ? 1 : 0;
 }
 function likeClass(label) {
   return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
@@ -42565,7 +42589,9 @@ function orderedPairs(rk, x, fx, refClass, memo) {
       while (b < nodes.length && s.tie[b]) b++;
       if (b - a > 1) {
         const run10 = nodes.slice(a, b);
-        run10.sort((u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)));
+        run10.sort(
+          (u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo))
+        );
         for (let k = a; k < b; k++) nodes[k] = run10[k - a];
       }
       a = b;
@@ -42616,7 +42642,7 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, Ranker, EMPTY;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, Ranker, EMPTY;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
@@ -42632,6 +42658,14 @@ var init_compare = __esm({
     RULE_4C = 6;
     RULE_52 = 7;
     RULE_62 = 8;
+    rule1a2 = rule1a;
+    rule1b2 = rule1b;
+    rule22 = rule2;
+    rule32 = rule3;
+    rule4a2 = rule4a;
+    rule4c2 = rule4c;
+    rule52 = rule5;
+    rule62 = rule6;
     Ranker = class {
       constructor(dg, auxOf) {
         this.dg = dg;
@@ -42640,7 +42674,17 @@ var init_compare = __esm({
         const g = dg.g;
         const several = g.stereoCount > 1;
         const isotopes = g.s.atoms.some((a) => a.isotope !== null);
-        this.active = [true, true, isotopes, g.hasBondStereo && several, several, several, several, several, false];
+        this.active = [
+          true,
+          true,
+          isotopes,
+          g.hasBondStereo && several,
+          several,
+          several,
+          several,
+          several,
+          false
+        ];
       }
       dg;
       auxOf;
@@ -42689,24 +42733,24 @@ var init_compare = __esm({
         this.dg.rule6Ref = ref;
         this.active[RULE_62] = ref >= 0;
       }
-      value(rule2, n) {
-        switch (rule2) {
+      value(rule4, n) {
+        switch (rule4) {
           case RULE_1A:
-            return n.z;
+            return rule1a2(n);
           case RULE_1B:
-            return -n.dist;
+            return rule1b2(n);
           case RULE_2:
-            return n.mass;
+            return rule22(n);
           case RULE_3:
-            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
+            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule32(this.aux(n));
           case RULE_4A2:
-            return this.stereoValue(n, rule4a);
+            return this.stereoValue(n, rule4a2);
           case RULE_4C:
-            return this.stereoValue(n, rule4c);
+            return this.stereoValue(n, rule4c2);
           case RULE_52:
-            return this.stereoValue(n, this.mirror ? (l) => rule5(invertChiral(l)) : rule5);
+            return this.stereoValue(n, this.mirror ? (l) => rule52(invertChiral(l)) : rule52);
           case RULE_62:
-            return n.atom === this.dg.rule6Ref ? 1 : 0;
+            return rule62(n, this.dg.rule6Ref);
           default:
             return 0;
         }
@@ -42721,10 +42765,10 @@ var init_compare = __esm({
        * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
        * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
        */
-      compareRule(rule2, x, fx, y, fy) {
+      compareRule(rule4, x, fx, y, fy) {
         if (y === null) return 1;
-        if (rule2 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
-        let c = this.value(rule2, x) - this.value(rule2, y);
+        if (rule4 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+        let c = this.value(rule4, x) - this.value(rule4, y);
         if (c !== 0) return c > 0 ? 1 : -1;
         if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
         const d = this.depth++;
@@ -42741,17 +42785,17 @@ var init_compare = __esm({
         qfy.push(fy);
         try {
           for (let i = 0; i < qx.length; i++) {
-            const sx = this.sorted(qx[i], qfx[i], rule2).nodes;
-            const sy = this.sorted(qy[i], qfy[i], rule2).nodes;
+            const sx = this.sorted(qx[i], qfx[i], rule4).nodes;
+            const sy = this.sorted(qy[i], qfy[i], rule4).nodes;
             const m = Math.min(sx.length, sy.length);
             for (let j = 0; j < m; j++) {
-              c = this.value(rule2, sx[j]) - this.value(rule2, sy[j]);
+              c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
               if (c !== 0) return c > 0 ? 1 : -1;
             }
-            if (sx.length !== sy.length && rule2 === RULE_1A) {
+            if (sx.length !== sy.length && rule4 === RULE_1A) {
               const longer = sx.length > sy.length ? sx : sy;
               for (let j = m; j < longer.length; j++) {
-                if (this.value(rule2, longer[j]) > 0) return longer === sx ? 1 : -1;
+                if (this.value(rule4, longer[j]) > 0) return longer === sx ? 1 : -1;
               }
             }
             for (let j = 0; j < m; j++) {
@@ -42840,11 +42884,11 @@ var init_compare = __esm({
        * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
        * first, writing them and their ties into `out` at the same places.
        */
-      sortRun(nodes, i, j, centre, rule2, out) {
+      sortRun(nodes, i, j, centre, rule4, out) {
         if (j - i === 2) {
           const a = nodes[i];
           const b = nodes[i + 1];
-          const c = this.compareRule(rule2, a, centre, b, centre);
+          const c = this.compareRule(rule4, a, centre, b, centre);
           out.nodes[i] = c < 0 ? b : a;
           out.nodes[i + 1] = c < 0 ? a : b;
           out.tie[i] = false;
@@ -42856,7 +42900,7 @@ var init_compare = __esm({
         const m = new Array(k * k).fill(0);
         for (let a = 0; a < k; a++) {
           for (let b = a + 1; b < k; b++) {
-            const c = this.compareRule(rule2, run10[a], centre, run10[b], centre);
+            const c = this.compareRule(rule4, run10[a], centre, run10[b], centre);
             m[a * k + b] = c;
             m[b * k + a] = -c;
           }
@@ -42905,7 +42949,10 @@ function rankLigands(rk, centre, ligands, level2) {
       m[j][i] = -c;
     }
   }
-  const order = insertionSort(ligands.map((_, i) => i), (a, b) => m[a][b]);
+  const order = insertionSort(
+    ligands.map((_, i) => i),
+    (a, b) => m[a][b]
+  );
   const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
   const tied = tieWithPrev.some((t) => t);
   let pseudo = false;
@@ -42924,7 +42971,10 @@ function rankLigands(rk, centre, ligands, level2) {
     } finally {
       rk.mirror = saved;
     }
-    const mirror2 = insertionSort(ligands.map((_, i) => i), (a, b) => mm[a][b]);
+    const mirror2 = insertionSort(
+      ligands.map((_, i) => i),
+      (a, b) => mm[a][b]
+    );
     const pos = new Array(k);
     order.forEach((li, p) => pos[li] = p);
     pseudo = !isEvenPermutation(mirror2.map((li) => pos[li]));
@@ -43023,15 +43073,15 @@ function endBranches(dg, end, from, other) {
 function endRank(rk, end, cands, ref, level2 = RULE_5) {
   if (cands.length === 0) return null;
   let top = cands[0];
-  let rule52 = false;
+  let rule53 = false;
   if (cands.length >= 2) {
     const c = rk.compareUpTo(level2, cands[0], end, cands[1], end);
     if (c === 0) return null;
     top = c > 0 ? cands[0] : cands[1];
-    rule52 = Math.abs(c) - 1 === RULE_5;
+    rule53 = Math.abs(c) - 1 === RULE_5;
   }
   const refHigh = ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
-  return { refHigh, rule5: rule52 };
+  return { refHigh, rule5: rule53 };
 }
 function ezLabel(e, end0, end1) {
   const cis = e.relation === "cis" ? end0.refHigh === end1.refHigh : end0.refHigh !== end1.refHigh;
@@ -43175,7 +43225,8 @@ function tiedTetrahedral(g, index, e) {
   const out = [];
   for (let i = 1; i < r.order.length; i++) {
     if (!r.tieWithPrev[i]) continue;
-    for (const k of [r.order[i - 1], r.order[i]]) if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
+    for (const k of [r.order[i - 1], r.order[i]])
+      if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
   }
   return out;
 }

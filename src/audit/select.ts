@@ -14,10 +14,34 @@ export function normalizePath(root: string, path: string): string {
   return parts.join('/');
 }
 
-function usesFile(r: LoadedRecord, file: string): boolean {
-  const s = r.sources;
-  if (!s) return false;
-  return s.main?.file === file || s.components.some((c) => c.file === file);
+/** Records by the molfile paths they use (main structure and components). */
+function byMolfile(records: readonly LoadedRecord[]): Map<string, LoadedRecord[]> {
+  const users = new Map<string, LoadedRecord[]>();
+  const add = (file: string | undefined, r: LoadedRecord): void => {
+    if (file === undefined) return;
+    const list = users.get(file);
+    if (!list) users.set(file, [r]);
+    else if (list[list.length - 1] !== r) list.push(r);
+  };
+  for (const r of records) {
+    const s = r.sources;
+    if (!s) continue;
+    add(s.main?.file, r);
+    for (const c of s.components) add(c.file, r);
+  }
+  return users;
+}
+
+/** Index of the first entry of `sorted` (by file) whose file is >= `file`. */
+function lowerBound(sorted: readonly LoadedRecord[], file: string): number {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (sorted[mid]!.file < file) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
 }
 
 export interface Selection {
@@ -33,17 +57,32 @@ export function selectRecords(
 ): Selection {
   const selected = new Set<LoadedRecord>();
   const unmatched: string[] = [];
+  let users: Map<string, LoadedRecord[]> | null = null;
+  let sorted: LoadedRecord[] | null = null;
   for (const given of paths) {
     const p = normalizePath(root, given);
     const escapes =
       isAbsolute(given) && (relative(root, given).startsWith(`..${sep}`) || relative(root, given) === '..');
     let hit = false;
     if (!escapes) {
-      for (const r of records) {
-        if (p === '' || r.file === p || r.file.startsWith(`${p}/`) || usesFile(r, p)) {
+      sorted ??= [...records].sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
+      // the root names every record; else the record file itself, then every record file in the folder p
+      if (p === '') {
+        for (const r of records) selected.add(r);
+        hit = records.length > 0;
+      }
+      for (const start of p === '' ? [] : [p, `${p}/`]) {
+        for (let i = lowerBound(sorted, start); i < sorted.length; i++) {
+          const r = sorted[i]!;
+          if (start === p ? r.file !== p : !r.file.startsWith(start)) break;
           selected.add(r);
           hit = true;
         }
+      }
+      users ??= byMolfile(records);
+      for (const r of users.get(p) ?? []) {
+        selected.add(r);
+        hit = true;
       }
     }
     if (!hit) unmatched.push(given);
