@@ -50,6 +50,8 @@ export class Ranker {
    * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
    */
   mirror = false;
+  /** Rule 4b sequences per branch (rule4b.ts). */
+  readonly memo4b = new Map<string, number[]>();
   private depth = 0;
   private readonly pool: { x: CipNode[]; fx: (CipNode | null)[]; y: CipNode[]; fy: (CipNode | null)[] }[] =
     [];

@@ -21,10 +21,16 @@ import { rankLigands } from './rank.js';
 import { RULE_5, RULE_6 } from './rules.js';
 import type { Ranker } from './compare.js';
 
-function ranker(g: CipGraph, root: number, element: number, ref: number): Ranker {
-  const dg = new Digraph(g, root, element);
-  const rk = newRanker(dg);
-  if (ref >= 0) rk.setRule6(ref);
+/** Rankers by root atom, shared while one unit is tried with several Rule 6 references. */
+type Rankers = Map<number, Ranker>;
+
+function ranker(g: CipGraph, root: number, element: number, ref: number, cache?: Rankers): Ranker {
+  let rk = cache?.get(root);
+  if (rk === undefined) {
+    rk = newRanker(new Digraph(g, root, element));
+    cache?.set(root, rk);
+  }
+  rk.setRule6(ref);
   return rk;
 }
 
@@ -36,14 +42,20 @@ function towardOther(g: CipGraph, end: number, other: number): number {
   return -1;
 }
 
-function tetrahedral(g: CipGraph, index: number, e: TetrahedralStereo, ref: number): CipLabel | null {
-  const rk = ranker(g, e.centre, index, ref);
+function tetrahedral(
+  g: CipGraph,
+  index: number,
+  e: TetrahedralStereo,
+  ref: number,
+  c?: Rankers,
+): CipLabel | null {
+  const rk = ranker(g, e.centre, index, ref, c);
   return tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
 }
 
 /** Ligands of a tetrahedral centre that tie under Rules 1-5 (candidates for the Rule 6 reference). */
-function tiedTetrahedral(g: CipGraph, index: number, e: TetrahedralStereo): number[] {
-  const rk = ranker(g, e.centre, index, -1);
+function tiedTetrahedral(g: CipGraph, index: number, e: TetrahedralStereo, c?: Rankers): number[] {
+  const rk = ranker(g, e.centre, index, -1, c);
   const used = new Set<ReturnType<typeof rk.dg.phantom>>();
   const ligs = [];
   for (const l of e.ligands) {
@@ -62,13 +74,19 @@ function tiedTetrahedral(g: CipGraph, index: number, e: TetrahedralStereo): numb
   return out;
 }
 
-function doubleBond(g: CipGraph, index: number, e: DoubleBondStereo, ref: number): CipLabel | null {
+function doubleBond(
+  g: CipGraph,
+  index: number,
+  e: DoubleBondStereo,
+  ref: number,
+  c?: Rankers,
+): CipLabel | null {
   const level = ref >= 0 ? RULE_6 : RULE_5;
   const high: { refHigh: boolean; rule5: boolean }[] = [];
   for (let i = 0; i < 2; i++) {
     const end = e.ends[i];
     const excl = towardOther(g, end, e.ends[1 - i]);
-    const rk = ranker(g, end, index, ref);
+    const rk = ranker(g, end, index, ref, c);
     const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level);
     if (h === null) return null;
     high.push(h);
@@ -76,22 +94,22 @@ function doubleBond(g: CipGraph, index: number, e: DoubleBondStereo, ref: number
   return ezLabel(e, high[0], high[1]);
 }
 
-function axial(g: CipGraph, index: number, e: AxialStereo, ref: number): CipLabel | null {
+function axial(g: CipGraph, index: number, e: AxialStereo, ref: number, c?: Rankers): CipLabel | null {
   const level = ref >= 0 ? RULE_6 : RULE_5;
-  const r0 = ranker(g, e.ends[0], index, ref);
-  const r1 = ranker(g, e.ends[1], index, ref);
+  const r0 = ranker(g, e.ends[0], index, ref, c);
+  const r1 = ranker(g, e.ends[1], index, ref, c);
   return axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level);
 }
 
-function labelWith(g: CipGraph, index: number, e: StereoElement, ref: number): CipLabel | null {
-  if (e.kind === 'tetrahedral') return tetrahedral(g, index, e, ref);
-  if (e.kind === 'double-bond') return doubleBond(g, index, e, ref);
-  return axial(g, index, e, ref);
+function labelWith(g: CipGraph, index: number, e: StereoElement, ref: number, c?: Rankers): CipLabel | null {
+  if (e.kind === 'tetrahedral') return tetrahedral(g, index, e, ref, c);
+  if (e.kind === 'double-bond') return doubleBond(g, index, e, ref, c);
+  return axial(g, index, e, ref, c);
 }
 
 /** Candidate Rule 6 references: the ligand atoms of the unit that Rules 1-5 leave tied. */
-function rule6Candidates(g: CipGraph, index: number, e: StereoElement): number[] {
-  if (e.kind === 'tetrahedral') return tiedTetrahedral(g, index, e);
+function rule6Candidates(g: CipGraph, index: number, e: StereoElement, c: Rankers): number[] {
+  if (e.kind === 'tetrahedral') return tiedTetrahedral(g, index, e, c);
   if (e.kind === 'double-bond') {
     const out: number[] = [];
     for (let i = 0; i < 2; i++) {
@@ -118,8 +136,9 @@ export function labelRule6(g: CipGraph, index: number): CipLabel | null {
   if (g.ringFixed[index]) return null;
   const e = g.s.stereo[index];
   const found = new Set<CipLabel>();
-  for (const ref of rule6Candidates(g, index, e)) {
-    const l = labelWith(g, index, e, ref);
+  const cache: Rankers = new Map();
+  for (const ref of rule6Candidates(g, index, e, cache)) {
+    const l = labelWith(g, index, e, ref, cache);
     if (l !== null) found.add(l);
   }
   return found.size === 1 ? [...found][0] : null;

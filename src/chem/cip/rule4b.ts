@@ -9,7 +9,11 @@
 import type { CipLabel } from '../facts.js';
 import type { CipNode } from './digraph.js';
 import type { Ranker } from './compare.js';
-import { RULE_4A, isChiralLabel, likeClass } from './rules.js';
+import * as rules from './rules.js';
+
+const RULE_4A = rules.RULE_4A;
+const isChiralLabel = rules.isChiralLabel;
+const likeClass = rules.likeClass;
 
 interface Entry {
   label: CipLabel;
@@ -57,6 +61,18 @@ function descriptors(rk: Ranker, x: CipNode, fx: CipNode | null): Entry[] {
   return out;
 }
 
+/** Hydrogens, phantoms and duplicates: nothing to order among them. */
+function allLeaves(nodes: CipNode[], a: number, b: number): boolean {
+  for (let k = a; k < b; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
+  return true;
+}
+
+/** 2 for a descriptor like the reference, 1 for an unlike one, 0 for none. */
+function own(rk: Ranker, n: CipNode, refClass: number): number {
+  const l = chiralLabel(rk, n);
+  return l === null ? 0 : likeClass(l) === refClass ? 2 : 1;
+}
+
 function chiralLabel(rk: Ranker, n: CipNode): CipLabel | null {
   if (n.dup || n.atom < 0 || rk.value(RULE_4A, n) !== 2) return null;
   const l = rk.aux(n);
@@ -80,10 +96,6 @@ function orderedPairs(
   const seq: number[] = [];
   const q: CipNode[] = [x];
   const qf: (CipNode | null)[] = [fx];
-  const own = (n: CipNode): number => {
-    const l = chiralLabel(rk, n);
-    return l === null ? 0 : likeClass(l) === refClass ? 2 : 1;
-  };
   for (let i = 0; i < q.length; i++) {
     const n = q[i];
     const l = chiralLabel(rk, n);
@@ -93,11 +105,11 @@ function orderedPairs(
     for (let a = 0; a < nodes.length;) {
       let b = a + 1;
       while (b < nodes.length && s.tie[b]) b++;
-      if (b - a > 1) {
+      if (b - a > 1 && !allLeaves(nodes, a, b)) {
         const run = nodes.slice(a, b);
         run.sort(
           (u, v) =>
-            own(v) - own(u) ||
+            own(rk, v, refClass) - own(rk, u, refClass) ||
             lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo)),
         );
         for (let k = a; k < b; k++) nodes[k] = run[k - a];
