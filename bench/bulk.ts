@@ -115,6 +115,10 @@ export async function benchBulkMemory(ctx: BenchContext): Promise<void> {
     const rss = process.memoryUsage().rss;
     peak = Math.max(peak, rss);
     samples.push(rss);
+    if (samples.length % 30 === 0)
+      console.log(
+        `  resident memory now ${(rss / 2 ** 20).toFixed(0)} MiB, peak ${(peak / 2 ** 20).toFixed(0)} MiB`,
+      );
   }, 1000);
   const t0 = performance.now();
   const c0 = process.cpuUsage();

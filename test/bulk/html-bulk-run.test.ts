@@ -4,16 +4,12 @@
  * through the bulk command. The page loads with no console errors, every flagged record with a readable
  * structure has its depiction, the filters and the search work, and a screenshot is saved to test-output/.
  */
-import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { chromium } from 'playwright-core';
+import { haveBrowser, openPage, requireBrowser } from './browser.js';
 import { bulkAudit } from '../../src/cli/commands/bulk-audit.js';
 import { memoryIo } from '../cli/io.js';
-
-const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
-const requireBrowser = process.env.STEREOGATE_REQUIRE_SHARED_DATA === '1';
-const haveBrowser = existsSync(CHROMIUM);
 
 const out = join(process.cwd(), 'test-output');
 const rows: [id: string, smiles: string, form: string, descriptors: string][] = [
@@ -66,25 +62,8 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report of a bulk run in c
     const drawable = flagged.filter((r) => r.computed !== null);
     expect(flagged.length).toBeGreaterThanOrEqual(6);
 
-    const browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      args: [
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-quic',
-        '--no-first-run',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-      ],
-    });
+    const { browser, page, problems } = await openPage({ width: 1280, height: 900 });
     try {
-      const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-      const problems: string[] = [];
-      page.on('console', (m) => {
-        if (m.type() === 'error') problems.push(m.text());
-      });
-      page.on('pageerror', (e) => problems.push(String(e)));
       await page.goto('file://' + html);
       const visible = () => page.locator('article.rec:not([hidden])').count();
       expect(await visible()).toBe(flagged.length);

@@ -2,18 +2,12 @@
  * The HTML report in a real browser: Debian's chromium driven by playwright-core. Loads with no console errors,
  * filters and search work, and a screenshot is saved to test-output/ for review.
  */
-import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { chromium } from 'playwright-core';
+import { haveBrowser, openPage, requireBrowser } from './browser.js';
 import { renderHtml } from '../../src/report/html/render.js';
 import type { AuditResult, Finding, RecordResult } from '../../src/audit/types.js';
-
-const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
-const requireBrowser = process.env.STEREOGATE_REQUIRE_SHARED_DATA === '1';
-const haveBrowser = existsSync(CHROMIUM);
-if (!haveBrowser && !requireBrowser)
-  console.warn(`[stereogate tests] skipping browser test: no chromium at ${CHROMIUM}`);
 
 function finding(check: string, severity: Finding['severity'], message: string): Finding {
   return { check, messageId: 'm', severity, message, data: {}, line: 7, field: 'stereo.form', waived: null };
@@ -55,25 +49,8 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report in chromium', () =
     mkdirSync(dir, { recursive: true });
     const file = join(dir, 'html-report.html');
     writeFileSync(file, html);
-    const browser = await chromium.launch({
-      executablePath: CHROMIUM,
-      args: [
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-quic',
-        '--no-first-run',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-      ],
-    });
+    const { browser, page, problems } = await openPage();
     try {
-      const page = await browser.newPage();
-      const problems: string[] = [];
-      page.on('console', (m) => {
-        if (m.type() === 'error') problems.push(m.text());
-      });
-      page.on('pageerror', (e) => problems.push(String(e)));
       await page.goto('file://' + file);
       const visible = async () => page.locator('article.rec:not([hidden])').count();
       expect(await visible()).toBe(3); // LX-00003 has no findings
