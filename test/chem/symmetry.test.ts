@@ -86,6 +86,17 @@ suite('geometrically impossible drawings', () => {
   });
 });
 
+suite('impossible drawings found in real data (MoleculeNet, Wu et al. 2018)', () => {
+  // Benztropine and aldrin are achiral (meso-type) compounds (from memory); RDKit MinimalLib calls both drawings
+  // chiral (canonical SMILES differs from the mirror's), so the drawn bridgehead configurations match no real isomer.
+  it.each([
+    ['benztropine, clintox.csv row 606', 'C[NH+]1[C@@H]2CC[C@@H]1CC(C2)OC(c3ccccc3)c4ccccc4'],
+    ['aldrin, tox21.csv row 1598', 'ClC1=C(Cl)[C@]2(Cl)[C@H]3[C@H]([C@H]4C=C[C@H]3C4)[C@@]1(Cl)C2(Cl)Cl'],
+  ])('%s is flagged', (_name, smi) => {
+    expect(facts(smi).remarks.join(' ')).toMatch(/cannot both hold/);
+  });
+});
+
 suite('chirality with undefined units', () => {
   it('2-butanol undefined: every completion is chiral, so chiral = true; one undefined unit', () => {
     expect(facts('CC(O)CC')).toMatchObject({ chiral: true, undefined: 1 });
