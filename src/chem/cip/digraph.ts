@@ -51,6 +51,8 @@ export class Digraph {
   readonly root: CipNode;
   private nextId = 0;
   count = 0;
+  /** The node budget ran out: comparisons may be wrong, so the unit gets no descriptor (label.ts). */
+  truncated = false;
   /** Index into s.stereo of the unit being labelled: its own nodes carry no auxiliary descriptor. */
   readonly rootElement: number;
   /** Proposed Rule 6 reference atom (Hanson et al. 2018), or -1 when unset. */
@@ -103,7 +105,11 @@ export class Digraph {
     if (node.kids) return node.kids;
     const out: CipNode[] = [];
     node.kids = out;
-    if (node.dup || node.atom < 0 || this.count > NODE_BUDGET) return out;
+    if (node.dup || node.atom < 0) return out;
+    if (this.count > NODE_BUDGET) {
+      this.truncated = true;
+      return out;
+    }
     const g = this.g;
     const a = node.atom;
     const parent = node.parent;

@@ -50,7 +50,8 @@ function tetrahedral(
   c?: Rankers,
 ): CipLabel | null {
   const rk = ranker(g, e.centre, index, ref, c);
-  return tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
+  const l = tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
+  return rk.dg.truncated ? null : l;
 }
 
 /** Ligands of a tetrahedral centre that tie under Rules 1-5 (candidates for the Rule 6 reference). */
@@ -88,7 +89,7 @@ function doubleBond(
     const excl = towardOther(g, end, e.ends[1 - i]);
     const rk = ranker(g, end, index, ref, c);
     const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level);
-    if (h === null) return null;
+    if (h === null || rk.dg.truncated) return null;
     high.push(h);
   }
   return ezLabel(e, high[0], high[1]);
@@ -98,7 +99,8 @@ function axial(g: CipGraph, index: number, e: AxialStereo, ref: number, c?: Rank
   const level = ref >= 0 ? RULE_6 : RULE_5;
   const r0 = ranker(g, e.ends[0], index, ref, c);
   const r1 = ranker(g, e.ends[1], index, ref, c);
-  return axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level);
+  const l = axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level);
+  return r0.dg.truncated || r1.dg.truncated ? null : l;
 }
 
 function labelWith(g: CipGraph, index: number, e: StereoElement, ref: number, c?: Rankers): CipLabel | null {
