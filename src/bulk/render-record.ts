@@ -127,6 +127,7 @@ export function makeRenderer(wants: RenderWants, checks: readonly CheckModule[])
         const labels = (r.computed?.units ?? [])
           .filter((u) => u.label)
           .flatMap((u) => u.atoms.map((a) => ({ atom: a, text: u.label as string })));
+        row.file = `${r.origin.source} · record ${r.origin.record}, line ${r.origin.line}`;
         out.html = { row, structure: r.structure_text ?? null, labels };
       }
     }

@@ -96,6 +96,10 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report of a bulk run in c
       await page.selectOption('#filter-form', '');
       await page.fill('#search', 'lx-00003');
       expect(await idsOf()).toEqual(['LX-00003']);
+      // the record's position in the export: record 3 is on line 4 (after the header)
+      expect(await page.locator('article.rec:not([hidden]) .file').textContent()).toMatch(
+        /record 3, line 4$/,
+      );
       await page.fill('#search', '');
       expect(await visible()).toBe(flagged.length);
       await page.screenshot({ path: join(out, 'bulk-report.png'), fullPage: true });
