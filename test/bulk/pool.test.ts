@@ -23,6 +23,13 @@ describe('ordered worker pool', () => {
     expect(out).toEqual([1, 4, 9, -999, 16, 25, 36, 49, 64, 81, 100]);
   });
 
+  it('blames the item the worker is stuck on, not an earlier one of its batch whose result was not sent yet', async () => {
+    // one worker, batches of 3: [1, 2, 3] then [4, -1, 5]; 4 is finished (unsent) when -1 stalls
+    const input = [1, 2, 3, 4, -1, 5, 6];
+    const out = await collect(mapOrdered(input, { ...base, workers: 1, batchSize: 3 }));
+    expect(out).toEqual([1, 4, 9, 16, -999, 25, 36]);
+  });
+
   it('gives a crashing item its crash result and keeps going', async () => {
     const input = [2, -2, 3, 4];
     const out = await collect(mapOrdered(input, { ...base, workers: 1, batchSize: 2 }));
