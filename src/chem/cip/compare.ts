@@ -63,11 +63,10 @@ export class Ranker {
     this.scope = dg.root;
     const g = dg.g;
     const several = g.stereoCount > 1;
-    const isotopes = g.s.atoms.some((a) => a.isotope !== null);
     this.active = [
       true,
       true,
-      isotopes,
+      g.isotopes,
       g.hasBondStereo && several,
       several,
       several,

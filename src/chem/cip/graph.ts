@@ -41,6 +41,8 @@ export interface CipGraph {
   /** Per stereo element: its geometry is fixed by a small ring, so it is no stereogenic unit. */
   ringFixed: boolean[];
   hasBondStereo: boolean;
+  /** Some atom has a mass number: Rule 2 can separate something. */
+  isotopes: boolean;
   /** Number of stereo elements: when it is 1, Rules 3-5 cannot separate anything. */
   stereoCount: number;
 }
@@ -106,6 +108,7 @@ export function buildGraph(s: Structure): CipGraph {
     ringFixed: [],
     auxAllowed: [],
     auxRule6: [],
+    isotopes: s.atoms.some((a) => a.isotope !== null),
   };
   g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
   g.auxAllowed = g.ringFixed.map((f) => !f);
