@@ -4,7 +4,15 @@
  *
  * `assignCip` gives one result per element of `s.stereo`, in the same order. The label is null when the unit is
  * not stereogenic by the rules (two ligands tie completely), which is how units that a reader records from
- * geometry alone (every sp3 atom of a 3D file) drop out.
+ * geometry alone (every sp3 atom of a 3D file) drop out; so do double bonds in rings of up to 7 atoms, biaryl
+ * bonds in rings of up to 6, and amine nitrogens that are not bridgeheads of a bridged system.
+ *
+ * Helicenes are not among the reader's stereo elements: `findHelices` finds them from 3D coordinates or 2D
+ * wedges and labels the two terminal atoms of the inner rim (P/M); callers add its results to assignCip's.
+ *
+ * Files: graph.ts (molecular graph), mancude.ts (P-92.1.4.4), digraph.ts (lazy hierarchical digraph),
+ * rules.ts and rule4b.ts (the sequence rules), compare.ts (sphere-by-sphere comparison), aux.ts (auxiliary
+ * descriptors), rank.ts (ranking, pseudoasymmetry, R/S), label.ts (each kind of unit, Rule 6), helix.ts.
  */
 import type { CipLabel } from '../facts.js';
 import type { Structure } from '../types.js';
