@@ -35,9 +35,51 @@ const messages = {
   'enantiomer-form-conflict':
     'This compound is declared {form}, but its enantiomer {otherId} is registered as {otherForm}. Enantiomers have ' +
     'the same kind of form (both single enantiomers, or both enriched); check both records.',
+  'conflict-reported-on-later-record':
+    '{otherId} ({otherFile}), registered after this record, conflicts with it ({conflict}); the finding is ' +
+    'reported on {otherId}. Nothing to change here unless {otherId} turns out to be right.',
 } as const;
 
 type Id = keyof typeof messages;
+
+/** Findings that say one of two records is wrong; the rest (notes) are said on both records. */
+const CONFLICTS: readonly Id[] = [
+  'already-registered',
+  'same-structure-different-form',
+  'enantiomer-rotation-same-sign',
+  'enantiomer-form-conflict',
+];
+
+/** What the conflict pointer says about the other record's finding. */
+const CONFLICT_WORDS: Partial<Record<Id, string>> = {
+  'already-registered': 'the same structure registered again under the same form',
+  'same-structure-different-form': 'the same structure under another form',
+  'enantiomer-rotation-same-sign': 'enantiomers with rotations of the same sign',
+  'enantiomer-form-conflict': 'enantiomers of different kinds of form',
+};
+
+/**
+ * Registry order: ids compared with their numbers as numbers (LX-00024 after LX-00008); a record without an
+ * id is not registered yet, so it comes after every record with one. Ties fall back to the file path.
+ */
+export function registeredLater(a: RegistryEntry, b: RegistryEntry): boolean {
+  if (a.id !== b.id) {
+    if (a.id === null) return true;
+    if (b.id === null) return false;
+    return a.id.localeCompare(b.id, 'en', { numeric: true }) > 0;
+  }
+  return a.file.localeCompare(b.file, 'en', { numeric: true }) > 0;
+}
+
+/**
+ * Which of two conflicting records carries the finding: a record under review against one that is not (a pull
+ * request changing one record) carries it itself; when both are under review (a full audit, or a pull request
+ * touching both), the one registered later does.
+ */
+function carriesConflict(me: RegistryEntry | undefined, other: RegistryEntry): boolean {
+  if (!me || !other.underReview) return true;
+  return registeredLater(me, other);
+}
 
 const ENANTIOPURE: readonly StereoForm[] = ['single-enantiomer', 'enantioenriched'];
 
@@ -93,6 +135,12 @@ function run(ctx: CheckContext): CheckOutcome {
     data: RawFinding['data'],
     severity?: RawFinding['severity'],
   ): void => {
+    if (CONFLICTS.includes(id) && !carriesConflict(me, other)) {
+      pointers.push(other.id ?? other.file);
+      data = { conflict: CONFLICT_WORDS[id] ?? id, otherMessageId: id, ...data };
+      id = 'conflict-reported-on-later-record';
+      severity = 'note';
+    }
     out.push(
       finding(
         id,
@@ -110,6 +158,7 @@ function run(ctx: CheckContext): CheckOutcome {
     );
   };
   let compared = 0;
+  const pointers: string[] = [];
   for (const other of ctx.registry.withConstitution(f.constitutionKey)) {
     const otherFacts = other.main.facts;
     if (isSelf(ctx, other) || !other.main.structure || !otherFacts) continue;
@@ -151,7 +200,10 @@ function run(ctx: CheckContext): CheckOutcome {
     passed:
       compared === 0
         ? 'no other registered record has this constitution'
-        : `compared with ${compared} registered record(s) of the same constitution; no duplicate or conflict`,
+        : pointers.length > 0
+          ? `compared with ${compared} registered record(s) of the same constitution; the conflict with ` +
+            `${[...new Set(pointers)].join(', ')} is reported on the later record`
+          : `compared with ${compared} registered record(s) of the same constitution; no duplicate or conflict`,
   };
 }
 
@@ -167,7 +219,11 @@ export const consistentWithRegistry: CheckModule = {
     'measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in ' +
     'size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). Only records under review are ' +
     'checked, each against the other records in the checkout; a racemic drawing (AND group) is compared only with ' +
-    'racemic drawings, a relative one (OR group) only with relative ones.',
+    'racemic drawings, a relative one (OR group) only with relative ones. A conflict between two records (a ' +
+    'duplicate, the same structure under another form, enantiomers of the same rotation sign or of different ' +
+    'kinds of form) is reported once: on the record under review when the other is not under review (a pull ' +
+    'request), and, when both are (a full audit), on the one registered later — the higher registry id, a record ' +
+    'without an id counting as newest; the earlier record gets a note naming it (common practice, no source).',
   messages,
   run,
 };

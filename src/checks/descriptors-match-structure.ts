@@ -13,6 +13,8 @@ import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './type
 import { declaredDescriptors, finding, labelList } from './words.js';
 import { parseDescriptors } from '../chem/descriptors.js';
 import { prefixFindings, prefixMessages } from './descriptor-prefixes.js';
+import { distinctUnits, repeatedComponents } from './repeated-components.js';
+import type { ReadStructure } from './types.js';
 
 const messages = {
   'descriptor-unreadable':
@@ -163,18 +165,42 @@ function sameItems(a: ParsedDescriptors, b: ParsedDescriptors): boolean {
   return k(a) === k(b);
 }
 
+/**
+ * The facts to compare descriptors with: a component of a salt that repeats an earlier one (same constitution
+ * and configuration, e.g. the two amphetamines of bis(amphetamine) sulfate) is cited once, so its units are
+ * left out. `repeats` says so in words for the evidence.
+ */
+function comparable(r: ReadStructure, ctx: CheckContext): { facts: StructureFacts; repeats: string } | null {
+  const f = r.facts;
+  if (!f) return null;
+  const repeated = repeatedComponents(r.structure, f, ctx.engine);
+  if (repeated.size === 0) return { facts: f, repeats: '' };
+  const units = distinctUnits(f, repeated);
+  const words = [...repeated].map(([k, j]) => `component ${k + 1} repeats component ${j + 1}`).join(', ');
+  return {
+    facts: { ...f, units, undefined: units.filter((u) => !u.defined).length },
+    repeats: ` (${words} of the structure and is counted once)`,
+  };
+}
+
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
-  const f = ctx.main.facts;
-  if (!record || !f) return { findings: [], notApplicable: true };
+  const c0 = comparable(ctx.main, ctx);
+  if (!record || !c0) return { findings: [], notApplicable: true };
+  const f = c0.facts;
   const decl = declaredDescriptors(record);
   const out: RawFinding[] = [];
   const evidence: string[] = [];
-  const note = (what: string, cmp: DescriptorComparison | null): void => {
+  const note = (
+    what: string,
+    cmp: DescriptorComparison | null,
+    compared: StructureFacts = f,
+    repeats = c0.repeats,
+  ): void => {
     if (!cmp || cmp.method === 'none') return;
     const how = cmp.method === 'per-locant' ? 'per locant (atom maps)' : `as counts (${cmp.whyNotPerLocant})`;
     evidence.push(
-      `${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`,
+      `${what} agrees with computed ${labelList(compared.units)}${repeats}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`,
     );
   };
   const fieldText = record.stereo.descriptors ?? '';
@@ -214,12 +240,15 @@ function run(ctx: CheckContext): CheckOutcome {
     }
   }
   (record.stereo.components ?? []).forEach((c, i) => {
-    const cf = ctx.components[i]?.facts;
-    if (!c.descriptors || !cf) return;
+    const cc = ctx.components[i] ? comparable(ctx.components[i], ctx) : null;
+    if (!c.descriptors || !cc) return;
     const field = `stereo.components.${i}.descriptors`;
+    const cf = cc.facts;
     note(
       `component ${i + 1} ${c.descriptors}`,
       compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, 'component', evidence),
+      cf,
+      cc.repeats,
     );
   });
   out.push(...prefixFindings(ctx, decl, f));

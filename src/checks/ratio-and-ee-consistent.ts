@@ -44,6 +44,22 @@ const messages = {
 
 type Id = keyof typeof messages;
 
+/**
+ * The question about an even diastereomer ratio is chemistry only for diastereomers: when two listed components
+ * are in fact enantiomers (or identical, or unrelated), form-matches-structure reports that, and 1:1 is then
+ * what a racemate is. Components that could not be read are left out; none listed counts as diastereomers, as
+ * declared.
+ */
+function componentsAreDiastereomers(ctx: CheckContext): boolean {
+  const s = ctx.components.map((c) => c.structure).filter((x) => x !== null);
+  for (let i = 0; i < s.length; i++) {
+    for (let j = i + 1; j < s.length; j++) {
+      if (ctx.engine.relate(s[i], s[j]).relation !== 'diastereomers') return false;
+    }
+  }
+  return true;
+}
+
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
   if (!record) return { findings: [], notApplicable: true };
@@ -95,7 +111,12 @@ function run(ctx: CheckContext): CheckOutcome {
           });
         }
       }
-      if (form === 'diastereomer-mixture' && parts.length >= 2 && parts.every((p) => p === parts[0])) {
+      if (
+        form === 'diastereomer-mixture' &&
+        parts.length >= 2 &&
+        parts.every((p) => p === parts[0]) &&
+        componentsAreDiastereomers(ctx)
+      ) {
         add('diastereomer-ratio-exactly-even', 'stereo.ratio', { ratio }, 'note');
       }
     }

@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { consistentWithRegistry as check } from '../../src/checks/consistent-with-registry.js';
+import {
+  consistentWithRegistry as check,
+  registeredLater,
+} from '../../src/checks/consistent-with-registry.js';
 import type { Relation } from '../../src/chem/facts.js';
 import type { CompoundRecord, Rotation } from '../../src/registry/types.js';
 import { centre, chiralFacts, ctx, entry, ids, read, record, runCheck } from './facts.js';
@@ -18,13 +21,19 @@ const mine = (stereo: Partial<CompoundRecord['stereo']> = {}) =>
 const theirs = (stereo: Partial<CompoundRecord['stereo']> = {}) =>
   record({ form: 'single-enantiomer', ...stereo }, { id: 'LX-00019', name: '(R)-(−)-carvone' });
 
-function setup(rel: Relation, me: CompoundRecord, other: CompoundRecord, underReview = true) {
+function setup(
+  rel: Relation,
+  me: CompoundRecord,
+  other: CompoundRecord,
+  underReview = true,
+  otherUnderReview = false,
+) {
   const f = chiralFacts([centre(7, 'S')]);
   const selfRead = read(f, 'me');
   const otherRead = read(chiralFacts([centre(7, 'R')]), 'other');
   const entries = [
     entry(me, selfRead, 'compounds/LX-00020.yml', underReview),
-    entry(other, otherRead, 'compounds/LX-00019.yml', false),
+    entry(other, otherRead, `compounds/${other.id}.yml`, otherUnderReview),
   ];
   return ctx({
     record: me,
@@ -132,5 +141,56 @@ describe('consistent-with-registry: what the drawings stand for', () => {
       file: 'compounds/LX-00020.yml',
     });
     expect(runCheck(check, c).findings).toEqual([]);
+  });
+});
+
+// Which record carries a conflict: the project's own rule (common practice, no source) — in a pull request the
+// record under review, in a full audit the one registered later (higher registry id).
+describe('consistent-with-registry: one record carries a conflict', () => {
+  const earlier = (stereo: Partial<CompoundRecord['stereo']> = {}) =>
+    record({ form: 'single-enantiomer', ...stereo }, { id: 'LX-00030', name: '(R)-(−)-carvone' });
+  it('in a full audit the later record carries it, the earlier one gets a note naming it', () => {
+    const later = runCheck(check, setup('identical', mine(), theirs({ form: 'racemate' }), true, true));
+    expect(later.findings).toMatchObject([
+      { messageId: 'same-structure-different-form', data: { otherId: 'LX-00019' } },
+    ]);
+    const first = runCheck(check, setup('identical', mine(), earlier({ form: 'racemate' }), true, true));
+    expect(first.findings).toMatchObject([
+      {
+        messageId: 'conflict-reported-on-later-record',
+        severity: 'note',
+        data: { otherId: 'LX-00030', otherMessageId: 'same-structure-different-form' },
+      },
+    ]);
+    expect(first.passed).toMatch(/conflict with LX-00030 is reported on the later record/);
+  });
+  it('applies to rotations of the same sign and conflicting forms of enantiomers', () => {
+    const o = runCheck(
+      check,
+      setup(
+        'enantiomers',
+        mine({ rotation: rot(61) }),
+        earlier({ form: 'racemate', rotation: rot(58) }),
+        true,
+        true,
+      ),
+    );
+    expect(o.findings.map((f) => [f.messageId, f.severity ?? null, f.data.otherMessageId ?? null])).toEqual([
+      ['enantiomer-registered', 'note', null],
+      ['conflict-reported-on-later-record', 'note', 'enantiomer-form-conflict'],
+      ['conflict-reported-on-later-record', 'note', 'enantiomer-rotation-same-sign'],
+    ]);
+  });
+  it('in a pull request the record under review carries it even when its id is lower', () => {
+    const o = runCheck(check, setup('identical', mine(), earlier({ form: 'racemate' }), true, false));
+    expect(ids(o)).toEqual(['same-structure-different-form']);
+  });
+  it('orders ids by their numbers, and a record without an id last', () => {
+    const e = (id: string | null, file = 'compounds/x.yml') => ({ ...entry(mine(), read(null), file), id });
+    expect(registeredLater(e('LX-00024'), e('LX-00008'))).toBe(true);
+    expect(registeredLater(e('LX-00008'), e('LX-00024'))).toBe(false);
+    expect(registeredLater(e('LX-100000'), e('LX-99999'))).toBe(true);
+    expect(registeredLater(e(null), e('LX-99999'))).toBe(true);
+    expect(registeredLater(e('LX-99999'), e(null))).toBe(false);
   });
 });

@@ -14,9 +14,6 @@ const ROOT = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures
 
 /** Errors and warnings each record should get (check/message), by the design of the demo. */
 const EXPECTED: Record<string, string[]> = {
-  'LX-00012': ['consistent-with-registry/enantiomer-rotation-same-sign'], // its enantiomer LX-00023 is wrong
-  'LX-00008': ['consistent-with-registry/same-structure-different-form'], // LX-00024 draws (S) as a "racemate"
-  'LX-00016': ['consistent-with-registry/same-structure-different-form'], // LX-00021 calls it a racemate
   'LX-00021': [
     'form-matches-structure/racemate-but-achiral',
     'consistent-with-registry/same-structure-different-form',

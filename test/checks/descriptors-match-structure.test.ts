@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { descriptorsMatchStructure as check } from '../../src/checks/descriptors-match-structure.js';
 import type { StructureFacts } from '../../src/chem/facts.js';
 import { centre, chiralFacts, ctx, facts, ids, read, record, runCheck, unit } from './facts.js';
+import { realCtx } from './real.js';
 
 // Descriptor notation: IUPAC 2013 recommendations P-93.1.3 (R/S, RS/SR, rac-, rel-, R*), signs of rotation
 // (+)/(−)/(±) and meso as used in P-93; Fischer D/L are not CIP descriptors (P-93).
@@ -102,6 +103,15 @@ describe('descriptors-match-structure: labels', () => {
       { messageId: 'descriptor-label-mismatch', field: 'stereo.components.0.descriptors' },
     ]);
   });
+  it("prints the component's own labels when a component passes, not the parent's", () => {
+    // The parent leaves C1 undefined (a menthol / neomenthol mixture); the component defines it.
+    const parent = chiralFacts([centre(4, 'S', 2), centre(10, null, 1)]);
+    const comp = chiralFacts([centre(4, 'S', 2), centre(10, 'R', 1)]);
+    const r = record({ form: 'diastereomer-mixture', components: [{ smiles: 'C', descriptors: '(1R,2S)' }] });
+    const o = runCheck(check, ctx({ record: r, main: read(parent), components: [read(comp)] }));
+    expect(o.findings).toEqual([]);
+    expect(o.passed).toMatch(/component 1 \(1R,2S\) agrees with computed C2 \(atom 4\) S, C1 \(atom 10\) R,/);
+  });
   it('notes Fischer D/L as not comparable', () => {
     const o = run(chiralFacts([centre(2, 'S')]), { form: 'single-enantiomer' }, 'L-alanine');
     expect(o.findings).toMatchObject([{ messageId: 'fischer-not-compared', severity: 'note' }]);
@@ -144,5 +154,34 @@ describe('descriptors-match-structure: prefixes against the form', () => {
   });
   it('does not apply when nothing is declared', () => {
     expect(run(one, { form: 'single-enantiomer' }).notApplicable).toBe(true);
+  });
+});
+
+// Salts: bis(amphetamine) sulfate, (C9H13N)2·H2SO4 (2:1 salt; handbook, from memory), drawn as two
+// (S)-amphetamines and one sulfuric acid; real structures through the engine (perception, CIP, relation).
+describe('descriptors-match-structure: repeated components of a salt', () => {
+  const salt = (smiles: string, descriptors: string) =>
+    runCheck(
+      check,
+      realCtx(
+        record(
+          { form: 'single-enantiomer', descriptors },
+          { id: 'LX-00090', name: '(S)-amphetamine sulfate', structure: { smiles } },
+        ),
+      ),
+    );
+  it('counts identical parent components once', () => {
+    const o = salt('C[C@H](N)Cc1ccccc1.C[C@H](N)Cc1ccccc1.OS(=O)(=O)O', '(S)');
+    expect(o.findings).toEqual([]);
+    expect(o.passed).toMatch(/component 2 repeats component 1/);
+  });
+  it('also when the second amphetamine is written in another atom order', () => {
+    expect(salt('C[C@H](N)Cc1ccccc1.c1ccc(cc1)C[C@@H](N)C.OS(=O)(=O)O', '(S)').findings).toEqual([]);
+  });
+  it('does not merge the two enantiomers of a mixed salt', () => {
+    // (S)- and (R)-amphetamine: same constitution, other configuration; (S) leaves the R centre uncited.
+    expect(ids(salt('C[C@H](N)Cc1ccccc1.C[C@@H](N)Cc1ccccc1.OS(=O)(=O)O', '(S)'))).toEqual([
+      'descriptors-incomplete',
+    ]);
   });
 });

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { ratioAndEeConsistent as check } from '../../src/checks/ratio-and-ee-consistent.js';
 import { eeFromRatio, parseRatio } from '../../src/checks/ratio.js';
 import { ctx, ids, record, runCheck } from './facts.js';
+import { realCtx } from './real.js';
 
 // ee = |F(+) − F(−)| (IUPAC Gold Book, enantiomer excess); racemate = equimolar mixture of enantiomers
 // (Gold Book, racemate). Tolerances are the registry defaults (common practice, no source): ratio sum ±1,
@@ -81,6 +82,29 @@ describe('ratio-and-ee-consistent', () => {
     const o = run({ form: 'diastereomer-mixture', ratio: '50:50', components: [{}, {}] });
     expect(o.findings).toMatchObject([{ messageId: 'diastereomer-ratio-exactly-even', severity: 'note' }]);
     expect(run({ form: 'diastereomer-mixture', ratio: '55:45', components: [{}, {}] }).findings).toEqual([]);
+  });
+  it('no 1:1 question when the listed components are enantiomers, not diastereomers', () => {
+    // (2R,3R)- and (2S,3S)-tartaric acid are enantiomers (Gold Book, enantiomer); 1:1 of them is the racemate
+    // (Gold Book, racemate), which form-matches-structure reports. Real structures through the engine.
+    const components = [
+      { smiles: 'OC(=O)[C@H](O)[C@@H](O)C(=O)O' },
+      { smiles: 'OC(=O)[C@@H](O)[C@H](O)C(=O)O' },
+    ];
+    const r = record(
+      { form: 'diastereomer-mixture', ratio: '50:50', components },
+      { id: 'LX-00090', structure: { smiles: 'OC(=O)C(O)C(O)C(=O)O' } },
+    );
+    expect(runCheck(check, realCtx(r)).findings).toEqual([]);
+    // (2R,3R) and meso-(2R,3S) are diastereomers: the question stays.
+    const dia = record(
+      {
+        form: 'diastereomer-mixture',
+        ratio: '50:50',
+        components: [components[0], { smiles: 'OC(=O)[C@H](O)[C@H](O)C(=O)O' }],
+      },
+      { id: 'LX-00091', structure: { smiles: 'OC(=O)C(O)C(O)C(=O)O' } },
+    );
+    expect(ids(runCheck(check, realCtx(dia)))).toEqual(['diastereomer-ratio-exactly-even']);
   });
   it('an unreadable ratio is reported with its position', () => {
     const o = run({ form: 'racemate', ratio: '50:fifty' });
