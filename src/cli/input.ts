@@ -8,7 +8,15 @@ import type { ReadError, Structure } from '../chem/index.js';
 import type { Io } from './command.js';
 
 export type Loaded =
-  { ok: true; structure: Structure; source: string; warnings: ReadError[] } | { ok: false; message: string };
+  | { ok: true; structure: Structure; source: string; warnings: ReadError[] }
+  | {
+      ok: false;
+      message: string;
+      /** The argument names a file that does not exist (exit 2). */ missingFile?: boolean;
+    };
+
+/** File-name endings that mark an argument as a path, never SMILES. */
+const FILE_ENDING = /\.(mol|sdf|sd|smi|smiles|mol2|txt)$/i;
 
 export function loadStructure(arg: string, io: Io): Loaded {
   let text = arg;
@@ -23,6 +31,8 @@ export function loadStructure(arg: string, io: Io): Loaded {
       return { ok: false, message: `cannot read ${arg}: ${(e as Error).message}` };
     }
     source = arg;
+  } else if (FILE_ENDING.test(arg)) {
+    return { ok: false, message: `file not found: ${arg}`, missingFile: true };
   }
   if (/\n\$\$\$\$\s*(\n|$)/.test(text)) {
     const first = readSdRecords(text).next().value;
@@ -39,6 +49,13 @@ export function loadStructure(arg: string, io: Io): Loaded {
   const isSmilesFile = source !== 'SMILES argument' && !looksLikeMolfile(text);
   const body = isSmilesFile ? (text.split(/\r?\n/).find((l) => l.trim() !== '') ?? '') : text;
   const r = readStructure(body, { format: 'auto' });
+  // A path-like argument ('/' also occurs in SMILES bond symbols, so only when it is not valid SMILES either).
+  if (!r.ok && source === 'SMILES argument' && arg.includes('/') && !arg.includes('\n'))
+    return {
+      ok: false,
+      message: `file not found: ${arg} (and not valid SMILES: ${describeError(r.error)})`,
+      missingFile: true,
+    };
   if (!r.ok) return { ok: false, message: `${source}: ${describeError(r.error)}` };
   return { ok: true, structure: r.structure, source, warnings: r.warnings };
 }

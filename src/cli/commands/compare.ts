@@ -1,7 +1,7 @@
 /** `stereogate compare <A> <B> [--format json|text]` */
 import { relate } from '../../chem/index.js';
 import { parseCommandArgs } from '../args.js';
-import { EXIT_BAD_INPUT, EXIT_OK, type Command } from '../command.js';
+import { EXIT_BAD_INPUT, EXIT_OK, EXIT_USAGE, type Command } from '../command.js';
 import { loadStructure } from '../input.js';
 import { compareText } from '../format-compare.js';
 
@@ -33,7 +33,7 @@ export const compareCommand: Command = {
     ] as const) {
       if (!r.ok) {
         io.err(`stereogate compare: structure ${name}: ${r.message}`);
-        return EXIT_BAD_INPUT;
+        return r.missingFile ? EXIT_USAGE : EXIT_BAD_INPUT;
       }
     }
     if (!a.ok || !b.ok) return EXIT_BAD_INPUT;

@@ -1,7 +1,7 @@
 /** `stereogate describe <SMILES|file> [--format json|text] [--list] [--max N]` */
 import { describe } from '../../chem/index.js';
 import { parseCommandArgs } from '../args.js';
-import { EXIT_BAD_INPUT, EXIT_OK, UsageError, type Command } from '../command.js';
+import { EXIT_BAD_INPUT, EXIT_OK, EXIT_USAGE, UsageError, type Command } from '../command.js';
 import { loadStructure } from '../input.js';
 import { describeText } from '../format-describe.js';
 
@@ -33,7 +33,7 @@ export const describeCommand: Command = {
     const loaded = loadStructure(positionals[0], io);
     if (!loaded.ok) {
       io.err(`stereogate describe: ${loaded.message}`);
-      return EXIT_BAD_INPUT;
+      return loaded.missingFile ? EXIT_USAGE : EXIT_BAD_INPUT;
     }
     const facts = describe(loaded.structure, { listIsomers: values.list === true, maxIsomers: max });
     for (const w of loaded.warnings) facts.remarks.unshift(`reading: ${w.message}`);

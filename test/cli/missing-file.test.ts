@@ -1,0 +1,41 @@
+/**
+ * A structure argument that looks like a file path but names no file is "file not found" with exit 2 (usage
+ * error), not a SMILES parse error. Convention: common practice for command-line tools, no source. SMILES with
+ * '/' bond symbols stay SMILES (OpenSMILES spec, section on directional bonds).
+ */
+import { describe as suite, expect, it } from 'vitest';
+import { run } from '../../src/cli/main.js';
+import { memoryIo } from './io.js';
+
+async function cli(args: string[]) {
+  const io = memoryIo();
+  const code = await run(args, io);
+  return { code, out: io.stdout.join('\n'), err: io.stderr.join('\n') };
+}
+
+suite('missing file arguments', () => {
+  it('describe /tmp/nonexist.mol: file not found, exit 2', async () => {
+    const r = await cli(['describe', '/tmp/stereogate-nonexist-x91.mol']);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/file not found/);
+    expect(r.err).not.toMatch(/bond symbol/);
+  });
+  it('a bare name ending .sdf is also a path', async () => {
+    const r = await cli(['describe', 'no-such-records.sdf']);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/file not found/);
+  });
+  it('compare with a missing path: exit 2', async () => {
+    const r = await cli(['compare', 'CCO', 'data/none/here']);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/structure B: file not found/);
+  });
+  it('SMILES with / bond symbols is still read as SMILES (OpenSMILES directional bonds)', async () => {
+    const r = await cli(['describe', 'C/C=C/C']);
+    expect(r.code).toBe(0);
+  });
+  it('invalid SMILES without a slash stays a SMILES error, exit 1', async () => {
+    const r = await cli(['describe', 'C(C']);
+    expect(r.code).toBe(1);
+  });
+});
