@@ -14,6 +14,7 @@ import { declaredDescriptors, finding, labelList } from './words.js';
 import { parseDescriptors } from '../chem/descriptors.js';
 import { prefixFindings, prefixMessages } from './descriptor-prefixes.js';
 import { distinctUnits, repeatedComponents } from './repeated-components.js';
+import { claimRestsOnlyOnNitrogen, NITROGEN_CHECK_ID } from './nitrogen-inversion.js';
 import type { ReadStructure } from './types.js';
 
 const messages = {
@@ -43,6 +44,10 @@ const messages = {
     'stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.',
   'name-and-descriptors-disagree':
     'The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.',
+  'descriptor-on-invertible-nitrogen':
+    '{field} declares {text}, but the structure has no stereo unit: its only configuration is drawn at {atoms}, ' +
+    'an ordinary amine nitrogen that inverts rapidly and is not a stereocentre, so the descriptors describe ' +
+    'nothing that can be isolated. Drop them{seeAlso}.',
   'descriptor-remark': '{field}: {remark}.',
   'fischer-not-compared':
     '{field} uses the Fischer–Rosanoff descriptor {fischer}, which is defined by analogy with glyceraldehyde and ' +
@@ -66,6 +71,7 @@ function compareOne(
   out: RawFinding[],
   form: string,
   evidence: string[],
+  nitrogenNote = false,
 ): DescriptorComparison | null {
   const add = (id: Id, data: RawFinding['data'], severity?: RawFinding['severity']): void => {
     out.push(finding(id, field, { field, text, ...data }, severity));
@@ -78,6 +84,20 @@ function compareOne(
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
   const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
   const computed = labelList(facts.units);
+  if (!cmp.agrees && facts.units.length === 0 && facts.invertibleNitrogens.length > 0) {
+    // One root cause: the configuration is drawn on an invertible nitrogen. When nitrogen-inversion reports the
+    // claim as an error this is a note beside it; otherwise (e.g. declared achiral) it is the error itself.
+    add(
+      'descriptor-on-invertible-nitrogen',
+      {
+        atoms: facts.invertibleNitrogens.map((n) => `nitrogen (atom ${n.atom})`).join(', '),
+        seeAlso: nitrogenNote ? ' (nitrogen-inversion reports the claim)' : '',
+        ...(nitrogenNote ? { explainedBy: NITROGEN_CHECK_ID } : {}),
+      },
+      nitrogenNote ? 'note' : undefined,
+    );
+    return cmp;
+  }
   if (cmp.method === 'per-locant') {
     if (cmp.mismatches.length) {
       const mismatches = cmp.mismatches
@@ -204,10 +224,12 @@ function run(ctx: CheckContext): CheckOutcome {
     );
   };
   const fieldText = record.stereo.descriptors ?? '';
+  const nitrogenNote = claimRestsOnlyOnNitrogen(ctx);
+  const form = record.stereo.form;
   if (decl.field)
     note(
       fieldText,
-      compareOne('stereo.descriptors', fieldText, decl.field, f, out, record.stereo.form, evidence),
+      compareOne('stereo.descriptors', fieldText, decl.field, f, out, form, evidence, nitrogenNote),
     );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
@@ -220,7 +242,7 @@ function run(ctx: CheckContext): CheckOutcome {
       const front = name
         .slice(0, name.length - decl.name.rest.length)
         .replace(/[-\s\u2010-\u2013\u2212]+$/, '');
-      note(front, compareOne('name', front, decl.name, f, out, record.stereo.form, evidence));
+      note(front, compareOne('name', front, decl.name, f, out, form, evidence, nitrogenNote));
     }
   } else if (decl.name) {
     for (const p of decl.name.problemDetails) {

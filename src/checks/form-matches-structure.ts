@@ -6,6 +6,7 @@ import type { StructureFacts } from '../chem/facts.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
 import { definedUnits, finding, listUnits, undefinedUnits, unitSummary } from './words.js';
 import { mixtureFindings, mixtureMessages } from './form-mixtures.js';
+import { claimRestsOnlyOnNitrogen, NITROGEN_CHECK_ID } from './nitrogen-inversion.js';
 
 const messages = {
   'achiral-but-chiral':
@@ -29,13 +30,13 @@ const messages = {
     'chiral stereoisomers. Define every unit as in the meso form.',
   'enantiomer-but-achiral':
     'Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and ' +
-    'no enantiomeric excess. Declare achiral or meso, or correct the configurations ({labels}).',
+    'no enantiomeric excess. {remedy}',
   'enantiomer-undefined-units':
     'Declared {form}, but {undefinedCount} stereo unit(s) are undefined: {undefinedUnits}. The structure then ' +
     'stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.',
   'racemate-but-achiral':
     'Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a ' +
-    'racemate. Declare achiral or meso, or correct the configurations ({labels}).',
+    'racemate. {remedy}',
   'racemate-no-chiral-isomers':
     'Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), ' +
     'all achiral), so there are no enantiomers to mix. Declare achiral.',
@@ -73,6 +74,30 @@ function evidence(f: StructureFacts) {
   };
 }
 
+/**
+ * What an achiral structure declared chiral can become: meso only when it is one (achiral with chiral
+ * stereoisomers, Gold Book); with no stereo unit at all no configuration can make it chiral.
+ */
+function achiralRemedy(f: StructureFacts, labels: string, nitrogen: string | null): string {
+  if (nitrogen !== null) {
+    return (
+      `Its only configuration is drawn at ${nitrogen}, an ordinary amine nitrogen that inverts rapidly; ` +
+      'nitrogen-inversion reports this claim as the error to fix.'
+    );
+  }
+  if (f.meso === true) return `Declare meso, or correct the configurations (${labels}).`;
+  if (f.units.length === 0) {
+    return (
+      'The structure has no stereo unit, so no configuration can make it chiral: declare achiral, or correct ' +
+      'the structure if a chiral compound was meant.'
+    );
+  }
+  return (
+    `No stereoisomer of this constitution is chiral, so no configuration can make it so (drawn: ${labels}): ` +
+    'declare achiral (single-diastereomer for one cis/trans isomer), or correct the structure.'
+  );
+}
+
 function run(ctx: CheckContext): CheckOutcome {
   const f = ctx.main.facts;
   const record = ctx.record;
@@ -80,13 +105,22 @@ function run(ctx: CheckContext): CheckOutcome {
   const form = record.stereo.form;
   const e = evidence(f);
   const out: RawFinding[] = [];
+  // The claim rests only on an invertible amine nitrogen: nitrogen-inversion carries the error; the form's side
+  // of the same root cause is a note here.
+  const nitrogen = claimRestsOnlyOnNitrogen(ctx)
+    ? f.invertibleNitrogens.map((n) => `nitrogen (atom ${n.atom})`).join(', ')
+    : null;
   const add = (
     id: FormMessageId,
     extra: RawFinding['data'] = {},
     severity?: RawFinding['severity'],
   ): void => {
-    out.push(finding(id, 'stereo.form', { form, ...e, ...extra }, severity));
+    const why: RawFinding['data'] = nitrogen !== null ? { explainedBy: NITROGEN_CHECK_ID } : {};
+    out.push(
+      finding(id, 'stereo.form', { form, ...e, ...extra, ...why }, nitrogen !== null ? 'note' : severity),
+    );
   };
+  const remedy = achiralRemedy(f, e.labels, nitrogen);
   const defined = definedUnits(f);
   const bonds = defined.filter((u) => u.kind === 'double-bond').length;
   switch (form) {
@@ -103,12 +137,12 @@ function run(ctx: CheckContext): CheckOutcome {
       break;
     case 'single-enantiomer':
     case 'enantioenriched':
-      if (f.chiral === false && e.undefinedCount === 0) add('enantiomer-but-achiral');
+      if (f.chiral === false && e.undefinedCount === 0) add('enantiomer-but-achiral', { remedy });
       else if (e.undefinedCount > 0)
         add('enantiomer-undefined-units', {}, form === 'enantioenriched' ? 'warning' : undefined);
       break;
     case 'racemate':
-      if (f.chiral === false && e.undefinedCount === 0) add('racemate-but-achiral');
+      if (f.chiral === false && e.undefinedCount === 0) add('racemate-but-achiral', { remedy });
       else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) add('racemate-no-chiral-isomers');
       else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
         const a = f.stereoisomers.achiral;

@@ -3,14 +3,51 @@
  * not a stereocentre at room temperature.
  */
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
-import { definedUnits, finding, STEREO_CLAIM_FORMS } from './words.js';
+import { declaredDescriptors, definedUnits, finding, STEREO_CLAIM_FORMS } from './words.js';
+
+export const NITROGEN_CHECK_ID = 'nitrogen-inversion';
+
+/**
+ * This check reports the record's stereo claim as an error because the structure has no stereo unit at all and
+ * the only configuration drawn is on ordinary amine nitrogens (and the registry has not switched the check off
+ * or down to a note). The other
+ * checks then see the same root cause and report their side of it as notes pointing here.
+ */
+export function claimRestsOnlyOnNitrogen(ctx: CheckContext): boolean {
+  const f = ctx.main.facts;
+  const form = ctx.record?.stereo.form;
+  return (
+    f !== null &&
+    form !== undefined &&
+    STEREO_CLAIM_FORMS.includes(form) &&
+    f.units.length === 0 &&
+    f.invertibleNitrogens.length > 0 &&
+    !['off', 'note'].includes(ctx.config.severities[NITROGEN_CHECK_ID] ?? 'error')
+  );
+}
+
+/** The descriptors the record states, in words for the advice ('' when none). */
+function statedDescriptors(ctx: CheckContext): string {
+  const record = ctx.record;
+  const decl = declaredDescriptors(record);
+  if (decl.field && decl.field.items.length > 0)
+    return ` and drop ${record?.stereo.descriptors ?? ''} from stereo.descriptors`;
+  if (decl.name && decl.name.items.length > 0) {
+    const name = record?.name ?? '';
+    const front = name
+      .slice(0, name.length - decl.name.rest.length)
+      .replace(/[-\s\u2010-\u2013\u2212]+$/, '');
+    return ` and drop ${front} from the name`;
+  }
+  return '';
+}
 
 const messages = {
   'claim-rests-on-invertible-nitrogen':
     'Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. ' +
     'Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier ' +
     'about 25 kJ/mol for simple amines), so its two configurations interconvert and cannot be isolated: the ' +
-    "structure has no stereocentre. Declare achiral, or, if the nitrogen is locked (a bridgehead as in Tröger's " +
+    "structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's " +
     'base, an aziridine, a quaternary ammonium ion), draw that feature.',
   'stereo-drawn-on-invertible-nitrogen':
     'The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at ' +
@@ -38,6 +75,7 @@ function run(ctx: CheckContext): CheckOutcome {
         form,
         atoms: atomsOf(list),
         drawnWithStereo: drawn.length > 0,
+        dropDescriptors: statedDescriptors(ctx),
       }),
     );
   } else if (drawn.length > 0) {
@@ -54,7 +92,7 @@ function run(ctx: CheckContext): CheckOutcome {
 }
 
 export const nitrogenInversion: CheckModule = {
-  id: 'nitrogen-inversion',
+  id: NITROGEN_CHECK_ID,
   defaultSeverity: 'error',
   summary: 'A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.',
   explanation:
@@ -63,7 +101,9 @@ export const nitrogenInversion: CheckModule = {
     'Greeves & Warren, Organic Chemistry), so its enantiomers interconvert rapidly at room temperature and ' +
     'cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is ' +
     "blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium " +
-    'ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres.',
+    'ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim ' +
+    'rests on nothing else, this check carries the error; the form, descriptor and reading checks report their ' +
+    'side of the same root cause as notes.',
   messages,
   run,
 };

@@ -6,6 +6,7 @@
 import { posix } from 'node:path';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding, ReadStructure } from './types.js';
 import { finding } from './words.js';
+import { NITROGEN_CHECK_ID } from './nitrogen-inversion.js';
 
 const messages = {
   'structure-unreadable':
@@ -107,7 +108,19 @@ function run(ctx: CheckContext): CheckOutcome {
       });
     }
   });
+  // Remarks about configurations drawn on ordinary amine nitrogens are left to nitrogen-inversion, which
+  // reports every such nitrogen (as the error, or as a note) unless the registry switched it off.
+  const nitrogenCheckOn = ctx.config.severities[NITROGEN_CHECK_ID] !== 'off';
+  let leftToNitrogen = 0;
   for (const remark of ctx.main.facts?.remarks ?? []) {
+    if (
+      nitrogenCheckOn &&
+      (ctx.main.facts?.invertibleNitrogens.length ?? 0) > 0 &&
+      /amine nitrogen/.test(remark)
+    ) {
+      leftToNitrogen++;
+      continue;
+    }
     findings.push(finding('reader-remark', field, { field, remark }, 'note'));
   }
   if (findings.some((f) => f.severity !== 'note')) return { findings };
@@ -117,7 +130,10 @@ function run(ctx: CheckContext): CheckOutcome {
     .filter(Boolean)
     .join(', ');
   const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : '';
-  return { findings, passed: `structure read${what ? ` (${what})` : ''}${comps}` };
+  const nitrogen = leftToNitrogen
+    ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion`
+    : '';
+  return { findings, passed: `structure read${what ? ` (${what})` : ''}${comps}${nitrogen}` };
 }
 
 export const structureReadable: CheckModule = {

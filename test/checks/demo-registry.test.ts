@@ -29,11 +29,8 @@ const EXPECTED: Record<string, string[]> = {
     'consistent-with-registry/same-structure-different-form',
   ],
   'LX-00025': ['enhanced-stereo-matches-form/and-group-with-single-enantiomer'],
-  'LX-00026': [
-    'form-matches-structure/enantiomer-but-achiral',
-    'descriptors-match-structure/descriptor-counts-mismatch',
-    'nitrogen-inversion/claim-rests-on-invertible-nitrogen',
-  ],
+  // One root cause, one error; form and descriptors add notes pointing at it (see the test below).
+  'LX-00026': ['nitrogen-inversion/claim-rests-on-invertible-nitrogen'],
   'LX-00027': ['form-matches-structure/achiral-but-chiral'],
   'LX-00028': ['form-matches-structure/diastereomer-too-few-units'],
   'LX-00029': ['form-matches-structure/mixture-components-enantiomers'],
@@ -88,6 +85,29 @@ describe('demo registry (Larkspur Chemistry Lab)', () => {
   });
   it('asks whether an exactly 1:1 diastereomer ratio was measured', () => {
     expect(byId('LX-00038').findings.map((f) => f.messageId)).toEqual(['diastereomer-ratio-exactly-even']);
+  });
+  it('reports each conflict between two records once, on the later record; the earlier gets a note', () => {
+    const pointer = (id: string) =>
+      byId(id)
+        .findings.filter((f) => f.messageId === 'conflict-reported-on-later-record')
+        .map((f) => [f.severity, f.data.otherId, f.data.otherMessageId]);
+    expect(pointer('LX-00008')).toEqual([['note', 'LX-00024', 'same-structure-different-form']]);
+    expect(pointer('LX-00012')).toEqual([['note', 'LX-00023', 'enantiomer-rotation-same-sign']]);
+    expect(pointer('LX-00016')).toEqual([['note', 'LX-00021', 'same-structure-different-form']]);
+  });
+  it('the amine drawn with a configuration at nitrogen: one error, the form and descriptor sides as notes', () => {
+    expect(
+      byId('LX-00026')
+        .findings.map((f) => `${f.severity} ${f.check}/${f.messageId}`)
+        .sort(),
+    ).toEqual([
+      'error nitrogen-inversion/claim-rests-on-invertible-nitrogen',
+      'note descriptors-match-structure/descriptor-on-invertible-nitrogen',
+      'note form-matches-structure/enantiomer-but-achiral',
+    ]);
+  });
+  it('asks no 1:1 question for a "diastereomer mixture" of two enantiomers', () => {
+    expect(byId('LX-00029').findings.map((f) => f.messageId)).toEqual(['mixture-components-enantiomers']);
   });
   it('names registered enantiomers: the carvones, the tartaric acids', () => {
     const enantiomerOf = (id: string) =>

@@ -185,3 +185,24 @@ describe('descriptors-match-structure: repeated components of a salt', () => {
     ]);
   });
 });
+
+// Pyramidal inversion of amines (IUPAC Gold Book): an ordinary amine nitrogen is not a stereocentre.
+describe('descriptors-match-structure: descriptors on an invertible nitrogen', () => {
+  const amine = facts({ invertibleNitrogens: [{ atom: 3, drawnWithStereo: true }] });
+  it('a note beside the nitrogen-inversion error for a stereo claim', () => {
+    const o = run(amine, { form: 'single-enantiomer' }, '(S)-N-ethyl-N-methylpropan-1-amine');
+    expect(o.findings).toMatchObject([
+      {
+        messageId: 'descriptor-on-invertible-nitrogen',
+        severity: 'note',
+        field: 'name',
+        data: { atoms: 'nitrogen (atom 3)', explainedBy: 'nitrogen-inversion' },
+      },
+    ]);
+  });
+  it('the error itself when the form claims nothing (nitrogen-inversion then reports only a note)', () => {
+    const o = run(amine, { form: 'achiral', descriptors: '(S)' });
+    expect(o.findings).toMatchObject([{ messageId: 'descriptor-on-invertible-nitrogen' }]);
+    expect(o.findings[0].severity).toBeUndefined();
+  });
+});

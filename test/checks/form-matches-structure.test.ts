@@ -179,3 +179,43 @@ describe('form-matches-structure: mixtures', () => {
     ]);
   });
 });
+
+// Meso needs stereo units and chiral stereoisomers (Gold Book, meso compounds): advise only what is possible.
+describe('form-matches-structure: advice for an achiral structure declared chiral', () => {
+  const plain = facts({
+    units: [],
+    stereoisomers: { total: 1, chiral: 0, achiral: 1, pairs: 0, meso: 0, units: 0 },
+  });
+  it('a meso structure may be declared meso', () => {
+    expect(String(run('single-enantiomer', mesoFacts).findings[0].data.remedy)).toMatch(
+      /^Declare meso, or correct the configurations \(R,S\)/,
+    );
+  });
+  it('a structure with no stereo unit is not offered meso', () => {
+    for (const form of ['single-enantiomer', 'racemate'] as const) {
+      const o = run(form, plain);
+      expect(o.findings[0].severity).toBeUndefined();
+      expect(String(o.findings[0].data.remedy)).toMatch(/no stereo unit.*declare achiral/);
+      expect(String(o.findings[0].data.remedy)).not.toMatch(/meso/);
+    }
+  });
+  it('an amine whose only configuration is on an ordinary nitrogen: a note, nitrogen-inversion carries the error', () => {
+    const amine = facts({ ...plain, invertibleNitrogens: [{ atom: 3, drawnWithStereo: true }] });
+    const o = run('single-enantiomer', amine);
+    expect(o.findings).toMatchObject([
+      { messageId: 'enantiomer-but-achiral', severity: 'note', data: { explainedBy: 'nitrogen-inversion' } },
+    ]);
+    expect(String(o.findings[0].data.remedy)).toMatch(/nitrogen \(atom 3\)/);
+    // With nitrogen-inversion switched off (or down to a note) the form error stands on its own.
+    const off = runCheck(
+      check,
+      ctx({
+        record: record({ form: 'single-enantiomer' }),
+        main: read(amine),
+        config: { severities: { 'nitrogen-inversion': 'off' } },
+      }),
+    );
+    expect(off.findings[0].severity).toBeUndefined();
+    expect(String(off.findings[0].data.remedy)).not.toMatch(/meso/);
+  });
+});

@@ -41,3 +41,17 @@ describe('nitrogen-inversion', () => {
     ).toBe(true);
   });
 });
+
+describe('nitrogen-inversion: one error for one root cause', () => {
+  it('names the descriptors to drop with the claim', () => {
+    const f = facts({ invertibleNitrogens: [{ atom: 3, drawnWithStereo: true }] });
+    const named = record({ form: 'single-enantiomer' }, { name: '(S)-N-ethyl-N-methylpropan-1-amine' });
+    expect(runCheck(check, ctx({ record: named, main: read(f) })).findings[0].data.dropDescriptors).toBe(
+      ' and drop (S) from the name',
+    );
+    const field = record({ form: 'single-enantiomer', descriptors: '(S)' });
+    expect(runCheck(check, ctx({ record: field, main: read(f) })).findings[0].data.dropDescriptors).toBe(
+      ' and drop (S) from stereo.descriptors',
+    );
+  });
+});

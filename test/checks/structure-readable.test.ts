@@ -60,6 +60,22 @@ describe('structure-readable', () => {
       { messageId: 'component-unreadable', field: 'stereo.components.1.smiles', data: { index: 2 } },
     ]);
   });
+  it('leaves remarks on invertible amine nitrogens to nitrogen-inversion, unless it is switched off', () => {
+    const f = facts({
+      invertibleNitrogens: [{ atom: 3, drawnWithStereo: true }],
+      remarks: [
+        'configuration drawn on N3, an ordinary amine nitrogen: it inverts rapidly',
+        'wedge on atom 7',
+      ],
+    });
+    const o = runCheck(check, ctx({ main: read(f) }));
+    expect(o.findings.map((x) => x.data.remark)).toEqual(['wedge on atom 7']);
+    const off = runCheck(
+      check,
+      ctx({ main: read(f), config: { severities: { 'nitrogen-inversion': 'off' } } }),
+    );
+    expect(off.findings).toHaveLength(2);
+  });
   it('passes reader remarks on as notes without failing the check', () => {
     const o = runCheck(check, ctx({ main: read(facts({ remarks: ['wedge on a non-stereogenic atom 7'] })) }));
     expect(o.findings).toMatchObject([{ messageId: 'reader-remark', severity: 'note' }]);
