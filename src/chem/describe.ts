@@ -105,7 +105,9 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   const units = unitFacts(a, labels);
   const stereoisomers = countStereoisomers(group, p.units.length);
   const chiral = a.chirality.chiral;
-  const meso = chiral === null ? null : chiral === false && stereoisomers.chiral > 0;
+  // Gold Book meso: achiral member of a set with chiral members (so the count must hold a meso form too).
+  const meso =
+    chiral === null ? null : chiral === false && stereoisomers.chiral > 0 && stereoisomers.meso > 0;
   const components = componentFacts(a);
   const facts: StructureFacts = {
     stereocenters: units

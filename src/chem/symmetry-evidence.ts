@@ -14,6 +14,14 @@ export function mirrorFacts(a: Analysis): MirrorFacts {
   const s = p.structure;
   const none = { fixedAtoms: [] as number[], fixedBonds: [] as [number, number][] };
   const hasUndefined = a.defined.some((d, k) => d === 0 && a.reported[k]);
+  if (chirality.impossible) {
+    return {
+      chiral: null,
+      ...none,
+      explanation:
+        'open: the configurations drawn cannot all hold (see the remarks), so the drawing is no stereoisomer to call chiral or achiral',
+    };
+  }
   if (chirality.chiral === null) {
     return {
       chiral: null,

@@ -235,6 +235,8 @@ export interface Chirality {
   chiral: boolean | null;
   /** Group element σ with σ·x = M(x) when x is fully defined and achiral; -1 otherwise. */
   witness: number;
+  /** The drawn configurations break a bridgehead coupling: no such stereoisomer exists (chiral is null). */
+  impossible?: boolean;
 }
 
 const MAX_ENUMERATED_UNDEFINED = 14;
@@ -245,13 +247,18 @@ export function chiralityOf(g: UnitGroup, x: State, defined: Uint8Array): Chiral
   const open: number[] = [];
   for (let i = 0; i < m; i++) if (!defined[i]) open.push(i);
   if (open.length === 0) {
+    if (!feasible(g, x)) return { chiral: null, witness: -1, impossible: true };
     const k = elementMapping(g, x, mirrorState(g, x));
     return { chiral: k < 0, witness: k };
   }
   let someAchiral = false;
   for (let k = 0; k < g.perms.length && !someAchiral; k++)
     someAchiral = fixedCompletionExists(g, k, x, defined, true);
-  if (!someAchiral) return { chiral: true, witness: -1 };
+  if (!someAchiral) {
+    // Without any feasible completion the drawing stands for no stereoisomer at all.
+    if (!someFeasibleCompletion(g, x, defined)) return { chiral: null, witness: -1, impossible: true };
+    return { chiral: true, witness: -1 };
+  }
   if (!g.reflect.some((r) => r === 1)) return { chiral: false, witness: -1 };
   if (open.length > MAX_ENUMERATED_UNDEFINED) return { chiral: null, witness: -1 };
   const y = Uint8Array.from(x);
@@ -261,6 +268,15 @@ export function chiralityOf(g: UnitGroup, x: State, defined: Uint8Array): Chiral
     if (elementMapping(g, y, mirrorState(g, y)) < 0) return { chiral: null, witness: -1 };
   }
   return { chiral: false, witness: -1 };
+}
+
+/** Does some completion of the defined units satisfy every coupling? */
+function someFeasibleCompletion(g: UnitGroup, x: State, defined: Uint8Array): boolean {
+  const m = x.length;
+  const u = new ParityUnion(m + 1);
+  for (const c of g.couplings) u.add(c.a, c.b, c.c);
+  for (let i = 0; i < m; i++) if (defined[i]) u.add(i, m, x[i]);
+  return u.consistent;
 }
 
 /**

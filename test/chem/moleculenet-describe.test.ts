@@ -50,6 +50,8 @@ suite.skipIf(!haveSharedData('moleculenet'))('describe over MoleculeNet', () => 
       const r = parseSmiles(row.smiles);
       if (!r.ok) continue;
       const f = describe(r.structure);
+      // Configurations that cannot all hold (bridgeheads): neither chiral nor achiral, nothing to compare.
+      if (f.chiral === null && f.undefined === 0) continue;
       const rel = relate(r.structure, mirror(r.structure)).relation;
       const want = f.undefined > 0 ? 'same-constitution' : f.chiral ? 'enantiomers' : 'identical';
       if (rel !== want) problems.push(`${row.file}:${row.row}: ${rel}, expected ${want}`);
