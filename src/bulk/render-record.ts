@@ -5,7 +5,7 @@
  * thread only writes. The merge of shard outputs renders the records it reads with the same function, so a
  * merged output is byte for byte the output of a single run.
  */
-import type { Severity } from '../audit/types.js';
+import type { RecordResult, Severity } from '../audit/types.js';
 import type { CheckModule } from '../checks/types.js';
 import { sarifLog } from '../report/sarif.js';
 import { htmlRow, type HtmlRow } from '../report/html/render.js';
@@ -114,7 +114,11 @@ export function makeRenderer(wants: RenderWants, checks: readonly CheckModule[])
     };
     if (wants.csv) out.csv = csvRow(r);
     if (wants.sarif && r.findings.length > 0) {
-      const log = sarifLog({ tool, records: [r], summary: none, caution: '' }, checks);
+      // SARIF reads no computed facts
+      const log = sarifLog(
+        { tool, records: [r as unknown as RecordResult], summary: none, caution: '' },
+        checks,
+      );
       const results = (log.runs as { results: Record<string, unknown>[] }[])[0].results;
       out.sarif = results.map((res) => {
         (res.properties as Record<string, unknown>).record = r.origin.record;

@@ -10,6 +10,7 @@
  * browsers render without running scripts.
  */
 import type { AuditResult, RecordResult } from '../../audit/types.js';
+import type { StructureFacts } from '../../chem/facts.js';
 import { PAGE_SCRIPT } from './page-script.js';
 import { PAGE_STYLE } from './page-style.js';
 
@@ -57,7 +58,12 @@ export interface HtmlRow {
 
 export type CheckCounts = Record<string, { error: number; warning: number; note: number; waived: number }>;
 
-function computedSummary(r: RecordResult): { text: string; labels: string } {
+/** What a page row reads of a record: the record result, with only these computed facts needed. */
+export type HtmlRecord = Omit<RecordResult, 'computed'> & {
+  computed: Pick<StructureFacts, 'chiral' | 'meso' | 'units' | 'undefined' | 'stereoisomers'> | null;
+};
+
+function computedSummary(r: HtmlRecord): { text: string; labels: string } {
   const c = r.computed;
   if (!c) return { text: 'structure not read', labels: '' };
   const chir = c.chiral === null ? 'chirality open (undefined units)' : c.chiral ? 'chiral' : 'achiral';
@@ -77,7 +83,7 @@ function computedSummary(r: RecordResult): { text: string; labels: string } {
 const RANK = { error: 0, warning: 1, note: 2 } as const;
 
 /** The page row of a record, or null when it has no open finding (only flagged records are listed). */
-export function htmlRow(r: RecordResult): HtmlRow | null {
+export function htmlRow(r: HtmlRecord): HtmlRow | null {
   const open = r.findings.filter((f) => !f.waived);
   if (open.length === 0) return null;
   const worst = open.reduce<'error' | 'warning' | 'note'>(
