@@ -26,6 +26,7 @@ import {
 } from './symmetry.js';
 import { mirrorFacts } from './symmetry-evidence.js';
 import { listStereoisomers } from './isomers-list.js';
+import { parentCopies, withoutCopies } from './copies.js';
 import type { Structure } from './types.js';
 import { writeSmiles } from './write/smiles.js';
 
@@ -103,12 +104,17 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   if (s.stereo.length > 0) for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
 
   const units = unitFacts(a, labels);
-  const stereoisomers = countStereoisomers(group, p.units.length);
-  const chiral = a.chirality.chiral;
+  // A 2:1 salt holds two copies of one stereoisomer: count and judge chirality on one copy.
+  const comps = p.components;
+  const parentIndex = parentComponent(s, comps);
+  const copies = parentCopies(s, comps, parentIndex);
+  const counted = copies.length > 0 ? analyse(withoutCopies(s, comps, copies)) : a;
+  const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
+  const chiral = counted.chirality.chiral;
   // Gold Book meso: achiral member of a set with chiral members (so the count must hold a meso form too).
   const meso =
     chiral === null ? null : chiral === false && stereoisomers.chiral > 0 && stereoisomers.meso > 0;
-  const components = componentFacts(a);
+  const components = componentFacts(a, parentIndex, copies);
   const facts: StructureFacts = {
     stereocenters: units
       .filter((u) => u.kind === 'tetrahedral')
@@ -126,7 +132,7 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
     meso,
     undefined: units.filter((u) => !u.defined).length,
     stereoisomers,
-    mirror: mirrorFacts(a),
+    mirror: mirrorFacts(counted),
     enhanced: enhancedFacts(a),
     invertibleNitrogens: p.invertibleNitrogens.map((i) => ({
       atom: s.atoms[i].inputNumber,
@@ -137,6 +143,11 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
     formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice(),
   };
+  if (copies.length > 0) {
+    facts.remarks.push(
+      `${copies.length + 1} identical copies of the parent (${components[parentIndex].formula}): stereoisomer counts and chirality are those of one copy`,
+    );
+  }
   if (p.invertibleNitrogens.length > 0 && units.length === 0) {
     facts.remarks.push(
       'the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre',
@@ -229,17 +240,17 @@ export function parentComponent(s: Structure, comps: number[][]): number {
   return parent;
 }
 
-function componentFacts(a: Analysis): ComponentFacts[] {
+function componentFacts(a: Analysis, parent: number, copies: number[]): ComponentFacts[] {
   const s = a.p.structure;
   const comps = a.p.components;
-  const parent = parentComponent(s, comps);
   const single = comps.length === 1;
   return comps.map((c, k) => {
     const f = {
       index: k,
       formula: single ? molecularFormula(s) : molecularFormula(s, c),
       heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
-      role: k === parent ? 'parent' : 'other',
+      role: k === parent || copies.includes(k) ? 'parent' : 'other',
+      ...(copies.length > 0 && (k === parent || copies.includes(k)) ? { copies: copies.length + 1 } : {}),
     } as Omit<ComponentFacts, 'smiles'> as ComponentFacts;
     // Written on first read (JSON output, a report): most consumers never look at it, and writing SMILES is
     // a large share of describe()'s time. Enumerable, so JSON and structured clone see a plain field.

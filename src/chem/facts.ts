@@ -90,6 +90,8 @@ export interface ComponentFacts {
   heavyAtoms: number;
   /** The largest organic component is the parent; the rest are counter-ions / solvents. */
   role: 'parent' | 'other';
+  /** Parent components only: how many identical copies of the parent the structure holds (2 for a 2:1 salt). */
+  copies?: number;
   smiles: string;
 }
 
@@ -104,6 +106,7 @@ export interface StructureFacts {
   meso: boolean | null;
   /** Number of undefined stereo units. */
   undefined: number;
+  /** With several identical copies of the parent, counts and chirality are those of one copy. */
   stereoisomers: StereoisomerCount;
   /** Present only when requested (describe --list, or a check that needs it). */
   stereoisomerList?: StereoisomerEntry[];

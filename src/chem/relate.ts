@@ -16,6 +16,7 @@ import { mapToken, rebase } from './perceive-units.js';
 import { act, elementMapping, mirrorState, stereogenicIn } from './symmetry.js';
 import type { Structure } from './types.js';
 import { writeSmiles } from './write/smiles.js';
+import { parentCopies } from './copies.js';
 
 interface Side {
   whole: Analysis;
@@ -29,8 +30,9 @@ function side(s: Structure): Side {
   const comps = whole.p.components;
   const k = parentComponent(ns, comps);
   const parent = comps.length <= 1 ? whole : analyse(extractAtoms(ns, comps[k] ?? []));
+  const copies = parentCopies(ns, comps, k);
   const others = comps
-    .filter((_c, i) => i !== k)
+    .filter((_c, i) => i !== k && !copies.includes(i))
     .map((c) => {
       const sub = extractAtoms(ns, c);
       return { key: constitutionKey(sub), smiles: writeSmiles(sub), structure: sub };

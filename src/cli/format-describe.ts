@@ -47,7 +47,9 @@ export function describeText(f: StructureFacts, what: string): string {
   if (f.components.length > 1) {
     out.push('Components:');
     for (const k of f.components)
-      out.push(`  ${k.role === 'parent' ? 'parent' : 'other '}  ${k.formula.padEnd(14)} ${k.smiles}`);
+      out.push(
+        `  ${k.role === 'parent' ? 'parent' : 'other '}  ${k.formula.padEnd(14)} ${k.smiles}${k.copies ? `  (one of ${k.copies} identical copies)` : ''}`,
+      );
   }
   if (f.stereoisomerList) {
     out.push(
