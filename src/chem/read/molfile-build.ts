@@ -1,9 +1,10 @@
 /**
  * The part of molfile reading shared by V2000 and V3000: from the atoms and bonds as read to a finished
- * Structure (Kekulé bonds, implicit hydrogens, dimension, stereo from wedges or from 3D coordinates).
+ * Structure (Kekulé bonds, implicit hydrogens, a valence check, dimension, stereo from wedges or from 3D
+ * coordinates).
  */
 import type { Atom, Bond, ReadError, ReadResult, StereoGroup, Structure } from '../types.js';
-import { implicitHydrogens } from './valence.js';
+import { implicitHydrogens, valenceProblem } from './valence.js';
 import { adjacency } from './molfile-graph.js';
 import { kekulizeAromatic } from './molfile-kekulize.js';
 import { stereoFrom2d } from './stereo-2d.js';
@@ -54,13 +55,29 @@ export function finishMolecule(raw: RawMolecule): ReadResult {
   for (let i = 0; i < atoms.length; i++) {
     const atom = atoms[i]!;
     let sum = 0;
-    for (const k of adj.bnd[i]!) sum += bonds[k]!.order;
+    let oxo = 0;
+    for (const k of adj.bnd[i]!) {
+      const b = bonds[k]!;
+      sum += b.order;
+      if (b.order === 2 && atoms[b.a === i ? b.b : b.a]!.atomicNumber === 8) oxo++;
+    }
     const v = raw.valences[i];
     // The valence field counts bonds plus hydrogens; unpaired electrons are not part of it (as RDKit writes it).
     if (v !== null && v !== undefined) atom.hCount = Math.max(0, v - sum);
     else
       atom.hCount =
         atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
+    const problem = valenceProblem(atom.atomicNumber, atom.charge, sum, atom.hCount, oxo);
+    if (problem !== null) {
+      return {
+        ok: false,
+        error: {
+          code: 'molfile-valence',
+          message: `atom ${i + 1}: ${problem}`,
+          at: { line: raw.atomLines[i] },
+        },
+      };
+    }
   }
 
   let dimension: 0 | 2 | 3 = 0;

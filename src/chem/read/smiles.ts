@@ -1,16 +1,16 @@
 /**
  * SMILES (with optional CXSMILES block and title) -> Structure.
  * Steps: syntax (smiles-parse.ts) -> aromatic bonds outside rings become single -> kekulization
- * (kekulize.ts) -> implicit hydrogens from the Kekulé form (valence.ts, OpenSMILES organic-subset rule) ->
- * stereo (smiles-stereo.ts) -> CXSMILES enhanced stereo (cxsmiles.ts). Bad input is returned as an error
- * with a 0-based offset; nothing here throws on any input.
+ * (kekulize.ts) -> valence check (no checked atom above its highest valence) and implicit hydrogens from the
+ * Kekulé form (valence.ts, OpenSMILES organic-subset rule) -> stereo (smiles-stereo.ts) -> CXSMILES enhanced
+ * stereo (cxsmiles.ts). Bad input is returned as an error with a 0-based offset; nothing here throws on any input.
  */
 import type { Atom, Bond, BondOrder, ReadError, ReadResult, Structure } from '../types.js';
 import { parseCxExtension } from './cxsmiles.js';
 import { kekulize } from './kekulize.js';
 import { parseSmilesGraph, type SmilesGraph } from './smiles-parse.js';
 import { buildStereo } from './smiles-stereo.js';
-import { defaultValences, implicitHydrogens } from './valence.js';
+import { defaultValences, implicitHydrogens, valenceProblem } from './valence.js';
 
 function isSpace(c: number): boolean {
   return c === 32 || c === 9 || c === 10 || c === 13;
@@ -78,7 +78,16 @@ function parse(text: string): ReadResult {
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a]!;
     let sum = 0;
-    for (const bi of g.nbrBond[a]!) sum += order[bi]!;
+    let oxo = 0;
+    for (const bi of g.nbrBond[a]!) {
+      sum += order[bi]!;
+      const b = g.bonds[bi]!;
+      if (order[bi] === 2 && g.atoms[b.a === a ? b.b : b.a]!.atomicNumber === 8) oxo++;
+    }
+    // OpenSMILES: an organic-subset atom whose bonds exceed its highest normal valence gets no H; we go further
+    // and refuse any checked atom (organic subset or bracket) with more bonds than its highest valence.
+    const problem = valenceProblem(ra.atomicNumber, ra.charge, sum, ra.hCount < 0 ? 0 : ra.hCount, oxo);
+    if (problem !== null) return failure('smiles-valence', problem, ra.offset);
     if (ra.hCount < 0) {
       hCount[a] = ra.atomicNumber === 0 ? 0 : implicitHydrogens(ra.atomicNumber, 0, sum);
     } else {

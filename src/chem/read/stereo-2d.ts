@@ -16,7 +16,8 @@
  *
  * Double bonds. For each non-aromatic double bond (or odd cumulene) with a substituent on each end, the side of
  * the bond line each substituent lies on gives cis/trans, unless the bond is crossed (stereo 3), a wavy bond
- * touches an end, or a substituent lies on the bond line (warning).
+ * touches an end, or a substituent lies on the bond line (warning). Double bonds in a ring of fewer than 8
+ * atoms are skipped: their drawn geometry is forced by the ring (Kekulé benzene, cyclohexene), not a claim.
  *
  * Allenes (even cumulenes): the four terminal substituents become points with z from wedges starting at the
  * terminal atoms; an implicit H sits opposite the other two bonds of its end; the signed volume of
@@ -37,6 +38,7 @@ import type {
   TetrahedralStereo,
 } from '../types.js';
 import { IMPLICIT_H } from '../types.js';
+import { ringInfo } from '../graph/index.js';
 import { ringBonds, type Adjacency } from './molfile-graph.js';
 import {
   biarylCandidates,
@@ -52,6 +54,12 @@ import {
 
 /** Below this |signed volume| (unit vectors, x6) the drawing does not fix a configuration. */
 const MIN_VOLUME = 0.01;
+/**
+ * Smallest ring in which a double bond can be stereogenic: trans-cyclooctene is the smallest isolable trans
+ * cycloalkene (from memory), and RDKit likewise leaves double-bond stereo out for rings under 8 (from memory).
+ * In smaller rings, Kekulé aromatic rings included, the drawing can only show cis: forced, not a claim.
+ */
+const MIN_STEREO_RING = 8;
 /** How far plain bonds lean away from the wedge being read (z units, wedge = 1). */
 const PLAIN_LEAN = 0.3;
 /** Below this |sin| of the angle to the bond line a double-bond substituent counts as on the line. */
@@ -194,6 +202,7 @@ export function stereoFrom2d(
 
   // Double bonds and cumulenes
   const ring = ringBonds(s.atoms.length, s.bonds, adj);
+  let smallestRing: number[] | null = null;
   for (const cu of cumulenes(s, adj)) {
     const [e0, e1] = cu.ends;
     if (cu.bonds.some((k) => s.bonds[k]!.wedge === 'either')) continue;
@@ -207,6 +216,11 @@ export function stereoFrom2d(
     )
       continue;
     if (cu.inner.length % 2 === 0) {
+      // In a ring of fewer than 8 atoms the geometry is forced (trans cannot be closed), not a claim.
+      if (cu.bonds.some((k) => ring[k])) {
+        smallestRing ??= ringInfo(s).smallestRingOfBond;
+        if (cu.bonds.some((k) => smallestRing![k]! > 0 && smallestRing![k]! < MIN_STEREO_RING)) continue;
+      }
       const d = doubleBond(cu.ends, s0, s1);
       if (d !== null) out.push(d);
     } else {

@@ -5,6 +5,7 @@
  * S 2,4,6; halogens 1): an atom gets the smallest listed valence that is >= its bond-order sum, and the
  * difference is filled with hydrogens. Molfiles use the same rule for atoms without an explicit H count.
  * Charges shift the valence as for the isoelectronic neighbour (N+ like C, O- like F, C- like N, B- like C).
+ * The readers refuse a B, C, N, O, P, S, As, Se, Te or halogen atom above its highest valence (valenceProblem).
  */
 
 export const ELEMENTS: readonly string[] = [
@@ -106,4 +107,60 @@ export function implicitHydrogens(atomicNumber: number, charge: number, bondOrde
   const used = bondOrderSum + radical;
   for (const v of valences) if (v >= used) return v - used;
   return 0;
+}
+
+/** Elements whose valence the readers check (B, C, N, O, P, S, halogens, As, Se, Te); others are not checked. */
+const CHECKED: Record<number, string> = {
+  5: 'boron',
+  6: 'carbon',
+  7: 'nitrogen',
+  8: 'oxygen',
+  9: 'fluorine',
+  15: 'phosphorus',
+  16: 'sulfur',
+  17: 'chlorine',
+  33: 'arsenic',
+  34: 'selenium',
+  35: 'bromine',
+  52: 'tellurium',
+  53: 'iodine',
+};
+
+/**
+ * Largest valence (bond-order sum + hydrogens) an atom may have, or null when the element is not checked
+ * (metals, Si, noble gases, wildcards) or its charge leaves no listed valence. Uses `defaultValences`, so the
+ * charge is taken into account (N+ 4, O+ 3, C+ and C- 3, B- 4) and S, P, I, Se, As, Te may be hypervalent.
+ */
+export function maxValence(atomicNumber: number, charge: number): number | null {
+  if (CHECKED[atomicNumber] === undefined) return null;
+  const vals = defaultValences(atomicNumber, charge);
+  if (vals.length === 0) return null;
+  return Math.max(...vals);
+}
+
+/**
+ * Plain-words complaint when `bondOrderSum + hCount` exceeds `maxValence`, else null, e.g.
+ * "carbon with 6 bonds (at most 4)"; hydrogens and charge are named when present.
+ * @param oxoBonds double bonds from this atom to oxygen. A neutral Cl, Br or I written with X=O bonds (HClO4 as
+ *   `OCl(=O)(=O)=O`) is read as the charge-separated form X+–O- for each of them ([Cl+3] with four single
+ *   bonds), as RDKit reads it; only if that fails too is it refused.
+ */
+export function valenceProblem(
+  atomicNumber: number,
+  charge: number,
+  bondOrderSum: number,
+  hCount: number,
+  oxoBonds = 0,
+): string | null {
+  const max = maxValence(atomicNumber, charge);
+  const used = bondOrderSum + hCount;
+  if (max === null || used <= max) return null;
+  if (charge === 0 && oxoBonds > 0 && (atomicNumber === 17 || atomicNumber === 35 || atomicNumber === 53)) {
+    const sep = maxValence(atomicNumber, oxoBonds);
+    if (sep !== null && used - oxoBonds <= sep) return null;
+  }
+  const name = CHECKED[atomicNumber]!;
+  const ch = charge === 0 ? '' : ` of charge ${charge > 0 ? '+' : ''}${charge}`;
+  const hs = hCount > 0 ? `, ${hCount} of them to hydrogen` : '';
+  return `${name}${ch} with ${used} bonds${hs} (at most ${max})`;
 }
