@@ -146,6 +146,38 @@ describe('molfile: atoms above their highest valence (CTfile format specificatio
     if (!r.ok) expect(r.error.message).toContain('nitrogen of charge +1 with 5 bonds (at most 4)');
   });
 
+  it('V3000: an oxygen with three bonds and no charge is an error on its atom line (CTfile V3000 atom block)', () => {
+    const v3000 = (charge: string): string =>
+      [
+        'trivalent oxygen',
+        '  test',
+        '',
+        '  0  0  0     0  0            999 V3000',
+        'M  V30 BEGIN CTAB',
+        'M  V30 COUNTS 4 3 0 0 0',
+        'M  V30 BEGIN ATOM',
+        `M  V30 1 O 0 0 0 0${charge}`,
+        'M  V30 2 C 1 0 0 0',
+        'M  V30 3 C -0.5 0.87 0 0',
+        'M  V30 4 C -0.5 -0.87 0 0',
+        'M  V30 END ATOM',
+        'M  V30 BEGIN BOND',
+        'M  V30 1 1 1 2',
+        'M  V30 2 1 1 3',
+        'M  V30 3 1 1 4',
+        'M  V30 END BOND',
+        'M  V30 END CTAB',
+        'M  END',
+      ].join('\n') + '\n';
+    const r = parseMolfile(v3000(''));
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.error.code).toBe('molfile-valence');
+    expect(r.error.at.line).toBe(8);
+    expect(r.error.message).toContain('oxygen with 3 bonds (at most 2)');
+    expect(parseMolfile(v3000(' CHG=1')).ok).toBe(true); // trimethyloxonium: O+ takes 3
+  });
+
   it('RDKit refuses the same five-bonded carbon molblock (RDKit MinimalLib)', async () => {
     const rd = await loadRDKit();
     const m = rd.get_mol(block('C', 0, 5));
