@@ -9,7 +9,7 @@
  */
 import type { CipLabel, DifferingUnit, RelationFacts } from './facts.js';
 import { constitutionKey, isomorphic, molecularFormula } from './graph/index.js';
-import { analyse, parentComponent, unitName, type Analysis } from './describe.js';
+import { analyse, parentComponent, type Analysis } from './describe.js';
 import { labelUnits } from './labels.js';
 import { extractAtoms } from './normalize.js';
 import { mapToken, rebase } from './perceive-units.js';
@@ -171,14 +171,42 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
   const perm = g.perms[bestH];
   const aOf = new Int32Array(mB).fill(-1);
   for (let j = 0; j < mB; j++) if (fromA[j] >= 0) aOf[perm[j]] = fromA[j];
-  const differingUnits = best.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
+  // A unit whose own configuration is kept can still change its CIP descriptor (a pseudoasymmetric r/s centre:
+  // cis- and trans-1,4-dimethylcyclohexane change both labels). The list names those too, so that it agrees
+  // with the labels; epimers then differ at exactly one centre in configuration and in descriptors.
+  const keyOf = (xs: number[]): string => [...xs].sort((p, q) => p - q).join(',');
+  const differ = new Set(best);
+  for (let j = 0; j < mB; j++) {
+    if (differ.has(j) || aOf[j] < 0 || !pb.reported[j]) continue;
+    const la = labA.get(keyOf(pa.p.units[aOf[j]].atoms)) ?? null;
+    const lb = labB.get(keyOf(pb.p.units[j].atoms)) ?? null;
+    if (la !== null && lb !== null && la !== lb) differ.add(j);
+  }
+  const listed = [...differ].sort((p, q) => p - q);
+  const differingUnits = listed.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
   const epimers =
+    listed.length === 1 &&
     differingUnits.length === 1 &&
     differingUnits[0].kind === 'tetrahedral' &&
     pb.p.units.filter((u, j) => u.mode === 'parity' && pb.reported[j]).length >= 2;
-  const names = best.map((j) => unitName(pb.p, j)).join(', ');
+  const names = listed
+    .map((j) => {
+      const d = differingUnits.find(
+        (u) => keyOf(u.atomsB) === keyOf(pb.p.units[j].atoms.map((x) => pb.p.structure.atoms[x].inputNumber)),
+      );
+      const change =
+        d && d.labelA && d.labelB && d.labelA !== d.labelB ? ` (${d.labelA} in A, ${d.labelB} in B)` : '';
+      return `${unitWords(pb.p.structure, pb.p.units[j].atoms)}${change}`;
+    })
+    .join(', ');
   const explanation = epimers
-    ? `epimers: diastereomers differing only at ${names} (numbered as in B)${salt}`
-    : `diastereomers: configurations differ at ${names} (numbered as in B)${salt}`;
+    ? `epimers: diastereomers differing only at ${names} (atoms numbered as in B)${salt}`
+    : `diastereomers: differing at ${names} (atoms numbered as in B)${salt}`;
   return { ...base, relation: 'diastereomers', differingUnits, epimers, explanation };
+}
+
+/** "atom 5 (C)", or "the double bond between atom 2 (C) and atom 3 (C)": never "C5", which reads as a locant. */
+function unitWords(s: Structure, atoms: number[]): string {
+  const one = (i: number): string => `atom ${s.atoms[i].inputNumber} (${s.atoms[i].element})`;
+  return atoms.length === 1 ? one(atoms[0]) : `the unit between ${one(atoms[0])} and ${one(atoms[1])}`;
 }
