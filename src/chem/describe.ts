@@ -27,6 +27,7 @@ import {
 import { mirrorFacts } from './symmetry-evidence.js';
 import { listStereoisomers } from './isomers-list.js';
 import { parentCopies, withoutCopies } from './copies.js';
+import { transMediumRingBonds } from './planar-ring.js';
 import type { Structure } from './types.js';
 import { writeSmiles } from './write/smiles.js';
 
@@ -110,7 +111,9 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   const copies = parentCopies(s, comps, parentIndex);
   const counted = copies.length > 0 ? analyse(withoutCopies(s, comps, copies)) : a;
   const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
-  const chiral = counted.chirality.chiral;
+  // Planar chirality of a trans ring double bond (8–11 atoms) is not modelled: leave chirality open.
+  const planar = transMediumRingBonds(counted.p);
+  const chiral = planar.length > 0 ? null : counted.chirality.chiral;
   // Gold Book meso: achiral member of a set with chiral members (so the count must hold a meso form too).
   const meso =
     chiral === null ? null : chiral === false && stereoisomers.chiral > 0 && stereoisomers.meso > 0;
@@ -143,6 +146,21 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
     formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice(),
   };
+  for (const b of planar) {
+    const [x, y] = b.atoms.map((i) => counted.p.structure.atoms[i].inputNumber);
+    facts.remarks.push(
+      `the trans double bond between atoms ${x} and ${y} lies in a ${b.ringSize}-membered ring, which makes the molecule planar chiral (as (E)-cyclooctene); planar chirality is not modelled, so chirality is left open and the stereoisomer count leaves it out`,
+    );
+  }
+  if (planar.length > 0) {
+    facts.mirror = {
+      chiral: null,
+      fixedAtoms: [],
+      fixedBonds: [],
+      explanation:
+        'open: a trans double bond in a ring of 8–11 atoms is planar chiral, which is not modelled',
+    };
+  }
   if (copies.length > 0) {
     facts.remarks.push(
       `${copies.length + 1} identical copies of the parent (${components[parentIndex].formula}): stereoisomer counts and chirality are those of one copy`,
