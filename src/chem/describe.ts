@@ -149,7 +149,7 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   for (const b of planar) {
     const [x, y] = b.atoms.map((i) => counted.p.structure.atoms[i].inputNumber);
     facts.remarks.push(
-      `the trans double bond between atoms ${x} and ${y} lies in a ${b.ringSize}-membered ring, which makes the molecule planar chiral (as (E)-cyclooctene); planar chirality is not modelled, so chirality is left open and the stereoisomer count leaves it out`,
+      `the trans double bond between atoms ${x} and ${y} lies in a ring of ${b.ringSize} atoms, which makes the molecule planar chiral (as (E)-cyclooctene); planar chirality is not modelled, so chirality is left open and the stereoisomer count leaves it out`,
     );
   }
   if (planar.length > 0) {

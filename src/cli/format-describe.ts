@@ -31,8 +31,12 @@ export function describeText(f: StructureFacts, what: string): string {
     `Stereogenic double bonds and axes: ${bonds.length === 0 ? 'none' : `${bonds.length} (${nDef(bonds)} defined)`}`,
   );
   for (const u of bonds) out.push(unitLine(u));
-  out.push(`Chiral: ${yesNo(f.chiral)} — ${f.mirror.explanation.replace(/^(achiral|chiral|open): /, '')}`);
-  out.push(`Meso: ${yesNo(f.meso)}`);
+  // Open without undefined units: an impossible drawing or unmodelled planar chirality (see the remarks).
+  const open = f.undefined > 0 ? undefined : 'open (see the remarks)';
+  out.push(
+    `Chiral: ${yesNo(f.chiral, open)} — ${f.mirror.explanation.replace(/^(achiral|chiral|open): /, '')}`,
+  );
+  out.push(`Meso: ${yesNo(f.meso, open)}`);
   if (f.undefined > 0) out.push(`Undefined stereo units: ${f.undefined}`);
   const c = f.stereoisomers;
   out.push(

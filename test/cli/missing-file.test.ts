@@ -39,3 +39,12 @@ suite('missing file arguments', () => {
     expect(r.code).toBe(1);
   });
 });
+
+suite('text output for an open verdict without undefined units', () => {
+  it("Tröger's base drawn inconsistently: 'open (see the remarks)', not 'undefined stereo' (from memory)", async () => {
+    const r = await cli(['describe', 'CC1=CC2=C(C=C1)[N@]3CC4=C(C=CC(=C4)C)[N@](C2)C3']);
+    expect(r.out).toMatch(/Chiral: open \(see the remarks\)/);
+    expect(r.out).toMatch(/Meso: open \(see the remarks\)/);
+    expect(r.out).not.toMatch(/undefined stereo/);
+  });
+});
