@@ -113,7 +113,26 @@ function implicitHydrogens(atomicNumber, charge, bondOrderSum, radical = 0) {
   for (const v of valences) if (v >= used) return v - used;
   return 0;
 }
-var ELEMENTS, NUMBER_OF, DEFAULT_VALENCES;
+function maxValence(atomicNumber, charge) {
+  if (CHECKED[atomicNumber] === void 0) return null;
+  const vals = defaultValences(atomicNumber, charge);
+  if (vals.length === 0) return null;
+  return Math.max(...vals);
+}
+function valenceProblem(atomicNumber, charge, bondOrderSum, hCount, oxoBonds = 0) {
+  const max = maxValence(atomicNumber, charge);
+  const used = bondOrderSum + hCount;
+  if (max === null || used <= max) return null;
+  if (charge === 0 && oxoBonds > 0 && (atomicNumber === 17 || atomicNumber === 35 || atomicNumber === 53)) {
+    const sep4 = maxValence(atomicNumber, oxoBonds);
+    if (sep4 !== null && used - oxoBonds <= sep4) return null;
+  }
+  const name = CHECKED[atomicNumber];
+  const ch = charge === 0 ? "" : ` of charge ${charge > 0 ? "+" : ""}${charge}`;
+  const hs = hCount > 0 ? `, ${hCount} of them to hydrogen` : "";
+  return `${name}${ch} with ${used} bonds${hs} (at most ${max})`;
+}
+var ELEMENTS, NUMBER_OF, DEFAULT_VALENCES, CHECKED;
 var init_valence = __esm({
   "src/chem/read/valence.ts"() {
     "use strict";
@@ -272,6 +291,21 @@ var init_valence = __esm({
       // Te
       53: [1, 3, 5]
       // I
+    };
+    CHECKED = {
+      5: "boron",
+      6: "carbon",
+      7: "nitrogen",
+      8: "oxygen",
+      9: "fluorine",
+      15: "phosphorus",
+      16: "sulfur",
+      17: "chlorine",
+      33: "arsenic",
+      34: "selenium",
+      35: "bromine",
+      52: "tellurium",
+      53: "iodine"
     };
   }
 });
@@ -435,6 +469,1339 @@ var init_types = __esm({
     "use strict";
     IMPLICIT_H = -1;
     LONE_PAIR = -2;
+  }
+});
+
+// src/chem/graph/adjacency.ts
+function buildGraph(s) {
+  const n = s.atoms.length;
+  const deg = new Int32Array(n);
+  const ok = (i, j) => i >= 0 && j >= 0 && i < n && j < n && i !== j;
+  for (const b of s.bonds) {
+    if (!ok(b.a, b.b)) continue;
+    deg[b.a]++;
+    deg[b.b]++;
+  }
+  let total = 0;
+  for (let i = 0; i < n; i++) total += deg[i];
+  const flatNbrs = new Int32Array(total);
+  const flatBonds = new Int32Array(total);
+  const nbrs = new Array(n);
+  const nbrBonds = new Array(n);
+  let at2 = 0;
+  for (let i = 0; i < n; i++) {
+    nbrs[i] = flatNbrs.subarray(at2, at2 + deg[i]);
+    nbrBonds[i] = flatBonds.subarray(at2, at2 + deg[i]);
+    at2 += deg[i];
+  }
+  const fill = new Int32Array(n);
+  s.bonds.forEach((b, k) => {
+    if (!ok(b.a, b.b)) return;
+    nbrs[b.a][fill[b.a]] = b.b;
+    nbrBonds[b.a][fill[b.a]++] = k;
+    nbrs[b.b][fill[b.b]] = b.a;
+    nbrBonds[b.b][fill[b.b]++] = k;
+  });
+  return { n, nbrs, nbrBonds };
+}
+var init_adjacency = __esm({
+  "src/chem/graph/adjacency.ts"() {
+    "use strict";
+  }
+});
+
+// src/chem/graph/components.ts
+function connectedComponents(s, g = buildGraph(s)) {
+  const comp = componentIds(s, g);
+  const out = [];
+  for (let i = 0; i < g.n; i++) {
+    const c = comp[i];
+    if (c === out.length) out.push([]);
+    out[c].push(i);
+  }
+  return out;
+}
+function componentIds(s, g = buildGraph(s)) {
+  const comp = new Int32Array(g.n).fill(-1);
+  const stack = [];
+  let next = 0;
+  for (let start = 0; start < g.n; start++) {
+    if (comp[start] >= 0) continue;
+    comp[start] = next;
+    stack.push(start);
+    while (stack.length) {
+      const u = stack.pop();
+      for (const v of g.nbrs[u]) {
+        if (comp[v] < 0) {
+          comp[v] = next;
+          stack.push(v);
+        }
+      }
+    }
+    next++;
+  }
+  return comp;
+}
+var init_components = __esm({
+  "src/chem/graph/components.ts"() {
+    "use strict";
+    init_adjacency();
+  }
+});
+
+// src/chem/graph/sssr.ts
+function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) {
+  const n = g.n;
+  const m = s.bonds.length;
+  const { systems, systemOf } = ringSystemsOf(s, n, bondInRing);
+  const bondCount = new Int32Array(systems.length);
+  const smallest = new Int32Array(systems.length).fill(2147483647);
+  for (let k = 0; k < m; k++) {
+    if (!bondInRing[k]) continue;
+    const r = systemOf[s.bonds[k].a];
+    bondCount[r]++;
+    smallest[r] = Math.min(smallest[r], smallestRingOfBond[k]);
+  }
+  const rings = [];
+  systems.forEach((atoms, r) => {
+    const nullity = bondCount[r] - atoms.length + 1;
+    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
+    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallest[r]));
+  });
+  return rings.sort((p, q) => p.length - q.length);
+}
+function ringSystemsOf(s, n, bondInRing) {
+  const parent = Int32Array.from({ length: n }, (_, i) => i);
+  const find = (x) => {
+    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+    return x;
+  };
+  const inRing = new Uint8Array(n);
+  s.bonds.forEach((b, k) => {
+    if (!bondInRing[k]) return;
+    inRing[b.a] = inRing[b.b] = 1;
+    const ra = find(b.a);
+    const rb = find(b.b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  });
+  const systems = [];
+  const systemOf = new Int32Array(n).fill(-1);
+  for (let i = 0; i < n; i++) {
+    if (!inRing[i]) continue;
+    const root = find(i);
+    if (systemOf[root] < 0) {
+      systemOf[root] = systems.length;
+      systems.push([]);
+    }
+    systemOf[i] = systemOf[root];
+    systems[systemOf[i]].push(i);
+  }
+  return { systems, systemOf };
+}
+function walkCycle(start, g, bondInRing) {
+  const out = [start];
+  let prevBond = -1;
+  let u = start;
+  for (; ; ) {
+    let next = -1;
+    for (let i = 0; i < g.nbrs[u].length; i++) {
+      const k = g.nbrBonds[u][i];
+      if (bondInRing[k] && k !== prevBond) {
+        next = g.nbrs[u][i];
+        prevBond = k;
+        break;
+      }
+    }
+    if (next < 0 || next === start) return out;
+    out.push(next);
+    u = next;
+  }
+}
+function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
+  const n = g.n;
+  const words = m + 31 >>> 5;
+  const seen = /* @__PURE__ */ new Map();
+  const dist = new Int32Array(n).fill(-1);
+  const parent = new Int32Array(n);
+  const parentBond = new Int32Array(n);
+  const branch = new Int32Array(n);
+  const order = new Int32Array(n);
+  const basis = [];
+  const owner = new Int32Array(m).fill(-1);
+  const rings = [];
+  let below = 0;
+  for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
+    const depth = limit + 1 >> 1;
+    const cands = [];
+    for (const r of atoms) {
+      dist[r] = 0;
+      parent[r] = -1;
+      parentBond[r] = -1;
+      branch[r] = r;
+      let head2 = 0;
+      let tail = 0;
+      order[tail++] = r;
+      while (head2 < tail) {
+        const u = order[head2++];
+        if (dist[u] >= depth) continue;
+        const nb = g.nbrs[u];
+        for (let i = 0; i < nb.length; i++) {
+          const k = g.nbrBonds[u][i];
+          if (!bondInRing[k]) continue;
+          const v = nb[i];
+          if (dist[v] >= 0) continue;
+          dist[v] = dist[u] + 1;
+          parent[v] = u;
+          parentBond[v] = k;
+          branch[v] = u === r ? v : branch[u];
+          order[tail++] = v;
+        }
+      }
+      for (let t = 0; t < tail; t++) {
+        const x = order[t];
+        const nb = g.nbrs[x];
+        for (let i = 0; i < nb.length; i++) {
+          const k = g.nbrBonds[x][i];
+          const y = nb[i];
+          if (!bondInRing[k] || dist[y] < 0 || parentBond[x] === k || parentBond[y] === k) continue;
+          if (dist[y] < dist[x] || dist[y] === dist[x] && y < x) continue;
+          if (x !== r && y !== r && branch[x] === branch[y]) continue;
+          const size = dist[x] + dist[y] + 1;
+          if (size <= below || size > limit) continue;
+          const bits = new Uint32Array(words);
+          const path = [];
+          for (let u = x; u !== r; u = parent[u]) {
+            path.push(u);
+            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          }
+          path.push(r);
+          path.reverse();
+          for (let u = y; u !== r; u = parent[u]) {
+            path.push(u);
+            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          }
+          bits[k >>> 5] ^= 1 << (k & 31);
+          let hash = 0;
+          for (let w = 0; w < words; w++) hash = Math.imul(hash, 31) + bits[w] | 0;
+          const bucket = seen.get(hash);
+          if (bucket?.some((c) => equalBits(c, bits))) continue;
+          if (bucket) bucket.push(bits);
+          else seen.set(hash, [bits]);
+          cands.push({ size, atoms: path, bits, hash });
+        }
+      }
+      for (let t = 0; t < tail; t++) dist[order[t]] = -1;
+    }
+    cands.sort((p, q) => p.size - q.size);
+    for (const c of cands) {
+      const v = c.bits.slice();
+      let p = firstBit(v);
+      while (p >= 0 && owner[p] >= 0) {
+        xorInto(v, basis[owner[p]]);
+        p = firstBit(v);
+      }
+      if (p < 0) continue;
+      owner[p] = basis.length;
+      basis.push(v);
+      rings.push(c.atoms);
+      if (rings.length === nullity) break;
+    }
+    below = limit;
+    if (limit > 2 * n + 2) break;
+  }
+  return rings;
+}
+function equalBits(x, y) {
+  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false;
+  return true;
+}
+function xorInto(v, w) {
+  for (let i = 0; i < v.length; i++) v[i] ^= w[i];
+}
+function firstBit(v) {
+  for (let i = 0; i < v.length; i++) if (v[i] !== 0) return i * 32 + (31 - Math.clz32(v[i] & -v[i]));
+  return -1;
+}
+var init_sssr = __esm({
+  "src/chem/graph/sssr.ts"() {
+    "use strict";
+  }
+});
+
+// src/chem/graph/rings.ts
+function ringInfo(s, g = buildGraph(s)) {
+  const n = g.n;
+  const m = s.bonds.length;
+  const smallestRingOfBond = smallestRings(s, g);
+  const bondInRing = smallestRingOfBond.map((x) => x > 0);
+  const smallestRingOfAtom = new Array(n).fill(0);
+  for (let k = 0; k < m; k++) {
+    const r = smallestRingOfBond[k];
+    if (r === 0) continue;
+    const { a, b } = s.bonds[k];
+    for (const x of [a, b]) {
+      if (smallestRingOfAtom[x] === 0 || r < smallestRingOfAtom[x]) smallestRingOfAtom[x] = r;
+    }
+  }
+  const atomInRing = smallestRingOfAtom.map((x) => x > 0);
+  const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
+  return {
+    rings,
+    atomInRing,
+    bondInRing,
+    smallestRingOfBond,
+    smallestRingOfAtom,
+    ringSystems: ringSystemsOf(s, n, bondInRing).systems
+  };
+}
+function smallestRings(s, g, bridgeOf) {
+  const n = g.n;
+  const out = new Array(s.bonds.length).fill(0);
+  const dist = new Int32Array(n).fill(-1);
+  const queue = new Int32Array(n);
+  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
+  for (let k = 0; k < s.bonds.length; k++) {
+    const { a, b } = s.bonds[k];
+    if (bridge[k] || a === b || a < 0 || b < 0 || a >= n || b >= n) continue;
+    let head2 = 0;
+    let tail = 0;
+    const seen = [a];
+    dist[a] = 0;
+    queue[tail++] = a;
+    let found = 0;
+    while (head2 < tail && found === 0) {
+      const u = queue[head2++];
+      const nb = g.nbrs[u];
+      const bb = g.nbrBonds[u];
+      for (let i = 0; i < nb.length; i++) {
+        if (bb[i] === k || bridge[bb[i]]) continue;
+        const v = nb[i];
+        if (dist[v] >= 0) continue;
+        dist[v] = dist[u] + 1;
+        seen.push(v);
+        if (v === b) {
+          found = dist[v] + 1;
+          break;
+        }
+        queue[tail++] = v;
+      }
+    }
+    out[k] = found;
+    for (const v of seen) dist[v] = -1;
+  }
+  return out;
+}
+function bridges(g, m, keep) {
+  const n = g.n;
+  const isBridge = new Uint8Array(m);
+  const disc = new Int32Array(n).fill(-1);
+  const low = new Int32Array(n);
+  const parentBond = new Int32Array(n).fill(-1);
+  const iter = new Int32Array(n);
+  const stack = [];
+  let time = 0;
+  for (let root = 0; root < n; root++) {
+    if (disc[root] >= 0) continue;
+    disc[root] = low[root] = time++;
+    stack.push(root);
+    while (stack.length) {
+      const u = stack[stack.length - 1];
+      if (iter[u] < g.nbrs[u].length) {
+        const i = iter[u]++;
+        const v = g.nbrs[u][i];
+        const k = g.nbrBonds[u][i];
+        if (k === parentBond[u] || keep && !keep[k]) continue;
+        if (disc[v] < 0) {
+          disc[v] = low[v] = time++;
+          parentBond[v] = k;
+          stack.push(v);
+        } else if (disc[v] < low[u]) low[u] = disc[v];
+      } else {
+        stack.pop();
+        if (stack.length) {
+          const p = stack[stack.length - 1];
+          if (low[u] < low[p]) low[p] = low[u];
+          if (low[u] > disc[p]) isBridge[parentBond[u]] = 1;
+        }
+      }
+    }
+  }
+  return isBridge;
+}
+var init_rings = __esm({
+  "src/chem/graph/rings.ts"() {
+    "use strict";
+    init_adjacency();
+    init_sssr();
+  }
+});
+
+// src/chem/graph/aromaticity.ts
+function aromaticBonds(s, rings, g) {
+  const out = s.bonds.map((b) => b.aromatic);
+  if (!s.bonds.some((b) => b.order === 2 || b.aromatic)) return out;
+  const graph = g ?? buildGraph(s);
+  const info = rings ?? ringInfo(s, graph);
+  if (info.rings.length === 0) return out;
+  const donation = new Int8Array(s.atoms.length).fill(NOT_PI);
+  for (let i = 0; i < s.atoms.length; i++)
+    if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
+  const ringBonds3 = info.rings.map((r) => ringBondList(r, graph));
+  const aromaticRing = info.rings.map((r) => huckel(r, donation));
+  for (let i = 0; i < info.rings.length; i++) {
+    for (let j = i + 1; j < info.rings.length; j++) {
+      if (aromaticRing[i] && aromaticRing[j]) continue;
+      const shared = ringBonds3[i].filter((k) => ringBonds3[j].includes(k));
+      if (shared.length !== 1) continue;
+      const atoms = [.../* @__PURE__ */ new Set([...info.rings[i], ...info.rings[j]])];
+      if (atoms.length !== info.rings[i].length + info.rings[j].length - 2) continue;
+      if (huckel(atoms, donation)) aromaticRing[i] = aromaticRing[j] = true;
+    }
+  }
+  aromaticRing.forEach((yes, r) => {
+    if (yes) for (const k of ringBonds3[r]) out[k] = true;
+  });
+  return out;
+}
+function huckel(atoms, donation) {
+  let sum = 0;
+  for (const a of atoms) {
+    if (donation[a] === NOT_PI) return false;
+    sum += donation[a];
+  }
+  return sum % 4 === 2;
+}
+function ringBondList(ring, g) {
+  const out = [];
+  for (let i = 0; i < ring.length; i++) {
+    const u = ring[i];
+    const v = ring[(i + 1) % ring.length];
+    const idx = g.nbrs[u].indexOf(v);
+    if (idx >= 0) out.push(g.nbrBonds[u][idx]);
+  }
+  return out;
+}
+function piElectrons(s, g, info, i) {
+  const atom = s.atoms[i];
+  let ringDouble = 0;
+  let exoDoubleHetero = 0;
+  let exoDoubleCarbon = 0;
+  for (let t = 0; t < g.nbrs[i].length; t++) {
+    const k = g.nbrBonds[i][t];
+    const b = s.bonds[k];
+    if (b.order >= 3) return NOT_PI;
+    if (b.order !== 2) continue;
+    if (info.bondInRing[k]) ringDouble++;
+    else if (s.atoms[g.nbrs[i][t]].atomicNumber === 6) exoDoubleCarbon++;
+    else exoDoubleHetero++;
+  }
+  const conn = g.nbrs[i].length + atom.hCount;
+  if (ringDouble === 1) return exoDoubleCarbon + exoDoubleHetero === 0 ? 1 : NOT_PI;
+  if (ringDouble > 1) return NOT_PI;
+  if (exoDoubleCarbon > 0) return NOT_PI;
+  if (exoDoubleHetero === 1) return atom.atomicNumber === 6 || atom.atomicNumber === 7 ? 0 : NOT_PI;
+  if (exoDoubleHetero > 1) return NOT_PI;
+  if (atom.radical !== 0) return NOT_PI;
+  const q = atom.charge;
+  switch (atom.atomicNumber) {
+    case 6:
+      if (conn !== 3) return NOT_PI;
+      return q === -1 ? 2 : q === 1 ? 0 : NOT_PI;
+    case 7:
+    case 15:
+    case 33:
+      if (q === 0 && conn === 3) return 2;
+      if (q === -1 && conn === 2) return 2;
+      return NOT_PI;
+    case 8:
+    case 16:
+    case 34:
+    case 52:
+      return q === 0 && conn === 2 ? 2 : NOT_PI;
+    case 5:
+      return q === 0 && conn === 3 ? 0 : NOT_PI;
+    default:
+      return NOT_PI;
+  }
+}
+function conjugatedRingBonds(s, g = buildGraph(s), bridgeOf) {
+  const m = s.bonds.length;
+  const out = new Array(m).fill(false);
+  if (!s.bonds.some((b) => b.order === 2)) return out;
+  const bridge = bridgeOf ?? bridges(g, m);
+  const n = g.n;
+  const hasRingDouble = new Uint8Array(n);
+  s.bonds.forEach((b, k) => {
+    if (b.order === 2 && !bridge[k] && b.a !== b.b && b.a >= 0 && b.b >= 0 && b.a < n && b.b < n) {
+      hasRingDouble[b.a] = hasRingDouble[b.b] = 1;
+    }
+  });
+  const keep = s.bonds.map(
+    (b, k) => !bridge[k] && b.order <= 2 && hasRingDouble[b.a] === 1 && hasRingDouble[b.b] === 1
+  );
+  if (!keep.some((x) => x)) return out;
+  const subBridge = bridges(g, m, keep);
+  for (let k = 0; k < m; k++) out[k] = keep[k] && !subBridge[k];
+  return out;
+}
+var NOT_PI;
+var init_aromaticity = __esm({
+  "src/chem/graph/aromaticity.ts"() {
+    "use strict";
+    init_adjacency();
+    init_rings();
+    NOT_PI = -1;
+  }
+});
+
+// src/chem/graph/invariants.ts
+function atomInvariants(s, aromatic) {
+  return invariantsWith(s, aromatic);
+}
+function invariantsWith(s, aromatic, graph, bridgeOf) {
+  const n = s.atoms.length;
+  const g = graph ?? buildGraph(s);
+  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
+  const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
+  const bondRing = smallestRings(s, g, bridge);
+  const ring = new Array(n).fill(0);
+  for (let i = 0; i < n; i++) {
+    for (const k of g.nbrBonds[i])
+      if (bondRing[k] > 0 && (ring[i] === 0 || bondRing[k] < ring[i])) ring[i] = bondRing[k];
+  }
+  const aromaticAtom = new Array(n).fill(false);
+  for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (arom[k]) aromaticAtom[i] = true;
+  return s.atoms.map((a, i) => {
+    let v = clamp(a.atomicNumber, 0, 127);
+    v = v * 32 + clamp(a.charge + 16, 0, 31);
+    v = v * 512 + clamp(a.isotope ?? 0, 0, 511);
+    v = v * 32 + clamp(a.hCount, 0, 31);
+    v = v * 32 + clamp(g.nbrs[i].length, 0, 31);
+    v = v * 4 + clamp(a.radical, 0, 3);
+    v = v * 2 + (aromaticAtom[i] ? 1 : 0);
+    v = v * 32 + clamp(ring[i], 0, 31);
+    return v;
+  });
+}
+function clamp(x, lo, hi) {
+  return x < lo ? lo : x > hi ? hi : x;
+}
+var init_invariants = __esm({
+  "src/chem/graph/invariants.ts"() {
+    "use strict";
+    init_adjacency();
+    init_aromaticity();
+    init_rings();
+  }
+});
+
+// src/chem/graph/refine.ts
+function clonePartition(p) {
+  return {
+    lab: p.lab.slice(),
+    pos: p.pos.slice(),
+    start: p.start.slice(),
+    len: p.len.slice(),
+    cells: p.cells
+  };
+}
+function copyPartition(from, to) {
+  to.lab.set(from.lab);
+  to.pos.set(from.pos);
+  to.start.set(from.start);
+  to.len.set(from.len);
+  to.cells = from.cells;
+}
+function rankKeys(keys, n) {
+  let rank = rankOne(keys[0], n);
+  for (let k = 1; k < keys.length; k++) {
+    const next = rankOne(keys[k], n);
+    let m = 0;
+    for (let i = 0; i < n; i++) if (next[i] >= m) m = next[i] + 1;
+    const combined = new Float64Array(n);
+    for (let i = 0; i < n; i++) combined[i] = rank[i] * m + next[i];
+    rank = rankOne(combined, n);
+  }
+  return rank;
+}
+function rankOne(values, n) {
+  const sorted = new Float64Array(n);
+  for (let i = 0; i < n; i++) sorted[i] = values[i];
+  sorted.sort();
+  let u = 0;
+  for (let i = 0; i < n; i++) if (i === 0 || sorted[i] !== sorted[u - 1]) sorted[u++] = sorted[i];
+  const out = new Int32Array(n);
+  for (let i = 0; i < n; i++) {
+    const v = values[i];
+    let lo = 0;
+    let hi = u - 1;
+    while (lo < hi) {
+      const mid = lo + hi >>> 1;
+      if (sorted[mid] < v) lo = mid + 1;
+      else hi = mid;
+    }
+    out[i] = lo;
+  }
+  return out;
+}
+function partitionOf(rank) {
+  const n = rank.length;
+  const lab = new Int32Array(n);
+  const pos = new Int32Array(n);
+  const start = new Int32Array(n);
+  const len = new Int32Array(n);
+  let cells = 0;
+  for (let i = 0; i < n; i++) if (rank[i] + 1 > cells) cells = rank[i] + 1;
+  const first = new Int32Array(cells + 1);
+  for (let i = 0; i < n; i++) first[rank[i] + 1]++;
+  for (let c = 0; c < cells; c++) first[c + 1] += first[c];
+  const fill = first.slice(0, cells);
+  for (let i = 0; i < n; i++) {
+    const c = rank[i];
+    pos[i] = fill[c];
+    lab[fill[c]++] = i;
+    start[i] = first[c];
+  }
+  for (let c = 0; c < cells; c++) len[first[c]] = first[c + 1] - first[c];
+  return { lab, pos, start, len, cells };
+}
+function cellIndex(p) {
+  const n = p.lab.length;
+  const out = new Int32Array(n);
+  let c = -1;
+  for (let i = 0; i < n; i = i + p.len[i]) {
+    c++;
+    for (let t = i; t < i + p.len[i]; t++) out[p.lab[t]] = c;
+  }
+  return out;
+}
+function swapTo(p, v, at2) {
+  const from = p.pos[v];
+  const w = p.lab[at2];
+  p.lab[from] = w;
+  p.pos[w] = from;
+  p.lab[at2] = v;
+  p.pos[v] = at2;
+}
+var AROMATIC_CODE, WEIGHT, ascending, Refiner;
+var init_refine = __esm({
+  "src/chem/graph/refine.ts"() {
+    "use strict";
+    AROMATIC_CODE = 5;
+    WEIGHT = [0, 1, 1 << 6, 1 << 12, 1 << 18, 1 << 24, 1 << 27];
+    ascending = (x, y) => x - y;
+    Refiner = class {
+      constructor(g, split = 0) {
+        this.g = g;
+        this.split = split;
+        const n = g.n;
+        this.count = new Int32Array(n);
+        this.touched = new Int32Array(n);
+        this.queue = new Int32Array(n + 1);
+        this.inQueue = new Uint8Array(n);
+        this.cellHits = new Int32Array(n);
+        this.cellBase = new Int32Array(n);
+        this.members = new Int32Array(n);
+        this.sortBuf = new Float64Array(n);
+      }
+      g;
+      split;
+      count;
+      touched;
+      queue;
+      inQueue;
+      cellHits;
+      cellBase;
+      members;
+      cellsToSplit = [];
+      sortBuf;
+      starts = [];
+      head = 0;
+      tail = 0;
+      queued = 0;
+      /** Work done so far (neighbour visits), for search budgets. */
+      work = 0;
+      /** Moves atoms x (of A) and y (of B) of one cell into a cell of their own at the cell's start; refines. */
+      individualise(p, x, y) {
+        const { start, len } = p;
+        const s = start[x];
+        const L = len[s];
+        swapTo(p, x, s);
+        swapTo(p, y, s + 1);
+        len[s] = 2;
+        len[s + 2] = L - 2;
+        for (let t = s + 2; t < s + L; t++) start[p.lab[t]] = s + 2;
+        p.cells++;
+        return this.refine(p, [s]);
+      }
+      /** Balanced A/B counts in every cell (always true without a split). */
+      balanced(p) {
+        if (this.split === 0) return true;
+        for (let s = 0; s < p.lab.length; s += p.len[s]) if (!this.cellBalanced(p, s, p.len[s])) return false;
+        return true;
+      }
+      /**
+       * Refines p in place until equitable. `splitters` are the first positions of the cells to start from (all
+       * cells when omitted). Returns false when A and B were found to differ.
+       */
+      refine(p, splitters) {
+        const { offs, adj, code } = this.g;
+        const { lab, start, len } = p;
+        const { count: count2, touched, queue, inQueue, cellHits, cellBase, members } = this;
+        const qsize = queue.length;
+        this.head = 0;
+        this.tail = 0;
+        this.queued = 0;
+        if (splitters) for (const s of splitters) this.push(s);
+        else for (let s = 0; s < lab.length; s += len[s]) this.push(s);
+        const n = lab.length;
+        let ok = true;
+        while (this.queued > 0 && ok) {
+          if (p.cells === n) break;
+          const w = queue[this.head];
+          this.head = this.head + 1 === qsize ? 0 : this.head + 1;
+          this.queued--;
+          inQueue[w] = 0;
+          let nt = 0;
+          const wEnd = w + len[w];
+          for (let t = w; t < wEnd; t++) {
+            const v = lab[t];
+            this.work += offs[v + 1] - offs[v] + 1;
+            for (let e = offs[v]; e < offs[v + 1]; e++) {
+              const u = adj[e];
+              if (count2[u] === 0) touched[nt++] = u;
+              count2[u] += WEIGHT[code[e]];
+            }
+          }
+          const cells = this.cellsToSplit;
+          cells.length = 0;
+          for (let t = 0; t < nt; t++) {
+            const s = start[touched[t]];
+            if (len[s] === 1) continue;
+            if (cellHits[s] === 0) cells.push(s);
+            cellHits[s]++;
+          }
+          if (cells.length > 1) cells.sort(ascending);
+          let off = 0;
+          for (const s of cells) {
+            cellBase[s] = off;
+            off += cellHits[s];
+            cellHits[s] = 0;
+          }
+          for (let t = 0; t < nt; t++) {
+            const u = touched[t];
+            const s = start[u];
+            if (len[s] === 1) continue;
+            members[cellBase[s] + cellHits[s]++] = u;
+          }
+          for (const s of cells) {
+            if (ok && this.splitCell(p, s, cellBase[s], cellHits[s]) < 0) ok = false;
+            cellHits[s] = 0;
+          }
+          for (let t = 0; t < nt; t++) count2[touched[t]] = 0;
+        }
+        this.drain();
+        return ok;
+      }
+      push(s) {
+        this.queue[this.tail] = s;
+        this.tail = this.tail + 1 === this.queue.length ? 0 : this.tail + 1;
+        this.inQueue[s] = 1;
+        this.queued++;
+      }
+      drain() {
+        const queue = this.queue;
+        while (this.head !== this.tail) {
+          this.inQueue[queue[this.head]] = 0;
+          this.head = this.head + 1 === queue.length ? 0 : this.head + 1;
+        }
+        this.queued = 0;
+      }
+      /**
+       * Splits the cell at s by count; the cell's touched atoms are members[from .. from+k). Untouched atoms (count
+       * 0) stay at the front as the first fragment. Returns the number of fragments, or -1 on an A/B imbalance.
+       */
+      splitCell(p, s, from, k) {
+        const { lab, start, len } = p;
+        const count2 = this.count;
+        const L = len[s];
+        if (k === L) {
+          const first = count2[lab[s]];
+          let uniform = true;
+          for (let t = s + 1; t < s + L; t++) {
+            if (count2[lab[t]] !== first) {
+              uniform = false;
+              break;
+            }
+          }
+          if (uniform) return 1;
+        }
+        let end = s + L;
+        for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
+        this.work += k;
+        const buf = this.sortBuf.subarray(0, k);
+        for (let t = 0; t < k; t++) buf[t] = count2[lab[end + t]] * 4194304 + lab[end + t];
+        if (k > 1) buf.sort();
+        for (let t = 0; t < k; t++) {
+          const v = buf[t] % 4194304;
+          lab[end + t] = v;
+          p.pos[v] = end + t;
+        }
+        const wasQueued = this.inQueue[s] === 1;
+        const starts = this.starts;
+        starts.length = 0;
+        let largest = s;
+        let largestLen = 0;
+        if (end > s) {
+          len[s] = end - s;
+          starts.push(s);
+          largestLen = end - s;
+        }
+        let fragStart = end;
+        for (let t = end; t <= s + L; t++) {
+          if (t === s + L || t > end && count2[lab[t]] !== count2[lab[t - 1]]) {
+            const fl = t - fragStart;
+            len[fragStart] = fl;
+            for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
+            if (this.split > 0 && !this.cellBalanced(p, fragStart, fl)) return -1;
+            starts.push(fragStart);
+            if (fl > largestLen) {
+              largestLen = fl;
+              largest = fragStart;
+            }
+            fragStart = t;
+          }
+        }
+        p.cells += starts.length - 1;
+        for (const f of starts) {
+          if (wasQueued) {
+            if (f !== s) this.push(f);
+          } else if (f !== largest) this.push(f);
+        }
+        return starts.length;
+      }
+      cellBalanced(p, s, L) {
+        let a = 0;
+        for (let t = s; t < s + L; t++) if (p.lab[t] < this.split) a++;
+        return 2 * a === L;
+      }
+    };
+  }
+});
+
+// src/chem/graph/csr.ts
+function bondCode(s, k, aromatic) {
+  return aromatic?.[k] ? AROMATIC_CODE : s.bonds[k].order;
+}
+function valid(s, k) {
+  const { a, b } = s.bonds[k];
+  const n = s.atoms.length;
+  return a >= 0 && b >= 0 && a < n && b < n && a !== b;
+}
+function csrOf(parts) {
+  let n = 0;
+  for (const p of parts) n += p.s.atoms.length;
+  const offs = new Int32Array(n + 1);
+  let base = 0;
+  for (const { s } of parts) {
+    for (let k = 0; k < s.bonds.length; k++) {
+      if (!valid(s, k)) continue;
+      offs[base + s.bonds[k].a + 1]++;
+      offs[base + s.bonds[k].b + 1]++;
+    }
+    base += s.atoms.length;
+  }
+  for (let i = 0; i < n; i++) offs[i + 1] += offs[i];
+  const adj = new Int32Array(offs[n]);
+  const code = new Int32Array(offs[n]);
+  const fill = offs.slice(0, n);
+  base = 0;
+  for (const { s, aromatic } of parts) {
+    for (let k = 0; k < s.bonds.length; k++) {
+      if (!valid(s, k)) continue;
+      const a = base + s.bonds[k].a;
+      const b = base + s.bonds[k].b;
+      const c = bondCode(s, k, aromatic);
+      adj[fill[a]] = b;
+      code[fill[a]++] = c;
+      adj[fill[b]] = a;
+      code[fill[b]++] = c;
+    }
+    base += s.atoms.length;
+  }
+  return { n, offs, adj, code };
+}
+var init_csr = __esm({
+  "src/chem/graph/csr.ts"() {
+    "use strict";
+    init_refine();
+  }
+});
+
+// src/chem/graph/prepared.ts
+function refinedPartition(p) {
+  if (!p.refined) {
+    const part = partitionOf(rankKeys([p.inv], p.inv.length));
+    new Refiner(p.csr).refine(part);
+    p.refined = part;
+  }
+  return p.refined;
+}
+function prepare(s, aromatic) {
+  const sum = checksum(s, aromatic);
+  const entries = cache.get(s);
+  const hit = entries?.find((e) => e.aromatic === aromatic && e.sum === sum);
+  if (hit) return hit.prepared;
+  const prepared = prepareFresh(s, aromatic);
+  if (entries) {
+    if (entries.length >= 4) entries.shift();
+    entries.push({ sum, aromatic, prepared });
+  } else cache.set(s, [{ sum, aromatic, prepared }]);
+  return prepared;
+}
+function checksum(s, aromatic) {
+  let h = 2654435769 ^ s.atoms.length;
+  const mix = (x) => {
+    h = Math.imul(h ^ x, 16777619);
+  };
+  for (const a of s.atoms) {
+    mix(a.atomicNumber);
+    mix(a.charge);
+    mix(a.hCount);
+    mix(a.isotope ?? -1);
+    mix(a.radical);
+  }
+  mix(s.bonds.length);
+  for (const b of s.bonds) {
+    mix(b.a);
+    mix(b.b);
+    mix(b.order);
+  }
+  if (aromatic) for (let k = 0; k < aromatic.length; k++) mix(aromatic[k] ? 1 : 2);
+  return h;
+}
+function prepareFresh(s, aromatic) {
+  const g = buildGraph(s);
+  const bridge = bridges(g, s.bonds.length);
+  const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
+  const inv = invariantsWith(s, arom, g, bridge);
+  return { s, g, aromatic: arom, inv, csr: csrOf([{ s, aromatic: arom }]) };
+}
+var cache;
+var init_prepared = __esm({
+  "src/chem/graph/prepared.ts"() {
+    "use strict";
+    init_adjacency();
+    init_aromaticity();
+    init_invariants();
+    init_csr();
+    init_refine();
+    init_rings();
+    cache = /* @__PURE__ */ new WeakMap();
+  }
+});
+
+// src/chem/graph/classes.ts
+function equivalenceClasses(s, opts = {}) {
+  const n = s.atoms.length;
+  if (n === 0) return new Int32Array(0);
+  const prep = prepare(s, opts.aromatic);
+  if (!opts.extra) return cellIndex(refinedPartition(prep));
+  const p = partitionOf(rankKeys([prep.inv, opts.extra], n));
+  new Refiner(prep.csr).refine(p);
+  return cellIndex(p);
+}
+var init_classes = __esm({
+  "src/chem/graph/classes.ts"() {
+    "use strict";
+    init_prepared();
+    init_refine();
+    init_invariants();
+  }
+});
+
+// src/chem/graph/isomorphism.ts
+function findIsomorphisms(a, b, opts) {
+  const n = a.atoms.length;
+  if (n !== b.atoms.length || validBonds(a) !== validBonds(b)) return { complete: true };
+  if (n === 0) {
+    opts.onMapping(new Int32Array(0));
+    return { complete: true };
+  }
+  const pa = prepare(a, opts.aromaticA);
+  const same = a === b && sameColours(opts.colourA, opts.colourB, n) && opts.aromaticA === opts.aromaticB;
+  const pb = same ? pa : prepare(b, opts.aromaticB);
+  const inKey = new Uint8Array(n);
+  const g1 = pa.csr;
+  if (opts.key) {
+    for (const x of opts.key) {
+      if (x < 0 || x >= n) continue;
+      inKey[x] = 1;
+      for (let e = g1.offs[x]; e < g1.offs[x + 1]; e++) inKey[g1.adj[e]] = 1;
+    }
+  } else inKey.fill(1);
+  let p;
+  let g;
+  let refiner;
+  if (same) {
+    const single = singlePartition(pa, opts.colourA, n);
+    let fixed = true;
+    for (let i = 0; i < n && fixed; i++) if (inKey[i] && single.len[single.start[i]] > 1) fixed = false;
+    if (fixed) {
+      const id = new Int32Array(n);
+      for (let i = 0; i < n; i++) id[i] = i;
+      opts.onMapping(id);
+      return { complete: true };
+    }
+    p = doubled(single, n);
+    g = unionCsr(pa.csr, pb.csr);
+    refiner = new Refiner(g, n);
+  } else {
+    g = unionCsr(pa.csr, pb.csr);
+    refiner = new Refiner(g, n);
+    const keys = [concat(pa.inv, pb.inv)];
+    if (opts.colourA || opts.colourB) {
+      const col = new Float64Array(2 * n);
+      for (let i = 0; i < n; i++) {
+        col[i] = opts.colourA ? opts.colourA[i] : 0;
+        col[n + i] = opts.colourB ? opts.colourB[i] : 0;
+      }
+      keys.push(col);
+    }
+    p = partitionOf(rankKeys(keys, 2 * n));
+    if (!refiner.balanced(p) || !refiner.refine(p)) return { complete: true };
+  }
+  const search = new Search(g, n, refiner, inKey, opts);
+  search.root = p;
+  search.run(p, opts.key ? opts.key.length > 0 : true);
+  return { complete: !search.budgetHit && !search.maxHit, nodes: search.nodes };
+}
+function singlePartition(pa, colour, n) {
+  const base = refinedPartition(pa);
+  if (colour) {
+    let constant = true;
+    for (let s = 0; s < n && constant; s += base.len[s]) {
+      const c = colour[base.lab[s]];
+      for (let t = s + 1; t < s + base.len[s]; t++) {
+        if (colour[base.lab[t]] !== c) {
+          constant = false;
+          break;
+        }
+      }
+    }
+    if (!constant) {
+      const p = partitionOf(rankKeys([pa.inv, colour], n));
+      new Refiner(pa.csr).refine(p);
+      return p;
+    }
+  }
+  return base;
+}
+function sameColours(x, y, n) {
+  if (x === y) return true;
+  if (!x || !y) return false;
+  for (let i = 0; i < n; i++) if (x[i] !== y[i]) return false;
+  return true;
+}
+function concat(x, y) {
+  const out = new Float64Array(x.length + y.length);
+  out.set(x, 0);
+  out.set(y, x.length);
+  return out;
+}
+function doubled(p, n) {
+  const lab = new Int32Array(2 * n);
+  const pos = new Int32Array(2 * n);
+  const start = new Int32Array(2 * n);
+  const len = new Int32Array(2 * n);
+  for (let s = 0; s < n; s += p.len[s]) {
+    const L = p.len[s];
+    for (let t = 0; t < L; t++) {
+      const v = p.lab[s + t];
+      lab[2 * s + t] = v;
+      lab[2 * s + L + t] = v + n;
+      pos[v] = 2 * s + t;
+      pos[v + n] = 2 * s + L + t;
+      start[v] = start[v + n] = 2 * s;
+    }
+    len[2 * s] = 2 * L;
+  }
+  return { lab, pos, start, len, cells: p.cells };
+}
+function unionCsr(x, y) {
+  const n = x.n + y.n;
+  const offs = new Int32Array(n + 1);
+  const ex = x.adj.length;
+  offs.set(x.offs, 0);
+  for (let i = 1; i <= y.n; i++) offs[x.n + i] = ex + y.offs[i];
+  const adj = new Int32Array(ex + y.adj.length);
+  adj.set(x.adj, 0);
+  for (let e = 0; e < y.adj.length; e++) adj[ex + e] = y.adj[e] + x.n;
+  const code = new Int32Array(adj.length);
+  code.set(x.code, 0);
+  code.set(y.code, ex);
+  return { n, offs, adj, code };
+}
+function isomorphic(a, b) {
+  return isomorphism(a, b).map;
+}
+function isomorphism(a, b, maxNodes) {
+  let found = null;
+  const r = findIsomorphisms(a, b, {
+    maxNodes,
+    onMapping: (m) => {
+      found = m;
+      return false;
+    }
+  });
+  return { map: found, decided: found !== null || r.complete };
+}
+function automorphisms(s, opts) {
+  const colour = opts.colour ?? opts.colourA;
+  const aromatic = opts.aromaticA ?? conjugatedRingBonds(s);
+  return findIsomorphisms(s, s, {
+    ...opts,
+    colourA: colour,
+    colourB: colour,
+    aromaticA: aromatic,
+    aromaticB: aromatic
+  });
+}
+function validBonds(s) {
+  const n = s.atoms.length;
+  let c = 0;
+  for (const b of s.bonds) if (b.a >= 0 && b.b >= 0 && b.a < n && b.b < n && b.a !== b.b) c++;
+  return c;
+}
+var NONE, FOUND, STOP, Search;
+var init_isomorphism = __esm({
+  "src/chem/graph/isomorphism.ts"() {
+    "use strict";
+    init_aromaticity();
+    init_prepared();
+    init_refine();
+    NONE = 0;
+    FOUND = 1;
+    STOP = 2;
+    Search = class {
+      constructor(g, n, refiner, inKey, opts) {
+        this.g = g;
+        this.n = n;
+        this.refiner = refiner;
+        this.inKey = inKey;
+        this.opts = opts;
+        this.maxNodes = opts.maxNodes ?? 2e4;
+        this.maxResults = opts.maxResults ?? Infinity;
+      }
+      g;
+      n;
+      refiner;
+      inKey;
+      opts;
+      nodes = 0;
+      results = 0;
+      budgetHit = false;
+      maxHit = false;
+      root = null;
+      maxNodes;
+      maxResults;
+      pool = [];
+      /** `exhaustive`: still branching over key images. Returns NONE, FOUND or STOP. */
+      run(p, exhaustive, depth = 0) {
+        const n = this.n;
+        if (p.cells === n) return this.leaf(p);
+        const { lab, len } = p;
+        let target = -1;
+        let best = Infinity;
+        if (exhaustive) {
+          for (let s = 0; s < 2 * n; s += len[s]) {
+            if (len[s] <= 2 || len[s] >= best) continue;
+            for (let t = s; t < s + len[s]; t++) {
+              if (lab[t] < n && this.inKey[lab[t]]) {
+                target = s;
+                best = len[s];
+                break;
+              }
+            }
+          }
+          if (target < 0) exhaustive = false;
+        }
+        if (target < 0) {
+          for (let s = 0; s < 2 * n; s += len[s]) {
+            if (len[s] > 2 && len[s] < best) {
+              target = s;
+              best = len[s];
+            }
+          }
+        }
+        let x = -1;
+        const ys = [];
+        for (let t = target; t < target + best; t++) {
+          const v = lab[t];
+          if (v >= n) ys.push(v);
+          else if ((!exhaustive || this.inKey[v]) && (x < 0 || v < x)) x = v;
+        }
+        ys.sort((u, v) => u - v);
+        let any = NONE;
+        for (const y of ys) {
+          if (++this.nodes > this.maxNodes) {
+            this.budgetHit = true;
+            return STOP;
+          }
+          const child = this.scratch(depth);
+          copyPartition(p, child);
+          if (!this.refiner.individualise(child, x, y)) continue;
+          const r = this.run(child, exhaustive, depth + 1);
+          if (r === STOP) return STOP;
+          if (r === FOUND) {
+            any = FOUND;
+            if (!exhaustive) return FOUND;
+          }
+        }
+        return any;
+      }
+      /** One partition per search depth, reused. */
+      scratch(depth) {
+        while (this.pool.length <= depth) this.pool.push(clonePartition(this.pool[0] ?? this.root));
+        return this.pool[depth];
+      }
+      leaf(p) {
+        const n = this.n;
+        const { offs, adj, code } = this.g;
+        const map = new Int32Array(n);
+        for (let s = 0; s < 2 * n; s += 2) {
+          const u = p.lab[s];
+          const v = p.lab[s + 1];
+          if (u < n) map[u] = v - n;
+          else map[v] = u - n;
+        }
+        for (let i = 0; i < n; i++) {
+          const bi = map[i] + n;
+          for (let e = offs[i]; e < offs[i + 1]; e++) {
+            const target = map[adj[e]] + n;
+            let ok = false;
+            for (let f = offs[bi]; f < offs[bi + 1]; f++) {
+              if (adj[f] === target && code[f] === code[e]) {
+                ok = true;
+                break;
+              }
+            }
+            if (!ok) return NONE;
+          }
+        }
+        this.results++;
+        if (this.opts.onMapping(map) === false) return STOP;
+        if (this.results >= this.maxResults) {
+          this.maxHit = true;
+          return STOP;
+        }
+        return FOUND;
+      }
+    };
+  }
+});
+
+// src/chem/graph/key.ts
+function molecularFormula(s, atoms) {
+  const counts = /* @__PURE__ */ new Map();
+  let charge = 0;
+  let h = 0;
+  let wildcards = 0;
+  const list = atoms ?? s.atoms.map((_, i) => i);
+  for (const i of list) {
+    const a = s.atoms[i];
+    if (!a) continue;
+    h += a.hCount;
+    charge += a.charge;
+    if (a.atomicNumber === 0 || a.element === "*") wildcards++;
+    else if (a.atomicNumber === 1) h++;
+    else counts.set(a.element, (counts.get(a.element) ?? 0) + 1);
+  }
+  if (h > 0) counts.set("H", h);
+  const hasC = counts.has("C");
+  const order = [...counts.keys()].sort((x, y) => {
+    if (hasC) {
+      const rank = (e) => e === "C" ? 0 : e === "H" ? 1 : 2;
+      const d = rank(x) - rank(y);
+      if (d !== 0) return d;
+    }
+    return x < y ? -1 : x > y ? 1 : 0;
+  });
+  let out = "";
+  for (const e of order) {
+    const c = counts.get(e);
+    out += c === 1 ? e : `${e}${c}`;
+  }
+  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
+  if (charge !== 0) out += `${Math.abs(charge) === 1 ? "" : Math.abs(charge)}${charge > 0 ? "+" : "-"}`;
+  return out;
+}
+function constitutionKey(s) {
+  const n = s.atoms.length;
+  const formula = molecularFormula(s);
+  if (n === 0) return `${formula}/0000000000000000`;
+  const prep = prepare(s);
+  const { inv, csr: g } = prep;
+  const p = refinedPartition(prep);
+  const cell = cellIndex(p);
+  let h1 = 2166136261;
+  let h2 = 16777619 ^ n;
+  const mix = (x) => {
+    h1 = Math.imul(h1 ^ (x | 0), 16777619);
+    h2 = Math.imul(h2 ^ (x | 0), 1540483477);
+    h2 ^= h2 >>> 13;
+  };
+  const nb = [];
+  for (let s0 = 0; s0 < n; s0 += p.len[s0]) {
+    const v = p.lab[s0];
+    mix(p.len[s0]);
+    mix(Math.floor(inv[v] / 4294967296));
+    mix(inv[v] % 4294967296);
+    nb.length = 0;
+    for (let e = g.offs[v]; e < g.offs[v + 1]; e++) nb.push(cell[g.adj[e]] * 8 + g.code[e]);
+    nb.sort((x, y) => x - y);
+    mix(nb.length);
+    for (const x of nb) mix(x);
+  }
+  const hex = (x) => (x >>> 0).toString(16).padStart(8, "0");
+  return `${formula}/${hex(h1)}${hex(h2)}`;
+}
+var init_key = __esm({
+  "src/chem/graph/key.ts"() {
+    "use strict";
+    init_prepared();
+    init_refine();
+  }
+});
+
+// src/chem/graph/index.ts
+var graph_exports = {};
+__export(graph_exports, {
+  aromaticBonds: () => aromaticBonds,
+  atomInvariants: () => atomInvariants,
+  automorphisms: () => automorphisms,
+  buildGraph: () => buildGraph,
+  componentIds: () => componentIds,
+  conjugatedRingBonds: () => conjugatedRingBonds,
+  connectedComponents: () => connectedComponents,
+  constitutionKey: () => constitutionKey,
+  equivalenceClasses: () => equivalenceClasses,
+  findIsomorphisms: () => findIsomorphisms,
+  isomorphic: () => isomorphic,
+  isomorphism: () => isomorphism,
+  molecularFormula: () => molecularFormula,
+  ringInfo: () => ringInfo
+});
+var init_graph = __esm({
+  "src/chem/graph/index.ts"() {
+    "use strict";
+    init_adjacency();
+    init_components();
+    init_rings();
+    init_aromaticity();
+    init_classes();
+    init_isomorphism();
+    init_key();
   }
 });
 
@@ -698,6 +2065,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     return 0;
   }
   const ring = ringBonds(s.atoms.length, s.bonds, adj);
+  let smallestRing = null;
   for (const cu of cumulenes(s, adj)) {
     const [e0, e1] = cu.ends;
     if (cu.bonds.some((k) => s.bonds[k].wedge === "either")) continue;
@@ -708,6 +2076,10 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     if (adj.bnd[e0].some((k) => s.bonds[k].order === 3) || adj.bnd[e1].some((k) => s.bonds[k].order === 3))
       continue;
     if (cu.inner.length % 2 === 0) {
+      if (cu.bonds.some((k) => ring[k])) {
+        smallestRing ??= ringInfo(s).smallestRingOfBond;
+        if (cu.bonds.some((k) => smallestRing[k] > 0 && smallestRing[k] < MIN_STEREO_RING)) continue;
+      }
       const d = doubleBond2(cu.ends, s0, s1);
       if (d !== null) out.push(d);
     } else {
@@ -846,14 +2218,16 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
 function sub2(a, b) {
   return [a[0] - b[0], a[1] - b[1]];
 }
-var MIN_VOLUME, PLAIN_LEAN, MIN_SIDE;
+var MIN_VOLUME, MIN_STEREO_RING, PLAIN_LEAN, MIN_SIDE;
 var init_stereo_2d = __esm({
   "src/chem/read/stereo-2d.ts"() {
     "use strict";
     init_types();
+    init_graph();
     init_molfile_graph();
     init_molfile_geometry();
     MIN_VOLUME = 0.01;
+    MIN_STEREO_RING = 8;
     PLAIN_LEAN = 0.3;
     MIN_SIDE = 0.1;
   }
@@ -1025,11 +2399,27 @@ function finishMolecule(raw2) {
   for (let i = 0; i < atoms.length; i++) {
     const atom = atoms[i];
     let sum = 0;
-    for (const k of adj.bnd[i]) sum += bonds[k].order;
+    let oxo = 0;
+    for (const k of adj.bnd[i]) {
+      const b = bonds[k];
+      sum += b.order;
+      if (b.order === 2 && atoms[b.a === i ? b.b : b.a].atomicNumber === 8) oxo++;
+    }
     const v = raw2.valences[i];
     if (v !== null && v !== void 0) atom.hCount = Math.max(0, v - sum);
     else
       atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
+    const problem = valenceProblem(atom.atomicNumber, atom.charge, sum, atom.hCount, oxo);
+    if (problem !== null) {
+      return {
+        ok: false,
+        error: {
+          code: "molfile-valence",
+          message: `atom ${i + 1}: ${problem}`,
+          at: { line: raw2.atomLines[i] }
+        }
+      };
+    }
   }
   let dimension = 0;
   for (const atom of atoms) {
@@ -2884,7 +4274,14 @@ function parse(text) {
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a];
     let sum = 0;
-    for (const bi of g.nbrBond[a]) sum += order[bi];
+    let oxo = 0;
+    for (const bi of g.nbrBond[a]) {
+      sum += order[bi];
+      const b = g.bonds[bi];
+      if (order[bi] === 2 && g.atoms[b.a === a ? b.b : b.a].atomicNumber === 8) oxo++;
+    }
+    const problem = valenceProblem(ra.atomicNumber, ra.charge, sum, ra.hCount < 0 ? 0 : ra.hCount, oxo);
+    if (problem !== null) return failure("smiles-valence", problem, ra.offset);
     if (ra.hCount < 0) {
       hCount[a] = ra.atomicNumber === 0 ? 0 : implicitHydrogens(ra.atomicNumber, 0, sum);
     } else {
@@ -3628,1339 +5025,6 @@ var init_smiles2 = __esm({
   }
 });
 
-// src/chem/graph/adjacency.ts
-function buildGraph(s) {
-  const n = s.atoms.length;
-  const deg = new Int32Array(n);
-  const ok = (i, j) => i >= 0 && j >= 0 && i < n && j < n && i !== j;
-  for (const b of s.bonds) {
-    if (!ok(b.a, b.b)) continue;
-    deg[b.a]++;
-    deg[b.b]++;
-  }
-  let total = 0;
-  for (let i = 0; i < n; i++) total += deg[i];
-  const flatNbrs = new Int32Array(total);
-  const flatBonds = new Int32Array(total);
-  const nbrs = new Array(n);
-  const nbrBonds = new Array(n);
-  let at2 = 0;
-  for (let i = 0; i < n; i++) {
-    nbrs[i] = flatNbrs.subarray(at2, at2 + deg[i]);
-    nbrBonds[i] = flatBonds.subarray(at2, at2 + deg[i]);
-    at2 += deg[i];
-  }
-  const fill = new Int32Array(n);
-  s.bonds.forEach((b, k) => {
-    if (!ok(b.a, b.b)) return;
-    nbrs[b.a][fill[b.a]] = b.b;
-    nbrBonds[b.a][fill[b.a]++] = k;
-    nbrs[b.b][fill[b.b]] = b.a;
-    nbrBonds[b.b][fill[b.b]++] = k;
-  });
-  return { n, nbrs, nbrBonds };
-}
-var init_adjacency = __esm({
-  "src/chem/graph/adjacency.ts"() {
-    "use strict";
-  }
-});
-
-// src/chem/graph/components.ts
-function connectedComponents(s, g = buildGraph(s)) {
-  const comp = componentIds(s, g);
-  const out = [];
-  for (let i = 0; i < g.n; i++) {
-    const c = comp[i];
-    if (c === out.length) out.push([]);
-    out[c].push(i);
-  }
-  return out;
-}
-function componentIds(s, g = buildGraph(s)) {
-  const comp = new Int32Array(g.n).fill(-1);
-  const stack = [];
-  let next = 0;
-  for (let start = 0; start < g.n; start++) {
-    if (comp[start] >= 0) continue;
-    comp[start] = next;
-    stack.push(start);
-    while (stack.length) {
-      const u = stack.pop();
-      for (const v of g.nbrs[u]) {
-        if (comp[v] < 0) {
-          comp[v] = next;
-          stack.push(v);
-        }
-      }
-    }
-    next++;
-  }
-  return comp;
-}
-var init_components = __esm({
-  "src/chem/graph/components.ts"() {
-    "use strict";
-    init_adjacency();
-  }
-});
-
-// src/chem/graph/sssr.ts
-function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) {
-  const n = g.n;
-  const m = s.bonds.length;
-  const { systems, systemOf } = ringSystemsOf(s, n, bondInRing);
-  const bondCount = new Int32Array(systems.length);
-  const smallest = new Int32Array(systems.length).fill(2147483647);
-  for (let k = 0; k < m; k++) {
-    if (!bondInRing[k]) continue;
-    const r = systemOf[s.bonds[k].a];
-    bondCount[r]++;
-    smallest[r] = Math.min(smallest[r], smallestRingOfBond[k]);
-  }
-  const rings = [];
-  systems.forEach((atoms, r) => {
-    const nullity = bondCount[r] - atoms.length + 1;
-    if (nullity === 1) rings.push(walkCycle(atoms[0], g, bondInRing));
-    else if (nullity > 1) rings.push(...hortonBasis(atoms, nullity, g, bondInRing, m, smallest[r]));
-  });
-  return rings.sort((p, q) => p.length - q.length);
-}
-function ringSystemsOf(s, n, bondInRing) {
-  const parent = Int32Array.from({ length: n }, (_, i) => i);
-  const find = (x) => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  const inRing = new Uint8Array(n);
-  s.bonds.forEach((b, k) => {
-    if (!bondInRing[k]) return;
-    inRing[b.a] = inRing[b.b] = 1;
-    const ra = find(b.a);
-    const rb = find(b.b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  });
-  const systems = [];
-  const systemOf = new Int32Array(n).fill(-1);
-  for (let i = 0; i < n; i++) {
-    if (!inRing[i]) continue;
-    const root = find(i);
-    if (systemOf[root] < 0) {
-      systemOf[root] = systems.length;
-      systems.push([]);
-    }
-    systemOf[i] = systemOf[root];
-    systems[systemOf[i]].push(i);
-  }
-  return { systems, systemOf };
-}
-function walkCycle(start, g, bondInRing) {
-  const out = [start];
-  let prevBond = -1;
-  let u = start;
-  for (; ; ) {
-    let next = -1;
-    for (let i = 0; i < g.nbrs[u].length; i++) {
-      const k = g.nbrBonds[u][i];
-      if (bondInRing[k] && k !== prevBond) {
-        next = g.nbrs[u][i];
-        prevBond = k;
-        break;
-      }
-    }
-    if (next < 0 || next === start) return out;
-    out.push(next);
-    u = next;
-  }
-}
-function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
-  const n = g.n;
-  const words = m + 31 >>> 5;
-  const seen = /* @__PURE__ */ new Map();
-  const dist = new Int32Array(n).fill(-1);
-  const parent = new Int32Array(n);
-  const parentBond = new Int32Array(n);
-  const branch = new Int32Array(n);
-  const order = new Int32Array(n);
-  const basis = [];
-  const owner = new Int32Array(m).fill(-1);
-  const rings = [];
-  let below = 0;
-  for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
-    const depth = limit + 1 >> 1;
-    const cands = [];
-    for (const r of atoms) {
-      dist[r] = 0;
-      parent[r] = -1;
-      parentBond[r] = -1;
-      branch[r] = r;
-      let head2 = 0;
-      let tail = 0;
-      order[tail++] = r;
-      while (head2 < tail) {
-        const u = order[head2++];
-        if (dist[u] >= depth) continue;
-        const nb = g.nbrs[u];
-        for (let i = 0; i < nb.length; i++) {
-          const k = g.nbrBonds[u][i];
-          if (!bondInRing[k]) continue;
-          const v = nb[i];
-          if (dist[v] >= 0) continue;
-          dist[v] = dist[u] + 1;
-          parent[v] = u;
-          parentBond[v] = k;
-          branch[v] = u === r ? v : branch[u];
-          order[tail++] = v;
-        }
-      }
-      for (let t = 0; t < tail; t++) {
-        const x = order[t];
-        const nb = g.nbrs[x];
-        for (let i = 0; i < nb.length; i++) {
-          const k = g.nbrBonds[x][i];
-          const y = nb[i];
-          if (!bondInRing[k] || dist[y] < 0 || parentBond[x] === k || parentBond[y] === k) continue;
-          if (dist[y] < dist[x] || dist[y] === dist[x] && y < x) continue;
-          if (x !== r && y !== r && branch[x] === branch[y]) continue;
-          const size = dist[x] + dist[y] + 1;
-          if (size <= below || size > limit) continue;
-          const bits = new Uint32Array(words);
-          const path = [];
-          for (let u = x; u !== r; u = parent[u]) {
-            path.push(u);
-            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-          }
-          path.push(r);
-          path.reverse();
-          for (let u = y; u !== r; u = parent[u]) {
-            path.push(u);
-            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-          }
-          bits[k >>> 5] ^= 1 << (k & 31);
-          let hash = 0;
-          for (let w = 0; w < words; w++) hash = Math.imul(hash, 31) + bits[w] | 0;
-          const bucket = seen.get(hash);
-          if (bucket?.some((c) => equalBits(c, bits))) continue;
-          if (bucket) bucket.push(bits);
-          else seen.set(hash, [bits]);
-          cands.push({ size, atoms: path, bits, hash });
-        }
-      }
-      for (let t = 0; t < tail; t++) dist[order[t]] = -1;
-    }
-    cands.sort((p, q) => p.size - q.size);
-    for (const c of cands) {
-      const v = c.bits.slice();
-      let p = firstBit(v);
-      while (p >= 0 && owner[p] >= 0) {
-        xorInto(v, basis[owner[p]]);
-        p = firstBit(v);
-      }
-      if (p < 0) continue;
-      owner[p] = basis.length;
-      basis.push(v);
-      rings.push(c.atoms);
-      if (rings.length === nullity) break;
-    }
-    below = limit;
-    if (limit > 2 * n + 2) break;
-  }
-  return rings;
-}
-function equalBits(x, y) {
-  for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false;
-  return true;
-}
-function xorInto(v, w) {
-  for (let i = 0; i < v.length; i++) v[i] ^= w[i];
-}
-function firstBit(v) {
-  for (let i = 0; i < v.length; i++) if (v[i] !== 0) return i * 32 + (31 - Math.clz32(v[i] & -v[i]));
-  return -1;
-}
-var init_sssr = __esm({
-  "src/chem/graph/sssr.ts"() {
-    "use strict";
-  }
-});
-
-// src/chem/graph/rings.ts
-function ringInfo(s, g = buildGraph(s)) {
-  const n = g.n;
-  const m = s.bonds.length;
-  const smallestRingOfBond = smallestRings(s, g);
-  const bondInRing = smallestRingOfBond.map((x) => x > 0);
-  const smallestRingOfAtom = new Array(n).fill(0);
-  for (let k = 0; k < m; k++) {
-    const r = smallestRingOfBond[k];
-    if (r === 0) continue;
-    const { a, b } = s.bonds[k];
-    for (const x of [a, b]) {
-      if (smallestRingOfAtom[x] === 0 || r < smallestRingOfAtom[x]) smallestRingOfAtom[x] = r;
-    }
-  }
-  const atomInRing = smallestRingOfAtom.map((x) => x > 0);
-  const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
-  return {
-    rings,
-    atomInRing,
-    bondInRing,
-    smallestRingOfBond,
-    smallestRingOfAtom,
-    ringSystems: ringSystemsOf(s, n, bondInRing).systems
-  };
-}
-function smallestRings(s, g, bridgeOf) {
-  const n = g.n;
-  const out = new Array(s.bonds.length).fill(0);
-  const dist = new Int32Array(n).fill(-1);
-  const queue = new Int32Array(n);
-  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
-  for (let k = 0; k < s.bonds.length; k++) {
-    const { a, b } = s.bonds[k];
-    if (bridge[k] || a === b || a < 0 || b < 0 || a >= n || b >= n) continue;
-    let head2 = 0;
-    let tail = 0;
-    const seen = [a];
-    dist[a] = 0;
-    queue[tail++] = a;
-    let found = 0;
-    while (head2 < tail && found === 0) {
-      const u = queue[head2++];
-      const nb = g.nbrs[u];
-      const bb = g.nbrBonds[u];
-      for (let i = 0; i < nb.length; i++) {
-        if (bb[i] === k || bridge[bb[i]]) continue;
-        const v = nb[i];
-        if (dist[v] >= 0) continue;
-        dist[v] = dist[u] + 1;
-        seen.push(v);
-        if (v === b) {
-          found = dist[v] + 1;
-          break;
-        }
-        queue[tail++] = v;
-      }
-    }
-    out[k] = found;
-    for (const v of seen) dist[v] = -1;
-  }
-  return out;
-}
-function bridges(g, m, keep) {
-  const n = g.n;
-  const isBridge = new Uint8Array(m);
-  const disc = new Int32Array(n).fill(-1);
-  const low = new Int32Array(n);
-  const parentBond = new Int32Array(n).fill(-1);
-  const iter = new Int32Array(n);
-  const stack = [];
-  let time = 0;
-  for (let root = 0; root < n; root++) {
-    if (disc[root] >= 0) continue;
-    disc[root] = low[root] = time++;
-    stack.push(root);
-    while (stack.length) {
-      const u = stack[stack.length - 1];
-      if (iter[u] < g.nbrs[u].length) {
-        const i = iter[u]++;
-        const v = g.nbrs[u][i];
-        const k = g.nbrBonds[u][i];
-        if (k === parentBond[u] || keep && !keep[k]) continue;
-        if (disc[v] < 0) {
-          disc[v] = low[v] = time++;
-          parentBond[v] = k;
-          stack.push(v);
-        } else if (disc[v] < low[u]) low[u] = disc[v];
-      } else {
-        stack.pop();
-        if (stack.length) {
-          const p = stack[stack.length - 1];
-          if (low[u] < low[p]) low[p] = low[u];
-          if (low[u] > disc[p]) isBridge[parentBond[u]] = 1;
-        }
-      }
-    }
-  }
-  return isBridge;
-}
-var init_rings = __esm({
-  "src/chem/graph/rings.ts"() {
-    "use strict";
-    init_adjacency();
-    init_sssr();
-  }
-});
-
-// src/chem/graph/aromaticity.ts
-function aromaticBonds(s, rings, g) {
-  const out = s.bonds.map((b) => b.aromatic);
-  if (!s.bonds.some((b) => b.order === 2 || b.aromatic)) return out;
-  const graph = g ?? buildGraph(s);
-  const info = rings ?? ringInfo(s, graph);
-  if (info.rings.length === 0) return out;
-  const donation = new Int8Array(s.atoms.length).fill(NOT_PI);
-  for (let i = 0; i < s.atoms.length; i++)
-    if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
-  const ringBonds3 = info.rings.map((r) => ringBondList(r, graph));
-  const aromaticRing = info.rings.map((r) => huckel(r, donation));
-  for (let i = 0; i < info.rings.length; i++) {
-    for (let j = i + 1; j < info.rings.length; j++) {
-      if (aromaticRing[i] && aromaticRing[j]) continue;
-      const shared = ringBonds3[i].filter((k) => ringBonds3[j].includes(k));
-      if (shared.length !== 1) continue;
-      const atoms = [.../* @__PURE__ */ new Set([...info.rings[i], ...info.rings[j]])];
-      if (atoms.length !== info.rings[i].length + info.rings[j].length - 2) continue;
-      if (huckel(atoms, donation)) aromaticRing[i] = aromaticRing[j] = true;
-    }
-  }
-  aromaticRing.forEach((yes, r) => {
-    if (yes) for (const k of ringBonds3[r]) out[k] = true;
-  });
-  return out;
-}
-function huckel(atoms, donation) {
-  let sum = 0;
-  for (const a of atoms) {
-    if (donation[a] === NOT_PI) return false;
-    sum += donation[a];
-  }
-  return sum % 4 === 2;
-}
-function ringBondList(ring, g) {
-  const out = [];
-  for (let i = 0; i < ring.length; i++) {
-    const u = ring[i];
-    const v = ring[(i + 1) % ring.length];
-    const idx = g.nbrs[u].indexOf(v);
-    if (idx >= 0) out.push(g.nbrBonds[u][idx]);
-  }
-  return out;
-}
-function piElectrons(s, g, info, i) {
-  const atom = s.atoms[i];
-  let ringDouble = 0;
-  let exoDoubleHetero = 0;
-  let exoDoubleCarbon = 0;
-  for (let t = 0; t < g.nbrs[i].length; t++) {
-    const k = g.nbrBonds[i][t];
-    const b = s.bonds[k];
-    if (b.order >= 3) return NOT_PI;
-    if (b.order !== 2) continue;
-    if (info.bondInRing[k]) ringDouble++;
-    else if (s.atoms[g.nbrs[i][t]].atomicNumber === 6) exoDoubleCarbon++;
-    else exoDoubleHetero++;
-  }
-  const conn = g.nbrs[i].length + atom.hCount;
-  if (ringDouble === 1) return exoDoubleCarbon + exoDoubleHetero === 0 ? 1 : NOT_PI;
-  if (ringDouble > 1) return NOT_PI;
-  if (exoDoubleCarbon > 0) return NOT_PI;
-  if (exoDoubleHetero === 1) return atom.atomicNumber === 6 || atom.atomicNumber === 7 ? 0 : NOT_PI;
-  if (exoDoubleHetero > 1) return NOT_PI;
-  if (atom.radical !== 0) return NOT_PI;
-  const q = atom.charge;
-  switch (atom.atomicNumber) {
-    case 6:
-      if (conn !== 3) return NOT_PI;
-      return q === -1 ? 2 : q === 1 ? 0 : NOT_PI;
-    case 7:
-    case 15:
-    case 33:
-      if (q === 0 && conn === 3) return 2;
-      if (q === -1 && conn === 2) return 2;
-      return NOT_PI;
-    case 8:
-    case 16:
-    case 34:
-    case 52:
-      return q === 0 && conn === 2 ? 2 : NOT_PI;
-    case 5:
-      return q === 0 && conn === 3 ? 0 : NOT_PI;
-    default:
-      return NOT_PI;
-  }
-}
-function conjugatedRingBonds(s, g = buildGraph(s), bridgeOf) {
-  const m = s.bonds.length;
-  const out = new Array(m).fill(false);
-  if (!s.bonds.some((b) => b.order === 2)) return out;
-  const bridge = bridgeOf ?? bridges(g, m);
-  const n = g.n;
-  const hasRingDouble = new Uint8Array(n);
-  s.bonds.forEach((b, k) => {
-    if (b.order === 2 && !bridge[k] && b.a !== b.b && b.a >= 0 && b.b >= 0 && b.a < n && b.b < n) {
-      hasRingDouble[b.a] = hasRingDouble[b.b] = 1;
-    }
-  });
-  const keep = s.bonds.map(
-    (b, k) => !bridge[k] && b.order <= 2 && hasRingDouble[b.a] === 1 && hasRingDouble[b.b] === 1
-  );
-  if (!keep.some((x) => x)) return out;
-  const subBridge = bridges(g, m, keep);
-  for (let k = 0; k < m; k++) out[k] = keep[k] && !subBridge[k];
-  return out;
-}
-var NOT_PI;
-var init_aromaticity = __esm({
-  "src/chem/graph/aromaticity.ts"() {
-    "use strict";
-    init_adjacency();
-    init_rings();
-    NOT_PI = -1;
-  }
-});
-
-// src/chem/graph/invariants.ts
-function atomInvariants(s, aromatic) {
-  return invariantsWith(s, aromatic);
-}
-function invariantsWith(s, aromatic, graph, bridgeOf) {
-  const n = s.atoms.length;
-  const g = graph ?? buildGraph(s);
-  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
-  const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
-  const bondRing = smallestRings(s, g, bridge);
-  const ring = new Array(n).fill(0);
-  for (let i = 0; i < n; i++) {
-    for (const k of g.nbrBonds[i])
-      if (bondRing[k] > 0 && (ring[i] === 0 || bondRing[k] < ring[i])) ring[i] = bondRing[k];
-  }
-  const aromaticAtom = new Array(n).fill(false);
-  for (let i = 0; i < n; i++) for (const k of g.nbrBonds[i]) if (arom[k]) aromaticAtom[i] = true;
-  return s.atoms.map((a, i) => {
-    let v = clamp(a.atomicNumber, 0, 127);
-    v = v * 32 + clamp(a.charge + 16, 0, 31);
-    v = v * 512 + clamp(a.isotope ?? 0, 0, 511);
-    v = v * 32 + clamp(a.hCount, 0, 31);
-    v = v * 32 + clamp(g.nbrs[i].length, 0, 31);
-    v = v * 4 + clamp(a.radical, 0, 3);
-    v = v * 2 + (aromaticAtom[i] ? 1 : 0);
-    v = v * 32 + clamp(ring[i], 0, 31);
-    return v;
-  });
-}
-function clamp(x, lo, hi) {
-  return x < lo ? lo : x > hi ? hi : x;
-}
-var init_invariants = __esm({
-  "src/chem/graph/invariants.ts"() {
-    "use strict";
-    init_adjacency();
-    init_aromaticity();
-    init_rings();
-  }
-});
-
-// src/chem/graph/refine.ts
-function clonePartition(p) {
-  return {
-    lab: p.lab.slice(),
-    pos: p.pos.slice(),
-    start: p.start.slice(),
-    len: p.len.slice(),
-    cells: p.cells
-  };
-}
-function copyPartition(from, to) {
-  to.lab.set(from.lab);
-  to.pos.set(from.pos);
-  to.start.set(from.start);
-  to.len.set(from.len);
-  to.cells = from.cells;
-}
-function rankKeys(keys, n) {
-  let rank = rankOne(keys[0], n);
-  for (let k = 1; k < keys.length; k++) {
-    const next = rankOne(keys[k], n);
-    let m = 0;
-    for (let i = 0; i < n; i++) if (next[i] >= m) m = next[i] + 1;
-    const combined = new Float64Array(n);
-    for (let i = 0; i < n; i++) combined[i] = rank[i] * m + next[i];
-    rank = rankOne(combined, n);
-  }
-  return rank;
-}
-function rankOne(values, n) {
-  const sorted = new Float64Array(n);
-  for (let i = 0; i < n; i++) sorted[i] = values[i];
-  sorted.sort();
-  let u = 0;
-  for (let i = 0; i < n; i++) if (i === 0 || sorted[i] !== sorted[u - 1]) sorted[u++] = sorted[i];
-  const out = new Int32Array(n);
-  for (let i = 0; i < n; i++) {
-    const v = values[i];
-    let lo = 0;
-    let hi = u - 1;
-    while (lo < hi) {
-      const mid = lo + hi >>> 1;
-      if (sorted[mid] < v) lo = mid + 1;
-      else hi = mid;
-    }
-    out[i] = lo;
-  }
-  return out;
-}
-function partitionOf(rank) {
-  const n = rank.length;
-  const lab = new Int32Array(n);
-  const pos = new Int32Array(n);
-  const start = new Int32Array(n);
-  const len = new Int32Array(n);
-  let cells = 0;
-  for (let i = 0; i < n; i++) if (rank[i] + 1 > cells) cells = rank[i] + 1;
-  const first = new Int32Array(cells + 1);
-  for (let i = 0; i < n; i++) first[rank[i] + 1]++;
-  for (let c = 0; c < cells; c++) first[c + 1] += first[c];
-  const fill = first.slice(0, cells);
-  for (let i = 0; i < n; i++) {
-    const c = rank[i];
-    pos[i] = fill[c];
-    lab[fill[c]++] = i;
-    start[i] = first[c];
-  }
-  for (let c = 0; c < cells; c++) len[first[c]] = first[c + 1] - first[c];
-  return { lab, pos, start, len, cells };
-}
-function cellIndex(p) {
-  const n = p.lab.length;
-  const out = new Int32Array(n);
-  let c = -1;
-  for (let i = 0; i < n; i = i + p.len[i]) {
-    c++;
-    for (let t = i; t < i + p.len[i]; t++) out[p.lab[t]] = c;
-  }
-  return out;
-}
-function swapTo(p, v, at2) {
-  const from = p.pos[v];
-  const w = p.lab[at2];
-  p.lab[from] = w;
-  p.pos[w] = from;
-  p.lab[at2] = v;
-  p.pos[v] = at2;
-}
-var AROMATIC_CODE, WEIGHT, ascending, Refiner;
-var init_refine = __esm({
-  "src/chem/graph/refine.ts"() {
-    "use strict";
-    AROMATIC_CODE = 5;
-    WEIGHT = [0, 1, 1 << 6, 1 << 12, 1 << 18, 1 << 24, 1 << 27];
-    ascending = (x, y) => x - y;
-    Refiner = class {
-      constructor(g, split = 0) {
-        this.g = g;
-        this.split = split;
-        const n = g.n;
-        this.count = new Int32Array(n);
-        this.touched = new Int32Array(n);
-        this.queue = new Int32Array(n + 1);
-        this.inQueue = new Uint8Array(n);
-        this.cellHits = new Int32Array(n);
-        this.cellBase = new Int32Array(n);
-        this.members = new Int32Array(n);
-        this.sortBuf = new Float64Array(n);
-      }
-      g;
-      split;
-      count;
-      touched;
-      queue;
-      inQueue;
-      cellHits;
-      cellBase;
-      members;
-      cellsToSplit = [];
-      sortBuf;
-      starts = [];
-      head = 0;
-      tail = 0;
-      queued = 0;
-      /** Work done so far (neighbour visits), for search budgets. */
-      work = 0;
-      /** Moves atoms x (of A) and y (of B) of one cell into a cell of their own at the cell's start; refines. */
-      individualise(p, x, y) {
-        const { start, len } = p;
-        const s = start[x];
-        const L = len[s];
-        swapTo(p, x, s);
-        swapTo(p, y, s + 1);
-        len[s] = 2;
-        len[s + 2] = L - 2;
-        for (let t = s + 2; t < s + L; t++) start[p.lab[t]] = s + 2;
-        p.cells++;
-        return this.refine(p, [s]);
-      }
-      /** Balanced A/B counts in every cell (always true without a split). */
-      balanced(p) {
-        if (this.split === 0) return true;
-        for (let s = 0; s < p.lab.length; s += p.len[s]) if (!this.cellBalanced(p, s, p.len[s])) return false;
-        return true;
-      }
-      /**
-       * Refines p in place until equitable. `splitters` are the first positions of the cells to start from (all
-       * cells when omitted). Returns false when A and B were found to differ.
-       */
-      refine(p, splitters) {
-        const { offs, adj, code } = this.g;
-        const { lab, start, len } = p;
-        const { count: count2, touched, queue, inQueue, cellHits, cellBase, members } = this;
-        const qsize = queue.length;
-        this.head = 0;
-        this.tail = 0;
-        this.queued = 0;
-        if (splitters) for (const s of splitters) this.push(s);
-        else for (let s = 0; s < lab.length; s += len[s]) this.push(s);
-        const n = lab.length;
-        let ok = true;
-        while (this.queued > 0 && ok) {
-          if (p.cells === n) break;
-          const w = queue[this.head];
-          this.head = this.head + 1 === qsize ? 0 : this.head + 1;
-          this.queued--;
-          inQueue[w] = 0;
-          let nt = 0;
-          const wEnd = w + len[w];
-          for (let t = w; t < wEnd; t++) {
-            const v = lab[t];
-            this.work += offs[v + 1] - offs[v] + 1;
-            for (let e = offs[v]; e < offs[v + 1]; e++) {
-              const u = adj[e];
-              if (count2[u] === 0) touched[nt++] = u;
-              count2[u] += WEIGHT[code[e]];
-            }
-          }
-          const cells = this.cellsToSplit;
-          cells.length = 0;
-          for (let t = 0; t < nt; t++) {
-            const s = start[touched[t]];
-            if (len[s] === 1) continue;
-            if (cellHits[s] === 0) cells.push(s);
-            cellHits[s]++;
-          }
-          if (cells.length > 1) cells.sort(ascending);
-          let off = 0;
-          for (const s of cells) {
-            cellBase[s] = off;
-            off += cellHits[s];
-            cellHits[s] = 0;
-          }
-          for (let t = 0; t < nt; t++) {
-            const u = touched[t];
-            const s = start[u];
-            if (len[s] === 1) continue;
-            members[cellBase[s] + cellHits[s]++] = u;
-          }
-          for (const s of cells) {
-            if (ok && this.splitCell(p, s, cellBase[s], cellHits[s]) < 0) ok = false;
-            cellHits[s] = 0;
-          }
-          for (let t = 0; t < nt; t++) count2[touched[t]] = 0;
-        }
-        this.drain();
-        return ok;
-      }
-      push(s) {
-        this.queue[this.tail] = s;
-        this.tail = this.tail + 1 === this.queue.length ? 0 : this.tail + 1;
-        this.inQueue[s] = 1;
-        this.queued++;
-      }
-      drain() {
-        const queue = this.queue;
-        while (this.head !== this.tail) {
-          this.inQueue[queue[this.head]] = 0;
-          this.head = this.head + 1 === queue.length ? 0 : this.head + 1;
-        }
-        this.queued = 0;
-      }
-      /**
-       * Splits the cell at s by count; the cell's touched atoms are members[from .. from+k). Untouched atoms (count
-       * 0) stay at the front as the first fragment. Returns the number of fragments, or -1 on an A/B imbalance.
-       */
-      splitCell(p, s, from, k) {
-        const { lab, start, len } = p;
-        const count2 = this.count;
-        const L = len[s];
-        if (k === L) {
-          const first = count2[lab[s]];
-          let uniform = true;
-          for (let t = s + 1; t < s + L; t++) {
-            if (count2[lab[t]] !== first) {
-              uniform = false;
-              break;
-            }
-          }
-          if (uniform) return 1;
-        }
-        let end = s + L;
-        for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
-        this.work += k;
-        const buf = this.sortBuf.subarray(0, k);
-        for (let t = 0; t < k; t++) buf[t] = count2[lab[end + t]] * 4194304 + lab[end + t];
-        if (k > 1) buf.sort();
-        for (let t = 0; t < k; t++) {
-          const v = buf[t] % 4194304;
-          lab[end + t] = v;
-          p.pos[v] = end + t;
-        }
-        const wasQueued = this.inQueue[s] === 1;
-        const starts = this.starts;
-        starts.length = 0;
-        let largest = s;
-        let largestLen = 0;
-        if (end > s) {
-          len[s] = end - s;
-          starts.push(s);
-          largestLen = end - s;
-        }
-        let fragStart = end;
-        for (let t = end; t <= s + L; t++) {
-          if (t === s + L || t > end && count2[lab[t]] !== count2[lab[t - 1]]) {
-            const fl = t - fragStart;
-            len[fragStart] = fl;
-            for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
-            if (this.split > 0 && !this.cellBalanced(p, fragStart, fl)) return -1;
-            starts.push(fragStart);
-            if (fl > largestLen) {
-              largestLen = fl;
-              largest = fragStart;
-            }
-            fragStart = t;
-          }
-        }
-        p.cells += starts.length - 1;
-        for (const f of starts) {
-          if (wasQueued) {
-            if (f !== s) this.push(f);
-          } else if (f !== largest) this.push(f);
-        }
-        return starts.length;
-      }
-      cellBalanced(p, s, L) {
-        let a = 0;
-        for (let t = s; t < s + L; t++) if (p.lab[t] < this.split) a++;
-        return 2 * a === L;
-      }
-    };
-  }
-});
-
-// src/chem/graph/csr.ts
-function bondCode(s, k, aromatic) {
-  return aromatic?.[k] ? AROMATIC_CODE : s.bonds[k].order;
-}
-function valid(s, k) {
-  const { a, b } = s.bonds[k];
-  const n = s.atoms.length;
-  return a >= 0 && b >= 0 && a < n && b < n && a !== b;
-}
-function csrOf(parts) {
-  let n = 0;
-  for (const p of parts) n += p.s.atoms.length;
-  const offs = new Int32Array(n + 1);
-  let base = 0;
-  for (const { s } of parts) {
-    for (let k = 0; k < s.bonds.length; k++) {
-      if (!valid(s, k)) continue;
-      offs[base + s.bonds[k].a + 1]++;
-      offs[base + s.bonds[k].b + 1]++;
-    }
-    base += s.atoms.length;
-  }
-  for (let i = 0; i < n; i++) offs[i + 1] += offs[i];
-  const adj = new Int32Array(offs[n]);
-  const code = new Int32Array(offs[n]);
-  const fill = offs.slice(0, n);
-  base = 0;
-  for (const { s, aromatic } of parts) {
-    for (let k = 0; k < s.bonds.length; k++) {
-      if (!valid(s, k)) continue;
-      const a = base + s.bonds[k].a;
-      const b = base + s.bonds[k].b;
-      const c = bondCode(s, k, aromatic);
-      adj[fill[a]] = b;
-      code[fill[a]++] = c;
-      adj[fill[b]] = a;
-      code[fill[b]++] = c;
-    }
-    base += s.atoms.length;
-  }
-  return { n, offs, adj, code };
-}
-var init_csr = __esm({
-  "src/chem/graph/csr.ts"() {
-    "use strict";
-    init_refine();
-  }
-});
-
-// src/chem/graph/prepared.ts
-function refinedPartition(p) {
-  if (!p.refined) {
-    const part = partitionOf(rankKeys([p.inv], p.inv.length));
-    new Refiner(p.csr).refine(part);
-    p.refined = part;
-  }
-  return p.refined;
-}
-function prepare(s, aromatic) {
-  const sum = checksum(s, aromatic);
-  const entries = cache.get(s);
-  const hit = entries?.find((e) => e.aromatic === aromatic && e.sum === sum);
-  if (hit) return hit.prepared;
-  const prepared = prepareFresh(s, aromatic);
-  if (entries) {
-    if (entries.length >= 4) entries.shift();
-    entries.push({ sum, aromatic, prepared });
-  } else cache.set(s, [{ sum, aromatic, prepared }]);
-  return prepared;
-}
-function checksum(s, aromatic) {
-  let h = 2654435769 ^ s.atoms.length;
-  const mix = (x) => {
-    h = Math.imul(h ^ x, 16777619);
-  };
-  for (const a of s.atoms) {
-    mix(a.atomicNumber);
-    mix(a.charge);
-    mix(a.hCount);
-    mix(a.isotope ?? -1);
-    mix(a.radical);
-  }
-  mix(s.bonds.length);
-  for (const b of s.bonds) {
-    mix(b.a);
-    mix(b.b);
-    mix(b.order);
-  }
-  if (aromatic) for (let k = 0; k < aromatic.length; k++) mix(aromatic[k] ? 1 : 2);
-  return h;
-}
-function prepareFresh(s, aromatic) {
-  const g = buildGraph(s);
-  const bridge = bridges(g, s.bonds.length);
-  const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
-  const inv = invariantsWith(s, arom, g, bridge);
-  return { s, g, aromatic: arom, inv, csr: csrOf([{ s, aromatic: arom }]) };
-}
-var cache;
-var init_prepared = __esm({
-  "src/chem/graph/prepared.ts"() {
-    "use strict";
-    init_adjacency();
-    init_aromaticity();
-    init_invariants();
-    init_csr();
-    init_refine();
-    init_rings();
-    cache = /* @__PURE__ */ new WeakMap();
-  }
-});
-
-// src/chem/graph/classes.ts
-function equivalenceClasses(s, opts = {}) {
-  const n = s.atoms.length;
-  if (n === 0) return new Int32Array(0);
-  const prep = prepare(s, opts.aromatic);
-  if (!opts.extra) return cellIndex(refinedPartition(prep));
-  const p = partitionOf(rankKeys([prep.inv, opts.extra], n));
-  new Refiner(prep.csr).refine(p);
-  return cellIndex(p);
-}
-var init_classes = __esm({
-  "src/chem/graph/classes.ts"() {
-    "use strict";
-    init_prepared();
-    init_refine();
-    init_invariants();
-  }
-});
-
-// src/chem/graph/isomorphism.ts
-function findIsomorphisms(a, b, opts) {
-  const n = a.atoms.length;
-  if (n !== b.atoms.length || validBonds(a) !== validBonds(b)) return { complete: true };
-  if (n === 0) {
-    opts.onMapping(new Int32Array(0));
-    return { complete: true };
-  }
-  const pa = prepare(a, opts.aromaticA);
-  const same = a === b && sameColours(opts.colourA, opts.colourB, n) && opts.aromaticA === opts.aromaticB;
-  const pb = same ? pa : prepare(b, opts.aromaticB);
-  const inKey = new Uint8Array(n);
-  const g1 = pa.csr;
-  if (opts.key) {
-    for (const x of opts.key) {
-      if (x < 0 || x >= n) continue;
-      inKey[x] = 1;
-      for (let e = g1.offs[x]; e < g1.offs[x + 1]; e++) inKey[g1.adj[e]] = 1;
-    }
-  } else inKey.fill(1);
-  let p;
-  let g;
-  let refiner;
-  if (same) {
-    const single = singlePartition(pa, opts.colourA, n);
-    let fixed = true;
-    for (let i = 0; i < n && fixed; i++) if (inKey[i] && single.len[single.start[i]] > 1) fixed = false;
-    if (fixed) {
-      const id = new Int32Array(n);
-      for (let i = 0; i < n; i++) id[i] = i;
-      opts.onMapping(id);
-      return { complete: true };
-    }
-    p = doubled(single, n);
-    g = unionCsr(pa.csr, pb.csr);
-    refiner = new Refiner(g, n);
-  } else {
-    g = unionCsr(pa.csr, pb.csr);
-    refiner = new Refiner(g, n);
-    const keys = [concat(pa.inv, pb.inv)];
-    if (opts.colourA || opts.colourB) {
-      const col = new Float64Array(2 * n);
-      for (let i = 0; i < n; i++) {
-        col[i] = opts.colourA ? opts.colourA[i] : 0;
-        col[n + i] = opts.colourB ? opts.colourB[i] : 0;
-      }
-      keys.push(col);
-    }
-    p = partitionOf(rankKeys(keys, 2 * n));
-    if (!refiner.balanced(p) || !refiner.refine(p)) return { complete: true };
-  }
-  const search = new Search(g, n, refiner, inKey, opts);
-  search.root = p;
-  search.run(p, opts.key ? opts.key.length > 0 : true);
-  return { complete: !search.budgetHit && !search.maxHit, nodes: search.nodes };
-}
-function singlePartition(pa, colour, n) {
-  const base = refinedPartition(pa);
-  if (colour) {
-    let constant = true;
-    for (let s = 0; s < n && constant; s += base.len[s]) {
-      const c = colour[base.lab[s]];
-      for (let t = s + 1; t < s + base.len[s]; t++) {
-        if (colour[base.lab[t]] !== c) {
-          constant = false;
-          break;
-        }
-      }
-    }
-    if (!constant) {
-      const p = partitionOf(rankKeys([pa.inv, colour], n));
-      new Refiner(pa.csr).refine(p);
-      return p;
-    }
-  }
-  return base;
-}
-function sameColours(x, y, n) {
-  if (x === y) return true;
-  if (!x || !y) return false;
-  for (let i = 0; i < n; i++) if (x[i] !== y[i]) return false;
-  return true;
-}
-function concat(x, y) {
-  const out = new Float64Array(x.length + y.length);
-  out.set(x, 0);
-  out.set(y, x.length);
-  return out;
-}
-function doubled(p, n) {
-  const lab = new Int32Array(2 * n);
-  const pos = new Int32Array(2 * n);
-  const start = new Int32Array(2 * n);
-  const len = new Int32Array(2 * n);
-  for (let s = 0; s < n; s += p.len[s]) {
-    const L = p.len[s];
-    for (let t = 0; t < L; t++) {
-      const v = p.lab[s + t];
-      lab[2 * s + t] = v;
-      lab[2 * s + L + t] = v + n;
-      pos[v] = 2 * s + t;
-      pos[v + n] = 2 * s + L + t;
-      start[v] = start[v + n] = 2 * s;
-    }
-    len[2 * s] = 2 * L;
-  }
-  return { lab, pos, start, len, cells: p.cells };
-}
-function unionCsr(x, y) {
-  const n = x.n + y.n;
-  const offs = new Int32Array(n + 1);
-  const ex = x.adj.length;
-  offs.set(x.offs, 0);
-  for (let i = 1; i <= y.n; i++) offs[x.n + i] = ex + y.offs[i];
-  const adj = new Int32Array(ex + y.adj.length);
-  adj.set(x.adj, 0);
-  for (let e = 0; e < y.adj.length; e++) adj[ex + e] = y.adj[e] + x.n;
-  const code = new Int32Array(adj.length);
-  code.set(x.code, 0);
-  code.set(y.code, ex);
-  return { n, offs, adj, code };
-}
-function isomorphic(a, b) {
-  return isomorphism(a, b).map;
-}
-function isomorphism(a, b, maxNodes) {
-  let found = null;
-  const r = findIsomorphisms(a, b, {
-    maxNodes,
-    onMapping: (m) => {
-      found = m;
-      return false;
-    }
-  });
-  return { map: found, decided: found !== null || r.complete };
-}
-function automorphisms(s, opts) {
-  const colour = opts.colour ?? opts.colourA;
-  const aromatic = opts.aromaticA ?? conjugatedRingBonds(s);
-  return findIsomorphisms(s, s, {
-    ...opts,
-    colourA: colour,
-    colourB: colour,
-    aromaticA: aromatic,
-    aromaticB: aromatic
-  });
-}
-function validBonds(s) {
-  const n = s.atoms.length;
-  let c = 0;
-  for (const b of s.bonds) if (b.a >= 0 && b.b >= 0 && b.a < n && b.b < n && b.a !== b.b) c++;
-  return c;
-}
-var NONE, FOUND, STOP, Search;
-var init_isomorphism = __esm({
-  "src/chem/graph/isomorphism.ts"() {
-    "use strict";
-    init_aromaticity();
-    init_prepared();
-    init_refine();
-    NONE = 0;
-    FOUND = 1;
-    STOP = 2;
-    Search = class {
-      constructor(g, n, refiner, inKey, opts) {
-        this.g = g;
-        this.n = n;
-        this.refiner = refiner;
-        this.inKey = inKey;
-        this.opts = opts;
-        this.maxNodes = opts.maxNodes ?? 2e4;
-        this.maxResults = opts.maxResults ?? Infinity;
-      }
-      g;
-      n;
-      refiner;
-      inKey;
-      opts;
-      nodes = 0;
-      results = 0;
-      budgetHit = false;
-      maxHit = false;
-      root = null;
-      maxNodes;
-      maxResults;
-      pool = [];
-      /** `exhaustive`: still branching over key images. Returns NONE, FOUND or STOP. */
-      run(p, exhaustive, depth = 0) {
-        const n = this.n;
-        if (p.cells === n) return this.leaf(p);
-        const { lab, len } = p;
-        let target = -1;
-        let best = Infinity;
-        if (exhaustive) {
-          for (let s = 0; s < 2 * n; s += len[s]) {
-            if (len[s] <= 2 || len[s] >= best) continue;
-            for (let t = s; t < s + len[s]; t++) {
-              if (lab[t] < n && this.inKey[lab[t]]) {
-                target = s;
-                best = len[s];
-                break;
-              }
-            }
-          }
-          if (target < 0) exhaustive = false;
-        }
-        if (target < 0) {
-          for (let s = 0; s < 2 * n; s += len[s]) {
-            if (len[s] > 2 && len[s] < best) {
-              target = s;
-              best = len[s];
-            }
-          }
-        }
-        let x = -1;
-        const ys = [];
-        for (let t = target; t < target + best; t++) {
-          const v = lab[t];
-          if (v >= n) ys.push(v);
-          else if ((!exhaustive || this.inKey[v]) && (x < 0 || v < x)) x = v;
-        }
-        ys.sort((u, v) => u - v);
-        let any = NONE;
-        for (const y of ys) {
-          if (++this.nodes > this.maxNodes) {
-            this.budgetHit = true;
-            return STOP;
-          }
-          const child = this.scratch(depth);
-          copyPartition(p, child);
-          if (!this.refiner.individualise(child, x, y)) continue;
-          const r = this.run(child, exhaustive, depth + 1);
-          if (r === STOP) return STOP;
-          if (r === FOUND) {
-            any = FOUND;
-            if (!exhaustive) return FOUND;
-          }
-        }
-        return any;
-      }
-      /** One partition per search depth, reused. */
-      scratch(depth) {
-        while (this.pool.length <= depth) this.pool.push(clonePartition(this.pool[0] ?? this.root));
-        return this.pool[depth];
-      }
-      leaf(p) {
-        const n = this.n;
-        const { offs, adj, code } = this.g;
-        const map = new Int32Array(n);
-        for (let s = 0; s < 2 * n; s += 2) {
-          const u = p.lab[s];
-          const v = p.lab[s + 1];
-          if (u < n) map[u] = v - n;
-          else map[v] = u - n;
-        }
-        for (let i = 0; i < n; i++) {
-          const bi = map[i] + n;
-          for (let e = offs[i]; e < offs[i + 1]; e++) {
-            const target = map[adj[e]] + n;
-            let ok = false;
-            for (let f = offs[bi]; f < offs[bi + 1]; f++) {
-              if (adj[f] === target && code[f] === code[e]) {
-                ok = true;
-                break;
-              }
-            }
-            if (!ok) return NONE;
-          }
-        }
-        this.results++;
-        if (this.opts.onMapping(map) === false) return STOP;
-        if (this.results >= this.maxResults) {
-          this.maxHit = true;
-          return STOP;
-        }
-        return FOUND;
-      }
-    };
-  }
-});
-
-// src/chem/graph/key.ts
-function molecularFormula(s, atoms) {
-  const counts = /* @__PURE__ */ new Map();
-  let charge = 0;
-  let h = 0;
-  let wildcards = 0;
-  const list = atoms ?? s.atoms.map((_, i) => i);
-  for (const i of list) {
-    const a = s.atoms[i];
-    if (!a) continue;
-    h += a.hCount;
-    charge += a.charge;
-    if (a.atomicNumber === 0 || a.element === "*") wildcards++;
-    else if (a.atomicNumber === 1) h++;
-    else counts.set(a.element, (counts.get(a.element) ?? 0) + 1);
-  }
-  if (h > 0) counts.set("H", h);
-  const hasC = counts.has("C");
-  const order = [...counts.keys()].sort((x, y) => {
-    if (hasC) {
-      const rank = (e) => e === "C" ? 0 : e === "H" ? 1 : 2;
-      const d = rank(x) - rank(y);
-      if (d !== 0) return d;
-    }
-    return x < y ? -1 : x > y ? 1 : 0;
-  });
-  let out = "";
-  for (const e of order) {
-    const c = counts.get(e);
-    out += c === 1 ? e : `${e}${c}`;
-  }
-  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
-  if (charge !== 0) out += `${Math.abs(charge) === 1 ? "" : Math.abs(charge)}${charge > 0 ? "+" : "-"}`;
-  return out;
-}
-function constitutionKey(s) {
-  const n = s.atoms.length;
-  const formula = molecularFormula(s);
-  if (n === 0) return `${formula}/0000000000000000`;
-  const prep = prepare(s);
-  const { inv, csr: g } = prep;
-  const p = refinedPartition(prep);
-  const cell = cellIndex(p);
-  let h1 = 2166136261;
-  let h2 = 16777619 ^ n;
-  const mix = (x) => {
-    h1 = Math.imul(h1 ^ (x | 0), 16777619);
-    h2 = Math.imul(h2 ^ (x | 0), 1540483477);
-    h2 ^= h2 >>> 13;
-  };
-  const nb = [];
-  for (let s0 = 0; s0 < n; s0 += p.len[s0]) {
-    const v = p.lab[s0];
-    mix(p.len[s0]);
-    mix(Math.floor(inv[v] / 4294967296));
-    mix(inv[v] % 4294967296);
-    nb.length = 0;
-    for (let e = g.offs[v]; e < g.offs[v + 1]; e++) nb.push(cell[g.adj[e]] * 8 + g.code[e]);
-    nb.sort((x, y) => x - y);
-    mix(nb.length);
-    for (const x of nb) mix(x);
-  }
-  const hex = (x) => (x >>> 0).toString(16).padStart(8, "0");
-  return `${formula}/${hex(h1)}${hex(h2)}`;
-}
-var init_key = __esm({
-  "src/chem/graph/key.ts"() {
-    "use strict";
-    init_prepared();
-    init_refine();
-  }
-});
-
-// src/chem/graph/index.ts
-var graph_exports = {};
-__export(graph_exports, {
-  aromaticBonds: () => aromaticBonds,
-  atomInvariants: () => atomInvariants,
-  automorphisms: () => automorphisms,
-  buildGraph: () => buildGraph,
-  componentIds: () => componentIds,
-  conjugatedRingBonds: () => conjugatedRingBonds,
-  connectedComponents: () => connectedComponents,
-  constitutionKey: () => constitutionKey,
-  equivalenceClasses: () => equivalenceClasses,
-  findIsomorphisms: () => findIsomorphisms,
-  isomorphic: () => isomorphic,
-  isomorphism: () => isomorphism,
-  molecularFormula: () => molecularFormula,
-  ringInfo: () => ringInfo
-});
-var init_graph = __esm({
-  "src/chem/graph/index.ts"() {
-    "use strict";
-    init_adjacency();
-    init_components();
-    init_rings();
-    init_aromaticity();
-    init_classes();
-    init_isomorphism();
-    init_key();
-  }
-});
-
 // src/chem/perceive-units.ts
 function mapToken(t, n, map, nOut = n) {
   if (t < n) return map[t];
@@ -5236,13 +5300,17 @@ function chiralityOf(g, x, defined) {
   const open = [];
   for (let i = 0; i < m; i++) if (!defined[i]) open.push(i);
   if (open.length === 0) {
+    if (!feasible(g, x)) return { chiral: null, witness: -1, impossible: true };
     const k = elementMapping(g, x, mirrorState(g, x));
     return { chiral: k < 0, witness: k };
   }
   let someAchiral = false;
   for (let k = 0; k < g.perms.length && !someAchiral; k++)
     someAchiral = fixedCompletionExists(g, k, x, defined, true);
-  if (!someAchiral) return { chiral: true, witness: -1 };
+  if (!someAchiral) {
+    if (!someFeasibleCompletion(g, x, defined)) return { chiral: null, witness: -1, impossible: true };
+    return { chiral: true, witness: -1 };
+  }
   if (!g.reflect.some((r) => r === 1)) return { chiral: false, witness: -1 };
   if (open.length > MAX_ENUMERATED_UNDEFINED) return { chiral: null, witness: -1 };
   const y = Uint8Array.from(x);
@@ -5252,6 +5320,13 @@ function chiralityOf(g, x, defined) {
     if (elementMapping(g, y, mirrorState(g, y)) < 0) return { chiral: null, witness: -1 };
   }
   return { chiral: false, witness: -1 };
+}
+function someFeasibleCompletion(g, x, defined) {
+  const m = x.length;
+  const u = new ParityUnion(m + 1);
+  for (const c of g.couplings) u.add(c.a, c.b, c.c);
+  for (let i = 0; i < m; i++) if (defined[i]) u.add(i, m, x[i]);
+  return u.consistent;
 }
 function stereogenicIn(g, x, k) {
   const y = Uint8Array.from(x);
@@ -5326,7 +5401,7 @@ var init_isomers = __esm({
   }
 });
 
-// ../../work/main/node_modules/openchemlib/dist/openchemlib.js
+// node_modules/openchemlib/dist/openchemlib.js
 function _S(w) {
   let Y = w.length * 0.75, vt = w.length, ot, kt = 0, C1, jt, T1, u1;
   w.at(-1) === "=" && (Y--, w.at(-2) === "=" && Y--);
@@ -27332,7 +27407,7 @@ function Prt() {
 }
 var Kl, WS, tU, R9, $2, Yl, W8t, Qw, Xl, tI, Uw, eI, Zl, Wl, a2, Lw, sw, yw, lw, eU, _l, trt, Art, E8, nrt, X0, not, Pot, rot, iot, fot, Dot, uot, Qot, oot, Uot, Lot, sot, yot, lot, hot, Tot, cot, wot, got, dot, Bot, vot, Fot, kot;
 var init_openchemlib = __esm({
-  "../../work/main/node_modules/openchemlib/dist/openchemlib.js"() {
+  "node_modules/openchemlib/dist/openchemlib.js"() {
     Kl = class {
       copyMolecule(Y) {
         let vt = Y.getIDCodeAndCoordinates();
@@ -28019,7 +28094,8 @@ function buildGraph2(s) {
     stereoCount: s.stereo.length,
     ringFixed: [],
     auxAllowed: [],
-    auxRule6: []
+    auxRule6: [],
+    isotopes: s.atoms.some((a) => a.isotope !== null)
   };
   g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
   g.auxAllowed = g.ringFixed.map((f) => !f);
@@ -28176,6 +28252,8 @@ var init_digraph = __esm({
       root;
       nextId = 0;
       count = 0;
+      /** The node budget ran out: comparisons may be wrong, so the unit gets no descriptor (label.ts). */
+      truncated = false;
       /** Index into s.stereo of the unit being labelled: its own nodes carry no auxiliary descriptor. */
       rootElement;
       /** Proposed Rule 6 reference atom (Hanson et al. 2018), or -1 when unset. */
@@ -28208,7 +28286,11 @@ var init_digraph = __esm({
         if (node.kids) return node.kids;
         const out = [];
         node.kids = out;
-        if (node.dup || node.atom < 0 || this.count > NODE_BUDGET) return out;
+        if (node.dup || node.atom < 0) return out;
+        if (this.count > NODE_BUDGET) {
+          this.truncated = true;
+          return out;
+        }
         const g = this.g;
         const a = node.atom;
         const parent = node.parent;
@@ -28307,11 +28389,11 @@ function descriptors(rk, x, fx) {
   const qk = [[]];
   for (let i = 0; i < q.length; i++) {
     const n = q[i];
-    if (!n.dup && n.atom >= 0 && rk.value(RULE_4A, n) === 2) {
+    if (!n.dup && n.atom >= 0 && rk.value(RULE_4A2, n) === 2) {
       const l = rk.aux(n);
-      if (l !== null && isChiralLabel(l)) out.push({ label: l, key: [qk[i].length, ...qk[i]], group: 0 });
+      if (l !== null && isChiralLabel2(l)) out.push({ label: l, key: [qk[i].length, ...qk[i]], group: 0 });
     }
-    const s = rk.sorted(n, qf[i], RULE_4A);
+    const s = rk.sorted(n, qf[i], RULE_4A2);
     let pos = 0;
     for (let j = 0; j < s.nodes.length; j++) {
       if (!s.tie[j]) pos = j;
@@ -28328,10 +28410,18 @@ function descriptors(rk, x, fx) {
   }
   return out;
 }
+function allLeaves(nodes, a, b) {
+  for (let k = a; k < b; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
+  return true;
+}
+function own(rk, n, refClass) {
+  const l = chiralLabel(rk, n);
+  return l === null ? 0 : likeClass2(l) === refClass ? 2 : 1;
+}
 function chiralLabel(rk, n) {
-  if (n.dup || n.atom < 0 || rk.value(RULE_4A, n) !== 2) return null;
+  if (n.dup || n.atom < 0 || rk.value(RULE_4A2, n) !== 2) return null;
   const l = rk.aux(n);
-  return l !== null && isChiralLabel(l) ? l : null;
+  return l !== null && isChiralLabel2(l) ? l : null;
 }
 function orderedPairs(rk, x, fx, refClass, memo) {
   const hit = memo.get(x);
@@ -28339,23 +28429,19 @@ function orderedPairs(rk, x, fx, refClass, memo) {
   const seq = [];
   const q = [x];
   const qf = [fx];
-  const own = (n) => {
-    const l = chiralLabel(rk, n);
-    return l === null ? 0 : likeClass(l) === refClass ? 2 : 1;
-  };
   for (let i = 0; i < q.length; i++) {
     const n = q[i];
     const l = chiralLabel(rk, n);
-    if (l !== null) seq.push(likeClass(l) === refClass ? 1 : 0);
-    const s = rk.sorted(n, qf[i], RULE_4A);
+    if (l !== null) seq.push(likeClass2(l) === refClass ? 1 : 0);
+    const s = rk.sorted(n, qf[i], RULE_4A2);
     const nodes = s.nodes.slice();
     for (let a = 0; a < nodes.length; ) {
       let b = a + 1;
       while (b < nodes.length && s.tie[b]) b++;
-      if (b - a > 1) {
+      if (b - a > 1 && !allLeaves(nodes, a, b)) {
         const run11 = nodes.slice(a, b);
         run11.sort(
-          (u, v) => own(v) - own(u) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo))
+          (u, v) => own(rk, v, refClass) - own(rk, u, refClass) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo))
         );
         for (let k = a; k < b; k++) nodes[k] = run11[k - a];
       }
@@ -28381,7 +28467,7 @@ function bestPairs(rk, x, fx) {
   const classes = /* @__PURE__ */ new Set();
   for (const e of entries) {
     if (e.group !== first) break;
-    classes.add(likeClass(e.label));
+    classes.add(likeClass2(e.label));
   }
   let best = null;
   for (const cls of classes) {
@@ -28394,10 +28480,14 @@ function compareRule4b(rk, x, fx, y, fy) {
   const c = lexCompare(bestPairs(rk, x, fx), bestPairs(rk, y, fy));
   return c > 0 ? 1 : c < 0 ? -1 : 0;
 }
+var RULE_4A2, isChiralLabel2, likeClass2;
 var init_rule4b = __esm({
   "src/chem/cip/rule4b.ts"() {
     "use strict";
     init_rules();
+    RULE_4A2 = RULE_4A;
+    isChiralLabel2 = isChiralLabel;
+    likeClass2 = likeClass;
   }
 });
 
@@ -28407,7 +28497,7 @@ function invertChiral(l) {
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A2, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, Ranker, EMPTY;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A3, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, Ranker, EMPTY;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
@@ -28418,7 +28508,7 @@ var init_compare = __esm({
     RULE_1B = 1;
     RULE_2 = 2;
     RULE_3 = 3;
-    RULE_4A2 = 4;
+    RULE_4A3 = 4;
     RULE_4B = 5;
     RULE_4C = 6;
     RULE_52 = 7;
@@ -28438,11 +28528,10 @@ var init_compare = __esm({
         this.scope = dg.root;
         const g = dg.g;
         const several = g.stereoCount > 1;
-        const isotopes = g.s.atoms.some((a) => a.isotope !== null);
         this.active = [
           true,
           true,
-          isotopes,
+          g.isotopes,
           g.hasBondStereo && several,
           several,
           several,
@@ -28467,6 +28556,8 @@ var init_compare = __esm({
        * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
        */
       mirror = false;
+      /** Rule 4b sequences per branch (rule4b.ts). */
+      memo4b = /* @__PURE__ */ new Map();
       depth = 0;
       pool = [];
       /** Is `n` the scope node or farther out on its branch? */
@@ -28508,7 +28599,7 @@ var init_compare = __esm({
             return rule22(n);
           case RULE_3:
             return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule32(this.aux(n));
-          case RULE_4A2:
+          case RULE_4A3:
             return this.stereoValue(n, rule4a2);
           case RULE_4C:
             return this.stereoValue(n, rule4c2);
@@ -28960,10 +29051,13 @@ var init_aux = __esm({
 });
 
 // src/chem/cip/label.ts
-function ranker(g, root, element, ref) {
-  const dg = new Digraph(g, root, element);
-  const rk = newRanker(dg);
-  if (ref >= 0) rk.setRule6(ref);
+function ranker(g, root, element, ref, cache2) {
+  let rk = cache2?.get(root);
+  if (rk === void 0) {
+    rk = newRanker(new Digraph(g, root, element));
+    cache2?.set(root, rk);
+  }
+  rk.setRule6(ref);
   return rk;
 }
 function towardOther(g, end, other) {
@@ -28972,12 +29066,13 @@ function towardOther(g, end, other) {
   for (let i = 0; i < nb.length; i++) if (g.ord[end][i] >= 2) return nb[i];
   return -1;
 }
-function tetrahedral2(g, index, e, ref) {
-  const rk = ranker(g, e.centre, index, ref);
-  return tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
+function tetrahedral2(g, index, e, ref, c) {
+  const rk = ranker(g, e.centre, index, ref, c);
+  const l = tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
+  return rk.dg.truncated ? null : l;
 }
-function tiedTetrahedral(g, index, e) {
-  const rk = ranker(g, e.centre, index, -1);
+function tiedTetrahedral(g, index, e, c) {
+  const rk = ranker(g, e.centre, index, -1, c);
   const used = /* @__PURE__ */ new Set();
   const ligs = [];
   for (const l of e.ligands) {
@@ -28995,32 +29090,33 @@ function tiedTetrahedral(g, index, e) {
   }
   return out;
 }
-function doubleBond(g, index, e, ref) {
+function doubleBond(g, index, e, ref, c) {
   const level2 = ref >= 0 ? RULE_6 : RULE_5;
   const high = [];
   for (let i = 0; i < 2; i++) {
     const end = e.ends[i];
     const excl = towardOther(g, end, e.ends[1 - i]);
-    const rk = ranker(g, end, index, ref);
+    const rk = ranker(g, end, index, ref, c);
     const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level2);
-    if (h === null) return null;
+    if (h === null || rk.dg.truncated) return null;
     high.push(h);
   }
   return ezLabel(e, high[0], high[1]);
 }
-function axial(g, index, e, ref) {
+function axial(g, index, e, ref, c) {
   const level2 = ref >= 0 ? RULE_6 : RULE_5;
-  const r0 = ranker(g, e.ends[0], index, ref);
-  const r1 = ranker(g, e.ends[1], index, ref);
-  return axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level2);
+  const r0 = ranker(g, e.ends[0], index, ref, c);
+  const r1 = ranker(g, e.ends[1], index, ref, c);
+  const l = axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level2);
+  return r0.dg.truncated || r1.dg.truncated ? null : l;
 }
-function labelWith(g, index, e, ref) {
-  if (e.kind === "tetrahedral") return tetrahedral2(g, index, e, ref);
-  if (e.kind === "double-bond") return doubleBond(g, index, e, ref);
-  return axial(g, index, e, ref);
+function labelWith(g, index, e, ref, c) {
+  if (e.kind === "tetrahedral") return tetrahedral2(g, index, e, ref, c);
+  if (e.kind === "double-bond") return doubleBond(g, index, e, ref, c);
+  return axial(g, index, e, ref, c);
 }
-function rule6Candidates(g, index, e) {
-  if (e.kind === "tetrahedral") return tiedTetrahedral(g, index, e);
+function rule6Candidates(g, index, e, c) {
+  if (e.kind === "tetrahedral") return tiedTetrahedral(g, index, e, c);
   if (e.kind === "double-bond") {
     const out = [];
     for (let i = 0; i < 2; i++) {
@@ -29039,8 +29135,9 @@ function labelRule6(g, index) {
   if (g.ringFixed[index]) return null;
   const e = g.s.stereo[index];
   const found = /* @__PURE__ */ new Set();
-  for (const ref of rule6Candidates(g, index, e)) {
-    const l = labelWith(g, index, e, ref);
+  const cache2 = /* @__PURE__ */ new Map();
+  for (const ref of rule6Candidates(g, index, e, cache2)) {
+    const l = labelWith(g, index, e, ref, cache2);
     if (l !== null) found.add(l);
   }
   return found.size === 1 ? [...found][0] : null;
@@ -29844,6 +29941,13 @@ function mirrorFacts(a) {
   const s = p.structure;
   const none = { fixedAtoms: [], fixedBonds: [] };
   const hasUndefined = a.defined.some((d, k) => d === 0 && a.reported[k]);
+  if (chirality.impossible) {
+    return {
+      chiral: null,
+      ...none,
+      explanation: "open: the configurations drawn cannot all hold (see the remarks), so the drawing is no stereoisomer to call chiral or achiral"
+    };
+  }
   if (chirality.chiral === null) {
     return {
       chiral: null,
@@ -29938,199 +30042,6 @@ var init_isomers_list = __esm({
   }
 });
 
-// src/chem/describe.ts
-function analyse(input) {
-  const norm = normalize(input);
-  const p = perceive(norm.structure);
-  const group = unitGroup(p);
-  const m = p.units.length;
-  const state = Uint8Array.from(p.units, (u) => u.bit);
-  const defined = Uint8Array.from(p.units, (u) => u.defined ? 1 : 0);
-  const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
-  for (let k = 0; k < m; k++) {
-    if (!reported[k] && p.units[k].defined && p.structure.dimension !== 3) {
-      p.remarks.push(
-        `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
-      );
-    }
-  }
-  if (!group.complete)
-    p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
-  const chirality = chiralityOf(group, state, defined);
-  return { norm, p, group, state, defined, reported, chirality };
-}
-function stereogenicSomewhere(g, x, defined, k) {
-  if (g.perms.length === 1) return true;
-  const open = [];
-  for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
-  if (open.length > 10) return true;
-  const y = Uint8Array.from(x);
-  let seenFeasible = false;
-  for (let mask = 0; mask < 1 << open.length; mask++) {
-    for (let b = 0; b < open.length; b++) y[open[b]] = mask >> b & 1;
-    if (!feasible(g, y)) continue;
-    seenFeasible = true;
-    if (stereogenicIn(g, y, k)) return true;
-  }
-  return !seenFeasible;
-}
-function unitName(p, k) {
-  const u = p.units[k];
-  const s = p.structure;
-  return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
-}
-function describe(input, opts = {}) {
-  const a = analyse(input);
-  const { p, group } = a;
-  const s = p.structure;
-  const labels = /* @__PURE__ */ new Map();
-  if (s.stereo.length > 0) {
-    for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
-  }
-  const units = unitFacts(a, labels);
-  const stereoisomers = countStereoisomers(group, p.units.length);
-  const chiral = a.chirality.chiral;
-  const meso = chiral === null ? null : chiral === false && stereoisomers.chiral > 0;
-  const components = componentFacts(a);
-  const facts = {
-    stereocenters: units.filter((u) => u.kind === "tetrahedral").map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
-    stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({
-      atoms: [u.atoms[0], u.atoms[1]],
-      label: u.label,
-      kind: u.kind,
-      defined: u.defined
-    })),
-    units,
-    chiral,
-    meso,
-    undefined: units.filter((u) => !u.defined).length,
-    stereoisomers,
-    mirror: mirrorFacts(a),
-    enhanced: enhancedFacts(a),
-    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({
-      atom: s.atoms[i].inputNumber,
-      drawnWithStereo: true
-    })),
-    components,
-    constitutionKey: constitutionKey(s),
-    formula: components.length === 1 ? components[0].formula : molecularFormula(s),
-    remarks: p.remarks.slice()
-  };
-  if (p.invertibleNitrogens.length > 0 && units.length === 0) {
-    facts.remarks.push(
-      "the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre"
-    );
-  }
-  if (opts.listIsomers) facts.stereoisomerList = listStereoisomers(a, opts.maxIsomers ?? 64);
-  return facts;
-}
-function unitFacts(a, labels) {
-  const { p, group, state } = a;
-  const s = p.structure;
-  const classIds = /* @__PURE__ */ new Map();
-  const groupOf = /* @__PURE__ */ new Map();
-  for (const g of s.groups) for (const x of g.atoms) groupOf.set(x, { type: g.type, id: g.id });
-  const fullyDefined = a.defined.every((d) => d === 1);
-  const out = [];
-  p.units.forEach((u, k) => {
-    if (!a.reported[k]) return;
-    const ck = u.atoms.map((x) => p.classes[x]).sort((x, y) => x - y).join(",") + u.kind;
-    if (!classIds.has(ck)) classIds.set(ck, classIds.size);
-    const label = u.defined ? labels.get(unitKey(u.atoms)) ?? null : null;
-    let pseudo = label !== null && label === label.toLowerCase();
-    if (fullyDefined && u.mode === "parity" && !pseudo) {
-      pseudo = group.perms.some((perm, h) => perm[k] === k && mirrorFixed(group, h, state));
-    }
-    out.push({
-      kind: u.kind,
-      atoms: u.atoms.map((x) => s.atoms[x].inputNumber),
-      element: s.atoms[u.atoms[0]].element,
-      defined: u.defined,
-      label,
-      pseudoasymmetric: pseudo,
-      locants: u.atoms.map((x) => s.atoms[x].mapNumber),
-      group: groupOf.get(u.atoms[0]) ?? null,
-      equivalenceClass: classIds.get(ck),
-      component: p.componentOfAtom[u.atoms[0]]
-    });
-  });
-  return out;
-}
-function mirrorFixed(g, h, x) {
-  const perm = g.perms[h];
-  const flip2 = g.flips[h];
-  for (let i = 0; i < x.length; i++) if ((x[i] ^ flip2[i] ^ g.reflect[i]) !== x[perm[i]]) return false;
-  return true;
-}
-function enhancedFacts(a) {
-  const s = a.p.structure;
-  const groups = s.groups.map((g) => ({
-    type: g.type,
-    id: g.id,
-    atoms: g.atoms.map((x) => s.atoms[x].inputNumber)
-  }));
-  const definedParity = a.p.units.filter((u, k) => u.defined && u.mode === "parity" && a.reported[k]);
-  if (definedParity.length === 0 && !a.p.units.some((u) => u.defined)) return { groups, meaning: "none" };
-  if (definedParity.length === 0) return { groups, meaning: "absolute" };
-  const member = /* @__PURE__ */ new Map();
-  for (const g of s.groups)
-    for (const x of g.atoms) member.set(x, g.type === "abs" ? "abs" : `${g.type}${g.id}`);
-  const kinds = new Set(definedParity.map((u) => member.get(u.atoms[0]) ?? "abs"));
-  if (s.groups.length === 0) return { groups, meaning: s.chiralFlag === false ? "relative" : "absolute" };
-  const list = [...kinds];
-  if (list.length === 1 && list[0] === "abs") return { groups, meaning: "absolute" };
-  if (list.length === 1 && list[0].startsWith("and")) return { groups, meaning: "racemic" };
-  if (list.length === 1 && list[0].startsWith("or")) return { groups, meaning: "relative" };
-  if (list.every((k) => k.startsWith("and"))) return { groups, meaning: "mixture" };
-  return { groups, meaning: "mixed" };
-}
-function parentComponent(s, comps) {
-  const organic = (c) => c.some((x) => s.atoms[x].atomicNumber === 6);
-  let parent = -1;
-  comps.forEach((c, k) => {
-    const better = parent < 0 || organic(c) && !organic(comps[parent]) || organic(c) === organic(comps[parent]) && c.length > comps[parent].length;
-    if (better) parent = k;
-  });
-  return parent;
-}
-function componentFacts(a) {
-  const s = a.p.structure;
-  const comps = a.p.components;
-  const parent = parentComponent(s, comps);
-  const single = comps.length === 1;
-  return comps.map((c, k) => {
-    const f = {
-      index: k,
-      formula: single ? molecularFormula(s) : molecularFormula(s, c),
-      heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
-      role: k === parent ? "parent" : "other"
-    };
-    let smiles = null;
-    Object.defineProperty(f, "smiles", {
-      get: () => smiles ??= writeSmiles(single ? s : extractAtoms(s, c)),
-      enumerable: true
-    });
-    return f;
-  });
-}
-var unitKey;
-var init_describe = __esm({
-  "src/chem/describe.ts"() {
-    "use strict";
-    init_graph();
-    init_isomers();
-    init_labels();
-    init_normalize();
-    init_perceive();
-    init_perceive_input();
-    init_symmetry();
-    init_symmetry_evidence();
-    init_isomers_list();
-    init_smiles2();
-    unitKey = (atoms) => [...atoms].sort((a, b) => a - b).join(",");
-  }
-});
-
 // src/chem/relate.ts
 function side(s) {
   const whole = analyse(s);
@@ -30138,7 +30049,8 @@ function side(s) {
   const comps = whole.p.components;
   const k = parentComponent(ns, comps);
   const parent = comps.length <= 1 ? whole : analyse(extractAtoms(ns, comps[k] ?? []));
-  const others2 = comps.filter((_c, i) => i !== k).map((c) => {
+  const copies = parentCopies(ns, comps, k);
+  const others2 = comps.filter((_c, i) => i !== k && !copies.includes(i)).map((c) => {
     const sub3 = extractAtoms(ns, c);
     return { key: constitutionKey(sub3), smiles: writeSmiles(sub3), structure: sub3 };
   });
@@ -30253,11 +30165,30 @@ function relate(sa, sb) {
   const perm = g.perms[bestH];
   const aOf = new Int32Array(mB).fill(-1);
   for (let j = 0; j < mB; j++) if (fromA[j] >= 0) aOf[perm[j]] = fromA[j];
-  const differingUnits = best.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
-  const epimers = differingUnits.length === 1 && differingUnits[0].kind === "tetrahedral" && pb.p.units.filter((u, j) => u.mode === "parity" && pb.reported[j]).length >= 2;
-  const names = best.map((j) => unitName(pb.p, j)).join(", ");
-  const explanation = epimers ? `epimers: diastereomers differing only at ${names} (numbered as in B)${salt}` : `diastereomers: configurations differ at ${names} (numbered as in B)${salt}`;
+  const keyOf = (xs) => [...xs].sort((p, q) => p - q).join(",");
+  const differ = new Set(best);
+  for (let j = 0; j < mB; j++) {
+    if (differ.has(j) || aOf[j] < 0 || !pb.reported[j]) continue;
+    const la = labA.get(keyOf(pa.p.units[aOf[j]].atoms)) ?? null;
+    const lb = labB.get(keyOf(pb.p.units[j].atoms)) ?? null;
+    if (la !== null && lb !== null && la !== lb) differ.add(j);
+  }
+  const listed = [...differ].sort((p, q) => p - q);
+  const differingUnits = listed.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
+  const epimers = listed.length === 1 && differingUnits.length === 1 && differingUnits[0].kind === "tetrahedral" && pb.p.units.filter((u, j) => u.mode === "parity" && pb.reported[j]).length >= 2;
+  const names = listed.map((j) => {
+    const d = differingUnits.find(
+      (u) => keyOf(u.atomsB) === keyOf(pb.p.units[j].atoms.map((x) => pb.p.structure.atoms[x].inputNumber))
+    );
+    const change = d && d.labelA && d.labelB && d.labelA !== d.labelB ? ` (${d.labelA} in A, ${d.labelB} in B)` : "";
+    return `${unitWords(pb.p.structure, pb.p.units[j].atoms)}${change}`;
+  }).join(", ");
+  const explanation = epimers ? `epimers: diastereomers differing only at ${names} (atoms numbered as in B)${salt}` : `diastereomers: differing at ${names} (atoms numbered as in B)${salt}`;
   return { ...base, relation: "diastereomers", differingUnits, epimers, explanation };
+}
+function unitWords(s, atoms) {
+  const one = (i) => `atom ${s.atoms[i].inputNumber} (${s.atoms[i].element})`;
+  return atoms.length === 1 ? one(atoms[0]) : `the unit between ${one(atoms[0])} and ${one(atoms[1])}`;
 }
 var labelMap;
 var init_relate = __esm({
@@ -30270,12 +30201,296 @@ var init_relate = __esm({
     init_perceive_units();
     init_symmetry();
     init_smiles2();
+    init_copies();
     labelMap = (a) => {
       const m = /* @__PURE__ */ new Map();
       for (const r of labelUnits(a.p.structure))
         if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
       return m;
     };
+  }
+});
+
+// src/chem/copies.ts
+function parentCopies(s, comps, parent) {
+  if (parent < 0 || comps.length < 2) return [];
+  const ps = extractAtoms(s, comps[parent]);
+  const key3 = constitutionKey(ps);
+  const out = [];
+  comps.forEach((c, k) => {
+    if (k === parent || c.length !== comps[parent].length) return;
+    const cs = extractAtoms(s, c);
+    if (constitutionKey(cs) !== key3) return;
+    if (ps.stereo.length + cs.stereo.length === 0 || relate(ps, cs).relation === "identical") out.push(k);
+  });
+  return out;
+}
+function withoutCopies(s, comps, copies) {
+  const drop = new Set(copies);
+  const atoms = comps.filter((_c, k) => !drop.has(k)).flat().sort((x, y) => x - y);
+  return extractAtoms(s, atoms);
+}
+var init_copies = __esm({
+  "src/chem/copies.ts"() {
+    "use strict";
+    init_graph();
+    init_normalize();
+    init_relate();
+  }
+});
+
+// src/chem/planar-ring.ts
+function transMediumRingBonds(p) {
+  const s = p.structure;
+  const out = [];
+  for (const e of s.stereo) {
+    if (e.kind !== "double-bond") continue;
+    const [a, b] = e.ends;
+    const bond = s.bonds.findIndex((x) => x.a === a && x.b === b || x.a === b && x.b === a);
+    const size = bond >= 0 ? p.rings.smallestRingOfBond[bond] : 0;
+    if (size < 8 || size > 11) continue;
+    const ring = p.rings.rings.find((r) => r.length === size && ringAdjacent(r, a, b));
+    if (!ring) continue;
+    const ringNbr = (x, other) => {
+      const k = ring.indexOf(x);
+      const prev = ring[(k + ring.length - 1) % ring.length];
+      const next = ring[(k + 1) % ring.length];
+      return prev === other ? next : prev;
+    };
+    let trans = e.relation === "trans";
+    if (e.refs[0] !== ringNbr(a, b)) trans = !trans;
+    if (e.refs[1] !== ringNbr(b, a)) trans = !trans;
+    if (trans) out.push({ atoms: [a, b], ringSize: size });
+  }
+  return out;
+}
+function ringAdjacent(r, a, b) {
+  const k = r.indexOf(a);
+  if (k < 0) return false;
+  return r[(k + 1) % r.length] === b || r[(k + r.length - 1) % r.length] === b;
+}
+var init_planar_ring = __esm({
+  "src/chem/planar-ring.ts"() {
+    "use strict";
+  }
+});
+
+// src/chem/describe.ts
+function analyse(input) {
+  const norm = normalize(input);
+  const p = perceive(norm.structure);
+  const group = unitGroup(p);
+  const m = p.units.length;
+  const state = Uint8Array.from(p.units, (u) => u.bit);
+  const defined = Uint8Array.from(p.units, (u) => u.defined ? 1 : 0);
+  const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
+  for (let k = 0; k < m; k++) {
+    if (!reported[k] && p.units[k].defined && p.structure.dimension !== 3) {
+      p.remarks.push(
+        `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
+      );
+    }
+  }
+  if (!group.complete)
+    p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
+  const chirality = chiralityOf(group, state, defined);
+  return { norm, p, group, state, defined, reported, chirality };
+}
+function stereogenicSomewhere(g, x, defined, k) {
+  if (g.perms.length === 1) return true;
+  const open = [];
+  for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
+  if (open.length > 10) return true;
+  const y = Uint8Array.from(x);
+  let seenFeasible = false;
+  for (let mask = 0; mask < 1 << open.length; mask++) {
+    for (let b = 0; b < open.length; b++) y[open[b]] = mask >> b & 1;
+    if (!feasible(g, y)) continue;
+    seenFeasible = true;
+    if (stereogenicIn(g, y, k)) return true;
+  }
+  return !seenFeasible;
+}
+function unitName(p, k) {
+  const u = p.units[k];
+  const s = p.structure;
+  return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
+}
+function describe(input, opts = {}) {
+  const a = analyse(input);
+  const { p, group } = a;
+  const s = p.structure;
+  const labels = /* @__PURE__ */ new Map();
+  if (s.stereo.length > 0) {
+    for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
+  }
+  const units = unitFacts(a, labels);
+  const comps = p.components;
+  const parentIndex = parentComponent(s, comps);
+  const copies = parentCopies(s, comps, parentIndex);
+  const counted = copies.length > 0 ? analyse(withoutCopies(s, comps, copies)) : a;
+  const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
+  const planar = transMediumRingBonds(counted.p);
+  const chiral = planar.length > 0 ? null : counted.chirality.chiral;
+  const meso = chiral === null ? null : chiral === false && stereoisomers.chiral > 0 && stereoisomers.meso > 0;
+  const components = componentFacts(a, parentIndex, copies);
+  const facts = {
+    stereocenters: units.filter((u) => u.kind === "tetrahedral").map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
+    stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({
+      atoms: [u.atoms[0], u.atoms[1]],
+      label: u.label,
+      kind: u.kind,
+      defined: u.defined
+    })),
+    units,
+    chiral,
+    meso,
+    undefined: units.filter((u) => !u.defined).length,
+    stereoisomers,
+    mirror: mirrorFacts(counted),
+    enhanced: enhancedFacts(a),
+    invertibleNitrogens: p.invertibleNitrogens.map((i) => ({
+      atom: s.atoms[i].inputNumber,
+      drawnWithStereo: true
+    })),
+    components,
+    constitutionKey: constitutionKey(s),
+    formula: components.length === 1 ? components[0].formula : molecularFormula(s),
+    remarks: p.remarks.slice()
+  };
+  for (const b of planar) {
+    const [x, y] = b.atoms.map((i) => counted.p.structure.atoms[i].inputNumber);
+    facts.remarks.push(
+      `the trans double bond between atoms ${x} and ${y} lies in a ring of ${b.ringSize} atoms, which makes the molecule planar chiral (as (E)-cyclooctene); planar chirality is not modelled, so chirality is left open and the stereoisomer count leaves it out`
+    );
+  }
+  if (planar.length > 0) {
+    facts.mirror = {
+      chiral: null,
+      fixedAtoms: [],
+      fixedBonds: [],
+      explanation: "open: a trans double bond in a ring of 8–11 atoms is planar chiral, which is not modelled"
+    };
+  }
+  if (copies.length > 0) {
+    facts.remarks.push(
+      `${copies.length + 1} identical copies of the parent (${components[parentIndex].formula}): stereoisomer counts and chirality are those of one copy`
+    );
+  }
+  if (p.invertibleNitrogens.length > 0 && units.length === 0) {
+    facts.remarks.push(
+      "the only configuration drawn is on an invertible amine nitrogen: the structure has no stereocentre"
+    );
+  }
+  if (opts.listIsomers) facts.stereoisomerList = listStereoisomers(a, opts.maxIsomers ?? 64);
+  return facts;
+}
+function unitFacts(a, labels) {
+  const { p, group, state } = a;
+  const s = p.structure;
+  const classIds = /* @__PURE__ */ new Map();
+  const groupOf = /* @__PURE__ */ new Map();
+  for (const g of s.groups) for (const x of g.atoms) groupOf.set(x, { type: g.type, id: g.id });
+  const fullyDefined = a.defined.every((d) => d === 1);
+  const out = [];
+  p.units.forEach((u, k) => {
+    if (!a.reported[k]) return;
+    const ck = u.atoms.map((x) => p.classes[x]).sort((x, y) => x - y).join(",") + u.kind;
+    if (!classIds.has(ck)) classIds.set(ck, classIds.size);
+    const label = u.defined ? labels.get(unitKey(u.atoms)) ?? null : null;
+    let pseudo = label !== null && label === label.toLowerCase();
+    if (fullyDefined && u.mode === "parity" && !pseudo) {
+      pseudo = group.perms.some((perm, h) => perm[k] === k && mirrorFixed(group, h, state));
+    }
+    out.push({
+      kind: u.kind,
+      atoms: u.atoms.map((x) => s.atoms[x].inputNumber),
+      element: s.atoms[u.atoms[0]].element,
+      defined: u.defined,
+      label,
+      pseudoasymmetric: pseudo,
+      locants: u.atoms.map((x) => s.atoms[x].mapNumber),
+      group: groupOf.get(u.atoms[0]) ?? null,
+      equivalenceClass: classIds.get(ck),
+      component: p.componentOfAtom[u.atoms[0]]
+    });
+  });
+  return out;
+}
+function mirrorFixed(g, h, x) {
+  const perm = g.perms[h];
+  const flip2 = g.flips[h];
+  for (let i = 0; i < x.length; i++) if ((x[i] ^ flip2[i] ^ g.reflect[i]) !== x[perm[i]]) return false;
+  return true;
+}
+function enhancedFacts(a) {
+  const s = a.p.structure;
+  const groups = s.groups.map((g) => ({
+    type: g.type,
+    id: g.id,
+    atoms: g.atoms.map((x) => s.atoms[x].inputNumber)
+  }));
+  const definedParity = a.p.units.filter((u, k) => u.defined && u.mode === "parity" && a.reported[k]);
+  if (definedParity.length === 0 && !a.p.units.some((u) => u.defined)) return { groups, meaning: "none" };
+  if (definedParity.length === 0) return { groups, meaning: "absolute" };
+  const member = /* @__PURE__ */ new Map();
+  for (const g of s.groups)
+    for (const x of g.atoms) member.set(x, g.type === "abs" ? "abs" : `${g.type}${g.id}`);
+  const kinds = new Set(definedParity.map((u) => member.get(u.atoms[0]) ?? "abs"));
+  if (s.groups.length === 0) return { groups, meaning: s.chiralFlag === false ? "relative" : "absolute" };
+  const list = [...kinds];
+  if (list.length === 1 && list[0] === "abs") return { groups, meaning: "absolute" };
+  if (list.length === 1 && list[0].startsWith("and")) return { groups, meaning: "racemic" };
+  if (list.length === 1 && list[0].startsWith("or")) return { groups, meaning: "relative" };
+  if (list.every((k) => k.startsWith("and"))) return { groups, meaning: "mixture" };
+  return { groups, meaning: "mixed" };
+}
+function parentComponent(s, comps) {
+  const organic = (c) => c.some((x) => s.atoms[x].atomicNumber === 6);
+  let parent = -1;
+  comps.forEach((c, k) => {
+    const better = parent < 0 || organic(c) && !organic(comps[parent]) || organic(c) === organic(comps[parent]) && c.length > comps[parent].length;
+    if (better) parent = k;
+  });
+  return parent;
+}
+function componentFacts(a, parent, copies) {
+  const s = a.p.structure;
+  const comps = a.p.components;
+  const single = comps.length === 1;
+  return comps.map((c, k) => {
+    const f = {
+      index: k,
+      formula: single ? molecularFormula(s) : molecularFormula(s, c),
+      heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
+      role: k === parent || copies.includes(k) ? "parent" : "other",
+      ...copies.length > 0 && (k === parent || copies.includes(k)) ? { copies: copies.length + 1 } : {}
+    };
+    let smiles = null;
+    Object.defineProperty(f, "smiles", {
+      get: () => smiles ??= writeSmiles(single ? s : extractAtoms(s, c)),
+      enumerable: true
+    });
+    return f;
+  });
+}
+var unitKey;
+var init_describe = __esm({
+  "src/chem/describe.ts"() {
+    "use strict";
+    init_graph();
+    init_isomers();
+    init_labels();
+    init_normalize();
+    init_perceive();
+    init_perceive_input();
+    init_symmetry();
+    init_symmetry_evidence();
+    init_isomers_list();
+    init_copies();
+    init_planar_ring();
+    init_smiles2();
+    unitKey = (atoms) => [...atoms].sort((a, b) => a - b).join(",");
   }
 });
 
@@ -30313,9 +30528,9 @@ var init_chem = __esm({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/identity.js
+// node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/identity.js"(exports) {
+  "node_modules/yaml/dist/nodes/identity.js"(exports) {
     "use strict";
     var ALIAS = /* @__PURE__ */ Symbol.for("yaml.alias");
     var DOC = /* @__PURE__ */ Symbol.for("yaml.document");
@@ -30370,9 +30585,9 @@ var require_identity = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/visit.js
+// node_modules/yaml/dist/visit.js
 var require_visit = __commonJS({
-  "../../work/main/node_modules/yaml/dist/visit.js"(exports) {
+  "node_modules/yaml/dist/visit.js"(exports) {
     "use strict";
     var identity = require_identity();
     var BREAK = /* @__PURE__ */ Symbol("break visit");
@@ -30528,9 +30743,9 @@ var require_visit = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/doc/directives.js
+// node_modules/yaml/dist/doc/directives.js
 var require_directives = __commonJS({
-  "../../work/main/node_modules/yaml/dist/doc/directives.js"(exports) {
+  "node_modules/yaml/dist/doc/directives.js"(exports) {
     "use strict";
     var identity = require_identity();
     var visit = require_visit();
@@ -30699,9 +30914,9 @@ var require_directives = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/doc/anchors.js
+// node_modules/yaml/dist/doc/anchors.js
 var require_anchors = __commonJS({
-  "../../work/main/node_modules/yaml/dist/doc/anchors.js"(exports) {
+  "node_modules/yaml/dist/doc/anchors.js"(exports) {
     "use strict";
     var identity = require_identity();
     var visit = require_visit();
@@ -30769,9 +30984,9 @@ var require_anchors = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/doc/applyReviver.js
+// node_modules/yaml/dist/doc/applyReviver.js
 var require_applyReviver = __commonJS({
-  "../../work/main/node_modules/yaml/dist/doc/applyReviver.js"(exports) {
+  "node_modules/yaml/dist/doc/applyReviver.js"(exports) {
     "use strict";
     function applyReviver(reviver, obj, key3, val) {
       if (val && typeof val === "object") {
@@ -30819,9 +31034,9 @@ var require_applyReviver = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/toJS.js
+// node_modules/yaml/dist/nodes/toJS.js
 var require_toJS = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/toJS.js"(exports) {
+  "node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
     function toJS(value, arg, ctx) {
@@ -30849,9 +31064,9 @@ var require_toJS = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/Node.js
+// node_modules/yaml/dist/nodes/Node.js
 var require_Node = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/Node.js"(exports) {
+  "node_modules/yaml/dist/nodes/Node.js"(exports) {
     "use strict";
     var applyReviver = require_applyReviver();
     var identity = require_identity();
@@ -30890,9 +31105,9 @@ var require_Node = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/Alias.js
+// node_modules/yaml/dist/nodes/Alias.js
 var require_Alias = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/Alias.js"(exports) {
+  "node_modules/yaml/dist/nodes/Alias.js"(exports) {
     "use strict";
     var anchors = require_anchors();
     var visit = require_visit();
@@ -31008,9 +31223,9 @@ var require_Alias = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/Scalar.js
+// node_modules/yaml/dist/nodes/Scalar.js
 var require_Scalar = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/Scalar.js"(exports) {
+  "node_modules/yaml/dist/nodes/Scalar.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Node = require_Node();
@@ -31038,9 +31253,9 @@ var require_Scalar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/doc/createNode.js
+// node_modules/yaml/dist/doc/createNode.js
 var require_createNode = __commonJS({
-  "../../work/main/node_modules/yaml/dist/doc/createNode.js"(exports) {
+  "node_modules/yaml/dist/doc/createNode.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var identity = require_identity();
@@ -31113,9 +31328,9 @@ var require_createNode = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/Collection.js
+// node_modules/yaml/dist/nodes/Collection.js
 var require_Collection = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/Collection.js"(exports) {
+  "node_modules/yaml/dist/nodes/Collection.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var identity = require_identity();
@@ -31256,9 +31471,9 @@ var require_Collection = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/stringifyComment.js
+// node_modules/yaml/dist/stringify/stringifyComment.js
 var require_stringifyComment = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
+  "node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
     "use strict";
     var stringifyComment = (str) => str.replace(/^(?!$)(?: $)?/gm, "#");
     function indentComment(comment, indent) {
@@ -31273,9 +31488,9 @@ var require_stringifyComment = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/foldFlowLines.js
+// node_modules/yaml/dist/stringify/foldFlowLines.js
 var require_foldFlowLines = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/foldFlowLines.js"(exports) {
+  "node_modules/yaml/dist/stringify/foldFlowLines.js"(exports) {
     "use strict";
     var FOLD_FLOW = "flow";
     var FOLD_BLOCK = "block";
@@ -31409,9 +31624,9 @@ ${indent}${text.slice(fold + 1, end2)}`;
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/stringifyString.js
+// node_modules/yaml/dist/stringify/stringifyString.js
 var require_stringifyString = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/stringifyString.js"(exports) {
+  "node_modules/yaml/dist/stringify/stringifyString.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var foldFlowLines = require_foldFlowLines();
@@ -31692,9 +31907,9 @@ ${indent}`);
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/stringify.js
+// node_modules/yaml/dist/stringify/stringify.js
 var require_stringify = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/stringify.js"(exports) {
+  "node_modules/yaml/dist/stringify/stringify.js"(exports) {
     "use strict";
     var anchors = require_anchors();
     var identity = require_identity();
@@ -31816,9 +32031,9 @@ ${ctx.indent}${str}`;
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/stringifyPair.js
+// node_modules/yaml/dist/stringify/stringifyPair.js
 var require_stringifyPair = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/stringifyPair.js"(exports) {
+  "node_modules/yaml/dist/stringify/stringifyPair.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -31949,9 +32164,9 @@ ${ctx.indent}`;
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/log.js
+// node_modules/yaml/dist/log.js
 var require_log = __commonJS({
-  "../../work/main/node_modules/yaml/dist/log.js"(exports) {
+  "node_modules/yaml/dist/log.js"(exports) {
     "use strict";
     var node_process = __require("process");
     function debug(logLevel, ...messages10) {
@@ -31971,9 +32186,9 @@ var require_log = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/merge.js
+// node_modules/yaml/dist/schema/yaml-1.1/merge.js
 var require_merge = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/merge.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/merge.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -32031,9 +32246,9 @@ var require_merge = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/addPairToJSMap.js
+// node_modules/yaml/dist/nodes/addPairToJSMap.js
 var require_addPairToJSMap = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/addPairToJSMap.js"(exports) {
+  "node_modules/yaml/dist/nodes/addPairToJSMap.js"(exports) {
     "use strict";
     var log = require_log();
     var merge = require_merge();
@@ -32095,9 +32310,9 @@ var require_addPairToJSMap = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/Pair.js
+// node_modules/yaml/dist/nodes/Pair.js
 var require_Pair = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/Pair.js"(exports) {
+  "node_modules/yaml/dist/nodes/Pair.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var stringifyPair = require_stringifyPair();
@@ -32135,9 +32350,9 @@ var require_Pair = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/stringifyCollection.js
+// node_modules/yaml/dist/stringify/stringifyCollection.js
 var require_stringifyCollection = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/stringifyCollection.js"(exports) {
+  "node_modules/yaml/dist/stringify/stringifyCollection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var stringify = require_stringify();
@@ -32286,9 +32501,9 @@ ${indent}${end}`;
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/YAMLMap.js
+// node_modules/yaml/dist/nodes/YAMLMap.js
 var require_YAMLMap = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/YAMLMap.js"(exports) {
+  "node_modules/yaml/dist/nodes/YAMLMap.js"(exports) {
     "use strict";
     var stringifyCollection = require_stringifyCollection();
     var addPairToJSMap = require_addPairToJSMap();
@@ -32430,9 +32645,9 @@ var require_YAMLMap = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/common/map.js
+// node_modules/yaml/dist/schema/common/map.js
 var require_map = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/common/map.js"(exports) {
+  "node_modules/yaml/dist/schema/common/map.js"(exports) {
     "use strict";
     var identity = require_identity();
     var YAMLMap = require_YAMLMap();
@@ -32452,9 +32667,9 @@ var require_map = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/nodes/YAMLSeq.js
+// node_modules/yaml/dist/nodes/YAMLSeq.js
 var require_YAMLSeq = __commonJS({
-  "../../work/main/node_modules/yaml/dist/nodes/YAMLSeq.js"(exports) {
+  "node_modules/yaml/dist/nodes/YAMLSeq.js"(exports) {
     "use strict";
     var createNode = require_createNode();
     var stringifyCollection = require_stringifyCollection();
@@ -32568,9 +32783,9 @@ var require_YAMLSeq = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/common/seq.js
+// node_modules/yaml/dist/schema/common/seq.js
 var require_seq = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/common/seq.js"(exports) {
+  "node_modules/yaml/dist/schema/common/seq.js"(exports) {
     "use strict";
     var identity = require_identity();
     var YAMLSeq = require_YAMLSeq();
@@ -32590,9 +32805,9 @@ var require_seq = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/common/string.js
+// node_modules/yaml/dist/schema/common/string.js
 var require_string = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/common/string.js"(exports) {
+  "node_modules/yaml/dist/schema/common/string.js"(exports) {
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
@@ -32609,9 +32824,9 @@ var require_string = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/common/null.js
+// node_modules/yaml/dist/schema/common/null.js
 var require_null = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/common/null.js"(exports) {
+  "node_modules/yaml/dist/schema/common/null.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
@@ -32627,9 +32842,9 @@ var require_null = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/core/bool.js
+// node_modules/yaml/dist/schema/core/bool.js
 var require_bool = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/core/bool.js"(exports) {
+  "node_modules/yaml/dist/schema/core/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
@@ -32651,9 +32866,9 @@ var require_bool = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/stringifyNumber.js
+// node_modules/yaml/dist/stringify/stringifyNumber.js
 var require_stringifyNumber = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
+  "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
     function stringifyNumber({ format, minFractionDigits, tag, value }) {
       if (typeof value === "bigint")
@@ -32678,9 +32893,9 @@ var require_stringifyNumber = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/core/float.js
+// node_modules/yaml/dist/schema/core/float.js
 var require_float = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/core/float.js"(exports) {
+  "node_modules/yaml/dist/schema/core/float.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
@@ -32724,9 +32939,9 @@ var require_float = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/core/int.js
+// node_modules/yaml/dist/schema/core/int.js
 var require_int = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/core/int.js"(exports) {
+  "node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
@@ -32769,9 +32984,9 @@ var require_int = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/core/schema.js
+// node_modules/yaml/dist/schema/core/schema.js
 var require_schema = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/core/schema.js"(exports) {
+  "node_modules/yaml/dist/schema/core/schema.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -32797,9 +33012,9 @@ var require_schema = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/json/schema.js
+// node_modules/yaml/dist/schema/json/schema.js
 var require_schema2 = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/json/schema.js"(exports) {
+  "node_modules/yaml/dist/schema/json/schema.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var map = require_map();
@@ -32864,9 +33079,9 @@ var require_schema2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/binary.js
+// node_modules/yaml/dist/schema/yaml-1.1/binary.js
 var require_binary = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/binary.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/binary.js"(exports) {
     "use strict";
     var node_buffer = __require("buffer");
     var Scalar = require_Scalar();
@@ -32930,9 +33145,9 @@ var require_binary = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/pairs.js
+// node_modules/yaml/dist/schema/yaml-1.1/pairs.js
 var require_pairs = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/pairs.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/pairs.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -33008,9 +33223,9 @@ ${cn.comment}` : item.comment;
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/omap.js
+// node_modules/yaml/dist/schema/yaml-1.1/omap.js
 var require_omap = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/omap.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/omap.js"(exports) {
     "use strict";
     var identity = require_identity();
     var toJS = require_toJS();
@@ -33086,9 +33301,9 @@ var require_omap = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/bool.js
+// node_modules/yaml/dist/schema/yaml-1.1/bool.js
 var require_bool2 = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     function boolStringify({ value, source }, ctx) {
@@ -33118,9 +33333,9 @@ var require_bool2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/float.js
+// node_modules/yaml/dist/schema/yaml-1.1/float.js
 var require_float2 = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/float.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/float.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
@@ -33167,9 +33382,9 @@ var require_float2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/int.js
+// node_modules/yaml/dist/schema/yaml-1.1/int.js
 var require_int2 = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
@@ -33246,9 +33461,9 @@ var require_int2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/set.js
+// node_modules/yaml/dist/schema/yaml-1.1/set.js
 var require_set = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/set.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/set.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -33335,9 +33550,9 @@ var require_set = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/timestamp.js
+// node_modules/yaml/dist/schema/yaml-1.1/timestamp.js
 var require_timestamp = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/timestamp.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/timestamp.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
     function parseSexagesimal(str, asBigInt) {
@@ -33423,9 +33638,9 @@ var require_timestamp = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/yaml-1.1/schema.js
+// node_modules/yaml/dist/schema/yaml-1.1/schema.js
 var require_schema3 = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/yaml-1.1/schema.js"(exports) {
+  "node_modules/yaml/dist/schema/yaml-1.1/schema.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -33467,9 +33682,9 @@ var require_schema3 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/tags.js
+// node_modules/yaml/dist/schema/tags.js
 var require_tags = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/tags.js"(exports) {
+  "node_modules/yaml/dist/schema/tags.js"(exports) {
     "use strict";
     var map = require_map();
     var _null = require_null();
@@ -33561,9 +33776,9 @@ var require_tags = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/schema/Schema.js
+// node_modules/yaml/dist/schema/Schema.js
 var require_Schema = __commonJS({
-  "../../work/main/node_modules/yaml/dist/schema/Schema.js"(exports) {
+  "node_modules/yaml/dist/schema/Schema.js"(exports) {
     "use strict";
     var identity = require_identity();
     var map = require_map();
@@ -33593,9 +33808,9 @@ var require_Schema = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/stringify/stringifyDocument.js
+// node_modules/yaml/dist/stringify/stringifyDocument.js
 var require_stringifyDocument = __commonJS({
-  "../../work/main/node_modules/yaml/dist/stringify/stringifyDocument.js"(exports) {
+  "node_modules/yaml/dist/stringify/stringifyDocument.js"(exports) {
     "use strict";
     var identity = require_identity();
     var stringify = require_stringify();
@@ -33673,9 +33888,9 @@ var require_stringifyDocument = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/doc/Document.js
+// node_modules/yaml/dist/doc/Document.js
 var require_Document = __commonJS({
-  "../../work/main/node_modules/yaml/dist/doc/Document.js"(exports) {
+  "node_modules/yaml/dist/doc/Document.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var Collection = require_Collection();
@@ -33982,9 +34197,9 @@ var require_Document = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/errors.js
+// node_modules/yaml/dist/errors.js
 var require_errors = __commonJS({
-  "../../work/main/node_modules/yaml/dist/errors.js"(exports) {
+  "node_modules/yaml/dist/errors.js"(exports) {
     "use strict";
     var YAMLError = class extends Error {
       constructor(name, pos, code, message) {
@@ -34047,9 +34262,9 @@ ${pointer}
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/resolve-props.js
+// node_modules/yaml/dist/compose/resolve-props.js
 var require_resolve_props = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/resolve-props.js"(exports) {
+  "node_modules/yaml/dist/compose/resolve-props.js"(exports) {
     "use strict";
     function resolveProps(tokens2, { flow, indicator, next, offset, onError, parentIndent, startOnNewline }) {
       let spaceBefore = false;
@@ -34181,9 +34396,9 @@ var require_resolve_props = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/util-contains-newline.js
+// node_modules/yaml/dist/compose/util-contains-newline.js
 var require_util_contains_newline = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/util-contains-newline.js"(exports) {
+  "node_modules/yaml/dist/compose/util-contains-newline.js"(exports) {
     "use strict";
     function containsNewline(key3) {
       if (!key3)
@@ -34223,9 +34438,9 @@ var require_util_contains_newline = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/util-flow-indent-check.js
+// node_modules/yaml/dist/compose/util-flow-indent-check.js
 var require_util_flow_indent_check = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/util-flow-indent-check.js"(exports) {
+  "node_modules/yaml/dist/compose/util-flow-indent-check.js"(exports) {
     "use strict";
     var utilContainsNewline = require_util_contains_newline();
     function flowIndentCheck(indent, fc, onError) {
@@ -34241,9 +34456,9 @@ var require_util_flow_indent_check = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/util-map-includes.js
+// node_modules/yaml/dist/compose/util-map-includes.js
 var require_util_map_includes = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
+  "node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
     "use strict";
     var identity = require_identity();
     function mapIncludes(ctx, items, search) {
@@ -34257,9 +34472,9 @@ var require_util_map_includes = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/resolve-block-map.js
+// node_modules/yaml/dist/compose/resolve-block-map.js
 var require_resolve_block_map = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/resolve-block-map.js"(exports) {
+  "node_modules/yaml/dist/compose/resolve-block-map.js"(exports) {
     "use strict";
     var Pair = require_Pair();
     var YAMLMap = require_YAMLMap();
@@ -34365,9 +34580,9 @@ var require_resolve_block_map = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/resolve-block-seq.js
+// node_modules/yaml/dist/compose/resolve-block-seq.js
 var require_resolve_block_seq = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/resolve-block-seq.js"(exports) {
+  "node_modules/yaml/dist/compose/resolve-block-seq.js"(exports) {
     "use strict";
     var YAMLSeq = require_YAMLSeq();
     var resolveProps = require_resolve_props();
@@ -34416,9 +34631,9 @@ var require_resolve_block_seq = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/resolve-end.js
+// node_modules/yaml/dist/compose/resolve-end.js
 var require_resolve_end = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/resolve-end.js"(exports) {
+  "node_modules/yaml/dist/compose/resolve-end.js"(exports) {
     "use strict";
     function resolveEnd(end, offset, reqSpace, onError) {
       let comment = "";
@@ -34459,9 +34674,9 @@ var require_resolve_end = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/resolve-flow-collection.js
+// node_modules/yaml/dist/compose/resolve-flow-collection.js
 var require_resolve_flow_collection = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/resolve-flow-collection.js"(exports) {
+  "node_modules/yaml/dist/compose/resolve-flow-collection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Pair = require_Pair();
@@ -34653,9 +34868,9 @@ var require_resolve_flow_collection = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/compose-collection.js
+// node_modules/yaml/dist/compose/compose-collection.js
 var require_compose_collection = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/compose-collection.js"(exports) {
+  "node_modules/yaml/dist/compose/compose-collection.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -34718,9 +34933,9 @@ var require_compose_collection = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/resolve-block-scalar.js
+// node_modules/yaml/dist/compose/resolve-block-scalar.js
 var require_resolve_block_scalar = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/resolve-block-scalar.js"(exports) {
+  "node_modules/yaml/dist/compose/resolve-block-scalar.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     function resolveBlockScalar(ctx, scalar2, onError) {
@@ -34901,9 +35116,9 @@ var require_resolve_block_scalar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/resolve-flow-scalar.js
+// node_modules/yaml/dist/compose/resolve-flow-scalar.js
 var require_resolve_flow_scalar = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/resolve-flow-scalar.js"(exports) {
+  "node_modules/yaml/dist/compose/resolve-flow-scalar.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
     var resolveEnd = require_resolve_end();
@@ -35122,9 +35337,9 @@ var require_resolve_flow_scalar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/compose-scalar.js
+// node_modules/yaml/dist/compose/compose-scalar.js
 var require_compose_scalar = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/compose-scalar.js"(exports) {
+  "node_modules/yaml/dist/compose/compose-scalar.js"(exports) {
     "use strict";
     var identity = require_identity();
     var Scalar = require_Scalar();
@@ -35203,9 +35418,9 @@ var require_compose_scalar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/util-empty-scalar-position.js
+// node_modules/yaml/dist/compose/util-empty-scalar-position.js
 var require_util_empty_scalar_position = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/util-empty-scalar-position.js"(exports) {
+  "node_modules/yaml/dist/compose/util-empty-scalar-position.js"(exports) {
     "use strict";
     function emptyScalarPosition(offset, before, pos) {
       if (before) {
@@ -35233,9 +35448,9 @@ var require_util_empty_scalar_position = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/compose-node.js
+// node_modules/yaml/dist/compose/compose-node.js
 var require_compose_node = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/compose-node.js"(exports) {
+  "node_modules/yaml/dist/compose/compose-node.js"(exports) {
     "use strict";
     var Alias = require_Alias();
     var identity = require_identity();
@@ -35339,9 +35554,9 @@ var require_compose_node = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/compose-doc.js
+// node_modules/yaml/dist/compose/compose-doc.js
 var require_compose_doc = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/compose-doc.js"(exports) {
+  "node_modules/yaml/dist/compose/compose-doc.js"(exports) {
     "use strict";
     var Document = require_Document();
     var composeNode = require_compose_node();
@@ -35382,9 +35597,9 @@ var require_compose_doc = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/compose/composer.js
+// node_modules/yaml/dist/compose/composer.js
 var require_composer = __commonJS({
-  "../../work/main/node_modules/yaml/dist/compose/composer.js"(exports) {
+  "node_modules/yaml/dist/compose/composer.js"(exports) {
     "use strict";
     var node_process = __require("process");
     var directives = require_directives();
@@ -35590,9 +35805,9 @@ ${end.comment}` : end.comment;
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/parse/cst-scalar.js
+// node_modules/yaml/dist/parse/cst-scalar.js
 var require_cst_scalar = __commonJS({
-  "../../work/main/node_modules/yaml/dist/parse/cst-scalar.js"(exports) {
+  "node_modules/yaml/dist/parse/cst-scalar.js"(exports) {
     "use strict";
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
@@ -35775,9 +35990,9 @@ var require_cst_scalar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/parse/cst-stringify.js
+// node_modules/yaml/dist/parse/cst-stringify.js
 var require_cst_stringify = __commonJS({
-  "../../work/main/node_modules/yaml/dist/parse/cst-stringify.js"(exports) {
+  "node_modules/yaml/dist/parse/cst-stringify.js"(exports) {
     "use strict";
     var stringify = (cst) => "type" in cst ? stringifyToken(cst) : stringifyItem(cst);
     function stringifyToken(token) {
@@ -35836,9 +36051,9 @@ var require_cst_stringify = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/parse/cst-visit.js
+// node_modules/yaml/dist/parse/cst-visit.js
 var require_cst_visit = __commonJS({
-  "../../work/main/node_modules/yaml/dist/parse/cst-visit.js"(exports) {
+  "node_modules/yaml/dist/parse/cst-visit.js"(exports) {
     "use strict";
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
@@ -35898,9 +36113,9 @@ var require_cst_visit = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/parse/cst.js
+// node_modules/yaml/dist/parse/cst.js
 var require_cst = __commonJS({
-  "../../work/main/node_modules/yaml/dist/parse/cst.js"(exports) {
+  "node_modules/yaml/dist/parse/cst.js"(exports) {
     "use strict";
     var cstScalar = require_cst_scalar();
     var cstStringify = require_cst_stringify();
@@ -36000,9 +36215,9 @@ var require_cst = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/parse/lexer.js
+// node_modules/yaml/dist/parse/lexer.js
 var require_lexer = __commonJS({
-  "../../work/main/node_modules/yaml/dist/parse/lexer.js"(exports) {
+  "node_modules/yaml/dist/parse/lexer.js"(exports) {
     "use strict";
     var cst = require_cst();
     function isEmpty(ch) {
@@ -36589,9 +36804,9 @@ var require_lexer = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/parse/line-counter.js
+// node_modules/yaml/dist/parse/line-counter.js
 var require_line_counter = __commonJS({
-  "../../work/main/node_modules/yaml/dist/parse/line-counter.js"(exports) {
+  "node_modules/yaml/dist/parse/line-counter.js"(exports) {
     "use strict";
     var LineCounter2 = class {
       constructor() {
@@ -36620,9 +36835,9 @@ var require_line_counter = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/parse/parser.js
+// node_modules/yaml/dist/parse/parser.js
 var require_parser = __commonJS({
-  "../../work/main/node_modules/yaml/dist/parse/parser.js"(exports) {
+  "node_modules/yaml/dist/parse/parser.js"(exports) {
     "use strict";
     var node_process = __require("process");
     var cst = require_cst();
@@ -37494,9 +37709,9 @@ var require_parser = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/public-api.js
+// node_modules/yaml/dist/public-api.js
 var require_public_api = __commonJS({
-  "../../work/main/node_modules/yaml/dist/public-api.js"(exports) {
+  "node_modules/yaml/dist/public-api.js"(exports) {
     "use strict";
     var composer = require_composer();
     var Document = require_Document();
@@ -37591,9 +37806,9 @@ var require_public_api = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/yaml/dist/index.js
+// node_modules/yaml/dist/index.js
 var require_dist = __commonJS({
-  "../../work/main/node_modules/yaml/dist/index.js"(exports) {
+  "node_modules/yaml/dist/index.js"(exports) {
     "use strict";
     var composer = require_composer();
     var Document = require_Document();
@@ -37643,9 +37858,9 @@ var require_dist = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/codegen/code.js
+// node_modules/ajv/dist/compile/codegen/code.js
 var require_code = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/codegen/code.js"(exports) {
+  "node_modules/ajv/dist/compile/codegen/code.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.regexpCode = exports.getEsmExportName = exports.getProperty = exports.safeStringify = exports.stringify = exports.strConcat = exports.addCodeArg = exports.str = exports._ = exports.nil = exports._Code = exports.Name = exports.IDENTIFIER = exports._CodeOrName = void 0;
@@ -37797,9 +38012,9 @@ var require_code = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/codegen/scope.js
+// node_modules/ajv/dist/compile/codegen/scope.js
 var require_scope = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/codegen/scope.js"(exports) {
+  "node_modules/ajv/dist/compile/codegen/scope.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.ValueScope = exports.ValueScopeName = exports.Scope = exports.varKinds = exports.UsedValueState = void 0;
@@ -37942,9 +38157,9 @@ var require_scope = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/codegen/index.js
+// node_modules/ajv/dist/compile/codegen/index.js
 var require_codegen = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/codegen/index.js"(exports) {
+  "node_modules/ajv/dist/compile/codegen/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.or = exports.and = exports.not = exports.CodeGen = exports.operators = exports.varKinds = exports.ValueScopeName = exports.ValueScope = exports.Scope = exports.Name = exports.regexpCode = exports.stringify = exports.getProperty = exports.nil = exports.strConcat = exports.str = exports._ = void 0;
@@ -38662,9 +38877,9 @@ var require_codegen = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/util.js
+// node_modules/ajv/dist/compile/util.js
 var require_util = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/util.js"(exports) {
+  "node_modules/ajv/dist/compile/util.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.checkStrictMode = exports.getErrorPath = exports.Type = exports.useFunc = exports.setEvaluated = exports.evaluatedPropsToName = exports.mergeEvaluated = exports.eachItem = exports.unescapeJsonPointer = exports.escapeJsonPointer = exports.escapeFragment = exports.unescapeFragment = exports.schemaRefOrVal = exports.schemaHasRulesButRef = exports.schemaHasRules = exports.checkUnknownRules = exports.alwaysValidSchema = exports.toHash = void 0;
@@ -38829,9 +39044,9 @@ var require_util = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/names.js
+// node_modules/ajv/dist/compile/names.js
 var require_names = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/names.js"(exports) {
+  "node_modules/ajv/dist/compile/names.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -38868,9 +39083,9 @@ var require_names = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/errors.js
+// node_modules/ajv/dist/compile/errors.js
 var require_errors2 = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/errors.js"(exports) {
+  "node_modules/ajv/dist/compile/errors.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.extendErrors = exports.resetErrorsCount = exports.reportExtraError = exports.reportError = exports.keyword$DataError = exports.keywordError = void 0;
@@ -38990,9 +39205,9 @@ var require_errors2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/validate/boolSchema.js
+// node_modules/ajv/dist/compile/validate/boolSchema.js
 var require_boolSchema = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/validate/boolSchema.js"(exports) {
+  "node_modules/ajv/dist/compile/validate/boolSchema.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.boolOrEmptySchema = exports.topBoolOrEmptySchema = void 0;
@@ -39041,9 +39256,9 @@ var require_boolSchema = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/rules.js
+// node_modules/ajv/dist/compile/rules.js
 var require_rules = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/rules.js"(exports) {
+  "node_modules/ajv/dist/compile/rules.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getRules = exports.isJSONType = void 0;
@@ -39072,9 +39287,9 @@ var require_rules = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/validate/applicability.js
+// node_modules/ajv/dist/compile/validate/applicability.js
 var require_applicability = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/validate/applicability.js"(exports) {
+  "node_modules/ajv/dist/compile/validate/applicability.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.shouldUseRule = exports.shouldUseGroup = exports.schemaHasRulesForType = void 0;
@@ -39095,9 +39310,9 @@ var require_applicability = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/validate/dataType.js
+// node_modules/ajv/dist/compile/validate/dataType.js
 var require_dataType = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/validate/dataType.js"(exports) {
+  "node_modules/ajv/dist/compile/validate/dataType.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.reportTypeError = exports.checkDataTypes = exports.checkDataType = exports.coerceAndCheckDataType = exports.getJSONTypes = exports.getSchemaTypes = exports.DataType = void 0;
@@ -39279,9 +39494,9 @@ var require_dataType = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/validate/defaults.js
+// node_modules/ajv/dist/compile/validate/defaults.js
 var require_defaults = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/validate/defaults.js"(exports) {
+  "node_modules/ajv/dist/compile/validate/defaults.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.assignDefaults = void 0;
@@ -39316,9 +39531,9 @@ var require_defaults = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/code.js
+// node_modules/ajv/dist/vocabularies/code.js
 var require_code2 = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/code.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/code.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateUnion = exports.validateArray = exports.usePattern = exports.callValidateCode = exports.schemaProperties = exports.allSchemaProperties = exports.noPropertyInData = exports.propertyInData = exports.isOwnProperty = exports.hasPropFunc = exports.reportMissingProp = exports.checkMissingProp = exports.checkReportMissingProp = void 0;
@@ -39449,9 +39664,9 @@ var require_code2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/validate/keyword.js
+// node_modules/ajv/dist/compile/validate/keyword.js
 var require_keyword = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/validate/keyword.js"(exports) {
+  "node_modules/ajv/dist/compile/validate/keyword.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateKeywordUsage = exports.validSchemaType = exports.funcKeywordCode = exports.macroKeywordCode = void 0;
@@ -39567,9 +39782,9 @@ var require_keyword = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/validate/subschema.js
+// node_modules/ajv/dist/compile/validate/subschema.js
 var require_subschema = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/validate/subschema.js"(exports) {
+  "node_modules/ajv/dist/compile/validate/subschema.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.extendSubschemaMode = exports.extendSubschemaData = exports.getSubschema = void 0;
@@ -39650,9 +39865,9 @@ var require_subschema = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/fast-deep-equal/index.js
+// node_modules/fast-deep-equal/index.js
 var require_fast_deep_equal = __commonJS({
-  "../../work/main/node_modules/fast-deep-equal/index.js"(exports, module) {
+  "node_modules/fast-deep-equal/index.js"(exports, module) {
     "use strict";
     module.exports = function equal(a, b) {
       if (a === b) return true;
@@ -39685,9 +39900,9 @@ var require_fast_deep_equal = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/json-schema-traverse/index.js
+// node_modules/json-schema-traverse/index.js
 var require_json_schema_traverse = __commonJS({
-  "../../work/main/node_modules/json-schema-traverse/index.js"(exports, module) {
+  "node_modules/json-schema-traverse/index.js"(exports, module) {
     "use strict";
     var traverse2 = module.exports = function(schema, opts, cb) {
       if (typeof opts == "function") {
@@ -39773,9 +39988,9 @@ var require_json_schema_traverse = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/resolve.js
+// node_modules/ajv/dist/compile/resolve.js
 var require_resolve = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/resolve.js"(exports) {
+  "node_modules/ajv/dist/compile/resolve.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getSchemaRefs = exports.resolveUrl = exports.normalizeId = exports._getFullPath = exports.getFullPath = exports.inlineRef = void 0;
@@ -39929,9 +40144,9 @@ var require_resolve = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/validate/index.js
+// node_modules/ajv/dist/compile/validate/index.js
 var require_validate = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/validate/index.js"(exports) {
+  "node_modules/ajv/dist/compile/validate/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.getData = exports.KeywordCxt = exports.validateFunctionCode = void 0;
@@ -40437,9 +40652,9 @@ var require_validate = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/runtime/validation_error.js
+// node_modules/ajv/dist/runtime/validation_error.js
 var require_validation_error = __commonJS({
-  "../../work/main/node_modules/ajv/dist/runtime/validation_error.js"(exports) {
+  "node_modules/ajv/dist/runtime/validation_error.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var ValidationError = class extends Error {
@@ -40453,9 +40668,9 @@ var require_validation_error = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/ref_error.js
+// node_modules/ajv/dist/compile/ref_error.js
 var require_ref_error = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/ref_error.js"(exports) {
+  "node_modules/ajv/dist/compile/ref_error.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var resolve_1 = require_resolve();
@@ -40470,9 +40685,9 @@ var require_ref_error = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/compile/index.js
+// node_modules/ajv/dist/compile/index.js
 var require_compile = __commonJS({
-  "../../work/main/node_modules/ajv/dist/compile/index.js"(exports) {
+  "node_modules/ajv/dist/compile/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.resolveSchema = exports.getCompilingSchema = exports.resolveRef = exports.compileSchema = exports.SchemaEnv = void 0;
@@ -40694,9 +40909,9 @@ var require_compile = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/refs/data.json
+// node_modules/ajv/dist/refs/data.json
 var require_data = __commonJS({
-  "../../work/main/node_modules/ajv/dist/refs/data.json"(exports, module) {
+  "node_modules/ajv/dist/refs/data.json"(exports, module) {
     module.exports = {
       $id: "https://raw.githubusercontent.com/ajv-validator/ajv/master/lib/refs/data.json#",
       description: "Meta-schema for $data reference (JSON AnySchema extension proposal)",
@@ -40713,9 +40928,9 @@ var require_data = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/fast-uri/lib/utils.js
+// node_modules/fast-uri/lib/utils.js
 var require_utils = __commonJS({
-  "../../work/main/node_modules/fast-uri/lib/utils.js"(exports, module) {
+  "node_modules/fast-uri/lib/utils.js"(exports, module) {
     "use strict";
     var isUUID = RegExp.prototype.test.bind(/^[\da-f]{8}-[\da-f]{4}-[\da-f]{4}-[\da-f]{4}-[\da-f]{12}$/iu);
     var isIPv4 = RegExp.prototype.test.bind(/^(?:(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d{2}|[1-9]\d|\d)$/u);
@@ -41247,9 +41462,9 @@ var require_utils = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/fast-uri/lib/schemes.js
+// node_modules/fast-uri/lib/schemes.js
 var require_schemes = __commonJS({
-  "../../work/main/node_modules/fast-uri/lib/schemes.js"(exports, module) {
+  "node_modules/fast-uri/lib/schemes.js"(exports, module) {
     "use strict";
     var { isUUID } = require_utils();
     var URN_REG = /^([\da-z][\d\-a-z]{0,31}):((?:[\w!$'()*+,\-./:;=@]|%[\da-f]{2})+)$/iu;
@@ -41458,9 +41673,9 @@ var require_schemes = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/fast-uri/index.js
+// node_modules/fast-uri/index.js
 var require_fast_uri = __commonJS({
-  "../../work/main/node_modules/fast-uri/index.js"(exports, module) {
+  "node_modules/fast-uri/index.js"(exports, module) {
     "use strict";
     var { normalizeIPv6, removeDotSegments, removeDotSegmentsRelative, recomposeAuthority, normalizePercentEncoding, normalizePathEncoding, serializePathEncoding, normalizeQueryFragmentEncoding, encodeQuery, encodeFragment, reescapeHostDelimiters, isIPv4, nonSimpleDomain } = require_utils();
     var { SCHEMES, getSchemeHandler } = require_schemes();
@@ -41888,9 +42103,9 @@ var require_fast_uri = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/runtime/uri.js
+// node_modules/ajv/dist/runtime/uri.js
 var require_uri = __commonJS({
-  "../../work/main/node_modules/ajv/dist/runtime/uri.js"(exports) {
+  "node_modules/ajv/dist/runtime/uri.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var uri = require_fast_uri();
@@ -41899,9 +42114,9 @@ var require_uri = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/core.js
+// node_modules/ajv/dist/core.js
 var require_core = __commonJS({
-  "../../work/main/node_modules/ajv/dist/core.js"(exports) {
+  "node_modules/ajv/dist/core.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = void 0;
@@ -42510,9 +42725,9 @@ var require_core = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/core/id.js
+// node_modules/ajv/dist/vocabularies/core/id.js
 var require_id = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/core/id.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/core/id.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var def = {
@@ -42525,9 +42740,9 @@ var require_id = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/core/ref.js
+// node_modules/ajv/dist/vocabularies/core/ref.js
 var require_ref = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/core/ref.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/core/ref.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.callRef = exports.getValidate = void 0;
@@ -42647,9 +42862,9 @@ var require_ref = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/core/index.js
+// node_modules/ajv/dist/vocabularies/core/index.js
 var require_core2 = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/core/index.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/core/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var id_1 = require_id();
@@ -42668,9 +42883,9 @@ var require_core2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitNumber.js
+// node_modules/ajv/dist/vocabularies/validation/limitNumber.js
 var require_limitNumber = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitNumber.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/limitNumber.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42700,9 +42915,9 @@ var require_limitNumber = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/multipleOf.js
+// node_modules/ajv/dist/vocabularies/validation/multipleOf.js
 var require_multipleOf = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/multipleOf.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/multipleOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42728,9 +42943,9 @@ var require_multipleOf = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/runtime/ucs2length.js
+// node_modules/ajv/dist/runtime/ucs2length.js
 var require_ucs2length = __commonJS({
-  "../../work/main/node_modules/ajv/dist/runtime/ucs2length.js"(exports) {
+  "node_modules/ajv/dist/runtime/ucs2length.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     function ucs2length(str) {
@@ -42754,9 +42969,9 @@ var require_ucs2length = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitLength.js
+// node_modules/ajv/dist/vocabularies/validation/limitLength.js
 var require_limitLength = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitLength.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/limitLength.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42786,9 +43001,9 @@ var require_limitLength = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/pattern.js
+// node_modules/ajv/dist/vocabularies/validation/pattern.js
 var require_pattern = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/pattern.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/pattern.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -42823,9 +43038,9 @@ var require_pattern = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitProperties.js
+// node_modules/ajv/dist/vocabularies/validation/limitProperties.js
 var require_limitProperties = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitProperties.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/limitProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42852,9 +43067,9 @@ var require_limitProperties = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/required.js
+// node_modules/ajv/dist/vocabularies/validation/required.js
 var require_required = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/required.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/required.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -42934,9 +43149,9 @@ var require_required = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/limitItems.js
+// node_modules/ajv/dist/vocabularies/validation/limitItems.js
 var require_limitItems = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/limitItems.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/limitItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -42963,9 +43178,9 @@ var require_limitItems = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/runtime/equal.js
+// node_modules/ajv/dist/runtime/equal.js
 var require_equal = __commonJS({
-  "../../work/main/node_modules/ajv/dist/runtime/equal.js"(exports) {
+  "node_modules/ajv/dist/runtime/equal.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var equal = require_fast_deep_equal();
@@ -42974,9 +43189,9 @@ var require_equal = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/uniqueItems.js
+// node_modules/ajv/dist/vocabularies/validation/uniqueItems.js
 var require_uniqueItems = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/uniqueItems.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/uniqueItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var dataType_1 = require_dataType();
@@ -43041,9 +43256,9 @@ var require_uniqueItems = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/const.js
+// node_modules/ajv/dist/vocabularies/validation/const.js
 var require_const = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/const.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/const.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43070,9 +43285,9 @@ var require_const = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/enum.js
+// node_modules/ajv/dist/vocabularies/validation/enum.js
 var require_enum = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/enum.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/enum.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43119,9 +43334,9 @@ var require_enum = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/validation/index.js
+// node_modules/ajv/dist/vocabularies/validation/index.js
 var require_validation = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/validation/index.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/validation/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var limitNumber_1 = require_limitNumber();
@@ -43157,9 +43372,9 @@ var require_validation = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalItems.js
+// node_modules/ajv/dist/vocabularies/applicator/additionalItems.js
 var require_additionalItems = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalItems.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/additionalItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateAdditionalItems = void 0;
@@ -43210,9 +43425,9 @@ var require_additionalItems = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/items.js
+// node_modules/ajv/dist/vocabularies/applicator/items.js
 var require_items = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/items.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/items.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateTuple = void 0;
@@ -43267,9 +43482,9 @@ var require_items = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/prefixItems.js
+// node_modules/ajv/dist/vocabularies/applicator/prefixItems.js
 var require_prefixItems = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/prefixItems.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/prefixItems.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var items_1 = require_items();
@@ -43284,9 +43499,9 @@ var require_prefixItems = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/items2020.js
+// node_modules/ajv/dist/vocabularies/applicator/items2020.js
 var require_items2020 = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/items2020.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/items2020.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43319,9 +43534,9 @@ var require_items2020 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/contains.js
+// node_modules/ajv/dist/vocabularies/applicator/contains.js
 var require_contains = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/contains.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/contains.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43413,9 +43628,9 @@ var require_contains = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/dependencies.js
+// node_modules/ajv/dist/vocabularies/applicator/dependencies.js
 var require_dependencies = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/dependencies.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/dependencies.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.validateSchemaDeps = exports.validatePropertyDeps = exports.error = void 0;
@@ -43507,9 +43722,9 @@ var require_dependencies = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/propertyNames.js
+// node_modules/ajv/dist/vocabularies/applicator/propertyNames.js
 var require_propertyNames = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/propertyNames.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/propertyNames.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43550,9 +43765,9 @@ var require_propertyNames = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js
+// node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js
 var require_additionalProperties = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/additionalProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -43656,9 +43871,9 @@ var require_additionalProperties = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/properties.js
+// node_modules/ajv/dist/vocabularies/applicator/properties.js
 var require_properties = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/properties.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/properties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var validate_1 = require_validate();
@@ -43714,9 +43929,9 @@ var require_properties = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/patternProperties.js
+// node_modules/ajv/dist/vocabularies/applicator/patternProperties.js
 var require_patternProperties = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/patternProperties.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/patternProperties.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -43788,9 +44003,9 @@ var require_patternProperties = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/not.js
+// node_modules/ajv/dist/vocabularies/applicator/not.js
 var require_not = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/not.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/not.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -43819,9 +44034,9 @@ var require_not = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/anyOf.js
+// node_modules/ajv/dist/vocabularies/applicator/anyOf.js
 var require_anyOf = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/anyOf.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/anyOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var code_1 = require_code2();
@@ -43836,9 +44051,9 @@ var require_anyOf = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/oneOf.js
+// node_modules/ajv/dist/vocabularies/applicator/oneOf.js
 var require_oneOf = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/oneOf.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/oneOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43894,9 +44109,9 @@ var require_oneOf = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/allOf.js
+// node_modules/ajv/dist/vocabularies/applicator/allOf.js
 var require_allOf = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/allOf.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/allOf.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -43921,9 +44136,9 @@ var require_allOf = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/if.js
+// node_modules/ajv/dist/vocabularies/applicator/if.js
 var require_if = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/if.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/if.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -43990,9 +44205,9 @@ var require_if = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/thenElse.js
+// node_modules/ajv/dist/vocabularies/applicator/thenElse.js
 var require_thenElse = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/thenElse.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/thenElse.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var util_1 = require_util();
@@ -44008,9 +44223,9 @@ var require_thenElse = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/applicator/index.js
+// node_modules/ajv/dist/vocabularies/applicator/index.js
 var require_applicator = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/applicator/index.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/applicator/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var additionalItems_1 = require_additionalItems();
@@ -44056,9 +44271,9 @@ var require_applicator = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/format/format.js
+// node_modules/ajv/dist/vocabularies/format/format.js
 var require_format = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -44146,9 +44361,9 @@ var require_format = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/format/index.js
+// node_modules/ajv/dist/vocabularies/format/index.js
 var require_format2 = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var format_1 = require_format();
@@ -44157,9 +44372,9 @@ var require_format2 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/metadata.js
+// node_modules/ajv/dist/vocabularies/metadata.js
 var require_metadata = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.contentVocabulary = exports.metadataVocabulary = void 0;
@@ -44180,9 +44395,9 @@ var require_metadata = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/draft7.js
+// node_modules/ajv/dist/vocabularies/draft7.js
 var require_draft7 = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var core_1 = require_core2();
@@ -44202,9 +44417,9 @@ var require_draft7 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/discriminator/types.js
+// node_modules/ajv/dist/vocabularies/discriminator/types.js
 var require_types = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.DiscrError = void 0;
@@ -44216,9 +44431,9 @@ var require_types = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/vocabularies/discriminator/index.js
+// node_modules/ajv/dist/vocabularies/discriminator/index.js
 var require_discriminator = __commonJS({
-  "../../work/main/node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
+  "node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
@@ -44321,9 +44536,9 @@ var require_discriminator = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/refs/json-schema-draft-07.json
+// node_modules/ajv/dist/refs/json-schema-draft-07.json
 var require_json_schema_draft_07 = __commonJS({
-  "../../work/main/node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
+  "node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
     module.exports = {
       $schema: "http://json-schema.org/draft-07/schema#",
       $id: "http://json-schema.org/draft-07/schema#",
@@ -44478,9 +44693,9 @@ var require_json_schema_draft_07 = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ajv/dist/ajv.js
+// node_modules/ajv/dist/ajv.js
 var require_ajv = __commonJS({
-  "../../work/main/node_modules/ajv/dist/ajv.js"(exports, module) {
+  "node_modules/ajv/dist/ajv.js"(exports, module) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv = void 0;
@@ -44936,6 +45151,79 @@ var init_words = __esm({
   }
 });
 
+// src/checks/nitrogen-inversion.ts
+function claimRestsOnlyOnNitrogen(ctx) {
+  const f = ctx.main.facts;
+  const form = ctx.record?.stereo.form;
+  return f !== null && form !== void 0 && STEREO_CLAIM_FORMS.includes(form) && f.units.length === 0 && f.invertibleNitrogens.length > 0 && !["off", "note"].includes(ctx.config.severities[NITROGEN_CHECK_ID] ?? "error");
+}
+function statedDescriptors(ctx) {
+  const record2 = ctx.record;
+  const decl = declaredDescriptors(record2);
+  if (decl.field && decl.field.items.length > 0)
+    return ` and drop ${record2?.stereo.descriptors ?? ""} from stereo.descriptors`;
+  if (decl.name && decl.name.items.length > 0) {
+    const name = record2?.name ?? "";
+    const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2013\u2212]+$/, "");
+    return ` and drop ${front} from the name`;
+  }
+  return "";
+}
+function run(ctx) {
+  const record2 = ctx.record;
+  const f = ctx.main.facts;
+  if (!record2 || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
+  const form = record2.stereo.form;
+  const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
+  const out = [];
+  const claims = STEREO_CLAIM_FORMS.includes(form);
+  const others2 = definedUnits(f).filter(
+    (u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === "tetrahedral")
+  );
+  const atomsOf = (list) => list.map((n) => `(atom ${n.atom})`).join(", ");
+  if (claims && others2.length === 0) {
+    const list = drawn.length ? drawn : f.invertibleNitrogens;
+    out.push(
+      finding("claim-rests-on-invertible-nitrogen", "stereo.form", {
+        form,
+        atoms: atomsOf(list),
+        drawnWithStereo: drawn.length > 0,
+        dropDescriptors: statedDescriptors(ctx)
+      })
+    );
+  } else if (drawn.length > 0) {
+    out.push(
+      finding("stereo-drawn-on-invertible-nitrogen", "structure", { form, atoms: atomsOf(drawn) }, "note")
+    );
+  }
+  if (out.some((x) => x.severity !== "note")) return { findings: out };
+  if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
+  return {
+    findings: out,
+    passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens`
+  };
+}
+var NITROGEN_CHECK_ID, messages, nitrogenInversion;
+var init_nitrogen_inversion = __esm({
+  "src/checks/nitrogen-inversion.ts"() {
+    "use strict";
+    init_words();
+    NITROGEN_CHECK_ID = "nitrogen-inversion";
+    messages = {
+      "claim-rests-on-invertible-nitrogen": "Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier about 25 kJ/mol for simple amines), so its two configurations interconvert and cannot be isolated: the structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's base, an aziridine, a quaternary ammonium ion), draw that feature.",
+      "stereo-drawn-on-invertible-nitrogen": "The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at room temperature; that configuration means nothing. The claim rests on the other stereo units, which is fine; remove the wedge or @ mark at that nitrogen."
+    };
+    nitrogenInversion = {
+      id: NITROGEN_CHECK_ID,
+      defaultSeverity: "error",
+      summary: "A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.",
+      explanation: "A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar transition state with a low barrier (about 20–30 kJ/mol for simple amines; from memory, e.g. Clayden, Greeves & Warren, Organic Chemistry), so its enantiomers interconvert rapidly at room temperature and cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim rests on nothing else, this check carries the error; the form, descriptor and reading checks report their side of the same root cause as notes.",
+      messages,
+      run
+    };
+  }
+});
+
 // src/checks/structure-readable.ts
 import { posix } from "node:path";
 function where(r) {
@@ -44957,7 +45245,7 @@ function escapingPath(recordFile, path) {
   const resolved = posix.normalize(posix.join(posix.dirname(recordFile), path.replace(/\\/g, "/")));
   return resolved === ".." || resolved.startsWith("../") ? resolved : null;
 }
-function run(ctx) {
+function run2(ctx) {
   const findings = [];
   const add = (id, field3, data) => {
     findings.push(finding(id, field3, data));
@@ -45010,7 +45298,13 @@ function run(ctx) {
       });
     }
   });
+  const nitrogenCheckOn = ctx.config.severities[NITROGEN_CHECK_ID] !== "off";
+  let leftToNitrogen = 0;
   for (const remark of ctx.main.facts?.remarks ?? []) {
+    if (nitrogenCheckOn && (ctx.main.facts?.invertibleNitrogens.length ?? 0) > 0 && /amine nitrogen/.test(remark)) {
+      leftToNitrogen++;
+      continue;
+    }
     findings.push(finding("reader-remark", field2, { field: field2, remark }, "note"));
   }
   if (findings.some((f) => f.severity !== "note")) return { findings };
@@ -45018,14 +45312,16 @@ function run(ctx) {
   const atoms = ctx.main.structure?.atoms.length;
   const what = [atoms !== void 0 ? `${atoms} atoms` : null, facts?.formula || null].filter(Boolean).join(", ");
   const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : "";
-  return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}` };
+  const nitrogen = leftToNitrogen ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion` : "";
+  return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}${nitrogen}` };
 }
-var messages, structureReadable;
+var messages2, structureReadable;
 var init_structure_readable = __esm({
   "src/checks/structure-readable.ts"() {
     "use strict";
     init_words();
-    messages = {
+    init_nitrogen_inversion();
+    messages2 = {
       "structure-unreadable": "The structure in {field} could not be read: {error}{where}. Nothing about its stereochemistry can be checked. Correct the SMILES or molfile (check ring-closure digits, brackets and the counts line) and resubmit.",
       "component-unreadable": "Component {index} ({field}) could not be read: {error}{where}. The mixture cannot be checked against it. Correct that structure.",
       "structure-source-refused": 'The structure file for {field} was not read: {error}. Molfiles must be given as a path relative to the record file that stays inside the registry (no "..", no absolute path, no link out). Move the file next to the record.',
@@ -45038,8 +45334,8 @@ var init_structure_readable = __esm({
       defaultSeverity: "error",
       summary: "The structure (SMILES or molfile) can be read, and a molfile path stays inside the registry.",
       explanation: "Every other check works on the structure, so a structure that cannot be read leaves the stereo claim unchecked. SMILES are read by the OpenSMILES specification, molfiles by the CTfile format specification (V2000 and V3000). A molfile is named by a path relative to the record file; a path that leaves the registry (.., an absolute path, or a symbolic link out) is refused, so that a pull request cannot make the audit read files elsewhere on the machine.",
-      messages,
-      run
+      messages: messages2,
+      run: run2
     };
   }
 });
@@ -45132,16 +45428,31 @@ function evidence(f) {
     isomers: Math.max(f.stereoisomers.total, 2 ** undef.length)
   };
 }
-function run2(ctx) {
+function achiralRemedy(f, labels, nitrogen) {
+  if (nitrogen !== null) {
+    return `Its only configuration is drawn at ${nitrogen}, an ordinary amine nitrogen that inverts rapidly; nitrogen-inversion reports this claim as the error to fix.`;
+  }
+  if (f.meso === true) return `Declare meso, or correct the configurations (${labels}).`;
+  if (f.units.length === 0) {
+    return "The structure has no stereo unit, so no configuration can make it chiral: declare achiral, or correct the structure if a chiral compound was meant.";
+  }
+  return `No stereoisomer of this constitution is chiral, so no configuration can make it so (drawn: ${labels}): declare achiral (single-diastereomer for one cis/trans isomer), or correct the structure.`;
+}
+function run3(ctx) {
   const f = ctx.main.facts;
   const record2 = ctx.record;
   if (!record2 || !f) return { findings: [], notApplicable: true };
   const form = record2.stereo.form;
   const e = evidence(f);
   const out = [];
+  const nitrogen = claimRestsOnlyOnNitrogen(ctx) ? f.invertibleNitrogens.map((n) => `nitrogen (atom ${n.atom})`).join(", ") : null;
   const add = (id, extra = {}, severity) => {
-    out.push(finding(id, "stereo.form", { form, ...e, ...extra }, severity));
+    const why = nitrogen !== null ? { explainedBy: NITROGEN_CHECK_ID } : {};
+    out.push(
+      finding(id, "stereo.form", { form, ...e, ...extra, ...why }, nitrogen !== null ? "note" : severity)
+    );
   };
+  const remedy = achiralRemedy(f, e.labels, nitrogen);
   const defined = definedUnits(f);
   const bonds = defined.filter((u) => u.kind === "double-bond").length;
   switch (form) {
@@ -45158,12 +45469,12 @@ function run2(ctx) {
       break;
     case "single-enantiomer":
     case "enantioenriched":
-      if (f.chiral === false && e.undefinedCount === 0) add("enantiomer-but-achiral");
+      if (f.chiral === false && e.undefinedCount === 0) add("enantiomer-but-achiral", { remedy });
       else if (e.undefinedCount > 0)
         add("enantiomer-undefined-units", {}, form === "enantioenriched" ? "warning" : void 0);
       break;
     case "racemate":
-      if (f.chiral === false && e.undefinedCount === 0) add("racemate-but-achiral");
+      if (f.chiral === false && e.undefinedCount === 0) add("racemate-but-achiral", { remedy });
       else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) add("racemate-no-chiral-isomers");
       else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
         const a = f.stereoisomers.achiral;
@@ -45194,22 +45505,23 @@ function passedEvidence(form, f, e) {
   const why = f.chiral !== null && f.mirror.explanation ? ` — ${f.mirror.explanation}` : "";
   return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
-var messages2, formMatchesStructure;
+var messages3, formMatchesStructure;
 var init_form_matches_structure = __esm({
   "src/checks/form-matches-structure.ts"() {
     "use strict";
     init_words();
     init_form_mixtures();
-    messages2 = {
+    init_nitrogen_inversion();
+    messages3 = {
       "achiral-but-chiral": "Declared achiral, but the structure is chiral: it has {allUnits} and its mirror image is a different molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.",
       "achiral-but-open": "Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
       "achiral-is-meso": "Declared achiral. The structure is indeed achiral ({mirror}), but its constitution also has chiral stereoisomers ({chiralIsomers} of {totalIsomers}), which makes this one a meso compound. Declare meso.",
       "meso-but-chiral": "Declared meso, but the structure is chiral: it defines {units} and its mirror image is a different molecule ({mirror}). A meso compound is achiral. Check the configurations ({labels}) or declare single-enantiomer.",
       "meso-but-no-chiral-isomers": "Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so the compound is simply achiral: meso applies only to an achiral member of a set that includes chiral members. Declare achiral.",
       "meso-but-open": "Declared meso, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}); the drawing also covers chiral stereoisomers. Define every unit as in the meso form.",
-      "enantiomer-but-achiral": "Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and no enantiomeric excess. Declare achiral or meso, or correct the configurations ({labels}).",
+      "enantiomer-but-achiral": "Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and no enantiomeric excess. {remedy}",
       "enantiomer-undefined-units": "Declared {form}, but {undefinedCount} stereo unit(s) are undefined: {undefinedUnits}. The structure then stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.",
-      "racemate-but-achiral": "Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a racemate. Declare achiral or meso, or correct the configurations ({labels}).",
+      "racemate-but-achiral": "Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a racemate. {remedy}",
       "racemate-no-chiral-isomers": "Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so there are no enantiomers to mix. Declare achiral.",
       "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount} undefined stereo unit(s) ({undefinedUnits}). This constitution has {pairs} pair(s) of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
       "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount} stereo unit(s) ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
@@ -45221,8 +45533,8 @@ var init_form_matches_structure = __esm({
       defaultSeverity: "error",
       summary: "The declared stereo form agrees with the chirality, meso character and defined units of the structure.",
       explanation: "IUPAC Gold Book definitions: a chiral molecule is not superimposable on its mirror image; enantiomers are mirror-image stereoisomers; a racemate is an equimolar mixture of a pair of enantiomers, so it needs a chiral structure; a meso compound is the achiral member of a set of diastereoisomers that also includes chiral members; diastereoisomers are stereoisomers that are not enantiomers (cis-trans isomers included). A single enantiomer therefore needs a chiral structure with every stereo unit defined, a single diastereomer two or more stereogenic units (or a stereogenic double bond), and a diastereomer mixture two or more components that are pairwise diastereomers with the constitution of the parent. The evidence is the engine's mirror-image analysis (the symmetry element that makes a structure achiral) and its stereoisomer count.",
-      messages: messages2,
-      run: run2
+      messages: messages3,
+      run: run3
     };
   }
 });
@@ -45231,7 +45543,7 @@ var init_form_matches_structure = __esm({
 function atomList(atoms) {
   return atoms.length === 1 ? `atom ${atoms[0]}` : `atoms ${atoms.join(", ")}`;
 }
-function run3(ctx) {
+function run4(ctx) {
   const f = ctx.main.facts;
   const record2 = ctx.record;
   if (!record2 || !f) return { findings: [], notApplicable: true };
@@ -45306,12 +45618,12 @@ function run3(ctx) {
     passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}`
   };
 }
-var messages3, enhancedStereoMatchesForm;
+var messages4, enhancedStereoMatchesForm;
 var init_enhanced_stereo_matches_form = __esm({
   "src/checks/enhanced-stereo-matches-form.ts"() {
     "use strict";
     init_words();
-    messages3 = {
+    messages4 = {
       "and-group-with-single-enantiomer": 'Declared single-enantiomer, but the structure puts {atoms} in an AND group (&{group}), which means "this stereoisomer and its mirror image, together" — a racemic or enantiomer-mixture drawing. Remove the AND group (absolute stereo) or declare racemate / enantioenriched.',
       "or-group-with-racemate": 'Declared racemate, but the structure puts {atoms} in an OR group (or{group}), which means "this stereoisomer or its mirror image, unknown which" — one enantiomer, not a mixture. Use an AND group for a racemate, or declare single-enantiomer with relative descriptors (rel- or R*).',
       "racemate-drawn-absolute": "Declared racemate, but the structure is drawn as one enantiomer with absolute stereo ({labels}; no AND group{flag}). A racemate is drawn with its centres in an AND group (&1), or without stereo marks when it has one stereocentre. Add the AND group, or correct the form.",
@@ -45325,8 +45637,8 @@ var init_enhanced_stereo_matches_form = __esm({
       defaultSeverity: "error",
       summary: "Enhanced-stereo groups (ABS, AND, OR) agree with the declared form and descriptors.",
       explanation: "Enhanced stereo, as defined in the CTfile format specification (V3000 collection blocks MDLV30/STEABS, STERAC, STEREL) and CXSMILES, says what a drawn configuration stands for: ABS — this stereoisomer; AND (racemic group) — this stereoisomer and its mirror image, a mixture; OR (relative group) — this stereoisomer or its mirror image, unknown which. A single enantiomer cannot carry an AND group, a racemate cannot carry an OR group and should not be drawn as absolute, and absolute descriptors (R, S without rel or *) contradict an OR group (IUPAC 2013, P-93.1.3: relative configuration is written rel- or R*).",
-      messages: messages3,
-      run: run3
+      messages: messages4,
+      run: run4
     };
   }
 });
@@ -45401,12 +45713,55 @@ var init_descriptor_prefixes = __esm({
   }
 });
 
+// src/checks/repeated-components.ts
+function unitSignature(units) {
+  return units.map((u) => `${u.kind}/${u.equivalenceClass}/${u.defined ? u.label ?? "?" : "-"}`).sort().join(",");
+}
+function repeatedComponents(structure, facts, engine) {
+  const out = /* @__PURE__ */ new Map();
+  const comps = facts.components;
+  if (!structure || comps.length < 2) return out;
+  const atomsOf = connectedComponents(structure);
+  const heavy = (atoms) => atoms.filter((a) => structure.atoms[a].atomicNumber !== 1).length;
+  if (atomsOf.length !== comps.length || atomsOf.some((a, k) => heavy(a) !== comps[k].heavyAtoms)) return out;
+  const unitsOf = comps.map((_, k) => facts.units.filter((u) => u.component === k));
+  const sub3 = /* @__PURE__ */ new Map();
+  const part = (k) => {
+    let s = sub3.get(k);
+    if (!s) sub3.set(k, s = extractAtoms(structure, atomsOf[k]));
+    return s;
+  };
+  for (let k = 1; k < comps.length; k++) {
+    if (unitsOf[k].length === 0) continue;
+    for (let j = 0; j < k; j++) {
+      if (out.has(j)) continue;
+      if (comps[j].formula !== comps[k].formula || comps[j].heavyAtoms !== comps[k].heavyAtoms) continue;
+      if (unitSignature(unitsOf[j]) !== unitSignature(unitsOf[k])) continue;
+      if (engine.relate(part(j), part(k)).relation === "identical") {
+        out.set(k, j);
+        break;
+      }
+    }
+  }
+  return out;
+}
+function distinctUnits(facts, repeated) {
+  return repeated.size === 0 ? facts.units : facts.units.filter((u) => !repeated.has(u.component));
+}
+var init_repeated_components = __esm({
+  "src/checks/repeated-components.ts"() {
+    "use strict";
+    init_components();
+    init_normalize();
+  }
+});
+
 // src/checks/descriptors-match-structure.ts
 function countsText(c) {
   const e = Object.entries(c).filter(([, v]) => v > 0);
   return e.length ? e.map(([k, v]) => `${v} ${k}`).join(", ") : "no labelled units";
 }
-function compareOne(field2, text, parsed, facts, out, form, evidence2) {
+function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenNote = false) {
   const add = (id, data, severity) => {
     out.push(finding(id, field2, { field: field2, text, ...data }, severity));
   };
@@ -45418,6 +45773,18 @@ function compareOne(field2, text, parsed, facts, out, form, evidence2) {
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
   const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
   const computed = labelList(facts.units);
+  if (!cmp.agrees && facts.units.length === 0 && facts.invertibleNitrogens.length > 0) {
+    add(
+      "descriptor-on-invertible-nitrogen",
+      {
+        atoms: facts.invertibleNitrogens.map((n) => `nitrogen (atom ${n.atom})`).join(", "),
+        seeAlso: nitrogenNote ? " (nitrogen-inversion reports the claim)" : "",
+        ...nitrogenNote ? { explainedBy: NITROGEN_CHECK_ID } : {}
+      },
+      nitrogenNote ? "note" : void 0
+    );
+    return cmp;
+  }
   if (cmp.method === "per-locant") {
     if (cmp.mismatches.length) {
       const mismatches = cmp.mismatches.map(
@@ -45486,25 +45853,40 @@ function sameItems(a, b) {
   const k = (p) => p.mode + "|" + p.items.map((i) => `${withLocants ? i.locant : ""}${i.pair ?? i.label}${i.relativeStar ? "*" : ""}`).sort().join(",");
   return k(a) === k(b);
 }
-function run4(ctx) {
+function comparable(r, ctx) {
+  const f = r.facts;
+  if (!f) return null;
+  const repeated = repeatedComponents(r.structure, f, ctx.engine);
+  if (repeated.size === 0) return { facts: f, repeats: "" };
+  const units = distinctUnits(f, repeated);
+  const words = [...repeated].map(([k, j]) => `component ${k + 1} repeats component ${j + 1}`).join(", ");
+  return {
+    facts: { ...f, units, undefined: units.filter((u) => !u.defined).length },
+    repeats: ` (${words} of the structure and is counted once)`
+  };
+}
+function run5(ctx) {
   const record2 = ctx.record;
-  const f = ctx.main.facts;
-  if (!record2 || !f) return { findings: [], notApplicable: true };
+  const c0 = comparable(ctx.main, ctx);
+  if (!record2 || !c0) return { findings: [], notApplicable: true };
+  const f = c0.facts;
   const decl = declaredDescriptors(record2);
   const out = [];
   const evidence2 = [];
-  const note = (what, cmp) => {
+  const note = (what, cmp, compared = f, repeats = c0.repeats) => {
     if (!cmp || cmp.method === "none") return;
     const how = cmp.method === "per-locant" ? "per locant (atom maps)" : `as counts (${cmp.whyNotPerLocant})`;
     evidence2.push(
-      `${what} agrees with computed ${labelList(f.units)}, compared ${how}${cmp.matchedInverted ? ", up to inversion" : ""}`
+      `${what} agrees with computed ${labelList(compared.units)}${repeats}, compared ${how}${cmp.matchedInverted ? ", up to inversion" : ""}`
     );
   };
   const fieldText = record2.stereo.descriptors ?? "";
+  const nitrogenNote = claimRestsOnlyOnNitrogen(ctx);
+  const form = record2.stereo.form;
   if (decl.field)
     note(
       fieldText,
-      compareOne("stereo.descriptors", fieldText, decl.field, f, out, record2.stereo.form, evidence2)
+      compareOne("stereo.descriptors", fieldText, decl.field, f, out, form, evidence2, nitrogenNote)
     );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
@@ -45513,7 +45895,7 @@ function run4(ctx) {
     } else if (!decl.field || decl.field.items.length === 0) {
       const name = record2.name ?? "";
       const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2013\u2212]+$/, "");
-      note(front, compareOne("name", front, decl.name, f, out, record2.stereo.form, evidence2));
+      note(front, compareOne("name", front, decl.name, f, out, form, evidence2, nitrogenNote));
     }
   } else if (decl.name) {
     for (const p of decl.name.problemDetails) {
@@ -45533,12 +45915,15 @@ function run4(ctx) {
     }
   }
   (record2.stereo.components ?? []).forEach((c, i) => {
-    const cf = ctx.components[i]?.facts;
-    if (!c.descriptors || !cf) return;
+    const cc = ctx.components[i] ? comparable(ctx.components[i], ctx) : null;
+    if (!c.descriptors || !cc) return;
     const field2 = `stereo.components.${i}.descriptors`;
+    const cf = cc.facts;
     note(
       `component ${i + 1} ${c.descriptors}`,
-      compareOne(field2, c.descriptors, parseDescriptors(c.descriptors), cf, out, "component", evidence2)
+      compareOne(field2, c.descriptors, parseDescriptors(c.descriptors), cf, out, "component", evidence2),
+      cf,
+      cc.repeats
     );
   });
   out.push(...prefixFindings(ctx, decl, f));
@@ -45548,7 +45933,7 @@ function run4(ctx) {
   if (out.some((x) => x.severity !== "note")) return { findings: out };
   return { findings: out, passed: evidence2.join("; ") || "descriptor prefixes agree with the declared form" };
 }
-var messages4, descriptorsMatchStructure;
+var messages5, descriptorsMatchStructure;
 var init_descriptors_match_structure = __esm({
   "src/checks/descriptors-match-structure.ts"() {
     "use strict";
@@ -45556,7 +45941,9 @@ var init_descriptors_match_structure = __esm({
     init_words();
     init_descriptors();
     init_descriptor_prefixes();
-    messages4 = {
+    init_repeated_components();
+    init_nitrogen_inversion();
+    messages5 = {
       "descriptor-unreadable": "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).",
       "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} (compared per locant through atom-map numbers). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
       "descriptor-not-stereo-unit": "{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
@@ -45565,6 +45952,7 @@ var init_descriptors_match_structure = __esm({
       "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
+      "descriptor-on-invertible-nitrogen": "{field} declares {text}, but the structure has no stereo unit: its only configuration is drawn at {atoms}, an ordinary amine nitrogen that inverts rapidly and is not a stereocentre, so the descriptors describe nothing that can be isolated. Drop them{seeAlso}.",
       "descriptor-remark": "{field}: {remark}.",
       "fischer-not-compared": "{field} uses the Fischer–Rosanoff descriptor {fischer}, which is defined by analogy with glyceraldehyde and is not comparable with CIP labels, so it was not checked against the structure. Add CIP descriptors, e.g. (S) for L-alanine, to have them checked.",
       ...prefixMessages
@@ -45574,8 +45962,8 @@ var init_descriptors_match_structure = __esm({
       defaultSeverity: "error",
       summary: "Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.",
       explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; otherwise only the numbers of R, S, E, Z … can be compared. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared.",
-      messages: messages4,
-      run: run4
+      messages: messages5,
+      run: run5
     };
   }
 });
@@ -45640,7 +46028,16 @@ var init_ratio = __esm({
 });
 
 // src/checks/ratio-and-ee-consistent.ts
-function run5(ctx) {
+function componentsAreDiastereomers(ctx) {
+  const s = ctx.components.map((c) => c.structure).filter((x) => x !== null);
+  for (let i = 0; i < s.length; i++) {
+    for (let j = i + 1; j < s.length; j++) {
+      if (ctx.engine.relate(s[i], s[j]).relation !== "diastereomers") return false;
+    }
+  }
+  return true;
+}
+function run6(ctx) {
   const record2 = ctx.record;
   if (!record2) return { findings: [], notApplicable: true };
   const { form, ratio, ee, components } = record2.stereo;
@@ -45690,7 +46087,7 @@ function run5(ctx) {
           });
         }
       }
-      if (form === "diastereomer-mixture" && parts.length >= 2 && parts.every((p) => p === parts[0])) {
+      if (form === "diastereomer-mixture" && parts.length >= 2 && parts.every((p) => p === parts[0]) && componentsAreDiastereomers(ctx)) {
         add("diastereomer-ratio-exactly-even", "stereo.ratio", { ratio }, "note");
       }
     }
@@ -45734,13 +46131,13 @@ function run5(ctx) {
     evidence2.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
   return { findings: out, passed: `${evidence2.join("; ")}; consistent with ${form}` };
 }
-var messages5, ratioAndEeConsistent;
+var messages6, ratioAndEeConsistent;
 var init_ratio_and_ee_consistent = __esm({
   "src/checks/ratio-and-ee-consistent.ts"() {
     "use strict";
     init_ratio();
     init_words();
-    messages5 = {
+    messages6 = {
       "ratio-unreadable": "The ratio '{ratio}' could not be read: {problem} (at character {offset}). Write it as parts separated by colons, e.g. 70:30 or 97.5:2.5.",
       "ratio-parts-not-100": "The ratio {ratio} reads as percentages but its parts sum to {sum}, not 100 (tolerance ±{tolerance}). Correct the parts; if relative amounts were meant, write them as small whole numbers (e.g. 2:1).",
       "ratio-components-count": "The ratio {ratio} has {parts} part(s) but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
@@ -45758,8 +46155,8 @@ var init_ratio_and_ee_consistent = __esm({
       defaultSeverity: "error",
       summary: "Component ratio and enantiomeric excess agree with each other and with the declared form.",
       explanation: "Enantiomeric excess is |F(+) − F(−)| for mole fractions of the two enantiomers, in percent 100·|a − b|/(a + b) for a ratio a:b (IUPAC Gold Book, enantiomer excess). A racemate is an equimolar mixture of a pair of enantiomers (Gold Book, racemate), so 50:50 and ee 0. Diastereomers differ in energy and are normally formed in unequal amounts; enantiomers have equal energies, so achiral conditions give 50:50 — an exactly even diastereomer ratio deserves a question. Tolerances (ratio sum, racemate ratio, ee agreement) and the single-enantiomer ee threshold are registry settings (common practice, no source).",
-      messages: messages5,
-      run: run5
+      messages: messages6,
+      run: run6
     };
   }
 });
@@ -45776,7 +46173,7 @@ function conditions(r) {
 function isSodiumD(nm) {
   return nm === void 0 || Math.abs(nm - 589) <= 1;
 }
-function run6(ctx) {
+function run7(ctx) {
   const record2 = ctx.record;
   if (!record2) return { findings: [], notApplicable: true };
   const form = record2.stereo.form;
@@ -45817,12 +46214,12 @@ function run6(ctx) {
     passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}`
   };
 }
-var messages6, WHY, rotationConsistent;
+var messages7, WHY, rotationConsistent;
 var init_rotation_consistent = __esm({
   "src/checks/rotation-consistent.ts"() {
     "use strict";
     init_words();
-    messages6 = {
+    messages7 = {
       "rotation-should-be-zero": "Declared {form}, but the specific rotation is {value}° ({conditions}); it should be zero within ±{tolerance}°, because {why}. Check the sample (an enantiomeric excess, an optically active impurity) or the form.",
       "sign-disagrees-with-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}). Correct the sign in the name or descriptors, or re-check the measurement.{wavelengthNote}",
       "sign-with-zero-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. A sign needs a measurable rotation: measure at higher concentration or another wavelength, or drop the sign.",
@@ -45838,60 +46235,6 @@ var init_rotation_consistent = __esm({
       defaultSeverity: "error",
       summary: "The specific rotation agrees with the declared form and with the (+)/(−) sign in the name.",
       explanation: "Optical activity needs chiral molecules in enantiomeric excess: an achiral or meso compound is optically inactive, and a racemate is optically inactive because its enantiomers rotate equally in opposite senses (IUPAC Gold Book: optical activity, racemate, meso). The prefixes (+) and (−) state the sign of rotation, normally at the sodium D line, 589 nm (IUPAC 2013, P-93). A single enantiomer with zero rotation is possible but rare and is only noted. What counts as zero is a registry setting (zeroRotationTolerance).",
-      messages: messages6,
-      run: run6
-    };
-  }
-});
-
-// src/checks/nitrogen-inversion.ts
-function run7(ctx) {
-  const record2 = ctx.record;
-  const f = ctx.main.facts;
-  if (!record2 || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
-  const form = record2.stereo.form;
-  const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
-  const out = [];
-  const claims = STEREO_CLAIM_FORMS.includes(form);
-  const others2 = definedUnits(f).filter(
-    (u) => !f.invertibleNitrogens.some((n) => u.atoms.includes(n.atom) && u.kind === "tetrahedral")
-  );
-  const atomsOf = (list) => list.map((n) => `(atom ${n.atom})`).join(", ");
-  if (claims && others2.length === 0) {
-    const list = drawn.length ? drawn : f.invertibleNitrogens;
-    out.push(
-      finding("claim-rests-on-invertible-nitrogen", "stereo.form", {
-        form,
-        atoms: atomsOf(list),
-        drawnWithStereo: drawn.length > 0
-      })
-    );
-  } else if (drawn.length > 0) {
-    out.push(
-      finding("stereo-drawn-on-invertible-nitrogen", "structure", { form, atoms: atomsOf(drawn) }, "note")
-    );
-  }
-  if (out.some((x) => x.severity !== "note")) return { findings: out };
-  if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
-  return {
-    findings: out,
-    passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens`
-  };
-}
-var messages7, nitrogenInversion;
-var init_nitrogen_inversion = __esm({
-  "src/checks/nitrogen-inversion.ts"() {
-    "use strict";
-    init_words();
-    messages7 = {
-      "claim-rests-on-invertible-nitrogen": "Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier about 25 kJ/mol for simple amines), so its two configurations interconvert and cannot be isolated: the structure has no stereocentre. Declare achiral, or, if the nitrogen is locked (a bridgehead as in Tröger's base, an aziridine, a quaternary ammonium ion), draw that feature.",
-      "stereo-drawn-on-invertible-nitrogen": "The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at room temperature; that configuration means nothing. The claim rests on the other stereo units, which is fine; remove the wedge or @ mark at that nitrogen."
-    };
-    nitrogenInversion = {
-      id: "nitrogen-inversion",
-      defaultSeverity: "error",
-      summary: "A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.",
-      explanation: "A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar transition state with a low barrier (about 20–30 kJ/mol for simple amines; from memory, e.g. Clayden, Greeves & Warren, Organic Chemistry), so its enantiomers interconvert rapidly at room temperature and cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres.",
       messages: messages7,
       run: run7
     };
@@ -45899,6 +46242,18 @@ var init_nitrogen_inversion = __esm({
 });
 
 // src/checks/consistent-with-registry.ts
+function registeredLater(a, b) {
+  if (a.id !== b.id) {
+    if (a.id === null) return true;
+    if (b.id === null) return false;
+    return a.id.localeCompare(b.id, "en", { numeric: true }) > 0;
+  }
+  return a.file.localeCompare(b.file, "en", { numeric: true }) > 0;
+}
+function carriesConflict(me, other) {
+  if (!me || !other.underReview) return true;
+  return registeredLater(me, other);
+}
 function selfEntry(ctx) {
   return ctx.registry.entries.find((e) => e.file === ctx.loaded.file && e.id === ctx.loaded.id);
 }
@@ -45931,6 +46286,12 @@ function run8(ctx) {
   const form = record2.stereo.form;
   const out = [];
   const add = (id, other, data, severity) => {
+    if (CONFLICTS.includes(id) && !carriesConflict(me, other)) {
+      pointers.push(other.id ?? other.file);
+      data = { conflict: CONFLICT_WORDS[id] ?? id, otherMessageId: id, ...data };
+      id = "conflict-reported-on-later-record";
+      severity = "note";
+    }
     out.push(
       finding(
         id,
@@ -45948,6 +46309,7 @@ function run8(ctx) {
     );
   };
   let compared = 0;
+  const pointers = [];
   for (const other of ctx.registry.withConstitution(f.constitutionKey)) {
     const otherFacts = other.main.facts;
     if (isSelf(ctx, other) || !other.main.structure || !otherFacts) continue;
@@ -45981,10 +46343,10 @@ function run8(ctx) {
   if (out.some((x) => x.severity !== "note")) return { findings: out };
   return {
     findings: out,
-    passed: compared === 0 ? "no other registered record has this constitution" : `compared with ${compared} registered record(s) of the same constitution; no duplicate or conflict`
+    passed: compared === 0 ? "no other registered record has this constitution" : pointers.length > 0 ? `compared with ${compared} registered record(s) of the same constitution; the conflict with ${[...new Set(pointers)].join(", ")} is reported on the later record` : `compared with ${compared} registered record(s) of the same constitution; no duplicate or conflict`
   };
 }
-var messages8, ENANTIOPURE, consistentWithRegistry;
+var messages8, CONFLICTS, CONFLICT_WORDS, ENANTIOPURE, consistentWithRegistry;
 var init_consistent_with_registry = __esm({
   "src/checks/consistent-with-registry.ts"() {
     "use strict";
@@ -45997,14 +46359,27 @@ var init_consistent_with_registry = __esm({
       "enantiomer-registered": "This compound is the enantiomer of {otherId} ({otherFile}{otherName}): {explanation}. That is fine if the enantiomer is meant; confirm that the configuration was not drawn inverted by mistake.",
       "enantiomer-rotation-same-sign": "This compound and its enantiomer {otherId} have rotations of the same sign ({value}° here, {otherValue}° for {otherId}), measured alike ({conditions}). Enantiomers rotate plane-polarised light by equal amounts in opposite senses, so one structure, one rotation or one record is wrong.",
       "enantiomer-rotation-magnitude": "This compound and its enantiomer {otherId} were measured alike ({conditions}) but their rotations differ in size ({value}° vs {otherValue}°). Enantiomers of equal purity have equal and opposite rotations; check the ee of both samples.",
-      "enantiomer-form-conflict": "This compound is declared {form}, but its enantiomer {otherId} is registered as {otherForm}. Enantiomers have the same kind of form (both single enantiomers, or both enriched); check both records."
+      "enantiomer-form-conflict": "This compound is declared {form}, but its enantiomer {otherId} is registered as {otherForm}. Enantiomers have the same kind of form (both single enantiomers, or both enriched); check both records.",
+      "conflict-reported-on-later-record": "{otherId} ({otherFile}), registered after this record, conflicts with it ({conflict}); the finding is reported on {otherId}. Nothing to change here unless {otherId} turns out to be right."
+    };
+    CONFLICTS = [
+      "already-registered",
+      "same-structure-different-form",
+      "enantiomer-rotation-same-sign",
+      "enantiomer-form-conflict"
+    ];
+    CONFLICT_WORDS = {
+      "already-registered": "the same structure registered again under the same form",
+      "same-structure-different-form": "the same structure under another form",
+      "enantiomer-rotation-same-sign": "enantiomers with rotations of the same sign",
+      "enantiomer-form-conflict": "enantiomers of different kinds of form"
     };
     ENANTIOPURE = ["single-enantiomer", "enantioenriched"];
     consistentWithRegistry = {
       id: "consistent-with-registry",
       defaultSeverity: "error",
       summary: "A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.",
-      explanation: "Records of the same constitution are related by the engine (identical, enantiomers, diastereomers). An identical structure is the same compound: register a batch, not a new number; under a different form one record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). Only records under review are checked, each against the other records in the checkout; a racemic drawing (AND group) is compared only with racemic drawings, a relative one (OR group) only with relative ones.",
+      explanation: "Records of the same constitution are related by the engine (identical, enantiomers, diastereomers). An identical structure is the same compound: register a batch, not a new number; under a different form one record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). Only records under review are checked, each against the other records in the checkout; a racemic drawing (AND group) is compared only with racemic drawings, a relative one (OR group) only with relative ones. A conflict between two records (a duplicate, the same structure under another form, enantiomers of the same rotation sign or of different kinds of form) is reported once: on the record under review when the other is not under review (a pull request), and, when both are (a full audit), on the one registered later — the higher registry id, a record without an id counting as newest; the earlier record gets a note naming it (common practice, no source).",
       messages: messages8,
       run: run8
     };
@@ -46127,9 +46502,9 @@ var init_checks = __esm({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/eta.js
+// node_modules/cli-progress/lib/eta.js
 var require_eta = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/eta.js"(exports, module) {
+  "node_modules/cli-progress/lib/eta.js"(exports, module) {
     var ETA = class {
       constructor(length, initTime, initValue) {
         this.etaBufferLength = length || 100;
@@ -46174,9 +46549,9 @@ var require_eta = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/terminal.js
+// node_modules/cli-progress/lib/terminal.js
 var require_terminal = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/terminal.js"(exports, module) {
+  "node_modules/cli-progress/lib/terminal.js"(exports, module) {
     var _readline = __require("readline");
     var Terminal = class {
       constructor(outputStream) {
@@ -46293,9 +46668,9 @@ var require_terminal = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/ansi-regex/index.js
+// node_modules/ansi-regex/index.js
 var require_ansi_regex = __commonJS({
-  "../../work/main/node_modules/ansi-regex/index.js"(exports, module) {
+  "node_modules/ansi-regex/index.js"(exports, module) {
     "use strict";
     module.exports = ({ onlyFirst = false } = {}) => {
       const pattern = [
@@ -46307,18 +46682,18 @@ var require_ansi_regex = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/strip-ansi/index.js
+// node_modules/strip-ansi/index.js
 var require_strip_ansi = __commonJS({
-  "../../work/main/node_modules/strip-ansi/index.js"(exports, module) {
+  "node_modules/strip-ansi/index.js"(exports, module) {
     "use strict";
     var ansiRegex = require_ansi_regex();
     module.exports = (string) => typeof string === "string" ? string.replace(ansiRegex(), "") : string;
   }
 });
 
-// ../../work/main/node_modules/is-fullwidth-code-point/index.js
+// node_modules/is-fullwidth-code-point/index.js
 var require_is_fullwidth_code_point = __commonJS({
-  "../../work/main/node_modules/is-fullwidth-code-point/index.js"(exports, module) {
+  "node_modules/is-fullwidth-code-point/index.js"(exports, module) {
     "use strict";
     var isFullwidthCodePoint = (codePoint) => {
       if (Number.isNaN(codePoint)) {
@@ -46349,9 +46724,9 @@ var require_is_fullwidth_code_point = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/emoji-regex/index.js
+// node_modules/emoji-regex/index.js
 var require_emoji_regex = __commonJS({
-  "../../work/main/node_modules/emoji-regex/index.js"(exports, module) {
+  "node_modules/emoji-regex/index.js"(exports, module) {
     "use strict";
     module.exports = function() {
       return /\uD83C\uDFF4\uDB40\uDC67\uDB40\uDC62(?:\uDB40\uDC65\uDB40\uDC6E\uDB40\uDC67|\uDB40\uDC73\uDB40\uDC63\uDB40\uDC74|\uDB40\uDC77\uDB40\uDC6C\uDB40\uDC73)\uDB40\uDC7F|\uD83D\uDC68(?:\uD83C\uDFFC\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68\uD83C\uDFFB|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFF\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFE])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFE\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFD])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFD\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFC])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\u200D(?:\u2764\uFE0F\u200D(?:\uD83D\uDC8B\u200D)?\uD83D\uDC68|(?:\uD83D[\uDC68\uDC69])\u200D(?:\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67]))|\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67])|(?:\uD83D[\uDC68\uDC69])\u200D(?:\uD83D[\uDC66\uDC67])|[\u2695\u2696\u2708]\uFE0F|\uD83D[\uDC66\uDC67]|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|(?:\uD83C\uDFFB\u200D[\u2695\u2696\u2708]|\uD83C\uDFFF\u200D[\u2695\u2696\u2708]|\uD83C\uDFFE\u200D[\u2695\u2696\u2708]|\uD83C\uDFFD\u200D[\u2695\u2696\u2708]|\uD83C\uDFFC\u200D[\u2695\u2696\u2708])\uFE0F|\uD83C\uDFFB\u200D(?:\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C[\uDFFB-\uDFFF])|(?:\uD83E\uDDD1\uD83C\uDFFB\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFC\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)\uD83C\uDFFB|\uD83E\uDDD1(?:\uD83C\uDFFF\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1(?:\uD83C[\uDFFB-\uDFFF])|\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1)|(?:\uD83E\uDDD1\uD83C\uDFFE\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFF\u200D\uD83E\uDD1D\u200D(?:\uD83D[\uDC68\uDC69]))(?:\uD83C[\uDFFB-\uDFFE])|(?:\uD83E\uDDD1\uD83C\uDFFC\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFD\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)(?:\uD83C[\uDFFB\uDFFC])|\uD83D\uDC69(?:\uD83C\uDFFE\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFD\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFC\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFD-\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFB\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFC-\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFD\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFC\uDFFE\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\u200D(?:\u2764\uFE0F\u200D(?:\uD83D\uDC8B\u200D(?:\uD83D[\uDC68\uDC69])|\uD83D[\uDC68\uDC69])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFF\u200D(?:\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD]))|\uD83D\uDC69\u200D\uD83D\uDC69\u200D(?:\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67]))|(?:\uD83E\uDDD1\uD83C\uDFFD\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFE\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)(?:\uD83C[\uDFFB-\uDFFD])|\uD83D\uDC69\u200D\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC69\u200D\uD83D\uDC69\u200D(?:\uD83D[\uDC66\uDC67])|(?:\uD83D\uDC41\uFE0F\u200D\uD83D\uDDE8|\uD83D\uDC69(?:\uD83C\uDFFF\u200D[\u2695\u2696\u2708]|\uD83C\uDFFE\u200D[\u2695\u2696\u2708]|\uD83C\uDFFC\u200D[\u2695\u2696\u2708]|\uD83C\uDFFB\u200D[\u2695\u2696\u2708]|\uD83C\uDFFD\u200D[\u2695\u2696\u2708]|\u200D[\u2695\u2696\u2708])|(?:(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)\uFE0F|\uD83D\uDC6F|\uD83E[\uDD3C\uDDDE\uDDDF])\u200D[\u2640\u2642]|(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)(?:\uD83C[\uDFFB-\uDFFF])\u200D[\u2640\u2642]|(?:\uD83C[\uDFC3\uDFC4\uDFCA]|\uD83D[\uDC6E\uDC71\uDC73\uDC77\uDC81\uDC82\uDC86\uDC87\uDE45-\uDE47\uDE4B\uDE4D\uDE4E\uDEA3\uDEB4-\uDEB6]|\uD83E[\uDD26\uDD37-\uDD39\uDD3D\uDD3E\uDDB8\uDDB9\uDDCD-\uDDCF\uDDD6-\uDDDD])(?:(?:\uD83C[\uDFFB-\uDFFF])\u200D[\u2640\u2642]|\u200D[\u2640\u2642])|\uD83C\uDFF4\u200D\u2620)\uFE0F|\uD83D\uDC69\u200D\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67])|\uD83C\uDFF3\uFE0F\u200D\uD83C\uDF08|\uD83D\uDC15\u200D\uD83E\uDDBA|\uD83D\uDC69\u200D\uD83D\uDC66|\uD83D\uDC69\u200D\uD83D\uDC67|\uD83C\uDDFD\uD83C\uDDF0|\uD83C\uDDF4\uD83C\uDDF2|\uD83C\uDDF6\uD83C\uDDE6|[#\*0-9]\uFE0F\u20E3|\uD83C\uDDE7(?:\uD83C[\uDDE6\uDDE7\uDDE9-\uDDEF\uDDF1-\uDDF4\uDDF6-\uDDF9\uDDFB\uDDFC\uDDFE\uDDFF])|\uD83C\uDDF9(?:\uD83C[\uDDE6\uDDE8\uDDE9\uDDEB-\uDDED\uDDEF-\uDDF4\uDDF7\uDDF9\uDDFB\uDDFC\uDDFF])|\uD83C\uDDEA(?:\uD83C[\uDDE6\uDDE8\uDDEA\uDDEC\uDDED\uDDF7-\uDDFA])|\uD83E\uDDD1(?:\uD83C[\uDFFB-\uDFFF])|\uD83C\uDDF7(?:\uD83C[\uDDEA\uDDF4\uDDF8\uDDFA\uDDFC])|\uD83D\uDC69(?:\uD83C[\uDFFB-\uDFFF])|\uD83C\uDDF2(?:\uD83C[\uDDE6\uDDE8-\uDDED\uDDF0-\uDDFF])|\uD83C\uDDE6(?:\uD83C[\uDDE8-\uDDEC\uDDEE\uDDF1\uDDF2\uDDF4\uDDF6-\uDDFA\uDDFC\uDDFD\uDDFF])|\uD83C\uDDF0(?:\uD83C[\uDDEA\uDDEC-\uDDEE\uDDF2\uDDF3\uDDF5\uDDF7\uDDFC\uDDFE\uDDFF])|\uD83C\uDDED(?:\uD83C[\uDDF0\uDDF2\uDDF3\uDDF7\uDDF9\uDDFA])|\uD83C\uDDE9(?:\uD83C[\uDDEA\uDDEC\uDDEF\uDDF0\uDDF2\uDDF4\uDDFF])|\uD83C\uDDFE(?:\uD83C[\uDDEA\uDDF9])|\uD83C\uDDEC(?:\uD83C[\uDDE6\uDDE7\uDDE9-\uDDEE\uDDF1-\uDDF3\uDDF5-\uDDFA\uDDFC\uDDFE])|\uD83C\uDDF8(?:\uD83C[\uDDE6-\uDDEA\uDDEC-\uDDF4\uDDF7-\uDDF9\uDDFB\uDDFD-\uDDFF])|\uD83C\uDDEB(?:\uD83C[\uDDEE-\uDDF0\uDDF2\uDDF4\uDDF7])|\uD83C\uDDF5(?:\uD83C[\uDDE6\uDDEA-\uDDED\uDDF0-\uDDF3\uDDF7-\uDDF9\uDDFC\uDDFE])|\uD83C\uDDFB(?:\uD83C[\uDDE6\uDDE8\uDDEA\uDDEC\uDDEE\uDDF3\uDDFA])|\uD83C\uDDF3(?:\uD83C[\uDDE6\uDDE8\uDDEA-\uDDEC\uDDEE\uDDF1\uDDF4\uDDF5\uDDF7\uDDFA\uDDFF])|\uD83C\uDDE8(?:\uD83C[\uDDE6\uDDE8\uDDE9\uDDEB-\uDDEE\uDDF0-\uDDF5\uDDF7\uDDFA-\uDDFF])|\uD83C\uDDF1(?:\uD83C[\uDDE6-\uDDE8\uDDEE\uDDF0\uDDF7-\uDDFB\uDDFE])|\uD83C\uDDFF(?:\uD83C[\uDDE6\uDDF2\uDDFC])|\uD83C\uDDFC(?:\uD83C[\uDDEB\uDDF8])|\uD83C\uDDFA(?:\uD83C[\uDDE6\uDDEC\uDDF2\uDDF3\uDDF8\uDDFE\uDDFF])|\uD83C\uDDEE(?:\uD83C[\uDDE8-\uDDEA\uDDF1-\uDDF4\uDDF6-\uDDF9])|\uD83C\uDDEF(?:\uD83C[\uDDEA\uDDF2\uDDF4\uDDF5])|(?:\uD83C[\uDFC3\uDFC4\uDFCA]|\uD83D[\uDC6E\uDC71\uDC73\uDC77\uDC81\uDC82\uDC86\uDC87\uDE45-\uDE47\uDE4B\uDE4D\uDE4E\uDEA3\uDEB4-\uDEB6]|\uD83E[\uDD26\uDD37-\uDD39\uDD3D\uDD3E\uDDB8\uDDB9\uDDCD-\uDDCF\uDDD6-\uDDDD])(?:\uD83C[\uDFFB-\uDFFF])|(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)(?:\uD83C[\uDFFB-\uDFFF])|(?:[\u261D\u270A-\u270D]|\uD83C[\uDF85\uDFC2\uDFC7]|\uD83D[\uDC42\uDC43\uDC46-\uDC50\uDC66\uDC67\uDC6B-\uDC6D\uDC70\uDC72\uDC74-\uDC76\uDC78\uDC7C\uDC83\uDC85\uDCAA\uDD74\uDD7A\uDD90\uDD95\uDD96\uDE4C\uDE4F\uDEC0\uDECC]|\uD83E[\uDD0F\uDD18-\uDD1C\uDD1E\uDD1F\uDD30-\uDD36\uDDB5\uDDB6\uDDBB\uDDD2-\uDDD5])(?:\uD83C[\uDFFB-\uDFFF])|(?:[\u231A\u231B\u23E9-\u23EC\u23F0\u23F3\u25FD\u25FE\u2614\u2615\u2648-\u2653\u267F\u2693\u26A1\u26AA\u26AB\u26BD\u26BE\u26C4\u26C5\u26CE\u26D4\u26EA\u26F2\u26F3\u26F5\u26FA\u26FD\u2705\u270A\u270B\u2728\u274C\u274E\u2753-\u2755\u2757\u2795-\u2797\u27B0\u27BF\u2B1B\u2B1C\u2B50\u2B55]|\uD83C[\uDC04\uDCCF\uDD8E\uDD91-\uDD9A\uDDE6-\uDDFF\uDE01\uDE1A\uDE2F\uDE32-\uDE36\uDE38-\uDE3A\uDE50\uDE51\uDF00-\uDF20\uDF2D-\uDF35\uDF37-\uDF7C\uDF7E-\uDF93\uDFA0-\uDFCA\uDFCF-\uDFD3\uDFE0-\uDFF0\uDFF4\uDFF8-\uDFFF]|\uD83D[\uDC00-\uDC3E\uDC40\uDC42-\uDCFC\uDCFF-\uDD3D\uDD4B-\uDD4E\uDD50-\uDD67\uDD7A\uDD95\uDD96\uDDA4\uDDFB-\uDE4F\uDE80-\uDEC5\uDECC\uDED0-\uDED2\uDED5\uDEEB\uDEEC\uDEF4-\uDEFA\uDFE0-\uDFEB]|\uD83E[\uDD0D-\uDD3A\uDD3C-\uDD45\uDD47-\uDD71\uDD73-\uDD76\uDD7A-\uDDA2\uDDA5-\uDDAA\uDDAE-\uDDCA\uDDCD-\uDDFF\uDE70-\uDE73\uDE78-\uDE7A\uDE80-\uDE82\uDE90-\uDE95])|(?:[#\*0-9\xA9\xAE\u203C\u2049\u2122\u2139\u2194-\u2199\u21A9\u21AA\u231A\u231B\u2328\u23CF\u23E9-\u23F3\u23F8-\u23FA\u24C2\u25AA\u25AB\u25B6\u25C0\u25FB-\u25FE\u2600-\u2604\u260E\u2611\u2614\u2615\u2618\u261D\u2620\u2622\u2623\u2626\u262A\u262E\u262F\u2638-\u263A\u2640\u2642\u2648-\u2653\u265F\u2660\u2663\u2665\u2666\u2668\u267B\u267E\u267F\u2692-\u2697\u2699\u269B\u269C\u26A0\u26A1\u26AA\u26AB\u26B0\u26B1\u26BD\u26BE\u26C4\u26C5\u26C8\u26CE\u26CF\u26D1\u26D3\u26D4\u26E9\u26EA\u26F0-\u26F5\u26F7-\u26FA\u26FD\u2702\u2705\u2708-\u270D\u270F\u2712\u2714\u2716\u271D\u2721\u2728\u2733\u2734\u2744\u2747\u274C\u274E\u2753-\u2755\u2757\u2763\u2764\u2795-\u2797\u27A1\u27B0\u27BF\u2934\u2935\u2B05-\u2B07\u2B1B\u2B1C\u2B50\u2B55\u3030\u303D\u3297\u3299]|\uD83C[\uDC04\uDCCF\uDD70\uDD71\uDD7E\uDD7F\uDD8E\uDD91-\uDD9A\uDDE6-\uDDFF\uDE01\uDE02\uDE1A\uDE2F\uDE32-\uDE3A\uDE50\uDE51\uDF00-\uDF21\uDF24-\uDF93\uDF96\uDF97\uDF99-\uDF9B\uDF9E-\uDFF0\uDFF3-\uDFF5\uDFF7-\uDFFF]|\uD83D[\uDC00-\uDCFD\uDCFF-\uDD3D\uDD49-\uDD4E\uDD50-\uDD67\uDD6F\uDD70\uDD73-\uDD7A\uDD87\uDD8A-\uDD8D\uDD90\uDD95\uDD96\uDDA4\uDDA5\uDDA8\uDDB1\uDDB2\uDDBC\uDDC2-\uDDC4\uDDD1-\uDDD3\uDDDC-\uDDDE\uDDE1\uDDE3\uDDE8\uDDEF\uDDF3\uDDFA-\uDE4F\uDE80-\uDEC5\uDECB-\uDED2\uDED5\uDEE0-\uDEE5\uDEE9\uDEEB\uDEEC\uDEF0\uDEF3-\uDEFA\uDFE0-\uDFEB]|\uD83E[\uDD0D-\uDD3A\uDD3C-\uDD45\uDD47-\uDD71\uDD73-\uDD76\uDD7A-\uDDA2\uDDA5-\uDDAA\uDDAE-\uDDCA\uDDCD-\uDDFF\uDE70-\uDE73\uDE78-\uDE7A\uDE80-\uDE82\uDE90-\uDE95])\uFE0F|(?:[\u261D\u26F9\u270A-\u270D]|\uD83C[\uDF85\uDFC2-\uDFC4\uDFC7\uDFCA-\uDFCC]|\uD83D[\uDC42\uDC43\uDC46-\uDC50\uDC66-\uDC78\uDC7C\uDC81-\uDC83\uDC85-\uDC87\uDC8F\uDC91\uDCAA\uDD74\uDD75\uDD7A\uDD90\uDD95\uDD96\uDE45-\uDE47\uDE4B-\uDE4F\uDEA3\uDEB4-\uDEB6\uDEC0\uDECC]|\uD83E[\uDD0F\uDD18-\uDD1F\uDD26\uDD30-\uDD39\uDD3C-\uDD3E\uDDB5\uDDB6\uDDB8\uDDB9\uDDBB\uDDCD-\uDDCF\uDDD1-\uDDDD])/g;
@@ -46359,9 +46734,9 @@ var require_emoji_regex = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/string-width/index.js
+// node_modules/string-width/index.js
 var require_string_width = __commonJS({
-  "../../work/main/node_modules/string-width/index.js"(exports, module) {
+  "node_modules/string-width/index.js"(exports, module) {
     "use strict";
     var stripAnsi = require_strip_ansi();
     var isFullwidthCodePoint = require_is_fullwidth_code_point();
@@ -46396,9 +46771,9 @@ var require_string_width = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/format-value.js
+// node_modules/cli-progress/lib/format-value.js
 var require_format_value = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/format-value.js"(exports, module) {
+  "node_modules/cli-progress/lib/format-value.js"(exports, module) {
     module.exports = function formatValue(v, options, type) {
       if (options.autopadding !== true) {
         return v;
@@ -46416,9 +46791,9 @@ var require_format_value = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/format-bar.js
+// node_modules/cli-progress/lib/format-bar.js
 var require_format_bar = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/format-bar.js"(exports, module) {
+  "node_modules/cli-progress/lib/format-bar.js"(exports, module) {
     module.exports = function formatBar(progress, options) {
       const completeSize = Math.round(progress * options.barsize);
       const incompleteSize = options.barsize - completeSize;
@@ -46427,9 +46802,9 @@ var require_format_bar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/format-time.js
+// node_modules/cli-progress/lib/format-time.js
 var require_format_time = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/format-time.js"(exports, module) {
+  "node_modules/cli-progress/lib/format-time.js"(exports, module) {
     module.exports = function formatTime(t, options, roundToMultipleOf) {
       function round(input) {
         if (roundToMultipleOf) {
@@ -46454,9 +46829,9 @@ var require_format_time = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/formatter.js
+// node_modules/cli-progress/lib/formatter.js
 var require_formatter = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/formatter.js"(exports, module) {
+  "node_modules/cli-progress/lib/formatter.js"(exports, module) {
     var _stringWidth = require_string_width();
     var _defaultFormatValue = require_format_value();
     var _defaultFormatBar = require_format_bar();
@@ -46506,9 +46881,9 @@ var require_formatter = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/options.js
+// node_modules/cli-progress/lib/options.js
 var require_options = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/options.js"(exports, module) {
+  "node_modules/cli-progress/lib/options.js"(exports, module) {
     function mergeOption(v, defaultValue) {
       if (typeof v === "undefined" || v === null) {
         return defaultValue;
@@ -46560,9 +46935,9 @@ var require_options = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/generic-bar.js
+// node_modules/cli-progress/lib/generic-bar.js
 var require_generic_bar = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/generic-bar.js"(exports, module) {
+  "node_modules/cli-progress/lib/generic-bar.js"(exports, module) {
     var _ETA = require_eta();
     var _Terminal = require_terminal();
     var _formatter = require_formatter();
@@ -46687,9 +47062,9 @@ var require_generic_bar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/single-bar.js
+// node_modules/cli-progress/lib/single-bar.js
 var require_single_bar = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/single-bar.js"(exports, module) {
+  "node_modules/cli-progress/lib/single-bar.js"(exports, module) {
     var _GenericBar = require_generic_bar();
     var _options = require_options();
     module.exports = class SingleBar extends _GenericBar {
@@ -46775,9 +47150,9 @@ var require_single_bar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/lib/multi-bar.js
+// node_modules/cli-progress/lib/multi-bar.js
 var require_multi_bar = __commonJS({
-  "../../work/main/node_modules/cli-progress/lib/multi-bar.js"(exports, module) {
+  "node_modules/cli-progress/lib/multi-bar.js"(exports, module) {
     var _Terminal = require_terminal();
     var _BarElement = require_generic_bar();
     var _options = require_options();
@@ -46913,9 +47288,9 @@ var require_multi_bar = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/presets/legacy.js
+// node_modules/cli-progress/presets/legacy.js
 var require_legacy = __commonJS({
-  "../../work/main/node_modules/cli-progress/presets/legacy.js"(exports, module) {
+  "node_modules/cli-progress/presets/legacy.js"(exports, module) {
     module.exports = {
       format: "progress [{bar}] {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "=",
@@ -46924,9 +47299,9 @@ var require_legacy = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/presets/shades-classic.js
+// node_modules/cli-progress/presets/shades-classic.js
 var require_shades_classic = __commonJS({
-  "../../work/main/node_modules/cli-progress/presets/shades-classic.js"(exports, module) {
+  "node_modules/cli-progress/presets/shades-classic.js"(exports, module) {
     module.exports = {
       format: " {bar} {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "█",
@@ -46935,9 +47310,9 @@ var require_shades_classic = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/presets/shades-grey.js
+// node_modules/cli-progress/presets/shades-grey.js
 var require_shades_grey = __commonJS({
-  "../../work/main/node_modules/cli-progress/presets/shades-grey.js"(exports, module) {
+  "node_modules/cli-progress/presets/shades-grey.js"(exports, module) {
     module.exports = {
       format: " \x1B[90m{bar}\x1B[0m {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "█",
@@ -46946,9 +47321,9 @@ var require_shades_grey = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/presets/rect.js
+// node_modules/cli-progress/presets/rect.js
 var require_rect = __commonJS({
-  "../../work/main/node_modules/cli-progress/presets/rect.js"(exports, module) {
+  "node_modules/cli-progress/presets/rect.js"(exports, module) {
     module.exports = {
       format: " {bar}■ {percentage}% | ETA: {eta}s | {value}/{total}",
       barCompleteChar: "■",
@@ -46957,9 +47332,9 @@ var require_rect = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/presets/index.js
+// node_modules/cli-progress/presets/index.js
 var require_presets = __commonJS({
-  "../../work/main/node_modules/cli-progress/presets/index.js"(exports, module) {
+  "node_modules/cli-progress/presets/index.js"(exports, module) {
     var _legacy = require_legacy();
     var _shades_classic = require_shades_classic();
     var _shades_grey = require_shades_grey();
@@ -46973,9 +47348,9 @@ var require_presets = __commonJS({
   }
 });
 
-// ../../work/main/node_modules/cli-progress/cli-progress.js
+// node_modules/cli-progress/cli-progress.js
 var require_cli_progress = __commonJS({
-  "../../work/main/node_modules/cli-progress/cli-progress.js"(exports, module) {
+  "node_modules/cli-progress/cli-progress.js"(exports, module) {
     var _SingleBar = require_single_bar();
     var _MultiBar = require_multi_bar();
     var _Presets = require_presets();
@@ -47049,6 +47424,7 @@ function parseCommandArgs(args, spec, positionals) {
 // src/cli/input.ts
 init_chem();
 init_read();
+var FILE_ENDING = /\.(mol|sdf|sd|smi|smiles|mol2|txt)$/i;
 function loadStructure(arg, io) {
   let text = arg;
   let source = "SMILES argument";
@@ -47062,6 +47438,8 @@ function loadStructure(arg, io) {
       return { ok: false, message: `cannot read ${arg}: ${e.message}` };
     }
     source = arg;
+  } else if (FILE_ENDING.test(arg)) {
+    return { ok: false, message: `file not found: ${arg}`, missingFile: true };
   }
   if (/\n\$\$\$\$\s*(\n|$)/.test(text)) {
     const first = readSdRecords(text).next().value;
@@ -47078,6 +47456,12 @@ function loadStructure(arg, io) {
   const isSmilesFile = source !== "SMILES argument" && !looksLikeMolfile(text);
   const body = isSmilesFile ? text.split(/\r?\n/).find((l) => l.trim() !== "") ?? "" : text;
   const r = readStructure(body, { format: "auto" });
+  if (!r.ok && source === "SMILES argument" && arg.includes("/") && !arg.includes("\n"))
+    return {
+      ok: false,
+      message: `file not found: ${arg} (and not valid SMILES: ${describeError(r.error)})`,
+      missingFile: true
+    };
   if (!r.ok) return { ok: false, message: `${source}: ${describeError(r.error)}` };
   return { ok: true, structure: r.structure, source, warnings: r.warnings };
 }
@@ -47133,7 +47517,7 @@ var compareCommand = {
     ]) {
       if (!r.ok) {
         io.err(`stereogate compare: structure ${name}: ${r.message}`);
-        return EXIT_BAD_INPUT;
+        return r.missingFile ? EXIT_USAGE : EXIT_BAD_INPUT;
       }
     }
     if (!a.ok || !b.ok) return EXIT_BAD_INPUT;
@@ -47175,8 +47559,11 @@ function describeText(f, what) {
     `Stereogenic double bonds and axes: ${bonds.length === 0 ? "none" : `${bonds.length} (${nDef(bonds)} defined)`}`
   );
   for (const u of bonds) out.push(unitLine(u));
-  out.push(`Chiral: ${yesNo(f.chiral)} — ${f.mirror.explanation.replace(/^(achiral|chiral|open): /, "")}`);
-  out.push(`Meso: ${yesNo(f.meso)}`);
+  const open = f.undefined > 0 ? void 0 : "open (see the remarks)";
+  out.push(
+    `Chiral: ${yesNo(f.chiral, open)} — ${f.mirror.explanation.replace(/^(achiral|chiral|open): /, "")}`
+  );
+  out.push(`Meso: ${yesNo(f.meso, open)}`);
   if (f.undefined > 0) out.push(`Undefined stereo units: ${f.undefined}`);
   const c = f.stereoisomers;
   out.push(
@@ -47190,7 +47577,9 @@ function describeText(f, what) {
   if (f.components.length > 1) {
     out.push("Components:");
     for (const k of f.components)
-      out.push(`  ${k.role === "parent" ? "parent" : "other "}  ${k.formula.padEnd(14)} ${k.smiles}`);
+      out.push(
+        `  ${k.role === "parent" ? "parent" : "other "}  ${k.formula.padEnd(14)} ${k.smiles}${k.copies ? `  (one of ${k.copies} identical copies)` : ""}`
+      );
   }
   if (f.stereoisomerList) {
     out.push(
@@ -47253,7 +47642,7 @@ var describeCommand = {
     const loaded = loadStructure(positionals[0], io);
     if (!loaded.ok) {
       io.err(`stereogate describe: ${loaded.message}`);
-      return EXIT_BAD_INPUT;
+      return loaded.missingFile ? EXIT_USAGE : EXIT_BAD_INPUT;
     }
     const facts = describe(loaded.structure, { listIsomers: values.list === true, maxIsomers: max });
     for (const w of loaded.warnings) facts.remarks.unshift(`reading: ${w.message}`);
@@ -48367,8 +48756,8 @@ function heavyAtomCandidates(formula) {
     const prefix = body.slice(0, body.length - digits.length);
     const count2 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
     for (let i = 0; i <= digits.length; i++) {
-      const own = digits.slice(0, i);
-      if (count2(own) && count2(digits.slice(i))) bases.push(prefix + own);
+      const own2 = digits.slice(0, i);
+      if (count2(own2) && count2(digits.slice(i))) bases.push(prefix + own2);
     }
   }
   return [...new Set(bases.map((b) => b.replace(/H(?![a-z])\d*/g, "")))];
@@ -48429,10 +48818,10 @@ function fillTemplate(template, data) {
     return v === null ? "none" : String(v);
   });
 }
-function resolveSeverity(base, own, configured) {
-  if (configured === void 0) return own ?? base;
-  if (own === void 0) return configured;
-  return RANK[own] <= RANK[configured] ? own : configured;
+function resolveSeverity(base, own2, configured) {
+  if (configured === void 0) return own2 ?? base;
+  if (own2 === void 0) return configured;
+  return RANK[own2] <= RANK[configured] ? own2 : configured;
 }
 function configuredSeverity(config, checkId) {
   return Object.prototype.hasOwnProperty.call(config.severities, checkId) ? config.severities[checkId] : void 0;
@@ -49507,6 +49896,18 @@ function toRecord(fields, fallbackId, mapping, vocabulary, molfileText) {
 }
 
 // src/bulk/audit-item.ts
+function bulkFacts(f) {
+  const { stereocenters: _c, stereobonds: _b, components, ...rest } = f;
+  return {
+    ...rest,
+    components: components.map(({ index, formula, heavyAtoms, role }) => ({
+      index,
+      formula,
+      heavyAtoms,
+      role
+    }))
+  };
+}
 function splitSdRecord(text) {
   const lines = text.split("\n");
   let end = lines.findIndex((l) => l.startsWith("M  END"));
@@ -49571,6 +49972,7 @@ function auditItem(item, ctx) {
   const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
   const out = {
     ...result,
+    computed: result.computed ? bulkFacts(result.computed) : null,
     seq: item.seq,
     origin: { source: item.source, record: item.record, line: item.line },
     form_word: { word: conv.formWord, how: conv.formHow }
@@ -49840,7 +50242,10 @@ function makeRenderer(wants, checks) {
     };
     if (wants.csv) out.csv = csvRow(r);
     if (wants.sarif && r.findings.length > 0) {
-      const log = sarifLog({ tool, records: [r], summary: none, caution: "" }, checks);
+      const log = sarifLog(
+        { tool, records: [r], summary: none, caution: "" },
+        checks
+      );
       const results = log.runs[0].results;
       out.sarif = results.map((res) => {
         res.properties.record = r.origin.record;
@@ -49851,6 +50256,7 @@ function makeRenderer(wants, checks) {
       const row = htmlRow(r);
       if (row) {
         const labels = (r.computed?.units ?? []).filter((u) => u.label).flatMap((u) => u.atoms.map((a) => ({ atom: a, text: u.label })));
+        row.file = `${r.origin.source} · record ${r.origin.record}, line ${r.origin.line}`;
         out.html = { row, structure: r.structure_text ?? null, labels };
       }
     }
