@@ -46863,9 +46863,6 @@ var package_default = {
   },
   dependencies: {
     "@actions/core": "^3.0.1",
-    "@octokit/plugin-retry": "^8.1.1",
-    "@octokit/plugin-throttling": "^11.0.5",
-    "@octokit/rest": "^22.0.1",
     ajv: "^8.20.0",
     "cli-progress": "^3.12.0",
     "csv-parse": "^7.0.3",
