@@ -46852,7 +46852,7 @@ var package_default = {
     stereogate: "bin/stereogate.js"
   },
   scripts: {
-    build: "tsc -p tsconfig.build.json",
+    build: "node scripts/bundle.mjs",
     typecheck: "tsc -p tsconfig.json --noEmit",
     demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
     test: "vitest run",
