@@ -62229,7 +62229,7 @@ function ligandBranch(dg, centre, lig, used) {
   for (const b of br) if (b.atom === lig && !used.has(b)) return b;
   return null;
 }
-function tetrahedralLabel(rk, centre, e, level2 = RULE_5) {
+function ligandBranches(rk, centre, e) {
   const used = /* @__PURE__ */ new Set();
   const ligs = [];
   for (const l of e.ligands) {
@@ -62238,6 +62238,11 @@ function tetrahedralLabel(rk, centre, e, level2 = RULE_5) {
     used.add(b);
     ligs.push(b);
   }
+  return ligs;
+}
+function tetrahedralLabel(rk, centre, e, level2 = RULE_5) {
+  const ligs = ligandBranches(rk, centre, e);
+  if (ligs === null) return null;
   const r = rankLigands(rk, centre, ligs, level2);
   if (r.tied) return null;
   const rankOf = [0, 0, 0, 0];
@@ -62246,14 +62251,8 @@ function tetrahedralLabel(rk, centre, e, level2 = RULE_5) {
   return r.pseudo ? h === "R" ? "r" : "s" : h;
 }
 function tetrahedralRule6(rk, centre, e) {
-  const used = /* @__PURE__ */ new Set();
-  const ligs = [];
-  for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, centre, l, used);
-    if (b === null) return null;
-    used.add(b);
-    ligs.push(b);
-  }
+  const ligs = ligandBranches(rk, centre, e);
+  if (ligs === null) return null;
   const r = rankLigands(rk, centre, ligs, RULE_5);
   const found = /* @__PURE__ */ new Set();
   const savedRef = rk.dg.rule6Ref;

@@ -30,13 +30,8 @@ export function ligandBranch(dg: Digraph, centre: CipNode, lig: number, used: Se
   return null;
 }
 
-/** R/S (or r/s) of a tetrahedral element at `centre`, or null when two ligands tie. */
-export function tetrahedralLabel(
-  rk: Ranker,
-  centre: CipNode,
-  e: TetrahedralStereo,
-  level = RULE_5,
-): CipLabel | null {
+/** The digraph branches of a centre's four ligands, in ligand order; null when one cannot be found. */
+function ligandBranches(rk: Ranker, centre: CipNode, e: TetrahedralStereo): CipNode[] | null {
   const used = new Set<CipNode>();
   const ligs: CipNode[] = [];
   for (const l of e.ligands) {
@@ -45,6 +40,18 @@ export function tetrahedralLabel(
     used.add(b);
     ligs.push(b);
   }
+  return ligs;
+}
+
+/** R/S (or r/s) of a tetrahedral element at `centre`, or null when two ligands tie. */
+export function tetrahedralLabel(
+  rk: Ranker,
+  centre: CipNode,
+  e: TetrahedralStereo,
+  level = RULE_5,
+): CipLabel | null {
+  const ligs = ligandBranches(rk, centre, e);
+  if (ligs === null) return null;
   const r = rankLigands(rk, centre, ligs, level);
   if (r.tied) return null;
   const rankOf = [0, 0, 0, 0];
@@ -55,14 +62,8 @@ export function tetrahedralLabel(
 
 /** Rule 6 inside a branch: each tied ligand as the reference; the descriptor stands when all choices agree. */
 function tetrahedralRule6(rk: Ranker, centre: CipNode, e: TetrahedralStereo): CipLabel | null {
-  const used = new Set<CipNode>();
-  const ligs: CipNode[] = [];
-  for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, centre, l, used);
-    if (b === null) return null;
-    used.add(b);
-    ligs.push(b);
-  }
+  const ligs = ligandBranches(rk, centre, e);
+  if (ligs === null) return null;
   const r = rankLigands(rk, centre, ligs, RULE_5);
   const found = new Set<CipLabel>();
   const savedRef = rk.dg.rule6Ref;
