@@ -1,9 +1,19 @@
 /**
- * Bulk audit speed and memory (bulk audit issue): the MoleculeNet structures replicated to 100,000 records
- * (BENCH_BULK_RECORDS to change) with invented claims, audited with 1 and 2 workers; records per second, per
- * core, scaling, and peak resident memory per run, beside the same-run baseline of the engine issue
- * (OpenChemLib's default path on one core). Targets: >= 2,000 records/s per core, near-linear to 2 workers.
+ * Bulk audit speed (bulk audit issue): the MoleculeNet structures replicated to 100,000 records
+ * (BENCH_BULK_RECORDS to change) with invented claims, audited with 1 and 2 workers, beside the same-run baseline
+ * of the engine issue (OpenChemLib's default path on one core). Targets: >= 2,000 records/s per core, near-linear
+ * scaling to 2 workers.
+ *
+ * Each run is a process of its own (bench/bulk-child.ts). Where `taskset` exists, the 1-worker run is pinned to
+ * one CPU and the 2-worker run to two: otherwise a "1-worker" run borrows the second core for V8's background
+ * threads (concurrent JIT compilation and GC, about a fifth of a core here) and the per-core figure and the
+ * scaling ratio would both be flattered and understated respectively. Every worker isolate compiles the engine
+ * afresh (its JIT warm-up takes most of its first ~15,000 records), so the report gives the whole-run rate and
+ * the steady-state rate (second half of the records) separately.
  */
+import { spawnSync } from 'node:child_process';
+import { availableParallelism } from 'node:os';
+import type { ChildResult } from './bulk-child.js';
 import { createWriteStream, mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { Molecule } from 'openchemlib';
 import { tmpdir } from 'node:os';
@@ -15,6 +25,28 @@ import { STEREO_FORMS } from '../src/registry/types.js';
 import { oclDefaultPath } from './baseline-ocl.js';
 import type { BenchContext } from './run.js';
 import { fmt, time, type Timing } from './util.js';
+
+/** Records per second over the second half of a run (from the 1% marks), after every worker has warmed up. */
+export function steadyRate(r: ChildResult): number | null {
+  const m = r.marks;
+  if (m.length < 10) return null;
+  const a = m[Math.floor(m.length / 2)];
+  const b = m[m.length - 1];
+  return b[1] > a[1] ? (b[0] - a[0]) / (b[1] - a[1]) : null;
+}
+
+function hasTaskset(): boolean {
+  return spawnSync('taskset', ['-p', String(process.pid)], { stdio: 'ignore' }).status === 0;
+}
+
+function runChild(csv: string, workers: number, n: number, cpus: string | null): ChildResult {
+  const child = new URL('./bulk-child.ts', import.meta.url).pathname;
+  const node = [process.execPath, '--import', 'tsx', child, csv, String(workers), String(n)];
+  const [cmd, ...args] = cpus ? ['taskset', '-c', cpus, ...node] : node;
+  const out = spawnSync(cmd, args, { encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
+  if (out.status !== 0) throw new Error(`bulk run with ${workers} worker(s) failed: ${out.stderr}`);
+  return JSON.parse(out.stdout.trim().split('\n').pop() as string) as ChildResult;
+}
 
 export async function benchBulk(ctx: BenchContext): Promise<void> {
   const n = Number(process.env.BENCH_BULK_RECORDS ?? 100_000);
@@ -33,53 +65,50 @@ export async function benchBulk(ctx: BenchContext): Promise<void> {
     oclDefaultPath(sample),
   ).timing;
   console.log(fmt(base));
-  const results: { workers: number; t: Timing; peakMiB: number; perCpuSecond: number }[] = [];
-  for (const workers of [1, 2]) {
-    let peak = 0;
-    const sampler = setInterval(() => (peak = Math.max(peak, process.memoryUsage().rss)), 200);
-    const t0 = performance.now();
-    const c0 = process.cpuUsage();
-    const run = await runBulkAudit({
-      inputs: [csv],
-      mapping: {},
-      config: { ...DEFAULT_CONFIG },
-      workers,
-      progress: 'none',
-      writers: [],
-    });
-    const seconds = (performance.now() - t0) / 1000;
-    const cpu = process.cpuUsage(c0);
-    const cpuSeconds = (cpu.user + cpu.system) / 1e6;
-    clearInterval(sampler);
-    peak = Math.max(peak, process.memoryUsage().rss);
-    const t = {
-      label: `stereogate bulk audit, ${workers} worker${workers > 1 ? 's' : ''}`,
-      items: run.trailer.summary.records,
-      seconds,
-      perSecond: run.trailer.summary.records / seconds,
-    };
-    results.push({
-      workers,
-      t,
-      peakMiB: peak / 2 ** 20,
-      perCpuSecond: run.trailer.summary.records / cpuSeconds,
-    });
-    console.log(`${fmt(t)}   peak RSS ${(peak / 2 ** 20).toFixed(0)} MiB (whole process, workers included)`);
-    // CPU time of all threads: records per CPU-second is the per-core rate even on a machine shared with others
-    console.log(
-      `  ${(run.trailer.summary.records / cpuSeconds).toFixed(0)} records per CPU-second (${cpuSeconds.toFixed(1)} CPU-s, all threads)`,
-    );
-    if (workers === 1) ctx.perRecordAuditSeconds = seconds / run.trailer.summary.records;
-  }
-  const one = results[0].t.perSecond;
-  const two = results[1].t.perSecond;
-  const perCore = results[0].perCpuSecond;
+  const pin = availableParallelism() >= 2 && hasTaskset();
   console.log(
-    `bulk, 1 worker: ${(one / base.perSecond).toFixed(1)}x the baseline (wall clock, same run); ` +
-      `${perCore.toFixed(0)} records per CPU-second, all threads (target >= 2000 per core: ${perCore >= 2000 ? 'met' : 'NOT met'})`,
+    pin
+      ? 'each run in its own process; 1 worker pinned to CPU 0, 2 workers to CPUs 0-1 (taskset)'
+      : 'each run in its own process; taskset not available (or one CPU): runs are not pinned, the 1-worker run may borrow a second core for V8 background work',
   );
+  const results: ChildResult[] = [];
+  for (const workers of [1, 2]) {
+    const r = runChild(csv, workers, n, pin ? (workers === 1 ? '0' : '0,1') : null);
+    results.push(r);
+    const t: Timing = {
+      label: `stereogate bulk audit, ${workers} worker${workers > 1 ? 's' : ''}`,
+      items: r.records,
+      seconds: r.seconds,
+      perSecond: r.records / r.seconds,
+    };
+    const steady = steadyRate(r);
+    console.log(`${fmt(t)}   peak RSS ${r.peakMiB.toFixed(0)} MiB (whole process, workers included)`);
+    console.log(
+      `  ${(r.records / r.cpuSeconds).toFixed(0)} records per CPU-second (${r.cpuSeconds.toFixed(1)} CPU-s, all threads); ` +
+        `steady state (second half of the records) ${steady === null ? 'n/a' : steady.toFixed(0) + ' /s'}`,
+    );
+    if (workers === 1) ctx.perRecordAuditSeconds = r.seconds / r.records;
+  }
+  const [one, two] = results;
+  const oneRate = one.records / one.seconds;
+  const twoRate = two.records / two.seconds;
+  const perCore = pin ? oneRate : one.records / one.cpuSeconds;
+  const s1 = steadyRate(one);
+  const s2 = steadyRate(two);
   console.log(
-    `bulk, 2 workers: ${(two / one).toFixed(2)}x the 1-worker rate (ideal 2.00 on 2 otherwise idle cores; the main thread also reads and writes)`,
+    `bulk, 1 worker: ${(oneRate / base.perSecond).toFixed(1)}x the baseline (wall clock, same run); ` +
+      `${perCore.toFixed(0)} records/s per core ${pin ? '(pinned to one CPU)' : '(records per CPU-second, all threads)'}, ` +
+      `steady state ${s1 === null ? 'n/a' : s1.toFixed(0)} (target >= 2000 per core: ${perCore >= 2000 ? 'met' : 'NOT met'})`,
+  );
+  // "near-linear": 1.8x or better on 2 cores is our reading of the issue (common practice, no source)
+  const scale = twoRate / oneRate;
+  const steadyScale = s1 && s2 ? s2 / s1 : null;
+  console.log(
+    `bulk, 2 workers: ${scale.toFixed(2)}x the 1-worker rate over the whole run, ` +
+      `${steadyScale === null ? 'n/a' : steadyScale.toFixed(2) + 'x'} in steady state ` +
+      `(ideal 2.00; near-linear taken as >= 1.80: whole run ${scale >= 1.8 ? 'met' : 'NOT met'}, ` +
+      `steady state ${steadyScale !== null && steadyScale >= 1.8 ? 'met' : 'NOT met'}). ` +
+      `The difference is each worker's own JIT warm-up, a fixed cost that a larger registry amortises.`,
   );
   rmSync(dir, { recursive: true, force: true });
 }
