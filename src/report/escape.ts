@@ -5,8 +5,42 @@
 
 const ZWJ = '\u200D';
 
+/**
+ * A SMILES with a stereo bracket atom (`[C@@H]`): shown as a code span, where GitHub neither links mentions nor
+ * reads Markdown, so the SMILES stays exactly copyable (no joiner after its `@`). No whitespace, backtick or `|`
+ * (a table cell separator), and none of `<>&` (which a SMILES never has) inside.
+ */
+const STEREO_SMILES = /[^\s`|<>&]*\[[^\]\s`|<>&]*@[^\]\s`|<>&]*\][^\s`|<>&]*/g;
+
 /** Escapes `s` so GitHub shows it as the literal text, on one line. */
 export function escapeMarkdown(s: string): string {
+  let out = '';
+  let at = 0;
+  for (const m of s.matchAll(STEREO_SMILES)) {
+    // a SMILES never starts with '(' or a quote: those are prose before it
+    const lead = /^[("']*/.exec(m[0])![0].length;
+    const token = smilesPart(m[0].slice(lead));
+    if (!token.includes('@')) continue;
+    const start = m.index + lead;
+    out += escapeText(s.slice(at, start)) + '`' + token + '`';
+    at = start + token.length;
+  }
+  return out + escapeText(s.slice(at));
+}
+
+/** The SMILES in a matched token: sentence punctuation after it and unbalanced closing parentheses left out. */
+function smilesPart(token: string): string {
+  let t = token.replace(/[,;.:!?'"]+$/, '');
+  const open = (t.match(/\(/g) ?? []).length;
+  let close = (t.match(/\)/g) ?? []).length;
+  while (close > open && t.endsWith(')')) {
+    t = t.slice(0, -1);
+    close--;
+  }
+  return t;
+}
+
+function escapeText(s: string): string {
   return (
     s
       // control characters and line breaks would end the list item or the heading

@@ -36,6 +36,17 @@ describe('escapeMarkdown', () => {
   it('keeps everything on one line', () => {
     expect(escapeMarkdown('a\n# heading\r\n- item')).not.toMatch(/[\r\n]/);
   });
+  it('shows a stereo SMILES as a code span, exactly copyable (no joiner after its @)', () => {
+    // OpenSMILES: '@'/'@@' inside a bracket atom is tetrahedral stereo, so these tokens are SMILES, not mentions
+    expect(escapeMarkdown('mirror image of LX-3 (C[C@H](O)CC), see')).toBe(
+      'mirror image of LX\\-3 \\(`C[C@H](O)CC`\\), see',
+    );
+    expect(escapeMarkdown('drawn as N[C@@H](C)C(=O)O.')).toBe('drawn as `N[C@@H](C)C(=O)O`\\.');
+    // link syntax with an @ in its text is shown literally: a code span is never a link (CommonMark §6.1)
+    expect(escapeMarkdown('a [x@evil](javascript:alert(1)) b')).toBe('a `[x@evil](javascript:alert(1))` b');
+    expect(escapeMarkdown('<b>[C@H]</b>')).toBe('&lt;b&gt;`[C@H]`&lt;/b&gt;');
+    expect(escapeMarkdown('mail a@b.org, ask @team')).toBe(`mail a@${ZWJ}b\\.org, ask @${ZWJ}team`);
+  });
   it('escapes emphasis, code and table syntax', () => {
     expect(escapeMarkdown('**b** `c` |t| ~~s~~ _i_')).toBe(
       '\\*\\*b\\*\\* \\`c\\` \\|t\\| \\~\\~s\\~\\~ \\_i\\_',
