@@ -13,6 +13,7 @@ import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './type
 import { declaredDescriptors, finding, labelList } from './words.js';
 import { parseDescriptors } from '../chem/descriptors.js';
 import { prefixFindings, prefixMessages } from './descriptor-prefixes.js';
+import { cisTransFindings, cisTransMessages } from './cis-trans-words.js';
 import { distinctUnits, repeatedComponents } from './repeated-components.js';
 import { claimRestsOnlyOnNitrogen, NITROGEN_CHECK_ID } from './nitrogen-inversion.js';
 import type { ReadStructure } from './types.js';
@@ -54,6 +55,7 @@ const messages = {
     'is not comparable with CIP labels, so it was not checked against the structure. Add CIP descriptors, e.g. ' +
     '(S) for L-alanine, to have them checked.',
   ...prefixMessages,
+  ...cisTransMessages,
 } as const;
 
 type Id = keyof typeof messages;
@@ -274,6 +276,7 @@ function run(ctx: CheckContext): CheckOutcome {
     );
   });
   out.push(...prefixFindings(ctx, decl, f));
+  out.push(...cisTransFindings(ctx, decl, f));
   const hasAny =
     decl.field !== null ||
     (decl.name !== null &&
@@ -299,7 +302,9 @@ export const descriptorsMatchStructure: CheckModule = {
     'up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map ' +
     'numbers equal to the locants ([C@@H:2]) the comparison is per atom; otherwise only the numbers of R, S, E, Z … ' +
     'can be compared. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP ' +
-    'descriptors and are not compared.',
+    'descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is ' +
+    'unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other ' +
+    'stereo unit.',
   messages,
   run,
 };
