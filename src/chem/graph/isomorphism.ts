@@ -9,7 +9,6 @@
  * it reports exactly one isomorphism per distinct restriction to key ∪ N(key) (what Burnside counting needs).
  */
 import type { Structure } from '../types.js';
-import { conjugatedRingBonds } from './aromaticity.js';
 import { prepare, refinedPartition, type Prepared } from './prepared.js';
 import {
   clonePartition,
@@ -215,7 +214,9 @@ export type AutomorphismOptions = Omit<IsomorphismOptions, 'colourB' | 'aromatic
 /** Automorphisms of s (same semantics as findIsomorphisms with B = A). */
 export function automorphisms(s: Structure, opts: AutomorphismOptions): SearchResult {
   const colour = opts.colour ?? opts.colourA;
-  const aromatic = opts.aromaticA ?? conjugatedRingBonds(s);
+  // Left undefined when not given: prepare() then computes conjugatedRingBonds() itself and its cached
+  // preparation of s (from equivalenceClasses or constitutionKey) is reused instead of a fresh one.
+  const aromatic = opts.aromaticA;
   return findIsomorphisms(s, s, {
     ...opts,
     colourA: colour,

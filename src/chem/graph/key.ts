@@ -14,9 +14,9 @@ export function molecularFormula(s: Structure, atoms?: number[]): string {
   let charge = 0;
   let h = 0;
   let wildcards = 0;
-  const list = atoms ?? s.atoms.map((_, i) => i);
-  for (const i of list) {
-    const a = s.atoms[i];
+  const total = atoms ? atoms.length : s.atoms.length;
+  for (let t = 0; t < total; t++) {
+    const a = s.atoms[atoms ? atoms[t] : t];
     if (!a) continue;
     h += a.hCount;
     charge += a.charge;
@@ -25,19 +25,23 @@ export function molecularFormula(s: Structure, atoms?: number[]): string {
     else counts.set(a.element, (counts.get(a.element) ?? 0) + 1);
   }
   if (h > 0) counts.set('H', h);
-  const hasC = counts.has('C');
-  const order = [...counts.keys()].sort((x, y) => {
-    if (hasC) {
-      const rank = (e: string) => (e === 'C' ? 0 : e === 'H' ? 1 : 2);
-      const d = rank(x) - rank(y);
-      if (d !== 0) return d;
-    }
-    return x < y ? -1 : x > y ? 1 : 0;
-  });
+  // Hill order: with carbon, C then H then the rest by code unit; without, everything by code unit.
   let out = '';
-  for (const e of order) {
-    const c = counts.get(e)!;
+  const add = (e: string, c: number) => {
     out += c === 1 ? e : `${e}${c}`;
+  };
+  const c = counts.get('C');
+  if (c !== undefined) {
+    add('C', c);
+    const hc = counts.get('H');
+    if (hc !== undefined) add('H', hc);
+    const rest: string[] = [];
+    for (const e of counts.keys()) if (e !== 'C' && e !== 'H') rest.push(e);
+    rest.sort();
+    for (const e of rest) add(e, counts.get(e)!);
+  } else {
+    const order = [...counts.keys()].sort();
+    for (const e of order) add(e, counts.get(e)!);
   }
   if (wildcards > 0) out += wildcards === 1 ? '*' : `*${wildcards}`;
   if (charge !== 0) out += `${Math.abs(charge) === 1 ? '' : Math.abs(charge)}${charge > 0 ? '+' : '-'}`;
@@ -53,24 +57,46 @@ export function constitutionKey(s: Structure): string {
   const { inv, csr: g } = prep;
   const p = refinedPartition(prep);
   const cell = cellIndex(p);
+  // The mixing is written out inline (a closure over h1/h2 would box both on every step).
   let h1 = 0x811c9dc5;
   let h2 = 0x01000193 ^ n;
-  const mix = (x: number) => {
-    h1 = Math.imul(h1 ^ (x | 0), 0x01000193);
-    h2 = Math.imul(h2 ^ (x | 0), 0x5bd1e995);
-    h2 ^= h2 >>> 13;
-  };
+  let x = 0;
   const nb: number[] = [];
   for (let s0 = 0; s0 < n; s0 += p.len[s0]) {
     const v = p.lab[s0];
-    mix(p.len[s0]);
-    mix(Math.floor(inv[v] / 4294967296));
-    mix(inv[v] % 4294967296);
-    nb.length = 0;
-    for (let e = g.offs[v]; e < g.offs[v + 1]; e++) nb.push(cell[g.adj[e]] * 8 + g.code[e]);
-    nb.sort((x, y) => x - y);
-    mix(nb.length);
-    for (const x of nb) mix(x);
+    x = p.len[s0] | 0;
+    h1 = Math.imul(h1 ^ x, 0x01000193);
+    h2 = Math.imul(h2 ^ x, 0x5bd1e995);
+    h2 ^= h2 >>> 13;
+    x = Math.floor(inv[v] / 4294967296) | 0;
+    h1 = Math.imul(h1 ^ x, 0x01000193);
+    h2 = Math.imul(h2 ^ x, 0x5bd1e995);
+    h2 ^= h2 >>> 13;
+    x = inv[v] % 4294967296 | 0;
+    h1 = Math.imul(h1 ^ x, 0x01000193);
+    h2 = Math.imul(h2 ^ x, 0x5bd1e995);
+    h2 ^= h2 >>> 13;
+    // Neighbour codes in ascending order (insertion sort: degrees are small).
+    let d = 0;
+    for (let e = g.offs[v]; e < g.offs[v + 1]; e++) {
+      const c = cell[g.adj[e]] * 8 + g.code[e];
+      let j = d++;
+      while (j > 0 && nb[j - 1] > c) {
+        nb[j] = nb[j - 1];
+        j--;
+      }
+      nb[j] = c;
+    }
+    x = d;
+    h1 = Math.imul(h1 ^ x, 0x01000193);
+    h2 = Math.imul(h2 ^ x, 0x5bd1e995);
+    h2 ^= h2 >>> 13;
+    for (let j = 0; j < d; j++) {
+      x = nb[j] | 0;
+      h1 = Math.imul(h1 ^ x, 0x01000193);
+      h2 = Math.imul(h2 ^ x, 0x5bd1e995);
+      h2 ^= h2 >>> 13;
+    }
   }
   const hex = (x: number) => (x >>> 0).toString(16).padStart(8, '0');
   return `${formula}/${hex(h1)}${hex(h2)}`;

@@ -6,7 +6,7 @@ import type { Structure } from '../types.js';
 import { buildGraph, type Graph } from './adjacency.js';
 import { conjugatedRingBonds } from './aromaticity.js';
 import { invariantsWith } from './invariants.js';
-import { csrOf } from './csr.js';
+import { bondCode } from './csr.js';
 import { partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
 import { bridges } from './rings.js';
 
@@ -31,25 +31,23 @@ export function refinedPartition(p: Prepared): Partition {
 }
 
 /**
- * Cache per Structure object: the engine asks for key, classes and automorphisms of one structure in a row.
+ * Cache of recent preparations: the engine asks for key, classes and automorphisms of one structure in a row.
  * An entry is used only while a checksum over everything the preparation reads still matches, so a structure
- * changed in place is prepared afresh.
+ * changed in place is prepared afresh. (A short list, not a WeakMap: weak tables cost the garbage collector
+ * more than the lookups save.)
  */
-const cache = new WeakMap<
-  Structure,
-  { sum: number; aromatic: readonly boolean[] | undefined; prepared: Prepared }[]
->();
+const RECENT = 8;
+const cache: { s: Structure; sum: number; aromatic: readonly boolean[] | undefined; prepared: Prepared }[] = [];
 
 export function prepare(s: Structure, aromatic?: readonly boolean[]): Prepared {
   const sum = checksum(s, aromatic);
-  const entries = cache.get(s);
-  const hit = entries?.find((e) => e.aromatic === aromatic && e.sum === sum);
-  if (hit) return hit.prepared;
+  for (let i = cache.length - 1; i >= 0; i--) {
+    const e = cache[i];
+    if (e.s === s && e.aromatic === aromatic && e.sum === sum) return e.prepared;
+  }
   const prepared = prepareFresh(s, aromatic);
-  if (entries) {
-    if (entries.length >= 4) entries.shift();
-    entries.push({ sum, aromatic, prepared });
-  } else cache.set(s, [{ sum, aromatic, prepared }]);
+  if (cache.length >= RECENT) cache.shift();
+  cache.push({ s, sum, aromatic, prepared });
   return prepared;
 }
 
@@ -80,5 +78,25 @@ function prepareFresh(s: Structure, aromatic?: readonly boolean[]): Prepared {
   const bridge = bridges(g, s.bonds.length);
   const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
   const inv = invariantsWith(s, arom, g, bridge);
-  return { s, g, aromatic: arom, inv, csr: csrOf([{ s, aromatic: arom }]) };
+  return { s, g, aromatic: arom, inv, csr: csrOfGraph(s, g, arom) };
+}
+
+/**
+ * csrOf([{ s, aromatic }]) read off the adjacency lists, which hold the same neighbours in the same order
+ * (bonds in index order, each added to both ends; invalid bonds left out).
+ */
+function csrOfGraph(s: Structure, g: Graph, aromatic: readonly boolean[]): CsrGraph {
+  const n = g.n;
+  const offs = new Int32Array(n + 1);
+  for (let i = 0; i < n; i++) offs[i + 1] = offs[i] + g.nbrs[i].length;
+  const adj = new Int32Array(offs[n]);
+  const code = new Int32Array(offs[n]);
+  for (let i = 0; i < n; i++) {
+    const nb = g.nbrs[i];
+    const bb = g.nbrBonds[i];
+    const at = offs[i];
+    adj.set(nb, at);
+    for (let t = 0; t < bb.length; t++) code[at + t] = bondCode(s, bb[t], aromatic);
+  }
+  return { n, offs, adj, code };
 }

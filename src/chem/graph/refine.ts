@@ -285,9 +285,22 @@ export class Refiner {
     let end = s + L;
     for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
     this.work += k;
-    const buf = this.sortBuf.subarray(0, k);
+    const buf = this.sortBuf;
     for (let t = 0; t < k; t++) buf[t] = count[lab[end + t]] * 4194304 + lab[end + t];
-    if (k > 1) buf.sort();
+    // Keys are distinct (they hold the atom), so any ascending sort gives the same order; short runs are
+    // sorted in place rather than through a fresh subarray view.
+    if (k > 16) buf.subarray(0, k).sort();
+    else {
+      for (let t = 1; t < k; t++) {
+        const x = buf[t];
+        let j = t;
+        while (j > 0 && buf[j - 1] > x) {
+          buf[j] = buf[j - 1];
+          j--;
+        }
+        buf[j] = x;
+      }
+    }
     for (let t = 0; t < k; t++) {
       const v = buf[t] % 4194304;
       lab[end + t] = v;

@@ -4,7 +4,7 @@
  * ring through each bond and atom (exact, not read off the SSSR), and ring systems (fused, spiro, bridged).
  */
 import type { Structure } from '../types.js';
-import { buildGraph, type Graph } from './adjacency.js';
+import { buildGraph, isGraphOf, memoOf, type Graph } from './adjacency.js';
 import { minimumCycleBasis, ringSystemsOf } from './sssr.js';
 
 export interface RingInfo {
@@ -23,42 +23,108 @@ export interface RingInfo {
 export function ringInfo(s: Structure, g: Graph = buildGraph(s)): RingInfo {
   const n = g.n;
   const m = s.bonds.length;
-  const smallestRingOfBond = smallestRings(s, g);
-  const bondInRing = smallestRingOfBond.map((x) => x > 0);
+  // A copy: the sizes may be shared with later callers of smallestRings (see there), and this one is handed out.
+  const smallestRingOfBond = smallestRings(s, g).slice();
+  const bondInRing = new Array<boolean>(m);
   const smallestRingOfAtom = new Array<number>(n).fill(0);
+  let anyRing = false;
   for (let k = 0; k < m; k++) {
     const r = smallestRingOfBond[k];
+    bondInRing[k] = r > 0;
     if (r === 0) continue;
+    anyRing = true;
     const { a, b } = s.bonds[k];
-    for (const x of [a, b]) {
-      if (smallestRingOfAtom[x] === 0 || r < smallestRingOfAtom[x]) smallestRingOfAtom[x] = r;
-    }
+    if (smallestRingOfAtom[a] === 0 || r < smallestRingOfAtom[a]) smallestRingOfAtom[a] = r;
+    if (smallestRingOfAtom[b] === 0 || r < smallestRingOfAtom[b]) smallestRingOfAtom[b] = r;
   }
-  const atomInRing = smallestRingOfAtom.map((x) => x > 0);
-  const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
+  const atomInRing = new Array<boolean>(n);
+  for (let i = 0; i < n; i++) atomInRing[i] = smallestRingOfAtom[i] > 0;
+  if (!anyRing) {
+    return { rings: [], atomInRing, bondInRing, smallestRingOfBond, smallestRingOfAtom, ringSystems: [] };
+  }
+  const systems = ringSystemsOf(s, n, bondInRing);
   return {
-    rings,
+    rings: minimumCycleBasis(s, g, bondInRing, smallestRingOfBond, systems),
     atomInRing,
     bondInRing,
     smallestRingOfBond,
     smallestRingOfAtom,
-    ringSystems: ringSystemsOf(s, n, bondInRing).systems,
+    ringSystems: systems.systems,
   };
 }
 
-/** For each bond u–v: 1 + the shortest u..v path that avoids the bond itself (0 when there is none). */
+/**
+ * For each bond u–v: 1 + the shortest u..v path that avoids the bond itself (0 when there is none). When g is
+ * the structure's current buildGraph() and the bridges are its own, the answer is kept with the graph and the
+ * same array is returned to every caller: do not modify it.
+ */
 export function smallestRings(s: Structure, g: Graph, bridgeOf?: Uint8Array): number[] {
+  const m = s.bonds.length;
+  if (isGraphOf(g, s)) {
+    const bridge = bridges(g, m);
+    const memo = memoOf(g);
+    if (memo && (bridgeOf === undefined || bridgeOf === bridge)) {
+      if (memo.sizes && memo.bridge === bridge) return memo.sizes;
+      const sizes = ringSizes(s, g, bridge);
+      if (memo.bridge === bridge) memo.sizes = sizes;
+      return sizes;
+    }
+  }
+  return ringSizes(s, g, bridgeOf ?? bridges(g, m));
+}
+
+/**
+ * smallestRings() proper. Ring bonds (valid non-bridges) fall into ring systems (connected through ring
+ * bonds); a system with as many bonds as atoms is one simple cycle, and each of its bonds lies in that cycle
+ * only. Other ring bonds get a breadth-first search over the non-bridge bonds.
+ */
+function ringSizes(s: Structure, g: Graph, bridge: Uint8Array): number[] {
   const n = g.n;
-  const out = new Array<number>(s.bonds.length).fill(0);
-  const dist = new Int32Array(n).fill(-1);
-  const queue = new Int32Array(n);
-  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
-  for (let k = 0; k < s.bonds.length; k++) {
+  const m = s.bonds.length;
+  const out = new Array<number>(m).fill(0);
+  const parent = new Int32Array(n);
+  for (let i = 0; i < n; i++) parent[i] = i;
+  const find = (x: number): number => {
+    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+    return x;
+  };
+  const inRing = new Uint8Array(n);
+  let anyRing = false;
+  for (let k = 0; k < m; k++) {
     const { a, b } = s.bonds[k];
-    if (bridge[k] || a === b || a < 0 || b < 0 || a >= n || b >= n) continue;
+    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    anyRing = true;
+    inRing[a] = inRing[b] = 1;
+    const ra = find(a);
+    const rb = find(b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  if (!anyRing) return out;
+  // Per system root: atoms minus bonds (0 for a simple cycle).
+  const excess = new Int32Array(n);
+  for (let i = 0; i < n; i++) if (inRing[i]) excess[find(i)]++;
+  const atoms = excess.slice();
+  for (let k = 0; k < m; k++) {
+    const { a, b } = s.bonds[k];
+    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    excess[find(a)]--;
+  }
+  let dist: Int32Array | null = null;
+  let queue: Int32Array | null = null;
+  for (let k = 0; k < m; k++) {
+    const { a, b } = s.bonds[k];
+    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    const root = find(a);
+    if (excess[root] === 0) {
+      out[k] = atoms[root];
+      continue;
+    }
+    if (dist === null || queue === null) {
+      dist = new Int32Array(n).fill(-1);
+      queue = new Int32Array(n);
+    }
     let head = 0;
     let tail = 0;
-    const seen: number[] = [a];
     dist[a] = 0;
     queue[tail++] = a;
     let found = 0;
@@ -71,36 +137,48 @@ export function smallestRings(s: Structure, g: Graph, bridgeOf?: Uint8Array): nu
         const v = nb[i];
         if (dist[v] >= 0) continue;
         dist[v] = dist[u] + 1;
-        seen.push(v);
+        queue[tail++] = v; // also b: the queue doubles as the list of atoms to reset
         if (v === b) {
           found = dist[v] + 1;
           break;
         }
-        queue[tail++] = v;
       }
     }
     out[k] = found;
-    for (const v of seen) dist[v] = -1;
+    for (let t = 0; t < tail; t++) dist[queue[t]] = -1;
   }
   return out;
 }
 
-/** Bridges (bonds in no cycle) by the low-link method, iteratively. */
+/** Bridges (bonds in no cycle) by the low-link method, iteratively. Without `keep`, do not modify the result. */
 export function bridges(g: Graph, m: number, keep?: ArrayLike<boolean>): Uint8Array {
+  if (keep) return bridgesOf(g, m, keep);
+  const memo = memoOf(g);
+  if (memo === null) return bridgesOf(g, m);
+  if (memo.bridge && memo.bridgeM === m) return memo.bridge;
+  const bridge = bridgesOf(g, m);
+  memo.bridge = bridge;
+  memo.bridgeM = m;
+  memo.sizes = undefined;
+  return bridge;
+}
+
+function bridgesOf(g: Graph, m: number, keep?: ArrayLike<boolean>): Uint8Array {
   const n = g.n;
   const isBridge = new Uint8Array(m);
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   const parentBond = new Int32Array(n).fill(-1);
   const iter = new Int32Array(n);
-  const stack: number[] = [];
+  const stack = new Int32Array(n);
+  let sp = 0;
   let time = 0;
   for (let root = 0; root < n; root++) {
     if (disc[root] >= 0) continue;
     disc[root] = low[root] = time++;
-    stack.push(root);
-    while (stack.length) {
-      const u = stack[stack.length - 1];
+    stack[sp++] = root;
+    while (sp > 0) {
+      const u = stack[sp - 1];
       if (iter[u] < g.nbrs[u].length) {
         const i = iter[u]++;
         const v = g.nbrs[u][i];
@@ -109,12 +187,12 @@ export function bridges(g: Graph, m: number, keep?: ArrayLike<boolean>): Uint8Ar
         if (disc[v] < 0) {
           disc[v] = low[v] = time++;
           parentBond[v] = k;
-          stack.push(v);
+          stack[sp++] = v;
         } else if (disc[v] < low[u]) low[u] = disc[v];
       } else {
-        stack.pop();
-        if (stack.length) {
-          const p = stack[stack.length - 1];
+        sp--;
+        if (sp > 0) {
+          const p = stack[sp - 1];
           if (low[u] < low[p]) low[p] = low[u];
           if (low[u] > disc[p]) isBridge[parentBond[u]] = 1;
         }

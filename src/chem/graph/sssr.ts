@@ -12,7 +12,6 @@ interface Candidate {
   size: number;
   atoms: number[];
   bits: Uint32Array;
-  hash: number;
 }
 
 export function minimumCycleBasis(
@@ -20,10 +19,11 @@ export function minimumCycleBasis(
   g: Graph,
   bondInRing: readonly boolean[],
   smallestRingOfBond: readonly number[],
+  ringSystems?: { systems: number[][]; systemOf: Int32Array },
 ): number[][] {
   const n = g.n;
   const m = s.bonds.length;
-  const { systems, systemOf } = ringSystemsOf(s, n, bondInRing);
+  const { systems, systemOf } = ringSystems ?? ringSystemsOf(s, n, bondInRing);
   const bondCount = new Int32Array(systems.length);
   const smallest = new Int32Array(systems.length).fill(0x7fffffff);
   for (let k = 0; k < m; k++) {
@@ -50,19 +50,21 @@ export function ringSystemsOf(
   n: number,
   bondInRing: readonly boolean[],
 ): { systems: number[][]; systemOf: Int32Array } {
-  const parent = Int32Array.from({ length: n }, (_, i) => i);
+  const parent = new Int32Array(n);
+  for (let i = 0; i < n; i++) parent[i] = i;
   const find = (x: number): number => {
     while (parent[x] !== x) x = parent[x] = parent[parent[x]];
     return x;
   };
   const inRing = new Uint8Array(n);
-  s.bonds.forEach((b, k) => {
-    if (!bondInRing[k]) return;
+  for (let k = 0; k < s.bonds.length; k++) {
+    if (!bondInRing[k]) continue;
+    const b = s.bonds[k];
     inRing[b.a] = inRing[b.b] = 1;
     const ra = find(b.a);
     const rb = find(b.b);
     if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  });
+  }
   const systems: number[][] = [];
   const systemOf = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
@@ -124,6 +126,8 @@ function hortonBasis(
   const basis: Uint32Array[] = [];
   const owner = new Int32Array(m).fill(-1);
   const rings: number[][] = [];
+  const scratch = new Uint32Array(words);
+  const work = new Uint32Array(words);
   let below = 0;
   for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
     const depth = (limit + 1) >> 1;
@@ -164,26 +168,31 @@ function hortonBasis(
           if (x !== r && y !== r && branch[x] === branch[y]) continue;
           const size = dist[x] + dist[y] + 1;
           if (size <= below || size > limit) continue;
-          const bits = new Uint32Array(words);
-          const path: number[] = [];
-          for (let u = x; u !== r; u = parent[u]) {
-            path.push(u);
-            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-          }
-          path.push(r);
-          path.reverse(); // r .. x
-          for (let u = y; u !== r; u = parent[u]) {
-            path.push(u);
-            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-          }
-          bits[k >>> 5] ^= 1 << (k & 31);
+          // The bond set first, in a scratch vector: most candidates repeat one found from an earlier root.
+          for (let u = x; u !== r; u = parent[u]) scratch[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          for (let u = y; u !== r; u = parent[u]) scratch[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          scratch[k >>> 5] ^= 1 << (k & 31);
           let hash = 0;
-          for (let w = 0; w < words; w++) hash = (Math.imul(hash, 31) + bits[w]) | 0;
+          for (let w = 0; w < words; w++) hash = (Math.imul(hash, 31) + scratch[w]) | 0;
           const bucket = seen.get(hash);
-          if (bucket?.some((c) => equalBits(c, bits))) continue;
+          let repeat = false;
+          if (bucket) {
+            for (let j = 0; j < bucket.length && !repeat; j++) repeat = equalBits(bucket[j], scratch);
+          }
+          if (repeat) {
+            scratch.fill(0);
+            continue;
+          }
+          const bits = scratch.slice();
+          scratch.fill(0);
           if (bucket) bucket.push(bits);
           else seen.set(hash, [bits]);
-          cands.push({ size, atoms: path, bits, hash });
+          const path: number[] = [];
+          for (let u = x; u !== r; u = parent[u]) path.push(u);
+          path.push(r);
+          path.reverse(); // r .. x
+          for (let u = y; u !== r; u = parent[u]) path.push(u);
+          cands.push({ size, atoms: path, bits });
         }
       }
       for (let t = 0; t < tail; t++) dist[order[t]] = -1;
@@ -191,7 +200,8 @@ function hortonBasis(
     cands.sort((p, q) => p.size - q.size);
     // Gaussian elimination over GF(2) in echelon form: each basis vector owns its lowest bit.
     for (const c of cands) {
-      const v = c.bits.slice();
+      const v = work;
+      v.set(c.bits);
       let p = firstBit(v);
       while (p >= 0 && owner[p] >= 0) {
         xorInto(v, basis[owner[p]]);
@@ -199,7 +209,7 @@ function hortonBasis(
       }
       if (p < 0) continue;
       owner[p] = basis.length;
-      basis.push(v);
+      basis.push(v.slice());
       rings.push(c.atoms);
       if (rings.length === nullity) break;
     }
