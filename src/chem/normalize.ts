@@ -7,7 +7,8 @@
  * the input's numbering. A stereo element that named two hydrogens of one atom describes no stereo unit; it
  * stays as written and perception reports it.
  */
-import { IMPLICIT_H, type StereoElement, type Structure } from './types.js';
+import { IMPLICIT_H, type Atom, type Bond, type StereoElement, type StereoGroup, type Structure } from './types.js';
+import { atomWithHCount, newBond, newGroup, objectList, restructure } from './read/make.js';
 
 export interface Normalized {
   structure: Structure;
@@ -19,66 +20,89 @@ export interface Normalized {
   folded: number;
 }
 
+/** Is atom h an ordinary hydrogen that bond b (to x) lets fold into x? */
+function foldable(s: Structure, degree: Int32Array, order: number, h: number, x: number): boolean {
+  const a = s.atoms[h];
+  if (a.atomicNumber !== 1 || a.isotope !== null || a.charge !== 0 || a.radical !== 0) return false;
+  return a.mapNumber === null && degree[h] === 1 && order === 1 && s.atoms[x].atomicNumber !== 1;
+}
+
+/** A stereo element with its atoms renumbered: `at` for the atoms it is on, `lig` for its ligands / refs. */
+function remapStereo(e: StereoElement, at: (x: number) => number, lig: (x: number) => number): StereoElement {
+  if (e.kind === 'tetrahedral') {
+    const l = e.ligands;
+    return { kind: e.kind, centre: at(e.centre), ligands: [lig(l[0]), lig(l[1]), lig(l[2]), lig(l[3])], winding: e.winding };
+  }
+  if (e.kind === 'double-bond') {
+    return {
+      kind: e.kind,
+      ends: [at(e.ends[0]), at(e.ends[1])],
+      refs: [lig(e.refs[0]), lig(e.refs[1])],
+      relation: e.relation,
+    };
+  }
+  const l = e.ligands;
+  return {
+    kind: e.kind,
+    subtype: e.subtype,
+    ends: [at(e.ends[0]), at(e.ends[1])],
+    ligands: [lig(l[0]), lig(l[1]), lig(l[2]), lig(l[3])],
+    winding: e.winding,
+  };
+}
+
+// Structures, atoms and bonds are built by the factories of read/make.ts (never by object spreads), so that
+// every Structure has one hidden class whichever reader or step made it.
 export function normalize(s: Structure): Normalized {
   const n = s.atoms.length;
+  const m = s.bonds.length;
   const degree = new Int32Array(n);
-  for (const b of s.bonds) {
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
     degree[b.a]++;
     degree[b.b]++;
   }
   const foldInto = new Int32Array(n).fill(-1);
   const foldedOn = new Int32Array(n);
-  for (const b of s.bonds) {
-    for (const [h, x] of [
-      [b.a, b.b],
-      [b.b, b.a],
-    ]) {
-      const a = s.atoms[h];
-      if (a.atomicNumber !== 1 || a.isotope !== null || a.charge !== 0 || a.radical !== 0) continue;
-      if (a.mapNumber !== null || degree[h] !== 1 || b.order !== 1 || s.atoms[x].atomicNumber === 1) continue;
-      foldInto[h] = x;
-    }
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
+    if (foldable(s, degree, b.order, b.a, b.b)) foldInto[b.a] = b.b;
+    if (foldable(s, degree, b.order, b.b, b.a)) foldInto[b.b] = b.a;
   }
   for (let h = 0; h < n; h++) if (foldInto[h] >= 0) foldedOn[foldInto[h]]++;
   let folded = 0;
-  const fromInput = new Array<number>(n);
+  const fromInput: number[] = [];
   const toInput: number[] = [];
   for (let i = 0; i < n; i++) {
     if (foldInto[i] >= 0) {
-      fromInput[i] = -1;
+      fromInput.push(-1);
       folded++;
     } else {
-      fromInput[i] = toInput.length;
+      fromInput.push(toInput.length);
       toInput.push(i);
     }
   }
   if (folded === 0) return { structure: s, toInput, fromInput, folded };
 
-  const atoms = toInput.map((i) => ({ ...s.atoms[i], hCount: s.atoms[i].hCount + foldedOn[i] }));
-  const bonds = s.bonds
-    .filter((b) => foldInto[b.a] < 0 && foldInto[b.b] < 0)
-    .map((b) => ({ ...b, a: fromInput[b.a], b: fromInput[b.b] }));
+  const atoms = objectList<Atom>();
+  for (const i of toInput) atoms.push(atomWithHCount(s.atoms[i], s.atoms[i].hCount + foldedOn[i]));
+  const bonds = objectList<Bond>();
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
+    if (foldInto[b.a] < 0 && foldInto[b.b] < 0)
+      bonds.push(newBond(fromInput[b.a], fromInput[b.b], b.order, b.aromatic, b.wedge));
+  }
+  const at = (x: number): number => fromInput[x];
   const lig = (x: number): number => (x < 0 ? x : foldInto[x] >= 0 ? IMPLICIT_H : fromInput[x]);
-  const stereo: StereoElement[] = s.stereo.map((e): StereoElement => {
-    if (e.kind === 'tetrahedral') {
-      const [a, b, c, d] = e.ligands.map(lig);
-      return { ...e, centre: fromInput[e.centre], ligands: [a, b, c, d] };
-    }
-    if (e.kind === 'double-bond') {
-      return {
-        ...e,
-        ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]],
-        refs: [lig(e.refs[0]), lig(e.refs[1])],
-      };
-    }
-    const [a, b, c, d] = e.ligands.map(lig);
-    return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], ligands: [a, b, c, d] };
-  });
-  const groups = s.groups.map((g) => ({
-    ...g,
-    atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x]),
-  }));
-  return { structure: { ...s, atoms, bonds, stereo, groups }, toInput, fromInput, folded };
+  const stereo = objectList<StereoElement>();
+  for (const e of s.stereo) stereo.push(remapStereo(e, at, lig));
+  const groups = objectList<StereoGroup>();
+  for (const g of s.groups) {
+    const ga: number[] = [];
+    for (const x of g.atoms) if (foldInto[x] < 0) ga.push(fromInput[x]);
+    groups.push(newGroup(g.type, g.id, ga));
+  }
+  return { structure: restructure(s, atoms, bonds, stereo, groups), toInput, fromInput, folded };
 }
 
 /** The sub-structure on `atoms` (ascending indices of one or more whole components), stereo and groups kept. */
@@ -86,35 +110,27 @@ export function extractAtoms(s: Structure, atoms: number[]): Structure {
   const index = new Int32Array(s.atoms.length).fill(-1);
   atoms.forEach((a, k) => (index[a] = k));
   const keep = (x: number): boolean => x < 0 || index[x] >= 0;
+  const at = (x: number): number => index[x];
   const lig = (x: number): number => (x < 0 ? x : index[x]);
-  const stereo: StereoElement[] = [];
+  const stereo = objectList<StereoElement>();
   for (const e of s.stereo) {
     if (e.kind === 'tetrahedral') {
       if (index[e.centre] < 0 || !e.ligands.every(keep)) continue;
-      const [a, b, c, d] = e.ligands.map(lig);
-      stereo.push({ ...e, centre: index[e.centre], ligands: [a, b, c, d] });
     } else if (e.kind === 'double-bond') {
       if (!e.ends.every(keep) || !e.refs.every(keep)) continue;
-      stereo.push({
-        ...e,
-        ends: [index[e.ends[0]], index[e.ends[1]]],
-        refs: [lig(e.refs[0]), lig(e.refs[1])],
-      });
-    } else {
-      if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
-      const [a, b, c, d] = e.ligands.map(lig);
-      stereo.push({ ...e, ends: [index[e.ends[0]], index[e.ends[1]]], ligands: [a, b, c, d] });
-    }
+    } else if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
+    stereo.push(remapStereo(e, at, lig));
   }
-  return {
-    ...s,
-    atoms: atoms.map((a) => s.atoms[a]),
-    bonds: s.bonds
-      .filter((b) => index[b.a] >= 0 && index[b.b] >= 0)
-      .map((b) => ({ ...b, a: index[b.a], b: index[b.b] })),
-    stereo,
-    groups: s.groups
-      .map((g) => ({ ...g, atoms: g.atoms.filter((x) => index[x] >= 0).map((x) => index[x]) }))
-      .filter((g) => g.atoms.length > 0),
-  };
+  const subAtoms = objectList<Atom>();
+  for (const a of atoms) subAtoms.push(s.atoms[a]);
+  const bonds = objectList<Bond>();
+  for (const b of s.bonds)
+    if (index[b.a] >= 0 && index[b.b] >= 0) bonds.push(newBond(index[b.a], index[b.b], b.order, b.aromatic, b.wedge));
+  const groups = objectList<StereoGroup>();
+  for (const g of s.groups) {
+    const ga: number[] = [];
+    for (const x of g.atoms) if (index[x] >= 0) ga.push(index[x]);
+    if (ga.length > 0) groups.push(newGroup(g.type, g.id, ga));
+  }
+  return restructure(s, subAtoms, bonds, stereo, groups);
 }

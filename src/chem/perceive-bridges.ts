@@ -12,6 +12,7 @@
 import type { Graph, RingInfo } from './graph/index.js';
 import type { Structure } from './types.js';
 import { permutationParity, type PerceivedUnit } from './perceive-units.js';
+import { objectList } from './read/make.js';
 
 export interface Coupling {
   a: number;
@@ -23,7 +24,10 @@ export interface Coupling {
 const MAX_INNER = 3;
 
 export function bridgeCouplings(s: Structure, g: Graph, rings: RingInfo, units: PerceivedUnit[]): Coupling[] {
-  return [...bridgedPairs(s, g, rings, units), ...fusedPairs(g, rings, units)];
+  const out = objectList<Coupling>();
+  for (const c of bridgedPairs(s, g, rings, units)) out.push(c);
+  for (const c of fusedPairs(g, rings, units)) out.push(c);
+  return out;
 }
 
 /**

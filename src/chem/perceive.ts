@@ -24,6 +24,7 @@ import { hToken, lpToken, type PerceivedUnit } from './perceive-units.js';
 import { applyInputStereo } from './perceive-input.js';
 import { survivesSymmetry, swapsTerminalPair } from './perceive-rescue.js';
 import { bridgeCouplings, type Coupling } from './perceive-bridges.js';
+import { objectList } from './read/make.js';
 
 export interface Perception {
   structure: Structure;
@@ -60,7 +61,7 @@ export function perceive(s: Structure): Perception {
   const classesOf = (): Int32Array => (classCache ??= equivalenceClasses(s));
   const tokenClass = (t: number): number => (t < n ? classesOf()[t] : t < 2 * n ? -1 : -2);
 
-  const drafts: Draft[] = [];
+  const drafts = objectList<Draft>();
   const invertibleAll = new Set<number>();
   for (let i = 0; i < n; i++) {
     const v = tetrahedralCandidate(s, graph, rings, aromaticBond, i);
@@ -131,7 +132,19 @@ export function perceive(s: Structure): Perception {
     kept = fixedPoint(drafts, graph, n);
   }
   kept.sort((a, b) => Math.min(...a.atoms) - Math.min(...b.atoms));
-  const units: PerceivedUnit[] = kept.map(({ pairs: _p, ...u }) => u);
+  // explicit literal, not `({ pairs, ...u }) => u`: a rest copy has a hidden class of its own
+  const units = objectList<PerceivedUnit>();
+  for (const d of kept) {
+    units.push({
+      kind: d.kind,
+      mode: d.mode,
+      atoms: d.atoms,
+      tokens: d.tokens,
+      defined: d.defined,
+      bit: d.bit,
+      equivalentPair: d.equivalentPair,
+    });
+  }
   const unitOfAtom = new Int32Array(n).fill(-1);
   units.forEach((u, k) => {
     for (const a of u.atoms) unitOfAtom[a] = k;
@@ -142,7 +155,7 @@ export function perceive(s: Structure): Perception {
   components.forEach((c, k) => {
     for (const a of c) componentOfAtom[a] = k;
   });
-  const remarks: string[] = [];
+  const remarks = objectList<string>();
   const invertibleNitrogens = applyInputStereo(s, units, unitOfAtom, invertibleAll, remarks);
   const couplings = bridgeCouplings(s, graph, rings, units);
   for (const c of couplings) {
@@ -168,8 +181,16 @@ export function perceive(s: Structure): Perception {
     componentOfAtom,
     remarks,
   } as Omit<Perception, 'classes'> as Perception;
-  Object.defineProperty(result, 'classes', { get: classesOf, enumerable: true });
+  // One getter function for every result (a new closure per result would turn each result into a slow
+  // dictionary-mode object); the per-result computation sits in a WeakMap.
+  lazyClasses.set(result, classesOf);
+  Object.defineProperty(result, 'classes', { get: classesGetter, enumerable: true });
   return result;
+}
+
+const lazyClasses = new WeakMap<object, () => Int32Array>();
+function classesGetter(this: object): Int32Array {
+  return lazyClasses.get(this)!();
 }
 
 /**
@@ -205,9 +226,11 @@ function fixedPoint(drafts: Draft[], g: Graph, n: number): Draft[] {
     alive.forEach((d, k) => {
       for (const a of d.atoms) unitAtom[a] = k;
     });
-    const next = alive.filter((d, k) =>
-      d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k)),
-    );
+    const next = objectList<Draft>();
+    for (let k = 0; k < alive.length; k++) {
+      const d = alive[k];
+      if (d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k))) next.push(d);
+    }
     if (next.length === alive.length) return next;
     alive = next;
   }

@@ -6,6 +6,7 @@
  * Field syntax as published with the format (ChemAxon's CXSMILES documentation); the skip rule is our own.
  */
 import type { ReadError, StereoGroup } from '../types.js';
+import { newGroup, objectList } from './make.js';
 
 export type CxResult = { ok: true; groups: StereoGroup[]; end: number } | { ok: false; error: ReadError };
 
@@ -23,7 +24,7 @@ function fail(code: string, message: string, offset: number): CxResult {
  */
 export function parseCxExtension(s: string, start: number, atomCount: number): CxResult {
   const n = s.length;
-  const groups: StereoGroup[] = [];
+  const groups = objectList<StereoGroup>();
   let i = start + 1;
   for (;;) {
     if (i >= n) return fail('cxsmiles-unclosed', "CXSMILES block is not closed with '|'", start);
@@ -80,7 +81,7 @@ export function parseCxExtension(s: string, start: number, atomCount: number): C
       if (same) {
         for (const a of atoms) if (!same.atoms.includes(a)) same.atoms.push(a);
       } else {
-        groups.push({ type, id, atoms });
+        groups.push(newGroup(type, id, atoms));
       }
       i = j;
       continue;

@@ -12,8 +12,8 @@ export interface KekuleInput {
   bondB: ArrayLike<number>;
   /** Indices of aromatic bonds that may become double. */
   aromaticBonds: readonly number[];
-  /** Atoms that must receive exactly one double bond. */
-  needsDouble: ArrayLike<boolean>;
+  /** Atoms that must receive exactly one double bond (true or 1). */
+  needsDouble: ArrayLike<boolean | number>;
 }
 
 /** The bonds to make double, or an atom that cannot get its double bond. */
@@ -31,25 +31,48 @@ export function kekulize(inp: KekuleInput): KekuleResult {
   }
   const m = globalOf.length;
   if (m === 0) return { ok: true, doubleBonds: [] };
-  const adj: number[][] = Array.from({ length: m }, () => []);
-  const adjBond: number[][] = Array.from({ length: m }, () => []);
-  for (const bi of inp.aromaticBonds) {
+  // neighbour lists (in aromatic-bond order) as flat arrays: vertex u's are nb[start[u] .. start[u + 1])
+  const deg = new Int32Array(m);
+  const bonds = inp.aromaticBonds;
+  for (let k = 0; k < bonds.length; k++) {
+    const u = local[inp.bondA[bonds[k]!]!]!;
+    const v = local[inp.bondB[bonds[k]!]!]!;
+    if (u < 0 || v < 0) continue;
+    deg[u]++;
+    deg[v]++;
+  }
+  const start = new Int32Array(m + 1);
+  for (let u = 0; u < m; u++) start[u + 1] = start[u]! + deg[u]!;
+  const nb = new Int32Array(start[m]!);
+  const nbBond = new Int32Array(start[m]!);
+  const fill = start.slice(0, m);
+  for (let k = 0; k < bonds.length; k++) {
+    const bi = bonds[k]!;
     const u = local[inp.bondA[bi]!]!;
     const v = local[inp.bondB[bi]!]!;
     if (u < 0 || v < 0) continue;
-    adj[u]!.push(v);
-    adjBond[u]!.push(bi);
-    adj[v]!.push(u);
-    adjBond[v]!.push(bi);
+    nb[fill[u]!] = v;
+    nbBond[fill[u]!++] = bi;
+    nb[fill[v]!] = u;
+    nbBond[fill[v]!++] = bi;
   }
   const match = new Int32Array(m).fill(-1);
-  // Greedy start, fewest choices first (forced pairs at ring fusions and chain ends go first).
-  const byDegree = Array.from({ length: m }, (_, i) => i).sort((x, y) => adj[x]!.length - adj[y]!.length);
-  for (const v of byDegree) {
+  // Greedy start, fewest choices first (forced pairs at ring fusions and chain ends go first); ties in input
+  // order (a stable counting sort by degree).
+  let maxDeg = 0;
+  for (let u = 0; u < m; u++) if (deg[u]! > maxDeg) maxDeg = deg[u]!;
+  const bucket = new Int32Array(maxDeg + 2);
+  for (let u = 0; u < m; u++) bucket[deg[u]! + 1]++;
+  for (let d = 0; d <= maxDeg; d++) bucket[d + 1] += bucket[d]!;
+  const byDegree = new Int32Array(m);
+  for (let u = 0; u < m; u++) byDegree[bucket[deg[u]!]!++] = u;
+  for (let k = 0; k < m; k++) {
+    const v = byDegree[k]!;
     if (match[v] !== -1) continue;
     let best = -1;
-    for (const u of adj[v]!) {
-      if (match[u] === -1 && (best === -1 || adj[u]!.length < adj[best]!.length)) best = u;
+    for (let e = start[v]!; e < start[v + 1]!; e++) {
+      const u = nb[e]!;
+      if (match[u] === -1 && (best === -1 || deg[u]! < deg[best]!)) best = u;
     }
     if (best !== -1) {
       match[v] = best;
@@ -60,15 +83,18 @@ export function kekulize(inp: KekuleInput): KekuleResult {
   // the size of each system, not of the whole molecule, per augmenting search.
   const comp = new Int32Array(m).fill(-1);
   const pos = new Int32Array(m);
+  const members: number[] = [];
   for (let s0 = 0; s0 < m; s0++) {
     if (comp[s0] !== -1) continue;
-    const members = [s0];
+    members.length = 0;
+    members.push(s0);
     comp[s0] = s0;
     let exposed = false;
     for (let h = 0; h < members.length; h++) {
       const u = members[h]!;
       if (match[u] === -1) exposed = true;
-      for (const w of adj[u]!) {
+      for (let e = start[u]!; e < start[u + 1]!; e++) {
+        const w = nb[e]!;
         if (comp[w] === -1) {
           comp[w] = s0;
           members.push(w);
@@ -77,7 +103,11 @@ export function kekulize(inp: KekuleInput): KekuleResult {
     }
     if (!exposed) continue;
     members.forEach((u, k) => (pos[u] = k));
-    const subAdj = members.map((u) => adj[u]!.map((w) => pos[w]!));
+    const subAdj = members.map((u) => {
+      const list: number[] = [];
+      for (let e = start[u]!; e < start[u + 1]!; e++) list.push(pos[nb[e]!]!);
+      return list;
+    });
     const subMatch = new Int32Array(members.length);
     members.forEach((u, k) => (subMatch[k] = match[u] === -1 ? -1 : pos[match[u]!]!));
     for (let k = 0; k < members.length; k++) {
@@ -89,7 +119,10 @@ export function kekulize(inp: KekuleInput): KekuleResult {
   const doubleBonds: number[] = [];
   for (let u = 0; u < m; u++) {
     const v = match[u]!;
-    if (v > u) doubleBonds.push(adjBond[u]![adj[u]!.indexOf(v)]!);
+    if (v <= u) continue;
+    let e = start[u]!;
+    while (nb[e] !== v) e++;
+    doubleBonds.push(nbBond[e]!);
   }
   return { ok: true, doubleBonds };
 }

@@ -3,6 +3,7 @@
  * 1 up, 6 down, 4 either; 3 on a double bond = either/crossed). V3000 maps its CFG values to these codes.
  */
 import type { Bond, ReadError } from '../types.js';
+import { newBond } from './make.js';
 
 /** Bond from molfile numbers; shared with V3000 (which passes its own stereo codes mapped to V2000 ones). */
 export function makeBond(
@@ -103,5 +104,5 @@ export function makeBond(
       });
     }
   }
-  return { bond: { a: a - 1, b: b - 1, order, aromatic, wedge } };
+  return { bond: newBond(a - 1, b - 1, order, aromatic, wedge) };
 }

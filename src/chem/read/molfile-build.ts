@@ -9,6 +9,7 @@ import { adjacency } from './molfile-graph.js';
 import { kekulizeAromatic } from './molfile-kekulize.js';
 import { stereoFrom2d } from './stereo-2d.js';
 import { stereoFrom3d } from './stereo-3d.js';
+import { newStructure, objectList } from './make.js';
 
 /** A connection table as read, before hydrogens, Kekulé orders and stereo are worked out. */
 export interface RawMolecule {
@@ -90,16 +91,16 @@ export function finishMolecule(raw: RawMolecule): ReadResult {
     if (c[0] !== 0 || c[1] !== 0) dimension = 2;
   }
 
-  const structure: Structure = {
+  const structure: Structure = newStructure(
     atoms,
     bonds,
-    stereo: [],
-    groups: raw.groups,
-    chiralFlag: raw.chiralFlag,
-    title: raw.title,
-    properties: {},
+    objectList(),
+    raw.groups,
+    raw.chiralFlag,
+    raw.title,
+    {},
     dimension,
-  };
+  );
   if (dimension === 3) structure.stereo = stereoFrom3d(structure, adj, warnings, raw.atomLines);
   else if (dimension === 2) structure.stereo = stereoFrom2d(structure, adj, warnings, raw.atomLines);
   else if (bonds.some((b) => b.wedge === 'up' || b.wedge === 'down') && atoms.length > 1) {

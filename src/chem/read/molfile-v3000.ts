@@ -7,6 +7,7 @@ import type { Atom, Bond, ReadError, ReadResult, StereoGroup } from '../types.js
 import { finishMolecule } from './molfile-build.js';
 import { elementOf } from './molfile-fields.js';
 import { makeBond } from './molfile-bond.js';
+import { coords3, newAtom, newGroup, objectList } from './make.js';
 
 interface V30Line {
   text: string;
@@ -108,11 +109,11 @@ export function parseV3000(
     return fail('molfile-missing-end', 'the V3000 molfile ends without its "M  END" line', lineNo(end));
 
   const warnings: ReadError[] = [];
-  const atoms: Atom[] = [];
+  const atoms = objectList<Atom>();
   const atomLines: number[] = [];
   const valences: (number | null)[] = [];
-  const bonds: Bond[] = [];
-  const groups: StereoGroup[] = [];
+  const bonds = objectList<Bond>();
+  const groups = objectList<StereoGroup>();
   const indexOf = new Map<number, number>();
   const seenBonds = new Set<number>();
   let chiralFlag = false;
@@ -250,7 +251,7 @@ export function parseV3000(
       }
       const type = m[1] === 'ABS' ? 'abs' : m[1] === 'RAC' ? 'and' : 'or';
       const id = type === 'abs' ? 0 : Number(m[2] || '0');
-      groups.push({ type, id, atoms: members });
+      groups.push(newGroup(type, id, members));
     }
   }
   if (block !== null)
@@ -350,18 +351,18 @@ function readAtom(
   }
   indexOf.set(index, position);
   return {
-    atom: {
-      element: el.element,
-      atomicNumber: el.atomicNumber,
+    atom: newAtom(
+      el.element,
+      el.atomicNumber,
       charge,
-      isotope: mass > 0 ? mass : el.isotope,
-      hCount: 0,
-      aromatic: false,
-      radical: rad === 2 ? 1 : rad === 1 || rad === 3 ? 2 : 0,
-      mapNumber: Number.isInteger(map) && map > 0 ? map : null,
-      inputNumber: position + 1,
-      coords: [x, y, z],
-    },
+      mass > 0 ? mass : el.isotope,
+      0,
+      false,
+      rad === 2 ? 1 : rad === 1 || rad === 3 ? 2 : 0,
+      Number.isInteger(map) && map > 0 ? map : null,
+      position + 1,
+      coords3(x, y, z),
+    ),
     // VAL=-1 means zero valence; HCOUNT is a query property and does not set hydrogens.
     valence: val === -1 ? 0 : val > 0 ? val : null,
   };

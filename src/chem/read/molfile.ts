@@ -8,6 +8,7 @@ import { finishMolecule, type RawMolecule } from './molfile-build.js';
 import { elementOf, floatField, intField, roundedMass, tokens } from './molfile-fields.js';
 import { parseV3000 } from './molfile-v3000.js';
 import { makeBond } from './molfile-bond.js';
+import { coords3, newAtom, objectList } from './make.js';
 
 export interface MolfileOptions {
   /** Line number of the molfile's first line within a larger file (for error positions); default 1. */
@@ -88,7 +89,7 @@ export function parseMolfileLines(
   }
   if (!(nLists >= 0)) nLists = 0;
 
-  const atoms: Atom[] = [];
+  const atoms = objectList<Atom>();
   const atomLines: number[] = [];
   const valences: (number | null)[] = [];
   let idx = start + 4;
@@ -186,23 +187,25 @@ export function parseMolfileLines(
         });
       } else isotope = m + massDiff;
     }
-    atoms.push({
-      element: el.element,
-      atomicNumber: el.atomicNumber,
-      charge,
-      isotope,
-      hCount: 0,
-      aromatic: false,
-      radical,
-      mapNumber: map > 0 ? map : null,
-      inputNumber: i + 1,
-      coords: [x, y, z],
-    });
+    atoms.push(
+      newAtom(
+        el.element,
+        el.atomicNumber,
+        charge,
+        isotope,
+        0,
+        false,
+        radical,
+        map > 0 ? map : null,
+        i + 1,
+        coords3(x, y, z),
+      ),
+    );
     valences.push(valence >= 1 && valence <= 14 ? valence : valence === 15 ? 0 : null);
     atomLines.push(lineNo(idx));
   }
 
-  const bonds: Bond[] = [];
+  const bonds = objectList<Bond>();
   const seen = new Set<number>();
   for (let i = 0; i < nBonds; i++, idx++) {
     if (idx >= end)
@@ -251,7 +254,7 @@ export function parseMolfileLines(
     bonds,
     valences,
     atomLines,
-    groups: [],
+    groups: objectList(),
     chiralFlag: chiral === 1,
     title,
     warnings,

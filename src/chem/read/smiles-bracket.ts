@@ -55,44 +55,44 @@ function raw(element: string, z: number, aromatic: boolean, offset: number): Raw
 }
 
 /**
- * Reads an organic-subset atom at `i` (B C N O P S F Cl Br I, aromatic b c n o p s, or `*`).
- * Returns null when the character does not start one.
+ * Reads an organic-subset atom at `i` (B C N O P S F Cl Br I, aromatic b c n o p s, or `*`); it ends at
+ * `i + atom.element.length`. Returns null when the character does not start one.
  */
-export function readOrganicAtom(s: string, i: number): { atom: RawAtom; end: number } | null {
+export function readOrganicAtom(s: string, i: number): RawAtom | null {
   const c = s.charCodeAt(i);
   switch (c) {
     case 66: // B
-      if (s.charCodeAt(i + 1) === 114) return { atom: raw('Br', 35, false, i), end: i + 2 };
-      return { atom: raw('B', 5, false, i), end: i + 1 };
+      if (s.charCodeAt(i + 1) === 114) return raw('Br', 35, false, i);
+      return raw('B', 5, false, i);
     case 67: // C
-      if (s.charCodeAt(i + 1) === 108) return { atom: raw('Cl', 17, false, i), end: i + 2 };
-      return { atom: raw('C', 6, false, i), end: i + 1 };
+      if (s.charCodeAt(i + 1) === 108) return raw('Cl', 17, false, i);
+      return raw('C', 6, false, i);
     case 78:
-      return { atom: raw('N', 7, false, i), end: i + 1 };
+      return raw('N', 7, false, i);
     case 79:
-      return { atom: raw('O', 8, false, i), end: i + 1 };
+      return raw('O', 8, false, i);
     case 80:
-      return { atom: raw('P', 15, false, i), end: i + 1 };
+      return raw('P', 15, false, i);
     case 83:
-      return { atom: raw('S', 16, false, i), end: i + 1 };
+      return raw('S', 16, false, i);
     case 70:
-      return { atom: raw('F', 9, false, i), end: i + 1 };
+      return raw('F', 9, false, i);
     case 73:
-      return { atom: raw('I', 53, false, i), end: i + 1 };
+      return raw('I', 53, false, i);
     case 98:
-      return { atom: raw('B', 5, true, i), end: i + 1 };
+      return raw('B', 5, true, i);
     case 99:
-      return { atom: raw('C', 6, true, i), end: i + 1 };
+      return raw('C', 6, true, i);
     case 110:
-      return { atom: raw('N', 7, true, i), end: i + 1 };
+      return raw('N', 7, true, i);
     case 111:
-      return { atom: raw('O', 8, true, i), end: i + 1 };
+      return raw('O', 8, true, i);
     case 112:
-      return { atom: raw('P', 15, true, i), end: i + 1 };
+      return raw('P', 15, true, i);
     case 115:
-      return { atom: raw('S', 16, true, i), end: i + 1 };
+      return raw('S', 16, true, i);
     case 42:
-      return { atom: raw('*', 0, false, i), end: i + 1 };
+      return raw('*', 0, false, i);
     default:
       return null;
   }

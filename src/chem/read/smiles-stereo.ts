@@ -17,13 +17,22 @@ import type { SmilesGraph } from './smiles-parse.js';
 
 /** Neighbours of `i` in written order with its hydrogens inserted where OpenSMILES puts them. */
 function ligandsOf(g: SmilesGraph, hCount: ArrayLike<number>, i: number): number[] {
-  const list = g.nbr[i]!.slice();
+  const list: number[] = [];
   const h = hCount[i]!;
-  if (h > 0) {
-    const at = g.preceded[i] ? 1 : 0;
-    for (let k = 0; k < h; k++) list.splice(at, 0, IMPLICIT_H);
+  const from = g.nbrStart[i]!;
+  const stop = g.nbrStart[i + 1]!;
+  // the hydrogens go after the preceding atom, else first
+  const at = from + (g.preceded[i] === 1 && stop > from ? 1 : 0);
+  for (let e = from; e < stop; e++) {
+    if (e === at) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
+    list.push(g.nbrAtom[e]!);
   }
+  if (at === stop) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
   return list;
+}
+
+function degree(g: SmilesGraph, i: number): number {
+  return g.nbrStart[i + 1]! - g.nbrStart[i]!;
 }
 
 function warn(code: string, message: string, offset: number): ReadError {
@@ -37,11 +46,10 @@ function isCumuleneInner(
   hCount: ArrayLike<number>,
   i: number,
 ): boolean {
-  const bs = g.nbrBond[i]!;
-  if (bs.length !== 2 || hCount[i] !== 0) return false;
-  return (
-    order[bs[0]!] === 2 && order[bs[1]!] === 2 && !g.bonds[bs[0]!]!.aromatic && !g.bonds[bs[1]!]!.aromatic
-  );
+  if (degree(g, i) !== 2 || hCount[i] !== 0) return false;
+  const b0 = g.nbrBond[g.nbrStart[i]!]!;
+  const b1 = g.nbrBond[g.nbrStart[i]! + 1]!;
+  return order[b0] === 2 && order[b1] === 2 && g.bondAromatic[b0] !== 1 && g.bondAromatic[b1] !== 1;
 }
 
 /** Walks from `from` through `to` along cumulated double bonds; returns [terminal, its chain neighbour, bonds]. */
@@ -57,8 +65,8 @@ function walkCumulene(
   let doubles = 1;
   let guard = g.atoms.length;
   while (isCumuleneInner(g, order, hCount, cur) && guard-- > 0) {
-    const nb = g.nbr[cur]!;
-    const next = nb[0] === prev ? nb[1]! : nb[0]!;
+    const e = g.nbrStart[cur]!;
+    const next = g.nbrAtom[e] === prev ? g.nbrAtom[e + 1]! : g.nbrAtom[e]!;
     if (next === from) break; // cumulated ring, no terminal
     prev = cur;
     cur = next;
@@ -131,11 +139,11 @@ function allene(
   c: number,
   winding: '@' | '@@',
 ): AxialStereo | null {
-  const nb = g.nbr[c]!;
   const ends: number[] = [];
   const ligs: number[] = [];
   const lengths: number[] = [];
-  for (const first of nb) {
+  for (let e = g.nbrStart[c]!, stop = g.nbrStart[c + 1]!; e < stop; e++) {
+    const first = g.nbrAtom[e]!;
     const [t, p, doubles] = walkCumulene(g, order, hCount, c, first);
     if (isCumuleneInner(g, order, hCount, t)) return null;
     lengths.push(doubles);
@@ -163,15 +171,14 @@ function marksAt(
   c: number,
 ): { x: number; up: boolean }[] {
   const res: { x: number; up: boolean }[] = [];
-  const nb = g.nbr[t]!;
-  const bs = g.nbrBond[t]!;
-  for (let k = 0; k < nb.length; k++) {
-    const x = nb[k]!;
+  for (let e = g.nbrStart[t]!, stop = g.nbrStart[t + 1]!; e < stop; e++) {
+    const x = g.nbrAtom[e]!;
     if (x === c) continue;
-    const b = g.bonds[bs[k]!]!;
-    if (b.dir === 0 || order[bs[k]!] !== 1) continue;
+    const bi = g.nbrBond[e]!;
+    const dir = g.bondDir[bi]!;
+    if (dir === 0 || order[bi] !== 1) continue;
     // a '/' b: b lies above a.
-    res.push({ x, up: (b.a === t) === (b.dir === 1) });
+    res.push({ x, up: (g.bondA[bi] === t) === (dir === 1) });
   }
   return res;
 }
@@ -183,15 +190,15 @@ function doubleBonds(
   warnings: ReadError[],
   out: StereoElement[],
 ): void {
-  const m = g.bonds.length;
+  const m = g.bondCount;
   let anyDir = false;
-  for (let k = 0; k < m; k++) if (g.bonds[k]!.dir !== 0) anyDir = true;
+  for (let k = 0; k < m; k++) if (g.bondDir[k] !== 0) anyDir = true;
   if (!anyDir) return;
   const done = new Uint8Array(m);
   for (let k = 0; k < m; k++) {
-    const b = g.bonds[k]!;
-    if (order[k] !== 2 || b.aromatic || done[k]) continue;
+    if (order[k] !== 2 || g.bondAromatic[k] === 1 || done[k]) continue;
     done[k] = 1;
+    const b = { a: g.bondA[k]!, b: g.bondB[k]!, offset: g.bondOffset[k]! };
     const [t0, c0, d0] = walkCumulene(g, order, hCount, b.b, b.a);
     const [t1, c1, d1] = walkCumulene(g, order, hCount, b.a, b.b);
     const doubles = d0 + d1 - 1;
@@ -204,18 +211,16 @@ function doubleBonds(
         let prev = s;
         let cur = e;
         while (isCumuleneInner(g, order, hCount, cur)) {
-          const nb = g.nbr[cur]!;
-          const bs = g.nbrBond[cur]!;
-          const idx = nb[0] === prev ? 1 : 0;
-          done[bs[idx]!] = 1;
+          const e = g.nbrStart[cur]! + (g.nbrAtom[g.nbrStart[cur]!] === prev ? 1 : 0);
+          done[g.nbrBond[e]!] = 1;
           prev = cur;
-          cur = nb[idx]!;
+          cur = g.nbrAtom[e]!;
           if (cur === s) break;
         }
       }
     }
     if (doubles % 2 === 0) continue; // allene-like: configuration is written on the central atom
-    if (g.nbr[t0]!.length > 3 || g.nbr[t1]!.length > 3) continue;
+    if (degree(g, t0) > 3 || degree(g, t1) > 3) continue;
     const m0 = marksAt(g, order, t0, c0);
     const m1 = marksAt(g, order, t1, c1);
     if (m0.length === 0 || m1.length === 0) continue;

@@ -5,7 +5,8 @@
  * Kekulé form (valence.ts, OpenSMILES organic-subset rule) -> stereo (smiles-stereo.ts) -> CXSMILES enhanced
  * stereo (cxsmiles.ts). Bad input is returned as an error with a 0-based offset; nothing here throws on any input.
  */
-import type { Atom, Bond, BondOrder, ReadError, ReadResult, Structure } from '../types.js';
+import type { Atom, Bond, BondOrder, ReadError, ReadResult, StereoGroup, Structure } from '../types.js';
+import { newAtom, newBond, newStructure, objectList } from './make.js';
 import { parseCxExtension } from './cxsmiles.js';
 import { kekulize } from './kekulize.js';
 import { parseSmilesGraph, type SmilesGraph } from './smiles-parse.js';
@@ -42,18 +43,15 @@ function parse(text: string): ReadResult {
       ok: false,
       error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } },
     };
-  const warnings: ReadError[] = g.warnings.map((w) => ({
-    code: w.code,
-    message: w.message,
-    at: { offset: w.offset },
-  }));
+  const warnings: ReadError[] = [];
+  for (const w of g.warnings) warnings.push({ code: w.code, message: w.message, at: { offset: w.offset } });
   const n = g.atoms.length;
-  const m = g.bonds.length;
+  const m = g.bondCount;
 
   // after the SMILES: optional CXSMILES block, then an optional title
   let i = g.end;
   while (i < text.length && isSpace(text.charCodeAt(i))) i++;
-  let groups: Structure['groups'] = [];
+  let groups: Structure['groups'] | null = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
     const cx = parseCxExtension(text, i, n);
     if (!cx.ok) return cx;
@@ -64,7 +62,7 @@ function parse(text: string): ReadResult {
 
   // bond orders (Kekulé) and aromatic flags
   const order = new Uint8Array(m);
-  for (let k = 0; k < m; k++) order[k] = g.bonds[k]!.order;
+  for (let k = 0; k < m; k++) order[k] = g.bondOrder[k]!;
   let anyAromatic = false;
   for (let a = 0; a < n && !anyAromatic; a++) if (g.atoms[a]!.aromatic) anyAromatic = true;
   if (anyAromatic) {
@@ -75,14 +73,15 @@ function parse(text: string): ReadResult {
   // hydrogens and radicals
   const hCount = new Int32Array(n);
   const radical = new Uint8Array(n);
+  const { nbrStart, nbrBond, bondA, bondB } = g;
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a]!;
     let sum = 0;
     let oxo = 0;
-    for (const bi of g.nbrBond[a]!) {
+    for (let e = nbrStart[a]!, stop = nbrStart[a + 1]!; e < stop; e++) {
+      const bi = nbrBond[e]!;
       sum += order[bi]!;
-      const b = g.bonds[bi]!;
-      if (order[bi] === 2 && g.atoms[b.a === a ? b.b : b.a]!.atomicNumber === 8) oxo++;
+      if (order[bi] === 2 && g.atoms[bondA[bi] === a ? bondB[bi]! : bondA[bi]!]!.atomicNumber === 8) oxo++;
     }
     // OpenSMILES: an organic-subset atom whose bonds exceed its highest normal valence gets no H; we go further
     // and refuse any checked atom (organic subset or bracket) with more bonds than its highest valence.
@@ -100,37 +99,37 @@ function parse(text: string): ReadResult {
 
   const stereo = buildStereo(g, order, hCount, warnings);
 
-  const atoms: Atom[] = new Array(n);
+  const atoms = objectList<Atom>();
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a]!;
-    atoms[a] = {
-      element: ra.element,
-      atomicNumber: ra.atomicNumber,
-      charge: ra.charge,
-      isotope: ra.isotope,
-      hCount: hCount[a]!,
-      aromatic: ra.aromatic,
-      radical: radical[a]!,
-      mapNumber: ra.mapNumber,
-      inputNumber: a + 1,
-      coords: null,
-    };
+    atoms.push(
+      newAtom(
+        ra.element,
+        ra.atomicNumber,
+        ra.charge,
+        ra.isotope,
+        hCount[a]!,
+        ra.aromatic,
+        radical[a]!,
+        ra.mapNumber,
+        a + 1,
+        null,
+      ),
+    );
   }
-  const bonds: Bond[] = new Array(m);
-  for (let k = 0; k < m; k++) {
-    const b = g.bonds[k]!;
-    bonds[k] = { a: b.a, b: b.b, order: order[k]! as BondOrder, aromatic: b.aromatic, wedge: null };
-  }
-  const structure: Structure = {
+  const bonds = objectList<Bond>();
+  for (let k = 0; k < m; k++)
+    bonds.push(newBond(bondA[k]!, bondB[k]!, order[k]! as BondOrder, g.bondAromatic[k] === 1, null));
+  const structure = newStructure(
     atoms,
     bonds,
     stereo,
-    groups,
-    chiralFlag: null,
-    title: title === '' ? null : title,
-    properties: {},
-    dimension: 0,
-  };
+    groups ?? objectList<StereoGroup>(),
+    null,
+    title === '' ? null : title,
+    {},
+    0,
+  );
   return { ok: true, structure, warnings };
 }
 
@@ -140,14 +139,14 @@ function parse(text: string): ReadResult {
  */
 function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
   const n = g.atoms.length;
-  const m = g.bonds.length;
+  const m = g.bondCount;
+  const { nbrStart, nbrBond, bondAromatic } = g;
   const bridge = findBridges(g);
   const aromaticBonds: number[] = [];
   for (let k = 0; k < m; k++) {
-    const b = g.bonds[k]!;
-    if (!b.aromatic) continue;
-    if (bridge[k] && !b.explicit) {
-      b.aromatic = false;
+    if (bondAromatic[k] !== 1) continue;
+    if (bridge[k] && g.bondExplicit[k] !== 1) {
+      bondAromatic[k] = 0;
       continue;
     }
     aromaticBonds.push(k);
@@ -159,15 +158,18 @@ function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
     if (!ra.aromatic) continue;
     let sum = ra.hCount > 0 ? ra.hCount : 0;
     let hasAromaticBond = false;
-    for (const bi of g.nbrBond[a]!) {
-      sum += g.bonds[bi]!.aromatic ? 1 : order[bi]!;
-      if (g.bonds[bi]!.aromatic) hasAromaticBond = true;
+    for (let e = nbrStart[a]!, stop = nbrStart[a + 1]!; e < stop; e++) {
+      const bi = nbrBond[e]!;
+      if (bondAromatic[bi] === 1) {
+        sum += 1;
+        hasAromaticBond = true;
+      } else sum += order[bi]!;
     }
     const vals = defaultValences(ra.atomicNumber, ra.charge);
     let v = -1;
-    for (const x of vals) {
-      if (x >= sum) {
-        v = x;
+    for (let k = 0; k < vals.length; k++) {
+      if (vals[k]! >= sum) {
+        v = vals[k]!;
         break;
       }
     }
@@ -184,18 +186,12 @@ function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
     }
   }
   if (!any || aromaticBonds.length === 0) return null;
-  const bondA = new Int32Array(m);
-  const bondB = new Int32Array(m);
-  for (let k = 0; k < m; k++) {
-    bondA[k] = g.bonds[k]!.a;
-    bondB[k] = g.bonds[k]!.b;
-  }
   const res = kekulize({
     atomCount: n,
-    bondA,
-    bondB,
+    bondA: g.bondA,
+    bondB: g.bondB,
     aromaticBonds,
-    needsDouble: Array.from(needsDouble, (x) => x === 1),
+    needsDouble,
   });
   if (!res.ok) {
     const ra = g.atoms[res.atom]!;
@@ -212,39 +208,39 @@ function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
 /** Bridges (bonds in no ring) by iterative Tarjan low-link over the whole graph. */
 function findBridges(g: SmilesGraph): Uint8Array {
   const n = g.atoms.length;
-  const bridge = new Uint8Array(g.bonds.length);
+  const { nbrStart, nbrAtom, nbrBond, bondA, bondB } = g;
+  const bridge = new Uint8Array(g.bondCount);
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   const parentBond = new Int32Array(n).fill(-1);
-  const iter = new Int32Array(n);
+  const iter = new Int32Array(n); // next neighbour entry per atom
+  for (let v = 0; v < n; v++) iter[v] = nbrStart[v]!;
+  const stack = new Int32Array(n);
+  let sp = 0;
   let time = 0;
-  const stack: number[] = [];
   for (let s = 0; s < n; s++) {
     if (disc[s] !== -1) continue;
     disc[s] = low[s] = time++;
-    stack.push(s);
-    while (stack.length > 0) {
-      const v = stack[stack.length - 1]!;
-      const nb = g.nbr[v]!;
-      const bs = g.nbrBond[v]!;
-      if (iter[v]! < nb.length) {
+    stack[sp++] = s;
+    while (sp > 0) {
+      const v = stack[sp - 1]!;
+      if (iter[v]! < nbrStart[v + 1]!) {
         const k = iter[v]!++;
-        const w = nb[k]!;
-        const bi = bs[k]!;
+        const w = nbrAtom[k]!;
+        const bi = nbrBond[k]!;
         if (bi === parentBond[v]) continue;
         if (disc[w] === -1) {
           disc[w] = low[w] = time++;
           parentBond[w] = bi;
-          stack.push(w);
+          stack[sp++] = w;
         } else if (disc[w]! < low[v]!) {
           low[v] = disc[w]!;
         }
       } else {
-        stack.pop();
+        sp--;
         const pb = parentBond[v]!;
         if (pb >= 0) {
-          const b = g.bonds[pb]!;
-          const p = b.a === v ? b.b : b.a;
+          const p = bondA[pb] === v ? bondB[pb]! : bondA[pb]!;
           if (low[v]! < low[p]!) low[p] = low[v]!;
           if (low[v]! > disc[p]!) bridge[pb] = 1;
         }

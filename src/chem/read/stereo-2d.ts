@@ -29,6 +29,7 @@
  * outside the ring; the other ortho atom of the same ring gets the opposite z; the other ring stays flat unless
  * it is marked too. The signed volume of [ortho a1, ortho a2, ortho b1, ortho b2] gives the winding.
  */
+import { objectList } from './make.js';
 import type {
   AxialStereo,
   DoubleBondStereo,
@@ -71,7 +72,7 @@ export function stereoFrom2d(
   warnings: ReadError[],
   atomLines: number[],
 ): StereoElement[] {
-  const out: StereoElement[] = [];
+  const out = objectList<StereoElement>();
   const wavyAt = new Uint8Array(s.atoms.length); // narrow end of a wavy single bond
   const wavyTouch = new Uint8Array(s.atoms.length); // any end of a wavy single bond
   const wedgedFrom = new Uint8Array(s.atoms.length);

@@ -11,6 +11,7 @@
  *    ortho atom (three non-hydrogen neighbours) on each ring and a dihedral at least ~6 degrees from planar.
  * A wavy bond drawn in a 3D file still leaves its narrow-end atom undefined.
  */
+import { objectList } from './make.js';
 import type { ReadError, StereoElement, Structure } from '../types.js';
 import { IMPLICIT_H } from '../types.js';
 import { ringBonds, type Adjacency } from './molfile-graph.js';
@@ -36,7 +37,7 @@ export function stereoFrom3d(
   _warnings: ReadError[],
   _atomLines: number[],
 ): StereoElement[] {
-  const out: StereoElement[] = [];
+  const out = objectList<StereoElement>();
   const pos = (i: number): Vec => s.atoms[i]!.coords!;
   const wavyAt = new Uint8Array(s.atoms.length);
   const wavyTouch = new Uint8Array(s.atoms.length);
