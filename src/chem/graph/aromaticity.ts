@@ -24,23 +24,84 @@ export function aromaticBonds(s: Structure, rings?: RingInfo, g?: Graph): boolea
   for (let i = 0; i < s.atoms.length; i++)
     if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
 
+  const R = info.rings.length;
   const ringBonds = info.rings.map((r) => ringBondList(r, graph));
   const aromaticRing = info.rings.map((r) => huckel(r, donation));
-  // Pairs of rings fused at exactly one bond, judged on their envelope (azulene, some heteroaromatics).
-  for (let i = 0; i < info.rings.length; i++) {
-    for (let j = i + 1; j < info.rings.length; j++) {
-      if (aromaticRing[i] && aromaticRing[j]) continue;
-      const shared = ringBonds[i].filter((k) => ringBonds[j].includes(k));
-      if (shared.length !== 1) continue;
-      const atoms = [...new Set([...info.rings[i], ...info.rings[j]])];
-      if (atoms.length !== info.rings[i].length + info.rings[j].length - 2) continue;
-      if (huckel(atoms, donation)) aromaticRing[i] = aromaticRing[j] = true;
+  // Pairs of rings fused at exactly one bond, judged on their envelope (azulene, some heteroaromatics). The
+  // verdict of a pair does not depend on the others', so pairs are found through the bonds they share.
+  // (A two-membered ring lists one bond twice: such structures take the pair-by-pair comparison.)
+  if (R > 1 && info.rings.some((r) => r.length < 3)) {
+    for (let i = 0; i < R; i++) {
+      for (let j = i + 1; j < R; j++) {
+        if (aromaticRing[i] && aromaticRing[j]) continue;
+        const shared = ringBonds[i].filter((k) => ringBonds[j].includes(k));
+        if (shared.length !== 1) continue;
+        const atoms = [...new Set([...info.rings[i], ...info.rings[j]])];
+        if (atoms.length !== info.rings[i].length + info.rings[j].length - 2) continue;
+        if (huckel(atoms, donation)) aromaticRing[i] = aromaticRing[j] = true;
+      }
+    }
+  } else if (R > 1) {
+    const ringsOfBond = new Map<number, number[]>();
+    for (let i = 0; i < R; i++) {
+      for (const k of ringBonds[i]) {
+        const list = ringsOfBond.get(k);
+        if (list) list.push(i);
+        else ringsOfBond.set(k, [i]);
+      }
+    }
+    // shared[i * R + j] (i < j): bonds rings i and j have in common.
+    let shared: Int32Array | null = null;
+    for (const list of ringsOfBond.values()) {
+      if (list.length < 2) continue;
+      shared ??= new Int32Array(R * R);
+      for (let x = 0; x < list.length; x++)
+        for (let y = x + 1; y < list.length; y++) {
+          const i = list[x] < list[y] ? list[x] : list[y];
+          const j = list[x] < list[y] ? list[y] : list[x];
+          if (i !== j) shared[i * R + j]++;
+        }
+    }
+    if (shared) {
+      const mark = new Uint8Array(s.atoms.length);
+      for (let i = 0; i < R; i++) {
+        for (let j = i + 1; j < R; j++) {
+          if (shared[i * R + j] !== 1 || (aromaticRing[i] && aromaticRing[j])) continue;
+          if (envelopeHuckel(info.rings[i], info.rings[j], donation, mark))
+            aromaticRing[i] = aromaticRing[j] = true;
+        }
+      }
     }
   }
   aromaticRing.forEach((yes, r) => {
     if (yes) for (const k of ringBonds[r]) out[k] = true;
   });
   return out;
+}
+
+/**
+ * huckel() of the atoms of two rings together, when they share exactly two atoms (false otherwise). `mark` is
+ * all zero on entry and on return.
+ */
+function envelopeHuckel(p: readonly number[], q: readonly number[], donation: Int8Array, mark: Uint8Array): boolean {
+  let common = 0;
+  let pi = true;
+  let sum = 0;
+  for (const a of p) {
+    mark[a] = 1;
+    if (donation[a] === NOT_PI) pi = false;
+    sum += donation[a];
+  }
+  for (const a of q) {
+    if (mark[a] === 1) {
+      common++;
+      continue;
+    }
+    if (donation[a] === NOT_PI) pi = false;
+    sum += donation[a];
+  }
+  for (const a of p) mark[a] = 0;
+  return common === 2 && pi && sum % 4 === 2;
 }
 
 function huckel(atoms: readonly number[], donation: Int8Array): boolean {

@@ -140,33 +140,35 @@ function hortonBasis(
       let head = 0;
       let tail = 0;
       order[tail++] = r;
+      // Breadth-first, level by level. When x (at dist d < depth) is expanded, every atom at dist <= d is
+      // already known, so a neighbour met for the first time is its child, and a known neighbour reached
+      // through a bond other than a tree bond closes a candidate: the non-tree bonds x–y met this way, taken
+      // from the end x nearer r (the smaller atom when level), in the order the atoms are expanded, are the
+      // candidates of a scan of every tree atom's bonds after the search. (Bonds between two atoms at dist
+      // `depth`, which are not expanded, would close cycles longer than the limit.)
       while (head < tail) {
-        const u = order[head++];
-        if (dist[u] >= depth) continue;
-        const nb = g.nbrs[u];
-        for (let i = 0; i < nb.length; i++) {
-          const k = g.nbrBonds[u][i];
-          if (!bondInRing[k]) continue;
-          const v = nb[i];
-          if (dist[v] >= 0) continue;
-          dist[v] = dist[u] + 1;
-          parent[v] = u;
-          parentBond[v] = k;
-          branch[v] = u === r ? v : branch[u];
-          order[tail++] = v;
-        }
-      }
-      // Every non-tree ring bond x–y closes a candidate when the two tree paths meet only at r.
-      for (let t = 0; t < tail; t++) {
-        const x = order[t];
+        const x = order[head++];
+        const dx = dist[x];
+        if (dx >= depth) continue;
         const nb = g.nbrs[x];
+        const nk = g.nbrBonds[x];
         for (let i = 0; i < nb.length; i++) {
-          const k = g.nbrBonds[x][i];
+          const k = nk[i];
+          if (!bondInRing[k]) continue;
           const y = nb[i];
-          if (!bondInRing[k] || dist[y] < 0 || parentBond[x] === k || parentBond[y] === k) continue;
-          if (dist[y] < dist[x] || (dist[y] === dist[x] && y < x)) continue; // each bond once per root
+          const dy = dist[y];
+          if (dy < 0) {
+            dist[y] = dx + 1;
+            parent[y] = x;
+            parentBond[y] = k;
+            branch[y] = x === r ? y : branch[x];
+            order[tail++] = y;
+            continue;
+          }
+          if (parentBond[x] === k || parentBond[y] === k) continue;
+          if (dy < dx || (dy === dx && y < x)) continue; // each bond once per root
           if (x !== r && y !== r && branch[x] === branch[y]) continue;
-          const size = dist[x] + dist[y] + 1;
+          const size = dx + dy + 1;
           if (size <= below || size > limit) continue;
           // The bond set first, in a scratch vector: most candidates repeat one found from an earlier root.
           for (let u = x; u !== r; u = parent[u]) scratch[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
