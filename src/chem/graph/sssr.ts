@@ -129,9 +129,14 @@ function hortonBasis(
   const scratch = new Uint32Array(words);
   const work = new Uint32Array(words);
   let below = 0;
+  let complete = false;
   for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
     const depth = (limit + 1) >> 1;
     const cands: Candidate[] = [];
+    // No candidate of this round is shorter than `first` (the smallest ring is exact), so candidates of that
+    // size are eliminated as they are found, in the order a stable sort by size would give them; once the
+    // basis is complete the remaining roots need no search. Longer ones wait for the end of the round.
+    const first = Math.max(below + 1, smallest);
     for (const r of atoms) {
       dist[r] = 0;
       parent[r] = -1;
@@ -189,6 +194,20 @@ function hortonBasis(
           scratch.fill(0);
           if (bucket) bucket.push(bits);
           else seen.set(hash, [bits]);
+          if (size === first) {
+            if (!independent(bits, work, basis, owner)) continue;
+            const path: number[] = [];
+            for (let u = x; u !== r; u = parent[u]) path.push(u);
+            path.push(r);
+            path.reverse(); // r .. x
+            for (let u = y; u !== r; u = parent[u]) path.push(u);
+            rings.push(path);
+            if (rings.length === nullity) {
+              complete = true;
+              break;
+            }
+            continue;
+          }
           const path: number[] = [];
           for (let u = x; u !== r; u = parent[u]) path.push(u);
           path.push(r);
@@ -196,22 +215,15 @@ function hortonBasis(
           for (let u = y; u !== r; u = parent[u]) path.push(u);
           cands.push({ size, atoms: path, bits });
         }
+        if (complete) break;
       }
       for (let t = 0; t < tail; t++) dist[order[t]] = -1;
+      if (complete) break;
     }
+    if (complete) break;
     cands.sort((p, q) => p.size - q.size);
-    // Gaussian elimination over GF(2) in echelon form: each basis vector owns its lowest bit.
     for (const c of cands) {
-      const v = work;
-      v.set(c.bits);
-      let p = firstBit(v);
-      while (p >= 0 && owner[p] >= 0) {
-        xorInto(v, basis[owner[p]]);
-        p = firstBit(v);
-      }
-      if (p < 0) continue;
-      owner[p] = basis.length;
-      basis.push(v.slice());
+      if (!independent(c.bits, work, basis, owner)) continue;
       rings.push(c.atoms);
       if (rings.length === nullity) break;
     }
@@ -219,6 +231,23 @@ function hortonBasis(
     if (limit > 2 * n + 2) break; // every candidate has been generated
   }
   return rings;
+}
+
+/**
+ * Gaussian elimination over GF(2) in echelon form: each basis vector owns its lowest bit. Adds the reduced
+ * `bits` (reduced in `work`) to the basis when it is independent of it; returns whether it was.
+ */
+function independent(bits: Uint32Array, work: Uint32Array, basis: Uint32Array[], owner: Int32Array): boolean {
+  work.set(bits);
+  let p = firstBit(work);
+  while (p >= 0 && owner[p] >= 0) {
+    xorInto(work, basis[owner[p]]);
+    p = firstBit(work);
+  }
+  if (p < 0) return false;
+  owner[p] = basis.length;
+  basis.push(work.slice());
+  return true;
 }
 
 function equalBits(x: Uint32Array, y: Uint32Array): boolean {
