@@ -39,15 +39,18 @@ export function bridgeCouplings(s: Structure, g: Graph, rings: RingInfo, units: 
  */
 function fusedPairs(g: Graph, rings: RingInfo, units: PerceivedUnit[]): Coupling[] {
   const out: Coupling[] = [];
-  const unitAt = new Map<number, number>();
-  units.forEach((u, k) => {
-    if (u.kind === 'tetrahedral') unitAt.set(u.atoms[0], k);
-  });
-  for (const [a, ka] of unitAt) {
+  let anyCentre = false;
+  for (const u of units) if (u.kind === 'tetrahedral') anyCentre = true;
+  if (!anyCentre) return out;
+  const unitAt = new Int32Array(g.n).fill(-1); // atom -> its tetrahedral unit
+  for (let k = 0; k < units.length; k++) if (units[k].kind === 'tetrahedral') unitAt[units[k].atoms[0]] = k;
+  for (let ka = 0; ka < units.length; ka++) {
+    if (units[ka].kind !== 'tetrahedral') continue;
+    const a = units[ka].atoms[0];
     for (let i = 0; i < g.nbrs[a].length; i++) {
       const b = g.nbrs[a][i];
-      const kb = unitAt.get(b);
-      if (kb === undefined || b < a) continue;
+      const kb = unitAt[b];
+      if (kb < 0 || b < a) continue;
       const r = rings.smallestRingOfBond[g.nbrBonds[a][i]];
       if (r !== 3 && r !== 4) continue;
       const through = rings.rings.filter((ring) => adjacentIn(ring, a, b));
@@ -97,9 +100,13 @@ function bridgedPairs(s: Structure, g: Graph, rings: RingInfo, units: PerceivedU
     if (ringBonds >= 3) possible++;
   }
   if (possible < 2) return [];
+  const memo = new Map<number, number[]>(); // the bridge search asks for the same atoms many times
   const ringNbrs = (x: number): number[] => {
-    const out: number[] = [];
+    let out = memo.get(x);
+    if (out !== undefined) return out;
+    out = [];
     for (let k = 0; k < g.nbrs[x].length; k++) if (rings.bondInRing[g.nbrBonds[x][k]]) out.push(g.nbrs[x][k]);
+    memo.set(x, out);
     return out;
   };
   const cand = units

@@ -55,12 +55,6 @@ export function tetrahedralCandidate(
     else if (b.order !== 1) return null;
   }
   const n = s.atoms.length;
-  const centre = (withLonePair: boolean): CentreVerdict => {
-    const t: number[] = Array.from(nb);
-    if (h === 1) t.push(hToken(n, i));
-    if (withLonePair) t.push(lpToken(n, i));
-    return t.length === 4 ? { kind: 'centre', tokens: [t[0], t[1], t[2], t[3]] } : null;
-  };
   if (h > 1) return null;
   const c = atom.charge;
   switch (z) {
@@ -68,33 +62,45 @@ export function tetrahedralCandidate(
     case 14:
     case 32:
     case 50:
-      return c === 0 && sigma === 4 && doubles === 0 ? centre(false) : null;
+      return c === 0 && sigma === 4 && doubles === 0 ? centreOf(nb, h, false, n, i) : null;
     case 7:
       if (doubles > 0 || h > 0) return null;
-      if (c === 1 && heavy === 4) return centre(false);
+      if (c === 1 && heavy === 4) return centreOf(nb, h, false, n, i);
       if (c === 0 && heavy === 3) {
         if (atom.aromatic) return null;
-        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i)) return centre(true);
+        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i)) return centreOf(nb, h, true, n, i);
         return { kind: 'invertible-nitrogen' };
       }
       return null;
     case 15:
     case 33:
       if (resonancePair(s, g, i)) return null;
-      if (c === 0 && doubles === 0 && sigma === 3) return centre(true);
-      if (c === 0 && doubles === 1 && sigma === 4 && h === 0) return centre(false);
-      if (c === 1 && doubles === 0 && sigma === 4 && h === 0) return centre(false);
+      if (c === 0 && doubles === 0 && sigma === 3) return centreOf(nb, h, true, n, i);
+      if (c === 0 && doubles === 1 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
+      if (c === 1 && doubles === 0 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
       return null;
     case 16:
     case 34:
       if (h > 0 || resonancePair(s, g, i)) return null;
-      if (c === 0 && doubles === 1 && heavy === 3) return centre(true);
-      if (c === 1 && doubles === 0 && heavy === 3) return centre(true);
-      if (c === 0 && doubles === 2 && heavy === 4) return centre(false);
+      if (c === 0 && doubles === 1 && heavy === 3) return centreOf(nb, h, true, n, i);
+      if (c === 1 && doubles === 0 && heavy === 3) return centreOf(nb, h, true, n, i);
+      if (c === 0 && doubles === 2 && heavy === 4) return centreOf(nb, h, false, n, i);
       return null;
     default:
       return null;
   }
+}
+
+/** The centre's tokens: its neighbours, then its H, then its lone pair; null unless that makes four. */
+function centreOf(nb: Int32Array, h: number, withLonePair: boolean, n: number, i: number): CentreVerdict {
+  const count = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
+  if (count !== 4) return null;
+  const t: [number, number, number, number] = [0, 0, 0, 0];
+  let k = 0;
+  for (; k < nb.length; k++) t[k] = nb[k];
+  if (h === 1) t[k++] = hToken(n, i);
+  if (withLonePair) t[k] = lpToken(n, i);
+  return { kind: 'centre', tokens: t };
 }
 
 /** N in two SSSR rings of at most 8 atoms that share at least three atoms (a bridged, not merely fused, system). */

@@ -19,9 +19,55 @@ export interface KekuleInput {
 /** The bonds to make double, or an atom that cannot get its double bond. */
 export type KekuleResult = { ok: true; doubleBonds: number[] } | { ok: false; atom: number };
 
+/*
+ * Working arrays reused between calls (kekulize is synchronous and not re-entrant; nothing here outlives a
+ * call): small typed arrays are each a separate off-heap allocation.
+ */
+let capA = 0;
+let capV = 0;
+let capE = 0;
+let LOCAL = new Int32Array(0);
+let DEG = new Int32Array(0);
+let START = new Int32Array(0);
+let FILL = new Int32Array(0);
+let MATCH = new Int32Array(0);
+let BUCKET = new Int32Array(0);
+let BY_DEGREE = new Int32Array(0);
+let COMP = new Int32Array(0);
+let POS = new Int32Array(0);
+let NB = new Int32Array(0);
+let NB_BOND = new Int32Array(0);
+
+function reserveAtoms(atoms: number): void {
+  if (atoms > capA || capA > 1 << 16) {
+    capA = Math.max(atoms, 64);
+    LOCAL = new Int32Array(capA);
+  }
+}
+
+function reserveGraph(vertices: number, entries: number): void {
+  if (vertices + 2 > capV || capV > 1 << 16) {
+    capV = Math.max(vertices + 2, 64);
+    DEG = new Int32Array(capV);
+    START = new Int32Array(capV);
+    FILL = new Int32Array(capV);
+    MATCH = new Int32Array(capV);
+    BUCKET = new Int32Array(capV);
+    BY_DEGREE = new Int32Array(capV);
+    COMP = new Int32Array(capV);
+    POS = new Int32Array(capV);
+  }
+  if (entries > capE || capE > 1 << 17) {
+    capE = Math.max(entries, 128);
+    NB = new Int32Array(capE);
+    NB_BOND = new Int32Array(capE);
+  }
+}
+
 export function kekulize(inp: KekuleInput): KekuleResult {
+  reserveAtoms(inp.atomCount);
   // local numbering over atoms that need a double bond
-  const local = new Int32Array(inp.atomCount).fill(-1);
+  const local = LOCAL.fill(-1, 0, inp.atomCount);
   const globalOf: number[] = [];
   for (let i = 0; i < inp.atomCount; i++) {
     if (inp.needsDouble[i]) {
@@ -32,8 +78,9 @@ export function kekulize(inp: KekuleInput): KekuleResult {
   const m = globalOf.length;
   if (m === 0) return { ok: true, doubleBonds: [] };
   // neighbour lists (in aromatic-bond order) as flat arrays: vertex u's are nb[start[u] .. start[u + 1])
-  const deg = new Int32Array(m);
   const bonds = inp.aromaticBonds;
+  reserveGraph(m, 2 * bonds.length);
+  const deg = DEG.fill(0, 0, m);
   for (let k = 0; k < bonds.length; k++) {
     const u = local[inp.bondA[bonds[k]!]!]!;
     const v = local[inp.bondB[bonds[k]!]!]!;
@@ -41,11 +88,13 @@ export function kekulize(inp: KekuleInput): KekuleResult {
     deg[u]++;
     deg[v]++;
   }
-  const start = new Int32Array(m + 1);
+  const start = START;
+  start[0] = 0;
   for (let u = 0; u < m; u++) start[u + 1] = start[u]! + deg[u]!;
-  const nb = new Int32Array(start[m]!);
-  const nbBond = new Int32Array(start[m]!);
-  const fill = start.slice(0, m);
+  const nb = NB;
+  const nbBond = NB_BOND;
+  const fill = FILL;
+  for (let u = 0; u < m; u++) fill[u] = start[u]!;
   for (let k = 0; k < bonds.length; k++) {
     const bi = bonds[k]!;
     const u = local[inp.bondA[bi]!]!;
@@ -56,15 +105,15 @@ export function kekulize(inp: KekuleInput): KekuleResult {
     nb[fill[v]!] = u;
     nbBond[fill[v]!++] = bi;
   }
-  const match = new Int32Array(m).fill(-1);
+  const match = MATCH.fill(-1, 0, m);
   // Greedy start, fewest choices first (forced pairs at ring fusions and chain ends go first); ties in input
   // order (a stable counting sort by degree).
   let maxDeg = 0;
   for (let u = 0; u < m; u++) if (deg[u]! > maxDeg) maxDeg = deg[u]!;
-  const bucket = new Int32Array(maxDeg + 2);
+  const bucket = BUCKET.fill(0, 0, maxDeg + 2);
   for (let u = 0; u < m; u++) bucket[deg[u]! + 1]++;
   for (let d = 0; d <= maxDeg; d++) bucket[d + 1] += bucket[d]!;
-  const byDegree = new Int32Array(m);
+  const byDegree = BY_DEGREE;
   for (let u = 0; u < m; u++) byDegree[bucket[deg[u]!]!++] = u;
   for (let k = 0; k < m; k++) {
     const v = byDegree[k]!;
@@ -81,8 +130,8 @@ export function kekulize(inp: KekuleInput): KekuleResult {
   }
   // Augment per connected component, so that a large molecule with many separate aromatic systems costs
   // the size of each system, not of the whole molecule, per augmenting search.
-  const comp = new Int32Array(m).fill(-1);
-  const pos = new Int32Array(m);
+  const comp = COMP.fill(-1, 0, m);
+  const pos = POS;
   const members: number[] = [];
   for (let s0 = 0; s0 < m; s0++) {
     if (comp[s0] !== -1) continue;

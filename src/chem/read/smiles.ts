@@ -13,6 +13,42 @@ import { parseSmilesGraph, type SmilesGraph } from './smiles-parse.js';
 import { buildStereo } from './smiles-stereo.js';
 import { defaultValences, implicitHydrogens, valenceProblem } from './valence.js';
 
+/*
+ * Working arrays reused from one SMILES to the next (reading is synchronous and not re-entrant, and none of them
+ * outlives a call): small typed arrays are each a separate off-heap allocation, several per SMILES otherwise.
+ */
+let capN = 0;
+let capM = 0;
+let ORDER = new Uint8Array(0); // per bond
+let BRIDGE = new Uint8Array(0); // per bond
+let HCOUNT = new Int32Array(0); // per atom, and the rest too
+let RADICAL = new Uint8Array(0);
+let NEEDS_DOUBLE = new Uint8Array(0);
+let DISC = new Int32Array(0);
+let LOW = new Int32Array(0);
+let PARENT_BOND = new Int32Array(0);
+let ITER = new Int32Array(0);
+let STACK = new Int32Array(0);
+
+function reserve(n: number, m: number): void {
+  if (m > capM || capM > 1 << 16) {
+    capM = Math.max(m, 64);
+    ORDER = new Uint8Array(capM);
+    BRIDGE = new Uint8Array(capM);
+  }
+  if (n > capN || capN > 1 << 16) {
+    capN = Math.max(n, 64);
+    HCOUNT = new Int32Array(capN);
+    RADICAL = new Uint8Array(capN);
+    NEEDS_DOUBLE = new Uint8Array(capN);
+    DISC = new Int32Array(capN);
+    LOW = new Int32Array(capN);
+    PARENT_BOND = new Int32Array(capN);
+    ITER = new Int32Array(capN);
+    STACK = new Int32Array(capN);
+  }
+}
+
 function isSpace(c: number): boolean {
   return c === 32 || c === 9 || c === 10 || c === 13;
 }
@@ -61,7 +97,8 @@ function parse(text: string): ReadResult {
   const title = text.slice(i).trim();
 
   // bond orders (Kekulé) and aromatic flags
-  const order = new Uint8Array(m);
+  reserve(n, m);
+  const order = ORDER;
   for (let k = 0; k < m; k++) order[k] = g.bondOrder[k]!;
   let anyAromatic = false;
   for (let a = 0; a < n && !anyAromatic; a++) if (g.atoms[a]!.aromatic) anyAromatic = true;
@@ -71,8 +108,9 @@ function parse(text: string): ReadResult {
   }
 
   // hydrogens and radicals
-  const hCount = new Int32Array(n);
-  const radical = new Uint8Array(n);
+  const hCount = HCOUNT;
+  const radical = RADICAL;
+  radical.fill(0, 0, n);
   const { nbrStart, nbrBond, bondA, bondB } = g;
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a]!;
@@ -151,7 +189,8 @@ function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
     }
     aromaticBonds.push(k);
   }
-  const needsDouble = new Uint8Array(n);
+  const needsDouble = NEEDS_DOUBLE;
+  needsDouble.fill(0, 0, n);
   let any = false;
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a]!;
@@ -209,13 +248,13 @@ function kekulizeGraph(g: SmilesGraph, order: Uint8Array): ReadResult | null {
 function findBridges(g: SmilesGraph): Uint8Array {
   const n = g.atoms.length;
   const { nbrStart, nbrAtom, nbrBond, bondA, bondB } = g;
-  const bridge = new Uint8Array(g.bondCount);
-  const disc = new Int32Array(n).fill(-1);
-  const low = new Int32Array(n);
-  const parentBond = new Int32Array(n).fill(-1);
-  const iter = new Int32Array(n); // next neighbour entry per atom
+  const bridge = BRIDGE.fill(0, 0, g.bondCount);
+  const disc = DISC.fill(-1, 0, n);
+  const low = LOW.fill(0, 0, n);
+  const parentBond = PARENT_BOND.fill(-1, 0, n);
+  const iter = ITER; // next neighbour entry per atom
   for (let v = 0; v < n; v++) iter[v] = nbrStart[v]!;
-  const stack = new Int32Array(n);
+  const stack = STACK;
   let sp = 0;
   let time = 0;
   for (let s = 0; s < n; s++) {
