@@ -52,25 +52,27 @@ export function prepare(s: Structure, aromatic?: readonly boolean[]): Prepared {
 }
 
 function checksum(s: Structure, aromatic: readonly boolean[] | undefined): number {
+  // Written with a plain function (a closure assigning h would box it on every step).
   let h = 0x9e3779b9 ^ s.atoms.length;
-  const mix = (x: number) => {
-    h = Math.imul(h ^ x, 0x01000193);
-  };
   for (const a of s.atoms) {
-    mix(a.atomicNumber);
-    mix(a.charge);
-    mix(a.hCount);
-    mix(a.isotope ?? -1);
-    mix(a.radical);
+    h = mix(h, a.atomicNumber);
+    h = mix(h, a.charge);
+    h = mix(h, a.hCount);
+    h = mix(h, a.isotope ?? -1);
+    h = mix(h, a.radical);
   }
-  mix(s.bonds.length);
+  h = mix(h, s.bonds.length);
   for (const b of s.bonds) {
-    mix(b.a);
-    mix(b.b);
-    mix(b.order);
+    h = mix(h, b.a);
+    h = mix(h, b.b);
+    h = mix(h, b.order);
   }
-  if (aromatic) for (let k = 0; k < aromatic.length; k++) mix(aromatic[k] ? 1 : 2);
+  if (aromatic) for (let k = 0; k < aromatic.length; k++) h = mix(h, aromatic[k] ? 1 : 2);
   return h;
+}
+
+function mix(h: number, x: number): number {
+  return Math.imul(h ^ x, 0x01000193);
 }
 
 function prepareFresh(s: Structure, aromatic?: readonly boolean[]): Prepared {
