@@ -37,15 +37,29 @@ export function molecularFormula(s: Structure, atoms?: number[]): string {
     if (hc !== undefined) add('H', hc);
     const rest: string[] = [];
     for (const e of counts.keys()) if (e !== 'C' && e !== 'H') rest.push(e);
-    rest.sort();
+    sortSymbols(rest);
     for (const e of rest) add(e, counts.get(e)!);
   } else {
-    const order = [...counts.keys()].sort();
+    const order = [...counts.keys()];
+    sortSymbols(order);
     for (const e of order) add(e, counts.get(e)!);
   }
   if (wildcards > 0) out += wildcards === 1 ? '*' : `*${wildcards}`;
   if (charge !== 0) out += `${Math.abs(charge) === 1 ? '' : Math.abs(charge)}${charge > 0 ? '+' : '-'}`;
   return out;
+}
+
+/** Distinct element symbols by code unit (as Array#sort without a comparator), in place: lists are short. */
+function sortSymbols(a: string[]): void {
+  for (let t = 1; t < a.length; t++) {
+    const x = a[t];
+    let j = t;
+    while (j > 0 && a[j - 1] > x) {
+      a[j] = a[j - 1];
+      j--;
+    }
+    a[j] = x;
+  }
 }
 
 /** Formula + "/" + 16 hex digits; equal for isomorphic structures (no stereo). */

@@ -223,7 +223,7 @@ export class Refiner {
         if (cellHits[s] === 0) cells.push(s);
         cellHits[s]++;
       }
-      if (cells.length > 1) cells.sort(ascending);
+      if (cells.length > 1) sortPositions(cells);
       let off = 0;
       for (const s of cells) {
         cellBase[s] = off;
@@ -344,6 +344,23 @@ export class Refiner {
     let a = 0;
     for (let t = s; t < s + L; t++) if (p.lab[t] < this.split) a++;
     return 2 * a === L;
+  }
+}
+
+/** Ascending sort of distinct cell positions: in place for short lists (Array#sort copies its input). */
+function sortPositions(a: number[]): void {
+  if (a.length > 32) {
+    a.sort(ascending);
+    return;
+  }
+  for (let t = 1; t < a.length; t++) {
+    const x = a[t];
+    let j = t;
+    while (j > 0 && a[j - 1] > x) {
+      a[j] = a[j - 1];
+      j--;
+    }
+    a[j] = x;
   }
 }
 
