@@ -18,26 +18,32 @@ import { handedness, rankLigands } from './rank.js';
 import { RULE_5, RULE_6 } from './rules.js';
 
 /** The branch of `centre` (re-rooted there) that leads to ligand `lig` of a stereo element. */
-export function ligandBranch(dg: Digraph, centre: CipNode, lig: number, used: Set<CipNode>): CipNode | null {
+export function ligandBranch(
+  dg: Digraph,
+  centre: CipNode,
+  lig: number,
+  used: readonly CipNode[],
+): CipNode | null {
   const br = dg.branches(centre, null);
   if (lig === LONE_PAIR) return dg.phantom(centre);
   if (lig === IMPLICIT_H) {
-    for (const b of br) if (b.atom === H_ATOM && !used.has(b)) return b;
+    for (const b of br) if (b.atom === H_ATOM && !used.includes(b)) return b;
     return null;
   }
-  for (const b of br) if (b.atom === lig && !b.dup && !used.has(b)) return b;
-  for (const b of br) if (b.atom === lig && !used.has(b)) return b;
+  for (const b of br) if (b.atom === lig && !b.dup && !used.includes(b)) return b;
+  for (const b of br) if (b.atom === lig && !used.includes(b)) return b;
   return null;
 }
 
+const NONE: readonly CipNode[] = [];
+
 /** The digraph branches of a centre's four ligands, in ligand order; null when one cannot be found. */
 function ligandBranches(rk: Ranker, centre: CipNode, e: TetrahedralStereo): CipNode[] | null {
-  const used = new Set<CipNode>();
+  // the branches taken so far are the ones used
   const ligs: CipNode[] = [];
   for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, centre, l, used);
+    const b = ligandBranch(rk.dg, centre, l, ligs);
     if (b === null) return null;
-    used.add(b);
     ligs.push(b);
   }
   return ligs;
@@ -153,10 +159,8 @@ export function axialLabel(rks: Ranker[], ends: CipNode[], e: AxialStereo, level
   for (let i = 0; i < 2; i++) {
     const rk = rks[i];
     const end = ends[i];
-    const used = new Set<CipNode>();
-    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], used);
-    if (a !== null) used.add(a);
-    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], used);
+    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], NONE);
+    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], a !== null ? [a] : NONE);
     if (a === null || b === null) return null;
     const r = rankLigands(rk, end, [a, b], level);
     if (r.tied) return null;

@@ -34,6 +34,31 @@ import { compareRule4b } from './rule4b.js';
 
 export type AuxFn = (node: CipNode) => CipLabel | null;
 
+interface PairQueue {
+  x: CipNode[];
+  fx: (CipNode | null)[];
+  y: CipNode[];
+  fy: (CipNode | null)[];
+}
+
+/**
+ * Breadth-first queues of node pairs for compareRule, one per nesting depth (ordering branches while comparing
+ * compares again), shared by all rankers so their room is reserved once. Written by index with their own
+ * count and never truncated (setting an array's length to 0 frees its room); cleared after use so they hold no
+ * digraph alive.
+ */
+const pool: PairQueue[] = [];
+let poolDepth = 0;
+
+function clearQueue(q: PairQueue, len: number): void {
+  for (let i = 0; i < len; i++) {
+    q.x[i] = NO_NODE;
+    q.fx[i] = null;
+    q.y[i] = NO_NODE;
+    q.fy[i] = null;
+  }
+}
+
 export class Ranker {
   /** Rules that cannot separate anything in this structure are skipped (saves exploring tied branches). */
   private readonly active: boolean[];
@@ -50,11 +75,6 @@ export class Ranker {
    * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
    */
   mirror = false;
-  /** Rule 4b sequences per branch (rule4b.ts). */
-  readonly memo4b = new Map<string, number[]>();
-  private depth = 0;
-  private readonly pool: { x: CipNode[]; fx: (CipNode | null)[]; y: CipNode[]; fy: (CipNode | null)[] }[] =
-    [];
 
   constructor(
     readonly dg: Digraph,
@@ -150,24 +170,28 @@ export class Ranker {
     if (c !== 0) return c > 0 ? 1 : -1;
     // hydrogens, phantoms and duplicates have nothing beyond them
     if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
-    // breadth-first queues of node pairs, reused per nesting depth (sorting below may compare again)
-    const d = this.depth++;
-    let q = this.pool[d];
-    if (q === undefined) q = this.pool[d] = { x: [], fx: [], y: [], fy: [] };
+    if (rule === RULE_1A) return this.compare1a(x, fx, y, fy);
+    // breadth-first queues of node pairs, reused per nesting depth (sorting below may compare again); written
+    // by index with their own count, never truncated (setting an array's length to 0 frees its room)
+    const d = poolDepth++;
+    let q = pool[d];
+    if (q === undefined) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
     const qx = q.x;
     const qfx = q.fx;
     const qy = q.y;
     const qfy = q.fy;
-    qx.length = qfx.length = qy.length = qfy.length = 0;
-    qx.push(x);
-    qfx.push(fx);
-    qy.push(y);
-    qfy.push(fy);
+    qx[0] = x;
+    qfx[0] = fx;
+    qy[0] = y;
+    qfy[0] = fy;
+    let len = 1;
     try {
-      for (let i = 0; i < qx.length; i++) {
-        const sx = this.sorted(qx[i], qfx[i], rule).nodes;
-        const sy = this.sorted(qy[i], qfy[i], rule).nodes;
-        const m = Math.min(sx.length, sy.length);
+      for (let i = 0; i < len; i++) {
+        const nx = qx[i];
+        const ny = qy[i];
+        const sx = this.sorted(nx, qfx[i], rule).nodes;
+        const sy = this.sorted(ny, qfy[i], rule).nodes;
+        const m = sx.length < sy.length ? sx.length : sy.length;
         for (let j = 0; j < m; j++) {
           c = this.value(rule, sx[j]) - this.value(rule, sy[j]);
           if (c !== 0) return c > 0 ? 1 : -1;
@@ -183,14 +207,80 @@ export class Ranker {
           const a = sx[j];
           const b = sy[j];
           if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
-          qx.push(a);
-          qfx.push(qx[i]);
-          qy.push(b);
-          qfy.push(qy[i]);
+          qx[len] = a;
+          qfx[len] = nx;
+          qy[len] = b;
+          qfy[len] = ny;
+          len++;
         }
       }
     } finally {
-      this.depth--;
+      poolDepth--;
+      clearQueue(q, len);
+    }
+    return 0;
+  }
+
+  /**
+   * compareRule under Rule 1a, one sphere at a time: first the atomic numbers of every set of the sphere, read
+   * from lists ordered by atomic number alone (the full order only permutes runs of equal atomic number, so the
+   * numbers read are the same); only when the whole sphere ties are the lists fully ordered, since that order
+   * pairs the nodes of the next sphere. The same sets are compared in the same order as node by node, and the
+   * deep ordering of runs of equal atomic number is skipped at the sphere that decides.
+   */
+  private compare1a(x: CipNode, fx: CipNode | null, y: CipNode, fy: CipNode | null): number {
+    const d = poolDepth++;
+    let q = pool[d];
+    if (q === undefined) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+    const qx = q.x;
+    const qfx = q.fx;
+    const qy = q.y;
+    const qfy = q.fy;
+    qx[0] = x;
+    qfx[0] = fx;
+    qy[0] = y;
+    qfy[0] = fy;
+    let len = 1;
+    let lo = 0;
+    try {
+      while (lo < len) {
+        const hi = len;
+        for (let i = lo; i < hi; i++) {
+          const sx = this.sorted0(qx[i], qfx[i]).nodes;
+          const sy = this.sorted0(qy[i], qfy[i]).nodes;
+          const m = sx.length < sy.length ? sx.length : sy.length;
+          for (let j = 0; j < m; j++) {
+            const c = sx[j].z - sy[j].z;
+            if (c !== 0) return c > 0 ? 1 : -1;
+          }
+          // a missing substituent is a phantom atom (atomic number 0, nothing else)
+          if (sx.length !== sy.length) {
+            const longer = sx.length > sy.length ? sx : sy;
+            for (let j = m; j < longer.length; j++) if (longer[j].z > 0) return longer === sx ? 1 : -1;
+          }
+        }
+        for (let i = lo; i < hi; i++) {
+          const nx = qx[i];
+          const ny = qy[i];
+          const sx = this.sorted(nx, qfx[i], RULE_1A).nodes;
+          const sy = this.sorted(ny, qfy[i], RULE_1A).nodes;
+          const m = sx.length < sy.length ? sx.length : sy.length;
+          for (let j = 0; j < m; j++) {
+            const a = sx[j];
+            const b = sy[j];
+            if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+            qx[len] = a;
+            qfx[len] = nx;
+            qy[len] = b;
+            qfy[len] = ny;
+            len++;
+          }
+        }
+        lo = hi;
+      }
+    } finally {
+      poolDepth--;
+      clearQueue(q, len);
     }
     return 0;
   }
@@ -207,12 +297,17 @@ export class Ranker {
 
   /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
   sorted(node: CipNode, from: CipNode | null, level: number): SortedBranches {
+    if (level === RULE_1A) {
+      const s0 = this.sorted0(node, from);
+      if (s0.pending) this.finish0(s0, node);
+      return s0;
+    }
     if (node.dup || node.atom < 0) return EMPTY;
     // the usual case, downwards inside the scope in plain mode: an array by level
     const plain =
       from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level < RULE_3 || this.inScope(node));
     if (plain) {
-      if (node.down === null) node.down = [];
+      if (node.down === null) node.down = new Array<SortedBranches>(LEVELS);
       const hit = node.down[level];
       if (hit !== undefined) return hit;
       const out = this.sortAt(node, from, level);
@@ -232,41 +327,75 @@ export class Ranker {
     return out;
   }
 
+  /**
+   * The Rule 1a list of the branches of `node` entered from `from`, cached as sorted() caches it, but possibly
+   * still pending (ordered by atomic number alone).
+   */
+  private sorted0(node: CipNode, from: CipNode | null): SortedBranches {
+    if (node.dup || node.atom < 0) return EMPTY;
+    if (from === node.parent && !this.mirror && this.dg.rule6Ref < 0) {
+      const hit = node.down0;
+      if (hit !== null) return hit;
+      const out = this.byAtomicNumber(node, from);
+      node.down0 = out;
+      return out;
+    }
+    const key = (from === null ? 0 : from.id + 1) * 64;
+    if (node.sorted === null) node.sorted = new Map();
+    const hit = node.sorted.get(key);
+    if (hit) return hit;
+    const out = this.byAtomicNumber(node, from);
+    node.sorted.set(key, out);
+    return out;
+  }
+
+  /** The branches by atomic number, highest first (stable): a pending Rule 1a list. */
+  private byAtomicNumber(node: CipNode, from: CipNode | null): SortedBranches {
+    const br = this.dg.branches(node, from);
+    // branches() hands out the node's own child list when entered from its parent: sort a copy of that one
+    const nodes = br === node.kids ? br.slice() : br;
+    for (let i = 1; i < nodes.length; i++) {
+      const v = nodes[i];
+      let j = i - 1;
+      while (j >= 0 && nodes[j].z < v.z) {
+        nodes[j + 1] = nodes[j];
+        j--;
+      }
+      nodes[j + 1] = v;
+    }
+    // `tie` is made when the list is completed (finish0)
+    return { nodes, tie: NO_TIES, pending: true };
+  }
+
+  /** Order the runs of equal atomic number of a pending Rule 1a list by their whole branches, in place. */
+  private finish0(out: SortedBranches, node: CipNode): void {
+    const nodes = out.nodes;
+    out.tie = new Array<boolean>(nodes.length).fill(false);
+    for (let i = 0; i < nodes.length;) {
+      let j = i + 1;
+      while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
+      if (j - i > 1) {
+        // hydrogens, phantoms and duplicates of one atomic number tie under Rule 1a (compareRule gives 0 for
+        // each pair): the run keeps its order, all tied
+        if (allLeaves(nodes, i, j)) for (let x = i + 1; x < j; x++) out.tie[x] = true;
+        else this.sortRun(nodes, i, j, node, RULE_1A, out);
+      }
+      i = j;
+    }
+    out.pending = false;
+  }
+
   private sortAt(node: CipNode, from: CipNode | null, level: number): SortedBranches {
-    let out: SortedBranches;
-    if (level === 0) {
-      // by atomic number first (cheap), then runs of equal atomic number by the whole branch
-      const nodes = this.dg.branches(node, from).slice();
-      for (let i = 1; i < nodes.length; i++) {
-        const v = nodes[i];
-        let j = i - 1;
-        while (j >= 0 && nodes[j].z < v.z) {
-          nodes[j + 1] = nodes[j];
-          j--;
-        }
-        nodes[j + 1] = v;
-      }
-      out = { nodes, tie: nodes.map(() => false) };
-      for (let i = 0; i < nodes.length;) {
-        let j = i + 1;
-        while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
-        if (j - i > 1) this.sortRun(nodes, i, j, node, 0, out);
-        i = j;
-      }
-    } else {
-      // the order under rules up to `level` refines the order under the rules before it: only runs that tie
-      // there need sorting, and only by this rule
-      const base = this.sorted(node, from, level - 1);
-      if (!this.active[level] || !base.tie.some((t) => t)) out = base;
-      else {
-        out = { nodes: base.nodes.slice(), tie: base.tie.slice() };
-        for (let i = 0; i < out.nodes.length;) {
-          let j = i + 1;
-          while (j < out.nodes.length && base.tie[j]) j++;
-          if (j - i > 1) this.sortRun(out.nodes, i, j, node, level, out);
-          i = j;
-        }
-      }
+    // the order under rules up to `level` refines the order under the rules before it: only runs that tie
+    // there need sorting, and only by this rule
+    const base = this.sorted(node, from, level - 1);
+    if (!this.active[level] || !anyTrue(base.tie)) return base;
+    const out: SortedBranches = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
+    for (let i = 0; i < out.nodes.length;) {
+      let j = i + 1;
+      while (j < out.nodes.length && base.tie[j]) j++;
+      if (j - i > 1) this.sortRun(out.nodes, i, j, node, level, out);
+      i = j;
     }
     return out;
   }
@@ -323,7 +452,27 @@ export class Ranker {
 
 export { CipNode };
 
-const EMPTY: SortedBranches = { nodes: [], tie: [] };
+/** Placeholder for cleared queue slots. */
+const NO_NODE = new CipNode(-1, -2, 0, 0, 0, 0, false, null);
+
+/** The `tie` of a pending list (never read before finish0 replaces it). */
+const NO_TIES: boolean[] = [];
+
+const EMPTY: SortedBranches = { nodes: [], tie: [], pending: false };
+
+/** Rule levels (1a to 6): the length of a node's `down` cache. */
+const LEVELS = 9;
+
+function anyTrue(t: boolean[]): boolean {
+  for (let i = 0; i < t.length; i++) if (t[i]) return true;
+  return false;
+}
+
+/** nodes[i..j) are all hydrogens, phantoms or duplicates. */
+function allLeaves(nodes: CipNode[], i: number, j: number): boolean {
+  for (let k = i; k < j; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
+  return true;
+}
 
 function invertChiral(l: CipLabel | null): CipLabel | null {
   if (l === 'e') return 'z';

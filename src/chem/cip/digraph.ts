@@ -19,12 +19,19 @@ export const PHANTOM = -2;
 
 export const NODE_BUDGET = 200_000;
 
+/** The children of hydrogens, phantoms and duplicates (shared; never written to). */
+const NO_KIDS: CipNode[] = [];
+/** Scratch list for kids(); kept, so its room is reserved once. */
+const scratch: CipNode[] = [];
+
 export class CipNode {
   kids: CipNode[] | null = null;
   /** Sorted branch lists per (came-from, rule level); see compare.ts. */
   sorted: Map<number | string, SortedBranches> | null = null;
-  /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode). */
+  /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode); see down0. */
   down: SortedBranches[] | null = null;
+  /** The same for Rule 1a, the level nearly every comparison ends at (kept apart: no array by level for it). */
+  down0: SortedBranches | null = null;
   /** Auxiliary descriptor: undefined = not yet computed, null = none. */
   aux: CipLabel | null | undefined = undefined;
   auxBusy = false;
@@ -45,6 +52,11 @@ export interface SortedBranches {
   nodes: CipNode[];
   /** tie[i] is true when nodes[i] ties with nodes[i-1] under the rules of this level. */
   tie: boolean[];
+  /**
+   * Rule 1a level only: so far ordered by atomic number alone, runs of equal atomic number not yet ordered by
+   * their whole branches (nor `tie` set); compare.ts completes it when the order itself is needed.
+   */
+  pending: boolean;
 }
 
 export class Digraph {
@@ -103,13 +115,14 @@ export class Digraph {
   /** Children of `node` in the root's digraph, made on first use (P-92.1.4.2 duplicates included). */
   kids(node: CipNode): CipNode[] {
     if (node.kids) return node.kids;
-    const out: CipNode[] = [];
-    node.kids = out;
-    if (node.dup || node.atom < 0) return out;
+    if (node.dup || node.atom < 0) return (node.kids = NO_KIDS);
     if (this.count > NODE_BUDGET) {
       this.truncated = true;
-      return out;
+      return (node.kids = NO_KIDS);
     }
+    // collected in a shared scratch array and copied out at their exact size (make() does not re-enter here)
+    const out = scratch;
+    let cnt = 0;
     const g = this.g;
     const a = node.atom;
     const parent = node.parent;
@@ -120,36 +133,47 @@ export class Digraph {
       const b = nb[i];
       const order = od[i];
       // a double bond in a mancude ring: one duplicate of mean atomic number, wherever the Kekulé bond lies
-      const mz = order === 2 && mancudeOf(g).bond.has(a * g.n + b) ? mancudeOf(g).dupZ[a] : -1;
+      let mz = -1;
+      if (order === 2) {
+        const m = mancudeOf(g);
+        if (m.edge[m.off[a] + i] === 1) mz = m.dupZ[a];
+      }
       if (parent !== null && b === parent.atom) {
-        if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
-        else for (let k = 1; k < order; k++) out.push(this.make(b, d, parent.depth, true, node));
+        if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+        else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, parent.depth, true, node);
         continue;
       }
       let anc: CipNode | null = parent;
       while (anc !== null && anc.atom !== b) anc = anc.parent;
       if (anc !== null) {
         // ring closure: a duplicate of the atom already on the path, plus one per extra bond order
-        out.push(this.make(b, d, anc.depth, true, node));
-        if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
-        else for (let k = 1; k < order; k++) out.push(this.make(b, d, anc.depth, true, node));
+        out[cnt++] = this.make(b, d, anc.depth, true, node);
+        if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+        else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, anc.depth, true, node);
       } else {
-        out.push(this.make(b, d, d, false, node));
-        if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
-        else for (let k = 1; k < order; k++) out.push(this.make(b, d, d, true, node));
+        out[cnt++] = this.make(b, d, d, false, node);
+        if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+        else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, d, true, node);
       }
     }
-    for (let h = 0; h < g.hCount[a]; h++) out.push(this.make(H_ATOM, d, d, false, node));
-    return out;
+    for (let h = 0; h < g.hCount[a]; h++) out[cnt++] = this.make(H_ATOM, d, d, false, node);
+    const kids = out.slice(0, cnt);
+    for (let j = 0; j < cnt; j++) out[j] = null as unknown as CipNode; // drop references (setting length frees the room)
+    node.kids = kids;
+    return kids;
   }
 
   /** Branches of `node` when it is entered from `from` (null: `node` is the root of the traversal). */
   branches(node: CipNode, from: CipNode | null): CipNode[] {
     const kids = this.kids(node);
     if (from !== null && from === node.parent) return kids;
-    const out: CipNode[] = [];
-    if (node.parent !== null && node.parent !== from) out.push(node.parent);
-    for (const k of kids) if (k !== from) out.push(k);
+    const up = node.parent !== null && node.parent !== from;
+    let size = up ? 1 : 0;
+    for (let i = 0; i < kids.length; i++) if (kids[i] !== from) size++;
+    const out = new Array<CipNode>(size);
+    let k = 0;
+    if (up) out[k++] = node.parent as CipNode;
+    for (let i = 0; i < kids.length; i++) if (kids[i] !== from) out[k++] = kids[i];
     return out;
   }
 }

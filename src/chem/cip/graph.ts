@@ -49,28 +49,53 @@ export interface CipGraph {
 
 export function buildGraph(s: Structure): CipGraph {
   const n = s.atoms.length;
+  // neighbour lists of their exact size, cut from shared flat lists (an empty array grown by push reserves room
+  // for 16 entries); the order of each list is the order of the bonds, as before
+  const bonds = s.bonds;
+  const deg = flatDeg.length > n ? flatDeg : (flatDeg = new Array<number>(2 * n + 2).fill(0));
+  for (let i = 0; i <= n; i++) deg[i] = 0;
+  for (let k = 0; k < bonds.length; k++) {
+    const b = bonds[k];
+    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
+    deg[b.a + 1]++;
+    deg[b.b + 1]++;
+  }
+  for (let i = 0; i < n; i++) deg[i + 1] += deg[i];
+  const total = deg[n];
+  const fn = flatNbr.length >= total ? flatNbr : (flatNbr = new Array<number>(2 * total).fill(0));
+  const fo = flatOrd.length >= total ? flatOrd : (flatOrd = new Array<number>(2 * total).fill(0));
+  for (let k = 0; k < bonds.length; k++) {
+    const b = bonds[k];
+    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
+    const i = deg[b.a]++;
+    fn[i] = b.b;
+    fo[i] = b.order;
+    const j = deg[b.b]++;
+    fn[j] = b.a;
+    fo[j] = b.order;
+  }
+  // deg[a] is now where the list of a ends (the start of the next one)
   const nbr: number[][] = [];
   const ord: number[][] = [];
-  for (let i = 0; i < n; i++) {
-    nbr.push([]);
-    ord.push([]);
+  for (let a = 0; a < n; a++) {
+    const from = a === 0 ? 0 : deg[a - 1];
+    nbr.push(fn.slice(from, deg[a]));
+    ord.push(fo.slice(from, deg[a]));
   }
-  for (const b of s.bonds) {
-    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
-    nbr[b.a].push(b.b);
-    ord[b.a].push(b.order);
-    nbr[b.b].push(b.a);
-    ord[b.b].push(b.order);
-  }
-  const dupOrd = ord.map((o) => o.slice());
+  // the same arrays as `ord` except at atoms in an expanded valence state and their partners (copied on change)
+  const dupOrd: number[][] = ord.slice();
   for (let a = 0; a < n; a++) {
     if (!expandedValence(s, a, ord[a])) continue;
     for (let i = 0; i < nbr[a].length; i++) {
       const b = nbr[a][i];
       if (ord[a][i] !== 2 || !CHALCOGEN_OR_N.has(s.atoms[b].atomicNumber)) continue;
+      if (dupOrd[a] === ord[a]) dupOrd[a] = ord[a].slice();
       dupOrd[a][i] = 1;
       const j = nbr[b].indexOf(a);
-      if (j >= 0) dupOrd[b][j] = 1;
+      if (j >= 0) {
+        if (dupOrd[b] === ord[b]) dupOrd[b] = ord[b].slice();
+        dupOrd[b][j] = 1;
+      }
     }
   }
   const tetraAt = new Array<number>(n).fill(-1);
@@ -206,28 +231,42 @@ function connectedWithout(g: CipGraph, p: number, q: number, skip1: number, skip
 export function ringSizeThrough(g: CipGraph, a: number, b: number, max: number): number {
   if (seenBuf.length < g.n) {
     seenBuf = new Int32Array(g.n * 2);
+    queueBuf = new Int32Array(g.n * 2);
     stamp = 0;
   }
   const mark = ++stamp;
-  seenBuf[a] = mark;
-  let frontier = [a];
-  for (let d = 0; frontier.length > 0 && d < max - 1; d++) {
-    const next: number[] = [];
-    for (const x of frontier) {
-      for (const y of g.nbr[x]) {
+  const seen = seenBuf;
+  const queue = queueBuf;
+  seen[a] = mark;
+  // breadth-first by layers: queue[lo, hi) is the layer at distance d from a
+  queue[0] = a;
+  let lo = 0;
+  let hi = 1;
+  for (let d = 0; lo < hi && d < max - 1; d++) {
+    let end = hi;
+    for (let q = lo; q < hi; q++) {
+      const x = queue[q];
+      const nx = g.nbr[x];
+      for (let i = 0; i < nx.length; i++) {
+        const y = nx[i];
         if (x === a && y === b) continue;
         if (y === b) return d + 2;
-        if (seenBuf[y] === mark) continue;
-        seenBuf[y] = mark;
-        next.push(y);
+        if (seen[y] === mark) continue;
+        seen[y] = mark;
+        queue[end++] = y;
       }
     }
-    frontier = next;
+    lo = hi;
+    hi = end;
   }
   return 0;
 }
 
+let flatDeg: number[] = new Array<number>(256).fill(0);
+let flatNbr: number[] = new Array<number>(512).fill(0);
+let flatOrd: number[] = new Array<number>(512).fill(0);
 let seenBuf = new Int32Array(256);
+let queueBuf = new Int32Array(256);
 let stamp = 0;
 
 export function mancudeOf(g: CipGraph): Mancude {

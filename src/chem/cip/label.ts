@@ -57,12 +57,11 @@ function tetrahedral(
 /** Ligands of a tetrahedral centre that tie under Rules 1-5 (candidates for the Rule 6 reference). */
 function tiedTetrahedral(g: CipGraph, index: number, e: TetrahedralStereo, c?: Rankers): number[] {
   const rk = ranker(g, e.centre, index, -1, c);
-  const used = new Set<ReturnType<typeof rk.dg.phantom>>();
-  const ligs = [];
+  // the branches taken so far are the ones used
+  const ligs: ReturnType<typeof rk.dg.phantom>[] = [];
   for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, rk.dg.root, l, used);
+    const b = ligandBranch(rk.dg, rk.dg.root, l, ligs);
     if (b === null) return [];
-    used.add(b);
     ligs.push(b);
   }
   const r = rankLigands(rk, rk.dg.root, ligs, RULE_5);

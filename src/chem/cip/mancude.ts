@@ -13,7 +13,13 @@ import type { Structure } from '../types.js';
 
 export interface Mancude {
   /** Per bond key (a * n + b, both orders), whether the bond lies in a mancude ring. */
-  bond: PairSet;
+  readonly bond: PairSet;
+  /**
+   * The same per neighbour slot: edge[off[a] + i] is 1 when the bond from a to nbr[a][i] lies in a mancude ring
+   * (what the digraph reads; no key arithmetic, no table of n * n).
+   */
+  edge: number[];
+  off: number[];
   /** Mean atomic number for the duplicate of each mancude atom; 0 elsewhere. */
   dupZ: number[];
   /** Mean Rule 2 mass for the same duplicate (so an isotope label does not depend on the Kekulé form either). */
@@ -22,34 +28,89 @@ export interface Mancude {
 
 export function perceiveMancude(s: Structure, nbr: number[][], ord: number[][], mass: number[]): Mancude {
   const n = s.atoms.length;
-  const bond = new PairSet(n);
+  const off = new Array<number>(n + 1);
+  off[0] = 0;
+  for (let a = 0; a < n; a++) off[a + 1] = off[a] + nbr[a].length;
+  const slots = off[n];
+  const edge = new Array<number>(slots).fill(0);
   const dupZ = new Array<number>(n).fill(0);
   const dupMass = new Array<number>(n).fill(0);
-  if (!nbr.some((o, a) => ord[a].some((x, i) => x === 2 && o[i] > a))) return { bond, dupZ, dupMass };
-  const ring = ringBonds(n, nbr);
-  const piDouble = (a: number): boolean => nbr[a].some((b, i) => ord[a][i] === 2 && ring.has(key(n, a, b)));
-  const pi = new Array<boolean>(n).fill(false);
-  for (let a = 0; a < n; a++) {
-    const at = s.atoms[a];
-    const inRing = nbr[a].some((b) => ring.has(key(n, a, b)));
-    if (!inRing) continue;
-    if (piDouble(a)) pi[a] = !nbr[a].some((b, i) => ord[a][i] >= 2 && !ring.has(key(n, a, b)));
-    else if (!ord[a].some((o) => o >= 2)) {
-      const lonePair = [7, 8, 15, 16, 34].includes(at.atomicNumber) && at.charge <= 0;
-      pi[a] = (lonePair || (at.atomicNumber === 6 && at.charge === -1)) && nbr[a].length + at.hCount <= 3;
+  let anyDouble = false;
+  for (let a = 0; a < n && !anyDouble; a++) {
+    const o = nbr[a];
+    const oa = ord[a];
+    for (let i = 0; i < o.length; i++) {
+      if (oa[i] === 2 && o[i] > a) {
+        anyDouble = true;
+        break;
+      }
     }
   }
-  // bonds on a cycle of π atoms: the conjugated (mancude) ring systems, whatever their size
-  const piNbr = nbr.map((o, a) => (pi[a] ? o.filter((b) => pi[b] && ring.has(key(n, a, b))) : []));
-  const piRing = ringBonds(n, piNbr);
-  bond.addAll(piRing);
+  if (!anyDouble) return result(n, nbr, off, edge, dupZ, dupMass);
+  // ring[off[a] + i]: the bond a-nbr[a][i] lies on a cycle
+  // scratch tables (module-level, reused: a typed array per call costs more than the work here)
+  if (scratchRing.length < slots) {
+    scratchRing = new Uint8Array(2 * slots);
+    scratchSlot = new Uint8Array(2 * slots);
+  }
+  if (scratchPi.length < n) scratchPi = new Uint8Array(2 * n);
+  const ring = scratchRing;
+  ring.fill(0, 0, slots);
+  ringBonds(n, nbr, off, ring, null);
+  // piDouble[a]: a has a double bond inside a ring
+  if (scratchPiDouble.length < n) scratchPiDouble = new Uint8Array(2 * n);
+  const piDouble = scratchPiDouble;
   for (let a = 0; a < n; a++) {
-    if (!pi[a] || !piDouble(a)) continue;
+    const oa = ord[a];
+    const base = off[a];
+    let d = 0;
+    for (let i = 0; i < oa.length; i++) if (oa[i] === 2 && ring[base + i] === 1) d = 1;
+    piDouble[a] = d;
+  }
+  const pi = scratchPi;
+  pi.fill(0, 0, n);
+  for (let a = 0; a < n; a++) {
+    const base = off[a];
+    const oa = ord[a];
+    const deg = oa.length;
+    let inRing = false;
+    for (let i = 0; i < deg; i++) if (ring[base + i] === 1) inRing = true;
+    if (!inRing) continue;
+    const at = s.atoms[a];
+    if (piDouble[a] === 1) {
+      let outside = false;
+      for (let i = 0; i < deg; i++) if (oa[i] >= 2 && ring[base + i] !== 1) outside = true;
+      pi[a] = outside ? 0 : 1;
+    } else {
+      let multiple = false;
+      for (let i = 0; i < deg; i++) if (oa[i] >= 2) multiple = true;
+      if (!multiple) {
+        const z = at.atomicNumber;
+        const lonePair = (z === 7 || z === 8 || z === 15 || z === 16 || z === 34) && at.charge <= 0;
+        pi[a] = (lonePair || (z === 6 && at.charge === -1)) && deg + at.hCount <= 3 ? 1 : 0;
+      }
+    }
+  }
+  // bonds on a cycle of π atoms: the conjugated (mancude) ring systems, whatever their size; the π subgraph is
+  // the slots of nbr whose both atoms are π atoms and whose bond is a ring bond
+  const piSlot = scratchSlot;
+  piSlot.fill(0, 0, slots);
+  for (let a = 0; a < n; a++) {
+    if (pi[a] !== 1) continue;
+    const o = nbr[a];
+    for (let i = 0; i < o.length; i++) if (pi[o[i]] === 1 && ring[off[a] + i] === 1) piSlot[off[a] + i] = 1;
+  }
+  ringBonds(n, nbr, off, edge, piSlot);
+  for (let a = 0; a < n; a++) {
+    if (pi[a] !== 1 || piDouble[a] !== 1) continue;
     let sum = 0;
     let msum = 0;
     let cnt = 0;
-    for (const b of piNbr[a]) {
-      if (piRing.has(key(n, a, b)) && piDouble(b)) {
+    const o = nbr[a];
+    for (let i = 0; i < o.length; i++) {
+      if (piSlot[off[a] + i] !== 1) continue;
+      const b = o[i];
+      if (edge[off[a] + i] === 1 && piDouble[b] === 1) {
         sum += s.atoms[b].atomicNumber;
         msum += mass[b];
         cnt++;
@@ -60,51 +121,122 @@ export function perceiveMancude(s: Structure, nbr: number[][], ord: number[][], 
       dupMass[a] = msum / cnt;
     }
   }
-  return { bond, dupZ, dupMass };
+  return result(n, nbr, off, edge, dupZ, dupMass);
+}
+
+function result(
+  n: number,
+  nbr: number[][],
+  off: number[],
+  edge: number[],
+  dupZ: number[],
+  dupMass: number[],
+): Mancude {
+  let bond: PairSet | null = null;
+  return {
+    get bond(): PairSet {
+      if (bond === null) {
+        bond = new PairSet(n);
+        for (let a = 0; a < n; a++)
+          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key(n, a, nbr[a][i]));
+      }
+      return bond;
+    },
+    edge,
+    off,
+    dupZ,
+    dupMass,
+  };
 }
 
 export function key(n: number, a: number, b: number): number {
   return a * n + b;
 }
 
-/** Bonds that lie on a cycle (not bridges), both directions, by an iterative depth-first search. */
-function ringBonds(n: number, nbr: number[][]): PairSet {
-  const out = new PairSet(n);
-  const disc = new Int32Array(n).fill(-1);
-  const low = new Int32Array(n);
+/** Mark both slots of the bond v-w (every slot of v that holds w, and of w that holds v). */
+function markPair(nbr: number[][], off: number[], out: Uint8Array | number[], v: number, w: number): void {
+  const nv = nbr[v];
+  for (let j = 0; j < nv.length; j++) if (nv[j] === w) out[off[v] + j] = 1;
+  const nw = nbr[w];
+  for (let j = 0; j < nw.length; j++) if (nw[j] === v) out[off[w] + j] = 1;
+}
+
+let scratchRing = new Uint8Array(256);
+let scratchSlot = new Uint8Array(256);
+let scratchPi = new Uint8Array(128);
+let scratchPiDouble = new Uint8Array(128);
+let scratchDisc = new Int32Array(128);
+let scratchLow = new Int32Array(128);
+let stackV = new Int32Array(64);
+let stackP = new Int32Array(64);
+let stackI = new Int32Array(64);
+
+/**
+ * Bonds that lie on a cycle (not bridges), both directions, by an iterative depth-first search, written as 1 into
+ * `out` per neighbour slot. With `use`, only the slots marked there are edges (a subgraph, in neighbour order).
+ */
+function ringBonds(
+  n: number,
+  nbr: number[][],
+  off: number[],
+  out: Uint8Array | number[],
+  use: Uint8Array | null,
+): void {
+  if (scratchDisc.length < n) {
+    scratchDisc = new Int32Array(2 * n);
+    scratchLow = new Int32Array(2 * n);
+  }
+  const disc = scratchDisc;
+  const low = scratchLow;
+  disc.fill(-1, 0, n);
+  if (stackV.length < n + 1) {
+    stackV = new Int32Array(2 * n + 2);
+    stackP = new Int32Array(2 * n + 2);
+    stackI = new Int32Array(2 * n + 2);
+  }
+  const sv = stackV;
+  const sp = stackP;
+  const si = stackI;
   let t = 0;
   for (let r = 0; r < n; r++) {
-    if (disc[r] >= 0 || nbr[r].length === 0) continue;
-    const stack: [number, number, number][] = [[r, -1, 0]];
+    if (disc[r] >= 0) continue;
+    let empty = true;
+    for (let i = 0; i < nbr[r].length; i++) if (use === null || use[off[r] + i] === 1) empty = false;
+    if (empty) continue;
+    let top = 0;
+    sv[0] = r;
+    sp[0] = -1;
+    si[0] = 0;
     disc[r] = low[r] = t++;
-    while (stack.length > 0) {
-      const top = stack[stack.length - 1];
-      const [v, parent, i] = top;
-      if (i < nbr[v].length) {
-        top[2]++;
-        const w = nbr[v][i];
+    while (top >= 0) {
+      const v = sv[top];
+      const parent = sp[top];
+      const i = si[top];
+      const nv = nbr[v];
+      if (i < nv.length) {
+        si[top]++;
+        if (use !== null && use[off[v] + i] !== 1) continue;
+        const w = nv[i];
         if (w === parent) continue;
         if (disc[w] < 0) {
           disc[w] = low[w] = t++;
-          stack.push([w, v, 0]);
+          top++;
+          sv[top] = w;
+          sp[top] = v;
+          si[top] = 0;
         } else {
           low[v] = Math.min(low[v], disc[w]);
-          out.add(key(n, v, w)); // a non-tree edge closes a cycle
-          out.add(key(n, w, v));
+          markPair(nbr, off, out, v, w); // a non-tree edge closes a cycle
         }
       } else {
-        stack.pop();
+        top--;
         if (parent >= 0) {
           low[parent] = Math.min(low[parent], low[v]);
-          if (low[v] <= disc[parent]) {
-            out.add(key(n, v, parent));
-            out.add(key(n, parent, v));
-          }
+          if (low[v] <= disc[parent]) markPair(nbr, off, out, v, parent);
         }
       }
     }
   }
-  return out;
 }
 
 /** A set of atom pairs (keys a * n + b): a byte table for ordinary molecules, a hash set for huge ones. */

@@ -18,11 +18,14 @@ export interface Ranking {
   tieWithPrev: boolean[];
 }
 
-function insertionSort(order: number[], cmp: (a: number, b: number) => number): number[] {
-  for (let i = 1; i < order.length; i++) {
+/** Indices 0..k-1 ordered highest first by the pairwise results m[a * k + b] (> 0: a above b); stable. */
+function orderBy(m: number[], k: number): number[] {
+  const order = new Array<number>(k);
+  for (let i = 0; i < k; i++) order[i] = i;
+  for (let i = 1; i < k; i++) {
     const v = order[i];
     let j = i - 1;
-    while (j >= 0 && cmp(order[j], v) < 0) {
+    while (j >= 0 && m[order[j] * k + v] < 0) {
       order[j + 1] = order[j];
       j--;
     }
@@ -39,47 +42,50 @@ function insertionSort(order: number[], cmp: (a: number, b: number) => number): 
  */
 export function rankLigands(rk: Ranker, centre: CipNode, ligands: CipNode[], level: number): Ranking {
   const k = ligands.length;
-  const m: number[][] = ligands.map(() => new Array<number>(k).fill(0));
+  // pairwise results, m[i * k + j] (a flat table: k is at most 4)
+  const m = new Array<number>(k * k).fill(0);
+  let late = false;
   for (let i = 0; i < k; i++) {
     for (let j = i + 1; j < k; j++) {
       const c = rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
-      m[i][j] = c;
-      m[j][i] = -c;
+      m[i * k + j] = c;
+      m[j * k + i] = -c;
+      if (Math.abs(c) - 1 >= RULE_5) late = true;
     }
   }
-  const order = insertionSort(
-    ligands.map((_, i) => i),
-    (a, b) => m[a][b],
-  );
-  const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
-  const tied = tieWithPrev.some((t) => t);
+  const order = orderBy(m, k);
+  const tieWithPrev = new Array<boolean>(k);
+  let tied = false;
+  for (let i = 0; i < k; i++) {
+    const t = i > 0 && m[order[i - 1] * k + order[i]] === 0;
+    tieWithPrev[i] = t;
+    if (t) tied = true;
+  }
   let pseudo = false;
-  if (!tied && m.some((row) => row.some((c) => Math.abs(c) - 1 >= RULE_5))) {
+  if (!tied && late) {
     // rank again as in the mirror image (chiral descriptors inverted)
-    const mm: number[][] = ligands.map(() => new Array<number>(k).fill(0));
+    const mm = new Array<number>(k * k).fill(0);
     const saved = rk.mirror;
     rk.mirror = true;
     try {
       for (let i = 0; i < k; i++) {
         for (let j = i + 1; j < k; j++) {
+          const c0 = m[i * k + j];
           const c =
-            Math.abs(m[i][j]) - 1 < RULE_5
-              ? m[i][j]
-              : rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
-          mm[i][j] = c;
-          mm[j][i] = -c;
+            Math.abs(c0) - 1 < RULE_5 ? c0 : rk.compareUpTo(level, ligands[i], centre, ligands[j], centre);
+          mm[i * k + j] = c;
+          mm[j * k + i] = -c;
         }
       }
     } finally {
       rk.mirror = saved;
     }
-    const mirror = insertionSort(
-      ligands.map((_, i) => i),
-      (a, b) => mm[a][b],
-    );
+    const mirror = orderBy(mm, k);
     const pos = new Array<number>(k);
-    order.forEach((li, p) => (pos[li] = p));
-    pseudo = !isEvenPermutation(mirror.map((li) => pos[li]));
+    for (let p = 0; p < k; p++) pos[order[p]] = p;
+    const perm = new Array<number>(k);
+    for (let p = 0; p < k; p++) perm[p] = pos[mirror[p]];
+    pseudo = !isEvenPermutation(perm);
   }
   return { order, tied, pseudo, tieWithPrev };
 }

@@ -36,12 +36,22 @@ function descriptors(rk: Ranker, x: CipNode, fx: CipNode | null): Entry[] {
   const out: Entry[] = [];
   const q: CipNode[] = [x];
   const qf: (CipNode | null)[] = [fx];
-  const qk: number[][] = [[]];
+  // the key path of each queued node as a link to its parent's entry and its own rank position (the path
+  // itself is spelled out only for the nodes that carry a descriptor)
+  const qParent: number[] = [-1];
+  const qPos: number[] = [0];
+  const qDepth: number[] = [0];
   for (let i = 0; i < q.length; i++) {
     const n = q[i];
     if (!n.dup && n.atom >= 0 && rk.value(RULE_4A, n) === 2) {
       const l = rk.aux(n);
-      if (l !== null && isChiralLabel(l)) out.push({ label: l, key: [qk[i].length, ...qk[i]], group: 0 });
+      if (l !== null && isChiralLabel(l)) {
+        const len = qDepth[i];
+        const key = new Array<number>(len + 1);
+        key[0] = len;
+        for (let k = i, at = len; at >= 1; k = qParent[k], at--) key[at] = qPos[k];
+        out.push({ label: l, key, group: 0 });
+      }
     }
     const s = rk.sorted(n, qf[i], RULE_4A);
     let pos = 0;
@@ -49,7 +59,9 @@ function descriptors(rk: Ranker, x: CipNode, fx: CipNode | null): Entry[] {
       if (!s.tie[j]) pos = j;
       q.push(s.nodes[j]);
       qf.push(n);
-      qk.push([...qk[i], pos]);
+      qParent.push(i);
+      qPos.push(pos);
+      qDepth.push(qDepth[i] + 1);
     }
   }
   out.sort((a, b) => keyCompare(a.key, b.key));
