@@ -63,7 +63,9 @@ function bitFor(
 ): number {
   if (e.kind === 'tetrahedral') {
     if (u.kind !== 'tetrahedral') return -1;
-    const list = e.ligands.map((x) => pseudo(u, e.centre, x));
+    const l = e.ligands;
+    const c = e.centre;
+    const list = [pseudo(u, c, l[0]), pseudo(u, c, l[1]), pseudo(u, c, l[2]), pseudo(u, c, l[3])];
     return rebase(u, list, e.winding === '@@' ? 1 : 0);
   }
   const [a, b] = e.ends;
@@ -83,6 +85,7 @@ function bitFor(
     return rebase(u, list, e.relation === 'trans' ? 1 : 0);
   }
   if (u.mode !== 'parity') return -1;
-  const list = e.ligands.map((x, k) => pseudo(u, k < 2 ? a : b, x));
+  const l = e.ligands;
+  const list = [pseudo(u, a, l[0]), pseudo(u, a, l[1]), pseudo(u, b, l[2]), pseudo(u, b, l[3])];
   return rebase(u, list, e.winding === '@@' ? 1 : 0);
 }

@@ -210,7 +210,7 @@ function equalPairs(
       if (cls(tokens[k]) === cls(tokens[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens[k] });
     return out;
   }
-  const c = tokens.map(cls);
+  const c = [cls(tokens[0]), cls(tokens[1]), cls(tokens[2]), cls(tokens[3])];
   for (let i = 0; i < 4; i++) {
     let same = 0;
     for (let j = 0; j < 4; j++) if (c[j] === c[i]) same++;

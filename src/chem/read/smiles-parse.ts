@@ -4,7 +4,7 @@
  * OpenSMILES specification: bonds, branches, ring closures, disconnected structures.
  */
 import { readBracketAtom, readOrganicAtom, type RawAtom, type TokenError } from './smiles-bracket.js';
-
+import { objectList } from './make.js';
 
 /**
  * The parsed graph. Bonds and neighbour lists are flat integer arrays (views on one buffer per SMILES) rather
@@ -127,7 +127,7 @@ export function parseSmilesGraph(s: string, start = 0): SmilesGraph | { error: T
 
 function parseInto(s: string, start: number): SmilesGraph | { error: TokenError } {
   const atoms: RawAtom[] = [];
-  const warnings: TokenError[] = [];
+  const warnings = objectList<TokenError>();
   let big: Map<number, number[]> | null = null; // ring numbers >= 100: [atom, entry, order, arom, dir, offset]
   let openRings = 0;
   let branchDepth = 0;

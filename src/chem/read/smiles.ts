@@ -79,7 +79,7 @@ function parse(text: string): ReadResult {
       ok: false,
       error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } },
     };
-  const warnings: ReadError[] = [];
+  const warnings = objectList<ReadError>();
   for (const w of g.warnings) warnings.push({ code: w.code, message: w.message, at: { offset: w.offset } });
   const n = g.atoms.length;
   const m = g.bondCount;
