@@ -7,7 +7,7 @@
  */
 import type { Structure } from '../types.js';
 import { prepare, refinedPartition } from './prepared.js';
-import { cellIndex, partitionOf, rankKeys, Refiner } from './refine.js';
+import { cellIndex, partitionOf, rankKeys, refineOnce } from './refine.js';
 
 export { atomInvariants } from './invariants.js';
 
@@ -25,6 +25,6 @@ export function equivalenceClasses(s: Structure, opts: ClassOptions = {}): Int32
   const prep = prepare(s, opts.aromatic);
   if (!opts.extra) return cellIndex(refinedPartition(prep));
   const p = partitionOf(rankKeys([prep.inv, opts.extra], n));
-  new Refiner(prep.csr).refine(p);
+  refineOnce(prep.csr, p);
   return cellIndex(p);
 }

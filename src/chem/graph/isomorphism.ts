@@ -16,6 +16,7 @@ import {
   partitionOf,
   rankKeys,
   Refiner,
+  refineOnce,
   type CsrGraph,
   type Partition,
 } from './refine.js';
@@ -124,7 +125,7 @@ function singlePartition(pa: Prepared, colour: ArrayLike<number> | undefined, n:
     }
     if (!constant) {
       const p = partitionOf(rankKeys([pa.inv, colour], n));
-      new Refiner(pa.csr).refine(p);
+      refineOnce(pa.csr, p);
       return p;
     }
   }

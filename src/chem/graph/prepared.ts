@@ -7,7 +7,7 @@ import { buildGraph, type Graph } from './adjacency.js';
 import { conjugatedRingBonds } from './aromaticity.js';
 import { invariantsWith } from './invariants.js';
 import { bondCode } from './csr.js';
-import { partitionOf, rankKeys, Refiner, type CsrGraph, type Partition } from './refine.js';
+import { partitionOf, rankKeys, refineOnce, type CsrGraph, type Partition } from './refine.js';
 import { bridges } from './rings.js';
 
 export interface Prepared {
@@ -24,7 +24,7 @@ export interface Prepared {
 export function refinedPartition(p: Prepared): Partition {
   if (!p.refined) {
     const part = partitionOf(rankKeys([p.inv], p.inv.length));
-    new Refiner(p.csr).refine(part);
+    refineOnce(p.csr, part);
     p.refined = part;
   }
   return p.refined;

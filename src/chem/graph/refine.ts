@@ -70,8 +70,15 @@ export function rankKeys(keys: ArrayLike<number>[], n: number): Int32Array {
 
 function rankOne(values: ArrayLike<number>, n: number): Int32Array {
   const sorted = new Float64Array(n);
-  for (let i = 0; i < n; i++) sorted[i] = values[i];
-  sorted.sort();
+  let nan = false;
+  for (let i = 0; i < n; i++) {
+    sorted[i] = values[i];
+    if (values[i] !== values[i]) nan = true;
+  }
+  // Only the distinct values and their order matter below, which any ascending sort gives; the built-in
+  // sort boxes every element of a Float64Array, so it is kept for input with NaN only.
+  if (nan) sorted.sort();
+  else heapSort(sorted, n);
   let u = 0;
   for (let i = 0; i < n; i++) if (i === 0 || sorted[i] !== sorted[u - 1]) sorted[u++] = sorted[i];
   const out = new Int32Array(n);
@@ -87,6 +94,30 @@ function rankOne(values: ArrayLike<number>, n: number): Int32Array {
     out[i] = lo;
   }
   return out;
+}
+
+/** Ascending in-place heap sort of a[0..n) (no NaN). */
+function heapSort(a: Float64Array, n: number): void {
+  for (let i = (n >> 1) - 1; i >= 0; i--) siftDown(a, i, n);
+  for (let end = n - 1; end > 0; end--) {
+    const x = a[0];
+    a[0] = a[end];
+    a[end] = x;
+    siftDown(a, 0, end);
+  }
+}
+
+function siftDown(a: Float64Array, i: number, n: number): void {
+  const x = a[i];
+  for (;;) {
+    let c = 2 * i + 1;
+    if (c >= n) break;
+    if (c + 1 < n && a[c + 1] > a[c]) c++;
+    if (!(a[c] > x)) break;
+    a[i] = a[c];
+    i = c;
+  }
+  a[i] = x;
 }
 
 /** Partition whose cells are the atoms of equal rank, in rank order. */
@@ -145,10 +176,12 @@ export class Refiner {
   work = 0;
 
   constructor(
-    readonly g: CsrGraph,
+    public g: CsrGraph,
     readonly split = 0,
+    /** Atoms the workspace holds (at least g.n); a larger one serves smaller graphs too. */
+    readonly capacity = g.n,
   ) {
-    const n = g.n;
+    const n = capacity;
     this.count = new Int32Array(n);
     this.touched = new Int32Array(n);
     this.queue = new Int32Array(n + 1);
@@ -363,6 +396,26 @@ function sortPositions(a: number[]): void {
     a[j] = x;
   }
 }
+
+/** Workspace for refineOnce(): refine() leaves count, cellHits and inQueue all zero, as it found them. */
+let shared: Refiner | null = null;
+
+/**
+ * new Refiner(g).refine(p) on a workspace kept between calls. The workspace is taken out while in use, so a
+ * call that throws leaves none behind in a half-used state.
+ */
+export function refineOnce(g: CsrGraph, p: Partition): boolean {
+  let r = shared;
+  shared = null;
+  if (r === null || r.capacity < g.n) r = new Refiner(g, 0, Math.max(g.n, 64));
+  else r.g = g;
+  const ok = r.refine(p);
+  r.g = EMPTY;
+  shared = r;
+  return ok;
+}
+
+const EMPTY: CsrGraph = { n: 0, offs: new Int32Array(1), adj: new Int32Array(0), code: new Int32Array(0) };
 
 /** Moves atom v to position `at` (swapping with the atom there). */
 function swapTo(p: Partition, v: number, at: number): void {
