@@ -136,7 +136,7 @@ export class Ranker {
       case RULE_1B:
         return rule1b(n);
       case RULE_2:
-        return rule2(n);
+        return rule2(this.dg.massOf(n));
       case RULE_3:
         return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule3(this.aux(n));
       case RULE_4A:
@@ -453,7 +453,7 @@ export class Ranker {
 export { CipNode };
 
 /** Placeholder for cleared queue slots. */
-const NO_NODE = new CipNode(-1, -2, 0, 0, 0, 0, false, null);
+const NO_NODE = new CipNode(-1, -2, 0, false, 0, 0, false, null);
 
 /** The `tie` of a pending list (never read before finish0 replaces it). */
 const NO_TIES: boolean[] = [];

@@ -39,7 +39,12 @@ export class CipNode {
     readonly id: number,
     readonly atom: number,
     readonly z: number,
-    readonly mass: number,
+    /**
+     * A duplicate in a mancude ring (made with the mean atomic number): its Rule 2 mass is the mean one too, see
+     * Digraph.massOf (the mass is not stored: a number field that holds fractions is boxed, one more object
+     * per node).
+     */
+    readonly mancudeDup: boolean,
     readonly depth: number,
     /** Rule 1b distance: the depth of the corresponding non-duplicated node (own depth when not a duplicate). */
     readonly dist: number,
@@ -90,21 +95,22 @@ export class Digraph {
     this.count++;
     const g = this.g;
     if (z >= 0 && parent !== null) {
-      return new CipNode(
-        this.nextId++,
-        atom,
-        z,
-        mancudeOf(g).dupMass[parent.atom],
-        depth,
-        dist,
-        true,
-        parent,
-      );
+      return new CipNode(this.nextId++, atom, z, true, depth, dist, true, parent);
     }
-    if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
-    if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
-    // Rule 2: a duplicate carries the mass of the atom it duplicates (a mancude one the mean, see above)
-    return new CipNode(this.nextId++, atom, g.z[atom], g.mass[atom], depth, dist, dup, parent);
+    if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, false, depth, dist, false, parent);
+    if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, false, depth, dist, false, parent);
+    return new CipNode(this.nextId++, atom, g.z[atom], false, depth, dist, dup, parent);
+  }
+
+  /**
+   * The Rule 2 mass of a node: a duplicate carries the mass of the atom it duplicates (a mancude one the mean
+   * mass of the atoms its atom could be double-bonded to, as for its atomic number); hydrogen 1.008, a phantom 0.
+   */
+  massOf(n: CipNode): number {
+    if (n.mancudeDup) return mancudeOf(this.g).dupMass[(n.parent as CipNode).atom];
+    if (n.atom === H_ATOM) return 1.008;
+    if (n.atom === PHANTOM) return 0;
+    return this.g.mass[n.atom];
   }
 
   /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */

@@ -34,7 +34,16 @@ const MEAN_MASS_NUMBER: Record<number, number> = {
   53: 127,
 };
 
+/** averageMass by atomic number up to 118, worked out once (the sparse table above is slow to index). */
+const BY_Z: readonly number[] = Array.from({ length: 119 }, (_, z) => computeAverageMass(z));
+
 export function averageMass(atomicNumber: number): number {
+  if (atomicNumber >= 0 && atomicNumber < BY_Z.length && Number.isInteger(atomicNumber))
+    return BY_Z[atomicNumber];
+  return computeAverageMass(atomicNumber);
+}
+
+function computeAverageMass(atomicNumber: number): number {
   if (atomicNumber <= 0) return 0;
   const m = MEAN_MASS_NUMBER[atomicNumber];
   if (m !== undefined) return m;

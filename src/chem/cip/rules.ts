@@ -34,9 +34,9 @@ export function rule1b(n: CipNode): number {
   return -n.dist;
 }
 
-/** Rule 2 (P-92.3, Rule 2): higher atomic mass number precedes lower; a duplicate has its atom's mass. */
-export function rule2(n: CipNode): number {
-  return n.mass;
+/** Rule 2 (P-92.3, Rule 2): higher atomic mass number precedes lower; a duplicate has its atom's mass (Digraph.massOf). */
+export function rule2(mass: number): number {
+  return mass;
 }
 
 /**
