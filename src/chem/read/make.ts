@@ -10,6 +10,9 @@
  * (`objectList`), never holey (`new Array(n)`) and never "small integer" arrays that only turn into object arrays
  * when the first element is pushed, so that an empty list and a full one have the same hidden class too.
  * Coordinates are always arrays of doubles (`coords3`), also when every value happens to be an integer.
+ *
+ * Code elsewhere that derives a Structure should use `withStereo` / `restructure` / `atomWithHCount` too; the
+ * spreads still left are in symmetry.ts (mirror), isomers-list.ts, labels.ts and depict.ts.
  */
 import type { Atom, Bond, BondOrder, StereoElement, StereoGroup, Structure } from '../types.js';
 
