@@ -78,6 +78,8 @@ export function buildRegistryView(
   return {
     entries,
     withConstitution(key: string): readonly RegistryEntry[] {
+      // one record (a bulk item, a lone file): its facts are at hand, an index would read its structure again
+      if (entries.length === 1) return entries[0]!.main.facts?.constitutionKey === key ? entries : [];
       if (index === null) {
         index = new Map();
         entries.forEach((e, i) => {

@@ -96,6 +96,28 @@ describe('registry view', () => {
     expect(ids(qView, keys[5]!)).toEqual(['LX-00006', 'LX-00007']);
     for (const k of keys) if (k !== null) expect(ids(qView, k)).toEqual(ids(fView, k));
   });
+
+  it('with one record (a bulk item) answers from its facts, without reading it again', async () => {
+    const real = await defaultEngine();
+    const one = records().slice(2, 3); // (R)-lactic acid
+    const counted = counting(real);
+    let syntaxOnly = 0;
+    const engine: AuditEngine = {
+      ...counted.engine,
+      smilesHeavyAtoms: (smiles) => (syntaxOnly++, real.smilesHeavyAtoms!(smiles)),
+    };
+    const cache = new StructureCache(engine);
+    const view = buildRegistryView(one, cache, () => true);
+    const own = cache.main(one[0]!).facts!.constitutionKey;
+    expect(counted.reads()).toBe(1);
+    expect(view.withConstitution(own).map((e) => e.id)).toEqual(['LX-00003']);
+    const propanoic = real.readStructure(SMILES.propanoic, { format: 'smiles' });
+    expect(
+      view.withConstitution(real.describe((propanoic as { structure: never }).structure).constitutionKey),
+    ).toEqual([]);
+    expect(counted.reads()).toBe(1);
+    expect(syntaxOnly).toBe(0);
+  });
 });
 
 describe.skipIf(!haveSharedData('moleculenet'))('heavy atoms from SMILES syntax on MoleculeNet', () => {
