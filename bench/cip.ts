@@ -25,7 +25,11 @@ export async function benchCip(ctx: BenchContext): Promise<void> {
   console.log(fmt(desc));
   const perLabel = label.seconds / label.items;
   const perRecord = ctx.perRecordAuditSeconds ?? desc.seconds / desc.items;
-  const what = ctx.perRecordAuditSeconds ? 'per-record bulk audit time (1 worker)' : 'per-record describe time';
+  const what = ctx.perRecordAuditSeconds
+    ? 'per-record bulk audit time (1 worker)'
+    : 'per-record describe time';
   const share = perLabel / perRecord;
-  console.log(`CIP labelling share of the ${what}: ${(100 * share).toFixed(1)}% (target <= 20%: ${share <= 0.2 ? 'met' : 'NOT met'})`);
+  console.log(
+    `CIP labelling share of the ${what}: ${(100 * share).toFixed(1)}% (target <= 20%: ${share <= 0.2 ? 'met' : 'NOT met'})`,
+  );
 }

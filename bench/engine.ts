@@ -18,7 +18,9 @@ export async function benchEngine(ctx: BenchContext): Promise<void> {
     const r = readStructure(s, { format: 'smiles' });
     if (r.ok) describeStructure(r.structure);
   }
-  const base = time('baseline: OpenChemLib default path (sample)', sample.length, () => oclDefaultPath(sample));
+  const base = time('baseline: OpenChemLib default path (sample)', sample.length, () =>
+    oclDefaultPath(sample),
+  );
   let failed = 0;
   const ours = time('stereogate: read + describe (all structures)', ctx.smiles.length, () => {
     for (const s of ctx.smiles) {

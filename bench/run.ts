@@ -22,7 +22,9 @@ async function main(): Promise<void> {
   }
   const rows = loadMoleculeNet();
   const smiles = rows.map((r) => r.smiles);
-  console.log(`stereogate benchmarks — ${smiles.length} MoleculeNet structures, node ${process.version}, ${new Date().toISOString()}`);
+  console.log(
+    `stereogate benchmarks — ${smiles.length} MoleculeNet structures, node ${process.version}, ${new Date().toISOString()}`,
+  );
   const ctx: BenchContext = { smiles, perRecordAuditSeconds: null };
   for (const [name, section] of SECTIONS) {
     if (!want(name)) continue;
@@ -49,7 +51,13 @@ const SECTIONS: [string, Section][] = [
   ['bulk', async (ctx) => (await import('./bulk.js')).benchBulk(ctx)],
   ['cip', async (ctx) => (await import('./cip.js')).benchCip(ctx)],
   ['action', async (ctx) => (await import('./action.js')).benchAction(ctx)],
-  ['bulk-memory', async (ctx) => (process.argv.includes('bulk-memory') ? (await import('./bulk.js')).benchBulkMemory(ctx) : console.log('only when asked: npm run bench -- bulk-memory'))],
+  [
+    'bulk-memory',
+    async (ctx) =>
+      process.argv.includes('bulk-memory')
+        ? (await import('./bulk.js')).benchBulkMemory(ctx)
+        : console.log('only when asked: npm run bench -- bulk-memory'),
+  ],
 ];
 
 void main();

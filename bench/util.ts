@@ -14,7 +14,11 @@ export function time<T>(label: string, items: number, fn: () => T): { timing: Ti
   return { timing: { label, items, seconds, perSecond: items / seconds }, value };
 }
 
-export async function timeAsync<T>(label: string, items: number, fn: () => Promise<T>): Promise<{ timing: Timing; value: T }> {
+export async function timeAsync<T>(
+  label: string,
+  items: number,
+  fn: () => Promise<T>,
+): Promise<{ timing: Timing; value: T }> {
   const t0 = performance.now();
   const value = await fn();
   const seconds = (performance.now() - t0) / 1000;
@@ -29,6 +33,11 @@ export function fmt(t: Timing): string {
 
 export function ratioLine(what: string, ours: Timing, base: Timing, target?: number): string {
   const r = ours.perSecond / base.perSecond;
-  const verdict = target === undefined ? '' : r >= target ? `  (target >= ${target}x: met)` : `  (target >= ${target}x: NOT met)`;
+  const verdict =
+    target === undefined
+      ? ''
+      : r >= target
+        ? `  (target >= ${target}x: met)`
+        : `  (target >= ${target}x: NOT met)`;
   return `${what}: ${r.toFixed(1)}x the baseline${verdict}`;
 }

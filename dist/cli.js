@@ -462,6 +462,68 @@ var init_molfile_kekulize = __esm({
   }
 });
 
+// src/chem/read/make.ts
+function objectList() {
+  const a = [null];
+  a.pop();
+  return a;
+}
+function coords3(x, y, z) {
+  const c = [0.5, 0.5, 0.5];
+  c[0] = x;
+  c[1] = y;
+  c[2] = z;
+  return c;
+}
+function newAtom(element, atomicNumber, charge, isotope, hCount, aromatic, radical, mapNumber, inputNumber, coords) {
+  return {
+    element,
+    atomicNumber,
+    charge,
+    isotope,
+    hCount,
+    aromatic,
+    radical,
+    mapNumber,
+    inputNumber,
+    coords
+  };
+}
+function atomWithHCount(a, hCount) {
+  return newAtom(
+    a.element,
+    a.atomicNumber,
+    a.charge,
+    a.isotope,
+    hCount,
+    a.aromatic,
+    a.radical,
+    a.mapNumber,
+    a.inputNumber,
+    a.coords
+  );
+}
+function newBond(a, b, order, aromatic, wedge) {
+  return { a, b, order, aromatic, wedge };
+}
+function newStructure(atoms, bonds, stereo, groups, chiralFlag, title, properties, dimension) {
+  return { atoms, bonds, stereo, groups, chiralFlag, title, properties, dimension };
+}
+function restructure(s, atoms, bonds, stereo, groups) {
+  return newStructure(atoms, bonds, stereo, groups, s.chiralFlag, s.title, s.properties, s.dimension);
+}
+function withStereo(s, stereo, groups = s.groups) {
+  return newStructure(s.atoms, s.bonds, stereo, groups, s.chiralFlag, s.title, s.properties, s.dimension);
+}
+function newGroup(type, id, atoms) {
+  return { type, id, atoms };
+}
+var init_make = __esm({
+  "src/chem/read/make.ts"() {
+    "use strict";
+  }
+});
+
 // src/chem/types.ts
 var IMPLICIT_H, LONE_PAIR;
 var init_types = __esm({
@@ -474,13 +536,58 @@ var init_types = __esm({
 
 // src/chem/graph/adjacency.ts
 function buildGraph(s) {
+  for (let i = recent.length - 1; i >= 0; i--) {
+    const e = recent[i];
+    if (e.s !== s) continue;
+    if (sameEnds(e.ends, s)) return e.g;
+    recent.splice(i, 1);
+    break;
+  }
+  const g = buildFresh(s);
+  if (recent.length >= RECENT) recent.shift();
+  recent.push({ s, ends: endsOf(s), g, memo: {} });
+  return g;
+}
+function memoOf(g) {
+  for (let i = recent.length - 1; i >= 0; i--) if (recent[i].g === g) return recent[i].memo;
+  return null;
+}
+function isGraphOf(g, s) {
+  for (let i = recent.length - 1; i >= 0; i--) {
+    const e = recent[i];
+    if (e.g === g) return e.s === s && sameEnds(e.ends, s);
+  }
+  return false;
+}
+function endsOf(s) {
+  const m = s.bonds.length;
+  const ends = new Int32Array(2 * m + 1);
+  ends[0] = s.atoms.length;
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
+    ends[2 * k + 1] = b.a;
+    ends[2 * k + 2] = b.b;
+  }
+  return ends;
+}
+function sameEnds(ends, s) {
+  const m = s.bonds.length;
+  if (ends.length !== 2 * m + 1 || ends[0] !== s.atoms.length) return false;
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
+    if (ends[2 * k + 1] !== b.a || ends[2 * k + 2] !== b.b) return false;
+  }
+  return true;
+}
+function buildFresh(s) {
   const n = s.atoms.length;
+  const m = s.bonds.length;
   const deg = new Int32Array(n);
-  const ok = (i, j) => i >= 0 && j >= 0 && i < n && j < n && i !== j;
-  for (const b of s.bonds) {
-    if (!ok(b.a, b.b)) continue;
-    deg[b.a]++;
-    deg[b.b]++;
+  for (let k = 0; k < m; k++) {
+    const { a, b } = s.bonds[k];
+    if (!(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    deg[a]++;
+    deg[b]++;
   }
   let total = 0;
   for (let i = 0; i < n; i++) total += deg[i];
@@ -488,25 +595,30 @@ function buildGraph(s) {
   const flatBonds = new Int32Array(total);
   const nbrs = new Array(n);
   const nbrBonds = new Array(n);
+  const fill = new Int32Array(n);
   let at2 = 0;
   for (let i = 0; i < n; i++) {
     nbrs[i] = flatNbrs.subarray(at2, at2 + deg[i]);
     nbrBonds[i] = flatBonds.subarray(at2, at2 + deg[i]);
+    fill[i] = at2;
     at2 += deg[i];
   }
-  const fill = new Int32Array(n);
-  s.bonds.forEach((b, k) => {
-    if (!ok(b.a, b.b)) return;
-    nbrs[b.a][fill[b.a]] = b.b;
-    nbrBonds[b.a][fill[b.a]++] = k;
-    nbrs[b.b][fill[b.b]] = b.a;
-    nbrBonds[b.b][fill[b.b]++] = k;
-  });
+  for (let k = 0; k < m; k++) {
+    const { a, b } = s.bonds[k];
+    if (!(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    flatNbrs[fill[a]] = b;
+    flatBonds[fill[a]++] = k;
+    flatNbrs[fill[b]] = a;
+    flatBonds[fill[b]++] = k;
+  }
   return { n, nbrs, nbrBonds };
 }
+var RECENT, recent;
 var init_adjacency = __esm({
   "src/chem/graph/adjacency.ts"() {
     "use strict";
+    RECENT = 4;
+    recent = [];
   }
 });
 
@@ -550,10 +662,10 @@ var init_components = __esm({
 });
 
 // src/chem/graph/sssr.ts
-function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) {
+function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond, ringSystems) {
   const n = g.n;
   const m = s.bonds.length;
-  const { systems, systemOf } = ringSystemsOf(s, n, bondInRing);
+  const { systems, systemOf } = ringSystems ?? ringSystemsOf(s, n, bondInRing);
   const bondCount = new Int32Array(systems.length);
   const smallest = new Int32Array(systems.length).fill(2147483647);
   for (let k = 0; k < m; k++) {
@@ -571,19 +683,21 @@ function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) {
   return rings.sort((p, q) => p.length - q.length);
 }
 function ringSystemsOf(s, n, bondInRing) {
-  const parent = Int32Array.from({ length: n }, (_, i) => i);
+  const parent = new Int32Array(n);
+  for (let i = 0; i < n; i++) parent[i] = i;
   const find = (x) => {
     while (parent[x] !== x) x = parent[x] = parent[parent[x]];
     return x;
   };
   const inRing = new Uint8Array(n);
-  s.bonds.forEach((b, k) => {
-    if (!bondInRing[k]) return;
+  for (let k = 0; k < s.bonds.length; k++) {
+    if (!bondInRing[k]) continue;
+    const b = s.bonds[k];
     inRing[b.a] = inRing[b.b] = 1;
     const ra = find(b.a);
     const rb = find(b.b);
     if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  });
+  }
   const systems = [];
   const systemOf = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
@@ -629,10 +743,14 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
   const basis = [];
   const owner = new Int32Array(m).fill(-1);
   const rings = [];
+  const scratch2 = new Uint32Array(words);
+  const work = new Uint32Array(words);
   let below = 0;
+  let complete = false;
   for (let limit = smallest; rings.length < nullity; limit = limit < 16 ? limit + 2 : limit * 2) {
     const depth = limit + 1 >> 1;
     const cands = [];
+    const first = Math.max(below + 1, smallest);
     for (const r of atoms) {
       dist[r] = 0;
       parent[r] = -1;
@@ -642,67 +760,77 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
       let tail = 0;
       order[tail++] = r;
       while (head2 < tail) {
-        const u = order[head2++];
-        if (dist[u] >= depth) continue;
-        const nb = g.nbrs[u];
-        for (let i = 0; i < nb.length; i++) {
-          const k = g.nbrBonds[u][i];
-          if (!bondInRing[k]) continue;
-          const v = nb[i];
-          if (dist[v] >= 0) continue;
-          dist[v] = dist[u] + 1;
-          parent[v] = u;
-          parentBond[v] = k;
-          branch[v] = u === r ? v : branch[u];
-          order[tail++] = v;
-        }
-      }
-      for (let t = 0; t < tail; t++) {
-        const x = order[t];
+        const x = order[head2++];
+        const dx = dist[x];
+        if (dx >= depth) continue;
         const nb = g.nbrs[x];
+        const nk = g.nbrBonds[x];
         for (let i = 0; i < nb.length; i++) {
-          const k = g.nbrBonds[x][i];
+          const k = nk[i];
+          if (!bondInRing[k]) continue;
           const y = nb[i];
-          if (!bondInRing[k] || dist[y] < 0 || parentBond[x] === k || parentBond[y] === k) continue;
-          if (dist[y] < dist[x] || dist[y] === dist[x] && y < x) continue;
+          const dy = dist[y];
+          if (dy < 0) {
+            dist[y] = dx + 1;
+            parent[y] = x;
+            parentBond[y] = k;
+            branch[y] = x === r ? y : branch[x];
+            order[tail++] = y;
+            continue;
+          }
+          if (parentBond[x] === k || parentBond[y] === k) continue;
+          if (dy < dx || dy === dx && y < x) continue;
           if (x !== r && y !== r && branch[x] === branch[y]) continue;
-          const size = dist[x] + dist[y] + 1;
+          const size = dx + dy + 1;
           if (size <= below || size > limit) continue;
-          const bits = new Uint32Array(words);
-          const path = [];
-          for (let u = x; u !== r; u = parent[u]) {
-            path.push(u);
-            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-          }
-          path.push(r);
-          path.reverse();
-          for (let u = y; u !== r; u = parent[u]) {
-            path.push(u);
-            bits[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
-          }
-          bits[k >>> 5] ^= 1 << (k & 31);
+          for (let u = x; u !== r; u = parent[u]) scratch2[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          for (let u = y; u !== r; u = parent[u]) scratch2[parentBond[u] >>> 5] ^= 1 << (parentBond[u] & 31);
+          scratch2[k >>> 5] ^= 1 << (k & 31);
           let hash = 0;
-          for (let w = 0; w < words; w++) hash = Math.imul(hash, 31) + bits[w] | 0;
+          for (let w = 0; w < words; w++) hash = Math.imul(hash, 31) + scratch2[w] | 0;
           const bucket = seen.get(hash);
-          if (bucket?.some((c) => equalBits(c, bits))) continue;
+          let repeat = false;
+          if (bucket) {
+            for (let j = 0; j < bucket.length && !repeat; j++) repeat = equalBits(bucket[j], scratch2);
+          }
+          if (repeat) {
+            scratch2.fill(0);
+            continue;
+          }
+          const bits = scratch2.slice();
+          scratch2.fill(0);
           if (bucket) bucket.push(bits);
           else seen.set(hash, [bits]);
-          cands.push({ size, atoms: path, bits, hash });
+          if (size === first) {
+            if (!independent(bits, work, basis, owner)) continue;
+            const path2 = [];
+            for (let u = x; u !== r; u = parent[u]) path2.push(u);
+            path2.push(r);
+            path2.reverse();
+            for (let u = y; u !== r; u = parent[u]) path2.push(u);
+            rings.push(path2);
+            if (rings.length === nullity) {
+              complete = true;
+              break;
+            }
+            continue;
+          }
+          const path = [];
+          for (let u = x; u !== r; u = parent[u]) path.push(u);
+          path.push(r);
+          path.reverse();
+          for (let u = y; u !== r; u = parent[u]) path.push(u);
+          cands.push({ size, atoms: path, bits });
         }
+        if (complete) break;
       }
       for (let t = 0; t < tail; t++) dist[order[t]] = -1;
+      if (complete) break;
     }
+    if (complete) break;
     cands.sort((p, q) => p.size - q.size);
     for (const c of cands) {
-      const v = c.bits.slice();
-      let p = firstBit(v);
-      while (p >= 0 && owner[p] >= 0) {
-        xorInto(v, basis[owner[p]]);
-        p = firstBit(v);
-      }
-      if (p < 0) continue;
-      owner[p] = basis.length;
-      basis.push(v);
+      if (!independent(c.bits, work, basis, owner)) continue;
       rings.push(c.atoms);
       if (rings.length === nullity) break;
     }
@@ -710,6 +838,18 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
     if (limit > 2 * n + 2) break;
   }
   return rings;
+}
+function independent(bits, work, basis, owner) {
+  work.set(bits);
+  let p = firstBit(work);
+  while (p >= 0 && owner[p] >= 0) {
+    xorInto(work, basis[owner[p]]);
+    p = firstBit(work);
+  }
+  if (p < 0) return false;
+  owner[p] = basis.length;
+  basis.push(work.slice());
+  return true;
 }
 function equalBits(x, y) {
   for (let i = 0; i < x.length; i++) if (x[i] !== y[i]) return false;
@@ -732,40 +872,94 @@ var init_sssr = __esm({
 function ringInfo(s, g = buildGraph(s)) {
   const n = g.n;
   const m = s.bonds.length;
-  const smallestRingOfBond = smallestRings(s, g);
-  const bondInRing = smallestRingOfBond.map((x) => x > 0);
+  const smallestRingOfBond = smallestRings(s, g).slice();
+  const bondInRing = new Array(m);
   const smallestRingOfAtom = new Array(n).fill(0);
+  let anyRing = false;
   for (let k = 0; k < m; k++) {
     const r = smallestRingOfBond[k];
+    bondInRing[k] = r > 0;
     if (r === 0) continue;
+    anyRing = true;
     const { a, b } = s.bonds[k];
-    for (const x of [a, b]) {
-      if (smallestRingOfAtom[x] === 0 || r < smallestRingOfAtom[x]) smallestRingOfAtom[x] = r;
-    }
+    if (smallestRingOfAtom[a] === 0 || r < smallestRingOfAtom[a]) smallestRingOfAtom[a] = r;
+    if (smallestRingOfAtom[b] === 0 || r < smallestRingOfAtom[b]) smallestRingOfAtom[b] = r;
   }
-  const atomInRing = smallestRingOfAtom.map((x) => x > 0);
-  const rings = bondInRing.some((x) => x) ? minimumCycleBasis(s, g, bondInRing, smallestRingOfBond) : [];
+  const atomInRing = new Array(n);
+  for (let i = 0; i < n; i++) atomInRing[i] = smallestRingOfAtom[i] > 0;
+  if (!anyRing) {
+    return { rings: [], atomInRing, bondInRing, smallestRingOfBond, smallestRingOfAtom, ringSystems: [] };
+  }
+  const systems = ringSystemsOf(s, n, bondInRing);
   return {
-    rings,
+    rings: minimumCycleBasis(s, g, bondInRing, smallestRingOfBond, systems),
     atomInRing,
     bondInRing,
     smallestRingOfBond,
     smallestRingOfAtom,
-    ringSystems: ringSystemsOf(s, n, bondInRing).systems
+    ringSystems: systems.systems
   };
 }
 function smallestRings(s, g, bridgeOf) {
+  const m = s.bonds.length;
+  if (isGraphOf(g, s)) {
+    const bridge = bridges(g, m);
+    const memo = memoOf(g);
+    if (memo && (bridgeOf === void 0 || bridgeOf === bridge)) {
+      if (memo.sizes && memo.bridge === bridge) return memo.sizes;
+      const sizes = ringSizes(s, g, bridge);
+      if (memo.bridge === bridge) memo.sizes = sizes;
+      return sizes;
+    }
+  }
+  return ringSizes(s, g, bridgeOf ?? bridges(g, m));
+}
+function ringSizes(s, g, bridge) {
   const n = g.n;
-  const out = new Array(s.bonds.length).fill(0);
-  const dist = new Int32Array(n).fill(-1);
-  const queue = new Int32Array(n);
-  const bridge = bridgeOf ?? bridges(g, s.bonds.length);
-  for (let k = 0; k < s.bonds.length; k++) {
+  const m = s.bonds.length;
+  const out = new Array(m).fill(0);
+  const parent = new Int32Array(n);
+  for (let i = 0; i < n; i++) parent[i] = i;
+  const find = (x) => {
+    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+    return x;
+  };
+  const inRing = new Uint8Array(n);
+  let anyRing = false;
+  for (let k = 0; k < m; k++) {
     const { a, b } = s.bonds[k];
-    if (bridge[k] || a === b || a < 0 || b < 0 || a >= n || b >= n) continue;
+    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    anyRing = true;
+    inRing[a] = inRing[b] = 1;
+    const ra = find(a);
+    const rb = find(b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  if (!anyRing) return out;
+  const excess = new Int32Array(n);
+  for (let i = 0; i < n; i++) if (inRing[i]) excess[find(i)]++;
+  const atoms = excess.slice();
+  for (let k = 0; k < m; k++) {
+    const { a, b } = s.bonds[k];
+    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    excess[find(a)]--;
+  }
+  let dist = null;
+  let queue = null;
+  for (let k = 0; k < m; k++) {
+    const { a, b } = s.bonds[k];
+    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    const root = find(a);
+    if (excess[root] === 0) {
+      out[k] = atoms[root];
+      continue;
+    }
+    if (dist === null || queue === null) {
+      dist = new Int32Array(n).fill(-1);
+      queue = new Int32Array(n);
+    }
     let head2 = 0;
     let tail = 0;
-    const seen = [a];
     dist[a] = 0;
     queue[tail++] = a;
     let found = 0;
@@ -778,34 +972,45 @@ function smallestRings(s, g, bridgeOf) {
         const v = nb[i];
         if (dist[v] >= 0) continue;
         dist[v] = dist[u] + 1;
-        seen.push(v);
+        queue[tail++] = v;
         if (v === b) {
           found = dist[v] + 1;
           break;
         }
-        queue[tail++] = v;
       }
     }
     out[k] = found;
-    for (const v of seen) dist[v] = -1;
+    for (let t = 0; t < tail; t++) dist[queue[t]] = -1;
   }
   return out;
 }
 function bridges(g, m, keep) {
+  if (keep) return bridgesOf(g, m, keep);
+  const memo = memoOf(g);
+  if (memo === null) return bridgesOf(g, m);
+  if (memo.bridge && memo.bridgeM === m) return memo.bridge;
+  const bridge = bridgesOf(g, m);
+  memo.bridge = bridge;
+  memo.bridgeM = m;
+  memo.sizes = void 0;
+  return bridge;
+}
+function bridgesOf(g, m, keep) {
   const n = g.n;
   const isBridge = new Uint8Array(m);
   const disc = new Int32Array(n).fill(-1);
   const low = new Int32Array(n);
   const parentBond = new Int32Array(n).fill(-1);
   const iter = new Int32Array(n);
-  const stack = [];
+  const stack = new Int32Array(n);
+  let sp = 0;
   let time = 0;
   for (let root = 0; root < n; root++) {
     if (disc[root] >= 0) continue;
     disc[root] = low[root] = time++;
-    stack.push(root);
-    while (stack.length) {
-      const u = stack[stack.length - 1];
+    stack[sp++] = root;
+    while (sp > 0) {
+      const u = stack[sp - 1];
       if (iter[u] < g.nbrs[u].length) {
         const i = iter[u]++;
         const v = g.nbrs[u][i];
@@ -814,12 +1019,12 @@ function bridges(g, m, keep) {
         if (disc[v] < 0) {
           disc[v] = low[v] = time++;
           parentBond[v] = k;
-          stack.push(v);
+          stack[sp++] = v;
         } else if (disc[v] < low[u]) low[u] = disc[v];
       } else {
-        stack.pop();
-        if (stack.length) {
-          const p = stack[stack.length - 1];
+        sp--;
+        if (sp > 0) {
+          const p = stack[sp - 1];
           if (low[u] < low[p]) low[p] = low[u];
           if (low[u] > disc[p]) isBridge[parentBond[u]] = 1;
         }
@@ -846,22 +1051,75 @@ function aromaticBonds(s, rings, g) {
   const donation = new Int8Array(s.atoms.length).fill(NOT_PI);
   for (let i = 0; i < s.atoms.length; i++)
     if (info.atomInRing[i]) donation[i] = piElectrons(s, graph, info, i);
+  const R = info.rings.length;
   const ringBonds3 = info.rings.map((r) => ringBondList(r, graph));
   const aromaticRing = info.rings.map((r) => huckel(r, donation));
-  for (let i = 0; i < info.rings.length; i++) {
-    for (let j = i + 1; j < info.rings.length; j++) {
-      if (aromaticRing[i] && aromaticRing[j]) continue;
-      const shared = ringBonds3[i].filter((k) => ringBonds3[j].includes(k));
-      if (shared.length !== 1) continue;
-      const atoms = [.../* @__PURE__ */ new Set([...info.rings[i], ...info.rings[j]])];
-      if (atoms.length !== info.rings[i].length + info.rings[j].length - 2) continue;
-      if (huckel(atoms, donation)) aromaticRing[i] = aromaticRing[j] = true;
+  if (R > 1 && info.rings.some((r) => r.length < 3)) {
+    for (let i = 0; i < R; i++) {
+      for (let j = i + 1; j < R; j++) {
+        if (aromaticRing[i] && aromaticRing[j]) continue;
+        const shared2 = ringBonds3[i].filter((k) => ringBonds3[j].includes(k));
+        if (shared2.length !== 1) continue;
+        const atoms = [.../* @__PURE__ */ new Set([...info.rings[i], ...info.rings[j]])];
+        if (atoms.length !== info.rings[i].length + info.rings[j].length - 2) continue;
+        if (huckel(atoms, donation)) aromaticRing[i] = aromaticRing[j] = true;
+      }
+    }
+  } else if (R > 1) {
+    const ringsOfBond = /* @__PURE__ */ new Map();
+    for (let i = 0; i < R; i++) {
+      for (const k of ringBonds3[i]) {
+        const list = ringsOfBond.get(k);
+        if (list) list.push(i);
+        else ringsOfBond.set(k, [i]);
+      }
+    }
+    let shared2 = null;
+    for (const list of ringsOfBond.values()) {
+      if (list.length < 2) continue;
+      shared2 ??= new Int32Array(R * R);
+      for (let x = 0; x < list.length; x++)
+        for (let y = x + 1; y < list.length; y++) {
+          const i = list[x] < list[y] ? list[x] : list[y];
+          const j = list[x] < list[y] ? list[y] : list[x];
+          if (i !== j) shared2[i * R + j]++;
+        }
+    }
+    if (shared2) {
+      const mark = new Uint8Array(s.atoms.length);
+      for (let i = 0; i < R; i++) {
+        for (let j = i + 1; j < R; j++) {
+          if (shared2[i * R + j] !== 1 || aromaticRing[i] && aromaticRing[j]) continue;
+          if (envelopeHuckel(info.rings[i], info.rings[j], donation, mark))
+            aromaticRing[i] = aromaticRing[j] = true;
+        }
+      }
     }
   }
   aromaticRing.forEach((yes, r) => {
     if (yes) for (const k of ringBonds3[r]) out[k] = true;
   });
   return out;
+}
+function envelopeHuckel(p, q, donation, mark) {
+  let common = 0;
+  let pi = true;
+  let sum = 0;
+  for (const a of p) {
+    mark[a] = 1;
+    if (donation[a] === NOT_PI) pi = false;
+    sum += donation[a];
+  }
+  for (const a of q) {
+    if (mark[a] === 1) {
+      common++;
+      continue;
+    }
+    if (donation[a] === NOT_PI) pi = false;
+    sum += donation[a];
+  }
+  for (const a of p) mark[a] = 0;
+  return common === 2 && pi && sum % 4 === 2;
 }
 function huckel(atoms, donation) {
   let sum = 0;
@@ -1026,8 +1284,13 @@ function rankKeys(keys, n) {
 }
 function rankOne(values, n) {
   const sorted = new Float64Array(n);
-  for (let i = 0; i < n; i++) sorted[i] = values[i];
-  sorted.sort();
+  let nan = false;
+  for (let i = 0; i < n; i++) {
+    sorted[i] = values[i];
+    if (values[i] !== values[i]) nan = true;
+  }
+  if (nan) sorted.sort();
+  else heapSort(sorted, n);
   let u = 0;
   for (let i = 0; i < n; i++) if (i === 0 || sorted[i] !== sorted[u - 1]) sorted[u++] = sorted[i];
   const out = new Int32Array(n);
@@ -1043,6 +1306,27 @@ function rankOne(values, n) {
     out[i] = lo;
   }
   return out;
+}
+function heapSort(a, n) {
+  for (let i = (n >> 1) - 1; i >= 0; i--) siftDown(a, i, n);
+  for (let end = n - 1; end > 0; end--) {
+    const x = a[0];
+    a[0] = a[end];
+    a[end] = x;
+    siftDown(a, 0, end);
+  }
+}
+function siftDown(a, i, n) {
+  const x = a[i];
+  for (; ; ) {
+    let c = 2 * i + 1;
+    if (c >= n) break;
+    if (c + 1 < n && a[c + 1] > a[c]) c++;
+    if (!(a[c] > x)) break;
+    a[i] = a[c];
+    i = c;
+  }
+  a[i] = x;
 }
 function partitionOf(rank) {
   const n = rank.length;
@@ -1075,6 +1359,31 @@ function cellIndex(p) {
   }
   return out;
 }
+function sortPositions(a) {
+  if (a.length > 32) {
+    a.sort(ascending);
+    return;
+  }
+  for (let t = 1; t < a.length; t++) {
+    const x = a[t];
+    let j = t;
+    while (j > 0 && a[j - 1] > x) {
+      a[j] = a[j - 1];
+      j--;
+    }
+    a[j] = x;
+  }
+}
+function refineOnce(g, p) {
+  let r = shared;
+  shared = null;
+  if (r === null || r.capacity < g.n) r = new Refiner(g, 0, Math.max(g.n, 64));
+  else r.g = g;
+  const ok = r.refine(p);
+  r.g = EMPTY;
+  shared = r;
+  return ok;
+}
 function swapTo(p, v, at2) {
   const from = p.pos[v];
   const w = p.lab[at2];
@@ -1083,7 +1392,7 @@ function swapTo(p, v, at2) {
   p.lab[at2] = v;
   p.pos[v] = at2;
 }
-var AROMATIC_CODE, WEIGHT, ascending, Refiner;
+var AROMATIC_CODE, WEIGHT, ascending, Refiner, shared, EMPTY;
 var init_refine = __esm({
   "src/chem/graph/refine.ts"() {
     "use strict";
@@ -1091,10 +1400,11 @@ var init_refine = __esm({
     WEIGHT = [0, 1, 1 << 6, 1 << 12, 1 << 18, 1 << 24, 1 << 27];
     ascending = (x, y) => x - y;
     Refiner = class {
-      constructor(g, split = 0) {
+      constructor(g, split = 0, capacity = g.n) {
         this.g = g;
         this.split = split;
-        const n = g.n;
+        this.capacity = capacity;
+        const n = capacity;
         this.count = new Int32Array(n);
         this.touched = new Int32Array(n);
         this.queue = new Int32Array(n + 1);
@@ -1106,6 +1416,7 @@ var init_refine = __esm({
       }
       g;
       split;
+      capacity;
       count;
       touched;
       queue;
@@ -1181,7 +1492,7 @@ var init_refine = __esm({
             if (cellHits[s] === 0) cells.push(s);
             cellHits[s]++;
           }
-          if (cells.length > 1) cells.sort(ascending);
+          if (cells.length > 1) sortPositions(cells);
           let off = 0;
           for (const s of cells) {
             cellBase[s] = off;
@@ -1239,9 +1550,20 @@ var init_refine = __esm({
         let end = s + L;
         for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
         this.work += k;
-        const buf = this.sortBuf.subarray(0, k);
+        const buf = this.sortBuf;
         for (let t = 0; t < k; t++) buf[t] = count2[lab[end + t]] * 4194304 + lab[end + t];
-        if (k > 1) buf.sort();
+        if (k > 16) buf.subarray(0, k).sort();
+        else {
+          for (let t = 1; t < k; t++) {
+            const x = buf[t];
+            let j = t;
+            while (j > 0 && buf[j - 1] > x) {
+              buf[j] = buf[j - 1];
+              j--;
+            }
+            buf[j] = x;
+          }
+        }
         for (let t = 0; t < k; t++) {
           const v = buf[t] % 4194304;
           lab[end + t] = v;
@@ -1286,50 +1608,14 @@ var init_refine = __esm({
         return 2 * a === L;
       }
     };
+    shared = null;
+    EMPTY = { n: 0, offs: new Int32Array(1), adj: new Int32Array(0), code: new Int32Array(0) };
   }
 });
 
 // src/chem/graph/csr.ts
 function bondCode(s, k, aromatic) {
   return aromatic?.[k] ? AROMATIC_CODE : s.bonds[k].order;
-}
-function valid(s, k) {
-  const { a, b } = s.bonds[k];
-  const n = s.atoms.length;
-  return a >= 0 && b >= 0 && a < n && b < n && a !== b;
-}
-function csrOf(parts) {
-  let n = 0;
-  for (const p of parts) n += p.s.atoms.length;
-  const offs = new Int32Array(n + 1);
-  let base = 0;
-  for (const { s } of parts) {
-    for (let k = 0; k < s.bonds.length; k++) {
-      if (!valid(s, k)) continue;
-      offs[base + s.bonds[k].a + 1]++;
-      offs[base + s.bonds[k].b + 1]++;
-    }
-    base += s.atoms.length;
-  }
-  for (let i = 0; i < n; i++) offs[i + 1] += offs[i];
-  const adj = new Int32Array(offs[n]);
-  const code = new Int32Array(offs[n]);
-  const fill = offs.slice(0, n);
-  base = 0;
-  for (const { s, aromatic } of parts) {
-    for (let k = 0; k < s.bonds.length; k++) {
-      if (!valid(s, k)) continue;
-      const a = base + s.bonds[k].a;
-      const b = base + s.bonds[k].b;
-      const c = bondCode(s, k, aromatic);
-      adj[fill[a]] = b;
-      code[fill[a]++] = c;
-      adj[fill[b]] = a;
-      code[fill[b]++] = c;
-    }
-    base += s.atoms.length;
-  }
-  return { n, offs, adj, code };
 }
 var init_csr = __esm({
   "src/chem/graph/csr.ts"() {
@@ -1342,52 +1628,66 @@ var init_csr = __esm({
 function refinedPartition(p) {
   if (!p.refined) {
     const part = partitionOf(rankKeys([p.inv], p.inv.length));
-    new Refiner(p.csr).refine(part);
+    refineOnce(p.csr, part);
     p.refined = part;
   }
   return p.refined;
 }
 function prepare(s, aromatic) {
   const sum = checksum(s, aromatic);
-  const entries = cache.get(s);
-  const hit = entries?.find((e) => e.aromatic === aromatic && e.sum === sum);
-  if (hit) return hit.prepared;
+  for (let i = cache.length - 1; i >= 0; i--) {
+    const e = cache[i];
+    if (e.s === s && e.aromatic === aromatic && e.sum === sum) return e.prepared;
+  }
   const prepared = prepareFresh(s, aromatic);
-  if (entries) {
-    if (entries.length >= 4) entries.shift();
-    entries.push({ sum, aromatic, prepared });
-  } else cache.set(s, [{ sum, aromatic, prepared }]);
+  if (cache.length >= RECENT2) cache.shift();
+  cache.push({ s, sum, aromatic, prepared });
   return prepared;
 }
 function checksum(s, aromatic) {
   let h = 2654435769 ^ s.atoms.length;
-  const mix = (x) => {
-    h = Math.imul(h ^ x, 16777619);
-  };
   for (const a of s.atoms) {
-    mix(a.atomicNumber);
-    mix(a.charge);
-    mix(a.hCount);
-    mix(a.isotope ?? -1);
-    mix(a.radical);
+    h = mix(h, a.atomicNumber);
+    h = mix(h, a.charge);
+    h = mix(h, a.hCount);
+    h = mix(h, a.isotope ?? -1);
+    h = mix(h, a.radical);
   }
-  mix(s.bonds.length);
+  h = mix(h, s.bonds.length);
   for (const b of s.bonds) {
-    mix(b.a);
-    mix(b.b);
-    mix(b.order);
+    h = mix(h, b.a);
+    h = mix(h, b.b);
+    h = mix(h, b.order);
   }
-  if (aromatic) for (let k = 0; k < aromatic.length; k++) mix(aromatic[k] ? 1 : 2);
+  if (aromatic) for (let k = 0; k < aromatic.length; k++) h = mix(h, aromatic[k] ? 1 : 2);
   return h;
+}
+function mix(h, x) {
+  return Math.imul(h ^ x, 16777619);
 }
 function prepareFresh(s, aromatic) {
   const g = buildGraph(s);
   const bridge = bridges(g, s.bonds.length);
   const arom = aromatic ?? conjugatedRingBonds(s, g, bridge);
   const inv = invariantsWith(s, arom, g, bridge);
-  return { s, g, aromatic: arom, inv, csr: csrOf([{ s, aromatic: arom }]) };
+  return { s, g, aromatic: arom, inv, csr: csrOfGraph(s, g, arom) };
 }
-var cache;
+function csrOfGraph(s, g, aromatic) {
+  const n = g.n;
+  const offs = new Int32Array(n + 1);
+  for (let i = 0; i < n; i++) offs[i + 1] = offs[i] + g.nbrs[i].length;
+  const adj = new Int32Array(offs[n]);
+  const code = new Int32Array(offs[n]);
+  for (let i = 0; i < n; i++) {
+    const nb = g.nbrs[i];
+    const bb = g.nbrBonds[i];
+    const at2 = offs[i];
+    adj.set(nb, at2);
+    for (let t = 0; t < bb.length; t++) code[at2 + t] = bondCode(s, bb[t], aromatic);
+  }
+  return { n, offs, adj, code };
+}
+var RECENT2, cache;
 var init_prepared = __esm({
   "src/chem/graph/prepared.ts"() {
     "use strict";
@@ -1397,7 +1697,8 @@ var init_prepared = __esm({
     init_csr();
     init_refine();
     init_rings();
-    cache = /* @__PURE__ */ new WeakMap();
+    RECENT2 = 8;
+    cache = [];
   }
 });
 
@@ -1408,7 +1709,7 @@ function equivalenceClasses(s, opts = {}) {
   const prep = prepare(s, opts.aromatic);
   if (!opts.extra) return cellIndex(refinedPartition(prep));
   const p = partitionOf(rankKeys([prep.inv, opts.extra], n));
-  new Refiner(prep.csr).refine(p);
+  refineOnce(prep.csr, p);
   return cellIndex(p);
 }
 var init_classes = __esm({
@@ -1491,7 +1792,7 @@ function singlePartition(pa, colour, n) {
     }
     if (!constant) {
       const p = partitionOf(rankKeys([pa.inv, colour], n));
-      new Refiner(pa.csr).refine(p);
+      refineOnce(pa.csr, p);
       return p;
     }
   }
@@ -1558,7 +1859,7 @@ function isomorphism(a, b, maxNodes) {
 }
 function automorphisms(s, opts) {
   const colour = opts.colour ?? opts.colourA;
-  const aromatic = opts.aromaticA ?? conjugatedRingBonds(s);
+  const aromatic = opts.aromaticA;
   return findIsomorphisms(s, s, {
     ...opts,
     colourA: colour,
@@ -1577,7 +1878,6 @@ var NONE, FOUND, STOP, Search;
 var init_isomorphism = __esm({
   "src/chem/graph/isomorphism.ts"() {
     "use strict";
-    init_aromaticity();
     init_prepared();
     init_refine();
     NONE = 0;
@@ -1707,9 +2007,9 @@ function molecularFormula(s, atoms) {
   let charge = 0;
   let h = 0;
   let wildcards = 0;
-  const list = atoms ?? s.atoms.map((_, i) => i);
-  for (const i of list) {
-    const a = s.atoms[i];
+  const total = atoms ? atoms.length : s.atoms.length;
+  for (let t = 0; t < total; t++) {
+    const a = s.atoms[atoms ? atoms[t] : t];
     if (!a) continue;
     h += a.hCount;
     charge += a.charge;
@@ -1718,23 +2018,38 @@ function molecularFormula(s, atoms) {
     else counts.set(a.element, (counts.get(a.element) ?? 0) + 1);
   }
   if (h > 0) counts.set("H", h);
-  const hasC = counts.has("C");
-  const order = [...counts.keys()].sort((x, y) => {
-    if (hasC) {
-      const rank = (e) => e === "C" ? 0 : e === "H" ? 1 : 2;
-      const d = rank(x) - rank(y);
-      if (d !== 0) return d;
-    }
-    return x < y ? -1 : x > y ? 1 : 0;
-  });
   let out = "";
-  for (const e of order) {
-    const c = counts.get(e);
-    out += c === 1 ? e : `${e}${c}`;
+  const add = (e, c2) => {
+    out += c2 === 1 ? e : `${e}${c2}`;
+  };
+  const c = counts.get("C");
+  if (c !== void 0) {
+    add("C", c);
+    const hc = counts.get("H");
+    if (hc !== void 0) add("H", hc);
+    const rest = [];
+    for (const e of counts.keys()) if (e !== "C" && e !== "H") rest.push(e);
+    sortSymbols(rest);
+    for (const e of rest) add(e, counts.get(e));
+  } else {
+    const order = [...counts.keys()];
+    sortSymbols(order);
+    for (const e of order) add(e, counts.get(e));
   }
   if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
   if (charge !== 0) out += `${Math.abs(charge) === 1 ? "" : Math.abs(charge)}${charge > 0 ? "+" : "-"}`;
   return out;
+}
+function sortSymbols(a) {
+  for (let t = 1; t < a.length; t++) {
+    const x = a[t];
+    let j = t;
+    while (j > 0 && a[j - 1] > x) {
+      a[j] = a[j - 1];
+      j--;
+    }
+    a[j] = x;
+  }
 }
 function constitutionKey(s) {
   const n = s.atoms.length;
@@ -1746,24 +2061,44 @@ function constitutionKey(s) {
   const cell = cellIndex(p);
   let h1 = 2166136261;
   let h2 = 16777619 ^ n;
-  const mix = (x) => {
-    h1 = Math.imul(h1 ^ (x | 0), 16777619);
-    h2 = Math.imul(h2 ^ (x | 0), 1540483477);
-    h2 ^= h2 >>> 13;
-  };
+  let x = 0;
   const nb = [];
   for (let s0 = 0; s0 < n; s0 += p.len[s0]) {
     const v = p.lab[s0];
-    mix(p.len[s0]);
-    mix(Math.floor(inv[v] / 4294967296));
-    mix(inv[v] % 4294967296);
-    nb.length = 0;
-    for (let e = g.offs[v]; e < g.offs[v + 1]; e++) nb.push(cell[g.adj[e]] * 8 + g.code[e]);
-    nb.sort((x, y) => x - y);
-    mix(nb.length);
-    for (const x of nb) mix(x);
+    x = p.len[s0] | 0;
+    h1 = Math.imul(h1 ^ x, 16777619);
+    h2 = Math.imul(h2 ^ x, 1540483477);
+    h2 ^= h2 >>> 13;
+    x = Math.floor(inv[v] / 4294967296) | 0;
+    h1 = Math.imul(h1 ^ x, 16777619);
+    h2 = Math.imul(h2 ^ x, 1540483477);
+    h2 ^= h2 >>> 13;
+    x = inv[v] % 4294967296 | 0;
+    h1 = Math.imul(h1 ^ x, 16777619);
+    h2 = Math.imul(h2 ^ x, 1540483477);
+    h2 ^= h2 >>> 13;
+    let d = 0;
+    for (let e = g.offs[v]; e < g.offs[v + 1]; e++) {
+      const c = cell[g.adj[e]] * 8 + g.code[e];
+      let j = d++;
+      while (j > 0 && nb[j - 1] > c) {
+        nb[j] = nb[j - 1];
+        j--;
+      }
+      nb[j] = c;
+    }
+    x = d;
+    h1 = Math.imul(h1 ^ x, 16777619);
+    h2 = Math.imul(h2 ^ x, 1540483477);
+    h2 ^= h2 >>> 13;
+    for (let j = 0; j < d; j++) {
+      x = nb[j] | 0;
+      h1 = Math.imul(h1 ^ x, 16777619);
+      h2 = Math.imul(h2 ^ x, 1540483477);
+      h2 ^= h2 >>> 13;
+    }
   }
-  const hex = (x) => (x >>> 0).toString(16).padStart(8, "0");
+  const hex = (x2) => (x2 >>> 0).toString(16).padStart(8, "0");
   return `${formula}/${hex(h1)}${hex(h2)}`;
 }
 var init_key = __esm({
@@ -1948,7 +2283,7 @@ var init_molfile_geometry = __esm({
 
 // src/chem/read/stereo-2d.ts
 function stereoFrom2d(s, adj, warnings, atomLines) {
-  const out = [];
+  const out = objectList();
   const wavyAt = new Uint8Array(s.atoms.length);
   const wavyTouch = new Uint8Array(s.atoms.length);
   const wedgedFrom = new Uint8Array(s.atoms.length);
@@ -2222,6 +2557,7 @@ var MIN_VOLUME, MIN_STEREO_RING, PLAIN_LEAN, MIN_SIDE;
 var init_stereo_2d = __esm({
   "src/chem/read/stereo-2d.ts"() {
     "use strict";
+    init_make();
     init_types();
     init_graph();
     init_molfile_graph();
@@ -2235,7 +2571,7 @@ var init_stereo_2d = __esm({
 
 // src/chem/read/stereo-3d.ts
 function stereoFrom3d(s, adj, _warnings, _atomLines) {
-  const out = [];
+  const out = objectList();
   const pos = (i) => s.atoms[i].coords;
   const wavyAt = new Uint8Array(s.atoms.length);
   const wavyTouch = new Uint8Array(s.atoms.length);
@@ -2363,6 +2699,7 @@ var MIN_VOLUME2, MIN_SIN;
 var init_stereo_3d = __esm({
   "src/chem/read/stereo-3d.ts"() {
     "use strict";
+    init_make();
     init_types();
     init_molfile_graph();
     init_molfile_geometry();
@@ -2430,16 +2767,16 @@ function finishMolecule(raw2) {
     }
     if (c[0] !== 0 || c[1] !== 0) dimension = 2;
   }
-  const structure = {
+  const structure = newStructure(
     atoms,
     bonds,
-    stereo: [],
-    groups: raw2.groups,
-    chiralFlag: raw2.chiralFlag,
-    title: raw2.title,
-    properties: {},
+    objectList(),
+    raw2.groups,
+    raw2.chiralFlag,
+    raw2.title,
+    {},
     dimension
-  };
+  );
   if (dimension === 3) structure.stereo = stereoFrom3d(structure, adj, warnings, raw2.atomLines);
   else if (dimension === 2) structure.stereo = stereoFrom2d(structure, adj, warnings, raw2.atomLines);
   else if (bonds.some((b) => b.wedge === "up" || b.wedge === "down") && atoms.length > 1) {
@@ -2459,6 +2796,7 @@ var init_molfile_build = __esm({
     init_molfile_kekulize();
     init_stereo_2d();
     init_stereo_3d();
+    init_make();
   }
 });
 
@@ -2674,11 +3012,12 @@ function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
       });
     }
   }
-  return { bond: { a: a - 1, b: b - 1, order, aromatic, wedge } };
+  return { bond: newBond(a - 1, b - 1, order, aromatic, wedge) };
 }
 var init_molfile_bond = __esm({
   "src/chem/read/molfile-bond.ts"() {
     "use strict";
+    init_make();
   }
 });
 
@@ -2760,11 +3099,11 @@ function parseV3000(lines, idx, end, firstLine, title) {
   if (endLine === -1)
     return fail("molfile-missing-end", 'the V3000 molfile ends without its "M  END" line', lineNo(end));
   const warnings = [];
-  const atoms = [];
+  const atoms = objectList();
   const atomLines = [];
   const valences = [];
-  const bonds = [];
-  const groups = [];
+  const bonds = objectList();
+  const groups = objectList();
   const indexOf = /* @__PURE__ */ new Map();
   const seenBonds = /* @__PURE__ */ new Set();
   let chiralFlag = false;
@@ -2896,7 +3235,7 @@ function parseV3000(lines, idx, end, firstLine, title) {
       }
       const type = m[1] === "ABS" ? "abs" : m[1] === "RAC" ? "and" : "or";
       const id = type === "abs" ? 0 : Number(m[2] || "0");
-      groups.push({ type, id, atoms: members });
+      groups.push(newGroup(type, id, members));
     }
   }
   if (block2 !== null)
@@ -2989,18 +3328,18 @@ function readAtom(tokens2, line, position, indexOf, warnings) {
   }
   indexOf.set(index, position);
   return {
-    atom: {
-      element: el.element,
-      atomicNumber: el.atomicNumber,
+    atom: newAtom(
+      el.element,
+      el.atomicNumber,
       charge,
-      isotope: mass > 0 ? mass : el.isotope,
-      hCount: 0,
-      aromatic: false,
-      radical: rad === 2 ? 1 : rad === 1 || rad === 3 ? 2 : 0,
-      mapNumber: Number.isInteger(map) && map > 0 ? map : null,
-      inputNumber: position + 1,
-      coords: [x, y, z]
-    },
+      mass > 0 ? mass : el.isotope,
+      0,
+      false,
+      rad === 2 ? 1 : rad === 1 || rad === 3 ? 2 : 0,
+      Number.isInteger(map) && map > 0 ? map : null,
+      position + 1,
+      coords3(x, y, z)
+    ),
     // VAL=-1 means zero valence; HCOUNT is a query property and does not set hydrogens.
     valence: val === -1 ? 0 : val > 0 ? val : null
   };
@@ -3011,6 +3350,7 @@ var init_molfile_v3000 = __esm({
     init_molfile_build();
     init_molfile_fields();
     init_molfile_bond();
+    init_make();
   }
 });
 
@@ -3070,7 +3410,7 @@ function parseMolfileLines(lines, start, end, firstLine) {
     });
   }
   if (!(nLists >= 0)) nLists = 0;
-  const atoms = [];
+  const atoms = objectList();
   const atomLines = [];
   const valences = [];
   let idx = start + 4;
@@ -3168,22 +3508,24 @@ function parseMolfileLines(lines, start, end, firstLine) {
         });
       } else isotope = m + massDiff;
     }
-    atoms.push({
-      element: el.element,
-      atomicNumber: el.atomicNumber,
-      charge,
-      isotope,
-      hCount: 0,
-      aromatic: false,
-      radical,
-      mapNumber: map > 0 ? map : null,
-      inputNumber: i + 1,
-      coords: [x, y, z]
-    });
+    atoms.push(
+      newAtom(
+        el.element,
+        el.atomicNumber,
+        charge,
+        isotope,
+        0,
+        false,
+        radical,
+        map > 0 ? map : null,
+        i + 1,
+        coords3(x, y, z)
+      )
+    );
     valences.push(valence >= 1 && valence <= 14 ? valence : valence === 15 ? 0 : null);
     atomLines.push(lineNo(idx));
   }
-  const bonds = [];
+  const bonds = objectList();
   const seen = /* @__PURE__ */ new Set();
   for (let i = 0; i < nBonds; i++, idx++) {
     if (idx >= end)
@@ -3231,7 +3573,7 @@ function parseMolfileLines(lines, start, end, firstLine) {
     bonds,
     valences,
     atomLines,
-    groups: [],
+    groups: objectList(),
     chiralFlag: chiral === 1,
     title,
     warnings
@@ -3330,6 +3672,7 @@ var init_molfile = __esm({
     init_molfile_fields();
     init_molfile_v3000();
     init_molfile_bond();
+    init_make();
     CHARGE_CODE = [0, 3, 2, 1, 0, -1, -2, -3];
   }
 });
@@ -3343,7 +3686,7 @@ function fail3(code, message, offset) {
 }
 function parseCxExtension(s, start, atomCount) {
   const n = s.length;
-  const groups = [];
+  const groups = objectList();
   let i = start + 1;
   for (; ; ) {
     if (i >= n) return fail3("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
@@ -3400,7 +3743,7 @@ function parseCxExtension(s, start, atomCount) {
       if (same) {
         for (const a of atoms) if (!same.atoms.includes(a)) same.atoms.push(a);
       } else {
-        groups.push({ type, id, atoms });
+        groups.push(newGroup(type, id, atoms));
       }
       i = j;
       continue;
@@ -3439,12 +3782,38 @@ function skipField(s, start) {
 var init_cxsmiles = __esm({
   "src/chem/read/cxsmiles.ts"() {
     "use strict";
+    init_make();
   }
 });
 
 // src/chem/read/kekulize.ts
+function reserveAtoms(atoms) {
+  if (atoms > capA || capA > 1 << 16) {
+    capA = Math.max(atoms, 64);
+    LOCAL = new Int32Array(capA);
+  }
+}
+function reserveGraph(vertices, entries) {
+  if (vertices + 2 > capV || capV > 1 << 16) {
+    capV = Math.max(vertices + 2, 64);
+    DEG = new Int32Array(capV);
+    START = new Int32Array(capV);
+    FILL = new Int32Array(capV);
+    MATCH = new Int32Array(capV);
+    BUCKET = new Int32Array(capV);
+    BY_DEGREE = new Int32Array(capV);
+    COMP = new Int32Array(capV);
+    POS = new Int32Array(capV);
+  }
+  if (entries > capE || capE > 1 << 17) {
+    capE = Math.max(entries, 128);
+    NB = new Int32Array(capE);
+    NB_BOND = new Int32Array(capE);
+  }
+}
 function kekulize(inp) {
-  const local = new Int32Array(inp.atomCount).fill(-1);
+  reserveAtoms(inp.atomCount);
+  const local = LOCAL.fill(-1, 0, inp.atomCount);
   const globalOf = [];
   for (let i = 0; i < inp.atomCount; i++) {
     if (inp.needsDouble[i]) {
@@ -3454,41 +3823,68 @@ function kekulize(inp) {
   }
   const m = globalOf.length;
   if (m === 0) return { ok: true, doubleBonds: [] };
-  const adj = Array.from({ length: m }, () => []);
-  const adjBond = Array.from({ length: m }, () => []);
-  for (const bi of inp.aromaticBonds) {
+  const bonds = inp.aromaticBonds;
+  reserveGraph(m, 2 * bonds.length);
+  const deg = DEG.fill(0, 0, m);
+  for (let k = 0; k < bonds.length; k++) {
+    const u = local[inp.bondA[bonds[k]]];
+    const v = local[inp.bondB[bonds[k]]];
+    if (u < 0 || v < 0) continue;
+    deg[u]++;
+    deg[v]++;
+  }
+  const start = START;
+  start[0] = 0;
+  for (let u = 0; u < m; u++) start[u + 1] = start[u] + deg[u];
+  const nb = NB;
+  const nbBond = NB_BOND;
+  const fill = FILL;
+  for (let u = 0; u < m; u++) fill[u] = start[u];
+  for (let k = 0; k < bonds.length; k++) {
+    const bi = bonds[k];
     const u = local[inp.bondA[bi]];
     const v = local[inp.bondB[bi]];
     if (u < 0 || v < 0) continue;
-    adj[u].push(v);
-    adjBond[u].push(bi);
-    adj[v].push(u);
-    adjBond[v].push(bi);
+    nb[fill[u]] = v;
+    nbBond[fill[u]++] = bi;
+    nb[fill[v]] = u;
+    nbBond[fill[v]++] = bi;
   }
-  const match = new Int32Array(m).fill(-1);
-  const byDegree = Array.from({ length: m }, (_, i) => i).sort((x, y) => adj[x].length - adj[y].length);
-  for (const v of byDegree) {
+  const match = MATCH.fill(-1, 0, m);
+  let maxDeg = 0;
+  for (let u = 0; u < m; u++) if (deg[u] > maxDeg) maxDeg = deg[u];
+  const bucket = BUCKET.fill(0, 0, maxDeg + 2);
+  for (let u = 0; u < m; u++) bucket[deg[u] + 1]++;
+  for (let d = 0; d <= maxDeg; d++) bucket[d + 1] += bucket[d];
+  const byDegree = BY_DEGREE;
+  for (let u = 0; u < m; u++) byDegree[bucket[deg[u]]++] = u;
+  for (let k = 0; k < m; k++) {
+    const v = byDegree[k];
     if (match[v] !== -1) continue;
     let best = -1;
-    for (const u of adj[v]) {
-      if (match[u] === -1 && (best === -1 || adj[u].length < adj[best].length)) best = u;
+    for (let e = start[v]; e < start[v + 1]; e++) {
+      const u = nb[e];
+      if (match[u] === -1 && (best === -1 || deg[u] < deg[best])) best = u;
     }
     if (best !== -1) {
       match[v] = best;
       match[best] = v;
     }
   }
-  const comp = new Int32Array(m).fill(-1);
-  const pos = new Int32Array(m);
+  const comp = COMP.fill(-1, 0, m);
+  const pos = POS;
+  const members = [];
   for (let s0 = 0; s0 < m; s0++) {
     if (comp[s0] !== -1) continue;
-    const members = [s0];
+    members.length = 0;
+    members.push(s0);
     comp[s0] = s0;
     let exposed = false;
     for (let h = 0; h < members.length; h++) {
       const u = members[h];
       if (match[u] === -1) exposed = true;
-      for (const w of adj[u]) {
+      for (let e = start[u]; e < start[u + 1]; e++) {
+        const w = nb[e];
         if (comp[w] === -1) {
           comp[w] = s0;
           members.push(w);
@@ -3497,7 +3893,11 @@ function kekulize(inp) {
     }
     if (!exposed) continue;
     members.forEach((u, k) => pos[u] = k);
-    const subAdj = members.map((u) => adj[u].map((w) => pos[w]));
+    const subAdj = members.map((u) => {
+      const list = [];
+      for (let e = start[u]; e < start[u + 1]; e++) list.push(pos[nb[e]]);
+      return list;
+    });
     const subMatch = new Int32Array(members.length);
     members.forEach((u, k) => subMatch[k] = match[u] === -1 ? -1 : pos[match[u]]);
     for (let k = 0; k < members.length; k++) {
@@ -3509,7 +3909,10 @@ function kekulize(inp) {
   const doubleBonds2 = [];
   for (let u = 0; u < m; u++) {
     const v = match[u];
-    if (v > u) doubleBonds2.push(adjBond[u][adj[u].indexOf(v)]);
+    if (v <= u) continue;
+    let e = start[u];
+    while (nb[e] !== v) e++;
+    doubleBonds2.push(nbBond[e]);
   }
   return { ok: true, doubleBonds: doubleBonds2 };
 }
@@ -3587,9 +3990,24 @@ function augment(root, adj, match) {
   }
   return false;
 }
+var capA, capV, capE, LOCAL, DEG, START, FILL, MATCH, BUCKET, BY_DEGREE, COMP, POS, NB, NB_BOND;
 var init_kekulize = __esm({
   "src/chem/read/kekulize.ts"() {
     "use strict";
+    capA = 0;
+    capV = 0;
+    capE = 0;
+    LOCAL = new Int32Array(0);
+    DEG = new Int32Array(0);
+    START = new Int32Array(0);
+    FILL = new Int32Array(0);
+    MATCH = new Int32Array(0);
+    BUCKET = new Int32Array(0);
+    BY_DEGREE = new Int32Array(0);
+    COMP = new Int32Array(0);
+    POS = new Int32Array(0);
+    NB = new Int32Array(0);
+    NB_BOND = new Int32Array(0);
   }
 });
 
@@ -3620,37 +4038,37 @@ function readOrganicAtom(s, i) {
   const c = s.charCodeAt(i);
   switch (c) {
     case 66:
-      if (s.charCodeAt(i + 1) === 114) return { atom: raw("Br", 35, false, i), end: i + 2 };
-      return { atom: raw("B", 5, false, i), end: i + 1 };
+      if (s.charCodeAt(i + 1) === 114) return raw("Br", 35, false, i);
+      return raw("B", 5, false, i);
     case 67:
-      if (s.charCodeAt(i + 1) === 108) return { atom: raw("Cl", 17, false, i), end: i + 2 };
-      return { atom: raw("C", 6, false, i), end: i + 1 };
+      if (s.charCodeAt(i + 1) === 108) return raw("Cl", 17, false, i);
+      return raw("C", 6, false, i);
     case 78:
-      return { atom: raw("N", 7, false, i), end: i + 1 };
+      return raw("N", 7, false, i);
     case 79:
-      return { atom: raw("O", 8, false, i), end: i + 1 };
+      return raw("O", 8, false, i);
     case 80:
-      return { atom: raw("P", 15, false, i), end: i + 1 };
+      return raw("P", 15, false, i);
     case 83:
-      return { atom: raw("S", 16, false, i), end: i + 1 };
+      return raw("S", 16, false, i);
     case 70:
-      return { atom: raw("F", 9, false, i), end: i + 1 };
+      return raw("F", 9, false, i);
     case 73:
-      return { atom: raw("I", 53, false, i), end: i + 1 };
+      return raw("I", 53, false, i);
     case 98:
-      return { atom: raw("B", 5, true, i), end: i + 1 };
+      return raw("B", 5, true, i);
     case 99:
-      return { atom: raw("C", 6, true, i), end: i + 1 };
+      return raw("C", 6, true, i);
     case 110:
-      return { atom: raw("N", 7, true, i), end: i + 1 };
+      return raw("N", 7, true, i);
     case 111:
-      return { atom: raw("O", 8, true, i), end: i + 1 };
+      return raw("O", 8, true, i);
     case 112:
-      return { atom: raw("P", 15, true, i), end: i + 1 };
+      return raw("P", 15, true, i);
     case 115:
-      return { atom: raw("S", 16, true, i), end: i + 1 };
+      return raw("S", 16, true, i);
     case 42:
-      return { atom: raw("*", 0, false, i), end: i + 1 };
+      return raw("*", 0, false, i);
     default:
       return null;
   }
@@ -3809,100 +4227,129 @@ __export(smiles_parse_exports, {
 function err(code, message, offset) {
   return { error: { code, message, offset } };
 }
-function bondSymbol(c, offset) {
-  switch (c) {
-    case 45:
-      return { order: 1, aromatic: false, dir: 0, offset };
-    // -
-    case 61:
-      return { order: 2, aromatic: false, dir: 0, offset };
-    // =
-    case 35:
-      return { order: 3, aromatic: false, dir: 0, offset };
-    // #
-    case 36:
-      return { order: 4, aromatic: false, dir: 0, offset };
-    // $
-    case 58:
-      return { order: 1, aromatic: true, dir: 0, offset };
-    // :
-    case 47:
-      return { order: 1, aromatic: false, dir: 1, offset };
-    // /
-    case 92:
-      return { order: 1, aromatic: false, dir: -1, offset };
-    // \
-    default:
-      return null;
-  }
-}
 function isSpace(c) {
   return c === 32 || c === 9 || c === 10 || c === 13;
 }
+function ensure(len) {
+  if (len <= cap) return;
+  cap = Math.max(len, 2 * cap, 64);
+  evOwner = new Int32Array(2 * cap);
+  evAtom = new Int32Array(2 * cap);
+  evBond = new Int32Array(2 * cap);
+  evNext = new Int32Array(2 * cap);
+  firstEv = new Int32Array(cap);
+  lastEv = new Int32Array(cap);
+  bA = new Int32Array(cap);
+  bB = new Int32Array(cap);
+  bOrder = new Int32Array(cap);
+  bArom = new Int32Array(cap);
+  bExpl = new Int32Array(cap);
+  bDir = new Int32Array(cap);
+  bOff = new Int32Array(cap);
+  pre = new Int32Array(cap);
+  brAtom = new Int32Array(cap);
+  brOff = new Int32Array(cap);
+  brBefore = new Int32Array(cap);
+}
+function release() {
+  if (cap > 1 << 16) {
+    cap = 0;
+    ensure(64);
+  }
+}
 function parseSmilesGraph(s, start = 0) {
+  ensure(s.length - start + 1);
+  try {
+    return parseInto(s, start);
+  } finally {
+    RING_OPEN.fill(0);
+    release();
+  }
+}
+function parseInto(s, start) {
   const atoms = [];
-  const bonds = [];
-  const nbr = [];
-  const nbrBond = [];
-  const preceded = [];
-  const warnings = [];
-  const rings = [];
+  const warnings = objectList();
+  let big = null;
   let openRings = 0;
-  const branchStack = [];
+  let branchDepth = 0;
+  let nAtoms = 0;
+  let m = 0;
+  let ev = 0;
   let prev = -1;
-  let pending = null;
+  let pOrder = 0;
+  let pArom = 0;
+  let pDir = 0;
+  let pOff = 0;
   let i = start;
   const n = s.length;
-  const addBond = (a, b, p, offset) => {
-    const arom = p ? p.aromatic : atoms[a].aromatic && atoms[b].aromatic;
-    bonds.push({
-      a,
-      b,
-      order: p ? p.order : 1,
-      aromatic: arom,
-      explicit: p !== null,
-      dir: p ? p.dir : 0,
-      offset
-    });
-    return bonds.length - 1;
+  const entry = (owner, atom, bond) => {
+    evOwner[ev] = owner;
+    evAtom[ev] = atom;
+    evBond[ev] = bond;
+    evNext[ev] = -1;
+    if (lastEv[owner] < 0) firstEv[owner] = ev;
+    else evNext[lastEv[owner]] = ev;
+    lastEv[owner] = ev;
+    return ev++;
+  };
+  const addBond = (a, b, order, arom, dir, offset) => {
+    bA[m] = a;
+    bB[m] = b;
+    if (order === 0) {
+      bOrder[m] = 1;
+      bArom[m] = atoms[a].aromatic && atoms[b].aromatic ? 1 : 0;
+      bExpl[m] = 0;
+      bDir[m] = 0;
+    } else {
+      bOrder[m] = order;
+      bArom[m] = arom;
+      bExpl[m] = 1;
+      bDir[m] = dir;
+    }
+    bOff[m] = offset;
+    return m++;
   };
   while (i < n) {
     const c = s.charCodeAt(i);
     if (isSpace(c)) break;
-    let tok = null;
+    let atom;
+    let atomEnd = 0;
     if (c === 91) {
       const t = readBracketAtom(s, i);
       if ("error" in t) return t;
-      tok = t;
+      atom = t.atom;
+      atomEnd = t.end;
     } else {
-      tok = readOrganicAtom(s, i);
+      atom = readOrganicAtom(s, i);
+      if (atom !== null) atomEnd = i + atom.element.length;
     }
-    if (tok) {
-      const idx = atoms.length;
-      atoms.push(tok.atom);
-      nbr.push([]);
-      nbrBond.push([]);
+    if (atom !== null) {
+      const idx = nAtoms++;
+      atoms.push(atom);
+      firstEv[idx] = -1;
+      lastEv[idx] = -1;
       if (prev >= 0) {
-        const bi = addBond(prev, idx, pending, i);
-        nbr[prev].push(idx);
-        nbrBond[prev].push(bi);
-        nbr[idx].push(prev);
-        nbrBond[idx].push(bi);
-        preceded.push(true);
+        const bi = addBond(prev, idx, pOrder, pArom, pDir, i);
+        entry(prev, idx, bi);
+        entry(idx, prev, bi);
+        pre[idx] = 1;
       } else {
-        if (pending) return err("smiles-dangling-bond", "bond symbol with no atom before it", pending.offset);
-        preceded.push(false);
+        if (pOrder !== 0) return err("smiles-dangling-bond", "bond symbol with no atom before it", pOff);
+        pre[idx] = 0;
       }
-      pending = null;
+      pOrder = 0;
       prev = idx;
-      i = tok.end;
+      i = atomEnd;
       continue;
     }
-    const bs = bondSymbol(c, i);
-    if (bs) {
+    const order = bondSymbolOrder(c);
+    if (order !== 0) {
       if (prev < 0) return err("smiles-dangling-bond", "bond symbol with no atom before it", i);
-      if (pending) return err("smiles-dangling-bond", "two bond symbols in a row", i);
-      pending = bs;
+      if (pOrder !== 0) return err("smiles-dangling-bond", "two bond symbols in a row", i);
+      pOrder = order;
+      pArom = c === 58 ? 1 : 0;
+      pDir = c === 47 ? 1 : c === 92 ? -1 : 0;
+      pOff = i;
       i++;
       if (c === 92 && s.charCodeAt(i) === 92) {
         warnings.push({
@@ -3916,19 +4363,22 @@ function parseSmilesGraph(s, start = 0) {
     }
     if (c === 40) {
       if (prev < 0) return err("smiles-unmatched-parenthesis", "branch '(' with no atom before it", i);
-      if (pending) return err("smiles-dangling-bond", "bond symbol before '('", pending.offset);
+      if (pOrder !== 0) return err("smiles-dangling-bond", "bond symbol before '('", pOff);
       if (s.charCodeAt(i + 1) === 41) return err("smiles-empty-branch", "empty branch '()'", i);
-      branchStack.push({ atom: prev, offset: i, atomsBefore: atoms.length });
+      brAtom[branchDepth] = prev;
+      brOff[branchDepth] = i;
+      brBefore[branchDepth] = nAtoms;
+      branchDepth++;
       i++;
       continue;
     }
     if (c === 41) {
-      const top = branchStack.pop();
-      if (!top) return err("smiles-unmatched-parenthesis", "')' without a matching '('", i);
-      if (pending) return err("smiles-dangling-bond", "bond symbol before ')'", pending.offset);
-      if (atoms.length === top.atomsBefore)
-        return err("smiles-empty-branch", "branch with no atom in it", top.offset);
-      prev = top.atom;
+      if (branchDepth === 0) return err("smiles-unmatched-parenthesis", "')' without a matching '('", i);
+      branchDepth--;
+      if (pOrder !== 0) return err("smiles-dangling-bond", "bond symbol before ')'", pOff);
+      if (nAtoms === brBefore[branchDepth])
+        return err("smiles-empty-branch", "branch with no atom in it", brOff[branchDepth]);
+      prev = brAtom[branchDepth];
       i++;
       continue;
     }
@@ -3957,54 +4407,79 @@ function parseSmilesGraph(s, start = 0) {
         i++;
       }
       if (prev < 0) return err("smiles-dangling-ring-bond", "ring-closure number with no atom before it", at2);
-      const open = rings[num];
-      if (open === void 0) {
-        rings[num] = { atom: prev, slot: nbr[prev].length, bond: pending, offset: at2 };
+      const rec = num < 100 ? null : (big ??= /* @__PURE__ */ new Map()).get(num);
+      if (num < 100 ? RING_OPEN[num] === 0 : rec === void 0) {
+        const slot = entry(prev, -1, -1);
+        if (num < 100) {
+          RING_OPEN[num] = 1;
+          RING_ATOM[num] = prev;
+          RING_ENTRY[num] = slot;
+          RING_ORDER[num] = pOrder;
+          RING_AROM[num] = pArom;
+          RING_DIR[num] = pDir;
+          RING_OFF[num] = at2;
+        } else big.set(num, [prev, slot, pOrder, pArom, pDir, at2]);
         openRings++;
-        nbr[prev].push(-1);
-        nbrBond[prev].push(-1);
       } else {
-        rings[num] = void 0;
+        let a;
+        let slot;
+        let oOrder;
+        let oArom;
+        let oDir;
+        if (num < 100) {
+          RING_OPEN[num] = 0;
+          a = RING_ATOM[num];
+          slot = RING_ENTRY[num];
+          oOrder = RING_ORDER[num];
+          oArom = RING_AROM[num];
+          oDir = RING_DIR[num];
+        } else {
+          big.delete(num);
+          a = rec[0];
+          slot = rec[1];
+          oOrder = rec[2];
+          oArom = rec[3];
+          oDir = rec[4];
+        }
         openRings--;
-        const a = open.atom;
         if (a === prev)
           return err("smiles-ring-bond-to-self", `ring closure ${num} bonds an atom to itself`, at2);
-        if (nbr[prev].includes(a))
-          return err("smiles-duplicate-bond", `ring closure ${num} repeats an existing bond`, at2);
-        let p = open.bond;
-        const q = pending;
-        if (q) {
-          if (p) {
-            if (p.order !== q.order || p.aromatic !== q.aromatic) {
+        for (let e = firstEv[prev]; e >= 0; e = evNext[e])
+          if (evAtom[e] === a)
+            return err("smiles-duplicate-bond", `ring closure ${num} repeats an existing bond`, at2);
+        if (pOrder !== 0) {
+          if (oOrder !== 0) {
+            if (oOrder !== pOrder || oArom !== pArom) {
               return err(
                 "smiles-conflicting-ring-bond",
                 `ring closure ${num} has different bond symbols at its two ends`,
                 at2
               );
             }
-            if (p.dir !== 0 && q.dir !== 0 && p.dir !== -q.dir) {
+            if (oDir !== 0 && pDir !== 0 && oDir !== -pDir) {
               return err(
                 "smiles-conflicting-ring-bond",
                 `ring closure ${num} has contradicting '/' '\\' marks`,
                 at2
               );
             }
-            if (p.dir === 0 && q.dir !== 0) p = { ...p, dir: -q.dir };
+            if (oDir === 0 && pDir !== 0) oDir = -pDir;
           } else {
-            p = { ...q, dir: -q.dir };
+            oOrder = pOrder;
+            oArom = pArom;
+            oDir = -pDir;
           }
         }
-        const bi = addBond(a, prev, p, at2);
-        nbr[a][open.slot] = prev;
-        nbrBond[a][open.slot] = bi;
-        nbr[prev].push(a);
-        nbrBond[prev].push(bi);
+        const bi = addBond(a, prev, oOrder, oArom, oDir, at2);
+        evAtom[slot] = prev;
+        evBond[slot] = bi;
+        entry(prev, a, bi);
       }
-      pending = null;
+      pOrder = 0;
       continue;
     }
     if (c === 46) {
-      if (pending) return err("smiles-dangling-bond", "bond symbol before '.'", pending.offset);
+      if (pOrder !== 0) return err("smiles-dangling-bond", "bond symbol before '.'", pOff);
       if (prev < 0) return err("smiles-empty-component", "'.' with no atom before it", i);
       prev = -1;
       i++;
@@ -4014,47 +4489,155 @@ function parseSmilesGraph(s, start = 0) {
     return err("smiles-illegal-character", `character '${s[i]}' is not allowed in SMILES`, i);
   }
   const end = i;
-  if (atoms.length === 0) return err("smiles-empty", "no atoms in the SMILES", start);
-  if (pending) return err("smiles-dangling-bond", "bond symbol at the end of the SMILES", pending.offset);
+  if (nAtoms === 0) return err("smiles-empty", "no atoms in the SMILES", start);
+  if (pOrder !== 0) return err("smiles-dangling-bond", "bond symbol at the end of the SMILES", pOff);
   if (prev < 0) return err("smiles-empty-component", "'.' at the end of the SMILES", end - 1);
-  if (branchStack.length > 0) {
-    return err(
-      "smiles-unmatched-parenthesis",
-      "'(' is never closed",
-      branchStack[branchStack.length - 1].offset
-    );
-  }
+  if (branchDepth > 0)
+    return err("smiles-unmatched-parenthesis", "'(' is never closed", brOff[branchDepth - 1]);
   if (openRings > 0) {
-    let first;
-    for (const r of rings) if (r && (!first || r.offset < first.offset)) first = r;
-    return err("smiles-unclosed-ring", "ring-closure number is never closed", first.offset);
+    let first = -1;
+    for (let k = 0; k < 100; k++)
+      if (RING_OPEN[k] === 1 && (first < 0 || RING_OFF[k] < first)) first = RING_OFF[k];
+    if (big !== null) {
+      for (const r of big.values()) if (first < 0 || r[5] < first) first = r[5];
+    }
+    return err("smiles-unclosed-ring", "ring-closure number is never closed", first);
   }
-  return { atoms, bonds, nbr, nbrBond, preceded, end, warnings };
+  const buf = new ArrayBuffer(4 * (2 * nAtoms + 1 + 7 * m + 2 * ev));
+  let off = 0;
+  const view = (len) => {
+    const v = new Int32Array(buf, off, len);
+    off += 4 * len;
+    return v;
+  };
+  const nbrStart = view(nAtoms + 1);
+  const preceded = view(nAtoms);
+  const bondA = view(m);
+  const bondB = view(m);
+  const bondOrder = view(m);
+  const bondAromatic = view(m);
+  const bondExplicit = view(m);
+  const bondDir = view(m);
+  const bondOffset = view(m);
+  const nbrAtom = view(ev);
+  const nbrBond = view(ev);
+  for (let k = 0; k < m; k++) {
+    bondA[k] = bA[k];
+    bondB[k] = bB[k];
+    bondOrder[k] = bOrder[k];
+    bondAromatic[k] = bArom[k];
+    bondExplicit[k] = bExpl[k];
+    bondDir[k] = bDir[k];
+    bondOffset[k] = bOff[k];
+  }
+  let pos = 0;
+  for (let a = 0; a < nAtoms; a++) {
+    preceded[a] = pre[a];
+    nbrStart[a] = pos;
+    for (let e = firstEv[a]; e >= 0; e = evNext[e]) {
+      nbrAtom[pos] = evAtom[e];
+      nbrBond[pos] = evBond[e];
+      pos++;
+    }
+  }
+  nbrStart[nAtoms] = pos;
+  return {
+    atoms,
+    bondCount: m,
+    bondA,
+    bondB,
+    bondOrder,
+    bondAromatic,
+    bondExplicit,
+    bondDir,
+    bondOffset,
+    nbrStart,
+    nbrAtom,
+    nbrBond,
+    preceded,
+    end,
+    warnings
+  };
 }
+function bondSymbolOrder(c) {
+  switch (c) {
+    case 45:
+    // -
+    case 58:
+    // :
+    case 47:
+    // /
+    case 92:
+      return 1;
+    case 61:
+      return 2;
+    case 35:
+      return 3;
+    case 36:
+      return 4;
+    default:
+      return 0;
+  }
+}
+var cap, evOwner, evAtom, evBond, evNext, firstEv, lastEv, bA, bB, bOrder, bArom, bExpl, bDir, bOff, pre, brAtom, brOff, brBefore, RING_OPEN, RING_ATOM, RING_ENTRY, RING_ORDER, RING_AROM, RING_DIR, RING_OFF;
 var init_smiles_parse = __esm({
   "src/chem/read/smiles-parse.ts"() {
     "use strict";
     init_smiles_bracket();
+    init_make();
+    cap = 0;
+    evOwner = new Int32Array(0);
+    evAtom = new Int32Array(0);
+    evBond = new Int32Array(0);
+    evNext = new Int32Array(0);
+    firstEv = new Int32Array(0);
+    lastEv = new Int32Array(0);
+    bA = new Int32Array(0);
+    bB = new Int32Array(0);
+    bOrder = new Int32Array(0);
+    bArom = new Int32Array(0);
+    bExpl = new Int32Array(0);
+    bDir = new Int32Array(0);
+    bOff = new Int32Array(0);
+    pre = new Int32Array(0);
+    brAtom = new Int32Array(0);
+    brOff = new Int32Array(0);
+    brBefore = new Int32Array(0);
+    RING_OPEN = new Uint8Array(100);
+    RING_ATOM = new Int32Array(100);
+    RING_ENTRY = new Int32Array(100);
+    RING_ORDER = new Int32Array(100);
+    RING_AROM = new Int32Array(100);
+    RING_DIR = new Int32Array(100);
+    RING_OFF = new Int32Array(100);
   }
 });
 
 // src/chem/read/smiles-stereo.ts
 function ligandsOf(g, hCount, i) {
-  const list = g.nbr[i].slice();
+  const list = [];
   const h = hCount[i];
-  if (h > 0) {
-    const at2 = g.preceded[i] ? 1 : 0;
-    for (let k = 0; k < h; k++) list.splice(at2, 0, IMPLICIT_H);
+  const from = g.nbrStart[i];
+  const stop = g.nbrStart[i + 1];
+  const at2 = from + (g.preceded[i] === 1 && stop > from ? 1 : 0);
+  for (let e = from; e < stop; e++) {
+    if (e === at2) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
+    list.push(g.nbrAtom[e]);
   }
+  if (at2 === stop) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
   return list;
+}
+function degree(g, i) {
+  return g.nbrStart[i + 1] - g.nbrStart[i];
 }
 function warn(code, message, offset) {
   return { code, message, at: { offset } };
 }
 function isCumuleneInner(g, order, hCount, i) {
-  const bs = g.nbrBond[i];
-  if (bs.length !== 2 || hCount[i] !== 0) return false;
-  return order[bs[0]] === 2 && order[bs[1]] === 2 && !g.bonds[bs[0]].aromatic && !g.bonds[bs[1]].aromatic;
+  if (degree(g, i) !== 2 || hCount[i] !== 0) return false;
+  const b0 = g.nbrBond[g.nbrStart[i]];
+  const b1 = g.nbrBond[g.nbrStart[i] + 1];
+  return order[b0] === 2 && order[b1] === 2 && g.bondAromatic[b0] !== 1 && g.bondAromatic[b1] !== 1;
 }
 function walkCumulene(g, order, hCount, from, to) {
   let prev = from;
@@ -4062,8 +4645,8 @@ function walkCumulene(g, order, hCount, from, to) {
   let doubles = 1;
   let guard = g.atoms.length;
   while (isCumuleneInner(g, order, hCount, cur) && guard-- > 0) {
-    const nb = g.nbr[cur];
-    const next = nb[0] === prev ? nb[1] : nb[0];
+    const e = g.nbrStart[cur];
+    const next = g.nbrAtom[e] === prev ? g.nbrAtom[e + 1] : g.nbrAtom[e];
     if (next === from) break;
     prev = cur;
     cur = next;
@@ -4120,11 +4703,11 @@ function buildStereo(g, order, hCount, warnings) {
   return out;
 }
 function allene(g, order, hCount, c, winding) {
-  const nb = g.nbr[c];
   const ends = [];
   const ligs = [];
   const lengths = [];
-  for (const first of nb) {
+  for (let e = g.nbrStart[c], stop = g.nbrStart[c + 1]; e < stop; e++) {
+    const first = g.nbrAtom[e];
     const [t, p, doubles] = walkCumulene(g, order, hCount, c, first);
     if (isCumuleneInner(g, order, hCount, t)) return null;
     lengths.push(doubles);
@@ -4144,27 +4727,26 @@ function allene(g, order, hCount, c, winding) {
 }
 function marksAt(g, order, t, c) {
   const res = [];
-  const nb = g.nbr[t];
-  const bs = g.nbrBond[t];
-  for (let k = 0; k < nb.length; k++) {
-    const x = nb[k];
+  for (let e = g.nbrStart[t], stop = g.nbrStart[t + 1]; e < stop; e++) {
+    const x = g.nbrAtom[e];
     if (x === c) continue;
-    const b = g.bonds[bs[k]];
-    if (b.dir === 0 || order[bs[k]] !== 1) continue;
-    res.push({ x, up: b.a === t === (b.dir === 1) });
+    const bi = g.nbrBond[e];
+    const dir = g.bondDir[bi];
+    if (dir === 0 || order[bi] !== 1) continue;
+    res.push({ x, up: g.bondA[bi] === t === (dir === 1) });
   }
   return res;
 }
 function doubleBonds(g, order, hCount, warnings, out) {
-  const m = g.bonds.length;
+  const m = g.bondCount;
   let anyDir = false;
-  for (let k = 0; k < m; k++) if (g.bonds[k].dir !== 0) anyDir = true;
+  for (let k = 0; k < m; k++) if (g.bondDir[k] !== 0) anyDir = true;
   if (!anyDir) return;
   const done = new Uint8Array(m);
   for (let k = 0; k < m; k++) {
-    const b = g.bonds[k];
-    if (order[k] !== 2 || b.aromatic || done[k]) continue;
+    if (order[k] !== 2 || g.bondAromatic[k] === 1 || done[k]) continue;
     done[k] = 1;
+    const b = { a: g.bondA[k], b: g.bondB[k], offset: g.bondOffset[k] };
     const [t0, c0, d0] = walkCumulene(g, order, hCount, b.b, b.a);
     const [t1, c1, d1] = walkCumulene(g, order, hCount, b.a, b.b);
     const doubles = d0 + d1 - 1;
@@ -4176,18 +4758,16 @@ function doubleBonds(g, order, hCount, warnings, out) {
         let prev = s;
         let cur = e2;
         while (isCumuleneInner(g, order, hCount, cur)) {
-          const nb = g.nbr[cur];
-          const bs = g.nbrBond[cur];
-          const idx = nb[0] === prev ? 1 : 0;
-          done[bs[idx]] = 1;
+          const e3 = g.nbrStart[cur] + (g.nbrAtom[g.nbrStart[cur]] === prev ? 1 : 0);
+          done[g.nbrBond[e3]] = 1;
           prev = cur;
-          cur = nb[idx];
+          cur = g.nbrAtom[e3];
           if (cur === s) break;
         }
       }
     }
     if (doubles % 2 === 0) continue;
-    if (g.nbr[t0].length > 3 || g.nbr[t1].length > 3) continue;
+    if (degree(g, t0) > 3 || degree(g, t1) > 3) continue;
     const m0 = marksAt(g, order, t0, c0);
     const m1 = marksAt(g, order, t1, c1);
     if (m0.length === 0 || m1.length === 0) continue;
@@ -4218,6 +4798,24 @@ var init_smiles_stereo = __esm({
 });
 
 // src/chem/read/smiles.ts
+function reserve(n, m) {
+  if (m > capM || capM > 1 << 16) {
+    capM = Math.max(m, 64);
+    ORDER = new Uint8Array(capM);
+    BRIDGE = new Uint8Array(capM);
+  }
+  if (n > capN || capN > 1 << 16) {
+    capN = Math.max(n, 64);
+    HCOUNT = new Int32Array(capN);
+    RADICAL = new Uint8Array(capN);
+    NEEDS_DOUBLE = new Uint8Array(capN);
+    DISC = new Int32Array(capN);
+    LOW = new Int32Array(capN);
+    PARENT_BOND = new Int32Array(capN);
+    ITER = new Int32Array(capN);
+    STACK = new Int32Array(capN);
+  }
+}
 function isSpace2(c) {
   return c === 32 || c === 9 || c === 10 || c === 13;
 }
@@ -4244,16 +4842,13 @@ function parse(text) {
       ok: false,
       error: { code: g.error.code, message: g.error.message, at: { offset: g.error.offset } }
     };
-  const warnings = g.warnings.map((w) => ({
-    code: w.code,
-    message: w.message,
-    at: { offset: w.offset }
-  }));
+  const warnings = objectList();
+  for (const w of g.warnings) warnings.push({ code: w.code, message: w.message, at: { offset: w.offset } });
   const n = g.atoms.length;
-  const m = g.bonds.length;
+  const m = g.bondCount;
   let i = g.end;
   while (i < text.length && isSpace2(text.charCodeAt(i))) i++;
-  let groups = [];
+  let groups = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
     const cx = parseCxExtension(text, i, n);
     if (!cx.ok) return cx;
@@ -4261,24 +4856,27 @@ function parse(text) {
     i = cx.end;
   }
   const title = text.slice(i).trim();
-  const order = new Uint8Array(m);
-  for (let k = 0; k < m; k++) order[k] = g.bonds[k].order;
+  reserve(n, m);
+  const order = ORDER;
+  for (let k = 0; k < m; k++) order[k] = g.bondOrder[k];
   let anyAromatic = false;
   for (let a = 0; a < n && !anyAromatic; a++) if (g.atoms[a].aromatic) anyAromatic = true;
   if (anyAromatic) {
     const err2 = kekulizeGraph(g, order);
     if (err2) return err2;
   }
-  const hCount = new Int32Array(n);
-  const radical = new Uint8Array(n);
+  const hCount = HCOUNT;
+  const radical = RADICAL;
+  radical.fill(0, 0, n);
+  const { nbrStart, nbrBond, bondA, bondB } = g;
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a];
     let sum = 0;
     let oxo = 0;
-    for (const bi of g.nbrBond[a]) {
+    for (let e = nbrStart[a], stop = nbrStart[a + 1]; e < stop; e++) {
+      const bi = nbrBond[e];
       sum += order[bi];
-      const b = g.bonds[bi];
-      if (order[bi] === 2 && g.atoms[b.a === a ? b.b : b.a].atomicNumber === 8) oxo++;
+      if (order[bi] === 2 && g.atoms[bondA[bi] === a ? bondB[bi] : bondA[bi]].atomicNumber === 8) oxo++;
     }
     const problem = valenceProblem(ra.atomicNumber, ra.charge, sum, ra.hCount < 0 ? 0 : ra.hCount, oxo);
     if (problem !== null) return failure("smiles-valence", problem, ra.offset);
@@ -4292,69 +4890,73 @@ function parse(text) {
     }
   }
   const stereo = buildStereo(g, order, hCount, warnings);
-  const atoms = new Array(n);
+  const atoms = objectList();
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a];
-    atoms[a] = {
-      element: ra.element,
-      atomicNumber: ra.atomicNumber,
-      charge: ra.charge,
-      isotope: ra.isotope,
-      hCount: hCount[a],
-      aromatic: ra.aromatic,
-      radical: radical[a],
-      mapNumber: ra.mapNumber,
-      inputNumber: a + 1,
-      coords: null
-    };
+    atoms.push(
+      newAtom(
+        ra.element,
+        ra.atomicNumber,
+        ra.charge,
+        ra.isotope,
+        hCount[a],
+        ra.aromatic,
+        radical[a],
+        ra.mapNumber,
+        a + 1,
+        null
+      )
+    );
   }
-  const bonds = new Array(m);
-  for (let k = 0; k < m; k++) {
-    const b = g.bonds[k];
-    bonds[k] = { a: b.a, b: b.b, order: order[k], aromatic: b.aromatic, wedge: null };
-  }
-  const structure = {
+  const bonds = objectList();
+  for (let k = 0; k < m; k++)
+    bonds.push(newBond(bondA[k], bondB[k], order[k], g.bondAromatic[k] === 1, null));
+  const structure = newStructure(
     atoms,
     bonds,
     stereo,
-    groups,
-    chiralFlag: null,
-    title: title === "" ? null : title,
-    properties: {},
-    dimension: 0
-  };
+    groups ?? objectList(),
+    null,
+    title === "" ? null : title,
+    {},
+    0
+  );
   return { ok: true, structure, warnings };
 }
 function kekulizeGraph(g, order) {
   const n = g.atoms.length;
-  const m = g.bonds.length;
+  const m = g.bondCount;
+  const { nbrStart, nbrBond, bondAromatic } = g;
   const bridge = findBridges(g);
   const aromaticBonds2 = [];
   for (let k = 0; k < m; k++) {
-    const b = g.bonds[k];
-    if (!b.aromatic) continue;
-    if (bridge[k] && !b.explicit) {
-      b.aromatic = false;
+    if (bondAromatic[k] !== 1) continue;
+    if (bridge[k] && g.bondExplicit[k] !== 1) {
+      bondAromatic[k] = 0;
       continue;
     }
     aromaticBonds2.push(k);
   }
-  const needsDouble = new Uint8Array(n);
+  const needsDouble = NEEDS_DOUBLE;
+  needsDouble.fill(0, 0, n);
   let any = false;
   for (let a = 0; a < n; a++) {
     const ra = g.atoms[a];
     if (!ra.aromatic) continue;
     let sum = ra.hCount > 0 ? ra.hCount : 0;
     let hasAromaticBond = false;
-    for (const bi of g.nbrBond[a]) {
-      sum += g.bonds[bi].aromatic ? 1 : order[bi];
-      if (g.bonds[bi].aromatic) hasAromaticBond = true;
+    for (let e = nbrStart[a], stop = nbrStart[a + 1]; e < stop; e++) {
+      const bi = nbrBond[e];
+      if (bondAromatic[bi] === 1) {
+        sum += 1;
+        hasAromaticBond = true;
+      } else sum += order[bi];
     }
     const vals = defaultValences(ra.atomicNumber, ra.charge);
     let v = -1;
-    for (const x of vals) {
-      if (x >= sum) {
-        v = x;
+    for (let k = 0; k < vals.length; k++) {
+      if (vals[k] >= sum) {
+        v = vals[k];
         break;
       }
     }
@@ -4371,18 +4973,12 @@ function kekulizeGraph(g, order) {
     }
   }
   if (!any || aromaticBonds2.length === 0) return null;
-  const bondA = new Int32Array(m);
-  const bondB = new Int32Array(m);
-  for (let k = 0; k < m; k++) {
-    bondA[k] = g.bonds[k].a;
-    bondB[k] = g.bonds[k].b;
-  }
   const res = kekulize({
     atomCount: n,
-    bondA,
-    bondB,
+    bondA: g.bondA,
+    bondB: g.bondB,
     aromaticBonds: aromaticBonds2,
-    needsDouble: Array.from(needsDouble, (x) => x === 1)
+    needsDouble
   });
   if (!res.ok) {
     const ra = g.atoms[res.atom];
@@ -4397,39 +4993,39 @@ function kekulizeGraph(g, order) {
 }
 function findBridges(g) {
   const n = g.atoms.length;
-  const bridge = new Uint8Array(g.bonds.length);
-  const disc = new Int32Array(n).fill(-1);
-  const low = new Int32Array(n);
-  const parentBond = new Int32Array(n).fill(-1);
-  const iter = new Int32Array(n);
+  const { nbrStart, nbrAtom, nbrBond, bondA, bondB } = g;
+  const bridge = BRIDGE.fill(0, 0, g.bondCount);
+  const disc = DISC.fill(-1, 0, n);
+  const low = LOW.fill(0, 0, n);
+  const parentBond = PARENT_BOND.fill(-1, 0, n);
+  const iter = ITER;
+  for (let v = 0; v < n; v++) iter[v] = nbrStart[v];
+  const stack = STACK;
+  let sp = 0;
   let time = 0;
-  const stack = [];
   for (let s = 0; s < n; s++) {
     if (disc[s] !== -1) continue;
     disc[s] = low[s] = time++;
-    stack.push(s);
-    while (stack.length > 0) {
-      const v = stack[stack.length - 1];
-      const nb = g.nbr[v];
-      const bs = g.nbrBond[v];
-      if (iter[v] < nb.length) {
+    stack[sp++] = s;
+    while (sp > 0) {
+      const v = stack[sp - 1];
+      if (iter[v] < nbrStart[v + 1]) {
         const k = iter[v]++;
-        const w = nb[k];
-        const bi = bs[k];
+        const w = nbrAtom[k];
+        const bi = nbrBond[k];
         if (bi === parentBond[v]) continue;
         if (disc[w] === -1) {
           disc[w] = low[w] = time++;
           parentBond[w] = bi;
-          stack.push(w);
+          stack[sp++] = w;
         } else if (disc[w] < low[v]) {
           low[v] = disc[w];
         }
       } else {
-        stack.pop();
+        sp--;
         const pb = parentBond[v];
         if (pb >= 0) {
-          const b = g.bonds[pb];
-          const p = b.a === v ? b.b : b.a;
+          const p = bondA[pb] === v ? bondB[pb] : bondA[pb];
           if (low[v] < low[p]) low[p] = low[v];
           if (low[v] > disc[p]) bridge[pb] = 1;
         }
@@ -4438,14 +5034,28 @@ function findBridges(g) {
   }
   return bridge;
 }
+var capN, capM, ORDER, BRIDGE, HCOUNT, RADICAL, NEEDS_DOUBLE, DISC, LOW, PARENT_BOND, ITER, STACK;
 var init_smiles = __esm({
   "src/chem/read/smiles.ts"() {
     "use strict";
+    init_make();
     init_cxsmiles();
     init_kekulize();
     init_smiles_parse();
     init_smiles_stereo();
     init_valence();
+    capN = 0;
+    capM = 0;
+    ORDER = new Uint8Array(0);
+    BRIDGE = new Uint8Array(0);
+    HCOUNT = new Int32Array(0);
+    RADICAL = new Uint8Array(0);
+    NEEDS_DOUBLE = new Uint8Array(0);
+    DISC = new Int32Array(0);
+    LOW = new Int32Array(0);
+    PARENT_BOND = new Int32Array(0);
+    ITER = new Int32Array(0);
+    STACK = new Int32Array(0);
   }
 });
 
@@ -4476,11 +5086,11 @@ function readRecord(lines, start, end, firstLine, record2) {
     }
   }
   const molEnd = mend === -1 ? end : mend + 1;
-  const result = parseMolfileLines(lines, start, molEnd, firstLine);
+  const result2 = parseMolfileLines(lines, start, molEnd, firstLine);
   const tag = (e) => ({ ...e, at: { ...e.at, record: record2 } });
-  if (!result.ok) return { ok: false, error: tag(result.error) };
+  if (!result2.ok) return { ok: false, error: tag(result2.error) };
   const props = {};
-  const warnings = result.warnings.map(tag);
+  const warnings = result2.warnings.map(tag);
   let i = molEnd;
   while (i < end) {
     const l = lines[i];
@@ -4526,8 +5136,8 @@ function readRecord(lines, start, end, firstLine, record2) {
     }
     props[name] = value.join("\n");
   }
-  result.structure.properties = props;
-  return { ok: true, structure: result.structure, warnings };
+  result2.structure.properties = props;
+  return { ok: true, structure: result2.structure, warnings };
 }
 function fieldName(l) {
   const open = l.indexOf("<", 1);
@@ -4897,10 +5507,10 @@ function writeSmiles(s, opts = {}) {
   return writeSmilesWithOrder(s, opts).smiles;
 }
 function writeSmilesWithOrder(s, opts = {}) {
-  const withStereo = opts.stereo !== false;
+  const withStereo2 = opts.stereo !== false;
   const em = traverse(s, opts.order);
-  const chir = withStereo ? chiralMarks(s, em) : /* @__PURE__ */ new Map();
-  const dir = withStereo ? assignBondDirections(s, em) : /* @__PURE__ */ new Map();
+  const chir = withStereo2 ? chiralMarks(s, em) : /* @__PURE__ */ new Map();
+  const dir = withStereo2 ? assignBondDirections(s, em) : /* @__PURE__ */ new Map();
   const valence = new Int32Array(s.atoms.length);
   for (const b of s.bonds) {
     if (b.a >= 0 && b.a < valence.length) valence[b.a] += b.order;
@@ -4946,18 +5556,18 @@ function writeSmilesWithOrder(s, opts = {}) {
       }
       if (em.parentBond[u] >= 0) out.push(bondText(em.parentBond[u]));
       out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? ""));
-      const release = [];
+      const release2 = [];
       for (const k of em.ringClose[u]) {
         const d = digitOf.get(k);
         out.push(ringDigit(d));
-        release.push(d);
+        release2.push(d);
       }
       for (const k of em.ringOpen[u]) {
         const d = takeDigit();
         digitOf.set(k, d);
         out.push(bondText(k), ringDigit(d));
       }
-      freeDigits.push(...release);
+      freeDigits.push(...release2);
       const ch = em.children[u];
       for (let k = ch.length - 1; k >= 0; k--) {
         if (k === ch.length - 1) st.push(ch[k]);
@@ -4966,7 +5576,7 @@ function writeSmilesWithOrder(s, opts = {}) {
     }
   });
   let smi = out.join("");
-  if (withStereo && s.groups.length > 0) {
+  if (withStereo2 && s.groups.length > 0) {
     const parts = [];
     for (const g of s.groups) {
       const idx = g.atoms.filter((a) => a >= 0 && a < s.atoms.length).map((a) => em.outIndex[a]);
@@ -5335,10 +5945,15 @@ function stereogenicIn(g, x, k) {
   return elementMapping(g, x, y) < 0;
 }
 function mirror(s) {
-  const stereo = s.stereo.map(
-    (e) => e.kind === "double-bond" ? e : { ...e, winding: e.winding === "@" ? "@@" : "@" }
-  );
-  return { ...s, stereo };
+  const stereo = s.stereo.map((e) => {
+    const winding = e.kind === "double-bond" ? null : e.winding === "@" ? "@@" : "@";
+    if (e.kind === "tetrahedral")
+      return { kind: "tetrahedral", centre: e.centre, ligands: e.ligands, winding };
+    if (e.kind === "axial")
+      return { kind: "axial", subtype: e.subtype, ends: e.ends, ligands: e.ligands, winding };
+    return e;
+  });
+  return withStereo(s, stereo);
 }
 var MAX_GROUP, MAX_ENUMERATED_UNDEFINED;
 var init_symmetry = __esm({
@@ -5347,6 +5962,7 @@ var init_symmetry = __esm({
     init_graph();
     init_perceive_units();
     init_symmetry_solve();
+    init_make();
     MAX_GROUP = 2e4;
     MAX_ENUMERATED_UNDEFINED = 14;
   }
@@ -6700,7 +7316,7 @@ function ert(w) {
   function wD(t, e, A) {
     HD(t.k[e], A);
   }
-  function bA(t) {
+  function bA2(t) {
     qA.call(this, t, 0);
   }
   function tg(t) {
@@ -8283,7 +8899,7 @@ function ert(w) {
   function Ji(t) {
     this.b = null, this.a = (kU(), t || Sl);
   }
-  function bB(t, e, A) {
+  function bB2(t, e, A) {
     xr.call(this, e), i1t(this, t, e, A);
   }
   function cG(t, e, A, n, P) {
@@ -8493,7 +9109,7 @@ function ert(w) {
   function VG(t, e) {
     t.c = e, t.e * w.Math.pow(10, -t.b / 1.36);
   }
-  function NB(t) {
+  function NB2(t) {
     J1(t), t.eb = w.Math.max(t.eb, 3), P1(t.k);
   }
   function m3(t, e) {
@@ -10361,10 +10977,10 @@ function ert(w) {
     return N2 < t && t < UP ? t < 0 ? w.Math.ceil(t) : w.Math.floor(t) : En(_Z(t));
   }
   function yz(t) {
-    return ut(t, 15), !t.d && (t.g < 2 || !Ts(t.K[0], t.K[1])) && (t.d = new bA(t)), t.d ? a7(t.d) : null;
+    return ut(t, 15), !t.d && (t.g < 2 || !Ts(t.K[0], t.K[1])) && (t.d = new bA2(t)), t.d ? a7(t.d) : null;
   }
   function Pk(t) {
-    return ut(t, 15), !t.d && (t.g < 2 || !Ts(t.K[0], t.K[1])) && (t.d = new bA(t)), t.d ? Me(t.d) : null;
+    return ut(t, 15), !t.d && (t.g < 2 || !Ts(t.K[0], t.K[1])) && (t.d = new bA2(t)), t.d ? Me(t.d) : null;
   }
   function dT(t, e) {
     return !!(t0(t.b, e) == 1 && J(t.b, e) < 10 || mn(t.b, e) || xP(t.b, e, true));
@@ -11169,7 +11785,7 @@ function ert(w) {
       P = true;
       break;
     }
-    P || er(t.I, e), P1(t.k), NB(A.a);
+    P || er(t.I, e), P1(t.k), NB2(A.a);
   }
   function Df(t, e) {
     var A, n;
@@ -11821,7 +12437,7 @@ function ert(w) {
   }
   function kJ(t) {
     try {
-      return t = an(t), Ms(t), Me(new bA(t));
+      return t = an(t), Ms(t), Me(new bA2(t));
     } catch (e) {
       if (e = _1(e), Jt(e, 27)) return z1(), null;
       throw et(e);
@@ -11842,7 +12458,7 @@ function ert(w) {
   }
   function bJ(t, e, A) {
     var n, P;
-    for (n = new bA(Qs(A, null)), Me(n), zu(n, n.jb), t.d = c(B, F, 6, e.g.length, 15, 1), P = 0; P < t.d.length; P++) t.d[P] = Cd(A, e.g[P].a);
+    for (n = new bA2(Qs(A, null)), Me(n), zu(n, n.jb), t.d = c(B, F, 6, e.g.length, 15, 1), P = 0; P < t.d.length; P++) t.d[P] = Cd(A, e.g[P].a);
   }
   function fr(t) {
     return N8(t) ? jT(t) : Ii(t) ? Bt((y1(t), t)) : Fu(t) ? (y1(t), t ? 1231 : 1237) : T3(t) ? t.ob() : h3(t) ? jD(t) : t && t.hashCode ? t.hashCode() : jD(t);
@@ -12438,7 +13054,7 @@ function ert(w) {
   }
   function BY(t, e) {
     var A, n, P;
-    for (P = new M0(), n = 0; n < t.a.a.length; n++) P.a.length != 0 && (P.a += "+"), A = new bA(x(t.a, n)), G(P, Me(A)), e && (P.a += " ", G(P, zu(A, true)));
+    for (P = new M0(), n = 0; n < t.a.a.length; n++) P.a.length != 0 && (P.a += "+"), A = new bA2(x(t.a, n)), G(P, Me(A)), e && (P.a += " ", G(P, zu(A, true)));
     return P.a;
   }
   function vY(t, e) {
@@ -12729,7 +13345,7 @@ function ert(w) {
   }
   function qY(t, e) {
     try {
-      return e ? (t = an(t), A6(t, true), Xtt(t), Me(new bA(t))) : Me(new bA(t));
+      return e ? (t = an(t), A6(t, true), Xtt(t), Me(new bA2(t))) : Me(new bA2(t));
     } catch (A) {
       if (A = _1(A), Jt(A, 27)) return z1(), null;
       throw et(A);
@@ -12895,7 +13511,7 @@ function ert(w) {
     var e, A;
     try {
       for (t = an(t), Ms(t), e = t.s, A = 0; A < e; A++) t.I[A] = 1, t.U = 0;
-      return Me(new bA(t));
+      return Me(new bA2(t));
     } catch (n) {
       if (n = _1(n), Jt(n, 27)) return z1(), null;
       throw et(n);
@@ -13619,7 +14235,7 @@ function ert(w) {
   function GX(t) {
     var e;
     for (t.e = new gh(), t.d = new Bd(), xN(t, new hs(t, t.i)), e = an(t.i); !$7(t.d); ) if (mJ(jz(t.d), e), Ptt(t, e), t.e.a.c >= x1t) {
-      z1(), "" + Me(new bA(t.i));
+      z1(), "" + Me(new bA2(t.i));
       break;
     }
   }
@@ -15318,7 +15934,7 @@ function ert(w) {
   function xW(t, e) {
     var A, n, P, r;
     if (!vl) return 0;
-    if ($f[e].cc(Me(new bA(t))) != -1) return 3;
+    if ($f[e].cc(Me(new bA2(t))) != -1) return 3;
     for (r = new VD(1), A = new _A(), P = 0; P < dr[e].a.length; P++) if (l2(new WA(false), A, x(dr[e], P)), GA(r, t), MA(r, A), CA(r, 1, r.c) > 0) return 3;
     for (n = 0; n < Br[e].a.length; n++) if (l2(new WA(false), A, x(Br[e], n)), GA(r, t), MA(r, A), CA(r, 1, r.c) > 0) return 2;
     return 1;
@@ -16865,7 +17481,7 @@ function ert(w) {
     if (t.e.a.c == 1) return t.i;
     for (Q = an(t.i), Be(Q, true), ut(Q, 7), P = 0; P < Q.i; P++) t.g[P] && (Q.I[P] = 1, Q.U = 0, Xe(Q, P, 3, true));
     for (A = 0; A < Q.g; A++) t.b[A] != 0 && n0(t.i, A) < 4 && (X5(Q, A), Q.v[A] &= My, Q.U &= 7, Ne(Q, A, 0, -1));
-    for (f = c(B, F, 6, t.j, 15, 1), D = c(B, F, 6, t.j, 15, 1), n = new bA(Q).f, e = 0; e < Q.g; e++) t.b[e] != 0 && (o = t.b[e] - 1, D[o] < n[e] && (D[o] = n[e], f[o] = e));
+    for (f = c(B, F, 6, t.j, 15, 1), D = c(B, F, 6, t.j, 15, 1), n = new bA2(Q).f, e = 0; e < Q.g; e++) t.b[e] != 0 && (o = t.b[e] - 1, D[o] < n[e] && (D[o] = n[e], f[o] = e));
     for (r = 0; r < t.j; r++) i = "" + t.n[r] + "|" + t.k[r] + "|" + t.o[r], IP(Q, f[r], i);
     return Q;
   }
@@ -16958,7 +17574,7 @@ function ert(w) {
         for (Q = f - 1; Q >= D; Q--) n[Q + 1] = n[Q], P[Q + 1] = P[Q];
         n[D] = r, P[D] = i;
       }
-      e.e[A] == 3 && (n[3] = -1, P[3] = -1), n[4] = A, o == 1 && (L = n[1], n[1] = n[0], n[0] = L, L = P[1], P[1] = P[0], P[0] = L), Ft(t, new bB(e, n, P));
+      e.e[A] == 3 && (n[3] = -1, P[3] = -1), n[4] = A, o == 1 && (L = n[1], n[1] = n[0], n[0] = L, L = P[1], P[1] = P[0], P[0] = L), Ft(t, new bB2(e, n, P));
     }
   }
   function w$(t, e, A) {
@@ -18641,7 +19257,7 @@ function ert(w) {
   function Ea(t, e) {
     var A, n, P, r, i, f, D;
     if (D = new LD(), !vl) return Ft(D.a, new ae("Toxicity predictor not properly initialized.", 2)), D;
-    if (i = Me(new bA(t)), $f[e].cc(i) != -1) return e8(D, "This molecule is known to be " + HE[e] + ":", 2), Ft(D.a, new ae(i, 1)), D;
+    if (i = Me(new bA2(t)), $f[e].cc(i) != -1) return e8(D, "This molecule is known to be " + HE[e] + ":", 2), Ft(D.a, new ae(i, 1)), D;
     for (f = new VD(1), A = false, n = new _A(), r = 0; r < dr[e].a.length; r++) l2(new WA(false), n, x(dr[e], r)), GA(f, t), MA(f, n), CA(f, 1, f.c) > 0 && (A || e8(D, "High-risk fragments indicating " + So[e] + ":", 2), A = true, e8(D, x(dr[e], r), 1));
     for (A = false, P = 0; P < Br[e].a.length; P++) l2(new WA(false), n, x(Br[e], P)), GA(f, t), MA(f, n), CA(f, 1, f.c) > 0 && (A || e8(D, "Medium-risk fragments indicating " + So[e] + ":", 2), A = true, e8(D, x(Br[e], P), 1));
     return D.a.a.length == 0 && e8(D, "No indication for " + So[e] + " found.", 2), D;
@@ -18854,7 +19470,7 @@ function ert(w) {
         n[3 * f] = Q, n[1 + f] = A, s[f] = r;
       }
       if (n[0] == Et || n[3] == Et) {
-        z1(), "" + Me(new bA(e));
+        z1(), "" + Me(new bA2(e));
         break;
       }
       Ft(t, new nT(e, n, s, (e.v[r] & gn) != 0, o == 1));
@@ -19017,7 +19633,7 @@ function ert(w) {
       if (t.n = j1(gr, [DA, B9], [78, 26], 0, [t.q, t.c.f.a.length], 2), t.d = j1(ft, [DA, Dt], [13, 2], 6, [t.q, t.c.f.a.length], 2), t.e = c(Pt, it, 6, t.q, 16, 1), L = new ou(), o = new M0(), i = 0, A = 0, t.q != 0) {
         D = c(B, F, 6, t.o.length, 15, 1);
         do {
-          for (Q = o.a.length, 0 < Q ? o.a = hA(o.a, 0, 0) : 0 > Q && (o.a += z8(c(Fr, Pe, 6, -Q, 15, 1))), r = 0; r < t.c.f.a.length; r++) t.n[i][r] = F1t(t, t.g, D, r), t.d[i][r] = Me(new bA(t.n[i][r])), G(o, t.d[i][r]);
+          for (Q = o.a.length, 0 < Q ? o.a = hA(o.a, 0, 0) : 0 > Q && (o.a += z8(c(Fr, Pe, 6, -Q, 15, 1))), r = 0; r < t.c.f.a.length; r++) t.n[i][r] = F1t(t, t.g, D, r), t.d[i][r] = Me(new bA2(t.n[i][r])), G(o, t.d[i][r]);
           t.e[i] = Gs(L, o.a) == -1, (!t.t || !t.e[i]) && ++A, ++i;
         } while (iK(t, D) && A < t.i);
       }
@@ -20486,7 +21102,7 @@ function ert(w) {
     var n, P, r, i, f, D, Q, o, L, s, y, l, h, T, g, v;
     for (o = c(ft, Dt, 2, t.g.a.length + t.f.a.length, 6, 1), l = c(ft, Dt, 2, t.g.a.length + t.f.a.length, 6, 1), r = c(ft, Dt, 2, t.g.a.length + t.f.a.length, 6, 1), D = 0; D < t.g.a.length + t.f.a.length; D++) {
       if (g = D < t.g.a.length ? x(t.g, D) : x(t.f, D - t.g.a.length), g.L && D < t.g.a.length) for (n = 0; n < g.r; n++) w1(g, n, k8, false);
-      if (P = new bA(g), o[D] = Me(P), o[D] == null) return null;
+      if (P = new bA2(g), o[D] = Me(P), o[D] == null) return null;
       l[D] = cB(P), r[D] = zu(P, e);
     }
     for (L = new M0(), i = new M0(), h = new M0(), Q = 0; Q < t.g.a.length; Q++) {
@@ -24058,7 +24674,7 @@ Actelion Java MolfileCreator 2.0
   var wrt = M(197);
   p(91, 1, {}, p9), U.a = false, U.b = 0, U.c = 0, U.k = 0;
   var grt = M(91), po, K4;
-  p(34, 1, {}, bA, qA), U.b = false, U.c = 0, U.d = false, U.r = false, U.t = 0, U.v = 0, U.w = 0, U.G = false, U.I = 0, U.K = false, U.L = false, U.O = 0, U.Q = 0, U.T = 0, U.U = 0, U.Z = false, U.jb = false;
+  p(34, 1, {}, bA2, qA), U.b = false, U.c = 0, U.d = false, U.r = false, U.t = 0, U.v = 0, U.w = 0, U.G = false, U.I = 0, U.K = false, U.L = false, U.O = 0, U.Q = 0, U.T = 0, U.U = 0, U.Z = false, U.jb = false;
   var drt = M(34);
   p(273, 1, {}, s1), U.Rb = function(e, A) {
     return Uj(e, A);
@@ -24838,7 +25454,7 @@ Actelion Java MolfileCreator 2.0
   };
   var Zit = M(305);
   p(306, 1, {}, n7), U.oc = function() {
-    NB(this.a);
+    NB2(this.a);
   };
   var Wit = M(306);
   p(309, 1, {}, Jd);
@@ -25262,12 +25878,12 @@ Actelion Java MolfileCreator 2.0
     return BK(this.a, A, n);
   }, U.getIDCode = function() {
     var e;
-    return e = Pk(this.a), e == null && (e = Me(new bA(this.a))), e;
+    return e = Pk(this.a), e == null && (e = Me(new bA2(this.a))), e;
   }, U.getIDCodeAndCoordinates = function() {
     return { idCode: this.getIDCode(), coordinates: this.getIDCoordinates() };
   }, U.getIDCoordinates = function() {
     var e;
-    return e = yz(this.a), e == null && (e = a7(new bA(this.a))), e;
+    return e = yz(this.a), e == null && (e = a7(new bA2(this.a))), e;
   }, U.getImplicitHigherValence = function(e, A) {
     return sf(this.a, e, A);
   }, U.getImplicitHydrogens = function(e) {
@@ -27328,7 +27944,7 @@ Actelion Java MolfileCreator 2.0
     return e = new bn("line rule:"), r2(this, e), e.a;
   };
   var $ut = M(377);
-  p(378, 50, O2, bB), U.td = function(e, A) {
+  p(378, 50, O2, bB2), U.td = function(e, A) {
     var n, P, r, i, f;
     if (i = 0, P = Xj(this, e), f = 0, this.f[3] == -1 ? D2(e, P, this.f[4], this.f[2]) || ++f : (D2(e, P, this.f[4], this.f[2]) || ++f, D2(e, P, this.f[4], this.f[3]) && ++f), f != 0) for (n = 0; n < this.f.length; n++) this.f[n] != -1 && (r = 0.68 * f, A != null && (A[this.f[n]] += r), i += r);
     return i;
@@ -27803,13 +28419,18 @@ var init_openchemlib = __esm({
 
 // src/chem/cip/masses.ts
 function averageMass(atomicNumber) {
+  if (atomicNumber >= 0 && atomicNumber < BY_Z.length && Number.isInteger(atomicNumber))
+    return BY_Z[atomicNumber];
+  return computeAverageMass(atomicNumber);
+}
+function computeAverageMass(atomicNumber) {
   if (atomicNumber <= 0) return 0;
   const m = MEAN_MASS_NUMBER[atomicNumber];
   if (m !== void 0) return m;
   if (atomicNumber < MEAN.length) return MEAN[atomicNumber] * 1.001;
   return Math.round(atomicNumber * 2.5);
 }
-var MEAN, MEAN_MASS_NUMBER;
+var MEAN, MEAN_MASS_NUMBER, BY_Z;
 var init_masses = __esm({
   "src/chem/cip/masses.ts"() {
     "use strict";
@@ -27917,39 +28538,91 @@ var init_masses = __esm({
       35: 79.986,
       53: 127
     };
+    BY_Z = Array.from({ length: 119 }, (_, z) => computeAverageMass(z));
   }
 });
 
 // src/chem/cip/mancude.ts
 function perceiveMancude(s, nbr, ord, mass) {
   const n = s.atoms.length;
-  const bond = new PairSet(n);
+  const off = new Array(n + 1);
+  off[0] = 0;
+  for (let a = 0; a < n; a++) off[a + 1] = off[a] + nbr[a].length;
+  const slots = off[n];
+  const edge = new Array(slots).fill(0);
   const dupZ = new Array(n).fill(0);
   const dupMass = new Array(n).fill(0);
-  if (!nbr.some((o, a) => ord[a].some((x, i) => x === 2 && o[i] > a))) return { bond, dupZ, dupMass };
-  const ring = ringBonds2(n, nbr);
-  const piDouble = (a) => nbr[a].some((b, i) => ord[a][i] === 2 && ring.has(key(n, a, b)));
-  const pi = new Array(n).fill(false);
-  for (let a = 0; a < n; a++) {
-    const at2 = s.atoms[a];
-    const inRing = nbr[a].some((b) => ring.has(key(n, a, b)));
-    if (!inRing) continue;
-    if (piDouble(a)) pi[a] = !nbr[a].some((b, i) => ord[a][i] >= 2 && !ring.has(key(n, a, b)));
-    else if (!ord[a].some((o) => o >= 2)) {
-      const lonePair = [7, 8, 15, 16, 34].includes(at2.atomicNumber) && at2.charge <= 0;
-      pi[a] = (lonePair || at2.atomicNumber === 6 && at2.charge === -1) && nbr[a].length + at2.hCount <= 3;
+  let anyDouble = false;
+  for (let a = 0; a < n && !anyDouble; a++) {
+    const o = nbr[a];
+    const oa = ord[a];
+    for (let i = 0; i < o.length; i++) {
+      if (oa[i] === 2 && o[i] > a) {
+        anyDouble = true;
+        break;
+      }
     }
   }
-  const piNbr = nbr.map((o, a) => pi[a] ? o.filter((b) => pi[b] && ring.has(key(n, a, b))) : []);
-  const piRing = ringBonds2(n, piNbr);
-  bond.addAll(piRing);
+  if (!anyDouble) return result(n, nbr, off, edge, dupZ, dupMass);
+  if (scratchRing.length < slots) {
+    scratchRing = new Uint8Array(2 * slots);
+    scratchSlot = new Uint8Array(2 * slots);
+  }
+  if (scratchPi.length < n) scratchPi = new Uint8Array(2 * n);
+  const ring = scratchRing;
+  ring.fill(0, 0, slots);
+  ringBonds2(n, nbr, off, ring, null);
+  if (scratchPiDouble.length < n) scratchPiDouble = new Uint8Array(2 * n);
+  const piDouble = scratchPiDouble;
   for (let a = 0; a < n; a++) {
-    if (!pi[a] || !piDouble(a)) continue;
+    const oa = ord[a];
+    const base = off[a];
+    let d = 0;
+    for (let i = 0; i < oa.length; i++) if (oa[i] === 2 && ring[base + i] === 1) d = 1;
+    piDouble[a] = d;
+  }
+  const pi = scratchPi;
+  pi.fill(0, 0, n);
+  for (let a = 0; a < n; a++) {
+    const base = off[a];
+    const oa = ord[a];
+    const deg = oa.length;
+    let inRing = false;
+    for (let i = 0; i < deg; i++) if (ring[base + i] === 1) inRing = true;
+    if (!inRing) continue;
+    const at2 = s.atoms[a];
+    if (piDouble[a] === 1) {
+      let outside = false;
+      for (let i = 0; i < deg; i++) if (oa[i] >= 2 && ring[base + i] !== 1) outside = true;
+      pi[a] = outside ? 0 : 1;
+    } else {
+      let multiple = false;
+      for (let i = 0; i < deg; i++) if (oa[i] >= 2) multiple = true;
+      if (!multiple) {
+        const z = at2.atomicNumber;
+        const lonePair = (z === 7 || z === 8 || z === 15 || z === 16 || z === 34) && at2.charge <= 0;
+        pi[a] = (lonePair || z === 6 && at2.charge === -1) && deg + at2.hCount <= 3 ? 1 : 0;
+      }
+    }
+  }
+  const piSlot = scratchSlot;
+  piSlot.fill(0, 0, slots);
+  for (let a = 0; a < n; a++) {
+    if (pi[a] !== 1) continue;
+    const o = nbr[a];
+    for (let i = 0; i < o.length; i++) if (pi[o[i]] === 1 && ring[off[a] + i] === 1) piSlot[off[a] + i] = 1;
+  }
+  ringBonds2(n, nbr, off, edge, piSlot);
+  for (let a = 0; a < n; a++) {
+    if (pi[a] !== 1 || piDouble[a] !== 1) continue;
     let sum = 0;
     let msum = 0;
     let cnt = 0;
-    for (const b of piNbr[a]) {
-      if (piRing.has(key(n, a, b)) && piDouble(b)) {
+    const o = nbr[a];
+    for (let i = 0; i < o.length; i++) {
+      if (piSlot[off[a] + i] !== 1) continue;
+      const b = o[i];
+      if (edge[off[a] + i] === 1 && piDouble[b] === 1) {
         sum += s.atoms[b].atomicNumber;
         msum += mass[b];
         cnt++;
@@ -27960,53 +28633,104 @@ function perceiveMancude(s, nbr, ord, mass) {
       dupMass[a] = msum / cnt;
     }
   }
-  return { bond, dupZ, dupMass };
+  return result(n, nbr, off, edge, dupZ, dupMass);
+}
+function result(n, nbr, off, edge, dupZ, dupMass) {
+  let bond = null;
+  return {
+    get bond() {
+      if (bond === null) {
+        bond = new PairSet(n);
+        for (let a = 0; a < n; a++)
+          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key(n, a, nbr[a][i]));
+      }
+      return bond;
+    },
+    edge,
+    off,
+    dupZ,
+    dupMass
+  };
 }
 function key(n, a, b) {
   return a * n + b;
 }
-function ringBonds2(n, nbr) {
-  const out = new PairSet(n);
-  const disc = new Int32Array(n).fill(-1);
-  const low = new Int32Array(n);
+function markPair(nbr, off, out, v, w) {
+  const nv = nbr[v];
+  for (let j = 0; j < nv.length; j++) if (nv[j] === w) out[off[v] + j] = 1;
+  const nw = nbr[w];
+  for (let j = 0; j < nw.length; j++) if (nw[j] === v) out[off[w] + j] = 1;
+}
+function ringBonds2(n, nbr, off, out, use) {
+  if (scratchDisc.length < n) {
+    scratchDisc = new Int32Array(2 * n);
+    scratchLow = new Int32Array(2 * n);
+  }
+  const disc = scratchDisc;
+  const low = scratchLow;
+  disc.fill(-1, 0, n);
+  if (stackV.length < n + 1) {
+    stackV = new Int32Array(2 * n + 2);
+    stackP = new Int32Array(2 * n + 2);
+    stackI = new Int32Array(2 * n + 2);
+  }
+  const sv = stackV;
+  const sp = stackP;
+  const si = stackI;
   let t = 0;
   for (let r = 0; r < n; r++) {
-    if (disc[r] >= 0 || nbr[r].length === 0) continue;
-    const stack = [[r, -1, 0]];
+    if (disc[r] >= 0) continue;
+    let empty = true;
+    for (let i = 0; i < nbr[r].length; i++) if (use === null || use[off[r] + i] === 1) empty = false;
+    if (empty) continue;
+    let top = 0;
+    sv[0] = r;
+    sp[0] = -1;
+    si[0] = 0;
     disc[r] = low[r] = t++;
-    while (stack.length > 0) {
-      const top = stack[stack.length - 1];
-      const [v, parent, i] = top;
-      if (i < nbr[v].length) {
-        top[2]++;
-        const w = nbr[v][i];
+    while (top >= 0) {
+      const v = sv[top];
+      const parent = sp[top];
+      const i = si[top];
+      const nv = nbr[v];
+      if (i < nv.length) {
+        si[top]++;
+        if (use !== null && use[off[v] + i] !== 1) continue;
+        const w = nv[i];
         if (w === parent) continue;
         if (disc[w] < 0) {
           disc[w] = low[w] = t++;
-          stack.push([w, v, 0]);
+          top++;
+          sv[top] = w;
+          sp[top] = v;
+          si[top] = 0;
         } else {
           low[v] = Math.min(low[v], disc[w]);
-          out.add(key(n, v, w));
-          out.add(key(n, w, v));
+          markPair(nbr, off, out, v, w);
         }
       } else {
-        stack.pop();
+        top--;
         if (parent >= 0) {
           low[parent] = Math.min(low[parent], low[v]);
-          if (low[v] <= disc[parent]) {
-            out.add(key(n, v, parent));
-            out.add(key(n, parent, v));
-          }
+          if (low[v] <= disc[parent]) markPair(nbr, off, out, v, parent);
         }
       }
     }
   }
-  return out;
 }
-var PairSet;
+var scratchRing, scratchSlot, scratchPi, scratchPiDouble, scratchDisc, scratchLow, stackV, stackP, stackI, PairSet;
 var init_mancude = __esm({
   "src/chem/cip/mancude.ts"() {
     "use strict";
+    scratchRing = new Uint8Array(256);
+    scratchSlot = new Uint8Array(256);
+    scratchPi = new Uint8Array(128);
+    scratchPiDouble = new Uint8Array(128);
+    scratchDisc = new Int32Array(128);
+    scratchLow = new Int32Array(128);
+    stackV = new Int32Array(64);
+    stackP = new Int32Array(64);
+    stackI = new Int32Array(64);
     PairSet = class {
       table;
       set;
@@ -28036,28 +28760,49 @@ var init_mancude = __esm({
 // src/chem/cip/graph.ts
 function buildGraph2(s) {
   const n = s.atoms.length;
+  const bonds = s.bonds;
+  const deg = flatDeg.length > n ? flatDeg : flatDeg = new Array(2 * n + 2).fill(0);
+  for (let i = 0; i <= n; i++) deg[i] = 0;
+  for (let k = 0; k < bonds.length; k++) {
+    const b = bonds[k];
+    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
+    deg[b.a + 1]++;
+    deg[b.b + 1]++;
+  }
+  for (let i = 0; i < n; i++) deg[i + 1] += deg[i];
+  const total = deg[n];
+  const fn = flatNbr.length >= total ? flatNbr : flatNbr = new Array(2 * total).fill(0);
+  const fo = flatOrd.length >= total ? flatOrd : flatOrd = new Array(2 * total).fill(0);
+  for (let k = 0; k < bonds.length; k++) {
+    const b = bonds[k];
+    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
+    const i = deg[b.a]++;
+    fn[i] = b.b;
+    fo[i] = b.order;
+    const j = deg[b.b]++;
+    fn[j] = b.a;
+    fo[j] = b.order;
+  }
   const nbr = [];
   const ord = [];
-  for (let i = 0; i < n; i++) {
-    nbr.push([]);
-    ord.push([]);
+  for (let a = 0; a < n; a++) {
+    const from = a === 0 ? 0 : deg[a - 1];
+    nbr.push(fn.slice(from, deg[a]));
+    ord.push(fo.slice(from, deg[a]));
   }
-  for (const b of s.bonds) {
-    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
-    nbr[b.a].push(b.b);
-    ord[b.a].push(b.order);
-    nbr[b.b].push(b.a);
-    ord[b.b].push(b.order);
-  }
-  const dupOrd = ord.map((o) => o.slice());
+  const dupOrd = ord.slice();
   for (let a = 0; a < n; a++) {
     if (!expandedValence(s, a, ord[a])) continue;
     for (let i = 0; i < nbr[a].length; i++) {
       const b = nbr[a][i];
       if (ord[a][i] !== 2 || !CHALCOGEN_OR_N.has(s.atoms[b].atomicNumber)) continue;
+      if (dupOrd[a] === ord[a]) dupOrd[a] = ord[a].slice();
       dupOrd[a][i] = 1;
       const j = nbr[b].indexOf(a);
-      if (j >= 0) dupOrd[b][j] = 1;
+      if (j >= 0) {
+        if (dupOrd[b] === ord[b]) dupOrd[b] = ord[b].slice();
+        dupOrd[b][j] = 1;
+      }
     }
   }
   const tetraAt = new Array(n).fill(-1);
@@ -28169,23 +28914,32 @@ function connectedWithout(g, p, q, skip1, skip2) {
 function ringSizeThrough(g, a, b, max) {
   if (seenBuf.length < g.n) {
     seenBuf = new Int32Array(g.n * 2);
+    queueBuf = new Int32Array(g.n * 2);
     stamp = 0;
   }
   const mark = ++stamp;
-  seenBuf[a] = mark;
-  let frontier = [a];
-  for (let d = 0; frontier.length > 0 && d < max - 1; d++) {
-    const next = [];
-    for (const x of frontier) {
-      for (const y of g.nbr[x]) {
+  const seen = seenBuf;
+  const queue = queueBuf;
+  seen[a] = mark;
+  queue[0] = a;
+  let lo = 0;
+  let hi = 1;
+  for (let d = 0; lo < hi && d < max - 1; d++) {
+    let end = hi;
+    for (let q = lo; q < hi; q++) {
+      const x = queue[q];
+      const nx = g.nbr[x];
+      for (let i = 0; i < nx.length; i++) {
+        const y = nx[i];
         if (x === a && y === b) continue;
         if (y === b) return d + 2;
-        if (seenBuf[y] === mark) continue;
-        seenBuf[y] = mark;
-        next.push(y);
+        if (seen[y] === mark) continue;
+        seen[y] = mark;
+        queue[end++] = y;
       }
     }
-    frontier = next;
+    lo = hi;
+    hi = end;
   }
   return 0;
 }
@@ -28193,20 +28947,24 @@ function mancudeOf(g) {
   if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
   return g.mancude;
 }
-var CHALCOGEN_OR_N, seenBuf, stamp;
+var CHALCOGEN_OR_N, flatDeg, flatNbr, flatOrd, seenBuf, queueBuf, stamp;
 var init_graph2 = __esm({
   "src/chem/cip/graph.ts"() {
     "use strict";
     init_masses();
     init_mancude();
     CHALCOGEN_OR_N = /* @__PURE__ */ new Set([7, 8, 16, 34, 52]);
+    flatDeg = new Array(256).fill(0);
+    flatNbr = new Array(512).fill(0);
+    flatOrd = new Array(512).fill(0);
     seenBuf = new Int32Array(256);
+    queueBuf = new Int32Array(256);
     stamp = 0;
   }
 });
 
 // src/chem/cip/digraph.ts
-var H_ATOM, PHANTOM, NODE_BUDGET, CipNode, Digraph;
+var H_ATOM, PHANTOM, NODE_BUDGET, NO_KIDS, scratch, CipNode, Digraph;
 var init_digraph = __esm({
   "src/chem/cip/digraph.ts"() {
     "use strict";
@@ -28214,12 +28972,14 @@ var init_digraph = __esm({
     H_ATOM = -1;
     PHANTOM = -2;
     NODE_BUDGET = 2e5;
+    NO_KIDS = [];
+    scratch = [];
     CipNode = class {
-      constructor(id, atom, z, mass, depth, dist, dup, parent) {
+      constructor(id, atom, z, mancudeDup, depth, dist, dup, parent) {
         this.id = id;
         this.atom = atom;
         this.z = z;
-        this.mass = mass;
+        this.mancudeDup = mancudeDup;
         this.depth = depth;
         this.dist = dist;
         this.dup = dup;
@@ -28228,7 +28988,7 @@ var init_digraph = __esm({
       id;
       atom;
       z;
-      mass;
+      mancudeDup;
       depth;
       dist;
       dup;
@@ -28236,8 +28996,10 @@ var init_digraph = __esm({
       kids = null;
       /** Sorted branch lists per (came-from, rule level); see compare.ts. */
       sorted = null;
-      /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode). */
+      /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode); see down0. */
       down = null;
+      /** The same for Rule 1a, the level nearly every comparison ends at (kept apart: no array by level for it). */
+      down0 = null;
       /** Auxiliary descriptor: undefined = not yet computed, null = none. */
       aux = void 0;
       auxBusy = false;
@@ -28262,20 +29024,21 @@ var init_digraph = __esm({
         this.count++;
         const g = this.g;
         if (z >= 0 && parent !== null) {
-          return new CipNode(
-            this.nextId++,
-            atom,
-            z,
-            mancudeOf(g).dupMass[parent.atom],
-            depth,
-            dist,
-            true,
-            parent
-          );
+          return new CipNode(this.nextId++, atom, z, true, depth, dist, true, parent);
         }
-        if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, 1.008, depth, dist, false, parent);
-        if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, 0, depth, dist, false, parent);
-        return new CipNode(this.nextId++, atom, g.z[atom], g.mass[atom], depth, dist, dup, parent);
+        if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, false, depth, dist, false, parent);
+        if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, false, depth, dist, false, parent);
+        return new CipNode(this.nextId++, atom, g.z[atom], false, depth, dist, dup, parent);
+      }
+      /**
+       * The Rule 2 mass of a node: a duplicate carries the mass of the atom it duplicates (a mancude one the mean
+       * mass of the atoms its atom could be double-bonded to, as for its atomic number); hydrogen 1.008, a phantom 0.
+       */
+      massOf(n) {
+        if (n.mancudeDup) return mancudeOf(this.g).dupMass[n.parent.atom];
+        if (n.atom === H_ATOM) return 1.008;
+        if (n.atom === PHANTOM) return 0;
+        return this.g.mass[n.atom];
       }
       /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */
       phantom(parent) {
@@ -28284,13 +29047,13 @@ var init_digraph = __esm({
       /** Children of `node` in the root's digraph, made on first use (P-92.1.4.2 duplicates included). */
       kids(node) {
         if (node.kids) return node.kids;
-        const out = [];
-        node.kids = out;
-        if (node.dup || node.atom < 0) return out;
+        if (node.dup || node.atom < 0) return node.kids = NO_KIDS;
         if (this.count > NODE_BUDGET) {
           this.truncated = true;
-          return out;
+          return node.kids = NO_KIDS;
         }
+        const out = scratch;
+        let cnt = 0;
         const g = this.g;
         const a = node.atom;
         const parent = node.parent;
@@ -28300,34 +29063,45 @@ var init_digraph = __esm({
         for (let i = 0; i < nb.length; i++) {
           const b = nb[i];
           const order = od[i];
-          const mz = order === 2 && mancudeOf(g).bond.has(a * g.n + b) ? mancudeOf(g).dupZ[a] : -1;
+          let mz = -1;
+          if (order === 2) {
+            const m = mancudeOf(g);
+            if (m.edge[m.off[a] + i] === 1) mz = m.dupZ[a];
+          }
           if (parent !== null && b === parent.atom) {
-            if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
-            else for (let k = 1; k < order; k++) out.push(this.make(b, d, parent.depth, true, node));
+            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, parent.depth, true, node);
             continue;
           }
           let anc = parent;
           while (anc !== null && anc.atom !== b) anc = anc.parent;
           if (anc !== null) {
-            out.push(this.make(b, d, anc.depth, true, node));
-            if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
-            else for (let k = 1; k < order; k++) out.push(this.make(b, d, anc.depth, true, node));
+            out[cnt++] = this.make(b, d, anc.depth, true, node);
+            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, anc.depth, true, node);
           } else {
-            out.push(this.make(b, d, d, false, node));
-            if (mz >= 0) out.push(this.make(b, d, d, true, node, mz));
-            else for (let k = 1; k < order; k++) out.push(this.make(b, d, d, true, node));
+            out[cnt++] = this.make(b, d, d, false, node);
+            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, d, true, node);
           }
         }
-        for (let h = 0; h < g.hCount[a]; h++) out.push(this.make(H_ATOM, d, d, false, node));
-        return out;
+        for (let h = 0; h < g.hCount[a]; h++) out[cnt++] = this.make(H_ATOM, d, d, false, node);
+        const kids = out.slice(0, cnt);
+        for (let j = 0; j < cnt; j++) out[j] = null;
+        node.kids = kids;
+        return kids;
       }
       /** Branches of `node` when it is entered from `from` (null: `node` is the root of the traversal). */
       branches(node, from) {
         const kids = this.kids(node);
         if (from !== null && from === node.parent) return kids;
-        const out = [];
-        if (node.parent !== null && node.parent !== from) out.push(node.parent);
-        for (const k of kids) if (k !== from) out.push(k);
+        const up = node.parent !== null && node.parent !== from;
+        let size = up ? 1 : 0;
+        for (let i = 0; i < kids.length; i++) if (kids[i] !== from) size++;
+        const out = new Array(size);
+        let k = 0;
+        if (up) out[k++] = node.parent;
+        for (let i = 0; i < kids.length; i++) if (kids[i] !== from) out[k++] = kids[i];
         return out;
       }
     };
@@ -28341,8 +29115,8 @@ function rule1a(n) {
 function rule1b(n) {
   return -n.dist;
 }
-function rule2(n) {
-  return n.mass;
+function rule2(mass) {
+  return mass;
 }
 function rule3(label) {
   return label === "Z" ? 2 : label === "E" ? 1 : 0;
@@ -28386,12 +29160,20 @@ function descriptors(rk, x, fx) {
   const out = [];
   const q = [x];
   const qf = [fx];
-  const qk = [[]];
+  const qParent = [-1];
+  const qPos = [0];
+  const qDepth = [0];
   for (let i = 0; i < q.length; i++) {
     const n = q[i];
     if (!n.dup && n.atom >= 0 && rk.value(RULE_4A2, n) === 2) {
       const l = rk.aux(n);
-      if (l !== null && isChiralLabel2(l)) out.push({ label: l, key: [qk[i].length, ...qk[i]], group: 0 });
+      if (l !== null && isChiralLabel2(l)) {
+        const len = qDepth[i];
+        const key3 = new Array(len + 1);
+        key3[0] = len;
+        for (let k = i, at2 = len; at2 >= 1; k = qParent[k], at2--) key3[at2] = qPos[k];
+        out.push({ label: l, key: key3, group: 0 });
+      }
     }
     const s = rk.sorted(n, qf[i], RULE_4A2);
     let pos = 0;
@@ -28399,7 +29181,9 @@ function descriptors(rk, x, fx) {
       if (!s.tie[j]) pos = j;
       q.push(s.nodes[j]);
       qf.push(n);
-      qk.push([...qk[i], pos]);
+      qParent.push(i);
+      qPos.push(pos);
+      qDepth.push(qDepth[i] + 1);
     }
   }
   out.sort((a, b) => keyCompare(a.key, b.key));
@@ -28492,12 +29276,28 @@ var init_rule4b = __esm({
 });
 
 // src/chem/cip/compare.ts
+function clearQueue(q, len) {
+  for (let i = 0; i < len; i++) {
+    q.x[i] = NO_NODE;
+    q.fx[i] = null;
+    q.y[i] = NO_NODE;
+    q.fy[i] = null;
+  }
+}
+function anyTrue(t) {
+  for (let i = 0; i < t.length; i++) if (t[i]) return true;
+  return false;
+}
+function allLeaves2(nodes, i, j) {
+  for (let k = i; k < j; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
+  return true;
+}
 function invertChiral(l) {
   if (l === "e") return "z";
   if (l === "z") return "e";
   return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
 }
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A3, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, Ranker, EMPTY;
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A3, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, pool, poolDepth, Ranker, NO_NODE, NO_TIES, EMPTY2, LEVELS;
 var init_compare = __esm({
   "src/chem/cip/compare.ts"() {
     "use strict";
@@ -28521,6 +29321,8 @@ var init_compare = __esm({
     rule4c2 = rule4c;
     rule52 = rule5;
     rule62 = rule6;
+    pool = [];
+    poolDepth = 0;
     Ranker = class {
       constructor(dg, auxOf) {
         this.dg = dg;
@@ -28556,10 +29358,6 @@ var init_compare = __esm({
        * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
        */
       mirror = false;
-      /** Rule 4b sequences per branch (rule4b.ts). */
-      memo4b = /* @__PURE__ */ new Map();
-      depth = 0;
-      pool = [];
       /** Is `n` the scope node or farther out on its branch? */
       inScope(n) {
         const sc = this.scope;
@@ -28596,7 +29394,7 @@ var init_compare = __esm({
           case RULE_1B:
             return rule1b2(n);
           case RULE_2:
-            return rule22(n);
+            return rule22(this.dg.massOf(n));
           case RULE_3:
             return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule32(this.aux(n));
           case RULE_4A3:
@@ -28627,23 +29425,26 @@ var init_compare = __esm({
         let c = this.value(rule4, x) - this.value(rule4, y);
         if (c !== 0) return c > 0 ? 1 : -1;
         if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
-        const d = this.depth++;
-        let q = this.pool[d];
-        if (q === void 0) q = this.pool[d] = { x: [], fx: [], y: [], fy: [] };
+        if (rule4 === RULE_1A) return this.compare1a(x, fx, y, fy);
+        const d = poolDepth++;
+        let q = pool[d];
+        if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
         const qx = q.x;
         const qfx = q.fx;
         const qy = q.y;
         const qfy = q.fy;
-        qx.length = qfx.length = qy.length = qfy.length = 0;
-        qx.push(x);
-        qfx.push(fx);
-        qy.push(y);
-        qfy.push(fy);
+        qx[0] = x;
+        qfx[0] = fx;
+        qy[0] = y;
+        qfy[0] = fy;
+        let len = 1;
         try {
-          for (let i = 0; i < qx.length; i++) {
-            const sx = this.sorted(qx[i], qfx[i], rule4).nodes;
-            const sy = this.sorted(qy[i], qfy[i], rule4).nodes;
-            const m = Math.min(sx.length, sy.length);
+          for (let i = 0; i < len; i++) {
+            const nx = qx[i];
+            const ny = qy[i];
+            const sx = this.sorted(nx, qfx[i], rule4).nodes;
+            const sy = this.sorted(ny, qfy[i], rule4).nodes;
+            const m = sx.length < sy.length ? sx.length : sy.length;
             for (let j = 0; j < m; j++) {
               c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
               if (c !== 0) return c > 0 ? 1 : -1;
@@ -28658,14 +29459,78 @@ var init_compare = __esm({
               const a = sx[j];
               const b = sy[j];
               if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
-              qx.push(a);
-              qfx.push(qx[i]);
-              qy.push(b);
-              qfy.push(qy[i]);
+              qx[len] = a;
+              qfx[len] = nx;
+              qy[len] = b;
+              qfy[len] = ny;
+              len++;
             }
           }
         } finally {
-          this.depth--;
+          poolDepth--;
+          clearQueue(q, len);
+        }
+        return 0;
+      }
+      /**
+       * compareRule under Rule 1a, one sphere at a time: first the atomic numbers of every set of the sphere, read
+       * from lists ordered by atomic number alone (the full order only permutes runs of equal atomic number, so the
+       * numbers read are the same); only when the whole sphere ties are the lists fully ordered, since that order
+       * pairs the nodes of the next sphere. The same sets are compared in the same order as node by node, and the
+       * deep ordering of runs of equal atomic number is skipped at the sphere that decides.
+       */
+      compare1a(x, fx, y, fy) {
+        const d = poolDepth++;
+        let q = pool[d];
+        if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+        const qx = q.x;
+        const qfx = q.fx;
+        const qy = q.y;
+        const qfy = q.fy;
+        qx[0] = x;
+        qfx[0] = fx;
+        qy[0] = y;
+        qfy[0] = fy;
+        let len = 1;
+        let lo = 0;
+        try {
+          while (lo < len) {
+            const hi = len;
+            for (let i = lo; i < hi; i++) {
+              const sx = this.sorted0(qx[i], qfx[i]).nodes;
+              const sy = this.sorted0(qy[i], qfy[i]).nodes;
+              const m = sx.length < sy.length ? sx.length : sy.length;
+              for (let j = 0; j < m; j++) {
+                const c = sx[j].z - sy[j].z;
+                if (c !== 0) return c > 0 ? 1 : -1;
+              }
+              if (sx.length !== sy.length) {
+                const longer = sx.length > sy.length ? sx : sy;
+                for (let j = m; j < longer.length; j++) if (longer[j].z > 0) return longer === sx ? 1 : -1;
+              }
+            }
+            for (let i = lo; i < hi; i++) {
+              const nx = qx[i];
+              const ny = qy[i];
+              const sx = this.sorted(nx, qfx[i], RULE_1A).nodes;
+              const sy = this.sorted(ny, qfy[i], RULE_1A).nodes;
+              const m = sx.length < sy.length ? sx.length : sy.length;
+              for (let j = 0; j < m; j++) {
+                const a = sx[j];
+                const b = sy[j];
+                if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+                qx[len] = a;
+                qfx[len] = nx;
+                qy[len] = b;
+                qfy[len] = ny;
+                len++;
+              }
+            }
+            lo = hi;
+          }
+        } finally {
+          poolDepth--;
+          clearQueue(q, len);
         }
         return 0;
       }
@@ -28680,10 +29545,15 @@ var init_compare = __esm({
       }
       /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
       sorted(node, from, level2) {
-        if (node.dup || node.atom < 0) return EMPTY;
+        if (level2 === RULE_1A) {
+          const s0 = this.sorted0(node, from);
+          if (s0.pending) this.finish0(s0, node);
+          return s0;
+        }
+        if (node.dup || node.atom < 0) return EMPTY2;
         const plain = from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level2 < RULE_3 || this.inScope(node));
         if (plain) {
-          if (node.down === null) node.down = [];
+          if (node.down === null) node.down = new Array(LEVELS);
           const hit2 = node.down[level2];
           if (hit2 !== void 0) return hit2;
           const out2 = this.sortAt(node, from, level2);
@@ -28701,38 +29571,66 @@ var init_compare = __esm({
         node.sorted.set(key3, out);
         return out;
       }
+      /**
+       * The Rule 1a list of the branches of `node` entered from `from`, cached as sorted() caches it, but possibly
+       * still pending (ordered by atomic number alone).
+       */
+      sorted0(node, from) {
+        if (node.dup || node.atom < 0) return EMPTY2;
+        if (from === node.parent && !this.mirror && this.dg.rule6Ref < 0) {
+          const hit2 = node.down0;
+          if (hit2 !== null) return hit2;
+          const out2 = this.byAtomicNumber(node, from);
+          node.down0 = out2;
+          return out2;
+        }
+        const key3 = (from === null ? 0 : from.id + 1) * 64;
+        if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
+        const hit = node.sorted.get(key3);
+        if (hit) return hit;
+        const out = this.byAtomicNumber(node, from);
+        node.sorted.set(key3, out);
+        return out;
+      }
+      /** The branches by atomic number, highest first (stable): a pending Rule 1a list. */
+      byAtomicNumber(node, from) {
+        const br = this.dg.branches(node, from);
+        const nodes = br === node.kids ? br.slice() : br;
+        for (let i = 1; i < nodes.length; i++) {
+          const v = nodes[i];
+          let j = i - 1;
+          while (j >= 0 && nodes[j].z < v.z) {
+            nodes[j + 1] = nodes[j];
+            j--;
+          }
+          nodes[j + 1] = v;
+        }
+        return { nodes, tie: NO_TIES, pending: true };
+      }
+      /** Order the runs of equal atomic number of a pending Rule 1a list by their whole branches, in place. */
+      finish0(out, node) {
+        const nodes = out.nodes;
+        out.tie = new Array(nodes.length).fill(false);
+        for (let i = 0; i < nodes.length; ) {
+          let j = i + 1;
+          while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
+          if (j - i > 1) {
+            if (allLeaves2(nodes, i, j)) for (let x = i + 1; x < j; x++) out.tie[x] = true;
+            else this.sortRun(nodes, i, j, node, RULE_1A, out);
+          }
+          i = j;
+        }
+        out.pending = false;
+      }
       sortAt(node, from, level2) {
-        let out;
-        if (level2 === 0) {
-          const nodes = this.dg.branches(node, from).slice();
-          for (let i = 1; i < nodes.length; i++) {
-            const v = nodes[i];
-            let j = i - 1;
-            while (j >= 0 && nodes[j].z < v.z) {
-              nodes[j + 1] = nodes[j];
-              j--;
-            }
-            nodes[j + 1] = v;
-          }
-          out = { nodes, tie: nodes.map(() => false) };
-          for (let i = 0; i < nodes.length; ) {
-            let j = i + 1;
-            while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
-            if (j - i > 1) this.sortRun(nodes, i, j, node, 0, out);
-            i = j;
-          }
-        } else {
-          const base = this.sorted(node, from, level2 - 1);
-          if (!this.active[level2] || !base.tie.some((t) => t)) out = base;
-          else {
-            out = { nodes: base.nodes.slice(), tie: base.tie.slice() };
-            for (let i = 0; i < out.nodes.length; ) {
-              let j = i + 1;
-              while (j < out.nodes.length && base.tie[j]) j++;
-              if (j - i > 1) this.sortRun(out.nodes, i, j, node, level2, out);
-              i = j;
-            }
-          }
+        const base = this.sorted(node, from, level2 - 1);
+        if (!this.active[level2] || !anyTrue(base.tie)) return base;
+        const out = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
+        for (let i = 0; i < out.nodes.length; ) {
+          let j = i + 1;
+          while (j < out.nodes.length && base.tie[j]) j++;
+          if (j - i > 1) this.sortRun(out.nodes, i, j, node, level2, out);
+          i = j;
         }
         return out;
       }
@@ -28778,16 +29676,21 @@ var init_compare = __esm({
         return out;
       }
     };
-    EMPTY = { nodes: [], tie: [] };
+    NO_NODE = new CipNode(-1, -2, 0, false, 0, 0, false, null);
+    NO_TIES = [];
+    EMPTY2 = { nodes: [], tie: [], pending: false };
+    LEVELS = 9;
   }
 });
 
 // src/chem/cip/rank.ts
-function insertionSort(order, cmp) {
-  for (let i = 1; i < order.length; i++) {
+function orderBy(m, k) {
+  const order = new Array(k);
+  for (let i = 0; i < k; i++) order[i] = i;
+  for (let i = 1; i < k; i++) {
     const v = order[i];
     let j = i - 1;
-    while (j >= 0 && cmp(order[j], v) < 0) {
+    while (j >= 0 && m[order[j] * k + v] < 0) {
       order[j + 1] = order[j];
       j--;
     }
@@ -28797,43 +29700,47 @@ function insertionSort(order, cmp) {
 }
 function rankLigands(rk, centre, ligands, level2) {
   const k = ligands.length;
-  const m = ligands.map(() => new Array(k).fill(0));
+  const m = new Array(k * k).fill(0);
+  let late = false;
   for (let i = 0; i < k; i++) {
     for (let j = i + 1; j < k; j++) {
       const c = rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
-      m[i][j] = c;
-      m[j][i] = -c;
+      m[i * k + j] = c;
+      m[j * k + i] = -c;
+      if (Math.abs(c) - 1 >= RULE_5) late = true;
     }
   }
-  const order = insertionSort(
-    ligands.map((_, i) => i),
-    (a, b) => m[a][b]
-  );
-  const tieWithPrev = order.map((v, i) => i > 0 && m[order[i - 1]][v] === 0);
-  const tied = tieWithPrev.some((t) => t);
+  const order = orderBy(m, k);
+  const tieWithPrev = new Array(k);
+  let tied = false;
+  for (let i = 0; i < k; i++) {
+    const t = i > 0 && m[order[i - 1] * k + order[i]] === 0;
+    tieWithPrev[i] = t;
+    if (t) tied = true;
+  }
   let pseudo = false;
-  if (!tied && m.some((row) => row.some((c) => Math.abs(c) - 1 >= RULE_5))) {
-    const mm = ligands.map(() => new Array(k).fill(0));
+  if (!tied && late) {
+    const mm = new Array(k * k).fill(0);
     const saved = rk.mirror;
     rk.mirror = true;
     try {
       for (let i = 0; i < k; i++) {
         for (let j = i + 1; j < k; j++) {
-          const c = Math.abs(m[i][j]) - 1 < RULE_5 ? m[i][j] : rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
-          mm[i][j] = c;
-          mm[j][i] = -c;
+          const c0 = m[i * k + j];
+          const c = Math.abs(c0) - 1 < RULE_5 ? c0 : rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
+          mm[i * k + j] = c;
+          mm[j * k + i] = -c;
         }
       }
     } finally {
       rk.mirror = saved;
     }
-    const mirror2 = insertionSort(
-      ligands.map((_, i) => i),
-      (a, b) => mm[a][b]
-    );
+    const mirror2 = orderBy(mm, k);
     const pos = new Array(k);
-    order.forEach((li, p) => pos[li] = p);
-    pseudo = !isEvenPermutation(mirror2.map((li) => pos[li]));
+    for (let p = 0; p < k; p++) pos[order[p]] = p;
+    const perm = new Array(k);
+    for (let p = 0; p < k; p++) perm[p] = pos[mirror2[p]];
+    pseudo = !isEvenPermutation(perm);
   }
   return { order, tied, pseudo, tieWithPrev };
 }
@@ -28873,20 +29780,18 @@ function ligandBranch(dg, centre, lig, used) {
   const br = dg.branches(centre, null);
   if (lig === LONE_PAIR) return dg.phantom(centre);
   if (lig === IMPLICIT_H) {
-    for (const b of br) if (b.atom === H_ATOM && !used.has(b)) return b;
+    for (const b of br) if (b.atom === H_ATOM && !used.includes(b)) return b;
     return null;
   }
-  for (const b of br) if (b.atom === lig && !b.dup && !used.has(b)) return b;
-  for (const b of br) if (b.atom === lig && !used.has(b)) return b;
+  for (const b of br) if (b.atom === lig && !b.dup && !used.includes(b)) return b;
+  for (const b of br) if (b.atom === lig && !used.includes(b)) return b;
   return null;
 }
 function ligandBranches(rk, centre, e) {
-  const used = /* @__PURE__ */ new Set();
   const ligs = [];
   for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, centre, l, used);
+    const b = ligandBranch(rk.dg, centre, l, ligs);
     if (b === null) return null;
-    used.add(b);
     ligs.push(b);
   }
   return ligs;
@@ -28965,10 +29870,8 @@ function axialLabel(rks, ends, e, level2 = RULE_5) {
   for (let i = 0; i < 2; i++) {
     const rk = rks[i];
     const end = ends[i];
-    const used = /* @__PURE__ */ new Set();
-    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], used);
-    if (a !== null) used.add(a);
-    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], used);
+    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], NONE2);
+    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], a !== null ? [a] : NONE2);
     if (a === null || b === null) return null;
     const r = rankLigands(rk, end, [a, b], level2);
     if (r.tied) return null;
@@ -29038,6 +29941,7 @@ function newRanker(dg) {
   const aux = auxFor(dg)(rk);
   return rk;
 }
+var NONE2;
 var init_aux = __esm({
   "src/chem/cip/aux.ts"() {
     "use strict";
@@ -29046,6 +29950,7 @@ var init_aux = __esm({
     init_compare();
     init_rank();
     init_rules();
+    NONE2 = [];
   }
 });
 
@@ -29072,12 +29977,10 @@ function tetrahedral2(g, index, e, ref, c) {
 }
 function tiedTetrahedral(g, index, e, c) {
   const rk = ranker(g, e.centre, index, -1, c);
-  const used = /* @__PURE__ */ new Set();
   const ligs = [];
   for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, rk.dg.root, l, used);
+    const b = ligandBranch(rk.dg, rk.dg.root, l, ligs);
     if (b === null) return [];
-    used.add(b);
     ligs.push(b);
   }
   const r = rankLigands(rk, rk.dg.root, ligs, RULE_5);
@@ -29209,100 +30112,122 @@ var init_labels = __esm({
 });
 
 // src/chem/normalize.ts
+function foldable(s, degree2, order, h, x) {
+  const a = s.atoms[h];
+  if (a.atomicNumber !== 1 || a.isotope !== null || a.charge !== 0 || a.radical !== 0) return false;
+  return a.mapNumber === null && degree2[h] === 1 && order === 1 && s.atoms[x].atomicNumber !== 1;
+}
+function remapStereo(e, at2, lig) {
+  if (e.kind === "tetrahedral") {
+    const l2 = e.ligands;
+    return {
+      kind: e.kind,
+      centre: at2(e.centre),
+      ligands: [lig(l2[0]), lig(l2[1]), lig(l2[2]), lig(l2[3])],
+      winding: e.winding
+    };
+  }
+  if (e.kind === "double-bond") {
+    return {
+      kind: e.kind,
+      ends: [at2(e.ends[0]), at2(e.ends[1])],
+      refs: [lig(e.refs[0]), lig(e.refs[1])],
+      relation: e.relation
+    };
+  }
+  const l = e.ligands;
+  return {
+    kind: e.kind,
+    subtype: e.subtype,
+    ends: [at2(e.ends[0]), at2(e.ends[1])],
+    ligands: [lig(l[0]), lig(l[1]), lig(l[2]), lig(l[3])],
+    winding: e.winding
+  };
+}
 function normalize(s) {
   const n = s.atoms.length;
-  const degree = new Int32Array(n);
-  for (const b of s.bonds) {
-    degree[b.a]++;
-    degree[b.b]++;
+  const m = s.bonds.length;
+  const degree2 = new Int32Array(n);
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
+    degree2[b.a]++;
+    degree2[b.b]++;
   }
   const foldInto = new Int32Array(n).fill(-1);
   const foldedOn = new Int32Array(n);
-  for (const b of s.bonds) {
-    for (const [h, x] of [
-      [b.a, b.b],
-      [b.b, b.a]
-    ]) {
-      const a = s.atoms[h];
-      if (a.atomicNumber !== 1 || a.isotope !== null || a.charge !== 0 || a.radical !== 0) continue;
-      if (a.mapNumber !== null || degree[h] !== 1 || b.order !== 1 || s.atoms[x].atomicNumber === 1) continue;
-      foldInto[h] = x;
-    }
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
+    if (foldable(s, degree2, b.order, b.a, b.b)) foldInto[b.a] = b.b;
+    if (foldable(s, degree2, b.order, b.b, b.a)) foldInto[b.b] = b.a;
   }
   for (let h = 0; h < n; h++) if (foldInto[h] >= 0) foldedOn[foldInto[h]]++;
   let folded = 0;
-  const fromInput = new Array(n);
+  const fromInput = [];
   const toInput = [];
   for (let i = 0; i < n; i++) {
     if (foldInto[i] >= 0) {
-      fromInput[i] = -1;
+      fromInput.push(-1);
       folded++;
     } else {
-      fromInput[i] = toInput.length;
+      fromInput.push(toInput.length);
       toInput.push(i);
     }
   }
   if (folded === 0) return { structure: s, toInput, fromInput, folded };
-  const atoms = toInput.map((i) => ({ ...s.atoms[i], hCount: s.atoms[i].hCount + foldedOn[i] }));
-  const bonds = s.bonds.filter((b) => foldInto[b.a] < 0 && foldInto[b.b] < 0).map((b) => ({ ...b, a: fromInput[b.a], b: fromInput[b.b] }));
+  const atoms = objectList();
+  for (const i of toInput) atoms.push(atomWithHCount(s.atoms[i], s.atoms[i].hCount + foldedOn[i]));
+  const bonds = objectList();
+  for (let k = 0; k < m; k++) {
+    const b = s.bonds[k];
+    if (foldInto[b.a] < 0 && foldInto[b.b] < 0)
+      bonds.push(newBond(fromInput[b.a], fromInput[b.b], b.order, b.aromatic, b.wedge));
+  }
+  const at2 = (x) => fromInput[x];
   const lig = (x) => x < 0 ? x : foldInto[x] >= 0 ? IMPLICIT_H : fromInput[x];
-  const stereo = s.stereo.map((e) => {
-    if (e.kind === "tetrahedral") {
-      const [a3, b2, c2, d2] = e.ligands.map(lig);
-      return { ...e, centre: fromInput[e.centre], ligands: [a3, b2, c2, d2] };
-    }
-    if (e.kind === "double-bond") {
-      return {
-        ...e,
-        ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]],
-        refs: [lig(e.refs[0]), lig(e.refs[1])]
-      };
-    }
-    const [a, b, c, d] = e.ligands.map(lig);
-    return { ...e, ends: [fromInput[e.ends[0]], fromInput[e.ends[1]]], ligands: [a, b, c, d] };
-  });
-  const groups = s.groups.map((g) => ({
-    ...g,
-    atoms: g.atoms.filter((x) => foldInto[x] < 0).map((x) => fromInput[x])
-  }));
-  return { structure: { ...s, atoms, bonds, stereo, groups }, toInput, fromInput, folded };
+  const stereo = objectList();
+  for (const e of s.stereo) stereo.push(remapStereo(e, at2, lig));
+  const groups = objectList();
+  for (const g of s.groups) {
+    const ga = [];
+    for (const x of g.atoms) if (foldInto[x] < 0) ga.push(fromInput[x]);
+    groups.push(newGroup(g.type, g.id, ga));
+  }
+  return { structure: restructure(s, atoms, bonds, stereo, groups), toInput, fromInput, folded };
 }
 function extractAtoms(s, atoms) {
   const index = new Int32Array(s.atoms.length).fill(-1);
   atoms.forEach((a, k) => index[a] = k);
   const keep = (x) => x < 0 || index[x] >= 0;
+  const at2 = (x) => index[x];
   const lig = (x) => x < 0 ? x : index[x];
-  const stereo = [];
+  const stereo = objectList();
   for (const e of s.stereo) {
     if (e.kind === "tetrahedral") {
       if (index[e.centre] < 0 || !e.ligands.every(keep)) continue;
-      const [a, b, c, d] = e.ligands.map(lig);
-      stereo.push({ ...e, centre: index[e.centre], ligands: [a, b, c, d] });
     } else if (e.kind === "double-bond") {
       if (!e.ends.every(keep) || !e.refs.every(keep)) continue;
-      stereo.push({
-        ...e,
-        ends: [index[e.ends[0]], index[e.ends[1]]],
-        refs: [lig(e.refs[0]), lig(e.refs[1])]
-      });
-    } else {
-      if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
-      const [a, b, c, d] = e.ligands.map(lig);
-      stereo.push({ ...e, ends: [index[e.ends[0]], index[e.ends[1]]], ligands: [a, b, c, d] });
-    }
+    } else if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
+    stereo.push(remapStereo(e, at2, lig));
   }
-  return {
-    ...s,
-    atoms: atoms.map((a) => s.atoms[a]),
-    bonds: s.bonds.filter((b) => index[b.a] >= 0 && index[b.b] >= 0).map((b) => ({ ...b, a: index[b.a], b: index[b.b] })),
-    stereo,
-    groups: s.groups.map((g) => ({ ...g, atoms: g.atoms.filter((x) => index[x] >= 0).map((x) => index[x]) })).filter((g) => g.atoms.length > 0)
-  };
+  const subAtoms = objectList();
+  for (const a of atoms) subAtoms.push(s.atoms[a]);
+  const bonds = objectList();
+  for (const b of s.bonds)
+    if (index[b.a] >= 0 && index[b.b] >= 0)
+      bonds.push(newBond(index[b.a], index[b.b], b.order, b.aromatic, b.wedge));
+  const groups = objectList();
+  for (const g of s.groups) {
+    const ga = [];
+    for (const x of g.atoms) if (index[x] >= 0) ga.push(index[x]);
+    if (ga.length > 0) groups.push(newGroup(g.type, g.id, ga));
+  }
+  return restructure(s, subAtoms, bonds, stereo, groups);
 }
 var init_normalize = __esm({
   "src/chem/normalize.ts"() {
     "use strict";
     init_types();
+    init_make();
   }
 });
 
@@ -29420,12 +30345,6 @@ function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
     else if (b.order !== 1) return null;
   }
   const n = s.atoms.length;
-  const centre = (withLonePair) => {
-    const t = Array.from(nb);
-    if (h === 1) t.push(hToken(n, i));
-    if (withLonePair) t.push(lpToken(n, i));
-    return t.length === 4 ? { kind: "centre", tokens: [t[0], t[1], t[2], t[3]] } : null;
-  };
   if (h > 1) return null;
   const c = atom.charge;
   switch (z) {
@@ -29433,42 +30352,53 @@ function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
     case 14:
     case 32:
     case 50:
-      return c === 0 && sigma === 4 && doubles === 0 ? centre(false) : null;
+      return c === 0 && sigma === 4 && doubles === 0 ? centreOf(nb, h, false, n, i) : null;
     case 7:
       if (doubles > 0 || h > 0) return null;
-      if (c === 1 && heavy === 4) return centre(false);
+      if (c === 1 && heavy === 4) return centreOf(nb, h, false, n, i);
       if (c === 0 && heavy === 3) {
         if (atom.aromatic) return null;
-        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i)) return centre(true);
+        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i))
+          return centreOf(nb, h, true, n, i);
         return { kind: "invertible-nitrogen" };
       }
       return null;
     case 15:
     case 33:
       if (resonancePair(s, g, i)) return null;
-      if (c === 0 && doubles === 0 && sigma === 3) return centre(true);
-      if (c === 0 && doubles === 1 && sigma === 4 && h === 0) return centre(false);
-      if (c === 1 && doubles === 0 && sigma === 4 && h === 0) return centre(false);
+      if (c === 0 && doubles === 0 && sigma === 3) return centreOf(nb, h, true, n, i);
+      if (c === 0 && doubles === 1 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
+      if (c === 1 && doubles === 0 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
       return null;
     case 16:
     case 34:
       if (h > 0 || resonancePair(s, g, i)) return null;
-      if (c === 0 && doubles === 1 && heavy === 3) return centre(true);
-      if (c === 1 && doubles === 0 && heavy === 3) return centre(true);
-      if (c === 0 && doubles === 2 && heavy === 4) return centre(false);
+      if (c === 0 && doubles === 1 && heavy === 3) return centreOf(nb, h, true, n, i);
+      if (c === 1 && doubles === 0 && heavy === 3) return centreOf(nb, h, true, n, i);
+      if (c === 0 && doubles === 2 && heavy === 4) return centreOf(nb, h, false, n, i);
       return null;
     default:
       return null;
   }
+}
+function centreOf(nb, h, withLonePair, n, i) {
+  const count2 = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
+  if (count2 !== 4) return null;
+  const t = [0, 0, 0, 0];
+  let k = 0;
+  for (; k < nb.length; k++) t[k] = nb[k];
+  if (h === 1) t[k++] = hToken(n, i);
+  if (withLonePair) t[k] = lpToken(n, i);
+  return { kind: "centre", tokens: t };
 }
 function isSmallBridgehead(rings, i) {
   const mine = rings.rings.filter((r) => r.length <= 8 && r.includes(i));
   for (let a = 0; a < mine.length; a++) {
     for (let b = a + 1; b < mine.length; b++) {
       const set = new Set(mine[a]);
-      let shared = 0;
-      for (const x of mine[b]) if (set.has(x)) shared++;
-      if (shared >= 3) return true;
+      let shared2 = 0;
+      for (const x of mine[b]) if (set.has(x)) shared2++;
+      if (shared2 >= 3) return true;
     }
   }
   return false;
@@ -29546,7 +30476,9 @@ function applyInputStereo(s, units, unitOfAtom, invertible, remarks) {
 function bitFor(u, e, pseudo) {
   if (e.kind === "tetrahedral") {
     if (u.kind !== "tetrahedral") return -1;
-    const list2 = e.ligands.map((x) => pseudo(u, e.centre, x));
+    const l2 = e.ligands;
+    const c = e.centre;
+    const list2 = [pseudo(u, c, l2[0]), pseudo(u, c, l2[1]), pseudo(u, c, l2[2]), pseudo(u, c, l2[3])];
     return rebase(u, list2, e.winding === "@@" ? 1 : 0);
   }
   const [a, b] = e.ends;
@@ -29565,7 +30497,8 @@ function bitFor(u, e, pseudo) {
     return rebase(u, list2, e.relation === "trans" ? 1 : 0);
   }
   if (u.mode !== "parity") return -1;
-  const list = e.ligands.map((x, k) => pseudo(u, k < 2 ? a : b, x));
+  const l = e.ligands;
+  const list = [pseudo(u, a, l[0]), pseudo(u, a, l[1]), pseudo(u, b, l[2]), pseudo(u, b, l[3])];
   return rebase(u, list, e.winding === "@@" ? 1 : 0);
 }
 var init_perceive_input = __esm({
@@ -29624,19 +30557,25 @@ var init_perceive_rescue = __esm({
 
 // src/chem/perceive-bridges.ts
 function bridgeCouplings(s, g, rings, units) {
-  return [...bridgedPairs(s, g, rings, units), ...fusedPairs(g, rings, units)];
+  const out = objectList();
+  for (const c of bridgedPairs(s, g, rings, units)) out.push(c);
+  for (const c of fusedPairs(g, rings, units)) out.push(c);
+  return out;
 }
 function fusedPairs(g, rings, units) {
   const out = [];
-  const unitAt = /* @__PURE__ */ new Map();
-  units.forEach((u, k) => {
-    if (u.kind === "tetrahedral") unitAt.set(u.atoms[0], k);
-  });
-  for (const [a, ka] of unitAt) {
+  let anyCentre = false;
+  for (const u of units) if (u.kind === "tetrahedral") anyCentre = true;
+  if (!anyCentre) return out;
+  const unitAt = new Int32Array(g.n).fill(-1);
+  for (let k = 0; k < units.length; k++) if (units[k].kind === "tetrahedral") unitAt[units[k].atoms[0]] = k;
+  for (let ka = 0; ka < units.length; ka++) {
+    if (units[ka].kind !== "tetrahedral") continue;
+    const a = units[ka].atoms[0];
     for (let i = 0; i < g.nbrs[a].length; i++) {
       const b = g.nbrs[a][i];
-      const kb = unitAt.get(b);
-      if (kb === void 0 || b < a) continue;
+      const kb = unitAt[b];
+      if (kb < 0 || b < a) continue;
       const r = rings.smallestRingOfBond[g.nbrBonds[a][i]];
       if (r !== 3 && r !== 4) continue;
       const through = rings.rings.filter((ring) => adjacentIn(ring, a, b));
@@ -29682,9 +30621,13 @@ function bridgedPairs(s, g, rings, units) {
     if (ringBonds3 >= 3) possible++;
   }
   if (possible < 2) return [];
+  const memo = /* @__PURE__ */ new Map();
   const ringNbrs = (x) => {
-    const out2 = [];
+    let out2 = memo.get(x);
+    if (out2 !== void 0) return out2;
+    out2 = [];
     for (let k = 0; k < g.nbrs[x].length; k++) if (rings.bondInRing[g.nbrBonds[x][k]]) out2.push(g.nbrs[x][k]);
+    memo.set(x, out2);
     return out2;
   };
   const cand = units.map((u, k) => ({ u, k })).filter(({ u }) => u.kind === "tetrahedral" && ringNbrs(u.atoms[0]).length >= 3);
@@ -29755,6 +30698,7 @@ var init_perceive_bridges = __esm({
   "src/chem/perceive-bridges.ts"() {
     "use strict";
     init_perceive_units();
+    init_make();
     MAX_INNER = 3;
   }
 });
@@ -29768,7 +30712,7 @@ function perceive(s) {
   let classCache = null;
   const classesOf = () => classCache ??= equivalenceClasses(s);
   const tokenClass = (t) => t < n ? classesOf()[t] : t < 2 * n ? -1 : -2;
-  const drafts = [];
+  const drafts = objectList();
   const invertibleAll = /* @__PURE__ */ new Set();
   for (let i = 0; i < n; i++) {
     const v = tetrahedralCandidate(s, graph, rings, aromaticBond, i);
@@ -29836,7 +30780,18 @@ function perceive(s) {
     kept = fixedPoint(drafts, graph, n);
   }
   kept.sort((a, b) => Math.min(...a.atoms) - Math.min(...b.atoms));
-  const units = kept.map(({ pairs: _p, ...u }) => u);
+  const units = objectList();
+  for (const d of kept) {
+    units.push({
+      kind: d.kind,
+      mode: d.mode,
+      atoms: d.atoms,
+      tokens: d.tokens,
+      defined: d.defined,
+      bit: d.bit,
+      equivalentPair: d.equivalentPair
+    });
+  }
   const unitOfAtom = new Int32Array(n).fill(-1);
   units.forEach((u, k) => {
     for (const a of u.atoms) unitOfAtom[a] = k;
@@ -29846,7 +30801,7 @@ function perceive(s) {
   components.forEach((c, k) => {
     for (const a of c) componentOfAtom[a] = k;
   });
-  const remarks = [];
+  const remarks = objectList();
   const invertibleNitrogens = applyInputStereo(s, units, unitOfAtom, invertibleAll, remarks);
   const couplings = bridgeCouplings(s, graph, rings, units);
   for (const c of couplings) {
@@ -29858,7 +30813,7 @@ function perceive(s) {
       );
     }
   }
-  const result = {
+  const result2 = {
     structure: s,
     graph,
     rings,
@@ -29871,8 +30826,12 @@ function perceive(s) {
     componentOfAtom,
     remarks
   };
-  Object.defineProperty(result, "classes", { get: classesOf, enumerable: true });
-  return result;
+  lazyClasses.set(result2, classesOf);
+  Object.defineProperty(result2, "classes", { get: classesGetter, enumerable: true });
+  return result2;
+}
+function classesGetter() {
+  return lazyClasses.get(this)();
 }
 function equalPairs(tokens2, cls, anchors, perEnd = false) {
   const out = [];
@@ -29881,7 +30840,7 @@ function equalPairs(tokens2, cls, anchors, perEnd = false) {
       if (cls(tokens2[k]) === cls(tokens2[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens2[k] });
     return out;
   }
-  const c = tokens2.map(cls);
+  const c = [cls(tokens2[0]), cls(tokens2[1]), cls(tokens2[2]), cls(tokens2[3])];
   for (let i = 0; i < 4; i++) {
     let same = 0;
     for (let j = 0; j < 4; j++) if (c[j] === c[i]) same++;
@@ -29896,9 +30855,12 @@ function fixedPoint(drafts, g, n) {
     alive.forEach((d, k) => {
       for (const a of d.atoms) unitAtom[a] = k;
     });
-    const next = alive.filter(
-      (d, k) => d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k))
-    );
+    const next = objectList();
+    for (let k = 0; k < alive.length; k++) {
+      const d = alive[k];
+      if (d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k)))
+        next.push(d);
+    }
     if (next.length === alive.length) return next;
     alive = next;
   }
@@ -29920,6 +30882,7 @@ function branchHoldsUnit(g, anchor, start, unitAtom, self) {
   }
   return false;
 }
+var lazyClasses;
 var init_perceive = __esm({
   "src/chem/perceive.ts"() {
     "use strict";
@@ -29931,6 +30894,8 @@ var init_perceive = __esm({
     init_perceive_input();
     init_perceive_rescue();
     init_perceive_bridges();
+    init_make();
+    lazyClasses = /* @__PURE__ */ new WeakMap();
   }
 });
 
@@ -30016,7 +30981,7 @@ function listStereoisomers(a, max) {
     const stereo = p.units.flatMap(
       (u, k) => stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : []
     );
-    const t = { ...s, stereo, groups: [] };
+    const t = withStereo(s, stereo, []);
     const labels = labelUnits(t).map((r) => ({
       atoms: r.atoms.map((x) => s.atoms[x].inputNumber),
       label: r.label
@@ -30037,6 +31002,7 @@ var init_isomers_list = __esm({
     init_labels();
     init_perceive_units();
     init_symmetry();
+    init_make();
     init_smiles2();
   }
 });
@@ -30317,7 +31283,7 @@ function unitName(p, k) {
 }
 function describe(input, opts = {}) {
   const a = analyse(input);
-  const { p, group } = a;
+  const { p } = a;
   const s = p.structure;
   const labels = /* @__PURE__ */ new Map();
   if (s.stereo.length > 0) {
@@ -39228,13 +40194,13 @@ var require_boolSchema = __commonJS({
       }
     }
     exports.topBoolOrEmptySchema = topBoolOrEmptySchema;
-    function boolOrEmptySchema(it, valid2) {
+    function boolOrEmptySchema(it, valid) {
       const { gen, schema } = it;
       if (schema === false) {
-        gen.var(valid2, false);
+        gen.var(valid, false);
         falseSchemaError(it);
       } else {
-        gen.var(valid2, true);
+        gen.var(valid, true);
       }
     }
     exports.boolOrEmptySchema = boolOrEmptySchema;
@@ -39615,15 +40581,15 @@ var require_code2 = __commonJS({
     exports.usePattern = usePattern;
     function validateArray(cxt) {
       const { gen, data, keyword, it } = cxt;
-      const valid2 = gen.name("valid");
+      const valid = gen.name("valid");
       if (it.allErrors) {
         const validArr = gen.let("valid", true);
         validateItems(() => gen.assign(validArr, false));
         return validArr;
       }
-      gen.var(valid2, true);
+      gen.var(valid, true);
       validateItems(() => gen.break());
-      return valid2;
+      return valid;
       function validateItems(notValid) {
         const len = gen.const("len", (0, codegen_1._)`${data}.length`);
         gen.forRange("i", 0, len, (i) => {
@@ -39631,8 +40597,8 @@ var require_code2 = __commonJS({
             keyword,
             dataProp: i,
             dataPropType: util_1.Type.Num
-          }, valid2);
-          gen.if((0, codegen_1.not)(valid2), notValid);
+          }, valid);
+          gen.if((0, codegen_1.not)(valid), notValid);
         });
       }
     }
@@ -39644,7 +40610,7 @@ var require_code2 = __commonJS({
       const alwaysValid = schema.some((sch) => (0, util_1.alwaysValidSchema)(it, sch));
       if (alwaysValid && !it.opts.unevaluated)
         return;
-      const valid2 = gen.let("valid", false);
+      const valid = gen.let("valid", false);
       const schValid = gen.name("_valid");
       gen.block(() => schema.forEach((_sch, i) => {
         const schCxt = cxt.subschema({
@@ -39652,12 +40618,12 @@ var require_code2 = __commonJS({
           schemaProp: i,
           compositeRule: true
         }, schValid);
-        gen.assign(valid2, (0, codegen_1._)`${valid2} || ${schValid}`);
+        gen.assign(valid, (0, codegen_1._)`${valid} || ${schValid}`);
         const merged = cxt.mergeValidEvaluated(schCxt, schValid);
         if (!merged)
-          gen.if((0, codegen_1.not)(valid2));
+          gen.if((0, codegen_1.not)(valid));
       }));
-      cxt.result(valid2, () => cxt.reset(), () => cxt.error(true));
+      cxt.result(valid, () => cxt.reset(), () => cxt.error(true));
     }
     exports.validateUnion = validateUnion;
   }
@@ -39679,15 +40645,15 @@ var require_keyword = __commonJS({
       const schemaRef = useKeyword(gen, keyword, macroSchema);
       if (it.opts.validateSchema !== false)
         it.self.validateSchema(macroSchema, true);
-      const valid2 = gen.name("valid");
+      const valid = gen.name("valid");
       cxt.subschema({
         schema: macroSchema,
         schemaPath: codegen_1.nil,
         errSchemaPath: `${it.errSchemaPath}/${keyword}`,
         topSchemaRef: schemaRef,
         compositeRule: true
-      }, valid2);
-      cxt.pass(valid2, () => cxt.error(true));
+      }, valid);
+      cxt.pass(valid, () => cxt.error(true));
     }
     exports.macroKeywordCode = macroKeywordCode;
     function funcKeywordCode(cxt, def) {
@@ -39696,9 +40662,9 @@ var require_keyword = __commonJS({
       checkAsyncKeyword(it, def);
       const validate = !$data && def.compile ? def.compile.call(it.self, schema, parentSchema, it) : def.validate;
       const validateRef = useKeyword(gen, keyword, validate);
-      const valid2 = gen.let("valid");
-      cxt.block$data(valid2, validateKeyword);
-      cxt.ok((_a = def.valid) !== null && _a !== void 0 ? _a : valid2);
+      const valid = gen.let("valid");
+      cxt.block$data(valid, validateKeyword);
+      cxt.ok((_a = def.valid) !== null && _a !== void 0 ? _a : valid);
       function validateKeyword() {
         if (def.errors === false) {
           assignValid();
@@ -39714,7 +40680,7 @@ var require_keyword = __commonJS({
       }
       function validateAsync() {
         const ruleErrs = gen.let("ruleErrs", null);
-        gen.try(() => assignValid((0, codegen_1._)`await `), (e) => gen.assign(valid2, false).if((0, codegen_1._)`${e} instanceof ${it.ValidationError}`, () => gen.assign(ruleErrs, (0, codegen_1._)`${e}.errors`), () => gen.throw(e)));
+        gen.try(() => assignValid((0, codegen_1._)`await `), (e) => gen.assign(valid, false).if((0, codegen_1._)`${e} instanceof ${it.ValidationError}`, () => gen.assign(ruleErrs, (0, codegen_1._)`${e}.errors`), () => gen.throw(e)));
         return ruleErrs;
       }
       function validateSync() {
@@ -39726,11 +40692,11 @@ var require_keyword = __commonJS({
       function assignValid(_await = def.async ? (0, codegen_1._)`await ` : codegen_1.nil) {
         const passCxt = it.opts.passContext ? names_1.default.this : names_1.default.self;
         const passSchema = !("compile" in def && !$data || def.schema === false);
-        gen.assign(valid2, (0, codegen_1._)`${_await}${(0, code_1.callValidateCode)(cxt, validateRef, passCxt, passSchema)}`, def.modifying);
+        gen.assign(valid, (0, codegen_1._)`${_await}${(0, code_1.callValidateCode)(cxt, validateRef, passCxt, passSchema)}`, def.modifying);
       }
       function reportErrs(errors) {
         var _a2;
-        gen.if((0, codegen_1.not)((_a2 = def.valid) !== null && _a2 !== void 0 ? _a2 : valid2), errors);
+        gen.if((0, codegen_1.not)((_a2 = def.valid) !== null && _a2 !== void 0 ? _a2 : valid), errors);
       }
     }
     exports.funcKeywordCode = funcKeywordCode;
@@ -39749,10 +40715,10 @@ var require_keyword = __commonJS({
       if (def.async && !schemaEnv.$async)
         throw new Error("async keyword in sync schema");
     }
-    function useKeyword(gen, keyword, result) {
-      if (result === void 0)
+    function useKeyword(gen, keyword, result2) {
+      if (result2 === void 0)
         throw new Error(`keyword "${keyword}" failed to compile`);
-      return gen.scopeValue("keyword", typeof result == "function" ? { ref: result } : { ref: result, code: (0, codegen_1.stringify)(result) });
+      return gen.scopeValue("keyword", typeof result2 == "function" ? { ref: result2 } : { ref: result2, code: (0, codegen_1.stringify)(result2) });
     }
     function validSchemaType(schema, schemaType, allowUndefined = false) {
       return !schemaType.length || schemaType.some((st) => st === "array" ? Array.isArray(schema) : st === "object" ? schema && typeof schema == "object" && !Array.isArray(schema) : typeof schema == st || allowUndefined && typeof schema == "undefined");
@@ -39767,8 +40733,8 @@ var require_keyword = __commonJS({
         throw new Error(`parent schema must have dependencies of ${keyword}: ${deps.join(",")}`);
       }
       if (def.validateSchema) {
-        const valid2 = def.validateSchema(schema[keyword]);
-        if (!valid2) {
+        const valid = def.validateSchema(schema[keyword]);
+        if (!valid) {
           const msg = `keyword "${keyword}" value is invalid at path "${errSchemaPath}": ` + self.errorsText(def.validateSchema.errors);
           if (opts.validateSchema === "log")
             self.logger.error(msg);
@@ -39909,11 +40875,11 @@ var require_json_schema_traverse = __commonJS({
         opts = {};
       }
       cb = opts.cb || cb;
-      var pre = typeof cb == "function" ? cb : cb.pre || function() {
+      var pre2 = typeof cb == "function" ? cb : cb.pre || function() {
       };
       var post = cb.post || function() {
       };
-      _traverse(opts, pre, post, schema, "", schema);
+      _traverse(opts, pre2, post, schema, "", schema);
     };
     traverse2.keywords = {
       additionalItems: true,
@@ -39959,23 +40925,23 @@ var require_json_schema_traverse = __commonJS({
       maxProperties: true,
       minProperties: true
     };
-    function _traverse(opts, pre, post, schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex) {
+    function _traverse(opts, pre2, post, schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex) {
       if (schema && typeof schema == "object" && !Array.isArray(schema)) {
-        pre(schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex);
+        pre2(schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex);
         for (var key3 in schema) {
           var sch = schema[key3];
           if (Array.isArray(sch)) {
             if (key3 in traverse2.arrayKeywords) {
               for (var i = 0; i < sch.length; i++)
-                _traverse(opts, pre, post, sch[i], jsonPtr + "/" + key3 + "/" + i, rootSchema, jsonPtr, key3, schema, i);
+                _traverse(opts, pre2, post, sch[i], jsonPtr + "/" + key3 + "/" + i, rootSchema, jsonPtr, key3, schema, i);
             }
           } else if (key3 in traverse2.propsKeywords) {
             if (sch && typeof sch == "object") {
               for (var prop in sch)
-                _traverse(opts, pre, post, sch[prop], jsonPtr + "/" + key3 + "/" + escapeJsonPtr(prop), rootSchema, jsonPtr, key3, schema, prop);
+                _traverse(opts, pre2, post, sch[prop], jsonPtr + "/" + key3 + "/" + escapeJsonPtr(prop), rootSchema, jsonPtr, key3, schema, prop);
             }
           } else if (key3 in traverse2.keywords || opts.allKeys && !(key3 in traverse2.skipKeywords)) {
-            _traverse(opts, pre, post, sch, jsonPtr + "/" + key3, rootSchema, jsonPtr, key3, schema);
+            _traverse(opts, pre2, post, sch, jsonPtr + "/" + key3, rootSchema, jsonPtr, key3, schema);
           }
         }
         post(schema, jsonPtr, rootSchema, parentJsonPtr, parentKeyword, parentSchema, keyIndex);
@@ -40228,15 +41194,15 @@ var require_validate = __commonJS({
       const schId = typeof schema == "object" && schema[opts.schemaId];
       return schId && (opts.code.source || opts.code.process) ? (0, codegen_1._)`/*# sourceURL=${schId} */` : codegen_1.nil;
     }
-    function subschemaCode(it, valid2) {
+    function subschemaCode(it, valid) {
       if (isSchemaObj(it)) {
         checkKeywords(it);
         if (schemaCxtHasRules(it)) {
-          subSchemaObjCode(it, valid2);
+          subSchemaObjCode(it, valid);
           return;
         }
       }
-      (0, boolSchema_1.boolOrEmptySchema)(it, valid2);
+      (0, boolSchema_1.boolOrEmptySchema)(it, valid);
     }
     function schemaCxtHasRules({ schema, self }) {
       if (typeof schema == "boolean")
@@ -40249,7 +41215,7 @@ var require_validate = __commonJS({
     function isSchemaObj(it) {
       return typeof it.schema != "boolean";
     }
-    function subSchemaObjCode(it, valid2) {
+    function subSchemaObjCode(it, valid) {
       const { schema, gen, opts } = it;
       if (opts.$comment && schema.$comment)
         commentKeyword(it);
@@ -40257,7 +41223,7 @@ var require_validate = __commonJS({
       checkAsyncSchema(it);
       const errsCount = gen.const("_errs", names_1.default.errors);
       typeAndKeywords(it, errsCount);
-      gen.var(valid2, (0, codegen_1._)`${errsCount} === ${names_1.default.errors}`);
+      gen.var(valid, (0, codegen_1._)`${errsCount} === ${names_1.default.errors}`);
     }
     function checkKeywords(it) {
       (0, util_1.checkUnknownRules)(it);
@@ -40524,24 +41490,24 @@ var require_validate = __commonJS({
         else
           this.params = obj;
       }
-      block$data(valid2, codeBlock, $dataValid = codegen_1.nil) {
+      block$data(valid, codeBlock, $dataValid = codegen_1.nil) {
         this.gen.block(() => {
-          this.check$data(valid2, $dataValid);
+          this.check$data(valid, $dataValid);
           codeBlock();
         });
       }
-      check$data(valid2 = codegen_1.nil, $dataValid = codegen_1.nil) {
+      check$data(valid = codegen_1.nil, $dataValid = codegen_1.nil) {
         if (!this.$data)
           return;
         const { gen, schemaCode, schemaType, def } = this;
         gen.if((0, codegen_1.or)((0, codegen_1._)`${schemaCode} === undefined`, $dataValid));
-        if (valid2 !== codegen_1.nil)
-          gen.assign(valid2, true);
+        if (valid !== codegen_1.nil)
+          gen.assign(valid, true);
         if (schemaType.length || def.validateSchema) {
           gen.elseIf(this.invalid$data());
           this.$dataError();
-          if (valid2 !== codegen_1.nil)
-            gen.assign(valid2, false);
+          if (valid !== codegen_1.nil)
+            gen.assign(valid, false);
         }
         gen.else();
       }
@@ -40565,12 +41531,12 @@ var require_validate = __commonJS({
           return codegen_1.nil;
         }
       }
-      subschema(appl, valid2) {
+      subschema(appl, valid) {
         const subschema = (0, subschema_1.getSubschema)(this.it, appl);
         (0, subschema_1.extendSubschemaData)(subschema, this.it, appl);
         (0, subschema_1.extendSubschemaMode)(subschema, appl);
         const nextContext = { ...this.it, ...subschema, items: void 0, props: void 0 };
-        subschemaCode(nextContext, valid2);
+        subschemaCode(nextContext, valid);
         return nextContext;
       }
       mergeEvaluated(schemaCxt, toName) {
@@ -40584,10 +41550,10 @@ var require_validate = __commonJS({
           it.items = util_1.mergeEvaluated.items(gen, schemaCxt.items, it.items, toName);
         }
       }
-      mergeValidEvaluated(schemaCxt, valid2) {
+      mergeValidEvaluated(schemaCxt, valid) {
         const { it, gen } = this;
         if (it.opts.unevaluated && (it.props !== true || it.items !== true)) {
-          gen.if(valid2, () => this.mergeEvaluated(schemaCxt, codegen_1.Name));
+          gen.if(valid, () => this.mergeEvaluated(schemaCxt, codegen_1.Name));
           return true;
         }
       }
@@ -42277,10 +43243,10 @@ var require_core = __commonJS({
         } else {
           v = this.compile(schemaKeyRef);
         }
-        const valid2 = v(data);
+        const valid = v(data);
         if (!("$async" in v))
           this.errors = v.errors;
-        return valid2;
+        return valid;
       }
       compile(schema, _meta) {
         const sch = this._addSchema(schema, _meta);
@@ -42377,15 +43343,15 @@ var require_core = __commonJS({
           this.errors = null;
           return true;
         }
-        const valid2 = this.validate($schema, schema);
-        if (!valid2 && throwOrLogError) {
+        const valid = this.validate($schema, schema);
+        if (!valid && throwOrLogError) {
           const message = "schema is invalid: " + this.errorsText();
           if (this.opts.validateSchema === "log")
             this.logger.error(message);
           else
             throw new Error(message);
         }
-        return valid2;
+        return valid;
       }
       // Get compiled schema by `key` or `ref`.
       // (`key` that was passed to `addSchema` or full schema reference - `schema.$id` or resolved id)
@@ -42778,16 +43744,16 @@ var require_ref = __commonJS({
         }
         function inlineRefSchema(sch) {
           const schName = gen.scopeValue("schema", opts.code.source === true ? { ref: sch, code: (0, codegen_1.stringify)(sch) } : { ref: sch });
-          const valid2 = gen.name("valid");
+          const valid = gen.name("valid");
           const schCxt = cxt.subschema({
             schema: sch,
             dataTypes: [],
             schemaPath: codegen_1.nil,
             topSchemaRef: schName,
             errSchemaPath: $ref
-          }, valid2);
+          }, valid);
           cxt.mergeEvaluated(schCxt);
-          cxt.ok(valid2);
+          cxt.ok(valid);
         }
       }
     };
@@ -42807,19 +43773,19 @@ var require_ref = __commonJS({
       function callAsyncRef() {
         if (!env.$async)
           throw new Error("async schema referenced by sync schema");
-        const valid2 = gen.let("valid");
+        const valid = gen.let("valid");
         gen.try(() => {
           gen.code((0, codegen_1._)`await ${(0, code_1.callValidateCode)(cxt, v, passCxt)}`);
           addEvaluatedFrom(v);
           if (!allErrors)
-            gen.assign(valid2, true);
+            gen.assign(valid, true);
         }, (e) => {
           gen.if((0, codegen_1._)`!(${e} instanceof ${it.ValidationError})`, () => gen.throw(e));
           addErrorsFrom(e);
           if (!allErrors)
-            gen.assign(valid2, false);
+            gen.assign(valid, false);
         });
-        cxt.ok(valid2);
+        cxt.ok(valid);
       }
       function callSyncRef() {
         cxt.result((0, code_1.callValidateCode)(cxt, v, passCxt), () => addEvaluatedFrom(v), () => addErrorsFrom(v));
@@ -43024,9 +43990,9 @@ var require_pattern = __commonJS({
         if ($data) {
           const { regExp } = it.opts.code;
           const regExpCode = regExp.code === "new RegExp" ? (0, codegen_1._)`new RegExp` : (0, util_1.useFunc)(gen, regExp);
-          const valid2 = gen.let("valid");
-          gen.try(() => gen.assign(valid2, (0, codegen_1._)`${regExpCode}(${schemaCode}, ${u}).test(${data})`), () => gen.assign(valid2, false));
-          cxt.fail$data((0, codegen_1._)`!${valid2}`);
+          const valid = gen.let("valid");
+          gen.try(() => gen.assign(valid, (0, codegen_1._)`${regExpCode}(${schemaCode}, ${u}).test(${data})`), () => gen.assign(valid, false));
+          cxt.fail$data((0, codegen_1._)`!${valid}`);
         } else {
           const regExp = (0, code_1.usePattern)(cxt, schema);
           cxt.fail$data((0, codegen_1._)`!${regExp}.test(${data})`);
@@ -43117,9 +44083,9 @@ var require_required = __commonJS({
         function exitOnErrorMode() {
           const missing = gen.let("missing");
           if (useLoop || $data) {
-            const valid2 = gen.let("valid", true);
-            cxt.block$data(valid2, () => loopUntilMissing(missing, valid2));
-            cxt.ok(valid2);
+            const valid = gen.let("valid", true);
+            cxt.block$data(valid, () => loopUntilMissing(missing, valid));
+            cxt.ok(valid);
           } else {
             gen.if((0, code_1.checkMissingProp)(cxt, schema, missing));
             (0, code_1.reportMissingProp)(cxt, missing);
@@ -43132,11 +44098,11 @@ var require_required = __commonJS({
             gen.if((0, code_1.noPropertyInData)(gen, data, prop, opts.ownProperties), () => cxt.error());
           });
         }
-        function loopUntilMissing(missing, valid2) {
+        function loopUntilMissing(missing, valid) {
           cxt.setParams({ missingProperty: missing });
           gen.forOf(missing, schemaCode, () => {
-            gen.assign(valid2, (0, code_1.propertyInData)(gen, data, missing, opts.ownProperties));
-            gen.if((0, codegen_1.not)(valid2), () => {
+            gen.assign(valid, (0, code_1.propertyInData)(gen, data, missing, opts.ownProperties));
+            gen.if((0, codegen_1.not)(valid), () => {
               cxt.error();
               gen.break();
             });
@@ -43211,15 +44177,15 @@ var require_uniqueItems = __commonJS({
         const { gen, data, $data, schema, parentSchema, schemaCode, it } = cxt;
         if (!$data && !schema)
           return;
-        const valid2 = gen.let("valid");
+        const valid = gen.let("valid");
         const itemTypes = parentSchema.items ? (0, dataType_1.getSchemaTypes)(parentSchema.items) : [];
-        cxt.block$data(valid2, validateUniqueItems, (0, codegen_1._)`${schemaCode} === false`);
-        cxt.ok(valid2);
+        cxt.block$data(valid, validateUniqueItems, (0, codegen_1._)`${schemaCode} === false`);
+        cxt.ok(valid);
         function validateUniqueItems() {
           const i = gen.let("i", (0, codegen_1._)`${data}.length`);
           const j = gen.let("j");
           cxt.setParams({ i, j });
-          gen.assign(valid2, true);
+          gen.assign(valid, true);
           gen.if((0, codegen_1._)`${i} > 1`, () => (canOptimize() ? loopN : loopN2)(i, j));
         }
         function canOptimize() {
@@ -43237,7 +44203,7 @@ var require_uniqueItems = __commonJS({
             gen.if((0, codegen_1._)`typeof ${indices}[${item}] == "number"`, () => {
               gen.assign(j, (0, codegen_1._)`${indices}[${item}]`);
               cxt.error();
-              gen.assign(valid2, false).break();
+              gen.assign(valid, false).break();
             }).code((0, codegen_1._)`${indices}[${item}] = ${i}`);
           });
         }
@@ -43246,7 +44212,7 @@ var require_uniqueItems = __commonJS({
           const outer = gen.name("outer");
           gen.label(outer).for((0, codegen_1._)`;${i}--;`, () => gen.for((0, codegen_1._)`${j} = ${i}; ${j}--;`, () => gen.if((0, codegen_1._)`${eql}(${data}[${i}], ${data}[${j}])`, () => {
             cxt.error();
-            gen.assign(valid2, false).break(outer);
+            gen.assign(valid, false).break(outer);
           })));
         }
       }
@@ -43308,20 +44274,20 @@ var require_enum = __commonJS({
         const useLoop = schema.length >= it.opts.loopEnum;
         let eql;
         const getEql = () => eql !== null && eql !== void 0 ? eql : eql = (0, util_1.useFunc)(gen, equal_1.default);
-        let valid2;
+        let valid;
         if (useLoop || $data) {
-          valid2 = gen.let("valid");
-          cxt.block$data(valid2, loopEnum);
+          valid = gen.let("valid");
+          cxt.block$data(valid, loopEnum);
         } else {
           if (!Array.isArray(schema))
             throw new Error("ajv implementation error");
           const vSchema = gen.const("vSchema", schemaCode);
-          valid2 = (0, codegen_1.or)(...schema.map((_x, i) => equalCode(vSchema, i)));
+          valid = (0, codegen_1.or)(...schema.map((_x, i) => equalCode(vSchema, i)));
         }
-        cxt.pass(valid2);
+        cxt.pass(valid);
         function loopEnum() {
-          gen.assign(valid2, false);
-          gen.forOf("v", schemaCode, (v) => gen.if((0, codegen_1._)`${getEql()}(${data}, ${v})`, () => gen.assign(valid2, true).break()));
+          gen.assign(valid, false);
+          gen.forOf("v", schemaCode, (v) => gen.if((0, codegen_1._)`${getEql()}(${data}, ${v})`, () => gen.assign(valid, true).break()));
         }
         function equalCode(vSchema, i) {
           const sch = schema[i];
@@ -43407,15 +44373,15 @@ var require_additionalItems = __commonJS({
         cxt.setParams({ len: items.length });
         cxt.pass((0, codegen_1._)`${len} <= ${items.length}`);
       } else if (typeof schema == "object" && !(0, util_1.alwaysValidSchema)(it, schema)) {
-        const valid2 = gen.var("valid", (0, codegen_1._)`${len} <= ${items.length}`);
-        gen.if((0, codegen_1.not)(valid2), () => validateItems(valid2));
-        cxt.ok(valid2);
+        const valid = gen.var("valid", (0, codegen_1._)`${len} <= ${items.length}`);
+        gen.if((0, codegen_1.not)(valid), () => validateItems(valid));
+        cxt.ok(valid);
       }
-      function validateItems(valid2) {
+      function validateItems(valid) {
         gen.forRange("i", items.length, len, (i) => {
-          cxt.subschema({ keyword, dataProp: i, dataPropType: util_1.Type.Num }, valid2);
+          cxt.subschema({ keyword, dataProp: i, dataPropType: util_1.Type.Num }, valid);
           if (!it.allErrors)
-            gen.if((0, codegen_1.not)(valid2), () => gen.break());
+            gen.if((0, codegen_1.not)(valid), () => gen.break());
         });
       }
     }
@@ -43454,7 +44420,7 @@ var require_items = __commonJS({
       if (it.opts.unevaluated && schArr.length && it.items !== true) {
         it.items = util_1.mergeEvaluated.items(gen, schArr.length, it.items);
       }
-      const valid2 = gen.name("valid");
+      const valid = gen.name("valid");
       const len = gen.const("len", (0, codegen_1._)`${data}.length`);
       schArr.forEach((sch, i) => {
         if ((0, util_1.alwaysValidSchema)(it, sch))
@@ -43463,8 +44429,8 @@ var require_items = __commonJS({
           keyword,
           schemaProp: i,
           dataProp: i
-        }, valid2));
-        cxt.ok(valid2);
+        }, valid));
+        cxt.ok(valid);
       });
       function checkStrictTuple(sch) {
         const { opts, errSchemaPath } = it;
@@ -43581,18 +44547,18 @@ var require_contains = __commonJS({
           return;
         }
         it.items = true;
-        const valid2 = gen.name("valid");
+        const valid = gen.name("valid");
         if (max === void 0 && min === 1) {
-          validateItems(valid2, () => gen.if(valid2, () => gen.break()));
+          validateItems(valid, () => gen.if(valid, () => gen.break()));
         } else if (min === 0) {
-          gen.let(valid2, true);
+          gen.let(valid, true);
           if (max !== void 0)
             gen.if((0, codegen_1._)`${data}.length > 0`, validateItemsWithCount);
         } else {
-          gen.let(valid2, false);
+          gen.let(valid, false);
           validateItemsWithCount();
         }
-        cxt.result(valid2, () => cxt.reset());
+        cxt.result(valid, () => cxt.reset());
         function validateItemsWithCount() {
           const schValid = gen.name("_valid");
           const count2 = gen.let("count", 0);
@@ -43612,13 +44578,13 @@ var require_contains = __commonJS({
         function checkLimits(count2) {
           gen.code((0, codegen_1._)`${count2}++`);
           if (max === void 0) {
-            gen.if((0, codegen_1._)`${count2} >= ${min}`, () => gen.assign(valid2, true).break());
+            gen.if((0, codegen_1._)`${count2} >= ${min}`, () => gen.assign(valid, true).break());
           } else {
-            gen.if((0, codegen_1._)`${count2} > ${max}`, () => gen.assign(valid2, false).break());
+            gen.if((0, codegen_1._)`${count2} > ${max}`, () => gen.assign(valid, false).break());
             if (min === 1)
-              gen.assign(valid2, true);
+              gen.assign(valid, true);
             else
-              gen.if((0, codegen_1._)`${count2} >= ${min}`, () => gen.assign(valid2, true));
+              gen.if((0, codegen_1._)`${count2} >= ${min}`, () => gen.assign(valid, true));
           }
         }
       }
@@ -43700,20 +44666,20 @@ var require_dependencies = __commonJS({
     exports.validatePropertyDeps = validatePropertyDeps;
     function validateSchemaDeps(cxt, schemaDeps = cxt.schema) {
       const { gen, data, keyword, it } = cxt;
-      const valid2 = gen.name("valid");
+      const valid = gen.name("valid");
       for (const prop in schemaDeps) {
         if ((0, util_1.alwaysValidSchema)(it, schemaDeps[prop]))
           continue;
         gen.if(
           (0, code_1.propertyInData)(gen, data, prop, it.opts.ownProperties),
           () => {
-            const schCxt = cxt.subschema({ keyword, schemaProp: prop }, valid2);
-            cxt.mergeValidEvaluated(schCxt, valid2);
+            const schCxt = cxt.subschema({ keyword, schemaProp: prop }, valid);
+            cxt.mergeValidEvaluated(schCxt, valid);
           },
-          () => gen.var(valid2, true)
+          () => gen.var(valid, true)
           // TODO var
         );
-        cxt.ok(valid2);
+        cxt.ok(valid);
       }
     }
     exports.validateSchemaDeps = validateSchemaDeps;
@@ -43741,7 +44707,7 @@ var require_propertyNames = __commonJS({
         const { gen, schema, data, it } = cxt;
         if ((0, util_1.alwaysValidSchema)(it, schema))
           return;
-        const valid2 = gen.name("valid");
+        const valid = gen.name("valid");
         gen.forIn("key", data, (key3) => {
           cxt.setParams({ propertyName: key3 });
           cxt.subschema({
@@ -43750,14 +44716,14 @@ var require_propertyNames = __commonJS({
             dataTypes: ["string"],
             propertyName: key3,
             compositeRule: true
-          }, valid2);
-          gen.if((0, codegen_1.not)(valid2), () => {
+          }, valid);
+          gen.if((0, codegen_1.not)(valid), () => {
             cxt.error(true);
             if (!it.allErrors)
               gen.break();
           });
         });
-        cxt.ok(valid2);
+        cxt.ok(valid);
       }
     };
     exports.default = def;
@@ -43835,21 +44801,21 @@ var require_additionalProperties = __commonJS({
             return;
           }
           if (typeof schema == "object" && !(0, util_1.alwaysValidSchema)(it, schema)) {
-            const valid2 = gen.name("valid");
+            const valid = gen.name("valid");
             if (opts.removeAdditional === "failing") {
-              applyAdditionalSchema(key3, valid2, false);
-              gen.if((0, codegen_1.not)(valid2), () => {
+              applyAdditionalSchema(key3, valid, false);
+              gen.if((0, codegen_1.not)(valid), () => {
                 cxt.reset();
                 deleteAdditional(key3);
               });
             } else {
-              applyAdditionalSchema(key3, valid2);
+              applyAdditionalSchema(key3, valid);
               if (!allErrors)
-                gen.if((0, codegen_1.not)(valid2), () => gen.break());
+                gen.if((0, codegen_1.not)(valid), () => gen.break());
             }
           }
         }
-        function applyAdditionalSchema(key3, valid2, errors) {
+        function applyAdditionalSchema(key3, valid, errors) {
           const subschema = {
             keyword: "additionalProperties",
             dataProp: key3,
@@ -43862,7 +44828,7 @@ var require_additionalProperties = __commonJS({
               allErrors: false
             });
           }
-          cxt.subschema(subschema, valid2);
+          cxt.subschema(subschema, valid);
         }
       }
     };
@@ -43898,7 +44864,7 @@ var require_properties = __commonJS({
         const properties = allProps.filter((p) => !(0, util_1.alwaysValidSchema)(it, schema[p]));
         if (properties.length === 0)
           return;
-        const valid2 = gen.name("valid");
+        const valid = gen.name("valid");
         for (const prop of properties) {
           if (hasDefault(prop)) {
             applyPropertySchema(prop);
@@ -43906,11 +44872,11 @@ var require_properties = __commonJS({
             gen.if((0, code_1.propertyInData)(gen, data, prop, it.opts.ownProperties));
             applyPropertySchema(prop);
             if (!it.allErrors)
-              gen.else().var(valid2, true);
+              gen.else().var(valid, true);
             gen.endIf();
           }
           cxt.it.definedProperties.add(prop);
-          cxt.ok(valid2);
+          cxt.ok(valid);
         }
         function hasDefault(prop) {
           return it.opts.useDefaults && !it.compositeRule && schema[prop].default !== void 0;
@@ -43920,7 +44886,7 @@ var require_properties = __commonJS({
             keyword: "properties",
             schemaProp: prop,
             dataProp: prop
-          }, valid2);
+          }, valid);
         }
       }
     };
@@ -43950,7 +44916,7 @@ var require_patternProperties = __commonJS({
           return;
         }
         const checkProperties = opts.strictSchema && !opts.allowMatchingProperties && parentSchema.properties;
-        const valid2 = gen.name("valid");
+        const valid = gen.name("valid");
         if (it.props !== true && !(it.props instanceof codegen_1.Name)) {
           it.props = (0, util_2.evaluatedPropsToName)(gen, it.props);
         }
@@ -43963,9 +44929,9 @@ var require_patternProperties = __commonJS({
             if (it.allErrors) {
               validateProperties(pat);
             } else {
-              gen.var(valid2, true);
+              gen.var(valid, true);
               validateProperties(pat);
-              gen.if(valid2);
+              gen.if(valid);
             }
           }
         }
@@ -43986,12 +44952,12 @@ var require_patternProperties = __commonJS({
                   schemaProp: pat,
                   dataProp: key3,
                   dataPropType: util_2.Type.Str
-                }, valid2);
+                }, valid);
               }
               if (it.opts.unevaluated && props !== true) {
                 gen.assign((0, codegen_1._)`${props}[${key3}]`, true);
               } else if (!alwaysValid && !it.allErrors) {
-                gen.if((0, codegen_1.not)(valid2), () => gen.break());
+                gen.if((0, codegen_1.not)(valid), () => gen.break());
               }
             });
           });
@@ -44018,14 +44984,14 @@ var require_not = __commonJS({
           cxt.fail();
           return;
         }
-        const valid2 = gen.name("valid");
+        const valid = gen.name("valid");
         cxt.subschema({
           keyword: "not",
           compositeRule: true,
           createErrors: false,
           allErrors: false
-        }, valid2);
-        cxt.failResult(valid2, () => cxt.reset(), () => cxt.error());
+        }, valid);
+        cxt.failResult(valid, () => cxt.reset(), () => cxt.error());
       },
       error: { message: "must NOT be valid" }
     };
@@ -44073,12 +45039,12 @@ var require_oneOf = __commonJS({
         if (it.opts.discriminator && parentSchema.discriminator)
           return;
         const schArr = schema;
-        const valid2 = gen.let("valid", false);
+        const valid = gen.let("valid", false);
         const passing = gen.let("passing", null);
         const schValid = gen.name("_valid");
         cxt.setParams({ passing });
         gen.block(validateOneOf);
-        cxt.result(valid2, () => cxt.reset(), () => cxt.error(true));
+        cxt.result(valid, () => cxt.reset(), () => cxt.error(true));
         function validateOneOf() {
           schArr.forEach((sch, i) => {
             let schCxt;
@@ -44092,10 +45058,10 @@ var require_oneOf = __commonJS({
               }, schValid);
             }
             if (i > 0) {
-              gen.if((0, codegen_1._)`${schValid} && ${valid2}`).assign(valid2, false).assign(passing, (0, codegen_1._)`[${passing}, ${i}]`).else();
+              gen.if((0, codegen_1._)`${schValid} && ${valid}`).assign(valid, false).assign(passing, (0, codegen_1._)`[${passing}, ${i}]`).else();
             }
             gen.if(schValid, () => {
-              gen.assign(valid2, true);
+              gen.assign(valid, true);
               gen.assign(passing, i);
               if (schCxt)
                 cxt.mergeEvaluated(schCxt, codegen_1.Name);
@@ -44121,12 +45087,12 @@ var require_allOf = __commonJS({
         const { gen, schema, it } = cxt;
         if (!Array.isArray(schema))
           throw new Error("ajv implementation error");
-        const valid2 = gen.name("valid");
+        const valid = gen.name("valid");
         schema.forEach((sch, i) => {
           if ((0, util_1.alwaysValidSchema)(it, sch))
             return;
-          const schCxt = cxt.subschema({ keyword: "allOf", schemaProp: i }, valid2);
-          cxt.ok(valid2);
+          const schCxt = cxt.subschema({ keyword: "allOf", schemaProp: i }, valid);
+          cxt.ok(valid);
           cxt.mergeEvaluated(schCxt);
         });
       }
@@ -44160,7 +45126,7 @@ var require_if = __commonJS({
         const hasElse = hasSchema(it, "else");
         if (!hasThen && !hasElse)
           return;
-        const valid2 = gen.let("valid", true);
+        const valid = gen.let("valid", true);
         const schValid = gen.name("_valid");
         validateIf();
         cxt.reset();
@@ -44173,7 +45139,7 @@ var require_if = __commonJS({
         } else {
           gen.if((0, codegen_1.not)(schValid), validateClause("else"));
         }
-        cxt.pass(valid2, () => cxt.error(true));
+        cxt.pass(valid, () => cxt.error(true));
         function validateIf() {
           const schCxt = cxt.subschema({
             keyword: "if",
@@ -44186,8 +45152,8 @@ var require_if = __commonJS({
         function validateClause(keyword, ifClause) {
           return () => {
             const schCxt = cxt.subschema({ keyword }, schValid);
-            gen.assign(valid2, schValid);
-            cxt.mergeValidEvaluated(schCxt, valid2);
+            gen.assign(valid, schValid);
+            cxt.mergeValidEvaluated(schCxt, valid);
             if (ifClause)
               gen.assign(ifClause, (0, codegen_1._)`${keyword}`);
             else
@@ -44462,16 +45428,16 @@ var require_discriminator = __commonJS({
           throw new Error("discriminator: mapping is not supported");
         if (!oneOf)
           throw new Error("discriminator: requires oneOf keyword");
-        const valid2 = gen.let("valid", false);
+        const valid = gen.let("valid", false);
         const tag = gen.const("tag", (0, codegen_1._)`${data}${(0, codegen_1.getProperty)(tagName)}`);
         gen.if((0, codegen_1._)`typeof ${tag} == "string"`, () => validateMapping(), () => cxt.error(false, { discrError: types_1.DiscrError.Tag, tag, tagName }));
-        cxt.ok(valid2);
+        cxt.ok(valid);
         function validateMapping() {
           const mapping = getMapping();
           gen.if(false);
           for (const tagValue in mapping) {
             gen.elseIf((0, codegen_1._)`${tag} === ${tagValue}`);
-            gen.assign(valid2, applyTagSchema(mapping[tagValue]));
+            gen.assign(valid, applyTagSchema(mapping[tagValue]));
           }
           gen.else();
           cxt.error(false, { discrError: types_1.DiscrError.Mapping, tag, tagName });
@@ -44997,7 +45963,7 @@ function invertCounts(c) {
 }
 function compareDescriptors(parsed, units, options = {}) {
   const defined = units.filter((u) => u.defined && u.label !== null);
-  const result = {
+  const result2 = {
     method: "none",
     whyNotPerLocant: null,
     agrees: true,
@@ -45010,20 +45976,20 @@ function compareDescriptors(parsed, units, options = {}) {
     computedCounts: count(defined.map((u) => unitKey2(u)))
   };
   if (parsed.items.length === 0) {
-    result.whyNotPerLocant = "the descriptor cites no configurations";
-    return result;
+    result2.whyNotPerLocant = "the descriptor cites no configurations";
+    return result2;
   }
   const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
   const mapped = units.some((u) => unitLocants(u).length > 0);
   const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
   if (mapped && numeric) {
-    result.method = "per-locant";
+    result2.method = "per-locant";
     const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
     const pairs = [];
     for (const it of parsed.items) {
       const u = byLocant(Number(it.locant));
-      if (!u) result.notStereoUnits.push(it.locant);
-      else if (!u.defined || u.label === null) result.undefinedAt.push(it.locant);
+      if (!u) result2.notStereoUnits.push(it.locant);
+      else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
       else pairs.push({ it, u });
     }
     const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
@@ -45034,28 +46000,28 @@ function compareDescriptors(parsed, units, options = {}) {
     }));
     const direct2 = mismatchesFor(false);
     const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
-    result.matchedInverted = mayInvert && inverted2.length < direct2.length;
-    result.mismatches = result.matchedInverted ? inverted2 : direct2;
+    result2.matchedInverted = mayInvert && inverted2.length < direct2.length;
+    result2.mismatches = result2.matchedInverted ? inverted2 : direct2;
     const cited = new Set(pairs.map((p) => p.u));
     for (const u of defined) {
       if (!cited.has(u)) {
-        result.unlisted.push({
+        result2.unlisted.push({
           locant: unitLocants(u)[0]?.toString() ?? null,
           label: u.label,
           atoms: u.atoms
         });
       }
     }
-    result.agrees = result.mismatches.length === 0 && result.notStereoUnits.length === 0 && result.undefinedAt.length === 0;
-    return result;
+    result2.agrees = result2.mismatches.length === 0 && result2.notStereoUnits.length === 0 && result2.undefinedAt.length === 0;
+    return result2;
   }
-  result.method = "counts";
-  result.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
-  const direct = sameCounts(result.declaredCounts, result.computedCounts);
-  const inverted = mayInvert && sameCounts(invertCounts(result.declaredCounts), result.computedCounts);
-  result.agrees = direct || inverted;
-  result.matchedInverted = !direct && inverted;
-  return result;
+  result2.method = "counts";
+  result2.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
+  const direct = sameCounts(result2.declaredCounts, result2.computedCounts);
+  const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
+  result2.agrees = direct || inverted;
+  result2.matchedInverted = !direct && inverted;
+  return result2;
 }
 var WORDS, HYPHENS, SIGNS, ITEM, MIRROR, AXIAL_KINDS;
 var init_descriptors = __esm({
@@ -45712,6 +46678,86 @@ var init_descriptor_prefixes = __esm({
   }
 });
 
+// src/checks/cis-trans-words.ts
+function judgedDoubleBond(s, facts) {
+  if (facts.units.length !== 1 || facts.units[0].kind !== "double-bond") return null;
+  const unit2 = facts.units[0];
+  const index = new Map(s.atoms.map((a3, i) => [a3.inputNumber, i]));
+  const a = index.get(unit2.atoms[0]);
+  const b = index.get(unit2.atoms[1]);
+  if (a === void 0 || b === void 0) return null;
+  const heavyOther = (end, other) => {
+    const out = [];
+    for (const bond of s.bonds) {
+      const n = bond.a === end ? bond.b : bond.b === end ? bond.a : -1;
+      if (n >= 0 && n !== other && s.atoms[n].atomicNumber !== 1) out.push(n);
+    }
+    return out;
+  };
+  const sa = heavyOther(a, b);
+  const sb = heavyOther(b, a);
+  if (sa.length !== 1 || sb.length !== 1) return null;
+  const el = s.stereo.find(
+    (x) => x.kind === "double-bond" && (x.ends[0] === a && x.ends[1] === b || x.ends[0] === b && x.ends[1] === a)
+  );
+  let drawn = null;
+  if (el && unit2.defined) {
+    const heavyAt = (end) => end === a ? sa[0] : sb[0];
+    let flips = 0;
+    for (const k of [0, 1])
+      if (el.refs[k] === IMPLICIT_H || el.refs[k] !== heavyAt(el.ends[k])) flips++;
+    const same = el.relation === "cis";
+    drawn = same === (flips % 2 === 0) ? "cis" : "trans";
+  }
+  return {
+    ends: [unit2.atoms[0], unit2.atoms[1]],
+    subs: [s.atoms[sa[0]].inputNumber, s.atoms[sb[0]].inputNumber],
+    drawn
+  };
+}
+function cisTransFindings(ctx, decl, facts) {
+  const words = decl.name?.words ?? [];
+  const said = words.includes("cis") ? "cis" : words.includes("trans") ? "trans" : null;
+  if (said === null || words.includes("cis") && words.includes("trans")) return [];
+  const s = ctx.main.structure;
+  if (!s) return [];
+  const j = judgedDoubleBond(s, facts);
+  if (!j) return [];
+  const ends = `atoms ${j.ends[0]}=${j.ends[1]}`;
+  if (j.drawn === null) {
+    return [
+      finding(
+        "cis-trans-word-on-undefined-bond",
+        "name",
+        { word: said, ends, mark: said === "cis" ? "\\" : "/" },
+        "warning"
+      )
+    ];
+  }
+  if (j.drawn === said) return [];
+  return [
+    finding("cis-trans-word-contradicts-drawing", "name", {
+      word: said,
+      ends,
+      subs: `atoms ${j.subs[0]} and ${j.subs[1]}`,
+      drawn: j.drawn === "cis" ? "on the same side (cis)" : "on opposite sides (trans)",
+      label: j.drawn === "cis" ? "Z" : "E"
+    })
+  ];
+}
+var cisTransMessages;
+var init_cis_trans_words = __esm({
+  "src/checks/cis-trans-words.ts"() {
+    "use strict";
+    init_types();
+    init_words();
+    cisTransMessages = {
+      "cis-trans-word-contradicts-drawing": "The name calls the compound {word}, but the drawing puts the two substituents of the double bond {ends} ({subs}) {drawn}, i.e. {label}. Correct the drawing (the / and \\ marks or the wedges) or the name; E/Z descriptors say it without ambiguity.",
+      "cis-trans-word-on-undefined-bond": "The name calls the compound {word}, but the drawing leaves the double bond {ends} undefined. Draw the {word} geometry (e.g. C/C=C{mark}C in SMILES), or drop the word if the geometry is unknown."
+    };
+  }
+});
+
 // src/checks/repeated-components.ts
 function unitSignature(units) {
   return units.map((u) => `${u.kind}/${u.equivalenceClass}/${u.defined ? u.label ?? "?" : "-"}`).sort().join(",");
@@ -45926,6 +46972,7 @@ function run5(ctx) {
     );
   });
   out.push(...prefixFindings(ctx, decl, f));
+  out.push(...cisTransFindings(ctx, decl, f));
   const hasAny = decl.field !== null || decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== "none" || decl.name.words.length > 0 || decl.name.rotationSign !== null);
   const hasComponents = (record2.stereo.components ?? []).some((c) => c.descriptors);
   if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
@@ -45940,6 +46987,7 @@ var init_descriptors_match_structure = __esm({
     init_words();
     init_descriptors();
     init_descriptor_prefixes();
+    init_cis_trans_words();
     init_repeated_components();
     init_nitrogen_inversion();
     messages5 = {
@@ -45954,13 +47002,14 @@ var init_descriptors_match_structure = __esm({
       "descriptor-on-invertible-nitrogen": "{field} declares {text}, but the structure has no stereo unit: its only configuration is drawn at {atoms}, an ordinary amine nitrogen that inverts rapidly and is not a stereocentre, so the descriptors describe nothing that can be isolated. Drop them{seeAlso}.",
       "descriptor-remark": "{field}: {remark}.",
       "fischer-not-compared": "{field} uses the Fischer–Rosanoff descriptor {fischer}, which is defined by analogy with glyceraldehyde and is not comparable with CIP labels, so it was not checked against the structure. Add CIP descriptors, e.g. (S) for L-alanine, to have them checked.",
-      ...prefixMessages
+      ...prefixMessages,
+      ...cisTransMessages
     };
     descriptorsMatchStructure = {
       id: "descriptors-match-structure",
       defaultSeverity: "error",
       summary: "Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.",
-      explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; otherwise only the numbers of R, S, E, Z … can be compared. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared.",
+      explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; otherwise only the numbers of R, S, E, Z … can be compared. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other stereo unit.",
       messages: messages5,
       run: run5
     };
@@ -49198,6 +50247,7 @@ function buildRegistryView(records, cache2, underReview) {
   return {
     entries,
     withConstitution(key3) {
+      if (entries.length === 1) return entries[0].main.facts?.constitutionKey === key3 ? entries : [];
       if (index === null) {
         index = /* @__PURE__ */ new Map();
         entries.forEach((e, i) => {
@@ -49321,9 +50371,9 @@ async function runAudit(options) {
     toAudit = load.records.filter((r) => sel.selected.has(r));
     unmatched = sel.unmatched;
   }
-  const result = auditRecords(toAudit, { checks, config, engine, registry: load.records });
-  if (unmatched.length > 0) result.unmatched = unmatched;
-  return result;
+  const result2 = auditRecords(toAudit, { checks, config, engine, registry: load.records });
+  if (unmatched.length > 0) result2.unmatched = unmatched;
+  return result2;
 }
 function stripUndefined(o) {
   if (!o) return void 0;
@@ -49353,26 +50403,26 @@ function record(r) {
     passed: r.passed.map((p) => ({ check: p.check, evidence: p.evidence }))
   };
 }
-function jsonReport(result) {
-  const s = result.summary;
+function jsonReport(result2) {
+  const s = result2.summary;
   const out = {
-    records: result.records.map(record),
+    records: result2.records.map(record),
     summary: { records: s.records, errors: s.errors, warnings: s.warnings, notes: s.notes, waived: s.waived },
-    tool: { name: result.tool.name, version: result.tool.version },
-    caution: result.caution
+    tool: { name: result2.tool.name, version: result2.tool.version },
+    caution: result2.caution
   };
-  if (result.unmatched?.length) out.unmatched = [...result.unmatched];
+  if (result2.unmatched?.length) out.unmatched = [...result2.unmatched];
   return out;
 }
-function renderJson(result) {
-  return `${JSON.stringify(jsonReport(result), null, 2)}
+function renderJson(result2) {
+  return `${JSON.stringify(jsonReport(result2), null, 2)}
 `;
 }
 
 // src/report/checklist.ts
-var ORDER = { error: 0, warning: 1, note: 2 };
+var ORDER2 = { error: 0, warning: 1, note: 2 };
 function checklistItems(r) {
-  const open = r.findings.filter((f) => !f.waived).sort((a, b) => ORDER[a.severity] - ORDER[b.severity]);
+  const open = r.findings.filter((f) => !f.waived).sort((a, b) => ORDER2[a.severity] - ORDER2[b.severity]);
   const items = open.map((finding3) => ({ kind: "open", finding: finding3 }));
   for (const f of r.findings) {
     if (f.waived)
@@ -49431,7 +50481,31 @@ function computedText(facts) {
 
 // src/report/escape.ts
 var ZWJ = "‍";
+var STEREO_SMILES = /[^\s`|<>&]*\[[^\]\s`|<>&]*@[^\]\s`|<>&]*\][^\s`|<>&]*/g;
 function escapeMarkdown(s) {
+  let out = "";
+  let at2 = 0;
+  for (const m of s.matchAll(STEREO_SMILES)) {
+    const lead = /^[("']*/.exec(m[0])[0].length;
+    const token = smilesPart(m[0].slice(lead));
+    if (!token.includes("@")) continue;
+    const start = m.index + lead;
+    out += escapeText(s.slice(at2, start)) + "`" + token + "`";
+    at2 = start + token.length;
+  }
+  return out + escapeText(s.slice(at2));
+}
+function smilesPart(token) {
+  let t = token.replace(/[,;.:!?'"]+$/, "");
+  const open = (t.match(/\(/g) ?? []).length;
+  let close2 = (t.match(/\)/g) ?? []).length;
+  while (close2 > open && t.endsWith(")")) {
+    t = t.slice(0, -1);
+    close2--;
+  }
+  return t;
+}
+function escapeText(s) {
   return s.replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029]+/g, " ").replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/[\\`*_{}[\]()#+\-.!|~"'$=:^]/g, (c) => `\\${c}`).replace(/@/g, `@${ZWJ}`).replace(/\b(w)(ww\\\.)/gi, `$1${ZWJ}$2`).replace(/\b(https?|ftp|mailto|xmpp)(\\:)/gi, `$1${ZWJ}$2`);
 }
 function safeUrl(url) {
@@ -49443,8 +50517,8 @@ function safeUrl(url) {
 var CHECKLIST_MARKER = "<!-- stereogate-checklist -->";
 var DEFAULT_MAX_CHARS = 6e4;
 var SEVERITY_MARK = { error: "❌", warning: "⚠️", note: "ℹ️" };
-function summaryText(result) {
-  const s = result.summary;
+function summaryText(result2) {
+  const s = result2.summary;
   const parts = [
     `${SEVERITY_MARK.error} ${plural(s.errors, "error")}`,
     `${SEVERITY_MARK.warning} ${plural(s.warnings, "warning")}`,
@@ -49488,35 +50562,35 @@ function recordBlock(r) {
   if (r.findings.length === 0 && r.passed.length === 0) out.push("- [x] no check applied to this record");
   return out.join("\n");
 }
-function cautionBlock(result) {
+function cautionBlock(result2) {
   return `> [!CAUTION]
-> ${escapeMarkdown(result.caution)}`;
+> ${escapeMarkdown(result2.caution)}`;
 }
-function head(result) {
-  const out = [CHECKLIST_MARKER, "## stereogate checklist", "", summaryText(result), ""];
-  if (result.unmatched?.length) {
-    out.push(`No record matched: ${result.unmatched.map(escapeMarkdown).join(", ")}`, "");
+function head(result2) {
+  const out = [CHECKLIST_MARKER, "## stereogate checklist", "", summaryText(result2), ""];
+  if (result2.unmatched?.length) {
+    out.push(`No record matched: ${result2.unmatched.map(escapeMarkdown).join(", ")}`, "");
   }
   return out;
 }
-function renderMarkdown(result, options = {}) {
+function renderMarkdown(result2, options = {}) {
   const maxChars = options.maxChars ?? DEFAULT_MAX_CHARS;
   const full = [
-    ...head(result),
-    ...result.records.flatMap((r) => [recordBlock(r), ""]),
-    cautionBlock(result),
+    ...head(result2),
+    ...result2.records.flatMap((r) => [recordBlock(r), ""]),
+    cautionBlock(result2),
     ""
   ].join("\n");
   if (full.length <= maxChars) return full;
-  return summarised(result, maxChars, options.detailsUrl);
+  return summarised(result2, maxChars, options.detailsUrl);
 }
-function summarised(result, maxChars, detailsUrl) {
+function summarised(result2, maxChars, detailsUrl) {
   const url = detailsUrl ? safeUrl(detailsUrl) : null;
   const pointer = url ? `The full checklist is too long for a comment: read it in the [job summary](${url}).` : "The full checklist is too long for a comment: read it in the job summary of this run.";
-  const top = [...head(result), pointer, ""].join("\n");
-  const bottom = ["", cautionBlock(result), ""].join("\n");
+  const top = [...head(result2), pointer, ""].join("\n");
+  const bottom = ["", cautionBlock(result2), ""].join("\n");
   const lines = [];
-  const flagged = result.records.filter((r) => r.findings.some((f) => !f.waived));
+  const flagged = result2.records.filter((r) => r.findings.some((f) => !f.waived));
   let used = top.length + bottom.length;
   let shown = 0;
   for (const r of flagged) {
@@ -49528,15 +50602,15 @@ function summarised(result, maxChars, detailsUrl) {
     ].filter(Boolean).join(", ");
     const checks = [...new Set(r.findings.filter((f) => !f.waived).map((f) => `\`${f.check}\``))].join(", ");
     const line = `- [ ] **${escapeMarkdown(r.id ?? "(no id)")}** · ${escapeMarkdown(r.file)}: ${counts} (${checks})`;
-    const reserve = 80;
-    if (used + line.length + 1 + reserve > maxChars) break;
+    const reserve2 = 80;
+    if (used + line.length + 1 + reserve2 > maxChars) break;
     lines.push(line);
     used += line.length + 1;
     shown++;
   }
   if (shown < flagged.length)
     lines.push(`- … and ${plural(flagged.length - shown, "more record")} with findings`);
-  const clean = result.records.length - flagged.length;
+  const clean = result2.records.length - flagged.length;
   if (clean > 0) lines.push(`- [x] ${plural(clean, "record")} without open findings`);
   const text = `${top}${lines.join("\n")}
 ${bottom}`;
@@ -49580,16 +50654,16 @@ ${info.explanation}` },
 function encodeUri(path) {
   return path.split("/").map(encodeURIComponent).join("/");
 }
-function renderSarif(result, checks, options = {}) {
-  return `${JSON.stringify(sarifLog(result, checks, options), null, 2)}
+function renderSarif(result2, checks, options = {}) {
+  return `${JSON.stringify(sarifLog(result2, checks, options), null, 2)}
 `;
 }
-function sarifLog(result, checks, options = {}) {
+function sarifLog(result2, checks, options = {}) {
   const infos = [
     ...checks.map((c) => ({ info: c })),
     ...BUILTIN_RULES.filter((b) => !checks.some((c) => c.id === b.id)).map((info) => ({ info }))
   ];
-  for (const r of result.records) {
+  for (const r of result2.records) {
     for (const f of r.findings) {
       if (!infos.some((x) => x.info.id === f.check)) {
         infos.push({
@@ -49601,7 +50675,7 @@ function sarifLog(result, checks, options = {}) {
   const rules = infos.map((x) => rule(x.info));
   const index = new Map(infos.map((x, i) => [x.info.id, i]));
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
-  const results = result.records.flatMap(
+  const results = result2.records.flatMap(
     (r) => r.findings.map((f) => {
       const physical = {
         artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
@@ -49634,14 +50708,14 @@ function sarifLog(result, checks, options = {}) {
       {
         tool: {
           driver: {
-            name: result.tool.name,
-            version: result.tool.version,
-            semanticVersion: result.tool.version,
+            name: result2.tool.name,
+            version: result2.tool.version,
+            semanticVersion: result2.tool.version,
             rules
           }
         },
         results,
-        properties: { caution: result.caution, summary: result.summary }
+        properties: { caution: result2.caution, summary: result2.summary }
       }
     ]
   };
@@ -49687,25 +50761,25 @@ function block(r, paint) {
   }
   return lines;
 }
-function summaryLine(result) {
-  const s = result.summary;
+function summaryLine(result2) {
+  const s = result2.summary;
   const parts = [plural(s.errors, "error"), plural(s.warnings, "warning"), plural(s.notes, "note")];
   if (s.waived > 0) parts.push(`${s.waived} accepted by waiver${s.waived === 1 ? "" : "s"}`);
   return `${plural(s.records, "record")} audited: ${parts.join(", ")}`;
 }
-function renderText(result, options = {}) {
+function renderText(result2, options = {}) {
   const paint = options.color ? (style, s2) => `\x1B[${CODES[style]}m${s2}\x1B[0m` : (_style, s2) => s2;
   const out = [];
-  for (const r of result.records) {
+  for (const r of result2.records) {
     out.push(...block(r, paint), "");
   }
-  if (result.unmatched?.length) {
-    out.push(paint("yellow", `No record matched: ${result.unmatched.map(safeText).join(", ")}`), "");
+  if (result2.unmatched?.length) {
+    out.push(paint("yellow", `No record matched: ${result2.unmatched.map(safeText).join(", ")}`), "");
   }
-  const s = result.summary;
+  const s = result2.summary;
   const colour = s.errors > 0 ? "red" : s.warnings > 0 ? "yellow" : "green";
-  out.push(paint(colour, summaryLine(result)));
-  out.push(paint("dim", result.caution));
+  out.push(paint(colour, summaryLine(result2)));
+  out.push(paint("dim", result2.caution));
   return `${out.join("\n")}
 `;
 }
@@ -49792,12 +50866,12 @@ var OTHER_WORDS = "(other words)";
 var VocabularyTally = class {
   mapped = /* @__PURE__ */ new Map();
   notUnderstood = /* @__PURE__ */ new Map();
-  add(word, result) {
-    if (result.how === "mapped" && result.form) {
-      const e = this.mapped.get(word) ?? { form: result.form, count: 0 };
+  add(word, result2) {
+    if (result2.how === "mapped" && result2.form) {
+      const e = this.mapped.get(word) ?? { form: result2.form, count: 0 };
       e.count++;
       this.mapped.set(word, e);
-    } else if (result.how === "not-understood") {
+    } else if (result2.how === "not-understood") {
       const key3 = this.notUnderstood.has(word) || this.notUnderstood.size < MAX_WORDS ? word : OTHER_WORDS;
       this.notUnderstood.set(key3, (this.notUnderstood.get(key3) ?? 0) + 1);
     }
@@ -49965,15 +51039,15 @@ function auditItem(item, ctx) {
       components: []
     }
   };
-  const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
+  const result2 = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
   const out = {
-    ...result,
-    computed: result.computed ? bulkFacts(result.computed) : null,
+    ...result2,
+    computed: result2.computed ? bulkFacts(result2.computed) : null,
     seq: item.seq,
     origin: { source: item.source, record: item.record, line: item.line },
     form_word: { word: conv.formWord, how: conv.formHow }
   };
-  if (conv.structureText !== null && result.findings.some((f) => !f.waived))
+  if (conv.structureText !== null && result2.findings.some((f) => !f.waived))
     out.structure_text = conv.structureText;
   return out;
 }
@@ -50446,8 +51520,8 @@ async function* mapOrdered(items, opts) {
   const iterator = Symbol.asyncIterator in items ? items[Symbol.asyncIterator]() : toAsync(items);
   const done = /* @__PURE__ */ new Map();
   const stats = { window: window2, maxAhead: 0, maxBuffered: 0, maxPending: 0, items: 0, replaced: 0 };
-  const record2 = (at2, result) => {
-    done.set(at2, result);
+  const record2 = (at2, result2) => {
+    done.set(at2, result2);
     if (done.size > stats.maxBuffered) stats.maxBuffered = done.size;
   };
   const pending = [];
@@ -50463,10 +51537,10 @@ async function* mapOrdered(items, opts) {
   };
   const slots = [];
   const spawn = () => {
-    const shared = new SharedArrayBuffer(8);
-    const progress = new Int32Array(shared);
+    const shared2 = new SharedArrayBuffer(8);
+    const progress = new Int32Array(shared2);
     progress[0] = -1;
-    const data = { user: opts.workerData, progress: shared };
+    const data = { user: opts.workerData, progress: shared2 };
     const worker = startWorker(opts.script, opts.execArgv, data);
     const slot = {
       worker,
@@ -50487,9 +51561,9 @@ async function* mapOrdered(items, opts) {
       if (slot.dead) return;
       slot.lastProgress = Date.now();
       const finished = /* @__PURE__ */ new Set();
-      for (const [index, result] of msg.results) {
+      for (const [index, result2] of msg.results) {
         finished.add(index);
-        record2(index, result);
+        record2(index, result2);
       }
       slot.queue = slot.queue.filter((j) => !finished.has(j.index));
       notify();
@@ -50499,8 +51573,8 @@ async function* mapOrdered(items, opts) {
       slot.dead = true;
       const [current, rest] = takeCurrent(slot);
       if (current) {
-        const result = opts.onCrash ? opts.onCrash(current.item, current.index, String(err2?.message ?? err2)) : opts.onTimeout(current.item, current.index);
-        record2(current.index, result);
+        const result2 = opts.onCrash ? opts.onCrash(current.item, current.index, String(err2?.message ?? err2)) : opts.onTimeout(current.item, current.index);
+        record2(current.index, result2);
       }
       pending.unshift(...rest);
       replace(slot);
@@ -51435,9 +52509,9 @@ var USAGE = [
   "",
   "Legacy exports (.sdf, .csv, .tsv) are audited in bulk; `stereogate merge --help` lists the bulk options."
 ].join("\n");
-function reachesThreshold(result, failOn) {
+function reachesThreshold(result2, failOn) {
   if (failOn === "never") return false;
-  const s = result.summary;
+  const s = result2.summary;
   return failOn === "error" ? s.errors > 0 : s.errors + s.warnings > 0;
 }
 function toRootPaths(paths, root) {
@@ -51477,9 +52551,9 @@ function makeAuditCommand(deps = {}) {
       const output = values.output;
       if (output === "") throw new UsageError("--output needs a file name");
       const paths = toRootPaths(positionals, root);
-      let result;
+      let result2;
       try {
-        result = await runAudit({
+        result2 = await runAudit({
           root,
           paths,
           configFile: values.config,
@@ -51490,13 +52564,13 @@ function makeAuditCommand(deps = {}) {
         if (e instanceof ConfigError) throw new UsageError(e.message);
         throw e;
       }
-      if (result.unmatched?.length) {
+      if (result2.unmatched?.length) {
         throw new UsageError(
-          `no record file, record folder or molfile in ${root} matches: ${result.unmatched.join(", ")}`
+          `no record file, record folder or molfile in ${root} matches: ${result2.unmatched.join(", ")}`
         );
       }
       const checks = deps.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
-      const report = format === "json" ? renderJson(result) : format === "markdown" ? renderMarkdown(result) : format === "sarif" ? renderSarif(result, checks) : renderText(result, { color: output === void 0 && shouldColor(process.stdout) });
+      const report = format === "json" ? renderJson(result2) : format === "markdown" ? renderMarkdown(result2) : format === "sarif" ? renderSarif(result2, checks) : renderText(result2, { color: output === void 0 && shouldColor(process.stdout) });
       if (output !== void 0) {
         try {
           writeFileSync2(output, report);
@@ -51506,7 +52580,7 @@ function makeAuditCommand(deps = {}) {
       } else {
         io.out(report);
       }
-      return reachesThreshold(result, failOn) ? EXIT_FINDINGS : EXIT_OK;
+      return reachesThreshold(result2, failOn) ? EXIT_FINDINGS : EXIT_OK;
     }
   };
 }

@@ -99,7 +99,7 @@ const unitKey = (atoms: number[]): string => [...atoms].sort((a, b) => a - b).jo
 
 export function describe(input: Structure, opts: DescribeOptions = {}): StructureFacts {
   const a = analyse(input);
-  const { p, group } = a;
+  const { p } = a;
   const s = p.structure;
   const labels = new Map<string, CipLabel>();
   if (s.stereo.length > 0) for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);

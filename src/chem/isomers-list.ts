@@ -10,6 +10,7 @@ import { labelUnits } from './labels.js';
 import { unitStereo } from './perceive-units.js';
 import { canonicalState, sameState, stereogenicIn } from './symmetry.js';
 import type { Structure } from './types.js';
+import { withStereo } from './read/make.js';
 import { writeSmiles } from './write/smiles.js';
 
 export function listStereoisomers(a: Analysis, max: number): StereoisomerEntry[] {
@@ -23,7 +24,7 @@ export function listStereoisomers(a: Analysis, max: number): StereoisomerEntry[]
     const stereo = p.units.flatMap((u, k) =>
       stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : [],
     );
-    const t: Structure = { ...s, stereo, groups: [] };
+    const t: Structure = withStereo(s, stereo, []);
     const labels = labelUnits(t).map((r) => ({
       atoms: r.atoms.map((x) => s.atoms[x].inputNumber),
       label: r.label,

@@ -7,7 +7,14 @@
  * the input's numbering. A stereo element that named two hydrogens of one atom describes no stereo unit; it
  * stays as written and perception reports it.
  */
-import { IMPLICIT_H, type Atom, type Bond, type StereoElement, type StereoGroup, type Structure } from './types.js';
+import {
+  IMPLICIT_H,
+  type Atom,
+  type Bond,
+  type StereoElement,
+  type StereoGroup,
+  type Structure,
+} from './types.js';
 import { atomWithHCount, newBond, newGroup, objectList, restructure } from './read/make.js';
 
 export interface Normalized {
@@ -31,7 +38,12 @@ function foldable(s: Structure, degree: Int32Array, order: number, h: number, x:
 function remapStereo(e: StereoElement, at: (x: number) => number, lig: (x: number) => number): StereoElement {
   if (e.kind === 'tetrahedral') {
     const l = e.ligands;
-    return { kind: e.kind, centre: at(e.centre), ligands: [lig(l[0]), lig(l[1]), lig(l[2]), lig(l[3])], winding: e.winding };
+    return {
+      kind: e.kind,
+      centre: at(e.centre),
+      ligands: [lig(l[0]), lig(l[1]), lig(l[2]), lig(l[3])],
+      winding: e.winding,
+    };
   }
   if (e.kind === 'double-bond') {
     return {
@@ -125,7 +137,8 @@ export function extractAtoms(s: Structure, atoms: number[]): Structure {
   for (const a of atoms) subAtoms.push(s.atoms[a]);
   const bonds = objectList<Bond>();
   for (const b of s.bonds)
-    if (index[b.a] >= 0 && index[b.b] >= 0) bonds.push(newBond(index[b.a], index[b.b], b.order, b.aromatic, b.wedge));
+    if (index[b.a] >= 0 && index[b.b] >= 0)
+      bonds.push(newBond(index[b.a], index[b.b], b.order, b.aromatic, b.wedge));
   const groups = objectList<StereoGroup>();
   for (const g of s.groups) {
     const ga: number[] = [];

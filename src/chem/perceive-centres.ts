@@ -68,7 +68,8 @@ export function tetrahedralCandidate(
       if (c === 1 && heavy === 4) return centreOf(nb, h, false, n, i);
       if (c === 0 && heavy === 3) {
         if (atom.aromatic) return null;
-        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i)) return centreOf(nb, h, true, n, i);
+        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i))
+          return centreOf(nb, h, true, n, i);
         return { kind: 'invertible-nitrogen' };
       }
       return null;

@@ -229,7 +229,8 @@ function fixedPoint(drafts: Draft[], g: Graph, n: number): Draft[] {
     const next = objectList<Draft>();
     for (let k = 0; k < alive.length; k++) {
       const d = alive[k];
-      if (d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k))) next.push(d);
+      if (d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k)))
+        next.push(d);
     }
     if (next.length === alive.length) return next;
     alive = next;

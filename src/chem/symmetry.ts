@@ -15,6 +15,7 @@ import type { Perception } from './perceive.js';
 import type { StereoElement, Structure } from './types.js';
 import type { Coupling } from './perceive-bridges.js';
 import { ParityUnion } from './symmetry-solve.js';
+import { withStereo } from './read/make.js';
 
 export interface UnitGroup {
   /** Distinct signed permutations of the units; element 0 is the identity. */
@@ -293,8 +294,14 @@ export function stereogenicIn(g: UnitGroup, x: State, k: number): boolean {
 
 /** The mirror image: tetrahedral and axial windings inverted, cis/trans kept. Groups and flags unchanged. */
 export function mirror(s: Structure): Structure {
-  const stereo = s.stereo.map((e): StereoElement =>
-    e.kind === 'double-bond' ? e : { ...e, winding: e.winding === '@' ? '@@' : '@' },
-  );
-  return { ...s, stereo };
+  // literals with the readers' property order, not spreads: one hidden class per kind of object (see read/make.ts)
+  const stereo = s.stereo.map((e): StereoElement => {
+    const winding = e.kind === 'double-bond' ? null : e.winding === '@' ? '@@' : '@';
+    if (e.kind === 'tetrahedral')
+      return { kind: 'tetrahedral', centre: e.centre, ligands: e.ligands, winding: winding! };
+    if (e.kind === 'axial')
+      return { kind: 'axial', subtype: e.subtype, ends: e.ends, ligands: e.ligands, winding: winding! };
+    return e;
+  });
+  return withStereo(s, stereo);
 }

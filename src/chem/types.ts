@@ -143,4 +143,5 @@ export interface ReadError {
   at: SourcePosition;
 }
 
-export type ReadResult = { ok: true; structure: Structure; warnings: ReadError[] } | { ok: false; error: ReadError };
+export type ReadResult =
+  { ok: true; structure: Structure; warnings: ReadError[] } | { ok: false; error: ReadError };

@@ -161,7 +161,12 @@ describe('bulk audit command line: exit codes, outputs, summary', () => {
     expect(meso.computed.units).toHaveLength(2);
     expect(meso.computed.meso).toBe(true);
     expect(meso.computed.stereocenters).toBeUndefined();
-    expect(meso.computed.components[0]).toEqual({ index: 0, formula: 'C4H6O6', heavyAtoms: 10, role: 'parent' });
+    expect(meso.computed.components[0]).toEqual({
+      index: 0,
+      formula: 'C4H6O6',
+      heavyAtoms: 10,
+      role: 'parent',
+    });
     const json = JSON.parse(readFileSync(out('json'), 'utf8'));
     expect(json.records).toHaveLength(6);
     expect(json.summary).toEqual(jsonl.at(-1).summary);

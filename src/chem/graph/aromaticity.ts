@@ -83,7 +83,12 @@ export function aromaticBonds(s: Structure, rings?: RingInfo, g?: Graph): boolea
  * huckel() of the atoms of two rings together, when they share exactly two atoms (false otherwise). `mark` is
  * all zero on entry and on return.
  */
-function envelopeHuckel(p: readonly number[], q: readonly number[], donation: Int8Array, mark: Uint8Array): boolean {
+function envelopeHuckel(
+  p: readonly number[],
+  q: readonly number[],
+  donation: Int8Array,
+  mark: Uint8Array,
+): boolean {
   let common = 0;
   let pi = true;
   let sum = 0;

@@ -86,7 +86,7 @@ export function constitutionKey(s: Structure): string {
     h1 = Math.imul(h1 ^ x, 0x01000193);
     h2 = Math.imul(h2 ^ x, 0x5bd1e995);
     h2 ^= h2 >>> 13;
-    x = inv[v] % 4294967296 | 0;
+    x = (inv[v] % 4294967296) | 0;
     h1 = Math.imul(h1 ^ x, 0x01000193);
     h2 = Math.imul(h2 ^ x, 0x5bd1e995);
     h2 ^= h2 >>> 13;

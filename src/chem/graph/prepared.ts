@@ -37,7 +37,8 @@ export function refinedPartition(p: Prepared): Partition {
  * more than the lookups save.)
  */
 const RECENT = 8;
-const cache: { s: Structure; sum: number; aromatic: readonly boolean[] | undefined; prepared: Prepared }[] = [];
+const cache: { s: Structure; sum: number; aromatic: readonly boolean[] | undefined; prepared: Prepared }[] =
+  [];
 
 export function prepare(s: Structure, aromatic?: readonly boolean[]): Prepared {
   const sum = checksum(s, aromatic);

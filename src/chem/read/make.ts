@@ -44,7 +44,18 @@ export function newAtom(
   inputNumber: number,
   coords: [number, number, number] | null,
 ): Atom {
-  return { element, atomicNumber, charge, isotope, hCount, aromatic, radical, mapNumber, inputNumber, coords };
+  return {
+    element,
+    atomicNumber,
+    charge,
+    isotope,
+    hCount,
+    aromatic,
+    radical,
+    mapNumber,
+    inputNumber,
+    coords,
+  };
 }
 
 /** A copy of `a` with another hCount (the coordinate array, never mutated, is shared). */
@@ -63,7 +74,13 @@ export function atomWithHCount(a: Atom, hCount: number): Atom {
   );
 }
 
-export function newBond(a: number, b: number, order: BondOrder, aromatic: boolean, wedge: Bond['wedge']): Bond {
+export function newBond(
+  a: number,
+  b: number,
+  order: BondOrder,
+  aromatic: boolean,
+  wedge: Bond['wedge'],
+): Bond {
   return { a, b, order, aromatic, wedge };
 }
 
@@ -92,7 +109,11 @@ export function restructure(
 }
 
 /** `s` with another stereo list (and optionally other groups): the replacement for `{ ...s, stereo }`. */
-export function withStereo(s: Structure, stereo: StereoElement[], groups: StereoGroup[] = s.groups): Structure {
+export function withStereo(
+  s: Structure,
+  stereo: StereoElement[],
+  groups: StereoGroup[] = s.groups,
+): Structure {
   return newStructure(s.atoms, s.bonds, stereo, groups, s.chiralFlag, s.title, s.properties, s.dimension);
 }
 

@@ -154,7 +154,14 @@ function parseInto(s: string, start: number): SmilesGraph | { error: TokenError 
     return ev++;
   };
   // bond a-b with the given symbol (order 0: none written)
-  const addBond = (a: number, b: number, order: number, arom: number, dir: number, offset: number): number => {
+  const addBond = (
+    a: number,
+    b: number,
+    order: number,
+    arom: number,
+    dir: number,
+    offset: number,
+  ): number => {
     bA[m] = a;
     bB[m] = b;
     if (order === 0) {
@@ -314,7 +321,8 @@ function parseInto(s: string, start: number): SmilesGraph | { error: TokenError 
         if (a === prev)
           return err('smiles-ring-bond-to-self', `ring closure ${num} bonds an atom to itself`, at);
         for (let e = firstEv[prev]!; e >= 0; e = evNext[e]!)
-          if (evAtom[e] === a) return err('smiles-duplicate-bond', `ring closure ${num} repeats an existing bond`, at);
+          if (evAtom[e] === a)
+            return err('smiles-duplicate-bond', `ring closure ${num} repeats an existing bond`, at);
         // combine the symbols written at the two ends
         if (pOrder !== 0) {
           if (oOrder !== 0) {
@@ -363,10 +371,12 @@ function parseInto(s: string, start: number): SmilesGraph | { error: TokenError 
   if (nAtoms === 0) return err('smiles-empty', 'no atoms in the SMILES', start);
   if (pOrder !== 0) return err('smiles-dangling-bond', 'bond symbol at the end of the SMILES', pOff);
   if (prev < 0) return err('smiles-empty-component', "'.' at the end of the SMILES", end - 1);
-  if (branchDepth > 0) return err('smiles-unmatched-parenthesis', "'(' is never closed", brOff[branchDepth - 1]!);
+  if (branchDepth > 0)
+    return err('smiles-unmatched-parenthesis', "'(' is never closed", brOff[branchDepth - 1]!);
   if (openRings > 0) {
     let first = -1;
-    for (let k = 0; k < 100; k++) if (RING_OPEN[k] === 1 && (first < 0 || RING_OFF[k]! < first)) first = RING_OFF[k]!;
+    for (let k = 0; k < 100; k++)
+      if (RING_OPEN[k] === 1 && (first < 0 || RING_OFF[k]! < first)) first = RING_OFF[k]!;
     if (big !== null) for (const r of big.values()) if (first < 0 || r[5]! < first) first = r[5]!;
     return err('smiles-unclosed-ring', 'ring-closure number is never closed', first);
   }

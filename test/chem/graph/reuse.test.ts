@@ -3,12 +3,7 @@
  * in place, or one asked about after many others, must give the answers a fresh copy gives.
  */
 import { describe, expect, it } from 'vitest';
-import {
-  buildGraph,
-  constitutionKey,
-  equivalenceClasses,
-  ringInfo,
-} from '../../../src/chem/graph/index.js';
+import { buildGraph, constitutionKey, equivalenceClasses, ringInfo } from '../../../src/chem/graph/index.js';
 import { atomInvariants } from '../../../src/chem/graph/invariants.js';
 import { bridges, smallestRings } from '../../../src/chem/graph/rings.js';
 import type { Structure } from '../../../src/chem/types.js';
@@ -58,7 +53,14 @@ describe('reused graph-layer results', () => {
   });
 
   it('answers after many other structures equal fresh ones', () => {
-    const smiles = ['c1ccccc1', 'C1CC2CCC1C2', 'C12C3C4C1C5C2C3C45', 'OCC', 'C1CCC2(CC1)CCCC2', 'c1ccc2ccccc2c1'];
+    const smiles = [
+      'c1ccccc1',
+      'C1CC2CCC1C2',
+      'C12C3C4C1C5C2C3C45',
+      'OCC',
+      'C1CCC2(CC1)CCCC2',
+      'c1ccc2ccccc2c1',
+    ];
     const list = smiles.map(build);
     const first = list.map(answers);
     for (let round = 0; round < 3; round++) {

@@ -207,7 +207,9 @@ describe('double-bond and allene stereo (OpenSMILES cis/trans and extended tetra
     ]);
     expect(ok('OC(=O)C=C=[C@@]=C=CC').stereo[0]).toMatchObject({ ends: [3, 7] }); // even cumulene, central atom
     const off = parseSmiles('CC=C=[C@]=CC'); // three double bonds: no central atom, the mark is misplaced
-    expect(off.ok && off.structure.stereo.length === 0 && off.warnings[0]!.code).toBe('smiles-stereo-ignored');
+    expect(off.ok && off.structure.stereo.length === 0 && off.warnings[0]!.code).toBe(
+      'smiles-stereo-ignored',
+    );
     expect(ok('CC=[C@AL2]=CC').stereo[0]).toMatchObject({
       ends: [1, 3],
       ligands: [0, IMPLICIT_H, IMPLICIT_H, 4],
