@@ -51302,7 +51302,7 @@ function makeRenderer(wants, checks) {
   return (r) => {
     const out = {
       seq: r.seq,
-      jsonl: JSONL_PREFIX + JSON.stringify(r).slice(1),
+      jsonl: wants.jsonl ? JSONL_PREFIX + JSON.stringify(r).slice(1) : "",
       tally: {
         findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),
         word: r.form_word.word,
@@ -51341,7 +51341,7 @@ import { createWriteStream as createWriteStream2 } from "node:fs";
 import { createWriteStream } from "node:fs";
 function wantsOf(writers) {
   const has = (n) => writers.some((w) => w.needs === n);
-  return { csv: has("csv"), sarif: has("sarif"), html: has("html") };
+  return { jsonl: has("jsonl"), csv: has("csv"), sarif: has("sarif"), html: has("html") };
 }
 function drainWrite(stream, text) {
   return stream.write(text) ? Promise.resolve() : new Promise((res) => stream.once("drain", () => res()));
@@ -51352,6 +51352,7 @@ function close(stream) {
 function jsonlWriter(path) {
   const s = createWriteStream(path, "utf8");
   return {
+    needs: "jsonl",
     write: (r) => drainWrite(s, r.jsonl + "\n"),
     finish: async (t) => {
       await drainWrite(s, JSON.stringify(t) + "\n");
@@ -51370,6 +51371,7 @@ function jsonWriter(path) {
     }
   };
   return {
+    needs: "jsonl",
     write: async (r) => {
       await start();
       await drainWrite(s, (first ? "" : ",\n") + jsonOf(r));
@@ -51512,14 +51514,30 @@ async function* mapOrdered(items, opts) {
       n++;
       yield opts.inline(item);
     }
-    opts.onStats?.({ window: 1, maxAhead: 1, maxBuffered: 0, maxPending: 0, items: n, replaced: 0 });
+    opts.onStats?.({
+      window: 1,
+      maxAhead: 1,
+      maxBuffered: 0,
+      maxPending: 0,
+      maxInFlight: 1,
+      items: n,
+      replaced: 0
+    });
     return;
   }
   const batchSize = Math.max(1, opts.batchSize ?? 16);
   const window2 = Math.max(batchSize * opts.workers * 2, opts.window ?? batchSize * opts.workers * 4);
   const iterator = Symbol.asyncIterator in items ? items[Symbol.asyncIterator]() : toAsync(items);
   const done = /* @__PURE__ */ new Map();
-  const stats = { window: window2, maxAhead: 0, maxBuffered: 0, maxPending: 0, items: 0, replaced: 0 };
+  const stats = {
+    window: window2,
+    maxAhead: 0,
+    maxBuffered: 0,
+    maxPending: 0,
+    maxInFlight: 0,
+    items: 0,
+    replaced: 0
+  };
   const record2 = (at2, result2) => {
     done.set(at2, result2);
     if (done.size > stats.maxBuffered) stats.maxBuffered = done.size;
@@ -51637,12 +51655,15 @@ async function* mapOrdered(items, opts) {
       if (pending.length > stats.maxPending) stats.maxPending = pending.length;
     }
   };
+  const inFlight = batchSize * 2;
+  const hasRoom = (slot) => !slot.dead && slot.queue.length <= inFlight - batchSize;
   const dispatch = () => {
     for (const slot of slots) {
-      if (slot.dead || slot.queue.length >= batchSize || pending.length === 0) continue;
-      const batch = pending.splice(0, batchSize - slot.queue.length);
+      if (!hasRoom(slot) || pending.length === 0) continue;
+      const batch = pending.splice(0, batchSize);
       if (slot.queue.length === 0) slot.lastProgress = Date.now();
       slot.queue.push(...batch);
+      if (slot.queue.length > stats.maxInFlight) stats.maxInFlight = slot.queue.length;
       slot.worker.postMessage({ jobs: batch });
     }
   };
@@ -51660,8 +51681,7 @@ async function* mapOrdered(items, opts) {
       if (inputDone && nextOut >= nextIndex) break;
       await new Promise((resolve5) => {
         wake = resolve5;
-        if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some((s) => !s.dead && s.queue.length < batchSize))
-          notify();
+        if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
       });
     }
   } catch (e) {

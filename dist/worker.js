@@ -48510,7 +48510,7 @@ function makeRenderer(wants, checks) {
   return (r) => {
     const out = {
       seq: r.seq,
-      jsonl: JSONL_PREFIX + JSON.stringify(r).slice(1),
+      jsonl: wants.jsonl ? JSONL_PREFIX + JSON.stringify(r).slice(1) : "",
       tally: {
         findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),
         word: r.form_word.word,

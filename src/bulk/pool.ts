@@ -2,7 +2,8 @@
  * An ordered worker-thread pool for the bulk audit.
  *
  * - Items stream in (any AsyncIterable); results stream out IN INPUT ORDER whatever the scheduling.
- * - At most `window` items are in flight or buffered, so memory stays flat whatever the input size.
+ * - At most `window` items are in flight or buffered, so memory stays flat whatever the input size. Each worker
+ *   holds up to two batches, so it never waits for the main thread between batches.
  * - Items go to workers in batches and come back in batches (few messages: a message costs far more than a
  *   small result). Progress is reported per item through shared memory instead (the index of the item being
  *   worked on, and a count of items finished), so a stall is still noticed per item: when a worker makes no
@@ -40,6 +41,8 @@ export interface PoolStats {
   maxAhead: number;
   maxBuffered: number;
   maxPending: number;
+  /** Most items one worker held at once (sent, not yet reported): two batches when it is kept busy. */
+  maxInFlight: number;
   items: number;
   replaced: number;
 }
@@ -84,7 +87,15 @@ export async function* mapOrdered<I, O>(
       n++;
       yield opts.inline(item);
     }
-    opts.onStats?.({ window: 1, maxAhead: 1, maxBuffered: 0, maxPending: 0, items: n, replaced: 0 });
+    opts.onStats?.({
+      window: 1,
+      maxAhead: 1,
+      maxBuffered: 0,
+      maxPending: 0,
+      maxInFlight: 1,
+      items: n,
+      replaced: 0,
+    });
     return;
   }
   const batchSize = Math.max(1, opts.batchSize ?? 16);
@@ -95,7 +106,15 @@ export async function* mapOrdered<I, O>(
       : toAsync(items as Iterable<I>);
 
   const done = new Map<number, O>();
-  const stats: PoolStats = { window, maxAhead: 0, maxBuffered: 0, maxPending: 0, items: 0, replaced: 0 };
+  const stats: PoolStats = {
+    window,
+    maxAhead: 0,
+    maxBuffered: 0,
+    maxPending: 0,
+    maxInFlight: 0,
+    items: 0,
+    replaced: 0,
+  };
   const record = (at: number, result: O) => {
     done.set(at, result);
     if (done.size > stats.maxBuffered) stats.maxBuffered = done.size;
@@ -222,12 +241,17 @@ export async function* mapOrdered<I, O>(
       if (pending.length > stats.maxPending) stats.maxPending = pending.length;
     }
   };
+  // Two batches in flight per worker: it starts the next while the main thread takes the last one's results, so
+  // it never waits for a round trip (on a machine whose cores all run workers, that wait is a scheduling slice).
+  const inFlight = batchSize * 2;
+  const hasRoom = (slot: Slot<I>) => !slot.dead && slot.queue.length <= inFlight - batchSize;
   const dispatch = () => {
     for (const slot of slots) {
-      if (slot.dead || slot.queue.length >= batchSize || pending.length === 0) continue;
-      const batch = pending.splice(0, batchSize - slot.queue.length);
+      if (!hasRoom(slot) || pending.length === 0) continue;
+      const batch = pending.splice(0, batchSize);
       if (slot.queue.length === 0) slot.lastProgress = Date.now();
       slot.queue.push(...batch);
+      if (slot.queue.length > stats.maxInFlight) stats.maxInFlight = slot.queue.length;
       slot.worker.postMessage({ jobs: batch });
     }
   };
@@ -248,12 +272,7 @@ export async function* mapOrdered<I, O>(
         wake = resolve;
         // a result to yield, room to read more (the window moved while results were yielded), or pending work
         // and free slots: go round again without waiting
-        if (
-          done.has(nextOut) ||
-          canRead() ||
-          (pending.length > 0 && slots.some((s) => !s.dead && s.queue.length < batchSize))
-        )
-          notify();
+        if (done.has(nextOut) || canRead() || (pending.length > 0 && slots.some(hasRoom))) notify();
       });
     }
   } catch (e) {

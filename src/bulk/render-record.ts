@@ -12,14 +12,16 @@ import { htmlRow, type HtmlRow } from '../report/html/render.js';
 import type { BulkRecordResult } from './audit-item.js';
 import type { VocabularyResult } from './mapping.js';
 
-/** Which optional renderings the run's outputs need (JSON Lines/JSON and the tally are always made). */
+/** Which renderings the run's outputs need (the tally is always made). */
 export interface RenderWants {
+  /** The JSON Lines line (JSON Lines and JSON outputs): the full result stringified, skipped when no output wants it. */
+  jsonl: boolean;
   csv: boolean;
   sarif: boolean;
   html: boolean;
 }
 
-export const NO_EXTRAS: RenderWants = { csv: false, sarif: false, html: false };
+export const NO_EXTRAS: RenderWants = { jsonl: false, csv: false, sarif: false, html: false };
 
 /** What the totals need of a record: its findings' check, severity and waived flag, and its form word. */
 export interface Tally {
@@ -39,7 +41,7 @@ export interface HtmlEntry {
 
 export interface RenderedRecord {
   seq: number;
-  /** The JSON Lines line, without the newline: {"kind":"record", …the whole result…}. */
+  /** The JSON Lines line, without the newline: {"kind":"record", …the whole result…}; '' when not wanted. */
   jsonl: string;
   tally: Tally;
   csv?: string;
@@ -104,7 +106,7 @@ export function makeRenderer(wants: RenderWants, checks: readonly CheckModule[])
   return (r) => {
     const out: RenderedRecord = {
       seq: r.seq,
-      jsonl: JSONL_PREFIX + JSON.stringify(r).slice(1),
+      jsonl: wants.jsonl ? JSONL_PREFIX + JSON.stringify(r).slice(1) : '',
       tally: {
         findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),
         word: r.form_word.word,

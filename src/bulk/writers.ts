@@ -27,7 +27,7 @@ export interface RecordWriter {
 /** The optional renderings the given writers read. */
 export function wantsOf(writers: readonly RecordWriter[]): RenderWants {
   const has = (n: keyof RenderWants) => writers.some((w) => w.needs === n);
-  return { csv: has('csv'), sarif: has('sarif'), html: has('html') };
+  return { jsonl: has('jsonl'), csv: has('csv'), sarif: has('sarif'), html: has('html') };
 }
 
 export function drainWrite(stream: WriteStream, text: string): Promise<void> {
@@ -41,6 +41,7 @@ export function close(stream: WriteStream): Promise<void> {
 export function jsonlWriter(path: string): RecordWriter {
   const s = createWriteStream(path, 'utf8');
   return {
+    needs: 'jsonl',
     write: (r) => drainWrite(s, r.jsonl + '\n'),
     finish: async (t) => {
       await drainWrite(s, JSON.stringify(t) + '\n');
@@ -61,6 +62,7 @@ export function jsonWriter(path: string): RecordWriter {
     }
   };
   return {
+    needs: 'jsonl',
     write: async (r) => {
       await start();
       await drainWrite(s, (first ? '' : ',\n') + jsonOf(r));

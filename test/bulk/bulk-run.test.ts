@@ -115,6 +115,29 @@ describe('bulk audit', () => {
     expect(trailer.summary.records).toBe(8);
   });
 
+  it('renders the JSON Lines text only when an output wants it (the tally is always there)', async () => {
+    const seen: { jsonl: string; findings: number }[] = [];
+    const run = async (writers: Parameters<typeof runBulkAudit>[0]['writers']) => {
+      seen.length = 0;
+      await runBulkAudit({
+        inputs: [csv],
+        mapping: csvMapping,
+        config,
+        workers: 1,
+        progress: 'none',
+        writers,
+        onRecord: (r) => seen.push({ jsonl: r.jsonl, findings: r.tally.findings.length }),
+      });
+      return seen.map((x) => ({ ...x }));
+    };
+    const bare = await run([]);
+    expect(bare).toHaveLength(8);
+    expect(bare.every((r) => r.jsonl === '')).toBe(true);
+    const withJsonl = await run([jsonlWriter(join(dir, 'wants.jsonl'))]);
+    expect(withJsonl.every((r) => r.jsonl.startsWith('{"kind":"record",'))).toBe(true);
+    expect(withJsonl.map((r) => r.findings)).toEqual(bare.map((r) => r.findings));
+  });
+
   it('audits an SD file; the broken record does not stop the run', async () => {
     const out = join(dir, 'sd.jsonl');
     const trailer = await runTo(out, [sd], { form: 'FORM' }, 1);

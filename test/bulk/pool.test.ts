@@ -55,6 +55,16 @@ describe('ordered worker pool', () => {
     expect(maxAhead).toBeLessThanOrEqual(64 + 8 * 2 * 2 + 1);
   });
 
+  it('keeps two batches with each worker, so it never waits for the main thread between batches', async () => {
+    let inFlight = 0;
+    const input = Array.from({ length: 400 }, (_, i) => i);
+    const out = await collect(
+      mapOrdered(input, { ...base, workers: 1, batchSize: 4, onStats: (s) => (inFlight = s.maxInFlight) }),
+    );
+    expect(out).toEqual(input.map((n) => n * n));
+    expect(inFlight).toBe(8);
+  });
+
   it('runs inline when no workers are asked for', async () => {
     const out = await collect(mapOrdered([1, 2, 3], { ...base, workers: 0, inline: (n: number) => n + 1 }));
     expect(out).toEqual([2, 3, 4]);
