@@ -50,6 +50,23 @@ interface PairQueue {
 const pool: PairQueue[] = [];
 let poolDepth = 0;
 
+/** The queue of the next nesting depth, holding the starting pair (x, y); give it back with releaseQueue. */
+function takeQueue(x: CipNode, fx: CipNode | null, y: CipNode, fy: CipNode | null): PairQueue {
+  const d = poolDepth++;
+  let q = pool[d];
+  if (q === undefined) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+  q.x[0] = x;
+  q.fx[0] = fx;
+  q.y[0] = y;
+  q.fy[0] = fy;
+  return q;
+}
+
+function releaseQueue(q: PairQueue, len: number): void {
+  poolDepth--;
+  clearQueue(q, len);
+}
+
 function clearQueue(q: PairQueue, len: number): void {
   for (let i = 0; i < len; i++) {
     q.x[i] = NO_NODE;
@@ -173,17 +190,11 @@ export class Ranker {
     if (rule === RULE_1A) return this.compare1a(x, fx, y, fy);
     // breadth-first queues of node pairs, reused per nesting depth (sorting below may compare again); written
     // by index with their own count, never truncated (setting an array's length to 0 frees its room)
-    const d = poolDepth++;
-    let q = pool[d];
-    if (q === undefined) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+    const q = takeQueue(x, fx, y, fy);
     const qx = q.x;
     const qfx = q.fx;
     const qy = q.y;
     const qfy = q.fy;
-    qx[0] = x;
-    qfx[0] = fx;
-    qy[0] = y;
-    qfy[0] = fy;
     let len = 1;
     try {
       for (let i = 0; i < len; i++) {
@@ -215,8 +226,7 @@ export class Ranker {
         }
       }
     } finally {
-      poolDepth--;
-      clearQueue(q, len);
+      releaseQueue(q, len);
     }
     return 0;
   }
@@ -229,17 +239,11 @@ export class Ranker {
    * deep ordering of runs of equal atomic number is skipped at the sphere that decides.
    */
   private compare1a(x: CipNode, fx: CipNode | null, y: CipNode, fy: CipNode | null): number {
-    const d = poolDepth++;
-    let q = pool[d];
-    if (q === undefined) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+    const q = takeQueue(x, fx, y, fy);
     const qx = q.x;
     const qfx = q.fx;
     const qy = q.y;
     const qfy = q.fy;
-    qx[0] = x;
-    qfx[0] = fx;
-    qy[0] = y;
-    qfy[0] = fy;
     let len = 1;
     let lo = 0;
     try {
@@ -279,8 +283,7 @@ export class Ranker {
         lo = hi;
       }
     } finally {
-      poolDepth--;
-      clearQueue(q, len);
+      releaseQueue(q, len);
     }
     return 0;
   }
