@@ -29276,6 +29276,20 @@ var init_rule4b = __esm({
 });
 
 // src/chem/cip/compare.ts
+function takeQueue(x, fx, y, fy) {
+  const d = poolDepth++;
+  let q = pool[d];
+  if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+  q.x[0] = x;
+  q.fx[0] = fx;
+  q.y[0] = y;
+  q.fy[0] = fy;
+  return q;
+}
+function releaseQueue(q, len) {
+  poolDepth--;
+  clearQueue(q, len);
+}
 function clearQueue(q, len) {
   for (let i = 0; i < len; i++) {
     q.x[i] = NO_NODE;
@@ -29426,17 +29440,11 @@ var init_compare = __esm({
         if (c !== 0) return c > 0 ? 1 : -1;
         if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
         if (rule4 === RULE_1A) return this.compare1a(x, fx, y, fy);
-        const d = poolDepth++;
-        let q = pool[d];
-        if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+        const q = takeQueue(x, fx, y, fy);
         const qx = q.x;
         const qfx = q.fx;
         const qy = q.y;
         const qfy = q.fy;
-        qx[0] = x;
-        qfx[0] = fx;
-        qy[0] = y;
-        qfy[0] = fy;
         let len = 1;
         try {
           for (let i = 0; i < len; i++) {
@@ -29467,8 +29475,7 @@ var init_compare = __esm({
             }
           }
         } finally {
-          poolDepth--;
-          clearQueue(q, len);
+          releaseQueue(q, len);
         }
         return 0;
       }
@@ -29480,17 +29487,11 @@ var init_compare = __esm({
        * deep ordering of runs of equal atomic number is skipped at the sphere that decides.
        */
       compare1a(x, fx, y, fy) {
-        const d = poolDepth++;
-        let q = pool[d];
-        if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+        const q = takeQueue(x, fx, y, fy);
         const qx = q.x;
         const qfx = q.fx;
         const qy = q.y;
         const qfy = q.fy;
-        qx[0] = x;
-        qfx[0] = fx;
-        qy[0] = y;
-        qfy[0] = fy;
         let len = 1;
         let lo = 0;
         try {
@@ -29529,8 +29530,7 @@ var init_compare = __esm({
             lo = hi;
           }
         } finally {
-          poolDepth--;
-          clearQueue(q, len);
+          releaseQueue(q, len);
         }
         return 0;
       }

@@ -43511,6 +43511,20 @@ var init_rule4b = __esm({
 });
 
 // src/chem/cip/compare.ts
+function takeQueue(x, fx, y, fy) {
+  const d = poolDepth++;
+  let q = pool[d];
+  if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+  q.x[0] = x;
+  q.fx[0] = fx;
+  q.y[0] = y;
+  q.fy[0] = fy;
+  return q;
+}
+function releaseQueue(q, len) {
+  poolDepth--;
+  clearQueue(q, len);
+}
 function clearQueue(q, len) {
   for (let i = 0; i < len; i++) {
     q.x[i] = NO_NODE;
@@ -43661,17 +43675,11 @@ var init_compare = __esm({
         if (c !== 0) return c > 0 ? 1 : -1;
         if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
         if (rule4 === RULE_1A) return this.compare1a(x, fx, y, fy);
-        const d = poolDepth++;
-        let q = pool[d];
-        if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+        const q = takeQueue(x, fx, y, fy);
         const qx = q.x;
         const qfx = q.fx;
         const qy = q.y;
         const qfy = q.fy;
-        qx[0] = x;
-        qfx[0] = fx;
-        qy[0] = y;
-        qfy[0] = fy;
         let len = 1;
         try {
           for (let i = 0; i < len; i++) {
@@ -43702,8 +43710,7 @@ var init_compare = __esm({
             }
           }
         } finally {
-          poolDepth--;
-          clearQueue(q, len);
+          releaseQueue(q, len);
         }
         return 0;
       }
@@ -43715,17 +43722,11 @@ var init_compare = __esm({
        * deep ordering of runs of equal atomic number is skipped at the sphere that decides.
        */
       compare1a(x, fx, y, fy) {
-        const d = poolDepth++;
-        let q = pool[d];
-        if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+        const q = takeQueue(x, fx, y, fy);
         const qx = q.x;
         const qfx = q.fx;
         const qy = q.y;
         const qfy = q.fy;
-        qx[0] = x;
-        qfx[0] = fx;
-        qy[0] = y;
-        qfy[0] = fy;
         let len = 1;
         let lo = 0;
         try {
@@ -43764,8 +43765,7 @@ var init_compare = __esm({
             lo = hi;
           }
         } finally {
-          poolDepth--;
-          clearQueue(q, len);
+          releaseQueue(q, len);
         }
         return 0;
       }
