@@ -7,13 +7,15 @@
  * Each run is a process of its own (bench/bulk-child.ts). Where `taskset` exists, the 1-worker run is pinned to
  * one CPU and the 2-worker run to two: otherwise a "1-worker" run borrows the second core for V8's background
  * threads (concurrent JIT compilation and GC, about a fifth of a core here) and the per-core figure and the
- * scaling ratio would both be flattered and understated respectively. Every worker isolate compiles the engine
+ * scaling ratio would be off. Each run gets the process flags the command line would give it (V8's parallel GC
+ * helpers off when every core runs a worker, src/cli/gc-respawn.ts). Every worker isolate compiles the engine
  * afresh (its JIT warm-up takes most of its first ~15,000 records), so the report gives the whole-run rate and
  * the steady-state rate (second half of the records) separately.
  */
 import { spawnSync } from 'node:child_process';
 import { availableParallelism } from 'node:os';
 import type { ChildResult } from './bulk-child.js';
+import { GC_FLAG, wantsSingleThreadedGc } from '../src/cli/gc-respawn.js';
 import { createWriteStream, mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { Molecule } from 'openchemlib';
 import { tmpdir } from 'node:os';
@@ -41,7 +43,10 @@ function hasTaskset(): boolean {
 
 function runChild(csv: string, workers: number, n: number, cpus: string | null): ChildResult {
   const child = new URL('./bulk-child.ts', import.meta.url).pathname;
-  const node = [process.execPath, '--import', 'tsx', child, csv, String(workers), String(n)];
+  // the process flags the command line would use (src/cli/gc-respawn.ts)
+  const cores = cpus === null ? availableParallelism() : cpus.split(',').length;
+  const gc = wantsSingleThreadedGc(workers, cores) ? [GC_FLAG] : [];
+  const node = [process.execPath, ...gc, '--import', 'tsx', child, csv, String(workers), String(n)];
   const [cmd, ...args] = cpus ? ['taskset', '-c', cpus, ...node] : node;
   const out = spawnSync(cmd, args, { encoding: 'utf8', maxBuffer: 64 * 2 ** 20 });
   if (out.status !== 0) throw new Error(`bulk run with ${workers} worker(s) failed: ${out.stderr}`);

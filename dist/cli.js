@@ -51554,7 +51554,7 @@ async function* mapOrdered(items, opts) {
     if (w) w();
   };
   const slots = [];
-  const spawn = () => {
+  const spawn2 = () => {
     const shared2 = new SharedArrayBuffer(8);
     const progress = new Int32Array(shared2);
     progress[0] = -1;
@@ -51615,9 +51615,9 @@ async function* mapOrdered(items, opts) {
     const i = slots.indexOf(slot);
     stats.replaced++;
     void slot.worker.terminate();
-    if (i >= 0) slots[i] = spawn();
+    if (i >= 0) slots[i] = spawn2();
   };
-  for (let i = 0; i < opts.workers; i++) slots.push(spawn());
+  for (let i = 0; i < opts.workers; i++) slots.push(spawn2());
   const timer = setInterval(
     () => {
       const now = Date.now();
@@ -52609,6 +52609,56 @@ var auditCommand = makeAuditCommand();
 // src/cli/commands/index.ts
 var commands = [describeCommand, compareCommand, auditCommand, mergeShardsCommand];
 
+// src/cli/gc-respawn.ts
+import { spawn } from "node:child_process";
+import { availableParallelism as availableParallelism2 } from "node:os";
+var GC_FLAG = "--single-threaded-gc";
+var NO_RESPAWN_ENV = "STEREOGATE_NO_RESPAWN";
+function wantsSingleThreadedGc(workers, cores) {
+  return workers >= 1 && workers >= cores;
+}
+function bulkWorkers(argv, cores) {
+  if (argv[0] !== "audit" || argv.includes("--help") || argv.includes("-h")) return null;
+  let workers = cores;
+  let bulk = false;
+  for (let i = 1; i < argv.length; i++) {
+    const a = argv[i];
+    if (a === "--workers") workers = Number(argv[++i]);
+    else if (a.startsWith("--workers=")) workers = Number(a.slice("--workers=".length));
+    else if (!a.startsWith("-") && isBulkInput(a)) bulk = true;
+  }
+  return bulk && Number.isInteger(workers) ? workers : null;
+}
+function respawnArgs(argv, execArgv, script, env, cores) {
+  if (env[NO_RESPAWN_ENV] === "1" || execArgv.includes(GC_FLAG)) return null;
+  const workers = bulkWorkers(argv, cores);
+  if (workers === null || !wantsSingleThreadedGc(workers, cores)) return null;
+  return [GC_FLAG, ...execArgv, script, ...argv];
+}
+function respawnForBulk(argv) {
+  const script = process.argv[1];
+  if (!script) return Promise.resolve(null);
+  const args = respawnArgs(argv, process.execArgv, script, process.env, availableParallelism2());
+  if (!args) return Promise.resolve(null);
+  return new Promise((resolve5) => {
+    const child = spawn(process.execPath, args, {
+      stdio: "inherit",
+      env: { ...process.env, [NO_RESPAWN_ENV]: "1" }
+    });
+    const forward = (signal) => () => child.kill(signal);
+    const onInt = forward("SIGINT");
+    const onTerm = forward("SIGTERM");
+    process.on("SIGINT", onInt);
+    process.on("SIGTERM", onTerm);
+    child.on("error", () => resolve5(null));
+    child.on("exit", (code, signal) => {
+      process.off("SIGINT", onInt);
+      process.off("SIGTERM", onTerm);
+      resolve5(code ?? (signal ? 128 + (signal === "SIGINT" ? 2 : 15) : 1));
+    });
+  });
+}
+
 // src/cli/main.ts
 var nodeIo = {
   out: (t) => process.stdout.write(t.endsWith("\n") ? t : `${t}
@@ -52660,9 +52710,11 @@ ${command.usage}`);
   }
 }
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  process.exitCode = await run10(process.argv.slice(2));
+  const argv = process.argv.slice(2);
+  process.exitCode = await respawnForBulk(argv) ?? await run10(argv);
 }
 export {
   nodeIo,
+  respawnForBulk,
   run10 as run
 };

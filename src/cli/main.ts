@@ -6,6 +6,9 @@ import { existsSync, readFileSync, statSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { commands } from './commands/index.js';
 import { EXIT_OK, EXIT_USAGE, UsageError, type Io } from './command.js';
+import { respawnForBulk } from './gc-respawn.js';
+
+export { respawnForBulk };
 
 export const nodeIo: Io = {
   out: (t) => process.stdout.write(t.endsWith('\n') ? t : `${t}\n`),
@@ -54,5 +57,7 @@ export async function run(argv: string[], io: Io = nodeIo): Promise<number> {
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
-  process.exitCode = await run(process.argv.slice(2));
+  const argv = process.argv.slice(2);
+  // a bulk audit with a worker on every core restarts once with V8's parallel GC helpers off (gc-respawn.ts)
+  process.exitCode = (await respawnForBulk(argv)) ?? (await run(argv));
 }
