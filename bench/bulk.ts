@@ -13,18 +13,17 @@
  * the steady-state rate (second half of the records) separately.
  */
 import { spawnSync } from 'node:child_process';
-import { availableParallelism } from 'node:os';
-import type { ChildResult } from './bulk-child.js';
-import { GC_FLAG, wantsSingleThreadedGc } from '../src/cli/gc-respawn.js';
 import { createWriteStream, mkdtempSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { Molecule } from 'openchemlib';
-import { tmpdir } from 'node:os';
+import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { Molecule } from 'openchemlib';
+import { GC_FLAG, wantsSingleThreadedGc } from '../src/cli/gc-respawn.js';
 import { DEFAULT_CONFIG } from '../src/audit/config.js';
 import { runBulkAudit } from '../src/bulk/run.js';
 import { jsonlWriter } from '../src/bulk/writers.js';
 import { STEREO_FORMS } from '../src/registry/types.js';
 import { oclDefaultPath } from './baseline-ocl.js';
+import type { ChildResult } from './bulk-child.js';
 import type { BenchContext } from './run.js';
 import { fmt, time, type Timing } from './util.js';
 

@@ -682,27 +682,32 @@ function minimumCycleBasis(s, g, bondInRing, smallestRingOfBond, ringSystems) {
   });
   return rings.sort((p, q) => p.length - q.length);
 }
-function ringSystemsOf(s, n, bondInRing) {
-  const parent = new Int32Array(n);
-  for (let i = 0; i < n; i++) parent[i] = i;
+function ringRoots(s, n, isRing) {
+  const root = new Int32Array(n);
+  for (let i = 0; i < n; i++) root[i] = i;
   const find = (x) => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+    while (root[x] !== x) x = root[x] = root[root[x]];
     return x;
   };
   const inRing = new Uint8Array(n);
   for (let k = 0; k < s.bonds.length; k++) {
-    if (!bondInRing[k]) continue;
+    if (!isRing[k]) continue;
     const b = s.bonds[k];
     inRing[b.a] = inRing[b.b] = 1;
     const ra = find(b.a);
     const rb = find(b.b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+    if (ra !== rb) root[Math.max(ra, rb)] = Math.min(ra, rb);
   }
+  for (let i = 0; i < n; i++) root[i] = find(i);
+  return { root, inRing };
+}
+function ringSystemsOf(s, n, bondInRing) {
+  const { root: rootOf, inRing } = ringRoots(s, n, bondInRing);
   const systems = [];
   const systemOf = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
     if (!inRing[i]) continue;
-    const root = find(i);
+    const root = rootOf[i];
     if (systemOf[root] < 0) {
       systemOf[root] = systems.length;
       systems.push([]);
@@ -918,40 +923,28 @@ function ringSizes(s, g, bridge) {
   const n = g.n;
   const m = s.bonds.length;
   const out = new Array(m).fill(0);
-  const parent = new Int32Array(n);
-  for (let i = 0; i < n; i++) parent[i] = i;
-  const find = (x) => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  const inRing = new Uint8Array(n);
+  const ring = new Uint8Array(m);
   let anyRing = false;
   for (let k = 0; k < m; k++) {
     const { a, b } = s.bonds[k];
     if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    ring[k] = 1;
     anyRing = true;
-    inRing[a] = inRing[b] = 1;
-    const ra = find(a);
-    const rb = find(b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
   }
   if (!anyRing) return out;
+  const { root, inRing } = ringRoots(s, n, ring);
   const excess = new Int32Array(n);
-  for (let i = 0; i < n; i++) if (inRing[i]) excess[find(i)]++;
+  for (let i = 0; i < n; i++) if (inRing[i]) excess[root[i]]++;
   const atoms = excess.slice();
-  for (let k = 0; k < m; k++) {
-    const { a, b } = s.bonds[k];
-    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
-    excess[find(a)]--;
-  }
+  for (let k = 0; k < m; k++) if (ring[k]) excess[root[s.bonds[k].a]]--;
   let dist = null;
   let queue = null;
   for (let k = 0; k < m; k++) {
+    if (!ring[k]) continue;
     const { a, b } = s.bonds[k];
-    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
-    const root = find(a);
-    if (excess[root] === 0) {
-      out[k] = atoms[root];
+    const system = root[a];
+    if (excess[system] === 0) {
+      out[k] = atoms[system];
       continue;
     }
     if (dist === null || queue === null) {
@@ -29286,6 +29279,19 @@ function takeQueue(x, fx, y, fy) {
   q.fy[0] = fy;
   return q;
 }
+function pushPairs(q, len, sx, nx, sy, ny, m) {
+  for (let j = 0; j < m; j++) {
+    const a = sx[j];
+    const b = sy[j];
+    if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+    q.x[len] = a;
+    q.fx[len] = nx;
+    q.y[len] = b;
+    q.fy[len] = ny;
+    len++;
+  }
+  return len;
+}
 function releaseQueue(q, len) {
   poolDepth--;
   clearQueue(q, len);
@@ -29457,22 +29463,7 @@ var init_compare = __esm({
               c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
               if (c !== 0) return c > 0 ? 1 : -1;
             }
-            if (sx.length !== sy.length && rule4 === RULE_1A) {
-              const longer = sx.length > sy.length ? sx : sy;
-              for (let j = m; j < longer.length; j++) {
-                if (this.value(rule4, longer[j]) > 0) return longer === sx ? 1 : -1;
-              }
-            }
-            for (let j = 0; j < m; j++) {
-              const a = sx[j];
-              const b = sy[j];
-              if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
-              qx[len] = a;
-              qfx[len] = nx;
-              qy[len] = b;
-              qfy[len] = ny;
-              len++;
-            }
+            len = pushPairs(q, len, sx, nx, sy, ny, m);
           }
         } finally {
           releaseQueue(q, len);
@@ -29516,16 +29507,7 @@ var init_compare = __esm({
               const sx = this.sorted(nx, qfx[i], RULE_1A).nodes;
               const sy = this.sorted(ny, qfy[i], RULE_1A).nodes;
               const m = sx.length < sy.length ? sx.length : sy.length;
-              for (let j = 0; j < m; j++) {
-                const a = sx[j];
-                const b = sy[j];
-                if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
-                qx[len] = a;
-                qfx[len] = nx;
-                qy[len] = b;
-                qfy[len] = ny;
-                len++;
-              }
+              len = pushPairs(q, len, sx, nx, sy, ny, m);
             }
             lo = hi;
           }
@@ -46723,7 +46705,7 @@ function cisTransFindings(ctx, decl, facts) {
   if (!s) return [];
   const j = judgedDoubleBond(s, facts);
   if (!j) return [];
-  const ends = `atoms ${j.ends[0]}=${j.ends[1]}`;
+  const ends = `between atoms ${j.ends[0]} and ${j.ends[1]}`;
   if (j.drawn === null) {
     return [
       finding(
@@ -46740,7 +46722,7 @@ function cisTransFindings(ctx, decl, facts) {
       word: said,
       ends,
       subs: `atoms ${j.subs[0]} and ${j.subs[1]}`,
-      drawn: j.drawn === "cis" ? "on the same side (cis)" : "on opposite sides (trans)",
+      drawn: j.drawn === "cis" ? "on the same side: cis" : "on opposite sides: trans",
       label: j.drawn === "cis" ? "Z" : "E"
     })
   ];
@@ -46752,7 +46734,7 @@ var init_cis_trans_words = __esm({
     init_types();
     init_words();
     cisTransMessages = {
-      "cis-trans-word-contradicts-drawing": "The name calls the compound {word}, but the drawing puts the two substituents of the double bond {ends} ({subs}) {drawn}, i.e. {label}. Correct the drawing (the / and \\ marks or the wedges) or the name; E/Z descriptors say it without ambiguity.",
+      "cis-trans-word-contradicts-drawing": "The name calls the compound {word}, but the drawing puts the substituents of the double bond {ends} ({subs}) {drawn}, which is {label}. Correct the drawing (the / and \\ marks or the wedges) or the name; E/Z descriptors say it without ambiguity.",
       "cis-trans-word-on-undefined-bond": "The name calls the compound {word}, but the drawing leaves the double bond {ends} undefined. Draw the {word} geometry (e.g. C/C=C{mark}C in SMILES), or drop the word if the geometry is unknown."
     };
   }

@@ -16,9 +16,9 @@ import { finding, type DeclaredDescriptors } from './words.js';
 
 export const cisTransMessages = {
   'cis-trans-word-contradicts-drawing':
-    'The name calls the compound {word}, but the drawing puts the two substituents of the double bond ' +
-    '{ends} ({subs}) {drawn}, i.e. {label}. Correct the drawing (the / and \\ marks or the wedges) or the ' +
-    'name; E/Z descriptors say it without ambiguity.',
+    'The name calls the compound {word}, but the drawing puts the substituents of the double bond {ends} ' +
+    '({subs}) {drawn}, which is {label}. Correct the drawing (the / and \\ marks or the wedges) or the name; ' +
+    'E/Z descriptors say it without ambiguity.',
   'cis-trans-word-on-undefined-bond':
     'The name calls the compound {word}, but the drawing leaves the double bond {ends} undefined. Draw the ' +
     '{word} geometry (e.g. C/C=C{mark}C in SMILES), or drop the word if the geometry is unknown.',
@@ -85,7 +85,7 @@ export function cisTransFindings(
   if (!s) return [];
   const j = judgedDoubleBond(s, facts);
   if (!j) return [];
-  const ends = `atoms ${j.ends[0]}=${j.ends[1]}`;
+  const ends = `between atoms ${j.ends[0]} and ${j.ends[1]}`;
   if (j.drawn === null) {
     return [
       finding(
@@ -102,7 +102,7 @@ export function cisTransFindings(
       word: said,
       ends,
       subs: `atoms ${j.subs[0]} and ${j.subs[1]}`,
-      drawn: j.drawn === 'cis' ? 'on the same side (cis)' : 'on opposite sides (trans)',
+      drawn: j.drawn === 'cis' ? 'on the same side: cis' : 'on opposite sides: trans',
       label: j.drawn === 'cis' ? 'Z' : 'E',
     }),
   ];

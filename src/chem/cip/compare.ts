@@ -62,6 +62,32 @@ function takeQueue(x: CipNode, fx: CipNode | null, y: CipNode, fy: CipNode | nul
   return q;
 }
 
+/**
+ * Appends the first `m` pairs of branches (sx[j], sy[j]) of the pair (nx, ny) to the queue at `len`, except pairs
+ * with nothing beyond them (hydrogens, phantoms, duplicates on both sides); returns the new length.
+ */
+function pushPairs(
+  q: PairQueue,
+  len: number,
+  sx: readonly CipNode[],
+  nx: CipNode,
+  sy: readonly CipNode[],
+  ny: CipNode,
+  m: number,
+): number {
+  for (let j = 0; j < m; j++) {
+    const a = sx[j];
+    const b = sy[j];
+    if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+    q.x[len] = a;
+    q.fx[len] = nx;
+    q.y[len] = b;
+    q.fy[len] = ny;
+    len++;
+  }
+  return len;
+}
+
 function releaseQueue(q: PairQueue, len: number): void {
   poolDepth--;
   clearQueue(q, len);
@@ -207,23 +233,8 @@ export class Ranker {
           c = this.value(rule, sx[j]) - this.value(rule, sy[j]);
           if (c !== 0) return c > 0 ? 1 : -1;
         }
-        // a missing substituent is a phantom atom (atomic number 0, nothing else)
-        if (sx.length !== sy.length && rule === RULE_1A) {
-          const longer = sx.length > sy.length ? sx : sy;
-          for (let j = m; j < longer.length; j++) {
-            if (this.value(rule, longer[j]) > 0) return longer === sx ? 1 : -1;
-          }
-        }
-        for (let j = 0; j < m; j++) {
-          const a = sx[j];
-          const b = sy[j];
-          if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
-          qx[len] = a;
-          qfx[len] = nx;
-          qy[len] = b;
-          qfy[len] = ny;
-          len++;
-        }
+        // (phantom atoms only count under Rule 1a, which compare1a handles)
+        len = pushPairs(q, len, sx, nx, sy, ny, m);
       }
     } finally {
       releaseQueue(q, len);
@@ -269,16 +280,7 @@ export class Ranker {
           const sx = this.sorted(nx, qfx[i], RULE_1A).nodes;
           const sy = this.sorted(ny, qfy[i], RULE_1A).nodes;
           const m = sx.length < sy.length ? sx.length : sy.length;
-          for (let j = 0; j < m; j++) {
-            const a = sx[j];
-            const b = sy[j];
-            if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
-            qx[len] = a;
-            qfx[len] = nx;
-            qy[len] = b;
-            qfy[len] = ny;
-            len++;
-          }
+          len = pushPairs(q, len, sx, nx, sy, ny, m);
         }
         lo = hi;
       }

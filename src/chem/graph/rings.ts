@@ -5,7 +5,7 @@
  */
 import type { Structure } from '../types.js';
 import { buildGraph, isGraphOf, memoOf, type Graph } from './adjacency.js';
-import { minimumCycleBasis, ringSystemsOf } from './sssr.js';
+import { minimumCycleBasis, ringRoots, ringSystemsOf } from './sssr.js';
 
 export interface RingInfo {
   /** A smallest set of smallest rings; atoms in ring order. Sorted by size. */
@@ -82,41 +82,30 @@ function ringSizes(s: Structure, g: Graph, bridge: Uint8Array): number[] {
   const n = g.n;
   const m = s.bonds.length;
   const out = new Array<number>(m).fill(0);
-  const parent = new Int32Array(n);
-  for (let i = 0; i < n; i++) parent[i] = i;
-  const find = (x: number): number => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  const inRing = new Uint8Array(n);
+  // ring bonds: valid (both ends in range, no self-loop) and not bridges
+  const ring = new Uint8Array(m);
   let anyRing = false;
   for (let k = 0; k < m; k++) {
     const { a, b } = s.bonds[k];
     if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
+    ring[k] = 1;
     anyRing = true;
-    inRing[a] = inRing[b] = 1;
-    const ra = find(a);
-    const rb = find(b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
   }
   if (!anyRing) return out;
+  const { root, inRing } = ringRoots(s, n, ring);
   // Per system root: atoms minus bonds (0 for a simple cycle).
   const excess = new Int32Array(n);
-  for (let i = 0; i < n; i++) if (inRing[i]) excess[find(i)]++;
+  for (let i = 0; i < n; i++) if (inRing[i]) excess[root[i]]++;
   const atoms = excess.slice();
-  for (let k = 0; k < m; k++) {
-    const { a, b } = s.bonds[k];
-    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
-    excess[find(a)]--;
-  }
+  for (let k = 0; k < m; k++) if (ring[k]) excess[root[s.bonds[k].a]]--;
   let dist: Int32Array | null = null;
   let queue: Int32Array | null = null;
   for (let k = 0; k < m; k++) {
+    if (!ring[k]) continue;
     const { a, b } = s.bonds[k];
-    if (bridge[k] || !(a >= 0 && b >= 0 && a < n && b < n && a !== b)) continue;
-    const root = find(a);
-    if (excess[root] === 0) {
-      out[k] = atoms[root];
+    const system = root[a];
+    if (excess[system] === 0) {
+      out[k] = atoms[system];
       continue;
     }
     if (dist === null || queue === null) {

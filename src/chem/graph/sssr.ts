@@ -42,6 +42,34 @@ export function minimumCycleBasis(
 }
 
 /**
+ * Atoms joined by the bonds `isRing` marks, transitively (union-find): `root[i]` is the smallest atom of i's ring
+ * system (i itself for an atom in no ring), `inRing[i]` is 1 for an atom on a marked bond.
+ */
+export function ringRoots(
+  s: Structure,
+  n: number,
+  isRing: ArrayLike<boolean | number>,
+): { root: Int32Array; inRing: Uint8Array } {
+  const root = new Int32Array(n);
+  for (let i = 0; i < n; i++) root[i] = i;
+  const find = (x: number): number => {
+    while (root[x] !== x) x = root[x] = root[root[x]];
+    return x;
+  };
+  const inRing = new Uint8Array(n);
+  for (let k = 0; k < s.bonds.length; k++) {
+    if (!isRing[k]) continue;
+    const b = s.bonds[k];
+    inRing[b.a] = inRing[b.b] = 1;
+    const ra = find(b.a);
+    const rb = find(b.b);
+    if (ra !== rb) root[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  for (let i = 0; i < n; i++) root[i] = find(i);
+  return { root, inRing };
+}
+
+/**
  * Ring systems (fused, spiro, bridged): atoms joined by ring bonds, transitively. Systems are ordered by their
  * smallest atom, atoms ascending; systemOf is -1 for atoms in no ring.
  */
@@ -50,26 +78,12 @@ export function ringSystemsOf(
   n: number,
   bondInRing: readonly boolean[],
 ): { systems: number[][]; systemOf: Int32Array } {
-  const parent = new Int32Array(n);
-  for (let i = 0; i < n; i++) parent[i] = i;
-  const find = (x: number): number => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
-    return x;
-  };
-  const inRing = new Uint8Array(n);
-  for (let k = 0; k < s.bonds.length; k++) {
-    if (!bondInRing[k]) continue;
-    const b = s.bonds[k];
-    inRing[b.a] = inRing[b.b] = 1;
-    const ra = find(b.a);
-    const rb = find(b.b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  }
+  const { root: rootOf, inRing } = ringRoots(s, n, bondInRing);
   const systems: number[][] = [];
   const systemOf = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
     if (!inRing[i]) continue;
-    const root = find(i);
+    const root = rootOf[i];
     if (systemOf[root] < 0) {
       systemOf[root] = systems.length;
       systems.push([]);
