@@ -4,19 +4,24 @@
  *
  * Salts and solvates: the parent components (largest component with carbon) are related; the other components
  * are compared by constitution and listed apart. Same constitution: an isomorphism σ: A -> B carries A's
- * configuration onto B's units (perceive-units.ts `rebase`); then A and B are identical when σ(x_A) lies in the
+ * configuration onto B's units (perceive/units.ts `rebase`); then A and B are identical when σ(x_A) lies in the
  * orbit of x_B under B's symmetry group, enantiomers when its mirror image does, diastereomers otherwise.
  */
 import type { CipLabel, DifferingUnit, RelationFacts } from './facts.js';
 import { constitutionKey, isomorphic, molecularFormula } from './graph/index.js';
-import { analyse, parentComponent, type Analysis } from './describe.js';
+import {
+  analyse,
+  carryOnto,
+  parentComponent,
+  parentCopies,
+  sameStereoisomer,
+  type Analysis,
+} from './describe/index.js';
 import { labelUnits } from './labels.js';
 import { extractAtoms } from './normalize.js';
-import { mapToken, rebase } from './perceive-units.js';
-import { act, elementMapping, mirrorState, stereogenicIn } from './symmetry.js';
+import { act, elementMapping, mirrorState, stereogenicIn } from './symmetry/index.js';
 import type { Structure } from './types.js';
 import { writeSmiles } from './write/smiles.js';
-import { parentCopies } from './copies.js';
 
 interface Side {
   whole: Analysis;
@@ -49,7 +54,7 @@ function otherDifferences(a: Side, b: Side): { onlyInA: string[]; onlyInB: strin
       (x) =>
         x.key === o.key &&
         (x.structure.stereo.length + o.structure.stereo.length === 0 ||
-          relate(o.structure, x.structure).relation === 'identical'),
+          sameStereoisomer(o.structure, x.structure)),
     );
     if (j >= 0) left.splice(j, 1);
     else onlyInA.push(o.smiles);
@@ -86,36 +91,9 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
         }
       : { ...base, relation: 'different-compounds', explanation: `different molecular formulas${salt}` };
   }
-  const nA = pa.p.structure.atoms.length;
-  const nB = pb.p.structure.atoms.length;
   const mB = pb.p.units.length;
   // A's configuration carried onto B's units.
-  const y = new Uint8Array(mB);
-  const yDefined = new Uint8Array(mB);
-  const fromA = new Int32Array(mB).fill(-1);
-  let open = false;
-  pa.p.units.forEach((u, i) => {
-    const j = pb.p.unitOfAtom[iso[u.atoms[0]]];
-    const bit =
-      j < 0
-        ? -1
-        : rebase(
-            pb.p.units[j],
-            u.tokens.map((t) => mapToken(t, nA, iso, nB)),
-            u.bit,
-          );
-    if (bit < 0) {
-      if (pa.reported[i]) open = true;
-      return;
-    }
-    y[j] = bit;
-    yDefined[j] = u.defined ? 1 : 0;
-    fromA[j] = i;
-  });
-  for (let j = 0; j < mB; j++) {
-    const relevant = pb.reported[j] || (fromA[j] >= 0 && pa.reported[fromA[j]]);
-    if (relevant && (!yDefined[j] || !pb.defined[j])) open = true;
-  }
+  const { y, fromA, open } = carryOnto(pa, pb, iso);
   if (open) {
     return {
       ...base,

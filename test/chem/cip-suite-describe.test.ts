@@ -6,7 +6,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { readSdRecords } from '../../src/chem/read/index.js';
 import { haveSharedData, sharedDataPath } from '../support/shared-data.js';
 

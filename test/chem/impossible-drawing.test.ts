@@ -5,7 +5,7 @@
  * Gold Book, "meso-compounds") needs an achiral member of a set that includes chiral members.
  */
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { smiles } from './stereo-helpers.js';
 
 const TROGER_BAD = 'CC1=CC2=C(C=C1)[N@]3CC4=C(C=CC(=C4)C)[N@](C2)C3';

@@ -5,7 +5,7 @@
  * the figures are from memory of that text and the standard literature.
  */
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { smiles } from './stereo-helpers.js';
 
 const count = (smi: string) => describe(smiles(smi)).stereoisomers;

@@ -4,10 +4,10 @@
  * throws, its counts add up, and relating a structure to its own mirror image agrees with its chirality.
  */
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { parseSmiles } from '../../src/chem/read/smiles.js';
 import { relate } from '../../src/chem/relate.js';
-import { mirror } from '../../src/chem/symmetry.js';
+import { mirror } from '../../src/chem/symmetry/index.js';
 import { haveSharedData } from '../support/shared-data.js';
 import { loadMoleculeNet } from '../support/moleculenet.js';
 

@@ -4,7 +4,7 @@
  * different species and stay atoms (common practice, no source).
  */
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { normalize } from '../../src/chem/normalize.js';
 import { IMPLICIT_H } from '../../src/chem/types.js';
 import { smiles } from './stereo-helpers.js';

@@ -6,7 +6,7 @@
  */
 import { describe as suite, expect, it } from 'vitest';
 import { normalize } from '../../src/chem/normalize.js';
-import { perceive } from '../../src/chem/perceive.js';
+import { perceive } from '../../src/chem/perceive/index.js';
 import { smiles } from './stereo-helpers.js';
 
 /** "kind:atoms(1-based input numbers):defined" for every unit. */

@@ -5,7 +5,7 @@
  * in a 12-membered ring rotates freely through the ring (common practice, no source): not flagged.
  */
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { smiles } from './stereo-helpers.js';
 
 suite('trans double bonds in medium rings', () => {

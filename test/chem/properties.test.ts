@@ -7,11 +7,11 @@
  */
 import fc from 'fast-check';
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import type { StructureFacts } from '../../src/chem/facts.js';
 import { parseSmiles } from '../../src/chem/read/smiles.js';
 import { relate } from '../../src/chem/relate.js';
-import { mirror } from '../../src/chem/symmetry.js';
+import { mirror } from '../../src/chem/symmetry/index.js';
 import type { Structure } from '../../src/chem/types.js';
 import { writeSmiles } from '../../src/chem/write/smiles.js';
 import { haveSharedData } from '../support/shared-data.js';

@@ -7,7 +7,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { parseSmiles } from '../../src/chem/read/smiles.js';
 import { haveSharedData } from '../support/shared-data.js';
 import { loadMoleculeNet } from '../support/moleculenet.js';

@@ -4,7 +4,7 @@
  * 2 stereoisomers, one enantiomer pair, no meso form (Eliel & Wilen 1994, counting rule 2^n, from memory).
  */
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
+import { describe } from '../../src/chem/describe/index.js';
 import { relate } from '../../src/chem/relate.js';
 import { smiles } from './stereo-helpers.js';
 

@@ -4,8 +4,8 @@
  * are textbook cases (Eliel & Wilen, "Stereochemistry of Organic Compounds", 1994, ch. 3 and 11; from memory).
  */
 import { describe as suite, expect, it } from 'vitest';
-import { describe } from '../../src/chem/describe.js';
-import { mirror } from '../../src/chem/symmetry.js';
+import { describe } from '../../src/chem/describe/index.js';
+import { mirror } from '../../src/chem/symmetry/index.js';
 import { writeSmiles } from '../../src/chem/write/smiles.js';
 import { smiles } from './stereo-helpers.js';
 

@@ -12,7 +12,7 @@
  * Coordinates are always arrays of doubles (`coords3`), also when every value happens to be an integer.
  *
  * Code elsewhere that derives a Structure should use `withStereo` / `restructure` / `atomWithHCount` too; the
- * spreads still left are in symmetry.ts (mirror), isomers-list.ts, labels.ts and depict.ts.
+ * spreads still left are in symmetry/group.ts (mirror), describe/isomer-list.ts, labels.ts and depict.ts.
  */
 import type { Atom, Bond, BondOrder, StereoElement, StereoGroup, Structure } from '../types.js';
 

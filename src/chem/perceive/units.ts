@@ -16,8 +16,8 @@
  *   - 'cistrans' (double bonds, odd cumulenes): tokens are [u1, u2, v1, v2], u* on atoms[0], v* on atoms[1]; the
  *     bit says whether u1 and v1 are cis (0) or trans (1). Swapping u1/u2 or v1/v2 flips it; reflection keeps it.
  */
-import type { UnitKind } from './facts.js';
-import { IMPLICIT_H, LONE_PAIR, type StereoElement } from './types.js';
+import type { UnitKind } from '../facts.js';
+import { IMPLICIT_H, LONE_PAIR, type StereoElement } from '../types.js';
 
 export type ConfigMode = 'parity' | 'cistrans';
 

@@ -10,10 +10,10 @@
  *     of double bonds gives a cis/trans-like unit ('double-bond' for one, 'cumulene' for three or more), an even
  *     number an axial unit ('allene' for two, 'cumulene' for four or more). IUPAC 2013 P-93.5.7 / P-93.4.2.
  */
-import type { Graph, RingInfo } from './graph/index.js';
-import type { UnitKind } from './facts.js';
-import type { Structure } from './types.js';
-import { hToken, lpToken, type ConfigMode } from './perceive-units.js';
+import type { Graph, RingInfo } from '../graph/index.js';
+import type { UnitKind } from '../facts.js';
+import type { Structure } from '../types.js';
+import { hToken, lpToken, type ConfigMode } from './units.js';
 
 export interface BondCandidate {
   kind: UnitKind;

@@ -5,10 +5,10 @@
  * examples of Hanson et al., J. Chem. Inf. Model. 2018, 58, 1755) are of this kind. Decided exactly by the
  * automorphisms that fix the unit's atoms: one per distinct restriction to the unit and its neighbours.
  */
-import { automorphisms } from './graph/index.js';
-import type { Graph } from './graph/index.js';
-import type { Structure } from './types.js';
-import { mapToken, rebase, type PerceivedUnit } from './perceive-units.js';
+import { automorphisms } from '../graph/index.js';
+import type { Graph } from '../graph/index.js';
+import type { Structure } from '../types.js';
+import { mapToken, rebase, type PerceivedUnit } from './units.js';
 
 /**
  * Two equivalent terminal ligands (the methyls of an isopropyl group, the O of a sulfone) are always exchanged by

@@ -21,9 +21,9 @@
  * (no single source); nitrogen inversion barriers: Eliel & Wilen, Stereochemistry of Organic Compounds (1994),
  * ch. 8 (from memory).
  */
-import type { Graph, RingInfo } from './graph/index.js';
-import type { Structure } from './types.js';
-import { hToken, lpToken } from './perceive-units.js';
+import type { Graph, RingInfo } from '../graph/index.js';
+import type { Structure } from '../types.js';
+import { hToken, lpToken } from './units.js';
 
 export type CentreVerdict =
   { kind: 'centre'; tokens: [number, number, number, number] } | { kind: 'invertible-nitrogen' } | null;

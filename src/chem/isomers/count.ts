@@ -1,6 +1,6 @@
 /**
  * The stereoisomers of a constitution, counted with Burnside's lemma (the Cauchy–Frobenius lemma) over the group
- * H that the constitutional automorphisms induce on the units' configurations (symmetry.ts):
+ * H that the constitutional automorphisms induce on the units' configurations (symmetry/):
  *
  *   total   = (1/|H|) Σ_{h∈H} |Fix(h)|
  *   achiral = (1/|H|) Σ_{h∈H} |Fix(h·M)|      (orbits mapped onto themselves by the reflection M)
@@ -11,8 +11,8 @@
  * flips it, which merges the two "C3 configurations" of the (2R,4R) form into one orbit.
  * Meso (IUPAC Gold Book, "meso-compound"): an achiral member of a set of diastereomers that has chiral members.
  */
-import type { StereoisomerCount } from './facts.js';
-import type { State } from './perceive-units.js';
+import type { StereoisomerCount } from '../facts.js';
+import type { State } from '../perceive/index.js';
 import {
   act,
   canonicalState,
@@ -21,7 +21,7 @@ import {
   mirrorState,
   sameState,
   type UnitGroup,
-} from './symmetry.js';
+} from '../symmetry/index.js';
 
 const toNumber = (b: bigint): number => Number(b);
 

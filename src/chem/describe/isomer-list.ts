@@ -1,17 +1,17 @@
 /**
- * The stereoisomer list of a constitution: one entry per orbit (isomers.ts enumerateStereoisomers), written as
+ * The stereoisomer list of a constitution: one entry per orbit (isomers/ enumerateStereoisomers), written as
  * SMILES with its CIP labels. Units that are not stereogenic in an entry (C3 of the (2R,4R) form of
  * 2,3,4-trihydroxyglutaric acid) are written without a configuration.
  */
-import type { StereoisomerEntry } from './facts.js';
-import type { Analysis } from './describe.js';
-import { enumerateStereoisomers } from './isomers.js';
-import { labelUnits } from './labels.js';
-import { unitStereo } from './perceive-units.js';
-import { canonicalState, sameState, stereogenicIn } from './symmetry.js';
-import type { Structure } from './types.js';
-import { withStereo } from './read/make.js';
-import { writeSmiles } from './write/smiles.js';
+import type { StereoisomerEntry } from '../facts.js';
+import type { Analysis } from './analyse.js';
+import { enumerateStereoisomers } from '../isomers/index.js';
+import { labelUnits } from '../labels.js';
+import { unitStereo } from '../perceive/index.js';
+import { canonicalState, sameState, stereogenicIn } from '../symmetry/index.js';
+import type { Structure } from '../types.js';
+import { withStereo } from '../read/make.js';
+import { writeSmiles } from '../write/smiles.js';
 
 export function listStereoisomers(a: Analysis, max: number): StereoisomerEntry[] {
   const { p, group } = a;

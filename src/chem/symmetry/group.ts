@@ -4,18 +4,18 @@
  *
  * Each automorphism σ of the constitution maps unit i onto unit π(i) and carries its configuration along; stated
  * against the reference ligands of π(i), the bit changes by the parity of the permutation σ induces on the
- * ligand list (perceive-units.ts `rebase`). So σ acts on a state x ∈ {0,1}^units as a signed permutation:
+ * ligand list (perceive/units.ts `rebase`). So σ acts on a state x ∈ {0,1}^units as a signed permutation:
  * (σ·x)[π(i)] = x[i] ⊕ f(i). Reflection M flips every 'parity' unit and keeps cis/trans units; it commutes with
  * the group. A fully defined configuration x is achiral iff M(x) lies in the orbit of x (some σ with σ·x = M(x));
  * that σ·M⁻¹ is an improper symmetry, and the atoms it fixes are the evidence we print.
  */
-import { automorphisms } from './graph/index.js';
-import { mapToken, rebase, type State } from './perceive-units.js';
-import type { Perception } from './perceive.js';
-import type { StereoElement, Structure } from './types.js';
-import type { Coupling } from './perceive-bridges.js';
-import { ParityUnion } from './symmetry-solve.js';
-import { withStereo } from './read/make.js';
+import { automorphisms } from '../graph/index.js';
+import { mapToken, rebase, type State } from '../perceive/index.js';
+import type { Perception } from '../perceive/index.js';
+import type { StereoElement, Structure } from '../types.js';
+import type { Coupling } from '../perceive/index.js';
+import { ParityUnion } from './solve.js';
+import { withStereo } from '../read/make.js';
 
 export interface UnitGroup {
   /** Distinct signed permutations of the units; element 0 is the identity. */

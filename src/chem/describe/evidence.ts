@@ -5,9 +5,9 @@
  * is cut in its middle by the plane, or holds the inversion centre. The symmetry is constitutional: the
  * conformation that shows it may need rotations about single bonds.
  */
-import type { MirrorFacts } from './facts.js';
-import type { Analysis } from './describe.js';
-import { atomName } from './perceive-input.js';
+import type { MirrorFacts } from '../facts.js';
+import type { Analysis } from './analyse.js';
+import { atomName } from '../perceive/index.js';
 
 export function mirrorFacts(a: Analysis): MirrorFacts {
   const { p, group, chirality } = a;

@@ -1,6 +1,6 @@
 /**
  * Linear constraints x_i ⊕ x_j = c over GF(2), solved by union–find with parity. Used when bridgehead couplings
- * (perceive-bridges.ts) restrict the configurations, so that Burnside counting and the completion tests count
+ * (perceive/bridges.ts) restrict the configurations, so that Burnside counting and the completion tests count
  * only configurations that can exist.
  */
 export class ParityUnion {

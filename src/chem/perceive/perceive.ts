@@ -1,13 +1,13 @@
 /**
  * Perception: every potential stereogenic unit of a (normalized) structure and whether the input defines it.
  *
- * A candidate (perceive-centres.ts, perceive-bonds.ts) is kept when its ligands are constitutionally distinct,
+ * A candidate (perceive/centres.ts, perceive/bonds.ts) is kept when its ligands are constitutionally distinct,
  * or when a pair of them is constitutionally equivalent but the branch behind that pair holds another unit
  * (pseudoasymmetric centres such as C3 of 2,3,4-trihydroxyglutaric acid, "para" units such as C1/C4 of
  * 1,4-dimethylcyclohexane). That second rule refers to the set being built, so it is applied to a fixed point
  * from the optimistic side: start with every candidate, drop the unsupported ones, repeat until nothing changes.
  * Whether such a unit is stereogenic in a given configuration is decided later by the symmetry group
- * (symmetry.ts), not here.
+ * (symmetry/), not here.
  */
 import {
   aromaticBonds,
@@ -15,16 +15,16 @@ import {
   connectedComponents,
   equivalenceClasses,
   ringInfo,
-} from './graph/index.js';
-import type { Graph, RingInfo } from './graph/index.js';
-import { IMPLICIT_H, type Structure } from './types.js';
-import { bondCandidates } from './perceive-bonds.js';
-import { tetrahedralCandidate } from './perceive-centres.js';
-import { hToken, lpToken, type PerceivedUnit } from './perceive-units.js';
-import { applyInputStereo } from './perceive-input.js';
-import { survivesSymmetry, swapsTerminalPair } from './perceive-rescue.js';
-import { bridgeCouplings, type Coupling } from './perceive-bridges.js';
-import { objectList } from './read/make.js';
+} from '../graph/index.js';
+import type { Graph, RingInfo } from '../graph/index.js';
+import { IMPLICIT_H, type Structure } from '../types.js';
+import { bondCandidates } from './bonds.js';
+import { tetrahedralCandidate } from './centres.js';
+import { hToken, lpToken, type PerceivedUnit } from './units.js';
+import { applyInputStereo } from './input.js';
+import { survivesSymmetry, swapsTerminalPair } from './rescue.js';
+import { bridgeCouplings, type Coupling } from './bridges.js';
+import { objectList } from '../read/make.js';
 
 export interface Perception {
   structure: Structure;
@@ -118,7 +118,7 @@ export function perceive(s: Structure): Perception {
   }
 
   let kept = fixedPoint(drafts, graph, n);
-  // Second look at what the branch rule dropped (perceive-rescue.ts); rescued units may support others.
+  // Second look at what the branch rule dropped (rescue.ts); rescued units may support others.
   const tried = new Set<Draft>();
   for (let round = 0; round < 4 && kept.length < drafts.length; round++) {
     const keptSet = new Set(kept);

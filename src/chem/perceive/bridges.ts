@@ -9,10 +9,10 @@
  * a. So the winding of [X_a, a1, a2, a3] is the opposite of that of [X_b, b1, b2, b3], bridge k entering at a_k
  * and leaving at b_k. Stated on the reference tokens that is a linear constraint x_a ⊕ x_b = c.
  */
-import type { Graph, RingInfo } from './graph/index.js';
-import type { Structure } from './types.js';
-import { permutationParity, type PerceivedUnit } from './perceive-units.js';
-import { objectList } from './read/make.js';
+import type { Graph, RingInfo } from '../graph/index.js';
+import type { Structure } from '../types.js';
+import { permutationParity, type PerceivedUnit } from './units.js';
+import { objectList } from '../read/make.js';
 
 export interface Coupling {
   a: number;

@@ -2,8 +2,8 @@
  * Read the input's stereo elements onto the perceived units: which units are defined and their configuration
  * bit. Stereo drawn where there is no unit becomes a remark (or an invertible-nitrogen entry).
  */
-import { IMPLICIT_H, LONE_PAIR, type StereoElement, type Structure } from './types.js';
-import { hToken, lpToken, rebase, type PerceivedUnit } from './perceive-units.js';
+import { IMPLICIT_H, LONE_PAIR, type StereoElement, type Structure } from '../types.js';
+import { hToken, lpToken, rebase, type PerceivedUnit } from './units.js';
 
 export function atomName(s: Structure, i: number): string {
   return `${s.atoms[i].element}${s.atoms[i].inputNumber}`;

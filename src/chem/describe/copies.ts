@@ -3,10 +3,10 @@
  * parent's constitution and the same stereoisomer. Counts and chirality are then given per copy, and relate()
  * compares one copy of each parent.
  */
-import { constitutionKey } from './graph/index.js';
-import { extractAtoms } from './normalize.js';
-import { relate } from './relate.js';
-import type { Structure } from './types.js';
+import { constitutionKey } from '../graph/index.js';
+import { extractAtoms } from '../normalize.js';
+import { sameStereoisomer } from './carry.js';
+import type { Structure } from '../types.js';
 
 /** Indices of the components that are copies of component `parent` (not including `parent` itself). */
 export function parentCopies(s: Structure, comps: number[][], parent: number): number[] {
@@ -18,7 +18,7 @@ export function parentCopies(s: Structure, comps: number[][], parent: number): n
     if (k === parent || c.length !== comps[parent].length) return;
     const cs = extractAtoms(s, c);
     if (constitutionKey(cs) !== key) return;
-    if (ps.stereo.length + cs.stereo.length === 0 || relate(ps, cs).relation === 'identical') out.push(k);
+    if (ps.stereo.length + cs.stereo.length === 0 || sameStereoisomer(ps, cs)) out.push(k);
   });
   return out;
 }
