@@ -14,6 +14,7 @@ if (existsSync(bundled)) {
   register();
   cli = await import(pathToFileURL(join(root, 'src', 'cli', 'main.ts')).href);
 }
+cli.installCrashHandlers?.();
 const argv = process.argv.slice(2);
 // a bulk audit with a worker on every core restarts once with V8's parallel GC helpers off (src/cli/gc-respawn.ts)
 process.exitCode = (await cli.respawnForBulk(argv)) ?? (await cli.run(argv));

@@ -94,7 +94,7 @@ export function applyWaivers(findings: Finding[], loaded: LoadedRecord): void {
   }
 }
 
-export function internalError(check: CheckModule, error: unknown, loaded: LoadedRecord): Finding {
+export function internalError(check: Pick<CheckModule, 'id'>, error: unknown, loaded: LoadedRecord): Finding {
   const text = error instanceof Error ? error.message : String(error);
   return {
     check: INTERNAL_ERROR_ID,

@@ -41,9 +41,21 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
   const registryRecords = options.registry ?? records;
   const registry = buildRegistryView(registryRecords, cache, (r) => audited.has(r));
   const engineApi = { relate: options.engine.relate.bind(options.engine) };
-  const results = records.map((loaded) =>
-    auditOne(loaded, options.checks, config, cache, registry, engineApi),
-  );
+  const results = records.map((loaded) => {
+    try {
+      return auditOne(loaded, options.checks, config, cache, registry, engineApi);
+    } catch (e) {
+      // a fault outside any one check (a bug): this record gets an internal-error finding, the others go on
+      return {
+        id: loaded.id,
+        file: loaded.file,
+        computed: null,
+        findings: [internalError({ id: 'audit' }, e, loaded)],
+        passed: [],
+        declared: { form: null, descriptors: null },
+      };
+    }
+  });
   return {
     tool: { name: 'stereogate', version: VERSION },
     records: results,

@@ -154,6 +154,7 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
       onStats: opts.onPoolStats,
     },
   );
+  const shard = opts.shard ? `${opts.shard.index}/${opts.shard.count}` : null;
   try {
     for await (const r of results) {
       acc.add(r.tally);
@@ -161,10 +162,15 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
       opts.onRecord?.(r);
       progress.tick();
     }
+  } catch (e) {
+    // a fault of stereogate itself: the outputs still get what was computed, then the error ends the run (exit 3)
+    const partial = acc.trailer(shard);
+    for (const w of opts.writers) await w.finish(partial).catch(() => undefined);
+    throw e;
   } finally {
     progress.stop();
   }
-  const trailer = acc.trailer(opts.shard ? `${opts.shard.index}/${opts.shard.count}` : null);
+  const trailer = acc.trailer(shard);
   for (const w of opts.writers) await w.finish(trailer);
   return { trailer, seconds: (Date.now() - started) / 1000 };
 }

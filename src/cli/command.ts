@@ -24,3 +24,8 @@ export class UsageError extends Error {}
 export const EXIT_OK = 0;
 export const EXIT_BAD_INPUT = 1;
 export const EXIT_USAGE = 2;
+/**
+ * stereogate itself failed (a bug, or a fault outside the input: disk full, out of memory). Never 1, so a crash
+ * is never read as "findings found"; whatever was computed before the crash is still written.
+ */
+export const EXIT_CRASH = 3;

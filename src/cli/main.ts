@@ -1,11 +1,12 @@
 /**
  * stereogate command line: `stereogate <command> [arguments]`. The commands are data (commands/index.ts).
- * Exit codes: 0 done, 1 a structure could not be read (or the command's own failure code), 2 usage error.
+ * Exit codes: 0 done, 1 a structure could not be read (or the command's own failure code), 2 usage error,
+ * 3 stereogate itself failed (EXIT_CRASH: never shared with "findings found").
  */
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { commands } from './commands/index.js';
-import { EXIT_OK, EXIT_USAGE, UsageError, type Io } from './command.js';
+import { EXIT_CRASH, EXIT_OK, EXIT_USAGE, UsageError, type Io } from './command.js';
 import { respawnForBulk } from './gc-respawn.js';
 
 export { respawnForBulk };
@@ -52,11 +53,35 @@ export async function run(argv: string[], io: Io = nodeIo): Promise<number> {
       io.err(`stereogate ${command.name}: ${e.message}\n\n${command.usage}`);
       return EXIT_USAGE;
     }
-    throw e;
+    io.err(crashMessage(`stereogate ${command.name}`, e));
+    return EXIT_CRASH;
   }
 }
 
+/** What a crash prints: the error with its stack, and that it is a fault of stereogate, not of the input. */
+export function crashMessage(where: string, e: unknown): string {
+  const detail = e instanceof Error ? (e.stack ?? `${e.name}: ${e.message}`) : String(e);
+  return (
+    `${where}: internal error, stopped (exit code ${EXIT_CRASH}). This is a fault in stereogate, not a finding ` +
+    `about the records; outputs hold what was computed before it. Please report it with the input.\n${detail}`
+  );
+}
+
+/**
+ * Errors raised outside any command's call chain (a stream callback, a timer) also end the run with EXIT_CRASH
+ * instead of Node's default 1, which would read as "findings found".
+ */
+export function installCrashHandlers(): void {
+  const onCrash = (e: unknown): void => {
+    process.stderr.write(`${crashMessage('stereogate', e)}\n`);
+    process.exit(EXIT_CRASH);
+  };
+  process.on('uncaughtException', onCrash);
+  process.on('unhandledRejection', onCrash);
+}
+
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
+  installCrashHandlers();
   const argv = process.argv.slice(2);
   // a bulk audit with a worker on every core restarts once with V8's parallel GC helpers off (gc-respawn.ts)
   process.exitCode = (await respawnForBulk(argv)) ?? (await run(argv));

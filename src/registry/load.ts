@@ -37,8 +37,33 @@ export function loadRegistry(root: string, options: { recordDirs: readonly strin
   return { root: realRoot, records, missingDirs: found.missingDirs };
 }
 
-/** Loads one record file (absolute path inside the real root). */
+/**
+ * Loads one record file (absolute path inside the real root). Never throws: a fault while reading one file
+ * becomes that record's problem, so the other records are still audited.
+ */
 export function loadRecordFile(realRoot: string, abs: string): LoadedRecord {
+  try {
+    return loadRecordFileOrThrow(realRoot, abs);
+  } catch (e) {
+    return {
+      file: relativeTo(realRoot, abs),
+      id: null,
+      record: null,
+      positions: NO_POSITIONS,
+      problems: [
+        {
+          path: '',
+          line: null,
+          code: 'internal-error',
+          message: `the record file could not be read because of an internal error in stereogate (${(e as Error)?.message ?? String(e)}); please report it with the file`,
+        },
+      ],
+      origin: { kind: 'file' },
+    };
+  }
+}
+
+function loadRecordFileOrThrow(realRoot: string, abs: string): LoadedRecord {
   const file = relativeTo(realRoot, abs);
   const read = readTextFile(abs);
   if (!read.ok) {

@@ -87,13 +87,22 @@ function kindOf(v: unknown): string {
   if (Array.isArray(v)) return 'a list';
   if (typeof v === 'object') return 'a mapping';
   if (typeof v === 'string') return `the text ${quote(v)}`;
-  return `${typeof v} ${String(v)}`;
+  return `${typeof v} ${safeJson(v)}`;
 }
 
 function quote(v: unknown): string {
-  const s = typeof v === 'string' ? v : JSON.stringify(v);
+  const s = typeof v === 'string' ? v : safeJson(v);
   const short = s.length > 60 ? `${s.slice(0, 57)}...` : s;
   return `'${short}'`;
+}
+
+/** JSON text of any value; never throws (undefined, BigInt, cycles and functions have no JSON). */
+function safeJson(v: unknown): string {
+  try {
+    return JSON.stringify(v) ?? String(v);
+  } catch {
+    return Object.prototype.toString.call(v);
+  }
 }
 
 function allowedProperties(schemaNode: unknown): string[] {
@@ -153,8 +162,13 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
         .split(',')
         .map((t) => TYPE_WORDS[t] ?? t)
         .join(' or ');
+      const props = allowedProperties(e.parentSchema);
       const tip =
-        want === 'text' && (typeof got === 'number' || typeof got === 'boolean') ? ' (put it in quotes)' : '';
+        want === 'text' && (typeof got === 'number' || typeof got === 'boolean')
+          ? ' (put it in quotes)'
+          : want === 'a mapping of fields' && props.includes('smiles') && props.includes('molfile')
+            ? ' (write it as smiles: … or molfile: … on the next line, indented)'
+            : '';
       return { path, message: `${label}: must be ${want}, found ${kindOf(got)}${tip}` };
     }
     case 'minimum':
@@ -168,7 +182,10 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
         exclusiveMinimum: 'more than',
         exclusiveMaximum: 'less than',
       };
-      return { path, message: `${label}: must be ${words[e.keyword]} ${limit}, found ${String(got)}` };
+      return {
+        path,
+        message: `${label}: must be ${words[e.keyword]} ${limit}, found ${typeof got === 'number' ? got : kindOf(got)}`,
+      };
     }
     case 'minLength':
       return { path, message: `${label}: must not be empty` };
@@ -182,7 +199,13 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
     case 'minItems':
       return { path, message: `${label}: needs at least ${(e.params as { limit: number }).limit} item(s)` };
     case 'oneOf': {
-      const obj = (got ?? {}) as Record<string, unknown>;
+      if (got === null || typeof got !== 'object' || Array.isArray(got)) {
+        return {
+          path,
+          message: `${label}: must be a mapping with smiles or molfile (e.g. smiles: CCO), found ${kindOf(got)}`,
+        };
+      }
+      const obj = got as Record<string, unknown>;
       const both = 'smiles' in obj && 'molfile' in obj;
       return {
         path,
@@ -197,10 +220,13 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
 /** Plain problems, one per distinct fault; the sub-errors of a failed oneOf are folded into its own message. */
 function explain(errors: ErrorObject[], value: unknown, what: string): SchemaProblem[] {
   const oneOfPaths = errors.filter((e) => e.keyword === 'oneOf').map((e) => e.schemaPath);
+  // a value of the wrong type (`structure: CCO`) fails its oneOf too; the type error alone says what is wrong
+  const wrongType = new Set(errors.filter((e) => e.keyword === 'type').map((e) => e.instancePath));
   const out: SchemaProblem[] = [];
   const seen = new Set<string>();
   for (const e of errors) {
     if (oneOfPaths.some((p) => e.schemaPath !== p && e.schemaPath.startsWith(`${p}/`))) continue;
+    if (e.keyword === 'oneOf' && wrongType.has(e.instancePath)) continue;
     const p = explainOne(e, value, what);
     if (!p || seen.has(p.message)) continue;
     seen.add(p.message);

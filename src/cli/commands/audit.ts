@@ -1,7 +1,8 @@
 /**
  * `stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif] [--output FILE]
  *  [--fail-on error|warning|never]` — audits the registry's records and prints the report.
- * Exit 1 when open (not waived) findings reach --fail-on, 0 otherwise, 2 for usage errors.
+ * Exit 1 when open (not waived) findings reach --fail-on, 0 otherwise, 2 for usage errors, 3 when stereogate
+ * itself failed on a record (the report is still written).
  */
 import { existsSync, writeFileSync } from 'node:fs';
 import { isAbsolute, relative, resolve, sep } from 'node:path';
@@ -17,7 +18,8 @@ import { renderText, shouldColor } from '../../report/text.js';
 import { parseCommandArgs } from '../args.js';
 import { isBulkInput } from '../../bulk/run.js';
 import { bulkAudit } from './bulk-audit.js';
-import { EXIT_OK, UsageError, type Command } from '../command.js';
+import { EXIT_CRASH, EXIT_OK, UsageError, type Command } from '../command.js';
+import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
 
 export const EXIT_FINDINGS = 1;
 
@@ -34,7 +36,8 @@ const USAGE = [
   '  --fail-on LEVEL      exit 1 when a finding not accepted by a waiver is at least this severe:',
   '                       error (default), warning, or never',
   '',
-  'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error.',
+  'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error,',
+  '            3 internal error (the report is still written; records it hit carry an internal-error finding).',
   '',
   'Legacy exports (.sdf, .csv, .tsv) are audited in bulk; `stereogate merge --help` lists the bulk options.',
 ].join('\n');
@@ -44,6 +47,13 @@ export function reachesThreshold(result: AuditResult, failOn: 'error' | 'warning
   if (failOn === 'never') return false;
   const s = result.summary;
   return failOn === 'error' ? s.errors > 0 : s.errors + s.warnings > 0;
+}
+
+/** A record hit a fault of stereogate itself: the report is written, the exit code says it is incomplete. */
+export function hasInternalErrors(result: AuditResult): boolean {
+  return result.records.some((r) =>
+    r.findings.some((f) => f.check === INTERNAL_ERROR_ID || f.messageId === INTERNAL_ERROR_ID),
+  );
 }
 
 /** Paths as typed: one that exists relative to the working folder is taken from there, else from the root. */
@@ -127,6 +137,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       } else {
         io.out(report);
       }
+      if (hasInternalErrors(result)) return EXIT_CRASH;
       return reachesThreshold(result, failOn) ? EXIT_FINDINGS : EXIT_OK;
     },
   };

@@ -22,7 +22,8 @@ import {
 } from '../../bulk/writers.js';
 import { sarifWriter } from '../../bulk/sarif-writer.js';
 import { HtmlCollector } from '../../bulk/html-collector.js';
-import { UsageError, type Io } from '../command.js';
+import { EXIT_CRASH, UsageError, type Io } from '../command.js';
+import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
 import { CAUTION } from '../../audit/caution.js';
 import { VERSION } from '../../audit/version.js';
 
@@ -56,7 +57,8 @@ Outputs (any combination; the run always prints a summary table):
   --csv FILE              one row per record, for spreadsheets
   --sarif FILE            SARIF 2.1.0
   --html FILE             self-contained HTML report with depictions of the flagged records
-  --fail-on LEVEL         error | warning | never (default error): exit 1 when findings reach it`;
+  --fail-on LEVEL         error | warning | never (default error): exit 1 when findings reach it
+                          (exit 3: stereogate itself failed; the outputs hold what was computed)`;
 
 const OUTPUT_OPTIONS = {
   jsonl: { type: 'string' },
@@ -189,6 +191,7 @@ export function summaryTable(t: BulkTrailer, seconds: number | null): string {
 }
 
 function exitCode(t: BulkTrailer, failOn: string): number {
+  if (t.byCheck[INTERNAL_ERROR_ID]) return EXIT_CRASH;
   if (failOn === 'never') return 0;
   if (t.summary.errors > 0) return 1;
   if (failOn === 'warning' && t.summary.warnings > 0) return 1;
