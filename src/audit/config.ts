@@ -23,7 +23,10 @@ export const DEFAULT_CONFIG: Readonly<AuditConfig> = Object.freeze({
 /** Where each default comes from. */
 export const DEFAULT_SOURCES: Readonly<Record<keyof AuditConfig, string>> = Object.freeze({
   recordDirs: 'the record format of this project (records live under compounds/ unless configured)',
-  severities: 'none overridden: every check keeps the default severity its module declares',
+  severities:
+    'none overridden: every check keeps the default severity its module declares. A level given for a check ' +
+    "sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given " +
+    "for 'check-id/message-id' sets that one message's level, notes included",
   ratioSumTolerance:
     'common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts ' +
     'may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts',
@@ -101,19 +104,34 @@ function readConfigFile(abs: string, shown: string): Partial<AuditConfig> {
   return parsed.value as Partial<AuditConfig>;
 }
 
-/** Severities naming a check that does not exist are a usage error (a typo would silently do nothing). */
+/**
+ * Severities naming a check that does not exist are a usage error (a typo would silently do nothing); so are
+ * 'check-id/message-id' keys whose message the check does not have (when `messagesOf` knows the check's messages).
+ */
 export function checkSeverityIds(
   config: AuditConfig,
   knownIds: readonly string[],
   suggest: (w: string) => string | null,
+  messagesOf?: (checkId: string) => readonly string[] | undefined,
 ): void {
-  const unknown = Object.keys(config.severities).filter((id) => !knownIds.includes(id));
+  const unknown: string[] = [];
+  for (const key of Object.keys(config.severities)) {
+    const cut = key.indexOf('/');
+    const id = cut < 0 ? key : key.slice(0, cut);
+    if (!knownIds.includes(id)) {
+      const guess = suggest(id);
+      unknown.push(guess ? `'${key}' (did you mean '${guess}'?)` : `'${key}'`);
+      continue;
+    }
+    if (cut < 0) continue;
+    const message = key.slice(cut + 1);
+    const known = messagesOf?.(id);
+    if (known !== undefined && !known.includes(message)) {
+      unknown.push(`'${key}' (${id} has no message '${message}'; its messages: ${known.join(', ')})`);
+    }
+  }
   if (unknown.length === 0) return;
-  const parts = unknown.map((id) => {
-    const guess = suggest(id);
-    return guess ? `'${id}' (did you mean '${guess}'?)` : `'${id}'`;
-  });
   throw new ConfigError(
-    `severities: no check is called ${parts.join(', ')}; known checks: ${knownIds.join(', ')}`,
+    `severities: no check or message is called ${unknown.join(', ')}; known checks: ${knownIds.join(', ')}`,
   );
 }

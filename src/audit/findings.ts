@@ -24,23 +24,31 @@ export function fillTemplate(template: string, data: RawFinding['data']): string
 }
 
 /**
- * The severity of a finding: the message's own severity, else the check's default. A configured severity
- * replaces the default; a message that carries its own severity keeps it but never rises above the configured one.
+ * The severity of a finding. Without configuration: the message's own level, else the check's default. A
+ * severity configured for the check (`severities: {check-id: level}`) sets the level of that check's failures —
+ * every message that is not a note, raised or lowered alike; note-level messages (unverified claims, remarks)
+ * stay notes. A severity configured for one message (`severities: {check-id/message-id: level}`) sets that
+ * message's level, notes included, and wins over the check's.
  */
 export function resolveSeverity(
   base: Severity,
   own: Severity | undefined,
   configured: Severity | undefined,
+  configuredForMessage?: Severity,
 ): Severity {
-  if (configured === undefined) return own ?? base;
-  if (own === undefined) return configured;
-  return RANK[own] <= RANK[configured] ? own : configured;
+  if (configuredForMessage !== undefined) return configuredForMessage;
+  const level = own ?? base;
+  if (configured === undefined || level === 'note') return level;
+  return configured;
 }
 
-export function configuredSeverity(config: AuditConfig, checkId: string): Severity | 'off' | undefined {
-  return Object.prototype.hasOwnProperty.call(config.severities, checkId)
-    ? config.severities[checkId]
-    : undefined;
+/** The key that configures one message of a check: 'check-id/message-id'. */
+export function messageKey(checkId: string, messageId: string): string {
+  return `${checkId}/${messageId}`;
+}
+
+export function configuredSeverity(config: AuditConfig, key: string): Severity | 'off' | undefined {
+  return Object.prototype.hasOwnProperty.call(config.severities, key) ? config.severities[key] : undefined;
 }
 
 /** Line of a field in the record's source; for bulk records without positions, the row/record line. */
@@ -52,6 +60,11 @@ export function lineFor(loaded: LoadedRecord, field: string | null): number | nu
   return loaded.origin.kind === 'bulk' ? loaded.origin.line : null;
 }
 
+/** False when the configuration switches this message off (`severities: {check-id/message-id: off}`). */
+export function messageEnabled(config: AuditConfig, checkId: string, messageId: string): boolean {
+  return configuredSeverity(config, messageKey(checkId, messageId)) !== 'off';
+}
+
 export function toFinding(
   check: CheckModule,
   raw: RawFinding,
@@ -59,6 +72,7 @@ export function toFinding(
   config: AuditConfig,
 ): Finding {
   const configured = configuredSeverity(config, check.id);
+  const forMessage = configuredSeverity(config, messageKey(check.id, raw.messageId));
   const template = check.messages[raw.messageId];
   const message =
     template !== undefined
@@ -71,6 +85,7 @@ export function toFinding(
       check.defaultSeverity,
       raw.severity,
       configured === 'off' ? undefined : configured,
+      forMessage === 'off' ? undefined : forMessage,
     ),
     message,
     data: raw.data ?? {},

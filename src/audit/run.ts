@@ -16,6 +16,7 @@ import {
   applyWaivers,
   configuredSeverity,
   internalError,
+  messageEnabled,
   schemaFindings,
   toFinding,
 } from './findings.js';
@@ -96,7 +97,9 @@ function auditOne(
       outcome = check.run(ctx);
       if (!outcome || !Array.isArray(outcome.findings))
         throw new Error('the check returned no findings list');
-      produced = outcome.findings.map((raw) => toFinding(check, raw, loaded, config));
+      produced = outcome.findings
+        .filter((raw) => messageEnabled(config, check.id, raw.messageId))
+        .map((raw) => toFinding(check, raw, loaded, config));
     } catch (e) {
       findings.push(internalError(check, e, loaded));
       continue;
@@ -156,7 +159,8 @@ export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
   const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
   const checks = options.checks ?? (await import('../checks/index.js')).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
-  checkSeverityIds(config, ids, (w) => closestWord(w, ids));
+  const messageIds = new Map(checks.map((c) => [c.id, Object.keys(c.messages)]));
+  checkSeverityIds(config, ids, (w) => closestWord(w, ids), (id) => messageIds.get(id));
   const engine = options.engine ?? (await defaultEngine());
   const load = loadRegistry(root, { recordDirs: config.recordDirs });
   if (load.missingDirs.length > 0) {

@@ -46,7 +46,9 @@ const messages = {
   'claim-rests-on-invertible-nitrogen':
     'Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. ' +
     'Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier ' +
-    'about 25 kJ/mol for simple amines), so its two configurations interconvert and cannot be isolated: the ' +
+    'roughly 30–40 kJ/mol for simple trialkylamines, about 24 kJ/mol for ammonia — values from memory; a ' +
+    'configuration that can be isolated at room temperature needs roughly 100 kJ/mol), so its two ' +
+    'configurations interconvert and cannot be isolated: the ' +
     "structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's " +
     'base, an aziridine, a quaternary ammonium ion), draw that feature.',
   'stereo-drawn-on-invertible-nitrogen':
@@ -97,8 +99,9 @@ export const nitrogenInversion: CheckModule = {
   summary: 'A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.',
   explanation:
     'A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar ' +
-    'transition state with a low barrier (about 20–30 kJ/mol for simple amines; from memory, e.g. Clayden, ' +
-    'Greeves & Warren, Organic Chemistry), so its enantiomers interconvert rapidly at room temperature and ' +
+    'transition state with a low barrier (from memory: about 24 kJ/mol for ammonia, roughly 30–40 kJ/mol for ' +
+    'simple trialkylamines; invertomers that can be isolated at room temperature need a barrier of roughly ' +
+    '100 kJ/mol, also from memory), so its enantiomers interconvert rapidly at room temperature and ' +
     'cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is ' +
     "blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium " +
     'ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim ' +

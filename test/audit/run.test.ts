@@ -104,7 +104,7 @@ describe('runAudit', () => {
     expect(result.summary).toMatchObject({ errors: 1, waived: 1 });
   });
 
-  it('severity overrides from the config file; off skips the check; message severities are capped, not raised', async () => {
+  it('severity overrides from the config file; off skips the check; a note-level message stays a note', async () => {
     reg = tmpRegistry({
       'stereogate.config.yml': 'severities:\n  fake-form: "off"\n  fake-ratio: note\n',
       'compounds/a.yml': rec('LX-00001', 'meso', '  ratio: "1:2"\n'),
