@@ -6,8 +6,9 @@
  *   N+  / P+ / As+  four single-bonded heavy neighbours, no H (quaternary ammonium, N-oxides drawn N+–O−,
  *                   phosphonium). Protonated amines ([NH+]) are not centres: proton exchange inverts them.
  *   N (neutral)     three single-bonded heavy neighbours, no H, not aromatic, and either in a three-membered ring
- *                   (aziridines invert slowly) or a bridgehead of a small bridged ring system (two rings of at
- *                   most 8 atoms through N sharing at least three atoms, as in Tröger's base or quinuclidines).
+ *                   (aziridines invert slowly) or a bridgehead of a small bridged ring system (three ring bonds,
+ *                   two rings of at most 8 atoms through N sharing at least three atoms, as in Tröger's base or
+ *                   quinuclidines; not the N bridge of tropanes, whose substituent flips).
  *                   Any other such N is an ordinary, rapidly inverting amine (reported apart).
  *   P, As (neutral) three single-bonded σ-neighbours (at most one H) with a lone pair (phosphines), or four
  *                   σ-neighbours with exactly one double bond (phosphine oxides/sulfides, phosphates, P(V) esters).
@@ -68,7 +69,7 @@ export function tetrahedralCandidate(
       if (c === 1 && heavy === 4) return centreOf(nb, h, false, n, i);
       if (c === 0 && heavy === 3) {
         if (atom.aromatic) return null;
-        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i))
+        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(g, rings, i))
           return centreOf(nb, h, true, n, i);
         return { kind: 'invertible-nitrogen' };
       }
@@ -104,8 +105,17 @@ function centreOf(nb: Int32Array, h: number, withLonePair: boolean, n: number, i
   return { kind: 'centre', tokens: t };
 }
 
-/** N in two SSSR rings of at most 8 atoms that share at least three atoms (a bridged, not merely fused, system). */
-function isSmallBridgehead(rings: RingInfo, i: number): boolean {
+/**
+ * N that is a true bridgehead of a small bridged system: all three of its bonds are ring bonds, and two SSSR
+ * rings of at most 8 atoms through it share at least three atoms (bridged, not merely fused). An N that is itself
+ * the one-atom bridge, with its substituent outside the rings (tropane, 8-azabicyclo[3.2.1]octane; granatane,
+ * 9-azabicyclo[3.3.1]nonane), inverts like any tertiary amine: the N-substituent flips between the two faces
+ * (Eliel & Wilen 1994, ch. 8, from memory). Tröger's base and quinuclidine N are locked.
+ */
+function isSmallBridgehead(g: Graph, rings: RingInfo, i: number): boolean {
+  let ringBonds = 0;
+  for (const b of g.nbrBonds[i]) if (rings.bondInRing[b]) ringBonds++;
+  if (ringBonds < 3) return false;
   const mine = rings.rings.filter((r) => r.length <= 8 && r.includes(i));
   for (let a = 0; a < mine.length; a++) {
     for (let b = a + 1; b < mine.length; b++) {
