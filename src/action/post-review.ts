@@ -11,6 +11,7 @@ import { postInlineComments } from '../github/inline-comments.js';
 import { planInlineComments } from '../github/inline-plan.js';
 import { parsePatch, type DiffLines } from '../github/patch.js';
 import { toRepoPath } from '../github/paths.js';
+import { redactSecret } from '../github/redact.js';
 import { message, type Chosen } from './choose-records.js';
 import type { Engine, Runner } from './ports.js';
 import type { ActionSettings } from './settings.js';
@@ -35,29 +36,36 @@ export async function postReview(
   if (pr === null) return ['Not a pull request: no comment posted.'];
   if (client === null) return ['No token given: no comment posted.'];
   const said: string[] = [];
-  const say = (line: string, warn = false): void => {
+  const say = (raw: string, warn = false): void => {
+    const line = redactSecret(raw, settings.token);
     said.push(line);
     if (warn) runner.warning(line);
     else runner.info(line);
   };
 
+  let checklistUrl: string | null = null;
   if (settings.checklistComment) {
     try {
-      let body = engine.renderMarkdown(result, {
+      const rendered = engine.renderMarkdown(result, {
         maxChars: COMMENT_MAX_CHARS,
         detailsUrl: settings.runUrl ?? undefined,
       });
-      if (body.length > COMMENT_MAX_CHARS)
-        body =
-          body.slice(0, COMMENT_MAX_CHARS - 200) + '\n\n… (cut; the full checklist is in the job summary)\n';
+      const body = redactSecret(capComment(rendered, COMMENT_MAX_CHARS), settings.token);
       const done = await upsertChecklistComment(client, pr, body, {
         createIfMissing: result.records.length > 0,
       });
+      checklistUrl = done.url;
       if (done.action === 'none') say('No record changed and no earlier checklist comment: none posted.');
       else say(`Checklist comment ${done.action}${done.url === null ? '' : `: ${done.url}`}.`);
+      if (done.removed > 0)
+        say(`${done.removed} duplicate checklist comment(s) of an overlapping run deleted.`);
     } catch (error) {
       if (refused(error)) {
         say(READ_ONLY, true);
+        return said;
+      }
+      if (rateLimited(error)) {
+        say(rateLimitLine(error, settings), true);
         return said;
       }
       say(
@@ -73,7 +81,7 @@ export async function postReview(
       const plan = planInlineComments(result, diffs, {
         registryDir: settings.registryDir,
         max: settings.maxInlineComments,
-        caution: result.caution,
+        checklistUrl,
       });
       if (plan.comments.length + plan.outsideDiff + plan.overLimit === 0) return said;
       const done = await postInlineComments(client, pr, plan.comments);
@@ -85,10 +93,18 @@ export async function postReview(
         parts.push(`${plan.outsideDiff} finding(s) on lines outside the diff (in the checklist)`);
       if (plan.overLimit > 0)
         parts.push(`${plan.overLimit} over the limit of ${settings.maxInlineComments} (in the checklist)`);
+      if (done.removed > 0) parts.push(`${done.removed} duplicate(s) of an overlapping run deleted`);
       say(parts.join('; ') + '.');
       if (done.notAllowed.length > 0) say(READ_ONLY, true);
+      if (done.rateLimited !== null) {
+        say(
+          `${done.rateLimited.comments.length} inline comment(s) not posted: ${rateLimitLine(done.rateLimited.error, settings)}`,
+          true,
+        );
+      }
     } catch (error) {
       if (refused(error)) say(READ_ONLY, true);
+      else if (rateLimited(error)) say(rateLimitLine(error, settings), true);
       else
         say(`Could not post inline comments (${message(error)}); the findings are in the checklist.`, true);
     }
@@ -96,8 +112,37 @@ export async function postReview(
   return said;
 }
 
+/** A permission refusal (e.g. the read-only token of a fork's pull request), not a rate limit. */
 function refused(error: unknown): boolean {
-  return error instanceof GitHubApiError && error.status === 403;
+  return error instanceof GitHubApiError && error.kind === 'refused';
+}
+
+function rateLimited(error: unknown): error is GitHubApiError {
+  return error instanceof GitHubApiError && error.kind === 'rate-limit';
+}
+
+/** Says which: a rate limit, with GitHub's wait and ours, and that the token is not the problem. */
+export function rateLimitLine(error: GitHubApiError, settings: ActionSettings): string {
+  const wait = error.retryAfterMs === null ? null : Math.ceil(error.retryAfterMs / 1000);
+  return (
+    `GitHub's API rate limit stopped posting (HTTP ${error.status}` +
+    (wait === null
+      ? ''
+      : `, retry after ${wait} s, longer than api-max-wait of ${settings.api.maxWaitMs / 1000} s`) +
+    '). This is a rate limit, not a read-only token; the checklist is in the job summary and the next run posts it.'
+  );
+}
+
+/**
+ * The comment within GitHub's size limit: cut at a line end, never inside the marker line, with a note saying
+ * where the rest is (the job summary and the report file always hold the full checklist).
+ */
+export function capComment(body: string, max: number): string {
+  if (body.length <= max) return body;
+  const note = "\n\n… (cut to fit GitHub's comment size limit; the full checklist is in the job summary)\n";
+  const room = body.slice(0, max - note.length);
+  const end = room.lastIndexOf('\n');
+  return (end > 0 ? room.slice(0, end) : room) + note;
 }
 
 /** Diff lines of the record files that have findings: from the API's patches, or from git when git listed them. */

@@ -1,7 +1,8 @@
 /**
  * One run of the action: choose the records, audit them against the whole registry, write the SARIF file, the
- * report, the annotations, the outputs and the job summary, post to the pull request, and judge by the threshold.
- * The files and summary are written even when GitHub's API fails.
+ * report, the annotations, the outputs and the job summary, then post to the pull request, and judge by the
+ * threshold. Everything is written before anything is posted, so a failing or stalled API loses no result; what
+ * posting did is added to the job summary afterwards. The token never reaches the summary.
  */
 import { mkdir, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
@@ -9,6 +10,7 @@ import type { AuditResult } from '../audit/types.js';
 import { buildAnnotations } from '../github/annotations.js';
 import type { GitHubClient } from '../github/client.js';
 import { writeSarifFile } from '../github/sarif-file.js';
+import { redactSecret } from '../github/redact.js';
 import { escapeMarkdown } from '../report/escape.js';
 import { chooseRecords, message } from './choose-records.js';
 import type { Engine, Runner } from './ports.js';
@@ -54,7 +56,11 @@ export async function review(
   if (settings.reportFile !== null) {
     try {
       await mkdir(dirname(settings.reportFile), { recursive: true });
-      await writeFile(settings.reportFile, engine.renderMarkdown(result, {}), 'utf8');
+      await writeFile(
+        settings.reportFile,
+        redactSecret(engine.renderMarkdown(result, {}), settings.token),
+        'utf8',
+      );
       written.push(`report: ${settings.reportFile}`);
     } catch (error) {
       runner.warning(`Could not write the report ${settings.reportFile}: ${message(error)}`);
@@ -78,21 +84,26 @@ export async function review(
   runner.setOutput('sarif-file', settings.sarifFile ?? '');
   runner.setOutput('report-file', settings.reportFile ?? '');
 
+  // Everything computed is on record before anything is posted: a stalled or failing API loses nothing.
+  const redact = (text: string): string => redactSecret(text, settings.token);
+  try {
+    const summary = engine.renderMarkdown(result, { maxChars: SUMMARY_MAX_CHARS });
+    await runner.writeSummary(redact(`${summary}\n`));
+  } catch (error) {
+    runner.warning(`Could not write the job summary: ${message(error)}`);
+  }
+
   let posted: string[];
   try {
     posted = await postReview(settings, result, chosen, engine, client, runner);
   } catch (error) {
-    posted = [`Posting to the pull request failed: ${message(error)}`];
+    posted = [`Posting to the pull request failed: ${redact(message(error))}`];
     runner.warning(posted[0]!);
   }
-
   try {
-    const summary = engine.renderMarkdown(result, { maxChars: SUMMARY_MAX_CHARS });
-    await runner.writeSummary(
-      `${summary}\n\n${posted.map((line) => `- ${escapeMarkdown(line)}`).join('\n')}\n`,
-    );
+    await runner.writeSummary(redact(`\n${posted.map((line) => `- ${escapeMarkdown(line)}`).join('\n')}\n`));
   } catch (error) {
-    runner.warning(`Could not write the job summary: ${message(error)}`);
+    runner.warning(`Could not add to the job summary: ${message(error)}`);
   }
 
   return { result, failure: judge(result, settings.failOn) };

@@ -34,12 +34,23 @@ export interface ActionSettings {
   sarifFile: string | null;
   reportFile: string | null;
   apiUrl: string;
+  /** Time limit, tries and longest wait for GitHub API requests (inputs api-timeout, api-tries, api-max-wait). */
+  api: ApiLimits;
   /** Link to this workflow run (where the job summary is), or null outside Actions. */
   runUrl: string | null;
   repository: { owner: string; repo: string } | null;
   eventName: string;
   /** The pull request under review; null on other events. */
   pullRequest: PullRequestRef | null;
+}
+
+export interface ApiLimits {
+  /** Time limit of one request, answer included. */
+  timeoutMs: number;
+  /** Tries of one request (reads and updates; a creation is only repeated after checking it did not arrive). */
+  tries: number;
+  /** Longest wait for a rate limit or back-off; a longer Retry-After gives up with a rate-limit message. */
+  maxWaitMs: number;
 }
 
 /** Reads one input by its name in action.yml; '' when not given (as @actions/core's getInput does). */
@@ -77,6 +88,11 @@ export function readSettings(input: InputReader, env: NodeJS.ProcessEnv): Action
     sarifFile: optionalPath('sarif-file'),
     reportFile: optionalPath('report-file'),
     apiUrl: env.GITHUB_API_URL || 'https://api.github.com',
+    api: {
+      timeoutMs: parseSeconds(input('api-timeout'), 'api-timeout', 30) * 1000,
+      tries: Math.max(1, parseCount(input('api-tries'), 'api-tries', 3)),
+      maxWaitMs: parseSeconds(input('api-max-wait'), 'api-max-wait', 90) * 1000,
+    },
     runUrl:
       repository !== null && env.GITHUB_RUN_ID
         ? `${serverUrl}/${repository.owner}/${repository.repo}/actions/runs/${env.GITHUB_RUN_ID}`
@@ -117,6 +133,16 @@ export function parseCount(raw: string, name: string, fallback: number): number 
   const value = raw.trim();
   if (value === '') return fallback;
   if (!/^\d+$/.test(value)) throw new SettingsError(`${name} must be a whole number, not '${value}'`);
+  return Number(value);
+}
+
+/** A positive number of seconds, decimals allowed (short limits keep tests fast). */
+export function parseSeconds(raw: string, name: string, fallback: number): number {
+  const value = raw.trim();
+  if (value === '') return fallback;
+  if (!/^\d+(\.\d+)?$/.test(value) || Number(value) <= 0) {
+    throw new SettingsError(`${name} must be a positive number of seconds, not '${value}'`);
+  }
   return Number(value);
 }
 

@@ -6,11 +6,11 @@
  */
 import type { AuditResult, Finding, Severity } from '../audit/types.js';
 import { escapeMarkdown } from '../report/escape.js';
-import type { InlineComment } from './inline-comments.js';
+import { INLINE_MARKER, type InlineComment } from './inline-comments.js';
 import type { DiffLines } from './patch.js';
 import { toRepoPath } from './paths.js';
 
-export const INLINE_MARKER = '<!-- stereogate-inline -->';
+export { INLINE_MARKER };
 
 const RANK: Record<Severity, number> = { error: 0, warning: 1, note: 2 };
 const LABEL: Record<Severity, string> = { error: '❌ error', warning: '⚠️ warning', note: 'ℹ️ note' };
@@ -33,7 +33,7 @@ interface Located {
 export function planInlineComments(
   result: AuditResult,
   diffs: ReadonlyMap<string, DiffLines>,
-  options: { registryDir: string; max: number; caution: string },
+  options: { registryDir: string; max: number; checklistUrl?: string | null },
 ): InlinePlan {
   const located: Located[] = [];
   let outsideDiff = 0;
@@ -69,26 +69,49 @@ export function planInlineComments(
   const comments = kept.map((group) => ({
     path: group[0]!.path,
     line: group[0]!.line,
-    body: commentBody(group, options.caution),
+    body: commentBody(group, options.checklistUrl ?? null),
   }));
   return { comments, outsideDiff, overLimit };
 }
 
-function commentBody(group: Located[], caution: string): string {
-  const record = group[0]!.recordId;
-  const lines = group.map(
-    ({ finding }) =>
-      `**${LABEL[finding.severity]}** \`${finding.check}\`` +
-      (finding.field === null ? '' : ` on ${escapeMarkdown(finding.field)}`) +
-      `: ${escapeMarkdown(finding.message)}`,
+/** GitHub refuses comment bodies over 65,536 characters; an inline comment stays far below. */
+export const INLINE_MAX_CHARS = 16_000;
+/** One finding's message in an inline comment; the checklist holds it whole. */
+export const INLINE_MESSAGE_MAX_CHARS = 3_000;
+
+/**
+ * The short caution every inline comment carries, on one line; the checklist comment carries the full one. All four
+ * points of the full caution, briefly: computed, the responsible chemist confirms, not analytical evidence, SOPs.
+ */
+export function shortCaution(checklistUrl: string | null): string {
+  const where = checklistUrl === null ? 'the checklist comment' : `the [checklist comment](${checklistUrl})`;
+  return (
+    '<sub>Computed from the drawn structure: the responsible chemist confirms; no substitute for analytical ' +
+    `evidence; local SOPs decide. Full caution in ${where}.</sub>`
   );
+}
+
+function commentBody(group: Located[], checklistUrl: string | null): string {
+  const record = group[0]!.recordId;
   const head = record === null ? '**stereogate**' : `**stereogate** · record ${escapeMarkdown(record)}`;
-  return [
-    head,
-    '',
-    ...lines.map((l) => `- ${l}`),
-    '',
-    `<sub>${escapeMarkdown(caution)}</sub>`,
-    INLINE_MARKER,
-  ].join('\n');
+  const tail = ['', shortCaution(checklistUrl), INLINE_MARKER].join('\n');
+  let body = `${head}\n`;
+  for (const [index, { finding }] of group.entries()) {
+    const text =
+      finding.message.length > INLINE_MESSAGE_MAX_CHARS
+        ? `${finding.message.slice(0, INLINE_MESSAGE_MAX_CHARS)}… (cut; whole in the checklist)`
+        : finding.message;
+    const line =
+      `\n- **${LABEL[finding.severity]}** \`${finding.check}\`` +
+      (finding.field === null ? '' : ` on ${escapeMarkdown(finding.field)}`) +
+      `: ${escapeMarkdown(text)}`;
+    const rest = group.length - index;
+    const more = `\n- … ${rest} more finding(s) on this line: see the checklist.`;
+    if (body.length + line.length + more.length + tail.length > INLINE_MAX_CHARS) {
+      body += more;
+      break;
+    }
+    body += line;
+  }
+  return `${body}\n${tail}`;
 }

@@ -5,6 +5,10 @@
  * on a secondary rate limit the answer is 403 or 429; wait `Retry-After` seconds when that header is present; when
  * `x-ratelimit-remaining` is 0 wait until `x-ratelimit-reset` (epoch seconds); otherwise wait at least a minute.
  * 5xx answers are transient server trouble and are retried with a growing back-off (common practice, no source).
+ *
+ * A request that is not idempotent (creating a comment) is never sent again after an answer that leaves open
+ * whether it was carried out: a timeout, a reset connection or a 5xx. The caller looks first (src/github/
+ * checklist-comment.ts, inline-comments.ts). A rate-limit refusal is safe to repeat: GitHub did not act on it.
  */
 
 export interface RetryPolicy {
@@ -35,26 +39,38 @@ export function isRateLimit(answer: AnswerSeen): boolean {
 }
 
 /**
+ * How long a rate-limited answer asks to wait, in milliseconds (Retry-After, else the primary limit's reset, else
+ * GitHub's "at least a minute"); null when the answer is not a rate limit.
+ */
+export function rateLimitWaitMs(answer: AnswerSeen, nowMs: number = Date.now()): number | null {
+  if (!isRateLimit(answer)) return null;
+  return retryAfterMs(answer, nowMs) ?? resetWaitMs(answer, nowMs) ?? 60_000;
+}
+
+/**
  * Milliseconds to wait before the next attempt, or null when the answer must not be retried (success, a client
  * error, attempts used up, or a wait longer than the policy allows). `attempt` is the 1-based attempt just made.
- * `answer` null means the request failed without an answer (network error).
+ * `answer` null means the request failed without an answer (network error or timeout). With `idempotent` false,
+ * only a rate-limit refusal is retried.
  */
 export function retryDelayMs(
   answer: AnswerSeen | null,
   attempt: number,
   policy: RetryPolicy = DEFAULT_RETRY_POLICY,
   nowMs: number = Date.now(),
+  idempotent = true,
 ): number | null {
   if (attempt >= policy.maxTries) return null;
   let delay: number;
   if (answer === null || answer.status >= 500) {
+    if (!idempotent) return null;
     delay = policy.baseDelayMs * 2 ** (attempt - 1);
     const after = answer === null ? null : retryAfterMs(answer, nowMs);
     if (after !== null) delay = after;
-  } else if (isRateLimit(answer)) {
-    delay = retryAfterMs(answer, nowMs) ?? resetWaitMs(answer, nowMs) ?? 60_000;
   } else {
-    return null;
+    const wait = rateLimitWaitMs(answer, nowMs);
+    if (wait === null) return null;
+    delay = wait;
   }
   return delay <= policy.maxDelayMs ? delay : null;
 }

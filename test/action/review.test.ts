@@ -30,6 +30,7 @@ function settings(over: Partial<ActionSettings> = {}): ActionSettings {
     sarifFile: join(workspace, 'out', 'stereogate.sarif'),
     reportFile: join(workspace, 'out', 'report.md'),
     apiUrl: API,
+    api: { timeoutMs: 5000, tries: 3, maxWaitMs: 90_000 },
     runUrl: 'https://github.test/larkspur/registry/actions/runs/1',
     repository: { owner: 'larkspur', repo: 'registry' },
     eventName: 'pull_request',
@@ -72,14 +73,28 @@ describe('review', () => {
           b.body.includes('<!-- stereogate-checklist -->') && b.body.includes('max 60000'),
       )
       .reply(201, { id: 5, html_url: 'https://github.test/c/5' })
+      .get(`${repo}/issues/7/comments`)
+      .query(true)
+      .reply(200, [
+        {
+          id: 5,
+          body: '<!-- stereogate-checklist -->\n2 records, 1 errors (max 60000, details https://github.test/larkspur/registry/actions/runs/1)',
+          html_url: 'https://github.test/c/5',
+          user: { login: 'github-actions[bot]', type: 'Bot' },
+        },
+      ])
       .get(`${repo}/pulls/7/comments`)
       .query(true)
       .reply(200, [])
       .post(
         `${repo}/pulls/7/comments`,
-        (b: { path: string; line: number }) => b.path === 'compounds/LX-00001.yaml' && b.line === 6,
+        (b: { path: string; line: number; body: string }) =>
+          b.path === 'compounds/LX-00001.yaml' && b.line === 6 && b.body.includes('https://github.test/c/5'),
       )
-      .reply(201, { id: 6 });
+      .reply(201, { id: 6 })
+      .get(`${repo}/pulls/7/comments`)
+      .query(true)
+      .reply(200, []);
     const engine = fakeEngine(audit);
     const runner = recordingRunner();
     const { client } = testClient();
@@ -104,10 +119,12 @@ describe('review', () => {
       ['error', 6],
       ['warning', 40],
     ]);
-    expect(runner.summaries).toHaveLength(1);
-    expect(runner.summaries[0]).toContain('Checklist comment created');
-    expect(runner.summaries[0]).toContain('1 inline comment\\(s\\) posted');
-    expect(runner.summaries[0]).toContain('1 finding\\(s\\) on lines outside the diff');
+    // The checklist is in the summary before anything is posted; what posting did is added after.
+    expect(runner.summaries).toHaveLength(2);
+    expect(runner.summaries[0]).toContain('<!-- stereogate-checklist -->');
+    expect(runner.summaries[1]).toContain('Checklist comment created');
+    expect(runner.summaries[1]).toContain('1 inline comment\\(s\\) posted');
+    expect(runner.summaries[1]).toContain('1 finding\\(s\\) on lines outside the diff');
     expect(runner.warnings).toEqual([]);
   });
 
@@ -131,7 +148,7 @@ describe('review', () => {
     );
     expect(outcome.failure).toBeNull();
     expect(runner.warnings.join('\n')).toMatch(/read-only token/);
-    expect(runner.summaries[0]).toMatch(/read\\-only token/);
+    expect(runner.summaries.join('')).toMatch(/read\\-only token/);
     expect(existsSync(sarifFile)).toBe(true);
     expect(runner.annotations).toHaveLength(2);
   });
@@ -156,7 +173,7 @@ describe('review', () => {
     expect(runner.warnings.join('\n')).toMatch(/Could not post the checklist comment .*HTTP 503/);
     expect(existsSync(sarifFile)).toBe(true);
     expect(runner.annotations).toHaveLength(2);
-    expect(runner.summaries).toHaveLength(1);
+    expect(runner.summaries).toHaveLength(2);
     expect(outcome.failure).not.toBeNull();
   });
 
@@ -173,7 +190,7 @@ describe('review', () => {
     const outcome = await review(settings(), engine, testClient().client, runner);
     expect(engine.calls[0]!.paths).toEqual([]);
     expect(outcome.failure).toBeNull();
-    expect(runner.summaries[0]).toMatch(/no earlier checklist comment\\: none posted/);
+    expect(runner.summaries.join('')).toMatch(/no earlier checklist comment\\: none posted/);
   });
 
   it('posts nothing and asks no API outside a pull request', async () => {
@@ -186,7 +203,7 @@ describe('review', () => {
       runner,
     );
     expect(engine.calls[0]!.paths).toBeUndefined();
-    expect(runner.summaries[0]).toMatch(/Not a pull request/);
+    expect(runner.summaries.join('')).toMatch(/Not a pull request/);
     expect(runner.outputs['sarif-file']).toBe('');
   });
 });

@@ -30,7 +30,13 @@ describe('upsertChecklistComment', () => {
       .reply(200, { id: 501, html_url: 'https://github.test/c/501' });
     const { client } = testClient();
     const done = await upsertChecklistComment(client, pr, body);
-    expect(done).toEqual({ action: 'updated', id: 501, url: 'https://github.test/c/501' });
+    expect(done).toEqual({
+      action: 'updated',
+      id: 501,
+      url: 'https://github.test/c/501',
+      removed: 0,
+      creates: 0,
+    });
   });
 
   it('creates the comment when none carries the marker', async () => {
@@ -39,7 +45,19 @@ describe('upsertChecklistComment', () => {
       .query(true)
       .reply(200, [{ id: 1, body: 'hello', user: { type: 'User' } }])
       .post(comments, { body })
-      .reply(201, { id: 9, html_url: 'https://github.test/c/9' });
+      .reply(201, { id: 9, html_url: 'https://github.test/c/9' })
+      // listed again after creating (an overlapping run may have made one too)
+      .get(comments)
+      .query(true)
+      .reply(200, [
+        { id: 1, body: 'hello', user: { type: 'User' } },
+        {
+          id: 9,
+          body,
+          html_url: 'https://github.test/c/9',
+          user: { login: 'github-actions[bot]', type: 'Bot' },
+        },
+      ]);
     const { client } = testClient();
     expect((await upsertChecklistComment(client, pr, body)).action).toBe('created');
   });
@@ -60,6 +78,8 @@ describe('upsertChecklistComment', () => {
       action: 'none',
       id: null,
       url: null,
+      removed: 0,
+      creates: 0,
     });
   });
 

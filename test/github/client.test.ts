@@ -69,6 +69,29 @@ describe('client', () => {
     expect(waits).toEqual([]);
   });
 
+  // Issue 10: a POST is never re-sent blindly; after a 5xx the caller looks first (it may have been created).
+  it('does not repeat a POST after a 502, and says the outcome is unknown', async () => {
+    nock(API).post('/c').reply(502, 'Bad Gateway');
+    const { client, waits } = testClient();
+    const error = (await client.request('POST', '/c', {}).catch((e: unknown) => e)) as GitHubApiError;
+    expect(error.kind).toBe('server');
+    expect(error.maybeDone).toBe(true);
+    expect(waits).toEqual([]);
+  });
+
+  it('tells a long rate limit from a refusal and keeps the token out of the error', async () => {
+    nock(API)
+      .post('/c')
+      .reply(403, { message: 'secondary rate limit for Bearer t0ken' }, { 'retry-after': '3600' });
+    const { client, waits } = testClient();
+    const error = (await client.request('POST', '/c', {}).catch((e: unknown) => e)) as GitHubApiError;
+    expect(error.kind).toBe('rate-limit');
+    expect(error.retryAfterMs).toBe(3_600_000);
+    expect(error.message).toMatch(/rate limit \(not a permission problem\); GitHub asks to wait 3600 s/);
+    expect(error.message + error.body).not.toContain('t0ken');
+    expect(waits).toEqual([]);
+  });
+
   it('never sends the token to another origin (a Link header pointing elsewhere)', async () => {
     nock(API)
       .get('/items')

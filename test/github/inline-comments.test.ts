@@ -1,14 +1,16 @@
 import nock from 'nock';
 import { describe, expect, it } from 'vitest';
-import { postInlineComments } from '../../src/github/inline-comments.js';
+import { INLINE_MARKER, postInlineComments } from '../../src/github/inline-comments.js';
 import { API, pr, testClient, useNock } from './support/nock.js';
 
 useNock();
 
 const path = '/repos/larkspur/registry/pulls/7/comments';
-const a = { path: 'compounds/LX-00001.yaml', line: 6, body: 'form is wrong' };
-const b = { path: 'compounds/LX-00002.yaml', line: 40, body: 'ratio is wrong' };
-const c = { path: 'compounds/LX-00003.yaml', line: 5, body: 'descriptors are wrong' };
+const M = INLINE_MARKER;
+const a = { path: 'compounds/LX-00001.yaml', line: 6, body: `form is wrong\n${M}` };
+const b = { path: 'compounds/LX-00002.yaml', line: 40, body: `ratio is wrong\n${M}` };
+const c = { path: 'compounds/LX-00003.yaml', line: 5, body: `descriptors are wrong\n${M}` };
+const bot = { login: 'github-actions[bot]', type: 'Bot' };
 
 describe('postInlineComments', () => {
   it('posts on the right side of the head commit; a 422 (line outside the diff) is kept, the rest still posted', async () => {
@@ -21,7 +23,13 @@ describe('postInlineComments', () => {
       .post(path, (req: { path: string }) => req.path === b.path)
       .reply(422, { message: 'Validation Failed', errors: [{ message: 'line must be part of the diff' }] })
       .post(path, (req: { path: string }) => req.path === c.path)
-      .reply(201, { id: 3 });
+      .reply(201, { id: 3 })
+      .get(path)
+      .query(true)
+      .reply(200, [
+        { id: 1, ...a, user: bot },
+        { id: 3, ...c, user: bot },
+      ]);
     const { client } = testClient();
     const done = await postInlineComments(client, pr, [a, b, c]);
     expect(done.posted).toEqual([a, c]);
@@ -34,11 +42,14 @@ describe('postInlineComments', () => {
       .get(path)
       .query(true)
       .reply(200, [
-        { path: a.path, line: 6, body: a.body },
-        { path: b.path, line: null, original_line: 40, body: b.body }, // outdated: no longer on a line
+        { id: 1, path: a.path, line: 6, body: a.body, user: bot },
+        { id: 2, path: b.path, line: null, original_line: 40, body: b.body, user: bot }, // outdated: no longer on a line
       ])
       .post(path, (req: { path: string }) => req.path === b.path)
-      .reply(201, { id: 2 });
+      .reply(201, { id: 3 })
+      .get(path)
+      .query(true)
+      .reply(200, []);
     const { client } = testClient();
     const done = await postInlineComments(client, pr, [a, b]);
     expect(done.alreadyThere).toEqual([a]);

@@ -9,7 +9,7 @@ const diffs = new Map([
     parsePatch('@@ -5,3 +5,3 @@\n stereo:\n-  form: achiral\n+  form: racemate\n   ee: 0'),
   ],
 ]);
-const options = { registryDir: 'registry', max: 10, caution: 'Computed result.' };
+const options = { registryDir: 'registry', max: 10, checklistUrl: 'https://github.test/c/5' };
 
 describe('planInlineComments', () => {
   it('comments only on lines shown in the diff, on the repository path', () => {
@@ -21,7 +21,10 @@ describe('planInlineComments', () => {
     expect(plan.comments.map((c) => [c.path, c.line])).toEqual([['registry/compounds/LX-00001.yaml', 6]]);
     expect(plan.outsideDiff).toBe(2); // line 30 and the untouched record; the line-less note is not counted
     expect(plan.comments[0]!.body).toContain(INLINE_MARKER);
-    expect(plan.comments[0]!.body).toContain('Computed result');
+    // One short caution line pointing to the checklist, not the whole caution (issue 15).
+    const body = plan.comments[0]!.body;
+    expect(body.split('\n').filter((l) => /responsible chemist/.test(l))).toHaveLength(1);
+    expect(body).toContain('Full caution in the [checklist comment](https://github.test/c/5)');
   });
 
   it('does not comment on waived findings', () => {
@@ -43,7 +46,7 @@ describe('planInlineComments', () => {
         finding('error', 3),
       ]),
     ]);
-    const plan = planInlineComments(audit, many, { registryDir: '', max: 2, caution: 'c' });
+    const plan = planInlineComments(audit, many, { registryDir: '', max: 2 });
     expect(plan.comments.map((c) => c.line)).toEqual([1, 3]);
     expect(plan.overLimit).toBe(1);
     const first = plan.comments[0]!.body;
