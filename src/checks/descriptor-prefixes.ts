@@ -1,6 +1,6 @@
 /**
  * The prefix part of descriptors-match-structure: rac / RS,SR / (±) need a racemate; rel / * describe relative
- * configuration; (+)/(−) need an optically active form; meso needs a meso form (IUPAC 2013, P-93.1.3).
+ * configuration; (+)/(−) and D-/L- need an optically active form; meso needs a meso form (IUPAC 2013, P-93.1.3).
  */
 import type { ParsedDescriptors } from '../chem/descriptors.js';
 import type { StructureFacts } from '../chem/facts.js';
@@ -26,6 +26,9 @@ export const prefixMessages = {
     '{field} gives the sign of rotation ({sign}), but the form is {form}, which is optically inactive (a racemate ' +
     'rotates not at all because its enantiomers cancel; an achiral or meso compound has no optical activity). Use ' +
     '(±) for a racemate, or drop the sign, or correct the form.',
+  'fischer-prefix-with-form':
+    '{field} names one enantiomer ({fischer}-, Fischer–Rosanoff), but the form is {form}. {why} Write DL- or ' +
+    '(±)- for a racemate, drop {fischer}- for an achiral compound, or correct the form.',
   'meso-prefix-with-chiral-form':
     '{field} calls the compound meso, but the form is {form}. A meso compound is achiral and has no enantiomer. ' +
     'Correct the name or the form.',
@@ -90,6 +93,16 @@ export function prefixFindings(
       ['racemate', 'meso', 'achiral'].includes(form)
     ) {
       add('optical-sign-with-inactive-form', field, { sign: p.rotationSign === '+' ? '(+)' : '(−)', text });
+    }
+    if ((p.fischer === 'D' || p.fischer === 'L') && ['racemate', 'meso', 'achiral'].includes(form)) {
+      add('fischer-prefix-with-form', field, {
+        fischer: p.fischer,
+        text,
+        why:
+          form === 'racemate'
+            ? 'A racemate holds both enantiomers, D and L, in equal amounts.'
+            : 'An achiral or meso compound has no enantiomer to call D or L.',
+      });
     }
     if (p.words.includes('meso') && ['single-enantiomer', 'enantioenriched', 'racemate'].includes(form)) {
       add('meso-prefix-with-chiral-form', field, { text });

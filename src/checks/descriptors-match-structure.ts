@@ -80,8 +80,11 @@ function compareOne(
   };
   for (const p of parsed.problemDetails)
     add('descriptor-unreadable', { problem: p.message, offset: p.offset });
-  for (const r of parsed.remarks) add('descriptor-remark', { remark: r }, 'note');
-  if (parsed.fischer && parsed.items.length === 0)
+  // Style remarks are worth a note on stereo.descriptors (written for the registry, in IUPAC style); on a name
+  // they only say how the name was read, which goes with the evidence.
+  if (field === 'name') evidence.push(...parsed.remarks.map((r) => `name: ${r}`));
+  else for (const r of parsed.remarks) add('descriptor-remark', { remark: r }, 'note');
+  if ((parsed.fischer === 'D' || parsed.fischer === 'L') && parsed.items.length === 0)
     add('fischer-not-compared', { fischer: parsed.fischer }, 'note');
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
   const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
@@ -243,7 +246,7 @@ function run(ctx: CheckContext): CheckOutcome {
       const name = record.name ?? '';
       const front = name
         .slice(0, name.length - decl.name.rest.length)
-        .replace(/[-\s\u2010-\u2013\u2212]+$/, '');
+        .replace(/[-\s\u2010-\u2014\u2212\uFE63\uFF0D\u02D7]+$/, '');
       note(front, compareOne('name', front, decl.name, f, out, form, evidence, nitrogenNote));
     }
   } else if (decl.name) {
@@ -257,7 +260,7 @@ function run(ctx: CheckContext): CheckOutcome {
         }),
       );
     }
-    if (decl.name.fischer && !decl.field) {
+    if ((decl.name.fischer === 'D' || decl.name.fischer === 'L') && !decl.field) {
       out.push(
         finding('fischer-not-compared', 'name', { field: 'name', fischer: decl.name.fischer }, 'note'),
       );

@@ -36,7 +36,7 @@ function statedDescriptors(ctx: CheckContext): string {
     const name = record?.name ?? '';
     const front = name
       .slice(0, name.length - decl.name.rest.length)
-      .replace(/[-\s\u2010-\u2013\u2212]+$/, '');
+      .replace(/[-\s\u2010-\u2014\u2212\uFE63\uFF0D\u02D7]+$/, '');
     return ` and drop ${front} from the name`;
   }
   return '';

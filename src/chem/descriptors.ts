@@ -51,18 +51,32 @@ export interface ParsedDescriptors {
 }
 
 const WORDS = ['meso', 'cis', 'trans', 'erythro', 'threo', 'endo', 'exo', 'syn', 'anti'];
-const HYPHENS = '-\u2010\u2011\u2012\u2013\u2212';
+/**
+ * Characters read as a minus sign in (−) and as a hyphen after a prefix: the hyphen-minus and the dashes and
+ * minus look-alikes that word processors and fonts put in names (U+2010–2013 hyphens and dashes, U+2014 em dash,
+ * U+2212 minus, U+FE63 small hyphen-minus, U+FF0D fullwidth hyphen-minus, U+02D7 modifier letter minus).
+ */
+const MINUS_LIKE = '-\u2010\u2011\u2012\u2013\u2014\u2212\uFE63\uFF0D\u02D7';
+const HYPHENS = MINUS_LIKE;
+/** The plus sign and its fullwidth form U+FF0B. */
+const PLUS_LIKE = '+\uFF0B';
 const SIGNS: Record<string, RotationSign> = {
   '+': '+',
   '-': '-',
-  '\u2212': '-',
-  '\u2013': '-',
   '±': '±',
   '+/-': '±',
-  '+/\u2212': '±',
-  '+/\u2013': '±',
   '+-': '±',
 };
+/** The sign group as written ('(−)', '(＋)', '(+/–)') with every look-alike folded to + and -. */
+function foldSigns(text: string): string {
+  let out = '';
+  for (const ch of text) out += MINUS_LIKE.includes(ch) ? '-' : PLUS_LIKE.includes(ch) ? '+' : ch;
+  return out;
+}
+/** A separator after a prefix word: a hyphen or dash of any kind, a space, a parenthesis, or the end. */
+const WORD_PREFIX = new RegExp(
+  `^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\\s(${MINUS_LIKE.replace('-', '\\-')}]|$)`,
+);
 const ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
 
 /**
@@ -108,6 +122,12 @@ export function parseDescriptors(
           if (g.sign) signs.push({ sign: g.sign, offset: i });
           out.items.push(...g.items);
           for (const w of g.words) addWord(out, w);
+          if (g.legacyPair) {
+            out.remarks.push(
+              `${g.legacyPair} without locants is the legacy way of naming a racemate and is read as ` +
+                `(${g.items[0]!.pair}); IUPAC 2013 (P-93.1.3) writes (RS) or rac-`,
+            );
+          }
           i = end + 1;
         }
       } else if (end < 0 && context === 'descriptor') {
@@ -116,10 +136,7 @@ export function parseDescriptors(
         break;
       }
     } else {
-      const m =
-        /^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\s\-\u2010\u2011\u2012\u2013\u2212(]|$)/.exec(
-          input.slice(i),
-        );
+      const m = WORD_PREFIX.exec(input.slice(i));
       const word = m?.[1];
       const next = m ? input[i + m[0].length] : undefined;
       // A lone word must be followed by a hyphen in a name ('cis-', 'L-'), so 'd' in 'd-glucose' counts but not
@@ -172,6 +189,8 @@ interface Group {
   sign?: RotationSign;
   items: DescriptorItem[];
   words: string[];
+  /** '(R,S)' as written, when a legacy racemate group was read as (RS). */
+  legacyPair?: string;
 }
 
 function parseGroup(
@@ -181,8 +200,19 @@ function parseGroup(
   problem: (offset: number, message: string) => void,
 ): Group {
   const compact = inner.replace(/\s+/g, '');
-  const sign = SIGNS[compact];
+  const sign = SIGNS[foldSigns(compact)];
   if (sign) return { kind: 'sign', sign, items: [], words: [] };
+  // '(R,S)', '(S,R)', '(R/S)' without locants: the legacy way of naming a racemate, read as (RS) / (SR).
+  const legacy = /^([RS])[,/]([RS])$/.exec(compact);
+  if (legacy && legacy[1] !== legacy[2]) {
+    const pair = legacy[1] === 'R' ? 'RS' : 'SR';
+    return {
+      kind: 'items',
+      items: [{ locant: null, label: pair[0] as CipLabel, pair, offset: base + inner.indexOf(legacy[1]) }],
+      words: [],
+      legacyPair: `(${legacy[1]}${compact[1]}${legacy[2]})`,
+    };
+  }
   const parts: { text: string; offset: number }[] = [];
   let start = 0;
   for (let k = 0; k <= inner.length; k++) {
@@ -267,23 +297,28 @@ function finish(
     out.prefixes.includes('rac') || pairs > 0 || out.rotationSign === '±' || out.fischer === 'DL';
   const relative = out.prefixes.includes('rel') || stars > 0;
   if (racemic && relative) {
-    problem(0, 'racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed; P-93.1.3 uses one of them');
+    // rac-(1R*,2S*), (±)-rel-(…): both say "relative configuration known"; the racemic part says more.
+    out.remarks.push(
+      'racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed, read as racemic; IUPAC 2013 ' +
+        '(P-93.1.3) uses one of them',
+    );
   }
   if (out.prefixes.includes('rel') && pairs > 0)
     problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
-  if (out.prefixes.length > 0 && out.items.length === 0) {
-    problem(0, `'${out.prefixes[0]}-' must be followed by descriptors such as (1R,2S)`);
+  if (out.prefixes.includes('rel') && out.items.length === 0) {
+    out.remarks.push("'rel-' without descriptors states no configuration");
   }
   if (out.rotationSign === '±' && chiralItems.length > 0 && !out.prefixes.includes('rac') && pairs === 0) {
-    const it = chiralItems[0];
-    problem(it.offset, '(±) marks a racemate but the descriptors are absolute; write (…RS,…SR) or rac-(…)');
+    out.remarks.push(
+      '(±) with descriptors of one enantiomer is read as rac-(…); IUPAC 2013 (P-93.1.3) writes rac-(…) or (…RS,…SR)',
+    );
   }
   if (racemic) out.mode = 'racemic';
   else if (relative) out.mode = 'relative';
   else if (out.items.length > 0) out.mode = 'absolute';
   else out.mode = 'none';
 
-  if ((racemic || relative) && chiralItems.length > 0) {
+  if ((racemic || relative) && chiralItems.some((it) => it.locant !== null)) {
     const first = [...chiralItems].sort((a, b) => locantOrder(a.locant) - locantOrder(b.locant))[0];
     if (first.label === 'S' || first.label === 'P') {
       out.remarks.push(

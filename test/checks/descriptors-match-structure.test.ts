@@ -112,7 +112,7 @@ describe('descriptors-match-structure: labels', () => {
     expect(o.findings).toEqual([]);
     expect(o.passed).toMatch(/component 1 \(1R,2S\) agrees with computed C2 \(atom 4\) S, C1 \(atom 10\) R,/);
   });
-  it('notes Fischer D/L as not comparable', () => {
+  it('notes Fischer D/L as not comparable (DL- names a racemate: nothing left to compare)', () => {
     const o = run(chiralFacts([centre(2, 'S')]), { form: 'single-enantiomer' }, 'L-alanine');
     expect(o.findings).toMatchObject([{ messageId: 'fischer-not-compared', severity: 'note' }]);
   });
@@ -154,6 +154,71 @@ describe('descriptors-match-structure: prefixes against the form', () => {
   });
   it('does not apply when nothing is declared', () => {
     expect(run(one, { form: 'single-enantiomer' }).notApplicable).toBe(true);
+  });
+});
+
+// Names as chemists write them (issue 12): the stereo prefix is read and compared with the declared form; the
+// rest is the name. IUPAC 2013 P-93.1.3 (rac-, RS/SR, (±), rel-, *); D-/L- Fischer–Rosanoff (P-102/P-103, from
+// memory). Failing and passing cases side by side.
+describe('descriptors-match-structure: stereo prefixes in names', () => {
+  const flat = facts({
+    units: [unit({ atoms: [11], defined: false })],
+    chiral: true,
+    stereoisomers: { total: 2, chiral: 2, achiral: 0, pairs: 1, meso: 0, units: 1 },
+  });
+  const and = chiralFacts([centre(11, 'S')], {
+    enhanced: { groups: [{ type: 'and', id: 1, atoms: [11] }], meaning: 'racemic' },
+  });
+  it('rac-ibuprofen names a racemate (before: an error); with a single-enantiomer form it contradicts it', () => {
+    for (const f of [flat, and]) {
+      expect(run(f, { form: 'racemate' }, 'rac-ibuprofen').findings).toEqual([]);
+      expect(ids(run(f, { form: 'single-enantiomer' }, 'rac-ibuprofen'))).toEqual([
+        'racemic-notation-needs-racemate',
+      ]);
+    }
+  });
+  it('(R,S)-ibuprofen is read as (RS) (before: two errors); (±)- and (RS)- too', () => {
+    for (const n of ['(R,S)-ibuprofen', '(RS)-ibuprofen', '(±)-ibuprofen', '(S,R)-ibuprofen']) {
+      for (const f of [flat, and]) {
+        expect([n, run(f, { form: 'racemate' }, n).findings]).toEqual([n, []]);
+      }
+      expect([n, ids(run(and, { form: 'single-enantiomer' }, n))]).toEqual([
+        n,
+        ['racemic-notation-needs-racemate'],
+      ]);
+    }
+    expect(run(and, { form: 'racemate' }, '(R,S)-ibuprofen').passed).toMatch(/legacy way of naming a racemate/);
+  });
+  it('D-/L- name one enantiomer: fine for a single enantiomer, an error with a racemate or an achiral form', () => {
+    const one = chiralFacts([centre(2, 'S')]);
+    expect(ids(run(one, { form: 'single-enantiomer' }, 'L-alanine'))).toEqual(['fischer-not-compared']);
+    expect(ids(run(one, { form: 'racemate' }, 'L-alanine'))).toEqual([
+      'fischer-not-compared',
+      'fischer-prefix-with-form',
+    ]);
+    expect(run(flat, { form: 'racemate' }, 'DL-alanine').findings).toEqual([]);
+    expect(ids(run(one, { form: 'single-enantiomer' }, 'DL-alanine'))).toEqual([
+      'racemic-notation-needs-racemate',
+    ]);
+  });
+  it('(−) written with a look-alike dash is a sign (issue 10): fails a racemate, passes a single enantiomer', () => {
+    const one = chiralFacts([centre(2, 'R', 2)]);
+    for (const minus of ['\u2012', '\u2014', '\uFE63', '\uFF0D', '\u02D7']) {
+      expect(ids(run(one, { form: 'racemate' }, `(${minus})-butan-2-ol`))).toEqual([
+        'optical-sign-with-inactive-form',
+      ]);
+      expect(run(one, { form: 'single-enantiomer' }, `(R)-(${minus})-butan-2-ol`).findings).toEqual([]);
+    }
+  });
+  it('erythro/threo and cis/trans on a ring are read, not errors', () => {
+    const two = chiralFacts([centre(2, 'R'), centre(3, 'R')]);
+    expect(run(two, { form: 'racemate' }, '(±)-threo-methylphenidate').findings).toEqual([]);
+    expect(run(two, { form: 'racemate' }, 'erythro-x').findings).toEqual([]);
+  });
+  it('a name that says nothing stereo says nothing', () => {
+    for (const n of ['ibuprofen', 'S-methyl ethanethioate', '(2-chloroethyl)amine']) {
+      expect([n, run(and, { form: 'racemate' }, n).notApplicable]).toEqual([n, true]);
+    }
   });
 });
 

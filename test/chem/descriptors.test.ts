@@ -91,8 +91,10 @@ describe('parseDescriptors: IUPAC 2013 P-93 notation', () => {
     expect(parseDescriptors('(2R,2S)').problemDetails[0].message).toMatch(/twice/);
     expect(parseDescriptors('(2R,3S)-(+)-(-)').problemDetails[0].message).toMatch(/conflicting signs/);
     expect(parseDescriptors('(1R*,2S)').problemDetails[0].message).toMatch(/\*/);
-    expect(parseDescriptors('rel-').problemDetails.length).toBeGreaterThan(0);
-    expect(parseDescriptors('(±)-(R)').problemDetails[0].message).toMatch(/racemate/);
+    // 'rel-' alone and '(±)' before absolute descriptors are read (with a remark), not rejected: see below
+    expect(parseDescriptors('rel-').problemDetails).toEqual([]);
+    expect(parseDescriptors('rel-').remarks[0]).toMatch(/states no configuration/);
+    expect(parseDescriptors('(±)-(R)')).toMatchObject({ mode: 'racemic', problemDetails: [] });
     expect(parseDescriptors('(2R,3S) extra').problemDetails[0]).toEqual({
       offset: 8,
       message: expect.any(String),
@@ -188,5 +190,68 @@ describe('compareDescriptors', () => {
   });
   it('has nothing to compare for a descriptor without configurations', () => {
     expect(compareDescriptors(parseDescriptors('(+)'), tartaric).method).toBe('none');
+  });
+});
+
+describe('stereo prefixes in names, read as chemists write them (issue 12)', () => {
+  const name = (n: string) => parseDescriptors(n, { context: 'name' });
+  // IUPAC 2013 P-93.1.3: a racemate is named with the prefix rac- or the descriptors RS/SR; (±) is also used.
+  it('rac- with no descriptors names a racemate (P-93.1.3); before: an error "must be followed by descriptors"', () => {
+    expect(name('rac-ibuprofen')).toMatchObject({ mode: 'racemic', problems: [], rest: 'ibuprofen' });
+    expect(name('rac-(2R)-2-phenylpropanoic acid')).toMatchObject({ mode: 'racemic', problems: [] });
+  });
+  it('(RS) and legacy (R,S) / (S,R) / (R/S) without locants read as RS (P-93.1.3 writes RS); before: two items R and S', () => {
+    expect(items('(RS)-ibuprofen', 'name')).toEqual(['RS']);
+    expect(items('(R,S)-ibuprofen', 'name')).toEqual(['RS']);
+    expect(items('(S,R)-ibuprofen', 'name')).toEqual(['SR']);
+    expect(items('(R/S)-ibuprofen', 'name')).toEqual(['RS']);
+    expect(name('(R,S)-ibuprofen')).toMatchObject({ mode: 'racemic', problems: [], rest: 'ibuprofen' });
+    expect(name('(R,S)-ibuprofen').remarks[0]).toMatch(/legacy way of naming a racemate/);
+    // with locants these are two centres, not a racemate
+    expect(items('(1R,2S)-ephedrine', 'name')).toEqual(['1R', '2S']);
+    expect(name('(1R,2S)-ephedrine').mode).toBe('absolute');
+    // same letter twice is no racemate
+    expect(items('(R,R)-x', 'name')).toEqual(['R', 'R']);
+  });
+  it('(±) names a racemate; with descriptors of one enantiomer it is read as rac- (P-93.1.3)', () => {
+    expect(name('(±)-ibuprofen')).toMatchObject({ mode: 'racemic', rotationSign: '±', problems: [] });
+    expect(name('(±)-(1R,2S)-ephedrine')).toMatchObject({ mode: 'racemic', problems: [] });
+    expect(name('(+/-)-ibuprofen').rotationSign).toBe('±');
+  });
+  it('rel- and * give relative configuration (P-93.1.3)', () => {
+    expect(name('rel-(1R,2S)-2-methylcyclohexan-1-ol').mode).toBe('relative');
+    expect(name('(1R*,2S*)-2-methylcyclohexan-1-ol').mode).toBe('relative');
+    // rac with starred descriptors: read as racemic, with a remark (P-93.1.3 uses one notation)
+    expect(name('rac-(1R*,2S*)-x')).toMatchObject({ mode: 'racemic', problems: [] });
+  });
+  it('(+)/(−) give the sign of rotation, whatever dash stands for the minus (issue 10)', () => {
+    expect(name('(+)-carvone').rotationSign).toBe('+');
+    expect(name('(\uFF0B)-carvone').rotationSign).toBe('+'); // fullwidth plus
+    for (const minus of ['-', '\u2010', '\u2011', '\u2012', '\u2013', '\u2014', '\u2212', '\uFE63', '\uFF0D', '\u02D7']) {
+      const p = name(`(${minus})-menthol`);
+      expect([minus.codePointAt(0)!.toString(16), p.rotationSign, p.rest]).toEqual([
+        minus.codePointAt(0)!.toString(16),
+        '-',
+        'menthol',
+      ]);
+      // and as the hyphen after a prefix
+      expect(name(`(S)${minus}carvone`).rest).toBe('carvone');
+    }
+    expect(name('(+/\u2014)-ibuprofen').rotationSign).toBe('±');
+  });
+  it('D-/L- (Fischer–Rosanoff, P-102/P-103, from memory), DL- a racemate; cis-/trans-, meso-, erythro/threo as words', () => {
+    expect(name('L-alanine')).toMatchObject({ fischer: 'L', mode: 'none', rest: 'alanine' });
+    expect(name('DL-alanine')).toMatchObject({ fischer: 'DL', mode: 'racemic' });
+    expect(name('cis-but-2-ene').words).toEqual(['cis']);
+    expect(name('meso-2,3-dibromobutane').words).toEqual(['meso']);
+    // erythro/threo: IUPAC Gold Book (relative configuration of two adjacent stereocentres)
+    expect(name('threo-methylphenidate')).toMatchObject({ words: ['threo'], rest: 'methylphenidate' });
+    expect(name('(±)-threo-methylphenidate')).toMatchObject({ words: ['threo'], mode: 'racemic' });
+  });
+  it('the rest is a name: a name that says nothing stereo says nothing', () => {
+    for (const n of ['ibuprofen', 'Lidocaine', '(2-chloroethyl)amine', 'S-methyl ethanethioate', 'Dl-x']) {
+      const p = name(n);
+      expect([n, p.mode, p.items, p.rotationSign, p.problems]).toEqual([n, 'none', [], null, []]);
+    }
   });
 });
