@@ -4,7 +4,7 @@
  * coordinates).
  */
 import type { Atom, Bond, ReadError, ReadResult, StereoGroup, Structure } from '../types.js';
-import { implicitHydrogens, valenceProblem } from './valence.js';
+import { implicitHydrogens, isMetal, valenceProblem } from './valence.js';
 import { adjacency } from './molfile-graph.js';
 import { kekulizeAromatic } from './molfile-kekulize.js';
 import { stereoFrom2d } from './stereo-2d.js';
@@ -57,9 +57,13 @@ export function finishMolecule(raw: RawMolecule): ReadResult {
     const atom = atoms[i]!;
     let sum = 0;
     let oxo = 0;
+    let multiple = 0;
+    let metal = 0;
     for (const k of adj.bnd[i]!) {
       const b = bonds[k]!;
       sum += b.order;
+      if (b.order >= 2) multiple++;
+      if (isMetal(atoms[b.a === i ? b.b : b.a]!.atomicNumber)) metal += b.order;
       if (b.order === 2 && atoms[b.a === i ? b.b : b.a]!.atomicNumber === 8) oxo++;
     }
     const v = raw.valences[i];
@@ -68,7 +72,7 @@ export function finishMolecule(raw: RawMolecule): ReadResult {
     else
       atom.hCount =
         atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
-    const problem = valenceProblem(atom.atomicNumber, atom.charge, sum, atom.hCount, oxo);
+    const problem = valenceProblem(atom.atomicNumber, atom.charge, sum, atom.hCount, oxo, multiple, metal);
     if (problem !== null) {
       return {
         ok: false,

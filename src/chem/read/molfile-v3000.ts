@@ -124,6 +124,8 @@ export function parseV3000(
   let skipDepth = 0;
   let expectAtoms = -1;
   let expectBonds = -1;
+  let countsLine = -1;
+  let bondLines = 0;
 
   for (const { text, line } of logical) {
     const t = v30Tokens(text);
@@ -190,6 +192,7 @@ export function parseV3000(
         );
       }
       chiralFlag = t[5] === '1';
+      countsLine = line;
       continue;
     }
     if (block === 'ATOM') {
@@ -199,6 +202,7 @@ export function parseV3000(
       valences.push(r.valence);
       atomLines.push(line);
     } else if (block === 'BOND') {
+      bondLines++;
       if (t.length < 4)
         return fail(
           'molfile-bad-bond-line',
@@ -268,12 +272,22 @@ export function parseV3000(
     );
   if (!ctabDone)
     return fail('molfile-v3000-no-ctab', 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
-  if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bonds.length)) {
-    warnings.push({
-      code: 'molfile-counts-mismatch',
-      message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`,
-      at: { line: blockLine },
-    });
+  // CTfile specification: COUNTS gives the number of atom and bond lines; a mismatch means lines were lost or
+  // added, so the structure read would not be the one drawn
+  if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bondLines)) {
+    return fail(
+      'molfile-counts-mismatch',
+      `the COUNTS line says ${expectAtoms} atoms and ${expectBonds} bonds, but the ATOM and BOND blocks hold ` +
+        `${atoms.length} and ${bondLines}; lines were lost or added`,
+      countsLine,
+    );
+  }
+  if (atoms.length === 0) {
+    return fail(
+      'molfile-no-atoms',
+      'the V3000 molfile has no atoms: there is no structure to check',
+      countsLine >= 0 ? countsLine : lineNo(endLine),
+    );
   }
   return finishMolecule({ atoms, bonds, valences, atomLines, groups, chiralFlag, title, warnings });
 }

@@ -35,6 +35,29 @@ function fail(code: string, message: string, line: number): ReadResult {
   return { ok: false, error: { code, message, at: { line } } };
 }
 
+const DIGITS = /^\d+$/;
+
+/** Index of a counts line standing on line 2 or 3 (the header lost lines), or -1. */
+function shortHeader(lines: readonly string[], start: number, end: number): number {
+  for (let i = start + 1; i < start + 3 && i < end; i++) {
+    const l = lines[i]!;
+    if (/V[23]000\s*$/.test(l) && DIGITS.test(l.slice(0, 3).trim()) && DIGITS.test(l.slice(3, 6).trim()))
+      return i;
+  }
+  return -1;
+}
+
+function headerShort(early: number, start: number, lineNo: (i: number) => number): ReadResult {
+  const lost = 3 - (early - start);
+  return fail(
+    'molfile-header-short',
+    `the counts line stands on line ${early - start + 1} of the molfile, not line 4: the header lost ` +
+      `${lost === 1 ? 'a line' : `${lost} lines`} (a molfile starts with three header lines: name, program, ` +
+      'comment; an unused one stays as an empty line)',
+    lineNo(early),
+  );
+}
+
 /** Charge codes of the V2000 atom line (ccc field). */
 const CHARGE_CODE = [0, 3, 2, 1, 0, -1, -2, -3];
 
@@ -68,9 +91,14 @@ export function parseMolfileLines(
   if (!(nAtoms >= 0) || !(nBonds >= 0) || counts.trim() === '') {
     // Free-format fallback: some writers do not keep the fixed columns.
     const t = tokens(counts);
-    const a = t.length >= 2 ? Number(t[0]) : NaN;
-    const b = t.length >= 2 ? Number(t[1]) : NaN;
+    // counts are whole numbers as written: an atom line's "0.0000" is no count
+    const a = t.length >= 2 && DIGITS.test(t[0]!) ? Number(t[0]) : NaN;
+    const b = t.length >= 2 && DIGITS.test(t[1]!) ? Number(t[1]) : NaN;
     if (!Number.isInteger(a) || !Number.isInteger(b) || a < 0 || b < 0) {
+      const early = shortHeader(lines, start, end);
+      if (early >= 0) {
+        return headerShort(early, start, lineNo);
+      }
       return fail(
         'molfile-bad-counts-line',
         `line 4 of the molfile should be the counts line (atoms, bonds, ..., V2000), found "${counts.slice(0, 40)}"`,
@@ -88,6 +116,16 @@ export function parseMolfileLines(
     });
   }
   if (!(nLists >= 0)) nLists = 0;
+  if (nAtoms === 0) {
+    const early = shortHeader(lines, start, end);
+    return early >= 0
+      ? headerShort(early, start, lineNo)
+      : fail(
+          'molfile-no-atoms',
+          'the counts line gives 0 atoms: there is no structure to check',
+          lineNo(start + 3),
+        );
+  }
 
   const atoms = objectList<Atom>();
   const atomLines: number[] = [];

@@ -11,7 +11,7 @@ import { parseCxExtension } from './cxsmiles.js';
 import { kekulize } from './kekulize.js';
 import { parseSmilesGraph, type SmilesGraph } from './smiles-parse.js';
 import { buildStereo } from './smiles-stereo.js';
-import { defaultValences, implicitHydrogens, valenceProblem } from './valence.js';
+import { defaultValences, implicitHydrogens, isMetal, valenceProblem } from './valence.js';
 
 /*
  * Working arrays reused from one SMILES to the next (reading is synchronous and not re-entrant, and none of them
@@ -116,14 +116,27 @@ function parse(text: string): ReadResult {
     const ra = g.atoms[a]!;
     let sum = 0;
     let oxo = 0;
+    let multiple = 0;
+    let metal = 0;
     for (let e = nbrStart[a]!, stop = nbrStart[a + 1]!; e < stop; e++) {
       const bi = nbrBond[e]!;
       sum += order[bi]!;
-      if (order[bi] === 2 && g.atoms[bondA[bi] === a ? bondB[bi]! : bondA[bi]!]!.atomicNumber === 8) oxo++;
+      if (order[bi]! >= 2) multiple++;
+      const other = g.atoms[bondA[bi] === a ? bondB[bi]! : bondA[bi]!]!.atomicNumber;
+      if (order[bi] === 2 && other === 8) oxo++;
+      if (isMetal(other)) metal += order[bi]!;
     }
     // OpenSMILES: an organic-subset atom whose bonds exceed its highest normal valence gets no H; we go further
     // and refuse any checked atom (organic subset or bracket) with more bonds than its highest valence.
-    const problem = valenceProblem(ra.atomicNumber, ra.charge, sum, ra.hCount < 0 ? 0 : ra.hCount, oxo);
+    const problem = valenceProblem(
+      ra.atomicNumber,
+      ra.charge,
+      sum,
+      ra.hCount < 0 ? 0 : ra.hCount,
+      oxo,
+      multiple,
+      metal,
+    );
     if (problem !== null) return failure('smiles-valence', problem, ra.offset);
     if (ra.hCount < 0) {
       hCount[a] = ra.atomicNumber === 0 ? 0 : implicitHydrogens(ra.atomicNumber, 0, sum);

@@ -282,9 +282,15 @@ export function valenceProblem(
   bondOrderSum: number,
   hCount: number,
   oxoBonds = 0,
+  multipleBonds?: number,
+  metalBonds = 0,
 ): string | null {
   const max = maxValence(atomicNumber, charge);
   const used = bondOrderSum + hCount;
+  if (atomicNumber === 7 && charge === 0) {
+    const n = nitrogenProblem(used, hCount, multipleBonds, metalBonds);
+    if (n !== null) return n;
+  }
   if (max === null || used <= max) return null;
   if (charge === 0 && oxoBonds > 0 && (atomicNumber === 17 || atomicNumber === 35 || atomicNumber === 53)) {
     const sep = maxValence(atomicNumber, oxoBonds);
@@ -294,4 +300,45 @@ export function valenceProblem(
   const ch = charge === 0 ? '' : ` of charge ${charge > 0 ? '+' : ''}${charge}`;
   const hs = hCount > 0 ? `, ${hCount} of them to hydrogen` : '';
   return `${name}${ch} with ${used} bonds${hs} (at most ${max})`;
+}
+
+/**
+ * A neutral nitrogen has valence 3, or 5 in the pentavalent forms drawn with a double or triple bond (nitro
+ * N(=O)=O, N-oxide R3N=O, as OpenSMILES's organic subset lists them). A bond to a metal may be a coordination
+ * drawn as a single bond (ammine [NH3][Pt], an imidazole N on cobalt), so it is not counted against the 3.
+ * Four bonds (`CN(C)(C)C`, `C=N(C)C`), or five single bonds (`[NH4]` on a metal: four besides the metal bond)
+ * need a positive charge: common practice, no source (RDKit refuses them too).
+ * `multipleBonds` undefined: the caller does not know, the five-bond rule is skipped.
+ */
+function nitrogenProblem(
+  used: number,
+  hCount: number,
+  multipleBonds: number | undefined,
+  metalBonds: number,
+): string | null {
+  if (used === 3 || (used === 5 && multipleBonds !== 0) || used < 3) return null;
+  const own = used - metalBonds;
+  if (metalBonds > 0 && own <= 3) return null;
+  const hs = hCount > 0 ? `, ${hCount} of them to hydrogen` : '';
+  const besides = metalBonds > 0 ? ` besides ${metalBonds === 1 ? 'its bond' : 'its bonds'} to a metal` : '';
+  if (own === 4 || (own === 5 && multipleBonds === 0) || own > 5) {
+    return (
+      `neutral nitrogen with ${own} bonds${hs}${besides} (a neutral N has 3, or 5 only with a double bond as in ` +
+      'N(=O)=O; an ammonium N with 4 carries a + charge: [N+], [NH4+])'
+    );
+  }
+  return null;
+}
+
+/**
+ * Metals: every element but hydrogen, the noble gases, the non-metals and the metalloids B, Si, As and Te
+ * (a bond from N to one of these is an ordinary covalent bond). Germanium, antimony and the heavier elements count
+ * as metals here, as coordination partners.
+ */
+const NOT_METAL = new Set([
+  0, 1, 2, 5, 6, 7, 8, 9, 10, 14, 15, 16, 17, 18, 33, 34, 35, 36, 52, 53, 54, 85, 86,
+]);
+
+export function isMetal(atomicNumber: number): boolean {
+  return !NOT_METAL.has(atomicNumber);
 }

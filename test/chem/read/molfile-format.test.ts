@@ -203,7 +203,7 @@ M  END`;
 });
 
 describe('V3000 atom types and counts (CTfile format specification, V3000 atom block)', () => {
-  it('atom lists, NOT lists and quoted pseudo-atoms... become wildcards; a COUNTS mismatch is a warning', () => {
+  it('atom lists, NOT lists and quoted pseudo-atoms... become wildcards; a COUNTS mismatch is an error', () => {
     const t = [
       '',
       '',
@@ -223,12 +223,15 @@ describe('V3000 atom types and counts (CTfile format specification, V3000 atom b
       'M  V30 END CTAB',
       'M  END',
     ].join('\n');
-    const r = parseMolfile(t);
+    // COUNTS 4 2 with one bond line: a lost line, refused with the COUNTS line (issue 10)
+    const bad = parseMolfile(t);
+    expect(bad.ok ? null : bad.error).toMatchObject({ code: 'molfile-counts-mismatch', at: { line: 6 } });
+    const r = parseMolfile(t.replace('COUNTS 4 2', 'COUNTS 4 1'));
     if (!r.ok) throw new Error(r.error.message);
     expect(r.structure.atoms.map((a) => a.element)).toEqual(['*', '*', '*', 'Cl']);
     expect(r.structure.atoms[3]!.mapNumber).toBe(7);
     expect(r.structure.chiralFlag).toBe(true);
-    expect(r.warnings.map((w) => w.code)).toEqual(['molfile-counts-mismatch']);
+    expect(r.warnings.map((w) => w.code)).toEqual([]);
   });
 });
 
