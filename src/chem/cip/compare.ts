@@ -223,7 +223,13 @@ export class Ranker {
     const qfy = q.fy;
     let len = 1;
     try {
+      const dg = this.dg;
       for (let i = 0; i < len; i++) {
+        // the structure's work budget (graph.ts CIP_WORK_BUDGET) counts compared pairs too; spent, it stops here
+        if (--dg.g.workLeft <= 0) {
+          dg.truncated = true;
+          return 0;
+        }
         const nx = qx[i];
         const ny = qy[i];
         const sx = this.sorted(nx, qfx[i], rule).nodes;
@@ -258,8 +264,14 @@ export class Ranker {
     let len = 1;
     let lo = 0;
     try {
+      const dg = this.dg;
       while (lo < len) {
         const hi = len;
+        dg.g.workLeft -= hi - lo;
+        if (dg.g.workLeft <= 0) {
+          dg.truncated = true;
+          return 0;
+        }
         for (let i = lo; i < hi; i++) {
           const sx = this.sorted0(qx[i], qfx[i]).nodes;
           const sy = this.sorted0(qy[i], qfy[i]).nodes;

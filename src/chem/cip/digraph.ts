@@ -94,6 +94,7 @@ export class Digraph {
   ): CipNode {
     this.count++;
     const g = this.g;
+    g.workLeft--;
     if (z >= 0 && parent !== null) {
       return new CipNode(this.nextId++, atom, z, true, depth, dist, true, parent);
     }
@@ -122,7 +123,7 @@ export class Digraph {
   kids(node: CipNode): CipNode[] {
     if (node.kids) return node.kids;
     if (node.dup || node.atom < 0) return (node.kids = NO_KIDS);
-    if (this.count > NODE_BUDGET) {
+    if (this.count > NODE_BUDGET || this.g.workLeft <= 0) {
       this.truncated = true;
       return (node.kids = NO_KIDS);
     }
@@ -149,7 +150,8 @@ export class Digraph {
         else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, parent.depth, true, node);
         continue;
       }
-      let anc: CipNode | null = parent;
+      // a ring closure needs a ring: off the 2-core, b is no ancestor (the parent was handled above)
+      let anc: CipNode | null = g.core[a] && g.core[b] ? parent : null;
       while (anc !== null && anc.atom !== b) anc = anc.parent;
       if (anc !== null) {
         // ring closure: a duplicate of the atom already on the path, plus one per extra bond order

@@ -27,6 +27,8 @@ export interface CipResult {
   label: CipLabel | null;
   /** Atom indices that carry the label: the centre, or the two end atoms of a double bond or axis. */
   atoms: number[];
+  /** Present (true) when the label is null because the structure's work budget ran out: open, not "no label". */
+  stopped?: true;
 }
 
 export function assignCip(s: Structure): CipResult[] {
@@ -52,9 +54,14 @@ export function assignCip(s: Structure): CipResult[] {
       }
     }
   }
-  return s.stereo.map((e, element) => ({
-    element,
-    label: labels[element],
-    atoms: e.kind === 'tetrahedral' ? [e.centre] : [e.ends[0], e.ends[1]],
-  }));
+  const stopped = g.workLeft <= 0;
+  return s.stereo.map((e, element) => {
+    const r: CipResult = {
+      element,
+      label: labels[element],
+      atoms: e.kind === 'tetrahedral' ? [e.centre] : [e.ends[0], e.ends[1]],
+    };
+    if (stopped && r.label === null && !g.ringFixed[element]) r.stopped = true;
+    return r;
+  });
 }

@@ -42,6 +42,10 @@ function descriptors(rk: Ranker, x: CipNode, fx: CipNode | null): Entry[] {
   const qPos: number[] = [0];
   const qDepth: number[] = [0];
   for (let i = 0; i < q.length; i++) {
+    if (--rk.dg.g.workLeft <= 0) {
+      rk.dg.truncated = true;
+      break;
+    }
     const n = q[i];
     if (!n.dup && n.atom >= 0 && rk.value(RULE_4A, n) === 2) {
       const l = rk.aux(n);

@@ -34,7 +34,13 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   const { p } = a;
   const s = p.structure;
   const labels = new Map<string, CipLabel>();
-  if (s.stereo.length > 0) for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
+  let stoppedLabels = 0;
+  if (s.stereo.length > 0) {
+    for (const r of labelUnits(s)) {
+      if (r.label) labels.set(unitKey(r.atoms), r.label);
+      else if (r.stopped) stoppedLabels++;
+    }
+  }
 
   const units = unitFacts(a, labels);
   // A 2:1 salt holds two copies of one stereoisomer: count and judge chirality on one copy.
@@ -92,6 +98,11 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
       explanation:
         'open: a trans double bond in a ring of 8–11 atoms is planar chiral, which is not modelled',
     };
+  }
+  if (stoppedLabels > 0) {
+    facts.remarks.push(
+      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`,
+    );
   }
   if (copies.length > 0) {
     facts.remarks.push(

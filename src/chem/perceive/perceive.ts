@@ -22,7 +22,7 @@ import { bondCandidates } from './bonds.js';
 import { tetrahedralCandidate } from './centres.js';
 import { hToken, lpToken, type PerceivedUnit } from './units.js';
 import { applyInputStereo } from './input.js';
-import { survivesSymmetry, swapsTerminalPair } from './rescue.js';
+import { survivesSymmetry, swapsPendantTrees, swapsTerminalPair } from './rescue.js';
 import { bridgeCouplings, type Coupling } from './bridges.js';
 import { objectList } from '../read/make.js';
 
@@ -125,7 +125,11 @@ export function perceive(s: Structure): Perception {
     const rescued = drafts.filter((d) => {
       if (keptSet.has(d) || tried.has(d)) return false;
       tried.add(d);
-      return !swapsTerminalPair(d, graph, classesOf(), n) && survivesSymmetry(s, d, classesOf());
+      return (
+        !swapsTerminalPair(d, graph, classesOf(), n) &&
+        !swapsPendantTrees(d, graph, classesOf(), n) &&
+        survivesSymmetry(s, d, classesOf())
+      );
     });
     if (rescued.length === 0) break;
     for (const d of rescued) d.pairs = [];

@@ -26,6 +26,57 @@ export function swapsTerminalPair(u: PerceivedUnit, g: Graph, classes: Int32Arra
   return false;
 }
 
+/**
+ * Two equivalent ligands that each root a pendant tree (no ring, not leading back to the unit) are exchanged by
+ * the symmetry that swaps the two trees and moves nothing else, so the unit is not stereogenic by constitution:
+ * the branch points of a dendrimer, where the automorphism search per unit would cost O(atoms^2) in all.
+ * (Colour refinement tells rooted trees apart, so equal classes mean isomorphic trees.) Trees larger than
+ * `cap` atoms are left to the search.
+ */
+export function swapsPendantTrees(
+  u: PerceivedUnit,
+  g: Graph,
+  classes: Int32Array,
+  n: number,
+  cap = 20000,
+): boolean {
+  const tree: boolean[] = [];
+  for (let i = 0; i < 4; i++) {
+    const a = u.tokens[i];
+    tree.push(a < n && pendantTree(g, a, u.atoms, cap));
+  }
+  for (let i = 0; i < 4; i++) {
+    if (!tree[i]) continue;
+    for (let j = i + 1; j < 4; j++)
+      if (tree[j] && classes[u.tokens[i]] === classes[u.tokens[j]] && sameSide(u, i, j)) return true;
+  }
+  return false;
+}
+
+/** Is the part reached from `a` without passing through `stop` a tree (and does it not reach `stop`)? */
+function pendantTree(g: Graph, a: number, stop: number[], cap: number): boolean {
+  const seen = new Set<number>([a]);
+  const queue = [a];
+  let edges = 0;
+  for (let q = 0; q < queue.length; q++) {
+    const x = queue[q];
+    for (const y of g.nbrs[x]) {
+      if (stop.includes(y)) {
+        if (x !== a) return false; // back at the unit through another path: a ring
+        continue;
+      }
+      edges++;
+      if (!seen.has(y)) {
+        if (seen.size >= cap) return false;
+        seen.add(y);
+        queue.push(y);
+      }
+    }
+  }
+  // each tree edge was seen from both ends
+  return edges === 2 * (seen.size - 1);
+}
+
 function sameSide(u: PerceivedUnit, i: number, j: number): boolean {
   return u.kind === 'tetrahedral' || i < 2 === j < 2;
 }

@@ -1,0 +1,30 @@
+/**
+ * Size bounds of the engine on pathological but valid inputs (issue 10): a dendrimer of drawn [C@@H] branch
+ * points and a long isotactic chain must finish with an answer — exact where it can be had in polynomial work,
+ * "open" where a limit stops it — instead of running for minutes. No timing is asserted (timings live in
+ * `npm run bench`); the tests assert what the facts say.
+ */
+import { describe as suite, expect, it } from 'vitest';
+import { describe } from '../../src/chem/describe/index.js';
+import { smiles } from './stereo-helpers.js';
+
+/** Branch point CH with two identical branches: no branch point is stereogenic (every pair of branches is alike). */
+const dendrimer = (g: number): string => {
+  const arm = (d: number): string => (d === 0 ? 'C' : `C[C@@H](${arm(d - 1)})${arm(d - 1)}`);
+  return 'O' + arm(g);
+};
+
+suite('engine bounds', () => {
+  it('a generation-10 dendrimer of drawn branch points: no stereocentre, and labelling stops at its work limit (open)', () => {
+    const f = describe(smiles(dendrimer(10)));
+    expect(f.units).toHaveLength(0);
+    expect(f.stereoisomers).toMatchObject({ total: 1, chiral: 0, achiral: 1 });
+    expect(f.chiral).toBe(false);
+    expect(f.remarks.some((r) => /work limit/.test(r))).toBe(true);
+  }, 120_000);
+  it('a generation-7 dendrimer is labelled in full (the limit is not met on ordinary sizes)', () => {
+    const f = describe(smiles(dendrimer(7)));
+    expect(f.units).toHaveLength(0);
+    expect(f.remarks.some((r) => /work limit/.test(r))).toBe(false);
+  }, 60_000);
+});
