@@ -30,6 +30,7 @@ export const PROBLEM_CODES: Record<string, string> = {
   maxLength: 'too-long',
   pattern: 'spaces-around',
   minItems: 'too-few-items',
+  maxItems: 'too-many-items',
   oneOf: 'structure-choice',
 };
 
@@ -198,6 +199,8 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
       return { path, message: `${label}: ${quote(got)} must not start or end with spaces` };
     case 'minItems':
       return { path, message: `${label}: needs at least ${(e.params as { limit: number }).limit} item(s)` };
+    case 'maxItems':
+      return { path, message: `${label}: holds at most ${(e.params as { limit: number }).limit} item(s)` };
     case 'oneOf': {
       if (got === null || typeof got !== 'object' || Array.isArray(got)) {
         return {

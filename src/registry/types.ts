@@ -50,6 +50,36 @@ export interface Waiver {
   approved_by?: string;
 }
 
+/** What made a synthesis stereoselective or changed the ee (record field origin.control; names ours). */
+export type OriginControl =
+  | 'none'
+  | 'chiral-catalyst'
+  | 'chiral-reagent'
+  | 'chiral-auxiliary'
+  | 'biocatalyst'
+  | 'resolution'
+  | 'chiral-separation'
+  | 'enrichment'
+  | 'unknown';
+
+export const ORIGIN_CONTROLS: readonly OriginControl[] = [
+  'none',
+  'chiral-catalyst',
+  'chiral-reagent',
+  'chiral-auxiliary',
+  'biocatalyst',
+  'resolution',
+  'chiral-separation',
+  'enrichment',
+  'unknown',
+];
+
+/** How the compound was made: registered ids or SMILES of its inputs, and the stereocontrol, if any. */
+export interface Origin {
+  from: string[];
+  control?: OriginControl;
+}
+
 export interface CompoundRecord {
   id: string;
   name?: string;
@@ -63,6 +93,7 @@ export interface CompoundRecord {
     rotation?: Rotation;
     evidence?: string[];
   };
+  origin?: Origin;
   waivers?: Waiver[];
 }
 
