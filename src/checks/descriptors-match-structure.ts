@@ -17,15 +17,18 @@ import { cisTransFindings, cisTransMessages } from './cis-trans-words.js';
 import { distinctUnits, repeatedComponents } from './repeated-components.js';
 import { claimRestsOnlyOnNitrogen, NITROGEN_CHECK_ID } from './nitrogen-inversion.js';
 import type { ReadStructure } from './types.js';
+import type { StructureSource } from '../registry/types.js';
+import { unverifiedFinding, unverifiedMessages } from './descriptors-unverified.js';
+import { withAtomMaps } from './mapped-smiles.js';
 
 const messages = {
   'descriptor-unreadable':
     "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, " +
     'e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).',
   'descriptor-label-mismatch':
-    '{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} (compared per ' +
-    'locant through atom-map numbers). Either the drawing or the descriptors are wrong: check the wedges / @ marks ' +
-    'at those atoms, or correct the descriptors.',
+    '{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} ({how}). ' +
+    'Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the ' +
+    'descriptors.',
   'descriptor-not-stereo-unit':
     '{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those ' +
     'atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.',
@@ -54,9 +57,16 @@ const messages = {
     '{field} uses the Fischer–Rosanoff descriptor {fischer}, which is defined by analogy with glyceraldehyde and ' +
     'is not comparable with CIP labels, so it was not checked against the structure. Add CIP descriptors, e.g. ' +
     '(S) for L-alanine, to have them checked.',
+  ...unverifiedMessages,
   ...prefixMessages,
   ...cisTransMessages,
 } as const;
+
+/** How a per-atom comparison matched descriptors to units, in words. */
+const HOW: Record<string, string> = {
+  'per-locant': 'compared per locant through atom-map numbers',
+  'per-unit': 'matched without atom maps: the structure has one stereo unit of each kind the descriptors cite',
+};
 
 type Id = keyof typeof messages;
 
@@ -74,6 +84,7 @@ function compareOne(
   form: string,
   evidence: string[],
   nitrogenNote = false,
+  source?: { read: ReadStructure; text: StructureSource | null | undefined },
 ): DescriptorComparison | null {
   const add = (id: Id, data: RawFinding['data'], severity?: RawFinding['severity']): void => {
     out.push(finding(id, field, { field, text, ...data }, severity));
@@ -103,15 +114,21 @@ function compareOne(
     );
     return cmp;
   }
-  if (cmp.method === 'per-locant') {
+  if (cmp.method === 'per-locant' || cmp.method === 'per-unit') {
     if (cmp.mismatches.length) {
       const mismatches = cmp.mismatches
-        .map(
-          (m) =>
-            `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join('–')})`,
+        .map((m) =>
+          m.locant === ''
+            ? `atom ${m.atoms.join('–')}: declared ${m.declared}, computed ${m.computed}`
+            : `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join('–')})`,
         )
         .join('; ');
-      add('descriptor-label-mismatch', { count: cmp.mismatches.length, mismatches, method: cmp.method });
+      add('descriptor-label-mismatch', {
+        count: cmp.mismatches.length,
+        mismatches,
+        method: cmp.method,
+        how: HOW[cmp.method]!,
+      });
     }
     if (cmp.notStereoUnits.length)
       add('descriptor-not-stereo-unit', { locants: cmp.notStereoUnits.join(', '), computed });
@@ -144,6 +161,12 @@ function compareOne(
       parsed.mode === 'racemic' ? 'note' : undefined,
     );
     return cmp;
+  }
+  if (cmp.agrees && !cmp.countsDecide) {
+    const mapped = source
+      ? withAtomMaps(source.read.structure, source.text, [...new Set(facts.units.flatMap((u) => u.atoms))])
+      : null;
+    out.push(unverifiedFinding(field, text, parsed, facts, cmp, mapped));
   }
   if (!cmp.agrees) {
     const subset = (d: Record<string, number>): boolean =>
@@ -223,18 +246,34 @@ function run(ctx: CheckContext): CheckOutcome {
     repeats = c0.repeats,
   ): void => {
     if (!cmp || cmp.method === 'none') return;
-    const how = cmp.method === 'per-locant' ? 'per locant (atom maps)' : `as counts (${cmp.whyNotPerLocant})`;
+    const how =
+      cmp.method === 'per-locant'
+        ? 'per locant (atom maps)'
+        : cmp.method === 'per-unit'
+          ? 'per unit (one stereo unit of each kind cited, matched without atom maps)'
+          : cmp.countsDecide
+            ? `as counts (${cmp.whyNotPerLocant}; every matching of locants to units gives the same labels)`
+            : `as counts only, not verified per atom (${cmp.whyNotPerLocant})`;
+    const verb = cmp.method === 'counts' && !cmp.countsDecide ? 'is consistent in count with' : 'agrees with';
     evidence.push(
-      `${what} agrees with computed ${labelList(compared.units)}${repeats}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`,
+      `${what} ${verb} computed ${labelList(compared.units)}${repeats}, compared ${how}${cmp.matchedInverted ? ', up to inversion' : ''}`,
     );
   };
   const fieldText = record.stereo.descriptors ?? '';
+  const mainSource = {
+    read: ctx.main,
+    text: ctx.loaded.sources?.main ?? {
+      field: 'structure',
+      format: 'smiles' as const,
+      text: record.structure.smiles ?? null,
+    },
+  };
   const nitrogenNote = claimRestsOnlyOnNitrogen(ctx);
   const form = record.stereo.form;
   if (decl.field)
     note(
       fieldText,
-      compareOne('stereo.descriptors', fieldText, decl.field, f, out, form, evidence, nitrogenNote),
+      compareOne('stereo.descriptors', fieldText, decl.field, f, out, form, evidence, nitrogenNote, mainSource),
     );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
@@ -247,7 +286,7 @@ function run(ctx: CheckContext): CheckOutcome {
       const front = name
         .slice(0, name.length - decl.name.rest.length)
         .replace(/[-\s\u2010-\u2014\u2212\uFE63\uFF0D\u02D7]+$/, '');
-      note(front, compareOne('name', front, decl.name, f, out, form, evidence, nitrogenNote));
+      note(front, compareOne('name', front, decl.name, f, out, form, evidence, nitrogenNote, mainSource));
     }
   } else if (decl.name) {
     for (const p of decl.name.problemDetails) {
@@ -273,7 +312,10 @@ function run(ctx: CheckContext): CheckOutcome {
     const cf = cc.facts;
     note(
       `component ${i + 1} ${c.descriptors}`,
-      compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, 'component', evidence),
+      compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, 'component', evidence, false, {
+        read: ctx.components[i]!,
+        text: ctx.loaded.sources?.components[i] ?? { field, format: 'smiles', text: c.smiles ?? null },
+      }),
       cf,
       cc.repeats,
     );

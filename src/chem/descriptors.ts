@@ -354,8 +354,18 @@ export interface LabelMismatch {
 }
 
 export interface DescriptorComparison {
-  /** per-locant: items matched to units through atom-map numbers; counts: how many R, S, E, Z…; none: nothing to compare. */
-  method: 'per-locant' | 'counts' | 'none';
+  /**
+   * per-locant: items matched to units through atom-map numbers; per-unit: matched without atom maps, because
+   * the structure has exactly one unit of each kind the descriptors cite (one R/S centre, one E/Z double bond…);
+   * counts: how many R, S, E, Z…; none: nothing to compare.
+   */
+  method: 'per-locant' | 'per-unit' | 'counts' | 'none';
+  /**
+   * method 'counts' with agreeing counts: true when every way of matching the cited locants to the units gives
+   * the same answer (all units of a kind carry the same label, or two R/S units compared up to inversion), so
+   * the counts verify the claim; false when some matchings would disagree, so it is consistent in count only.
+   */
+  countsDecide: boolean;
   /** When method is 'counts' or 'none': why per-locant matching was not possible. */
   whyNotPerLocant: string | null;
   agrees: boolean;
@@ -438,6 +448,7 @@ export function compareDescriptors(
   const result: DescriptorComparison = {
     method: 'none',
     whyNotPerLocant: null,
+    countsDecide: false,
     agrees: true,
     matchedInverted: false,
     mismatches: [],
@@ -456,22 +467,25 @@ export function compareDescriptors(
   const mayInvert = parsed.mode === 'racemic' || parsed.mode === 'relative' || options.achiral === true;
   const mapped = units.some((u) => unitLocants(u).length > 0);
   const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
-  if (mapped && numeric) {
-    result.method = 'per-locant';
+  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
+  if ((mapped && numeric) || single) {
+    result.method = single ? 'per-unit' : 'per-locant';
     const byLocant = (n: number): StereoUnitFact | undefined =>
       units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
-    const pairs: { it: DescriptorItem; u: StereoUnitFact }[] = [];
-    for (const it of parsed.items) {
-      const u = byLocant(Number(it.locant));
-      if (!u) result.notStereoUnits.push(it.locant!);
-      else if (!u.defined || u.label === null) result.undefinedAt.push(it.locant!);
-      else pairs.push({ it, u });
+    const pairs: { it: DescriptorItem; u: StereoUnitFact }[] = single ?? [];
+    if (!single) {
+      for (const it of parsed.items) {
+        const u = byLocant(Number(it.locant));
+        if (!u) result.notStereoUnits.push(it.locant!);
+        else if (!u.defined || u.label === null) result.undefinedAt.push(it.locant!);
+        else pairs.push({ it, u });
+      }
     }
     const mismatchesFor = (invert: boolean): LabelMismatch[] =>
       pairs
         .filter(({ it, u }) => (invert ? mirrored(unitKey(u)!) : unitKey(u)) !== itemKey(it))
         .map(({ it, u }) => ({
-          locant: it.locant!,
+          locant: it.locant ?? '',
           declared: it.pair ?? it.label + (it.axial ? 'a' : ''),
           computed: u.label!,
           atoms: u.atoms,
@@ -484,7 +498,7 @@ export function compareDescriptors(
     for (const u of defined) {
       if (!cited.has(u)) {
         result.unlisted.push({
-          locant: unitLocants(u)[0]?.toString() ?? null,
+          locant: single ? null : (unitLocants(u)[0]?.toString() ?? null),
           label: u.label!,
           atoms: u.atoms,
         });
@@ -502,5 +516,77 @@ export function compareDescriptors(
   const inverted = mayInvert && sameCounts(invertCounts(result.declaredCounts), result.computedCounts);
   result.agrees = direct || inverted;
   result.matchedInverted = !direct && inverted;
+  result.countsDecide = result.agrees && countsDecide(parsed.items, units, mayInvert);
   return result;
+}
+
+/** The kind of descriptor a label belongs to: R/S, pseudoasymmetric r/s, axial M/P (Ra/Sa), m/p, E/Z. */
+type Kind = 'RS' | 'rs' | 'MP' | 'mp' | 'EZ' | 'other';
+
+function kindOfKey(k: string): Kind {
+  if (k === 'R' || k === 'S') return 'RS';
+  if (k === 'r' || k === 's') return 'rs';
+  if (k === 'M' || k === 'P') return 'MP';
+  if (k === 'm' || k === 'p') return 'mp';
+  if (k === 'E' || k === 'Z' || k === 'e' || k === 'z') return 'EZ';
+  return 'other';
+}
+
+/** The kind of a unit: from its label, else (undefined) from what it is; 'other' when that cannot be told. */
+function kindOfUnit(u: StereoUnitFact): Kind {
+  const k = unitKey(u);
+  if (k !== null) return kindOfKey(k);
+  if (u.kind === 'tetrahedral') return u.pseudoasymmetric ? 'rs' : 'RS';
+  if (u.kind === 'double-bond') return 'EZ';
+  if (u.kind === 'allene' || u.kind === 'biaryl') return 'MP';
+  return 'other';
+}
+
+/**
+ * Matching without atom maps: when each kind of descriptor cited (R/S, r/s, E/Z, M/P) is cited once and the
+ * structure has exactly one unit of that kind (defined or not), each descriptor can only mean that unit — a
+ * single stereocentre, or one centre and one double bond. Null when some locant could mean more than one unit.
+ */
+function matchOnePerKind(
+  items: readonly DescriptorItem[],
+  units: readonly StereoUnitFact[],
+): { it: DescriptorItem; u: StereoUnitFact }[] | null {
+  if (units.some((u) => kindOfUnit(u) === 'other')) return null;
+  const pairs: { it: DescriptorItem; u: StereoUnitFact }[] = [];
+  for (const it of items) {
+    const kind = kindOfKey(itemKey(it));
+    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
+    const sameKindUnits = units.filter((u) => kindOfUnit(u) === kind);
+    if (kind === 'other' || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
+    const u = sameKindUnits[0]!;
+    if (!u.defined || u.label === null) return null;
+    pairs.push({ it, u });
+  }
+  return pairs;
+}
+
+/**
+ * Whether agreeing counts settle the claim: every matching of locants to units of the same kind gives the same
+ * labels when all units of each kind carry one label; with inversion allowed (rac, rel, an achiral structure),
+ * two R/S units and no other chiral ones are settled too (like or unlike is all two labels can say). Undefined
+ * units of a cited kind leave it open (a locant could name one of them).
+ */
+function countsDecide(
+  items: readonly DescriptorItem[],
+  units: readonly StereoUnitFact[],
+  mayInvert: boolean,
+): boolean {
+  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
+  let chiralUnits = 0;
+  let uniform = true;
+  for (const kind of kinds) {
+    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
+    if (kind === 'other' || ofKind.some((u) => !u.defined || u.label === null)) return false;
+    if (kind === 'RS' || kind === 'MP') chiralUnits += ofKind.length;
+    if (new Set(ofKind.map((u) => unitKey(u))).size > 1) {
+      if (!(mayInvert && kind === 'RS' && ofKind.length === 2)) return false;
+      uniform = false;
+    }
+  }
+  return uniform || chiralUnits === 2;
 }

@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { descriptorsMatchStructure as check } from '../../src/checks/descriptors-match-structure.js';
 import type { StructureFacts } from '../../src/chem/facts.js';
 import { centre, chiralFacts, ctx, facts, ids, read, record, runCheck, unit } from './facts.js';
-import { realCtx } from './real.js';
+import { readSmiles, realCtx } from './real.js';
+import { render } from '../../src/checks/words.js';
+import { toFinding } from '../../src/audit/findings.js';
 
 // Descriptor notation: IUPAC 2013 recommendations P-93.1.3 (R/S, RS/SR, rac-, rel-, R*), signs of rotation
 // (+)/(−)/(±) and meso as used in P-93; Fischer D/L are not CIP descriptors (P-93).
@@ -154,6 +156,87 @@ describe('descriptors-match-structure: prefixes against the form', () => {
   });
   it('does not apply when nothing is declared', () => {
     expect(run(one, { form: 'single-enantiomer' }).notApplicable).toBe(true);
+  });
+});
+
+// Descriptors without atom maps (issue 12). Ephedrine is (1R,2S)-2-(methylamino)-1-phenylpropan-1-ol (handbook,
+// from memory); the SMILES below is labelled C1 (atom 5, the carbinol carbon) R and C2 (atom 2) S by RDKit's new
+// CIP labeller (rdCIPLabeler, python3-rdkit 2022.09) and by our engine.
+describe('descriptors-match-structure: counts are not a per-atom check', () => {
+  const EPHEDRINE = 'C[C@H](NC)[C@H](O)c1ccccc1';
+  const real = (smiles: string, descriptors: string) =>
+    runCheck(
+      check,
+      realCtx(
+        record(
+          { form: 'single-enantiomer', descriptors },
+          { id: 'LX-00091', name: 'ephedrine', structure: { smiles } },
+        ),
+      ),
+    );
+  it("the enantiomer's descriptors (1S,2R) on ephedrine drawn (1R,2S): a note with the fix, never a pass (before: passed as counts)", () => {
+    const o = real(EPHEDRINE, '(1S,2R)');
+    expect(o.findings).toMatchObject([
+      {
+        messageId: 'descriptors-not-verified-per-atom',
+        severity: 'note',
+        data: {
+          mappedSmiles: 'C[C@H:2](NC)[C@H:5](O)c1ccccc1',
+          atoms: '2, 5',
+          fitsIf: '; they fit the drawing only if locant 1 is atom 2 and locant 2 is atom 5',
+        },
+      },
+    ]);
+    const text = render(check.messages['descriptors-not-verified-per-atom'], o.findings[0].data);
+    expect(text).toMatch(/consistent in count .*not verified per atom/);
+    expect(text).toContain('C[C@H:2](NC)[C@H:5](O)c1ccccc1 (each map number is the atom number in your SMILES');
+    // the right descriptors are not verified either: the same note, without a pass
+    expect(ids(real(EPHEDRINE, '(1R,2S)'))).toEqual(['descriptors-not-verified-per-atom']);
+  });
+  it('pasted back with the locants as atom maps, the comparison is per atom: wrong descriptors fail, right ones pass', () => {
+    const pasted = 'C[C@H:2](NC)[C@H:1](O)c1ccccc1';
+    const bad = real(pasted, '(1S,2R)');
+    expect(ids(bad)).toEqual(['descriptor-label-mismatch']);
+    expect(bad.findings[0].data).toMatchObject({ count: 2, method: 'per-locant' });
+    const good = real(pasted, '(1R,2S)');
+    expect(good.findings).toEqual([]);
+    expect(good.passed).toMatch(/per locant/);
+  });
+  it('the note can be raised to a warning by the registry (severities, check-id/message-id)', () => {
+    const o = real(EPHEDRINE, '(1S,2R)');
+    const c = realCtx(record({ form: 'single-enantiomer' }, { id: 'LX-00091' }));
+    const config = { ...c.config, severities: { 'descriptors-match-structure/descriptors-not-verified-per-atom': 'warning' as const } };
+    expect(toFinding(check, o.findings[0], c.loaded, config).severity).toBe('warning');
+    expect(toFinding(check, o.findings[0], c.loaded, c.config).severity).toBe('note');
+  });
+  it('a single stereocentre is matched without atom maps: (S) on (R)-butan-2-ol fails, (R) passes per unit', () => {
+    const bad = real('C[C@@H](O)CC', '(S)');
+    expect(ids(bad)).toEqual(['descriptor-label-mismatch']);
+    expect(bad.findings[0].data).toMatchObject({ method: 'per-unit', mismatches: 'atom 2: declared S, computed R' });
+    const good = real('C[C@@H](O)CC', '(2R)');
+    expect(good.findings).toEqual([]);
+    expect(good.passed).toMatch(/per unit/);
+  });
+  it('one centre and one double bond are told apart by E/Z versus R/S', () => {
+    // (3S,4E)-hex-4-en-3-ol: RDKit's rdCIPLabeler (python3-rdkit 2022.09) gives C atom 4 S and the double bond E
+    const smiles = 'C/C=C/[C@@H](O)CC';
+    const labels = readSmiles(smiles).facts!.units.map((u) => u.label).sort();
+    expect(labels).toEqual(['E', 'S']);
+    expect(real(smiles, '(3S,4E)').passed).toMatch(/per unit/);
+    const bad = real(smiles, '(3S,4Z)');
+    expect(ids(bad)).toEqual(['descriptor-label-mismatch']);
+    expect(bad.findings[0].data).toMatchObject({ method: 'per-unit', count: 1 });
+  });
+  it('counts settle the claim when every matching gives the same labels: all centres alike, or two centres up to inversion', () => {
+    const rr = chiralFacts([centre(4, 'R'), centre(6, 'R')]);
+    expect(run(rr, { form: 'single-enantiomer', descriptors: '(2R,3R)' }).passed).toMatch(/every matching/);
+    const rs = chiralFacts([centre(4, 'R'), centre(6, 'S')]);
+    expect(run(rs, { form: 'racemate', descriptors: '(2RS,3SR)' }).passed).toMatch(/every matching/);
+    // three centres, racemic: (1RS,2SR,3SR) fits some matchings only
+    const rss = chiralFacts([centre(2, 'R'), centre(4, 'S'), centre(6, 'S')]);
+    expect(ids(run(rss, { form: 'racemate', descriptors: '(1RS,2SR,3SR)' }))).toEqual([
+      'descriptors-not-verified-per-atom',
+    ]);
   });
 });
 
