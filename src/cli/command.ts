@@ -18,8 +18,24 @@ export interface Command {
   run: (args: string[], io: Io) => number | Promise<number>;
 }
 
-/** A usage error: main prints the message and the command's usage and exits with code 2. */
-export class UsageError extends Error {}
+/**
+ * A usage error: main prints the message and the usage (`usage` when given, else the command's) and exits with
+ * code 2.
+ */
+export class UsageError extends Error {
+  constructor(
+    message: string,
+    readonly usage?: string,
+  ) {
+    super(message);
+  }
+}
+
+/** An input or output the command cannot use (unreadable structure, unwritable --output): one line, exit 2. */
+export class InputError extends Error {}
+
+/** Findings at the --fail-on level (audit). Usage errors and unusable inputs or outputs exit EXIT_USAGE. */
+export const EXIT_FINDINGS = 1;
 
 export const EXIT_OK = 0;
 export const EXIT_BAD_INPUT = 1;

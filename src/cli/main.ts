@@ -1,12 +1,14 @@
 /**
  * stereogate command line: `stereogate <command> [arguments]`. The commands are data (commands/index.ts).
- * Exit codes: 0 done, 1 a structure could not be read (or the command's own failure code), 2 usage error,
- * 3 stereogate itself failed (EXIT_CRASH: never shared with "findings found").
+ * Exit codes: 0 done, 1 findings at the --fail-on level (audit), 2 usage error or an input or output that cannot
+ * be used (a structure that cannot be read, a report path that cannot be written), 3 stereogate itself failed
+ * (EXIT_CRASH: never shared with "findings found").
  */
 import { existsSync, readFileSync, statSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { commands } from './commands/index.js';
-import { EXIT_CRASH, EXIT_OK, EXIT_USAGE, UsageError, type Io } from './command.js';
+import { EXIT_CRASH, EXIT_OK, EXIT_USAGE, InputError, UsageError, type Io } from './command.js';
+import { VERSION } from '../audit/version.js';
 import { respawnForBulk } from './gc-respawn.js';
 
 export { respawnForBulk };
@@ -27,12 +29,16 @@ function overview(): string {
     'Commands:',
     ...commands.map((c) => `  ${c.name.padEnd(width)}  ${c.summary}`),
     '',
-    'Run `stereogate <command> --help` for the arguments of one command.',
+    'Run `stereogate <command> --help` for the arguments of one command; `stereogate --version` for the version.',
   ].join('\n');
 }
 
 export async function run(argv: string[], io: Io = nodeIo): Promise<number> {
   const [name, ...rest] = argv;
+  if (name === '--version' || name === '-V') {
+    io.out(`stereogate ${VERSION}`);
+    return EXIT_OK;
+  }
   if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
     (name === undefined ? io.err : io.out)(overview());
     return name === undefined ? EXIT_USAGE : EXIT_OK;
@@ -50,7 +56,11 @@ export async function run(argv: string[], io: Io = nodeIo): Promise<number> {
     return await command.run(rest, io);
   } catch (e) {
     if (e instanceof UsageError) {
-      io.err(`stereogate ${command.name}: ${e.message}\n\n${command.usage}`);
+      io.err(`stereogate ${command.name}: ${e.message}\n\n${e.usage ?? command.usage}`);
+      return EXIT_USAGE;
+    }
+    if (e instanceof InputError) {
+      io.err(`stereogate ${command.name}: ${e.message}`);
       return EXIT_USAGE;
     }
     io.err(crashMessage(`stereogate ${command.name}`, e));

@@ -12,6 +12,24 @@ export type ChecklistItem =
 
 const ORDER: Record<Finding['severity'], number> = { error: 0, warning: 1, note: 2 };
 
+/** Worst open severity of a record: 0 error, 1 warning, 2 note, 3 none open. */
+export function worstOpen(r: RecordResult): number {
+  let w = 3;
+  for (const f of r.findings) if (!f.waived) w = Math.min(w, ORDER[f.severity]);
+  return w;
+}
+
+/**
+ * Records in reading order for a person: records with open errors first, then warnings, then notes, then the
+ * rest; the audit's order within each group (a stable sort).
+ */
+export function byNeedForAction<T extends RecordResult>(records: readonly T[]): T[] {
+  return records
+    .map((r, i) => ({ r, i, w: worstOpen(r) }))
+    .sort((a, b) => a.w - b.w || a.i - b.i)
+    .map((x) => x.r);
+}
+
 export function checklistItems(r: RecordResult): ChecklistItem[] {
   const open = r.findings.filter((f) => !f.waived).sort((a, b) => ORDER[a.severity] - ORDER[b.severity]);
   const items: ChecklistItem[] = open.map((finding) => ({ kind: 'open', finding }));

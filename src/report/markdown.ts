@@ -1,11 +1,22 @@
 /**
- * The Markdown checklist the action posts on a pull request: a hidden marker, the summary, per record a heading
- * and ticked/crossed items with declared vs computed evidence, waived findings as accepted with who and why, and
- * the caution once. Everything taken from records is escaped (escape.ts).
+ * The Markdown checklist the action posts on a pull request: a hidden marker, the summary, then the records with
+ * open findings (errors first), each with declared vs computed evidence and its findings — errors and warnings
+ * as task items to work through, notes and waived findings (with who and why) as plain items — and its passed
+ * checks collapsed in one line; then one collapsed line per record without open findings; the caution once.
+ * Passed checks are never task items: anyone with write access could tick them and the next push would undo it.
+ * Everything taken from records is escaped (escape.ts).
  */
 import type { AuditResult, RecordResult } from '../audit/types.js';
-import { checklistItems, computedText, declaredText, openCounts, plural } from './checklist.js';
-import { escapeMarkdown as esc, safeUrl } from './escape.js';
+import {
+  byNeedForAction,
+  checklistItems,
+  computedText,
+  declaredText,
+  openCounts,
+  plural,
+  type ChecklistItem,
+} from './checklist.js';
+import { escapeHtmlText, escapeMarkdown as esc, safeUrl } from './escape.js';
 
 export const CHECKLIST_MARKER = '<!-- stereogate-checklist -->';
 export const DEFAULT_MAX_CHARS = 60_000;
@@ -40,33 +51,85 @@ function lineRef(line: number | null): string {
   return line === null ? '' : ` (line ${line})`;
 }
 
-function recordBlock(r: RecordResult): string {
-  const out: string[] = [heading(r), ''];
+function evidenceLines(r: RecordResult): string[] {
   const declared = declaredText(r);
   const computed = computedText(r.computed);
-  if (declared || computed) {
-    out.push(`Declared: ${declared ? esc(declared) : '*nothing readable*'}  `);
-    out.push(`Computed: ${computed ? esc(computed) : '*the structure could not be read*'}`);
-    out.push('');
+  if (!declared && !computed) return [];
+  return [
+    `Declared: ${declared ? esc(declared) : '*nothing readable*'}  `,
+    `Computed: ${computed ? esc(computed) : '*the structure could not be read*'}`,
+    '',
+  ];
+}
+
+/** One checklist line per item; only findings to act on (errors, warnings) are task items. */
+function itemLine(item: ChecklistItem): string {
+  if (item.kind === 'open') {
+    const f = item.finding;
+    const text = `${SEVERITY_MARK[f.severity]} **${f.severity}** \`${f.check}\`${lineRef(f.line)}: ${esc(f.message)}`;
+    return f.severity === 'note' ? `- ${text}` : `- [ ] ${text}`;
   }
-  for (const item of checklistItems(r)) {
-    if (item.kind === 'open') {
-      const f = item.finding;
-      out.push(
-        `- [ ] ${SEVERITY_MARK[f.severity]} **${f.severity}** \`${f.check}\`${lineRef(f.line)}: ${esc(f.message)}`,
-      );
-    } else if (item.kind === 'accepted') {
-      const f = item.finding;
-      out.push(
-        `- [x] \`${f.check}\` accepted by waiver${lineRef(f.line)}: ${esc(f.message)}  \n` +
-          `  Reason: ${esc(item.reason)} · approved by ${esc(item.approvedBy)}`,
-      );
-    } else {
-      out.push(`- [x] \`${item.check}\`${item.evidence ? `: ${esc(item.evidence)}` : ''}`);
-    }
+  if (item.kind === 'accepted') {
+    const f = item.finding;
+    return (
+      `- ☑️ \`${f.check}\` accepted by waiver${lineRef(f.line)}: ${esc(f.message)}  \n` +
+      `  Reason: ${esc(item.reason)} · approved by ${esc(item.approvedBy)}`
+    );
   }
-  if (r.findings.length === 0 && r.passed.length === 0) out.push('- [x] no check applied to this record');
+  return `- \`${item.check}\`${item.evidence ? `: ${esc(item.evidence)}` : ''}`;
+}
+
+/** Passed checks as one collapsed line that opens to the list (never task items: nothing to tick). */
+function passedBlock(summary: string, items: ChecklistItem[]): string[] {
+  return [`<details><summary>${summary}</summary>`, '', ...items.map(itemLine), '', '</details>'];
+}
+
+function passedSummary(r: RecordResult, accepted: number): string {
+  const parts = [
+    r.passed.length === 0 ? 'no check applied' : `✅ ${plural(r.passed.length, 'check')} passed`,
+  ];
+  if (accepted > 0) parts.push(`${accepted} accepted by waiver`);
+  return parts.join(' · ');
+}
+
+/** A record with open findings: heading, evidence, the findings, passed checks collapsed. */
+function recordBlock(r: RecordResult): string {
+  const items = checklistItems(r);
+  const out: string[] = [heading(r), '', ...evidenceLines(r)];
+  out.push(...items.filter((i) => i.kind !== 'passed').map(itemLine));
+  const passed = items.filter((i) => i.kind === 'passed');
+  if (passed.length > 0) out.push('', ...passedBlock(`✅ ${plural(passed.length, 'check')} passed`, passed));
   return out.join('\n');
+}
+
+/** A record without open findings: one collapsed line that opens to its evidence, waivers and passed checks. */
+function cleanLine(r: RecordResult): string {
+  const items = checklistItems(r);
+  const accepted = items.filter((i) => i.kind === 'accepted').length;
+  const summary = `<b>${escapeHtmlText(r.id ?? '(no id)')}</b> · ${escapeHtmlText(r.file)} — ${passedSummary(r, accepted)}`;
+  return [
+    `<details><summary>${summary}</summary>`,
+    '',
+    ...evidenceLines(r),
+    ...items.map(itemLine),
+    '',
+    '</details>',
+  ].join('\n');
+}
+
+function recordsPart(result: AuditResult): string[] {
+  const flagged = byNeedForAction(result.records.filter((r) => hasOpen(r)));
+  const clean = result.records.filter((r) => !hasOpen(r));
+  const out = flagged.flatMap((r) => [recordBlock(r), '']);
+  if (clean.length > 0) {
+    out.push(`### ${plural(clean.length, 'record')} without open findings`, '');
+    out.push(...clean.flatMap((r) => [cleanLine(r), '']));
+  }
+  return out;
+}
+
+function hasOpen(r: RecordResult): boolean {
+  return r.findings.some((f) => !f.waived);
 }
 
 function cautionBlock(result: AuditResult): string {
@@ -83,12 +146,7 @@ function head(result: AuditResult): string[] {
 
 export function renderMarkdown(result: AuditResult, options: MarkdownOptions = {}): string {
   const maxChars = options.maxChars ?? DEFAULT_MAX_CHARS;
-  const full = [
-    ...head(result),
-    ...result.records.flatMap((r) => [recordBlock(r), '']),
-    cautionBlock(result),
-    '',
-  ].join('\n');
+  const full = [...head(result), ...recordsPart(result), cautionBlock(result), ''].join('\n');
   if (full.length <= maxChars) return full;
   return summarised(result, maxChars, options.detailsUrl);
 }
@@ -102,7 +160,7 @@ function summarised(result: AuditResult, maxChars: number, detailsUrl: string | 
   const top = [...head(result), pointer, ''].join('\n');
   const bottom = ['', cautionBlock(result), ''].join('\n');
   const lines: string[] = [];
-  const flagged = result.records.filter((r) => r.findings.some((f) => !f.waived));
+  const flagged = byNeedForAction(result.records.filter((r) => hasOpen(r)));
   let used = top.length + bottom.length;
   let shown = 0;
   for (const r of flagged) {
@@ -115,7 +173,8 @@ function summarised(result: AuditResult, maxChars: number, detailsUrl: string | 
       .filter(Boolean)
       .join(', ');
     const checks = [...new Set(r.findings.filter((f) => !f.waived).map((f) => `\`${f.check}\``))].join(', ');
-    const line = `- [ ] **${esc(r.id ?? '(no id)')}** · ${esc(r.file)}: ${counts} (${checks})`;
+    const task = c.errors + c.warnings > 0 ? '- [ ] ' : '- ';
+    const line = `${task}**${esc(r.id ?? '(no id)')}** · ${esc(r.file)}: ${counts} (${checks})`;
     const reserve = 80; // room for the "more records" line
     if (used + line.length + 1 + reserve > maxChars) break;
     lines.push(line);
@@ -125,7 +184,7 @@ function summarised(result: AuditResult, maxChars: number, detailsUrl: string | 
   if (shown < flagged.length)
     lines.push(`- … and ${plural(flagged.length - shown, 'more record')} with findings`);
   const clean = result.records.length - flagged.length;
-  if (clean > 0) lines.push(`- [x] ${plural(clean, 'record')} without open findings`);
+  if (clean > 0) lines.push(`- ✅ ${plural(clean, 'record')} without open findings`);
   const text = `${top}${lines.join('\n')}\n${bottom}`;
   return text.length <= maxChars ? text : `${top}${bottom}`.slice(0, maxChars);
 }

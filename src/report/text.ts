@@ -1,9 +1,23 @@
-/** Terminal report: one compact block per record with ✓/✗ items; colour only when asked for. */
-import type { AuditResult, RecordResult } from '../audit/types.js';
-import { checklistItems, computedText, declaredText, plural } from './checklist.js';
+/**
+ * Terminal report, leading with what needs action: the records with open findings first (errors first), each
+ * finding with its line and the passed checks in one line; then one line per record without open findings; the
+ * summary and the caution. `verbose` prints every record in full with each passed check's evidence. Colour only
+ * when asked for.
+ */
+import type { AuditResult, Finding, RecordResult } from '../audit/types.js';
+import {
+  byNeedForAction,
+  checklistItems,
+  computedText,
+  declaredText,
+  plural,
+  worstOpen,
+} from './checklist.js';
 
 export interface TextOptions {
   color?: boolean;
+  /** Every record in full, every passed check with its evidence (default: what needs action first, rest short). */
+  verbose?: boolean;
 }
 
 const CODES = { red: 31, green: 32, yellow: 33, blue: 34, magenta: 35, cyan: 36, dim: 2, bold: 1 } as const;
@@ -25,34 +39,52 @@ export function safeText(s: string): string {
     .replace(/\n/g, ' ');
 }
 
-function block(r: RecordResult, paint: Paint): string[] {
+function findingLine(f: Finding, paint: Paint): string {
+  const colour = f.severity === 'error' ? 'red' : f.severity === 'warning' ? 'yellow' : 'cyan';
+  const mark = f.severity === 'note' ? 'i' : '✗';
+  const at = f.line !== null ? paint('dim', ` line ${f.line}`) : '';
+  return `  ${paint(colour, `${mark} ${f.severity.padEnd(7)}`)} ${f.check}${at}: ${safeText(f.message)}`;
+}
+
+/** A record with open findings (or any record with --verbose): evidence, findings, waivers, passed checks. */
+function block(r: RecordResult, paint: Paint, verbose: boolean): string[] {
   const lines: string[] = [];
   lines.push(`${paint('bold', safeText(r.id ?? '(no id)'))}  ${paint('dim', safeText(r.file))}`);
   const declared = declaredText(r);
   const computed = computedText(r.computed);
   if (declared) lines.push(`  ${paint('dim', 'declared')}  ${safeText(declared)}`);
   if (computed) lines.push(`  ${paint('dim', 'computed')}  ${safeText(computed)}`);
-  for (const item of checklistItems(r)) {
-    if (item.kind === 'open') {
+  const items = checklistItems(r);
+  for (const item of items) {
+    if (item.kind === 'open') lines.push(findingLine(item.finding, paint));
+    else if (item.kind === 'accepted') {
       const f = item.finding;
-      const colour = f.severity === 'error' ? 'red' : f.severity === 'warning' ? 'yellow' : 'cyan';
-      const mark = f.severity === 'note' ? 'i' : '✗';
       const at = f.line !== null ? paint('dim', ` line ${f.line}`) : '';
       lines.push(
-        `  ${paint(colour, `${mark} ${f.severity.padEnd(7)}`)} ${f.check}${at}: ${safeText(f.message)}`,
-      );
-    } else if (item.kind === 'accepted') {
-      const f = item.finding;
-      lines.push(
-        `  ${paint('magenta', '~ accepted')} ${f.check}: ${safeText(f.message)} ` +
+        `  ${paint('magenta', '~ accepted')} ${f.check}${at}: ${safeText(f.message)} ` +
           paint('dim', `(waived: ${safeText(item.reason)}; approved by ${safeText(item.approvedBy)})`),
       );
-    } else {
+    } else if (verbose) {
       const ev = item.evidence ? `: ${paint('dim', safeText(item.evidence))}` : '';
       lines.push(`  ${paint('green', '✓')} ${item.check}${ev}`);
     }
   }
+  if (!verbose && r.passed.length > 0) {
+    const names = r.passed.map((p) => p.check).join(', ');
+    lines.push(
+      `  ${paint('green', '✓')} ${plural(r.passed.length, 'check')} passed ${paint('dim', `(${names})`)}`,
+    );
+  }
+  if (r.passed.length === 0 && r.findings.length === 0) lines.push(`  ${paint('dim', 'no check applied')}`);
   return lines;
+}
+
+/** A record without open findings, in one line: id, what passed, what was accepted by waiver, file. */
+function cleanLine(r: RecordResult, paint: Paint): string {
+  const waived = r.findings.filter((f) => f.waived).length;
+  const parts = [r.passed.length > 0 ? `${plural(r.passed.length, 'check')} passed` : 'no check applied'];
+  if (waived > 0) parts.push(`${waived} accepted by waiver`);
+  return `${paint('green', '✓')} ${paint('bold', safeText(r.id ?? '(no id)'))}  ${parts.join(', ')}  ${paint('dim', safeText(r.file))}`;
 }
 
 export function summaryLine(result: AuditResult): string {
@@ -67,9 +99,12 @@ export function renderText(result: AuditResult, options: TextOptions = {}): stri
     ? (style, s) => `\u001b[${CODES[style]}m${s}\u001b[0m`
     : (_style, s) => s;
   const out: string[] = [];
-  for (const r of result.records) {
-    out.push(...block(r, paint), '');
-  }
+  const verbose = options.verbose === true;
+  const open = byNeedForAction(result.records.filter((r) => worstOpen(r) < 3));
+  for (const r of open) out.push(...block(r, paint, verbose), '');
+  const clean = result.records.filter((r) => worstOpen(r) === 3);
+  if (verbose) for (const r of clean) out.push(...block(r, paint, true), '');
+  else if (clean.length > 0) out.push(...clean.map((r) => cleanLine(r, paint)), '');
   if (result.unmatched?.length) {
     out.push(paint('yellow', `No record matched: ${result.unmatched.map(safeText).join(', ')}`), '');
   }

@@ -123,8 +123,8 @@ describe('review', () => {
     expect(runner.summaries).toHaveLength(2);
     expect(runner.summaries[0]).toContain('<!-- stereogate-checklist -->');
     expect(runner.summaries[1]).toContain('Checklist comment created');
-    expect(runner.summaries[1]).toContain('1 inline comment\\(s\\) posted');
-    expect(runner.summaries[1]).toContain('1 finding\\(s\\) on lines outside the diff');
+    expect(runner.summaries[1]).toContain('1 inline comment(s) posted');
+    expect(runner.summaries[1]).toContain('1 finding(s) on lines outside the diff');
     expect(runner.warnings).toEqual([]);
   });
 
@@ -148,7 +148,7 @@ describe('review', () => {
     );
     expect(outcome.failure).toBeNull();
     expect(runner.warnings.join('\n')).toMatch(/read-only token/);
-    expect(runner.summaries.join('')).toMatch(/read\\-only token/);
+    expect(runner.summaries.join('')).toMatch(/read-only token/);
     expect(existsSync(sarifFile)).toBe(true);
     expect(runner.annotations).toHaveLength(2);
   });
@@ -190,7 +190,7 @@ describe('review', () => {
     const outcome = await review(settings(), engine, testClient().client, runner);
     expect(engine.calls[0]!.paths).toEqual([]);
     expect(outcome.failure).toBeNull();
-    expect(runner.summaries.join('')).toMatch(/no earlier checklist comment\\: none posted/);
+    expect(runner.summaries.join('')).toMatch(/no earlier checklist comment: none posted/);
   });
 
   it('posts nothing and asks no API outside a pull request', async () => {

@@ -69,7 +69,7 @@ suite('stereogate describe', () => {
     const b = JSON.parse((await cli(['describe', '-', '--format', 'json'], 'C[C@H](N)C(=O)O')).out);
     expect(b.stereocenters[0].label).toBe('S');
   });
-  it('usage errors exit 2 with a message; unreadable structures exit 1', async () => {
+  it('usage errors and unreadable structures exit 2 with a message (1 is kept for findings)', async () => {
     expect((await cli(['describe'])).code).toBe(2);
     const bad = await cli(['describe', 'CCO', '--format', 'xml']);
     expect(bad.code).toBe(2);
@@ -77,8 +77,9 @@ suite('stereogate describe', () => {
     expect((await cli(['describe', 'CCO', '--bogus'])).code).toBe(2);
     expect((await cli(['nosuch'])).code).toBe(2);
     const unread = await cli(['describe', 'C1CC']);
-    expect(unread.code).toBe(1);
+    expect(unread.code).toBe(2);
     expect(unread.err).toMatch(/character/);
+    expect(unread.err).not.toMatch(/Usage:/); // one line, not the usage
   });
   it('--help lists the commands', async () => {
     const r = await cli(['--help']);

@@ -34,9 +34,10 @@ suite('missing file arguments', () => {
     const r = await cli(['describe', 'C/C=C/C']);
     expect(r.code).toBe(0);
   });
-  it('invalid SMILES without a slash stays a SMILES error, exit 1', async () => {
+  it('invalid SMILES without a slash stays a SMILES error, exit 2', async () => {
     const r = await cli(['describe', 'C(C']);
-    expect(r.code).toBe(1);
+    expect(r.code).toBe(2);
+    expect(r.err).not.toMatch(/file not found/);
   });
 });
 

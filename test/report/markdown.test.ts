@@ -1,58 +1,16 @@
 /**
- * Markdown checklist. What GitHub renders as syntax follows CommonMark 0.31 (§2.4: any ASCII punctuation may be
- * backslash-escaped) and the GitHub Flavored Markdown spec (autolinks extension, task list items); @mentions are
- * GitHub behaviour (from memory: a mention needs @ directly followed by the name, so a joiner breaks it).
+ * Markdown checklist, read as rendered: GitHub Flavored Markdown (task list items, autolink literals) rendered by
+ * micromark + micromark-extension-gfm (support/gfm.ts); `<details>` is a CommonMark 0.31 HTML block (§4.6, type
+ * 6), so the list after its blank line is Markdown again. @mentions are GitHub behaviour (from memory: a mention
+ * needs @ directly followed by the name, so a joiner breaks it). Escaping itself: escape.test.ts.
  */
 import { describe, expect, it } from 'vitest';
 import { CHECKLIST_MARKER, renderMarkdown } from '../../src/report/markdown.js';
-import { escapeMarkdown } from '../../src/report/escape.js';
+import { renderGfm } from './support/gfm.js';
 import { sampleResult } from './sample-result.js';
 import type { AuditResult } from '../../src/audit/types.js';
 
 const ZWJ = '\u200D';
-
-describe('escapeMarkdown', () => {
-  it('breaks @mentions with a zero-width joiner', () => {
-    expect(escapeMarkdown('ask @team')).toBe(`ask @${ZWJ}team`);
-    expect(escapeMarkdown('a@b.org')).not.toMatch(/@[a-z]/);
-  });
-  it('leaves no raw HTML', () => {
-    const out = escapeMarkdown('<img src=x onerror=alert(1)><script>x</script>');
-    expect(out).not.toMatch(/</);
-    expect(out).toContain('&lt;img');
-  });
-  it('leaves no link or image syntax', () => {
-    const out = escapeMarkdown('[x](javascript:alert(1)) ![i](http://e/i.png)');
-    expect(out).not.toMatch(/(^|[^\\])\[/);
-    expect(out).not.toMatch(/(^|[^\\])\]\(/);
-    expect(out).not.toMatch(/(^|[^\\])!\[/);
-  });
-  it('breaks bare-URL autolinks', () => {
-    const out = escapeMarkdown('see https://evil.example and www.evil.example');
-    expect(out).not.toContain('https:');
-    expect(out).not.toContain('https\\:');
-    expect(out).not.toMatch(/www\\\./);
-  });
-  it('keeps everything on one line', () => {
-    expect(escapeMarkdown('a\n# heading\r\n- item')).not.toMatch(/[\r\n]/);
-  });
-  it('shows a stereo SMILES as a code span, exactly copyable (no joiner after its @)', () => {
-    // OpenSMILES: '@'/'@@' inside a bracket atom is tetrahedral stereo, so these tokens are SMILES, not mentions
-    expect(escapeMarkdown('mirror image of LX-3 (C[C@H](O)CC), see')).toBe(
-      'mirror image of LX\\-3 \\(`C[C@H](O)CC`\\), see',
-    );
-    expect(escapeMarkdown('drawn as N[C@@H](C)C(=O)O.')).toBe('drawn as `N[C@@H](C)C(=O)O`\\.');
-    // link syntax with an @ in its text is shown literally: a code span is never a link (CommonMark §6.1)
-    expect(escapeMarkdown('a [x@evil](javascript:alert(1)) b')).toBe('a `[x@evil](javascript:alert(1))` b');
-    expect(escapeMarkdown('<b>[C@H]</b>')).toBe('&lt;b&gt;`[C@H]`&lt;/b&gt;');
-    expect(escapeMarkdown('mail a@b.org, ask @team')).toBe(`mail a@${ZWJ}b\\.org, ask @${ZWJ}team`);
-  });
-  it('escapes emphasis, code and table syntax', () => {
-    expect(escapeMarkdown('**b** `c` |t| ~~s~~ _i_')).toBe(
-      '\\*\\*b\\*\\* \\`c\\` \\|t\\| \\~\\~s\\~\\~ \\_i\\_',
-    );
-  });
-});
 
 describe('renderMarkdown', () => {
   const md = renderMarkdown(sampleResult());
@@ -63,35 +21,66 @@ describe('renderMarkdown', () => {
     expect(md).toContain('responsible chemist');
   });
 
-  it('has a heading per record with id and file, escaped', () => {
-    expect(md).toContain('### LX\\-00001 · compounds/LX\\-00001\\.yml');
-    expect(md).toContain(`### @${ZWJ}owner &lt;script&gt; · compounds/odd name \\[1\\]\\.yml`);
+  it('has a heading per record with open findings, with id and file, escaped', () => {
+    expect(md).toContain('### LX-00001 · compounds/LX-00001.yml');
+    expect(renderGfm(md)).toContain('<h3>LX-00001 · compounds/LX-00001.yml</h3>');
   });
 
-  it('crossed items for open findings with line, ticked items for passed checks', () => {
+  it('makes only findings to act on task items; notes, waivers and passed checks are not', () => {
     expect(md).toMatch(/^- \[ \] ❌ \*\*error\*\* `form-check` \(line 5\): Declared /m);
-    expect(md).toMatch(/^- \[ \] ℹ️ \*\*note\*\* `ratio-check`: A 1\\:1 mixture/m);
-    expect(md).toMatch(/^- \[x\] `structure-check`: structure read \\\(5 atoms\\\)$/m);
+    expect(md).toMatch(/^- ℹ️ \*\*note\*\* `ratio-check`: A 1:1 mixture; was it measured\?$/m);
+    const html = renderGfm(md);
+    // one checkbox: the error; none for the note, the waived finding or the passed checks
+    expect(html.match(/<input type="checkbox"/g)).toHaveLength(1);
+    expect(html).not.toContain('checked');
+  });
+
+  it('puts passed checks in one collapsed line that opens to the list', () => {
+    const html = renderGfm(md);
+    expect(html).toContain('<details><summary>✅ 1 check passed</summary>');
+    expect(html).toMatch(/<li><code>structure-check<\/code>: structure read \(5 atoms\)<\/li>/);
+    // a record without open findings is one collapsed line: id, file (HTML-escaped, Markdown left as is), count
+    expect(html).toContain(
+      `<summary><b>@${ZWJ}owner &lt;script&gt;</b> · compounds/odd name [1].yml — ✅ 1 check passed</summary>`,
+    );
+    expect(html).toContain('<h3>1 record without open findings</h3>');
+  });
+
+  it('lists records with open findings first, errors before warnings before notes', () => {
+    const r = sampleResult();
+    const clean = r.records[1]!;
+    const noteOnly = { ...r.records[0]!, id: 'LX-00003', findings: [r.records[0]!.findings[1]!] };
+    r.records = [clean, noteOnly, r.records[0]!];
+    const order = [...renderMarkdown(r).matchAll(/^### (\S+)|<summary><b>([^<]+)/gm)].map(
+      (m) => m[1] ?? m[2],
+    );
+    expect(order).toEqual(['LX-00001', 'LX-00003', '1', `@${ZWJ}owner &lt;script&gt;`]);
   });
 
   it('shows a waived finding as accepted with who and why', () => {
-    expect(md).toMatch(
-      /^- \[x\] `rotation-check` accepted by waiver \(line 9\): Rotation sign disagrees\\\./m,
-    );
+    expect(md).toMatch(/^- ☑️ `rotation-check` accepted by waiver \(line 9\): Rotation sign disagrees\./m);
     expect(md).toContain(
-      `Reason: literature value @${ZWJ}chem\\-leads &lt;b&gt;x&lt;/b&gt; · approved by Dr\\. R\\. Vale`,
+      `Reason: literature value @${ZWJ}chem-leads &lt;b&gt;x&lt;/b&gt; · approved by Dr. R. Vale`,
     );
   });
 
   it('shows declared against computed evidence', () => {
-    expect(md).toContain('Declared: meso, \\(2R,3S\\)');
+    expect(md).toContain('Declared: meso, (2R,3S)');
     expect(md).toMatch(/Computed: chiral; no stereo units/);
+  });
+
+  it('renders record text as the literal text: no link, image, tag or emphasis from records', () => {
+    const html = renderGfm(md);
+    expect(html).not.toMatch(/<(a|img|script)[ >]|<strong>bold|<em>i<\/em>/);
+    expect(html).toContain('[x](javascript:alert(1))');
+    expect(html).toContain('**bold** `code`');
   });
 
   it('lets no record text through unescaped: no raw @mention, tag, link or image', () => {
     const body = md.replace(CHECKLIST_MARKER, '');
     expect(body).not.toMatch(/@[A-Za-z]/);
-    expect(body).not.toMatch(/<[a-z]/i);
+    // our own tags only: the collapsed lines
+    expect(body.replace(/<\/?(details|summary|b)>/g, '')).not.toMatch(/<[a-z]/i);
     expect(body).not.toMatch(/(^|[^\\])\]\(/);
     expect(body).not.toMatch(/!\[/);
   });
@@ -111,6 +100,7 @@ describe('renderMarkdown', () => {
     expect(short.startsWith(CHECKLIST_MARKER)).toBe(true);
     expect(short).toContain('[job summary](https://github.com/o/r/actions/runs/1)');
     expect(short).toContain('more records with findings');
+    expect(short).not.toContain('- [x]');
     expect(short.match(/\[!CAUTION\]/g)).toHaveLength(1);
     const tiny = renderMarkdown(big, { maxChars: 2000, detailsUrl: 'javascript:alert(1)' });
     expect(tiny.length).toBeLessThanOrEqual(2000);

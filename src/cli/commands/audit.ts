@@ -18,14 +18,15 @@ import { renderText, shouldColor } from '../../report/text.js';
 import { parseCommandArgs } from '../args.js';
 import { isBulkInput } from '../../bulk/run.js';
 import { bulkAudit } from './bulk-audit.js';
-import { EXIT_CRASH, EXIT_OK, UsageError, type Command } from '../command.js';
+import { EXIT_CRASH, EXIT_FINDINGS, EXIT_OK, InputError, UsageError, type Command } from '../command.js';
 import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
+import { checkWritable, writeFailure } from '../output-path.js';
 
-export const EXIT_FINDINGS = 1;
+export { EXIT_FINDINGS };
 
 const USAGE = [
   'Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]',
-  '                        [--output FILE] [--fail-on error|warning|never]',
+  '                        [--output FILE] [--fail-on error|warning|never] [--verbose]',
   '',
   '  paths…               record files, folders or molfiles to audit (default: every record); the whole',
   '                       registry is still loaded for the cross-record checks',
@@ -33,11 +34,14 @@ const USAGE = [
   '  --config FILE        config file to use instead of stereogate.config.yml at the root',
   '  --format FORMAT      text (default), json, markdown (the pull-request checklist) or sarif (2.1.0)',
   '  --output FILE        write the report to FILE instead of standard output',
+  '  --verbose, -v        text format: every record in full and each passed check with its evidence',
+  '                       (default: records with findings first, one line per record without)',
   '  --fail-on LEVEL      exit 1 when a finding not accepted by a waiver is at least this severe:',
   '                       error (default), warning, or never',
   '',
-  'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error,',
-  '            3 internal error (the report is still written; records it hit carry an internal-error finding).',
+  'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error or a report',
+  'file that cannot be written, 3 internal error (the report is still written; records it hit carry an',
+  'internal-error finding).',
   '',
   'Legacy exports (.sdf, .csv, .tsv) are audited in bulk; `stereogate merge --help` lists the bulk options.',
 ].join('\n');
@@ -92,6 +96,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           format: { type: 'string', choices: ['text', 'json', 'markdown', 'sarif'], default: 'text' },
           output: { type: 'string' },
           'fail-on': { type: 'string', choices: ['error', 'warning', 'never'], default: 'error' },
+          verbose: { type: 'boolean', short: 'v' },
         },
         { min: 0, max: Infinity, names: 'paths' },
       );
@@ -100,6 +105,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       const failOn = values['fail-on'] as 'error' | 'warning' | 'never';
       const output = values.output as string | undefined;
       if (output === '') throw new UsageError('--output needs a file name');
+      if (output !== undefined) checkWritable(output, 'the report');
       const paths = toRootPaths(positionals, root);
       let result: AuditResult;
       try {
@@ -127,12 +133,15 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
             ? renderMarkdown(result)
             : format === 'sarif'
               ? renderSarif(result, checks)
-              : renderText(result, { color: output === undefined && shouldColor(process.stdout) });
+              : renderText(result, {
+                  color: output === undefined && shouldColor(process.stdout),
+                  verbose: values.verbose === true,
+                });
       if (output !== undefined) {
         try {
           writeFileSync(output, report);
         } catch (e) {
-          throw new UsageError(`cannot write ${output}: ${(e as NodeJS.ErrnoException).code ?? String(e)}`);
+          throw new InputError(writeFailure(output, e));
         }
       } else {
         io.out(report);

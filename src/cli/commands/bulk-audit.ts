@@ -24,6 +24,7 @@ import { sarifWriter } from '../../bulk/sarif-writer.js';
 import { HtmlCollector } from '../../bulk/html-collector.js';
 import { EXIT_CRASH, UsageError, type Io } from '../command.js';
 import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
+import { checkWritable } from '../output-path.js';
 import { CAUTION } from '../../audit/caution.js';
 import { VERSION } from '../../audit/version.js';
 
@@ -141,6 +142,10 @@ function writersFor(
   checks: Parameters<typeof sarifWriter>[1],
 ): { writers: RecordWriter[]; html: HtmlCollector | null } {
   const writers: RecordWriter[] = [];
+  for (const k of ['jsonl', 'json', 'csv', 'sarif', 'html'] as const) {
+    const path = values[k];
+    if (typeof path === 'string') checkWritable(path, `the --${k} output`);
+  }
   if (typeof values.jsonl === 'string') writers.push(jsonlWriter(values.jsonl));
   if (typeof values.json === 'string') writers.push(jsonWriter(values.json));
   if (typeof values.csv === 'string') writers.push(csvWriter(values.csv));
@@ -151,12 +156,22 @@ function writersFor(
   return { writers, html };
 }
 
-export function summaryTable(t: BulkTrailer, seconds: number | null): string {
+/** Run time: the audit's rate on its own, and the time the reports took after it (drawing, writing). */
+function timing(records: number, time: { seconds: number; auditSeconds: number } | null): string {
+  if (!time) return '';
+  const rate = (records / Math.max(time.auditSeconds, 0.001)).toFixed(0);
+  const reports = Math.max(0, time.seconds - time.auditSeconds);
+  return (
+    ` in ${time.seconds.toFixed(1)} s (audit ${time.auditSeconds.toFixed(1)} s, ${rate} records/s` +
+    `${reports >= 0.05 ? `; reports ${reports.toFixed(1)} s` : ''})`
+  );
+}
+
+export function summaryTable(t: BulkTrailer, time: { seconds: number; auditSeconds: number } | null): string {
   const lines: string[] = [];
   const s = t.summary;
   lines.push(
-    `stereogate bulk audit: ${s.records} records${seconds !== null ? ` in ${seconds.toFixed(1)} s (${(s.records / Math.max(seconds, 0.001)).toFixed(0)} records/s)` : ''}` +
-      `${t.shard ? `, shard ${t.shard}` : ''}`,
+    `stereogate bulk audit: ${s.records} records${timing(s.records, time)}${t.shard ? `, shard ${t.shard}` : ''}`,
   );
   lines.push(
     `  ${s.errors} errors, ${s.warnings} warnings, ${s.notes} notes, ${s.waived} accepted by waiver`,
@@ -204,7 +219,17 @@ function checkFailOn(v: unknown): string {
   return v;
 }
 
+/** The bulk audit; its usage errors show the bulk options (not the record audit's). */
 export async function bulkAudit(args: string[], io: Io): Promise<number> {
+  try {
+    return await bulkAuditRun(args, io);
+  } catch (e) {
+    if (e instanceof UsageError && e.usage === undefined) throw new UsageError(e.message, BULK_USAGE);
+    throw e;
+  }
+}
+
+async function bulkAuditRun(args: string[], io: Io): Promise<number> {
   const { values, positionals } = parse(args, {
     'map-id': { type: 'string' },
     'map-structure': { type: 'string' },
@@ -275,7 +300,7 @@ export async function bulkAudit(args: string[], io: Io): Promise<number> {
     writers,
   });
   if (html) io.err(`stereogate: HTML report written to ${html.path} (${html.flaggedCount} flagged records)`);
-  io.out(summaryTable(run.trailer, run.seconds));
+  io.out(summaryTable(run.trailer, run));
   return exitCode(run.trailer, failOn);
 }
 

@@ -1,7 +1,7 @@
 /** `stereogate compare <A> <B> [--format json|text]` */
 import { relate } from '../../chem/index.js';
 import { parseCommandArgs } from '../args.js';
-import { EXIT_BAD_INPUT, EXIT_OK, EXIT_USAGE, type Command } from '../command.js';
+import { EXIT_OK, EXIT_USAGE, type Command } from '../command.js';
 import { loadStructure } from '../input.js';
 import { compareText } from '../format-compare.js';
 
@@ -18,6 +18,8 @@ export const compareCommand: Command = {
     'Relations: identical, enantiomers, diastereomers (epimers flagged), constitutional-isomers,',
     'different-compounds, same-constitution (undefined stereo leaves it open). Salts: the parent components',
     'are related; other components are listed apart.',
+    '',
+    'Exit codes: 0 compared, 2 usage error or a structure that cannot be read.',
   ].join('\n'),
   run(args, io) {
     const { values, positionals } = parseCommandArgs(
@@ -33,10 +35,10 @@ export const compareCommand: Command = {
     ] as const) {
       if (!r.ok) {
         io.err(`stereogate compare: structure ${name}: ${r.message}`);
-        return r.missingFile ? EXIT_USAGE : EXIT_BAD_INPUT;
+        return EXIT_USAGE;
       }
     }
-    if (!a.ok || !b.ok) return EXIT_BAD_INPUT;
+    if (!a.ok || !b.ok) return EXIT_USAGE;
     const facts = relate(a.structure, b.structure);
     if (values.format === 'json') io.out(JSON.stringify(facts, null, 2));
     else io.out(compareText(facts));

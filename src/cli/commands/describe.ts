@@ -1,7 +1,7 @@
 /** `stereogate describe <SMILES|file> [--format json|text] [--list] [--max N]` */
 import { describe } from '../../chem/index.js';
 import { parseCommandArgs } from '../args.js';
-import { EXIT_BAD_INPUT, EXIT_OK, EXIT_USAGE, UsageError, type Command } from '../command.js';
+import { EXIT_OK, EXIT_USAGE, UsageError, type Command } from '../command.js';
 import { loadStructure } from '../input.js';
 import { describeText } from '../format-describe.js';
 
@@ -17,6 +17,8 @@ export const describeCommand: Command = {
     '  --max N              list at most N stereoisomers (default 64)',
     '',
     'Atoms are numbered 1, 2, ... in input order; explicit hydrogen atoms count, [C@H]-style hydrogens do not.',
+    '',
+    'Exit codes: 0 described, 2 usage error or a structure that cannot be read.',
   ].join('\n'),
   run(args, io) {
     const { values, positionals } = parseCommandArgs(
@@ -33,7 +35,7 @@ export const describeCommand: Command = {
     const loaded = loadStructure(positionals[0], io);
     if (!loaded.ok) {
       io.err(`stereogate describe: ${loaded.message}`);
-      return loaded.missingFile ? EXIT_USAGE : EXIT_BAD_INPUT;
+      return EXIT_USAGE;
     }
     const facts = describe(loaded.structure, { listIsomers: values.list === true, maxIsomers: max });
     for (const w of loaded.warnings) facts.remarks.unshift(`reading: ${w.message}`);
