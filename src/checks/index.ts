@@ -11,6 +11,7 @@ import { ratioAndEeConsistent } from './ratio-and-ee-consistent.js';
 import { rotationConsistent } from './rotation-consistent.js';
 import { nitrogenInversion } from './nitrogen-inversion.js';
 import { consistentWithRegistry } from './consistent-with-registry.js';
+import { originSupportsClaim } from './origin-supports-claim.js';
 import { waiverReview } from './waivers.js';
 
 export const CHECKS: CheckModule[] = [
@@ -22,6 +23,7 @@ export const CHECKS: CheckModule[] = [
   rotationConsistent,
   nitrogenInversion,
   consistentWithRegistry,
+  originSupportsClaim,
   waiverReview,
 ];
 

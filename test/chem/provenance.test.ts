@@ -108,7 +108,11 @@ suite('provenance: carried, formed, unmapped', () => {
 
   it('a double bond made by a Wittig reaction, one end from each input, is formed (from memory)', () => {
     const p = trace('C/C=C/c1ccccc1', ['O=Cc1ccccc1', 'CC=P(c1ccccc1)(c1ccccc1)c1ccccc1']);
-    expect(p.units[0]).toMatchObject({ kind: 'double-bond', fate: 'formed', reason: 'atoms-from-two-inputs' });
+    expect(p.units[0]).toMatchObject({
+      kind: 'double-bond',
+      fate: 'formed',
+      reason: 'atoms-from-two-inputs',
+    });
   });
 
   it('a search that reaches its bound reports every unit unmapped (reason bound), never a verdict', () => {

@@ -117,7 +117,13 @@ export function classify(product: Side, inputs: readonly (Side | null)[], asg: A
       }
     }
     const nIn = ip.structure.atoms.length;
-    if (rebase(pu, iu.tokens.map((t) => mapToken(t, nIn, pl.map, nOut)), iu.bit) < 0)
+    if (
+      rebase(
+        pu,
+        iu.tokens.map((t) => mapToken(t, nIn, pl.map, nOut)),
+        iu.bit,
+      ) < 0
+    )
       return push('formed', 'bond-changed', k, inputAtoms);
     // a neighbour another input could have brought: the bond to it may have been made
     for (const c of pu.atoms) {
@@ -127,7 +133,10 @@ export function classify(product: Side, inputs: readonly (Side | null)[], asg: A
           const other = asg.placements[q];
           if (q === o || other.input === k) continue;
           if (couldAlsoCome(x, other, inputs[other.input]!.g, product.g))
-            return push('formed', 'bond-may-be-made', k, inputAtoms, { atom: nb(x)!.atom, input: other.input });
+            return push('formed', 'bond-may-be-made', k, inputAtoms, {
+              atom: nb(x)!.atom,
+              input: other.input,
+            });
         }
       }
     }

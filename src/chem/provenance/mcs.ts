@@ -87,8 +87,7 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
   for (let u = 0; u < a.n; u++) hTotal += a.h[u];
   const best = { bonds: -1, atoms: 0, h: 0, map: new Int32Array(a.n).fill(-1) };
   const countB = new Map<number, number>();
-  for (let y = 0; y < b.n; y++)
-    if (avail[y]) countB.set(b.element[y], (countB.get(b.element[y]) ?? 0) + 1);
+  for (let y = 0; y < b.n; y++) if (avail[y]) countB.set(b.element[y], (countB.get(b.element[y]) ?? 0) + 1);
   const total = a.bonds;
 
   const better = (): boolean =>
@@ -151,7 +150,8 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
       const lb = b.nbrs[mw];
       for (let q = 0; q < lb.length; q++) {
         const x = lb[q];
-        if (inv[x] >= 0 || !avail[x] || b.element[x] !== a.element[u] || b.cls[mw][q] !== a.cls[u][k]) continue;
+        if (inv[x] >= 0 || !avail[x] || b.element[x] !== a.element[u] || b.cls[mw][q] !== a.cls[u][k])
+          continue;
         if (!into.includes(x)) into.push(x);
       }
     }
