@@ -139,14 +139,34 @@ export interface DifferingUnit {
   labelB: CipLabel | null;
 }
 
+/** How two drawings differ besides their relation (both taken in charge-neutral form). */
+export interface FormDifference {
+  /**
+   * protonation: a molecule is drawn in another charge state (an ion, a zwitterion) in one drawing;
+   * salt-form: the other components (counter-ions, solvents) differ; ratio: another number of copies.
+   */
+  kind: 'protonation' | 'salt-form' | 'ratio';
+  explanation: string;
+}
+
 export interface RelationFacts {
   relation: Relation;
-  /** Units whose configuration differs (diastereomers), or every unit (enantiomers). */
+  /**
+   * Units whose configuration differs, compared through the atom mapping (diastereomers), or every unit
+   * (enantiomers).
+   */
   differingUnits: DifferingUnit[];
-  /** Diastereomers differing at exactly one tetrahedral centre. */
+  /** Diastereomers: units whose configuration is the same but whose CIP descriptor changes (r/s centres). */
+  relabelledUnits: DifferingUnit[];
+  /** Diastereomers differing in configuration at exactly one of two or more tetrahedral centres. */
   epimers: boolean;
-  /** For salts/solvates: the parents are related as `relation`; these describe the other components. */
+  /**
+   * Components outside the stereo relation (achiral counter-ions, solvents, components only one drawing holds),
+   * matched in charge-neutral form; the unmatched ones as drawn.
+   */
   otherComponents: { onlyInA: string[]; onlyInB: string[] };
+  /** Salt form, protonation state and ratio differences; empty when the drawings differ in none. */
+  formDifferences: FormDifference[];
   /** Plain words for a chemist. */
   explanation: string;
 }

@@ -13,6 +13,14 @@ export function compareText(f: RelationFacts): string {
       );
     }
   }
+  if (f.relabelledUnits.length > 0) {
+    out.push('Same configuration, other CIP descriptor:');
+    for (const u of f.relabelledUnits)
+      out.push(
+        `  A ${u.atomsA.join('–')} ${u.labelA ?? '?'}  <->  B ${u.atomsB.join('–')} ${u.labelB ?? '?'}  (${u.kind})`,
+      );
+  }
+  for (const d of f.formDifferences) out.push(`Form (${d.kind}): ${d.explanation}`);
   const { onlyInA, onlyInB } = f.otherComponents;
   if (onlyInA.length > 0) out.push(`Other components only in A: ${onlyInA.join(', ')}`);
   if (onlyInB.length > 0) out.push(`Other components only in B: ${onlyInB.join(', ')}`);

@@ -65,8 +65,10 @@ export function fakeEngine(): FakeEngine {
       return {
         relation: 'identical',
         differingUnits: [],
+        relabelledUnits: [],
         epimers: false,
         otherComponents: { onlyInA: [], onlyInB: [] },
+        formDifferences: [],
         explanation: 'fake',
       };
     },

@@ -146,8 +146,10 @@ export function fakeEngine(relations: Record<string, Relation> = {}): CheckConte
       return {
         relation: rel,
         differingUnits: [],
+        relabelledUnits: [],
         epimers: false,
         otherComponents: { onlyInA: [], onlyInB: [] },
+        formDifferences: [],
         explanation: `${a.title} and ${b.title} are ${rel}`,
       };
     },

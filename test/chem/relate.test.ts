@@ -46,19 +46,18 @@ suite('relate', () => {
   it('undefined stereo leaves it open', () => {
     expect(rel('CC(O)CC', 'C[C@H](O)CC').relation).toBe('same-constitution');
   });
-  it('salts: parents related, the counter-ions listed apart', () => {
+  it('salts: parents related in neutral form, the counter-ions listed apart (HCl drawn as Cl or as [Cl-] is one counter-ion)', () => {
     const r = rel('C[C@H](N)C(=O)O.Cl', 'C[C@@H](N)C(=O)O.[Na+].[Cl-]');
     expect(r.relation).toBe('enantiomers');
-    expect(r.otherComponents.onlyInA).toEqual(['Cl']);
-    expect(r.otherComponents.onlyInB.sort()).toEqual(['[Cl-]', '[Na+]']);
+    expect(r.otherComponents).toEqual({ onlyInA: [], onlyInB: ['[Na+]'] });
+    expect(r.formDifferences.map((d) => d.kind)).toEqual(['salt-form']);
   });
-  it('a chiral counter-ion of the other configuration is listed as a difference', () => {
+  it('an achiral counter-ion stays apart; a chiral component both drawings hold is related with the parent', () => {
     const r = rel('CCN.C[C@H](O)C(=O)O', 'CCN.C[C@@H](O)C(=O)O');
-    // the parent is lactic acid here (larger component); the amine matches
     expect(r.relation).toBe('enantiomers');
+    // the larger amine is the parent here; the lactic acids of opposite configuration make the whole enantiomeric
     const s = rel('C[C@H](O)C(=O)O.CC(C)(C)CCCN', 'C[C@@H](O)C(=O)O.CC(C)(C)CCCN');
-    expect(s.relation).toBe('identical');
-    expect(s.otherComponents.onlyInA).toHaveLength(1);
-    expect(s.otherComponents.onlyInB).toHaveLength(1);
+    expect(s.relation).toBe('enantiomers');
+    expect(s.otherComponents).toEqual({ onlyInA: [], onlyInB: [] });
   });
 });
