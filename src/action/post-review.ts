@@ -2,6 +2,8 @@
  * Step three of a review: the checklist comment and the inline review comments. Never throws: a refusal or an
  * API failure becomes a line for the log and the job summary, so the audit result is never lost.
  */
+import { readFile, stat } from 'node:fs/promises';
+import { join } from 'node:path';
 import type { AuditResult } from '../audit/types.js';
 import type { ChangedFile } from '../github/changed-files.js';
 import { upsertChecklistComment } from '../github/checklist-comment.js';
@@ -82,6 +84,7 @@ export async function postReview(
         registryDir: settings.registryDir,
         max: settings.maxInlineComments,
         checklistUrl,
+        sources: await fixSources(settings, result),
       });
       if (plan.comments.length + plan.outsideDiff + plan.overLimit === 0) return said;
       const done = await postInlineComments(client, pr, plan.comments);
@@ -143,6 +146,25 @@ export function capComment(body: string, max: number): string {
   const room = body.slice(0, max - note.length);
   const end = room.lastIndexOf('\n');
   return (end > 0 ? room.slice(0, end) : room) + note;
+}
+
+/** Largest record file read back for a suggested change. */
+const SOURCE_MAX_BYTES = 1024 * 1024;
+
+/** The text of each record file that has a finding with a certain fix, by repository path (as checked out). */
+async function fixSources(settings: ActionSettings, result: AuditResult): Promise<Map<string, string>> {
+  const sources = new Map<string, string>();
+  for (const record of result.records) {
+    if (!record.findings.some((f) => f.fix !== undefined && f.waived === null && f.line !== null)) continue;
+    try {
+      const path = join(settings.registryRoot, record.file);
+      if ((await stat(path)).size > SOURCE_MAX_BYTES) continue;
+      sources.set(toRepoPath(settings.registryDir, record.file), await readFile(path, 'utf8'));
+    } catch {
+      // no suggestion for a file that cannot be read; the finding still says what to change
+    }
+  }
+  return sources;
 }
 
 /** Diff lines of the record files that have findings: from the API's patches, or from git when git listed them. */

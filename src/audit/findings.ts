@@ -92,6 +92,7 @@ export function toFinding(
     line: lineFor(loaded, raw.field ?? null),
     field: raw.field ?? null,
     waived: null,
+    ...(raw.fix === undefined ? {} : { fix: raw.fix }),
   };
 }
 

@@ -18,6 +18,19 @@ export interface Finding {
   field: string | null;
   /** Set when a waiver in the record accepts this finding. */
   waived: { reason: string; approvedBy: string } | null;
+  /** The certain correction, when the structure decides it (the pull request shows it as a suggested change). */
+  fix?: Fix;
+}
+
+/**
+ * A certain correction of one record field: in the value of `field`, the text `from` becomes `to` (`from` may be
+ * the whole value). Only for claims the drawn structure decides (descriptors, form words, the (+)/(−) sign
+ * against the rotation); never for measured values (ee, ratio, rotation).
+ */
+export interface Fix {
+  field: string;
+  from: string;
+  to: string;
 }
 
 /** One check that passed, for the checklist (ticked items). */

@@ -20,6 +20,7 @@ import type { ReadStructure } from './types.js';
 import type { StructureSource } from '../registry/types.js';
 import { unverifiedFinding, unverifiedMessages } from './descriptors-unverified.js';
 import { withAtomMaps } from './mapped-smiles.js';
+import { relabelFix, singleLabelFix } from './fixes.js';
 
 const messages = {
   'descriptor-unreadable':
@@ -129,6 +130,8 @@ function compareOne(
         method: cmp.method,
         how: HOW[cmp.method]!,
       });
+      const fix = relabelFix(field, text, parsed, cmp);
+      if (fix !== null) out[out.length - 1]!.fix = fix;
     }
     if (cmp.notStereoUnits.length)
       add('descriptor-not-stereo-unit', { locants: cmp.notStereoUnits.join(', '), computed });
@@ -195,6 +198,8 @@ function compareOne(
           : '',
         method: cmp.method,
       });
+      const fix = singleLabelFix(field, text, parsed, facts.units);
+      if (fix !== null) out[out.length - 1]!.fix = fix;
     }
   }
   return cmp;

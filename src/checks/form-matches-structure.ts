@@ -121,6 +121,12 @@ function run(ctx: CheckContext): CheckOutcome {
     );
   };
   const remedy = achiralRemedy(f, e.labels, nitrogen);
+  /** The form word the structure decides, when it decides one (a suggested change on the pull request). */
+  const fixTo = (to: string): void => {
+    const last = out[out.length - 1];
+    if (last !== undefined && nitrogen === null) last.fix = { field: 'stereo.form', from: form, to };
+  };
+  const achiralTo = f.meso === true ? 'meso' : f.units.length === 0 ? 'achiral' : null;
   const defined = definedUnits(f);
   const bonds = defined.filter((u) => u.kind === 'double-bond').length;
   switch (form) {
@@ -128,23 +134,35 @@ function run(ctx: CheckContext): CheckOutcome {
       if (f.chiral === true) add('achiral-but-chiral');
       else if (f.chiral === null || e.undefinedCount > 0) {
         if (f.stereoisomers.chiral > 0 || f.chiral === null) add('achiral-but-open', {}, 'warning');
-      } else if (f.meso === true) add('achiral-is-meso', {}, 'note');
+      } else if (f.meso === true) {
+        add('achiral-is-meso', {}, 'note');
+        fixTo('meso');
+      }
       break;
     case 'meso':
       if (f.chiral === true) add('meso-but-chiral');
       else if (e.undefinedCount > 0 || f.meso === null) add('meso-but-open');
-      else if (f.meso === false) add('meso-but-no-chiral-isomers', {}, 'warning');
+      else if (f.meso === false) {
+        add('meso-but-no-chiral-isomers', {}, 'warning');
+        fixTo('achiral');
+      }
       break;
     case 'single-enantiomer':
     case 'enantioenriched':
-      if (f.chiral === false && e.undefinedCount === 0) add('enantiomer-but-achiral', { remedy });
-      else if (e.undefinedCount > 0)
+      if (f.chiral === false && e.undefinedCount === 0) {
+        add('enantiomer-but-achiral', { remedy });
+        if (achiralTo !== null) fixTo(achiralTo);
+      } else if (e.undefinedCount > 0)
         add('enantiomer-undefined-units', {}, form === 'enantioenriched' ? 'warning' : undefined);
       break;
     case 'racemate':
-      if (f.chiral === false && e.undefinedCount === 0) add('racemate-but-achiral', { remedy });
-      else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) add('racemate-no-chiral-isomers');
-      else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
+      if (f.chiral === false && e.undefinedCount === 0) {
+        add('racemate-but-achiral', { remedy });
+        if (achiralTo !== null) fixTo(achiralTo);
+      } else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) {
+        add('racemate-no-chiral-isomers');
+        fixTo('achiral');
+      } else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
         const a = f.stereoisomers.achiral;
         add(
           'racemate-which-diastereomer',

@@ -5,6 +5,7 @@
 import type { Rotation } from '../registry/types.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
 import { declaredSign, finding, fmt } from './words.js';
+import { signFix } from './fixes.js';
 
 const messages = {
   'rotation-should-be-zero':
@@ -78,6 +79,10 @@ function run(ctx: CheckContext): CheckOutcome {
         },
         d ? undefined : 'note',
       );
+      // At 589 nm the measured sign decides the prefix (the measurement itself is never changed).
+      const value = sign.field === 'name' ? record.name : record.stereo.descriptors;
+      const fix = d && value !== undefined ? signFix(sign.field, value, rot.value > 0) : null;
+      if (fix !== null) out[out.length - 1]!.fix = fix;
     }
   }
   if (form === 'single-enantiomer' && zero)

@@ -5,7 +5,7 @@
 import type { StructureFacts, RelationFacts } from '../chem/facts.js';
 import type { Structure } from '../chem/types.js';
 import type { CompoundRecord, LoadedRecord } from '../registry/types.js';
-import type { Finding, Severity } from '../audit/types.js';
+import type { Finding, Fix, Severity } from '../audit/types.js';
 
 /** Tolerances and thresholds; every one configurable (schema/config.schema.json), defaults in src/audit/config.ts. */
 export interface AuditConfig {
@@ -79,6 +79,8 @@ export interface RawFinding {
   field: string | null;
   /** Overrides the check's default severity for this message (e.g. a note-level message in a warning check). */
   severity?: Severity;
+  /** The certain correction, when there is one (src/audit/types.ts, Fix). */
+  fix?: Fix;
 }
 
 export interface CheckOutcome {

@@ -9,6 +9,7 @@ import { escapeMarkdown } from '../report/escape.js';
 import { INLINE_MARKER, type InlineComment } from './inline-comments.js';
 import type { DiffLines } from './patch.js';
 import { toRepoPath } from './paths.js';
+import { suggestionBlock } from './suggestion.js';
 
 export { INLINE_MARKER };
 
@@ -33,7 +34,13 @@ interface Located {
 export function planInlineComments(
   result: AuditResult,
   diffs: ReadonlyMap<string, DiffLines>,
-  options: { registryDir: string; max: number; checklistUrl?: string | null },
+  options: {
+    registryDir: string;
+    max: number;
+    checklistUrl?: string | null;
+    /** Record files' text by repository path, for suggested changes (findings with a certain fix). */
+    sources?: ReadonlyMap<string, string>;
+  },
 ): InlinePlan {
   const located: Located[] = [];
   let outsideDiff = 0;
@@ -69,7 +76,7 @@ export function planInlineComments(
   const comments = kept.map((group) => ({
     path: group[0]!.path,
     line: group[0]!.line,
-    body: commentBody(group, options.checklistUrl ?? null),
+    body: commentBody(group, options.checklistUrl ?? null, options.sources?.get(group[0]!.path) ?? null),
   }));
   return { comments, outsideDiff, overLimit };
 }
@@ -91,10 +98,17 @@ export function shortCaution(checklistUrl: string | null): string {
   );
 }
 
-function commentBody(group: Located[], checklistUrl: string | null): string {
+function commentBody(group: Located[], checklistUrl: string | null, source: string | null): string {
   const record = group[0]!.recordId;
   const head = record === null ? '**stereogate**' : `**stereogate** · record ${escapeMarkdown(record)}`;
-  const tail = ['', shortCaution(checklistUrl), INLINE_MARKER].join('\n');
+  const fixes = group.flatMap(({ finding }) => (finding.fix === undefined ? [] : [finding.fix]));
+  const block = source === null || fixes.length === 0 ? null : suggestionBlock(source, group[0]!.line, fixes);
+  const suggestion =
+    block === null
+      ? ''
+      : '\n**Suggested change**, as the drawn structure decides it: accept it if the drawing is right; if the ' +
+        `drawing is what is wrong, correct the structure instead.\n\n${block}`;
+  const tail = [suggestion, '', shortCaution(checklistUrl), INLINE_MARKER].join('\n');
   let body = `${head}\n`;
   for (const [index, { finding }] of group.entries()) {
     const text =
