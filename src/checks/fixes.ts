@@ -14,21 +14,26 @@ function plainItems(parsed: ParsedDescriptors): boolean {
   return parsed.items.every((it) => !it.pair && !it.relativeStar && !it.axial && PLAIN_LABEL.test(it.label));
 }
 
-/** `text` with the label of each mismatched locant replaced by the computed one (per-locant comparison only). */
+/**
+ * `text` with the label of each mismatched item replaced by the computed one, when items were matched to units
+ * one by one (through atom maps, or one unit of each kind) and not up to inversion.
+ */
 export function relabelFix(
   field: string,
   text: string,
   parsed: ParsedDescriptors,
   cmp: DescriptorComparison,
 ): Fix | null {
-  if (cmp.method !== 'per-locant' || cmp.matchedInverted || !plainItems(parsed)) return null;
+  if (cmp.method !== 'per-locant' && cmp.method !== 'per-unit') return null;
+  if (cmp.matchedInverted || !plainItems(parsed)) return null;
   if (cmp.mismatches.length === 0 || cmp.notStereoUnits.length > 0 || cmp.undefinedAt.length > 0) return null;
   // Offsets count UTF-16 code units, as string indices do; every letter is checked before it is replaced.
   let out = text;
   for (const m of cmp.mismatches) {
     if (!PLAIN_LABEL.test(m.computed)) return null;
-    const item = parsed.items.find((it) => it.locant === m.locant);
-    if (item === undefined) return null;
+    const items = parsed.items.filter((it) => (it.locant ?? '') === m.locant && it.label === m.declared);
+    if (items.length !== 1) return null;
+    const item = items[0]!;
     const at = item.offset + m.locant.length;
     if (out[at] !== m.declared) return null;
     out = out.slice(0, at) + m.computed + out.slice(at + 1);
