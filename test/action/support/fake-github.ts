@@ -31,8 +31,10 @@ export type FaultKind =
   | 'rate-limit'
   /** Answer 401 with a message quoting the Authorization header, as a careless proxy or server might. */
   | 'echo-token'
-  /** Create, then answer only after `delayMs` (two overlapping runs both see no comment and both create). */
-  | 'slow-create';
+  /** Create, then answer only after `delayMs`. */
+  | 'slow-create'
+  /** Hold the answer until `times` requests have arrived (or 5 s passed): overlapping runs see the same list. */
+  | 'barrier';
 
 export interface Fault {
   /** e.g. 'POST /issues/7/comments' or 'POST /pulls/7/comments' or 'GET /pulls/7/files' (after /repos/o/r). */
@@ -41,6 +43,18 @@ export interface Fault {
   times?: number;
   retryAfter?: number;
   delayMs?: number;
+}
+
+const barriers = new WeakMap<Fault, { size: number; waiting: (() => void)[] }>();
+
+/** Waits at the fault's barrier until as many requests as it was set for have arrived. */
+function atBarrier(fault: Fault): Promise<void> {
+  const b = barriers.get(fault)!; // set when the fault was first taken, before `times` counts down
+  return new Promise<void>((resolve) => {
+    b.waiting.push(resolve);
+    if (b.waiting.length >= b.size) for (const go of b.waiting.splice(0)) go();
+    else setTimeout(resolve, 5000).unref();
+  });
 }
 
 type User = { login: string; type: string };
@@ -90,6 +104,9 @@ export async function startFakeGitHub(
     });
     if (at < 0) return null;
     const fault = state.faults[at]!;
+    if (fault.kind === 'barrier' && !barriers.has(fault)) {
+      barriers.set(fault, { size: fault.times ?? 1, waiting: [] });
+    }
     fault.times = (fault.times ?? 1) - 1;
     if (fault.times <= 0) state.faults.splice(at, 1);
     return fault;
@@ -108,6 +125,7 @@ export async function startFakeGitHub(
       const route = `${method} ${url.pathname}`;
       const fault = takeFault(route);
       if (fault?.kind === 'stall') return; // never answers
+      if (fault?.kind === 'barrier') await atBarrier(fault);
       if (fault?.kind === 'rate-limit') {
         return send(
           403,
