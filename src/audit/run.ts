@@ -22,7 +22,14 @@ import {
 } from './findings.js';
 import { selectRecords } from './select.js';
 import { StructureCache } from './structures.js';
-import type { AuditResult, AuditSummary, Finding, PassedCheck, RecordResult } from './types.js';
+import type {
+  AuditResult,
+  AuditSummary,
+  Finding,
+  NotRunCheck,
+  PassedCheck,
+  RecordResult,
+} from './types.js';
 import { VERSION } from './version.js';
 import { buildRegistryView } from './view.js';
 
@@ -32,6 +39,11 @@ export interface AuditRecordsOptions {
   engine: AuditEngine;
   /** The whole registry the records belong to (for cross-record checks); default: the audited records. */
   registry?: readonly LoadedRecord[];
+  /**
+   * Why `registry` is not the whole registry (a bulk run auditing each record on its own, one shard), or
+   * undefined when it is: checks that need the registry are then reported as not run with this reason.
+   */
+  registryIncomplete?: string;
 }
 
 /** Audits `records` (each must also be in `registry` when one is given). Pure apart from the engine. */
@@ -41,6 +53,7 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
   const audited = new Set(records);
   const registryRecords = options.registry ?? records;
   const registry = buildRegistryView(registryRecords, cache, (r) => audited.has(r));
+  registry.incomplete = options.registryIncomplete ?? null;
   const engineApi = { relate: options.engine.relate.bind(options.engine) };
   const results = records.map((loaded) => {
     try {
@@ -77,6 +90,7 @@ function auditOne(
   const findings: Finding[] = schemaFindings(loaded, config);
   applyWaivers(findings, loaded);
   const passed: PassedCheck[] = [];
+  const notRun: NotRunCheck[] = [];
   // A file that could not be parsed at all (syntax error, unreadable) has only its record-schema findings.
   const unparsed = loaded.record === null && loaded.sources === undefined && loaded.problems.length > 0;
   for (const check of unparsed ? [] : checks) {
@@ -91,6 +105,11 @@ function auditOne(
       engine,
       findings: [...findings],
     };
+    const missing = missingInput(check, ctx);
+    if (missing !== null) {
+      notRun.push({ check: check.id, reason: missing });
+      continue;
+    }
     let produced: Finding[];
     let outcome;
     try {
@@ -106,7 +125,9 @@ function auditOne(
     }
     applyWaivers(produced, loaded);
     findings.push(...produced);
-    if (produced.length === 0 && !outcome.notApplicable) {
+    if (outcome.notRun !== undefined && produced.length === 0) {
+      notRun.push({ check: check.id, reason: outcome.notRun });
+    } else if (produced.length === 0 && !outcome.notApplicable) {
       passed.push({ check: check.id, evidence: outcome.passed ?? '' });
     }
   }
@@ -117,8 +138,27 @@ function auditOne(
     computed: main.facts,
     findings,
     passed,
+    notRun,
     declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null },
   };
+}
+
+/**
+ * Why a check cannot run on this record, or null: a structure it needs could not be read, or the registry it
+ * compares with is not all there. Such a check is reported as not run, never as passed.
+ */
+function missingInput(check: CheckModule, ctx: CheckContext): string | null {
+  const needs = check.requires ?? [];
+  if (needs.includes('structure')) {
+    if (ctx.record === null) return 'the record does not follow the record schema (see record-schema)';
+    if (ctx.main.facts === null) {
+      return ctx.main.error
+        ? 'the structure could not be read (see structure-readable)'
+        : 'the record gives no structure';
+    }
+  }
+  if (needs.includes('registry') && ctx.registry.incomplete) return ctx.registry.incomplete;
+  return null;
 }
 
 export function summarize(records: readonly RecordResult[]): AuditSummary {

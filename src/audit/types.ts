@@ -40,6 +40,13 @@ export interface PassedCheck {
   evidence: string;
 }
 
+/** One check that did not run on a record, and why (never reported as passed). */
+export interface NotRunCheck {
+  check: string;
+  /** Why, in words: "the structure could not be read (see structure-readable)". */
+  reason: string;
+}
+
 export interface RecordResult {
   id: string | null;
   file: string;
@@ -47,6 +54,8 @@ export interface RecordResult {
   computed: StructureFacts | null;
   findings: Finding[];
   passed: PassedCheck[];
+  /** Checks that did not run on this record, with the reason (absent in results written before it existed). */
+  notRun?: NotRunCheck[];
   declared: { form: string | null; descriptors: string | null };
 }
 

@@ -85,6 +85,11 @@ export function splitSdRecord(text: string): {
   return { molfile, fields, problem };
 }
 
+/** Why checks across records do not run in a bulk audit (each record is audited on its own). */
+export const BULK_REGISTRY_NOT_COMPARED =
+  'a bulk audit checks each record of the export on its own, not against the other records; audit the ' +
+  'registry as record files to compare records with one another';
+
 export interface ItemContext {
   mapping: BulkMapping;
   vocabulary: (word: string | undefined) => VocabularyResult;
@@ -125,8 +130,12 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
       components: [],
     },
   };
-  const result = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine })
-    .records[0];
+  const result = auditRecords([loaded], {
+    checks: ctx.checks,
+    config: ctx.config,
+    engine: ctx.engine,
+    registryIncomplete: BULK_REGISTRY_NOT_COMPARED,
+  }).records[0];
   const out: BulkRecordResult = {
     ...result,
     computed: result.computed ? bulkFacts(result.computed) : null,

@@ -225,5 +225,6 @@ export const consistentWithRegistry: CheckModule = {
     'request), and, when both are (a full audit), on the one registered later — the higher registry id, a record ' +
     'without an id counting as newest; the earlier record gets a note naming it (common practice, no source).',
   messages,
+  requires: ['structure', 'registry'],
   run,
 };

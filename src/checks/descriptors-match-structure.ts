@@ -356,5 +356,6 @@ export const descriptorsMatchStructure: CheckModule = {
     'unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other ' +
     'stereo unit.',
   messages,
+  requires: ['structure'],
   run,
 };

@@ -140,5 +140,6 @@ export const enhancedStereoMatchesForm: CheckModule = {
     'an OR group and should not be drawn as absolute, and absolute descriptors (R, S without rel or *) contradict ' +
     'an OR group (IUPAC 2013, P-93.1.3: relative configuration is written rel- or R*).',
   messages,
+  requires: ['structure'],
   run,
 };

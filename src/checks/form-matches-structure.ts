@@ -212,5 +212,6 @@ export const formMatchesStructure: CheckModule = {
     "the engine's mirror-image analysis (the symmetry element that makes a structure achiral) and its " +
     'stereoisomer count.',
   messages,
+  requires: ['structure'],
   run,
 };

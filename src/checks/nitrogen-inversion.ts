@@ -108,5 +108,6 @@ export const nitrogenInversion: CheckModule = {
     'rests on nothing else, this check carries the error; the form, descriptor and reading checks report their ' +
     'side of the same root cause as notes.',
   messages,
+  requires: ['structure'],
   run,
 };

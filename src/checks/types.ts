@@ -45,6 +45,11 @@ export interface RegistryEntry {
 
 export interface RegistryView {
   entries: readonly RegistryEntry[];
+  /**
+   * Why this view does not hold the whole registry (a bulk run that audits each record on its own, one shard of
+   * a sharded run), or null/absent when it does. Checks that need the registry are then reported as not run.
+   */
+  incomplete?: string | null;
   /** Entries whose parent constitution key equals `key` (fast lookup for duplicate/enantiomer checks). */
   withConstitution(key: string): readonly RegistryEntry[];
 }
@@ -89,7 +94,12 @@ export interface CheckOutcome {
   passed?: string;
   /** When the check did not apply to this record (e.g. no rotation given): omitted from the checklist. */
   notApplicable?: boolean;
+  /** When the check applies but could not run (an input it needs is missing): the reason, shown as not run. */
+  notRun?: string;
 }
+
+/** What a check needs before it can run; without it the audit reports the check as not run, with the reason. */
+export type CheckRequirement = 'structure' | 'registry';
 
 export interface CheckModule {
   /** kebab-case, our own, self-explanatory. */
@@ -101,5 +111,7 @@ export interface CheckModule {
   explanation: string;
   /** Message templates by message id; `{name}` placeholders are filled from RawFinding.data. */
   messages: Record<string, string>;
+  /** Inputs the check needs: the record's structure read and described; the whole registry. */
+  requires?: readonly CheckRequirement[];
   run(ctx: CheckContext): CheckOutcome;
 }

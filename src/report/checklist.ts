@@ -1,6 +1,7 @@
 /**
  * The checklist of one record as plain data, shared by the text and Markdown reports: open findings first (the
- * work to do), then findings accepted by waivers, then the checks that passed; plus one line of computed evidence.
+ * work to do), then findings accepted by waivers, then the checks that passed, then the checks that did not run
+ * (with the reason; never shown as passed); plus one line of computed evidence.
  */
 import type { StructureFacts } from '../chem/facts.js';
 import type { Finding, RecordResult } from '../audit/types.js';
@@ -8,7 +9,8 @@ import type { Finding, RecordResult } from '../audit/types.js';
 export type ChecklistItem =
   | { kind: 'open'; finding: Finding }
   | { kind: 'accepted'; finding: Finding; reason: string; approvedBy: string }
-  | { kind: 'passed'; check: string; evidence: string };
+  | { kind: 'passed'; check: string; evidence: string }
+  | { kind: 'not-run'; check: string; reason: string };
 
 const ORDER: Record<Finding['severity'], number> = { error: 0, warning: 1, note: 2 };
 
@@ -38,6 +40,7 @@ export function checklistItems(r: RecordResult): ChecklistItem[] {
       items.push({ kind: 'accepted', finding: f, reason: f.waived.reason, approvedBy: f.waived.approvedBy });
   }
   for (const p of r.passed) items.push({ kind: 'passed', check: p.check, evidence: p.evidence });
+  for (const n of r.notRun ?? []) items.push({ kind: 'not-run', check: n.check, reason: n.reason });
   return items;
 }
 

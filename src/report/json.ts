@@ -25,6 +25,7 @@ function record(r: RecordResult): Record<string, unknown> {
     findings: r.findings.map(finding),
     declared: { form: r.declared.form, descriptors: r.declared.descriptors },
     passed: r.passed.map((p) => ({ check: p.check, evidence: p.evidence })),
+    notRun: (r.notRun ?? []).map((n) => ({ check: n.check, reason: n.reason })),
   };
 }
 

@@ -76,6 +76,7 @@ function itemLine(item: ChecklistItem): string {
       `  Reason: ${esc(item.reason)} · approved by ${esc(item.approvedBy)}`
     );
   }
+  if (item.kind === 'not-run') return `- not run: \`${item.check}\`: ${esc(item.reason)}`;
   return `- \`${item.check}\`${item.evidence ? `: ${esc(item.evidence)}` : ''}`;
 }
 
@@ -89,6 +90,7 @@ function passedSummary(r: RecordResult, accepted: number): string {
     r.passed.length === 0 ? 'no check applied' : `✅ ${plural(r.passed.length, 'check')} passed`,
   ];
   if (accepted > 0) parts.push(`${accepted} accepted by waiver`);
+  if (r.notRun?.length) parts.push(`${r.notRun.length} not run`);
   return parts.join(' · ');
 }
 

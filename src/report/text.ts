@@ -64,6 +64,8 @@ function block(r: RecordResult, paint: Paint, verbose: boolean): string[] {
         `  ${paint('magenta', '~ accepted')} ${f.check}${at}: ${safeText(f.message)} ` +
           paint('dim', `(waived: ${safeText(item.reason)}; approved by ${safeText(item.approvedBy)})`),
       );
+    } else if (item.kind === 'not-run') {
+      lines.push(`  ${paint('dim', '– not run')} ${item.check}: ${safeText(item.reason)}`);
     } else if (verbose) {
       const ev = item.evidence ? `: ${paint('dim', safeText(item.evidence))}` : '';
       lines.push(`  ${paint('green', '✓')} ${item.check}${ev}`);
@@ -84,6 +86,7 @@ function cleanLine(r: RecordResult, paint: Paint): string {
   const waived = r.findings.filter((f) => f.waived).length;
   const parts = [r.passed.length > 0 ? `${plural(r.passed.length, 'check')} passed` : 'no check applied'];
   if (waived > 0) parts.push(`${waived} accepted by waiver`);
+  for (const n of r.notRun ?? []) parts.push(`not run: ${n.check} (${safeText(n.reason)})`);
   return `${paint('green', '✓')} ${paint('bold', safeText(r.id ?? '(no id)'))}  ${parts.join(', ')}  ${paint('dim', safeText(r.file))}`;
 }
 
