@@ -1,12 +1,15 @@
 /**
  * Collects flagged records of a bulk run (up to a cap) and writes the self-contained HTML report at the end,
- * with a depiction of each (our CIP labels at the atoms; depicted in the main thread only for the flagged records
- * kept, so the audit itself pays nothing for it).
+ * with the 2D layout of each for its depiction (laid out in the main thread only for the flagged records kept,
+ * so the audit itself pays nothing for it). A molfile record keeps its own coordinates (cheap, always drawn); a
+ * computed layout costs a few milliseconds, so only the first `maxLayouts` get one.
  */
 import { writeFileSync } from 'node:fs';
 import { readStructure } from '../chem/read/index.js';
-import { depict } from '../chem/depict.js';
+import { layoutStructure } from '../chem/depict.js';
+import type { Structure } from '../chem/types.js';
 import { renderHtmlPage, type HtmlRow } from '../report/html/render.js';
+import { pictureData, type PicData } from '../report/html/picture.js';
 import type { HtmlEntry, RenderedRecord } from './render-record.js';
 import type { BulkTrailer, RecordWriter } from './writers.js';
 
@@ -18,7 +21,7 @@ export class HtmlCollector implements RecordWriter {
   constructor(
     readonly path: string,
     private readonly maxRecords = 20_000,
-    private readonly maxDepictions = 2_000,
+    private readonly maxLayouts = 3_000,
   ) {}
 
   async write(r: RenderedRecord): Promise<void> {
@@ -28,10 +31,19 @@ export class HtmlCollector implements RecordWriter {
   }
 
   async finish(t: BulkTrailer): Promise<void> {
-    const rows: (HtmlRow & { svg: string | null })[] = this.kept.map((e, i) => ({
-      ...e.row,
-      svg: i < this.maxDepictions ? drawing(e, i) : null,
-    }));
+    let computed = 0;
+    let skipped = 0;
+    const rows: (HtmlRow & { pic: PicData | null })[] = this.kept.map((e) => {
+      const read = readKept(e);
+      if (!read) return { ...e.row, pic: null };
+      if (read.dimension !== 2 && computed >= this.maxLayouts) {
+        skipped++;
+        return { ...e.row, pic: null };
+      }
+      const layout = layoutStructure(read);
+      if (layout?.origin === 'computed') computed++;
+      return { ...e.row, pic: layout ? pictureData(layout, e.units) : null };
+    });
     const notes = [
       `${t.summary.records} records audited${t.shard ? ` (shard ${t.shard})` : ''}; ${this.flaggedCount} flagged.`,
     ];
@@ -39,8 +51,10 @@ export class HtmlCollector implements RecordWriter {
       notes.push(
         `Only the first ${this.kept.length} flagged records are listed; see the JSON output for all.`,
       );
-    if (this.kept.length > this.maxDepictions)
-      notes.push(`Depictions are drawn for the first ${this.maxDepictions} flagged records.`);
+    if (skipped > 0)
+      notes.push(
+        `${skipped} flagged records from SMILES have no depiction: layouts are computed for the first ${this.maxLayouts} (molfile records are always drawn as registered).`,
+      );
     for (const [w, e] of t.vocabulary.mapped)
       notes.push(`legacy form word "${w}" read as ${e.form} (${e.count} records)`);
     for (const [w, n] of t.vocabulary.notUnderstood)
@@ -58,14 +72,9 @@ export class HtmlCollector implements RecordWriter {
   }
 }
 
-/** The depiction of a kept record with our CIP labels at the atoms, or null when it cannot be drawn. */
-function drawing(e: HtmlEntry, i: number): string | null {
+/** The structure of a kept record, read again (the worker sent its text), or null when it cannot be read. */
+function readKept(e: HtmlEntry): Structure | null {
   if (!e.structure) return null;
   const read = readStructure(e.structure, { format: e.structure.includes('\n') ? 'molfile' : 'smiles' });
-  if (!read.ok) return null;
-  return depict(
-    read.structure,
-    e.labels.map((l) => ({ atom: l.atom - 1, text: l.text })),
-    { id: `d${i}` },
-  );
+  return read.ok ? read.structure : null;
 }

@@ -9,6 +9,7 @@ import type { RecordResult, Severity } from '../audit/types.js';
 import type { CheckModule } from '../checks/types.js';
 import { sarifLog } from '../report/sarif.js';
 import { htmlRow, type HtmlRow } from '../report/html/render.js';
+import type { UnitMark } from '../report/html/picture.js';
 import type { BulkRecordResult } from './audit-item.js';
 import type { VocabularyResult } from './mapping.js';
 
@@ -31,12 +32,12 @@ export interface Tally {
   form: string | null;
 }
 
-/** A flagged record for the HTML report: its row, and what to depict (drawn at the end, for the first few). */
+/** A flagged record for the HTML report: its row, and what to depict (laid out at the end). */
 export interface HtmlEntry {
   row: HtmlRow;
   structure: string | null;
-  /** CIP labels at 1-based input atom numbers. */
-  labels: { atom: number; text: string }[];
+  /** Stereo units at 1-based input atom numbers: CIP labels, and the undefined ones to mark. */
+  units: UnitMark[];
 }
 
 export interface RenderedRecord {
@@ -130,11 +131,15 @@ export function makeRenderer(wants: RenderWants, checks: readonly CheckModule[])
     if (wants.html) {
       const row = htmlRow(r);
       if (row) {
-        const labels = (r.computed?.units ?? [])
-          .filter((u) => u.label)
-          .flatMap((u) => u.atoms.map((a) => ({ atom: a, text: u.label as string })));
+        const units = (r.computed?.units ?? []).map((u) => ({
+          atoms: u.atoms,
+          label: u.label,
+          defined: u.defined,
+        }));
         row.file = `${r.origin.source} · record ${r.origin.record}, line ${r.origin.line}`;
-        out.html = { row, structure: r.structure_text ?? null, labels };
+        const word = r.form_word.word;
+        row.word = word !== null && word.trim() !== '' && word.trim() !== r.declared.form ? word : null;
+        out.html = { row, structure: r.structure_text ?? null, units };
       }
     }
     return out;

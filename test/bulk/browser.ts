@@ -37,3 +37,18 @@ export async function openPage(viewport?: { width: number; height: number }): Pr
   page.on('pageerror', (e) => problems.push(String(e)));
   return { browser, page, problems };
 }
+
+/** Cards a person can see: displayed (computed style) and with a box of some size. */
+export async function visibleCards(page: Page): Promise<number> {
+  return (await visibleIds(page)).length;
+}
+
+export async function visibleIds(page: Page): Promise<string[]> {
+  return page
+    .locator('article.rec')
+    .evaluateAll((els) =>
+      els
+        .filter((e) => getComputedStyle(e).display !== 'none' && e.getBoundingClientRect().height > 0)
+        .map((e) => e.querySelector('h3')?.textContent ?? ''),
+    );
+}

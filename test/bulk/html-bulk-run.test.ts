@@ -7,7 +7,7 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { haveBrowser, openPage, requireBrowser } from './browser.js';
+import { haveBrowser, openPage, requireBrowser, visibleCards, visibleIds } from './browser.js';
 import { bulkAudit } from '../../src/cli/commands/bulk-audit.js';
 import { memoryIo } from '../cli/io.js';
 
@@ -65,15 +65,24 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report of a bulk run in c
     const { browser, page, problems } = await openPage({ width: 1280, height: 900 });
     try {
       await page.goto('file://' + html);
-      const visible = () => page.locator('article.rec:not([hidden])').count();
+      const visible = () => visibleCards(page);
       expect(await visible()).toBe(flagged.length);
-      // every flagged record whose structure was read has a depiction, and the images decode
-      expect(await page.locator('article.rec img').count()).toBe(drawable.length);
+      // every flagged record whose structure was read has a depiction, drawn once in view, with a size
+      for (const card of await page.locator('article.rec figure.pic').all())
+        await card.scrollIntoViewIfNeeded();
+      await page.waitForFunction(
+        (n) => document.querySelectorAll('article.rec svg.mol').length === n,
+        drawable.length,
+      );
       const sizes = await page
-        .locator('article.rec img')
-        .evaluateAll((imgs) => imgs.map((i) => (i as HTMLImageElement).naturalWidth));
-      expect(sizes.every((w) => w > 0)).toBe(true);
-      const idsOf = async () => page.locator('article.rec:not([hidden]) h3').allTextContents();
+        .locator('article.rec svg.mol')
+        .evaluateAll((svgs) => svgs.map((s) => s.getBoundingClientRect().width));
+      expect(sizes.every((w) => w > 50)).toBe(true);
+      // the legacy word as written beside the mapped form
+      expect(await page.locator('article.rec[data-id="LX-00005"] .side').first().textContent()).toContain(
+        'racemate (written "RAC")',
+      );
+      const idsOf = () => visibleIds(page);
       const withCheck = (c: string) =>
         flagged
           .filter((r) =>
@@ -97,9 +106,7 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report of a bulk run in c
       await page.fill('#search', 'lx-00003');
       expect(await idsOf()).toEqual(['LX-00003']);
       // the record's position in the export: record 3 is on line 4 (after the header)
-      expect(await page.locator('article.rec:not([hidden]) .file').textContent()).toMatch(
-        /record 3, line 4$/,
-      );
+      expect(await page.locator('article.rec .file').textContent()).toMatch(/record 3, line 4$/);
       await page.fill('#search', '');
       expect(await visible()).toBe(flagged.length);
       await page.screenshot({ path: join(out, 'bulk-report.png'), fullPage: true });

@@ -1,12 +1,14 @@
 /**
  * The HTML report in a real browser: Debian's chromium driven by playwright-core. Loads with no console errors,
- * filters and search work, and a screenshot is saved to test-output/ for review.
+ * filters and search work — counted by what is visible (computed style and bounding box), not by attributes —
+ * and a screenshot is saved to test-output/ for review.
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { haveBrowser, openPage, requireBrowser } from './browser.js';
+import { haveBrowser, openPage, requireBrowser, visibleIds, visibleCards } from './browser.js';
 import { renderHtml } from '../../src/report/html/render.js';
+import { SAMPLES, sampleRow } from '../report/support/html-rows.js';
 import type { AuditResult, Finding, RecordResult } from '../../src/audit/types.js';
 
 function finding(check: string, severity: Finding['severity'], message: string): Finding {
@@ -22,8 +24,6 @@ function rec(id: string, form: string, findings: Finding[]): RecordResult {
     declared: { form, descriptors: null },
   };
 }
-const svg =
-  '<svg xmlns="http://www.w3.org/2000/svg" width="60" height="30"><text x="5" y="20">R</text></svg>';
 const result: AuditResult = {
   tool: { name: 'stereogate', version: 'test' },
   caution: 'Computed result; the responsible chemist confirms.',
@@ -43,7 +43,8 @@ const result: AuditResult = {
 
 describe.skipIf(!haveBrowser && !requireBrowser)('HTML report in chromium', () => {
   it('loads cleanly, filters by check/severity/form, searches by id', async () => {
-    const html = renderHtml(result, { depictions: new Map([[0, svg]]), notes: ['input: demo.sdf'] });
+    const pic = sampleRow(SAMPLES[0]!).pic!;
+    const html = renderHtml(result, { pictures: new Map([[0, pic]]), notes: ['input: demo.sdf'] });
     expect(html).not.toContain('<script>alert(1)');
     const dir = join(process.cwd(), 'test-output');
     mkdirSync(dir, { recursive: true });
@@ -52,13 +53,13 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report in chromium', () =
     const { browser, page, problems } = await openPage();
     try {
       await page.goto('file://' + file);
-      const visible = async () => page.locator('article.rec:not([hidden])').count();
+      const visible = () => visibleCards(page);
       expect(await visible()).toBe(3); // LX-00003 has no findings
       await page.selectOption('#filter-check', 'ratio-and-ee');
       expect(await visible()).toBe(2);
       await page.selectOption('#filter-severity', 'note');
       expect(await visible()).toBe(1);
-      expect(await page.locator('article.rec:not([hidden]) h3').textContent()).toBe('LX-00004');
+      expect(await visibleIds(page)).toEqual(['LX-00004']);
       await page.selectOption('#filter-check', '');
       await page.selectOption('#filter-severity', '');
       await page.selectOption('#filter-form', 'racemate');
@@ -69,8 +70,17 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report in chromium', () =
       await page.fill('#search', 'nothing-like-this');
       expect(await visible()).toBe(0);
       expect(await page.locator('#empty').isVisible()).toBe(true);
+      // the "no match" line sits right under the filters, in view, not below the list
+      const form = (await page.locator('#filters').boundingBox())!;
+      const none = (await page.locator('#empty').boundingBox())!;
+      expect(none.y).toBeGreaterThanOrEqual(form.y + form.height);
+      expect(none.y - (form.y + form.height)).toBeLessThan(60);
+      expect(none.y + none.height).toBeLessThan(
+        page.viewportSize()!.height + (await page.evaluate(() => scrollY)),
+      );
       await page.fill('#search', '');
-      expect(await page.locator('article.rec img').count()).toBe(1);
+      expect(await page.locator('#empty').isVisible()).toBe(false);
+      expect(await page.locator('article.rec svg.mol').count()).toBe(1);
       // the injected script text shows as text, it did not run
       expect(await page.locator('article.rec').first().textContent()).toContain('<script>alert(1)</script>');
       await page.screenshot({ path: join(dir, 'html-report.png'), fullPage: true });

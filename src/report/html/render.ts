@@ -1,23 +1,25 @@
 /**
  * The bulk audit's visual report: ONE self-contained HTML file (no external scripts, styles, fonts or images),
- * with counts by check and severity, a table of flagged records that can be filtered by check, severity and
- * declared form and searched by id, and for each flagged record its depiction (SVG, CIP labels at the atoms)
- * with declared and computed stereo side by side.
+ * with counts by check and severity and the flagged records, filtered by check, severity and declared form and
+ * searched by id, shown a page at a time; each card has the record's depiction (its own molfile coordinates and
+ * wedges when it has them; CIP labels at the atoms, undefined stereo units marked, atom numbers on request) with
+ * declared (and the legacy word as written) and computed stereo side by side.
  *
- * Everything from records is escaped; the record data travels as JSON inside a <script type="application/json">
- * block with `<` escaped, and is put into the page with textContent, never innerHTML. SVG depictions are
- * produced by our own depiction code (never taken from records) and embedded as data: URIs in <img> tags, which
- * browsers render without running scripts.
+ * It stays light at its limit: the records travel as compact JSON (a depiction is its 2D layout, ~1 KB), the
+ * page builds only the cards of the page shown and draws a depiction only when its card comes into view.
+ * Everything from records is escaped; the data sits in a <script type="application/json"> block with `<`
+ * escaped, and is put into the page with textContent and SVG elements made by the page script, never innerHTML.
  */
 import type { AuditResult, RecordResult } from '../../audit/types.js';
 import type { StructureFacts } from '../../chem/facts.js';
 import { PAGE_SCRIPT } from './page-script.js';
+import type { PicData } from './picture.js';
 import { PAGE_STYLE } from './page-style.js';
 
 export interface HtmlReportOptions {
   title?: string;
-  /** SVG per record index (only flagged records need one). */
-  depictions?: Map<number, string>;
+  /** Depiction per record index (only flagged records need one): see picture.ts. */
+  pictures?: Map<number, PicData>;
   /** Notes to print under the title (inputs, mapping, vocabulary tally…), plain text. */
   notes?: string[];
   generatedAt?: string;
@@ -43,9 +45,13 @@ export interface HtmlRow {
   id: string;
   file: string;
   form: string;
+  /** The legacy form word as written in the export, when it is not the form's own name. */
+  word: string | null;
   descriptors: string;
   computed: string;
   labels: string;
+  /** Undefined stereo units, named by their atoms ("C4, C6"); '' when none. */
+  undef: string;
   worst: 'error' | 'warning' | 'note';
   findings: {
     check: string;
@@ -63,9 +69,13 @@ export type HtmlRecord = Omit<RecordResult, 'computed'> & {
   computed: Pick<StructureFacts, 'chiral' | 'meso' | 'units' | 'undefined' | 'stereoisomers'> | null;
 };
 
-function computedSummary(r: HtmlRecord): { text: string; labels: string } {
+function unitName(u: { element: string; atoms: number[]; kind: string }): string {
+  return u.atoms.length === 1 ? `${u.element}${u.atoms[0]}` : `${u.atoms.join('=')}`;
+}
+
+function computedSummary(r: HtmlRecord): { text: string; labels: string; undef: string } {
   const c = r.computed;
-  if (!c) return { text: 'structure not read', labels: '' };
+  if (!c) return { text: 'structure not read', labels: '', undef: '' };
   const chir = c.chiral === null ? 'chirality open (undefined units)' : c.chiral ? 'chiral' : 'achiral';
   const parts = [chir];
   if (c.meso) parts.push('meso');
@@ -75,9 +85,13 @@ function computedSummary(r: HtmlRecord): { text: string; labels: string } {
   );
   const labels = c.units
     .filter((u) => u.label)
-    .map((u) => `${u.atoms.join('=')}${u.label}`)
+    .map((u) => `${unitName(u)} ${u.label}`)
     .join(', ');
-  return { text: parts.join('; '), labels };
+  const undef = c.units
+    .filter((u) => !u.defined)
+    .map(unitName)
+    .join(', ');
+  return { text: parts.join('; '), labels, undef };
 }
 
 const RANK = { error: 0, warning: 1, note: 2 } as const;
@@ -95,9 +109,11 @@ export function htmlRow(r: HtmlRecord): HtmlRow | null {
     id: r.id ?? '(no id)',
     file: r.file,
     form: r.declared.form ?? '(none)',
+    word: null,
     descriptors: r.declared.descriptors ?? '',
     computed: cs.text,
     labels: cs.labels,
+    undef: cs.undef,
     worst,
     findings: r.findings.map((f) => ({
       check: f.check,
@@ -123,10 +139,10 @@ export function countByCheck(records: readonly RecordResult[]): CheckCounts {
 }
 
 export function renderHtml(result: AuditResult, opts: HtmlReportOptions = {}): string {
-  const rows: (HtmlRow & { svg?: string | null })[] = [];
+  const rows: (HtmlRow & { pic?: PicData | null })[] = [];
   result.records.forEach((r, i) => {
     const row = htmlRow(r);
-    if (row) rows.push({ ...row, svg: opts.depictions?.get(i) ?? null });
+    if (row) rows.push({ ...row, pic: opts.pictures?.get(i) ?? null });
   });
   return renderHtmlPage(rows, {
     tool: result.tool,
@@ -137,7 +153,7 @@ export function renderHtml(result: AuditResult, opts: HtmlReportOptions = {}): s
   });
 }
 
-export interface HtmlPage extends Omit<HtmlReportOptions, 'depictions'> {
+export interface HtmlPage extends Omit<HtmlReportOptions, 'pictures'> {
   tool: AuditResult['tool'];
   caution: string;
   summary: AuditResult['summary'];
@@ -146,14 +162,13 @@ export interface HtmlPage extends Omit<HtmlReportOptions, 'depictions'> {
   flaggedTotal?: number;
 }
 
-/** The page from rows already made (bulk runs keep rows, not whole results); `svg` is the depiction, if any. */
-export function renderHtmlPage(rows: readonly (HtmlRow & { svg?: string | null })[], page: HtmlPage): string {
+/** The page from rows already made (bulk runs keep rows, not whole results); `pic` is the depiction, if any. */
+export function renderHtmlPage(
+  rows: readonly (HtmlRow & { pic?: PicData | null })[],
+  page: HtmlPage,
+): string {
   const opts = page;
-  const data = rows.map((r, i) => ({
-    ...r,
-    i,
-    svg: r.svg ? `data:image/svg+xml;base64,${Buffer.from(r.svg, 'utf8').toString('base64')}` : null,
-  }));
+  const data = rows.map((r) => ({ ...r, pic: r.pic ?? null }));
   const checks = Object.entries(page.byCheck).sort((a, b) => (a[0] < b[0] ? -1 : 1));
   const title = opts.title ?? 'stereogate audit report';
   const s = page.summary;
@@ -170,7 +185,7 @@ export function renderHtmlPage(rows: readonly (HtmlRow & { svg?: string | null }
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
-<meta http-equiv="Content-Security-Policy" content="default-src 'none'; img-src data:; style-src 'unsafe-inline'; script-src 'unsafe-inline'">
+<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; script-src 'unsafe-inline'">
 <title>${escapeHtml(title)}</title>
 <style>${PAGE_STYLE}</style>
 </head>
@@ -190,8 +205,8 @@ ${notes ? `<ul class="notes">${notes}</ul>` : ''}
 </section>
 <section aria-label="findings by check">
 <h2>Findings by check</h2>
-<table class="counts"><thead><tr><th>check</th><th>errors</th><th>warnings</th><th>notes</th><th>waived</th></tr></thead>
-<tbody>${countsRows}</tbody></table>
+<div class="scroll"><table class="counts"><thead><tr><th>check</th><th>errors</th><th>warnings</th><th>notes</th><th>waived</th></tr></thead>
+<tbody>${countsRows}</tbody></table></div>
 </section>
 <section aria-label="flagged records">
 <h2>Flagged records <span id="shown-count">${rows.length}</span> of ${rows.length}${
@@ -204,9 +219,12 @@ ${notes ? `<ul class="notes">${notes}</ul>` : ''}
 <label>check <select id="filter-check"><option value="">all checks</option></select></label>
 <label>severity <select id="filter-severity"><option value="">any severity</option><option>error</option><option>warning</option><option>note</option></select></label>
 <label>declared form <select id="filter-form"><option value="">any form</option></select></label>
+<label class="check"><input id="atom-numbers" type="checkbox"> atom numbers</label>
 </form>
-<div id="records"></div>
 <p id="empty" hidden>No flagged record matches these filters.</p>
+<div id="records"></div>
+<nav id="pager" aria-label="pages" hidden><button type="button" id="prev">‹ previous</button> <span id="page-info"></span> <button type="button" id="next">next ›</button></nav>
+<p class="legend">In the drawings: <b class="cip">R</b>/<b class="cip">S</b>, <b class="cip">E</b>/<b class="cip">Z</b> computed CIP labels; <span class="undef-mark">dashed circles</span> undefined stereo units. A drawing is the record's own molfile (coordinates and wedges as registered) when it has one, else a layout computed from the structure; the card says which.</p>
 </section>
 <script type="application/json" id="report-data">${scriptJson(data)}</script>
 <script>${PAGE_SCRIPT}</script>
