@@ -69,6 +69,13 @@ export function enantiomericPart(
     return { outcome: 'achiral', reason: 'the structure as drawn is superimposable on its mirror image' };
 
   if (enriched.length === 0) {
+    if (control !== undefined && CHIRAL_CONTROL.includes(control))
+      return { outcome: 'enantioenriched', reason: `the ${control} is the source of enantiomeric bias` };
+    if (control !== undefined && ENRICHING.includes(control))
+      return {
+        outcome: 'enantioenriched or one enantiomer',
+        reason: `the enantiomers were parted by ${control}`,
+      };
     if (unknown.length > 0) {
       if (claim)
         add('input-stereo-unknown', claim.field, { claim: claim.text, why: inputList(unknown) }, 'note');
@@ -105,12 +112,7 @@ export function enantiomericPart(
         reason: 'inputs achiral or racemic; origin.control not stated',
       };
     }
-    if (CHIRAL_CONTROL.includes(control))
-      return { outcome: 'enantioenriched', reason: `the ${control} is the source of enantiomeric bias` };
-    return {
-      outcome: 'enantioenriched or one enantiomer',
-      reason: `the enantiomers were parted by ${control}`,
-    };
+    return { outcome: 'not worked out', reason: `origin.control is ${control}` };
   }
 
   // an enriched input: does one of its stereo units reach the product unchanged?

@@ -104,11 +104,8 @@ function run(ctx: CheckContext): CheckOutcome {
   );
   if (out.length > 0) return { findings: out };
   const declared = [record.stereo.form, record.stereo.descriptors].filter(Boolean).join(' ');
-  const extra = [dia, ...compared.map((c) => `carried: ${c}`)].filter(Boolean).join('; ');
-  return {
-    findings: [],
-    passed: `expected ${expected.outcome} (${expected.reason}); declared ${declared}${extra ? ` — ${extra}` : ''}`,
-  };
+  const outcome = [expected.outcome, dia, ...compared].filter(Boolean).join('; ');
+  return { findings: [], passed: `expected ${outcome} — ${expected.reason}; declared ${declared}` };
 }
 
 export const originSupportsClaim: CheckModule = {
