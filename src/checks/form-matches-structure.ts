@@ -51,6 +51,13 @@ const messages = {
   'diastereomer-undefined-units':
     'Declared single-diastereomer, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}), so the ' +
     'drawing covers several diastereomers. Define them, or declare diastereomer-mixture.',
+  'enantiomer-but-drawn-mixture':
+    'Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate ' +
+    'molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows ' +
+    '(racemate, enantioenriched, diastereomer-mixture).',
+  'racemate-drawn-not-racemic':
+    'Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A ' +
+    'racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.',
   ...mixtureMessages,
 } as const;
 
@@ -71,6 +78,8 @@ function evidence(f: StructureFacts) {
     chiralIsomers: f.stereoisomers.chiral,
     pairs: f.stereoisomers.pairs,
     isomers: Math.max(f.stereoisomers.total, 2 ** undef.length),
+    mixtureCount: f.mixture?.stereoisomers ?? 1,
+    mixtureText: f.mixture?.explanation ?? '',
   };
 }
 
@@ -149,14 +158,18 @@ function run(ctx: CheckContext): CheckOutcome {
       break;
     case 'single-enantiomer':
     case 'enantioenriched':
-      if (f.chiral === false && e.undefinedCount === 0) {
+      // a drawn mixture of the two enantiomers in unequal numbers is what enantioenriched means
+      if (f.mixture && !(form === 'enantioenriched' && f.mixture.kind === 'enantiomers'))
+        add('enantiomer-but-drawn-mixture');
+      else if (f.chiral === false && e.undefinedCount === 0) {
         add('enantiomer-but-achiral', { remedy });
         if (achiralTo !== null) fixTo(achiralTo);
       } else if (e.undefinedCount > 0)
         add('enantiomer-undefined-units', {}, form === 'enantioenriched' ? 'warning' : undefined);
       break;
     case 'racemate':
-      if (f.chiral === false && e.undefinedCount === 0) {
+      if (f.mixture && f.mixture.kind !== 'racemate') add('racemate-drawn-not-racemic');
+      else if (f.chiral === false && e.undefinedCount === 0) {
         add('racemate-but-achiral', { remedy });
         if (achiralTo !== null) fixTo(achiralTo);
       } else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) {

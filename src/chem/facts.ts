@@ -95,6 +95,19 @@ export interface ComponentFacts {
   smiles: string;
 }
 
+/** A drawing that holds several stereoisomers of the parent's constitution as separate molecules. */
+export interface MixtureFacts {
+  /**
+   * racemate: two enantiomers in equal numbers; enantiomers: the two in unequal numbers; diastereomers: no two
+   * are enantiomers; stereoisomers: several, among them an enantiomer pair.
+   */
+  kind: 'racemate' | 'enantiomers' | 'diastereomers' | 'stereoisomers';
+  /** Number of different stereoisomers drawn, and how many molecules of each (in the order first drawn). */
+  stereoisomers: number;
+  ratio: number[];
+  explanation: string;
+}
+
 export interface StructureFacts {
   stereocenters: { atom: number; label: CipLabel | null; element: string; defined: boolean }[];
   stereobonds: { atoms: [number, number]; label: CipLabel | null; kind: UnitKind; defined: boolean }[];
@@ -108,6 +121,11 @@ export interface StructureFacts {
   undefined: number;
   /** With several identical copies of the parent, counts and chirality are those of one copy. */
   stereoisomers: StereoisomerCount;
+  /**
+   * Present only when the drawing holds several stereoisomers of the parent as separate molecules (a racemate
+   * drawn out): counts are then those of one molecule, `chiral` says whether the molecules drawn are chiral.
+   */
+  mixture?: MixtureFacts;
   /** Present only when requested (describe --list, or a check that needs it). */
   stereoisomerList?: StereoisomerEntry[];
   mirror: MirrorFacts;

@@ -27,10 +27,12 @@ suite('identical copies of the parent', () => {
     expect(r.relation).toBe('identical');
     expect(r.otherComponents).toEqual({ onlyInA: ['OS(=O)(=O)O'], onlyInB: ['Cl'] });
   });
-  it('copies of opposite configuration are not grouped (R and S are different compounds)', () => {
+  it('molecules of opposite configuration are not copies: the racemic sulfate is a racemate drawn out (Gold Book "racemate")', () => {
     const f = describe(smiles('C[C@H](N)Cc1ccccc1.C[C@@H](N)Cc1ccccc1.OS(=O)(=O)O'));
-    expect(f.components.map((c) => c.role)).toEqual(['parent', 'other', 'other']);
+    expect(f.components.map((c) => c.role)).toEqual(['parent', 'parent', 'other']);
     expect(f.components.every((c) => c.copies === undefined)).toBe(true);
+    expect(f.mixture).toMatchObject({ kind: 'racemate', ratio: [1, 1] });
+    expect(f).toMatchObject({ chiral: true, meso: false });
   });
   it('a plain 1:1 salt keeps one parent and no copies field (the JSON fields stay as they were)', () => {
     const f = describe(smiles(HCL));

@@ -19,6 +19,7 @@ import type { Structure } from '../types.js';
 import { writeSmiles } from '../write/smiles.js';
 import { analyse, parentComponent, type Analysis } from './analyse.js';
 import { parentCopies, withoutCopies } from './copies.js';
+import { drawnMixture } from './mixture.js';
 import { mirrorFacts } from './evidence.js';
 import { listStereoisomers } from './isomer-list.js';
 
@@ -47,15 +48,25 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   const comps = p.components;
   const parentIndex = parentComponent(s, comps);
   const copies = parentCopies(s, comps, parentIndex);
-  const counted = copies.length > 0 ? analyse(withoutCopies(s, comps, copies)) : a;
+  // Several stereoisomers of the parent drawn as separate molecules (a racemate drawn out): see mixture.ts.
+  const mixture = drawnMixture(s, comps, parentIndex, copies);
+  const dropped = mixture ? mixture.beyondParent : copies;
+  const counted = dropped.length > 0 ? analyse(withoutCopies(s, comps, dropped)) : a;
   const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
   // Planar chirality of a trans ring double bond (8–11 atoms) is not modelled: leave chirality open.
   const planar = transMediumRingBonds(counted.p);
-  const chiral = planar.length > 0 ? null : counted.chirality.chiral;
+  const drawnChiral = mixture
+    ? mixture.chiral.some((c) => c === true)
+      ? true
+      : mixture.chiral.every((c) => c === false)
+        ? false
+        : null
+    : counted.chirality.chiral;
+  const chiral = planar.length > 0 ? null : drawnChiral;
   // Gold Book meso: achiral member of a set with chiral members (so the count must hold a meso form too).
   const meso =
     chiral === null ? null : chiral === false && stereoisomers.chiral > 0 && stereoisomers.meso > 0;
-  const components = componentFacts(a, parentIndex, copies);
+  const components = componentFacts(a, parentIndex, copies, mixture ? mixture.beyondParent : copies);
   const facts: StructureFacts = {
     stereocenters: units
       .filter((u) => u.kind === 'tetrahedral')
@@ -104,7 +115,22 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
       `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`,
     );
   }
-  if (copies.length > 0) {
+  if (mixture) {
+    facts.mixture = mixture.facts;
+    facts.remarks.push(
+      `${mixture.facts.explanation}: a mixture, not one molecule, so stereoisomer counts are those of one molecule and "meso" does not apply to the drawing`,
+    );
+    if (chiral === true) {
+      facts.mirror = {
+        chiral: true,
+        fixedAtoms: [],
+        fixedBonds: [],
+        explanation: `chiral molecules: ${mixture.facts.explanation}`,
+      };
+    }
+    if (facts.enhanced.meaning === 'absolute' || facts.enhanced.meaning === 'none')
+      facts.enhanced.meaning = mixture.facts.kind === 'racemate' ? 'racemic' : 'mixture';
+  } else if (copies.length > 0) {
     facts.remarks.push(
       `${copies.length + 1} identical copies of the parent (${components[parentIndex].formula}): stereoisomer counts and chirality are those of one copy`,
     );
@@ -187,7 +213,8 @@ function enhancedFacts(a: Analysis): EnhancedStereoFacts {
   return { groups, meaning: 'mixed' };
 }
 
-function componentFacts(a: Analysis, parent: number, copies: number[]): ComponentFacts[] {
+/** `copies`: identical copies of the parent; `ofParent`: every other molecule of its constitution (mixtures). */
+function componentFacts(a: Analysis, parent: number, copies: number[], ofParent: number[]): ComponentFacts[] {
   const s = a.p.structure;
   const comps = a.p.components;
   const single = comps.length === 1;
@@ -196,7 +223,7 @@ function componentFacts(a: Analysis, parent: number, copies: number[]): Componen
       index: k,
       formula: single ? molecularFormula(s) : molecularFormula(s, c),
       heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
-      role: k === parent || copies.includes(k) ? 'parent' : 'other',
+      role: k === parent || ofParent.includes(k) ? 'parent' : 'other',
       ...(copies.length > 0 && (k === parent || copies.includes(k)) ? { copies: copies.length + 1 } : {}),
     } as Omit<ComponentFacts, 'smiles'> as ComponentFacts;
     // Written on first read (JSON output, a report): most consumers never look at it, and writing SMILES is
