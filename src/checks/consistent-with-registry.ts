@@ -7,6 +7,7 @@ import type { StructureFacts } from '../chem/facts.js';
 import type { Rotation, StereoForm } from '../registry/types.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding, RegistryEntry } from './types.js';
 import { conditions } from './rotation-consistent.js';
+import { rotationsComparable } from './solvents.js';
 import { finding, fmt } from './words.js';
 
 const messages = {
@@ -32,6 +33,10 @@ const messages = {
     'This compound and its enantiomer {otherId} were measured alike ({conditions}) but their rotations differ in ' +
     'size ({value}° vs {otherValue}°). Enantiomers of equal purity have equal and opposite rotations; check the ' +
     'ee of both samples.',
+  'enantiomer-rotations-not-compared':
+    'The rotations of this compound ({value}°) and of its enantiomer {otherId} ({otherValue}°) were not compared: ' +
+    'they were {reason}. Enantiomers measured alike rotate equally in opposite senses; to have the signs checked, ' +
+    'record both under the same conditions (or the same spelling of the solvent).',
   'enantiomer-form-conflict':
     'This compound is declared {form}, but its enantiomer {otherId} is registered as {otherForm}. Enantiomers have ' +
     'the same kind of form (both single enantiomers, or both enriched); check both records.',
@@ -91,21 +96,6 @@ function isSelf(ctx: CheckContext, e: RegistryEntry): boolean {
   if (e.file !== ctx.loaded.file) return false;
   // Bulk inputs hold many records in one file: there only the same id is the same record.
   return ctx.loaded.origin.kind === 'file' || e.id === ctx.loaded.id;
-}
-
-/** Same wavelength (missing = 589 nm), same solvent (case-insensitive), temperatures within 5 °C. */
-function measuredAlike(a: Rotation, b: Rotation): boolean {
-  const nm = (r: Rotation): number => r.wavelength_nm ?? 589;
-  if (Math.abs(nm(a) - nm(b)) > 1) return false;
-  if ((a.solvent ?? '').trim().toLowerCase() !== (b.solvent ?? '').trim().toLowerCase()) return false;
-  if (
-    a.temperature_c !== undefined &&
-    b.temperature_c !== undefined &&
-    Math.abs(a.temperature_c - b.temperature_c) > 5
-  ) {
-    return false;
-  }
-  return true;
 }
 
 /**
@@ -180,7 +170,17 @@ function run(ctx: CheckContext): CheckOutcome {
       const a = record.stereo.rotation;
       const b = other.record.stereo.rotation;
       const tol = ctx.config.zeroRotationTolerance;
-      if (a && b && measuredAlike(a, b) && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
+      const alike = a && b ? rotationsComparable(a, b) : null;
+      if (a && b && alike && !alike.alike && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
+        // said once, on the record that carries the pair's conflicts
+        if (carriesConflict(me, other))
+          add(
+            'enantiomer-rotations-not-compared',
+            other,
+            { value: fmt(a.value), otherValue: fmt(b.value), reason: alike.reason },
+            'note',
+          );
+      } else if (a && b && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
         const data = { value: fmt(a.value), otherValue: fmt(b.value), conditions: conditions(a) };
         if (Math.sign(a.value) === Math.sign(b.value)) add('enantiomer-rotation-same-sign', other, data);
         else if (

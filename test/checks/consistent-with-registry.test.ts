@@ -74,7 +74,7 @@ describe('consistent-with-registry', () => {
     );
     expect(ids(o)).toEqual(['enantiomer-registered', 'enantiomer-rotation-same-sign']);
   });
-  it('does not compare rotations measured differently', () => {
+  it('does not compare rotations measured differently, and says so in a note (see solvents.test.ts)', () => {
     const o = runCheck(
       check,
       setup(
@@ -83,7 +83,7 @@ describe('consistent-with-registry', () => {
         theirs({ rotation: rot(58, { solvent: 'ethanol' }) }),
       ),
     );
-    expect(ids(o)).toEqual(['enantiomer-registered']);
+    expect(ids(o)).toEqual(['enantiomer-registered', 'enantiomer-rotations-not-compared']);
   });
   it('notes enantiomers of unequal rotation size', () => {
     const o = runCheck(
