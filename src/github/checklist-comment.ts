@@ -113,7 +113,7 @@ export function ours(comments: readonly ApiComment[], marker: string): ApiCommen
     .sort((a, b) => a.id - b.id);
 }
 
-/** Deletes the comments in `found` other than `keep` written by the same bot; a 404 (already gone) is fine. */
+/** Deletes the comments in `found` other than `keep` written by the same bot; a refusal is not an error. */
 async function removeDuplicates(
   client: GitHubClient,
   base: string,
@@ -127,7 +127,8 @@ async function removeDuplicates(
       await client.request('DELETE', `${base}/comments/${comment.id}`);
       removed++;
     } catch (error) {
-      if (!(error instanceof GitHubApiError && error.status === 404)) throw error;
+      // already gone (404), or not ours to delete (403): the comment that counts is kept either way
+      if (!(error instanceof GitHubApiError)) throw error;
     }
   }
   return removed;

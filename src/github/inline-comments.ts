@@ -117,7 +117,7 @@ async function postOnce(
   }
 }
 
-/** Keeps the newest of each path, line and body written by the same bot; a 404 (already gone) is fine. */
+/** Keeps the newest of each path, line and body written by the same bot; a refusal is not an error. */
 async function removeDuplicates(
   client: GitHubClient,
   pr: PullRequestRef,
@@ -137,7 +137,8 @@ async function removeDuplicates(
       await client.request('DELETE', `/repos/${enc(pr.owner)}/${enc(pr.repo)}/pulls/comments/${c.id}`);
       removed++;
     } catch (error) {
-      if (!(error instanceof GitHubApiError && error.status === 404)) throw error;
+      // already gone (404), or not ours to delete (403): the comment that counts is kept either way
+      if (!(error instanceof GitHubApiError)) throw error;
     }
   }
   return removed;
