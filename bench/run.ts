@@ -5,6 +5,7 @@
  *   cip     share of the per-record audit time spent in CIP labelling
  *   bulk    bulk audit of 100,000 records (MoleculeNet replicated, invented claims) with 1 and 2 workers
  *   action  a 20-record pull request against a 5,000-record registry vs the pure audit of the same records
+ *   outputs Markdown escaping vs the former escaping; the 10,000-record HTML report opened in chromium
  * Data: Wu et al., "MoleculeNet", Chem. Sci. 2018, 9, 513 (../shared/data/moleculenet).
  */
 import { existsSync } from 'node:fs';
@@ -51,6 +52,7 @@ const SECTIONS: [string, Section][] = [
   ['bulk', async (ctx) => (await import('./bulk.js')).benchBulk(ctx)],
   ['cip', async (ctx) => (await import('./cip.js')).benchCip(ctx)],
   ['action', async (ctx) => (await import('./action.js')).benchAction(ctx)],
+  ['outputs', async () => (await import('./outputs.js')).benchOutputs()],
   [
     'bulk-memory',
     async (ctx) =>

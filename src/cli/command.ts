@@ -34,11 +34,9 @@ export class UsageError extends Error {
 /** An input or output the command cannot use (unreadable structure, unwritable --output): one line, exit 2. */
 export class InputError extends Error {}
 
+export const EXIT_OK = 0;
 /** Findings at the --fail-on level (audit). Usage errors and unusable inputs or outputs exit EXIT_USAGE. */
 export const EXIT_FINDINGS = 1;
-
-export const EXIT_OK = 0;
-export const EXIT_BAD_INPUT = 1;
 export const EXIT_USAGE = 2;
 /**
  * stereogate itself failed (a bug, or a fault outside the input: disk full, out of memory). Never 1, so a crash
