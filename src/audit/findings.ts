@@ -126,6 +126,30 @@ export function internalError(check: Pick<CheckModule, 'id'>, error: unknown, lo
   };
 }
 
+/** Id of the finding made when a record exceeds its time limit or memory bound (the bulk audit uses it too). */
+export const TIME_LIMIT_ID = 'record-time-limit';
+
+/** A record stopped by its time limit or memory bound: the finding names the limit and what to do. */
+export function budgetFinding(loaded: LoadedRecord, kind: 'time' | 'memory', limit: number): Finding {
+  const what =
+    kind === 'time'
+      ? `took longer than the ${limit / 1000} s time limit`
+      : `needed more than the ${limit} MB memory bound`;
+  return {
+    check: TIME_LIMIT_ID,
+    messageId: kind === 'time' ? 'time-limit-exceeded' : 'memory-bound-exceeded',
+    severity: 'error',
+    message:
+      `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. ` +
+      'Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, ' +
+      'leave out repeated salt or solvent parts).',
+    data: { kind, limit },
+    line: loaded.origin.kind === 'bulk' ? loaded.origin.line : lineOf(loaded.positions, 'structure'),
+    field: null,
+    waived: null,
+  };
+}
+
 export function schemaFindings(loaded: LoadedRecord, config: AuditConfig): Finding[] {
   const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
   if (configured === 'off') return [];

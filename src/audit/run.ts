@@ -12,6 +12,7 @@ import { CAUTION } from './caution.js';
 import { ConfigError, DEFAULT_CONFIG, checkSeverityIds, loadConfig } from './config.js';
 import { defaultEngine, type AuditEngine } from './engine.js';
 import {
+  budgetFinding,
   SCHEMA_CHECK_ID,
   applyWaivers,
   configuredSeverity,
@@ -21,6 +22,7 @@ import {
   toFinding,
 } from './findings.js';
 import { selectRecords } from './select.js';
+import { BudgetExceeded, withBudget, type Budget } from '../chem/budget.js';
 import { StructureCache } from './structures.js';
 import type {
   AuditResult,
@@ -33,7 +35,15 @@ import type {
 import { VERSION } from './version.js';
 import { buildRegistryView } from './view.js';
 
+/**
+ * Default per-record limits of the audit: 20 s (as the bulk audit's --record-timeout) and 1 GiB of heap growth.
+ * A record over either gets a record-time-limit finding and the run goes on.
+ */
+export const RECORD_BUDGET: Readonly<Budget> = Object.freeze({ timeMs: 20_000, memoryMb: 1024 });
+
 export interface AuditRecordsOptions {
+  /** Per-record time and memory limits (default RECORD_BUDGET). */
+  budget?: Budget;
   checks: readonly CheckModule[];
   config?: AuditConfig;
   engine: AuditEngine;
@@ -55,10 +65,14 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
   const registry = buildRegistryView(registryRecords, cache, (r) => audited.has(r));
   registry.incomplete = options.registryIncomplete ?? null;
   const engineApi = { relate: options.engine.relate.bind(options.engine) };
+  const budget = options.budget ?? RECORD_BUDGET;
   const results = records.map((loaded) => {
     try {
-      return auditOne(loaded, options.checks, config, cache, registry, engineApi);
+      return withBudget(budget, 'the audit of this record', () =>
+        auditOne(loaded, options.checks, config, cache, registry, engineApi),
+      );
     } catch (e) {
+      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
       // a fault outside any one check (a bug): this record gets an internal-error finding, the others go on
       return {
         id: loaded.id,
@@ -120,6 +134,7 @@ function auditOne(
         .filter((raw) => messageEnabled(config, check.id, raw.messageId))
         .map((raw) => toFinding(check, raw, loaded, config));
     } catch (e) {
+      if (e instanceof BudgetExceeded) throw e; // the record's limit, not a fault of the check
       findings.push(internalError(check, e, loaded));
       continue;
     }
@@ -161,6 +176,30 @@ function missingInput(check: CheckModule, ctx: CheckContext): string | null {
   return null;
 }
 
+/** The result of a record stopped by its budget: one record-time-limit finding, nothing else claimed. */
+function overBudget(
+  loaded: LoadedRecord,
+  e: BudgetExceeded,
+  checks: readonly CheckModule[],
+): RecordResult {
+  const reason =
+    e.kind === 'time'
+      ? 'the record was stopped at its time limit (see record-time-limit)'
+      : 'the record was stopped at its memory bound (see record-time-limit)';
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: null,
+    findings: [budgetFinding(loaded, e.kind, e.limit)],
+    passed: [],
+    notRun: checks.map((c) => ({ check: c.id, reason })),
+    declared: {
+      form: loaded.record?.stereo.form ?? null,
+      descriptors: loaded.record?.stereo.descriptors ?? null,
+    },
+  };
+}
+
 export function summarize(records: readonly RecordResult[]): AuditSummary {
   const s: AuditSummary = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
   for (const r of records) {
@@ -187,6 +226,8 @@ export interface RunAuditOptions {
   checks?: CheckModule[];
   /** Engine; default src/chem. */
   engine?: AuditEngine;
+  /** Per-record time and memory limits (default RECORD_BUDGET). */
+  budget?: Budget;
 }
 
 /** Loads every record under `root` as the registry and audits those named by `paths`. Throws ConfigError on usage errors. */
@@ -200,7 +241,12 @@ export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
   const checks = options.checks ?? (await import('../checks/index.js')).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
   const messageIds = new Map(checks.map((c) => [c.id, Object.keys(c.messages)]));
-  checkSeverityIds(config, ids, (w) => closestWord(w, ids), (id) => messageIds.get(id));
+  checkSeverityIds(
+    config,
+    ids,
+    (w) => closestWord(w, ids),
+    (id) => messageIds.get(id),
+  );
   const engine = options.engine ?? (await defaultEngine());
   const load = loadRegistry(root, { recordDirs: config.recordDirs });
   if (load.missingDirs.length > 0) {
@@ -216,7 +262,13 @@ export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
     toAudit = load.records.filter((r) => sel.selected.has(r));
     unmatched = sel.unmatched;
   }
-  const result = auditRecords(toAudit, { checks, config, engine, registry: load.records });
+  const result = auditRecords(toAudit, {
+    checks,
+    config,
+    engine,
+    registry: load.records,
+    budget: options.budget,
+  });
   if (unmatched.length > 0) result.unmatched = unmatched;
   return result;
 }

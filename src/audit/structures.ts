@@ -5,6 +5,7 @@
 import type { ReadStructure } from '../checks/types.js';
 import type { LoadedRecord, StructureSource } from '../registry/types.js';
 import type { AuditEngine } from './engine.js';
+import { BudgetExceeded } from '../chem/budget.js';
 
 export interface RecordStructures {
   main: ReadStructure;
@@ -37,6 +38,7 @@ export function readOnly(source: StructureSource | null, engine: AuditEngine): R
   try {
     read = engine.readStructure(source.text, { format: source.format });
   } catch (e) {
+    if (e instanceof BudgetExceeded) throw e; // the record's budget: its caller makes the finding
     const what = source.format === 'smiles' ? 'SMILES' : 'molfile';
     return {
       structure: null,
@@ -63,6 +65,7 @@ export function describeRead(read: ReadOnly, engine: AuditEngine): ReadStructure
   try {
     return { structure: read.structure, facts: engine.describe(read.structure), error: null };
   } catch (e) {
+    if (e instanceof BudgetExceeded) throw e; // not cached: the structure is tried again for another record
     return {
       structure: read.structure,
       facts: null,

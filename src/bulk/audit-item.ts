@@ -5,13 +5,15 @@
  */
 import type { AuditConfig, CheckModule } from '../checks/types.js';
 import type { AuditEngine } from '../audit/engine.js';
+import type { Budget } from '../chem/budget.js';
 import { auditRecords } from '../audit/run.js';
 import type { RecordResult } from '../audit/types.js';
 import type { ComponentFacts, StructureFacts } from '../chem/facts.js';
 import type { LoadedRecord } from '../registry/types.js';
 import type { BulkMapping, VocabularyResult } from './mapping.js';
 import type { BulkItem } from './sources.js';
-import { toRecord } from './to-record.js';
+import { field, toRecord } from './to-record.js';
+import { DEFAULT_COLUMNS } from './mapping.js';
 
 /**
  * The computed facts as a bulk output carries them: everything `describe` computes except the stereocenters and
@@ -90,12 +92,28 @@ export const BULK_REGISTRY_NOT_COMPARED =
   'a bulk audit checks each record of the export on its own, not against the other records; audit the ' +
   'registry as record files to compare records with one another';
 
+/**
+ * The id a bulk item is reported under, read as auditItem reads it (the mapped id field, else an SD record's
+ * title line, else source#record): records stopped by the time limit or a worker crash keep their id too.
+ */
+export function itemId(item: BulkItem, mapping: BulkMapping): string {
+  const col = mapping.id ?? DEFAULT_COLUMNS.id;
+  if (item.text !== undefined) {
+    const sd = splitSdRecord(item.text);
+    const title = sd.molfile.split('\n', 1)[0]!.trim();
+    return field(sd.fields, col)?.trim() || title || `${item.source}#${item.record}`;
+  }
+  return field(item.fields ?? {}, col)?.trim() || `${item.source}#${item.record}`;
+}
+
 export interface ItemContext {
   mapping: BulkMapping;
   vocabulary: (word: string | undefined) => VocabularyResult;
   checks: readonly CheckModule[];
   config: AuditConfig;
   engine: AuditEngine;
+  /** Per-record limits (default: the audit's RECORD_BUDGET). */
+  budget?: Budget;
 }
 
 export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): BulkRecordResult {
@@ -135,6 +153,8 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
     config: ctx.config,
     engine: ctx.engine,
     registryIncomplete: BULK_REGISTRY_NOT_COMPARED,
+
+    budget: ctx.budget,
   }).records[0];
   const out: BulkRecordResult = {
     ...result,

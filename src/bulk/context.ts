@@ -1,6 +1,7 @@
 /** What a bulk worker (or the inline path) needs: engine, checks, config, mapping, and the output renderer. */
 import { defaultEngine } from '../audit/engine.js';
 import type { AuditConfig } from '../checks/types.js';
+import type { Budget } from '../chem/budget.js';
 import type { ItemContext } from './audit-item.js';
 import { makeVocabulary, type BulkMapping } from './mapping.js';
 import { makeRenderer, type Renderer, type RenderWants } from './render-record.js';
@@ -11,6 +12,8 @@ export interface WorkerSetup {
   mapping: BulkMapping;
   config: AuditConfig;
   wants: RenderWants;
+  /** Per-record time and memory limits the worker stops a record at itself (the pool's kill is the backstop). */
+  budget?: Budget;
 }
 
 export interface BulkContext extends ItemContext {
@@ -25,6 +28,7 @@ export async function makeItemContext(setup: WorkerSetup): Promise<BulkContext> 
     checks: CHECKS,
     config: setup.config,
     engine,
+    budget: setup.budget,
     render: makeRenderer(setup.wants, bulkSarifRules(CHECKS)),
   };
 }

@@ -12,7 +12,7 @@
  *   again.
  * - `workers: 0` runs the handler in this thread (no timeout protection; for tests and tiny inputs).
  */
-import { Worker } from 'node:worker_threads';
+import { Worker, type ResourceLimits } from 'node:worker_threads';
 
 export interface PoolOptions<I, O> {
   workers: number;
@@ -27,6 +27,8 @@ export interface PoolOptions<I, O> {
   onTimeout: (item: I, index: number) => O;
   /** A worker that dies (crash, out of memory) -> its current item gets this result. */
   onCrash?: (item: I, index: number, error: string) => O;
+  /** V8 heap limits of each worker (a worker over them dies with ERR_WORKER_OUT_OF_MEMORY: `onCrash`). */
+  resourceLimits?: ResourceLimits;
   /** In-process fallback used when workers is 0. */
   inline?: (item: I) => O;
   batchSize?: number;
@@ -137,7 +139,7 @@ export async function* mapOrdered<I, O>(
     const progress = new Int32Array(shared);
     progress[0] = -1;
     const data: PoolWorkerData = { user: opts.workerData, progress: shared };
-    const worker = startWorker(opts.script, opts.execArgv, data);
+    const worker = startWorker(opts.script, opts.execArgv, data, opts.resourceLimits);
     const slot: Slot<I> = {
       worker,
       progress,
@@ -287,13 +289,19 @@ export async function* mapOrdered<I, O>(
 }
 
 /** Start a worker; TypeScript entries are loaded through tsx's loader, registered inside the worker. */
-function startWorker(script: URL, execArgv: string[] | undefined, data: unknown): Worker {
-  if (!script.pathname.endsWith('.ts')) return new Worker(script, { execArgv, workerData: data });
+function startWorker(
+  script: URL,
+  execArgv: string[] | undefined,
+  data: unknown,
+  resourceLimits: ResourceLimits | undefined,
+): Worker {
+  if (!script.pathname.endsWith('.ts'))
+    return new Worker(script, { execArgv, workerData: data, resourceLimits });
   const tsx = import.meta.resolve('tsx/esm/api');
   const code =
     `import(${JSON.stringify(tsx)}).then((m) => { m.register(); return import(${JSON.stringify(script.href)}); })` +
     `.catch((e) => { setImmediate(() => { throw e; }); });`;
-  return new Worker(code, { eval: true, execArgv, workerData: data });
+  return new Worker(code, { eval: true, execArgv, workerData: data, resourceLimits });
 }
 
 async function* toAsync<I>(items: Iterable<I>): AsyncGenerator<I> {

@@ -6,7 +6,7 @@
 import { createReadStream } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import type { AuditConfig } from '../checks/types.js';
-import { auditItem, type BulkRecordResult } from './audit-item.js';
+import { auditItem, itemId, type BulkRecordResult } from './audit-item.js';
 import { makeItemContext, type WorkerSetup } from './context.js';
 import type { BulkMapping } from './mapping.js';
 import { BulkAccumulator } from './accumulate.js';
@@ -35,6 +35,14 @@ export interface BulkOptions {
   /** Called for every rendered record in order. */
   onRecord?: (r: RenderedRecord) => void;
 }
+
+/** Heap growth one record may cause before it is stopped (a record-time-limit finding). */
+export const RECORD_MEMORY_MB = 1024;
+/**
+ * Old-generation heap limit of each bulk worker: a record that outgrows it crashes only its worker (the pool
+ * reports it on that record and starts a new worker), never the machine.
+ */
+export const WORKER_HEAP_MB = 1536;
 
 export function isBulkInput(path: string): boolean {
   return formatOf(path) !== null;
@@ -80,13 +88,14 @@ export function timeoutResult(
   item: BulkItem & { seq: number },
   limitMs: number,
   crashed: string | null,
+  id: string | null = null,
 ): BulkRecordResult {
   const message = crashed
     ? `the audit of this record crashed its worker (${crashed}); it was not audited, the run went on`
     : `the audit of this record took longer than the ${Math.round(limitMs / 1000)} s limit; it was stopped and the run went on`;
   return {
     seq: item.seq,
-    id: null,
+    id,
     file: item.source,
     computed: null,
     findings: [
@@ -131,7 +140,9 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
   }
   const progress = makeProgress(progressMode, total);
   const wants = wantsOf(opts.writers);
-  const setup: WorkerSetup = { mapping: opts.mapping, config: opts.config, wants };
+  // the worker stops a record itself a little before the pool would terminate it (no worker restart then)
+  const budget = { timeMs: Math.max(1, Math.floor(timeoutMs * 0.9)), memoryMb: RECORD_MEMORY_MB };
+  const setup: WorkerSetup = { mapping: opts.mapping, config: opts.config, wants, budget };
   const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
   const script = new URL(`./worker${ext}`, import.meta.url);
   // Time-limit and crash results are made here, so this thread renders them too (same rules as the workers).
@@ -150,9 +161,10 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
       script,
       workerData: setup,
       timeoutMs,
-      onTimeout: (item) => render(timeoutResult(item, timeoutMs, null)),
-      onCrash: (item, _i, error) => render(timeoutResult(item, timeoutMs, error)),
+      onTimeout: (item) => render(timeoutResult(item, timeoutMs, null, itemId(item, opts.mapping))),
+      onCrash: (item, _i, error) => render(timeoutResult(item, timeoutMs, error, itemId(item, opts.mapping))),
       inline,
+      resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
       batchSize: opts.batchSize ?? 16,
       onStats: opts.onPoolStats,
     },

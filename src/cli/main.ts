@@ -83,6 +83,8 @@ export function crashMessage(where: string, e: unknown): string {
  */
 export function installCrashHandlers(): void {
   const onCrash = (e: unknown): void => {
+    // the reader of our output went away (`stereogate describe … | head`): not a crash, nothing left to say
+    if ((e as NodeJS.ErrnoException | null)?.code === 'EPIPE') process.exit(Number(process.exitCode ?? 0));
     process.stderr.write(`${crashMessage('stereogate', e)}\n`);
     process.exit(EXIT_CRASH);
   };

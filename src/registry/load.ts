@@ -127,7 +127,8 @@ function structureSources(
   const comps = asObject(top?.stereo)?.components;
   const components: StructureSource[] = [];
   if (Array.isArray(comps)) {
-    comps.forEach((c, i) => {
+    // over the schema's limit the record fails the schema; its components are not read (that is the bound)
+    comps.slice(0, MAX_COMPONENTS_READ).forEach((c, i) => {
       const s = sourceOf(asObject(c), `stereo.components.${i}`, fetchMolfile);
       components.push(
         s ?? { field: `stereo.components.${i}`, format: 'smiles', text: null, error: 'no structure given' },
@@ -136,6 +137,9 @@ function structureSources(
   }
   return { main, components };
 }
+
+/** Components of one record that are read (record.schema.json allows 50; more is a schema problem). */
+export const MAX_COMPONENTS_READ = 50;
 
 /** A duplicate id is a problem on every record that carries it. */
 export function markDuplicateIds(records: LoadedRecord[]): void {

@@ -197,6 +197,13 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
       };
     case 'pattern':
       return { path, message: `${label}: ${quote(got)} must not start or end with spaces` };
+    case 'maxItems': {
+      const n = Array.isArray(got) ? got.length : 0;
+      return {
+        path,
+        message: `${label}: ${n} items, more than the limit of ${(e.params as { limit: number }).limit}; the record is not audited (split it into several records)`,
+      };
+    }
     case 'minItems':
       return { path, message: `${label}: needs at least ${(e.params as { limit: number }).limit} item(s)` };
     case 'maxItems':

@@ -70,3 +70,25 @@ describe('ordered worker pool', () => {
     expect(out).toEqual([2, 3, 4]);
   });
 });
+
+describe('worker heap limit (issue 10: one 15 MB SMILES cell reached 4 GB)', () => {
+  it('a worker over its heap limit dies alone: its item gets the crash result, the rest go on', async () => {
+    const input = [2, -3, 3];
+    const errors: string[] = [];
+    const out = await collect(
+      mapOrdered(input, {
+        ...base,
+        timeoutMs: 30_000,
+        workers: 1,
+        batchSize: 1,
+        resourceLimits: { maxOldGenerationSizeMb: 48, maxYoungGenerationSizeMb: 8 },
+        onCrash: (_item, _i, error) => {
+          errors.push(error);
+          return -555;
+        },
+      }),
+    );
+    expect(out).toEqual([4, -555, 9]);
+    expect(errors[0]).toMatch(/memory/i);
+  });
+});

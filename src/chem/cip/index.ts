@@ -18,6 +18,7 @@ import type { CipLabel } from '../facts.js';
 import type { Structure } from '../types.js';
 import { buildGraph } from './graph.js';
 import { labelPlain, labelRule6 } from './label.js';
+import { checkBudget } from '../budget.js';
 
 export { findHelices, type HelixResult } from './helix.js';
 
@@ -34,7 +35,10 @@ export interface CipResult {
 export function assignCip(s: Structure): CipResult[] {
   if (s.stereo.length === 0) return [];
   const g = buildGraph(s);
-  const labels = s.stereo.map((_, i) => labelPlain(g, i));
+  const labels = s.stereo.map((_, i) => {
+    checkBudget();
+    return labelPlain(g, i);
+  });
   if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
     // Rule 6 (Hanson et al. 2018) only for what Rules 1-5 leave tied, lending descriptors only from units
     // found stereogenic; a unit labelled by Rule 6 may in turn settle another one, so repeat once more.

@@ -13,6 +13,7 @@ import {
   type UnitGroup,
 } from '../symmetry/index.js';
 import type { Structure } from '../types.js';
+import { checkBudget } from '../budget.js';
 
 /** Everything describe() and relate() compute once per structure. */
 export interface Analysis {
@@ -57,6 +58,7 @@ function stereogenicSomewhere(g: UnitGroup, x: State, defined: Uint8Array, k: nu
   const y = Uint8Array.from(x);
   let seenFeasible = false;
   for (let mask = 0; mask < 1 << open.length; mask++) {
+    checkBudget(g.perms.length);
     for (let b = 0; b < open.length; b++) y[open[b]] = (mask >> b) & 1;
     if (!feasible(g, y)) continue;
     seenFeasible = true;

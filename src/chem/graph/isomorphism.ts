@@ -20,6 +20,7 @@ import {
   type CsrGraph,
   type Partition,
 } from './refine.js';
+import { checkBudget } from '../budget.js';
 
 export interface IsomorphismOptions {
   /** Atoms of A whose images (and the images of their neighbours) distinguish mappings. */
@@ -296,6 +297,7 @@ class Search {
     ys.sort((u, v) => u - v);
     let any = NONE;
     for (const y of ys) {
+      checkBudget();
       if (++this.nodes > this.maxNodes) {
         this.budgetHit = true;
         return STOP;

@@ -4,12 +4,17 @@
 import type { ReadResult } from '../types.js';
 import { parseMolfile, splitLines } from './molfile.js';
 import { parseSmiles } from './smiles.js';
+import { READ_LIMITS, structureTooLarge, textTooLong, type ReadLimits } from './limits.js';
+
+export { READ_LIMITS, type ReadLimits } from './limits.js';
 
 export { parseMolfile } from './molfile.js';
 export { readSdRecords, streamSdRecords, type SdRecord } from './sdf.js';
 
 export interface ReadOptions {
   format?: 'auto' | 'smiles' | 'molfile';
+  /** Size caps (default READ_LIMITS); input over a cap is a reader error, not a structure. */
+  limits?: ReadLimits;
 }
 
 /** true when line 4 has the shape of a V2000 counts line, or the text says V3000. */
@@ -27,6 +32,12 @@ export function looksLikeMolfile(text: string): boolean {
 
 export function readStructure(text: string, opts?: ReadOptions): ReadResult {
   const format = opts?.format ?? 'auto';
-  if (format === 'molfile' || (format === 'auto' && looksLikeMolfile(text))) return parseMolfile(text);
-  return parseSmiles(text);
+  const limits = opts?.limits ?? READ_LIMITS;
+  const molfile = format === 'molfile' || (format === 'auto' && looksLikeMolfile(text));
+  const long = textTooLong(text, molfile ? 'molfile' : 'smiles', limits);
+  if (long !== null) return { ok: false, error: long };
+  const read = molfile ? parseMolfile(text, { limits }) : parseSmiles(text);
+  if (!read.ok) return read;
+  const large = structureTooLarge(read.structure, limits);
+  return large === null ? read : { ok: false, error: large };
 }

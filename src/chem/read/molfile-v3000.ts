@@ -8,6 +8,7 @@ import { finishMolecule } from './molfile-build.js';
 import { elementOf } from './molfile-fields.js';
 import { makeBond } from './molfile-bond.js';
 import { coords3, newAtom, newGroup, objectList } from './make.js';
+import { READ_LIMITS, tooManyAtoms, type ReadLimits } from './limits.js';
 
 interface V30Line {
   text: string;
@@ -71,6 +72,7 @@ export function parseV3000(
   end: number,
   firstLine: number,
   title: string | null,
+  limits: ReadLimits = READ_LIMITS,
 ): ReadResult {
   const base = idx;
   const lineNo = (i: number): number => firstLine + (i - base);
@@ -193,6 +195,8 @@ export function parseV3000(
       }
       chiralFlag = t[5] === '1';
       countsLine = line;
+      const large = tooManyAtoms(expectAtoms, limits, { line });
+      if (large !== null) return { ok: false, error: large };
       continue;
     }
     if (block === 'ATOM') {

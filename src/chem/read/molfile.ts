@@ -7,12 +7,15 @@ import type { Atom, Bond, ReadError, ReadResult } from '../types.js';
 import { finishMolecule, type RawMolecule } from './molfile-build.js';
 import { elementOf, floatField, intField, roundedMass, tokens } from './molfile-fields.js';
 import { parseV3000 } from './molfile-v3000.js';
+import { READ_LIMITS, tooManyAtoms, type ReadLimits } from './limits.js';
 import { makeBond } from './molfile-bond.js';
 import { coords3, newAtom, objectList } from './make.js';
 
 export interface MolfileOptions {
   /** Line number of the molfile's first line within a larger file (for error positions); default 1. */
   firstLine?: number;
+  /** Size caps (default READ_LIMITS): an atom count over the cap is refused at the counts line. */
+  limits?: ReadLimits;
 }
 
 /** Splits text into lines, dropping a trailing '\r' from each. */
@@ -28,7 +31,7 @@ export function splitLines(text: string): string[] {
 
 export function parseMolfile(text: string, opts?: MolfileOptions): ReadResult {
   const lines = splitLines(text);
-  return parseMolfileLines(lines, 0, lines.length, opts?.firstLine ?? 1);
+  return parseMolfileLines(lines, 0, lines.length, opts?.firstLine ?? 1, opts?.limits);
 }
 
 function fail(code: string, message: string, line: number): ReadResult {
@@ -70,6 +73,7 @@ export function parseMolfileLines(
   start: number,
   end: number,
   firstLine: number,
+  limits: ReadLimits = READ_LIMITS,
 ): ReadResult {
   const lineNo = (idx: number): number => firstLine + (idx - start);
   if (end - start < 4) {
@@ -81,7 +85,7 @@ export function parseMolfileLines(
   }
   const title = lines[start]!.trim() || null;
   const counts = lines[start + 3]!;
-  if (counts.includes('V3000')) return parseV3000(lines, start + 4, end, firstLine + 4, title);
+  if (counts.includes('V3000')) return parseV3000(lines, start + 4, end, firstLine + 4, title, limits);
 
   let nAtoms = intField(counts, 0, 3);
   let nBonds = intField(counts, 3, 6);
@@ -116,6 +120,8 @@ export function parseMolfileLines(
     });
   }
   if (!(nLists >= 0)) nLists = 0;
+  const large = tooManyAtoms(nAtoms, limits, { line: lineNo(start + 3) });
+  if (large !== null) return { ok: false, error: large };
   if (nAtoms === 0) {
     const early = shortHeader(lines, start, end);
     return early >= 0

@@ -8,7 +8,7 @@ import { existsSync, writeFileSync } from 'node:fs';
 import { isAbsolute, relative, resolve, sep } from 'node:path';
 import { ConfigError } from '../../audit/config.js';
 import type { AuditEngine } from '../../audit/engine.js';
-import { runAudit } from '../../audit/run.js';
+import { RECORD_BUDGET, runAudit } from '../../audit/run.js';
 import type { AuditResult } from '../../audit/types.js';
 import type { CheckModule } from '../../checks/types.js';
 import { renderJson } from '../../report/json.js';
@@ -27,6 +27,7 @@ export { EXIT_FINDINGS };
 const USAGE = [
   'Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]',
   '                        [--output FILE] [--fail-on error|warning|never] [--verbose]',
+  '                        [--record-timeout SECS]',
   '',
   '  paths…               record files, folders or molfiles to audit (default: every record); the whole',
   '                       registry is still loaded for the cross-record checks',
@@ -38,6 +39,8 @@ const USAGE = [
   '                       (default: records with findings first, one line per record without)',
   '  --fail-on LEVEL      exit 1 when a finding not accepted by a waiver is at least this severe:',
   '                       error (default), warning, or never',
+  '  --record-timeout SECS  per-record time limit (default 20); a record over it, or over 1 GiB of memory,',
+  '                       gets a record-time-limit finding and the audit goes on',
   '',
   'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error or a report',
   'file that cannot be written, 3 internal error (the report is still written; records it hit carry an',
@@ -97,6 +100,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           output: { type: 'string' },
           'fail-on': { type: 'string', choices: ['error', 'warning', 'never'], default: 'error' },
           verbose: { type: 'boolean', short: 'v' },
+          'record-timeout': { type: 'string' },
         },
         { min: 0, max: Infinity, names: 'paths' },
       );
@@ -107,6 +111,9 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       if (output === '') throw new UsageError('--output needs a file name');
       if (output !== undefined) checkWritable(output, 'the report');
       const paths = toRootPaths(positionals, root);
+      const timeout = values['record-timeout'];
+      const seconds = typeof timeout === 'string' ? Number(timeout) : RECORD_BUDGET.timeMs / 1000;
+      if (!(seconds > 0)) throw new UsageError('--record-timeout expects a positive number of seconds');
       let result: AuditResult;
       try {
         result = await runAudit({
@@ -115,6 +122,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           configFile: values.config as string | undefined,
           checks: deps.checks,
           engine: deps.engine,
+          budget: { ...RECORD_BUDGET, timeMs: seconds * 1000 },
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);

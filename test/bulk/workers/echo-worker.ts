@@ -1,4 +1,5 @@
-// Test worker: squares numbers, spins forever on -1 (a stand-in for a pathological structure), crashes on -2.
+// Test worker: squares numbers, spins forever on -1 (a stand-in for a pathological structure), crashes on -2,
+// allocates without end on -3 (a record that would fill the memory).
 import { serveWorker } from '../../../src/bulk/worker-entry.js';
 
 serveWorker<number, number>((n) => {
@@ -7,5 +8,9 @@ serveWorker<number, number>((n) => {
       /* stall */
     }
   if (n === -2) process.exit(3);
+  if (n === -3) {
+    const hoard: number[][] = [];
+    for (;;) hoard.push(new Array<number>(1 << 16).fill(n));
+  }
   return n * n;
 });
