@@ -6,6 +6,7 @@
  *   bulk    bulk audit of 100,000 records (MoleculeNet replicated, invented claims) with 1 and 2 workers
  *   action  a 20-record pull request against a 5,000-record registry vs the pure audit of the same records
  *   outputs Markdown escaping vs the former escaping; the 10,000-record HTML report opened in chromium
+ *   origin  the pull-request audit with an origin on every record vs without; the mapping's bound per record
  * Data: Wu et al., "MoleculeNet", Chem. Sci. 2018, 9, 513 (../shared/data/moleculenet).
  */
 import { existsSync } from 'node:fs';
@@ -53,6 +54,7 @@ const SECTIONS: [string, Section][] = [
   ['cip', async (ctx) => (await import('./cip.js')).benchCip(ctx)],
   ['action', async (ctx) => (await import('./action.js')).benchAction(ctx)],
   ['outputs', async () => (await import('./outputs.js')).benchOutputs()],
+  ['origin', async (ctx) => (await import('./origin.js')).benchOrigin(ctx)],
   [
     'bulk-memory',
     async (ctx) =>

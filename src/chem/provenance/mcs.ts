@@ -39,12 +39,12 @@ export interface McsResult {
 export interface McsOptions {
   /** Product atoms the piece may use (others belong to another input already); default all. */
   available?: Uint8Array;
-  /** Search steps (candidate tries) before the search stops; default 200,000. */
+  /** Search steps (candidate tries) before the search stops; default 100,000. */
   budget?: number;
 }
 
 export const AROMATIC_CLASS = 5;
-export const DEFAULT_MCS_BUDGET = 200_000;
+export const DEFAULT_MCS_BUDGET = 100_000;
 
 export function mcsGraph(p: Perception): McsGraph {
   const s = p.structure;
@@ -68,6 +68,31 @@ export function bondClass(g: McsGraph, x: number, y: number): number {
 }
 
 class Budget extends Error {}
+
+const RADIUS = 3;
+
+/**
+ * Environment codes of each atom at radius 0..RADIUS (element and hydrogens, then the neighbours' codes with bond
+ * classes), for ordering only: a pair whose surroundings agree further out is tried first, so that the first
+ * piece found is usually the right one and the bound prunes the rest early.
+ */
+function environments(g: McsGraph): Int32Array[] {
+  const out = [Int32Array.from(g.element, (e, i) => e * 8 + Math.min(g.h[i], 7))];
+  for (let r = 1; r <= RADIUS; r++) {
+    const prev = out[r - 1];
+    const next = new Int32Array(g.n);
+    for (let i = 0; i < g.n; i++) {
+      const parts: number[] = [];
+      for (let k = 0; k < g.nbrs[i].length; k++) parts.push(prev[g.nbrs[i][k]] * 8 + g.cls[i][k]);
+      parts.sort((x, y) => x - y);
+      let h = prev[i] | 0;
+      for (const x of parts) h = (Math.imul(h, 31) + x) | 0;
+      next[i] = h;
+    }
+    out.push(next);
+  }
+  return out;
+}
 
 export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions = {}): McsResult {
   const budget = options.budget ?? DEFAULT_MCS_BUDGET;
@@ -99,7 +124,9 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
     const atoms = a.n - out;
     return atoms < best.atoms || (atoms === best.atoms && hTotal - hLost <= best.h);
   };
-  const done = (): boolean => best.bonds === total && best.atoms === a.n && best.h === hTotal;
+  // every bond and atom of the input placed: nothing larger exists; hydrogens only break ties among smaller pieces
+  // (proving the best hydrogen count among whole embeddings would cost a search over all of them)
+  const done = (): boolean => best.bonds === total && best.atoms === a.n;
 
   const mapAtom = (u: number, v: number): void => {
     map[u] = v;
@@ -156,11 +183,19 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
       }
     }
   };
+  const envA = environments(a);
+  const envB = environments(b);
+  /** How far out (0..RADIUS, -1 for not at all) the surroundings of u and v agree. */
+  const likeness = (u: number, v: number): number => {
+    let r = -1;
+    while (r < RADIUS && envA[r + 1][u] === envB[r + 1][v]) r++;
+    return r;
+  };
   const gain = (u: number, v: number): number => {
     let g = 0;
     const l = a.nbrs[u];
     for (let k = 0; k < l.length; k++) if (map[l[k]] >= 0 && bondClass(b, v, map[l[k]]) === a.cls[u][k]) g++;
-    return 4 * g + (a.h[u] === b.h[v] ? 1 : 0);
+    return 8 * g + likeness(u, v) + 1;
   };
   const decided = (u: number): boolean => map[u] >= 0 || excluded[u] === 1;
 
@@ -217,8 +252,14 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
   };
 
   // Seeds: rarest elements of the product first (fewest candidates), then input order.
+  // Seeds: atoms whose whole surroundings occur fewest times in the product first (but at least once), then the
+  // rarest elements; each tried first on the product atoms that look most alike.
+  const far = new Map<number, number>();
+  for (let y = 0; y < b.n; y++) if (avail[y]) far.set(envB[RADIUS][y], (far.get(envB[RADIUS][y]) ?? 0) + 1);
+  const rarity = (x: number): number => far.get(envA[RADIUS][x]) ?? 1e6;
   const seeds = Array.from({ length: a.n }, (_x, i) => i).sort(
     (x, y) =>
+      rarity(x) - rarity(y) ||
       (countB.get(a.element[x]) ?? 0) - (countB.get(a.element[y]) ?? 0) ||
       a.nbrs[y].length - a.nbrs[x].length ||
       x - y,
@@ -227,8 +268,10 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
   try {
     for (const u0 of seeds) {
       if (hopeless() || done()) break;
-      for (let v0 = 0; v0 < b.n; v0++) {
-        if (!avail[v0] || b.element[v0] !== a.element[u0]) continue;
+      const starts: number[] = [];
+      for (let v0 = 0; v0 < b.n; v0++) if (avail[v0] && b.element[v0] === a.element[u0]) starts.push(v0);
+      starts.sort((x, y) => likeness(u0, y) - likeness(u0, x) || x - y);
+      for (const v0 of starts) {
         if (++steps > budget) throw new Budget();
         mapAtom(u0, v0);
         grow();
