@@ -24,14 +24,7 @@ import {
 import { selectRecords } from './select.js';
 import { BudgetExceeded, withBudget, type Budget } from '../chem/budget.js';
 import { StructureCache } from './structures.js';
-import type {
-  AuditResult,
-  AuditSummary,
-  Finding,
-  NotRunCheck,
-  PassedCheck,
-  RecordResult,
-} from './types.js';
+import type { AuditResult, AuditSummary, Finding, NotRunCheck, PassedCheck, RecordResult } from './types.js';
 import { VERSION } from './version.js';
 import { buildRegistryView } from './view.js';
 

@@ -66,7 +66,8 @@ const messages = {
 /** How a per-atom comparison matched descriptors to units, in words. */
 const HOW: Record<string, string> = {
   'per-locant': 'compared per locant through atom-map numbers',
-  'per-unit': 'matched without atom maps: the structure has one stereo unit of each kind the descriptors cite',
+  'per-unit':
+    'matched without atom maps: the structure has one stereo unit of each kind the descriptors cite',
 };
 
 type Id = keyof typeof messages;
@@ -278,7 +279,17 @@ function run(ctx: CheckContext): CheckOutcome {
   if (decl.field)
     note(
       fieldText,
-      compareOne('stereo.descriptors', fieldText, decl.field, f, out, form, evidence, nitrogenNote, mainSource),
+      compareOne(
+        'stereo.descriptors',
+        fieldText,
+        decl.field,
+        f,
+        out,
+        form,
+        evidence,
+        nitrogenNote,
+        mainSource,
+      ),
     );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
@@ -317,10 +328,20 @@ function run(ctx: CheckContext): CheckOutcome {
     const cf = cc.facts;
     note(
       `component ${i + 1} ${c.descriptors}`,
-      compareOne(field, c.descriptors, parseDescriptors(c.descriptors), cf, out, 'component', evidence, false, {
-        read: ctx.components[i]!,
-        text: ctx.loaded.sources?.components[i] ?? { field, format: 'smiles', text: c.smiles ?? null },
-      }),
+      compareOne(
+        field,
+        c.descriptors,
+        parseDescriptors(c.descriptors),
+        cf,
+        out,
+        'component',
+        evidence,
+        false,
+        {
+          read: ctx.components[i]!,
+          text: ctx.loaded.sources?.components[i] ?? { field, format: 'smiles', text: c.smiles ?? null },
+        },
+      ),
       cf,
       cc.repeats,
     );

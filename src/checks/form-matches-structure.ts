@@ -3,8 +3,16 @@
  * undefined stereo units, and for mixtures the relation between the components.
  */
 import type { StructureFacts } from '../chem/facts.js';
+import type { Structure } from '../chem/types.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
-import { definedUnits, finding, listUnits, undefinedUnits, unitSummary } from './words.js';
+import {
+  atomsInRecordTerms,
+  definedUnits,
+  finding,
+  listUnits,
+  undefinedUnits,
+  unitSummary,
+} from './words.js';
 import { mixtureFindings, mixtureMessages } from './form-mixtures.js';
 import { claimRestsOnlyOnNitrogen, NITROGEN_CHECK_ID } from './nitrogen-inversion.js';
 
@@ -63,14 +71,16 @@ const messages = {
 
 export type FormMessageId = keyof typeof messages;
 
-function evidence(f: StructureFacts) {
+function evidence(f: StructureFacts, s: Structure | null) {
   const defined = definedUnits(f);
   const undef = undefinedUnits(f);
   return {
     units: unitSummary(defined),
     allUnits: unitSummary(f.units) + (undef.length ? `, ${undef.length} undefined` : ''),
     labels: defined.length ? defined.map((u) => `${u.label ?? '?'}`).join(',') : 'none are drawn',
-    mirror: f.mirror.explanation || (f.chiral ? 'not superimposable on its mirror image' : 'superimposable'),
+    mirror:
+      atomsInRecordTerms(f.mirror.explanation, s) ||
+      (f.chiral ? 'not superimposable on its mirror image' : 'superimposable'),
     undefinedCount: undef.length,
     undefinedUnits: listUnits(undef),
     definedCount: defined.length,
@@ -112,7 +122,7 @@ function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
   if (!record || !f) return { findings: [], notApplicable: true };
   const form = record.stereo.form;
-  const e = evidence(f);
+  const e = evidence(f, ctx.main.structure);
   const out: RawFinding[] = [];
   // The claim rests only on an invertible amine nitrogen: nitrogen-inversion carries the error; the form's side
   // of the same root cause is a note here.
@@ -205,7 +215,7 @@ function passedEvidence(form: string, f: StructureFacts, e: ReturnType<typeof ev
   }
   const chir =
     f.chiral === true ? 'chiral' : f.chiral === false ? (f.meso ? 'meso (achiral)' : 'achiral') : 'open';
-  const why = f.chiral !== null && f.mirror.explanation ? ` — ${f.mirror.explanation}` : '';
+  const why = f.chiral !== null && f.mirror.explanation ? ` — ${e.mirror}` : '';
   return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
 

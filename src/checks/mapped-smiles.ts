@@ -77,7 +77,10 @@ export function withAtomMaps(
   try {
     smiles = writeSmiles({
       ...structure,
-      atoms: structure.atoms.map((a) => ({ ...a, mapNumber: wanted.has(a.inputNumber) ? a.inputNumber : null })),
+      atoms: structure.atoms.map((a) => ({
+        ...a,
+        mapNumber: wanted.has(a.inputNumber) ? a.inputNumber : null,
+      })),
     });
   } catch {
     return null;

@@ -81,7 +81,8 @@ export function rotationsComparable(a: Rotation, b: Rotation): Comparability {
   }
   if (sa !== '') {
     const c = compareSolvents(sa, sb);
-    if (c === 'different') return { alike: false, reason: `measured in different solvents (${sa} and ${sb})` };
+    if (c === 'different')
+      return { alike: false, reason: `measured in different solvents (${sa} and ${sb})` };
     if (c === 'unknown') {
       return {
         alike: false,

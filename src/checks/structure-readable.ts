@@ -112,7 +112,15 @@ function run(ctx: CheckContext): CheckOutcome {
   // reports every such nitrogen (as the error, or as a note) unless the registry switched it off.
   const nitrogenCheckOn = ctx.config.severities[NITROGEN_CHECK_ID] !== 'off';
   let leftToNitrogen = 0;
+  // Several copies of the parent beside a counter-ion is a salt's stoichiometry (bis(amphetamine) sulfate, 2:1):
+  // said in the evidence. Copies with nothing else (CCO.CCO) stay a note: that drawing is worth a look.
+  const salt = (ctx.main.facts?.components ?? []).some((c) => c.role === 'other');
+  const saltRemarks: string[] = [];
   for (const remark of ctx.main.facts?.remarks ?? []) {
+    if (salt && /identical copies of the parent/.test(remark)) {
+      saltRemarks.push(remark.replace(/:.*$/, ' (a salt)'));
+      continue;
+    }
     if (
       nitrogenCheckOn &&
       (ctx.main.facts?.invertibleNitrogens.length ?? 0) > 0 &&
@@ -133,7 +141,8 @@ function run(ctx: CheckContext): CheckOutcome {
   const nitrogen = leftToNitrogen
     ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion`
     : '';
-  return { findings, passed: `structure read${what ? ` (${what})` : ''}${comps}${nitrogen}` };
+  const copies = saltRemarks.length ? `; ${saltRemarks.join('; ')}` : '';
+  return { findings, passed: `structure read${what ? ` (${what})` : ''}${comps}${copies}${nitrogen}` };
 }
 
 export const structureReadable: CheckModule = {

@@ -7,6 +7,7 @@ import { parseDescriptors, type ParsedDescriptors } from '../chem/descriptors.js
 import type { CompoundRecord, StereoForm } from '../registry/types.js';
 import type { RawFinding } from './types.js';
 import type { Severity } from '../audit/types.js';
+import type { Structure } from '../chem/types.js';
 
 /** "C2 (atom 3)" with an atom-map locant, "C (atom 3)" without; "C2=C3 double bond (atoms 2, 3)" for a bond. */
 export function unitName(u: StereoUnitFact): string {
@@ -18,6 +19,22 @@ export function unitName(u: StereoUnitFact): string {
     u.kind === 'double-bond' ? 'double bond' : u.kind === 'biaryl' ? 'biaryl axis' : `${u.kind} axis`;
   const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join('=C')}` : '';
   return `${what}${mapped} (atoms ${ends})`;
+}
+
+/**
+ * Text from the engine names atoms by element and input number ("the middle of the C2–C4 bond"); a message that
+ * also names units by locant ("C2 (atom 2) R, C3 (atom 4) S") would then call one atom by two names. This
+ * rewrites those atom names in the scheme of unitName: locant with the atom number beside it where the atom
+ * carries an atom-map locant ("C3 (atom 4)"), else the element with the atom number ("C (atom 4)").
+ */
+export function atomsInRecordTerms(text: string, s: Structure | null): string {
+  if (!s) return text;
+  const byNumber = new Map(s.atoms.map((a) => [a.inputNumber, a]));
+  return text.replace(/\b([A-Z][a-z]?)(\d+)\b/g, (whole, el: string, num: string) => {
+    const a = byNumber.get(Number(num));
+    if (!a || a.element !== el) return whole;
+    return a.mapNumber !== null ? `${el}${a.mapNumber} (atom ${num})` : `${el} (atom ${num})`;
+  });
 }
 
 export function listUnits(units: readonly StereoUnitFact[]): string {

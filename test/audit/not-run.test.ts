@@ -16,7 +16,9 @@ import { loaded, record } from '../checks/facts.js';
 
 const engine = await defaultEngine();
 const butanol = (smiles: string) =>
-  loaded(record({ form: 'single-enantiomer', descriptors: '(R)' }, { id: 'LX-00050', structure: { smiles } }));
+  loaded(
+    record({ form: 'single-enantiomer', descriptors: '(R)' }, { id: 'LX-00050', structure: { smiles } }),
+  );
 
 describe('checks that did not run', () => {
   it('an unreadable structure: the structure checks are not run, with the reason, and never passed', () => {

@@ -89,13 +89,15 @@ describe('severities in a run', () => {
       reg?.remove();
       reg = tmpRegistry(files(config));
       const r = await runAudit({ root: reg.root, checks: REAL_CHECKS });
-      return r.records[1]!.findings.filter((f) => f.messageId === 'already-registered').map((f) => f.severity);
+      return r.records[1]!.findings.filter((f) => f.messageId === 'already-registered').map(
+        (f) => f.severity,
+      );
     };
     expect(await duplicate('recordDirs: [compounds]\n')).toEqual(['warning']);
     expect(await duplicate('severities:\n  consistent-with-registry: error\n')).toEqual(['error']);
     expect(await duplicate('severities:\n  consistent-with-registry: note\n')).toEqual(['note']);
-    expect(
-      await duplicate('severities:\n  consistent-with-registry/already-registered: error\n'),
-    ).toEqual(['error']);
+    expect(await duplicate('severities:\n  consistent-with-registry/already-registered: error\n')).toEqual([
+      'error',
+    ]);
   });
 });

@@ -189,7 +189,9 @@ describe('descriptors-match-structure: counts are not a per-atom check', () => {
     ]);
     const text = render(check.messages['descriptors-not-verified-per-atom'], o.findings[0].data);
     expect(text).toMatch(/consistent in count .*not verified per atom/);
-    expect(text).toContain('C[C@H:2](NC)[C@H:5](O)c1ccccc1 (each map number is the atom number in your SMILES');
+    expect(text).toContain(
+      'C[C@H:2](NC)[C@H:5](O)c1ccccc1 (each map number is the atom number in your SMILES',
+    );
     // the right descriptors are not verified either: the same note, without a pass
     expect(ids(real(EPHEDRINE, '(1R,2S)'))).toEqual(['descriptors-not-verified-per-atom']);
   });
@@ -205,14 +207,20 @@ describe('descriptors-match-structure: counts are not a per-atom check', () => {
   it('the note can be raised to a warning by the registry (severities, check-id/message-id)', () => {
     const o = real(EPHEDRINE, '(1S,2R)');
     const c = realCtx(record({ form: 'single-enantiomer' }, { id: 'LX-00091' }));
-    const config = { ...c.config, severities: { 'descriptors-match-structure/descriptors-not-verified-per-atom': 'warning' as const } };
+    const config = {
+      ...c.config,
+      severities: { 'descriptors-match-structure/descriptors-not-verified-per-atom': 'warning' as const },
+    };
     expect(toFinding(check, o.findings[0], c.loaded, config).severity).toBe('warning');
     expect(toFinding(check, o.findings[0], c.loaded, c.config).severity).toBe('note');
   });
   it('a single stereocentre is matched without atom maps: (S) on (R)-butan-2-ol fails, (R) passes per unit', () => {
     const bad = real('C[C@@H](O)CC', '(S)');
     expect(ids(bad)).toEqual(['descriptor-label-mismatch']);
-    expect(bad.findings[0].data).toMatchObject({ method: 'per-unit', mismatches: 'atom 2: declared S, computed R' });
+    expect(bad.findings[0].data).toMatchObject({
+      method: 'per-unit',
+      mismatches: 'atom 2: declared S, computed R',
+    });
     const good = real('C[C@@H](O)CC', '(2R)');
     expect(good.findings).toEqual([]);
     expect(good.passed).toMatch(/per unit/);
@@ -220,7 +228,9 @@ describe('descriptors-match-structure: counts are not a per-atom check', () => {
   it('one centre and one double bond are told apart by E/Z versus R/S', () => {
     // (3S,4E)-hex-4-en-3-ol: RDKit's rdCIPLabeler (python3-rdkit 2022.09) gives C atom 4 S and the double bond E
     const smiles = 'C/C=C/[C@@H](O)CC';
-    const labels = readSmiles(smiles).facts!.units.map((u) => u.label).sort();
+    const labels = readSmiles(smiles)
+      .facts!.units.map((u) => u.label)
+      .sort();
     expect(labels).toEqual(['E', 'S']);
     expect(real(smiles, '(3S,4E)').passed).toMatch(/per unit/);
     const bad = real(smiles, '(3S,4Z)');
@@ -270,7 +280,9 @@ describe('descriptors-match-structure: stereo prefixes in names', () => {
         ['racemic-notation-needs-racemate'],
       ]);
     }
-    expect(run(and, { form: 'racemate' }, '(R,S)-ibuprofen').passed).toMatch(/legacy way of naming a racemate/);
+    expect(run(and, { form: 'racemate' }, '(R,S)-ibuprofen').passed).toMatch(
+      /legacy way of naming a racemate/,
+    );
   });
   it('D-/L- name one enantiomer: fine for a single enantiomer, an error with a racemate or an achiral form', () => {
     const one = chiralFacts([centre(2, 'S')]);

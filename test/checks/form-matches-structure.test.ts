@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { formMatchesStructure as check } from '../../src/checks/form-matches-structure.js';
 import type { StereoForm } from '../../src/registry/types.js';
 import { centre, chiralFacts, ctx, facts, ids, read, record, runCheck, unit } from './facts.js';
+import { realCtx } from './real.js';
+import { render } from '../../src/checks/words.js';
 
 // Definitions relied on (IUPAC Gold Book): chirality, enantiomer, racemate (equimolar mixture of a pair of
 // enantiomers), meso (achiral member of a set of diastereoisomers that includes chiral members),
@@ -217,5 +219,41 @@ describe('form-matches-structure: advice for an achiral structure declared chira
     );
     expect(off.findings[0].severity).toBeUndefined();
     expect(String(off.findings[0].data.remedy)).not.toMatch(/meso/);
+  });
+});
+
+// One atom, one name (issue 12): meso-2,3-dibromobutane drawn with atom maps; the symmetry evidence from the
+// engine names atoms by input number (C2–C4), the units by locant (C2, C3). Messages now name each atom as
+// "locant (atom n)". meso-2,3-dibromobutane is achiral with a mirror plane through the C2–C3 bond (IUPAC Gold
+// Book, meso-compound).
+describe('form-matches-structure: one naming scheme per message', () => {
+  const meso = (form: StereoForm) =>
+    runCheck(
+      check,
+      realCtx(
+        record(
+          { form },
+          { id: 'LX-00092', name: '2,3-dibromobutane', structure: { smiles: 'C[C@H:2](Br)[C@H:3](Br)C' } },
+        ),
+      ),
+    );
+  it('the error for a racemate names the bond C2 (atom 2)–C3 (atom 4), not C2–C4', () => {
+    const o = meso('racemate');
+    expect(ids(o)).toEqual(['racemate-but-achiral']);
+    const text = render(check.messages['racemate-but-achiral'], o.findings[0].data);
+    expect(text).toContain('the middle of the C2 (atom 2)–C3 (atom 4) bond');
+    expect(text).not.toMatch(/C2–C4/);
+  });
+  it('the evidence of a passing meso claim uses the same names', () => {
+    const o = meso('meso');
+    expect(o.findings).toEqual([]);
+    expect(o.passed).toContain('C2 (atom 2)–C3 (atom 4) bond');
+  });
+  it('without atom maps, atoms are named by element and number', () => {
+    const o = runCheck(
+      check,
+      realCtx(record({ form: 'meso' }, { id: 'LX-00093', structure: { smiles: 'C[C@H](Br)[C@H](Br)C' } })),
+    );
+    expect(o.passed).toContain('C (atom 2)–C (atom 4) bond');
   });
 });

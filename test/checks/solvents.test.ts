@@ -46,8 +46,9 @@ describe('solvent names', () => {
       reason: expect.stringMatching(/different wavelengths \(589 nm and 546 nm\)/),
     });
     expect(rotationsComparable(rot(-50, 'EtOH'), rot(48, undefined))).toMatchObject({ alike: false });
-    expect(rotationsComparable(rot(-50, 'EtOH', { temperature_c: 20 }), rot(48, 'EtOH', { temperature_c: 30 })))
-      .toMatchObject({ alike: false, reason: expect.stringMatching(/5 °C apart/) });
+    expect(
+      rotationsComparable(rot(-50, 'EtOH', { temperature_c: 20 }), rot(48, 'EtOH', { temperature_c: 30 })),
+    ).toMatchObject({ alike: false, reason: expect.stringMatching(/5 °C apart/) });
   });
 });
 

@@ -81,6 +81,33 @@ describe('structure-readable', () => {
     expect(o.findings).toMatchObject([{ messageId: 'reader-remark', severity: 'note' }]);
     expect(o.passed).toBeDefined();
   });
+  // bis(amphetamine) sulfate, (C9H13N)2·H2SO4, a 2:1 salt (handbook, from memory): the copies are its
+  // stoichiometry, not a drawing error; two copies with nothing else are worth a look (issue 12: notes to act on)
+  it('copies of the parent in a salt go to the evidence; copies alone stay a note', () => {
+    const remark =
+      '2 identical copies of the parent (C9H13N): stereoisomer counts and chirality are those of one copy';
+    const comp = (index: number, role: 'parent' | 'other', formula: string) => ({
+      index,
+      formula,
+      heavyAtoms: 10,
+      role,
+      smiles: '',
+    });
+    const salt = facts({
+      remarks: [remark],
+      components: [comp(0, 'parent', 'C9H13N'), comp(1, 'parent', 'C9H13N'), comp(2, 'other', 'H2O4S')],
+    });
+    const o = runCheck(check, ctx({ main: read(salt) }));
+    expect(o.findings).toEqual([]);
+    expect(o.passed).toMatch(/2 identical copies of the parent \(C9H13N\) \(a salt\)/);
+    const alone = facts({
+      remarks: [remark],
+      components: [comp(0, 'parent', 'C9H13N'), comp(1, 'parent', 'C9H13N')],
+    });
+    expect(runCheck(check, ctx({ main: read(alone) })).findings).toMatchObject([
+      { messageId: 'reader-remark', severity: 'note' },
+    ]);
+  });
   it('still runs when the record failed the schema', () => {
     const o = runCheck(check, ctx({ record: null, main: failedRead('no structure', null, null) }));
     expect(ids(o)).toEqual(['structure-unreadable']);
