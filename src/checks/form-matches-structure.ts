@@ -2,8 +2,9 @@
  * Check: the declared stereo form (stereo.form) against what the structure says — chirality, meso, defined and
  * undefined stereo units, and for mixtures the relation between the components.
  */
-import type { StructureFacts } from '../chem/facts.js';
+import type { Count, StructureFacts } from '../chem/facts.js';
 import type { Structure } from '../chem/types.js';
+import { countValue, exactCount } from '../chem/index.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
 import {
   atomsInRecordTerms,
@@ -71,6 +72,12 @@ const messages = {
 
 export type FormMessageId = keyof typeof messages;
 
+/** The larger of an exact count and a bigint, as a bigint. */
+function maxCount(c: Count, b: bigint): bigint {
+  const v = countValue(c);
+  return v > b ? v : b;
+}
+
 function evidence(f: StructureFacts, s: Structure | null) {
   const defined = definedUnits(f);
   const undef = undefinedUnits(f);
@@ -87,7 +94,7 @@ function evidence(f: StructureFacts, s: Structure | null) {
     totalIsomers: f.stereoisomers.total,
     chiralIsomers: f.stereoisomers.chiral,
     pairs: f.stereoisomers.pairs,
-    isomers: Math.max(f.stereoisomers.total, 2 ** undef.length),
+    isomers: exactCount(maxCount(f.stereoisomers.total, 2n ** BigInt(undef.length))),
     mixtureCount: f.mixture?.stereoisomers ?? 1,
     mixtureText: f.mixture?.explanation ?? '',
   };
@@ -152,7 +159,8 @@ function run(ctx: CheckContext): CheckOutcome {
     case 'achiral':
       if (f.chiral === true) add('achiral-but-chiral');
       else if (f.chiral === null || e.undefinedCount > 0) {
-        if (f.stereoisomers.chiral > 0 || f.chiral === null) add('achiral-but-open', {}, 'warning');
+        if (countValue(f.stereoisomers.chiral) > 0n || f.chiral === null)
+          add('achiral-but-open', {}, 'warning');
       } else if (f.meso === true) {
         add('achiral-is-meso', {}, 'note');
         fixTo('meso');
@@ -185,7 +193,10 @@ function run(ctx: CheckContext): CheckOutcome {
       } else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) {
         add('racemate-no-chiral-isomers');
         fixTo('achiral');
-      } else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
+      } else if (
+        e.undefinedCount > 0 &&
+        (countValue(f.stereoisomers.pairs) > 1n || countValue(f.stereoisomers.achiral) > 0n)
+      ) {
         const a = f.stereoisomers.achiral;
         add(
           'racemate-which-diastereomer',

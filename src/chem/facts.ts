@@ -37,15 +37,22 @@ export interface InvertibleNitrogenFact {
   drawnWithStereo: boolean;
 }
 
+/**
+ * An exact count: a number up to 2^53 (every integer up to it is exact in JSON and JavaScript), above it the
+ * exact decimal digits as a string (a chain of 300 centres has 2^300 stereoisomers). `countValue` (isomers/)
+ * reads either as a bigint.
+ */
+export type Count = number | string;
+
 export interface StereoisomerCount {
   /** All stereoisomers of the constitution (enantiomers counted separately). */
-  total: number;
-  chiral: number;
-  achiral: number;
+  total: Count;
+  chiral: Count;
+  achiral: Count;
   /** Enantiomer pairs = chiral / 2. */
-  pairs: number;
+  pairs: Count;
   /** Achiral members that are meso in the Gold Book sense (only possible when chiral > 0). */
-  meso: number;
+  meso: Count;
   /** Number of potential stereo units the count is built on. */
   units: number;
 }

@@ -7,6 +7,7 @@ export { parseSmiles } from './read/smiles.js';
 export { writeSmiles, type WriteSmilesOptions } from './write/smiles.js';
 export { describe, analyse, type DescribeOptions, type Analysis } from './describe/index.js';
 export { relate } from './relate.js';
+export { countValue, exactCount } from './isomers/index.js';
 export { mirror } from './symmetry/index.js';
 export { normalize } from './normalize.js';
 export { perceive, type Perception } from './perceive/index.js';

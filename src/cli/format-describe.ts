@@ -1,5 +1,5 @@
 /** describe facts -> plain text for a chemist. */
-import type { StructureFacts, StereoUnitFact } from '../chem/index.js';
+import { countValue, type StructureFacts, type StereoUnitFact } from '../chem/index.js';
 
 const yesNo = (v: boolean | null, open = 'open (undefined stereo)'): string =>
   v === null ? open : v ? 'yes' : 'no';
@@ -41,7 +41,7 @@ export function describeText(f: StructureFacts, what: string): string {
   const c = f.stereoisomers;
   out.push(
     `Stereoisomers of this constitution: ${c.total} (${c.chiral} chiral = ${c.pairs} enantiomer pair${c.pairs === 1 ? '' : 's'}, ` +
-      `${c.achiral} achiral${c.meso > 0 ? `, of which ${c.meso} meso` : ''})`,
+      `${c.achiral} achiral${countValue(c.meso) > 0n ? `, of which ${c.meso} meso` : ''})`,
   );
   if (f.enhanced.meaning !== 'none' && (f.enhanced.groups.length > 0 || f.enhanced.meaning !== 'absolute')) {
     out.push(`Enhanced stereo: the drawing stands for ${enhancedWords(f.enhanced.meaning)}`);
@@ -57,7 +57,7 @@ export function describeText(f: StructureFacts, what: string): string {
   }
   if (f.stereoisomerList) {
     out.push(
-      `Stereoisomers${f.stereoisomerList.length < c.total ? ` (first ${f.stereoisomerList.length})` : ''}:`,
+      `Stereoisomers${BigInt(f.stereoisomerList.length) < countValue(c.total) ? ` (first ${f.stereoisomerList.length})` : ''}:`,
     );
     for (const e of f.stereoisomerList) {
       const labels = e.labels.map((l) => `${l.atoms.join('/')}${l.label ?? '?'}`).join(' ') || '-';

@@ -61,7 +61,7 @@ export function openCounts(r: RecordResult): {
   return c;
 }
 
-export function plural(n: number, one: string, many = `${one}s`): string {
+export function plural(n: number | string, one: string, many = `${one}s`): string {
   return `${n} ${n === 1 ? one : many}`;
 }
 

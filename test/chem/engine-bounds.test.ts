@@ -28,3 +28,29 @@ suite('engine bounds', () => {
     expect(f.remarks.some((r) => /work limit/.test(r))).toBe(false);
   }, 60_000);
 });
+
+suite('exact counts at any size', () => {
+  it('a chain of 299 centres has 2^299 stereoisomers, exact, as a string in JSON (2^n rule for n distinct centres, Eliel & Wilen 1994, from memory)', () => {
+    const f = describe(smiles('C' + 'C[C@H](C)'.repeat(300) + 'C'));
+    expect(f.stereoisomers.units).toBe(299);
+    expect(f.stereoisomers.total).toBe((2n ** 299n).toString());
+    expect(f.stereoisomers.pairs).toBe((2n ** 298n).toString());
+    expect(f.stereoisomers.achiral).toBe(0);
+    const json = JSON.parse(JSON.stringify(f)) as typeof f;
+    expect(BigInt(json.stereoisomers.total)).toBe(2n ** 299n);
+  }, 60_000);
+  it('counts up to 2^53 stay JSON numbers (the JSON of describe is unchanged there)', () => {
+    const f = describe(smiles('C' + 'C[C@H](C)'.repeat(54) + 'C'));
+    expect(f.stereoisomers.total).toBe(2 ** 53);
+    expect(typeof f.stereoisomers.pairs).toBe('number');
+    const g = describe(smiles('C' + 'C[C@H](C)'.repeat(55) + 'C'));
+    expect(g.stereoisomers.total).toBe((2n ** 54n).toString());
+  });
+  it('a chain of 4,000 centres: exact count, the CIP labels stop at the work limit and are left open', () => {
+    const f = describe(smiles('C' + 'C[C@H](C)'.repeat(4000) + 'C'));
+    expect(f.stereoisomers.total).toBe((2n ** 3999n).toString());
+    expect(f.chiral).toBe(true);
+    expect(f.remarks.some((r) => /work limit/.test(r))).toBe(true);
+    expect(f.units.some((u) => u.label === null)).toBe(true);
+  }, 120_000);
+});

@@ -22,16 +22,28 @@ suite.skipIf(!haveSharedData('moleculenet'))('describe over MoleculeNet', () => 
       try {
         const f = describe(r.structure);
         described++;
-        const c = f.stereoisomers;
-        if (c.total !== c.chiral + c.achiral || c.chiral !== 2 * c.pairs || c.meso > c.achiral || c.total < 1)
-          problems.push(`${where}: counts ${JSON.stringify(c)}`);
+        const s = f.stereoisomers;
+        const c = {
+          total: BigInt(s.total),
+          chiral: BigInt(s.chiral),
+          achiral: BigInt(s.achiral),
+          pairs: BigInt(s.pairs),
+          meso: BigInt(s.meso),
+        };
+        if (
+          c.total !== c.chiral + c.achiral ||
+          c.chiral !== 2n * c.pairs ||
+          c.meso > c.achiral ||
+          c.total < 1n
+        )
+          problems.push(`${where}: counts ${JSON.stringify(s)}`);
         if (f.stereocenters.length + f.stereobonds.length !== f.units.length)
           problems.push(`${where}: views`);
         if (f.undefined !== f.units.filter((u) => !u.defined).length) problems.push(`${where}: undefined`);
-        if (f.meso === true && (f.chiral !== false || c.chiral === 0)) problems.push(`${where}: meso`);
+        if (f.meso === true && (f.chiral !== false || c.chiral === 0n)) problems.push(`${where}: meso`);
         // (a drawing the ring system forbids is judged as drawn: it can be "chiral" although no real isomer is)
         const impossible = f.remarks.some((m) => m.includes('cannot both hold'));
-        if (c.chiral === 0 && f.chiral === true && !impossible)
+        if (c.chiral === 0n && f.chiral === true && !impossible)
           problems.push(`${where}: chiral with no chiral stereoisomer`);
         if (f.units.some((u) => !u.defined && u.label !== null))
           problems.push(`${where}: label on undefined unit`);

@@ -10,7 +10,7 @@ import type {
   StructureFacts,
 } from '../facts.js';
 import { constitutionKey, molecularFormula } from '../graph/index.js';
-import { countStereoisomers } from '../isomers/index.js';
+import { countStereoisomers, countValue } from '../isomers/index.js';
 import { labelUnits } from '../labels.js';
 import { extractAtoms } from '../normalize.js';
 import { transMediumRingBonds, type State } from '../perceive/index.js';
@@ -65,7 +65,9 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   const chiral = planar.length > 0 ? null : drawnChiral;
   // Gold Book meso: achiral member of a set with chiral members (so the count must hold a meso form too).
   const meso =
-    chiral === null ? null : chiral === false && stereoisomers.chiral > 0 && stereoisomers.meso > 0;
+    chiral === null
+      ? null
+      : chiral === false && countValue(stereoisomers.chiral) > 0n && countValue(stereoisomers.meso) > 0n;
   const components = componentFacts(a, parentIndex, copies, mixture ? mixture.beyondParent : copies);
   const facts: StructureFacts = {
     stereocenters: units

@@ -11,7 +11,7 @@
  * flips it, which merges the two "C3 configurations" of the (2R,4R) form into one orbit.
  * Meso (IUPAC Gold Book, "meso-compound"): an achiral member of a set of diastereomers that has chiral members.
  */
-import type { StereoisomerCount } from '../facts.js';
+import type { Count, StereoisomerCount } from '../facts.js';
 import type { State } from '../perceive/index.js';
 import {
   act,
@@ -23,7 +23,20 @@ import {
   type UnitGroup,
 } from '../symmetry/index.js';
 
-const toNumber = (b: bigint): number => Number(b);
+// 2^53: every integer up to it is exact as a JavaScript (and JSON) number
+const SAFE = 2n ** 53n;
+
+/** A bigint as a Count: a number when it is exact as one, else its decimal digits. */
+export function exactCount(b: bigint): Count {
+  return b <= SAFE ? Number(b) : b.toString();
+}
+
+/** A Count read back exactly. */
+export function countValue(c: Count): bigint {
+  return BigInt(c);
+}
+
+const toNumber = exactCount;
 
 export function countStereoisomers(g: UnitGroup, units: number): StereoisomerCount {
   const order = BigInt(g.perms.length);
