@@ -10,6 +10,7 @@ import { layoutStructure } from '../chem/depict.js';
 import type { Structure } from '../chem/types.js';
 import { renderHtmlPage, type HtmlRow } from '../report/html/render.js';
 import { pictureData, type PicData } from '../report/html/picture.js';
+import { plural } from '../report/checklist.js';
 import type { HtmlEntry, RenderedRecord } from './render-record.js';
 import type { BulkTrailer, RecordWriter } from './writers.js';
 
@@ -56,9 +57,9 @@ export class HtmlCollector implements RecordWriter {
         `${skipped} flagged records from SMILES have no depiction: layouts are computed for the first ${this.maxLayouts} (molfile records are always drawn as registered).`,
       );
     for (const [w, e] of t.vocabulary.mapped)
-      notes.push(`legacy form word "${w}" read as ${e.form} (${e.count} records)`);
+      notes.push(`legacy form word "${w}" read as ${e.form} (${plural(e.count, 'record')})`);
     for (const [w, n] of t.vocabulary.notUnderstood)
-      notes.push(`form word "${w}" not understood (${n} records; audited as unknown)`);
+      notes.push(`form word "${w}" not understood (${plural(n, 'record')}; audited as unknown)`);
     const page = renderHtmlPage(rows, {
       tool: t.tool,
       caution: t.caution,

@@ -21,13 +21,17 @@ function level(s: Severity): Level {
   return s;
 }
 
-function rule(info: RuleInfo): Record<string, unknown> {
+/**
+ * A rule of the log. Code-scanning viewers show a result with its rule's help and never the run's properties,
+ * so the help ends with the caution (the one place a reader of a single alert sees it).
+ */
+function rule(info: RuleInfo, caution: string): Record<string, unknown> {
   const r: Record<string, unknown> = {
     id: info.id,
     name: info.id.replace(/(^|-)([a-z])/g, (_m, _d, c: string) => c.toUpperCase()),
     shortDescription: { text: info.summary },
     fullDescription: { text: info.explanation },
-    help: { text: `${info.summary}\n\n${info.explanation}` },
+    help: { text: `${info.summary}\n\n${info.explanation}${caution ? `\n\nCaution: ${caution}` : ''}` },
     defaultConfiguration: { level: level(info.defaultSeverity) },
   };
   return r;
@@ -64,7 +68,7 @@ export function sarifLog(
       }
     }
   }
-  const rules = infos.map((x) => rule(x.info));
+  const rules = infos.map((x) => rule(x.info, result.caution));
   const index = new Map(infos.map((x, i) => [x.info.id, i]));
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, '/') : '';
   const results = result.records.flatMap((r) =>

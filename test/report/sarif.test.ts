@@ -135,6 +135,8 @@ describe('renderSarif', () => {
     expect(form.shortDescription).toEqual({ text: 'The declared form agrees with the structure.' });
     expect(form.fullDescription).toEqual({ text: 'Chemistry here (IUPAC 2013, P-93).' });
     expect((form.help as Json).text).toContain('P-93');
+    // a code-scanning alert shows its rule's help, never the run's properties: the caution is there
+    for (const r of rules) expect((r.help as Json).text).toMatch(/\n\nCaution: .*responsible chemist/);
     expect(form.defaultConfiguration).toEqual({ level: 'error' });
     expect((rules[1]!.defaultConfiguration as Json).level).toBe('warning');
   });

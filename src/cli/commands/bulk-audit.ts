@@ -25,6 +25,7 @@ import { HtmlCollector } from '../../bulk/html-collector.js';
 import { EXIT_CRASH, UsageError, type Io } from '../command.js';
 import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
 import { checkWritable } from '../output-path.js';
+import { plural } from '../../report/checklist.js';
 import { CAUTION } from '../../audit/caution.js';
 import { VERSION } from '../../audit/version.js';
 
@@ -171,10 +172,10 @@ export function summaryTable(t: BulkTrailer, time: { seconds: number; auditSecon
   const lines: string[] = [];
   const s = t.summary;
   lines.push(
-    `stereogate bulk audit: ${s.records} records${timing(s.records, time)}${t.shard ? `, shard ${t.shard}` : ''}`,
+    `stereogate bulk audit: ${plural(s.records, 'record')}${timing(s.records, time)}${t.shard ? `, shard ${t.shard}` : ''}`,
   );
   lines.push(
-    `  ${s.errors} errors, ${s.warnings} warnings, ${s.notes} notes, ${s.waived} accepted by waiver`,
+    `  ${plural(s.errors, 'error')}, ${plural(s.warnings, 'warning')}, ${plural(s.notes, 'note')}, ${s.waived} accepted by waiver`,
   );
   const rows = Object.entries(t.byCheck);
   if (rows.length > 0) {
@@ -201,7 +202,7 @@ export function summaryTable(t: BulkTrailer, time: { seconds: number; auditSecon
       lines.push(`    … and ${t.vocabulary.notUnderstood.length - shown.length} more (see the JSON summary)`);
     }
   }
-  lines.push('', `Caution: ${t.caution}`);
+  lines.push('', t.caution);
   return lines.join('\n');
 }
 

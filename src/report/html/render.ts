@@ -222,9 +222,10 @@ ${notes ? `<ul class="notes">${notes}</ul>` : ''}
 <label class="check"><input id="atom-numbers" type="checkbox"> atom numbers</label>
 </form>
 <p id="empty" hidden>No flagged record matches these filters.</p>
+<p class="legend">In the drawings: <b class="cip">R</b>/<b class="cip">S</b>, <b class="cip">E</b>/<b class="cip">Z</b> computed CIP labels; <span class="undef-mark">dashed circles</span> undefined stereo units. A drawing is the record's own molfile (coordinates and wedges as registered) when it has one, else a layout computed from the structure; the card says which.</p>
 <div id="records"></div>
 <nav id="pager" aria-label="pages" hidden><button type="button" id="prev">‹ previous</button> <span id="page-info"></span> <button type="button" id="next">next ›</button></nav>
-<p class="legend">In the drawings: <b class="cip">R</b>/<b class="cip">S</b>, <b class="cip">E</b>/<b class="cip">Z</b> computed CIP labels; <span class="undef-mark">dashed circles</span> undefined stereo units. A drawing is the record's own molfile (coordinates and wedges as registered) when it has one, else a layout computed from the structure; the card says which.</p>
+
 </section>
 <script type="application/json" id="report-data">${scriptJson(data)}</script>
 <script>${PAGE_SCRIPT}</script>
