@@ -87,7 +87,8 @@ export async function postReview(
         sources: await fixSources(settings, result),
       });
       if (plan.comments.length + plan.outsideDiff + plan.overLimit === 0) return said;
-      const done = await postInlineComments(client, pr, plan.comments);
+      const comments = plan.comments.map((c) => ({ ...c, body: redactSecret(c.body, settings.token) }));
+      const done = await postInlineComments(client, pr, comments);
       const parts = [`${done.posted.length} inline comment(s) posted`];
       if (done.alreadyThere.length > 0) parts.push(`${done.alreadyThere.length} already there`);
       if (done.rejected.length > 0)

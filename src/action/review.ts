@@ -17,8 +17,10 @@ import type { Engine, Runner } from './ports.js';
 import { postReview } from './post-review.js';
 import type { ActionSettings, FailOn } from './settings.js';
 
-/** The job summary may hold 1 MiB (bytes, and emoji take four); leave room for the lines about what was posted. */
-export const SUMMARY_MAX_CHARS = 500_000;
+/** The job summary may hold 1 MiB (GitHub docs, "Adding a job summary"); leave room for the lines about posting. */
+export const SUMMARY_MAX_BYTES = 1_000_000;
+/** When the full checklist is larger than that: the short form, at most this long (emoji take four bytes). */
+export const SUMMARY_SHORT_CHARS = 240_000;
 
 export interface ReviewOutcome {
   result: AuditResult;
@@ -58,7 +60,7 @@ export async function review(
       await mkdir(dirname(settings.reportFile), { recursive: true });
       await writeFile(
         settings.reportFile,
-        redactSecret(engine.renderMarkdown(result, {}), settings.token),
+        redactSecret(engine.renderMarkdown(result, { maxChars: Number.POSITIVE_INFINITY }), settings.token),
         'utf8',
       );
       written.push(`report: ${settings.reportFile}`);
@@ -87,7 +89,12 @@ export async function review(
   // Everything computed is on record before anything is posted: a stalled or failing API loses nothing.
   const redact = (text: string): string => redactSecret(text, settings.token);
   try {
-    const summary = engine.renderMarkdown(result, { maxChars: SUMMARY_MAX_CHARS });
+    // The full checklist, as in the report file, unless it is larger than a job summary may be.
+    const full = engine.renderMarkdown(result, { maxChars: Number.POSITIVE_INFINITY });
+    const summary =
+      Buffer.byteLength(full, 'utf8') <= SUMMARY_MAX_BYTES
+        ? full
+        : engine.renderMarkdown(result, { maxChars: SUMMARY_SHORT_CHARS });
     await runner.writeSummary(redact(`${summary}\n`));
   } catch (error) {
     runner.warning(`Could not write the job summary: ${message(error)}`);

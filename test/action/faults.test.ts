@@ -10,6 +10,7 @@ import { mkdtempSync, readFileSync, realpathSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { engine as realEngine } from '../../src/action/engine.js';
 import { clientFor } from '../../src/action/github-client.js';
 import { review } from '../../src/action/review.js';
 import type { ActionSettings } from '../../src/action/settings.js';
@@ -205,6 +206,42 @@ describe('the action against an imperfect GitHub', () => {
       expect(text).not.toContain('Larkspur_test_token');
     }
     expect(run.summary).toMatch(/Bearer (\\\*){3}/); // the mask, Markdown-escaped
+  });
+
+  it("a big pull request: comments within GitHub's size limits, the summary and report file hold everything", async () => {
+    // 300 records with findings, one finding 79,677 characters long (the size GitHub once refused).
+    const records = Array.from({ length: 300 }, (_, i) => {
+      const id = `LX-${String(i + 1).padStart(5, '0')}`;
+      const message =
+        i === 0
+          ? `declared racemate ${'but the structure is achiral '.repeat(2748)}`.slice(0, 79_677)
+          : `declared racemate, but the structure is achiral; record ${id} ${'x'.repeat(200)}`;
+      return record(`compounds/${id}.yaml`, [finding('error', 6, { message })], id);
+    });
+    const big = result(records);
+    gh.files = [
+      {
+        filename: 'compounds/LX-00001.yaml',
+        status: 'added',
+        patch: '@@ -0,0 +1,7 @@\n+a\n+b\n+c\n+d\n+e\n+f\n+g',
+      },
+    ];
+    const s = settings(gh.url);
+    const runner = recordingRunner();
+    const engine = { ...realEngine, audit: async () => big, recordDirs: async () => ['compounds'] };
+    await review(s, engine, clientFor(s, runner), runner);
+    expect(gh.issueComments).toHaveLength(1);
+    expect(gh.issueComments[0]!.body.length).toBeLessThanOrEqual(65_536);
+    expect(gh.reviewComments).toHaveLength(1);
+    expect(gh.reviewComments[0]!.body.length).toBeLessThanOrEqual(65_536);
+    expect(gh.reviewComments[0]!.body).toContain('whole in the checklist');
+    const report = readFileSync(join(workspace, 'report.md'), 'utf8');
+    const summary = runner.summaries.join('');
+    for (const text of [report, summary]) {
+      expect(text).toMatch(/LX.00300/); // the last record, whatever the escaping of '-'
+      expect(text).toContain('but the structure is achiral '.repeat(100));
+    }
+    expect(Buffer.byteLength(summary)).toBeLessThanOrEqual(1024 * 1024);
   });
 
   it('goes through an HTTPS proxy (HTTPS_PROXY) with CONNECT, and straight out for hosts in NO_PROXY', async () => {
