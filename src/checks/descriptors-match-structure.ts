@@ -371,8 +371,11 @@ export const descriptorsMatchStructure: CheckModule = {
     'pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and ' +
     'rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared ' +
     'up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map ' +
-    'numbers equal to the locants ([C@@H:2]) the comparison is per atom; otherwise only the numbers of R, S, E, Z … ' +
-    'can be compared. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP ' +
+    'numbers equal to the locants ([C@@H:2]) the comparison is per atom; without them a descriptor is still matched ' +
+    'to its unit where the structure has one unit of each kind cited (one R/S centre, one E/Z double bond); ' +
+    'otherwise only the numbers of R, S, E, Z … can be compared, and where that cannot tell (1R,2S) from (1S,2R) ' +
+    'the claim is reported as consistent in count, not verified per atom (a note with the structure written with ' +
+    'atom maps to paste), never as passed. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP ' +
     'descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is ' +
     'unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other ' +
     'stereo unit.',

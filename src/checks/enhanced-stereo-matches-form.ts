@@ -74,8 +74,9 @@ function run(ctx: CheckContext): CheckOutcome {
     else if (and.length === 0 && f.enhanced.meaning === 'absolute' && f.chiral === true) {
       const flag = ctx.main.structure?.chiralFlag === true ? '; the molfile chiral flag is set' : '';
       const labels = defined.map((u) => u.label ?? '?').join(',');
-      // With rac-/RS descriptors the record says what the drawing means; without them it reads as one enantiomer.
-      const racemicNamed = parsed?.mode === 'racemic';
+      // With rac-/RS descriptors the record says what the drawing means (rac-(S): the drawn configuration and its
+      // mirror image); without them — also a bare rac- or (±) that cites no configuration — it reads as one enantiomer.
+      const racemicNamed = parsed?.mode === 'racemic' && parsed.items.length > 0;
       add(
         'racemate-drawn-absolute',
         'stereo.form',

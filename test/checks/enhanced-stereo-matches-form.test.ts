@@ -28,6 +28,13 @@ describe('enhanced-stereo-matches-form', () => {
       ctx({ record: record({ form: 'racemate', descriptors: 'rac-(2R,3S)' }), main: drawn(abs) }),
     );
     expect(named.findings).toMatchObject([{ messageId: 'racemate-drawn-absolute', severity: 'note' }]);
+    // a bare rac- in the name (rac-ibuprofen) names the racemate but cites no configuration: the absolute
+    // drawing still reads as one enantiomer (issue 12: the name is read, not taken as an explanation)
+    const bare = runCheck(
+      check,
+      ctx({ record: record({ form: 'racemate' }, { name: 'rac-ibuprofen' }), main: drawn(abs) }),
+    );
+    expect(bare.findings).toMatchObject([{ messageId: 'racemate-drawn-absolute', severity: 'warning' }]);
   });
   it('an OR group with a racemate fails', () => {
     expect(ids(runCheck(check, ctx({ record: record({ form: 'racemate' }), main: drawn(or1) })))).toEqual([
