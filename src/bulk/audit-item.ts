@@ -11,7 +11,7 @@ import type { RecordResult } from '../audit/types.js';
 import type { ComponentFacts, StructureFacts } from '../chem/facts.js';
 import type { LoadedRecord } from '../registry/types.js';
 import type { BulkMapping, VocabularyResult } from './mapping.js';
-import type { BulkItem } from './sources.js';
+import { formatOf, type BulkItem } from './sources.js';
 import { field, toRecord } from './to-record.js';
 import { DEFAULT_COLUMNS } from './mapping.js';
 
@@ -106,6 +106,20 @@ export function itemId(item: BulkItem, mapping: BulkMapping): string {
   return field(item.fields ?? {}, col)?.trim() || `${item.source}#${item.record}`;
 }
 
+/**
+ * An id that holds a line break, or (in a CSV/TSV export) the delimiter, cannot be written back into a row or
+ * matched against the registry as it stands: a finding, never silently rewritten.
+ */
+export function idShapeProblem(id: string, item: BulkItem): string | null {
+  if (/[\r\n]/.test(id)) return `the id ${JSON.stringify(id.slice(0, 60))} holds a line break`;
+  const format = formatOf(item.source);
+  if (item.fields !== undefined && format === 'csv' && id.includes(','))
+    return `the id ${JSON.stringify(id.slice(0, 60))} holds a comma, the delimiter of this CSV file`;
+  if (item.fields !== undefined && format === 'tsv' && id.includes('\t'))
+    return `the id ${JSON.stringify(id.slice(0, 60))} holds a tab, the delimiter of this TSV file`;
+  return null;
+}
+
 export interface ItemContext {
   mapping: BulkMapping;
   vocabulary: (word: string | undefined) => VocabularyResult;
@@ -133,6 +147,8 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
   const fallbackId = title || `${item.source}#${item.record}`;
   const conv = toRecord(fields, fallbackId, ctx.mapping, ctx.vocabulary, molfile);
   for (const p of conv.problems) problems.push({ message: p.message, path: p.path, line: item.line });
+  const idProblem = idShapeProblem(conv.record.id, item);
+  if (idProblem !== null) problems.push({ message: idProblem, path: 'id', line: item.line });
   const loaded: LoadedRecord = {
     file: item.source,
     id: conv.record.id,

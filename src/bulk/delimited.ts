@@ -6,7 +6,6 @@
  * with its start line, and reading starts again on the line after it, so one bad row costs one record.
  */
 import { createReadStream } from 'node:fs';
-import { createInterface } from 'node:readline';
 
 export interface DelimitedRow {
   /** 1-based line where the row starts. */
@@ -14,6 +13,11 @@ export interface DelimitedRow {
   fields: string[];
   /** Set when the row could not be split (an unclosed quote); `fields` then holds what was read of it. */
   broken?: string;
+  /**
+   * Set when a quote opening a field did not close on its line and the next line is a row of its own: the quote
+   * is taken as a stray character (the row is split as written) instead of swallowing the rows after it.
+   */
+  strayQuote?: string;
 }
 
 export interface DelimitedLimits {
@@ -79,8 +83,9 @@ export async function* readDelimitedRows(
   delimiter: string,
   limits: DelimitedLimits = DEFAULT_LIMITS,
 ): AsyncGenerator<DelimitedRow> {
-  const rl = createInterface({ input: createReadStream(path, { encoding: 'utf8' }), crlfDelay: Infinity });
   let lineNo = 0;
+  let columns = 0; // fields of the header row, once read
+  let openAt = 0; // fields before the quoted field that left the row's first line open
   // lines of the row being read (kept so that a row given up can be read again from its second line)
   let held: string[] = [];
   let start = 0;
@@ -88,7 +93,7 @@ export async function* readDelimitedRows(
   // the row so far while it is open: its finished fields and the quoted text of the open one
   let sofar: string[] = [];
   const replay: { text: string; line: number }[] = [];
-  const lines = rl[Symbol.asyncIterator]();
+  const lines = textLines(path);
   const next = async (): Promise<{ text: string; line: number } | null> => {
     if (replay.length > 0) return replay.shift()!;
     const r = await lines.next();
@@ -115,7 +120,29 @@ export async function* readDelimitedRows(
       const more = splitRow(l.text, delimiter, sofar[sofar.length - 1] + '\n');
       split = { fields: [...sofar.slice(0, -1), ...more.fields], open: more.open };
     }
+    if (held.length === 1) openAt = split.fields.length - 1;
+    // a quoted field ran into the next line, and that line is a row of its own (as many fields as the header;
+    // a genuine multi-line field closes on a line holding only the fields after it): the quote was stray
+    if (
+      l !== null &&
+      held.length >= 2 &&
+      columns >= 2 &&
+      (split.open || openAt >= 1) &&
+      l.text.split(delimiter).length >= columns
+    ) {
+      yield {
+        line: start,
+        fields: held[0]!.split(delimiter),
+        strayQuote:
+          `a quote opens a field on line ${start} and does not close on that line, while line ${l.line} is a ` +
+          'row of its own: the quote was read as text (remove it, or close it on the same line)',
+      };
+      replay.unshift(...held.slice(1).map((text, k) => ({ text, line: start + 1 + k })));
+      held = [];
+      continue;
+    }
     if (!split.open) {
+      if (columns === 0) columns = split.fields.length;
       yield { line: start, fields: split.fields };
       held = [];
       continue;
@@ -135,4 +162,51 @@ export async function* readDelimitedRows(
       held = [];
     }
   }
+}
+
+/**
+ * The lines of a text file, streamed, without their line ends. Only LF (or CRLF) ends a line: a lone CR inside a
+ * field is data, not a row break. A file with no LF at all in its first 64 KiB but with CRs is an old-style
+ * CR-only file, and then CR ends lines.
+ */
+export async function* textLines(path: string): AsyncGenerator<string> {
+  let rest = '';
+  let mode: 'lf' | 'cr' | null = null;
+  let seen = 0;
+  for await (const chunk of createReadStream(path, { encoding: 'utf8' }) as AsyncIterable<string>) {
+    rest += chunk;
+    seen += chunk.length;
+    if (mode === null) {
+      if (rest.includes('\n')) mode = 'lf';
+      else if (seen >= 65_536 && rest.includes('\r')) mode = 'cr';
+      else if (seen < 65_536) continue;
+      else mode = 'lf';
+    }
+    const sep = mode === 'cr' ? '\r' : '\n';
+    let at = rest.indexOf(sep);
+    let from = 0;
+    while (at >= 0) {
+      yield dropCr(rest.slice(from, at));
+      from = at + 1;
+      at = rest.indexOf(sep, from);
+    }
+    rest = rest.slice(from);
+    // one line without end longer than any row may be: hand it on in pieces (the row reader gives it up as broken)
+    while (rest.length > MAX_LINE_CHARS) {
+      yield rest.slice(0, MAX_LINE_CHARS);
+      rest = rest.slice(MAX_LINE_CHARS);
+    }
+  }
+  if (mode === null) mode = rest.includes('\n') || !rest.includes('\r') ? 'lf' : 'cr';
+  const parts = rest.split(mode === 'cr' ? '\r' : '\n');
+  for (let i = 0; i < parts.length; i++) {
+    if (i === parts.length - 1 && parts[i] === '') break;
+    yield dropCr(parts[i]!);
+  }
+}
+
+const MAX_LINE_CHARS = 32 * 2 ** 20;
+
+function dropCr(line: string): string {
+  return line.endsWith('\r') ? line.slice(0, -1) : line;
 }
