@@ -2,14 +2,15 @@
  * One checklist comment per pull request, kept up to date: found among the issue comments by its hidden marker,
  * updated in place, created only when none exists yet.
  *
- * Only a comment written by a bot (the workflow token writes as github-actions[bot]) is ever adopted: anyone can
- * paste the marker into a comment of their own. A creation whose outcome is unknown (timeout, reset connection,
+ * Only a comment written by us is ever adopted (src/github/identity.ts: a bot, or the person whose token this is):
+ * anyone can paste the marker into a comment of their own. A creation whose outcome is unknown (timeout, reset connection,
  * 5xx) is not repeated blindly: the comments are listed again and a comment that did arrive is adopted. Two runs
  * that overlap may both create one; after creating, the list is read again, the newest of our comments is kept and
  * the others by the same author are deleted, so every run ends on the same single comment.
  */
 import { GitHubApiError, type GitHubClient } from './client.js';
 import { enc } from './changed-files.js';
+import { isOursFor } from './identity.js';
 
 /** Rendered into the comment by src/report/markdown.ts. */
 export const CHECKLIST_MARKER = '<!-- stereogate-checklist -->';
@@ -53,8 +54,16 @@ export async function upsertChecklistComment(
 ): Promise<CommentOutcome> {
   const marker = options.marker ?? CHECKLIST_MARKER;
   const base = `/repos/${enc(issue.owner)}/${enc(issue.repo)}/issues`;
-  const listOurs = async (): Promise<ApiComment[]> =>
-    ours(await client.paginate<ApiComment>(`${base}/${issue.number}/comments`), marker);
+  const listOurs = async (): Promise<ApiComment[]> => {
+    const marked = (await client.paginate<ApiComment>(`${base}/${issue.number}/comments`)).filter((c) =>
+      (c.body ?? '').includes(marker),
+    );
+    const isOurs = await isOursFor(
+      client,
+      marked.map((c) => c.user),
+    );
+    return marked.filter((c) => isOurs(c.user)).sort((a, b) => a.id - b.id);
+  };
 
   let found = await listOurs();
   let action: CommentOutcome['action'];
@@ -104,13 +113,6 @@ export async function upsertChecklistComment(
     removed,
     creates,
   };
-}
-
-/** Comments carrying the marker written by a bot, oldest first (ids grow with time). */
-export function ours(comments: readonly ApiComment[], marker: string): ApiComment[] {
-  return comments
-    .filter((c) => c.user?.type === 'Bot' && (c.body ?? '').includes(marker))
-    .sort((a, b) => a.id - b.id);
 }
 
 /** Deletes the comments in `found` other than `keep` written by the same bot; a refusal is not an error. */

@@ -2,12 +2,13 @@
  * Inline review comments on the lines of the wrong claims. Each is posted on its own (a 422 for one line does not
  * lose the others); a comment of ours already present with the same path, line and body is not posted again.
  *
- * As for the checklist comment (src/github/checklist-comment.ts): only a bot's comment counts as ours; a creation
+ * As for the checklist comment (src/github/checklist-comment.ts): only our comment counts (src/github/identity.ts); a creation
  * whose outcome is unknown is looked for before it is sent again; and after posting, the list is read once more
  * and duplicates of ours (overlapping runs) are deleted, the newest of each kept.
  */
 import { GitHubApiError, type GitHubClient } from './client.js';
 import { enc, type PullRequestRef } from './changed-files.js';
+import { isOursFor } from './identity.js';
 
 /** Ends every inline comment stereogate writes (src/github/inline-plan.ts). */
 export const INLINE_MARKER = '<!-- stereogate-inline -->';
@@ -55,10 +56,16 @@ export async function postInlineComments(
   };
   if (comments.length === 0) return outcome;
   const path = `/repos/${enc(pr.owner)}/${enc(pr.repo)}/pulls/${pr.number}/comments`;
-  const listOurs = async (): Promise<ApiReviewComment[]> =>
-    (await client.paginate<ApiReviewComment>(path)).filter(
-      (c) => c.user?.type === 'Bot' && c.line != null && c.body.includes(INLINE_MARKER),
+  const listOurs = async (): Promise<ApiReviewComment[]> => {
+    const marked = (await client.paginate<ApiReviewComment>(path)).filter(
+      (c) => c.line != null && c.body.includes(INLINE_MARKER),
     );
+    const isOurs = await isOursFor(
+      client,
+      marked.map((c) => c.user),
+    );
+    return marked.filter((c) => isOurs(c.user));
+  };
   const seen = new Set((await listOurs()).map((c) => key(c.path, c.line as number, c.body)));
 
   for (const [index, comment] of comments.entries()) {

@@ -174,6 +174,19 @@ describe('the action against an imperfect GitHub', () => {
     expect(gh.requests.some((r) => r.method === 'PATCH')).toBe(false);
   });
 
+  it('with a personal access token its own (non-bot) comments are still found; a planted one still is not', async () => {
+    gh.tokenUser = 'larkspur-registrar';
+    gh.plant(`${MARKER}\nplanted`);
+    const first = await runOnce();
+    expectResultKept(first);
+    const second = await runOnce();
+    expect(second.summary).toContain('Checklist comment unchanged');
+    expect(gh.issueComments.filter((c) => c.user.login === 'larkspur-registrar')).toHaveLength(1);
+    expect(gh.issueComments.find((c) => c.user.login === 'mallory')!.body).toBe(`${MARKER}\nplanted`);
+    expect(gh.reviewComments).toHaveLength(2); // not posted again on the second run
+    expect(second.summary).toMatch(/2 already there/);
+  });
+
   it('two overlapping runs end with one checklist comment and one inline comment per line', async () => {
     // Both runs list the comments before either creates one (the first lists are answered together), so both
     // create; creations answered late, so each run's second look may or may not see the other's.

@@ -117,3 +117,15 @@ describe('input parsers', () => {
     });
   });
 });
+
+describe('API limits', () => {
+  it('reads api-timeout (seconds, decimals allowed), api-tries and api-max-wait, with defaults 30 s, 3, 90 s', () => {
+    expect(readSettings(inputs({}), env).api).toEqual({ timeoutMs: 30_000, tries: 3, maxWaitMs: 90_000 });
+    const s = readSettings(inputs({ 'api-timeout': '0.5', 'api-tries': '1', 'api-max-wait': '600' }), env);
+    expect(s.api).toEqual({ timeoutMs: 500, tries: 1, maxWaitMs: 600_000 });
+  });
+  it('refuses a timeout that is not a positive number', () => {
+    expect(() => readSettings(inputs({ 'api-timeout': '0' }), env)).toThrow(SettingsError);
+    expect(() => readSettings(inputs({ 'api-timeout': 'soon' }), env)).toThrow(/api-timeout/);
+  });
+});

@@ -26,6 +26,9 @@ describe('upsertChecklistComment', () => {
         { id: 500, body: `quoting: ${CHECKLIST_MARKER}`, user: { login: 'chemist', type: 'User' } },
         { id: 501, body: `${CHECKLIST_MARKER}\nold`, user: { login: 'github-actions[bot]', type: 'Bot' } },
       ])
+      // a person's comment carries the marker: is the token theirs? (an Actions token may not ask)
+      .get('/user')
+      .reply(403, { message: 'Resource not accessible by integration' })
       .patch('/repos/larkspur/registry/issues/comments/501', { body })
       .reply(200, { id: 501, html_url: 'https://github.test/c/501' });
     const { client } = testClient();

@@ -65,4 +65,23 @@ describe('retryDelayMs', () => {
     expect(retryDelayMs({ status: 422, headers: headers({}), bodyText: '' }, 1, policy)).toBeNull();
     expect(retryDelayMs({ status: 404, headers: headers({}), bodyText: '' }, 1, policy)).toBeNull();
   });
+
+  // Issue 10: a creation whose outcome is unknown is not repeated by the client (the caller looks first); a rate-limit
+  // refusal is, since GitHub did not act on it.
+  it('does not retry a non-idempotent request after a 5xx or no answer, but does after a short rate limit', () => {
+    const p = { ...policy };
+    expect(
+      retryDelayMs({ status: 502, headers: headers({}), bodyText: '' }, 1, p, Date.now(), false),
+    ).toBeNull();
+    expect(retryDelayMs(null, 1, p, Date.now(), false)).toBeNull();
+    expect(
+      retryDelayMs(
+        { status: 429, headers: headers({ 'retry-after': '1' }), bodyText: '' },
+        1,
+        p,
+        Date.now(),
+        false,
+      ),
+    ).toBe(1000);
+  });
 });

@@ -69,6 +69,11 @@ export interface FakeGitHub {
   requests: { method: string; path: string; authorization: string | undefined }[];
   unexpected: string[];
   faults: Fault[];
+  /**
+   * null (default): the token is an Actions token, comments come from github-actions[bot] and GET /user is refused
+   * as GitHub refuses it for integration tokens; a login: a personal access token of that person.
+   */
+  tokenUser: string | null;
   /** Plants a comment as a person would (not a bot). */
   plant(body: string, user?: User): void;
   close(): Promise<void>;
@@ -95,7 +100,9 @@ export async function startFakeGitHub(
     requests: [],
     unexpected: [],
     faults: [],
+    tokenUser: null,
   };
+  const author = (): User => (state.tokenUser === null ? BOT : { login: state.tokenUser, type: 'User' });
 
   const takeFault = (route: string): Fault | null => {
     const at = state.faults.findIndex((f) => {
@@ -148,6 +155,11 @@ export async function startFakeGitHub(
         send(201, data);
       };
 
+      if (route === 'GET /user') {
+        return state.tokenUser === null
+          ? send(403, { message: 'Resource not accessible by integration' })
+          : send(200, { login: state.tokenUser, type: 'User' });
+      }
       if (route === `GET ${base}/pulls/${number}/files`) return send(200, state.files);
       if (route === `GET ${base}/issues/${number}/comments`) return send(200, state.issueComments);
       if (route === `POST ${base}/issues/${number}/comments`) {
@@ -155,7 +167,7 @@ export async function startFakeGitHub(
         const comment = {
           id,
           body: String(body.body),
-          user: BOT,
+          user: author(),
           html_url: `https://github.test/${owner}/${repo}/pull/${number}#issuecomment-${id}`,
         };
         state.issueComments.push(comment);
@@ -201,7 +213,7 @@ export async function startFakeGitHub(
           line,
           body: String(body.body),
           commit_id: String(body.commit_id),
-          user: BOT,
+          user: author(),
         };
         state.reviewComments.push(comment);
         return created(comment);
