@@ -58,6 +58,10 @@ export function parseRatio(text: string): ParsedRatio {
   }
   out.percent = withPercent > 0;
   const sum = out.parts.reduce((a, b) => a + b, 0);
+  if (out.problems.length === 0 && out.parts.length >= 2 && sum === 0) {
+    // every part zero: no amount of anything, so no ratio (and no ee) can be read from it
+    out.problems.push({ offset: 0, message: 'every part is zero, so it states no proportion' });
+  }
   out.looksLikePercent = out.percent || (sum >= 80 && sum <= 120);
   return out;
 }

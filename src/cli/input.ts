@@ -49,13 +49,18 @@ export function loadStructure(arg: string, io: Io): Loaded {
   const isSmilesFile = source !== 'SMILES argument' && !looksLikeMolfile(text);
   const body = isSmilesFile ? (text.split(/\r?\n/).find((l) => l.trim() !== '') ?? '') : text;
   const r = readStructure(body, { format: 'auto' });
-  // A path-like argument ('/' also occurs in SMILES bond symbols, so only when it is not valid SMILES either).
-  if (!r.ok && source === 'SMILES argument' && arg.includes('/') && !arg.includes('\n'))
+  // A path-like argument: '/' also occurs in SMILES bond symbols, so only when it is not valid SMILES either and
+  // holds none of the characters of SMILES bonds, branches, brackets and rings; else the SMILES error comes first.
+  if (!r.ok && source === 'SMILES argument' && arg.includes('/') && !arg.includes('\n')) {
+    if (/[=#()[\]@%\\]/.test(arg)) {
+      return { ok: false, message: `${source}: ${describeError(r.error)} (no file of that name either)` };
+    }
     return {
       ok: false,
       message: `file not found: ${arg} (and not valid SMILES: ${describeError(r.error)})`,
       missingFile: true,
     };
+  }
   if (!r.ok) return { ok: false, message: `${source}: ${describeError(r.error)}` };
   return { ok: true, structure: r.structure, source, warnings: r.warnings };
 }

@@ -112,3 +112,28 @@ describe('bulk audit: records stopped by the limit keep their id', () => {
     expect(r.findings[0]!.check).toBe('record-time-limit');
   });
 });
+
+describe('smaller record faults (issue 10)', () => {
+  it('ratio "0:0" is an error of ratio-and-ee-consistent', async () => {
+    reg = tmpRegistry({
+      'compounds/r.yml':
+        'id: LX-00020\nstructure:\n  smiles: "C[C@H](O)CC"\nstereo:\n  form: racemate\n  ratio: "0:0"\n',
+    });
+    const result = await runAudit({ root: reg.root });
+    const f = result.records[0]!.findings.find((x) => x.field === 'stereo.ratio');
+    expect(f).toMatchObject({ check: 'ratio-and-ee-consistent', severity: 'error', line: 6 });
+    expect(f!.message).toContain('states no proportion');
+  });
+
+  it('an unreadable SMILES holding / gives the SMILES error first, and no cis/trans finding', async () => {
+    reg = tmpRegistry({
+      'compounds/e.yml':
+        'id: LX-00021\nname: (E)-1,2-difluoroethene\nstructure:\n  smiles: "F/C=C/(F"\nstereo:\n  form: single-diastereomer\n  descriptors: "(E)"\n',
+    });
+    const result = await runAudit({ root: reg.root });
+    const findings = result.records[0]!.findings;
+    expect(findings[0]).toMatchObject({ check: 'structure-readable', line: 4 });
+    expect(findings[0]!.message).toContain("bond symbol before '('");
+    expect(findings.filter((f) => f.check === 'descriptors-match-structure')).toEqual([]);
+  });
+});

@@ -24,6 +24,15 @@ describe('parseRatio', () => {
     expect(parseRatio('70').problems[0].message).toMatch(/two or more parts/);
     expect(parseRatio('70%:30').problems[0].message).toMatch(/some parts/);
   });
+  it('"0:0" states no proportion: a ratio problem, not a ratio (issue 10)', () => {
+    for (const r of ['0:0', '0:0:0', '0%:0%']) {
+      expect(parseRatio(r).problems.map((p) => p.message)).toEqual([
+        'every part is zero, so it states no proportion',
+      ]);
+    }
+    expect(parseRatio('0:100').problems).toEqual([]);
+  });
+
   it('computes ee from an enantiomer ratio (Gold Book definition)', () => {
     expect(eeFromRatio(97.5, 2.5)).toBeCloseTo(95);
     expect(eeFromRatio(3, 1)).toBeCloseTo(50);

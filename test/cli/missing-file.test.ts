@@ -34,6 +34,12 @@ suite('missing file arguments', () => {
     const r = await cli(['describe', 'C/C=C/C']);
     expect(r.code).toBe(0);
   });
+  it('unreadable SMILES with a / bond symbol reports the SMILES error first, not a missing file (issue 10)', async () => {
+    const r = await cli(['describe', 'F/C=C/(F']);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/^stereogate describe: SMILES argument: bond symbol before '\(' \(character 6\)/);
+    expect(r.err).not.toMatch(/file not found/);
+  });
   it('invalid SMILES without a slash stays a SMILES error, exit 2', async () => {
     const r = await cli(['describe', 'C(C']);
     expect(r.code).toBe(2);
