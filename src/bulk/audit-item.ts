@@ -12,7 +12,8 @@ import type { ComponentFacts, StructureFacts } from '../chem/facts.js';
 import type { LoadedRecord } from '../registry/types.js';
 import type { BulkMapping, VocabularyResult } from './mapping.js';
 import { formatOf, type BulkItem } from './sources.js';
-import { field, toRecord } from './to-record.js';
+import { field, toRecord, type ConvertedRecord } from './to-record.js';
+import { originChain } from './origins.js';
 import { DEFAULT_COLUMNS } from './mapping.js';
 
 /**
@@ -128,9 +129,12 @@ export interface ItemContext {
   engine: AuditEngine;
   /** Per-record limits (default: the audit's RECORD_BUDGET). */
   budget?: Budget;
+  /** Records of the export that origins name, by id (bulk runs with an origin column). */
+  originInputs?: ReadonlyMap<string, BulkItem>;
 }
 
-export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): BulkRecordResult {
+/** One bulk item as a loaded record (no structure read yet), with its conversion. */
+function loadItem(item: BulkItem, ctx: ItemContext): { loaded: LoadedRecord; conv: ConvertedRecord } {
   let fields: Record<string, string>;
   let molfile: string | null = null;
   const problems: LoadedRecord['problems'] = [];
@@ -164,10 +168,22 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
       components: [],
     },
   };
+  return { loaded, conv };
+}
+
+export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): BulkRecordResult {
+  const { loaded, conv } = loadItem(item, ctx);
+  // a record with an origin gets the records its origin names (looked up in the export before the run)
+  const origin = conv.record.origin;
+  const registry =
+    origin && ctx.originInputs
+      ? [loaded, ...originChain(origin, ctx.originInputs, (it) => loadItem(it, ctx).loaded)]
+      : undefined;
   const result = auditRecords([loaded], {
     checks: ctx.checks,
     config: ctx.config,
     engine: ctx.engine,
+    registry,
     registryIncomplete: BULK_REGISTRY_NOT_COMPARED,
 
     budget: ctx.budget,

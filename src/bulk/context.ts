@@ -2,7 +2,8 @@
 import { defaultEngine } from '../audit/engine.js';
 import type { AuditConfig } from '../checks/types.js';
 import type { Budget } from '../chem/budget.js';
-import type { ItemContext } from './audit-item.js';
+import { itemId, type ItemContext } from './audit-item.js';
+import type { BulkItem } from './sources.js';
 import { makeVocabulary, type BulkMapping } from './mapping.js';
 import { makeRenderer, type Renderer, type RenderWants } from './render-record.js';
 import { bulkSarifRules } from './sarif-writer.js';
@@ -14,6 +15,8 @@ export interface WorkerSetup {
   wants: RenderWants;
   /** Per-record time and memory limits the worker stops a record at itself (the pool's kill is the backstop). */
   budget?: Budget;
+  /** Records of the export that origins name (collectOriginInputs), when an origin column is mapped. */
+  originInputs?: BulkItem[];
 }
 
 export interface BulkContext extends ItemContext {
@@ -29,6 +32,9 @@ export async function makeItemContext(setup: WorkerSetup): Promise<BulkContext> 
     config: setup.config,
     engine,
     budget: setup.budget,
+    originInputs: setup.originInputs
+      ? new Map(setup.originInputs.map((item) => [itemId(item, setup.mapping), item]))
+      : undefined,
     render: makeRenderer(setup.wants, bulkSarifRules(CHECKS)),
   };
 }

@@ -17,12 +17,19 @@ export interface BulkMapping {
   ratio?: string;
   ee?: string;
   rotation?: string;
+  /**
+   * Column with the inputs the compound was made from (registered ids within the export, or SMILES), separated by
+   * ';' or ','. Read only when mapped: the run then looks the named ids up in the export first.
+   */
+  origin?: string;
+  /** Column with the origin's stereocontrol (none, chiral-catalyst, …); default 'origin_control' when origin is mapped. */
+  control?: string;
   /** Legacy word -> our form, added to (and overriding) the built-in vocabulary. Matched case-insensitively. */
   vocabulary?: Record<string, StereoForm>;
 }
 
 /** Default column names tried when the mapping leaves one out (case-insensitive). */
-export const DEFAULT_COLUMNS: Required<Omit<BulkMapping, 'vocabulary'>> = {
+export const DEFAULT_COLUMNS: Required<Omit<BulkMapping, 'vocabulary' | 'origin' | 'control'>> = {
   id: 'id',
   structure: 'smiles',
   name: 'name',
@@ -32,6 +39,9 @@ export const DEFAULT_COLUMNS: Required<Omit<BulkMapping, 'vocabulary'>> = {
   ee: 'ee',
   rotation: 'rotation',
 };
+
+/** The control column read when an origin column is mapped and no control column is. */
+export const DEFAULT_CONTROL_COLUMN = 'origin_control';
 
 /**
  * Words legacy registries use for stereo forms. Common practice, no source: collected from the way chemists

@@ -9,6 +9,7 @@ import type { AuditConfig } from '../checks/types.js';
 import { auditItem, itemId, type BulkRecordResult } from './audit-item.js';
 import { makeItemContext, type WorkerSetup } from './context.js';
 import type { BulkMapping } from './mapping.js';
+import { collectOriginInputs } from './origins.js';
 import { BulkAccumulator } from './accumulate.js';
 import { mapOrdered, type PoolStats } from './pool.js';
 import { makeProgress, type ProgressMode } from './progress.js';
@@ -143,6 +144,7 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
   // the worker stops a record itself a little before the pool would terminate it (no worker restart then)
   const budget = { timeMs: Math.max(1, Math.floor(timeoutMs * 0.9)), memoryMb: RECORD_MEMORY_MB };
   const setup: WorkerSetup = { mapping: opts.mapping, config: opts.config, wants, budget };
+  if (opts.mapping.origin) setup.originInputs = await collectOriginInputs(opts.inputs, opts.mapping);
   const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
   const script = new URL(`./worker${ext}`, import.meta.url);
   // Time-limit and crash results are made here, so this thread renders them too (same rules as the workers).

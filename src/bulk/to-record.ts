@@ -5,6 +5,7 @@
 import type { CompoundRecord, StereoForm } from '../registry/types.js';
 import type { BulkMapping, VocabularyResult } from './mapping.js';
 import { DEFAULT_COLUMNS } from './mapping.js';
+import { originFromFields } from './origins.js';
 
 export interface ConvertedRecord {
   record: CompoundRecord;
@@ -107,6 +108,11 @@ export function toRecord(
         path: 'stereo.rotation',
       });
     else record.stereo.rotation = { value: v };
+  }
+  if (mapping.origin) {
+    const o = originFromFields(fields, mapping);
+    if (o.origin) record.origin = o.origin;
+    problems.push(...o.problems);
   }
   return { record, structureText, formWord: formWordRaw?.trim() || null, formHow: understood.how, problems };
 }

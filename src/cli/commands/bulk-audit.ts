@@ -43,6 +43,9 @@ Field mapping (SD data field or CSV column; defaults in parentheses):
   --map-ee NAME           enantiomeric excess in percent (ee)
   --map-rotation NAME     specific rotation in degrees (rotation)
   --map-name NAME         compound name (name)
+  --map-origin NAME       inputs it was made from: ids within the export or SMILES, ';'- or ','-separated
+                          (read only when mapped; the named records are looked up in the export first)
+  --map-control NAME      the origin's stereocontrol: none, chiral-catalyst, … (origin_control)
   --form-word WORD=FORM   map a legacy word onto a form (repeatable), e.g. --form-word "enant.=single-enantiomer"
   --mapping FILE          YAML/JSON file with the keys above (id, structure, form, …, vocabulary: {word: form})
 
@@ -91,7 +94,18 @@ function parse(
   }
 }
 
-const FIELD_KEYS = ['id', 'structure', 'name', 'form', 'descriptors', 'ratio', 'ee', 'rotation'] as const;
+const FIELD_KEYS = [
+  'id',
+  'structure',
+  'name',
+  'form',
+  'descriptors',
+  'ratio',
+  'ee',
+  'rotation',
+  'origin',
+  'control',
+] as const;
 
 function readMapping(path: string): BulkMapping {
   let data: unknown;
@@ -240,6 +254,8 @@ async function bulkAuditRun(args: string[], io: Io): Promise<number> {
     'map-ee': { type: 'string' },
     'map-rotation': { type: 'string' },
     'map-name': { type: 'string' },
+    'map-origin': { type: 'string' },
+    'map-control': { type: 'string' },
     'form-word': { type: 'string', multiple: true },
     mapping: { type: 'string' },
     workers: { type: 'string' },
