@@ -18,6 +18,7 @@ export const DEFAULT_CONFIG: Readonly<AuditConfig> = Object.freeze({
   eeTolerance: 1,
   singleEnantiomerMinEe: 98,
   zeroRotationTolerance: 1,
+  axisOrthoMin: 3,
 });
 
 /** Where each default comes from. */
@@ -40,6 +41,10 @@ export const DEFAULT_SOURCES: Readonly<Record<keyof AuditConfig, string>> = Obje
   zeroRotationTolerance:
     'from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell ' +
     'is ±1° of specific rotation ([α] = 100·α / (l·c))',
+  axisOrthoMin:
+    'common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough ' +
+    'for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ' +
+    "ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies",
 });
 
 export const CONFIG_FILE_NAMES = [

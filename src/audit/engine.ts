@@ -59,14 +59,23 @@ export function heavyFormula(elements: Iterable<string>, wildcards: number): str
   return out;
 }
 
+/** Engine settings that come from the audit configuration. */
+export interface EngineSettings {
+  /** Minimum ortho substituents for a potential biaryl axis (AuditConfig.axisOrthoMin). */
+  axisOrthoMin?: number;
+}
+
 /** The real engine (src/chem), loaded on first use. */
-export async function defaultEngine(): Promise<AuditEngine> {
+export async function defaultEngine(settings: EngineSettings = {}): Promise<AuditEngine> {
   const chem = await import('../chem/index.js');
   const graph = await import('../chem/graph/index.js');
   const syntax = await import('../chem/read/smiles-parse.js');
   return {
     readStructure: (text, options) => chem.readStructure(text, options),
-    describe: (s) => chem.describe(s),
+    describe:
+      settings.axisOrthoMin === undefined
+        ? (s) => chem.describe(s)
+        : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
     relate: (a, b) => chem.relate(a, b),
     formula: (s) => graph.molecularFormula(s),
     smilesHeavyAtoms: (smiles) => {

@@ -170,11 +170,7 @@ function missingInput(check: CheckModule, ctx: CheckContext): string | null {
 }
 
 /** The result of a record stopped by its budget: one record-time-limit finding, nothing else claimed. */
-function overBudget(
-  loaded: LoadedRecord,
-  e: BudgetExceeded,
-  checks: readonly CheckModule[],
-): RecordResult {
+function overBudget(loaded: LoadedRecord, e: BudgetExceeded, checks: readonly CheckModule[]): RecordResult {
   const reason =
     e.kind === 'time'
       ? 'the record was stopped at its time limit (see record-time-limit)'
@@ -240,7 +236,7 @@ export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
     (w) => closestWord(w, ids),
     (id) => messageIds.get(id),
   );
-  const engine = options.engine ?? (await defaultEngine());
+  const engine = options.engine ?? (await defaultEngine({ axisOrthoMin: config.axisOrthoMin }));
   const load = loadRegistry(root, { recordDirs: config.recordDirs });
   if (load.missingDirs.length > 0) {
     throw new ConfigError(

@@ -24,7 +24,10 @@ export interface BulkContext extends ItemContext {
 }
 
 export async function makeItemContext(setup: WorkerSetup): Promise<BulkContext> {
-  const [{ CHECKS }, engine] = await Promise.all([import('../checks/index.js'), defaultEngine()]);
+  const [{ CHECKS }, engine] = await Promise.all([
+    import('../checks/index.js'),
+    defaultEngine({ axisOrthoMin: setup.config.axisOrthoMin }),
+  ]);
   return {
     mapping: setup.mapping,
     vocabulary: makeVocabulary(setup.mapping.vocabulary),

@@ -10,7 +10,7 @@ import {
 } from '../chem/descriptors.js';
 import type { StructureFacts } from '../chem/facts.js';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
-import { declaredDescriptors, finding, labelList } from './words.js';
+import { declaredDescriptors, finding, labelList, listUnits } from './words.js';
 import { parseDescriptors } from '../chem/descriptors.js';
 import { prefixFindings, prefixMessages } from './descriptor-prefixes.js';
 import { cisTransFindings, cisTransMessages } from './cis-trans-words.js';
@@ -44,6 +44,10 @@ const messages = {
     '{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} ' +
     'stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the ' +
     'configurations the descriptors state (for a racemate: one enantiomer with an AND group).',
+  'descriptors-at-unstated-units':
+    '{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input ' +
+    'format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a ' +
+    'molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.',
   'descriptors-incomplete':
     '{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every ' +
     'stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.',
@@ -152,6 +156,11 @@ function compareOne(
       // A racemate drawn flat (common practice, accepted by form-matches-structure): nothing to compare.
       evidence.push(`${text} names a racemate; the drawing shows no configuration, as usual for a racemate`);
       return null;
+    }
+    const open = facts.units.filter((u) => u.formatCannotState);
+    if (open.length > 0 && open.length === facts.undefined) {
+      add('descriptors-at-unstated-units', { openUnits: listUnits(open) }, 'note');
+      return cmp;
     }
     // A racemate drawn without stereo marks is common practice; other claims should draw what they state.
     add(
@@ -357,7 +366,8 @@ function run(ctx: CheckContext): CheckOutcome {
         decl.name.rotationSign !== null));
   const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
   if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
-  if (out.some((x) => x.severity !== 'note')) return { findings: out };
+  if (out.some((x) => x.severity !== 'note' || x.messageId === 'descriptors-at-unstated-units'))
+    return { findings: out };
   return { findings: out, passed: evidence.join('; ') || 'descriptor prefixes agree with the declared form' };
 }
 

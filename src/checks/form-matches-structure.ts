@@ -67,6 +67,12 @@ const messages = {
   'racemate-drawn-not-racemic':
     'Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A ' +
     'racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.',
+  'form-open-unstated-units':
+    'Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot ' +
+    'state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a ' +
+    'racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution ' +
+    '(common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) ' +
+    'to have the claim checked.',
   ...mixtureMessages,
 } as const;
 
@@ -80,7 +86,9 @@ function maxCount(c: Count, b: bigint): bigint {
 
 function evidence(f: StructureFacts, s: Structure | null) {
   const defined = definedUnits(f);
-  const undef = undefinedUnits(f);
+  // units the input format cannot state are open, not missing from the drawing (see form-open-unstated-units)
+  const undef = undefinedUnits(f).filter((u) => !u.formatCannotState);
+  const open = f.units.filter((u) => u.formatCannotState);
   return {
     units: unitSummary(defined),
     allUnits: unitSummary(f.units) + (undef.length ? `, ${undef.length} undefined` : ''),
@@ -90,6 +98,8 @@ function evidence(f: StructureFacts, s: Structure | null) {
       (f.chiral ? 'not superimposable on its mirror image' : 'superimposable'),
     undefinedCount: undef.length,
     undefinedUnits: listUnits(undef),
+    openCount: open.length,
+    openUnits: listUnits(open),
     definedCount: defined.length,
     totalIsomers: f.stereoisomers.total,
     chiralIsomers: f.stereoisomers.chiral,
@@ -155,7 +165,11 @@ function run(ctx: CheckContext): CheckOutcome {
   const achiralTo = f.meso === true ? 'meso' : f.units.length === 0 ? 'achiral' : null;
   const defined = definedUnits(f);
   const bonds = defined.filter((u) => u.kind === 'double-bond').length;
-  switch (form) {
+  // Only units the format cannot state are open: the claim is unverified (a note), never an error.
+  const openOnly = e.openCount > 0 && e.undefinedCount === 0;
+  if (e.openCount > 0 && form !== 'unknown' && form !== 'diastereomer-mixture')
+    add('form-open-unstated-units', {}, 'note');
+  switch (openOnly && f.chiral !== true ? 'open' : form) {
     case 'achiral':
       if (f.chiral === true) add('achiral-but-chiral');
       else if (f.chiral === null || e.undefinedCount > 0) {
@@ -214,7 +228,8 @@ function run(ctx: CheckContext): CheckOutcome {
       break;
   }
   out.push(...mixtureFindings(ctx, f));
-  if (out.some((x) => x.severity !== 'note')) return { findings: out };
+  if (out.some((x) => x.severity !== 'note' || x.messageId === 'form-open-unstated-units'))
+    return { findings: out };
   return { findings: out, passed: passedEvidence(form, f, e) };
 }
 

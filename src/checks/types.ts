@@ -23,6 +23,11 @@ export interface AuditConfig {
   singleEnantiomerMinEe: number;
   /** |specific rotation| at or below this (degrees) counts as zero. */
   zeroRotationTolerance: number;
+  /**
+   * A biaryl bond with at least this many ortho substituents (both rings together) is a potential stereogenic
+   * axis when the structure does not draw one (a rule of thumb; the engine's perception reads it).
+   */
+  axisOrthoMin: number;
 }
 
 /** The structure of one record, read and described (or the reason it could not be). */

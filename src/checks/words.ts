@@ -16,7 +16,13 @@ export function unitName(u: StereoUnitFact): string {
   if (u.kind === 'tetrahedral') return `${u.element}${loc(0)} (atom ${u.atoms[0]})`;
   const ends = u.atoms.join(', ');
   const what =
-    u.kind === 'double-bond' ? 'double bond' : u.kind === 'biaryl' ? 'biaryl axis' : `${u.kind} axis`;
+    u.kind === 'double-bond'
+      ? 'double bond'
+      : u.kind === 'biaryl'
+        ? 'biaryl axis'
+        : u.kind === 'helix'
+          ? 'helix'
+          : `${u.kind} axis`;
   const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join('=C')}` : '';
   return `${what}${mapped} (atoms ${ends})`;
 }

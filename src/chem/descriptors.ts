@@ -400,7 +400,7 @@ function mirrored(k: string): string {
   return MIRROR[k] ?? k;
 }
 
-const AXIAL_KINDS = new Set(['allene', 'biaryl', 'cumulene']);
+const AXIAL_KINDS = new Set(['allene', 'biaryl', 'cumulene', 'helix']);
 
 function unitKey(u: StereoUnitFact): string | null {
   return u.label === null ? null : key(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== 'cumulene');

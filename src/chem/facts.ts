@@ -6,7 +6,8 @@
 /** 'e'/'z': a double bond whose ranking at one end rests on Rule 5 (Hanson et al. 2018, as the CIP suite labels). */
 export type CipLabel = 'R' | 'S' | 'r' | 's' | 'E' | 'Z' | 'M' | 'P' | 'm' | 'p' | 'e' | 'z';
 
-export type UnitKind = 'tetrahedral' | 'double-bond' | 'allene' | 'cumulene' | 'biaryl';
+/** 'planar': the planar chirality of a trans double bond in a ring of 8–11 atoms (atoms: the bond's ends). */
+export type UnitKind = 'tetrahedral' | 'double-bond' | 'allene' | 'cumulene' | 'biaryl' | 'helix' | 'planar';
 
 export interface StereoUnitFact {
   kind: UnitKind;
@@ -28,6 +29,11 @@ export interface StereoUnitFact {
   equivalenceClass: number;
   /** Index of the connected component (0-based, in input order of first atom) the unit lies in. */
   component: number;
+  /**
+   * Present (true) on an undefined unit whose configuration the input format cannot state (a biaryl axis or a
+   * helix in SMILES): its configuration is open, not missing from the drawing.
+   */
+  formatCannotState?: true;
 }
 
 /** An ordinary amine nitrogen drawn with a configuration: not a stereocentre (rapid pyramidal inversion). */

@@ -6,7 +6,11 @@ const yesNo = (v: boolean | null, open = 'open (undefined stereo)'): string =>
 
 function unitLine(u: StereoUnitFact): string {
   const where = u.atoms.length === 1 ? `${u.element}${u.atoms[0]}` : `${u.kind} ${u.atoms.join('–')}`;
-  const conf = u.defined ? (u.label ?? 'defined (no CIP label)') : 'undefined';
+  const conf = u.defined
+    ? (u.label ?? 'defined (no CIP label)')
+    : u.formatCannotState
+      ? 'open (the input format cannot state it)'
+      : 'undefined';
   const extra: string[] = [];
   if (u.pseudoasymmetric) extra.push('pseudoasymmetric');
   if (u.group)

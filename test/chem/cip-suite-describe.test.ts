@@ -2,7 +2,7 @@
  * describe() against the CIP validation suite (Hanson, Mayfield, Vainio, Yerin, Musacchio, Redkin, J. Chem. Inf.
  * Model. 2018, 58, 1755–1765; ../shared/data/cip-validation-suite): perception decides which units exist, the
  * labeler labels them. A record scores when describe's labelled units give exactly the suite's labels (none
- * missing, none extra). The floors are today's scores; they may only rise.
+ * missing, none extra). The floors are today's scores; they may only rise. Helicenes (VS010, VS011) are units of describe since the helix is perceived from the ortho-fused rings.
  */
 import { readFileSync } from 'node:fs';
 import { describe as suite, expect, it } from 'vitest';
@@ -32,15 +32,15 @@ function score(file: string): { ok: number; total: number; failed: string[] } {
 }
 
 suite.skipIf(!haveSharedData('cip-validation-suite'))('describe() on the CIP validation suite', () => {
-  it('2D molfiles: at least 294 of 300 records exactly right', () => {
+  it('2D molfiles: at least 299 of 300 records exactly right', () => {
     const r = score('compounds_2d.sdf');
     console.log(`describe / CIP suite 2D: ${r.ok}/${r.total}\n  ${r.failed.join('\n  ')}`);
     expect(r.total).toBe(300);
-    expect(r.ok).toBeGreaterThanOrEqual(294);
+    expect(r.ok).toBeGreaterThanOrEqual(299);
   });
-  it('3D molfiles: at least 294 of 300 records exactly right', () => {
+  it('3D molfiles: at least 299 of 300 records exactly right', () => {
     const r = score('compounds_3d.sdf');
     console.log(`describe / CIP suite 3D: ${r.ok}/${r.total}\n  ${r.failed.join('\n  ')}`);
-    expect(r.ok).toBeGreaterThanOrEqual(294);
+    expect(r.ok).toBeGreaterThanOrEqual(299);
   });
 });

@@ -78,9 +78,18 @@ function positions(s: Structure): Vec[] | null {
   return p;
 }
 
-export function findHelices(s: Structure): HelixResult[] {
+/** The inner rim of a potential helix, from the constitution: terminal atoms and the fusion-atom chain. */
+export interface HelixRim {
+  /** Terminal CH atoms of the inner rim (where the label goes). */
+  ends: [number, number];
+  /** The fusion atoms between them, in order from ends[0]. */
+  chain: number[];
+}
+
+/** Ortho-fused ring chains that wind into a helix ([5]helicene and up), found from the constitution alone. */
+export function helixRims(s: Structure): HelixRim[] {
   const n = s.atoms.length;
-  if (n < 18 || s.dimension === 0) return [];
+  if (n < 18) return [];
   const nbr: number[][] = s.atoms.map(() => []);
   for (const b of s.bonds) {
     nbr[b.a].push(b.b);
@@ -113,7 +122,7 @@ export function findHelices(s: Structure): HelixResult[] {
       link[b].push(a);
     }
   }
-  const out: HelixResult[] = [];
+  const out: HelixRim[] = [];
   const done = new Array<boolean>(n).fill(false);
   for (let a = 0; a < n; a++) {
     if (done[a] || link[a].length !== 1) continue;
@@ -138,13 +147,29 @@ export function findHelices(s: Structure): HelixResult[] {
     const t0 = cap(chain[0], chain[1]);
     const t1 = cap(chain[chain.length - 1], chain[chain.length - 2]);
     if (t0 < 0 || t1 < 0) continue;
-    const pos = positions(s);
-    if (pos === null) continue;
-    const path = [t0, ...chain, t1].map((i) => pos[i]);
-    let sum = 0;
-    for (let i = 0; i + 3 < path.length; i++) sum += torsion(path[i], path[i + 1], path[i + 2], path[i + 3]);
-    if (Math.abs(sum) < 1e-3) continue; // flat drawing without wedges: not defined
-    out.push({ label: sum > 0 ? 'P' : 'M', atoms: [t0, t1] });
+    out.push({ ends: [t0, t1], chain });
+  }
+  return out;
+}
+
+/** The sense of a helix from the drawing (3D coordinates, or 2D with wedges); null when the drawing is flat. */
+export function helixSense(s: Structure, rim: HelixRim): 'P' | 'M' | null {
+  if (s.dimension === 0) return null;
+  const pos = positions(s);
+  if (pos === null) return null;
+  const path = [rim.ends[0], ...rim.chain, rim.ends[1]].map((i) => pos[i]);
+  let sum = 0;
+  for (let i = 0; i + 3 < path.length; i++) sum += torsion(path[i], path[i + 1], path[i + 2], path[i + 3]);
+  if (Math.abs(sum) < 1e-3) return null; // flat drawing without wedges: not defined
+  return sum > 0 ? 'P' : 'M';
+}
+
+export function findHelices(s: Structure): HelixResult[] {
+  if (s.dimension === 0) return [];
+  const out: HelixResult[] = [];
+  for (const rim of helixRims(s)) {
+    const label = helixSense(s, rim);
+    if (label !== null) out.push({ label, atoms: rim.ends });
   }
   return out;
 }

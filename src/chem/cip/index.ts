@@ -20,7 +20,7 @@ import { buildGraph } from './graph.js';
 import { labelPlain, labelRule6 } from './label.js';
 import { checkBudget } from '../budget.js';
 
-export { findHelices, type HelixResult } from './helix.js';
+export { findHelices, helixRims, helixSense, type HelixResult, type HelixRim } from './helix.js';
 
 export interface CipResult {
   /** Index into s.stereo. */

@@ -3,7 +3,7 @@
  * perception, the symmetry group acting on the stereo units, the drawn state and which units are reported.
  */
 import { normalize, type Normalized } from '../normalize.js';
-import { atomName, perceive, type Perception, type State } from '../perceive/index.js';
+import { atomName, perceive, type PerceiveOptions, type Perception, type State } from '../perceive/index.js';
 import {
   chiralityOf,
   feasible,
@@ -27,9 +27,9 @@ export interface Analysis {
   chirality: Chirality;
 }
 
-export function analyse(input: Structure): Analysis {
+export function analyse(input: Structure, opts: PerceiveOptions = {}): Analysis {
   const norm = normalize(input);
-  const p = perceive(norm.structure);
+  const p = perceive(norm.structure, opts);
   const group = unitGroup(p);
   const m = p.units.length;
   const state = Uint8Array.from(p.units, (u) => u.bit);
@@ -37,7 +37,7 @@ export function analyse(input: Structure): Analysis {
   const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
   for (let k = 0; k < m; k++) {
     // 3D input states a configuration for every sp3 atom from its coordinates: nothing to remark on there.
-    if (!reported[k] && p.units[k].defined && p.structure.dimension !== 3) {
+    if (!reported[k] && p.units[k].defined && p.units[k].kind !== 'planar' && p.structure.dimension !== 3) {
       p.remarks.push(
         `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`,
       );
@@ -51,7 +51,8 @@ export function analyse(input: Structure): Analysis {
 
 /** Is unit k stereogenic in some completion of the drawing? (Exact up to 2^10 completions, else assumed.) */
 function stereogenicSomewhere(g: UnitGroup, x: State, defined: Uint8Array, k: number): boolean {
-  if (g.perms.length === 1) return true;
+  const planar = k < g.planarHost.length && g.planarHost[k] >= 0;
+  if (g.perms.length === 1 && !planar) return true;
   const open: number[] = [];
   for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
   if (open.length > 10) return true;

@@ -4,7 +4,7 @@
  * both start here.
  */
 import { isomorphic } from '../graph/index.js';
-import { mapToken, rebase, type State } from '../perceive/index.js';
+import { mapToken, rebase, unitImage, type State } from '../perceive/index.js';
 import { elementMapping } from '../symmetry/index.js';
 import type { Structure } from '../types.js';
 import { analyse, type Analysis } from './analyse.js';
@@ -30,7 +30,7 @@ export function carryOnto(pa: Analysis, pb: Analysis, iso: ArrayLike<number>): C
   const fromA = new Int32Array(mB).fill(-1);
   let open = false;
   pa.p.units.forEach((u, i) => {
-    const j = pb.p.unitOfAtom[iso[u.atoms[0]]];
+    const j = unitImage(pb.p, u, iso);
     const bit =
       j < 0
         ? -1
@@ -49,9 +49,20 @@ export function carryOnto(pa: Analysis, pb: Analysis, iso: ArrayLike<number>): C
   });
   for (let j = 0; j < mB; j++) {
     const relevant = pb.reported[j] || (fromA[j] >= 0 && pa.reported[fromA[j]]);
-    if (relevant && (!yDefined[j] || !pb.defined[j])) open = true;
+    if (relevant && (!yDefined[j] || !pb.defined[j]) && !planarAbsentOnASide(pb, j, y, yDefined)) open = true;
   }
   return { y, yDefined, fromA, open };
+}
+
+/**
+ * A planar unit whose host double bond is drawn ring-cis on either side does not exist there: its open twist on
+ * the other side cannot make the two the same, so it leaves nothing open (the hosts decide).
+ */
+function planarAbsentOnASide(pb: Analysis, j: number, y: State, yDefined: Uint8Array): boolean {
+  const h = pb.p.planar.any ? pb.p.planar.host[j] : -1;
+  if (h < 0) return false;
+  const z = pb.p.planar.zBit[j];
+  return (pb.defined[h] === 1 && pb.state[h] === z) || (yDefined[h] === 1 && y[h] === z);
 }
 
 /** Are two single-component structures the same, fully defined stereoisomer? */

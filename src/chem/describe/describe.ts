@@ -13,7 +13,7 @@ import { constitutionKey, molecularFormula } from '../graph/index.js';
 import { countStereoisomers, countValue } from '../isomers/index.js';
 import { labelUnits } from '../labels.js';
 import { extractAtoms } from '../normalize.js';
-import { transMediumRingBonds, type State } from '../perceive/index.js';
+import type { State } from '../perceive/index.js';
 import type { UnitGroup } from '../symmetry/index.js';
 import type { Structure } from '../types.js';
 import { writeSmiles } from '../write/smiles.js';
@@ -26,12 +26,15 @@ import { listStereoisomers } from './isomer-list.js';
 export interface DescribeOptions {
   listIsomers?: boolean;
   maxIsomers?: number;
+  /** Minimum ortho substituents for a potential biaryl axis (perceive/axes.ts; rule of thumb, default 3). */
+  axisOrthoMin?: number;
 }
 
 const unitKey = (atoms: number[]): string => [...atoms].sort((a, b) => a - b).join(',');
 
 export function describe(input: Structure, opts: DescribeOptions = {}): StructureFacts {
-  const a = analyse(input);
+  const perceiveOpts = opts.axisOrthoMin === undefined ? {} : { axisOrthoMin: opts.axisOrthoMin };
+  const a = analyse(input, perceiveOpts);
   const { p } = a;
   const s = p.structure;
   const labels = new Map<string, CipLabel>();
@@ -51,10 +54,8 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   // Several stereoisomers of the parent drawn as separate molecules (a racemate drawn out): see mixture.ts.
   const mixture = drawnMixture(s, comps, parentIndex, copies);
   const dropped = mixture ? mixture.beyondParent : copies;
-  const counted = dropped.length > 0 ? analyse(withoutCopies(s, comps, dropped)) : a;
+  const counted = dropped.length > 0 ? analyse(withoutCopies(s, comps, dropped), perceiveOpts) : a;
   const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
-  // Planar chirality of a trans ring double bond (8–11 atoms) is not modelled: leave chirality open.
-  const planar = transMediumRingBonds(counted.p);
   const drawnChiral = mixture
     ? mixture.chiral.some((c) => c === true)
       ? true
@@ -62,7 +63,12 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
         ? false
         : null
     : counted.chirality.chiral;
-  const chiral = planar.length > 0 ? null : drawnChiral;
+  // Biaryl axes SMILES cannot state, found by a rule of thumb: whether the substance is chiral at all (is the
+  // rotation hindered?) and which stereoisomer it is are open. A helix or a planar unit is certain: its
+  // chirality follows from the drawing like any undefined unit's.
+  const unstatable = units.filter((u) => u.formatCannotState);
+  const openAxes = unstatable.filter((u) => u.kind === 'biaryl');
+  const chiral = openAxes.length > 0 ? null : drawnChiral;
   // Gold Book meso: achiral member of a set with chiral members (so the count must hold a meso form too).
   const meso =
     chiral === null
@@ -97,19 +103,15 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
     formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice(),
   };
-  for (const b of planar) {
-    const [x, y] = b.atoms.map((i) => counted.p.structure.atoms[i].inputNumber);
-    facts.remarks.push(
-      `the trans double bond between atoms ${x} and ${y} lies in a ring of ${b.ringSize} atoms, which makes the molecule planar chiral (as (E)-cyclooctene); planar chirality is not modelled, so chirality is left open and the stereoisomer count leaves it out`,
-    );
+  for (const u of unstatable) {
+    facts.remarks.push(unstatedRemark(u));
   }
-  if (planar.length > 0) {
+  if (openAxes.length > 0) {
     facts.mirror = {
       chiral: null,
       fixedAtoms: [],
       fixedBonds: [],
-      explanation:
-        'open: a trans double bond in a ring of 8–11 atoms is planar chiral, which is not modelled',
+      explanation: 'open: the configuration of a stereogenic axis or helix is not stated by the input format',
     };
   }
   if (stoppedLabels > 0) {
@@ -162,7 +164,15 @@ function unitFacts(a: Analysis, labels: Map<string, CipLabel>): StereoUnitFact[]
         .sort((x, y) => x - y)
         .join(',') + u.kind;
     if (!classIds.has(ck)) classIds.set(ck, classIds.size);
-    const label = u.defined ? (labels.get(unitKey(u.atoms)) ?? null) : null;
+    // a helix is labelled from the sense the drawing gives it (perceive: bit 0 = P)
+    const label =
+      !u.defined || u.kind === 'planar'
+        ? null
+        : u.kind === 'helix'
+          ? u.bit === 0
+            ? 'P'
+            : 'M'
+          : (labels.get(unitKey(u.atoms)) ?? null);
     let pseudo = label !== null && label === label.toLowerCase();
     if (fullyDefined && u.mode === 'parity' && !pseudo) {
       // reflection-invariant: an improper symmetry maps the unit onto itself (P-93.5.1.3, pseudoasymmetry)
@@ -179,16 +189,43 @@ function unitFacts(a: Analysis, labels: Map<string, CipLabel>): StereoUnitFact[]
       group: groupOf.get(u.atoms[0]) ?? null,
       equivalenceClass: classIds.get(ck)!,
       component: p.componentOfAtom[u.atoms[0]],
+      ...(!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true as const } : {}),
     });
   });
   return out;
+}
+
+/** SMILES cannot state an axis, a helix or a planar twist; a 2D molfile cannot state a planar twist either. */
+function cannotState(kind: StereoUnitFact['kind'], dimension: number): boolean {
+  if (kind === 'planar') return dimension !== 3;
+  return dimension === 0 && (kind === 'biaryl' || kind === 'helix');
+}
+
+function unstatedRemark(u: StereoUnitFact): string {
+  const [x, y] = u.atoms;
+  const what =
+    u.kind === 'biaryl'
+      ? `the bond between atoms ${x} and ${y} is a potential stereogenic axis (ortho-substituted biaryl, found by a rule of thumb on ortho substitution: common practice, no source)`
+      : u.kind === 'helix'
+        ? `the ortho-fused rings ending at atoms ${x} and ${y} form a helix`
+        : `the trans double bond between atoms ${x} and ${y} lies in a ring of 8–11 atoms and is twisted (planar chiral, as (E)-cyclooctene)`;
+  const then =
+    u.kind === 'biaryl'
+      ? 'chirality is left open (a molfile with wedges or 3D coordinates states it)'
+      : 'which of its two enantiomeric forms is meant is open (3D coordinates state it)';
+  return `${what}; the input format cannot state its configuration: ${then}`;
 }
 
 /** (σ_h · M)(x) = x ? */
 function mirrorFixed(g: UnitGroup, h: number, x: State): boolean {
   const perm = g.perms[h];
   const flip = g.flips[h];
-  for (let i = 0; i < x.length; i++) if ((x[i] ^ flip[i] ^ g.reflect[i]) !== x[perm[i]]) return false;
+  for (let i = 0; i < x.length; i++) {
+    if ((x[i] ^ flip[i] ^ g.reflect[i]) === x[perm[i]]) continue;
+    // an absent planar unit (its host ring-cis) holds 0 whatever the symmetry does to it
+    if (i < g.planarHost.length && g.planarHost[i] >= 0 && x[g.planarHost[i]] === g.planarZ[i]) continue;
+    return false;
+  }
   return true;
 }
 

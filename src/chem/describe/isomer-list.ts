@@ -21,9 +21,10 @@ export function listStereoisomers(a: Analysis, max: number): StereoisomerEntry[]
   const fully = a.defined.every((d) => d === 1);
   const inputCanon = fully ? canonicalState(group, a.state) : null;
   return enumerateStereoisomers(group, m, max).map(({ state, chiral }) => {
-    const stereo = p.units.flatMap((u, k) =>
-      stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : [],
-    );
+    const stereo = p.units.flatMap((u, k) => {
+      const e = stereogenicIn(group, state, k) ? unitStereo(u, state[k], n) : null;
+      return e === null ? [] : [e];
+    });
     const t: Structure = withStereo(s, stereo, []);
     const labels = labelUnits(t).map((r) => ({
       atoms: r.atoms.map((x) => s.atoms[x].inputNumber),

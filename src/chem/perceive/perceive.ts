@@ -25,6 +25,17 @@ import { applyInputStereo } from './input.js';
 import { survivesSymmetry, swapsPendantTrees, swapsTerminalPair } from './rescue.js';
 import { bridgeCouplings, type Coupling } from './bridges.js';
 import { objectList } from '../read/make.js';
+import { axisCandidates, DEFAULT_AXIS_ORTHO_MIN } from './axes.js';
+import { helixRims, helixSense } from '../cip/index.js';
+import { addPlanarUnits, type PlanarLinks } from './planar.js';
+
+export interface PerceiveOptions {
+  /**
+   * Minimum number of ortho substituents (both rings together) for a biaryl bond to count as a potential
+   * stereogenic axis when the input does not draw one (perceive/axes.ts; a rule of thumb, default 3).
+   */
+  axisOrthoMin?: number;
+}
 
 export interface Perception {
   structure: Structure;
@@ -40,6 +51,8 @@ export interface Perception {
   invertibleNitrogens: number[];
   /** Bridgehead pairs whose configurations are tied (x_a ⊕ x_b = c). */
   couplings: Coupling[];
+  /** Planar units of medium-ring trans double bonds and their hosts (perceive/planar.ts). */
+  planar: PlanarLinks;
   components: number[][];
   componentOfAtom: Int32Array;
   remarks: string[];
@@ -50,7 +63,7 @@ interface Draft extends PerceivedUnit {
   pairs: { anchor: number; token: number }[];
 }
 
-export function perceive(s: Structure): Perception {
+export function perceive(s: Structure, opts: PerceiveOptions = {}): Perception {
   const n = s.atoms.length;
   const graph = buildGraph(s);
   const rings = ringInfo(s, graph);
@@ -97,7 +110,7 @@ export function perceive(s: Structure): Perception {
       pairs,
     });
   }
-  // Biaryl axes: only when the input defines them (a constitution alone does not say the rotation is hindered).
+  // Biaryl axes the input draws (molfile wedges, 3D coordinates).
   for (const e of s.stereo) {
     if (e.kind !== 'axial' || e.subtype !== 'biaryl') continue;
     const t = e.ligands.map((x, k) =>
@@ -115,6 +128,49 @@ export function perceive(s: Structure): Perception {
       equivalentPair: pairs.length > 0,
       pairs,
     });
+  }
+
+  // Potential axes from the constitution (ortho substitution, a rule of thumb), where none is drawn.
+  let anyAromatic = false;
+  for (let k = 0; k < aromaticBond.length && !anyAromatic; k++) anyAromatic = aromaticBond[k];
+  if (anyAromatic) {
+    const orthoMin = opts.axisOrthoMin ?? DEFAULT_AXIS_ORTHO_MIN;
+    for (const c of axisCandidates(s, graph, rings, aromaticBond, orthoMin)) {
+      const drawn = drafts.some(
+        (d) => d.kind === 'biaryl' && d.atoms.includes(c.ends[0]) && d.atoms.includes(c.ends[1]),
+      );
+      if (drawn) continue;
+      const pairs = equalPairs(c.tokens, tokenClass, c.ends, true) ?? [];
+      drafts.push({
+        kind: 'biaryl',
+        mode: 'parity',
+        atoms: [c.ends[0], c.ends[1]],
+        tokens: c.tokens,
+        defined: false,
+        bit: 0,
+        equivalentPair: pairs.length > 0,
+        pairs,
+      });
+    }
+  }
+
+  // Helicenes ([5]helicene and up): a helical unit on the inner rim of ortho-fused rings (cip/helix.ts).
+  if (n >= 18 && fusedSmallRings(rings) >= 5) {
+    for (const rim of helixRims(s)) {
+      const sense = helixSense(s, rim);
+      const [t0, t1] = rim.ends;
+      drafts.push({
+        kind: 'helix',
+        mode: 'parity',
+        atoms: [t0, t1],
+        // reversed rim -> reversed list, an even permutation: P stays bit 0 under any symmetry
+        tokens: [rim.chain[0], t0, t1, rim.chain[rim.chain.length - 1]],
+        defined: sense !== null,
+        bit: sense === 'M' ? 1 : 0,
+        equivalentPair: false,
+        pairs: [],
+      });
+    }
   }
 
   let kept = fixedPoint(drafts, graph, n);
@@ -161,6 +217,7 @@ export function perceive(s: Structure): Perception {
   });
   const remarks = objectList<string>();
   const invertibleNitrogens = applyInputStereo(s, units, unitOfAtom, invertibleAll, remarks);
+  const planar = addPlanarUnits(s, graph, rings, units);
   const couplings = bridgeCouplings(s, graph, rings, units);
   for (const c of couplings) {
     const [ua, ub] = [units[c.a], units[c.b]];
@@ -181,6 +238,7 @@ export function perceive(s: Structure): Perception {
     unitOfAtom,
     invertibleNitrogens,
     couplings,
+    planar,
     components,
     componentOfAtom,
     remarks,
@@ -221,6 +279,13 @@ function equalPairs(
     if (same >= 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens[i] });
   }
   return out;
+}
+
+/** Number of SSSR rings of 5 or 6 atoms (a cheap bound before looking for helices). */
+function fusedSmallRings(rings: RingInfo): number {
+  let k = 0;
+  for (const r of rings.rings) if (r.length === 5 || r.length === 6) k++;
+  return k;
 }
 
 function fixedPoint(drafts: Draft[], g: Graph, n: number): Draft[] {

@@ -84,8 +84,12 @@ export function rebase(unit: PerceivedUnit, list: ArrayLike<number>, bit: number
 /** A stereo state: one bit per unit, units indexed as in the perception result. */
 export type State = Uint8Array;
 
-/** The StereoElement that states configuration `bit` of `unit` (n = number of atoms). */
-export function unitStereo(unit: PerceivedUnit, bit: number, n: number): StereoElement {
+/**
+ * The StereoElement that states configuration `bit` of `unit` (n = number of atoms); null for a helix, which
+ * SMILES and the stereo list cannot state (it is read from coordinates).
+ */
+export function unitStereo(unit: PerceivedUnit, bit: number, n: number): StereoElement | null {
+  if (unit.kind === 'helix' || unit.kind === 'planar') return null;
   const lig = (t: number): number => (t < n ? t : t < 2 * n ? IMPLICIT_H : LONE_PAIR);
   const [a, b, c, d] = unit.tokens.map(lig);
   if (unit.kind === 'tetrahedral') {

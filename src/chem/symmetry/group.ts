@@ -10,12 +10,12 @@
  * that σ·M⁻¹ is an improper symmetry, and the atoms it fixes are the evidence we print.
  */
 import { automorphisms } from '../graph/index.js';
-import { mapToken, rebase, type State } from '../perceive/index.js';
+import { mapToken, rebase, unitImage, type State } from '../perceive/index.js';
 import type { Perception } from '../perceive/index.js';
 import type { StereoElement, Structure } from '../types.js';
 import type { Coupling } from '../perceive/index.js';
 import { ParityUnion } from './solve.js';
-import { withStereo } from '../read/make.js';
+import { coords3, newAtom, newBond, restructure, withStereo } from '../read/make.js';
 
 export interface UnitGroup {
   /** Distinct signed permutations of the units; element 0 is the identity. */
@@ -27,14 +27,21 @@ export interface UnitGroup {
   reflect: Uint8Array;
   /** Bridgehead couplings: only states with x_a ⊕ x_b = c exist. */
   couplings: Coupling[];
+  /**
+   * Planar units (perceive/planar.ts): planarHost[i] = the host double bond of planar unit i, else -1; while
+   * the host holds planarZ[i] (ring-cis) the planar unit is absent and states keep its bit at 0.
+   */
+  planarHost: Int32Array;
+  planarZ: Uint8Array;
   /** false when the automorphism search stopped at its limit (counts are then lower bounds of the symmetry). */
   complete: boolean;
 }
 
 const MAX_GROUP = 20000;
+const NO_PLANAR = new Int32Array(0);
 
 export function unitGroup(p: Perception): UnitGroup {
-  const { units, unitOfAtom } = p;
+  const { units } = p;
   const n = p.structure.atoms.length;
   const m = units.length;
   const reflect = Uint8Array.from(units, (u) => (u.mode === 'parity' ? 1 : 0));
@@ -46,6 +53,9 @@ export function unitGroup(p: Perception): UnitGroup {
     atomMaps: [id],
     reflect,
     couplings: p.couplings,
+    // empty without planar units, so every loop over them costs nothing
+    planarHost: p.planar.any ? p.planar.host : NO_PLANAR,
+    planarZ: p.planar.zBit,
     complete: true,
   };
   if (m === 0 || trivialOnUnits(p)) return group;
@@ -61,7 +71,7 @@ export function unitGroup(p: Perception): UnitGroup {
       const flip = new Uint8Array(m);
       for (let i = 0; i < m; i++) {
         const u = units[i];
-        const j = unitOfAtom[map[u.atoms[0]]];
+        const j = unitImage(p, u, map);
         if (j < 0) return true; // does not preserve the unit set (a biaryl axis drawn on one side only)
         const f = rebase(
           units[j],
@@ -108,7 +118,21 @@ function signature(perm: Int32Array, flip: Uint8Array): string {
 /** Does the state satisfy every coupling (can it exist)? */
 export function feasible(g: UnitGroup, x: State): boolean {
   for (const c of g.couplings) if ((x[c.a] ^ x[c.b]) !== c.c) return false;
+  for (let i = 0; i < g.planarHost.length; i++) if (x[i] === 1 && absentPlanar(g, x, i)) return false;
   return true;
+}
+
+/** Is unit i a planar unit whose host is ring-cis in x (so that it does not exist)? */
+function absentPlanar(g: UnitGroup, x: State, i: number): boolean {
+  if (i >= g.planarHost.length) return false;
+  const h = g.planarHost[i];
+  return h >= 0 && x[h] === g.planarZ[i];
+}
+
+/** Sets absent planar units to 0 (the one state that stands for "no planar unit"). */
+function normalise(g: UnitGroup, x: State): State {
+  for (let i = 0; i < g.planarHost.length; i++) if (absentPlanar(g, x, i)) x[i] = 0;
+  return x;
 }
 
 /** σ_k · x (optionally composed with the reflection M). */
@@ -117,11 +141,14 @@ export function act(g: UnitGroup, k: number, x: State, withMirror = false): Stat
   const flip = g.flips[k];
   const out = new Uint8Array(x.length);
   for (let i = 0; i < x.length; i++) out[perm[i]] = x[i] ^ flip[i] ^ (withMirror ? g.reflect[i] : 0);
-  return out;
+  return normalise(g, out);
 }
 
 export function mirrorState(g: UnitGroup, x: State): State {
-  return Uint8Array.from(x, (v, i) => v ^ g.reflect[i]);
+  return normalise(
+    g,
+    Uint8Array.from(x, (v, i) => v ^ g.reflect[i]),
+  );
 }
 
 export function sameState(a: State, b: State): boolean {
@@ -134,7 +161,8 @@ export function elementMapping(g: UnitGroup, x: State, y: State): number {
   outer: for (let k = 0; k < g.perms.length; k++) {
     const perm = g.perms[k];
     const flip = g.flips[k];
-    for (let i = 0; i < x.length; i++) if ((x[i] ^ flip[i]) !== y[perm[i]]) continue outer;
+    for (let i = 0; i < x.length; i++)
+      if ((x[i] ^ flip[i]) !== y[perm[i]] && !absentPlanar(g, x, i)) continue outer;
     return k;
   }
   return -1;
@@ -169,14 +197,22 @@ export function fixedCompletionExists(
   const perm = g.perms[k];
   const flip = g.flips[k];
   const m = x.length;
+  // a planar unit binds only where its host is drawn ring-trans; elsewhere a ring-cis completion frees it
+  const planar = g.planarHost.length > 0;
+  const bound = (i: number): boolean =>
+    !planar || g.planarHost[i] < 0 || (defined[g.planarHost[i]] === 1 && !absentPlanar(g, x, i));
   if (g.couplings.length > 0) {
-    const u = solver(g, k, mirror, m + 1);
-    for (let i = 0; i < m; i++) if (defined[i]) u.add(i, m, x[i]);
+    const u = solver(g, k, mirror, m + 1, bound);
+    for (let i = 0; i < m; i++) if (defined[i] && bound(i)) u.add(i, m, x[i]);
     return u.consistent;
   }
   const done = new Uint8Array(m);
   for (let s = 0; s < m; s++) {
     if (done[s]) continue;
+    if (!bound(s)) {
+      for (let i = s; !done[i] || i !== s; i = perm[i]) done[i] = 1;
+      continue;
+    }
     // Walk the cycle; rel[i] = y[i] ⊕ y[s].
     let i = s;
     let rel = 0;
@@ -202,13 +238,26 @@ export function fixedCount(g: UnitGroup, k: number, mirror: boolean): bigint {
   const flip = g.flips[k];
   const m = perm.length;
   if (g.couplings.length > 0) {
-    const u = solver(g, k, mirror, m);
-    return u.consistent ? 1n << BigInt(u.classes) : 0n;
+    if (g.planarHost.length === 0) {
+      const u = solver(g, k, mirror, m);
+      return u.consistent ? 1n << BigInt(u.classes) : 0n;
+    }
+    const u = solver(g, k, mirror, m, (i) => g.planarHost[i] < 0);
+    if (!u.consistent) return 0n;
+    let planar = 0;
+    for (let i = 0; i < m; i++) if (g.planarHost[i] >= 0) planar++;
+    if (planar === 0) return 1n << BigInt(u.classes);
+    const pc = planarCycles(g, k, mirror);
+    return pc.factor << BigInt(u.classes - planar - pc.cycles);
   }
   const done = new Uint8Array(m);
   let cycles = 0n;
   for (let s = 0; s < m; s++) {
     if (done[s]) continue;
+    if (s < g.planarHost.length && g.planarHost[s] >= 0) {
+      for (let i = s; !done[i] || i !== s; i = perm[i]) done[i] = 1;
+      continue;
+    }
     let i = s;
     let rel = 0;
     do {
@@ -219,15 +268,52 @@ export function fixedCount(g: UnitGroup, k: number, mirror: boolean): bigint {
     if (rel !== 0) return 0n;
     cycles++;
   }
-  return 1n << cycles;
+  if (g.planarHost.length === 0) return 1n << cycles;
+  const pc = planarCycles(g, k, mirror);
+  return pc.factor << (cycles - BigInt(pc.cycles));
+}
+
+/**
+ * Burnside with planar units (three configurations per medium-ring trans bond: Z and the two twisted E forms).
+ * The caller counted every consistent cycle of hosts as 2 (its two values); it stands for 1 + 2 states when the
+ * cycle of its planar units is consistent too (Z, and both twists) and for 1 otherwise (Z only). Returns
+ * Π (1 or 3) over host cycles and the number of host cycles (the caller's factor 2 to take out for each).
+ */
+function planarCycles(g: UnitGroup, k: number, mirror: boolean): { factor: bigint; cycles: number } {
+  const perm = g.perms[k];
+  const flip = g.flips[k];
+  const m = perm.length;
+  const done = new Uint8Array(m);
+  let factor = 1n;
+  let cycles = 0;
+  for (let s = 0; s < m; s++) {
+    if (done[s] || g.planarHost[s] < 0) continue;
+    let i = s;
+    let rel = 0;
+    do {
+      done[i] = 1;
+      rel ^= flip[i] ^ (mirror ? g.reflect[i] : 0);
+      i = perm[i];
+    } while (i !== s);
+    cycles++;
+    if (rel === 0) factor *= 3n;
+  }
+  return { factor, cycles };
 }
 
 /** Constraints of "σ_k (M) fixes y" plus the couplings, on `size` nodes (units, and an optional zero node). */
-function solver(g: UnitGroup, k: number, mirror: boolean, size: number): ParityUnion {
+function solver(
+  g: UnitGroup,
+  k: number,
+  mirror: boolean,
+  size: number,
+  bound: (i: number) => boolean = () => true,
+): ParityUnion {
   const u = new ParityUnion(size);
   const perm = g.perms[k];
   const flip = g.flips[k];
-  for (let i = 0; i < perm.length; i++) u.add(i, perm[i], flip[i] ^ (mirror ? g.reflect[i] : 0));
+  for (let i = 0; i < perm.length; i++)
+    if (bound(i)) u.add(i, perm[i], flip[i] ^ (mirror ? g.reflect[i] : 0));
   for (const c of g.couplings) u.add(c.a, c.b, c.c);
   return u;
 }
@@ -286,13 +372,17 @@ function someFeasibleCompletion(g: UnitGroup, x: State, defined: Uint8Array): bo
  * stereoisomer), so an infeasible inversion counts as stereogenic.
  */
 export function stereogenicIn(g: UnitGroup, x: State, k: number): boolean {
+  if (absentPlanar(g, x, k)) return false;
   const y = Uint8Array.from(x);
   y[k] ^= 1;
   if (!feasible(g, y)) return true;
   return elementMapping(g, x, y) < 0;
 }
 
-/** The mirror image: tetrahedral and axial windings inverted, cis/trans kept. Groups and flags unchanged. */
+/**
+ * The mirror image: tetrahedral and axial windings inverted, cis/trans kept, coordinates reflected. Groups and
+ * flags unchanged.
+ */
 export function mirror(s: Structure): Structure {
   // literals with the readers' property order, not spreads: one hidden class per kind of object (see read/make.ts)
   const stereo = s.stereo.map((e): StereoElement => {
@@ -303,5 +393,28 @@ export function mirror(s: Structure): Structure {
       return { kind: 'axial', subtype: e.subtype, ends: e.ends, ligands: e.ligands, winding: winding! };
     return e;
   });
-  return withStereo(s, stereo);
+  if (s.dimension === 0) return withStereo(s, stereo);
+  // Units read from the drawing itself (a helix) follow the drawing: reflect it too (z -> -z; wedge <-> hash).
+  const atoms = s.atoms.map((a) =>
+    a.coords === null || s.dimension !== 3
+      ? a
+      : newAtom(
+          a.element,
+          a.atomicNumber,
+          a.charge,
+          a.isotope,
+          a.hCount,
+          a.aromatic,
+          a.radical,
+          a.mapNumber,
+          a.inputNumber,
+          coords3(a.coords[0], a.coords[1], -a.coords[2]),
+        ),
+  );
+  const bonds = s.bonds.map((b) =>
+    s.dimension === 2 && (b.wedge === 'up' || b.wedge === 'down')
+      ? newBond(b.a, b.b, b.order, b.aromatic, b.wedge === 'up' ? 'down' : 'up')
+      : b,
+  );
+  return restructure(s, atoms, bonds, stereo, s.groups);
 }
