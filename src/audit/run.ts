@@ -4,7 +4,7 @@
  */
 import { existsSync, realpathSync, statSync } from 'node:fs';
 import { resolve } from 'node:path';
-import type { AuditConfig, CheckContext, CheckModule } from '../checks/types.js';
+import type { AuditConfig, CheckContext, CheckModule, RegistryView } from '../checks/types.js';
 import { closestWord } from '../registry/closest.js';
 import { loadRegistry } from '../registry/load.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -23,10 +23,14 @@ import {
 } from './findings.js';
 import { selectRecords } from './select.js';
 import { BudgetExceeded, withBudget, type Budget } from '../chem/budget.js';
-import { StructureCache } from './structures.js';
+import { indexRow } from './index-row.js';
+import { RegistryPhase, type PhaseResult } from './registry-phase.js';
+import { StructureCache, readOnly } from './structures.js';
 import type { AuditResult, AuditSummary, Finding, NotRunCheck, PassedCheck, RecordResult } from './types.js';
 import { VERSION } from './version.js';
 import { buildRegistryView } from './view.js';
+import type { Confirm } from '../registry/key-index.js';
+import type { RecordKeys } from '../registry/keys.js';
 
 /**
  * Default per-record limits of the audit: 20 s (as the bulk audit's --record-timeout) and 1 GiB of heap growth.
@@ -40,26 +44,33 @@ export interface AuditRecordsOptions {
   checks: readonly CheckModule[];
   config?: AuditConfig;
   engine: AuditEngine;
-  /** The whole registry the records belong to (for cross-record checks); default: the audited records. */
+  /**
+   * The whole registry the records belong to: the records are then reviewed against it (a pull request).
+   * Default: the audited records are the registry, audited in full.
+   */
   registry?: readonly LoadedRecord[];
   /**
    * Why `registry` is not the whole registry (a bulk run auditing each record on its own, one shard), or
    * undefined when it is: checks that need the registry are then reported as not run with this reason.
    */
   registryIncomplete?: string;
+  /** false: skip the registry-wide phase (one bulk item: the main thread runs it over all of them). */
+  registryPhase?: boolean;
+  /** The registry as per-record checks see it, when the caller has one (a streamed audit's lazy view). */
+  view?: RegistryView;
 }
 
 /** Audits `records` (each must also be in `registry` when one is given). Pure apart from the engine. */
 export function auditRecords(records: readonly LoadedRecord[], options: AuditRecordsOptions): AuditResult {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache = new StructureCache(options.engine);
-  const audited = new Set(records);
-  const registryRecords = options.registry ?? records;
-  const registry = buildRegistryView(registryRecords, cache, (r) => audited.has(r));
-  registry.incomplete = options.registryIncomplete ?? null;
   const engineApi = { relate: options.engine.relate.bind(options.engine) };
   const budget = options.budget ?? RECORD_BUDGET;
-  const results = records.map((loaded) => {
+  const audited = new Set(records);
+  const registry =
+    options.view ?? buildRegistryView(options.registry ?? records, cache, (r) => audited.has(r));
+  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
+  const results = records.map((loaded): RecordResult => {
     try {
       return withBudget(budget, 'the audit of this record', () =>
         auditOne(loaded, options.checks, config, cache, registry, engineApi),
@@ -77,12 +88,75 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
       };
     }
   });
-  return {
+  const result: AuditResult = {
     tool: { name: 'stereogate', version: VERSION },
     records: results,
     summary: summarize(results),
     caution: CAUTION,
   };
+  if (
+    options.registryPhase !== false &&
+    !options.registryIncomplete &&
+    options.checks.some((c) => c.scope === 'registry')
+  ) {
+    const review = options.registry !== undefined;
+    const phase = new RegistryPhase({
+      mode: review ? 'review' : 'full',
+      config,
+      confirm: confirmWith(options.engine),
+      duplicateIds: false,
+    });
+    // a registry record's structure is described within the same per-record budget; over it, it has no keys
+    const mainOf = (r: LoadedRecord) => {
+      try {
+        return withBudget(budget, 'the structure of a registry record', () => cache.main(r));
+      } catch {
+        return { structure: null, facts: null, error: null };
+      }
+    };
+    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
+    if (review) {
+      const audited = new Set(records);
+      let seq = records.length;
+      for (const r of options.registry!) if (!audited.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
+      for (const row of rows) phase.fileUnderReview(row);
+    }
+    rows.forEach((row, i) => addPhaseResult(results[i]!, phase.next(row)));
+    result.summary = summarize(results);
+    result.registry = phase.summary();
+  }
+  return result;
+}
+
+/** relate() of two inexact keys from their kept structure texts (see src/registry/key-index.ts). */
+export function confirmWith(engine: AuditEngine): Confirm {
+  const read = (k: RecordKeys) =>
+    k.text
+      ? readOnly({ field: 'structure', format: k.text.format, text: k.text.text }, engine).structure
+      : null;
+  return (a, b) => {
+    const sa = read(a);
+    const sb = read(b);
+    if (!sa || !sb) return null;
+    try {
+      return engine.relate(sa, sb).relation;
+    } catch {
+      return null;
+    }
+  };
+}
+
+/** Adds what the registry-wide phase found to a record audited before (checks in CHECKS order). */
+export function addPhaseResult(r: Pick<RecordResult, 'findings' | 'passed'>, p: PhaseResult): void {
+  if (p.findings.length > 0) {
+    // a waiver of the registry-wide check matched nothing per record; now it may match
+    const checks = new Set(p.findings.map((f) => f.check));
+    r.findings = r.findings.filter(
+      (f) => !(f.messageId === 'waiver-matches-nothing' && checks.has(String(f.data.waivedCheck))),
+    );
+    r.findings.push(...p.findings);
+  }
+  if (p.passed) r.passed.push(p.passed);
 }
 
 function auditOne(
@@ -117,6 +191,8 @@ function auditOne(
       notRun.push({ check: check.id, reason: missing });
       continue;
     }
+    // the registry-wide phase runs it, over every record's keys
+    if (check.scope === 'registry') continue;
     let produced: Finding[];
     let outcome;
     try {
@@ -251,13 +327,9 @@ export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
     toAudit = load.records.filter((r) => sel.selected.has(r));
     unmatched = sel.unmatched;
   }
-  const result = auditRecords(toAudit, {
-    checks,
-    config,
-    engine,
-    registry: load.records,
-    budget: options.budget,
-  });
+  // every record: a full audit (each compared with those before it); some: a review against the registry
+  const registry = toAudit.length === load.records.length ? undefined : load.records;
+  const result = auditRecords(toAudit, { checks, config, engine, registry, budget: options.budget });
   if (unmatched.length > 0) result.unmatched = unmatched;
   return result;
 }

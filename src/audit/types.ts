@@ -76,4 +76,21 @@ export interface AuditResult {
   caution: string;
   /** Paths asked for that named no record file, folder or molfile (runAudit only). */
   unmatched?: string[];
+  /** The registry-wide phase: whether it ran, and the pairs it found (listed once, here). */
+  registry?: RegistrySummary;
+}
+
+/** What the registry-wide checks (duplicates, enantiomer pairs) did over the whole run. */
+export interface RegistrySummary {
+  status: 'run' | 'not-run';
+  /** Why it did not run (one shard of a split run), or what it compared. */
+  reason: string;
+  /** Records whose keys were in the index. */
+  records: number;
+  /** Identical records and enantiomer pairs, each once (earlier record first). */
+  pairs: {
+    relation: 'identical' | 'enantiomers';
+    first: { id: string | null; file: string };
+    second: { id: string | null; file: string };
+  }[];
 }

@@ -185,8 +185,8 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
     engine: ctx.engine,
     registry,
     registryIncomplete: BULK_REGISTRY_NOT_COMPARED,
-
     budget: ctx.budget,
+    registryPhase: false,
   }).records[0];
   const out: BulkRecordResult = {
     ...result,

@@ -3,9 +3,10 @@
  * again, the enantiomer of a registered compound (with the rotation signs compared), and the same structure
  * registered under a different form.
  */
-import type { StructureFacts } from '../chem/facts.js';
-import type { Rotation, StereoForm } from '../registry/types.js';
-import type { CheckContext, CheckModule, CheckOutcome, RawFinding, RegistryEntry } from './types.js';
+import type { KeyMatch } from '../registry/key-index.js';
+import type { IndexRow } from '../registry/keys.js';
+import type { StereoForm } from '../registry/types.js';
+import type { AuditConfig, CheckModule, CheckOutcome, RawFinding } from './types.js';
 import { conditions } from './rotation-consistent.js';
 import { rotationsComparable } from './solvents.js';
 import { finding, fmt } from './words.js';
@@ -40,34 +41,30 @@ const messages = {
   'enantiomer-form-conflict':
     'This compound is declared {form}, but its enantiomer {otherId} is registered as {otherForm}. Enantiomers have ' +
     'the same kind of form (both single enantiomers, or both enriched); check both records.',
-  'conflict-reported-on-later-record':
-    '{otherId} ({otherFile}), registered after this record, conflicts with it ({conflict}); the finding is ' +
-    'reported on {otherId}. Nothing to change here unless {otherId} turns out to be right.',
 } as const;
 
 type Id = keyof typeof messages;
 
-/** Findings that say one of two records is wrong; the rest (notes) are said on both records. */
-const CONFLICTS: readonly Id[] = [
-  'already-registered',
-  'same-structure-different-form',
-  'enantiomer-rotation-same-sign',
-  'enantiomer-form-conflict',
-];
-
-/** What the conflict pointer says about the other record's finding. */
-const CONFLICT_WORDS: Partial<Record<Id, string>> = {
-  'already-registered': 'the same structure registered again under the same form',
-  'same-structure-different-form': 'the same structure under another form',
-  'enantiomer-rotation-same-sign': 'enantiomers with rotations of the same sign',
-  'enantiomer-form-conflict': 'enantiomers of different kinds of form',
-};
+/** How the registry-wide phase runs (src/audit/registry-phase.ts). */
+export type RegistryMode =
+  /**
+   * A full audit: records come in the audit's order, each compared with the records before it, so a conflict
+   * between two records is reported once, on the later one; enantiomer pairs and duplicates are listed once in
+   * the summary, and a record carries only what its owner must act on.
+   */
+  | 'full'
+  /**
+   * A review of some records (a pull request) against the whole registry: each record under review is compared
+   * with every other record and says what it found, once, itself — a pair of two records under review is said
+   * on the one registered later.
+   */
+  | 'review';
 
 /**
  * Registry order: ids compared with their numbers as numbers (LX-00024 after LX-00008); a record without an
  * id is not registered yet, so it comes after every record with one. Ties fall back to the file path.
  */
-export function registeredLater(a: RegistryEntry, b: RegistryEntry): boolean {
+export function registeredLater(a: Pick<IndexRow, 'id' | 'file'>, b: Pick<IndexRow, 'id' | 'file'>): boolean {
   if (a.id !== b.id) {
     if (a.id === null) return true;
     if (b.id === null) return false;
@@ -76,61 +73,40 @@ export function registeredLater(a: RegistryEntry, b: RegistryEntry): boolean {
   return a.file.localeCompare(b.file, 'en', { numeric: true }) > 0;
 }
 
-/**
- * Which of two conflicting records carries the finding: a record under review against one that is not (a pull
- * request changing one record) carries it itself; when both are under review (a full audit, or a pull request
- * touching both), the one registered later does.
- */
-function carriesConflict(me: RegistryEntry | undefined, other: RegistryEntry): boolean {
-  if (!me || !other.underReview) return true;
-  return registeredLater(me, other);
-}
-
 const ENANTIOPURE: readonly StereoForm[] = ['single-enantiomer', 'enantioenriched'];
 
-function selfEntry(ctx: CheckContext): RegistryEntry | undefined {
-  return ctx.registry.entries.find((e) => e.file === ctx.loaded.file && e.id === ctx.loaded.id);
+/** A pair found by the registry-wide phase, listed once in the summary of a full audit. */
+export interface RegistryPair {
+  relation: 'identical' | 'enantiomers';
+  /** The earlier and the later record (audit order). */
+  first: { id: string | null; file: string };
+  second: { id: string | null; file: string };
 }
 
-function isSelf(ctx: CheckContext, e: RegistryEntry): boolean {
-  if (e.file !== ctx.loaded.file) return false;
-  // Bulk inputs hold many records in one file: there only the same id is the same record.
-  return ctx.loaded.origin.kind === 'file' || e.id === ctx.loaded.id;
+export interface RegistryComparison {
+  findings: RawFinding[];
+  /** Evidence when nothing was found. */
+  passed: string;
+  pairs: RegistryPair[];
 }
 
 /**
- * What the drawing stands for: one stereoisomer as drawn, the drawn one and its mirror image together (AND
- * groups), or one of the two, unknown which (OR groups / no chiral flag). Drawings of different kinds are
- * different substances even when the drawn configurations coincide, so they are not compared.
+ * A record against the records the index found for it (identical ones and enantiomers). `matches` in a full
+ * audit are the earlier records only; in a review, every other record (`underReview` tells which of them are
+ * under review too).
  */
-function drawingKind(f: StructureFacts): 'as-drawn' | 'racemic' | 'relative' {
-  const m = f.enhanced.meaning;
-  if (m === 'racemic' || m === 'mixture') return 'racemic';
-  if (m === 'relative') return 'relative';
-  return 'as-drawn';
-}
-
-function run(ctx: CheckContext): CheckOutcome {
-  const record = ctx.record;
-  const f = ctx.main.facts;
-  const structure = ctx.main.structure;
-  if (!record || !f || !structure) return { findings: [], notApplicable: true };
-  const me = selfEntry(ctx);
-  if (me && !me.underReview) return { findings: [], notApplicable: true };
-  const form = record.stereo.form;
+export function compareWithRegistry(
+  me: IndexRow,
+  matches: readonly KeyMatch[],
+  mode: RegistryMode,
+  config: AuditConfig,
+  underReview: (row: IndexRow) => boolean = () => false,
+): RegistryComparison {
   const out: RawFinding[] = [];
-  const add = (
-    id: Id,
-    other: RegistryEntry,
-    data: RawFinding['data'],
-    severity?: RawFinding['severity'],
-  ): void => {
-    if (CONFLICTS.includes(id) && !carriesConflict(me, other)) {
-      pointers.push(other.id ?? other.file);
-      data = { conflict: CONFLICT_WORDS[id] ?? id, otherMessageId: id, ...data };
-      id = 'conflict-reported-on-later-record';
-      severity = 'note';
-    }
+  const pairs: RegistryPair[] = [];
+  const form = me.form;
+  const ref = (r: IndexRow) => ({ id: r.id, file: r.file });
+  const add = (id: Id, other: IndexRow, data: RawFinding['data'], severity?: RawFinding['severity']) => {
     out.push(
       finding(
         id,
@@ -139,8 +115,8 @@ function run(ctx: CheckContext): CheckOutcome {
           form,
           otherId: other.id ?? other.file,
           otherFile: other.file,
-          otherName: other.record.name ? `, ${other.record.name}` : '',
-          otherForm: other.record.stereo.form,
+          otherName: other.name ? `, ${other.name}` : '',
+          otherForm: other.form,
           ...data,
         },
         severity,
@@ -148,63 +124,74 @@ function run(ctx: CheckContext): CheckOutcome {
     );
   };
   let compared = 0;
-  const pointers: string[] = [];
-  for (const other of ctx.registry.withConstitution(f.constitutionKey)) {
-    const otherFacts = other.main.facts;
-    if (isSelf(ctx, other) || !other.main.structure || !otherFacts) continue;
-    if (drawingKind(otherFacts) !== drawingKind(f)) continue;
+  for (const { other, relation } of matches) {
+    // a pair of two records under review is said once, on the one registered later
+    if (mode === 'review' && underReview(other) && !registeredLater(me, other)) continue;
     compared++;
-    const rel = ctx.engine.relate(structure, other.main.structure);
-    if (rel.relation === 'identical') {
-      const otherForm = other.record.stereo.form;
+    pairs.push({ relation, first: ref(other), second: ref(me) });
+    const otherForm = other.form;
+    if (relation === 'identical') {
       if (otherForm === form) add('already-registered', other, {}, 'warning');
       else if (ENANTIOPURE.includes(form) && ENANTIOPURE.includes(otherForm)) {
         add('same-structure-other-purity', other, {}, 'note');
       } else add('same-structure-different-form', other, {});
-    } else if (rel.relation === 'enantiomers' && f.chiral === true) {
-      add('enantiomer-registered', other, { explanation: rel.explanation }, 'note');
-      const otherForm = other.record.stereo.form;
-      if (ENANTIOPURE.includes(form) !== ENANTIOPURE.includes(otherForm)) {
-        add('enantiomer-form-conflict', other, {}, 'warning');
-      }
-      const a = record.stereo.rotation;
-      const b = other.record.stereo.rotation;
-      const tol = ctx.config.zeroRotationTolerance;
-      const alike = a && b ? rotationsComparable(a, b) : null;
-      if (a && b && alike && !alike.alike && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
-        // said once, on the record that carries the pair's conflicts
-        if (carriesConflict(me, other))
-          add(
-            'enantiomer-rotations-not-compared',
-            other,
-            { value: fmt(a.value), otherValue: fmt(b.value), reason: alike.reason },
-            'note',
-          );
-      } else if (a && b && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
-        const data = { value: fmt(a.value), otherValue: fmt(b.value), conditions: conditions(a) };
-        if (Math.sign(a.value) === Math.sign(b.value)) add('enantiomer-rotation-same-sign', other, data);
-        else if (
-          form === 'single-enantiomer' &&
-          otherForm === 'single-enantiomer' &&
-          Math.abs(Math.abs(a.value) - Math.abs(b.value)) >
-            Math.max(tol, 0.1 * Math.max(Math.abs(a.value), Math.abs(b.value)))
-        ) {
-          add('enantiomer-rotation-magnitude', other, data, 'note');
-        }
+      continue;
+    }
+    if (me.keys?.chiral !== true) continue;
+    // Registering both enantiomers is normal: a pull request says so once on the new record; a full audit lists
+    // the pair in its summary only.
+    if (mode === 'review') {
+      add(
+        'enantiomer-registered',
+        other,
+        { explanation: 'mirror images that are not superimposable' },
+        'note',
+      );
+    }
+    if (ENANTIOPURE.includes(form) !== ENANTIOPURE.includes(otherForm)) {
+      add('enantiomer-form-conflict', other, {}, 'warning');
+    }
+    const a = me.rotation;
+    const b = other.rotation;
+    const tol = config.zeroRotationTolerance;
+    const alike = a && b ? rotationsComparable(a, b) : null;
+    if (a && b && alike && !alike.alike && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
+      add(
+        'enantiomer-rotations-not-compared',
+        other,
+        { value: fmt(a.value), otherValue: fmt(b.value), reason: alike.reason },
+        'note',
+      );
+    } else if (a && b && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
+      const data = { value: fmt(a.value), otherValue: fmt(b.value), conditions: conditions(a) };
+      if (Math.sign(a.value) === Math.sign(b.value)) add('enantiomer-rotation-same-sign', other, data);
+      else if (
+        form === 'single-enantiomer' &&
+        otherForm === 'single-enantiomer' &&
+        Math.abs(Math.abs(a.value) - Math.abs(b.value)) >
+          Math.max(tol, 0.1 * Math.max(Math.abs(a.value), Math.abs(b.value)))
+      ) {
+        add('enantiomer-rotation-magnitude', other, data, 'note');
       }
     }
   }
-  if (out.some((x) => x.severity !== 'note')) return { findings: out };
-  return {
-    findings: out,
-    passed:
-      compared === 0
-        ? 'no other registered record has this constitution'
-        : pointers.length > 0
-          ? `compared with ${compared} registered record(s) of the same constitution; the conflict with ` +
-            `${[...new Set(pointers)].join(', ')} is reported on the later record`
-          : `compared with ${compared} registered record(s) of the same constitution; no duplicate or conflict`,
-  };
+  const identical = pairs.filter((p) => p.relation === 'identical').length;
+  const passed =
+    compared === 0
+      ? 'no other registered record is this stereoisomer or its enantiomer'
+      : `${identical > 0 ? `the same stereoisomer as ${identical} other record(s)` : ''}` +
+        `${identical > 0 && compared > identical ? ', ' : ''}` +
+        `${compared > identical ? `the enantiomer of ${compared - identical} registered record(s)` : ''}` +
+        '; forms and rotations agree';
+  return { findings: out, passed, pairs };
+}
+
+/**
+ * Per record the check does nothing: it runs in the registry-wide phase (src/audit/registry-phase.ts), after the
+ * record's keys are in the index, through `compareWithRegistry`.
+ */
+function run(): CheckOutcome {
+  return { findings: [], notApplicable: true };
 }
 
 export const consistentWithRegistry: CheckModule = {
@@ -213,18 +200,22 @@ export const consistentWithRegistry: CheckModule = {
   summary:
     'A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.',
   explanation:
-    'Records of the same constitution are related by the engine (identical, enantiomers, diastereomers). An ' +
-    'identical structure is the same compound: register a batch, not a new number; under a different form one ' +
-    'record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: ' +
-    'measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in ' +
-    'size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). Only records under review are ' +
-    'checked, each against the other records in the checkout; a racemic drawing (AND group) is compared only with ' +
-    'racemic drawings, a relative one (OR group) only with relative ones. A conflict between two records (a ' +
-    'duplicate, the same structure under another form, enantiomers of the same rotation sign or of different ' +
-    'kinds of form) is reported once: on the record under review when the other is not under review (a pull ' +
-    'request), and, when both are (a full audit), on the one registered later — the higher registry id, a record ' +
-    'without an id counting as newest; the earlier record gets a note naming it (common practice, no source).',
+    "Every record contributes keys to a registry index: its constitution, and each stereo unit's canonical class " +
+    'with its CIP descriptor (IUPAC 2013, P-92.1), as drawn and as its mirror image (src/registry/keys.ts). Two ' +
+    "records with equal keys are the same stereoisomer; one whose key equals the other's mirror key is its " +
+    'enantiomer (where the keys cannot tell, the engine relates the two structures). An identical structure is ' +
+    'the same compound: register a batch, not a new number; under a different form one record is wrong. ' +
+    'Enantiomers have identical physical properties except the sense of optical rotation: measured under the ' +
+    'same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite ' +
+    'in sign (IUPAC Gold Book, enantiomer, optical activity). A racemic drawing (AND group) is compared only with ' +
+    'racemic drawings, a relative one (OR group) only with relative ones; a drawing with undefined stereo units ' +
+    'is compared with none. Each finding is said once (common practice, no source): in a pull request on the ' +
+    'record under review (on the one registered later when both are); in a full audit on the later record in ' +
+    "the audit's order (file path order, numbers as numbers; input order for exports), and enantiomer pairs and " +
+    'duplicates are listed once in the summary. Registering both enantiomers is normal and is not a finding ' +
+    'of a full audit.',
   messages,
   requires: ['structure', 'registry'],
+  scope: 'registry',
   run,
 };

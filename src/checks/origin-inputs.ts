@@ -53,6 +53,7 @@ const byId = new WeakMap<RegistryView, Map<string, RegistryEntry>>();
 
 /** The registry entry with this id (an index built once per registry view). */
 export function entryById(registry: RegistryView, id: string): RegistryEntry | undefined {
+  if (registry.byId) return registry.byId(id);
   let index = byId.get(registry);
   if (!index) {
     index = new Map();

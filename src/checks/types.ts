@@ -48,15 +48,21 @@ export interface RegistryEntry {
   underReview: boolean;
 }
 
+/**
+ * The registry as a per-record check may see it (lookups by id, e.g. the inputs of an origin block). The
+ * registry-wide comparisons (duplicates, enantiomers) do not go through it: they run over the key index
+ * (src/audit/registry-phase.ts).
+ */
 export interface RegistryView {
-  entries: readonly RegistryEntry[];
+  /** Every record of the registry (in a worker of the streamed audit: read on first use). */
+  readonly entries: readonly RegistryEntry[];
   /**
    * Why this view does not hold the whole registry (a bulk run that audits each record on its own, one shard of
    * a sharded run), or null/absent when it does. Checks that need the registry are then reported as not run.
    */
   incomplete?: string | null;
-  /** Entries whose parent constitution key equals `key` (fast lookup for duplicate/enantiomer checks). */
-  withConstitution(key: string): readonly RegistryEntry[];
+  /** The entry with this id, without reading every record when the view can (a streamed audit's worker). */
+  byId?(id: string): RegistryEntry | undefined;
 }
 
 /** The engine functions a check may call (so checks stay pure and testable). */
@@ -118,5 +124,10 @@ export interface CheckModule {
   messages: Record<string, string>;
   /** Inputs the check needs: the record's structure read and described; the whole registry. */
   requires?: readonly CheckRequirement[];
+  /**
+   * 'registry': a registry-wide check; the per-record audit skips it and the registry-wide phase
+   * (src/audit/registry-phase.ts) runs it over the index of every record's keys. Default 'record'.
+   */
+  scope?: 'record' | 'registry';
   run(ctx: CheckContext): CheckOutcome;
 }

@@ -27,6 +27,11 @@ export interface StereoUnitFact {
   group: { type: 'abs' | 'and' | 'or'; id: number } | null;
   /** Index (0-based) of the constitutional-equivalence class of this unit; equal numbers = equivalent units. */
   equivalenceClass: number;
+  /**
+   * The unit's constitutional class written the same way whatever the atom order (the canonical class ranks of
+   * its atoms, and its kind): with the CIP label, a registry index key part (src/registry/keys.ts).
+   */
+  classKey: string;
   /** Index of the connected component (0-based, in input order of first atom) the unit lies in. */
   component: number;
   /**

@@ -39,6 +39,7 @@ export function jsonReport(result: AuditResult): Record<string, unknown> {
     caution: result.caution,
   };
   if (result.unmatched?.length) out.unmatched = [...result.unmatched];
+  if (result.registry) out.registry = result.registry;
   return out;
 }
 

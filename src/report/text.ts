@@ -4,6 +4,7 @@
  * summary and the caution. `verbose` prints every record in full with each passed check's evidence. Colour only
  * when asked for.
  */
+import { registryLines } from './registry-summary.js';
 import type { AuditResult, Finding, RecordResult } from '../audit/types.js';
 import {
   byNeedForAction,
@@ -111,6 +112,8 @@ export function renderText(result: AuditResult, options: TextOptions = {}): stri
   if (result.unmatched?.length) {
     out.push(paint('yellow', `No record matched: ${result.unmatched.map(safeText).join(', ')}`), '');
   }
+  const registry = registryLines(result.registry, safeText);
+  if (registry.length > 0) out.push(...registry, '');
   const s = result.summary;
   const colour = s.errors > 0 ? 'red' : s.warnings > 0 ? 'yellow' : 'green';
   out.push(paint(colour, summaryLine(result)));

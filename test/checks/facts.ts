@@ -25,6 +25,7 @@ export function unit(p: Partial<StereoUnitFact> & { atoms: number[] }): StereoUn
     locants: p.atoms.map(() => null),
     group: null,
     equivalenceClass: 0,
+    classKey: `${p.atoms.join(',')}${p.kind ?? 'tetrahedral'}`,
     component: 0,
     ...p,
   };
@@ -160,10 +161,10 @@ export interface CtxOptions {
   record?: CompoundRecord | null;
   main?: ReadStructure;
   components?: ReadStructure[];
-  entries?: RegistryEntry[];
   relations?: Record<string, Relation>;
   config?: Partial<CheckContext['config']>;
   findings?: Finding[];
+  entries?: RegistryEntry[];
   loaded?: LoadedRecord;
   file?: string;
 }
@@ -176,10 +177,7 @@ export function ctx(o: CtxOptions = {}): CheckContext {
     record: r,
     main: o.main ?? read(facts()),
     components: o.components ?? [],
-    registry: {
-      entries,
-      withConstitution: (key) => entries.filter((e) => e.main.facts?.constitutionKey === key),
-    },
+    registry: { entries },
     config: { ...DEFAULT_CONFIG, ...o.config },
     engine: fakeEngine(o.relations),
     findings: o.findings,

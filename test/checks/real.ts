@@ -18,7 +18,7 @@ export function readSmiles(smiles: string): ReadStructure {
   return { structure: r.structure, facts: describeStructure(r.structure), error: null };
 }
 
-/** A context for `record`, its structure and components read from their SMILES. */
+/** A context for `record`, its structure and components read from their SMILES; `others` are registered too. */
 export function realCtx(record: CompoundRecord, options: { others?: CompoundRecord[] } = {}): CheckContext {
   const main = readSmiles(record.structure.smiles ?? '');
   const components = (record.stereo.components ?? []).map((c) => readSmiles(c.smiles ?? ''));
@@ -30,10 +30,7 @@ export function realCtx(record: CompoundRecord, options: { others?: CompoundReco
     main: i === 0 ? main : readSmiles(r.structure.smiles ?? ''),
     underReview: i === 0,
   }));
-  c.registry = {
-    entries,
-    withConstitution: (key) => entries.filter((e) => e.main.facts?.constitutionKey === key),
-  };
+  c.registry = { entries };
   c.engine = { relate };
   return c;
 }

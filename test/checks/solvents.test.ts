@@ -6,11 +6,16 @@
  * activity); menthol: (−)-(1R,2S,5R) about −50° in ethanol (handbook, from memory).
  */
 import { describe, expect, it } from 'vitest';
-import { consistentWithRegistry as check } from '../../src/checks/consistent-with-registry.js';
+import {
+  compareWithRegistry,
+  consistentWithRegistry as check,
+} from '../../src/checks/consistent-with-registry.js';
 import { compareSolvents, rotationsComparable, solventName } from '../../src/checks/solvents.js';
 import type { CompoundRecord, Rotation } from '../../src/registry/types.js';
 import { render } from '../../src/checks/words.js';
-import { centre, chiralFacts, ctx, entry, ids, read, record, runCheck } from './facts.js';
+import { ids, record } from './facts.js';
+import { DEFAULT_CONFIG } from '../../src/audit/config.js';
+import type { IndexRow } from '../../src/registry/keys.js';
 
 const rot = (value: number, solvent: string | undefined, p: Partial<Rotation> = {}): Rotation => ({
   value,
@@ -55,24 +60,23 @@ describe('solvent names', () => {
 describe('consistent-with-registry: rotations of an enantiomer pair in differently spelled solvents', () => {
   const menthol = (id: string, r: Rotation): CompoundRecord =>
     record({ form: 'single-enantiomer', rotation: r }, { id, name: `menthol ${id}` });
+  // the two rows are enantiomers by their keys (menthol: (1R,2S,5R) and (1S,2R,5S)); registered rows as the
+  // registry-wide phase sees them
+  const row = (r: CompoundRecord, seq: number, stereo: string, mirror: string): IndexRow => ({
+    seq,
+    id: r.id,
+    file: `compounds/${r.id}.yml`,
+    name: r.name ?? null,
+    form: r.stereo.form,
+    rotation: r.stereo.rotation ?? null,
+    keys: { constitution: 'C10H20O/x', kind: 'as-drawn', stereo, mirror, chiral: true, exact: true },
+    lines: { id: 1, structure: 3, rotation: 7 },
+    waiver: null,
+  });
   const run = (mine: Rotation, theirs: Rotation) => {
-    const me = menthol('LX-00023', mine);
-    const other = menthol('LX-00012', theirs);
-    const selfRead = read(chiralFacts([centre(4, 'R'), centre(7, 'S'), centre(10, 'S')]), 'me');
-    const otherRead = read(chiralFacts([centre(4, 'S'), centre(7, 'R'), centre(10, 'R')]), 'other');
-    return runCheck(
-      check,
-      ctx({
-        record: me,
-        main: selfRead,
-        entries: [
-          entry(me, selfRead, 'compounds/LX-00023.yml', true),
-          entry(other, otherRead, 'compounds/LX-00012.yml', false),
-        ],
-        relations: { 'me|other': 'enantiomers' },
-        file: 'compounds/LX-00023.yml',
-      }),
-    );
+    const me = row(menthol('LX-00023', mine), 2, 'a', 'b');
+    const other = row(menthol('LX-00012', theirs), 1, 'b', 'a');
+    return compareWithRegistry(me, [{ other, relation: 'enantiomers' }], 'review', DEFAULT_CONFIG);
   };
   it('CHCl3 vs chloroform with the same sign: the conflict is found (before: nothing said)', () => {
     expect(ids(run(rot(-49, 'CHCl3'), rot(-50, 'chloroform')))).toContain('enantiomer-rotation-same-sign');

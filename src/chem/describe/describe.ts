@@ -188,6 +188,7 @@ function unitFacts(a: Analysis, labels: Map<string, CipLabel>): StereoUnitFact[]
       locants: u.atoms.map((x) => s.atoms[x].mapNumber),
       group: groupOf.get(u.atoms[0]) ?? null,
       equivalenceClass: classIds.get(ck)!,
+      classKey: ck,
       component: p.componentOfAtom[u.atoms[0]],
       ...(!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true as const } : {}),
     });
