@@ -116,3 +116,25 @@ describe('LICENSE', () => {
     expect(license).toContain('THE SOFTWARE IS PROVIDED "AS IS", WITHOUT WARRANTY OF ANY KIND');
   });
 });
+
+describe('audit --format markdown', () => {
+  it('prints the whole checklist (the comment-size summary is for pull requests, not files)', async () => {
+    const { mkdtempSync: tmp, writeFileSync: put, mkdirSync: mk } = await import('node:fs');
+    const root = tmp(join(tmpdir(), 'sg-md-'));
+    mk(join(root, 'compounds'));
+    // 300 records of (R)-butan-2-ol declared achiral: one error each, so the checklist passes 60,000 characters
+    for (let i = 1; i <= 300; i++) {
+      const id = `LX-${String(i).padStart(5, '0')}`;
+      put(
+        join(root, 'compounds', `${id}.yml`),
+        `id: ${id}\nstructure:\n  smiles: "C[C@@H](O)CC"\nstereo:\n  form: achiral\n`,
+      );
+    }
+    const io = memoryIo();
+    await run(['audit', '--root', root, '--format', 'markdown', '--fail-on', 'never'], io);
+    const md = io.stdout.join('');
+    expect(md.length).toBeGreaterThan(60_000);
+    expect(md).not.toContain('too long for a comment');
+    expect(md.match(/^### LX-\d{5}/gm)).toHaveLength(300);
+  }, 120_000);
+});

@@ -138,7 +138,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
         format === 'json'
           ? renderJson(result)
           : format === 'markdown'
-            ? renderMarkdown(result)
+            ? renderMarkdown(result, { maxChars: Number.POSITIVE_INFINITY }) // a file, not a comment: whole
             : format === 'sarif'
               ? renderSarif(result, checks)
               : renderText(result, {
