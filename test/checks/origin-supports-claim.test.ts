@@ -6,6 +6,7 @@
  * equal in energy (racemate from achiral or racemic inputs without chiral control), diastereomeric ones are not
  * (unequal diastereomers) — IUPAC Gold Book, "stereoselectivity"; Cram 1952 for additions to α-chiral aldehydes.
  */
+import fc from 'fast-check';
 import { describe as suite, expect, it } from 'vitest';
 import { originSupportsClaim as check } from '../../src/checks/origin-supports-claim.js';
 import type { CompoundRecord } from '../../src/registry/types.js';
@@ -338,5 +339,25 @@ suite('origin-supports-claim: the origin itself', () => {
   it('a record without origin is not judged', () => {
     const o = run(rec('LX-00190', R_PHENYLETHANOL, { form: 'single-enantiomer' }));
     expect(o.notApplicable).toBe(true);
+  });
+});
+
+suite('origin-supports-claim: hostile origins (fast-check, seeded)', () => {
+  it('any from entries never throw, each bad entry is a finding on its own line, never a pass', () => {
+    const entry = fc.oneof(
+      fc.string({ maxLength: 30 }),
+      fc.constantFrom('LX-00015', 'LX-00015', 'C1CC1', 'CC(=O', '[Xx]', '|&1:1|', 'C'.repeat(400)),
+    );
+    fc.assert(
+      fc.property(fc.array(entry, { minLength: 1, maxLength: 4 }), (from) => {
+        const r = rec('LX-00199', R_PHENYLETHANOL, { form: 'single-enantiomer' }, { from, control: 'none' });
+        const o = run(r, [rec('LX-00015', ACETOPHENONE, { form: 'achiral' })]);
+        for (const f of o.findings) expect(msg(f)).not.toMatch(/\{\w+\}/);
+        const bad = o.findings.filter((f) => /^input-(not-found|unreadable)$/.test(f.messageId));
+        for (const f of bad) expect(f.field).toMatch(/^origin\.from\.\d+$/);
+        if (o.findings.length > 0) expect(o.passed).toBeUndefined();
+      }),
+      { seed: 4242, numRuns: 60 },
+    );
   });
 });
