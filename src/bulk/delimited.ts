@@ -85,7 +85,6 @@ export async function* readDelimitedRows(
 ): AsyncGenerator<DelimitedRow> {
   let lineNo = 0;
   let columns = 0; // fields of the header row, once read
-  let openAt = 0; // fields before the quoted field that left the row's first line open
   // lines of the row being read (kept so that a row given up can be read again from its second line)
   let held: string[] = [];
   let start = 0;
@@ -106,7 +105,8 @@ export async function* readDelimitedRows(
     if (l === null && held.length === 0) return;
     if (l !== null) {
       if (held.length === 0) {
-        if (l.text.trim() === '') continue;
+        // a blank line is no row; a line of delimiters only (`\t\t`) is a row of empty fields, and counts
+        if (/^ *$/.test(l.text)) continue;
         start = l.line;
         chars = 0;
       }
@@ -120,16 +120,8 @@ export async function* readDelimitedRows(
       const more = splitRow(l.text, delimiter, sofar[sofar.length - 1] + '\n');
       split = { fields: [...sofar.slice(0, -1), ...more.fields], open: more.open };
     }
-    if (held.length === 1) openAt = split.fields.length - 1;
-    // a quoted field ran into the next line, and that line is a row of its own (as many fields as the header;
-    // a genuine multi-line field closes on a line holding only the fields after it): the quote was stray
-    if (
-      l !== null &&
-      held.length >= 2 &&
-      columns >= 2 &&
-      (split.open || openAt >= 1) &&
-      l.text.split(delimiter).length >= columns
-    ) {
+    // a quoted field ran into the next line, and that line is a row of its own: the quote was stray
+    if (l !== null && held.length >= 2 && columns >= 2 && ownRow(l.text, delimiter, columns)) {
       yield {
         line: start,
         fields: held[0]!.split(delimiter),
@@ -203,6 +195,18 @@ export async function* textLines(path: string): AsyncGenerator<string> {
     if (i === parts.length - 1 && parts[i] === '') break;
     yield dropCr(parts[i]!);
   }
+}
+
+/**
+ * Whether a line that a quoted field ran into is a row of its own: it splits into as many fields as the header,
+ * and does not start by closing the quoted field (a genuine multi-line field ends on a line whose first part
+ * holds the closing quote, `…3",CC,achiral`; a row of its own starts with a plain or a quoted field).
+ */
+function ownRow(text: string, delimiter: string, columns: number): boolean {
+  const parts = text.split(delimiter);
+  if (parts.length < columns) return false;
+  const first = parts[0]!;
+  return !first.includes('"') || first.startsWith('"');
 }
 
 const MAX_LINE_CHARS = 32 * 2 ** 20;
