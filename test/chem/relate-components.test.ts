@@ -39,6 +39,21 @@ suite('multi-component drawings as multisets', () => {
     const e = rel('C[C@@H](N)c1ccccc1.O[C@@H](C(=O)O)c1ccccc1', 'C[C@H](N)c1ccccc1.O[C@H](C(=O)O)c1ccccc1');
     expect(e.relation).toBe('enantiomers');
   });
+  it('(R):(S) 1:2 is the mirror image of 1:2 the other way round, and not the same drawing as 2:1 written otherwise', () => {
+    const r = rel(
+      'C[C@H](O)C(=O)O.C[C@@H](O)C(=O)O.C[C@@H](O)C(=O)O',
+      'C[C@@H](O)C(=O)O.C[C@H](O)C(=O)O.C[C@H](O)C(=O)O',
+    );
+    expect(r.relation).toBe('enantiomers');
+    const s = rel(
+      'C[C@H](O)C(=O)O.C[C@@H](O)C(=O)O.C[C@@H](O)C(=O)O',
+      'C[C@@H](O)C(=O)O.C[C@H](O)C(=O)O.C[C@@H](O)C(=O)O',
+    );
+    expect(s.relation).toBe('identical');
+    expect(
+      rel('C[C@H](O)C(=O)O.C[C@@H](O)C(=O)O', 'C[C@@H](O)C(=O)O.C[C@H](O)C(=O)O.C[C@H](O)C(=O)O').relation,
+    ).toBe('same-constitution');
+  });
   it('a racemate drawn out vs one enantiomer: same constitution, different mixtures (no stereo relation claimed)', () => {
     const r = rel('C[C@H](O)C(=O)O.C[C@@H](O)C(=O)O', 'C[C@H](O)C(=O)O');
     expect(r.relation).toBe('same-constitution');

@@ -1,6 +1,7 @@
 /**
- * The CXSMILES extension block `|...|` that may follow a SMILES. Only enhanced stereo is read:
- * `a:0,2` (absolute), `&1:3,5` (AND group 1), `o1:7` (OR group 1). Atom indices there are 0-based in the order
+ * The CXSMILES extension block `|...|` that may follow a SMILES. Enhanced stereo is read:
+ * `a:0,2` (absolute), `&1:3,5` (AND group 1), `o1:7` (OR group 1); and radicals: `^1:3` one unpaired electron
+ * on atom 3, `^2:`…`^7:` two or more (held as 2, the most the structure records). Atom indices there are 0-based in the order
  * atoms are written, explicit `[H]` atoms included, which is exactly our atom index. Every other field
  * (coordinates `(...)`, labels `$...$`, `r`, `c:`, `t:`, `wU:`, `^1:`, `Sg:`, ...) is skipped.
  * Field syntax as published with the format (ChemAxon's CXSMILES documentation); the skip rule is our own.
@@ -8,7 +9,9 @@
 import type { ReadError, StereoGroup } from '../types.js';
 import { newGroup, objectList } from './make.js';
 
-export type CxResult = { ok: true; groups: StereoGroup[]; end: number } | { ok: false; error: ReadError };
+export type CxResult =
+  | { ok: true; groups: StereoGroup[]; radicals: Map<number, number>; end: number }
+  | { ok: false; error: ReadError };
 
 function isDigit(c: number): boolean {
   return c >= 48 && c <= 57;
@@ -25,11 +28,34 @@ function fail(code: string, message: string, offset: number): CxResult {
 export function parseCxExtension(s: string, start: number, atomCount: number): CxResult {
   const n = s.length;
   const groups = objectList<StereoGroup>();
+  const radicals = new Map<number, number>();
   let i = start + 1;
   for (;;) {
     if (i >= n) return fail('cxsmiles-unclosed', "CXSMILES block is not closed with '|'", start);
     const c = s.charCodeAt(i);
-    if (c === 124) return { ok: true, groups, end: i + 1 };
+    if (c === 124) return { ok: true, groups, radicals, end: i + 1 };
+    if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
+      // ^n:i,j radicals (n = 1 monovalent, 2–7 divalent and more)
+      const count = s.charCodeAt(i + 1) === 49 ? 1 : 2;
+      let j = i + 3;
+      while (isDigit(s.charCodeAt(j))) {
+        let v = 0;
+        const at = j;
+        while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
+        if (v >= atomCount) {
+          return fail(
+            'cxsmiles-bad-radical',
+            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
+            at,
+          );
+        }
+        radicals.set(v, count);
+        if (s.charCodeAt(j) === 44 && isDigit(s.charCodeAt(j + 1))) j++;
+        else break;
+      }
+      i = j;
+      continue;
+    }
     if (c === 44) {
       i++;
       continue;

@@ -88,10 +88,12 @@ function parse(text: string): ReadResult {
   let i = g.end;
   while (i < text.length && isSpace(text.charCodeAt(i))) i++;
   let groups: Structure['groups'] | null = null;
+  let cxRadicals: Map<number, number> | null = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
     const cx = parseCxExtension(text, i, n);
     if (!cx.ok) return cx;
     groups = cx.groups;
+    if (cx.radicals.size > 0) cxRadicals = cx.radicals;
     i = cx.end;
   }
   const title = text.slice(i).trim();
@@ -147,6 +149,8 @@ function parse(text: string): ReadResult {
       if (vals.length > 0 && used < vals[0]!) radical[a] = Math.min(2, vals[0]! - used);
     }
   }
+  // radicals the CXSMILES block states override what the bracket atoms imply
+  if (cxRadicals) for (const [a, r] of cxRadicals) radical[a] = r;
 
   const stereo = buildStereo(g, order, hCount, warnings);
 

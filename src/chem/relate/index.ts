@@ -59,7 +59,7 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
   // Both drawn alike (the usual case): relate the drawings themselves, so neutralising never changes a relation
   // that the drawings already decide; otherwise the neutral forms.
   const asDrawn = sameDrawnForms(inA, inB);
-  const whole = inA.length > 1;
+  const whole = inA.length > 1 || inB.length > 1;
   const ta = whole ? analyse(together(A, inA, asDrawn)) : asDrawn ? pa.drawnAnalysis() : pa.analysis();
   const tb = whole ? analyse(together(B, inB, asDrawn)) : asDrawn ? pb.drawnAnalysis() : pb.analysis();
   const iso = isomorphic(ta.p.structure, tb.p.structure);
@@ -87,28 +87,38 @@ function relatedKeys(A: Composition, B: Composition, parentKey: string): Set<str
   return keys;
 }
 
-/** Different numbers of stereoisomers of one constitution (a racemate drawn out against one enantiomer). */
+/**
+ * Different mixtures of one constitution: another number of stereoisomers (a racemate drawn out against one
+ * enantiomer), or, where a side holds several, another number of molecules (1:1 against 1:2).
+ */
 function speciesMismatch(inA: Species[], inB: Species[]): string | null {
-  const count = (xs: Species[]): Map<string, number> => {
-    const m = new Map<string, number>();
-    for (const x of xs) m.set(x.key, (m.get(x.key) ?? 0) + 1);
-    return m;
+  const count = (xs: Species[], key: string): [number, number] => {
+    const own = xs.filter((x) => x.key === key);
+    return [own.length, own.reduce((t, x) => t + x.copies, 0)];
   };
-  const a = count(inA);
-  const b = count(inB);
-  for (const [key, n] of a) {
-    const nb = b.get(key) ?? 0;
-    if (n !== nb) {
-      const f = inA.find((x) => x.key === key)!.formula;
-      return `same constitution, different mixtures: A holds ${n} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
-    }
+  for (const key of new Set(inA.map((x) => x.key))) {
+    const [na, ma] = count(inA, key);
+    const [nb, mb] = count(inB, key);
+    const f = inA.find((x) => x.key === key)!.formula;
+    if (na !== nb)
+      return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
+    if (na > 1 && ma !== mb)
+      return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
   return null;
 }
 
-/** One structure holding the first copy of each species (ascending atom indices of whole components). */
+/**
+ * One structure holding the molecules related (ascending atom indices of whole components): one copy of a
+ * constitution drawn as one stereoisomer (a 2:1 salt and a 1:1 salt hold the same parent; the ratio is a form
+ * difference), every copy where a constitution is drawn as several (1:2 of R and S is not 1:2 of S and R).
+ */
 function together(c: Composition, xs: Species[], asDrawn: boolean): Structure {
-  const atoms = xs.flatMap((x) => x.atoms).sort((p, q) => p - q);
+  const kinds = new Map<string, number>();
+  for (const x of xs) kinds.set(x.key, (kinds.get(x.key) ?? 0) + 1);
+  const atoms = xs
+    .flatMap((x) => ((kinds.get(x.key) ?? 0) > 1 ? x.copyAtoms.flat() : x.atoms))
+    .sort((p, q) => p - q);
   return extractAtoms(asDrawn ? c.drawn : c.neutral, atoms);
 }
 

@@ -6,7 +6,7 @@
  * Syntax: OpenSMILES specification (bracket atoms, bonds, branches, ring closures).
  */
 import type { Atom, Structure } from '../types.js';
-import { implicitHydrogens, atomicNumberOf } from '../read/valence.js';
+import { implicitHydrogens, atomicNumberOf, defaultValences } from '../read/valence.js';
 import { assignBondDirections } from './smiles-directions.js';
 import { chiralMarks, type Emission } from './smiles-stereo.js';
 
@@ -187,8 +187,19 @@ export function writeSmilesWithOrder(
     }
   });
   let smi = out.join('');
+  const parts: string[] = [];
+  // A radical the bracket atom does not imply by itself (one on an atom that could hold more bonds) is written
+  // in the CXSMILES block, so that reading the SMILES back gives the same structure.
+  const byCount: [number[], number[]] = [[], []];
+  for (let a = 0; a < s.atoms.length; a++) {
+    const at = s.atoms[a]!;
+    if (at.radical > 0 && impliedRadical(at, valence[a]!) !== at.radical)
+      byCount[at.radical >= 2 ? 1 : 0].push(em.outIndex[a]!);
+  }
+  byCount.forEach((idx, k) => {
+    if (idx.length > 0) parts.push(`^${k + 1}:${idx.sort((x, y) => x - y).join(',')}`);
+  });
   if (withStereo && s.groups.length > 0) {
-    const parts: string[] = [];
     for (const g of s.groups) {
       const idx = g.atoms.filter((a) => a >= 0 && a < s.atoms.length).map((a) => em.outIndex[a]!);
       if (idx.length === 0) continue;
@@ -196,11 +207,18 @@ export function writeSmilesWithOrder(
       const head = g.type === 'abs' ? 'a' : g.type === 'and' ? `&${g.id}` : `o${g.id}`;
       parts.push(`${head}:${idx.join(',')}`);
     }
-    if (parts.length > 0) smi += ` |${parts.join(',')}|`;
   }
+  if (parts.length > 0) smi += ` |${parts.join(',')}|`;
   const atomOrder = new Array<number>(s.atoms.length);
   for (let a = 0; a < s.atoms.length; a++) atomOrder[em.outIndex[a]!] = a;
   return { smiles: smi, atomOrder };
+}
+
+/** The radical a reader infers from a bracket atom: what its bonds and H leave of its lowest normal valence. */
+function impliedRadical(a: Atom, valence: number): number {
+  const vals = defaultValences(a.atomicNumber, a.charge);
+  const used = valence + a.hCount;
+  return vals.length > 0 && used < vals[0]! ? Math.min(2, vals[0]! - used) : 0;
 }
 
 function ringDigit(d: number): string {
