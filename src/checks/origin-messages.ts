@@ -4,7 +4,7 @@
  */
 export const originMessages = {
   'input-not-found':
-    "origin.from names '{entry}', which is no registered id{suggestion} and is not a SMILES stereogate can read " +
+    "origin.from names '{entry}', which is not a registered id{suggestion} and not a SMILES stereogate can read " +
     'either ({detail}). Register the input first, correct the id, or give the input as SMILES.',
   'input-unreadable':
     "origin.from entry {position}, '{entry}', is neither a registered id nor a readable SMILES: {detail}. Correct " +
