@@ -26,6 +26,10 @@ export const prefixMessages = {
     '{field} gives the sign of rotation ({sign}), but the form is {form}, which is optically inactive (a racemate ' +
     'rotates not at all because its enantiomers cancel; an achiral or meso compound has no optical activity). Use ' +
     '(±) for a racemate, or drop the sign, or correct the form.',
+  'legacy-racemate-or-two-centres':
+    '{field} writes {text}: (R,S) without locants is the legacy way of naming a racemate, (RS), which does not fit ' +
+    'the form {form}; but the structure has {centres} stereocentres, so it may mean two centres cited without ' +
+    'locants. Write locants, e.g. (1R,2S), or rac-/(RS) for a racemate.',
   'fischer-prefix-with-form':
     '{field} names one enantiomer ({fischer}-, Fischer–Rosanoff), but the form is {form}. {why} Write DL- or ' +
     '(±)- for a racemate, drop {fischer}- for an achiral compound, or correct the form.',
@@ -71,7 +75,17 @@ export function prefixFindings(
     facts.chiral === true;
   for (const { field, text, p } of sources) {
     if (p.problemDetails.length > 0 && p.items.length === 0 && p.mode === 'none') continue;
-    if (p.mode === 'racemic') {
+    const onlyLegacy =
+      p.legacyPair === true &&
+      p.prefixes.length === 0 &&
+      p.rotationSign !== '±' &&
+      p.fischer !== 'DL' &&
+      p.items.length === 1;
+    const centres = facts.units.filter((u) => u.kind === 'tetrahedral' && !u.pseudoasymmetric).length;
+    if (p.mode === 'racemic' && onlyLegacy && centres >= 2 && form !== 'racemate') {
+      // '(R,S)' on a structure with two or more centres: racemate or two centres without locants, unknown which
+      add('legacy-racemate-or-two-centres', field, { text, centres }, 'warning');
+    } else if (p.mode === 'racemic') {
       if (['single-enantiomer', 'enantioenriched', 'achiral', 'meso'].includes(form)) {
         add('racemic-notation-needs-racemate', field, { notation: notation(p), text });
       } else if (form === 'single-diastereomer') {

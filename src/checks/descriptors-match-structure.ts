@@ -104,6 +104,10 @@ function compareOne(
   if ((parsed.fischer === 'D' || parsed.fischer === 'L') && parsed.items.length === 0)
     add('fischer-not-compared', { fischer: parsed.fischer }, 'note');
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
+  const centres = facts.units.filter((u) => u.kind === 'tetrahedral' && !u.pseudoasymmetric).length;
+  // '(R,S)' read as the legacy racemate but on several centres and a non-racemic form: it may mean two centres
+  // without locants; the prefix finding (legacy-racemate-or-two-centres) says so, a comparison would mislead.
+  if (parsed.legacyPair && centres >= 2 && form !== 'racemate') return null;
   const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
   const computed = labelList(facts.units);
   if (!cmp.agrees && facts.units.length === 0 && facts.invertibleNitrogens.length > 0) {

@@ -48,6 +48,8 @@ export interface ParsedDescriptors {
   rest: string;
   /** The rest of the name carries further descriptors (on substituents): counts then cover only the front. */
   embeddedDescriptors: boolean;
+  /** A legacy '(R,S)' without locants was read as (RS); it could also mean two centres written without locants. */
+  legacyPair?: boolean;
 }
 
 const WORDS = ['meso', 'cis', 'trans', 'erythro', 'threo', 'endo', 'exo', 'syn', 'anti'];
@@ -123,6 +125,7 @@ export function parseDescriptors(
           out.items.push(...g.items);
           for (const w of g.words) addWord(out, w);
           if (g.legacyPair) {
+            out.legacyPair = true;
             out.remarks.push(
               `${g.legacyPair} without locants is the legacy way of naming a racemate and is read as ` +
                 `(${g.items[0]!.pair}); IUPAC 2013 (P-93.1.3) writes (RS) or rac-`,

@@ -284,6 +284,15 @@ describe('descriptors-match-structure: stereo prefixes in names', () => {
       /legacy way of naming a racemate/,
     );
   });
+  it('(R,S) on a structure with two centres and a single-enantiomer form: racemate or two centres without locants — a warning, not an error', () => {
+    const two = chiralFacts([centre(2, 'R'), centre(3, 'S')]);
+    const o = run(two, { form: 'single-enantiomer' }, '(R,S)-x');
+    expect(o.findings).toMatchObject([{ messageId: 'legacy-racemate-or-two-centres', severity: 'warning' }]);
+    // with one centre there is no second reading: the racemate contradicts the form
+    expect(ids(run(and, { form: 'single-enantiomer' }, '(R,S)-x'))).toEqual([
+      'racemic-notation-needs-racemate',
+    ]);
+  });
   it('D-/L- name one enantiomer: fine for a single enantiomer, an error with a racemate or an achiral form', () => {
     const one = chiralFacts([centre(2, 'S')]);
     expect(ids(run(one, { form: 'single-enantiomer' }, 'L-alanine'))).toEqual(['fischer-not-compared']);
