@@ -18,9 +18,8 @@ export interface Species {
   /** Constitution key of the component as drawn (differs from `key` for an ion or zwitterion). */
   drawnKey: string;
   formula: string;
-  /** Atoms of the first copy, in the side's neutral structure; of every copy. */
+  /** Atoms of the first copy, in the side's neutral structure. */
   atoms: number[];
-  copyAtoms: number[][];
   copies: number;
   /** The first copy in neutral form, and its analysis (made on first use). */
   structure: Structure;
@@ -63,7 +62,6 @@ export function composition(input: Structure): Composition {
     );
     if (same) {
       same.copies++;
-      same.copyAtoms.push(c);
       continue;
     }
     let drawnMemo: Analysis | null = null;
@@ -74,7 +72,6 @@ export function composition(input: Structure): Composition {
       drawnKey: drawnSub === sub ? key : constitutionKey(drawnSub),
       formula: molecularFormula(sub),
       atoms: c,
-      copyAtoms: [c],
       copies: 1,
       structure: sub,
       analysis,

@@ -12,10 +12,9 @@
  */
 import type { FormDifference, RelationFacts } from '../facts.js';
 import { isomorphic } from '../graph/index.js';
-import { analyse } from '../describe/index.js';
-import { extractAtoms } from '../normalize.js';
 import type { Structure } from '../types.js';
 import { composition, drawnAs, hasUnits, type Composition, type Species } from './composition.js';
+import { multisetRelation } from './multiset.js';
 import { stereoRelation } from './stereo.js';
 
 export function relate(sa: Structure, sb: Structure): RelationFacts {
@@ -60,11 +59,15 @@ export function relate(sa: Structure, sb: Structure): RelationFacts {
   // that the drawings already decide; otherwise the neutral forms.
   const asDrawn = sameDrawnForms(inA, inB);
   const whole = inA.length > 1 || inB.length > 1;
-  const ta = whole ? analyse(together(A, inA, asDrawn)) : asDrawn ? pa.drawnAnalysis() : pa.analysis();
-  const tb = whole ? analyse(together(B, inB, asDrawn)) : asDrawn ? pb.drawnAnalysis() : pb.analysis();
-  const iso = isomorphic(ta.p.structure, tb.p.structure);
-  if (!iso) return constitutional();
-  const r = stereoRelation(ta, tb, iso);
+  let r;
+  if (whole) r = multisetRelation(inA, inB, asDrawn);
+  else {
+    const ta = asDrawn ? pa.drawnAnalysis() : pa.analysis();
+    const tb = asDrawn ? pb.drawnAnalysis() : pb.analysis();
+    const iso = isomorphic(ta.p.structure, tb.p.structure);
+    if (!iso) return constitutional();
+    r = stereoRelation(ta, tb, iso);
+  }
   const together_ =
     whole && r.relation !== 'same-constitution'
       ? ` (the molecules taken together: ${inB.map((x) => x.formula).join(' + ')})`
@@ -106,20 +109,6 @@ function speciesMismatch(inA: Species[], inB: Species[]): string | null {
       return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
   return null;
-}
-
-/**
- * One structure holding the molecules related (ascending atom indices of whole components): one copy of a
- * constitution drawn as one stereoisomer (a 2:1 salt and a 1:1 salt hold the same parent; the ratio is a form
- * difference), every copy where a constitution is drawn as several (1:2 of R and S is not 1:2 of S and R).
- */
-function together(c: Composition, xs: Species[], asDrawn: boolean): Structure {
-  const kinds = new Map<string, number>();
-  for (const x of xs) kinds.set(x.key, (kinds.get(x.key) ?? 0) + 1);
-  const atoms = xs
-    .flatMap((x) => ((kinds.get(x.key) ?? 0) > 1 ? x.copyAtoms.flat() : x.atoms))
-    .sort((p, q) => p - q);
-  return extractAtoms(asDrawn ? c.drawn : c.neutral, atoms);
 }
 
 /** Do both sides draw the related molecules in the same charge state (the same drawn constitutions)? */
