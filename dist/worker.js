@@ -48,6 +48,42 @@ var __toESM = (mod, isNodeMode, target) => (target = mod != null ? __create(__ge
   mod
 ));
 
+// src/registry/closest.ts
+function editDistance(a, b) {
+  if (a === b) return 0;
+  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const cur = [i];
+    for (let j = 1; j <= b.length; j++) {
+      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+      cur[j] = Math.min(prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + cost);
+    }
+    prev = cur;
+  }
+  return prev[b.length];
+}
+function closestWord(word, candidates) {
+  const w = word.toLowerCase();
+  let best = null;
+  let bestDistance = Infinity;
+  for (const c of candidates) {
+    const lc = c.toLowerCase();
+    const d = lc.startsWith(w) && w.length >= 3 ? 0.5 : editDistance(w, lc);
+    if (d < bestDistance) {
+      best = c;
+      bestDistance = d;
+    }
+  }
+  if (best === null) return null;
+  const limit = Math.max(2, Math.round(w.length * 0.4));
+  return bestDistance <= limit ? best : null;
+}
+var init_closest = __esm({
+  "src/registry/closest.ts"() {
+    "use strict";
+  }
+});
+
 // node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
   "node_modules/yaml/dist/nodes/identity.js"(exports) {
@@ -62,8 +98,8 @@ var require_identity = __commonJS({
     var isAlias = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === ALIAS;
     var isDocument = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === DOC;
     var isMap2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
-    var isPair = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
-    var isScalar2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR;
+    var isPair2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
+    var isScalar3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR;
     var isSeq2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SEQ;
     function isCollection(node) {
       if (node && typeof node === "object")
@@ -74,7 +110,7 @@ var require_identity = __commonJS({
         }
       return false;
     }
-    function isNode(node) {
+    function isNode2(node) {
       if (node && typeof node === "object")
         switch (node[NODE_TYPE]) {
           case ALIAS:
@@ -85,7 +121,7 @@ var require_identity = __commonJS({
         }
       return false;
     }
-    var hasAnchor = (node) => (isScalar2(node) || isCollection(node)) && !!node.anchor;
+    var hasAnchor = (node) => (isScalar3(node) || isCollection(node)) && !!node.anchor;
     exports.ALIAS = ALIAS;
     exports.DOC = DOC;
     exports.MAP = MAP;
@@ -98,9 +134,9 @@ var require_identity = __commonJS({
     exports.isCollection = isCollection;
     exports.isDocument = isDocument;
     exports.isMap = isMap2;
-    exports.isNode = isNode;
-    exports.isPair = isPair;
-    exports.isScalar = isScalar2;
+    exports.isNode = isNode2;
+    exports.isPair = isPair2;
+    exports.isScalar = isScalar3;
     exports.isSeq = isSeq2;
   }
 });
@@ -113,7 +149,7 @@ var require_visit = __commonJS({
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove node");
-    function visit(node, visitor) {
+    function visit2(node, visitor) {
       const visitor_ = initVisitor(visitor);
       if (identity.isDocument(node)) {
         const cd = visit_(null, node.contents, visitor_, Object.freeze([node]));
@@ -122,9 +158,9 @@ var require_visit = __commonJS({
       } else
         visit_(null, node, visitor_, Object.freeze([]));
     }
-    visit.BREAK = BREAK;
-    visit.SKIP = SKIP;
-    visit.REMOVE = REMOVE;
+    visit2.BREAK = BREAK;
+    visit2.SKIP = SKIP;
+    visit2.REMOVE = REMOVE;
     function visit_(key3, node, visitor, path) {
       const ctrl = callVisitor(key3, node, visitor, path);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
@@ -258,7 +294,7 @@ var require_visit = __commonJS({
         throw new Error(`Cannot replace node with ${pt} parent`);
       }
     }
-    exports.visit = visit;
+    exports.visit = visit2;
     exports.visitAsync = visitAsync;
   }
 });
@@ -268,7 +304,7 @@ var require_directives = __commonJS({
   "node_modules/yaml/dist/doc/directives.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var visit = require_visit();
+    var visit2 = require_visit();
     var escapeChars = {
       "!": "%21",
       ",": "%2C",
@@ -412,7 +448,7 @@ var require_directives = __commonJS({
         let tagNames;
         if (doc && tagEntries.length > 0 && identity.isNode(doc.contents)) {
           const tags = {};
-          visit.visit(doc.contents, (_key, node) => {
+          visit2.visit(doc.contents, (_key, node) => {
             if (identity.isNode(node) && node.tag)
               tags[node.tag] = true;
           });
@@ -439,7 +475,7 @@ var require_anchors = __commonJS({
   "node_modules/yaml/dist/doc/anchors.js"(exports) {
     "use strict";
     var identity = require_identity();
-    var visit = require_visit();
+    var visit2 = require_visit();
     function anchorIsValid(anchor) {
       if (/[\x00-\x19\s,[\]{}]/.test(anchor)) {
         const sa = JSON.stringify(anchor);
@@ -450,7 +486,7 @@ var require_anchors = __commonJS({
     }
     function anchorNames(root) {
       const anchors = /* @__PURE__ */ new Set();
-      visit.visit(root, {
+      visit2.visit(root, {
         Value(_key, node) {
           if (node.anchor)
             anchors.add(node.anchor);
@@ -616,8 +652,8 @@ var require_Node = __commonJS({
         };
         const res = toJS.toJS(this, "", ctx);
         if (typeof onAnchor === "function")
-          for (const { count: count2, res: res2 } of ctx.anchors.values())
-            onAnchor(res2, count2);
+          for (const { count: count3, res: res2 } of ctx.anchors.values())
+            onAnchor(res2, count3);
         return typeof reviver === "function" ? applyReviver.applyReviver(reviver, { "": res }, "", res) : res;
       }
     };
@@ -630,7 +666,7 @@ var require_Alias = __commonJS({
   "node_modules/yaml/dist/nodes/Alias.js"(exports) {
     "use strict";
     var anchors = require_anchors();
-    var visit = require_visit();
+    var visit2 = require_visit();
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
@@ -656,7 +692,7 @@ var require_Alias = __commonJS({
           nodes = ctx.aliasResolveCache;
         } else {
           nodes = [];
-          visit.visit(doc, {
+          visit2.visit(doc, {
             Node: (_key, node) => {
               if (identity.isAlias(node) || identity.hasAnchor(node))
                 nodes.push(node);
@@ -725,13 +761,13 @@ var require_Alias = __commonJS({
         const anchor = anchors2 && source && anchors2.get(source);
         return anchor ? anchor.count * anchor.aliasCount : 0;
       } else if (identity.isCollection(node)) {
-        let count2 = 0;
+        let count3 = 0;
         for (const item of node.items) {
           const c = getAliasCount(doc, item, anchors2);
-          if (c > count2)
-            count2 = c;
+          if (c > count3)
+            count3 = c;
         }
-        return count2;
+        return count3;
       } else if (identity.isPair(node)) {
         const kc = getAliasCount(doc, node.key, anchors2);
         const vc = getAliasCount(doc, node.value, anchors2);
@@ -2393,9 +2429,9 @@ var require_stringifyNumber = __commonJS({
     function stringifyNumber({ format, minFractionDigits, tag, value }) {
       if (typeof value === "bigint")
         return String(value);
-      const num = typeof value === "number" ? value : Number(value);
-      if (!isFinite(num))
-        return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
+      const num2 = typeof value === "number" ? value : Number(value);
+      if (!isFinite(num2))
+        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
       let n = Object.is(value, -0) ? "-0" : JSON.stringify(value);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i = n.indexOf(".");
@@ -2435,8 +2471,8 @@ var require_float = __commonJS({
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num = Number(node.value);
-        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num2 = Number(node.value);
+        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -2875,8 +2911,8 @@ var require_float2 = __commonJS({
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num = Number(node.value);
-        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num2 = Number(node.value);
+        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -3078,23 +3114,23 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign = str[0];
       const parts = sign === "-" || sign === "+" ? str.substring(1) : str;
-      const num = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num(60) + num(p), num(0));
-      return sign === "-" ? num(-1) * res : res;
+      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
+      return sign === "-" ? num2(-1) * res : res;
     }
     function stringifySexagesimal(node) {
       let { value } = node;
-      let num = (n) => n;
+      let num2 = (n) => n;
       if (typeof value === "bigint")
-        num = (n) => BigInt(n);
+        num2 = (n) => BigInt(n);
       else if (isNaN(value) || !isFinite(value))
         return stringifyNumber.stringifyNumber(node);
       let sign = "";
       if (value < 0) {
         sign = "-";
-        value *= num(-1);
+        value *= num2(-1);
       }
-      const _60 = num(60);
+      const _60 = num2(60);
       const parts = [value % _60];
       if (value < 60) {
         parts.unshift(0);
@@ -3684,8 +3720,8 @@ var require_Document = __commonJS({
         };
         const res = toJS.toJS(this.contents, jsonArg ?? "", ctx);
         if (typeof onAnchor === "function")
-          for (const { count: count2, res: res2 } of ctx.anchors.values())
-            onAnchor(res2, count2);
+          for (const { count: count3, res: res2 } of ctx.anchors.values())
+            onAnchor(res2, count3);
         return typeof reviver === "function" ? applyReviver.applyReviver(reviver, { "": res }, "", res) : res;
       }
       /**
@@ -3762,12 +3798,12 @@ var require_errors = __commonJS({
         lineStr = prev + lineStr;
       }
       if (/[^ ]/.test(lineStr)) {
-        let count2 = 1;
+        let count3 = 1;
         const end = error.linePos[1];
         if (end?.line === line && end.col > col) {
-          count2 = Math.max(1, Math.min(end.col - col, 80 - ci));
+          count3 = Math.max(1, Math.min(end.col - col, 80 - ci));
         }
-        const pointer = " ".repeat(ci) + "^".repeat(count2);
+        const pointer = " ".repeat(ci) + "^".repeat(count3);
         error.message += `:
 
 ${lineStr}
@@ -5578,15 +5614,15 @@ var require_cst_visit = __commonJS({
     var BREAK = /* @__PURE__ */ Symbol("break visit");
     var SKIP = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove item");
-    function visit(cst, visitor) {
+    function visit2(cst, visitor) {
       if ("type" in cst && cst.type === "document")
         cst = { start: cst.start, value: cst.value };
       _visit(Object.freeze([]), cst, visitor);
     }
-    visit.BREAK = BREAK;
-    visit.SKIP = SKIP;
-    visit.REMOVE = REMOVE;
-    visit.itemAtPath = (cst, path) => {
+    visit2.BREAK = BREAK;
+    visit2.SKIP = SKIP;
+    visit2.REMOVE = REMOVE;
+    visit2.itemAtPath = (cst, path) => {
       let item = cst;
       for (const [field2, index] of path) {
         const tok = item?.[field2];
@@ -5597,8 +5633,8 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit.parentCollection = (cst, path) => {
-      const parent = visit.itemAtPath(cst, path.slice(0, -1));
+    visit2.parentCollection = (cst, path) => {
+      const parent = visit2.itemAtPath(cst, path.slice(0, -1));
       const field2 = path[path.length - 1][0];
       const coll = parent?.[field2];
       if (coll && "items" in coll)
@@ -5629,7 +5665,7 @@ var require_cst_visit = __commonJS({
       }
       return typeof ctrl === "function" ? ctrl(item, path) : ctrl;
     }
-    exports.visit = visit;
+    exports.visit = visit2;
   }
 });
 
@@ -5645,7 +5681,7 @@ var require_cst = __commonJS({
     var FLOW_END = "";
     var SCALAR = "";
     var isCollection = (token) => !!token && "items" in token;
-    var isScalar2 = (token) => !!token && (token.type === "scalar" || token.type === "single-quoted-scalar" || token.type === "double-quoted-scalar" || token.type === "block-scalar");
+    var isScalar3 = (token) => !!token && (token.type === "scalar" || token.type === "single-quoted-scalar" || token.type === "double-quoted-scalar" || token.type === "block-scalar");
     function prettyToken(token) {
       switch (token) {
         case BOM:
@@ -5729,7 +5765,7 @@ var require_cst = __commonJS({
     exports.FLOW_END = FLOW_END;
     exports.SCALAR = SCALAR;
     exports.isCollection = isCollection;
-    exports.isScalar = isScalar2;
+    exports.isScalar = isScalar3;
     exports.prettyToken = prettyToken;
     exports.tokenType = tokenType;
   }
@@ -7345,7 +7381,7 @@ var require_dist = __commonJS({
     var lineCounter = require_line_counter();
     var parser = require_parser();
     var publicApi = require_public_api();
-    var visit = require_visit();
+    var visit2 = require_visit();
     exports.Composer = composer.Composer;
     exports.Document = Document.Document;
     exports.Schema = Schema.Schema;
@@ -7373,8 +7409,8 @@ var require_dist = __commonJS({
     exports.parseAllDocuments = publicApi.parseAllDocuments;
     exports.parseDocument = publicApi.parseDocument;
     exports.stringify = publicApi.stringify;
-    exports.visit = visit.visit;
-    exports.visitAsync = visit.visitAsync;
+    exports.visit = visit2.visit;
+    exports.visitAsync = visit2.visitAsync;
   }
 });
 
@@ -7426,10 +7462,10 @@ var require_code = __commonJS({
       }
       get names() {
         var _a;
-        return (_a = this._names) !== null && _a !== void 0 ? _a : this._names = this._items.reduce((names, c) => {
+        return (_a = this._names) !== null && _a !== void 0 ? _a : this._names = this._items.reduce((names2, c) => {
           if (c instanceof Name)
-            names[c.str] = (names[c.str] || 0) + 1;
-          return names;
+            names2[c.str] = (names2[c.str] || 0) + 1;
+          return names2;
         }, {});
       }
     };
@@ -7755,11 +7791,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants2) {
-        if (!names[this.name.str])
+      optimizeNames(names2, constants2) {
+        if (!names2[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants2);
+          this.rhs = optimizeExpr(this.rhs, names2, constants2);
         return this;
       }
       get names() {
@@ -7776,15 +7812,15 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants2) {
-        if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
+      optimizeNames(names2, constants2) {
+        if (this.lhs instanceof code_1.Name && !names2[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants2);
+        this.rhs = optimizeExpr(this.rhs, names2, constants2);
         return this;
       }
       get names() {
-        const names = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
-        return addExprNames(names, this.rhs);
+        const names2 = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
+        return addExprNames(names2, this.rhs);
       }
     };
     var AssignOp = class extends Assign {
@@ -7840,8 +7876,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants2) {
-        this.code = optimizeExpr(this.code, names, constants2);
+      optimizeNames(names2, constants2) {
+        this.code = optimizeExpr(this.code, names2, constants2);
         return this;
       }
       get names() {
@@ -7870,20 +7906,20 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants2) {
+      optimizeNames(names2, constants2) {
         const { nodes } = this;
         let i = nodes.length;
         while (i--) {
           const n = nodes[i];
-          if (n.optimizeNames(names, constants2))
+          if (n.optimizeNames(names2, constants2))
             continue;
-          subtractNames(names, n.names);
+          subtractNames(names2, n.names);
           nodes.splice(i, 1);
         }
         return nodes.length > 0 ? this : void 0;
       }
       get names() {
-        return this.nodes.reduce((names, n) => addNames(names, n.names), {});
+        return this.nodes.reduce((names2, n) => addNames(names2, n.names), {});
       }
     };
     var BlockNode = class extends ParentNode {
@@ -7928,20 +7964,20 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants2) {
+      optimizeNames(names2, constants2) {
         var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
-        if (!(super.optimizeNames(names, constants2) || this.else))
+        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants2);
+        if (!(super.optimizeNames(names2, constants2) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants2);
+        this.condition = optimizeExpr(this.condition, names2, constants2);
         return this;
       }
       get names() {
-        const names = super.names;
-        addExprNames(names, this.condition);
+        const names2 = super.names;
+        addExprNames(names2, this.condition);
         if (this.else)
-          addNames(names, this.else.names);
-        return names;
+          addNames(names2, this.else.names);
+        return names2;
       }
     };
     If.kind = "if";
@@ -7956,10 +7992,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants2) {
-        if (!super.optimizeNames(names, constants2))
+      optimizeNames(names2, constants2) {
+        if (!super.optimizeNames(names2, constants2))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants2);
+        this.iteration = optimizeExpr(this.iteration, names2, constants2);
         return this;
       }
       get names() {
@@ -7980,8 +8016,8 @@ var require_codegen = __commonJS({
         return `for(${varKind} ${name}=${from}; ${name}<${to}; ${name}++)` + super.render(opts);
       }
       get names() {
-        const names = addExprNames(super.names, this.from);
-        return addExprNames(names, this.to);
+        const names2 = addExprNames(super.names, this.from);
+        return addExprNames(names2, this.to);
       }
     };
     var ForIter = class extends For {
@@ -7995,10 +8031,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants2) {
-        if (!super.optimizeNames(names, constants2))
+      optimizeNames(names2, constants2) {
+        if (!super.optimizeNames(names2, constants2))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants2);
+        this.iterable = optimizeExpr(this.iterable, names2, constants2);
         return this;
       }
       get names() {
@@ -8040,20 +8076,20 @@ var require_codegen = __commonJS({
         (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants2) {
+      optimizeNames(names2, constants2) {
         var _a, _b;
-        super.optimizeNames(names, constants2);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants2);
+        super.optimizeNames(names2, constants2);
+        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants2);
+        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names2, constants2);
         return this;
       }
       get names() {
-        const names = super.names;
+        const names2 = super.names;
         if (this.catch)
-          addNames(names, this.catch.names);
+          addNames(names2, this.catch.names);
         if (this.finally)
-          addNames(names, this.finally.names);
-        return names;
+          addNames(names2, this.finally.names);
+        return names2;
       }
     };
     var Catch = class extends BlockNode {
@@ -8337,15 +8373,15 @@ var require_codegen = __commonJS({
       }
     };
     exports.CodeGen = CodeGen;
-    function addNames(names, from) {
+    function addNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) + (from[n] || 0);
-      return names;
+        names2[n] = (names2[n] || 0) + (from[n] || 0);
+      return names2;
     }
-    function addExprNames(names, from) {
-      return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
+    function addExprNames(names2, from) {
+      return from instanceof code_1._CodeOrName ? addNames(names2, from.names) : names2;
     }
-    function optimizeExpr(expr, names, constants2) {
+    function optimizeExpr(expr, names2, constants2) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -8361,18 +8397,18 @@ var require_codegen = __commonJS({
       }, []));
       function replaceName(n) {
         const c = constants2[n.str];
-        if (c === void 0 || names[n.str] !== 1)
+        if (c === void 0 || names2[n.str] !== 1)
           return n;
-        delete names[n.str];
+        delete names2[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants2[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants2[c.str] !== void 0);
       }
     }
-    function subtractNames(names, from) {
+    function subtractNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) - (from[n] || 0);
+        names2[n] = (names2[n] || 0) - (from[n] || 0);
     }
     function not2(x) {
       return typeof x == "boolean" || typeof x == "number" || x === null ? !x : (0, code_1._)`!${par(x)}`;
@@ -8570,7 +8606,7 @@ var require_names = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
-    var names = {
+    var names2 = {
       // validation function arguments
       data: new codegen_1.Name("data"),
       // data passed to validation function
@@ -8599,7 +8635,7 @@ var require_names = __commonJS({
       jsonLen: new codegen_1.Name("jsonLen"),
       jsonPart: new codegen_1.Name("jsonPart")
     };
-    exports.default = names;
+    exports.default = names2;
   }
 });
 
@@ -9565,20 +9601,20 @@ var require_resolve = __commonJS({
       return false;
     }
     function countKeys(schema) {
-      let count2 = 0;
+      let count3 = 0;
       for (const key3 in schema) {
         if (key3 === "$ref")
           return Infinity;
-        count2++;
+        count3++;
         if (SIMPLE_INLINED.has(key3))
           continue;
         if (typeof schema[key3] == "object") {
-          (0, util_1.eachItem)(schema[key3], (sch) => count2 += countKeys(sch));
+          (0, util_1.eachItem)(schema[key3], (sch) => count3 += countKeys(sch));
         }
-        if (count2 === Infinity)
+        if (count3 === Infinity)
           return Infinity;
       }
-      return count2;
+      return count3;
     }
     function getFullPath(resolver, id = "", normalize2) {
       if (normalize2 !== false)
@@ -13116,8 +13152,8 @@ var require_contains = __commonJS({
         cxt.result(valid, () => cxt.reset());
         function validateItemsWithCount() {
           const schValid = gen.name("_valid");
-          const count2 = gen.let("count", 0);
-          validateItems(schValid, () => gen.if(schValid, () => checkLimits(count2)));
+          const count3 = gen.let("count", 0);
+          validateItems(schValid, () => gen.if(schValid, () => checkLimits(count3)));
         }
         function validateItems(_valid, block) {
           gen.forRange("i", 0, len, (i) => {
@@ -13130,16 +13166,16 @@ var require_contains = __commonJS({
             block();
           });
         }
-        function checkLimits(count2) {
-          gen.code((0, codegen_1._)`${count2}++`);
+        function checkLimits(count3) {
+          gen.code((0, codegen_1._)`${count3}++`);
           if (max === void 0) {
-            gen.if((0, codegen_1._)`${count2} >= ${min}`, () => gen.assign(valid, true).break());
+            gen.if((0, codegen_1._)`${count3} >= ${min}`, () => gen.assign(valid, true).break());
           } else {
-            gen.if((0, codegen_1._)`${count2} > ${max}`, () => gen.assign(valid, false).break());
+            gen.if((0, codegen_1._)`${count3} > ${max}`, () => gen.assign(valid, false).break());
             if (min === 1)
               gen.assign(valid, true);
             else
-              gen.if((0, codegen_1._)`${count2} >= ${min}`, () => gen.assign(valid, true));
+              gen.if((0, codegen_1._)`${count3} >= ${min}`, () => gen.assign(valid, true));
           }
         }
       }
@@ -14354,9 +14390,13 @@ function maxValence(atomicNumber, charge) {
   if (vals.length === 0) return null;
   return Math.max(...vals);
 }
-function valenceProblem(atomicNumber, charge, bondOrderSum, hCount, oxoBonds = 0) {
+function valenceProblem(atomicNumber, charge, bondOrderSum, hCount, oxoBonds = 0, multipleBonds, metalBonds = 0) {
   const max = maxValence(atomicNumber, charge);
   const used = bondOrderSum + hCount;
+  if (atomicNumber === 7 && charge === 0) {
+    const n = nitrogenProblem(used, hCount, multipleBonds, metalBonds);
+    if (n !== null) return n;
+  }
   if (max === null || used <= max) return null;
   if (charge === 0 && oxoBonds > 0 && (atomicNumber === 17 || atomicNumber === 35 || atomicNumber === 53)) {
     const sep = maxValence(atomicNumber, oxoBonds);
@@ -14367,7 +14407,21 @@ function valenceProblem(atomicNumber, charge, bondOrderSum, hCount, oxoBonds = 0
   const hs = hCount > 0 ? `, ${hCount} of them to hydrogen` : "";
   return `${name}${ch} with ${used} bonds${hs} (at most ${max})`;
 }
-var ELEMENTS, NUMBER_OF, DEFAULT_VALENCES, CHECKED;
+function nitrogenProblem(used, hCount, multipleBonds, metalBonds) {
+  if (used === 3 || used === 5 && multipleBonds !== 0 || used < 3) return null;
+  const own2 = used - metalBonds;
+  if (metalBonds > 0 && own2 <= 3) return null;
+  const hs = hCount > 0 ? `, ${hCount} of them to hydrogen` : "";
+  const besides = metalBonds > 0 ? ` besides ${metalBonds === 1 ? "its bond" : "its bonds"} to a metal` : "";
+  if (own2 === 4 || own2 === 5 && multipleBonds === 0 || own2 > 5) {
+    return `neutral nitrogen with ${own2} bonds${hs}${besides} (a neutral N has 3, or 5 only with a double bond as in N(=O)=O; an ammonium N with 4 carries a + charge: [N+], [NH4+])`;
+  }
+  return null;
+}
+function isMetal(atomicNumber) {
+  return !NOT_METAL.has(atomicNumber);
+}
+var ELEMENTS, NUMBER_OF, DEFAULT_VALENCES, CHECKED, NOT_METAL;
 var init_valence = __esm({
   "src/chem/read/valence.ts"() {
     "use strict";
@@ -14542,6 +14596,31 @@ var init_valence = __esm({
       52: "tellurium",
       53: "iodine"
     };
+    NOT_METAL = /* @__PURE__ */ new Set([
+      0,
+      1,
+      2,
+      5,
+      6,
+      7,
+      8,
+      9,
+      10,
+      14,
+      15,
+      16,
+      17,
+      18,
+      33,
+      34,
+      35,
+      36,
+      52,
+      53,
+      54,
+      85,
+      86
+    ]);
   }
 });
 
@@ -15686,7 +15765,7 @@ var init_refine = __esm({
       refine(p, splitters) {
         const { offs, adj, code } = this.g;
         const { lab, start, len } = p;
-        const { count: count2, touched, queue, inQueue, cellHits, cellBase, members } = this;
+        const { count: count3, touched, queue, inQueue, cellHits, cellBase, members } = this;
         const qsize = queue.length;
         this.head = 0;
         this.tail = 0;
@@ -15708,8 +15787,8 @@ var init_refine = __esm({
             this.work += offs[v + 1] - offs[v] + 1;
             for (let e = offs[v]; e < offs[v + 1]; e++) {
               const u = adj[e];
-              if (count2[u] === 0) touched[nt++] = u;
-              count2[u] += WEIGHT[code[e]];
+              if (count3[u] === 0) touched[nt++] = u;
+              count3[u] += WEIGHT[code[e]];
             }
           }
           const cells = this.cellsToSplit;
@@ -15737,7 +15816,7 @@ var init_refine = __esm({
             if (ok && this.splitCell(p, s, cellBase[s], cellHits[s]) < 0) ok = false;
             cellHits[s] = 0;
           }
-          for (let t = 0; t < nt; t++) count2[touched[t]] = 0;
+          for (let t = 0; t < nt; t++) count3[touched[t]] = 0;
         }
         this.drain();
         return ok;
@@ -15762,13 +15841,13 @@ var init_refine = __esm({
        */
       splitCell(p, s, from, k) {
         const { lab, start, len } = p;
-        const count2 = this.count;
+        const count3 = this.count;
         const L = len[s];
         if (k === L) {
-          const first = count2[lab[s]];
+          const first = count3[lab[s]];
           let uniform = true;
           for (let t = s + 1; t < s + L; t++) {
-            if (count2[lab[t]] !== first) {
+            if (count3[lab[t]] !== first) {
               uniform = false;
               break;
             }
@@ -15779,7 +15858,7 @@ var init_refine = __esm({
         for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
         this.work += k;
         const buf = this.sortBuf;
-        for (let t = 0; t < k; t++) buf[t] = count2[lab[end + t]] * 4194304 + lab[end + t];
+        for (let t = 0; t < k; t++) buf[t] = count3[lab[end + t]] * 4194304 + lab[end + t];
         if (k > 16) buf.subarray(0, k).sort();
         else {
           for (let t = 1; t < k; t++) {
@@ -15809,7 +15888,7 @@ var init_refine = __esm({
         }
         let fragStart = end;
         for (let t = end; t <= s + L; t++) {
-          if (t === s + L || t > end && count2[lab[t]] !== count2[lab[t - 1]]) {
+          if (t === s + L || t > end && count3[lab[t]] !== count3[lab[t - 1]]) {
             const fl = t - fragStart;
             len[fragStart] = fl;
             for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
@@ -15946,6 +16025,70 @@ var init_classes = __esm({
     init_prepared();
     init_refine();
     init_invariants();
+  }
+});
+
+// src/chem/budget.ts
+import { getHeapStatistics } from "node:v8";
+function heapBytes() {
+  const h = getHeapStatistics();
+  return h.used_heap_size + h.external_memory;
+}
+function withBudget(budget, label, fn) {
+  const outer = active;
+  const deadline = Date.now() + budget.timeMs;
+  const heapLimit = heapBytes() + budget.memoryMb * 2 ** 20;
+  const tighter = outer !== null && outer.deadline <= deadline;
+  active = {
+    deadline: tighter ? outer.deadline : deadline,
+    heapLimit: outer ? Math.min(outer.heapLimit, heapLimit) : heapLimit,
+    budget: tighter ? outer.budget : budget,
+    label: outer?.label ?? label
+  };
+  try {
+    return fn();
+  } finally {
+    active = outer;
+  }
+}
+function checkBudget(work = 1) {
+  if (active === null) return;
+  sinceClock += work;
+  sinceHeap += work;
+  if (sinceClock >= CLOCK_EVERY) {
+    sinceClock = 0;
+    if (Date.now() > active.deadline) throw new BudgetExceeded("time", active.budget.timeMs, active.label);
+  }
+  if (sinceHeap >= HEAP_EVERY) {
+    sinceHeap = 0;
+    if (heapBytes() > active.heapLimit) {
+      throw new BudgetExceeded("memory", active.budget.memoryMb, active.label);
+    }
+  }
+}
+var BudgetExceeded, active, sinceClock, sinceHeap, CLOCK_EVERY, HEAP_EVERY;
+var init_budget = __esm({
+  "src/chem/budget.ts"() {
+    "use strict";
+    BudgetExceeded = class extends Error {
+      constructor(kind, limit, label) {
+        super(
+          kind === "time" ? `${label} took longer than its time limit of ${limit / 1e3} s` : `${label} needed more than its memory bound of ${limit} MB`
+        );
+        this.kind = kind;
+        this.limit = limit;
+        this.label = label;
+        this.name = "BudgetExceeded";
+      }
+      kind;
+      limit;
+      label;
+    };
+    active = null;
+    sinceClock = 0;
+    sinceHeap = 0;
+    CLOCK_EVERY = 64;
+    HEAP_EVERY = 1024;
   }
 });
 
@@ -16108,6 +16251,7 @@ var init_isomorphism = __esm({
     "use strict";
     init_prepared();
     init_refine();
+    init_budget();
     NONE = 0;
     FOUND = 1;
     STOP = 2;
@@ -16172,6 +16316,7 @@ var init_isomorphism = __esm({
         ys.sort((u, v) => u - v);
         let any = NONE;
         for (const y of ys) {
+          checkBudget();
           if (++this.nodes > this.maxNodes) {
             this.budgetHit = true;
             return STOP;
@@ -16650,7 +16795,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
       if (a !== null) out.push(a);
     }
   }
-  function side2(p0, dir, q) {
+  function side(p0, dir, q) {
     const v = sub2(q, p0);
     const l = Math.hypot(v[0], v[1]) * Math.hypot(dir[0], dir[1]);
     if (l < 1e-9) return 0;
@@ -16659,7 +16804,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
   }
   function endSide(subs, p0, dir) {
     const ordered = preferHeavy(s, subs);
-    const sides = ordered.map((x) => side2(p0, dir, xy(x)));
+    const sides = ordered.map((x) => side(p0, dir, xy(x)));
     if (ordered.length === 2 && sides[0] !== 0 && sides[0] === sides[1]) return null;
     if (sides[0] !== 0) return [ordered[0], sides[0]];
     if (ordered.length === 2 && sides[1] !== 0) return [ordered[0], -sides[1]];
@@ -16965,16 +17110,20 @@ function finishMolecule(raw2) {
     const atom = atoms[i];
     let sum = 0;
     let oxo = 0;
+    let multiple = 0;
+    let metal = 0;
     for (const k of adj.bnd[i]) {
       const b = bonds[k];
       sum += b.order;
+      if (b.order >= 2) multiple++;
+      if (isMetal(atoms[b.a === i ? b.b : b.a].atomicNumber)) metal += b.order;
       if (b.order === 2 && atoms[b.a === i ? b.b : b.a].atomicNumber === 8) oxo++;
     }
     const v = raw2.valences[i];
     if (v !== null && v !== void 0) atom.hCount = Math.max(0, v - sum);
     else
       atom.hCount = atom.atomicNumber === 0 ? 0 : implicitHydrogens(atom.atomicNumber, atom.charge, sum, atom.radical);
-    const problem = valenceProblem(atom.atomicNumber, atom.charge, sum, atom.hCount, oxo);
+    const problem = valenceProblem(atom.atomicNumber, atom.charge, sum, atom.hCount, oxo, multiple, metal);
     if (problem !== null) {
       return {
         ok: false,
@@ -17249,6 +17398,71 @@ var init_molfile_bond = __esm({
   }
 });
 
+// src/chem/read/limits.ts
+function textTooLong(text, format, limits) {
+  const max = format === "smiles" ? limits.maxSmilesChars : limits.maxMolfileChars;
+  if (text.length <= max) return null;
+  return {
+    code: format === "smiles" ? "smiles-too-long" : "molfile-too-long",
+    message: `the ${format === "smiles" ? "SMILES" : "molfile"} is ${count(text.length)} characters long, over the limit of ${count(max)}; it was not read`,
+    at: format === "smiles" ? { offset: max } : { line: 1 }
+  };
+}
+function tooManyAtoms(atoms, limits, at) {
+  if (atoms <= limits.maxAtoms) return null;
+  return {
+    code: "too-many-atoms",
+    message: `the structure has ${count(atoms)} atoms, over the limit of ${count(limits.maxAtoms)}; it was not analysed`,
+    at
+  };
+}
+function structureTooLarge(s, limits) {
+  const atoms = tooManyAtoms(s.atoms.length, limits, {});
+  if (atoms !== null) return atoms;
+  const parts = componentCount(s);
+  if (parts <= limits.maxComponents) return null;
+  return {
+    code: "too-many-components",
+    message: `the structure has ${count(parts)} separate components (parts joined by '.'), over the limit of ${count(limits.maxComponents)}; it was not analysed`,
+    at: {}
+  };
+}
+function componentCount(s) {
+  const n = s.atoms.length;
+  const parent = new Int32Array(n);
+  for (let i = 0; i < n; i++) parent[i] = i;
+  const find = (x) => {
+    while (parent[x] !== x) {
+      parent[x] = parent[parent[x]];
+      x = parent[x];
+    }
+    return x;
+  };
+  let parts = n;
+  for (const b of s.bonds) {
+    const x = find(b.a);
+    const y = find(b.b);
+    if (x !== y) {
+      parent[x] = y;
+      parts--;
+    }
+  }
+  return parts;
+}
+var READ_LIMITS, count;
+var init_limits = __esm({
+  "src/chem/read/limits.ts"() {
+    "use strict";
+    READ_LIMITS = Object.freeze({
+      maxSmilesChars: 2e4,
+      maxMolfileChars: 4 * 2 ** 20,
+      maxAtoms: 2e3,
+      maxComponents: 50
+    });
+    count = (n) => n.toLocaleString("en-US");
+  }
+});
+
 // src/chem/read/molfile-v3000.ts
 function fail(code, message, line) {
   return { ok: false, error: { code, message, at: { line } } };
@@ -17291,7 +17505,7 @@ function parseList(v) {
   if (parts.length === 0 || !parts.every(Number.isInteger) || parts[0] !== parts.length - 1) return null;
   return parts.slice(1);
 }
-function parseV3000(lines, idx, end, firstLine, title) {
+function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
   const base = idx;
   const lineNo = (i) => firstLine + (i - base);
   const logical = [];
@@ -17342,6 +17556,8 @@ function parseV3000(lines, idx, end, firstLine, title) {
   let skipDepth = 0;
   let expectAtoms = -1;
   let expectBonds = -1;
+  let countsLine = -1;
+  let bondLines = 0;
   for (const { text, line } of logical) {
     const t = v30Tokens(text);
     const head = (t[0] ?? "").toUpperCase();
@@ -17402,6 +17618,9 @@ function parseV3000(lines, idx, end, firstLine, title) {
         );
       }
       chiralFlag = t[5] === "1";
+      countsLine = line;
+      const large = tooManyAtoms(expectAtoms, limits, { line });
+      if (large !== null) return { ok: false, error: large };
       continue;
     }
     if (block === "ATOM") {
@@ -17411,6 +17630,7 @@ function parseV3000(lines, idx, end, firstLine, title) {
       valences.push(r.valence);
       atomLines.push(line);
     } else if (block === "BOND") {
+      bondLines++;
       if (t.length < 4)
         return fail(
           "molfile-bad-bond-line",
@@ -17480,12 +17700,19 @@ function parseV3000(lines, idx, end, firstLine, title) {
     );
   if (!ctabDone)
     return fail("molfile-v3000-no-ctab", 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
-  if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bonds.length)) {
-    warnings.push({
-      code: "molfile-counts-mismatch",
-      message: `COUNTS says ${expectAtoms} atoms and ${expectBonds} bonds; the blocks hold ${atoms.length} and ${bonds.length}`,
-      at: { line: blockLine }
-    });
+  if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bondLines)) {
+    return fail(
+      "molfile-counts-mismatch",
+      `the COUNTS line says ${expectAtoms} atoms and ${expectBonds} bonds, but the ATOM and BOND blocks hold ${atoms.length} and ${bondLines}; lines were lost or added`,
+      countsLine
+    );
+  }
+  if (atoms.length === 0) {
+    return fail(
+      "molfile-no-atoms",
+      "the V3000 molfile has no atoms: there is no structure to check",
+      countsLine >= 0 ? countsLine : lineNo(endLine)
+    );
   }
   return finishMolecule({ atoms, bonds, valences, atomLines, groups, chiralFlag, title, warnings });
 }
@@ -17529,7 +17756,7 @@ function readAtom(tokens2, line, position, indexOf, warnings) {
     };
   const map = Number(t[5]);
   const kv = keyed(t, 6);
-  const num = (k) => {
+  const num2 = (k) => {
     const v = kv.get(k);
     if (v === void 0) return 0;
     const n = Number(v);
@@ -17543,10 +17770,10 @@ function readAtom(tokens2, line, position, indexOf, warnings) {
     }
     return n;
   };
-  const charge = num("CHG");
-  const rad = num("RAD");
-  const mass = num("MASS");
-  const val = num("VAL");
+  const charge = num2("CHG");
+  const rad = num2("RAD");
+  const mass = num2("MASS");
+  const val = num2("VAL");
   if (index !== position + 1) {
     warnings.push({
       code: "molfile-atom-index-out-of-order",
@@ -17579,6 +17806,7 @@ var init_molfile_v3000 = __esm({
     init_molfile_fields();
     init_molfile_bond();
     init_make();
+    init_limits();
   }
 });
 
@@ -17594,12 +17822,28 @@ function splitLines(text) {
 }
 function parseMolfile(text, opts) {
   const lines = splitLines(text);
-  return parseMolfileLines(lines, 0, lines.length, opts?.firstLine ?? 1);
+  return parseMolfileLines(lines, 0, lines.length, opts?.firstLine ?? 1, opts?.limits);
 }
 function fail2(code, message, line) {
   return { ok: false, error: { code, message, at: { line } } };
 }
-function parseMolfileLines(lines, start, end, firstLine) {
+function shortHeader(lines, start, end) {
+  for (let i = start + 1; i < start + 3 && i < end; i++) {
+    const l = lines[i];
+    if (/V[23]000\s*$/.test(l) && DIGITS.test(l.slice(0, 3).trim()) && DIGITS.test(l.slice(3, 6).trim()))
+      return i;
+  }
+  return -1;
+}
+function headerShort(early, start, lineNo) {
+  const lost = 3 - (early - start);
+  return fail2(
+    "molfile-header-short",
+    `the counts line stands on line ${early - start + 1} of the molfile, not line 4: the header lost ${lost === 1 ? "a line" : `${lost} lines`} (a molfile starts with three header lines: name, program, comment; an unused one stays as an empty line)`,
+    lineNo(early)
+  );
+}
+function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
   const lineNo = (idx2) => firstLine + (idx2 - start);
   if (end - start < 4) {
     return fail2(
@@ -17610,7 +17854,7 @@ function parseMolfileLines(lines, start, end, firstLine) {
   }
   const title = lines[start].trim() || null;
   const counts = lines[start + 3];
-  if (counts.includes("V3000")) return parseV3000(lines, start + 4, end, firstLine + 4, title);
+  if (counts.includes("V3000")) return parseV3000(lines, start + 4, end, firstLine + 4, title, limits);
   let nAtoms = intField(counts, 0, 3);
   let nBonds = intField(counts, 3, 6);
   let nLists = intField(counts, 6, 9);
@@ -17618,9 +17862,13 @@ function parseMolfileLines(lines, start, end, firstLine) {
   const warnings = [];
   if (!(nAtoms >= 0) || !(nBonds >= 0) || counts.trim() === "") {
     const t = tokens(counts);
-    const a = t.length >= 2 ? Number(t[0]) : NaN;
-    const b = t.length >= 2 ? Number(t[1]) : NaN;
+    const a = t.length >= 2 && DIGITS.test(t[0]) ? Number(t[0]) : NaN;
+    const b = t.length >= 2 && DIGITS.test(t[1]) ? Number(t[1]) : NaN;
     if (!Number.isInteger(a) || !Number.isInteger(b) || a < 0 || b < 0) {
+      const early = shortHeader(lines, start, end);
+      if (early >= 0) {
+        return headerShort(early, start, lineNo);
+      }
       return fail2(
         "molfile-bad-counts-line",
         `line 4 of the molfile should be the counts line (atoms, bonds, ..., V2000), found "${counts.slice(0, 40)}"`,
@@ -17638,6 +17886,16 @@ function parseMolfileLines(lines, start, end, firstLine) {
     });
   }
   if (!(nLists >= 0)) nLists = 0;
+  const large = tooManyAtoms(nAtoms, limits, { line: lineNo(start + 3) });
+  if (large !== null) return { ok: false, error: large };
+  if (nAtoms === 0) {
+    const early = shortHeader(lines, start, end);
+    return early >= 0 ? headerShort(early, start, lineNo) : fail2(
+      "molfile-no-atoms",
+      "the counts line gives 0 atoms: there is no structure to check",
+      lineNo(start + 3)
+    );
+  }
   const atoms = objectList();
   const atomLines = [];
   const valences = [];
@@ -17892,15 +18150,17 @@ function readProperties(lines, idx, end, lineNo, raw2) {
     at: { line: lineNo(end) }
   };
 }
-var CHARGE_CODE;
+var DIGITS, CHARGE_CODE;
 var init_molfile = __esm({
   "src/chem/read/molfile.ts"() {
     "use strict";
     init_molfile_build();
     init_molfile_fields();
     init_molfile_v3000();
+    init_limits();
     init_molfile_bond();
     init_make();
+    DIGITS = /^\d+$/;
     CHARGE_CODE = [0, 3, 2, 1, 0, -1, -2, -3];
   }
 });
@@ -17915,11 +18175,33 @@ function fail3(code, message, offset) {
 function parseCxExtension(s, start, atomCount) {
   const n = s.length;
   const groups = objectList();
+  const radicals = /* @__PURE__ */ new Map();
   let i = start + 1;
   for (; ; ) {
     if (i >= n) return fail3("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
     const c = s.charCodeAt(i);
-    if (c === 124) return { ok: true, groups, end: i + 1 };
+    if (c === 124) return { ok: true, groups, radicals, end: i + 1 };
+    if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
+      const count3 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
+      let j2 = i + 3;
+      while (isDigit(s.charCodeAt(j2))) {
+        let v = 0;
+        const at = j2;
+        while (isDigit(s.charCodeAt(j2)) && j2 - at < 9) v = v * 10 + s.charCodeAt(j2++) - 48;
+        if (v >= atomCount) {
+          return fail3(
+            "cxsmiles-bad-radical",
+            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
+            at
+          );
+        }
+        radicals.set(v, count3);
+        if (s.charCodeAt(j2) === 44 && isDigit(s.charCodeAt(j2 + 1))) j2++;
+        else break;
+      }
+      i = j2;
+      continue;
+    }
     if (c === 44) {
       i++;
       continue;
@@ -18389,16 +18671,16 @@ function readBracketAtom(s, start) {
       i++;
     } else if (isUpper(s.charCodeAt(i)) && isUpper(s.charCodeAt(i + 1)) && s.charCodeAt(i) !== 72) {
       const cls = s.substring(i, i + 2);
-      const num = readInt(s, i + 2);
-      if (!num || !["TH", "AL", "SP", "TB", "OH"].includes(cls))
+      const num2 = readInt(s, i + 2);
+      if (!num2 || !["TH", "AL", "SP", "TB", "OH"].includes(cls))
         return bad(i, `unknown chirality class '@${cls}'`);
       if (cls === "TH" || cls === "AL") {
-        if (num[0] !== 1 && num[0] !== 2) return bad(i, `chirality '@${cls}${num[0]}' must be 1 or 2`);
-        atom.chirality = num[0] === 1 ? "@" : "@@";
+        if (num2[0] !== 1 && num2[0] !== 2) return bad(i, `chirality '@${cls}${num2[0]}' must be 1 or 2`);
+        atom.chirality = num2[0] === 1 ? "@" : "@@";
       } else {
         atom.chirality = "other";
       }
-      i = num[1];
+      i = num2[1];
     } else {
       atom.chirality = "@";
     }
@@ -18415,10 +18697,10 @@ function readBracketAtom(s, start) {
   if (sc === 43 || sc === 45) {
     const sign = sc === 43 ? 1 : -1;
     i++;
-    const num = readInt(s, i);
-    if (num) {
-      atom.charge = sign * num[0];
-      i = num[1];
+    const num2 = readInt(s, i);
+    if (num2) {
+      atom.charge = sign * num2[0];
+      i = num2[1];
     } else {
       let k = 1;
       while (s.charCodeAt(i) === sc) {
@@ -18429,10 +18711,10 @@ function readBracketAtom(s, start) {
     }
   }
   if (s.charCodeAt(i) === 58) {
-    const num = readInt(s, i + 1);
-    if (!num) return bad(i, "atom class ':' without a number");
-    atom.mapNumber = num[0];
-    i = num[1];
+    const num2 = readInt(s, i + 1);
+    if (!num2) return bad(i, "atom class ':' without a number");
+    atom.mapNumber = num2[0];
+    i = num2[1];
   }
   if (i >= n) return bad(start, "bracket atom not closed with ']'");
   if (s.charCodeAt(i) !== 93) return bad(i, `unexpected '${s[i]}' in bracket atom`);
@@ -18612,18 +18894,18 @@ function parseInto(s, start) {
     }
     if (c >= 48 && c <= 57 || c === 37) {
       const at = i;
-      let num;
+      let num2;
       if (c === 37) {
         const d1 = s.charCodeAt(i + 1) - 48;
         const d2 = s.charCodeAt(i + 2) - 48;
         if (d1 >= 0 && d1 <= 9 && d2 >= 0 && d2 <= 9) {
-          num = d1 * 10 + d2;
+          num2 = d1 * 10 + d2;
           i += 3;
         } else if (s.charCodeAt(i + 1) === 40) {
           let j = i + 2;
-          num = 0;
+          num2 = 0;
           while (j < n && s.charCodeAt(j) >= 48 && s.charCodeAt(j) <= 57 && j - i < 8)
-            num = num * 10 + s.charCodeAt(j++) - 48;
+            num2 = num2 * 10 + s.charCodeAt(j++) - 48;
           if (j === i + 2 || s.charCodeAt(j) !== 41)
             return err("smiles-bad-ring-number", "'%(' must be followed by digits and ')'", i);
           i = j + 1;
@@ -18631,22 +18913,22 @@ function parseInto(s, start) {
           return err("smiles-bad-ring-number", "'%' must be followed by two digits", i);
         }
       } else {
-        num = c - 48;
+        num2 = c - 48;
         i++;
       }
       if (prev < 0) return err("smiles-dangling-ring-bond", "ring-closure number with no atom before it", at);
-      const rec = num < 100 ? null : (big ??= /* @__PURE__ */ new Map()).get(num);
-      if (num < 100 ? RING_OPEN[num] === 0 : rec === void 0) {
+      const rec = num2 < 100 ? null : (big ??= /* @__PURE__ */ new Map()).get(num2);
+      if (num2 < 100 ? RING_OPEN[num2] === 0 : rec === void 0) {
         const slot = entry(prev, -1, -1);
-        if (num < 100) {
-          RING_OPEN[num] = 1;
-          RING_ATOM[num] = prev;
-          RING_ENTRY[num] = slot;
-          RING_ORDER[num] = pOrder;
-          RING_AROM[num] = pArom;
-          RING_DIR[num] = pDir;
-          RING_OFF[num] = at;
-        } else big.set(num, [prev, slot, pOrder, pArom, pDir, at]);
+        if (num2 < 100) {
+          RING_OPEN[num2] = 1;
+          RING_ATOM[num2] = prev;
+          RING_ENTRY[num2] = slot;
+          RING_ORDER[num2] = pOrder;
+          RING_AROM[num2] = pArom;
+          RING_DIR[num2] = pDir;
+          RING_OFF[num2] = at;
+        } else big.set(num2, [prev, slot, pOrder, pArom, pDir, at]);
         openRings++;
       } else {
         let a;
@@ -18654,15 +18936,15 @@ function parseInto(s, start) {
         let oOrder;
         let oArom;
         let oDir;
-        if (num < 100) {
-          RING_OPEN[num] = 0;
-          a = RING_ATOM[num];
-          slot = RING_ENTRY[num];
-          oOrder = RING_ORDER[num];
-          oArom = RING_AROM[num];
-          oDir = RING_DIR[num];
+        if (num2 < 100) {
+          RING_OPEN[num2] = 0;
+          a = RING_ATOM[num2];
+          slot = RING_ENTRY[num2];
+          oOrder = RING_ORDER[num2];
+          oArom = RING_AROM[num2];
+          oDir = RING_DIR[num2];
         } else {
-          big.delete(num);
+          big.delete(num2);
           a = rec[0];
           slot = rec[1];
           oOrder = rec[2];
@@ -18671,23 +18953,23 @@ function parseInto(s, start) {
         }
         openRings--;
         if (a === prev)
-          return err("smiles-ring-bond-to-self", `ring closure ${num} bonds an atom to itself`, at);
+          return err("smiles-ring-bond-to-self", `ring closure ${num2} bonds an atom to itself`, at);
         for (let e = firstEv[prev]; e >= 0; e = evNext[e])
           if (evAtom[e] === a)
-            return err("smiles-duplicate-bond", `ring closure ${num} repeats an existing bond`, at);
+            return err("smiles-duplicate-bond", `ring closure ${num2} repeats an existing bond`, at);
         if (pOrder !== 0) {
           if (oOrder !== 0) {
             if (oOrder !== pOrder || oArom !== pArom) {
               return err(
                 "smiles-conflicting-ring-bond",
-                `ring closure ${num} has different bond symbols at its two ends`,
+                `ring closure ${num2} has different bond symbols at its two ends`,
                 at
               );
             }
             if (oDir !== 0 && pDir !== 0 && oDir !== -pDir) {
               return err(
                 "smiles-conflicting-ring-bond",
-                `ring closure ${num} has contradicting '/' '\\' marks`,
+                `ring closure ${num2} has contradicting '/' '\\' marks`,
                 at
               );
             }
@@ -19077,10 +19359,12 @@ function parse(text) {
   let i = g.end;
   while (i < text.length && isSpace2(text.charCodeAt(i))) i++;
   let groups = null;
+  let cxRadicals = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
     const cx = parseCxExtension(text, i, n);
     if (!cx.ok) return cx;
     groups = cx.groups;
+    if (cx.radicals.size > 0) cxRadicals = cx.radicals;
     i = cx.end;
   }
   const title = text.slice(i).trim();
@@ -19101,12 +19385,25 @@ function parse(text) {
     const ra = g.atoms[a];
     let sum = 0;
     let oxo = 0;
+    let multiple = 0;
+    let metal = 0;
     for (let e = nbrStart[a], stop = nbrStart[a + 1]; e < stop; e++) {
       const bi = nbrBond[e];
       sum += order[bi];
-      if (order[bi] === 2 && g.atoms[bondA[bi] === a ? bondB[bi] : bondA[bi]].atomicNumber === 8) oxo++;
+      if (order[bi] >= 2) multiple++;
+      const other = g.atoms[bondA[bi] === a ? bondB[bi] : bondA[bi]].atomicNumber;
+      if (order[bi] === 2 && other === 8) oxo++;
+      if (isMetal(other)) metal += order[bi];
     }
-    const problem = valenceProblem(ra.atomicNumber, ra.charge, sum, ra.hCount < 0 ? 0 : ra.hCount, oxo);
+    const problem = valenceProblem(
+      ra.atomicNumber,
+      ra.charge,
+      sum,
+      ra.hCount < 0 ? 0 : ra.hCount,
+      oxo,
+      multiple,
+      metal
+    );
     if (problem !== null) return failure("smiles-valence", problem, ra.offset);
     if (ra.hCount < 0) {
       hCount[a] = ra.atomicNumber === 0 ? 0 : implicitHydrogens(ra.atomicNumber, 0, sum);
@@ -19117,6 +19414,7 @@ function parse(text) {
       if (vals.length > 0 && used < vals[0]) radical[a] = Math.min(2, vals[0] - used);
     }
   }
+  if (cxRadicals) for (const [a, r] of cxRadicals) radical[a] = r;
   const stereo = buildStereo(g, order, hCount, warnings);
   const atoms = objectList();
   for (let a = 0; a < n; a++) {
@@ -19394,14 +19692,22 @@ function looksLikeMolfile(text) {
 }
 function readStructure(text, opts) {
   const format = opts?.format ?? "auto";
-  if (format === "molfile" || format === "auto" && looksLikeMolfile(text)) return parseMolfile(text);
-  return parseSmiles(text);
+  const limits = opts?.limits ?? READ_LIMITS;
+  const molfile = format === "molfile" || format === "auto" && looksLikeMolfile(text);
+  const long = textTooLong(text, molfile ? "molfile" : "smiles", limits);
+  if (long !== null) return { ok: false, error: long };
+  const read = molfile ? parseMolfile(text, { limits }) : parseSmiles(text);
+  if (!read.ok) return read;
+  const large = structureTooLarge(read.structure, limits);
+  return large === null ? read : { ok: false, error: large };
 }
 var init_read = __esm({
   "src/chem/read/index.ts"() {
     "use strict";
     init_molfile();
     init_smiles();
+    init_limits();
+    init_limits();
     init_molfile();
     init_sdf();
   }
@@ -19804,8 +20110,17 @@ function writeSmilesWithOrder(s, opts = {}) {
     }
   });
   let smi = out.join("");
+  const parts = [];
+  const byCount = [[], []];
+  for (let a = 0; a < s.atoms.length; a++) {
+    const at = s.atoms[a];
+    if (at.radical > 0 && impliedRadical(at, valence[a]) !== at.radical)
+      byCount[at.radical >= 2 ? 1 : 0].push(em.outIndex[a]);
+  }
+  byCount.forEach((idx, k) => {
+    if (idx.length > 0) parts.push(`^${k + 1}:${idx.sort((x, y) => x - y).join(",")}`);
+  });
   if (withStereo2 && s.groups.length > 0) {
-    const parts = [];
     for (const g of s.groups) {
       const idx = g.atoms.filter((a) => a >= 0 && a < s.atoms.length).map((a) => em.outIndex[a]);
       if (idx.length === 0) continue;
@@ -19813,11 +20128,16 @@ function writeSmilesWithOrder(s, opts = {}) {
       const head = g.type === "abs" ? "a" : g.type === "and" ? `&${g.id}` : `o${g.id}`;
       parts.push(`${head}:${idx.join(",")}`);
     }
-    if (parts.length > 0) smi += ` |${parts.join(",")}|`;
   }
+  if (parts.length > 0) smi += ` |${parts.join(",")}|`;
   const atomOrder = new Array(s.atoms.length);
   for (let a = 0; a < s.atoms.length; a++) atomOrder[em.outIndex[a]] = a;
   return { smiles: smi, atomOrder };
+}
+function impliedRadical(a, valence) {
+  const vals = defaultValences(a.atomicNumber, a.charge);
+  const used = valence + a.hCount;
+  return vals.length > 0 && used < vals[0] ? Math.min(2, vals[0] - used) : 0;
 }
 function ringDigit(d) {
   return d < 10 ? String(d) : d < 100 ? `%${d}` : `%(${d})`;
@@ -19863,7 +20183,7 @@ var init_smiles2 = __esm({
   }
 });
 
-// src/chem/perceive-units.ts
+// src/chem/perceive/units.ts
 function mapToken(t, n, map, nOut = n) {
   if (t < n) return map[t];
   if (t < 2 * n) return nOut + map[t - n];
@@ -19893,6 +20213,7 @@ function rebase(unit2, list, bit) {
   return bit ^ (p & 1 ^ q & 1);
 }
 function unitStereo(unit2, bit, n) {
+  if (unit2.kind === "helix" || unit2.kind === "planar") return null;
   const lig = (t) => t < n ? t : t < 2 * n ? IMPLICIT_H : LONE_PAIR;
   const [a, b, c, d] = unit2.tokens.map(lig);
   if (unit2.kind === "tetrahedral") {
@@ -19905,8 +20226,8 @@ function unitStereo(unit2, bit, n) {
   return { kind: "axial", subtype, ends, ligands: [a, b, c, d], winding: bit ? "@@" : "@" };
 }
 var hToken, lpToken;
-var init_perceive_units = __esm({
-  "src/chem/perceive-units.ts"() {
+var init_units = __esm({
+  "src/chem/perceive/units.ts"() {
     "use strict";
     init_types();
     hToken = (n, atom) => n + atom;
@@ -19914,10 +20235,2771 @@ var init_perceive_units = __esm({
   }
 });
 
-// src/chem/symmetry-solve.ts
+// src/chem/perceive/bonds.ts
+function doubleCount(s, g, i) {
+  let d = 0;
+  for (const b of g.nbrBonds[i]) if (s.bonds[b].order === 2) d++;
+  return d;
+}
+function isCumuleneInterior(s, g, i) {
+  return g.nbrs[i].length === 2 && s.atoms[i].hCount === 0 && doubleCount(s, g, i) === 2;
+}
+function endTokens(s, g, e, partner) {
+  const a = s.atoms[e];
+  if (a.radical !== 0) return null;
+  const n = s.atoms.length;
+  const subs = [];
+  for (const x of g.nbrs[e]) if (x !== partner) subs.push(x);
+  for (const b of g.nbrBonds[e]) {
+    const bond = s.bonds[b];
+    const other = bond.a === e ? bond.b : bond.a;
+    if (other !== partner && bond.order !== 1) return null;
+  }
+  if (a.atomicNumber === 6 && a.charge === 0) {
+    if (subs.length + a.hCount !== 2 || a.hCount > 1) return null;
+    if (a.hCount === 1) subs.push(hToken(n, e));
+    return [subs[0], subs[1]];
+  }
+  if (a.atomicNumber === 7) {
+    if (a.charge === 0 && subs.length === 1 && a.hCount === 0) return [subs[0], lpToken(n, e)];
+    if (a.charge === 1 && subs.length + a.hCount === 2 && a.hCount <= 1 && subs.length >= 1) {
+      if (a.hCount === 1) subs.push(hToken(n, e));
+      return [subs[0], subs[1]];
+    }
+  }
+  return null;
+}
+function ringOk(rings, bond) {
+  const r = rings.smallestRingOfBond[bond];
+  return r === 0 || r >= 8;
+}
+function bondCandidates(s, g, rings, aromaticBond) {
+  const out = [];
+  const seen = new Uint8Array(s.bonds.length);
+  for (let bi = 0; bi < s.bonds.length; bi++) {
+    const b = s.bonds[bi];
+    if (seen[bi] || b.order !== 2 || aromaticBond[bi] || b.aromatic) continue;
+    const chainBonds = [bi];
+    seen[bi] = 1;
+    const ends = [];
+    for (const start of [b.a, b.b]) {
+      let prev = start === b.a ? b.b : b.a;
+      let cur = start;
+      while (isCumuleneInterior(s, g, cur)) {
+        const k2 = g.nbrs[cur][0] === prev ? 1 : 0;
+        const next = g.nbrs[cur][k2];
+        const nb = g.nbrBonds[cur][k2];
+        if (seen[nb]) break;
+        seen[nb] = 1;
+        chainBonds.push(nb);
+        prev = cur;
+        cur = next;
+      }
+      ends.push(cur);
+      ends.push(prev);
+    }
+    const [e0, in0, e1, in1] = ends;
+    if (e0 === e1) continue;
+    if (chainBonds.some((x) => aromaticBond[x] || s.bonds[x].aromatic || !ringOk(rings, x))) continue;
+    const k = chainBonds.length;
+    const el0 = s.atoms[e0].atomicNumber;
+    const el1 = s.atoms[e1].atomicNumber;
+    if (k === 1 && !((el0 === 6 || el0 === 7) && (el1 === 6 || el1 === 7))) continue;
+    if (k > 1 && (el0 !== 6 || el1 !== 6)) continue;
+    const t0 = endTokens(s, g, e0, in0);
+    const t1 = endTokens(s, g, e1, in1);
+    if (!t0 || !t1) continue;
+    const odd = k % 2 === 1;
+    out.push({
+      kind: k === 1 ? "double-bond" : k === 2 ? "allene" : "cumulene",
+      mode: odd ? "cistrans" : "parity",
+      ends: [e0, e1],
+      bonds: chainBonds,
+      tokens: [t0[0], t0[1], t1[0], t1[1]]
+    });
+  }
+  return out;
+}
+var init_bonds = __esm({
+  "src/chem/perceive/bonds.ts"() {
+    "use strict";
+    init_units();
+  }
+});
+
+// src/chem/perceive/centres.ts
+function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
+  const atom = s.atoms[i];
+  const z = atom.atomicNumber;
+  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50)
+    return null;
+  if (atom.radical !== 0 || atom.hCount > 1) return null;
+  const nb = g.nbrs[i];
+  const nbB = g.nbrBonds[i];
+  const heavy = nb.length;
+  if (heavy < 2 || heavy > 4) return null;
+  const h = atom.hCount;
+  const sigma = heavy + h;
+  if (sigma < 3 || sigma > 4) return null;
+  let doubles = 0;
+  for (let k = 0; k < nbB.length; k++) {
+    const b = s.bonds[nbB[k]];
+    if (aromaticBond[nbB[k]] || b.aromatic) return null;
+    if (b.order === 2) doubles++;
+    else if (b.order !== 1) return null;
+  }
+  const n = s.atoms.length;
+  if (h > 1) return null;
+  const c = atom.charge;
+  switch (z) {
+    case 6:
+    case 14:
+    case 32:
+    case 50:
+      return c === 0 && sigma === 4 && doubles === 0 ? centreOf(nb, h, false, n, i) : null;
+    case 7:
+      if (doubles > 0 || h > 0) return null;
+      if (c === 1 && heavy === 4) return centreOf(nb, h, false, n, i);
+      if (c === 0 && heavy === 3) {
+        if (atom.aromatic) return null;
+        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(g, rings, i))
+          return centreOf(nb, h, true, n, i);
+        return { kind: "invertible-nitrogen" };
+      }
+      return null;
+    case 15:
+    case 33:
+      if (resonancePair(s, g, i)) return null;
+      if (c === 0 && doubles === 0 && sigma === 3) return centreOf(nb, h, true, n, i);
+      if (c === 0 && doubles === 1 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
+      if (c === 1 && doubles === 0 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
+      return null;
+    case 16:
+    case 34:
+      if (h > 0 || resonancePair(s, g, i)) return null;
+      if (c === 0 && doubles === 1 && heavy === 3) return centreOf(nb, h, true, n, i);
+      if (c === 1 && doubles === 0 && heavy === 3) return centreOf(nb, h, true, n, i);
+      if (c === 0 && doubles === 2 && heavy === 4) return centreOf(nb, h, false, n, i);
+      return null;
+    default:
+      return null;
+  }
+}
+function centreOf(nb, h, withLonePair, n, i) {
+  const count3 = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
+  if (count3 !== 4) return null;
+  const t = [0, 0, 0, 0];
+  let k = 0;
+  for (; k < nb.length; k++) t[k] = nb[k];
+  if (h === 1) t[k++] = hToken(n, i);
+  if (withLonePair) t[k] = lpToken(n, i);
+  return { kind: "centre", tokens: t };
+}
+function isSmallBridgehead(g, rings, i) {
+  let ringBonds3 = 0;
+  for (const b of g.nbrBonds[i]) if (rings.bondInRing[b]) ringBonds3++;
+  if (ringBonds3 < 3) return false;
+  const mine = rings.rings.filter((r) => r.length <= 8 && r.includes(i));
+  for (let a = 0; a < mine.length; a++) {
+    for (let b = a + 1; b < mine.length; b++) {
+      const set = new Set(mine[a]);
+      let shared2 = 0;
+      for (const x of mine[b]) if (set.has(x)) shared2++;
+      if (shared2 >= 3) return true;
+    }
+  }
+  return false;
+}
+function resonancePair(s, g, i) {
+  const doubleEl = /* @__PURE__ */ new Set();
+  const singleEl = /* @__PURE__ */ new Set();
+  const nb = g.nbrs[i];
+  for (let k = 0; k < nb.length; k++) {
+    const x = s.atoms[nb[k]];
+    if (g.nbrs[nb[k]].length !== 1 || x.atomicNumber !== 8 && x.atomicNumber !== 16 && x.atomicNumber !== 34)
+      continue;
+    const order = s.bonds[g.nbrBonds[i][k]].order;
+    const key3 = x.atomicNumber * 1e3 + (x.isotope ?? 0);
+    if (order === 2) doubleEl.add(key3);
+    else if (order === 1 && (x.hCount > 0 || x.charge < 0)) singleEl.add(key3);
+  }
+  for (const e of doubleEl) if (singleEl.has(e)) return true;
+  if (s.atoms[i].charge > 0) {
+    const seen = /* @__PURE__ */ new Set();
+    for (let k = 0; k < nb.length; k++) {
+      const x = s.atoms[nb[k]];
+      if (g.nbrs[nb[k]].length !== 1 || x.atomicNumber !== 8 || x.charge >= 0 && x.hCount === 0) continue;
+      if (seen.has(x.isotope ?? 0)) return true;
+      seen.add(x.isotope ?? 0);
+    }
+  }
+  return false;
+}
+var init_centres = __esm({
+  "src/chem/perceive/centres.ts"() {
+    "use strict";
+    init_units();
+  }
+});
+
+// src/chem/perceive/input.ts
+function atomName(s, i) {
+  return `${s.atoms[i].element}${s.atoms[i].inputNumber}`;
+}
+function applyInputStereo(s, units, unitOfAtom, invertible, remarks) {
+  const n = s.atoms.length;
+  const drawnN = [];
+  const pseudo = (u, atom, x) => {
+    if (x >= 0) return x;
+    const h = hToken(n, atom);
+    const lp = lpToken(n, atom);
+    if (x === IMPLICIT_H) return u.tokens.includes(h) ? h : lp;
+    if (x === LONE_PAIR) return u.tokens.includes(lp) ? lp : h;
+    return x;
+  };
+  for (const e of s.stereo) {
+    const anchor = e.kind === "tetrahedral" ? e.centre : e.ends[0];
+    const k = unitOfAtom[anchor];
+    const u = k >= 0 ? units[k] : void 0;
+    const bit = u ? bitFor(u, e, pseudo) : -1;
+    if (u && bit >= 0) {
+      u.defined = true;
+      u.bit = bit;
+      continue;
+    }
+    if (e.kind === "tetrahedral" && invertible.has(e.centre)) {
+      drawnN.push(e.centre);
+      remarks.push(
+        `configuration drawn on ${atomName(s, e.centre)}, an ordinary amine nitrogen: it inverts rapidly, so it is not a stereocentre`
+      );
+      continue;
+    }
+    const where2 = e.kind === "tetrahedral" ? atomName(s, e.centre) : `the ${atomName(s, e.ends[0])}–${atomName(s, e.ends[1])} unit`;
+    if (s.dimension !== 3)
+      remarks.push(`configuration drawn on ${where2}, which is not a stereogenic unit; ignored`);
+  }
+  return drawnN;
+}
+function bitFor(u, e, pseudo) {
+  if (e.kind === "tetrahedral") {
+    if (u.kind !== "tetrahedral") return -1;
+    const l2 = e.ligands;
+    const c = e.centre;
+    const list2 = [pseudo(u, c, l2[0]), pseudo(u, c, l2[1]), pseudo(u, c, l2[2]), pseudo(u, c, l2[3])];
+    return rebase(u, list2, e.winding === "@@" ? 1 : 0);
+  }
+  const [a, b] = e.ends;
+  const sameOrder = u.atoms[0] === a && u.atoms[1] === b;
+  const reversed = u.atoms[0] === b && u.atoms[1] === a;
+  if (!sameOrder && !reversed) return -1;
+  if (e.kind === "double-bond") {
+    if (u.mode !== "cistrans") return -1;
+    const ra = pseudo(u, a, e.refs[0]);
+    const rb = pseudo(u, b, e.refs[1]);
+    const other = (t, side) => u.tokens[side] === t ? u.tokens[side + 1] : u.tokens[side];
+    const sideA = sameOrder ? 0 : 2;
+    const sideB = sameOrder ? 2 : 0;
+    if (!u.tokens.includes(ra) || !u.tokens.includes(rb)) return -1;
+    const list2 = [ra, other(ra, sideA), rb, other(rb, sideB)];
+    return rebase(u, list2, e.relation === "trans" ? 1 : 0);
+  }
+  if (u.mode !== "parity") return -1;
+  const l = e.ligands;
+  const list = [pseudo(u, a, l[0]), pseudo(u, a, l[1]), pseudo(u, b, l[2]), pseudo(u, b, l[3])];
+  return rebase(u, list, e.winding === "@@" ? 1 : 0);
+}
+var init_input = __esm({
+  "src/chem/perceive/input.ts"() {
+    "use strict";
+    init_types();
+    init_units();
+  }
+});
+
+// src/chem/perceive/rescue.ts
+function swapsTerminalPair(u, g, classes, n) {
+  for (let i = 0; i < 4; i++) {
+    const a = u.tokens[i];
+    if (a >= n || g.nbrs[a].length !== 1) continue;
+    for (let j = i + 1; j < 4; j++) {
+      const b = u.tokens[j];
+      if (b < n && g.nbrs[b].length === 1 && classes[a] === classes[b] && sameSide(u, i, j)) return true;
+    }
+  }
+  return false;
+}
+function swapsPendantTrees(u, g, classes, n, cap2 = 2e4) {
+  const tree = [];
+  for (let i = 0; i < 4; i++) {
+    const a = u.tokens[i];
+    tree.push(a < n && pendantTree(g, a, u.atoms, cap2));
+  }
+  for (let i = 0; i < 4; i++) {
+    if (!tree[i]) continue;
+    for (let j = i + 1; j < 4; j++)
+      if (tree[j] && classes[u.tokens[i]] === classes[u.tokens[j]] && sameSide(u, i, j)) return true;
+  }
+  return false;
+}
+function pendantTree(g, a, stop, cap2) {
+  const seen = /* @__PURE__ */ new Set([a]);
+  const queue = [a];
+  let edges = 0;
+  for (let q = 0; q < queue.length; q++) {
+    const x = queue[q];
+    for (const y of g.nbrs[x]) {
+      if (stop.includes(y)) {
+        if (x !== a) return false;
+        continue;
+      }
+      edges++;
+      if (!seen.has(y)) {
+        if (seen.size >= cap2) return false;
+        seen.add(y);
+        queue.push(y);
+      }
+    }
+  }
+  return edges === 2 * (seen.size - 1);
+}
+function sameSide(u, i, j) {
+  return u.kind === "tetrahedral" || i < 2 === j < 2;
+}
+function survivesSymmetry(s, u, classes) {
+  const n = s.atoms.length;
+  const colour = Int32Array.from(classes);
+  let top = 0;
+  for (const c of classes) if (c > top) top = c;
+  for (const a of u.atoms) colour[a] = ++top;
+  let inverted = false;
+  const res = automorphisms(s, {
+    key: [...u.atoms],
+    colour,
+    maxResults: 2e3,
+    onMapping: (map) => {
+      if (rebase(
+        u,
+        u.tokens.map((t) => mapToken(t, n, map)),
+        0
+      ) === 1)
+        inverted = true;
+      return !inverted;
+    }
+  });
+  return !inverted && res.complete;
+}
+var init_rescue = __esm({
+  "src/chem/perceive/rescue.ts"() {
+    "use strict";
+    init_graph();
+    init_units();
+  }
+});
+
+// src/chem/perceive/bridges.ts
+function bridgeCouplings(s, g, rings, units) {
+  const out = objectList();
+  for (const c of bridgedPairs(s, g, rings, units)) out.push(c);
+  for (const c of fusedPairs(g, rings, units)) out.push(c);
+  return out;
+}
+function fusedPairs(g, rings, units) {
+  const out = [];
+  let anyCentre = false;
+  for (const u of units) if (u.kind === "tetrahedral") anyCentre = true;
+  if (!anyCentre) return out;
+  const unitAt = new Int32Array(g.n).fill(-1);
+  for (let k = 0; k < units.length; k++) if (units[k].kind === "tetrahedral") unitAt[units[k].atoms[0]] = k;
+  for (let ka = 0; ka < units.length; ka++) {
+    if (units[ka].kind !== "tetrahedral") continue;
+    const a = units[ka].atoms[0];
+    for (let i = 0; i < g.nbrs[a].length; i++) {
+      const b = g.nbrs[a][i];
+      const kb = unitAt[b];
+      if (kb < 0 || b < a) continue;
+      const r = rings.smallestRingOfBond[g.nbrBonds[a][i]];
+      if (r !== 3 && r !== 4) continue;
+      const through = rings.rings.filter((ring) => adjacentIn(ring, a, b));
+      if (through.length !== 2) continue;
+      through.sort((x, y) => x.length - y.length);
+      const [r1, r2] = [through[0].length, through[1].length];
+      if (!(r1 === 3 && r2 <= 6 || r1 === 4 && r2 === 4)) continue;
+      const a1 = ringNeighbour(through[0], a, b);
+      const a22 = ringNeighbour(through[1], a, b);
+      const b1 = ringNeighbour(through[0], b, a);
+      const b2 = ringNeighbour(through[1], b, a);
+      const ua = units[ka];
+      const ub = units[kb];
+      const xa = ua.tokens.find((t) => t !== b && t !== a1 && t !== a22);
+      const xb = ub.tokens.find((t) => t !== a && t !== b1 && t !== b2);
+      if (xa === void 0 || xb === void 0) continue;
+      const pa = permutationParity2([xa, b, a1, a22], ua.tokens);
+      const pb = permutationParity2([xb, a, b1, b2], ub.tokens);
+      if (pa < 0 || pb < 0) continue;
+      out.push({ a: ka, b: kb, c: 1 ^ pa ^ pb });
+    }
+  }
+  return out;
+}
+function adjacentIn(ring, a, b) {
+  const i = ring.indexOf(a);
+  if (i < 0) return false;
+  const L = ring.length;
+  return ring[(i + 1) % L] === b || ring[(i + L - 1) % L] === b;
+}
+function ringNeighbour(ring, a, b) {
+  const i = ring.indexOf(a);
+  const L = ring.length;
+  const next = ring[(i + 1) % L];
+  return next === b ? ring[(i + L - 1) % L] : next;
+}
+function bridgedPairs(s, g, rings, units) {
+  let possible = 0;
+  for (const u of units) {
+    if (u.kind !== "tetrahedral") continue;
+    let ringBonds3 = 0;
+    for (const b of g.nbrBonds[u.atoms[0]]) if (rings.bondInRing[b]) ringBonds3++;
+    if (ringBonds3 >= 3) possible++;
+  }
+  if (possible < 2) return [];
+  const memo = /* @__PURE__ */ new Map();
+  const ringNbrs = (x) => {
+    let out2 = memo.get(x);
+    if (out2 !== void 0) return out2;
+    out2 = [];
+    for (let k = 0; k < g.nbrs[x].length; k++) if (rings.bondInRing[g.nbrBonds[x][k]]) out2.push(g.nbrs[x][k]);
+    memo.set(x, out2);
+    return out2;
+  };
+  const cand = units.map((u, k) => ({ u, k })).filter(({ u }) => u.kind === "tetrahedral" && ringNbrs(u.atoms[0]).length >= 3);
+  if (cand.length < 2) return [];
+  const system = new Int32Array(s.atoms.length).fill(-1);
+  rings.ringSystems.forEach((atoms, k) => atoms.forEach((x) => system[x] = k));
+  const out = [];
+  for (let i = 0; i < cand.length; i++) {
+    for (let j = i + 1; j < cand.length; j++) {
+      const a = cand[i].u.atoms[0];
+      const b = cand[j].u.atoms[0];
+      if (system[a] < 0 || system[a] !== system[b]) continue;
+      const bridges2 = threeBridges(a, b, ringNbrs);
+      if (!bridges2) continue;
+      const ua = cand[i].u;
+      const ub = cand[j].u;
+      const xa = ua.tokens.find((t) => !bridges2.some((p) => p[0] === t));
+      const xb = ub.tokens.find((t) => !bridges2.some((p) => p[p.length - 1] === t));
+      if (xa === void 0 || xb === void 0) continue;
+      const la = [xa, ...bridges2.map((p) => p[0])];
+      const lb = [xb, ...bridges2.map((p) => p[p.length - 1])];
+      const pa = permutationParity2(la, ua.tokens);
+      const pb = permutationParity2(lb, ub.tokens);
+      if (pa < 0 || pb < 0) continue;
+      out.push({ a: cand[i].k, b: cand[j].k, c: 1 ^ pa ^ pb });
+    }
+  }
+  return out;
+}
+function threeBridges(a, b, ringNbrs) {
+  const paths = [];
+  const path = [];
+  const onPath = /* @__PURE__ */ new Set([a]);
+  const walk = (x) => {
+    if (paths.length > 200) return;
+    for (const y of ringNbrs(x)) {
+      if (y === b) {
+        if (path.length >= 1) paths.push(path.slice());
+        continue;
+      }
+      if (onPath.has(y) || path.length >= MAX_INNER) continue;
+      onPath.add(y);
+      path.push(y);
+      walk(y);
+      path.pop();
+      onPath.delete(y);
+    }
+  };
+  walk(a);
+  paths.sort((p, q) => p.length - q.length);
+  for (let i = 0; i < paths.length; i++) {
+    for (let j = i + 1; j < paths.length; j++) {
+      if (!disjoint(paths[i], paths[j])) continue;
+      for (let k = j + 1; k < paths.length; k++) {
+        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k]))
+          return [paths[i], paths[j], paths[k]];
+      }
+    }
+  }
+  return null;
+}
+function disjoint(p, q) {
+  for (const x of p) if (q.includes(x)) return false;
+  return true;
+}
+var MAX_INNER;
+var init_bridges = __esm({
+  "src/chem/perceive/bridges.ts"() {
+    "use strict";
+    init_units();
+    init_make();
+    MAX_INNER = 3;
+  }
+});
+
+// src/chem/perceive/axes.ts
+function axisCandidates(s, g, rings, aromaticBond, orthoMin) {
+  const out = [];
+  const heavyDegree = (x) => {
+    let d = 0;
+    for (const y of g.nbrs[x]) if (s.atoms[y].atomicNumber > 1) d++;
+    return d;
+  };
+  const orthoOf = (e, partner) => {
+    const atom = s.atoms[e];
+    if (atom.hCount !== 0 || atom.charge !== 0) return null;
+    const out2 = [];
+    for (let k = 0; k < g.nbrs[e].length; k++) {
+      const x = g.nbrs[e][k];
+      if (x === partner) continue;
+      if (s.atoms[x].atomicNumber <= 1) return null;
+      const b = g.nbrBonds[e][k];
+      if (!rings.bondInRing[b] || !(aromaticBond[b] || s.bonds[b].aromatic)) return null;
+      out2.push(x);
+    }
+    return out2.length === 2 ? [out2[0], out2[1]] : null;
+  };
+  const substituted = (o) => {
+    if (heavyDegree(o) < 3) return 0;
+    let ringBonds3 = 0;
+    for (const b of g.nbrBonds[o]) if (rings.bondInRing[b]) ringBonds3++;
+    return ringBonds3 >= 3 ? 2 : 1;
+  };
+  for (let k = 0; k < s.bonds.length; k++) {
+    const b = s.bonds[k];
+    if (b.order !== 1 || b.aromatic || aromaticBond[k] || rings.bondInRing[k]) continue;
+    if (!rings.atomInRing[b.a] || !rings.atomInRing[b.b]) continue;
+    const oa = orthoOf(b.a, b.b);
+    if (oa === null) continue;
+    const ob = orthoOf(b.b, b.a);
+    if (ob === null) continue;
+    const count3 = substituted(oa[0]) + substituted(oa[1]) + substituted(ob[0]) + substituted(ob[1]);
+    if (count3 < orthoMin) continue;
+    out.push({ ends: [b.a, b.b], tokens: [oa[0], oa[1], ob[0], ob[1]], orthoSubstituents: count3 });
+  }
+  return out;
+}
+var DEFAULT_AXIS_ORTHO_MIN;
+var init_axes = __esm({
+  "src/chem/perceive/axes.ts"() {
+    "use strict";
+    DEFAULT_AXIS_ORTHO_MIN = 3;
+  }
+});
+
+// src/chem/cip/masses.ts
+function averageMass(atomicNumber) {
+  if (atomicNumber >= 0 && atomicNumber < BY_Z.length && Number.isInteger(atomicNumber))
+    return BY_Z[atomicNumber];
+  return computeAverageMass(atomicNumber);
+}
+function computeAverageMass(atomicNumber) {
+  if (atomicNumber <= 0) return 0;
+  const m = MEAN_MASS_NUMBER[atomicNumber];
+  if (m !== void 0) return m;
+  if (atomicNumber < MEAN.length) return MEAN[atomicNumber] * 1.001;
+  return Math.round(atomicNumber * 2.5);
+}
+var MEAN, MEAN_MASS_NUMBER, BY_Z;
+var init_masses = __esm({
+  "src/chem/cip/masses.ts"() {
+    "use strict";
+    MEAN = [
+      0,
+      1.008,
+      4.0026,
+      6.94,
+      9.0122,
+      10.81,
+      12.011,
+      14.007,
+      15.999,
+      18.998,
+      20.18,
+      22.99,
+      24.305,
+      26.982,
+      28.085,
+      30.974,
+      32.06,
+      35.45,
+      39.948,
+      39.098,
+      40.078,
+      44.956,
+      47.867,
+      50.942,
+      51.996,
+      54.938,
+      55.845,
+      58.933,
+      58.693,
+      63.546,
+      65.38,
+      69.723,
+      72.63,
+      74.922,
+      78.971,
+      79.904,
+      83.798,
+      85.468,
+      87.62,
+      88.906,
+      91.224,
+      92.906,
+      95.95,
+      97,
+      101.07,
+      102.91,
+      106.42,
+      107.87,
+      112.41,
+      114.82,
+      118.71,
+      121.76,
+      127.6,
+      126.9,
+      131.29,
+      132.91,
+      137.33,
+      138.91,
+      140.12,
+      140.91,
+      144.24,
+      145,
+      150.36,
+      151.96,
+      157.25,
+      158.93,
+      162.5,
+      164.93,
+      167.26,
+      168.93,
+      173.05,
+      174.97,
+      178.49,
+      180.95,
+      183.84,
+      186.21,
+      190.23,
+      192.22,
+      195.08,
+      196.97,
+      200.59,
+      204.38,
+      207.2,
+      208.98,
+      209,
+      210,
+      222
+    ];
+    MEAN_MASS_NUMBER = {
+      1: 1.00012,
+      5: 10.801,
+      6: 12.0107,
+      7: 14.0036,
+      8: 16.0044,
+      9: 19,
+      14: 28.109,
+      15: 31,
+      16: 32.093,
+      17: 35.485,
+      34: 79.04,
+      35: 79.986,
+      53: 127
+    };
+    BY_Z = Array.from({ length: 119 }, (_, z) => computeAverageMass(z));
+  }
+});
+
+// src/chem/cip/mancude.ts
+function perceiveMancude(s, nbr, ord, mass) {
+  const n = s.atoms.length;
+  const off = new Array(n + 1);
+  off[0] = 0;
+  for (let a = 0; a < n; a++) off[a + 1] = off[a] + nbr[a].length;
+  const slots = off[n];
+  const edge = new Array(slots).fill(0);
+  const dupZ = new Array(n).fill(0);
+  const dupMass = new Array(n).fill(0);
+  let anyDouble = false;
+  for (let a = 0; a < n && !anyDouble; a++) {
+    const o = nbr[a];
+    const oa = ord[a];
+    for (let i = 0; i < o.length; i++) {
+      if (oa[i] === 2 && o[i] > a) {
+        anyDouble = true;
+        break;
+      }
+    }
+  }
+  if (!anyDouble) return result(n, nbr, off, edge, dupZ, dupMass);
+  if (scratchRing.length < slots) {
+    scratchRing = new Uint8Array(2 * slots);
+    scratchSlot = new Uint8Array(2 * slots);
+  }
+  if (scratchPi.length < n) scratchPi = new Uint8Array(2 * n);
+  const ring = scratchRing;
+  ring.fill(0, 0, slots);
+  ringBonds2(n, nbr, off, ring, null);
+  if (scratchPiDouble.length < n) scratchPiDouble = new Uint8Array(2 * n);
+  const piDouble = scratchPiDouble;
+  for (let a = 0; a < n; a++) {
+    const oa = ord[a];
+    const base = off[a];
+    let d = 0;
+    for (let i = 0; i < oa.length; i++) if (oa[i] === 2 && ring[base + i] === 1) d = 1;
+    piDouble[a] = d;
+  }
+  const pi = scratchPi;
+  pi.fill(0, 0, n);
+  for (let a = 0; a < n; a++) {
+    const base = off[a];
+    const oa = ord[a];
+    const deg = oa.length;
+    let inRing = false;
+    for (let i = 0; i < deg; i++) if (ring[base + i] === 1) inRing = true;
+    if (!inRing) continue;
+    const at = s.atoms[a];
+    if (piDouble[a] === 1) {
+      let outside = false;
+      for (let i = 0; i < deg; i++) if (oa[i] >= 2 && ring[base + i] !== 1) outside = true;
+      pi[a] = outside ? 0 : 1;
+    } else {
+      let multiple = false;
+      for (let i = 0; i < deg; i++) if (oa[i] >= 2) multiple = true;
+      if (!multiple) {
+        const z = at.atomicNumber;
+        const lonePair = (z === 7 || z === 8 || z === 15 || z === 16 || z === 34) && at.charge <= 0;
+        pi[a] = (lonePair || z === 6 && at.charge === -1) && deg + at.hCount <= 3 ? 1 : 0;
+      }
+    }
+  }
+  const piSlot = scratchSlot;
+  piSlot.fill(0, 0, slots);
+  for (let a = 0; a < n; a++) {
+    if (pi[a] !== 1) continue;
+    const o = nbr[a];
+    for (let i = 0; i < o.length; i++) if (pi[o[i]] === 1 && ring[off[a] + i] === 1) piSlot[off[a] + i] = 1;
+  }
+  ringBonds2(n, nbr, off, edge, piSlot);
+  for (let a = 0; a < n; a++) {
+    if (pi[a] !== 1 || piDouble[a] !== 1) continue;
+    let sum = 0;
+    let msum = 0;
+    let cnt = 0;
+    const o = nbr[a];
+    for (let i = 0; i < o.length; i++) {
+      if (piSlot[off[a] + i] !== 1) continue;
+      const b = o[i];
+      if (edge[off[a] + i] === 1 && piDouble[b] === 1) {
+        sum += s.atoms[b].atomicNumber;
+        msum += mass[b];
+        cnt++;
+      }
+    }
+    if (cnt > 0) {
+      dupZ[a] = sum / cnt;
+      dupMass[a] = msum / cnt;
+    }
+  }
+  return result(n, nbr, off, edge, dupZ, dupMass);
+}
+function result(n, nbr, off, edge, dupZ, dupMass) {
+  let bond = null;
+  return {
+    get bond() {
+      if (bond === null) {
+        bond = new PairSet(n);
+        for (let a = 0; a < n; a++)
+          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key(n, a, nbr[a][i]));
+      }
+      return bond;
+    },
+    edge,
+    off,
+    dupZ,
+    dupMass
+  };
+}
+function key(n, a, b) {
+  return a * n + b;
+}
+function markPair(nbr, off, out, v, w) {
+  const nv = nbr[v];
+  for (let j = 0; j < nv.length; j++) if (nv[j] === w) out[off[v] + j] = 1;
+  const nw = nbr[w];
+  for (let j = 0; j < nw.length; j++) if (nw[j] === v) out[off[w] + j] = 1;
+}
+function ringBonds2(n, nbr, off, out, use) {
+  if (scratchDisc.length < n) {
+    scratchDisc = new Int32Array(2 * n);
+    scratchLow = new Int32Array(2 * n);
+  }
+  const disc = scratchDisc;
+  const low = scratchLow;
+  disc.fill(-1, 0, n);
+  if (stackV.length < n + 1) {
+    stackV = new Int32Array(2 * n + 2);
+    stackP = new Int32Array(2 * n + 2);
+    stackI = new Int32Array(2 * n + 2);
+  }
+  const sv = stackV;
+  const sp = stackP;
+  const si = stackI;
+  let t = 0;
+  for (let r = 0; r < n; r++) {
+    if (disc[r] >= 0) continue;
+    let empty = true;
+    for (let i = 0; i < nbr[r].length; i++) if (use === null || use[off[r] + i] === 1) empty = false;
+    if (empty) continue;
+    let top = 0;
+    sv[0] = r;
+    sp[0] = -1;
+    si[0] = 0;
+    disc[r] = low[r] = t++;
+    while (top >= 0) {
+      const v = sv[top];
+      const parent = sp[top];
+      const i = si[top];
+      const nv = nbr[v];
+      if (i < nv.length) {
+        si[top]++;
+        if (use !== null && use[off[v] + i] !== 1) continue;
+        const w = nv[i];
+        if (w === parent) continue;
+        if (disc[w] < 0) {
+          disc[w] = low[w] = t++;
+          top++;
+          sv[top] = w;
+          sp[top] = v;
+          si[top] = 0;
+        } else {
+          low[v] = Math.min(low[v], disc[w]);
+          markPair(nbr, off, out, v, w);
+        }
+      } else {
+        top--;
+        if (parent >= 0) {
+          low[parent] = Math.min(low[parent], low[v]);
+          if (low[v] <= disc[parent]) markPair(nbr, off, out, v, parent);
+        }
+      }
+    }
+  }
+}
+var scratchRing, scratchSlot, scratchPi, scratchPiDouble, scratchDisc, scratchLow, stackV, stackP, stackI, PairSet;
+var init_mancude = __esm({
+  "src/chem/cip/mancude.ts"() {
+    "use strict";
+    scratchRing = new Uint8Array(256);
+    scratchSlot = new Uint8Array(256);
+    scratchPi = new Uint8Array(128);
+    scratchPiDouble = new Uint8Array(128);
+    scratchDisc = new Int32Array(128);
+    scratchLow = new Int32Array(128);
+    stackV = new Int32Array(64);
+    stackP = new Int32Array(64);
+    stackI = new Int32Array(64);
+    PairSet = class {
+      table;
+      set;
+      size = 0;
+      constructor(n) {
+        this.table = n <= 512 ? new Uint8Array(n * n) : null;
+        this.set = this.table === null ? /* @__PURE__ */ new Set() : null;
+      }
+      has(k) {
+        return this.table !== null ? this.table[k] === 1 : this.set.has(k);
+      }
+      add(k) {
+        if (this.has(k)) return;
+        this.size++;
+        if (this.table !== null) this.table[k] = 1;
+        else this.set.add(k);
+      }
+      addAll(o) {
+        if (o.table !== null) {
+          for (let k = 0; k < o.table.length; k++) if (o.table[k] === 1) this.add(k);
+        } else for (const k of o.set) this.add(k);
+      }
+    };
+  }
+});
+
+// src/chem/cip/graph.ts
+function buildGraph2(s) {
+  const n = s.atoms.length;
+  const bonds = s.bonds;
+  const deg = flatDeg.length > n ? flatDeg : flatDeg = new Array(2 * n + 2).fill(0);
+  for (let i = 0; i <= n; i++) deg[i] = 0;
+  for (let k = 0; k < bonds.length; k++) {
+    const b = bonds[k];
+    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
+    deg[b.a + 1]++;
+    deg[b.b + 1]++;
+  }
+  for (let i = 0; i < n; i++) deg[i + 1] += deg[i];
+  const total = deg[n];
+  const fn = flatNbr.length >= total ? flatNbr : flatNbr = new Array(2 * total).fill(0);
+  const fo = flatOrd.length >= total ? flatOrd : flatOrd = new Array(2 * total).fill(0);
+  for (let k = 0; k < bonds.length; k++) {
+    const b = bonds[k];
+    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
+    const i = deg[b.a]++;
+    fn[i] = b.b;
+    fo[i] = b.order;
+    const j = deg[b.b]++;
+    fn[j] = b.a;
+    fo[j] = b.order;
+  }
+  const nbr = [];
+  const ord = [];
+  for (let a = 0; a < n; a++) {
+    const from = a === 0 ? 0 : deg[a - 1];
+    nbr.push(fn.slice(from, deg[a]));
+    ord.push(fo.slice(from, deg[a]));
+  }
+  const dupOrd = ord.slice();
+  for (let a = 0; a < n; a++) {
+    if (!expandedValence(s, a, ord[a])) continue;
+    for (let i = 0; i < nbr[a].length; i++) {
+      const b = nbr[a][i];
+      if (ord[a][i] !== 2 || !CHALCOGEN_OR_N.has(s.atoms[b].atomicNumber)) continue;
+      if (dupOrd[a] === ord[a]) dupOrd[a] = ord[a].slice();
+      dupOrd[a][i] = 1;
+      const j = nbr[b].indexOf(a);
+      if (j >= 0) {
+        if (dupOrd[b] === ord[b]) dupOrd[b] = ord[b].slice();
+        dupOrd[b][j] = 1;
+      }
+    }
+  }
+  const tetraAt = new Array(n).fill(-1);
+  const bondAt = new Array(n).fill(-1);
+  const axialAt = new Array(n).fill(-1);
+  let hasBondStereo = false;
+  s.stereo.forEach((e, i) => {
+    if (e.kind === "tetrahedral") {
+      if (tetraAt[e.centre] < 0) tetraAt[e.centre] = i;
+    } else if (e.kind === "double-bond") {
+      hasBondStereo = true;
+      for (const end of e.ends) if (bondAt[end] < 0) bondAt[end] = i;
+    } else {
+      for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
+    }
+  });
+  const mass = s.atoms.map(
+    (a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)
+  );
+  const g = {
+    s,
+    n,
+    z: s.atoms.map((a) => a.atomicNumber),
+    mass,
+    hCount: s.atoms.map((a) => a.hCount),
+    nbr,
+    ord,
+    dupOrd,
+    tetraAt,
+    bondAt,
+    axialAt,
+    mancude: null,
+    hasBondStereo,
+    stereoCount: s.stereo.length,
+    ringFixed: [],
+    auxAllowed: [],
+    auxRule6: [],
+    isotopes: s.atoms.some((a) => a.isotope !== null),
+    core: twoCore(nbr),
+    workLeft: CIP_WORK_BUDGET
+  };
+  g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
+  g.auxAllowed = g.ringFixed.map((f) => !f);
+  g.auxRule6 = g.ringFixed.map(() => false);
+  g.hasBondStereo = s.stereo.some((e, i) => e.kind === "double-bond" && !g.ringFixed[i]);
+  bondAt.fill(-1);
+  s.stereo.forEach((e, i) => {
+    if (e.kind === "double-bond" && !g.ringFixed[i]) {
+      for (const end of e.ends) if (bondAt[end] < 0) bondAt[end] = i;
+    }
+  });
+  return g;
+}
+function twoCore(nbr) {
+  const n = nbr.length;
+  const core = new Uint8Array(n).fill(1);
+  const deg = Int32Array.from(nbr, (l) => l.length);
+  const stack = [];
+  for (let a = 0; a < n; a++) if (deg[a] <= 1) stack.push(a);
+  while (stack.length > 0) {
+    const a = stack.pop();
+    if (!core[a]) continue;
+    core[a] = 0;
+    for (const b of nbr[a]) if (core[b] && --deg[b] <= 1) stack.push(b);
+  }
+  return core;
+}
+function fixedByRing(g, e) {
+  if (e.kind === "tetrahedral" && invertibleNitrogen(g, e.centre, e.ligands)) return true;
+  if (e.kind === "double-bond") {
+    const [u, v] = e.ends;
+    return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
+  }
+  if (e.kind === "axial" && e.subtype === "biaryl") return ringSizeThrough(g, e.ends[0], e.ends[1], 6) > 0;
+  return false;
+}
+function expandedValence(s, a, orders) {
+  const at = s.atoms[a];
+  const z = at.atomicNumber;
+  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53)
+    return false;
+  const v = orders.reduce((x, y) => x + y, 0) + at.hCount;
+  switch (z) {
+    case 15:
+    case 33:
+      return v >= 5;
+    case 16:
+    case 34:
+    case 52:
+      return v >= 4;
+    case 17:
+    case 35:
+    case 53:
+      return v >= 3;
+    default:
+      return false;
+  }
+}
+function invertibleNitrogen(g, centre, ligands) {
+  const at = g.s.atoms[centre];
+  if (at.atomicNumber !== 7 || at.charge !== 0 || !ligands.includes(-2)) return false;
+  const nb = g.nbr[centre];
+  if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
+  if (nb.length !== 3) return true;
+  for (const x of nb) {
+    const [p, q] = nb.filter((b) => b !== x);
+    if (!connectedWithout(g, p, q, centre, x)) return true;
+  }
+  return false;
+}
+function connectedWithout(g, p, q, skip1, skip2) {
+  const seen = /* @__PURE__ */ new Set([p, skip1, skip2]);
+  const stack = [p];
+  while (stack.length > 0) {
+    const v = stack.pop();
+    for (const w of g.nbr[v]) {
+      if (w === q) return true;
+      if (seen.has(w)) continue;
+      seen.add(w);
+      stack.push(w);
+    }
+  }
+  return false;
+}
+function ringSizeThrough(g, a, b, max) {
+  if (seenBuf.length < g.n) {
+    seenBuf = new Int32Array(g.n * 2);
+    queueBuf = new Int32Array(g.n * 2);
+    stamp = 0;
+  }
+  const mark = ++stamp;
+  const seen = seenBuf;
+  const queue = queueBuf;
+  seen[a] = mark;
+  queue[0] = a;
+  let lo = 0;
+  let hi = 1;
+  for (let d = 0; lo < hi && d < max - 1; d++) {
+    let end = hi;
+    for (let q = lo; q < hi; q++) {
+      const x = queue[q];
+      const nx = g.nbr[x];
+      for (let i = 0; i < nx.length; i++) {
+        const y = nx[i];
+        if (x === a && y === b) continue;
+        if (y === b) return d + 2;
+        if (seen[y] === mark) continue;
+        seen[y] = mark;
+        queue[end++] = y;
+      }
+    }
+    lo = hi;
+    hi = end;
+  }
+  return 0;
+}
+function mancudeOf(g) {
+  if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
+  return g.mancude;
+}
+var CIP_WORK_BUDGET, CHALCOGEN_OR_N, flatDeg, flatNbr, flatOrd, seenBuf, queueBuf, stamp;
+var init_graph2 = __esm({
+  "src/chem/cip/graph.ts"() {
+    "use strict";
+    init_masses();
+    init_mancude();
+    CIP_WORK_BUDGET = 3e6;
+    CHALCOGEN_OR_N = /* @__PURE__ */ new Set([7, 8, 16, 34, 52]);
+    flatDeg = new Array(256).fill(0);
+    flatNbr = new Array(512).fill(0);
+    flatOrd = new Array(512).fill(0);
+    seenBuf = new Int32Array(256);
+    queueBuf = new Int32Array(256);
+    stamp = 0;
+  }
+});
+
+// src/chem/cip/digraph.ts
+var H_ATOM, PHANTOM, NODE_BUDGET, NO_KIDS, scratch, CipNode, Digraph;
+var init_digraph = __esm({
+  "src/chem/cip/digraph.ts"() {
+    "use strict";
+    init_graph2();
+    H_ATOM = -1;
+    PHANTOM = -2;
+    NODE_BUDGET = 2e5;
+    NO_KIDS = [];
+    scratch = [];
+    CipNode = class {
+      constructor(id, atom, z, mancudeDup, depth, dist, dup, parent) {
+        this.id = id;
+        this.atom = atom;
+        this.z = z;
+        this.mancudeDup = mancudeDup;
+        this.depth = depth;
+        this.dist = dist;
+        this.dup = dup;
+        this.parent = parent;
+      }
+      id;
+      atom;
+      z;
+      mancudeDup;
+      depth;
+      dist;
+      dup;
+      parent;
+      kids = null;
+      /** Sorted branch lists per (came-from, rule level); see compare.ts. */
+      sorted = null;
+      /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode); see down0. */
+      down = null;
+      /** The same for Rule 1a, the level nearly every comparison ends at (kept apart: no array by level for it). */
+      down0 = null;
+      /** Auxiliary descriptor: undefined = not yet computed, null = none. */
+      aux = void 0;
+      auxBusy = false;
+    };
+    Digraph = class {
+      constructor(g, rootAtom, rootElement) {
+        this.g = g;
+        this.rootElement = rootElement;
+        this.root = this.make(rootAtom, 0, 0, false, null);
+      }
+      g;
+      root;
+      nextId = 0;
+      count = 0;
+      /** The node budget ran out: comparisons may be wrong, so the unit gets no descriptor (label.ts). */
+      truncated = false;
+      /** Index into s.stereo of the unit being labelled: its own nodes carry no auxiliary descriptor. */
+      rootElement;
+      /** Proposed Rule 6 reference atom (Hanson et al. 2018), or -1 when unset. */
+      rule6Ref = -1;
+      make(atom, depth, dist, dup, parent, z = -1) {
+        this.count++;
+        const g = this.g;
+        g.workLeft--;
+        if (z >= 0 && parent !== null) {
+          return new CipNode(this.nextId++, atom, z, true, depth, dist, true, parent);
+        }
+        if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, false, depth, dist, false, parent);
+        if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, false, depth, dist, false, parent);
+        return new CipNode(this.nextId++, atom, g.z[atom], false, depth, dist, dup, parent);
+      }
+      /**
+       * The Rule 2 mass of a node: a duplicate carries the mass of the atom it duplicates (a mancude one the mean
+       * mass of the atoms its atom could be double-bonded to, as for its atomic number); hydrogen 1.008, a phantom 0.
+       */
+      massOf(n) {
+        if (n.mancudeDup) return mancudeOf(this.g).dupMass[n.parent.atom];
+        if (n.atom === H_ATOM) return 1.008;
+        if (n.atom === PHANTOM) return 0;
+        return this.g.mass[n.atom];
+      }
+      /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */
+      phantom(parent) {
+        return this.make(PHANTOM, parent.depth + 1, parent.depth + 1, false, parent);
+      }
+      /** Children of `node` in the root's digraph, made on first use (P-92.1.4.2 duplicates included). */
+      kids(node) {
+        if (node.kids) return node.kids;
+        if (node.dup || node.atom < 0) return node.kids = NO_KIDS;
+        if (this.count > NODE_BUDGET || this.g.workLeft <= 0) {
+          this.truncated = true;
+          return node.kids = NO_KIDS;
+        }
+        const out = scratch;
+        let cnt = 0;
+        const g = this.g;
+        const a = node.atom;
+        const parent = node.parent;
+        const d = node.depth + 1;
+        const nb = g.nbr[a];
+        const od = g.dupOrd[a];
+        for (let i = 0; i < nb.length; i++) {
+          const b = nb[i];
+          const order = od[i];
+          let mz = -1;
+          if (order === 2) {
+            const m = mancudeOf(g);
+            if (m.edge[m.off[a] + i] === 1) mz = m.dupZ[a];
+          }
+          if (parent !== null && b === parent.atom) {
+            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, parent.depth, true, node);
+            continue;
+          }
+          let anc = g.core[a] && g.core[b] ? parent : null;
+          while (anc !== null && anc.atom !== b) anc = anc.parent;
+          if (anc !== null) {
+            out[cnt++] = this.make(b, d, anc.depth, true, node);
+            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, anc.depth, true, node);
+          } else {
+            out[cnt++] = this.make(b, d, d, false, node);
+            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
+            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, d, true, node);
+          }
+        }
+        for (let h = 0; h < g.hCount[a]; h++) out[cnt++] = this.make(H_ATOM, d, d, false, node);
+        const kids = out.slice(0, cnt);
+        for (let j = 0; j < cnt; j++) out[j] = null;
+        node.kids = kids;
+        return kids;
+      }
+      /** Branches of `node` when it is entered from `from` (null: `node` is the root of the traversal). */
+      branches(node, from) {
+        const kids = this.kids(node);
+        if (from !== null && from === node.parent) return kids;
+        const up = node.parent !== null && node.parent !== from;
+        let size = up ? 1 : 0;
+        for (let i = 0; i < kids.length; i++) if (kids[i] !== from) size++;
+        const out = new Array(size);
+        let k = 0;
+        if (up) out[k++] = node.parent;
+        for (let i = 0; i < kids.length; i++) if (kids[i] !== from) out[k++] = kids[i];
+        return out;
+      }
+    };
+  }
+});
+
+// src/chem/cip/rules.ts
+function rule1a(n) {
+  return n.z;
+}
+function rule1b(n) {
+  return -n.dist;
+}
+function rule2(mass) {
+  return mass;
+}
+function rule3(label) {
+  return label === "Z" ? 2 : label === "E" ? 1 : 0;
+}
+function rule4a(label) {
+  if (label === null) return 0;
+  return label === "R" || label === "S" || label === "M" || label === "P" ? 2 : 1;
+}
+function rule4c(label) {
+  return label === "r" || label === "m" ? 2 : label === "s" || label === "p" ? 1 : 0;
+}
+function rule5(label) {
+  return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
+}
+function rule6(n, ref) {
+  return n.atom === ref ? 1 : 0;
+}
+function likeClass(label) {
+  return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
+}
+function isChiralLabel(label) {
+  return label === "R" || label === "S" || label === "M" || label === "P";
+}
+var RULE_4A, RULE_5, RULE_6;
+var init_rules = __esm({
+  "src/chem/cip/rules.ts"() {
+    "use strict";
+    RULE_4A = 4;
+    RULE_5 = 7;
+    RULE_6 = 8;
+  }
+});
+
+// src/chem/cip/rule4b.ts
+function keyCompare(a, b) {
+  const m = Math.min(a.length, b.length);
+  for (let i = 0; i < m; i++) if (a[i] !== b[i]) return a[i] - b[i];
+  return a.length - b.length;
+}
+function descriptors(rk, x, fx) {
+  const out = [];
+  const q = [x];
+  const qf = [fx];
+  const qParent = [-1];
+  const qPos = [0];
+  const qDepth = [0];
+  for (let i = 0; i < q.length; i++) {
+    if (--rk.dg.g.workLeft <= 0) {
+      rk.dg.truncated = true;
+      break;
+    }
+    const n = q[i];
+    if (!n.dup && n.atom >= 0 && rk.value(RULE_4A2, n) === 2) {
+      const l = rk.aux(n);
+      if (l !== null && isChiralLabel2(l)) {
+        const len = qDepth[i];
+        const key3 = new Array(len + 1);
+        key3[0] = len;
+        for (let k = i, at = len; at >= 1; k = qParent[k], at--) key3[at] = qPos[k];
+        out.push({ label: l, key: key3, group: 0 });
+      }
+    }
+    const s = rk.sorted(n, qf[i], RULE_4A2);
+    let pos = 0;
+    for (let j = 0; j < s.nodes.length; j++) {
+      if (!s.tie[j]) pos = j;
+      q.push(s.nodes[j]);
+      qf.push(n);
+      qParent.push(i);
+      qPos.push(pos);
+      qDepth.push(qDepth[i] + 1);
+    }
+  }
+  out.sort((a, b) => keyCompare(a.key, b.key));
+  let g = 0;
+  for (let i = 0; i < out.length; i++) {
+    if (i > 0 && keyCompare(out[i - 1].key, out[i].key) !== 0) g++;
+    out[i].group = g;
+  }
+  return out;
+}
+function allLeaves(nodes, a, b) {
+  for (let k = a; k < b; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
+  return true;
+}
+function own(rk, n, refClass) {
+  const l = chiralLabel(rk, n);
+  return l === null ? 0 : likeClass2(l) === refClass ? 2 : 1;
+}
+function chiralLabel(rk, n) {
+  if (n.dup || n.atom < 0 || rk.value(RULE_4A2, n) !== 2) return null;
+  const l = rk.aux(n);
+  return l !== null && isChiralLabel2(l) ? l : null;
+}
+function orderedPairs(rk, x, fx, refClass, memo) {
+  const hit = memo.get(x);
+  if (hit) return hit;
+  const seq = [];
+  const q = [x];
+  const qf = [fx];
+  for (let i = 0; i < q.length; i++) {
+    const n = q[i];
+    const l = chiralLabel(rk, n);
+    if (l !== null) seq.push(likeClass2(l) === refClass ? 1 : 0);
+    const s = rk.sorted(n, qf[i], RULE_4A2);
+    const nodes = s.nodes.slice();
+    for (let a = 0; a < nodes.length; ) {
+      let b = a + 1;
+      while (b < nodes.length && s.tie[b]) b++;
+      if (b - a > 1 && !allLeaves(nodes, a, b)) {
+        const run11 = nodes.slice(a, b);
+        run11.sort(
+          (u, v) => own(rk, v, refClass) - own(rk, u, refClass) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo))
+        );
+        for (let k = a; k < b; k++) nodes[k] = run11[k - a];
+      }
+      a = b;
+    }
+    for (const c of nodes) {
+      q.push(c);
+      qf.push(n);
+    }
+  }
+  memo.set(x, seq);
+  return seq;
+}
+function lexCompare(a, b) {
+  const m = Math.min(a.length, b.length);
+  for (let i = 0; i < m; i++) if (a[i] !== b[i]) return a[i] - b[i];
+  return a.length - b.length;
+}
+function bestPairs(rk, x, fx) {
+  const entries = descriptors(rk, x, fx);
+  if (entries.length === 0) return [];
+  const first = entries[0].group;
+  const classes = /* @__PURE__ */ new Set();
+  for (const e of entries) {
+    if (e.group !== first) break;
+    classes.add(likeClass2(e.label));
+  }
+  let best = null;
+  for (const cls of classes) {
+    const seq = orderedPairs(rk, x, fx, cls, /* @__PURE__ */ new Map());
+    if (best === null || lexCompare(seq, best) > 0) best = seq;
+  }
+  return best ?? [];
+}
+function compareRule4b(rk, x, fx, y, fy) {
+  const c = lexCompare(bestPairs(rk, x, fx), bestPairs(rk, y, fy));
+  return c > 0 ? 1 : c < 0 ? -1 : 0;
+}
+var RULE_4A2, isChiralLabel2, likeClass2;
+var init_rule4b = __esm({
+  "src/chem/cip/rule4b.ts"() {
+    "use strict";
+    init_rules();
+    RULE_4A2 = RULE_4A;
+    isChiralLabel2 = isChiralLabel;
+    likeClass2 = likeClass;
+  }
+});
+
+// src/chem/cip/compare.ts
+function takeQueue(x, fx, y, fy) {
+  const d = poolDepth++;
+  let q = pool[d];
+  if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
+  q.x[0] = x;
+  q.fx[0] = fx;
+  q.y[0] = y;
+  q.fy[0] = fy;
+  return q;
+}
+function pushPairs(q, len, sx, nx, sy, ny, m) {
+  for (let j = 0; j < m; j++) {
+    const a = sx[j];
+    const b = sy[j];
+    if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
+    q.x[len] = a;
+    q.fx[len] = nx;
+    q.y[len] = b;
+    q.fy[len] = ny;
+    len++;
+  }
+  return len;
+}
+function releaseQueue(q, len) {
+  poolDepth--;
+  clearQueue(q, len);
+}
+function clearQueue(q, len) {
+  for (let i = 0; i < len; i++) {
+    q.x[i] = NO_NODE;
+    q.fx[i] = null;
+    q.y[i] = NO_NODE;
+    q.fy[i] = null;
+  }
+}
+function anyTrue(t) {
+  for (let i = 0; i < t.length; i++) if (t[i]) return true;
+  return false;
+}
+function allLeaves2(nodes, i, j) {
+  for (let k = i; k < j; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
+  return true;
+}
+function invertChiral(l) {
+  if (l === "e") return "z";
+  if (l === "z") return "e";
+  return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
+}
+var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A3, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, pool, poolDepth, Ranker, NO_NODE, NO_TIES, EMPTY2, LEVELS;
+var init_compare = __esm({
+  "src/chem/cip/compare.ts"() {
+    "use strict";
+    init_digraph();
+    init_rules();
+    init_rule4b();
+    RULE_1A = 0;
+    RULE_1B = 1;
+    RULE_2 = 2;
+    RULE_3 = 3;
+    RULE_4A3 = 4;
+    RULE_4B = 5;
+    RULE_4C = 6;
+    RULE_52 = 7;
+    RULE_62 = 8;
+    rule1a2 = rule1a;
+    rule1b2 = rule1b;
+    rule22 = rule2;
+    rule32 = rule3;
+    rule4a2 = rule4a;
+    rule4c2 = rule4c;
+    rule52 = rule5;
+    rule62 = rule6;
+    pool = [];
+    poolDepth = 0;
+    Ranker = class {
+      constructor(dg, auxOf) {
+        this.dg = dg;
+        this.auxOf = auxOf;
+        this.scope = dg.root;
+        const g = dg.g;
+        const several = g.stereoCount > 1;
+        this.active = [
+          true,
+          true,
+          g.isotopes,
+          g.hasBondStereo && several,
+          several,
+          several,
+          several,
+          several,
+          false
+        ];
+      }
+      dg;
+      auxOf;
+      /** Rules that cannot separate anything in this structure are skipped (saves exploring tied branches). */
+      active;
+      /**
+       * The node whose descriptor is being found (the root at top level). Following Hanson et al. 2018, descriptors
+       * are assigned from the outermost nodes inward: while ranking at `scope`, only the descriptors of nodes
+       * farther out on the same branch (its descendants in the root's digraph) are known; any other node counts as
+       * non-stereogenic. This makes every auxiliary descriptor independent of the order of computation.
+       */
+      scope;
+      /**
+       * Mirror mode: compare as in the mirror image, where every chiral descriptor is inverted (R/S, M/P) and the
+       * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
+       */
+      mirror = false;
+      /** Is `n` the scope node or farther out on its branch? */
+      inScope(n) {
+        const sc = this.scope;
+        if (sc === this.dg.root) return true;
+        let x = n;
+        while (x !== null && x.depth > sc.depth) x = x.parent;
+        return x === sc;
+      }
+      /** The auxiliary descriptor of `n` as seen from the current scope. */
+      aux(n) {
+        return this.inScope(n) ? this.auxOf(n) : null;
+      }
+      /** Run `f` with `node` as the scope (while finding the auxiliary descriptor of `node`). */
+      within(node, f) {
+        const saved = this.scope;
+        const savedMirror = this.mirror;
+        this.scope = node;
+        this.mirror = false;
+        try {
+          return f();
+        } finally {
+          this.scope = saved;
+          this.mirror = savedMirror;
+        }
+      }
+      setRule6(ref) {
+        this.dg.rule6Ref = ref;
+        this.active[RULE_62] = ref >= 0;
+      }
+      value(rule4, n) {
+        switch (rule4) {
+          case RULE_1A:
+            return rule1a2(n);
+          case RULE_1B:
+            return rule1b2(n);
+          case RULE_2:
+            return rule22(this.dg.massOf(n));
+          case RULE_3:
+            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule32(this.aux(n));
+          case RULE_4A3:
+            return this.stereoValue(n, rule4a2);
+          case RULE_4C:
+            return this.stereoValue(n, rule4c2);
+          case RULE_52:
+            return this.stereoValue(n, this.mirror ? (l) => rule52(invertChiral(l)) : rule52);
+          case RULE_62:
+            return rule62(n, this.dg.rule6Ref);
+          default:
+            return 0;
+        }
+      }
+      stereoValue(n, f) {
+        if (n.dup || n.atom < 0) return 0;
+        const g = this.dg.g;
+        if (g.tetraAt[n.atom] < 0 && g.bondAt[n.atom] < 0 && g.axialAt[n.atom] < 0) return 0;
+        return f(this.aux(n));
+      }
+      /**
+       * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
+       * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
+       */
+      compareRule(rule4, x, fx, y, fy) {
+        if (y === null) return 1;
+        if (rule4 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
+        let c = this.value(rule4, x) - this.value(rule4, y);
+        if (c !== 0) return c > 0 ? 1 : -1;
+        if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
+        if (rule4 === RULE_1A) return this.compare1a(x, fx, y, fy);
+        const q = takeQueue(x, fx, y, fy);
+        const qx = q.x;
+        const qfx = q.fx;
+        const qy = q.y;
+        const qfy = q.fy;
+        let len = 1;
+        try {
+          const dg = this.dg;
+          for (let i = 0; i < len; i++) {
+            if (--dg.g.workLeft <= 0) {
+              dg.truncated = true;
+              return 0;
+            }
+            const nx = qx[i];
+            const ny = qy[i];
+            const sx = this.sorted(nx, qfx[i], rule4).nodes;
+            const sy = this.sorted(ny, qfy[i], rule4).nodes;
+            const m = sx.length < sy.length ? sx.length : sy.length;
+            for (let j = 0; j < m; j++) {
+              c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
+              if (c !== 0) return c > 0 ? 1 : -1;
+            }
+            len = pushPairs(q, len, sx, nx, sy, ny, m);
+          }
+        } finally {
+          releaseQueue(q, len);
+        }
+        return 0;
+      }
+      /**
+       * compareRule under Rule 1a, one sphere at a time: first the atomic numbers of every set of the sphere, read
+       * from lists ordered by atomic number alone (the full order only permutes runs of equal atomic number, so the
+       * numbers read are the same); only when the whole sphere ties are the lists fully ordered, since that order
+       * pairs the nodes of the next sphere. The same sets are compared in the same order as node by node, and the
+       * deep ordering of runs of equal atomic number is skipped at the sphere that decides.
+       */
+      compare1a(x, fx, y, fy) {
+        const q = takeQueue(x, fx, y, fy);
+        const qx = q.x;
+        const qfx = q.fx;
+        const qy = q.y;
+        const qfy = q.fy;
+        let len = 1;
+        let lo = 0;
+        try {
+          const dg = this.dg;
+          while (lo < len) {
+            const hi = len;
+            dg.g.workLeft -= hi - lo;
+            if (dg.g.workLeft <= 0) {
+              dg.truncated = true;
+              return 0;
+            }
+            for (let i = lo; i < hi; i++) {
+              const sx = this.sorted0(qx[i], qfx[i]).nodes;
+              const sy = this.sorted0(qy[i], qfy[i]).nodes;
+              const m = sx.length < sy.length ? sx.length : sy.length;
+              for (let j = 0; j < m; j++) {
+                const c = sx[j].z - sy[j].z;
+                if (c !== 0) return c > 0 ? 1 : -1;
+              }
+              if (sx.length !== sy.length) {
+                const longer = sx.length > sy.length ? sx : sy;
+                for (let j = m; j < longer.length; j++) if (longer[j].z > 0) return longer === sx ? 1 : -1;
+              }
+            }
+            for (let i = lo; i < hi; i++) {
+              const nx = qx[i];
+              const ny = qy[i];
+              const sx = this.sorted(nx, qfx[i], RULE_1A).nodes;
+              const sy = this.sorted(ny, qfy[i], RULE_1A).nodes;
+              const m = sx.length < sy.length ? sx.length : sy.length;
+              len = pushPairs(q, len, sx, nx, sy, ny, m);
+            }
+            lo = hi;
+          }
+        } finally {
+          releaseQueue(q, len);
+        }
+        return 0;
+      }
+      /** Compare under every active rule up to `level`: ±(rule index + 1) for the deciding rule, 0 for a tie. */
+      compareUpTo(level2, x, fx, y, fy) {
+        for (let r = 0; r <= level2; r++) {
+          if (!this.active[r]) continue;
+          const c = this.compareRule(r, x, fx, y, fy);
+          if (c !== 0) return c > 0 ? r + 1 : -(r + 1);
+        }
+        return 0;
+      }
+      /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
+      sorted(node, from, level2) {
+        if (level2 === RULE_1A) {
+          const s0 = this.sorted0(node, from);
+          if (s0.pending) this.finish0(s0, node);
+          return s0;
+        }
+        if (node.dup || node.atom < 0) return EMPTY2;
+        const plain = from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level2 < RULE_3 || this.inScope(node));
+        if (plain) {
+          if (node.down === null) node.down = new Array(LEVELS);
+          const hit2 = node.down[level2];
+          if (hit2 !== void 0) return hit2;
+          const out2 = this.sortAt(node, from, level2);
+          node.down[level2] = out2;
+          return out2;
+        }
+        const hidden = level2 >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
+        const mirrored2 = this.mirror && level2 >= RULE_52 ? 2 : 0;
+        const num2 = ((from === null ? 0 : from.id + 1) * 16 + level2) * 4 + hidden + mirrored2;
+        const key3 = level2 >= RULE_62 ? `${num2}:${this.dg.rule6Ref}` : num2;
+        if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
+        const hit = node.sorted.get(key3);
+        if (hit) return hit;
+        const out = this.sortAt(node, from, level2);
+        node.sorted.set(key3, out);
+        return out;
+      }
+      /**
+       * The Rule 1a list of the branches of `node` entered from `from`, cached as sorted() caches it, but possibly
+       * still pending (ordered by atomic number alone).
+       */
+      sorted0(node, from) {
+        if (node.dup || node.atom < 0) return EMPTY2;
+        if (from === node.parent && !this.mirror && this.dg.rule6Ref < 0) {
+          const hit2 = node.down0;
+          if (hit2 !== null) return hit2;
+          const out2 = this.byAtomicNumber(node, from);
+          node.down0 = out2;
+          return out2;
+        }
+        const key3 = (from === null ? 0 : from.id + 1) * 64;
+        if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
+        const hit = node.sorted.get(key3);
+        if (hit) return hit;
+        const out = this.byAtomicNumber(node, from);
+        node.sorted.set(key3, out);
+        return out;
+      }
+      /** The branches by atomic number, highest first (stable): a pending Rule 1a list. */
+      byAtomicNumber(node, from) {
+        const br = this.dg.branches(node, from);
+        const nodes = br === node.kids ? br.slice() : br;
+        for (let i = 1; i < nodes.length; i++) {
+          const v = nodes[i];
+          let j = i - 1;
+          while (j >= 0 && nodes[j].z < v.z) {
+            nodes[j + 1] = nodes[j];
+            j--;
+          }
+          nodes[j + 1] = v;
+        }
+        return { nodes, tie: NO_TIES, pending: true };
+      }
+      /** Order the runs of equal atomic number of a pending Rule 1a list by their whole branches, in place. */
+      finish0(out, node) {
+        const nodes = out.nodes;
+        out.tie = new Array(nodes.length).fill(false);
+        for (let i = 0; i < nodes.length; ) {
+          let j = i + 1;
+          while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
+          if (j - i > 1) {
+            if (allLeaves2(nodes, i, j)) for (let x = i + 1; x < j; x++) out.tie[x] = true;
+            else this.sortRun(nodes, i, j, node, RULE_1A, out);
+          }
+          i = j;
+        }
+        out.pending = false;
+      }
+      sortAt(node, from, level2) {
+        const base = this.sorted(node, from, level2 - 1);
+        if (!this.active[level2] || !anyTrue(base.tie)) return base;
+        const out = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
+        for (let i = 0; i < out.nodes.length; ) {
+          let j = i + 1;
+          while (j < out.nodes.length && base.tie[j]) j++;
+          if (j - i > 1) this.sortRun(out.nodes, i, j, node, level2, out);
+          i = j;
+        }
+        return out;
+      }
+      /**
+       * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
+       * first, writing them and their ties into `out` at the same places.
+       */
+      sortRun(nodes, i, j, centre, rule4, out) {
+        if (j - i === 2) {
+          const a = nodes[i];
+          const b = nodes[i + 1];
+          const c = this.compareRule(rule4, a, centre, b, centre);
+          out.nodes[i] = c < 0 ? b : a;
+          out.nodes[i + 1] = c < 0 ? a : b;
+          out.tie[i] = false;
+          out.tie[i + 1] = c === 0;
+          return out;
+        }
+        const run11 = nodes.slice(i, j);
+        const k = run11.length;
+        const m = new Array(k * k).fill(0);
+        for (let a = 0; a < k; a++) {
+          for (let b = a + 1; b < k; b++) {
+            const c = this.compareRule(rule4, run11[a], centre, run11[b], centre);
+            m[a * k + b] = c;
+            m[b * k + a] = -c;
+          }
+        }
+        const order = run11.map((_, x) => x);
+        for (let x = 1; x < k; x++) {
+          const v = order[x];
+          let y = x - 1;
+          while (y >= 0 && m[order[y] * k + v] < 0) {
+            order[y + 1] = order[y];
+            y--;
+          }
+          order[y + 1] = v;
+        }
+        for (let x = 0; x < k; x++) {
+          out.nodes[i + x] = run11[order[x]];
+          out.tie[i + x] = x > 0 && m[order[x - 1] * k + order[x]] === 0;
+        }
+        return out;
+      }
+    };
+    NO_NODE = new CipNode(-1, -2, 0, false, 0, 0, false, null);
+    NO_TIES = [];
+    EMPTY2 = { nodes: [], tie: [], pending: false };
+    LEVELS = 9;
+  }
+});
+
+// src/chem/cip/rank.ts
+function orderBy(m, k) {
+  const order = new Array(k);
+  for (let i = 0; i < k; i++) order[i] = i;
+  for (let i = 1; i < k; i++) {
+    const v = order[i];
+    let j = i - 1;
+    while (j >= 0 && m[order[j] * k + v] < 0) {
+      order[j + 1] = order[j];
+      j--;
+    }
+    order[j + 1] = v;
+  }
+  return order;
+}
+function rankLigands(rk, centre, ligands, level2) {
+  const k = ligands.length;
+  const m = new Array(k * k).fill(0);
+  let late = false;
+  for (let i = 0; i < k; i++) {
+    for (let j = i + 1; j < k; j++) {
+      const c = rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
+      m[i * k + j] = c;
+      m[j * k + i] = -c;
+      if (Math.abs(c) - 1 >= RULE_5) late = true;
+    }
+  }
+  const order = orderBy(m, k);
+  const tieWithPrev = new Array(k);
+  let tied = false;
+  for (let i = 0; i < k; i++) {
+    const t = i > 0 && m[order[i - 1] * k + order[i]] === 0;
+    tieWithPrev[i] = t;
+    if (t) tied = true;
+  }
+  let pseudo = false;
+  if (!tied && late) {
+    const mm = new Array(k * k).fill(0);
+    const saved = rk.mirror;
+    rk.mirror = true;
+    try {
+      for (let i = 0; i < k; i++) {
+        for (let j = i + 1; j < k; j++) {
+          const c0 = m[i * k + j];
+          const c = Math.abs(c0) - 1 < RULE_5 ? c0 : rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
+          mm[i * k + j] = c;
+          mm[j * k + i] = -c;
+        }
+      }
+    } finally {
+      rk.mirror = saved;
+    }
+    const mirror2 = orderBy(mm, k);
+    const pos = new Array(k);
+    for (let p = 0; p < k; p++) pos[order[p]] = p;
+    const perm = new Array(k);
+    for (let p = 0; p < k; p++) perm[p] = pos[mirror2[p]];
+    pseudo = !isEvenPermutation(perm);
+  }
+  return { order, tied, pseudo, tieWithPrev };
+}
+function isEvenPermutation(p) {
+  const seen = p.map(() => false);
+  let swaps = 0;
+  for (let i = 0; i < p.length; i++) {
+    if (seen[i]) continue;
+    let j = i;
+    let len = 0;
+    while (!seen[j]) {
+      seen[j] = true;
+      j = p[j];
+      len++;
+    }
+    swaps += len - 1;
+  }
+  return swaps % 2 === 0;
+}
+function handedness(winding, rankOf) {
+  const byRank = [0, 0, 0, 0];
+  rankOf.forEach((r, i) => byRank[r] = i);
+  const target = [byRank[3], byRank[0], byRank[1], byRank[2]];
+  const same = isEvenPermutation(target);
+  const w = same ? winding : winding === "@" ? "@@" : "@";
+  return w === "@" ? "R" : "S";
+}
+var init_rank = __esm({
+  "src/chem/cip/rank.ts"() {
+    "use strict";
+    init_rules();
+  }
+});
+
+// src/chem/cip/aux.ts
+function ligandBranch(dg, centre, lig, used) {
+  const br = dg.branches(centre, null);
+  if (lig === LONE_PAIR) return dg.phantom(centre);
+  if (lig === IMPLICIT_H) {
+    for (const b of br) if (b.atom === H_ATOM && !used.includes(b)) return b;
+    return null;
+  }
+  for (const b of br) if (b.atom === lig && !b.dup && !used.includes(b)) return b;
+  for (const b of br) if (b.atom === lig && !used.includes(b)) return b;
+  return null;
+}
+function ligandBranches(rk, centre, e) {
+  const ligs = [];
+  for (const l of e.ligands) {
+    const b = ligandBranch(rk.dg, centre, l, ligs);
+    if (b === null) return null;
+    ligs.push(b);
+  }
+  return ligs;
+}
+function tetrahedralLabel(rk, centre, e, level2 = RULE_5) {
+  const ligs = ligandBranches(rk, centre, e);
+  if (ligs === null) return null;
+  const r = rankLigands(rk, centre, ligs, level2);
+  if (r.tied) return null;
+  const rankOf = [0, 0, 0, 0];
+  r.order.forEach((li, pos) => rankOf[li] = pos);
+  const h = handedness(e.winding, rankOf);
+  return r.pseudo ? h === "R" ? "r" : "s" : h;
+}
+function tetrahedralRule6(rk, centre, e) {
+  const ligs = ligandBranches(rk, centre, e);
+  if (ligs === null) return null;
+  const r = rankLigands(rk, centre, ligs, RULE_5);
+  const found = /* @__PURE__ */ new Set();
+  const savedRef = rk.dg.rule6Ref;
+  try {
+    for (let i = 1; i < r.order.length; i++) {
+      if (!r.tieWithPrev[i]) continue;
+      for (const k of [r.order[i - 1], r.order[i]]) {
+        if (ligs[k].atom < 0) continue;
+        rk.setRule6(ligs[k].atom);
+        const l = tetrahedralLabel(rk, centre, e, RULE_6);
+        if (l !== null) found.add(l);
+      }
+    }
+  } finally {
+    rk.setRule6(savedRef);
+  }
+  return found.size === 1 ? [...found][0] : null;
+}
+function endBranches(dg, end, from, other) {
+  return dg.branches(end, from).filter((b) => b.atom !== other);
+}
+function endRank(rk, end, cands, ref, level2 = RULE_5) {
+  if (cands.length === 0) return null;
+  let top = cands[0];
+  let rule53 = false;
+  if (cands.length >= 2) {
+    const c = rk.compareUpTo(level2, cands[0], end, cands[1], end);
+    if (c === 0) return null;
+    top = c > 0 ? cands[0] : cands[1];
+    rule53 = Math.abs(c) - 1 === RULE_5;
+  }
+  const refHigh = ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
+  return { refHigh, rule5: rule53 };
+}
+function ezLabel(e, end0, end1) {
+  const cis = e.relation === "cis" ? end0.refHigh === end1.refHigh : end0.refHigh !== end1.refHigh;
+  const lower = end0.rule5 !== end1.rule5;
+  return cis ? lower ? "z" : "Z" : lower ? "e" : "E";
+}
+function doubleBondLabel(rk, node, e) {
+  const dg = rk.dg;
+  const i = e.ends[0] === node.atom ? 0 : 1;
+  const other = e.ends[1 - i];
+  let partner = null;
+  if (node.parent !== null && node.parent.atom === other && !node.parent.dup) partner = node.parent;
+  else for (const k of dg.kids(node)) if (k.atom === other && !k.dup) partner = k;
+  if (partner === null) return null;
+  const here = endRank(rk, node, endBranches(dg, node, null, other), e.refs[i]);
+  if (here === null) return null;
+  const there = endRank(rk, partner, endBranches(dg, partner, null, node.atom), e.refs[1 - i]);
+  if (there === null) return null;
+  const label = i === 0 ? ezLabel(e, here, there) : ezLabel(e, there, here);
+  if (partner.aux === void 0) partner.aux = label;
+  return label;
+}
+function axialLabel(rks, ends, e, level2 = RULE_5) {
+  const rankOf = [0, 0, 0, 0];
+  let pseudo = false;
+  for (let i = 0; i < 2; i++) {
+    const rk = rks[i];
+    const end = ends[i];
+    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], NONE2);
+    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], a !== null ? [a] : NONE2);
+    if (a === null || b === null) return null;
+    const r = rankLigands(rk, end, [a, b], level2);
+    if (r.tied) return null;
+    pseudo = pseudo !== r.pseudo;
+    rankOf[2 * i + r.order[0]] = 2 * i;
+    rankOf[2 * i + r.order[1]] = 2 * i + 1;
+  }
+  const h = handedness(e.winding, rankOf);
+  const label = h === "R" ? "M" : "P";
+  return pseudo ? label === "M" ? "m" : "p" : label;
+}
+function farEnd(dg, node, other) {
+  const g = dg.g;
+  let frontier = [node];
+  const seen = /* @__PURE__ */ new Set([node]);
+  for (let step = 0; step < 8 && frontier.length > 0; step++) {
+    const next = [];
+    for (const x of frontier) {
+      if (x !== node && x.atom !== other && g.nbr[x.atom].length !== 2) continue;
+      const around = [...dg.kids(x), ...x.parent ? [x.parent] : []];
+      for (const y of around) {
+        if (y.dup || y.atom < 0 || seen.has(y)) continue;
+        if (y.atom === other) return y;
+        seen.add(y);
+        if (g.nbr[y.atom].length === 2 && g.dupOrd[y.atom].every((o) => o === 2)) next.push(y);
+      }
+    }
+    frontier = next;
+  }
+  return null;
+}
+function axialAux(rk, node, e) {
+  const i = e.ends[0] === node.atom ? 0 : 1;
+  const far = farEnd(rk.dg, node, e.ends[1 - i]);
+  if (far === null) return null;
+  const ends = i === 0 ? [node, far] : [far, node];
+  const label = axialLabel([rk, rk], ends, e);
+  if (far.aux === void 0) far.aux = label;
+  return label;
+}
+function auxFor(dg) {
+  return (rk) => (node) => {
+    if (node.aux !== void 0) return node.aux;
+    if (node.auxBusy || node === dg.root || node.dup || node.atom < 0) return null;
+    const g = dg.g;
+    node.auxBusy = true;
+    let label = null;
+    const t = g.tetraAt[node.atom];
+    const b = g.bondAt[node.atom];
+    const x = g.axialAt[node.atom];
+    if (t >= 0 && t !== dg.rootElement && g.auxAllowed[t]) {
+      const e = g.s.stereo[t];
+      label = rk.within(node, () => tetrahedralLabel(rk, node, e));
+      if (label === null && g.auxRule6[t]) label = rk.within(node, () => tetrahedralRule6(rk, node, e));
+    } else if (b >= 0 && b !== dg.rootElement && g.auxAllowed[b]) {
+      label = rk.within(node, () => doubleBondLabel(rk, node, g.s.stereo[b]));
+    } else if (x >= 0 && x !== dg.rootElement && g.auxAllowed[x]) {
+      label = rk.within(node, () => axialAux(rk, node, g.s.stereo[x]));
+    }
+    node.auxBusy = false;
+    node.aux = label;
+    return label;
+  };
+}
+function newRanker(dg) {
+  const rk = new Ranker(dg, (n) => aux(n));
+  const aux = auxFor(dg)(rk);
+  return rk;
+}
+var NONE2;
+var init_aux = __esm({
+  "src/chem/cip/aux.ts"() {
+    "use strict";
+    init_types();
+    init_digraph();
+    init_compare();
+    init_rank();
+    init_rules();
+    NONE2 = [];
+  }
+});
+
+// src/chem/cip/label.ts
+function ranker(g, root, element, ref, cache2) {
+  let rk = cache2?.get(root);
+  if (rk === void 0) {
+    rk = newRanker(new Digraph(g, root, element));
+    cache2?.set(root, rk);
+  }
+  rk.setRule6(ref);
+  return rk;
+}
+function towardOther(g, end, other) {
+  const nb = g.nbr[end];
+  if (nb.includes(other)) return other;
+  for (let i = 0; i < nb.length; i++) if (g.ord[end][i] >= 2) return nb[i];
+  return -1;
+}
+function tetrahedral2(g, index, e, ref, c) {
+  const rk = ranker(g, e.centre, index, ref, c);
+  const l = tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
+  return rk.dg.truncated ? null : l;
+}
+function tiedTetrahedral(g, index, e, c) {
+  const rk = ranker(g, e.centre, index, -1, c);
+  const ligs = [];
+  for (const l of e.ligands) {
+    const b = ligandBranch(rk.dg, rk.dg.root, l, ligs);
+    if (b === null) return [];
+    ligs.push(b);
+  }
+  const r = rankLigands(rk, rk.dg.root, ligs, RULE_5);
+  const out = [];
+  for (let i = 1; i < r.order.length; i++) {
+    if (!r.tieWithPrev[i]) continue;
+    for (const k of [r.order[i - 1], r.order[i]])
+      if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
+  }
+  return out;
+}
+function doubleBond(g, index, e, ref, c) {
+  const level2 = ref >= 0 ? RULE_6 : RULE_5;
+  const high = [];
+  for (let i = 0; i < 2; i++) {
+    const end = e.ends[i];
+    const excl = towardOther(g, end, e.ends[1 - i]);
+    const rk = ranker(g, end, index, ref, c);
+    const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level2);
+    if (h === null || rk.dg.truncated) return null;
+    high.push(h);
+  }
+  return ezLabel(e, high[0], high[1]);
+}
+function axial(g, index, e, ref, c) {
+  const level2 = ref >= 0 ? RULE_6 : RULE_5;
+  const r0 = ranker(g, e.ends[0], index, ref, c);
+  const r1 = ranker(g, e.ends[1], index, ref, c);
+  const l = axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level2);
+  return r0.dg.truncated || r1.dg.truncated ? null : l;
+}
+function labelWith(g, index, e, ref, c) {
+  if (e.kind === "tetrahedral") return tetrahedral2(g, index, e, ref, c);
+  if (e.kind === "double-bond") return doubleBond(g, index, e, ref, c);
+  return axial(g, index, e, ref, c);
+}
+function rule6Candidates(g, index, e, c) {
+  if (e.kind === "tetrahedral") return tiedTetrahedral(g, index, e, c);
+  if (e.kind === "double-bond") {
+    const out = [];
+    for (let i = 0; i < 2; i++) {
+      const excl = towardOther(g, e.ends[i], e.ends[1 - i]);
+      for (const b of g.nbr[e.ends[i]]) if (b !== excl) out.push(b);
+    }
+    return out;
+  }
+  return e.ligands.filter((l) => l >= 0);
+}
+function labelPlain(g, index) {
+  if (g.ringFixed[index]) return null;
+  return labelWith(g, index, g.s.stereo[index], -1);
+}
+function labelRule6(g, index) {
+  if (g.ringFixed[index]) return null;
+  const e = g.s.stereo[index];
+  const found = /* @__PURE__ */ new Set();
+  const cache2 = /* @__PURE__ */ new Map();
+  for (const ref of rule6Candidates(g, index, e, cache2)) {
+    const l = labelWith(g, index, e, ref, cache2);
+    if (l !== null) found.add(l);
+  }
+  return found.size === 1 ? [...found][0] : null;
+}
+var init_label = __esm({
+  "src/chem/cip/label.ts"() {
+    "use strict";
+    init_digraph();
+    init_aux();
+    init_rank();
+    init_rules();
+  }
+});
+
+// src/chem/cip/helix.ts
+function smallRings(s, nbr) {
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  const path = [];
+  const walk = (start, x) => {
+    if (path.length > 6) return;
+    for (const y of nbr[x]) {
+      if (y === start && path.length >= 5) {
+        const id = [...path].sort((a, b) => a - b).join(",");
+        if (!seen.has(id)) {
+          seen.add(id);
+          out.push([...path]);
+        }
+      } else if (y > start && !path.includes(y) && path.length < 6) {
+        path.push(y);
+        walk(start, y);
+        path.pop();
+      }
+    }
+  };
+  for (let a = 0; a < s.atoms.length; a++) {
+    if (nbr[a].length < 2) continue;
+    path.push(a);
+    walk(a, a);
+    path.pop();
+  }
+  return out;
+}
+function torsion(p0, p1, p2, p3) {
+  const sub3 = (a, b) => [a[0] - b[0], a[1] - b[1], a[2] - b[2]];
+  const cross2 = (a, b) => [
+    a[1] * b[2] - a[2] * b[1],
+    a[2] * b[0] - a[0] * b[2],
+    a[0] * b[1] - a[1] * b[0]
+  ];
+  const dot2 = (a, b) => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+  const b1 = sub3(p1, p0);
+  const b2 = sub3(p2, p1);
+  const b3 = sub3(p3, p2);
+  const n1 = cross2(b1, b2);
+  const n2 = cross2(b2, b3);
+  return Math.atan2(Math.sqrt(dot2(b2, b2)) * dot2(b1, n2), dot2(n1, n2));
+}
+function positions(s) {
+  if (s.atoms.some((a) => a.coords === null)) return null;
+  const p = s.atoms.map((a) => [...a.coords]);
+  if (s.dimension === 3) return p;
+  for (const b of s.bonds) {
+    if (b.wedge !== "up" && b.wedge !== "down") continue;
+    const pa = p[b.a];
+    const pb = p[b.b];
+    const len = Math.hypot(pb[0] - pa[0], pb[1] - pa[1]);
+    pb[2] = pa[2] + (b.wedge === "up" ? 0.8 : -0.8) * len;
+  }
+  return p;
+}
+function helixRims(s) {
+  const n = s.atoms.length;
+  if (n < 18) return [];
+  const nbr = s.atoms.map(() => []);
+  for (const b of s.bonds) {
+    nbr[b.a].push(b.b);
+    nbr[b.b].push(b.a);
+  }
+  const heavy = (a) => nbr[a].filter((b) => s.atoms[b].atomicNumber > 1);
+  const rings = smallRings(s, nbr).filter((r) => r.length === 6 || r.length === 5);
+  if (rings.length < 5) return [];
+  const ringCount = /* @__PURE__ */ new Map();
+  const bondKey = (a, b) => Math.min(a, b) * n + Math.max(a, b);
+  for (const r of rings) {
+    for (let i = 0; i < r.length; i++) {
+      const k = bondKey(r[i], r[(i + 1) % r.length]);
+      ringCount.set(k, (ringCount.get(k) ?? 0) + 1);
+    }
+  }
+  const fusionAtom = new Array(n).fill(false);
+  for (const [k, c] of ringCount) {
+    if (c < 2) continue;
+    fusionAtom[Math.floor(k / n)] = true;
+    fusionAtom[k % n] = true;
+  }
+  const link = s.atoms.map(() => []);
+  for (const [k, c] of ringCount) {
+    const a = Math.floor(k / n);
+    const b = k % n;
+    if (c === 1 && fusionAtom[a] && fusionAtom[b]) {
+      link[a].push(b);
+      link[b].push(a);
+    }
+  }
+  const out = [];
+  const done = new Array(n).fill(false);
+  for (let a = 0; a < n; a++) {
+    if (done[a] || link[a].length !== 1) continue;
+    const chain = [a];
+    done[a] = true;
+    let prev = -1;
+    let x = a;
+    for (; ; ) {
+      const next = link[x].filter((y) => y !== prev);
+      if (next.length !== 1 || done[next[0]]) break;
+      prev = x;
+      x = next[0];
+      chain.push(x);
+      done[x] = true;
+      if (link[x].length !== 2) break;
+    }
+    if (chain.length < 4) continue;
+    const cap2 = (end, inner) => {
+      const c = heavy(end).filter((y) => y !== inner && !fusionAtom[y] && ringCount.has(bondKey(end, y)));
+      return c.length === 1 ? c[0] : -1;
+    };
+    const t0 = cap2(chain[0], chain[1]);
+    const t1 = cap2(chain[chain.length - 1], chain[chain.length - 2]);
+    if (t0 < 0 || t1 < 0) continue;
+    out.push({ ends: [t0, t1], chain });
+  }
+  return out;
+}
+function helixSense(s, rim) {
+  if (s.dimension === 0) return null;
+  const pos = positions(s);
+  if (pos === null) return null;
+  const path = [rim.ends[0], ...rim.chain, rim.ends[1]].map((i) => pos[i]);
+  let sum = 0;
+  for (let i = 0; i + 3 < path.length; i++) sum += torsion(path[i], path[i + 1], path[i + 2], path[i + 3]);
+  if (Math.abs(sum) < 1e-3) return null;
+  return sum > 0 ? "P" : "M";
+}
+var init_helix = __esm({
+  "src/chem/cip/helix.ts"() {
+    "use strict";
+  }
+});
+
+// src/chem/cip/index.ts
+function assignCip(s) {
+  if (s.stereo.length === 0) return [];
+  const g = buildGraph2(s);
+  const labels = s.stereo.map((_, i) => {
+    checkBudget();
+    return labelPlain(g, i);
+  });
+  if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
+    g.auxAllowed = labels.map((l) => l !== null);
+    const by6 = [];
+    for (let i = 0; i < labels.length; i++) {
+      if (labels[i] !== null) continue;
+      labels[i] = labelRule6(g, i);
+      if (labels[i] !== null) by6.push(i);
+    }
+    const open = labels.some((l, i) => l === null && !g.ringFixed[i]);
+    if (by6.length > 0 && open) {
+      g.auxAllowed = labels.map((l) => l !== null);
+      for (const i of by6) g.auxRule6[i] = true;
+      for (let i = 0; i < labels.length; i++) {
+        if (labels[i] === null && !g.ringFixed[i]) labels[i] = labelPlain(g, i) ?? labelRule6(g, i);
+      }
+    }
+  }
+  const stopped = g.workLeft <= 0;
+  return s.stereo.map((e, element) => {
+    const r = {
+      element,
+      label: labels[element],
+      atoms: e.kind === "tetrahedral" ? [e.centre] : [e.ends[0], e.ends[1]]
+    };
+    if (stopped && r.label === null && !g.ringFixed[element]) r.stopped = true;
+    return r;
+  });
+}
+var init_cip = __esm({
+  "src/chem/cip/index.ts"() {
+    "use strict";
+    init_graph2();
+    init_label();
+    init_budget();
+    init_helix();
+  }
+});
+
+// src/chem/perceive/planar.ts
+function unitImage(target, u, map) {
+  const j = target.unitOfAtom[map[u.atoms[0]]];
+  if (u.kind !== "planar" || j < 0) return j;
+  return target.planar.planarOf[j];
+}
+function addPlanarUnits(s, g, rings, units) {
+  const hosts = [];
+  for (let k = 0; k < units.length; k++) {
+    const u = units[k];
+    if (u.kind !== "double-bond") continue;
+    const [a, b] = u.atoms;
+    const bond = bondBetween(g, a, b);
+    const size = bond >= 0 ? rings.smallestRingOfBond[bond] : 0;
+    if (size < 8 || size > 11) continue;
+    const ring = rings.rings.find((r) => r.length === size && ringAdjacent(r, a, b));
+    if (!ring) continue;
+    const ra = ringNeighbour2(ring, a, b);
+    const rb = ringNeighbour2(ring, b, a);
+    const z = (u.tokens[0] === ra ? 0 : 1) ^ (u.tokens[2] === rb ? 0 : 1);
+    hosts.push({ k, z, ra, rb });
+  }
+  const m = units.length + hosts.length;
+  const links = {
+    host: new Int32Array(m).fill(-1),
+    planarOf: new Int32Array(m).fill(-1),
+    zBit: new Uint8Array(m),
+    any: hosts.length > 0
+  };
+  for (const { k, z, ra, rb } of hosts) {
+    const h = units[k];
+    const j = units.length;
+    const ringCis = h.defined && h.bit === z;
+    const bit = h.defined && !ringCis ? twist(s, h, ra, rb) : null;
+    units.push({
+      kind: "planar",
+      mode: "parity",
+      atoms: [h.atoms[0], h.atoms[1]],
+      tokens: [h.tokens[0], h.tokens[1], h.tokens[2], h.tokens[3]],
+      // ring-cis: there is nothing to define (the state holds 0); ring-trans: the twist from 3D coordinates
+      defined: ringCis || bit !== null,
+      bit: bit ?? 0,
+      equivalentPair: false
+    });
+    links.host[j] = k;
+    links.planarOf[k] = j;
+    links.zBit[j] = z;
+  }
+  return links;
+}
+function twist(s, u, ra, rb) {
+  if (s.dimension !== 3) return null;
+  const [a, b] = u.atoms;
+  const p = [ra, a, b, rb].map((i) => s.atoms[i].coords);
+  if (p.some((c) => c === null)) return null;
+  const sin = torsionSine(p[0], p[1], p[2], p[3]);
+  if (Math.abs(sin) < MIN_TWIST_SINE) return null;
+  const oa = u.tokens[0] === ra ? u.tokens[1] : u.tokens[0];
+  const ob = u.tokens[2] === rb ? u.tokens[3] : u.tokens[2];
+  const bit = rebase(u, [ra, oa, rb, ob], sin > 0 ? 0 : 1);
+  return bit < 0 ? null : bit;
+}
+function torsionSine(p0, p1, p2, p3) {
+  const d = (x2, y2) => [x2[0] - y2[0], x2[1] - y2[1], x2[2] - y2[2]];
+  const cross2 = (x2, y2) => [
+    x2[1] * y2[2] - x2[2] * y2[1],
+    x2[2] * y2[0] - x2[0] * y2[2],
+    x2[0] * y2[1] - x2[1] * y2[0]
+  ];
+  const dot2 = (x2, y2) => x2[0] * y2[0] + x2[1] * y2[1] + x2[2] * y2[2];
+  const b1 = d(p1, p0);
+  const b2 = d(p2, p1);
+  const b3 = d(p3, p2);
+  const n1 = cross2(b1, b2);
+  const n2 = cross2(b2, b3);
+  const y = Math.sqrt(dot2(b2, b2)) * dot2(b1, n2);
+  const x = dot2(n1, n2);
+  const r = Math.hypot(x, y);
+  return r === 0 ? 0 : y / r;
+}
+function bondBetween(g, a, b) {
+  const k = g.nbrs[a].indexOf(b);
+  return k < 0 ? -1 : g.nbrBonds[a][k];
+}
+function ringAdjacent(r, a, b) {
+  const k = r.indexOf(a);
+  if (k < 0) return false;
+  return r[(k + 1) % r.length] === b || r[(k + r.length - 1) % r.length] === b;
+}
+function ringNeighbour2(ring, x, other) {
+  const k = ring.indexOf(x);
+  const prev = ring[(k + ring.length - 1) % ring.length];
+  const next = ring[(k + 1) % ring.length];
+  return prev === other ? next : prev;
+}
+var MIN_TWIST_SINE;
+var init_planar = __esm({
+  "src/chem/perceive/planar.ts"() {
+    "use strict";
+    init_units();
+    MIN_TWIST_SINE = 5e-3;
+  }
+});
+
+// src/chem/perceive/perceive.ts
+function perceive(s, opts = {}) {
+  const n = s.atoms.length;
+  const graph = buildGraph(s);
+  const rings = ringInfo(s, graph);
+  const aromaticBond = aromaticBonds(s, rings, graph);
+  let classCache = null;
+  const classesOf = () => classCache ??= equivalenceClasses(s);
+  const tokenClass = (t) => t < n ? classesOf()[t] : t < 2 * n ? -1 : -2;
+  const drafts = objectList();
+  const invertibleAll = /* @__PURE__ */ new Set();
+  for (let i = 0; i < n; i++) {
+    const v = tetrahedralCandidate(s, graph, rings, aromaticBond, i);
+    if (v === null) continue;
+    if (v.kind === "invertible-nitrogen") {
+      invertibleAll.add(i);
+      continue;
+    }
+    const pairs = equalPairs(v.tokens, tokenClass, [i, i]);
+    if (pairs === null) continue;
+    drafts.push({
+      kind: "tetrahedral",
+      mode: "parity",
+      atoms: [i],
+      tokens: v.tokens,
+      defined: false,
+      bit: 0,
+      equivalentPair: pairs.length > 0,
+      pairs
+    });
+  }
+  for (const c of bondCandidates(s, graph, rings, aromaticBond)) {
+    const pairs = equalPairs(c.tokens, tokenClass, c.ends, true);
+    if (pairs === null) continue;
+    drafts.push({
+      kind: c.kind,
+      mode: c.mode,
+      atoms: [...c.ends],
+      tokens: c.tokens,
+      defined: false,
+      bit: 0,
+      equivalentPair: pairs.length > 0,
+      pairs
+    });
+  }
+  for (const e of s.stereo) {
+    if (e.kind !== "axial" || e.subtype !== "biaryl") continue;
+    const t = e.ligands.map(
+      (x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])
+    );
+    const tokens2 = [t[0], t[1], t[2], t[3]];
+    const pairs = equalPairs(tokens2, tokenClass, e.ends, true) ?? [];
+    drafts.push({
+      kind: "biaryl",
+      mode: "parity",
+      atoms: [...e.ends],
+      tokens: tokens2,
+      defined: false,
+      bit: 0,
+      equivalentPair: pairs.length > 0,
+      pairs
+    });
+  }
+  let anyAromatic = false;
+  for (let k = 0; k < aromaticBond.length && !anyAromatic; k++) anyAromatic = aromaticBond[k];
+  if (anyAromatic) {
+    const orthoMin = opts.axisOrthoMin ?? DEFAULT_AXIS_ORTHO_MIN;
+    for (const c of axisCandidates(s, graph, rings, aromaticBond, orthoMin)) {
+      const drawn = drafts.some(
+        (d) => d.kind === "biaryl" && d.atoms.includes(c.ends[0]) && d.atoms.includes(c.ends[1])
+      );
+      if (drawn) continue;
+      const pairs = equalPairs(c.tokens, tokenClass, c.ends, true) ?? [];
+      drafts.push({
+        kind: "biaryl",
+        mode: "parity",
+        atoms: [c.ends[0], c.ends[1]],
+        tokens: c.tokens,
+        defined: false,
+        bit: 0,
+        equivalentPair: pairs.length > 0,
+        pairs
+      });
+    }
+  }
+  if (n >= 18 && fusedSmallRings(rings) >= 5) {
+    for (const rim of helixRims(s)) {
+      const sense = helixSense(s, rim);
+      const [t0, t1] = rim.ends;
+      drafts.push({
+        kind: "helix",
+        mode: "parity",
+        atoms: [t0, t1],
+        // reversed rim -> reversed list, an even permutation: P stays bit 0 under any symmetry
+        tokens: [rim.chain[0], t0, t1, rim.chain[rim.chain.length - 1]],
+        defined: sense !== null,
+        bit: sense === "M" ? 1 : 0,
+        equivalentPair: false,
+        pairs: []
+      });
+    }
+  }
+  let kept = fixedPoint(drafts, graph, n);
+  const tried = /* @__PURE__ */ new Set();
+  for (let round = 0; round < 4 && kept.length < drafts.length; round++) {
+    const keptSet = new Set(kept);
+    const rescued = drafts.filter((d) => {
+      if (keptSet.has(d) || tried.has(d)) return false;
+      tried.add(d);
+      return !swapsTerminalPair(d, graph, classesOf(), n) && !swapsPendantTrees(d, graph, classesOf(), n) && survivesSymmetry(s, d, classesOf());
+    });
+    if (rescued.length === 0) break;
+    for (const d of rescued) d.pairs = [];
+    kept = fixedPoint(drafts, graph, n);
+  }
+  kept.sort((a, b) => Math.min(...a.atoms) - Math.min(...b.atoms));
+  const units = objectList();
+  for (const d of kept) {
+    units.push({
+      kind: d.kind,
+      mode: d.mode,
+      atoms: d.atoms,
+      tokens: d.tokens,
+      defined: d.defined,
+      bit: d.bit,
+      equivalentPair: d.equivalentPair
+    });
+  }
+  const unitOfAtom = new Int32Array(n).fill(-1);
+  units.forEach((u, k) => {
+    for (const a of u.atoms) unitOfAtom[a] = k;
+  });
+  const components = connectedComponents(s, graph);
+  const componentOfAtom = new Int32Array(n);
+  components.forEach((c, k) => {
+    for (const a of c) componentOfAtom[a] = k;
+  });
+  const remarks = objectList();
+  const invertibleNitrogens = applyInputStereo(s, units, unitOfAtom, invertibleAll, remarks);
+  const planar = addPlanarUnits(s, graph, rings, units);
+  const couplings = bridgeCouplings(s, graph, rings, units);
+  for (const c of couplings) {
+    const [ua, ub] = [units[c.a], units[c.b]];
+    if (ua.defined && ub.defined && (ua.bit ^ ub.bit) !== c.c) {
+      const name = (u) => `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
+      remarks.push(
+        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are the bridgeheads or fusion atoms of a small ring system, which fixes their relative configuration`
+      );
+    }
+  }
+  const result2 = {
+    structure: s,
+    graph,
+    rings,
+    aromaticBond,
+    units,
+    unitOfAtom,
+    invertibleNitrogens,
+    couplings,
+    planar,
+    components,
+    componentOfAtom,
+    remarks
+  };
+  lazyClasses.set(result2, classesOf);
+  Object.defineProperty(result2, "classes", { get: classesGetter, enumerable: true });
+  return result2;
+}
+function classesGetter() {
+  return lazyClasses.get(this)();
+}
+function equalPairs(tokens2, cls, anchors, perEnd = false) {
+  const out = [];
+  if (perEnd) {
+    for (const k of [0, 2])
+      if (cls(tokens2[k]) === cls(tokens2[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens2[k] });
+    return out;
+  }
+  const c = [cls(tokens2[0]), cls(tokens2[1]), cls(tokens2[2]), cls(tokens2[3])];
+  for (let i = 0; i < 4; i++) {
+    let same = 0;
+    for (let j = 0; j < 4; j++) if (c[j] === c[i]) same++;
+    if (same >= 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens2[i] });
+  }
+  return out;
+}
+function fusedSmallRings(rings) {
+  let k = 0;
+  for (const r of rings.rings) if (r.length === 5 || r.length === 6) k++;
+  return k;
+}
+function fixedPoint(drafts, g, n) {
+  let alive = drafts.slice();
+  for (; ; ) {
+    const unitAtom = new Int32Array(n).fill(-1);
+    alive.forEach((d, k) => {
+      for (const a of d.atoms) unitAtom[a] = k;
+    });
+    const next = objectList();
+    for (let k = 0; k < alive.length; k++) {
+      const d = alive[k];
+      if (d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k)))
+        next.push(d);
+    }
+    if (next.length === alive.length) return next;
+    alive = next;
+  }
+}
+function branchHoldsUnit(g, anchor, start, unitAtom, self) {
+  const seen = new Uint8Array(g.n);
+  seen[anchor] = 1;
+  seen[start] = 1;
+  const stack = [start];
+  while (stack.length) {
+    const x = stack.pop();
+    if (unitAtom[x] >= 0 && unitAtom[x] !== self) return true;
+    for (const y of g.nbrs[x]) {
+      if (!seen[y]) {
+        seen[y] = 1;
+        stack.push(y);
+      }
+    }
+  }
+  return false;
+}
+var lazyClasses;
+var init_perceive = __esm({
+  "src/chem/perceive/perceive.ts"() {
+    "use strict";
+    init_graph();
+    init_types();
+    init_bonds();
+    init_centres();
+    init_units();
+    init_input();
+    init_rescue();
+    init_bridges();
+    init_make();
+    init_axes();
+    init_cip();
+    init_planar();
+    lazyClasses = /* @__PURE__ */ new WeakMap();
+  }
+});
+
+// src/chem/perceive/index.ts
+var init_perceive2 = __esm({
+  "src/chem/perceive/index.ts"() {
+    "use strict";
+    init_perceive();
+    init_axes();
+    init_input();
+    init_units();
+    init_planar();
+  }
+});
+
+// src/chem/symmetry/solve.ts
 var ParityUnion;
-var init_symmetry_solve = __esm({
-  "src/chem/symmetry-solve.ts"() {
+var init_solve = __esm({
+  "src/chem/symmetry/solve.ts"() {
     "use strict";
     ParityUnion = class {
       parent;
@@ -19967,9 +23049,9 @@ var init_symmetry_solve = __esm({
   }
 });
 
-// src/chem/symmetry.ts
+// src/chem/symmetry/group.ts
 function unitGroup(p) {
-  const { units, unitOfAtom } = p;
+  const { units } = p;
   const n = p.structure.atoms.length;
   const m = units.length;
   const reflect = Uint8Array.from(units, (u) => u.mode === "parity" ? 1 : 0);
@@ -19981,6 +23063,9 @@ function unitGroup(p) {
     atomMaps: [id],
     reflect,
     couplings: p.couplings,
+    // empty without planar units, so every loop over them costs nothing
+    planarHost: p.planar.any ? p.planar.host : NO_PLANAR,
+    planarZ: p.planar.zBit,
     complete: true
   };
   if (m === 0 || trivialOnUnits(p)) return group;
@@ -19996,7 +23081,7 @@ function unitGroup(p) {
       const flip2 = new Uint8Array(m);
       for (let i = 0; i < m; i++) {
         const u = units[i];
-        const j = unitOfAtom[map[u.atoms[0]]];
+        const j = unitImage(p, u, map);
         if (j < 0) return true;
         const f = rebase(
           units[j],
@@ -20034,17 +23119,30 @@ function signature(perm, flip2) {
 }
 function feasible(g, x) {
   for (const c of g.couplings) if ((x[c.a] ^ x[c.b]) !== c.c) return false;
+  for (let i = 0; i < g.planarHost.length; i++) if (x[i] === 1 && absentPlanar(g, x, i)) return false;
   return true;
+}
+function absentPlanar(g, x, i) {
+  if (i >= g.planarHost.length) return false;
+  const h = g.planarHost[i];
+  return h >= 0 && x[h] === g.planarZ[i];
+}
+function normalise(g, x) {
+  for (let i = 0; i < g.planarHost.length; i++) if (absentPlanar(g, x, i)) x[i] = 0;
+  return x;
 }
 function act(g, k, x, withMirror = false) {
   const perm = g.perms[k];
   const flip2 = g.flips[k];
   const out = new Uint8Array(x.length);
   for (let i = 0; i < x.length; i++) out[perm[i]] = x[i] ^ flip2[i] ^ (withMirror ? g.reflect[i] : 0);
-  return out;
+  return normalise(g, out);
 }
 function mirrorState(g, x) {
-  return Uint8Array.from(x, (v, i) => v ^ g.reflect[i]);
+  return normalise(
+    g,
+    Uint8Array.from(x, (v, i) => v ^ g.reflect[i])
+  );
 }
 function sameState(a, b) {
   for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
@@ -20054,7 +23152,8 @@ function elementMapping(g, x, y) {
   outer: for (let k = 0; k < g.perms.length; k++) {
     const perm = g.perms[k];
     const flip2 = g.flips[k];
-    for (let i = 0; i < x.length; i++) if ((x[i] ^ flip2[i]) !== y[perm[i]]) continue outer;
+    for (let i = 0; i < x.length; i++)
+      if ((x[i] ^ flip2[i]) !== y[perm[i]] && !absentPlanar(g, x, i)) continue outer;
     return k;
   }
   return -1;
@@ -20076,14 +23175,20 @@ function fixedCompletionExists(g, k, x, defined, mirror2) {
   const perm = g.perms[k];
   const flip2 = g.flips[k];
   const m = x.length;
+  const planar = g.planarHost.length > 0;
+  const bound = (i) => !planar || g.planarHost[i] < 0 || defined[g.planarHost[i]] === 1 && !absentPlanar(g, x, i);
   if (g.couplings.length > 0) {
-    const u = solver(g, k, mirror2, m + 1);
-    for (let i = 0; i < m; i++) if (defined[i]) u.add(i, m, x[i]);
+    const u = solver(g, k, mirror2, m + 1, bound);
+    for (let i = 0; i < m; i++) if (defined[i] && bound(i)) u.add(i, m, x[i]);
     return u.consistent;
   }
   const done = new Uint8Array(m);
   for (let s = 0; s < m; s++) {
     if (done[s]) continue;
+    if (!bound(s)) {
+      for (let i2 = s; !done[i2] || i2 !== s; i2 = perm[i2]) done[i2] = 1;
+      continue;
+    }
     let i = s;
     let rel = 0;
     let want = -1;
@@ -20106,13 +23211,26 @@ function fixedCount(g, k, mirror2) {
   const flip2 = g.flips[k];
   const m = perm.length;
   if (g.couplings.length > 0) {
-    const u = solver(g, k, mirror2, m);
-    return u.consistent ? 1n << BigInt(u.classes) : 0n;
+    if (g.planarHost.length === 0) {
+      const u2 = solver(g, k, mirror2, m);
+      return u2.consistent ? 1n << BigInt(u2.classes) : 0n;
+    }
+    const u = solver(g, k, mirror2, m, (i) => g.planarHost[i] < 0);
+    if (!u.consistent) return 0n;
+    let planar = 0;
+    for (let i = 0; i < m; i++) if (g.planarHost[i] >= 0) planar++;
+    if (planar === 0) return 1n << BigInt(u.classes);
+    const pc2 = planarCycles(g, k, mirror2);
+    return pc2.factor << BigInt(u.classes - planar - pc2.cycles);
   }
   const done = new Uint8Array(m);
   let cycles = 0n;
   for (let s = 0; s < m; s++) {
     if (done[s]) continue;
+    if (s < g.planarHost.length && g.planarHost[s] >= 0) {
+      for (let i2 = s; !done[i2] || i2 !== s; i2 = perm[i2]) done[i2] = 1;
+      continue;
+    }
     let i = s;
     let rel = 0;
     do {
@@ -20123,13 +23241,37 @@ function fixedCount(g, k, mirror2) {
     if (rel !== 0) return 0n;
     cycles++;
   }
-  return 1n << cycles;
+  if (g.planarHost.length === 0) return 1n << cycles;
+  const pc = planarCycles(g, k, mirror2);
+  return pc.factor << cycles - BigInt(pc.cycles);
 }
-function solver(g, k, mirror2, size) {
+function planarCycles(g, k, mirror2) {
+  const perm = g.perms[k];
+  const flip2 = g.flips[k];
+  const m = perm.length;
+  const done = new Uint8Array(m);
+  let factor = 1n;
+  let cycles = 0;
+  for (let s = 0; s < m; s++) {
+    if (done[s] || g.planarHost[s] < 0) continue;
+    let i = s;
+    let rel = 0;
+    do {
+      done[i] = 1;
+      rel ^= flip2[i] ^ (mirror2 ? g.reflect[i] : 0);
+      i = perm[i];
+    } while (i !== s);
+    cycles++;
+    if (rel === 0) factor *= 3n;
+  }
+  return { factor, cycles };
+}
+function solver(g, k, mirror2, size, bound = () => true) {
   const u = new ParityUnion(size);
   const perm = g.perms[k];
   const flip2 = g.flips[k];
-  for (let i = 0; i < perm.length; i++) u.add(i, perm[i], flip2[i] ^ (mirror2 ? g.reflect[i] : 0));
+  for (let i = 0; i < perm.length; i++)
+    if (bound(i)) u.add(i, perm[i], flip2[i] ^ (mirror2 ? g.reflect[i] : 0));
   for (const c of g.couplings) u.add(c.a, c.b, c.c);
   return u;
 }
@@ -20167,6 +23309,7 @@ function someFeasibleCompletion(g, x, defined) {
   return u.consistent;
 }
 function stereogenicIn(g, x, k) {
+  if (absentPlanar(g, x, k)) return false;
   const y = Uint8Array.from(x);
   y[k] ^= 1;
   if (!feasible(g, y)) return true;
@@ -20181,22 +23324,55 @@ function mirror(s) {
       return { kind: "axial", subtype: e.subtype, ends: e.ends, ligands: e.ligands, winding };
     return e;
   });
-  return withStereo(s, stereo);
+  if (s.dimension === 0) return withStereo(s, stereo);
+  const atoms = s.atoms.map(
+    (a) => a.coords === null || s.dimension !== 3 ? a : newAtom(
+      a.element,
+      a.atomicNumber,
+      a.charge,
+      a.isotope,
+      a.hCount,
+      a.aromatic,
+      a.radical,
+      a.mapNumber,
+      a.inputNumber,
+      coords3(a.coords[0], a.coords[1], -a.coords[2])
+    )
+  );
+  const bonds = s.bonds.map(
+    (b) => s.dimension === 2 && (b.wedge === "up" || b.wedge === "down") ? newBond(b.a, b.b, b.order, b.aromatic, b.wedge === "up" ? "down" : "up") : b
+  );
+  return restructure(s, atoms, bonds, stereo, s.groups);
 }
-var MAX_GROUP, MAX_ENUMERATED_UNDEFINED;
-var init_symmetry = __esm({
-  "src/chem/symmetry.ts"() {
+var MAX_GROUP, NO_PLANAR, MAX_ENUMERATED_UNDEFINED;
+var init_group = __esm({
+  "src/chem/symmetry/group.ts"() {
     "use strict";
     init_graph();
-    init_perceive_units();
-    init_symmetry_solve();
+    init_perceive2();
+    init_solve();
     init_make();
     MAX_GROUP = 2e4;
+    NO_PLANAR = new Int32Array(0);
     MAX_ENUMERATED_UNDEFINED = 14;
   }
 });
 
-// src/chem/isomers.ts
+// src/chem/symmetry/index.ts
+var init_symmetry = __esm({
+  "src/chem/symmetry/index.ts"() {
+    "use strict";
+    init_group();
+  }
+});
+
+// src/chem/isomers/count.ts
+function exactCount(b) {
+  return b <= SAFE ? Number(b) : b.toString();
+}
+function countValue(c) {
+  return BigInt(c);
+}
 function countStereoisomers(g, units) {
   const order = BigInt(g.perms.length);
   let fix = 0n;
@@ -20236,12 +23412,21 @@ function enumerateStereoisomers(g, m, limit) {
   }
   return out;
 }
-var toNumber;
-var init_isomers = __esm({
-  "src/chem/isomers.ts"() {
+var SAFE, toNumber;
+var init_count = __esm({
+  "src/chem/isomers/count.ts"() {
     "use strict";
     init_symmetry();
-    toNumber = (b) => Number(b);
+    SAFE = 2n ** 53n;
+    toNumber = exactCount;
+  }
+});
+
+// src/chem/isomers/index.ts
+var init_isomers = __esm({
+  "src/chem/isomers/index.ts"() {
+    "use strict";
+    init_count();
   }
 });
 
@@ -42645,1676 +45830,6 @@ var init_openchemlib = __esm({
   }
 });
 
-// src/chem/cip/masses.ts
-function averageMass(atomicNumber) {
-  if (atomicNumber >= 0 && atomicNumber < BY_Z.length && Number.isInteger(atomicNumber))
-    return BY_Z[atomicNumber];
-  return computeAverageMass(atomicNumber);
-}
-function computeAverageMass(atomicNumber) {
-  if (atomicNumber <= 0) return 0;
-  const m = MEAN_MASS_NUMBER[atomicNumber];
-  if (m !== void 0) return m;
-  if (atomicNumber < MEAN.length) return MEAN[atomicNumber] * 1.001;
-  return Math.round(atomicNumber * 2.5);
-}
-var MEAN, MEAN_MASS_NUMBER, BY_Z;
-var init_masses = __esm({
-  "src/chem/cip/masses.ts"() {
-    "use strict";
-    MEAN = [
-      0,
-      1.008,
-      4.0026,
-      6.94,
-      9.0122,
-      10.81,
-      12.011,
-      14.007,
-      15.999,
-      18.998,
-      20.18,
-      22.99,
-      24.305,
-      26.982,
-      28.085,
-      30.974,
-      32.06,
-      35.45,
-      39.948,
-      39.098,
-      40.078,
-      44.956,
-      47.867,
-      50.942,
-      51.996,
-      54.938,
-      55.845,
-      58.933,
-      58.693,
-      63.546,
-      65.38,
-      69.723,
-      72.63,
-      74.922,
-      78.971,
-      79.904,
-      83.798,
-      85.468,
-      87.62,
-      88.906,
-      91.224,
-      92.906,
-      95.95,
-      97,
-      101.07,
-      102.91,
-      106.42,
-      107.87,
-      112.41,
-      114.82,
-      118.71,
-      121.76,
-      127.6,
-      126.9,
-      131.29,
-      132.91,
-      137.33,
-      138.91,
-      140.12,
-      140.91,
-      144.24,
-      145,
-      150.36,
-      151.96,
-      157.25,
-      158.93,
-      162.5,
-      164.93,
-      167.26,
-      168.93,
-      173.05,
-      174.97,
-      178.49,
-      180.95,
-      183.84,
-      186.21,
-      190.23,
-      192.22,
-      195.08,
-      196.97,
-      200.59,
-      204.38,
-      207.2,
-      208.98,
-      209,
-      210,
-      222
-    ];
-    MEAN_MASS_NUMBER = {
-      1: 1.00012,
-      5: 10.801,
-      6: 12.0107,
-      7: 14.0036,
-      8: 16.0044,
-      9: 19,
-      14: 28.109,
-      15: 31,
-      16: 32.093,
-      17: 35.485,
-      34: 79.04,
-      35: 79.986,
-      53: 127
-    };
-    BY_Z = Array.from({ length: 119 }, (_, z) => computeAverageMass(z));
-  }
-});
-
-// src/chem/cip/mancude.ts
-function perceiveMancude(s, nbr, ord, mass) {
-  const n = s.atoms.length;
-  const off = new Array(n + 1);
-  off[0] = 0;
-  for (let a = 0; a < n; a++) off[a + 1] = off[a] + nbr[a].length;
-  const slots = off[n];
-  const edge = new Array(slots).fill(0);
-  const dupZ = new Array(n).fill(0);
-  const dupMass = new Array(n).fill(0);
-  let anyDouble = false;
-  for (let a = 0; a < n && !anyDouble; a++) {
-    const o = nbr[a];
-    const oa = ord[a];
-    for (let i = 0; i < o.length; i++) {
-      if (oa[i] === 2 && o[i] > a) {
-        anyDouble = true;
-        break;
-      }
-    }
-  }
-  if (!anyDouble) return result(n, nbr, off, edge, dupZ, dupMass);
-  if (scratchRing.length < slots) {
-    scratchRing = new Uint8Array(2 * slots);
-    scratchSlot = new Uint8Array(2 * slots);
-  }
-  if (scratchPi.length < n) scratchPi = new Uint8Array(2 * n);
-  const ring = scratchRing;
-  ring.fill(0, 0, slots);
-  ringBonds2(n, nbr, off, ring, null);
-  if (scratchPiDouble.length < n) scratchPiDouble = new Uint8Array(2 * n);
-  const piDouble = scratchPiDouble;
-  for (let a = 0; a < n; a++) {
-    const oa = ord[a];
-    const base = off[a];
-    let d = 0;
-    for (let i = 0; i < oa.length; i++) if (oa[i] === 2 && ring[base + i] === 1) d = 1;
-    piDouble[a] = d;
-  }
-  const pi = scratchPi;
-  pi.fill(0, 0, n);
-  for (let a = 0; a < n; a++) {
-    const base = off[a];
-    const oa = ord[a];
-    const deg = oa.length;
-    let inRing = false;
-    for (let i = 0; i < deg; i++) if (ring[base + i] === 1) inRing = true;
-    if (!inRing) continue;
-    const at = s.atoms[a];
-    if (piDouble[a] === 1) {
-      let outside = false;
-      for (let i = 0; i < deg; i++) if (oa[i] >= 2 && ring[base + i] !== 1) outside = true;
-      pi[a] = outside ? 0 : 1;
-    } else {
-      let multiple = false;
-      for (let i = 0; i < deg; i++) if (oa[i] >= 2) multiple = true;
-      if (!multiple) {
-        const z = at.atomicNumber;
-        const lonePair = (z === 7 || z === 8 || z === 15 || z === 16 || z === 34) && at.charge <= 0;
-        pi[a] = (lonePair || z === 6 && at.charge === -1) && deg + at.hCount <= 3 ? 1 : 0;
-      }
-    }
-  }
-  const piSlot = scratchSlot;
-  piSlot.fill(0, 0, slots);
-  for (let a = 0; a < n; a++) {
-    if (pi[a] !== 1) continue;
-    const o = nbr[a];
-    for (let i = 0; i < o.length; i++) if (pi[o[i]] === 1 && ring[off[a] + i] === 1) piSlot[off[a] + i] = 1;
-  }
-  ringBonds2(n, nbr, off, edge, piSlot);
-  for (let a = 0; a < n; a++) {
-    if (pi[a] !== 1 || piDouble[a] !== 1) continue;
-    let sum = 0;
-    let msum = 0;
-    let cnt = 0;
-    const o = nbr[a];
-    for (let i = 0; i < o.length; i++) {
-      if (piSlot[off[a] + i] !== 1) continue;
-      const b = o[i];
-      if (edge[off[a] + i] === 1 && piDouble[b] === 1) {
-        sum += s.atoms[b].atomicNumber;
-        msum += mass[b];
-        cnt++;
-      }
-    }
-    if (cnt > 0) {
-      dupZ[a] = sum / cnt;
-      dupMass[a] = msum / cnt;
-    }
-  }
-  return result(n, nbr, off, edge, dupZ, dupMass);
-}
-function result(n, nbr, off, edge, dupZ, dupMass) {
-  let bond = null;
-  return {
-    get bond() {
-      if (bond === null) {
-        bond = new PairSet(n);
-        for (let a = 0; a < n; a++)
-          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key(n, a, nbr[a][i]));
-      }
-      return bond;
-    },
-    edge,
-    off,
-    dupZ,
-    dupMass
-  };
-}
-function key(n, a, b) {
-  return a * n + b;
-}
-function markPair(nbr, off, out, v, w) {
-  const nv = nbr[v];
-  for (let j = 0; j < nv.length; j++) if (nv[j] === w) out[off[v] + j] = 1;
-  const nw = nbr[w];
-  for (let j = 0; j < nw.length; j++) if (nw[j] === v) out[off[w] + j] = 1;
-}
-function ringBonds2(n, nbr, off, out, use) {
-  if (scratchDisc.length < n) {
-    scratchDisc = new Int32Array(2 * n);
-    scratchLow = new Int32Array(2 * n);
-  }
-  const disc = scratchDisc;
-  const low = scratchLow;
-  disc.fill(-1, 0, n);
-  if (stackV.length < n + 1) {
-    stackV = new Int32Array(2 * n + 2);
-    stackP = new Int32Array(2 * n + 2);
-    stackI = new Int32Array(2 * n + 2);
-  }
-  const sv = stackV;
-  const sp = stackP;
-  const si = stackI;
-  let t = 0;
-  for (let r = 0; r < n; r++) {
-    if (disc[r] >= 0) continue;
-    let empty = true;
-    for (let i = 0; i < nbr[r].length; i++) if (use === null || use[off[r] + i] === 1) empty = false;
-    if (empty) continue;
-    let top = 0;
-    sv[0] = r;
-    sp[0] = -1;
-    si[0] = 0;
-    disc[r] = low[r] = t++;
-    while (top >= 0) {
-      const v = sv[top];
-      const parent = sp[top];
-      const i = si[top];
-      const nv = nbr[v];
-      if (i < nv.length) {
-        si[top]++;
-        if (use !== null && use[off[v] + i] !== 1) continue;
-        const w = nv[i];
-        if (w === parent) continue;
-        if (disc[w] < 0) {
-          disc[w] = low[w] = t++;
-          top++;
-          sv[top] = w;
-          sp[top] = v;
-          si[top] = 0;
-        } else {
-          low[v] = Math.min(low[v], disc[w]);
-          markPair(nbr, off, out, v, w);
-        }
-      } else {
-        top--;
-        if (parent >= 0) {
-          low[parent] = Math.min(low[parent], low[v]);
-          if (low[v] <= disc[parent]) markPair(nbr, off, out, v, parent);
-        }
-      }
-    }
-  }
-}
-var scratchRing, scratchSlot, scratchPi, scratchPiDouble, scratchDisc, scratchLow, stackV, stackP, stackI, PairSet;
-var init_mancude = __esm({
-  "src/chem/cip/mancude.ts"() {
-    "use strict";
-    scratchRing = new Uint8Array(256);
-    scratchSlot = new Uint8Array(256);
-    scratchPi = new Uint8Array(128);
-    scratchPiDouble = new Uint8Array(128);
-    scratchDisc = new Int32Array(128);
-    scratchLow = new Int32Array(128);
-    stackV = new Int32Array(64);
-    stackP = new Int32Array(64);
-    stackI = new Int32Array(64);
-    PairSet = class {
-      table;
-      set;
-      size = 0;
-      constructor(n) {
-        this.table = n <= 512 ? new Uint8Array(n * n) : null;
-        this.set = this.table === null ? /* @__PURE__ */ new Set() : null;
-      }
-      has(k) {
-        return this.table !== null ? this.table[k] === 1 : this.set.has(k);
-      }
-      add(k) {
-        if (this.has(k)) return;
-        this.size++;
-        if (this.table !== null) this.table[k] = 1;
-        else this.set.add(k);
-      }
-      addAll(o) {
-        if (o.table !== null) {
-          for (let k = 0; k < o.table.length; k++) if (o.table[k] === 1) this.add(k);
-        } else for (const k of o.set) this.add(k);
-      }
-    };
-  }
-});
-
-// src/chem/cip/graph.ts
-function buildGraph2(s) {
-  const n = s.atoms.length;
-  const bonds = s.bonds;
-  const deg = flatDeg.length > n ? flatDeg : flatDeg = new Array(2 * n + 2).fill(0);
-  for (let i = 0; i <= n; i++) deg[i] = 0;
-  for (let k = 0; k < bonds.length; k++) {
-    const b = bonds[k];
-    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
-    deg[b.a + 1]++;
-    deg[b.b + 1]++;
-  }
-  for (let i = 0; i < n; i++) deg[i + 1] += deg[i];
-  const total = deg[n];
-  const fn = flatNbr.length >= total ? flatNbr : flatNbr = new Array(2 * total).fill(0);
-  const fo = flatOrd.length >= total ? flatOrd : flatOrd = new Array(2 * total).fill(0);
-  for (let k = 0; k < bonds.length; k++) {
-    const b = bonds[k];
-    if (b.a === b.b || b.a < 0 || b.b < 0 || b.a >= n || b.b >= n) continue;
-    const i = deg[b.a]++;
-    fn[i] = b.b;
-    fo[i] = b.order;
-    const j = deg[b.b]++;
-    fn[j] = b.a;
-    fo[j] = b.order;
-  }
-  const nbr = [];
-  const ord = [];
-  for (let a = 0; a < n; a++) {
-    const from = a === 0 ? 0 : deg[a - 1];
-    nbr.push(fn.slice(from, deg[a]));
-    ord.push(fo.slice(from, deg[a]));
-  }
-  const dupOrd = ord.slice();
-  for (let a = 0; a < n; a++) {
-    if (!expandedValence(s, a, ord[a])) continue;
-    for (let i = 0; i < nbr[a].length; i++) {
-      const b = nbr[a][i];
-      if (ord[a][i] !== 2 || !CHALCOGEN_OR_N.has(s.atoms[b].atomicNumber)) continue;
-      if (dupOrd[a] === ord[a]) dupOrd[a] = ord[a].slice();
-      dupOrd[a][i] = 1;
-      const j = nbr[b].indexOf(a);
-      if (j >= 0) {
-        if (dupOrd[b] === ord[b]) dupOrd[b] = ord[b].slice();
-        dupOrd[b][j] = 1;
-      }
-    }
-  }
-  const tetraAt = new Array(n).fill(-1);
-  const bondAt = new Array(n).fill(-1);
-  const axialAt = new Array(n).fill(-1);
-  let hasBondStereo = false;
-  s.stereo.forEach((e, i) => {
-    if (e.kind === "tetrahedral") {
-      if (tetraAt[e.centre] < 0) tetraAt[e.centre] = i;
-    } else if (e.kind === "double-bond") {
-      hasBondStereo = true;
-      for (const end of e.ends) if (bondAt[end] < 0) bondAt[end] = i;
-    } else {
-      for (const end of e.ends) if (axialAt[end] < 0) axialAt[end] = i;
-    }
-  });
-  const mass = s.atoms.map(
-    (a) => a.isotope !== null && a.isotope > 0 ? a.isotope : averageMass(a.atomicNumber)
-  );
-  const g = {
-    s,
-    n,
-    z: s.atoms.map((a) => a.atomicNumber),
-    mass,
-    hCount: s.atoms.map((a) => a.hCount),
-    nbr,
-    ord,
-    dupOrd,
-    tetraAt,
-    bondAt,
-    axialAt,
-    mancude: null,
-    hasBondStereo,
-    stereoCount: s.stereo.length,
-    ringFixed: [],
-    auxAllowed: [],
-    auxRule6: [],
-    isotopes: s.atoms.some((a) => a.isotope !== null)
-  };
-  g.ringFixed = s.stereo.map((e) => fixedByRing(g, e));
-  g.auxAllowed = g.ringFixed.map((f) => !f);
-  g.auxRule6 = g.ringFixed.map(() => false);
-  g.hasBondStereo = s.stereo.some((e, i) => e.kind === "double-bond" && !g.ringFixed[i]);
-  bondAt.fill(-1);
-  s.stereo.forEach((e, i) => {
-    if (e.kind === "double-bond" && !g.ringFixed[i]) {
-      for (const end of e.ends) if (bondAt[end] < 0) bondAt[end] = i;
-    }
-  });
-  return g;
-}
-function fixedByRing(g, e) {
-  if (e.kind === "tetrahedral" && invertibleNitrogen(g, e.centre, e.ligands)) return true;
-  if (e.kind === "double-bond") {
-    const [u, v] = e.ends;
-    return g.nbr[u].includes(v) && ringSizeThrough(g, u, v, 7) > 0;
-  }
-  if (e.kind === "axial" && e.subtype === "biaryl") return ringSizeThrough(g, e.ends[0], e.ends[1], 6) > 0;
-  return false;
-}
-function expandedValence(s, a, orders) {
-  const at = s.atoms[a];
-  const z = at.atomicNumber;
-  if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53)
-    return false;
-  const v = orders.reduce((x, y) => x + y, 0) + at.hCount;
-  switch (z) {
-    case 15:
-    case 33:
-      return v >= 5;
-    case 16:
-    case 34:
-    case 52:
-      return v >= 4;
-    case 17:
-    case 35:
-    case 53:
-      return v >= 3;
-    default:
-      return false;
-  }
-}
-function invertibleNitrogen(g, centre, ligands) {
-  const at = g.s.atoms[centre];
-  if (at.atomicNumber !== 7 || at.charge !== 0 || !ligands.includes(-2)) return false;
-  const nb = g.nbr[centre];
-  if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
-  if (nb.length !== 3) return true;
-  for (const x of nb) {
-    const [p, q] = nb.filter((b) => b !== x);
-    if (!connectedWithout(g, p, q, centre, x)) return true;
-  }
-  return false;
-}
-function connectedWithout(g, p, q, skip1, skip2) {
-  const seen = /* @__PURE__ */ new Set([p, skip1, skip2]);
-  const stack = [p];
-  while (stack.length > 0) {
-    const v = stack.pop();
-    for (const w of g.nbr[v]) {
-      if (w === q) return true;
-      if (seen.has(w)) continue;
-      seen.add(w);
-      stack.push(w);
-    }
-  }
-  return false;
-}
-function ringSizeThrough(g, a, b, max) {
-  if (seenBuf.length < g.n) {
-    seenBuf = new Int32Array(g.n * 2);
-    queueBuf = new Int32Array(g.n * 2);
-    stamp = 0;
-  }
-  const mark = ++stamp;
-  const seen = seenBuf;
-  const queue = queueBuf;
-  seen[a] = mark;
-  queue[0] = a;
-  let lo = 0;
-  let hi = 1;
-  for (let d = 0; lo < hi && d < max - 1; d++) {
-    let end = hi;
-    for (let q = lo; q < hi; q++) {
-      const x = queue[q];
-      const nx = g.nbr[x];
-      for (let i = 0; i < nx.length; i++) {
-        const y = nx[i];
-        if (x === a && y === b) continue;
-        if (y === b) return d + 2;
-        if (seen[y] === mark) continue;
-        seen[y] = mark;
-        queue[end++] = y;
-      }
-    }
-    lo = hi;
-    hi = end;
-  }
-  return 0;
-}
-function mancudeOf(g) {
-  if (g.mancude === null) g.mancude = perceiveMancude(g.s, g.nbr, g.ord, g.mass);
-  return g.mancude;
-}
-var CHALCOGEN_OR_N, flatDeg, flatNbr, flatOrd, seenBuf, queueBuf, stamp;
-var init_graph2 = __esm({
-  "src/chem/cip/graph.ts"() {
-    "use strict";
-    init_masses();
-    init_mancude();
-    CHALCOGEN_OR_N = /* @__PURE__ */ new Set([7, 8, 16, 34, 52]);
-    flatDeg = new Array(256).fill(0);
-    flatNbr = new Array(512).fill(0);
-    flatOrd = new Array(512).fill(0);
-    seenBuf = new Int32Array(256);
-    queueBuf = new Int32Array(256);
-    stamp = 0;
-  }
-});
-
-// src/chem/cip/digraph.ts
-var H_ATOM, PHANTOM, NODE_BUDGET, NO_KIDS, scratch, CipNode, Digraph;
-var init_digraph = __esm({
-  "src/chem/cip/digraph.ts"() {
-    "use strict";
-    init_graph2();
-    H_ATOM = -1;
-    PHANTOM = -2;
-    NODE_BUDGET = 2e5;
-    NO_KIDS = [];
-    scratch = [];
-    CipNode = class {
-      constructor(id, atom, z, mancudeDup, depth, dist, dup, parent) {
-        this.id = id;
-        this.atom = atom;
-        this.z = z;
-        this.mancudeDup = mancudeDup;
-        this.depth = depth;
-        this.dist = dist;
-        this.dup = dup;
-        this.parent = parent;
-      }
-      id;
-      atom;
-      z;
-      mancudeDup;
-      depth;
-      dist;
-      dup;
-      parent;
-      kids = null;
-      /** Sorted branch lists per (came-from, rule level); see compare.ts. */
-      sorted = null;
-      /** Sorted branches by level for the usual traversal (downwards, inside the scope, plain mode); see down0. */
-      down = null;
-      /** The same for Rule 1a, the level nearly every comparison ends at (kept apart: no array by level for it). */
-      down0 = null;
-      /** Auxiliary descriptor: undefined = not yet computed, null = none. */
-      aux = void 0;
-      auxBusy = false;
-    };
-    Digraph = class {
-      constructor(g, rootAtom, rootElement) {
-        this.g = g;
-        this.rootElement = rootElement;
-        this.root = this.make(rootAtom, 0, 0, false, null);
-      }
-      g;
-      root;
-      nextId = 0;
-      count = 0;
-      /** The node budget ran out: comparisons may be wrong, so the unit gets no descriptor (label.ts). */
-      truncated = false;
-      /** Index into s.stereo of the unit being labelled: its own nodes carry no auxiliary descriptor. */
-      rootElement;
-      /** Proposed Rule 6 reference atom (Hanson et al. 2018), or -1 when unset. */
-      rule6Ref = -1;
-      make(atom, depth, dist, dup, parent, z = -1) {
-        this.count++;
-        const g = this.g;
-        if (z >= 0 && parent !== null) {
-          return new CipNode(this.nextId++, atom, z, true, depth, dist, true, parent);
-        }
-        if (atom === H_ATOM) return new CipNode(this.nextId++, atom, 1, false, depth, dist, false, parent);
-        if (atom === PHANTOM) return new CipNode(this.nextId++, atom, 0, false, depth, dist, false, parent);
-        return new CipNode(this.nextId++, atom, g.z[atom], false, depth, dist, dup, parent);
-      }
-      /**
-       * The Rule 2 mass of a node: a duplicate carries the mass of the atom it duplicates (a mancude one the mean
-       * mass of the atoms its atom could be double-bonded to, as for its atomic number); hydrogen 1.008, a phantom 0.
-       */
-      massOf(n) {
-        if (n.mancudeDup) return mancudeOf(this.g).dupMass[n.parent.atom];
-        if (n.atom === H_ATOM) return 1.008;
-        if (n.atom === PHANTOM) return 0;
-        return this.g.mass[n.atom];
-      }
-      /** A phantom branch, used for the lone pair of a three-coordinate stereocentre. */
-      phantom(parent) {
-        return this.make(PHANTOM, parent.depth + 1, parent.depth + 1, false, parent);
-      }
-      /** Children of `node` in the root's digraph, made on first use (P-92.1.4.2 duplicates included). */
-      kids(node) {
-        if (node.kids) return node.kids;
-        if (node.dup || node.atom < 0) return node.kids = NO_KIDS;
-        if (this.count > NODE_BUDGET) {
-          this.truncated = true;
-          return node.kids = NO_KIDS;
-        }
-        const out = scratch;
-        let cnt = 0;
-        const g = this.g;
-        const a = node.atom;
-        const parent = node.parent;
-        const d = node.depth + 1;
-        const nb = g.nbr[a];
-        const od = g.dupOrd[a];
-        for (let i = 0; i < nb.length; i++) {
-          const b = nb[i];
-          const order = od[i];
-          let mz = -1;
-          if (order === 2) {
-            const m = mancudeOf(g);
-            if (m.edge[m.off[a] + i] === 1) mz = m.dupZ[a];
-          }
-          if (parent !== null && b === parent.atom) {
-            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
-            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, parent.depth, true, node);
-            continue;
-          }
-          let anc = parent;
-          while (anc !== null && anc.atom !== b) anc = anc.parent;
-          if (anc !== null) {
-            out[cnt++] = this.make(b, d, anc.depth, true, node);
-            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
-            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, anc.depth, true, node);
-          } else {
-            out[cnt++] = this.make(b, d, d, false, node);
-            if (mz >= 0) out[cnt++] = this.make(b, d, d, true, node, mz);
-            else for (let k = 1; k < order; k++) out[cnt++] = this.make(b, d, d, true, node);
-          }
-        }
-        for (let h = 0; h < g.hCount[a]; h++) out[cnt++] = this.make(H_ATOM, d, d, false, node);
-        const kids = out.slice(0, cnt);
-        for (let j = 0; j < cnt; j++) out[j] = null;
-        node.kids = kids;
-        return kids;
-      }
-      /** Branches of `node` when it is entered from `from` (null: `node` is the root of the traversal). */
-      branches(node, from) {
-        const kids = this.kids(node);
-        if (from !== null && from === node.parent) return kids;
-        const up = node.parent !== null && node.parent !== from;
-        let size = up ? 1 : 0;
-        for (let i = 0; i < kids.length; i++) if (kids[i] !== from) size++;
-        const out = new Array(size);
-        let k = 0;
-        if (up) out[k++] = node.parent;
-        for (let i = 0; i < kids.length; i++) if (kids[i] !== from) out[k++] = kids[i];
-        return out;
-      }
-    };
-  }
-});
-
-// src/chem/cip/rules.ts
-function rule1a(n) {
-  return n.z;
-}
-function rule1b(n) {
-  return -n.dist;
-}
-function rule2(mass) {
-  return mass;
-}
-function rule3(label) {
-  return label === "Z" ? 2 : label === "E" ? 1 : 0;
-}
-function rule4a(label) {
-  if (label === null) return 0;
-  return label === "R" || label === "S" || label === "M" || label === "P" ? 2 : 1;
-}
-function rule4c(label) {
-  return label === "r" || label === "m" ? 2 : label === "s" || label === "p" ? 1 : 0;
-}
-function rule5(label) {
-  return label === "R" || label === "M" || label === "z" ? 2 : label === "S" || label === "P" || label === "e" ? 1 : 0;
-}
-function rule6(n, ref) {
-  return n.atom === ref ? 1 : 0;
-}
-function likeClass(label) {
-  return label === "R" || label === "M" || label === "r" || label === "m" ? 1 : label === "S" || label === "P" || label === "s" || label === "p" ? 2 : 0;
-}
-function isChiralLabel(label) {
-  return label === "R" || label === "S" || label === "M" || label === "P";
-}
-var RULE_4A, RULE_5, RULE_6;
-var init_rules = __esm({
-  "src/chem/cip/rules.ts"() {
-    "use strict";
-    RULE_4A = 4;
-    RULE_5 = 7;
-    RULE_6 = 8;
-  }
-});
-
-// src/chem/cip/rule4b.ts
-function keyCompare(a, b) {
-  const m = Math.min(a.length, b.length);
-  for (let i = 0; i < m; i++) if (a[i] !== b[i]) return a[i] - b[i];
-  return a.length - b.length;
-}
-function descriptors(rk, x, fx) {
-  const out = [];
-  const q = [x];
-  const qf = [fx];
-  const qParent = [-1];
-  const qPos = [0];
-  const qDepth = [0];
-  for (let i = 0; i < q.length; i++) {
-    const n = q[i];
-    if (!n.dup && n.atom >= 0 && rk.value(RULE_4A2, n) === 2) {
-      const l = rk.aux(n);
-      if (l !== null && isChiralLabel2(l)) {
-        const len = qDepth[i];
-        const key3 = new Array(len + 1);
-        key3[0] = len;
-        for (let k = i, at = len; at >= 1; k = qParent[k], at--) key3[at] = qPos[k];
-        out.push({ label: l, key: key3, group: 0 });
-      }
-    }
-    const s = rk.sorted(n, qf[i], RULE_4A2);
-    let pos = 0;
-    for (let j = 0; j < s.nodes.length; j++) {
-      if (!s.tie[j]) pos = j;
-      q.push(s.nodes[j]);
-      qf.push(n);
-      qParent.push(i);
-      qPos.push(pos);
-      qDepth.push(qDepth[i] + 1);
-    }
-  }
-  out.sort((a, b) => keyCompare(a.key, b.key));
-  let g = 0;
-  for (let i = 0; i < out.length; i++) {
-    if (i > 0 && keyCompare(out[i - 1].key, out[i].key) !== 0) g++;
-    out[i].group = g;
-  }
-  return out;
-}
-function allLeaves(nodes, a, b) {
-  for (let k = a; k < b; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
-  return true;
-}
-function own(rk, n, refClass) {
-  const l = chiralLabel(rk, n);
-  return l === null ? 0 : likeClass2(l) === refClass ? 2 : 1;
-}
-function chiralLabel(rk, n) {
-  if (n.dup || n.atom < 0 || rk.value(RULE_4A2, n) !== 2) return null;
-  const l = rk.aux(n);
-  return l !== null && isChiralLabel2(l) ? l : null;
-}
-function orderedPairs(rk, x, fx, refClass, memo) {
-  const hit = memo.get(x);
-  if (hit) return hit;
-  const seq = [];
-  const q = [x];
-  const qf = [fx];
-  for (let i = 0; i < q.length; i++) {
-    const n = q[i];
-    const l = chiralLabel(rk, n);
-    if (l !== null) seq.push(likeClass2(l) === refClass ? 1 : 0);
-    const s = rk.sorted(n, qf[i], RULE_4A2);
-    const nodes = s.nodes.slice();
-    for (let a = 0; a < nodes.length; ) {
-      let b = a + 1;
-      while (b < nodes.length && s.tie[b]) b++;
-      if (b - a > 1 && !allLeaves(nodes, a, b)) {
-        const run10 = nodes.slice(a, b);
-        run10.sort(
-          (u, v) => own(rk, v, refClass) - own(rk, u, refClass) || lexCompare(orderedPairs(rk, v, n, refClass, memo), orderedPairs(rk, u, n, refClass, memo))
-        );
-        for (let k = a; k < b; k++) nodes[k] = run10[k - a];
-      }
-      a = b;
-    }
-    for (const c of nodes) {
-      q.push(c);
-      qf.push(n);
-    }
-  }
-  memo.set(x, seq);
-  return seq;
-}
-function lexCompare(a, b) {
-  const m = Math.min(a.length, b.length);
-  for (let i = 0; i < m; i++) if (a[i] !== b[i]) return a[i] - b[i];
-  return a.length - b.length;
-}
-function bestPairs(rk, x, fx) {
-  const entries = descriptors(rk, x, fx);
-  if (entries.length === 0) return [];
-  const first = entries[0].group;
-  const classes = /* @__PURE__ */ new Set();
-  for (const e of entries) {
-    if (e.group !== first) break;
-    classes.add(likeClass2(e.label));
-  }
-  let best = null;
-  for (const cls of classes) {
-    const seq = orderedPairs(rk, x, fx, cls, /* @__PURE__ */ new Map());
-    if (best === null || lexCompare(seq, best) > 0) best = seq;
-  }
-  return best ?? [];
-}
-function compareRule4b(rk, x, fx, y, fy) {
-  const c = lexCompare(bestPairs(rk, x, fx), bestPairs(rk, y, fy));
-  return c > 0 ? 1 : c < 0 ? -1 : 0;
-}
-var RULE_4A2, isChiralLabel2, likeClass2;
-var init_rule4b = __esm({
-  "src/chem/cip/rule4b.ts"() {
-    "use strict";
-    init_rules();
-    RULE_4A2 = RULE_4A;
-    isChiralLabel2 = isChiralLabel;
-    likeClass2 = likeClass;
-  }
-});
-
-// src/chem/cip/compare.ts
-function takeQueue(x, fx, y, fy) {
-  const d = poolDepth++;
-  let q = pool[d];
-  if (q === void 0) q = pool[d] = { x: [], fx: [], y: [], fy: [] };
-  q.x[0] = x;
-  q.fx[0] = fx;
-  q.y[0] = y;
-  q.fy[0] = fy;
-  return q;
-}
-function pushPairs(q, len, sx, nx, sy, ny, m) {
-  for (let j = 0; j < m; j++) {
-    const a = sx[j];
-    const b = sy[j];
-    if ((a.dup || a.atom < 0) && (b.dup || b.atom < 0)) continue;
-    q.x[len] = a;
-    q.fx[len] = nx;
-    q.y[len] = b;
-    q.fy[len] = ny;
-    len++;
-  }
-  return len;
-}
-function releaseQueue(q, len) {
-  poolDepth--;
-  clearQueue(q, len);
-}
-function clearQueue(q, len) {
-  for (let i = 0; i < len; i++) {
-    q.x[i] = NO_NODE;
-    q.fx[i] = null;
-    q.y[i] = NO_NODE;
-    q.fy[i] = null;
-  }
-}
-function anyTrue(t) {
-  for (let i = 0; i < t.length; i++) if (t[i]) return true;
-  return false;
-}
-function allLeaves2(nodes, i, j) {
-  for (let k = i; k < j; k++) if (!nodes[k].dup && nodes[k].atom >= 0) return false;
-  return true;
-}
-function invertChiral(l) {
-  if (l === "e") return "z";
-  if (l === "z") return "e";
-  return l === "R" ? "S" : l === "S" ? "R" : l === "M" ? "P" : l === "P" ? "M" : l;
-}
-var RULE_1A, RULE_1B, RULE_2, RULE_3, RULE_4A3, RULE_4B, RULE_4C, RULE_52, RULE_62, rule1a2, rule1b2, rule22, rule32, rule4a2, rule4c2, rule52, rule62, pool, poolDepth, Ranker, NO_NODE, NO_TIES, EMPTY2, LEVELS;
-var init_compare = __esm({
-  "src/chem/cip/compare.ts"() {
-    "use strict";
-    init_digraph();
-    init_rules();
-    init_rule4b();
-    RULE_1A = 0;
-    RULE_1B = 1;
-    RULE_2 = 2;
-    RULE_3 = 3;
-    RULE_4A3 = 4;
-    RULE_4B = 5;
-    RULE_4C = 6;
-    RULE_52 = 7;
-    RULE_62 = 8;
-    rule1a2 = rule1a;
-    rule1b2 = rule1b;
-    rule22 = rule2;
-    rule32 = rule3;
-    rule4a2 = rule4a;
-    rule4c2 = rule4c;
-    rule52 = rule5;
-    rule62 = rule6;
-    pool = [];
-    poolDepth = 0;
-    Ranker = class {
-      constructor(dg, auxOf) {
-        this.dg = dg;
-        this.auxOf = auxOf;
-        this.scope = dg.root;
-        const g = dg.g;
-        const several = g.stereoCount > 1;
-        this.active = [
-          true,
-          true,
-          g.isotopes,
-          g.hasBondStereo && several,
-          several,
-          several,
-          several,
-          several,
-          false
-        ];
-      }
-      dg;
-      auxOf;
-      /** Rules that cannot separate anything in this structure are skipped (saves exploring tied branches). */
-      active;
-      /**
-       * The node whose descriptor is being found (the root at top level). Following Hanson et al. 2018, descriptors
-       * are assigned from the outermost nodes inward: while ranking at `scope`, only the descriptors of nodes
-       * farther out on the same branch (its descendants in the root's digraph) are known; any other node counts as
-       * non-stereogenic. This makes every auxiliary descriptor independent of the order of computation.
-       */
-      scope;
-      /**
-       * Mirror mode: compare as in the mirror image, where every chiral descriptor is inverted (R/S, M/P) and the
-       * pseudoasymmetric ones and E/Z stay. Only Rule 5 (and Rule 6 exploration after it) can tell the difference.
-       */
-      mirror = false;
-      /** Is `n` the scope node or farther out on its branch? */
-      inScope(n) {
-        const sc = this.scope;
-        if (sc === this.dg.root) return true;
-        let x = n;
-        while (x !== null && x.depth > sc.depth) x = x.parent;
-        return x === sc;
-      }
-      /** The auxiliary descriptor of `n` as seen from the current scope. */
-      aux(n) {
-        return this.inScope(n) ? this.auxOf(n) : null;
-      }
-      /** Run `f` with `node` as the scope (while finding the auxiliary descriptor of `node`). */
-      within(node, f) {
-        const saved = this.scope;
-        const savedMirror = this.mirror;
-        this.scope = node;
-        this.mirror = false;
-        try {
-          return f();
-        } finally {
-          this.scope = saved;
-          this.mirror = savedMirror;
-        }
-      }
-      setRule6(ref) {
-        this.dg.rule6Ref = ref;
-        this.active[RULE_62] = ref >= 0;
-      }
-      value(rule4, n) {
-        switch (rule4) {
-          case RULE_1A:
-            return rule1a2(n);
-          case RULE_1B:
-            return rule1b2(n);
-          case RULE_2:
-            return rule22(this.dg.massOf(n));
-          case RULE_3:
-            return n.dup || n.atom < 0 || this.dg.g.bondAt[n.atom] < 0 ? 0 : rule32(this.aux(n));
-          case RULE_4A3:
-            return this.stereoValue(n, rule4a2);
-          case RULE_4C:
-            return this.stereoValue(n, rule4c2);
-          case RULE_52:
-            return this.stereoValue(n, this.mirror ? (l) => rule52(invertChiral(l)) : rule52);
-          case RULE_62:
-            return rule62(n, this.dg.rule6Ref);
-          default:
-            return 0;
-        }
-      }
-      stereoValue(n, f) {
-        if (n.dup || n.atom < 0) return 0;
-        const g = this.dg.g;
-        if (g.tetraAt[n.atom] < 0 && g.bondAt[n.atom] < 0 && g.axialAt[n.atom] < 0) return 0;
-        return f(this.aux(n));
-      }
-      /**
-       * Compare branch x (entered from fx) with branch y (entered from fy) under one rule:
-       * > 0 when x ranks higher, < 0 when y does, 0 when the rule cannot tell them apart.
-       */
-      compareRule(rule4, x, fx, y, fy) {
-        if (y === null) return 1;
-        if (rule4 === RULE_4B) return compareRule4b(this, x, fx, y, fy);
-        let c = this.value(rule4, x) - this.value(rule4, y);
-        if (c !== 0) return c > 0 ? 1 : -1;
-        if ((x.dup || x.atom < 0) && (y.dup || y.atom < 0)) return 0;
-        if (rule4 === RULE_1A) return this.compare1a(x, fx, y, fy);
-        const q = takeQueue(x, fx, y, fy);
-        const qx = q.x;
-        const qfx = q.fx;
-        const qy = q.y;
-        const qfy = q.fy;
-        let len = 1;
-        try {
-          for (let i = 0; i < len; i++) {
-            const nx = qx[i];
-            const ny = qy[i];
-            const sx = this.sorted(nx, qfx[i], rule4).nodes;
-            const sy = this.sorted(ny, qfy[i], rule4).nodes;
-            const m = sx.length < sy.length ? sx.length : sy.length;
-            for (let j = 0; j < m; j++) {
-              c = this.value(rule4, sx[j]) - this.value(rule4, sy[j]);
-              if (c !== 0) return c > 0 ? 1 : -1;
-            }
-            len = pushPairs(q, len, sx, nx, sy, ny, m);
-          }
-        } finally {
-          releaseQueue(q, len);
-        }
-        return 0;
-      }
-      /**
-       * compareRule under Rule 1a, one sphere at a time: first the atomic numbers of every set of the sphere, read
-       * from lists ordered by atomic number alone (the full order only permutes runs of equal atomic number, so the
-       * numbers read are the same); only when the whole sphere ties are the lists fully ordered, since that order
-       * pairs the nodes of the next sphere. The same sets are compared in the same order as node by node, and the
-       * deep ordering of runs of equal atomic number is skipped at the sphere that decides.
-       */
-      compare1a(x, fx, y, fy) {
-        const q = takeQueue(x, fx, y, fy);
-        const qx = q.x;
-        const qfx = q.fx;
-        const qy = q.y;
-        const qfy = q.fy;
-        let len = 1;
-        let lo = 0;
-        try {
-          while (lo < len) {
-            const hi = len;
-            for (let i = lo; i < hi; i++) {
-              const sx = this.sorted0(qx[i], qfx[i]).nodes;
-              const sy = this.sorted0(qy[i], qfy[i]).nodes;
-              const m = sx.length < sy.length ? sx.length : sy.length;
-              for (let j = 0; j < m; j++) {
-                const c = sx[j].z - sy[j].z;
-                if (c !== 0) return c > 0 ? 1 : -1;
-              }
-              if (sx.length !== sy.length) {
-                const longer = sx.length > sy.length ? sx : sy;
-                for (let j = m; j < longer.length; j++) if (longer[j].z > 0) return longer === sx ? 1 : -1;
-              }
-            }
-            for (let i = lo; i < hi; i++) {
-              const nx = qx[i];
-              const ny = qy[i];
-              const sx = this.sorted(nx, qfx[i], RULE_1A).nodes;
-              const sy = this.sorted(ny, qfy[i], RULE_1A).nodes;
-              const m = sx.length < sy.length ? sx.length : sy.length;
-              len = pushPairs(q, len, sx, nx, sy, ny, m);
-            }
-            lo = hi;
-          }
-        } finally {
-          releaseQueue(q, len);
-        }
-        return 0;
-      }
-      /** Compare under every active rule up to `level`: ±(rule index + 1) for the deciding rule, 0 for a tie. */
-      compareUpTo(level2, x, fx, y, fy) {
-        for (let r = 0; r <= level2; r++) {
-          if (!this.active[r]) continue;
-          const c = this.compareRule(r, x, fx, y, fy);
-          if (c !== 0) return c > 0 ? r + 1 : -(r + 1);
-        }
-        return 0;
-      }
-      /** The branches of `node` entered from `from`, sorted highest first under rules up to `level`. */
-      sorted(node, from, level2) {
-        if (level2 === RULE_1A) {
-          const s0 = this.sorted0(node, from);
-          if (s0.pending) this.finish0(s0, node);
-          return s0;
-        }
-        if (node.dup || node.atom < 0) return EMPTY2;
-        const plain = from === node.parent && !this.mirror && this.dg.rule6Ref < 0 && (level2 < RULE_3 || this.inScope(node));
-        if (plain) {
-          if (node.down === null) node.down = new Array(LEVELS);
-          const hit2 = node.down[level2];
-          if (hit2 !== void 0) return hit2;
-          const out2 = this.sortAt(node, from, level2);
-          node.down[level2] = out2;
-          return out2;
-        }
-        const hidden = level2 >= RULE_3 && (from !== node.parent || !this.inScope(node)) ? 1 : 0;
-        const mirrored2 = this.mirror && level2 >= RULE_52 ? 2 : 0;
-        const num = ((from === null ? 0 : from.id + 1) * 16 + level2) * 4 + hidden + mirrored2;
-        const key3 = level2 >= RULE_62 ? `${num}:${this.dg.rule6Ref}` : num;
-        if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
-        const hit = node.sorted.get(key3);
-        if (hit) return hit;
-        const out = this.sortAt(node, from, level2);
-        node.sorted.set(key3, out);
-        return out;
-      }
-      /**
-       * The Rule 1a list of the branches of `node` entered from `from`, cached as sorted() caches it, but possibly
-       * still pending (ordered by atomic number alone).
-       */
-      sorted0(node, from) {
-        if (node.dup || node.atom < 0) return EMPTY2;
-        if (from === node.parent && !this.mirror && this.dg.rule6Ref < 0) {
-          const hit2 = node.down0;
-          if (hit2 !== null) return hit2;
-          const out2 = this.byAtomicNumber(node, from);
-          node.down0 = out2;
-          return out2;
-        }
-        const key3 = (from === null ? 0 : from.id + 1) * 64;
-        if (node.sorted === null) node.sorted = /* @__PURE__ */ new Map();
-        const hit = node.sorted.get(key3);
-        if (hit) return hit;
-        const out = this.byAtomicNumber(node, from);
-        node.sorted.set(key3, out);
-        return out;
-      }
-      /** The branches by atomic number, highest first (stable): a pending Rule 1a list. */
-      byAtomicNumber(node, from) {
-        const br = this.dg.branches(node, from);
-        const nodes = br === node.kids ? br.slice() : br;
-        for (let i = 1; i < nodes.length; i++) {
-          const v = nodes[i];
-          let j = i - 1;
-          while (j >= 0 && nodes[j].z < v.z) {
-            nodes[j + 1] = nodes[j];
-            j--;
-          }
-          nodes[j + 1] = v;
-        }
-        return { nodes, tie: NO_TIES, pending: true };
-      }
-      /** Order the runs of equal atomic number of a pending Rule 1a list by their whole branches, in place. */
-      finish0(out, node) {
-        const nodes = out.nodes;
-        out.tie = new Array(nodes.length).fill(false);
-        for (let i = 0; i < nodes.length; ) {
-          let j = i + 1;
-          while (j < nodes.length && nodes[j].z === nodes[i].z) j++;
-          if (j - i > 1) {
-            if (allLeaves2(nodes, i, j)) for (let x = i + 1; x < j; x++) out.tie[x] = true;
-            else this.sortRun(nodes, i, j, node, RULE_1A, out);
-          }
-          i = j;
-        }
-        out.pending = false;
-      }
-      sortAt(node, from, level2) {
-        const base = this.sorted(node, from, level2 - 1);
-        if (!this.active[level2] || !anyTrue(base.tie)) return base;
-        const out = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
-        for (let i = 0; i < out.nodes.length; ) {
-          let j = i + 1;
-          while (j < out.nodes.length && base.tie[j]) j++;
-          if (j - i > 1) this.sortRun(out.nodes, i, j, node, level2, out);
-          i = j;
-        }
-        return out;
-      }
-      /**
-       * Sort nodes[i..j) (all branches of `centre`, tied under the rules before `rule`) by `rule` alone, highest
-       * first, writing them and their ties into `out` at the same places.
-       */
-      sortRun(nodes, i, j, centre, rule4, out) {
-        if (j - i === 2) {
-          const a = nodes[i];
-          const b = nodes[i + 1];
-          const c = this.compareRule(rule4, a, centre, b, centre);
-          out.nodes[i] = c < 0 ? b : a;
-          out.nodes[i + 1] = c < 0 ? a : b;
-          out.tie[i] = false;
-          out.tie[i + 1] = c === 0;
-          return out;
-        }
-        const run10 = nodes.slice(i, j);
-        const k = run10.length;
-        const m = new Array(k * k).fill(0);
-        for (let a = 0; a < k; a++) {
-          for (let b = a + 1; b < k; b++) {
-            const c = this.compareRule(rule4, run10[a], centre, run10[b], centre);
-            m[a * k + b] = c;
-            m[b * k + a] = -c;
-          }
-        }
-        const order = run10.map((_, x) => x);
-        for (let x = 1; x < k; x++) {
-          const v = order[x];
-          let y = x - 1;
-          while (y >= 0 && m[order[y] * k + v] < 0) {
-            order[y + 1] = order[y];
-            y--;
-          }
-          order[y + 1] = v;
-        }
-        for (let x = 0; x < k; x++) {
-          out.nodes[i + x] = run10[order[x]];
-          out.tie[i + x] = x > 0 && m[order[x - 1] * k + order[x]] === 0;
-        }
-        return out;
-      }
-    };
-    NO_NODE = new CipNode(-1, -2, 0, false, 0, 0, false, null);
-    NO_TIES = [];
-    EMPTY2 = { nodes: [], tie: [], pending: false };
-    LEVELS = 9;
-  }
-});
-
-// src/chem/cip/rank.ts
-function orderBy(m, k) {
-  const order = new Array(k);
-  for (let i = 0; i < k; i++) order[i] = i;
-  for (let i = 1; i < k; i++) {
-    const v = order[i];
-    let j = i - 1;
-    while (j >= 0 && m[order[j] * k + v] < 0) {
-      order[j + 1] = order[j];
-      j--;
-    }
-    order[j + 1] = v;
-  }
-  return order;
-}
-function rankLigands(rk, centre, ligands, level2) {
-  const k = ligands.length;
-  const m = new Array(k * k).fill(0);
-  let late = false;
-  for (let i = 0; i < k; i++) {
-    for (let j = i + 1; j < k; j++) {
-      const c = rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
-      m[i * k + j] = c;
-      m[j * k + i] = -c;
-      if (Math.abs(c) - 1 >= RULE_5) late = true;
-    }
-  }
-  const order = orderBy(m, k);
-  const tieWithPrev = new Array(k);
-  let tied = false;
-  for (let i = 0; i < k; i++) {
-    const t = i > 0 && m[order[i - 1] * k + order[i]] === 0;
-    tieWithPrev[i] = t;
-    if (t) tied = true;
-  }
-  let pseudo = false;
-  if (!tied && late) {
-    const mm = new Array(k * k).fill(0);
-    const saved = rk.mirror;
-    rk.mirror = true;
-    try {
-      for (let i = 0; i < k; i++) {
-        for (let j = i + 1; j < k; j++) {
-          const c0 = m[i * k + j];
-          const c = Math.abs(c0) - 1 < RULE_5 ? c0 : rk.compareUpTo(level2, ligands[i], centre, ligands[j], centre);
-          mm[i * k + j] = c;
-          mm[j * k + i] = -c;
-        }
-      }
-    } finally {
-      rk.mirror = saved;
-    }
-    const mirror2 = orderBy(mm, k);
-    const pos = new Array(k);
-    for (let p = 0; p < k; p++) pos[order[p]] = p;
-    const perm = new Array(k);
-    for (let p = 0; p < k; p++) perm[p] = pos[mirror2[p]];
-    pseudo = !isEvenPermutation(perm);
-  }
-  return { order, tied, pseudo, tieWithPrev };
-}
-function isEvenPermutation(p) {
-  const seen = p.map(() => false);
-  let swaps = 0;
-  for (let i = 0; i < p.length; i++) {
-    if (seen[i]) continue;
-    let j = i;
-    let len = 0;
-    while (!seen[j]) {
-      seen[j] = true;
-      j = p[j];
-      len++;
-    }
-    swaps += len - 1;
-  }
-  return swaps % 2 === 0;
-}
-function handedness(winding, rankOf) {
-  const byRank = [0, 0, 0, 0];
-  rankOf.forEach((r, i) => byRank[r] = i);
-  const target = [byRank[3], byRank[0], byRank[1], byRank[2]];
-  const same = isEvenPermutation(target);
-  const w = same ? winding : winding === "@" ? "@@" : "@";
-  return w === "@" ? "R" : "S";
-}
-var init_rank = __esm({
-  "src/chem/cip/rank.ts"() {
-    "use strict";
-    init_rules();
-  }
-});
-
-// src/chem/cip/aux.ts
-function ligandBranch(dg, centre, lig, used) {
-  const br = dg.branches(centre, null);
-  if (lig === LONE_PAIR) return dg.phantom(centre);
-  if (lig === IMPLICIT_H) {
-    for (const b of br) if (b.atom === H_ATOM && !used.includes(b)) return b;
-    return null;
-  }
-  for (const b of br) if (b.atom === lig && !b.dup && !used.includes(b)) return b;
-  for (const b of br) if (b.atom === lig && !used.includes(b)) return b;
-  return null;
-}
-function ligandBranches(rk, centre, e) {
-  const ligs = [];
-  for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, centre, l, ligs);
-    if (b === null) return null;
-    ligs.push(b);
-  }
-  return ligs;
-}
-function tetrahedralLabel(rk, centre, e, level2 = RULE_5) {
-  const ligs = ligandBranches(rk, centre, e);
-  if (ligs === null) return null;
-  const r = rankLigands(rk, centre, ligs, level2);
-  if (r.tied) return null;
-  const rankOf = [0, 0, 0, 0];
-  r.order.forEach((li, pos) => rankOf[li] = pos);
-  const h = handedness(e.winding, rankOf);
-  return r.pseudo ? h === "R" ? "r" : "s" : h;
-}
-function tetrahedralRule6(rk, centre, e) {
-  const ligs = ligandBranches(rk, centre, e);
-  if (ligs === null) return null;
-  const r = rankLigands(rk, centre, ligs, RULE_5);
-  const found = /* @__PURE__ */ new Set();
-  const savedRef = rk.dg.rule6Ref;
-  try {
-    for (let i = 1; i < r.order.length; i++) {
-      if (!r.tieWithPrev[i]) continue;
-      for (const k of [r.order[i - 1], r.order[i]]) {
-        if (ligs[k].atom < 0) continue;
-        rk.setRule6(ligs[k].atom);
-        const l = tetrahedralLabel(rk, centre, e, RULE_6);
-        if (l !== null) found.add(l);
-      }
-    }
-  } finally {
-    rk.setRule6(savedRef);
-  }
-  return found.size === 1 ? [...found][0] : null;
-}
-function endBranches(dg, end, from, other) {
-  return dg.branches(end, from).filter((b) => b.atom !== other);
-}
-function endRank(rk, end, cands, ref, level2 = RULE_5) {
-  if (cands.length === 0) return null;
-  let top = cands[0];
-  let rule53 = false;
-  if (cands.length >= 2) {
-    const c = rk.compareUpTo(level2, cands[0], end, cands[1], end);
-    if (c === 0) return null;
-    top = c > 0 ? cands[0] : cands[1];
-    rule53 = Math.abs(c) - 1 === RULE_5;
-  }
-  const refHigh = ref === IMPLICIT_H ? top.atom === H_ATOM : top.atom === ref && !top.dup;
-  return { refHigh, rule5: rule53 };
-}
-function ezLabel(e, end0, end1) {
-  const cis = e.relation === "cis" ? end0.refHigh === end1.refHigh : end0.refHigh !== end1.refHigh;
-  const lower = end0.rule5 !== end1.rule5;
-  return cis ? lower ? "z" : "Z" : lower ? "e" : "E";
-}
-function doubleBondLabel(rk, node, e) {
-  const dg = rk.dg;
-  const i = e.ends[0] === node.atom ? 0 : 1;
-  const other = e.ends[1 - i];
-  let partner = null;
-  if (node.parent !== null && node.parent.atom === other && !node.parent.dup) partner = node.parent;
-  else for (const k of dg.kids(node)) if (k.atom === other && !k.dup) partner = k;
-  if (partner === null) return null;
-  const here = endRank(rk, node, endBranches(dg, node, null, other), e.refs[i]);
-  if (here === null) return null;
-  const there = endRank(rk, partner, endBranches(dg, partner, null, node.atom), e.refs[1 - i]);
-  if (there === null) return null;
-  const label = i === 0 ? ezLabel(e, here, there) : ezLabel(e, there, here);
-  if (partner.aux === void 0) partner.aux = label;
-  return label;
-}
-function axialLabel(rks, ends, e, level2 = RULE_5) {
-  const rankOf = [0, 0, 0, 0];
-  let pseudo = false;
-  for (let i = 0; i < 2; i++) {
-    const rk = rks[i];
-    const end = ends[i];
-    const a = ligandBranch(rk.dg, end, e.ligands[2 * i], NONE2);
-    const b = ligandBranch(rk.dg, end, e.ligands[2 * i + 1], a !== null ? [a] : NONE2);
-    if (a === null || b === null) return null;
-    const r = rankLigands(rk, end, [a, b], level2);
-    if (r.tied) return null;
-    pseudo = pseudo !== r.pseudo;
-    rankOf[2 * i + r.order[0]] = 2 * i;
-    rankOf[2 * i + r.order[1]] = 2 * i + 1;
-  }
-  const h = handedness(e.winding, rankOf);
-  const label = h === "R" ? "M" : "P";
-  return pseudo ? label === "M" ? "m" : "p" : label;
-}
-function farEnd(dg, node, other) {
-  const g = dg.g;
-  let frontier = [node];
-  const seen = /* @__PURE__ */ new Set([node]);
-  for (let step = 0; step < 8 && frontier.length > 0; step++) {
-    const next = [];
-    for (const x of frontier) {
-      if (x !== node && x.atom !== other && g.nbr[x.atom].length !== 2) continue;
-      const around = [...dg.kids(x), ...x.parent ? [x.parent] : []];
-      for (const y of around) {
-        if (y.dup || y.atom < 0 || seen.has(y)) continue;
-        if (y.atom === other) return y;
-        seen.add(y);
-        if (g.nbr[y.atom].length === 2 && g.dupOrd[y.atom].every((o) => o === 2)) next.push(y);
-      }
-    }
-    frontier = next;
-  }
-  return null;
-}
-function axialAux(rk, node, e) {
-  const i = e.ends[0] === node.atom ? 0 : 1;
-  const far = farEnd(rk.dg, node, e.ends[1 - i]);
-  if (far === null) return null;
-  const ends = i === 0 ? [node, far] : [far, node];
-  const label = axialLabel([rk, rk], ends, e);
-  if (far.aux === void 0) far.aux = label;
-  return label;
-}
-function auxFor(dg) {
-  return (rk) => (node) => {
-    if (node.aux !== void 0) return node.aux;
-    if (node.auxBusy || node === dg.root || node.dup || node.atom < 0) return null;
-    const g = dg.g;
-    node.auxBusy = true;
-    let label = null;
-    const t = g.tetraAt[node.atom];
-    const b = g.bondAt[node.atom];
-    const x = g.axialAt[node.atom];
-    if (t >= 0 && t !== dg.rootElement && g.auxAllowed[t]) {
-      const e = g.s.stereo[t];
-      label = rk.within(node, () => tetrahedralLabel(rk, node, e));
-      if (label === null && g.auxRule6[t]) label = rk.within(node, () => tetrahedralRule6(rk, node, e));
-    } else if (b >= 0 && b !== dg.rootElement && g.auxAllowed[b]) {
-      label = rk.within(node, () => doubleBondLabel(rk, node, g.s.stereo[b]));
-    } else if (x >= 0 && x !== dg.rootElement && g.auxAllowed[x]) {
-      label = rk.within(node, () => axialAux(rk, node, g.s.stereo[x]));
-    }
-    node.auxBusy = false;
-    node.aux = label;
-    return label;
-  };
-}
-function newRanker(dg) {
-  const rk = new Ranker(dg, (n) => aux(n));
-  const aux = auxFor(dg)(rk);
-  return rk;
-}
-var NONE2;
-var init_aux = __esm({
-  "src/chem/cip/aux.ts"() {
-    "use strict";
-    init_types();
-    init_digraph();
-    init_compare();
-    init_rank();
-    init_rules();
-    NONE2 = [];
-  }
-});
-
-// src/chem/cip/label.ts
-function ranker(g, root, element, ref, cache2) {
-  let rk = cache2?.get(root);
-  if (rk === void 0) {
-    rk = newRanker(new Digraph(g, root, element));
-    cache2?.set(root, rk);
-  }
-  rk.setRule6(ref);
-  return rk;
-}
-function towardOther(g, end, other) {
-  const nb = g.nbr[end];
-  if (nb.includes(other)) return other;
-  for (let i = 0; i < nb.length; i++) if (g.ord[end][i] >= 2) return nb[i];
-  return -1;
-}
-function tetrahedral2(g, index, e, ref, c) {
-  const rk = ranker(g, e.centre, index, ref, c);
-  const l = tetrahedralLabel(rk, rk.dg.root, e, ref >= 0 ? RULE_6 : RULE_5);
-  return rk.dg.truncated ? null : l;
-}
-function tiedTetrahedral(g, index, e, c) {
-  const rk = ranker(g, e.centre, index, -1, c);
-  const ligs = [];
-  for (const l of e.ligands) {
-    const b = ligandBranch(rk.dg, rk.dg.root, l, ligs);
-    if (b === null) return [];
-    ligs.push(b);
-  }
-  const r = rankLigands(rk, rk.dg.root, ligs, RULE_5);
-  const out = [];
-  for (let i = 1; i < r.order.length; i++) {
-    if (!r.tieWithPrev[i]) continue;
-    for (const k of [r.order[i - 1], r.order[i]])
-      if (e.ligands[k] >= 0 && !out.includes(e.ligands[k])) out.push(e.ligands[k]);
-  }
-  return out;
-}
-function doubleBond(g, index, e, ref, c) {
-  const level2 = ref >= 0 ? RULE_6 : RULE_5;
-  const high = [];
-  for (let i = 0; i < 2; i++) {
-    const end = e.ends[i];
-    const excl = towardOther(g, end, e.ends[1 - i]);
-    const rk = ranker(g, end, index, ref, c);
-    const h = endRank(rk, rk.dg.root, endBranches(rk.dg, rk.dg.root, null, excl), e.refs[i], level2);
-    if (h === null || rk.dg.truncated) return null;
-    high.push(h);
-  }
-  return ezLabel(e, high[0], high[1]);
-}
-function axial(g, index, e, ref, c) {
-  const level2 = ref >= 0 ? RULE_6 : RULE_5;
-  const r0 = ranker(g, e.ends[0], index, ref, c);
-  const r1 = ranker(g, e.ends[1], index, ref, c);
-  const l = axialLabel([r0, r1], [r0.dg.root, r1.dg.root], e, level2);
-  return r0.dg.truncated || r1.dg.truncated ? null : l;
-}
-function labelWith(g, index, e, ref, c) {
-  if (e.kind === "tetrahedral") return tetrahedral2(g, index, e, ref, c);
-  if (e.kind === "double-bond") return doubleBond(g, index, e, ref, c);
-  return axial(g, index, e, ref, c);
-}
-function rule6Candidates(g, index, e, c) {
-  if (e.kind === "tetrahedral") return tiedTetrahedral(g, index, e, c);
-  if (e.kind === "double-bond") {
-    const out = [];
-    for (let i = 0; i < 2; i++) {
-      const excl = towardOther(g, e.ends[i], e.ends[1 - i]);
-      for (const b of g.nbr[e.ends[i]]) if (b !== excl) out.push(b);
-    }
-    return out;
-  }
-  return e.ligands.filter((l) => l >= 0);
-}
-function labelPlain(g, index) {
-  if (g.ringFixed[index]) return null;
-  return labelWith(g, index, g.s.stereo[index], -1);
-}
-function labelRule6(g, index) {
-  if (g.ringFixed[index]) return null;
-  const e = g.s.stereo[index];
-  const found = /* @__PURE__ */ new Set();
-  const cache2 = /* @__PURE__ */ new Map();
-  for (const ref of rule6Candidates(g, index, e, cache2)) {
-    const l = labelWith(g, index, e, ref, cache2);
-    if (l !== null) found.add(l);
-  }
-  return found.size === 1 ? [...found][0] : null;
-}
-var init_label = __esm({
-  "src/chem/cip/label.ts"() {
-    "use strict";
-    init_digraph();
-    init_aux();
-    init_rank();
-    init_rules();
-  }
-});
-
-// src/chem/cip/helix.ts
-var init_helix = __esm({
-  "src/chem/cip/helix.ts"() {
-    "use strict";
-  }
-});
-
-// src/chem/cip/index.ts
-function assignCip(s) {
-  if (s.stereo.length === 0) return [];
-  const g = buildGraph2(s);
-  const labels = s.stereo.map((_, i) => labelPlain(g, i));
-  if (labels.some((l, i) => l === null && !g.ringFixed[i])) {
-    g.auxAllowed = labels.map((l) => l !== null);
-    const by6 = [];
-    for (let i = 0; i < labels.length; i++) {
-      if (labels[i] !== null) continue;
-      labels[i] = labelRule6(g, i);
-      if (labels[i] !== null) by6.push(i);
-    }
-    const open = labels.some((l, i) => l === null && !g.ringFixed[i]);
-    if (by6.length > 0 && open) {
-      g.auxAllowed = labels.map((l) => l !== null);
-      for (const i of by6) g.auxRule6[i] = true;
-      for (let i = 0; i < labels.length; i++) {
-        if (labels[i] === null && !g.ringFixed[i]) labels[i] = labelPlain(g, i) ?? labelRule6(g, i);
-      }
-    }
-  }
-  return s.stereo.map((e, element) => ({
-    element,
-    label: labels[element],
-    atoms: e.kind === "tetrahedral" ? [e.centre] : [e.ends[0], e.ends[1]]
-  }));
-}
-var init_cip = __esm({
-  "src/chem/cip/index.ts"() {
-    "use strict";
-    init_graph2();
-    init_label();
-    init_helix();
-  }
-});
-
 // src/chem/labels.ts
 function labelUnits(s) {
   return assignCip(s);
@@ -44448,675 +45963,200 @@ var init_normalize = __esm({
   }
 });
 
-// src/chem/perceive-bonds.ts
-function doubleCount(s, g, i) {
-  let d = 0;
-  for (const b of g.nbrBonds[i]) if (s.bonds[b].order === 2) d++;
-  return d;
-}
-function isCumuleneInterior(s, g, i) {
-  return g.nbrs[i].length === 2 && s.atoms[i].hCount === 0 && doubleCount(s, g, i) === 2;
-}
-function endTokens(s, g, e, partner) {
-  const a = s.atoms[e];
-  if (a.radical !== 0) return null;
-  const n = s.atoms.length;
-  const subs = [];
-  for (const x of g.nbrs[e]) if (x !== partner) subs.push(x);
-  for (const b of g.nbrBonds[e]) {
-    const bond = s.bonds[b];
-    const other = bond.a === e ? bond.b : bond.a;
-    if (other !== partner && bond.order !== 1) return null;
-  }
-  if (a.atomicNumber === 6 && a.charge === 0) {
-    if (subs.length + a.hCount !== 2 || a.hCount > 1) return null;
-    if (a.hCount === 1) subs.push(hToken(n, e));
-    return [subs[0], subs[1]];
-  }
-  if (a.atomicNumber === 7) {
-    if (a.charge === 0 && subs.length === 1 && a.hCount === 0) return [subs[0], lpToken(n, e)];
-    if (a.charge === 1 && subs.length + a.hCount === 2 && a.hCount <= 1 && subs.length >= 1) {
-      if (a.hCount === 1) subs.push(hToken(n, e));
-      return [subs[0], subs[1]];
-    }
-  }
-  return null;
-}
-function ringOk(rings, bond) {
-  const r = rings.smallestRingOfBond[bond];
-  return r === 0 || r >= 8;
-}
-function bondCandidates(s, g, rings, aromaticBond) {
-  const out = [];
-  const seen = new Uint8Array(s.bonds.length);
-  for (let bi = 0; bi < s.bonds.length; bi++) {
-    const b = s.bonds[bi];
-    if (seen[bi] || b.order !== 2 || aromaticBond[bi] || b.aromatic) continue;
-    const chainBonds = [bi];
-    seen[bi] = 1;
-    const ends = [];
-    for (const start of [b.a, b.b]) {
-      let prev = start === b.a ? b.b : b.a;
-      let cur = start;
-      while (isCumuleneInterior(s, g, cur)) {
-        const k2 = g.nbrs[cur][0] === prev ? 1 : 0;
-        const next = g.nbrs[cur][k2];
-        const nb = g.nbrBonds[cur][k2];
-        if (seen[nb]) break;
-        seen[nb] = 1;
-        chainBonds.push(nb);
-        prev = cur;
-        cur = next;
-      }
-      ends.push(cur);
-      ends.push(prev);
-    }
-    const [e0, in0, e1, in1] = ends;
-    if (e0 === e1) continue;
-    if (chainBonds.some((x) => aromaticBond[x] || s.bonds[x].aromatic || !ringOk(rings, x))) continue;
-    const k = chainBonds.length;
-    const el0 = s.atoms[e0].atomicNumber;
-    const el1 = s.atoms[e1].atomicNumber;
-    if (k === 1 && !((el0 === 6 || el0 === 7) && (el1 === 6 || el1 === 7))) continue;
-    if (k > 1 && (el0 !== 6 || el1 !== 6)) continue;
-    const t0 = endTokens(s, g, e0, in0);
-    const t1 = endTokens(s, g, e1, in1);
-    if (!t0 || !t1) continue;
-    const odd = k % 2 === 1;
-    out.push({
-      kind: k === 1 ? "double-bond" : k === 2 ? "allene" : "cumulene",
-      mode: odd ? "cistrans" : "parity",
-      ends: [e0, e1],
-      bonds: chainBonds,
-      tokens: [t0[0], t0[1], t1[0], t1[1]]
-    });
-  }
-  return out;
-}
-var init_perceive_bonds = __esm({
-  "src/chem/perceive-bonds.ts"() {
-    "use strict";
-    init_perceive_units();
-  }
-});
-
-// src/chem/perceive-centres.ts
-function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
-  const atom = s.atoms[i];
-  const z = atom.atomicNumber;
-  if (z !== 6 && z !== 7 && z !== 14 && z !== 15 && z !== 16 && z !== 32 && z !== 33 && z !== 34 && z !== 50)
-    return null;
-  if (atom.radical !== 0 || atom.hCount > 1) return null;
-  const nb = g.nbrs[i];
-  const nbB = g.nbrBonds[i];
-  const heavy = nb.length;
-  if (heavy < 2 || heavy > 4) return null;
-  const h = atom.hCount;
-  const sigma = heavy + h;
-  if (sigma < 3 || sigma > 4) return null;
-  let doubles = 0;
-  for (let k = 0; k < nbB.length; k++) {
-    const b = s.bonds[nbB[k]];
-    if (aromaticBond[nbB[k]] || b.aromatic) return null;
-    if (b.order === 2) doubles++;
-    else if (b.order !== 1) return null;
-  }
-  const n = s.atoms.length;
-  if (h > 1) return null;
-  const c = atom.charge;
-  switch (z) {
-    case 6:
-    case 14:
-    case 32:
-    case 50:
-      return c === 0 && sigma === 4 && doubles === 0 ? centreOf(nb, h, false, n, i) : null;
-    case 7:
-      if (doubles > 0 || h > 0) return null;
-      if (c === 1 && heavy === 4) return centreOf(nb, h, false, n, i);
-      if (c === 0 && heavy === 3) {
-        if (atom.aromatic) return null;
-        if (rings.smallestRingOfAtom[i] === 3 || isSmallBridgehead(rings, i))
-          return centreOf(nb, h, true, n, i);
-        return { kind: "invertible-nitrogen" };
-      }
-      return null;
-    case 15:
-    case 33:
-      if (resonancePair(s, g, i)) return null;
-      if (c === 0 && doubles === 0 && sigma === 3) return centreOf(nb, h, true, n, i);
-      if (c === 0 && doubles === 1 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
-      if (c === 1 && doubles === 0 && sigma === 4 && h === 0) return centreOf(nb, h, false, n, i);
-      return null;
-    case 16:
-    case 34:
-      if (h > 0 || resonancePair(s, g, i)) return null;
-      if (c === 0 && doubles === 1 && heavy === 3) return centreOf(nb, h, true, n, i);
-      if (c === 1 && doubles === 0 && heavy === 3) return centreOf(nb, h, true, n, i);
-      if (c === 0 && doubles === 2 && heavy === 4) return centreOf(nb, h, false, n, i);
-      return null;
-    default:
-      return null;
-  }
-}
-function centreOf(nb, h, withLonePair, n, i) {
-  const count2 = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
-  if (count2 !== 4) return null;
-  const t = [0, 0, 0, 0];
-  let k = 0;
-  for (; k < nb.length; k++) t[k] = nb[k];
-  if (h === 1) t[k++] = hToken(n, i);
-  if (withLonePair) t[k] = lpToken(n, i);
-  return { kind: "centre", tokens: t };
-}
-function isSmallBridgehead(rings, i) {
-  const mine = rings.rings.filter((r) => r.length <= 8 && r.includes(i));
-  for (let a = 0; a < mine.length; a++) {
-    for (let b = a + 1; b < mine.length; b++) {
-      const set = new Set(mine[a]);
-      let shared2 = 0;
-      for (const x of mine[b]) if (set.has(x)) shared2++;
-      if (shared2 >= 3) return true;
-    }
-  }
-  return false;
-}
-function resonancePair(s, g, i) {
-  const doubleEl = /* @__PURE__ */ new Set();
-  const singleEl = /* @__PURE__ */ new Set();
-  const nb = g.nbrs[i];
-  for (let k = 0; k < nb.length; k++) {
-    const x = s.atoms[nb[k]];
-    if (g.nbrs[nb[k]].length !== 1 || x.atomicNumber !== 8 && x.atomicNumber !== 16 && x.atomicNumber !== 34)
-      continue;
-    const order = s.bonds[g.nbrBonds[i][k]].order;
-    const key3 = x.atomicNumber * 1e3 + (x.isotope ?? 0);
-    if (order === 2) doubleEl.add(key3);
-    else if (order === 1 && (x.hCount > 0 || x.charge < 0)) singleEl.add(key3);
-  }
-  for (const e of doubleEl) if (singleEl.has(e)) return true;
-  if (s.atoms[i].charge > 0) {
-    const seen = /* @__PURE__ */ new Set();
-    for (let k = 0; k < nb.length; k++) {
-      const x = s.atoms[nb[k]];
-      if (g.nbrs[nb[k]].length !== 1 || x.atomicNumber !== 8 || x.charge >= 0 && x.hCount === 0) continue;
-      if (seen.has(x.isotope ?? 0)) return true;
-      seen.add(x.isotope ?? 0);
-    }
-  }
-  return false;
-}
-var init_perceive_centres = __esm({
-  "src/chem/perceive-centres.ts"() {
-    "use strict";
-    init_perceive_units();
-  }
-});
-
-// src/chem/perceive-input.ts
-function atomName(s, i) {
-  return `${s.atoms[i].element}${s.atoms[i].inputNumber}`;
-}
-function applyInputStereo(s, units, unitOfAtom, invertible, remarks) {
-  const n = s.atoms.length;
-  const drawnN = [];
-  const pseudo = (u, atom, x) => {
-    if (x >= 0) return x;
-    const h = hToken(n, atom);
-    const lp = lpToken(n, atom);
-    if (x === IMPLICIT_H) return u.tokens.includes(h) ? h : lp;
-    if (x === LONE_PAIR) return u.tokens.includes(lp) ? lp : h;
-    return x;
-  };
-  for (const e of s.stereo) {
-    const anchor = e.kind === "tetrahedral" ? e.centre : e.ends[0];
-    const k = unitOfAtom[anchor];
-    const u = k >= 0 ? units[k] : void 0;
-    const bit = u ? bitFor(u, e, pseudo) : -1;
-    if (u && bit >= 0) {
-      u.defined = true;
-      u.bit = bit;
-      continue;
-    }
-    if (e.kind === "tetrahedral" && invertible.has(e.centre)) {
-      drawnN.push(e.centre);
-      remarks.push(
-        `configuration drawn on ${atomName(s, e.centre)}, an ordinary amine nitrogen: it inverts rapidly, so it is not a stereocentre`
+// src/chem/describe/analyse.ts
+function analyse(input, opts = {}) {
+  const norm = normalize(input);
+  const p = perceive(norm.structure, opts);
+  const group = unitGroup(p);
+  const m = p.units.length;
+  const state = Uint8Array.from(p.units, (u) => u.bit);
+  const defined = Uint8Array.from(p.units, (u) => u.defined ? 1 : 0);
+  const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
+  for (let k = 0; k < m; k++) {
+    if (!reported[k] && p.units[k].defined && p.units[k].kind !== "planar" && p.structure.dimension !== 3) {
+      p.remarks.push(
+        `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
       );
-      continue;
-    }
-    const where2 = e.kind === "tetrahedral" ? atomName(s, e.centre) : `the ${atomName(s, e.ends[0])}–${atomName(s, e.ends[1])} unit`;
-    if (s.dimension !== 3)
-      remarks.push(`configuration drawn on ${where2}, which is not a stereogenic unit; ignored`);
-  }
-  return drawnN;
-}
-function bitFor(u, e, pseudo) {
-  if (e.kind === "tetrahedral") {
-    if (u.kind !== "tetrahedral") return -1;
-    const l2 = e.ligands;
-    const c = e.centre;
-    const list2 = [pseudo(u, c, l2[0]), pseudo(u, c, l2[1]), pseudo(u, c, l2[2]), pseudo(u, c, l2[3])];
-    return rebase(u, list2, e.winding === "@@" ? 1 : 0);
-  }
-  const [a, b] = e.ends;
-  const sameOrder = u.atoms[0] === a && u.atoms[1] === b;
-  const reversed = u.atoms[0] === b && u.atoms[1] === a;
-  if (!sameOrder && !reversed) return -1;
-  if (e.kind === "double-bond") {
-    if (u.mode !== "cistrans") return -1;
-    const ra = pseudo(u, a, e.refs[0]);
-    const rb = pseudo(u, b, e.refs[1]);
-    const other = (t, side2) => u.tokens[side2] === t ? u.tokens[side2 + 1] : u.tokens[side2];
-    const sideA = sameOrder ? 0 : 2;
-    const sideB = sameOrder ? 2 : 0;
-    if (!u.tokens.includes(ra) || !u.tokens.includes(rb)) return -1;
-    const list2 = [ra, other(ra, sideA), rb, other(rb, sideB)];
-    return rebase(u, list2, e.relation === "trans" ? 1 : 0);
-  }
-  if (u.mode !== "parity") return -1;
-  const l = e.ligands;
-  const list = [pseudo(u, a, l[0]), pseudo(u, a, l[1]), pseudo(u, b, l[2]), pseudo(u, b, l[3])];
-  return rebase(u, list, e.winding === "@@" ? 1 : 0);
-}
-var init_perceive_input = __esm({
-  "src/chem/perceive-input.ts"() {
-    "use strict";
-    init_types();
-    init_perceive_units();
-  }
-});
-
-// src/chem/perceive-rescue.ts
-function swapsTerminalPair(u, g, classes, n) {
-  for (let i = 0; i < 4; i++) {
-    const a = u.tokens[i];
-    if (a >= n || g.nbrs[a].length !== 1) continue;
-    for (let j = i + 1; j < 4; j++) {
-      const b = u.tokens[j];
-      if (b < n && g.nbrs[b].length === 1 && classes[a] === classes[b] && sameSide(u, i, j)) return true;
     }
   }
-  return false;
+  if (!group.complete)
+    p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
+  const chirality = chiralityOf(group, state, defined);
+  return { norm, p, group, state, defined, reported, chirality };
 }
-function sameSide(u, i, j) {
-  return u.kind === "tetrahedral" || i < 2 === j < 2;
+function stereogenicSomewhere(g, x, defined, k) {
+  const planar = k < g.planarHost.length && g.planarHost[k] >= 0;
+  if (g.perms.length === 1 && !planar) return true;
+  const open = [];
+  for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
+  if (open.length > 10) return true;
+  const y = Uint8Array.from(x);
+  let seenFeasible = false;
+  for (let mask = 0; mask < 1 << open.length; mask++) {
+    checkBudget(g.perms.length);
+    for (let b = 0; b < open.length; b++) y[open[b]] = mask >> b & 1;
+    if (!feasible(g, y)) continue;
+    seenFeasible = true;
+    if (stereogenicIn(g, y, k)) return true;
+  }
+  return !seenFeasible;
 }
-function survivesSymmetry(s, u, classes) {
-  const n = s.atoms.length;
-  const colour = Int32Array.from(classes);
-  let top = 0;
-  for (const c of classes) if (c > top) top = c;
-  for (const a of u.atoms) colour[a] = ++top;
-  let inverted = false;
-  const res = automorphisms(s, {
-    key: [...u.atoms],
-    colour,
-    maxResults: 2e3,
-    onMapping: (map) => {
-      if (rebase(
-        u,
-        u.tokens.map((t) => mapToken(t, n, map)),
-        0
-      ) === 1)
-        inverted = true;
-      return !inverted;
-    }
+function unitName(p, k) {
+  const u = p.units[k];
+  const s = p.structure;
+  return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
+}
+function parentComponent(s, comps) {
+  const organic = (c) => c.some((x) => s.atoms[x].atomicNumber === 6);
+  let parent = -1;
+  comps.forEach((c, k) => {
+    const better = parent < 0 || organic(c) && !organic(comps[parent]) || organic(c) === organic(comps[parent]) && c.length > comps[parent].length;
+    if (better) parent = k;
   });
-  return !inverted && res.complete;
+  return parent;
 }
-var init_perceive_rescue = __esm({
-  "src/chem/perceive-rescue.ts"() {
+var init_analyse = __esm({
+  "src/chem/describe/analyse.ts"() {
     "use strict";
-    init_graph();
-    init_perceive_units();
+    init_normalize();
+    init_perceive2();
+    init_symmetry();
+    init_budget();
   }
 });
 
-// src/chem/perceive-bridges.ts
-function bridgeCouplings(s, g, rings, units) {
-  const out = objectList();
-  for (const c of bridgedPairs(s, g, rings, units)) out.push(c);
-  for (const c of fusedPairs(g, rings, units)) out.push(c);
-  return out;
-}
-function fusedPairs(g, rings, units) {
-  const out = [];
-  let anyCentre = false;
-  for (const u of units) if (u.kind === "tetrahedral") anyCentre = true;
-  if (!anyCentre) return out;
-  const unitAt = new Int32Array(g.n).fill(-1);
-  for (let k = 0; k < units.length; k++) if (units[k].kind === "tetrahedral") unitAt[units[k].atoms[0]] = k;
-  for (let ka = 0; ka < units.length; ka++) {
-    if (units[ka].kind !== "tetrahedral") continue;
-    const a = units[ka].atoms[0];
-    for (let i = 0; i < g.nbrs[a].length; i++) {
-      const b = g.nbrs[a][i];
-      const kb = unitAt[b];
-      if (kb < 0 || b < a) continue;
-      const r = rings.smallestRingOfBond[g.nbrBonds[a][i]];
-      if (r !== 3 && r !== 4) continue;
-      const through = rings.rings.filter((ring) => adjacentIn(ring, a, b));
-      if (through.length !== 2) continue;
-      through.sort((x, y) => x.length - y.length);
-      const [r1, r2] = [through[0].length, through[1].length];
-      if (!(r1 === 3 && r2 <= 6 || r1 === 4 && r2 === 4)) continue;
-      const a1 = ringNeighbour(through[0], a, b);
-      const a22 = ringNeighbour(through[1], a, b);
-      const b1 = ringNeighbour(through[0], b, a);
-      const b2 = ringNeighbour(through[1], b, a);
-      const ua = units[ka];
-      const ub = units[kb];
-      const xa = ua.tokens.find((t) => t !== b && t !== a1 && t !== a22);
-      const xb = ub.tokens.find((t) => t !== a && t !== b1 && t !== b2);
-      if (xa === void 0 || xb === void 0) continue;
-      const pa = permutationParity2([xa, b, a1, a22], ua.tokens);
-      const pb = permutationParity2([xb, a, b1, b2], ub.tokens);
-      if (pa < 0 || pb < 0) continue;
-      out.push({ a: ka, b: kb, c: 1 ^ pa ^ pb });
-    }
-  }
-  return out;
-}
-function adjacentIn(ring, a, b) {
-  const i = ring.indexOf(a);
-  if (i < 0) return false;
-  const L = ring.length;
-  return ring[(i + 1) % L] === b || ring[(i + L - 1) % L] === b;
-}
-function ringNeighbour(ring, a, b) {
-  const i = ring.indexOf(a);
-  const L = ring.length;
-  const next = ring[(i + 1) % L];
-  return next === b ? ring[(i + L - 1) % L] : next;
-}
-function bridgedPairs(s, g, rings, units) {
-  let possible = 0;
-  for (const u of units) {
-    if (u.kind !== "tetrahedral") continue;
-    let ringBonds3 = 0;
-    for (const b of g.nbrBonds[u.atoms[0]]) if (rings.bondInRing[b]) ringBonds3++;
-    if (ringBonds3 >= 3) possible++;
-  }
-  if (possible < 2) return [];
-  const memo = /* @__PURE__ */ new Map();
-  const ringNbrs = (x) => {
-    let out2 = memo.get(x);
-    if (out2 !== void 0) return out2;
-    out2 = [];
-    for (let k = 0; k < g.nbrs[x].length; k++) if (rings.bondInRing[g.nbrBonds[x][k]]) out2.push(g.nbrs[x][k]);
-    memo.set(x, out2);
-    return out2;
-  };
-  const cand = units.map((u, k) => ({ u, k })).filter(({ u }) => u.kind === "tetrahedral" && ringNbrs(u.atoms[0]).length >= 3);
-  if (cand.length < 2) return [];
-  const system = new Int32Array(s.atoms.length).fill(-1);
-  rings.ringSystems.forEach((atoms, k) => atoms.forEach((x) => system[x] = k));
-  const out = [];
-  for (let i = 0; i < cand.length; i++) {
-    for (let j = i + 1; j < cand.length; j++) {
-      const a = cand[i].u.atoms[0];
-      const b = cand[j].u.atoms[0];
-      if (system[a] < 0 || system[a] !== system[b]) continue;
-      const bridges2 = threeBridges(a, b, ringNbrs);
-      if (!bridges2) continue;
-      const ua = cand[i].u;
-      const ub = cand[j].u;
-      const xa = ua.tokens.find((t) => !bridges2.some((p) => p[0] === t));
-      const xb = ub.tokens.find((t) => !bridges2.some((p) => p[p.length - 1] === t));
-      if (xa === void 0 || xb === void 0) continue;
-      const la = [xa, ...bridges2.map((p) => p[0])];
-      const lb = [xb, ...bridges2.map((p) => p[p.length - 1])];
-      const pa = permutationParity2(la, ua.tokens);
-      const pb = permutationParity2(lb, ub.tokens);
-      if (pa < 0 || pb < 0) continue;
-      out.push({ a: cand[i].k, b: cand[j].k, c: 1 ^ pa ^ pb });
-    }
-  }
-  return out;
-}
-function threeBridges(a, b, ringNbrs) {
-  const paths = [];
-  const path = [];
-  const onPath = /* @__PURE__ */ new Set([a]);
-  const walk = (x) => {
-    if (paths.length > 200) return;
-    for (const y of ringNbrs(x)) {
-      if (y === b) {
-        if (path.length >= 1) paths.push(path.slice());
-        continue;
-      }
-      if (onPath.has(y) || path.length >= MAX_INNER) continue;
-      onPath.add(y);
-      path.push(y);
-      walk(y);
-      path.pop();
-      onPath.delete(y);
-    }
-  };
-  walk(a);
-  paths.sort((p, q) => p.length - q.length);
-  for (let i = 0; i < paths.length; i++) {
-    for (let j = i + 1; j < paths.length; j++) {
-      if (!disjoint(paths[i], paths[j])) continue;
-      for (let k = j + 1; k < paths.length; k++) {
-        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k]))
-          return [paths[i], paths[j], paths[k]];
-      }
-    }
-  }
-  return null;
-}
-function disjoint(p, q) {
-  for (const x of p) if (q.includes(x)) return false;
-  return true;
-}
-var MAX_INNER;
-var init_perceive_bridges = __esm({
-  "src/chem/perceive-bridges.ts"() {
-    "use strict";
-    init_perceive_units();
-    init_make();
-    MAX_INNER = 3;
-  }
-});
-
-// src/chem/perceive.ts
-function perceive(s) {
-  const n = s.atoms.length;
-  const graph = buildGraph(s);
-  const rings = ringInfo(s, graph);
-  const aromaticBond = aromaticBonds(s, rings, graph);
-  let classCache = null;
-  const classesOf = () => classCache ??= equivalenceClasses(s);
-  const tokenClass = (t) => t < n ? classesOf()[t] : t < 2 * n ? -1 : -2;
-  const drafts = objectList();
-  const invertibleAll = /* @__PURE__ */ new Set();
-  for (let i = 0; i < n; i++) {
-    const v = tetrahedralCandidate(s, graph, rings, aromaticBond, i);
-    if (v === null) continue;
-    if (v.kind === "invertible-nitrogen") {
-      invertibleAll.add(i);
-      continue;
-    }
-    const pairs = equalPairs(v.tokens, tokenClass, [i, i]);
-    if (pairs === null) continue;
-    drafts.push({
-      kind: "tetrahedral",
-      mode: "parity",
-      atoms: [i],
-      tokens: v.tokens,
-      defined: false,
-      bit: 0,
-      equivalentPair: pairs.length > 0,
-      pairs
-    });
-  }
-  for (const c of bondCandidates(s, graph, rings, aromaticBond)) {
-    const pairs = equalPairs(c.tokens, tokenClass, c.ends, true);
-    if (pairs === null) continue;
-    drafts.push({
-      kind: c.kind,
-      mode: c.mode,
-      atoms: [...c.ends],
-      tokens: c.tokens,
-      defined: false,
-      bit: 0,
-      equivalentPair: pairs.length > 0,
-      pairs
-    });
-  }
-  for (const e of s.stereo) {
-    if (e.kind !== "axial" || e.subtype !== "biaryl") continue;
-    const t = e.ligands.map(
-      (x, k) => x >= 0 ? x : x === IMPLICIT_H ? hToken(n, e.ends[k < 2 ? 0 : 1]) : lpToken(n, e.ends[k < 2 ? 0 : 1])
+// src/chem/describe/carry.ts
+function carryOnto(pa, pb, iso) {
+  const nA = pa.p.structure.atoms.length;
+  const nB = pb.p.structure.atoms.length;
+  const mB = pb.p.units.length;
+  const y = new Uint8Array(mB);
+  const yDefined = new Uint8Array(mB);
+  const fromA = new Int32Array(mB).fill(-1);
+  let open = false;
+  pa.p.units.forEach((u, i) => {
+    const j = unitImage(pb.p, u, iso);
+    const bit = j < 0 ? -1 : rebase(
+      pb.p.units[j],
+      u.tokens.map((t) => mapToken(t, nA, iso, nB)),
+      u.bit
     );
-    const tokens2 = [t[0], t[1], t[2], t[3]];
-    const pairs = equalPairs(tokens2, tokenClass, e.ends, true) ?? [];
-    drafts.push({
-      kind: "biaryl",
-      mode: "parity",
-      atoms: [...e.ends],
-      tokens: tokens2,
-      defined: false,
-      bit: 0,
-      equivalentPair: pairs.length > 0,
-      pairs
-    });
-  }
-  let kept = fixedPoint(drafts, graph, n);
-  const tried = /* @__PURE__ */ new Set();
-  for (let round = 0; round < 4 && kept.length < drafts.length; round++) {
-    const keptSet = new Set(kept);
-    const rescued = drafts.filter((d) => {
-      if (keptSet.has(d) || tried.has(d)) return false;
-      tried.add(d);
-      return !swapsTerminalPair(d, graph, classesOf(), n) && survivesSymmetry(s, d, classesOf());
-    });
-    if (rescued.length === 0) break;
-    for (const d of rescued) d.pairs = [];
-    kept = fixedPoint(drafts, graph, n);
-  }
-  kept.sort((a, b) => Math.min(...a.atoms) - Math.min(...b.atoms));
-  const units = objectList();
-  for (const d of kept) {
-    units.push({
-      kind: d.kind,
-      mode: d.mode,
-      atoms: d.atoms,
-      tokens: d.tokens,
-      defined: d.defined,
-      bit: d.bit,
-      equivalentPair: d.equivalentPair
-    });
-  }
-  const unitOfAtom = new Int32Array(n).fill(-1);
-  units.forEach((u, k) => {
-    for (const a of u.atoms) unitOfAtom[a] = k;
+    if (bit < 0) {
+      if (pa.reported[i]) open = true;
+      return;
+    }
+    y[j] = bit;
+    yDefined[j] = u.defined ? 1 : 0;
+    fromA[j] = i;
   });
-  const components = connectedComponents(s, graph);
-  const componentOfAtom = new Int32Array(n);
-  components.forEach((c, k) => {
-    for (const a of c) componentOfAtom[a] = k;
-  });
-  const remarks = objectList();
-  const invertibleNitrogens = applyInputStereo(s, units, unitOfAtom, invertibleAll, remarks);
-  const couplings = bridgeCouplings(s, graph, rings, units);
-  for (const c of couplings) {
-    const [ua, ub] = [units[c.a], units[c.b]];
-    if (ua.defined && ub.defined && (ua.bit ^ ub.bit) !== c.c) {
-      const name = (u) => `${s.atoms[u.atoms[0]].element}${s.atoms[u.atoms[0]].inputNumber}`;
-      remarks.push(
-        `the configurations drawn at ${name(ua)} and ${name(ub)} cannot both hold: they are the bridgeheads or fusion atoms of a small ring system, which fixes their relative configuration`
-      );
-    }
+  for (let j = 0; j < mB; j++) {
+    const relevant = pb.reported[j] || fromA[j] >= 0 && pa.reported[fromA[j]];
+    if (relevant && (!yDefined[j] || !pb.defined[j]) && !planarAbsentOnASide(pb, j, y, yDefined)) open = true;
   }
-  const result2 = {
-    structure: s,
-    graph,
-    rings,
-    aromaticBond,
-    units,
-    unitOfAtom,
-    invertibleNitrogens,
-    couplings,
-    components,
-    componentOfAtom,
-    remarks
-  };
-  lazyClasses.set(result2, classesOf);
-  Object.defineProperty(result2, "classes", { get: classesGetter, enumerable: true });
-  return result2;
+  return { y, yDefined, fromA, open };
 }
-function classesGetter() {
-  return lazyClasses.get(this)();
+function planarAbsentOnASide(pb, j, y, yDefined) {
+  const h = pb.p.planar.any ? pb.p.planar.host[j] : -1;
+  if (h < 0) return false;
+  const z = pb.p.planar.zBit[j];
+  return pb.defined[h] === 1 && pb.state[h] === z || yDefined[h] === 1 && y[h] === z;
 }
-function equalPairs(tokens2, cls, anchors, perEnd = false) {
-  const out = [];
-  if (perEnd) {
-    for (const k of [0, 2])
-      if (cls(tokens2[k]) === cls(tokens2[k + 1])) out.push({ anchor: anchors[k >> 1], token: tokens2[k] });
-    return out;
-  }
-  const c = [cls(tokens2[0]), cls(tokens2[1]), cls(tokens2[2]), cls(tokens2[3])];
-  for (let i = 0; i < 4; i++) {
-    let same = 0;
-    for (let j = 0; j < 4; j++) if (c[j] === c[i]) same++;
-    if (same >= 2 && c.indexOf(c[i]) === i) out.push({ anchor: anchors[0], token: tokens2[i] });
-  }
-  return out;
+function sameStereoisomer(a, b) {
+  const pa = analyse(a);
+  const pb = analyse(b);
+  const iso = isomorphic(pa.p.structure, pb.p.structure);
+  if (!iso) return false;
+  const c = carryOnto(pa, pb, iso);
+  return !c.open && elementMapping(pb.group, c.y, pb.state) >= 0;
 }
-function fixedPoint(drafts, g, n) {
-  let alive = drafts.slice();
-  for (; ; ) {
-    const unitAtom = new Int32Array(n).fill(-1);
-    alive.forEach((d, k) => {
-      for (const a of d.atoms) unitAtom[a] = k;
-    });
-    const next = objectList();
-    for (let k = 0; k < alive.length; k++) {
-      const d = alive[k];
-      if (d.pairs.every((p) => p.token < n && branchHoldsUnit(g, p.anchor, p.token, unitAtom, k)))
-        next.push(d);
-    }
-    if (next.length === alive.length) return next;
-    alive = next;
-  }
-}
-function branchHoldsUnit(g, anchor, start, unitAtom, self) {
-  const seen = new Uint8Array(g.n);
-  seen[anchor] = 1;
-  seen[start] = 1;
-  const stack = [start];
-  while (stack.length) {
-    const x = stack.pop();
-    if (unitAtom[x] >= 0 && unitAtom[x] !== self) return true;
-    for (const y of g.nbrs[x]) {
-      if (!seen[y]) {
-        seen[y] = 1;
-        stack.push(y);
-      }
-    }
-  }
-  return false;
-}
-var lazyClasses;
-var init_perceive = __esm({
-  "src/chem/perceive.ts"() {
+var init_carry = __esm({
+  "src/chem/describe/carry.ts"() {
     "use strict";
     init_graph();
-    init_types();
-    init_perceive_bonds();
-    init_perceive_centres();
-    init_perceive_units();
-    init_perceive_input();
-    init_perceive_rescue();
-    init_perceive_bridges();
-    init_make();
-    lazyClasses = /* @__PURE__ */ new WeakMap();
+    init_perceive2();
+    init_symmetry();
+    init_analyse();
   }
 });
 
-// src/chem/symmetry-evidence.ts
+// src/chem/describe/copies.ts
+function parentCopies(s, comps, parent) {
+  if (parent < 0 || comps.length < 2) return [];
+  const ps = extractAtoms(s, comps[parent]);
+  const key3 = constitutionKey(ps);
+  const out = [];
+  comps.forEach((c, k) => {
+    if (k === parent || c.length !== comps[parent].length) return;
+    const cs = extractAtoms(s, c);
+    if (constitutionKey(cs) !== key3) return;
+    if (ps.stereo.length + cs.stereo.length === 0 || sameStereoisomer(ps, cs)) out.push(k);
+  });
+  return out;
+}
+function withoutCopies(s, comps, copies) {
+  const drop = new Set(copies);
+  const atoms = comps.filter((_c, k) => !drop.has(k)).flat().sort((x, y) => x - y);
+  return extractAtoms(s, atoms);
+}
+var init_copies = __esm({
+  "src/chem/describe/copies.ts"() {
+    "use strict";
+    init_graph();
+    init_normalize();
+    init_carry();
+  }
+});
+
+// src/chem/describe/mixture.ts
+function drawnMixture(s, comps, parent, copies) {
+  if (parent < 0 || comps.length < 2) return null;
+  const ps = extractAtoms(s, comps[parent]);
+  const key3 = constitutionKey(ps);
+  const kinds = [{ structure: ps, count: 1 + copies.length }];
+  const beyondParent = [...copies];
+  comps.forEach((c, k) => {
+    if (k === parent || copies.includes(k) || c.length !== comps[parent].length) return;
+    const cs = extractAtoms(s, c);
+    if (constitutionKey(cs) !== key3) return;
+    beyondParent.push(k);
+    const same = kinds.find((x) => sameStereoisomer(x.structure, cs));
+    if (same) same.count++;
+    else kinds.push({ structure: cs, count: 1 });
+  });
+  if (kinds.length < 2) return null;
+  const chiral = kinds.map((x) => analyse(x.structure).chirality.chiral);
+  const enantiomeric = (i, j) => sameStereoisomer(mirror(kinds[i].structure), kinds[j].structure);
+  let pairs = 0;
+  for (let i = 0; i < kinds.length; i++)
+    for (let j = i + 1; j < kinds.length; j++) if (enantiomeric(i, j)) pairs++;
+  const formula = molecularFormula(ps);
+  const counts = kinds.map((x) => x.count);
+  let kind;
+  let explanation;
+  if (kinds.length === 2 && pairs === 1) {
+    kind = counts[0] === counts[1] ? "racemate" : "enantiomers";
+    explanation = kind === "racemate" ? `the drawing holds both enantiomers of ${formula} in equal numbers: a racemate drawn out (IUPAC Gold Book), whose molecules are chiral` : `the drawing holds both enantiomers of ${formula} in unequal numbers (${counts.join(":")})`;
+  } else if (pairs === 0) {
+    kind = "diastereomers";
+    explanation = `the drawing holds ${kinds.length} diastereomers of ${formula} (${counts.join(":")})`;
+  } else {
+    kind = "stereoisomers";
+    explanation = `the drawing holds ${kinds.length} stereoisomers of ${formula} (${counts.join(":")}), among them enantiomers`;
+  }
+  return { facts: { kind, stereoisomers: kinds.length, ratio: counts, explanation }, beyondParent, chiral };
+}
+var init_mixture = __esm({
+  "src/chem/describe/mixture.ts"() {
+    "use strict";
+    init_graph();
+    init_normalize();
+    init_symmetry();
+    init_analyse();
+    init_carry();
+  }
+});
+
+// src/chem/describe/evidence.ts
 function mirrorFacts(a) {
   const { p, group, chirality } = a;
   const s = p.structure;
@@ -45160,9 +46200,9 @@ function mirrorFacts(a) {
   for (let i = 0; i < s.atoms.length; i++) if (sigma[i] === i) fixedIdx.push(i);
   const swapped = [];
   for (const b of s.bonds) if (sigma[b.a] === b.b && sigma[b.b] === b.a) swapped.push([b.a, b.b]);
-  const num = (i) => s.atoms[i].inputNumber;
-  const fixedAtoms = fixedIdx.map(num).sort((x, y) => x - y);
-  const fixedBonds = swapped.map(([x, y]) => [num(x), num(y)].sort((u, v) => u - v));
+  const num2 = (i) => s.atoms[i].inputNumber;
+  const fixedAtoms = fixedIdx.map(num2).sort((x, y) => x - y);
+  const fixedBonds = swapped.map(([x, y]) => [num2(x), num2(y)].sort((u, v) => u - v));
   const onUnit = fixedIdx.filter((i) => p.unitOfAtom[i] >= 0);
   const skeleton = fixedIdx.filter((i) => heavy(i) && p.graph.nbrs[i].length >= 2);
   const named = [...onUnit, ...skeleton.filter((i) => !onUnit.includes(i))].slice(0, 3);
@@ -45179,14 +46219,14 @@ function mirrorFacts(a) {
   }
   return { chiral: false, fixedAtoms, fixedBonds, explanation };
 }
-var init_symmetry_evidence = __esm({
-  "src/chem/symmetry-evidence.ts"() {
+var init_evidence = __esm({
+  "src/chem/describe/evidence.ts"() {
     "use strict";
-    init_perceive_input();
+    init_perceive2();
   }
 });
 
-// src/chem/isomers-list.ts
+// src/chem/describe/isomer-list.ts
 function listStereoisomers(a, max) {
   const { p, group } = a;
   const s = p.structure;
@@ -45195,9 +46235,10 @@ function listStereoisomers(a, max) {
   const fully = a.defined.every((d) => d === 1);
   const inputCanon = fully ? canonicalState(group, a.state) : null;
   return enumerateStereoisomers(group, m, max).map(({ state, chiral }) => {
-    const stereo = p.units.flatMap(
-      (u, k) => stereogenicIn(group, state, k) ? [unitStereo(u, state[k], n)] : []
-    );
+    const stereo = p.units.flatMap((u, k) => {
+      const e = stereogenicIn(group, state, k) ? unitStereo(u, state[k], n) : null;
+      return e === null ? [] : [e];
+    });
     const t = withStereo(s, stereo, []);
     const labels = labelUnits(t).map((r) => ({
       atoms: r.atoms.map((x) => s.atoms[x].inputNumber),
@@ -45212,310 +46253,46 @@ function listStereoisomers(a, max) {
     };
   });
 }
-var init_isomers_list = __esm({
-  "src/chem/isomers-list.ts"() {
+var init_isomer_list = __esm({
+  "src/chem/describe/isomer-list.ts"() {
     "use strict";
     init_isomers();
     init_labels();
-    init_perceive_units();
+    init_perceive2();
     init_symmetry();
     init_make();
     init_smiles2();
   }
 });
 
-// src/chem/relate.ts
-function side(s) {
-  const whole = analyse(s);
-  const ns = whole.p.structure;
-  const comps = whole.p.components;
-  const k = parentComponent(ns, comps);
-  const parent = comps.length <= 1 ? whole : analyse(extractAtoms(ns, comps[k] ?? []));
-  const copies = parentCopies(ns, comps, k);
-  const others2 = comps.filter((_c, i) => i !== k && !copies.includes(i)).map((c) => {
-    const sub3 = extractAtoms(ns, c);
-    return { key: constitutionKey(sub3), smiles: writeSmiles(sub3), structure: sub3 };
-  });
-  return { whole, parent, others: others2 };
-}
-function otherDifferences(a, b) {
-  const left = b.others.slice();
-  const onlyInA = [];
-  for (const o of a.others) {
-    const j = left.findIndex(
-      (x) => x.key === o.key && (x.structure.stereo.length + o.structure.stereo.length === 0 || relate(o.structure, x.structure).relation === "identical")
-    );
-    if (j >= 0) left.splice(j, 1);
-    else onlyInA.push(o.smiles);
-  }
-  return { onlyInA, onlyInB: left.map((x) => x.smiles) };
-}
-function relate(sa, sb) {
-  const A = side(sa);
-  const B = side(sb);
-  const otherComponents = otherDifferences(A, B);
-  const salt = otherComponents.onlyInA.length + otherComponents.onlyInB.length > 0 ? " (parent components; the other components differ)" : "";
-  const pa = A.parent;
-  const pb = B.parent;
-  const base = { differingUnits: [], epimers: false, otherComponents };
-  const iso = isomorphic(pa.p.structure, pb.p.structure);
-  if (!iso) {
-    const same = molecularFormula(pa.p.structure) === molecularFormula(pb.p.structure);
-    return same ? {
-      ...base,
-      relation: "constitutional-isomers",
-      explanation: `same molecular formula, different constitution${salt}`
-    } : { ...base, relation: "different-compounds", explanation: `different molecular formulas${salt}` };
-  }
-  const nA = pa.p.structure.atoms.length;
-  const nB = pb.p.structure.atoms.length;
-  const mB = pb.p.units.length;
-  const y = new Uint8Array(mB);
-  const yDefined = new Uint8Array(mB);
-  const fromA = new Int32Array(mB).fill(-1);
-  let open = false;
-  pa.p.units.forEach((u, i) => {
-    const j = pb.p.unitOfAtom[iso[u.atoms[0]]];
-    const bit = j < 0 ? -1 : rebase(
-      pb.p.units[j],
-      u.tokens.map((t) => mapToken(t, nA, iso, nB)),
-      u.bit
-    );
-    if (bit < 0) {
-      if (pa.reported[i]) open = true;
-      return;
-    }
-    y[j] = bit;
-    yDefined[j] = u.defined ? 1 : 0;
-    fromA[j] = i;
-  });
-  for (let j = 0; j < mB; j++) {
-    const relevant = pb.reported[j] || fromA[j] >= 0 && pa.reported[fromA[j]];
-    if (relevant && (!yDefined[j] || !pb.defined[j])) open = true;
-  }
-  if (open) {
-    return {
-      ...base,
-      relation: "same-constitution",
-      explanation: `same constitution; undefined stereo leaves the relation open${salt}`
-    };
-  }
-  const g = pb.group;
-  const xB = pb.state;
-  if (elementMapping(g, y, xB) >= 0) {
-    return { ...base, relation: "identical", explanation: `the same stereoisomer${salt}` };
-  }
-  const labA = labelMap(pa);
-  const labB = labelMap(pb);
-  const unitFact = (j, iA) => {
-    const ub = pb.p.units[j];
-    const ua = pa.p.units[iA];
-    const key3 = (xs) => [...xs].sort((p, q) => p - q).join(",");
-    return {
-      kind: ub.kind,
-      atomsA: ua.atoms.map((x) => pa.p.structure.atoms[x].inputNumber),
-      atomsB: ub.atoms.map((x) => pb.p.structure.atoms[x].inputNumber),
-      labelA: labA.get(key3(ua.atoms)) ?? null,
-      labelB: labB.get(key3(ub.atoms)) ?? null
-    };
-  };
-  if (elementMapping(g, mirrorState(g, y), xB) >= 0) {
-    const differingUnits2 = [];
-    for (let j = 0; j < mB; j++) {
-      if (pb.p.units[j].mode === "parity" && stereogenicIn(g, xB, j) && fromA[j] >= 0) {
-        differingUnits2.push(unitFact(j, fromA[j]));
-      }
-    }
-    return {
-      ...base,
-      relation: "enantiomers",
-      differingUnits: differingUnits2,
-      explanation: `mirror images that are not superimposable${salt}`
-    };
-  }
-  let best = [];
-  let bestH = 0;
-  for (let h = 0; h < g.perms.length; h++) {
-    const z = act(g, h, y);
-    const diff = [];
-    for (let j = 0; j < mB; j++) if (z[j] !== xB[j] && stereogenicIn(g, xB, j)) diff.push(j);
-    if (h === 0 || diff.length < best.length) {
-      best = diff;
-      bestH = h;
-    }
-  }
-  const perm = g.perms[bestH];
-  const aOf = new Int32Array(mB).fill(-1);
-  for (let j = 0; j < mB; j++) if (fromA[j] >= 0) aOf[perm[j]] = fromA[j];
-  const keyOf = (xs) => [...xs].sort((p, q) => p - q).join(",");
-  const differ = new Set(best);
-  for (let j = 0; j < mB; j++) {
-    if (differ.has(j) || aOf[j] < 0 || !pb.reported[j]) continue;
-    const la = labA.get(keyOf(pa.p.units[aOf[j]].atoms)) ?? null;
-    const lb = labB.get(keyOf(pb.p.units[j].atoms)) ?? null;
-    if (la !== null && lb !== null && la !== lb) differ.add(j);
-  }
-  const listed = [...differ].sort((p, q) => p - q);
-  const differingUnits = listed.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
-  const epimers = listed.length === 1 && differingUnits.length === 1 && differingUnits[0].kind === "tetrahedral" && pb.p.units.filter((u, j) => u.mode === "parity" && pb.reported[j]).length >= 2;
-  const names = listed.map((j) => {
-    const d = differingUnits.find(
-      (u) => keyOf(u.atomsB) === keyOf(pb.p.units[j].atoms.map((x) => pb.p.structure.atoms[x].inputNumber))
-    );
-    const change = d && d.labelA && d.labelB && d.labelA !== d.labelB ? ` (${d.labelA} in A, ${d.labelB} in B)` : "";
-    return `${unitWords(pb.p.structure, pb.p.units[j].atoms)}${change}`;
-  }).join(", ");
-  const explanation = epimers ? `epimers: diastereomers differing only at ${names} (atoms numbered as in B)${salt}` : `diastereomers: differing at ${names} (atoms numbered as in B)${salt}`;
-  return { ...base, relation: "diastereomers", differingUnits, epimers, explanation };
-}
-function unitWords(s, atoms) {
-  const one = (i) => `atom ${s.atoms[i].inputNumber} (${s.atoms[i].element})`;
-  return atoms.length === 1 ? one(atoms[0]) : `the unit between ${one(atoms[0])} and ${one(atoms[1])}`;
-}
-var labelMap;
-var init_relate = __esm({
-  "src/chem/relate.ts"() {
-    "use strict";
-    init_graph();
-    init_describe();
-    init_labels();
-    init_normalize();
-    init_perceive_units();
-    init_symmetry();
-    init_smiles2();
-    init_copies();
-    labelMap = (a) => {
-      const m = /* @__PURE__ */ new Map();
-      for (const r of labelUnits(a.p.structure))
-        if (r.label) m.set([...r.atoms].sort((x, y) => x - y).join(","), r.label);
-      return m;
-    };
-  }
-});
-
-// src/chem/copies.ts
-function parentCopies(s, comps, parent) {
-  if (parent < 0 || comps.length < 2) return [];
-  const ps = extractAtoms(s, comps[parent]);
-  const key3 = constitutionKey(ps);
-  const out = [];
-  comps.forEach((c, k) => {
-    if (k === parent || c.length !== comps[parent].length) return;
-    const cs = extractAtoms(s, c);
-    if (constitutionKey(cs) !== key3) return;
-    if (ps.stereo.length + cs.stereo.length === 0 || relate(ps, cs).relation === "identical") out.push(k);
-  });
-  return out;
-}
-function withoutCopies(s, comps, copies) {
-  const drop = new Set(copies);
-  const atoms = comps.filter((_c, k) => !drop.has(k)).flat().sort((x, y) => x - y);
-  return extractAtoms(s, atoms);
-}
-var init_copies = __esm({
-  "src/chem/copies.ts"() {
-    "use strict";
-    init_graph();
-    init_normalize();
-    init_relate();
-  }
-});
-
-// src/chem/planar-ring.ts
-function transMediumRingBonds(p) {
-  const s = p.structure;
-  const out = [];
-  for (const e of s.stereo) {
-    if (e.kind !== "double-bond") continue;
-    const [a, b] = e.ends;
-    const bond = s.bonds.findIndex((x) => x.a === a && x.b === b || x.a === b && x.b === a);
-    const size = bond >= 0 ? p.rings.smallestRingOfBond[bond] : 0;
-    if (size < 8 || size > 11) continue;
-    const ring = p.rings.rings.find((r) => r.length === size && ringAdjacent(r, a, b));
-    if (!ring) continue;
-    const ringNbr = (x, other) => {
-      const k = ring.indexOf(x);
-      const prev = ring[(k + ring.length - 1) % ring.length];
-      const next = ring[(k + 1) % ring.length];
-      return prev === other ? next : prev;
-    };
-    let trans = e.relation === "trans";
-    if (e.refs[0] !== ringNbr(a, b)) trans = !trans;
-    if (e.refs[1] !== ringNbr(b, a)) trans = !trans;
-    if (trans) out.push({ atoms: [a, b], ringSize: size });
-  }
-  return out;
-}
-function ringAdjacent(r, a, b) {
-  const k = r.indexOf(a);
-  if (k < 0) return false;
-  return r[(k + 1) % r.length] === b || r[(k + r.length - 1) % r.length] === b;
-}
-var init_planar_ring = __esm({
-  "src/chem/planar-ring.ts"() {
-    "use strict";
-  }
-});
-
-// src/chem/describe.ts
-function analyse(input) {
-  const norm = normalize(input);
-  const p = perceive(norm.structure);
-  const group = unitGroup(p);
-  const m = p.units.length;
-  const state = Uint8Array.from(p.units, (u) => u.bit);
-  const defined = Uint8Array.from(p.units, (u) => u.defined ? 1 : 0);
-  const reported = p.units.map((_u, k) => stereogenicSomewhere(group, state, defined, k));
-  for (let k = 0; k < m; k++) {
-    if (!reported[k] && p.units[k].defined && p.structure.dimension !== 3) {
-      p.remarks.push(
-        `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
-      );
-    }
-  }
-  if (!group.complete)
-    p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
-  const chirality = chiralityOf(group, state, defined);
-  return { norm, p, group, state, defined, reported, chirality };
-}
-function stereogenicSomewhere(g, x, defined, k) {
-  if (g.perms.length === 1) return true;
-  const open = [];
-  for (let i = 0; i < x.length; i++) if (!defined[i] && i !== k) open.push(i);
-  if (open.length > 10) return true;
-  const y = Uint8Array.from(x);
-  let seenFeasible = false;
-  for (let mask = 0; mask < 1 << open.length; mask++) {
-    for (let b = 0; b < open.length; b++) y[open[b]] = mask >> b & 1;
-    if (!feasible(g, y)) continue;
-    seenFeasible = true;
-    if (stereogenicIn(g, y, k)) return true;
-  }
-  return !seenFeasible;
-}
-function unitName(p, k) {
-  const u = p.units[k];
-  const s = p.structure;
-  return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
-}
+// src/chem/describe/describe.ts
 function describe(input, opts = {}) {
-  const a = analyse(input);
+  const perceiveOpts = opts.axisOrthoMin === void 0 ? {} : { axisOrthoMin: opts.axisOrthoMin };
+  const a = analyse(input, perceiveOpts);
   const { p } = a;
   const s = p.structure;
   const labels = /* @__PURE__ */ new Map();
+  let stoppedLabels = 0;
   if (s.stereo.length > 0) {
-    for (const r of labelUnits(s)) if (r.label) labels.set(unitKey(r.atoms), r.label);
+    for (const r of labelUnits(s)) {
+      if (r.label) labels.set(unitKey(r.atoms), r.label);
+      else if (r.stopped) stoppedLabels++;
+    }
   }
   const units = unitFacts(a, labels);
   const comps = p.components;
   const parentIndex = parentComponent(s, comps);
   const copies = parentCopies(s, comps, parentIndex);
-  const counted = copies.length > 0 ? analyse(withoutCopies(s, comps, copies)) : a;
+  const mixture = drawnMixture(s, comps, parentIndex, copies);
+  const dropped = mixture ? mixture.beyondParent : copies;
+  const counted = dropped.length > 0 ? analyse(withoutCopies(s, comps, dropped), perceiveOpts) : a;
   const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
-  const planar = transMediumRingBonds(counted.p);
-  const chiral = planar.length > 0 ? null : counted.chirality.chiral;
-  const meso = chiral === null ? null : chiral === false && stereoisomers.chiral > 0 && stereoisomers.meso > 0;
-  const components = componentFacts(a, parentIndex, copies);
+  const drawnChiral = mixture ? mixture.chiral.some((c) => c === true) ? true : mixture.chiral.every((c) => c === false) ? false : null : counted.chirality.chiral;
+  const unstatable = units.filter((u) => u.formatCannotState);
+  const openAxes = unstatable.filter((u) => u.kind === "biaryl");
+  const chiral = openAxes.length > 0 ? null : drawnChiral;
+  const meso = chiral === null ? null : chiral === false && countValue(stereoisomers.chiral) > 0n && countValue(stereoisomers.meso) > 0n;
+  const components = componentFacts(a, parentIndex, copies, mixture ? mixture.beyondParent : copies);
   const facts = {
     stereocenters: units.filter((u) => u.kind === "tetrahedral").map((u) => ({ atom: u.atoms[0], label: u.label, element: u.element, defined: u.defined })),
     stereobonds: units.filter((u) => u.kind !== "tetrahedral").map((u) => ({
@@ -45540,21 +46317,38 @@ function describe(input, opts = {}) {
     formula: components.length === 1 ? components[0].formula : molecularFormula(s),
     remarks: p.remarks.slice()
   };
-  for (const b of planar) {
-    const [x, y] = b.atoms.map((i) => counted.p.structure.atoms[i].inputNumber);
-    facts.remarks.push(
-      `the trans double bond between atoms ${x} and ${y} lies in a ring of ${b.ringSize} atoms, which makes the molecule planar chiral (as (E)-cyclooctene); planar chirality is not modelled, so chirality is left open and the stereoisomer count leaves it out`
-    );
+  for (const u of unstatable) {
+    facts.remarks.push(unstatedRemark(u));
   }
-  if (planar.length > 0) {
+  if (openAxes.length > 0) {
     facts.mirror = {
       chiral: null,
       fixedAtoms: [],
       fixedBonds: [],
-      explanation: "open: a trans double bond in a ring of 8–11 atoms is planar chiral, which is not modelled"
+      explanation: "open: the configuration of a stereogenic axis or helix is not stated by the input format"
     };
   }
-  if (copies.length > 0) {
+  if (stoppedLabels > 0) {
+    facts.remarks.push(
+      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`
+    );
+  }
+  if (mixture) {
+    facts.mixture = mixture.facts;
+    facts.remarks.push(
+      `${mixture.facts.explanation}: a mixture, not one molecule, so stereoisomer counts are those of one molecule and "meso" does not apply to the drawing`
+    );
+    if (chiral === true) {
+      facts.mirror = {
+        chiral: true,
+        fixedAtoms: [],
+        fixedBonds: [],
+        explanation: `chiral molecules: ${mixture.facts.explanation}`
+      };
+    }
+    if (facts.enhanced.meaning === "absolute" || facts.enhanced.meaning === "none")
+      facts.enhanced.meaning = mixture.facts.kind === "racemate" ? "racemic" : "mixture";
+  } else if (copies.length > 0) {
     facts.remarks.push(
       `${copies.length + 1} identical copies of the parent (${components[parentIndex].formula}): stereoisomer counts and chirality are those of one copy`
     );
@@ -45579,7 +46373,7 @@ function unitFacts(a, labels) {
     if (!a.reported[k]) return;
     const ck = u.atoms.map((x) => p.classes[x]).sort((x, y) => x - y).join(",") + u.kind;
     if (!classIds.has(ck)) classIds.set(ck, classIds.size);
-    const label = u.defined ? labels.get(unitKey(u.atoms)) ?? null : null;
+    const label = !u.defined || u.kind === "planar" ? null : u.kind === "helix" ? u.bit === 0 ? "P" : "M" : labels.get(unitKey(u.atoms)) ?? null;
     let pseudo = label !== null && label === label.toLowerCase();
     if (fullyDefined && u.mode === "parity" && !pseudo) {
       pseudo = group.perms.some((perm, h) => perm[k] === k && mirrorFixed(group, h, state));
@@ -45594,15 +46388,31 @@ function unitFacts(a, labels) {
       locants: u.atoms.map((x) => s.atoms[x].mapNumber),
       group: groupOf.get(u.atoms[0]) ?? null,
       equivalenceClass: classIds.get(ck),
-      component: p.componentOfAtom[u.atoms[0]]
+      classKey: ck,
+      component: p.componentOfAtom[u.atoms[0]],
+      ...!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true } : {}
     });
   });
   return out;
 }
+function cannotState(kind, dimension) {
+  if (kind === "planar") return dimension !== 3;
+  return dimension === 0 && (kind === "biaryl" || kind === "helix");
+}
+function unstatedRemark(u) {
+  const [x, y] = u.atoms;
+  const what = u.kind === "biaryl" ? `the bond between atoms ${x} and ${y} is a potential stereogenic axis (ortho-substituted biaryl, found by a rule of thumb on ortho substitution: common practice, no source)` : u.kind === "helix" ? `the ortho-fused rings ending at atoms ${x} and ${y} form a helix` : `the trans double bond between atoms ${x} and ${y} lies in a ring of 8–11 atoms and is twisted (planar chiral, as (E)-cyclooctene)`;
+  const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
+  return `${what}; the input format cannot state its configuration: ${then}`;
+}
 function mirrorFixed(g, h, x) {
   const perm = g.perms[h];
   const flip2 = g.flips[h];
-  for (let i = 0; i < x.length; i++) if ((x[i] ^ flip2[i] ^ g.reflect[i]) !== x[perm[i]]) return false;
+  for (let i = 0; i < x.length; i++) {
+    if ((x[i] ^ flip2[i] ^ g.reflect[i]) === x[perm[i]]) continue;
+    if (i < g.planarHost.length && g.planarHost[i] >= 0 && x[g.planarHost[i]] === g.planarZ[i]) continue;
+    return false;
+  }
   return true;
 }
 function enhancedFacts(a) {
@@ -45627,16 +46437,7 @@ function enhancedFacts(a) {
   if (list.every((k) => k.startsWith("and"))) return { groups, meaning: "mixture" };
   return { groups, meaning: "mixed" };
 }
-function parentComponent(s, comps) {
-  const organic = (c) => c.some((x) => s.atoms[x].atomicNumber === 6);
-  let parent = -1;
-  comps.forEach((c, k) => {
-    const better = parent < 0 || organic(c) && !organic(comps[parent]) || organic(c) === organic(comps[parent]) && c.length > comps[parent].length;
-    if (better) parent = k;
-  });
-  return parent;
-}
-function componentFacts(a, parent, copies) {
+function componentFacts(a, parent, copies, ofParent) {
   const s = a.p.structure;
   const comps = a.p.components;
   const single = comps.length === 1;
@@ -45645,7 +46446,7 @@ function componentFacts(a, parent, copies) {
       index: k,
       formula: single ? molecularFormula(s) : molecularFormula(s, c),
       heavyAtoms: c.filter((x) => s.atoms[x].atomicNumber !== 1).length,
-      role: k === parent || copies.includes(k) ? "parent" : "other",
+      role: k === parent || ofParent.includes(k) ? "parent" : "other",
       ...copies.length > 0 && (k === parent || copies.includes(k)) ? { copies: copies.length + 1 } : {}
     };
     let smiles = null;
@@ -45658,21 +46459,457 @@ function componentFacts(a, parent, copies) {
 }
 var unitKey;
 var init_describe = __esm({
-  "src/chem/describe.ts"() {
+  "src/chem/describe/describe.ts"() {
     "use strict";
     init_graph();
     init_isomers();
     init_labels();
     init_normalize();
-    init_perceive();
-    init_perceive_input();
-    init_symmetry();
-    init_symmetry_evidence();
-    init_isomers_list();
-    init_copies();
-    init_planar_ring();
     init_smiles2();
+    init_analyse();
+    init_copies();
+    init_mixture();
+    init_evidence();
+    init_isomer_list();
     unitKey = (atoms) => [...atoms].sort((a, b) => a - b).join(",");
+  }
+});
+
+// src/chem/describe/index.ts
+var init_describe2 = __esm({
+  "src/chem/describe/index.ts"() {
+    "use strict";
+    init_describe();
+    init_analyse();
+    init_carry();
+    init_copies();
+  }
+});
+
+// src/chem/relate/neutral.ts
+function neutralise(s) {
+  const n = s.atoms.length;
+  const nbrs = Array.from({ length: n }, () => []);
+  for (const b of s.bonds) {
+    if (b.a < 0 || b.b < 0 || b.a >= n || b.b >= n || b.a === b.b) continue;
+    nbrs[b.a].push(b.b);
+    nbrs[b.b].push(b.a);
+  }
+  const deprotonated = [];
+  const protonated = [];
+  for (let i = 0; i < n; i++) {
+    const a = s.atoms[i];
+    if (a.radical !== 0 || a.isotope !== null) continue;
+    const besidePositive = nbrs[i].some((j) => s.atoms[j].charge > 0);
+    const besideNegative = nbrs[i].some((j) => s.atoms[j].charge < 0);
+    if (a.charge === 1 && a.hCount > 0 && GIVES_PROTON.has(a.atomicNumber) && !besideNegative)
+      deprotonated.push(i);
+    else if (a.charge === -1 && nbrs[i].length === 0 && HALIDE.has(a.atomicNumber)) protonated.push(i);
+    else if (a.charge === -1 && nbrs[i].length > 0 && TAKES_PROTON.has(a.atomicNumber) && !besidePositive)
+      protonated.push(i);
+  }
+  if (deprotonated.length + protonated.length === 0) return { structure: s, deprotonated, protonated };
+  const delta = new Int32Array(n);
+  for (const i of deprotonated) delta[i] = -1;
+  for (const i of protonated) delta[i] = 1;
+  const atoms = objectList();
+  s.atoms.forEach((a, i) => {
+    if (delta[i] === 0) atoms.push(a);
+    else atoms.push(withCharge(atomWithHCount(a, a.hCount + delta[i]), a.charge + delta[i]));
+  });
+  const stereo = objectList();
+  for (const e of s.stereo) {
+    const kept = restereo(e, delta, atoms);
+    if (kept) stereo.push(kept);
+  }
+  const structure = restructure(s, atoms, s.bonds, stereo, s.groups);
+  return { structure, deprotonated, protonated };
+}
+function withCharge(a, charge) {
+  return newAtom(
+    a.element,
+    a.atomicNumber,
+    charge,
+    a.isotope,
+    a.hCount,
+    a.aromatic,
+    a.radical,
+    a.mapNumber,
+    a.inputNumber,
+    a.coords
+  );
+}
+function restereo(e, delta, atoms) {
+  if (e.kind === "tetrahedral") {
+    const d = delta[e.centre];
+    if (d === 0) return e;
+    const from = d < 0 ? IMPLICIT_H : LONE_PAIR;
+    const to = d < 0 ? LONE_PAIR : IMPLICIT_H;
+    if (d < 0 && atoms[e.centre].hCount !== 0) return null;
+    const k = e.ligands.indexOf(from);
+    if (k < 0) return d < 0 ? null : e;
+    const ligands = [...e.ligands];
+    ligands[k] = to;
+    return { kind: "tetrahedral", centre: e.centre, ligands, winding: e.winding };
+  }
+  if (e.kind === "double-bond") {
+    for (let k = 0; k < 2; k++)
+      if (e.refs[k] === IMPLICIT_H && delta[e.ends[k]] !== 0 && atoms[e.ends[k]].hCount === 0) return null;
+    return e;
+  }
+  return e;
+}
+var TAKES_PROTON, GIVES_PROTON, HALIDE;
+var init_neutral = __esm({
+  "src/chem/relate/neutral.ts"() {
+    "use strict";
+    init_make();
+    init_types();
+    TAKES_PROTON = /* @__PURE__ */ new Set([7, 8, 16, 34]);
+    GIVES_PROTON = /* @__PURE__ */ new Set([7, 8, 15, 16]);
+    HALIDE = /* @__PURE__ */ new Set([9, 17, 35, 53]);
+  }
+});
+
+// src/chem/relate/composition.ts
+function composition(input) {
+  const drawn = normalize(input).structure;
+  const neutral = neutralise(drawn).structure;
+  const comps = connectedComponents(neutral);
+  const species = [];
+  for (const c of comps) {
+    const sub3 = comps.length === 1 ? neutral : extractAtoms(neutral, c);
+    const drawnSub = comps.length === 1 ? drawn : extractAtoms(drawn, c);
+    const key3 = constitutionKey(sub3);
+    let memo = null;
+    const analysis = () => memo ??= analyse(sub3);
+    const same = species.find(
+      (x) => x.key === key3 && x.atoms.length === c.length && sameConfiguration(x, sub3, analysis)
+    );
+    if (same) {
+      same.copies++;
+      same.copyAtoms.push(c);
+      continue;
+    }
+    let drawnMemo = null;
+    let smiles = null;
+    const charges = c.map((x) => drawn.atoms[x].charge);
+    species.push({
+      key: key3,
+      drawnKey: drawnSub === sub3 ? key3 : constitutionKey(drawnSub),
+      formula: molecularFormula(sub3),
+      atoms: c,
+      copyAtoms: [c],
+      copies: 1,
+      structure: sub3,
+      analysis,
+      drawnStructure: drawnSub,
+      drawnAnalysis: () => drawnSub === sub3 ? analysis() : drawnMemo ??= analyse(drawnSub),
+      drawnSmiles: () => smiles ??= writeSmiles(drawnSub),
+      charge: charges.reduce((x, y) => x + y, 0),
+      positive: charges.some((q) => q > 0),
+      negative: charges.some((q) => q < 0),
+      organic: c.some((x) => neutral.atoms[x].atomicNumber === 6),
+      heavy: c.filter((x) => neutral.atoms[x].atomicNumber !== 1).length
+    });
+  }
+  let parent = 0;
+  species.forEach((x, k) => {
+    const p = species[parent];
+    if (x.organic && !p.organic || x.organic === p.organic && x.heavy > p.heavy) parent = k;
+  });
+  return { neutral, drawn, species, parent };
+}
+function sameConfiguration(x, sub3, analysis) {
+  if (x.structure.stereo.length + sub3.stereo.length === 0) return true;
+  const pa = x.analysis();
+  const pb = analysis();
+  const iso = isomorphic(pa.p.structure, pb.p.structure);
+  if (!iso) return false;
+  const c = carryOnto(pa, pb, iso);
+  return !c.open && elementMapping(pb.group, c.y, pb.state) >= 0;
+}
+function hasUnits(x) {
+  return x.analysis().p.units.length > 0;
+}
+function drawnAs(x) {
+  if (x.positive && x.negative && x.charge === 0) return "a zwitterion";
+  if (x.charge > 0) return "a cation";
+  if (x.charge < 0) return "an anion";
+  return x.positive || x.negative ? "charge-separated" : "neutral";
+}
+var init_composition = __esm({
+  "src/chem/relate/composition.ts"() {
+    "use strict";
+    init_graph();
+    init_describe2();
+    init_normalize();
+    init_symmetry();
+    init_smiles2();
+    init_neutral();
+  }
+});
+
+// src/chem/relate/stereo.ts
+function labelMap(a) {
+  const m = /* @__PURE__ */ new Map();
+  if (a.p.structure.stereo.length === 0) return m;
+  for (const r of labelUnits(a.p.structure)) if (r.label) m.set(keyOf(r.atoms), r.label);
+  return m;
+}
+function stereoRelation(pa, pb, iso) {
+  const none = {
+    differingUnits: [],
+    relabelledUnits: [],
+    epimers: false
+  };
+  const mB = pb.p.units.length;
+  const { y, fromA, open } = carryOnto(pa, pb, iso);
+  if (open) {
+    return {
+      ...none,
+      relation: "same-constitution",
+      explanation: "same constitution; undefined stereo leaves the relation open"
+    };
+  }
+  const g = pb.group;
+  const xB = pb.state;
+  if (elementMapping(g, y, xB) >= 0)
+    return { ...none, relation: "identical", explanation: "the same stereoisomer" };
+  const labA = labelMap(pa);
+  const labB = labelMap(pb);
+  const unitFact = (j, iA) => {
+    const ub = pb.p.units[j];
+    const ua = pa.p.units[iA];
+    return {
+      kind: ub.kind,
+      atomsA: ua.atoms.map((x) => pa.p.structure.atoms[x].inputNumber),
+      atomsB: ub.atoms.map((x) => pb.p.structure.atoms[x].inputNumber),
+      labelA: labA.get(keyOf(ua.atoms)) ?? null,
+      labelB: labB.get(keyOf(ub.atoms)) ?? null
+    };
+  };
+  if (elementMapping(g, mirrorState(g, y), xB) >= 0) {
+    const differingUnits2 = [];
+    for (let j = 0; j < mB; j++) {
+      if (pb.p.units[j].mode === "parity" && stereogenicIn(g, xB, j) && fromA[j] >= 0)
+        differingUnits2.push(unitFact(j, fromA[j]));
+    }
+    return {
+      ...none,
+      relation: "enantiomers",
+      differingUnits: differingUnits2,
+      explanation: "mirror images that are not superimposable"
+    };
+  }
+  let best = [];
+  let bestH = 0;
+  for (let h = 0; h < g.perms.length; h++) {
+    const z = act(g, h, y);
+    const diff = [];
+    for (let j = 0; j < mB; j++) if (z[j] !== xB[j] && stereogenicIn(g, xB, j)) diff.push(j);
+    if (h === 0 || diff.length < best.length) {
+      best = diff;
+      bestH = h;
+      if (diff.length <= 1) break;
+    }
+  }
+  const perm = g.perms[bestH];
+  const aOf = new Int32Array(mB).fill(-1);
+  for (let j = 0; j < mB; j++) if (fromA[j] >= 0) aOf[perm[j]] = fromA[j];
+  const differ = new Set(best);
+  const differingUnits = best.filter((j) => aOf[j] >= 0).map((j) => unitFact(j, aOf[j]));
+  const relabelledUnits = [];
+  for (let j = 0; j < mB; j++) {
+    if (differ.has(j) || aOf[j] < 0 || !pb.reported[j]) continue;
+    const u = unitFact(j, aOf[j]);
+    if (u.labelA !== null && u.labelB !== null && u.labelA !== u.labelB) relabelledUnits.push(u);
+  }
+  const molecule = best.length === 1 ? pb.p.componentOfAtom[pb.p.units[best[0]].atoms[0]] : -1;
+  const epimers = best.length === 1 && differingUnits.length === 1 && differingUnits[0].kind === "tetrahedral" && pb.p.units.filter(
+    (u, j) => u.mode === "parity" && u.kind === "tetrahedral" && pb.reported[j] && pb.p.componentOfAtom[u.atoms[0]] === molecule
+  ).length >= 2;
+  const s = pb.p.structure;
+  const names2 = best.map((j) => {
+    const d = differingUnits.find((u) => keyOf(u.atomsB) === keyOf(inputNumbers(s, pb.p.units[j].atoms)));
+    const change = d && d.labelA && d.labelB && d.labelA !== d.labelB ? ` (${d.labelA} in A, ${d.labelB} in B)` : "";
+    return `${unitWords(s, pb.p.units[j].atoms)}${change}`;
+  }).join(", ");
+  let explanation = epimers ? `epimers: diastereomers differing in configuration only at ${names2} (atoms numbered as in B)` : `diastereomers: differing in configuration at ${names2} (atoms numbered as in B)`;
+  if (relabelledUnits.length > 0) {
+    const list = relabelledUnits.map((u) => `atom ${u.atomsB[0]} (${u.labelA} in A, ${u.labelB} in B)`).join(", ");
+    explanation += `; the CIP descriptor also changes at ${list}, whose own configuration is kept (its neighbours changed)`;
+  }
+  return { relation: "diastereomers", differingUnits, relabelledUnits, epimers, explanation };
+}
+function inputNumbers(s, atoms) {
+  return atoms.map((x) => s.atoms[x].inputNumber);
+}
+function unitWords(s, atoms) {
+  const one = (i) => `atom ${s.atoms[i].inputNumber} (${s.atoms[i].element})`;
+  return atoms.length === 1 ? one(atoms[0]) : `the unit between ${one(atoms[0])} and ${one(atoms[1])}`;
+}
+var keyOf;
+var init_stereo = __esm({
+  "src/chem/relate/stereo.ts"() {
+    "use strict";
+    init_describe2();
+    init_labels();
+    init_symmetry();
+    keyOf = (xs) => [...xs].sort((p, q) => p - q).join(",");
+  }
+});
+
+// src/chem/relate/index.ts
+function relate(sa, sb) {
+  const A = composition(sa);
+  const B = composition(sb);
+  const pa = A.species[A.parent];
+  const pb = B.species[B.parent];
+  const related = pa && pb && pa.key === pb.key ? relatedKeys(A, B, pa.key) : /* @__PURE__ */ new Set();
+  const inA = A.species.filter((x) => related.has(x.key));
+  const inB = B.species.filter((x) => related.has(x.key));
+  const otherComponents = otherDifferences(
+    A.species.filter((x) => !related.has(x.key)),
+    B.species.filter((x) => !related.has(x.key))
+  );
+  const formDifferences = formDiffs(A, B, inA, inB, otherComponents);
+  const salt = otherComponents.onlyInA.length + otherComponents.onlyInB.length > 0 ? " (parent components; the other components differ)" : "";
+  const base = {
+    differingUnits: [],
+    relabelledUnits: [],
+    epimers: false,
+    otherComponents,
+    formDifferences
+  };
+  if (!pa || !pb)
+    return { ...base, relation: "different-compounds", explanation: "a drawing holds no atoms" };
+  const constitutional = () => pa.formula === pb.formula ? {
+    ...base,
+    relation: "constitutional-isomers",
+    explanation: `same molecular formula, different constitution${salt}`
+  } : { ...base, relation: "different-compounds", explanation: `different molecular formulas${salt}` };
+  if (pa.key !== pb.key) return constitutional();
+  const mixed = speciesMismatch(inA, inB);
+  if (mixed) return { ...base, relation: "same-constitution", explanation: mixed + salt };
+  const asDrawn = sameDrawnForms(inA, inB);
+  const whole = inA.length > 1 || inB.length > 1;
+  const ta = whole ? analyse(together(A, inA, asDrawn)) : asDrawn ? pa.drawnAnalysis() : pa.analysis();
+  const tb = whole ? analyse(together(B, inB, asDrawn)) : asDrawn ? pb.drawnAnalysis() : pb.analysis();
+  const iso = isomorphic(ta.p.structure, tb.p.structure);
+  if (!iso) return constitutional();
+  const r = stereoRelation(ta, tb, iso);
+  const together_ = whole && r.relation !== "same-constitution" ? ` (the molecules taken together: ${inB.map((x) => x.formula).join(" + ")})` : "";
+  return {
+    ...base,
+    relation: r.relation,
+    differingUnits: r.differingUnits,
+    relabelledUnits: r.relabelledUnits,
+    epimers: r.epimers,
+    explanation: `${r.explanation}${together_}${salt}`
+  };
+}
+function relatedKeys(A, B, parentKey) {
+  const keys = /* @__PURE__ */ new Set([parentKey]);
+  const inB = new Set(B.species.map((x) => x.key));
+  for (const x of A.species) if (!keys.has(x.key) && inB.has(x.key) && hasUnits(x)) keys.add(x.key);
+  return keys;
+}
+function speciesMismatch(inA, inB) {
+  const count3 = (xs, key3) => {
+    const own2 = xs.filter((x) => x.key === key3);
+    return [own2.length, own2.reduce((t, x) => t + x.copies, 0)];
+  };
+  for (const key3 of new Set(inA.map((x) => x.key))) {
+    const [na, ma] = count3(inA, key3);
+    const [nb, mb] = count3(inB, key3);
+    const f = inA.find((x) => x.key === key3).formula;
+    if (na !== nb)
+      return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
+    if (na > 1 && ma !== mb)
+      return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
+  }
+  return null;
+}
+function together(c, xs, asDrawn) {
+  const kinds = /* @__PURE__ */ new Map();
+  for (const x of xs) kinds.set(x.key, (kinds.get(x.key) ?? 0) + 1);
+  const atoms = xs.flatMap((x) => (kinds.get(x.key) ?? 0) > 1 ? x.copyAtoms.flat() : x.atoms).sort((p, q) => p - q);
+  return extractAtoms(asDrawn ? c.drawn : c.neutral, atoms);
+}
+function sameDrawnForms(inA, inB) {
+  const keys = (xs) => xs.map((x) => x.drawnKey).sort().join(" ");
+  return keys(inA) === keys(inB);
+}
+function otherDifferences(a, b) {
+  const left = b.flatMap((x) => Array.from({ length: x.copies }, () => x));
+  const onlyInA = [];
+  for (const o of a) {
+    for (let k = 0; k < o.copies; k++) {
+      const j = left.findIndex((x) => x.key === o.key && sameSpecies(o, x));
+      if (j >= 0) left.splice(j, 1);
+      else onlyInA.push(o.drawnSmiles());
+    }
+  }
+  return { onlyInA, onlyInB: left.map((x) => x.drawnSmiles()) };
+}
+function sameSpecies(a, b) {
+  if (a.structure.stereo.length + b.structure.stereo.length === 0) return true;
+  const ta = a.analysis();
+  const tb = b.analysis();
+  const iso = isomorphic(ta.p.structure, tb.p.structure);
+  return iso !== null && stereoRelation(ta, tb, iso).relation === "identical";
+}
+function formDiffs(A, B, inA, inB, others2) {
+  const out = [];
+  const pa = A.species[A.parent];
+  const pb = B.species[B.parent];
+  if (!pa || !pb) return out;
+  if (pa.key === pb.key) {
+    for (const x of inA) {
+      const y = inB.find((z) => z.key === x.key);
+      if (y && (x.drawnKey !== y.drawnKey || drawnAs(x) !== drawnAs(y))) {
+        out.push({
+          kind: "protonation",
+          explanation: `${x.formula} (neutral form) is drawn as ${drawnAs(x)} in A and as ${drawnAs(y)} in B`
+        });
+      }
+    }
+    const copies = (xs, key3) => xs.filter((x) => x.key === key3).reduce((t, x) => t + x.copies, 0);
+    for (const key3 of new Set(inA.map((x) => x.key))) {
+      const na = copies(inA, key3);
+      const nb = copies(inB, key3);
+      if (na !== nb) {
+        const f = inA.find((x) => x.key === key3).formula;
+        out.push({ kind: "ratio", explanation: `A holds ${na} molecule(s) of ${f}, B ${nb}` });
+      }
+    }
+  }
+  if (others2.onlyInA.length + others2.onlyInB.length > 0) {
+    const list = (xs) => xs.length ? xs.join(", ") : "none";
+    out.push({
+      kind: "salt-form",
+      explanation: `other components (counter-ions, solvents) differ: only in A ${list(others2.onlyInA)}; only in B ${list(others2.onlyInB)}`
+    });
+  }
+  return out;
+}
+var init_relate = __esm({
+  "src/chem/relate/index.ts"() {
+    "use strict";
+    init_graph();
+    init_describe2();
+    init_normalize();
+    init_composition();
+    init_stereo();
+  }
+});
+
+// src/chem/relate.ts
+var init_relate2 = __esm({
+  "src/chem/relate.ts"() {
+    "use strict";
+    init_relate();
   }
 });
 
@@ -45682,7 +46919,9 @@ __export(chem_exports, {
   IMPLICIT_H: () => IMPLICIT_H,
   LONE_PAIR: () => LONE_PAIR,
   analyse: () => analyse,
+  countValue: () => countValue,
   describe: () => describe,
+  exactCount: () => exactCount,
   labelUnits: () => labelUnits,
   mirror: () => mirror,
   normalize: () => normalize,
@@ -45700,17 +46939,23 @@ var init_chem = __esm({
     init_read();
     init_smiles();
     init_smiles2();
-    init_describe();
-    init_relate();
+    init_describe2();
+    init_relate2();
+    init_isomers();
     init_symmetry();
     init_normalize();
-    init_perceive();
+    init_perceive2();
     init_labels();
     init_types();
   }
 });
 
 // src/chem/descriptors.ts
+function foldSigns(text) {
+  let out = "";
+  for (const ch of text) out += MINUS_LIKE.includes(ch) ? "-" : PLUS_LIKE.includes(ch) ? "+" : ch;
+  return out;
+}
 function parseDescriptors(input, options = {}) {
   const context = options.context ?? "descriptor";
   const out = {
@@ -45747,6 +46992,12 @@ function parseDescriptors(input, options = {}) {
           if (g.sign) signs.push({ sign: g.sign, offset: i });
           out.items.push(...g.items);
           for (const w of g.words) addWord(out, w);
+          if (g.legacyPair) {
+            out.legacyPair = true;
+            out.remarks.push(
+              `${g.legacyPair} without locants is the legacy way of naming a racemate and is read as (${g.items[0].pair}); IUPAC 2013 (P-93.1.3) writes (RS) or rac-`
+            );
+          }
           i = end + 1;
         }
       } else if (end < 0 && context === "descriptor") {
@@ -45755,9 +47006,7 @@ function parseDescriptors(input, options = {}) {
         break;
       }
     } else {
-      const m = /^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\s\-\u2010\u2011\u2012\u2013\u2212(]|$)/.exec(
-        input.slice(i)
-      );
+      const m = WORD_PREFIX.exec(input.slice(i));
       const word = m?.[1];
       const next = m ? input[i + m[0].length] : void 0;
       if (word && (context === "descriptor" || next !== void 0 && HYPHENS.includes(next))) {
@@ -45800,8 +47049,18 @@ function addWord(out, w) {
 }
 function parseGroup(inner, base, context, problem) {
   const compact = inner.replace(/\s+/g, "");
-  const sign = SIGNS[compact];
+  const sign = SIGNS[foldSigns(compact)];
   if (sign) return { kind: "sign", sign, items: [], words: [] };
+  const legacy = /^([RS])[,/]([RS])$/.exec(compact);
+  if (legacy && legacy[1] !== legacy[2]) {
+    const pair = legacy[1] === "R" ? "RS" : "SR";
+    return {
+      kind: "items",
+      items: [{ locant: null, label: pair[0], pair, offset: base + inner.indexOf(legacy[1]) }],
+      words: [],
+      legacyPair: `(${legacy[1]}${compact[1]}${legacy[2]})`
+    };
+  }
   const parts = [];
   let start = 0;
   for (let k = 0; k <= inner.length; k++) {
@@ -45878,22 +47137,25 @@ function finish(out, signs, problem) {
   const racemic = out.prefixes.includes("rac") || pairs > 0 || out.rotationSign === "±" || out.fischer === "DL";
   const relative = out.prefixes.includes("rel") || stars > 0;
   if (racemic && relative) {
-    problem(0, "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed; P-93.1.3 uses one of them");
+    out.remarks.push(
+      "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed, read as racemic; IUPAC 2013 (P-93.1.3) uses one of them"
+    );
   }
   if (out.prefixes.includes("rel") && pairs > 0)
     problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
-  if (out.prefixes.length > 0 && out.items.length === 0) {
-    problem(0, `'${out.prefixes[0]}-' must be followed by descriptors such as (1R,2S)`);
+  if (out.prefixes.includes("rel") && out.items.length === 0) {
+    out.remarks.push("'rel-' without descriptors states no configuration");
   }
   if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs === 0) {
-    const it = chiralItems[0];
-    problem(it.offset, "(±) marks a racemate but the descriptors are absolute; write (…RS,…SR) or rac-(…)");
+    out.remarks.push(
+      "(±) with descriptors of one enantiomer is read as rac-(…); IUPAC 2013 (P-93.1.3) writes rac-(…) or (…RS,…SR)"
+    );
   }
   if (racemic) out.mode = "racemic";
   else if (relative) out.mode = "relative";
   else if (out.items.length > 0) out.mode = "absolute";
   else out.mode = "none";
-  if ((racemic || relative) && chiralItems.length > 0) {
+  if ((racemic || relative) && chiralItems.some((it) => it.locant !== null)) {
     const first = [...chiralItems].sort((a, b) => locantOrder(a.locant) - locantOrder(b.locant))[0];
     if (first.label === "S" || first.label === "P") {
       out.remarks.push(
@@ -45928,7 +47190,7 @@ function itemKey(it) {
 function unitLocants(u) {
   return u.locants.filter((l) => l !== null).sort((a, b) => a - b);
 }
-function count(keys) {
+function count2(keys) {
   const c = {};
   for (const k of keys) c[k] = (c[k] ?? 0) + 1;
   return c;
@@ -45948,14 +47210,15 @@ function compareDescriptors(parsed, units, options = {}) {
   const result2 = {
     method: "none",
     whyNotPerLocant: null,
+    countsDecide: false,
     agrees: true,
     matchedInverted: false,
     mismatches: [],
     notStereoUnits: [],
     undefinedAt: [],
     unlisted: [],
-    declaredCounts: count(parsed.items.map(itemKey)),
-    computedCounts: count(defined.map((u) => unitKey2(u)))
+    declaredCounts: count2(parsed.items.map(itemKey)),
+    computedCounts: count2(defined.map((u) => unitKey2(u)))
   };
   if (parsed.items.length === 0) {
     result2.whyNotPerLocant = "the descriptor cites no configurations";
@@ -45964,18 +47227,21 @@ function compareDescriptors(parsed, units, options = {}) {
   const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
   const mapped = units.some((u) => unitLocants(u).length > 0);
   const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
-  if (mapped && numeric) {
-    result2.method = "per-locant";
+  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
+  if (mapped && numeric || single) {
+    result2.method = single ? "per-unit" : "per-locant";
     const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
-    const pairs = [];
-    for (const it of parsed.items) {
-      const u = byLocant(Number(it.locant));
-      if (!u) result2.notStereoUnits.push(it.locant);
-      else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
-      else pairs.push({ it, u });
+    const pairs = single ?? [];
+    if (!single) {
+      for (const it of parsed.items) {
+        const u = byLocant(Number(it.locant));
+        if (!u) result2.notStereoUnits.push(it.locant);
+        else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
+        else pairs.push({ it, u });
+      }
     }
     const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
-      locant: it.locant,
+      locant: it.locant ?? "",
       declared: it.pair ?? it.label + (it.axial ? "a" : ""),
       computed: u.label,
       atoms: u.atoms
@@ -45988,7 +47254,7 @@ function compareDescriptors(parsed, units, options = {}) {
     for (const u of defined) {
       if (!cited.has(u)) {
         result2.unlisted.push({
-          locant: unitLocants(u)[0]?.toString() ?? null,
+          locant: single ? null : unitLocants(u)[0]?.toString() ?? null,
           label: u.label,
           atoms: u.atoms
         });
@@ -46003,28 +47269,75 @@ function compareDescriptors(parsed, units, options = {}) {
   const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
   result2.agrees = direct || inverted;
   result2.matchedInverted = !direct && inverted;
+  result2.countsDecide = result2.agrees && countsDecide(parsed.items, units, mayInvert);
   return result2;
 }
-var WORDS, HYPHENS, SIGNS, ITEM, MIRROR, AXIAL_KINDS;
+function kindOfKey(k) {
+  if (k === "R" || k === "S") return "RS";
+  if (k === "r" || k === "s") return "rs";
+  if (k === "M" || k === "P") return "MP";
+  if (k === "m" || k === "p") return "mp";
+  if (k === "E" || k === "Z" || k === "e" || k === "z") return "EZ";
+  return "other";
+}
+function kindOfUnit(u) {
+  const k = unitKey2(u);
+  if (k !== null) return kindOfKey(k);
+  if (u.kind === "tetrahedral") return u.pseudoasymmetric ? "rs" : "RS";
+  if (u.kind === "double-bond") return "EZ";
+  if (u.kind === "allene" || u.kind === "biaryl") return "MP";
+  return "other";
+}
+function matchOnePerKind(items, units) {
+  if (units.some((u) => kindOfUnit(u) === "other")) return null;
+  const pairs = [];
+  for (const it of items) {
+    const kind = kindOfKey(itemKey(it));
+    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
+    const sameKindUnits = units.filter((u2) => kindOfUnit(u2) === kind);
+    if (kind === "other" || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
+    const u = sameKindUnits[0];
+    if (!u.defined || u.label === null) return null;
+    pairs.push({ it, u });
+  }
+  return pairs;
+}
+function countsDecide(items, units, mayInvert) {
+  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
+  let chiralUnits = 0;
+  let uniform = true;
+  for (const kind of kinds) {
+    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
+    if (kind === "other" || ofKind.some((u) => !u.defined || u.label === null)) return false;
+    if (kind === "RS" || kind === "MP") chiralUnits += ofKind.length;
+    if (new Set(ofKind.map((u) => unitKey2(u))).size > 1) {
+      if (!(mayInvert && kind === "RS" && ofKind.length === 2)) return false;
+      uniform = false;
+    }
+  }
+  return uniform || chiralUnits === 2;
+}
+var WORDS, MINUS_LIKE, HYPHENS, PLUS_LIKE, SIGNS, WORD_PREFIX, ITEM, MIRROR, AXIAL_KINDS;
 var init_descriptors = __esm({
   "src/chem/descriptors.ts"() {
     "use strict";
     WORDS = ["meso", "cis", "trans", "erythro", "threo", "endo", "exo", "syn", "anti"];
-    HYPHENS = "-‐‑‒–−";
+    MINUS_LIKE = "-‐‑‒–—−﹣－˗";
+    HYPHENS = MINUS_LIKE;
+    PLUS_LIKE = "+＋";
     SIGNS = {
       "+": "+",
       "-": "-",
-      "−": "-",
-      "–": "-",
       "±": "±",
       "+/-": "±",
-      "+/−": "±",
-      "+/–": "±",
       "+-": "±"
     };
+    WORD_PREFIX = new RegExp(
+      `^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\\s(${MINUS_LIKE.replace("-", "\\-")}]|$)`
+    );
     ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
     MIRROR = { R: "S", S: "R", M: "P", P: "M" };
-    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene"]);
+    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene", "helix"]);
   }
 });
 
@@ -46033,9 +47346,18 @@ function unitName2(u) {
   const loc = (k) => u.locants[k] !== null && u.locants[k] !== void 0 ? String(u.locants[k]) : "";
   if (u.kind === "tetrahedral") return `${u.element}${loc(0)} (atom ${u.atoms[0]})`;
   const ends = u.atoms.join(", ");
-  const what = u.kind === "double-bond" ? "double bond" : u.kind === "biaryl" ? "biaryl axis" : `${u.kind} axis`;
+  const what = u.kind === "double-bond" ? "double bond" : u.kind === "biaryl" ? "biaryl axis" : u.kind === "helix" ? "helix" : `${u.kind} axis`;
   const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join("=C")}` : "";
   return `${what}${mapped} (atoms ${ends})`;
+}
+function atomsInRecordTerms(text, s) {
+  if (!s) return text;
+  const byNumber = new Map(s.atoms.map((a) => [a.inputNumber, a]));
+  return text.replace(/\b([A-Z][a-z]?)(\d+)\b/g, (whole, el, num2) => {
+    const a = byNumber.get(Number(num2));
+    if (!a || a.element !== el) return whole;
+    return a.mapNumber !== null ? `${el}${a.mapNumber} (atom ${num2})` : `${el} (atom ${num2})`;
+  });
 }
 function listUnits(units) {
   return units.length === 0 ? "none" : units.map(unitName2).join(", ");
@@ -46098,6 +47420,331 @@ var init_words = __esm({
   }
 });
 
+// src/checks/fixes.ts
+function plainItems(parsed) {
+  return parsed.items.every((it) => !it.pair && !it.relativeStar && !it.axial && PLAIN_LABEL.test(it.label));
+}
+function relabelFix(field2, text, parsed, cmp) {
+  if (cmp.method !== "per-locant" && cmp.method !== "per-unit") return null;
+  if (cmp.matchedInverted || !plainItems(parsed)) return null;
+  if (cmp.mismatches.length === 0 || cmp.notStereoUnits.length > 0 || cmp.undefinedAt.length > 0) return null;
+  let out = text;
+  for (const m of cmp.mismatches) {
+    if (!PLAIN_LABEL.test(m.computed)) return null;
+    const items = parsed.items.filter((it) => (it.locant ?? "") === m.locant && it.label === m.declared);
+    if (items.length !== 1) return null;
+    const item = items[0];
+    const at = item.offset + m.locant.length;
+    if (out[at] !== m.declared) return null;
+    out = out.slice(0, at) + m.computed + out.slice(at + 1);
+  }
+  return out === text ? null : { field: field2, from: text, to: out };
+}
+function singleLabelFix(field2, text, parsed, units) {
+  if (parsed.mode !== "absolute" || parsed.items.length !== 1 || !plainItems(parsed)) return null;
+  if (units.length !== 1 || !units[0].defined) return null;
+  const computed = units[0].label;
+  const item = parsed.items[0];
+  if (computed === null || !PLAIN_LABEL.test(computed) || item.locant !== null) return null;
+  if (text[item.offset] !== item.label || computed === item.label) return null;
+  return { field: field2, from: text, to: text.slice(0, item.offset) + computed + text.slice(item.offset + 1) };
+}
+function signFix(field2, value, measuredPositive) {
+  const signs = [
+    ...value.matchAll(/\((?:\+|\uFF0B|[-\u2010-\u2012\u2013\u2014\u2212\uFE63\uFF0D\u02D7])\)/g)
+  ];
+  if (signs.length !== 1) return null;
+  const from = signs[0][0];
+  const to = measuredPositive ? "(+)" : "(-)";
+  return from === to ? null : { field: field2, from, to };
+}
+var PLAIN_LABEL;
+var init_fixes = __esm({
+  "src/checks/fixes.ts"() {
+    "use strict";
+    PLAIN_LABEL = /^[RSEZMP]$/;
+  }
+});
+
+// src/checks/rotation-consistent.ts
+function conditions(r) {
+  const c = [];
+  c.push(r.wavelength_nm !== void 0 ? `${fmt(r.wavelength_nm)} nm` : "wavelength not given");
+  if (r.temperature_c !== void 0) c.push(`${fmt(r.temperature_c)} °C`);
+  if (r.solvent !== void 0) c.push(r.solvent);
+  if (r.concentration !== void 0) c.push(`c ${fmt(r.concentration)}`);
+  return c.join(", ");
+}
+function isSodiumD(nm) {
+  return nm === void 0 || Math.abs(nm - 589) <= 1;
+}
+function run(ctx) {
+  const record = ctx.record;
+  if (!record) return { findings: [], notApplicable: true };
+  const form = record.stereo.form;
+  const rot2 = record.stereo.rotation;
+  const sign = declaredSign(record);
+  if (!rot2) return { findings: [], notApplicable: true };
+  const tol = ctx.config.zeroRotationTolerance;
+  const out = [];
+  const base = { form, value: rot2.value, conditions: conditions(rot2), tolerance: tol };
+  const add = (id, field2, data, severity) => {
+    out.push(finding(id, field2, { ...base, ...data }, severity));
+  };
+  const zero = Math.abs(rot2.value) <= tol;
+  if (WHY[form] && !zero) add("rotation-should-be-zero", "stereo.rotation.value", { why: WHY[form] });
+  if (sign && sign.sign !== "±") {
+    const signText = sign.sign === "+" ? "(+)" : "(−)";
+    if (zero) add("sign-with-zero-rotation", sign.field, { field: sign.field, sign: signText }, "warning");
+    else if (sign.sign === "+" !== rot2.value > 0) {
+      const d = isSodiumD(rot2.wavelength_nm);
+      add(
+        "sign-disagrees-with-rotation",
+        sign.field,
+        {
+          field: sign.field,
+          sign: signText,
+          wavelengthNote: d ? "" : " The rotation was measured away from the sodium D line (589 nm), where the sign can differ (optical rotatory dispersion); signs in names refer to 589 nm unless stated."
+        },
+        d ? void 0 : "note"
+      );
+      const value = sign.field === "name" ? record.name : record.stereo.descriptors;
+      const fix = d && value !== void 0 ? signFix(sign.field, value, rot2.value > 0) : null;
+      if (fix !== null) out[out.length - 1].fix = fix;
+    }
+  }
+  if (form === "single-enantiomer" && zero)
+    add("single-enantiomer-zero-rotation", "stereo.rotation.value", {}, "note");
+  if (out.some((x) => x.severity !== "note")) return { findings: out };
+  const s = sign && sign.sign !== "±" ? `; sign ${sign.sign === "+" ? "(+)" : "(−)"} in ${sign.field} agrees` : "";
+  return {
+    findings: out,
+    passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}`
+  };
+}
+var messages, WHY, rotationConsistent;
+var init_rotation_consistent = __esm({
+  "src/checks/rotation-consistent.ts"() {
+    "use strict";
+    init_words();
+    init_fixes();
+    messages = {
+      "rotation-should-be-zero": "Declared {form}, but the specific rotation is {value}° ({conditions}); it should be zero within ±{tolerance}°, because {why}. Check the sample (an enantiomeric excess, an optically active impurity) or the form.",
+      "sign-disagrees-with-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}). Correct the sign in the name or descriptors, or re-check the measurement.{wavelengthNote}",
+      "sign-with-zero-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. A sign needs a measurable rotation: measure at higher concentration or another wavelength, or drop the sign.",
+      "single-enantiomer-zero-rotation": "Declared single-enantiomer, but the specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. Some enantiomers rotate very little at the sodium D line, but a zero reading is also what a racemate gives. Was the enantiomeric purity shown another way (chiral HPLC)? Record that evidence."
+    };
+    WHY = {
+      racemate: "a racemate holds equal amounts of two enantiomers, whose rotations are equal and opposite and cancel",
+      meso: "a meso compound is achiral, and achiral substances are optically inactive",
+      achiral: "achiral substances are optically inactive"
+    };
+    rotationConsistent = {
+      id: "rotation-consistent",
+      defaultSeverity: "error",
+      summary: "The specific rotation agrees with the declared form and with the (+)/(−) sign in the name.",
+      explanation: "Optical activity needs chiral molecules in enantiomeric excess: an achiral or meso compound is optically inactive, and a racemate is optically inactive because its enantiomers rotate equally in opposite senses (IUPAC Gold Book: optical activity, racemate, meso). The prefixes (+) and (−) state the sign of rotation, normally at the sodium D line, 589 nm (IUPAC 2013, P-93). A single enantiomer with zero rotation is possible but rare and is only noted. What counts as zero is a registry setting (zeroRotationTolerance).",
+      messages,
+      run
+    };
+  }
+});
+
+// src/checks/solvents.ts
+function solventText(s) {
+  let out = "";
+  for (const ch of s.trim().toLowerCase()) {
+    const k = SUBSCRIPTS.indexOf(ch);
+    out += k >= 0 ? String(k) : ch;
+  }
+  return out.replace(/\s+/g, " ");
+}
+function solventName(s) {
+  return BY_SPELLING.get(solventText(s)) ?? null;
+}
+function compareSolvents(a, b) {
+  if (solventText(a) === solventText(b)) return "same";
+  const x = solventName(a);
+  const y = solventName(b);
+  if (x !== null && y !== null) return x === y ? "same" : "different";
+  return "unknown";
+}
+function rotationsComparable(a, b) {
+  const nm = (r) => r.wavelength_nm ?? 589;
+  if (Math.abs(nm(a) - nm(b)) > 1) {
+    return { alike: false, reason: `measured at different wavelengths (${nm(a)} nm and ${nm(b)} nm)` };
+  }
+  const sa = a.solvent?.trim() ?? "";
+  const sb = b.solvent?.trim() ?? "";
+  if (sa === "" !== (sb === "")) {
+    return { alike: false, reason: `measured with the solvent given for one of them only ('${sa || sb}')` };
+  }
+  if (sa !== "") {
+    const c = compareSolvents(sa, sb);
+    if (c === "different")
+      return { alike: false, reason: `measured in different solvents (${sa} and ${sb})` };
+    if (c === "unknown") {
+      return {
+        alike: false,
+        reason: `measured in '${sa}' and '${sb}', which stereogate cannot tell to be the same solvent (not in its table of solvent names)`
+      };
+    }
+  }
+  if (a.temperature_c !== void 0 && b.temperature_c !== void 0 && Math.abs(a.temperature_c - b.temperature_c) > 5) {
+    return {
+      alike: false,
+      reason: `measured more than 5 °C apart (${a.temperature_c} °C and ${b.temperature_c} °C)`
+    };
+  }
+  return { alike: true };
+}
+var TABLE, BY_SPELLING, SUBSCRIPTS;
+var init_solvents = __esm({
+  "src/checks/solvents.ts"() {
+    "use strict";
+    TABLE = {
+      water: ["water", "h2o"],
+      methanol: ["methanol", "meoh", "ch3oh", "methyl alcohol"],
+      ethanol: ["ethanol", "etoh", "c2h5oh", "ch3ch2oh", "ethyl alcohol"],
+      "propan-2-ol": ["propan-2-ol", "2-propanol", "isopropanol", "isopropyl alcohol", "ipa", "iproh", "i-proh"],
+      chloroform: ["chloroform", "chcl3", "trichloromethane"],
+      "chloroform-d": ["chloroform-d", "cdcl3", "deuterochloroform"],
+      dichloromethane: ["dichloromethane", "dcm", "ch2cl2", "methylene chloride"],
+      "carbon tetrachloride": ["carbon tetrachloride", "ccl4", "tetrachloromethane"],
+      acetone: ["acetone", "propan-2-one", "propanone", "(ch3)2co", "me2co"],
+      acetonitrile: ["acetonitrile", "mecn", "ch3cn"],
+      "dimethyl sulfoxide": ["dimethyl sulfoxide", "dimethyl sulphoxide", "dmso", "(ch3)2so", "me2so"],
+      "N,N-dimethylformamide": ["n,n-dimethylformamide", "dimethylformamide", "dmf"],
+      tetrahydrofuran: ["tetrahydrofuran", "thf", "oxolane"],
+      "ethyl acetate": ["ethyl acetate", "etoac", "acoet"],
+      "diethyl ether": ["diethyl ether", "ether", "et2o", "ethoxyethane"],
+      benzene: ["benzene", "c6h6"],
+      toluene: ["toluene", "phme", "methylbenzene", "c6h5ch3"],
+      hexane: ["hexane", "n-hexane"],
+      pyridine: ["pyridine", "c5h5n"],
+      "acetic acid": ["acetic acid", "acoh", "hoac", "ch3cooh", "ch3co2h", "ethanoic acid"],
+      "1,4-dioxane": ["1,4-dioxane", "dioxane"],
+      neat: ["neat", "no solvent", "none"]
+    };
+    BY_SPELLING = /* @__PURE__ */ new Map();
+    for (const [name, spellings] of Object.entries(TABLE)) for (const s of spellings) BY_SPELLING.set(s, name);
+    SUBSCRIPTS = "₀₁₂₃₄₅₆₇₈₉";
+  }
+});
+
+// src/checks/consistent-with-registry.ts
+function registeredLater(a, b) {
+  if (a.id !== b.id) {
+    if (a.id === null) return true;
+    if (b.id === null) return false;
+    return a.id.localeCompare(b.id, "en", { numeric: true }) > 0;
+  }
+  return a.file.localeCompare(b.file, "en", { numeric: true }) > 0;
+}
+function compareWithRegistry(me, matches, mode, config, underReview = () => false) {
+  const out = [];
+  const pairs = [];
+  const form = me.form;
+  const ref = (r) => ({ id: r.id, file: r.file });
+  const add = (id, other, data, severity) => {
+    out.push(
+      finding(
+        id,
+        id.startsWith("enantiomer-rotation") ? "stereo.rotation.value" : "structure",
+        {
+          form,
+          otherId: other.id ?? other.file,
+          otherFile: other.file,
+          otherName: other.name ? `, ${other.name}` : "",
+          otherForm: other.form,
+          ...data
+        },
+        severity
+      )
+    );
+  };
+  let compared = 0;
+  for (const { other, relation } of matches) {
+    if (mode === "review" && underReview(other) && !registeredLater(me, other)) continue;
+    compared++;
+    pairs.push({ relation, first: ref(other), second: ref(me) });
+    const otherForm = other.form;
+    if (relation === "identical") {
+      if (otherForm === form) add("already-registered", other, {}, "warning");
+      else if (ENANTIOPURE.includes(form) && ENANTIOPURE.includes(otherForm)) {
+        add("same-structure-other-purity", other, {}, "note");
+      } else add("same-structure-different-form", other, {});
+      continue;
+    }
+    if (me.keys?.chiral !== true) continue;
+    if (mode === "review") {
+      add(
+        "enantiomer-registered",
+        other,
+        { explanation: "mirror images that are not superimposable" },
+        "note"
+      );
+    }
+    if (ENANTIOPURE.includes(form) !== ENANTIOPURE.includes(otherForm)) {
+      add("enantiomer-form-conflict", other, {}, "warning");
+    }
+    const a = me.rotation;
+    const b = other.rotation;
+    const tol = config.zeroRotationTolerance;
+    const alike = a && b ? rotationsComparable(a, b) : null;
+    if (a && b && alike && !alike.alike && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
+      add(
+        "enantiomer-rotations-not-compared",
+        other,
+        { value: fmt(a.value), otherValue: fmt(b.value), reason: alike.reason },
+        "note"
+      );
+    } else if (a && b && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
+      const data = { value: fmt(a.value), otherValue: fmt(b.value), conditions: conditions(a) };
+      if (Math.sign(a.value) === Math.sign(b.value)) add("enantiomer-rotation-same-sign", other, data);
+      else if (form === "single-enantiomer" && otherForm === "single-enantiomer" && Math.abs(Math.abs(a.value) - Math.abs(b.value)) > Math.max(tol, 0.1 * Math.max(Math.abs(a.value), Math.abs(b.value)))) {
+        add("enantiomer-rotation-magnitude", other, data, "note");
+      }
+    }
+  }
+  const identical = pairs.filter((p) => p.relation === "identical").length;
+  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${identical} other record(s)` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${compared - identical} registered record(s)` : ""}; forms and rotations agree`;
+  return { findings: out, passed, pairs };
+}
+function run2() {
+  return { findings: [], notApplicable: true };
+}
+var messages2, ENANTIOPURE, consistentWithRegistry;
+var init_consistent_with_registry = __esm({
+  "src/checks/consistent-with-registry.ts"() {
+    "use strict";
+    init_rotation_consistent();
+    init_solvents();
+    init_words();
+    messages2 = {
+      "already-registered": "This structure is identical to {otherId} ({otherFile}{otherName}), already registered as {otherForm}. Register a new batch under {otherId} instead, or, if this is a different substance, correct the structure.",
+      "same-structure-different-form": "This structure is identical to {otherId} ({otherFile}), but {otherId} is registered as {otherForm} and this record declares {form}. The same drawn structure cannot be both; decide which form is right and correct the other record.",
+      "same-structure-other-purity": "This structure is identical to {otherId} ({otherFile}), registered as {otherForm}; this record declares {form}. The same enantiomer at another enantiomeric purity: register it as a batch of {otherId} if your SOP allows, or keep it separate on purpose.",
+      "enantiomer-registered": "This compound is the enantiomer of {otherId} ({otherFile}{otherName}): {explanation}. That is fine if the enantiomer is meant; confirm that the configuration was not drawn inverted by mistake.",
+      "enantiomer-rotation-same-sign": "This compound and its enantiomer {otherId} have rotations of the same sign ({value}° here, {otherValue}° for {otherId}), measured alike ({conditions}). Enantiomers rotate plane-polarised light by equal amounts in opposite senses, so one structure, one rotation or one record is wrong.",
+      "enantiomer-rotation-magnitude": "This compound and its enantiomer {otherId} were measured alike ({conditions}) but their rotations differ in size ({value}° vs {otherValue}°). Enantiomers of equal purity have equal and opposite rotations; check the ee of both samples.",
+      "enantiomer-rotations-not-compared": "The rotations of this compound ({value}°) and of its enantiomer {otherId} ({otherValue}°) were not compared: they were {reason}. Enantiomers measured alike rotate equally in opposite senses; to have the signs checked, record both under the same conditions (or the same spelling of the solvent).",
+      "enantiomer-form-conflict": "This compound is declared {form}, but its enantiomer {otherId} is registered as {otherForm}. Enantiomers have the same kind of form (both single enantiomers, or both enriched); check both records."
+    };
+    ENANTIOPURE = ["single-enantiomer", "enantioenriched"];
+    consistentWithRegistry = {
+      id: "consistent-with-registry",
+      defaultSeverity: "error",
+      summary: "A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.",
+      explanation: "Every record contributes keys to a registry index: its constitution, and each stereo unit's canonical class with its CIP descriptor (IUPAC 2013, P-92.1), as drawn and as its mirror image (src/registry/keys.ts). Two records with equal keys are the same stereoisomer; one whose key equals the other's mirror key is its enantiomer (where the keys cannot tell, the engine relates the two structures). An identical structure is the same compound: register a batch, not a new number; under a different form one record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). A racemic drawing (AND group) is compared only with racemic drawings, a relative one (OR group) only with relative ones; a drawing with undefined stereo units is compared with none. Each finding is said once (common practice, no source): in a pull request on the record under review (on the one registered later when both are); in a full audit on the later record in the audit's order (file path order, numbers as numbers; input order for exports), and enantiomer pairs and duplicates are listed once in the summary. Registering both enantiomers is normal and is not a finding of a full audit.",
+      messages: messages2,
+      requires: ["structure", "registry"],
+      scope: "registry",
+      run: run2
+    };
+  }
+});
+
 // src/checks/nitrogen-inversion.ts
 function claimRestsOnlyOnNitrogen(ctx) {
   const f = ctx.main.facts;
@@ -46111,12 +47758,12 @@ function statedDescriptors(ctx) {
     return ` and drop ${record?.stereo.descriptors ?? ""} from stereo.descriptors`;
   if (decl.name && decl.name.items.length > 0) {
     const name = record?.name ?? "";
-    const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2013\u2212]+$/, "");
+    const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2014\u2212\uFE63\uFF0D\u02D7]+$/, "");
     return ` and drop ${front} from the name`;
   }
   return "";
 }
-function run(ctx) {
+function run3(ctx) {
   const record = ctx.record;
   const f = ctx.main.facts;
   if (!record || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
@@ -46150,23 +47797,24 @@ function run(ctx) {
     passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens`
   };
 }
-var NITROGEN_CHECK_ID, messages, nitrogenInversion;
+var NITROGEN_CHECK_ID, messages3, nitrogenInversion;
 var init_nitrogen_inversion = __esm({
   "src/checks/nitrogen-inversion.ts"() {
     "use strict";
     init_words();
     NITROGEN_CHECK_ID = "nitrogen-inversion";
-    messages = {
-      "claim-rests-on-invertible-nitrogen": "Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier about 25 kJ/mol for simple amines), so its two configurations interconvert and cannot be isolated: the structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's base, an aziridine, a quaternary ammonium ion), draw that feature.",
+    messages3 = {
+      "claim-rests-on-invertible-nitrogen": "Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier roughly 30–40 kJ/mol for simple trialkylamines, about 24 kJ/mol for ammonia — values from memory; a configuration that can be isolated at room temperature needs roughly 100 kJ/mol), so its two configurations interconvert and cannot be isolated: the structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's base, an aziridine, a quaternary ammonium ion), draw that feature.",
       "stereo-drawn-on-invertible-nitrogen": "The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at room temperature; that configuration means nothing. The claim rests on the other stereo units, which is fine; remove the wedge or @ mark at that nitrogen."
     };
     nitrogenInversion = {
       id: NITROGEN_CHECK_ID,
       defaultSeverity: "error",
       summary: "A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.",
-      explanation: "A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar transition state with a low barrier (about 20–30 kJ/mol for simple amines; from memory, e.g. Clayden, Greeves & Warren, Organic Chemistry), so its enantiomers interconvert rapidly at room temperature and cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim rests on nothing else, this check carries the error; the form, descriptor and reading checks report their side of the same root cause as notes.",
-      messages,
-      run
+      explanation: "A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar transition state with a low barrier (from memory: about 24 kJ/mol for ammonia, roughly 30–40 kJ/mol for simple trialkylamines; invertomers that can be isolated at room temperature need a barrier of roughly 100 kJ/mol, also from memory), so its enantiomers interconvert rapidly at room temperature and cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim rests on nothing else, this check carries the error; the form, descriptor and reading checks report their side of the same root cause as notes.",
+      messages: messages3,
+      requires: ["structure"],
+      run: run3
     };
   }
 });
@@ -46192,7 +47840,7 @@ function escapingPath(recordFile, path) {
   const resolved = posix.normalize(posix.join(posix.dirname(recordFile), path.replace(/\\/g, "/")));
   return resolved === ".." || resolved.startsWith("../") ? resolved : null;
 }
-function run2(ctx) {
+function run4(ctx) {
   const findings = [];
   const add = (id, field3, data) => {
     findings.push(finding(id, field3, data));
@@ -46247,7 +47895,13 @@ function run2(ctx) {
   });
   const nitrogenCheckOn = ctx.config.severities[NITROGEN_CHECK_ID] !== "off";
   let leftToNitrogen = 0;
+  const salt = (ctx.main.facts?.components ?? []).some((c) => c.role === "other");
+  const saltRemarks = [];
   for (const remark of ctx.main.facts?.remarks ?? []) {
+    if (salt && /identical copies of the parent/.test(remark)) {
+      saltRemarks.push(remark.replace(/:.*$/, " (a salt)"));
+      continue;
+    }
     if (nitrogenCheckOn && (ctx.main.facts?.invertibleNitrogens.length ?? 0) > 0 && /amine nitrogen/.test(remark)) {
       leftToNitrogen++;
       continue;
@@ -46260,15 +47914,16 @@ function run2(ctx) {
   const what = [atoms !== void 0 ? `${atoms} atoms` : null, facts?.formula || null].filter(Boolean).join(", ");
   const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : "";
   const nitrogen = leftToNitrogen ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion` : "";
-  return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}${nitrogen}` };
+  const copies = saltRemarks.length ? `; ${saltRemarks.join("; ")}` : "";
+  return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}${copies}${nitrogen}` };
 }
-var messages2, structureReadable;
+var messages4, structureReadable;
 var init_structure_readable = __esm({
   "src/checks/structure-readable.ts"() {
     "use strict";
     init_words();
     init_nitrogen_inversion();
-    messages2 = {
+    messages4 = {
       "structure-unreadable": "The structure in {field} could not be read: {error}{where}. Nothing about its stereochemistry can be checked. Correct the SMILES or molfile (check ring-closure digits, brackets and the counts line) and resubmit.",
       "component-unreadable": "Component {index} ({field}) could not be read: {error}{where}. The mixture cannot be checked against it. Correct that structure.",
       "structure-source-refused": 'The structure file for {field} was not read: {error}. Molfiles must be given as a path relative to the record file that stays inside the registry (no "..", no absolute path, no link out). Move the file next to the record.',
@@ -46281,8 +47936,8 @@ var init_structure_readable = __esm({
       defaultSeverity: "error",
       summary: "The structure (SMILES or molfile) can be read, and a molfile path stays inside the registry.",
       explanation: "Every other check works on the structure, so a structure that cannot be read leaves the stereo claim unchecked. SMILES are read by the OpenSMILES specification, molfiles by the CTfile format specification (V2000 and V3000). A molfile is named by a path relative to the record file; a path that leaves the registry (.., an absolute path, or a symbolic link out) is refused, so that a pull request cannot make the audit read files elsewhere on the machine.",
-      messages: messages2,
-      run: run2
+      messages: messages4,
+      run: run4
     };
   }
 });
@@ -46358,21 +48013,30 @@ var init_form_mixtures = __esm({
 });
 
 // src/checks/form-matches-structure.ts
-function evidence(f) {
+function maxCount(c, b) {
+  const v = countValue(c);
+  return v > b ? v : b;
+}
+function evidence(f, s) {
   const defined = definedUnits(f);
-  const undef = undefinedUnits(f);
+  const undef = undefinedUnits(f).filter((u) => !u.formatCannotState);
+  const open = f.units.filter((u) => u.formatCannotState);
   return {
     units: unitSummary(defined),
     allUnits: unitSummary(f.units) + (undef.length ? `, ${undef.length} undefined` : ""),
     labels: defined.length ? defined.map((u) => `${u.label ?? "?"}`).join(",") : "none are drawn",
-    mirror: f.mirror.explanation || (f.chiral ? "not superimposable on its mirror image" : "superimposable"),
+    mirror: atomsInRecordTerms(f.mirror.explanation, s) || (f.chiral ? "not superimposable on its mirror image" : "superimposable"),
     undefinedCount: undef.length,
     undefinedUnits: listUnits(undef),
+    openCount: open.length,
+    openUnits: listUnits(open),
     definedCount: defined.length,
     totalIsomers: f.stereoisomers.total,
     chiralIsomers: f.stereoisomers.chiral,
     pairs: f.stereoisomers.pairs,
-    isomers: Math.max(f.stereoisomers.total, 2 ** undef.length)
+    isomers: exactCount(maxCount(f.stereoisomers.total, 2n ** BigInt(undef.length))),
+    mixtureCount: f.mixture?.stereoisomers ?? 1,
+    mixtureText: f.mixture?.explanation ?? ""
   };
 }
 function achiralRemedy(f, labels, nitrogen) {
@@ -46385,12 +48049,12 @@ function achiralRemedy(f, labels, nitrogen) {
   }
   return `No stereoisomer of this constitution is chiral, so no configuration can make it so (drawn: ${labels}): declare achiral (single-diastereomer for one cis/trans isomer), or correct the structure.`;
 }
-function run3(ctx) {
+function run5(ctx) {
   const f = ctx.main.facts;
   const record = ctx.record;
   if (!record || !f) return { findings: [], notApplicable: true };
   const form = record.stereo.form;
-  const e = evidence(f);
+  const e = evidence(f, ctx.main.structure);
   const out = [];
   const nitrogen = claimRestsOnlyOnNitrogen(ctx) ? f.invertibleNitrogens.map((n) => `nitrogen (atom ${n.atom})`).join(", ") : null;
   const add = (id, extra = {}, severity) => {
@@ -46400,30 +48064,54 @@ function run3(ctx) {
     );
   };
   const remedy = achiralRemedy(f, e.labels, nitrogen);
+  const fixTo = (to) => {
+    const last = out[out.length - 1];
+    if (last !== void 0 && nitrogen === null) last.fix = { field: "stereo.form", from: form, to };
+  };
+  const achiralTo = f.meso === true ? "meso" : f.units.length === 0 ? "achiral" : null;
   const defined = definedUnits(f);
   const bonds = defined.filter((u) => u.kind === "double-bond").length;
-  switch (form) {
+  const openOnly = e.openCount > 0 && e.undefinedCount === 0;
+  if (e.openCount > 0 && form !== "unknown" && form !== "diastereomer-mixture")
+    add("form-open-unstated-units", {}, "note");
+  switch (openOnly && f.chiral !== true ? "open" : form) {
     case "achiral":
       if (f.chiral === true) add("achiral-but-chiral");
       else if (f.chiral === null || e.undefinedCount > 0) {
-        if (f.stereoisomers.chiral > 0 || f.chiral === null) add("achiral-but-open", {}, "warning");
-      } else if (f.meso === true) add("achiral-is-meso", {}, "note");
+        if (countValue(f.stereoisomers.chiral) > 0n || f.chiral === null)
+          add("achiral-but-open", {}, "warning");
+      } else if (f.meso === true) {
+        add("achiral-is-meso", {}, "note");
+        fixTo("meso");
+      }
       break;
     case "meso":
       if (f.chiral === true) add("meso-but-chiral");
       else if (e.undefinedCount > 0 || f.meso === null) add("meso-but-open");
-      else if (f.meso === false) add("meso-but-no-chiral-isomers", {}, "warning");
+      else if (f.meso === false) {
+        add("meso-but-no-chiral-isomers", {}, "warning");
+        fixTo("achiral");
+      }
       break;
     case "single-enantiomer":
     case "enantioenriched":
-      if (f.chiral === false && e.undefinedCount === 0) add("enantiomer-but-achiral", { remedy });
-      else if (e.undefinedCount > 0)
+      if (f.mixture && !(form === "enantioenriched" && f.mixture.kind === "enantiomers"))
+        add("enantiomer-but-drawn-mixture");
+      else if (f.chiral === false && e.undefinedCount === 0) {
+        add("enantiomer-but-achiral", { remedy });
+        if (achiralTo !== null) fixTo(achiralTo);
+      } else if (e.undefinedCount > 0)
         add("enantiomer-undefined-units", {}, form === "enantioenriched" ? "warning" : void 0);
       break;
     case "racemate":
-      if (f.chiral === false && e.undefinedCount === 0) add("racemate-but-achiral", { remedy });
-      else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) add("racemate-no-chiral-isomers");
-      else if (e.undefinedCount > 0 && (f.stereoisomers.pairs > 1 || f.stereoisomers.achiral > 0)) {
+      if (f.mixture && f.mixture.kind !== "racemate") add("racemate-drawn-not-racemic");
+      else if (f.chiral === false && e.undefinedCount === 0) {
+        add("racemate-but-achiral", { remedy });
+        if (achiralTo !== null) fixTo(achiralTo);
+      } else if (e.undefinedCount > 0 && f.stereoisomers.chiral === 0) {
+        add("racemate-no-chiral-isomers");
+        fixTo("achiral");
+      } else if (e.undefinedCount > 0 && (countValue(f.stereoisomers.pairs) > 1n || countValue(f.stereoisomers.achiral) > 0n)) {
         const a = f.stereoisomers.achiral;
         add(
           "racemate-which-diastereomer",
@@ -46441,7 +48129,8 @@ function run3(ctx) {
       break;
   }
   out.push(...mixtureFindings(ctx, f));
-  if (out.some((x) => x.severity !== "note")) return { findings: out };
+  if (out.some((x) => x.severity !== "note" || x.messageId === "form-open-unstated-units"))
+    return { findings: out };
   return { findings: out, passed: passedEvidence(form, f, e) };
 }
 function passedEvidence(form, f, e) {
@@ -46449,17 +48138,18 @@ function passedEvidence(form, f, e) {
     return e.undefinedCount ? `form unknown; undefined stereo units: ${e.undefinedUnits}` : `form unknown; the structure defines ${e.units} and leaves none undefined`;
   }
   const chir = f.chiral === true ? "chiral" : f.chiral === false ? f.meso ? "meso (achiral)" : "achiral" : "open";
-  const why = f.chiral !== null && f.mirror.explanation ? ` — ${f.mirror.explanation}` : "";
+  const why = f.chiral !== null && f.mirror.explanation ? ` — ${e.mirror}` : "";
   return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
-var messages3, formMatchesStructure;
+var messages5, formMatchesStructure;
 var init_form_matches_structure = __esm({
   "src/checks/form-matches-structure.ts"() {
     "use strict";
+    init_chem();
     init_words();
     init_form_mixtures();
     init_nitrogen_inversion();
-    messages3 = {
+    messages5 = {
       "achiral-but-chiral": "Declared achiral, but the structure is chiral: it has {allUnits} and its mirror image is a different molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.",
       "achiral-but-open": "Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
       "achiral-is-meso": "Declared achiral. The structure is indeed achiral ({mirror}), but its constitution also has chiral stereoisomers ({chiralIsomers} of {totalIsomers}), which makes this one a meso compound. Declare meso.",
@@ -46473,6 +48163,9 @@ var init_form_matches_structure = __esm({
       "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount} undefined stereo unit(s) ({undefinedUnits}). This constitution has {pairs} pair(s) of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
       "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount} stereo unit(s) ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
       "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
+      "enantiomer-but-drawn-mixture": "Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows (racemate, enantioenriched, diastereomer-mixture).",
+      "racemate-drawn-not-racemic": "Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.",
+      "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the claim checked.",
       ...mixtureMessages
     };
     formMatchesStructure = {
@@ -46480,8 +48173,9 @@ var init_form_matches_structure = __esm({
       defaultSeverity: "error",
       summary: "The declared stereo form agrees with the chirality, meso character and defined units of the structure.",
       explanation: "IUPAC Gold Book definitions: a chiral molecule is not superimposable on its mirror image; enantiomers are mirror-image stereoisomers; a racemate is an equimolar mixture of a pair of enantiomers, so it needs a chiral structure; a meso compound is the achiral member of a set of diastereoisomers that also includes chiral members; diastereoisomers are stereoisomers that are not enantiomers (cis-trans isomers included). A single enantiomer therefore needs a chiral structure with every stereo unit defined, a single diastereomer two or more stereogenic units (or a stereogenic double bond), and a diastereomer mixture two or more components that are pairwise diastereomers with the constitution of the parent. The evidence is the engine's mirror-image analysis (the symmetry element that makes a structure achiral) and its stereoisomer count.",
-      messages: messages3,
-      run: run3
+      messages: messages5,
+      requires: ["structure"],
+      run: run5
     };
   }
 });
@@ -46490,7 +48184,7 @@ var init_form_matches_structure = __esm({
 function atomList(atoms) {
   return atoms.length === 1 ? `atom ${atoms[0]}` : `atoms ${atoms.join(", ")}`;
 }
-function run4(ctx) {
+function run6(ctx) {
   const f = ctx.main.facts;
   const record = ctx.record;
   if (!record || !f) return { findings: [], notApplicable: true };
@@ -46522,7 +48216,7 @@ function run4(ctx) {
     else if (and.length === 0 && f.enhanced.meaning === "absolute" && f.chiral === true) {
       const flag = ctx.main.structure?.chiralFlag === true ? "; the molfile chiral flag is set" : "";
       const labels = defined.map((u) => u.label ?? "?").join(",");
-      const racemicNamed = parsed?.mode === "racemic";
+      const racemicNamed = parsed?.mode === "racemic" && parsed.items.length > 0;
       add(
         "racemate-drawn-absolute",
         "stereo.form",
@@ -46565,12 +48259,12 @@ function run4(ctx) {
     passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}`
   };
 }
-var messages4, enhancedStereoMatchesForm;
+var messages6, enhancedStereoMatchesForm;
 var init_enhanced_stereo_matches_form = __esm({
   "src/checks/enhanced-stereo-matches-form.ts"() {
     "use strict";
     init_words();
-    messages4 = {
+    messages6 = {
       "and-group-with-single-enantiomer": 'Declared single-enantiomer, but the structure puts {atoms} in an AND group (&{group}), which means "this stereoisomer and its mirror image, together" — a racemic or enantiomer-mixture drawing. Remove the AND group (absolute stereo) or declare racemate / enantioenriched.',
       "or-group-with-racemate": 'Declared racemate, but the structure puts {atoms} in an OR group (or{group}), which means "this stereoisomer or its mirror image, unknown which" — one enantiomer, not a mixture. Use an AND group for a racemate, or declare single-enantiomer with relative descriptors (rel- or R*).',
       "racemate-drawn-absolute": "Declared racemate, but the structure is drawn as one enantiomer with absolute stereo ({labels}; no AND group{flag}). A racemate is drawn with its centres in an AND group (&1), or without stereo marks when it has one stereocentre. Add the AND group, or correct the form.",
@@ -46584,8 +48278,9 @@ var init_enhanced_stereo_matches_form = __esm({
       defaultSeverity: "error",
       summary: "Enhanced-stereo groups (ABS, AND, OR) agree with the declared form and descriptors.",
       explanation: "Enhanced stereo, as defined in the CTfile format specification (V3000 collection blocks MDLV30/STEABS, STERAC, STEREL) and CXSMILES, says what a drawn configuration stands for: ABS — this stereoisomer; AND (racemic group) — this stereoisomer and its mirror image, a mixture; OR (relative group) — this stereoisomer or its mirror image, unknown which. A single enantiomer cannot carry an AND group, a racemate cannot carry an OR group and should not be drawn as absolute, and absolute descriptors (R, S without rel or *) contradict an OR group (IUPAC 2013, P-93.1.3: relative configuration is written rel- or R*).",
-      messages: messages4,
-      run: run4
+      messages: messages6,
+      requires: ["structure"],
+      run: run6
     };
   }
 });
@@ -46618,7 +48313,11 @@ function prefixFindings(ctx, decl, facts) {
   const drawnAbsolute = facts.enhanced.meaning === "absolute" && ctx.main.structure?.chiralFlag !== false && facts.chiral === true;
   for (const { field: field2, text, p } of sources) {
     if (p.problemDetails.length > 0 && p.items.length === 0 && p.mode === "none") continue;
-    if (p.mode === "racemic") {
+    const onlyLegacy = p.legacyPair === true && p.prefixes.length === 0 && p.rotationSign !== "±" && p.fischer !== "DL" && p.items.length === 1;
+    const centres = facts.units.filter((u) => u.kind === "tetrahedral" && !u.pseudoasymmetric).length;
+    if (p.mode === "racemic" && onlyLegacy && centres >= 2 && form !== "racemate") {
+      add("legacy-racemate-or-two-centres", field2, { text, centres }, "warning");
+    } else if (p.mode === "racemic") {
       if (["single-enantiomer", "enantioenriched", "achiral", "meso"].includes(form)) {
         add("racemic-notation-needs-racemate", field2, { notation: notation(p), text });
       } else if (form === "single-diastereomer") {
@@ -46638,6 +48337,13 @@ function prefixFindings(ctx, decl, facts) {
     if ((p.rotationSign === "+" || p.rotationSign === "-") && ["racemate", "meso", "achiral"].includes(form)) {
       add("optical-sign-with-inactive-form", field2, { sign: p.rotationSign === "+" ? "(+)" : "(−)", text });
     }
+    if ((p.fischer === "D" || p.fischer === "L") && ["racemate", "meso", "achiral"].includes(form)) {
+      add("fischer-prefix-with-form", field2, {
+        fischer: p.fischer,
+        text,
+        why: form === "racemate" ? "A racemate holds both enantiomers, D and L, in equal amounts." : "An achiral or meso compound has no enantiomer to call D or L."
+      });
+    }
     if (p.words.includes("meso") && ["single-enantiomer", "enantioenriched", "racemate"].includes(form)) {
       add("meso-prefix-with-chiral-form", field2, { text });
     }
@@ -46655,6 +48361,8 @@ var init_descriptor_prefixes = __esm({
       "relative-notation-with-racemate": "{field} uses relative notation ({notation}), which describes one enantiomer whose absolute configuration is unknown, but the form is racemate. For a racemate write rac-(…) or (…RS,…SR) (IUPAC 2013, P-93.1.3).",
       "relative-notation-with-absolute-drawing": "{field} uses relative notation ({notation}) — absolute configuration unknown — but the structure is drawn with absolute stereo. If the absolute configuration is known, drop rel/*; if not, mark the drawing as relative (an OR group, or a molfile without the chiral flag).",
       "optical-sign-with-inactive-form": "{field} gives the sign of rotation ({sign}), but the form is {form}, which is optically inactive (a racemate rotates not at all because its enantiomers cancel; an achiral or meso compound has no optical activity). Use (±) for a racemate, or drop the sign, or correct the form.",
+      "legacy-racemate-or-two-centres": "{field} writes {text}: (R,S) without locants is the legacy way of naming a racemate, (RS), which does not fit the form {form}; but the structure has {centres} stereocentres, so it may mean two centres cited without locants. Write locants, e.g. (1R,2S), or rac-/(RS) for a racemate.",
+      "fischer-prefix-with-form": "{field} names one enantiomer ({fischer}-, Fischer–Rosanoff), but the form is {form}. {why} Write DL- or (±)- for a racemate, drop {fischer}- for an achiral compound, or correct the form.",
       "meso-prefix-with-chiral-form": "{field} calls the compound meso, but the form is {form}. A meso compound is achiral and has no enantiomer. Correct the name or the form."
     };
   }
@@ -46783,21 +48491,145 @@ var init_repeated_components = __esm({
   }
 });
 
+// src/checks/descriptors-unverified.ts
+function fitsIf(parsed, units, mayInvert) {
+  if (mayInvert || parsed.items.some((it) => it.locant === null)) return "";
+  const defined = units.filter((u) => u.defined && u.label !== null);
+  const reading = [];
+  for (const it of parsed.items) {
+    const candidates = defined.filter((u) => u.label === it.label);
+    if (candidates.length !== 1) return "";
+    reading.push(`locant ${it.locant} is atom ${candidates[0].atoms[0]}`);
+  }
+  return reading.length > 1 ? `; they fit the drawing only if ${reading.join(" and ")}` : "";
+}
+function unverifiedFinding(field2, text, parsed, facts, cmp, mapped) {
+  const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || facts.chiral === false;
+  const stereoAtoms = [...new Set(facts.units.flatMap((u) => u.atoms))].sort((a, b) => a - b);
+  return finding(
+    UNVERIFIED_ID,
+    field2,
+    {
+      field: field2,
+      text,
+      computed: labelList(facts.units),
+      fitsIf: fitsIf(parsed, facts.units, mayInvert),
+      mappedSmiles: mapped?.smiles ?? null,
+      paste: mapped?.smiles ?? `your structure with atom maps on atoms ${stereoAtoms.join(", ")}`,
+      numbering: mapped?.numbering ?? "atom-map numbers on the atoms of the stereo units",
+      atoms: stereoAtoms.join(", "),
+      method: cmp.method
+    },
+    "note"
+  );
+}
+var UNVERIFIED_ID, unverifiedMessages;
+var init_descriptors_unverified = __esm({
+  "src/checks/descriptors-unverified.ts"() {
+    "use strict";
+    init_words();
+    UNVERIFIED_ID = "descriptors-not-verified-per-atom";
+    unverifiedMessages = {
+      [UNVERIFIED_ID]: "{field} states {text}: consistent in count with the structure ({computed}), not verified per atom — the structure carries no atom-map numbers, so the locants cannot be matched to atoms{fitsIf}. To have it checked per atom, paste the structure with the locants as atom maps: {paste} ({numbering}; change each map number to the locant the name gives that atom, e.g. [C@@H:2] for C2)."
+    };
+  }
+});
+
+// src/checks/mapped-smiles.ts
+function mapInText(text, structure, atoms) {
+  let start = 0;
+  while (start < text.length && /\s/.test(text[start])) start++;
+  let g;
+  try {
+    g = parseSmilesGraph(text, start);
+  } catch {
+    return null;
+  }
+  if ("error" in g || g.atoms.length !== structure.atoms.length) return null;
+  const byNumber = new Map(structure.atoms.map((a) => [a.inputNumber, a]));
+  const edits = [];
+  for (let i = 0; i < g.atoms.length; i++) {
+    const n = i + 1;
+    if (!atoms.has(n)) continue;
+    const raw2 = g.atoms[i];
+    const at = raw2.offset;
+    if (text[at] === "[") {
+      const close2 = text.indexOf("]", at);
+      if (close2 < 0) return null;
+      const inner = text.slice(at + 1, close2).replace(/:\d+$/, "");
+      edits.push({ at, end: close2 + 1, text: `[${inner}:${n}]` });
+    } else {
+      const token = TWO_LETTER.has(text.slice(at, at + 2)) ? text.slice(at, at + 2) : text[at];
+      const h = byNumber.get(n)?.hCount ?? 0;
+      edits.push({ at, end: at + token.length, text: `[${token}${h > 0 ? `H${h > 1 ? h : ""}` : ""}:${n}]` });
+    }
+  }
+  let out = text;
+  for (const e of edits.sort((a, b) => b.at - a.at)) out = out.slice(0, e.at) + e.text + out.slice(e.end);
+  return out.trim();
+}
+function withAtomMaps(structure, source, atoms) {
+  if (!structure) return null;
+  const wanted = new Set(atoms);
+  if (source?.format === "smiles" && source.text) {
+    const mapped = mapInText(source.text, structure, wanted);
+    if (mapped !== null && readsBack(mapped, structure.atoms.length)) {
+      return {
+        smiles: mapped,
+        numbering: "each map number is the atom number in your SMILES (atoms counted from 1 in the order written, explicit hydrogen atoms counted)"
+      };
+    }
+  }
+  let smiles;
+  try {
+    smiles = writeSmiles({
+      ...structure,
+      atoms: structure.atoms.map((a) => ({
+        ...a,
+        mapNumber: wanted.has(a.inputNumber) ? a.inputNumber : null
+      }))
+    });
+  } catch {
+    return null;
+  }
+  if (!readsBack(smiles, structure.atoms.length)) return null;
+  return {
+    smiles,
+    numbering: source?.format === "molfile" ? "each map number is the atom's number in the molfile atom block" : "each map number is the atom number in your structure (atoms counted from 1 in the order written)"
+  };
+}
+function readsBack(smiles, atoms) {
+  const r = readStructure(smiles, { format: "smiles" });
+  return r.ok && r.structure.atoms.length === atoms;
+}
+var TWO_LETTER;
+var init_mapped_smiles = __esm({
+  "src/checks/mapped-smiles.ts"() {
+    "use strict";
+    init_chem();
+    init_smiles_parse();
+    TWO_LETTER = /* @__PURE__ */ new Set(["Cl", "Br"]);
+  }
+});
+
 // src/checks/descriptors-match-structure.ts
 function countsText(c) {
   const e = Object.entries(c).filter(([, v]) => v > 0);
   return e.length ? e.map(([k, v]) => `${v} ${k}`).join(", ") : "no labelled units";
 }
-function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenNote = false) {
+function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenNote = false, source) {
   const add = (id, data, severity) => {
     out.push(finding(id, field2, { field: field2, text, ...data }, severity));
   };
   for (const p of parsed.problemDetails)
     add("descriptor-unreadable", { problem: p.message, offset: p.offset });
-  for (const r of parsed.remarks) add("descriptor-remark", { remark: r }, "note");
-  if (parsed.fischer && parsed.items.length === 0)
+  if (field2 === "name") evidence2.push(...parsed.remarks.map((r) => `name: ${r}`));
+  else for (const r of parsed.remarks) add("descriptor-remark", { remark: r }, "note");
+  if ((parsed.fischer === "D" || parsed.fischer === "L") && parsed.items.length === 0)
     add("fischer-not-compared", { fischer: parsed.fischer }, "note");
   if (parsed.items.length === 0 || parsed.problemDetails.length > 0) return null;
+  const centres = facts.units.filter((u) => u.kind === "tetrahedral" && !u.pseudoasymmetric).length;
+  if (parsed.legacyPair && centres >= 2 && form !== "racemate") return null;
   const cmp = compareDescriptors(parsed, facts.units, { achiral: facts.chiral === false });
   const computed = labelList(facts.units);
   if (!cmp.agrees && facts.units.length === 0 && facts.invertibleNitrogens.length > 0) {
@@ -46812,12 +48644,19 @@ function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenN
     );
     return cmp;
   }
-  if (cmp.method === "per-locant") {
+  if (cmp.method === "per-locant" || cmp.method === "per-unit") {
     if (cmp.mismatches.length) {
       const mismatches = cmp.mismatches.map(
-        (m) => `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join("–")})`
+        (m) => m.locant === "" ? `atom ${m.atoms.join("–")}: declared ${m.declared}, computed ${m.computed}` : `locant ${m.locant}: declared ${m.declared}, computed ${m.computed} (atom ${m.atoms.join("–")})`
       ).join("; ");
-      add("descriptor-label-mismatch", { count: cmp.mismatches.length, mismatches, method: cmp.method });
+      add("descriptor-label-mismatch", {
+        count: cmp.mismatches.length,
+        mismatches,
+        method: cmp.method,
+        how: HOW[cmp.method]
+      });
+      const fix = relabelFix(field2, text, parsed, cmp);
+      if (fix !== null) out[out.length - 1].fix = fix;
     }
     if (cmp.notStereoUnits.length)
       add("descriptor-not-stereo-unit", { locants: cmp.notStereoUnits.join(", "), computed });
@@ -46835,6 +48674,11 @@ function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenN
       evidence2.push(`${text} names a racemate; the drawing shows no configuration, as usual for a racemate`);
       return null;
     }
+    const open = facts.units.filter((u) => u.formatCannotState);
+    if (open.length > 0 && open.length === facts.undefined) {
+      add("descriptors-at-unstated-units", { openUnits: listUnits(open) }, "note");
+      return cmp;
+    }
     add(
       "descriptors-cite-undefined-units",
       {
@@ -46846,6 +48690,10 @@ function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenN
       parsed.mode === "racemic" ? "note" : void 0
     );
     return cmp;
+  }
+  if (cmp.agrees && !cmp.countsDecide) {
+    const mapped = source ? withAtomMaps(source.read.structure, source.text, [...new Set(facts.units.flatMap((u) => u.atoms))]) : null;
+    out.push(unverifiedFinding(field2, text, parsed, facts, cmp, mapped));
   }
   if (!cmp.agrees) {
     const subset = (d) => Object.entries(d).every(([k, v]) => v <= (cmp.computedCounts[k] ?? 0));
@@ -46871,6 +48719,8 @@ function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenN
         invertNote: mayInvert ? "; relative/racemic descriptors were also tried against the mirror image" : "",
         method: cmp.method
       });
+      const fix = singleLabelFix(field2, text, parsed, facts.units);
+      if (fix !== null) out[out.length - 1].fix = fix;
     }
   }
   return cmp;
@@ -46892,7 +48742,7 @@ function comparable(r, ctx) {
     repeats: ` (${words} of the structure and is counted once)`
   };
 }
-function run5(ctx) {
+function run7(ctx) {
   const record = ctx.record;
   const c0 = comparable(ctx.main, ctx);
   if (!record || !c0) return { findings: [], notApplicable: true };
@@ -46902,18 +48752,37 @@ function run5(ctx) {
   const evidence2 = [];
   const note = (what, cmp, compared = f, repeats = c0.repeats) => {
     if (!cmp || cmp.method === "none") return;
-    const how = cmp.method === "per-locant" ? "per locant (atom maps)" : `as counts (${cmp.whyNotPerLocant})`;
+    const how = cmp.method === "per-locant" ? "per locant (atom maps)" : cmp.method === "per-unit" ? "per unit (one stereo unit of each kind cited, matched without atom maps)" : cmp.countsDecide ? `as counts (${cmp.whyNotPerLocant}; every matching of locants to units gives the same labels)` : `as counts only, not verified per atom (${cmp.whyNotPerLocant})`;
+    const verb = cmp.method === "counts" && !cmp.countsDecide ? "is consistent in count with" : "agrees with";
     evidence2.push(
-      `${what} agrees with computed ${labelList(compared.units)}${repeats}, compared ${how}${cmp.matchedInverted ? ", up to inversion" : ""}`
+      `${what} ${verb} computed ${labelList(compared.units)}${repeats}, compared ${how}${cmp.matchedInverted ? ", up to inversion" : ""}`
     );
   };
   const fieldText = record.stereo.descriptors ?? "";
+  const mainSource = {
+    read: ctx.main,
+    text: ctx.loaded.sources?.main ?? {
+      field: "structure",
+      format: "smiles",
+      text: record.structure.smiles ?? null
+    }
+  };
   const nitrogenNote = claimRestsOnlyOnNitrogen(ctx);
   const form = record.stereo.form;
   if (decl.field)
     note(
       fieldText,
-      compareOne("stereo.descriptors", fieldText, decl.field, f, out, form, evidence2, nitrogenNote)
+      compareOne(
+        "stereo.descriptors",
+        fieldText,
+        decl.field,
+        f,
+        out,
+        form,
+        evidence2,
+        nitrogenNote,
+        mainSource
+      )
     );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
@@ -46921,8 +48790,8 @@ function run5(ctx) {
       out.push(finding("name-and-descriptors-disagree", "name", { nameText, fieldText }, "warning"));
     } else if (!decl.field || decl.field.items.length === 0) {
       const name = record.name ?? "";
-      const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2013\u2212]+$/, "");
-      note(front, compareOne("name", front, decl.name, f, out, form, evidence2, nitrogenNote));
+      const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2014\u2212\uFE63\uFF0D\u02D7]+$/, "");
+      note(front, compareOne("name", front, decl.name, f, out, form, evidence2, nitrogenNote, mainSource));
     }
   } else if (decl.name) {
     for (const p of decl.name.problemDetails) {
@@ -46935,7 +48804,7 @@ function run5(ctx) {
         })
       );
     }
-    if (decl.name.fischer && !decl.field) {
+    if ((decl.name.fischer === "D" || decl.name.fischer === "L") && !decl.field) {
       out.push(
         finding("fischer-not-compared", "name", { field: "name", fischer: decl.name.fischer }, "note")
       );
@@ -46948,7 +48817,20 @@ function run5(ctx) {
     const cf = cc.facts;
     note(
       `component ${i + 1} ${c.descriptors}`,
-      compareOne(field2, c.descriptors, parseDescriptors(c.descriptors), cf, out, "component", evidence2),
+      compareOne(
+        field2,
+        c.descriptors,
+        parseDescriptors(c.descriptors),
+        cf,
+        out,
+        "component",
+        evidence2,
+        false,
+        {
+          read: ctx.components[i],
+          text: ctx.loaded.sources?.components[i] ?? { field: field2, format: "smiles", text: c.smiles ?? null }
+        }
+      ),
       cf,
       cc.repeats
     );
@@ -46958,10 +48840,11 @@ function run5(ctx) {
   const hasAny = decl.field !== null || decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== "none" || decl.name.words.length > 0 || decl.name.rotationSign !== null);
   const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
   if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
-  if (out.some((x) => x.severity !== "note")) return { findings: out };
+  if (out.some((x) => x.severity !== "note" || x.messageId === "descriptors-at-unstated-units"))
+    return { findings: out };
   return { findings: out, passed: evidence2.join("; ") || "descriptor prefixes agree with the declared form" };
 }
-var messages5, descriptorsMatchStructure;
+var messages7, HOW, descriptorsMatchStructure;
 var init_descriptors_match_structure = __esm({
   "src/checks/descriptors-match-structure.ts"() {
     "use strict";
@@ -46972,28 +48855,38 @@ var init_descriptors_match_structure = __esm({
     init_cis_trans_words();
     init_repeated_components();
     init_nitrogen_inversion();
-    messages5 = {
+    init_descriptors_unverified();
+    init_mapped_smiles();
+    init_fixes();
+    messages7 = {
       "descriptor-unreadable": "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).",
-      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} (compared per locant through atom-map numbers). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
+      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} ({how}). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
       "descriptor-not-stereo-unit": "{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
       "descriptor-at-undefined-unit": "{field} declares configurations at locant(s) {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
       "descriptor-counts-mismatch": "{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.",
       "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
+      "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
       "descriptor-on-invertible-nitrogen": "{field} declares {text}, but the structure has no stereo unit: its only configuration is drawn at {atoms}, an ordinary amine nitrogen that inverts rapidly and is not a stereocentre, so the descriptors describe nothing that can be isolated. Drop them{seeAlso}.",
       "descriptor-remark": "{field}: {remark}.",
       "fischer-not-compared": "{field} uses the Fischer–Rosanoff descriptor {fischer}, which is defined by analogy with glyceraldehyde and is not comparable with CIP labels, so it was not checked against the structure. Add CIP descriptors, e.g. (S) for L-alanine, to have them checked.",
+      ...unverifiedMessages,
       ...prefixMessages,
       ...cisTransMessages
+    };
+    HOW = {
+      "per-locant": "compared per locant through atom-map numbers",
+      "per-unit": "matched without atom maps: the structure has one stereo unit of each kind the descriptors cite"
     };
     descriptorsMatchStructure = {
       id: "descriptors-match-structure",
       defaultSeverity: "error",
       summary: "Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.",
-      explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; otherwise only the numbers of R, S, E, Z … can be compared. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other stereo unit.",
-      messages: messages5,
-      run: run5
+      explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; without them a descriptor is still matched to its unit where the structure has one unit of each kind cited (one R/S centre, one E/Z double bond); otherwise only the numbers of R, S, E, Z … can be compared, and where that cannot tell (1R,2S) from (1S,2R) the claim is reported as consistent in count, not verified per atom (a note with the structure written with atom maps to paste), never as passed. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other stereo unit.",
+      messages: messages7,
+      requires: ["structure"],
+      run: run7
     };
   }
 });
@@ -47045,6 +48938,9 @@ function parseRatio(text) {
   }
   out.percent = withPercent > 0;
   const sum = out.parts.reduce((a, b) => a + b, 0);
+  if (out.problems.length === 0 && out.parts.length >= 2 && sum === 0) {
+    out.problems.push({ offset: 0, message: "every part is zero, so it states no proportion" });
+  }
   out.looksLikePercent = out.percent || sum >= 80 && sum <= 120;
   return out;
 }
@@ -47067,7 +48963,7 @@ function componentsAreDiastereomers(ctx) {
   }
   return true;
 }
-function run6(ctx) {
+function run8(ctx) {
   const record = ctx.record;
   if (!record) return { findings: [], notApplicable: true };
   const { form, ratio, ee, components } = record.stereo;
@@ -47161,13 +49057,13 @@ function run6(ctx) {
     evidence2.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
   return { findings: out, passed: `${evidence2.join("; ")}; consistent with ${form}` };
 }
-var messages6, ratioAndEeConsistent;
+var messages8, ratioAndEeConsistent;
 var init_ratio_and_ee_consistent = __esm({
   "src/checks/ratio-and-ee-consistent.ts"() {
     "use strict";
     init_ratio();
     init_words();
-    messages6 = {
+    messages8 = {
       "ratio-unreadable": "The ratio '{ratio}' could not be read: {problem} (at character {offset}). Write it as parts separated by colons, e.g. 70:30 or 97.5:2.5.",
       "ratio-parts-not-100": "The ratio {ratio} reads as percentages but its parts sum to {sum}, not 100 (tolerance ±{tolerance}). Correct the parts; if relative amounts were meant, write them as small whole numbers (e.g. 2:1).",
       "ratio-components-count": "The ratio {ratio} has {parts} part(s) but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
@@ -47185,233 +49081,1079 @@ var init_ratio_and_ee_consistent = __esm({
       defaultSeverity: "error",
       summary: "Component ratio and enantiomeric excess agree with each other and with the declared form.",
       explanation: "Enantiomeric excess is |F(+) − F(−)| for mole fractions of the two enantiomers, in percent 100·|a − b|/(a + b) for a ratio a:b (IUPAC Gold Book, enantiomer excess). A racemate is an equimolar mixture of a pair of enantiomers (Gold Book, racemate), so 50:50 and ee 0. Diastereomers differ in energy and are normally formed in unequal amounts; enantiomers have equal energies, so achiral conditions give 50:50 — an exactly even diastereomer ratio deserves a question. Tolerances (ratio sum, racemate ratio, ee agreement) and the single-enantiomer ee threshold are registry settings (common practice, no source).",
-      messages: messages6,
-      run: run6
+      messages: messages8,
+      run: run8
     };
   }
 });
 
-// src/checks/rotation-consistent.ts
-function conditions(r) {
-  const c = [];
-  c.push(r.wavelength_nm !== void 0 ? `${fmt(r.wavelength_nm)} nm` : "wavelength not given");
-  if (r.temperature_c !== void 0) c.push(`${fmt(r.temperature_c)} °C`);
-  if (r.solvent !== void 0) c.push(r.solvent);
-  if (r.concentration !== void 0) c.push(`c ${fmt(r.concentration)}`);
-  return c.join(", ");
+// src/chem/provenance/mcs.ts
+function mcsGraph(p) {
+  const s = p.structure;
+  const n = s.atoms.length;
+  const element = Int32Array.from(s.atoms, (a) => a.element === "*" ? 0 : a.atomicNumber);
+  const nbrs = p.graph.nbrs;
+  const cls = p.graph.nbrBonds.map(
+    (list) => Int32Array.from(list, (b) => p.aromaticBond[b] ? AROMATIC_CLASS : s.bonds[b].order)
+  );
+  let bonds = 0;
+  for (let i = 0; i < n; i++) bonds += nbrs[i].length;
+  const h = Int32Array.from(s.atoms, (a) => a.hCount);
+  return { n, element, nbrs, cls, bonds: bonds / 2, h };
 }
-function isSodiumD(nm) {
-  return nm === void 0 || Math.abs(nm - 589) <= 1;
+function bondClass(g, x, y) {
+  const l = g.nbrs[x];
+  for (let k = 0; k < l.length; k++) if (l[k] === y) return g.cls[x][k];
+  return 0;
 }
-function run7(ctx) {
-  const record = ctx.record;
-  if (!record) return { findings: [], notApplicable: true };
-  const form = record.stereo.form;
-  const rot2 = record.stereo.rotation;
-  const sign = declaredSign(record);
-  if (!rot2) return { findings: [], notApplicable: true };
-  const tol = ctx.config.zeroRotationTolerance;
-  const out = [];
-  const base = { form, value: rot2.value, conditions: conditions(rot2), tolerance: tol };
-  const add = (id, field2, data, severity) => {
-    out.push(finding(id, field2, { ...base, ...data }, severity));
-  };
-  const zero = Math.abs(rot2.value) <= tol;
-  if (WHY[form] && !zero) add("rotation-should-be-zero", "stereo.rotation.value", { why: WHY[form] });
-  if (sign && sign.sign !== "±") {
-    const signText = sign.sign === "+" ? "(+)" : "(−)";
-    if (zero) add("sign-with-zero-rotation", sign.field, { field: sign.field, sign: signText }, "warning");
-    else if (sign.sign === "+" !== rot2.value > 0) {
-      const d = isSodiumD(rot2.wavelength_nm);
-      add(
-        "sign-disagrees-with-rotation",
-        sign.field,
-        {
-          field: sign.field,
-          sign: signText,
-          wavelengthNote: d ? "" : " The rotation was measured away from the sodium D line (589 nm), where the sign can differ (optical rotatory dispersion); signs in names refer to 589 nm unless stated."
-        },
-        d ? void 0 : "note"
-      );
+function environments(g) {
+  const out = [Int32Array.from(g.element, (e, i) => e * 8 + Math.min(g.h[i], 7))];
+  for (let r = 1; r <= RADIUS; r++) {
+    const prev = out[r - 1];
+    const next = new Int32Array(g.n);
+    for (let i = 0; i < g.n; i++) {
+      const parts = [];
+      for (let k = 0; k < g.nbrs[i].length; k++) parts.push(prev[g.nbrs[i][k]] * 8 + g.cls[i][k]);
+      parts.sort((x, y) => x - y);
+      let h = prev[i] | 0;
+      for (const x of parts) h = Math.imul(h, 31) + x | 0;
+      next[i] = h;
     }
+    out.push(next);
   }
-  if (form === "single-enantiomer" && zero)
-    add("single-enantiomer-zero-rotation", "stereo.rotation.value", {}, "note");
-  if (out.some((x) => x.severity !== "note")) return { findings: out };
-  const s = sign && sign.sign !== "±" ? `; sign ${sign.sign === "+" ? "(+)" : "(−)"} in ${sign.field} agrees` : "";
+  return out;
+}
+function commonSubstructure(a, b, options = {}) {
+  const budget = options.budget ?? DEFAULT_MCS_BUDGET;
+  const avail = options.available ?? new Uint8Array(b.n).fill(1);
+  const map = new Int32Array(a.n).fill(-1);
+  const inv = new Int32Array(b.n).fill(-1);
+  const excluded = new Uint8Array(a.n);
+  let steps = 0;
+  let shared2 = 0;
+  let lost = 0;
+  let mapped = 0;
+  let out = 0;
+  let hKept = 0;
+  let hLost = 0;
+  let hTotal = 0;
+  for (let u = 0; u < a.n; u++) hTotal += a.h[u];
+  const best = { bonds: -1, atoms: 0, h: 0, map: new Int32Array(a.n).fill(-1) };
+  const countB = /* @__PURE__ */ new Map();
+  for (let y = 0; y < b.n; y++) if (avail[y]) countB.set(b.element[y], (countB.get(b.element[y]) ?? 0) + 1);
+  const total = a.bonds;
+  const better = () => shared2 > best.bonds || shared2 === best.bonds && (mapped > best.atoms || mapped === best.atoms && hKept > best.h);
+  const hopeless = () => {
+    const bound = total - lost;
+    if (bound !== best.bonds) return bound < best.bonds;
+    const atoms = a.n - out;
+    return atoms < best.atoms || atoms === best.atoms && hTotal - hLost <= best.h;
+  };
+  const done = () => best.bonds === total && best.atoms === a.n;
+  const mapAtom = (u, v) => {
+    map[u] = v;
+    inv[v] = u;
+    mapped++;
+    const kept = Math.min(a.h[u], b.h[v]);
+    hKept += kept;
+    hLost += a.h[u] - kept;
+    const l = a.nbrs[u];
+    for (let k = 0; k < l.length; k++) {
+      const w = l[k];
+      if (map[w] < 0) continue;
+      if (bondClass(b, v, map[w]) === a.cls[u][k]) shared2++;
+      else lost++;
+    }
+  };
+  const unmapAtom = (u) => {
+    const v = map[u];
+    const l = a.nbrs[u];
+    for (let k = 0; k < l.length; k++) {
+      const w = l[k];
+      if (map[w] < 0) continue;
+      if (bondClass(b, v, map[w]) === a.cls[u][k]) shared2--;
+      else lost--;
+    }
+    const kept = Math.min(a.h[u], b.h[v]);
+    hKept -= kept;
+    hLost -= a.h[u] - kept;
+    map[u] = -1;
+    inv[v] = -1;
+    mapped--;
+  };
+  const excludeAtom = (u, sign) => {
+    excluded[u] = sign > 0 ? 1 : 0;
+    out += sign;
+    hLost += sign * a.h[u];
+    for (const w of a.nbrs[u]) if (!excluded[w]) lost += sign;
+  };
+  const candidates = (u, into) => {
+    into.length = 0;
+    const l = a.nbrs[u];
+    for (let k = 0; k < l.length; k++) {
+      const w = l[k];
+      const mw = map[w];
+      if (mw < 0) continue;
+      const lb = b.nbrs[mw];
+      for (let q = 0; q < lb.length; q++) {
+        const x = lb[q];
+        if (inv[x] >= 0 || !avail[x] || b.element[x] !== a.element[u] || b.cls[mw][q] !== a.cls[u][k])
+          continue;
+        if (!into.includes(x)) into.push(x);
+      }
+    }
+  };
+  const envA = environments(a);
+  const envB = environments(b);
+  const likeness = (u, v) => {
+    let r = -1;
+    while (r < RADIUS && envA[r + 1][u] === envB[r + 1][v]) r++;
+    return r;
+  };
+  const gain = (u, v) => {
+    let g = 0;
+    const l = a.nbrs[u];
+    for (let k = 0; k < l.length; k++) if (map[l[k]] >= 0 && bondClass(b, v, map[l[k]]) === a.cls[u][k]) g++;
+    return 8 * g + likeness(u, v) + 1;
+  };
+  const decided = (u) => map[u] >= 0 || excluded[u] === 1;
+  const grow = () => {
+    if (hopeless()) return;
+    let pick = -1;
+    let pickCands = [];
+    const forced = [];
+    const cand = [];
+    for (let u = 0; u < a.n; u++) {
+      if (decided(u)) continue;
+      let next = false;
+      for (const w of a.nbrs[u]) if (map[w] >= 0) next = true;
+      if (!next) continue;
+      candidates(u, cand);
+      if (cand.length === 0) {
+        if (a.nbrs[u].every(decided)) forced.push(u);
+        continue;
+      }
+      if (pick < 0 || cand.length < pickCands.length) {
+        pick = u;
+        pickCands = cand.slice();
+      }
+    }
+    for (const u of forced) excludeAtom(u, 1);
+    try {
+      if (pick < 0) {
+        if (better()) {
+          best.bonds = shared2;
+          best.atoms = mapped;
+          best.h = hKept;
+          best.map.set(map);
+        }
+        return;
+      }
+      if (hopeless()) return;
+      const u = pick;
+      pickCands.sort((x, y) => gain(u, y) - gain(u, x) || x - y);
+      for (const v of pickCands) {
+        if (++steps > budget) throw new Budget();
+        mapAtom(u, v);
+        grow();
+        unmapAtom(u);
+        if (done() || hopeless()) return;
+      }
+      excludeAtom(u, 1);
+      grow();
+      excludeAtom(u, -1);
+    } finally {
+      for (let k = forced.length - 1; k >= 0; k--) excludeAtom(forced[k], -1);
+    }
+  };
+  const far = /* @__PURE__ */ new Map();
+  for (let y = 0; y < b.n; y++) if (avail[y]) far.set(envB[RADIUS][y], (far.get(envB[RADIUS][y]) ?? 0) + 1);
+  const rarity = (x) => far.get(envA[RADIUS][x]) ?? 1e6;
+  const seeds = Array.from({ length: a.n }, (_x, i) => i).sort(
+    (x, y) => rarity(x) - rarity(y) || (countB.get(a.element[x]) ?? 0) - (countB.get(a.element[y]) ?? 0) || a.nbrs[y].length - a.nbrs[x].length || x - y
+  );
+  let complete = true;
+  try {
+    for (const u0 of seeds) {
+      if (hopeless() || done()) break;
+      const starts = [];
+      for (let v0 = 0; v0 < b.n; v0++) if (avail[v0] && b.element[v0] === a.element[u0]) starts.push(v0);
+      starts.sort((x, y) => likeness(u0, y) - likeness(u0, x) || x - y);
+      for (const v0 of starts) {
+        if (++steps > budget) throw new Budget();
+        mapAtom(u0, v0);
+        grow();
+        unmapAtom(u0);
+        if (done() || hopeless()) break;
+      }
+      excludeAtom(u0, 1);
+    }
+  } catch (e) {
+    if (!(e instanceof Budget)) throw e;
+    complete = false;
+  }
   return {
-    findings: out,
-    passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}`
+    map: best.map,
+    atoms: best.bonds < 0 ? 0 : best.atoms,
+    bonds: Math.max(0, best.bonds),
+    complete,
+    steps: Math.min(steps, budget)
   };
 }
-var messages7, WHY, rotationConsistent;
-var init_rotation_consistent = __esm({
-  "src/checks/rotation-consistent.ts"() {
+var AROMATIC_CLASS, DEFAULT_MCS_BUDGET, Budget, RADIUS;
+var init_mcs = __esm({
+  "src/chem/provenance/mcs.ts"() {
     "use strict";
-    init_words();
-    messages7 = {
-      "rotation-should-be-zero": "Declared {form}, but the specific rotation is {value}° ({conditions}); it should be zero within ±{tolerance}°, because {why}. Check the sample (an enantiomeric excess, an optically active impurity) or the form.",
-      "sign-disagrees-with-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}). Correct the sign in the name or descriptors, or re-check the measurement.{wavelengthNote}",
-      "sign-with-zero-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. A sign needs a measurable rotation: measure at higher concentration or another wavelength, or drop the sign.",
-      "single-enantiomer-zero-rotation": "Declared single-enantiomer, but the specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. Some enantiomers rotate very little at the sodium D line, but a zero reading is also what a racemate gives. Was the enantiomeric purity shown another way (chiral HPLC)? Record that evidence."
+    AROMATIC_CLASS = 5;
+    DEFAULT_MCS_BUDGET = 1e5;
+    Budget = class extends Error {
     };
-    WHY = {
-      racemate: "a racemate holds equal amounts of two enantiomers, whose rotations are equal and opposite and cancel",
-      meso: "a meso compound is achiral, and achiral substances are optically inactive",
-      achiral: "achiral substances are optically inactive"
-    };
-    rotationConsistent = {
-      id: "rotation-consistent",
-      defaultSeverity: "error",
-      summary: "The specific rotation agrees with the declared form and with the (+)/(−) sign in the name.",
-      explanation: "Optical activity needs chiral molecules in enantiomeric excess: an achiral or meso compound is optically inactive, and a racemate is optically inactive because its enantiomers rotate equally in opposite senses (IUPAC Gold Book: optical activity, racemate, meso). The prefixes (+) and (−) state the sign of rotation, normally at the sodium D line, 589 nm (IUPAC 2013, P-93). A single enantiomer with zero rotation is possible but rare and is only noted. What counts as zero is a registry setting (zeroRotationTolerance).",
-      messages: messages7,
-      run: run7
-    };
+    RADIUS = 3;
   }
 });
 
-// src/checks/consistent-with-registry.ts
-function registeredLater(a, b) {
-  if (a.id !== b.id) {
-    if (a.id === null) return true;
-    if (b.id === null) return false;
-    return a.id.localeCompare(b.id, "en", { numeric: true }) > 0;
-  }
-  return a.file.localeCompare(b.file, "en", { numeric: true }) > 0;
-}
-function carriesConflict(me, other) {
-  if (!me || !other.underReview) return true;
-  return registeredLater(me, other);
-}
-function selfEntry(ctx) {
-  return ctx.registry.entries.find((e) => e.file === ctx.loaded.file && e.id === ctx.loaded.id);
-}
-function isSelf(ctx, e) {
-  if (e.file !== ctx.loaded.file) return false;
-  return ctx.loaded.origin.kind === "file" || e.id === ctx.loaded.id;
-}
-function measuredAlike(a, b) {
-  const nm = (r) => r.wavelength_nm ?? 589;
-  if (Math.abs(nm(a) - nm(b)) > 1) return false;
-  if ((a.solvent ?? "").trim().toLowerCase() !== (b.solvent ?? "").trim().toLowerCase()) return false;
-  if (a.temperature_c !== void 0 && b.temperature_c !== void 0 && Math.abs(a.temperature_c - b.temperature_c) > 5) {
-    return false;
-  }
+// src/chem/provenance/assign.ts
+function stillFits(r, free) {
+  for (let i = 0; i < r.map.length; i++) if (r.map[i] >= 0 && !free[r.map[i]]) return false;
   return true;
 }
-function drawingKind(f) {
-  const m = f.enhanced.meaning;
-  if (m === "racemic" || m === "mixture") return "racemic";
-  if (m === "relative") return "relative";
-  return "as-drawn";
-}
-function run8(ctx) {
-  const record = ctx.record;
-  const f = ctx.main.facts;
-  const structure = ctx.main.structure;
-  if (!record || !f || !structure) return { findings: [], notApplicable: true };
-  const me = selfEntry(ctx);
-  if (me && !me.underReview) return { findings: [], notApplicable: true };
-  const form = record.stereo.form;
-  const out = [];
-  const add = (id, other, data, severity) => {
-    if (CONFLICTS.includes(id) && !carriesConflict(me, other)) {
-      pointers.push(other.id ?? other.file);
-      data = { conflict: CONFLICT_WORDS[id] ?? id, otherMessageId: id, ...data };
-      id = "conflict-reported-on-later-record";
-      severity = "note";
+function assignInputs(product, inputs, stepBudget) {
+  const free = new Uint8Array(product.n).fill(1);
+  const owner = new Int32Array(product.n).fill(-1);
+  const placements = [];
+  let steps = 0;
+  let bounded = inputs.some((g) => g === null);
+  const search = (k) => {
+    const remaining = stepBudget - steps;
+    if (remaining <= 0) {
+      bounded = true;
+      return null;
     }
-    out.push(
-      finding(
-        id,
-        id.startsWith("enantiomer-rotation") ? "stereo.rotation.value" : "structure",
-        {
-          form,
-          otherId: other.id ?? other.file,
-          otherFile: other.file,
-          otherName: other.record.name ? `, ${other.record.name}` : "",
-          otherForm: other.record.stereo.form,
-          ...data
-        },
-        severity
-      )
-    );
+    const r = commonSubstructure(inputs[k], product, { available: free, budget: remaining });
+    steps += r.steps;
+    if (!r.complete) bounded = true;
+    return r;
   };
-  let compared = 0;
-  const pointers = [];
-  for (const other of ctx.registry.withConstitution(f.constitutionKey)) {
-    const otherFacts = other.main.facts;
-    if (isSelf(ctx, other) || !other.main.structure || !otherFacts) continue;
-    if (drawingKind(otherFacts) !== drawingKind(f)) continue;
-    compared++;
-    const rel = ctx.engine.relate(structure, other.main.structure);
-    if (rel.relation === "identical") {
-      const otherForm = other.record.stereo.form;
-      if (otherForm === form) add("already-registered", other, {}, "warning");
-      else if (ENANTIOPURE.includes(form) && ENANTIOPURE.includes(otherForm)) {
-        add("same-structure-other-purity", other, {}, "note");
-      } else add("same-structure-different-form", other, {});
-    } else if (rel.relation === "enantiomers" && f.chiral === true) {
-      add("enantiomer-registered", other, { explanation: rel.explanation }, "note");
-      const otherForm = other.record.stereo.form;
-      if (ENANTIOPURE.includes(form) !== ENANTIOPURE.includes(otherForm)) {
-        add("enantiomer-form-conflict", other, {}, "warning");
+  const place = (k, r) => {
+    const index = placements.length;
+    placements.push({ input: k, map: r.map, atoms: r.atoms, bonds: r.bonds });
+    for (let i = 0; i < r.map.length; i++) {
+      const v = r.map[i];
+      if (v < 0) continue;
+      free[v] = 0;
+      owner[v] = index;
+    }
+  };
+  const results = /* @__PURE__ */ new Map();
+  const pending = /* @__PURE__ */ new Set();
+  inputs.forEach((g, k) => {
+    if (g !== null && g.n > 0) pending.add(k);
+  });
+  while (pending.size > 0 && !bounded) {
+    let bestK = -1;
+    let bestR = null;
+    for (const k of pending) {
+      let r = results.get(k);
+      if (!r || !stillFits(r, free)) {
+        const fresh = search(k);
+        if (fresh === null || bounded) break;
+        r = fresh;
+        results.set(k, r);
       }
-      const a = record.stereo.rotation;
-      const b = other.record.stereo.rotation;
-      const tol = ctx.config.zeroRotationTolerance;
-      if (a && b && measuredAlike(a, b) && Math.abs(a.value) > tol && Math.abs(b.value) > tol) {
-        const data = { value: fmt(a.value), otherValue: fmt(b.value), conditions: conditions(a) };
-        if (Math.sign(a.value) === Math.sign(b.value)) add("enantiomer-rotation-same-sign", other, data);
-        else if (form === "single-enantiomer" && otherForm === "single-enantiomer" && Math.abs(Math.abs(a.value) - Math.abs(b.value)) > Math.max(tol, 0.1 * Math.max(Math.abs(a.value), Math.abs(b.value)))) {
-          add("enantiomer-rotation-magnitude", other, data, "note");
+      if (bestR === null || r.bonds > bestR.bonds || r.bonds === bestR.bonds && r.atoms > bestR.atoms || r.bonds === bestR.bonds && r.atoms === bestR.atoms && k < bestK) {
+        bestK = k;
+        bestR = r;
+      }
+    }
+    if (bounded || bestR === null || bestR.atoms === 0) break;
+    place(bestK, bestR);
+    pending.delete(bestK);
+  }
+  let extra = 0;
+  for (let k = 0; k < inputs.length && !bounded; k++) {
+    const g = inputs[k];
+    if (g === null || !placements.some((p) => p.input === k)) continue;
+    const need = Math.max(2, Math.ceil(2 * g.n / 3));
+    while (extra < MAX_EXTRA_COPIES && !bounded) {
+      let left = 0;
+      for (let v = 0; v < product.n; v++) left += free[v];
+      if (left < need) break;
+      const r = search(k);
+      if (r === null || bounded || r.atoms < need) break;
+      place(k, r);
+      extra++;
+    }
+  }
+  return { placements, owner, bounded, steps };
+}
+var MAX_EXTRA_COPIES;
+var init_assign = __esm({
+  "src/chem/provenance/assign.ts"() {
+    "use strict";
+    init_mcs();
+    MAX_EXTRA_COPIES = 8;
+  }
+});
+
+// src/chem/provenance/classify.ts
+function couldAlsoCome(x, q, input, product) {
+  for (let w = 0; w < input.n; w++) {
+    if (q.map[w] >= 0 || input.element[w] !== product.element[x]) continue;
+    const l = input.nbrs[w];
+    for (let k = 0; k < l.length; k++) {
+      const y = q.map[l[k]];
+      if (y >= 0 && y !== x && bondClass(product, y, x) === input.cls[w][k]) return true;
+    }
+  }
+  return false;
+}
+function classify2(product, inputs, asg) {
+  const pa = product.a;
+  const pp = pa.p;
+  const nOut = pp.structure.atoms.length;
+  const inverse = asg.placements.map((pl) => {
+    const inv = new Int32Array(nOut).fill(-1);
+    pl.map.forEach((v, u) => {
+      if (v >= 0) inv[v] = u;
+    });
+    return inv;
+  });
+  const units = [];
+  const carried = asg.placements.map(() => []);
+  pp.units.forEach((pu, j) => {
+    if (!pa.reported[j]) return;
+    const base = {
+      kind: pu.kind,
+      atoms: num(product, pu.atoms),
+      productDefined: pa.defined[j] === 1,
+      inputDefined: false,
+      configuration: "open",
+      neighbour: null
+    };
+    const push = (fate, reason, input = null, inputAtoms2 = null, neighbour = null) => {
+      units.push({ ...base, fate, reason, input, inputAtoms: inputAtoms2, neighbour });
+    };
+    if (asg.bounded) return push("unmapped", "bound");
+    const owners = pu.atoms.map((x) => asg.owner[x]);
+    if (owners.some((o2) => o2 < 0)) return push("unmapped", "not-covered");
+    const o = owners[0];
+    const pl = asg.placements[o];
+    const k = pl.input;
+    const side = inputs[k];
+    const inv = inverse[o];
+    if (owners.some((x) => x !== o)) return push("formed", "atoms-from-two-inputs", k, null);
+    const inAtoms = pu.atoms.map((x) => inv[x]);
+    const inputAtoms = num(side, inAtoms);
+    const ip = side.a.p;
+    const i = ip.unitOfAtom[inAtoms[0]];
+    const iu = i >= 0 ? ip.units[i] : null;
+    if (iu === null || !side.a.reported[i] || iu.kind !== pu.kind || iu.atoms.length !== inAtoms.length || !inAtoms.every((x) => iu.atoms.includes(x)))
+      return push("formed", "new-unit", k, inputAtoms);
+    const nb = (x) => ({
+      atom: pp.structure.atoms[x].inputNumber,
+      input: asg.owner[x] < 0 ? null : asg.placements[asg.owner[x]].input
+    });
+    for (const c of pu.atoms) {
+      for (const x of product.g.nbrs[c]) {
+        if (asg.owner[x] === o && bondClass(side.g, inv[c], inv[x]) === bondClass(product.g, c, x)) continue;
+        const mayBe = asg.owner[x] >= 0 && asg.owner[x] !== o && couldAlsoCome(x, pl, side.g, product.g);
+        return push("formed", mayBe ? "bond-may-be-made" : "bond-changed", k, inputAtoms, nb(x));
+      }
+      for (const w of side.g.nbrs[inv[c]]) {
+        if (pl.map[w] < 0 || bondClass(product.g, c, pl.map[w]) === 0)
+          return push("formed", "bond-changed", k, inputAtoms, null);
+      }
+    }
+    const nIn = ip.structure.atoms.length;
+    if (rebase(
+      pu,
+      iu.tokens.map((t) => mapToken(t, nIn, pl.map, nOut)),
+      iu.bit
+    ) < 0)
+      return push("formed", "bond-changed", k, inputAtoms);
+    for (const c of pu.atoms) {
+      for (const x of product.g.nbrs[c]) {
+        if (pu.atoms.includes(x)) continue;
+        for (let q = 0; q < asg.placements.length; q++) {
+          const other = asg.placements[q];
+          if (q === o || other.input === k) continue;
+          if (couldAlsoCome(x, other, inputs[other.input].g, product.g))
+            return push("formed", "bond-may-be-made", k, inputAtoms, {
+              atom: nb(x).atom,
+              input: other.input
+            });
         }
       }
     }
+    units.push({
+      ...base,
+      fate: "carried",
+      reason: "bonds-kept",
+      input: k,
+      inputAtoms,
+      inputDefined: side.a.defined[i] === 1
+    });
+    carried[o].push([j, i, units.length - 1]);
+  });
+  const perPlacement = asg.placements.map(
+    (pl, o) => compare(product, inputs[pl.input], pl, carried[o], units)
+  );
+  const traces = [];
+  inputs.forEach((side, k) => {
+    const mine = asg.placements.map((pl, o) => ({ pl, o })).filter((x) => x.pl.input === k);
+    const rel = mine.map((x) => perPlacement[x.o]).filter((r) => r !== "none");
+    const relative = rel.length === 0 ? "none" : rel.every((r) => r === "same") ? "same" : rel.every((r) => r === "mirror") ? "mirror" : "mixed";
+    traces.push({
+      input: k,
+      copies: mine.length,
+      heavyAtoms: side?.g.n ?? 0,
+      atomsMapped: Math.max(0, ...mine.map((x) => x.pl.atoms)),
+      bondsMapped: Math.max(0, ...mine.map((x) => x.pl.bonds)),
+      relative
+    });
+  });
+  return { units, inputs: traces };
+}
+function compare(product, input, pl, list, units) {
+  const pa = product.a;
+  const ia = input.a;
+  const nOut = pa.p.structure.atoms.length;
+  const nIn = ia.p.structure.atoms.length;
+  const x = pa.state;
+  let best = null;
+  let bestSame = -1;
+  let anySame = false;
+  let anyMirror = false;
+  for (const sigma of ia.group.atomMaps) {
+    const inv = new Int32Array(nIn);
+    sigma.forEach((v, u) => {
+      inv[v] = u;
+    });
+    const verdict = [];
+    let same = 0;
+    let compared = 0;
+    let mirrorOk = true;
+    let sameOk = true;
+    for (const [j, i] of list) {
+      const pu = pa.p.units[j];
+      const i2 = ia.p.unitOfAtom[inv[ia.p.units[i].atoms[0]]];
+      if (i2 < 0 || !ia.defined[i2] || !pa.defined[j]) {
+        verdict.push("open");
+        continue;
+      }
+      const iu = ia.p.units[i2];
+      const tokens2 = iu.tokens.map((t) => mapToken(mapToken(t, nIn, sigma), nIn, pl.map, nOut));
+      const y = rebase(pu, tokens2, iu.bit);
+      if (y < 0) {
+        verdict.push("open");
+        continue;
+      }
+      compared++;
+      const agree = y === x[j];
+      verdict.push(agree ? "same" : "inverted");
+      if (agree) same++;
+      else sameOk = false;
+      if (agree === (pu.mode === "parity")) mirrorOk = false;
+    }
+    if (compared > 0 && sameOk) anySame = true;
+    if (compared > 0 && mirrorOk) anyMirror = true;
+    if (same > bestSame) {
+      bestSame = same;
+      best = verdict;
+    }
   }
-  if (out.some((x) => x.severity !== "note")) return { findings: out };
+  list.forEach(([, , u], k) => {
+    units[u].configuration = best?.[k] ?? "open";
+  });
+  if (!best || best.every((v) => v === "open")) return "none";
+  return anySame ? "same" : anyMirror ? "mirror" : "mixed";
+}
+var num;
+var init_classify = __esm({
+  "src/chem/provenance/classify.ts"() {
+    "use strict";
+    init_perceive2();
+    init_mcs();
+    num = (side, atoms) => atoms.map((x) => side.a.p.structure.atoms[x].inputNumber);
+  }
+});
+
+// src/chem/provenance/index.ts
+function traceProvenance(product, inputs, options = {}) {
+  return traceAnalysed(
+    analyse(product),
+    inputs.map((s) => analyse(s)),
+    options
+  );
+}
+function traceAnalysed(product, inputs, options = {}) {
+  const budget = options.stepBudget ?? DEFAULT_MCS_BUDGET;
+  const maxAtoms = options.maxInputAtoms ?? DEFAULT_MAX_INPUT_ATOMS;
+  const pg = mcsGraph(product.p);
+  const sides = inputs.map((a) => {
+    const g = mcsGraph(a.p);
+    return g.n > maxAtoms ? null : { a, g };
+  });
+  const tooLarge = pg.n > maxAtoms;
+  const graphs = sides.map((s) => tooLarge ? null : s?.g ?? null);
+  const asg = assignInputs(pg, graphs, budget);
+  const full = inputs.map((a, k) => sides[k] ?? { a, g: mcsGraph(a.p) });
+  const { units, inputs: traces } = classify2({ a: product, g: pg }, full, asg);
+  return { units, inputs: traces, bounded: asg.bounded, steps: asg.steps };
+}
+var DEFAULT_MAX_INPUT_ATOMS;
+var init_provenance = __esm({
+  "src/chem/provenance/index.ts"() {
+    "use strict";
+    init_describe2();
+    init_assign();
+    init_classify();
+    init_mcs();
+    init_mcs();
+    DEFAULT_MAX_INPUT_ATOMS = 250;
+  }
+});
+
+// src/checks/origin-inputs.ts
+function inputName(i) {
+  if (i.id !== null) return i.id;
+  const s = i.text.length > 40 ? `${i.text.slice(0, 37)}...` : i.text;
+  return `input ${i.index + 1} (${s})`;
+}
+function entryById(registry, id) {
+  if (registry.byId) return registry.byId(id);
+  let index = byId.get(registry);
+  if (!index) {
+    index = /* @__PURE__ */ new Map();
+    for (const e of registry.entries) if (e.id !== null && !index.has(e.id)) index.set(e.id, e);
+    byId.set(registry, index);
+  }
+  return index.get(id);
+}
+function racemicWords(record) {
+  const d = record.stereo.descriptors;
+  if (d === void 0 || d.trim() === "") return false;
+  const parsed = parseDescriptors(d);
+  return parsed.prefixes.length > 0 || parsed.rotationSign === "±" || parsed.fischer === "DL" || parsed.mode === "racemic" || parsed.mode === "relative";
+}
+function recordStatus(record, facts) {
+  const id = record.id;
+  const form = record.stereo.form;
+  const ee = record.stereo.ee;
+  if (facts.chiral === false)
+    return { status: "achiral", why: `${id} is achiral (its structure has no enantiomer)` };
+  switch (form) {
+    case "achiral":
+    case "meso":
+      return { status: "achiral", why: `${id} is declared ${form}` };
+    case "racemate":
+      return { status: "racemic", why: `${id} is declared racemate` };
+    case "single-enantiomer":
+    case "enantioenriched":
+      return {
+        status: "enriched",
+        why: `${id} is declared ${form}${ee !== void 0 ? ` (ee ${ee}%)` : ""}`
+      };
+    default:
+      if (ee !== void 0 && ee > 0) return { status: "enriched", why: `${id} states ee ${ee}%` };
+      if (racemicWords(record))
+        return { status: "racemic", why: `${id} is declared ${form}, racemic by its descriptors` };
+      return {
+        status: "unknown",
+        why: `${id} is declared ${form}, which does not say whether it is racemic or one enantiomer`
+      };
+  }
+}
+function drawnStatus(facts, name) {
+  if (facts.chiral === false) return { status: "achiral", why: `${name} is achiral as drawn` };
+  if (facts.enhanced.meaning === "racemic")
+    return { status: "racemic", why: `${name} is drawn racemic (AND group)` };
+  if (facts.undefined > 0 || facts.chiral === null)
+    return {
+      status: "unknown",
+      why: `${name} is drawn without the configuration of ${facts.undefined} stereo unit(s), so it may be racemic or one enantiomer`
+    };
+  if (facts.enhanced.meaning === "relative")
+    return {
+      status: "enriched",
+      why: `${name} is drawn as one enantiomer of unknown absolute configuration`
+    };
+  return { status: "enriched", why: `${name} is drawn as one enantiomer` };
+}
+function resolveInput(text, index, registry) {
+  const entry = entryById(registry, text.trim());
+  if (entry) {
+    const main = entry.main;
+    if (!main.structure || !main.facts)
+      return {
+        ok: false,
+        index,
+        text,
+        problem: "no-structure",
+        detail: main.error?.message ?? "its structure could not be read"
+      };
+    const { status: status2, why: why2 } = recordStatus(entry.record, main.facts);
+    return {
+      ok: true,
+      input: {
+        index,
+        text,
+        id: entry.id,
+        structure: main.structure,
+        facts: main.facts,
+        status: status2,
+        ee: entry.record.stereo.ee ?? null,
+        form: entry.record.stereo.form,
+        why: why2
+      }
+    };
+  }
+  const read = readStructure(text, { format: "smiles" });
+  if (!read.ok) {
+    const looksLikeId = ID_SHAPE.test(text.trim());
+    return {
+      ok: false,
+      index,
+      text,
+      problem: looksLikeId ? "not-found" : "unreadable",
+      detail: `${read.error.message}${read.error.at.offset !== void 0 ? ` (character ${read.error.at.offset + 1})` : ""}`
+    };
+  }
+  let facts;
+  try {
+    facts = describe(read.structure);
+  } catch (e) {
+    return { ok: false, index, text, problem: "unreadable", detail: e.message };
+  }
+  const partial = { index, text, id: null };
+  const { status, why } = drawnStatus(facts, inputName(partial));
   return {
-    findings: out,
-    passed: compared === 0 ? "no other registered record has this constitution" : pointers.length > 0 ? `compared with ${compared} registered record(s) of the same constitution; the conflict with ${[...new Set(pointers)].join(", ")} is reported on the later record` : `compared with ${compared} registered record(s) of the same constitution; no duplicate or conflict`
+    ok: true,
+    input: { ...partial, structure: read.structure, facts, status, ee: null, form: null, why }
   };
 }
-var messages8, CONFLICTS, CONFLICT_WORDS, ENANTIOPURE, consistentWithRegistry;
-var init_consistent_with_registry = __esm({
-  "src/checks/consistent-with-registry.ts"() {
+function originCycle(start, registry) {
+  const parent = /* @__PURE__ */ new Map();
+  const queue = [start];
+  let walked = 0;
+  while (queue.length > 0 && walked < MAX_WALK) {
+    const id = queue.shift();
+    walked++;
+    const from = entryById(registry, id)?.record.origin?.from ?? [];
+    for (const raw2 of from) {
+      const next = raw2.trim();
+      if (next === start) {
+        const path = [start];
+        for (let x = id; x !== void 0 && x !== start; x = parent.get(x)) path.push(x);
+        path.push(start);
+        return path.reverse();
+      }
+      if (parent.has(next) || !entryById(registry, next)) continue;
+      parent.set(next, id);
+      queue.push(next);
+    }
+  }
+  return null;
+}
+var byId, ID_SHAPE, MAX_WALK;
+var init_origin_inputs = __esm({
+  "src/checks/origin-inputs.ts"() {
     "use strict";
-    init_rotation_consistent();
+    init_read();
+    init_describe2();
+    init_descriptors();
+    byId = /* @__PURE__ */ new WeakMap();
+    ID_SHAPE = /^[A-Za-z]{1,10}[-_ ]?\d{1,12}$/;
+    MAX_WALK = 1e4;
+  }
+});
+
+// src/checks/origin-carried.ts
+function productUnitName(facts, u) {
+  const key3 = u.atoms.join(",");
+  const f = facts.units.find((x) => x.atoms.join(",") === key3);
+  if (f) return unitName2(f);
+  return u.atoms.length === 1 ? `atom ${u.atoms[0]}` : `the unit at atoms ${u.atoms.join(", ")}`;
+}
+function names(facts, units) {
+  const n = units.map((u) => productUnitName(facts, u));
+  return n.length <= 1 ? n[0] ?? "" : `${n.slice(0, -1).join(", ")} and ${n[n.length - 1]}`;
+}
+function makeAdd(out) {
+  return (id, field2, data, severity) => {
+    out.push(finding(id, field2, data, severity));
+  };
+}
+function carriedConfigurations(facts, prov, inputs, add, component) {
+  const compared = [];
+  prov.inputs.forEach((trace) => {
+    const input = inputs[trace.input];
+    const mine = prov.units.filter((u) => u.fate === "carried" && u.input === trace.input);
+    const inverted = mine.filter((u) => u.configuration === "inverted");
+    const kept = mine.filter((u) => u.configuration === "same");
+    if (trace.relative === "none") return;
+    const who = inputName(input);
+    const field2 = component === null ? "structure" : `stereo.components.${component}`;
+    const racemic = input.status === "racemic";
+    const plural = inverted.length > 1;
+    if (component !== null && (trace.relative === "mixed" || !racemic && trace.relative === "mirror")) {
+      add("mixture-component-differs", field2, {
+        component: component + 1,
+        unit: names(facts, inverted),
+        input: who,
+        formed: names(
+          facts,
+          prov.units.filter((u) => u.fate === "formed")
+        ) || "none"
+      });
+      return;
+    }
+    if (trace.relative === "same" || racemic && trace.relative === "mirror") {
+      if (input.status !== "enriched")
+        compared.push(
+          `${names(
+            facts,
+            mine.filter((u) => u.configuration !== "open")
+          )} as in ${who}${racemic ? " (relative configuration)" : ""}`
+        );
+      return;
+    }
+    if (racemic) {
+      add("carried-relative-differs", field2, {
+        input: who,
+        inverted: names(facts, inverted),
+        kept: names(facts, kept),
+        verb: plural ? "are" : "is"
+      });
+    } else if (trace.relative === "mirror") {
+      add("carried-enantiomer", field2, {
+        units: names(facts, inverted),
+        verb: plural ? "are" : "is",
+        pronoun: plural ? "them" : "it",
+        input: who
+      });
+    } else {
+      add("carried-epimer", field2, {
+        inverted: names(facts, inverted),
+        kept: names(facts, kept),
+        keepS: kept.length > 1 ? "" : "s",
+        verb: plural ? "are" : "is",
+        pronoun: plural ? "them" : "it",
+        input: who
+      });
+    }
+  });
+  const open = prov.units.filter(
+    (u) => u.fate === "carried" && u.configuration === "open" && u.inputDefined !== u.productDefined
+  );
+  if (component === null && open.length > 0) {
+    const u = open[0];
+    add(
+      "carried-unit-open",
+      "structure",
+      {
+        unit: names(facts, open),
+        input: inputName(inputs[u.input]),
+        side: u.inputDefined ? "the structure" : inputName(inputs[u.input])
+      },
+      "note"
+    );
+  }
+  return { compared };
+}
+function diastereomers(record, facts, prov, inputs, components, componentFacts2, add) {
+  const carried = prov.units.filter((u) => u.fate === "carried" && u.inputDefined);
+  const formed = prov.units.filter((u) => u.fate === "formed");
+  if (carried.length === 0 || formed.length === 0) return null;
+  const from = inputName(inputs[carried[0].input]);
+  const data = { carried: names(facts, carried), formed: names(facts, formed), input: from };
+  const form = record.stereo.form;
+  components.forEach((c, k) => {
+    const f = componentFacts2[k];
+    if (c && f) carriedConfigurations(f, c, inputs, add, k);
+  });
+  if (form === "diastereomer-mixture" && record.stereo.ratio !== void 0) {
+    const r = parseRatio(record.stereo.ratio);
+    if (r.problems.length === 0 && r.parts.length >= 2 && r.parts.every((p) => p === r.parts[0]))
+      add("diastereomers-one-to-one", "stereo.ratio", { ...data, ratio: record.stereo.ratio }, "note");
+  }
+  const single = form === "single-diastereomer" || form === "single-enantiomer" || form === "enantioenriched";
+  if (single && facts.undefined === 0 && record.stereo.ratio === void 0 && !record.stereo.evidence?.length)
+    add("diastereomer-ratio-not-stated", "stereo.form", data, "note");
+  return `diastereomers at ${data.formed} in unequal amounts`;
+}
+var init_origin_carried = __esm({
+  "src/checks/origin-carried.ts"() {
+    "use strict";
+    init_origin_inputs();
+    init_ratio();
     init_words();
-    messages8 = {
-      "already-registered": "This structure is identical to {otherId} ({otherFile}{otherName}), already registered as {otherForm}. Register a new batch under {otherId} instead, or, if this is a different substance, correct the structure.",
-      "same-structure-different-form": "This structure is identical to {otherId} ({otherFile}), but {otherId} is registered as {otherForm} and this record declares {form}. The same drawn structure cannot be both; decide which form is right and correct the other record.",
-      "same-structure-other-purity": "This structure is identical to {otherId} ({otherFile}), registered as {otherForm}; this record declares {form}. The same enantiomer at another enantiomeric purity: register it as a batch of {otherId} if your SOP allows, or keep it separate on purpose.",
-      "enantiomer-registered": "This compound is the enantiomer of {otherId} ({otherFile}{otherName}): {explanation}. That is fine if the enantiomer is meant; confirm that the configuration was not drawn inverted by mistake.",
-      "enantiomer-rotation-same-sign": "This compound and its enantiomer {otherId} have rotations of the same sign ({value}° here, {otherValue}° for {otherId}), measured alike ({conditions}). Enantiomers rotate plane-polarised light by equal amounts in opposite senses, so one structure, one rotation or one record is wrong.",
-      "enantiomer-rotation-magnitude": "This compound and its enantiomer {otherId} were measured alike ({conditions}) but their rotations differ in size ({value}° vs {otherValue}°). Enantiomers of equal purity have equal and opposite rotations; check the ee of both samples.",
-      "enantiomer-form-conflict": "This compound is declared {form}, but its enantiomer {otherId} is registered as {otherForm}. Enantiomers have the same kind of form (both single enantiomers, or both enriched); check both records.",
-      "conflict-reported-on-later-record": "{otherId} ({otherFile}), registered after this record, conflicts with it ({conflict}); the finding is reported on {otherId}. Nothing to change here unless {otherId} turns out to be right."
+  }
+});
+
+// src/checks/origin-enantiomers.ts
+function enantioClaim(record, config) {
+  const s = record.stereo;
+  if (s.form === "single-enantiomer" || s.form === "enantioenriched")
+    return { text: s.form, field: "stereo.form" };
+  if (s.ee !== void 0 && s.ee > 2 * config.racemateRatioTolerance)
+    return { text: `ee ${fmt(s.ee)}%`, field: "stereo.ee" };
+  if (s.rotation !== void 0 && Math.abs(s.rotation.value) > config.zeroRotationTolerance)
+    return { text: `a specific rotation of ${fmt(s.rotation.value)}°`, field: "stereo.rotation" };
+  return null;
+}
+function inputList(inputs) {
+  return inputs.map((i) => i.why).join("; ");
+}
+function enantiomericPart(record, facts, prov, inputs, config, add) {
+  const control = record.origin?.control;
+  const claim = enantioClaim(record, config);
+  const enriched = inputs.filter((i) => i.status === "enriched");
+  const unknown = inputs.filter((i) => i.status === "unknown");
+  if (facts.chiral === false)
+    return { outcome: "achiral", reason: "the structure as drawn is superimposable on its mirror image" };
+  if (enriched.length === 0) {
+    if (control !== void 0 && CHIRAL_CONTROL.includes(control))
+      return { outcome: "enantioenriched", reason: `the ${control} is the source of enantiomeric bias` };
+    if (control !== void 0 && ENRICHING.includes(control))
+      return {
+        outcome: "enantioenriched or one enantiomer",
+        reason: `the enantiomers were parted by ${control}`
+      };
+    if (unknown.length > 0) {
+      if (claim)
+        add("input-stereo-unknown", claim.field, { claim: claim.text, why: inputList(unknown) }, "note");
+      return { outcome: "not worked out", reason: inputList(unknown) };
+    }
+    const formed = prov.units.some((u) => u.fate === "formed");
+    const mixture = formed && prov.units.length > 1 ? " (a racemic pair of each diastereomer that forms)" : "";
+    if (control === "none") {
+      if (claim) {
+        const desym = inputs.some((i) => i.facts.meso === true || i.form === "meso");
+        add(desym ? "desymmetrised-without-control" : "no-source-of-bias", claim.field, {
+          claim: claim.text,
+          inputs: inputList(inputs),
+          expected: `racemate${mixture}`
+        });
+      }
+      return {
+        outcome: `racemate${mixture}`,
+        reason: "no source of enantiomeric bias (inputs achiral or racemic, control none): enantiomeric transition states are equal in energy"
+      };
+    }
+    if (control === void 0 || control === "unknown") {
+      if (claim)
+        add(
+          "control-not-stated",
+          "origin",
+          { claim: claim.text, inputs: inputList(inputs), control: control ?? "not given" },
+          "note"
+        );
+      return {
+        outcome: "racemate unless something chiral was present",
+        reason: "inputs achiral or racemic; origin.control not stated"
+      };
+    }
+    return { outcome: "not worked out", reason: `origin.control is ${control}` };
+  }
+  const carried = prov.units.filter(
+    (u) => u.fate === "carried" && u.inputDefined && u.productDefined && inputs[u.input].status === "enriched"
+  );
+  if (carried.length === 0)
+    return {
+      outcome: "enantiomeric composition set by the reaction",
+      reason: `${enriched.map(inputName).join(", ")} ${enriched.length > 1 ? "are" : "is"} chiral, but none of its stereo units reaches the product unchanged`
     };
-    CONFLICTS = [
-      "already-registered",
-      "same-structure-different-form",
-      "enantiomer-rotation-same-sign",
-      "enantiomer-form-conflict"
+  const source = inputs[carried[0].input];
+  const who = inputName(source);
+  const unitWords2 = names(
+    facts,
+    carried.filter((u) => u.input === source.index)
+  );
+  const inputEe = source.ee ?? (source.id === null ? 100 : null);
+  const expected = `non-racemic, ${unitWords2} as in ${who}${inputEe !== null ? `, ee at most ${fmt(inputEe)}%` : ""}`;
+  const s = record.stereo;
+  const racemicClaim = s.form === "racemate" || s.ee !== void 0 && s.ee <= 2 * config.racemateRatioTolerance;
+  if (racemicClaim) {
+    add("racemate-from-enriched-input", s.form === "racemate" ? "stereo.form" : "stereo.ee", {
+      claim: s.form === "racemate" ? "racemate" : `ee ${fmt(s.ee)}%`,
+      unit: unitWords2,
+      input: who,
+      why: source.why,
+      expected
+    });
+  }
+  const oneSource = new Set(carried.map((u) => u.input)).size === 1 && enriched.length === 1;
+  if (!racemicClaim && oneSource && !(control !== void 0 && ENRICHING.includes(control))) {
+    const productEe = s.ee !== void 0 ? { value: s.ee, text: `ee ${fmt(s.ee)}%`, source: "stereo.ee" } : s.form === "single-enantiomer" ? {
+      value: config.singleEnantiomerMinEe,
+      text: `single-enantiomer`,
+      source: `at least the registry's ${fmt(config.singleEnantiomerMinEe)}% threshold`
+    } : null;
+    if (productEe !== null && inputEe === null && source.form === "enantioenriched")
+      add("ee-input-unknown", "stereo.ee", { claim: productEe.text, unit: unitWords2, input: who }, "note");
+    else if (productEe !== null && inputEe !== null && productEe.value > inputEe + config.eeTolerance)
+      add(
+        "ee-above-input",
+        s.ee !== void 0 ? "stereo.ee" : "stereo.form",
+        {
+          productEe: productEe.text,
+          source: productEe.source,
+          unit: unitWords2,
+          input: who,
+          inputEe: fmt(inputEe),
+          control: control ?? "not given"
+        },
+        "warning"
+      );
+  }
+  return {
+    outcome: expected,
+    reason: `the configuration of ${who} reaches the product with no bond at ${unitWords2} made or broken`
+  };
+}
+var CHIRAL_CONTROL, ENRICHING;
+var init_origin_enantiomers = __esm({
+  "src/checks/origin-enantiomers.ts"() {
+    "use strict";
+    init_origin_inputs();
+    init_origin_carried();
+    init_words();
+    CHIRAL_CONTROL = [
+      "chiral-catalyst",
+      "chiral-reagent",
+      "chiral-auxiliary",
+      "biocatalyst"
     ];
-    CONFLICT_WORDS = {
-      "already-registered": "the same structure registered again under the same form",
-      "same-structure-different-form": "the same structure under another form",
-      "enantiomer-rotation-same-sign": "enantiomers with rotations of the same sign",
-      "enantiomer-form-conflict": "enantiomers of different kinds of form"
+    ENRICHING = ["resolution", "chiral-separation", "enrichment"];
+  }
+});
+
+// src/checks/origin-messages.ts
+var originMessages;
+var init_origin_messages = __esm({
+  "src/checks/origin-messages.ts"() {
+    "use strict";
+    originMessages = {
+      "input-not-found": "origin.from names '{entry}', which is not a registered id{suggestion} and not a SMILES stereogate can read either ({detail}). Register the input first, correct the id, or give the input as SMILES.",
+      "input-unreadable": "origin.from entry {position}, '{entry}', is neither a registered id nor a readable SMILES: {detail}. Correct it, or give the input's registered id.",
+      "input-without-structure": "origin.from names {entry}, whose structure cannot be read ({detail}); the origin cannot be judged until it can. Fix {entry}'s structure.",
+      "origin-cycle": "The origins form a cycle: {cycle} (each made from the next). A compound cannot be made from itself, even through intermediates: one of these origin.from lists names the wrong id.",
+      "no-source-of-bias": "Declared {claim}, but nothing in its origin can make one enantiomer in excess: {inputs}, and origin.control is none. With nothing chiral present, the pathways to the two enantiomers are mirror images: their transition states are enantiomeric, equal in energy, so both enantiomers form at the same rate. Expected: {expected}. Declare racemate (with rac- descriptors), or name the source of the bias in origin.control.",
+      "desymmetrised-without-control": "Declared {claim}, but it is made from {inputs} by a step that tells apart two mirror-image (enantiotopic) groups or faces, and origin.control is none. Enantiotopic groups react at equal rates unless something chiral (an enzyme, a chiral catalyst or reagent) tells them apart, so each enantiomer forms as often as the other. Expected: {expected}. Declare racemate, or name the enzyme or chiral catalyst in origin.control.",
+      "control-not-stated": "Declared {claim}; the inputs hold no source of enantiomeric bias ({inputs}), so the claim rests on what else was present, and origin.control is {control}. Not checked: state origin.control (none, chiral-catalyst, biocatalyst, resolution, …).",
+      "input-stereo-unknown": "Not checked whether the origin can give {claim}: {why}. Register the input with its stereo form, or draw its configuration (a racemic SMILES can say so with an AND group, e.g. |&1:1|).",
+      "carried-enantiomer": "{units} {verb} carried from {input} with no bond at {pronoun} made or broken, but drawn with the mirror-image arrangement of {input}'s (compared through the mapped neighbours, not the CIP labels, which can change when priorities change): the drawing starts from the enantiomer of {input}. A drawn enantiomer is the usual registration slip: correct the drawing, or the input.",
+      "carried-epimer": "{inverted} {verb} carried from {input} with no bond at {pronoun} made or broken, but drawn with the opposite spatial arrangement, while {kept} keep{keepS} the arrangement of {input}: the drawing is an epimer (diastereomer) of what {input} gives. Correct the drawing at {inverted}, or the input.",
+      "carried-relative-differs": "{input} is racemic, so either enantiomer may be drawn, but its relative configuration survives a reaction that makes or breaks no bond at its stereo units: {inverted} and {kept} come from {input} unchanged, yet only {inverted} {verb} drawn inverted. The drawing is a diastereomer of what {input} gives; correct it.",
+      "carried-unit-open": "{unit} comes from {input} with no bond at it changed, but {side} leaves its configuration undefined, so the two cannot be compared. Draw the configuration on both.",
+      "racemate-from-enriched-input": "Declared {claim}, but {unit} comes from {input} ({why}) with no bond at it made or broken, so it keeps its configuration and the product carries the same excess of one enantiomer. Expected: {expected}. If that centre racemised (an enolisable α-centre can), record the evidence and accept this finding; otherwise declare the form the carried centre gives.",
+      "ee-above-input": "Declared {productEe} ({source}), but the only source of enantiomeric excess is {unit} carried from {input}, ee {inputEe}%: a reaction that makes or breaks no bond at that centre cannot raise its ee, and origin.control is {control}. If the product was purified to higher ee (recrystallisation, chiral chromatography), set origin.control to enrichment or chiral-separation; otherwise correct the ee.",
+      "ee-input-unknown": "Declared {claim}; its enantiomeric excess comes from {unit} carried from {input}, which states no ee, so whether the product's purity exceeds the input's is not checked. Record the ee of {input}.",
+      "mixture-component-differs": "Component {component} of the diastereomer mixture shows {unit} inverted, yet {unit} comes from {input} with no bond at it changed: every diastereomer made from {input} keeps that configuration. The components should differ only at the units the reaction formed ({formed}). Correct the component.",
+      "diastereomers-one-to-one": "The diastereomers are reported at {ratio}. They differ at {formed}, formed next to {carried} carried from {input}: the transition states leading to them are diastereomeric, differ in energy, and give unequal amounts (Cram's rule is the textbook case). Was {ratio} measured (NMR integration, HPLC)? Record the measured ratio.",
+      "diastereomer-ratio-not-stated": "One diastereomer is declared, from a reaction that forms {formed} while {carried} comes from {input}. Diastereomers form in unequal amounts, so one major product is what the origin predicts; the diastereomer ratio of the crude product or the evidence of purity (NMR, HPLC) is worth stating in stereo.ratio or stereo.evidence.",
+      "units-unmapped": "Not checked at {units}: {reason}. The claims about {pronoun} are not judged against the origin."
     };
-    ENANTIOPURE = ["single-enantiomer", "enantioenriched"];
-    consistentWithRegistry = {
-      id: "consistent-with-registry",
+  }
+});
+
+// src/checks/origin-supports-claim.ts
+function inputProblems(ctx, from, add) {
+  const inputs = [];
+  from.forEach((text, index) => {
+    const r = resolveInput(text, index, ctx.registry);
+    const field2 = `origin.from.${index}`;
+    if (r.ok) inputs.push(r.input);
+    else if (r.problem === "no-structure")
+      add("input-without-structure", field2, { entry: text, detail: r.detail }, "note");
+    else if (r.problem === "not-found") {
+      const ids = ctx.registry.entries.flatMap((e) => e.id === null ? [] : [e.id]);
+      const guess = ids.length <= 5e4 ? closestWord(text.trim(), ids) : null;
+      add("input-not-found", field2, {
+        entry: text,
+        suggestion: guess ? ` (did you mean ${guess}?)` : "",
+        detail: r.detail
+      });
+    } else add("input-unreadable", field2, { entry: text, position: index + 1, detail: r.detail });
+  });
+  return inputs;
+}
+function unmappedNote(facts, prov, add) {
+  const unmapped = prov.units.filter((u) => u.fate === "unmapped");
+  if (unmapped.length === 0) return;
+  const bound = unmapped.some((u) => u.reason === "bound");
+  add(
+    "units-unmapped",
+    "origin.from",
+    {
+      units: names(facts, unmapped),
+      pronoun: unmapped.length > 1 ? "them" : "it",
+      reason: bound ? "the mapping of the inputs onto the structure stopped at its bound (inputs too large or too symmetric to map in time), so no unit is traced" : "no input in origin.from contains these atoms — is an input missing?"
+    },
+    "note"
+  );
+}
+function run9(ctx) {
+  const record = ctx.record;
+  const origin = record?.origin;
+  if (!record || !origin) return { findings: [], notApplicable: true };
+  const out = [];
+  const add = makeAdd(out);
+  const inputs = inputProblems(ctx, origin.from, add);
+  if (record.id && entryById(ctx.registry, record.id)) {
+    const cycle = originCycle(record.id, ctx.registry);
+    if (cycle) add("origin-cycle", "origin.from", { cycle: cycle.join(" ← ") });
+  }
+  const main = ctx.main;
+  if (out.length > 0 || !main.structure || !main.facts)
+    return out.length > 0 ? { findings: out } : { findings: [], notApplicable: true };
+  const prov = traceProvenance(
+    main.structure,
+    inputs.map((i) => i.structure)
+  );
+  unmappedNote(main.facts, prov, add);
+  const expected = enantiomericPart(record, main.facts, prov, inputs, ctx.config, add);
+  const { compared } = carriedConfigurations(main.facts, prov, inputs, add, null);
+  const mixture = record.stereo.form === "diastereomer-mixture";
+  const comps = mixture ? ctx.components.map(
+    (c) => c.structure ? traceProvenance(
+      c.structure,
+      inputs.map((i) => i.structure)
+    ) : null
+  ) : [];
+  const dia = diastereomers(
+    record,
+    main.facts,
+    prov,
+    inputs,
+    comps,
+    ctx.components.map((c) => c.facts),
+    add
+  );
+  if (out.length > 0) return { findings: out };
+  const declared = [record.stereo.form, record.stereo.descriptors].filter(Boolean).join(" ");
+  const outcome = [expected.outcome, dia, ...compared].filter(Boolean).join("; ");
+  return { findings: [], passed: `expected ${outcome} — ${expected.reason}; declared ${declared}` };
+}
+var ORIGIN_CHECK_ID, originSupportsClaim;
+var init_origin_supports_claim = __esm({
+  "src/checks/origin-supports-claim.ts"() {
+    "use strict";
+    init_provenance();
+    init_closest();
+    init_origin_carried();
+    init_origin_enantiomers();
+    init_origin_inputs();
+    init_origin_messages();
+    ORIGIN_CHECK_ID = "origin-supports-claim";
+    originSupportsClaim = {
+      id: ORIGIN_CHECK_ID,
       defaultSeverity: "error",
-      summary: "A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.",
-      explanation: "Records of the same constitution are related by the engine (identical, enantiomers, diastereomers). An identical structure is the same compound: register a batch, not a new number; under a different form one record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). Only records under review are checked, each against the other records in the checkout; a racemic drawing (AND group) is compared only with racemic drawings, a relative one (OR group) only with relative ones. A conflict between two records (a duplicate, the same structure under another form, enantiomers of the same rotation sign or of different kinds of form) is reported once: on the record under review when the other is not under review (a pull request), and, when both are (a full audit), on the one registered later — the higher registry id, a record without an id counting as newest; the earlier record gets a note naming it (common practice, no source).",
-      messages: messages8,
-      run: run8
+      summary: "The stereo claim agrees with how the compound was made (origin): racemic from achiral or racemic inputs without chiral control, carried stereo units unchanged, diastereomers in unequal amounts.",
+      explanation: "A reaction that can form either enantiomer of a product through mirror-image pathways, with nothing chiral present, runs both at the same rate: the two transition states are enantiomeric and equal in energy, so the product is a racemate; enantiotopic groups of a meso or other achiral input likewise react at equal rates. A new stereo unit formed in a molecule that already has a defined one gives diastereomers, whose transition states differ in energy, so they form in unequal amounts (e.g. Cram 1952 on additions to α-chiral aldehydes, from memory). A stereo unit at which no bond is made or broken keeps its spatial arrangement; it is compared through the mapped neighbours, not the CIP label, which can change when priorities change (IUPAC 2013 P-92.1). Inputs are placed on the structure by their largest common connected substructure (elements and bond orders kept), within a time bound; a unit that cannot be traced is left unchecked with a note.",
+      messages: originMessages,
+      run: run9
     };
   }
 });
@@ -47464,7 +50206,7 @@ function reviewWaivers(record, findings, knownChecks) {
   });
   return out;
 }
-function run9(ctx) {
+function run10(ctx) {
   const waivers = ctx.record?.waivers ?? [];
   if (waivers.length === 0) return { findings: [], notApplicable: true };
   const findings = reviewWaivers(ctx.record, ctx.findings ?? []);
@@ -47492,7 +50234,7 @@ var init_waivers = __esm({
       summary: "Waivers give a reason and an approver, and each accepts a finding of this record.",
       explanation: "A waiver is the responsible chemist accepting a finding for this record; it is only as good as its reason and the name of who decided (common practice, no source: review decisions are recorded with their reason and approver). A waiver that accepts nothing is removed, so that it cannot hide a later, different problem.",
       messages: messages9,
-      run: run9
+      run: run10
     };
   }
 });
@@ -47516,6 +50258,7 @@ var init_checks = __esm({
     init_rotation_consistent();
     init_nitrogen_inversion();
     init_consistent_with_registry();
+    init_origin_supports_claim();
     init_waivers();
     init_waivers();
     CHECKS = [
@@ -47527,10 +50270,14 @@ var init_checks = __esm({
       rotationConsistent,
       nitrogenInversion,
       consistentWithRegistry,
+      originSupportsClaim,
       waiverReview
     ];
   }
 });
+
+// src/audit/run.ts
+init_closest();
 
 // src/registry/files.ts
 import {
@@ -47553,11 +50300,11 @@ var import_yaml2 = __toESM(require_dist(), 1);
 
 // src/registry/positions.ts
 var import_yaml = __toESM(require_dist(), 1);
-function lineOf(positions, path) {
+function lineOf(positions2, path) {
   if (path === null) return null;
   let p = path;
   for (; ; ) {
-    const pos = positions.get(p);
+    const pos = positions2.get(p);
     if (pos) return pos.line;
     if (p === "") return null;
     const cut = p.lastIndexOf(".");
@@ -47567,6 +50314,7 @@ function lineOf(positions, path) {
 
 // src/registry/schema.ts
 var import_ajv = __toESM(require_ajv(), 1);
+init_closest();
 var AJV_OPTIONS = {
   allErrors: true,
   strict: true,
@@ -47575,6 +50323,11 @@ var AJV_OPTIONS = {
   verbose: true
 };
 var ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
+
+// src/registry/parse.ts
+var PLAIN_TAGS = new Set(
+  ["str", "int", "float", "bool", "null", "map", "seq"].map((t) => `tag:yaml.org,2002:${t}`)
+);
 
 // src/audit/caution.ts
 var CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
@@ -47587,35 +50340,21 @@ var DEFAULT_CONFIG = Object.freeze({
   racemateRatioTolerance: 2,
   eeTolerance: 1,
   singleEnantiomerMinEe: 98,
-  zeroRotationTolerance: 1
+  zeroRotationTolerance: 1,
+  axisOrthoMin: 3
 });
 var DEFAULT_SOURCES = Object.freeze({
   recordDirs: "the record format of this project (records live under compounds/ unless configured)",
-  severities: "none overridden: every check keeps the default severity its module declares",
+  severities: "none overridden: every check keeps the default severity its module declares. A level given for a check sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given for 'check-id/message-id' sets that one message's level, notes included",
   ratioSumTolerance: "common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts",
   racemateRatioTolerance: "common practice, no source: a racemate measured by chiral chromatography typically reads within about 2 points of 50:50 (integration error); more than that suggests an enantioenriched sample",
   eeTolerance: "common practice, no source: ee and ratios are reported rounded to about 1 percent",
   singleEnantiomerMinEe: "common practice, no source: many registries call a sample a single enantiomer from about 98 % ee (99:1 er); set your own SOP value",
-  zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))"
+  zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))",
+  axisOrthoMin: "common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies"
 });
 
 // src/audit/engine.ts
-function heavyAtomCandidates(formula) {
-  const bases = [];
-  const sign = formula.endsWith("+") || formula.endsWith("-");
-  if (!sign) bases.push(formula);
-  else {
-    const body = formula.slice(0, -1);
-    const digits = /\d*$/.exec(body)[0];
-    const prefix = body.slice(0, body.length - digits.length);
-    const count2 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
-    for (let i = 0; i <= digits.length; i++) {
-      const own2 = digits.slice(0, i);
-      if (count2(own2) && count2(digits.slice(i))) bases.push(prefix + own2);
-    }
-  }
-  return [...new Set(bases.map((b) => b.replace(/H(?![a-z])\d*/g, "")))];
-}
 function heavyFormula(elements, wildcards) {
   const counts = /* @__PURE__ */ new Map();
   for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
@@ -47631,13 +50370,13 @@ function heavyFormula(elements, wildcards) {
   if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
   return out;
 }
-async function defaultEngine() {
+async function defaultEngine(settings = {}) {
   const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
   const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
   const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
   return {
     readStructure: (text, options) => chem.readStructure(text, options),
-    describe: (s) => chem.describe(s),
+    describe: settings.axisOrthoMin === void 0 ? (s) => chem.describe(s) : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
     relate: (a, b) => chem.relate(a, b),
     formula: (s) => graph.molecularFormula(s),
     smilesHeavyAtoms: (smiles) => {
@@ -47662,7 +50401,6 @@ async function defaultEngine() {
 }
 
 // src/audit/findings.ts
-var RANK = { note: 0, warning: 1, error: 2 };
 var SCHEMA_CHECK_ID = "record-schema";
 var INTERNAL_ERROR_ID = "internal-error";
 function fillTemplate(template, data) {
@@ -47672,13 +50410,17 @@ function fillTemplate(template, data) {
     return v === null ? "none" : String(v);
   });
 }
-function resolveSeverity(base, own2, configured) {
-  if (configured === void 0) return own2 ?? base;
-  if (own2 === void 0) return configured;
-  return RANK[own2] <= RANK[configured] ? own2 : configured;
+function resolveSeverity(base, own2, configured, configuredForMessage) {
+  if (configuredForMessage !== void 0) return configuredForMessage;
+  const level2 = own2 ?? base;
+  if (configured === void 0 || level2 === "note") return level2;
+  return configured;
 }
-function configuredSeverity(config, checkId) {
-  return Object.prototype.hasOwnProperty.call(config.severities, checkId) ? config.severities[checkId] : void 0;
+function messageKey(checkId, messageId) {
+  return `${checkId}/${messageId}`;
+}
+function configuredSeverity(config, key3) {
+  return Object.prototype.hasOwnProperty.call(config.severities, key3) ? config.severities[key3] : void 0;
 }
 function lineFor(loaded, field2) {
   if (field2 !== null) {
@@ -47687,8 +50429,12 @@ function lineFor(loaded, field2) {
   }
   return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
 }
+function messageEnabled(config, checkId, messageId) {
+  return configuredSeverity(config, messageKey(checkId, messageId)) !== "off";
+}
 function toFinding(check, raw2, loaded, config) {
   const configured = configuredSeverity(config, check.id);
+  const forMessage = configuredSeverity(config, messageKey(check.id, raw2.messageId));
   const template = check.messages[raw2.messageId];
   const message = template !== void 0 ? fillTemplate(template, raw2.data ?? {}) : `${raw2.messageId}${Object.keys(raw2.data ?? {}).length ? ` (${JSON.stringify(raw2.data)})` : ""}`;
   return {
@@ -47697,13 +50443,15 @@ function toFinding(check, raw2, loaded, config) {
     severity: resolveSeverity(
       check.defaultSeverity,
       raw2.severity,
-      configured === "off" ? void 0 : configured
+      configured === "off" ? void 0 : configured,
+      forMessage === "off" ? void 0 : forMessage
     ),
     message,
     data: raw2.data ?? {},
     line: lineFor(loaded, raw2.field ?? null),
     field: raw2.field ?? null,
-    waived: null
+    waived: null,
+    ...raw2.fix === void 0 ? {} : { fix: raw2.fix }
   };
 }
 function nonEmpty(s) {
@@ -47730,6 +50478,20 @@ function internalError(check, error, loaded) {
     waived: null
   };
 }
+var TIME_LIMIT_ID = "record-time-limit";
+function budgetFinding(loaded, kind, limit) {
+  const what = kind === "time" ? `took longer than the ${limit / 1e3} s time limit` : `needed more than the ${limit} MB memory bound`;
+  return {
+    check: TIME_LIMIT_ID,
+    messageId: kind === "time" ? "time-limit-exceeded" : "memory-bound-exceeded",
+    severity: "error",
+    message: `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, leave out repeated salt or solvent parts).`,
+    data: { kind, limit },
+    line: loaded.origin.kind === "bulk" ? loaded.origin.line : lineOf(loaded.positions, "structure"),
+    field: null,
+    waived: null
+  };
+}
 function schemaFindings(loaded, config) {
   const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
   if (configured === "off") return [];
@@ -47745,7 +50507,46 @@ function schemaFindings(loaded, config) {
   }));
 }
 
+// src/audit/run.ts
+init_budget();
+
+// src/registry/keys.ts
+function drawingKind(f) {
+  const m = f.enhanced.meaning;
+  if (m === "racemic" || m === "mixture") return "racemic";
+  if (m === "relative") return "relative";
+  return "as-drawn";
+}
+var MIRRORED = { R: "S", S: "R", M: "P", P: "M" };
+function recordKeys(f, text) {
+  const kind = drawingKind(f);
+  const base = { constitution: f.constitutionKey, kind, chiral: f.chiral };
+  if (f.units.some((u) => !u.defined)) return { ...base, stereo: null, mirror: null, exact: false };
+  let exact = true;
+  const seen = /* @__PURE__ */ new Set();
+  const own2 = [];
+  const mirrored2 = [];
+  for (const u of f.units) {
+    if (seen.has(u.classKey) || u.label === null || u.label === "e" || u.label === "z") exact = false;
+    seen.add(u.classKey);
+    const label = u.label === null ? "?" : u.label === "e" || u.label === "z" ? "ez" : u.label;
+    own2.push(`${u.classKey}=${label}`);
+    mirrored2.push(`${u.classKey}=${(u.label && MIRRORED[u.label]) ?? label}`);
+  }
+  own2.sort();
+  mirrored2.sort();
+  const keys = {
+    ...base,
+    stereo: `${kind}|${own2.join(";")}`,
+    mirror: `${kind}|${mirrored2.join(";")}`,
+    exact
+  };
+  if (!exact && text) keys.text = text;
+  return keys;
+}
+
 // src/audit/structures.ts
+init_budget();
 var NOTHING = Object.freeze({
   structure: null,
   facts: null,
@@ -47766,6 +50567,7 @@ function readOnly(source, engine) {
   try {
     read = engine.readStructure(source.text, { format: source.format });
   } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
     const what = source.format === "smiles" ? "SMILES" : "molfile";
     return {
       structure: null,
@@ -47790,6 +50592,7 @@ function describeRead(read, engine) {
   try {
     return { structure: read.structure, facts: engine.describe(read.structure), error: null };
   } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
     return {
       structure: read.structure,
       facts: null,
@@ -47868,6 +50671,192 @@ var StructureCache = class {
   }
 };
 
+// src/audit/index-row.ts
+var nonEmpty2 = (s) => typeof s === "string" && s.trim() !== "";
+function indexRow(loaded, main, seq) {
+  const record = loaded.record;
+  let keys = null;
+  if (record !== null && main.facts) {
+    const src = sourcesOf(loaded).main;
+    keys = recordKeys(main.facts, src && src.text !== null ? { format: src.format, text: src.text } : null);
+  }
+  const waiver = record?.waivers?.find(
+    (w) => w.check === "consistent-with-registry" && nonEmpty2(w.reason) && nonEmpty2(w.approved_by)
+  );
+  return {
+    seq,
+    id: loaded.id,
+    file: loaded.file,
+    name: record?.name ?? null,
+    form: record?.stereo.form ?? "unknown",
+    rotation: record?.stereo.rotation ?? null,
+    keys,
+    lines: {
+      id: lineFor(loaded, "id"),
+      structure: lineFor(loaded, "structure"),
+      rotation: lineFor(loaded, "stereo.rotation.value")
+    },
+    waiver: waiver ? { reason: waiver.reason.trim(), approvedBy: waiver.approved_by.trim() } : null
+  };
+}
+
+// src/audit/registry-phase.ts
+init_consistent_with_registry();
+
+// src/registry/key-index.ts
+var RegistryIndex = class {
+  constructor(confirm = null) {
+    this.confirm = confirm;
+  }
+  confirm;
+  byKey = /* @__PURE__ */ new Map();
+  /** Rows filed (records with a stereo key). */
+  size = 0;
+  add(row) {
+    const k = row.keys;
+    if (k === null || k.stereo === null) return;
+    const key3 = `${k.constitution}#${k.stereo}`;
+    const list = this.byKey.get(key3);
+    if (list) list.push(row);
+    else this.byKey.set(key3, [row]);
+    this.size++;
+  }
+  /** Removes a row added before (a record file replaced by its new version). */
+  remove(row) {
+    const k = row.keys;
+    if (k === null || k.stereo === null) return;
+    const key3 = `${k.constitution}#${k.stereo}`;
+    const list = this.byKey.get(key3);
+    const at = list ? list.indexOf(row) : -1;
+    if (at < 0) return;
+    list.splice(at, 1);
+    if (list.length === 0) this.byKey.delete(key3);
+    this.size--;
+  }
+  /** Records identical to `me` or its enantiomers, in the order they were added; `me` itself left out. */
+  matches(me) {
+    const k = me.keys;
+    if (k === null || k.stereo === null || k.mirror === null) return [];
+    const out = [];
+    const consider = (key3, expected) => {
+      for (const other of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
+        if (other === me || other.file === me.file && other.seq === me.seq) continue;
+        const relation = other.keys && this.relationOf(k, other.keys, expected);
+        if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
+      }
+    };
+    consider(k.stereo, "identical");
+    if (k.mirror !== k.stereo) consider(k.mirror, "enantiomers");
+    out.sort((a, b) => a.other.seq - b.other.seq);
+    return out;
+  }
+  relationOf(a, b, expected) {
+    if (a.exact && b.exact) return expected;
+    if (!a.text || !b.text || !this.confirm) return null;
+    const r = this.confirm(a, b);
+    return r === "identical" || r === "enantiomers" ? r : null;
+  }
+};
+
+// src/audit/registry-phase.ts
+var CHECK = consistentWithRegistry;
+var RegistryPhase = class {
+  constructor(options) {
+    this.options = options;
+    this.index = new RegistryIndex(options.confirm);
+    this.enabled = configuredSeverity(options.config, CHECK.id) !== "off";
+  }
+  options;
+  index;
+  pairs = [];
+  firstWithId = /* @__PURE__ */ new Map();
+  records = 0;
+  enabled;
+  underReview = /* @__PURE__ */ new Set();
+  /** Review mode: a record of the registry, not under review (added before any `review`). */
+  file(row) {
+    this.index.add(row);
+  }
+  /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
+  fileUnderReview(row) {
+    this.underReview.add(row);
+    this.index.add(row);
+  }
+  /** Full mode: the next record in the audit's order. Review mode: a record under review (filed before). */
+  next(row) {
+    this.records++;
+    const findings = [];
+    if (this.options.duplicateIds && row.id !== null) {
+      const first = this.firstWithId.get(row.id);
+      if (first === void 0) this.firstWithId.set(row.id, row.file);
+      else if (configuredSeverity(this.options.config, SCHEMA_CHECK_ID) !== "off")
+        findings.push(duplicateId(row, first, this.options.config));
+    }
+    if (!this.enabled || row.keys === null) {
+      if (this.options.mode === "full") this.index.add(row);
+      return { findings, passed: null };
+    }
+    const full = this.options.mode === "full";
+    const matches = this.index.matches(row);
+    const c = compareWithRegistry(
+      row,
+      matches,
+      this.options.mode,
+      this.options.config,
+      (r) => this.underReview.has(r)
+    );
+    if (full) this.index.add(row);
+    this.pairs.push(...c.pairs);
+    for (const raw2 of c.findings)
+      if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
+        findings.push(rowFinding(raw2, row, this.options.config));
+    const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
+    return { findings, passed };
+  }
+  summary() {
+    const what = this.options.mode === "full" ? "every record with each record before it" : "each record under review with the whole registry";
+    return {
+      status: this.enabled ? "run" : "not-run",
+      reason: this.enabled ? `compared ${what} through an index of ${this.index.size} records' keys` : `${CHECK.id} is off in the configuration`,
+      records: this.records,
+      pairs: this.pairs
+    };
+  }
+};
+function rowFinding(raw2, row, config) {
+  const lines = {
+    id: row.lines.id,
+    structure: row.lines.structure,
+    "stereo.rotation.value": row.lines.rotation ?? row.lines.structure
+  };
+  const positions2 = {
+    get: (path) => lines[path] != null ? { line: lines[path], column: 1 } : void 0
+  };
+  const loaded = {
+    file: row.file,
+    id: row.id,
+    record: null,
+    positions: positions2,
+    problems: [],
+    origin: { kind: "file" }
+  };
+  return { ...toFinding(CHECK, raw2, loaded, config), waived: row.waiver };
+}
+function duplicateId(row, first, config) {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  const message = `id: '${row.id}' is also used by ${first}; every record needs its own id`;
+  return {
+    check: SCHEMA_CHECK_ID,
+    messageId: "duplicate-id",
+    severity: configured === "off" || configured === void 0 ? "error" : configured,
+    message,
+    data: { path: "id", problem: message },
+    line: row.lines.id,
+    field: "id",
+    waived: null
+  };
+}
+
 // package.json
 var package_default = {
   name: "stereogate",
@@ -47893,11 +50882,13 @@ var package_default = {
   },
   dependencies: {
     "@actions/core": "^3.0.1",
+    "@actions/http-client": "^4.0.1",
     ajv: "^8.20.0",
     "cli-progress": "^3.12.0",
     "csv-parse": "^7.0.3",
     openchemlib: "^9.25.0",
     tsx: "^4.23.15",
+    undici: "^6.29.1",
     yaml: "^2.9.1"
   },
   devDependencies: {
@@ -47909,6 +50900,8 @@ var package_default = {
     esbuild: "^0.28.2",
     eslint: "^9.39.5",
     "fast-check": "^4.11.0",
+    micromark: "^4.0.3",
+    "micromark-extension-gfm": "^3.0.0",
     nock: "^14.0.9",
     "playwright-core": "^1.65.1",
     prettier: "^3.10.1",
@@ -47922,113 +50915,120 @@ var package_default = {
 var VERSION = package_default.version;
 
 // src/audit/view.ts
-function formulaPart(key3) {
-  const cut = key3.lastIndexOf("/");
-  return cut < 0 ? key3 : key3.slice(0, cut);
+function entryOf(loaded, cache2, underReview) {
+  const record = loaded.record;
+  if (record === null) return null;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    record,
+    get main() {
+      return cache2.main(loaded);
+    },
+    underReview
+  };
 }
 function buildRegistryView(records, cache2, underReview) {
   const entries = [];
-  const sourceOf = /* @__PURE__ */ new Map();
   for (const loaded of records) {
-    const record = loaded.record;
-    if (record === null) continue;
-    const entry = {
-      id: loaded.id,
-      file: loaded.file,
-      record,
-      get main() {
-        return cache2.main(loaded);
-      },
-      underReview: underReview(loaded)
-    };
-    entries.push(entry);
-    sourceOf.set(entry, loaded);
+    const e = entryOf(loaded, cache2, underReview(loaded));
+    if (e) entries.push(e);
   }
-  const engine = cache2.engine;
-  const formula = engine.formula?.bind(engine);
-  const quick = formula ? engine.smilesHeavyAtoms?.bind(engine) : void 0;
-  const formulaOf = /* @__PURE__ */ new Map();
-  const fullFormula = (e) => {
-    if (formulaOf.has(e)) return formulaOf.get(e);
-    let f;
-    const read = cache2.read(sourceOf.get(e));
-    if (read.structure) {
-      try {
-        f = formula(read.structure);
-      } catch {
-        f = e.main.facts?.constitutionKey === void 0 ? void 0 : formulaPart(e.main.facts.constitutionKey);
-      }
-    }
-    formulaOf.set(e, f);
-    return f;
-  };
-  const indexKeys = (e) => {
-    if (!formula) {
-      const k = e.main.facts?.constitutionKey;
-      return k === void 0 ? [] : [k];
-    }
-    if (quick) {
-      const main = sourcesOf(sourceOf.get(e)).main;
-      const fromSyntax = main?.format === "smiles" && main.text !== null ? quick(main.text) : null;
-      if (fromSyntax !== null) return [fromSyntax];
-    }
-    const f = fullFormula(e);
-    return f === void 0 ? [] : quick ? heavyAtomCandidates(f) : [f];
-  };
-  const lookupKeys = (key3) => !formula ? [key3] : !quick ? [formulaPart(key3)] : heavyAtomCandidates(formulaPart(key3));
-  let index = null;
-  const order = /* @__PURE__ */ new Map();
-  return {
-    entries,
-    withConstitution(key3) {
-      if (entries.length === 1) return entries[0].main.facts?.constitutionKey === key3 ? entries : [];
-      if (index === null) {
-        index = /* @__PURE__ */ new Map();
-        entries.forEach((e, i) => {
-          order.set(e, i);
-          for (const k of indexKeys(e)) {
-            const list = index.get(k);
-            if (list) list.push(e);
-            else index.set(k, [e]);
-          }
-        });
-      }
-      const keys = lookupKeys(key3);
-      let hits = index.get(keys[0]) ?? [];
-      if (keys.length > 1) {
-        const all = new Set(keys.flatMap((k) => index.get(k) ?? []));
-        hits = [...all].sort((a, b) => order.get(a) - order.get(b));
-      }
-      if (!formula) return hits;
-      const wanted = formulaPart(key3);
-      return hits.filter((e) => fullFormula(e) === wanted && e.main.facts?.constitutionKey === key3);
-    }
-  };
+  return { entries };
 }
 
 // src/audit/run.ts
+var RECORD_BUDGET = Object.freeze({ timeMs: 2e4, memoryMb: 1024 });
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache2 = new StructureCache(options.engine);
-  const audited = new Set(records);
-  const registryRecords = options.registry ?? records;
-  const registry = buildRegistryView(registryRecords, cache2, (r) => audited.has(r));
   const engineApi = { relate: options.engine.relate.bind(options.engine) };
-  const results = records.map(
-    (loaded) => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
-  );
-  return {
+  const budget = options.budget ?? RECORD_BUDGET;
+  const audited = new Set(records);
+  const registry = options.view ?? buildRegistryView(options.registry ?? records, cache2, (r) => audited.has(r));
+  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
+  const results = records.map((loaded) => {
+    try {
+      return withBudget(
+        budget,
+        "the audit of this record",
+        () => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
+      );
+    } catch (e) {
+      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
+      return {
+        id: loaded.id,
+        file: loaded.file,
+        computed: null,
+        findings: [internalError({ id: "audit" }, e, loaded)],
+        passed: [],
+        declared: { form: null, descriptors: null }
+      };
+    }
+  });
+  const result2 = {
     tool: { name: "stereogate", version: VERSION },
     records: results,
     summary: summarize(results),
     caution: CAUTION
   };
+  if (options.registryPhase !== false && !options.registryIncomplete && options.checks.some((c) => c.scope === "registry")) {
+    const review = options.registry !== void 0;
+    const phase = new RegistryPhase({
+      mode: review ? "review" : "full",
+      config,
+      confirm: confirmWith(options.engine),
+      duplicateIds: false
+    });
+    const mainOf = (r) => {
+      try {
+        return withBudget(budget, "the structure of a registry record", () => cache2.main(r));
+      } catch {
+        return { structure: null, facts: null, error: null };
+      }
+    };
+    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
+    if (review) {
+      const audited2 = new Set(records);
+      let seq = records.length;
+      for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
+      for (const row of rows) phase.fileUnderReview(row);
+    }
+    rows.forEach((row, i) => addPhaseResult(results[i], phase.next(row)));
+    result2.summary = summarize(results);
+    result2.registry = phase.summary();
+  }
+  return result2;
+}
+function confirmWith(engine) {
+  const read = (k) => k.text ? readOnly({ field: "structure", format: k.text.format, text: k.text.text }, engine).structure : null;
+  return (a, b) => {
+    const sa = read(a);
+    const sb = read(b);
+    if (!sa || !sb) return null;
+    try {
+      return engine.relate(sa, sb).relation;
+    } catch {
+      return null;
+    }
+  };
+}
+function addPhaseResult(r, p) {
+  if (p.findings.length > 0) {
+    const checks = new Set(p.findings.map((f) => f.check));
+    r.findings = r.findings.filter(
+      (f) => !(f.messageId === "waiver-matches-nothing" && checks.has(String(f.data.waivedCheck)))
+    );
+    r.findings.push(...p.findings);
+  }
+  if (p.passed) r.passed.push(p.passed);
 }
 function auditOne(loaded, checks, config, cache2, registry, engine) {
   const { main, components } = cache2.all(loaded);
   const findings = schemaFindings(loaded, config);
   applyWaivers(findings, loaded);
   const passed = [];
+  const notRun = [];
   const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
   for (const check of unparsed ? [] : checks) {
     if (configuredSeverity(config, check.id) === "off") continue;
@@ -48042,20 +51042,29 @@ function auditOne(loaded, checks, config, cache2, registry, engine) {
       engine,
       findings: [...findings]
     };
+    const missing = missingInput(check, ctx);
+    if (missing !== null) {
+      notRun.push({ check: check.id, reason: missing });
+      continue;
+    }
+    if (check.scope === "registry") continue;
     let produced;
     let outcome;
     try {
       outcome = check.run(ctx);
       if (!outcome || !Array.isArray(outcome.findings))
         throw new Error("the check returned no findings list");
-      produced = outcome.findings.map((raw2) => toFinding(check, raw2, loaded, config));
+      produced = outcome.findings.filter((raw2) => messageEnabled(config, check.id, raw2.messageId)).map((raw2) => toFinding(check, raw2, loaded, config));
     } catch (e) {
+      if (e instanceof BudgetExceeded) throw e;
       findings.push(internalError(check, e, loaded));
       continue;
     }
     applyWaivers(produced, loaded);
     findings.push(...produced);
-    if (produced.length === 0 && !outcome.notApplicable) {
+    if (outcome.notRun !== void 0 && produced.length === 0) {
+      notRun.push({ check: check.id, reason: outcome.notRun });
+    } else if (produced.length === 0 && !outcome.notApplicable) {
       passed.push({ check: check.id, evidence: outcome.passed ?? "" });
     }
   }
@@ -48066,7 +51075,34 @@ function auditOne(loaded, checks, config, cache2, registry, engine) {
     computed: main.facts,
     findings,
     passed,
+    notRun,
     declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null }
+  };
+}
+function missingInput(check, ctx) {
+  const needs = check.requires ?? [];
+  if (needs.includes("structure")) {
+    if (ctx.record === null) return "the record does not follow the record schema (see record-schema)";
+    if (ctx.main.facts === null) {
+      return ctx.main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure";
+    }
+  }
+  if (needs.includes("registry") && ctx.registry.incomplete) return ctx.registry.incomplete;
+  return null;
+}
+function overBudget(loaded, e, checks) {
+  const reason = e.kind === "time" ? "the record was stopped at its time limit (see record-time-limit)" : "the record was stopped at its memory bound (see record-time-limit)";
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: null,
+    findings: [budgetFinding(loaded, e.kind, e.limit)],
+    passed: [],
+    notRun: checks.map((c) => ({ check: c.id, reason })),
+    declared: {
+      form: loaded.record?.stereo.form ?? null,
+      descriptors: loaded.record?.stereo.descriptors ?? null
+    }
   };
 }
 function summarize(records) {
@@ -48082,6 +51118,20 @@ function summarize(records) {
   return s;
 }
 
+// src/bulk/delimited.ts
+var DEFAULT_LIMITS = { maxLines: 1e4, maxChars: 16 * 2 ** 20 };
+var MAX_LINE_CHARS = 32 * 2 ** 20;
+
+// src/bulk/sources.ts
+function formatOf(path) {
+  const p = path.toLowerCase();
+  if (p.endsWith(".sdf") || p.endsWith(".sd") || p.endsWith(".sdfile")) return "sd";
+  if (p.endsWith(".csv")) return "csv";
+  if (p.endsWith(".tsv") || p.endsWith(".tab")) return "tsv";
+  return null;
+}
+var SD_RECORD_LIMITS = { maxLines: 2e5, maxChars: 64 * 2 ** 20 };
+
 // src/registry/types.ts
 var STEREO_FORMS = [
   "achiral",
@@ -48091,6 +51141,17 @@ var STEREO_FORMS = [
   "racemate",
   "single-diastereomer",
   "diastereomer-mixture",
+  "unknown"
+];
+var ORIGIN_CONTROLS = [
+  "none",
+  "chiral-catalyst",
+  "chiral-reagent",
+  "chiral-auxiliary",
+  "biocatalyst",
+  "resolution",
+  "chiral-separation",
+  "enrichment",
   "unknown"
 ];
 
@@ -48105,6 +51166,7 @@ var DEFAULT_COLUMNS = {
   ee: "ee",
   rotation: "rotation"
 };
+var DEFAULT_CONTROL_COLUMN = "origin_control";
 var BUILT_IN = {
   rac: "racemate",
   racemic: "racemate",
@@ -48138,22 +51200,82 @@ var BUILT_IN = {
   unk: "unknown",
   "?": "unknown"
 };
-function normalise(word) {
+function normalise2(word) {
   return word.trim().toLowerCase().replace(/[_\s]+/g, " ").replace(/\s*-\s*(?=[a-z])/g, " ");
 }
 function makeVocabulary(extra = {}) {
   const table = /* @__PURE__ */ new Map();
-  for (const [k, v] of Object.entries(BUILT_IN)) table.set(normalise(k), v);
-  for (const [k, v] of Object.entries(extra)) table.set(normalise(k), v);
+  for (const [k, v] of Object.entries(BUILT_IN)) table.set(normalise2(k), v);
+  for (const [k, v] of Object.entries(extra)) table.set(normalise2(k), v);
   const ours = new Set(STEREO_FORMS);
   return (word) => {
     if (word === void 0 || word.trim() === "") return { form: null, how: "empty" };
     const trimmed = word.trim();
     if (ours.has(trimmed)) return { form: trimmed, how: "ours" };
-    const hit = table.get(normalise(trimmed)) ?? table.get(normalise(trimmed.replace(/^\((.*)\)$/, "$1")));
+    const hit = table.get(normalise2(trimmed)) ?? table.get(normalise2(trimmed.replace(/^\((.*)\)$/, "$1")));
     if (hit) return { form: hit, how: "mapped" };
     return { form: null, how: "not-understood" };
   };
+}
+
+// src/bulk/origins.ts
+var MAX_ORIGIN_ENTRIES = 20;
+var MAX_CHAIN = 1e3;
+function splitOriginEntries(text) {
+  const out = [];
+  let cur = "";
+  let bars = 0;
+  for (const ch of text) {
+    if (ch === "|") bars ^= 1;
+    if ((ch === ";" || ch === ",") && bars === 0) {
+      out.push(cur);
+      cur = "";
+    } else cur += ch;
+  }
+  out.push(cur);
+  return out.map((s) => s.trim()).filter((s) => s !== "");
+}
+function originFromFields(fields, mapping) {
+  const problems = [];
+  const text = field(fields, mapping.origin)?.trim();
+  if (!text) return { origin: null, problems };
+  const from = splitOriginEntries(text);
+  if (from.length === 0) return { origin: null, problems };
+  if (from.length > MAX_ORIGIN_ENTRIES) {
+    problems.push({
+      message: `the origin column '${mapping.origin}' names ${from.length} inputs; at most ${MAX_ORIGIN_ENTRIES} are read`,
+      path: "origin.from"
+    });
+    from.length = MAX_ORIGIN_ENTRIES;
+  }
+  const origin = { from };
+  const controlColumn = mapping.control ?? DEFAULT_CONTROL_COLUMN;
+  const control = field(fields, controlColumn)?.trim().toLowerCase();
+  if (control) {
+    if (ORIGIN_CONTROLS.includes(control)) origin.control = control;
+    else
+      problems.push({
+        message: `origin control '${control}' (column '${controlColumn}') is not one of ${ORIGIN_CONTROLS.join(", ")}`,
+        path: "origin.control"
+      });
+  }
+  return { origin, problems };
+}
+function originChain(origin, inputs, load) {
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  const queue = origin.from.map((s) => s.trim());
+  while (queue.length > 0 && out.length < MAX_CHAIN) {
+    const id = queue.shift();
+    if (seen.has(id)) continue;
+    seen.add(id);
+    const item = inputs.get(id);
+    if (!item) continue;
+    const loaded = load(item);
+    out.push(loaded);
+    for (const next of loaded.record?.origin?.from ?? []) queue.push(next.trim());
+  }
+  return out;
 }
 
 // src/bulk/to-record.ts
@@ -48225,6 +51347,11 @@ function toRecord(fields, fallbackId, mapping, vocabulary, molfileText) {
       });
     else record.stereo.rotation = { value: v };
   }
+  if (mapping.origin) {
+    const o = originFromFields(fields, mapping);
+    if (o.origin) record.origin = o.origin;
+    problems.push(...o.problems);
+  }
   return { record, structureText, formWord: formWordRaw?.trim() || null, formHow: understood.how, problems };
 }
 
@@ -48273,7 +51400,26 @@ function splitSdRecord(text) {
   flush();
   return { molfile, fields, problem };
 }
-function auditItem(item, ctx) {
+var BULK_REGISTRY_NOT_COMPARED = "a bulk audit checks each record of the export on its own, not against the other records; audit the registry as record files to compare records with one another";
+function itemId(item, mapping) {
+  const col = mapping.id ?? DEFAULT_COLUMNS.id;
+  if (item.text !== void 0) {
+    const sd = splitSdRecord(item.text);
+    const title = sd.molfile.split("\n", 1)[0].trim();
+    return field(sd.fields, col)?.trim() || title || `${item.source}#${item.record}`;
+  }
+  return field(item.fields ?? {}, col)?.trim() || `${item.source}#${item.record}`;
+}
+function idShapeProblem(id, item) {
+  if (/[\r\n]/.test(id)) return `the id ${JSON.stringify(id.slice(0, 60))} holds a line break`;
+  const format = formatOf(item.source);
+  if (item.fields !== void 0 && format === "csv" && id.includes(","))
+    return `the id ${JSON.stringify(id.slice(0, 60))} holds a comma, the delimiter of this CSV file`;
+  if (item.fields !== void 0 && format === "tsv" && id.includes("	"))
+    return `the id ${JSON.stringify(id.slice(0, 60))} holds a tab, the delimiter of this TSV file`;
+  return null;
+}
+function loadItem(item, ctx) {
   let fields;
   let molfile = null;
   const problems = [];
@@ -48290,6 +51436,8 @@ function auditItem(item, ctx) {
   const fallbackId = title || `${item.source}#${item.record}`;
   const conv = toRecord(fields, fallbackId, ctx.mapping, ctx.vocabulary, molfile);
   for (const p of conv.problems) problems.push({ message: p.message, path: p.path, line: item.line });
+  const idProblem = idShapeProblem(conv.record.id, item);
+  if (idProblem !== null) problems.push({ message: idProblem, path: "id", line: item.line });
   const loaded = {
     file: item.source,
     id: conv.record.id,
@@ -48302,7 +51450,21 @@ function auditItem(item, ctx) {
       components: []
     }
   };
-  const result2 = auditRecords([loaded], { checks: ctx.checks, config: ctx.config, engine: ctx.engine }).records[0];
+  return { loaded, conv };
+}
+function auditItem(item, ctx) {
+  const { loaded, conv } = loadItem(item, ctx);
+  const origin = conv.record.origin;
+  const registry = origin && ctx.originInputs ? [loaded, ...originChain(origin, ctx.originInputs, (it) => loadItem(it, ctx).loaded)] : void 0;
+  const result2 = auditRecords([loaded], {
+    checks: ctx.checks,
+    config: ctx.config,
+    engine: ctx.engine,
+    registry,
+    registryIncomplete: BULK_REGISTRY_NOT_COMPARED,
+    budget: ctx.budget,
+    registryPhase: false
+  }).records[0];
   const out = {
     ...result2,
     computed: result2.computed ? bulkFacts(result2.computed) : null,
@@ -48336,7 +51498,7 @@ var SARIF_SCHEMA = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/s
 function level(s) {
   return s;
 }
-function rule(info) {
+function rule(info, caution) {
   const r = {
     id: info.id,
     name: info.id.replace(/(^|-)([a-z])/g, (_m, _d, c) => c.toUpperCase()),
@@ -48344,7 +51506,9 @@ function rule(info) {
     fullDescription: { text: info.explanation },
     help: { text: `${info.summary}
 
-${info.explanation}` },
+${info.explanation}${caution ? `
+
+Caution: ${caution}` : ""}` },
     defaultConfiguration: { level: level(info.defaultSeverity) }
   };
   return r;
@@ -48366,7 +51530,7 @@ function sarifLog(result2, checks, options = {}) {
       }
     }
   }
-  const rules = infos.map((x) => rule(x.info));
+  const rules = infos.map((x) => rule(x.info, result2.caution));
   const index = new Map(infos.map((x, i) => [x.info.id, i]));
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
   const results = result2.records.flatMap(
@@ -48415,10 +51579,279 @@ function sarifLog(result2, checks, options = {}) {
   };
 }
 
+// src/report/html/draw-script.ts
+var DRAW_SCRIPT = `
+  var NS = 'http://www.w3.org/2000/svg';
+  var BOND = 32; // px per median bond length
+  function svgEl(tag, attrs, text) {
+    var e = document.createElementNS(NS, tag);
+    for (var k in attrs) e.setAttribute(k, String(attrs[k]));
+    if (text !== undefined) e.textContent = text;
+    return e;
+  }
+  function median(v) { v = v.slice().sort(function (a, b) { return a - b; }); return v.length ? v[v.length >> 1] : 1; }
+  function drawPicture(p, id, showNumbers) {
+    var n = p.x.length, i, k;
+    var lens = [];
+    for (k = 0; k < p.b.length; k += 4) {
+      var dx = p.x[p.b[k]] - p.x[p.b[k + 1]], dy = p.y[p.b[k]] - p.y[p.b[k + 1]];
+      lens.push(Math.sqrt(dx * dx + dy * dy));
+    }
+    var unit = median(lens) || 100;
+    var s = BOND / unit;
+    var minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+    for (i = 0; i < n; i++) {
+      minX = Math.min(minX, p.x[i]); maxX = Math.max(maxX, p.x[i]);
+      minY = Math.min(minY, -p.y[i]); maxY = Math.max(maxY, -p.y[i]);
+    }
+    var pad = 28;
+    var X = function (j) { return (p.x[j] - minX) * s + pad; };
+    var Y = function (j) { return (-p.y[j] - minY) * s + pad; };
+    var w = (maxX - minX) * s + 2 * pad, h = (maxY - minY) * s + 2 * pad;
+    var svg = svgEl('svg', { viewBox: '0 0 ' + w.toFixed(1) + ' ' + h.toFixed(1), role: 'img', 'class': 'mol' });
+    svg.style.maxWidth = Math.min(w, 900) + 'px';
+    svg.appendChild(svgEl('title', {}, 'structure of ' + id + ' with computed CIP labels'));
+    var labelled = [];
+    for (i = 0; i < n; i++) labelled.push(p.t[i] !== 0);
+    // neighbours, for placing labels away from bonds
+    var nb = [];
+    for (i = 0; i < n; i++) nb.push([]);
+    for (k = 0; k < p.b.length; k += 4) { nb[p.b[k]].push(p.b[k + 1]); nb[p.b[k + 1]].push(p.b[k]); }
+    var g = svgEl('g', { 'class': 'bonds' });
+    for (k = 0; k < p.b.length; k += 4) g.appendChild(bond(p.b[k], p.b[k + 1], p.b[k + 2], p.b[k + 3]));
+    svg.appendChild(g);
+    function bond(a, b, order, style) {
+      var x1 = X(a), y1 = Y(a), x2 = X(b), y2 = Y(b);
+      var dx = x2 - x1, dy = y2 - y1, len = Math.sqrt(dx * dx + dy * dy) || 1;
+      var ux = dx / len, uy = dy / len, px = -uy, py = ux;
+      var ca = labelled[a] ? 8 : 0, cb = labelled[b] ? 8 : 0;
+      x1 += ux * ca; y1 += uy * ca; x2 -= ux * cb; y2 -= uy * cb;
+      var grp = svgEl('g', {});
+      function line(ax, ay, bx, by) { grp.appendChild(svgEl('line', { x1: ax.toFixed(1), y1: ay.toFixed(1), x2: bx.toFixed(1), y2: by.toFixed(1) })); }
+      if (style === 1) {
+        grp.appendChild(svgEl('polygon', { 'class': 'wedge', points: [x1, y1, x2 + px * 4, y2 + py * 4, x2 - px * 4, y2 - py * 4].map(function (v) { return v.toFixed(1); }).join(' ') }));
+      } else if (style === 2) {
+        for (var t = 0; t <= 6; t++) {
+          var f = t / 6, cx = x1 + (x2 - x1) * f, cy = y1 + (y2 - y1) * f, half = 0.5 + 3.5 * f;
+          line(cx + px * half, cy + py * half, cx - px * half, cy - py * half);
+        }
+      } else if (style === 3) {
+        var d = 'M' + x1.toFixed(1) + ' ' + y1.toFixed(1), steps = 8;
+        for (var q = 1; q <= steps; q++) {
+          var fq = q / steps, off = (q % 2 ? 3 : -3);
+          d += ' L' + (x1 + (x2 - x1) * fq + px * (q === steps ? 0 : off)).toFixed(1) + ' ' + (y1 + (y2 - y1) * fq + py * (q === steps ? 0 : off)).toFixed(1);
+        }
+        grp.appendChild(svgEl('path', { d: d, 'class': 'wavy' }));
+      } else if (order === 2 && style === 4) {
+        line(x1 + px * 2.5, y1 + py * 2.5, x2 - px * 2.5, y2 - py * 2.5);
+        line(x1 - px * 2.5, y1 - py * 2.5, x2 + px * 2.5, y2 + py * 2.5);
+      } else if (order === 2) {
+        line(x1 + px * 2.5, y1 + py * 2.5, x2 + px * 2.5, y2 + py * 2.5);
+        line(x1 - px * 2.5, y1 - py * 2.5, x2 - px * 2.5, y2 - py * 2.5);
+      } else if (order === 3) {
+        line(x1, y1, x2, y2);
+        line(x1 + px * 4, y1 + py * 4, x2 + px * 4, y2 + py * 4);
+        line(x1 - px * 4, y1 - py * 4, x2 - px * 4, y2 - py * 4);
+      } else line(x1, y1, x2, y2);
+      return grp;
+    }
+    // direction away from the neighbours of atom j (unit vector)
+    function away(j) {
+      var vx = 0, vy = 0;
+      nb[j].forEach(function (o) { var dx = X(j) - X(o), dy = Y(j) - Y(o), l = Math.sqrt(dx * dx + dy * dy) || 1; vx += dx / l; vy += dy / l; });
+      var l = Math.sqrt(vx * vx + vy * vy);
+      return l < 0.2 ? [0.7, -0.7] : [vx / l, vy / l];
+    }
+    var atoms = svgEl('g', { 'class': 'atoms' });
+    for (i = 0; i < n; i++) {
+      var t = p.t[i];
+      if (t === 0) continue;
+      var txt = svgEl('text', { x: X(i).toFixed(1), y: (Y(i) + 5).toFixed(1), 'text-anchor': 'middle', 'class': 'el el-' + t[0] });
+      if (t[3]) txt.appendChild(svgEl('tspan', { 'class': 'sup', dy: '-5' }, String(t[3])));
+      txt.appendChild(svgEl('tspan', t[3] ? { dy: '5' } : {}, t[0]));
+      if (t[1] > 0) {
+        txt.appendChild(svgEl('tspan', {}, 'H'));
+        if (t[1] > 1) txt.appendChild(svgEl('tspan', { 'class': 'sub', dy: '4' }, String(t[1])));
+        if (t[1] > 1 && t[2]) txt.appendChild(svgEl('tspan', { dy: '-4' }, ''));
+      }
+      if (t[2]) txt.appendChild(svgEl('tspan', { 'class': 'sup', dy: '-6' }, (Math.abs(t[2]) > 1 ? Math.abs(t[2]) : '') + (t[2] > 0 ? '+' : '\\u2212')));
+      atoms.appendChild(txt);
+    }
+    svg.appendChild(atoms);
+    var marks = svgEl('g', { 'class': 'stereo' });
+    p.u.forEach(function (u) {
+      var at = u[0], label = u[1], defined = u[2];
+      if (!defined) {
+        at.forEach(function (j) {
+          marks.appendChild(svgEl('circle', { cx: X(j).toFixed(1), cy: Y(j).toFixed(1), r: 11, 'class': 'undef' }));
+        });
+        var a0 = away(at[0]);
+        marks.appendChild(svgEl('text', { x: (X(at[0]) + a0[0] * 18).toFixed(1), y: (Y(at[0]) + a0[1] * 18 + 5).toFixed(1), 'text-anchor': 'middle', 'class': 'undef-q' }, '?'));
+        return;
+      }
+      if (!label) return;
+      var cx, cy, dir;
+      if (at.length === 1) { dir = away(at[0]); cx = X(at[0]) + dir[0] * 20; cy = Y(at[0]) + dir[1] * 20; }
+      else {
+        var a = at[0], b = at[at.length - 1];
+        var mx = (X(a) + X(b)) / 2, my = (Y(a) + Y(b)) / 2, dx = X(b) - X(a), dy = Y(b) - Y(a), l = Math.sqrt(dx * dx + dy * dy) || 1;
+        cx = mx - dy / l * 16; cy = my + dx / l * 16;
+      }
+      marks.appendChild(svgEl('text', { x: cx.toFixed(1), y: (cy + 5).toFixed(1), 'text-anchor': 'middle', 'class': 'cip' }, label));
+    });
+    svg.appendChild(marks);
+    if (showNumbers) {
+      var nums = svgEl('g', { 'class': 'numbers' });
+      for (i = 0; i < n; i++) {
+        if (!p.n[i]) continue;
+        var d2 = away(i);
+        nums.appendChild(svgEl('text', { x: (X(i) - d2[1] * 10 - d2[0] * 4).toFixed(1), y: (Y(i) + d2[0] * 10 - d2[1] * 4 + 3).toFixed(1), 'text-anchor': 'middle', 'class': 'num' }, String(p.n[i])));
+      }
+      svg.appendChild(nums);
+    }
+    return svg;
+  }
+`;
+
+// src/report/html/page-script.ts
+var PAGE_SCRIPT = `
+(function () {
+  'use strict';
+  var started = performance.now();
+  var PAGE = 50;
+  var rows = JSON.parse(document.getElementById('report-data').textContent);
+  var list = document.getElementById('records');
+  var empty = document.getElementById('empty');
+  var shown = document.getElementById('shown-count');
+  var search = document.getElementById('search');
+  var fCheck = document.getElementById('filter-check');
+  var fSev = document.getElementById('filter-severity');
+  var fForm = document.getElementById('filter-form');
+  var numbers = document.getElementById('atom-numbers');
+  var pager = document.getElementById('pager');
+  var prev = document.getElementById('prev');
+  var next = document.getElementById('next');
+  var info = document.getElementById('page-info');
+  ${DRAW_SCRIPT}
+  function el(tag, cls, text) {
+    var e = document.createElement(tag);
+    if (cls) e.className = cls;
+    if (text !== undefined) e.textContent = text;
+    return e;
+  }
+  function fill(select, values) {
+    values.sort().forEach(function (v) { var o = el('option', '', v); o.value = v; select.appendChild(o); });
+  }
+  var checks = {}, forms = {};
+  rows.forEach(function (r) { forms[r.form] = 1; r.findings.forEach(function (f) { checks[f.check] = 1; }); });
+  fill(fCheck, Object.keys(checks));
+  fill(fForm, Object.keys(forms));
+
+  var drawn = [];
+  var observer = 'IntersectionObserver' in window ? new IntersectionObserver(function (entries) {
+    entries.forEach(function (e) {
+      if (!e.isIntersecting) return;
+      observer.unobserve(e.target);
+      paint(e.target);
+    });
+  }, { rootMargin: '300px 0px' }) : null;
+  function paint(holder) {
+    var r = rows[Number(holder.getAttribute('data-i'))];
+    holder.textContent = '';
+    holder.appendChild(drawPicture(r.pic, r.id, numbers.checked));
+    holder.setAttribute('data-drawn', '1');
+    drawn.push(holder);
+  }
+  function side(label, text, extra) {
+    var d = el('div');
+    d.appendChild(el('b', '', label));
+    d.appendChild(document.createTextNode(text));
+    if (extra) d.appendChild(extra);
+    return d;
+  }
+  function card(r, i) {
+    var box = el('article', 'rec');
+    box.setAttribute('data-id', r.id);
+    var pic = el('figure', 'pic');
+    if (r.pic) {
+      var holder = el('div', 'holder', 'drawing…');
+      holder.setAttribute('data-i', String(i));
+      pic.appendChild(holder);
+      pic.appendChild(el('figcaption', '', r.pic.o === 'd' ? 'as drawn in the record (its coordinates and wedges)' : 'layout computed from the structure'));
+      if (observer) observer.observe(holder); else paint(holder);
+    } else pic.appendChild(el('div', 'nodepict', 'no depiction'));
+    box.appendChild(pic);
+    var body = el('div', 'body');
+    body.appendChild(el('h3', '', r.id));
+    body.appendChild(el('div', 'file', r.file));
+    var sides = el('div', 'side');
+    var word = r.word ? el('span', 'word', ' (written "' + r.word + '")') : null;
+    sides.appendChild(side('declared', r.form + (r.descriptors ? ' ' + r.descriptors : ''), word));
+    var comp = side('computed', r.computed + (r.labels ? '; CIP ' + r.labels : ''));
+    if (r.undef) comp.appendChild(el('span', 'undef', ' undefined: ' + r.undef));
+    sides.appendChild(comp);
+    body.appendChild(sides);
+    var ul = el('ul', 'findings');
+    r.findings.forEach(function (f) {
+      var li = el('li', f.waived ? 'waived' : '');
+      li.appendChild(el('span', 'sev sev-' + f.severity, f.severity));
+      li.appendChild(el('code', '', f.check));
+      if (f.line) li.appendChild(el('span', 'line', ' line ' + f.line));
+      li.appendChild(document.createTextNode(': ' + f.message + (f.waived ? ' [' + f.waived + ']' : '')));
+      ul.appendChild(li);
+    });
+    body.appendChild(ul);
+    box.appendChild(body);
+    return box;
+  }
+
+  var matches = [], page = 0;
+  function show() {
+    if (observer) observer.disconnect();
+    drawn = [];
+    list.textContent = '';
+    var pages = Math.max(1, Math.ceil(matches.length / PAGE));
+    if (page >= pages) page = pages - 1;
+    var from = page * PAGE, to = Math.min(matches.length, from + PAGE);
+    var frag = document.createDocumentFragment();
+    for (var k = from; k < to; k++) frag.appendChild(card(rows[matches[k]], matches[k]));
+    list.appendChild(frag);
+    pager.hidden = matches.length <= PAGE;
+    info.textContent = matches.length ? 'records ' + (from + 1) + '–' + to + ' of ' + matches.length + ' (page ' + (page + 1) + ' of ' + pages + ')' : '';
+    prev.disabled = page === 0;
+    next.disabled = page >= pages - 1;
+  }
+  function apply() {
+    var q = search.value.trim().toLowerCase(), ck = fCheck.value, sv = fSev.value, fm = fForm.value;
+    matches = [];
+    for (var i = 0; i < rows.length; i++) {
+      var r = rows[i];
+      var ok = (!q || r.id.toLowerCase().indexOf(q) >= 0) && (!fm || r.form === fm) &&
+        (!ck && !sv ? true : r.findings.some(function (f) { return !f.waived && (!ck || f.check === ck) && (!sv || f.severity === sv); }));
+      if (ok) matches.push(i);
+    }
+    shown.textContent = String(matches.length);
+    empty.hidden = matches.length !== 0;
+    page = 0;
+    show();
+  }
+  prev.addEventListener('click', function () { page--; show(); list.scrollIntoView(); });
+  next.addEventListener('click', function () { page++; show(); list.scrollIntoView(); });
+  numbers.addEventListener('change', function () { var old = drawn; drawn = []; old.forEach(paint); });
+  [search, fCheck, fSev, fForm].forEach(function (x) { x.addEventListener('input', apply); x.addEventListener('change', apply); });
+  apply();
+  // how long the script took to make the page usable (read by the tests and the benchmark)
+  document.body.setAttribute('data-ready', String(Math.round(performance.now() - started)));
+})();
+`;
+
 // src/report/html/render.ts
+function unitName3(u) {
+  return u.atoms.length === 1 ? `${u.element}${u.atoms[0]}` : `${u.atoms.join("=")}`;
+}
 function computedSummary(r) {
   const c = r.computed;
-  if (!c) return { text: "structure not read", labels: "" };
+  if (!c) return { text: "structure not read", labels: "", undef: "" };
   const chir = c.chiral === null ? "chirality open (undefined units)" : c.chiral ? "chiral" : "achiral";
   const parts = [chir];
   if (c.meso) parts.push("meso");
@@ -48426,15 +51859,16 @@ function computedSummary(r) {
   parts.push(
     `${c.stereoisomers.total} stereoisomers (${c.stereoisomers.chiral} chiral, ${c.stereoisomers.achiral} achiral)`
   );
-  const labels = c.units.filter((u) => u.label).map((u) => `${u.atoms.join("=")}${u.label}`).join(", ");
-  return { text: parts.join("; "), labels };
+  const labels = c.units.filter((u) => u.label).map((u) => `${unitName3(u)} ${u.label}`).join(", ");
+  const undef = c.units.filter((u) => !u.defined).map(unitName3).join(", ");
+  return { text: parts.join("; "), labels, undef };
 }
-var RANK2 = { error: 0, warning: 1, note: 2 };
+var RANK = { error: 0, warning: 1, note: 2 };
 function htmlRow(r) {
   const open = r.findings.filter((f) => !f.waived);
   if (open.length === 0) return null;
   const worst = open.reduce(
-    (w, f) => RANK2[f.severity] < RANK2[w] ? f.severity : w,
+    (w, f) => RANK[f.severity] < RANK[w] ? f.severity : w,
     "note"
   );
   const cs = computedSummary(r);
@@ -48442,9 +51876,11 @@ function htmlRow(r) {
     id: r.id ?? "(no id)",
     file: r.file,
     form: r.declared.form ?? "(none)",
+    word: null,
     descriptors: r.declared.descriptors ?? "",
     computed: cs.text,
     labels: cs.labels,
+    undef: cs.undef,
     worst,
     findings: r.findings.map((f) => ({
       check: f.check,
@@ -48466,7 +51902,7 @@ function csvCell(v) {
 function csvRow(r) {
   const open = r.findings.filter((f) => !f.waived);
   const c = r.computed;
-  const count2 = (s) => open.filter((f) => f.severity === s).length;
+  const count3 = (s) => open.filter((f) => f.severity === s).length;
   return [
     r.seq,
     r.origin.source,
@@ -48479,9 +51915,9 @@ function csvRow(r) {
     c ? c.meso === null ? "open" : String(c.meso) : null,
     c ? c.units.length : null,
     c ? c.undefined : null,
-    count2("error"),
-    count2("warning"),
-    count2("note"),
+    count3("error"),
+    count3("warning"),
+    count3("note"),
     r.findings.length - open.length,
     [...new Set(open.map((f) => f.check))].join(" ")
   ].map(csvCell).join(",");
@@ -48515,9 +51951,15 @@ function makeRenderer(wants, checks) {
     if (wants.html) {
       const row = htmlRow(r);
       if (row) {
-        const labels = (r.computed?.units ?? []).filter((u) => u.label).flatMap((u) => u.atoms.map((a) => ({ atom: a, text: u.label })));
+        const units = (r.computed?.units ?? []).map((u) => ({
+          atoms: u.atoms,
+          label: u.label,
+          defined: u.defined
+        }));
         row.file = `${r.origin.source} · record ${r.origin.record}, line ${r.origin.line}`;
-        out.html = { row, structure: r.structure_text ?? null, labels };
+        const word = r.form_word.word;
+        row.word = word !== null && word.trim() !== "" && word.trim() !== r.declared.form ? word : null;
+        out.html = { row, structure: r.structure_text ?? null, units };
       }
     }
     return out;
@@ -48537,13 +51979,18 @@ function bulkSarifRules(checks) {
 
 // src/bulk/context.ts
 async function makeItemContext(setup) {
-  const [{ CHECKS: CHECKS2 }, engine] = await Promise.all([Promise.resolve().then(() => (init_checks(), checks_exports)), defaultEngine()]);
+  const [{ CHECKS: CHECKS2 }, engine] = await Promise.all([
+    Promise.resolve().then(() => (init_checks(), checks_exports)),
+    defaultEngine({ axisOrthoMin: setup.config.axisOrthoMin })
+  ]);
   return {
     mapping: setup.mapping,
     vocabulary: makeVocabulary(setup.mapping.vocabulary),
     checks: CHECKS2,
     config: setup.config,
     engine,
+    budget: setup.budget,
+    originInputs: setup.originInputs ? new Map(setup.originInputs.map((item) => [itemId(item, setup.mapping), item])) : void 0,
     render: makeRenderer(setup.wants, bulkSarifRules(CHECKS2))
   };
 }
