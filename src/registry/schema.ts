@@ -199,15 +199,15 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
       return { path, message: `${label}: ${quote(got)} must not start or end with spaces` };
     case 'maxItems': {
       const n = Array.isArray(got) ? got.length : 0;
-      return {
-        path,
-        message: `${label}: ${n} items, more than the limit of ${(e.params as { limit: number }).limit}; the record is not audited (split it into several records)`,
-      };
+      const limit = (e.params as { limit: number }).limit;
+      // Components are the one list whose length bounds the audit's work: there the record is not audited.
+      const advice = /components$/.test(path)
+        ? 'the record is not audited (split it into several records)'
+        : 'shorten the list';
+      return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
     }
     case 'minItems':
       return { path, message: `${label}: needs at least ${(e.params as { limit: number }).limit} item(s)` };
-    case 'maxItems':
-      return { path, message: `${label}: holds at most ${(e.params as { limit: number }).limit} item(s)` };
     case 'oneOf': {
       if (got === null || typeof got !== 'object' || Array.isArray(got)) {
         return {
