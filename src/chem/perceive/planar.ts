@@ -38,8 +38,16 @@ export function unitImage(
 ): number {
   const j = target.unitOfAtom[map[u.atoms[0]]];
   if (u.kind !== 'planar' || j < 0) return j;
-  return target.planar.planarOf[j];
+  return j < target.planar.planarOf.length ? target.planar.planarOf[j] : -1;
 }
+
+/** The links of a structure without planar units (shared: nothing reads past `any`). */
+const NO_PLANAR: PlanarLinks = Object.freeze({
+  host: new Int32Array(0),
+  planarOf: new Int32Array(0),
+  zBit: new Uint8Array(0),
+  any: false,
+});
 
 /** Appends one planar unit per medium-ring double bond; returns the links between hosts and planar units. */
 export function addPlanarUnits(s: Structure, g: Graph, rings: RingInfo, units: PerceivedUnit[]): PlanarLinks {
@@ -59,6 +67,7 @@ export function addPlanarUnits(s: Structure, g: Graph, rings: RingInfo, units: P
     const z = ((u.tokens[0] === ra ? 0 : 1) ^ (u.tokens[2] === rb ? 0 : 1)) as 0 | 1;
     hosts.push({ k, z, ra, rb });
   }
+  if (hosts.length === 0) return NO_PLANAR;
   const m = units.length + hosts.length;
   const links: PlanarLinks = {
     host: new Int32Array(m).fill(-1),
