@@ -1,6 +1,6 @@
-/** The two kinds of finding the audit makes itself (not a check module), described like checks for reports. */
+/** The kinds of finding the audit makes itself (not a check module), described like checks for reports. */
 import type { Severity } from './types.js';
-import { INTERNAL_ERROR_ID, SCHEMA_CHECK_ID } from './findings.js';
+import { INTERNAL_ERROR_ID, SCHEMA_CHECK_ID, TIME_LIMIT_ID } from './findings.js';
 
 export interface RuleInfo {
   id: string;
@@ -26,5 +26,14 @@ export const BUILTIN_RULES: readonly RuleInfo[] = [
     explanation:
       'A check module threw while checking this record. The other checks and records were still audited. ' +
       'This is a fault in stereogate, not in the record; report it with the record attached.',
+  },
+  {
+    id: TIME_LIMIT_ID,
+    defaultSeverity: 'error',
+    summary: 'The audit of a record stayed within its time limit and memory bound.',
+    explanation:
+      'Each record gets a time limit (20 s unless --record-timeout says otherwise) and a memory bound, so that one ' +
+      'pathological structure cannot stall or exhaust a run. A record over either is reported instead of ' +
+      'audited, and the run goes on. Audit it on its own with a higher limit, or simplify the structure.',
   },
 ];

@@ -11,6 +11,8 @@ import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { DEFAULT_CONFIG } from '../../src/audit/config.js';
 import { runAudit } from '../../src/audit/run.js';
+import { CHECKS } from '../../src/checks/index.js';
+import { renderSarif } from '../../src/report/sarif.js';
 import { itemId } from '../../src/bulk/audit-item.js';
 import { runBulkAudit, timeoutResult } from '../../src/bulk/run.js';
 import { csvWriter, jsonWriter, jsonlWriter } from '../../src/bulk/writers.js';
@@ -49,6 +51,16 @@ describe('record audit: per-record time limit', () => {
     expect(result.records[0]!.passed.length).toBeGreaterThan(0);
     expect(result.records[2]!.passed.map((p) => p.check)).toContain('form-matches-structure');
     expect(result.summary.records).toBe(3);
+    // SARIF 2.1.0: every result's ruleId names a rule of the log
+    const sarif = JSON.parse(renderSarif(result, CHECKS)) as {
+      runs: {
+        tool: { driver: { rules: { id: string }[] } };
+        results: { ruleId: string; ruleIndex: number }[];
+      }[];
+    };
+    const rules = sarif.runs[0]!.tool.driver.rules.map((r) => r.id);
+    const stop = sarif.runs[0]!.results.find((r) => r.ruleId === 'record-time-limit');
+    expect(rules[stop!.ruleIndex]).toBe('record-time-limit');
   });
 
   it('more than 50 components: a schema finding at the list, only the first 50 read', async () => {
