@@ -13,7 +13,8 @@ import { parseRatio } from './ratio.js';
 import type { RawFinding } from './types.js';
 import { finding, unitName } from './words.js';
 
-type Add = (
+/** How the origin checks add a finding (shared by origin-carried and origin-enantiomers). */
+export type Add = (
   id: OriginMessageId,
   field: string | null,
   data: RawFinding['data'],

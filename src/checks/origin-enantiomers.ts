@@ -10,17 +10,8 @@ import type { Provenance } from '../chem/provenance/index.js';
 import type { AuditConfig } from './types.js';
 import type { CompoundRecord, OriginControl } from '../registry/types.js';
 import { inputName, type OriginInput } from './origin-inputs.js';
-import { names } from './origin-carried.js';
-import type { RawFinding } from './types.js';
-import type { OriginMessageId } from './origin-messages.js';
+import { names, type Add } from './origin-carried.js';
 import { fmt } from './words.js';
-
-type Add = (
-  id: OriginMessageId,
-  field: string | null,
-  data: RawFinding['data'],
-  severity?: RawFinding['severity'],
-) => void;
 
 const CHIRAL_CONTROL: readonly OriginControl[] = [
   'chiral-catalyst',

@@ -21,6 +21,21 @@ function fail(code: string, message: string, offset: number): CxResult {
   return { ok: false, error: { code, message, at: { offset } } };
 }
 
+/** One atom index (at most 9 digits) at `at`, and the offset after it; a failure with `code` when out of range. */
+function readIndex(
+  s: string,
+  at: number,
+  atomCount: number,
+  code: string,
+): { v: number; end: number } | CxResult {
+  let v = 0;
+  let j = at;
+  while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
+  if (v >= atomCount)
+    return fail(code, `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at);
+  return { v, end: j };
+}
+
 /**
  * Reads the block whose opening '|' is at `start`. `atomCount` bounds the indices.
  * Returns the groups and the offset just past the closing '|'.
@@ -39,17 +54,10 @@ export function parseCxExtension(s: string, start: number, atomCount: number): C
       const count = s.charCodeAt(i + 1) === 49 ? 1 : 2;
       let j = i + 3;
       while (isDigit(s.charCodeAt(j))) {
-        let v = 0;
-        const at = j;
-        while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
-        if (v >= atomCount) {
-          return fail(
-            'cxsmiles-bad-radical',
-            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
-            at,
-          );
-        }
-        radicals.set(v, count);
+        const r = readIndex(s, j, atomCount, 'cxsmiles-bad-radical');
+        if ('ok' in r) return r;
+        j = r.end;
+        radicals.set(r.v, count);
         if (s.charCodeAt(j) === 44 && isDigit(s.charCodeAt(j + 1))) j++;
         else break;
       }
@@ -83,17 +91,10 @@ export function parseCxExtension(s: string, start: number, atomCount: number): C
       for (;;) {
         if (!isDigit(s.charCodeAt(j)))
           return fail('cxsmiles-bad-group', 'expected an atom index in the stereo group', j);
-        let v = 0;
-        const at = j;
-        while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
-        if (v >= atomCount) {
-          return fail(
-            'cxsmiles-bad-group',
-            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
-            at,
-          );
-        }
-        atoms.push(v);
+        const r = readIndex(s, j, atomCount, 'cxsmiles-bad-group');
+        if ('ok' in r) return r;
+        j = r.end;
+        atoms.push(r.v);
         const d = s.charCodeAt(j);
         if (d === 44 && isDigit(s.charCodeAt(j + 1))) {
           j++;
