@@ -22,8 +22,13 @@ const NOTHING: ReadStructure = Object.freeze({
   },
 });
 
-function failed(message: string, line: number | null = null, offset: number | null = null): ReadStructure {
-  return { structure: null, facts: null, error: { message, line, offset } };
+function failed(
+  message: string,
+  line: number | null = null,
+  offset: number | null = null,
+  code?: string,
+): ReadStructure {
+  return { structure: null, facts: null, error: { message, line, offset, ...(code ? { code } : {}) } };
 }
 
 /** A structure read but not yet described: the structure, or why it could not be read. */
@@ -53,6 +58,7 @@ export function readOnly(source: StructureSource | null, engine: AuditEngine): R
         `${what}: ${read.error.message}`,
         read.error.at.line ?? null,
         read.error.at.offset ?? null,
+        read.error.code,
       ),
     };
   }

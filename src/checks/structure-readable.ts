@@ -12,6 +12,9 @@ const messages = {
   'structure-unreadable':
     'The structure in {field} could not be read: {error}{where}. Nothing about its stereochemistry can be checked. ' +
     'Correct the SMILES or molfile (check ring-closure digits, brackets and the counts line) and resubmit.',
+  'structure-over-limit':
+    'The structure in {field} was not analysed: {error}. The size limits keep every record within the time ' +
+    'limit; split a mixture into its records, or leave out repeated salt or solvent parts, and resubmit.',
   'component-unreadable':
     'Component {index} ({field}) could not be read: {error}{where}. The mixture cannot be checked against it. ' +
     'Correct that structure.',
@@ -27,6 +30,9 @@ const messages = {
 } as const;
 
 type Id = keyof typeof messages;
+
+/** Reader codes of the size caps (src/chem/read/limits.ts): input over a cap, not a broken drawing. */
+const OVER_LIMIT = new Set(['smiles-too-long', 'molfile-too-long', 'too-many-atoms', 'too-many-components']);
 
 function where(r: ReadStructure): string {
   const e = r.error;
@@ -87,7 +93,8 @@ function run(ctx: CheckContext): CheckOutcome {
   if (ctx.record && ctx.record.structure.smiles === undefined && ctx.record.structure.molfile === undefined) {
     add('no-structure', 'structure', { field: 'structure' });
   } else if (ctx.main.error && !findings.some((f) => f.field === field)) {
-    add('structure-unreadable', field, {
+    const over = OVER_LIMIT.has(ctx.main.error.code ?? '');
+    add(over ? 'structure-over-limit' : 'structure-unreadable', field, {
       field,
       error: ctx.main.error.message,
       where: where(ctx.main),

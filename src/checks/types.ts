@@ -35,7 +35,13 @@ export interface ReadStructure {
   structure: Structure | null;
   facts: StructureFacts | null;
   /** Why reading failed, with where (line/offset) when known. */
-  error: { message: string; line: number | null; offset: number | null } | null;
+  error: {
+    message: string;
+    line: number | null;
+    offset: number | null;
+    /** The reader's error code when there is one ('smiles-too-long', 'too-many-atoms', ...). */
+    code?: string;
+  } | null;
 }
 
 /** A record of the registry as the cross-record checks see it. */

@@ -149,3 +149,16 @@ describe('smaller record faults (issue 10)', () => {
     expect(findings.filter((f) => f.check === 'descriptors-match-structure')).toEqual([]);
   });
 });
+
+describe('structures over a size cap', () => {
+  it('300 dot-joined copies: a structure-over-limit finding at once, naming the cap', async () => {
+    reg = tmpRegistry({
+      'compounds/d.yml': rec('LX-00030', Array(300).fill('C[C@H](N)C(=O)O').join('.')),
+    });
+    const result = await runAudit({ root: reg.root });
+    const f = result.records[0]!.findings.find((x) => x.check === 'structure-readable');
+    expect(f).toMatchObject({ messageId: 'structure-over-limit', line: 4, severity: 'error' });
+    expect(f!.message).toContain('300 separate components');
+    expect(f!.message).toContain('over the limit of 50');
+  });
+});
