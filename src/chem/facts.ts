@@ -66,6 +66,11 @@ export interface StereoisomerCount {
   meso: Count;
   /** Number of potential stereo units the count is built on. */
   units: number;
+  /**
+   * Present (true) only when the symmetry search stopped at its limit: the numbers are then those of the
+   * symmetry found, not exact — open, not a count to act on.
+   */
+  open?: true;
 }
 
 export interface StereoisomerEntry {

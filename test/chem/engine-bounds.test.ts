@@ -6,6 +6,8 @@
  */
 import { describe as suite, expect, it } from 'vitest';
 import { describe } from '../../src/chem/describe/index.js';
+import { relate } from '../../src/chem/relate.js';
+import { mirror } from '../../src/chem/symmetry/index.js';
 import { smiles } from './stereo-helpers.js';
 
 /** Branch point CH with two identical branches: no branch point is stereogenic (every pair of branches is alike). */
@@ -53,4 +55,26 @@ suite('exact counts at any size', () => {
     expect(f.remarks.some((r) => /work limit/.test(r))).toBe(true);
     expect(f.units.some((u) => u.label === null)).toBe(true);
   }, 120_000);
+});
+
+suite('symmetry stopped at its limit says "open"', () => {
+  /** Branch points with two alike branches that end in drawn centres: stereogenic, and a symmetry group of 2^k. */
+  const stereoDendrimer = (d: number): string => {
+    const arm = (k: number): string => (k === 0 ? '[C@@H](O)C' : `C[C@@H](${arm(k - 1)})${arm(k - 1)}`);
+    return 'O' + arm(d);
+  };
+  it('a generation-5 dendrimer of stereogenic branch points: counts marked open, chirality and the mirror relation open', () => {
+    const s = smiles(stereoDendrimer(5));
+    const f = describe(s);
+    expect(f.stereoisomers.open).toBe(true);
+    expect(f.chiral).toBeNull();
+    expect(relate(s, mirror(s)).relation).toBe('same-constitution');
+  }, 60_000);
+  it('a generation-3 one is below the limit: exact (no open mark), chiral, and enantiomeric to its mirror image', () => {
+    const s = smiles(stereoDendrimer(3));
+    const f = describe(s);
+    expect('open' in f.stereoisomers).toBe(false);
+    expect(f.chiral).toBe(true);
+    expect(relate(s, mirror(s)).relation).toBe('enantiomers');
+  });
 });

@@ -44,7 +44,9 @@ export function analyse(input: Structure, opts: PerceiveOptions = {}): Analysis 
     }
   }
   if (!group.complete)
-    p.remarks.push('symmetry search stopped at its limit: stereoisomer counts may be too high');
+    p.remarks.push(
+      'symmetry search stopped at its limit: stereoisomer counts are open (stereoisomers.open), and so are chirality and relations that a symmetry not found could change',
+    );
   const chirality = chiralityOf(group, state, defined);
   return { norm, p, group, state, defined, reported, chirality };
 }

@@ -56,6 +56,7 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   const dropped = mixture ? mixture.beyondParent : copies;
   const counted = dropped.length > 0 ? analyse(withoutCopies(s, comps, dropped), perceiveOpts) : a;
   const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
+  if (!counted.group.complete) stereoisomers.open = true;
   const drawnChiral = mixture
     ? mixture.chiral.some((c) => c === true)
       ? true

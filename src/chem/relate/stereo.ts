@@ -53,6 +53,15 @@ export function stereoRelation(pa: Analysis, pb: Analysis, iso: ArrayLike<number
   const xB = pb.state;
   if (elementMapping(g, y, xB) >= 0)
     return { ...none, relation: 'identical', explanation: 'the same stereoisomer' };
+  if (!g.complete) {
+    // the symmetry search stopped at its limit: a symmetry not found could still make them identical
+    return {
+      ...none,
+      relation: 'same-constitution',
+      explanation:
+        'same constitution; the symmetry search stopped at its limit, so the relation is left open',
+    };
+  }
   const labA = labelMap(pa);
   const labB = labelMap(pb);
   const unitFact = (j: number, iA: number): DifferingUnit => {

@@ -38,6 +38,8 @@ export interface UnitGroup {
 }
 
 const MAX_GROUP = 20000;
+/** Group elements times units kept at most (each element is a signed permutation of all units). */
+const MAX_GROUP_WORK = 2_000_000;
 const NO_PLANAR = new Int32Array(0);
 
 export function unitGroup(p: Perception): UnitGroup {
@@ -59,13 +61,14 @@ export function unitGroup(p: Perception): UnitGroup {
     complete: true,
   };
   if (m === 0 || trivialOnUnits(p)) return group;
+  const cap = Math.min(MAX_GROUP, Math.max(64, Math.floor(MAX_GROUP_WORK / m)));
   const seen = new Set<string>([signature(group.perms[0], group.flips[0])]);
   const key: number[] = [];
   for (const u of units) key.push(...u.atoms);
   const res = automorphisms(p.structure, {
     key,
     colour: p.classes,
-    maxResults: MAX_GROUP * 4,
+    maxResults: cap * 4,
     onMapping: (map: Int32Array) => {
       const perm = new Int32Array(m);
       const flip = new Uint8Array(m);
@@ -89,10 +92,10 @@ export function unitGroup(p: Perception): UnitGroup {
         group.flips.push(flip);
         group.atomMaps.push(Int32Array.from(map));
       }
-      return group.perms.length < MAX_GROUP;
+      return group.perms.length < cap;
     },
   });
-  group.complete = res.complete && group.perms.length < MAX_GROUP;
+  group.complete = res.complete && group.perms.length < cap;
   return group;
 }
 
@@ -336,7 +339,8 @@ export function chiralityOf(g: UnitGroup, x: State, defined: Uint8Array): Chiral
   if (open.length === 0) {
     if (!feasible(g, x)) return { chiral: null, witness: -1, impossible: true };
     const k = elementMapping(g, x, mirrorState(g, x));
-    return { chiral: k < 0, witness: k };
+    // a search stopped at its limit may have missed the improper symmetry: achiral is proven, chiral is open
+    return { chiral: k < 0 ? (g.complete ? true : null) : false, witness: k };
   }
   let someAchiral = false;
   for (let k = 0; k < g.perms.length && !someAchiral; k++)
