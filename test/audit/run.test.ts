@@ -8,7 +8,7 @@ import { ConfigError } from '../../src/audit/config.js';
 import { CAUTION } from '../../src/audit/caution.js';
 import type { LoadedRecord } from '../../src/registry/types.js';
 import { NO_POSITIONS } from '../../src/registry/positions.js';
-import { tmpRegistry, type TmpRegistry } from '../registry/tmp-registry.js';
+import { recordYaml as rec, tmpRegistry, type TmpRegistry } from '../registry/tmp-registry.js';
 import { fakeEngine } from './fake-engine.js';
 import { formCheck, ratioNote, spyCheck, throwingCheck } from './fake-checks.js';
 
@@ -17,9 +17,6 @@ afterEach(() => {
   reg?.remove();
   reg = null;
 });
-
-const rec = (id: string, form: string, extra = '', smiles = 'CC') =>
-  `id: ${id}\nstructure:\n  smiles: "${smiles}"\nstereo:\n  form: ${form}\n${extra}`;
 
 const CHECKS = [formCheck, ratioNote, throwingCheck];
 

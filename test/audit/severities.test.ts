@@ -8,7 +8,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { runAudit } from '../../src/audit/run.js';
 import { resolveSeverity } from '../../src/audit/findings.js';
 import { CHECKS as REAL_CHECKS } from '../../src/checks/index.js';
-import { tmpRegistry, type TmpRegistry } from '../registry/tmp-registry.js';
+import { recordYaml as rec, tmpRegistry, type TmpRegistry } from '../registry/tmp-registry.js';
 import { fakeEngine } from './fake-engine.js';
 import { formCheck, ratioNote } from './fake-checks.js';
 
@@ -17,9 +17,6 @@ afterEach(() => {
   reg?.remove();
   reg = null;
 });
-
-const rec = (id: string, form: string, extra = '', smiles = 'CC') =>
-  `id: ${id}\nstructure:\n  smiles: "${smiles}"\nstereo:\n  form: ${form}\n${extra}`;
 
 describe('resolveSeverity', () => {
   it('a configured level replaces the level of failures, up or down; notes stay notes', () => {

@@ -20,3 +20,7 @@ export function tmpRegistry(files: Record<string, string | Buffer> = {}): TmpReg
   for (const [p, c] of Object.entries(files)) write(p, c);
   return { root, write, remove: () => rmSync(root, { recursive: true, force: true }) };
 }
+
+/** The text of a minimal YAML record: id, a SMILES and a form, then `extra` lines under stereo (indented by 2). */
+export const recordYaml = (id: string, form: string, extra = '', smiles = 'CC'): string =>
+  `id: ${id}\nstructure:\n  smiles: "${smiles}"\nstereo:\n  form: ${form}\n${extra}`;
