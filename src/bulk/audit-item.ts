@@ -7,6 +7,8 @@ import type { AuditConfig, CheckModule } from '../checks/types.js';
 import type { AuditEngine } from '../audit/engine.js';
 import type { Budget } from '../chem/budget.js';
 import { auditRecords } from '../audit/run.js';
+import { indexRow } from '../audit/index-row.js';
+import type { IndexRow } from '../registry/keys.js';
 import type { RecordResult } from '../audit/types.js';
 import type { ComponentFacts, StructureFacts } from '../chem/facts.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -45,6 +47,8 @@ export interface BulkRecordResult extends Omit<RecordResult, 'computed'> {
   seq: number;
   origin: { source: string; record: number; line: number };
   form_word: { word: string | null; how: VocabularyResult['how'] };
+  /** The record's row of the registry index (keys and claims), for the registry-wide phase and `merge`. */
+  registry_row?: IndexRow;
   /** The structure as given (SMILES or molfile), kept for flagged records only (for depictions). */
   structure_text?: string;
 }
@@ -131,6 +135,12 @@ export interface ItemContext {
   budget?: Budget;
   /** Records of the export that origins name, by id (bulk runs with an origin column). */
   originInputs?: ReadonlyMap<string, BulkItem>;
+  /**
+   * Why the registry-wide checks do not run in this run (one shard of a split run), or null when the main thread
+   * runs them over every record's keys (registry_row) as the results stream past. Undefined: not run, the bulk
+   * reason (a caller that audits items on their own).
+   */
+  registryNotRun?: string | null;
 }
 
 /** One bulk item as a loaded record (no structure read yet), with its conversion. */
@@ -188,6 +198,16 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
     budget: ctx.budget,
     registryPhase: false,
   }).records[0];
+  if (ctx.registryNotRun !== undefined && result.notRun) {
+    const wide = new Set(ctx.checks.filter((c) => c.scope === 'registry').map((c) => c.id));
+    result.notRun = result.notRun.flatMap((n) =>
+      !wide.has(n.check) || n.reason !== BULK_REGISTRY_NOT_COMPARED
+        ? [n]
+        : ctx.registryNotRun === null
+          ? []
+          : [{ check: n.check, reason: ctx.registryNotRun! }],
+    );
+  }
   const out: BulkRecordResult = {
     ...result,
     computed: result.computed ? bulkFacts(result.computed) : null,
@@ -195,6 +215,8 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
     origin: { source: item.source, record: item.record, line: item.line },
     form_word: { word: conv.formWord, how: conv.formHow },
   };
+  if (ctx.registryNotRun !== undefined)
+    out.registry_row = indexRow(loaded, { structure: null, facts: result.computed, error: null }, item.seq);
   if (conv.structureText !== null && result.findings.some((f) => !f.waived))
     out.structure_text = conv.structureText;
   return out;

@@ -17,6 +17,8 @@ export interface WorkerSetup {
   budget?: Budget;
   /** Records of the export that origins name (collectOriginInputs), when an origin column is mapped. */
   originInputs?: BulkItem[];
+  /** See ItemContext.registryNotRun. */
+  registryNotRun?: string | null;
 }
 
 export interface BulkContext extends ItemContext {
@@ -38,6 +40,7 @@ export async function makeItemContext(setup: WorkerSetup): Promise<BulkContext> 
     originInputs: setup.originInputs
       ? new Map(setup.originInputs.map((item) => [itemId(item, setup.mapping), item]))
       : undefined,
+    registryNotRun: setup.registryNotRun,
     render: makeRenderer(setup.wants, bulkSarifRules(CHECKS)),
   };
 }

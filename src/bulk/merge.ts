@@ -6,6 +6,9 @@ import { createReadStream } from 'node:fs';
 import { createInterface } from 'node:readline';
 import type { BulkRecordResult } from './audit-item.js';
 import { BulkAccumulator } from './accumulate.js';
+import { DEFAULT_CONFIG } from '../audit/config.js';
+import type { AuditConfig } from '../checks/types.js';
+import { BulkRegistryPhase } from './registry-stream.js';
 import { makeRenderer, type RenderedRecord } from './render-record.js';
 import { bulkSarifRules } from './sarif-writer.js';
 import { wantsOf, type BulkTrailer, type RecordWriter } from './writers.js';
@@ -36,9 +39,13 @@ export async function mergeShards(
   paths: string[],
   writers: RecordWriter[],
   onRecord?: (r: RenderedRecord) => void,
+  /** The configuration of the shard runs (severities of the registry-wide findings); default the defaults. */
+  config: AuditConfig = DEFAULT_CONFIG,
 ): Promise<BulkTrailer> {
   const { CHECKS } = await import('../checks/index.js');
   const render = makeRenderer(wantsOf(writers), bulkSarifRules(CHECKS));
+  // the registry-wide phase over the records of every shard, in input order: what one run would have found
+  const phase = await BulkRegistryPhase.create(config, render, CHECKS);
   const streams = paths.map((p) => readShard(p));
   const heads: (BulkRecordResult | null)[] = [];
   const shards: (string | null)[] = paths.map(() => null);
@@ -65,7 +72,7 @@ export async function mergeShards(
     if (r.seq === lastSeq)
       throw new MergeError(`record ${r.seq} appears in more than one shard output (${paths[best]})`);
     lastSeq = r.seq;
-    const rendered = render(r);
+    const rendered = phase.result(r);
     acc.add(rendered.tally);
     for (const w of writers) await w.write(rendered);
     onRecord?.(rendered);
@@ -85,6 +92,7 @@ export async function mergeShards(
       `shard${absent.length > 1 ? 's' : ''} ${absent.map((i) => `${i}/${n}`).join(', ')} missing from the merge`,
     );
   const trailer = acc.trailer(null);
+  trailer.registry = phase.summary();
   for (const w of writers) await w.finish(trailer);
   return trailer;
 }

@@ -12,6 +12,7 @@ import { htmlRow, type HtmlRow } from '../report/html/render.js';
 import type { UnitMark } from '../report/html/picture.js';
 import type { BulkRecordResult } from './audit-item.js';
 import type { VocabularyResult } from './mapping.js';
+import type { IndexRow } from '../registry/keys.js';
 
 /** Which renderings the run's outputs need (the tally is always made). */
 export interface RenderWants {
@@ -42,6 +43,8 @@ export interface HtmlEntry {
 
 export interface RenderedRecord {
   seq: number;
+  /** The record's row of the registry index (src/registry/keys.ts), for the registry-wide phase. */
+  row?: IndexRow;
   /** The JSON Lines line, without the newline: {"kind":"record", …the whole result…}; '' when not wanted. */
   jsonl: string;
   tally: Tally;
@@ -107,6 +110,7 @@ export function makeRenderer(wants: RenderWants, checks: readonly CheckModule[])
   return (r) => {
     const out: RenderedRecord = {
       seq: r.seq,
+      row: r.registry_row,
       jsonl: wants.jsonl ? JSONL_PREFIX + JSON.stringify(r).slice(1) : '',
       tally: {
         findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),

@@ -12,6 +12,7 @@ import type { BulkMapping } from './mapping.js';
 import { collectOriginInputs } from './origins.js';
 import { BulkAccumulator } from './accumulate.js';
 import { mapOrdered, type PoolStats } from './pool.js';
+import { BulkRegistryPhase, notRunSummary, shardNotRun } from './registry-stream.js';
 import { makeProgress, type ProgressMode } from './progress.js';
 import { formatOf, readItems, shardFilter, type BulkItem } from './sources.js';
 import { makeRenderer, type RenderedRecord } from './render-record.js';
@@ -143,7 +144,16 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
   const wants = wantsOf(opts.writers);
   // the worker stops a record itself a little before the pool would terminate it (no worker restart then)
   const budget = { timeMs: Math.max(1, Math.floor(timeoutMs * 0.9)), memoryMb: RECORD_MEMORY_MB };
-  const setup: WorkerSetup = { mapping: opts.mapping, config: opts.config, wants, budget };
+  // one shard: the registry-wide checks wait for the merge; one run: this thread runs them as results stream
+  // past, and may render a record again, so the workers write every record's JSON text
+  const registryNotRun = opts.shard ? shardNotRun(opts.shard) : null;
+  const setup: WorkerSetup = {
+    mapping: opts.mapping,
+    config: opts.config,
+    wants: registryNotRun === null ? { ...wants, jsonl: true } : wants,
+    budget,
+    registryNotRun,
+  };
   if (opts.mapping.origin) setup.originInputs = await collectOriginInputs(opts.inputs, opts.mapping);
   const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
   const script = new URL(`./worker${ext}`, import.meta.url);
@@ -155,6 +165,7 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
     const ctx = await makeItemContext(setup);
     inline = (item) => ctx.render(auditItem(item, ctx));
   }
+  const phase = registryNotRun === null ? await BulkRegistryPhase.create(opts.config, render, CHECKS) : null;
   const acc = new BulkAccumulator();
   const results = mapOrdered<BulkItem & { seq: number }, RenderedRecord>(
     shardFilter(allItems(opts.inputs), opts.shard ?? null),
@@ -173,7 +184,10 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
   );
   const shard = opts.shard ? `${opts.shard.index}/${opts.shard.count}` : null;
   try {
-    for await (const r of results) {
+    for await (const rendered of results) {
+      let r = phase ? phase.rendered(rendered) : rendered;
+      // the JSON text was made for the phase only: no output wants it
+      if (phase && !wants.jsonl && r.jsonl !== '') r = { ...r, jsonl: '' };
       acc.add(r.tally);
       for (const w of opts.writers) await w.write(r);
       opts.onRecord?.(r);
@@ -189,6 +203,7 @@ export async function runBulkAudit(opts: BulkOptions): Promise<BulkRunSummary> {
   }
   const audited = Date.now();
   const trailer = acc.trailer(shard);
+  trailer.registry = phase ? phase.summary() : notRunSummary(registryNotRun!, trailer.summary.records);
   for (const w of opts.writers) await w.finish(trailer);
   return { trailer, seconds: (Date.now() - started) / 1000, auditSeconds: (audited - started) / 1000 };
 }

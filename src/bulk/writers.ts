@@ -4,7 +4,7 @@
  * held in memory but the record being written.
  */
 import { createWriteStream, type WriteStream } from 'node:fs';
-import type { AuditSummary } from '../audit/types.js';
+import type { AuditSummary, RegistrySummary } from '../audit/types.js';
 import { CSV_HEADER, jsonOf, type RenderedRecord, type RenderWants } from './render-record.js';
 
 export interface BulkTrailer {
@@ -15,6 +15,8 @@ export interface BulkTrailer {
   caution: string;
   tool: { name: 'stereogate'; version: string };
   shard: string | null;
+  /** The registry-wide phase: run over every record (pairs listed once), or not run with the reason (a shard). */
+  registry?: RegistrySummary;
 }
 
 export interface RecordWriter {
@@ -73,7 +75,9 @@ export function jsonWriter(path: string): RecordWriter {
       await drainWrite(
         s,
         `\n],\n"summary":${JSON.stringify(t.summary)},\n"byCheck":${JSON.stringify(t.byCheck)},\n` +
-          `"vocabulary":${JSON.stringify(t.vocabulary)},\n"tool":${JSON.stringify(t.tool)},\n"caution":${JSON.stringify(t.caution)}}\n`,
+          `"vocabulary":${JSON.stringify(t.vocabulary)},\n` +
+          (t.registry ? `"registry":${JSON.stringify(t.registry)},\n` : '') +
+          `"tool":${JSON.stringify(t.tool)},\n"caution":${JSON.stringify(t.caution)}}\n`,
       );
       await close(s);
     },

@@ -27,6 +27,7 @@ import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
 import { checkWritable } from '../output-path.js';
 import { plural } from '../../report/checklist.js';
 import { CAUTION } from '../../audit/caution.js';
+import { registryLines } from '../../report/registry-summary.js';
 import { VERSION } from '../../audit/version.js';
 
 export const BULK_USAGE = `Bulk audit of legacy registries (SD files, CSV/TSV exports):
@@ -216,6 +217,8 @@ export function summaryTable(t: BulkTrailer, time: { seconds: number; auditSecon
       lines.push(`    … and ${t.vocabulary.notUnderstood.length - shown.length} more (see the JSON summary)`);
     }
   }
+  const registry = registryLines(t.registry);
+  if (registry.length > 0) lines.push('', ...registry.map((l) => `  ${l}`));
   lines.push('', t.caution);
   return lines.join('\n');
 }
