@@ -20,6 +20,7 @@ import { escapeMarkdown } from '../../src/report/escape.js';
 import { finding, record, result } from '../github/support/results.js';
 import { startFakeGitHub, type FakeGitHub } from './support/fake-github.js';
 import { recordingRunner, fakeEngine } from './support/fakes.js';
+import { actionSettings } from './support/settings.js';
 import { startConnectProxy } from './support/proxy.js';
 import { selfSignedCert } from './support/tls.js';
 
@@ -28,14 +29,6 @@ afterAll(() => rmSync(workspace, { recursive: true, force: true }));
 
 const MARKER = '<!-- stereogate-checklist -->';
 const TOKEN = 'ghs_Larkspur_test_token_0123456789';
-const pr = {
-  owner: 'larkspur',
-  repo: 'registry',
-  number: 7,
-  baseSha: 'a'.repeat(40),
-  headSha: 'b'.repeat(40),
-  changedFiles: null,
-};
 const audit = result([
   record('compounds/LX-00001.yaml', [finding('error', 6)]),
   record('compounds/LX-00002.yaml', [finding('warning', 2)], 'LX-00002'),
@@ -50,28 +43,14 @@ const files = [
 ];
 
 function settings(apiUrl: string, over: Partial<ActionSettings> = {}): ActionSettings {
-  return {
+  return actionSettings(workspace, {
     token: TOKEN,
-    records: { kind: 'changed' },
-    workspace,
-    repoRoot: workspace,
-    registryRoot: workspace,
-    registryDir: '',
-    configFile: null,
-    failOn: 'error',
-    checklistComment: true,
-    inlineComments: true,
-    maxInlineComments: 10,
     sarifFile: join(workspace, 'out.sarif'),
     reportFile: join(workspace, 'report.md'),
     apiUrl,
     api: { timeoutMs: 1500, tries: 3, maxWaitMs: 2000 },
-    runUrl: 'https://github.test/larkspur/registry/actions/runs/1',
-    repository: { owner: 'larkspur', repo: 'registry' },
-    eventName: 'pull_request',
-    pullRequest: pr,
     ...over,
-  };
+  });
 }
 
 let gh: FakeGitHub;

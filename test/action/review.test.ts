@@ -6,7 +6,8 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { judge, review } from '../../src/action/review.js';
 import type { ActionSettings } from '../../src/action/settings.js';
 import { finding, record, result } from '../github/support/results.js';
-import { API, pr, testClient, useNock } from '../github/support/nock.js';
+import { API, testClient, useNock } from '../github/support/nock.js';
+import { actionSettings } from './support/settings.js';
 import { fakeEngine, recordingRunner } from './support/fakes.js';
 
 useNock();
@@ -15,28 +16,7 @@ const workspace = realpathSync(mkdtempSync(join(tmpdir(), 'stereogate-review-'))
 afterAll(() => rmSync(workspace, { recursive: true, force: true }));
 
 function settings(over: Partial<ActionSettings> = {}): ActionSettings {
-  return {
-    token: 't0ken',
-    records: { kind: 'changed' },
-    workspace,
-    repoRoot: workspace,
-    registryRoot: workspace,
-    registryDir: '',
-    configFile: null,
-    failOn: 'error',
-    checklistComment: true,
-    inlineComments: true,
-    maxInlineComments: 10,
-    sarifFile: join(workspace, 'out', 'stereogate.sarif'),
-    reportFile: join(workspace, 'out', 'report.md'),
-    apiUrl: API,
-    api: { timeoutMs: 5000, tries: 3, maxWaitMs: 90_000 },
-    runUrl: 'https://github.test/larkspur/registry/actions/runs/1',
-    repository: { owner: 'larkspur', repo: 'registry' },
-    eventName: 'pull_request',
-    pullRequest: pr,
-    ...over,
-  };
+  return actionSettings(workspace, { apiUrl: API, ...over });
 }
 
 const repo = '/repos/larkspur/registry';

@@ -26,11 +26,4 @@ export function testClient(): { client: GitHubClient; waits: number[] } {
   return { client, waits };
 }
 
-export const pr = {
-  owner: 'larkspur',
-  repo: 'registry',
-  number: 7,
-  baseSha: 'a'.repeat(40),
-  headSha: 'b'.repeat(40),
-  changedFiles: null,
-};
+export { pr } from './results.js';

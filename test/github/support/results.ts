@@ -42,3 +42,13 @@ export function result(records: RecordResult[]): AuditResult {
     caution: 'Computed result: the responsible chemist confirms.',
   };
 }
+
+/** Pull request 7 of larkspur/registry, as the API tests and the action tests see it. */
+export const pr = {
+  owner: 'larkspur',
+  repo: 'registry',
+  number: 7,
+  baseSha: 'a'.repeat(40),
+  headSha: 'b'.repeat(40),
+  changedFiles: null,
+};
