@@ -5,6 +5,7 @@
  *   cip     share of the per-record audit time spent in CIP labelling
  *   bulk    bulk audit of 100,000 records (MoleculeNet replicated, invented claims) with 1 and 2 workers
  *   action  a 20-record pull request against a 5,000-record registry vs the pure audit of the same records
+ *   registry  bulk with and without the registry-wide checks, and the folder audit, of the same records
  *   outputs Markdown escaping vs the former escaping; the 10,000-record HTML report opened in chromium
  *   origin  the pull-request audit with an origin on every record vs without; the mapping's bound per record
  * Data: Wu et al., "MoleculeNet", Chem. Sci. 2018, 9, 513 (../shared/data/moleculenet).
@@ -53,6 +54,13 @@ const SECTIONS: [string, Section][] = [
   ['bulk', async (ctx) => (await import('./bulk.js')).benchBulk(ctx)],
   ['cip', async (ctx) => (await import('./cip.js')).benchCip(ctx)],
   ['action', async (ctx) => (await import('./action.js')).benchAction(ctx)],
+  [
+    'registry',
+    async (ctx) =>
+      process.argv.includes('registry')
+        ? (await import('./registry.js')).benchRegistry(ctx)
+        : console.log('only when asked: npm run bench -- registry (BENCH_REGISTRY_RECORDS, default 20,000)'),
+  ],
   ['outputs', async () => (await import('./outputs.js')).benchOutputs()],
   ['origin', async (ctx) => (await import('./origin.js')).benchOrigin(ctx)],
   [
