@@ -9,10 +9,10 @@ import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'no
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { promisify } from 'node:util';
-import { parse } from 'yaml';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { tempRepo, type TempRepo } from '../github/support/git.js';
 import { startFakeGitHub, type FakeGitHub } from './support/fake-github.js';
+import { runnerEnv } from './support/runner-env.js';
 import { startConnectProxy, type ConnectProxy } from './support/proxy.js';
 import { selfSignedCert } from './support/tls.js';
 
@@ -66,30 +66,10 @@ describe.skipIf(!existsSync(bundle))('dist/index.js behind an HTTPS proxy', () =
     const outputs = join(dir, 'outputs');
     writeFileSync(summary, '');
     writeFileSync(outputs, '');
-    const env: Record<string, string> = {
-      PATH: process.env.PATH ?? '',
-      HOME: dir,
-      GITHUB_ACTIONS: 'true',
-      GITHUB_EVENT_NAME: 'pull_request',
-      GITHUB_EVENT_PATH: event,
-      GITHUB_REPOSITORY: 'larkspur/registry',
-      GITHUB_WORKSPACE: repo.dir,
-      GITHUB_API_URL: `https://api.github.test:${port}`,
-      GITHUB_OUTPUT: outputs,
-      GITHUB_STEP_SUMMARY: summary,
-      RUNNER_TEMP: dir,
-      HTTPS_PROXY: proxy.url,
-      NODE_EXTRA_CA_CERTS: join(dir, 'ca.pem'),
-    };
-    const action = parse(readFileSync('action.yml', 'utf8')) as {
-      inputs: Record<string, { default?: string }>;
-    };
-    for (const [name, input] of Object.entries(action.inputs)) {
-      env[`INPUT_${name.replace(/ /g, '_').toUpperCase()}`] =
-        name === 'token' ? 'test-token' : (input.default ?? '');
-    }
-    env['INPUT_SARIF-FILE'] = join(dir, 'out.sarif');
-    env['INPUT_REPORT-FILE'] = join(dir, 'report.md');
+    const env = runnerEnv(
+      { dir, workspace: repo.dir, event, outputs, summary, apiUrl: `https://api.github.test:${port}` },
+      { HTTPS_PROXY: proxy.url, NODE_EXTRA_CA_CERTS: join(dir, 'ca.pem') },
+    );
     env['INPUT_API-TIMEOUT'] = '5';
     const done = await run(process.execPath, [bundle], { cwd: repo.dir, env }).catch(
       (e: { code?: number; stdout?: string; stderr?: string }) => e,

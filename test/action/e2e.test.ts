@@ -9,10 +9,10 @@ import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'no
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { promisify } from 'node:util';
-import { parse } from 'yaml';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { tempRepo, type TempRepo } from '../github/support/git.js';
 import { startFakeGitHub, type FakeGitHub } from './support/fake-github.js';
+import { runnerEnv } from './support/runner-env.js';
 
 const run = promisify(execFile);
 const bundle = resolve('dist/index.js');
@@ -89,31 +89,10 @@ describe.skipIf(!existsSync(bundle))('dist/index.js on a pull request, as the ru
     const summary = join(dir, `summary-${head}`);
     writeFileSync(outputs, '');
     writeFileSync(summary, '');
-    const env: Record<string, string> = {
-      PATH: process.env.PATH ?? '',
-      HOME: dir,
-      GITHUB_ACTIONS: 'true',
-      GITHUB_EVENT_NAME: 'pull_request',
-      GITHUB_EVENT_PATH: event,
-      GITHUB_REPOSITORY: 'larkspur/registry',
-      GITHUB_WORKSPACE: repo.dir,
-      GITHUB_API_URL: gh.url,
-      GITHUB_SERVER_URL: 'https://github.test',
-      GITHUB_RUN_ID: '99',
-      GITHUB_OUTPUT: outputs,
-      GITHUB_STEP_SUMMARY: summary,
-      RUNNER_TEMP: dir,
-    };
-    // The runner sets INPUT_<NAME> (upper case, spaces to '_', dashes kept) for every input, defaults included.
-    const action = parse(readFileSync('action.yml', 'utf8')) as {
-      inputs: Record<string, { default?: string }>;
-    };
-    for (const [name, input] of Object.entries(action.inputs)) {
-      env[`INPUT_${name.replace(/ /g, '_').toUpperCase()}`] =
-        name === 'token' ? 'test-token' : (input.default ?? '');
-    }
-    env['INPUT_SARIF-FILE'] = join(dir, 'out.sarif');
-    env['INPUT_REPORT-FILE'] = join(dir, 'report.md');
+    const env = runnerEnv(
+      { dir, workspace: repo.dir, event, outputs, summary, apiUrl: gh.url },
+      { GITHUB_SERVER_URL: 'https://github.test', GITHUB_RUN_ID: '99' },
+    );
     try {
       const done = await run(process.execPath, [bundle], { cwd: repo.dir, env, maxBuffer: 64 * 1024 * 1024 });
       return {
