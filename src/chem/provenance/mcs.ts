@@ -199,6 +199,17 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
   };
   const decided = (u: number): boolean => map[u] >= 0 || excluded[u] === 1;
 
+  /** Maps u to each candidate in turn and grows from there; true when the search is over (done or hopeless). */
+  const tryEach = (u: number, candidates: readonly number[]): boolean => {
+    for (const v of candidates) {
+      if (++steps > budget) throw new Budget();
+      mapAtom(u, v);
+      grow();
+      unmapAtom(u);
+      if (done() || hopeless()) return true;
+    }
+    return false;
+  };
   const grow = (): void => {
     if (hopeless()) return;
     // the frontier: undecided atoms next to the piece
@@ -236,13 +247,7 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
       if (hopeless()) return;
       const u = pick;
       pickCands.sort((x, y) => gain(u, y) - gain(u, x) || x - y);
-      for (const v of pickCands) {
-        if (++steps > budget) throw new Budget();
-        mapAtom(u, v);
-        grow();
-        unmapAtom(u);
-        if (done() || hopeless()) return;
-      }
+      if (tryEach(u, pickCands)) return;
       excludeAtom(u, 1);
       grow();
       excludeAtom(u, -1);
@@ -251,7 +256,6 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
     }
   };
 
-  // Seeds: rarest elements of the product first (fewest candidates), then input order.
   // Seeds: atoms whose whole surroundings occur fewest times in the product first (but at least once), then the
   // rarest elements; each tried first on the product atoms that look most alike.
   const far = new Map<number, number>();
@@ -271,13 +275,7 @@ export function commonSubstructure(a: McsGraph, b: McsGraph, options: McsOptions
       const starts: number[] = [];
       for (let v0 = 0; v0 < b.n; v0++) if (avail[v0] && b.element[v0] === a.element[u0]) starts.push(v0);
       starts.sort((x, y) => likeness(u0, y) - likeness(u0, x) || x - y);
-      for (const v0 of starts) {
-        if (++steps > budget) throw new Budget();
-        mapAtom(u0, v0);
-        grow();
-        unmapAtom(u0);
-        if (done() || hopeless()) break;
-      }
+      tryEach(u0, starts);
       excludeAtom(u0, 1);
     }
   } catch (e) {
