@@ -12,27 +12,12 @@ import { DEFAULT_CONFIG } from '../../src/audit/config.js';
 import { runBulkAudit } from '../../src/bulk/run.js';
 import { readItems } from '../../src/bulk/sources.js';
 import { jsonWriter } from '../../src/bulk/writers.js';
+import { ethanolV2000 } from '../chem/read/molfile-examples.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'stereogate-loss-'));
 
-// ethanol, drawn by hand in V2000 (three header lines, counts line on line 4)
-const mol = (id: string): string =>
-  [
-    id,
-    '  stereogate',
-    '',
-    '  3  2  0  0  0  0  0  0  0  0999 V2000',
-    '    0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
-    '    1.2990    0.7500    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
-    '    2.5981    0.0000    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0',
-    '  1  2  1  0',
-    '  2  3  1  0',
-    'M  END',
-    '> <stereo_form>',
-    'achiral',
-    '',
-    '',
-  ].join('\n');
+// ethanol as an SD record with its declared form (the $$$$ line is left to each test)
+const mol = (id: string): string => [...ethanolV2000(id), '> <stereo_form>', 'achiral', '', ''].join('\n');
 
 async function items(name: string, text: string) {
   const p = join(dir, name);

@@ -7,19 +7,9 @@ import { describe, expect, it } from 'vitest';
 import { parseMolfile } from '../../../src/chem/read/molfile.js';
 import { readSdRecords } from '../../../src/chem/read/index.js';
 import { readStructure } from '../../../src/chem/read/index.js';
+import { ethanolV2000 } from './molfile-examples.js';
 
-const ethanol = [
-  'LX-00042',
-  '  stereogate',
-  '',
-  '  3  2  0  0  0  0  0  0  0  0999 V2000',
-  '    0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
-  '    1.2990    0.7500    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
-  '    2.5981    0.0000    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0',
-  '  1  2  1  0',
-  '  2  3  1  0',
-  'M  END',
-];
+const ethanol = ethanolV2000('LX-00042');
 
 const v3000 = [
   'LX-00043',

@@ -6,6 +6,22 @@ export function ok(r: ReadResult): Structure {
   return r.structure;
 }
 
+/** Ethanol drawn by hand in V2000 (three header lines, counts line on line 4), `id` on its name line; lines. */
+export function ethanolV2000(id: string): string[] {
+  return [
+    id,
+    '  stereogate',
+    '',
+    '  3  2  0  0  0  0  0  0  0  0999 V2000',
+    '    0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
+    '    1.2990    0.7500    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0',
+    '    2.5981    0.0000    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0',
+    '  1  2  1  0',
+    '  2  3  1  0',
+    'M  END',
+  ];
+}
+
 // CTfile spec alanine example (charges by M  CHG, 13C by M  ISO, wedge 1->3, chiral flag set).
 export const ALANINE_V2000 = `L-Alanine (13C)
   -ISIS-  01119511002D
