@@ -4,15 +4,13 @@
  * CR inside a field does not split a row; an id holding the delimiter or a line break is a finding. Records read
  * always equal records reported. SD layout: CTfile format specification ("SDfile"); CSV quoting: RFC 4180.
  */
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_CONFIG } from '../../src/audit/config.js';
-import { runBulkAudit } from '../../src/bulk/run.js';
 import { readItems } from '../../src/bulk/sources.js';
-import { jsonWriter } from '../../src/bulk/writers.js';
 import { ethanolV2000 } from '../chem/read/molfile-examples.js';
+import { auditExport } from './inline-audit.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'stereogate-loss-'));
 
@@ -27,23 +25,7 @@ async function items(name: string, text: string) {
   return out;
 }
 
-async function audit(name: string, text: string) {
-  const p = join(dir, name);
-  writeFileSync(p, text);
-  const json = join(dir, `${name}.json`);
-  const run = await runBulkAudit({
-    inputs: [p],
-    mapping: {},
-    config: { ...DEFAULT_CONFIG },
-    workers: 0,
-    progress: 'none',
-    writers: [jsonWriter(json)],
-  });
-  const out = JSON.parse(readFileSync(json, 'utf8')) as {
-    records: { id: string; findings: { check: string; message: string; field: string | null }[] }[];
-  };
-  return { run, records: out.records };
-}
+const audit = (name: string, text: string) => auditExport(join(dir, name), text);
 
 describe('SD files with lost $$$$ lines', () => {
   it('300 records, every tenth $$$$ lost: 300 records reported, 30 of them told their $$$$ is missing', async () => {

@@ -5,16 +5,14 @@
  * invented Larkspur scheme (LX-nnnnn).
  */
 import fc from 'fast-check';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { stringify } from 'yaml';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_CONFIG } from '../../src/audit/config.js';
 import { runAudit } from '../../src/audit/run.js';
-import { runBulkAudit } from '../../src/bulk/run.js';
-import { jsonWriter } from '../../src/bulk/writers.js';
 import { tmpRegistry } from '../registry/tmp-registry.js';
+import { auditExport } from '../bulk/inline-audit.js';
 
 const SMILES = [
   'CCO',
@@ -96,25 +94,7 @@ describe('fuzz: record folders through the record audit', () => {
 const dir = mkdtempSync(join(tmpdir(), 'stereogate-fuzz-'));
 let runNo = 0;
 
-async function bulk(
-  name: string,
-  text: string,
-): Promise<{ records: { id: string | null; findings: { check: string }[] }[] }> {
-  const p = join(dir, `${++runNo}-${name}`);
-  writeFileSync(p, text);
-  const json = `${p}.json`;
-  await runBulkAudit({
-    inputs: [p],
-    mapping: {},
-    config: { ...DEFAULT_CONFIG },
-    workers: 0,
-    progress: 'none',
-    writers: [jsonWriter(json)],
-  });
-  return JSON.parse(readFileSync(json, 'utf8')) as {
-    records: { id: string | null; findings: { check: string }[] }[];
-  };
-}
+const bulk = (name: string, text: string) => auditExport(join(dir, `${++runNo}-${name}`), text);
 
 /** A field of a row, sometimes damaged: a stray quote at its start, a lone CR, the delimiter inside quotes. */
 const cell = (base: fc.Arbitrary<string>, delimiter: string) =>
