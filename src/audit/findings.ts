@@ -7,8 +7,6 @@ import { lineOf } from '../registry/positions.js';
 import type { LoadedRecord } from '../registry/types.js';
 import type { Finding, Severity } from './types.js';
 
-const RANK: Record<Severity, number> = { note: 0, warning: 1, error: 2 };
-
 /** Id of the findings the audit itself makes from a record's schema / syntax problems. */
 export const SCHEMA_CHECK_ID = 'record-schema';
 /** Id of the finding made when a check throws. */

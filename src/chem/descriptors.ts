@@ -4,7 +4,7 @@
  * `rac-(1R,2S)`, `(1R*,2S*)` — or at the front of a whole name — `(1R,2S,5R)-(−)-menthol`, `meso-2,3-dibromobutane`.
  * Bad input is data: every problem comes back with the character offset where it was found.
  */
-import type { CipLabel, StereoUnitFact } from './facts.js';
+import type { CipLabel } from './facts.js';
 
 export type DescriptorMode = 'absolute' | 'racemic' | 'relative' | 'none';
 export type RotationSign = '+' | '-' | '±';
