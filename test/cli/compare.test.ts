@@ -36,3 +36,18 @@ suite('stereogate compare', () => {
     expect((await cli(['compare', 'CCO', 'C1C'])).code).toBe(2); // an unreadable structure: input error
   });
 });
+
+suite('the caution on describe and compare (every report carries it once)', () => {
+  it('text output ends with it; JSON keeps standard output parseable and puts it on standard error', async () => {
+    for (const args of [
+      ['compare', 'C[C@H](N)C(=O)O', 'C[C@@H](N)C(=O)O'],
+      ['describe', 'C[C@H](N)C(=O)O'],
+    ]) {
+      const text = await cli(args);
+      expect(text.out.match(/responsible chemist must confirm/g)).toHaveLength(1);
+      const json = await cli([...args, '--format', 'json']);
+      expect(() => JSON.parse(json.out)).not.toThrow();
+      expect(json.err).toContain('responsible chemist must confirm');
+    }
+  });
+});

@@ -1,4 +1,5 @@
 /** `stereogate compare <A> <B> [--format json|text]` */
+import { CAUTION } from '../../audit/caution.js';
 import { relate } from '../../chem/index.js';
 import { parseCommandArgs } from '../args.js';
 import { EXIT_OK, EXIT_USAGE, type Command } from '../command.js';
@@ -40,8 +41,11 @@ export const compareCommand: Command = {
     }
     if (!a.ok || !b.ok) return EXIT_USAGE;
     const facts = relate(a.structure, b.structure);
-    if (values.format === 'json') io.out(JSON.stringify(facts, null, 2));
-    else io.out(compareText(facts));
+    // The caution once per report: after the text, or on standard error beside JSON (stdout stays parseable).
+    if (values.format === 'json') {
+      io.out(JSON.stringify(facts, null, 2));
+      io.err(CAUTION);
+    } else io.out(`${compareText(facts)}\n\n${CAUTION}`);
     return EXIT_OK;
   },
 };

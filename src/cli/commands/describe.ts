@@ -1,4 +1,5 @@
 /** `stereogate describe <SMILES|file> [--format json|text] [--list] [--max N]` */
+import { CAUTION } from '../../audit/caution.js';
 import { describe } from '../../chem/index.js';
 import { parseCommandArgs } from '../args.js';
 import { EXIT_OK, EXIT_USAGE, UsageError, type Command } from '../command.js';
@@ -39,8 +40,14 @@ export const describeCommand: Command = {
     }
     const facts = describe(loaded.structure, { listIsomers: values.list === true, maxIsomers: max });
     for (const w of loaded.warnings) facts.remarks.unshift(`reading: ${w.message}`);
-    if (values.format === 'json') io.out(JSON.stringify(facts, null, 2));
-    else io.out(describeText(facts, loaded.source === 'SMILES argument' ? positionals[0] : loaded.source));
+    // The caution once per report: after the text, or on standard error beside JSON (stdout stays parseable).
+    if (values.format === 'json') {
+      io.out(JSON.stringify(facts, null, 2));
+      io.err(CAUTION);
+    } else
+      io.out(
+        `${describeText(facts, loaded.source === 'SMILES argument' ? positionals[0] : loaded.source)}\n\n${CAUTION}`,
+      );
     return EXIT_OK;
   },
 };
