@@ -18172,6 +18172,14 @@ function isDigit(c) {
 function fail3(code, message, offset) {
   return { ok: false, error: { code, message, at: { offset } } };
 }
+function readIndex(s, at, atomCount, code) {
+  let v = 0;
+  let j = at;
+  while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
+  if (v >= atomCount)
+    return fail3(code, `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at);
+  return { v, end: j };
+}
 function parseCxExtension(s, start, atomCount) {
   const n = s.length;
   const groups = objectList();
@@ -18185,17 +18193,10 @@ function parseCxExtension(s, start, atomCount) {
       const count3 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
       let j2 = i + 3;
       while (isDigit(s.charCodeAt(j2))) {
-        let v = 0;
-        const at = j2;
-        while (isDigit(s.charCodeAt(j2)) && j2 - at < 9) v = v * 10 + s.charCodeAt(j2++) - 48;
-        if (v >= atomCount) {
-          return fail3(
-            "cxsmiles-bad-radical",
-            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
-            at
-          );
-        }
-        radicals.set(v, count3);
+        const r = readIndex(s, j2, atomCount, "cxsmiles-bad-radical");
+        if ("ok" in r) return r;
+        j2 = r.end;
+        radicals.set(r.v, count3);
         if (s.charCodeAt(j2) === 44 && isDigit(s.charCodeAt(j2 + 1))) j2++;
         else break;
       }
@@ -18229,17 +18230,10 @@ function parseCxExtension(s, start, atomCount) {
       for (; ; ) {
         if (!isDigit(s.charCodeAt(j)))
           return fail3("cxsmiles-bad-group", "expected an atom index in the stereo group", j);
-        let v = 0;
-        const at = j;
-        while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
-        if (v >= atomCount) {
-          return fail3(
-            "cxsmiles-bad-group",
-            `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`,
-            at
-          );
-        }
-        atoms.push(v);
+        const r = readIndex(s, j, atomCount, "cxsmiles-bad-group");
+        if ("ok" in r) return r;
+        j = r.end;
+        atoms.push(r.v);
         const d = s.charCodeAt(j);
         if (d === 44 && isDigit(s.charCodeAt(j + 1))) {
           j++;
@@ -22639,7 +22633,7 @@ var init_cip = __esm({
 function unitImage(target, u, map) {
   const j = target.unitOfAtom[map[u.atoms[0]]];
   if (u.kind !== "planar" || j < 0) return j;
-  return target.planar.planarOf[j];
+  return j < target.planar.planarOf.length ? target.planar.planarOf[j] : -1;
 }
 function addPlanarUnits(s, g, rings, units) {
   const hosts = [];
@@ -22657,6 +22651,7 @@ function addPlanarUnits(s, g, rings, units) {
     const z = (u.tokens[0] === ra ? 0 : 1) ^ (u.tokens[2] === rb ? 0 : 1);
     hosts.push({ k, z, ra, rb });
   }
+  if (hosts.length === 0) return NO_PLANAR;
   const m = units.length + hosts.length;
   const links = {
     host: new Int32Array(m).fill(-1),
@@ -22730,11 +22725,17 @@ function ringNeighbour2(ring, x, other) {
   const next = ring[(k + 1) % ring.length];
   return prev === other ? next : prev;
 }
-var MIN_TWIST_SINE;
+var NO_PLANAR, MIN_TWIST_SINE;
 var init_planar = __esm({
   "src/chem/perceive/planar.ts"() {
     "use strict";
     init_units();
+    NO_PLANAR = Object.freeze({
+      host: new Int32Array(0),
+      planarOf: new Int32Array(0),
+      zBit: new Uint8Array(0),
+      any: false
+    });
     MIN_TWIST_SINE = 5e-3;
   }
 });
@@ -23064,18 +23065,19 @@ function unitGroup(p) {
     reflect,
     couplings: p.couplings,
     // empty without planar units, so every loop over them costs nothing
-    planarHost: p.planar.any ? p.planar.host : NO_PLANAR,
+    planarHost: p.planar.any ? p.planar.host : NO_PLANAR2,
     planarZ: p.planar.zBit,
     complete: true
   };
   if (m === 0 || trivialOnUnits(p)) return group;
+  const cap2 = Math.min(MAX_GROUP, Math.max(64, Math.floor(MAX_GROUP_WORK / m)));
   const seen = /* @__PURE__ */ new Set([signature(group.perms[0], group.flips[0])]);
   const key3 = [];
   for (const u of units) key3.push(...u.atoms);
   const res = automorphisms(p.structure, {
     key: key3,
     colour: p.classes,
-    maxResults: MAX_GROUP * 4,
+    maxResults: cap2 * 4,
     onMapping: (map) => {
       const perm = new Int32Array(m);
       const flip2 = new Uint8Array(m);
@@ -23099,10 +23101,10 @@ function unitGroup(p) {
         group.flips.push(flip2);
         group.atomMaps.push(Int32Array.from(map));
       }
-      return group.perms.length < MAX_GROUP;
+      return group.perms.length < cap2;
     }
   });
-  group.complete = res.complete && group.perms.length < MAX_GROUP;
+  group.complete = res.complete && group.perms.length < cap2;
   return group;
 }
 function trivialOnUnits(p) {
@@ -23282,7 +23284,7 @@ function chiralityOf(g, x, defined) {
   if (open.length === 0) {
     if (!feasible(g, x)) return { chiral: null, witness: -1, impossible: true };
     const k = elementMapping(g, x, mirrorState(g, x));
-    return { chiral: k < 0, witness: k };
+    return { chiral: k < 0 ? g.complete ? true : null : false, witness: k };
   }
   let someAchiral = false;
   for (let k = 0; k < g.perms.length && !someAchiral; k++)
@@ -23344,7 +23346,7 @@ function mirror(s) {
   );
   return restructure(s, atoms, bonds, stereo, s.groups);
 }
-var MAX_GROUP, NO_PLANAR, MAX_ENUMERATED_UNDEFINED;
+var MAX_GROUP, MAX_GROUP_WORK, NO_PLANAR2, MAX_ENUMERATED_UNDEFINED;
 var init_group = __esm({
   "src/chem/symmetry/group.ts"() {
     "use strict";
@@ -23353,7 +23355,8 @@ var init_group = __esm({
     init_solve();
     init_make();
     MAX_GROUP = 2e4;
-    NO_PLANAR = new Int32Array(0);
+    MAX_GROUP_WORK = 2e6;
+    NO_PLANAR2 = new Int32Array(0);
     MAX_ENUMERATED_UNDEFINED = 14;
   }
 });
@@ -45980,7 +45983,9 @@ function analyse(input, opts = {}) {
     }
   }
   if (!group.complete)
-    p.remarks.push("symmetry search stopped at its limit: stereoisomer counts may be too high");
+    p.remarks.push(
+      "symmetry search stopped at its limit: stereoisomer counts are open (stereoisomers.open), and so are chirality and relations that a symmetry not found could change"
+    );
   const chirality = chiralityOf(group, state, defined);
   return { norm, p, group, state, defined, reported, chirality };
 }
@@ -46287,6 +46292,7 @@ function describe(input, opts = {}) {
   const dropped = mixture ? mixture.beyondParent : copies;
   const counted = dropped.length > 0 ? analyse(withoutCopies(s, comps, dropped), perceiveOpts) : a;
   const stereoisomers = countStereoisomers(counted.group, counted.p.units.length);
+  if (!counted.group.complete) stereoisomers.open = true;
   const drawnChiral = mixture ? mixture.chiral.some((c) => c === true) ? true : mixture.chiral.every((c) => c === false) ? false : null : counted.chirality.chiral;
   const unstatable = units.filter((u) => u.formatCannotState);
   const openAxes = unstatable.filter((u) => u.kind === "biaryl");
@@ -46588,7 +46594,6 @@ function composition(input) {
     );
     if (same) {
       same.copies++;
-      same.copyAtoms.push(c);
       continue;
     }
     let drawnMemo = null;
@@ -46599,7 +46604,6 @@ function composition(input) {
       drawnKey: drawnSub === sub3 ? key3 : constitutionKey(drawnSub),
       formula: molecularFormula(sub3),
       atoms: c,
-      copyAtoms: [c],
       copies: 1,
       structure: sub3,
       analysis,
@@ -46676,6 +46680,13 @@ function stereoRelation(pa, pb, iso) {
   const xB = pb.state;
   if (elementMapping(g, y, xB) >= 0)
     return { ...none, relation: "identical", explanation: "the same stereoisomer" };
+  if (!g.complete) {
+    return {
+      ...none,
+      relation: "same-constitution",
+      explanation: "same constitution; the symmetry search stopped at its limit, so the relation is left open"
+    };
+  }
   const labA = labelMap(pa);
   const labB = labelMap(pb);
   const unitFact = (j, iA) => {
@@ -46760,6 +46771,95 @@ var init_stereo = __esm({
   }
 });
 
+// src/chem/relate/multiset.ts
+function multisetRelation(inA, inB, asDrawn) {
+  const an = (x) => asDrawn ? x.drawnAnalysis() : x.analysis();
+  const several = /* @__PURE__ */ new Set();
+  for (const xs of [inA, inB]) {
+    const seen = /* @__PURE__ */ new Set();
+    for (const x of xs) (seen.has(x.key) ? several : seen).add(x.key);
+  }
+  const rel = inA.map(
+    (x) => inB.map((y) => {
+      if (x.key !== y.key) return null;
+      const iso = isomorphic(an(x).p.structure, an(y).p.structure);
+      return iso ? stereoRelation(an(x), an(y), iso) : null;
+    })
+  );
+  const none = {
+    differingUnits: [],
+    relabelledUnits: [],
+    epimers: false
+  };
+  if (rel.some((row) => row.some((r) => r !== null && r.relation === "same-constitution"))) {
+    return {
+      ...none,
+      relation: "same-constitution",
+      explanation: "same constitution; undefined stereo leaves the relation open"
+    };
+  }
+  const countsMatch = (i, j) => !several.has(inA[i].key) || inA[i].copies === inB[j].copies;
+  const pairing = (ok) => {
+    const used2 = /* @__PURE__ */ new Set();
+    const out = [];
+    for (let i = 0; i < inA.length; i++) {
+      const j = inB.findIndex((_y, k) => !used2.has(k) && rel[i][k] !== null && countsMatch(i, k) && ok(i, k));
+      if (j < 0) return null;
+      used2.add(j);
+      out.push(j);
+    }
+    return used2.size === inB.length ? out : null;
+  };
+  if (pairing((i, j) => rel[i][j].relation === "identical"))
+    return { ...none, relation: "identical", explanation: "the same stereoisomers" };
+  const mirrored2 = pairing((i, j) => {
+    const r = rel[i][j].relation;
+    return r === "enantiomers" || r === "identical" && an(inA[i]).chirality.chiral === false;
+  });
+  if (mirrored2) {
+    const differingUnits2 = mirrored2.flatMap((j, i) => rel[i][j].differingUnits);
+    return {
+      ...none,
+      relation: "enantiomers",
+      differingUnits: differingUnits2,
+      explanation: "mirror images that are not superimposable"
+    };
+  }
+  const cost = (r) => r.relation === "identical" ? 0 : r.differingUnits.length || 1;
+  const used = /* @__PURE__ */ new Set();
+  const pairs = [];
+  for (let i = 0; i < inA.length; i++) {
+    let best = -1;
+    for (let j = 0; j < inB.length; j++) {
+      const r = rel[i][j];
+      if (r === null || used.has(j)) continue;
+      if (best < 0 || cost(r) < cost(rel[i][best])) best = j;
+    }
+    if (best < 0) continue;
+    used.add(best);
+    pairs.push([i, best]);
+  }
+  const differing = pairs.filter(([i, j]) => rel[i][j].relation !== "identical");
+  const differingUnits = differing.flatMap(([i, j]) => rel[i][j].differingUnits);
+  const relabelledUnits = differing.flatMap(([i, j]) => rel[i][j].relabelledUnits);
+  const epimers = differing.length === 1 && differingUnits.length === 1 && rel[differing[0][0]][differing[0][1]].epimers;
+  const words = differing.map(([i, j]) => `${inA[i].formula} ${rel[i][j].explanation}`).join("; ");
+  return {
+    relation: "diastereomers",
+    differingUnits,
+    relabelledUnits,
+    epimers,
+    explanation: `diastereomers as a whole: ${words}${differing.length < pairs.length ? "; the other molecules the same" : ""}`
+  };
+}
+var init_multiset = __esm({
+  "src/chem/relate/multiset.ts"() {
+    "use strict";
+    init_graph();
+    init_stereo();
+  }
+});
+
 // src/chem/relate/index.ts
 function relate(sa, sb) {
   const A = composition(sa);
@@ -46794,11 +46894,15 @@ function relate(sa, sb) {
   if (mixed) return { ...base, relation: "same-constitution", explanation: mixed + salt };
   const asDrawn = sameDrawnForms(inA, inB);
   const whole = inA.length > 1 || inB.length > 1;
-  const ta = whole ? analyse(together(A, inA, asDrawn)) : asDrawn ? pa.drawnAnalysis() : pa.analysis();
-  const tb = whole ? analyse(together(B, inB, asDrawn)) : asDrawn ? pb.drawnAnalysis() : pb.analysis();
-  const iso = isomorphic(ta.p.structure, tb.p.structure);
-  if (!iso) return constitutional();
-  const r = stereoRelation(ta, tb, iso);
+  let r;
+  if (whole) r = multisetRelation(inA, inB, asDrawn);
+  else {
+    const ta = asDrawn ? pa.drawnAnalysis() : pa.analysis();
+    const tb = asDrawn ? pb.drawnAnalysis() : pb.analysis();
+    const iso = isomorphic(ta.p.structure, tb.p.structure);
+    if (!iso) return constitutional();
+    r = stereoRelation(ta, tb, iso);
+  }
   const together_ = whole && r.relation !== "same-constitution" ? ` (the molecules taken together: ${inB.map((x) => x.formula).join(" + ")})` : "";
   return {
     ...base,
@@ -46830,12 +46934,6 @@ function speciesMismatch(inA, inB) {
       return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
   return null;
-}
-function together(c, xs, asDrawn) {
-  const kinds = /* @__PURE__ */ new Map();
-  for (const x of xs) kinds.set(x.key, (kinds.get(x.key) ?? 0) + 1);
-  const atoms = xs.flatMap((x) => (kinds.get(x.key) ?? 0) > 1 ? x.copyAtoms.flat() : x.atoms).sort((p, q) => p - q);
-  return extractAtoms(asDrawn ? c.drawn : c.neutral, atoms);
 }
 function sameDrawnForms(inA, inB) {
   const keys = (xs) => xs.map((x) => x.drawnKey).sort().join(" ");
@@ -46898,9 +46996,8 @@ var init_relate = __esm({
   "src/chem/relate/index.ts"() {
     "use strict";
     init_graph();
-    init_describe2();
-    init_normalize();
     init_composition();
+    init_multiset();
     init_stereo();
   }
 });
@@ -46947,6 +47044,160 @@ var init_chem = __esm({
     init_perceive2();
     init_labels();
     init_types();
+  }
+});
+
+// src/chem/descriptors-compare.ts
+function key2(label, axialUnit) {
+  if (axialUnit && label === "R") return "M";
+  if (axialUnit && label === "S") return "P";
+  return label;
+}
+function mirrored(k) {
+  return MIRROR[k] ?? k;
+}
+function unitKey2(u) {
+  return u.label === null ? null : key2(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== "cumulene");
+}
+function itemKey(it) {
+  return key2(it.label, it.axial === true);
+}
+function unitLocants(u) {
+  return u.locants.filter((l) => l !== null).sort((a, b) => a - b);
+}
+function count2(keys) {
+  const c = {};
+  for (const k of keys) c[k] = (c[k] ?? 0) + 1;
+  return c;
+}
+function sameCounts(a, b) {
+  const ks = /* @__PURE__ */ new Set([...Object.keys(a), ...Object.keys(b)]);
+  for (const k of ks) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
+  return true;
+}
+function invertCounts(c) {
+  const o = {};
+  for (const [k, v] of Object.entries(c)) o[mirrored(k)] = (o[mirrored(k)] ?? 0) + v;
+  return o;
+}
+function compareDescriptors(parsed, units, options = {}) {
+  const defined = units.filter((u) => u.defined && u.label !== null);
+  const result2 = {
+    method: "none",
+    whyNotPerLocant: null,
+    countsDecide: false,
+    agrees: true,
+    matchedInverted: false,
+    mismatches: [],
+    notStereoUnits: [],
+    undefinedAt: [],
+    unlisted: [],
+    declaredCounts: count2(parsed.items.map(itemKey)),
+    computedCounts: count2(defined.map((u) => unitKey2(u)))
+  };
+  if (parsed.items.length === 0) {
+    result2.whyNotPerLocant = "the descriptor cites no configurations";
+    return result2;
+  }
+  const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
+  const mapped = units.some((u) => unitLocants(u).length > 0);
+  const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
+  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
+  if (mapped && numeric || single) {
+    result2.method = single ? "per-unit" : "per-locant";
+    const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
+    const pairs = single ?? [];
+    if (!single) {
+      for (const it of parsed.items) {
+        const u = byLocant(Number(it.locant));
+        if (!u) result2.notStereoUnits.push(it.locant);
+        else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
+        else pairs.push({ it, u });
+      }
+    }
+    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
+      locant: it.locant ?? "",
+      declared: it.pair ?? it.label + (it.axial ? "a" : ""),
+      computed: u.label,
+      atoms: u.atoms
+    }));
+    const direct2 = mismatchesFor(false);
+    const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
+    result2.matchedInverted = mayInvert && inverted2.length < direct2.length;
+    result2.mismatches = result2.matchedInverted ? inverted2 : direct2;
+    const cited = new Set(pairs.map((p) => p.u));
+    for (const u of defined) {
+      if (!cited.has(u)) {
+        result2.unlisted.push({
+          locant: single ? null : unitLocants(u)[0]?.toString() ?? null,
+          label: u.label,
+          atoms: u.atoms
+        });
+      }
+    }
+    result2.agrees = result2.mismatches.length === 0 && result2.notStereoUnits.length === 0 && result2.undefinedAt.length === 0;
+    return result2;
+  }
+  result2.method = "counts";
+  result2.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
+  const direct = sameCounts(result2.declaredCounts, result2.computedCounts);
+  const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
+  result2.agrees = direct || inverted;
+  result2.matchedInverted = !direct && inverted;
+  result2.countsDecide = result2.agrees && countsDecide(parsed.items, units, mayInvert);
+  return result2;
+}
+function kindOfKey(k) {
+  if (k === "R" || k === "S") return "RS";
+  if (k === "r" || k === "s") return "rs";
+  if (k === "M" || k === "P") return "MP";
+  if (k === "m" || k === "p") return "mp";
+  if (k === "E" || k === "Z" || k === "e" || k === "z") return "EZ";
+  return "other";
+}
+function kindOfUnit(u) {
+  const k = unitKey2(u);
+  if (k !== null) return kindOfKey(k);
+  if (u.kind === "tetrahedral") return u.pseudoasymmetric ? "rs" : "RS";
+  if (u.kind === "double-bond") return "EZ";
+  if (u.kind === "allene" || u.kind === "biaryl") return "MP";
+  return "other";
+}
+function matchOnePerKind(items, units) {
+  if (units.some((u) => kindOfUnit(u) === "other")) return null;
+  const pairs = [];
+  for (const it of items) {
+    const kind = kindOfKey(itemKey(it));
+    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
+    const sameKindUnits = units.filter((u2) => kindOfUnit(u2) === kind);
+    if (kind === "other" || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
+    const u = sameKindUnits[0];
+    if (!u.defined || u.label === null) return null;
+    pairs.push({ it, u });
+  }
+  return pairs;
+}
+function countsDecide(items, units, mayInvert) {
+  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
+  let chiralUnits = 0;
+  let uniform = true;
+  for (const kind of kinds) {
+    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
+    if (kind === "other" || ofKind.some((u) => !u.defined || u.label === null)) return false;
+    if (kind === "RS" || kind === "MP") chiralUnits += ofKind.length;
+    if (new Set(ofKind.map((u) => unitKey2(u))).size > 1) {
+      if (!(mayInvert && kind === "RS" && ofKind.length === 2)) return false;
+      uniform = false;
+    }
+  }
+  return uniform || chiralUnits === 2;
+}
+var MIRROR, AXIAL_KINDS;
+var init_descriptors_compare = __esm({
+  "src/chem/descriptors-compare.ts"() {
+    "use strict";
+    MIRROR = { R: "S", S: "R", M: "P", P: "M" };
+    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene", "helix"]);
   }
 });
 
@@ -47173,154 +47424,11 @@ function locantOrder(locant) {
   const n = parseInt(locant, 10);
   return Number.isNaN(n) ? Number.MAX_SAFE_INTEGER : n * 100 + locant.length;
 }
-function key2(label, axialUnit) {
-  if (axialUnit && label === "R") return "M";
-  if (axialUnit && label === "S") return "P";
-  return label;
-}
-function mirrored(k) {
-  return MIRROR[k] ?? k;
-}
-function unitKey2(u) {
-  return u.label === null ? null : key2(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== "cumulene");
-}
-function itemKey(it) {
-  return key2(it.label, it.axial === true);
-}
-function unitLocants(u) {
-  return u.locants.filter((l) => l !== null).sort((a, b) => a - b);
-}
-function count2(keys) {
-  const c = {};
-  for (const k of keys) c[k] = (c[k] ?? 0) + 1;
-  return c;
-}
-function sameCounts(a, b) {
-  const ks = /* @__PURE__ */ new Set([...Object.keys(a), ...Object.keys(b)]);
-  for (const k of ks) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
-  return true;
-}
-function invertCounts(c) {
-  const o = {};
-  for (const [k, v] of Object.entries(c)) o[mirrored(k)] = (o[mirrored(k)] ?? 0) + v;
-  return o;
-}
-function compareDescriptors(parsed, units, options = {}) {
-  const defined = units.filter((u) => u.defined && u.label !== null);
-  const result2 = {
-    method: "none",
-    whyNotPerLocant: null,
-    countsDecide: false,
-    agrees: true,
-    matchedInverted: false,
-    mismatches: [],
-    notStereoUnits: [],
-    undefinedAt: [],
-    unlisted: [],
-    declaredCounts: count2(parsed.items.map(itemKey)),
-    computedCounts: count2(defined.map((u) => unitKey2(u)))
-  };
-  if (parsed.items.length === 0) {
-    result2.whyNotPerLocant = "the descriptor cites no configurations";
-    return result2;
-  }
-  const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
-  const mapped = units.some((u) => unitLocants(u).length > 0);
-  const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
-  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
-  if (mapped && numeric || single) {
-    result2.method = single ? "per-unit" : "per-locant";
-    const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
-    const pairs = single ?? [];
-    if (!single) {
-      for (const it of parsed.items) {
-        const u = byLocant(Number(it.locant));
-        if (!u) result2.notStereoUnits.push(it.locant);
-        else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
-        else pairs.push({ it, u });
-      }
-    }
-    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
-      locant: it.locant ?? "",
-      declared: it.pair ?? it.label + (it.axial ? "a" : ""),
-      computed: u.label,
-      atoms: u.atoms
-    }));
-    const direct2 = mismatchesFor(false);
-    const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
-    result2.matchedInverted = mayInvert && inverted2.length < direct2.length;
-    result2.mismatches = result2.matchedInverted ? inverted2 : direct2;
-    const cited = new Set(pairs.map((p) => p.u));
-    for (const u of defined) {
-      if (!cited.has(u)) {
-        result2.unlisted.push({
-          locant: single ? null : unitLocants(u)[0]?.toString() ?? null,
-          label: u.label,
-          atoms: u.atoms
-        });
-      }
-    }
-    result2.agrees = result2.mismatches.length === 0 && result2.notStereoUnits.length === 0 && result2.undefinedAt.length === 0;
-    return result2;
-  }
-  result2.method = "counts";
-  result2.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
-  const direct = sameCounts(result2.declaredCounts, result2.computedCounts);
-  const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
-  result2.agrees = direct || inverted;
-  result2.matchedInverted = !direct && inverted;
-  result2.countsDecide = result2.agrees && countsDecide(parsed.items, units, mayInvert);
-  return result2;
-}
-function kindOfKey(k) {
-  if (k === "R" || k === "S") return "RS";
-  if (k === "r" || k === "s") return "rs";
-  if (k === "M" || k === "P") return "MP";
-  if (k === "m" || k === "p") return "mp";
-  if (k === "E" || k === "Z" || k === "e" || k === "z") return "EZ";
-  return "other";
-}
-function kindOfUnit(u) {
-  const k = unitKey2(u);
-  if (k !== null) return kindOfKey(k);
-  if (u.kind === "tetrahedral") return u.pseudoasymmetric ? "rs" : "RS";
-  if (u.kind === "double-bond") return "EZ";
-  if (u.kind === "allene" || u.kind === "biaryl") return "MP";
-  return "other";
-}
-function matchOnePerKind(items, units) {
-  if (units.some((u) => kindOfUnit(u) === "other")) return null;
-  const pairs = [];
-  for (const it of items) {
-    const kind = kindOfKey(itemKey(it));
-    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
-    const sameKindUnits = units.filter((u2) => kindOfUnit(u2) === kind);
-    if (kind === "other" || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
-    const u = sameKindUnits[0];
-    if (!u.defined || u.label === null) return null;
-    pairs.push({ it, u });
-  }
-  return pairs;
-}
-function countsDecide(items, units, mayInvert) {
-  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
-  let chiralUnits = 0;
-  let uniform = true;
-  for (const kind of kinds) {
-    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
-    if (kind === "other" || ofKind.some((u) => !u.defined || u.label === null)) return false;
-    if (kind === "RS" || kind === "MP") chiralUnits += ofKind.length;
-    if (new Set(ofKind.map((u) => unitKey2(u))).size > 1) {
-      if (!(mayInvert && kind === "RS" && ofKind.length === 2)) return false;
-      uniform = false;
-    }
-  }
-  return uniform || chiralUnits === 2;
-}
-var WORDS, MINUS_LIKE, HYPHENS, PLUS_LIKE, SIGNS, WORD_PREFIX, ITEM, MIRROR, AXIAL_KINDS;
+var WORDS, MINUS_LIKE, HYPHENS, PLUS_LIKE, SIGNS, WORD_PREFIX, ITEM;
 var init_descriptors = __esm({
   "src/chem/descriptors.ts"() {
     "use strict";
+    init_descriptors_compare();
     WORDS = ["meso", "cis", "trans", "erythro", "threo", "endo", "exo", "syn", "anti"];
     MINUS_LIKE = "-‐‑‒–—−﹣－˗";
     HYPHENS = MINUS_LIKE;
@@ -47336,8 +47444,6 @@ var init_descriptors = __esm({
       `^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\\s(${MINUS_LIKE.replace("-", "\\-")}]|$)`
     );
     ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
-    MIRROR = { R: "S", S: "R", M: "P", P: "M" };
-    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene", "helix"]);
   }
 });
 
@@ -47872,7 +47978,8 @@ function run4(ctx) {
   if (ctx.record && ctx.record.structure.smiles === void 0 && ctx.record.structure.molfile === void 0) {
     add("no-structure", "structure", { field: "structure" });
   } else if (ctx.main.error && !findings.some((f) => f.field === field2)) {
-    add("structure-unreadable", field2, {
+    const over = OVER_LIMIT.has(ctx.main.error.code ?? "");
+    add(over ? "structure-over-limit" : "structure-unreadable", field2, {
       field: field2,
       error: ctx.main.error.message,
       where: where(ctx.main),
@@ -47917,7 +48024,7 @@ function run4(ctx) {
   const copies = saltRemarks.length ? `; ${saltRemarks.join("; ")}` : "";
   return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}${copies}${nitrogen}` };
 }
-var messages4, structureReadable;
+var messages4, OVER_LIMIT, structureReadable;
 var init_structure_readable = __esm({
   "src/checks/structure-readable.ts"() {
     "use strict";
@@ -47925,12 +48032,14 @@ var init_structure_readable = __esm({
     init_nitrogen_inversion();
     messages4 = {
       "structure-unreadable": "The structure in {field} could not be read: {error}{where}. Nothing about its stereochemistry can be checked. Correct the SMILES or molfile (check ring-closure digits, brackets and the counts line) and resubmit.",
+      "structure-over-limit": "The structure in {field} was not analysed: {error}. The size limits keep every record within the time limit; split a mixture into its records, or leave out repeated salt or solvent parts, and resubmit.",
       "component-unreadable": "Component {index} ({field}) could not be read: {error}{where}. The mixture cannot be checked against it. Correct that structure.",
       "structure-source-refused": 'The structure file for {field} was not read: {error}. Molfiles must be given as a path relative to the record file that stays inside the registry (no "..", no absolute path, no link out). Move the file next to the record.',
       "molfile-path-outside": "The molfile path '{path}' in {field} resolves to '{resolved}', outside the registry folder. Give a path relative to the record file that stays inside the registry.",
       "reader-remark": "Reading the structure in {field} gave a remark: {remark}. Check the drawing.",
       "no-structure": "The record gives no structure ({field}). Add exactly one of structure.smiles or structure.molfile."
     };
+    OVER_LIMIT = /* @__PURE__ */ new Set(["smiles-too-long", "molfile-too-long", "too-many-atoms", "too-many-components"]);
     structureReadable = {
       id: "structure-readable",
       defaultSeverity: "error",
@@ -49217,6 +49326,16 @@ function commonSubstructure(a, b, options = {}) {
     return 8 * g + likeness(u, v) + 1;
   };
   const decided = (u) => map[u] >= 0 || excluded[u] === 1;
+  const tryEach = (u, candidates2) => {
+    for (const v of candidates2) {
+      if (++steps > budget) throw new Budget();
+      mapAtom(u, v);
+      grow();
+      unmapAtom(u);
+      if (done() || hopeless()) return true;
+    }
+    return false;
+  };
   const grow = () => {
     if (hopeless()) return;
     let pick = -1;
@@ -49252,13 +49371,7 @@ function commonSubstructure(a, b, options = {}) {
       if (hopeless()) return;
       const u = pick;
       pickCands.sort((x, y) => gain(u, y) - gain(u, x) || x - y);
-      for (const v of pickCands) {
-        if (++steps > budget) throw new Budget();
-        mapAtom(u, v);
-        grow();
-        unmapAtom(u);
-        if (done() || hopeless()) return;
-      }
+      if (tryEach(u, pickCands)) return;
       excludeAtom(u, 1);
       grow();
       excludeAtom(u, -1);
@@ -49279,13 +49392,7 @@ function commonSubstructure(a, b, options = {}) {
       const starts = [];
       for (let v0 = 0; v0 < b.n; v0++) if (avail[v0] && b.element[v0] === a.element[u0]) starts.push(v0);
       starts.sort((x, y) => likeness(u0, y) - likeness(u0, x) || x - y);
-      for (const v0 of starts) {
-        if (++steps > budget) throw new Budget();
-        mapAtom(u0, v0);
-        grow();
-        unmapAtom(u0);
-        if (done() || hopeless()) break;
-      }
+      tryEach(u0, starts);
       excludeAtom(u0, 1);
     }
   } catch (e) {
@@ -50556,8 +50663,8 @@ var NOTHING = Object.freeze({
     offset: null
   }
 });
-function failed(message, line = null, offset = null) {
-  return { structure: null, facts: null, error: { message, line, offset } };
+function failed(message, line = null, offset = null, code) {
+  return { structure: null, facts: null, error: { message, line, offset, ...code ? { code } : {} } };
 }
 function readOnly(source, engine) {
   if (source === null) return { structure: null, failure: NOTHING };
@@ -50581,7 +50688,8 @@ function readOnly(source, engine) {
       failure: failed(
         `${what}: ${read.error.message}`,
         read.error.at.line ?? null,
-        read.error.at.offset ?? null
+        read.error.at.offset ?? null,
+        read.error.code
       )
     };
   }
@@ -51465,6 +51573,12 @@ function auditItem(item, ctx) {
     budget: ctx.budget,
     registryPhase: false
   }).records[0];
+  if (ctx.registryNotRun !== void 0 && result2.notRun) {
+    const wide = new Set(ctx.checks.filter((c) => c.scope === "registry").map((c) => c.id));
+    result2.notRun = result2.notRun.flatMap(
+      (n) => !wide.has(n.check) || n.reason !== BULK_REGISTRY_NOT_COMPARED ? [n] : ctx.registryNotRun === null ? [] : [{ check: n.check, reason: ctx.registryNotRun }]
+    );
+  }
   const out = {
     ...result2,
     computed: result2.computed ? bulkFacts(result2.computed) : null,
@@ -51472,6 +51586,8 @@ function auditItem(item, ctx) {
     origin: { source: item.source, record: item.record, line: item.line },
     form_word: { word: conv.formWord, how: conv.formHow }
   };
+  if (ctx.registryNotRun !== void 0)
+    out.registry_row = indexRow(loaded, { structure: null, facts: result2.computed, error: null }, item.seq);
   if (conv.structureText !== null && result2.findings.some((f) => !f.waived))
     out.structure_text = conv.structureText;
   return out;
@@ -51490,6 +51606,12 @@ var BUILTIN_RULES = [
     defaultSeverity: "error",
     summary: "A check failed with an internal error.",
     explanation: "A check module threw while checking this record. The other checks and records were still audited. This is a fault in stereogate, not in the record; report it with the record attached."
+  },
+  {
+    id: TIME_LIMIT_ID,
+    defaultSeverity: "error",
+    summary: "The audit of a record stayed within its time limit and memory bound.",
+    explanation: "Each record gets a time limit (20 s unless --record-timeout says otherwise) and a memory bound, so that one pathological structure cannot stall or exhaust a run. A record over either is reported instead of audited, and the run goes on. Audit it on its own with a higher limit, or simplify the structure."
   }
 ];
 
@@ -51928,6 +52050,7 @@ function makeRenderer(wants, checks) {
   return (r) => {
     const out = {
       seq: r.seq,
+      row: r.registry_row,
       jsonl: wants.jsonl ? JSONL_PREFIX + JSON.stringify(r).slice(1) : "",
       tally: {
         findings: r.findings.map((f) => [f.check, f.severity, f.waived !== null]),
@@ -51991,6 +52114,7 @@ async function makeItemContext(setup) {
     engine,
     budget: setup.budget,
     originInputs: setup.originInputs ? new Map(setup.originInputs.map((item) => [itemId(item, setup.mapping), item])) : void 0,
+    registryNotRun: setup.registryNotRun,
     render: makeRenderer(setup.wants, bulkSarifRules(CHECKS2))
   };
 }
