@@ -116,3 +116,30 @@ describe('registry-wide checks in a bulk audit', () => {
     expect(trailer.registry!.pairs).toHaveLength(5);
   });
 });
+
+describe('stereogate merge takes the configuration of the shard runs (--config)', () => {
+  it('a raised severity reaches the registry-wide findings that merge computes', async () => {
+    const { run: cli } = await import('../../src/cli/main.js');
+    const { memoryIo } = await import('../cli/io.js');
+    const shards = [join(dir, 'cfg-1.jsonl'), join(dir, 'cfg-2.jsonl')];
+    await run(shards[0], { index: 1, count: 2 });
+    await run(shards[1], { index: 2, count: 2 });
+    const cfg = join(dir, 'raise.yml');
+    writeFileSync(cfg, 'severities:\n  consistent-with-registry: error\n');
+    const levels = async (extra: string[], out: string) => {
+      const io = memoryIo();
+      await cli(['merge', ...shards, '--jsonl', out, '--fail-on', 'never', ...extra], io);
+      expect(io.stderr.join('\n')).toBe('');
+      return lines(out).flatMap((l) =>
+        (l.findings as { check: string; severity?: string }[])
+          .filter((f) => f.check === 'consistent-with-registry')
+          .map((f) => f.severity),
+      );
+    };
+    const plain = await levels([], join(dir, 'cfg-default.jsonl'));
+    const raised = await levels(['--config', cfg], join(dir, 'cfg-raised.jsonl'));
+    expect(plain.length).toBeGreaterThan(0);
+    expect(plain).not.toEqual(plain.map(() => 'error'));
+    expect(raised).toEqual(plain.map(() => 'error'));
+  });
+});

@@ -33,7 +33,7 @@ import { VERSION } from '../../audit/version.js';
 export const BULK_USAGE = `Bulk audit of legacy registries (SD files, CSV/TSV exports):
 
   stereogate audit <file.sdf|file.csv|file.tsv>… [options]
-  stereogate merge <shard.jsonl>… [output options]
+  stereogate merge <shard.jsonl>… [--config FILE] [output options]
 
 Field mapping (SD data field or CSV column; defaults in parentheses):
   --map-id NAME           registry id (id; SD files fall back to the title line)
@@ -297,16 +297,7 @@ async function bulkAuditRun(args: string[], io: Io): Promise<number> {
   if (!['auto', 'bar', 'lines', 'none'].includes(progress))
     throw new UsageError('--progress must be auto, bar, lines or none');
   for (const p of positionals) if (!io.isFile(p)) throw new UsageError(`bulk input ${p} not found`);
-  let config: AuditConfig;
-  try {
-    config = loadConfig(
-      typeof values.root === 'string' ? values.root : process.cwd(),
-      typeof values.config === 'string' ? values.config : undefined,
-    ).config;
-  } catch (e) {
-    if (e instanceof ConfigError) throw new UsageError(e.message);
-    throw e;
-  }
+  const config = configOf(values);
   const { CHECKS } = await import('../../checks/index.js');
   const { writers, html } = writersFor(values, CHECKS);
   const run = await runBulkAudit({
@@ -324,16 +315,31 @@ async function bulkAuditRun(args: string[], io: Io): Promise<number> {
   return exitCode(run.trailer, failOn);
 }
 
+/** The run's configuration: --config, else stereogate.config.yml under --root (default the working folder). */
+function configOf(values: { root?: unknown; config?: unknown }): AuditConfig {
+  try {
+    return loadConfig(
+      typeof values.root === 'string' ? values.root : process.cwd(),
+      typeof values.config === 'string' ? values.config : undefined,
+    ).config;
+  } catch (e) {
+    if (e instanceof ConfigError) throw new UsageError(e.message);
+    throw e;
+  }
+}
+
 export async function mergeCommand(args: string[], io: Io): Promise<number> {
-  const { values, positionals } = parse(args, {});
+  const { values, positionals } = parse(args, { config: { type: 'string' }, root: { type: 'string' } });
   if (positionals.length === 0) throw new UsageError('no shard outputs given');
   const failOn = checkFailOn(values['fail-on']);
   for (const p of positionals) if (!io.isFile(p)) throw new UsageError(`shard output ${p} not found`);
   const { CHECKS } = await import('../../checks/index.js');
+  // The shard runs' configuration: the registry-wide findings that merge computes take its severities.
+  const config = configOf(values);
   const { writers, html } = writersFor(values, CHECKS);
   let trailer: BulkTrailer;
   try {
-    trailer = await mergeShards(positionals, writers);
+    trailer = await mergeShards(positionals, writers, undefined, config);
   } catch (e) {
     if (e instanceof MergeError) {
       io.err(`stereogate merge: ${e.message}`);
