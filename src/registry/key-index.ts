@@ -1,7 +1,8 @@
 /**
  * The registry index: every record's keys (keys.ts), filed by constitution + stereo key. A record finds the
  * records identical to it with one lookup (its own stereo key) and its enantiomers with another (its mirror key),
- * so the registry-wide checks cost a constant per record, never record against record. Inexact keys (keys.ts)
+ * so the registry-wide checks cost a constant per record, never record against record; copies of one stereoisomer
+ * share a class (below), so a registry with many copies stays linear. Inexact keys (keys.ts)
  * are confirmed by `confirm` (the engine's relate() on the kept structure texts); a pair without both texts is
  * not a pair (an exact key is never an inexact key's partner, see keys.ts).
  */
@@ -17,8 +18,17 @@ export interface KeyMatch {
 /** relate() of two inexact keys' structures: 'identical', 'enantiomers', or anything else (no pair). */
 export type Confirm = (a: RecordKeys, b: RecordKeys) => string | null;
 
+/**
+ * The rows of one key that are one stereoisomer: a class. Exact keys make one class per key; inexact keys are
+ * split into classes by `confirm` against each class's first row. A lookup visits classes, not rows, so many
+ * copies of one structure cost a constant each (a record is reported against the earliest of its class).
+ */
+interface StereoClass {
+  rows: IndexRow[];
+}
+
 export class RegistryIndex {
-  private readonly byKey = new Map<string, IndexRow[]>();
+  private readonly byKey = new Map<string, StereoClass[]>();
   /** Rows filed (records with a stereo key). */
   size = 0;
 
@@ -28,9 +38,13 @@ export class RegistryIndex {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key);
-    if (list) list.push(row);
-    else this.byKey.set(key, [row]);
+    const classes = this.byKey.get(key);
+    if (!classes) this.byKey.set(key, [{ rows: [row] }]);
+    else {
+      const same = classes.find((c) => this.relationOf(k, c.rows[0].keys!, 'identical') === 'identical');
+      if (same) same.rows.push(row);
+      else classes.push({ rows: [row] });
+    }
     this.size++;
   }
 
@@ -39,22 +53,31 @@ export class RegistryIndex {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key);
-    const at = list ? list.indexOf(row) : -1;
-    if (at < 0) return;
-    list!.splice(at, 1);
-    if (list!.length === 0) this.byKey.delete(key);
-    this.size--;
+    const classes = this.byKey.get(key);
+    if (!classes) return;
+    for (let ci = 0; ci < classes.length; ci++) {
+      const at = classes[ci].rows.indexOf(row);
+      if (at < 0) continue;
+      classes[ci].rows.splice(at, 1);
+      if (classes[ci].rows.length === 0) classes.splice(ci, 1);
+      if (classes.length === 0) this.byKey.delete(key);
+      this.size--;
+      return;
+    }
   }
 
-  /** Records identical to `me` or its enantiomers, in the order they were added; `me` itself left out. */
+  /**
+   * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
+   * were added; `me` itself left out.
+   */
   matches(me: IndexRow): KeyMatch[] {
     const k = me.keys;
     if (k === null || k.stereo === null || k.mirror === null) return [];
     const out: KeyMatch[] = [];
     const consider = (key: string, expected: KeyRelation): void => {
-      for (const other of this.byKey.get(`${k.constitution}#${key}`) ?? []) {
-        if (other === me || (other.file === me.file && other.seq === me.seq)) continue;
+      for (const c of this.byKey.get(`${k.constitution}#${key}`) ?? []) {
+        const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
+        if (!other) continue;
         const relation = other.keys && this.relationOf(k, other.keys, expected);
         if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
       }
