@@ -53208,9 +53208,13 @@ var RegistryIndex = class {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key3 = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key3);
-    if (list) list.push(row);
-    else this.byKey.set(key3, [row]);
+    const classes = this.byKey.get(key3);
+    if (!classes) this.byKey.set(key3, [{ rows: [row] }]);
+    else {
+      const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
+      if (same) same.rows.push(row);
+      else classes.push({ rows: [row] });
+    }
     this.size++;
   }
   /** Removes a row added before (a record file replaced by its new version). */
@@ -53218,21 +53222,30 @@ var RegistryIndex = class {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key3 = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key3);
-    const at2 = list ? list.indexOf(row) : -1;
-    if (at2 < 0) return;
-    list.splice(at2, 1);
-    if (list.length === 0) this.byKey.delete(key3);
-    this.size--;
+    const classes = this.byKey.get(key3);
+    if (!classes) return;
+    for (let ci = 0; ci < classes.length; ci++) {
+      const at2 = classes[ci].rows.indexOf(row);
+      if (at2 < 0) continue;
+      classes[ci].rows.splice(at2, 1);
+      if (classes[ci].rows.length === 0) classes.splice(ci, 1);
+      if (classes.length === 0) this.byKey.delete(key3);
+      this.size--;
+      return;
+    }
   }
-  /** Records identical to `me` or its enantiomers, in the order they were added; `me` itself left out. */
+  /**
+   * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
+   * were added; `me` itself left out.
+   */
   matches(me) {
     const k = me.keys;
     if (k === null || k.stereo === null || k.mirror === null) return [];
     const out = [];
     const consider = (key3, expected) => {
-      for (const other of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
-        if (other === me || other.file === me.file && other.seq === me.seq) continue;
+      for (const c of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
+        const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
+        if (!other) continue;
         const relation = other.keys && this.relationOf(k, other.keys, expected);
         if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
       }
@@ -56366,7 +56379,7 @@ function checkWritable(path, what) {
 var BULK_USAGE = `Bulk audit of legacy registries (SD files, CSV/TSV exports):
 
   stereogate audit <file.sdf|file.csv|file.tsv>… [options]
-  stereogate merge <shard.jsonl>… [output options]
+  stereogate merge <shard.jsonl>… [--config FILE] [output options]
 
 Field mapping (SD data field or CSV column; defaults in parentheses):
   --map-id NAME           registry id (id; SD files fall back to the title line)
@@ -56605,16 +56618,7 @@ async function bulkAuditRun(args, io) {
   if (!["auto", "bar", "lines", "none"].includes(progress))
     throw new UsageError("--progress must be auto, bar, lines or none");
   for (const p of positionals) if (!io.isFile(p)) throw new UsageError(`bulk input ${p} not found`);
-  let config;
-  try {
-    config = loadConfig(
-      typeof values.root === "string" ? values.root : process.cwd(),
-      typeof values.config === "string" ? values.config : void 0
-    ).config;
-  } catch (e) {
-    if (e instanceof ConfigError) throw new UsageError(e.message);
-    throw e;
-  }
+  const config = configOf(values);
   const { CHECKS: CHECKS2 } = await Promise.resolve().then(() => (init_checks(), checks_exports));
   const { writers, html } = writersFor(values, CHECKS2);
   const run12 = await runBulkAudit({
@@ -56631,16 +56635,28 @@ async function bulkAuditRun(args, io) {
   io.out(summaryTable(run12.trailer, run12));
   return exitCode(run12.trailer, failOn);
 }
+function configOf(values) {
+  try {
+    return loadConfig(
+      typeof values.root === "string" ? values.root : process.cwd(),
+      typeof values.config === "string" ? values.config : void 0
+    ).config;
+  } catch (e) {
+    if (e instanceof ConfigError) throw new UsageError(e.message);
+    throw e;
+  }
+}
 async function mergeCommand(args, io) {
-  const { values, positionals } = parse2(args, {});
+  const { values, positionals } = parse2(args, { config: { type: "string" }, root: { type: "string" } });
   if (positionals.length === 0) throw new UsageError("no shard outputs given");
   const failOn = checkFailOn(values["fail-on"]);
   for (const p of positionals) if (!io.isFile(p)) throw new UsageError(`shard output ${p} not found`);
   const { CHECKS: CHECKS2 } = await Promise.resolve().then(() => (init_checks(), checks_exports));
+  const config = configOf(values);
   const { writers, html } = writersFor(values, CHECKS2);
   let trailer;
   try {
-    trailer = await mergeShards(positionals, writers);
+    trailer = await mergeShards(positionals, writers, void 0, config);
   } catch (e) {
     if (e instanceof MergeError) {
       io.err(`stereogate merge: ${e.message}`);

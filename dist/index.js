@@ -71707,9 +71707,13 @@ var RegistryIndex = class {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key4 = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key4);
-    if (list) list.push(row);
-    else this.byKey.set(key4, [row]);
+    const classes = this.byKey.get(key4);
+    if (!classes) this.byKey.set(key4, [{ rows: [row] }]);
+    else {
+      const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
+      if (same) same.rows.push(row);
+      else classes.push({ rows: [row] });
+    }
     this.size++;
   }
   /** Removes a row added before (a record file replaced by its new version). */
@@ -71717,21 +71721,30 @@ var RegistryIndex = class {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key4 = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key4);
-    const at2 = list ? list.indexOf(row) : -1;
-    if (at2 < 0) return;
-    list.splice(at2, 1);
-    if (list.length === 0) this.byKey.delete(key4);
-    this.size--;
+    const classes = this.byKey.get(key4);
+    if (!classes) return;
+    for (let ci = 0; ci < classes.length; ci++) {
+      const at2 = classes[ci].rows.indexOf(row);
+      if (at2 < 0) continue;
+      classes[ci].rows.splice(at2, 1);
+      if (classes[ci].rows.length === 0) classes.splice(ci, 1);
+      if (classes.length === 0) this.byKey.delete(key4);
+      this.size--;
+      return;
+    }
   }
-  /** Records identical to `me` or its enantiomers, in the order they were added; `me` itself left out. */
+  /**
+   * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
+   * were added; `me` itself left out.
+   */
   matches(me) {
     const k = me.keys;
     if (k === null || k.stereo === null || k.mirror === null) return [];
     const out = [];
     const consider = (key4, expected) => {
-      for (const other of this.byKey.get(`${k.constitution}#${key4}`) ?? []) {
-        if (other === me || other.file === me.file && other.seq === me.seq) continue;
+      for (const c of this.byKey.get(`${k.constitution}#${key4}`) ?? []) {
+        const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
+        if (!other) continue;
         const relation = other.keys && this.relationOf(k, other.keys, expected);
         if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
       }

@@ -50824,9 +50824,13 @@ var RegistryIndex = class {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key3 = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key3);
-    if (list) list.push(row);
-    else this.byKey.set(key3, [row]);
+    const classes = this.byKey.get(key3);
+    if (!classes) this.byKey.set(key3, [{ rows: [row] }]);
+    else {
+      const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
+      if (same) same.rows.push(row);
+      else classes.push({ rows: [row] });
+    }
     this.size++;
   }
   /** Removes a row added before (a record file replaced by its new version). */
@@ -50834,21 +50838,30 @@ var RegistryIndex = class {
     const k = row.keys;
     if (k === null || k.stereo === null) return;
     const key3 = `${k.constitution}#${k.stereo}`;
-    const list = this.byKey.get(key3);
-    const at = list ? list.indexOf(row) : -1;
-    if (at < 0) return;
-    list.splice(at, 1);
-    if (list.length === 0) this.byKey.delete(key3);
-    this.size--;
+    const classes = this.byKey.get(key3);
+    if (!classes) return;
+    for (let ci = 0; ci < classes.length; ci++) {
+      const at = classes[ci].rows.indexOf(row);
+      if (at < 0) continue;
+      classes[ci].rows.splice(at, 1);
+      if (classes[ci].rows.length === 0) classes.splice(ci, 1);
+      if (classes.length === 0) this.byKey.delete(key3);
+      this.size--;
+      return;
+    }
   }
-  /** Records identical to `me` or its enantiomers, in the order they were added; `me` itself left out. */
+  /**
+   * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
+   * were added; `me` itself left out.
+   */
   matches(me) {
     const k = me.keys;
     if (k === null || k.stereo === null || k.mirror === null) return [];
     const out = [];
     const consider = (key3, expected) => {
-      for (const other of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
-        if (other === me || other.file === me.file && other.seq === me.seq) continue;
+      for (const c of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
+        const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
+        if (!other) continue;
         const relation = other.keys && this.relationOf(k, other.keys, expected);
         if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
       }
