@@ -1494,7 +1494,7 @@ var init_refine = __esm({
       refine(p, splitters) {
         const { offs, adj, code } = this.g;
         const { lab, start, len } = p;
-        const { count: count3, touched, queue, inQueue, cellHits, cellBase, members } = this;
+        const { count: count4, touched, queue, inQueue, cellHits, cellBase, members } = this;
         const qsize = queue.length;
         this.head = 0;
         this.tail = 0;
@@ -1516,8 +1516,8 @@ var init_refine = __esm({
             this.work += offs[v + 1] - offs[v] + 1;
             for (let e = offs[v]; e < offs[v + 1]; e++) {
               const u = adj[e];
-              if (count3[u] === 0) touched[nt++] = u;
-              count3[u] += WEIGHT[code[e]];
+              if (count4[u] === 0) touched[nt++] = u;
+              count4[u] += WEIGHT[code[e]];
             }
           }
           const cells = this.cellsToSplit;
@@ -1545,7 +1545,7 @@ var init_refine = __esm({
             if (ok && this.splitCell(p, s, cellBase[s], cellHits[s]) < 0) ok = false;
             cellHits[s] = 0;
           }
-          for (let t = 0; t < nt; t++) count3[touched[t]] = 0;
+          for (let t = 0; t < nt; t++) count4[touched[t]] = 0;
         }
         this.drain();
         return ok;
@@ -1570,13 +1570,13 @@ var init_refine = __esm({
        */
       splitCell(p, s, from, k) {
         const { lab, start, len } = p;
-        const count3 = this.count;
+        const count4 = this.count;
         const L = len[s];
         if (k === L) {
-          const first = count3[lab[s]];
+          const first = count4[lab[s]];
           let uniform = true;
           for (let t = s + 1; t < s + L; t++) {
-            if (count3[lab[t]] !== first) {
+            if (count4[lab[t]] !== first) {
               uniform = false;
               break;
             }
@@ -1587,7 +1587,7 @@ var init_refine = __esm({
         for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
         this.work += k;
         const buf = this.sortBuf;
-        for (let t = 0; t < k; t++) buf[t] = count3[lab[end + t]] * 4194304 + lab[end + t];
+        for (let t = 0; t < k; t++) buf[t] = count4[lab[end + t]] * 4194304 + lab[end + t];
         if (k > 16) buf.subarray(0, k).sort();
         else {
           for (let t = 1; t < k; t++) {
@@ -1617,7 +1617,7 @@ var init_refine = __esm({
         }
         let fragStart = end;
         for (let t = end; t <= s + L; t++) {
-          if (t === s + L || t > end && count3[lab[t]] !== count3[lab[t - 1]]) {
+          if (t === s + L || t > end && count4[lab[t]] !== count4[lab[t - 1]]) {
             const fl = t - fragStart;
             len[fragStart] = fl;
             for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
@@ -3919,13 +3919,13 @@ function parseCxExtension(s, start, atomCount) {
     const c = s.charCodeAt(i);
     if (c === 124) return { ok: true, groups, radicals, end: i + 1 };
     if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
-      const count3 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
+      const count4 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
       let j2 = i + 3;
       while (isDigit(s.charCodeAt(j2))) {
         const r = readIndex(s, j2, atomCount, "cxsmiles-bad-radical");
         if ("ok" in r) return r;
         j2 = r.end;
-        radicals.set(r.v, count3);
+        radicals.set(r.v, count4);
         if (s.charCodeAt(j2) === 44 && isDigit(s.charCodeAt(j2 + 1))) j2++;
         else break;
       }
@@ -6109,8 +6109,8 @@ function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
   }
 }
 function centreOf(nb, h, withLonePair, n, i) {
-  const count3 = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
-  if (count3 !== 4) return null;
+  const count4 = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
+  if (count4 !== 4) return null;
   const t = [0, 0, 0, 0];
   let k = 0;
   for (; k < nb.length; k++) t[k] = nb[k];
@@ -6503,9 +6503,9 @@ function axisCandidates(s, g, rings, aromaticBond, orthoMin) {
     if (oa === null) continue;
     const ob = orthoOf(b.b, b.a);
     if (ob === null) continue;
-    const count3 = substituted(oa[0]) + substituted(oa[1]) + substituted(ob[0]) + substituted(ob[1]);
-    if (count3 < orthoMin) continue;
-    out.push({ ends: [b.a, b.b], tokens: [oa[0], oa[1], ob[0], ob[1]], orthoSubstituents: count3 });
+    const count4 = substituted(oa[0]) + substituted(oa[1]) + substituted(ob[0]) + substituted(ob[1]);
+    if (count4 < orthoMin) continue;
+    out.push({ ends: [b.a, b.b], tokens: [oa[0], oa[1], ob[0], ob[1]], orthoSubstituents: count4 });
   }
   return out;
 }
@@ -32649,13 +32649,13 @@ function relatedKeys(A, B, parentKey) {
   return keys;
 }
 function speciesMismatch(inA, inB) {
-  const count3 = (xs, key3) => {
+  const count4 = (xs, key3) => {
     const own2 = xs.filter((x) => x.key === key3);
     return [own2.length, own2.reduce((t, x) => t + x.copies, 0)];
   };
   for (const key3 of new Set(inA.map((x) => x.key))) {
-    const [na, ma] = count3(inA, key3);
-    const [nb, mb] = count3(inB, key3);
+    const [na, ma] = count4(inA, key3);
+    const [nb, mb] = count4(inB, key3);
     const f = inA.find((x) => x.key === key3).formula;
     if (na !== nb)
       return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
@@ -33344,8 +33344,8 @@ var require_Node = __commonJS({
         };
         const res = toJS.toJS(this, "", ctx);
         if (typeof onAnchor === "function")
-          for (const { count: count3, res: res2 } of ctx.anchors.values())
-            onAnchor(res2, count3);
+          for (const { count: count4, res: res2 } of ctx.anchors.values())
+            onAnchor(res2, count4);
         return typeof reviver === "function" ? applyReviver.applyReviver(reviver, { "": res }, "", res) : res;
       }
     };
@@ -33453,13 +33453,13 @@ var require_Alias = __commonJS({
         const anchor = anchors2 && source && anchors2.get(source);
         return anchor ? anchor.count * anchor.aliasCount : 0;
       } else if (identity.isCollection(node)) {
-        let count3 = 0;
+        let count4 = 0;
         for (const item of node.items) {
           const c = getAliasCount(doc, item, anchors2);
-          if (c > count3)
-            count3 = c;
+          if (c > count4)
+            count4 = c;
         }
-        return count3;
+        return count4;
       } else if (identity.isPair(node)) {
         const kc = getAliasCount(doc, node.key, anchors2);
         const vc = getAliasCount(doc, node.value, anchors2);
@@ -36412,8 +36412,8 @@ var require_Document = __commonJS({
         };
         const res = toJS.toJS(this.contents, jsonArg ?? "", ctx);
         if (typeof onAnchor === "function")
-          for (const { count: count3, res: res2 } of ctx.anchors.values())
-            onAnchor(res2, count3);
+          for (const { count: count4, res: res2 } of ctx.anchors.values())
+            onAnchor(res2, count4);
         return typeof reviver === "function" ? applyReviver.applyReviver(reviver, { "": res }, "", res) : res;
       }
       /**
@@ -36490,12 +36490,12 @@ var require_errors = __commonJS({
         lineStr = prev + lineStr;
       }
       if (/[^ ]/.test(lineStr)) {
-        let count3 = 1;
+        let count4 = 1;
         const end = error.linePos[1];
         if (end?.line === line && end.col > col) {
-          count3 = Math.max(1, Math.min(end.col - col, 80 - ci));
+          count4 = Math.max(1, Math.min(end.col - col, 80 - ci));
         }
-        const pointer = " ".repeat(ci) + "^".repeat(count3);
+        const pointer = " ".repeat(ci) + "^".repeat(count4);
         error.message += `:
 
 ${lineStr}
@@ -42293,20 +42293,20 @@ var require_resolve = __commonJS({
       return false;
     }
     function countKeys(schema) {
-      let count3 = 0;
+      let count4 = 0;
       for (const key3 in schema) {
         if (key3 === "$ref")
           return Infinity;
-        count3++;
+        count4++;
         if (SIMPLE_INLINED.has(key3))
           continue;
         if (typeof schema[key3] == "object") {
-          (0, util_1.eachItem)(schema[key3], (sch) => count3 += countKeys(sch));
+          (0, util_1.eachItem)(schema[key3], (sch) => count4 += countKeys(sch));
         }
-        if (count3 === Infinity)
+        if (count4 === Infinity)
           return Infinity;
       }
-      return count3;
+      return count4;
     }
     function getFullPath(resolver, id = "", normalize2) {
       if (normalize2 !== false)
@@ -45844,8 +45844,8 @@ var require_contains = __commonJS({
         cxt.result(valid, () => cxt.reset());
         function validateItemsWithCount() {
           const schValid = gen.name("_valid");
-          const count3 = gen.let("count", 0);
-          validateItems(schValid, () => gen.if(schValid, () => checkLimits(count3)));
+          const count4 = gen.let("count", 0);
+          validateItems(schValid, () => gen.if(schValid, () => checkLimits(count4)));
         }
         function validateItems(_valid, block2) {
           gen.forRange("i", 0, len, (i) => {
@@ -45858,16 +45858,16 @@ var require_contains = __commonJS({
             block2();
           });
         }
-        function checkLimits(count3) {
-          gen.code((0, codegen_1._)`${count3}++`);
+        function checkLimits(count4) {
+          gen.code((0, codegen_1._)`${count4}++`);
           if (max === void 0) {
-            gen.if((0, codegen_1._)`${count3} >= ${min}`, () => gen.assign(valid, true).break());
+            gen.if((0, codegen_1._)`${count4} >= ${min}`, () => gen.assign(valid, true).break());
           } else {
-            gen.if((0, codegen_1._)`${count3} > ${max}`, () => gen.assign(valid, false).break());
+            gen.if((0, codegen_1._)`${count4} > ${max}`, () => gen.assign(valid, false).break());
             if (min === 1)
               gen.assign(valid, true);
             else
-              gen.if((0, codegen_1._)`${count3} >= ${min}`, () => gen.assign(valid, true));
+              gen.if((0, codegen_1._)`${count4} >= ${min}`, () => gen.assign(valid, true));
           }
         }
       }
@@ -54172,7 +54172,7 @@ function registryLines(r, safe = (s) => s) {
   const enantiomers = r.pairs.filter((p) => p.relation === "enantiomers");
   const identical = r.pairs.filter((p) => p.relation === "identical");
   const lines = [
-    `Registry-wide checks over ${r.records} records: ${enantiomers.length} enantiomer pair(s), ${identical.length} pair(s) of identical structures.`
+    `Registry-wide checks over ${count3(r.records, "record")}: ${count3(enantiomers.length, "enantiomer pair")}, ${count3(identical.length, "pair")} of identical structures.`
   ];
   const list = (title, pairs) => {
     if (pairs.length === 0) return;
@@ -54184,6 +54184,9 @@ function registryLines(r, safe = (s) => s) {
   list("identical structures (findings on the later record)", identical);
   list("enantiomer pairs (both registered; fine when meant)", enantiomers);
   return lines;
+}
+function count3(n, word) {
+  return `${n} ${word}${n === 1 ? "" : "s"}`;
 }
 
 // src/report/text.ts
@@ -54536,9 +54539,9 @@ function parseShard(text) {
   const m = /^(\d+)\/(\d+)$/.exec(text.trim());
   if (!m) return null;
   const index = Number(m[1]);
-  const count3 = Number(m[2]);
-  if (count3 < 1 || index < 1 || index > count3) return null;
-  return { index, count: count3 };
+  const count4 = Number(m[2]);
+  if (count4 < 1 || index < 1 || index > count4) return null;
+  return { index, count: count4 };
 }
 async function* shardFilter(items, shard) {
   let n = 0;
@@ -55418,7 +55421,7 @@ function csvCell(v) {
 function csvRow(r) {
   const open = r.findings.filter((f) => !f.waived);
   const c = r.computed;
-  const count3 = (s) => open.filter((f) => f.severity === s).length;
+  const count4 = (s) => open.filter((f) => f.severity === s).length;
   return [
     r.seq,
     r.origin.source,
@@ -55431,9 +55434,9 @@ function csvRow(r) {
     c ? c.meso === null ? "open" : String(c.meso) : null,
     c ? c.units.length : null,
     c ? c.undefined : null,
-    count3("error"),
-    count3("warning"),
-    count3("note"),
+    count4("error"),
+    count4("warning"),
+    count4("note"),
     r.findings.length - open.length,
     [...new Set(open.map((f) => f.check))].join(" ")
   ].map(csvCell).join(",");
@@ -55973,7 +55976,7 @@ function isBulkInput(path) {
 }
 async function countRecords(path) {
   const f = formatOf(path);
-  let count3 = 0;
+  let count4 = 0;
   let atLineStart = true;
   let lineHasText = false;
   let dollars = 0;
@@ -55981,7 +55984,7 @@ async function countRecords(path) {
     for (let i = 0; i < chunk.length; i++) {
       const c = chunk[i];
       if (c === 10) {
-        if (f !== "sd" && lineHasText) count3++;
+        if (f !== "sd" && lineHasText) count4++;
         atLineStart = true;
         lineHasText = false;
         dollars = 0;
@@ -55991,14 +55994,14 @@ async function countRecords(path) {
       if (f === "sd" && (atLineStart || dollars > 0)) {
         if (c === 36) {
           dollars++;
-          if (dollars === 4) count3++;
+          if (dollars === 4) count4++;
         } else dollars = 0;
       }
       atLineStart = false;
     }
   }
-  if (f !== "sd" && lineHasText) count3++;
-  return f === "sd" ? count3 : Math.max(0, count3 - 1);
+  if (f !== "sd" && lineHasText) count4++;
+  return f === "sd" ? count4 : Math.max(0, count4 - 1);
 }
 async function* allItems(inputs) {
   let seq = 0;

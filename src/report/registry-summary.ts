@@ -18,8 +18,8 @@ export function registryLines(
   const enantiomers = r.pairs.filter((p) => p.relation === 'enantiomers');
   const identical = r.pairs.filter((p) => p.relation === 'identical');
   const lines = [
-    `Registry-wide checks over ${r.records} records: ${enantiomers.length} enantiomer pair(s), ` +
-      `${identical.length} pair(s) of identical structures.`,
+    `Registry-wide checks over ${count(r.records, 'record')}: ${count(enantiomers.length, 'enantiomer pair')}, ` +
+      `${count(identical.length, 'pair')} of identical structures.`,
   ];
   const list = (title: string, pairs: RegistrySummary['pairs']) => {
     if (pairs.length === 0) return;
@@ -31,4 +31,9 @@ export function registryLines(
   list('identical structures (findings on the later record)', identical);
   list('enantiomer pairs (both registered; fine when meant)', enantiomers);
   return lines;
+}
+
+/** "1 record", "2 records". */
+function count(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
 }

@@ -59,7 +59,7 @@ describe('when the command line restarts itself', () => {
       },
     );
     expect(r.status).toBe(1);
-    expect(r.stdout).toContain('stereogate bulk audit: 1 records');
+    expect(r.stdout).toContain('stereogate bulk audit: 1 record in');
     expect(r.stdout).toMatch(/form-matches-structure\s+1/);
   });
 });
