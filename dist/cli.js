@@ -532,6 +532,20 @@ function newAtom(element, atomicNumber, charge, isotope, hCount, aromatic, radic
     coords
   };
 }
+function atomWith(a, c) {
+  return newAtom(
+    a.element,
+    a.atomicNumber,
+    c.charge ?? a.charge,
+    a.isotope,
+    c.hCount ?? a.hCount,
+    a.aromatic,
+    a.radical,
+    a.mapNumber,
+    a.inputNumber,
+    c.coords === void 0 ? a.coords : c.coords
+  );
+}
 function atomWithHCount(a, hCount) {
   return newAtom(
     a.element,
@@ -8939,7 +8953,6 @@ function fixedCompletionExists(g, k, x, defined, mirror2) {
 }
 function fixedCount(g, k, mirror2) {
   const perm = g.perms[k];
-  const flip2 = g.flips[k];
   const m = perm.length;
   if (g.couplings.length > 0) {
     if (g.planarHost.length === 0) {
@@ -8959,17 +8972,10 @@ function fixedCount(g, k, mirror2) {
   for (let s = 0; s < m; s++) {
     if (done[s]) continue;
     if (s < g.planarHost.length && g.planarHost[s] >= 0) {
-      for (let i2 = s; !done[i2] || i2 !== s; i2 = perm[i2]) done[i2] = 1;
+      for (let i = s; !done[i] || i !== s; i = perm[i]) done[i] = 1;
       continue;
     }
-    let i = s;
-    let rel = 0;
-    do {
-      done[i] = 1;
-      rel ^= flip2[i] ^ (mirror2 ? g.reflect[i] : 0);
-      i = perm[i];
-    } while (i !== s);
-    if (rel !== 0) return 0n;
+    if (cycleFlips(g, k, s, mirror2, done) !== 0) return 0n;
     cycles++;
   }
   if (g.planarHost.length === 0) return 1n << cycles;
@@ -8978,22 +8984,14 @@ function fixedCount(g, k, mirror2) {
 }
 function planarCycles(g, k, mirror2) {
   const perm = g.perms[k];
-  const flip2 = g.flips[k];
   const m = perm.length;
   const done = new Uint8Array(m);
   let factor = 1n;
   let cycles = 0;
   for (let s = 0; s < m; s++) {
     if (done[s] || g.planarHost[s] < 0) continue;
-    let i = s;
-    let rel = 0;
-    do {
-      done[i] = 1;
-      rel ^= flip2[i] ^ (mirror2 ? g.reflect[i] : 0);
-      i = perm[i];
-    } while (i !== s);
     cycles++;
-    if (rel === 0) factor *= 3n;
+    if (cycleFlips(g, k, s, mirror2, done) === 0) factor *= 3n;
   }
   return { factor, cycles };
 }
@@ -9057,23 +9055,24 @@ function mirror(s) {
   });
   if (s.dimension === 0) return withStereo(s, stereo);
   const atoms = s.atoms.map(
-    (a) => a.coords === null || s.dimension !== 3 ? a : newAtom(
-      a.element,
-      a.atomicNumber,
-      a.charge,
-      a.isotope,
-      a.hCount,
-      a.aromatic,
-      a.radical,
-      a.mapNumber,
-      a.inputNumber,
-      coords3(a.coords[0], a.coords[1], -a.coords[2])
-    )
+    (a) => a.coords === null || s.dimension !== 3 ? a : atomWith(a, { coords: coords3(a.coords[0], a.coords[1], -a.coords[2]) })
   );
   const bonds = s.bonds.map(
     (b) => s.dimension === 2 && (b.wedge === "up" || b.wedge === "down") ? newBond(b.a, b.b, b.order, b.aromatic, b.wedge === "up" ? "down" : "up") : b
   );
   return restructure(s, atoms, bonds, stereo, s.groups);
+}
+function cycleFlips(g, k, s, mirror2, done) {
+  const perm = g.perms[k];
+  const flip2 = g.flips[k];
+  let i = s;
+  let rel = 0;
+  do {
+    done[i] = 1;
+    rel ^= flip2[i] ^ (mirror2 ? g.reflect[i] : 0);
+    i = perm[i];
+  } while (i !== s);
+  return rel;
 }
 var MAX_GROUP, MAX_GROUP_WORK, NO_PLANAR2, MAX_ENUMERATED_UNDEFINED;
 var init_group = __esm({
@@ -32250,7 +32249,7 @@ function neutralise(s) {
   const atoms = objectList();
   s.atoms.forEach((a, i) => {
     if (delta[i] === 0) atoms.push(a);
-    else atoms.push(withCharge(atomWithHCount(a, a.hCount + delta[i]), a.charge + delta[i]));
+    else atoms.push(atomWith(a, { hCount: a.hCount + delta[i], charge: a.charge + delta[i] }));
   });
   const stereo = objectList();
   for (const e of s.stereo) {
@@ -32259,20 +32258,6 @@ function neutralise(s) {
   }
   const structure = restructure(s, atoms, s.bonds, stereo, s.groups);
   return { structure, deprotonated, protonated };
-}
-function withCharge(a, charge) {
-  return newAtom(
-    a.element,
-    a.atomicNumber,
-    charge,
-    a.isotope,
-    a.hCount,
-    a.aromatic,
-    a.radical,
-    a.mapNumber,
-    a.inputNumber,
-    a.coords
-  );
 }
 function restereo(e, delta, atoms) {
   if (e.kind === "tetrahedral") {
@@ -47105,11 +47090,11 @@ function compareDescriptors(parsed, units, options = {}) {
   const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
   if (mapped && numeric || single) {
     result2.method = single ? "per-unit" : "per-locant";
-    const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
+    const byLocant2 = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
     const pairs = single ?? [];
     if (!single) {
       for (const it of parsed.items) {
-        const u = byLocant(Number(it.locant));
+        const u = byLocant2(Number(it.locant));
         if (!u) result2.notStereoUnits.push(it.locant);
         else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
         else pairs.push({ it, u });
@@ -53748,7 +53733,12 @@ function declaredText(r) {
 }
 function unitName3(atoms, locants, element) {
   const loc = locants?.[0];
-  return loc !== null && loc !== void 0 ? `${element}${loc}` : `${element} atom ${atoms.join("/")}`;
+  return loc !== null && loc !== void 0 ? `${element}${loc}` : `${element} (atom ${atoms.join("/")})`;
+}
+function byLocant(a, b) {
+  const la = a.locants?.[0] ?? Infinity;
+  const lb = b.locants?.[0] ?? Infinity;
+  return la !== lb ? la - lb : a.atoms[0] - b.atoms[0];
 }
 function computedText(facts) {
   if (!facts) return null;
@@ -53759,7 +53749,7 @@ function computedText(facts) {
   const units = facts.units ?? [];
   if (units.length === 0) parts.push("no stereo units");
   else {
-    const shown = units.slice(0, 8).map((u) => {
+    const shown = [...units].sort(byLocant).slice(0, 8).map((u) => {
       const name = unitName3(u.atoms, u.locants, u.element);
       return `${name} ${u.defined ? u.label ?? "defined, no CIP label" : "undefined"}`;
     });

@@ -14803,6 +14803,20 @@ function newAtom(element, atomicNumber, charge, isotope, hCount, aromatic, radic
     coords
   };
 }
+function atomWith(a, c) {
+  return newAtom(
+    a.element,
+    a.atomicNumber,
+    c.charge ?? a.charge,
+    a.isotope,
+    c.hCount ?? a.hCount,
+    a.aromatic,
+    a.radical,
+    a.mapNumber,
+    a.inputNumber,
+    c.coords === void 0 ? a.coords : c.coords
+  );
+}
 function atomWithHCount(a, hCount) {
   return newAtom(
     a.element,
@@ -23210,7 +23224,6 @@ function fixedCompletionExists(g, k, x, defined, mirror2) {
 }
 function fixedCount(g, k, mirror2) {
   const perm = g.perms[k];
-  const flip2 = g.flips[k];
   const m = perm.length;
   if (g.couplings.length > 0) {
     if (g.planarHost.length === 0) {
@@ -23230,17 +23243,10 @@ function fixedCount(g, k, mirror2) {
   for (let s = 0; s < m; s++) {
     if (done[s]) continue;
     if (s < g.planarHost.length && g.planarHost[s] >= 0) {
-      for (let i2 = s; !done[i2] || i2 !== s; i2 = perm[i2]) done[i2] = 1;
+      for (let i = s; !done[i] || i !== s; i = perm[i]) done[i] = 1;
       continue;
     }
-    let i = s;
-    let rel = 0;
-    do {
-      done[i] = 1;
-      rel ^= flip2[i] ^ (mirror2 ? g.reflect[i] : 0);
-      i = perm[i];
-    } while (i !== s);
-    if (rel !== 0) return 0n;
+    if (cycleFlips(g, k, s, mirror2, done) !== 0) return 0n;
     cycles++;
   }
   if (g.planarHost.length === 0) return 1n << cycles;
@@ -23249,22 +23255,14 @@ function fixedCount(g, k, mirror2) {
 }
 function planarCycles(g, k, mirror2) {
   const perm = g.perms[k];
-  const flip2 = g.flips[k];
   const m = perm.length;
   const done = new Uint8Array(m);
   let factor = 1n;
   let cycles = 0;
   for (let s = 0; s < m; s++) {
     if (done[s] || g.planarHost[s] < 0) continue;
-    let i = s;
-    let rel = 0;
-    do {
-      done[i] = 1;
-      rel ^= flip2[i] ^ (mirror2 ? g.reflect[i] : 0);
-      i = perm[i];
-    } while (i !== s);
     cycles++;
-    if (rel === 0) factor *= 3n;
+    if (cycleFlips(g, k, s, mirror2, done) === 0) factor *= 3n;
   }
   return { factor, cycles };
 }
@@ -23328,23 +23326,24 @@ function mirror(s) {
   });
   if (s.dimension === 0) return withStereo(s, stereo);
   const atoms = s.atoms.map(
-    (a) => a.coords === null || s.dimension !== 3 ? a : newAtom(
-      a.element,
-      a.atomicNumber,
-      a.charge,
-      a.isotope,
-      a.hCount,
-      a.aromatic,
-      a.radical,
-      a.mapNumber,
-      a.inputNumber,
-      coords3(a.coords[0], a.coords[1], -a.coords[2])
-    )
+    (a) => a.coords === null || s.dimension !== 3 ? a : atomWith(a, { coords: coords3(a.coords[0], a.coords[1], -a.coords[2]) })
   );
   const bonds = s.bonds.map(
     (b) => s.dimension === 2 && (b.wedge === "up" || b.wedge === "down") ? newBond(b.a, b.b, b.order, b.aromatic, b.wedge === "up" ? "down" : "up") : b
   );
   return restructure(s, atoms, bonds, stereo, s.groups);
+}
+function cycleFlips(g, k, s, mirror2, done) {
+  const perm = g.perms[k];
+  const flip2 = g.flips[k];
+  let i = s;
+  let rel = 0;
+  do {
+    done[i] = 1;
+    rel ^= flip2[i] ^ (mirror2 ? g.reflect[i] : 0);
+    i = perm[i];
+  } while (i !== s);
+  return rel;
 }
 var MAX_GROUP, MAX_GROUP_WORK, NO_PLANAR2, MAX_ENUMERATED_UNDEFINED;
 var init_group = __esm({
@@ -46521,7 +46520,7 @@ function neutralise(s) {
   const atoms = objectList();
   s.atoms.forEach((a, i) => {
     if (delta[i] === 0) atoms.push(a);
-    else atoms.push(withCharge(atomWithHCount(a, a.hCount + delta[i]), a.charge + delta[i]));
+    else atoms.push(atomWith(a, { hCount: a.hCount + delta[i], charge: a.charge + delta[i] }));
   });
   const stereo = objectList();
   for (const e of s.stereo) {
@@ -46530,20 +46529,6 @@ function neutralise(s) {
   }
   const structure = restructure(s, atoms, s.bonds, stereo, s.groups);
   return { structure, deprotonated, protonated };
-}
-function withCharge(a, charge) {
-  return newAtom(
-    a.element,
-    a.atomicNumber,
-    charge,
-    a.isotope,
-    a.hCount,
-    a.aromatic,
-    a.radical,
-    a.mapNumber,
-    a.inputNumber,
-    a.coords
-  );
 }
 function restereo(e, delta, atoms) {
   if (e.kind === "tetrahedral") {

@@ -3,7 +3,7 @@
  * work to do), then findings accepted by waivers, then the checks that passed, then the checks that did not run
  * (with the reason; never shown as passed); plus one line of computed evidence.
  */
-import type { StructureFacts } from '../chem/facts.js';
+import type { StereoUnitFact, StructureFacts } from '../chem/facts.js';
 import type { Finding, RecordResult } from '../audit/types.js';
 
 export type ChecklistItem =
@@ -73,9 +73,17 @@ export function declaredText(r: RecordResult): string | null {
   return parts.length ? parts.join(', ') : null;
 }
 
+/** "C2" with a locant, "C (atom 11)" without — the naming the findings use. */
 function unitName(atoms: number[], locants: (number | null)[] | undefined, element: string): string {
   const loc = locants?.[0];
-  return loc !== null && loc !== undefined ? `${element}${loc}` : `${element} atom ${atoms.join('/')}`;
+  return loc !== null && loc !== undefined ? `${element}${loc}` : `${element} (atom ${atoms.join('/')})`;
+}
+
+/** Units in reading order: by locant where they have one, then by atom number. */
+function byLocant(a: StereoUnitFact, b: StereoUnitFact): number {
+  const la = a.locants?.[0] ?? Infinity;
+  const lb = b.locants?.[0] ?? Infinity;
+  return la !== lb ? la - lb : a.atoms[0] - b.atoms[0];
 }
 
 /** The computed facts in one line: "chiral; 2 stereocentres (C2 R, C3 R); 3 stereoisomers; C4H6O6". */
@@ -94,10 +102,13 @@ export function computedText(facts: StructureFacts | null): string | null {
   const units = facts.units ?? [];
   if (units.length === 0) parts.push('no stereo units');
   else {
-    const shown = units.slice(0, 8).map((u) => {
-      const name = unitName(u.atoms, u.locants, u.element);
-      return `${name} ${u.defined ? (u.label ?? 'defined, no CIP label') : 'undefined'}`;
-    });
+    const shown = [...units]
+      .sort(byLocant)
+      .slice(0, 8)
+      .map((u) => {
+        const name = unitName(u.atoms, u.locants, u.element);
+        return `${name} ${u.defined ? (u.label ?? 'defined, no CIP label') : 'undefined'}`;
+      });
     const more = units.length > 8 ? `, … ${units.length - 8} more` : '';
     parts.push(`${plural(units.length, 'stereo unit')} (${shown.join(', ')}${more})`);
   }

@@ -58,6 +58,22 @@ export function newAtom(
   };
 }
 
+/** A copy of `a` with other charge, hCount or coordinates (built by newAtom, so the property order holds). */
+export function atomWith(a: Atom, c: { charge?: number; hCount?: number; coords?: Atom['coords'] }): Atom {
+  return newAtom(
+    a.element,
+    a.atomicNumber,
+    c.charge ?? a.charge,
+    a.isotope,
+    c.hCount ?? a.hCount,
+    a.aromatic,
+    a.radical,
+    a.mapNumber,
+    a.inputNumber,
+    c.coords === undefined ? a.coords : c.coords,
+  );
+}
+
 /** A copy of `a` with another hCount (the coordinate array, never mutated, is shared). */
 export function atomWithHCount(a: Atom, hCount: number): Atom {
   return newAtom(

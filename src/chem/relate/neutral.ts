@@ -11,7 +11,7 @@
  * up its last H keeps its configuration with the lone pair in the H's place (a protonated bridgehead amine), and
  * one that takes an H in the lone pair's place the same way.
  */
-import { atomWithHCount, newAtom, objectList, restructure } from '../read/make.js';
+import { atomWith, objectList, restructure } from '../read/make.js';
 import { IMPLICIT_H, LONE_PAIR, type Atom, type StereoElement, type Structure } from '../types.js';
 
 export interface Neutralised {
@@ -53,7 +53,7 @@ export function neutralise(s: Structure): Neutralised {
   const atoms = objectList<Atom>();
   s.atoms.forEach((a, i) => {
     if (delta[i] === 0) atoms.push(a);
-    else atoms.push(withCharge(atomWithHCount(a, a.hCount + delta[i]), a.charge + delta[i]));
+    else atoms.push(atomWith(a, { hCount: a.hCount + delta[i], charge: a.charge + delta[i] }));
   });
   const stereo = objectList<StereoElement>();
   for (const e of s.stereo) {
@@ -62,21 +62,6 @@ export function neutralise(s: Structure): Neutralised {
   }
   const structure = restructure(s, atoms, s.bonds, stereo, s.groups);
   return { structure, deprotonated, protonated };
-}
-
-function withCharge(a: Atom, charge: number): Atom {
-  return newAtom(
-    a.element,
-    a.atomicNumber,
-    charge,
-    a.isotope,
-    a.hCount,
-    a.aromatic,
-    a.radical,
-    a.mapNumber,
-    a.inputNumber,
-    a.coords,
-  );
 }
 
 /** The stereo element after the proton moves, or null when it no longer names its ligands. */

@@ -15,7 +15,7 @@ import type { Perception } from '../perceive/index.js';
 import type { StereoElement, Structure } from '../types.js';
 import type { Coupling } from '../perceive/index.js';
 import { ParityUnion } from './solve.js';
-import { coords3, newAtom, newBond, restructure, withStereo } from '../read/make.js';
+import { atomWith, coords3, newBond, restructure, withStereo } from '../read/make.js';
 
 export interface UnitGroup {
   /** Distinct signed permutations of the units; element 0 is the identity. */
@@ -238,7 +238,6 @@ export function fixedCompletionExists(
 /** Number of states fixed by σ_k (or σ_k M): 2^cycles when every cycle is consistent, else 0. */
 export function fixedCount(g: UnitGroup, k: number, mirror: boolean): bigint {
   const perm = g.perms[k];
-  const flip = g.flips[k];
   const m = perm.length;
   if (g.couplings.length > 0) {
     if (g.planarHost.length === 0) {
@@ -261,14 +260,7 @@ export function fixedCount(g: UnitGroup, k: number, mirror: boolean): bigint {
       for (let i = s; !done[i] || i !== s; i = perm[i]) done[i] = 1;
       continue;
     }
-    let i = s;
-    let rel = 0;
-    do {
-      done[i] = 1;
-      rel ^= flip[i] ^ (mirror ? g.reflect[i] : 0);
-      i = perm[i];
-    } while (i !== s);
-    if (rel !== 0) return 0n;
+    if (cycleFlips(g, k, s, mirror, done) !== 0) return 0n;
     cycles++;
   }
   if (g.planarHost.length === 0) return 1n << cycles;
@@ -284,22 +276,14 @@ export function fixedCount(g: UnitGroup, k: number, mirror: boolean): bigint {
  */
 function planarCycles(g: UnitGroup, k: number, mirror: boolean): { factor: bigint; cycles: number } {
   const perm = g.perms[k];
-  const flip = g.flips[k];
   const m = perm.length;
   const done = new Uint8Array(m);
   let factor = 1n;
   let cycles = 0;
   for (let s = 0; s < m; s++) {
     if (done[s] || g.planarHost[s] < 0) continue;
-    let i = s;
-    let rel = 0;
-    do {
-      done[i] = 1;
-      rel ^= flip[i] ^ (mirror ? g.reflect[i] : 0);
-      i = perm[i];
-    } while (i !== s);
     cycles++;
-    if (rel === 0) factor *= 3n;
+    if (cycleFlips(g, k, s, mirror, done) === 0) factor *= 3n;
   }
   return { factor, cycles };
 }
@@ -402,18 +386,7 @@ export function mirror(s: Structure): Structure {
   const atoms = s.atoms.map((a) =>
     a.coords === null || s.dimension !== 3
       ? a
-      : newAtom(
-          a.element,
-          a.atomicNumber,
-          a.charge,
-          a.isotope,
-          a.hCount,
-          a.aromatic,
-          a.radical,
-          a.mapNumber,
-          a.inputNumber,
-          coords3(a.coords[0], a.coords[1], -a.coords[2]),
-        ),
+      : atomWith(a, { coords: coords3(a.coords[0], a.coords[1], -a.coords[2]) }),
   );
   const bonds = s.bonds.map((b) =>
     s.dimension === 2 && (b.wedge === 'up' || b.wedge === 'down')
@@ -421,4 +394,18 @@ export function mirror(s: Structure): Structure {
       : b,
   );
   return restructure(s, atoms, bonds, stereo, s.groups);
+}
+
+/** The flips (with the mirror's, if asked) along the cycle of element k's permutation through unit s, marked done. */
+function cycleFlips(g: UnitGroup, k: number, s: number, mirror: boolean, done: Uint8Array): number {
+  const perm = g.perms[k];
+  const flip = g.flips[k];
+  let i = s;
+  let rel = 0;
+  do {
+    done[i] = 1;
+    rel ^= flip[i] ^ (mirror ? g.reflect[i] : 0);
+    i = perm[i];
+  } while (i !== s);
+  return rel;
 }
