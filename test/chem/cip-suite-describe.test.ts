@@ -32,15 +32,15 @@ function score(file: string): { ok: number; total: number; failed: string[] } {
 }
 
 suite.skipIf(!haveSharedData('cip-validation-suite'))('describe() on the CIP validation suite', () => {
-  it('2D molfiles: at least 299 of 300 records exactly right', () => {
+  it('2D molfiles: all 300 records exactly right', () => {
     const r = score('compounds_2d.sdf');
     console.log(`describe / CIP suite 2D: ${r.ok}/${r.total}\n  ${r.failed.join('\n  ')}`);
     expect(r.total).toBe(300);
-    expect(r.ok).toBeGreaterThanOrEqual(299);
+    expect(r.ok).toBe(300);
   });
-  it('3D molfiles: at least 299 of 300 records exactly right', () => {
+  it('3D molfiles: all 300 records exactly right', () => {
     const r = score('compounds_3d.sdf');
     console.log(`describe / CIP suite 3D: ${r.ok}/${r.total}\n  ${r.failed.join('\n  ')}`);
-    expect(r.ok).toBeGreaterThanOrEqual(299);
+    expect(r.ok).toBe(300);
   });
 });

@@ -5,7 +5,8 @@
  * the first difference, so only the spheres needed are ever grown.
  *
  * Ranking the substituents of a node (which fixes the exploration order) uses the rules up to the one being
- * applied; the sorted lists are cached per node, per direction of travel and per rule level.
+ * applied, Rule 4b excepted (it ranks only the ligands of the unit; see sortAt); the sorted lists are cached per
+ * node, per direction of travel and per rule level.
  */
 import type { CipLabel } from '../facts.js';
 import { CipNode, Digraph, type SortedBranches } from './digraph.js';
@@ -404,9 +405,13 @@ export class Ranker {
 
   private sortAt(node: CipNode, from: CipNode | null, level: number): SortedBranches {
     // the order under rules up to `level` refines the order under the rules before it: only runs that tie
-    // there need sorting, and only by this rule
+    // there need sorting, and only by this rule. Rule 4b is no such rule: it compares the ligands of the unit
+    // being ranked by the like/unlike pairs of their whole branches (P-92.5.2; Hanson et al. 2018), and puts
+    // no order on the branches of a node farther out. Exploring there under Rules 4c and 5, the branches stay
+    // in their Rule 4a order and are ordered by the rule being applied, so a pseudoasymmetric node counts by its
+    // own r/s (Rule 4c) and its chiral neighbours by R/S (Rule 5) wherever it sits: the suite's VS268 (16S).
     const base = this.sorted(node, from, level - 1);
-    if (!this.active[level] || !anyTrue(base.tie)) return base;
+    if (!this.active[level] || level === RULE_4B || !anyTrue(base.tie)) return base;
     const out: SortedBranches = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
     for (let i = 0; i < out.nodes.length;) {
       let j = i + 1;

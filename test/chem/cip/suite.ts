@@ -46,6 +46,16 @@ function split(labels: string | undefined): string[] {
     .sort(byAtom);
 }
 
+/** The SMILES of one suite record (compounds.smi), by its id. */
+export function suiteSmiles(id: string): string {
+  const text = readFileSync(sharedDataPath('cip-validation-suite', 'compounds.smi'), 'utf8');
+  for (const line of text.split('\n')) {
+    const f = line.split('\t');
+    if (f[1] === id) return f[0];
+  }
+  throw new Error(`${id} missing from compounds.smi`);
+}
+
 export function loadSmiles(): SuiteRecord[] {
   const text = readFileSync(sharedDataPath('cip-validation-suite', 'compounds.smi'), 'utf8');
   return text
