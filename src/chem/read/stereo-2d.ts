@@ -23,11 +23,7 @@
  * terminal atoms; an implicit H sits opposite the other two bonds of its end; the signed volume of
  * [near a, near b, far a, far b] gives the winding (the collapsed-tetrahedron convention of types.ts).
  *
- * Biaryl axes (our rule, common practice, no source): a single bond between two sp2 ring atoms that each have
- * two ring neighbours (ortho atoms). An ortho atom is lifted towards the viewer (z = +1) by a wedge, or away
- * (z = -1) by a hash, drawn either from the axis atom to that ortho atom or from the ortho atom to a substituent
- * outside the ring; the other ortho atom of the same ring gets the opposite z; the other ring stays flat unless
- * it is marked too. The signed volume of [ortho a1, ortho a2, ortho b1, ortho b2] gives the winding.
+ * Biaryl axes: stereo-2d-axes.ts (shared with the CXSMILES reader).
  */
 import { objectList } from './make.js';
 import type {
@@ -41,8 +37,8 @@ import type {
 import { IMPLICIT_H } from '../types.js';
 import { ringInfo } from '../graph/index.js';
 import { ringBonds, type Adjacency } from './molfile-graph.js';
+import { biarylAxesFrom2d, wedgeZ } from './stereo-2d-axes.js';
 import {
-  biarylCandidates,
   cumulenes,
   fourthLigand,
   others,
@@ -91,12 +87,6 @@ export function stereoFrom2d(
     const c = s.atoms[i]!.coords!;
     return [c[0], c[1], 0];
   };
-  /** z of the bond centre->n as seen from the centre. */
-  const zFrom = (centre: number, k: number): number => {
-    const b = s.bonds[k]!;
-    if (b.a !== centre || b.order !== 1) return 0;
-    return b.wedge === 'up' ? 1 : b.wedge === 'down' ? -1 : 0;
-  };
 
   // Tetrahedral centres
   for (let c = 0; c < s.atoms.length; c++) {
@@ -144,7 +134,7 @@ export function stereoFrom2d(
         return null;
       }
       flat.push(u);
-      zs.push(zFrom(c, adj.bnd[c]![j]!));
+      zs.push(wedgeZ(s, c, adj.bnd[c]![j]!));
     }
     const ligands = [...ns];
     if (fourth !== null) ligands.push(fourth);
@@ -276,7 +266,7 @@ export function stereoFrom2d(
     let lifted = false;
     for (const x of subs) {
       const k = adj.bnd[end]![adj.nbr[end]!.indexOf(x)]!;
-      const z = zFrom(end, k);
+      const z = wedgeZ(s, end, k);
       if (z !== 0) lifted = true;
       const v = sub2(xy(x), pe);
       pts.push([pe[0] + v[0], pe[1] + v[1], z * Math.hypot(v[0], v[1])]);
@@ -320,66 +310,7 @@ export function stereoFrom2d(
     return { kind: 'axial', subtype: 'allene', ends, ligands, winding: windingOf(vol) };
   }
 
-  // Biaryl axes
-  for (const [k, oa, ob] of biarylCandidates(s, adj, ring)) {
-    const bond = s.bonds[k]!;
-    const za = orthoLift(bond.a, oa);
-    const zb = orthoLift(bond.b, ob);
-    if (za === null || zb === null) {
-      warn(
-        'stereo-ambiguous-wedge',
-        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
-        bond.a,
-      );
-      continue;
-    }
-    if (za[0] === 0 && zb[0] === 0) continue;
-    const len = Math.hypot(...sub2(xy(bond.b), xy(bond.a))) || 1;
-    const pts: Vec[] = [];
-    [...oa.map((o, i) => [o, za[i]!] as const), ...ob.map((o, i) => [o, zb[i]!] as const)].forEach(
-      ([o, z]) => {
-        const p = xy(o);
-        pts.push([p[0], p[1], z * len]);
-      },
-    );
-    const vol = signedVolume(pts);
-    if (Math.abs(vol) / (len * len * len) < 0.01) {
-      warn(
-        'stereo-ambiguous-wedge',
-        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
-        bond.a,
-      );
-      continue;
-    }
-    out.push({
-      kind: 'axial',
-      subtype: 'biaryl',
-      ends: [bond.a, bond.b],
-      ligands: [oa[0]!, oa[1]!, ob[0]!, ob[1]!],
-      winding: windingOf(vol),
-    });
-  }
-
-  /** z lift of the two ortho atoms of an axis end from wedges; [0,0] when unmarked, null when contradictory. */
-  function orthoLift(end: number, orth: number[]): [number, number] | null {
-    const z: number[] = orth.map((o) => {
-      let v = zFrom(end, adj.bnd[end]![adj.nbr[end]!.indexOf(o)]!);
-      if (v === 0) {
-        for (let j = 0; j < adj.nbr[o]!.length; j++) {
-          const x = adj.nbr[o]![j]!;
-          const bk = adj.bnd[o]![j]!;
-          if (x === end || ring[bk]) continue;
-          const w = zFrom(o, bk);
-          if (w !== 0) v = w;
-        }
-      }
-      return v;
-    });
-    if (z[0] !== 0 && z[0] === z[1]) return null;
-    if (z[0] === 0 && z[1] !== 0) z[0] = -z[1]!;
-    else if (z[1] === 0 && z[0] !== 0) z[1] = -z[0]!;
-    return [z[0]!, z[1]!];
-  }
+  for (const axis of biarylAxesFrom2d(s, adj, ring, warn)) out.push(axis);
 
   return out;
 }
