@@ -105,7 +105,7 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
     remarks: p.remarks.slice(),
   };
   for (const u of unstatable) {
-    facts.remarks.push(unstatedRemark(u));
+    facts.remarks.push(unstatedRemark(u, s));
   }
   if (openAxes.length > 0) {
     facts.mirror = {
@@ -203,7 +203,7 @@ function cannotState(kind: StereoUnitFact['kind'], dimension: number): boolean {
   return dimension === 0 && (kind === 'biaryl' || kind === 'helix');
 }
 
-function unstatedRemark(u: StereoUnitFact): string {
+function unstatedRemark(u: StereoUnitFact, s: Structure): string {
   const [x, y] = u.atoms;
   const what =
     u.kind === 'biaryl'
@@ -211,11 +211,36 @@ function unstatedRemark(u: StereoUnitFact): string {
       : u.kind === 'helix'
         ? `the ortho-fused rings ending at atoms ${x} and ${y} form a helix`
         : `the trans double bond between atoms ${x} and ${y} lies in a ring of 8–11 atoms and is twisted (planar chiral, as (E)-cyclooctene)`;
+  if (u.kind === 'biaryl') {
+    const wedge = wedgeNearAxis(s, x, y);
+    if (wedge !== null)
+      return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
+  }
   const then =
     u.kind === 'biaryl'
-      ? 'chirality is left open (a molfile with wedges or 3D coordinates states it)'
+      ? 'chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)'
       : 'which of its two enantiomeric forms is meant is open (3D coordinates state it)';
   return `${what}; the input format cannot state its configuration: ${then}`;
+}
+
+/**
+ * A wedge or hash (a CXSMILES `wU:`/`wD:`) starting at an axis atom (input numbers x, y) or at one of their
+ * neighbours, as [narrow end, wide end] in input numbers; null when there is none.
+ */
+function wedgeNearAxis(s: Structure, x: number, y: number): [number, number] | null {
+  const near = new Set<number>();
+  for (const b of s.bonds) {
+    const na = s.atoms[b.a].inputNumber;
+    const nb = s.atoms[b.b].inputNumber;
+    if (na === x || na === y) near.add(b.b);
+    if (nb === x || nb === y) near.add(b.a);
+  }
+  for (const b of s.bonds) {
+    if (b.wedge !== 'up' && b.wedge !== 'down') continue;
+    const na = s.atoms[b.a].inputNumber;
+    if (na === x || na === y || near.has(b.a)) return [na, s.atoms[b.b].inputNumber];
+  }
+  return null;
 }
 
 /** (σ_h · M)(x) = x ? */

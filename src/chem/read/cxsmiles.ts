@@ -1,54 +1,65 @@
 /**
  * The CXSMILES extension block `|...|` that may follow a SMILES. Enhanced stereo is read:
- * `a:0,2` (absolute), `&1:3,5` (AND group 1), `o1:7` (OR group 1); and radicals: `^1:3` one unpaired electron
- * on atom 3, `^2:`…`^7:` two or more (held as 2, the most the structure records). Atom indices there are 0-based in the order
- * atoms are written, explicit `[H]` atoms included, which is exactly our atom index. Every other field
- * (coordinates `(...)`, labels `$...$`, `r`, `c:`, `t:`, `wU:`, `^1:`, `Sg:`, ...) is skipped.
+ * `a:0,2` (absolute), `&1:3,5` (AND group 1), `o1:7` (OR group 1); radicals: `^1:3` one unpaired electron
+ * on atom 3, `^2:`…`^7:` two or more (held as 2, the most the structure records); and the drawing: coordinates
+ * `(...)` and wedges `wU:`/`wD:`/`w:` (cxsmiles-drawing.ts). Atom indices there are 0-based in the order
+ * atoms are written, explicit `[H]` atoms included, which is exactly our atom index; bond indices likewise
+ * follow our bond order. Every other field (labels `$...$`, `r`, `c:`, `t:`, `Sg:`, ...) is skipped.
  * Field syntax as published with the format (ChemAxon's CXSMILES documentation); the skip rule is our own.
  */
-import type { ReadError, StereoGroup } from '../types.js';
+import type { StereoGroup } from '../types.js';
 import { newGroup, objectList } from './make.js';
+import {
+  fail,
+  isDigit,
+  readCoordinates,
+  readIndex,
+  readWedges,
+  wedgeFieldAt,
+  type CxWedge,
+  type Failure,
+} from './cxsmiles-drawing.js';
 
 export type CxResult =
-  | { ok: true; groups: StereoGroup[]; radicals: Map<number, number>; end: number }
-  | { ok: false; error: ReadError };
-
-function isDigit(c: number): boolean {
-  return c >= 48 && c <= 57;
-}
-
-function fail(code: string, message: string, offset: number): CxResult {
-  return { ok: false, error: { code, message, at: { offset } } };
-}
-
-/** One atom index (at most 9 digits) at `at`, and the offset after it; a failure with `code` when out of range. */
-function readIndex(
-  s: string,
-  at: number,
-  atomCount: number,
-  code: string,
-): { v: number; end: number } | CxResult {
-  let v = 0;
-  let j = at;
-  while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
-  if (v >= atomCount)
-    return fail(code, `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at);
-  return { v, end: j };
-}
+  | {
+      ok: true;
+      groups: StereoGroup[];
+      radicals: Map<number, number>;
+      /** The first coordinate block, one [x, y, z] per atom; null when there is none. */
+      coords: [number, number, number][] | null;
+      wedges: CxWedge[];
+      end: number;
+    }
+  | Failure;
 
 /**
- * Reads the block whose opening '|' is at `start`. `atomCount` bounds the indices.
- * Returns the groups and the offset just past the closing '|'.
+ * Reads the block whose opening '|' is at `start`. `atomCount` and `bondCount` bound the indices.
+ * Returns what it read and the offset just past the closing '|'.
  */
-export function parseCxExtension(s: string, start: number, atomCount: number): CxResult {
+export function parseCxExtension(s: string, start: number, atomCount: number, bondCount: number): CxResult {
   const n = s.length;
   const groups = objectList<StereoGroup>();
   const radicals = new Map<number, number>();
+  let coords: [number, number, number][] | null = null;
+  const wedges = objectList<CxWedge>();
   let i = start + 1;
   for (;;) {
     if (i >= n) return fail('cxsmiles-unclosed', "CXSMILES block is not closed with '|'", start);
     const c = s.charCodeAt(i);
-    if (c === 124) return { ok: true, groups, radicals, end: i + 1 };
+    if (c === 124) return { ok: true, groups, radicals, coords, wedges, end: i + 1 };
+    if (c === 40) {
+      const r = readCoordinates(s, i, atomCount);
+      if (!r.ok) return r;
+      coords ??= r.coords;
+      i = r.end;
+      continue;
+    }
+    if (wedgeFieldAt(s, i) >= 0) {
+      const r = readWedges(s, i, atomCount, bondCount, wedges);
+      if (!r.ok) return r;
+      i = r.end;
+      continue;
+    }
     if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
       // ^n:i,j radicals (n = 1 monovalent, 2–7 divalent and more)
       const count = s.charCodeAt(i + 1) === 49 ? 1 : 2;
@@ -124,7 +135,7 @@ function skipField(s: string, start: number): number {
   while (i < n) {
     const c = s.charCodeAt(i);
     if (c === 40) {
-      // ( ... ) coordinates; may contain ',' and ';'
+      // ( ... ) inside a field we skip; may contain ',' and ';'
       const close = s.indexOf(')', i + 1);
       i = close < 0 ? n : close + 1;
       continue;

@@ -3,11 +3,13 @@
  * Steps: syntax (smiles-parse.ts) -> aromatic bonds outside rings become single -> kekulization
  * (kekulize.ts) -> valence check (no checked atom above its highest valence) and implicit hydrogens from the
  * Kekulé form (valence.ts, OpenSMILES organic-subset rule) -> stereo (smiles-stereo.ts) -> CXSMILES enhanced
- * stereo (cxsmiles.ts). Bad input is returned as an error with a 0-based offset; nothing here throws on any input.
+ * stereo, radicals and drawing: coordinates and wedges (cxsmiles.ts, cxsmiles-drawing.ts). Bad input is
+ * returned as an error with a 0-based offset; nothing here throws on any input.
  */
 import type { Atom, Bond, BondOrder, ReadError, ReadResult, StereoGroup, Structure } from '../types.js';
 import { newAtom, newBond, newStructure, objectList } from './make.js';
 import { parseCxExtension } from './cxsmiles.js';
+import { applyDrawing, type CxWedge } from './cxsmiles-drawing.js';
 import { kekulize } from './kekulize.js';
 import { parseSmilesGraph, type SmilesGraph } from './smiles-parse.js';
 import { buildStereo } from './smiles-stereo.js';
@@ -89,11 +91,13 @@ function parse(text: string): ReadResult {
   while (i < text.length && isSpace(text.charCodeAt(i))) i++;
   let groups: Structure['groups'] | null = null;
   let cxRadicals: Map<number, number> | null = null;
+  let cxDrawing: { coords: [number, number, number][] | null; wedges: CxWedge[] } | null = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
-    const cx = parseCxExtension(text, i, n);
+    const cx = parseCxExtension(text, i, n, m);
     if (!cx.ok) return cx;
     groups = cx.groups;
     if (cx.radicals.size > 0) cxRadicals = cx.radicals;
+    if (cx.coords !== null || cx.wedges.length > 0) cxDrawing = cx;
     i = cx.end;
   }
   const title = text.slice(i).trim();
@@ -185,7 +189,15 @@ function parse(text: string): ReadResult {
     {},
     0,
   );
-  return { ok: true, structure, warnings };
+  if (cxDrawing === null) return { ok: true, structure, warnings };
+  const drawn = applyDrawing(
+    structure,
+    cxDrawing.coords,
+    cxDrawing.wedges,
+    (a) => g.atoms[a]!.offset,
+    warnings,
+  );
+  return 'ok' in drawn ? drawn : { ok: true, structure: drawn, warnings };
 }
 
 /**

@@ -26,7 +26,7 @@ describe('CXSMILES stereo groups', () => {
     expect(r.ok && r.structure.groups).toEqual([{ type: 'or', id: 1, atoms: [1] }]);
     expect(r.ok && r.structure.atoms[1]!.element).toBe('C');
   });
-  it('skips coordinates, atom labels and other fields, and reads a title after the block', () => {
+  it('reads past coordinates, wedges, atom labels and other fields, and reads a title after the block', () => {
     const r = parseSmiles('C[C@H](O)CC |(0,0,;1.5,0,;2,1,;3,0,;4,0,),$;;;_R1;$,&1:1,c:2,wU:1.0,r| LX-00007');
     expect(r.ok && r.structure.groups).toEqual([{ type: 'and', id: 1, atoms: [1] }]);
     expect(r.ok && r.structure.title).toBe('LX-00007');
