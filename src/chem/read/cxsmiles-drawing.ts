@@ -18,6 +18,13 @@ export interface CxWedge {
   offset: number;
 }
 
+/** What applyDrawing needs of a CXSMILES block: its first coordinate block (and where it is) and its wedges. */
+export interface CxDrawing {
+  coords: [number, number, number][] | null;
+  coordsAt: number;
+  wedges: CxWedge[];
+}
+
 export type Failure = { ok: false; error: ReadError };
 
 export function fail(code: string, message: string, offset: number): Failure {
@@ -134,8 +141,7 @@ export function readIndex(
  */
 export function applyDrawing(
   st: Structure,
-  coords: [number, number, number][] | null,
-  wedges: CxWedge[],
+  { coords, coordsAt, wedges }: CxDrawing,
   atomOffset: (atom: number) => number,
   warnings: ReadError[],
 ): Structure | Failure {
@@ -157,7 +163,7 @@ export function applyDrawing(
         code: 'cxsmiles-3d-coordinates',
         message:
           'the CXSMILES gives 3D coordinates, which are not read; configurations come from the SMILES alone',
-        at: { offset: 0 },
+        at: { offset: coordsAt },
       });
     } else if (coords.some((c) => c[0] !== coords[0]![0] || c[1] !== coords[0]![1])) {
       dimension = 2;

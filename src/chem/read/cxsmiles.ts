@@ -27,6 +27,8 @@ export type CxResult =
       radicals: Map<number, number>;
       /** The first coordinate block, one [x, y, z] per atom; null when there is none. */
       coords: [number, number, number][] | null;
+      /** Offset of that block's '(' (-1 when there is none). */
+      coordsAt: number;
       wedges: CxWedge[];
       end: number;
     }
@@ -41,16 +43,20 @@ export function parseCxExtension(s: string, start: number, atomCount: number, bo
   const groups = objectList<StereoGroup>();
   const radicals = new Map<number, number>();
   let coords: [number, number, number][] | null = null;
+  let coordsAt = -1;
   const wedges = objectList<CxWedge>();
   let i = start + 1;
   for (;;) {
     if (i >= n) return fail('cxsmiles-unclosed', "CXSMILES block is not closed with '|'", start);
     const c = s.charCodeAt(i);
-    if (c === 124) return { ok: true, groups, radicals, coords, wedges, end: i + 1 };
+    if (c === 124) return { ok: true, groups, radicals, coords, coordsAt, wedges, end: i + 1 };
     if (c === 40) {
       const r = readCoordinates(s, i, atomCount);
       if (!r.ok) return r;
-      coords ??= r.coords;
+      if (coords === null) {
+        coords = r.coords;
+        coordsAt = i;
+      }
       i = r.end;
       continue;
     }

@@ -9,7 +9,7 @@
 import type { Atom, Bond, BondOrder, ReadError, ReadResult, StereoGroup, Structure } from '../types.js';
 import { newAtom, newBond, newStructure, objectList } from './make.js';
 import { parseCxExtension } from './cxsmiles.js';
-import { applyDrawing, type CxWedge } from './cxsmiles-drawing.js';
+import { applyDrawing, type CxDrawing } from './cxsmiles-drawing.js';
 import { kekulize } from './kekulize.js';
 import { parseSmilesGraph, type SmilesGraph } from './smiles-parse.js';
 import { buildStereo } from './smiles-stereo.js';
@@ -91,7 +91,7 @@ function parse(text: string): ReadResult {
   while (i < text.length && isSpace(text.charCodeAt(i))) i++;
   let groups: Structure['groups'] | null = null;
   let cxRadicals: Map<number, number> | null = null;
-  let cxDrawing: { coords: [number, number, number][] | null; wedges: CxWedge[] } | null = null;
+  let cxDrawing: CxDrawing | null = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
     const cx = parseCxExtension(text, i, n, m);
     if (!cx.ok) return cx;
@@ -190,13 +190,7 @@ function parse(text: string): ReadResult {
     0,
   );
   if (cxDrawing === null) return { ok: true, structure, warnings };
-  const drawn = applyDrawing(
-    structure,
-    cxDrawing.coords,
-    cxDrawing.wedges,
-    (a) => g.atoms[a]!.offset,
-    warnings,
-  );
+  const drawn = applyDrawing(structure, cxDrawing, (a) => g.atoms[a]!.offset, warnings);
   return 'ok' in drawn ? drawn : { ok: true, structure: drawn, warnings };
 }
 

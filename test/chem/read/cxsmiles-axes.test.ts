@@ -167,7 +167,7 @@ suite('CXSMILES wedges elsewhere', () => {
   it('3D coordinates are not read, and a warning says so', () => {
     const r = parseSmiles('C[C@@H](O)CC |(0,0,0;1.5,0,0.2;2,1,0;3,0,0;4,0,1)|');
     expect(r.ok && r.structure.dimension).toBe(0);
-    expect(r.ok && r.warnings.map((w) => w.code)).toEqual(['cxsmiles-3d-coordinates']);
+    expect(r.ok && r.warnings.map((w) => [w.code, w.at.offset])).toEqual([['cxsmiles-3d-coordinates', 14]]);
   });
   const bad: [string, string, number][] = [
     ['CC(O)C |wU:0.2|', 'cxsmiles-bad-wedge', 11],
