@@ -4,7 +4,8 @@
  * with an unlike pair. In each branch the reference descriptor is that of the highest-ranked chiral unit (by
  * Rules 1-4a); when several units tie for that place, each is tried and the best sequence counts. The other
  * descriptors are then paired with the reference in hierarchical order (sphere by sphere, by rank), like pairs
- * first among units that tie in rank.
+ * first among units that tie in rank. The rule ranks the ligands of the unit being labelled (and of each auxiliary
+ * unit, at its own turn); it puts no order on the branches of nodes farther out (compare.ts, sortAt).
  */
 import type { CipLabel } from '../facts.js';
 import type { CipNode } from './digraph.js';

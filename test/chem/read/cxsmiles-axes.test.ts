@@ -19,6 +19,7 @@ import { beforeAll, describe as suite, expect, it } from 'vitest';
 import { describe } from '../../../src/chem/describe/index.js';
 import { parseMolfile } from '../../../src/chem/read/index.js';
 import { parseSmiles } from '../../../src/chem/read/smiles.js';
+import { relate } from '../../../src/chem/relate.js';
 import type { Structure } from '../../../src/chem/types.js';
 import { loadRdkit, type RdkitModule } from '../graph/rdkit.js';
 
@@ -101,6 +102,7 @@ suite('CXSMILES wedges on a stereogenic axis (RDKit MinimalLib writes the CXSMIL
         const view = rdkitView(rd, molfile);
         expect(view.cx).toMatch(/\|\(.*\),w[UD]:\d+\.\d+\|$/);
         expect(axis(read(view.cx))).toEqual(fromMolfile);
+        expect(relate(read(view.cx), read(molfile)).relation).toBe('identical');
         expect(view.label).toBe(fromMolfile[1]);
         seen.push(fromMolfile[1]!);
       }
@@ -123,6 +125,7 @@ suite('CXSMILES wedges on a stereogenic axis (RDKit MinimalLib writes the CXSMIL
     );
     const ours = axis(read(view.cx))[1];
     expect(axis(read(flipped))).toEqual([true, ours === 'M' ? 'P' : 'M']);
+    expect(relate(read(view.cx), read(flipped)).relation).toBe('enantiomers');
     const m = rd.get_mol(flipped)!;
     const tags = JSON.parse((m as unknown as { get_stereo_tags(): string }).get_stereo_tags()) as {
       CIP_bonds: [number, number, string][];
