@@ -134,6 +134,18 @@ suite('CXSMILES wedges on a stereogenic axis (RDKit MinimalLib writes the CXSMIL
     expect(tags.CIP_bonds[0]![2]).toBe(`(${ours === 'M' ? 'P' : 'M'})`);
   });
 
+  it('with coordinates but no wedge the axis is undefined (the format could state it), as in a 2D molfile', () => {
+    const m = rd.get_mol(BINOL)!;
+    (m as unknown as { set_new_coords(): void }).set_new_coords();
+    const cx = (m as unknown as { get_cxsmiles(): string }).get_cxsmiles();
+    m.delete();
+    expect(cx).toMatch(/ \|\(.*\)\|$/);
+    const f = describe(read(cx));
+    expect(f.units).toHaveLength(1);
+    expect(f.units[0]!.defined).toBe(false);
+    expect(f.units[0]!.formatCannotState).toBeUndefined();
+  });
+
   it('without the coordinates block the axis stays open, with a remark naming the wedge and what is missing', () => {
     const view = rdkitView(rd, wedgedMolfile(rd, BINOL, '1'));
     const bare = view.cx.replace(/\|\(.*\),/, '|');
