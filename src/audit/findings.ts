@@ -3,6 +3,7 @@
  * record's field positions, and the waiver (if the record carries a complete one for this check).
  */
 import type { AuditConfig, CheckModule, RawFinding } from '../checks/types.js';
+import { render } from '../checks/words.js';
 import { lineOf } from '../registry/positions.js';
 import type { LoadedRecord } from '../registry/types.js';
 import type { Finding, Severity } from './types.js';
@@ -11,15 +12,6 @@ import type { Finding, Severity } from './types.js';
 export const SCHEMA_CHECK_ID = 'record-schema';
 /** Id of the finding made when a check throws. */
 export const INTERNAL_ERROR_ID = 'internal-error';
-
-/** Fills `{name}` placeholders from data; unknown placeholders are left as written. */
-export function fillTemplate(template: string, data: RawFinding['data']): string {
-  return template.replace(/\{([A-Za-z0-9_]+)\}/g, (whole, name: string) => {
-    if (!(name in data)) return whole;
-    const v = data[name];
-    return v === null ? 'none' : String(v);
-  });
-}
 
 /**
  * The severity of a finding. Without configuration: the message's own level, else the check's default. A
@@ -74,7 +66,7 @@ export function toFinding(
   const template = check.messages[raw.messageId];
   const message =
     template !== undefined
-      ? fillTemplate(template, raw.data ?? {})
+      ? render(template, raw.data ?? {})
       : `${raw.messageId}${Object.keys(raw.data ?? {}).length ? ` (${JSON.stringify(raw.data)})` : ''}`;
   return {
     check: check.id,

@@ -9,7 +9,7 @@ import type { StereoForm } from '../registry/types.js';
 import type { AuditConfig, CheckModule, CheckOutcome, RawFinding } from './types.js';
 import { conditions } from './rotation-consistent.js';
 import { rotationsComparable } from './solvents.js';
-import { finding, fmt } from './words.js';
+import { finding, fmt, plural } from './words.js';
 
 const messages = {
   'already-registered':
@@ -179,9 +179,9 @@ export function compareWithRegistry(
   const passed =
     compared === 0
       ? 'no other registered record is this stereoisomer or its enantiomer'
-      : `${identical > 0 ? `the same stereoisomer as ${identical} other record(s)` : ''}` +
+      : `${identical > 0 ? `the same stereoisomer as ${plural(identical, 'other record')}` : ''}` +
         `${identical > 0 && compared > identical ? ', ' : ''}` +
-        `${compared > identical ? `the enantiomer of ${compared - identical} registered record(s)` : ''}` +
+        `${compared > identical ? `the enantiomer of ${plural(compared - identical, 'registered record')}` : ''}` +
         '; forms and rotations agree';
   return { findings: out, passed, pairs };
 }

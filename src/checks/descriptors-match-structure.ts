@@ -27,22 +27,22 @@ const messages = {
     "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, " +
     'e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).',
   'descriptor-label-mismatch':
-    '{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} ({how}). ' +
+    '{field} declares {text}, but the structure computes otherwise at {count:unit|units}: {mismatches} ({how}). ' +
     'Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the ' +
     'descriptors.',
   'descriptor-not-stereo-unit':
-    '{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those ' +
+    '{field} declares configurations at {locantCount?locant|locants} {locants}, but no stereo unit of the structure carries those ' +
     'atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.',
   'descriptor-at-undefined-unit':
-    '{field} declares configurations at locant(s) {locants}, but the structure leaves those units undefined. Draw ' +
+    '{field} declares configurations at {locantCount?locant|locants} {locants}, but the structure leaves those units undefined. Draw ' +
     'the configuration the descriptors state.',
   'descriptor-counts-mismatch':
     '{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ' +
     '({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; ' +
     'atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.',
   'descriptors-cite-undefined-units':
-    '{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} ' +
-    'stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the ' +
+    '{field} declares {text} ({declaredCount:configuration|configurations}), but the structure defines only ' +
+    '{definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the ' +
     'configurations the descriptors state (for a racemate: one enantiomer with an AND group).',
   'descriptors-at-unstated-units':
     '{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input ' +
@@ -143,8 +143,16 @@ function compareOne(
       if (fix !== null) out[out.length - 1]!.fix = fix;
     }
     if (cmp.notStereoUnits.length)
-      add('descriptor-not-stereo-unit', { locants: cmp.notStereoUnits.join(', '), computed });
-    if (cmp.undefinedAt.length) add('descriptor-at-undefined-unit', { locants: cmp.undefinedAt.join(', ') });
+      add('descriptor-not-stereo-unit', {
+        locants: cmp.notStereoUnits.join(', '),
+        locantCount: cmp.notStereoUnits.length,
+        computed,
+      });
+    if (cmp.undefinedAt.length)
+      add('descriptor-at-undefined-unit', {
+        locants: cmp.undefinedAt.join(', '),
+        locantCount: cmp.undefinedAt.length,
+      });
     if (cmp.agrees && cmp.unlisted.length) {
       const missing = cmp.unlisted
         .map((u) => `${u.locant ?? `atom ${u.atoms.join('–')}`} (${u.label})`)

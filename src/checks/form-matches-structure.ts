@@ -22,7 +22,7 @@ const messages = {
     'Declared achiral, but the structure is chiral: it has {allUnits} and its mirror image is a different ' +
     'molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.',
   'achiral-but-open':
-    'Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the ' +
+    'Declared achiral, but {undefinedCount:stereo unit is|stereo units are} left undefined ({undefinedUnits}), so whether the ' +
     'substance is chiral is open. Define those units in the structure, or declare the form unknown.',
   'achiral-is-meso':
     'Declared achiral. The structure is indeed achiral ({mirror}), but its constitution also has chiral ' +
@@ -31,34 +31,34 @@ const messages = {
     'Declared meso, but the structure is chiral: it defines {units} and its mirror image is a different molecule ' +
     '({mirror}). A meso compound is achiral. Check the configurations ({labels}) or declare single-enantiomer.',
   'meso-but-no-chiral-isomers':
-    'Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all ' +
-    'achiral), so the compound is simply achiral: meso applies only to an achiral member of a set that includes ' +
+    'Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, ' +
+    'achiral|stereoisomers, all achiral}), so the compound is simply achiral: meso applies only to an achiral member of a set that includes ' +
     'chiral members. Declare achiral.',
   'meso-but-open':
-    'Declared meso, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}); the drawing also covers ' +
+    'Declared meso, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}); the drawing also covers ' +
     'chiral stereoisomers. Define every unit as in the meso form.',
   'enantiomer-but-achiral':
     'Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and ' +
     'no enantiomeric excess. {remedy}',
   'enantiomer-undefined-units':
-    'Declared {form}, but {undefinedCount} stereo unit(s) are undefined: {undefinedUnits}. The structure then ' +
+    'Declared {form}, but {undefinedCount:stereo unit is|stereo units are} undefined: {undefinedUnits}. The structure then ' +
     'stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.',
   'racemate-but-achiral':
     'Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a ' +
     'racemate. {remedy}',
   'racemate-no-chiral-isomers':
-    'Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), ' +
-    'all achiral), so there are no enantiomers to mix. Declare achiral.',
+    'Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, ' +
+    'achiral|stereoisomers, all achiral}), so there are no enantiomers to mix. Declare achiral.',
   'racemate-which-diastereomer':
-    'Declared racemate, drawn with {undefinedCount} undefined stereo unit(s) ({undefinedUnits}). This ' +
-    'constitution has {pairs} pair(s) of enantiomers{achiralPart}, so the drawing does not say which ' +
+    'Declared racemate, drawn with {undefinedCount:undefined stereo unit|undefined stereo units} ({undefinedUnits}). This ' +
+    'constitution has {pairs:pair|pairs} of enantiomers{achiralPart}, so the drawing does not say which ' +
     "diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
   'diastereomer-too-few-units':
-    'Declared single-diastereomer, but the structure defines {definedCount} stereo unit(s) ({units}); ' +
+    'Declared single-diastereomer, but the structure defines {definedCount:stereo unit|stereo units} ({units}); ' +
     'diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, ' +
     'achiral or unknown, or define the missing units.',
   'diastereomer-undefined-units':
-    'Declared single-diastereomer, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}), so the ' +
+    'Declared single-diastereomer, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}), so the ' +
     'drawing covers several diastereomers. Define them, or declare diastereomer-mixture.',
   'enantiomer-but-drawn-mixture':
     'Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate ' +
@@ -214,7 +214,9 @@ function run(ctx: CheckContext): CheckOutcome {
         const a = f.stereoisomers.achiral;
         add(
           'racemate-which-diastereomer',
-          { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : '' },
+          {
+            achiralPart: a ? ` and ${a} achiral ${String(a) === '1' ? 'stereoisomer' : 'stereoisomers'}` : '',
+          },
           'warning',
         );
       }

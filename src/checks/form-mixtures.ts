@@ -8,7 +8,7 @@ import { finding } from './words.js';
 
 export const mixtureMessages = {
   'mixture-needs-components':
-    'Declared diastereomer-mixture with {count} component(s) under stereo.components; a mixture needs two or ' +
+    'Declared diastereomer-mixture with {count:component|components} under stereo.components; a mixture needs two or ' +
     'more, each drawn with its configuration. List the components.',
   'mixture-components-identical':
     'Components {a} and {b} are the same stereoisomer ({explanation}). A diastereomer mixture lists each ' +
@@ -26,7 +26,7 @@ export const mixtureMessages = {
     'The racemate lists components {a} and {b}, which are {relation}, not enantiomers ({explanation}). A racemate ' +
     'is a 1:1 mixture of two enantiomers; correct the components or the form.',
   'racemate-components-count':
-    'The racemate lists {count} component(s); a racemate consists of exactly two enantiomers. List both, or none.',
+    'The racemate lists {count:component|components}; a racemate consists of exactly two enantiomers. List both, or none.',
 } as const;
 
 export function mixtureFindings(ctx: CheckContext, parent: StructureFacts): RawFinding[] {

@@ -3,7 +3,7 @@
  * not a stereocentre at room temperature.
  */
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding } from './types.js';
-import { declaredDescriptors, definedUnits, finding, STEREO_CLAIM_FORMS } from './words.js';
+import { declaredDescriptors, definedUnits, finding, plural, STEREO_CLAIM_FORMS } from './words.js';
 
 export const NITROGEN_CHECK_ID = 'nitrogen-inversion';
 
@@ -89,7 +89,7 @@ function run(ctx: CheckContext): CheckOutcome {
   if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
   return {
     findings: out,
-    passed: `the claim rests on ${others.length} stereo unit(s) other than amine nitrogens`,
+    passed: `the claim rests on ${plural(others.length, 'stereo unit')} other than amine nitrogens`,
   };
 }
 

@@ -11,6 +11,7 @@ import type { Structure } from '../chem/types.js';
 import { parseDescriptors } from '../chem/descriptors.js';
 import type { CompoundRecord, StereoForm } from '../registry/types.js';
 import type { RegistryEntry, RegistryView } from './types.js';
+import { plural } from './words.js';
 
 export type InputStatus = 'achiral' | 'racemic' | 'enriched' | 'unknown';
 
@@ -115,7 +116,7 @@ function drawnStatus(facts: StructureFacts, name: string): { status: InputStatus
   if (facts.undefined > 0 || facts.chiral === null)
     return {
       status: 'unknown',
-      why: `${name} is drawn without the configuration of ${facts.undefined} stereo unit(s), so it may be racemic or one enantiomer`,
+      why: `${name} is drawn without the configuration of ${plural(facts.undefined, 'stereo unit')}, so it may be racemic or one enantiomer`,
     };
   if (facts.enhanced.meaning === 'relative')
     return {

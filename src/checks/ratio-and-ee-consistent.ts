@@ -13,10 +13,10 @@ const messages = {
     'The ratio {ratio} reads as percentages but its parts sum to {sum}, not 100 (tolerance ±{tolerance}). Correct ' +
     'the parts; if relative amounts were meant, write them as small whole numbers (e.g. 2:1).',
   'ratio-components-count':
-    'The ratio {ratio} has {parts} part(s) but stereo.components lists {components}; the parts are read in the ' +
+    'The ratio {ratio} has {parts:part|parts} but stereo.components lists {components}; the parts are read in the ' +
     'order of the components. Give one part per component.',
   'enantiomer-ratio-parts':
-    'The ratio {ratio} has {parts} parts, but a {form} consists of two enantiomers. Give the enantiomer ratio ' +
+    'The ratio {ratio} has {parts:part|parts}, but a {form} consists of two enantiomers. Give the enantiomer ratio ' +
     'as two parts (e.g. 97:3).',
   'racemate-ratio-not-even':
     'Declared racemate, but the ratio {ratio} is {deviation} points away from 50:50 (tolerance ±{tolerance}); that ' +

@@ -5,7 +5,7 @@
  */
 import { posix } from 'node:path';
 import type { CheckContext, CheckModule, CheckOutcome, RawFinding, ReadStructure } from './types.js';
-import { finding } from './words.js';
+import { finding, plural } from './words.js';
 import { NITROGEN_CHECK_ID } from './nitrogen-inversion.js';
 
 const messages = {
@@ -141,12 +141,12 @@ function run(ctx: CheckContext): CheckOutcome {
   if (findings.some((f) => f.severity !== 'note')) return { findings };
   const facts = ctx.main.facts;
   const atoms = ctx.main.structure?.atoms.length;
-  const what = [atoms !== undefined ? `${atoms} atoms` : null, facts?.formula || null]
+  const what = [atoms !== undefined ? plural(atoms, 'atom') : null, facts?.formula || null]
     .filter(Boolean)
     .join(', ');
-  const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : '';
+  const comps = ctx.components.length ? `; ${plural(ctx.components.length, 'component structure')} read` : '';
   const nitrogen = leftToNitrogen
-    ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion`
+    ? `; ${plural(leftToNitrogen, 'remark')} on amine nitrogens left to nitrogen-inversion`
     : '';
   const copies = saltRemarks.length ? `; ${saltRemarks.join('; ')}` : '';
   return { findings, passed: `structure read${what ? ` (${what})` : ''}${comps}${copies}${nitrogen}` };

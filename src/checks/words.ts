@@ -120,9 +120,29 @@ export function finding(
   return f;
 }
 
-/** Fills `{name}` placeholders (the audit renders messages itself; tests and the demo use this too). */
+/**
+ * Fills a message template from a finding's data; the audit renders every message through it. `{name}` is the
+ * value (null reads "none"). A count agrees with its words: `{name:one|many}` is the count and the words chosen
+ * by it (`{count:unit is|units are}` reads "1 unit is" or "3 units are"), `{name?one|many}` the words alone
+ * (`at {count?locant|locants} {list}`). A placeholder whose name is not in the data is left as written.
+ */
 export function render(template: string, data: RawFinding['data']): string {
-  return template.replace(/\{(\w+)\}/g, (m, k: string) => (k in data ? String(data[k]) : m));
+  return template.replace(
+    /\{([A-Za-z0-9_]+)(?:([:?])([^|{}]*)\|([^|{}]*))?\}/g,
+    (whole, name: string, how: string | undefined, one: string, many: string) => {
+      if (!Object.prototype.hasOwnProperty.call(data, name)) return whole;
+      const v = data[name];
+      const text = v === null ? 'none' : String(v);
+      if (how === undefined) return text;
+      const words = text === '1' ? one : many;
+      return how === ':' ? `${text} ${words}` : words;
+    },
+  );
+}
+
+/** A count with its noun: "1 stereo unit", "3 stereo units" (`many` defaults to `one` + s). */
+export function plural(n: number | string, one: string, many = `${one}s`): string {
+  return `${n} ${String(n) === '1' ? one : many}`;
 }
 
 export function fmt(n: number): string {

@@ -5,6 +5,9 @@
  */
 import type { StereoUnitFact, StructureFacts } from '../chem/facts.js';
 import type { Finding, RecordResult } from '../audit/types.js';
+import { plural } from '../checks/words.js';
+
+export { plural };
 
 export type ChecklistItem =
   | { kind: 'open'; finding: Finding }
@@ -59,10 +62,6 @@ export function openCounts(r: RecordResult): {
     else c.notes++;
   }
   return c;
-}
-
-export function plural(n: number | string, one: string, many = `${one}s`): string {
-  return `${n} ${n === 1 ? one : many}`;
 }
 
 /** The declared claim in a few words: "single-enantiomer, (2R,3R)". */
