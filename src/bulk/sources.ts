@@ -5,6 +5,12 @@
  */
 import { createReadStream } from 'node:fs';
 import { createInterface } from 'node:readline';
+import {
+  lostSeparatorMessage,
+  mergedRecordsMessage,
+  SD_HEADER_LINES,
+  SdBoundaries,
+} from '../chem/read/sd-split.js';
 import { readDelimitedRows, type DelimitedLimits } from './delimited.js';
 
 export interface BulkItem {
@@ -38,14 +44,10 @@ const REPLACEMENT = '\uFFFD';
 /** An SD record longer than this is not kept (a file without $$$$ lines must not fill the memory). */
 export const SD_RECORD_LIMITS = { maxLines: 200_000, maxChars: 64 * 2 ** 20 };
 
-/** A V2000 or V3000 counts line: two counts in the first six columns, the version at the end. */
-const COUNTS_LINE = /^[ \d]{3}[ \d]{3}.*V[23]000\s*$/;
-
 /**
- * SD records, streamed. A record ends at its `$$$$` line; a record whose `$$$$` was lost is still found: a
- * counts line (or a second `M  END`) after the record's `M  END` and outside any data-field value starts the next
- * record three lines earlier (its header), and the first record says that its `$$$$` is missing. So every record
- * in the file is reported, none merged into its neighbour.
+ * SD records, streamed. A record ends at its `$$$$` line; a record whose `$$$$` was lost is still found
+ * (src/chem/read/sd-split.ts, as the SD reader of single files finds it), and the first record says that its
+ * `$$$$` is missing. So every record in the file is reported, none merged into its neighbour.
  */
 export async function* readSdItems(path: string, limits = SD_RECORD_LIMITS): AsyncGenerator<BulkItem> {
   const rl = createInterface({ input: createReadStream(path, { encoding: 'utf8' }), crlfDelay: Infinity });
@@ -55,10 +57,7 @@ export async function* readSdItems(path: string, limits = SD_RECORD_LIMITS): Asy
   let startLine = 1;
   let lineNo = 0;
   let record = 0;
-  // where the record stands: in its molfile (before M  END), in its data block, inside a data-field value
-  let afterEnd = false;
-  let inValue = false;
-  let secondEnd = 0; // line of a second M  END in the data block that started no record
+  const bounds = new SdBoundaries();
   const item = (last: boolean, cutAt = 0): BulkItem => {
     record++;
     const text = dropped > 0 ? '' : lines.join('\n') + '\n';
@@ -70,11 +69,9 @@ export async function* readSdItems(path: string, limits = SD_RECORD_LIMITS): Asy
         : text.includes(REPLACEMENT)
           ? 'the record is not valid UTF-8 text (bad bytes replaced)'
           : cutAt > 0
-            ? `the record has no $$$$ line: the next record starts at line ${cutAt} (its counts line follows ` +
-              "this record's data); the two were read as separate records"
-            : secondEnd > 0
-              ? `a second "M  END" at line ${secondEnd} inside the record's data block: two records merged ` +
-                '(a lost $$$$ line and header?); only the first structure was read'
+            ? lostSeparatorMessage(cutAt)
+            : bounds.secondEnd > 0
+              ? mergedRecordsMessage(bounds.secondEnd)
               : last
                 ? 'the last record has no $$$$ terminator (file truncated?)'
                 : undefined;
@@ -84,9 +81,7 @@ export async function* readSdItems(path: string, limits = SD_RECORD_LIMITS): Asy
     lines = [];
     chars = 0;
     dropped = 0;
-    afterEnd = false;
-    inValue = false;
-    secondEnd = 0;
+    bounds.start();
   };
   for await (const raw of rl) {
     lineNo++;
@@ -104,24 +99,19 @@ export async function* readSdItems(path: string, limits = SD_RECORD_LIMITS): Asy
       dropped++;
       continue;
     }
-    if (afterEnd && !inValue && dropped === 0) {
-      if (COUNTS_LINE.test(raw) && lines.length >= 3) {
-        // a new record began three lines up (name, program, comment) without a $$$$ before it
-        const header = lines.splice(lines.length - 3, 3);
-        const cutAt = lineNo - 3;
-        yield item(false, cutAt);
-        reset();
-        startLine = cutAt;
-        for (const h of header) {
-          lines.push(h);
-          chars += h.length + 1;
-        }
-      } else if (raw.startsWith('M  END') && secondEnd === 0) secondEnd = lineNo;
-    }
-    if (!afterEnd && raw.startsWith('M  END')) afterEnd = true;
-    else if (afterEnd) {
-      if (raw.startsWith('>')) inValue = true;
-      else if (raw.trim() === '') inValue = false;
+    if (bounds.next(raw, lineNo) === 'next-record') {
+      // a new record began three lines up (name, program, comment) without a $$$$ before it
+      const header = lines.splice(lines.length - SD_HEADER_LINES, SD_HEADER_LINES);
+      const cutAt = lineNo - SD_HEADER_LINES;
+      yield item(false, cutAt);
+      reset();
+      bounds.start(SD_HEADER_LINES);
+      startLine = cutAt;
+      for (const h of header) {
+        lines.push(h);
+        chars += h.length + 1;
+      }
+      bounds.next(raw, lineNo);
     }
     lines.push(raw);
     chars += raw.length + 1;

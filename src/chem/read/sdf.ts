@@ -1,10 +1,12 @@
 /**
  * SD files (CTfile format specification, "SDfile"): records of a molfile, data fields `> <NAME>` with value
- * lines up to a blank line, and a `$$$$` separator. Records are split at `$$$$` before anything is parsed, so a
- * broken record yields a result with an error at its line and the next record is read as usual.
+ * lines up to a blank line, and a `$$$$` separator. Records are split at `$$$$` (or where a lost `$$$$` should
+ * have been, sd-split.ts) before anything is parsed, so a broken record yields a result with an error at its line
+ * and the next record is read as usual.
  */
 import type { ReadError, ReadResult } from '../types.js';
 import { parseMolfileLines, splitLines } from './molfile.js';
+import { lostSeparatorMessage, mergedRecordsMessage, SD_HEADER_LINES, SdBoundaries } from './sd-split.js';
 
 export interface SdRecord {
   /** 1-based record number. */
@@ -15,40 +17,77 @@ export interface SdRecord {
 }
 
 export function* readSdRecords(text: string): Generator<SdRecord> {
+  const records = new SdRecordSplitter();
   const lines = splitLines(text);
-  let start = 0;
-  let record = 0;
-  for (let i = 0; i <= lines.length; i++) {
-    if (i < lines.length && !lines[i]!.startsWith('$$$$')) continue;
-    if (!allBlank(lines, start, i)) {
-      record++;
-      yield { record, line: start + 1, result: readRecord(lines, start, i, start + 1, record) };
-    }
-    start = i + 1;
-  }
+  for (let i = 0; i < lines.length; i++) yield* records.line(lines[i]!, i + 1);
+  yield* records.end();
 }
 
 /** Streaming form: holds one record's lines at a time. `lines` yields lines without their line ends. */
 export async function* streamSdRecords(lines: AsyncIterable<string>): AsyncGenerator<SdRecord> {
-  let buf: string[] = [];
+  const records = new SdRecordSplitter();
   let lineNo = 0;
-  let first = 1;
-  let record = 0;
   for await (let l of lines) {
     lineNo++;
     if (l.length > 0 && l.charCodeAt(l.length - 1) === 13) l = l.slice(0, -1);
-    if (l.startsWith('$$$$')) {
-      if (!allBlank(buf, 0, buf.length)) {
-        record++;
-        yield { record, line: first, result: readRecord(buf, 0, buf.length, first, record) };
-      }
-      buf = [];
-      first = lineNo + 1;
-    } else buf.push(l);
+    yield* records.line(l, lineNo);
   }
-  if (!allBlank(buf, 0, buf.length)) {
-    record++;
-    yield { record, line: first, result: readRecord(buf, 0, buf.length, first, record) };
+  yield* records.end();
+}
+
+/**
+ * Lines in, records out. A record ends at its `$$$$` line, or where the next record's header begins when its
+ * `$$$$` was lost (sd-split.ts): that record is then a reader error at the line where the next one starts, as is
+ * a record holding a second `M  END` (two records merged), so that two molfiles are never read as one.
+ */
+class SdRecordSplitter {
+  private buf: string[] = [];
+  private first = 1;
+  private record = 0;
+  private readonly bounds = new SdBoundaries();
+
+  *line(l: string, lineNo: number): Generator<SdRecord> {
+    const kind = this.bounds.next(l, lineNo);
+    if (kind === 'separator') {
+      yield* this.flush(null);
+      this.buf = [];
+      this.first = lineNo + 1;
+      this.bounds.start();
+      return;
+    }
+    if (kind === 'next-record') {
+      const header = this.buf.splice(this.buf.length - SD_HEADER_LINES, SD_HEADER_LINES);
+      const cutAt = lineNo - SD_HEADER_LINES;
+      yield* this.flush({
+        code: 'sdf-missing-separator',
+        message: lostSeparatorMessage(cutAt),
+        at: { line: cutAt },
+      });
+      this.buf = header;
+      this.first = cutAt;
+      this.bounds.start(SD_HEADER_LINES);
+      this.bounds.next(l, lineNo);
+    }
+    this.buf.push(l);
+  }
+
+  *end(): Generator<SdRecord> {
+    yield* this.flush(null);
+  }
+
+  private *flush(cut: ReadError | null): Generator<SdRecord> {
+    if (allBlank(this.buf, 0, this.buf.length)) return;
+    this.record++;
+    const record = this.record;
+    let result = readRecord(this.buf, 0, this.buf.length, this.first, record);
+    const merged = this.bounds.secondEnd;
+    const problem: ReadError | null =
+      cut ??
+      (merged > 0
+        ? { code: 'sdf-merged-records', message: mergedRecordsMessage(merged), at: { line: merged } }
+        : null);
+    if (problem) result = { ok: false, error: { ...problem, at: { ...problem.at, record } } };
+    yield { record, line: this.first, result };
   }
 }
 
