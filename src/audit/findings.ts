@@ -3,6 +3,7 @@
  * record's field positions, and the waiver (if the record carries a complete one for this check).
  */
 import type { AuditConfig, CheckModule, RawFinding } from '../checks/types.js';
+import { acceptingWaiver } from '../checks/waivers.js';
 import { render } from '../checks/words.js';
 import { lineOf } from '../registry/positions.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -86,17 +87,16 @@ export function toFinding(
   };
 }
 
-function nonEmpty(s: unknown): s is string {
-  return typeof s === 'string' && s.trim() !== '';
-}
-
-/** Marks findings accepted by a complete waiver (check id matches; reason and approver given). */
+/**
+ * Marks findings accepted by a complete waiver (reason and approver given) that names them: their check, and
+ * their message id and other record where the waiver narrows it (src/checks/waivers.ts).
+ */
 export function applyWaivers(findings: Finding[], loaded: LoadedRecord): void {
   const waivers = loaded.record?.waivers ?? [];
+  if (waivers.length === 0) return;
   for (const f of findings) {
     if (f.check === INTERNAL_ERROR_ID) continue;
-    const w = waivers.find((x) => x.check === f.check && nonEmpty(x.reason) && nonEmpty(x.approved_by));
-    if (w) f.waived = { reason: w.reason!.trim(), approvedBy: w.approved_by!.trim() };
+    f.waived = acceptingWaiver(waivers, f);
   }
 }
 

@@ -16,6 +16,7 @@ import {
   type RegistryPair,
 } from '../checks/consistent-with-registry.js';
 import type { AuditConfig, RawFinding } from '../checks/types.js';
+import { acceptingWaiver } from '../checks/waivers.js';
 import { RegistryIndex, type Confirm } from '../registry/key-index.js';
 import type { IndexRow } from '../registry/keys.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -135,7 +136,9 @@ function rowFinding(raw: RawFinding, row: IndexRow, config: AuditConfig): Findin
     problems: [],
     origin: { kind: 'file' },
   };
-  return { ...toFinding(CHECK, raw, loaded, config), waived: row.waiver };
+  const f = toFinding(CHECK, raw, loaded, config);
+  // rows written before waivers were kept in full have none (a shard of an older run)
+  return { ...f, waived: acceptingWaiver(row.waivers ?? [], f) };
 }
 
 function duplicateId(row: IndexRow, first: string, config: AuditConfig): Finding {

@@ -5,6 +5,7 @@
 import { existsSync, realpathSync, statSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { AuditConfig, CheckContext, CheckModule, RegistryView } from '../checks/types.js';
+import { stillMatchesNothing } from '../checks/waivers.js';
 import { closestWord } from '../registry/closest.js';
 import { loadRegistry } from '../registry/load.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -150,10 +151,7 @@ export function confirmWith(engine: AuditEngine): Confirm {
 export function addPhaseResult(r: Pick<RecordResult, 'findings' | 'passed'>, p: PhaseResult): void {
   if (p.findings.length > 0) {
     // a waiver of the registry-wide check matched nothing per record; now it may match
-    const checks = new Set(p.findings.map((f) => f.check));
-    r.findings = r.findings.filter(
-      (f) => !(f.messageId === 'waiver-matches-nothing' && checks.has(String(f.data.waivedCheck))),
-    );
+    r.findings = r.findings.filter((f) => stillMatchesNothing(f, p.findings));
     r.findings.push(...p.findings);
   }
   if (p.passed) r.passed.push(p.passed);

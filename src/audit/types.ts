@@ -16,8 +16,12 @@ export interface Finding {
   line: number | null;
   /** Record field the finding is about, e.g. 'stereo.form'. */
   field: string | null;
-  /** Set when a waiver in the record accepts this finding. */
-  waived: { reason: string; approvedBy: string } | null;
+  /**
+   * Set when a waiver in the record accepts this finding: why, who, and what the waiver covers in words
+   * ("every finding of rotation-consistent" for a waiver that names only the check; absent in results written
+   * before it existed).
+   */
+  waived: { reason: string; approvedBy: string; covers?: string } | null;
   /** The certain correction, when the structure decides it (the pull request shows it as a suggested change). */
   fix?: Fix;
 }

@@ -18,7 +18,7 @@
  * or the enantiomer of another (as relate() says: "undefined stereo leaves the relation open").
  */
 import type { CipLabel, StructureFacts } from '../chem/facts.js';
-import type { Rotation, StereoForm } from './types.js';
+import type { Rotation, StereoForm, Waiver } from './types.js';
 
 export type DrawingKind = 'as-drawn' | 'racemic' | 'relative';
 
@@ -48,8 +48,8 @@ export interface IndexRow {
   keys: RecordKeys | null;
   /** Lines of the fields the findings point at (record files); bulk records use their row's line. */
   lines: { id: number | null; structure: number | null; rotation: number | null };
-  /** A complete waiver of the registry-wide check carried by the record. */
-  waiver: { reason: string; approvedBy: string } | null;
+  /** The record's waivers of the registry-wide check (complete or not), with their places in its list. */
+  waivers: (Waiver & { index: number })[];
 }
 
 /**

@@ -45,7 +45,12 @@ export interface Rotation {
 }
 
 export interface Waiver {
+  /** Id of the check whose findings the waiver accepts. */
   check: string;
+  /** Narrows it to one message of that check (its message id, e.g. enantiomer-registered). */
+  message_id?: string;
+  /** Narrows it to findings about this other record (its id, or its file when it has none). */
+  other_record?: string;
   reason?: string;
   approved_by?: string;
 }

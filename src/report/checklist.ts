@@ -11,7 +11,7 @@ export { plural };
 
 export type ChecklistItem =
   | { kind: 'open'; finding: Finding }
-  | { kind: 'accepted'; finding: Finding; reason: string; approvedBy: string }
+  | { kind: 'accepted'; finding: Finding; reason: string; approvedBy: string; covers: string | null }
   | { kind: 'passed'; check: string; evidence: string }
   | { kind: 'not-run'; check: string; reason: string };
 
@@ -40,7 +40,13 @@ export function checklistItems(r: RecordResult): ChecklistItem[] {
   const items: ChecklistItem[] = open.map((finding) => ({ kind: 'open', finding }));
   for (const f of r.findings) {
     if (f.waived)
-      items.push({ kind: 'accepted', finding: f, reason: f.waived.reason, approvedBy: f.waived.approvedBy });
+      items.push({
+        kind: 'accepted',
+        finding: f,
+        reason: f.waived.reason,
+        approvedBy: f.waived.approvedBy,
+        covers: f.waived.covers ?? null,
+      });
   }
   for (const p of r.passed) items.push({ kind: 'passed', check: p.check, evidence: p.evidence });
   for (const n of r.notRun ?? []) items.push({ kind: 'not-run', check: n.check, reason: n.reason });

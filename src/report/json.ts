@@ -13,7 +13,13 @@ function finding(f: Finding): Record<string, unknown> {
     messageId: f.messageId,
     field: f.field,
     data: f.data,
-    waived: f.waived ? { reason: f.waived.reason, approvedBy: f.waived.approvedBy } : null,
+    waived: f.waived
+      ? {
+          reason: f.waived.reason,
+          approvedBy: f.waived.approvedBy,
+          ...(f.waived.covers === undefined ? {} : { covers: f.waived.covers }),
+        }
+      : null,
   };
 }
 

@@ -73,7 +73,8 @@ function itemLine(item: ChecklistItem): string {
     const f = item.finding;
     return (
       `- ☑️ \`${f.check}\` accepted by waiver${lineRef(f.line)}: ${esc(f.message)}  \n` +
-      `  Reason: ${esc(item.reason)} · approved by ${esc(item.approvedBy)}`
+      `  Reason: ${esc(item.reason)} · approved by ${esc(item.approvedBy)}` +
+      (item.covers ? ` · the waiver covers ${esc(item.covers)}` : '')
     );
   }
   if (item.kind === 'not-run') return `- not run: \`${item.check}\`: ${esc(item.reason)}`;

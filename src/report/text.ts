@@ -63,7 +63,11 @@ function block(r: RecordResult, paint: Paint, verbose: boolean): string[] {
       const at = f.line !== null ? paint('dim', ` line ${f.line}`) : '';
       lines.push(
         `  ${paint('magenta', '~ accepted')} ${f.check}${at}: ${safeText(f.message)} ` +
-          paint('dim', `(waived: ${safeText(item.reason)}; approved by ${safeText(item.approvedBy)})`),
+          paint(
+            'dim',
+            `(waived: ${safeText(item.reason)}; approved by ${safeText(item.approvedBy)}` +
+              `${item.covers ? `; the waiver covers ${safeText(item.covers)}` : ''})`,
+          ),
       );
     } else if (item.kind === 'not-run') {
       lines.push(`  ${paint('dim', '– not run')} ${item.check}: ${safeText(item.reason)}`);

@@ -96,6 +96,7 @@ describe('runAudit', () => {
     expect(result.records[0]!.findings[0]!.waived).toEqual({
       reason: 'confirmed by X-ray',
       approvedBy: 'Dr. A. Larkspur',
+      covers: 'every finding of fake-form',
     });
     expect(result.records[1]!.findings[0]!.waived).toBeNull();
     expect(result.summary).toMatchObject({ errors: 1, waived: 1 });

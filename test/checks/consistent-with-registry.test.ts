@@ -199,7 +199,14 @@ describe('consistent-with-registry: each pair said once', () => {
     const p = new RegistryPhase({ mode: 'full', config, confirm: null });
     p.next(row(S_CARVONE, { form: 'racemate' }, 'LX-40'));
     const later = row(S_CARVONE, {}, 'LX-41');
-    later.waiver = { reason: 'two drawings of one batch, corrected in LIMS', approvedBy: 'M. Lindqvist' };
+    later.waivers = [
+      {
+        index: 0,
+        check: 'consistent-with-registry',
+        reason: 'two drawings of one batch, corrected in LIMS',
+        approved_by: 'M. Lindqvist',
+      },
+    ];
     expect(p.next(later).findings).toMatchObject([
       {
         messageId: 'same-structure-different-form',

@@ -71,7 +71,7 @@ describe('consistent-with-registry: rotations of an enantiomer pair in different
     rotation: r.stereo.rotation ?? null,
     keys: { constitution: 'C10H20O/x', kind: 'as-drawn', stereo, mirror, chiral: true, exact: true },
     lines: { id: 1, structure: 3, rotation: 7 },
-    waiver: null,
+    waivers: [],
   });
   const run = (mine: Rotation, theirs: Rotation) => {
     const me = row(menthol('LX-00023', mine), 2, 'a', 'b');

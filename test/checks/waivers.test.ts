@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { reviewWaivers, waiverReview as check } from '../../src/checks/waivers.js';
+import { reviewWaivers, waiverAccepts, waiverReview as check } from '../../src/checks/waivers.js';
 import type { Finding } from '../../src/audit/types.js';
 import type { Waiver } from '../../src/registry/types.js';
 import { ctx, ids, record, runCheck } from './facts.js';
@@ -54,5 +54,48 @@ describe('waiver-review', () => {
     expect(
       ids(runCheck(check, ctx({ record: withWaivers([w, w]), findings: [f('rotation-consistent')] }))),
     ).toEqual(['waiver-duplicate']);
+  });
+  it('a narrowed waiver names its message and the other record (registry otherId, origin input)', () => {
+    const registry = {
+      check: 'consistent-with-registry',
+      messageId: 'already-registered',
+      data: { otherId: 'LX-00456' },
+    };
+    const origin = {
+      check: 'origin-supports-claim',
+      messageId: 'carried-inverted',
+      data: { input: 'LX-00123' },
+    };
+    const w = { check: 'consistent-with-registry', other_record: 'LX-00123' };
+    expect(waiverAccepts(w, registry)).toBe(false);
+    expect(waiverAccepts({ ...w, other_record: 'LX-00456' }, registry)).toBe(true);
+    expect(
+      waiverAccepts({ ...w, other_record: 'LX-00456', message_id: 'enantiomer-registered' }, registry),
+    ).toBe(false);
+    expect(waiverAccepts({ check: 'origin-supports-claim', other_record: 'LX-00123' }, origin)).toBe(true);
+    expect(waiverAccepts({ check: 'consistent-with-registry' }, registry)).toBe(true);
+  });
+  it('two waivers of one check about different records are not repeats; the same one twice is', () => {
+    const w = { check: 'consistent-with-registry', reason: 'r', approved_by: 'a' };
+    const found = [
+      { check: 'consistent-with-registry', messageId: 'already-registered', data: { otherId: 'LX-1' } },
+      { check: 'consistent-with-registry', messageId: 'already-registered', data: { otherId: 'LX-2' } },
+    ];
+    const two = reviewWaivers(
+      withWaivers([
+        { ...w, other_record: 'LX-1' },
+        { ...w, other_record: 'LX-2' },
+      ]),
+      found,
+    );
+    expect(two).toEqual([]);
+    const same = reviewWaivers(
+      withWaivers([
+        { ...w, other_record: 'LX-1' },
+        { ...w, other_record: 'LX-1' },
+      ]),
+      found,
+    );
+    expect(same.map((x) => x.messageId)).toEqual(['waiver-duplicate']);
   });
 });

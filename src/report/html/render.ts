@@ -120,7 +120,10 @@ export function htmlRow(r: HtmlRecord): HtmlRow | null {
       severity: f.severity,
       message: f.message,
       line: f.line,
-      waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` : null,
+      waived: f.waived
+        ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` +
+          (f.waived.covers ? `; the waiver covers ${f.waived.covers}` : '')
+        : null,
     })),
   };
 }
