@@ -170,6 +170,7 @@ function auditOne(
   applyWaivers(findings, loaded);
   const passed: PassedCheck[] = [];
   const notRun: NotRunCheck[] = [];
+  const notApplicable: NotRunCheck[] = [];
   // A file that could not be parsed at all (syntax error, unreadable) has only its record-schema findings.
   const unparsed = loaded.record === null && loaded.sources === undefined && loaded.problems.length > 0;
   for (const check of unparsed ? [] : checks) {
@@ -209,7 +210,9 @@ function auditOne(
     findings.push(...produced);
     if (outcome.notRun !== undefined && produced.length === 0) {
       notRun.push({ check: check.id, reason: outcome.notRun });
-    } else if (produced.length === 0 && !outcome.notApplicable) {
+    } else if (outcome.notApplicable !== undefined && produced.length === 0) {
+      notApplicable.push({ check: check.id, reason: outcome.notApplicable });
+    } else if (produced.length === 0) {
       passed.push({ check: check.id, evidence: outcome.passed ?? '' });
     }
   }
@@ -221,6 +224,7 @@ function auditOne(
     findings,
     passed,
     notRun,
+    notApplicable,
     declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null },
   };
 }

@@ -60,6 +60,11 @@ export interface RecordResult {
   passed: PassedCheck[];
   /** Checks that did not run on this record, with the reason (absent in results written before it existed). */
   notRun?: NotRunCheck[];
+  /**
+   * Checks that do not apply to this record (no ratio declared, no rotation, no origin), with the reason: shown
+   * only on request (text --verbose), never as passed. Not in the JSON report.
+   */
+  notApplicable?: NotRunCheck[];
   declared: { form: string | null; descriptors: string | null };
 }
 

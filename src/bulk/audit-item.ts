@@ -198,6 +198,7 @@ export function auditItem(item: BulkItem & { seq: number }, ctx: ItemContext): B
     budget: ctx.budget,
     registryPhase: false,
   }).records[0];
+  delete result.notApplicable; // listed only by the text report's --verbose, which bulk outputs do not have
   if (ctx.registryNotRun !== undefined && result.notRun) {
     const wide = new Set(ctx.checks.filter((c) => c.scope === 'registry').map((c) => c.id));
     result.notRun = result.notRun.flatMap((n) =>

@@ -261,7 +261,7 @@ function comparable(r: ReadStructure, ctx: CheckContext): { facts: StructureFact
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
   const c0 = comparable(ctx.main, ctx);
-  if (!record || !c0) return { findings: [], notApplicable: true };
+  if (!record || !c0) return { findings: [], notApplicable: 'the record or its structure was not read' };
   const f = c0.facts;
   const decl = declaredDescriptors(record);
   const out: RawFinding[] = [];
@@ -377,7 +377,11 @@ function run(ctx: CheckContext): CheckOutcome {
         decl.name.words.length > 0 ||
         decl.name.rotationSign !== null));
   const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
-  if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
+  if (!hasAny && !hasComponents && out.length === 0)
+    return {
+      findings: [],
+      notApplicable: 'no descriptors declared (stereo.descriptors, the name, the components)',
+    };
   if (out.some((x) => x.severity !== 'note' || x.messageId === 'descriptors-at-unstated-units'))
     return { findings: out };
   return { findings: out, passed: evidence.join('; ') || 'descriptor prefixes agree with the declared form' };

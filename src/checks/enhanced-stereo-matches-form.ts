@@ -45,11 +45,15 @@ function atomList(atoms: readonly number[]): string {
 function run(ctx: CheckContext): CheckOutcome {
   const f = ctx.main.facts;
   const record = ctx.record;
-  if (!record || !f) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: 'the record or its structure was not read' };
   const form = record.stereo.form;
   const groups = f.enhanced.groups;
   const defined = definedUnits(f);
-  if (groups.length === 0 && defined.length === 0) return { findings: [], notApplicable: true };
+  if (groups.length === 0 && defined.length === 0)
+    return {
+      findings: [],
+      notApplicable: 'the structure has no enhanced-stereo group and no defined stereo unit',
+    };
   const and = groups.filter((g) => g.type === 'and');
   const or = groups.filter((g) => g.type === 'or');
   const decl = declaredDescriptors(record);

@@ -137,7 +137,7 @@ function achiralRemedy(f: StructureFacts, labels: string, nitrogen: string | nul
 function run(ctx: CheckContext): CheckOutcome {
   const f = ctx.main.facts;
   const record = ctx.record;
-  if (!record || !f) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: 'the record or its structure was not read' };
   const form = record.stereo.form;
   const e = evidence(f, ctx.main.structure);
   const out: RawFinding[] = [];

@@ -60,7 +60,9 @@ const messages = {
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
   const f = ctx.main.facts;
-  if (!record || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: 'the record or its structure was not read' };
+  if (f.invertibleNitrogens.length === 0)
+    return { findings: [], notApplicable: 'the structure has no amine nitrogen that inverts' };
   const form = record.stereo.form;
   const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
   const out: RawFinding[] = [];
@@ -86,7 +88,11 @@ function run(ctx: CheckContext): CheckOutcome {
     );
   }
   if (out.some((x) => x.severity !== 'note')) return { findings: out };
-  if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
+  if (out.length === 0 && drawn.length === 0)
+    return {
+      findings: [],
+      notApplicable: 'no stereo drawn at an amine nitrogen and no claim resting on one',
+    };
   return {
     findings: out,
     passed: `the claim rests on ${plural(others.length, 'stereo unit')} other than amine nitrogens`,

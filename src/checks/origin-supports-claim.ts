@@ -63,7 +63,7 @@ function unmappedNote(facts: StructureFacts, prov: Provenance, add: ReturnType<t
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
   const origin = record?.origin;
-  if (!record || !origin) return { findings: [], notApplicable: true };
+  if (!record || !origin) return { findings: [], notApplicable: 'no origin given (origin)' };
   const out: RawFinding[] = [];
   const add = makeAdd(out);
   const inputs = inputProblems(ctx, origin.from, add);
@@ -73,7 +73,14 @@ function run(ctx: CheckContext): CheckOutcome {
   }
   const main = ctx.main;
   if (out.length > 0 || !main.structure || !main.facts)
-    return out.length > 0 ? { findings: out } : { findings: [], notApplicable: true };
+    return out.length > 0
+      ? { findings: out }
+      : {
+          findings: [],
+          notRun: main.error
+            ? 'the structure could not be read (see structure-readable)'
+            : 'the record gives no structure',
+        };
 
   const prov = traceProvenance(
     main.structure,

@@ -62,9 +62,10 @@ function componentsAreDiastereomers(ctx: CheckContext): boolean {
 
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
-  if (!record) return { findings: [], notApplicable: true };
+  if (!record) return { findings: [], notApplicable: 'the record was not read' };
   const { form, ratio, ee, components } = record.stereo;
-  if (ratio === undefined && ee === undefined) return { findings: [], notApplicable: true };
+  if (ratio === undefined && ee === undefined)
+    return { findings: [], notApplicable: 'no ratio or ee declared (stereo.ratio, stereo.ee)' };
   const cfg = ctx.config;
   const out: RawFinding[] = [];
   const add = (id: Id, field: string, data: RawFinding['data'], severity?: RawFinding['severity']): void => {

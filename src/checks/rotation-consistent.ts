@@ -48,11 +48,11 @@ function isSodiumD(nm: number | undefined): boolean {
 
 function run(ctx: CheckContext): CheckOutcome {
   const record = ctx.record;
-  if (!record) return { findings: [], notApplicable: true };
+  if (!record) return { findings: [], notApplicable: 'the record was not read' };
   const form = record.stereo.form;
   const rot = record.stereo.rotation;
   const sign = declaredSign(record);
-  if (!rot) return { findings: [], notApplicable: true };
+  if (!rot) return { findings: [], notApplicable: 'no rotation given (stereo.rotation)' };
   const tol = ctx.config.zeroRotationTolerance;
   const out: RawFinding[] = [];
   const base = { form, value: rot.value, conditions: conditions(rot), tolerance: tol };

@@ -109,8 +109,11 @@ export interface CheckOutcome {
   findings: RawFinding[];
   /** When the check applied and found nothing: short evidence for the ticked checklist item. */
   passed?: string;
-  /** When the check did not apply to this record (e.g. no rotation given): omitted from the checklist. */
-  notApplicable?: boolean;
+  /**
+   * When the check does not apply to this record, why (e.g. 'no rotation given (stereo.rotation)'): omitted
+   * from the checklist, listed as not applicable with --verbose; never passed.
+   */
+  notApplicable?: string;
   /** When the check applies but could not run (an input it needs is missing): the reason, shown as not run. */
   notRun?: string;
 }

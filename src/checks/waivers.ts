@@ -154,7 +154,7 @@ export function reviewWaivers(
 
 function run(ctx: CheckContext): CheckOutcome {
   const waivers = ctx.record?.waivers ?? [];
-  if (waivers.length === 0) return { findings: [], notApplicable: true };
+  if (waivers.length === 0) return { findings: [], notApplicable: 'the record has no waivers' };
   const others = ctx.findings ?? [];
   const findings = reviewWaivers(ctx.record, others);
   if (findings.some((f) => f.severity !== 'note')) return { findings };

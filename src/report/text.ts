@@ -17,7 +17,10 @@ import {
 
 export interface TextOptions {
   color?: boolean;
-  /** Every record in full, every passed check with its evidence (default: what needs action first, rest short). */
+  /**
+   * Every record in full, every passed check with its evidence, and the checks that do not apply with the reason
+   * (default: what needs action first, rest short).
+   */
   verbose?: boolean;
 }
 
@@ -75,6 +78,10 @@ function block(r: RecordResult, paint: Paint, verbose: boolean): string[] {
       const ev = item.evidence ? `: ${paint('dim', safeText(item.evidence))}` : '';
       lines.push(`  ${paint('green', '✓')} ${item.check}${ev}`);
     }
+  }
+  if (verbose) {
+    for (const n of r.notApplicable ?? [])
+      lines.push(`  ${paint('dim', '– not applicable')} ${n.check}: ${safeText(n.reason)}`);
   }
   if (!verbose && r.passed.length > 0) {
     const names = r.passed.map((p) => p.check).join(', ');

@@ -9,7 +9,7 @@ export const formCheck: CheckModule = {
   explanation: 'Test double, no chemistry.',
   messages: { 'not-achiral': 'Declared {form}, computed achiral.' },
   run(ctx) {
-    if (!ctx.record) return { findings: [], notApplicable: true };
+    if (!ctx.record) return { findings: [], notApplicable: 'no record' };
     if (ctx.record.stereo.form === 'achiral') return { findings: [], passed: 'form is achiral' };
     return {
       findings: [{ messageId: 'not-achiral', data: { form: ctx.record.stereo.form }, field: 'stereo.form' }],
@@ -26,7 +26,7 @@ export const ratioNote: CheckModule = {
   messages: { 'has-ratio': 'Ratio {ratio} given; measured?', 'bad-ratio': 'Ratio {ratio} is odd.' },
   run(ctx) {
     const ratio = ctx.record?.stereo.ratio;
-    if (ratio === undefined) return { findings: [], notApplicable: true };
+    if (ratio === undefined) return { findings: [], notApplicable: 'no ratio given' };
     if (ratio === '1:2')
       return { findings: [{ messageId: 'bad-ratio', data: { ratio }, field: 'stereo.ratio' }] };
     return {

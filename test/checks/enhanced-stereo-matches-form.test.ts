@@ -86,6 +86,8 @@ describe('enhanced-stereo-matches-form', () => {
     ]);
   });
   it('does not apply to a structure without stereo', () => {
-    expect(runCheck(check, ctx({ record: record({ form: 'achiral' }) })).notApplicable).toBe(true);
+    expect(runCheck(check, ctx({ record: record({ form: 'achiral' }) })).notApplicable).toBe(
+      'the structure has no enhanced-stereo group and no defined stereo unit',
+    );
   });
 });

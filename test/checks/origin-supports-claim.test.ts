@@ -338,7 +338,7 @@ suite('origin-supports-claim: the origin itself', () => {
   });
   it('a record without origin is not judged', () => {
     const o = run(rec('LX-00190', R_PHENYLETHANOL, { form: 'single-enantiomer' }));
-    expect(o.notApplicable).toBe(true);
+    expect(o.notApplicable).toBe('no origin given (origin)');
   });
 });
 

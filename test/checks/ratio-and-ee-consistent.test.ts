@@ -42,7 +42,7 @@ describe('parseRatio', () => {
 
 describe('ratio-and-ee-consistent', () => {
   it('does not apply without ratio or ee', () => {
-    expect(run({ form: 'racemate' }).notApplicable).toBe(true);
+    expect(run({ form: 'racemate' }).notApplicable).toBe('no ratio or ee declared (stereo.ratio, stereo.ee)');
   });
   it('ratio parts must sum to 100 when they read as percentages', () => {
     expect(ids(run({ form: 'diastereomer-mixture', ratio: '70:20', components: [{}, {}] }))).toEqual([

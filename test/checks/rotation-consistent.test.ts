@@ -17,7 +17,9 @@ const run = (stereo: Parameters<typeof record>[0], name?: string) =>
 
 describe('rotation-consistent', () => {
   it('does not apply without a rotation', () => {
-    expect(run({ form: 'single-enantiomer' }, '(S)-(+)-carvone').notApplicable).toBe(true);
+    expect(run({ form: 'single-enantiomer' }, '(S)-(+)-carvone').notApplicable).toBe(
+      'no rotation given (stereo.rotation)',
+    );
   });
   it('a racemate, meso or achiral compound has zero rotation', () => {
     expect(run({ form: 'racemate', rotation: rot(0.3) }).findings).toEqual([]);

@@ -19,7 +19,7 @@ const withWaivers = (waivers: Waiver[]) => record({ form: 'racemate' }, { waiver
 
 describe('waiver-review', () => {
   it('does not apply without waivers', () => {
-    expect(runCheck(check, ctx({ record: record() })).notApplicable).toBe(true);
+    expect(runCheck(check, ctx({ record: record() })).notApplicable).toBe('the record has no waivers');
   });
   it('passes a complete waiver that matches a finding', () => {
     const r = withWaivers([
