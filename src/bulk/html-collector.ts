@@ -11,12 +11,14 @@ import type { Structure } from '../chem/types.js';
 import { renderHtmlPage, type HtmlRow } from '../report/html/render.js';
 import { pictureData, type PicData } from '../report/html/picture.js';
 import { plural } from '../report/checklist.js';
+import { NotRunTally } from '../report/not-run.js';
 import type { HtmlEntry, RenderedRecord } from './render-record.js';
 import type { BulkTrailer, RecordWriter } from './writers.js';
 
 export class HtmlCollector implements RecordWriter {
   readonly needs = 'html' as const;
   private readonly kept: HtmlEntry[] = [];
+  private readonly notRun = new NotRunTally();
   flaggedCount = 0;
 
   constructor(
@@ -26,6 +28,7 @@ export class HtmlCollector implements RecordWriter {
   ) {}
 
   async write(r: RenderedRecord): Promise<void> {
+    if (r.notRun) this.notRun.add(r.notRun.ref, r.notRun.checks);
     if (!r.html) return;
     this.flaggedCount++;
     if (this.kept.length < this.maxRecords) this.kept.push(r.html);
@@ -66,6 +69,7 @@ export class HtmlCollector implements RecordWriter {
       summary: t.summary,
       byCheck: t.byCheck,
       flaggedTotal: this.flaggedCount,
+      notRun: this.notRun.list(),
       notes,
       title: 'stereogate bulk audit',
     });

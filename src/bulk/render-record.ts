@@ -5,11 +5,12 @@
  * thread only writes. The merge of shard outputs renders the records it reads with the same function, so a
  * merged output is byte for byte the output of a single run.
  */
-import type { RecordResult, Severity } from '../audit/types.js';
+import type { NotRunCheck, RecordResult, Severity } from '../audit/types.js';
 import type { CheckModule } from '../checks/types.js';
 import { sarifLog } from '../report/sarif.js';
 import { htmlRow, type HtmlRow } from '../report/html/render.js';
 import type { UnitMark } from '../report/html/picture.js';
+import type { NotRunRecordRef } from '../report/not-run.js';
 import type { BulkRecordResult } from './audit-item.js';
 import type { VocabularyResult } from './mapping.js';
 import type { IndexRow } from '../registry/keys.js';
@@ -53,6 +54,8 @@ export interface RenderedRecord {
   sarif?: string[];
   /** Only for flagged records. */
   html?: HtmlEntry;
+  /** The checks that did not run on the record, for the SARIF and HTML outputs (which list them once per run). */
+  notRun?: { ref: NotRunRecordRef; checks: NotRunCheck[] };
 }
 
 export const JSONL_PREFIX = '{"kind":"record",';
@@ -120,6 +123,8 @@ export function makeRenderer(wants: RenderWants, checks: readonly CheckModule[])
       },
     };
     if (wants.csv) out.csv = csvRow(r);
+    if ((wants.sarif || wants.html) && r.notRun?.length)
+      out.notRun = { ref: { id: r.id, file: r.file, line: r.origin.line }, checks: r.notRun };
     if (wants.sarif && r.findings.length > 0) {
       // SARIF reads no computed facts
       const log = sarifLog(

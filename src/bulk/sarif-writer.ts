@@ -5,7 +5,8 @@
  */
 import { createWriteStream } from 'node:fs';
 import type { CheckModule } from '../checks/types.js';
-import { sarifLog } from '../report/sarif.js';
+import { NotRunTally } from '../report/not-run.js';
+import { sarifInvocations, sarifLog } from '../report/sarif.js';
 import type { RenderedRecord } from './render-record.js';
 import { close, drainWrite, type BulkTrailer, type RecordWriter } from './writers.js';
 
@@ -35,6 +36,10 @@ export function sarifWriter(
   const run = (header.runs as Record<string, unknown>[])[0];
   const head = JSON.stringify({ ...header, runs: [{ tool: run.tool, results: ['\u0000'] }] });
   const [before, after] = head.split('"\\u0000"');
+  const ruleIndex = new Map(
+    ((run.tool as { driver: { rules: { id: string }[] } }).driver.rules ?? []).map((r, i) => [r.id, i]),
+  );
+  const notRun = new NotRunTally();
   let first = true;
   let started = false;
   return {
@@ -44,6 +49,7 @@ export function sarifWriter(
         started = true;
         await drainWrite(s, before);
       }
+      if (r.notRun) notRun.add(r.notRun.ref, r.notRun.checks);
       for (const res of r.sarif ?? []) {
         await drainWrite(s, (first ? '' : ',') + res);
         first = false;
@@ -51,9 +57,11 @@ export function sarifWriter(
     },
     async finish(t: BulkTrailer) {
       if (!started) await drainWrite(s, before);
+      const invocations = sarifInvocations(notRun.list(), ruleIndex);
       const tail = after.replace(
         /\}\]\}$/,
-        `,"properties":${JSON.stringify({ caution: t.caution, summary: t.summary })}}]}`,
+        (invocations ? `,"invocations":${JSON.stringify(invocations)}` : '') +
+          `,"properties":${JSON.stringify({ caution: t.caution, summary: t.summary })}}]}`,
       );
       await drainWrite(s, tail + '\n');
       await close(s);

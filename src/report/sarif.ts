@@ -2,10 +2,17 @@
  * SARIF 2.1.0 (OASIS standard) log of an audit: one run, tool.driver with one rule per check (and the audit's
  * own record-schema / internal-error rules), one result per finding with a physical location in the record file.
  * Waived findings are results with an in-source suppression carrying the reason and the approver.
+ *
+ * Checks that could not run on a record (its structure unreadable, the registry not all there) are not results:
+ * they found nothing and passed nothing. They are tool execution notifications of the run's invocation
+ * (SARIF 2.1.0, 3.20.21 toolExecutionNotifications: "runtime conditions detected by the tool during the course
+ * of the analysis"), one per check and reason, with the records' locations and the check as associatedRule
+ * (3.58.7). Not configuration notifications (3.20.22): nothing in the configuration kept them from running.
  */
 import { BUILTIN_RULES, type RuleInfo } from '../audit/builtin-rules.js';
 import type { AuditResult, Finding, Severity } from '../audit/types.js';
 import type { CheckModule } from '../checks/types.js';
+import { notRunGroups, notRunRecordsText, type NotRunGroup } from './not-run.js';
 
 export const SARIF_SCHEMA =
   'https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json';
@@ -99,6 +106,7 @@ export function sarifLog(
       return res;
     }),
   );
+  const invocations = sarifInvocations(notRunGroups(result.records), index, prefix);
   return {
     $schema: SARIF_SCHEMA,
     version: '2.1.0',
@@ -112,9 +120,46 @@ export function sarifLog(
             rules,
           },
         },
+        ...(invocations ? { invocations } : {}),
         results,
         properties: { caution: result.caution, summary: result.summary },
       },
     ],
   };
+}
+
+/**
+ * The run's invocation with one tool execution notification per check and reason that kept it from running,
+ * or null when every check ran. `prefix` as for the results' artifact URIs.
+ */
+export function sarifInvocations(
+  groups: readonly NotRunGroup[],
+  ruleIndex: ReadonlyMap<string, number>,
+  prefix = '',
+): Record<string, unknown>[] | null {
+  if (groups.length === 0) return null;
+  const notifications = groups.map((g) => {
+    const rule: Record<string, unknown> = { id: g.check };
+    const i = ruleIndex.get(g.check);
+    if (i !== undefined) rule.index = i;
+    return {
+      level: 'note',
+      message: { text: `${g.check} did not run on ${notRunRecordsText(g)}: ${g.reason}.` },
+      associatedRule: rule,
+      locations: g.examples.map((e) => {
+        const physical: Record<string, unknown> = {
+          artifactLocation: { uri: encodeUri(`${prefix}${e.file}`) },
+        };
+        if (e.line !== null && e.line >= 1) physical.region = { startLine: e.line };
+        return { physicalLocation: physical };
+      }),
+      properties: {
+        notRun: true,
+        reason: g.reason,
+        records: g.records,
+        recordIds: g.examples.map((e) => e.id),
+      },
+    };
+  });
+  return [{ executionSuccessful: true, toolExecutionNotifications: notifications }];
 }

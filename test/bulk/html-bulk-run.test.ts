@@ -2,7 +2,8 @@
  * The HTML report of a real bulk run, in a real browser (Debian's chromium driven by playwright-core): a small
  * Larkspur Chemistry Lab export of textbook molecules (structures from memory) with invented claims, audited
  * through the bulk command. The page loads with no console errors, every flagged record with a readable
- * structure has its depiction, the filters and the search work, and a screenshot is saved to test-output/.
+ * structure has its depiction, the filters and the search work, the checks that could not run are shown (once
+ * for the run, and on the record's card), and a screenshot is saved to test-output/.
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -109,6 +110,20 @@ describe.skipIf(!haveBrowser && !requireBrowser)('HTML report of a bulk run in c
       expect(await page.locator('article.rec .file').textContent()).toMatch(/record 3, line 4$/);
       await page.fill('#search', '');
       expect(await visible()).toBe(flagged.length);
+      // the checks that could not run on the broken SMILES: listed once for the run, and on its card
+      const notRun = page.locator('section[aria-label="checks not run"]');
+      expect(await notRun.isVisible()).toBe(true);
+      const notRunText = (await notRun.innerText()).replace(/\s+/g, ' ');
+      expect(notRunText).toContain(
+        'form-matches-structure 1 record (LX-00008) the structure could not be read (see structure-readable)',
+      );
+      const card = page.locator('article.rec[data-id="LX-00008"] li.notrun', {
+        hasText: 'form-matches-structure',
+      });
+      expect(await card.isVisible()).toBe(true);
+      expect(await card.innerText()).toMatch(
+        /^not run\s*form-matches-structure: the structure could not be read \(see structure-readable\)$/i,
+      );
       await page.screenshot({ path: join(out, 'bulk-report.png'), fullPage: true });
       expect(problems).toEqual([]);
     } finally {

@@ -91,6 +91,13 @@ export const PAGE_SCRIPT = `
       li.appendChild(document.createTextNode(': ' + f.message + (f.waived ? ' [' + f.waived + ']' : '')));
       ul.appendChild(li);
     });
+    (r.notRun || []).forEach(function (n) {
+      var li = el('li', 'notrun');
+      li.appendChild(el('span', 'sev sev-notrun', 'not run'));
+      li.appendChild(el('code', '', n.check));
+      li.appendChild(document.createTextNode(': ' + n.reason));
+      ul.appendChild(li);
+    });
     body.appendChild(ul);
     box.appendChild(body);
     return box;

@@ -52,6 +52,7 @@ b.cip { color: var(--accent); }
 ul.findings { margin: .25rem 0 0; padding-left: 1.1rem; }
 .sev { font-weight: 600; text-transform: uppercase; font-size: .75rem; letter-spacing: .03em; margin-right: .35rem; }
 .sev-error { color: var(--err); } .sev-warning { color: var(--warn); } .sev-note { color: var(--note); }
+.sev-notrun { color: var(--muted); }
 .waived { color: var(--muted); text-decoration: line-through; }
 @media (max-width: 640px) {
   body { padding: .5rem; font-size: 14px; }

@@ -12,6 +12,7 @@
  */
 import type { AuditResult, RecordResult } from '../../audit/types.js';
 import type { StructureFacts } from '../../chem/facts.js';
+import { notRunGroups, notRunRecordsText, type NotRunGroup } from '../not-run.js';
 import { PAGE_SCRIPT } from './page-script.js';
 import type { PicData } from './picture.js';
 import { PAGE_STYLE } from './page-style.js';
@@ -60,6 +61,8 @@ export interface HtmlRow {
     line: number | null;
     waived: string | null;
   }[];
+  /** Checks that did not run on the record, with the reason (absent in rows made before it existed). */
+  notRun?: { check: string; reason: string }[];
 }
 
 export type CheckCounts = Record<string, { error: number; warning: number; note: number; waived: number }>;
@@ -125,6 +128,7 @@ export function htmlRow(r: HtmlRecord): HtmlRow | null {
           (f.waived.covers ? `; the waiver covers ${f.waived.covers}` : '')
         : null,
     })),
+    notRun: (r.notRun ?? []).map((n) => ({ check: n.check, reason: n.reason })),
   };
 }
 
@@ -152,6 +156,7 @@ export function renderHtml(result: AuditResult, opts: HtmlReportOptions = {}): s
     caution: result.caution,
     summary: result.summary,
     byCheck: countByCheck(result.records),
+    notRun: notRunGroups(result.records),
     ...opts,
   });
 }
@@ -163,6 +168,27 @@ export interface HtmlPage extends Omit<HtmlReportOptions, 'pictures'> {
   byCheck: CheckCounts;
   /** Flagged records in all, when only some are listed (a capped bulk report). */
   flaggedTotal?: number;
+  /** Checks that did not run, by check and reason, over every record of the run (flagged or not). */
+  notRun?: readonly NotRunGroup[];
+}
+
+/** The section listing the checks that did not run (neither passed nor failed), or '' when every check ran. */
+function notRunSection(groups: readonly NotRunGroup[]): string {
+  if (groups.length === 0) return '';
+  const rows = groups
+    .map(
+      (g) =>
+        `<tr><td><code>${escapeHtml(g.check)}</code></td><td>${escapeHtml(notRunRecordsText(g))}</td>` +
+        `<td>${escapeHtml(g.reason)}</td></tr>`,
+    )
+    .join('\n');
+  return `<section aria-label="checks not run">
+<h2>Checks not run</h2>
+<p>These checks could not run on some records, so they neither passed nor failed there.</p>
+<div class="scroll"><table class="counts notrun"><thead><tr><th>check</th><th>not run on</th><th>why</th></tr></thead>
+<tbody>${rows}</tbody></table></div>
+</section>
+`;
 }
 
 /** The page from rows already made (bulk runs keep rows, not whole results); `pic` is the depiction, if any. */
@@ -211,7 +237,7 @@ ${notes ? `<ul class="notes">${notes}</ul>` : ''}
 <div class="scroll"><table class="counts"><thead><tr><th>check</th><th>errors</th><th>warnings</th><th>notes</th><th>waived</th></tr></thead>
 <tbody>${countsRows}</tbody></table></div>
 </section>
-<section aria-label="flagged records">
+${notRunSection(page.notRun ?? [])}<section aria-label="flagged records">
 <h2>Flagged records <span id="shown-count">${rows.length}</span> of ${rows.length}${
     page.flaggedTotal !== undefined && page.flaggedTotal > rows.length
       ? ` listed (${page.flaggedTotal} flagged in all)`
