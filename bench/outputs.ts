@@ -2,14 +2,18 @@
  * Outputs: (1) Markdown escaping of a hostile 600-byte descriptor (a run of `[`), ours against the former
  * escaping (kept in test/report/support/escape-before.ts; cubic on runs of `[`, 3 KB took 12 s), same run; and
  * (2) the HTML report of 10,000 flagged records opened in Debian's chromium: time until the page is usable,
- * against the baseline of the same page without its script (what reading the bytes and the embedded data costs).
+ * against the baseline of the same page without its script (what reading the bytes and the embedded data costs);
+ * and (3) the computed layouts of the bulk HTML report against reading and describing the same structures.
  */
 import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { describe, readStructure } from '../src/chem/index.js';
+import { layoutStructure } from '../src/chem/depict.js';
 import { escapeMarkdown } from '../src/report/escape.js';
 import { renderHtmlPage } from '../src/report/html/render.js';
 import { escapeMarkdown as escapeBefore } from '../test/report/support/escape-before.js';
 import { SAMPLES, sampleRow } from '../test/report/support/html-rows.js';
+import type { BenchContext } from './run.js';
 import { fmt, ratioLine, time } from './util.js';
 
 /** A descriptor field gone wrong: one long word of `[` (the former escaping backtracked cubically on it). */
@@ -80,4 +84,38 @@ export async function benchOutputs(): Promise<void> {
   } finally {
     await browser.close();
   }
+}
+
+/**
+ * (3) The bulk HTML report's computed layouts: laying out MoleculeNet SMILES for their depictions against reading
+ * and describing the same structures (the least of what their audit already cost), same run. It decides the
+ * bound of computed layouts in src/bulk/html-collector.ts (the first 3,000 flagged SMILES records): the layouts
+ * run in the main thread after the audit, one at a time.
+ */
+export function benchDepictions(ctx: BenchContext, n = 1_000): void {
+  const sample = ctx.smiles.slice(0, n);
+  const structures = sample
+    .map((s) => readStructure(s, { format: 'smiles' }))
+    .flatMap((r) => (r.ok ? [r.structure] : []));
+  const base = time('read + describe, MoleculeNet SMILES', sample.length, () => {
+    let units = 0;
+    for (const s of sample) {
+      const r = readStructure(s, { format: 'smiles' });
+      if (r.ok) units += describe(r.structure).units.length;
+    }
+    return units;
+  });
+  const layout = time('2D layout for the depiction, same structures', structures.length, () => {
+    let atoms = 0;
+    for (const s of structures) atoms += layoutStructure(s)?.atoms.length ?? 0;
+    return atoms;
+  });
+  console.log(fmt(base.timing));
+  console.log(fmt(layout.timing));
+  const perLayout = layout.timing.seconds / layout.timing.items;
+  console.log(
+    `depictions: a layout costs ${(base.timing.perSecond / layout.timing.perSecond).toFixed(1)}x the read + describe ` +
+      `of its structure (${(perLayout * 1000).toFixed(1)} ms); 3,000 layouts ${(3_000 * perLayout).toFixed(0)} s, ` +
+      `20,000 (every listed record) ${(20_000 * perLayout).toFixed(0)} s in the main thread after the audit`,
+  );
 }

@@ -6,7 +6,8 @@
  *   bulk    bulk audit of 100,000 records (MoleculeNet replicated, invented claims) with 1 and 2 workers
  *   action  a 20-record pull request against a 5,000-record registry vs the pure audit of the same records
  *   registry  bulk with and without the registry-wide checks, and the folder audit, of the same records
- *   outputs Markdown escaping vs the former escaping; the 10,000-record HTML report opened in chromium
+ *   outputs Markdown escaping vs the former escaping; the 10,000-record HTML report opened in chromium; the
+ *           HTML report's computed layouts vs reading and describing the same structures
  *   origin  the pull-request audit with an origin on every record vs without; the mapping's bound per record
  * Data: Wu et al., "MoleculeNet", Chem. Sci. 2018, 9, 513 (../shared/data/moleculenet).
  */
@@ -61,7 +62,14 @@ const SECTIONS: [string, Section][] = [
         ? (await import('./registry.js')).benchRegistry(ctx)
         : console.log('only when asked: npm run bench -- registry (BENCH_REGISTRY_RECORDS, default 20,000)'),
   ],
-  ['outputs', async () => (await import('./outputs.js')).benchOutputs()],
+  [
+    'outputs',
+    async (ctx) => {
+      const outputs = await import('./outputs.js');
+      await outputs.benchOutputs();
+      outputs.benchDepictions(ctx);
+    },
+  ],
   ['origin', async (ctx) => (await import('./origin.js')).benchOrigin(ctx)],
   [
     'bulk-memory',

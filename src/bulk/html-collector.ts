@@ -2,7 +2,8 @@
  * Collects flagged records of a bulk run (up to a cap) and writes the self-contained HTML report at the end,
  * with the 2D layout of each for its depiction (laid out in the main thread only for the flagged records kept,
  * so the audit itself pays nothing for it). A molfile record keeps its own coordinates (cheap, always drawn); a
- * computed layout costs a few milliseconds, so only the first `maxLayouts` get one.
+ * computed layout costs about 10 ms (npm run bench -- outputs), so only the first `maxLayouts` get one; the cards of
+ * the others say why they have no picture.
  */
 import { writeFileSync } from 'node:fs';
 import { readStructure } from '../chem/read/index.js';
@@ -37,16 +38,22 @@ export class HtmlCollector implements RecordWriter {
   async finish(t: BulkTrailer): Promise<void> {
     let computed = 0;
     let skipped = 0;
+    const bound = this.maxLayouts.toLocaleString('en-US');
     const rows: (HtmlRow & { pic: PicData | null })[] = this.kept.map((e) => {
       const read = readKept(e);
-      if (!read) return { ...e.row, pic: null };
+      if (!read) return { ...e.row, pic: null, noPicture: 'the structure could not be read' };
       if (read.dimension !== 2 && computed >= this.maxLayouts) {
         skipped++;
-        return { ...e.row, pic: null };
+        const noPicture =
+          `layouts are computed for the first ${plural(bound, 'flagged record')} given as SMILES only ` +
+          '(molfile records are always drawn)';
+        return { ...e.row, pic: null, noPicture };
       }
       const layout = layoutStructure(read);
       if (layout?.origin === 'computed') computed++;
-      return { ...e.row, pic: layout ? pictureData(layout, e.units) : null };
+      return layout
+        ? { ...e.row, pic: pictureData(layout, e.units) }
+        : { ...e.row, pic: null, noPicture: 'no 2D layout could be computed for this structure' };
     });
     const notes = [
       `${t.summary.records} records audited${t.shard ? ` (shard ${t.shard})` : ''}; ${this.flaggedCount} flagged.`,
@@ -57,7 +64,7 @@ export class HtmlCollector implements RecordWriter {
       );
     if (skipped > 0)
       notes.push(
-        `${skipped} flagged records from SMILES have no depiction: layouts are computed for the first ${this.maxLayouts} (molfile records are always drawn as registered).`,
+        `${plural(skipped, 'flagged record')} from SMILES ${skipped === 1 ? 'has' : 'have'} no depiction: layouts are computed for the first ${bound} (molfile records are always drawn as registered); their cards say so.`,
       );
     for (const [w, e] of t.vocabulary.mapped)
       notes.push(`legacy form word "${w}" read as ${e.form} (${plural(e.count, 'record')})`);

@@ -70,7 +70,7 @@ export const PAGE_SCRIPT = `
       pic.appendChild(holder);
       pic.appendChild(el('figcaption', '', r.pic.o === 'd' ? 'as drawn in the record (its coordinates and wedges)' : 'layout computed from the structure'));
       if (observer) observer.observe(holder); else paint(holder);
-    } else pic.appendChild(el('div', 'nodepict', 'no depiction'));
+    } else pic.appendChild(el('div', 'nodepict', r.noPicture ? 'no depiction: ' + r.noPicture : 'no depiction'));
     box.appendChild(pic);
     var body = el('div', 'body');
     body.appendChild(el('h3', '', r.id));

@@ -63,6 +63,8 @@ export interface HtmlRow {
   }[];
   /** Checks that did not run on the record, with the reason (absent in rows made before it existed). */
   notRun?: { check: string; reason: string }[];
+  /** Why the card has no depiction, when it has none and the reason is known (shown on the card). */
+  noPicture?: string;
 }
 
 export type CheckCounts = Record<string, { error: number; warning: number; note: number; waived: number }>;
