@@ -2,7 +2,7 @@
  * Collects flagged records of a bulk run (up to a cap) and writes the self-contained HTML report at the end,
  * with the 2D layout of each for its depiction (laid out in the main thread only for the flagged records kept,
  * so the audit itself pays nothing for it). A molfile record keeps its own coordinates (cheap, always drawn); a
- * computed layout costs about 10 ms (npm run bench -- outputs), so only the first `maxLayouts` get one; the cards of
+ * computed layout costs about 12 ms (npm run bench -- outputs), so only the first `maxLayouts` get one; the cards of
  * the others say why they have no picture.
  */
 import { writeFileSync } from 'node:fs';
