@@ -34,7 +34,9 @@ export function loadStructure(arg: string, io: Io): Loaded {
   } else if (FILE_ENDING.test(arg)) {
     return { ok: false, message: `file not found: ${arg}`, missingFile: true };
   }
-  if (/\n\$\$\$\$\s*(\n|$)/.test(text)) {
+  // An SD file: a $$$$ line, or text after the molfile's M  END (data fields, or a second molfile whose $$$$ was
+  // lost, which the SD reader reports at its line instead of reading the first molfile alone).
+  if (/\n\$\$\$\$\s*(\n|$)/.test(text) || /^M {2}END[^\n]*\n[\s\S]*\S/m.test(text)) {
     const first = readSdRecords(text).next().value;
     if (!first) return { ok: false, message: `${source}: no SD record found` };
     if (!first.result.ok)

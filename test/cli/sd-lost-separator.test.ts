@@ -39,6 +39,21 @@ describe('describe on an SD file with a lost $$$$', () => {
     expect(r.err).toMatch(/a second "M {2}END" at line 13 .*two records merged/);
   });
 
+  it('two molfiles run together with no $$$$ at all: the same error, not the first molfile alone', async () => {
+    const r = await describeFile(
+      [...ethanolV2000('LX-00001'), ...ethanolV2000('LX-00002')].join('\n') + '\n',
+    );
+    expect(r.code).not.toBe(0);
+    expect(r.err).toContain('the record has no $$$$ line: the next record starts at line 11');
+  });
+
+  it('one molfile alone is still described as a molfile', async () => {
+    const r = await describeFile(ethanolV2000('LX-00001').join('\n') + '\n');
+    expect(r.code).toBe(0);
+    expect(r.out).toContain('Formula: C2H6O');
+    expect(r.out).not.toContain('record 1');
+  });
+
   it('the same file with its $$$$ lines is described (record 1)', async () => {
     const r = await describeFile(`${rec('LX-00001')}$$$$\n${rec('LX-00002')}$$$$\n`);
     expect(r.code).toBe(0);
