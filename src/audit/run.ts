@@ -297,8 +297,13 @@ export interface RunAuditOptions {
   budget?: Budget;
 }
 
-/** Loads every record under `root` as the registry and audits those named by `paths`. Throws ConfigError on usage errors. */
-export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
+/**
+ * The registry root as a real path, its config (the file, then the overrides) checked against the checks' ids,
+ * and the checks. Throws ConfigError on usage errors.
+ */
+export async function openRegistry(
+  options: Pick<RunAuditOptions, 'root' | 'config' | 'configFile' | 'checks'>,
+): Promise<{ root: string; config: AuditConfig; checks: CheckModule[] }> {
   const rootAbs = resolve(options.root);
   if (!existsSync(rootAbs) || !statSync(rootAbs).isDirectory()) {
     throw new ConfigError(`registry folder ${options.root} does not exist`);
@@ -314,14 +319,23 @@ export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
     (w) => closestWord(w, ids),
     (id) => messageIds.get(id),
   );
+  return { root, config, checks };
+}
+
+/** The usage error for record folders named in the config that do not exist. */
+export function missingDirsError(missing: readonly string[], root: string): ConfigError {
+  return new ConfigError(
+    `record folder${missing.length > 1 ? 's' : ''} ${missing.map((d) => `'${d}'`).join(', ')} ` +
+      `not found in ${root} (set recordDirs in stereogate.config.yml)`,
+  );
+}
+
+/** Loads every record under `root` as the registry and audits those named by `paths`. Throws ConfigError on usage errors. */
+export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
+  const { root, config, checks } = await openRegistry(options);
   const engine = options.engine ?? (await defaultEngine({ axisOrthoMin: config.axisOrthoMin }));
   const load = loadRegistry(root, { recordDirs: config.recordDirs });
-  if (load.missingDirs.length > 0) {
-    throw new ConfigError(
-      `record folder${load.missingDirs.length > 1 ? 's' : ''} ${load.missingDirs.map((d) => `'${d}'`).join(', ')} ` +
-        `not found in ${options.root} (set recordDirs in stereogate.config.yml)`,
-    );
-  }
+  if (load.missingDirs.length > 0) throw missingDirsError(load.missingDirs, options.root);
   let toAudit: LoadedRecord[] = load.records;
   let unmatched: string[] = [];
   if (options.paths && options.paths.length > 0) {

@@ -40,28 +40,31 @@ export function buildRegistryView(
 
 /**
  * A view that reads records only when asked: `load(id)` finds and loads the record with that id (a streamed
- * audit's worker holds one record at a time); `all()` loads every record, for a check that walks them all.
+ * audit's worker holds one record at a time; it may hand back `own`); `ids()` lists the ids of every record that
+ * passed the schema without loading them; `all()` loads every record, for a check that walks them all.
  */
 export function lazyRegistryView(
   own: LoadedRecord,
   cache: StructureCache,
   load: (id: string) => LoadedRecord | null,
   all: () => readonly LoadedRecord[],
+  ids?: () => readonly string[],
 ): RegistryView {
   const seen = new Map<string, RegistryEntry | undefined>();
   let entries: RegistryEntry[] | null = null;
-  return {
+  const view: RegistryView = {
     get entries(): readonly RegistryEntry[] {
       entries ??= all().flatMap((l) => entryOf(l, cache, l.file === own.file) ?? []);
       return entries;
     },
     byId(id: string): RegistryEntry | undefined {
-      if (own.id === id && own.record) return entryOf(own, cache, true) ?? undefined;
       if (!seen.has(id)) {
         const l = load(id);
-        seen.set(id, l ? (entryOf(l, cache, false) ?? undefined) : undefined);
+        seen.set(id, l ? (entryOf(l, cache, l.file === own.file) ?? undefined) : undefined);
       }
       return seen.get(id);
     },
   };
+  if (ids) view.ids = ids;
+  return view;
 }

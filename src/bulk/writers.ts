@@ -3,7 +3,8 @@
  * JSON (records streamed into the array, summary at the end), and a CSV summary for spreadsheets. Nothing is
  * held in memory but the record being written.
  */
-import { createWriteStream, type WriteStream } from 'node:fs';
+import { createWriteStream } from 'node:fs';
+import { close, drainWrite } from '../report/sink.js';
 import type { AuditSummary, RegistrySummary } from '../audit/types.js';
 import { CSV_HEADER, jsonOf, type RenderedRecord, type RenderWants } from './render-record.js';
 
@@ -32,13 +33,7 @@ export function wantsOf(writers: readonly RecordWriter[]): RenderWants {
   return { jsonl: has('jsonl'), csv: has('csv'), sarif: has('sarif'), html: has('html') };
 }
 
-export function drainWrite(stream: WriteStream, text: string): Promise<void> {
-  return stream.write(text) ? Promise.resolve() : new Promise((res) => stream.once('drain', () => res()));
-}
-
-export function close(stream: WriteStream): Promise<void> {
-  return new Promise((res, rej) => stream.end((err?: Error | null) => (err ? rej(err) : res())));
-}
+export { close, drainWrite };
 
 export function jsonlWriter(path: string): RecordWriter {
   const s = createWriteStream(path, 'utf8');

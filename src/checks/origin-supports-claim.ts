@@ -30,7 +30,7 @@ function inputProblems(
     else if (r.problem === 'no-structure')
       add('input-without-structure', field, { entry: text, detail: r.detail }, 'note');
     else if (r.problem === 'not-found') {
-      const ids = ctx.registry.entries.flatMap((e) => (e.id === null ? [] : [e.id]));
+      const ids = ctx.registry.ids?.() ?? ctx.registry.entries.flatMap((e) => (e.id === null ? [] : [e.id]));
       const guess = ids.length <= 50_000 ? closestWord(text.trim(), ids) : null;
       add('input-not-found', field, {
         entry: text,

@@ -69,6 +69,8 @@ export interface RegistryView {
   incomplete?: string | null;
   /** The entry with this id, without reading every record when the view can (a streamed audit's worker). */
   byId?(id: string): RegistryEntry | undefined;
+  /** The ids of `entries`, without reading every record when the view can (a streamed audit's worker). */
+  ids?(): readonly string[];
 }
 
 /** The engine functions a check may call (so checks stay pure and testable). */

@@ -143,28 +143,43 @@ export const MAX_COMPONENTS_READ = 50;
 
 /** A duplicate id is a problem on every record that carries it. */
 export function markDuplicateIds(records: LoadedRecord[]): void {
-  const byId = new Map<string, LoadedRecord[]>();
+  const problems = duplicateIdProblems(
+    records.flatMap((r) => (r.id === null ? [] : [{ id: r.id, file: r.file, line: lineOf(r.positions, 'id') }])),
+  );
+  if (problems.size === 0) return;
   for (const r of records) {
-    if (r.id === null) continue;
+    const p = problems.get(r.file);
+    if (p) r.problems.push(p);
+  }
+}
+
+/**
+ * The duplicate-id problem of each record (by file) whose id another record uses too; `records` in the audit's
+ * order, each with the line of its id.
+ */
+export function duplicateIdProblems(
+  records: readonly { id: string; file: string; line: number | null }[],
+): Map<string, LoadedRecord['problems'][number]> {
+  const byId = new Map<string, { file: string; line: number | null }[]>();
+  for (const r of records) {
     const list = byId.get(r.id);
     if (list) list.push(r);
     else byId.set(r.id, [r]);
   }
+  const out = new Map<string, LoadedRecord['problems'][number]>();
   for (const [id, list] of byId) {
     if (list.length < 2) continue;
     for (const r of list) {
       const others = list
         .filter((o) => o !== r)
-        .map((o) => {
-          const line = lineOf(o.positions, 'id');
-          return line === null ? o.file : `${o.file} line ${line}`;
-        });
-      r.problems.push({
+        .map((o) => (o.line === null ? o.file : `${o.file} line ${o.line}`));
+      out.set(r.file, {
         path: 'id',
-        line: lineOf(r.positions, 'id'),
+        line: r.line,
         code: 'duplicate-id',
         message: `id: '${id}' is also used by ${others.join(', ')}; every record needs its own id`,
       });
     }
   }
+  return out;
 }

@@ -23,7 +23,8 @@ function finding(f: Finding): Record<string, unknown> {
   };
 }
 
-function record(r: RecordResult): Record<string, unknown> {
+/** One record of the report (as it stands in `records`). */
+export function jsonRecord(r: RecordResult): Record<string, unknown> {
   return {
     id: r.id,
     file: r.file,
@@ -39,7 +40,7 @@ function record(r: RecordResult): Record<string, unknown> {
 export function jsonReport(result: AuditResult): Record<string, unknown> {
   const s = result.summary;
   const out: Record<string, unknown> = {
-    records: result.records.map(record),
+    records: result.records.map(jsonRecord),
     summary: { records: s.records, errors: s.errors, warnings: s.warnings, notes: s.notes, waived: s.waived },
     tool: { name: result.tool.name, version: result.tool.version },
     caution: result.caution,

@@ -14,6 +14,7 @@ import {
   declaredText,
   openCounts,
   plural,
+  worstOpen,
   type ChecklistItem,
 } from './checklist.js';
 import { escapeHtmlText, escapeMarkdown as esc, safeUrl } from './escape.js';
@@ -30,7 +31,7 @@ export interface MarkdownOptions {
 
 const SEVERITY_MARK = { error: '❌', warning: '⚠️', note: 'ℹ️' } as const;
 
-function summaryText(result: AuditResult): string {
+function summaryText(result: Pick<AuditResult, 'summary'>): string {
   const s = result.summary;
   const parts = [
     `${SEVERITY_MARK.error} ${plural(s.errors, 'error')}`,
@@ -51,9 +52,8 @@ function lineRef(line: number | null): string {
   return line === null ? '' : ` (line ${line})`;
 }
 
-function evidenceLines(r: RecordResult): string[] {
+function evidenceLines(r: RecordResult, computed: string | null): string[] {
   const declared = declaredText(r);
-  const computed = computedText(r.computed);
   if (!declared && !computed) return [];
   return [
     `Declared: ${declared ? esc(declared) : '*nothing readable*'}  `,
@@ -96,9 +96,9 @@ function passedSummary(r: RecordResult, accepted: number): string {
 }
 
 /** A record with open findings: heading, evidence, the findings, passed checks collapsed. */
-function recordBlock(r: RecordResult): string {
+function recordBlock(r: RecordResult, computed: string | null): string {
   const items = checklistItems(r);
-  const out: string[] = [heading(r), '', ...evidenceLines(r)];
+  const out: string[] = [heading(r), '', ...evidenceLines(r, computed)];
   out.push(...items.filter((i) => i.kind !== 'passed').map(itemLine));
   const passed = items.filter((i) => i.kind === 'passed');
   if (passed.length > 0) out.push('', ...passedBlock(`✅ ${plural(passed.length, 'check')} passed`, passed));
@@ -106,28 +106,46 @@ function recordBlock(r: RecordResult): string {
 }
 
 /** A record without open findings: one collapsed line that opens to its evidence, waivers and passed checks. */
-function cleanLine(r: RecordResult): string {
+function cleanLine(r: RecordResult, computed: string | null): string {
   const items = checklistItems(r);
   const accepted = items.filter((i) => i.kind === 'accepted').length;
   const summary = `<b>${escapeHtmlText(r.id ?? '(no id)')}</b> · ${escapeHtmlText(r.file)} — ${passedSummary(r, accepted)}`;
   return [
     `<details><summary>${summary}</summary>`,
     '',
-    ...evidenceLines(r),
+    ...evidenceLines(r, computed),
     ...items.map(itemLine),
     '',
     '</details>',
   ].join('\n');
 }
 
+/**
+ * One record of the checklist: its group (0-2 the worst open severity, error first; 3 none open) and its text.
+ * The checklist lists the groups in order, each in the audit's order. `computed` is the computed line when the
+ * caller holds it instead of the facts (a streamed audit).
+ */
+export function markdownRecord(
+  r: RecordResult,
+  computed: string | null = computedText(r.computed),
+): { group: number; text: string } {
+  const group = worstOpen(r);
+  return { group, text: group < 3 ? recordBlock(r, computed) : cleanLine(r, computed) };
+}
+
+/** The heading of the records without open findings (before the last group). */
+export function cleanHeading(count: number): string {
+  return `### ${plural(count, 'record')} without open findings`;
+}
+
 function recordsPart(result: AuditResult): string[] {
-  const flagged = byNeedForAction(result.records.filter((r) => hasOpen(r)));
-  const clean = result.records.filter((r) => !hasOpen(r));
-  const out = flagged.flatMap((r) => [recordBlock(r), '']);
-  if (clean.length > 0) {
-    out.push(`### ${plural(clean.length, 'record')} without open findings`, '');
-    out.push(...clean.flatMap((r) => [cleanLine(r), '']));
+  const groups: string[][] = [[], [], [], []];
+  for (const r of result.records) {
+    const { group, text } = markdownRecord(r);
+    groups[group]!.push(text, '');
   }
+  const out = groups.slice(0, 3).flat();
+  if (groups[3]!.length > 0) out.push(cleanHeading(groups[3]!.length / 2), '', ...groups[3]!);
   return out;
 }
 
@@ -135,11 +153,11 @@ function hasOpen(r: RecordResult): boolean {
   return r.findings.some((f) => !f.waived);
 }
 
-function cautionBlock(result: AuditResult): string {
+export function cautionBlock(result: Pick<AuditResult, 'caution'>): string {
   return `> [!CAUTION]\n> ${esc(result.caution)}`;
 }
 
-function head(result: AuditResult): string[] {
+export function markdownHead(result: Omit<AuditResult, 'records'>): string[] {
   const out = [CHECKLIST_MARKER, '## stereogate checklist', '', summaryText(result), ''];
   if (result.unmatched?.length) {
     out.push(`No record matched: ${result.unmatched.map(esc).join(', ')}`, '');
@@ -149,7 +167,7 @@ function head(result: AuditResult): string[] {
 
 export function renderMarkdown(result: AuditResult, options: MarkdownOptions = {}): string {
   const maxChars = options.maxChars ?? DEFAULT_MAX_CHARS;
-  const full = [...head(result), ...recordsPart(result), cautionBlock(result), ''].join('\n');
+  const full = [...markdownHead(result), ...recordsPart(result), cautionBlock(result), ''].join('\n');
   if (full.length <= maxChars) return full;
   return summarised(result, maxChars, options.detailsUrl);
 }
@@ -160,7 +178,7 @@ function summarised(result: AuditResult, maxChars: number, detailsUrl: string | 
   const pointer = url
     ? `The full checklist is too long for a comment: read it in the [job summary](${url}).`
     : 'The full checklist is too long for a comment: read it in the job summary of this run.';
-  const top = [...head(result), pointer, ''].join('\n');
+  const top = [...markdownHead(result), pointer, ''].join('\n');
   const bottom = ['', cautionBlock(result), ''].join('\n');
   const lines: string[] = [];
   const flagged = byNeedForAction(result.records.filter((r) => hasOpen(r)));

@@ -10,7 +10,7 @@
  * (3.58.7). Not configuration notifications (3.20.22): nothing in the configuration kept them from running.
  */
 import { BUILTIN_RULES, type RuleInfo } from '../audit/builtin-rules.js';
-import type { AuditResult, Finding, Severity } from '../audit/types.js';
+import type { AuditResult, Finding, RecordResult, Severity } from '../audit/types.js';
 import type { CheckModule } from '../checks/types.js';
 import { notRunGroups, notRunRecordsText, type NotRunGroup } from './not-run.js';
 
@@ -56,6 +56,39 @@ export function renderSarif(
   return `${JSON.stringify(sarifLog(result, checks, options), null, 2)}\n`;
 }
 
+/** The SARIF results of one record's findings; `index` gives each check's rule index in the log. */
+export function sarifResults(
+  r: RecordResult,
+  index: ReadonlyMap<string, number>,
+  options: SarifOptions = {},
+): Record<string, unknown>[] {
+  const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, '/') : '';
+  return r.findings.map((f: Finding) => {
+    const physical: Record<string, unknown> = {
+      artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) },
+    };
+    if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
+    const res: Record<string, unknown> = {
+      ruleId: f.check,
+      ruleIndex: index.get(f.check),
+      level: level(f.severity),
+      message: { text: f.message },
+      locations: [{ physicalLocation: physical }],
+      properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data },
+    };
+    if (f.waived) {
+      res.suppressions = [
+        {
+          kind: 'inSource',
+          status: 'accepted',
+          justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})`,
+        },
+      ];
+    }
+    return res;
+  });
+}
+
 export function sarifLog(
   result: AuditResult,
   checks: readonly CheckModule[],
@@ -78,34 +111,7 @@ export function sarifLog(
   const rules = infos.map((x) => rule(x.info, result.caution));
   const index = new Map(infos.map((x, i) => [x.info.id, i]));
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, '/') : '';
-  const results = result.records.flatMap((r) =>
-    r.findings.map((f: Finding) => {
-      const physical: Record<string, unknown> = {
-        artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) },
-      };
-      if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
-      const res: Record<string, unknown> = {
-        ruleId: f.check,
-        ruleIndex: index.get(f.check),
-        level: level(f.severity),
-        message: { text: f.message },
-        locations: [{ physicalLocation: physical }],
-        properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data },
-      };
-      if (f.waived) {
-        res.suppressions = [
-          {
-            kind: 'inSource',
-            status: 'accepted',
-            justification:
-              `${f.waived.reason} (approved by ${f.waived.approvedBy}` +
-              `${f.waived.covers ? `; the waiver covers ${f.waived.covers}` : ''})`,
-          },
-        ];
-      }
-      return res;
-    }),
-  );
+  const results = result.records.flatMap((r) => sarifResults(r, index, options));
   const invocations = sarifInvocations(notRunGroups(result.records), index, prefix);
   return {
     $schema: SARIF_SCHEMA,

@@ -7,7 +7,6 @@
 import { registryLines } from './registry-summary.js';
 import type { AuditResult, Finding, RecordResult } from '../audit/types.js';
 import {
-  byNeedForAction,
   checklistItems,
   computedText,
   declaredText,
@@ -51,11 +50,10 @@ function findingLine(f: Finding, paint: Paint): string {
 }
 
 /** A record with open findings (or any record with --verbose): evidence, findings, waivers, passed checks. */
-function block(r: RecordResult, paint: Paint, verbose: boolean): string[] {
+function block(r: RecordResult, paint: Paint, verbose: boolean, computed: string | null): string[] {
   const lines: string[] = [];
   lines.push(`${paint('bold', safeText(r.id ?? '(no id)'))}  ${paint('dim', safeText(r.file))}`);
   const declared = declaredText(r);
-  const computed = computedText(r.computed);
   if (declared) lines.push(`  ${paint('dim', 'declared')}  ${safeText(declared)}`);
   if (computed) lines.push(`  ${paint('dim', 'computed')}  ${safeText(computed)}`);
   const items = checklistItems(r);
@@ -102,24 +100,43 @@ function cleanLine(r: RecordResult, paint: Paint): string {
   return `${paint('green', '✓')} ${paint('bold', safeText(r.id ?? '(no id)'))}  ${parts.join(', ')}  ${paint('dim', safeText(r.file))}`;
 }
 
-export function summaryLine(result: AuditResult): string {
+export function summaryLine(result: Pick<AuditResult, 'summary'>): string {
   const s = result.summary;
   const parts = [plural(s.errors, 'error'), plural(s.warnings, 'warning'), plural(s.notes, 'note')];
   if (s.waived > 0) parts.push(`${s.waived} accepted by waiver${s.waived === 1 ? '' : 's'}`);
   return `${plural(s.records, 'record')} audited: ${parts.join(', ')}`;
 }
 
-export function renderText(result: AuditResult, options: TextOptions = {}): string {
-  const paint: Paint = options.color
-    ? (style, s) => `\u001b[${CODES[style]}m${s}\u001b[0m`
-    : (_style, s) => s;
+function painter(options: TextOptions): Paint {
+  return options.color ? (style, s) => `\u001b[${CODES[style]}m${s}\u001b[0m` : (_style, s) => s;
+}
+
+/**
+ * One record of the text report: its group (0-2 the worst open severity, error first; 3 none open) and its
+ * lines. The report lists the groups in order, each in the audit's order. `computed` is the computed line when
+ * the caller holds it instead of the facts (a streamed audit).
+ */
+export function textRecord(
+  r: RecordResult,
+  options: TextOptions = {},
+  computed: string | null = computedText(r.computed),
+): { group: number; lines: string[] } {
+  const paint = painter(options);
+  const group = worstOpen(r);
+  if (group < 3 || options.verbose === true)
+    return { group, lines: [...block(r, paint, options.verbose === true, computed), ''] };
+  return { group, lines: [cleanLine(r, paint)] };
+}
+
+/** The lines after the records: what matched nothing, the registry-wide summary, the summary line, the caution. */
+export function textClosing(
+  result: Omit<AuditResult, 'records'>,
+  options: TextOptions,
+  cleanLines: boolean,
+): string[] {
+  const paint = painter(options);
   const out: string[] = [];
-  const verbose = options.verbose === true;
-  const open = byNeedForAction(result.records.filter((r) => worstOpen(r) < 3));
-  for (const r of open) out.push(...block(r, paint, verbose), '');
-  const clean = result.records.filter((r) => worstOpen(r) === 3);
-  if (verbose) for (const r of clean) out.push(...block(r, paint, true), '');
-  else if (clean.length > 0) out.push(...clean.map((r) => cleanLine(r, paint)), '');
+  if (cleanLines && options.verbose !== true) out.push('');
   if (result.unmatched?.length) {
     out.push(paint('yellow', `No record matched: ${result.unmatched.map(safeText).join(', ')}`), '');
   }
@@ -129,5 +146,15 @@ export function renderText(result: AuditResult, options: TextOptions = {}): stri
   const colour = s.errors > 0 ? 'red' : s.warnings > 0 ? 'yellow' : 'green';
   out.push(paint(colour, summaryLine(result)));
   out.push(paint('dim', result.caution));
+  return out;
+}
+
+export function renderText(result: AuditResult, options: TextOptions = {}): string {
+  const groups: string[][] = [[], [], [], []];
+  for (const r of result.records) {
+    const { group, lines } = textRecord(r, options);
+    groups[group]!.push(...lines);
+  }
+  const out = [...groups.flat(), ...textClosing(result, options, groups[3]!.length > 0)];
   return `${out.join('\n')}\n`;
 }

@@ -21,13 +21,15 @@ import { bulkAudit } from './bulk-audit.js';
 import { EXIT_CRASH, EXIT_FINDINGS, EXIT_OK, InputError, UsageError, type Command } from '../command.js';
 import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
 import { checkWritable, writeFailure } from '../output-path.js';
+import type { ProgressMode } from '../../bulk/progress.js';
+import { auditFolderPooled, pooledAudit, POOLED_FROM } from './audit-folder.js';
 
 export { EXIT_FINDINGS };
 
 const USAGE = [
   'Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]',
   '                        [--output FILE] [--fail-on error|warning|never] [--verbose]',
-  '                        [--record-timeout SECS]',
+  '                        [--record-timeout SECS] [--workers N] [--progress MODE]',
   '',
   '  paths…               record files, folders or molfiles to audit (default: every record); the whole',
   '                       registry is still loaded for the cross-record checks',
@@ -42,6 +44,11 @@ const USAGE = [
   '                       error (default), warning, or never',
   '  --record-timeout SECS  per-record time limit (default 20); a record over it, or over 1 GiB of memory,',
   '                       gets a record-time-limit finding and the audit goes on',
+  '  --workers N          worker threads for the audit of every record (no paths); default: all cores when',
+  `                       the registry holds ${POOLED_FROM.toLocaleString('en-US')} record files or more, else this thread; 0: this thread.`,
+  '                       Through the workers the report is written as records come (same report)',
+  '  --progress MODE      through the workers: auto (default: a bar on a terminal, lines in CI), bar, lines',
+  '                       or none, on standard error',
   '',
   'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error or a report',
   'file that cannot be written, 3 internal error (the report is still written; records it hit carry an',
@@ -51,7 +58,10 @@ const USAGE = [
 ].join('\n');
 
 /** Whether open findings reach the threshold (waived findings never count). */
-export function reachesThreshold(result: AuditResult, failOn: 'error' | 'warning' | 'never'): boolean {
+export function reachesThreshold(
+  result: Pick<AuditResult, 'summary'>,
+  failOn: 'error' | 'warning' | 'never',
+): boolean {
   if (failOn === 'never') return false;
   const s = result.summary;
   return failOn === 'error' ? s.errors > 0 : s.errors + s.warnings > 0;
@@ -102,6 +112,8 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           'fail-on': { type: 'string', choices: ['error', 'warning', 'never'], default: 'error' },
           verbose: { type: 'boolean', short: 'v' },
           'record-timeout': { type: 'string' },
+          workers: { type: 'string' },
+          progress: { type: 'string', choices: ['auto', 'bar', 'lines', 'none'], default: 'auto' },
         },
         { min: 0, max: Infinity, names: 'paths' },
       );
@@ -115,6 +127,36 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       const timeout = values['record-timeout'];
       const seconds = typeof timeout === 'string' ? Number(timeout) : RECORD_BUDGET.timeMs / 1000;
       if (!(seconds > 0)) throw new UsageError('--record-timeout expects a positive number of seconds');
+      const workers = typeof values.workers === 'string' ? Number(values.workers) : undefined;
+      if (workers !== undefined && (!Number.isInteger(workers) || workers < 0))
+        throw new UsageError('--workers expects a whole number (0: this thread)');
+      const budget = { ...RECORD_BUDGET, timeMs: seconds * 1000 };
+      const common = { root, configFile: values.config as string | undefined, checks: deps.checks };
+      try {
+        const pooled = paths.length === 0 ? await pooledAudit({ ...common, workers }) : null;
+        if (pooled) {
+          const run = await auditFolderPooled(
+            {
+              ...common,
+              budget,
+              format,
+              output,
+              verbose: values.verbose === true,
+              color: output === undefined && shouldColor(process.stdout),
+              workers,
+              progress: values.progress as ProgressMode,
+              out: io.out,
+              engine: deps.engine,
+            },
+            pooled,
+          );
+          if (run.internalErrors) return EXIT_CRASH;
+          return reachesThreshold(run, failOn) ? EXIT_FINDINGS : EXIT_OK;
+        }
+      } catch (e) {
+        if (e instanceof ConfigError) throw new UsageError(e.message);
+        throw e;
+      }
       let result: AuditResult;
       try {
         result = await runAudit({
@@ -123,7 +165,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           configFile: values.config as string | undefined,
           checks: deps.checks,
           engine: deps.engine,
-          budget: { ...RECORD_BUDGET, timeMs: seconds * 1000 },
+          budget,
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);
