@@ -41,6 +41,8 @@ export interface FolderRunOptions {
   checks: readonly CheckModule[];
   engine?: AuditEngine;
   batchSize?: number;
+  /** Worker entry (default: the bulk worker, ./worker); tests give one that fails on purpose. */
+  script?: URL;
   onPoolStats?: (stats: PoolStats) => void;
 }
 
@@ -81,7 +83,7 @@ export async function runFolderAudit(opts: FolderRunOptions): Promise<FolderRunR
   const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
   const results = mapOrdered<RecordFileItem, FolderRecord>(opts.folder.items, {
     workers,
-    script: new URL(`./worker${ext}`, import.meta.url),
+    script: opts.script ?? new URL(`./worker${ext}`, import.meta.url),
     workerData: setup,
     timeoutMs: limit,
     onTimeout: (item) => stopped(item, null),
