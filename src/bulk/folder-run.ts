@@ -69,7 +69,12 @@ export async function runFolderAudit(opts: FolderRunOptions): Promise<FolderRunR
   };
   const engine = opts.engine ?? (await defaultEngine({ axisOrthoMin: opts.config.axisOrthoMin }));
   const phase = opts.checks.some((c) => c.scope === 'registry')
-    ? new RegistryPhase({ mode: 'full', config: opts.config, confirm: confirmWith(engine), duplicateIds: false })
+    ? new RegistryPhase({
+        mode: 'full',
+        config: opts.config,
+        confirm: confirmWith(engine),
+        duplicateIds: false,
+      })
     : null;
   let inline: ((item: RecordFileItem) => FolderRecord) | undefined;
   if (workers === 0) {

@@ -144,7 +144,9 @@ export const MAX_COMPONENTS_READ = 50;
 /** A duplicate id is a problem on every record that carries it. */
 export function markDuplicateIds(records: LoadedRecord[]): void {
   const problems = duplicateIdProblems(
-    records.flatMap((r) => (r.id === null ? [] : [{ id: r.id, file: r.file, line: lineOf(r.positions, 'id') }])),
+    records.flatMap((r) =>
+      r.id === null ? [] : [{ id: r.id, file: r.file, line: lineOf(r.positions, 'id') }],
+    ),
   );
   if (problems.size === 0) return;
   for (const r of records) {

@@ -3,7 +3,16 @@
  * or the command's standard output (handed over in whole lines). And spill groups: a report that lists records
  * in groups (errors first, …) keeps each group's text in a temporary file until the end, not in memory.
  */
-import { closeSync, createWriteStream, mkdtempSync, openSync, readSync, rmSync, writeSync, type WriteStream } from 'node:fs';
+import {
+  closeSync,
+  createWriteStream,
+  mkdtempSync,
+  openSync,
+  readSync,
+  rmSync,
+  writeSync,
+  type WriteStream,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { StringDecoder } from 'node:string_decoder';

@@ -125,7 +125,8 @@ function sarifReport(
   return {
     async add(r) {
       await start();
-      for (const res of sarifResults(r.result, index, options)) await results.add(JSON.stringify(res, null, 2));
+      for (const res of sarifResults(r.result, index, options))
+        await results.add(JSON.stringify(res, null, 2));
     },
     async finish(totals) {
       await start();
@@ -157,9 +158,7 @@ function groupedReport(format: 'text' | 'markdown', sink: ReportSink, options: T
         if (format === 'markdown' && clean > 0) await sink.write(lines([cleanHeading(clean), '']));
         await groups.copy(3, sink);
         await sink.write(
-          format === 'text'
-            ? lines(textClosing(totals, options, clean > 0))
-            : lines([cautionBlock(totals)]),
+          format === 'text' ? lines(textClosing(totals, options, clean > 0)) : lines([cautionBlock(totals)]),
         );
         await sink.close();
       } finally {

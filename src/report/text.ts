@@ -6,13 +6,7 @@
  */
 import { registryLines } from './registry-summary.js';
 import type { AuditResult, Finding, RecordResult } from '../audit/types.js';
-import {
-  checklistItems,
-  computedText,
-  declaredText,
-  plural,
-  worstOpen,
-} from './checklist.js';
+import { checklistItems, computedText, declaredText, plural, worstOpen } from './checklist.js';
 
 export interface TextOptions {
   color?: boolean;

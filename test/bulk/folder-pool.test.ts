@@ -30,7 +30,10 @@ import { memoryIo } from '../cli/io.js';
 
 const DEMO = join(import.meta.dirname, '../../fixtures/demo-registry');
 
-async function pooled(root: string, workers: number): Promise<{ records: FolderRecord[]; run: FolderRunResult }> {
+async function pooled(
+  root: string,
+  workers: number,
+): Promise<{ records: FolderRecord[]; run: FolderRunResult }> {
   const { config } = loadConfig(root, undefined, undefined);
   const folder = readRecordFolder(root, listRecordFiles(root, config.recordDirs));
   const records: FolderRecord[] = [];
@@ -113,8 +116,18 @@ describe('full folder audit through the worker pool = the in-memory audit', () =
     const reg = tmpRegistry({
       'stereogate.config.yml': 'recordDirs: [compounds, more]\n',
       // L- and D-alanine registered with the same rotation sign: a registry-wide error on the later one
-      'compounds/a.yml': rec('LX-00001', 'C[C@@H](C(=O)O)N', 'single-enantiomer', '  rotation:\n    value: 14.5\n'),
-      'compounds/b.yml': rec('LX-00002', 'C[C@H](C(=O)O)N', 'single-enantiomer', '  rotation:\n    value: 14.5\n'),
+      'compounds/a.yml': rec(
+        'LX-00001',
+        'C[C@@H](C(=O)O)N',
+        'single-enantiomer',
+        '  rotation:\n    value: 14.5\n',
+      ),
+      'compounds/b.yml': rec(
+        'LX-00002',
+        'C[C@H](C(=O)O)N',
+        'single-enantiomer',
+        '  rotation:\n    value: 14.5\n',
+      ),
       // the same structure as a.yml, and the same id as d.yml
       'compounds/c.yml': `# copy\n${rec('LX-00004', 'N[C@@H](C)C(=O)O', 'single-enantiomer')}`,
       'compounds/d.yml': rec('LX-00004', 'CCO', 'achiral'),
@@ -122,9 +135,23 @@ describe('full folder audit through the worker pool = the in-memory audit', () =
       'compounds/f.yml': `id: LX-00006\nstructure:\n  molfile: "${join(outside, 'x.mol')}"\nstereo:\n  form: achiral\n`,
       'compounds/g.yml': `id: LX-00007\nstructure:\n  molfile: "../../../x.mol"\nstereo:\n  form: achiral\n`,
       // lactic acid made from a registered input, and from an id that is not registered (a near miss)
-      'compounds/h.yml': rec('LX-00008', 'CC(O)C(=O)O', 'racemate', 'origin:\n  from: [LX-00001]\n  control: none\n'),
-      'compounds/i.yml': rec('LX-00009', 'CC(O)C(=O)O', 'racemate', 'origin:\n  from: [LX-00011]\n  control: none\n'),
-      'compounds/j.json': JSON.stringify({ id: 'LX-00010', structure: { smiles: 'OCC' }, stereo: { form: 'achiral' } }),
+      'compounds/h.yml': rec(
+        'LX-00008',
+        'CC(O)C(=O)O',
+        'racemate',
+        'origin:\n  from: [LX-00001]\n  control: none\n',
+      ),
+      'compounds/i.yml': rec(
+        'LX-00009',
+        'CC(O)C(=O)O',
+        'racemate',
+        'origin:\n  from: [LX-00011]\n  control: none\n',
+      ),
+      'compounds/j.json': JSON.stringify({
+        id: 'LX-00010',
+        structure: { smiles: 'OCC' },
+        stereo: { form: 'achiral' },
+      }),
       'compounds/k.yml': Buffer.from([0x69, 0x64, 0x3a, 0x20, 0xff, 0xfe, 0x0a]),
       'compounds/l.yml': rec('LX-00012', 'CCO', 'racemic'),
       'more/m.yml': rec('LX-00004', 'C[C@@H](O)C(=O)O', 'single-enantiomer'),
@@ -165,7 +192,9 @@ describe('full folder audit through the worker pool = the in-memory audit', () =
     const inThread = await run('--workers', '0');
     const pooledRun = await run('--workers', '2');
     expect(pooledRun.out).toBe(inThread.out);
-    expect(pooledRun.out).toContain('49 records audited: 18 errors, 4 warnings, 4 notes, 1 accepted by waiver');
+    expect(pooledRun.out).toContain(
+      '49 records audited: 18 errors, 4 warnings, 4 notes, 1 accepted by waiver',
+    );
     expect(inThread.code).toBe(1); // errors at the default --fail-on error
     expect(pooledRun.code).toBe(1);
     expect((await run('--workers', '2', '--fail-on', 'never')).code).toBe(0);
