@@ -14,6 +14,11 @@ export const SCHEMA_CHECK_ID = 'record-schema';
 /** Id of the finding made when a check throws. */
 export const INTERNAL_ERROR_ID = 'internal-error';
 
+/** A finding that says stereogate itself failed on the record (a check, or reading the file). */
+export function isInternalError(f: Pick<Finding, 'check' | 'messageId'>): boolean {
+  return f.check === INTERNAL_ERROR_ID || f.messageId === INTERNAL_ERROR_ID;
+}
+
 /**
  * The severity of a finding. Without configuration: the message's own level, else the check's default. A
  * severity configured for the check (`severities: {check-id: level}`) sets the level of that check's failures —

@@ -10,7 +10,7 @@ import { confirmWith, addPhaseResult, summarize } from '../audit/run.js';
 import { defaultEngine, type AuditEngine } from '../audit/engine.js';
 import { RegistryPhase } from '../audit/registry-phase.js';
 import type { AuditSummary, RegistrySummary } from '../audit/types.js';
-import { INTERNAL_ERROR_ID } from '../audit/findings.js';
+import { isInternalError } from '../audit/findings.js';
 import type { AuditConfig, CheckModule } from '../checks/types.js';
 import type { Budget } from '../chem/budget.js';
 import { mapOrdered, type PoolStats } from './pool.js';
@@ -106,9 +106,7 @@ export async function runFolderAudit(opts: FolderRunOptions): Promise<FolderRunR
       if (phase) addPhaseResult(r.result, phase.next(r.row));
       const s = summarize([r.result]);
       for (const k of ['records', 'errors', 'warnings', 'notes', 'waived'] as const) summary[k] += s[k];
-      internalErrors ||= r.result.findings.some(
-        (f) => f.check === INTERNAL_ERROR_ID || f.messageId === INTERNAL_ERROR_ID,
-      );
+      internalErrors ||= r.result.findings.some(isInternalError);
       await opts.onRecord(r);
       progress.tick();
     }

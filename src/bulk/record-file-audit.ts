@@ -83,6 +83,15 @@ export function refusedRecord(file: string, message: string): LoadedRecord {
   };
 }
 
+/** The ids of the records that pass the schema, listed once per folder when a check asks. */
+const idLists = new WeakMap<FolderLookup, string[]>();
+
+function idsOf(lookup: FolderLookup): string[] {
+  let ids = idLists.get(lookup);
+  if (!ids) idLists.set(lookup, (ids = [...lookup.byId.keys()]));
+  return ids;
+}
+
 export function auditRecordFile(item: RecordFileItem, ctx: FolderContext): FolderRecord {
   const { lookup, config, budget } = ctx.setup;
   const loaded = loadItem(item, lookup);
@@ -94,7 +103,7 @@ export function auditRecordFile(item: RecordFileItem, ctx: FolderContext): Folde
   };
   // every record, for a check that walks them all (none of the built-in checks does: they look up by id)
   const all = () => [...lookup.byId.keys()].flatMap((id) => load(id) ?? []);
-  const view = lazyRegistryView(loaded, cache, load, all, () => lookup.ids);
+  const view = lazyRegistryView(loaded, cache, load, all, () => idsOf(lookup));
   const result = auditRecords([loaded], {
     checks: ctx.checks,
     config,

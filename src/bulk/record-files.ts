@@ -24,10 +24,11 @@ export interface RecordFileItem {
 export interface FolderLookup {
   /** Real path of the registry root. */
   root: string;
-  /** id -> file of the first record (in the audit's order) with that id that passes the schema. */
+  /**
+   * id -> file of the first record (in the audit's order) with that id that passes the schema. Its keys are the
+   * ids an in-memory registry view lists, each once (a closest-id suggestion picks the same one).
+   */
   byId: Map<string, string>;
-  /** Ids of the records that pass the schema, in the audit's order (what an in-memory registry view lists). */
-  ids: string[];
   /** file -> the duplicate-id problem of that record. */
   duplicates: Map<string, LoadedRecord['problems'][number]>;
 }
@@ -60,7 +61,6 @@ export function readRecordFolder(root: string, list: RecordFileList): RecordFold
   const { files } = list;
   const itemIds: (string | null)[] = [];
   const byId = new Map<string, string>();
-  const ids: string[] = [];
   const seen: { id: string; file: string; line: number | null }[] = [];
   for (const f of files) {
     const read = f.refused === undefined ? readTextFile(join(root, f.file)) : null;
@@ -69,14 +69,11 @@ export function readRecordFolder(root: string, list: RecordFileList): RecordFold
     itemIds.push(id);
     if (id === null || !parsed) continue;
     seen.push({ id, file: f.file, line: lineOf(parsed.positions, 'id') });
-    if (parsed.record !== null) {
-      ids.push(id);
-      if (!byId.has(id)) byId.set(id, f.file);
-    }
+    if (parsed.record !== null && !byId.has(id)) byId.set(id, f.file);
   }
   return {
     items: files.map((f, i) => ({ seq: i + 1, ...f })),
-    lookup: { root, byId, ids, duplicates: duplicateIdProblems(seen) },
+    lookup: { root, byId, duplicates: duplicateIdProblems(seen) },
     idOf: (seq) => itemIds[seq - 1] ?? null,
     missingDirs: list.missingDirs,
   };

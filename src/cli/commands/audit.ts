@@ -19,7 +19,7 @@ import { parseCommandArgs } from '../args.js';
 import { isBulkInput } from '../../bulk/run.js';
 import { bulkAudit } from './bulk-audit.js';
 import { EXIT_CRASH, EXIT_FINDINGS, EXIT_OK, InputError, UsageError, type Command } from '../command.js';
-import { INTERNAL_ERROR_ID } from '../../audit/findings.js';
+import { isInternalError } from '../../audit/findings.js';
 import { checkWritable, writeFailure } from '../output-path.js';
 import type { ProgressMode } from '../../bulk/progress.js';
 import { auditFolderPooled, pooledAudit, POOLED_FROM } from './audit-folder.js';
@@ -70,7 +70,7 @@ export function reachesThreshold(
 /** A record hit a fault of stereogate itself: the report is written, the exit code says it is incomplete. */
 export function hasInternalErrors(result: AuditResult): boolean {
   return result.records.some((r) =>
-    r.findings.some((f) => f.check === INTERNAL_ERROR_ID || f.messageId === INTERNAL_ERROR_ID),
+    r.findings.some(isInternalError),
   );
 }
 
