@@ -30,13 +30,21 @@ export function close(stream: WriteStream): Promise<void> {
   return new Promise((res, rej) => stream.end((err?: Error | null) => (err ? rej(err) : res())));
 }
 
+/** A report file that could not be written (`cause`: the system's error). */
+export class SinkFailed extends Error {
+  constructor(override readonly cause: unknown) {
+    super(`the report could not be written: ${(cause as Error)?.message ?? String(cause)}`);
+  }
+}
+
 export function fileSink(path: string): ReportSink {
   const s = createWriteStream(path, 'utf8');
-  let failed: Error | null = null;
-  s.on('error', (e) => (failed = e));
+  let failed: SinkFailed | null = null;
+  s.on('error', (e) => (failed = new SinkFailed(e)));
+  const guard = (p: Promise<void>) => p.catch((e: unknown) => Promise.reject(failed ?? new SinkFailed(e)));
   return {
-    write: (text) => (failed ? Promise.reject(failed) : drainWrite(s, text)),
-    close: () => (failed ? Promise.reject(failed) : close(s)),
+    write: (text) => (failed ? Promise.reject(failed) : guard(drainWrite(s, text))),
+    close: () => (failed ? Promise.reject(failed) : guard(close(s))),
   };
 }
 
@@ -69,6 +77,7 @@ export class SpillGroups {
   private readonly held: string[];
   /** Pieces added to each group. */
   readonly counts: number[];
+  private removed = false;
 
   constructor(groups: number) {
     this.fds = Array.from({ length: groups }, (_, i) => openSync(join(this.dir, `${i}.txt`), 'w+'));
@@ -105,7 +114,10 @@ export class SpillGroups {
     if (rest !== '') await sink.write(rest);
   }
 
+  /** Closes and deletes the files (once; later calls do nothing). */
   remove(): void {
+    if (this.removed) return;
+    this.removed = true;
     for (const fd of this.fds) closeSync(fd);
     rmSync(this.dir, { recursive: true, force: true });
   }

@@ -29,6 +29,8 @@ export interface StreamedReport {
   add(r: StreamedRecord): Promise<void>;
   /** Writes what follows the records and closes the sink. */
   finish(totals: ResultTotals): Promise<void>;
+  /** The run stopped: drop what is kept for the end (the sink is left as it is). */
+  abort(): void;
 }
 
 export type ReportFormat = 'text' | 'json' | 'markdown' | 'sarif';
@@ -101,6 +103,7 @@ function jsonReport(sink: ReportSink): StreamedReport {
       await sink.write(tail);
       await sink.close();
     },
+    abort: () => undefined,
   };
 }
 
@@ -134,6 +137,7 @@ function sarifReport(
       await sink.write(frame(skeleton(totals), '"results"')[1]);
       await sink.close();
     },
+    abort: () => undefined,
   };
 }
 
@@ -165,6 +169,7 @@ function groupedReport(format: 'text' | 'markdown', sink: ReportSink, options: T
         groups.remove();
       }
     },
+    abort: () => groups.remove(),
   };
 }
 

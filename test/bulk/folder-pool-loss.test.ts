@@ -5,7 +5,7 @@
  * audit command's exit codes through the pool: 1 findings, 0 with --fail-on never, 2 usage errors and a report
  * file that cannot be written. Real engine; ordinary structures (alanine, ethanol), invented claims.
  */
-import { readFileSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { DEFAULT_CONFIG } from '../../src/audit/config.js';

@@ -14,7 +14,7 @@ import type { CheckModule } from '../../checks/types.js';
 import { runFolderAudit } from '../../bulk/folder-run.js';
 import type { ProgressMode } from '../../bulk/progress.js';
 import { listRecordFiles, readRecordFolder, type RecordFileList } from '../../bulk/record-files.js';
-import { fileSink, lineSink } from '../../report/sink.js';
+import { fileSink, lineSink, SinkFailed } from '../../report/sink.js';
 import { streamedReport, type ReportFormat } from '../../report/stream.js';
 import { InputError } from '../command.js';
 import { writeFailure } from '../output-path.js';
@@ -69,8 +69,9 @@ export async function auditFolderPooled(
     try {
       return await step();
     } catch (e) {
-      if (opts.output !== undefined && (e as NodeJS.ErrnoException)?.code !== undefined)
-        throw new InputError(writeFailure(opts.output, e));
+      report.abort();
+      if (e instanceof SinkFailed && opts.output !== undefined)
+        throw new InputError(writeFailure(opts.output, e.cause));
       throw e;
     }
   };
