@@ -145,4 +145,24 @@ describe('audit command through the pool: exit codes', () => {
     ]);
     expect(noFolder.code).toBe(2);
   }, 60_000);
+
+  it.skipIf(!existsSync('/dev/full'))(
+    '2 when the report cannot be written during the run (a full disk)',
+    async () => {
+      reg = tmpRegistry({ 'compounds/a.yml': rec('LX-00001', 'CCO', 'achiral') });
+      const full = await cli([
+        '--root',
+        reg.root,
+        '--workers',
+        '1',
+        '--format',
+        'json',
+        '--output',
+        '/dev/full',
+      ]);
+      expect(full.code).toBe(2);
+      expect(full.err).toContain('cannot write /dev/full: no space left on the device');
+    },
+    60_000,
+  );
 });
