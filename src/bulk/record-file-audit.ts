@@ -179,7 +179,7 @@ export function stoppedRecordFile(
       rotation: null,
       keys: null,
       lines: { id: null, structure: null, rotation: null },
-      waiver: null,
+      waivers: [],
     },
   };
 }

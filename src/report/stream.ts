@@ -10,7 +10,8 @@ import type { AuditResult, RecordResult } from '../audit/types.js';
 import type { CheckModule } from '../checks/types.js';
 import { jsonRecord, renderJson } from './json.js';
 import { cautionBlock, cleanHeading, markdownHead, markdownRecord } from './markdown.js';
-import { renderSarif, sarifResults, type SarifOptions } from './sarif.js';
+import { sarifInvocations, sarifLog, sarifResults, type SarifOptions } from './sarif.js';
+import { NotRunTally } from './not-run.js';
 import { SpillGroups, type ReportSink } from './sink.js';
 import { textClosing, textRecord, type TextOptions } from './text.js';
 
@@ -107,6 +108,10 @@ function jsonReport(sink: ReportSink): StreamedReport {
   };
 }
 
+/**
+ * SARIF: the run's invocation (checks not run, gathered over every record) stands before the results, so the
+ * results wait in a temporary file until the end.
+ */
 function sarifReport(
   sink: ReportSink,
   checks: readonly CheckModule[],
@@ -114,30 +119,39 @@ function sarifReport(
   options: SarifOptions | undefined,
 ): StreamedReport {
   const none = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
-  // the rules (their help ends with the caution) come before the results: written from what is known up front
-  const skeleton = (totals: ResultTotals) => renderSarif({ ...totals, records: [] }, checks, options);
-  const first = skeleton({ ...known, summary: none });
-  const log = JSON.parse(first) as { runs: { tool: { driver: { rules: { id: string }[] } } }[] };
-  const index = new Map(log.runs[0]!.tool.driver.rules.map((r, i) => [r.id, i]));
-  const results = arrayWriter(sink, 4);
-  let started = false;
-  const start = async () => {
-    if (!started) await sink.write(frame(first, '"results"')[0]);
-    started = true;
-  };
+  // the log without records: its rules (their help ends with the caution) are known up front
+  const empty = (totals: ResultTotals) =>
+    sarifLog({ ...totals, records: [] }, checks, options) as { runs: Record<string, unknown>[] };
+  const rules = (empty({ ...known, summary: none }).runs[0]!.tool as { driver: { rules: { id: string }[] } })
+    .driver.rules;
+  const index = new Map(rules.map((r, i) => [r.id, i]));
+  const prefix = options?.uriPrefix ? options.uriPrefix.replace(/\/?$/, '/') : '';
+  const notRun = new NotRunTally();
+  const results = new SpillGroups(1);
+  let count = 0;
   return {
     async add(r) {
-      await start();
+      notRun.add({ id: r.result.id, file: r.result.file, line: null }, r.result.notRun);
       for (const res of sarifResults(r.result, index, options))
-        await results.add(JSON.stringify(res, null, 2));
+        results.add(0, `${count++ === 0 ? '\n' : ',\n'}${nested(JSON.stringify(res, null, 2), 4)}`);
     },
     async finish(totals) {
-      await start();
-      await results.end();
-      await sink.write(frame(skeleton(totals), '"results"')[1]);
-      await sink.close();
+      try {
+        const log = empty(totals);
+        const { tool, properties } = log.runs[0]!;
+        const invocations = sarifInvocations(notRun.list(), index, prefix);
+        log.runs[0] = { tool, ...(invocations ? { invocations } : {}), results: [], properties };
+        const [head, tail] = frame(`${JSON.stringify(log, null, 2)}\n`, '"results"');
+        await sink.write(head);
+        await results.copy(0, sink);
+        await sink.write(count === 0 ? ']' : '\n      ]');
+        await sink.write(tail);
+        await sink.close();
+      } finally {
+        results.remove();
+      }
     },
-    abort: () => undefined,
+    abort: () => results.remove(),
   };
 }
 
