@@ -81,7 +81,9 @@ export function sarifResults(
         {
           kind: 'inSource',
           status: 'accepted',
-          justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})`,
+          justification:
+            `${f.waived.reason} (approved by ${f.waived.approvedBy}` +
+            `${f.waived.covers ? `; the waiver covers ${f.waived.covers}` : ''})`,
         },
       ];
     }
