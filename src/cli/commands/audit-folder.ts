@@ -80,7 +80,8 @@ export async function auditFolderPooled(
       folder,
       config,
       budget: opts.budget,
-      workers: opts.workers,
+      // the workers load the built-in checks: a caller's own checks (tests) run in this thread
+      workers: opts.checks ? 0 : opts.workers,
       json: opts.format === 'json',
       progress: opts.progress,
       onRecord: (r) => report.add(r),
