@@ -32,6 +32,7 @@ import { VERSION } from './version.js';
 import { buildRegistryView } from './view.js';
 import type { Confirm } from '../registry/key-index.js';
 import type { RecordKeys } from '../registry/keys.js';
+import type { IndexRowData } from '../registry/index-cache.js';
 
 /**
  * Default per-record limits of the audit: 20 s (as the bulk audit's --record-timeout) and 1 GiB of heap growth.
@@ -59,6 +60,11 @@ export interface AuditRecordsOptions {
   registryPhase?: boolean;
   /** The registry as per-record checks see it, when the caller has one (a streamed audit's lazy view). */
   view?: RegistryView;
+  /**
+   * Instead of `registry`: the rest of the registry (every record not audited) as rows of its key index, in
+   * registry order — a review against a cached index (review-against-index.ts). The records are then reviewed.
+   */
+  otherRows?: () => Iterable<IndexRowData>;
 }
 
 /** Audits `records` (each must also be in `registry` when one is given). Pure apart from the engine. */
@@ -100,7 +106,7 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
     !options.registryIncomplete &&
     options.checks.some((c) => c.scope === 'registry')
   ) {
-    const review = options.registry !== undefined;
+    const review = options.registry !== undefined || options.otherRows !== undefined;
     const phase = new RegistryPhase({
       mode: review ? 'review' : 'full',
       config,
@@ -119,7 +125,8 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
     if (review) {
       const audited = new Set(records);
       let seq = records.length;
-      for (const r of options.registry!) if (!audited.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
+      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      else for (const r of options.registry!) if (!audited.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
       for (const row of rows) phase.fileUnderReview(row);
     }
     rows.forEach((row, i) => addPhaseResult(results[i]!, phase.next(row)));
@@ -295,6 +302,13 @@ export interface RunAuditOptions {
   engine?: AuditEngine;
   /** Per-record time and memory limits (default RECORD_BUDGET). */
   budget?: Budget;
+  /**
+   * With paths: the file that caches the registry's key index between runs (review-against-index.ts); null or
+   * absent for none. Used with the default engine only.
+   */
+  indexCache?: string | null;
+  /** Lines about the work done (which records were read, the cache); default nowhere. */
+  log?: (line: string) => void;
 }
 
 /**
@@ -330,10 +344,29 @@ export function missingDirsError(missing: readonly string[], root: string): Conf
   );
 }
 
-/** Loads every record under `root` as the registry and audits those named by `paths`. Throws ConfigError on usage errors. */
+/**
+ * Audits every record under `root`, or reviews those named by `paths` against the registry (through its key
+ * index: review-against-index.ts). Throws ConfigError on usage errors.
+ */
 export async function runAudit(options: RunAuditOptions): Promise<AuditResult> {
   const { root, config, checks } = await openRegistry(options);
   const engine = options.engine ?? (await defaultEngine({ axisOrthoMin: config.axisOrthoMin }));
+  if (options.paths && options.paths.length > 0) {
+    // a review: the rest of the registry is read through its key index, not loaded
+    const { reviewAgainstIndex } = await import('./review-against-index.js');
+    const reviewed = await reviewAgainstIndex({
+      realRoot: root,
+      paths: options.paths,
+      config,
+      checks,
+      engine,
+      defaultEngine: options.engine === undefined,
+      budget: options.budget ?? RECORD_BUDGET,
+      indexCache: options.indexCache ?? null,
+      ...(options.log ? { log: options.log } : {}),
+    });
+    if (reviewed) return reviewed;
+  }
   const load = loadRegistry(root, { recordDirs: config.recordDirs });
   if (load.missingDirs.length > 0) throw missingDirsError(load.missingDirs, options.root);
   let toAudit: LoadedRecord[] = load.records;

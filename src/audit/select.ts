@@ -14,10 +14,19 @@ export function normalizePath(root: string, path: string): string {
   return parts.join('/');
 }
 
+/**
+ * What selection needs of a record: its file and the molfiles it uses. A LoadedRecord is one; so is a record
+ * known only by its row of the registry index (review-against-index.ts).
+ */
+export interface SelectableRecord {
+  file: string;
+  sources?: { main: { file?: string } | null; components: readonly { file?: string }[] };
+}
+
 /** Records by the molfile paths they use (main structure and components). */
-function byMolfile(records: readonly LoadedRecord[]): Map<string, LoadedRecord[]> {
-  const users = new Map<string, LoadedRecord[]>();
-  const add = (file: string | undefined, r: LoadedRecord): void => {
+function byMolfile<R extends SelectableRecord>(records: readonly R[]): Map<string, R[]> {
+  const users = new Map<string, R[]>();
+  const add = (file: string | undefined, r: R): void => {
     if (file === undefined) return;
     const list = users.get(file);
     if (!list) users.set(file, [r]);
@@ -33,7 +42,7 @@ function byMolfile(records: readonly LoadedRecord[]): Map<string, LoadedRecord[]
 }
 
 /** Index of the first entry of `sorted` (by file) whose file is >= `file`. */
-function lowerBound(sorted: readonly LoadedRecord[], file: string): number {
+function lowerBound(sorted: readonly SelectableRecord[], file: string): number {
   let lo = 0;
   let hi = sorted.length;
   while (lo < hi) {
@@ -44,21 +53,21 @@ function lowerBound(sorted: readonly LoadedRecord[], file: string): number {
   return lo;
 }
 
-export interface Selection {
-  selected: Set<LoadedRecord>;
+export interface Selection<R extends SelectableRecord = LoadedRecord> {
+  selected: Set<R>;
   /** Paths that named no record (as given). */
   unmatched: string[];
 }
 
-export function selectRecords(
-  records: readonly LoadedRecord[],
+export function selectRecords<R extends SelectableRecord = LoadedRecord>(
+  records: readonly R[],
   root: string,
   paths: readonly string[],
-): Selection {
-  const selected = new Set<LoadedRecord>();
+): Selection<R> {
+  const selected = new Set<R>();
   const unmatched: string[] = [];
-  let users: Map<string, LoadedRecord[]> | null = null;
-  let sorted: LoadedRecord[] | null = null;
+  let users: Map<string, R[]> | null = null;
+  let sorted: R[] | null = null;
   for (const given of paths) {
     const p = normalizePath(root, given);
     const escapes =

@@ -69,7 +69,7 @@ export interface RegistryView {
   incomplete?: string | null;
   /** The entry with this id, without reading every record when the view can (a streamed audit's worker). */
   byId?(id: string): RegistryEntry | undefined;
-  /** The ids of `entries`, without reading every record when the view can (a streamed audit's worker). */
+  /** The ids of `entries`, in order, without reading every record when the view can (a streamed audit's worker, a review over an index). */
   ids?(): readonly string[];
 }
 

@@ -22,19 +22,22 @@ export function loadRegistry(root: string, options: { recordDirs: readonly strin
   const realRoot = realpathSync(root);
   const found = findRecordFiles(realRoot, options.recordDirs);
   const records: LoadedRecord[] = found.files.map((abs) => loadRecordFile(realRoot, abs));
-  for (const r of found.refused) {
-    records.push({
-      file: r.file,
-      id: null,
-      record: null,
-      positions: NO_POSITIONS,
-      problems: [{ path: '', line: null, code: 'unreadable-file', message: `the record file ${r.message}` }],
-      origin: { kind: 'file' },
-    });
-  }
+  for (const r of found.refused) records.push(refusedRecord(r));
   records.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
   markDuplicateIds(records);
   return { root: realRoot, records, missingDirs: found.missingDirs };
+}
+
+/** A record file seen but refused (a link out of the registry): a record with that problem. */
+export function refusedRecord(r: { file: string; message: string }): LoadedRecord {
+  return {
+    file: r.file,
+    id: null,
+    record: null,
+    positions: NO_POSITIONS,
+    problems: [{ path: '', line: null, code: 'unreadable-file', message: `the record file ${r.message}` }],
+    origin: { kind: 'file' },
+  };
 }
 
 /**

@@ -1,0 +1,176 @@
+/**
+ * A review of some records (a pull request) against the registry's key index instead of every record loaded:
+ * the records under review are loaded and audited in full; the rest of the registry is known by its rows of the
+ * index (index-build.ts, cached by blob id), and a per-record check that looks a record up by id (an origin
+ * input) gets that one record read from disk. The findings are those of the review over the loaded registry
+ * (runAudit with paths): the same rows in the same order, the same duplicate-id problems, the same lookups.
+ */
+import { join } from 'node:path';
+import type { Budget } from '../chem/budget.js';
+import type { AuditConfig, CheckModule, RegistryEntry, RegistryView } from '../checks/types.js';
+import { findRecordFiles, relativeTo } from '../registry/files.js';
+import type { IndexEntry } from '../registry/index-cache.js';
+import { loadRecordFile, markDuplicateIds, refusedRecord } from '../registry/load.js';
+import type { LoadedRecord } from '../registry/types.js';
+import type { AuditEngine } from './engine.js';
+import { buildIndex } from './index-build.js';
+import { auditRecords } from './run.js';
+import { selectRecords, type SelectableRecord } from './select.js';
+import { StructureCache } from './structures.js';
+import type { AuditResult } from './types.js';
+import { entryOf } from './view.js';
+
+export interface IndexReviewOptions {
+  /** Real path of the registry root. */
+  realRoot: string;
+  paths: readonly string[];
+  config: AuditConfig;
+  checks: readonly CheckModule[];
+  engine: AuditEngine;
+  /** `engine` is the default engine for the config (see index-build.ts). */
+  defaultEngine: boolean;
+  budget: Budget;
+  /** Cache file of the index, or null for none. */
+  indexCache: string | null;
+  /** Where the line about the index goes (the action's log); default nowhere. */
+  log?: (line: string) => void;
+  /** Workers for keying (index-build.ts); default by the number of files. */
+  workers?: number;
+}
+
+/** A record file as selection sees it: from the index, or refused (a link out of the registry). */
+type Stub = SelectableRecord & { entry: IndexEntry | null; refused: string | null };
+
+/**
+ * Reviews the records `paths` names against the index. Null when the review is not one: a record folder is
+ * missing (the loaded audit says so), or `paths` name every record (a full audit).
+ */
+export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditResult | null> {
+  const found = findRecordFiles(o.realRoot, o.config.recordDirs);
+  if (found.missingDirs.length > 0) return null;
+  const refused = found.refused.map((r): Stub => ({ file: r.file, entry: null, refused: r.message }));
+  const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
+  const absOf = new Map(files.map((f, i) => [f, found.files[i]!]));
+  // the files themselves name every record: a full audit, before any file is read
+  const plain = [...files.map((file): Stub => ({ file, entry: null, refused: null })), ...refused];
+  if (selectRecords(plain, o.realRoot, o.paths).selected.size === plain.length) return null;
+
+  const built = await buildIndex({
+    realRoot: o.realRoot,
+    files,
+    recordDirs: o.config.recordDirs,
+    engine: o.engine,
+    defaultEngine: o.defaultEngine,
+    axisOrthoMin: o.config.axisOrthoMin,
+    budget: o.budget,
+    cachePath: o.indexCache,
+    ...(o.workers === undefined ? {} : { workers: o.workers }),
+  });
+  o.log?.(built.account);
+  const stubs: Stub[] = built.entries.map((entry) => ({
+    file: entry.file,
+    sources: { main: null, components: entry.molfiles.map(([file]) => ({ file })) },
+    entry,
+    refused: null,
+  }));
+  stubs.push(...refused);
+  stubs.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
+  const sel = selectRecords(stubs, o.realRoot, o.paths);
+  if (sel.selected.size === stubs.length) return null;
+
+  const audited = new Map<string, LoadedRecord>();
+  for (const s of stubs) {
+    if (!sel.selected.has(s)) continue;
+    audited.set(
+      s.file,
+      s.refused !== null
+        ? refusedRecord({ file: s.file, message: s.refused })
+        : loadRecordFile(o.realRoot, absOf.get(s.file)!),
+    );
+  }
+  const toAudit = [...audited.values()];
+  markDuplicateIdsAgainst(toAudit, built.entries, audited);
+  const view = indexView(built.entries, audited, new StructureCache(o.engine), (e) =>
+    loadRecordFile(o.realRoot, absOf.get(e.file) ?? join(o.realRoot, e.file)),
+  );
+  const result = auditRecords(toAudit, {
+    checks: o.checks,
+    config: o.config,
+    engine: o.engine,
+    budget: o.budget,
+    view,
+    otherRows: function* () {
+      for (const e of built.entries) if (!audited.has(e.file)) yield e.row;
+    },
+  });
+  if (sel.unmatched.length > 0) result.unmatched = sel.unmatched;
+  return result;
+}
+
+/**
+ * The duplicate-id problems of the records under review, as loading the whole registry gives them: the other
+ * records with the same id stand in as their rows (file and line of the id).
+ */
+function markDuplicateIdsAgainst(
+  toAudit: LoadedRecord[],
+  entries: readonly IndexEntry[],
+  audited: ReadonlyMap<string, LoadedRecord>,
+): void {
+  const ids = new Set(toAudit.flatMap((r) => (r.id === null ? [] : [r.id])));
+  if (ids.size === 0) return;
+  const group: LoadedRecord[] = [];
+  for (const e of entries) {
+    const own = audited.get(e.file);
+    if (own) {
+      if (own.id !== null && ids.has(own.id)) group.push(own);
+      continue;
+    }
+    const { id, lines } = e.row;
+    if (id === null || !ids.has(id)) continue;
+    group.push({
+      file: e.file,
+      id,
+      record: null,
+      positions: {
+        get: (p) => (p === 'id' && lines.id !== null ? { line: lines.id, column: 1 } : undefined),
+      },
+      problems: [],
+      origin: { kind: 'file' },
+    });
+  }
+  markDuplicateIds(group);
+}
+
+/**
+ * The registry as per-record checks see it, over the index: a lookup by id reads that one record (the first
+ * record of the schema with that id, in file order, as the loaded view finds it); the ids come from the index;
+ * every entry is read only if a check walks them all.
+ */
+function indexView(
+  entries: readonly IndexEntry[],
+  audited: ReadonlyMap<string, LoadedRecord>,
+  cache: StructureCache,
+  load: (e: IndexEntry) => LoadedRecord,
+): RegistryView {
+  const valid = entries.filter((e) => e.valid);
+  const firstById = new Map<string, IndexEntry>();
+  for (const e of valid) if (e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, e);
+  const entryFor = (e: IndexEntry): RegistryEntry | null =>
+    entryOf(audited.get(e.file) ?? load(e), cache, audited.has(e.file));
+  const seen = new Map<string, RegistryEntry | undefined>();
+  let all: RegistryEntry[] | null = null;
+  return {
+    get entries(): readonly RegistryEntry[] {
+      all ??= valid.flatMap((e) => entryFor(e) ?? []);
+      return all;
+    },
+    byId(id: string): RegistryEntry | undefined {
+      if (!seen.has(id)) {
+        const e = firstById.get(id);
+        seen.set(id, e ? (entryFor(e) ?? undefined) : undefined);
+      }
+      return seen.get(id);
+    },
+    ids: () => valid.flatMap((e) => (e.row.id === null ? [] : [e.row.id])),
+  };
+}
