@@ -1,0 +1,235 @@
+/**
+ * The pull-request review through the registry's key index (src/audit/review-against-index.ts) gives what the
+ * review over every loaded record gives, on the demo registry with records added and changed as a pull request
+ * would: a duplicate, a mirror image, an enantiomer with a rotation of the same sign, a duplicate id, an origin
+ * naming a registered record. The reference is the review as it was (src/registry/load.ts + auditRecords with
+ * the whole registry), run in the same test; the chemistry of the expected findings is in the check's own tests
+ * (test/checks/consistent-with-registry.test.ts).
+ */
+import { afterEach, describe, expect, it } from 'vitest';
+import { mkdirSync, readFileSync, rmSync, unlinkSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { loadConfig } from '../../src/audit/config.js';
+import { defaultEngine } from '../../src/audit/engine.js';
+import { RECORD_BUDGET } from '../../src/audit/run.js';
+import { reviewAgainstIndex } from '../../src/audit/review-against-index.js';
+import { CHECKS } from '../../src/checks/index.js';
+import { counts, demoCopy, indexReview, loadedReview, seen, type DemoCopy } from './index-review-support.js';
+
+let demo: DemoCopy | null = null;
+afterEach(() => {
+  demo?.remove();
+  demo = null;
+});
+
+/** Records a pull request adds (invented, Larkspur scenario); the comments say what the review should find. */
+const ADDED: Record<string, string> = {
+  // the same stereoisomer and form as LX-00005, (R)-butan-2-ol: already registered
+  'compounds/LX-00300.yml':
+    'id: LX-00300\nname: (R)-butan-2-ol, second entry\nstructure:\n  smiles: "C[C@@H](O)CC"\n' +
+    'stereo:\n  form: single-enantiomer\n',
+  // the mirror image of LX-00005 with a rotation of the same sign, measured alike: one of them is wrong
+  'compounds/LX-00301.yml':
+    'id: LX-00301\nname: (S)-butan-2-ol\nstructure:\n  smiles: "C[C@H](O)CC"\nstereo:\n  form: single-enantiomer\n' +
+    '  rotation:\n    value: -13.0\n    wavelength_nm: 589\n    temperature_c: 20\n    solvent: neat\n',
+  // the mirror image of the carvone of LX-00010/11 (a registered enantiomer: a note)
+  'compounds/LX-00302.yml':
+    'id: LX-00302\nstructure:\n  smiles: "CC1=CC[C@H](CC1=O)C(=C)C"\nstereo:\n  form: single-enantiomer\n',
+  // an id already used by the meso-tartaric acid record
+  'compounds/extra/LX-00003-copy.yml':
+    'id: LX-00003\nstructure:\n  smiles: "OCC(O)CO"\nstereo:\n  form: achiral\n',
+  // made from a registered record (origin looks LX-00201 up by id)
+  'compounds/LX-00304.yml':
+    'id: LX-00304\nstructure:\n  smiles: "C[C@@H](O)c1ccc(Br)cc1"\nstereo:\n  form: single-enantiomer\n' +
+    'origin:\n  from: [LX-00201]\n  control: chiral-catalyst\n',
+};
+
+function addRecords(d: DemoCopy): string[] {
+  for (const [path, text] of Object.entries(ADDED)) {
+    const abs = join(d.root, path);
+    mkdirSync(join(abs, '..'), { recursive: true });
+    writeFileSync(abs, text);
+  }
+  return Object.keys(ADDED);
+}
+
+/**
+ * Record files of the demo registry with the records added (49 + 5). One of them, LX-00033, names a molfile that
+ * cannot be located, so its row is never cached and it is read on every run.
+ */
+const FILES = 54;
+
+const ids = (text: string) => [...text.matchAll(/"messageId": "([^"]+)"/g)].map((m) => m[1]);
+
+describe('a review through the key index', () => {
+  it('finds what the review over every loaded record finds (duplicate, mirror image, rotation sign, duplicate id)', async () => {
+    demo = demoCopy(true);
+    const paths = addRecords(demo);
+    const reference = await loadedReview(demo.root, paths);
+    const viaIndex = await indexReview(demo.root, paths, null);
+    expect(viaIndex.seen).toBe(reference);
+    expect(viaIndex.seen).toContain('identical to LX-00005');
+    // not a vacuous comparison: the registry-wide findings are there
+    expect(ids(viaIndex.seen)).toEqual(
+      expect.arrayContaining([
+        'already-registered',
+        'enantiomer-rotation-same-sign',
+        'enantiomer-registered',
+        'duplicate-id',
+      ]),
+    );
+    expect(viaIndex.result.records.map((r) => r.file)).toEqual([
+      'compounds/LX-00300.yml',
+      'compounds/LX-00301.yml',
+      'compounds/LX-00302.yml',
+      'compounds/LX-00304.yml',
+      'compounds/extra/LX-00003-copy.yml',
+    ]);
+    expect(viaIndex.seen).toContain('origin-supports-claim');
+  });
+
+  it('cache: written cold, used warm, the same findings; a changed record is the only file read again', async () => {
+    demo = demoCopy(true);
+    const cache = join(demo.root, '..', `${demo.root.split('/').pop()}-index.json`);
+    try {
+      const paths = addRecords(demo);
+      const cold = await indexReview(demo.root, paths, cache);
+      expect(counts(cold.log)).toEqual({ cached: 0, read: FILES });
+      expect(cold.log[0]).toContain(`cache written to ${cache}`);
+      const warm = await indexReview(demo.root, paths, cache);
+      expect(counts(warm.log)).toEqual({ cached: FILES - 1, read: 1 });
+      expect(warm.seen).toBe(cold.seen);
+      // the pull request changes LX-00005's rotation sign in the working tree (not committed): its blob id
+      // differs from HEAD's, so it is read again, and the review sees the new sign
+      const lx5 = join(demo.root, 'compounds/LX-00005.yml');
+      writeFileSync(lx5, readFileSync(lx5, 'utf8').replace('value: -13.5', 'value: 13.5'));
+      const changed = await indexReview(demo.root, paths, cache);
+      expect(counts(changed.log)).toEqual({ cached: FILES - 2, read: 2 });
+      expect(changed.seen).toBe(await loadedReview(demo.root, paths));
+      expect(ids(changed.seen)).not.toContain('enantiomer-rotation-same-sign');
+    } finally {
+      rmSync(cache, { force: true });
+    }
+  });
+
+  it('a corrupt, truncated, stale or foreign cache only costs time: same findings, cache rebuilt', async () => {
+    demo = demoCopy(true);
+    const cache = join(demo.root, 'index-cache.json');
+    const paths = addRecords(demo);
+    const reference = await loadedReview(demo.root, paths);
+    await indexReview(demo.root, paths, cache);
+    const good = readFileSync(cache, 'utf8');
+    const cases: [string, string, RegExp][] = [
+      ['garbage', 'not json at all {', /not valid JSON/],
+      ['truncated', good.slice(0, Math.floor(good.length / 2)), /not valid JSON/],
+      ['other program', '{"entries": []}', /not a stereogate index cache/],
+      [
+        'other version',
+        good.replace(/"version":"[^"]*"/, '"version":"0.0.0-old"'),
+        /another stereogate version/,
+      ],
+      ['other settings', good.replace(/"axisOrthoMin":\d+/, '"axisOrthoMin":2'), /other settings/],
+    ];
+    for (const [what, text, reason] of cases) {
+      writeFileSync(cache, text);
+      const run = await indexReview(demo.root, paths, cache);
+      expect(run.seen, what).toBe(reference);
+      expect(run.log[0], what).toMatch(reason);
+      expect(counts(run.log), what).toEqual({ cached: 0, read: FILES });
+      expect(readFileSync(cache, 'utf8'), what).toBe(good);
+    }
+    // one damaged entry: that file alone is read again
+    const lines = good.split('\n');
+    const at = lines.findIndex((l) => l.startsWith('["compounds/LX-00005.yml"'));
+    lines[at] = `[1,2,3]${lines[at]!.endsWith(',') ? ',' : ''}`;
+    writeFileSync(cache, lines.join('\n'));
+    const patched = await indexReview(demo.root, paths, cache);
+    expect(counts(patched.log)).toEqual({ cached: FILES - 2, read: 2 });
+    expect(patched.seen).toBe(reference);
+    // the cache file cannot be written (a folder stands in its way): the review still runs
+    rmSync(cache);
+    mkdirSync(join(cache, 'x'), { recursive: true });
+    const blocked = await indexReview(demo.root, paths, join(cache, 'x'));
+    expect(blocked.seen).toBe(reference);
+    expect(blocked.log[0]).toMatch(/cache not written/);
+  });
+
+  it('removed and renamed files: a removed record drops out of the index, a renamed one keeps its row', async () => {
+    demo = demoCopy(true);
+    const cache = join(demo.root, 'index-cache.json');
+    const paths = addRecords(demo);
+    await indexReview(demo.root, paths, cache);
+    // LX-00005 removed: LX-00300 is no longer a duplicate; LX-00011 renamed: read from the cache by its blob id
+    demo.git('rm', '-q', 'compounds/LX-00005.yml');
+    mkdirSync(join(demo.root, 'compounds/renamed'));
+    demo.git('mv', 'compounds/LX-00011.yml', 'compounds/renamed/LX-00011.yml');
+    const run = await indexReview(demo.root, paths, cache);
+    expect(counts(run.log)).toEqual({ cached: FILES - 2, read: 1 });
+    expect(run.seen).toBe(await loadedReview(demo.root, paths));
+    expect(run.seen).not.toContain('identical to LX-00005');
+    expect(run.seen).toContain('renamed/LX-00011.yml');
+    const entries = readFileSync(cache, 'utf8');
+    expect(entries).not.toContain('"compounds/LX-00005.yml"');
+    expect(entries).toContain('"compounds/renamed/LX-00011.yml"');
+  });
+
+  it('a molfile changed in the working tree makes its record be read again', async () => {
+    demo = demoCopy(true);
+    const cache = join(demo.root, 'index-cache.json');
+    const paths = addRecords(demo);
+    await indexReview(demo.root, paths, cache);
+    const mol = join(demo.root, 'compounds/LX-00010.mol');
+    writeFileSync(mol, `${readFileSync(mol, 'utf8')}\n`);
+    const run = await indexReview(demo.root, paths, cache);
+    expect(counts(run.log)).toEqual({ cached: FILES - 2, read: 2 });
+    expect(run.seen).toBe(await loadedReview(demo.root, paths));
+    // the molfile itself as a changed path selects the record that uses it
+    const byMolfile = await indexReview(demo.root, ['compounds/LX-00010.mol'], cache);
+    expect(byMolfile.result.records.map((r) => r.file)).toEqual(['compounds/LX-00010.yml']);
+    expect(byMolfile.seen).toBe(await loadedReview(demo.root, ['compounds/LX-00010.mol']));
+  });
+
+  it('a folder that is no git work tree: blob ids hashed from the bytes, the same cache and findings', async () => {
+    demo = demoCopy(false);
+    const cache = join(demo.root, 'index-cache.json');
+    const paths = addRecords(demo);
+    const cold = await indexReview(demo.root, paths, cache);
+    const warm = await indexReview(demo.root, paths, cache);
+    expect(counts(warm.log)).toEqual({ cached: FILES - 1, read: 1 });
+    expect(warm.seen).toBe(cold.seen);
+    expect(cold.seen).toBe(await loadedReview(demo.root, paths));
+    unlinkSync(join(demo.root, 'compounds/LX-00005.yml'));
+    const removed = await indexReview(demo.root, paths, cache);
+    expect(counts(removed.log)).toEqual({ cached: FILES - 2, read: 1 });
+    expect(removed.seen).toBe(await loadedReview(demo.root, paths));
+  });
+
+  it('keyed by the worker pool: the same findings as keyed in this thread', async () => {
+    demo = demoCopy(true);
+    const paths = addRecords(demo);
+    const { config } = loadConfig(demo.root);
+    const engine = await defaultEngine({ axisOrthoMin: config.axisOrthoMin });
+    const log: string[] = [];
+    const pooled = await reviewAgainstIndex({
+      realRoot: demo.root,
+      paths,
+      config,
+      checks: CHECKS,
+      engine,
+      defaultEngine: true,
+      budget: RECORD_BUDGET,
+      indexCache: null,
+      log: (l) => log.push(l),
+      workers: 2,
+    });
+    expect(log[0]).toContain('read and keyed by 2 worker(s)');
+    expect(seen(pooled!)).toBe(await loadedReview(demo.root, paths));
+  });
+
+  it('paths naming every record: the full audit, not a review', async () => {
+    demo = demoCopy(true);
+    const run = await indexReview(demo.root, ['compounds'], null);
+    expect(run.log).toEqual([]);
+    expect(run.result.registry?.reason).toContain('every record with each record before it');
+  });
+});
