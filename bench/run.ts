@@ -5,6 +5,8 @@
  *   cip     share of the per-record audit time spent in CIP labelling
  *   bulk    bulk audit of 100,000 records (MoleculeNet replicated, invented claims) with 1 and 2 workers
  *   action  a 20-record pull request against a 5,000-record registry vs the pure audit of the same records
+ *   pr      a one-record pull request against BENCH_REGISTRY_RECORDS (default 20,000) through the key index,
+ *           cold (no cache) and warm (cache), beside the review that loads every record
  *   registry  bulk with and without the registry-wide checks, and the folder audit, of the same records
  *   outputs Markdown escaping vs the former escaping; the 10,000-record HTML report opened in chromium; the
  *           HTML report's computed layouts vs reading and describing the same structures
@@ -55,6 +57,7 @@ const SECTIONS: [string, Section][] = [
   ['bulk', async (ctx) => (await import('./bulk.js')).benchBulk(ctx)],
   ['cip', async (ctx) => (await import('./cip.js')).benchCip(ctx)],
   ['action', async (ctx) => (await import('./action.js')).benchAction(ctx)],
+  ['pr', async (ctx) => (await import('./pr-index.js')).benchPrIndex(ctx)],
   [
     'registry',
     async (ctx) =>

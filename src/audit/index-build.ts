@@ -1,8 +1,9 @@
 /**
- * The registry index of a pull-request review: one row of keys per record file (index-keys.ts), taken from the
- * cache where the file's blob id (and those of its molfiles) still match, read and keyed otherwise. A file
- * renamed without change keeps its row. Many files to key (a cold cache on a large registry) are keyed by the
- * worker pool of the bulk audit, one worker per core; a few, or an engine handed in by the caller, in this thread.
+ * The registry index of a pull-request review: one row per record file (index-keys.ts), taken from the cache
+ * where the file's blob id (and those of its molfiles) still match, read otherwise. A file renamed without change
+ * keeps its row. Rows are light (no keys) until a review asks for the keys of some (`keyFully`); both depths are
+ * cached. Many files to read (a cold cache on a large registry) go to the worker pool of the bulk audit, one
+ * worker per core; a few, or an engine handed in by the caller, are read in this thread.
  */
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
@@ -12,16 +13,17 @@ import { BlobIds, gitBlobIds } from '../registry/blob-ids.js';
 import {
   readIndexCache,
   writeIndexCache,
+  type CacheRead,
   type CacheSettings,
   type IndexEntry,
 } from '../registry/index-cache.js';
 import type { AuditEngine } from './engine.js';
 import { keyRecordFile, type KeyedFile } from './index-keys.js';
-import type { IndexWorkerSetup } from './index-worker.js';
+import type { IndexWorkerItem, IndexWorkerSetup } from './index-worker.js';
 import { VERSION } from './version.js';
 
-/** Fewer files than this to key: this thread keys them (starting workers costs about a second). */
-export const MIN_FILES_FOR_WORKERS = 400;
+/** Fewer files than this to read: this thread reads them (starting workers costs about a second). */
+export const MIN_FILES_FOR_WORKERS = 2000;
 
 export interface IndexBuildOptions {
   realRoot: string;
@@ -38,113 +40,142 @@ export interface IndexBuildOptions {
   budget: Budget;
   /** Cache file, or null for none. */
   cachePath: string | null;
-  /** Workers for keying; default one per core (at most 2) when at least MIN_FILES_FOR_WORKERS files are read. */
+  /** Workers for reading; default one per core (at most 2) when at least MIN_FILES_FOR_WORKERS are read. */
   workers?: number;
 }
 
-export interface BuiltIndex {
-  /** One entry per file, in the order of `files`. */
-  entries: IndexEntry[];
-  /** What happened, in a sentence (for the log). */
-  account: string;
-}
+export class RecordIndex {
+  /** One entry per file, in the order of the files. */
+  readonly entries: IndexEntry[];
+  private readonly unkept = new Set<IndexEntry>();
+  private readonly blobs: BlobIds;
+  private read = 0;
+  private described = 0;
+  private reused = 0;
+  private usedWorkers = 0;
+  private cache: CacheRead | null = null;
 
-export async function buildIndex(opts: IndexBuildOptions): Promise<BuiltIndex> {
-  const settings: CacheSettings = { version: VERSION, axisOrthoMin: opts.axisOrthoMin };
-  const useCache = opts.cachePath !== null && opts.defaultEngine;
-  const read = useCache ? readIndexCache(opts.cachePath!, settings) : null;
-  const byPath = new Map<string, IndexEntry>();
-  const byBlob = new Map<string, IndexEntry>();
-  for (const e of read?.entries ?? []) {
-    byPath.set(e.file, e);
-    if (e.molfiles.length === 0) byBlob.set(e.blob, e);
+  private constructor(private readonly opts: IndexBuildOptions) {
+    this.entries = new Array<IndexEntry>(opts.files.length);
+    this.blobs = new BlobIds(gitBlobIds(opts.realRoot, opts.recordDirs), (rel) => join(opts.realRoot, rel));
   }
-  const blobs = new BlobIds(gitBlobIds(opts.realRoot, opts.recordDirs), (rel) => join(opts.realRoot, rel));
-  const current = (e: IndexEntry) => e.molfiles.every(([path, blob]) => blobs.of(path) === blob);
 
-  const entries: (IndexEntry | null)[] = new Array<IndexEntry | null>(opts.files.length).fill(null);
-  const fileBlobs: (string | null)[] = [];
-  const toKey: number[] = [];
-  let reused = 0;
-  opts.files.forEach((file, i) => {
-    const blob = blobs.of(file);
-    fileBlobs.push(blob);
-    if (blob !== null) {
-      const same = byPath.get(file);
-      if (same && same.blob === blob && current(same)) {
-        entries[i] = same;
-        reused++;
-        return;
-      }
-      // renamed (or copied) without change: the row is the file's content but for its path
-      const moved = byBlob.get(blob);
-      if (moved) {
-        entries[i] = { ...moved, file, row: { ...moved.row, file } };
-        reused++;
-        return;
-      }
+  /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */
+  static async open(opts: IndexBuildOptions): Promise<RecordIndex> {
+    const index = new RecordIndex(opts);
+    await index.fill();
+    return index;
+  }
+
+  private get settings(): CacheSettings {
+    return { version: VERSION, axisOrthoMin: this.opts.axisOrthoMin };
+  }
+
+  private get useCache(): boolean {
+    return this.opts.cachePath !== null && this.opts.defaultEngine;
+  }
+
+  private async fill(): Promise<void> {
+    this.cache = this.useCache ? readIndexCache(this.opts.cachePath!, this.settings) : null;
+    const byPath = new Map<string, IndexEntry>();
+    const byBlob = new Map<string, IndexEntry>();
+    for (const e of this.cache?.entries ?? []) {
+      byPath.set(e.file, e);
+      if (e.molfiles.length === 0) byBlob.set(e.blob, e);
     }
-    toKey.push(i);
-  });
+    const current = (e: IndexEntry) => e.molfiles.every(([path, blob]) => this.blobs.of(path) === blob);
+    const toRead: number[] = [];
+    this.opts.files.forEach((file, i) => {
+      const blob = this.blobs.of(file);
+      const same = blob === null ? undefined : byPath.get(file);
+      // renamed (or copied) without change: the row is the file's content but for its path
+      const moved = blob === null ? undefined : byBlob.get(blob);
+      if (same && same.blob === blob && current(same)) this.entries[i] = same;
+      else if (moved) this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
+      else return toRead.push(i);
+      this.reused++;
+    });
+    await this.readFiles(toRead, false);
+  }
 
-  const unkept = new Set<IndexEntry>();
-  const workers =
-    opts.workers ??
-    (opts.defaultEngine && toKey.length >= MIN_FILES_FOR_WORKERS ? Math.min(2, availableParallelism()) : 0);
-  const noEngine = (abs: string) => keyRecordFile(opts.realRoot, abs, null, opts.budget);
-  const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
-  const setup: IndexWorkerSetup = {
-    realRoot: opts.realRoot,
-    budget: opts.budget,
-    axisOrthoMin: opts.axisOrthoMin,
-  };
-  const keyed = mapOrdered<string, KeyedFile>(
-    toKey.map((i) => join(opts.realRoot, opts.files[i]!)),
-    {
-      workers,
-      script: new URL(`./index-worker${ext}`, import.meta.url),
-      workerData: setup,
-      // the worker stops a record at its budget itself; this is the backstop for a stuck or crashed worker
-      timeoutMs: opts.budget.timeMs * 2 + 30_000,
-      onTimeout: noEngine,
-      onCrash: noEngine,
-      inline: (abs) => keyRecordFile(opts.realRoot, abs, opts.engine, opts.budget),
-      batchSize: 32,
-    },
-  );
-  let k = 0;
-  for await (const result of keyed) {
-    const i = toKey[k++]!;
-    const file = opts.files[i]!;
-    const blob = fileBlobs[i];
-    const molfiles = result.molfiles.map((m): [string, string | null] => [m, blobs.of(m)]);
-    // a file or molfile that could not be read for its blob id is used this once, not cached
-    const entry: IndexEntry = {
-      file,
-      blob: blob ?? '',
-      molfiles: molfiles.map(([m, b]) => [m, b ?? '']),
-      valid: result.valid,
-      row: result.row,
+  /** Computes the keys of the entries `wanted` picks that have none yet. */
+  async keyFully(wanted: (e: IndexEntry) => boolean): Promise<void> {
+    const todo: number[] = [];
+    this.entries.forEach((e, i) => {
+      if (!e.keyed && wanted(e)) todo.push(i);
+    });
+    await this.readFiles(todo, true);
+  }
+
+  private async readFiles(at: readonly number[], full: boolean): Promise<void> {
+    if (at.length === 0) return;
+    const { opts } = this;
+    const workers =
+      opts.workers ??
+      (opts.defaultEngine && at.length >= MIN_FILES_FOR_WORKERS ? Math.min(2, availableParallelism()) : 0);
+    this.usedWorkers = Math.max(this.usedWorkers, workers);
+    const noEngine = (item: IndexWorkerItem) =>
+      keyRecordFile(opts.realRoot, item.abs, null, opts.budget, full);
+    const ext = import.meta.url.endsWith('.ts') ? '.ts' : '.js';
+    const setup: IndexWorkerSetup = {
+      realRoot: opts.realRoot,
+      budget: opts.budget,
+      axisOrthoMin: opts.axisOrthoMin,
     };
-    if (!result.keep || blob === null || molfiles.some((m) => m[1] === null)) unkept.add(entry);
-    entries[i] = entry;
+    const results = mapOrdered<IndexWorkerItem, KeyedFile>(
+      at.map((i) => ({ abs: join(opts.realRoot, opts.files[i]!), full })),
+      {
+        workers,
+        script: new URL(`./index-worker${ext}`, import.meta.url),
+        workerData: setup,
+        // the worker stops a record at its budget itself; this is the backstop for a stuck or crashed worker
+        timeoutMs: opts.budget.timeMs * 2 + 30_000,
+        onTimeout: noEngine,
+        onCrash: noEngine,
+        inline: (item) => keyRecordFile(opts.realRoot, item.abs, opts.engine, opts.budget, full),
+        batchSize: 64,
+      },
+    );
+    let k = 0;
+    for await (const result of results) {
+      const i = at[k++]!;
+      const file = opts.files[i]!;
+      const blob = this.blobs.of(file);
+      const molfiles = result.molfiles.map((m): [string, string | null] => [m, this.blobs.of(m)]);
+      // a file or molfile that could not be read for its blob id is used this once, not cached
+      const entry: IndexEntry = {
+        file,
+        blob: blob ?? '',
+        molfiles: molfiles.map(([m, b]) => [m, b ?? '']),
+        valid: result.valid,
+        heavy: result.heavy,
+        keyed: result.keyed,
+        row: result.row,
+      };
+      this.unkept.delete(this.entries[i]!);
+      if (!result.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
+      this.entries[i] = entry;
+    }
+    if (full) this.described += at.length;
+    else this.read += at.length;
   }
 
-  const all = entries as IndexEntry[];
-  const parts = [
-    `${opts.files.length} record file(s)`,
-    `${reused} from the cache`,
-    `${toKey.length} read and keyed${workers > 0 ? ` by ${workers} worker(s)` : ''}`,
-  ];
-  if (read && read.status !== 'used') parts.push(`cache not used: ${read.reason}`);
-  const dropped = (read?.entries.length ?? 0) - reused;
-  if (useCache && (toKey.length > 0 || dropped !== 0 || read?.status !== 'used')) {
-    const error = writeIndexCache(
-      opts.cachePath!,
-      settings,
-      all.filter((e) => !unkept.has(e)),
-    );
-    parts.push(error === null ? `cache written to ${opts.cachePath}` : `cache not written: ${error}`);
+  /** Writes the cache when anything changed; says in a sentence what was done (for the log). */
+  save(): string {
+    const parts = [
+      `${this.entries.length} record file(s)`,
+      `${this.reused} from the cache`,
+      `${this.read} read`,
+      `${this.described} described for their keys`,
+    ];
+    if (this.usedWorkers > 0) parts.push(`${this.usedWorkers} worker(s)`);
+    if (this.cache && this.cache.status !== 'used') parts.push(`cache not used: ${this.cache.reason}`);
+    const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
+    if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== 'used')) {
+      const kept = this.entries.filter((e) => !this.unkept.has(e));
+      const error = writeIndexCache(this.opts.cachePath!, this.settings, kept);
+      parts.push(error === null ? `cache written to ${this.opts.cachePath}` : `cache not written: ${error}`);
+    }
+    return `Registry index: ${parts.join('; ')}.`;
   }
-  return { entries: all, account: `Registry index: ${parts.join('; ')}.` };
 }

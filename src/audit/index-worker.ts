@@ -1,6 +1,6 @@
 /**
- * Worker thread of the registry index build (index-build.ts): loads the engine once, then reads and keys the
- * record files it is handed.
+ * Worker thread of the registry index (index-build.ts): loads the engine once, then reads (and, when asked,
+ * keys) the record files it is handed.
  */
 import type { Budget } from '../chem/budget.js';
 import { serveWorker } from '../bulk/worker-entry.js';
@@ -14,10 +14,16 @@ export interface IndexWorkerSetup {
   axisOrthoMin: number;
 }
 
+/** One file: its absolute path, and whether its keys are wanted (else a light row). */
+export interface IndexWorkerItem {
+  abs: string;
+  full: boolean;
+}
+
 let engine: Promise<AuditEngine> | null = null;
 
-serveWorker<string, KeyedFile>(async (abs, data) => {
+serveWorker<IndexWorkerItem, KeyedFile>(async (item, data) => {
   const setup = data as IndexWorkerSetup;
   engine ??= defaultEngine({ axisOrthoMin: setup.axisOrthoMin });
-  return keyRecordFile(setup.realRoot, abs, await engine, setup.budget);
+  return keyRecordFile(setup.realRoot, item.abs, await engine, setup.budget, item.full);
 });

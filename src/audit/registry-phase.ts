@@ -50,19 +50,44 @@ export class RegistryPhase {
   private records = 0;
   private readonly enabled: boolean;
   private readonly underReview = new Set<IndexRow>();
+  /** Review mode: records of the registry filed, under review or not. */
+  private registryRecords = 0;
 
   constructor(private readonly options: PhaseOptions) {
     this.index = new RegistryIndex(options.confirm);
     this.enabled = configuredSeverity(options.config, CHECK.id) !== 'off';
   }
 
+  /** The lookup keys of the records under review (review mode, set by `reviewing`): other keys are not filed. */
+  private reach: Set<string> | null = null;
+
+  /**
+   * Review mode, before any `file`: the records that will be under review. A record of the registry whose keys
+   * none of them looks up is then not filed: the same findings, without forming classes no lookup visits (which
+   * may call `confirm`).
+   */
+  reviewing(rows: readonly IndexRow[]): void {
+    this.reach = new Set();
+    for (const r of rows) {
+      const k = r.keys;
+      if (k === null || k.stereo === null || k.mirror === null) continue;
+      this.reach.add(`${k.constitution}#${k.stereo}`);
+      this.reach.add(`${k.constitution}#${k.mirror}`);
+    }
+  }
+
   /** Review mode: a record of the registry, not under review (added before any `review`). */
   file(row: IndexRow): void {
+    this.registryRecords++;
+    const k = row.keys;
+    if (this.reach && k !== null && k.stereo !== null && !this.reach.has(`${k.constitution}#${k.stereo}`))
+      return;
     this.index.add(row);
   }
 
   /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
   fileUnderReview(row: IndexRow): void {
+    this.registryRecords++;
     this.underReview.add(row);
     this.index.add(row);
   }
@@ -98,15 +123,14 @@ export class RegistryPhase {
   }
 
   summary(): RegistrySummary {
-    const what =
+    // a review files only the keys its records look up, so it counts records, not keys
+    const how =
       this.options.mode === 'full'
-        ? 'every record with each record before it'
-        : 'each record under review with the whole registry';
+        ? `every record with each record before it through an index of ${this.index.size} records' keys`
+        : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
     return {
       status: this.enabled ? 'run' : 'not-run',
-      reason: this.enabled
-        ? `compared ${what} through an index of ${this.index.size} records' keys`
-        : `${CHECK.id} is off in the configuration`,
+      reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
       records: this.records,
       pairs: this.pairs,
     };

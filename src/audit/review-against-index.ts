@@ -12,8 +12,10 @@ import { findRecordFiles, relativeTo } from '../registry/files.js';
 import type { IndexEntry } from '../registry/index-cache.js';
 import { loadRecordFile, markDuplicateIds, refusedRecord } from '../registry/load.js';
 import type { LoadedRecord } from '../registry/types.js';
-import type { AuditEngine } from './engine.js';
-import { buildIndex } from './index-build.js';
+import { heavyAtomCandidates, type AuditEngine } from './engine.js';
+import { withBudget } from '../chem/budget.js';
+import { RecordIndex } from './index-build.js';
+import { indexRow } from './index-row.js';
 import { auditRecords } from './run.js';
 import { selectRecords, type SelectableRecord } from './select.js';
 import { StructureCache } from './structures.js';
@@ -38,8 +40,10 @@ export interface IndexReviewOptions {
   workers?: number;
 }
 
+const NO_STRUCTURE = { structure: null, facts: null, error: null };
+
 /** A record file as selection sees it: from the index, or refused (a link out of the registry). */
-type Stub = SelectableRecord & { entry: IndexEntry | null; refused: string | null };
+type Stub = SelectableRecord & { at: number | null; refused: string | null };
 
 /**
  * Reviews the records `paths` names against the index. Null when the review is not one: a record folder is
@@ -48,14 +52,14 @@ type Stub = SelectableRecord & { entry: IndexEntry | null; refused: string | nul
 export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditResult | null> {
   const found = findRecordFiles(o.realRoot, o.config.recordDirs);
   if (found.missingDirs.length > 0) return null;
-  const refused = found.refused.map((r): Stub => ({ file: r.file, entry: null, refused: r.message }));
+  const refused = found.refused.map((r): Stub => ({ file: r.file, at: null, refused: r.message }));
   const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
   const absOf = new Map(files.map((f, i) => [f, found.files[i]!]));
   // the files themselves name every record: a full audit, before any file is read
-  const plain = [...files.map((file): Stub => ({ file, entry: null, refused: null })), ...refused];
+  const plain = [...files.map((file): Stub => ({ file, at: null, refused: null })), ...refused];
   if (selectRecords(plain, o.realRoot, o.paths).selected.size === plain.length) return null;
 
-  const built = await buildIndex({
+  const index = await RecordIndex.open({
     realRoot: o.realRoot,
     files,
     recordDirs: o.config.recordDirs,
@@ -66,17 +70,21 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
     cachePath: o.indexCache,
     ...(o.workers === undefined ? {} : { workers: o.workers }),
   });
-  o.log?.(built.account);
-  const stubs: Stub[] = built.entries.map((entry) => ({
+  const entries = index.entries;
+  // entries are replaced as they are keyed: a stub holds the place of its entry
+  const stubs: Stub[] = entries.map((entry, at) => ({
     file: entry.file,
     sources: { main: null, components: entry.molfiles.map(([file]) => ({ file })) },
-    entry,
+    at,
     refused: null,
   }));
   stubs.push(...refused);
   stubs.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
   const sel = selectRecords(stubs, o.realRoot, o.paths);
-  if (sel.selected.size === stubs.length) return null;
+  if (sel.selected.size === stubs.length) {
+    o.log?.(index.save());
+    return null;
+  }
 
   const audited = new Map<string, LoadedRecord>();
   for (const s of stubs) {
@@ -89,8 +97,15 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
     );
   }
   const toAudit = [...audited.values()];
-  markDuplicateIdsAgainst(toAudit, built.entries, audited);
-  const view = indexView(built.entries, audited, new StructureCache(o.engine), (e) =>
+  const structures = new StructureCache(o.engine);
+  // only a record with the heavy-atom formula of a record under review can be its duplicate or enantiomer
+  const wanted = partnerFormulas(toAudit, structures, o.budget);
+  await index.keyFully(
+    (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy)),
+  );
+  o.log?.(index.save());
+  markDuplicateIdsAgainst(toAudit, entries, audited);
+  const view = indexView(entries, audited, structures, (e) =>
     loadRecordFile(o.realRoot, absOf.get(e.file) ?? join(o.realRoot, e.file)),
   );
   const result = auditRecords(toAudit, {
@@ -99,12 +114,40 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
     engine: o.engine,
     budget: o.budget,
     view,
+    // a light row has no keys: its formula differs from every record under review, so no lookup reaches it
     otherRows: function* () {
-      for (const e of built.entries) if (!audited.has(e.file)) yield e.row;
+      for (const s of stubs) {
+        if (audited.has(s.file)) continue;
+        if (s.at !== null) yield entries[s.at]!.row;
+        else yield indexRow(refusedRecord({ file: s.file, message: s.refused! }), NO_STRUCTURE, 0);
+      }
     },
   });
   if (sel.unmatched.length > 0) result.unmatched = sel.unmatched;
   return result;
+}
+
+/**
+ * The heavy-atom formulas a partner of the records under review may have (engine.ts heavyAtomCandidates of each
+ * one's formula), or null when one of them could not be described within its budget (then every record is).
+ */
+function partnerFormulas(
+  records: readonly LoadedRecord[],
+  structures: StructureCache,
+  budget: Budget,
+): Set<string> | null {
+  const formulas = new Set<string>();
+  for (const r of records) {
+    if (r.record === null) continue;
+    let facts;
+    try {
+      facts = withBudget(budget, 'the structure of a record under review', () => structures.main(r)).facts;
+    } catch {
+      return null;
+    }
+    if (facts) for (const f of heavyAtomCandidates(facts.constitutionKey.split('/')[0]!)) formulas.add(f);
+  }
+  return formulas;
 }
 
 /**

@@ -124,6 +124,7 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
     const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
     if (review) {
       const audited = new Set(records);
+      phase.reviewing(rows);
       let seq = records.length;
       if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
       else for (const r of options.registry!) if (!audited.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));

@@ -24,6 +24,10 @@ export interface IndexEntry {
   molfiles: [path: string, blob: string][];
   /** The record follows the record schema (per-record checks may look it up by id). */
   valid: boolean;
+  /** Heavy-atom formula of the main structure from its SMILES syntax; null when unknown. */
+  heavy: string | null;
+  /** `row.keys` is computed; false: a light row (keys null until a review needs them). */
+  keyed: boolean;
   row: IndexRowData;
 }
 
@@ -35,13 +39,15 @@ export interface CacheSettings {
 }
 
 const FORMAT = 'stereogate registry index cache';
-const FORMAT_VERSION = 1;
+const FORMAT_VERSION = 2;
 
 type Stored = [
   file: string,
   blob: string,
   molfiles: [string, string][],
   valid: 0 | 1,
+  heavy: string | null,
+  keyed: 0 | 1,
   id: string | null,
   name: string | null,
   form: StereoForm,
@@ -122,6 +128,8 @@ function storedOf(e: IndexEntry): Stored {
     e.blob,
     e.molfiles,
     e.valid ? 1 : 0,
+    e.heavy,
+    e.keyed ? 1 : 0,
     r.id,
     r.name,
     r.form,
@@ -171,8 +179,9 @@ function isKeys(v: unknown): v is RecordKeys {
 
 /** One stored entry back, or null when it is not of the stored shape (that file is then read again). */
 function entryOf(raw: unknown): IndexEntry | null {
-  if (!Array.isArray(raw) || raw.length !== 11) return null;
-  const [file, blob, molfiles, valid, id, name, form, rotation, keys, lines, waiver] = raw as unknown[];
+  if (!Array.isArray(raw) || raw.length !== 13) return null;
+  const [file, blob, molfiles, valid, heavy, keyed, id, name, form, rotation, keys, lines, waiver] =
+    raw as unknown[];
   if (!isString(file) || file === '' || !isString(blob) || !/^[0-9a-f]{40}$/.test(blob)) return null;
   if (
     !Array.isArray(molfiles) ||
@@ -180,6 +189,8 @@ function entryOf(raw: unknown): IndexEntry | null {
   )
     return null;
   if ((valid !== 0 && valid !== 1) || (id !== null && !isString(id)) || (name !== null && !isString(name)))
+    return null;
+  if ((heavy !== null && !isString(heavy)) || (keyed !== 0 && keyed !== 1) || (keyed === 0 && keys !== null))
     return null;
   if (!STEREO_FORMS.includes(form as StereoForm)) return null;
   if (rotation !== null && !isRotation(rotation)) return null;
@@ -193,6 +204,8 @@ function entryOf(raw: unknown): IndexEntry | null {
     blob,
     molfiles: molfiles as [string, string][],
     valid: valid === 1,
+    heavy: heavy as string | null,
+    keyed: keyed === 1,
     row: {
       id: id as string | null,
       file,

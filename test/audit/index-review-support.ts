@@ -79,10 +79,10 @@ export async function indexReview(
   return { seen: seen(result), log, result };
 }
 
-/** "12 from the cache; 3 read and keyed" -> [12, 3] from the index line of the log. */
+/** "12 from the cache; 3 read; …" -> { cached: 12, read: 3 } from the index line of the log. */
 export function counts(log: string[]): { cached: number; read: number } {
   const line = log.find((l) => l.startsWith('Registry index:')) ?? '';
   const cached = /(\d+) from the cache/.exec(line);
-  const read = /(\d+) read and keyed/.exec(line);
+  const read = /(\d+) read;/.exec(line);
   return { cached: Number(cached?.[1] ?? NaN), read: Number(read?.[1] ?? NaN) };
 }

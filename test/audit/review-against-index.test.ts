@@ -112,6 +112,24 @@ describe('a review through the key index', () => {
     }
   });
 
+  it('a later pull request with another formula: its partners are described then, from a warm cache', async () => {
+    demo = demoCopy(true);
+    const cache = join(demo.root, 'index-cache.json');
+    addRecords(demo);
+    const first = await indexReview(demo.root, ['compounds/LX-00300.yml'], cache);
+    expect(first.seen).toBe(await loadedReview(demo.root, ['compounds/LX-00300.yml']));
+    const described = (log: string[]) => Number(/(\d+) described/.exec(log[0] ?? '')?.[1]);
+    const second = await indexReview(demo.root, ['compounds/LX-00302.yml'], cache);
+    expect(counts(second.log)).toEqual({ cached: FILES - 1, read: 1 });
+    // the carvones (C10H14O) were light rows after the first review; now they are described and cached
+    expect(described(second.log)).toBeGreaterThan(0);
+    expect(second.seen).toBe(await loadedReview(demo.root, ['compounds/LX-00302.yml']));
+    expect(second.seen).toContain('identical to LX-00010');
+    const third = await indexReview(demo.root, ['compounds/LX-00302.yml'], cache);
+    expect(described(third.log)).toBeLessThan(described(second.log));
+    expect(third.seen).toBe(second.seen);
+  });
+
   it('a corrupt, truncated, stale or foreign cache only costs time: same findings, cache rebuilt', async () => {
     demo = demoCopy(true);
     const cache = join(demo.root, 'index-cache.json');
@@ -222,7 +240,7 @@ describe('a review through the key index', () => {
       log: (l) => log.push(l),
       workers: 2,
     });
-    expect(log[0]).toContain('read and keyed by 2 worker(s)');
+    expect(log[0]).toContain('2 worker(s)');
     expect(seen(pooled!)).toBe(await loadedReview(demo.root, paths));
   });
 
