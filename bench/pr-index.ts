@@ -55,7 +55,8 @@ export async function benchPrIndex(ctx: BenchContext): Promise<void> {
       `id: LX-999999\nstructure:\n  smiles: ${JSON.stringify(ctx.smiles[0])}\nstereo:\n  form: unknown\n`,
     );
     const log: string[] = [];
-    const review = () => runAudit({ root: dir, paths: [changed], indexCache: cache, log: (l) => log.push(l) });
+    const review = () =>
+      runAudit({ root: dir, paths: [changed], indexCache: cache, log: (l) => log.push(l) });
     const cold = await timeAsync(`PR review, index cold (no cache), ${n} records`, 1, review);
     console.log(fmt(cold.timing));
     console.log(`  ${log.pop()}`);

@@ -2,9 +2,10 @@
 /* global console, process */
 /**
  * Builds the committed bundles with esbuild: src/action/main.ts -> dist/index.js (the GitHub Action),
- * src/cli/main.ts -> dist/cli.js, and src/bulk/worker.ts -> dist/worker.js (the bulk audit's worker, found next to
- * the CLI bundle). ES modules for Node 20 and later; a createRequire banner lets bundled CommonJS code call
- * require(). The output is deterministic: no timestamps, no absolute paths, no licence comments.
+ * src/cli/main.ts -> dist/cli.js, src/bulk/worker.ts -> dist/worker.js (the bulk audit's worker, found next to
+ * the CLI bundle) and src/audit/index-worker.ts -> dist/index-worker.js (the registry index's worker). ES
+ * modules for Node 20 and later; a createRequire banner lets bundled CommonJS code call require(). The output
+ * is deterministic: no timestamps, no absolute paths, no licence comments.
  *
  *   node scripts/bundle.mjs                 # write dist/
  *   node scripts/bundle.mjs --outdir DIR    # write elsewhere (the "dist is fresh" test compares the two)
@@ -20,6 +21,7 @@ export const ENTRIES = [
   { in: 'src/action/main.ts', out: 'index' },
   { in: 'src/cli/main.ts', out: 'cli' },
   { in: 'src/bulk/worker.ts', out: 'worker' },
+  { in: 'src/audit/index-worker.ts', out: 'index-worker' },
 ];
 
 const BANNER =

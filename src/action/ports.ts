@@ -4,7 +4,15 @@ import type { Annotation } from '../github/annotations.js';
 
 export interface Engine {
   /** `paths` undefined: every record; []: none. */
-  audit(options: { root: string; paths?: string[]; configFile?: string }): Promise<AuditResult>;
+  audit(options: {
+    root: string;
+    paths?: string[];
+    configFile?: string;
+    /** File keeping the registry's key index between runs (a review's cache). */
+    indexCache?: string;
+    /** Lines about the work done (the index and its cache) for the log. */
+    log?: (line: string) => void;
+  }): Promise<AuditResult>;
   /** The record folders the config names (relative to the registry root). */
   recordDirs(root: string, configFile: string | null): Promise<string[]>;
   renderMarkdown(result: AuditResult, options: { maxChars?: number; detailsUrl?: string }): string;

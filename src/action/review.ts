@@ -39,6 +39,8 @@ export async function review(
     root: settings.registryRoot,
     ...(chosen.paths === undefined ? {} : { paths: chosen.paths }),
     ...(settings.configFile === null ? {} : { configFile: settings.configFile }),
+    ...(settings.indexCache === null ? {} : { indexCache: settings.indexCache }),
+    log: (line) => runner.info(line),
   });
   const { errors, warnings, notes, waived } = result.summary;
   runner.info(

@@ -33,6 +33,11 @@ export interface ActionSettings {
   /** Absolute paths, or null when turned off (input set to ''). */
   sarifFile: string | null;
   reportFile: string | null;
+  /**
+   * File keeping the registry's key index between runs (input index-cache), or null for none: by default
+   * stereogate/index-cache.json in RUNNER_TEMP (none outside Actions); 'none' turns it off.
+   */
+  indexCache: string | null;
   apiUrl: string;
   /** Time limit, tries and longest wait for GitHub API requests (inputs api-timeout, api-tries, api-max-wait). */
   api: ApiLimits;
@@ -87,6 +92,7 @@ export function readSettings(input: InputReader, env: NodeJS.ProcessEnv): Action
     maxInlineComments: parseCount(input('max-inline-comments'), 'max-inline-comments', 10),
     sarifFile: optionalPath('sarif-file'),
     reportFile: optionalPath('report-file'),
+    indexCache: parseIndexCache(input('index-cache'), workspace, env.RUNNER_TEMP),
     apiUrl: env.GITHUB_API_URL || 'https://api.github.com',
     api: {
       timeoutMs: parseSeconds(input('api-timeout'), 'api-timeout', 30) * 1000,
@@ -112,6 +118,18 @@ export function parseRecordChoice(raw: string): RecordChoice {
     .map((p) => p.trim())
     .filter((p) => p !== '');
   return { kind: 'listed', paths };
+}
+
+/** The index-cache input: '' -> under RUNNER_TEMP (or none without it), 'none' -> none, else a path. */
+export function parseIndexCache(
+  raw: string,
+  workspace: string,
+  runnerTemp: string | undefined,
+): string | null {
+  const value = raw.trim();
+  if (value === 'none') return null;
+  if (value === '') return runnerTemp ? join(runnerTemp, 'stereogate', 'index-cache.json') : null;
+  return resolve(workspace, value);
 }
 
 export function parseFailOn(raw: string): FailOn {

@@ -118,6 +118,22 @@ describe('input parsers', () => {
   });
 });
 
+describe('index-cache', () => {
+  it("defaults to a file in the runner's temporary folder, none outside Actions; 'none' turns it off", () => {
+    const tmp = join(workspace, 'runner-temp');
+    expect(readSettings(inputs({}), { ...env, RUNNER_TEMP: tmp }).indexCache).toBe(
+      join(tmp, 'stereogate', 'index-cache.json'),
+    );
+    expect(readSettings(inputs({}), env).indexCache).toBeNull();
+    expect(
+      readSettings(inputs({ 'index-cache': 'none' }), { ...env, RUNNER_TEMP: tmp }).indexCache,
+    ).toBeNull();
+    expect(readSettings(inputs({ 'index-cache': '.cache/sg.json' }), env).indexCache).toBe(
+      join(workspace, '.cache/sg.json'),
+    );
+  });
+});
+
 describe('API limits', () => {
   it('reads api-timeout (seconds, decimals allowed), api-tries and api-max-wait, with defaults 30 s, 3, 90 s', () => {
     expect(readSettings(inputs({}), env).api).toEqual({ timeoutMs: 30_000, tries: 3, maxWaitMs: 90_000 });

@@ -14,6 +14,8 @@ import { defaultEngine } from '../../src/audit/engine.js';
 import { RECORD_BUDGET } from '../../src/audit/run.js';
 import { reviewAgainstIndex } from '../../src/audit/review-against-index.js';
 import { CHECKS } from '../../src/checks/index.js';
+import type { Io } from '../../src/cli/command.js';
+import { makeAuditCommand } from '../../src/cli/commands/audit.js';
 import { counts, demoCopy, indexReview, loadedReview, seen, type DemoCopy } from './index-review-support.js';
 
 let demo: DemoCopy | null = null;
@@ -242,6 +244,38 @@ describe('a review through the key index', () => {
     });
     expect(log[0]).toContain('2 worker(s)');
     expect(seen(pooled!)).toBe(await loadedReview(demo.root, paths));
+  });
+
+  it('the CLI: --index-cache keeps the cache, says what it did on standard error, prints the same report', async () => {
+    demo = demoCopy(true);
+    const paths = addRecords(demo);
+    const cache = join(demo.root, 'cache', 'index.json');
+    const runCli = async () => {
+      const out: string[] = [];
+      const err: string[] = [];
+      const io: Io = {
+        out: (t) => out.push(t),
+        err: (t) => err.push(t),
+        readFile: (p) => readFileSync(p, 'utf8'),
+        isFile: () => false,
+        readStdin: () => '',
+      };
+      const code = await makeAuditCommand().run(
+        [...paths, '--root', demo!.root, '--index-cache', cache, '--format', 'json', '--fail-on', 'never'],
+        io,
+      );
+      return { code, out: out.join(''), err: err.join('') };
+    };
+    const cold = await runCli();
+    expect(cold.err).toMatch(/0 from the cache; 54 read;.*cache written to/);
+    const warm = await runCli();
+    expect(warm.err).toMatch(/53 from the cache; 1 read;/);
+    expect(warm.out).toBe(cold.out);
+    expect(warm.code).toBe(0);
+    expect(ids(warm.out)).toContain('enantiomer-rotation-same-sign');
+    await expect(
+      makeAuditCommand().run([paths[0]!, '--root', demo.root, '--index-cache', ''], {} as Io),
+    ).rejects.toThrow(/--index-cache needs a file name/);
   });
 
   it('paths naming every record: the full audit, not a review', async () => {

@@ -29,7 +29,7 @@ export { EXIT_FINDINGS };
 const USAGE = [
   'Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]',
   '                        [--output FILE] [--fail-on error|warning|never] [--verbose]',
-  '                        [--record-timeout SECS] [--workers N] [--progress MODE]',
+  '                        [--record-timeout SECS] [--workers N] [--progress MODE] [--index-cache FILE]',
   '',
   '  paths…               record files, folders or molfiles to audit (default: every record); the whole',
   '                       registry is still loaded for the cross-record checks',
@@ -49,6 +49,9 @@ const USAGE = [
   '                       Through the workers the report is written as records come (same report)',
   '  --progress MODE      through the workers: auto (default: a bar on a terminal, lines in CI), bar, lines',
   '                       or none, on standard error',
+  '  --index-cache FILE   with paths: keep the key index of the rest of the registry in FILE between runs, so',
+  '                       that a later run reads only the record files whose content changed (default: no',
+  '                       cache; a missing, stale or damaged cache only costs time)',
   '',
   'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error or a report',
   'file that cannot be written, 3 internal error (the report is still written; records it hit carry an',
@@ -114,6 +117,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           'record-timeout': { type: 'string' },
           workers: { type: 'string' },
           progress: { type: 'string', choices: ['auto', 'bar', 'lines', 'none'], default: 'auto' },
+          'index-cache': { type: 'string' },
         },
         { min: 0, max: Infinity, names: 'paths' },
       );
@@ -127,6 +131,8 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       const timeout = values['record-timeout'];
       const seconds = typeof timeout === 'string' ? Number(timeout) : RECORD_BUDGET.timeMs / 1000;
       if (!(seconds > 0)) throw new UsageError('--record-timeout expects a positive number of seconds');
+      const indexCache = values['index-cache'] as string | undefined;
+      if (indexCache === '') throw new UsageError('--index-cache needs a file name');
       const workers = typeof values.workers === 'string' ? Number(values.workers) : undefined;
       if (workers !== undefined && (!Number.isInteger(workers) || workers < 0))
         throw new UsageError('--workers expects a whole number (0: this thread)');
@@ -166,6 +172,9 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           checks: deps.checks,
           engine: deps.engine,
           budget,
+          ...(indexCache === undefined
+            ? {}
+            : { indexCache: resolve(indexCache), log: (l: string) => io.err(l) }),
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);

@@ -18,6 +18,7 @@ export function actionSettings(workspace: string, over: Partial<ActionSettings> 
     maxInlineComments: 10,
     sarifFile: join(workspace, 'out', 'stereogate.sarif'),
     reportFile: join(workspace, 'out', 'report.md'),
+    indexCache: null,
     apiUrl: 'https://api.github.test',
     api: { timeoutMs: 5000, tries: 3, maxWaitMs: 90_000 },
     runUrl: 'https://github.test/larkspur/registry/actions/runs/1',
