@@ -42,13 +42,15 @@ export interface IndexBuildOptions {
   cachePath: string | null;
   /** Workers for reading; default one per core (at most 2) when at least MIN_FILES_FOR_WORKERS are read. */
   workers?: number;
+  /** git's blob ids (blob-ids.ts gitBlobIds), when the caller started asking git before listing the files. */
+  gitIds?: Promise<Map<string, string>>;
 }
 
 export class RecordIndex {
   /** One entry per file, in the order of the files. */
   readonly entries: IndexEntry[];
   private readonly unkept = new Set<IndexEntry>();
-  private readonly blobs: BlobIds;
+  private blobs!: BlobIds;
   private read = 0;
   private described = 0;
   private reused = 0;
@@ -57,7 +59,6 @@ export class RecordIndex {
 
   private constructor(private readonly opts: IndexBuildOptions) {
     this.entries = new Array<IndexEntry>(opts.files.length);
-    this.blobs = new BlobIds(gitBlobIds(opts.realRoot, opts.recordDirs), (rel) => join(opts.realRoot, rel));
   }
 
   /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */
@@ -76,23 +77,37 @@ export class RecordIndex {
   }
 
   private async fill(): Promise<void> {
+    const gitIds = this.opts.gitIds ?? gitBlobIds(this.opts.realRoot, this.opts.recordDirs);
+    // git works in its own processes while the cache is read here
     this.cache = this.useCache ? readIndexCache(this.opts.cachePath!, this.settings) : null;
-    const byPath = new Map<string, IndexEntry>();
-    const byBlob = new Map<string, IndexEntry>();
-    for (const e of this.cache?.entries ?? []) {
-      byPath.set(e.file, e);
-      if (e.molfiles.length === 0) byBlob.set(e.blob, e);
-    }
+    this.blobs = new BlobIds(await gitIds, (rel) => join(this.opts.realRoot, rel));
+    let cached = this.cache?.entries ?? [];
+    if (cached.some((e, i) => i > 0 && cached[i - 1]!.file >= e.file))
+      cached = [...cached].sort((x, y) => (x.file < y.file ? -1 : x.file > y.file ? 1 : 0));
+    // both lists are in file order (the cache is written so): walked side by side, no map of every path
+    let c = 0;
+    let byBlob: Map<string, IndexEntry> | null = null;
+    const movedFrom = (blob: string): IndexEntry | undefined => {
+      if (byBlob === null) {
+        byBlob = new Map();
+        for (const e of cached) if (e.molfiles.length === 0) byBlob.set(e.blob, e);
+      }
+      return byBlob.get(blob);
+    };
     const current = (e: IndexEntry) => e.molfiles.every(([path, blob]) => this.blobs.of(path) === blob);
     const toRead: number[] = [];
     this.opts.files.forEach((file, i) => {
+      while (c < cached.length && cached[c]!.file < file) c++;
       const blob = this.blobs.of(file);
-      const same = blob === null ? undefined : byPath.get(file);
-      // renamed (or copied) without change: the row is the file's content but for its path
-      const moved = blob === null ? undefined : byBlob.get(blob);
+      if (blob === null) return toRead.push(i);
+      const same = c < cached.length && cached[c]!.file === file ? cached[c] : undefined;
       if (same && same.blob === blob && current(same)) this.entries[i] = same;
-      else if (moved) this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
-      else return toRead.push(i);
+      else {
+        // renamed (or copied) without change: the row is the file's content but for its path
+        const moved = movedFrom(blob);
+        if (!moved) return toRead.push(i);
+        this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
+      }
       this.reused++;
     });
     await this.readFiles(toRead, false);

@@ -5,10 +5,10 @@
  * input) gets that one record read from disk. The findings are those of the review over the loaded registry
  * (runAudit with paths): the same rows in the same order, the same duplicate-id problems, the same lookups.
  */
-import { join } from 'node:path';
 import type { Budget } from '../chem/budget.js';
 import type { AuditConfig, CheckModule, RegistryEntry, RegistryView } from '../checks/types.js';
 import { findRecordFiles, relativeTo } from '../registry/files.js';
+import { gitBlobIds } from '../registry/blob-ids.js';
 import type { IndexEntry } from '../registry/index-cache.js';
 import { loadRecordFile, markDuplicateIds, refusedRecord } from '../registry/load.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -50,14 +50,12 @@ type Stub = SelectableRecord & { at: number | null; refused: string | null };
  * missing (the loaded audit says so), or `paths` name every record (a full audit).
  */
 export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditResult | null> {
+  // git lists its blob ids while the folders are walked and the cache is read
+  const gitIds = gitBlobIds(o.realRoot, o.config.recordDirs);
   const found = findRecordFiles(o.realRoot, o.config.recordDirs);
   if (found.missingDirs.length > 0) return null;
   const refused = found.refused.map((r): Stub => ({ file: r.file, at: null, refused: r.message }));
   const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
-  const absOf = new Map(files.map((f, i) => [f, found.files[i]!]));
-  // the files themselves name every record: a full audit, before any file is read
-  const plain = [...files.map((file): Stub => ({ file, at: null, refused: null })), ...refused];
-  if (selectRecords(plain, o.realRoot, o.paths).selected.size === plain.length) return null;
 
   const index = await RecordIndex.open({
     realRoot: o.realRoot,
@@ -68,16 +66,21 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
     axisOrthoMin: o.config.axisOrthoMin,
     budget: o.budget,
     cachePath: o.indexCache,
+    gitIds,
     ...(o.workers === undefined ? {} : { workers: o.workers }),
   });
   const entries = index.entries;
   // entries are replaced as they are keyed: a stub holds the place of its entry
-  const stubs: Stub[] = entries.map((entry, at) => ({
-    file: entry.file,
-    sources: { main: null, components: entry.molfiles.map(([file]) => ({ file })) },
-    at,
-    refused: null,
-  }));
+  const stubs: Stub[] = entries.map((entry, at) =>
+    entry.molfiles.length === 0
+      ? { file: entry.file, at, refused: null }
+      : {
+          file: entry.file,
+          sources: { main: null, components: entry.molfiles.map(([file]) => ({ file })) },
+          at,
+          refused: null,
+        },
+  );
   stubs.push(...refused);
   stubs.sort((a, b) => (a.file < b.file ? -1 : a.file > b.file ? 1 : 0));
   const sel = selectRecords(stubs, o.realRoot, o.paths);
@@ -93,7 +96,7 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
       s.file,
       s.refused !== null
         ? refusedRecord({ file: s.file, message: s.refused })
-        : loadRecordFile(o.realRoot, absOf.get(s.file)!),
+        : loadRecordFile(o.realRoot, found.files[s.at!]!),
     );
   }
   const toAudit = [...audited.values()];
@@ -105,9 +108,7 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
   );
   o.log?.(index.save());
   markDuplicateIdsAgainst(toAudit, entries, audited);
-  const view = indexView(entries, audited, structures, (e) =>
-    loadRecordFile(o.realRoot, absOf.get(e.file) ?? join(o.realRoot, e.file)),
-  );
+  const view = indexView(entries, audited, structures, (at) => loadRecordFile(o.realRoot, found.files[at]!));
   const result = auditRecords(toAudit, {
     checks: o.checks,
     config: o.config,
@@ -193,27 +194,30 @@ function indexView(
   entries: readonly IndexEntry[],
   audited: ReadonlyMap<string, LoadedRecord>,
   cache: StructureCache,
-  load: (e: IndexEntry) => LoadedRecord,
+  load: (at: number) => LoadedRecord,
 ): RegistryView {
-  const valid = entries.filter((e) => e.valid);
-  const firstById = new Map<string, IndexEntry>();
-  for (const e of valid) if (e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, e);
-  const entryFor = (e: IndexEntry): RegistryEntry | null =>
-    entryOf(audited.get(e.file) ?? load(e), cache, audited.has(e.file));
+  const firstById = new Map<string, number>();
+  entries.forEach((e, at) => {
+    if (e.valid && e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, at);
+  });
+  const entryAt = (at: number): RegistryEntry | null => {
+    const file = entries[at]!.file;
+    return entryOf(audited.get(file) ?? load(at), cache, audited.has(file));
+  };
   const seen = new Map<string, RegistryEntry | undefined>();
   let all: RegistryEntry[] | null = null;
   return {
     get entries(): readonly RegistryEntry[] {
-      all ??= valid.flatMap((e) => entryFor(e) ?? []);
+      all ??= entries.flatMap((e, at) => (e.valid ? (entryAt(at) ?? []) : []));
       return all;
     },
     byId(id: string): RegistryEntry | undefined {
       if (!seen.has(id)) {
-        const e = firstById.get(id);
-        seen.set(id, e ? (entryFor(e) ?? undefined) : undefined);
+        const at = firstById.get(id);
+        seen.set(id, at === undefined ? undefined : (entryAt(at) ?? undefined));
       }
       return seen.get(id);
     },
-    ids: () => valid.flatMap((e) => (e.row.id === null ? [] : [e.row.id])),
+    ids: () => entries.flatMap((e) => (e.valid && e.row.id !== null ? [e.row.id] : [])),
   };
 }

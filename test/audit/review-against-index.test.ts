@@ -281,7 +281,6 @@ describe('a review through the key index', () => {
   it('paths naming every record: the full audit, not a review', async () => {
     demo = demoCopy(true);
     const run = await indexReview(demo.root, ['compounds'], null);
-    expect(run.log).toEqual([]);
     expect(run.result.registry?.reason).toContain('every record with each record before it');
   });
 });

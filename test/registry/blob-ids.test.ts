@@ -39,7 +39,7 @@ describe('blob ids', () => {
     }
   });
 
-  it("come from git's index for clean tracked files only; modified, untracked, links and assume-unchanged are hashed", () => {
+  it("come from git's index for clean tracked files only; modified, untracked, links and assume-unchanged are hashed", async () => {
     reg = tmpRegistry({
       'compounds/a.yml': 'id: LX-00001\n',
       'compounds/b.yml': 'id: LX-00002\n',
@@ -54,7 +54,7 @@ describe('blob ids', () => {
     git(reg.root, 'update-index', '--assume-unchanged', 'compounds/c.yml');
     writeFileSync(join(reg.root, 'compounds/c.yml'), 'id: LX-00003\nname: changed too\n');
     writeFileSync(join(reg.root, 'compounds/new.yml'), 'id: LX-00005\n');
-    const known = gitBlobIds(reg.root, ['compounds']);
+    const known = await gitBlobIds(reg.root, ['compounds']);
     expect([...known.keys()]).toEqual(['compounds/a.yml']);
     expect(known.get('compounds/a.yml')).toBe(git(reg.root, 'rev-parse', 'HEAD:compounds/a.yml'));
     const ids = new BlobIds(known, (rel) => join(reg!.root, rel));
@@ -67,17 +67,17 @@ describe('blob ids', () => {
     expect(ids.hashedCount).toBe(5);
   });
 
-  it('a folder in a subfolder of the work tree: paths relative to that folder', () => {
+  it('a folder in a subfolder of the work tree: paths relative to that folder', async () => {
     reg = tmpRegistry({ 'registry/compounds/a.yml': 'id: LX-00001\n' });
     git(reg.root, 'init', '-q');
     git(reg.root, 'add', '-A');
     git(reg.root, 'commit', '-qm', 'registry');
-    const known = gitBlobIds(join(reg.root, 'registry'), ['compounds']);
+    const known = await gitBlobIds(join(reg.root, 'registry'), ['compounds']);
     expect([...known.keys()]).toEqual(['compounds/a.yml']);
   });
 
-  it('outside a git work tree: nothing from git, never an exception', () => {
+  it('outside a git work tree: nothing from git, never an exception', async () => {
     reg = tmpRegistry({ 'compounds/a.yml': 'id: LX-00001\n' });
-    expect(gitBlobIds(reg.root, ['compounds']).size).toBe(0);
+    expect((await gitBlobIds(reg.root, ['compounds'])).size).toBe(0);
   });
 });
