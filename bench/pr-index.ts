@@ -57,22 +57,30 @@ export async function benchPrIndex(ctx: BenchContext): Promise<void> {
     const log: string[] = [];
     const review = () =>
       runAudit({ root: dir, paths: [changed], indexCache: cache, log: (l) => log.push(l) });
-    const cold = await timeAsync(`PR review, index cold (no cache), ${n} records`, 1, review);
-    console.log(fmt(cold.timing));
-    console.log(`  ${log.pop()}`);
-    const warm = await timeAsync(`PR review, index warm (cache), ${n} records`, 1, review);
-    console.log(fmt(warm.timing));
-    console.log(`  ${log.pop()}`);
+    // CPU seconds of this process, worker threads included: on a shared machine wall time stretches, CPU less so
+    const measured = async (label: string) => {
+      const c0 = process.cpuUsage();
+      const run = await timeAsync(label, 1, review);
+      const c = process.cpuUsage(c0);
+      const cpu = (c.user + c.system) / 1e6;
+      console.log(`${fmt(run.timing)}  ${cpu.toFixed(2)} s CPU`);
+      console.log(`  ${log.pop()}`);
+      return { ...run, cpu };
+    };
+    const cold = await measured(`PR review, index cold (no cache), ${n} records`);
+    const warm = await measured(`PR review, index warm (cache), ${n} records`);
     const same = JSON.stringify(warm.value.records) === JSON.stringify(cold.value.records);
     const found = warm.value.records[0]?.findings.map((f) => f.messageId).join(', ') || 'none';
     console.log(`  findings of the changed record (warm = cold: ${same ? 'yes' : 'NO'}): ${found}`);
     const ratio = warm.timing.seconds / cold.timing.seconds;
-    console.log(`warm / cold: ${ratio.toFixed(3)} (${(1 / ratio).toFixed(1)}x faster warm)`);
-    const scale = 200_000 / n;
-    console.log(
-      `targets at 200,000: warm < 3 s (${n === 200_000 ? (warm.timing.seconds < 3 ? 'met' : 'NOT met') : `here ${warm.timing.seconds.toFixed(2)} s at ${n}; linear estimate ${(warm.timing.seconds * scale).toFixed(1)} s`}), ` +
-        `cold < 30 s (${n === 200_000 ? (cold.timing.seconds < 30 ? 'met' : 'NOT met') : `linear estimate ${(cold.timing.seconds * scale).toFixed(1)} s`})`,
-    );
+    console.log(`warm / cold: ${ratio.toFixed(3)} wall, ${(warm.cpu / cold.cpu).toFixed(3)} CPU`);
+    if (n === 200_000) {
+      const verdict = (s: number, t: number) => (s < t ? 'met' : 'NOT met');
+      console.log(
+        `targets at 200,000: warm < 3 s: ${verdict(warm.timing.seconds, 3)} (${warm.timing.seconds.toFixed(1)} s); ` +
+          `cold < 30 s: ${verdict(cold.timing.seconds, 30)} (${cold.timing.seconds.toFixed(1)} s)`,
+      );
+    } else console.log('the targets (warm < 3 s, cold < 30 s) are for BENCH_REGISTRY_RECORDS=200000');
     if (n > LOADED_BASELINE_MAX) {
       console.log(`(the review that loads every record is not run above ${LOADED_BASELINE_MAX} records)`);
       return;

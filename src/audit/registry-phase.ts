@@ -52,14 +52,13 @@ export class RegistryPhase {
   private readonly underReview = new Set<IndexRow>();
   /** Review mode: records of the registry filed, under review or not. */
   private registryRecords = 0;
+  /** The lookup keys of the records under review (review mode, set by `reviewing`): other keys are not filed. */
+  private reach: Set<string> | null = null;
 
   constructor(private readonly options: PhaseOptions) {
     this.index = new RegistryIndex(options.confirm);
     this.enabled = configuredSeverity(options.config, CHECK.id) !== 'off';
   }
-
-  /** The lookup keys of the records under review (review mode, set by `reviewing`): other keys are not filed. */
-  private reach: Set<string> | null = null;
 
   /**
    * Review mode, before any `file`: the records that will be under review. A record of the registry whose keys
