@@ -174,7 +174,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
           budget,
           ...(indexCache === undefined
             ? {}
-            : { indexCache: resolve(indexCache), log: (l: string) => io.err(l) }),
+            : { indexCache: resolve(indexCache), log: (l: string) => io.err(`stereogate: ${l}`) }),
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);
