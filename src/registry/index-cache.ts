@@ -39,7 +39,7 @@ export interface CacheSettings {
 }
 
 const FORMAT = 'stereogate registry index cache';
-const FORMAT_VERSION = 2;
+const FORMAT_VERSION = 3;
 
 type Stored = [
   file: string,
@@ -54,7 +54,7 @@ type Stored = [
   rotation: Rotation | null,
   keys: RecordKeys | null,
   lines: [number | null, number | null, number | null],
-  waiver: [string, string] | null,
+  waivers: IndexRowData['waivers'],
 ];
 
 export type CacheRead =
@@ -136,7 +136,7 @@ function storedOf(e: IndexEntry): Stored {
     r.rotation,
     r.keys,
     [r.lines.id, r.lines.structure, r.lines.rotation],
-    r.waiver ? [r.waiver.reason, r.waiver.approvedBy] : null,
+    r.waivers,
   ];
 }
 
@@ -154,6 +154,23 @@ function isRotation(v: unknown): v is Rotation {
     isOptNumber(r.temperature_c) &&
     isOptNumber(r.concentration) &&
     (r.solvent === undefined || isString(r.solvent))
+  );
+}
+
+const isOptString = (v: unknown) => v === undefined || isString(v);
+
+/** A waiver of the registry check as the row keeps it (keys.ts): the record's fields and its place in the list. */
+function isWaiver(v: unknown): boolean {
+  if (!v || typeof v !== 'object' || Array.isArray(v)) return false;
+  const w = v as Record<string, unknown>;
+  return (
+    isString(w.check) &&
+    Number.isInteger(w.index) &&
+    (w.index as number) >= 0 &&
+    isOptString(w.message_id) &&
+    isOptString(w.other_record) &&
+    isOptString(w.reason) &&
+    isOptString(w.approved_by)
   );
 }
 
@@ -180,7 +197,7 @@ function isKeys(v: unknown): v is RecordKeys {
 /** One stored entry back, or null when it is not of the stored shape (that file is then read again). */
 function entryOf(raw: unknown): IndexEntry | null {
   if (!Array.isArray(raw) || raw.length !== 13) return null;
-  const [file, blob, molfiles, valid, heavy, keyed, id, name, form, rotation, keys, lines, waiver] =
+  const [file, blob, molfiles, valid, heavy, keyed, id, name, form, rotation, keys, lines, waivers] =
     raw as unknown[];
   if (!isString(file) || file === '' || !isString(blob) || !/^[0-9a-f]{40}$/.test(blob)) return null;
   if (
@@ -196,8 +213,7 @@ function entryOf(raw: unknown): IndexEntry | null {
   if (rotation !== null && !isRotation(rotation)) return null;
   if (keys !== null && !isKeys(keys)) return null;
   if (!Array.isArray(lines) || lines.length !== 3 || !lines.every(isLine)) return null;
-  if (waiver !== null && !(Array.isArray(waiver) && waiver.length === 2 && waiver.every(isString)))
-    return null;
+  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
   const [idLine, structureLine, rotationLine] = lines as [number | null, number | null, number | null];
   return {
     file,
@@ -214,7 +230,7 @@ function entryOf(raw: unknown): IndexEntry | null {
       rotation: rotation as Rotation | null,
       keys: keys as RecordKeys | null,
       lines: { id: idLine, structure: structureLine, rotation: rotationLine },
-      waiver: waiver ? { reason: (waiver as string[])[0]!, approvedBy: (waiver as string[])[1]! } : null,
+      waivers: waivers as IndexRowData['waivers'],
     },
   };
 }
