@@ -3,7 +3,6 @@
  * own, the review as it was before the index (every record loaded, src/registry/load.ts), and the index review
  * through runAudit with its log kept.
  */
-import { execFileSync } from 'node:child_process';
 import { cpSync, mkdtempSync, realpathSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -16,6 +15,7 @@ import { CHECKS } from '../../src/checks/index.js';
 import { loadRegistry } from '../../src/registry/load.js';
 import { renderJson } from '../../src/report/json.js';
 import { renderMarkdown } from '../../src/report/markdown.js';
+import { tempRepo } from '../github/support/git.js';
 
 export const DEMO = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'fixtures', 'demo-registry');
 
@@ -27,28 +27,21 @@ export interface DemoCopy {
 
 /** The demo registry in a temporary folder; with `git`, committed as the first commit of a new repository. */
 export function demoCopy(withGit: boolean): DemoCopy {
+  if (withGit) {
+    const repo = tempRepo();
+    cpSync(DEMO, repo.dir, { recursive: true });
+    repo.commit('demo registry');
+    return { root: repo.dir, git: repo.git, remove: repo.dispose };
+  }
   const root = realpathSync(mkdtempSync(join(tmpdir(), 'stereogate-index-')));
   cpSync(DEMO, root, { recursive: true });
-  const git = (...args: string[]) =>
-    execFileSync(
-      'git',
-      [
-        '-c',
-        'user.name=Larkspur CI',
-        '-c',
-        'user.email=ci@larkspur.invalid',
-        '-c',
-        'commit.gpgsign=false',
-        ...args,
-      ],
-      { cwd: root, encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] },
-    );
-  if (withGit) {
-    git('init', '-q');
-    git('add', '-A');
-    git('commit', '-qm', 'demo registry');
-  }
-  return { root, git, remove: () => rmSync(root, { recursive: true, force: true }) };
+  return {
+    root,
+    git: () => {
+      throw new Error('not a git repository');
+    },
+    remove: () => rmSync(root, { recursive: true, force: true }),
+  };
 }
 
 /** What a person sees of a result: the JSON report and the Markdown checklist. */

@@ -2,64 +2,57 @@
  * Blob ids as git computes them (the reference is git itself: `git hash-object`, `git ls-files -s`), and which
  * files git's index may vouch for: clean tracked regular files only.
  */
-import { execFileSync } from 'node:child_process';
-import { symlinkSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { BlobIds, blobIdOf, gitBlobIds } from '../../src/registry/blob-ids.js';
-import { tmpRegistry, type TmpRegistry } from './tmp-registry.js';
+import { tempRepo, type TempRepo } from '../github/support/git.js';
 
-let reg: TmpRegistry | null = null;
+let repo: TempRepo | null = null;
 afterEach(() => {
-  reg?.remove();
-  reg = null;
+  repo?.dispose();
+  repo = null;
 });
 
-const git = (cwd: string, ...args: string[]) =>
-  execFileSync(
-    'git',
-    [
-      '-c',
-      'user.name=Larkspur CI',
-      '-c',
-      'user.email=ci@larkspur.invalid',
-      '-c',
-      'commit.gpgsign=false',
-      ...args,
-    ],
-    { cwd, encoding: 'utf8' },
-  ).trim();
+/** A git repository holding `files`, committed. */
+function committed(files: Record<string, string>): TempRepo {
+  repo = tempRepo();
+  repo.write(files);
+  repo.commit('registry');
+  return repo;
+}
 
 describe('blob ids', () => {
   it('equal git hash-object for text, empty and binary content', () => {
-    reg = tmpRegistry({ 'a.yml': 'id: LX-00001\n', 'empty.yml': '', 'bin.mol': Buffer.from([0, 1, 2, 255]) });
+    const r = committed({ 'a.yml': 'id: LX-00001\n', 'empty.yml': '' });
+    writeFileSync(join(r.dir, 'bin.mol'), Buffer.from([0, 1, 2, 255]));
     for (const f of ['a.yml', 'empty.yml', 'bin.mol']) {
-      const bytes = execFileSync('cat', [join(reg.root, f)]);
-      expect(blobIdOf(bytes), f).toBe(git(reg.root, 'hash-object', f));
+      expect(blobIdOf(readFileSync(join(r.dir, f))), f).toBe(r.git('hash-object', f).trim());
     }
   });
 
   it("come from git's index for clean tracked files only; modified, untracked, links and assume-unchanged are hashed", async () => {
-    reg = tmpRegistry({
+    repo = tempRepo();
+    const r = repo;
+    r.write({
       'compounds/a.yml': 'id: LX-00001\n',
       'compounds/b.yml': 'id: LX-00002\n',
       'compounds/c.yml': 'id: LX-00003\n',
       'other/d.yml': 'id: LX-00004\n',
     });
-    symlinkSync('a.yml', join(reg.root, 'compounds/link.yml'));
-    git(reg.root, 'init', '-q');
-    git(reg.root, 'add', '-A');
-    git(reg.root, 'commit', '-qm', 'registry');
-    writeFileSync(join(reg.root, 'compounds/b.yml'), 'id: LX-00002\nname: changed\n');
-    git(reg.root, 'update-index', '--assume-unchanged', 'compounds/c.yml');
-    writeFileSync(join(reg.root, 'compounds/c.yml'), 'id: LX-00003\nname: changed too\n');
-    writeFileSync(join(reg.root, 'compounds/new.yml'), 'id: LX-00005\n');
-    const known = await gitBlobIds(reg.root, ['compounds']);
+    symlinkSync('a.yml', join(r.dir, 'compounds/link.yml'));
+    r.commit('registry');
+    writeFileSync(join(r.dir, 'compounds/b.yml'), 'id: LX-00002\nname: changed\n');
+    r.git('update-index', '--assume-unchanged', 'compounds/c.yml');
+    writeFileSync(join(r.dir, 'compounds/c.yml'), 'id: LX-00003\nname: changed too\n');
+    writeFileSync(join(r.dir, 'compounds/new.yml'), 'id: LX-00005\n');
+    const known = await gitBlobIds(r.dir, ['compounds']);
     expect([...known.keys()]).toEqual(['compounds/a.yml']);
-    expect(known.get('compounds/a.yml')).toBe(git(reg.root, 'rev-parse', 'HEAD:compounds/a.yml'));
-    const ids = new BlobIds(known, (rel) => join(reg!.root, rel));
+    expect(known.get('compounds/a.yml')).toBe(r.git('rev-parse', 'HEAD:compounds/a.yml').trim());
+    const ids = new BlobIds(known, (rel) => join(r.dir, rel));
     for (const f of ['compounds/b.yml', 'compounds/c.yml', 'compounds/new.yml']) {
-      expect(ids.of(f), f).toBe(git(reg.root, 'hash-object', f));
+      expect(ids.of(f), f).toBe(r.git('hash-object', f).trim());
     }
     // the link's blob in git is its target path; the index wants the content it leads to
     expect(ids.of('compounds/link.yml')).toBe(ids.of('compounds/a.yml'));
@@ -68,16 +61,17 @@ describe('blob ids', () => {
   });
 
   it('a folder in a subfolder of the work tree: paths relative to that folder', async () => {
-    reg = tmpRegistry({ 'registry/compounds/a.yml': 'id: LX-00001\n' });
-    git(reg.root, 'init', '-q');
-    git(reg.root, 'add', '-A');
-    git(reg.root, 'commit', '-qm', 'registry');
-    const known = await gitBlobIds(join(reg.root, 'registry'), ['compounds']);
+    const r = committed({ 'registry/compounds/a.yml': 'id: LX-00001\n' });
+    const known = await gitBlobIds(join(r.dir, 'registry'), ['compounds']);
     expect([...known.keys()]).toEqual(['compounds/a.yml']);
   });
 
   it('outside a git work tree: nothing from git, never an exception', async () => {
-    reg = tmpRegistry({ 'compounds/a.yml': 'id: LX-00001\n' });
-    expect((await gitBlobIds(reg.root, ['compounds'])).size).toBe(0);
+    const dir = mkdtempSync(join(tmpdir(), 'stereogate-nogit-'));
+    try {
+      expect((await gitBlobIds(dir, ['compounds'])).size).toBe(0);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
