@@ -2,10 +2,12 @@
  * A review of some records (a pull request) against the registry's key index instead of every record loaded:
  * the records under review are loaded and audited in full; the rest of the registry is known by its rows of the
  * index (index-build.ts, cached by blob id), and a per-record check that looks a record up by id (an origin
- * input) gets that one record read from disk. The findings are those of the review over the loaded registry
- * (runAudit with paths): the same rows in the same order, the same duplicate-id problems, the same lookups.
+ * input) gets that one record read from disk. Only records with the heavy-atom formula of a record under review
+ * are described for their keys (index-keys.ts); no lookup can reach the others. The findings are those of the
+ * review over the loaded registry: the rows a lookup reaches are the same, in the same order, and so are the
+ * duplicate-id problems and the lookups by id (test/audit/review-against-index.test.ts compares the two).
  */
-import type { Budget } from '../chem/budget.js';
+import { withBudget, type Budget } from '../chem/budget.js';
 import type { AuditConfig, CheckModule, RegistryEntry, RegistryView } from '../checks/types.js';
 import { findRecordFiles, relativeTo } from '../registry/files.js';
 import { gitBlobIds } from '../registry/blob-ids.js';
@@ -13,7 +15,6 @@ import type { IndexEntry } from '../registry/index-cache.js';
 import { loadRecordFile, markDuplicateIds, refusedRecord } from '../registry/load.js';
 import type { LoadedRecord } from '../registry/types.js';
 import { heavyAtomCandidates, type AuditEngine } from './engine.js';
-import { withBudget } from '../chem/budget.js';
 import { RecordIndex } from './index-build.js';
 import { indexRow } from './index-row.js';
 import { auditRecords } from './run.js';
