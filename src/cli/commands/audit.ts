@@ -72,9 +72,7 @@ export function reachesThreshold(
 
 /** A record hit a fault of stereogate itself: the report is written, the exit code says it is incomplete. */
 export function hasInternalErrors(result: AuditResult): boolean {
-  return result.records.some((r) =>
-    r.findings.some(isInternalError),
-  );
+  return result.records.some((r) => r.findings.some(isInternalError));
 }
 
 /** Paths as typed: one that exists relative to the working folder is taken from there, else from the root. */
