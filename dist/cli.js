@@ -48,6 +48,15 @@ var __toESM = (mod, isNodeMode, target) => (target = mod != null ? __create(__ge
   mod
 ));
 
+// src/audit/caution.ts
+var CAUTION;
+var init_caution = __esm({
+  "src/audit/caution.ts"() {
+    "use strict";
+    CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
+  }
+});
+
 // src/chem/read/valence.ts
 function atomicNumberOf(symbol) {
   return NUMBER_OF.get(symbol);
@@ -818,11 +827,11 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
       parent[r] = -1;
       parentBond[r] = -1;
       branch[r] = r;
-      let head2 = 0;
+      let head = 0;
       let tail = 0;
       order[tail++] = r;
-      while (head2 < tail) {
-        const x = order[head2++];
+      while (head < tail) {
+        const x = order[head++];
         const dx = dist[x];
         if (dx >= depth) continue;
         const nb = g.nbrs[x];
@@ -1008,13 +1017,13 @@ function ringSizes(s, g, bridge) {
       dist = new Int32Array(n).fill(-1);
       queue = new Int32Array(n);
     }
-    let head2 = 0;
+    let head = 0;
     let tail = 0;
     dist[a] = 0;
     queue[tail++] = a;
     let found = 0;
-    while (head2 < tail && found === 0) {
-      const u = queue[head2++];
+    while (head < tail && found === 0) {
+      const u = queue[head++];
       const nb = g.nbrs[u];
       const bb = g.nbrBonds[u];
       for (let i = 0; i < nb.length; i++) {
@@ -2397,6 +2406,86 @@ var init_molfile_geometry = __esm({
   }
 });
 
+// src/chem/read/stereo-2d-axes.ts
+function wedgeZ(s, centre, k, aromatic = false) {
+  const b = s.bonds[k];
+  if (b.a !== centre || b.order !== 1 && !(aromatic && b.aromatic)) return 0;
+  return b.wedge === "up" ? 1 : b.wedge === "down" ? -1 : 0;
+}
+function biarylAxesFrom2d(s, adj, ring, warn2) {
+  const out = [];
+  const xy = (i) => {
+    const c = s.atoms[i].coords;
+    return [c[0], c[1]];
+  };
+  for (const [k, oa, ob] of biarylCandidates(s, adj, ring)) {
+    const bond = s.bonds[k];
+    const za = orthoLift(bond.a, oa);
+    const zb = orthoLift(bond.b, ob);
+    if (za === null || zb === null) {
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
+        bond.a
+      );
+      continue;
+    }
+    if (za[0] === 0 && zb[0] === 0) continue;
+    const [ax, ay] = xy(bond.a);
+    const [bx, by] = xy(bond.b);
+    const len = Math.hypot(bx - ax, by - ay) || 1;
+    const pts = [];
+    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
+      ([o, z]) => {
+        const p = xy(o);
+        pts.push([p[0], p[1], z * len]);
+      }
+    );
+    const vol = signedVolume(pts);
+    if (Math.abs(vol) / (len * len * len) < 0.01) {
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
+        bond.a
+      );
+      continue;
+    }
+    out.push({
+      kind: "axial",
+      subtype: "biaryl",
+      ends: [bond.a, bond.b],
+      ligands: [oa[0], oa[1], ob[0], ob[1]],
+      winding: windingOf(vol)
+    });
+  }
+  return out;
+  function orthoLift(end, orth) {
+    const z = orth.map((o) => {
+      let v = wedgeZ(s, end, adj.bnd[end][adj.nbr[end].indexOf(o)], true);
+      if (v === 0) {
+        for (let j = 0; j < adj.nbr[o].length; j++) {
+          const x = adj.nbr[o][j];
+          const bk = adj.bnd[o][j];
+          if (x === end || ring[bk]) continue;
+          const w = wedgeZ(s, o, bk);
+          if (w !== 0) v = w;
+        }
+      }
+      return v;
+    });
+    if (z[0] !== 0 && z[0] === z[1]) return null;
+    if (z[0] === 0 && z[1] !== 0) z[0] = -z[1];
+    else if (z[1] === 0 && z[0] !== 0) z[1] = -z[0];
+    return [z[0], z[1]];
+  }
+}
+var init_stereo_2d_axes = __esm({
+  "src/chem/read/stereo-2d-axes.ts"() {
+    "use strict";
+    init_molfile_geometry();
+  }
+});
+
 // src/chem/read/stereo-2d.ts
 function stereoFrom2d(s, adj, warnings, atomLines) {
   const out = objectList();
@@ -2417,11 +2506,6 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
   const xy = (i) => {
     const c = s.atoms[i].coords;
     return [c[0], c[1], 0];
-  };
-  const zFrom = (centre, k) => {
-    const b = s.bonds[k];
-    if (b.a !== centre || b.order !== 1) return 0;
-    return b.wedge === "up" ? 1 : b.wedge === "down" ? -1 : 0;
   };
   for (let c = 0; c < s.atoms.length; c++) {
     if (!wedgedFrom[c] || wavyAt[c]) continue;
@@ -2467,7 +2551,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
         return null;
       }
       flat.push(u);
-      zs.push(zFrom(c, adj.bnd[c][j]));
+      zs.push(wedgeZ(s, c, adj.bnd[c][j]));
     }
     const ligands = [...ns];
     if (fourth !== null) ligands.push(fourth);
@@ -2575,7 +2659,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     let lifted = false;
     for (const x of subs) {
       const k = adj.bnd[end][adj.nbr[end].indexOf(x)];
-      const z = zFrom(end, k);
+      const z = wedgeZ(s, end, k);
       if (z !== 0) lifted = true;
       const v = sub2(xy(x), pe);
       pts.push([pe[0] + v[0], pe[1] + v[1], z * Math.hypot(v[0], v[1])]);
@@ -2607,63 +2691,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const ligands = [a.ligands[0], a.ligands[1], b.ligands[0], b.ligands[1]];
     return { kind: "axial", subtype: "allene", ends, ligands, winding: windingOf(vol) };
   }
-  for (const [k, oa, ob] of biarylCandidates(s, adj, ring)) {
-    const bond = s.bonds[k];
-    const za = orthoLift(bond.a, oa);
-    const zb = orthoLift(bond.b, ob);
-    if (za === null || zb === null) {
-      warn2(
-        "stereo-ambiguous-wedge",
-        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
-        bond.a
-      );
-      continue;
-    }
-    if (za[0] === 0 && zb[0] === 0) continue;
-    const len = Math.hypot(...sub2(xy(bond.b), xy(bond.a))) || 1;
-    const pts = [];
-    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
-      ([o, z]) => {
-        const p = xy(o);
-        pts.push([p[0], p[1], z * len]);
-      }
-    );
-    const vol = signedVolume(pts);
-    if (Math.abs(vol) / (len * len * len) < 0.01) {
-      warn2(
-        "stereo-ambiguous-wedge",
-        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
-        bond.a
-      );
-      continue;
-    }
-    out.push({
-      kind: "axial",
-      subtype: "biaryl",
-      ends: [bond.a, bond.b],
-      ligands: [oa[0], oa[1], ob[0], ob[1]],
-      winding: windingOf(vol)
-    });
-  }
-  function orthoLift(end, orth) {
-    const z = orth.map((o) => {
-      let v = zFrom(end, adj.bnd[end][adj.nbr[end].indexOf(o)]);
-      if (v === 0) {
-        for (let j = 0; j < adj.nbr[o].length; j++) {
-          const x = adj.nbr[o][j];
-          const bk = adj.bnd[o][j];
-          if (x === end || ring[bk]) continue;
-          const w = zFrom(o, bk);
-          if (w !== 0) v = w;
-        }
-      }
-      return v;
-    });
-    if (z[0] !== 0 && z[0] === z[1]) return null;
-    if (z[0] === 0 && z[1] !== 0) z[0] = -z[1];
-    else if (z[1] === 0 && z[0] !== 0) z[1] = -z[0];
-    return [z[0], z[1]];
-  }
+  for (const axis of biarylAxesFrom2d(s, adj, ring, warn2)) out.push(axis);
   return out;
 }
 function sub2(a, b) {
@@ -2677,6 +2705,7 @@ var init_stereo_2d = __esm({
     init_types();
     init_graph();
     init_molfile_graph();
+    init_stereo_2d_axes();
     init_molfile_geometry();
     MIN_VOLUME = 0.01;
     MIN_STEREO_RING = 8;
@@ -2921,13 +2950,13 @@ var init_molfile_build = __esm({
 });
 
 // src/chem/read/molfile-fields.ts
-function intField(line, start, end) {
-  if (end > line.length) end = line.length;
+function intField(line2, start, end) {
+  if (end > line2.length) end = line2.length;
   let i = start;
-  while (i < end && line.charCodeAt(i) === 32) i++;
+  while (i < end && line2.charCodeAt(i) === 32) i++;
   if (i >= end) return 0;
   let sign = 1;
-  const c0 = line.charCodeAt(i);
+  const c0 = line2.charCodeAt(i);
   if (c0 === 45 || c0 === 43) {
     if (c0 === 45) sign = -1;
     i++;
@@ -2935,26 +2964,26 @@ function intField(line, start, end) {
   let value = 0;
   let digits = 0;
   for (; i < end; i++) {
-    const c = line.charCodeAt(i);
+    const c = line2.charCodeAt(i);
     if (c >= 48 && c <= 57) {
       value = value * 10 + (c - 48);
       digits++;
     } else if (c === 32) break;
     else return NaN;
   }
-  for (; i < end; i++) if (line.charCodeAt(i) !== 32) return NaN;
+  for (; i < end; i++) if (line2.charCodeAt(i) !== 32) return NaN;
   return digits === 0 ? NaN : sign * value;
 }
-function floatField(line, start, end) {
-  if (end > line.length) end = line.length;
+function floatField(line2, start, end) {
+  if (end > line2.length) end = line2.length;
   let i = start;
-  while (i < end && line.charCodeAt(i) === 32) i++;
+  while (i < end && line2.charCodeAt(i) === 32) i++;
   let j = end;
-  while (j > i && line.charCodeAt(j - 1) === 32) j--;
+  while (j > i && line2.charCodeAt(j - 1) === 32) j--;
   if (i >= j) return NaN;
   let k = i;
   let neg = false;
-  const c0 = line.charCodeAt(k);
+  const c0 = line2.charCodeAt(k);
   if (c0 === 45 || c0 === 43) {
     neg = c0 === 45;
     k++;
@@ -2964,28 +2993,28 @@ function floatField(line, start, end) {
   let digits = 0;
   let dot2 = false;
   for (; k < j; k++) {
-    const c = line.charCodeAt(k);
+    const c = line2.charCodeAt(k);
     if (c >= 48 && c <= 57) {
       mant = mant * 10 + (c - 48);
       if (dot2) scale *= 10;
       digits++;
     } else if (c === 46 && !dot2) dot2 = true;
-    else return Number(line.slice(i, j));
+    else return Number(line2.slice(i, j));
   }
-  if (digits === 0 || digits > 15) return Number(line.slice(i, j));
+  if (digits === 0 || digits > 15) return Number(line2.slice(i, j));
   const v = mant / scale;
   return neg ? -v : v;
 }
-function tokens(line) {
+function tokens(line2) {
   const out = [];
   let i = 0;
-  const n = line.length;
+  const n = line2.length;
   while (i < n) {
-    while (i < n && (line.charCodeAt(i) === 32 || line.charCodeAt(i) === 9)) i++;
+    while (i < n && (line2.charCodeAt(i) === 32 || line2.charCodeAt(i) === 9)) i++;
     if (i >= n) break;
     const s = i;
-    while (i < n && line.charCodeAt(i) !== 32 && line.charCodeAt(i) !== 9) i++;
-    out.push(line.slice(s, i));
+    while (i < n && line2.charCodeAt(i) !== 32 && line2.charCodeAt(i) !== 9) i++;
+    out.push(line2.slice(s, i));
   }
   return out;
 }
@@ -3043,20 +3072,20 @@ var init_molfile_fields = __esm({
 });
 
 // src/chem/read/molfile-bond.ts
-function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
+function makeBond(a, b, type, stereo, nAtoms, bondNo, line2, warnings) {
   if (a < 1 || a > nAtoms || b < 1 || b > nAtoms) {
     const bad2 = a < 1 || a > nAtoms ? a : b;
     return {
       code: "molfile-bond-atom-missing",
       message: `bond ${bondNo} refers to atom ${bad2}, but there are ${nAtoms} atoms`,
-      at: { line }
+      at: { line: line2 }
     };
   }
   if (a === b)
     return {
       code: "molfile-bond-to-itself",
       message: `bond ${bondNo} joins atom ${a} to itself`,
-      at: { line }
+      at: { line: line2 }
     };
   let order = 1;
   let aromatic = false;
@@ -3078,7 +3107,7 @@ function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
       warnings.push({
         code: "molfile-query-bond",
         message: `bond ${bondNo} has type ${type} (${type === 9 ? "coordination" : "query"} bond); read as a single bond`,
-        at: { line }
+        at: { line: line2 }
       });
       break;
     case 6:
@@ -3087,21 +3116,21 @@ function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
       warnings.push({
         code: "molfile-query-bond",
         message: `bond ${bondNo} has query type ${type}; read as aromatic`,
-        at: { line }
+        at: { line: line2 }
       });
       break;
     case 10:
       warnings.push({
         code: "molfile-hydrogen-bond",
         message: `bond ${bondNo} is a hydrogen bond (type 10); left out`,
-        at: { line }
+        at: { line: line2 }
       });
       return { bond: null };
     default:
       return {
         code: "molfile-bad-bond-type",
         message: `bond ${bondNo} has type ${type}; the format defines types 1-10`,
-        at: { line }
+        at: { line: line2 }
       };
   }
   let wedge = null;
@@ -3112,7 +3141,7 @@ function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
         warnings.push({
           code: "molfile-bad-bond-stereo",
           message: `double bond ${bondNo} has stereo code ${stereo}; only 0 and 3 apply to double bonds`,
-          at: { line }
+          at: { line: line2 }
         });
     } else if (order === 1) {
       if (stereo === 1) wedge = "up";
@@ -3122,13 +3151,13 @@ function makeBond(a, b, type, stereo, nAtoms, bondNo, line, warnings) {
         warnings.push({
           code: "molfile-bad-bond-stereo",
           message: `single bond ${bondNo} has stereo code ${stereo}; only 0, 1, 4 and 6 apply`,
-          at: { line }
+          at: { line: line2 }
         });
     } else {
       warnings.push({
         code: "molfile-bad-bond-stereo",
         message: `bond ${bondNo} of order ${order} carries a stereo mark; ignored`,
-        at: { line }
+        at: { line: line2 }
       });
     }
   }
@@ -3207,8 +3236,8 @@ var init_limits = __esm({
 });
 
 // src/chem/read/molfile-v3000.ts
-function fail(code, message, line) {
-  return { ok: false, error: { code, message, at: { line } } };
+function fail(code, message, line2) {
+  return { ok: false, error: { code, message, at: { line: line2 } } };
 }
 function v30Tokens(s) {
   const out = [];
@@ -3248,13 +3277,13 @@ function parseList(v) {
   if (parts.length === 0 || !parts.every(Number.isInteger) || parts[0] !== parts.length - 1) return null;
   return parts.slice(1);
 }
-function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
+function parseV3000(lines2, idx, end, firstLine, title, limits = READ_LIMITS) {
   const base = idx;
   const lineNo = (i) => firstLine + (i - base);
   const logical = [];
   let endLine = -1;
   for (let i = idx; i < end; i++) {
-    const l = lines[i];
+    const l = lines2[i];
     if (l.startsWith("M  END")) {
       endLine = i;
       break;
@@ -3270,14 +3299,14 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
     let text = l.slice(7);
     while (text.endsWith("-")) {
       i++;
-      if (i >= end || !lines[i].startsWith("M  V30")) {
+      if (i >= end || !lines2[i].startsWith("M  V30")) {
         return fail(
           "molfile-v3000-bad-continuation",
           'a V3000 line ends with "-" but no "M  V30" continuation line follows',
           lineNo(i)
         );
       }
-      text = text.slice(0, -1) + lines[i].slice(7);
+      text = text.slice(0, -1) + lines2[i].slice(7);
     }
     logical.push({ text: text.trim(), line: first });
   }
@@ -3301,40 +3330,40 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
   let expectBonds = -1;
   let countsLine = -1;
   let bondLines = 0;
-  for (const { text, line } of logical) {
+  for (const { text, line: line2 } of logical) {
     const t = v30Tokens(text);
-    const head2 = (t[0] ?? "").toUpperCase();
+    const head = (t[0] ?? "").toUpperCase();
     if (skipDepth > 0) {
-      if (head2 === "BEGIN") skipDepth++;
-      else if (head2 === "END") skipDepth--;
+      if (head === "BEGIN") skipDepth++;
+      else if (head === "END") skipDepth--;
       continue;
     }
-    if (head2 === "BEGIN") {
+    if (head === "BEGIN") {
       const what = (t[1] ?? "").toUpperCase();
       if (what === "CTAB") {
         if (inCtab || ctabDone)
           return fail(
             "molfile-v3000-unexpected",
             'a second "BEGIN CTAB" (only one connection table is read)',
-            line
+            line2
           );
         inCtab = true;
-        blockLine = line;
+        blockLine = line2;
       } else if (!inCtab) {
-        return fail("molfile-v3000-unexpected", `"BEGIN ${what}" outside the CTAB block`, line);
+        return fail("molfile-v3000-unexpected", `"BEGIN ${what}" outside the CTAB block`, line2);
       } else if (block2 !== null) {
         return fail(
           "molfile-v3000-block-not-closed",
           `"BEGIN ${what}" inside the ${block2} block opened at line ${blockLine}, which is not closed`,
-          line
+          line2
         );
       } else if (what === "ATOM" || what === "BOND" || what === "COLLECTION") {
         block2 = what;
-        blockLine = line;
+        blockLine = line2;
       } else skipDepth = 1;
       continue;
     }
-    if (head2 === "END") {
+    if (head === "END") {
       const what = (t[1] ?? "").toUpperCase();
       if (block2 !== null && what === block2) block2 = null;
       else if (block2 === null && inCtab && what === "CTAB") {
@@ -3344,41 +3373,41 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
         return fail(
           "molfile-v3000-block-not-closed",
           `"END ${what}" while the ${block2 ?? (inCtab ? "CTAB" : "no")} block is open (opened at line ${blockLine})`,
-          line
+          line2
         );
       }
       continue;
     }
     if (!inCtab) continue;
-    if (head2 === "COUNTS") {
+    if (head === "COUNTS") {
       expectAtoms = Number(t[1]);
       expectBonds = Number(t[2]);
       if (!Number.isInteger(expectAtoms) || !Number.isInteger(expectBonds) || expectAtoms < 0 || expectBonds < 0) {
         return fail(
           "molfile-bad-counts-line",
           `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`,
-          line
+          line2
         );
       }
       chiralFlag = t[5] === "1";
-      countsLine = line;
-      const large = tooManyAtoms(expectAtoms, limits, { line });
+      countsLine = line2;
+      const large = tooManyAtoms(expectAtoms, limits, { line: line2 });
       if (large !== null) return { ok: false, error: large };
       continue;
     }
     if (block2 === "ATOM") {
-      const r = readAtom(t, line, atoms.length, indexOf, warnings);
+      const r = readAtom(t, line2, atoms.length, indexOf, warnings);
       if ("code" in r) return { ok: false, error: r };
       atoms.push(r.atom);
       valences.push(r.valence);
-      atomLines.push(line);
+      atomLines.push(line2);
     } else if (block2 === "BOND") {
       bondLines++;
       if (t.length < 4)
         return fail(
           "molfile-bad-bond-line",
           `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`,
-          line
+          line2
         );
       const type = Number(t[1]);
       const a = indexOf.get(Number(t[2]));
@@ -3387,14 +3416,14 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
         return fail(
           "molfile-bond-atom-missing",
           `bond ${t[0]} refers to atom ${a === void 0 ? t[2] : t[3]}, which is not in the ATOM block`,
-          line
+          line2
         );
       }
       if (!Number.isInteger(type))
-        return fail("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line);
+        return fail("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line2);
       const cfg = Number(keyed(t, 4).get("CFG") ?? 0);
       const stereo = cfg === 1 ? 1 : cfg === 3 ? 6 : cfg === 2 ? type === 2 ? 3 : 4 : 0;
-      const r = makeBond(a + 1, b + 1, type, stereo, atoms.length, bonds.length + 1, line, warnings);
+      const r = makeBond(a + 1, b + 1, type, stereo, atoms.length, bonds.length + 1, line2, warnings);
       if ("code" in r) return { ok: false, error: r };
       if (r.bond === null) continue;
       const key3 = Math.min(a, b) * 1000003 + Math.max(a, b);
@@ -3402,7 +3431,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
         return fail(
           "molfile-duplicate-bond",
           `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`,
-          line
+          line2
         );
       seenBonds.add(key3);
       bonds.push(r.bond);
@@ -3412,7 +3441,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       if (m === null) continue;
       const list = parseList(keyed(t, 1).get("ATOMS") ?? "");
       if (list === null)
-        return fail("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
+        return fail("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line2);
       const members = [];
       for (const n of list) {
         const ai = indexOf.get(n);
@@ -3420,7 +3449,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
           return fail(
             "molfile-bad-collection",
             `collection ${t[0]} names atom ${n}, which is not in the ATOM block`,
-            line
+            line2
           );
         members.push(ai);
       }
@@ -3459,24 +3488,24 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
   }
   return finishMolecule({ atoms, bonds, valences, atomLines, groups, chiralFlag, title, warnings });
 }
-function readAtom(tokens2, line, position, indexOf, warnings) {
+function readAtom(tokens2, line2, position, indexOf, warnings) {
   let t = tokens2;
   if ((t[1] ?? "").toUpperCase() === "NOT" && t.length > 2) t = [t[0], `NOT ${t[2]}`, ...t.slice(3)];
   if (t.length < 6)
     return {
       code: "molfile-atom-line-short",
       message: `a V3000 atom line needs index, type, x, y, z and map, found ${t.length} fields`,
-      at: { line }
+      at: { line: line2 }
     };
   const index = Number(t[0]);
   if (!Number.isInteger(index) || index < 1)
     return {
       code: "molfile-bad-atom-line",
       message: `atom index "${t[0]}" is not a positive integer`,
-      at: { line }
+      at: { line: line2 }
     };
   if (indexOf.has(index))
-    return { code: "molfile-bad-atom-line", message: `atom index ${index} appears twice`, at: { line } };
+    return { code: "molfile-bad-atom-line", message: `atom index ${index} appears twice`, at: { line: line2 } };
   const x = Number(t[2]);
   const y = Number(t[3]);
   const z = Number(t[4]);
@@ -3484,7 +3513,7 @@ function readAtom(tokens2, line, position, indexOf, warnings) {
     return {
       code: "molfile-bad-coordinate",
       message: `atom ${index}: the coordinates "${t[2]} ${t[3]} ${t[4]}" are not numbers`,
-      at: { line }
+      at: { line: line2 }
     };
   }
   let sym = t[1];
@@ -3495,7 +3524,7 @@ function readAtom(tokens2, line, position, indexOf, warnings) {
     return {
       code: "molfile-unknown-element",
       message: `atom ${index}: "${sym}" is not an element symbol or a known query/R-group symbol`,
-      at: { line }
+      at: { line: line2 }
     };
   const map = Number(t[5]);
   const kv = keyed(t, 6);
@@ -3507,7 +3536,7 @@ function readAtom(tokens2, line, position, indexOf, warnings) {
       warnings.push({
         code: "molfile-bad-atom-property",
         message: `atom ${index}: ${k}=${v} is not an integer; ignored`,
-        at: { line }
+        at: { line: line2 }
       });
       return 0;
     }
@@ -3521,7 +3550,7 @@ function readAtom(tokens2, line, position, indexOf, warnings) {
     warnings.push({
       code: "molfile-atom-index-out-of-order",
       message: `atom index ${index} is at position ${position + 1}; atoms are numbered by position`,
-      at: { line }
+      at: { line: line2 }
     });
   }
   indexOf.set(index, position);
@@ -3555,24 +3584,24 @@ var init_molfile_v3000 = __esm({
 
 // src/chem/read/molfile.ts
 function splitLines(text) {
-  const lines = text.split("\n");
-  for (let i = 0; i < lines.length; i++) {
-    const l = lines[i];
-    if (l.length > 0 && l.charCodeAt(l.length - 1) === 13) lines[i] = l.slice(0, -1);
+  const lines2 = text.split("\n");
+  for (let i = 0; i < lines2.length; i++) {
+    const l = lines2[i];
+    if (l.length > 0 && l.charCodeAt(l.length - 1) === 13) lines2[i] = l.slice(0, -1);
   }
-  if (lines.length > 0 && lines[lines.length - 1] === "") lines.pop();
-  return lines;
+  if (lines2.length > 0 && lines2[lines2.length - 1] === "") lines2.pop();
+  return lines2;
 }
 function parseMolfile(text, opts) {
-  const lines = splitLines(text);
-  return parseMolfileLines(lines, 0, lines.length, opts?.firstLine ?? 1, opts?.limits);
+  const lines2 = splitLines(text);
+  return parseMolfileLines(lines2, 0, lines2.length, opts?.firstLine ?? 1, opts?.limits);
 }
-function fail2(code, message, line) {
-  return { ok: false, error: { code, message, at: { line } } };
+function fail2(code, message, line2) {
+  return { ok: false, error: { code, message, at: { line: line2 } } };
 }
-function shortHeader(lines, start, end) {
+function shortHeader(lines2, start, end) {
   for (let i = start + 1; i < start + 3 && i < end; i++) {
-    const l = lines[i];
+    const l = lines2[i];
     if (/V[23]000\s*$/.test(l) && DIGITS.test(l.slice(0, 3).trim()) && DIGITS.test(l.slice(3, 6).trim()))
       return i;
   }
@@ -3586,7 +3615,7 @@ function headerShort(early, start, lineNo) {
     lineNo(early)
   );
 }
-function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
+function parseMolfileLines(lines2, start, end, firstLine, limits = READ_LIMITS) {
   const lineNo = (idx2) => firstLine + (idx2 - start);
   if (end - start < 4) {
     return fail2(
@@ -3595,9 +3624,9 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
       lineNo(end)
     );
   }
-  const title = lines[start].trim() || null;
-  const counts = lines[start + 3];
-  if (counts.includes("V3000")) return parseV3000(lines, start + 4, end, firstLine + 4, title, limits);
+  const title = lines2[start].trim() || null;
+  const counts = lines2[start + 3];
+  if (counts.includes("V3000")) return parseV3000(lines2, start + 4, end, firstLine + 4, title, limits);
   let nAtoms = intField(counts, 0, 3);
   let nBonds = intField(counts, 3, 6);
   let nLists = intField(counts, 6, 9);
@@ -3608,7 +3637,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
     const a = t.length >= 2 && DIGITS.test(t[0]) ? Number(t[0]) : NaN;
     const b = t.length >= 2 && DIGITS.test(t[1]) ? Number(t[1]) : NaN;
     if (!Number.isInteger(a) || !Number.isInteger(b) || a < 0 || b < 0) {
-      const early = shortHeader(lines, start, end);
+      const early = shortHeader(lines2, start, end);
       if (early >= 0) {
         return headerShort(early, start, lineNo);
       }
@@ -3632,7 +3661,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
   const large = tooManyAtoms(nAtoms, limits, { line: lineNo(start + 3) });
   if (large !== null) return { ok: false, error: large };
   if (nAtoms === 0) {
-    const early = shortHeader(lines, start, end);
+    const early = shortHeader(lines2, start, end);
     return early >= 0 ? headerShort(early, start, lineNo) : fail2(
       "molfile-no-atoms",
       "the counts line gives 0 atoms: there is no structure to check",
@@ -3651,28 +3680,28 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
         lineNo(idx)
       );
     }
-    const line = lines[idx];
-    let x = floatField(line, 0, 10);
-    let y = floatField(line, 10, 20);
-    let z = floatField(line, 20, 30);
-    let sym = line.length >= 32 ? line.slice(31, 34).trim() : "";
+    const line2 = lines2[idx];
+    let x = floatField(line2, 0, 10);
+    let y = floatField(line2, 10, 20);
+    let z = floatField(line2, 20, 30);
+    let sym = line2.length >= 32 ? line2.slice(31, 34).trim() : "";
     let free = null;
     if (Number.isNaN(x) || Number.isNaN(y) || Number.isNaN(z) || sym === "") {
-      free = tokens(line);
+      free = tokens(line2);
       const fx = Number(free[0]);
       const fy = Number(free[1]);
       const fz = Number(free[2]);
       if (free.length < 4 || !Number.isFinite(fx) || !Number.isFinite(fy) || !Number.isFinite(fz)) {
-        if (line.length < 32 && free.length < 4) {
+        if (line2.length < 32 && free.length < 4) {
           return fail2(
             "molfile-atom-line-short",
-            `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`,
+            `atom line ${i + 1} is too short (${line2.length} characters; coordinates and symbol need 34)`,
             lineNo(idx)
           );
         }
         return fail2(
           "molfile-bad-coordinate",
-          `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`,
+          `atom line ${i + 1}: the coordinates are not numbers ("${line2.slice(0, 30).trim()}")`,
           lineNo(idx)
         );
       }
@@ -3701,10 +3730,10 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
     let valence = 0;
     let map = 0;
     if (free === null) {
-      massDiff = intField(line, 34, 36);
-      chargeCode = intField(line, 36, 39);
-      valence = intField(line, 48, 51);
-      map = intField(line, 60, 63);
+      massDiff = intField(line2, 34, 36);
+      chargeCode = intField(line2, 36, 39);
+      valence = intField(line2, 48, 51);
+      map = intField(line2, 60, 63);
     } else {
       massDiff = Number(free[4] ?? 0);
       chargeCode = Number(free[5] ?? 0);
@@ -3763,13 +3792,13 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
         `the molfile ends after ${i} of its ${nBonds} bond lines`,
         lineNo(idx)
       );
-    const line = lines[idx];
-    let a = intField(line, 0, 3);
-    let b = intField(line, 3, 6);
-    let type = intField(line, 6, 9);
-    let stereo = intField(line, 9, 12);
-    if (line.length < 9 || Number.isNaN(a) || Number.isNaN(b) || Number.isNaN(type) || Number.isNaN(stereo)) {
-      const t = tokens(line);
+    const line2 = lines2[idx];
+    let a = intField(line2, 0, 3);
+    let b = intField(line2, 3, 6);
+    let type = intField(line2, 6, 9);
+    let stereo = intField(line2, 9, 12);
+    if (line2.length < 9 || Number.isNaN(a) || Number.isNaN(b) || Number.isNaN(type) || Number.isNaN(stereo)) {
+      const t = tokens(line2);
       a = Number(t[0]);
       b = Number(t[1]);
       type = Number(t[2]);
@@ -3777,7 +3806,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
       if (t.length < 3 || !Number.isInteger(a) || !Number.isInteger(b) || !Number.isInteger(type)) {
         return fail2(
           "molfile-bad-bond-line",
-          `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`,
+          `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line2.trim().slice(0, 30)}"`,
           lineNo(idx)
         );
       }
@@ -3807,11 +3836,11 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
     title,
     warnings
   };
-  const propError = readProperties(lines, idx, end, lineNo, raw2);
+  const propError = readProperties(lines2, idx, end, lineNo, raw2);
   if (propError !== null) return { ok: false, error: propError };
   return finishMolecule(raw2);
 }
-function readProperties(lines, idx, end, lineNo, raw2) {
+function readProperties(lines2, idx, end, lineNo, raw2) {
   const { atoms } = raw2;
   let chgSeen = false;
   let isoSeen = false;
@@ -3820,18 +3849,18 @@ function readProperties(lines, idx, end, lineNo, raw2) {
     if (!Number.isInteger(n) || n < 1 || n > atoms.length) {
       return {
         code: "molfile-bad-property",
-        message: `"${lines[i].slice(0, 6)}" line refers to atom "${s ?? ""}", which does not exist`,
+        message: `"${lines2[i].slice(0, 6)}" line refers to atom "${s ?? ""}", which does not exist`,
         at: { line: lineNo(i) }
       };
     }
     return n - 1;
   };
   for (; idx < end; idx++) {
-    const line = lines[idx];
-    const tag = line.slice(0, 6);
+    const line2 = lines2[idx];
+    const tag = line2.slice(0, 6);
     if (tag === "M  END") return null;
     if (tag === "M  CHG" || tag === "M  RAD" || tag === "M  ISO") {
-      const t = tokens(line);
+      const t = tokens(line2);
       const n = Number(t[2]);
       if (!Number.isInteger(n) || n < 0 || t.length < 3 + 2 * n) {
         return {
@@ -3868,7 +3897,7 @@ function readProperties(lines, idx, end, lineNo, raw2) {
         else atoms[ai].radical = v === 2 ? 1 : v === 1 || v === 3 ? 2 : 0;
       }
     } else if (tag === "M  ALS") {
-      const t = tokens(line);
+      const t = tokens(line2);
       const ai = atomRef(t[2], idx);
       if (typeof ai !== "number") return ai;
       const a = atoms[ai];
@@ -3877,9 +3906,9 @@ function readProperties(lines, idx, end, lineNo, raw2) {
     } else if (tag.startsWith("A  ") || tag.startsWith("G  ")) {
       idx++;
     } else if (tag === "S  SKP") {
-      const n = Number(tokens(line)[2]);
+      const n = Number(tokens(line2)[2]);
       if (Number.isInteger(n) && n > 0) idx += n;
-    } else if (line.startsWith("$$$$") || line.startsWith(">")) {
+    } else if (line2.startsWith("$$$$") || line2.startsWith(">")) {
       return {
         code: "molfile-missing-end",
         message: 'the molfile has no "M  END" line before this line',
@@ -3908,30 +3937,162 @@ var init_molfile = __esm({
   }
 });
 
-// src/chem/read/cxsmiles.ts
-function isDigit(c) {
-  return c >= 48 && c <= 57;
-}
+// src/chem/read/cxsmiles-drawing.ts
 function fail3(code, message, offset) {
   return { ok: false, error: { code, message, at: { offset } } };
 }
-function readIndex(s, at2, atomCount, code) {
+function isDigit(c) {
+  return c >= 48 && c <= 57;
+}
+function readCoordinates(s, start, atomCount) {
+  const close2 = s.indexOf(")", start + 1);
+  if (close2 < 0) return fail3("cxsmiles-bad-coordinates", "coordinate block is not closed with ')'", start);
+  const body = s.slice(start + 1, close2);
+  const entries = body.split(";");
+  if (entries.length === atomCount + 1 && entries[atomCount] === "") entries.pop();
+  if (entries.length !== atomCount)
+    return fail3(
+      "cxsmiles-bad-coordinates",
+      `coordinate block lists ${entries.length} atoms; the SMILES has ${atomCount}`,
+      start
+    );
+  const coords = [];
+  let at2 = start + 1;
+  for (const entry of entries) {
+    const parts = entry.split(",");
+    if (parts.length > 3)
+      return fail3("cxsmiles-bad-coordinates", `coordinate '${entry}' has more than three numbers`, at2);
+    const xyz = [0, 0, 0];
+    for (let d = 0; d < parts.length; d++) {
+      const t = parts[d].trim();
+      const v = t === "" ? 0 : Number(t);
+      if (!Number.isFinite(v)) return fail3("cxsmiles-bad-coordinates", `'${t}' is not a number`, at2);
+      xyz[d] = v;
+    }
+    coords.push(xyz);
+    at2 += entry.length + 1;
+  }
+  return { ok: true, coords, end: close2 + 1 };
+}
+function wedgeFieldAt(s, i) {
+  if (s.charCodeAt(i) !== 119) return -1;
+  const c = s.charCodeAt(i + 1);
+  if (c === 58) return i + 2;
+  if ((c === 85 || c === 68) && s.charCodeAt(i + 2) === 58) return i + 3;
+  return -1;
+}
+function readWedges(s, i, atomCount, bondCount, out) {
+  const c = s.charCodeAt(i + 1);
+  const wedge = c === 85 ? "up" : c === 68 ? "down" : "either";
+  let j = wedgeFieldAt(s, i);
+  for (; ; ) {
+    const atom = readIndex(s, j, atomCount, "cxsmiles-bad-wedge");
+    if ("ok" in atom) return atom;
+    if (s.charCodeAt(atom.end) !== 46)
+      return fail3("cxsmiles-bad-wedge", "expected '.' and a bond index after the atom index", atom.end);
+    const bond = readIndex(s, atom.end + 1, bondCount, "cxsmiles-bad-wedge", "bond");
+    if ("ok" in bond) return bond;
+    out.push({ atom: atom.v, bond: bond.v, wedge, offset: j });
+    j = bond.end;
+    if (s.charCodeAt(j) === 44 && isDigit(s.charCodeAt(j + 1))) {
+      j++;
+      continue;
+    }
+    return { ok: true, end: j };
+  }
+}
+function readIndex(s, at2, count4, code, what = "atom") {
   let v = 0;
   let j = at2;
   while (isDigit(s.charCodeAt(j)) && j - at2 < 9) v = v * 10 + s.charCodeAt(j++) - 48;
-  if (v >= atomCount)
-    return fail3(code, `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at2);
+  if (j === at2) return fail3(code, `expected ${what === "atom" ? "an atom" : "a bond"} index`, at2);
+  if (v >= count4)
+    return fail3(code, `${what} index ${v} is out of range (the SMILES has ${count4} ${what}s)`, at2);
   return { v, end: j };
 }
-function parseCxExtension(s, start, atomCount) {
+function applyDrawing(st, { coords, coordsAt, wedges }, atomOffset, warnings) {
+  const bonds = st.bonds.slice();
+  const wedged = new Uint8Array(bonds.length);
+  for (const w of wedges) {
+    const b = bonds[w.bond];
+    if (b.a !== w.atom && b.b !== w.atom)
+      return fail3("cxsmiles-bad-wedge", `atom ${w.atom} is not an end of bond ${w.bond}`, w.offset);
+    if (wedged[w.bond]) return fail3("cxsmiles-bad-wedge", `bond ${w.bond} is given two wedges`, w.offset);
+    wedged[w.bond] = 1;
+    bonds[w.bond] = newBond(w.atom, b.a === w.atom ? b.b : b.a, b.order, b.aromatic, w.wedge);
+  }
+  let dimension = 0;
+  let atoms = st.atoms;
+  if (coords !== null) {
+    if (coords.some((c) => c[2] !== 0)) {
+      warnings.push({
+        code: "cxsmiles-3d-coordinates",
+        message: "the CXSMILES gives 3D coordinates, which are not read; configurations come from the SMILES alone",
+        at: { offset: coordsAt }
+      });
+    } else if (coords.some((c) => c[0] !== coords[0][0] || c[1] !== coords[0][1])) {
+      dimension = 2;
+      atoms = st.atoms.map((a, i) => atomWith(a, { coords: coords[i] }));
+    }
+  }
+  const drawn = newStructure(
+    atoms,
+    bonds,
+    st.stereo,
+    st.groups,
+    st.chiralFlag,
+    st.title,
+    st.properties,
+    dimension
+  );
+  if (dimension === 2 && wedges.length > 0) {
+    const adj = adjacency(atoms.length, bonds);
+    const warn2 = (code, message, atom) => {
+      warnings.push({ code, message, at: { offset: atomOffset(atom) } });
+    };
+    const axes = biarylAxesFrom2d(drawn, adj, ringBonds(atoms.length, bonds, adj), warn2);
+    if (axes.length > 0) drawn.stereo = [...st.stereo, ...axes];
+  }
+  return drawn;
+}
+var init_cxsmiles_drawing = __esm({
+  "src/chem/read/cxsmiles-drawing.ts"() {
+    "use strict";
+    init_make();
+    init_molfile_graph();
+    init_stereo_2d_axes();
+  }
+});
+
+// src/chem/read/cxsmiles.ts
+function parseCxExtension(s, start, atomCount, bondCount) {
   const n = s.length;
   const groups = objectList();
   const radicals = /* @__PURE__ */ new Map();
+  let coords = null;
+  let coordsAt = -1;
+  const wedges = objectList();
   let i = start + 1;
   for (; ; ) {
     if (i >= n) return fail3("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
     const c = s.charCodeAt(i);
-    if (c === 124) return { ok: true, groups, radicals, end: i + 1 };
+    if (c === 124) return { ok: true, groups, radicals, coords, coordsAt, wedges, end: i + 1 };
+    if (c === 40) {
+      const r = readCoordinates(s, i, atomCount);
+      if (!r.ok) return r;
+      if (coords === null) {
+        coords = r.coords;
+        coordsAt = i;
+      }
+      i = r.end;
+      continue;
+    }
+    if (wedgeFieldAt(s, i) >= 0) {
+      const r = readWedges(s, i, atomCount, bondCount, wedges);
+      if (!r.ok) return r;
+      i = r.end;
+      continue;
+    }
     if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
       const count4 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
       let j2 = i + 3;
@@ -4030,6 +4191,7 @@ var init_cxsmiles = __esm({
   "src/chem/read/cxsmiles.ts"() {
     "use strict";
     init_make();
+    init_cxsmiles_drawing();
   }
 });
 
@@ -4171,7 +4333,7 @@ function augment(root, adj, match) {
   for (let i = 0; i < m; i++) base[i] = i;
   const queue = [root];
   used[root] = 1;
-  let head2 = 0;
+  let head = 0;
   const lca = (a0, b0) => {
     const seen = new Uint8Array(m);
     let a = a0;
@@ -4199,8 +4361,8 @@ function augment(root, adj, match) {
       v = parent[match[v]];
     }
   };
-  while (head2 < queue.length) {
-    const v = queue[head2++];
+  while (head < queue.length) {
+    const v = queue[head++];
     for (const to of adj[v]) {
       if (base[v] === base[to] || match[v] === to) continue;
       if (to === root || match[to] !== -1 && parent[match[to]] !== -1) {
@@ -5097,11 +5259,13 @@ function parse(text) {
   while (i < text.length && isSpace2(text.charCodeAt(i))) i++;
   let groups = null;
   let cxRadicals = null;
+  let cxDrawing = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
-    const cx = parseCxExtension(text, i, n);
+    const cx = parseCxExtension(text, i, n, m);
     if (!cx.ok) return cx;
     groups = cx.groups;
     if (cx.radicals.size > 0) cxRadicals = cx.radicals;
+    if (cx.coords !== null || cx.wedges.length > 0) cxDrawing = cx;
     i = cx.end;
   }
   const title = text.slice(i).trim();
@@ -5184,7 +5348,9 @@ function parse(text) {
     {},
     0
   );
-  return { ok: true, structure, warnings };
+  if (cxDrawing === null) return { ok: true, structure, warnings };
+  const drawn = applyDrawing(structure, cxDrawing, (a) => g.atoms[a].offset, warnings);
+  return "ok" in drawn ? drawn : { ok: true, structure: drawn, warnings };
 }
 function kekulizeGraph(g, order) {
   const n = g.atoms.length;
@@ -5303,6 +5469,7 @@ var init_smiles = __esm({
     "use strict";
     init_make();
     init_cxsmiles();
+    init_cxsmiles_drawing();
     init_kekulize();
     init_smiles_parse();
     init_smiles_stereo();
@@ -5322,41 +5489,82 @@ var init_smiles = __esm({
   }
 });
 
+// src/chem/read/sd-split.ts
+function lostSeparatorMessage(nextRecordLine) {
+  return `the record has no $$$$ line: the next record starts at line ${nextRecordLine} (its counts line follows this record's data); the two were read as separate records`;
+}
+function mergedRecordsMessage(secondEndLine) {
+  return `a second "M  END" at line ${secondEndLine} inside the record's data block: two records merged (a lost $$$$ line and header?); only the first structure was read`;
+}
+var COUNTS_LINE, SdBoundaries, SD_HEADER_LINES;
+var init_sd_split = __esm({
+  "src/chem/read/sd-split.ts"() {
+    "use strict";
+    COUNTS_LINE = /^[ \d]{3}[ \d]{3}.*V[23]000\s*$/;
+    SdBoundaries = class {
+      afterEnd = false;
+      inValue = false;
+      lines = 0;
+      /** Line of a second `M  END` in the record's data block (two records merged), 0 when none. */
+      secondEnd = 0;
+      /** The kind of the next line of the file (`lineNo` 1-based); call `start()` after a separator or a cut. */
+      next(raw2, lineNo) {
+        if (raw2.startsWith("$$$$")) return "separator";
+        if (this.afterEnd && !this.inValue) {
+          if (COUNTS_LINE.test(raw2) && this.lines >= 3) return "next-record";
+          if (raw2.startsWith("M  END") && this.secondEnd === 0) this.secondEnd = lineNo;
+        }
+        if (!this.afterEnd && raw2.startsWith("M  END")) this.afterEnd = true;
+        else if (this.afterEnd) {
+          if (raw2.startsWith(">")) this.inValue = true;
+          else if (raw2.trim() === "") this.inValue = false;
+        }
+        this.lines++;
+        return "line";
+      }
+      /**
+       * A new record: after a separator (`header` = 0), or after a cut at a counts line (`header` = the 3 lines
+       * already read, which belong to the new record). Call `next` for the counts line again afterwards.
+       */
+      start(header = 0) {
+        this.afterEnd = false;
+        this.inValue = false;
+        this.secondEnd = 0;
+        this.lines = header;
+      }
+    };
+    SD_HEADER_LINES = 3;
+  }
+});
+
 // src/chem/read/sdf.ts
 function* readSdRecords(text) {
-  const lines = splitLines(text);
-  let start = 0;
-  let record2 = 0;
-  for (let i = 0; i <= lines.length; i++) {
-    if (i < lines.length && !lines[i].startsWith("$$$$")) continue;
-    if (!allBlank(lines, start, i)) {
-      record2++;
-      yield { record: record2, line: start + 1, result: readRecord(lines, start, i, start + 1, record2) };
-    }
-    start = i + 1;
-  }
+  const records = new SdRecordSplitter();
+  const lines2 = splitLines(text);
+  for (let i = 0; i < lines2.length; i++) yield* records.line(lines2[i], i + 1);
+  yield* records.end();
 }
-function allBlank(lines, start, end) {
-  for (let i = start; i < end; i++) if (lines[i].trim() !== "") return false;
+function allBlank(lines2, start, end) {
+  for (let i = start; i < end; i++) if (lines2[i].trim() !== "") return false;
   return true;
 }
-function readRecord(lines, start, end, firstLine, record2) {
+function readRecord(lines2, start, end, firstLine, record) {
   let mend = -1;
   for (let i2 = start; i2 < end; i2++) {
-    if (lines[i2].startsWith("M  END")) {
+    if (lines2[i2].startsWith("M  END")) {
       mend = i2;
       break;
     }
   }
   const molEnd = mend === -1 ? end : mend + 1;
-  const result2 = parseMolfileLines(lines, start, molEnd, firstLine);
-  const tag = (e) => ({ ...e, at: { ...e.at, record: record2 } });
+  const result2 = parseMolfileLines(lines2, start, molEnd, firstLine);
+  const tag = (e) => ({ ...e, at: { ...e.at, record } });
   if (!result2.ok) return { ok: false, error: tag(result2.error) };
   const props = {};
   const warnings = result2.warnings.map(tag);
   let i = molEnd;
   while (i < end) {
-    const l = lines[i];
+    const l = lines2[i];
     if (l.trim() === "") {
       i++;
       continue;
@@ -5376,7 +5584,7 @@ function readRecord(lines, start, end, firstLine, record2) {
     const at2 = firstLine + (i - start);
     i++;
     const value = [];
-    while (i < end && lines[i].trim() !== "") value.push(lines[i++]);
+    while (i < end && lines2[i].trim() !== "") value.push(lines2[i++]);
     if (name === null) {
       warnings.push(
         tag({
@@ -5409,19 +5617,64 @@ function fieldName(l) {
   if (close2 === -1) return null;
   return l.slice(open + 1, close2);
 }
+var SdRecordSplitter;
 var init_sdf = __esm({
   "src/chem/read/sdf.ts"() {
     "use strict";
     init_molfile();
+    init_sd_split();
+    SdRecordSplitter = class {
+      buf = [];
+      first = 1;
+      record = 0;
+      bounds = new SdBoundaries();
+      *line(l, lineNo) {
+        const kind = this.bounds.next(l, lineNo);
+        if (kind === "separator") {
+          yield* this.flush(null);
+          this.buf = [];
+          this.first = lineNo + 1;
+          this.bounds.start();
+          return;
+        }
+        if (kind === "next-record") {
+          const header = this.buf.splice(this.buf.length - SD_HEADER_LINES, SD_HEADER_LINES);
+          const cutAt = lineNo - SD_HEADER_LINES;
+          yield* this.flush({
+            code: "sdf-missing-separator",
+            message: lostSeparatorMessage(cutAt),
+            at: { line: cutAt }
+          });
+          this.buf = header;
+          this.first = cutAt;
+          this.bounds.start(SD_HEADER_LINES);
+          this.bounds.next(l, lineNo);
+        }
+        this.buf.push(l);
+      }
+      *end() {
+        yield* this.flush(null);
+      }
+      *flush(cut) {
+        if (allBlank(this.buf, 0, this.buf.length)) return;
+        this.record++;
+        const record = this.record;
+        let result2 = readRecord(this.buf, 0, this.buf.length, this.first, record);
+        const merged = this.bounds.secondEnd;
+        const problem = cut ?? (merged > 0 ? { code: "sdf-merged-records", message: mergedRecordsMessage(merged), at: { line: merged } } : null);
+        if (problem) result2 = { ok: false, error: { ...problem, at: { ...problem.at, record } } };
+        yield { record, line: this.first, result: result2 };
+      }
+    };
   }
 });
 
 // src/chem/read/index.ts
 function looksLikeMolfile(text) {
   if (text.includes("V3000")) return true;
-  const lines = splitLines(text.length > 4e3 ? text.slice(0, 4e3) : text);
-  if (lines.length < 4) return false;
-  const c = lines[3];
+  const lines2 = splitLines(text.length > 4e3 ? text.slice(0, 4e3) : text);
+  if (lines2.length < 4) return false;
+  const c = lines2[3];
   if (c.includes("V2000")) return true;
   const a = c.slice(0, 3).trim();
   const b = c.slice(3, 6).trim();
@@ -5862,8 +6115,8 @@ function writeSmilesWithOrder(s, opts = {}) {
       const idx = g.atoms.filter((a) => a >= 0 && a < s.atoms.length).map((a) => em.outIndex[a]);
       if (idx.length === 0) continue;
       idx.sort((a, b) => a - b);
-      const head2 = g.type === "abs" ? "a" : g.type === "and" ? `&${g.id}` : `o${g.id}`;
-      parts.push(`${head2}:${idx.join(",")}`);
+      const head = g.type === "abs" ? "a" : g.type === "and" ? `&${g.id}` : `o${g.id}`;
+      parts.push(`${head}:${idx.join(",")}`);
     }
   }
   if (parts.length > 0) smi += ` |${parts.join(",")}|`;
@@ -7760,7 +8013,7 @@ var init_compare = __esm({
       }
       sortAt(node, from, level2) {
         const base = this.sorted(node, from, level2 - 1);
-        if (!this.active[level2] || !anyTrue(base.tie)) return base;
+        if (!this.active[level2] || level2 === RULE_4B || !anyTrue(base.tie)) return base;
         const out = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
         for (let i = 0; i < out.nodes.length; ) {
           let j = i + 1;
@@ -28465,7 +28718,7 @@ Actelion Java MolfileCreator 2.0
   p(286, 1, {});
   var wit = M(286), Bl, _f;
   p(292, 1, {}, lp);
-  var HE, So, dr, vl = false, Br, $f, git = M(292);
+  var HE, So, dr, vl = false, Br, $f, git2 = M(292);
   p(49, 1, Cf, U8, Js, Kh, qT), U.c = false, U.d = 0;
   var dit = M(49);
   p(63, 197, { 197: 1, 63: 1, 4: 1 }, _D, np), U.Eb = function(e, A) {
@@ -32052,7 +32305,7 @@ function describe(input, opts = {}) {
     remarks: p.remarks.slice()
   };
   for (const u of unstatable) {
-    facts.remarks.push(unstatedRemark(u));
+    facts.remarks.push(unstatedRemark(u, s));
   }
   if (openAxes.length > 0) {
     facts.mirror = {
@@ -32133,11 +32386,31 @@ function cannotState(kind, dimension) {
   if (kind === "planar") return dimension !== 3;
   return dimension === 0 && (kind === "biaryl" || kind === "helix");
 }
-function unstatedRemark(u) {
+function unstatedRemark(u, s) {
   const [x, y] = u.atoms;
   const what = u.kind === "biaryl" ? `the bond between atoms ${x} and ${y} is a potential stereogenic axis (ortho-substituted biaryl, found by a rule of thumb on ortho substitution: common practice, no source)` : u.kind === "helix" ? `the ortho-fused rings ending at atoms ${x} and ${y} form a helix` : `the trans double bond between atoms ${x} and ${y} lies in a ring of 8–11 atoms and is twisted (planar chiral, as (E)-cyclooctene)`;
-  const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
+  if (u.kind === "biaryl") {
+    const wedge = wedgeNearAxis(s, x, y);
+    if (wedge !== null)
+      return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
+  }
+  const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
   return `${what}; the input format cannot state its configuration: ${then}`;
+}
+function wedgeNearAxis(s, x, y) {
+  const near = /* @__PURE__ */ new Set();
+  for (const b of s.bonds) {
+    const na = s.atoms[b.a].inputNumber;
+    const nb = s.atoms[b.b].inputNumber;
+    if (na === x || na === y) near.add(b.b);
+    if (nb === x || nb === y) near.add(b.a);
+  }
+  for (const b of s.bonds) {
+    if (b.wedge !== "up" && b.wedge !== "down") continue;
+    const na = s.atoms[b.a].inputNumber;
+    if (na === x || na === y || near.has(b.a)) return [na, s.atoms[b.b].inputNumber];
+  }
+  return null;
 }
 function mirrorFixed(g, h, x) {
   const perm = g.perms[h];
@@ -32761,6 +33034,180 @@ var init_chem = __esm({
   }
 });
 
+// src/registry/files.ts
+import {
+  closeSync,
+  constants,
+  fstatSync,
+  lstatSync,
+  openSync,
+  readdirSync,
+  readSync,
+  realpathSync,
+  statSync
+} from "node:fs";
+import { isAbsolute, join, relative, resolve, sep } from "node:path";
+function readRegularFile(abs) {
+  const fd = openSync(abs, OPEN_FLAGS);
+  try {
+    const st = fstatSync(fd);
+    if (!st.isFile()) return { ok: false, error: "is not a regular file" };
+    if (st.size > MAX_FILE_BYTES)
+      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
+    let buf = Buffer.allocUnsafe(st.size + 1);
+    let total = 0;
+    for (; ; ) {
+      if (total === buf.length) {
+        if (total > MAX_FILE_BYTES)
+          return {
+            ok: false,
+            error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+          };
+        const bigger = Buffer.allocUnsafe(buf.length * 2);
+        buf.copy(bigger, 0, 0, total);
+        buf = bigger;
+      }
+      const n = readSync(fd, buf, total, buf.length - total, null);
+      if (n === 0) break;
+      total += n;
+    }
+    if (total > MAX_FILE_BYTES)
+      return {
+        ok: false,
+        error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+      };
+    return { ok: true, bytes: buf.subarray(0, total) };
+  } finally {
+    closeSync(fd);
+  }
+}
+function readTextFile(abs) {
+  let bytes;
+  try {
+    const read = readRegularFile(abs);
+    if (!read.ok) return read;
+    bytes = read.bytes;
+  } catch (e) {
+    return { ok: false, error: `cannot be read (${e.code ?? String(e)})` };
+  }
+  if (bytes.includes(0)) return { ok: false, error: "is a binary file, not text" };
+  let text;
+  try {
+    text = UTF8.decode(bytes);
+  } catch {
+    return { ok: false, error: "is not valid UTF-8 text" };
+  }
+  return { ok: true, text: text.startsWith("\uFEFF") ? text.slice(1) : text };
+}
+function relativeTo(root, abs) {
+  if (abs.startsWith(root) && abs[root.length] === sep && !abs.includes(`${sep}.`) && !abs.endsWith(sep)) {
+    const rest = abs.slice(root.length + 1);
+    if (rest !== "" && !rest.includes(`${sep}${sep}`)) return sep === "/" ? rest : rest.split(sep).join("/");
+  }
+  return relative(root, abs).split(sep).join("/");
+}
+function escapes(root, abs) {
+  const rel = relative(root, abs);
+  return rel === ".." || rel.startsWith(`..${sep}`) || isAbsolute(rel);
+}
+function resolveInside(root, fromDir, path) {
+  if (isAbsolute(path) || /^[a-zA-Z]:[\\/]/.test(path) || path.startsWith("\\") || path.startsWith("~")) {
+    return { ok: false, error: `'${path}' is an absolute path; give a path relative to the record file` };
+  }
+  if (path.includes("\0")) return { ok: false, error: "the path contains a NUL character" };
+  const abs = resolve(fromDir, path);
+  if (escapes(root, abs)) return { ok: false, error: `'${path}' leaves the registry folder` };
+  let real;
+  try {
+    real = realpathSync(abs);
+  } catch {
+    return { ok: false, error: `'${path}' does not exist (looked for ${relativeTo(root, abs)})` };
+  }
+  if (escapes(root, real))
+    return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
+  return { ok: true, abs: real, rel: relativeTo(root, abs) };
+}
+function findRecordFiles(root, recordDirs) {
+  const found = /* @__PURE__ */ new Map();
+  const refused = [];
+  const missingDirs = [];
+  const visited = /* @__PURE__ */ new Set();
+  const walk = (dir, depth) => {
+    if (depth > 32) return;
+    let real;
+    try {
+      real = realpathSync(dir);
+    } catch {
+      return;
+    }
+    if (visited.has(real) || escapes(root, real)) return;
+    visited.add(real);
+    let dirents;
+    try {
+      dirents = readdirSync(dir, { withFileTypes: true }).sort(
+        (a, b) => a.name < b.name ? -1 : a.name > b.name ? 1 : 0
+      );
+    } catch {
+      return;
+    }
+    for (const dirent of dirents) {
+      const name = dirent.name;
+      if (name.startsWith(".") || name === "node_modules") continue;
+      const abs = join(dir, name);
+      let st = dirent;
+      if (!dirent.isDirectory() && !dirent.isFile() && !dirent.isSymbolicLink()) {
+        try {
+          st = lstatSync(abs);
+        } catch {
+          continue;
+        }
+      }
+      if (st.isSymbolicLink()) {
+        let target;
+        try {
+          target = realpathSync(abs);
+        } catch {
+          if (RECORD_EXTENSIONS.test(name))
+            refused.push({ file: relativeTo(root, abs), message: "is a broken link" });
+          continue;
+        }
+        if (escapes(root, target)) {
+          if (RECORD_EXTENSIONS.test(name)) {
+            refused.push({
+              file: relativeTo(root, abs),
+              message: "is a link to a place outside the registry folder"
+            });
+          }
+          continue;
+        }
+        st = statSync(abs);
+      }
+      if (st.isDirectory()) walk(abs, depth + 1);
+      else if (st.isFile() && RECORD_EXTENSIONS.test(name)) found.set(relativeTo(root, abs), abs);
+    }
+  };
+  for (const d of recordDirs) {
+    const r = resolveInside(root, root, d);
+    if (!r.ok) {
+      missingDirs.push(d);
+      continue;
+    }
+    walk(r.abs === root ? root : resolve(root, d), 0);
+  }
+  const files = [...found.entries()].sort(([a], [b]) => a < b ? -1 : a > b ? 1 : 0).map(([, abs]) => abs);
+  return { files, refused, missingDirs };
+}
+var MAX_FILE_BYTES, RECORD_EXTENSIONS, UTF8, OPEN_FLAGS;
+var init_files = __esm({
+  "src/registry/files.ts"() {
+    "use strict";
+    MAX_FILE_BYTES = 8 * 1024 * 1024;
+    RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
+    UTF8 = new TextDecoder("utf-8", { fatal: true });
+    OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
+  }
+});
+
 // node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
   "node_modules/yaml/dist/nodes/identity.js"(exports) {
@@ -33028,13 +33475,13 @@ var require_directives = __commonJS({
        * @param onError - May be called even if the action was successful
        * @returns `true` on success
        */
-      add(line, onError) {
+      add(line2, onError) {
         if (this.atNextDocument) {
           this.yaml = { explicit: _Directives.defaultYaml.explicit, version: "1.1" };
           this.tags = Object.assign({}, _Directives.defaultTags);
           this.atNextDocument = false;
         }
-        const parts = line.trim().split(/[ \t]+/);
+        const parts = line2.trim().split(/[ \t]+/);
         const name = parts.shift();
         switch (name) {
           case "%TAG": {
@@ -33120,7 +33567,7 @@ var require_directives = __commonJS({
         return tag[0] === "!" ? tag : `!<${tag}>`;
       }
       toString(doc) {
-        const lines = this.yaml.explicit ? [`%YAML ${this.yaml.version || "1.2"}`] : [];
+        const lines2 = this.yaml.explicit ? [`%YAML ${this.yaml.version || "1.2"}`] : [];
         const tagEntries = Object.entries(this.tags);
         let tagNames;
         if (doc && tagEntries.length > 0 && identity.isNode(doc.contents)) {
@@ -33136,9 +33583,9 @@ var require_directives = __commonJS({
           if (handle === "!!" && prefix === "tag:yaml.org,2002:")
             continue;
           if (!doc || tagNames.some((tn) => tn.startsWith(prefix)))
-            lines.push(`%TAG ${handle} ${prefix}`);
+            lines2.push(`%TAG ${handle} ${prefix}`);
         }
-        return lines.join("\n");
+        return lines2.join("\n");
       }
     };
     Directives.defaultYaml = { explicit: false, version: "1.2" };
@@ -34599,22 +35046,22 @@ var require_stringifyCollection = __commonJS({
       const { indent, options: { commentString } } = ctx;
       const itemCtx = Object.assign({}, ctx, { indent: itemIndent, type: null });
       let chompKeep = false;
-      const lines = [];
+      const lines2 = [];
       for (let i = 0; i < items.length; ++i) {
         const item = items[i];
         let comment2 = null;
         if (identity.isNode(item)) {
           if (!chompKeep && item.spaceBefore)
-            lines.push("");
-          addCommentBefore(ctx, lines, item.commentBefore, chompKeep);
+            lines2.push("");
+          addCommentBefore(ctx, lines2, item.commentBefore, chompKeep);
           if (item.comment)
             comment2 = item.comment;
         } else if (identity.isPair(item)) {
           const ik = identity.isNode(item.key) ? item.key : null;
           if (ik) {
             if (!chompKeep && ik.spaceBefore)
-              lines.push("");
-            addCommentBefore(ctx, lines, ik.commentBefore, chompKeep);
+              lines2.push("");
+            addCommentBefore(ctx, lines2, ik.commentBefore, chompKeep);
           }
         }
         chompKeep = false;
@@ -34623,17 +35070,17 @@ var require_stringifyCollection = __commonJS({
           str2 += stringifyComment.lineComment(str2, itemIndent, commentString(comment2));
         if (chompKeep && comment2)
           chompKeep = false;
-        lines.push(blockItemPrefix + str2);
+        lines2.push(blockItemPrefix + str2);
       }
       let str;
-      if (lines.length === 0) {
+      if (lines2.length === 0) {
         str = flowChars.start + flowChars.end;
       } else {
-        str = lines[0];
-        for (let i = 1; i < lines.length; ++i) {
-          const line = lines[i];
-          str += line ? `
-${indent}${line}` : "\n";
+        str = lines2[0];
+        for (let i = 1; i < lines2.length; ++i) {
+          const line2 = lines2[i];
+          str += line2 ? `
+${indent}${line2}` : "\n";
         }
       }
       if (comment) {
@@ -34654,22 +35101,22 @@ ${indent}${line}` : "\n";
       });
       let reqNewline = false;
       let linesAtValue = 0;
-      const lines = [];
+      const lines2 = [];
       for (let i = 0; i < items.length; ++i) {
         const item = items[i];
         let comment = null;
         if (identity.isNode(item)) {
           if (item.spaceBefore)
-            lines.push("");
-          addCommentBefore(ctx, lines, item.commentBefore, false);
+            lines2.push("");
+          addCommentBefore(ctx, lines2, item.commentBefore, false);
           if (item.comment)
             comment = item.comment;
         } else if (identity.isPair(item)) {
           const ik = identity.isNode(item.key) ? item.key : null;
           if (ik) {
             if (ik.spaceBefore)
-              lines.push("");
-            addCommentBefore(ctx, lines, ik.commentBefore, false);
+              lines2.push("");
+            addCommentBefore(ctx, lines2, ik.commentBefore, false);
             if (ik.comment)
               reqNewline = true;
           }
@@ -34686,12 +35133,12 @@ ${indent}${line}` : "\n";
         if (comment)
           reqNewline = true;
         let str = stringify.stringify(item, itemCtx, () => comment = null);
-        reqNewline || (reqNewline = lines.length > linesAtValue || str.includes("\n"));
+        reqNewline || (reqNewline = lines2.length > linesAtValue || str.includes("\n"));
         if (i < items.length - 1) {
           str += ",";
         } else if (ctx.options.trailingComma) {
           if (ctx.options.lineWidth > 0) {
-            reqNewline || (reqNewline = lines.reduce((sum, line) => sum + line.length + 2, 2) + (str.length + 2) > ctx.options.lineWidth);
+            reqNewline || (reqNewline = lines2.reduce((sum, line2) => sum + line2.length + 2, 2) + (str.length + 2) > ctx.options.lineWidth);
           }
           if (reqNewline) {
             str += ",";
@@ -34699,35 +35146,35 @@ ${indent}${line}` : "\n";
         }
         if (comment)
           str += stringifyComment.lineComment(str, itemIndent, commentString(comment));
-        lines.push(str);
-        linesAtValue = lines.length;
+        lines2.push(str);
+        linesAtValue = lines2.length;
       }
       const { start, end } = flowChars;
-      if (lines.length === 0) {
+      if (lines2.length === 0) {
         return start + end;
       } else {
         if (!reqNewline) {
-          const len = lines.reduce((sum, line) => sum + line.length + 2, 2);
+          const len = lines2.reduce((sum, line2) => sum + line2.length + 2, 2);
           reqNewline = ctx.options.lineWidth > 0 && len > ctx.options.lineWidth;
         }
         if (reqNewline) {
           let str = start;
-          for (const line of lines)
-            str += line ? `
-${indentStep}${indent}${line}` : "\n";
+          for (const line2 of lines2)
+            str += line2 ? `
+${indentStep}${indent}${line2}` : "\n";
           return `${str}
 ${indent}${end}`;
         } else {
-          return `${start}${fcPadding}${lines.join(" ")}${fcPadding}${end}`;
+          return `${start}${fcPadding}${lines2.join(" ")}${fcPadding}${end}`;
         }
       }
     }
-    function addCommentBefore({ indent, options: { commentString } }, lines, comment, chompKeep) {
+    function addCommentBefore({ indent, options: { commentString } }, lines2, comment, chompKeep) {
       if (comment && chompKeep)
         comment = comment.replace(/^\n+/, "");
       if (comment) {
         const ic = stringifyComment.indentComment(commentString(comment), indent);
-        lines.push(ic.trimStart());
+        lines2.push(ic.trimStart());
       }
     }
     exports.stringifyCollection = stringifyCollection;
@@ -35365,11 +35812,11 @@ var require_binary = __commonJS({
         if (type !== Scalar.Scalar.QUOTE_DOUBLE) {
           const lineWidth = Math.max(ctx.options.lineWidth - ctx.indent.length, ctx.options.minContentWidth);
           const n = Math.ceil(str.length / lineWidth);
-          const lines = new Array(n);
+          const lines2 = new Array(n);
           for (let i = 0, o = 0; i < n; ++i, o += lineWidth) {
-            lines[i] = str.substr(o, lineWidth);
+            lines2[i] = str.substr(o, lineWidth);
           }
-          str = lines.join(type === Scalar.Scalar.BLOCK_LITERAL ? "\n" : " ");
+          str = lines2.join(type === Scalar.Scalar.BLOCK_LITERAL ? "\n" : " ");
         }
         return stringifyString.stringifyString({ comment, type, value: str }, ctx, onComment, onChompKeep);
       }
@@ -36049,35 +36496,35 @@ var require_stringifyDocument = __commonJS({
     var stringify = require_stringify();
     var stringifyComment = require_stringifyComment();
     function stringifyDocument(doc, options) {
-      const lines = [];
+      const lines2 = [];
       let hasDirectives = options.directives === true;
       if (options.directives !== false && doc.directives) {
         const dir = doc.directives.toString(doc);
         if (dir) {
-          lines.push(dir);
+          lines2.push(dir);
           hasDirectives = true;
         } else if (doc.directives.docStart)
           hasDirectives = true;
       }
       if (hasDirectives)
-        lines.push("---");
+        lines2.push("---");
       const ctx = stringify.createStringifyContext(doc, options);
       const { commentString } = ctx.options;
       if (doc.commentBefore) {
-        if (lines.length !== 1)
-          lines.unshift("");
+        if (lines2.length !== 1)
+          lines2.unshift("");
         const cs = commentString(doc.commentBefore);
-        lines.unshift(stringifyComment.indentComment(cs, ""));
+        lines2.unshift(stringifyComment.indentComment(cs, ""));
       }
       let chompKeep = false;
       let contentComment = null;
       if (doc.contents) {
         if (identity.isNode(doc.contents)) {
           if (doc.contents.spaceBefore && hasDirectives)
-            lines.push("");
+            lines2.push("");
           if (doc.contents.commentBefore) {
             const cs = commentString(doc.contents.commentBefore);
-            lines.push(stringifyComment.indentComment(cs, ""));
+            lines2.push(stringifyComment.indentComment(cs, ""));
           }
           ctx.forceBlockIndent = !!doc.comment;
           contentComment = doc.contents.comment;
@@ -36086,36 +36533,36 @@ var require_stringifyDocument = __commonJS({
         let body = stringify.stringify(doc.contents, ctx, () => contentComment = null, onChompKeep);
         if (contentComment)
           body += stringifyComment.lineComment(body, "", commentString(contentComment));
-        if ((body[0] === "|" || body[0] === ">") && lines[lines.length - 1] === "---") {
-          lines[lines.length - 1] = `--- ${body}`;
+        if ((body[0] === "|" || body[0] === ">") && lines2[lines2.length - 1] === "---") {
+          lines2[lines2.length - 1] = `--- ${body}`;
         } else
-          lines.push(body);
+          lines2.push(body);
       } else {
-        lines.push(stringify.stringify(doc.contents, ctx));
+        lines2.push(stringify.stringify(doc.contents, ctx));
       }
       if (doc.directives?.docEnd) {
         if (doc.comment) {
           const cs = commentString(doc.comment);
           if (cs.includes("\n")) {
-            lines.push("...");
-            lines.push(stringifyComment.indentComment(cs, ""));
+            lines2.push("...");
+            lines2.push(stringifyComment.indentComment(cs, ""));
           } else {
-            lines.push(`... ${cs}`);
+            lines2.push(`... ${cs}`);
           }
         } else {
-          lines.push("...");
+          lines2.push("...");
         }
       } else {
         let dc = doc.comment;
         if (dc && chompKeep)
           dc = dc.replace(/^\n+/, "");
         if (dc) {
-          if ((!chompKeep || contentComment) && lines[lines.length - 1] !== "")
-            lines.push("");
-          lines.push(stringifyComment.indentComment(commentString(dc), ""));
+          if ((!chompKeep || contentComment) && lines2[lines2.length - 1] !== "")
+            lines2.push("");
+          lines2.push(stringifyComment.indentComment(commentString(dc), ""));
         }
       }
-      return lines.join("\n") + "\n";
+      return lines2.join("\n") + "\n";
     }
     exports.stringifyDocument = stringifyDocument;
   }
@@ -36457,10 +36904,10 @@ var require_errors = __commonJS({
       if (error.pos[0] === -1)
         return;
       error.linePos = error.pos.map((pos) => lc.linePos(pos));
-      const { line, col } = error.linePos[0];
-      error.message += ` at line ${line}, column ${col}`;
+      const { line: line2, col } = error.linePos[0];
+      error.message += ` at line ${line2}, column ${col}`;
       let ci = col - 1;
-      let lineStr = src.substring(lc.lineStarts[line - 1], lc.lineStarts[line]).replace(/[\n\r]+$/, "");
+      let lineStr = src.substring(lc.lineStarts[line2 - 1], lc.lineStarts[line2]).replace(/[\n\r]+$/, "");
       if (ci >= 60 && lineStr.length > 80) {
         const trimStart = Math.min(ci - 39, lineStr.length - 79);
         lineStr = "…" + lineStr.substring(trimStart);
@@ -36468,8 +36915,8 @@ var require_errors = __commonJS({
       }
       if (lineStr.length > 80)
         lineStr = lineStr.substring(0, 79) + "…";
-      if (line > 1 && /^ *$/.test(lineStr.substring(0, ci))) {
-        let prev = src.substring(lc.lineStarts[line - 2], lc.lineStarts[line - 1]);
+      if (line2 > 1 && /^ *$/.test(lineStr.substring(0, ci))) {
+        let prev = src.substring(lc.lineStarts[line2 - 2], lc.lineStarts[line2 - 1]);
         if (prev.length > 80)
           prev = prev.substring(0, 79) + "…\n";
         lineStr = prev + lineStr;
@@ -36477,7 +36924,7 @@ var require_errors = __commonJS({
       if (/[^ ]/.test(lineStr)) {
         let count4 = 1;
         const end = error.linePos[1];
-        if (end?.line === line && end.col > col) {
+        if (end?.line === line2 && end.col > col) {
           count4 = Math.max(1, Math.min(end.col - col, 80 - ci));
         }
         const pointer = " ".repeat(ci) + "^".repeat(count4);
@@ -37177,17 +37624,17 @@ var require_resolve_block_scalar = __commonJS({
       if (!header)
         return { value: "", type: null, comment: "", range: [start, start, start] };
       const type = header.mode === ">" ? Scalar.Scalar.BLOCK_FOLDED : Scalar.Scalar.BLOCK_LITERAL;
-      const lines = scalar2.source ? splitLines2(scalar2.source) : [];
-      let chompStart = lines.length;
-      for (let i = lines.length - 1; i >= 0; --i) {
-        const content = lines[i][1];
+      const lines2 = scalar2.source ? splitLines2(scalar2.source) : [];
+      let chompStart = lines2.length;
+      for (let i = lines2.length - 1; i >= 0; --i) {
+        const content = lines2[i][1];
         if (content === "" || content === "\r")
           chompStart = i;
         else
           break;
       }
       if (chompStart === 0) {
-        const value2 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
+        const value2 = header.chomp === "+" && lines2.length > 0 ? "\n".repeat(Math.max(1, lines2.length - 1)) : "";
         let end2 = start + header.length;
         if (scalar2.source)
           end2 += scalar2.source.length;
@@ -37197,7 +37644,7 @@ var require_resolve_block_scalar = __commonJS({
       let offset = scalar2.offset + header.length;
       let contentStart = 0;
       for (let i = 0; i < chompStart; ++i) {
-        const [indent, content] = lines[i];
+        const [indent, content] = lines2[i];
         if (content === "" || content === "\r") {
           if (header.indent === 0 && indent.length > trimIndent)
             trimIndent = indent.length;
@@ -37217,17 +37664,17 @@ var require_resolve_block_scalar = __commonJS({
         }
         offset += indent.length + content.length + 1;
       }
-      for (let i = lines.length - 1; i >= chompStart; --i) {
-        if (lines[i][0].length > trimIndent)
+      for (let i = lines2.length - 1; i >= chompStart; --i) {
+        if (lines2[i][0].length > trimIndent)
           chompStart = i + 1;
       }
       let value = "";
       let sep4 = "";
       let prevMoreIndented = false;
       for (let i = 0; i < contentStart; ++i)
-        value += lines[i][0].slice(trimIndent) + "\n";
+        value += lines2[i][0].slice(trimIndent) + "\n";
       for (let i = contentStart; i < chompStart; ++i) {
-        let [indent, content] = lines[i];
+        let [indent, content] = lines2[i];
         offset += indent.length + content.length + 1;
         const crlf = content[content.length - 1] === "\r";
         if (crlf)
@@ -37264,8 +37711,8 @@ var require_resolve_block_scalar = __commonJS({
         case "-":
           break;
         case "+":
-          for (let i = chompStart; i < lines.length; ++i)
-            value += "\n" + lines[i][0].slice(trimIndent);
+          for (let i = chompStart; i < lines2.length; ++i)
+            value += "\n" + lines2[i][0].slice(trimIndent);
           if (value[value.length - 1] !== "\n")
             value += "\n";
           break;
@@ -37340,10 +37787,10 @@ var require_resolve_block_scalar = __commonJS({
       const first = split[0];
       const m = first.match(/^( *)/);
       const line0 = m?.[1] ? [m[1], first.slice(m[1].length)] : ["", first];
-      const lines = [line0];
+      const lines2 = [line0];
       for (let i = 1; i < split.length; i += 2)
-        lines.push([split[i], split[i + 1]]);
-      return lines;
+        lines2.push([split[i], split[i + 1]]);
+      return lines2;
     }
     exports.resolveBlockScalar = resolveBlockScalar;
   }
@@ -37426,8 +37873,8 @@ var require_resolve_flow_scalar = __commonJS({
       return unfoldLines(source.slice(1, -1)).replace(/''/g, "'");
     }
     function unfoldLines(source) {
-      const line = /(.*?)\r?\n/sy;
-      let match = line.exec(source);
+      const line2 = /(.*?)\r?\n/sy;
+      let match = line2.exec(source);
       if (!match)
         return source;
       let trimEnd, trimBoth;
@@ -37440,8 +37887,8 @@ var require_resolve_flow_scalar = __commonJS({
       }
       let res = match[1].replace(trimEnd, "");
       let sep4 = " ";
-      let pos = line.lastIndex;
-      while (match = line.exec(source)) {
+      let pos = line2.lastIndex;
+      while (match = line2.exec(source)) {
         const lm = match[1].replace(trimBoth, "");
         if (lm === "") {
           if (sep4 === "\n")
@@ -37452,7 +37899,7 @@ var require_resolve_flow_scalar = __commonJS({
           res += sep4 + lm;
           sep4 = " ";
         }
-        pos = line.lastIndex;
+        pos = line2.lastIndex;
       }
       const last = /[ \t]*(.*)/sy;
       last.lastIndex = pos;
@@ -38081,10 +38528,10 @@ var require_cst_scalar = __commonJS({
         case "|":
         case ">": {
           const he = source.indexOf("\n");
-          const head2 = source.substring(0, he);
+          const head = source.substring(0, he);
           const body = source.substring(he + 1) + "\n";
           const props = [
-            { type: "block-scalar-header", offset, indent, source: head2 }
+            { type: "block-scalar-header", offset, indent, source: head }
           ];
           if (!addEndtoBlockProps(props, end))
             props.push({ type: "newline", offset: -1, indent, source: "\n" });
@@ -38144,19 +38591,19 @@ var require_cst_scalar = __commonJS({
     }
     function setBlockScalarValue(token, source) {
       const he = source.indexOf("\n");
-      const head2 = source.substring(0, he);
+      const head = source.substring(0, he);
       const body = source.substring(he + 1) + "\n";
       if (token.type === "block-scalar") {
         const header = token.props[0];
         if (header.type !== "block-scalar-header")
           throw new Error("Invalid block scalar header");
-        header.source = head2;
+        header.source = head;
         token.source = body;
       } else {
         const { offset } = token;
         const indent = "indent" in token ? token.indent : -1;
         const props = [
-          { type: "block-scalar-header", offset, indent, source: head2 }
+          { type: "block-scalar-header", offset, indent, source: head }
         ];
         if (!addEndtoBlockProps(props, "end" in token ? token.end : void 0))
           props.push({ type: "newline", offset: -1, indent, source: "\n" });
@@ -38582,40 +39029,40 @@ var require_lexer = __commonJS({
         }
       }
       *parseStream() {
-        let line = this.getLine();
-        if (line === null)
+        let line2 = this.getLine();
+        if (line2 === null)
           return this.setNext("stream");
-        if (line[0] === cst.BOM) {
+        if (line2[0] === cst.BOM) {
           yield* this.pushCount(1);
-          line = line.substring(1);
+          line2 = line2.substring(1);
         }
-        if (line[0] === "%") {
-          let dirEnd = line.length;
-          let cs = line.indexOf("#");
+        if (line2[0] === "%") {
+          let dirEnd = line2.length;
+          let cs = line2.indexOf("#");
           while (cs !== -1) {
-            const ch = line[cs - 1];
+            const ch = line2[cs - 1];
             if (ch === " " || ch === "	") {
               dirEnd = cs - 1;
               break;
             } else {
-              cs = line.indexOf("#", cs + 1);
+              cs = line2.indexOf("#", cs + 1);
             }
           }
           while (true) {
-            const ch = line[dirEnd - 1];
+            const ch = line2[dirEnd - 1];
             if (ch === " " || ch === "	")
               dirEnd -= 1;
             else
               break;
           }
           const n = (yield* this.pushCount(dirEnd)) + (yield* this.pushSpaces(true));
-          yield* this.pushCount(line.length - n);
+          yield* this.pushCount(line2.length - n);
           this.pushNewline();
           return "stream";
         }
         if (this.atLineEnd()) {
           const sp = yield* this.pushSpaces(true);
-          yield* this.pushCount(line.length - sp);
+          yield* this.pushCount(line2.length - sp);
           yield* this.pushNewline();
           return "stream";
         }
@@ -38656,13 +39103,13 @@ var require_lexer = __commonJS({
       }
       *parseDocument() {
         yield* this.pushSpaces(true);
-        const line = this.getLine();
-        if (line === null)
+        const line2 = this.getLine();
+        if (line2 === null)
           return this.setNext("doc");
         let n = yield* this.pushIndicators();
-        switch (line[n]) {
+        switch (line2[n]) {
           case "#":
-            yield* this.pushCount(line.length - n);
+            yield* this.pushCount(line2.length - n);
           // fallthrough
           case void 0:
             yield* this.pushNewline();
@@ -38687,7 +39134,7 @@ var require_lexer = __commonJS({
           case ">":
             n += yield* this.parseBlockScalarHeader();
             n += yield* this.pushSpaces(true);
-            yield* this.pushCount(line.length - n);
+            yield* this.pushCount(line2.length - n);
             yield* this.pushNewline();
             return yield* this.parseBlockScalar();
           default:
@@ -38707,11 +39154,11 @@ var require_lexer = __commonJS({
           }
           sp += yield* this.pushSpaces(true);
         } while (nl + sp > 0);
-        const line = this.getLine();
-        if (line === null)
+        const line2 = this.getLine();
+        if (line2 === null)
           return this.setNext("flow");
-        if (indent !== -1 && indent < this.indentNext && line[0] !== "#" || indent === 0 && (line.startsWith("---") || line.startsWith("...")) && isEmpty(line[3])) {
-          const atFlowEndMarker = indent === this.indentNext - 1 && this.flowLevel === 1 && (line[0] === "]" || line[0] === "}");
+        if (indent !== -1 && indent < this.indentNext && line2[0] !== "#" || indent === 0 && (line2.startsWith("---") || line2.startsWith("...")) && isEmpty(line2[3])) {
+          const atFlowEndMarker = indent === this.indentNext - 1 && this.flowLevel === 1 && (line2[0] === "]" || line2[0] === "}");
           if (!atFlowEndMarker) {
             this.flowLevel = 0;
             yield cst.FLOW_END;
@@ -38719,17 +39166,17 @@ var require_lexer = __commonJS({
           }
         }
         let n = 0;
-        while (line[n] === ",") {
+        while (line2[n] === ",") {
           n += yield* this.pushCount(1);
           n += yield* this.pushSpaces(true);
           this.flowKey = false;
         }
         n += yield* this.pushIndicators();
-        switch (line[n]) {
+        switch (line2[n]) {
           case void 0:
             return "flow";
           case "#":
-            yield* this.pushCount(line.length - n);
+            yield* this.pushCount(line2.length - n);
             return "flow";
           case "{":
           case "[":
@@ -40091,6 +40538,279 @@ var require_dist = __commonJS({
   }
 });
 
+// src/registry/positions.ts
+function lineOf(positions2, path) {
+  if (path === null) return null;
+  let p = path;
+  for (; ; ) {
+    const pos = positions2.get(p);
+    if (pos) return pos.line;
+    if (p === "") return null;
+    const cut = p.lastIndexOf(".");
+    p = cut < 0 ? "" : p.slice(0, cut);
+  }
+}
+function keyText(key3) {
+  if ((0, import_yaml.isScalar)(key3)) return String(key3.value);
+  return String(key3);
+}
+function positionsOf(doc, counter) {
+  const positions2 = new PositionMap();
+  const put = (path, node) => {
+    const start = node?.range?.[0];
+    if (start === void 0) return;
+    const { line: line2, col } = counter.linePos(start);
+    positions2.set(path, { line: line2, column: col });
+  };
+  const walk = (node, path, depth) => {
+    if (depth > 64) return;
+    if ((0, import_yaml.isMap)(node)) {
+      for (const pair of node.items) {
+        const childPath = path === "" ? keyText(pair.key) : `${path}.${keyText(pair.key)}`;
+        put(childPath, pair.key ?? pair.value);
+        walk(pair.value, childPath, depth + 1);
+      }
+    } else if ((0, import_yaml.isSeq)(node)) {
+      node.items.forEach((item, i) => {
+        const childPath = path === "" ? String(i) : `${path}.${i}`;
+        put(childPath, item);
+        walk(item, childPath, depth + 1);
+      });
+    }
+  };
+  put("", doc.contents);
+  if (positions2.get("") === void 0) positions2.set("", { line: 1, column: 1 });
+  walk(doc.contents, "", 0);
+  return positions2;
+}
+var import_yaml, PositionMap, NO_POSITIONS;
+var init_positions = __esm({
+  "src/registry/positions.ts"() {
+    "use strict";
+    import_yaml = __toESM(require_dist(), 1);
+    PositionMap = class {
+      map = /* @__PURE__ */ new Map();
+      set(path, pos) {
+        if (!this.map.has(path)) this.map.set(path, pos);
+      }
+      get(path) {
+        return this.map.get(path);
+      }
+      /** The line of `path`, else of its nearest ancestor that exists (a missing field points at its parent). */
+      lineOf(path) {
+        return lineOf(this, path);
+      }
+      get size() {
+        return this.map.size;
+      }
+      /** Every known path with its position, in document order. */
+      entries() {
+        return [...this.map];
+      }
+    };
+    NO_POSITIONS = { get: () => void 0 };
+  }
+});
+
+// src/registry/quick-yaml.ts
+function fail4() {
+  throw new NotPlain();
+}
+function quoted(text, start) {
+  const q = text[start];
+  let out = "";
+  let i = start + 1;
+  for (; ; ) {
+    if (i >= text.length) fail4();
+    const ch = text[i];
+    if (ch === q) {
+      if (q === '"' || text[i + 1] !== "'") break;
+      out += "'";
+      i += 2;
+    } else if (ch === "\\" && q === '"') {
+      const next = text[i + 1];
+      if (next !== "\\" && next !== '"') fail4();
+      out += next;
+      i += 2;
+    } else {
+      out += ch;
+      i++;
+    }
+  }
+  return { value: out, end: i + 1 };
+}
+function resolvePlain(plain) {
+  if (plain === "" || BAD_START.test(plain) || plain.includes(": ") || plain.endsWith(":")) fail4();
+  if (NULL.test(plain)) return null;
+  if (TRUE.test(plain)) return true;
+  if (FALSE.test(plain)) return false;
+  if (INT.test(plain)) return parseInt(plain, 10);
+  if (FLOAT.test(plain) || FLOAT_EXP.test(plain)) return parseFloat(plain);
+  if (OTHER_NUMBER.test(plain)) fail4();
+  return plain;
+}
+function scalar(text) {
+  if (text[0] === '"' || text[0] === "'") {
+    const q = quoted(text, 0);
+    trailing(text.slice(q.end));
+    return q.value;
+  }
+  const hash = text.indexOf(" #");
+  return resolvePlain((hash < 0 ? text : text.slice(0, hash)).replace(/ +$/, ""));
+}
+function flowList(text, at2) {
+  const out = [];
+  let i = 1;
+  const spaces = () => {
+    while (text[i] === " ") i++;
+  };
+  spaces();
+  if (text[i] === "]") {
+    trailing(text.slice(i + 1));
+    return out;
+  }
+  for (; ; ) {
+    spaces();
+    at2(out.length, i);
+    const c = text[i];
+    if (c === '"' || c === "'") {
+      const q = quoted(text, i);
+      out.push(q.value);
+      i = q.end;
+    } else {
+      let j = i;
+      while (j < text.length && !",[]{}".includes(text[j])) j++;
+      const plain = text.slice(i, j).replace(/ +$/, "");
+      if (plain.includes(":") || plain.includes(" #")) fail4();
+      out.push(resolvePlain(plain));
+      i = j;
+    }
+    spaces();
+    if (text[i] === "]") break;
+    if (text[i] !== ",") fail4();
+    i++;
+    spaces();
+    if (text[i] === "]") fail4();
+  }
+  trailing(text.slice(i + 1));
+  return out;
+}
+function trailing(rest) {
+  const t = rest.replace(/^ +/, "");
+  if (t !== "" && !(t.startsWith("#") && t.length < rest.length)) fail4();
+}
+function contentLines(text) {
+  if (text.includes("	") || text.includes("\r") || CONTROL.test(text)) return null;
+  const lines2 = [];
+  const raw2 = text.split("\n");
+  for (let k = 0; k < raw2.length; k++) {
+    const s = raw2[k];
+    let indent = 0;
+    while (s.charCodeAt(indent) === 32) indent++;
+    if (indent === s.length || s[indent] === "#") continue;
+    if (indent === 0 && (s.startsWith("---") || s.startsWith("...") || s.startsWith("%"))) return null;
+    lines2.push({ no: k + 1, indent, text: s.slice(indent) });
+  }
+  return lines2;
+}
+function quickParse(text) {
+  const lines2 = contentLines(text);
+  if (lines2 === null || lines2.length === 0 || lines2[0].indent !== 0) return null;
+  const positions2 = new PositionMap();
+  let at2 = 0;
+  const put = (path, line2, column) => positions2.set(path, { line: line2.no, column });
+  const mapping = (indent, path, firstText) => {
+    const out = {};
+    const seen = /* @__PURE__ */ new Set();
+    let first = firstText !== void 0;
+    while (at2 < lines2.length) {
+      const line2 = lines2[at2];
+      const body = first ? firstText : line2.text;
+      if (!first) {
+        if (line2.indent < indent) break;
+        if (line2.indent > indent) fail4();
+      }
+      first = false;
+      const m = KEY.exec(body);
+      if (!m) fail4();
+      const key3 = m[0];
+      if (NOT_STRING_KEY.test(key3) || seen.has(key3) || key3.length > 1e3) fail4();
+      seen.add(key3);
+      const childPath = path === "" ? key3 : `${path}.${key3}`;
+      put(childPath, line2, indent + 1);
+      at2++;
+      const rest = body.slice(key3.length + 1).replace(/^ +/, "");
+      if (rest.startsWith("[")) {
+        const restColumn = indent + body.length - rest.length;
+        out[key3] = flowList(rest, (i, offset) => put(`${childPath}.${i}`, line2, restColumn + offset + 1));
+        continue;
+      }
+      if (rest !== "" && !rest.startsWith("#")) {
+        out[key3] = scalar(rest);
+        continue;
+      }
+      const next = lines2[at2];
+      if (next && next.indent > indent) out[key3] = block2(next.indent, childPath);
+      else if (next && next.indent === indent && isItem(next.text)) out[key3] = list(indent, childPath);
+      else out[key3] = null;
+    }
+    return out;
+  };
+  const isItem = (t) => t === "-" || t.startsWith("- ");
+  const list = (indent, path) => {
+    const out = [];
+    while (at2 < lines2.length) {
+      const line2 = lines2[at2];
+      if (line2.indent < indent) break;
+      if (line2.indent > indent) fail4();
+      if (!isItem(line2.text)) break;
+      const itemPath = path === "" ? String(out.length) : `${path}.${out.length}`;
+      let gap = 1;
+      while (line2.text.charCodeAt(gap) === 32) gap++;
+      const body = line2.text.slice(gap);
+      if (body === "" || body.startsWith("#") || isItem(body)) fail4();
+      const column = indent + gap;
+      put(itemPath, line2, column + 1);
+      if (KEY.test(body)) out.push(mapping(column, itemPath, body));
+      else {
+        out.push(scalar(body));
+        at2++;
+      }
+    }
+    return out;
+  };
+  const block2 = (indent, path) => isItem(lines2[at2].text) ? list(indent, path) : mapping(indent, path);
+  try {
+    put("", lines2[0], 1);
+    const value = mapping(0, "");
+    if (at2 !== lines2.length) return null;
+    return { value, positions: positions2 };
+  } catch (e) {
+    if (e instanceof NotPlain) return null;
+    throw e;
+  }
+}
+var NotPlain, KEY, NOT_STRING_KEY, NULL, TRUE, FALSE, INT, FLOAT, FLOAT_EXP, OTHER_NUMBER, BAD_START, CONTROL;
+var init_quick_yaml = __esm({
+  "src/registry/quick-yaml.ts"() {
+    "use strict";
+    init_positions();
+    NotPlain = class extends Error {
+    };
+    KEY = /^[A-Za-z][A-Za-z0-9_-]*(?=:(?: |$))/;
+    NOT_STRING_KEY = /^(?:[Nn]ull|NULL|[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
+    NULL = /^(?:~|[Nn]ull|NULL)$/;
+    TRUE = /^(?:[Tt]rue|TRUE)$/;
+    FALSE = /^(?:[Ff]alse|FALSE)$/;
+    INT = /^[-+]?[0-9]+$/;
+    FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
+    FLOAT_EXP = /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/;
+    OTHER_NUMBER = /^(?:0o|0x|[-+]?\.(?:inf|Inf|INF)$|\.(?:nan|NaN|NAN)$)/;
+    BAD_START = /^(?:[-?:](?![0-9.])|[,[\]{}#&*!|>'"%@`])/;
+    CONTROL = /[\x00-\x08\x0b-\x1f\x7f-\x9f\u2028\u2029\ufeff\ufffe\uffff]/;
+  }
+});
+
 // node_modules/ajv/dist/compile/codegen/code.js
 var require_code = __commonJS({
   "node_modules/ajv/dist/compile/codegen/code.js"(exports) {
@@ -40304,13 +41024,13 @@ var require_scope = __commonJS({
       }
     };
     exports.ValueScopeName = ValueScopeName;
-    var line = (0, code_1._)`\n`;
+    var line2 = (0, code_1._)`\n`;
     var ValueScope = class extends Scope {
       constructor(opts) {
         super(opts);
         this._values = {};
         this._scope = opts.scope;
-        this.opts = { ...opts, _n: opts.lines ? line : code_1.nil };
+        this.opts = { ...opts, _n: opts.lines ? line2 : code_1.nil };
       }
       get() {
         return this._scope;
@@ -42955,9 +43675,9 @@ var require_compile = __commonJS({
       if (_sch)
         return _sch;
       const rootId = (0, resolve_1.getFullPath)(this.opts.uriResolver, sch.root.baseId);
-      const { es5, lines } = this.opts.code;
+      const { es5, lines: lines2 } = this.opts.code;
       const { ownProperties } = this.opts;
-      const gen = new codegen_1.CodeGen(this.scope, { es5, lines, ownProperties });
+      const gen = new codegen_1.CodeGen(this.scope, { es5, lines: lines2, ownProperties });
       let _ValidationError;
       if (sch.$async) {
         _ValidationError = gen.scopeValue("Error", {
@@ -43248,9 +43968,9 @@ var require_utils = __commonJS({
         }
       }
       if (bestLength < 2) return hextets.join(":");
-      const head2 = hextets.slice(0, bestStart).join(":");
+      const head = hextets.slice(0, bestStart).join(":");
       const tail = hextets.slice(bestStart + bestLength).join(":");
-      return head2 + "::" + tail;
+      return head + "::" + tail;
     }
     function normalizeIPv6Address(input) {
       const compression = input.indexOf("::");
@@ -44464,8 +45184,8 @@ var require_core = __commonJS({
         this._loading = {};
         this._cache = /* @__PURE__ */ new Map();
         opts = this.opts = { ...opts, ...requiredOptions(opts) };
-        const { es5, lines } = this.opts.code;
-        this.scope = new codegen_2.ValueScope({ scope: {}, prefixes: EXT_SCOPE_NAMES, es5, lines });
+        const { es5, lines: lines2 } = this.opts.code;
+        this.scope = new codegen_2.ValueScope({ scope: {}, prefixes: EXT_SCOPE_NAMES, es5, lines: lines2 });
         this.logger = getLogger(opts.logger);
         const formatOpt = opts.validateFormats;
         opts.validateFormats = false;
@@ -46996,6 +47716,235 @@ var require_ajv = __commonJS({
   }
 });
 
+// schema/record.schema.json
+var record_schema_default;
+var init_record_schema = __esm({
+  "schema/record.schema.json"() {
+    record_schema_default = {
+      $schema: "http://json-schema.org/draft-07/schema#",
+      $id: "https://stereogate.invalid/schema/record.schema.json",
+      title: "stereogate compound record",
+      description: "One compound of a registry: its structure and the stereochemical claim made about it. YAML or JSON, one record per file.",
+      type: "object",
+      required: ["id", "structure", "stereo"],
+      additionalProperties: false,
+      properties: {
+        id: {
+          description: "Registry number, unique in the registry, e.g. LX-00042.",
+          type: "string",
+          minLength: 1,
+          maxLength: 200,
+          pattern: "^\\S(.*\\S)?$"
+        },
+        name: { description: "Free-text name.", type: "string" },
+        structure: { $ref: "#/definitions/structureRef" },
+        stereo: {
+          type: "object",
+          required: ["form"],
+          additionalProperties: false,
+          properties: {
+            form: {
+              description: "The stereochemical form claimed for the registered substance.",
+              enum: [
+                "achiral",
+                "meso",
+                "single-enantiomer",
+                "enantioenriched",
+                "racemate",
+                "single-diastereomer",
+                "diastereomer-mixture",
+                "unknown"
+              ]
+            },
+            descriptors: {
+              description: "IUPAC stereodescriptors, e.g. (2R,3S) or rac-(1R,2S).",
+              type: "string"
+            },
+            ee: {
+              description: "Enantiomeric excess in percent.",
+              type: "number",
+              minimum: 0,
+              maximum: 100
+            },
+            ratio: {
+              description: "Component ratio in the order of components, e.g. 70:30.",
+              type: "string"
+            },
+            components: {
+              description: "The stereoisomers a mixture consists of (at most 50).",
+              type: "array",
+              maxItems: 50,
+              items: { $ref: "#/definitions/component" }
+            },
+            rotation: {
+              description: "Specific rotation as measured.",
+              type: "object",
+              required: ["value"],
+              additionalProperties: false,
+              properties: {
+                value: { description: "Degrees; the sign matters.", type: "number" },
+                wavelength_nm: { type: "number", exclusiveMinimum: 0 },
+                temperature_c: { type: "number", minimum: -273.15 },
+                solvent: { type: "string" },
+                concentration: { description: "g/100 mL.", type: "number", exclusiveMinimum: 0 }
+              }
+            },
+            evidence: {
+              description: "Analytical evidence for the claim, free text per item.",
+              type: "array",
+              items: { type: "string" }
+            }
+          }
+        },
+        origin: {
+          description: "How the compound was made: the inputs it came from and what, if anything, made the outcome stereoselective or changed the ee.",
+          type: "object",
+          required: ["from"],
+          additionalProperties: false,
+          properties: {
+            from: {
+              description: "Inputs: registered ids (e.g. LX-00012) or, for inputs not registered, SMILES.",
+              type: "array",
+              minItems: 1,
+              maxItems: 20,
+              items: { type: "string", minLength: 1, maxLength: 2e3 }
+            },
+            control: {
+              description: "What made the outcome stereoselective or changed the ee; 'none' when nothing chiral was present. Not given: unknown.",
+              enum: [
+                "none",
+                "chiral-catalyst",
+                "chiral-reagent",
+                "chiral-auxiliary",
+                "biocatalyst",
+                "resolution",
+                "chiral-separation",
+                "enrichment",
+                "unknown"
+              ]
+            }
+          }
+        },
+        waivers: {
+          description: "Findings the responsible chemist has accepted: each waiver names a check, and may narrow it to one message and/or one other record.",
+          type: "array",
+          items: {
+            type: "object",
+            required: ["check"],
+            additionalProperties: false,
+            properties: {
+              check: {
+                description: "Id of the check whose findings are accepted. Alone, the waiver accepts every finding of that check on this record.",
+                type: "string",
+                minLength: 1
+              },
+              message_id: {
+                description: "Accept only the findings with this message id of the check (e.g. enantiomer-registered).",
+                type: "string",
+                minLength: 1
+              },
+              other_record: {
+                description: "Accept only the findings about this other record: its id (e.g. LX-00123), or its file when it has no id.",
+                type: "string",
+                minLength: 1
+              },
+              reason: { type: "string" },
+              approved_by: { type: "string" }
+            }
+          }
+        }
+      },
+      definitions: {
+        structureRef: {
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            smiles: { type: "string", minLength: 1 },
+            molfile: {
+              description: "Path relative to the record file, inside the registry.",
+              type: "string",
+              minLength: 1
+            }
+          },
+          oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
+        },
+        component: {
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            smiles: { type: "string", minLength: 1 },
+            molfile: { type: "string", minLength: 1 },
+            descriptors: { type: "string" }
+          },
+          oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
+        }
+      }
+    };
+  }
+});
+
+// schema/config.schema.json
+var config_schema_default;
+var init_config_schema = __esm({
+  "schema/config.schema.json"() {
+    config_schema_default = {
+      $schema: "http://json-schema.org/draft-07/schema#",
+      $id: "https://stereogate.invalid/schema/config.schema.json",
+      title: "stereogate configuration (stereogate.config.yml or stereogate.config.json at the registry root)",
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        recordDirs: {
+          description: "Folders holding record files, relative to the registry root. Default: [compounds].",
+          type: "array",
+          minItems: 1,
+          items: { type: "string", minLength: 1 }
+        },
+        severities: {
+          description: "Severity per check id (sets the level of that check's failures, raised or lowered; note-level messages stay notes), or per check-id/message-id (that message only, notes included); off skips the check or drops the message.",
+          type: "object",
+          additionalProperties: { enum: ["error", "warning", "note", "off"] }
+        },
+        ratioSumTolerance: {
+          description: "Parts of a ratio must sum to 100 within this many percentage points.",
+          type: "number",
+          minimum: 0,
+          maximum: 100
+        },
+        racemateRatioTolerance: {
+          description: "A racemate's enantiomer ratio may deviate from 50:50 by this many percentage points.",
+          type: "number",
+          minimum: 0,
+          maximum: 50
+        },
+        eeTolerance: {
+          description: "Stated ee and ee computed from a ratio may differ by this many percentage points.",
+          type: "number",
+          minimum: 0,
+          maximum: 100
+        },
+        singleEnantiomerMinEe: {
+          description: "A single-enantiomer claim needs at least this ee (percent).",
+          type: "number",
+          minimum: 0,
+          maximum: 100
+        },
+        axisOrthoMin: {
+          description: "A biaryl bond with at least this many ortho substituents (both rings; a fused ring counts twice) is a potential stereogenic axis when the structure does not draw one. Rule of thumb (common practice, no source). Default 3.",
+          type: "integer",
+          minimum: 0,
+          maximum: 8
+        },
+        zeroRotationTolerance: {
+          description: "A specific rotation whose magnitude is at or below this (degrees) counts as zero.",
+          type: "number",
+          minimum: 0
+        }
+      }
+    };
+  }
+});
+
 // src/registry/closest.ts
 function editDistance(a, b) {
   if (a === b) return 0;
@@ -47029,6 +47978,459 @@ function closestWord(word, candidates) {
 var init_closest = __esm({
   "src/registry/closest.ts"() {
     "use strict";
+  }
+});
+
+// src/registry/form-words.ts
+function formSynonym(word) {
+  const key3 = word.trim().toLowerCase().replace(/[\s_]+/g, "-");
+  return SYNONYMS[key3] ?? null;
+}
+var SYNONYMS;
+var init_form_words = __esm({
+  "src/registry/form-words.ts"() {
+    "use strict";
+    SYNONYMS = {
+      enantiopure: "single-enantiomer",
+      "enantiomerically-pure": "single-enantiomer",
+      "optically-pure": "single-enantiomer",
+      homochiral: "single-enantiomer",
+      "single-isomer": "single-enantiomer",
+      racemic: "racemate",
+      rac: "racemate",
+      "racemic-mixture": "racemate",
+      dl: "racemate",
+      "±": "racemate",
+      scalemic: "enantioenriched",
+      enriched: "enantioenriched",
+      "enantiomerically-enriched": "enantioenriched",
+      "partially-resolved": "enantioenriched",
+      diastereopure: "single-diastereomer",
+      "diastereomerically-pure": "single-diastereomer",
+      "diastereomeric-mixture": "diastereomer-mixture",
+      "mixture-of-diastereomers": "diastereomer-mixture",
+      "epimeric-mixture": "diastereomer-mixture",
+      "not-chiral": "achiral",
+      undefined: "unknown",
+      unspecified: "unknown",
+      "not-determined": "unknown"
+    };
+  }
+});
+
+// src/registry/schema.ts
+function validateRecordShape(value) {
+  recordValidator ??= ajv.compile(record_schema_default);
+  return recordValidator(value) ? [] : explain(recordValidator.errors ?? [], value, "record");
+}
+function validateConfigShape(value) {
+  configValidator ??= ajv.compile(config_schema_default);
+  return configValidator(value) ? [] : explain(configValidator.errors ?? [], value, "config file");
+}
+function pointerToPath(pointer) {
+  if (pointer === "") return "";
+  return pointer.slice(1).split("/").map((s) => s.replace(/~1/g, "/").replace(/~0/g, "~")).join(".");
+}
+function join2(path, key3) {
+  return path === "" ? key3 : `${path}.${key3}`;
+}
+function at(value, path) {
+  if (path === "") return value;
+  let cur = value;
+  for (const part of path.split(".")) {
+    if (cur === null || typeof cur !== "object") return void 0;
+    cur = cur[part];
+  }
+  return cur;
+}
+function kindOf(v) {
+  if (v === null) return "null";
+  if (Array.isArray(v)) return "a list";
+  if (typeof v === "object") return "a mapping";
+  if (typeof v === "string") return `the text ${quote(v)}`;
+  return `${typeof v} ${safeJson(v)}`;
+}
+function quote(v) {
+  const s = typeof v === "string" ? v : safeJson(v);
+  const short = s.length > 60 ? `${s.slice(0, 57)}...` : s;
+  return `'${short}'`;
+}
+function safeJson(v) {
+  try {
+    return JSON.stringify(v) ?? String(v);
+  } catch {
+    return Object.prototype.toString.call(v);
+  }
+}
+function allowedProperties(schemaNode) {
+  const props = schemaNode?.properties;
+  return props ? Object.keys(props) : [];
+}
+function explainOne(e, value, what) {
+  const path = pointerToPath(e.instancePath);
+  const label = path === "" ? `the ${what}` : path;
+  const got2 = at(value, path);
+  switch (e.keyword) {
+    case "required": {
+      const missing = String(e.params.missingProperty);
+      return {
+        path: join2(path, missing),
+        message: `${join2(path, missing)}: this field is required but missing`
+      };
+    }
+    case "additionalProperties": {
+      const extra = String(e.params.additionalProperty);
+      const allowed = allowedProperties(e.parentSchema);
+      const guess = closestWord(extra, allowed);
+      const hint = guess ? `; did you mean '${guess}'?` : allowed.length ? ` (allowed: ${allowed.join(", ")})` : "";
+      return {
+        path: join2(path, extra),
+        message: `${join2(path, extra)}: '${extra}' is not a field of ${path === "" ? `a ${what}` : path}${hint}`
+      };
+    }
+    case "enum": {
+      const allowed = (e.params.allowedValues ?? []).map(String);
+      const synonym = typeof got2 === "string" ? formSynonym(got2) : null;
+      const guess = synonym !== null && allowed.includes(synonym) ? synonym : typeof got2 === "string" ? closestWord(got2, allowed) : null;
+      const hint = guess ? `; did you mean '${guess}'?` : "";
+      return { path, message: `${label}: ${quote(got2)} is not one of ${allowed.join(", ")}${hint}` };
+    }
+    case "type": {
+      const want = String(e.params.type).split(",").map((t) => TYPE_WORDS[t] ?? t).join(" or ");
+      const props = allowedProperties(e.parentSchema);
+      const tip = want === "text" && (typeof got2 === "number" || typeof got2 === "boolean") ? " (put it in quotes)" : want === "a mapping of fields" && props.includes("smiles") && props.includes("molfile") ? " (write it as smiles: … or molfile: … on the next line, indented)" : "";
+      return { path, message: `${label}: must be ${want}, found ${kindOf(got2)}${tip}` };
+    }
+    case "minimum":
+    case "maximum":
+    case "exclusiveMinimum":
+    case "exclusiveMaximum": {
+      const limit = e.params.limit;
+      const words = {
+        minimum: "at least",
+        maximum: "at most",
+        exclusiveMinimum: "more than",
+        exclusiveMaximum: "less than"
+      };
+      return {
+        path,
+        message: `${label}: must be ${words[e.keyword]} ${limit}, found ${typeof got2 === "number" ? got2 : kindOf(got2)}`
+      };
+    }
+    case "minLength":
+      return { path, message: `${label}: must not be empty` };
+    case "maxLength":
+      return {
+        path,
+        message: `${label}: is too long (at most ${e.params.limit} characters)`
+      };
+    case "pattern":
+      return { path, message: `${label}: ${quote(got2)} must not start or end with spaces` };
+    case "maxItems": {
+      const n = Array.isArray(got2) ? got2.length : 0;
+      const limit = e.params.limit;
+      const advice = /components$/.test(path) ? "the record is not audited (split it into several records)" : "shorten the list";
+      return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
+    }
+    case "minItems":
+      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
+    case "oneOf": {
+      if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
+        return {
+          path,
+          message: `${label}: must be a mapping with smiles or molfile (e.g. smiles: CCO), found ${kindOf(got2)}`
+        };
+      }
+      const obj = got2;
+      const both = "smiles" in obj && "molfile" in obj;
+      return {
+        path,
+        message: `${label}: give exactly one of smiles or molfile (found ${both ? "both" : "neither"})`
+      };
+    }
+    default:
+      return { path, message: `${label}: ${e.message ?? "is not valid"}` };
+  }
+}
+function explain(errors, value, what) {
+  const oneOfPaths = errors.filter((e) => e.keyword === "oneOf").map((e) => e.schemaPath);
+  const wrongType = new Set(errors.filter((e) => e.keyword === "type").map((e) => e.instancePath));
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  for (const e of errors) {
+    if (oneOfPaths.some((p2) => e.schemaPath !== p2 && e.schemaPath.startsWith(`${p2}/`))) continue;
+    if (e.keyword === "oneOf" && wrongType.has(e.instancePath)) continue;
+    const p = explainOne(e, value, what);
+    if (!p || seen.has(p.message)) continue;
+    seen.add(p.message);
+    out.push({ ...p, code: PROBLEM_CODES[e.keyword] ?? "schema" });
+  }
+  return out;
+}
+var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, configValidator, TYPE_WORDS;
+var init_schema = __esm({
+  "src/registry/schema.ts"() {
+    "use strict";
+    import_ajv = __toESM(require_ajv(), 1);
+    init_record_schema();
+    init_config_schema();
+    init_closest();
+    init_form_words();
+    PROBLEM_CODES = {
+      required: "missing-field",
+      additionalProperties: "unknown-field",
+      enum: "not-allowed-value",
+      type: "wrong-type",
+      minimum: "out-of-range",
+      maximum: "out-of-range",
+      exclusiveMinimum: "out-of-range",
+      exclusiveMaximum: "out-of-range",
+      minLength: "empty-value",
+      maxLength: "too-long",
+      pattern: "spaces-around",
+      minItems: "too-few-items",
+      maxItems: "too-many-items",
+      oneOf: "structure-choice"
+    };
+    AJV_OPTIONS = {
+      allErrors: true,
+      strict: true,
+      strictRequired: false,
+      allowUnionTypes: true,
+      verbose: true
+    };
+    ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
+    recordValidator = null;
+    configValidator = null;
+    TYPE_WORDS = {
+      string: "text",
+      number: "a number",
+      integer: "a whole number",
+      object: "a mapping of fields",
+      array: "a list",
+      boolean: "true or false"
+    };
+  }
+});
+
+// src/registry/parse.ts
+function parseDocumentText(raw2) {
+  const text = raw2.includes("\r") ? raw2.replace(/\r\n?/g, "\n") : raw2;
+  const quick = quickParse(text);
+  if (quick) return { value: quick.value, positions: quick.positions, problems: [] };
+  return parseFullText(text);
+}
+function parseFullText(text) {
+  const counter = new import_yaml2.LineCounter();
+  const doc = (0, import_yaml2.parseDocument)(text, {
+    lineCounter: counter,
+    prettyErrors: true,
+    uniqueKeys: true,
+    version: "1.2"
+  });
+  const positions2 = positionsOf(doc, counter);
+  const problems = [];
+  for (const err2 of doc.errors) {
+    const line2 = err2.linePos?.[0]?.line ?? counter.linePos(err2.pos[0]).line;
+    const first = err2.message.split("\n")[0] ?? err2.message;
+    problems.push({
+      path: "",
+      line: line2,
+      code: "yaml-syntax",
+      message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, "")}`
+    });
+  }
+  problems.push(...tagProblems(doc, counter));
+  if (problems.length > 0) return { value: null, positions: positions2, problems };
+  let value;
+  try {
+    value = doc.toJS({ maxAliasCount: 50 });
+  } catch (e) {
+    return {
+      value: null,
+      positions: positions2,
+      problems: [
+        { path: "", line: 1, code: "yaml-syntax", message: `cannot be read: ${e.message}` }
+      ]
+    };
+  }
+  return { value, positions: positions2, problems };
+}
+function tagProblems(doc, counter) {
+  const out = [];
+  const lineAt = (node) => counter.linePos(node?.range?.[0] ?? 0).line;
+  for (const w of doc.warnings) {
+    if (w.code !== "TAG_RESOLVE_FAILED" || !w.message.includes("tag:yaml.org,2002:")) continue;
+    const line2 = w.linePos?.[0]?.line ?? counter.linePos(w.pos[0]).line;
+    const first = (w.message.split("\n")[0] ?? w.message).replace("tag:yaml.org,2002:", "!!").replace(/ at line \d+, column \d+:?$/, "");
+    out.push({ path: "", line: line2, code: "unknown-tag", message: `not plain YAML/JSON: ${first}` });
+  }
+  (0, import_yaml2.visit)(doc, {
+    Node(key3, node, path) {
+      const tag = node.tag;
+      if (tag !== void 0 && !PLAIN_TAGS.has(tag)) {
+        const parent = path[path.length - 1];
+        const at2 = key3 === "value" && (0, import_yaml2.isPair)(parent) && (0, import_yaml2.isNode)(parent.key) ? parent.key : node;
+        out.push({
+          path: "",
+          line: lineAt(at2),
+          code: "unknown-tag",
+          message: `the YAML tag ${tag.replace("tag:yaml.org,2002:", "!!")} is not allowed in a record (plain YAML/JSON values only)`
+        });
+      }
+    },
+    Pair(_key, pair) {
+      if (pair.key !== null && !(0, import_yaml2.isScalar)(pair.key)) {
+        out.push({
+          path: "",
+          line: lineAt(pair.key),
+          code: "yaml-syntax",
+          message: "not valid here: a field name must be a plain word, not a list or mapping"
+        });
+      }
+    }
+  });
+  return out;
+}
+function parseRecordText(text) {
+  const parsed = parseDocumentText(text);
+  const { value, positions: positions2 } = parsed;
+  if (parsed.problems.length > 0)
+    return { value, record: null, id: null, positions: positions2, problems: parsed.problems };
+  if (value === null || value === void 0) {
+    return {
+      value,
+      record: null,
+      id: null,
+      positions: positions2,
+      problems: [{ path: "", line: 1, code: "empty-file", message: "the file is empty" }]
+    };
+  }
+  const id = typeof value === "object" && !Array.isArray(value) && typeof value.id === "string" ? value.id.trim() || null : null;
+  const shape = validateRecordShape(value);
+  const problems = shape.map((p) => ({
+    path: p.path,
+    message: p.message,
+    line: lineOf(positions2, p.path),
+    code: p.code
+  }));
+  problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0));
+  return { value, record: problems.length === 0 ? value : null, id, positions: positions2, problems };
+}
+var import_yaml2, PLAIN_TAGS;
+var init_parse = __esm({
+  "src/registry/parse.ts"() {
+    "use strict";
+    import_yaml2 = __toESM(require_dist(), 1);
+    init_positions();
+    init_quick_yaml();
+    init_schema();
+    PLAIN_TAGS = new Set(
+      ["str", "int", "float", "bool", "null", "map", "seq"].map((t) => `tag:yaml.org,2002:${t}`)
+    );
+  }
+});
+
+// src/audit/config.ts
+import { existsSync } from "node:fs";
+import { isAbsolute as isAbsolute2, join as join3, resolve as resolve2 } from "node:path";
+function loadConfig(root, configFile, overrides) {
+  let file = null;
+  if (configFile !== void 0) {
+    file = isAbsolute2(configFile) ? configFile : resolve2(configFile);
+    if (!existsSync(file)) throw new ConfigError(`config file ${configFile} does not exist`);
+  } else {
+    const found = CONFIG_FILE_NAMES.map((n) => join3(root, n)).find((p) => existsSync(p));
+    file = found ?? null;
+  }
+  const fromFile = file === null ? {} : readConfigFile(file, configFile ?? file);
+  const config = {
+    ...DEFAULT_CONFIG,
+    recordDirs: [...DEFAULT_CONFIG.recordDirs],
+    ...fromFile,
+    ...overrides ?? {},
+    severities: {
+      ...DEFAULT_CONFIG.severities,
+      ...fromFile.severities ?? {},
+      ...overrides?.severities ?? {}
+    }
+  };
+  return { config, file };
+}
+function readConfigFile(abs, shown) {
+  const read = readTextFile(abs);
+  if (!read.ok) throw new ConfigError(`config file ${shown} ${read.error}`);
+  const parsed = parseDocumentText(read.text);
+  const issues = parsed.problems.map((p) => `${shown} line ${p.line}: ${p.message}`);
+  if (issues.length === 0) {
+    if (parsed.value === null || parsed.value === void 0) return {};
+    for (const p of validateConfigShape(parsed.value)) {
+      const line2 = lineOf(parsed.positions, p.path);
+      issues.push(`${shown}${line2 === null ? "" : ` line ${line2}`}: ${p.message}`);
+    }
+  }
+  if (issues.length > 0) throw new ConfigError(`the config file is not valid:
+  ${issues.join("\n  ")}`);
+  return parsed.value;
+}
+function checkSeverityIds(config, knownIds, suggest, messagesOf) {
+  const unknown = [];
+  for (const key3 of Object.keys(config.severities)) {
+    const cut = key3.indexOf("/");
+    const id = cut < 0 ? key3 : key3.slice(0, cut);
+    if (!knownIds.includes(id)) {
+      const guess = suggest(id);
+      unknown.push(guess ? `'${key3}' (did you mean '${guess}'?)` : `'${key3}'`);
+      continue;
+    }
+    if (cut < 0) continue;
+    const message = key3.slice(cut + 1);
+    const known = messagesOf?.(id);
+    if (known !== void 0 && !known.includes(message)) {
+      unknown.push(`'${key3}' (${id} has no message '${message}'; its messages: ${known.join(", ")})`);
+    }
+  }
+  if (unknown.length === 0) return;
+  throw new ConfigError(
+    `severities: no check or message is called ${unknown.join(", ")}; known checks: ${knownIds.join(", ")}`
+  );
+}
+var DEFAULT_CONFIG, DEFAULT_SOURCES, CONFIG_FILE_NAMES, ConfigError;
+var init_config = __esm({
+  "src/audit/config.ts"() {
+    "use strict";
+    init_files();
+    init_parse();
+    init_positions();
+    init_schema();
+    DEFAULT_CONFIG = Object.freeze({
+      recordDirs: ["compounds"],
+      severities: {},
+      ratioSumTolerance: 1,
+      racemateRatioTolerance: 2,
+      eeTolerance: 1,
+      singleEnantiomerMinEe: 98,
+      zeroRotationTolerance: 1,
+      axisOrthoMin: 3
+    });
+    DEFAULT_SOURCES = Object.freeze({
+      recordDirs: "the record format of this project (records live under compounds/ unless configured)",
+      severities: "none overridden: every check keeps the default severity its module declares. A level given for a check sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given for 'check-id/message-id' sets that one message's level, notes included",
+      ratioSumTolerance: "common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts",
+      racemateRatioTolerance: "common practice, no source: a racemate measured by chiral chromatography typically reads within about 2 points of 50:50 (integration error); more than that suggests an enantioenriched sample",
+      eeTolerance: "common practice, no source: ee and ratios are reported rounded to about 1 percent",
+      singleEnantiomerMinEe: "common practice, no source: many registries call a sample a single enantiomer from about 98 % ee (99:1 er); set your own SOP value",
+      zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))",
+      axisOrthoMin: "common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies"
+    });
+    CONFIG_FILE_NAMES = [
+      "stereogate.config.yml",
+      "stereogate.config.yaml",
+      "stereogate.config.json"
+    ];
+    ConfigError = class extends Error {
+      name = "ConfigError";
+    };
   }
 });
 
@@ -47473,16 +48875,16 @@ function labelList(units) {
   const l = units.filter((u) => u.defined).map((u) => `${unitName2(u)} ${u.label ?? "unranked"}`);
   return l.length ? l.join(", ") : "none";
 }
-function declaredDescriptors(record2) {
-  const d = record2?.stereo.descriptors;
-  const n = record2?.name;
+function declaredDescriptors(record) {
+  const d = record?.stereo.descriptors;
+  const n = record?.name;
   return {
     field: d !== void 0 && d.trim() !== "" ? parseDescriptors(d) : null,
     name: n !== void 0 && n.trim() !== "" ? parseDescriptors(n, { context: "name" }) : null
   };
 }
-function declaredSign(record2) {
-  const { field: field2, name } = declaredDescriptors(record2);
+function declaredSign(record) {
+  const { field: field2, name } = declaredDescriptors(record);
   if (field2?.rotationSign) return { sign: field2.rotationSign, field: "stereo.descriptors" };
   if (name?.rotationSign) return { sign: name.rotationSign, field: "name" };
   return null;
@@ -47491,6 +48893,22 @@ function finding(messageId, field2, data, severity) {
   const f = { messageId, field: field2, data };
   if (severity) f.severity = severity;
   return f;
+}
+function render(template, data) {
+  return template.replace(
+    /\{([A-Za-z0-9_]+)(?:([:?])([^|{}]*)\|([^|{}]*))?\}/g,
+    (whole, name, how, one, many) => {
+      if (!Object.prototype.hasOwnProperty.call(data, name)) return whole;
+      const v = data[name];
+      const text = v === null ? "none" : String(v);
+      if (how === void 0) return text;
+      const words = text === "1" ? one : many;
+      return how === ":" ? `${text} ${words}` : words;
+    }
+  );
+}
+function plural(n, one, many = `${one}s`) {
+  return `${n} ${String(n) === "1" ? one : many}`;
 }
 function fmt(n) {
   return Number.isInteger(n) ? String(n) : String(Math.round(n * 100) / 100);
@@ -47508,6 +48926,534 @@ var init_words = __esm({
       "single-diastereomer",
       "diastereomer-mixture"
     ];
+  }
+});
+
+// src/checks/waivers.ts
+function blank(s) {
+  return s === void 0 || s.trim() === "";
+}
+function isComplete(w) {
+  return !blank(w.reason) && !blank(w.approved_by);
+}
+function waiverAccepts(w, f) {
+  if (w.check !== f.check) return false;
+  if (!blank(w.message_id) && w.message_id.trim() !== f.messageId) return false;
+  if (!blank(w.other_record)) {
+    const other = w.other_record.trim();
+    if (!OTHER_RECORD_KEYS.some((k) => f.data[k] !== void 0 && String(f.data[k]) === other)) return false;
+  }
+  return true;
+}
+function waiverCovers(w) {
+  const parts = [
+    blank(w.message_id) ? null : `message ${w.message_id.trim()}`,
+    blank(w.other_record) ? null : `about ${w.other_record.trim()}`
+  ].filter((x) => x !== null);
+  return parts.length === 0 ? `every finding of ${w.check}` : `${w.check} (${parts.join(", ")})`;
+}
+function acceptingWaiver(waivers, f) {
+  const w = waivers.find((x) => isComplete(x) && waiverAccepts(x, f));
+  return w ? { reason: w.reason.trim(), approvedBy: w.approved_by.trim(), covers: waiverCovers(w) } : null;
+}
+function waiversOf(record, check) {
+  return (record?.waivers ?? []).flatMap((w, index) => w.check === check ? [{ ...w, index }] : []);
+}
+function stillMatchesNothing(note, more) {
+  if (note.messageId !== "waiver-matches-nothing") return true;
+  const str = (v) => typeof v === "string" && v !== "" ? v : void 0;
+  const w = {
+    check: String(note.data.waivedCheck),
+    message_id: str(note.data.waivedMessage),
+    other_record: str(note.data.waivedRecord)
+  };
+  return !more.some((f) => waiverAccepts(w, f));
+}
+function reviewWaivers(record, findings, knownChecks) {
+  const waivers = record?.waivers ?? [];
+  const out = [];
+  const firstIndex = /* @__PURE__ */ new Map();
+  waivers.forEach((w, index) => {
+    const field2 = `waivers.${index}`;
+    const covers = waiverCovers(w);
+    const missing = [
+      blank(w.reason) ? "reason" : null,
+      blank(w.approved_by) ? "approver (approved_by)" : null
+    ].filter((x) => x !== null);
+    if (missing.length) {
+      out.push(
+        finding("waiver-incomplete", field2, {
+          waivedCheck: w.check,
+          index,
+          missing: missing.join(" and no ")
+        })
+      );
+    }
+    const seen = firstIndex.get(covers);
+    if (seen !== void 0) {
+      out.push(
+        finding("waiver-duplicate", field2, { waivedCheck: w.check, covers, index, first: seen }, "note")
+      );
+      return;
+    }
+    firstIndex.set(covers, index);
+    if (w.check !== WAIVER_CHECK_ID && !findings.some((f) => waiverAccepts(w, f))) {
+      const unknown = knownChecks !== void 0 && !knownChecks.includes(w.check);
+      out.push(
+        finding(
+          "waiver-matches-nothing",
+          field2,
+          {
+            waivedCheck: w.check,
+            waivedMessage: blank(w.message_id) ? null : w.message_id.trim(),
+            waivedRecord: blank(w.other_record) ? null : w.other_record.trim(),
+            covers,
+            index,
+            knownCheck: !unknown,
+            known: unknown ? " (and no check has that id)" : ""
+          },
+          "note"
+        )
+      );
+    }
+  });
+  return out;
+}
+function run(ctx) {
+  const waivers = ctx.record?.waivers ?? [];
+  if (waivers.length === 0) return { findings: [], notApplicable: "the record has no waivers" };
+  const others2 = ctx.findings ?? [];
+  const findings = reviewWaivers(ctx.record, others2);
+  if (findings.some((f) => f.severity !== "note")) return { findings };
+  const accepting = waivers.filter((w) => others2.some((f) => waiverAccepts(w, f)));
+  const whole = accepting.filter((w) => blank(w.message_id) && blank(w.other_record));
+  const wholeText = whole.length > 0 ? `; ${whole.length === 1 ? "one covers" : `${whole.length} cover`} every finding of its check (${whole.map((w) => w.check).join(", ")}), as it names no message_id or other_record` : "";
+  return {
+    findings,
+    passed: `${plural(waivers.length, "waiver")} complete; ${accepting.length} ${accepting.length === 1 ? "accepts" : "accept"} findings of this record${wholeText}`
+  };
+}
+var WAIVER_CHECK_ID, messages, OTHER_RECORD_KEYS, waiverReview;
+var init_waivers = __esm({
+  "src/checks/waivers.ts"() {
+    "use strict";
+    init_words();
+    WAIVER_CHECK_ID = "waiver-review";
+    messages = {
+      "waiver-incomplete": "The waiver for {waivedCheck} (waivers[{index}]) has no {missing}. A waiver records a decision: say why the finding is acceptable (reason) and who decided (approved_by). Until then it accepts nothing.",
+      "waiver-matches-nothing": "The waiver waivers[{index}], for {covers}, matches no finding on this record{known}. Remove it, or correct what it names, so that it does not silently accept a future finding.",
+      "waiver-duplicate": "waivers[{index}] repeats waivers[{first}], the waiver for {covers}. Keep one."
+    };
+    OTHER_RECORD_KEYS = ["otherId", "otherFile", "input"];
+    waiverReview = {
+      id: WAIVER_CHECK_ID,
+      defaultSeverity: "warning",
+      summary: "Waivers give a reason and an approver, and each accepts a finding of this record.",
+      explanation: "A waiver is the responsible chemist accepting a finding for this record; it is only as good as its reason and the name of who decided (common practice, no source: review decisions are recorded with their reason and approver). A waiver that names only a check accepts every finding of that check on the record, a later, different one too; message_id (one message of the check) and other_record (findings about one other record) narrow it to the finding that was decided. A waiver that accepts nothing is reported, so that it can be removed before it hides a later, different problem.",
+      messages,
+      run
+    };
+  }
+});
+
+// src/registry/load.ts
+import { realpathSync as realpathSync2 } from "node:fs";
+import { dirname } from "node:path";
+function loadRegistry(root, options) {
+  const realRoot = realpathSync2(root);
+  const found = findRecordFiles(realRoot, options.recordDirs);
+  const records = found.files.map((abs) => loadRecordFile(realRoot, abs));
+  for (const r of found.refused) records.push(refusedRecord(r));
+  records.sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+  markDuplicateIds(records);
+  return { root: realRoot, records, missingDirs: found.missingDirs };
+}
+function refusedRecord(r) {
+  return {
+    file: r.file,
+    id: null,
+    record: null,
+    positions: NO_POSITIONS,
+    problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${r.message}` }],
+    origin: { kind: "file" }
+  };
+}
+function loadRecordFile(realRoot, abs) {
+  try {
+    return loadRecordFileOrThrow(realRoot, abs);
+  } catch (e) {
+    return {
+      file: relativeTo(realRoot, abs),
+      id: null,
+      record: null,
+      positions: NO_POSITIONS,
+      problems: [
+        {
+          path: "",
+          line: null,
+          code: "internal-error",
+          message: `the record file could not be read because of an internal error in stereogate (${e?.message ?? String(e)}); please report it with the file`
+        }
+      ],
+      origin: { kind: "file" }
+    };
+  }
+}
+function loadRecordFileOrThrow(realRoot, abs) {
+  const file = relativeTo(realRoot, abs);
+  const read = readTextFile(abs);
+  if (!read.ok) {
+    return {
+      file,
+      id: null,
+      record: null,
+      positions: NO_POSITIONS,
+      problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${read.error}` }],
+      origin: { kind: "file" }
+    };
+  }
+  const parsed = parseRecordText(read.text);
+  const loaded = {
+    file,
+    id: parsed.id,
+    record: parsed.record,
+    positions: parsed.positions,
+    problems: parsed.problems,
+    origin: { kind: "file" }
+  };
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  return loaded;
+}
+function asObject(v) {
+  return v !== null && typeof v === "object" && !Array.isArray(v) ? v : null;
+}
+function sourceOf(ref, field2, fetchMolfile) {
+  if (!ref) return null;
+  if (typeof ref.smiles === "string" && typeof ref.molfile !== "string") {
+    return { field: field2, format: "smiles", text: ref.smiles };
+  }
+  if (typeof ref.molfile === "string" && typeof ref.smiles !== "string") {
+    return { field: field2, format: "molfile", ...fetchMolfile(ref.molfile) };
+  }
+  return null;
+}
+function structureSources(realRoot, recordDir, value) {
+  const fetchMolfile = (path) => {
+    const where2 = resolveInside(realRoot, recordDir, path);
+    if (!where2.ok) return { text: null, error: `molfile ${where2.error}` };
+    const read = readTextFile(where2.abs);
+    if (!read.ok) return { text: null, file: where2.rel, error: `molfile '${path}' ${read.error}` };
+    return { text: read.text, file: where2.rel };
+  };
+  const top = asObject(value);
+  const main = sourceOf(asObject(top?.structure), "structure", fetchMolfile);
+  const comps = asObject(top?.stereo)?.components;
+  const components = [];
+  if (Array.isArray(comps)) {
+    comps.slice(0, MAX_COMPONENTS_READ).forEach((c, i) => {
+      const s = sourceOf(asObject(c), `stereo.components.${i}`, fetchMolfile);
+      components.push(
+        s ?? { field: `stereo.components.${i}`, format: "smiles", text: null, error: "no structure given" }
+      );
+    });
+  }
+  return { main, components };
+}
+function markDuplicateIds(records) {
+  const problems = duplicateIdProblems(
+    records.flatMap(
+      (r) => r.id === null ? [] : [{ id: r.id, file: r.file, line: lineOf(r.positions, "id") }]
+    )
+  );
+  if (problems.size === 0) return;
+  for (const r of records) {
+    const p = problems.get(r.file);
+    if (p) r.problems.push(p);
+  }
+}
+function duplicateIdProblems(records) {
+  const byId2 = /* @__PURE__ */ new Map();
+  for (const r of records) {
+    const list = byId2.get(r.id);
+    if (list) list.push(r);
+    else byId2.set(r.id, [r]);
+  }
+  const out = /* @__PURE__ */ new Map();
+  for (const [id, list] of byId2) {
+    if (list.length < 2) continue;
+    for (const r of list) {
+      const others2 = list.filter((o) => o !== r).map((o) => o.line === null ? o.file : `${o.file} line ${o.line}`);
+      out.set(r.file, {
+        path: "id",
+        line: r.line,
+        code: "duplicate-id",
+        message: `id: '${id}' is also used by ${others2.join(", ")}; every record needs its own id`
+      });
+    }
+  }
+  return out;
+}
+var MAX_COMPONENTS_READ;
+var init_load = __esm({
+  "src/registry/load.ts"() {
+    "use strict";
+    init_files();
+    init_parse();
+    init_positions();
+    MAX_COMPONENTS_READ = 50;
+  }
+});
+
+// src/audit/engine.ts
+function heavyAtomCandidates(formula) {
+  const bases = [];
+  const sign = formula.endsWith("+") || formula.endsWith("-");
+  if (!sign) bases.push(formula);
+  else {
+    const body = formula.slice(0, -1);
+    const digits = /\d*$/.exec(body)[0];
+    const prefix = body.slice(0, body.length - digits.length);
+    const count4 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
+    for (let i = 0; i <= digits.length; i++) {
+      const own2 = digits.slice(0, i);
+      if (count4(own2) && count4(digits.slice(i))) bases.push(prefix + own2);
+    }
+  }
+  return [...new Set(bases.map((b) => b.replace(/H(?![a-z])\d*/g, "")))];
+}
+function heavyFormula(elements, wildcards) {
+  const counts = /* @__PURE__ */ new Map();
+  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
+  const order = [...counts.keys()].sort((x, y) => {
+    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
+    return x < y ? -1 : x > y ? 1 : 0;
+  });
+  let out = "";
+  for (const e of order) {
+    const c = counts.get(e);
+    out += c === 1 ? e : `${e}${c}`;
+  }
+  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
+  return out;
+}
+async function defaultEngine(settings = {}) {
+  const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
+  const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
+  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
+  return {
+    readStructure: (text, options) => chem.readStructure(text, options),
+    describe: settings.axisOrthoMin === void 0 ? (s) => chem.describe(s) : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
+    relate: (a, b) => chem.relate(a, b),
+    formula: (s) => graph.molecularFormula(s),
+    smilesHeavyAtoms: (smiles) => {
+      let start = 0;
+      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
+      let g;
+      try {
+        g = syntax.parseSmilesGraph(smiles, start);
+      } catch {
+        return null;
+      }
+      if ("error" in g) return null;
+      const heavy = [];
+      let wildcards = 0;
+      for (const a of g.atoms) {
+        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
+        else if (a.atomicNumber !== 1) heavy.push(a.element);
+      }
+      return heavyFormula(heavy, wildcards);
+    }
+  };
+}
+var init_engine = __esm({
+  "src/audit/engine.ts"() {
+    "use strict";
+  }
+});
+
+// src/audit/findings.ts
+function isInternalError(f) {
+  return f.check === INTERNAL_ERROR_ID || f.messageId === INTERNAL_ERROR_ID;
+}
+function resolveSeverity(base, own2, configured, configuredForMessage) {
+  if (configuredForMessage !== void 0) return configuredForMessage;
+  const level2 = own2 ?? base;
+  if (configured === void 0 || level2 === "note") return level2;
+  return configured;
+}
+function messageKey(checkId, messageId) {
+  return `${checkId}/${messageId}`;
+}
+function configuredSeverity(config, key3) {
+  return Object.prototype.hasOwnProperty.call(config.severities, key3) ? config.severities[key3] : void 0;
+}
+function lineFor(loaded, field2) {
+  if (field2 !== null) {
+    const line2 = lineOf(loaded.positions, field2);
+    if (line2 !== null) return line2;
+  }
+  return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
+}
+function messageEnabled(config, checkId, messageId) {
+  return configuredSeverity(config, messageKey(checkId, messageId)) !== "off";
+}
+function toFinding(check, raw2, loaded, config) {
+  const configured = configuredSeverity(config, check.id);
+  const forMessage = configuredSeverity(config, messageKey(check.id, raw2.messageId));
+  const template = check.messages[raw2.messageId];
+  const message = template !== void 0 ? render(template, raw2.data ?? {}) : `${raw2.messageId}${Object.keys(raw2.data ?? {}).length ? ` (${JSON.stringify(raw2.data)})` : ""}`;
+  return {
+    check: check.id,
+    messageId: raw2.messageId,
+    severity: resolveSeverity(
+      check.defaultSeverity,
+      raw2.severity,
+      configured === "off" ? void 0 : configured,
+      forMessage === "off" ? void 0 : forMessage
+    ),
+    message,
+    data: raw2.data ?? {},
+    line: lineFor(loaded, raw2.field ?? null),
+    field: raw2.field ?? null,
+    waived: null,
+    ...raw2.fix === void 0 ? {} : { fix: raw2.fix }
+  };
+}
+function applyWaivers(findings, loaded) {
+  const waivers = loaded.record?.waivers ?? [];
+  if (waivers.length === 0) return;
+  for (const f of findings) {
+    if (f.check === INTERNAL_ERROR_ID) continue;
+    f.waived = acceptingWaiver(waivers, f);
+  }
+}
+function internalError(check, error, loaded) {
+  const text = error instanceof Error ? error.message : String(error);
+  return {
+    check: INTERNAL_ERROR_ID,
+    messageId: "check-failed",
+    severity: "error",
+    message: `The check ${check.id} failed with an internal error (${text}), so this record was not fully checked. This is a fault in stereogate, not in the record: please report it with the record attached.`,
+    data: { check: check.id, error: text },
+    line: loaded.origin.kind === "bulk" ? loaded.origin.line : null,
+    field: null,
+    waived: null
+  };
+}
+function budgetFinding(loaded, kind, limit) {
+  const what = kind === "time" ? `took longer than the ${limit / 1e3} s time limit` : `needed more than the ${limit} MB memory bound`;
+  return {
+    check: TIME_LIMIT_ID,
+    messageId: kind === "time" ? "time-limit-exceeded" : "memory-bound-exceeded",
+    severity: "error",
+    message: `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, leave out repeated salt or solvent parts).`,
+    data: { kind, limit },
+    line: loaded.origin.kind === "bulk" ? loaded.origin.line : lineOf(loaded.positions, "structure"),
+    field: null,
+    waived: null
+  };
+}
+function schemaFindings(loaded, config) {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  if (configured === "off") return [];
+  return loaded.problems.map((p) => ({
+    check: SCHEMA_CHECK_ID,
+    messageId: p.code ?? "record-problem",
+    severity: configured ?? "error",
+    message: p.message,
+    data: { path: p.path, problem: p.message },
+    line: p.line ?? (loaded.origin.kind === "bulk" ? loaded.origin.line : null),
+    field: p.path === "" ? null : p.path,
+    waived: null
+  }));
+}
+var SCHEMA_CHECK_ID, INTERNAL_ERROR_ID, TIME_LIMIT_ID;
+var init_findings = __esm({
+  "src/audit/findings.ts"() {
+    "use strict";
+    init_waivers();
+    init_words();
+    init_positions();
+    SCHEMA_CHECK_ID = "record-schema";
+    INTERNAL_ERROR_ID = "internal-error";
+    TIME_LIMIT_ID = "record-time-limit";
+  }
+});
+
+// src/audit/select.ts
+import { isAbsolute as isAbsolute3, relative as relative2, sep as sep2 } from "node:path";
+function normalizePath(root, path) {
+  const rel = isAbsolute3(path) ? relative2(root, path) : path;
+  const parts = [];
+  for (const part of rel.split(/[\\/]+/)) {
+    if (part === "" || part === ".") continue;
+    if (part === "..") parts.pop();
+    else parts.push(part);
+  }
+  return parts.join("/");
+}
+function byMolfile(records) {
+  const users = /* @__PURE__ */ new Map();
+  const add = (file, r) => {
+    if (file === void 0) return;
+    const list = users.get(file);
+    if (!list) users.set(file, [r]);
+    else if (list[list.length - 1] !== r) list.push(r);
+  };
+  for (const r of records) {
+    const s = r.sources;
+    if (!s) continue;
+    add(s.main?.file, r);
+    for (const c of s.components) add(c.file, r);
+  }
+  return users;
+}
+function lowerBound(sorted, file) {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = lo + hi >>> 1;
+    if (sorted[mid].file < file) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+function selectRecords(records, root, paths) {
+  const selected = /* @__PURE__ */ new Set();
+  const unmatched = [];
+  let users = null;
+  let sorted = null;
+  for (const given of paths) {
+    const p = normalizePath(root, given);
+    const escapes2 = isAbsolute3(given) && (relative2(root, given).startsWith(`..${sep2}`) || relative2(root, given) === "..");
+    let hit = false;
+    if (!escapes2) {
+      sorted ??= [...records].sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+      if (p === "") {
+        for (const r of records) selected.add(r);
+        hit = records.length > 0;
+      }
+      for (const start of p === "" ? [] : [p, `${p}/`]) {
+        for (let i = lowerBound(sorted, start); i < sorted.length; i++) {
+          const r = sorted[i];
+          if (start === p ? r.file !== p : !r.file.startsWith(start)) break;
+          selected.add(r);
+          hit = true;
+        }
+      }
+      users ??= byMolfile(records);
+      for (const r of users.get(p) ?? []) {
+        selected.add(r);
+        hit = true;
+      }
+    }
+    if (!hit) unmatched.push(given);
+  }
+  return { selected, unmatched };
+}
+var init_select = __esm({
+  "src/audit/select.ts"() {
+    "use strict";
   }
 });
 
@@ -47569,13 +49515,13 @@ function conditions(r) {
 function isSodiumD(nm) {
   return nm === void 0 || Math.abs(nm - 589) <= 1;
 }
-function run(ctx) {
-  const record2 = ctx.record;
-  if (!record2) return { findings: [], notApplicable: true };
-  const form = record2.stereo.form;
-  const rot2 = record2.stereo.rotation;
-  const sign = declaredSign(record2);
-  if (!rot2) return { findings: [], notApplicable: true };
+function run2(ctx) {
+  const record = ctx.record;
+  if (!record) return { findings: [], notApplicable: "the record was not read" };
+  const form = record.stereo.form;
+  const rot2 = record.stereo.rotation;
+  const sign = declaredSign(record);
+  if (!rot2) return { findings: [], notApplicable: "no rotation given (stereo.rotation)" };
   const tol = ctx.config.zeroRotationTolerance;
   const out = [];
   const base = { form, value: rot2.value, conditions: conditions(rot2), tolerance: tol };
@@ -47599,7 +49545,7 @@ function run(ctx) {
         },
         d ? void 0 : "note"
       );
-      const value = sign.field === "name" ? record2.name : record2.stereo.descriptors;
+      const value = sign.field === "name" ? record.name : record.stereo.descriptors;
       const fix = d && value !== void 0 ? signFix(sign.field, value, rot2.value > 0) : null;
       if (fix !== null) out[out.length - 1].fix = fix;
     }
@@ -47613,13 +49559,13 @@ function run(ctx) {
     passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}`
   };
 }
-var messages, WHY, rotationConsistent;
+var messages2, WHY, rotationConsistent;
 var init_rotation_consistent = __esm({
   "src/checks/rotation-consistent.ts"() {
     "use strict";
     init_words();
     init_fixes();
-    messages = {
+    messages2 = {
       "rotation-should-be-zero": "Declared {form}, but the specific rotation is {value}° ({conditions}); it should be zero within ±{tolerance}°, because {why}. Check the sample (an enantiomeric excess, an optically active impurity) or the form.",
       "sign-disagrees-with-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}). Correct the sign in the name or descriptors, or re-check the measurement.{wavelengthNote}",
       "sign-with-zero-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. A sign needs a measurable rotation: measure at higher concentration or another wavelength, or drop the sign.",
@@ -47635,8 +49581,8 @@ var init_rotation_consistent = __esm({
       defaultSeverity: "error",
       summary: "The specific rotation agrees with the declared form and with the (+)/(−) sign in the name.",
       explanation: "Optical activity needs chiral molecules in enantiomeric excess: an achiral or meso compound is optically inactive, and a racemate is optically inactive because its enantiomers rotate equally in opposite senses (IUPAC Gold Book: optical activity, racemate, meso). The prefixes (+) and (−) state the sign of rotation, normally at the sodium D line, 589 nm (IUPAC 2013, P-93). A single enantiomer with zero rotation is possible but rare and is only noted. What counts as zero is a registry setting (zeroRotationTolerance).",
-      messages,
-      run
+      messages: messages2,
+      run: run2
     };
   }
 });
@@ -47799,20 +49745,20 @@ function compareWithRegistry(me, matches, mode, config, underReview = () => fals
     }
   }
   const identical = pairs.filter((p) => p.relation === "identical").length;
-  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${identical} other record(s)` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${compared - identical} registered record(s)` : ""}; forms and rotations agree`;
+  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}; forms and rotations agree`;
   return { findings: out, passed, pairs };
 }
-function run2() {
-  return { findings: [], notApplicable: true };
+function run3() {
+  return { findings: [], notApplicable: "runs in the registry-wide phase" };
 }
-var messages2, ENANTIOPURE, consistentWithRegistry;
+var messages3, ENANTIOPURE, consistentWithRegistry;
 var init_consistent_with_registry = __esm({
   "src/checks/consistent-with-registry.ts"() {
     "use strict";
     init_rotation_consistent();
     init_solvents();
     init_words();
-    messages2 = {
+    messages3 = {
       "already-registered": "This structure is identical to {otherId} ({otherFile}{otherName}), already registered as {otherForm}. Register a new batch under {otherId} instead, or, if this is a different substance, correct the structure.",
       "same-structure-different-form": "This structure is identical to {otherId} ({otherFile}), but {otherId} is registered as {otherForm} and this record declares {form}. The same drawn structure cannot be both; decide which form is right and correct the other record.",
       "same-structure-other-purity": "This structure is identical to {otherId} ({otherFile}), registered as {otherForm}; this record declares {form}. The same enantiomer at another enantiomeric purity: register it as a batch of {otherId} if your SOP allows, or keep it separate on purpose.",
@@ -47828,11 +49774,546 @@ var init_consistent_with_registry = __esm({
       defaultSeverity: "error",
       summary: "A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.",
       explanation: "Every record contributes keys to a registry index: its constitution, and each stereo unit's canonical class with its CIP descriptor (IUPAC 2013, P-92.1), as drawn and as its mirror image (src/registry/keys.ts). Two records with equal keys are the same stereoisomer; one whose key equals the other's mirror key is its enantiomer (where the keys cannot tell, the engine relates the two structures). An identical structure is the same compound: register a batch, not a new number; under a different form one record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). A racemic drawing (AND group) is compared only with racemic drawings, a relative one (OR group) only with relative ones; a drawing with undefined stereo units is compared with none. Each finding is said once (common practice, no source): in a pull request on the record under review (on the one registered later when both are); in a full audit on the later record in the audit's order (file path order, numbers as numbers; input order for exports), and enantiomer pairs and duplicates are listed once in the summary. Registering both enantiomers is normal and is not a finding of a full audit.",
-      messages: messages2,
+      messages: messages3,
       requires: ["structure", "registry"],
       scope: "registry",
-      run: run2
+      run: run3
     };
+  }
+});
+
+// src/registry/keys.ts
+function drawingKind(f) {
+  const m = f.enhanced.meaning;
+  if (m === "racemic" || m === "mixture") return "racemic";
+  if (m === "relative") return "relative";
+  return "as-drawn";
+}
+function recordKeys(f, text) {
+  const kind = drawingKind(f);
+  const base = { constitution: f.constitutionKey, kind, chiral: f.chiral };
+  if (f.units.some((u) => !u.defined)) return { ...base, stereo: null, mirror: null, exact: false };
+  let exact = true;
+  const seen = /* @__PURE__ */ new Set();
+  const own2 = [];
+  const mirrored2 = [];
+  for (const u of f.units) {
+    if (seen.has(u.classKey) || u.label === null || u.label === "e" || u.label === "z") exact = false;
+    seen.add(u.classKey);
+    const label = u.label === null ? "?" : u.label === "e" || u.label === "z" ? "ez" : u.label;
+    own2.push(`${u.classKey}=${label}`);
+    mirrored2.push(`${u.classKey}=${(u.label && MIRRORED[u.label]) ?? label}`);
+  }
+  own2.sort();
+  mirrored2.sort();
+  const keys = {
+    ...base,
+    stereo: `${kind}|${own2.join(";")}`,
+    mirror: `${kind}|${mirrored2.join(";")}`,
+    exact
+  };
+  if (!exact && text) keys.text = text;
+  return keys;
+}
+var MIRRORED;
+var init_keys = __esm({
+  "src/registry/keys.ts"() {
+    "use strict";
+    MIRRORED = { R: "S", S: "R", M: "P", P: "M" };
+  }
+});
+
+// src/audit/structures.ts
+function failed(message, line2 = null, offset = null, code) {
+  return { structure: null, facts: null, error: { message, line: line2, offset, ...code ? { code } : {} } };
+}
+function readOnly(source, engine) {
+  if (source === null) return { structure: null, failure: NOTHING };
+  if (source.text === null)
+    return { structure: null, failure: failed(source.error ?? "the structure could not be read") };
+  let read;
+  try {
+    read = engine.readStructure(source.text, { format: source.format });
+  } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
+    const what = source.format === "smiles" ? "SMILES" : "molfile";
+    return {
+      structure: null,
+      failure: failed(`internal error while reading the ${what}: ${e.message}`)
+    };
+  }
+  if (!read.ok) {
+    const what = source.format === "smiles" ? "SMILES" : source.file ? `molfile ${source.file}` : "molfile";
+    return {
+      structure: null,
+      failure: failed(
+        `${what}: ${read.error.message}`,
+        read.error.at.line ?? null,
+        read.error.at.offset ?? null,
+        read.error.code
+      )
+    };
+  }
+  return { structure: read.structure, failure: null };
+}
+function describeRead(read, engine) {
+  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
+  try {
+    return { structure: read.structure, facts: engine.describe(read.structure), error: null };
+  } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
+    return {
+      structure: read.structure,
+      facts: null,
+      error: {
+        message: `internal error while describing the structure: ${e.message}`,
+        line: null,
+        offset: null
+      }
+    };
+  }
+}
+function readSource(source, engine) {
+  return describeRead(readOnly(source, engine), engine);
+}
+function sourcesOf(loaded) {
+  if (loaded.sources) return loaded.sources;
+  const rec = loaded.record;
+  const one = (ref, field2) => {
+    if (!ref) return null;
+    if (typeof ref.smiles === "string") return { field: field2, format: "smiles", text: ref.smiles };
+    if (typeof ref.molfile === "string") {
+      return {
+        field: field2,
+        format: "molfile",
+        text: null,
+        error: `molfile '${ref.molfile}' was not fetched (no file context)`
+      };
+    }
+    return null;
+  };
+  const components = (rec?.stereo.components ?? []).map(
+    (c, i) => one(c, `stereo.components.${i}`) ?? {
+      field: `stereo.components.${i}`,
+      format: "smiles",
+      text: null,
+      error: "no structure given"
+    }
+  );
+  return { main: one(rec?.structure, "structure"), components };
+}
+var NOTHING, StructureCache;
+var init_structures = __esm({
+  "src/audit/structures.ts"() {
+    "use strict";
+    init_budget();
+    NOTHING = Object.freeze({
+      structure: null,
+      facts: null,
+      error: {
+        message: "the record gives no structure (structure.smiles or structure.molfile)",
+        line: null,
+        offset: null
+      }
+    });
+    StructureCache = class {
+      constructor(engine) {
+        this.engine = engine;
+      }
+      engine;
+      reads = /* @__PURE__ */ new WeakMap();
+      mains = /* @__PURE__ */ new WeakMap();
+      comps = /* @__PURE__ */ new WeakMap();
+      /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
+      read(loaded) {
+        let r = this.reads.get(loaded);
+        if (!r) {
+          r = readOnly(sourcesOf(loaded).main, this.engine);
+          this.reads.set(loaded, r);
+        }
+        return r;
+      }
+      main(loaded) {
+        let m = this.mains.get(loaded);
+        if (!m) {
+          m = describeRead(this.read(loaded), this.engine);
+          this.mains.set(loaded, m);
+        }
+        return m;
+      }
+      components(loaded) {
+        let c = this.comps.get(loaded);
+        if (!c) {
+          c = sourcesOf(loaded).components.map((s) => readSource(s, this.engine));
+          this.comps.set(loaded, c);
+        }
+        return c;
+      }
+      all(loaded) {
+        return { main: this.main(loaded), components: this.components(loaded) };
+      }
+    };
+  }
+});
+
+// src/audit/index-row.ts
+function indexRow(loaded, main, seq) {
+  const record = loaded.record;
+  let keys = null;
+  if (record !== null && main.facts) {
+    const src = sourcesOf(loaded).main;
+    keys = recordKeys(main.facts, src && src.text !== null ? { format: src.format, text: src.text } : null);
+  }
+  return {
+    seq,
+    id: loaded.id,
+    file: loaded.file,
+    name: record?.name ?? null,
+    form: record?.stereo.form ?? "unknown",
+    rotation: record?.stereo.rotation ?? null,
+    keys,
+    lines: {
+      id: lineFor(loaded, "id"),
+      structure: lineFor(loaded, "structure"),
+      rotation: lineFor(loaded, "stereo.rotation.value")
+    },
+    waivers: waiversOf(record, consistentWithRegistry.id)
+  };
+}
+var init_index_row = __esm({
+  "src/audit/index-row.ts"() {
+    "use strict";
+    init_consistent_with_registry();
+    init_waivers();
+    init_keys();
+    init_findings();
+    init_structures();
+  }
+});
+
+// src/registry/key-index.ts
+var RegistryIndex;
+var init_key_index = __esm({
+  "src/registry/key-index.ts"() {
+    "use strict";
+    RegistryIndex = class {
+      constructor(confirm = null) {
+        this.confirm = confirm;
+      }
+      confirm;
+      byKey = /* @__PURE__ */ new Map();
+      /** Rows filed (records with a stereo key). */
+      size = 0;
+      add(row) {
+        const k = row.keys;
+        if (k === null || k.stereo === null) return;
+        const key3 = `${k.constitution}#${k.stereo}`;
+        const classes = this.byKey.get(key3);
+        if (!classes) this.byKey.set(key3, [{ rows: [row] }]);
+        else {
+          const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
+          if (same) same.rows.push(row);
+          else classes.push({ rows: [row] });
+        }
+        this.size++;
+      }
+      /** Removes a row added before (a record file replaced by its new version). */
+      remove(row) {
+        const k = row.keys;
+        if (k === null || k.stereo === null) return;
+        const key3 = `${k.constitution}#${k.stereo}`;
+        const classes = this.byKey.get(key3);
+        if (!classes) return;
+        for (let ci = 0; ci < classes.length; ci++) {
+          const at2 = classes[ci].rows.indexOf(row);
+          if (at2 < 0) continue;
+          classes[ci].rows.splice(at2, 1);
+          if (classes[ci].rows.length === 0) classes.splice(ci, 1);
+          if (classes.length === 0) this.byKey.delete(key3);
+          this.size--;
+          return;
+        }
+      }
+      /**
+       * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
+       * were added; `me` itself left out.
+       */
+      matches(me) {
+        const k = me.keys;
+        if (k === null || k.stereo === null || k.mirror === null) return [];
+        const out = [];
+        const consider = (key3, expected) => {
+          for (const c of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
+            const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
+            if (!other) continue;
+            const relation = other.keys && this.relationOf(k, other.keys, expected);
+            if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
+          }
+        };
+        consider(k.stereo, "identical");
+        if (k.mirror !== k.stereo) consider(k.mirror, "enantiomers");
+        out.sort((a, b) => a.other.seq - b.other.seq);
+        return out;
+      }
+      relationOf(a, b, expected) {
+        if (a.exact && b.exact) return expected;
+        if (!a.text || !b.text || !this.confirm) return null;
+        const r = this.confirm(a, b);
+        return r === "identical" || r === "enantiomers" ? r : null;
+      }
+    };
+  }
+});
+
+// src/audit/registry-phase.ts
+function notRunSummary(reason, records) {
+  return { status: "not-run", reason, records, pairs: [] };
+}
+function rowFinding(raw2, row, config) {
+  const lines2 = {
+    id: row.lines.id,
+    structure: row.lines.structure,
+    "stereo.rotation.value": row.lines.rotation ?? row.lines.structure
+  };
+  const positions2 = {
+    get: (path) => lines2[path] != null ? { line: lines2[path], column: 1 } : void 0
+  };
+  const loaded = {
+    file: row.file,
+    id: row.id,
+    record: null,
+    positions: positions2,
+    problems: [],
+    origin: { kind: "file" }
+  };
+  const f = toFinding(CHECK, raw2, loaded, config);
+  return { ...f, waived: acceptingWaiver(row.waivers ?? [], f) };
+}
+function duplicateId(row, first, config) {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  const message = `id: '${row.id}' is also used by ${first}; every record needs its own id`;
+  return {
+    check: SCHEMA_CHECK_ID,
+    messageId: "duplicate-id",
+    severity: configured === "off" || configured === void 0 ? "error" : configured,
+    message,
+    data: { path: "id", problem: message },
+    line: row.lines.id,
+    field: "id",
+    waived: null
+  };
+}
+var CHECK, RegistryPhase;
+var init_registry_phase = __esm({
+  "src/audit/registry-phase.ts"() {
+    "use strict";
+    init_consistent_with_registry();
+    init_waivers();
+    init_key_index();
+    init_findings();
+    CHECK = consistentWithRegistry;
+    RegistryPhase = class {
+      constructor(options) {
+        this.options = options;
+        this.index = new RegistryIndex(options.confirm);
+        this.enabled = configuredSeverity(options.config, CHECK.id) !== "off";
+      }
+      options;
+      index;
+      pairs = [];
+      firstWithId = /* @__PURE__ */ new Map();
+      records = 0;
+      enabled;
+      underReview = /* @__PURE__ */ new Set();
+      /** Review mode: records of the registry filed, under review or not. */
+      registryRecords = 0;
+      /** The lookup keys of the records under review (review mode, set by `reviewing`): other keys are not filed. */
+      reach = null;
+      /**
+       * Review mode, before any `file`: the records that will be under review. A record of the registry whose keys
+       * none of them looks up is then not filed: the same findings, without forming classes no lookup visits (which
+       * may call `confirm`).
+       */
+      reviewing(rows) {
+        this.reach = /* @__PURE__ */ new Set();
+        for (const r of rows) {
+          const k = r.keys;
+          if (k === null || k.stereo === null || k.mirror === null) continue;
+          this.reach.add(`${k.constitution}#${k.stereo}`);
+          this.reach.add(`${k.constitution}#${k.mirror}`);
+        }
+      }
+      /** Review mode: a record of the registry, not under review (added before any `review`). */
+      file(row) {
+        this.registryRecords++;
+        const k = row.keys;
+        if (this.reach && k !== null && k.stereo !== null && !this.reach.has(`${k.constitution}#${k.stereo}`))
+          return;
+        this.index.add(row);
+      }
+      /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
+      fileUnderReview(row) {
+        this.registryRecords++;
+        this.underReview.add(row);
+        this.index.add(row);
+      }
+      /** Full mode: the next record in the audit's order. Review mode: a record under review (filed before). */
+      next(row) {
+        this.records++;
+        const findings = [];
+        if (this.options.duplicateIds && row.id !== null) {
+          const first = this.firstWithId.get(row.id);
+          if (first === void 0) this.firstWithId.set(row.id, row.file);
+          else if (configuredSeverity(this.options.config, SCHEMA_CHECK_ID) !== "off")
+            findings.push(duplicateId(row, first, this.options.config));
+        }
+        if (!this.enabled || row.keys === null) {
+          if (this.options.mode === "full") this.index.add(row);
+          return { findings, passed: null };
+        }
+        const full = this.options.mode === "full";
+        const matches = this.index.matches(row);
+        const c = compareWithRegistry(
+          row,
+          matches,
+          this.options.mode,
+          this.options.config,
+          (r) => this.underReview.has(r)
+        );
+        if (full) this.index.add(row);
+        this.pairs.push(...c.pairs);
+        for (const raw2 of c.findings)
+          if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
+            findings.push(rowFinding(raw2, row, this.options.config));
+        const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
+        return { findings, passed };
+      }
+      summary() {
+        const how = this.options.mode === "full" ? `every record with each record before it through an index of ${this.index.size} records' keys` : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
+        return {
+          status: this.enabled ? "run" : "not-run",
+          reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
+          records: this.records,
+          pairs: this.pairs
+        };
+      }
+    };
+  }
+});
+
+// package.json
+var package_default;
+var init_package = __esm({
+  "package.json"() {
+    package_default = {
+      name: "stereogate",
+      version: "0.1.0",
+      description: "Audits compound-registration records for stereochemical consistency: stereo perception, CIP labels, mirror-image and symmetry analysis, stereoisomer counts, structure relations.",
+      type: "module",
+      license: "MIT",
+      engines: {
+        node: ">=20"
+      },
+      bin: {
+        stereogate: "bin/stereogate.js"
+      },
+      scripts: {
+        build: "node scripts/bundle.mjs",
+        typecheck: "tsc -p tsconfig.json --noEmit",
+        demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
+        test: "vitest run",
+        bench: "node --import tsx bench/run.ts",
+        lint: "eslint .",
+        format: "prettier --write .",
+        bundle: "node scripts/bundle.mjs"
+      },
+      dependencies: {
+        "@actions/core": "^3.0.1",
+        "@actions/http-client": "^4.0.1",
+        ajv: "^8.20.0",
+        "cli-progress": "^3.12.0",
+        "csv-parse": "^7.0.3",
+        openchemlib: "^9.25.0",
+        tsx: "^4.23.15",
+        undici: "^6.29.1",
+        yaml: "^2.9.1"
+      },
+      devDependencies: {
+        "@eslint/js": "^9.39.5",
+        "@rdkit/rdkit": "^2026.9.1",
+        "@types/cli-progress": "^3.11.6",
+        "@types/node": "^20.19.43",
+        "@vitest/coverage-v8": "^4.1.12",
+        esbuild: "^0.28.2",
+        eslint: "^9.39.5",
+        "fast-check": "^4.11.0",
+        micromark: "^4.0.3",
+        "micromark-extension-gfm": "^3.0.0",
+        nock: "^14.0.9",
+        "playwright-core": "^1.65.1",
+        prettier: "^3.10.1",
+        typescript: "^5.9.3",
+        "typescript-eslint": "^8.74.0",
+        vitest: "^4.1.12"
+      }
+    };
+  }
+});
+
+// src/audit/version.ts
+var VERSION;
+var init_version = __esm({
+  "src/audit/version.ts"() {
+    "use strict";
+    init_package();
+    VERSION = package_default.version;
+  }
+});
+
+// src/audit/view.ts
+function entryOf(loaded, cache2, underReview) {
+  const record = loaded.record;
+  if (record === null) return null;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    record,
+    get main() {
+      return cache2.main(loaded);
+    },
+    underReview
+  };
+}
+function buildRegistryView(records, cache2, underReview) {
+  const entries = [];
+  for (const loaded of records) {
+    const e = entryOf(loaded, cache2, underReview(loaded));
+    if (e) entries.push(e);
+  }
+  return { entries };
+}
+function lazyRegistryView(own2, cache2, load, all, ids) {
+  const seen = /* @__PURE__ */ new Map();
+  let entries = null;
+  const view = {
+    get entries() {
+      entries ??= all().flatMap((l) => entryOf(l, cache2, l.file === own2.file) ?? []);
+      return entries;
+    },
+    byId(id) {
+      if (!seen.has(id)) {
+        const l = load(id);
+        seen.set(id, l ? entryOf(l, cache2, l.file === own2.file) ?? void 0 : void 0);
+      }
+      return seen.get(id);
+    }
+  };
+  if (ids) view.ids = ids;
+  return view;
+}
+var init_view = __esm({
+  "src/audit/view.ts"() {
+    "use strict";
   }
 });
 
@@ -47843,22 +50324,24 @@ function claimRestsOnlyOnNitrogen(ctx) {
   return f !== null && form !== void 0 && STEREO_CLAIM_FORMS.includes(form) && f.units.length === 0 && f.invertibleNitrogens.length > 0 && !["off", "note"].includes(ctx.config.severities[NITROGEN_CHECK_ID] ?? "error");
 }
 function statedDescriptors(ctx) {
-  const record2 = ctx.record;
-  const decl = declaredDescriptors(record2);
+  const record = ctx.record;
+  const decl = declaredDescriptors(record);
   if (decl.field && decl.field.items.length > 0)
-    return ` and drop ${record2?.stereo.descriptors ?? ""} from stereo.descriptors`;
+    return ` and drop ${record?.stereo.descriptors ?? ""} from stereo.descriptors`;
   if (decl.name && decl.name.items.length > 0) {
-    const name = record2?.name ?? "";
+    const name = record?.name ?? "";
     const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2014\u2212\uFE63\uFF0D\u02D7]+$/, "");
     return ` and drop ${front} from the name`;
   }
   return "";
 }
-function run3(ctx) {
-  const record2 = ctx.record;
+function run4(ctx) {
+  const record = ctx.record;
   const f = ctx.main.facts;
-  if (!record2 || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
-  const form = record2.stereo.form;
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
+  if (f.invertibleNitrogens.length === 0)
+    return { findings: [], notApplicable: "the structure has no amine nitrogen that inverts" };
+  const form = record.stereo.form;
   const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
   const out = [];
   const claims = STEREO_CLAIM_FORMS.includes(form);
@@ -47882,19 +50365,23 @@ function run3(ctx) {
     );
   }
   if (out.some((x) => x.severity !== "note")) return { findings: out };
-  if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
+  if (out.length === 0 && drawn.length === 0)
+    return {
+      findings: [],
+      notApplicable: "no stereo drawn at an amine nitrogen and no claim resting on one"
+    };
   return {
     findings: out,
-    passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens`
+    passed: `the claim rests on ${plural(others2.length, "stereo unit")} other than amine nitrogens`
   };
 }
-var NITROGEN_CHECK_ID, messages3, nitrogenInversion;
+var NITROGEN_CHECK_ID, messages4, nitrogenInversion;
 var init_nitrogen_inversion = __esm({
   "src/checks/nitrogen-inversion.ts"() {
     "use strict";
     init_words();
     NITROGEN_CHECK_ID = "nitrogen-inversion";
-    messages3 = {
+    messages4 = {
       "claim-rests-on-invertible-nitrogen": "Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier roughly 30–40 kJ/mol for simple trialkylamines, about 24 kJ/mol for ammonia — values from memory; a configuration that can be isolated at room temperature needs roughly 100 kJ/mol), so its two configurations interconvert and cannot be isolated: the structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's base, an aziridine, a quaternary ammonium ion), draw that feature.",
       "stereo-drawn-on-invertible-nitrogen": "The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at room temperature; that configuration means nothing. The claim rests on the other stereo units, which is fine; remove the wedge or @ mark at that nitrogen."
     };
@@ -47903,9 +50390,9 @@ var init_nitrogen_inversion = __esm({
       defaultSeverity: "error",
       summary: "A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.",
       explanation: "A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar transition state with a low barrier (from memory: about 24 kJ/mol for ammonia, roughly 30–40 kJ/mol for simple trialkylamines; invertomers that can be isolated at room temperature need a barrier of roughly 100 kJ/mol, also from memory), so its enantiomers interconvert rapidly at room temperature and cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim rests on nothing else, this check carries the error; the form, descriptor and reading checks report their side of the same root cause as notes.",
-      messages: messages3,
+      messages: messages4,
       requires: ["structure"],
-      run: run3
+      run: run4
     };
   }
 });
@@ -47931,7 +50418,7 @@ function escapingPath(recordFile, path) {
   const resolved = posix.normalize(posix.join(posix.dirname(recordFile), path.replace(/\\/g, "/")));
   return resolved === ".." || resolved.startsWith("../") ? resolved : null;
 }
-function run4(ctx) {
+function run5(ctx) {
   const findings = [];
   const add = (id, field3, data) => {
     findings.push(finding(id, field3, data));
@@ -48003,19 +50490,19 @@ function run4(ctx) {
   if (findings.some((f) => f.severity !== "note")) return { findings };
   const facts = ctx.main.facts;
   const atoms = ctx.main.structure?.atoms.length;
-  const what = [atoms !== void 0 ? `${atoms} atoms` : null, facts?.formula || null].filter(Boolean).join(", ");
-  const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : "";
-  const nitrogen = leftToNitrogen ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion` : "";
+  const what = [atoms !== void 0 ? plural(atoms, "atom") : null, facts?.formula || null].filter(Boolean).join(", ");
+  const comps = ctx.components.length ? `; ${plural(ctx.components.length, "component structure")} read` : "";
+  const nitrogen = leftToNitrogen ? `; ${plural(leftToNitrogen, "remark")} on amine nitrogens left to nitrogen-inversion` : "";
   const copies = saltRemarks.length ? `; ${saltRemarks.join("; ")}` : "";
   return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}${copies}${nitrogen}` };
 }
-var messages4, OVER_LIMIT, structureReadable;
+var messages5, OVER_LIMIT, structureReadable;
 var init_structure_readable = __esm({
   "src/checks/structure-readable.ts"() {
     "use strict";
     init_words();
     init_nitrogen_inversion();
-    messages4 = {
+    messages5 = {
       "structure-unreadable": "The structure in {field} could not be read: {error}{where}. Nothing about its stereochemistry can be checked. Correct the SMILES or molfile (check ring-closure digits, brackets and the counts line) and resubmit.",
       "structure-over-limit": "The structure in {field} was not analysed: {error}. The size limits keep every record within the time limit; split a mixture into its records, or leave out repeated salt or solvent parts, and resubmit.",
       "component-unreadable": "Component {index} ({field}) could not be read: {error}{where}. The mixture cannot be checked against it. Correct that structure.",
@@ -48030,18 +50517,18 @@ var init_structure_readable = __esm({
       defaultSeverity: "error",
       summary: "The structure (SMILES or molfile) can be read, and a molfile path stays inside the registry.",
       explanation: "Every other check works on the structure, so a structure that cannot be read leaves the stereo claim unchecked. SMILES are read by the OpenSMILES specification, molfiles by the CTfile format specification (V2000 and V3000). A molfile is named by a path relative to the record file; a path that leaves the registry (.., an absolute path, or a symbolic link out) is refused, so that a pull request cannot make the audit read files elsewhere on the machine.",
-      messages: messages4,
-      run: run4
+      messages: messages5,
+      run: run5
     };
   }
 });
 
 // src/checks/form-mixtures.ts
 function mixtureFindings(ctx, parent) {
-  const record2 = ctx.record;
-  if (!record2) return [];
-  const form = record2.stereo.form;
-  const comps = record2.stereo.components ?? [];
+  const record = ctx.record;
+  if (!record) return [];
+  const form = record.stereo.form;
+  const comps = record.stereo.components ?? [];
   const out = [];
   const field2 = "stereo.components";
   if (form === "diastereomer-mixture" && comps.length < 2) {
@@ -48095,13 +50582,13 @@ var init_form_mixtures = __esm({
     "use strict";
     init_words();
     mixtureMessages = {
-      "mixture-needs-components": "Declared diastereomer-mixture with {count} component(s) under stereo.components; a mixture needs two or more, each drawn with its configuration. List the components.",
+      "mixture-needs-components": "Declared diastereomer-mixture with {count:component|components} under stereo.components; a mixture needs two or more, each drawn with its configuration. List the components.",
       "mixture-components-identical": "Components {a} and {b} are the same stereoisomer ({explanation}). A diastereomer mixture lists each diastereomer once; remove the duplicate or correct its configuration.",
       "mixture-components-enantiomers": "Components {a} and {b} are enantiomers, not diastereomers ({explanation}). A mixture of two enantiomers is a racemate (1:1) or an enantioenriched sample; declare that form, or correct a configuration.",
       "mixture-components-unrelated": "Components {a} and {b} are {relation}, not diastereomers of each other ({explanation}). The components of a diastereomer mixture differ only in configuration, and each is fully defined.",
       "mixture-component-constitution": "Component {a} ({componentFormula}) does not have the constitution of the parent structure ({parentFormula}). Each component must be a stereoisomer of the registered structure.",
       "racemate-components-not-enantiomers": "The racemate lists components {a} and {b}, which are {relation}, not enantiomers ({explanation}). A racemate is a 1:1 mixture of two enantiomers; correct the components or the form.",
-      "racemate-components-count": "The racemate lists {count} component(s); a racemate consists of exactly two enantiomers. List both, or none."
+      "racemate-components-count": "The racemate lists {count:component|components}; a racemate consists of exactly two enantiomers. List both, or none."
     };
   }
 });
@@ -48143,11 +50630,11 @@ function achiralRemedy(f, labels, nitrogen) {
   }
   return `No stereoisomer of this constitution is chiral, so no configuration can make it so (drawn: ${labels}): declare achiral (single-diastereomer for one cis/trans isomer), or correct the structure.`;
 }
-function run5(ctx) {
+function run6(ctx) {
   const f = ctx.main.facts;
-  const record2 = ctx.record;
-  if (!record2 || !f) return { findings: [], notApplicable: true };
-  const form = record2.stereo.form;
+  const record = ctx.record;
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
+  const form = record.stereo.form;
   const e = evidence(f, ctx.main.structure);
   const out = [];
   const nitrogen = claimRestsOnlyOnNitrogen(ctx) ? f.invertibleNitrogens.map((n) => `nitrogen (atom ${n.atom})`).join(", ") : null;
@@ -48209,7 +50696,9 @@ function run5(ctx) {
         const a = f.stereoisomers.achiral;
         add(
           "racemate-which-diastereomer",
-          { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : "" },
+          {
+            achiralPart: a ? ` and ${a} achiral ${String(a) === "1" ? "stereoisomer" : "stereoisomers"}` : ""
+          },
           "warning"
         );
       }
@@ -48235,7 +50724,7 @@ function passedEvidence(form, f, e) {
   const why = f.chiral !== null && f.mirror.explanation ? ` — ${e.mirror}` : "";
   return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
-var messages5, formMatchesStructure;
+var messages6, formMatchesStructure;
 var init_form_matches_structure = __esm({
   "src/checks/form-matches-structure.ts"() {
     "use strict";
@@ -48243,20 +50732,20 @@ var init_form_matches_structure = __esm({
     init_words();
     init_form_mixtures();
     init_nitrogen_inversion();
-    messages5 = {
+    messages6 = {
       "achiral-but-chiral": "Declared achiral, but the structure is chiral: it has {allUnits} and its mirror image is a different molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.",
-      "achiral-but-open": "Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
+      "achiral-but-open": "Declared achiral, but {undefinedCount:stereo unit is|stereo units are} left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
       "achiral-is-meso": "Declared achiral. The structure is indeed achiral ({mirror}), but its constitution also has chiral stereoisomers ({chiralIsomers} of {totalIsomers}), which makes this one a meso compound. Declare meso.",
       "meso-but-chiral": "Declared meso, but the structure is chiral: it defines {units} and its mirror image is a different molecule ({mirror}). A meso compound is achiral. Check the configurations ({labels}) or declare single-enantiomer.",
-      "meso-but-no-chiral-isomers": "Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so the compound is simply achiral: meso applies only to an achiral member of a set that includes chiral members. Declare achiral.",
-      "meso-but-open": "Declared meso, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}); the drawing also covers chiral stereoisomers. Define every unit as in the meso form.",
+      "meso-but-no-chiral-isomers": "Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, achiral|stereoisomers, all achiral}), so the compound is simply achiral: meso applies only to an achiral member of a set that includes chiral members. Declare achiral.",
+      "meso-but-open": "Declared meso, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}); the drawing also covers chiral stereoisomers. Define every unit as in the meso form.",
       "enantiomer-but-achiral": "Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and no enantiomeric excess. {remedy}",
-      "enantiomer-undefined-units": "Declared {form}, but {undefinedCount} stereo unit(s) are undefined: {undefinedUnits}. The structure then stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.",
+      "enantiomer-undefined-units": "Declared {form}, but {undefinedCount:stereo unit is|stereo units are} undefined: {undefinedUnits}. The structure then stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.",
       "racemate-but-achiral": "Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a racemate. {remedy}",
-      "racemate-no-chiral-isomers": "Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so there are no enantiomers to mix. Declare achiral.",
-      "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount} undefined stereo unit(s) ({undefinedUnits}). This constitution has {pairs} pair(s) of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
-      "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount} stereo unit(s) ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
-      "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
+      "racemate-no-chiral-isomers": "Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, achiral|stereoisomers, all achiral}), so there are no enantiomers to mix. Declare achiral.",
+      "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount:undefined stereo unit|undefined stereo units} ({undefinedUnits}). This constitution has {pairs:pair|pairs} of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
+      "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount:stereo unit|stereo units} ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
+      "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
       "enantiomer-but-drawn-mixture": "Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows (racemate, enantioenriched, diastereomer-mixture).",
       "racemate-drawn-not-racemic": "Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.",
       "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the claim checked.",
@@ -48267,9 +50756,9 @@ var init_form_matches_structure = __esm({
       defaultSeverity: "error",
       summary: "The declared stereo form agrees with the chirality, meso character and defined units of the structure.",
       explanation: "IUPAC Gold Book definitions: a chiral molecule is not superimposable on its mirror image; enantiomers are mirror-image stereoisomers; a racemate is an equimolar mixture of a pair of enantiomers, so it needs a chiral structure; a meso compound is the achiral member of a set of diastereoisomers that also includes chiral members; diastereoisomers are stereoisomers that are not enantiomers (cis-trans isomers included). A single enantiomer therefore needs a chiral structure with every stereo unit defined, a single diastereomer two or more stereogenic units (or a stereogenic double bond), and a diastereomer mixture two or more components that are pairwise diastereomers with the constitution of the parent. The evidence is the engine's mirror-image analysis (the symmetry element that makes a structure achiral) and its stereoisomer count.",
-      messages: messages5,
+      messages: messages6,
       requires: ["structure"],
-      run: run5
+      run: run6
     };
   }
 });
@@ -48278,20 +50767,24 @@ var init_form_matches_structure = __esm({
 function atomList(atoms) {
   return atoms.length === 1 ? `atom ${atoms[0]}` : `atoms ${atoms.join(", ")}`;
 }
-function run6(ctx) {
+function run7(ctx) {
   const f = ctx.main.facts;
-  const record2 = ctx.record;
-  if (!record2 || !f) return { findings: [], notApplicable: true };
-  const form = record2.stereo.form;
+  const record = ctx.record;
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
+  const form = record.stereo.form;
   const groups = f.enhanced.groups;
   const defined = definedUnits(f);
-  if (groups.length === 0 && defined.length === 0) return { findings: [], notApplicable: true };
+  if (groups.length === 0 && defined.length === 0)
+    return {
+      findings: [],
+      notApplicable: "the structure has no enhanced-stereo group and no defined stereo unit"
+    };
   const and = groups.filter((g) => g.type === "and");
   const or = groups.filter((g) => g.type === "or");
-  const decl = declaredDescriptors(record2);
+  const decl = declaredDescriptors(record);
   const parsed = decl.field ?? decl.name;
   const descField = decl.field ? "stereo.descriptors" : "name";
-  const descText = decl.field ? record2.stereo.descriptors ?? "" : record2.name ?? "";
+  const descText = decl.field ? record.stereo.descriptors ?? "" : record.name ?? "";
   const out = [];
   const add = (id, field2, data, severity) => {
     out.push(finding(id, field2, { form, meaning: f.enhanced.meaning, ...data }, severity));
@@ -48353,12 +50846,12 @@ function run6(ctx) {
     passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}`
   };
 }
-var messages6, enhancedStereoMatchesForm;
+var messages7, enhancedStereoMatchesForm;
 var init_enhanced_stereo_matches_form = __esm({
   "src/checks/enhanced-stereo-matches-form.ts"() {
     "use strict";
     init_words();
-    messages6 = {
+    messages7 = {
       "and-group-with-single-enantiomer": 'Declared single-enantiomer, but the structure puts {atoms} in an AND group (&{group}), which means "this stereoisomer and its mirror image, together" — a racemic or enantiomer-mixture drawing. Remove the AND group (absolute stereo) or declare racemate / enantioenriched.',
       "or-group-with-racemate": 'Declared racemate, but the structure puts {atoms} in an OR group (or{group}), which means "this stereoisomer or its mirror image, unknown which" — one enantiomer, not a mixture. Use an AND group for a racemate, or declare single-enantiomer with relative descriptors (rel- or R*).',
       "racemate-drawn-absolute": "Declared racemate, but the structure is drawn as one enantiomer with absolute stereo ({labels}; no AND group{flag}). A racemate is drawn with its centres in an AND group (&1), or without stereo marks when it has one stereocentre. Add the AND group, or correct the form.",
@@ -48372,9 +50865,9 @@ var init_enhanced_stereo_matches_form = __esm({
       defaultSeverity: "error",
       summary: "Enhanced-stereo groups (ABS, AND, OR) agree with the declared form and descriptors.",
       explanation: "Enhanced stereo, as defined in the CTfile format specification (V3000 collection blocks MDLV30/STEABS, STERAC, STEREL) and CXSMILES, says what a drawn configuration stands for: ABS — this stereoisomer; AND (racemic group) — this stereoisomer and its mirror image, a mixture; OR (relative group) — this stereoisomer or its mirror image, unknown which. A single enantiomer cannot carry an AND group, a racemate cannot carry an OR group and should not be drawn as absolute, and absolute descriptors (R, S without rel or *) contradict an OR group (IUPAC 2013, P-93.1.3: relative configuration is written rel- or R*).",
-      messages: messages6,
+      messages: messages7,
       requires: ["structure"],
-      run: run6
+      run: run7
     };
   }
 });
@@ -48390,14 +50883,14 @@ function notation(p) {
   return parts.join(", ");
 }
 function prefixFindings(ctx, decl, facts) {
-  const record2 = ctx.record;
-  if (!record2) return [];
-  const form = record2.stereo.form;
+  const record = ctx.record;
+  if (!record) return [];
+  const form = record.stereo.form;
   const out = [];
   const sources = [];
   if (decl.field)
-    sources.push({ field: "stereo.descriptors", text: record2.stereo.descriptors ?? "", p: decl.field });
-  if (decl.name) sources.push({ field: "name", text: record2.name ?? "", p: decl.name });
+    sources.push({ field: "stereo.descriptors", text: record.stereo.descriptors ?? "", p: decl.field });
+  if (decl.name) sources.push({ field: "name", text: record.name ?? "", p: decl.name });
   const seen = /* @__PURE__ */ new Set();
   const add = (id, field2, data, severity) => {
     if (seen.has(id)) return;
@@ -48753,8 +51246,16 @@ function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenN
       if (fix !== null) out[out.length - 1].fix = fix;
     }
     if (cmp.notStereoUnits.length)
-      add("descriptor-not-stereo-unit", { locants: cmp.notStereoUnits.join(", "), computed });
-    if (cmp.undefinedAt.length) add("descriptor-at-undefined-unit", { locants: cmp.undefinedAt.join(", ") });
+      add("descriptor-not-stereo-unit", {
+        locants: cmp.notStereoUnits.join(", "),
+        locantCount: cmp.notStereoUnits.length,
+        computed
+      });
+    if (cmp.undefinedAt.length)
+      add("descriptor-at-undefined-unit", {
+        locants: cmp.undefinedAt.join(", "),
+        locantCount: cmp.undefinedAt.length
+      });
     if (cmp.agrees && cmp.unlisted.length) {
       const missing = cmp.unlisted.map((u) => `${u.locant ?? `atom ${u.atoms.join("–")}`} (${u.label})`).join(", ");
       add("descriptors-incomplete", { missing, computed, method: cmp.method }, "warning");
@@ -48836,12 +51337,12 @@ function comparable(r, ctx) {
     repeats: ` (${words} of the structure and is counted once)`
   };
 }
-function run7(ctx) {
-  const record2 = ctx.record;
+function run8(ctx) {
+  const record = ctx.record;
   const c0 = comparable(ctx.main, ctx);
-  if (!record2 || !c0) return { findings: [], notApplicable: true };
+  if (!record || !c0) return { findings: [], notApplicable: "the record or its structure was not read" };
   const f = c0.facts;
-  const decl = declaredDescriptors(record2);
+  const decl = declaredDescriptors(record);
   const out = [];
   const evidence2 = [];
   const note = (what, cmp, compared = f, repeats = c0.repeats) => {
@@ -48852,17 +51353,17 @@ function run7(ctx) {
       `${what} ${verb} computed ${labelList(compared.units)}${repeats}, compared ${how}${cmp.matchedInverted ? ", up to inversion" : ""}`
     );
   };
-  const fieldText = record2.stereo.descriptors ?? "";
+  const fieldText = record.stereo.descriptors ?? "";
   const mainSource = {
     read: ctx.main,
     text: ctx.loaded.sources?.main ?? {
       field: "structure",
       format: "smiles",
-      text: record2.structure.smiles ?? null
+      text: record.structure.smiles ?? null
     }
   };
   const nitrogenNote = claimRestsOnlyOnNitrogen(ctx);
-  const form = record2.stereo.form;
+  const form = record.stereo.form;
   if (decl.field)
     note(
       fieldText,
@@ -48880,10 +51381,10 @@ function run7(ctx) {
     );
   if (decl.name && decl.name.items.length > 0) {
     if (decl.field && decl.field.items.length > 0 && !sameItems(decl.field, decl.name)) {
-      const nameText = (record2.name ?? "").slice(0, (record2.name ?? "").length - decl.name.rest.length).replace(/[-\s]+$/, "");
+      const nameText = (record.name ?? "").slice(0, (record.name ?? "").length - decl.name.rest.length).replace(/[-\s]+$/, "");
       out.push(finding("name-and-descriptors-disagree", "name", { nameText, fieldText }, "warning"));
     } else if (!decl.field || decl.field.items.length === 0) {
-      const name = record2.name ?? "";
+      const name = record.name ?? "";
       const front = name.slice(0, name.length - decl.name.rest.length).replace(/[-\s\u2010-\u2014\u2212\uFE63\uFF0D\u02D7]+$/, "");
       note(front, compareOne("name", front, decl.name, f, out, form, evidence2, nitrogenNote, mainSource));
     }
@@ -48892,7 +51393,7 @@ function run7(ctx) {
       out.push(
         finding("descriptor-unreadable", "name", {
           field: "name",
-          text: record2.name ?? "",
+          text: record.name ?? "",
           problem: p.message,
           offset: p.offset
         })
@@ -48904,7 +51405,7 @@ function run7(ctx) {
       );
     }
   }
-  (record2.stereo.components ?? []).forEach((c, i) => {
+  (record.stereo.components ?? []).forEach((c, i) => {
     const cc = ctx.components[i] ? comparable(ctx.components[i], ctx) : null;
     if (!c.descriptors || !cc) return;
     const field2 = `stereo.components.${i}.descriptors`;
@@ -48932,13 +51433,17 @@ function run7(ctx) {
   out.push(...prefixFindings(ctx, decl, f));
   out.push(...cisTransFindings(ctx, decl, f));
   const hasAny = decl.field !== null || decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== "none" || decl.name.words.length > 0 || decl.name.rotationSign !== null);
-  const hasComponents = (record2.stereo.components ?? []).some((c) => c.descriptors);
-  if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
+  const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
+  if (!hasAny && !hasComponents && out.length === 0)
+    return {
+      findings: [],
+      notApplicable: "no descriptors declared (stereo.descriptors, the name, the components)"
+    };
   if (out.some((x) => x.severity !== "note" || x.messageId === "descriptors-at-unstated-units"))
     return { findings: out };
   return { findings: out, passed: evidence2.join("; ") || "descriptor prefixes agree with the declared form" };
 }
-var messages7, HOW, descriptorsMatchStructure;
+var messages8, HOW, descriptorsMatchStructure;
 var init_descriptors_match_structure = __esm({
   "src/checks/descriptors-match-structure.ts"() {
     "use strict";
@@ -48952,13 +51457,13 @@ var init_descriptors_match_structure = __esm({
     init_descriptors_unverified();
     init_mapped_smiles();
     init_fixes();
-    messages7 = {
+    messages8 = {
       "descriptor-unreadable": "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).",
-      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} ({how}). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
-      "descriptor-not-stereo-unit": "{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
-      "descriptor-at-undefined-unit": "{field} declares configurations at locant(s) {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
+      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count:unit|units}: {mismatches} ({how}). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
+      "descriptor-not-stereo-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
+      "descriptor-at-undefined-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
       "descriptor-counts-mismatch": "{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.",
-      "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
+      "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount:configuration|configurations}), but the structure defines only {definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
       "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
@@ -48978,9 +51483,9 @@ var init_descriptors_match_structure = __esm({
       defaultSeverity: "error",
       summary: "Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.",
       explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; without them a descriptor is still matched to its unit where the structure has one unit of each kind cited (one R/S centre, one E/Z double bond); otherwise only the numbers of R, S, E, Z … can be compared, and where that cannot tell (1R,2S) from (1S,2R) the claim is reported as consistent in count, not verified per atom (a note with the structure written with atom maps to paste), never as passed. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other stereo unit.",
-      messages: messages7,
+      messages: messages8,
       requires: ["structure"],
-      run: run7
+      run: run8
     };
   }
 });
@@ -49057,11 +51562,12 @@ function componentsAreDiastereomers(ctx) {
   }
   return true;
 }
-function run8(ctx) {
-  const record2 = ctx.record;
-  if (!record2) return { findings: [], notApplicable: true };
-  const { form, ratio, ee, components } = record2.stereo;
-  if (ratio === void 0 && ee === void 0) return { findings: [], notApplicable: true };
+function run9(ctx) {
+  const record = ctx.record;
+  if (!record) return { findings: [], notApplicable: "the record was not read" };
+  const { form, ratio, ee, components } = record.stereo;
+  if (ratio === void 0 && ee === void 0)
+    return { findings: [], notApplicable: "no ratio or ee declared (stereo.ratio, stereo.ee)" };
   const cfg = ctx.config;
   const out = [];
   const add = (id, field2, data, severity) => {
@@ -49151,17 +51657,17 @@ function run8(ctx) {
     evidence2.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
   return { findings: out, passed: `${evidence2.join("; ")}; consistent with ${form}` };
 }
-var messages8, ratioAndEeConsistent;
+var messages9, ratioAndEeConsistent;
 var init_ratio_and_ee_consistent = __esm({
   "src/checks/ratio-and-ee-consistent.ts"() {
     "use strict";
     init_ratio();
     init_words();
-    messages8 = {
+    messages9 = {
       "ratio-unreadable": "The ratio '{ratio}' could not be read: {problem} (at character {offset}). Write it as parts separated by colons, e.g. 70:30 or 97.5:2.5.",
       "ratio-parts-not-100": "The ratio {ratio} reads as percentages but its parts sum to {sum}, not 100 (tolerance ±{tolerance}). Correct the parts; if relative amounts were meant, write them as small whole numbers (e.g. 2:1).",
-      "ratio-components-count": "The ratio {ratio} has {parts} part(s) but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
-      "enantiomer-ratio-parts": "The ratio {ratio} has {parts} parts, but a {form} consists of two enantiomers. Give the enantiomer ratio as two parts (e.g. 97:3).",
+      "ratio-components-count": "The ratio {ratio} has {parts:part|parts} but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
+      "enantiomer-ratio-parts": "The ratio {ratio} has {parts:part|parts}, but a {form} consists of two enantiomers. Give the enantiomer ratio as two parts (e.g. 97:3).",
       "racemate-ratio-not-even": "Declared racemate, but the ratio {ratio} is {deviation} points away from 50:50 (tolerance ±{tolerance}); that is an enantioenriched sample with ee {ee}%. Check the measurement, or declare enantioenriched with the ee.",
       "racemate-ee-not-zero": "Declared racemate, but the stated ee is {ee}% (a racemate has ee 0 within ±{tolerance}). Declare enantioenriched, or correct the ee.",
       "ee-disagrees-with-ratio": "The stated ee {ee}% does not agree with the ratio {ratio}, which gives ee = |a − b| / (a + b) · 100 = {computedEe}% (tolerance ±{tolerance}). Correct one of them.",
@@ -49175,8 +51681,8 @@ var init_ratio_and_ee_consistent = __esm({
       defaultSeverity: "error",
       summary: "Component ratio and enantiomeric excess agree with each other and with the declared form.",
       explanation: "Enantiomeric excess is |F(+) − F(−)| for mole fractions of the two enantiomers, in percent 100·|a − b|/(a + b) for a ratio a:b (IUPAC Gold Book, enantiomer excess). A racemate is an equimolar mixture of a pair of enantiomers (Gold Book, racemate), so 50:50 and ee 0. Diastereomers differ in energy and are normally formed in unequal amounts; enantiomers have equal energies, so achiral conditions give 50:50 — an exactly even diastereomer ratio deserves a question. Tolerances (ratio sum, racemate ratio, ee agreement) and the single-enantiomer ee threshold are registry settings (common practice, no source).",
-      messages: messages8,
-      run: run8
+      messages: messages9,
+      run: run9
     };
   }
 });
@@ -49722,16 +52228,16 @@ function entryById(registry, id) {
   }
   return index.get(id);
 }
-function racemicWords(record2) {
-  const d = record2.stereo.descriptors;
+function racemicWords(record) {
+  const d = record.stereo.descriptors;
   if (d === void 0 || d.trim() === "") return false;
   const parsed = parseDescriptors(d);
   return parsed.prefixes.length > 0 || parsed.rotationSign === "±" || parsed.fischer === "DL" || parsed.mode === "racemic" || parsed.mode === "relative";
 }
-function recordStatus(record2, facts) {
-  const id = record2.id;
-  const form = record2.stereo.form;
-  const ee = record2.stereo.ee;
+function recordStatus(record, facts) {
+  const id = record.id;
+  const form = record.stereo.form;
+  const ee = record.stereo.ee;
   if (facts.chiral === false)
     return { status: "achiral", why: `${id} is achiral (its structure has no enantiomer)` };
   switch (form) {
@@ -49748,7 +52254,7 @@ function recordStatus(record2, facts) {
       };
     default:
       if (ee !== void 0 && ee > 0) return { status: "enriched", why: `${id} states ee ${ee}%` };
-      if (racemicWords(record2))
+      if (racemicWords(record))
         return { status: "racemic", why: `${id} is declared ${form}, racemic by its descriptors` };
       return {
         status: "unknown",
@@ -49763,7 +52269,7 @@ function drawnStatus(facts, name) {
   if (facts.undefined > 0 || facts.chiral === null)
     return {
       status: "unknown",
-      why: `${name} is drawn without the configuration of ${facts.undefined} stereo unit(s), so it may be racemic or one enantiomer`
+      why: `${name} is drawn without the configuration of ${plural(facts.undefined, "stereo unit")}, so it may be racemic or one enantiomer`
     };
   if (facts.enhanced.meaning === "relative")
     return {
@@ -49854,6 +52360,7 @@ var init_origin_inputs = __esm({
     init_read();
     init_describe2();
     init_descriptors();
+    init_words();
     byId = /* @__PURE__ */ new WeakMap();
     ID_SHAPE = /^[A-Za-z]{1,10}[-_ ]?\d{1,12}$/;
     MAX_WALK = 1e4;
@@ -49953,24 +52460,24 @@ function carriedConfigurations(facts, prov, inputs, add, component) {
   }
   return { compared };
 }
-function diastereomers(record2, facts, prov, inputs, components, componentFacts2, add) {
+function diastereomers(record, facts, prov, inputs, components, componentFacts2, add) {
   const carried = prov.units.filter((u) => u.fate === "carried" && u.inputDefined);
   const formed = prov.units.filter((u) => u.fate === "formed");
   if (carried.length === 0 || formed.length === 0) return null;
   const from = inputName(inputs[carried[0].input]);
   const data = { carried: names(facts, carried), formed: names(facts, formed), input: from };
-  const form = record2.stereo.form;
+  const form = record.stereo.form;
   components.forEach((c, k) => {
     const f = componentFacts2[k];
     if (c && f) carriedConfigurations(f, c, inputs, add, k);
   });
-  if (form === "diastereomer-mixture" && record2.stereo.ratio !== void 0) {
-    const r = parseRatio(record2.stereo.ratio);
+  if (form === "diastereomer-mixture" && record.stereo.ratio !== void 0) {
+    const r = parseRatio(record.stereo.ratio);
     if (r.problems.length === 0 && r.parts.length >= 2 && r.parts.every((p) => p === r.parts[0]))
-      add("diastereomers-one-to-one", "stereo.ratio", { ...data, ratio: record2.stereo.ratio }, "note");
+      add("diastereomers-one-to-one", "stereo.ratio", { ...data, ratio: record.stereo.ratio }, "note");
   }
   const single = form === "single-diastereomer" || form === "single-enantiomer" || form === "enantioenriched";
-  if (single && facts.undefined === 0 && record2.stereo.ratio === void 0 && !record2.stereo.evidence?.length)
+  if (single && facts.undefined === 0 && record.stereo.ratio === void 0 && !record.stereo.evidence?.length)
     add("diastereomer-ratio-not-stated", "stereo.form", data, "note");
   return `diastereomers at ${data.formed} in unequal amounts`;
 }
@@ -49984,8 +52491,8 @@ var init_origin_carried = __esm({
 });
 
 // src/checks/origin-enantiomers.ts
-function enantioClaim(record2, config) {
-  const s = record2.stereo;
+function enantioClaim(record, config) {
+  const s = record.stereo;
   if (s.form === "single-enantiomer" || s.form === "enantioenriched")
     return { text: s.form, field: "stereo.form" };
   if (s.ee !== void 0 && s.ee > 2 * config.racemateRatioTolerance)
@@ -49997,9 +52504,9 @@ function enantioClaim(record2, config) {
 function inputList(inputs) {
   return inputs.map((i) => i.why).join("; ");
 }
-function enantiomericPart(record2, facts, prov, inputs, config, add) {
-  const control = record2.origin?.control;
-  const claim = enantioClaim(record2, config);
+function enantiomericPart(record, facts, prov, inputs, config, add) {
+  const control = record.origin?.control;
+  const claim = enantioClaim(record, config);
   const enriched = inputs.filter((i) => i.status === "enriched");
   const unknown = inputs.filter((i) => i.status === "unknown");
   if (facts.chiral === false)
@@ -50064,7 +52571,7 @@ function enantiomericPart(record2, facts, prov, inputs, config, add) {
   );
   const inputEe = source.ee ?? (source.id === null ? 100 : null);
   const expected = `non-racemic, ${unitWords2} as in ${who}${inputEe !== null ? `, ee at most ${fmt(inputEe)}%` : ""}`;
-  const s = record2.stereo;
+  const s = record.stereo;
   const racemicClaim = s.form === "racemate" || s.ee !== void 0 && s.ee <= 2 * config.racemateRatioTolerance;
   if (racemicClaim) {
     add("racemate-from-enriched-input", s.form === "racemate" ? "stereo.form" : "stereo.ee", {
@@ -50160,7 +52667,7 @@ function inputProblems(ctx, from, add) {
     else if (r.problem === "no-structure")
       add("input-without-structure", field2, { entry: text, detail: r.detail }, "note");
     else if (r.problem === "not-found") {
-      const ids = ctx.registry.entries.flatMap((e) => e.id === null ? [] : [e.id]);
+      const ids = ctx.registry.ids?.() ?? ctx.registry.entries.flatMap((e) => e.id === null ? [] : [e.id]);
       const guess = ids.length <= 5e4 ? closestWord(text.trim(), ids) : null;
       add("input-not-found", field2, {
         entry: text,
@@ -50186,28 +52693,31 @@ function unmappedNote(facts, prov, add) {
     "note"
   );
 }
-function run9(ctx) {
-  const record2 = ctx.record;
-  const origin = record2?.origin;
-  if (!record2 || !origin) return { findings: [], notApplicable: true };
+function run10(ctx) {
+  const record = ctx.record;
+  const origin = record?.origin;
+  if (!record || !origin) return { findings: [], notApplicable: "no origin given (origin)" };
   const out = [];
   const add = makeAdd(out);
   const inputs = inputProblems(ctx, origin.from, add);
-  if (record2.id && entryById(ctx.registry, record2.id)) {
-    const cycle = originCycle(record2.id, ctx.registry);
+  if (record.id && entryById(ctx.registry, record.id)) {
+    const cycle = originCycle(record.id, ctx.registry);
     if (cycle) add("origin-cycle", "origin.from", { cycle: cycle.join(" ← ") });
   }
   const main = ctx.main;
   if (out.length > 0 || !main.structure || !main.facts)
-    return out.length > 0 ? { findings: out } : { findings: [], notApplicable: true };
+    return out.length > 0 ? { findings: out } : {
+      findings: [],
+      notRun: main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure"
+    };
   const prov = traceProvenance(
     main.structure,
     inputs.map((i) => i.structure)
   );
   unmappedNote(main.facts, prov, add);
-  const expected = enantiomericPart(record2, main.facts, prov, inputs, ctx.config, add);
+  const expected = enantiomericPart(record, main.facts, prov, inputs, ctx.config, add);
   const { compared } = carriedConfigurations(main.facts, prov, inputs, add, null);
-  const mixture = record2.stereo.form === "diastereomer-mixture";
+  const mixture = record.stereo.form === "diastereomer-mixture";
   const comps = mixture ? ctx.components.map(
     (c) => c.structure ? traceProvenance(
       c.structure,
@@ -50215,7 +52725,7 @@ function run9(ctx) {
     ) : null
   ) : [];
   const dia = diastereomers(
-    record2,
+    record,
     main.facts,
     prov,
     inputs,
@@ -50224,7 +52734,7 @@ function run9(ctx) {
     add
   );
   if (out.length > 0) return { findings: out };
-  const declared = [record2.stereo.form, record2.stereo.descriptors].filter(Boolean).join(" ");
+  const declared = [record.stereo.form, record.stereo.descriptors].filter(Boolean).join(" ");
   const outcome = [expected.outcome, dia, ...compared].filter(Boolean).join("; ");
   return { findings: [], passed: `expected ${outcome} — ${expected.reason}; declared ${declared}` };
 }
@@ -50245,87 +52755,6 @@ var init_origin_supports_claim = __esm({
       summary: "The stereo claim agrees with how the compound was made (origin): racemic from achiral or racemic inputs without chiral control, carried stereo units unchanged, diastereomers in unequal amounts.",
       explanation: "A reaction that can form either enantiomer of a product through mirror-image pathways, with nothing chiral present, runs both at the same rate: the two transition states are enantiomeric and equal in energy, so the product is a racemate; enantiotopic groups of a meso or other achiral input likewise react at equal rates. A new stereo unit formed in a molecule that already has a defined one gives diastereomers, whose transition states differ in energy, so they form in unequal amounts (e.g. Cram 1952 on additions to α-chiral aldehydes, from memory). A stereo unit at which no bond is made or broken keeps its spatial arrangement; it is compared through the mapped neighbours, not the CIP label, which can change when priorities change (IUPAC 2013 P-92.1). Inputs are placed on the structure by their largest common connected substructure (elements and bond orders kept), within a time bound; a unit that cannot be traced is left unchecked with a note.",
       messages: originMessages,
-      run: run9
-    };
-  }
-});
-
-// src/checks/waivers.ts
-function blank(s) {
-  return s === void 0 || s.trim() === "";
-}
-function reviewWaivers(record2, findings, knownChecks) {
-  const waivers = record2?.waivers ?? [];
-  const out = [];
-  const firstIndex = /* @__PURE__ */ new Map();
-  waivers.forEach((w, index) => {
-    const field2 = `waivers.${index}`;
-    const missing = [
-      blank(w.reason) ? "reason" : null,
-      blank(w.approved_by) ? "approver (approved_by)" : null
-    ].filter((x) => x !== null);
-    if (missing.length) {
-      out.push(
-        finding("waiver-incomplete", field2, {
-          waivedCheck: w.check,
-          index,
-          missing: missing.join(" and no ")
-        })
-      );
-    }
-    const seen = firstIndex.get(w.check);
-    if (seen !== void 0) {
-      out.push(finding("waiver-duplicate", field2, { waivedCheck: w.check, index, first: seen }, "note"));
-      return;
-    }
-    firstIndex.set(w.check, index);
-    if (w.check !== WAIVER_CHECK_ID && !findings.some((f) => f.check === w.check)) {
-      const unknown = knownChecks !== void 0 && !knownChecks.includes(w.check);
-      out.push(
-        finding(
-          "waiver-matches-nothing",
-          field2,
-          {
-            waivedCheck: w.check,
-            index,
-            knownCheck: !unknown,
-            known: unknown ? " (and no check has that id)" : ""
-          },
-          "note"
-        )
-      );
-    }
-  });
-  return out;
-}
-function run10(ctx) {
-  const waivers = ctx.record?.waivers ?? [];
-  if (waivers.length === 0) return { findings: [], notApplicable: true };
-  const findings = reviewWaivers(ctx.record, ctx.findings ?? []);
-  if (findings.some((f) => f.severity !== "note")) return { findings };
-  const accepted = waivers.filter((w) => (ctx.findings ?? []).some((f) => f.check === w.check)).length;
-  return {
-    findings,
-    passed: `${waivers.length} waiver(s) complete; ${accepted} accept findings of this record`
-  };
-}
-var WAIVER_CHECK_ID, messages9, waiverReview;
-var init_waivers = __esm({
-  "src/checks/waivers.ts"() {
-    "use strict";
-    init_words();
-    WAIVER_CHECK_ID = "waiver-review";
-    messages9 = {
-      "waiver-incomplete": "The waiver for {waivedCheck} (waivers[{index}]) has no {missing}. A waiver records a decision: say why the finding is acceptable (reason) and who decided (approved_by). Until then it accepts nothing.",
-      "waiver-matches-nothing": "The waiver for {waivedCheck} (waivers[{index}]) matches no finding on this record{known}. Remove it, or correct the check id, so that it does not silently accept a future finding.",
-      "waiver-duplicate": "waivers[{index}] repeats the waiver for {waivedCheck} given in waivers[{first}]. Keep one."
-    };
-    waiverReview = {
-      id: WAIVER_CHECK_ID,
-      defaultSeverity: "warning",
-      summary: "Waivers give a reason and an approver, and each accepts a finding of this record.",
-      explanation: "A waiver is the responsible chemist accepting a finding for this record; it is only as good as its reason and the name of who decided (common practice, no source: review decisions are recorded with their reason and approver). A waiver that accepts nothing is removed, so that it cannot hide a later, different problem.",
-      messages: messages9,
       run: run10
     };
   }
@@ -50365,6 +52794,1071 @@ var init_checks = __esm({
       originSupportsClaim,
       waiverReview
     ];
+  }
+});
+
+// src/registry/blob-ids.ts
+import { execFile } from "node:child_process";
+import { createHash } from "node:crypto";
+import { readFileSync } from "node:fs";
+function blobIdOf(bytes) {
+  const hash = createHash("sha1");
+  hash.update(`blob ${bytes.length}\0`);
+  hash.update(bytes);
+  return hash.digest("hex");
+}
+function blobIdOfFile(abs) {
+  try {
+    return blobIdOf(readFileSync(abs));
+  } catch {
+    return null;
+  }
+}
+function git(cwd, args) {
+  return new Promise((done) => {
+    execFile(
+      "git",
+      args,
+      { cwd, encoding: "utf8", maxBuffer: 1 << 30, env: { ...process.env, GIT_OPTIONAL_LOCKS: "0" } },
+      (error, stdout) => done(error ? null : stdout)
+    );
+  });
+}
+async function gitBlobIds(root, dirs) {
+  const ids = /* @__PURE__ */ new Map();
+  const pathspec = ["--", ...dirs.length > 0 ? dirs : ["."]];
+  const [staged, modified] = await Promise.all([
+    git(root, ["ls-files", "-s", "-v", "-z", ...pathspec]),
+    git(root, ["ls-files", "-m", "-z", ...pathspec])
+  ]);
+  if (staged === null || modified === null) return ids;
+  const dirty = new Set(modified.split("\0"));
+  for (let at2 = 0; at2 < staged.length; ) {
+    const end = staged.indexOf("\0", at2);
+    const stop = end < 0 ? staged.length : end;
+    const plain = staged.startsWith("H 100644 ", at2) || staged.startsWith("H 100755 ", at2) ? staged.startsWith(" 0	", at2 + 49) : false;
+    if (plain && stop > at2 + 52) {
+      const path = staged.slice(at2 + 52, stop);
+      const blob = staged.slice(at2 + 9, at2 + 49);
+      if (!dirty.has(path) && /^[0-9a-f]{40}$/.test(blob)) ids.set(path, blob);
+    }
+    at2 = stop + 1;
+  }
+  return ids;
+}
+var BlobIds;
+var init_blob_ids = __esm({
+  "src/registry/blob-ids.ts"() {
+    "use strict";
+    BlobIds = class {
+      constructor(fromGit, absOf) {
+        this.fromGit = fromGit;
+        this.absOf = absOf;
+      }
+      fromGit;
+      absOf;
+      hashed = /* @__PURE__ */ new Map();
+      of(rel) {
+        const known = this.fromGit.get(rel);
+        if (known !== void 0) return known;
+        let id = this.hashed.get(rel);
+        if (id === void 0) {
+          id = blobIdOfFile(this.absOf(rel));
+          this.hashed.set(rel, id);
+        }
+        return id;
+      }
+      /** How many files were hashed from their bytes (not known to git). */
+      get hashedCount() {
+        return this.hashed.size;
+      }
+    };
+  }
+});
+
+// src/bulk/pool.ts
+import { Worker } from "node:worker_threads";
+async function* mapOrdered(items, opts) {
+  if (opts.workers <= 0) {
+    if (!opts.inline) throw new Error("mapOrdered: workers=0 needs an inline handler");
+    let n = 0;
+    for await (const item of items) {
+      n++;
+      yield opts.inline(item);
+    }
+    opts.onStats?.({
+      window: 1,
+      maxAhead: 1,
+      maxBuffered: 0,
+      maxPending: 0,
+      maxInFlight: 1,
+      items: n,
+      replaced: 0
+    });
+    return;
+  }
+  const batchSize = Math.max(1, opts.batchSize ?? 16);
+  const window2 = Math.max(batchSize * opts.workers * 2, opts.window ?? batchSize * opts.workers * 4);
+  const iterator = Symbol.asyncIterator in items ? items[Symbol.asyncIterator]() : toAsync(items);
+  const done = /* @__PURE__ */ new Map();
+  const stats = {
+    window: window2,
+    maxAhead: 0,
+    maxBuffered: 0,
+    maxPending: 0,
+    maxInFlight: 0,
+    items: 0,
+    replaced: 0
+  };
+  const record = (at2, result2) => {
+    done.set(at2, result2);
+    if (done.size > stats.maxBuffered) stats.maxBuffered = done.size;
+  };
+  const pending = [];
+  let nextIndex = 0;
+  let nextOut = 0;
+  let inputDone = false;
+  let wake = null;
+  let failure2 = null;
+  const notify = () => {
+    const w = wake;
+    wake = null;
+    if (w) w();
+  };
+  const slots = [];
+  const spawn2 = () => {
+    const shared2 = new SharedArrayBuffer(8);
+    const progress = new Int32Array(shared2);
+    progress[0] = -1;
+    const data = { user: opts.workerData, progress: shared2 };
+    const worker = startWorker(opts.script, opts.execArgv, data, opts.resourceLimits);
+    const slot = {
+      worker,
+      progress,
+      seen: 0,
+      queue: [],
+      lastProgress: Date.now(),
+      dead: false,
+      ready: false,
+      started: Date.now()
+    };
+    worker.on("message", (msg) => {
+      if ("ready" in msg) {
+        slot.ready = true;
+        slot.lastProgress = Date.now();
+        return;
+      }
+      if (slot.dead) return;
+      slot.lastProgress = Date.now();
+      const finished = /* @__PURE__ */ new Set();
+      for (const [index, result2] of msg.results) {
+        finished.add(index);
+        record(index, result2);
+      }
+      slot.queue = slot.queue.filter((j) => !finished.has(j.index));
+      notify();
+    });
+    worker.on("error", (err2) => {
+      if (slot.dead) return;
+      slot.dead = true;
+      const [current, rest] = takeCurrent(slot);
+      if (current) {
+        const result2 = opts.onCrash ? opts.onCrash(current.item, current.index, String(err2?.message ?? err2)) : opts.onTimeout(current.item, current.index);
+        record(current.index, result2);
+      }
+      pending.unshift(...rest);
+      replace(slot);
+      notify();
+    });
+    worker.on("exit", () => {
+      if (!slot.dead && slot.queue.length > 0) worker.emit("error", new Error("worker exited"));
+    });
+    return slot;
+  };
+  const takeCurrent = (slot) => {
+    const on = Atomics.load(slot.progress, 0);
+    const at2 = slot.queue.findIndex((j) => j.index === on);
+    const current = at2 >= 0 ? slot.queue[at2] : slot.queue[0];
+    const rest = slot.queue.filter((j) => j !== current);
+    slot.queue = [];
+    return [current, rest];
+  };
+  const replace = (slot) => {
+    const i = slots.indexOf(slot);
+    stats.replaced++;
+    void slot.worker.terminate();
+    if (i >= 0) slots[i] = spawn2();
+  };
+  for (let i = 0; i < opts.workers; i++) slots.push(spawn2());
+  const timer = setInterval(
+    () => {
+      const now = Date.now();
+      for (const slot of slots) {
+        if (slot.dead || slot.queue.length === 0) continue;
+        const finished = Atomics.load(slot.progress, 1);
+        if (finished !== slot.seen) {
+          slot.seen = finished;
+          slot.lastProgress = now;
+        }
+        const stalled = slot.ready ? now - slot.lastProgress > opts.timeoutMs : now - slot.started > Math.max(STARTUP_LIMIT_MS, opts.timeoutMs);
+        if (stalled) {
+          slot.dead = true;
+          const [current, rest] = takeCurrent(slot);
+          if (current) record(current.index, opts.onTimeout(current.item, current.index));
+          pending.unshift(...rest);
+          replace(slot);
+          notify();
+        }
+      }
+    },
+    Math.max(20, Math.min(1e3, Math.floor(opts.timeoutMs / 4)))
+  );
+  timer.unref();
+  const canRead = () => !inputDone && nextIndex - nextOut < window2 && pending.length < batchSize * opts.workers * 2;
+  const readMore = async () => {
+    while (canRead()) {
+      const r = await iterator.next();
+      if (r.done) {
+        inputDone = true;
+        break;
+      }
+      pending.push({ index: nextIndex++, item: r.value });
+      if (nextIndex - nextOut > stats.maxAhead) stats.maxAhead = nextIndex - nextOut;
+      if (pending.length > stats.maxPending) stats.maxPending = pending.length;
+    }
+  };
+  const inFlight = batchSize * 2;
+  const hasRoom = (slot) => !slot.dead && slot.queue.length <= inFlight - batchSize;
+  const dispatch = () => {
+    for (const slot of slots) {
+      if (!hasRoom(slot) || pending.length === 0) continue;
+      const batch = pending.splice(0, batchSize);
+      if (slot.queue.length === 0) slot.lastProgress = Date.now();
+      slot.queue.push(...batch);
+      if (slot.queue.length > stats.maxInFlight) stats.maxInFlight = slot.queue.length;
+      slot.worker.postMessage({ jobs: batch });
+    }
+  };
+  try {
+    for (; ; ) {
+      if (failure2) throw failure2;
+      await readMore();
+      dispatch();
+      while (done.has(nextOut)) {
+        const value = done.get(nextOut);
+        done.delete(nextOut);
+        nextOut++;
+        yield value;
+      }
+      if (inputDone && nextOut >= nextIndex) break;
+      await new Promise((resolve6) => {
+        wake = resolve6;
+        if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
+      });
+    }
+  } catch (e) {
+    failure2 = e;
+    throw e;
+  } finally {
+    stats.items = nextIndex;
+    opts.onStats?.(stats);
+    clearInterval(timer);
+    await Promise.all(slots.map((s) => s.worker.terminate()));
+  }
+}
+function startWorker(script, execArgv, data, resourceLimits) {
+  if (!script.pathname.endsWith(".ts"))
+    return new Worker(script, { execArgv, workerData: data, resourceLimits });
+  const tsx = import.meta.resolve("tsx/esm/api");
+  const code = `import(${JSON.stringify(tsx)}).then((m) => { m.register(); return import(${JSON.stringify(script.href)}); }).catch((e) => { setImmediate(() => { throw e; }); });`;
+  return new Worker(code, { eval: true, execArgv, workerData: data, resourceLimits });
+}
+async function* toAsync(items) {
+  for (const item of items) yield item;
+}
+var STARTUP_LIMIT_MS;
+var init_pool = __esm({
+  "src/bulk/pool.ts"() {
+    "use strict";
+    STARTUP_LIMIT_MS = 12e4;
+  }
+});
+
+// src/registry/types.ts
+var STEREO_FORMS, ORIGIN_CONTROLS;
+var init_types2 = __esm({
+  "src/registry/types.ts"() {
+    "use strict";
+    STEREO_FORMS = [
+      "achiral",
+      "meso",
+      "single-enantiomer",
+      "enantioenriched",
+      "racemate",
+      "single-diastereomer",
+      "diastereomer-mixture",
+      "unknown"
+    ];
+    ORIGIN_CONTROLS = [
+      "none",
+      "chiral-catalyst",
+      "chiral-reagent",
+      "chiral-auxiliary",
+      "biocatalyst",
+      "resolution",
+      "chiral-separation",
+      "enrichment",
+      "unknown"
+    ];
+  }
+});
+
+// src/registry/index-cache.ts
+import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
+import { dirname as dirname2 } from "node:path";
+function readIndexCache(path, settings) {
+  let text;
+  try {
+    text = readFileSync2(path, "utf8");
+  } catch {
+    return { status: "missing", entries: [], reason: "no cache file yet" };
+  }
+  let value;
+  try {
+    value = JSON.parse(text);
+  } catch {
+    return { status: "unreadable", entries: [], reason: "the cache file is not valid JSON" };
+  }
+  const top = value;
+  if (!top || typeof top !== "object" || top.format !== FORMAT || !Array.isArray(top.entries))
+    return { status: "unreadable", entries: [], reason: "the cache file is not a stereogate index cache" };
+  const was = top.settings;
+  if (top.formatVersion !== FORMAT_VERSION || !was || was.version !== settings.version || was.axisOrthoMin !== settings.axisOrthoMin)
+    return {
+      status: "stale",
+      entries: [],
+      reason: "the cache was made by another stereogate version or with other settings"
+    };
+  const entries = [];
+  for (const raw2 of top.entries) {
+    const e = entryOf2(raw2);
+    if (e) entries.push(e);
+  }
+  return { status: "used", entries };
+}
+function writeIndexCache(path, settings, entries) {
+  const tmp = `${path}.${process.pid}.tmp`;
+  try {
+    mkdirSync(dirname2(path), { recursive: true });
+    const stored = entries.map(storedOf);
+    writeFileSync(
+      tmp,
+      `{"format":${JSON.stringify(FORMAT)},"formatVersion":${FORMAT_VERSION},"settings":${JSON.stringify(settings)},"entries":[
+${stored.map((s) => JSON.stringify(s)).join(",\n")}
+]}
+`
+    );
+    renameSync(tmp, path);
+    return null;
+  } catch (e) {
+    rmSync(tmp, { force: true });
+    return e.message;
+  }
+}
+function storedOf(e) {
+  const r = e.row;
+  return [
+    e.file,
+    e.blob,
+    e.molfiles,
+    e.valid ? 1 : 0,
+    e.heavy,
+    e.keyed ? 1 : 0,
+    r.id,
+    r.name,
+    r.form,
+    r.rotation,
+    r.keys,
+    [r.lines.id, r.lines.structure, r.lines.rotation],
+    r.waivers
+  ];
+}
+function isRotation(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const r = v;
+  return typeof r.value === "number" && Number.isFinite(r.value) && isOptNumber(r.wavelength_nm) && isOptNumber(r.temperature_c) && isOptNumber(r.concentration) && (r.solvent === void 0 || isString(r.solvent));
+}
+function isWaiver(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const w = v;
+  return isString(w.check) && Number.isInteger(w.index) && w.index >= 0 && isOptString(w.message_id) && isOptString(w.other_record) && isOptString(w.reason) && isOptString(w.approved_by);
+}
+function isKeys(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const k = v;
+  const text = k.text;
+  return isString(k.constitution) && (k.kind === "as-drawn" || k.kind === "racemic" || k.kind === "relative") && (k.stereo === null || isString(k.stereo)) && (k.mirror === null || isString(k.mirror)) && k.stereo === null === (k.mirror === null) && (k.chiral === null || typeof k.chiral === "boolean") && typeof k.exact === "boolean" && (text === void 0 || !!text && typeof text === "object" && (text.format === "smiles" || text.format === "molfile") && isString(text.text));
+}
+function entryOf2(raw2) {
+  if (!Array.isArray(raw2) || raw2.length !== 13) return null;
+  const [file, blob, molfiles, valid, heavy, keyed2, id, name, form, rotation, keys, lines2, waivers] = raw2;
+  if (!isString(file) || file === "" || !isString(blob) || !/^[0-9a-f]{40}$/.test(blob)) return null;
+  if (!Array.isArray(molfiles) || !molfiles.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])))
+    return null;
+  if (valid !== 0 && valid !== 1 || id !== null && !isString(id) || name !== null && !isString(name))
+    return null;
+  if (heavy !== null && !isString(heavy) || keyed2 !== 0 && keyed2 !== 1 || keyed2 === 0 && keys !== null)
+    return null;
+  if (!STEREO_FORMS.includes(form)) return null;
+  if (rotation !== null && !isRotation(rotation)) return null;
+  if (keys !== null && !isKeys(keys)) return null;
+  if (!Array.isArray(lines2) || lines2.length !== 3 || !lines2.every(isLine)) return null;
+  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
+  const [idLine, structureLine, rotationLine] = lines2;
+  return {
+    file,
+    blob,
+    molfiles,
+    valid: valid === 1,
+    heavy,
+    keyed: keyed2 === 1,
+    row: {
+      id,
+      file,
+      name,
+      form,
+      rotation,
+      keys,
+      lines: { id: idLine, structure: structureLine, rotation: rotationLine },
+      waivers
+    }
+  };
+}
+var FORMAT, FORMAT_VERSION, isString, isLine, isOptNumber, isOptString;
+var init_index_cache = __esm({
+  "src/registry/index-cache.ts"() {
+    "use strict";
+    init_types2();
+    FORMAT = "stereogate registry index cache";
+    FORMAT_VERSION = 3;
+    isString = (v) => typeof v === "string";
+    isLine = (v) => v === null || Number.isInteger(v) && v > 0;
+    isOptNumber = (v) => v === void 0 || typeof v === "number" && Number.isFinite(v);
+    isOptString = (v) => v === void 0 || isString(v);
+  }
+});
+
+// src/audit/index-keys.ts
+function keyRecordFile(realRoot, abs, engine, budget, full) {
+  const loaded = loadRecordFile(realRoot, abs);
+  const source = loaded.record === null ? null : sourcesOf(loaded).main;
+  const keyless = source === null || source.text === null;
+  let keep = engine !== null;
+  let main = NO_STRUCTURE;
+  let heavy = null;
+  if (engine !== null && source?.format === "smiles" && source.text !== null)
+    heavy = engine.smilesHeavyAtoms?.(source.text) ?? null;
+  if (engine !== null && full && !keyless) {
+    const cache2 = new StructureCache(engine);
+    try {
+      main = withBudget(budget, "the structure of a registry record", () => cache2.main(loaded));
+    } catch {
+      keep = false;
+    }
+  }
+  const { seq: _seq, ...row } = indexRow(loaded, main, 0);
+  const molfiles = [];
+  const s = loaded.sources;
+  for (const src of s ? [s.main, ...s.components] : []) {
+    if (src?.format !== "molfile") continue;
+    if (src.file === void 0) keep = false;
+    else molfiles.push(src.file);
+  }
+  return { row, valid: loaded.record !== null, molfiles, heavy, keyed: keyless || full, keep };
+}
+var NO_STRUCTURE;
+var init_index_keys = __esm({
+  "src/audit/index-keys.ts"() {
+    "use strict";
+    init_budget();
+    init_load();
+    init_index_row();
+    init_structures();
+    NO_STRUCTURE = { structure: null, facts: null, error: null };
+  }
+});
+
+// src/audit/index-build.ts
+import { availableParallelism } from "node:os";
+import { join as join4 } from "node:path";
+var MIN_FILES_FOR_WORKERS, RecordIndex;
+var init_index_build = __esm({
+  "src/audit/index-build.ts"() {
+    "use strict";
+    init_pool();
+    init_blob_ids();
+    init_index_cache();
+    init_index_keys();
+    init_version();
+    MIN_FILES_FOR_WORKERS = 2e3;
+    RecordIndex = class _RecordIndex {
+      constructor(opts) {
+        this.opts = opts;
+        this.entries = new Array(opts.files.length);
+      }
+      opts;
+      /** One entry per file, in the order of the files. */
+      entries;
+      unkept = /* @__PURE__ */ new Set();
+      blobs;
+      read = 0;
+      described = 0;
+      reused = 0;
+      usedWorkers = 0;
+      cache = null;
+      /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */
+      static async open(opts) {
+        const index = new _RecordIndex(opts);
+        await index.fill();
+        return index;
+      }
+      get settings() {
+        return { version: VERSION, axisOrthoMin: this.opts.axisOrthoMin };
+      }
+      get useCache() {
+        return this.opts.cachePath !== null && this.opts.defaultEngine;
+      }
+      async fill() {
+        const gitIds = this.opts.gitIds ?? gitBlobIds(this.opts.realRoot, this.opts.recordDirs);
+        this.cache = this.useCache ? readIndexCache(this.opts.cachePath, this.settings) : null;
+        this.blobs = new BlobIds(await gitIds, (rel) => join4(this.opts.realRoot, rel));
+        let cached = this.cache?.entries ?? [];
+        if (cached.some((e, i) => i > 0 && cached[i - 1].file >= e.file))
+          cached = [...cached].sort((x, y) => x.file < y.file ? -1 : x.file > y.file ? 1 : 0);
+        let c = 0;
+        let byBlob = null;
+        const movedFrom = (blob) => {
+          if (byBlob === null) {
+            byBlob = /* @__PURE__ */ new Map();
+            for (const e of cached) if (e.molfiles.length === 0) byBlob.set(e.blob, e);
+          }
+          return byBlob.get(blob);
+        };
+        const current = (e) => e.molfiles.every(([path, blob]) => this.blobs.of(path) === blob);
+        const toRead = [];
+        this.opts.files.forEach((file, i) => {
+          while (c < cached.length && cached[c].file < file) c++;
+          const blob = this.blobs.of(file);
+          if (blob === null) return toRead.push(i);
+          const same = c < cached.length && cached[c].file === file ? cached[c] : void 0;
+          if (same && same.blob === blob && current(same)) this.entries[i] = same;
+          else {
+            const moved = movedFrom(blob);
+            if (!moved) return toRead.push(i);
+            this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
+          }
+          this.reused++;
+        });
+        await this.readFiles(toRead, false);
+      }
+      /** Computes the keys of the entries `wanted` picks that have none yet. */
+      async keyFully(wanted) {
+        const todo = [];
+        this.entries.forEach((e, i) => {
+          if (!e.keyed && wanted(e)) todo.push(i);
+        });
+        await this.readFiles(todo, true);
+      }
+      async readFiles(at2, full) {
+        if (at2.length === 0) return;
+        const { opts } = this;
+        const workers = opts.workers ?? (opts.defaultEngine && at2.length >= MIN_FILES_FOR_WORKERS ? Math.min(2, availableParallelism()) : 0);
+        this.usedWorkers = Math.max(this.usedWorkers, workers);
+        const noEngine = (item) => keyRecordFile(opts.realRoot, item.abs, null, opts.budget, full);
+        const ext = import.meta.url.endsWith(".ts") ? ".ts" : ".js";
+        const setup = {
+          realRoot: opts.realRoot,
+          budget: opts.budget,
+          axisOrthoMin: opts.axisOrthoMin
+        };
+        const results = mapOrdered(
+          at2.map((i) => ({ abs: join4(opts.realRoot, opts.files[i]), full })),
+          {
+            workers,
+            script: new URL(`./index-worker${ext}`, import.meta.url),
+            workerData: setup,
+            // the worker stops a record at its budget itself; this is the backstop for a stuck or crashed worker
+            timeoutMs: opts.budget.timeMs * 2 + 3e4,
+            onTimeout: noEngine,
+            onCrash: noEngine,
+            inline: (item) => keyRecordFile(opts.realRoot, item.abs, opts.engine, opts.budget, full),
+            batchSize: 64
+          }
+        );
+        let k = 0;
+        for await (const result2 of results) {
+          const i = at2[k++];
+          const file = opts.files[i];
+          const blob = this.blobs.of(file);
+          const molfiles = result2.molfiles.map((m) => [m, this.blobs.of(m)]);
+          const entry = {
+            file,
+            blob: blob ?? "",
+            molfiles: molfiles.map(([m, b]) => [m, b ?? ""]),
+            valid: result2.valid,
+            heavy: result2.heavy,
+            keyed: result2.keyed,
+            row: result2.row
+          };
+          this.unkept.delete(this.entries[i]);
+          if (!result2.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
+          this.entries[i] = entry;
+        }
+        if (full) this.described += at2.length;
+        else this.read += at2.length;
+      }
+      /** Writes the cache when anything changed; says in a sentence what was done (for the log). */
+      save() {
+        const parts = [
+          `${this.entries.length} record file(s)`,
+          `${this.reused} from the cache`,
+          `${this.read} read`,
+          `${this.described} described for their keys`
+        ];
+        if (this.usedWorkers > 0) parts.push(`${this.usedWorkers} worker(s)`);
+        if (this.cache && this.cache.status !== "used") parts.push(`cache not used: ${this.cache.reason}`);
+        const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
+        if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== "used")) {
+          const kept = this.entries.filter((e) => !this.unkept.has(e));
+          const error = writeIndexCache(this.opts.cachePath, this.settings, kept);
+          parts.push(error === null ? `cache written to ${this.opts.cachePath}` : `cache not written: ${error}`);
+        }
+        return `Registry index: ${parts.join("; ")}.`;
+      }
+    };
+  }
+});
+
+// src/audit/review-against-index.ts
+var review_against_index_exports = {};
+__export(review_against_index_exports, {
+  reviewAgainstIndex: () => reviewAgainstIndex
+});
+async function reviewAgainstIndex(o) {
+  const gitIds = gitBlobIds(o.realRoot, o.config.recordDirs);
+  const found = findRecordFiles(o.realRoot, o.config.recordDirs);
+  if (found.missingDirs.length > 0) return null;
+  const refused = found.refused.map((r) => ({ file: r.file, at: null, refused: r.message }));
+  const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
+  const index = await RecordIndex.open({
+    realRoot: o.realRoot,
+    files,
+    recordDirs: o.config.recordDirs,
+    engine: o.engine,
+    defaultEngine: o.defaultEngine,
+    axisOrthoMin: o.config.axisOrthoMin,
+    budget: o.budget,
+    cachePath: o.indexCache,
+    gitIds,
+    ...o.workers === void 0 ? {} : { workers: o.workers }
+  });
+  const entries = index.entries;
+  const stubs = entries.map(
+    (entry, at2) => entry.molfiles.length === 0 ? { file: entry.file, at: at2, refused: null } : {
+      file: entry.file,
+      sources: { main: null, components: entry.molfiles.map(([file]) => ({ file })) },
+      at: at2,
+      refused: null
+    }
+  );
+  stubs.push(...refused);
+  stubs.sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+  const sel = selectRecords(stubs, o.realRoot, o.paths);
+  if (sel.selected.size === stubs.length) {
+    o.log?.(index.save());
+    return null;
+  }
+  const audited = /* @__PURE__ */ new Map();
+  for (const s of stubs) {
+    if (!sel.selected.has(s)) continue;
+    audited.set(
+      s.file,
+      s.refused !== null ? refusedRecord({ file: s.file, message: s.refused }) : loadRecordFile(o.realRoot, found.files[s.at])
+    );
+  }
+  const toAudit = [...audited.values()];
+  const structures = new StructureCache(o.engine);
+  const wanted = partnerFormulas(toAudit, structures, o.budget);
+  await index.keyFully(
+    (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy))
+  );
+  o.log?.(index.save());
+  markDuplicateIdsAgainst(toAudit, entries, audited);
+  const view = indexView(entries, audited, structures, (at2) => loadRecordFile(o.realRoot, found.files[at2]));
+  const result2 = auditRecords(toAudit, {
+    checks: o.checks,
+    config: o.config,
+    engine: o.engine,
+    budget: o.budget,
+    view,
+    // a light row has no keys: its formula differs from every record under review, so no lookup reaches it
+    otherRows: function* () {
+      for (const s of stubs) {
+        if (audited.has(s.file)) continue;
+        if (s.at !== null) yield entries[s.at].row;
+        else yield indexRow(refusedRecord({ file: s.file, message: s.refused }), NO_STRUCTURE2, 0);
+      }
+    }
+  });
+  if (sel.unmatched.length > 0) result2.unmatched = sel.unmatched;
+  return result2;
+}
+function partnerFormulas(records, structures, budget) {
+  const formulas = /* @__PURE__ */ new Set();
+  for (const r of records) {
+    if (r.record === null) continue;
+    let facts;
+    try {
+      facts = withBudget(budget, "the structure of a record under review", () => structures.main(r)).facts;
+    } catch {
+      return null;
+    }
+    if (facts) for (const f of heavyAtomCandidates(facts.constitutionKey.split("/")[0])) formulas.add(f);
+  }
+  return formulas;
+}
+function markDuplicateIdsAgainst(toAudit, entries, audited) {
+  const ids = new Set(toAudit.flatMap((r) => r.id === null ? [] : [r.id]));
+  if (ids.size === 0) return;
+  const group = [];
+  for (const e of entries) {
+    const own2 = audited.get(e.file);
+    if (own2) {
+      if (own2.id !== null && ids.has(own2.id)) group.push(own2);
+      continue;
+    }
+    const { id, lines: lines2 } = e.row;
+    if (id === null || !ids.has(id)) continue;
+    group.push({
+      file: e.file,
+      id,
+      record: null,
+      positions: {
+        get: (p) => p === "id" && lines2.id !== null ? { line: lines2.id, column: 1 } : void 0
+      },
+      problems: [],
+      origin: { kind: "file" }
+    });
+  }
+  markDuplicateIds(group);
+}
+function indexView(entries, audited, cache2, load) {
+  const firstById = /* @__PURE__ */ new Map();
+  entries.forEach((e, at2) => {
+    if (e.valid && e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, at2);
+  });
+  const entryAt = (at2) => {
+    const file = entries[at2].file;
+    return entryOf(audited.get(file) ?? load(at2), cache2, audited.has(file));
+  };
+  const seen = /* @__PURE__ */ new Map();
+  let all = null;
+  return {
+    get entries() {
+      all ??= entries.flatMap((e, at2) => e.valid ? entryAt(at2) ?? [] : []);
+      return all;
+    },
+    byId(id) {
+      if (!seen.has(id)) {
+        const at2 = firstById.get(id);
+        seen.set(id, at2 === void 0 ? void 0 : entryAt(at2) ?? void 0);
+      }
+      return seen.get(id);
+    },
+    ids: () => entries.flatMap((e) => e.valid && e.row.id !== null ? [e.row.id] : [])
+  };
+}
+var NO_STRUCTURE2;
+var init_review_against_index = __esm({
+  "src/audit/review-against-index.ts"() {
+    "use strict";
+    init_budget();
+    init_files();
+    init_blob_ids();
+    init_load();
+    init_engine();
+    init_index_build();
+    init_index_row();
+    init_run();
+    init_select();
+    init_structures();
+    init_view();
+    NO_STRUCTURE2 = { structure: null, facts: null, error: null };
+  }
+});
+
+// src/audit/run.ts
+import { existsSync as existsSync2, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
+import { resolve as resolve3 } from "node:path";
+function auditRecords(records, options) {
+  const config = options.config ?? { ...DEFAULT_CONFIG };
+  const cache2 = new StructureCache(options.engine);
+  const engineApi = { relate: options.engine.relate.bind(options.engine) };
+  const budget = options.budget ?? RECORD_BUDGET;
+  const audited = new Set(records);
+  const registry = options.view ?? buildRegistryView(options.registry ?? records, cache2, (r) => audited.has(r));
+  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
+  const results = records.map((loaded) => {
+    try {
+      return withBudget(
+        budget,
+        "the audit of this record",
+        () => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
+      );
+    } catch (e) {
+      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
+      return {
+        id: loaded.id,
+        file: loaded.file,
+        computed: null,
+        findings: [internalError({ id: "audit" }, e, loaded)],
+        passed: [],
+        declared: { form: null, descriptors: null }
+      };
+    }
+  });
+  const result2 = {
+    tool: { name: "stereogate", version: VERSION },
+    records: results,
+    summary: summarize(results),
+    caution: CAUTION
+  };
+  if (options.registryPhase !== false && !options.registryIncomplete && options.checks.some((c) => c.scope === "registry")) {
+    const review = options.registry !== void 0 || options.otherRows !== void 0;
+    const phase = new RegistryPhase({
+      mode: review ? "review" : "full",
+      config,
+      confirm: confirmWith(options.engine),
+      duplicateIds: false
+    });
+    const mainOf = (r) => {
+      try {
+        return withBudget(budget, "the structure of a registry record", () => cache2.main(r));
+      } catch {
+        return { structure: null, facts: null, error: null };
+      }
+    };
+    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
+    if (review) {
+      const audited2 = new Set(records);
+      phase.reviewing(rows);
+      let seq = records.length;
+      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      else for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
+      for (const row of rows) phase.fileUnderReview(row);
+    }
+    rows.forEach((row, i) => addPhaseResult(results[i], phase.next(row)));
+    result2.summary = summarize(results);
+    result2.registry = phase.summary();
+  }
+  return result2;
+}
+function confirmWith(engine) {
+  const read = (k) => k.text ? readOnly({ field: "structure", format: k.text.format, text: k.text.text }, engine).structure : null;
+  return (a, b) => {
+    const sa = read(a);
+    const sb = read(b);
+    if (!sa || !sb) return null;
+    try {
+      return engine.relate(sa, sb).relation;
+    } catch {
+      return null;
+    }
+  };
+}
+function addPhaseResult(r, p) {
+  if (p.findings.length > 0) {
+    r.findings = r.findings.filter((f) => stillMatchesNothing(f, p.findings));
+    r.findings.push(...p.findings);
+  }
+  if (p.passed) r.passed.push(p.passed);
+}
+function auditOne(loaded, checks, config, cache2, registry, engine) {
+  const { main, components } = cache2.all(loaded);
+  const findings = schemaFindings(loaded, config);
+  applyWaivers(findings, loaded);
+  const passed = [];
+  const notRun = [];
+  const notApplicable = [];
+  const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
+  for (const check of unparsed ? [] : checks) {
+    if (configuredSeverity(config, check.id) === "off") continue;
+    const ctx = {
+      loaded,
+      record: loaded.record,
+      main,
+      components,
+      registry,
+      config,
+      engine,
+      findings: [...findings]
+    };
+    const missing = missingInput(check, ctx);
+    if (missing !== null) {
+      notRun.push({ check: check.id, reason: missing });
+      continue;
+    }
+    if (check.scope === "registry") continue;
+    let produced;
+    let outcome;
+    try {
+      outcome = check.run(ctx);
+      if (!outcome || !Array.isArray(outcome.findings))
+        throw new Error("the check returned no findings list");
+      produced = outcome.findings.filter((raw2) => messageEnabled(config, check.id, raw2.messageId)).map((raw2) => toFinding(check, raw2, loaded, config));
+    } catch (e) {
+      if (e instanceof BudgetExceeded) throw e;
+      findings.push(internalError(check, e, loaded));
+      continue;
+    }
+    applyWaivers(produced, loaded);
+    findings.push(...produced);
+    if (outcome.notRun !== void 0 && produced.length === 0) {
+      notRun.push({ check: check.id, reason: outcome.notRun });
+    } else if (outcome.notApplicable !== void 0 && produced.length === 0) {
+      notApplicable.push({ check: check.id, reason: outcome.notApplicable });
+    } else if (produced.length === 0) {
+      passed.push({ check: check.id, evidence: outcome.passed ?? "" });
+    }
+  }
+  const record = loaded.record;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: main.facts,
+    findings,
+    passed,
+    notRun,
+    notApplicable,
+    declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null }
+  };
+}
+function missingInput(check, ctx) {
+  const needs = check.requires ?? [];
+  if (needs.includes("structure")) {
+    if (ctx.record === null) return "the record does not follow the record schema (see record-schema)";
+    if (ctx.main.facts === null) {
+      return ctx.main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure";
+    }
+  }
+  if (needs.includes("registry") && ctx.registry.incomplete) return ctx.registry.incomplete;
+  return null;
+}
+function overBudget(loaded, e, checks) {
+  const reason = e.kind === "time" ? "the record was stopped at its time limit (see record-time-limit)" : "the record was stopped at its memory bound (see record-time-limit)";
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: null,
+    findings: [budgetFinding(loaded, e.kind, e.limit)],
+    passed: [],
+    notRun: checks.map((c) => ({ check: c.id, reason })),
+    declared: {
+      form: loaded.record?.stereo.form ?? null,
+      descriptors: loaded.record?.stereo.descriptors ?? null
+    }
+  };
+}
+function summarize(records) {
+  const s = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  for (const r of records) {
+    for (const f of r.findings) {
+      if (f.waived) s.waived++;
+      else if (f.severity === "error") s.errors++;
+      else if (f.severity === "warning") s.warnings++;
+      else s.notes++;
+    }
+  }
+  return s;
+}
+async function openRegistry(options) {
+  const rootAbs = resolve3(options.root);
+  if (!existsSync2(rootAbs) || !statSync2(rootAbs).isDirectory()) {
+    throw new ConfigError(`registry folder ${options.root} does not exist`);
+  }
+  const root = realpathSync3(rootAbs);
+  const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
+  const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
+  const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
+  const messageIds = new Map(checks.map((c) => [c.id, Object.keys(c.messages)]));
+  checkSeverityIds(
+    config,
+    ids,
+    (w) => closestWord(w, ids),
+    (id) => messageIds.get(id)
+  );
+  return { root, config, checks };
+}
+function missingDirsError(missing, root) {
+  return new ConfigError(
+    `record folder${missing.length > 1 ? "s" : ""} ${missing.map((d) => `'${d}'`).join(", ")} not found in ${root} (set recordDirs in stereogate.config.yml)`
+  );
+}
+async function runAudit(options) {
+  const { root, config, checks } = await openRegistry(options);
+  const engine = options.engine ?? await defaultEngine({ axisOrthoMin: config.axisOrthoMin });
+  if (options.paths && options.paths.length > 0) {
+    const { reviewAgainstIndex: reviewAgainstIndex2 } = await Promise.resolve().then(() => (init_review_against_index(), review_against_index_exports));
+    const reviewed = await reviewAgainstIndex2({
+      realRoot: root,
+      paths: options.paths,
+      config,
+      checks,
+      engine,
+      defaultEngine: options.engine === void 0,
+      budget: options.budget ?? RECORD_BUDGET,
+      indexCache: options.indexCache ?? null,
+      ...options.log ? { log: options.log } : {}
+    });
+    if (reviewed) return reviewed;
+  }
+  const load = loadRegistry(root, { recordDirs: config.recordDirs });
+  if (load.missingDirs.length > 0) throw missingDirsError(load.missingDirs, options.root);
+  let toAudit = load.records;
+  let unmatched = [];
+  if (options.paths && options.paths.length > 0) {
+    const sel = selectRecords(load.records, root, options.paths);
+    toAudit = load.records.filter((r) => sel.selected.has(r));
+    unmatched = sel.unmatched;
+  }
+  const registry = toAudit.length === load.records.length ? void 0 : load.records;
+  const result2 = auditRecords(toAudit, { checks, config, engine, registry, budget: options.budget });
+  if (unmatched.length > 0) result2.unmatched = unmatched;
+  return result2;
+}
+function stripUndefined(o) {
+  if (!o) return void 0;
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== void 0));
+}
+var RECORD_BUDGET;
+var init_run = __esm({
+  "src/audit/run.ts"() {
+    "use strict";
+    init_waivers();
+    init_closest();
+    init_load();
+    init_caution();
+    init_config();
+    init_engine();
+    init_findings();
+    init_select();
+    init_budget();
+    init_index_row();
+    init_registry_phase();
+    init_structures();
+    init_version();
+    init_view();
+    RECORD_BUDGET = Object.freeze({ timeMs: 2e4, memoryMb: 1024 });
   }
 });
 
@@ -51240,13 +54734,11 @@ var require_cli_progress = __commonJS({
 });
 
 // src/cli/main.ts
-import { existsSync as existsSync5, readFileSync as readFileSync2, statSync as statSync4 } from "node:fs";
+import { existsSync as existsSync5, readFileSync as readFileSync4, statSync as statSync4 } from "node:fs";
 import { pathToFileURL } from "node:url";
 
-// src/audit/caution.ts
-var CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
-
 // src/cli/commands/compare.ts
+init_caution();
 init_chem();
 
 // src/cli/args.ts
@@ -51318,7 +54810,7 @@ function loadStructure(arg, io) {
   } else if (FILE_ENDING.test(arg)) {
     return { ok: false, message: `file not found: ${arg}`, missingFile: true };
   }
-  if (/\n\$\$\$\$\s*(\n|$)/.test(text)) {
+  if (/\n\$\$\$\$\s*(\n|$)/.test(text) || /^M {2}END[^\n]*\n[\s\S]*\S/m.test(text)) {
     const first = readSdRecords(text).next().value;
     if (!first) return { ok: false, message: `${source}: no SD record found` };
     if (!first.result.ok)
@@ -51424,6 +54916,7 @@ ${CAUTION}`);
 };
 
 // src/cli/commands/describe.ts
+init_caution();
 init_chem();
 
 // src/cli/format-describe.ts
@@ -51558,2097 +55051,10 @@ ${CAUTION}`
 };
 
 // src/cli/commands/audit.ts
-import { existsSync as existsSync4, writeFileSync as writeFileSync2 } from "node:fs";
+init_config();
+init_run();
+import { existsSync as existsSync4, writeFileSync as writeFileSync3 } from "node:fs";
 import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve5, sep as sep3 } from "node:path";
-
-// src/audit/config.ts
-import { existsSync } from "node:fs";
-import { isAbsolute as isAbsolute2, join as join3, resolve as resolve2 } from "node:path";
-
-// src/registry/files.ts
-import {
-  closeSync,
-  constants,
-  fstatSync,
-  lstatSync,
-  openSync,
-  readdirSync,
-  readSync,
-  realpathSync,
-  statSync
-} from "node:fs";
-import { isAbsolute, join, relative, resolve, sep } from "node:path";
-var MAX_FILE_BYTES = 8 * 1024 * 1024;
-var RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
-var UTF8 = new TextDecoder("utf-8", { fatal: true });
-var OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
-function readRegularFile(abs) {
-  const fd = openSync(abs, OPEN_FLAGS);
-  try {
-    const st = fstatSync(fd);
-    if (!st.isFile()) return { ok: false, error: "is not a regular file" };
-    if (st.size > MAX_FILE_BYTES)
-      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
-    let buf = Buffer.allocUnsafe(st.size + 1);
-    let total = 0;
-    for (; ; ) {
-      if (total === buf.length) {
-        if (total > MAX_FILE_BYTES)
-          return {
-            ok: false,
-            error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
-          };
-        const bigger = Buffer.allocUnsafe(buf.length * 2);
-        buf.copy(bigger, 0, 0, total);
-        buf = bigger;
-      }
-      const n = readSync(fd, buf, total, buf.length - total, null);
-      if (n === 0) break;
-      total += n;
-    }
-    if (total > MAX_FILE_BYTES)
-      return {
-        ok: false,
-        error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
-      };
-    return { ok: true, bytes: buf.subarray(0, total) };
-  } finally {
-    closeSync(fd);
-  }
-}
-function readTextFile(abs) {
-  let bytes;
-  try {
-    const read = readRegularFile(abs);
-    if (!read.ok) return read;
-    bytes = read.bytes;
-  } catch (e) {
-    return { ok: false, error: `cannot be read (${e.code ?? String(e)})` };
-  }
-  if (bytes.includes(0)) return { ok: false, error: "is a binary file, not text" };
-  let text;
-  try {
-    text = UTF8.decode(bytes);
-  } catch {
-    return { ok: false, error: "is not valid UTF-8 text" };
-  }
-  return { ok: true, text: text.startsWith("\uFEFF") ? text.slice(1) : text };
-}
-function relativeTo(root, abs) {
-  if (abs.startsWith(root) && abs[root.length] === sep && !abs.includes(`${sep}.`) && !abs.endsWith(sep)) {
-    const rest = abs.slice(root.length + 1);
-    if (rest !== "" && !rest.includes(`${sep}${sep}`)) return sep === "/" ? rest : rest.split(sep).join("/");
-  }
-  return relative(root, abs).split(sep).join("/");
-}
-function escapes(root, abs) {
-  const rel = relative(root, abs);
-  return rel === ".." || rel.startsWith(`..${sep}`) || isAbsolute(rel);
-}
-function resolveInside(root, fromDir, path) {
-  if (isAbsolute(path) || /^[a-zA-Z]:[\\/]/.test(path) || path.startsWith("\\") || path.startsWith("~")) {
-    return { ok: false, error: `'${path}' is an absolute path; give a path relative to the record file` };
-  }
-  if (path.includes("\0")) return { ok: false, error: "the path contains a NUL character" };
-  const abs = resolve(fromDir, path);
-  if (escapes(root, abs)) return { ok: false, error: `'${path}' leaves the registry folder` };
-  let real;
-  try {
-    real = realpathSync(abs);
-  } catch {
-    return { ok: false, error: `'${path}' does not exist (looked for ${relativeTo(root, abs)})` };
-  }
-  if (escapes(root, real))
-    return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
-  return { ok: true, abs: real, rel: relativeTo(root, abs) };
-}
-function findRecordFiles(root, recordDirs) {
-  const found = /* @__PURE__ */ new Map();
-  const refused = [];
-  const missingDirs = [];
-  const visited = /* @__PURE__ */ new Set();
-  const walk = (dir, depth) => {
-    if (depth > 32) return;
-    let real;
-    try {
-      real = realpathSync(dir);
-    } catch {
-      return;
-    }
-    if (visited.has(real) || escapes(root, real)) return;
-    visited.add(real);
-    let dirents;
-    try {
-      dirents = readdirSync(dir, { withFileTypes: true }).sort(
-        (a, b) => a.name < b.name ? -1 : a.name > b.name ? 1 : 0
-      );
-    } catch {
-      return;
-    }
-    for (const dirent of dirents) {
-      const name = dirent.name;
-      if (name.startsWith(".") || name === "node_modules") continue;
-      const abs = join(dir, name);
-      let st = dirent;
-      if (!dirent.isDirectory() && !dirent.isFile() && !dirent.isSymbolicLink()) {
-        try {
-          st = lstatSync(abs);
-        } catch {
-          continue;
-        }
-      }
-      if (st.isSymbolicLink()) {
-        let target;
-        try {
-          target = realpathSync(abs);
-        } catch {
-          if (RECORD_EXTENSIONS.test(name))
-            refused.push({ file: relativeTo(root, abs), message: "is a broken link" });
-          continue;
-        }
-        if (escapes(root, target)) {
-          if (RECORD_EXTENSIONS.test(name)) {
-            refused.push({
-              file: relativeTo(root, abs),
-              message: "is a link to a place outside the registry folder"
-            });
-          }
-          continue;
-        }
-        st = statSync(abs);
-      }
-      if (st.isDirectory()) walk(abs, depth + 1);
-      else if (st.isFile() && RECORD_EXTENSIONS.test(name)) found.set(relativeTo(root, abs), abs);
-    }
-  };
-  for (const d of recordDirs) {
-    const r = resolveInside(root, root, d);
-    if (!r.ok) {
-      missingDirs.push(d);
-      continue;
-    }
-    walk(r.abs === root ? root : resolve(root, d), 0);
-  }
-  const files = [...found.entries()].sort(([a], [b]) => a < b ? -1 : a > b ? 1 : 0).map(([, abs]) => abs);
-  return { files, refused, missingDirs };
-}
-
-// src/registry/parse.ts
-var import_yaml2 = __toESM(require_dist(), 1);
-
-// src/registry/positions.ts
-var import_yaml = __toESM(require_dist(), 1);
-var PositionMap = class {
-  map = /* @__PURE__ */ new Map();
-  set(path, pos) {
-    if (!this.map.has(path)) this.map.set(path, pos);
-  }
-  get(path) {
-    return this.map.get(path);
-  }
-  /** The line of `path`, else of its nearest ancestor that exists (a missing field points at its parent). */
-  lineOf(path) {
-    return lineOf(this, path);
-  }
-  get size() {
-    return this.map.size;
-  }
-  /** Every known path with its position, in document order. */
-  entries() {
-    return [...this.map];
-  }
-};
-function lineOf(positions2, path) {
-  if (path === null) return null;
-  let p = path;
-  for (; ; ) {
-    const pos = positions2.get(p);
-    if (pos) return pos.line;
-    if (p === "") return null;
-    const cut = p.lastIndexOf(".");
-    p = cut < 0 ? "" : p.slice(0, cut);
-  }
-}
-var NO_POSITIONS = { get: () => void 0 };
-function keyText(key3) {
-  if ((0, import_yaml.isScalar)(key3)) return String(key3.value);
-  return String(key3);
-}
-function positionsOf(doc, counter) {
-  const positions2 = new PositionMap();
-  const put = (path, node) => {
-    const start = node?.range?.[0];
-    if (start === void 0) return;
-    const { line, col } = counter.linePos(start);
-    positions2.set(path, { line, column: col });
-  };
-  const walk = (node, path, depth) => {
-    if (depth > 64) return;
-    if ((0, import_yaml.isMap)(node)) {
-      for (const pair of node.items) {
-        const childPath = path === "" ? keyText(pair.key) : `${path}.${keyText(pair.key)}`;
-        put(childPath, pair.key ?? pair.value);
-        walk(pair.value, childPath, depth + 1);
-      }
-    } else if ((0, import_yaml.isSeq)(node)) {
-      node.items.forEach((item, i) => {
-        const childPath = path === "" ? String(i) : `${path}.${i}`;
-        put(childPath, item);
-        walk(item, childPath, depth + 1);
-      });
-    }
-  };
-  put("", doc.contents);
-  if (positions2.get("") === void 0) positions2.set("", { line: 1, column: 1 });
-  walk(doc.contents, "", 0);
-  return positions2;
-}
-
-// src/registry/quick-yaml.ts
-var NotPlain = class extends Error {
-};
-var KEY = /^[A-Za-z][A-Za-z0-9_-]*(?=:(?: |$))/;
-var NOT_STRING_KEY = /^(?:[Nn]ull|NULL|[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
-var NULL = /^(?:~|[Nn]ull|NULL)$/;
-var TRUE = /^(?:[Tt]rue|TRUE)$/;
-var FALSE = /^(?:[Ff]alse|FALSE)$/;
-var INT = /^[-+]?[0-9]+$/;
-var FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
-var FLOAT_EXP = /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/;
-var OTHER_NUMBER = /^(?:0o|0x|[-+]?\.(?:inf|Inf|INF)$|\.(?:nan|NaN|NAN)$)/;
-var BAD_START = /^(?:[-?:](?![0-9.])|[,[\]{}#&*!|>'"%@`])/;
-var CONTROL = /[\x00-\x08\x0b-\x1f\x7f-\x9f\u2028\u2029\ufeff\ufffe\uffff]/;
-function fail4() {
-  throw new NotPlain();
-}
-function quoted(text, start) {
-  const q = text[start];
-  let out = "";
-  let i = start + 1;
-  for (; ; ) {
-    if (i >= text.length) fail4();
-    const ch = text[i];
-    if (ch === q) {
-      if (q === '"' || text[i + 1] !== "'") break;
-      out += "'";
-      i += 2;
-    } else if (ch === "\\" && q === '"') {
-      const next = text[i + 1];
-      if (next !== "\\" && next !== '"') fail4();
-      out += next;
-      i += 2;
-    } else {
-      out += ch;
-      i++;
-    }
-  }
-  return { value: out, end: i + 1 };
-}
-function resolvePlain(plain) {
-  if (plain === "" || BAD_START.test(plain) || plain.includes(": ") || plain.endsWith(":")) fail4();
-  if (NULL.test(plain)) return null;
-  if (TRUE.test(plain)) return true;
-  if (FALSE.test(plain)) return false;
-  if (INT.test(plain)) return parseInt(plain, 10);
-  if (FLOAT.test(plain) || FLOAT_EXP.test(plain)) return parseFloat(plain);
-  if (OTHER_NUMBER.test(plain)) fail4();
-  return plain;
-}
-function scalar(text) {
-  if (text[0] === '"' || text[0] === "'") {
-    const q = quoted(text, 0);
-    trailing(text.slice(q.end));
-    return q.value;
-  }
-  const hash = text.indexOf(" #");
-  return resolvePlain((hash < 0 ? text : text.slice(0, hash)).replace(/ +$/, ""));
-}
-function flowList(text, at2) {
-  const out = [];
-  let i = 1;
-  const spaces = () => {
-    while (text[i] === " ") i++;
-  };
-  spaces();
-  if (text[i] === "]") {
-    trailing(text.slice(i + 1));
-    return out;
-  }
-  for (; ; ) {
-    spaces();
-    at2(out.length, i);
-    const c = text[i];
-    if (c === '"' || c === "'") {
-      const q = quoted(text, i);
-      out.push(q.value);
-      i = q.end;
-    } else {
-      let j = i;
-      while (j < text.length && !",[]{}".includes(text[j])) j++;
-      const plain = text.slice(i, j).replace(/ +$/, "");
-      if (plain.includes(":") || plain.includes(" #")) fail4();
-      out.push(resolvePlain(plain));
-      i = j;
-    }
-    spaces();
-    if (text[i] === "]") break;
-    if (text[i] !== ",") fail4();
-    i++;
-    spaces();
-    if (text[i] === "]") fail4();
-  }
-  trailing(text.slice(i + 1));
-  return out;
-}
-function trailing(rest) {
-  const t = rest.replace(/^ +/, "");
-  if (t !== "" && !(t.startsWith("#") && t.length < rest.length)) fail4();
-}
-function contentLines(text) {
-  if (text.includes("	") || text.includes("\r") || CONTROL.test(text)) return null;
-  const lines = [];
-  const raw2 = text.split("\n");
-  for (let k = 0; k < raw2.length; k++) {
-    const s = raw2[k];
-    let indent = 0;
-    while (s.charCodeAt(indent) === 32) indent++;
-    if (indent === s.length || s[indent] === "#") continue;
-    if (indent === 0 && (s.startsWith("---") || s.startsWith("...") || s.startsWith("%"))) return null;
-    lines.push({ no: k + 1, indent, text: s.slice(indent) });
-  }
-  return lines;
-}
-function quickParse(text) {
-  const lines = contentLines(text);
-  if (lines === null || lines.length === 0 || lines[0].indent !== 0) return null;
-  const positions2 = new PositionMap();
-  let at2 = 0;
-  const put = (path, line, column) => positions2.set(path, { line: line.no, column });
-  const mapping = (indent, path, firstText) => {
-    const out = {};
-    const seen = /* @__PURE__ */ new Set();
-    let first = firstText !== void 0;
-    while (at2 < lines.length) {
-      const line = lines[at2];
-      const body = first ? firstText : line.text;
-      if (!first) {
-        if (line.indent < indent) break;
-        if (line.indent > indent) fail4();
-      }
-      first = false;
-      const m = KEY.exec(body);
-      if (!m) fail4();
-      const key3 = m[0];
-      if (NOT_STRING_KEY.test(key3) || seen.has(key3) || key3.length > 1e3) fail4();
-      seen.add(key3);
-      const childPath = path === "" ? key3 : `${path}.${key3}`;
-      put(childPath, line, indent + 1);
-      at2++;
-      const rest = body.slice(key3.length + 1).replace(/^ +/, "");
-      if (rest.startsWith("[")) {
-        const restColumn = indent + body.length - rest.length;
-        out[key3] = flowList(rest, (i, offset) => put(`${childPath}.${i}`, line, restColumn + offset + 1));
-        continue;
-      }
-      if (rest !== "" && !rest.startsWith("#")) {
-        out[key3] = scalar(rest);
-        continue;
-      }
-      const next = lines[at2];
-      if (next && next.indent > indent) out[key3] = block2(next.indent, childPath);
-      else if (next && next.indent === indent && isItem(next.text)) out[key3] = list(indent, childPath);
-      else out[key3] = null;
-    }
-    return out;
-  };
-  const isItem = (t) => t === "-" || t.startsWith("- ");
-  const list = (indent, path) => {
-    const out = [];
-    while (at2 < lines.length) {
-      const line = lines[at2];
-      if (line.indent < indent) break;
-      if (line.indent > indent) fail4();
-      if (!isItem(line.text)) break;
-      const itemPath = path === "" ? String(out.length) : `${path}.${out.length}`;
-      let gap = 1;
-      while (line.text.charCodeAt(gap) === 32) gap++;
-      const body = line.text.slice(gap);
-      if (body === "" || body.startsWith("#") || isItem(body)) fail4();
-      const column = indent + gap;
-      put(itemPath, line, column + 1);
-      if (KEY.test(body)) out.push(mapping(column, itemPath, body));
-      else {
-        out.push(scalar(body));
-        at2++;
-      }
-    }
-    return out;
-  };
-  const block2 = (indent, path) => isItem(lines[at2].text) ? list(indent, path) : mapping(indent, path);
-  try {
-    put("", lines[0], 1);
-    const value = mapping(0, "");
-    if (at2 !== lines.length) return null;
-    return { value, positions: positions2 };
-  } catch (e) {
-    if (e instanceof NotPlain) return null;
-    throw e;
-  }
-}
-
-// src/registry/schema.ts
-var import_ajv = __toESM(require_ajv(), 1);
-
-// schema/record.schema.json
-var record_schema_default = {
-  $schema: "http://json-schema.org/draft-07/schema#",
-  $id: "https://stereogate.invalid/schema/record.schema.json",
-  title: "stereogate compound record",
-  description: "One compound of a registry: its structure and the stereochemical claim made about it. YAML or JSON, one record per file.",
-  type: "object",
-  required: ["id", "structure", "stereo"],
-  additionalProperties: false,
-  properties: {
-    id: {
-      description: "Registry number, unique in the registry, e.g. LX-00042.",
-      type: "string",
-      minLength: 1,
-      maxLength: 200,
-      pattern: "^\\S(.*\\S)?$"
-    },
-    name: { description: "Free-text name.", type: "string" },
-    structure: { $ref: "#/definitions/structureRef" },
-    stereo: {
-      type: "object",
-      required: ["form"],
-      additionalProperties: false,
-      properties: {
-        form: {
-          description: "The stereochemical form claimed for the registered substance.",
-          enum: [
-            "achiral",
-            "meso",
-            "single-enantiomer",
-            "enantioenriched",
-            "racemate",
-            "single-diastereomer",
-            "diastereomer-mixture",
-            "unknown"
-          ]
-        },
-        descriptors: {
-          description: "IUPAC stereodescriptors, e.g. (2R,3S) or rac-(1R,2S).",
-          type: "string"
-        },
-        ee: {
-          description: "Enantiomeric excess in percent.",
-          type: "number",
-          minimum: 0,
-          maximum: 100
-        },
-        ratio: {
-          description: "Component ratio in the order of components, e.g. 70:30.",
-          type: "string"
-        },
-        components: {
-          description: "The stereoisomers a mixture consists of (at most 50).",
-          type: "array",
-          maxItems: 50,
-          items: { $ref: "#/definitions/component" }
-        },
-        rotation: {
-          description: "Specific rotation as measured.",
-          type: "object",
-          required: ["value"],
-          additionalProperties: false,
-          properties: {
-            value: { description: "Degrees; the sign matters.", type: "number" },
-            wavelength_nm: { type: "number", exclusiveMinimum: 0 },
-            temperature_c: { type: "number", minimum: -273.15 },
-            solvent: { type: "string" },
-            concentration: { description: "g/100 mL.", type: "number", exclusiveMinimum: 0 }
-          }
-        },
-        evidence: {
-          description: "Analytical evidence for the claim, free text per item.",
-          type: "array",
-          items: { type: "string" }
-        }
-      }
-    },
-    origin: {
-      description: "How the compound was made: the inputs it came from and what, if anything, made the outcome stereoselective or changed the ee.",
-      type: "object",
-      required: ["from"],
-      additionalProperties: false,
-      properties: {
-        from: {
-          description: "Inputs: registered ids (e.g. LX-00012) or, for inputs not registered, SMILES.",
-          type: "array",
-          minItems: 1,
-          maxItems: 20,
-          items: { type: "string", minLength: 1, maxLength: 2e3 }
-        },
-        control: {
-          description: "What made the outcome stereoselective or changed the ee; 'none' when nothing chiral was present. Not given: unknown.",
-          enum: [
-            "none",
-            "chiral-catalyst",
-            "chiral-reagent",
-            "chiral-auxiliary",
-            "biocatalyst",
-            "resolution",
-            "chiral-separation",
-            "enrichment",
-            "unknown"
-          ]
-        }
-      }
-    },
-    waivers: {
-      description: "Findings the responsible chemist has accepted.",
-      type: "array",
-      items: {
-        type: "object",
-        required: ["check"],
-        additionalProperties: false,
-        properties: {
-          check: {
-            description: "Id of the check whose findings are accepted.",
-            type: "string",
-            minLength: 1
-          },
-          reason: { type: "string" },
-          approved_by: { type: "string" }
-        }
-      }
-    }
-  },
-  definitions: {
-    structureRef: {
-      type: "object",
-      additionalProperties: false,
-      properties: {
-        smiles: { type: "string", minLength: 1 },
-        molfile: {
-          description: "Path relative to the record file, inside the registry.",
-          type: "string",
-          minLength: 1
-        }
-      },
-      oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
-    },
-    component: {
-      type: "object",
-      additionalProperties: false,
-      properties: {
-        smiles: { type: "string", minLength: 1 },
-        molfile: { type: "string", minLength: 1 },
-        descriptors: { type: "string" }
-      },
-      oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
-    }
-  }
-};
-
-// schema/config.schema.json
-var config_schema_default = {
-  $schema: "http://json-schema.org/draft-07/schema#",
-  $id: "https://stereogate.invalid/schema/config.schema.json",
-  title: "stereogate configuration (stereogate.config.yml or stereogate.config.json at the registry root)",
-  type: "object",
-  additionalProperties: false,
-  properties: {
-    recordDirs: {
-      description: "Folders holding record files, relative to the registry root. Default: [compounds].",
-      type: "array",
-      minItems: 1,
-      items: { type: "string", minLength: 1 }
-    },
-    severities: {
-      description: "Severity per check id (sets the level of that check's failures, raised or lowered; note-level messages stay notes), or per check-id/message-id (that message only, notes included); off skips the check or drops the message.",
-      type: "object",
-      additionalProperties: { enum: ["error", "warning", "note", "off"] }
-    },
-    ratioSumTolerance: {
-      description: "Parts of a ratio must sum to 100 within this many percentage points.",
-      type: "number",
-      minimum: 0,
-      maximum: 100
-    },
-    racemateRatioTolerance: {
-      description: "A racemate's enantiomer ratio may deviate from 50:50 by this many percentage points.",
-      type: "number",
-      minimum: 0,
-      maximum: 50
-    },
-    eeTolerance: {
-      description: "Stated ee and ee computed from a ratio may differ by this many percentage points.",
-      type: "number",
-      minimum: 0,
-      maximum: 100
-    },
-    singleEnantiomerMinEe: {
-      description: "A single-enantiomer claim needs at least this ee (percent).",
-      type: "number",
-      minimum: 0,
-      maximum: 100
-    },
-    axisOrthoMin: {
-      description: "A biaryl bond with at least this many ortho substituents (both rings; a fused ring counts twice) is a potential stereogenic axis when the structure does not draw one. Rule of thumb (common practice, no source). Default 3.",
-      type: "integer",
-      minimum: 0,
-      maximum: 8
-    },
-    zeroRotationTolerance: {
-      description: "A specific rotation whose magnitude is at or below this (degrees) counts as zero.",
-      type: "number",
-      minimum: 0
-    }
-  }
-};
-
-// src/registry/schema.ts
-init_closest();
-
-// src/registry/form-words.ts
-var SYNONYMS = {
-  enantiopure: "single-enantiomer",
-  "enantiomerically-pure": "single-enantiomer",
-  "optically-pure": "single-enantiomer",
-  homochiral: "single-enantiomer",
-  "single-isomer": "single-enantiomer",
-  racemic: "racemate",
-  rac: "racemate",
-  "racemic-mixture": "racemate",
-  dl: "racemate",
-  "±": "racemate",
-  scalemic: "enantioenriched",
-  enriched: "enantioenriched",
-  "enantiomerically-enriched": "enantioenriched",
-  "partially-resolved": "enantioenriched",
-  diastereopure: "single-diastereomer",
-  "diastereomerically-pure": "single-diastereomer",
-  "diastereomeric-mixture": "diastereomer-mixture",
-  "mixture-of-diastereomers": "diastereomer-mixture",
-  "epimeric-mixture": "diastereomer-mixture",
-  "not-chiral": "achiral",
-  undefined: "unknown",
-  unspecified: "unknown",
-  "not-determined": "unknown"
-};
-function formSynonym(word) {
-  const key3 = word.trim().toLowerCase().replace(/[\s_]+/g, "-");
-  return SYNONYMS[key3] ?? null;
-}
-
-// src/registry/schema.ts
-var PROBLEM_CODES = {
-  required: "missing-field",
-  additionalProperties: "unknown-field",
-  enum: "not-allowed-value",
-  type: "wrong-type",
-  minimum: "out-of-range",
-  maximum: "out-of-range",
-  exclusiveMinimum: "out-of-range",
-  exclusiveMaximum: "out-of-range",
-  minLength: "empty-value",
-  maxLength: "too-long",
-  pattern: "spaces-around",
-  minItems: "too-few-items",
-  maxItems: "too-many-items",
-  oneOf: "structure-choice"
-};
-var AJV_OPTIONS = {
-  allErrors: true,
-  strict: true,
-  strictRequired: false,
-  allowUnionTypes: true,
-  verbose: true
-};
-var ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
-var recordValidator = null;
-var configValidator = null;
-function validateRecordShape(value) {
-  recordValidator ??= ajv.compile(record_schema_default);
-  return recordValidator(value) ? [] : explain(recordValidator.errors ?? [], value, "record");
-}
-function validateConfigShape(value) {
-  configValidator ??= ajv.compile(config_schema_default);
-  return configValidator(value) ? [] : explain(configValidator.errors ?? [], value, "config file");
-}
-function pointerToPath(pointer) {
-  if (pointer === "") return "";
-  return pointer.slice(1).split("/").map((s) => s.replace(/~1/g, "/").replace(/~0/g, "~")).join(".");
-}
-function join2(path, key3) {
-  return path === "" ? key3 : `${path}.${key3}`;
-}
-function at(value, path) {
-  if (path === "") return value;
-  let cur = value;
-  for (const part of path.split(".")) {
-    if (cur === null || typeof cur !== "object") return void 0;
-    cur = cur[part];
-  }
-  return cur;
-}
-function kindOf(v) {
-  if (v === null) return "null";
-  if (Array.isArray(v)) return "a list";
-  if (typeof v === "object") return "a mapping";
-  if (typeof v === "string") return `the text ${quote(v)}`;
-  return `${typeof v} ${safeJson(v)}`;
-}
-function quote(v) {
-  const s = typeof v === "string" ? v : safeJson(v);
-  const short = s.length > 60 ? `${s.slice(0, 57)}...` : s;
-  return `'${short}'`;
-}
-function safeJson(v) {
-  try {
-    return JSON.stringify(v) ?? String(v);
-  } catch {
-    return Object.prototype.toString.call(v);
-  }
-}
-function allowedProperties(schemaNode) {
-  const props = schemaNode?.properties;
-  return props ? Object.keys(props) : [];
-}
-var TYPE_WORDS = {
-  string: "text",
-  number: "a number",
-  integer: "a whole number",
-  object: "a mapping of fields",
-  array: "a list",
-  boolean: "true or false"
-};
-function explainOne(e, value, what) {
-  const path = pointerToPath(e.instancePath);
-  const label = path === "" ? `the ${what}` : path;
-  const got2 = at(value, path);
-  switch (e.keyword) {
-    case "required": {
-      const missing = String(e.params.missingProperty);
-      return {
-        path: join2(path, missing),
-        message: `${join2(path, missing)}: this field is required but missing`
-      };
-    }
-    case "additionalProperties": {
-      const extra = String(e.params.additionalProperty);
-      const allowed = allowedProperties(e.parentSchema);
-      const guess = closestWord(extra, allowed);
-      const hint = guess ? `; did you mean '${guess}'?` : allowed.length ? ` (allowed: ${allowed.join(", ")})` : "";
-      return {
-        path: join2(path, extra),
-        message: `${join2(path, extra)}: '${extra}' is not a field of ${path === "" ? `a ${what}` : path}${hint}`
-      };
-    }
-    case "enum": {
-      const allowed = (e.params.allowedValues ?? []).map(String);
-      const synonym = typeof got2 === "string" ? formSynonym(got2) : null;
-      const guess = synonym !== null && allowed.includes(synonym) ? synonym : typeof got2 === "string" ? closestWord(got2, allowed) : null;
-      const hint = guess ? `; did you mean '${guess}'?` : "";
-      return { path, message: `${label}: ${quote(got2)} is not one of ${allowed.join(", ")}${hint}` };
-    }
-    case "type": {
-      const want = String(e.params.type).split(",").map((t) => TYPE_WORDS[t] ?? t).join(" or ");
-      const props = allowedProperties(e.parentSchema);
-      const tip = want === "text" && (typeof got2 === "number" || typeof got2 === "boolean") ? " (put it in quotes)" : want === "a mapping of fields" && props.includes("smiles") && props.includes("molfile") ? " (write it as smiles: … or molfile: … on the next line, indented)" : "";
-      return { path, message: `${label}: must be ${want}, found ${kindOf(got2)}${tip}` };
-    }
-    case "minimum":
-    case "maximum":
-    case "exclusiveMinimum":
-    case "exclusiveMaximum": {
-      const limit = e.params.limit;
-      const words = {
-        minimum: "at least",
-        maximum: "at most",
-        exclusiveMinimum: "more than",
-        exclusiveMaximum: "less than"
-      };
-      return {
-        path,
-        message: `${label}: must be ${words[e.keyword]} ${limit}, found ${typeof got2 === "number" ? got2 : kindOf(got2)}`
-      };
-    }
-    case "minLength":
-      return { path, message: `${label}: must not be empty` };
-    case "maxLength":
-      return {
-        path,
-        message: `${label}: is too long (at most ${e.params.limit} characters)`
-      };
-    case "pattern":
-      return { path, message: `${label}: ${quote(got2)} must not start or end with spaces` };
-    case "maxItems": {
-      const n = Array.isArray(got2) ? got2.length : 0;
-      const limit = e.params.limit;
-      const advice = /components$/.test(path) ? "the record is not audited (split it into several records)" : "shorten the list";
-      return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
-    }
-    case "minItems":
-      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
-    case "oneOf": {
-      if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
-        return {
-          path,
-          message: `${label}: must be a mapping with smiles or molfile (e.g. smiles: CCO), found ${kindOf(got2)}`
-        };
-      }
-      const obj = got2;
-      const both = "smiles" in obj && "molfile" in obj;
-      return {
-        path,
-        message: `${label}: give exactly one of smiles or molfile (found ${both ? "both" : "neither"})`
-      };
-    }
-    default:
-      return { path, message: `${label}: ${e.message ?? "is not valid"}` };
-  }
-}
-function explain(errors, value, what) {
-  const oneOfPaths = errors.filter((e) => e.keyword === "oneOf").map((e) => e.schemaPath);
-  const wrongType = new Set(errors.filter((e) => e.keyword === "type").map((e) => e.instancePath));
-  const out = [];
-  const seen = /* @__PURE__ */ new Set();
-  for (const e of errors) {
-    if (oneOfPaths.some((p2) => e.schemaPath !== p2 && e.schemaPath.startsWith(`${p2}/`))) continue;
-    if (e.keyword === "oneOf" && wrongType.has(e.instancePath)) continue;
-    const p = explainOne(e, value, what);
-    if (!p || seen.has(p.message)) continue;
-    seen.add(p.message);
-    out.push({ ...p, code: PROBLEM_CODES[e.keyword] ?? "schema" });
-  }
-  return out;
-}
-
-// src/registry/parse.ts
-function parseDocumentText(raw2) {
-  const text = raw2.includes("\r") ? raw2.replace(/\r\n?/g, "\n") : raw2;
-  const quick = quickParse(text);
-  if (quick) return { value: quick.value, positions: quick.positions, problems: [] };
-  return parseFullText(text);
-}
-function parseFullText(text) {
-  const counter = new import_yaml2.LineCounter();
-  const doc = (0, import_yaml2.parseDocument)(text, {
-    lineCounter: counter,
-    prettyErrors: true,
-    uniqueKeys: true,
-    version: "1.2"
-  });
-  const positions2 = positionsOf(doc, counter);
-  const problems = [];
-  for (const err2 of doc.errors) {
-    const line = err2.linePos?.[0]?.line ?? counter.linePos(err2.pos[0]).line;
-    const first = err2.message.split("\n")[0] ?? err2.message;
-    problems.push({
-      path: "",
-      line,
-      code: "yaml-syntax",
-      message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, "")}`
-    });
-  }
-  problems.push(...tagProblems(doc, counter));
-  if (problems.length > 0) return { value: null, positions: positions2, problems };
-  let value;
-  try {
-    value = doc.toJS({ maxAliasCount: 50 });
-  } catch (e) {
-    return {
-      value: null,
-      positions: positions2,
-      problems: [
-        { path: "", line: 1, code: "yaml-syntax", message: `cannot be read: ${e.message}` }
-      ]
-    };
-  }
-  return { value, positions: positions2, problems };
-}
-var PLAIN_TAGS = new Set(
-  ["str", "int", "float", "bool", "null", "map", "seq"].map((t) => `tag:yaml.org,2002:${t}`)
-);
-function tagProblems(doc, counter) {
-  const out = [];
-  const lineAt = (node) => counter.linePos(node?.range?.[0] ?? 0).line;
-  for (const w of doc.warnings) {
-    if (w.code !== "TAG_RESOLVE_FAILED" || !w.message.includes("tag:yaml.org,2002:")) continue;
-    const line = w.linePos?.[0]?.line ?? counter.linePos(w.pos[0]).line;
-    const first = (w.message.split("\n")[0] ?? w.message).replace("tag:yaml.org,2002:", "!!").replace(/ at line \d+, column \d+:?$/, "");
-    out.push({ path: "", line, code: "unknown-tag", message: `not plain YAML/JSON: ${first}` });
-  }
-  (0, import_yaml2.visit)(doc, {
-    Node(key3, node, path) {
-      const tag = node.tag;
-      if (tag !== void 0 && !PLAIN_TAGS.has(tag)) {
-        const parent = path[path.length - 1];
-        const at2 = key3 === "value" && (0, import_yaml2.isPair)(parent) && (0, import_yaml2.isNode)(parent.key) ? parent.key : node;
-        out.push({
-          path: "",
-          line: lineAt(at2),
-          code: "unknown-tag",
-          message: `the YAML tag ${tag.replace("tag:yaml.org,2002:", "!!")} is not allowed in a record (plain YAML/JSON values only)`
-        });
-      }
-    },
-    Pair(_key, pair) {
-      if (pair.key !== null && !(0, import_yaml2.isScalar)(pair.key)) {
-        out.push({
-          path: "",
-          line: lineAt(pair.key),
-          code: "yaml-syntax",
-          message: "not valid here: a field name must be a plain word, not a list or mapping"
-        });
-      }
-    }
-  });
-  return out;
-}
-function parseRecordText(text) {
-  const parsed = parseDocumentText(text);
-  const { value, positions: positions2 } = parsed;
-  if (parsed.problems.length > 0)
-    return { value, record: null, id: null, positions: positions2, problems: parsed.problems };
-  if (value === null || value === void 0) {
-    return {
-      value,
-      record: null,
-      id: null,
-      positions: positions2,
-      problems: [{ path: "", line: 1, code: "empty-file", message: "the file is empty" }]
-    };
-  }
-  const id = typeof value === "object" && !Array.isArray(value) && typeof value.id === "string" ? value.id.trim() || null : null;
-  const shape = validateRecordShape(value);
-  const problems = shape.map((p) => ({
-    path: p.path,
-    message: p.message,
-    line: lineOf(positions2, p.path),
-    code: p.code
-  }));
-  problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0));
-  return { value, record: problems.length === 0 ? value : null, id, positions: positions2, problems };
-}
-
-// src/audit/config.ts
-var DEFAULT_CONFIG = Object.freeze({
-  recordDirs: ["compounds"],
-  severities: {},
-  ratioSumTolerance: 1,
-  racemateRatioTolerance: 2,
-  eeTolerance: 1,
-  singleEnantiomerMinEe: 98,
-  zeroRotationTolerance: 1,
-  axisOrthoMin: 3
-});
-var DEFAULT_SOURCES = Object.freeze({
-  recordDirs: "the record format of this project (records live under compounds/ unless configured)",
-  severities: "none overridden: every check keeps the default severity its module declares. A level given for a check sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given for 'check-id/message-id' sets that one message's level, notes included",
-  ratioSumTolerance: "common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts",
-  racemateRatioTolerance: "common practice, no source: a racemate measured by chiral chromatography typically reads within about 2 points of 50:50 (integration error); more than that suggests an enantioenriched sample",
-  eeTolerance: "common practice, no source: ee and ratios are reported rounded to about 1 percent",
-  singleEnantiomerMinEe: "common practice, no source: many registries call a sample a single enantiomer from about 98 % ee (99:1 er); set your own SOP value",
-  zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))",
-  axisOrthoMin: "common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies"
-});
-var CONFIG_FILE_NAMES = [
-  "stereogate.config.yml",
-  "stereogate.config.yaml",
-  "stereogate.config.json"
-];
-var ConfigError = class extends Error {
-  name = "ConfigError";
-};
-function loadConfig(root, configFile, overrides) {
-  let file = null;
-  if (configFile !== void 0) {
-    file = isAbsolute2(configFile) ? configFile : resolve2(configFile);
-    if (!existsSync(file)) throw new ConfigError(`config file ${configFile} does not exist`);
-  } else {
-    const found = CONFIG_FILE_NAMES.map((n) => join3(root, n)).find((p) => existsSync(p));
-    file = found ?? null;
-  }
-  const fromFile = file === null ? {} : readConfigFile(file, configFile ?? file);
-  const config = {
-    ...DEFAULT_CONFIG,
-    recordDirs: [...DEFAULT_CONFIG.recordDirs],
-    ...fromFile,
-    ...overrides ?? {},
-    severities: {
-      ...DEFAULT_CONFIG.severities,
-      ...fromFile.severities ?? {},
-      ...overrides?.severities ?? {}
-    }
-  };
-  return { config, file };
-}
-function readConfigFile(abs, shown) {
-  const read = readTextFile(abs);
-  if (!read.ok) throw new ConfigError(`config file ${shown} ${read.error}`);
-  const parsed = parseDocumentText(read.text);
-  const issues = parsed.problems.map((p) => `${shown} line ${p.line}: ${p.message}`);
-  if (issues.length === 0) {
-    if (parsed.value === null || parsed.value === void 0) return {};
-    for (const p of validateConfigShape(parsed.value)) {
-      const line = lineOf(parsed.positions, p.path);
-      issues.push(`${shown}${line === null ? "" : ` line ${line}`}: ${p.message}`);
-    }
-  }
-  if (issues.length > 0) throw new ConfigError(`the config file is not valid:
-  ${issues.join("\n  ")}`);
-  return parsed.value;
-}
-function checkSeverityIds(config, knownIds, suggest, messagesOf) {
-  const unknown = [];
-  for (const key3 of Object.keys(config.severities)) {
-    const cut = key3.indexOf("/");
-    const id = cut < 0 ? key3 : key3.slice(0, cut);
-    if (!knownIds.includes(id)) {
-      const guess = suggest(id);
-      unknown.push(guess ? `'${key3}' (did you mean '${guess}'?)` : `'${key3}'`);
-      continue;
-    }
-    if (cut < 0) continue;
-    const message = key3.slice(cut + 1);
-    const known = messagesOf?.(id);
-    if (known !== void 0 && !known.includes(message)) {
-      unknown.push(`'${key3}' (${id} has no message '${message}'; its messages: ${known.join(", ")})`);
-    }
-  }
-  if (unknown.length === 0) return;
-  throw new ConfigError(
-    `severities: no check or message is called ${unknown.join(", ")}; known checks: ${knownIds.join(", ")}`
-  );
-}
-
-// src/audit/run.ts
-init_closest();
-import { existsSync as existsSync2, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
-import { resolve as resolve3 } from "node:path";
-
-// src/registry/load.ts
-import { realpathSync as realpathSync2 } from "node:fs";
-import { dirname } from "node:path";
-function loadRegistry(root, options) {
-  const realRoot = realpathSync2(root);
-  const found = findRecordFiles(realRoot, options.recordDirs);
-  const records = found.files.map((abs) => loadRecordFile(realRoot, abs));
-  for (const r of found.refused) {
-    records.push({
-      file: r.file,
-      id: null,
-      record: null,
-      positions: NO_POSITIONS,
-      problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${r.message}` }],
-      origin: { kind: "file" }
-    });
-  }
-  records.sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
-  markDuplicateIds(records);
-  return { root: realRoot, records, missingDirs: found.missingDirs };
-}
-function loadRecordFile(realRoot, abs) {
-  try {
-    return loadRecordFileOrThrow(realRoot, abs);
-  } catch (e) {
-    return {
-      file: relativeTo(realRoot, abs),
-      id: null,
-      record: null,
-      positions: NO_POSITIONS,
-      problems: [
-        {
-          path: "",
-          line: null,
-          code: "internal-error",
-          message: `the record file could not be read because of an internal error in stereogate (${e?.message ?? String(e)}); please report it with the file`
-        }
-      ],
-      origin: { kind: "file" }
-    };
-  }
-}
-function loadRecordFileOrThrow(realRoot, abs) {
-  const file = relativeTo(realRoot, abs);
-  const read = readTextFile(abs);
-  if (!read.ok) {
-    return {
-      file,
-      id: null,
-      record: null,
-      positions: NO_POSITIONS,
-      problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${read.error}` }],
-      origin: { kind: "file" }
-    };
-  }
-  const parsed = parseRecordText(read.text);
-  const loaded = {
-    file,
-    id: parsed.id,
-    record: parsed.record,
-    positions: parsed.positions,
-    problems: parsed.problems,
-    origin: { kind: "file" }
-  };
-  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
-  return loaded;
-}
-function asObject(v) {
-  return v !== null && typeof v === "object" && !Array.isArray(v) ? v : null;
-}
-function sourceOf(ref, field2, fetchMolfile) {
-  if (!ref) return null;
-  if (typeof ref.smiles === "string" && typeof ref.molfile !== "string") {
-    return { field: field2, format: "smiles", text: ref.smiles };
-  }
-  if (typeof ref.molfile === "string" && typeof ref.smiles !== "string") {
-    return { field: field2, format: "molfile", ...fetchMolfile(ref.molfile) };
-  }
-  return null;
-}
-function structureSources(realRoot, recordDir, value) {
-  const fetchMolfile = (path) => {
-    const where2 = resolveInside(realRoot, recordDir, path);
-    if (!where2.ok) return { text: null, error: `molfile ${where2.error}` };
-    const read = readTextFile(where2.abs);
-    if (!read.ok) return { text: null, file: where2.rel, error: `molfile '${path}' ${read.error}` };
-    return { text: read.text, file: where2.rel };
-  };
-  const top = asObject(value);
-  const main = sourceOf(asObject(top?.structure), "structure", fetchMolfile);
-  const comps = asObject(top?.stereo)?.components;
-  const components = [];
-  if (Array.isArray(comps)) {
-    comps.slice(0, MAX_COMPONENTS_READ).forEach((c, i) => {
-      const s = sourceOf(asObject(c), `stereo.components.${i}`, fetchMolfile);
-      components.push(
-        s ?? { field: `stereo.components.${i}`, format: "smiles", text: null, error: "no structure given" }
-      );
-    });
-  }
-  return { main, components };
-}
-var MAX_COMPONENTS_READ = 50;
-function markDuplicateIds(records) {
-  const byId2 = /* @__PURE__ */ new Map();
-  for (const r of records) {
-    if (r.id === null) continue;
-    const list = byId2.get(r.id);
-    if (list) list.push(r);
-    else byId2.set(r.id, [r]);
-  }
-  for (const [id, list] of byId2) {
-    if (list.length < 2) continue;
-    for (const r of list) {
-      const others2 = list.filter((o) => o !== r).map((o) => {
-        const line = lineOf(o.positions, "id");
-        return line === null ? o.file : `${o.file} line ${line}`;
-      });
-      r.problems.push({
-        path: "id",
-        line: lineOf(r.positions, "id"),
-        code: "duplicate-id",
-        message: `id: '${id}' is also used by ${others2.join(", ")}; every record needs its own id`
-      });
-    }
-  }
-}
-
-// src/audit/engine.ts
-function heavyFormula(elements, wildcards) {
-  const counts = /* @__PURE__ */ new Map();
-  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
-  const order = [...counts.keys()].sort((x, y) => {
-    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
-    return x < y ? -1 : x > y ? 1 : 0;
-  });
-  let out = "";
-  for (const e of order) {
-    const c = counts.get(e);
-    out += c === 1 ? e : `${e}${c}`;
-  }
-  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
-  return out;
-}
-async function defaultEngine(settings = {}) {
-  const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
-  const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
-  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
-  return {
-    readStructure: (text, options) => chem.readStructure(text, options),
-    describe: settings.axisOrthoMin === void 0 ? (s) => chem.describe(s) : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
-    relate: (a, b) => chem.relate(a, b),
-    formula: (s) => graph.molecularFormula(s),
-    smilesHeavyAtoms: (smiles) => {
-      let start = 0;
-      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
-      let g;
-      try {
-        g = syntax.parseSmilesGraph(smiles, start);
-      } catch {
-        return null;
-      }
-      if ("error" in g) return null;
-      const heavy = [];
-      let wildcards = 0;
-      for (const a of g.atoms) {
-        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
-        else if (a.atomicNumber !== 1) heavy.push(a.element);
-      }
-      return heavyFormula(heavy, wildcards);
-    }
-  };
-}
-
-// src/audit/findings.ts
-var SCHEMA_CHECK_ID = "record-schema";
-var INTERNAL_ERROR_ID = "internal-error";
-function fillTemplate(template, data) {
-  return template.replace(/\{([A-Za-z0-9_]+)\}/g, (whole, name) => {
-    if (!(name in data)) return whole;
-    const v = data[name];
-    return v === null ? "none" : String(v);
-  });
-}
-function resolveSeverity(base, own2, configured, configuredForMessage) {
-  if (configuredForMessage !== void 0) return configuredForMessage;
-  const level2 = own2 ?? base;
-  if (configured === void 0 || level2 === "note") return level2;
-  return configured;
-}
-function messageKey(checkId, messageId) {
-  return `${checkId}/${messageId}`;
-}
-function configuredSeverity(config, key3) {
-  return Object.prototype.hasOwnProperty.call(config.severities, key3) ? config.severities[key3] : void 0;
-}
-function lineFor(loaded, field2) {
-  if (field2 !== null) {
-    const line = lineOf(loaded.positions, field2);
-    if (line !== null) return line;
-  }
-  return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
-}
-function messageEnabled(config, checkId, messageId) {
-  return configuredSeverity(config, messageKey(checkId, messageId)) !== "off";
-}
-function toFinding(check, raw2, loaded, config) {
-  const configured = configuredSeverity(config, check.id);
-  const forMessage = configuredSeverity(config, messageKey(check.id, raw2.messageId));
-  const template = check.messages[raw2.messageId];
-  const message = template !== void 0 ? fillTemplate(template, raw2.data ?? {}) : `${raw2.messageId}${Object.keys(raw2.data ?? {}).length ? ` (${JSON.stringify(raw2.data)})` : ""}`;
-  return {
-    check: check.id,
-    messageId: raw2.messageId,
-    severity: resolveSeverity(
-      check.defaultSeverity,
-      raw2.severity,
-      configured === "off" ? void 0 : configured,
-      forMessage === "off" ? void 0 : forMessage
-    ),
-    message,
-    data: raw2.data ?? {},
-    line: lineFor(loaded, raw2.field ?? null),
-    field: raw2.field ?? null,
-    waived: null,
-    ...raw2.fix === void 0 ? {} : { fix: raw2.fix }
-  };
-}
-function nonEmpty(s) {
-  return typeof s === "string" && s.trim() !== "";
-}
-function applyWaivers(findings, loaded) {
-  const waivers = loaded.record?.waivers ?? [];
-  for (const f of findings) {
-    if (f.check === INTERNAL_ERROR_ID) continue;
-    const w = waivers.find((x) => x.check === f.check && nonEmpty(x.reason) && nonEmpty(x.approved_by));
-    if (w) f.waived = { reason: w.reason.trim(), approvedBy: w.approved_by.trim() };
-  }
-}
-function internalError(check, error, loaded) {
-  const text = error instanceof Error ? error.message : String(error);
-  return {
-    check: INTERNAL_ERROR_ID,
-    messageId: "check-failed",
-    severity: "error",
-    message: `The check ${check.id} failed with an internal error (${text}), so this record was not fully checked. This is a fault in stereogate, not in the record: please report it with the record attached.`,
-    data: { check: check.id, error: text },
-    line: loaded.origin.kind === "bulk" ? loaded.origin.line : null,
-    field: null,
-    waived: null
-  };
-}
-var TIME_LIMIT_ID = "record-time-limit";
-function budgetFinding(loaded, kind, limit) {
-  const what = kind === "time" ? `took longer than the ${limit / 1e3} s time limit` : `needed more than the ${limit} MB memory bound`;
-  return {
-    check: TIME_LIMIT_ID,
-    messageId: kind === "time" ? "time-limit-exceeded" : "memory-bound-exceeded",
-    severity: "error",
-    message: `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, leave out repeated salt or solvent parts).`,
-    data: { kind, limit },
-    line: loaded.origin.kind === "bulk" ? loaded.origin.line : lineOf(loaded.positions, "structure"),
-    field: null,
-    waived: null
-  };
-}
-function schemaFindings(loaded, config) {
-  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
-  if (configured === "off") return [];
-  return loaded.problems.map((p) => ({
-    check: SCHEMA_CHECK_ID,
-    messageId: p.code ?? "record-problem",
-    severity: configured ?? "error",
-    message: p.message,
-    data: { path: p.path, problem: p.message },
-    line: p.line ?? (loaded.origin.kind === "bulk" ? loaded.origin.line : null),
-    field: p.path === "" ? null : p.path,
-    waived: null
-  }));
-}
-
-// src/audit/select.ts
-import { isAbsolute as isAbsolute3, relative as relative2, sep as sep2 } from "node:path";
-function normalizePath(root, path) {
-  const rel = isAbsolute3(path) ? relative2(root, path) : path;
-  const parts = [];
-  for (const part of rel.split(/[\\/]+/)) {
-    if (part === "" || part === ".") continue;
-    if (part === "..") parts.pop();
-    else parts.push(part);
-  }
-  return parts.join("/");
-}
-function byMolfile(records) {
-  const users = /* @__PURE__ */ new Map();
-  const add = (file, r) => {
-    if (file === void 0) return;
-    const list = users.get(file);
-    if (!list) users.set(file, [r]);
-    else if (list[list.length - 1] !== r) list.push(r);
-  };
-  for (const r of records) {
-    const s = r.sources;
-    if (!s) continue;
-    add(s.main?.file, r);
-    for (const c of s.components) add(c.file, r);
-  }
-  return users;
-}
-function lowerBound(sorted, file) {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = lo + hi >>> 1;
-    if (sorted[mid].file < file) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-function selectRecords(records, root, paths) {
-  const selected = /* @__PURE__ */ new Set();
-  const unmatched = [];
-  let users = null;
-  let sorted = null;
-  for (const given of paths) {
-    const p = normalizePath(root, given);
-    const escapes2 = isAbsolute3(given) && (relative2(root, given).startsWith(`..${sep2}`) || relative2(root, given) === "..");
-    let hit = false;
-    if (!escapes2) {
-      sorted ??= [...records].sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
-      if (p === "") {
-        for (const r of records) selected.add(r);
-        hit = records.length > 0;
-      }
-      for (const start of p === "" ? [] : [p, `${p}/`]) {
-        for (let i = lowerBound(sorted, start); i < sorted.length; i++) {
-          const r = sorted[i];
-          if (start === p ? r.file !== p : !r.file.startsWith(start)) break;
-          selected.add(r);
-          hit = true;
-        }
-      }
-      users ??= byMolfile(records);
-      for (const r of users.get(p) ?? []) {
-        selected.add(r);
-        hit = true;
-      }
-    }
-    if (!hit) unmatched.push(given);
-  }
-  return { selected, unmatched };
-}
-
-// src/audit/run.ts
-init_budget();
-
-// src/registry/keys.ts
-function drawingKind(f) {
-  const m = f.enhanced.meaning;
-  if (m === "racemic" || m === "mixture") return "racemic";
-  if (m === "relative") return "relative";
-  return "as-drawn";
-}
-var MIRRORED = { R: "S", S: "R", M: "P", P: "M" };
-function recordKeys(f, text) {
-  const kind = drawingKind(f);
-  const base = { constitution: f.constitutionKey, kind, chiral: f.chiral };
-  if (f.units.some((u) => !u.defined)) return { ...base, stereo: null, mirror: null, exact: false };
-  let exact = true;
-  const seen = /* @__PURE__ */ new Set();
-  const own2 = [];
-  const mirrored2 = [];
-  for (const u of f.units) {
-    if (seen.has(u.classKey) || u.label === null || u.label === "e" || u.label === "z") exact = false;
-    seen.add(u.classKey);
-    const label = u.label === null ? "?" : u.label === "e" || u.label === "z" ? "ez" : u.label;
-    own2.push(`${u.classKey}=${label}`);
-    mirrored2.push(`${u.classKey}=${(u.label && MIRRORED[u.label]) ?? label}`);
-  }
-  own2.sort();
-  mirrored2.sort();
-  const keys = {
-    ...base,
-    stereo: `${kind}|${own2.join(";")}`,
-    mirror: `${kind}|${mirrored2.join(";")}`,
-    exact
-  };
-  if (!exact && text) keys.text = text;
-  return keys;
-}
-
-// src/audit/structures.ts
-init_budget();
-var NOTHING = Object.freeze({
-  structure: null,
-  facts: null,
-  error: {
-    message: "the record gives no structure (structure.smiles or structure.molfile)",
-    line: null,
-    offset: null
-  }
-});
-function failed(message, line = null, offset = null, code) {
-  return { structure: null, facts: null, error: { message, line, offset, ...code ? { code } : {} } };
-}
-function readOnly(source, engine) {
-  if (source === null) return { structure: null, failure: NOTHING };
-  if (source.text === null)
-    return { structure: null, failure: failed(source.error ?? "the structure could not be read") };
-  let read;
-  try {
-    read = engine.readStructure(source.text, { format: source.format });
-  } catch (e) {
-    if (e instanceof BudgetExceeded) throw e;
-    const what = source.format === "smiles" ? "SMILES" : "molfile";
-    return {
-      structure: null,
-      failure: failed(`internal error while reading the ${what}: ${e.message}`)
-    };
-  }
-  if (!read.ok) {
-    const what = source.format === "smiles" ? "SMILES" : source.file ? `molfile ${source.file}` : "molfile";
-    return {
-      structure: null,
-      failure: failed(
-        `${what}: ${read.error.message}`,
-        read.error.at.line ?? null,
-        read.error.at.offset ?? null,
-        read.error.code
-      )
-    };
-  }
-  return { structure: read.structure, failure: null };
-}
-function describeRead(read, engine) {
-  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
-  try {
-    return { structure: read.structure, facts: engine.describe(read.structure), error: null };
-  } catch (e) {
-    if (e instanceof BudgetExceeded) throw e;
-    return {
-      structure: read.structure,
-      facts: null,
-      error: {
-        message: `internal error while describing the structure: ${e.message}`,
-        line: null,
-        offset: null
-      }
-    };
-  }
-}
-function readSource(source, engine) {
-  return describeRead(readOnly(source, engine), engine);
-}
-function sourcesOf(loaded) {
-  if (loaded.sources) return loaded.sources;
-  const rec = loaded.record;
-  const one = (ref, field2) => {
-    if (!ref) return null;
-    if (typeof ref.smiles === "string") return { field: field2, format: "smiles", text: ref.smiles };
-    if (typeof ref.molfile === "string") {
-      return {
-        field: field2,
-        format: "molfile",
-        text: null,
-        error: `molfile '${ref.molfile}' was not fetched (no file context)`
-      };
-    }
-    return null;
-  };
-  const components = (rec?.stereo.components ?? []).map(
-    (c, i) => one(c, `stereo.components.${i}`) ?? {
-      field: `stereo.components.${i}`,
-      format: "smiles",
-      text: null,
-      error: "no structure given"
-    }
-  );
-  return { main: one(rec?.structure, "structure"), components };
-}
-var StructureCache = class {
-  constructor(engine) {
-    this.engine = engine;
-  }
-  engine;
-  reads = /* @__PURE__ */ new WeakMap();
-  mains = /* @__PURE__ */ new WeakMap();
-  comps = /* @__PURE__ */ new WeakMap();
-  /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
-  read(loaded) {
-    let r = this.reads.get(loaded);
-    if (!r) {
-      r = readOnly(sourcesOf(loaded).main, this.engine);
-      this.reads.set(loaded, r);
-    }
-    return r;
-  }
-  main(loaded) {
-    let m = this.mains.get(loaded);
-    if (!m) {
-      m = describeRead(this.read(loaded), this.engine);
-      this.mains.set(loaded, m);
-    }
-    return m;
-  }
-  components(loaded) {
-    let c = this.comps.get(loaded);
-    if (!c) {
-      c = sourcesOf(loaded).components.map((s) => readSource(s, this.engine));
-      this.comps.set(loaded, c);
-    }
-    return c;
-  }
-  all(loaded) {
-    return { main: this.main(loaded), components: this.components(loaded) };
-  }
-};
-
-// src/audit/index-row.ts
-var nonEmpty2 = (s) => typeof s === "string" && s.trim() !== "";
-function indexRow(loaded, main, seq) {
-  const record2 = loaded.record;
-  let keys = null;
-  if (record2 !== null && main.facts) {
-    const src = sourcesOf(loaded).main;
-    keys = recordKeys(main.facts, src && src.text !== null ? { format: src.format, text: src.text } : null);
-  }
-  const waiver = record2?.waivers?.find(
-    (w) => w.check === "consistent-with-registry" && nonEmpty2(w.reason) && nonEmpty2(w.approved_by)
-  );
-  return {
-    seq,
-    id: loaded.id,
-    file: loaded.file,
-    name: record2?.name ?? null,
-    form: record2?.stereo.form ?? "unknown",
-    rotation: record2?.stereo.rotation ?? null,
-    keys,
-    lines: {
-      id: lineFor(loaded, "id"),
-      structure: lineFor(loaded, "structure"),
-      rotation: lineFor(loaded, "stereo.rotation.value")
-    },
-    waiver: waiver ? { reason: waiver.reason.trim(), approvedBy: waiver.approved_by.trim() } : null
-  };
-}
-
-// src/audit/registry-phase.ts
-init_consistent_with_registry();
-
-// src/registry/key-index.ts
-var RegistryIndex = class {
-  constructor(confirm = null) {
-    this.confirm = confirm;
-  }
-  confirm;
-  byKey = /* @__PURE__ */ new Map();
-  /** Rows filed (records with a stereo key). */
-  size = 0;
-  add(row) {
-    const k = row.keys;
-    if (k === null || k.stereo === null) return;
-    const key3 = `${k.constitution}#${k.stereo}`;
-    const classes = this.byKey.get(key3);
-    if (!classes) this.byKey.set(key3, [{ rows: [row] }]);
-    else {
-      const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
-      if (same) same.rows.push(row);
-      else classes.push({ rows: [row] });
-    }
-    this.size++;
-  }
-  /** Removes a row added before (a record file replaced by its new version). */
-  remove(row) {
-    const k = row.keys;
-    if (k === null || k.stereo === null) return;
-    const key3 = `${k.constitution}#${k.stereo}`;
-    const classes = this.byKey.get(key3);
-    if (!classes) return;
-    for (let ci = 0; ci < classes.length; ci++) {
-      const at2 = classes[ci].rows.indexOf(row);
-      if (at2 < 0) continue;
-      classes[ci].rows.splice(at2, 1);
-      if (classes[ci].rows.length === 0) classes.splice(ci, 1);
-      if (classes.length === 0) this.byKey.delete(key3);
-      this.size--;
-      return;
-    }
-  }
-  /**
-   * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
-   * were added; `me` itself left out.
-   */
-  matches(me) {
-    const k = me.keys;
-    if (k === null || k.stereo === null || k.mirror === null) return [];
-    const out = [];
-    const consider = (key3, expected) => {
-      for (const c of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
-        const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
-        if (!other) continue;
-        const relation = other.keys && this.relationOf(k, other.keys, expected);
-        if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
-      }
-    };
-    consider(k.stereo, "identical");
-    if (k.mirror !== k.stereo) consider(k.mirror, "enantiomers");
-    out.sort((a, b) => a.other.seq - b.other.seq);
-    return out;
-  }
-  relationOf(a, b, expected) {
-    if (a.exact && b.exact) return expected;
-    if (!a.text || !b.text || !this.confirm) return null;
-    const r = this.confirm(a, b);
-    return r === "identical" || r === "enantiomers" ? r : null;
-  }
-};
-
-// src/audit/registry-phase.ts
-var CHECK = consistentWithRegistry;
-var RegistryPhase = class {
-  constructor(options) {
-    this.options = options;
-    this.index = new RegistryIndex(options.confirm);
-    this.enabled = configuredSeverity(options.config, CHECK.id) !== "off";
-  }
-  options;
-  index;
-  pairs = [];
-  firstWithId = /* @__PURE__ */ new Map();
-  records = 0;
-  enabled;
-  underReview = /* @__PURE__ */ new Set();
-  /** Review mode: a record of the registry, not under review (added before any `review`). */
-  file(row) {
-    this.index.add(row);
-  }
-  /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
-  fileUnderReview(row) {
-    this.underReview.add(row);
-    this.index.add(row);
-  }
-  /** Full mode: the next record in the audit's order. Review mode: a record under review (filed before). */
-  next(row) {
-    this.records++;
-    const findings = [];
-    if (this.options.duplicateIds && row.id !== null) {
-      const first = this.firstWithId.get(row.id);
-      if (first === void 0) this.firstWithId.set(row.id, row.file);
-      else if (configuredSeverity(this.options.config, SCHEMA_CHECK_ID) !== "off")
-        findings.push(duplicateId(row, first, this.options.config));
-    }
-    if (!this.enabled || row.keys === null) {
-      if (this.options.mode === "full") this.index.add(row);
-      return { findings, passed: null };
-    }
-    const full = this.options.mode === "full";
-    const matches = this.index.matches(row);
-    const c = compareWithRegistry(
-      row,
-      matches,
-      this.options.mode,
-      this.options.config,
-      (r) => this.underReview.has(r)
-    );
-    if (full) this.index.add(row);
-    this.pairs.push(...c.pairs);
-    for (const raw2 of c.findings)
-      if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
-        findings.push(rowFinding(raw2, row, this.options.config));
-    const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
-    return { findings, passed };
-  }
-  summary() {
-    const what = this.options.mode === "full" ? "every record with each record before it" : "each record under review with the whole registry";
-    return {
-      status: this.enabled ? "run" : "not-run",
-      reason: this.enabled ? `compared ${what} through an index of ${this.index.size} records' keys` : `${CHECK.id} is off in the configuration`,
-      records: this.records,
-      pairs: this.pairs
-    };
-  }
-};
-function notRunSummary(reason, records) {
-  return { status: "not-run", reason, records, pairs: [] };
-}
-function rowFinding(raw2, row, config) {
-  const lines = {
-    id: row.lines.id,
-    structure: row.lines.structure,
-    "stereo.rotation.value": row.lines.rotation ?? row.lines.structure
-  };
-  const positions2 = {
-    get: (path) => lines[path] != null ? { line: lines[path], column: 1 } : void 0
-  };
-  const loaded = {
-    file: row.file,
-    id: row.id,
-    record: null,
-    positions: positions2,
-    problems: [],
-    origin: { kind: "file" }
-  };
-  return { ...toFinding(CHECK, raw2, loaded, config), waived: row.waiver };
-}
-function duplicateId(row, first, config) {
-  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
-  const message = `id: '${row.id}' is also used by ${first}; every record needs its own id`;
-  return {
-    check: SCHEMA_CHECK_ID,
-    messageId: "duplicate-id",
-    severity: configured === "off" || configured === void 0 ? "error" : configured,
-    message,
-    data: { path: "id", problem: message },
-    line: row.lines.id,
-    field: "id",
-    waived: null
-  };
-}
-
-// package.json
-var package_default = {
-  name: "stereogate",
-  version: "0.1.0",
-  description: "Audits compound-registration records for stereochemical consistency: stereo perception, CIP labels, mirror-image and symmetry analysis, stereoisomer counts, structure relations.",
-  type: "module",
-  license: "MIT",
-  engines: {
-    node: ">=20"
-  },
-  bin: {
-    stereogate: "bin/stereogate.js"
-  },
-  scripts: {
-    build: "node scripts/bundle.mjs",
-    typecheck: "tsc -p tsconfig.json --noEmit",
-    demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
-    test: "vitest run",
-    bench: "node --import tsx bench/run.ts",
-    lint: "eslint .",
-    format: "prettier --write .",
-    bundle: "node scripts/bundle.mjs"
-  },
-  dependencies: {
-    "@actions/core": "^3.0.1",
-    "@actions/http-client": "^4.0.1",
-    ajv: "^8.20.0",
-    "cli-progress": "^3.12.0",
-    "csv-parse": "^7.0.3",
-    openchemlib: "^9.25.0",
-    tsx: "^4.23.15",
-    undici: "^6.29.1",
-    yaml: "^2.9.1"
-  },
-  devDependencies: {
-    "@eslint/js": "^9.39.5",
-    "@rdkit/rdkit": "^2026.9.1",
-    "@types/cli-progress": "^3.11.6",
-    "@types/node": "^20.19.43",
-    "@vitest/coverage-v8": "^4.1.12",
-    esbuild: "^0.28.2",
-    eslint: "^9.39.5",
-    "fast-check": "^4.11.0",
-    micromark: "^4.0.3",
-    "micromark-extension-gfm": "^3.0.0",
-    nock: "^14.0.9",
-    "playwright-core": "^1.65.1",
-    prettier: "^3.10.1",
-    typescript: "^5.9.3",
-    "typescript-eslint": "^8.74.0",
-    vitest: "^4.1.12"
-  }
-};
-
-// src/audit/version.ts
-var VERSION = package_default.version;
-
-// src/audit/view.ts
-function entryOf(loaded, cache2, underReview) {
-  const record2 = loaded.record;
-  if (record2 === null) return null;
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    record: record2,
-    get main() {
-      return cache2.main(loaded);
-    },
-    underReview
-  };
-}
-function buildRegistryView(records, cache2, underReview) {
-  const entries = [];
-  for (const loaded of records) {
-    const e = entryOf(loaded, cache2, underReview(loaded));
-    if (e) entries.push(e);
-  }
-  return { entries };
-}
-
-// src/audit/run.ts
-var RECORD_BUDGET = Object.freeze({ timeMs: 2e4, memoryMb: 1024 });
-function auditRecords(records, options) {
-  const config = options.config ?? { ...DEFAULT_CONFIG };
-  const cache2 = new StructureCache(options.engine);
-  const engineApi = { relate: options.engine.relate.bind(options.engine) };
-  const budget = options.budget ?? RECORD_BUDGET;
-  const audited = new Set(records);
-  const registry = options.view ?? buildRegistryView(options.registry ?? records, cache2, (r) => audited.has(r));
-  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
-  const results = records.map((loaded) => {
-    try {
-      return withBudget(
-        budget,
-        "the audit of this record",
-        () => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
-      );
-    } catch (e) {
-      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
-      return {
-        id: loaded.id,
-        file: loaded.file,
-        computed: null,
-        findings: [internalError({ id: "audit" }, e, loaded)],
-        passed: [],
-        declared: { form: null, descriptors: null }
-      };
-    }
-  });
-  const result2 = {
-    tool: { name: "stereogate", version: VERSION },
-    records: results,
-    summary: summarize(results),
-    caution: CAUTION
-  };
-  if (options.registryPhase !== false && !options.registryIncomplete && options.checks.some((c) => c.scope === "registry")) {
-    const review = options.registry !== void 0;
-    const phase = new RegistryPhase({
-      mode: review ? "review" : "full",
-      config,
-      confirm: confirmWith(options.engine),
-      duplicateIds: false
-    });
-    const mainOf = (r) => {
-      try {
-        return withBudget(budget, "the structure of a registry record", () => cache2.main(r));
-      } catch {
-        return { structure: null, facts: null, error: null };
-      }
-    };
-    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
-    if (review) {
-      const audited2 = new Set(records);
-      let seq = records.length;
-      for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
-      for (const row of rows) phase.fileUnderReview(row);
-    }
-    rows.forEach((row, i) => addPhaseResult(results[i], phase.next(row)));
-    result2.summary = summarize(results);
-    result2.registry = phase.summary();
-  }
-  return result2;
-}
-function confirmWith(engine) {
-  const read = (k) => k.text ? readOnly({ field: "structure", format: k.text.format, text: k.text.text }, engine).structure : null;
-  return (a, b) => {
-    const sa = read(a);
-    const sb = read(b);
-    if (!sa || !sb) return null;
-    try {
-      return engine.relate(sa, sb).relation;
-    } catch {
-      return null;
-    }
-  };
-}
-function addPhaseResult(r, p) {
-  if (p.findings.length > 0) {
-    const checks = new Set(p.findings.map((f) => f.check));
-    r.findings = r.findings.filter(
-      (f) => !(f.messageId === "waiver-matches-nothing" && checks.has(String(f.data.waivedCheck)))
-    );
-    r.findings.push(...p.findings);
-  }
-  if (p.passed) r.passed.push(p.passed);
-}
-function auditOne(loaded, checks, config, cache2, registry, engine) {
-  const { main, components } = cache2.all(loaded);
-  const findings = schemaFindings(loaded, config);
-  applyWaivers(findings, loaded);
-  const passed = [];
-  const notRun = [];
-  const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
-  for (const check of unparsed ? [] : checks) {
-    if (configuredSeverity(config, check.id) === "off") continue;
-    const ctx = {
-      loaded,
-      record: loaded.record,
-      main,
-      components,
-      registry,
-      config,
-      engine,
-      findings: [...findings]
-    };
-    const missing = missingInput(check, ctx);
-    if (missing !== null) {
-      notRun.push({ check: check.id, reason: missing });
-      continue;
-    }
-    if (check.scope === "registry") continue;
-    let produced;
-    let outcome;
-    try {
-      outcome = check.run(ctx);
-      if (!outcome || !Array.isArray(outcome.findings))
-        throw new Error("the check returned no findings list");
-      produced = outcome.findings.filter((raw2) => messageEnabled(config, check.id, raw2.messageId)).map((raw2) => toFinding(check, raw2, loaded, config));
-    } catch (e) {
-      if (e instanceof BudgetExceeded) throw e;
-      findings.push(internalError(check, e, loaded));
-      continue;
-    }
-    applyWaivers(produced, loaded);
-    findings.push(...produced);
-    if (outcome.notRun !== void 0 && produced.length === 0) {
-      notRun.push({ check: check.id, reason: outcome.notRun });
-    } else if (produced.length === 0 && !outcome.notApplicable) {
-      passed.push({ check: check.id, evidence: outcome.passed ?? "" });
-    }
-  }
-  const record2 = loaded.record;
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    computed: main.facts,
-    findings,
-    passed,
-    notRun,
-    declared: { form: record2?.stereo.form ?? null, descriptors: record2?.stereo.descriptors ?? null }
-  };
-}
-function missingInput(check, ctx) {
-  const needs = check.requires ?? [];
-  if (needs.includes("structure")) {
-    if (ctx.record === null) return "the record does not follow the record schema (see record-schema)";
-    if (ctx.main.facts === null) {
-      return ctx.main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure";
-    }
-  }
-  if (needs.includes("registry") && ctx.registry.incomplete) return ctx.registry.incomplete;
-  return null;
-}
-function overBudget(loaded, e, checks) {
-  const reason = e.kind === "time" ? "the record was stopped at its time limit (see record-time-limit)" : "the record was stopped at its memory bound (see record-time-limit)";
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    computed: null,
-    findings: [budgetFinding(loaded, e.kind, e.limit)],
-    passed: [],
-    notRun: checks.map((c) => ({ check: c.id, reason })),
-    declared: {
-      form: loaded.record?.stereo.form ?? null,
-      descriptors: loaded.record?.stereo.descriptors ?? null
-    }
-  };
-}
-function summarize(records) {
-  const s = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
-  for (const r of records) {
-    for (const f of r.findings) {
-      if (f.waived) s.waived++;
-      else if (f.severity === "error") s.errors++;
-      else if (f.severity === "warning") s.warnings++;
-      else s.notes++;
-    }
-  }
-  return s;
-}
-async function runAudit(options) {
-  const rootAbs = resolve3(options.root);
-  if (!existsSync2(rootAbs) || !statSync2(rootAbs).isDirectory()) {
-    throw new ConfigError(`registry folder ${options.root} does not exist`);
-  }
-  const root = realpathSync3(rootAbs);
-  const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
-  const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
-  const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
-  const messageIds = new Map(checks.map((c) => [c.id, Object.keys(c.messages)]));
-  checkSeverityIds(
-    config,
-    ids,
-    (w) => closestWord(w, ids),
-    (id) => messageIds.get(id)
-  );
-  const engine = options.engine ?? await defaultEngine({ axisOrthoMin: config.axisOrthoMin });
-  const load = loadRegistry(root, { recordDirs: config.recordDirs });
-  if (load.missingDirs.length > 0) {
-    throw new ConfigError(
-      `record folder${load.missingDirs.length > 1 ? "s" : ""} ${load.missingDirs.map((d) => `'${d}'`).join(", ")} not found in ${options.root} (set recordDirs in stereogate.config.yml)`
-    );
-  }
-  let toAudit = load.records;
-  let unmatched = [];
-  if (options.paths && options.paths.length > 0) {
-    const sel = selectRecords(load.records, root, options.paths);
-    toAudit = load.records.filter((r) => sel.selected.has(r));
-    unmatched = sel.unmatched;
-  }
-  const registry = toAudit.length === load.records.length ? void 0 : load.records;
-  const result2 = auditRecords(toAudit, { checks, config, engine, registry, budget: options.budget });
-  if (unmatched.length > 0) result2.unmatched = unmatched;
-  return result2;
-}
-function stripUndefined(o) {
-  if (!o) return void 0;
-  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== void 0));
-}
 
 // src/report/json.ts
 function finding2(f) {
@@ -53660,10 +55066,14 @@ function finding2(f) {
     messageId: f.messageId,
     field: f.field,
     data: f.data,
-    waived: f.waived ? { reason: f.waived.reason, approvedBy: f.waived.approvedBy } : null
+    waived: f.waived ? {
+      reason: f.waived.reason,
+      approvedBy: f.waived.approvedBy,
+      ...f.waived.covers === void 0 ? {} : { covers: f.waived.covers }
+    } : null
   };
 }
-function record(r) {
+function jsonRecord(r) {
   return {
     id: r.id,
     file: r.file,
@@ -53677,7 +55087,7 @@ function record(r) {
 function jsonReport(result2) {
   const s = result2.summary;
   const out = {
-    records: result2.records.map(record),
+    records: result2.records.map(jsonRecord),
     summary: { records: s.records, errors: s.errors, warnings: s.warnings, notes: s.notes, waived: s.waived },
     tool: { name: result2.tool.name, version: result2.tool.version },
     caution: result2.caution
@@ -53692,6 +55102,7 @@ function renderJson(result2) {
 }
 
 // src/report/checklist.ts
+init_words();
 var ORDER2 = { error: 0, warning: 1, note: 2 };
 function worstOpen(r) {
   let w = 3;
@@ -53706,7 +55117,13 @@ function checklistItems(r) {
   const items = open.map((finding3) => ({ kind: "open", finding: finding3 }));
   for (const f of r.findings) {
     if (f.waived)
-      items.push({ kind: "accepted", finding: f, reason: f.waived.reason, approvedBy: f.waived.approvedBy });
+      items.push({
+        kind: "accepted",
+        finding: f,
+        reason: f.waived.reason,
+        approvedBy: f.waived.approvedBy,
+        covers: f.waived.covers ?? null
+      });
   }
   for (const p of r.passed) items.push({ kind: "passed", check: p.check, evidence: p.evidence });
   for (const n of r.notRun ?? []) items.push({ kind: "not-run", check: n.check, reason: n.reason });
@@ -53721,9 +55138,6 @@ function openCounts(r) {
     else c.notes++;
   }
   return c;
-}
-function plural(n, one, many = `${one}s`) {
-  return `${n} ${n === 1 ? one : many}`;
 }
 function declaredText(r) {
   const parts = [r.declared.form, r.declared.descriptors].filter(
@@ -53918,12 +55332,11 @@ function summaryText(result2) {
 function heading(r) {
   return `### ${escapeMarkdown(r.id ?? "(no id)")} · ${escapeMarkdown(r.file)}`;
 }
-function lineRef(line) {
-  return line === null ? "" : ` (line ${line})`;
+function lineRef(line2) {
+  return line2 === null ? "" : ` (line ${line2})`;
 }
-function evidenceLines(r) {
+function evidenceLines(r, computed) {
   const declared = declaredText(r);
-  const computed = computedText(r.computed);
   if (!declared && !computed) return [];
   return [
     `Declared: ${declared ? escapeMarkdown(declared) : "*nothing readable*"}  `,
@@ -53940,7 +55353,7 @@ function itemLine(item) {
   if (item.kind === "accepted") {
     const f = item.finding;
     return `- ☑️ \`${f.check}\` accepted by waiver${lineRef(f.line)}: ${escapeMarkdown(f.message)}  
-  Reason: ${escapeMarkdown(item.reason)} · approved by ${escapeMarkdown(item.approvedBy)}`;
+  Reason: ${escapeMarkdown(item.reason)} · approved by ${escapeMarkdown(item.approvedBy)}` + (item.covers ? ` · the waiver covers ${escapeMarkdown(item.covers)}` : "");
   }
   if (item.kind === "not-run") return `- not run: \`${item.check}\`: ${escapeMarkdown(item.reason)}`;
   return `- \`${item.check}\`${item.evidence ? `: ${escapeMarkdown(item.evidence)}` : ""}`;
@@ -53956,35 +55369,42 @@ function passedSummary(r, accepted) {
   if (r.notRun?.length) parts.push(`${r.notRun.length} not run`);
   return parts.join(" · ");
 }
-function recordBlock(r) {
+function recordBlock(r, computed) {
   const items = checklistItems(r);
-  const out = [heading(r), "", ...evidenceLines(r)];
+  const out = [heading(r), "", ...evidenceLines(r, computed)];
   out.push(...items.filter((i) => i.kind !== "passed").map(itemLine));
   const passed = items.filter((i) => i.kind === "passed");
   if (passed.length > 0) out.push("", ...passedBlock(`✅ ${plural(passed.length, "check")} passed`, passed));
   return out.join("\n");
 }
-function cleanLine(r) {
+function cleanLine(r, computed) {
   const items = checklistItems(r);
   const accepted = items.filter((i) => i.kind === "accepted").length;
   const summary = `<b>${escapeHtmlText(r.id ?? "(no id)")}</b> · ${escapeHtmlText(r.file)} — ${passedSummary(r, accepted)}`;
   return [
     `<details><summary>${summary}</summary>`,
     "",
-    ...evidenceLines(r),
+    ...evidenceLines(r, computed),
     ...items.map(itemLine),
     "",
     "</details>"
   ].join("\n");
 }
+function markdownRecord(r, computed = computedText(r.computed)) {
+  const group = worstOpen(r);
+  return { group, text: group < 3 ? recordBlock(r, computed) : cleanLine(r, computed) };
+}
+function cleanHeading(count4) {
+  return `### ${plural(count4, "record")} without open findings`;
+}
 function recordsPart(result2) {
-  const flagged = byNeedForAction(result2.records.filter((r) => hasOpen(r)));
-  const clean = result2.records.filter((r) => !hasOpen(r));
-  const out = flagged.flatMap((r) => [recordBlock(r), ""]);
-  if (clean.length > 0) {
-    out.push(`### ${plural(clean.length, "record")} without open findings`, "");
-    out.push(...clean.flatMap((r) => [cleanLine(r), ""]));
+  const groups = [[], [], [], []];
+  for (const r of result2.records) {
+    const { group, text } = markdownRecord(r);
+    groups[group].push(text, "");
   }
+  const out = groups.slice(0, 3).flat();
+  if (groups[3].length > 0) out.push(cleanHeading(groups[3].length / 2), "", ...groups[3]);
   return out;
 }
 function hasOpen(r) {
@@ -53994,7 +55414,7 @@ function cautionBlock(result2) {
   return `> [!CAUTION]
 > ${escapeMarkdown(result2.caution)}`;
 }
-function head(result2) {
+function markdownHead(result2) {
   const out = [CHECKLIST_MARKER, "## stereogate checklist", "", summaryText(result2), ""];
   if (result2.unmatched?.length) {
     out.push(`No record matched: ${result2.unmatched.map(escapeMarkdown).join(", ")}`, "");
@@ -54003,16 +55423,16 @@ function head(result2) {
 }
 function renderMarkdown(result2, options = {}) {
   const maxChars = options.maxChars ?? DEFAULT_MAX_CHARS;
-  const full = [...head(result2), ...recordsPart(result2), cautionBlock(result2), ""].join("\n");
+  const full = [...markdownHead(result2), ...recordsPart(result2), cautionBlock(result2), ""].join("\n");
   if (full.length <= maxChars) return full;
   return summarised(result2, maxChars, options.detailsUrl);
 }
 function summarised(result2, maxChars, detailsUrl) {
   const url = detailsUrl ? safeUrl(detailsUrl) : null;
   const pointer = url ? `The full checklist is too long for a comment: read it in the [job summary](${url}).` : "The full checklist is too long for a comment: read it in the job summary of this run.";
-  const top = [...head(result2), pointer, ""].join("\n");
+  const top = [...markdownHead(result2), pointer, ""].join("\n");
   const bottom = ["", cautionBlock(result2), ""].join("\n");
-  const lines = [];
+  const lines2 = [];
   const flagged = byNeedForAction(result2.records.filter((r) => hasOpen(r)));
   let used = top.length + bottom.length;
   let shown = 0;
@@ -54025,23 +55445,24 @@ function summarised(result2, maxChars, detailsUrl) {
     ].filter(Boolean).join(", ");
     const checks = [...new Set(r.findings.filter((f) => !f.waived).map((f) => `\`${f.check}\``))].join(", ");
     const task = c.errors + c.warnings > 0 ? "- [ ] " : "- ";
-    const line = `${task}**${escapeMarkdown(r.id ?? "(no id)")}** · ${escapeMarkdown(r.file)}: ${counts} (${checks})`;
+    const line2 = `${task}**${escapeMarkdown(r.id ?? "(no id)")}** · ${escapeMarkdown(r.file)}: ${counts} (${checks})`;
     const reserve2 = 80;
-    if (used + line.length + 1 + reserve2 > maxChars) break;
-    lines.push(line);
-    used += line.length + 1;
+    if (used + line2.length + 1 + reserve2 > maxChars) break;
+    lines2.push(line2);
+    used += line2.length + 1;
     shown++;
   }
   if (shown < flagged.length)
-    lines.push(`- … and ${plural(flagged.length - shown, "more record")} with findings`);
+    lines2.push(`- … and ${plural(flagged.length - shown, "more record")} with findings`);
   const clean = result2.records.length - flagged.length;
-  if (clean > 0) lines.push(`- ✅ ${plural(clean, "record")} without open findings`);
-  const text = `${top}${lines.join("\n")}
+  if (clean > 0) lines2.push(`- ✅ ${plural(clean, "record")} without open findings`);
+  const text = `${top}${lines2.join("\n")}
 ${bottom}`;
   return text.length <= maxChars ? text : `${top}${bottom}`.slice(0, maxChars);
 }
 
 // src/audit/builtin-rules.ts
+init_findings();
 var BUILTIN_RULES = [
   {
     id: SCHEMA_CHECK_ID,
@@ -54062,6 +55483,35 @@ var BUILTIN_RULES = [
     explanation: "Each record gets a time limit (20 s unless --record-timeout says otherwise) and a memory bound, so that one pathological structure cannot stall or exhaust a run. A record over either is reported instead of audited, and the run goes on. Audit it on its own with a higher limit, or simplify the structure."
   }
 ];
+
+// src/report/not-run.ts
+var NOT_RUN_EXAMPLES = 10;
+var NotRunTally = class {
+  groups = /* @__PURE__ */ new Map();
+  add(record, notRun) {
+    for (const n of notRun ?? []) {
+      const key3 = `${n.check}\0${n.reason}`;
+      let g = this.groups.get(key3);
+      if (!g) this.groups.set(key3, g = { check: n.check, reason: n.reason, records: 0, examples: [] });
+      g.records++;
+      if (g.examples.length < NOT_RUN_EXAMPLES) g.examples.push(record);
+    }
+  }
+  /** The groups in the order first seen. */
+  list() {
+    return [...this.groups.values()];
+  }
+};
+function notRunGroups(records) {
+  const tally = new NotRunTally();
+  for (const r of records) tally.add({ id: r.id, file: r.file, line: null }, r.notRun);
+  return tally.list();
+}
+function notRunRecordsText(g) {
+  const names2 = g.examples.map((e) => e.id ?? e.file);
+  const more = g.records > names2.length ? `, and ${g.records - names2.length} more` : "";
+  return `${plural(g.records, "record")} (${names2.join(", ")}${more})`;
+}
 
 // src/report/sarif.ts
 var SARIF_SCHEMA = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json";
@@ -54090,6 +55540,33 @@ function renderSarif(result2, checks, options = {}) {
   return `${JSON.stringify(sarifLog(result2, checks, options), null, 2)}
 `;
 }
+function sarifResults(r, index, options = {}) {
+  const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
+  return r.findings.map((f) => {
+    const physical = {
+      artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
+    };
+    if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
+    const res = {
+      ruleId: f.check,
+      ruleIndex: index.get(f.check),
+      level: level(f.severity),
+      message: { text: f.message },
+      locations: [{ physicalLocation: physical }],
+      properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data }
+    };
+    if (f.waived) {
+      res.suppressions = [
+        {
+          kind: "inSource",
+          status: "accepted",
+          justification: `${f.waived.reason} (approved by ${f.waived.approvedBy}${f.waived.covers ? `; the waiver covers ${f.waived.covers}` : ""})`
+        }
+      ];
+    }
+    return res;
+  });
+}
 function sarifLog(result2, checks, options = {}) {
   const infos = [
     ...checks.map((c) => ({ info: c })),
@@ -54107,32 +55584,8 @@ function sarifLog(result2, checks, options = {}) {
   const rules = infos.map((x) => rule(x.info, result2.caution));
   const index = new Map(infos.map((x, i) => [x.info.id, i]));
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
-  const results = result2.records.flatMap(
-    (r) => r.findings.map((f) => {
-      const physical = {
-        artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
-      };
-      if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
-      const res = {
-        ruleId: f.check,
-        ruleIndex: index.get(f.check),
-        level: level(f.severity),
-        message: { text: f.message },
-        locations: [{ physicalLocation: physical }],
-        properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data }
-      };
-      if (f.waived) {
-        res.suppressions = [
-          {
-            kind: "inSource",
-            status: "accepted",
-            justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})`
-          }
-        ];
-      }
-      return res;
-    })
-  );
+  const results = result2.records.flatMap((r) => sarifResults(r, index, options));
+  const invocations = sarifInvocations(notRunGroups(result2.records), index, prefix);
   return {
     $schema: SARIF_SCHEMA,
     version: "2.1.0",
@@ -54146,11 +55599,39 @@ function sarifLog(result2, checks, options = {}) {
             rules
           }
         },
+        ...invocations ? { invocations } : {},
         results,
         properties: { caution: result2.caution, summary: result2.summary }
       }
     ]
   };
+}
+function sarifInvocations(groups, ruleIndex, prefix = "") {
+  if (groups.length === 0) return null;
+  const notifications = groups.map((g) => {
+    const rule4 = { id: g.check };
+    const i = ruleIndex.get(g.check);
+    if (i !== void 0) rule4.index = i;
+    return {
+      level: "note",
+      message: { text: `${g.check} did not run on ${notRunRecordsText(g)}: ${g.reason}.` },
+      associatedRule: rule4,
+      locations: g.examples.map((e) => {
+        const physical = {
+          artifactLocation: { uri: encodeUri(`${prefix}${e.file}`) }
+        };
+        if (e.line !== null && e.line >= 1) physical.region = { startLine: e.line };
+        return { physicalLocation: physical };
+      }),
+      properties: {
+        notRun: true,
+        reason: g.reason,
+        records: g.records,
+        recordIds: g.examples.map((e) => e.id)
+      }
+    };
+  });
+  return [{ executionSuccessful: true, toolExecutionNotifications: notifications }];
 }
 
 // src/report/registry-summary.ts
@@ -54161,19 +55642,19 @@ function registryLines(r, safe = (s) => s) {
   const name = (x) => safe(x.id ?? x.file);
   const enantiomers = r.pairs.filter((p) => p.relation === "enantiomers");
   const identical = r.pairs.filter((p) => p.relation === "identical");
-  const lines = [
+  const lines2 = [
     `Registry-wide checks over ${count3(r.records, "record")}: ${count3(enantiomers.length, "enantiomer pair")}, ${count3(identical.length, "pair")} of identical structures.`
   ];
   const list = (title, pairs) => {
     if (pairs.length === 0) return;
-    lines.push(`  ${title}:`);
-    for (const p of pairs.slice(0, PAIRS_SHOWN)) lines.push(`    ${name(p.first)} — ${name(p.second)}`);
+    lines2.push(`  ${title}:`);
+    for (const p of pairs.slice(0, PAIRS_SHOWN)) lines2.push(`    ${name(p.first)} — ${name(p.second)}`);
     if (pairs.length > PAIRS_SHOWN)
-      lines.push(`    … and ${pairs.length - PAIRS_SHOWN} more (see the JSON output)`);
+      lines2.push(`    … and ${pairs.length - PAIRS_SHOWN} more (see the JSON output)`);
   };
   list("identical structures (findings on the later record)", identical);
   list("enantiomer pairs (both registered; fine when meant)", enantiomers);
-  return lines;
+  return lines2;
 }
 function count3(n, word) {
   return `${n} ${word}${n === 1 ? "" : "s"}`;
@@ -54197,37 +55678,43 @@ function findingLine(f, paint) {
   const at2 = f.line !== null ? paint("dim", ` line ${f.line}`) : "";
   return `  ${paint(colour, `${mark} ${f.severity.padEnd(7)}`)} ${f.check}${at2}: ${safeText(f.message)}`;
 }
-function block(r, paint, verbose) {
-  const lines = [];
-  lines.push(`${paint("bold", safeText(r.id ?? "(no id)"))}  ${paint("dim", safeText(r.file))}`);
+function block(r, paint, verbose, computed) {
+  const lines2 = [];
+  lines2.push(`${paint("bold", safeText(r.id ?? "(no id)"))}  ${paint("dim", safeText(r.file))}`);
   const declared = declaredText(r);
-  const computed = computedText(r.computed);
-  if (declared) lines.push(`  ${paint("dim", "declared")}  ${safeText(declared)}`);
-  if (computed) lines.push(`  ${paint("dim", "computed")}  ${safeText(computed)}`);
+  if (declared) lines2.push(`  ${paint("dim", "declared")}  ${safeText(declared)}`);
+  if (computed) lines2.push(`  ${paint("dim", "computed")}  ${safeText(computed)}`);
   const items = checklistItems(r);
   for (const item of items) {
-    if (item.kind === "open") lines.push(findingLine(item.finding, paint));
+    if (item.kind === "open") lines2.push(findingLine(item.finding, paint));
     else if (item.kind === "accepted") {
       const f = item.finding;
       const at2 = f.line !== null ? paint("dim", ` line ${f.line}`) : "";
-      lines.push(
-        `  ${paint("magenta", "~ accepted")} ${f.check}${at2}: ${safeText(f.message)} ` + paint("dim", `(waived: ${safeText(item.reason)}; approved by ${safeText(item.approvedBy)})`)
+      lines2.push(
+        `  ${paint("magenta", "~ accepted")} ${f.check}${at2}: ${safeText(f.message)} ` + paint(
+          "dim",
+          `(waived: ${safeText(item.reason)}; approved by ${safeText(item.approvedBy)}${item.covers ? `; the waiver covers ${safeText(item.covers)}` : ""})`
+        )
       );
     } else if (item.kind === "not-run") {
-      lines.push(`  ${paint("dim", "– not run")} ${item.check}: ${safeText(item.reason)}`);
+      lines2.push(`  ${paint("dim", "– not run")} ${item.check}: ${safeText(item.reason)}`);
     } else if (verbose) {
       const ev = item.evidence ? `: ${paint("dim", safeText(item.evidence))}` : "";
-      lines.push(`  ${paint("green", "✓")} ${item.check}${ev}`);
+      lines2.push(`  ${paint("green", "✓")} ${item.check}${ev}`);
     }
+  }
+  if (verbose) {
+    for (const n of r.notApplicable ?? [])
+      lines2.push(`  ${paint("dim", "– not applicable")} ${n.check}: ${safeText(n.reason)}`);
   }
   if (!verbose && r.passed.length > 0) {
     const names2 = r.passed.map((p) => p.check).join(", ");
-    lines.push(
+    lines2.push(
       `  ${paint("green", "✓")} ${plural(r.passed.length, "check")} passed ${paint("dim", `(${names2})`)}`
     );
   }
-  if (r.passed.length === 0 && r.findings.length === 0) lines.push(`  ${paint("dim", "no check applied")}`);
-  return lines;
+  if (r.passed.length === 0 && r.findings.length === 0) lines2.push(`  ${paint("dim", "no check applied")}`);
+  return lines2;
 }
 function cleanLine2(r, paint) {
   const waived = r.findings.filter((f) => f.waived).length;
@@ -54242,15 +55729,20 @@ function summaryLine(result2) {
   if (s.waived > 0) parts.push(`${s.waived} accepted by waiver${s.waived === 1 ? "" : "s"}`);
   return `${plural(s.records, "record")} audited: ${parts.join(", ")}`;
 }
-function renderText(result2, options = {}) {
-  const paint = options.color ? (style, s2) => `\x1B[${CODES[style]}m${s2}\x1B[0m` : (_style, s2) => s2;
+function painter(options) {
+  return options.color ? (style, s) => `\x1B[${CODES[style]}m${s}\x1B[0m` : (_style, s) => s;
+}
+function textRecord(r, options = {}, computed = computedText(r.computed)) {
+  const paint = painter(options);
+  const group = worstOpen(r);
+  if (group < 3 || options.verbose === true)
+    return { group, lines: [...block(r, paint, options.verbose === true, computed), ""] };
+  return { group, lines: [cleanLine2(r, paint)] };
+}
+function textClosing(result2, options, cleanLines) {
+  const paint = painter(options);
   const out = [];
-  const verbose = options.verbose === true;
-  const open = byNeedForAction(result2.records.filter((r) => worstOpen(r) < 3));
-  for (const r of open) out.push(...block(r, paint, verbose), "");
-  const clean = result2.records.filter((r) => worstOpen(r) === 3);
-  if (verbose) for (const r of clean) out.push(...block(r, paint, true), "");
-  else if (clean.length > 0) out.push(...clean.map((r) => cleanLine2(r, paint)), "");
+  if (cleanLines && options.verbose !== true) out.push("");
   if (result2.unmatched?.length) {
     out.push(paint("yellow", `No record matched: ${result2.unmatched.map(safeText).join(", ")}`), "");
   }
@@ -54260,15 +55752,29 @@ function renderText(result2, options = {}) {
   const colour = s.errors > 0 ? "red" : s.warnings > 0 ? "yellow" : "green";
   out.push(paint(colour, summaryLine(result2)));
   out.push(paint("dim", result2.caution));
+  return out;
+}
+function renderText(result2, options = {}) {
+  const groups = [[], [], [], []];
+  for (const r of result2.records) {
+    const { group, lines: lines2 } = textRecord(r, options);
+    groups[group].push(...lines2);
+  }
+  const out = [...groups.flat(), ...textClosing(result2, options, groups[3].length > 0)];
   return `${out.join("\n")}
 `;
 }
 
 // src/bulk/run.ts
 import { createReadStream as createReadStream3 } from "node:fs";
-import { availableParallelism } from "node:os";
+import { availableParallelism as availableParallelism2 } from "node:os";
+
+// src/bulk/audit-item.ts
+init_run();
+init_index_row();
 
 // src/bulk/sources.ts
+init_sd_split();
 import { createReadStream as createReadStream2 } from "node:fs";
 import { createInterface } from "node:readline";
 
@@ -54321,10 +55827,10 @@ async function* readDelimitedRows(path, delimiter, limits = DEFAULT_LIMITS) {
   let chars = 0;
   let sofar = [];
   const replay = [];
-  const lines = textLines(path);
+  const lines2 = textLines(path);
   const next = async () => {
     if (replay.length > 0) return replay.shift();
-    const r = await lines.next();
+    const r = await lines2.next();
     if (r.done) return null;
     lineNo++;
     return { text: lineNo === 1 ? r.value.replace(/^\uFEFF/, "") : r.value, line: lineNo };
@@ -54417,8 +55923,8 @@ function ownRow(text, delimiter, columns) {
   return !first.includes('"') || first.startsWith('"');
 }
 var MAX_LINE_CHARS = 32 * 2 ** 20;
-function dropCr(line) {
-  return line.endsWith("\r") ? line.slice(0, -1) : line;
+function dropCr(line2) {
+  return line2.endsWith("\r") ? line2.slice(0, -1) : line2;
 }
 
 // src/bulk/sources.ts
@@ -54431,80 +55937,70 @@ function formatOf(path) {
 }
 var REPLACEMENT = "�";
 var SD_RECORD_LIMITS = { maxLines: 2e5, maxChars: 64 * 2 ** 20 };
-var COUNTS_LINE = /^[ \d]{3}[ \d]{3}.*V[23]000\s*$/;
 async function* readSdItems(path, limits = SD_RECORD_LIMITS) {
   const rl = createInterface({ input: createReadStream2(path, { encoding: "utf8" }), crlfDelay: Infinity });
-  let lines = [];
+  let lines2 = [];
   let chars = 0;
   let dropped = 0;
   let startLine = 1;
   let lineNo = 0;
-  let record2 = 0;
-  let afterEnd = false;
-  let inValue = false;
-  let secondEnd = 0;
+  let record = 0;
+  const bounds = new SdBoundaries();
   const item = (last, cutAt = 0) => {
-    record2++;
-    const text = dropped > 0 ? "" : lines.join("\n") + "\n";
-    const problem = dropped > 0 ? `the record is longer than ${limits.maxLines.toLocaleString("en-US")} lines or ${limits.maxChars / 2 ** 20} MiB (${dropped.toLocaleString("en-US")} lines${last ? " to the end of the file" : ""}); not read (a missing $$$$ line?)` : text.includes(REPLACEMENT) ? "the record is not valid UTF-8 text (bad bytes replaced)" : cutAt > 0 ? `the record has no $$$$ line: the next record starts at line ${cutAt} (its counts line follows this record's data); the two were read as separate records` : secondEnd > 0 ? `a second "M  END" at line ${secondEnd} inside the record's data block: two records merged (a lost $$$$ line and header?); only the first structure was read` : last ? "the last record has no $$$$ terminator (file truncated?)" : void 0;
-    return { source: path, record: record2, line: startLine, text, splitProblem: problem };
+    record++;
+    const text = dropped > 0 ? "" : lines2.join("\n") + "\n";
+    const problem = dropped > 0 ? `the record is longer than ${limits.maxLines.toLocaleString("en-US")} lines or ${limits.maxChars / 2 ** 20} MiB (${dropped.toLocaleString("en-US")} lines${last ? " to the end of the file" : ""}); not read (a missing $$$$ line?)` : text.includes(REPLACEMENT) ? "the record is not valid UTF-8 text (bad bytes replaced)" : cutAt > 0 ? lostSeparatorMessage(cutAt) : bounds.secondEnd > 0 ? mergedRecordsMessage(bounds.secondEnd) : last ? "the last record has no $$$$ terminator (file truncated?)" : void 0;
+    return { source: path, record, line: startLine, text, splitProblem: problem };
   };
   const reset = () => {
-    lines = [];
+    lines2 = [];
     chars = 0;
     dropped = 0;
-    afterEnd = false;
-    inValue = false;
-    secondEnd = 0;
+    bounds.start();
   };
   for await (const raw2 of rl) {
     lineNo++;
-    if (lines.length === 0 && dropped === 0) startLine = lineNo;
+    if (lines2.length === 0 && dropped === 0) startLine = lineNo;
     if (raw2.startsWith("$$$$")) {
       yield item(false);
       reset();
       continue;
     }
-    if (dropped > 0 || lines.length >= limits.maxLines || chars + raw2.length > limits.maxChars) {
+    if (dropped > 0 || lines2.length >= limits.maxLines || chars + raw2.length > limits.maxChars) {
       if (dropped === 0) {
-        dropped = lines.length;
-        lines = [];
+        dropped = lines2.length;
+        lines2 = [];
       }
       dropped++;
       continue;
     }
-    if (afterEnd && !inValue && dropped === 0) {
-      if (COUNTS_LINE.test(raw2) && lines.length >= 3) {
-        const header = lines.splice(lines.length - 3, 3);
-        const cutAt = lineNo - 3;
-        yield item(false, cutAt);
-        reset();
-        startLine = cutAt;
-        for (const h of header) {
-          lines.push(h);
-          chars += h.length + 1;
-        }
-      } else if (raw2.startsWith("M  END") && secondEnd === 0) secondEnd = lineNo;
+    if (bounds.next(raw2, lineNo) === "next-record") {
+      const header = lines2.splice(lines2.length - SD_HEADER_LINES, SD_HEADER_LINES);
+      const cutAt = lineNo - SD_HEADER_LINES;
+      yield item(false, cutAt);
+      reset();
+      bounds.start(SD_HEADER_LINES);
+      startLine = cutAt;
+      for (const h of header) {
+        lines2.push(h);
+        chars += h.length + 1;
+      }
+      bounds.next(raw2, lineNo);
     }
-    if (!afterEnd && raw2.startsWith("M  END")) afterEnd = true;
-    else if (afterEnd) {
-      if (raw2.startsWith(">")) inValue = true;
-      else if (raw2.trim() === "") inValue = false;
-    }
-    lines.push(raw2);
+    lines2.push(raw2);
     chars += raw2.length + 1;
   }
-  if (dropped > 0 || lines.some((l) => l.trim() !== "")) yield item(true);
+  if (dropped > 0 || lines2.some((l) => l.trim() !== "")) yield item(true);
 }
 async function* readDelimitedItems(path, delimiter, limits) {
   let header = null;
-  let record2 = 0;
+  let record = 0;
   for await (const row of readDelimitedRows(path, delimiter, limits)) {
     if (header === null) {
       header = row.fields.map((h) => h.trim());
       continue;
     }
-    record2++;
+    record++;
     const fields = {};
     const n = Math.min(header.length, row.fields.length);
     for (let i = 0; i < n; i++) fields[header[i]] = row.fields[i];
@@ -54515,7 +56011,7 @@ async function* readDelimitedItems(path, delimiter, limits) {
       splitProblem = "the row is not valid UTF-8 text (bad bytes replaced)";
     else if (row.fields.length !== header.length && !(row.fields.length === 1 && row.fields[0].trim() === ""))
       splitProblem = `the row has ${row.fields.length} columns, the header ${header.length}`;
-    yield { source: path, record: record2, line: row.line, fields, splitProblem };
+    yield { source: path, record, line: row.line, fields, splitProblem };
   }
 }
 function readItems(path) {
@@ -54541,30 +56037,8 @@ async function* shardFilter(items, shard) {
   }
 }
 
-// src/registry/types.ts
-var STEREO_FORMS = [
-  "achiral",
-  "meso",
-  "single-enantiomer",
-  "enantioenriched",
-  "racemate",
-  "single-diastereomer",
-  "diastereomer-mixture",
-  "unknown"
-];
-var ORIGIN_CONTROLS = [
-  "none",
-  "chiral-catalyst",
-  "chiral-reagent",
-  "chiral-auxiliary",
-  "biocatalyst",
-  "resolution",
-  "chiral-separation",
-  "enrichment",
-  "unknown"
-];
-
 // src/bulk/mapping.ts
+init_types2();
 var DEFAULT_COLUMNS = {
   id: "id",
   structure: "smiles",
@@ -54659,6 +56133,7 @@ var VocabularyTally = class {
 };
 
 // src/bulk/origins.ts
+init_types2();
 var MAX_ORIGIN_INPUTS = 2e5;
 var MAX_ORIGIN_ENTRIES = 20;
 var MAX_CHAIN = 1e3;
@@ -54787,21 +56262,21 @@ function toRecord(fields, fallbackId, mapping, vocabulary, molfileText) {
       message: `stereo form '${formWordRaw}' (field '${col.form}') is not a word stereogate knows; add it to the mapping vocabulary`,
       path: "stereo.form"
     });
-  const record2 = { id, structure: {}, stereo: { form } };
-  if (structureText !== null && molfileText === null) record2.structure.smiles = structureText;
-  if (molfileText !== null) record2.structure.molfile = "(embedded molfile)";
+  const record = { id, structure: {}, stereo: { form } };
+  if (structureText !== null && molfileText === null) record.structure.smiles = structureText;
+  if (molfileText !== null) record.structure.molfile = "(embedded molfile)";
   const name = field(fields, col.name)?.trim();
-  if (name) record2.name = name;
+  if (name) record.name = name;
   const descriptors2 = field(fields, col.descriptors)?.trim();
-  if (descriptors2) record2.stereo.descriptors = descriptors2;
+  if (descriptors2) record.stereo.descriptors = descriptors2;
   const ratio = field(fields, col.ratio)?.trim();
-  if (ratio) record2.stereo.ratio = ratio;
+  if (ratio) record.stereo.ratio = ratio;
   const ee = field(fields, col.ee)?.trim();
   if (ee) {
     const v = parseNumber(ee);
     if (v === null || v < 0 || v > 100)
       problems.push({ message: `ee '${ee}' is not a percentage between 0 and 100`, path: "stereo.ee" });
-    else record2.stereo.ee = v;
+    else record.stereo.ee = v;
   }
   const rot2 = field(fields, col.rotation)?.trim();
   if (rot2) {
@@ -54811,14 +56286,14 @@ function toRecord(fields, fallbackId, mapping, vocabulary, molfileText) {
         message: `rotation '${rot2}' has no number stereogate can read`,
         path: "stereo.rotation"
       });
-    else record2.stereo.rotation = { value: v };
+    else record.stereo.rotation = { value: v };
   }
   if (mapping.origin) {
     const o = originFromFields(fields, mapping);
-    if (o.origin) record2.origin = o.origin;
+    if (o.origin) record.origin = o.origin;
     problems.push(...o.problems);
   }
-  return { record: record2, structureText, formWord: formWordRaw?.trim() || null, formHow: understood.how, problems };
+  return { record, structureText, formWord: formWordRaw?.trim() || null, formHow: understood.how, problems };
 }
 
 // src/bulk/audit-item.ts
@@ -54835,16 +56310,16 @@ function bulkFacts(f) {
   };
 }
 function splitSdRecord(text) {
-  const lines = text.split("\n");
-  let end = lines.findIndex((l) => l.startsWith("M  END"));
+  const lines2 = text.split("\n");
+  let end = lines2.findIndex((l) => l.startsWith("M  END"));
   let problem = null;
   if (end < 0) {
-    end = lines.findIndex((l) => l.startsWith(">"));
+    end = lines2.findIndex((l) => l.startsWith(">"));
     problem = "the molfile block has no M  END line";
-    if (end < 0) end = lines.length;
+    if (end < 0) end = lines2.length;
     else end -= 1;
   }
-  const molfile = lines.slice(0, end + 1).join("\n") + "\n";
+  const molfile = lines2.slice(0, end + 1).join("\n") + "\n";
   const fields = {};
   let name = null;
   let value = [];
@@ -54853,7 +56328,7 @@ function splitSdRecord(text) {
     name = null;
     value = [];
   };
-  for (const l of lines.slice(end + 1)) {
+  for (const l of lines2.slice(end + 1)) {
     if (l.startsWith(">")) {
       flush();
       const m = /<([^>]*)>/.exec(l);
@@ -54931,6 +56406,7 @@ function auditItem(item, ctx) {
     budget: ctx.budget,
     registryPhase: false
   }).records[0];
+  delete result2.notApplicable;
   if (ctx.registryNotRun !== void 0 && result2.notRun) {
     const wide = new Set(ctx.checks.filter((c) => c.scope === "registry").map((c) => c.id));
     result2.notRun = result2.notRun.flatMap(
@@ -54950,6 +56426,9 @@ function auditItem(item, ctx) {
     out.structure_text = conv.structureText;
   return out;
 }
+
+// src/bulk/context.ts
+init_engine();
 
 // src/report/html/draw-script.ts
 var DRAW_SCRIPT = `
@@ -55151,7 +56630,7 @@ var PAGE_SCRIPT = `
       pic.appendChild(holder);
       pic.appendChild(el('figcaption', '', r.pic.o === 'd' ? 'as drawn in the record (its coordinates and wedges)' : 'layout computed from the structure'));
       if (observer) observer.observe(holder); else paint(holder);
-    } else pic.appendChild(el('div', 'nodepict', 'no depiction'));
+    } else pic.appendChild(el('div', 'nodepict', r.noPicture ? 'no depiction: ' + r.noPicture : 'no depiction'));
     box.appendChild(pic);
     var body = el('div', 'body');
     body.appendChild(el('h3', '', r.id));
@@ -55170,6 +56649,13 @@ var PAGE_SCRIPT = `
       li.appendChild(el('code', '', f.check));
       if (f.line) li.appendChild(el('span', 'line', ' line ' + f.line));
       li.appendChild(document.createTextNode(': ' + f.message + (f.waived ? ' [' + f.waived + ']' : '')));
+      ul.appendChild(li);
+    });
+    (r.notRun || []).forEach(function (n) {
+      var li = el('li', 'notrun');
+      li.appendChild(el('span', 'sev sev-notrun', 'not run'));
+      li.appendChild(el('code', '', n.check));
+      li.appendChild(document.createTextNode(': ' + n.reason));
       ul.appendChild(li);
     });
     body.appendChild(ul);
@@ -55271,6 +56757,7 @@ b.cip { color: var(--accent); }
 ul.findings { margin: .25rem 0 0; padding-left: 1.1rem; }
 .sev { font-weight: 600; text-transform: uppercase; font-size: .75rem; letter-spacing: .03em; margin-right: .35rem; }
 .sev-error { color: var(--err); } .sev-warning { color: var(--warn); } .sev-note { color: var(--note); }
+.sev-notrun { color: var(--muted); }
 .waived { color: var(--muted); text-decoration: line-through; }
 @media (max-width: 640px) {
   body { padding: .5rem; font-size: 14px; }
@@ -55333,9 +56820,23 @@ function htmlRow(r) {
       severity: f.severity,
       message: f.message,
       line: f.line,
-      waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` : null
-    }))
+      waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` + (f.waived.covers ? `; the waiver covers ${f.waived.covers}` : "") : null
+    })),
+    notRun: (r.notRun ?? []).map((n) => ({ check: n.check, reason: n.reason }))
   };
+}
+function notRunSection(groups) {
+  if (groups.length === 0) return "";
+  const rows = groups.map(
+    (g) => `<tr><td><code>${escapeHtml(g.check)}</code></td><td>${escapeHtml(notRunRecordsText(g))}</td><td>${escapeHtml(g.reason)}</td></tr>`
+  ).join("\n");
+  return `<section aria-label="checks not run">
+<h2>Checks not run</h2>
+<p>These checks could not run on some records, so they neither passed nor failed there.</p>
+<div class="scroll"><table class="counts notrun"><thead><tr><th>check</th><th>not run on</th><th>why</th></tr></thead>
+<tbody>${rows}</tbody></table></div>
+</section>
+`;
 }
 function renderHtmlPage(rows, page) {
   const opts = page;
@@ -55375,7 +56876,7 @@ ${notes ? `<ul class="notes">${notes}</ul>` : ""}
 <div class="scroll"><table class="counts"><thead><tr><th>check</th><th>errors</th><th>warnings</th><th>notes</th><th>waived</th></tr></thead>
 <tbody>${countsRows}</tbody></table></div>
 </section>
-<section aria-label="flagged records">
+${notRunSection(page.notRun ?? [])}<section aria-label="flagged records">
 <h2>Flagged records <span id="shown-count">${rows.length}</span> of ${rows.length}${page.flaggedTotal !== void 0 && page.flaggedTotal > rows.length ? ` listed (${page.flaggedTotal} flagged in all)` : ""}</h2>
 <form id="filters" onsubmit="return false">
 <label>search id <input id="search" type="search" placeholder="e.g. LX-00042" autocomplete="off"></label>
@@ -55447,6 +56948,8 @@ function makeRenderer(wants, checks) {
       }
     };
     if (wants.csv) out.csv = csvRow(r);
+    if ((wants.sarif || wants.html) && r.notRun?.length)
+      out.notRun = { ref: { id: r.id, file: r.file, line: r.origin.line }, checks: r.notRun };
     if (wants.sarif && r.findings.length > 0) {
       const log = sarifLog(
         { tool, records: [r], summary: none, caution: "" },
@@ -55477,22 +56980,118 @@ function makeRenderer(wants, checks) {
 }
 
 // src/bulk/sarif-writer.ts
-import { createWriteStream as createWriteStream2 } from "node:fs";
+import { createWriteStream as createWriteStream3 } from "node:fs";
 
 // src/bulk/writers.ts
-import { createWriteStream } from "node:fs";
-function wantsOf(writers) {
-  const has = (n) => writers.some((w) => w.needs === n);
-  return { jsonl: has("jsonl"), csv: has("csv"), sarif: has("sarif"), html: has("html") };
-}
+import { createWriteStream as createWriteStream2 } from "node:fs";
+
+// src/report/sink.ts
+import {
+  closeSync as closeSync2,
+  createWriteStream,
+  mkdtempSync,
+  openSync as openSync2,
+  readSync as readSync2,
+  rmSync as rmSync2,
+  writeSync
+} from "node:fs";
+import { tmpdir } from "node:os";
+import { join as join5 } from "node:path";
+import { StringDecoder } from "node:string_decoder";
 function drainWrite(stream, text) {
   return stream.write(text) ? Promise.resolve() : new Promise((res) => stream.once("drain", () => res()));
 }
 function close(stream) {
   return new Promise((res, rej) => stream.end((err2) => err2 ? rej(err2) : res()));
 }
-function jsonlWriter(path) {
+var SinkFailed = class extends Error {
+  constructor(cause) {
+    super(`the report could not be written: ${cause?.message ?? String(cause)}`);
+    this.cause = cause;
+  }
+  cause;
+};
+function fileSink(path) {
   const s = createWriteStream(path, "utf8");
+  let failed2 = null;
+  s.on("error", (e) => failed2 = new SinkFailed(e));
+  const guard = (p) => p.catch((e) => Promise.reject(failed2 ?? new SinkFailed(e)));
+  return {
+    write: (text) => failed2 ? Promise.reject(failed2) : guard(drainWrite(s, text)),
+    close: () => failed2 ? Promise.reject(failed2) : guard(close(s))
+  };
+}
+function lineSink(out, piece = 1 << 16) {
+  let held = "";
+  return {
+    async write(text) {
+      held += text;
+      if (held.length < piece) return;
+      const cut = held.lastIndexOf("\n");
+      if (cut < 0) return;
+      out(held.slice(0, cut + 1));
+      held = held.slice(cut + 1);
+    },
+    async close() {
+      if (held !== "") out(held);
+      held = "";
+    }
+  };
+}
+var SpillGroups = class {
+  dir = mkdtempSync(join5(tmpdir(), "stereogate-report-"));
+  fds;
+  held;
+  /** Pieces added to each group. */
+  counts;
+  removed = false;
+  constructor(groups) {
+    this.fds = Array.from({ length: groups }, (_, i) => openSync2(join5(this.dir, `${i}.txt`), "w+"));
+    this.held = Array.from({ length: groups }, () => "");
+    this.counts = Array.from({ length: groups }, () => 0);
+  }
+  add(group, text) {
+    this.counts[group]++;
+    this.held[group] += text;
+    if (this.held[group].length >= 1 << 16) this.flush(group);
+  }
+  flush(group) {
+    if (this.held[group] === "") return;
+    writeSync(this.fds[group], this.held[group]);
+    this.held[group] = "";
+  }
+  /** Copies one group's text to the sink, in the order it was added. */
+  async copy(group, sink) {
+    this.flush(group);
+    const fd = this.fds[group];
+    const buf = Buffer.allocUnsafe(1 << 20);
+    const decoder = new StringDecoder("utf8");
+    let at2 = 0;
+    for (; ; ) {
+      const n = readSync2(fd, buf, 0, buf.length, at2);
+      if (n === 0) break;
+      at2 += n;
+      await sink.write(decoder.write(buf.subarray(0, n)));
+    }
+    const rest = decoder.end();
+    if (rest !== "") await sink.write(rest);
+  }
+  /** Closes and deletes the files (once; later calls do nothing). */
+  remove() {
+    if (this.removed) return;
+    this.removed = true;
+    for (const fd of this.fds) closeSync2(fd);
+    rmSync2(this.dir, { recursive: true, force: true });
+  }
+};
+
+// src/bulk/writers.ts
+function wantsOf(writers) {
+  const has = (n) => writers.some((w) => w.needs === n);
+  return { jsonl: has("jsonl"), csv: has("csv"), sarif: has("sarif"), html: has("html") };
+}
+function jsonlWriter(path) {
+  const s = createWriteStream2(path, "utf8");
   return {
     needs: "jsonl",
     write: (r) => drainWrite(s, r.jsonl + "\n"),
@@ -55503,7 +57102,7 @@ function jsonlWriter(path) {
   };
 }
 function jsonWriter(path) {
-  const s = createWriteStream(path, "utf8");
+  const s = createWriteStream2(path, "utf8");
   let first = true;
   let started = false;
   const start = async () => {
@@ -55538,7 +57137,7 @@ function jsonWriter(path) {
   };
 }
 function csvWriter(path) {
-  const s = createWriteStream(path, "utf8");
+  const s = createWriteStream2(path, "utf8");
   let header = false;
   return {
     needs: "csv",
@@ -55567,12 +57166,16 @@ function bulkSarifRules(checks) {
   return [...checks, TIME_LIMIT_RULE];
 }
 function sarifWriter(path, checks, tool, caution) {
-  const s = createWriteStream2(path, "utf8");
+  const s = createWriteStream3(path, "utf8");
   const none = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
   const header = sarifLog({ tool, records: [], summary: none, caution }, bulkSarifRules(checks));
   const run12 = header.runs[0];
-  const head2 = JSON.stringify({ ...header, runs: [{ tool: run12.tool, results: ["\0"] }] });
-  const [before, after] = head2.split('"\\u0000"');
+  const head = JSON.stringify({ ...header, runs: [{ tool: run12.tool, results: ["\0"] }] });
+  const [before, after] = head.split('"\\u0000"');
+  const ruleIndex = new Map(
+    (run12.tool.driver.rules ?? []).map((r, i) => [r.id, i])
+  );
+  const notRun = new NotRunTally();
   let first = true;
   let started = false;
   return {
@@ -55582,6 +57185,7 @@ function sarifWriter(path, checks, tool, caution) {
         started = true;
         await drainWrite(s, before);
       }
+      if (r.notRun) notRun.add(r.notRun.ref, r.notRun.checks);
       for (const res of r.sarif ?? []) {
         await drainWrite(s, (first ? "" : ",") + res);
         first = false;
@@ -55589,9 +57193,10 @@ function sarifWriter(path, checks, tool, caution) {
     },
     async finish(t) {
       if (!started) await drainWrite(s, before);
+      const invocations = sarifInvocations(notRun.list(), ruleIndex);
       const tail = after.replace(
         /\}\]\}$/,
-        `,"properties":${JSON.stringify({ caution: t.caution, summary: t.summary })}}]}`
+        (invocations ? `,"invocations":${JSON.stringify(invocations)}` : "") + `,"properties":${JSON.stringify({ caution: t.caution, summary: t.summary })}}]}`
       );
       await drainWrite(s, tail + "\n");
       await close(s);
@@ -55619,6 +57224,8 @@ async function makeItemContext(setup) {
 }
 
 // src/bulk/accumulate.ts
+init_caution();
+init_version();
 var BulkAccumulator = class {
   summary = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
   byCheck = {};
@@ -55652,209 +57259,13 @@ var BulkAccumulator = class {
   }
 };
 
-// src/bulk/pool.ts
-import { Worker } from "node:worker_threads";
-var STARTUP_LIMIT_MS = 12e4;
-async function* mapOrdered(items, opts) {
-  if (opts.workers <= 0) {
-    if (!opts.inline) throw new Error("mapOrdered: workers=0 needs an inline handler");
-    let n = 0;
-    for await (const item of items) {
-      n++;
-      yield opts.inline(item);
-    }
-    opts.onStats?.({
-      window: 1,
-      maxAhead: 1,
-      maxBuffered: 0,
-      maxPending: 0,
-      maxInFlight: 1,
-      items: n,
-      replaced: 0
-    });
-    return;
-  }
-  const batchSize = Math.max(1, opts.batchSize ?? 16);
-  const window2 = Math.max(batchSize * opts.workers * 2, opts.window ?? batchSize * opts.workers * 4);
-  const iterator = Symbol.asyncIterator in items ? items[Symbol.asyncIterator]() : toAsync(items);
-  const done = /* @__PURE__ */ new Map();
-  const stats = {
-    window: window2,
-    maxAhead: 0,
-    maxBuffered: 0,
-    maxPending: 0,
-    maxInFlight: 0,
-    items: 0,
-    replaced: 0
-  };
-  const record2 = (at2, result2) => {
-    done.set(at2, result2);
-    if (done.size > stats.maxBuffered) stats.maxBuffered = done.size;
-  };
-  const pending = [];
-  let nextIndex = 0;
-  let nextOut = 0;
-  let inputDone = false;
-  let wake = null;
-  let failure2 = null;
-  const notify = () => {
-    const w = wake;
-    wake = null;
-    if (w) w();
-  };
-  const slots = [];
-  const spawn2 = () => {
-    const shared2 = new SharedArrayBuffer(8);
-    const progress = new Int32Array(shared2);
-    progress[0] = -1;
-    const data = { user: opts.workerData, progress: shared2 };
-    const worker = startWorker(opts.script, opts.execArgv, data, opts.resourceLimits);
-    const slot = {
-      worker,
-      progress,
-      seen: 0,
-      queue: [],
-      lastProgress: Date.now(),
-      dead: false,
-      ready: false,
-      started: Date.now()
-    };
-    worker.on("message", (msg) => {
-      if ("ready" in msg) {
-        slot.ready = true;
-        slot.lastProgress = Date.now();
-        return;
-      }
-      if (slot.dead) return;
-      slot.lastProgress = Date.now();
-      const finished = /* @__PURE__ */ new Set();
-      for (const [index, result2] of msg.results) {
-        finished.add(index);
-        record2(index, result2);
-      }
-      slot.queue = slot.queue.filter((j) => !finished.has(j.index));
-      notify();
-    });
-    worker.on("error", (err2) => {
-      if (slot.dead) return;
-      slot.dead = true;
-      const [current, rest] = takeCurrent(slot);
-      if (current) {
-        const result2 = opts.onCrash ? opts.onCrash(current.item, current.index, String(err2?.message ?? err2)) : opts.onTimeout(current.item, current.index);
-        record2(current.index, result2);
-      }
-      pending.unshift(...rest);
-      replace(slot);
-      notify();
-    });
-    worker.on("exit", () => {
-      if (!slot.dead && slot.queue.length > 0) worker.emit("error", new Error("worker exited"));
-    });
-    return slot;
-  };
-  const takeCurrent = (slot) => {
-    const on = Atomics.load(slot.progress, 0);
-    const at2 = slot.queue.findIndex((j) => j.index === on);
-    const current = at2 >= 0 ? slot.queue[at2] : slot.queue[0];
-    const rest = slot.queue.filter((j) => j !== current);
-    slot.queue = [];
-    return [current, rest];
-  };
-  const replace = (slot) => {
-    const i = slots.indexOf(slot);
-    stats.replaced++;
-    void slot.worker.terminate();
-    if (i >= 0) slots[i] = spawn2();
-  };
-  for (let i = 0; i < opts.workers; i++) slots.push(spawn2());
-  const timer = setInterval(
-    () => {
-      const now = Date.now();
-      for (const slot of slots) {
-        if (slot.dead || slot.queue.length === 0) continue;
-        const finished = Atomics.load(slot.progress, 1);
-        if (finished !== slot.seen) {
-          slot.seen = finished;
-          slot.lastProgress = now;
-        }
-        const stalled = slot.ready ? now - slot.lastProgress > opts.timeoutMs : now - slot.started > Math.max(STARTUP_LIMIT_MS, opts.timeoutMs);
-        if (stalled) {
-          slot.dead = true;
-          const [current, rest] = takeCurrent(slot);
-          if (current) record2(current.index, opts.onTimeout(current.item, current.index));
-          pending.unshift(...rest);
-          replace(slot);
-          notify();
-        }
-      }
-    },
-    Math.max(20, Math.min(1e3, Math.floor(opts.timeoutMs / 4)))
-  );
-  timer.unref();
-  const canRead = () => !inputDone && nextIndex - nextOut < window2 && pending.length < batchSize * opts.workers * 2;
-  const readMore = async () => {
-    while (canRead()) {
-      const r = await iterator.next();
-      if (r.done) {
-        inputDone = true;
-        break;
-      }
-      pending.push({ index: nextIndex++, item: r.value });
-      if (nextIndex - nextOut > stats.maxAhead) stats.maxAhead = nextIndex - nextOut;
-      if (pending.length > stats.maxPending) stats.maxPending = pending.length;
-    }
-  };
-  const inFlight = batchSize * 2;
-  const hasRoom = (slot) => !slot.dead && slot.queue.length <= inFlight - batchSize;
-  const dispatch = () => {
-    for (const slot of slots) {
-      if (!hasRoom(slot) || pending.length === 0) continue;
-      const batch = pending.splice(0, batchSize);
-      if (slot.queue.length === 0) slot.lastProgress = Date.now();
-      slot.queue.push(...batch);
-      if (slot.queue.length > stats.maxInFlight) stats.maxInFlight = slot.queue.length;
-      slot.worker.postMessage({ jobs: batch });
-    }
-  };
-  try {
-    for (; ; ) {
-      if (failure2) throw failure2;
-      await readMore();
-      dispatch();
-      while (done.has(nextOut)) {
-        const value = done.get(nextOut);
-        done.delete(nextOut);
-        nextOut++;
-        yield value;
-      }
-      if (inputDone && nextOut >= nextIndex) break;
-      await new Promise((resolve6) => {
-        wake = resolve6;
-        if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
-      });
-    }
-  } catch (e) {
-    failure2 = e;
-    throw e;
-  } finally {
-    stats.items = nextIndex;
-    opts.onStats?.(stats);
-    clearInterval(timer);
-    await Promise.all(slots.map((s) => s.worker.terminate()));
-  }
-}
-function startWorker(script, execArgv, data, resourceLimits) {
-  if (!script.pathname.endsWith(".ts"))
-    return new Worker(script, { execArgv, workerData: data, resourceLimits });
-  const tsx = import.meta.resolve("tsx/esm/api");
-  const code = `import(${JSON.stringify(tsx)}).then((m) => { m.register(); return import(${JSON.stringify(script.href)}); }).catch((e) => { setImmediate(() => { throw e; }); });`;
-  return new Worker(code, { eval: true, execArgv, workerData: data, resourceLimits });
-}
-async function* toAsync(items) {
-  for (const item of items) yield item;
-}
+// src/bulk/run.ts
+init_pool();
 
 // src/bulk/registry-stream.ts
+init_engine();
+init_registry_phase();
+init_run();
 function shardNotRun(shard) {
   return `one shard (${shard.index}/${shard.count}) of a split run holds only part of the records: the registry-wide checks (duplicates, enantiomer pairs) run when the shard outputs are merged (stereogate merge)`;
 }
@@ -55862,18 +57273,18 @@ function isShardNotRun(reason) {
   return /^one shard \(\d+\/\d+\) of a split run/.test(reason);
 }
 var BulkRegistryPhase = class _BulkRegistryPhase {
-  constructor(phase, render, checks) {
+  constructor(phase, render2, checks) {
     this.phase = phase;
-    this.render = render;
+    this.render = render2;
     this.wide = new Set(checks.filter((c) => c.scope === "registry").map((c) => c.id));
   }
   phase;
   render;
   wide;
-  static async create(config, render, checks) {
+  static async create(config, render2, checks) {
     const engine = await defaultEngine({ axisOrthoMin: config.axisOrthoMin });
     const phase = new RegistryPhase({ mode: "full", config, confirm: confirmWith(engine) });
-    return new _BulkRegistryPhase(phase, render, checks);
+    return new _BulkRegistryPhase(phase, render2, checks);
   }
   /** A record rendered in a worker (its JSON Lines text made, see runBulkAudit). */
   rendered(r) {
@@ -55933,7 +57344,7 @@ function makeProgress(mode, total, stream = process.stderr, every = { ms: 1e4 })
     };
   }
   let last = started;
-  const line = (final) => {
+  const line2 = (final) => {
     const secs = (Date.now() - started) / 1e3;
     const rate = done / Math.max(1e-3, secs);
     const pct = total ? ` (${Math.floor(100 * done / total)}%)` : "";
@@ -55949,11 +57360,11 @@ function makeProgress(mode, total, stream = process.stderr, every = { ms: 1e4 })
       const now = Date.now();
       if (now - last >= every.ms) {
         last = now;
-        line(false);
+        line2(false);
       }
     },
     stop() {
-      line(true);
+      line2(true);
     }
   };
 }
@@ -56024,7 +57435,7 @@ function timeoutResult(item, limitMs, crashed, id = null) {
 }
 async function runBulkAudit(opts) {
   const started = Date.now();
-  const workers = opts.workers ?? Math.max(1, availableParallelism());
+  const workers = opts.workers ?? Math.max(1, availableParallelism2());
   const timeoutMs = opts.timeoutMs ?? 2e4;
   const progressMode = opts.progress ?? "auto";
   let total = null;
@@ -56048,13 +57459,13 @@ async function runBulkAudit(opts) {
   const ext = import.meta.url.endsWith(".ts") ? ".ts" : ".js";
   const script = new URL(`./worker${ext}`, import.meta.url);
   const { CHECKS: CHECKS2 } = await Promise.resolve().then(() => (init_checks(), checks_exports));
-  const render = makeRenderer(wants, bulkSarifRules(CHECKS2));
+  const render2 = makeRenderer(wants, bulkSarifRules(CHECKS2));
   let inline;
   if (workers === 0) {
     const ctx = await makeItemContext(setup);
     inline = (item) => ctx.render(auditItem(item, ctx));
   }
-  const phase = registryNotRun === null ? await BulkRegistryPhase.create(opts.config, render, CHECKS2) : null;
+  const phase = registryNotRun === null ? await BulkRegistryPhase.create(opts.config, render2, CHECKS2) : null;
   const acc = new BulkAccumulator();
   const results = mapOrdered(
     shardFilter(allItems(opts.inputs), opts.shard ?? null),
@@ -56063,8 +57474,8 @@ async function runBulkAudit(opts) {
       script,
       workerData: setup,
       timeoutMs,
-      onTimeout: (item) => render(timeoutResult(item, timeoutMs, null, itemId(item, opts.mapping))),
-      onCrash: (item, _i, error) => render(timeoutResult(item, timeoutMs, error, itemId(item, opts.mapping))),
+      onTimeout: (item) => render2(timeoutResult(item, timeoutMs, null, itemId(item, opts.mapping))),
+      onCrash: (item, _i, error) => render2(timeoutResult(item, timeoutMs, error, itemId(item, opts.mapping))),
       inline,
       resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
       batchSize: opts.batchSize ?? 16,
@@ -56097,23 +57508,26 @@ async function runBulkAudit(opts) {
 
 // src/cli/commands/bulk-audit.ts
 var import_yaml3 = __toESM(require_dist(), 1);
-import { readFileSync } from "node:fs";
+init_config();
+init_types2();
+import { readFileSync as readFileSync3 } from "node:fs";
 import { parseArgs as parseArgs2 } from "node:util";
 
 // src/bulk/merge.ts
 import { createReadStream as createReadStream4 } from "node:fs";
 import { createInterface as createInterface2 } from "node:readline";
+init_config();
 var MergeError = class extends Error {
 };
 async function* readShard(path) {
   const rl = createInterface2({ input: createReadStream4(path, "utf8"), crlfDelay: Infinity });
   let n = 0;
-  for await (const line of rl) {
+  for await (const line2 of rl) {
     n++;
-    if (line.trim() === "") continue;
+    if (line2.trim() === "") continue;
     let v;
     try {
-      v = JSON.parse(line);
+      v = JSON.parse(line2);
     } catch {
       throw new MergeError(`${path}:${n}: not a JSON line of a stereogate bulk output`);
     }
@@ -56126,8 +57540,8 @@ async function* readShard(path) {
 }
 async function mergeShards(paths, writers, onRecord, config = DEFAULT_CONFIG) {
   const { CHECKS: CHECKS2 } = await Promise.resolve().then(() => (init_checks(), checks_exports));
-  const render = makeRenderer(wantsOf(writers), bulkSarifRules(CHECKS2));
-  const phase = await BulkRegistryPhase.create(config, render, CHECKS2);
+  const render2 = makeRenderer(wantsOf(writers), bulkSarifRules(CHECKS2));
+  const phase = await BulkRegistryPhase.create(config, render2, CHECKS2);
   const streams = paths.map((p) => readShard(p));
   const heads = [];
   const shards = paths.map(() => null);
@@ -56181,7 +57595,7 @@ async function mergeShards(paths, writers, onRecord, config = DEFAULT_CONFIG) {
 
 // src/bulk/html-collector.ts
 init_read();
-import { writeFileSync } from "node:fs";
+import { writeFileSync as writeFileSync2 } from "node:fs";
 
 // src/chem/depict.ts
 init_openchemlib();
@@ -56293,8 +57707,10 @@ var HtmlCollector = class {
   maxLayouts;
   needs = "html";
   kept = [];
+  notRun = new NotRunTally();
   flaggedCount = 0;
   async write(r) {
+    if (r.notRun) this.notRun.add(r.notRun.ref, r.notRun.checks);
     if (!r.html) return;
     this.flaggedCount++;
     if (this.kept.length < this.maxRecords) this.kept.push(r.html);
@@ -56302,16 +57718,18 @@ var HtmlCollector = class {
   async finish(t) {
     let computed = 0;
     let skipped = 0;
+    const bound = this.maxLayouts.toLocaleString("en-US");
     const rows = this.kept.map((e) => {
       const read = readKept(e);
-      if (!read) return { ...e.row, pic: null };
+      if (!read) return { ...e.row, pic: null, noPicture: "the structure could not be read" };
       if (read.dimension !== 2 && computed >= this.maxLayouts) {
         skipped++;
-        return { ...e.row, pic: null };
+        const noPicture = `layouts are computed for the first ${plural(bound, "flagged record")} given as SMILES only (molfile records are always drawn)`;
+        return { ...e.row, pic: null, noPicture };
       }
       const layout = layoutStructure(read);
       if (layout?.origin === "computed") computed++;
-      return { ...e.row, pic: layout ? pictureData(layout, e.units) : null };
+      return layout ? { ...e.row, pic: pictureData(layout, e.units) } : { ...e.row, pic: null, noPicture: "no 2D layout could be computed for this structure" };
     });
     const notes = [
       `${t.summary.records} records audited${t.shard ? ` (shard ${t.shard})` : ""}; ${this.flaggedCount} flagged.`
@@ -56322,7 +57740,7 @@ var HtmlCollector = class {
       );
     if (skipped > 0)
       notes.push(
-        `${skipped} flagged records from SMILES have no depiction: layouts are computed for the first ${this.maxLayouts} (molfile records are always drawn as registered).`
+        `${plural(skipped, "flagged record")} from SMILES ${skipped === 1 ? "has" : "have"} no depiction: layouts are computed for the first ${bound} (molfile records are always drawn as registered); their cards say so.`
       );
     for (const [w, e] of t.vocabulary.mapped)
       notes.push(`legacy form word "${w}" read as ${e.form} (${plural(e.count, "record")})`);
@@ -56334,10 +57752,11 @@ var HtmlCollector = class {
       summary: t.summary,
       byCheck: t.byCheck,
       flaggedTotal: this.flaggedCount,
+      notRun: this.notRun.list(),
       notes,
       title: "stereogate bulk audit"
     });
-    writeFileSync(this.path, page);
+    writeFileSync2(this.path, page);
   }
 };
 function readKept(e) {
@@ -56346,9 +57765,12 @@ function readKept(e) {
   return read.ok ? read.structure : null;
 }
 
+// src/cli/commands/bulk-audit.ts
+init_findings();
+
 // src/cli/output-path.ts
 import { existsSync as existsSync3, statSync as statSync3 } from "node:fs";
-import { dirname as dirname2, resolve as resolve4 } from "node:path";
+import { dirname as dirname3, resolve as resolve4 } from "node:path";
 function writeFailureReason(e) {
   const code = e?.code;
   if (code === "ENOENT") return "its folder does not exist";
@@ -56361,14 +57783,16 @@ function writeFailure(path, e) {
   return `cannot write ${path}: ${writeFailureReason(e)}`;
 }
 function checkWritable(path, what) {
-  const dir = dirname2(resolve4(path));
+  const dir = dirname3(resolve4(path));
   if (!existsSync3(dir) || !statSync3(dir).isDirectory())
-    throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname2(path)} does not exist`);
+    throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname3(path)} does not exist`);
   if (existsSync3(path) && statSync3(path).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: it is a folder`);
 }
 
 // src/cli/commands/bulk-audit.ts
+init_caution();
+init_version();
 var BULK_USAGE = `Bulk audit of legacy registries (SD files, CSV/TSV exports):
 
   stereogate audit <file.sdf|file.csv|file.tsv>… [options]
@@ -56441,7 +57865,7 @@ var FIELD_KEYS = [
 function readMapping(path) {
   let data;
   try {
-    data = (0, import_yaml3.parse)(readFileSync(path, "utf8"));
+    data = (0, import_yaml3.parse)(readFileSync3(path, "utf8"));
   } catch (e) {
     throw new UsageError(`--mapping ${path}: ${e.message}`);
   }
@@ -56503,43 +57927,43 @@ function timing(records, time) {
   return ` in ${time.seconds.toFixed(1)} s (audit ${time.auditSeconds.toFixed(1)} s, ${rate} records/s${reports >= 0.05 ? `; reports ${reports.toFixed(1)} s` : ""})`;
 }
 function summaryTable(t, time) {
-  const lines = [];
+  const lines2 = [];
   const s = t.summary;
-  lines.push(
+  lines2.push(
     `stereogate bulk audit: ${plural(s.records, "record")}${timing(s.records, time)}${t.shard ? `, shard ${t.shard}` : ""}`
   );
-  lines.push(
+  lines2.push(
     `  ${plural(s.errors, "error")}, ${plural(s.warnings, "warning")}, ${plural(s.notes, "note")}, ${s.waived} accepted by waiver`
   );
   const rows = Object.entries(t.byCheck);
   if (rows.length > 0) {
     const w = Math.max(5, ...rows.map(([c]) => c.length));
-    lines.push("", `  ${"check".padEnd(w)}  errors  warnings  notes  waived`);
+    lines2.push("", `  ${"check".padEnd(w)}  errors  warnings  notes  waived`);
     for (const [c, n] of rows) {
-      lines.push(
+      lines2.push(
         `  ${c.padEnd(w)}  ${String(n.error).padStart(6)}  ${String(n.warning).padStart(8)}  ${String(n.note).padStart(5)}  ${String(n.waived).padStart(6)}`
       );
     }
   }
   if (t.vocabulary.mapped.length > 0) {
-    lines.push("", "  legacy form words mapped:");
-    for (const [w, e] of t.vocabulary.mapped) lines.push(`    "${w}" -> ${e.form} (${e.count})`);
+    lines2.push("", "  legacy form words mapped:");
+    for (const [w, e] of t.vocabulary.mapped) lines2.push(`    "${w}" -> ${e.form} (${e.count})`);
   }
   if (t.vocabulary.notUnderstood.length > 0) {
-    lines.push(
+    lines2.push(
       "",
       "  form words NOT understood (records audited as form unknown; map them with --form-word):"
     );
     const shown = t.vocabulary.notUnderstood.slice(0, 50);
-    for (const [w, n] of shown) lines.push(`    "${w}" (${n})`);
+    for (const [w, n] of shown) lines2.push(`    "${w}" (${n})`);
     if (t.vocabulary.notUnderstood.length > shown.length) {
-      lines.push(`    … and ${t.vocabulary.notUnderstood.length - shown.length} more (see the JSON summary)`);
+      lines2.push(`    … and ${t.vocabulary.notUnderstood.length - shown.length} more (see the JSON summary)`);
     }
   }
   const registry = registryLines(t.registry);
-  if (registry.length > 0) lines.push("", ...registry.map((l) => `  ${l}`));
-  lines.push("", t.caution);
-  return lines.join("\n");
+  if (registry.length > 0) lines2.push("", ...registry.map((l) => `  ${l}`));
+  lines2.push("", t.caution);
+  return lines2.join("\n");
 }
 function exitCode(t, failOn) {
   if (t.byCheck[INTERNAL_ERROR_ID]) return EXIT_CRASH;
@@ -56669,23 +58093,434 @@ var mergeShardsCommand = {
 };
 
 // src/cli/commands/audit.ts
+init_findings();
+
+// src/cli/commands/audit-folder.ts
+init_caution();
+init_run();
+init_version();
+
+// src/bulk/folder-run.ts
+init_run();
+init_engine();
+init_registry_phase();
+init_findings();
+init_pool();
+import { availableParallelism as availableParallelism3 } from "node:os";
+
+// src/bulk/record-file-audit.ts
+init_engine();
+init_findings();
+init_index_row();
+init_run();
+init_structures();
+init_view();
+init_budget();
+import { join as join6 } from "node:path";
+init_load();
+init_positions();
+async function makeFolderContext(setup, checks) {
+  const [list, engine] = await Promise.all([
+    checks ?? Promise.resolve().then(() => (init_checks(), checks_exports)).then((m) => m.CHECKS),
+    defaultEngine({ axisOrthoMin: setup.config.axisOrthoMin })
+  ]);
+  return { setup, checks: list, engine };
+}
+function loadItem2(item, lookup) {
+  if (item.refused !== void 0) return refusedRecord2(item.file, item.refused);
+  const loaded = loadRecordFile(lookup.root, join6(lookup.root, item.file));
+  const duplicate = lookup.duplicates.get(item.file);
+  if (duplicate) loaded.problems.push({ ...duplicate });
+  return loaded;
+}
+function refusedRecord2(file, message) {
+  return {
+    file,
+    id: null,
+    record: null,
+    positions: NO_POSITIONS,
+    problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${message}` }],
+    origin: { kind: "file" }
+  };
+}
+var idLists = /* @__PURE__ */ new WeakMap();
+function idsOf(lookup) {
+  let ids = idLists.get(lookup);
+  if (!ids) idLists.set(lookup, ids = [...lookup.byId.keys()]);
+  return ids;
+}
+function auditRecordFile(item, ctx) {
+  const { lookup, config, budget } = ctx.setup;
+  const loaded = loadItem2(item, lookup);
+  const cache2 = new StructureCache(ctx.engine);
+  const load = (id) => {
+    const file = lookup.byId.get(id);
+    if (file === void 0) return null;
+    return file === loaded.file ? loaded : loadItem2({ seq: 0, file }, lookup);
+  };
+  const all = () => [...lookup.byId.keys()].flatMap((id) => load(id) ?? []);
+  const view = lazyRegistryView(loaded, cache2, load, all, () => idsOf(lookup));
+  const result2 = auditRecords([loaded], {
+    checks: ctx.checks,
+    config,
+    engine: ctx.engine,
+    budget,
+    view,
+    registryPhase: false
+  }).records[0];
+  const facts = result2.computed;
+  const keysFrom = facts === null && result2.findings.some((f) => f.check === TIME_LIMIT_ID) ? mainWithin(loaded, new StructureCache(ctx.engine), budget) : { structure: null, facts, error: null };
+  const row = indexRow(loaded, keysFrom, item.seq);
+  result2.computed = null;
+  return {
+    seq: item.seq,
+    result: result2,
+    computedLine: computedText(facts),
+    computedJson: facts && ctx.setup.json ? JSON.stringify(facts, null, 2) : null,
+    row
+  };
+}
+function mainWithin(loaded, cache2, budget) {
+  try {
+    return withBudget(budget, "the structure of a registry record", () => cache2.main(loaded));
+  } catch {
+    return { structure: null, facts: null, error: null };
+  }
+}
+function stoppedRecordFile(item, id, limitMs, crashed) {
+  const loaded = { ...refusedRecord2(item.file, ""), id, problems: [] };
+  const finding3 = budgetFinding(loaded, "time", limitMs);
+  if (crashed !== null) {
+    finding3.messageId = "worker-crashed";
+    finding3.message = `The audit of this record crashed its worker (${crashed}); it was not audited, and the run went on. Audit it on its own (stereogate audit with its path), or simplify the structure.`;
+    finding3.data = { kind: "crash", limit: limitMs };
+  }
+  return {
+    seq: item.seq,
+    result: {
+      id,
+      file: item.file,
+      computed: null,
+      findings: [finding3],
+      passed: [],
+      notRun: [],
+      declared: { form: null, descriptors: null }
+    },
+    computedLine: null,
+    computedJson: null,
+    row: {
+      seq: item.seq,
+      id,
+      file: item.file,
+      name: null,
+      form: "unknown",
+      rotation: null,
+      keys: null,
+      lines: { id: null, structure: null, rotation: null },
+      waivers: []
+    }
+  };
+}
+
+// src/bulk/folder-run.ts
+function poolLimitMs(budget) {
+  return Math.ceil(budget.timeMs * 1.25) + 2e3;
+}
+async function runFolderAudit(opts) {
+  const workers = opts.workers ?? Math.max(1, availableParallelism3());
+  const setup = {
+    kind: "record-files",
+    config: opts.config,
+    lookup: opts.folder.lookup,
+    budget: opts.budget,
+    json: opts.json
+  };
+  const engine = opts.engine ?? await defaultEngine({ axisOrthoMin: opts.config.axisOrthoMin });
+  const phase = opts.checks.some((c) => c.scope === "registry") ? new RegistryPhase({
+    mode: "full",
+    config: opts.config,
+    confirm: confirmWith(engine),
+    duplicateIds: false
+  }) : null;
+  let inline;
+  if (workers === 0) {
+    const ctx = await makeFolderContext(setup, opts.checks);
+    ctx.engine = engine;
+    inline = (item) => auditRecordFile(item, ctx);
+  }
+  const limit = poolLimitMs(opts.budget);
+  const stopped = (item, crashed) => stoppedRecordFile(item, opts.folder.idOf(item.seq), limit, crashed);
+  const ext = import.meta.url.endsWith(".ts") ? ".ts" : ".js";
+  const results = mapOrdered(opts.folder.items, {
+    workers,
+    script: opts.script ?? new URL(`./worker${ext}`, import.meta.url),
+    workerData: setup,
+    timeoutMs: limit,
+    onTimeout: (item) => stopped(item, null),
+    onCrash: (item, _i, error) => stopped(item, error),
+    inline,
+    resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
+    batchSize: opts.batchSize ?? 16,
+    onStats: opts.onPoolStats
+  });
+  const progress = makeProgress(opts.progress ?? "auto", opts.folder.items.length);
+  const summary = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  let internalErrors = false;
+  try {
+    for await (const r of results) {
+      if (phase) addPhaseResult(r.result, phase.next(r.row));
+      const s = summarize([r.result]);
+      for (const k of ["records", "errors", "warnings", "notes", "waived"]) summary[k] += s[k];
+      internalErrors ||= r.result.findings.some(isInternalError);
+      await opts.onRecord(r);
+      progress.tick();
+    }
+  } finally {
+    progress.stop();
+  }
+  return phase ? { summary, registry: phase.summary(), internalErrors } : { summary, internalErrors };
+}
+
+// src/bulk/record-files.ts
+init_load();
+init_files();
+init_parse();
+init_positions();
+import { join as join7 } from "node:path";
+function listRecordFiles(root, recordDirs) {
+  const found = findRecordFiles(root, recordDirs);
+  const files = found.files.map((abs) => ({ file: relativeTo(root, abs) }));
+  for (const r of found.refused) files.push({ file: r.file, refused: r.message });
+  files.sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+  return { files, missingDirs: found.missingDirs };
+}
+function readRecordFolder(root, list) {
+  const { files } = list;
+  const itemIds = [];
+  const byId2 = /* @__PURE__ */ new Map();
+  const seen = [];
+  for (const f of files) {
+    const read = f.refused === void 0 ? readTextFile(join7(root, f.file)) : null;
+    const parsed = read?.ok ? parseRecordText(read.text) : null;
+    const id = parsed?.id ?? null;
+    itemIds.push(id);
+    if (id === null || !parsed) continue;
+    seen.push({ id, file: f.file, line: lineOf(parsed.positions, "id") });
+    if (parsed.record !== null && !byId2.has(id)) byId2.set(id, f.file);
+  }
+  return {
+    items: files.map((f, i) => ({ seq: i + 1, ...f })),
+    lookup: { root, byId: byId2, duplicates: duplicateIdProblems(seen) },
+    idOf: (seq) => itemIds[seq - 1] ?? null,
+    missingDirs: list.missingDirs
+  };
+}
+
+// src/report/stream.ts
+function streamedReport(format, sink, known, options = {}) {
+  if (format === "json") return jsonReport2(sink);
+  if (format === "sarif") return sarifReport(sink, options.checks ?? [], known, options.sarif);
+  return groupedReport(format, sink, options.text ?? {});
+}
+var line = (r) => r.computedLine !== void 0 && r.result.computed === null ? r.computedLine : void 0;
+function nested(text, depth) {
+  const pad = " ".repeat(2 * depth);
+  return pad + text.replace(/\n/g, `
+${pad}`);
+}
+function frame(doc, key3) {
+  const at2 = doc.indexOf(`${key3}: []`);
+  if (at2 < 0) throw new Error(`streamed report: no empty ${key3} array in the frame`);
+  const open = at2 + key3.length + 3;
+  return [doc.slice(0, open), doc.slice(open + 1)];
+}
+function arrayWriter(sink, depth) {
+  let count4 = 0;
+  return {
+    add: (elementJson) => sink.write(`${count4++ === 0 ? "\n" : ",\n"}${nested(elementJson, depth)}`),
+    end: () => sink.write(count4 === 0 ? "]" : `
+${" ".repeat(2 * (depth - 1))}]`)
+  };
+}
+var MARK = "\0computed";
+function jsonReport2(sink) {
+  const records = arrayWriter(sink, 2);
+  let started = false;
+  const start = async () => {
+    if (!started) await sink.write('{\n  "records": [');
+    started = true;
+  };
+  return {
+    async add(r) {
+      await start();
+      const facts = r.result.computed === null ? r.computedJson ?? null : null;
+      const obj = jsonRecord(r.result);
+      if (facts !== null) obj.computed = MARK;
+      let text = JSON.stringify(obj, null, 2);
+      if (facts !== null) {
+        const marked = `"computed": ${JSON.stringify(MARK)}`;
+        const at2 = text.indexOf(marked);
+        text = `${text.slice(0, at2)}"computed": ${facts.replace(/\n/g, "\n  ")}${text.slice(at2 + marked.length)}`;
+      }
+      await records.add(text);
+    },
+    async finish(totals) {
+      await start();
+      await records.end();
+      const [head, tail] = frame(renderJson({ ...totals, records: [] }), '"records"');
+      if (head !== '{\n  "records": [') throw new Error("streamed report: the JSON report changed its frame");
+      await sink.write(tail);
+      await sink.close();
+    },
+    abort: () => void 0
+  };
+}
+function sarifReport(sink, checks, known, options) {
+  const none = { records: 0, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  const empty = (totals) => sarifLog({ ...totals, records: [] }, checks, options);
+  const rules = empty({ ...known, summary: none }).runs[0].tool.driver.rules;
+  const index = new Map(rules.map((r, i) => [r.id, i]));
+  const prefix = options?.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
+  const notRun = new NotRunTally();
+  const results = new SpillGroups(1);
+  let count4 = 0;
+  return {
+    async add(r) {
+      notRun.add({ id: r.result.id, file: r.result.file, line: null }, r.result.notRun);
+      for (const res of sarifResults(r.result, index, options))
+        results.add(0, `${count4++ === 0 ? "\n" : ",\n"}${nested(JSON.stringify(res, null, 2), 4)}`);
+    },
+    async finish(totals) {
+      try {
+        const log = empty(totals);
+        const { tool, properties } = log.runs[0];
+        const invocations = sarifInvocations(notRun.list(), index, prefix);
+        log.runs[0] = { tool, ...invocations ? { invocations } : {}, results: [], properties };
+        const [head, tail] = frame(`${JSON.stringify(log, null, 2)}
+`, '"results"');
+        await sink.write(head);
+        await results.copy(0, sink);
+        await sink.write(count4 === 0 ? "]" : "\n      ]");
+        await sink.write(tail);
+        await sink.close();
+      } finally {
+        results.remove();
+      }
+    },
+    abort: () => results.remove()
+  };
+}
+function groupedReport(format, sink, options) {
+  const groups = new SpillGroups(4);
+  return {
+    async add(r) {
+      if (format === "text") {
+        const { group, lines: lines2 } = textRecord(r.result, options, line(r));
+        groups.add(group, lines2.map((l) => `${l}
+`).join(""));
+      } else {
+        const { group, text } = markdownRecord(r.result, line(r));
+        groups.add(group, `${text}
+
+`);
+      }
+    },
+    async finish(totals) {
+      try {
+        if (format === "markdown") await sink.write(lines(markdownHead(totals)));
+        for (let g = 0; g < 3; g++) await groups.copy(g, sink);
+        const clean = groups.counts[3];
+        if (format === "markdown" && clean > 0) await sink.write(lines([cleanHeading(clean), ""]));
+        await groups.copy(3, sink);
+        await sink.write(
+          format === "text" ? lines(textClosing(totals, options, clean > 0)) : lines([cautionBlock(totals)])
+        );
+        await sink.close();
+      } finally {
+        groups.remove();
+      }
+    },
+    abort: () => groups.remove()
+  };
+}
+var lines = (ls) => ls.map((l) => `${l}
+`).join("");
+
+// src/cli/commands/audit-folder.ts
+var POOLED_FROM = 1e3;
+async function pooledAudit(opts) {
+  if (opts.workers === 0) return null;
+  const opened = await openRegistry({ root: opts.root, configFile: opts.configFile, checks: opts.checks });
+  const list = listRecordFiles(opened.root, opened.config.recordDirs);
+  if (list.missingDirs.length > 0) throw missingDirsError(list.missingDirs, opts.root);
+  if (opts.workers === void 0 && list.files.length < POOLED_FROM) return null;
+  return { ...opened, list };
+}
+async function auditFolderPooled(opts, found) {
+  const { config, checks } = found;
+  const folder = readRecordFolder(found.root, found.list);
+  const sink = opts.output === void 0 ? lineSink(opts.out) : fileSink(opts.output);
+  const known = { tool: { name: "stereogate", version: VERSION }, caution: CAUTION };
+  const report = streamedReport(opts.format, sink, known, {
+    text: { color: opts.color, verbose: opts.verbose },
+    checks
+  });
+  const written = async (step) => {
+    try {
+      return await step();
+    } catch (e) {
+      report.abort();
+      if (e instanceof SinkFailed && opts.output !== void 0)
+        throw new InputError(writeFailure(opts.output, e.cause));
+      throw e;
+    }
+  };
+  const run12 = await written(
+    () => runFolderAudit({
+      folder,
+      config,
+      budget: opts.budget,
+      // the workers load the built-in checks: a caller's own checks (tests) run in this thread
+      workers: opts.checks ? 0 : opts.workers,
+      json: opts.format === "json",
+      progress: opts.progress,
+      onRecord: (r) => report.add(r),
+      checks,
+      engine: opts.engine
+    })
+  );
+  const totals = { ...known, summary: run12.summary, ...run12.registry ? { registry: run12.registry } : {} };
+  await written(() => report.finish(totals));
+  return { summary: run12.summary, internalErrors: run12.internalErrors };
+}
+
+// src/cli/commands/audit.ts
 var USAGE = [
   "Usage: stereogate audit [paths…] [--root DIR] [--config FILE] [--format text|json|markdown|sarif]",
   "                        [--output FILE] [--fail-on error|warning|never] [--verbose]",
-  "                        [--record-timeout SECS]",
+  "                        [--record-timeout SECS] [--workers N] [--progress MODE] [--index-cache FILE]",
   "",
-  "  paths…               record files, folders or molfiles to audit (default: every record); the whole",
-  "                       registry is still loaded for the cross-record checks",
+  "  paths…               record files, folders or molfiles to audit (default: every record), reviewed",
+  "                       against the rest of the registry through its key index (see --index-cache)",
   "  --root DIR           registry root, holding stereogate.config.yml and the record folders (default .)",
   "  --config FILE        config file to use instead of stereogate.config.yml at the root",
   "  --format FORMAT      text (default), json, markdown (the pull-request checklist) or sarif (2.1.0)",
   "  --output FILE        write the report to FILE instead of standard output",
-  "  --verbose, -v        text format: every record in full and each passed check with its evidence",
-  "                       (default: records with findings first, one line per record without)",
+  "  --verbose, -v        text format: every record in full, each passed check with its evidence and",
+  "                       each check that does not apply with why (default: records with findings",
+  "                       first, one line per record without)",
   "  --fail-on LEVEL      exit 1 when a finding not accepted by a waiver is at least this severe:",
   "                       error (default), warning, or never",
   "  --record-timeout SECS  per-record time limit (default 20); a record over it, or over 1 GiB of memory,",
   "                       gets a record-time-limit finding and the audit goes on",
+  "  --workers N          worker threads for the audit of every record (no paths); default: all cores when",
+  `                       the registry holds ${POOLED_FROM.toLocaleString("en-US")} record files or more, else this thread; 0: this thread.`,
+  "                       Through the workers the report is written as records come (same report)",
+  "  --progress MODE      through the workers: auto (default: a bar on a terminal, lines in CI), bar, lines",
+  "                       or none, on standard error",
+  "  --index-cache FILE   with paths: keep the key index of the rest of the registry in FILE between runs, so",
+  "                       that a later run reads only the record files whose content changed (default: no",
+  "                       cache; a missing, stale or damaged cache only costs time)",
   "",
   "Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error or a report",
   "file that cannot be written, 3 internal error (the report is still written; records it hit carry an",
@@ -56699,9 +58534,7 @@ function reachesThreshold(result2, failOn) {
   return failOn === "error" ? s.errors > 0 : s.errors + s.warnings > 0;
 }
 function hasInternalErrors(result2) {
-  return result2.records.some(
-    (r) => r.findings.some((f) => f.check === INTERNAL_ERROR_ID || f.messageId === INTERNAL_ERROR_ID)
-  );
+  return result2.records.some((r) => r.findings.some(isInternalError));
 }
 function toRootPaths(paths, root) {
   const rootAbs = resolve5(root);
@@ -56732,7 +58565,10 @@ function makeAuditCommand(deps = {}) {
           output: { type: "string" },
           "fail-on": { type: "string", choices: ["error", "warning", "never"], default: "error" },
           verbose: { type: "boolean", short: "v" },
-          "record-timeout": { type: "string" }
+          "record-timeout": { type: "string" },
+          workers: { type: "string" },
+          progress: { type: "string", choices: ["auto", "bar", "lines", "none"], default: "auto" },
+          "index-cache": { type: "string" }
         },
         { min: 0, max: Infinity, names: "paths" }
       );
@@ -56746,6 +58582,38 @@ function makeAuditCommand(deps = {}) {
       const timeout = values["record-timeout"];
       const seconds = typeof timeout === "string" ? Number(timeout) : RECORD_BUDGET.timeMs / 1e3;
       if (!(seconds > 0)) throw new UsageError("--record-timeout expects a positive number of seconds");
+      const indexCache = values["index-cache"];
+      if (indexCache === "") throw new UsageError("--index-cache needs a file name");
+      const workers = typeof values.workers === "string" ? Number(values.workers) : void 0;
+      if (workers !== void 0 && (!Number.isInteger(workers) || workers < 0))
+        throw new UsageError("--workers expects a whole number (0: this thread)");
+      const budget = { ...RECORD_BUDGET, timeMs: seconds * 1e3 };
+      const common = { root, configFile: values.config, checks: deps.checks };
+      try {
+        const pooled = paths.length === 0 ? await pooledAudit({ ...common, workers }) : null;
+        if (pooled) {
+          const run12 = await auditFolderPooled(
+            {
+              ...common,
+              budget,
+              format,
+              output,
+              verbose: values.verbose === true,
+              color: output === void 0 && shouldColor(process.stdout),
+              workers,
+              progress: values.progress,
+              out: io.out,
+              engine: deps.engine
+            },
+            pooled
+          );
+          if (run12.internalErrors) return EXIT_CRASH;
+          return reachesThreshold(run12, failOn) ? EXIT_FINDINGS : EXIT_OK;
+        }
+      } catch (e) {
+        if (e instanceof ConfigError) throw new UsageError(e.message);
+        throw e;
+      }
       let result2;
       try {
         result2 = await runAudit({
@@ -56754,7 +58622,8 @@ function makeAuditCommand(deps = {}) {
           configFile: values.config,
           checks: deps.checks,
           engine: deps.engine,
-          budget: { ...RECORD_BUDGET, timeMs: seconds * 1e3 }
+          budget,
+          ...indexCache === void 0 ? {} : { indexCache: resolve5(indexCache), log: (l) => io.err(`stereogate: ${l}`) }
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);
@@ -56772,7 +58641,7 @@ function makeAuditCommand(deps = {}) {
       });
       if (output !== void 0) {
         try {
-          writeFileSync2(output, report);
+          writeFileSync3(output, report);
         } catch (e) {
           throw new InputError(writeFailure(output, e));
         }
@@ -56789,9 +58658,12 @@ var auditCommand = makeAuditCommand();
 // src/cli/commands/index.ts
 var commands = [describeCommand, compareCommand, auditCommand, mergeShardsCommand];
 
+// src/cli/main.ts
+init_version();
+
 // src/cli/gc-respawn.ts
 import { spawn } from "node:child_process";
-import { availableParallelism as availableParallelism2 } from "node:os";
+import { availableParallelism as availableParallelism4 } from "node:os";
 var GC_FLAG = "--single-threaded-gc";
 var NO_RESPAWN_ENV = "STEREOGATE_NO_RESPAWN";
 function wantsSingleThreadedGc(workers, cores) {
@@ -56818,7 +58690,7 @@ function respawnArgs(argv, execArgv, script, env, cores) {
 function respawnForBulk(argv) {
   const script = process.argv[1];
   if (!script) return Promise.resolve(null);
-  const args = respawnArgs(argv, process.execArgv, script, process.env, availableParallelism2());
+  const args = respawnArgs(argv, process.execArgv, script, process.env, availableParallelism4());
   if (!args) return Promise.resolve(null);
   return new Promise((resolve6) => {
     const child = spawn(process.execPath, args, {
@@ -56845,9 +58717,9 @@ var nodeIo = {
 `),
   err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}
 `),
-  readFile: (p) => readFileSync2(p, "utf8"),
+  readFile: (p) => readFileSync4(p, "utf8"),
   isFile: (p) => p.length < 4096 && existsSync5(p) && statSync4(p).isFile(),
-  readStdin: () => readFileSync2(0, "utf8")
+  readStdin: () => readFileSync4(0, "utf8")
 };
 function overview() {
   const width = Math.max(...commands.map((c) => c.name.length));

@@ -162,12 +162,12 @@ var require_tunnel = __commonJS({
       function onResponse(res) {
         res.upgrade = true;
       }
-      function onUpgrade(res, socket, head2) {
+      function onUpgrade(res, socket, head) {
         process.nextTick(function() {
-          onConnect(res, socket, head2);
+          onConnect(res, socket, head);
         });
       }
-      function onConnect(res, socket, head2) {
+      function onConnect(res, socket, head) {
         connectReq.removeAllListeners();
         socket.removeAllListeners();
         if (res.statusCode !== 200) {
@@ -182,7 +182,7 @@ var require_tunnel = __commonJS({
           self.removeSocket(placeholder);
           return;
         }
-        if (head2.length > 0) {
+        if (head.length > 0) {
           debug2("got illegal response body from proxy");
           socket.destroy();
           var error2 = new Error("got illegal response body from proxy");
@@ -6082,7 +6082,7 @@ var require_client_h1 = __commonJS({
           util.destroy(this.socket, new HeadersOverflowError());
         }
       }
-      onUpgrade(head2) {
+      onUpgrade(head) {
         const { upgrade, client, socket, headers, statusCode, statusText } = this;
         assert(upgrade);
         assert(client[kSocket] === socket);
@@ -6097,7 +6097,7 @@ var require_client_h1 = __commonJS({
         this.shouldKeepAlive = null;
         this.headers = [];
         this.headersSize = 0;
-        socket.unshift(head2);
+        socket.unshift(head);
         socket[kParser].destroy();
         socket[kParser] = null;
         socket[kClient] = null;
@@ -19162,6 +19162,189 @@ var require_undici = __commonJS({
   }
 });
 
+// src/audit/caution.ts
+var CAUTION;
+var init_caution = __esm({
+  "src/audit/caution.ts"() {
+    "use strict";
+    CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
+  }
+});
+
+// src/registry/files.ts
+import {
+  closeSync,
+  constants as constants3,
+  fstatSync,
+  lstatSync,
+  openSync,
+  readdirSync,
+  readSync,
+  realpathSync,
+  statSync
+} from "node:fs";
+import { isAbsolute, join, relative, resolve, sep } from "node:path";
+function readRegularFile(abs) {
+  const fd = openSync(abs, OPEN_FLAGS);
+  try {
+    const st = fstatSync(fd);
+    if (!st.isFile()) return { ok: false, error: "is not a regular file" };
+    if (st.size > MAX_FILE_BYTES)
+      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
+    let buf = Buffer.allocUnsafe(st.size + 1);
+    let total = 0;
+    for (; ; ) {
+      if (total === buf.length) {
+        if (total > MAX_FILE_BYTES)
+          return {
+            ok: false,
+            error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+          };
+        const bigger = Buffer.allocUnsafe(buf.length * 2);
+        buf.copy(bigger, 0, 0, total);
+        buf = bigger;
+      }
+      const n = readSync(fd, buf, total, buf.length - total, null);
+      if (n === 0) break;
+      total += n;
+    }
+    if (total > MAX_FILE_BYTES)
+      return {
+        ok: false,
+        error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+      };
+    return { ok: true, bytes: buf.subarray(0, total) };
+  } finally {
+    closeSync(fd);
+  }
+}
+function readTextFile(abs) {
+  let bytes;
+  try {
+    const read = readRegularFile(abs);
+    if (!read.ok) return read;
+    bytes = read.bytes;
+  } catch (e) {
+    return { ok: false, error: `cannot be read (${e.code ?? String(e)})` };
+  }
+  if (bytes.includes(0)) return { ok: false, error: "is a binary file, not text" };
+  let text;
+  try {
+    text = UTF8.decode(bytes);
+  } catch {
+    return { ok: false, error: "is not valid UTF-8 text" };
+  }
+  return { ok: true, text: text.startsWith("\uFEFF") ? text.slice(1) : text };
+}
+function relativeTo(root, abs) {
+  if (abs.startsWith(root) && abs[root.length] === sep && !abs.includes(`${sep}.`) && !abs.endsWith(sep)) {
+    const rest = abs.slice(root.length + 1);
+    if (rest !== "" && !rest.includes(`${sep}${sep}`)) return sep === "/" ? rest : rest.split(sep).join("/");
+  }
+  return relative(root, abs).split(sep).join("/");
+}
+function escapes(root, abs) {
+  const rel = relative(root, abs);
+  return rel === ".." || rel.startsWith(`..${sep}`) || isAbsolute(rel);
+}
+function resolveInside(root, fromDir, path) {
+  if (isAbsolute(path) || /^[a-zA-Z]:[\\/]/.test(path) || path.startsWith("\\") || path.startsWith("~")) {
+    return { ok: false, error: `'${path}' is an absolute path; give a path relative to the record file` };
+  }
+  if (path.includes("\0")) return { ok: false, error: "the path contains a NUL character" };
+  const abs = resolve(fromDir, path);
+  if (escapes(root, abs)) return { ok: false, error: `'${path}' leaves the registry folder` };
+  let real;
+  try {
+    real = realpathSync(abs);
+  } catch {
+    return { ok: false, error: `'${path}' does not exist (looked for ${relativeTo(root, abs)})` };
+  }
+  if (escapes(root, real))
+    return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
+  return { ok: true, abs: real, rel: relativeTo(root, abs) };
+}
+function findRecordFiles(root, recordDirs) {
+  const found = /* @__PURE__ */ new Map();
+  const refused2 = [];
+  const missingDirs = [];
+  const visited = /* @__PURE__ */ new Set();
+  const walk = (dir, depth) => {
+    if (depth > 32) return;
+    let real;
+    try {
+      real = realpathSync(dir);
+    } catch {
+      return;
+    }
+    if (visited.has(real) || escapes(root, real)) return;
+    visited.add(real);
+    let dirents;
+    try {
+      dirents = readdirSync(dir, { withFileTypes: true }).sort(
+        (a, b) => a.name < b.name ? -1 : a.name > b.name ? 1 : 0
+      );
+    } catch {
+      return;
+    }
+    for (const dirent of dirents) {
+      const name = dirent.name;
+      if (name.startsWith(".") || name === "node_modules") continue;
+      const abs = join(dir, name);
+      let st = dirent;
+      if (!dirent.isDirectory() && !dirent.isFile() && !dirent.isSymbolicLink()) {
+        try {
+          st = lstatSync(abs);
+        } catch {
+          continue;
+        }
+      }
+      if (st.isSymbolicLink()) {
+        let target;
+        try {
+          target = realpathSync(abs);
+        } catch {
+          if (RECORD_EXTENSIONS.test(name))
+            refused2.push({ file: relativeTo(root, abs), message: "is a broken link" });
+          continue;
+        }
+        if (escapes(root, target)) {
+          if (RECORD_EXTENSIONS.test(name)) {
+            refused2.push({
+              file: relativeTo(root, abs),
+              message: "is a link to a place outside the registry folder"
+            });
+          }
+          continue;
+        }
+        st = statSync(abs);
+      }
+      if (st.isDirectory()) walk(abs, depth + 1);
+      else if (st.isFile() && RECORD_EXTENSIONS.test(name)) found.set(relativeTo(root, abs), abs);
+    }
+  };
+  for (const d of recordDirs) {
+    const r = resolveInside(root, root, d);
+    if (!r.ok) {
+      missingDirs.push(d);
+      continue;
+    }
+    walk(r.abs === root ? root : resolve(root, d), 0);
+  }
+  const files = [...found.entries()].sort(([a], [b]) => a < b ? -1 : a > b ? 1 : 0).map(([, abs]) => abs);
+  return { files, refused: refused2, missingDirs };
+}
+var MAX_FILE_BYTES, RECORD_EXTENSIONS, UTF8, OPEN_FLAGS;
+var init_files = __esm({
+  "src/registry/files.ts"() {
+    "use strict";
+    MAX_FILE_BYTES = 8 * 1024 * 1024;
+    RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
+    UTF8 = new TextDecoder("utf-8", { fatal: true });
+    OPEN_FLAGS = constants3.O_RDONLY | (constants3.O_NONBLOCK ?? 0);
+  }
+});
+
 // node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
   "node_modules/yaml/dist/nodes/identity.js"(exports) {
@@ -24482,10 +24665,10 @@ var require_cst_scalar = __commonJS({
         case "|":
         case ">": {
           const he = source.indexOf("\n");
-          const head2 = source.substring(0, he);
+          const head = source.substring(0, he);
           const body = source.substring(he + 1) + "\n";
           const props = [
-            { type: "block-scalar-header", offset, indent, source: head2 }
+            { type: "block-scalar-header", offset, indent, source: head }
           ];
           if (!addEndtoBlockProps(props, end))
             props.push({ type: "newline", offset: -1, indent, source: "\n" });
@@ -24545,19 +24728,19 @@ var require_cst_scalar = __commonJS({
     }
     function setBlockScalarValue(token, source) {
       const he = source.indexOf("\n");
-      const head2 = source.substring(0, he);
+      const head = source.substring(0, he);
       const body = source.substring(he + 1) + "\n";
       if (token.type === "block-scalar") {
         const header = token.props[0];
         if (header.type !== "block-scalar-header")
           throw new Error("Invalid block scalar header");
-        header.source = head2;
+        header.source = head;
         token.source = body;
       } else {
         const { offset } = token;
         const indent = "indent" in token ? token.indent : -1;
         const props = [
-          { type: "block-scalar-header", offset, indent, source: head2 }
+          { type: "block-scalar-header", offset, indent, source: head }
         ];
         if (!addEndtoBlockProps(props, "end" in token ? token.end : void 0))
           props.push({ type: "newline", offset: -1, indent, source: "\n" });
@@ -26489,6 +26672,279 @@ var require_dist = __commonJS({
     exports.stringify = publicApi.stringify;
     exports.visit = visit2.visit;
     exports.visitAsync = visit2.visitAsync;
+  }
+});
+
+// src/registry/positions.ts
+function lineOf(positions2, path) {
+  if (path === null) return null;
+  let p = path;
+  for (; ; ) {
+    const pos = positions2.get(p);
+    if (pos) return pos.line;
+    if (p === "") return null;
+    const cut = p.lastIndexOf(".");
+    p = cut < 0 ? "" : p.slice(0, cut);
+  }
+}
+function keyText(key4) {
+  if ((0, import_yaml.isScalar)(key4)) return String(key4.value);
+  return String(key4);
+}
+function positionsOf(doc, counter) {
+  const positions2 = new PositionMap();
+  const put = (path, node) => {
+    const start = node?.range?.[0];
+    if (start === void 0) return;
+    const { line, col } = counter.linePos(start);
+    positions2.set(path, { line, column: col });
+  };
+  const walk = (node, path, depth) => {
+    if (depth > 64) return;
+    if ((0, import_yaml.isMap)(node)) {
+      for (const pair of node.items) {
+        const childPath = path === "" ? keyText(pair.key) : `${path}.${keyText(pair.key)}`;
+        put(childPath, pair.key ?? pair.value);
+        walk(pair.value, childPath, depth + 1);
+      }
+    } else if ((0, import_yaml.isSeq)(node)) {
+      node.items.forEach((item, i) => {
+        const childPath = path === "" ? String(i) : `${path}.${i}`;
+        put(childPath, item);
+        walk(item, childPath, depth + 1);
+      });
+    }
+  };
+  put("", doc.contents);
+  if (positions2.get("") === void 0) positions2.set("", { line: 1, column: 1 });
+  walk(doc.contents, "", 0);
+  return positions2;
+}
+var import_yaml, PositionMap, NO_POSITIONS;
+var init_positions = __esm({
+  "src/registry/positions.ts"() {
+    "use strict";
+    import_yaml = __toESM(require_dist(), 1);
+    PositionMap = class {
+      map = /* @__PURE__ */ new Map();
+      set(path, pos) {
+        if (!this.map.has(path)) this.map.set(path, pos);
+      }
+      get(path) {
+        return this.map.get(path);
+      }
+      /** The line of `path`, else of its nearest ancestor that exists (a missing field points at its parent). */
+      lineOf(path) {
+        return lineOf(this, path);
+      }
+      get size() {
+        return this.map.size;
+      }
+      /** Every known path with its position, in document order. */
+      entries() {
+        return [...this.map];
+      }
+    };
+    NO_POSITIONS = { get: () => void 0 };
+  }
+});
+
+// src/registry/quick-yaml.ts
+function fail() {
+  throw new NotPlain();
+}
+function quoted(text, start) {
+  const q = text[start];
+  let out = "";
+  let i = start + 1;
+  for (; ; ) {
+    if (i >= text.length) fail();
+    const ch = text[i];
+    if (ch === q) {
+      if (q === '"' || text[i + 1] !== "'") break;
+      out += "'";
+      i += 2;
+    } else if (ch === "\\" && q === '"') {
+      const next = text[i + 1];
+      if (next !== "\\" && next !== '"') fail();
+      out += next;
+      i += 2;
+    } else {
+      out += ch;
+      i++;
+    }
+  }
+  return { value: out, end: i + 1 };
+}
+function resolvePlain(plain) {
+  if (plain === "" || BAD_START.test(plain) || plain.includes(": ") || plain.endsWith(":")) fail();
+  if (NULL.test(plain)) return null;
+  if (TRUE.test(plain)) return true;
+  if (FALSE.test(plain)) return false;
+  if (INT.test(plain)) return parseInt(plain, 10);
+  if (FLOAT.test(plain) || FLOAT_EXP.test(plain)) return parseFloat(plain);
+  if (OTHER_NUMBER.test(plain)) fail();
+  return plain;
+}
+function scalar(text) {
+  if (text[0] === '"' || text[0] === "'") {
+    const q = quoted(text, 0);
+    trailing(text.slice(q.end));
+    return q.value;
+  }
+  const hash = text.indexOf(" #");
+  return resolvePlain((hash < 0 ? text : text.slice(0, hash)).replace(/ +$/, ""));
+}
+function flowList(text, at2) {
+  const out = [];
+  let i = 1;
+  const spaces = () => {
+    while (text[i] === " ") i++;
+  };
+  spaces();
+  if (text[i] === "]") {
+    trailing(text.slice(i + 1));
+    return out;
+  }
+  for (; ; ) {
+    spaces();
+    at2(out.length, i);
+    const c = text[i];
+    if (c === '"' || c === "'") {
+      const q = quoted(text, i);
+      out.push(q.value);
+      i = q.end;
+    } else {
+      let j = i;
+      while (j < text.length && !",[]{}".includes(text[j])) j++;
+      const plain = text.slice(i, j).replace(/ +$/, "");
+      if (plain.includes(":") || plain.includes(" #")) fail();
+      out.push(resolvePlain(plain));
+      i = j;
+    }
+    spaces();
+    if (text[i] === "]") break;
+    if (text[i] !== ",") fail();
+    i++;
+    spaces();
+    if (text[i] === "]") fail();
+  }
+  trailing(text.slice(i + 1));
+  return out;
+}
+function trailing(rest) {
+  const t = rest.replace(/^ +/, "");
+  if (t !== "" && !(t.startsWith("#") && t.length < rest.length)) fail();
+}
+function contentLines(text) {
+  if (text.includes("	") || text.includes("\r") || CONTROL.test(text)) return null;
+  const lines = [];
+  const raw2 = text.split("\n");
+  for (let k = 0; k < raw2.length; k++) {
+    const s = raw2[k];
+    let indent = 0;
+    while (s.charCodeAt(indent) === 32) indent++;
+    if (indent === s.length || s[indent] === "#") continue;
+    if (indent === 0 && (s.startsWith("---") || s.startsWith("...") || s.startsWith("%"))) return null;
+    lines.push({ no: k + 1, indent, text: s.slice(indent) });
+  }
+  return lines;
+}
+function quickParse(text) {
+  const lines = contentLines(text);
+  if (lines === null || lines.length === 0 || lines[0].indent !== 0) return null;
+  const positions2 = new PositionMap();
+  let at2 = 0;
+  const put = (path, line, column) => positions2.set(path, { line: line.no, column });
+  const mapping = (indent, path, firstText) => {
+    const out = {};
+    const seen = /* @__PURE__ */ new Set();
+    let first = firstText !== void 0;
+    while (at2 < lines.length) {
+      const line = lines[at2];
+      const body = first ? firstText : line.text;
+      if (!first) {
+        if (line.indent < indent) break;
+        if (line.indent > indent) fail();
+      }
+      first = false;
+      const m = KEY.exec(body);
+      if (!m) fail();
+      const key4 = m[0];
+      if (NOT_STRING_KEY.test(key4) || seen.has(key4) || key4.length > 1e3) fail();
+      seen.add(key4);
+      const childPath = path === "" ? key4 : `${path}.${key4}`;
+      put(childPath, line, indent + 1);
+      at2++;
+      const rest = body.slice(key4.length + 1).replace(/^ +/, "");
+      if (rest.startsWith("[")) {
+        const restColumn = indent + body.length - rest.length;
+        out[key4] = flowList(rest, (i, offset) => put(`${childPath}.${i}`, line, restColumn + offset + 1));
+        continue;
+      }
+      if (rest !== "" && !rest.startsWith("#")) {
+        out[key4] = scalar(rest);
+        continue;
+      }
+      const next = lines[at2];
+      if (next && next.indent > indent) out[key4] = block(next.indent, childPath);
+      else if (next && next.indent === indent && isItem(next.text)) out[key4] = list(indent, childPath);
+      else out[key4] = null;
+    }
+    return out;
+  };
+  const isItem = (t) => t === "-" || t.startsWith("- ");
+  const list = (indent, path) => {
+    const out = [];
+    while (at2 < lines.length) {
+      const line = lines[at2];
+      if (line.indent < indent) break;
+      if (line.indent > indent) fail();
+      if (!isItem(line.text)) break;
+      const itemPath = path === "" ? String(out.length) : `${path}.${out.length}`;
+      let gap = 1;
+      while (line.text.charCodeAt(gap) === 32) gap++;
+      const body = line.text.slice(gap);
+      if (body === "" || body.startsWith("#") || isItem(body)) fail();
+      const column = indent + gap;
+      put(itemPath, line, column + 1);
+      if (KEY.test(body)) out.push(mapping(column, itemPath, body));
+      else {
+        out.push(scalar(body));
+        at2++;
+      }
+    }
+    return out;
+  };
+  const block = (indent, path) => isItem(lines[at2].text) ? list(indent, path) : mapping(indent, path);
+  try {
+    put("", lines[0], 1);
+    const value = mapping(0, "");
+    if (at2 !== lines.length) return null;
+    return { value, positions: positions2 };
+  } catch (e) {
+    if (e instanceof NotPlain) return null;
+    throw e;
+  }
+}
+var NotPlain, KEY, NOT_STRING_KEY, NULL, TRUE, FALSE, INT, FLOAT, FLOAT_EXP, OTHER_NUMBER, BAD_START, CONTROL;
+var init_quick_yaml = __esm({
+  "src/registry/quick-yaml.ts"() {
+    "use strict";
+    init_positions();
+    NotPlain = class extends Error {
+    };
+    KEY = /^[A-Za-z][A-Za-z0-9_-]*(?=:(?: |$))/;
+    NOT_STRING_KEY = /^(?:[Nn]ull|NULL|[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
+    NULL = /^(?:~|[Nn]ull|NULL)$/;
+    TRUE = /^(?:[Tt]rue|TRUE)$/;
+    FALSE = /^(?:[Ff]alse|FALSE)$/;
+    INT = /^[-+]?[0-9]+$/;
+    FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
+    FLOAT_EXP = /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/;
+    OTHER_NUMBER = /^(?:0o|0x|[-+]?\.(?:inf|Inf|INF)$|\.(?:nan|NaN|NAN)$)/;
+    BAD_START = /^(?:[-?:](?![0-9.])|[,[\]{}#&*!|>'"%@`])/;
+    CONTROL = /[\x00-\x08\x0b-\x1f\x7f-\x9f\u2028\u2029\ufeff\ufffe\uffff]/;
   }
 });
 
@@ -29649,9 +30105,9 @@ var require_utils2 = __commonJS({
         }
       }
       if (bestLength < 2) return hextets.join(":");
-      const head2 = hextets.slice(0, bestStart).join(":");
+      const head = hextets.slice(0, bestStart).join(":");
       const tail = hextets.slice(bestStart + bestLength).join(":");
-      return head2 + "::" + tail;
+      return head + "::" + tail;
     }
     function normalizeIPv6Address(input) {
       const compression = input.indexOf("::");
@@ -33397,6 +33853,235 @@ var require_ajv = __commonJS({
   }
 });
 
+// schema/record.schema.json
+var record_schema_default;
+var init_record_schema = __esm({
+  "schema/record.schema.json"() {
+    record_schema_default = {
+      $schema: "http://json-schema.org/draft-07/schema#",
+      $id: "https://stereogate.invalid/schema/record.schema.json",
+      title: "stereogate compound record",
+      description: "One compound of a registry: its structure and the stereochemical claim made about it. YAML or JSON, one record per file.",
+      type: "object",
+      required: ["id", "structure", "stereo"],
+      additionalProperties: false,
+      properties: {
+        id: {
+          description: "Registry number, unique in the registry, e.g. LX-00042.",
+          type: "string",
+          minLength: 1,
+          maxLength: 200,
+          pattern: "^\\S(.*\\S)?$"
+        },
+        name: { description: "Free-text name.", type: "string" },
+        structure: { $ref: "#/definitions/structureRef" },
+        stereo: {
+          type: "object",
+          required: ["form"],
+          additionalProperties: false,
+          properties: {
+            form: {
+              description: "The stereochemical form claimed for the registered substance.",
+              enum: [
+                "achiral",
+                "meso",
+                "single-enantiomer",
+                "enantioenriched",
+                "racemate",
+                "single-diastereomer",
+                "diastereomer-mixture",
+                "unknown"
+              ]
+            },
+            descriptors: {
+              description: "IUPAC stereodescriptors, e.g. (2R,3S) or rac-(1R,2S).",
+              type: "string"
+            },
+            ee: {
+              description: "Enantiomeric excess in percent.",
+              type: "number",
+              minimum: 0,
+              maximum: 100
+            },
+            ratio: {
+              description: "Component ratio in the order of components, e.g. 70:30.",
+              type: "string"
+            },
+            components: {
+              description: "The stereoisomers a mixture consists of (at most 50).",
+              type: "array",
+              maxItems: 50,
+              items: { $ref: "#/definitions/component" }
+            },
+            rotation: {
+              description: "Specific rotation as measured.",
+              type: "object",
+              required: ["value"],
+              additionalProperties: false,
+              properties: {
+                value: { description: "Degrees; the sign matters.", type: "number" },
+                wavelength_nm: { type: "number", exclusiveMinimum: 0 },
+                temperature_c: { type: "number", minimum: -273.15 },
+                solvent: { type: "string" },
+                concentration: { description: "g/100 mL.", type: "number", exclusiveMinimum: 0 }
+              }
+            },
+            evidence: {
+              description: "Analytical evidence for the claim, free text per item.",
+              type: "array",
+              items: { type: "string" }
+            }
+          }
+        },
+        origin: {
+          description: "How the compound was made: the inputs it came from and what, if anything, made the outcome stereoselective or changed the ee.",
+          type: "object",
+          required: ["from"],
+          additionalProperties: false,
+          properties: {
+            from: {
+              description: "Inputs: registered ids (e.g. LX-00012) or, for inputs not registered, SMILES.",
+              type: "array",
+              minItems: 1,
+              maxItems: 20,
+              items: { type: "string", minLength: 1, maxLength: 2e3 }
+            },
+            control: {
+              description: "What made the outcome stereoselective or changed the ee; 'none' when nothing chiral was present. Not given: unknown.",
+              enum: [
+                "none",
+                "chiral-catalyst",
+                "chiral-reagent",
+                "chiral-auxiliary",
+                "biocatalyst",
+                "resolution",
+                "chiral-separation",
+                "enrichment",
+                "unknown"
+              ]
+            }
+          }
+        },
+        waivers: {
+          description: "Findings the responsible chemist has accepted: each waiver names a check, and may narrow it to one message and/or one other record.",
+          type: "array",
+          items: {
+            type: "object",
+            required: ["check"],
+            additionalProperties: false,
+            properties: {
+              check: {
+                description: "Id of the check whose findings are accepted. Alone, the waiver accepts every finding of that check on this record.",
+                type: "string",
+                minLength: 1
+              },
+              message_id: {
+                description: "Accept only the findings with this message id of the check (e.g. enantiomer-registered).",
+                type: "string",
+                minLength: 1
+              },
+              other_record: {
+                description: "Accept only the findings about this other record: its id (e.g. LX-00123), or its file when it has no id.",
+                type: "string",
+                minLength: 1
+              },
+              reason: { type: "string" },
+              approved_by: { type: "string" }
+            }
+          }
+        }
+      },
+      definitions: {
+        structureRef: {
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            smiles: { type: "string", minLength: 1 },
+            molfile: {
+              description: "Path relative to the record file, inside the registry.",
+              type: "string",
+              minLength: 1
+            }
+          },
+          oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
+        },
+        component: {
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            smiles: { type: "string", minLength: 1 },
+            molfile: { type: "string", minLength: 1 },
+            descriptors: { type: "string" }
+          },
+          oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
+        }
+      }
+    };
+  }
+});
+
+// schema/config.schema.json
+var config_schema_default;
+var init_config_schema = __esm({
+  "schema/config.schema.json"() {
+    config_schema_default = {
+      $schema: "http://json-schema.org/draft-07/schema#",
+      $id: "https://stereogate.invalid/schema/config.schema.json",
+      title: "stereogate configuration (stereogate.config.yml or stereogate.config.json at the registry root)",
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        recordDirs: {
+          description: "Folders holding record files, relative to the registry root. Default: [compounds].",
+          type: "array",
+          minItems: 1,
+          items: { type: "string", minLength: 1 }
+        },
+        severities: {
+          description: "Severity per check id (sets the level of that check's failures, raised or lowered; note-level messages stay notes), or per check-id/message-id (that message only, notes included); off skips the check or drops the message.",
+          type: "object",
+          additionalProperties: { enum: ["error", "warning", "note", "off"] }
+        },
+        ratioSumTolerance: {
+          description: "Parts of a ratio must sum to 100 within this many percentage points.",
+          type: "number",
+          minimum: 0,
+          maximum: 100
+        },
+        racemateRatioTolerance: {
+          description: "A racemate's enantiomer ratio may deviate from 50:50 by this many percentage points.",
+          type: "number",
+          minimum: 0,
+          maximum: 50
+        },
+        eeTolerance: {
+          description: "Stated ee and ee computed from a ratio may differ by this many percentage points.",
+          type: "number",
+          minimum: 0,
+          maximum: 100
+        },
+        singleEnantiomerMinEe: {
+          description: "A single-enantiomer claim needs at least this ee (percent).",
+          type: "number",
+          minimum: 0,
+          maximum: 100
+        },
+        axisOrthoMin: {
+          description: "A biaryl bond with at least this many ortho substituents (both rings; a fused ring counts twice) is a potential stereogenic axis when the structure does not draw one. Rule of thumb (common practice, no source). Default 3.",
+          type: "integer",
+          minimum: 0,
+          maximum: 8
+        },
+        zeroRotationTolerance: {
+          description: "A specific rotation whose magnitude is at or below this (degrees) counts as zero.",
+          type: "number",
+          minimum: 0
+        }
+      }
+    };
+  }
+});
+
 // src/registry/closest.ts
 function editDistance(a, b) {
   if (a === b) return 0;
@@ -33430,6 +34115,1229 @@ function closestWord(word, candidates) {
 var init_closest = __esm({
   "src/registry/closest.ts"() {
     "use strict";
+  }
+});
+
+// src/registry/form-words.ts
+function formSynonym(word) {
+  const key4 = word.trim().toLowerCase().replace(/[\s_]+/g, "-");
+  return SYNONYMS[key4] ?? null;
+}
+var SYNONYMS;
+var init_form_words = __esm({
+  "src/registry/form-words.ts"() {
+    "use strict";
+    SYNONYMS = {
+      enantiopure: "single-enantiomer",
+      "enantiomerically-pure": "single-enantiomer",
+      "optically-pure": "single-enantiomer",
+      homochiral: "single-enantiomer",
+      "single-isomer": "single-enantiomer",
+      racemic: "racemate",
+      rac: "racemate",
+      "racemic-mixture": "racemate",
+      dl: "racemate",
+      "±": "racemate",
+      scalemic: "enantioenriched",
+      enriched: "enantioenriched",
+      "enantiomerically-enriched": "enantioenriched",
+      "partially-resolved": "enantioenriched",
+      diastereopure: "single-diastereomer",
+      "diastereomerically-pure": "single-diastereomer",
+      "diastereomeric-mixture": "diastereomer-mixture",
+      "mixture-of-diastereomers": "diastereomer-mixture",
+      "epimeric-mixture": "diastereomer-mixture",
+      "not-chiral": "achiral",
+      undefined: "unknown",
+      unspecified: "unknown",
+      "not-determined": "unknown"
+    };
+  }
+});
+
+// src/registry/schema.ts
+function validateRecordShape(value) {
+  recordValidator ??= ajv.compile(record_schema_default);
+  return recordValidator(value) ? [] : explain(recordValidator.errors ?? [], value, "record");
+}
+function validateConfigShape(value) {
+  configValidator ??= ajv.compile(config_schema_default);
+  return configValidator(value) ? [] : explain(configValidator.errors ?? [], value, "config file");
+}
+function pointerToPath(pointer) {
+  if (pointer === "") return "";
+  return pointer.slice(1).split("/").map((s) => s.replace(/~1/g, "/").replace(/~0/g, "~")).join(".");
+}
+function join2(path, key4) {
+  return path === "" ? key4 : `${path}.${key4}`;
+}
+function at(value, path) {
+  if (path === "") return value;
+  let cur = value;
+  for (const part of path.split(".")) {
+    if (cur === null || typeof cur !== "object") return void 0;
+    cur = cur[part];
+  }
+  return cur;
+}
+function kindOf(v) {
+  if (v === null) return "null";
+  if (Array.isArray(v)) return "a list";
+  if (typeof v === "object") return "a mapping";
+  if (typeof v === "string") return `the text ${quote(v)}`;
+  return `${typeof v} ${safeJson(v)}`;
+}
+function quote(v) {
+  const s = typeof v === "string" ? v : safeJson(v);
+  const short = s.length > 60 ? `${s.slice(0, 57)}...` : s;
+  return `'${short}'`;
+}
+function safeJson(v) {
+  try {
+    return JSON.stringify(v) ?? String(v);
+  } catch {
+    return Object.prototype.toString.call(v);
+  }
+}
+function allowedProperties(schemaNode) {
+  const props = schemaNode?.properties;
+  return props ? Object.keys(props) : [];
+}
+function explainOne(e, value, what) {
+  const path = pointerToPath(e.instancePath);
+  const label = path === "" ? `the ${what}` : path;
+  const got2 = at(value, path);
+  switch (e.keyword) {
+    case "required": {
+      const missing = String(e.params.missingProperty);
+      return {
+        path: join2(path, missing),
+        message: `${join2(path, missing)}: this field is required but missing`
+      };
+    }
+    case "additionalProperties": {
+      const extra = String(e.params.additionalProperty);
+      const allowed = allowedProperties(e.parentSchema);
+      const guess = closestWord(extra, allowed);
+      const hint = guess ? `; did you mean '${guess}'?` : allowed.length ? ` (allowed: ${allowed.join(", ")})` : "";
+      return {
+        path: join2(path, extra),
+        message: `${join2(path, extra)}: '${extra}' is not a field of ${path === "" ? `a ${what}` : path}${hint}`
+      };
+    }
+    case "enum": {
+      const allowed = (e.params.allowedValues ?? []).map(String);
+      const synonym = typeof got2 === "string" ? formSynonym(got2) : null;
+      const guess = synonym !== null && allowed.includes(synonym) ? synonym : typeof got2 === "string" ? closestWord(got2, allowed) : null;
+      const hint = guess ? `; did you mean '${guess}'?` : "";
+      return { path, message: `${label}: ${quote(got2)} is not one of ${allowed.join(", ")}${hint}` };
+    }
+    case "type": {
+      const want = String(e.params.type).split(",").map((t) => TYPE_WORDS[t] ?? t).join(" or ");
+      const props = allowedProperties(e.parentSchema);
+      const tip = want === "text" && (typeof got2 === "number" || typeof got2 === "boolean") ? " (put it in quotes)" : want === "a mapping of fields" && props.includes("smiles") && props.includes("molfile") ? " (write it as smiles: … or molfile: … on the next line, indented)" : "";
+      return { path, message: `${label}: must be ${want}, found ${kindOf(got2)}${tip}` };
+    }
+    case "minimum":
+    case "maximum":
+    case "exclusiveMinimum":
+    case "exclusiveMaximum": {
+      const limit = e.params.limit;
+      const words = {
+        minimum: "at least",
+        maximum: "at most",
+        exclusiveMinimum: "more than",
+        exclusiveMaximum: "less than"
+      };
+      return {
+        path,
+        message: `${label}: must be ${words[e.keyword]} ${limit}, found ${typeof got2 === "number" ? got2 : kindOf(got2)}`
+      };
+    }
+    case "minLength":
+      return { path, message: `${label}: must not be empty` };
+    case "maxLength":
+      return {
+        path,
+        message: `${label}: is too long (at most ${e.params.limit} characters)`
+      };
+    case "pattern":
+      return { path, message: `${label}: ${quote(got2)} must not start or end with spaces` };
+    case "maxItems": {
+      const n = Array.isArray(got2) ? got2.length : 0;
+      const limit = e.params.limit;
+      const advice = /components$/.test(path) ? "the record is not audited (split it into several records)" : "shorten the list";
+      return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
+    }
+    case "minItems":
+      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
+    case "oneOf": {
+      if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
+        return {
+          path,
+          message: `${label}: must be a mapping with smiles or molfile (e.g. smiles: CCO), found ${kindOf(got2)}`
+        };
+      }
+      const obj = got2;
+      const both = "smiles" in obj && "molfile" in obj;
+      return {
+        path,
+        message: `${label}: give exactly one of smiles or molfile (found ${both ? "both" : "neither"})`
+      };
+    }
+    default:
+      return { path, message: `${label}: ${e.message ?? "is not valid"}` };
+  }
+}
+function explain(errors, value, what) {
+  const oneOfPaths = errors.filter((e) => e.keyword === "oneOf").map((e) => e.schemaPath);
+  const wrongType = new Set(errors.filter((e) => e.keyword === "type").map((e) => e.instancePath));
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  for (const e of errors) {
+    if (oneOfPaths.some((p2) => e.schemaPath !== p2 && e.schemaPath.startsWith(`${p2}/`))) continue;
+    if (e.keyword === "oneOf" && wrongType.has(e.instancePath)) continue;
+    const p = explainOne(e, value, what);
+    if (!p || seen.has(p.message)) continue;
+    seen.add(p.message);
+    out.push({ ...p, code: PROBLEM_CODES[e.keyword] ?? "schema" });
+  }
+  return out;
+}
+var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, configValidator, TYPE_WORDS;
+var init_schema = __esm({
+  "src/registry/schema.ts"() {
+    "use strict";
+    import_ajv = __toESM(require_ajv(), 1);
+    init_record_schema();
+    init_config_schema();
+    init_closest();
+    init_form_words();
+    PROBLEM_CODES = {
+      required: "missing-field",
+      additionalProperties: "unknown-field",
+      enum: "not-allowed-value",
+      type: "wrong-type",
+      minimum: "out-of-range",
+      maximum: "out-of-range",
+      exclusiveMinimum: "out-of-range",
+      exclusiveMaximum: "out-of-range",
+      minLength: "empty-value",
+      maxLength: "too-long",
+      pattern: "spaces-around",
+      minItems: "too-few-items",
+      maxItems: "too-many-items",
+      oneOf: "structure-choice"
+    };
+    AJV_OPTIONS = {
+      allErrors: true,
+      strict: true,
+      strictRequired: false,
+      allowUnionTypes: true,
+      verbose: true
+    };
+    ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
+    recordValidator = null;
+    configValidator = null;
+    TYPE_WORDS = {
+      string: "text",
+      number: "a number",
+      integer: "a whole number",
+      object: "a mapping of fields",
+      array: "a list",
+      boolean: "true or false"
+    };
+  }
+});
+
+// src/registry/parse.ts
+function parseDocumentText(raw2) {
+  const text = raw2.includes("\r") ? raw2.replace(/\r\n?/g, "\n") : raw2;
+  const quick = quickParse(text);
+  if (quick) return { value: quick.value, positions: quick.positions, problems: [] };
+  return parseFullText(text);
+}
+function parseFullText(text) {
+  const counter = new import_yaml2.LineCounter();
+  const doc = (0, import_yaml2.parseDocument)(text, {
+    lineCounter: counter,
+    prettyErrors: true,
+    uniqueKeys: true,
+    version: "1.2"
+  });
+  const positions2 = positionsOf(doc, counter);
+  const problems = [];
+  for (const err2 of doc.errors) {
+    const line = err2.linePos?.[0]?.line ?? counter.linePos(err2.pos[0]).line;
+    const first = err2.message.split("\n")[0] ?? err2.message;
+    problems.push({
+      path: "",
+      line,
+      code: "yaml-syntax",
+      message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, "")}`
+    });
+  }
+  problems.push(...tagProblems(doc, counter));
+  if (problems.length > 0) return { value: null, positions: positions2, problems };
+  let value;
+  try {
+    value = doc.toJS({ maxAliasCount: 50 });
+  } catch (e) {
+    return {
+      value: null,
+      positions: positions2,
+      problems: [
+        { path: "", line: 1, code: "yaml-syntax", message: `cannot be read: ${e.message}` }
+      ]
+    };
+  }
+  return { value, positions: positions2, problems };
+}
+function tagProblems(doc, counter) {
+  const out = [];
+  const lineAt = (node) => counter.linePos(node?.range?.[0] ?? 0).line;
+  for (const w of doc.warnings) {
+    if (w.code !== "TAG_RESOLVE_FAILED" || !w.message.includes("tag:yaml.org,2002:")) continue;
+    const line = w.linePos?.[0]?.line ?? counter.linePos(w.pos[0]).line;
+    const first = (w.message.split("\n")[0] ?? w.message).replace("tag:yaml.org,2002:", "!!").replace(/ at line \d+, column \d+:?$/, "");
+    out.push({ path: "", line, code: "unknown-tag", message: `not plain YAML/JSON: ${first}` });
+  }
+  (0, import_yaml2.visit)(doc, {
+    Node(key4, node, path) {
+      const tag = node.tag;
+      if (tag !== void 0 && !PLAIN_TAGS.has(tag)) {
+        const parent = path[path.length - 1];
+        const at2 = key4 === "value" && (0, import_yaml2.isPair)(parent) && (0, import_yaml2.isNode)(parent.key) ? parent.key : node;
+        out.push({
+          path: "",
+          line: lineAt(at2),
+          code: "unknown-tag",
+          message: `the YAML tag ${tag.replace("tag:yaml.org,2002:", "!!")} is not allowed in a record (plain YAML/JSON values only)`
+        });
+      }
+    },
+    Pair(_key, pair) {
+      if (pair.key !== null && !(0, import_yaml2.isScalar)(pair.key)) {
+        out.push({
+          path: "",
+          line: lineAt(pair.key),
+          code: "yaml-syntax",
+          message: "not valid here: a field name must be a plain word, not a list or mapping"
+        });
+      }
+    }
+  });
+  return out;
+}
+function parseRecordText(text) {
+  const parsed = parseDocumentText(text);
+  const { value, positions: positions2 } = parsed;
+  if (parsed.problems.length > 0)
+    return { value, record: null, id: null, positions: positions2, problems: parsed.problems };
+  if (value === null || value === void 0) {
+    return {
+      value,
+      record: null,
+      id: null,
+      positions: positions2,
+      problems: [{ path: "", line: 1, code: "empty-file", message: "the file is empty" }]
+    };
+  }
+  const id = typeof value === "object" && !Array.isArray(value) && typeof value.id === "string" ? value.id.trim() || null : null;
+  const shape = validateRecordShape(value);
+  const problems = shape.map((p) => ({
+    path: p.path,
+    message: p.message,
+    line: lineOf(positions2, p.path),
+    code: p.code
+  }));
+  problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0));
+  return { value, record: problems.length === 0 ? value : null, id, positions: positions2, problems };
+}
+var import_yaml2, PLAIN_TAGS;
+var init_parse = __esm({
+  "src/registry/parse.ts"() {
+    "use strict";
+    import_yaml2 = __toESM(require_dist(), 1);
+    init_positions();
+    init_quick_yaml();
+    init_schema();
+    PLAIN_TAGS = new Set(
+      ["str", "int", "float", "bool", "null", "map", "seq"].map((t) => `tag:yaml.org,2002:${t}`)
+    );
+  }
+});
+
+// src/audit/config.ts
+import { existsSync as existsSync2 } from "node:fs";
+import { isAbsolute as isAbsolute2, join as join3, resolve as resolve2 } from "node:path";
+function loadConfig(root, configFile, overrides) {
+  let file = null;
+  if (configFile !== void 0) {
+    file = isAbsolute2(configFile) ? configFile : resolve2(configFile);
+    if (!existsSync2(file)) throw new ConfigError(`config file ${configFile} does not exist`);
+  } else {
+    const found = CONFIG_FILE_NAMES.map((n) => join3(root, n)).find((p) => existsSync2(p));
+    file = found ?? null;
+  }
+  const fromFile = file === null ? {} : readConfigFile(file, configFile ?? file);
+  const config = {
+    ...DEFAULT_CONFIG,
+    recordDirs: [...DEFAULT_CONFIG.recordDirs],
+    ...fromFile,
+    ...overrides ?? {},
+    severities: {
+      ...DEFAULT_CONFIG.severities,
+      ...fromFile.severities ?? {},
+      ...overrides?.severities ?? {}
+    }
+  };
+  return { config, file };
+}
+function readConfigFile(abs, shown) {
+  const read = readTextFile(abs);
+  if (!read.ok) throw new ConfigError(`config file ${shown} ${read.error}`);
+  const parsed = parseDocumentText(read.text);
+  const issues = parsed.problems.map((p) => `${shown} line ${p.line}: ${p.message}`);
+  if (issues.length === 0) {
+    if (parsed.value === null || parsed.value === void 0) return {};
+    for (const p of validateConfigShape(parsed.value)) {
+      const line = lineOf(parsed.positions, p.path);
+      issues.push(`${shown}${line === null ? "" : ` line ${line}`}: ${p.message}`);
+    }
+  }
+  if (issues.length > 0) throw new ConfigError(`the config file is not valid:
+  ${issues.join("\n  ")}`);
+  return parsed.value;
+}
+function checkSeverityIds(config, knownIds, suggest, messagesOf) {
+  const unknown = [];
+  for (const key4 of Object.keys(config.severities)) {
+    const cut = key4.indexOf("/");
+    const id = cut < 0 ? key4 : key4.slice(0, cut);
+    if (!knownIds.includes(id)) {
+      const guess = suggest(id);
+      unknown.push(guess ? `'${key4}' (did you mean '${guess}'?)` : `'${key4}'`);
+      continue;
+    }
+    if (cut < 0) continue;
+    const message2 = key4.slice(cut + 1);
+    const known = messagesOf?.(id);
+    if (known !== void 0 && !known.includes(message2)) {
+      unknown.push(`'${key4}' (${id} has no message '${message2}'; its messages: ${known.join(", ")})`);
+    }
+  }
+  if (unknown.length === 0) return;
+  throw new ConfigError(
+    `severities: no check or message is called ${unknown.join(", ")}; known checks: ${knownIds.join(", ")}`
+  );
+}
+var DEFAULT_CONFIG, DEFAULT_SOURCES, CONFIG_FILE_NAMES, ConfigError;
+var init_config = __esm({
+  "src/audit/config.ts"() {
+    "use strict";
+    init_files();
+    init_parse();
+    init_positions();
+    init_schema();
+    DEFAULT_CONFIG = Object.freeze({
+      recordDirs: ["compounds"],
+      severities: {},
+      ratioSumTolerance: 1,
+      racemateRatioTolerance: 2,
+      eeTolerance: 1,
+      singleEnantiomerMinEe: 98,
+      zeroRotationTolerance: 1,
+      axisOrthoMin: 3
+    });
+    DEFAULT_SOURCES = Object.freeze({
+      recordDirs: "the record format of this project (records live under compounds/ unless configured)",
+      severities: "none overridden: every check keeps the default severity its module declares. A level given for a check sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given for 'check-id/message-id' sets that one message's level, notes included",
+      ratioSumTolerance: "common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts",
+      racemateRatioTolerance: "common practice, no source: a racemate measured by chiral chromatography typically reads within about 2 points of 50:50 (integration error); more than that suggests an enantioenriched sample",
+      eeTolerance: "common practice, no source: ee and ratios are reported rounded to about 1 percent",
+      singleEnantiomerMinEe: "common practice, no source: many registries call a sample a single enantiomer from about 98 % ee (99:1 er); set your own SOP value",
+      zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))",
+      axisOrthoMin: "common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies"
+    });
+    CONFIG_FILE_NAMES = [
+      "stereogate.config.yml",
+      "stereogate.config.yaml",
+      "stereogate.config.json"
+    ];
+    ConfigError = class extends Error {
+      name = "ConfigError";
+    };
+  }
+});
+
+// src/chem/descriptors-compare.ts
+function key(label, axialUnit) {
+  if (axialUnit && label === "R") return "M";
+  if (axialUnit && label === "S") return "P";
+  return label;
+}
+function mirrored(k) {
+  return MIRROR[k] ?? k;
+}
+function unitKey(u) {
+  return u.label === null ? null : key(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== "cumulene");
+}
+function itemKey(it) {
+  return key(it.label, it.axial === true);
+}
+function unitLocants(u) {
+  return u.locants.filter((l) => l !== null).sort((a, b) => a - b);
+}
+function count(keys) {
+  const c = {};
+  for (const k of keys) c[k] = (c[k] ?? 0) + 1;
+  return c;
+}
+function sameCounts(a, b) {
+  const ks = /* @__PURE__ */ new Set([...Object.keys(a), ...Object.keys(b)]);
+  for (const k of ks) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
+  return true;
+}
+function invertCounts(c) {
+  const o = {};
+  for (const [k, v] of Object.entries(c)) o[mirrored(k)] = (o[mirrored(k)] ?? 0) + v;
+  return o;
+}
+function compareDescriptors(parsed, units, options = {}) {
+  const defined = units.filter((u) => u.defined && u.label !== null);
+  const result2 = {
+    method: "none",
+    whyNotPerLocant: null,
+    countsDecide: false,
+    agrees: true,
+    matchedInverted: false,
+    mismatches: [],
+    notStereoUnits: [],
+    undefinedAt: [],
+    unlisted: [],
+    declaredCounts: count(parsed.items.map(itemKey)),
+    computedCounts: count(defined.map((u) => unitKey(u)))
+  };
+  if (parsed.items.length === 0) {
+    result2.whyNotPerLocant = "the descriptor cites no configurations";
+    return result2;
+  }
+  const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
+  const mapped = units.some((u) => unitLocants(u).length > 0);
+  const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
+  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
+  if (mapped && numeric || single) {
+    result2.method = single ? "per-unit" : "per-locant";
+    const byLocant2 = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
+    const pairs = single ?? [];
+    if (!single) {
+      for (const it of parsed.items) {
+        const u = byLocant2(Number(it.locant));
+        if (!u) result2.notStereoUnits.push(it.locant);
+        else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
+        else pairs.push({ it, u });
+      }
+    }
+    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey(u)) : unitKey(u)) !== itemKey(it)).map(({ it, u }) => ({
+      locant: it.locant ?? "",
+      declared: it.pair ?? it.label + (it.axial ? "a" : ""),
+      computed: u.label,
+      atoms: u.atoms
+    }));
+    const direct2 = mismatchesFor(false);
+    const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
+    result2.matchedInverted = mayInvert && inverted2.length < direct2.length;
+    result2.mismatches = result2.matchedInverted ? inverted2 : direct2;
+    const cited = new Set(pairs.map((p) => p.u));
+    for (const u of defined) {
+      if (!cited.has(u)) {
+        result2.unlisted.push({
+          locant: single ? null : unitLocants(u)[0]?.toString() ?? null,
+          label: u.label,
+          atoms: u.atoms
+        });
+      }
+    }
+    result2.agrees = result2.mismatches.length === 0 && result2.notStereoUnits.length === 0 && result2.undefinedAt.length === 0;
+    return result2;
+  }
+  result2.method = "counts";
+  result2.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
+  const direct = sameCounts(result2.declaredCounts, result2.computedCounts);
+  const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
+  result2.agrees = direct || inverted;
+  result2.matchedInverted = !direct && inverted;
+  result2.countsDecide = result2.agrees && countsDecide(parsed.items, units, mayInvert);
+  return result2;
+}
+function kindOfKey(k) {
+  if (k === "R" || k === "S") return "RS";
+  if (k === "r" || k === "s") return "rs";
+  if (k === "M" || k === "P") return "MP";
+  if (k === "m" || k === "p") return "mp";
+  if (k === "E" || k === "Z" || k === "e" || k === "z") return "EZ";
+  return "other";
+}
+function kindOfUnit(u) {
+  const k = unitKey(u);
+  if (k !== null) return kindOfKey(k);
+  if (u.kind === "tetrahedral") return u.pseudoasymmetric ? "rs" : "RS";
+  if (u.kind === "double-bond") return "EZ";
+  if (u.kind === "allene" || u.kind === "biaryl") return "MP";
+  return "other";
+}
+function matchOnePerKind(items, units) {
+  if (units.some((u) => kindOfUnit(u) === "other")) return null;
+  const pairs = [];
+  for (const it of items) {
+    const kind = kindOfKey(itemKey(it));
+    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
+    const sameKindUnits = units.filter((u2) => kindOfUnit(u2) === kind);
+    if (kind === "other" || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
+    const u = sameKindUnits[0];
+    if (!u.defined || u.label === null) return null;
+    pairs.push({ it, u });
+  }
+  return pairs;
+}
+function countsDecide(items, units, mayInvert) {
+  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
+  let chiralUnits = 0;
+  let uniform = true;
+  for (const kind of kinds) {
+    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
+    if (kind === "other" || ofKind.some((u) => !u.defined || u.label === null)) return false;
+    if (kind === "RS" || kind === "MP") chiralUnits += ofKind.length;
+    if (new Set(ofKind.map((u) => unitKey(u))).size > 1) {
+      if (!(mayInvert && kind === "RS" && ofKind.length === 2)) return false;
+      uniform = false;
+    }
+  }
+  return uniform || chiralUnits === 2;
+}
+var MIRROR, AXIAL_KINDS;
+var init_descriptors_compare = __esm({
+  "src/chem/descriptors-compare.ts"() {
+    "use strict";
+    MIRROR = { R: "S", S: "R", M: "P", P: "M" };
+    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene", "helix"]);
+  }
+});
+
+// src/chem/descriptors.ts
+function foldSigns(text) {
+  let out = "";
+  for (const ch of text) out += MINUS_LIKE.includes(ch) ? "-" : PLUS_LIKE.includes(ch) ? "+" : ch;
+  return out;
+}
+function parseDescriptors(input, options = {}) {
+  const context = options.context ?? "descriptor";
+  const out = {
+    mode: "none",
+    rotationSign: null,
+    items: [],
+    problems: [],
+    problemDetails: [],
+    remarks: [],
+    prefixes: [],
+    words: [],
+    fischer: null,
+    rest: "",
+    embeddedDescriptors: false
+  };
+  const problem = (offset, message2) => {
+    out.problemDetails.push({ offset, message: message2 });
+    out.problems.push(`at character ${offset}: ${message2}`);
+  };
+  const signs = [];
+  let i = skipSpace(input, 0);
+  for (; ; ) {
+    if (i >= input.length) break;
+    const ch = input[i];
+    let consumed = false;
+    if (ch === "(" || ch === "[") {
+      const close = ch === "(" ? ")" : "]";
+      const end = input.indexOf(close, i + 1);
+      const inner = end < 0 ? "" : input.slice(i + 1, end);
+      if (end >= 0 && !/[([]/.test(inner)) {
+        const g = parseGroup(inner, i + 1, context, problem);
+        if (g.kind !== "not-stereo") {
+          consumed = true;
+          if (g.sign) signs.push({ sign: g.sign, offset: i });
+          out.items.push(...g.items);
+          for (const w of g.words) addWord(out, w);
+          if (g.legacyPair) {
+            out.legacyPair = true;
+            out.remarks.push(
+              `${g.legacyPair} without locants is the legacy way of naming a racemate and is read as (${g.items[0].pair}); IUPAC 2013 (P-93.1.3) writes (RS) or rac-`
+            );
+          }
+          i = end + 1;
+        }
+      } else if (end < 0 && context === "descriptor") {
+        problem(i, `'${ch}' is never closed`);
+        i = input.length;
+        break;
+      }
+    } else {
+      const m = WORD_PREFIX.exec(input.slice(i));
+      const word = m?.[1];
+      const next = m ? input[i + m[0].length] : void 0;
+      if (word && (context === "descriptor" || next !== void 0 && HYPHENS.includes(next))) {
+        consumed = true;
+        if (word === "rac" || word === "rel") out.prefixes.push(word);
+        else if (word === "D" || word === "L") out.fischer = word;
+        else if (word === "DL" || word === "D,L") out.fischer = "DL";
+        else if (word === "d") signs.push({ sign: "+", offset: i });
+        else if (word === "l") signs.push({ sign: "-", offset: i });
+        else if (word === "dl" || word === "d,l") signs.push({ sign: "±", offset: i });
+        else addWord(out, word);
+        if (word === "d" || word === "l" || word === "dl" || word === "d,l") {
+          out.remarks.push(
+            `'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`
+          );
+        }
+        i += word.length;
+      }
+    }
+    if (!consumed) break;
+    i = skipSpace(input, i);
+    if (i < input.length && HYPHENS.includes(input[i])) i = skipSpace(input, i + 1);
+  }
+  out.rest = input.slice(i).trim();
+  if (context === "descriptor" && out.rest !== "") {
+    problem(i, `'${out.rest.slice(0, 20)}' is not a stereodescriptor`);
+  }
+  out.embeddedDescriptors = /[([](?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?(?:,\s*(?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?)*[)\]]/.test(
+    out.rest
+  );
+  finish(out, signs, problem);
+  return out;
+}
+function skipSpace(s, i) {
+  while (i < s.length && /\s/.test(s[i])) i++;
+  return i;
+}
+function addWord(out, w) {
+  if (!out.words.includes(w)) out.words.push(w);
+}
+function parseGroup(inner, base, context, problem) {
+  const compact = inner.replace(/\s+/g, "");
+  const sign = SIGNS[foldSigns(compact)];
+  if (sign) return { kind: "sign", sign, items: [], words: [] };
+  const legacy = /^([RS])[,/]([RS])$/.exec(compact);
+  if (legacy && legacy[1] !== legacy[2]) {
+    const pair = legacy[1] === "R" ? "RS" : "SR";
+    return {
+      kind: "items",
+      items: [{ locant: null, label: pair[0], pair, offset: base + inner.indexOf(legacy[1]) }],
+      words: [],
+      legacyPair: `(${legacy[1]}${compact[1]}${legacy[2]})`
+    };
+  }
+  const parts = [];
+  let start = 0;
+  for (let k = 0; k <= inner.length; k++) {
+    if (k === inner.length || inner[k] === ",") {
+      const raw2 = inner.slice(start, k);
+      const lead = raw2.length - raw2.trimStart().length;
+      parts.push({ text: raw2.trim(), offset: base + start + lead });
+      start = k + 1;
+    }
+  }
+  const items = [];
+  const words = [];
+  const bad2 = [];
+  for (const p of parts) {
+    const m = ITEM.exec(p.text);
+    if (m) {
+      const [, loc, lab, ax, star] = m;
+      const item = { locant: loc ?? null, label: lab[0], offset: p.offset };
+      if (lab === "RS" || lab === "SR") item.pair = lab;
+      if (star) item.relativeStar = true;
+      if (ax) {
+        if (lab === "R" || lab === "S") item.axial = true;
+        else {
+          bad2.push(p);
+          continue;
+        }
+      }
+      items.push(item);
+    } else if (WORDS.includes(p.text.toLowerCase())) {
+      words.push(p.text.toLowerCase());
+    } else {
+      bad2.push(p);
+    }
+  }
+  if (items.length === 0 && words.length === 0) {
+    if (context === "name") return { kind: "not-stereo", items: [], words: [] };
+  }
+  for (const b of bad2) {
+    problem(
+      b.offset,
+      b.text === "" ? "empty stereodescriptor" : `'${b.text}' is not a stereodescriptor (P-93)`
+    );
+  }
+  return { kind: "items", items, words };
+}
+function finish(out, signs, problem) {
+  const distinct = [...new Set(signs.map((s) => s.sign))];
+  if (distinct.length > 1) {
+    problem(signs[1].offset, `conflicting signs of rotation: ${distinct.map((s) => `(${s})`).join(" and ")}`);
+  }
+  out.rotationSign = signs[0]?.sign ?? null;
+  const seen = /* @__PURE__ */ new Map();
+  for (const it of out.items) {
+    if (it.locant === null) continue;
+    if (seen.has(it.locant)) problem(it.offset, `locant ${it.locant} is given twice`);
+    seen.set(it.locant, it.offset);
+  }
+  const stars = out.items.filter((it) => it.relativeStar).length;
+  const pairs = out.items.filter((it) => it.pair).length;
+  const chiralItems = out.items.filter(
+    (it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P"
+  );
+  if (stars > 0 && stars < chiralItems.length) {
+    problem(
+      out.items.find((it) => !it.relativeStar && chiralItems.includes(it)).offset,
+      "some descriptors carry * and others do not"
+    );
+  }
+  if (pairs > 0 && pairs < chiralItems.length) {
+    out.remarks.push(
+      "RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate"
+    );
+  }
+  const racemic = out.prefixes.includes("rac") || pairs > 0 || out.rotationSign === "±" || out.fischer === "DL";
+  const relative4 = out.prefixes.includes("rel") || stars > 0;
+  if (racemic && relative4) {
+    out.remarks.push(
+      "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed, read as racemic; IUPAC 2013 (P-93.1.3) uses one of them"
+    );
+  }
+  if (out.prefixes.includes("rel") && pairs > 0)
+    problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
+  if (out.prefixes.includes("rel") && out.items.length === 0) {
+    out.remarks.push("'rel-' without descriptors states no configuration");
+  }
+  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs === 0) {
+    out.remarks.push(
+      "(±) with descriptors of one enantiomer is read as rac-(…); IUPAC 2013 (P-93.1.3) writes rac-(…) or (…RS,…SR)"
+    );
+  }
+  if (racemic) out.mode = "racemic";
+  else if (relative4) out.mode = "relative";
+  else if (out.items.length > 0) out.mode = "absolute";
+  else out.mode = "none";
+  if ((racemic || relative4) && chiralItems.some((it) => it.locant !== null)) {
+    const first = [...chiralItems].sort((a, b) => locantOrder(a.locant) - locantOrder(b.locant))[0];
+    if (first.label === "S" || first.label === "P") {
+      out.remarks.push(
+        `P-93.1.3 cites the lowest-locant centre as R (R* or RS); ${first.locant ?? ""}${first.pair ?? first.label} comes first here`
+      );
+    }
+  }
+  const unlocated = out.items.filter((it) => it.locant === null);
+  if (unlocated.length > 1 && unlocated.some((it) => it.label === "R") && unlocated.some((it) => it.label === "S")) {
+    out.remarks.push("(R,S) without locants is ambiguous: for a racemate P-93.1.3 writes (RS)");
+  }
+}
+function locantOrder(locant) {
+  if (locant === null) return Number.MAX_SAFE_INTEGER;
+  const n = parseInt(locant, 10);
+  return Number.isNaN(n) ? Number.MAX_SAFE_INTEGER : n * 100 + locant.length;
+}
+var WORDS, MINUS_LIKE, HYPHENS, PLUS_LIKE, SIGNS, WORD_PREFIX, ITEM;
+var init_descriptors = __esm({
+  "src/chem/descriptors.ts"() {
+    "use strict";
+    init_descriptors_compare();
+    WORDS = ["meso", "cis", "trans", "erythro", "threo", "endo", "exo", "syn", "anti"];
+    MINUS_LIKE = "-‐‑‒–—−﹣－˗";
+    HYPHENS = MINUS_LIKE;
+    PLUS_LIKE = "+＋";
+    SIGNS = {
+      "+": "+",
+      "-": "-",
+      "±": "±",
+      "+/-": "±",
+      "+-": "±"
+    };
+    WORD_PREFIX = new RegExp(
+      `^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\\s(${MINUS_LIKE.replace("-", "\\-")}]|$)`
+    );
+    ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
+  }
+});
+
+// src/checks/words.ts
+function unitName(u) {
+  const loc = (k) => u.locants[k] !== null && u.locants[k] !== void 0 ? String(u.locants[k]) : "";
+  if (u.kind === "tetrahedral") return `${u.element}${loc(0)} (atom ${u.atoms[0]})`;
+  const ends = u.atoms.join(", ");
+  const what = u.kind === "double-bond" ? "double bond" : u.kind === "biaryl" ? "biaryl axis" : u.kind === "helix" ? "helix" : `${u.kind} axis`;
+  const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join("=C")}` : "";
+  return `${what}${mapped} (atoms ${ends})`;
+}
+function atomsInRecordTerms(text, s) {
+  if (!s) return text;
+  const byNumber = new Map(s.atoms.map((a) => [a.inputNumber, a]));
+  return text.replace(/\b([A-Z][a-z]?)(\d+)\b/g, (whole, el, num2) => {
+    const a = byNumber.get(Number(num2));
+    if (!a || a.element !== el) return whole;
+    return a.mapNumber !== null ? `${el}${a.mapNumber} (atom ${num2})` : `${el} (atom ${num2})`;
+  });
+}
+function listUnits(units) {
+  return units.length === 0 ? "none" : units.map(unitName).join(", ");
+}
+function unitSummary(units) {
+  const centres = units.filter((u) => u.kind === "tetrahedral").length;
+  const bonds = units.filter((u) => u.kind === "double-bond").length;
+  const axes = units.length - centres - bonds;
+  const parts = [];
+  if (centres) parts.push(`${centres} stereocentre${centres === 1 ? "" : "s"}`);
+  if (bonds) parts.push(`${bonds} stereogenic double bond${bonds === 1 ? "" : "s"}`);
+  if (axes) parts.push(`${axes} stereogenic ax${axes === 1 ? "is" : "es"}`);
+  return parts.length ? parts.join(" and ") : "no stereo units";
+}
+function definedUnits(f) {
+  return f.units.filter((u) => u.defined);
+}
+function undefinedUnits(f) {
+  return f.units.filter((u) => !u.defined);
+}
+function labelList(units) {
+  const l = units.filter((u) => u.defined).map((u) => `${unitName(u)} ${u.label ?? "unranked"}`);
+  return l.length ? l.join(", ") : "none";
+}
+function declaredDescriptors(record) {
+  const d = record?.stereo.descriptors;
+  const n = record?.name;
+  return {
+    field: d !== void 0 && d.trim() !== "" ? parseDescriptors(d) : null,
+    name: n !== void 0 && n.trim() !== "" ? parseDescriptors(n, { context: "name" }) : null
+  };
+}
+function declaredSign(record) {
+  const { field, name } = declaredDescriptors(record);
+  if (field?.rotationSign) return { sign: field.rotationSign, field: "stereo.descriptors" };
+  if (name?.rotationSign) return { sign: name.rotationSign, field: "name" };
+  return null;
+}
+function finding(messageId, field, data, severity) {
+  const f = { messageId, field, data };
+  if (severity) f.severity = severity;
+  return f;
+}
+function render(template, data) {
+  return template.replace(
+    /\{([A-Za-z0-9_]+)(?:([:?])([^|{}]*)\|([^|{}]*))?\}/g,
+    (whole, name, how, one, many) => {
+      if (!Object.prototype.hasOwnProperty.call(data, name)) return whole;
+      const v = data[name];
+      const text = v === null ? "none" : String(v);
+      if (how === void 0) return text;
+      const words = text === "1" ? one : many;
+      return how === ":" ? `${text} ${words}` : words;
+    }
+  );
+}
+function plural(n, one, many = `${one}s`) {
+  return `${n} ${String(n) === "1" ? one : many}`;
+}
+function fmt(n) {
+  return Number.isInteger(n) ? String(n) : String(Math.round(n * 100) / 100);
+}
+var STEREO_CLAIM_FORMS;
+var init_words = __esm({
+  "src/checks/words.ts"() {
+    "use strict";
+    init_descriptors();
+    STEREO_CLAIM_FORMS = [
+      "meso",
+      "single-enantiomer",
+      "enantioenriched",
+      "racemate",
+      "single-diastereomer",
+      "diastereomer-mixture"
+    ];
+  }
+});
+
+// src/checks/waivers.ts
+function blank(s) {
+  return s === void 0 || s.trim() === "";
+}
+function isComplete(w) {
+  return !blank(w.reason) && !blank(w.approved_by);
+}
+function waiverAccepts(w, f) {
+  if (w.check !== f.check) return false;
+  if (!blank(w.message_id) && w.message_id.trim() !== f.messageId) return false;
+  if (!blank(w.other_record)) {
+    const other = w.other_record.trim();
+    if (!OTHER_RECORD_KEYS.some((k) => f.data[k] !== void 0 && String(f.data[k]) === other)) return false;
+  }
+  return true;
+}
+function waiverCovers(w) {
+  const parts = [
+    blank(w.message_id) ? null : `message ${w.message_id.trim()}`,
+    blank(w.other_record) ? null : `about ${w.other_record.trim()}`
+  ].filter((x) => x !== null);
+  return parts.length === 0 ? `every finding of ${w.check}` : `${w.check} (${parts.join(", ")})`;
+}
+function acceptingWaiver(waivers, f) {
+  const w = waivers.find((x) => isComplete(x) && waiverAccepts(x, f));
+  return w ? { reason: w.reason.trim(), approvedBy: w.approved_by.trim(), covers: waiverCovers(w) } : null;
+}
+function waiversOf(record, check) {
+  return (record?.waivers ?? []).flatMap((w, index) => w.check === check ? [{ ...w, index }] : []);
+}
+function stillMatchesNothing(note, more) {
+  if (note.messageId !== "waiver-matches-nothing") return true;
+  const str = (v) => typeof v === "string" && v !== "" ? v : void 0;
+  const w = {
+    check: String(note.data.waivedCheck),
+    message_id: str(note.data.waivedMessage),
+    other_record: str(note.data.waivedRecord)
+  };
+  return !more.some((f) => waiverAccepts(w, f));
+}
+function reviewWaivers(record, findings, knownChecks) {
+  const waivers = record?.waivers ?? [];
+  const out = [];
+  const firstIndex = /* @__PURE__ */ new Map();
+  waivers.forEach((w, index) => {
+    const field = `waivers.${index}`;
+    const covers = waiverCovers(w);
+    const missing = [
+      blank(w.reason) ? "reason" : null,
+      blank(w.approved_by) ? "approver (approved_by)" : null
+    ].filter((x) => x !== null);
+    if (missing.length) {
+      out.push(
+        finding("waiver-incomplete", field, {
+          waivedCheck: w.check,
+          index,
+          missing: missing.join(" and no ")
+        })
+      );
+    }
+    const seen = firstIndex.get(covers);
+    if (seen !== void 0) {
+      out.push(
+        finding("waiver-duplicate", field, { waivedCheck: w.check, covers, index, first: seen }, "note")
+      );
+      return;
+    }
+    firstIndex.set(covers, index);
+    if (w.check !== WAIVER_CHECK_ID && !findings.some((f) => waiverAccepts(w, f))) {
+      const unknown = knownChecks !== void 0 && !knownChecks.includes(w.check);
+      out.push(
+        finding(
+          "waiver-matches-nothing",
+          field,
+          {
+            waivedCheck: w.check,
+            waivedMessage: blank(w.message_id) ? null : w.message_id.trim(),
+            waivedRecord: blank(w.other_record) ? null : w.other_record.trim(),
+            covers,
+            index,
+            knownCheck: !unknown,
+            known: unknown ? " (and no check has that id)" : ""
+          },
+          "note"
+        )
+      );
+    }
+  });
+  return out;
+}
+function run(ctx) {
+  const waivers = ctx.record?.waivers ?? [];
+  if (waivers.length === 0) return { findings: [], notApplicable: "the record has no waivers" };
+  const others2 = ctx.findings ?? [];
+  const findings = reviewWaivers(ctx.record, others2);
+  if (findings.some((f) => f.severity !== "note")) return { findings };
+  const accepting = waivers.filter((w) => others2.some((f) => waiverAccepts(w, f)));
+  const whole = accepting.filter((w) => blank(w.message_id) && blank(w.other_record));
+  const wholeText = whole.length > 0 ? `; ${whole.length === 1 ? "one covers" : `${whole.length} cover`} every finding of its check (${whole.map((w) => w.check).join(", ")}), as it names no message_id or other_record` : "";
+  return {
+    findings,
+    passed: `${plural(waivers.length, "waiver")} complete; ${accepting.length} ${accepting.length === 1 ? "accepts" : "accept"} findings of this record${wholeText}`
+  };
+}
+var WAIVER_CHECK_ID, messages, OTHER_RECORD_KEYS, waiverReview;
+var init_waivers = __esm({
+  "src/checks/waivers.ts"() {
+    "use strict";
+    init_words();
+    WAIVER_CHECK_ID = "waiver-review";
+    messages = {
+      "waiver-incomplete": "The waiver for {waivedCheck} (waivers[{index}]) has no {missing}. A waiver records a decision: say why the finding is acceptable (reason) and who decided (approved_by). Until then it accepts nothing.",
+      "waiver-matches-nothing": "The waiver waivers[{index}], for {covers}, matches no finding on this record{known}. Remove it, or correct what it names, so that it does not silently accept a future finding.",
+      "waiver-duplicate": "waivers[{index}] repeats waivers[{first}], the waiver for {covers}. Keep one."
+    };
+    OTHER_RECORD_KEYS = ["otherId", "otherFile", "input"];
+    waiverReview = {
+      id: WAIVER_CHECK_ID,
+      defaultSeverity: "warning",
+      summary: "Waivers give a reason and an approver, and each accepts a finding of this record.",
+      explanation: "A waiver is the responsible chemist accepting a finding for this record; it is only as good as its reason and the name of who decided (common practice, no source: review decisions are recorded with their reason and approver). A waiver that names only a check accepts every finding of that check on the record, a later, different one too; message_id (one message of the check) and other_record (findings about one other record) narrow it to the finding that was decided. A waiver that accepts nothing is reported, so that it can be removed before it hides a later, different problem.",
+      messages,
+      run
+    };
+  }
+});
+
+// src/registry/load.ts
+import { realpathSync as realpathSync2 } from "node:fs";
+import { dirname } from "node:path";
+function loadRegistry(root, options) {
+  const realRoot = realpathSync2(root);
+  const found = findRecordFiles(realRoot, options.recordDirs);
+  const records = found.files.map((abs) => loadRecordFile(realRoot, abs));
+  for (const r of found.refused) records.push(refusedRecord(r));
+  records.sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+  markDuplicateIds(records);
+  return { root: realRoot, records, missingDirs: found.missingDirs };
+}
+function refusedRecord(r) {
+  return {
+    file: r.file,
+    id: null,
+    record: null,
+    positions: NO_POSITIONS,
+    problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${r.message}` }],
+    origin: { kind: "file" }
+  };
+}
+function loadRecordFile(realRoot, abs) {
+  try {
+    return loadRecordFileOrThrow(realRoot, abs);
+  } catch (e) {
+    return {
+      file: relativeTo(realRoot, abs),
+      id: null,
+      record: null,
+      positions: NO_POSITIONS,
+      problems: [
+        {
+          path: "",
+          line: null,
+          code: "internal-error",
+          message: `the record file could not be read because of an internal error in stereogate (${e?.message ?? String(e)}); please report it with the file`
+        }
+      ],
+      origin: { kind: "file" }
+    };
+  }
+}
+function loadRecordFileOrThrow(realRoot, abs) {
+  const file = relativeTo(realRoot, abs);
+  const read = readTextFile(abs);
+  if (!read.ok) {
+    return {
+      file,
+      id: null,
+      record: null,
+      positions: NO_POSITIONS,
+      problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${read.error}` }],
+      origin: { kind: "file" }
+    };
+  }
+  const parsed = parseRecordText(read.text);
+  const loaded = {
+    file,
+    id: parsed.id,
+    record: parsed.record,
+    positions: parsed.positions,
+    problems: parsed.problems,
+    origin: { kind: "file" }
+  };
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  return loaded;
+}
+function asObject(v) {
+  return v !== null && typeof v === "object" && !Array.isArray(v) ? v : null;
+}
+function sourceOf(ref, field, fetchMolfile) {
+  if (!ref) return null;
+  if (typeof ref.smiles === "string" && typeof ref.molfile !== "string") {
+    return { field, format: "smiles", text: ref.smiles };
+  }
+  if (typeof ref.molfile === "string" && typeof ref.smiles !== "string") {
+    return { field, format: "molfile", ...fetchMolfile(ref.molfile) };
+  }
+  return null;
+}
+function structureSources(realRoot, recordDir, value) {
+  const fetchMolfile = (path) => {
+    const where2 = resolveInside(realRoot, recordDir, path);
+    if (!where2.ok) return { text: null, error: `molfile ${where2.error}` };
+    const read = readTextFile(where2.abs);
+    if (!read.ok) return { text: null, file: where2.rel, error: `molfile '${path}' ${read.error}` };
+    return { text: read.text, file: where2.rel };
+  };
+  const top = asObject(value);
+  const main = sourceOf(asObject(top?.structure), "structure", fetchMolfile);
+  const comps = asObject(top?.stereo)?.components;
+  const components = [];
+  if (Array.isArray(comps)) {
+    comps.slice(0, MAX_COMPONENTS_READ).forEach((c, i) => {
+      const s = sourceOf(asObject(c), `stereo.components.${i}`, fetchMolfile);
+      components.push(
+        s ?? { field: `stereo.components.${i}`, format: "smiles", text: null, error: "no structure given" }
+      );
+    });
+  }
+  return { main, components };
+}
+function markDuplicateIds(records) {
+  const problems = duplicateIdProblems(
+    records.flatMap(
+      (r) => r.id === null ? [] : [{ id: r.id, file: r.file, line: lineOf(r.positions, "id") }]
+    )
+  );
+  if (problems.size === 0) return;
+  for (const r of records) {
+    const p = problems.get(r.file);
+    if (p) r.problems.push(p);
+  }
+}
+function duplicateIdProblems(records) {
+  const byId2 = /* @__PURE__ */ new Map();
+  for (const r of records) {
+    const list = byId2.get(r.id);
+    if (list) list.push(r);
+    else byId2.set(r.id, [r]);
+  }
+  const out = /* @__PURE__ */ new Map();
+  for (const [id, list] of byId2) {
+    if (list.length < 2) continue;
+    for (const r of list) {
+      const others2 = list.filter((o) => o !== r).map((o) => o.line === null ? o.file : `${o.file} line ${o.line}`);
+      out.set(r.file, {
+        path: "id",
+        line: r.line,
+        code: "duplicate-id",
+        message: `id: '${id}' is also used by ${others2.join(", ")}; every record needs its own id`
+      });
+    }
+  }
+  return out;
+}
+var MAX_COMPONENTS_READ;
+var init_load = __esm({
+  "src/registry/load.ts"() {
+    "use strict";
+    init_files();
+    init_parse();
+    init_positions();
+    MAX_COMPONENTS_READ = 50;
   }
 });
 
@@ -34203,11 +36111,11 @@ function hortonBasis(atoms, nullity, g, bondInRing, m, smallest) {
       parent[r] = -1;
       parentBond[r] = -1;
       branch[r] = r;
-      let head2 = 0;
+      let head = 0;
       let tail = 0;
       order[tail++] = r;
-      while (head2 < tail) {
-        const x = order[head2++];
+      while (head < tail) {
+        const x = order[head++];
         const dx = dist[x];
         if (dx >= depth) continue;
         const nb = g.nbrs[x];
@@ -34393,13 +36301,13 @@ function ringSizes(s, g, bridge) {
       dist = new Int32Array(n).fill(-1);
       queue = new Int32Array(n);
     }
-    let head2 = 0;
+    let head = 0;
     let tail = 0;
     dist[a] = 0;
     queue[tail++] = a;
     let found = 0;
-    while (head2 < tail && found === 0) {
-      const u = queue[head2++];
+    while (head < tail && found === 0) {
+      const u = queue[head++];
       const nb = g.nbrs[u];
       const bb = g.nbrBonds[u];
       for (let i = 0; i < nb.length; i++) {
@@ -35782,6 +37690,86 @@ var init_molfile_geometry = __esm({
   }
 });
 
+// src/chem/read/stereo-2d-axes.ts
+function wedgeZ(s, centre, k, aromatic = false) {
+  const b = s.bonds[k];
+  if (b.a !== centre || b.order !== 1 && !(aromatic && b.aromatic)) return 0;
+  return b.wedge === "up" ? 1 : b.wedge === "down" ? -1 : 0;
+}
+function biarylAxesFrom2d(s, adj, ring, warn2) {
+  const out = [];
+  const xy = (i) => {
+    const c = s.atoms[i].coords;
+    return [c[0], c[1]];
+  };
+  for (const [k, oa, ob] of biarylCandidates(s, adj, ring)) {
+    const bond = s.bonds[k];
+    const za = orthoLift(bond.a, oa);
+    const zb = orthoLift(bond.b, ob);
+    if (za === null || zb === null) {
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
+        bond.a
+      );
+      continue;
+    }
+    if (za[0] === 0 && zb[0] === 0) continue;
+    const [ax, ay] = xy(bond.a);
+    const [bx, by] = xy(bond.b);
+    const len = Math.hypot(bx - ax, by - ay) || 1;
+    const pts = [];
+    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
+      ([o, z]) => {
+        const p = xy(o);
+        pts.push([p[0], p[1], z * len]);
+      }
+    );
+    const vol = signedVolume(pts);
+    if (Math.abs(vol) / (len * len * len) < 0.01) {
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
+        bond.a
+      );
+      continue;
+    }
+    out.push({
+      kind: "axial",
+      subtype: "biaryl",
+      ends: [bond.a, bond.b],
+      ligands: [oa[0], oa[1], ob[0], ob[1]],
+      winding: windingOf(vol)
+    });
+  }
+  return out;
+  function orthoLift(end, orth) {
+    const z = orth.map((o) => {
+      let v = wedgeZ(s, end, adj.bnd[end][adj.nbr[end].indexOf(o)], true);
+      if (v === 0) {
+        for (let j = 0; j < adj.nbr[o].length; j++) {
+          const x = adj.nbr[o][j];
+          const bk = adj.bnd[o][j];
+          if (x === end || ring[bk]) continue;
+          const w = wedgeZ(s, o, bk);
+          if (w !== 0) v = w;
+        }
+      }
+      return v;
+    });
+    if (z[0] !== 0 && z[0] === z[1]) return null;
+    if (z[0] === 0 && z[1] !== 0) z[0] = -z[1];
+    else if (z[1] === 0 && z[0] !== 0) z[1] = -z[0];
+    return [z[0], z[1]];
+  }
+}
+var init_stereo_2d_axes = __esm({
+  "src/chem/read/stereo-2d-axes.ts"() {
+    "use strict";
+    init_molfile_geometry();
+  }
+});
+
 // src/chem/read/stereo-2d.ts
 function stereoFrom2d(s, adj, warnings, atomLines) {
   const out = objectList();
@@ -35802,11 +37790,6 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
   const xy = (i) => {
     const c = s.atoms[i].coords;
     return [c[0], c[1], 0];
-  };
-  const zFrom = (centre, k) => {
-    const b = s.bonds[k];
-    if (b.a !== centre || b.order !== 1) return 0;
-    return b.wedge === "up" ? 1 : b.wedge === "down" ? -1 : 0;
   };
   for (let c = 0; c < s.atoms.length; c++) {
     if (!wedgedFrom[c] || wavyAt[c]) continue;
@@ -35852,7 +37835,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
         return null;
       }
       flat.push(u);
-      zs.push(zFrom(c, adj.bnd[c][j]));
+      zs.push(wedgeZ(s, c, adj.bnd[c][j]));
     }
     const ligands = [...ns];
     if (fourth !== null) ligands.push(fourth);
@@ -35960,7 +37943,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     let lifted = false;
     for (const x of subs) {
       const k = adj.bnd[end][adj.nbr[end].indexOf(x)];
-      const z = zFrom(end, k);
+      const z = wedgeZ(s, end, k);
       if (z !== 0) lifted = true;
       const v = sub2(xy(x), pe);
       pts.push([pe[0] + v[0], pe[1] + v[1], z * Math.hypot(v[0], v[1])]);
@@ -35992,63 +37975,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const ligands = [a.ligands[0], a.ligands[1], b.ligands[0], b.ligands[1]];
     return { kind: "axial", subtype: "allene", ends, ligands, winding: windingOf(vol) };
   }
-  for (const [k, oa, ob] of biarylCandidates(s, adj, ring)) {
-    const bond = s.bonds[k];
-    const za = orthoLift(bond.a, oa);
-    const zb = orthoLift(bond.b, ob);
-    if (za === null || zb === null) {
-      warn2(
-        "stereo-ambiguous-wedge",
-        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
-        bond.a
-      );
-      continue;
-    }
-    if (za[0] === 0 && zb[0] === 0) continue;
-    const len = Math.hypot(...sub2(xy(bond.b), xy(bond.a))) || 1;
-    const pts = [];
-    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
-      ([o, z]) => {
-        const p = xy(o);
-        pts.push([p[0], p[1], z * len]);
-      }
-    );
-    const vol = signedVolume(pts);
-    if (Math.abs(vol) / (len * len * len) < 0.01) {
-      warn2(
-        "stereo-ambiguous-wedge",
-        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
-        bond.a
-      );
-      continue;
-    }
-    out.push({
-      kind: "axial",
-      subtype: "biaryl",
-      ends: [bond.a, bond.b],
-      ligands: [oa[0], oa[1], ob[0], ob[1]],
-      winding: windingOf(vol)
-    });
-  }
-  function orthoLift(end, orth) {
-    const z = orth.map((o) => {
-      let v = zFrom(end, adj.bnd[end][adj.nbr[end].indexOf(o)]);
-      if (v === 0) {
-        for (let j = 0; j < adj.nbr[o].length; j++) {
-          const x = adj.nbr[o][j];
-          const bk = adj.bnd[o][j];
-          if (x === end || ring[bk]) continue;
-          const w = zFrom(o, bk);
-          if (w !== 0) v = w;
-        }
-      }
-      return v;
-    });
-    if (z[0] !== 0 && z[0] === z[1]) return null;
-    if (z[0] === 0 && z[1] !== 0) z[0] = -z[1];
-    else if (z[1] === 0 && z[0] !== 0) z[1] = -z[0];
-    return [z[0], z[1]];
-  }
+  for (const axis of biarylAxesFrom2d(s, adj, ring, warn2)) out.push(axis);
   return out;
 }
 function sub2(a, b) {
@@ -36062,6 +37989,7 @@ var init_stereo_2d = __esm({
     init_types();
     init_graph();
     init_molfile_graph();
+    init_stereo_2d_axes();
     init_molfile_geometry();
     MIN_VOLUME = 0.01;
     MIN_STEREO_RING = 8;
@@ -36532,7 +38460,7 @@ function textTooLong(text, format, limits) {
   if (text.length <= max) return null;
   return {
     code: format === "smiles" ? "smiles-too-long" : "molfile-too-long",
-    message: `the ${format === "smiles" ? "SMILES" : "molfile"} is ${count(text.length)} characters long, over the limit of ${count(max)}; it was not read`,
+    message: `the ${format === "smiles" ? "SMILES" : "molfile"} is ${count2(text.length)} characters long, over the limit of ${count2(max)}; it was not read`,
     at: format === "smiles" ? { offset: max } : { line: 1 }
   };
 }
@@ -36540,7 +38468,7 @@ function tooManyAtoms(atoms, limits, at2) {
   if (atoms <= limits.maxAtoms) return null;
   return {
     code: "too-many-atoms",
-    message: `the structure has ${count(atoms)} atoms, over the limit of ${count(limits.maxAtoms)}; it was not analysed`,
+    message: `the structure has ${count2(atoms)} atoms, over the limit of ${count2(limits.maxAtoms)}; it was not analysed`,
     at: at2
   };
 }
@@ -36551,7 +38479,7 @@ function structureTooLarge(s, limits) {
   if (parts <= limits.maxComponents) return null;
   return {
     code: "too-many-components",
-    message: `the structure has ${count(parts)} separate components (parts joined by '.'), over the limit of ${count(limits.maxComponents)}; it was not analysed`,
+    message: `the structure has ${count2(parts)} separate components (parts joined by '.'), over the limit of ${count2(limits.maxComponents)}; it was not analysed`,
     at: {}
   };
 }
@@ -36577,7 +38505,7 @@ function componentCount(s) {
   }
   return parts;
 }
-var READ_LIMITS, count;
+var READ_LIMITS, count2;
 var init_limits = __esm({
   "src/chem/read/limits.ts"() {
     "use strict";
@@ -36587,7 +38515,7 @@ var init_limits = __esm({
       maxAtoms: 2e3,
       maxComponents: 50
     });
-    count = (n) => n.toLocaleString("en-US");
+    count2 = (n) => n.toLocaleString("en-US");
   }
 });
 
@@ -36688,13 +38616,13 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
   let bondLines = 0;
   for (const { text, line } of logical) {
     const t = v30Tokens(text);
-    const head2 = (t[0] ?? "").toUpperCase();
+    const head = (t[0] ?? "").toUpperCase();
     if (skipDepth > 0) {
-      if (head2 === "BEGIN") skipDepth++;
-      else if (head2 === "END") skipDepth--;
+      if (head === "BEGIN") skipDepth++;
+      else if (head === "END") skipDepth--;
       continue;
     }
-    if (head2 === "BEGIN") {
+    if (head === "BEGIN") {
       const what = (t[1] ?? "").toUpperCase();
       if (what === "CTAB") {
         if (inCtab || ctabDone)
@@ -36719,7 +38647,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       } else skipDepth = 1;
       continue;
     }
-    if (head2 === "END") {
+    if (head === "END") {
       const what = (t[1] ?? "").toUpperCase();
       if (block !== null && what === block) block = null;
       else if (block === null && inCtab && what === "CTAB") {
@@ -36735,7 +38663,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       continue;
     }
     if (!inCtab) continue;
-    if (head2 === "COUNTS") {
+    if (head === "COUNTS") {
       expectAtoms = Number(t[1]);
       expectBonds = Number(t[2]);
       if (!Number.isInteger(expectAtoms) || !Number.isInteger(expectBonds) || expectAtoms < 0 || expectBonds < 0) {
@@ -37293,30 +39221,162 @@ var init_molfile = __esm({
   }
 });
 
-// src/chem/read/cxsmiles.ts
-function isDigit(c) {
-  return c >= 48 && c <= 57;
-}
+// src/chem/read/cxsmiles-drawing.ts
 function fail4(code, message2, offset) {
   return { ok: false, error: { code, message: message2, at: { offset } } };
 }
-function readIndex(s, at2, atomCount, code) {
+function isDigit(c) {
+  return c >= 48 && c <= 57;
+}
+function readCoordinates(s, start, atomCount) {
+  const close = s.indexOf(")", start + 1);
+  if (close < 0) return fail4("cxsmiles-bad-coordinates", "coordinate block is not closed with ')'", start);
+  const body = s.slice(start + 1, close);
+  const entries = body.split(";");
+  if (entries.length === atomCount + 1 && entries[atomCount] === "") entries.pop();
+  if (entries.length !== atomCount)
+    return fail4(
+      "cxsmiles-bad-coordinates",
+      `coordinate block lists ${entries.length} atoms; the SMILES has ${atomCount}`,
+      start
+    );
+  const coords = [];
+  let at2 = start + 1;
+  for (const entry of entries) {
+    const parts = entry.split(",");
+    if (parts.length > 3)
+      return fail4("cxsmiles-bad-coordinates", `coordinate '${entry}' has more than three numbers`, at2);
+    const xyz = [0, 0, 0];
+    for (let d = 0; d < parts.length; d++) {
+      const t = parts[d].trim();
+      const v = t === "" ? 0 : Number(t);
+      if (!Number.isFinite(v)) return fail4("cxsmiles-bad-coordinates", `'${t}' is not a number`, at2);
+      xyz[d] = v;
+    }
+    coords.push(xyz);
+    at2 += entry.length + 1;
+  }
+  return { ok: true, coords, end: close + 1 };
+}
+function wedgeFieldAt(s, i) {
+  if (s.charCodeAt(i) !== 119) return -1;
+  const c = s.charCodeAt(i + 1);
+  if (c === 58) return i + 2;
+  if ((c === 85 || c === 68) && s.charCodeAt(i + 2) === 58) return i + 3;
+  return -1;
+}
+function readWedges(s, i, atomCount, bondCount, out) {
+  const c = s.charCodeAt(i + 1);
+  const wedge = c === 85 ? "up" : c === 68 ? "down" : "either";
+  let j = wedgeFieldAt(s, i);
+  for (; ; ) {
+    const atom = readIndex(s, j, atomCount, "cxsmiles-bad-wedge");
+    if ("ok" in atom) return atom;
+    if (s.charCodeAt(atom.end) !== 46)
+      return fail4("cxsmiles-bad-wedge", "expected '.' and a bond index after the atom index", atom.end);
+    const bond = readIndex(s, atom.end + 1, bondCount, "cxsmiles-bad-wedge", "bond");
+    if ("ok" in bond) return bond;
+    out.push({ atom: atom.v, bond: bond.v, wedge, offset: j });
+    j = bond.end;
+    if (s.charCodeAt(j) === 44 && isDigit(s.charCodeAt(j + 1))) {
+      j++;
+      continue;
+    }
+    return { ok: true, end: j };
+  }
+}
+function readIndex(s, at2, count3, code, what = "atom") {
   let v = 0;
   let j = at2;
   while (isDigit(s.charCodeAt(j)) && j - at2 < 9) v = v * 10 + s.charCodeAt(j++) - 48;
-  if (v >= atomCount)
-    return fail4(code, `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at2);
+  if (j === at2) return fail4(code, `expected ${what === "atom" ? "an atom" : "a bond"} index`, at2);
+  if (v >= count3)
+    return fail4(code, `${what} index ${v} is out of range (the SMILES has ${count3} ${what}s)`, at2);
   return { v, end: j };
 }
-function parseCxExtension(s, start, atomCount) {
+function applyDrawing(st, { coords, coordsAt, wedges }, atomOffset, warnings) {
+  const bonds = st.bonds.slice();
+  const wedged = new Uint8Array(bonds.length);
+  for (const w of wedges) {
+    const b = bonds[w.bond];
+    if (b.a !== w.atom && b.b !== w.atom)
+      return fail4("cxsmiles-bad-wedge", `atom ${w.atom} is not an end of bond ${w.bond}`, w.offset);
+    if (wedged[w.bond]) return fail4("cxsmiles-bad-wedge", `bond ${w.bond} is given two wedges`, w.offset);
+    wedged[w.bond] = 1;
+    bonds[w.bond] = newBond(w.atom, b.a === w.atom ? b.b : b.a, b.order, b.aromatic, w.wedge);
+  }
+  let dimension = 0;
+  let atoms = st.atoms;
+  if (coords !== null) {
+    if (coords.some((c) => c[2] !== 0)) {
+      warnings.push({
+        code: "cxsmiles-3d-coordinates",
+        message: "the CXSMILES gives 3D coordinates, which are not read; configurations come from the SMILES alone",
+        at: { offset: coordsAt }
+      });
+    } else if (coords.some((c) => c[0] !== coords[0][0] || c[1] !== coords[0][1])) {
+      dimension = 2;
+      atoms = st.atoms.map((a, i) => atomWith(a, { coords: coords[i] }));
+    }
+  }
+  const drawn = newStructure(
+    atoms,
+    bonds,
+    st.stereo,
+    st.groups,
+    st.chiralFlag,
+    st.title,
+    st.properties,
+    dimension
+  );
+  if (dimension === 2 && wedges.length > 0) {
+    const adj = adjacency(atoms.length, bonds);
+    const warn2 = (code, message2, atom) => {
+      warnings.push({ code, message: message2, at: { offset: atomOffset(atom) } });
+    };
+    const axes = biarylAxesFrom2d(drawn, adj, ringBonds(atoms.length, bonds, adj), warn2);
+    if (axes.length > 0) drawn.stereo = [...st.stereo, ...axes];
+  }
+  return drawn;
+}
+var init_cxsmiles_drawing = __esm({
+  "src/chem/read/cxsmiles-drawing.ts"() {
+    "use strict";
+    init_make();
+    init_molfile_graph();
+    init_stereo_2d_axes();
+  }
+});
+
+// src/chem/read/cxsmiles.ts
+function parseCxExtension(s, start, atomCount, bondCount) {
   const n = s.length;
   const groups = objectList();
   const radicals = /* @__PURE__ */ new Map();
+  let coords = null;
+  let coordsAt = -1;
+  const wedges = objectList();
   let i = start + 1;
   for (; ; ) {
     if (i >= n) return fail4("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
     const c = s.charCodeAt(i);
-    if (c === 124) return { ok: true, groups, radicals, end: i + 1 };
+    if (c === 124) return { ok: true, groups, radicals, coords, coordsAt, wedges, end: i + 1 };
+    if (c === 40) {
+      const r = readCoordinates(s, i, atomCount);
+      if (!r.ok) return r;
+      if (coords === null) {
+        coords = r.coords;
+        coordsAt = i;
+      }
+      i = r.end;
+      continue;
+    }
+    if (wedgeFieldAt(s, i) >= 0) {
+      const r = readWedges(s, i, atomCount, bondCount, wedges);
+      if (!r.ok) return r;
+      i = r.end;
+      continue;
+    }
     if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
       const count3 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
       let j2 = i + 3;
@@ -37415,6 +39475,7 @@ var init_cxsmiles = __esm({
   "src/chem/read/cxsmiles.ts"() {
     "use strict";
     init_make();
+    init_cxsmiles_drawing();
   }
 });
 
@@ -37556,7 +39617,7 @@ function augment(root, adj, match) {
   for (let i = 0; i < m; i++) base[i] = i;
   const queue = [root];
   used[root] = 1;
-  let head2 = 0;
+  let head = 0;
   const lca = (a0, b0) => {
     const seen = new Uint8Array(m);
     let a = a0;
@@ -37584,8 +39645,8 @@ function augment(root, adj, match) {
       v = parent[match[v]];
     }
   };
-  while (head2 < queue.length) {
-    const v = queue[head2++];
+  while (head < queue.length) {
+    const v = queue[head++];
     for (const to of adj[v]) {
       if (base[v] === base[to] || match[v] === to) continue;
       if (to === root || match[to] !== -1 && parent[match[to]] !== -1) {
@@ -38482,11 +40543,13 @@ function parse(text) {
   while (i < text.length && isSpace2(text.charCodeAt(i))) i++;
   let groups = null;
   let cxRadicals = null;
+  let cxDrawing = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
-    const cx = parseCxExtension(text, i, n);
+    const cx = parseCxExtension(text, i, n, m);
     if (!cx.ok) return cx;
     groups = cx.groups;
     if (cx.radicals.size > 0) cxRadicals = cx.radicals;
+    if (cx.coords !== null || cx.wedges.length > 0) cxDrawing = cx;
     i = cx.end;
   }
   const title = text.slice(i).trim();
@@ -38569,7 +40632,9 @@ function parse(text) {
     {},
     0
   );
-  return { ok: true, structure, warnings };
+  if (cxDrawing === null) return { ok: true, structure, warnings };
+  const drawn = applyDrawing(structure, cxDrawing, (a) => g.atoms[a].offset, warnings);
+  return "ok" in drawn ? drawn : { ok: true, structure: drawn, warnings };
 }
 function kekulizeGraph(g, order) {
   const n = g.atoms.length;
@@ -38688,6 +40753,7 @@ var init_smiles = __esm({
     "use strict";
     init_make();
     init_cxsmiles();
+    init_cxsmiles_drawing();
     init_kekulize();
     init_smiles_parse();
     init_smiles_stereo();
@@ -38707,19 +40773,60 @@ var init_smiles = __esm({
   }
 });
 
+// src/chem/read/sd-split.ts
+function lostSeparatorMessage(nextRecordLine) {
+  return `the record has no $$$$ line: the next record starts at line ${nextRecordLine} (its counts line follows this record's data); the two were read as separate records`;
+}
+function mergedRecordsMessage(secondEndLine) {
+  return `a second "M  END" at line ${secondEndLine} inside the record's data block: two records merged (a lost $$$$ line and header?); only the first structure was read`;
+}
+var COUNTS_LINE, SdBoundaries, SD_HEADER_LINES;
+var init_sd_split = __esm({
+  "src/chem/read/sd-split.ts"() {
+    "use strict";
+    COUNTS_LINE = /^[ \d]{3}[ \d]{3}.*V[23]000\s*$/;
+    SdBoundaries = class {
+      afterEnd = false;
+      inValue = false;
+      lines = 0;
+      /** Line of a second `M  END` in the record's data block (two records merged), 0 when none. */
+      secondEnd = 0;
+      /** The kind of the next line of the file (`lineNo` 1-based); call `start()` after a separator or a cut. */
+      next(raw2, lineNo) {
+        if (raw2.startsWith("$$$$")) return "separator";
+        if (this.afterEnd && !this.inValue) {
+          if (COUNTS_LINE.test(raw2) && this.lines >= 3) return "next-record";
+          if (raw2.startsWith("M  END") && this.secondEnd === 0) this.secondEnd = lineNo;
+        }
+        if (!this.afterEnd && raw2.startsWith("M  END")) this.afterEnd = true;
+        else if (this.afterEnd) {
+          if (raw2.startsWith(">")) this.inValue = true;
+          else if (raw2.trim() === "") this.inValue = false;
+        }
+        this.lines++;
+        return "line";
+      }
+      /**
+       * A new record: after a separator (`header` = 0), or after a cut at a counts line (`header` = the 3 lines
+       * already read, which belong to the new record). Call `next` for the counts line again afterwards.
+       */
+      start(header = 0) {
+        this.afterEnd = false;
+        this.inValue = false;
+        this.secondEnd = 0;
+        this.lines = header;
+      }
+    };
+    SD_HEADER_LINES = 3;
+  }
+});
+
 // src/chem/read/sdf.ts
 function* readSdRecords(text) {
+  const records = new SdRecordSplitter();
   const lines = splitLines(text);
-  let start = 0;
-  let record = 0;
-  for (let i = 0; i <= lines.length; i++) {
-    if (i < lines.length && !lines[i].startsWith("$$$$")) continue;
-    if (!allBlank(lines, start, i)) {
-      record++;
-      yield { record, line: start + 1, result: readRecord(lines, start, i, start + 1, record) };
-    }
-    start = i + 1;
-  }
+  for (let i = 0; i < lines.length; i++) yield* records.line(lines[i], i + 1);
+  yield* records.end();
 }
 function allBlank(lines, start, end) {
   for (let i = start; i < end; i++) if (lines[i].trim() !== "") return false;
@@ -38794,10 +40901,55 @@ function fieldName(l) {
   if (close === -1) return null;
   return l.slice(open2 + 1, close);
 }
+var SdRecordSplitter;
 var init_sdf = __esm({
   "src/chem/read/sdf.ts"() {
     "use strict";
     init_molfile();
+    init_sd_split();
+    SdRecordSplitter = class {
+      buf = [];
+      first = 1;
+      record = 0;
+      bounds = new SdBoundaries();
+      *line(l, lineNo) {
+        const kind = this.bounds.next(l, lineNo);
+        if (kind === "separator") {
+          yield* this.flush(null);
+          this.buf = [];
+          this.first = lineNo + 1;
+          this.bounds.start();
+          return;
+        }
+        if (kind === "next-record") {
+          const header = this.buf.splice(this.buf.length - SD_HEADER_LINES, SD_HEADER_LINES);
+          const cutAt = lineNo - SD_HEADER_LINES;
+          yield* this.flush({
+            code: "sdf-missing-separator",
+            message: lostSeparatorMessage(cutAt),
+            at: { line: cutAt }
+          });
+          this.buf = header;
+          this.first = cutAt;
+          this.bounds.start(SD_HEADER_LINES);
+          this.bounds.next(l, lineNo);
+        }
+        this.buf.push(l);
+      }
+      *end() {
+        yield* this.flush(null);
+      }
+      *flush(cut) {
+        if (allBlank(this.buf, 0, this.buf.length)) return;
+        this.record++;
+        const record = this.record;
+        let result2 = readRecord(this.buf, 0, this.buf.length, this.first, record);
+        const merged = this.bounds.secondEnd;
+        const problem = cut ?? (merged > 0 ? { code: "sdf-merged-records", message: mergedRecordsMessage(merged), at: { line: merged } } : null);
+        if (problem) result2 = { ok: false, error: { ...problem, at: { ...problem.at, record } } };
+        yield { record, line: this.first, result: result2 };
+      }
+    };
   }
 });
 
@@ -39247,8 +41399,8 @@ function writeSmilesWithOrder(s, opts = {}) {
       const idx = g.atoms.filter((a) => a >= 0 && a < s.atoms.length).map((a) => em.outIndex[a]);
       if (idx.length === 0) continue;
       idx.sort((a, b) => a - b);
-      const head2 = g.type === "abs" ? "a" : g.type === "and" ? `&${g.id}` : `o${g.id}`;
-      parts.push(`${head2}:${idx.join(",")}`);
+      const head = g.type === "abs" ? "a" : g.type === "and" ? `&${g.id}` : `o${g.id}`;
+      parts.push(`${head}:${idx.join(",")}`);
     }
   }
   if (parts.length > 0) smi += ` |${parts.join(",")}|`;
@@ -40141,7 +42293,7 @@ function result(n, nbr, off, edge, dupZ, dupMass) {
       if (bond === null) {
         bond = new PairSet(n);
         for (let a = 0; a < n; a++)
-          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key(n, a, nbr[a][i]));
+          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key2(n, a, nbr[a][i]));
       }
       return bond;
     },
@@ -40151,7 +42303,7 @@ function result(n, nbr, off, edge, dupZ, dupMass) {
     dupMass
   };
 }
-function key(n, a, b) {
+function key2(n, a, b) {
   return a * n + b;
 }
 function markPair(nbr, off, out, v, w) {
@@ -41145,7 +43297,7 @@ var init_compare = __esm({
       }
       sortAt(node, from, level2) {
         const base = this.sorted(node, from, level2 - 1);
-        if (!this.active[level2] || !anyTrue(base.tie)) return base;
+        if (!this.active[level2] || level2 === RULE_4B || !anyTrue(base.tie)) return base;
         const out = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
         for (let i = 0; i < out.nodes.length; ) {
           let j = i + 1;
@@ -61850,7 +64002,7 @@ Actelion Java MolfileCreator 2.0
   p(286, 1, {});
   var wit = M(286), Bl, _f;
   p(292, 1, {}, lp);
-  var HE, So, dr, vl = false, Br, $f, git2 = M(292);
+  var HE, So, dr, vl = false, Br, $f, git3 = M(292);
   p(49, 1, Cf, U8, Js, Kh, qT), U.c = false, U.d = 0;
   var dit = M(49);
   p(63, 197, { 197: 1, 63: 1, 4: 1 }, _D, np), U.Eb = function(e, A) {
@@ -65091,7 +67243,7 @@ function analyse(input, opts = {}) {
   for (let k = 0; k < m; k++) {
     if (!reported[k] && p.units[k].defined && p.units[k].kind !== "planar" && p.structure.dimension !== 3) {
       p.remarks.push(
-        `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
+        `${unitName2(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
       );
     }
   }
@@ -65119,7 +67271,7 @@ function stereogenicSomewhere(g, x, defined, k) {
   }
   return !seenFeasible;
 }
-function unitName(p, k) {
+function unitName2(p, k) {
   const u = p.units[k];
   const s = p.structure;
   return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
@@ -65393,7 +67545,7 @@ function describe(input, opts = {}) {
   let stoppedLabels = 0;
   if (s.stereo.length > 0) {
     for (const r of labelUnits(s)) {
-      if (r.label) labels.set(unitKey(r.atoms), r.label);
+      if (r.label) labels.set(unitKey2(r.atoms), r.label);
       else if (r.stopped) stoppedLabels++;
     }
   }
@@ -65437,7 +67589,7 @@ function describe(input, opts = {}) {
     remarks: p.remarks.slice()
   };
   for (const u of unstatable) {
-    facts.remarks.push(unstatedRemark(u));
+    facts.remarks.push(unstatedRemark(u, s));
   }
   if (openAxes.length > 0) {
     facts.mirror = {
@@ -65492,7 +67644,7 @@ function unitFacts(a, labels) {
     if (!a.reported[k]) return;
     const ck = u.atoms.map((x) => p.classes[x]).sort((x, y) => x - y).join(",") + u.kind;
     if (!classIds.has(ck)) classIds.set(ck, classIds.size);
-    const label = !u.defined || u.kind === "planar" ? null : u.kind === "helix" ? u.bit === 0 ? "P" : "M" : labels.get(unitKey(u.atoms)) ?? null;
+    const label = !u.defined || u.kind === "planar" ? null : u.kind === "helix" ? u.bit === 0 ? "P" : "M" : labels.get(unitKey2(u.atoms)) ?? null;
     let pseudo = label !== null && label === label.toLowerCase();
     if (fullyDefined && u.mode === "parity" && !pseudo) {
       pseudo = group.perms.some((perm, h) => perm[k] === k && mirrorFixed(group, h, state));
@@ -65518,11 +67670,31 @@ function cannotState(kind, dimension) {
   if (kind === "planar") return dimension !== 3;
   return dimension === 0 && (kind === "biaryl" || kind === "helix");
 }
-function unstatedRemark(u) {
+function unstatedRemark(u, s) {
   const [x, y] = u.atoms;
   const what = u.kind === "biaryl" ? `the bond between atoms ${x} and ${y} is a potential stereogenic axis (ortho-substituted biaryl, found by a rule of thumb on ortho substitution: common practice, no source)` : u.kind === "helix" ? `the ortho-fused rings ending at atoms ${x} and ${y} form a helix` : `the trans double bond between atoms ${x} and ${y} lies in a ring of 8–11 atoms and is twisted (planar chiral, as (E)-cyclooctene)`;
-  const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
+  if (u.kind === "biaryl") {
+    const wedge = wedgeNearAxis(s, x, y);
+    if (wedge !== null)
+      return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
+  }
+  const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
   return `${what}; the input format cannot state its configuration: ${then}`;
+}
+function wedgeNearAxis(s, x, y) {
+  const near = /* @__PURE__ */ new Set();
+  for (const b of s.bonds) {
+    const na = s.atoms[b.a].inputNumber;
+    const nb = s.atoms[b.b].inputNumber;
+    if (na === x || na === y) near.add(b.b);
+    if (nb === x || nb === y) near.add(b.a);
+  }
+  for (const b of s.bonds) {
+    if (b.wedge !== "up" && b.wedge !== "down") continue;
+    const na = s.atoms[b.a].inputNumber;
+    if (na === x || na === y || near.has(b.a)) return [na, s.atoms[b.b].inputNumber];
+  }
+  return null;
 }
 function mirrorFixed(g, h, x) {
   const perm = g.perms[h];
@@ -65576,7 +67748,7 @@ function componentFacts(a, parent, copies, ofParent) {
     return f;
   });
 }
-var unitKey;
+var unitKey2;
 var init_describe = __esm({
   "src/chem/describe/describe.ts"() {
     "use strict";
@@ -65590,7 +67762,7 @@ var init_describe = __esm({
     init_mixture();
     init_evidence();
     init_isomer_list();
-    unitKey = (atoms) => [...atoms].sort((a, b) => a - b).join(",");
+    unitKey2 = (atoms) => [...atoms].sort((a, b) => a - b).join(",");
   }
 });
 
@@ -66146,482 +68318,253 @@ var init_chem = __esm({
   }
 });
 
-// src/chem/descriptors-compare.ts
-function key2(label, axialUnit) {
-  if (axialUnit && label === "R") return "M";
-  if (axialUnit && label === "S") return "P";
-  return label;
-}
-function mirrored(k) {
-  return MIRROR[k] ?? k;
-}
-function unitKey2(u) {
-  return u.label === null ? null : key2(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== "cumulene");
-}
-function itemKey(it) {
-  return key2(it.label, it.axial === true);
-}
-function unitLocants(u) {
-  return u.locants.filter((l) => l !== null).sort((a, b) => a - b);
-}
-function count2(keys) {
-  const c = {};
-  for (const k of keys) c[k] = (c[k] ?? 0) + 1;
-  return c;
-}
-function sameCounts(a, b) {
-  const ks = /* @__PURE__ */ new Set([...Object.keys(a), ...Object.keys(b)]);
-  for (const k of ks) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
-  return true;
-}
-function invertCounts(c) {
-  const o = {};
-  for (const [k, v] of Object.entries(c)) o[mirrored(k)] = (o[mirrored(k)] ?? 0) + v;
-  return o;
-}
-function compareDescriptors(parsed, units, options = {}) {
-  const defined = units.filter((u) => u.defined && u.label !== null);
-  const result2 = {
-    method: "none",
-    whyNotPerLocant: null,
-    countsDecide: false,
-    agrees: true,
-    matchedInverted: false,
-    mismatches: [],
-    notStereoUnits: [],
-    undefinedAt: [],
-    unlisted: [],
-    declaredCounts: count2(parsed.items.map(itemKey)),
-    computedCounts: count2(defined.map((u) => unitKey2(u)))
-  };
-  if (parsed.items.length === 0) {
-    result2.whyNotPerLocant = "the descriptor cites no configurations";
-    return result2;
-  }
-  const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
-  const mapped = units.some((u) => unitLocants(u).length > 0);
-  const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
-  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
-  if (mapped && numeric || single) {
-    result2.method = single ? "per-unit" : "per-locant";
-    const byLocant2 = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
-    const pairs = single ?? [];
-    if (!single) {
-      for (const it of parsed.items) {
-        const u = byLocant2(Number(it.locant));
-        if (!u) result2.notStereoUnits.push(it.locant);
-        else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
-        else pairs.push({ it, u });
-      }
-    }
-    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
-      locant: it.locant ?? "",
-      declared: it.pair ?? it.label + (it.axial ? "a" : ""),
-      computed: u.label,
-      atoms: u.atoms
-    }));
-    const direct2 = mismatchesFor(false);
-    const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
-    result2.matchedInverted = mayInvert && inverted2.length < direct2.length;
-    result2.mismatches = result2.matchedInverted ? inverted2 : direct2;
-    const cited = new Set(pairs.map((p) => p.u));
-    for (const u of defined) {
-      if (!cited.has(u)) {
-        result2.unlisted.push({
-          locant: single ? null : unitLocants(u)[0]?.toString() ?? null,
-          label: u.label,
-          atoms: u.atoms
-        });
-      }
-    }
-    result2.agrees = result2.mismatches.length === 0 && result2.notStereoUnits.length === 0 && result2.undefinedAt.length === 0;
-    return result2;
-  }
-  result2.method = "counts";
-  result2.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
-  const direct = sameCounts(result2.declaredCounts, result2.computedCounts);
-  const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
-  result2.agrees = direct || inverted;
-  result2.matchedInverted = !direct && inverted;
-  result2.countsDecide = result2.agrees && countsDecide(parsed.items, units, mayInvert);
-  return result2;
-}
-function kindOfKey(k) {
-  if (k === "R" || k === "S") return "RS";
-  if (k === "r" || k === "s") return "rs";
-  if (k === "M" || k === "P") return "MP";
-  if (k === "m" || k === "p") return "mp";
-  if (k === "E" || k === "Z" || k === "e" || k === "z") return "EZ";
-  return "other";
-}
-function kindOfUnit(u) {
-  const k = unitKey2(u);
-  if (k !== null) return kindOfKey(k);
-  if (u.kind === "tetrahedral") return u.pseudoasymmetric ? "rs" : "RS";
-  if (u.kind === "double-bond") return "EZ";
-  if (u.kind === "allene" || u.kind === "biaryl") return "MP";
-  return "other";
-}
-function matchOnePerKind(items, units) {
-  if (units.some((u) => kindOfUnit(u) === "other")) return null;
-  const pairs = [];
-  for (const it of items) {
-    const kind = kindOfKey(itemKey(it));
-    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
-    const sameKindUnits = units.filter((u2) => kindOfUnit(u2) === kind);
-    if (kind === "other" || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
-    const u = sameKindUnits[0];
-    if (!u.defined || u.label === null) return null;
-    pairs.push({ it, u });
-  }
-  return pairs;
-}
-function countsDecide(items, units, mayInvert) {
-  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
-  let chiralUnits = 0;
-  let uniform = true;
-  for (const kind of kinds) {
-    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
-    if (kind === "other" || ofKind.some((u) => !u.defined || u.label === null)) return false;
-    if (kind === "RS" || kind === "MP") chiralUnits += ofKind.length;
-    if (new Set(ofKind.map((u) => unitKey2(u))).size > 1) {
-      if (!(mayInvert && kind === "RS" && ofKind.length === 2)) return false;
-      uniform = false;
+// src/audit/engine.ts
+function heavyAtomCandidates(formula) {
+  const bases = [];
+  const sign = formula.endsWith("+") || formula.endsWith("-");
+  if (!sign) bases.push(formula);
+  else {
+    const body = formula.slice(0, -1);
+    const digits = /\d*$/.exec(body)[0];
+    const prefix = body.slice(0, body.length - digits.length);
+    const count3 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
+    for (let i = 0; i <= digits.length; i++) {
+      const own2 = digits.slice(0, i);
+      if (count3(own2) && count3(digits.slice(i))) bases.push(prefix + own2);
     }
   }
-  return uniform || chiralUnits === 2;
+  return [...new Set(bases.map((b) => b.replace(/H(?![a-z])\d*/g, "")))];
 }
-var MIRROR, AXIAL_KINDS;
-var init_descriptors_compare = __esm({
-  "src/chem/descriptors-compare.ts"() {
-    "use strict";
-    MIRROR = { R: "S", S: "R", M: "P", P: "M" };
-    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene", "helix"]);
-  }
-});
-
-// src/chem/descriptors.ts
-function foldSigns(text) {
-  let out = "";
-  for (const ch of text) out += MINUS_LIKE.includes(ch) ? "-" : PLUS_LIKE.includes(ch) ? "+" : ch;
-  return out;
-}
-function parseDescriptors(input, options = {}) {
-  const context = options.context ?? "descriptor";
-  const out = {
-    mode: "none",
-    rotationSign: null,
-    items: [],
-    problems: [],
-    problemDetails: [],
-    remarks: [],
-    prefixes: [],
-    words: [],
-    fischer: null,
-    rest: "",
-    embeddedDescriptors: false
-  };
-  const problem = (offset, message2) => {
-    out.problemDetails.push({ offset, message: message2 });
-    out.problems.push(`at character ${offset}: ${message2}`);
-  };
-  const signs = [];
-  let i = skipSpace(input, 0);
-  for (; ; ) {
-    if (i >= input.length) break;
-    const ch = input[i];
-    let consumed = false;
-    if (ch === "(" || ch === "[") {
-      const close = ch === "(" ? ")" : "]";
-      const end = input.indexOf(close, i + 1);
-      const inner = end < 0 ? "" : input.slice(i + 1, end);
-      if (end >= 0 && !/[([]/.test(inner)) {
-        const g = parseGroup(inner, i + 1, context, problem);
-        if (g.kind !== "not-stereo") {
-          consumed = true;
-          if (g.sign) signs.push({ sign: g.sign, offset: i });
-          out.items.push(...g.items);
-          for (const w of g.words) addWord(out, w);
-          if (g.legacyPair) {
-            out.legacyPair = true;
-            out.remarks.push(
-              `${g.legacyPair} without locants is the legacy way of naming a racemate and is read as (${g.items[0].pair}); IUPAC 2013 (P-93.1.3) writes (RS) or rac-`
-            );
-          }
-          i = end + 1;
-        }
-      } else if (end < 0 && context === "descriptor") {
-        problem(i, `'${ch}' is never closed`);
-        i = input.length;
-        break;
-      }
-    } else {
-      const m = WORD_PREFIX.exec(input.slice(i));
-      const word = m?.[1];
-      const next = m ? input[i + m[0].length] : void 0;
-      if (word && (context === "descriptor" || next !== void 0 && HYPHENS.includes(next))) {
-        consumed = true;
-        if (word === "rac" || word === "rel") out.prefixes.push(word);
-        else if (word === "D" || word === "L") out.fischer = word;
-        else if (word === "DL" || word === "D,L") out.fischer = "DL";
-        else if (word === "d") signs.push({ sign: "+", offset: i });
-        else if (word === "l") signs.push({ sign: "-", offset: i });
-        else if (word === "dl" || word === "d,l") signs.push({ sign: "±", offset: i });
-        else addWord(out, word);
-        if (word === "d" || word === "l" || word === "dl" || word === "d,l") {
-          out.remarks.push(
-            `'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`
-          );
-        }
-        i += word.length;
-      }
-    }
-    if (!consumed) break;
-    i = skipSpace(input, i);
-    if (i < input.length && HYPHENS.includes(input[i])) i = skipSpace(input, i + 1);
-  }
-  out.rest = input.slice(i).trim();
-  if (context === "descriptor" && out.rest !== "") {
-    problem(i, `'${out.rest.slice(0, 20)}' is not a stereodescriptor`);
-  }
-  out.embeddedDescriptors = /[([](?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?(?:,\s*(?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?)*[)\]]/.test(
-    out.rest
-  );
-  finish(out, signs, problem);
-  return out;
-}
-function skipSpace(s, i) {
-  while (i < s.length && /\s/.test(s[i])) i++;
-  return i;
-}
-function addWord(out, w) {
-  if (!out.words.includes(w)) out.words.push(w);
-}
-function parseGroup(inner, base, context, problem) {
-  const compact = inner.replace(/\s+/g, "");
-  const sign = SIGNS[foldSigns(compact)];
-  if (sign) return { kind: "sign", sign, items: [], words: [] };
-  const legacy = /^([RS])[,/]([RS])$/.exec(compact);
-  if (legacy && legacy[1] !== legacy[2]) {
-    const pair = legacy[1] === "R" ? "RS" : "SR";
-    return {
-      kind: "items",
-      items: [{ locant: null, label: pair[0], pair, offset: base + inner.indexOf(legacy[1]) }],
-      words: [],
-      legacyPair: `(${legacy[1]}${compact[1]}${legacy[2]})`
-    };
-  }
-  const parts = [];
-  let start = 0;
-  for (let k = 0; k <= inner.length; k++) {
-    if (k === inner.length || inner[k] === ",") {
-      const raw2 = inner.slice(start, k);
-      const lead = raw2.length - raw2.trimStart().length;
-      parts.push({ text: raw2.trim(), offset: base + start + lead });
-      start = k + 1;
-    }
-  }
-  const items = [];
-  const words = [];
-  const bad2 = [];
-  for (const p of parts) {
-    const m = ITEM.exec(p.text);
-    if (m) {
-      const [, loc, lab, ax, star] = m;
-      const item = { locant: loc ?? null, label: lab[0], offset: p.offset };
-      if (lab === "RS" || lab === "SR") item.pair = lab;
-      if (star) item.relativeStar = true;
-      if (ax) {
-        if (lab === "R" || lab === "S") item.axial = true;
-        else {
-          bad2.push(p);
-          continue;
-        }
-      }
-      items.push(item);
-    } else if (WORDS.includes(p.text.toLowerCase())) {
-      words.push(p.text.toLowerCase());
-    } else {
-      bad2.push(p);
-    }
-  }
-  if (items.length === 0 && words.length === 0) {
-    if (context === "name") return { kind: "not-stereo", items: [], words: [] };
-  }
-  for (const b of bad2) {
-    problem(
-      b.offset,
-      b.text === "" ? "empty stereodescriptor" : `'${b.text}' is not a stereodescriptor (P-93)`
-    );
-  }
-  return { kind: "items", items, words };
-}
-function finish(out, signs, problem) {
-  const distinct = [...new Set(signs.map((s) => s.sign))];
-  if (distinct.length > 1) {
-    problem(signs[1].offset, `conflicting signs of rotation: ${distinct.map((s) => `(${s})`).join(" and ")}`);
-  }
-  out.rotationSign = signs[0]?.sign ?? null;
-  const seen = /* @__PURE__ */ new Map();
-  for (const it of out.items) {
-    if (it.locant === null) continue;
-    if (seen.has(it.locant)) problem(it.offset, `locant ${it.locant} is given twice`);
-    seen.set(it.locant, it.offset);
-  }
-  const stars = out.items.filter((it) => it.relativeStar).length;
-  const pairs = out.items.filter((it) => it.pair).length;
-  const chiralItems = out.items.filter(
-    (it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P"
-  );
-  if (stars > 0 && stars < chiralItems.length) {
-    problem(
-      out.items.find((it) => !it.relativeStar && chiralItems.includes(it)).offset,
-      "some descriptors carry * and others do not"
-    );
-  }
-  if (pairs > 0 && pairs < chiralItems.length) {
-    out.remarks.push(
-      "RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate"
-    );
-  }
-  const racemic = out.prefixes.includes("rac") || pairs > 0 || out.rotationSign === "±" || out.fischer === "DL";
-  const relative4 = out.prefixes.includes("rel") || stars > 0;
-  if (racemic && relative4) {
-    out.remarks.push(
-      "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed, read as racemic; IUPAC 2013 (P-93.1.3) uses one of them"
-    );
-  }
-  if (out.prefixes.includes("rel") && pairs > 0)
-    problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
-  if (out.prefixes.includes("rel") && out.items.length === 0) {
-    out.remarks.push("'rel-' without descriptors states no configuration");
-  }
-  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs === 0) {
-    out.remarks.push(
-      "(±) with descriptors of one enantiomer is read as rac-(…); IUPAC 2013 (P-93.1.3) writes rac-(…) or (…RS,…SR)"
-    );
-  }
-  if (racemic) out.mode = "racemic";
-  else if (relative4) out.mode = "relative";
-  else if (out.items.length > 0) out.mode = "absolute";
-  else out.mode = "none";
-  if ((racemic || relative4) && chiralItems.some((it) => it.locant !== null)) {
-    const first = [...chiralItems].sort((a, b) => locantOrder(a.locant) - locantOrder(b.locant))[0];
-    if (first.label === "S" || first.label === "P") {
-      out.remarks.push(
-        `P-93.1.3 cites the lowest-locant centre as R (R* or RS); ${first.locant ?? ""}${first.pair ?? first.label} comes first here`
-      );
-    }
-  }
-  const unlocated = out.items.filter((it) => it.locant === null);
-  if (unlocated.length > 1 && unlocated.some((it) => it.label === "R") && unlocated.some((it) => it.label === "S")) {
-    out.remarks.push("(R,S) without locants is ambiguous: for a racemate P-93.1.3 writes (RS)");
-  }
-}
-function locantOrder(locant) {
-  if (locant === null) return Number.MAX_SAFE_INTEGER;
-  const n = parseInt(locant, 10);
-  return Number.isNaN(n) ? Number.MAX_SAFE_INTEGER : n * 100 + locant.length;
-}
-var WORDS, MINUS_LIKE, HYPHENS, PLUS_LIKE, SIGNS, WORD_PREFIX, ITEM;
-var init_descriptors = __esm({
-  "src/chem/descriptors.ts"() {
-    "use strict";
-    init_descriptors_compare();
-    WORDS = ["meso", "cis", "trans", "erythro", "threo", "endo", "exo", "syn", "anti"];
-    MINUS_LIKE = "-‐‑‒–—−﹣－˗";
-    HYPHENS = MINUS_LIKE;
-    PLUS_LIKE = "+＋";
-    SIGNS = {
-      "+": "+",
-      "-": "-",
-      "±": "±",
-      "+/-": "±",
-      "+-": "±"
-    };
-    WORD_PREFIX = new RegExp(
-      `^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\\s(${MINUS_LIKE.replace("-", "\\-")}]|$)`
-    );
-    ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
-  }
-});
-
-// src/checks/words.ts
-function unitName2(u) {
-  const loc = (k) => u.locants[k] !== null && u.locants[k] !== void 0 ? String(u.locants[k]) : "";
-  if (u.kind === "tetrahedral") return `${u.element}${loc(0)} (atom ${u.atoms[0]})`;
-  const ends = u.atoms.join(", ");
-  const what = u.kind === "double-bond" ? "double bond" : u.kind === "biaryl" ? "biaryl axis" : u.kind === "helix" ? "helix" : `${u.kind} axis`;
-  const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join("=C")}` : "";
-  return `${what}${mapped} (atoms ${ends})`;
-}
-function atomsInRecordTerms(text, s) {
-  if (!s) return text;
-  const byNumber = new Map(s.atoms.map((a) => [a.inputNumber, a]));
-  return text.replace(/\b([A-Z][a-z]?)(\d+)\b/g, (whole, el, num2) => {
-    const a = byNumber.get(Number(num2));
-    if (!a || a.element !== el) return whole;
-    return a.mapNumber !== null ? `${el}${a.mapNumber} (atom ${num2})` : `${el} (atom ${num2})`;
+function heavyFormula(elements, wildcards) {
+  const counts = /* @__PURE__ */ new Map();
+  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
+  const order = [...counts.keys()].sort((x, y) => {
+    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
+    return x < y ? -1 : x > y ? 1 : 0;
   });
+  let out = "";
+  for (const e of order) {
+    const c = counts.get(e);
+    out += c === 1 ? e : `${e}${c}`;
+  }
+  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
+  return out;
 }
-function listUnits(units) {
-  return units.length === 0 ? "none" : units.map(unitName2).join(", ");
-}
-function unitSummary(units) {
-  const centres = units.filter((u) => u.kind === "tetrahedral").length;
-  const bonds = units.filter((u) => u.kind === "double-bond").length;
-  const axes = units.length - centres - bonds;
-  const parts = [];
-  if (centres) parts.push(`${centres} stereocentre${centres === 1 ? "" : "s"}`);
-  if (bonds) parts.push(`${bonds} stereogenic double bond${bonds === 1 ? "" : "s"}`);
-  if (axes) parts.push(`${axes} stereogenic ax${axes === 1 ? "is" : "es"}`);
-  return parts.length ? parts.join(" and ") : "no stereo units";
-}
-function definedUnits(f) {
-  return f.units.filter((u) => u.defined);
-}
-function undefinedUnits(f) {
-  return f.units.filter((u) => !u.defined);
-}
-function labelList(units) {
-  const l = units.filter((u) => u.defined).map((u) => `${unitName2(u)} ${u.label ?? "unranked"}`);
-  return l.length ? l.join(", ") : "none";
-}
-function declaredDescriptors(record) {
-  const d = record?.stereo.descriptors;
-  const n = record?.name;
+async function defaultEngine(settings = {}) {
+  const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
+  const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
+  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
   return {
-    field: d !== void 0 && d.trim() !== "" ? parseDescriptors(d) : null,
-    name: n !== void 0 && n.trim() !== "" ? parseDescriptors(n, { context: "name" }) : null
+    readStructure: (text, options) => chem.readStructure(text, options),
+    describe: settings.axisOrthoMin === void 0 ? (s) => chem.describe(s) : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
+    relate: (a, b) => chem.relate(a, b),
+    formula: (s) => graph.molecularFormula(s),
+    smilesHeavyAtoms: (smiles) => {
+      let start = 0;
+      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
+      let g;
+      try {
+        g = syntax.parseSmilesGraph(smiles, start);
+      } catch {
+        return null;
+      }
+      if ("error" in g) return null;
+      const heavy = [];
+      let wildcards = 0;
+      for (const a of g.atoms) {
+        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
+        else if (a.atomicNumber !== 1) heavy.push(a.element);
+      }
+      return heavyFormula(heavy, wildcards);
+    }
   };
 }
-function declaredSign(record) {
-  const { field, name } = declaredDescriptors(record);
-  if (field?.rotationSign) return { sign: field.rotationSign, field: "stereo.descriptors" };
-  if (name?.rotationSign) return { sign: name.rotationSign, field: "name" };
-  return null;
-}
-function finding(messageId, field, data, severity) {
-  const f = { messageId, field, data };
-  if (severity) f.severity = severity;
-  return f;
-}
-function fmt(n) {
-  return Number.isInteger(n) ? String(n) : String(Math.round(n * 100) / 100);
-}
-var STEREO_CLAIM_FORMS;
-var init_words = __esm({
-  "src/checks/words.ts"() {
+var init_engine = __esm({
+  "src/audit/engine.ts"() {
     "use strict";
-    init_descriptors();
-    STEREO_CLAIM_FORMS = [
-      "meso",
-      "single-enantiomer",
-      "enantioenriched",
-      "racemate",
-      "single-diastereomer",
-      "diastereomer-mixture"
-    ];
+  }
+});
+
+// src/audit/findings.ts
+function resolveSeverity(base, own2, configured, configuredForMessage) {
+  if (configuredForMessage !== void 0) return configuredForMessage;
+  const level2 = own2 ?? base;
+  if (configured === void 0 || level2 === "note") return level2;
+  return configured;
+}
+function messageKey(checkId, messageId) {
+  return `${checkId}/${messageId}`;
+}
+function configuredSeverity(config, key4) {
+  return Object.prototype.hasOwnProperty.call(config.severities, key4) ? config.severities[key4] : void 0;
+}
+function lineFor(loaded, field) {
+  if (field !== null) {
+    const line = lineOf(loaded.positions, field);
+    if (line !== null) return line;
+  }
+  return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
+}
+function messageEnabled(config, checkId, messageId) {
+  return configuredSeverity(config, messageKey(checkId, messageId)) !== "off";
+}
+function toFinding(check, raw2, loaded, config) {
+  const configured = configuredSeverity(config, check.id);
+  const forMessage = configuredSeverity(config, messageKey(check.id, raw2.messageId));
+  const template = check.messages[raw2.messageId];
+  const message2 = template !== void 0 ? render(template, raw2.data ?? {}) : `${raw2.messageId}${Object.keys(raw2.data ?? {}).length ? ` (${JSON.stringify(raw2.data)})` : ""}`;
+  return {
+    check: check.id,
+    messageId: raw2.messageId,
+    severity: resolveSeverity(
+      check.defaultSeverity,
+      raw2.severity,
+      configured === "off" ? void 0 : configured,
+      forMessage === "off" ? void 0 : forMessage
+    ),
+    message: message2,
+    data: raw2.data ?? {},
+    line: lineFor(loaded, raw2.field ?? null),
+    field: raw2.field ?? null,
+    waived: null,
+    ...raw2.fix === void 0 ? {} : { fix: raw2.fix }
+  };
+}
+function applyWaivers(findings, loaded) {
+  const waivers = loaded.record?.waivers ?? [];
+  if (waivers.length === 0) return;
+  for (const f of findings) {
+    if (f.check === INTERNAL_ERROR_ID) continue;
+    f.waived = acceptingWaiver(waivers, f);
+  }
+}
+function internalError(check, error2, loaded) {
+  const text = error2 instanceof Error ? error2.message : String(error2);
+  return {
+    check: INTERNAL_ERROR_ID,
+    messageId: "check-failed",
+    severity: "error",
+    message: `The check ${check.id} failed with an internal error (${text}), so this record was not fully checked. This is a fault in stereogate, not in the record: please report it with the record attached.`,
+    data: { check: check.id, error: text },
+    line: loaded.origin.kind === "bulk" ? loaded.origin.line : null,
+    field: null,
+    waived: null
+  };
+}
+function budgetFinding(loaded, kind, limit) {
+  const what = kind === "time" ? `took longer than the ${limit / 1e3} s time limit` : `needed more than the ${limit} MB memory bound`;
+  return {
+    check: TIME_LIMIT_ID,
+    messageId: kind === "time" ? "time-limit-exceeded" : "memory-bound-exceeded",
+    severity: "error",
+    message: `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, leave out repeated salt or solvent parts).`,
+    data: { kind, limit },
+    line: loaded.origin.kind === "bulk" ? loaded.origin.line : lineOf(loaded.positions, "structure"),
+    field: null,
+    waived: null
+  };
+}
+function schemaFindings(loaded, config) {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  if (configured === "off") return [];
+  return loaded.problems.map((p) => ({
+    check: SCHEMA_CHECK_ID,
+    messageId: p.code ?? "record-problem",
+    severity: configured ?? "error",
+    message: p.message,
+    data: { path: p.path, problem: p.message },
+    line: p.line ?? (loaded.origin.kind === "bulk" ? loaded.origin.line : null),
+    field: p.path === "" ? null : p.path,
+    waived: null
+  }));
+}
+var SCHEMA_CHECK_ID, INTERNAL_ERROR_ID, TIME_LIMIT_ID;
+var init_findings = __esm({
+  "src/audit/findings.ts"() {
+    "use strict";
+    init_waivers();
+    init_words();
+    init_positions();
+    SCHEMA_CHECK_ID = "record-schema";
+    INTERNAL_ERROR_ID = "internal-error";
+    TIME_LIMIT_ID = "record-time-limit";
+  }
+});
+
+// src/audit/select.ts
+import { isAbsolute as isAbsolute3, relative as relative2, sep as sep2 } from "node:path";
+function normalizePath(root, path) {
+  const rel = isAbsolute3(path) ? relative2(root, path) : path;
+  const parts = [];
+  for (const part of rel.split(/[\\/]+/)) {
+    if (part === "" || part === ".") continue;
+    if (part === "..") parts.pop();
+    else parts.push(part);
+  }
+  return parts.join("/");
+}
+function byMolfile(records) {
+  const users = /* @__PURE__ */ new Map();
+  const add = (file, r) => {
+    if (file === void 0) return;
+    const list = users.get(file);
+    if (!list) users.set(file, [r]);
+    else if (list[list.length - 1] !== r) list.push(r);
+  };
+  for (const r of records) {
+    const s = r.sources;
+    if (!s) continue;
+    add(s.main?.file, r);
+    for (const c of s.components) add(c.file, r);
+  }
+  return users;
+}
+function lowerBound(sorted, file) {
+  let lo = 0;
+  let hi = sorted.length;
+  while (lo < hi) {
+    const mid = lo + hi >>> 1;
+    if (sorted[mid].file < file) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+function selectRecords(records, root, paths) {
+  const selected = /* @__PURE__ */ new Set();
+  const unmatched = [];
+  let users = null;
+  let sorted = null;
+  for (const given of paths) {
+    const p = normalizePath(root, given);
+    const escapes2 = isAbsolute3(given) && (relative2(root, given).startsWith(`..${sep2}`) || relative2(root, given) === "..");
+    let hit = false;
+    if (!escapes2) {
+      sorted ??= [...records].sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+      if (p === "") {
+        for (const r of records) selected.add(r);
+        hit = records.length > 0;
+      }
+      for (const start of p === "" ? [] : [p, `${p}/`]) {
+        for (let i = lowerBound(sorted, start); i < sorted.length; i++) {
+          const r = sorted[i];
+          if (start === p ? r.file !== p : !r.file.startsWith(start)) break;
+          selected.add(r);
+          hit = true;
+        }
+      }
+      users ??= byMolfile(records);
+      for (const r of users.get(p) ?? []) {
+        selected.add(r);
+        hit = true;
+      }
+    }
+    if (!hit) unmatched.push(given);
+  }
+  return { selected, unmatched };
+}
+var init_select = __esm({
+  "src/audit/select.ts"() {
+    "use strict";
   }
 });
 
@@ -66683,13 +68626,13 @@ function conditions(r) {
 function isSodiumD(nm) {
   return nm === void 0 || Math.abs(nm - 589) <= 1;
 }
-function run(ctx) {
+function run2(ctx) {
   const record = ctx.record;
-  if (!record) return { findings: [], notApplicable: true };
+  if (!record) return { findings: [], notApplicable: "the record was not read" };
   const form = record.stereo.form;
   const rot2 = record.stereo.rotation;
   const sign = declaredSign(record);
-  if (!rot2) return { findings: [], notApplicable: true };
+  if (!rot2) return { findings: [], notApplicable: "no rotation given (stereo.rotation)" };
   const tol = ctx.config.zeroRotationTolerance;
   const out = [];
   const base = { form, value: rot2.value, conditions: conditions(rot2), tolerance: tol };
@@ -66727,13 +68670,13 @@ function run(ctx) {
     passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}`
   };
 }
-var messages, WHY, rotationConsistent;
+var messages2, WHY, rotationConsistent;
 var init_rotation_consistent = __esm({
   "src/checks/rotation-consistent.ts"() {
     "use strict";
     init_words();
     init_fixes();
-    messages = {
+    messages2 = {
       "rotation-should-be-zero": "Declared {form}, but the specific rotation is {value}° ({conditions}); it should be zero within ±{tolerance}°, because {why}. Check the sample (an enantiomeric excess, an optically active impurity) or the form.",
       "sign-disagrees-with-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}). Correct the sign in the name or descriptors, or re-check the measurement.{wavelengthNote}",
       "sign-with-zero-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. A sign needs a measurable rotation: measure at higher concentration or another wavelength, or drop the sign.",
@@ -66749,8 +68692,8 @@ var init_rotation_consistent = __esm({
       defaultSeverity: "error",
       summary: "The specific rotation agrees with the declared form and with the (+)/(−) sign in the name.",
       explanation: "Optical activity needs chiral molecules in enantiomeric excess: an achiral or meso compound is optically inactive, and a racemate is optically inactive because its enantiomers rotate equally in opposite senses (IUPAC Gold Book: optical activity, racemate, meso). The prefixes (+) and (−) state the sign of rotation, normally at the sodium D line, 589 nm (IUPAC 2013, P-93). A single enantiomer with zero rotation is possible but rare and is only noted. What counts as zero is a registry setting (zeroRotationTolerance).",
-      messages,
-      run
+      messages: messages2,
+      run: run2
     };
   }
 });
@@ -66913,20 +68856,20 @@ function compareWithRegistry(me, matches, mode, config, underReview = () => fals
     }
   }
   const identical = pairs.filter((p) => p.relation === "identical").length;
-  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${identical} other record(s)` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${compared - identical} registered record(s)` : ""}; forms and rotations agree`;
+  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}; forms and rotations agree`;
   return { findings: out, passed, pairs };
 }
-function run2() {
-  return { findings: [], notApplicable: true };
+function run3() {
+  return { findings: [], notApplicable: "runs in the registry-wide phase" };
 }
-var messages2, ENANTIOPURE, consistentWithRegistry;
+var messages3, ENANTIOPURE, consistentWithRegistry;
 var init_consistent_with_registry = __esm({
   "src/checks/consistent-with-registry.ts"() {
     "use strict";
     init_rotation_consistent();
     init_solvents();
     init_words();
-    messages2 = {
+    messages3 = {
       "already-registered": "This structure is identical to {otherId} ({otherFile}{otherName}), already registered as {otherForm}. Register a new batch under {otherId} instead, or, if this is a different substance, correct the structure.",
       "same-structure-different-form": "This structure is identical to {otherId} ({otherFile}), but {otherId} is registered as {otherForm} and this record declares {form}. The same drawn structure cannot be both; decide which form is right and correct the other record.",
       "same-structure-other-purity": "This structure is identical to {otherId} ({otherFile}), registered as {otherForm}; this record declares {form}. The same enantiomer at another enantiomeric purity: register it as a batch of {otherId} if your SOP allows, or keep it separate on purpose.",
@@ -66942,11 +68885,524 @@ var init_consistent_with_registry = __esm({
       defaultSeverity: "error",
       summary: "A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.",
       explanation: "Every record contributes keys to a registry index: its constitution, and each stereo unit's canonical class with its CIP descriptor (IUPAC 2013, P-92.1), as drawn and as its mirror image (src/registry/keys.ts). Two records with equal keys are the same stereoisomer; one whose key equals the other's mirror key is its enantiomer (where the keys cannot tell, the engine relates the two structures). An identical structure is the same compound: register a batch, not a new number; under a different form one record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). A racemic drawing (AND group) is compared only with racemic drawings, a relative one (OR group) only with relative ones; a drawing with undefined stereo units is compared with none. Each finding is said once (common practice, no source): in a pull request on the record under review (on the one registered later when both are); in a full audit on the later record in the audit's order (file path order, numbers as numbers; input order for exports), and enantiomer pairs and duplicates are listed once in the summary. Registering both enantiomers is normal and is not a finding of a full audit.",
-      messages: messages2,
+      messages: messages3,
       requires: ["structure", "registry"],
       scope: "registry",
-      run: run2
+      run: run3
     };
+  }
+});
+
+// src/registry/keys.ts
+function drawingKind(f) {
+  const m = f.enhanced.meaning;
+  if (m === "racemic" || m === "mixture") return "racemic";
+  if (m === "relative") return "relative";
+  return "as-drawn";
+}
+function recordKeys(f, text) {
+  const kind = drawingKind(f);
+  const base = { constitution: f.constitutionKey, kind, chiral: f.chiral };
+  if (f.units.some((u) => !u.defined)) return { ...base, stereo: null, mirror: null, exact: false };
+  let exact = true;
+  const seen = /* @__PURE__ */ new Set();
+  const own2 = [];
+  const mirrored2 = [];
+  for (const u of f.units) {
+    if (seen.has(u.classKey) || u.label === null || u.label === "e" || u.label === "z") exact = false;
+    seen.add(u.classKey);
+    const label = u.label === null ? "?" : u.label === "e" || u.label === "z" ? "ez" : u.label;
+    own2.push(`${u.classKey}=${label}`);
+    mirrored2.push(`${u.classKey}=${(u.label && MIRRORED[u.label]) ?? label}`);
+  }
+  own2.sort();
+  mirrored2.sort();
+  const keys = {
+    ...base,
+    stereo: `${kind}|${own2.join(";")}`,
+    mirror: `${kind}|${mirrored2.join(";")}`,
+    exact
+  };
+  if (!exact && text) keys.text = text;
+  return keys;
+}
+var MIRRORED;
+var init_keys = __esm({
+  "src/registry/keys.ts"() {
+    "use strict";
+    MIRRORED = { R: "S", S: "R", M: "P", P: "M" };
+  }
+});
+
+// src/audit/structures.ts
+function failed(message2, line = null, offset = null, code) {
+  return { structure: null, facts: null, error: { message: message2, line, offset, ...code ? { code } : {} } };
+}
+function readOnly(source, engine2) {
+  if (source === null) return { structure: null, failure: NOTHING };
+  if (source.text === null)
+    return { structure: null, failure: failed(source.error ?? "the structure could not be read") };
+  let read;
+  try {
+    read = engine2.readStructure(source.text, { format: source.format });
+  } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
+    const what = source.format === "smiles" ? "SMILES" : "molfile";
+    return {
+      structure: null,
+      failure: failed(`internal error while reading the ${what}: ${e.message}`)
+    };
+  }
+  if (!read.ok) {
+    const what = source.format === "smiles" ? "SMILES" : source.file ? `molfile ${source.file}` : "molfile";
+    return {
+      structure: null,
+      failure: failed(
+        `${what}: ${read.error.message}`,
+        read.error.at.line ?? null,
+        read.error.at.offset ?? null,
+        read.error.code
+      )
+    };
+  }
+  return { structure: read.structure, failure: null };
+}
+function describeRead(read, engine2) {
+  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
+  try {
+    return { structure: read.structure, facts: engine2.describe(read.structure), error: null };
+  } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
+    return {
+      structure: read.structure,
+      facts: null,
+      error: {
+        message: `internal error while describing the structure: ${e.message}`,
+        line: null,
+        offset: null
+      }
+    };
+  }
+}
+function readSource(source, engine2) {
+  return describeRead(readOnly(source, engine2), engine2);
+}
+function sourcesOf(loaded) {
+  if (loaded.sources) return loaded.sources;
+  const rec = loaded.record;
+  const one = (ref, field) => {
+    if (!ref) return null;
+    if (typeof ref.smiles === "string") return { field, format: "smiles", text: ref.smiles };
+    if (typeof ref.molfile === "string") {
+      return {
+        field,
+        format: "molfile",
+        text: null,
+        error: `molfile '${ref.molfile}' was not fetched (no file context)`
+      };
+    }
+    return null;
+  };
+  const components = (rec?.stereo.components ?? []).map(
+    (c, i) => one(c, `stereo.components.${i}`) ?? {
+      field: `stereo.components.${i}`,
+      format: "smiles",
+      text: null,
+      error: "no structure given"
+    }
+  );
+  return { main: one(rec?.structure, "structure"), components };
+}
+var NOTHING, StructureCache;
+var init_structures = __esm({
+  "src/audit/structures.ts"() {
+    "use strict";
+    init_budget();
+    NOTHING = Object.freeze({
+      structure: null,
+      facts: null,
+      error: {
+        message: "the record gives no structure (structure.smiles or structure.molfile)",
+        line: null,
+        offset: null
+      }
+    });
+    StructureCache = class {
+      constructor(engine2) {
+        this.engine = engine2;
+      }
+      engine;
+      reads = /* @__PURE__ */ new WeakMap();
+      mains = /* @__PURE__ */ new WeakMap();
+      comps = /* @__PURE__ */ new WeakMap();
+      /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
+      read(loaded) {
+        let r = this.reads.get(loaded);
+        if (!r) {
+          r = readOnly(sourcesOf(loaded).main, this.engine);
+          this.reads.set(loaded, r);
+        }
+        return r;
+      }
+      main(loaded) {
+        let m = this.mains.get(loaded);
+        if (!m) {
+          m = describeRead(this.read(loaded), this.engine);
+          this.mains.set(loaded, m);
+        }
+        return m;
+      }
+      components(loaded) {
+        let c = this.comps.get(loaded);
+        if (!c) {
+          c = sourcesOf(loaded).components.map((s) => readSource(s, this.engine));
+          this.comps.set(loaded, c);
+        }
+        return c;
+      }
+      all(loaded) {
+        return { main: this.main(loaded), components: this.components(loaded) };
+      }
+    };
+  }
+});
+
+// src/audit/index-row.ts
+function indexRow(loaded, main, seq) {
+  const record = loaded.record;
+  let keys = null;
+  if (record !== null && main.facts) {
+    const src = sourcesOf(loaded).main;
+    keys = recordKeys(main.facts, src && src.text !== null ? { format: src.format, text: src.text } : null);
+  }
+  return {
+    seq,
+    id: loaded.id,
+    file: loaded.file,
+    name: record?.name ?? null,
+    form: record?.stereo.form ?? "unknown",
+    rotation: record?.stereo.rotation ?? null,
+    keys,
+    lines: {
+      id: lineFor(loaded, "id"),
+      structure: lineFor(loaded, "structure"),
+      rotation: lineFor(loaded, "stereo.rotation.value")
+    },
+    waivers: waiversOf(record, consistentWithRegistry.id)
+  };
+}
+var init_index_row = __esm({
+  "src/audit/index-row.ts"() {
+    "use strict";
+    init_consistent_with_registry();
+    init_waivers();
+    init_keys();
+    init_findings();
+    init_structures();
+  }
+});
+
+// src/registry/key-index.ts
+var RegistryIndex;
+var init_key_index = __esm({
+  "src/registry/key-index.ts"() {
+    "use strict";
+    RegistryIndex = class {
+      constructor(confirm = null) {
+        this.confirm = confirm;
+      }
+      confirm;
+      byKey = /* @__PURE__ */ new Map();
+      /** Rows filed (records with a stereo key). */
+      size = 0;
+      add(row) {
+        const k = row.keys;
+        if (k === null || k.stereo === null) return;
+        const key4 = `${k.constitution}#${k.stereo}`;
+        const classes = this.byKey.get(key4);
+        if (!classes) this.byKey.set(key4, [{ rows: [row] }]);
+        else {
+          const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
+          if (same) same.rows.push(row);
+          else classes.push({ rows: [row] });
+        }
+        this.size++;
+      }
+      /** Removes a row added before (a record file replaced by its new version). */
+      remove(row) {
+        const k = row.keys;
+        if (k === null || k.stereo === null) return;
+        const key4 = `${k.constitution}#${k.stereo}`;
+        const classes = this.byKey.get(key4);
+        if (!classes) return;
+        for (let ci = 0; ci < classes.length; ci++) {
+          const at2 = classes[ci].rows.indexOf(row);
+          if (at2 < 0) continue;
+          classes[ci].rows.splice(at2, 1);
+          if (classes[ci].rows.length === 0) classes.splice(ci, 1);
+          if (classes.length === 0) this.byKey.delete(key4);
+          this.size--;
+          return;
+        }
+      }
+      /**
+       * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
+       * were added; `me` itself left out.
+       */
+      matches(me) {
+        const k = me.keys;
+        if (k === null || k.stereo === null || k.mirror === null) return [];
+        const out = [];
+        const consider = (key4, expected) => {
+          for (const c of this.byKey.get(`${k.constitution}#${key4}`) ?? []) {
+            const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
+            if (!other) continue;
+            const relation = other.keys && this.relationOf(k, other.keys, expected);
+            if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
+          }
+        };
+        consider(k.stereo, "identical");
+        if (k.mirror !== k.stereo) consider(k.mirror, "enantiomers");
+        out.sort((a, b) => a.other.seq - b.other.seq);
+        return out;
+      }
+      relationOf(a, b, expected) {
+        if (a.exact && b.exact) return expected;
+        if (!a.text || !b.text || !this.confirm) return null;
+        const r = this.confirm(a, b);
+        return r === "identical" || r === "enantiomers" ? r : null;
+      }
+    };
+  }
+});
+
+// src/audit/registry-phase.ts
+function rowFinding(raw2, row, config) {
+  const lines = {
+    id: row.lines.id,
+    structure: row.lines.structure,
+    "stereo.rotation.value": row.lines.rotation ?? row.lines.structure
+  };
+  const positions2 = {
+    get: (path) => lines[path] != null ? { line: lines[path], column: 1 } : void 0
+  };
+  const loaded = {
+    file: row.file,
+    id: row.id,
+    record: null,
+    positions: positions2,
+    problems: [],
+    origin: { kind: "file" }
+  };
+  const f = toFinding(CHECK, raw2, loaded, config);
+  return { ...f, waived: acceptingWaiver(row.waivers ?? [], f) };
+}
+function duplicateId(row, first, config) {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  const message2 = `id: '${row.id}' is also used by ${first}; every record needs its own id`;
+  return {
+    check: SCHEMA_CHECK_ID,
+    messageId: "duplicate-id",
+    severity: configured === "off" || configured === void 0 ? "error" : configured,
+    message: message2,
+    data: { path: "id", problem: message2 },
+    line: row.lines.id,
+    field: "id",
+    waived: null
+  };
+}
+var CHECK, RegistryPhase;
+var init_registry_phase = __esm({
+  "src/audit/registry-phase.ts"() {
+    "use strict";
+    init_consistent_with_registry();
+    init_waivers();
+    init_key_index();
+    init_findings();
+    CHECK = consistentWithRegistry;
+    RegistryPhase = class {
+      constructor(options) {
+        this.options = options;
+        this.index = new RegistryIndex(options.confirm);
+        this.enabled = configuredSeverity(options.config, CHECK.id) !== "off";
+      }
+      options;
+      index;
+      pairs = [];
+      firstWithId = /* @__PURE__ */ new Map();
+      records = 0;
+      enabled;
+      underReview = /* @__PURE__ */ new Set();
+      /** Review mode: records of the registry filed, under review or not. */
+      registryRecords = 0;
+      /** The lookup keys of the records under review (review mode, set by `reviewing`): other keys are not filed. */
+      reach = null;
+      /**
+       * Review mode, before any `file`: the records that will be under review. A record of the registry whose keys
+       * none of them looks up is then not filed: the same findings, without forming classes no lookup visits (which
+       * may call `confirm`).
+       */
+      reviewing(rows) {
+        this.reach = /* @__PURE__ */ new Set();
+        for (const r of rows) {
+          const k = r.keys;
+          if (k === null || k.stereo === null || k.mirror === null) continue;
+          this.reach.add(`${k.constitution}#${k.stereo}`);
+          this.reach.add(`${k.constitution}#${k.mirror}`);
+        }
+      }
+      /** Review mode: a record of the registry, not under review (added before any `review`). */
+      file(row) {
+        this.registryRecords++;
+        const k = row.keys;
+        if (this.reach && k !== null && k.stereo !== null && !this.reach.has(`${k.constitution}#${k.stereo}`))
+          return;
+        this.index.add(row);
+      }
+      /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
+      fileUnderReview(row) {
+        this.registryRecords++;
+        this.underReview.add(row);
+        this.index.add(row);
+      }
+      /** Full mode: the next record in the audit's order. Review mode: a record under review (filed before). */
+      next(row) {
+        this.records++;
+        const findings = [];
+        if (this.options.duplicateIds && row.id !== null) {
+          const first = this.firstWithId.get(row.id);
+          if (first === void 0) this.firstWithId.set(row.id, row.file);
+          else if (configuredSeverity(this.options.config, SCHEMA_CHECK_ID) !== "off")
+            findings.push(duplicateId(row, first, this.options.config));
+        }
+        if (!this.enabled || row.keys === null) {
+          if (this.options.mode === "full") this.index.add(row);
+          return { findings, passed: null };
+        }
+        const full = this.options.mode === "full";
+        const matches = this.index.matches(row);
+        const c = compareWithRegistry(
+          row,
+          matches,
+          this.options.mode,
+          this.options.config,
+          (r) => this.underReview.has(r)
+        );
+        if (full) this.index.add(row);
+        this.pairs.push(...c.pairs);
+        for (const raw2 of c.findings)
+          if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
+            findings.push(rowFinding(raw2, row, this.options.config));
+        const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
+        return { findings, passed };
+      }
+      summary() {
+        const how = this.options.mode === "full" ? `every record with each record before it through an index of ${this.index.size} records' keys` : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
+        return {
+          status: this.enabled ? "run" : "not-run",
+          reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
+          records: this.records,
+          pairs: this.pairs
+        };
+      }
+    };
+  }
+});
+
+// package.json
+var package_default;
+var init_package = __esm({
+  "package.json"() {
+    package_default = {
+      name: "stereogate",
+      version: "0.1.0",
+      description: "Audits compound-registration records for stereochemical consistency: stereo perception, CIP labels, mirror-image and symmetry analysis, stereoisomer counts, structure relations.",
+      type: "module",
+      license: "MIT",
+      engines: {
+        node: ">=20"
+      },
+      bin: {
+        stereogate: "bin/stereogate.js"
+      },
+      scripts: {
+        build: "node scripts/bundle.mjs",
+        typecheck: "tsc -p tsconfig.json --noEmit",
+        demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
+        test: "vitest run",
+        bench: "node --import tsx bench/run.ts",
+        lint: "eslint .",
+        format: "prettier --write .",
+        bundle: "node scripts/bundle.mjs"
+      },
+      dependencies: {
+        "@actions/core": "^3.0.1",
+        "@actions/http-client": "^4.0.1",
+        ajv: "^8.20.0",
+        "cli-progress": "^3.12.0",
+        "csv-parse": "^7.0.3",
+        openchemlib: "^9.25.0",
+        tsx: "^4.23.15",
+        undici: "^6.29.1",
+        yaml: "^2.9.1"
+      },
+      devDependencies: {
+        "@eslint/js": "^9.39.5",
+        "@rdkit/rdkit": "^2026.9.1",
+        "@types/cli-progress": "^3.11.6",
+        "@types/node": "^20.19.43",
+        "@vitest/coverage-v8": "^4.1.12",
+        esbuild: "^0.28.2",
+        eslint: "^9.39.5",
+        "fast-check": "^4.11.0",
+        micromark: "^4.0.3",
+        "micromark-extension-gfm": "^3.0.0",
+        nock: "^14.0.9",
+        "playwright-core": "^1.65.1",
+        prettier: "^3.10.1",
+        typescript: "^5.9.3",
+        "typescript-eslint": "^8.74.0",
+        vitest: "^4.1.12"
+      }
+    };
+  }
+});
+
+// src/audit/version.ts
+var VERSION;
+var init_version = __esm({
+  "src/audit/version.ts"() {
+    "use strict";
+    init_package();
+    VERSION = package_default.version;
+  }
+});
+
+// src/audit/view.ts
+function entryOf(loaded, cache2, underReview) {
+  const record = loaded.record;
+  if (record === null) return null;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    record,
+    get main() {
+      return cache2.main(loaded);
+    },
+    underReview
+  };
+}
+function buildRegistryView(records, cache2, underReview) {
+  const entries = [];
+  for (const loaded of records) {
+    const e = entryOf(loaded, cache2, underReview(loaded));
+    if (e) entries.push(e);
+  }
+  return { entries };
+}
+var init_view = __esm({
+  "src/audit/view.ts"() {
+    "use strict";
   }
 });
 
@@ -66968,10 +69424,12 @@ function statedDescriptors(ctx) {
   }
   return "";
 }
-function run3(ctx) {
+function run4(ctx) {
   const record = ctx.record;
   const f = ctx.main.facts;
-  if (!record || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
+  if (f.invertibleNitrogens.length === 0)
+    return { findings: [], notApplicable: "the structure has no amine nitrogen that inverts" };
   const form = record.stereo.form;
   const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
   const out = [];
@@ -66996,19 +69454,23 @@ function run3(ctx) {
     );
   }
   if (out.some((x) => x.severity !== "note")) return { findings: out };
-  if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
+  if (out.length === 0 && drawn.length === 0)
+    return {
+      findings: [],
+      notApplicable: "no stereo drawn at an amine nitrogen and no claim resting on one"
+    };
   return {
     findings: out,
-    passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens`
+    passed: `the claim rests on ${plural(others2.length, "stereo unit")} other than amine nitrogens`
   };
 }
-var NITROGEN_CHECK_ID, messages3, nitrogenInversion;
+var NITROGEN_CHECK_ID, messages4, nitrogenInversion;
 var init_nitrogen_inversion = __esm({
   "src/checks/nitrogen-inversion.ts"() {
     "use strict";
     init_words();
     NITROGEN_CHECK_ID = "nitrogen-inversion";
-    messages3 = {
+    messages4 = {
       "claim-rests-on-invertible-nitrogen": "Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier roughly 30–40 kJ/mol for simple trialkylamines, about 24 kJ/mol for ammonia — values from memory; a configuration that can be isolated at room temperature needs roughly 100 kJ/mol), so its two configurations interconvert and cannot be isolated: the structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's base, an aziridine, a quaternary ammonium ion), draw that feature.",
       "stereo-drawn-on-invertible-nitrogen": "The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at room temperature; that configuration means nothing. The claim rests on the other stereo units, which is fine; remove the wedge or @ mark at that nitrogen."
     };
@@ -67017,9 +69479,9 @@ var init_nitrogen_inversion = __esm({
       defaultSeverity: "error",
       summary: "A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.",
       explanation: "A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar transition state with a low barrier (from memory: about 24 kJ/mol for ammonia, roughly 30–40 kJ/mol for simple trialkylamines; invertomers that can be isolated at room temperature need a barrier of roughly 100 kJ/mol, also from memory), so its enantiomers interconvert rapidly at room temperature and cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim rests on nothing else, this check carries the error; the form, descriptor and reading checks report their side of the same root cause as notes.",
-      messages: messages3,
+      messages: messages4,
       requires: ["structure"],
-      run: run3
+      run: run4
     };
   }
 });
@@ -67045,7 +69507,7 @@ function escapingPath(recordFile, path) {
   const resolved = posix.normalize(posix.join(posix.dirname(recordFile), path.replace(/\\/g, "/")));
   return resolved === ".." || resolved.startsWith("../") ? resolved : null;
 }
-function run4(ctx) {
+function run5(ctx) {
   const findings = [];
   const add = (id, field2, data) => {
     findings.push(finding(id, field2, data));
@@ -67117,19 +69579,19 @@ function run4(ctx) {
   if (findings.some((f) => f.severity !== "note")) return { findings };
   const facts = ctx.main.facts;
   const atoms = ctx.main.structure?.atoms.length;
-  const what = [atoms !== void 0 ? `${atoms} atoms` : null, facts?.formula || null].filter(Boolean).join(", ");
-  const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : "";
-  const nitrogen = leftToNitrogen ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion` : "";
+  const what = [atoms !== void 0 ? plural(atoms, "atom") : null, facts?.formula || null].filter(Boolean).join(", ");
+  const comps = ctx.components.length ? `; ${plural(ctx.components.length, "component structure")} read` : "";
+  const nitrogen = leftToNitrogen ? `; ${plural(leftToNitrogen, "remark")} on amine nitrogens left to nitrogen-inversion` : "";
   const copies = saltRemarks.length ? `; ${saltRemarks.join("; ")}` : "";
   return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}${copies}${nitrogen}` };
 }
-var messages4, OVER_LIMIT, structureReadable;
+var messages5, OVER_LIMIT, structureReadable;
 var init_structure_readable = __esm({
   "src/checks/structure-readable.ts"() {
     "use strict";
     init_words();
     init_nitrogen_inversion();
-    messages4 = {
+    messages5 = {
       "structure-unreadable": "The structure in {field} could not be read: {error}{where}. Nothing about its stereochemistry can be checked. Correct the SMILES or molfile (check ring-closure digits, brackets and the counts line) and resubmit.",
       "structure-over-limit": "The structure in {field} was not analysed: {error}. The size limits keep every record within the time limit; split a mixture into its records, or leave out repeated salt or solvent parts, and resubmit.",
       "component-unreadable": "Component {index} ({field}) could not be read: {error}{where}. The mixture cannot be checked against it. Correct that structure.",
@@ -67144,8 +69606,8 @@ var init_structure_readable = __esm({
       defaultSeverity: "error",
       summary: "The structure (SMILES or molfile) can be read, and a molfile path stays inside the registry.",
       explanation: "Every other check works on the structure, so a structure that cannot be read leaves the stereo claim unchecked. SMILES are read by the OpenSMILES specification, molfiles by the CTfile format specification (V2000 and V3000). A molfile is named by a path relative to the record file; a path that leaves the registry (.., an absolute path, or a symbolic link out) is refused, so that a pull request cannot make the audit read files elsewhere on the machine.",
-      messages: messages4,
-      run: run4
+      messages: messages5,
+      run: run5
     };
   }
 });
@@ -67209,13 +69671,13 @@ var init_form_mixtures = __esm({
     "use strict";
     init_words();
     mixtureMessages = {
-      "mixture-needs-components": "Declared diastereomer-mixture with {count} component(s) under stereo.components; a mixture needs two or more, each drawn with its configuration. List the components.",
+      "mixture-needs-components": "Declared diastereomer-mixture with {count:component|components} under stereo.components; a mixture needs two or more, each drawn with its configuration. List the components.",
       "mixture-components-identical": "Components {a} and {b} are the same stereoisomer ({explanation}). A diastereomer mixture lists each diastereomer once; remove the duplicate or correct its configuration.",
       "mixture-components-enantiomers": "Components {a} and {b} are enantiomers, not diastereomers ({explanation}). A mixture of two enantiomers is a racemate (1:1) or an enantioenriched sample; declare that form, or correct a configuration.",
       "mixture-components-unrelated": "Components {a} and {b} are {relation}, not diastereomers of each other ({explanation}). The components of a diastereomer mixture differ only in configuration, and each is fully defined.",
       "mixture-component-constitution": "Component {a} ({componentFormula}) does not have the constitution of the parent structure ({parentFormula}). Each component must be a stereoisomer of the registered structure.",
       "racemate-components-not-enantiomers": "The racemate lists components {a} and {b}, which are {relation}, not enantiomers ({explanation}). A racemate is a 1:1 mixture of two enantiomers; correct the components or the form.",
-      "racemate-components-count": "The racemate lists {count} component(s); a racemate consists of exactly two enantiomers. List both, or none."
+      "racemate-components-count": "The racemate lists {count:component|components}; a racemate consists of exactly two enantiomers. List both, or none."
     };
   }
 });
@@ -67257,10 +69719,10 @@ function achiralRemedy(f, labels, nitrogen) {
   }
   return `No stereoisomer of this constitution is chiral, so no configuration can make it so (drawn: ${labels}): declare achiral (single-diastereomer for one cis/trans isomer), or correct the structure.`;
 }
-function run5(ctx) {
+function run6(ctx) {
   const f = ctx.main.facts;
   const record = ctx.record;
-  if (!record || !f) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
   const form = record.stereo.form;
   const e = evidence(f, ctx.main.structure);
   const out = [];
@@ -67323,7 +69785,9 @@ function run5(ctx) {
         const a = f.stereoisomers.achiral;
         add(
           "racemate-which-diastereomer",
-          { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : "" },
+          {
+            achiralPart: a ? ` and ${a} achiral ${String(a) === "1" ? "stereoisomer" : "stereoisomers"}` : ""
+          },
           "warning"
         );
       }
@@ -67349,7 +69813,7 @@ function passedEvidence(form, f, e) {
   const why = f.chiral !== null && f.mirror.explanation ? ` — ${e.mirror}` : "";
   return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
-var messages5, formMatchesStructure;
+var messages6, formMatchesStructure;
 var init_form_matches_structure = __esm({
   "src/checks/form-matches-structure.ts"() {
     "use strict";
@@ -67357,20 +69821,20 @@ var init_form_matches_structure = __esm({
     init_words();
     init_form_mixtures();
     init_nitrogen_inversion();
-    messages5 = {
+    messages6 = {
       "achiral-but-chiral": "Declared achiral, but the structure is chiral: it has {allUnits} and its mirror image is a different molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.",
-      "achiral-but-open": "Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
+      "achiral-but-open": "Declared achiral, but {undefinedCount:stereo unit is|stereo units are} left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
       "achiral-is-meso": "Declared achiral. The structure is indeed achiral ({mirror}), but its constitution also has chiral stereoisomers ({chiralIsomers} of {totalIsomers}), which makes this one a meso compound. Declare meso.",
       "meso-but-chiral": "Declared meso, but the structure is chiral: it defines {units} and its mirror image is a different molecule ({mirror}). A meso compound is achiral. Check the configurations ({labels}) or declare single-enantiomer.",
-      "meso-but-no-chiral-isomers": "Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so the compound is simply achiral: meso applies only to an achiral member of a set that includes chiral members. Declare achiral.",
-      "meso-but-open": "Declared meso, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}); the drawing also covers chiral stereoisomers. Define every unit as in the meso form.",
+      "meso-but-no-chiral-isomers": "Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, achiral|stereoisomers, all achiral}), so the compound is simply achiral: meso applies only to an achiral member of a set that includes chiral members. Declare achiral.",
+      "meso-but-open": "Declared meso, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}); the drawing also covers chiral stereoisomers. Define every unit as in the meso form.",
       "enantiomer-but-achiral": "Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and no enantiomeric excess. {remedy}",
-      "enantiomer-undefined-units": "Declared {form}, but {undefinedCount} stereo unit(s) are undefined: {undefinedUnits}. The structure then stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.",
+      "enantiomer-undefined-units": "Declared {form}, but {undefinedCount:stereo unit is|stereo units are} undefined: {undefinedUnits}. The structure then stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.",
       "racemate-but-achiral": "Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a racemate. {remedy}",
-      "racemate-no-chiral-isomers": "Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so there are no enantiomers to mix. Declare achiral.",
-      "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount} undefined stereo unit(s) ({undefinedUnits}). This constitution has {pairs} pair(s) of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
-      "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount} stereo unit(s) ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
-      "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
+      "racemate-no-chiral-isomers": "Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, achiral|stereoisomers, all achiral}), so there are no enantiomers to mix. Declare achiral.",
+      "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount:undefined stereo unit|undefined stereo units} ({undefinedUnits}). This constitution has {pairs:pair|pairs} of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
+      "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount:stereo unit|stereo units} ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
+      "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
       "enantiomer-but-drawn-mixture": "Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows (racemate, enantioenriched, diastereomer-mixture).",
       "racemate-drawn-not-racemic": "Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.",
       "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the claim checked.",
@@ -67381,9 +69845,9 @@ var init_form_matches_structure = __esm({
       defaultSeverity: "error",
       summary: "The declared stereo form agrees with the chirality, meso character and defined units of the structure.",
       explanation: "IUPAC Gold Book definitions: a chiral molecule is not superimposable on its mirror image; enantiomers are mirror-image stereoisomers; a racemate is an equimolar mixture of a pair of enantiomers, so it needs a chiral structure; a meso compound is the achiral member of a set of diastereoisomers that also includes chiral members; diastereoisomers are stereoisomers that are not enantiomers (cis-trans isomers included). A single enantiomer therefore needs a chiral structure with every stereo unit defined, a single diastereomer two or more stereogenic units (or a stereogenic double bond), and a diastereomer mixture two or more components that are pairwise diastereomers with the constitution of the parent. The evidence is the engine's mirror-image analysis (the symmetry element that makes a structure achiral) and its stereoisomer count.",
-      messages: messages5,
+      messages: messages6,
       requires: ["structure"],
-      run: run5
+      run: run6
     };
   }
 });
@@ -67392,14 +69856,18 @@ var init_form_matches_structure = __esm({
 function atomList(atoms) {
   return atoms.length === 1 ? `atom ${atoms[0]}` : `atoms ${atoms.join(", ")}`;
 }
-function run6(ctx) {
+function run7(ctx) {
   const f = ctx.main.facts;
   const record = ctx.record;
-  if (!record || !f) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
   const form = record.stereo.form;
   const groups = f.enhanced.groups;
   const defined = definedUnits(f);
-  if (groups.length === 0 && defined.length === 0) return { findings: [], notApplicable: true };
+  if (groups.length === 0 && defined.length === 0)
+    return {
+      findings: [],
+      notApplicable: "the structure has no enhanced-stereo group and no defined stereo unit"
+    };
   const and = groups.filter((g) => g.type === "and");
   const or = groups.filter((g) => g.type === "or");
   const decl = declaredDescriptors(record);
@@ -67467,12 +69935,12 @@ function run6(ctx) {
     passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}`
   };
 }
-var messages6, enhancedStereoMatchesForm;
+var messages7, enhancedStereoMatchesForm;
 var init_enhanced_stereo_matches_form = __esm({
   "src/checks/enhanced-stereo-matches-form.ts"() {
     "use strict";
     init_words();
-    messages6 = {
+    messages7 = {
       "and-group-with-single-enantiomer": 'Declared single-enantiomer, but the structure puts {atoms} in an AND group (&{group}), which means "this stereoisomer and its mirror image, together" — a racemic or enantiomer-mixture drawing. Remove the AND group (absolute stereo) or declare racemate / enantioenriched.',
       "or-group-with-racemate": 'Declared racemate, but the structure puts {atoms} in an OR group (or{group}), which means "this stereoisomer or its mirror image, unknown which" — one enantiomer, not a mixture. Use an AND group for a racemate, or declare single-enantiomer with relative descriptors (rel- or R*).',
       "racemate-drawn-absolute": "Declared racemate, but the structure is drawn as one enantiomer with absolute stereo ({labels}; no AND group{flag}). A racemate is drawn with its centres in an AND group (&1), or without stereo marks when it has one stereocentre. Add the AND group, or correct the form.",
@@ -67486,9 +69954,9 @@ var init_enhanced_stereo_matches_form = __esm({
       defaultSeverity: "error",
       summary: "Enhanced-stereo groups (ABS, AND, OR) agree with the declared form and descriptors.",
       explanation: "Enhanced stereo, as defined in the CTfile format specification (V3000 collection blocks MDLV30/STEABS, STERAC, STEREL) and CXSMILES, says what a drawn configuration stands for: ABS — this stereoisomer; AND (racemic group) — this stereoisomer and its mirror image, a mixture; OR (relative group) — this stereoisomer or its mirror image, unknown which. A single enantiomer cannot carry an AND group, a racemate cannot carry an OR group and should not be drawn as absolute, and absolute descriptors (R, S without rel or *) contradict an OR group (IUPAC 2013, P-93.1.3: relative configuration is written rel- or R*).",
-      messages: messages6,
+      messages: messages7,
       requires: ["structure"],
-      run: run6
+      run: run7
     };
   }
 });
@@ -67867,8 +70335,16 @@ function compareOne(field, text, parsed, facts, out, form, evidence2, nitrogenNo
       if (fix !== null) out[out.length - 1].fix = fix;
     }
     if (cmp.notStereoUnits.length)
-      add("descriptor-not-stereo-unit", { locants: cmp.notStereoUnits.join(", "), computed });
-    if (cmp.undefinedAt.length) add("descriptor-at-undefined-unit", { locants: cmp.undefinedAt.join(", ") });
+      add("descriptor-not-stereo-unit", {
+        locants: cmp.notStereoUnits.join(", "),
+        locantCount: cmp.notStereoUnits.length,
+        computed
+      });
+    if (cmp.undefinedAt.length)
+      add("descriptor-at-undefined-unit", {
+        locants: cmp.undefinedAt.join(", "),
+        locantCount: cmp.undefinedAt.length
+      });
     if (cmp.agrees && cmp.unlisted.length) {
       const missing = cmp.unlisted.map((u) => `${u.locant ?? `atom ${u.atoms.join("–")}`} (${u.label})`).join(", ");
       add("descriptors-incomplete", { missing, computed, method: cmp.method }, "warning");
@@ -67950,10 +70426,10 @@ function comparable(r, ctx) {
     repeats: ` (${words} of the structure and is counted once)`
   };
 }
-function run7(ctx) {
+function run8(ctx) {
   const record = ctx.record;
   const c0 = comparable(ctx.main, ctx);
-  if (!record || !c0) return { findings: [], notApplicable: true };
+  if (!record || !c0) return { findings: [], notApplicable: "the record or its structure was not read" };
   const f = c0.facts;
   const decl = declaredDescriptors(record);
   const out = [];
@@ -68047,12 +70523,16 @@ function run7(ctx) {
   out.push(...cisTransFindings(ctx, decl, f));
   const hasAny = decl.field !== null || decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== "none" || decl.name.words.length > 0 || decl.name.rotationSign !== null);
   const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
-  if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
+  if (!hasAny && !hasComponents && out.length === 0)
+    return {
+      findings: [],
+      notApplicable: "no descriptors declared (stereo.descriptors, the name, the components)"
+    };
   if (out.some((x) => x.severity !== "note" || x.messageId === "descriptors-at-unstated-units"))
     return { findings: out };
   return { findings: out, passed: evidence2.join("; ") || "descriptor prefixes agree with the declared form" };
 }
-var messages7, HOW, descriptorsMatchStructure;
+var messages8, HOW, descriptorsMatchStructure;
 var init_descriptors_match_structure = __esm({
   "src/checks/descriptors-match-structure.ts"() {
     "use strict";
@@ -68066,13 +70546,13 @@ var init_descriptors_match_structure = __esm({
     init_descriptors_unverified();
     init_mapped_smiles();
     init_fixes();
-    messages7 = {
+    messages8 = {
       "descriptor-unreadable": "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).",
-      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} ({how}). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
-      "descriptor-not-stereo-unit": "{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
-      "descriptor-at-undefined-unit": "{field} declares configurations at locant(s) {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
+      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count:unit|units}: {mismatches} ({how}). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
+      "descriptor-not-stereo-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
+      "descriptor-at-undefined-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
       "descriptor-counts-mismatch": "{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.",
-      "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
+      "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount:configuration|configurations}), but the structure defines only {definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
       "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
@@ -68092,9 +70572,9 @@ var init_descriptors_match_structure = __esm({
       defaultSeverity: "error",
       summary: "Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.",
       explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; without them a descriptor is still matched to its unit where the structure has one unit of each kind cited (one R/S centre, one E/Z double bond); otherwise only the numbers of R, S, E, Z … can be compared, and where that cannot tell (1R,2S) from (1S,2R) the claim is reported as consistent in count, not verified per atom (a note with the structure written with atom maps to paste), never as passed. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other stereo unit.",
-      messages: messages7,
+      messages: messages8,
       requires: ["structure"],
-      run: run7
+      run: run8
     };
   }
 });
@@ -68171,11 +70651,12 @@ function componentsAreDiastereomers(ctx) {
   }
   return true;
 }
-function run8(ctx) {
+function run9(ctx) {
   const record = ctx.record;
-  if (!record) return { findings: [], notApplicable: true };
+  if (!record) return { findings: [], notApplicable: "the record was not read" };
   const { form, ratio, ee, components } = record.stereo;
-  if (ratio === void 0 && ee === void 0) return { findings: [], notApplicable: true };
+  if (ratio === void 0 && ee === void 0)
+    return { findings: [], notApplicable: "no ratio or ee declared (stereo.ratio, stereo.ee)" };
   const cfg = ctx.config;
   const out = [];
   const add = (id, field, data, severity) => {
@@ -68265,17 +70746,17 @@ function run8(ctx) {
     evidence2.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
   return { findings: out, passed: `${evidence2.join("; ")}; consistent with ${form}` };
 }
-var messages8, ratioAndEeConsistent;
+var messages9, ratioAndEeConsistent;
 var init_ratio_and_ee_consistent = __esm({
   "src/checks/ratio-and-ee-consistent.ts"() {
     "use strict";
     init_ratio();
     init_words();
-    messages8 = {
+    messages9 = {
       "ratio-unreadable": "The ratio '{ratio}' could not be read: {problem} (at character {offset}). Write it as parts separated by colons, e.g. 70:30 or 97.5:2.5.",
       "ratio-parts-not-100": "The ratio {ratio} reads as percentages but its parts sum to {sum}, not 100 (tolerance ±{tolerance}). Correct the parts; if relative amounts were meant, write them as small whole numbers (e.g. 2:1).",
-      "ratio-components-count": "The ratio {ratio} has {parts} part(s) but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
-      "enantiomer-ratio-parts": "The ratio {ratio} has {parts} parts, but a {form} consists of two enantiomers. Give the enantiomer ratio as two parts (e.g. 97:3).",
+      "ratio-components-count": "The ratio {ratio} has {parts:part|parts} but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
+      "enantiomer-ratio-parts": "The ratio {ratio} has {parts:part|parts}, but a {form} consists of two enantiomers. Give the enantiomer ratio as two parts (e.g. 97:3).",
       "racemate-ratio-not-even": "Declared racemate, but the ratio {ratio} is {deviation} points away from 50:50 (tolerance ±{tolerance}); that is an enantioenriched sample with ee {ee}%. Check the measurement, or declare enantioenriched with the ee.",
       "racemate-ee-not-zero": "Declared racemate, but the stated ee is {ee}% (a racemate has ee 0 within ±{tolerance}). Declare enantioenriched, or correct the ee.",
       "ee-disagrees-with-ratio": "The stated ee {ee}% does not agree with the ratio {ratio}, which gives ee = |a − b| / (a + b) · 100 = {computedEe}% (tolerance ±{tolerance}). Correct one of them.",
@@ -68289,8 +70770,8 @@ var init_ratio_and_ee_consistent = __esm({
       defaultSeverity: "error",
       summary: "Component ratio and enantiomeric excess agree with each other and with the declared form.",
       explanation: "Enantiomeric excess is |F(+) − F(−)| for mole fractions of the two enantiomers, in percent 100·|a − b|/(a + b) for a ratio a:b (IUPAC Gold Book, enantiomer excess). A racemate is an equimolar mixture of a pair of enantiomers (Gold Book, racemate), so 50:50 and ee 0. Diastereomers differ in energy and are normally formed in unequal amounts; enantiomers have equal energies, so achiral conditions give 50:50 — an exactly even diastereomer ratio deserves a question. Tolerances (ratio sum, racemate ratio, ee agreement) and the single-enantiomer ee threshold are registry settings (common practice, no source).",
-      messages: messages8,
-      run: run8
+      messages: messages9,
+      run: run9
     };
   }
 });
@@ -68877,7 +71358,7 @@ function drawnStatus(facts, name) {
   if (facts.undefined > 0 || facts.chiral === null)
     return {
       status: "unknown",
-      why: `${name} is drawn without the configuration of ${facts.undefined} stereo unit(s), so it may be racemic or one enantiomer`
+      why: `${name} is drawn without the configuration of ${plural(facts.undefined, "stereo unit")}, so it may be racemic or one enantiomer`
     };
   if (facts.enhanced.meaning === "relative")
     return {
@@ -68968,6 +71449,7 @@ var init_origin_inputs = __esm({
     init_read();
     init_describe2();
     init_descriptors();
+    init_words();
     byId = /* @__PURE__ */ new WeakMap();
     ID_SHAPE = /^[A-Za-z]{1,10}[-_ ]?\d{1,12}$/;
     MAX_WALK = 1e4;
@@ -68978,7 +71460,7 @@ var init_origin_inputs = __esm({
 function productUnitName(facts, u) {
   const key4 = u.atoms.join(",");
   const f = facts.units.find((x) => x.atoms.join(",") === key4);
-  if (f) return unitName2(f);
+  if (f) return unitName(f);
   return u.atoms.length === 1 ? `atom ${u.atoms[0]}` : `the unit at atoms ${u.atoms.join(", ")}`;
 }
 function names(facts, units) {
@@ -69274,7 +71756,7 @@ function inputProblems(ctx, from, add) {
     else if (r.problem === "no-structure")
       add("input-without-structure", field, { entry: text, detail: r.detail }, "note");
     else if (r.problem === "not-found") {
-      const ids = ctx.registry.entries.flatMap((e) => e.id === null ? [] : [e.id]);
+      const ids = ctx.registry.ids?.() ?? ctx.registry.entries.flatMap((e) => e.id === null ? [] : [e.id]);
       const guess = ids.length <= 5e4 ? closestWord(text.trim(), ids) : null;
       add("input-not-found", field, {
         entry: text,
@@ -69300,10 +71782,10 @@ function unmappedNote(facts, prov, add) {
     "note"
   );
 }
-function run9(ctx) {
+function run10(ctx) {
   const record = ctx.record;
   const origin = record?.origin;
-  if (!record || !origin) return { findings: [], notApplicable: true };
+  if (!record || !origin) return { findings: [], notApplicable: "no origin given (origin)" };
   const out = [];
   const add = makeAdd(out);
   const inputs = inputProblems(ctx, origin.from, add);
@@ -69313,7 +71795,10 @@ function run9(ctx) {
   }
   const main = ctx.main;
   if (out.length > 0 || !main.structure || !main.facts)
-    return out.length > 0 ? { findings: out } : { findings: [], notApplicable: true };
+    return out.length > 0 ? { findings: out } : {
+      findings: [],
+      notRun: main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure"
+    };
   const prov = traceProvenance(
     main.structure,
     inputs.map((i) => i.structure)
@@ -69359,87 +71844,6 @@ var init_origin_supports_claim = __esm({
       summary: "The stereo claim agrees with how the compound was made (origin): racemic from achiral or racemic inputs without chiral control, carried stereo units unchanged, diastereomers in unequal amounts.",
       explanation: "A reaction that can form either enantiomer of a product through mirror-image pathways, with nothing chiral present, runs both at the same rate: the two transition states are enantiomeric and equal in energy, so the product is a racemate; enantiotopic groups of a meso or other achiral input likewise react at equal rates. A new stereo unit formed in a molecule that already has a defined one gives diastereomers, whose transition states differ in energy, so they form in unequal amounts (e.g. Cram 1952 on additions to α-chiral aldehydes, from memory). A stereo unit at which no bond is made or broken keeps its spatial arrangement; it is compared through the mapped neighbours, not the CIP label, which can change when priorities change (IUPAC 2013 P-92.1). Inputs are placed on the structure by their largest common connected substructure (elements and bond orders kept), within a time bound; a unit that cannot be traced is left unchecked with a note.",
       messages: originMessages,
-      run: run9
-    };
-  }
-});
-
-// src/checks/waivers.ts
-function blank(s) {
-  return s === void 0 || s.trim() === "";
-}
-function reviewWaivers(record, findings, knownChecks) {
-  const waivers = record?.waivers ?? [];
-  const out = [];
-  const firstIndex = /* @__PURE__ */ new Map();
-  waivers.forEach((w, index) => {
-    const field = `waivers.${index}`;
-    const missing = [
-      blank(w.reason) ? "reason" : null,
-      blank(w.approved_by) ? "approver (approved_by)" : null
-    ].filter((x) => x !== null);
-    if (missing.length) {
-      out.push(
-        finding("waiver-incomplete", field, {
-          waivedCheck: w.check,
-          index,
-          missing: missing.join(" and no ")
-        })
-      );
-    }
-    const seen = firstIndex.get(w.check);
-    if (seen !== void 0) {
-      out.push(finding("waiver-duplicate", field, { waivedCheck: w.check, index, first: seen }, "note"));
-      return;
-    }
-    firstIndex.set(w.check, index);
-    if (w.check !== WAIVER_CHECK_ID && !findings.some((f) => f.check === w.check)) {
-      const unknown = knownChecks !== void 0 && !knownChecks.includes(w.check);
-      out.push(
-        finding(
-          "waiver-matches-nothing",
-          field,
-          {
-            waivedCheck: w.check,
-            index,
-            knownCheck: !unknown,
-            known: unknown ? " (and no check has that id)" : ""
-          },
-          "note"
-        )
-      );
-    }
-  });
-  return out;
-}
-function run10(ctx) {
-  const waivers = ctx.record?.waivers ?? [];
-  if (waivers.length === 0) return { findings: [], notApplicable: true };
-  const findings = reviewWaivers(ctx.record, ctx.findings ?? []);
-  if (findings.some((f) => f.severity !== "note")) return { findings };
-  const accepted = waivers.filter((w) => (ctx.findings ?? []).some((f) => f.check === w.check)).length;
-  return {
-    findings,
-    passed: `${waivers.length} waiver(s) complete; ${accepted} accept findings of this record`
-  };
-}
-var WAIVER_CHECK_ID, messages9, waiverReview;
-var init_waivers = __esm({
-  "src/checks/waivers.ts"() {
-    "use strict";
-    init_words();
-    WAIVER_CHECK_ID = "waiver-review";
-    messages9 = {
-      "waiver-incomplete": "The waiver for {waivedCheck} (waivers[{index}]) has no {missing}. A waiver records a decision: say why the finding is acceptable (reason) and who decided (approved_by). Until then it accepts nothing.",
-      "waiver-matches-nothing": "The waiver for {waivedCheck} (waivers[{index}]) matches no finding on this record{known}. Remove it, or correct the check id, so that it does not silently accept a future finding.",
-      "waiver-duplicate": "waivers[{index}] repeats the waiver for {waivedCheck} given in waivers[{first}]. Keep one."
-    };
-    waiverReview = {
-      id: WAIVER_CHECK_ID,
-      defaultSeverity: "warning",
-      summary: "Waivers give a reason and an approver, and each accepts a finding of this record.",
-      explanation: "A waiver is the responsible chemist accepting a finding for this record; it is only as good as its reason and the name of who decided (common practice, no source: review decisions are recorded with their reason and approver). A waiver that accepts nothing is removed, so that it cannot hide a later, different problem.",
-      messages: messages9,
       run: run10
     };
   }
@@ -69479,6 +71883,1060 @@ var init_checks = __esm({
       originSupportsClaim,
       waiverReview
     ];
+  }
+});
+
+// src/registry/blob-ids.ts
+import { execFile } from "node:child_process";
+import { createHash } from "node:crypto";
+import { readFileSync } from "node:fs";
+function blobIdOf(bytes) {
+  const hash = createHash("sha1");
+  hash.update(`blob ${bytes.length}\0`);
+  hash.update(bytes);
+  return hash.digest("hex");
+}
+function blobIdOfFile(abs) {
+  try {
+    return blobIdOf(readFileSync(abs));
+  } catch {
+    return null;
+  }
+}
+function git(cwd, args) {
+  return new Promise((done) => {
+    execFile(
+      "git",
+      args,
+      { cwd, encoding: "utf8", maxBuffer: 1 << 30, env: { ...process.env, GIT_OPTIONAL_LOCKS: "0" } },
+      (error2, stdout) => done(error2 ? null : stdout)
+    );
+  });
+}
+async function gitBlobIds(root, dirs) {
+  const ids = /* @__PURE__ */ new Map();
+  const pathspec = ["--", ...dirs.length > 0 ? dirs : ["."]];
+  const [staged, modified] = await Promise.all([
+    git(root, ["ls-files", "-s", "-v", "-z", ...pathspec]),
+    git(root, ["ls-files", "-m", "-z", ...pathspec])
+  ]);
+  if (staged === null || modified === null) return ids;
+  const dirty = new Set(modified.split("\0"));
+  for (let at2 = 0; at2 < staged.length; ) {
+    const end = staged.indexOf("\0", at2);
+    const stop = end < 0 ? staged.length : end;
+    const plain = staged.startsWith("H 100644 ", at2) || staged.startsWith("H 100755 ", at2) ? staged.startsWith(" 0	", at2 + 49) : false;
+    if (plain && stop > at2 + 52) {
+      const path = staged.slice(at2 + 52, stop);
+      const blob = staged.slice(at2 + 9, at2 + 49);
+      if (!dirty.has(path) && /^[0-9a-f]{40}$/.test(blob)) ids.set(path, blob);
+    }
+    at2 = stop + 1;
+  }
+  return ids;
+}
+var BlobIds;
+var init_blob_ids = __esm({
+  "src/registry/blob-ids.ts"() {
+    "use strict";
+    BlobIds = class {
+      constructor(fromGit, absOf) {
+        this.fromGit = fromGit;
+        this.absOf = absOf;
+      }
+      fromGit;
+      absOf;
+      hashed = /* @__PURE__ */ new Map();
+      of(rel) {
+        const known = this.fromGit.get(rel);
+        if (known !== void 0) return known;
+        let id = this.hashed.get(rel);
+        if (id === void 0) {
+          id = blobIdOfFile(this.absOf(rel));
+          this.hashed.set(rel, id);
+        }
+        return id;
+      }
+      /** How many files were hashed from their bytes (not known to git). */
+      get hashedCount() {
+        return this.hashed.size;
+      }
+    };
+  }
+});
+
+// src/bulk/pool.ts
+import { Worker } from "node:worker_threads";
+async function* mapOrdered(items, opts) {
+  if (opts.workers <= 0) {
+    if (!opts.inline) throw new Error("mapOrdered: workers=0 needs an inline handler");
+    let n = 0;
+    for await (const item of items) {
+      n++;
+      yield opts.inline(item);
+    }
+    opts.onStats?.({
+      window: 1,
+      maxAhead: 1,
+      maxBuffered: 0,
+      maxPending: 0,
+      maxInFlight: 1,
+      items: n,
+      replaced: 0
+    });
+    return;
+  }
+  const batchSize = Math.max(1, opts.batchSize ?? 16);
+  const window2 = Math.max(batchSize * opts.workers * 2, opts.window ?? batchSize * opts.workers * 4);
+  const iterator = Symbol.asyncIterator in items ? items[Symbol.asyncIterator]() : toAsync(items);
+  const done = /* @__PURE__ */ new Map();
+  const stats = {
+    window: window2,
+    maxAhead: 0,
+    maxBuffered: 0,
+    maxPending: 0,
+    maxInFlight: 0,
+    items: 0,
+    replaced: 0
+  };
+  const record = (at2, result2) => {
+    done.set(at2, result2);
+    if (done.size > stats.maxBuffered) stats.maxBuffered = done.size;
+  };
+  const pending = [];
+  let nextIndex = 0;
+  let nextOut = 0;
+  let inputDone = false;
+  let wake = null;
+  let failure2 = null;
+  const notify = () => {
+    const w = wake;
+    wake = null;
+    if (w) w();
+  };
+  const slots = [];
+  const spawn = () => {
+    const shared2 = new SharedArrayBuffer(8);
+    const progress = new Int32Array(shared2);
+    progress[0] = -1;
+    const data = { user: opts.workerData, progress: shared2 };
+    const worker = startWorker(opts.script, opts.execArgv, data, opts.resourceLimits);
+    const slot = {
+      worker,
+      progress,
+      seen: 0,
+      queue: [],
+      lastProgress: Date.now(),
+      dead: false,
+      ready: false,
+      started: Date.now()
+    };
+    worker.on("message", (msg) => {
+      if ("ready" in msg) {
+        slot.ready = true;
+        slot.lastProgress = Date.now();
+        return;
+      }
+      if (slot.dead) return;
+      slot.lastProgress = Date.now();
+      const finished = /* @__PURE__ */ new Set();
+      for (const [index, result2] of msg.results) {
+        finished.add(index);
+        record(index, result2);
+      }
+      slot.queue = slot.queue.filter((j) => !finished.has(j.index));
+      notify();
+    });
+    worker.on("error", (err2) => {
+      if (slot.dead) return;
+      slot.dead = true;
+      const [current, rest] = takeCurrent(slot);
+      if (current) {
+        const result2 = opts.onCrash ? opts.onCrash(current.item, current.index, String(err2?.message ?? err2)) : opts.onTimeout(current.item, current.index);
+        record(current.index, result2);
+      }
+      pending.unshift(...rest);
+      replace(slot);
+      notify();
+    });
+    worker.on("exit", () => {
+      if (!slot.dead && slot.queue.length > 0) worker.emit("error", new Error("worker exited"));
+    });
+    return slot;
+  };
+  const takeCurrent = (slot) => {
+    const on = Atomics.load(slot.progress, 0);
+    const at2 = slot.queue.findIndex((j) => j.index === on);
+    const current = at2 >= 0 ? slot.queue[at2] : slot.queue[0];
+    const rest = slot.queue.filter((j) => j !== current);
+    slot.queue = [];
+    return [current, rest];
+  };
+  const replace = (slot) => {
+    const i = slots.indexOf(slot);
+    stats.replaced++;
+    void slot.worker.terminate();
+    if (i >= 0) slots[i] = spawn();
+  };
+  for (let i = 0; i < opts.workers; i++) slots.push(spawn());
+  const timer = setInterval(
+    () => {
+      const now = Date.now();
+      for (const slot of slots) {
+        if (slot.dead || slot.queue.length === 0) continue;
+        const finished = Atomics.load(slot.progress, 1);
+        if (finished !== slot.seen) {
+          slot.seen = finished;
+          slot.lastProgress = now;
+        }
+        const stalled = slot.ready ? now - slot.lastProgress > opts.timeoutMs : now - slot.started > Math.max(STARTUP_LIMIT_MS, opts.timeoutMs);
+        if (stalled) {
+          slot.dead = true;
+          const [current, rest] = takeCurrent(slot);
+          if (current) record(current.index, opts.onTimeout(current.item, current.index));
+          pending.unshift(...rest);
+          replace(slot);
+          notify();
+        }
+      }
+    },
+    Math.max(20, Math.min(1e3, Math.floor(opts.timeoutMs / 4)))
+  );
+  timer.unref();
+  const canRead = () => !inputDone && nextIndex - nextOut < window2 && pending.length < batchSize * opts.workers * 2;
+  const readMore = async () => {
+    while (canRead()) {
+      const r = await iterator.next();
+      if (r.done) {
+        inputDone = true;
+        break;
+      }
+      pending.push({ index: nextIndex++, item: r.value });
+      if (nextIndex - nextOut > stats.maxAhead) stats.maxAhead = nextIndex - nextOut;
+      if (pending.length > stats.maxPending) stats.maxPending = pending.length;
+    }
+  };
+  const inFlight = batchSize * 2;
+  const hasRoom = (slot) => !slot.dead && slot.queue.length <= inFlight - batchSize;
+  const dispatch = () => {
+    for (const slot of slots) {
+      if (!hasRoom(slot) || pending.length === 0) continue;
+      const batch = pending.splice(0, batchSize);
+      if (slot.queue.length === 0) slot.lastProgress = Date.now();
+      slot.queue.push(...batch);
+      if (slot.queue.length > stats.maxInFlight) stats.maxInFlight = slot.queue.length;
+      slot.worker.postMessage({ jobs: batch });
+    }
+  };
+  try {
+    for (; ; ) {
+      if (failure2) throw failure2;
+      await readMore();
+      dispatch();
+      while (done.has(nextOut)) {
+        const value = done.get(nextOut);
+        done.delete(nextOut);
+        nextOut++;
+        yield value;
+      }
+      if (inputDone && nextOut >= nextIndex) break;
+      await new Promise((resolve5) => {
+        wake = resolve5;
+        if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
+      });
+    }
+  } catch (e) {
+    failure2 = e;
+    throw e;
+  } finally {
+    stats.items = nextIndex;
+    opts.onStats?.(stats);
+    clearInterval(timer);
+    await Promise.all(slots.map((s) => s.worker.terminate()));
+  }
+}
+function startWorker(script, execArgv, data, resourceLimits) {
+  if (!script.pathname.endsWith(".ts"))
+    return new Worker(script, { execArgv, workerData: data, resourceLimits });
+  const tsx = import.meta.resolve("tsx/esm/api");
+  const code = `import(${JSON.stringify(tsx)}).then((m) => { m.register(); return import(${JSON.stringify(script.href)}); }).catch((e) => { setImmediate(() => { throw e; }); });`;
+  return new Worker(code, { eval: true, execArgv, workerData: data, resourceLimits });
+}
+async function* toAsync(items) {
+  for (const item of items) yield item;
+}
+var STARTUP_LIMIT_MS;
+var init_pool = __esm({
+  "src/bulk/pool.ts"() {
+    "use strict";
+    STARTUP_LIMIT_MS = 12e4;
+  }
+});
+
+// src/registry/types.ts
+var STEREO_FORMS;
+var init_types2 = __esm({
+  "src/registry/types.ts"() {
+    "use strict";
+    STEREO_FORMS = [
+      "achiral",
+      "meso",
+      "single-enantiomer",
+      "enantioenriched",
+      "racemate",
+      "single-diastereomer",
+      "diastereomer-mixture",
+      "unknown"
+    ];
+  }
+});
+
+// src/registry/index-cache.ts
+import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
+import { dirname as dirname2 } from "node:path";
+function readIndexCache(path, settings) {
+  let text;
+  try {
+    text = readFileSync2(path, "utf8");
+  } catch {
+    return { status: "missing", entries: [], reason: "no cache file yet" };
+  }
+  let value;
+  try {
+    value = JSON.parse(text);
+  } catch {
+    return { status: "unreadable", entries: [], reason: "the cache file is not valid JSON" };
+  }
+  const top = value;
+  if (!top || typeof top !== "object" || top.format !== FORMAT || !Array.isArray(top.entries))
+    return { status: "unreadable", entries: [], reason: "the cache file is not a stereogate index cache" };
+  const was = top.settings;
+  if (top.formatVersion !== FORMAT_VERSION || !was || was.version !== settings.version || was.axisOrthoMin !== settings.axisOrthoMin)
+    return {
+      status: "stale",
+      entries: [],
+      reason: "the cache was made by another stereogate version or with other settings"
+    };
+  const entries = [];
+  for (const raw2 of top.entries) {
+    const e = entryOf2(raw2);
+    if (e) entries.push(e);
+  }
+  return { status: "used", entries };
+}
+function writeIndexCache(path, settings, entries) {
+  const tmp = `${path}.${process.pid}.tmp`;
+  try {
+    mkdirSync(dirname2(path), { recursive: true });
+    const stored = entries.map(storedOf);
+    writeFileSync(
+      tmp,
+      `{"format":${JSON.stringify(FORMAT)},"formatVersion":${FORMAT_VERSION},"settings":${JSON.stringify(settings)},"entries":[
+${stored.map((s) => JSON.stringify(s)).join(",\n")}
+]}
+`
+    );
+    renameSync(tmp, path);
+    return null;
+  } catch (e) {
+    rmSync(tmp, { force: true });
+    return e.message;
+  }
+}
+function storedOf(e) {
+  const r = e.row;
+  return [
+    e.file,
+    e.blob,
+    e.molfiles,
+    e.valid ? 1 : 0,
+    e.heavy,
+    e.keyed ? 1 : 0,
+    r.id,
+    r.name,
+    r.form,
+    r.rotation,
+    r.keys,
+    [r.lines.id, r.lines.structure, r.lines.rotation],
+    r.waivers
+  ];
+}
+function isRotation(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const r = v;
+  return typeof r.value === "number" && Number.isFinite(r.value) && isOptNumber(r.wavelength_nm) && isOptNumber(r.temperature_c) && isOptNumber(r.concentration) && (r.solvent === void 0 || isString(r.solvent));
+}
+function isWaiver(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const w = v;
+  return isString(w.check) && Number.isInteger(w.index) && w.index >= 0 && isOptString(w.message_id) && isOptString(w.other_record) && isOptString(w.reason) && isOptString(w.approved_by);
+}
+function isKeys(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const k = v;
+  const text = k.text;
+  return isString(k.constitution) && (k.kind === "as-drawn" || k.kind === "racemic" || k.kind === "relative") && (k.stereo === null || isString(k.stereo)) && (k.mirror === null || isString(k.mirror)) && k.stereo === null === (k.mirror === null) && (k.chiral === null || typeof k.chiral === "boolean") && typeof k.exact === "boolean" && (text === void 0 || !!text && typeof text === "object" && (text.format === "smiles" || text.format === "molfile") && isString(text.text));
+}
+function entryOf2(raw2) {
+  if (!Array.isArray(raw2) || raw2.length !== 13) return null;
+  const [file, blob, molfiles, valid, heavy, keyed2, id, name, form, rotation, keys, lines, waivers] = raw2;
+  if (!isString(file) || file === "" || !isString(blob) || !/^[0-9a-f]{40}$/.test(blob)) return null;
+  if (!Array.isArray(molfiles) || !molfiles.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])))
+    return null;
+  if (valid !== 0 && valid !== 1 || id !== null && !isString(id) || name !== null && !isString(name))
+    return null;
+  if (heavy !== null && !isString(heavy) || keyed2 !== 0 && keyed2 !== 1 || keyed2 === 0 && keys !== null)
+    return null;
+  if (!STEREO_FORMS.includes(form)) return null;
+  if (rotation !== null && !isRotation(rotation)) return null;
+  if (keys !== null && !isKeys(keys)) return null;
+  if (!Array.isArray(lines) || lines.length !== 3 || !lines.every(isLine)) return null;
+  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
+  const [idLine, structureLine, rotationLine] = lines;
+  return {
+    file,
+    blob,
+    molfiles,
+    valid: valid === 1,
+    heavy,
+    keyed: keyed2 === 1,
+    row: {
+      id,
+      file,
+      name,
+      form,
+      rotation,
+      keys,
+      lines: { id: idLine, structure: structureLine, rotation: rotationLine },
+      waivers
+    }
+  };
+}
+var FORMAT, FORMAT_VERSION, isString, isLine, isOptNumber, isOptString;
+var init_index_cache = __esm({
+  "src/registry/index-cache.ts"() {
+    "use strict";
+    init_types2();
+    FORMAT = "stereogate registry index cache";
+    FORMAT_VERSION = 3;
+    isString = (v) => typeof v === "string";
+    isLine = (v) => v === null || Number.isInteger(v) && v > 0;
+    isOptNumber = (v) => v === void 0 || typeof v === "number" && Number.isFinite(v);
+    isOptString = (v) => v === void 0 || isString(v);
+  }
+});
+
+// src/audit/index-keys.ts
+function keyRecordFile(realRoot, abs, engine2, budget, full) {
+  const loaded = loadRecordFile(realRoot, abs);
+  const source = loaded.record === null ? null : sourcesOf(loaded).main;
+  const keyless = source === null || source.text === null;
+  let keep = engine2 !== null;
+  let main = NO_STRUCTURE;
+  let heavy = null;
+  if (engine2 !== null && source?.format === "smiles" && source.text !== null)
+    heavy = engine2.smilesHeavyAtoms?.(source.text) ?? null;
+  if (engine2 !== null && full && !keyless) {
+    const cache2 = new StructureCache(engine2);
+    try {
+      main = withBudget(budget, "the structure of a registry record", () => cache2.main(loaded));
+    } catch {
+      keep = false;
+    }
+  }
+  const { seq: _seq, ...row } = indexRow(loaded, main, 0);
+  const molfiles = [];
+  const s = loaded.sources;
+  for (const src of s ? [s.main, ...s.components] : []) {
+    if (src?.format !== "molfile") continue;
+    if (src.file === void 0) keep = false;
+    else molfiles.push(src.file);
+  }
+  return { row, valid: loaded.record !== null, molfiles, heavy, keyed: keyless || full, keep };
+}
+var NO_STRUCTURE;
+var init_index_keys = __esm({
+  "src/audit/index-keys.ts"() {
+    "use strict";
+    init_budget();
+    init_load();
+    init_index_row();
+    init_structures();
+    NO_STRUCTURE = { structure: null, facts: null, error: null };
+  }
+});
+
+// src/audit/index-build.ts
+import { availableParallelism } from "node:os";
+import { join as join4 } from "node:path";
+var MIN_FILES_FOR_WORKERS, RecordIndex;
+var init_index_build = __esm({
+  "src/audit/index-build.ts"() {
+    "use strict";
+    init_pool();
+    init_blob_ids();
+    init_index_cache();
+    init_index_keys();
+    init_version();
+    MIN_FILES_FOR_WORKERS = 2e3;
+    RecordIndex = class _RecordIndex {
+      constructor(opts) {
+        this.opts = opts;
+        this.entries = new Array(opts.files.length);
+      }
+      opts;
+      /** One entry per file, in the order of the files. */
+      entries;
+      unkept = /* @__PURE__ */ new Set();
+      blobs;
+      read = 0;
+      described = 0;
+      reused = 0;
+      usedWorkers = 0;
+      cache = null;
+      /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */
+      static async open(opts) {
+        const index = new _RecordIndex(opts);
+        await index.fill();
+        return index;
+      }
+      get settings() {
+        return { version: VERSION, axisOrthoMin: this.opts.axisOrthoMin };
+      }
+      get useCache() {
+        return this.opts.cachePath !== null && this.opts.defaultEngine;
+      }
+      async fill() {
+        const gitIds = this.opts.gitIds ?? gitBlobIds(this.opts.realRoot, this.opts.recordDirs);
+        this.cache = this.useCache ? readIndexCache(this.opts.cachePath, this.settings) : null;
+        this.blobs = new BlobIds(await gitIds, (rel) => join4(this.opts.realRoot, rel));
+        let cached = this.cache?.entries ?? [];
+        if (cached.some((e, i) => i > 0 && cached[i - 1].file >= e.file))
+          cached = [...cached].sort((x, y) => x.file < y.file ? -1 : x.file > y.file ? 1 : 0);
+        let c = 0;
+        let byBlob = null;
+        const movedFrom = (blob) => {
+          if (byBlob === null) {
+            byBlob = /* @__PURE__ */ new Map();
+            for (const e of cached) if (e.molfiles.length === 0) byBlob.set(e.blob, e);
+          }
+          return byBlob.get(blob);
+        };
+        const current = (e) => e.molfiles.every(([path, blob]) => this.blobs.of(path) === blob);
+        const toRead = [];
+        this.opts.files.forEach((file, i) => {
+          while (c < cached.length && cached[c].file < file) c++;
+          const blob = this.blobs.of(file);
+          if (blob === null) return toRead.push(i);
+          const same = c < cached.length && cached[c].file === file ? cached[c] : void 0;
+          if (same && same.blob === blob && current(same)) this.entries[i] = same;
+          else {
+            const moved = movedFrom(blob);
+            if (!moved) return toRead.push(i);
+            this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
+          }
+          this.reused++;
+        });
+        await this.readFiles(toRead, false);
+      }
+      /** Computes the keys of the entries `wanted` picks that have none yet. */
+      async keyFully(wanted) {
+        const todo = [];
+        this.entries.forEach((e, i) => {
+          if (!e.keyed && wanted(e)) todo.push(i);
+        });
+        await this.readFiles(todo, true);
+      }
+      async readFiles(at2, full) {
+        if (at2.length === 0) return;
+        const { opts } = this;
+        const workers = opts.workers ?? (opts.defaultEngine && at2.length >= MIN_FILES_FOR_WORKERS ? Math.min(2, availableParallelism()) : 0);
+        this.usedWorkers = Math.max(this.usedWorkers, workers);
+        const noEngine = (item) => keyRecordFile(opts.realRoot, item.abs, null, opts.budget, full);
+        const ext = import.meta.url.endsWith(".ts") ? ".ts" : ".js";
+        const setup = {
+          realRoot: opts.realRoot,
+          budget: opts.budget,
+          axisOrthoMin: opts.axisOrthoMin
+        };
+        const results = mapOrdered(
+          at2.map((i) => ({ abs: join4(opts.realRoot, opts.files[i]), full })),
+          {
+            workers,
+            script: new URL(`./index-worker${ext}`, import.meta.url),
+            workerData: setup,
+            // the worker stops a record at its budget itself; this is the backstop for a stuck or crashed worker
+            timeoutMs: opts.budget.timeMs * 2 + 3e4,
+            onTimeout: noEngine,
+            onCrash: noEngine,
+            inline: (item) => keyRecordFile(opts.realRoot, item.abs, opts.engine, opts.budget, full),
+            batchSize: 64
+          }
+        );
+        let k = 0;
+        for await (const result2 of results) {
+          const i = at2[k++];
+          const file = opts.files[i];
+          const blob = this.blobs.of(file);
+          const molfiles = result2.molfiles.map((m) => [m, this.blobs.of(m)]);
+          const entry = {
+            file,
+            blob: blob ?? "",
+            molfiles: molfiles.map(([m, b]) => [m, b ?? ""]),
+            valid: result2.valid,
+            heavy: result2.heavy,
+            keyed: result2.keyed,
+            row: result2.row
+          };
+          this.unkept.delete(this.entries[i]);
+          if (!result2.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
+          this.entries[i] = entry;
+        }
+        if (full) this.described += at2.length;
+        else this.read += at2.length;
+      }
+      /** Writes the cache when anything changed; says in a sentence what was done (for the log). */
+      save() {
+        const parts = [
+          `${this.entries.length} record file(s)`,
+          `${this.reused} from the cache`,
+          `${this.read} read`,
+          `${this.described} described for their keys`
+        ];
+        if (this.usedWorkers > 0) parts.push(`${this.usedWorkers} worker(s)`);
+        if (this.cache && this.cache.status !== "used") parts.push(`cache not used: ${this.cache.reason}`);
+        const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
+        if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== "used")) {
+          const kept = this.entries.filter((e) => !this.unkept.has(e));
+          const error2 = writeIndexCache(this.opts.cachePath, this.settings, kept);
+          parts.push(error2 === null ? `cache written to ${this.opts.cachePath}` : `cache not written: ${error2}`);
+        }
+        return `Registry index: ${parts.join("; ")}.`;
+      }
+    };
+  }
+});
+
+// src/audit/review-against-index.ts
+var review_against_index_exports = {};
+__export(review_against_index_exports, {
+  reviewAgainstIndex: () => reviewAgainstIndex
+});
+async function reviewAgainstIndex(o) {
+  const gitIds = gitBlobIds(o.realRoot, o.config.recordDirs);
+  const found = findRecordFiles(o.realRoot, o.config.recordDirs);
+  if (found.missingDirs.length > 0) return null;
+  const refused2 = found.refused.map((r) => ({ file: r.file, at: null, refused: r.message }));
+  const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
+  const index = await RecordIndex.open({
+    realRoot: o.realRoot,
+    files,
+    recordDirs: o.config.recordDirs,
+    engine: o.engine,
+    defaultEngine: o.defaultEngine,
+    axisOrthoMin: o.config.axisOrthoMin,
+    budget: o.budget,
+    cachePath: o.indexCache,
+    gitIds,
+    ...o.workers === void 0 ? {} : { workers: o.workers }
+  });
+  const entries = index.entries;
+  const stubs = entries.map(
+    (entry, at2) => entry.molfiles.length === 0 ? { file: entry.file, at: at2, refused: null } : {
+      file: entry.file,
+      sources: { main: null, components: entry.molfiles.map(([file]) => ({ file })) },
+      at: at2,
+      refused: null
+    }
+  );
+  stubs.push(...refused2);
+  stubs.sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
+  const sel = selectRecords(stubs, o.realRoot, o.paths);
+  if (sel.selected.size === stubs.length) {
+    o.log?.(index.save());
+    return null;
+  }
+  const audited = /* @__PURE__ */ new Map();
+  for (const s of stubs) {
+    if (!sel.selected.has(s)) continue;
+    audited.set(
+      s.file,
+      s.refused !== null ? refusedRecord({ file: s.file, message: s.refused }) : loadRecordFile(o.realRoot, found.files[s.at])
+    );
+  }
+  const toAudit = [...audited.values()];
+  const structures = new StructureCache(o.engine);
+  const wanted = partnerFormulas(toAudit, structures, o.budget);
+  await index.keyFully(
+    (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy))
+  );
+  o.log?.(index.save());
+  markDuplicateIdsAgainst(toAudit, entries, audited);
+  const view = indexView(entries, audited, structures, (at2) => loadRecordFile(o.realRoot, found.files[at2]));
+  const result2 = auditRecords(toAudit, {
+    checks: o.checks,
+    config: o.config,
+    engine: o.engine,
+    budget: o.budget,
+    view,
+    // a light row has no keys: its formula differs from every record under review, so no lookup reaches it
+    otherRows: function* () {
+      for (const s of stubs) {
+        if (audited.has(s.file)) continue;
+        if (s.at !== null) yield entries[s.at].row;
+        else yield indexRow(refusedRecord({ file: s.file, message: s.refused }), NO_STRUCTURE2, 0);
+      }
+    }
+  });
+  if (sel.unmatched.length > 0) result2.unmatched = sel.unmatched;
+  return result2;
+}
+function partnerFormulas(records, structures, budget) {
+  const formulas = /* @__PURE__ */ new Set();
+  for (const r of records) {
+    if (r.record === null) continue;
+    let facts;
+    try {
+      facts = withBudget(budget, "the structure of a record under review", () => structures.main(r)).facts;
+    } catch {
+      return null;
+    }
+    if (facts) for (const f of heavyAtomCandidates(facts.constitutionKey.split("/")[0])) formulas.add(f);
+  }
+  return formulas;
+}
+function markDuplicateIdsAgainst(toAudit, entries, audited) {
+  const ids = new Set(toAudit.flatMap((r) => r.id === null ? [] : [r.id]));
+  if (ids.size === 0) return;
+  const group = [];
+  for (const e of entries) {
+    const own2 = audited.get(e.file);
+    if (own2) {
+      if (own2.id !== null && ids.has(own2.id)) group.push(own2);
+      continue;
+    }
+    const { id, lines } = e.row;
+    if (id === null || !ids.has(id)) continue;
+    group.push({
+      file: e.file,
+      id,
+      record: null,
+      positions: {
+        get: (p) => p === "id" && lines.id !== null ? { line: lines.id, column: 1 } : void 0
+      },
+      problems: [],
+      origin: { kind: "file" }
+    });
+  }
+  markDuplicateIds(group);
+}
+function indexView(entries, audited, cache2, load) {
+  const firstById = /* @__PURE__ */ new Map();
+  entries.forEach((e, at2) => {
+    if (e.valid && e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, at2);
+  });
+  const entryAt = (at2) => {
+    const file = entries[at2].file;
+    return entryOf(audited.get(file) ?? load(at2), cache2, audited.has(file));
+  };
+  const seen = /* @__PURE__ */ new Map();
+  let all = null;
+  return {
+    get entries() {
+      all ??= entries.flatMap((e, at2) => e.valid ? entryAt(at2) ?? [] : []);
+      return all;
+    },
+    byId(id) {
+      if (!seen.has(id)) {
+        const at2 = firstById.get(id);
+        seen.set(id, at2 === void 0 ? void 0 : entryAt(at2) ?? void 0);
+      }
+      return seen.get(id);
+    },
+    ids: () => entries.flatMap((e) => e.valid && e.row.id !== null ? [e.row.id] : [])
+  };
+}
+var NO_STRUCTURE2;
+var init_review_against_index = __esm({
+  "src/audit/review-against-index.ts"() {
+    "use strict";
+    init_budget();
+    init_files();
+    init_blob_ids();
+    init_load();
+    init_engine();
+    init_index_build();
+    init_index_row();
+    init_run();
+    init_select();
+    init_structures();
+    init_view();
+    NO_STRUCTURE2 = { structure: null, facts: null, error: null };
+  }
+});
+
+// src/audit/run.ts
+import { existsSync as existsSync3, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
+import { resolve as resolve3 } from "node:path";
+function auditRecords(records, options) {
+  const config = options.config ?? { ...DEFAULT_CONFIG };
+  const cache2 = new StructureCache(options.engine);
+  const engineApi = { relate: options.engine.relate.bind(options.engine) };
+  const budget = options.budget ?? RECORD_BUDGET;
+  const audited = new Set(records);
+  const registry = options.view ?? buildRegistryView(options.registry ?? records, cache2, (r) => audited.has(r));
+  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
+  const results = records.map((loaded) => {
+    try {
+      return withBudget(
+        budget,
+        "the audit of this record",
+        () => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
+      );
+    } catch (e) {
+      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
+      return {
+        id: loaded.id,
+        file: loaded.file,
+        computed: null,
+        findings: [internalError({ id: "audit" }, e, loaded)],
+        passed: [],
+        declared: { form: null, descriptors: null }
+      };
+    }
+  });
+  const result2 = {
+    tool: { name: "stereogate", version: VERSION },
+    records: results,
+    summary: summarize(results),
+    caution: CAUTION
+  };
+  if (options.registryPhase !== false && !options.registryIncomplete && options.checks.some((c) => c.scope === "registry")) {
+    const review2 = options.registry !== void 0 || options.otherRows !== void 0;
+    const phase = new RegistryPhase({
+      mode: review2 ? "review" : "full",
+      config,
+      confirm: confirmWith(options.engine),
+      duplicateIds: false
+    });
+    const mainOf = (r) => {
+      try {
+        return withBudget(budget, "the structure of a registry record", () => cache2.main(r));
+      } catch {
+        return { structure: null, facts: null, error: null };
+      }
+    };
+    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
+    if (review2) {
+      const audited2 = new Set(records);
+      phase.reviewing(rows);
+      let seq = records.length;
+      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      else for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
+      for (const row of rows) phase.fileUnderReview(row);
+    }
+    rows.forEach((row, i) => addPhaseResult(results[i], phase.next(row)));
+    result2.summary = summarize(results);
+    result2.registry = phase.summary();
+  }
+  return result2;
+}
+function confirmWith(engine2) {
+  const read = (k) => k.text ? readOnly({ field: "structure", format: k.text.format, text: k.text.text }, engine2).structure : null;
+  return (a, b) => {
+    const sa = read(a);
+    const sb = read(b);
+    if (!sa || !sb) return null;
+    try {
+      return engine2.relate(sa, sb).relation;
+    } catch {
+      return null;
+    }
+  };
+}
+function addPhaseResult(r, p) {
+  if (p.findings.length > 0) {
+    r.findings = r.findings.filter((f) => stillMatchesNothing(f, p.findings));
+    r.findings.push(...p.findings);
+  }
+  if (p.passed) r.passed.push(p.passed);
+}
+function auditOne(loaded, checks, config, cache2, registry, engine2) {
+  const { main, components } = cache2.all(loaded);
+  const findings = schemaFindings(loaded, config);
+  applyWaivers(findings, loaded);
+  const passed = [];
+  const notRun = [];
+  const notApplicable = [];
+  const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
+  for (const check of unparsed ? [] : checks) {
+    if (configuredSeverity(config, check.id) === "off") continue;
+    const ctx = {
+      loaded,
+      record: loaded.record,
+      main,
+      components,
+      registry,
+      config,
+      engine: engine2,
+      findings: [...findings]
+    };
+    const missing = missingInput(check, ctx);
+    if (missing !== null) {
+      notRun.push({ check: check.id, reason: missing });
+      continue;
+    }
+    if (check.scope === "registry") continue;
+    let produced;
+    let outcome;
+    try {
+      outcome = check.run(ctx);
+      if (!outcome || !Array.isArray(outcome.findings))
+        throw new Error("the check returned no findings list");
+      produced = outcome.findings.filter((raw2) => messageEnabled(config, check.id, raw2.messageId)).map((raw2) => toFinding(check, raw2, loaded, config));
+    } catch (e) {
+      if (e instanceof BudgetExceeded) throw e;
+      findings.push(internalError(check, e, loaded));
+      continue;
+    }
+    applyWaivers(produced, loaded);
+    findings.push(...produced);
+    if (outcome.notRun !== void 0 && produced.length === 0) {
+      notRun.push({ check: check.id, reason: outcome.notRun });
+    } else if (outcome.notApplicable !== void 0 && produced.length === 0) {
+      notApplicable.push({ check: check.id, reason: outcome.notApplicable });
+    } else if (produced.length === 0) {
+      passed.push({ check: check.id, evidence: outcome.passed ?? "" });
+    }
+  }
+  const record = loaded.record;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: main.facts,
+    findings,
+    passed,
+    notRun,
+    notApplicable,
+    declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null }
+  };
+}
+function missingInput(check, ctx) {
+  const needs = check.requires ?? [];
+  if (needs.includes("structure")) {
+    if (ctx.record === null) return "the record does not follow the record schema (see record-schema)";
+    if (ctx.main.facts === null) {
+      return ctx.main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure";
+    }
+  }
+  if (needs.includes("registry") && ctx.registry.incomplete) return ctx.registry.incomplete;
+  return null;
+}
+function overBudget(loaded, e, checks) {
+  const reason = e.kind === "time" ? "the record was stopped at its time limit (see record-time-limit)" : "the record was stopped at its memory bound (see record-time-limit)";
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: null,
+    findings: [budgetFinding(loaded, e.kind, e.limit)],
+    passed: [],
+    notRun: checks.map((c) => ({ check: c.id, reason })),
+    declared: {
+      form: loaded.record?.stereo.form ?? null,
+      descriptors: loaded.record?.stereo.descriptors ?? null
+    }
+  };
+}
+function summarize(records) {
+  const s = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  for (const r of records) {
+    for (const f of r.findings) {
+      if (f.waived) s.waived++;
+      else if (f.severity === "error") s.errors++;
+      else if (f.severity === "warning") s.warnings++;
+      else s.notes++;
+    }
+  }
+  return s;
+}
+async function openRegistry(options) {
+  const rootAbs = resolve3(options.root);
+  if (!existsSync3(rootAbs) || !statSync2(rootAbs).isDirectory()) {
+    throw new ConfigError(`registry folder ${options.root} does not exist`);
+  }
+  const root = realpathSync3(rootAbs);
+  const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
+  const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
+  const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
+  const messageIds = new Map(checks.map((c) => [c.id, Object.keys(c.messages)]));
+  checkSeverityIds(
+    config,
+    ids,
+    (w) => closestWord(w, ids),
+    (id) => messageIds.get(id)
+  );
+  return { root, config, checks };
+}
+function missingDirsError(missing, root) {
+  return new ConfigError(
+    `record folder${missing.length > 1 ? "s" : ""} ${missing.map((d) => `'${d}'`).join(", ")} not found in ${root} (set recordDirs in stereogate.config.yml)`
+  );
+}
+async function runAudit(options) {
+  const { root, config, checks } = await openRegistry(options);
+  const engine2 = options.engine ?? await defaultEngine({ axisOrthoMin: config.axisOrthoMin });
+  if (options.paths && options.paths.length > 0) {
+    const { reviewAgainstIndex: reviewAgainstIndex2 } = await Promise.resolve().then(() => (init_review_against_index(), review_against_index_exports));
+    const reviewed = await reviewAgainstIndex2({
+      realRoot: root,
+      paths: options.paths,
+      config,
+      checks,
+      engine: engine2,
+      defaultEngine: options.engine === void 0,
+      budget: options.budget ?? RECORD_BUDGET,
+      indexCache: options.indexCache ?? null,
+      ...options.log ? { log: options.log } : {}
+    });
+    if (reviewed) return reviewed;
+  }
+  const load = loadRegistry(root, { recordDirs: config.recordDirs });
+  if (load.missingDirs.length > 0) throw missingDirsError(load.missingDirs, options.root);
+  let toAudit = load.records;
+  let unmatched = [];
+  if (options.paths && options.paths.length > 0) {
+    const sel = selectRecords(load.records, root, options.paths);
+    toAudit = load.records.filter((r) => sel.selected.has(r));
+    unmatched = sel.unmatched;
+  }
+  const registry = toAudit.length === load.records.length ? void 0 : load.records;
+  const result2 = auditRecords(toAudit, { checks, config, engine: engine2, registry, budget: options.budget });
+  if (unmatched.length > 0) result2.unmatched = unmatched;
+  return result2;
+}
+function stripUndefined(o) {
+  if (!o) return void 0;
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== void 0));
+}
+var RECORD_BUDGET;
+var init_run = __esm({
+  "src/audit/run.ts"() {
+    "use strict";
+    init_waivers();
+    init_closest();
+    init_load();
+    init_caution();
+    init_config();
+    init_engine();
+    init_findings();
+    init_select();
+    init_budget();
+    init_index_row();
+    init_registry_phase();
+    init_structures();
+    init_version();
+    init_view();
+    RECORD_BUDGET = Object.freeze({ timeMs: 2e4, memoryMb: 1024 });
   }
 });
 
@@ -70057,2099 +73515,15 @@ function info(message2) {
   process.stdout.write(message2 + os4.EOL);
 }
 
-// src/audit/caution.ts
-var CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
-
-// src/audit/config.ts
-import { existsSync as existsSync2 } from "node:fs";
-import { isAbsolute as isAbsolute2, join as join3, resolve as resolve2 } from "node:path";
-
-// src/registry/files.ts
-import {
-  closeSync,
-  constants as constants3,
-  fstatSync,
-  lstatSync,
-  openSync,
-  readdirSync,
-  readSync,
-  realpathSync,
-  statSync
-} from "node:fs";
-import { isAbsolute, join, relative, resolve, sep } from "node:path";
-var MAX_FILE_BYTES = 8 * 1024 * 1024;
-var RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
-var UTF8 = new TextDecoder("utf-8", { fatal: true });
-var OPEN_FLAGS = constants3.O_RDONLY | (constants3.O_NONBLOCK ?? 0);
-function readRegularFile(abs) {
-  const fd = openSync(abs, OPEN_FLAGS);
-  try {
-    const st = fstatSync(fd);
-    if (!st.isFile()) return { ok: false, error: "is not a regular file" };
-    if (st.size > MAX_FILE_BYTES)
-      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
-    let buf = Buffer.allocUnsafe(st.size + 1);
-    let total = 0;
-    for (; ; ) {
-      if (total === buf.length) {
-        if (total > MAX_FILE_BYTES)
-          return {
-            ok: false,
-            error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
-          };
-        const bigger = Buffer.allocUnsafe(buf.length * 2);
-        buf.copy(bigger, 0, 0, total);
-        buf = bigger;
-      }
-      const n = readSync(fd, buf, total, buf.length - total, null);
-      if (n === 0) break;
-      total += n;
-    }
-    if (total > MAX_FILE_BYTES)
-      return {
-        ok: false,
-        error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
-      };
-    return { ok: true, bytes: buf.subarray(0, total) };
-  } finally {
-    closeSync(fd);
-  }
-}
-function readTextFile(abs) {
-  let bytes;
-  try {
-    const read = readRegularFile(abs);
-    if (!read.ok) return read;
-    bytes = read.bytes;
-  } catch (e) {
-    return { ok: false, error: `cannot be read (${e.code ?? String(e)})` };
-  }
-  if (bytes.includes(0)) return { ok: false, error: "is a binary file, not text" };
-  let text;
-  try {
-    text = UTF8.decode(bytes);
-  } catch {
-    return { ok: false, error: "is not valid UTF-8 text" };
-  }
-  return { ok: true, text: text.startsWith("\uFEFF") ? text.slice(1) : text };
-}
-function relativeTo(root, abs) {
-  if (abs.startsWith(root) && abs[root.length] === sep && !abs.includes(`${sep}.`) && !abs.endsWith(sep)) {
-    const rest = abs.slice(root.length + 1);
-    if (rest !== "" && !rest.includes(`${sep}${sep}`)) return sep === "/" ? rest : rest.split(sep).join("/");
-  }
-  return relative(root, abs).split(sep).join("/");
-}
-function escapes(root, abs) {
-  const rel = relative(root, abs);
-  return rel === ".." || rel.startsWith(`..${sep}`) || isAbsolute(rel);
-}
-function resolveInside(root, fromDir, path) {
-  if (isAbsolute(path) || /^[a-zA-Z]:[\\/]/.test(path) || path.startsWith("\\") || path.startsWith("~")) {
-    return { ok: false, error: `'${path}' is an absolute path; give a path relative to the record file` };
-  }
-  if (path.includes("\0")) return { ok: false, error: "the path contains a NUL character" };
-  const abs = resolve(fromDir, path);
-  if (escapes(root, abs)) return { ok: false, error: `'${path}' leaves the registry folder` };
-  let real;
-  try {
-    real = realpathSync(abs);
-  } catch {
-    return { ok: false, error: `'${path}' does not exist (looked for ${relativeTo(root, abs)})` };
-  }
-  if (escapes(root, real))
-    return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
-  return { ok: true, abs: real, rel: relativeTo(root, abs) };
-}
-function findRecordFiles(root, recordDirs) {
-  const found = /* @__PURE__ */ new Map();
-  const refused2 = [];
-  const missingDirs = [];
-  const visited = /* @__PURE__ */ new Set();
-  const walk = (dir, depth) => {
-    if (depth > 32) return;
-    let real;
-    try {
-      real = realpathSync(dir);
-    } catch {
-      return;
-    }
-    if (visited.has(real) || escapes(root, real)) return;
-    visited.add(real);
-    let dirents;
-    try {
-      dirents = readdirSync(dir, { withFileTypes: true }).sort(
-        (a, b) => a.name < b.name ? -1 : a.name > b.name ? 1 : 0
-      );
-    } catch {
-      return;
-    }
-    for (const dirent of dirents) {
-      const name = dirent.name;
-      if (name.startsWith(".") || name === "node_modules") continue;
-      const abs = join(dir, name);
-      let st = dirent;
-      if (!dirent.isDirectory() && !dirent.isFile() && !dirent.isSymbolicLink()) {
-        try {
-          st = lstatSync(abs);
-        } catch {
-          continue;
-        }
-      }
-      if (st.isSymbolicLink()) {
-        let target;
-        try {
-          target = realpathSync(abs);
-        } catch {
-          if (RECORD_EXTENSIONS.test(name))
-            refused2.push({ file: relativeTo(root, abs), message: "is a broken link" });
-          continue;
-        }
-        if (escapes(root, target)) {
-          if (RECORD_EXTENSIONS.test(name)) {
-            refused2.push({
-              file: relativeTo(root, abs),
-              message: "is a link to a place outside the registry folder"
-            });
-          }
-          continue;
-        }
-        st = statSync(abs);
-      }
-      if (st.isDirectory()) walk(abs, depth + 1);
-      else if (st.isFile() && RECORD_EXTENSIONS.test(name)) found.set(relativeTo(root, abs), abs);
-    }
-  };
-  for (const d of recordDirs) {
-    const r = resolveInside(root, root, d);
-    if (!r.ok) {
-      missingDirs.push(d);
-      continue;
-    }
-    walk(r.abs === root ? root : resolve(root, d), 0);
-  }
-  const files = [...found.entries()].sort(([a], [b]) => a < b ? -1 : a > b ? 1 : 0).map(([, abs]) => abs);
-  return { files, refused: refused2, missingDirs };
-}
-
-// src/registry/parse.ts
-var import_yaml2 = __toESM(require_dist(), 1);
-
-// src/registry/positions.ts
-var import_yaml = __toESM(require_dist(), 1);
-var PositionMap = class {
-  map = /* @__PURE__ */ new Map();
-  set(path, pos) {
-    if (!this.map.has(path)) this.map.set(path, pos);
-  }
-  get(path) {
-    return this.map.get(path);
-  }
-  /** The line of `path`, else of its nearest ancestor that exists (a missing field points at its parent). */
-  lineOf(path) {
-    return lineOf(this, path);
-  }
-  get size() {
-    return this.map.size;
-  }
-  /** Every known path with its position, in document order. */
-  entries() {
-    return [...this.map];
-  }
-};
-function lineOf(positions2, path) {
-  if (path === null) return null;
-  let p = path;
-  for (; ; ) {
-    const pos = positions2.get(p);
-    if (pos) return pos.line;
-    if (p === "") return null;
-    const cut = p.lastIndexOf(".");
-    p = cut < 0 ? "" : p.slice(0, cut);
-  }
-}
-var NO_POSITIONS = { get: () => void 0 };
-function keyText(key4) {
-  if ((0, import_yaml.isScalar)(key4)) return String(key4.value);
-  return String(key4);
-}
-function positionsOf(doc, counter) {
-  const positions2 = new PositionMap();
-  const put = (path, node) => {
-    const start = node?.range?.[0];
-    if (start === void 0) return;
-    const { line, col } = counter.linePos(start);
-    positions2.set(path, { line, column: col });
-  };
-  const walk = (node, path, depth) => {
-    if (depth > 64) return;
-    if ((0, import_yaml.isMap)(node)) {
-      for (const pair of node.items) {
-        const childPath = path === "" ? keyText(pair.key) : `${path}.${keyText(pair.key)}`;
-        put(childPath, pair.key ?? pair.value);
-        walk(pair.value, childPath, depth + 1);
-      }
-    } else if ((0, import_yaml.isSeq)(node)) {
-      node.items.forEach((item, i) => {
-        const childPath = path === "" ? String(i) : `${path}.${i}`;
-        put(childPath, item);
-        walk(item, childPath, depth + 1);
-      });
-    }
-  };
-  put("", doc.contents);
-  if (positions2.get("") === void 0) positions2.set("", { line: 1, column: 1 });
-  walk(doc.contents, "", 0);
-  return positions2;
-}
-
-// src/registry/quick-yaml.ts
-var NotPlain = class extends Error {
-};
-var KEY = /^[A-Za-z][A-Za-z0-9_-]*(?=:(?: |$))/;
-var NOT_STRING_KEY = /^(?:[Nn]ull|NULL|[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
-var NULL = /^(?:~|[Nn]ull|NULL)$/;
-var TRUE = /^(?:[Tt]rue|TRUE)$/;
-var FALSE = /^(?:[Ff]alse|FALSE)$/;
-var INT = /^[-+]?[0-9]+$/;
-var FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
-var FLOAT_EXP = /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/;
-var OTHER_NUMBER = /^(?:0o|0x|[-+]?\.(?:inf|Inf|INF)$|\.(?:nan|NaN|NAN)$)/;
-var BAD_START = /^(?:[-?:](?![0-9.])|[,[\]{}#&*!|>'"%@`])/;
-var CONTROL = /[\x00-\x08\x0b-\x1f\x7f-\x9f\u2028\u2029\ufeff\ufffe\uffff]/;
-function fail() {
-  throw new NotPlain();
-}
-function quoted(text, start) {
-  const q = text[start];
-  let out = "";
-  let i = start + 1;
-  for (; ; ) {
-    if (i >= text.length) fail();
-    const ch = text[i];
-    if (ch === q) {
-      if (q === '"' || text[i + 1] !== "'") break;
-      out += "'";
-      i += 2;
-    } else if (ch === "\\" && q === '"') {
-      const next = text[i + 1];
-      if (next !== "\\" && next !== '"') fail();
-      out += next;
-      i += 2;
-    } else {
-      out += ch;
-      i++;
-    }
-  }
-  return { value: out, end: i + 1 };
-}
-function resolvePlain(plain) {
-  if (plain === "" || BAD_START.test(plain) || plain.includes(": ") || plain.endsWith(":")) fail();
-  if (NULL.test(plain)) return null;
-  if (TRUE.test(plain)) return true;
-  if (FALSE.test(plain)) return false;
-  if (INT.test(plain)) return parseInt(plain, 10);
-  if (FLOAT.test(plain) || FLOAT_EXP.test(plain)) return parseFloat(plain);
-  if (OTHER_NUMBER.test(plain)) fail();
-  return plain;
-}
-function scalar(text) {
-  if (text[0] === '"' || text[0] === "'") {
-    const q = quoted(text, 0);
-    trailing(text.slice(q.end));
-    return q.value;
-  }
-  const hash = text.indexOf(" #");
-  return resolvePlain((hash < 0 ? text : text.slice(0, hash)).replace(/ +$/, ""));
-}
-function flowList(text, at2) {
-  const out = [];
-  let i = 1;
-  const spaces = () => {
-    while (text[i] === " ") i++;
-  };
-  spaces();
-  if (text[i] === "]") {
-    trailing(text.slice(i + 1));
-    return out;
-  }
-  for (; ; ) {
-    spaces();
-    at2(out.length, i);
-    const c = text[i];
-    if (c === '"' || c === "'") {
-      const q = quoted(text, i);
-      out.push(q.value);
-      i = q.end;
-    } else {
-      let j = i;
-      while (j < text.length && !",[]{}".includes(text[j])) j++;
-      const plain = text.slice(i, j).replace(/ +$/, "");
-      if (plain.includes(":") || plain.includes(" #")) fail();
-      out.push(resolvePlain(plain));
-      i = j;
-    }
-    spaces();
-    if (text[i] === "]") break;
-    if (text[i] !== ",") fail();
-    i++;
-    spaces();
-    if (text[i] === "]") fail();
-  }
-  trailing(text.slice(i + 1));
-  return out;
-}
-function trailing(rest) {
-  const t = rest.replace(/^ +/, "");
-  if (t !== "" && !(t.startsWith("#") && t.length < rest.length)) fail();
-}
-function contentLines(text) {
-  if (text.includes("	") || text.includes("\r") || CONTROL.test(text)) return null;
-  const lines = [];
-  const raw2 = text.split("\n");
-  for (let k = 0; k < raw2.length; k++) {
-    const s = raw2[k];
-    let indent = 0;
-    while (s.charCodeAt(indent) === 32) indent++;
-    if (indent === s.length || s[indent] === "#") continue;
-    if (indent === 0 && (s.startsWith("---") || s.startsWith("...") || s.startsWith("%"))) return null;
-    lines.push({ no: k + 1, indent, text: s.slice(indent) });
-  }
-  return lines;
-}
-function quickParse(text) {
-  const lines = contentLines(text);
-  if (lines === null || lines.length === 0 || lines[0].indent !== 0) return null;
-  const positions2 = new PositionMap();
-  let at2 = 0;
-  const put = (path, line, column) => positions2.set(path, { line: line.no, column });
-  const mapping = (indent, path, firstText) => {
-    const out = {};
-    const seen = /* @__PURE__ */ new Set();
-    let first = firstText !== void 0;
-    while (at2 < lines.length) {
-      const line = lines[at2];
-      const body = first ? firstText : line.text;
-      if (!first) {
-        if (line.indent < indent) break;
-        if (line.indent > indent) fail();
-      }
-      first = false;
-      const m = KEY.exec(body);
-      if (!m) fail();
-      const key4 = m[0];
-      if (NOT_STRING_KEY.test(key4) || seen.has(key4) || key4.length > 1e3) fail();
-      seen.add(key4);
-      const childPath = path === "" ? key4 : `${path}.${key4}`;
-      put(childPath, line, indent + 1);
-      at2++;
-      const rest = body.slice(key4.length + 1).replace(/^ +/, "");
-      if (rest.startsWith("[")) {
-        const restColumn = indent + body.length - rest.length;
-        out[key4] = flowList(rest, (i, offset) => put(`${childPath}.${i}`, line, restColumn + offset + 1));
-        continue;
-      }
-      if (rest !== "" && !rest.startsWith("#")) {
-        out[key4] = scalar(rest);
-        continue;
-      }
-      const next = lines[at2];
-      if (next && next.indent > indent) out[key4] = block(next.indent, childPath);
-      else if (next && next.indent === indent && isItem(next.text)) out[key4] = list(indent, childPath);
-      else out[key4] = null;
-    }
-    return out;
-  };
-  const isItem = (t) => t === "-" || t.startsWith("- ");
-  const list = (indent, path) => {
-    const out = [];
-    while (at2 < lines.length) {
-      const line = lines[at2];
-      if (line.indent < indent) break;
-      if (line.indent > indent) fail();
-      if (!isItem(line.text)) break;
-      const itemPath = path === "" ? String(out.length) : `${path}.${out.length}`;
-      let gap = 1;
-      while (line.text.charCodeAt(gap) === 32) gap++;
-      const body = line.text.slice(gap);
-      if (body === "" || body.startsWith("#") || isItem(body)) fail();
-      const column = indent + gap;
-      put(itemPath, line, column + 1);
-      if (KEY.test(body)) out.push(mapping(column, itemPath, body));
-      else {
-        out.push(scalar(body));
-        at2++;
-      }
-    }
-    return out;
-  };
-  const block = (indent, path) => isItem(lines[at2].text) ? list(indent, path) : mapping(indent, path);
-  try {
-    put("", lines[0], 1);
-    const value = mapping(0, "");
-    if (at2 !== lines.length) return null;
-    return { value, positions: positions2 };
-  } catch (e) {
-    if (e instanceof NotPlain) return null;
-    throw e;
-  }
-}
-
-// src/registry/schema.ts
-var import_ajv = __toESM(require_ajv(), 1);
-
-// schema/record.schema.json
-var record_schema_default = {
-  $schema: "http://json-schema.org/draft-07/schema#",
-  $id: "https://stereogate.invalid/schema/record.schema.json",
-  title: "stereogate compound record",
-  description: "One compound of a registry: its structure and the stereochemical claim made about it. YAML or JSON, one record per file.",
-  type: "object",
-  required: ["id", "structure", "stereo"],
-  additionalProperties: false,
-  properties: {
-    id: {
-      description: "Registry number, unique in the registry, e.g. LX-00042.",
-      type: "string",
-      minLength: 1,
-      maxLength: 200,
-      pattern: "^\\S(.*\\S)?$"
-    },
-    name: { description: "Free-text name.", type: "string" },
-    structure: { $ref: "#/definitions/structureRef" },
-    stereo: {
-      type: "object",
-      required: ["form"],
-      additionalProperties: false,
-      properties: {
-        form: {
-          description: "The stereochemical form claimed for the registered substance.",
-          enum: [
-            "achiral",
-            "meso",
-            "single-enantiomer",
-            "enantioenriched",
-            "racemate",
-            "single-diastereomer",
-            "diastereomer-mixture",
-            "unknown"
-          ]
-        },
-        descriptors: {
-          description: "IUPAC stereodescriptors, e.g. (2R,3S) or rac-(1R,2S).",
-          type: "string"
-        },
-        ee: {
-          description: "Enantiomeric excess in percent.",
-          type: "number",
-          minimum: 0,
-          maximum: 100
-        },
-        ratio: {
-          description: "Component ratio in the order of components, e.g. 70:30.",
-          type: "string"
-        },
-        components: {
-          description: "The stereoisomers a mixture consists of (at most 50).",
-          type: "array",
-          maxItems: 50,
-          items: { $ref: "#/definitions/component" }
-        },
-        rotation: {
-          description: "Specific rotation as measured.",
-          type: "object",
-          required: ["value"],
-          additionalProperties: false,
-          properties: {
-            value: { description: "Degrees; the sign matters.", type: "number" },
-            wavelength_nm: { type: "number", exclusiveMinimum: 0 },
-            temperature_c: { type: "number", minimum: -273.15 },
-            solvent: { type: "string" },
-            concentration: { description: "g/100 mL.", type: "number", exclusiveMinimum: 0 }
-          }
-        },
-        evidence: {
-          description: "Analytical evidence for the claim, free text per item.",
-          type: "array",
-          items: { type: "string" }
-        }
-      }
-    },
-    origin: {
-      description: "How the compound was made: the inputs it came from and what, if anything, made the outcome stereoselective or changed the ee.",
-      type: "object",
-      required: ["from"],
-      additionalProperties: false,
-      properties: {
-        from: {
-          description: "Inputs: registered ids (e.g. LX-00012) or, for inputs not registered, SMILES.",
-          type: "array",
-          minItems: 1,
-          maxItems: 20,
-          items: { type: "string", minLength: 1, maxLength: 2e3 }
-        },
-        control: {
-          description: "What made the outcome stereoselective or changed the ee; 'none' when nothing chiral was present. Not given: unknown.",
-          enum: [
-            "none",
-            "chiral-catalyst",
-            "chiral-reagent",
-            "chiral-auxiliary",
-            "biocatalyst",
-            "resolution",
-            "chiral-separation",
-            "enrichment",
-            "unknown"
-          ]
-        }
-      }
-    },
-    waivers: {
-      description: "Findings the responsible chemist has accepted.",
-      type: "array",
-      items: {
-        type: "object",
-        required: ["check"],
-        additionalProperties: false,
-        properties: {
-          check: {
-            description: "Id of the check whose findings are accepted.",
-            type: "string",
-            minLength: 1
-          },
-          reason: { type: "string" },
-          approved_by: { type: "string" }
-        }
-      }
-    }
-  },
-  definitions: {
-    structureRef: {
-      type: "object",
-      additionalProperties: false,
-      properties: {
-        smiles: { type: "string", minLength: 1 },
-        molfile: {
-          description: "Path relative to the record file, inside the registry.",
-          type: "string",
-          minLength: 1
-        }
-      },
-      oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
-    },
-    component: {
-      type: "object",
-      additionalProperties: false,
-      properties: {
-        smiles: { type: "string", minLength: 1 },
-        molfile: { type: "string", minLength: 1 },
-        descriptors: { type: "string" }
-      },
-      oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
-    }
-  }
-};
-
-// schema/config.schema.json
-var config_schema_default = {
-  $schema: "http://json-schema.org/draft-07/schema#",
-  $id: "https://stereogate.invalid/schema/config.schema.json",
-  title: "stereogate configuration (stereogate.config.yml or stereogate.config.json at the registry root)",
-  type: "object",
-  additionalProperties: false,
-  properties: {
-    recordDirs: {
-      description: "Folders holding record files, relative to the registry root. Default: [compounds].",
-      type: "array",
-      minItems: 1,
-      items: { type: "string", minLength: 1 }
-    },
-    severities: {
-      description: "Severity per check id (sets the level of that check's failures, raised or lowered; note-level messages stay notes), or per check-id/message-id (that message only, notes included); off skips the check or drops the message.",
-      type: "object",
-      additionalProperties: { enum: ["error", "warning", "note", "off"] }
-    },
-    ratioSumTolerance: {
-      description: "Parts of a ratio must sum to 100 within this many percentage points.",
-      type: "number",
-      minimum: 0,
-      maximum: 100
-    },
-    racemateRatioTolerance: {
-      description: "A racemate's enantiomer ratio may deviate from 50:50 by this many percentage points.",
-      type: "number",
-      minimum: 0,
-      maximum: 50
-    },
-    eeTolerance: {
-      description: "Stated ee and ee computed from a ratio may differ by this many percentage points.",
-      type: "number",
-      minimum: 0,
-      maximum: 100
-    },
-    singleEnantiomerMinEe: {
-      description: "A single-enantiomer claim needs at least this ee (percent).",
-      type: "number",
-      minimum: 0,
-      maximum: 100
-    },
-    axisOrthoMin: {
-      description: "A biaryl bond with at least this many ortho substituents (both rings; a fused ring counts twice) is a potential stereogenic axis when the structure does not draw one. Rule of thumb (common practice, no source). Default 3.",
-      type: "integer",
-      minimum: 0,
-      maximum: 8
-    },
-    zeroRotationTolerance: {
-      description: "A specific rotation whose magnitude is at or below this (degrees) counts as zero.",
-      type: "number",
-      minimum: 0
-    }
-  }
-};
-
-// src/registry/schema.ts
-init_closest();
-
-// src/registry/form-words.ts
-var SYNONYMS = {
-  enantiopure: "single-enantiomer",
-  "enantiomerically-pure": "single-enantiomer",
-  "optically-pure": "single-enantiomer",
-  homochiral: "single-enantiomer",
-  "single-isomer": "single-enantiomer",
-  racemic: "racemate",
-  rac: "racemate",
-  "racemic-mixture": "racemate",
-  dl: "racemate",
-  "±": "racemate",
-  scalemic: "enantioenriched",
-  enriched: "enantioenriched",
-  "enantiomerically-enriched": "enantioenriched",
-  "partially-resolved": "enantioenriched",
-  diastereopure: "single-diastereomer",
-  "diastereomerically-pure": "single-diastereomer",
-  "diastereomeric-mixture": "diastereomer-mixture",
-  "mixture-of-diastereomers": "diastereomer-mixture",
-  "epimeric-mixture": "diastereomer-mixture",
-  "not-chiral": "achiral",
-  undefined: "unknown",
-  unspecified: "unknown",
-  "not-determined": "unknown"
-};
-function formSynonym(word) {
-  const key4 = word.trim().toLowerCase().replace(/[\s_]+/g, "-");
-  return SYNONYMS[key4] ?? null;
-}
-
-// src/registry/schema.ts
-var PROBLEM_CODES = {
-  required: "missing-field",
-  additionalProperties: "unknown-field",
-  enum: "not-allowed-value",
-  type: "wrong-type",
-  minimum: "out-of-range",
-  maximum: "out-of-range",
-  exclusiveMinimum: "out-of-range",
-  exclusiveMaximum: "out-of-range",
-  minLength: "empty-value",
-  maxLength: "too-long",
-  pattern: "spaces-around",
-  minItems: "too-few-items",
-  maxItems: "too-many-items",
-  oneOf: "structure-choice"
-};
-var AJV_OPTIONS = {
-  allErrors: true,
-  strict: true,
-  strictRequired: false,
-  allowUnionTypes: true,
-  verbose: true
-};
-var ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
-var recordValidator = null;
-var configValidator = null;
-function validateRecordShape(value) {
-  recordValidator ??= ajv.compile(record_schema_default);
-  return recordValidator(value) ? [] : explain(recordValidator.errors ?? [], value, "record");
-}
-function validateConfigShape(value) {
-  configValidator ??= ajv.compile(config_schema_default);
-  return configValidator(value) ? [] : explain(configValidator.errors ?? [], value, "config file");
-}
-function pointerToPath(pointer) {
-  if (pointer === "") return "";
-  return pointer.slice(1).split("/").map((s) => s.replace(/~1/g, "/").replace(/~0/g, "~")).join(".");
-}
-function join2(path, key4) {
-  return path === "" ? key4 : `${path}.${key4}`;
-}
-function at(value, path) {
-  if (path === "") return value;
-  let cur = value;
-  for (const part of path.split(".")) {
-    if (cur === null || typeof cur !== "object") return void 0;
-    cur = cur[part];
-  }
-  return cur;
-}
-function kindOf(v) {
-  if (v === null) return "null";
-  if (Array.isArray(v)) return "a list";
-  if (typeof v === "object") return "a mapping";
-  if (typeof v === "string") return `the text ${quote(v)}`;
-  return `${typeof v} ${safeJson(v)}`;
-}
-function quote(v) {
-  const s = typeof v === "string" ? v : safeJson(v);
-  const short = s.length > 60 ? `${s.slice(0, 57)}...` : s;
-  return `'${short}'`;
-}
-function safeJson(v) {
-  try {
-    return JSON.stringify(v) ?? String(v);
-  } catch {
-    return Object.prototype.toString.call(v);
-  }
-}
-function allowedProperties(schemaNode) {
-  const props = schemaNode?.properties;
-  return props ? Object.keys(props) : [];
-}
-var TYPE_WORDS = {
-  string: "text",
-  number: "a number",
-  integer: "a whole number",
-  object: "a mapping of fields",
-  array: "a list",
-  boolean: "true or false"
-};
-function explainOne(e, value, what) {
-  const path = pointerToPath(e.instancePath);
-  const label = path === "" ? `the ${what}` : path;
-  const got2 = at(value, path);
-  switch (e.keyword) {
-    case "required": {
-      const missing = String(e.params.missingProperty);
-      return {
-        path: join2(path, missing),
-        message: `${join2(path, missing)}: this field is required but missing`
-      };
-    }
-    case "additionalProperties": {
-      const extra = String(e.params.additionalProperty);
-      const allowed = allowedProperties(e.parentSchema);
-      const guess = closestWord(extra, allowed);
-      const hint = guess ? `; did you mean '${guess}'?` : allowed.length ? ` (allowed: ${allowed.join(", ")})` : "";
-      return {
-        path: join2(path, extra),
-        message: `${join2(path, extra)}: '${extra}' is not a field of ${path === "" ? `a ${what}` : path}${hint}`
-      };
-    }
-    case "enum": {
-      const allowed = (e.params.allowedValues ?? []).map(String);
-      const synonym = typeof got2 === "string" ? formSynonym(got2) : null;
-      const guess = synonym !== null && allowed.includes(synonym) ? synonym : typeof got2 === "string" ? closestWord(got2, allowed) : null;
-      const hint = guess ? `; did you mean '${guess}'?` : "";
-      return { path, message: `${label}: ${quote(got2)} is not one of ${allowed.join(", ")}${hint}` };
-    }
-    case "type": {
-      const want = String(e.params.type).split(",").map((t) => TYPE_WORDS[t] ?? t).join(" or ");
-      const props = allowedProperties(e.parentSchema);
-      const tip = want === "text" && (typeof got2 === "number" || typeof got2 === "boolean") ? " (put it in quotes)" : want === "a mapping of fields" && props.includes("smiles") && props.includes("molfile") ? " (write it as smiles: … or molfile: … on the next line, indented)" : "";
-      return { path, message: `${label}: must be ${want}, found ${kindOf(got2)}${tip}` };
-    }
-    case "minimum":
-    case "maximum":
-    case "exclusiveMinimum":
-    case "exclusiveMaximum": {
-      const limit = e.params.limit;
-      const words = {
-        minimum: "at least",
-        maximum: "at most",
-        exclusiveMinimum: "more than",
-        exclusiveMaximum: "less than"
-      };
-      return {
-        path,
-        message: `${label}: must be ${words[e.keyword]} ${limit}, found ${typeof got2 === "number" ? got2 : kindOf(got2)}`
-      };
-    }
-    case "minLength":
-      return { path, message: `${label}: must not be empty` };
-    case "maxLength":
-      return {
-        path,
-        message: `${label}: is too long (at most ${e.params.limit} characters)`
-      };
-    case "pattern":
-      return { path, message: `${label}: ${quote(got2)} must not start or end with spaces` };
-    case "maxItems": {
-      const n = Array.isArray(got2) ? got2.length : 0;
-      const limit = e.params.limit;
-      const advice = /components$/.test(path) ? "the record is not audited (split it into several records)" : "shorten the list";
-      return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
-    }
-    case "minItems":
-      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
-    case "oneOf": {
-      if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
-        return {
-          path,
-          message: `${label}: must be a mapping with smiles or molfile (e.g. smiles: CCO), found ${kindOf(got2)}`
-        };
-      }
-      const obj = got2;
-      const both = "smiles" in obj && "molfile" in obj;
-      return {
-        path,
-        message: `${label}: give exactly one of smiles or molfile (found ${both ? "both" : "neither"})`
-      };
-    }
-    default:
-      return { path, message: `${label}: ${e.message ?? "is not valid"}` };
-  }
-}
-function explain(errors, value, what) {
-  const oneOfPaths = errors.filter((e) => e.keyword === "oneOf").map((e) => e.schemaPath);
-  const wrongType = new Set(errors.filter((e) => e.keyword === "type").map((e) => e.instancePath));
-  const out = [];
-  const seen = /* @__PURE__ */ new Set();
-  for (const e of errors) {
-    if (oneOfPaths.some((p2) => e.schemaPath !== p2 && e.schemaPath.startsWith(`${p2}/`))) continue;
-    if (e.keyword === "oneOf" && wrongType.has(e.instancePath)) continue;
-    const p = explainOne(e, value, what);
-    if (!p || seen.has(p.message)) continue;
-    seen.add(p.message);
-    out.push({ ...p, code: PROBLEM_CODES[e.keyword] ?? "schema" });
-  }
-  return out;
-}
-
-// src/registry/parse.ts
-function parseDocumentText(raw2) {
-  const text = raw2.includes("\r") ? raw2.replace(/\r\n?/g, "\n") : raw2;
-  const quick = quickParse(text);
-  if (quick) return { value: quick.value, positions: quick.positions, problems: [] };
-  return parseFullText(text);
-}
-function parseFullText(text) {
-  const counter = new import_yaml2.LineCounter();
-  const doc = (0, import_yaml2.parseDocument)(text, {
-    lineCounter: counter,
-    prettyErrors: true,
-    uniqueKeys: true,
-    version: "1.2"
-  });
-  const positions2 = positionsOf(doc, counter);
-  const problems = [];
-  for (const err2 of doc.errors) {
-    const line = err2.linePos?.[0]?.line ?? counter.linePos(err2.pos[0]).line;
-    const first = err2.message.split("\n")[0] ?? err2.message;
-    problems.push({
-      path: "",
-      line,
-      code: "yaml-syntax",
-      message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, "")}`
-    });
-  }
-  problems.push(...tagProblems(doc, counter));
-  if (problems.length > 0) return { value: null, positions: positions2, problems };
-  let value;
-  try {
-    value = doc.toJS({ maxAliasCount: 50 });
-  } catch (e) {
-    return {
-      value: null,
-      positions: positions2,
-      problems: [
-        { path: "", line: 1, code: "yaml-syntax", message: `cannot be read: ${e.message}` }
-      ]
-    };
-  }
-  return { value, positions: positions2, problems };
-}
-var PLAIN_TAGS = new Set(
-  ["str", "int", "float", "bool", "null", "map", "seq"].map((t) => `tag:yaml.org,2002:${t}`)
-);
-function tagProblems(doc, counter) {
-  const out = [];
-  const lineAt = (node) => counter.linePos(node?.range?.[0] ?? 0).line;
-  for (const w of doc.warnings) {
-    if (w.code !== "TAG_RESOLVE_FAILED" || !w.message.includes("tag:yaml.org,2002:")) continue;
-    const line = w.linePos?.[0]?.line ?? counter.linePos(w.pos[0]).line;
-    const first = (w.message.split("\n")[0] ?? w.message).replace("tag:yaml.org,2002:", "!!").replace(/ at line \d+, column \d+:?$/, "");
-    out.push({ path: "", line, code: "unknown-tag", message: `not plain YAML/JSON: ${first}` });
-  }
-  (0, import_yaml2.visit)(doc, {
-    Node(key4, node, path) {
-      const tag = node.tag;
-      if (tag !== void 0 && !PLAIN_TAGS.has(tag)) {
-        const parent = path[path.length - 1];
-        const at2 = key4 === "value" && (0, import_yaml2.isPair)(parent) && (0, import_yaml2.isNode)(parent.key) ? parent.key : node;
-        out.push({
-          path: "",
-          line: lineAt(at2),
-          code: "unknown-tag",
-          message: `the YAML tag ${tag.replace("tag:yaml.org,2002:", "!!")} is not allowed in a record (plain YAML/JSON values only)`
-        });
-      }
-    },
-    Pair(_key, pair) {
-      if (pair.key !== null && !(0, import_yaml2.isScalar)(pair.key)) {
-        out.push({
-          path: "",
-          line: lineAt(pair.key),
-          code: "yaml-syntax",
-          message: "not valid here: a field name must be a plain word, not a list or mapping"
-        });
-      }
-    }
-  });
-  return out;
-}
-function parseRecordText(text) {
-  const parsed = parseDocumentText(text);
-  const { value, positions: positions2 } = parsed;
-  if (parsed.problems.length > 0)
-    return { value, record: null, id: null, positions: positions2, problems: parsed.problems };
-  if (value === null || value === void 0) {
-    return {
-      value,
-      record: null,
-      id: null,
-      positions: positions2,
-      problems: [{ path: "", line: 1, code: "empty-file", message: "the file is empty" }]
-    };
-  }
-  const id = typeof value === "object" && !Array.isArray(value) && typeof value.id === "string" ? value.id.trim() || null : null;
-  const shape = validateRecordShape(value);
-  const problems = shape.map((p) => ({
-    path: p.path,
-    message: p.message,
-    line: lineOf(positions2, p.path),
-    code: p.code
-  }));
-  problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0));
-  return { value, record: problems.length === 0 ? value : null, id, positions: positions2, problems };
-}
-
-// src/audit/config.ts
-var DEFAULT_CONFIG = Object.freeze({
-  recordDirs: ["compounds"],
-  severities: {},
-  ratioSumTolerance: 1,
-  racemateRatioTolerance: 2,
-  eeTolerance: 1,
-  singleEnantiomerMinEe: 98,
-  zeroRotationTolerance: 1,
-  axisOrthoMin: 3
-});
-var DEFAULT_SOURCES = Object.freeze({
-  recordDirs: "the record format of this project (records live under compounds/ unless configured)",
-  severities: "none overridden: every check keeps the default severity its module declares. A level given for a check sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given for 'check-id/message-id' sets that one message's level, notes included",
-  ratioSumTolerance: "common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts",
-  racemateRatioTolerance: "common practice, no source: a racemate measured by chiral chromatography typically reads within about 2 points of 50:50 (integration error); more than that suggests an enantioenriched sample",
-  eeTolerance: "common practice, no source: ee and ratios are reported rounded to about 1 percent",
-  singleEnantiomerMinEe: "common practice, no source: many registries call a sample a single enantiomer from about 98 % ee (99:1 er); set your own SOP value",
-  zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))",
-  axisOrthoMin: "common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies"
-});
-var CONFIG_FILE_NAMES = [
-  "stereogate.config.yml",
-  "stereogate.config.yaml",
-  "stereogate.config.json"
-];
-var ConfigError = class extends Error {
-  name = "ConfigError";
-};
-function loadConfig(root, configFile, overrides) {
-  let file = null;
-  if (configFile !== void 0) {
-    file = isAbsolute2(configFile) ? configFile : resolve2(configFile);
-    if (!existsSync2(file)) throw new ConfigError(`config file ${configFile} does not exist`);
-  } else {
-    const found = CONFIG_FILE_NAMES.map((n) => join3(root, n)).find((p) => existsSync2(p));
-    file = found ?? null;
-  }
-  const fromFile = file === null ? {} : readConfigFile(file, configFile ?? file);
-  const config = {
-    ...DEFAULT_CONFIG,
-    recordDirs: [...DEFAULT_CONFIG.recordDirs],
-    ...fromFile,
-    ...overrides ?? {},
-    severities: {
-      ...DEFAULT_CONFIG.severities,
-      ...fromFile.severities ?? {},
-      ...overrides?.severities ?? {}
-    }
-  };
-  return { config, file };
-}
-function readConfigFile(abs, shown) {
-  const read = readTextFile(abs);
-  if (!read.ok) throw new ConfigError(`config file ${shown} ${read.error}`);
-  const parsed = parseDocumentText(read.text);
-  const issues = parsed.problems.map((p) => `${shown} line ${p.line}: ${p.message}`);
-  if (issues.length === 0) {
-    if (parsed.value === null || parsed.value === void 0) return {};
-    for (const p of validateConfigShape(parsed.value)) {
-      const line = lineOf(parsed.positions, p.path);
-      issues.push(`${shown}${line === null ? "" : ` line ${line}`}: ${p.message}`);
-    }
-  }
-  if (issues.length > 0) throw new ConfigError(`the config file is not valid:
-  ${issues.join("\n  ")}`);
-  return parsed.value;
-}
-function checkSeverityIds(config, knownIds, suggest, messagesOf) {
-  const unknown = [];
-  for (const key4 of Object.keys(config.severities)) {
-    const cut = key4.indexOf("/");
-    const id = cut < 0 ? key4 : key4.slice(0, cut);
-    if (!knownIds.includes(id)) {
-      const guess = suggest(id);
-      unknown.push(guess ? `'${key4}' (did you mean '${guess}'?)` : `'${key4}'`);
-      continue;
-    }
-    if (cut < 0) continue;
-    const message2 = key4.slice(cut + 1);
-    const known = messagesOf?.(id);
-    if (known !== void 0 && !known.includes(message2)) {
-      unknown.push(`'${key4}' (${id} has no message '${message2}'; its messages: ${known.join(", ")})`);
-    }
-  }
-  if (unknown.length === 0) return;
-  throw new ConfigError(
-    `severities: no check or message is called ${unknown.join(", ")}; known checks: ${knownIds.join(", ")}`
-  );
-}
-
-// src/audit/run.ts
-init_closest();
-import { existsSync as existsSync3, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
-import { resolve as resolve3 } from "node:path";
-
-// src/registry/load.ts
-import { realpathSync as realpathSync2 } from "node:fs";
-import { dirname } from "node:path";
-function loadRegistry(root, options) {
-  const realRoot = realpathSync2(root);
-  const found = findRecordFiles(realRoot, options.recordDirs);
-  const records = found.files.map((abs) => loadRecordFile(realRoot, abs));
-  for (const r of found.refused) {
-    records.push({
-      file: r.file,
-      id: null,
-      record: null,
-      positions: NO_POSITIONS,
-      problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${r.message}` }],
-      origin: { kind: "file" }
-    });
-  }
-  records.sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
-  markDuplicateIds(records);
-  return { root: realRoot, records, missingDirs: found.missingDirs };
-}
-function loadRecordFile(realRoot, abs) {
-  try {
-    return loadRecordFileOrThrow(realRoot, abs);
-  } catch (e) {
-    return {
-      file: relativeTo(realRoot, abs),
-      id: null,
-      record: null,
-      positions: NO_POSITIONS,
-      problems: [
-        {
-          path: "",
-          line: null,
-          code: "internal-error",
-          message: `the record file could not be read because of an internal error in stereogate (${e?.message ?? String(e)}); please report it with the file`
-        }
-      ],
-      origin: { kind: "file" }
-    };
-  }
-}
-function loadRecordFileOrThrow(realRoot, abs) {
-  const file = relativeTo(realRoot, abs);
-  const read = readTextFile(abs);
-  if (!read.ok) {
-    return {
-      file,
-      id: null,
-      record: null,
-      positions: NO_POSITIONS,
-      problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${read.error}` }],
-      origin: { kind: "file" }
-    };
-  }
-  const parsed = parseRecordText(read.text);
-  const loaded = {
-    file,
-    id: parsed.id,
-    record: parsed.record,
-    positions: parsed.positions,
-    problems: parsed.problems,
-    origin: { kind: "file" }
-  };
-  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
-  return loaded;
-}
-function asObject(v) {
-  return v !== null && typeof v === "object" && !Array.isArray(v) ? v : null;
-}
-function sourceOf(ref, field, fetchMolfile) {
-  if (!ref) return null;
-  if (typeof ref.smiles === "string" && typeof ref.molfile !== "string") {
-    return { field, format: "smiles", text: ref.smiles };
-  }
-  if (typeof ref.molfile === "string" && typeof ref.smiles !== "string") {
-    return { field, format: "molfile", ...fetchMolfile(ref.molfile) };
-  }
-  return null;
-}
-function structureSources(realRoot, recordDir, value) {
-  const fetchMolfile = (path) => {
-    const where2 = resolveInside(realRoot, recordDir, path);
-    if (!where2.ok) return { text: null, error: `molfile ${where2.error}` };
-    const read = readTextFile(where2.abs);
-    if (!read.ok) return { text: null, file: where2.rel, error: `molfile '${path}' ${read.error}` };
-    return { text: read.text, file: where2.rel };
-  };
-  const top = asObject(value);
-  const main = sourceOf(asObject(top?.structure), "structure", fetchMolfile);
-  const comps = asObject(top?.stereo)?.components;
-  const components = [];
-  if (Array.isArray(comps)) {
-    comps.slice(0, MAX_COMPONENTS_READ).forEach((c, i) => {
-      const s = sourceOf(asObject(c), `stereo.components.${i}`, fetchMolfile);
-      components.push(
-        s ?? { field: `stereo.components.${i}`, format: "smiles", text: null, error: "no structure given" }
-      );
-    });
-  }
-  return { main, components };
-}
-var MAX_COMPONENTS_READ = 50;
-function markDuplicateIds(records) {
-  const byId2 = /* @__PURE__ */ new Map();
-  for (const r of records) {
-    if (r.id === null) continue;
-    const list = byId2.get(r.id);
-    if (list) list.push(r);
-    else byId2.set(r.id, [r]);
-  }
-  for (const [id, list] of byId2) {
-    if (list.length < 2) continue;
-    for (const r of list) {
-      const others2 = list.filter((o) => o !== r).map((o) => {
-        const line = lineOf(o.positions, "id");
-        return line === null ? o.file : `${o.file} line ${line}`;
-      });
-      r.problems.push({
-        path: "id",
-        line: lineOf(r.positions, "id"),
-        code: "duplicate-id",
-        message: `id: '${id}' is also used by ${others2.join(", ")}; every record needs its own id`
-      });
-    }
-  }
-}
-
-// src/audit/engine.ts
-function heavyFormula(elements, wildcards) {
-  const counts = /* @__PURE__ */ new Map();
-  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
-  const order = [...counts.keys()].sort((x, y) => {
-    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
-    return x < y ? -1 : x > y ? 1 : 0;
-  });
-  let out = "";
-  for (const e of order) {
-    const c = counts.get(e);
-    out += c === 1 ? e : `${e}${c}`;
-  }
-  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
-  return out;
-}
-async function defaultEngine(settings = {}) {
-  const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
-  const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
-  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
-  return {
-    readStructure: (text, options) => chem.readStructure(text, options),
-    describe: settings.axisOrthoMin === void 0 ? (s) => chem.describe(s) : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
-    relate: (a, b) => chem.relate(a, b),
-    formula: (s) => graph.molecularFormula(s),
-    smilesHeavyAtoms: (smiles) => {
-      let start = 0;
-      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
-      let g;
-      try {
-        g = syntax.parseSmilesGraph(smiles, start);
-      } catch {
-        return null;
-      }
-      if ("error" in g) return null;
-      const heavy = [];
-      let wildcards = 0;
-      for (const a of g.atoms) {
-        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
-        else if (a.atomicNumber !== 1) heavy.push(a.element);
-      }
-      return heavyFormula(heavy, wildcards);
-    }
-  };
-}
-
-// src/audit/findings.ts
-var SCHEMA_CHECK_ID = "record-schema";
-var INTERNAL_ERROR_ID = "internal-error";
-function fillTemplate(template, data) {
-  return template.replace(/\{([A-Za-z0-9_]+)\}/g, (whole, name) => {
-    if (!(name in data)) return whole;
-    const v = data[name];
-    return v === null ? "none" : String(v);
-  });
-}
-function resolveSeverity(base, own2, configured, configuredForMessage) {
-  if (configuredForMessage !== void 0) return configuredForMessage;
-  const level2 = own2 ?? base;
-  if (configured === void 0 || level2 === "note") return level2;
-  return configured;
-}
-function messageKey(checkId, messageId) {
-  return `${checkId}/${messageId}`;
-}
-function configuredSeverity(config, key4) {
-  return Object.prototype.hasOwnProperty.call(config.severities, key4) ? config.severities[key4] : void 0;
-}
-function lineFor(loaded, field) {
-  if (field !== null) {
-    const line = lineOf(loaded.positions, field);
-    if (line !== null) return line;
-  }
-  return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
-}
-function messageEnabled(config, checkId, messageId) {
-  return configuredSeverity(config, messageKey(checkId, messageId)) !== "off";
-}
-function toFinding(check, raw2, loaded, config) {
-  const configured = configuredSeverity(config, check.id);
-  const forMessage = configuredSeverity(config, messageKey(check.id, raw2.messageId));
-  const template = check.messages[raw2.messageId];
-  const message2 = template !== void 0 ? fillTemplate(template, raw2.data ?? {}) : `${raw2.messageId}${Object.keys(raw2.data ?? {}).length ? ` (${JSON.stringify(raw2.data)})` : ""}`;
-  return {
-    check: check.id,
-    messageId: raw2.messageId,
-    severity: resolveSeverity(
-      check.defaultSeverity,
-      raw2.severity,
-      configured === "off" ? void 0 : configured,
-      forMessage === "off" ? void 0 : forMessage
-    ),
-    message: message2,
-    data: raw2.data ?? {},
-    line: lineFor(loaded, raw2.field ?? null),
-    field: raw2.field ?? null,
-    waived: null,
-    ...raw2.fix === void 0 ? {} : { fix: raw2.fix }
-  };
-}
-function nonEmpty(s) {
-  return typeof s === "string" && s.trim() !== "";
-}
-function applyWaivers(findings, loaded) {
-  const waivers = loaded.record?.waivers ?? [];
-  for (const f of findings) {
-    if (f.check === INTERNAL_ERROR_ID) continue;
-    const w = waivers.find((x) => x.check === f.check && nonEmpty(x.reason) && nonEmpty(x.approved_by));
-    if (w) f.waived = { reason: w.reason.trim(), approvedBy: w.approved_by.trim() };
-  }
-}
-function internalError(check, error2, loaded) {
-  const text = error2 instanceof Error ? error2.message : String(error2);
-  return {
-    check: INTERNAL_ERROR_ID,
-    messageId: "check-failed",
-    severity: "error",
-    message: `The check ${check.id} failed with an internal error (${text}), so this record was not fully checked. This is a fault in stereogate, not in the record: please report it with the record attached.`,
-    data: { check: check.id, error: text },
-    line: loaded.origin.kind === "bulk" ? loaded.origin.line : null,
-    field: null,
-    waived: null
-  };
-}
-var TIME_LIMIT_ID = "record-time-limit";
-function budgetFinding(loaded, kind, limit) {
-  const what = kind === "time" ? `took longer than the ${limit / 1e3} s time limit` : `needed more than the ${limit} MB memory bound`;
-  return {
-    check: TIME_LIMIT_ID,
-    messageId: kind === "time" ? "time-limit-exceeded" : "memory-bound-exceeded",
-    severity: "error",
-    message: `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, leave out repeated salt or solvent parts).`,
-    data: { kind, limit },
-    line: loaded.origin.kind === "bulk" ? loaded.origin.line : lineOf(loaded.positions, "structure"),
-    field: null,
-    waived: null
-  };
-}
-function schemaFindings(loaded, config) {
-  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
-  if (configured === "off") return [];
-  return loaded.problems.map((p) => ({
-    check: SCHEMA_CHECK_ID,
-    messageId: p.code ?? "record-problem",
-    severity: configured ?? "error",
-    message: p.message,
-    data: { path: p.path, problem: p.message },
-    line: p.line ?? (loaded.origin.kind === "bulk" ? loaded.origin.line : null),
-    field: p.path === "" ? null : p.path,
-    waived: null
-  }));
-}
-
-// src/audit/select.ts
-import { isAbsolute as isAbsolute3, relative as relative2, sep as sep2 } from "node:path";
-function normalizePath(root, path) {
-  const rel = isAbsolute3(path) ? relative2(root, path) : path;
-  const parts = [];
-  for (const part of rel.split(/[\\/]+/)) {
-    if (part === "" || part === ".") continue;
-    if (part === "..") parts.pop();
-    else parts.push(part);
-  }
-  return parts.join("/");
-}
-function byMolfile(records) {
-  const users = /* @__PURE__ */ new Map();
-  const add = (file, r) => {
-    if (file === void 0) return;
-    const list = users.get(file);
-    if (!list) users.set(file, [r]);
-    else if (list[list.length - 1] !== r) list.push(r);
-  };
-  for (const r of records) {
-    const s = r.sources;
-    if (!s) continue;
-    add(s.main?.file, r);
-    for (const c of s.components) add(c.file, r);
-  }
-  return users;
-}
-function lowerBound(sorted, file) {
-  let lo = 0;
-  let hi = sorted.length;
-  while (lo < hi) {
-    const mid = lo + hi >>> 1;
-    if (sorted[mid].file < file) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
-}
-function selectRecords(records, root, paths) {
-  const selected = /* @__PURE__ */ new Set();
-  const unmatched = [];
-  let users = null;
-  let sorted = null;
-  for (const given of paths) {
-    const p = normalizePath(root, given);
-    const escapes2 = isAbsolute3(given) && (relative2(root, given).startsWith(`..${sep2}`) || relative2(root, given) === "..");
-    let hit = false;
-    if (!escapes2) {
-      sorted ??= [...records].sort((a, b) => a.file < b.file ? -1 : a.file > b.file ? 1 : 0);
-      if (p === "") {
-        for (const r of records) selected.add(r);
-        hit = records.length > 0;
-      }
-      for (const start of p === "" ? [] : [p, `${p}/`]) {
-        for (let i = lowerBound(sorted, start); i < sorted.length; i++) {
-          const r = sorted[i];
-          if (start === p ? r.file !== p : !r.file.startsWith(start)) break;
-          selected.add(r);
-          hit = true;
-        }
-      }
-      users ??= byMolfile(records);
-      for (const r of users.get(p) ?? []) {
-        selected.add(r);
-        hit = true;
-      }
-    }
-    if (!hit) unmatched.push(given);
-  }
-  return { selected, unmatched };
-}
-
-// src/audit/run.ts
-init_budget();
-
-// src/registry/keys.ts
-function drawingKind(f) {
-  const m = f.enhanced.meaning;
-  if (m === "racemic" || m === "mixture") return "racemic";
-  if (m === "relative") return "relative";
-  return "as-drawn";
-}
-var MIRRORED = { R: "S", S: "R", M: "P", P: "M" };
-function recordKeys(f, text) {
-  const kind = drawingKind(f);
-  const base = { constitution: f.constitutionKey, kind, chiral: f.chiral };
-  if (f.units.some((u) => !u.defined)) return { ...base, stereo: null, mirror: null, exact: false };
-  let exact = true;
-  const seen = /* @__PURE__ */ new Set();
-  const own2 = [];
-  const mirrored2 = [];
-  for (const u of f.units) {
-    if (seen.has(u.classKey) || u.label === null || u.label === "e" || u.label === "z") exact = false;
-    seen.add(u.classKey);
-    const label = u.label === null ? "?" : u.label === "e" || u.label === "z" ? "ez" : u.label;
-    own2.push(`${u.classKey}=${label}`);
-    mirrored2.push(`${u.classKey}=${(u.label && MIRRORED[u.label]) ?? label}`);
-  }
-  own2.sort();
-  mirrored2.sort();
-  const keys = {
-    ...base,
-    stereo: `${kind}|${own2.join(";")}`,
-    mirror: `${kind}|${mirrored2.join(";")}`,
-    exact
-  };
-  if (!exact && text) keys.text = text;
-  return keys;
-}
-
-// src/audit/structures.ts
-init_budget();
-var NOTHING = Object.freeze({
-  structure: null,
-  facts: null,
-  error: {
-    message: "the record gives no structure (structure.smiles or structure.molfile)",
-    line: null,
-    offset: null
-  }
-});
-function failed(message2, line = null, offset = null, code) {
-  return { structure: null, facts: null, error: { message: message2, line, offset, ...code ? { code } : {} } };
-}
-function readOnly(source, engine2) {
-  if (source === null) return { structure: null, failure: NOTHING };
-  if (source.text === null)
-    return { structure: null, failure: failed(source.error ?? "the structure could not be read") };
-  let read;
-  try {
-    read = engine2.readStructure(source.text, { format: source.format });
-  } catch (e) {
-    if (e instanceof BudgetExceeded) throw e;
-    const what = source.format === "smiles" ? "SMILES" : "molfile";
-    return {
-      structure: null,
-      failure: failed(`internal error while reading the ${what}: ${e.message}`)
-    };
-  }
-  if (!read.ok) {
-    const what = source.format === "smiles" ? "SMILES" : source.file ? `molfile ${source.file}` : "molfile";
-    return {
-      structure: null,
-      failure: failed(
-        `${what}: ${read.error.message}`,
-        read.error.at.line ?? null,
-        read.error.at.offset ?? null,
-        read.error.code
-      )
-    };
-  }
-  return { structure: read.structure, failure: null };
-}
-function describeRead(read, engine2) {
-  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
-  try {
-    return { structure: read.structure, facts: engine2.describe(read.structure), error: null };
-  } catch (e) {
-    if (e instanceof BudgetExceeded) throw e;
-    return {
-      structure: read.structure,
-      facts: null,
-      error: {
-        message: `internal error while describing the structure: ${e.message}`,
-        line: null,
-        offset: null
-      }
-    };
-  }
-}
-function readSource(source, engine2) {
-  return describeRead(readOnly(source, engine2), engine2);
-}
-function sourcesOf(loaded) {
-  if (loaded.sources) return loaded.sources;
-  const rec = loaded.record;
-  const one = (ref, field) => {
-    if (!ref) return null;
-    if (typeof ref.smiles === "string") return { field, format: "smiles", text: ref.smiles };
-    if (typeof ref.molfile === "string") {
-      return {
-        field,
-        format: "molfile",
-        text: null,
-        error: `molfile '${ref.molfile}' was not fetched (no file context)`
-      };
-    }
-    return null;
-  };
-  const components = (rec?.stereo.components ?? []).map(
-    (c, i) => one(c, `stereo.components.${i}`) ?? {
-      field: `stereo.components.${i}`,
-      format: "smiles",
-      text: null,
-      error: "no structure given"
-    }
-  );
-  return { main: one(rec?.structure, "structure"), components };
-}
-var StructureCache = class {
-  constructor(engine2) {
-    this.engine = engine2;
-  }
-  engine;
-  reads = /* @__PURE__ */ new WeakMap();
-  mains = /* @__PURE__ */ new WeakMap();
-  comps = /* @__PURE__ */ new WeakMap();
-  /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
-  read(loaded) {
-    let r = this.reads.get(loaded);
-    if (!r) {
-      r = readOnly(sourcesOf(loaded).main, this.engine);
-      this.reads.set(loaded, r);
-    }
-    return r;
-  }
-  main(loaded) {
-    let m = this.mains.get(loaded);
-    if (!m) {
-      m = describeRead(this.read(loaded), this.engine);
-      this.mains.set(loaded, m);
-    }
-    return m;
-  }
-  components(loaded) {
-    let c = this.comps.get(loaded);
-    if (!c) {
-      c = sourcesOf(loaded).components.map((s) => readSource(s, this.engine));
-      this.comps.set(loaded, c);
-    }
-    return c;
-  }
-  all(loaded) {
-    return { main: this.main(loaded), components: this.components(loaded) };
-  }
-};
-
-// src/audit/index-row.ts
-var nonEmpty2 = (s) => typeof s === "string" && s.trim() !== "";
-function indexRow(loaded, main, seq) {
-  const record = loaded.record;
-  let keys = null;
-  if (record !== null && main.facts) {
-    const src = sourcesOf(loaded).main;
-    keys = recordKeys(main.facts, src && src.text !== null ? { format: src.format, text: src.text } : null);
-  }
-  const waiver = record?.waivers?.find(
-    (w) => w.check === "consistent-with-registry" && nonEmpty2(w.reason) && nonEmpty2(w.approved_by)
-  );
-  return {
-    seq,
-    id: loaded.id,
-    file: loaded.file,
-    name: record?.name ?? null,
-    form: record?.stereo.form ?? "unknown",
-    rotation: record?.stereo.rotation ?? null,
-    keys,
-    lines: {
-      id: lineFor(loaded, "id"),
-      structure: lineFor(loaded, "structure"),
-      rotation: lineFor(loaded, "stereo.rotation.value")
-    },
-    waiver: waiver ? { reason: waiver.reason.trim(), approvedBy: waiver.approved_by.trim() } : null
-  };
-}
-
-// src/audit/registry-phase.ts
-init_consistent_with_registry();
-
-// src/registry/key-index.ts
-var RegistryIndex = class {
-  constructor(confirm = null) {
-    this.confirm = confirm;
-  }
-  confirm;
-  byKey = /* @__PURE__ */ new Map();
-  /** Rows filed (records with a stereo key). */
-  size = 0;
-  add(row) {
-    const k = row.keys;
-    if (k === null || k.stereo === null) return;
-    const key4 = `${k.constitution}#${k.stereo}`;
-    const classes = this.byKey.get(key4);
-    if (!classes) this.byKey.set(key4, [{ rows: [row] }]);
-    else {
-      const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
-      if (same) same.rows.push(row);
-      else classes.push({ rows: [row] });
-    }
-    this.size++;
-  }
-  /** Removes a row added before (a record file replaced by its new version). */
-  remove(row) {
-    const k = row.keys;
-    if (k === null || k.stereo === null) return;
-    const key4 = `${k.constitution}#${k.stereo}`;
-    const classes = this.byKey.get(key4);
-    if (!classes) return;
-    for (let ci = 0; ci < classes.length; ci++) {
-      const at2 = classes[ci].rows.indexOf(row);
-      if (at2 < 0) continue;
-      classes[ci].rows.splice(at2, 1);
-      if (classes[ci].rows.length === 0) classes.splice(ci, 1);
-      if (classes.length === 0) this.byKey.delete(key4);
-      this.size--;
-      return;
-    }
-  }
-  /**
-   * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
-   * were added; `me` itself left out.
-   */
-  matches(me) {
-    const k = me.keys;
-    if (k === null || k.stereo === null || k.mirror === null) return [];
-    const out = [];
-    const consider = (key4, expected) => {
-      for (const c of this.byKey.get(`${k.constitution}#${key4}`) ?? []) {
-        const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
-        if (!other) continue;
-        const relation = other.keys && this.relationOf(k, other.keys, expected);
-        if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
-      }
-    };
-    consider(k.stereo, "identical");
-    if (k.mirror !== k.stereo) consider(k.mirror, "enantiomers");
-    out.sort((a, b) => a.other.seq - b.other.seq);
-    return out;
-  }
-  relationOf(a, b, expected) {
-    if (a.exact && b.exact) return expected;
-    if (!a.text || !b.text || !this.confirm) return null;
-    const r = this.confirm(a, b);
-    return r === "identical" || r === "enantiomers" ? r : null;
-  }
-};
-
-// src/audit/registry-phase.ts
-var CHECK = consistentWithRegistry;
-var RegistryPhase = class {
-  constructor(options) {
-    this.options = options;
-    this.index = new RegistryIndex(options.confirm);
-    this.enabled = configuredSeverity(options.config, CHECK.id) !== "off";
-  }
-  options;
-  index;
-  pairs = [];
-  firstWithId = /* @__PURE__ */ new Map();
-  records = 0;
-  enabled;
-  underReview = /* @__PURE__ */ new Set();
-  /** Review mode: a record of the registry, not under review (added before any `review`). */
-  file(row) {
-    this.index.add(row);
-  }
-  /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
-  fileUnderReview(row) {
-    this.underReview.add(row);
-    this.index.add(row);
-  }
-  /** Full mode: the next record in the audit's order. Review mode: a record under review (filed before). */
-  next(row) {
-    this.records++;
-    const findings = [];
-    if (this.options.duplicateIds && row.id !== null) {
-      const first = this.firstWithId.get(row.id);
-      if (first === void 0) this.firstWithId.set(row.id, row.file);
-      else if (configuredSeverity(this.options.config, SCHEMA_CHECK_ID) !== "off")
-        findings.push(duplicateId(row, first, this.options.config));
-    }
-    if (!this.enabled || row.keys === null) {
-      if (this.options.mode === "full") this.index.add(row);
-      return { findings, passed: null };
-    }
-    const full = this.options.mode === "full";
-    const matches = this.index.matches(row);
-    const c = compareWithRegistry(
-      row,
-      matches,
-      this.options.mode,
-      this.options.config,
-      (r) => this.underReview.has(r)
-    );
-    if (full) this.index.add(row);
-    this.pairs.push(...c.pairs);
-    for (const raw2 of c.findings)
-      if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
-        findings.push(rowFinding(raw2, row, this.options.config));
-    const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
-    return { findings, passed };
-  }
-  summary() {
-    const what = this.options.mode === "full" ? "every record with each record before it" : "each record under review with the whole registry";
-    return {
-      status: this.enabled ? "run" : "not-run",
-      reason: this.enabled ? `compared ${what} through an index of ${this.index.size} records' keys` : `${CHECK.id} is off in the configuration`,
-      records: this.records,
-      pairs: this.pairs
-    };
-  }
-};
-function rowFinding(raw2, row, config) {
-  const lines = {
-    id: row.lines.id,
-    structure: row.lines.structure,
-    "stereo.rotation.value": row.lines.rotation ?? row.lines.structure
-  };
-  const positions2 = {
-    get: (path) => lines[path] != null ? { line: lines[path], column: 1 } : void 0
-  };
-  const loaded = {
-    file: row.file,
-    id: row.id,
-    record: null,
-    positions: positions2,
-    problems: [],
-    origin: { kind: "file" }
-  };
-  return { ...toFinding(CHECK, raw2, loaded, config), waived: row.waiver };
-}
-function duplicateId(row, first, config) {
-  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
-  const message2 = `id: '${row.id}' is also used by ${first}; every record needs its own id`;
-  return {
-    check: SCHEMA_CHECK_ID,
-    messageId: "duplicate-id",
-    severity: configured === "off" || configured === void 0 ? "error" : configured,
-    message: message2,
-    data: { path: "id", problem: message2 },
-    line: row.lines.id,
-    field: "id",
-    waived: null
-  };
-}
-
-// package.json
-var package_default = {
-  name: "stereogate",
-  version: "0.1.0",
-  description: "Audits compound-registration records for stereochemical consistency: stereo perception, CIP labels, mirror-image and symmetry analysis, stereoisomer counts, structure relations.",
-  type: "module",
-  license: "MIT",
-  engines: {
-    node: ">=20"
-  },
-  bin: {
-    stereogate: "bin/stereogate.js"
-  },
-  scripts: {
-    build: "node scripts/bundle.mjs",
-    typecheck: "tsc -p tsconfig.json --noEmit",
-    demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
-    test: "vitest run",
-    bench: "node --import tsx bench/run.ts",
-    lint: "eslint .",
-    format: "prettier --write .",
-    bundle: "node scripts/bundle.mjs"
-  },
-  dependencies: {
-    "@actions/core": "^3.0.1",
-    "@actions/http-client": "^4.0.1",
-    ajv: "^8.20.0",
-    "cli-progress": "^3.12.0",
-    "csv-parse": "^7.0.3",
-    openchemlib: "^9.25.0",
-    tsx: "^4.23.15",
-    undici: "^6.29.1",
-    yaml: "^2.9.1"
-  },
-  devDependencies: {
-    "@eslint/js": "^9.39.5",
-    "@rdkit/rdkit": "^2026.9.1",
-    "@types/cli-progress": "^3.11.6",
-    "@types/node": "^20.19.43",
-    "@vitest/coverage-v8": "^4.1.12",
-    esbuild: "^0.28.2",
-    eslint: "^9.39.5",
-    "fast-check": "^4.11.0",
-    micromark: "^4.0.3",
-    "micromark-extension-gfm": "^3.0.0",
-    nock: "^14.0.9",
-    "playwright-core": "^1.65.1",
-    prettier: "^3.10.1",
-    typescript: "^5.9.3",
-    "typescript-eslint": "^8.74.0",
-    vitest: "^4.1.12"
-  }
-};
-
-// src/audit/version.ts
-var VERSION = package_default.version;
-
-// src/audit/view.ts
-function entryOf(loaded, cache2, underReview) {
-  const record = loaded.record;
-  if (record === null) return null;
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    record,
-    get main() {
-      return cache2.main(loaded);
-    },
-    underReview
-  };
-}
-function buildRegistryView(records, cache2, underReview) {
-  const entries = [];
-  for (const loaded of records) {
-    const e = entryOf(loaded, cache2, underReview(loaded));
-    if (e) entries.push(e);
-  }
-  return { entries };
-}
-
-// src/audit/run.ts
-var RECORD_BUDGET = Object.freeze({ timeMs: 2e4, memoryMb: 1024 });
-function auditRecords(records, options) {
-  const config = options.config ?? { ...DEFAULT_CONFIG };
-  const cache2 = new StructureCache(options.engine);
-  const engineApi = { relate: options.engine.relate.bind(options.engine) };
-  const budget = options.budget ?? RECORD_BUDGET;
-  const audited = new Set(records);
-  const registry = options.view ?? buildRegistryView(options.registry ?? records, cache2, (r) => audited.has(r));
-  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
-  const results = records.map((loaded) => {
-    try {
-      return withBudget(
-        budget,
-        "the audit of this record",
-        () => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
-      );
-    } catch (e) {
-      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
-      return {
-        id: loaded.id,
-        file: loaded.file,
-        computed: null,
-        findings: [internalError({ id: "audit" }, e, loaded)],
-        passed: [],
-        declared: { form: null, descriptors: null }
-      };
-    }
-  });
-  const result2 = {
-    tool: { name: "stereogate", version: VERSION },
-    records: results,
-    summary: summarize(results),
-    caution: CAUTION
-  };
-  if (options.registryPhase !== false && !options.registryIncomplete && options.checks.some((c) => c.scope === "registry")) {
-    const review2 = options.registry !== void 0;
-    const phase = new RegistryPhase({
-      mode: review2 ? "review" : "full",
-      config,
-      confirm: confirmWith(options.engine),
-      duplicateIds: false
-    });
-    const mainOf = (r) => {
-      try {
-        return withBudget(budget, "the structure of a registry record", () => cache2.main(r));
-      } catch {
-        return { structure: null, facts: null, error: null };
-      }
-    };
-    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
-    if (review2) {
-      const audited2 = new Set(records);
-      let seq = records.length;
-      for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
-      for (const row of rows) phase.fileUnderReview(row);
-    }
-    rows.forEach((row, i) => addPhaseResult(results[i], phase.next(row)));
-    result2.summary = summarize(results);
-    result2.registry = phase.summary();
-  }
-  return result2;
-}
-function confirmWith(engine2) {
-  const read = (k) => k.text ? readOnly({ field: "structure", format: k.text.format, text: k.text.text }, engine2).structure : null;
-  return (a, b) => {
-    const sa = read(a);
-    const sb = read(b);
-    if (!sa || !sb) return null;
-    try {
-      return engine2.relate(sa, sb).relation;
-    } catch {
-      return null;
-    }
-  };
-}
-function addPhaseResult(r, p) {
-  if (p.findings.length > 0) {
-    const checks = new Set(p.findings.map((f) => f.check));
-    r.findings = r.findings.filter(
-      (f) => !(f.messageId === "waiver-matches-nothing" && checks.has(String(f.data.waivedCheck)))
-    );
-    r.findings.push(...p.findings);
-  }
-  if (p.passed) r.passed.push(p.passed);
-}
-function auditOne(loaded, checks, config, cache2, registry, engine2) {
-  const { main, components } = cache2.all(loaded);
-  const findings = schemaFindings(loaded, config);
-  applyWaivers(findings, loaded);
-  const passed = [];
-  const notRun = [];
-  const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
-  for (const check of unparsed ? [] : checks) {
-    if (configuredSeverity(config, check.id) === "off") continue;
-    const ctx = {
-      loaded,
-      record: loaded.record,
-      main,
-      components,
-      registry,
-      config,
-      engine: engine2,
-      findings: [...findings]
-    };
-    const missing = missingInput(check, ctx);
-    if (missing !== null) {
-      notRun.push({ check: check.id, reason: missing });
-      continue;
-    }
-    if (check.scope === "registry") continue;
-    let produced;
-    let outcome;
-    try {
-      outcome = check.run(ctx);
-      if (!outcome || !Array.isArray(outcome.findings))
-        throw new Error("the check returned no findings list");
-      produced = outcome.findings.filter((raw2) => messageEnabled(config, check.id, raw2.messageId)).map((raw2) => toFinding(check, raw2, loaded, config));
-    } catch (e) {
-      if (e instanceof BudgetExceeded) throw e;
-      findings.push(internalError(check, e, loaded));
-      continue;
-    }
-    applyWaivers(produced, loaded);
-    findings.push(...produced);
-    if (outcome.notRun !== void 0 && produced.length === 0) {
-      notRun.push({ check: check.id, reason: outcome.notRun });
-    } else if (produced.length === 0 && !outcome.notApplicable) {
-      passed.push({ check: check.id, evidence: outcome.passed ?? "" });
-    }
-  }
-  const record = loaded.record;
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    computed: main.facts,
-    findings,
-    passed,
-    notRun,
-    declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null }
-  };
-}
-function missingInput(check, ctx) {
-  const needs = check.requires ?? [];
-  if (needs.includes("structure")) {
-    if (ctx.record === null) return "the record does not follow the record schema (see record-schema)";
-    if (ctx.main.facts === null) {
-      return ctx.main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure";
-    }
-  }
-  if (needs.includes("registry") && ctx.registry.incomplete) return ctx.registry.incomplete;
-  return null;
-}
-function overBudget(loaded, e, checks) {
-  const reason = e.kind === "time" ? "the record was stopped at its time limit (see record-time-limit)" : "the record was stopped at its memory bound (see record-time-limit)";
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    computed: null,
-    findings: [budgetFinding(loaded, e.kind, e.limit)],
-    passed: [],
-    notRun: checks.map((c) => ({ check: c.id, reason })),
-    declared: {
-      form: loaded.record?.stereo.form ?? null,
-      descriptors: loaded.record?.stereo.descriptors ?? null
-    }
-  };
-}
-function summarize(records) {
-  const s = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
-  for (const r of records) {
-    for (const f of r.findings) {
-      if (f.waived) s.waived++;
-      else if (f.severity === "error") s.errors++;
-      else if (f.severity === "warning") s.warnings++;
-      else s.notes++;
-    }
-  }
-  return s;
-}
-async function runAudit(options) {
-  const rootAbs = resolve3(options.root);
-  if (!existsSync3(rootAbs) || !statSync2(rootAbs).isDirectory()) {
-    throw new ConfigError(`registry folder ${options.root} does not exist`);
-  }
-  const root = realpathSync3(rootAbs);
-  const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
-  const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
-  const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
-  const messageIds = new Map(checks.map((c) => [c.id, Object.keys(c.messages)]));
-  checkSeverityIds(
-    config,
-    ids,
-    (w) => closestWord(w, ids),
-    (id) => messageIds.get(id)
-  );
-  const engine2 = options.engine ?? await defaultEngine({ axisOrthoMin: config.axisOrthoMin });
-  const load = loadRegistry(root, { recordDirs: config.recordDirs });
-  if (load.missingDirs.length > 0) {
-    throw new ConfigError(
-      `record folder${load.missingDirs.length > 1 ? "s" : ""} ${load.missingDirs.map((d) => `'${d}'`).join(", ")} not found in ${options.root} (set recordDirs in stereogate.config.yml)`
-    );
-  }
-  let toAudit = load.records;
-  let unmatched = [];
-  if (options.paths && options.paths.length > 0) {
-    const sel = selectRecords(load.records, root, options.paths);
-    toAudit = load.records.filter((r) => sel.selected.has(r));
-    unmatched = sel.unmatched;
-  }
-  const registry = toAudit.length === load.records.length ? void 0 : load.records;
-  const result2 = auditRecords(toAudit, { checks, config, engine: engine2, registry, budget: options.budget });
-  if (unmatched.length > 0) result2.unmatched = unmatched;
-  return result2;
-}
-function stripUndefined(o) {
-  if (!o) return void 0;
-  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== void 0));
-}
-
 // src/action/engine.ts
+init_caution();
+init_config();
+init_run();
+init_version();
 init_checks();
 
 // src/report/checklist.ts
+init_words();
 var ORDER2 = { error: 0, warning: 1, note: 2 };
 function worstOpen(r) {
   let w = 3;
@@ -72164,7 +73538,13 @@ function checklistItems(r) {
   const items = open2.map((finding2) => ({ kind: "open", finding: finding2 }));
   for (const f of r.findings) {
     if (f.waived)
-      items.push({ kind: "accepted", finding: f, reason: f.waived.reason, approvedBy: f.waived.approvedBy });
+      items.push({
+        kind: "accepted",
+        finding: f,
+        reason: f.waived.reason,
+        approvedBy: f.waived.approvedBy,
+        covers: f.waived.covers ?? null
+      });
   }
   for (const p of r.passed) items.push({ kind: "passed", check: p.check, evidence: p.evidence });
   for (const n of r.notRun ?? []) items.push({ kind: "not-run", check: n.check, reason: n.reason });
@@ -72179,9 +73559,6 @@ function openCounts(r) {
     else c.notes++;
   }
   return c;
-}
-function plural(n, one, many = `${one}s`) {
-  return `${n} ${n === 1 ? one : many}`;
 }
 function declaredText(r) {
   const parts = [r.declared.form, r.declared.descriptors].filter(
@@ -72379,9 +73756,8 @@ function heading(r) {
 function lineRef(line) {
   return line === null ? "" : ` (line ${line})`;
 }
-function evidenceLines(r) {
+function evidenceLines(r, computed) {
   const declared = declaredText(r);
-  const computed = computedText(r.computed);
   if (!declared && !computed) return [];
   return [
     `Declared: ${declared ? escapeMarkdown(declared) : "*nothing readable*"}  `,
@@ -72398,7 +73774,7 @@ function itemLine(item) {
   if (item.kind === "accepted") {
     const f = item.finding;
     return `- ☑️ \`${f.check}\` accepted by waiver${lineRef(f.line)}: ${escapeMarkdown(f.message)}  
-  Reason: ${escapeMarkdown(item.reason)} · approved by ${escapeMarkdown(item.approvedBy)}`;
+  Reason: ${escapeMarkdown(item.reason)} · approved by ${escapeMarkdown(item.approvedBy)}` + (item.covers ? ` · the waiver covers ${escapeMarkdown(item.covers)}` : "");
   }
   if (item.kind === "not-run") return `- not run: \`${item.check}\`: ${escapeMarkdown(item.reason)}`;
   return `- \`${item.check}\`${item.evidence ? `: ${escapeMarkdown(item.evidence)}` : ""}`;
@@ -72414,35 +73790,42 @@ function passedSummary(r, accepted) {
   if (r.notRun?.length) parts.push(`${r.notRun.length} not run`);
   return parts.join(" · ");
 }
-function recordBlock(r) {
+function recordBlock(r, computed) {
   const items = checklistItems(r);
-  const out = [heading(r), "", ...evidenceLines(r)];
+  const out = [heading(r), "", ...evidenceLines(r, computed)];
   out.push(...items.filter((i) => i.kind !== "passed").map(itemLine));
   const passed = items.filter((i) => i.kind === "passed");
   if (passed.length > 0) out.push("", ...passedBlock(`✅ ${plural(passed.length, "check")} passed`, passed));
   return out.join("\n");
 }
-function cleanLine(r) {
+function cleanLine(r, computed) {
   const items = checklistItems(r);
   const accepted = items.filter((i) => i.kind === "accepted").length;
   const summary2 = `<b>${escapeHtmlText(r.id ?? "(no id)")}</b> · ${escapeHtmlText(r.file)} — ${passedSummary(r, accepted)}`;
   return [
     `<details><summary>${summary2}</summary>`,
     "",
-    ...evidenceLines(r),
+    ...evidenceLines(r, computed),
     ...items.map(itemLine),
     "",
     "</details>"
   ].join("\n");
 }
+function markdownRecord(r, computed = computedText(r.computed)) {
+  const group = worstOpen(r);
+  return { group, text: group < 3 ? recordBlock(r, computed) : cleanLine(r, computed) };
+}
+function cleanHeading(count3) {
+  return `### ${plural(count3, "record")} without open findings`;
+}
 function recordsPart(result2) {
-  const flagged = byNeedForAction(result2.records.filter((r) => hasOpen(r)));
-  const clean = result2.records.filter((r) => !hasOpen(r));
-  const out = flagged.flatMap((r) => [recordBlock(r), ""]);
-  if (clean.length > 0) {
-    out.push(`### ${plural(clean.length, "record")} without open findings`, "");
-    out.push(...clean.flatMap((r) => [cleanLine(r), ""]));
+  const groups = [[], [], [], []];
+  for (const r of result2.records) {
+    const { group, text } = markdownRecord(r);
+    groups[group].push(text, "");
   }
+  const out = groups.slice(0, 3).flat();
+  if (groups[3].length > 0) out.push(cleanHeading(groups[3].length / 2), "", ...groups[3]);
   return out;
 }
 function hasOpen(r) {
@@ -72452,7 +73835,7 @@ function cautionBlock(result2) {
   return `> [!CAUTION]
 > ${escapeMarkdown(result2.caution)}`;
 }
-function head(result2) {
+function markdownHead(result2) {
   const out = [CHECKLIST_MARKER, "## stereogate checklist", "", summaryText(result2), ""];
   if (result2.unmatched?.length) {
     out.push(`No record matched: ${result2.unmatched.map(escapeMarkdown).join(", ")}`, "");
@@ -72461,14 +73844,14 @@ function head(result2) {
 }
 function renderMarkdown(result2, options = {}) {
   const maxChars = options.maxChars ?? DEFAULT_MAX_CHARS;
-  const full = [...head(result2), ...recordsPart(result2), cautionBlock(result2), ""].join("\n");
+  const full = [...markdownHead(result2), ...recordsPart(result2), cautionBlock(result2), ""].join("\n");
   if (full.length <= maxChars) return full;
   return summarised(result2, maxChars, options.detailsUrl);
 }
 function summarised(result2, maxChars, detailsUrl) {
   const url = detailsUrl ? safeUrl(detailsUrl) : null;
   const pointer = url ? `The full checklist is too long for a comment: read it in the [job summary](${url}).` : "The full checklist is too long for a comment: read it in the job summary of this run.";
-  const top = [...head(result2), pointer, ""].join("\n");
+  const top = [...markdownHead(result2), pointer, ""].join("\n");
   const bottom = ["", cautionBlock(result2), ""].join("\n");
   const lines = [];
   const flagged = byNeedForAction(result2.records.filter((r) => hasOpen(r)));
@@ -72500,6 +73883,7 @@ ${bottom}`;
 }
 
 // src/audit/builtin-rules.ts
+init_findings();
 var BUILTIN_RULES = [
   {
     id: SCHEMA_CHECK_ID,
@@ -72520,6 +73904,35 @@ var BUILTIN_RULES = [
     explanation: "Each record gets a time limit (20 s unless --record-timeout says otherwise) and a memory bound, so that one pathological structure cannot stall or exhaust a run. A record over either is reported instead of audited, and the run goes on. Audit it on its own with a higher limit, or simplify the structure."
   }
 ];
+
+// src/report/not-run.ts
+var NOT_RUN_EXAMPLES = 10;
+var NotRunTally = class {
+  groups = /* @__PURE__ */ new Map();
+  add(record, notRun) {
+    for (const n of notRun ?? []) {
+      const key4 = `${n.check}\0${n.reason}`;
+      let g = this.groups.get(key4);
+      if (!g) this.groups.set(key4, g = { check: n.check, reason: n.reason, records: 0, examples: [] });
+      g.records++;
+      if (g.examples.length < NOT_RUN_EXAMPLES) g.examples.push(record);
+    }
+  }
+  /** The groups in the order first seen. */
+  list() {
+    return [...this.groups.values()];
+  }
+};
+function notRunGroups(records) {
+  const tally = new NotRunTally();
+  for (const r of records) tally.add({ id: r.id, file: r.file, line: null }, r.notRun);
+  return tally.list();
+}
+function notRunRecordsText(g) {
+  const names2 = g.examples.map((e) => e.id ?? e.file);
+  const more = g.records > names2.length ? `, and ${g.records - names2.length} more` : "";
+  return `${plural(g.records, "record")} (${names2.join(", ")}${more})`;
+}
 
 // src/report/sarif.ts
 var SARIF_SCHEMA = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json";
@@ -72544,6 +73957,33 @@ Caution: ${caution}` : ""}` },
 function encodeUri(path) {
   return path.split("/").map(encodeURIComponent).join("/");
 }
+function sarifResults(r, index, options = {}) {
+  const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
+  return r.findings.map((f) => {
+    const physical = {
+      artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
+    };
+    if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
+    const res = {
+      ruleId: f.check,
+      ruleIndex: index.get(f.check),
+      level: level(f.severity),
+      message: { text: f.message },
+      locations: [{ physicalLocation: physical }],
+      properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data }
+    };
+    if (f.waived) {
+      res.suppressions = [
+        {
+          kind: "inSource",
+          status: "accepted",
+          justification: `${f.waived.reason} (approved by ${f.waived.approvedBy}${f.waived.covers ? `; the waiver covers ${f.waived.covers}` : ""})`
+        }
+      ];
+    }
+    return res;
+  });
+}
 function sarifLog(result2, checks, options = {}) {
   const infos = [
     ...checks.map((c) => ({ info: c })),
@@ -72561,32 +74001,8 @@ function sarifLog(result2, checks, options = {}) {
   const rules = infos.map((x) => rule(x.info, result2.caution));
   const index = new Map(infos.map((x, i) => [x.info.id, i]));
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
-  const results = result2.records.flatMap(
-    (r) => r.findings.map((f) => {
-      const physical = {
-        artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
-      };
-      if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
-      const res = {
-        ruleId: f.check,
-        ruleIndex: index.get(f.check),
-        level: level(f.severity),
-        message: { text: f.message },
-        locations: [{ physicalLocation: physical }],
-        properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data }
-      };
-      if (f.waived) {
-        res.suppressions = [
-          {
-            kind: "inSource",
-            status: "accepted",
-            justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})`
-          }
-        ];
-      }
-      return res;
-    })
-  );
+  const results = result2.records.flatMap((r) => sarifResults(r, index, options));
+  const invocations = sarifInvocations(notRunGroups(result2.records), index, prefix);
   return {
     $schema: SARIF_SCHEMA,
     version: "2.1.0",
@@ -72600,11 +74016,39 @@ function sarifLog(result2, checks, options = {}) {
             rules
           }
         },
+        ...invocations ? { invocations } : {},
         results,
         properties: { caution: result2.caution, summary: result2.summary }
       }
     ]
   };
+}
+function sarifInvocations(groups, ruleIndex, prefix = "") {
+  if (groups.length === 0) return null;
+  const notifications = groups.map((g) => {
+    const rule4 = { id: g.check };
+    const i = ruleIndex.get(g.check);
+    if (i !== void 0) rule4.index = i;
+    return {
+      level: "note",
+      message: { text: `${g.check} did not run on ${notRunRecordsText(g)}: ${g.reason}.` },
+      associatedRule: rule4,
+      locations: g.examples.map((e) => {
+        const physical = {
+          artifactLocation: { uri: encodeUri(`${prefix}${e.file}`) }
+        };
+        if (e.line !== null && e.line >= 1) physical.region = { startLine: e.line };
+        return { physicalLocation: physical };
+      }),
+      properties: {
+        notRun: true,
+        reason: g.reason,
+        records: g.records,
+        recordIds: g.examples.map((e) => e.id)
+      }
+    };
+  });
+  return [{ executionSuccessful: true, toolExecutionNotifications: notifications }];
 }
 
 // src/action/engine.ts
@@ -72868,7 +74312,7 @@ function clientFor(settings, runner) {
 
 // src/action/review.ts
 import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
-import { dirname as dirname3 } from "node:path";
+import { dirname as dirname4 } from "node:path";
 
 // src/github/paths.ts
 import { posix as posix2 } from "node:path";
@@ -72909,21 +74353,21 @@ function buildAnnotations(result2, registryDir, max = 50) {
 
 // src/github/sarif-file.ts
 import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
-import { dirname as dirname2 } from "node:path";
+import { dirname as dirname3 } from "node:path";
 async function writeSarifFile(path, sarif) {
-  await mkdir2(dirname2(path), { recursive: true });
+  await mkdir2(dirname3(path), { recursive: true });
   await writeFile2(path, JSON.stringify(sarif, null, 2) + "\n", "utf8");
 }
 
 // src/github/git-diff.ts
-import { execFile } from "node:child_process";
+import { execFile as execFile2 } from "node:child_process";
 import { promisify } from "node:util";
-var run11 = promisify(execFile);
+var run11 = promisify(execFile2);
 function checkSha(sha) {
   if (!/^[0-9a-f]{7,64}$/i.test(sha)) throw new Error(`not a commit id: ${JSON.stringify(sha)}`);
   return sha;
 }
-async function git(workspace, args) {
+async function git2(workspace, args) {
   const { stdout } = await run11("git", ["-c", "core.quotepath=off", ...args], {
     cwd: workspace,
     maxBuffer: 256 * 1024 * 1024,
@@ -72940,7 +74384,7 @@ var STATUS = {
   T: "changed"
 };
 async function gitChangedFiles(workspace, baseSha, headSha) {
-  const out = await git(workspace, [
+  const out = await git2(workspace, [
     "diff",
     "--name-status",
     "-M",
@@ -72968,7 +74412,7 @@ function parseNameStatus(out) {
 }
 async function gitPatch(workspace, baseSha, headSha, path) {
   try {
-    return await git(workspace, [
+    return await git2(workspace, [
       "diff",
       "--unified=3",
       `${checkSha(baseSha)}...${checkSha(headSha)}`,
@@ -73074,7 +74518,7 @@ function message(error2) {
 
 // src/action/post-review.ts
 import { readFile, stat as stat2 } from "node:fs/promises";
-import { join as join4 } from "node:path";
+import { join as join5 } from "node:path";
 
 // src/github/identity.ts
 var logins = /* @__PURE__ */ new WeakMap();
@@ -73274,9 +74718,9 @@ function fileLines(text) {
 function fixLine(lineText, fix) {
   const key4 = fix.field.split(".").pop() ?? "";
   if (key4 === "" || /^\d+$/.test(key4) || fix.from === "" || fix.from === fix.to) return null;
-  const head2 = new RegExp(`^(\\s*(?:-\\s+)?)(["']?)${escapeRegExp(key4)}\\2\\s*:\\s*`).exec(lineText);
-  if (head2 === null) return null;
-  const valueStart = head2[0].length;
+  const head = new RegExp(`^(\\s*(?:-\\s+)?)(["']?)${escapeRegExp(key4)}\\2\\s*:\\s*`).exec(lineText);
+  if (head === null) return null;
+  const valueStart = head[0].length;
   const value = lineText.slice(valueStart);
   const at2 = value.indexOf(fix.from);
   if (at2 < 0 || value.indexOf(fix.from, at2 + 1) >= 0) return null;
@@ -73364,7 +74808,7 @@ function shortCaution(checklistUrl) {
 }
 function commentBody(group, checklistUrl, source) {
   const record = group[0].recordId;
-  const head2 = record === null ? "**stereogate**" : `**stereogate** · record ${escapeMarkdown(record)}`;
+  const head = record === null ? "**stereogate**" : `**stereogate** · record ${escapeMarkdown(record)}`;
   const fixes = group.flatMap(({ finding: finding2 }) => finding2.fix === void 0 ? [] : [finding2.fix]);
   const block = source === null || fixes.length === 0 ? null : suggestionBlock(source, group[0].line, fixes);
   const suggestion = block === null ? "" : `
@@ -73372,7 +74816,7 @@ function commentBody(group, checklistUrl, source) {
 
 ${block}`;
   const tail = [suggestion, "", shortCaution(checklistUrl), INLINE_MARKER].join("\n");
-  let body = `${head2}
+  let body = `${head}
 `;
   for (const [index, { finding: finding2 }] of group.entries()) {
     const text = finding2.message.length > INLINE_MESSAGE_MAX_CHARS ? `${finding2.message.slice(0, INLINE_MESSAGE_MAX_CHARS)}… (cut; whole in the checklist)` : finding2.message;
@@ -73531,7 +74975,7 @@ async function fixSources(settings, result2) {
   for (const record of result2.records) {
     if (!record.findings.some((f) => f.fix !== void 0 && f.waived === null && f.line !== null)) continue;
     try {
-      const path = join4(settings.registryRoot, record.file);
+      const path = join5(settings.registryRoot, record.file);
       if ((await stat2(path)).size > SOURCE_MAX_BYTES) continue;
       sources.set(toRepoPath(settings.registryDir, record.file), await readFile(path, "utf8"));
     } catch {
@@ -73561,7 +75005,9 @@ async function review(settings, engine2, client, runner) {
   const result2 = await engine2.audit({
     root: settings.registryRoot,
     ...chosen.paths === void 0 ? {} : { paths: chosen.paths },
-    ...settings.configFile === null ? {} : { configFile: settings.configFile }
+    ...settings.configFile === null ? {} : { configFile: settings.configFile },
+    ...settings.indexCache === null ? {} : { indexCache: settings.indexCache },
+    log: (line) => runner.info(line)
   });
   const { errors, warnings, notes, waived } = result2.summary;
   runner.info(
@@ -73578,7 +75024,7 @@ async function review(settings, engine2, client, runner) {
   }
   if (settings.reportFile !== null) {
     try {
-      await mkdir3(dirname3(settings.reportFile), { recursive: true });
+      await mkdir3(dirname4(settings.reportFile), { recursive: true });
       await writeFile3(
         settings.reportFile,
         redactSecret(engine2.renderMarkdown(result2, { maxChars: Number.POSITIVE_INFINITY }), settings.token),
@@ -73660,8 +75106,8 @@ var coreRunner = {
 };
 
 // src/action/settings.ts
-import { existsSync as existsSync4, readFileSync, realpathSync as realpathSync4 } from "node:fs";
-import { dirname as dirname4, isAbsolute as isAbsolute4, join as join5, relative as relative3, resolve as resolve4, sep as sep3 } from "node:path";
+import { existsSync as existsSync4, readFileSync as readFileSync3, realpathSync as realpathSync4 } from "node:fs";
+import { dirname as dirname5, isAbsolute as isAbsolute4, join as join6, relative as relative3, resolve as resolve4, sep as sep3 } from "node:path";
 var SettingsError = class extends Error {
   name = "SettingsError";
 };
@@ -73692,6 +75138,7 @@ function readSettings(input, env) {
     maxInlineComments: parseCount(input("max-inline-comments"), "max-inline-comments", 10),
     sarifFile: optionalPath("sarif-file"),
     reportFile: optionalPath("report-file"),
+    indexCache: parseIndexCache(input("index-cache"), workspace, env.RUNNER_TEMP),
     apiUrl: env.GITHUB_API_URL || "https://api.github.com",
     api: {
       timeoutMs: parseSeconds(input("api-timeout"), "api-timeout", 30) * 1e3,
@@ -73710,6 +75157,12 @@ function parseRecordChoice(raw2) {
   if (value === "all") return { kind: "all" };
   const paths = value.split(/\r?\n/).map((p) => p.trim()).filter((p) => p !== "");
   return { kind: "listed", paths };
+}
+function parseIndexCache(raw2, workspace, runnerTemp) {
+  const value = raw2.trim();
+  if (value === "none") return null;
+  if (value === "") return runnerTemp ? join6(runnerTemp, "stereogate", "index-cache.json") : null;
+  return resolve4(workspace, value);
 }
 function parseFailOn(raw2) {
   const value = raw2.trim() || "error";
@@ -73750,16 +75203,16 @@ function insidePath(workspace, value, name) {
   return abs;
 }
 function checkoutOf(dir, workspace) {
-  for (let at2 = dir; ; at2 = dirname4(at2)) {
-    if (existsSync4(join5(at2, ".git"))) return at2;
-    if (at2 === workspace || dirname4(at2) === at2) return workspace;
+  for (let at2 = dir; ; at2 = dirname5(at2)) {
+    if (existsSync4(join6(at2, ".git"))) return at2;
+    if (at2 === workspace || dirname5(at2) === at2) return workspace;
   }
 }
 function pullRequestOf(eventPath, repository) {
   if (!eventPath) return null;
   let payload;
   try {
-    payload = JSON.parse(readFileSync(eventPath, "utf8"));
+    payload = JSON.parse(readFileSync3(eventPath, "utf8"));
   } catch (error2) {
     throw new SettingsError(
       `cannot read the event payload ${eventPath}: ${error2 instanceof Error ? error2.message : String(error2)}`

@@ -48,6 +48,628 @@ var __toESM = (mod, isNodeMode, target) => (target = mod != null ? __create(__ge
   mod
 ));
 
+// src/chem/descriptors-compare.ts
+function key(label, axialUnit) {
+  if (axialUnit && label === "R") return "M";
+  if (axialUnit && label === "S") return "P";
+  return label;
+}
+function mirrored(k) {
+  return MIRROR[k] ?? k;
+}
+function unitKey(u) {
+  return u.label === null ? null : key(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== "cumulene");
+}
+function itemKey(it) {
+  return key(it.label, it.axial === true);
+}
+function unitLocants(u) {
+  return u.locants.filter((l) => l !== null).sort((a, b) => a - b);
+}
+function count(keys) {
+  const c = {};
+  for (const k of keys) c[k] = (c[k] ?? 0) + 1;
+  return c;
+}
+function sameCounts(a, b) {
+  const ks = /* @__PURE__ */ new Set([...Object.keys(a), ...Object.keys(b)]);
+  for (const k of ks) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
+  return true;
+}
+function invertCounts(c) {
+  const o = {};
+  for (const [k, v] of Object.entries(c)) o[mirrored(k)] = (o[mirrored(k)] ?? 0) + v;
+  return o;
+}
+function compareDescriptors(parsed, units, options = {}) {
+  const defined = units.filter((u) => u.defined && u.label !== null);
+  const result2 = {
+    method: "none",
+    whyNotPerLocant: null,
+    countsDecide: false,
+    agrees: true,
+    matchedInverted: false,
+    mismatches: [],
+    notStereoUnits: [],
+    undefinedAt: [],
+    unlisted: [],
+    declaredCounts: count(parsed.items.map(itemKey)),
+    computedCounts: count(defined.map((u) => unitKey(u)))
+  };
+  if (parsed.items.length === 0) {
+    result2.whyNotPerLocant = "the descriptor cites no configurations";
+    return result2;
+  }
+  const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
+  const mapped = units.some((u) => unitLocants(u).length > 0);
+  const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
+  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
+  if (mapped && numeric || single) {
+    result2.method = single ? "per-unit" : "per-locant";
+    const byLocant2 = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
+    const pairs = single ?? [];
+    if (!single) {
+      for (const it of parsed.items) {
+        const u = byLocant2(Number(it.locant));
+        if (!u) result2.notStereoUnits.push(it.locant);
+        else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
+        else pairs.push({ it, u });
+      }
+    }
+    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey(u)) : unitKey(u)) !== itemKey(it)).map(({ it, u }) => ({
+      locant: it.locant ?? "",
+      declared: it.pair ?? it.label + (it.axial ? "a" : ""),
+      computed: u.label,
+      atoms: u.atoms
+    }));
+    const direct2 = mismatchesFor(false);
+    const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
+    result2.matchedInverted = mayInvert && inverted2.length < direct2.length;
+    result2.mismatches = result2.matchedInverted ? inverted2 : direct2;
+    const cited = new Set(pairs.map((p) => p.u));
+    for (const u of defined) {
+      if (!cited.has(u)) {
+        result2.unlisted.push({
+          locant: single ? null : unitLocants(u)[0]?.toString() ?? null,
+          label: u.label,
+          atoms: u.atoms
+        });
+      }
+    }
+    result2.agrees = result2.mismatches.length === 0 && result2.notStereoUnits.length === 0 && result2.undefinedAt.length === 0;
+    return result2;
+  }
+  result2.method = "counts";
+  result2.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
+  const direct = sameCounts(result2.declaredCounts, result2.computedCounts);
+  const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
+  result2.agrees = direct || inverted;
+  result2.matchedInverted = !direct && inverted;
+  result2.countsDecide = result2.agrees && countsDecide(parsed.items, units, mayInvert);
+  return result2;
+}
+function kindOfKey(k) {
+  if (k === "R" || k === "S") return "RS";
+  if (k === "r" || k === "s") return "rs";
+  if (k === "M" || k === "P") return "MP";
+  if (k === "m" || k === "p") return "mp";
+  if (k === "E" || k === "Z" || k === "e" || k === "z") return "EZ";
+  return "other";
+}
+function kindOfUnit(u) {
+  const k = unitKey(u);
+  if (k !== null) return kindOfKey(k);
+  if (u.kind === "tetrahedral") return u.pseudoasymmetric ? "rs" : "RS";
+  if (u.kind === "double-bond") return "EZ";
+  if (u.kind === "allene" || u.kind === "biaryl") return "MP";
+  return "other";
+}
+function matchOnePerKind(items, units) {
+  if (units.some((u) => kindOfUnit(u) === "other")) return null;
+  const pairs = [];
+  for (const it of items) {
+    const kind = kindOfKey(itemKey(it));
+    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
+    const sameKindUnits = units.filter((u2) => kindOfUnit(u2) === kind);
+    if (kind === "other" || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
+    const u = sameKindUnits[0];
+    if (!u.defined || u.label === null) return null;
+    pairs.push({ it, u });
+  }
+  return pairs;
+}
+function countsDecide(items, units, mayInvert) {
+  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
+  let chiralUnits = 0;
+  let uniform = true;
+  for (const kind of kinds) {
+    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
+    if (kind === "other" || ofKind.some((u) => !u.defined || u.label === null)) return false;
+    if (kind === "RS" || kind === "MP") chiralUnits += ofKind.length;
+    if (new Set(ofKind.map((u) => unitKey(u))).size > 1) {
+      if (!(mayInvert && kind === "RS" && ofKind.length === 2)) return false;
+      uniform = false;
+    }
+  }
+  return uniform || chiralUnits === 2;
+}
+var MIRROR, AXIAL_KINDS;
+var init_descriptors_compare = __esm({
+  "src/chem/descriptors-compare.ts"() {
+    "use strict";
+    MIRROR = { R: "S", S: "R", M: "P", P: "M" };
+    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene", "helix"]);
+  }
+});
+
+// src/chem/descriptors.ts
+function foldSigns(text) {
+  let out = "";
+  for (const ch of text) out += MINUS_LIKE.includes(ch) ? "-" : PLUS_LIKE.includes(ch) ? "+" : ch;
+  return out;
+}
+function parseDescriptors(input, options = {}) {
+  const context = options.context ?? "descriptor";
+  const out = {
+    mode: "none",
+    rotationSign: null,
+    items: [],
+    problems: [],
+    problemDetails: [],
+    remarks: [],
+    prefixes: [],
+    words: [],
+    fischer: null,
+    rest: "",
+    embeddedDescriptors: false
+  };
+  const problem = (offset, message) => {
+    out.problemDetails.push({ offset, message });
+    out.problems.push(`at character ${offset}: ${message}`);
+  };
+  const signs = [];
+  let i = skipSpace(input, 0);
+  for (; ; ) {
+    if (i >= input.length) break;
+    const ch = input[i];
+    let consumed = false;
+    if (ch === "(" || ch === "[") {
+      const close2 = ch === "(" ? ")" : "]";
+      const end = input.indexOf(close2, i + 1);
+      const inner = end < 0 ? "" : input.slice(i + 1, end);
+      if (end >= 0 && !/[([]/.test(inner)) {
+        const g = parseGroup(inner, i + 1, context, problem);
+        if (g.kind !== "not-stereo") {
+          consumed = true;
+          if (g.sign) signs.push({ sign: g.sign, offset: i });
+          out.items.push(...g.items);
+          for (const w of g.words) addWord(out, w);
+          if (g.legacyPair) {
+            out.legacyPair = true;
+            out.remarks.push(
+              `${g.legacyPair} without locants is the legacy way of naming a racemate and is read as (${g.items[0].pair}); IUPAC 2013 (P-93.1.3) writes (RS) or rac-`
+            );
+          }
+          i = end + 1;
+        }
+      } else if (end < 0 && context === "descriptor") {
+        problem(i, `'${ch}' is never closed`);
+        i = input.length;
+        break;
+      }
+    } else {
+      const m = WORD_PREFIX.exec(input.slice(i));
+      const word = m?.[1];
+      const next = m ? input[i + m[0].length] : void 0;
+      if (word && (context === "descriptor" || next !== void 0 && HYPHENS.includes(next))) {
+        consumed = true;
+        if (word === "rac" || word === "rel") out.prefixes.push(word);
+        else if (word === "D" || word === "L") out.fischer = word;
+        else if (word === "DL" || word === "D,L") out.fischer = "DL";
+        else if (word === "d") signs.push({ sign: "+", offset: i });
+        else if (word === "l") signs.push({ sign: "-", offset: i });
+        else if (word === "dl" || word === "d,l") signs.push({ sign: "±", offset: i });
+        else addWord(out, word);
+        if (word === "d" || word === "l" || word === "dl" || word === "d,l") {
+          out.remarks.push(
+            `'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`
+          );
+        }
+        i += word.length;
+      }
+    }
+    if (!consumed) break;
+    i = skipSpace(input, i);
+    if (i < input.length && HYPHENS.includes(input[i])) i = skipSpace(input, i + 1);
+  }
+  out.rest = input.slice(i).trim();
+  if (context === "descriptor" && out.rest !== "") {
+    problem(i, `'${out.rest.slice(0, 20)}' is not a stereodescriptor`);
+  }
+  out.embeddedDescriptors = /[([](?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?(?:,\s*(?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?)*[)\]]/.test(
+    out.rest
+  );
+  finish(out, signs, problem);
+  return out;
+}
+function skipSpace(s, i) {
+  while (i < s.length && /\s/.test(s[i])) i++;
+  return i;
+}
+function addWord(out, w) {
+  if (!out.words.includes(w)) out.words.push(w);
+}
+function parseGroup(inner, base, context, problem) {
+  const compact = inner.replace(/\s+/g, "");
+  const sign = SIGNS[foldSigns(compact)];
+  if (sign) return { kind: "sign", sign, items: [], words: [] };
+  const legacy = /^([RS])[,/]([RS])$/.exec(compact);
+  if (legacy && legacy[1] !== legacy[2]) {
+    const pair = legacy[1] === "R" ? "RS" : "SR";
+    return {
+      kind: "items",
+      items: [{ locant: null, label: pair[0], pair, offset: base + inner.indexOf(legacy[1]) }],
+      words: [],
+      legacyPair: `(${legacy[1]}${compact[1]}${legacy[2]})`
+    };
+  }
+  const parts = [];
+  let start = 0;
+  for (let k = 0; k <= inner.length; k++) {
+    if (k === inner.length || inner[k] === ",") {
+      const raw2 = inner.slice(start, k);
+      const lead = raw2.length - raw2.trimStart().length;
+      parts.push({ text: raw2.trim(), offset: base + start + lead });
+      start = k + 1;
+    }
+  }
+  const items = [];
+  const words = [];
+  const bad2 = [];
+  for (const p of parts) {
+    const m = ITEM.exec(p.text);
+    if (m) {
+      const [, loc, lab, ax, star] = m;
+      const item = { locant: loc ?? null, label: lab[0], offset: p.offset };
+      if (lab === "RS" || lab === "SR") item.pair = lab;
+      if (star) item.relativeStar = true;
+      if (ax) {
+        if (lab === "R" || lab === "S") item.axial = true;
+        else {
+          bad2.push(p);
+          continue;
+        }
+      }
+      items.push(item);
+    } else if (WORDS.includes(p.text.toLowerCase())) {
+      words.push(p.text.toLowerCase());
+    } else {
+      bad2.push(p);
+    }
+  }
+  if (items.length === 0 && words.length === 0) {
+    if (context === "name") return { kind: "not-stereo", items: [], words: [] };
+  }
+  for (const b of bad2) {
+    problem(
+      b.offset,
+      b.text === "" ? "empty stereodescriptor" : `'${b.text}' is not a stereodescriptor (P-93)`
+    );
+  }
+  return { kind: "items", items, words };
+}
+function finish(out, signs, problem) {
+  const distinct = [...new Set(signs.map((s) => s.sign))];
+  if (distinct.length > 1) {
+    problem(signs[1].offset, `conflicting signs of rotation: ${distinct.map((s) => `(${s})`).join(" and ")}`);
+  }
+  out.rotationSign = signs[0]?.sign ?? null;
+  const seen = /* @__PURE__ */ new Map();
+  for (const it of out.items) {
+    if (it.locant === null) continue;
+    if (seen.has(it.locant)) problem(it.offset, `locant ${it.locant} is given twice`);
+    seen.set(it.locant, it.offset);
+  }
+  const stars = out.items.filter((it) => it.relativeStar).length;
+  const pairs = out.items.filter((it) => it.pair).length;
+  const chiralItems = out.items.filter(
+    (it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P"
+  );
+  if (stars > 0 && stars < chiralItems.length) {
+    problem(
+      out.items.find((it) => !it.relativeStar && chiralItems.includes(it)).offset,
+      "some descriptors carry * and others do not"
+    );
+  }
+  if (pairs > 0 && pairs < chiralItems.length) {
+    out.remarks.push(
+      "RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate"
+    );
+  }
+  const racemic = out.prefixes.includes("rac") || pairs > 0 || out.rotationSign === "±" || out.fischer === "DL";
+  const relative2 = out.prefixes.includes("rel") || stars > 0;
+  if (racemic && relative2) {
+    out.remarks.push(
+      "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed, read as racemic; IUPAC 2013 (P-93.1.3) uses one of them"
+    );
+  }
+  if (out.prefixes.includes("rel") && pairs > 0)
+    problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
+  if (out.prefixes.includes("rel") && out.items.length === 0) {
+    out.remarks.push("'rel-' without descriptors states no configuration");
+  }
+  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs === 0) {
+    out.remarks.push(
+      "(±) with descriptors of one enantiomer is read as rac-(…); IUPAC 2013 (P-93.1.3) writes rac-(…) or (…RS,…SR)"
+    );
+  }
+  if (racemic) out.mode = "racemic";
+  else if (relative2) out.mode = "relative";
+  else if (out.items.length > 0) out.mode = "absolute";
+  else out.mode = "none";
+  if ((racemic || relative2) && chiralItems.some((it) => it.locant !== null)) {
+    const first = [...chiralItems].sort((a, b) => locantOrder(a.locant) - locantOrder(b.locant))[0];
+    if (first.label === "S" || first.label === "P") {
+      out.remarks.push(
+        `P-93.1.3 cites the lowest-locant centre as R (R* or RS); ${first.locant ?? ""}${first.pair ?? first.label} comes first here`
+      );
+    }
+  }
+  const unlocated = out.items.filter((it) => it.locant === null);
+  if (unlocated.length > 1 && unlocated.some((it) => it.label === "R") && unlocated.some((it) => it.label === "S")) {
+    out.remarks.push("(R,S) without locants is ambiguous: for a racemate P-93.1.3 writes (RS)");
+  }
+}
+function locantOrder(locant) {
+  if (locant === null) return Number.MAX_SAFE_INTEGER;
+  const n = parseInt(locant, 10);
+  return Number.isNaN(n) ? Number.MAX_SAFE_INTEGER : n * 100 + locant.length;
+}
+var WORDS, MINUS_LIKE, HYPHENS, PLUS_LIKE, SIGNS, WORD_PREFIX, ITEM;
+var init_descriptors = __esm({
+  "src/chem/descriptors.ts"() {
+    "use strict";
+    init_descriptors_compare();
+    WORDS = ["meso", "cis", "trans", "erythro", "threo", "endo", "exo", "syn", "anti"];
+    MINUS_LIKE = "-‐‑‒–—−﹣－˗";
+    HYPHENS = MINUS_LIKE;
+    PLUS_LIKE = "+＋";
+    SIGNS = {
+      "+": "+",
+      "-": "-",
+      "±": "±",
+      "+/-": "±",
+      "+-": "±"
+    };
+    WORD_PREFIX = new RegExp(
+      `^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\\s(${MINUS_LIKE.replace("-", "\\-")}]|$)`
+    );
+    ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
+  }
+});
+
+// src/checks/words.ts
+function unitName(u) {
+  const loc = (k) => u.locants[k] !== null && u.locants[k] !== void 0 ? String(u.locants[k]) : "";
+  if (u.kind === "tetrahedral") return `${u.element}${loc(0)} (atom ${u.atoms[0]})`;
+  const ends = u.atoms.join(", ");
+  const what = u.kind === "double-bond" ? "double bond" : u.kind === "biaryl" ? "biaryl axis" : u.kind === "helix" ? "helix" : `${u.kind} axis`;
+  const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join("=C")}` : "";
+  return `${what}${mapped} (atoms ${ends})`;
+}
+function atomsInRecordTerms(text, s) {
+  if (!s) return text;
+  const byNumber = new Map(s.atoms.map((a) => [a.inputNumber, a]));
+  return text.replace(/\b([A-Z][a-z]?)(\d+)\b/g, (whole, el, num2) => {
+    const a = byNumber.get(Number(num2));
+    if (!a || a.element !== el) return whole;
+    return a.mapNumber !== null ? `${el}${a.mapNumber} (atom ${num2})` : `${el} (atom ${num2})`;
+  });
+}
+function listUnits(units) {
+  return units.length === 0 ? "none" : units.map(unitName).join(", ");
+}
+function unitSummary(units) {
+  const centres = units.filter((u) => u.kind === "tetrahedral").length;
+  const bonds = units.filter((u) => u.kind === "double-bond").length;
+  const axes = units.length - centres - bonds;
+  const parts = [];
+  if (centres) parts.push(`${centres} stereocentre${centres === 1 ? "" : "s"}`);
+  if (bonds) parts.push(`${bonds} stereogenic double bond${bonds === 1 ? "" : "s"}`);
+  if (axes) parts.push(`${axes} stereogenic ax${axes === 1 ? "is" : "es"}`);
+  return parts.length ? parts.join(" and ") : "no stereo units";
+}
+function definedUnits(f) {
+  return f.units.filter((u) => u.defined);
+}
+function undefinedUnits(f) {
+  return f.units.filter((u) => !u.defined);
+}
+function labelList(units) {
+  const l = units.filter((u) => u.defined).map((u) => `${unitName(u)} ${u.label ?? "unranked"}`);
+  return l.length ? l.join(", ") : "none";
+}
+function declaredDescriptors(record) {
+  const d = record?.stereo.descriptors;
+  const n = record?.name;
+  return {
+    field: d !== void 0 && d.trim() !== "" ? parseDescriptors(d) : null,
+    name: n !== void 0 && n.trim() !== "" ? parseDescriptors(n, { context: "name" }) : null
+  };
+}
+function declaredSign(record) {
+  const { field: field2, name } = declaredDescriptors(record);
+  if (field2?.rotationSign) return { sign: field2.rotationSign, field: "stereo.descriptors" };
+  if (name?.rotationSign) return { sign: name.rotationSign, field: "name" };
+  return null;
+}
+function finding(messageId, field2, data, severity) {
+  const f = { messageId, field: field2, data };
+  if (severity) f.severity = severity;
+  return f;
+}
+function render(template, data) {
+  return template.replace(
+    /\{([A-Za-z0-9_]+)(?:([:?])([^|{}]*)\|([^|{}]*))?\}/g,
+    (whole, name, how, one, many) => {
+      if (!Object.prototype.hasOwnProperty.call(data, name)) return whole;
+      const v = data[name];
+      const text = v === null ? "none" : String(v);
+      if (how === void 0) return text;
+      const words = text === "1" ? one : many;
+      return how === ":" ? `${text} ${words}` : words;
+    }
+  );
+}
+function plural(n, one, many = `${one}s`) {
+  return `${n} ${String(n) === "1" ? one : many}`;
+}
+function fmt(n) {
+  return Number.isInteger(n) ? String(n) : String(Math.round(n * 100) / 100);
+}
+var STEREO_CLAIM_FORMS;
+var init_words = __esm({
+  "src/checks/words.ts"() {
+    "use strict";
+    init_descriptors();
+    STEREO_CLAIM_FORMS = [
+      "meso",
+      "single-enantiomer",
+      "enantioenriched",
+      "racemate",
+      "single-diastereomer",
+      "diastereomer-mixture"
+    ];
+  }
+});
+
+// src/checks/waivers.ts
+function blank(s) {
+  return s === void 0 || s.trim() === "";
+}
+function isComplete(w) {
+  return !blank(w.reason) && !blank(w.approved_by);
+}
+function waiverAccepts(w, f) {
+  if (w.check !== f.check) return false;
+  if (!blank(w.message_id) && w.message_id.trim() !== f.messageId) return false;
+  if (!blank(w.other_record)) {
+    const other = w.other_record.trim();
+    if (!OTHER_RECORD_KEYS.some((k) => f.data[k] !== void 0 && String(f.data[k]) === other)) return false;
+  }
+  return true;
+}
+function waiverCovers(w) {
+  const parts = [
+    blank(w.message_id) ? null : `message ${w.message_id.trim()}`,
+    blank(w.other_record) ? null : `about ${w.other_record.trim()}`
+  ].filter((x) => x !== null);
+  return parts.length === 0 ? `every finding of ${w.check}` : `${w.check} (${parts.join(", ")})`;
+}
+function acceptingWaiver(waivers, f) {
+  const w = waivers.find((x) => isComplete(x) && waiverAccepts(x, f));
+  return w ? { reason: w.reason.trim(), approvedBy: w.approved_by.trim(), covers: waiverCovers(w) } : null;
+}
+function waiversOf(record, check) {
+  return (record?.waivers ?? []).flatMap((w, index) => w.check === check ? [{ ...w, index }] : []);
+}
+function stillMatchesNothing(note, more) {
+  if (note.messageId !== "waiver-matches-nothing") return true;
+  const str = (v) => typeof v === "string" && v !== "" ? v : void 0;
+  const w = {
+    check: String(note.data.waivedCheck),
+    message_id: str(note.data.waivedMessage),
+    other_record: str(note.data.waivedRecord)
+  };
+  return !more.some((f) => waiverAccepts(w, f));
+}
+function reviewWaivers(record, findings, knownChecks) {
+  const waivers = record?.waivers ?? [];
+  const out = [];
+  const firstIndex = /* @__PURE__ */ new Map();
+  waivers.forEach((w, index) => {
+    const field2 = `waivers.${index}`;
+    const covers = waiverCovers(w);
+    const missing = [
+      blank(w.reason) ? "reason" : null,
+      blank(w.approved_by) ? "approver (approved_by)" : null
+    ].filter((x) => x !== null);
+    if (missing.length) {
+      out.push(
+        finding("waiver-incomplete", field2, {
+          waivedCheck: w.check,
+          index,
+          missing: missing.join(" and no ")
+        })
+      );
+    }
+    const seen = firstIndex.get(covers);
+    if (seen !== void 0) {
+      out.push(
+        finding("waiver-duplicate", field2, { waivedCheck: w.check, covers, index, first: seen }, "note")
+      );
+      return;
+    }
+    firstIndex.set(covers, index);
+    if (w.check !== WAIVER_CHECK_ID && !findings.some((f) => waiverAccepts(w, f))) {
+      const unknown = knownChecks !== void 0 && !knownChecks.includes(w.check);
+      out.push(
+        finding(
+          "waiver-matches-nothing",
+          field2,
+          {
+            waivedCheck: w.check,
+            waivedMessage: blank(w.message_id) ? null : w.message_id.trim(),
+            waivedRecord: blank(w.other_record) ? null : w.other_record.trim(),
+            covers,
+            index,
+            knownCheck: !unknown,
+            known: unknown ? " (and no check has that id)" : ""
+          },
+          "note"
+        )
+      );
+    }
+  });
+  return out;
+}
+function run(ctx) {
+  const waivers = ctx.record?.waivers ?? [];
+  if (waivers.length === 0) return { findings: [], notApplicable: "the record has no waivers" };
+  const others2 = ctx.findings ?? [];
+  const findings = reviewWaivers(ctx.record, others2);
+  if (findings.some((f) => f.severity !== "note")) return { findings };
+  const accepting = waivers.filter((w) => others2.some((f) => waiverAccepts(w, f)));
+  const whole = accepting.filter((w) => blank(w.message_id) && blank(w.other_record));
+  const wholeText = whole.length > 0 ? `; ${whole.length === 1 ? "one covers" : `${whole.length} cover`} every finding of its check (${whole.map((w) => w.check).join(", ")}), as it names no message_id or other_record` : "";
+  return {
+    findings,
+    passed: `${plural(waivers.length, "waiver")} complete; ${accepting.length} ${accepting.length === 1 ? "accepts" : "accept"} findings of this record${wholeText}`
+  };
+}
+var WAIVER_CHECK_ID, messages, OTHER_RECORD_KEYS, waiverReview;
+var init_waivers = __esm({
+  "src/checks/waivers.ts"() {
+    "use strict";
+    init_words();
+    WAIVER_CHECK_ID = "waiver-review";
+    messages = {
+      "waiver-incomplete": "The waiver for {waivedCheck} (waivers[{index}]) has no {missing}. A waiver records a decision: say why the finding is acceptable (reason) and who decided (approved_by). Until then it accepts nothing.",
+      "waiver-matches-nothing": "The waiver waivers[{index}], for {covers}, matches no finding on this record{known}. Remove it, or correct what it names, so that it does not silently accept a future finding.",
+      "waiver-duplicate": "waivers[{index}] repeats waivers[{first}], the waiver for {covers}. Keep one."
+    };
+    OTHER_RECORD_KEYS = ["otherId", "otherFile", "input"];
+    waiverReview = {
+      id: WAIVER_CHECK_ID,
+      defaultSeverity: "warning",
+      summary: "Waivers give a reason and an approver, and each accepts a finding of this record.",
+      explanation: "A waiver is the responsible chemist accepting a finding for this record; it is only as good as its reason and the name of who decided (common practice, no source: review decisions are recorded with their reason and approver). A waiver that names only a check accepts every finding of that check on the record, a later, different one too; message_id (one message of the check) and other_record (findings about one other record) narrow it to the finding that was decided. A waiver that accepts nothing is reported, so that it can be removed before it hides a later, different problem.",
+      messages,
+      run
+    };
+  }
+});
+
 // src/registry/closest.ts
 function editDistance(a, b) {
   if (a === b) return 0;
@@ -81,6 +703,109 @@ function closestWord(word, candidates) {
 var init_closest = __esm({
   "src/registry/closest.ts"() {
     "use strict";
+  }
+});
+
+// src/registry/files.ts
+import {
+  closeSync,
+  constants,
+  fstatSync,
+  lstatSync,
+  openSync,
+  readdirSync,
+  readSync,
+  realpathSync,
+  statSync
+} from "node:fs";
+import { isAbsolute, join, relative, resolve, sep } from "node:path";
+function readRegularFile(abs) {
+  const fd = openSync(abs, OPEN_FLAGS);
+  try {
+    const st = fstatSync(fd);
+    if (!st.isFile()) return { ok: false, error: "is not a regular file" };
+    if (st.size > MAX_FILE_BYTES)
+      return { ok: false, error: `is too large (${st.size} bytes, limit ${MAX_FILE_BYTES})` };
+    let buf = Buffer.allocUnsafe(st.size + 1);
+    let total = 0;
+    for (; ; ) {
+      if (total === buf.length) {
+        if (total > MAX_FILE_BYTES)
+          return {
+            ok: false,
+            error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+          };
+        const bigger = Buffer.allocUnsafe(buf.length * 2);
+        buf.copy(bigger, 0, 0, total);
+        buf = bigger;
+      }
+      const n = readSync(fd, buf, total, buf.length - total, null);
+      if (n === 0) break;
+      total += n;
+    }
+    if (total > MAX_FILE_BYTES)
+      return {
+        ok: false,
+        error: `is too large (more than ${MAX_FILE_BYTES} bytes, limit ${MAX_FILE_BYTES})`
+      };
+    return { ok: true, bytes: buf.subarray(0, total) };
+  } finally {
+    closeSync(fd);
+  }
+}
+function readTextFile(abs) {
+  let bytes;
+  try {
+    const read = readRegularFile(abs);
+    if (!read.ok) return read;
+    bytes = read.bytes;
+  } catch (e) {
+    return { ok: false, error: `cannot be read (${e.code ?? String(e)})` };
+  }
+  if (bytes.includes(0)) return { ok: false, error: "is a binary file, not text" };
+  let text;
+  try {
+    text = UTF8.decode(bytes);
+  } catch {
+    return { ok: false, error: "is not valid UTF-8 text" };
+  }
+  return { ok: true, text: text.startsWith("\uFEFF") ? text.slice(1) : text };
+}
+function relativeTo(root, abs) {
+  if (abs.startsWith(root) && abs[root.length] === sep && !abs.includes(`${sep}.`) && !abs.endsWith(sep)) {
+    const rest = abs.slice(root.length + 1);
+    if (rest !== "" && !rest.includes(`${sep}${sep}`)) return sep === "/" ? rest : rest.split(sep).join("/");
+  }
+  return relative(root, abs).split(sep).join("/");
+}
+function escapes(root, abs) {
+  const rel = relative(root, abs);
+  return rel === ".." || rel.startsWith(`..${sep}`) || isAbsolute(rel);
+}
+function resolveInside(root, fromDir, path) {
+  if (isAbsolute(path) || /^[a-zA-Z]:[\\/]/.test(path) || path.startsWith("\\") || path.startsWith("~")) {
+    return { ok: false, error: `'${path}' is an absolute path; give a path relative to the record file` };
+  }
+  if (path.includes("\0")) return { ok: false, error: "the path contains a NUL character" };
+  const abs = resolve(fromDir, path);
+  if (escapes(root, abs)) return { ok: false, error: `'${path}' leaves the registry folder` };
+  let real;
+  try {
+    real = realpathSync(abs);
+  } catch {
+    return { ok: false, error: `'${path}' does not exist (looked for ${relativeTo(root, abs)})` };
+  }
+  if (escapes(root, real))
+    return { ok: false, error: `'${path}' is a link to a place outside the registry folder` };
+  return { ok: true, abs: real, rel: relativeTo(root, abs) };
+}
+var MAX_FILE_BYTES, UTF8, OPEN_FLAGS;
+var init_files = __esm({
+  "src/registry/files.ts"() {
+    "use strict";
+    MAX_FILE_BYTES = 8 * 1024 * 1024;
+    UTF8 = new TextDecoder("utf-8", { fatal: true });
+    OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
   }
 });
 
@@ -4047,10 +4772,10 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key: key3, sep, value } = collItem;
+        const { start, key: key3, sep: sep2, value } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
-          next: key3 ?? sep?.[0],
+          next: key3 ?? sep2?.[0],
           offset,
           onError,
           parentIndent: bm.indent,
@@ -4064,7 +4789,7 @@ var require_resolve_block_map = __commonJS({
             else if ("indent" in key3 && key3.indent !== bm.indent)
               onError(offset, "BAD_INDENT", startColMsg);
           }
-          if (!keyProps.anchor && !keyProps.tag && !sep) {
+          if (!keyProps.anchor && !keyProps.tag && !sep2) {
             commentEnd = keyProps.end;
             if (keyProps.comment) {
               if (map.comment)
@@ -4088,7 +4813,7 @@ var require_resolve_block_map = __commonJS({
         ctx.atKey = false;
         if (utilMapIncludes.mapIncludes(ctx, map.items, keyNode))
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
-        const valueProps = resolveProps.resolveProps(sep ?? [], {
+        const valueProps = resolveProps.resolveProps(sep2 ?? [], {
           indicator: "map-value-ind",
           next: value,
           offset: keyNode.range[2],
@@ -4104,7 +4829,7 @@ var require_resolve_block_map = __commonJS({
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep, null, valueProps, onError);
+          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep2, null, valueProps, onError);
           if (ctx.schema.compat)
             utilFlowIndentCheck.flowIndentCheck(bm.indent, value, onError);
           offset = valueNode.range[2];
@@ -4195,7 +4920,7 @@ var require_resolve_end = __commonJS({
       let comment = "";
       if (end) {
         let hasSpace = false;
-        let sep = "";
+        let sep2 = "";
         for (const token of end) {
           const { source, type } = token;
           switch (type) {
@@ -4209,13 +4934,13 @@ var require_resolve_end = __commonJS({
               if (!comment)
                 comment = cb;
               else
-                comment += sep + cb;
-              sep = "";
+                comment += sep2 + cb;
+              sep2 = "";
               break;
             }
             case "newline":
               if (comment)
-                sep += source;
+                sep2 += source;
               hasSpace = true;
               break;
             default:
@@ -4258,18 +4983,18 @@ var require_resolve_flow_collection = __commonJS({
       let offset = fc.offset + fc.start.source.length;
       for (let i = 0; i < fc.items.length; ++i) {
         const collItem = fc.items[i];
-        const { start, key: key3, sep, value } = collItem;
+        const { start, key: key3, sep: sep2, value } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
-          next: key3 ?? sep?.[0],
+          next: key3 ?? sep2?.[0],
           offset,
           onError,
           parentIndent: fc.indent,
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep && !value) {
+          if (!props.anchor && !props.tag && !sep2 && !value) {
             if (i === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
             else if (i < fc.items.length - 1)
@@ -4323,8 +5048,8 @@ var require_resolve_flow_collection = __commonJS({
             }
           }
         }
-        if (!isMap2 && !sep && !props.found) {
-          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep, null, props, onError);
+        if (!isMap2 && !sep2 && !props.found) {
+          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep2, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
           if (isBlock(value))
@@ -4336,7 +5061,7 @@ var require_resolve_flow_collection = __commonJS({
           if (isBlock(key3))
             onError(keyNode.range, "BLOCK_IN_FLOW", blockMsg);
           ctx.atKey = false;
-          const valueProps = resolveProps.resolveProps(sep ?? [], {
+          const valueProps = resolveProps.resolveProps(sep2 ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
             next: value,
@@ -4347,8 +5072,8 @@ var require_resolve_flow_collection = __commonJS({
           });
           if (valueProps.found) {
             if (!isMap2 && !props.found && ctx.options.strict) {
-              if (sep)
-                for (const st of sep) {
+              if (sep2)
+                for (const st of sep2) {
                   if (st === valueProps.found)
                     break;
                   if (st.type === "newline") {
@@ -4365,7 +5090,7 @@ var require_resolve_flow_collection = __commonJS({
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep, null, valueProps, onError) : null;
+          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep2, null, valueProps, onError) : null;
           if (valueNode) {
             if (isBlock(value))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
@@ -4494,13 +5219,13 @@ var require_resolve_block_scalar = __commonJS({
   "node_modules/yaml/dist/compose/resolve-block-scalar.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
-    function resolveBlockScalar(ctx, scalar, onError) {
-      const start = scalar.offset;
-      const header = parseBlockScalarHeader(scalar, ctx.options.strict, onError);
+    function resolveBlockScalar(ctx, scalar2, onError) {
+      const start = scalar2.offset;
+      const header = parseBlockScalarHeader(scalar2, ctx.options.strict, onError);
       if (!header)
         return { value: "", type: null, comment: "", range: [start, start, start] };
       const type = header.mode === ">" ? Scalar.Scalar.BLOCK_FOLDED : Scalar.Scalar.BLOCK_LITERAL;
-      const lines = scalar.source ? splitLines2(scalar.source) : [];
+      const lines = scalar2.source ? splitLines2(scalar2.source) : [];
       let chompStart = lines.length;
       for (let i = lines.length - 1; i >= 0; --i) {
         const content = lines[i][1];
@@ -4512,12 +5237,12 @@ var require_resolve_block_scalar = __commonJS({
       if (chompStart === 0) {
         const value2 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
         let end2 = start + header.length;
-        if (scalar.source)
-          end2 += scalar.source.length;
+        if (scalar2.source)
+          end2 += scalar2.source.length;
         return { value: value2, type, comment: header.comment, range: [start, end2, end2] };
       }
-      let trimIndent = scalar.indent + header.indent;
-      let offset = scalar.offset + header.length;
+      let trimIndent = scalar2.indent + header.indent;
+      let offset = scalar2.offset + header.length;
       let contentStart = 0;
       for (let i = 0; i < chompStart; ++i) {
         const [indent, content] = lines[i];
@@ -4545,7 +5270,7 @@ var require_resolve_block_scalar = __commonJS({
           chompStart = i + 1;
       }
       let value = "";
-      let sep = "";
+      let sep2 = "";
       let prevMoreIndented = false;
       for (let i = 0; i < contentStart; ++i)
         value += lines[i][0].slice(trimIndent) + "\n";
@@ -4562,24 +5287,24 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value += sep + indent.slice(trimIndent) + content;
-          sep = "\n";
+          value += sep2 + indent.slice(trimIndent) + content;
+          sep2 = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
-          if (sep === " ")
-            sep = "\n";
-          else if (!prevMoreIndented && sep === "\n")
-            sep = "\n\n";
-          value += sep + indent.slice(trimIndent) + content;
-          sep = "\n";
+          if (sep2 === " ")
+            sep2 = "\n";
+          else if (!prevMoreIndented && sep2 === "\n")
+            sep2 = "\n\n";
+          value += sep2 + indent.slice(trimIndent) + content;
+          sep2 = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
-          if (sep === "\n")
+          if (sep2 === "\n")
             value += "\n";
           else
-            sep = "\n";
+            sep2 = "\n";
         } else {
-          value += sep + content;
-          sep = " ";
+          value += sep2 + content;
+          sep2 = " ";
           prevMoreIndented = false;
         }
       }
@@ -4595,7 +5320,7 @@ var require_resolve_block_scalar = __commonJS({
         default:
           value += "\n";
       }
-      const end = start + header.length + scalar.source.length;
+      const end = start + header.length + scalar2.source.length;
       return { value, type, comment: header.comment, range: [start, end, end] };
     }
     function parseBlockScalarHeader({ offset, props }, strict, onError) {
@@ -4678,8 +5403,8 @@ var require_resolve_flow_scalar = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var resolveEnd = require_resolve_end();
-    function resolveFlowScalar(scalar, strict, onError) {
-      const { offset, type, source, end } = scalar;
+    function resolveFlowScalar(scalar2, strict, onError) {
+      const { offset, type, source, end } = scalar2;
       let _type;
       let value;
       const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
@@ -4698,7 +5423,7 @@ var require_resolve_flow_scalar = __commonJS({
           break;
         /* istanbul ignore next should not happen */
         default:
-          onError(scalar, "UNEXPECTED_TOKEN", `Expected a flow scalar value, but found: ${type}`);
+          onError(scalar2, "UNEXPECTED_TOKEN", `Expected a flow scalar value, but found: ${type}`);
           return {
             value: "",
             type: null,
@@ -4762,25 +5487,25 @@ var require_resolve_flow_scalar = __commonJS({
         trimBoth = /^[ \t]+|[ \t]+$/g;
       }
       let res = match[1].replace(trimEnd, "");
-      let sep = " ";
+      let sep2 = " ";
       let pos = line.lastIndex;
       while (match = line.exec(source)) {
         const lm = match[1].replace(trimBoth, "");
         if (lm === "") {
-          if (sep === "\n")
-            res += sep;
+          if (sep2 === "\n")
+            res += sep2;
           else
-            sep = "\n";
+            sep2 = "\n";
         } else {
-          res += sep + lm;
-          sep = " ";
+          res += sep2 + lm;
+          sep2 = " ";
         }
         pos = line.lastIndex;
       }
       const last = /[ \t]*(.*)/sy;
       last.lastIndex = pos;
       match = last.exec(source);
-      return res + sep + (match?.[1] ?? "");
+      return res + sep2 + (match?.[1] ?? "");
     }
     function doubleQuotedValue(source, onError) {
       let res = "";
@@ -4913,26 +5638,26 @@ var require_compose_scalar = __commonJS({
         tag = findScalarTagByTest(ctx, value, token, onError);
       else
         tag = ctx.schema[identity.SCALAR];
-      let scalar;
+      let scalar2;
       try {
         const res = tag.resolve(value, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
-        scalar = identity.isScalar(res) ? res : new Scalar.Scalar(res);
+        scalar2 = identity.isScalar(res) ? res : new Scalar.Scalar(res);
       } catch (error) {
         const msg = error instanceof Error ? error.message : String(error);
         onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg);
-        scalar = new Scalar.Scalar(value);
+        scalar2 = new Scalar.Scalar(value);
       }
-      scalar.range = range;
-      scalar.source = value;
+      scalar2.range = range;
+      scalar2.source = value;
       if (type)
-        scalar.type = type;
+        scalar2.type = type;
       if (tagName)
-        scalar.tag = tagName;
+        scalar2.tag = tagName;
       if (tag.format)
-        scalar.format = tag.format;
+        scalar2.format = tag.format;
       if (comment)
-        scalar.comment = comment;
-      return scalar;
+        scalar2.comment = comment;
+      return scalar2;
     }
     function findScalarTagByName(schema, value, tagName, tagToken, onError) {
       if (tagName === "!")
@@ -5590,14 +6315,14 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key: key3, sep, value }) {
+    function stringifyItem({ start, key: key3, sep: sep2, value }) {
       let res = "";
       for (const st of start)
         res += st.source;
       if (key3)
         res += stringifyToken(key3);
-      if (sep)
-        for (const st of sep)
+      if (sep2)
+        for (const st of sep2)
           res += st.source;
       if (value)
         res += stringifyToken(value);
@@ -6089,9 +6814,9 @@ var require_lexer = __commonJS({
         }
       }
       *parseQuotedScalar() {
-        const quote = this.charAt(0);
-        let end = this.buffer.indexOf(quote, this.pos + 1);
-        if (quote === "'") {
+        const quote2 = this.charAt(0);
+        let end = this.buffer.indexOf(quote2, this.pos + 1);
+        if (quote2 === "'") {
           while (end !== -1 && this.buffer[end + 1] === "'")
             end = this.buffer.indexOf("'", end + 2);
         } else {
@@ -6760,37 +7485,37 @@ var require_parser = __commonJS({
           };
         }
       }
-      *scalar(scalar) {
+      *scalar(scalar2) {
         if (this.type === "map-value-ind") {
           const prev = getPrevProps(this.peek(2));
           const start = getFirstKeyStartProps(prev);
-          let sep;
-          if (scalar.end) {
-            sep = scalar.end;
-            sep.push(this.sourceToken);
-            delete scalar.end;
+          let sep2;
+          if (scalar2.end) {
+            sep2 = scalar2.end;
+            sep2.push(this.sourceToken);
+            delete scalar2.end;
           } else
-            sep = [this.sourceToken];
+            sep2 = [this.sourceToken];
           const map = {
             type: "block-map",
-            offset: scalar.offset,
-            indent: scalar.indent,
-            items: [{ start, key: scalar, sep }]
+            offset: scalar2.offset,
+            indent: scalar2.indent,
+            items: [{ start, key: scalar2, sep: sep2 }]
           };
           this.onKeyLine = true;
           this.stack[this.stack.length - 1] = map;
         } else
-          yield* this.lineEnd(scalar);
+          yield* this.lineEnd(scalar2);
       }
-      *blockScalar(scalar) {
+      *blockScalar(scalar2) {
         switch (this.type) {
           case "space":
           case "comment":
           case "newline":
-            scalar.props.push(this.sourceToken);
+            scalar2.props.push(this.sourceToken);
             return;
           case "scalar":
-            scalar.source = this.source;
+            scalar2.source = this.source;
             this.atNewLine = true;
             this.indent = 0;
             if (this.onNewLine) {
@@ -6928,15 +7653,15 @@ var require_parser = __commonJS({
                 } else if (isFlowToken(it.key) && !includesToken(it.sep, "newline")) {
                   const start2 = getFirstKeyStartProps(it.start);
                   const key3 = it.key;
-                  const sep = it.sep;
-                  sep.push(this.sourceToken);
+                  const sep2 = it.sep;
+                  sep2.push(this.sourceToken);
                   delete it.key;
                   delete it.sep;
                   this.stack.push({
                     type: "block-map",
                     offset: this.offset,
                     indent: this.indent,
-                    items: [{ start: start2, key: key3, sep }]
+                    items: [{ start: start2, key: key3, sep: sep2 }]
                   });
                 } else if (start.length > 0) {
                   it.sep = it.sep.concat(start, this.sourceToken);
@@ -7130,13 +7855,13 @@ var require_parser = __commonJS({
             const prev = getPrevProps(parent);
             const start = getFirstKeyStartProps(prev);
             fixFlowSeqItems(fc);
-            const sep = fc.end.splice(1, fc.end.length);
-            sep.push(this.sourceToken);
+            const sep2 = fc.end.splice(1, fc.end.length);
+            sep2.push(this.sourceToken);
             const map = {
               type: "block-map",
               offset: fc.offset,
               indent: fc.indent,
-              items: [{ start, key: fc, sep }]
+              items: [{ start, key: fc, sep: sep2 }]
             };
             this.onKeyLine = true;
             this.stack[this.stack.length - 1] = map;
@@ -7411,6 +8136,279 @@ var require_dist = __commonJS({
     exports.stringify = publicApi.stringify;
     exports.visit = visit2.visit;
     exports.visitAsync = visit2.visitAsync;
+  }
+});
+
+// src/registry/positions.ts
+function lineOf(positions2, path) {
+  if (path === null) return null;
+  let p = path;
+  for (; ; ) {
+    const pos = positions2.get(p);
+    if (pos) return pos.line;
+    if (p === "") return null;
+    const cut = p.lastIndexOf(".");
+    p = cut < 0 ? "" : p.slice(0, cut);
+  }
+}
+function keyText(key3) {
+  if ((0, import_yaml.isScalar)(key3)) return String(key3.value);
+  return String(key3);
+}
+function positionsOf(doc, counter) {
+  const positions2 = new PositionMap();
+  const put = (path, node) => {
+    const start = node?.range?.[0];
+    if (start === void 0) return;
+    const { line, col } = counter.linePos(start);
+    positions2.set(path, { line, column: col });
+  };
+  const walk = (node, path, depth) => {
+    if (depth > 64) return;
+    if ((0, import_yaml.isMap)(node)) {
+      for (const pair of node.items) {
+        const childPath = path === "" ? keyText(pair.key) : `${path}.${keyText(pair.key)}`;
+        put(childPath, pair.key ?? pair.value);
+        walk(pair.value, childPath, depth + 1);
+      }
+    } else if ((0, import_yaml.isSeq)(node)) {
+      node.items.forEach((item, i) => {
+        const childPath = path === "" ? String(i) : `${path}.${i}`;
+        put(childPath, item);
+        walk(item, childPath, depth + 1);
+      });
+    }
+  };
+  put("", doc.contents);
+  if (positions2.get("") === void 0) positions2.set("", { line: 1, column: 1 });
+  walk(doc.contents, "", 0);
+  return positions2;
+}
+var import_yaml, PositionMap, NO_POSITIONS;
+var init_positions = __esm({
+  "src/registry/positions.ts"() {
+    "use strict";
+    import_yaml = __toESM(require_dist(), 1);
+    PositionMap = class {
+      map = /* @__PURE__ */ new Map();
+      set(path, pos) {
+        if (!this.map.has(path)) this.map.set(path, pos);
+      }
+      get(path) {
+        return this.map.get(path);
+      }
+      /** The line of `path`, else of its nearest ancestor that exists (a missing field points at its parent). */
+      lineOf(path) {
+        return lineOf(this, path);
+      }
+      get size() {
+        return this.map.size;
+      }
+      /** Every known path with its position, in document order. */
+      entries() {
+        return [...this.map];
+      }
+    };
+    NO_POSITIONS = { get: () => void 0 };
+  }
+});
+
+// src/registry/quick-yaml.ts
+function fail() {
+  throw new NotPlain();
+}
+function quoted(text, start) {
+  const q = text[start];
+  let out = "";
+  let i = start + 1;
+  for (; ; ) {
+    if (i >= text.length) fail();
+    const ch = text[i];
+    if (ch === q) {
+      if (q === '"' || text[i + 1] !== "'") break;
+      out += "'";
+      i += 2;
+    } else if (ch === "\\" && q === '"') {
+      const next = text[i + 1];
+      if (next !== "\\" && next !== '"') fail();
+      out += next;
+      i += 2;
+    } else {
+      out += ch;
+      i++;
+    }
+  }
+  return { value: out, end: i + 1 };
+}
+function resolvePlain(plain) {
+  if (plain === "" || BAD_START.test(plain) || plain.includes(": ") || plain.endsWith(":")) fail();
+  if (NULL.test(plain)) return null;
+  if (TRUE.test(plain)) return true;
+  if (FALSE.test(plain)) return false;
+  if (INT.test(plain)) return parseInt(plain, 10);
+  if (FLOAT.test(plain) || FLOAT_EXP.test(plain)) return parseFloat(plain);
+  if (OTHER_NUMBER.test(plain)) fail();
+  return plain;
+}
+function scalar(text) {
+  if (text[0] === '"' || text[0] === "'") {
+    const q = quoted(text, 0);
+    trailing(text.slice(q.end));
+    return q.value;
+  }
+  const hash = text.indexOf(" #");
+  return resolvePlain((hash < 0 ? text : text.slice(0, hash)).replace(/ +$/, ""));
+}
+function flowList(text, at2) {
+  const out = [];
+  let i = 1;
+  const spaces = () => {
+    while (text[i] === " ") i++;
+  };
+  spaces();
+  if (text[i] === "]") {
+    trailing(text.slice(i + 1));
+    return out;
+  }
+  for (; ; ) {
+    spaces();
+    at2(out.length, i);
+    const c = text[i];
+    if (c === '"' || c === "'") {
+      const q = quoted(text, i);
+      out.push(q.value);
+      i = q.end;
+    } else {
+      let j = i;
+      while (j < text.length && !",[]{}".includes(text[j])) j++;
+      const plain = text.slice(i, j).replace(/ +$/, "");
+      if (plain.includes(":") || plain.includes(" #")) fail();
+      out.push(resolvePlain(plain));
+      i = j;
+    }
+    spaces();
+    if (text[i] === "]") break;
+    if (text[i] !== ",") fail();
+    i++;
+    spaces();
+    if (text[i] === "]") fail();
+  }
+  trailing(text.slice(i + 1));
+  return out;
+}
+function trailing(rest) {
+  const t = rest.replace(/^ +/, "");
+  if (t !== "" && !(t.startsWith("#") && t.length < rest.length)) fail();
+}
+function contentLines(text) {
+  if (text.includes("	") || text.includes("\r") || CONTROL.test(text)) return null;
+  const lines = [];
+  const raw2 = text.split("\n");
+  for (let k = 0; k < raw2.length; k++) {
+    const s = raw2[k];
+    let indent = 0;
+    while (s.charCodeAt(indent) === 32) indent++;
+    if (indent === s.length || s[indent] === "#") continue;
+    if (indent === 0 && (s.startsWith("---") || s.startsWith("...") || s.startsWith("%"))) return null;
+    lines.push({ no: k + 1, indent, text: s.slice(indent) });
+  }
+  return lines;
+}
+function quickParse(text) {
+  const lines = contentLines(text);
+  if (lines === null || lines.length === 0 || lines[0].indent !== 0) return null;
+  const positions2 = new PositionMap();
+  let at2 = 0;
+  const put = (path, line, column) => positions2.set(path, { line: line.no, column });
+  const mapping = (indent, path, firstText) => {
+    const out = {};
+    const seen = /* @__PURE__ */ new Set();
+    let first = firstText !== void 0;
+    while (at2 < lines.length) {
+      const line = lines[at2];
+      const body = first ? firstText : line.text;
+      if (!first) {
+        if (line.indent < indent) break;
+        if (line.indent > indent) fail();
+      }
+      first = false;
+      const m = KEY.exec(body);
+      if (!m) fail();
+      const key3 = m[0];
+      if (NOT_STRING_KEY.test(key3) || seen.has(key3) || key3.length > 1e3) fail();
+      seen.add(key3);
+      const childPath = path === "" ? key3 : `${path}.${key3}`;
+      put(childPath, line, indent + 1);
+      at2++;
+      const rest = body.slice(key3.length + 1).replace(/^ +/, "");
+      if (rest.startsWith("[")) {
+        const restColumn = indent + body.length - rest.length;
+        out[key3] = flowList(rest, (i, offset) => put(`${childPath}.${i}`, line, restColumn + offset + 1));
+        continue;
+      }
+      if (rest !== "" && !rest.startsWith("#")) {
+        out[key3] = scalar(rest);
+        continue;
+      }
+      const next = lines[at2];
+      if (next && next.indent > indent) out[key3] = block(next.indent, childPath);
+      else if (next && next.indent === indent && isItem(next.text)) out[key3] = list(indent, childPath);
+      else out[key3] = null;
+    }
+    return out;
+  };
+  const isItem = (t) => t === "-" || t.startsWith("- ");
+  const list = (indent, path) => {
+    const out = [];
+    while (at2 < lines.length) {
+      const line = lines[at2];
+      if (line.indent < indent) break;
+      if (line.indent > indent) fail();
+      if (!isItem(line.text)) break;
+      const itemPath = path === "" ? String(out.length) : `${path}.${out.length}`;
+      let gap = 1;
+      while (line.text.charCodeAt(gap) === 32) gap++;
+      const body = line.text.slice(gap);
+      if (body === "" || body.startsWith("#") || isItem(body)) fail();
+      const column = indent + gap;
+      put(itemPath, line, column + 1);
+      if (KEY.test(body)) out.push(mapping(column, itemPath, body));
+      else {
+        out.push(scalar(body));
+        at2++;
+      }
+    }
+    return out;
+  };
+  const block = (indent, path) => isItem(lines[at2].text) ? list(indent, path) : mapping(indent, path);
+  try {
+    put("", lines[0], 1);
+    const value = mapping(0, "");
+    if (at2 !== lines.length) return null;
+    return { value, positions: positions2 };
+  } catch (e) {
+    if (e instanceof NotPlain) return null;
+    throw e;
+  }
+}
+var NotPlain, KEY, NOT_STRING_KEY, NULL, TRUE, FALSE, INT, FLOAT, FLOAT_EXP, OTHER_NUMBER, BAD_START, CONTROL;
+var init_quick_yaml = __esm({
+  "src/registry/quick-yaml.ts"() {
+    "use strict";
+    init_positions();
+    NotPlain = class extends Error {
+    };
+    KEY = /^[A-Za-z][A-Za-z0-9_-]*(?=:(?: |$))/;
+    NOT_STRING_KEY = /^(?:[Nn]ull|NULL|[Tt]rue|TRUE|[Ff]alse|FALSE)$/;
+    NULL = /^(?:~|[Nn]ull|NULL)$/;
+    TRUE = /^(?:[Tt]rue|TRUE)$/;
+    FALSE = /^(?:[Ff]alse|FALSE)$/;
+    INT = /^[-+]?[0-9]+$/;
+    FLOAT = /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/;
+    FLOAT_EXP = /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/;
+    OTHER_NUMBER = /^(?:0o|0x|[-+]?\.(?:inf|Inf|INF)$|\.(?:nan|NaN|NAN)$)/;
+    BAD_START = /^(?:[-?:](?![0-9.])|[,[\]{}#&*!|>'"%@`])/;
+    CONTROL = /[\x00-\x08\x0b-\x1f\x7f-\x9f\u2028\u2029\ufeff\ufffe\uffff]/;
   }
 });
 
@@ -10365,7 +11363,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve.call(this, root, ref);
+      let _sch = resolve2.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -10392,7 +11390,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve(root, ref) {
+    function resolve2(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -11256,7 +12254,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve(baseURI, relativeURI, options) {
+    function resolve2(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -11292,50 +12290,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative, options, skipNormalization) {
+    function resolveComponent(base, relative2, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
         base = parse2(serialize(base, options), options);
-        relative = parse2(serialize(relative, options), options);
+        relative2 = parse2(serialize(relative2, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative.scheme) {
-        target.scheme = relative.scheme;
-        target.userinfo = relative.userinfo;
-        target.host = relative.host;
-        target.port = relative.port;
-        target.path = removeDotSegments(relative.path || "");
-        target.query = relative.query;
+      if (!options.tolerant && relative2.scheme) {
+        target.scheme = relative2.scheme;
+        target.userinfo = relative2.userinfo;
+        target.host = relative2.host;
+        target.port = relative2.port;
+        target.path = removeDotSegments(relative2.path || "");
+        target.query = relative2.query;
       } else {
-        if (relative.userinfo !== void 0 || relative.host !== void 0 || relative.port !== void 0) {
-          target.userinfo = relative.userinfo;
-          target.host = relative.host;
-          target.port = relative.port;
-          target.path = removeDotSegments(relative.path || "");
-          target.query = relative.query;
+        if (relative2.userinfo !== void 0 || relative2.host !== void 0 || relative2.port !== void 0) {
+          target.userinfo = relative2.userinfo;
+          target.host = relative2.host;
+          target.port = relative2.port;
+          target.path = removeDotSegments(relative2.path || "");
+          target.query = relative2.query;
         } else {
-          if (!relative.path) {
+          if (!relative2.path) {
             target.path = base.path;
-            if (relative.query !== void 0) {
-              target.query = relative.query;
+            if (relative2.query !== void 0) {
+              target.query = relative2.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative.path[0] === "/") {
-              target.path = removeDotSegments(relative.path);
+            if (relative2.path[0] === "/") {
+              target.path = removeDotSegments(relative2.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative.path;
+                target.path = "/" + relative2.path;
               } else if (!base.path) {
-                target.path = relative.path;
+                target.path = relative2.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative2.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative.query;
+            target.query = relative2.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -11343,7 +12341,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative.fragment;
+      target.fragment = relative2.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -11647,7 +12645,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize: normalize2,
-      resolve,
+      resolve: resolve2,
       resolveComponent,
       equal,
       serialize,
@@ -14319,6 +15317,652 @@ var require_ajv = __commonJS({
   }
 });
 
+// schema/record.schema.json
+var record_schema_default;
+var init_record_schema = __esm({
+  "schema/record.schema.json"() {
+    record_schema_default = {
+      $schema: "http://json-schema.org/draft-07/schema#",
+      $id: "https://stereogate.invalid/schema/record.schema.json",
+      title: "stereogate compound record",
+      description: "One compound of a registry: its structure and the stereochemical claim made about it. YAML or JSON, one record per file.",
+      type: "object",
+      required: ["id", "structure", "stereo"],
+      additionalProperties: false,
+      properties: {
+        id: {
+          description: "Registry number, unique in the registry, e.g. LX-00042.",
+          type: "string",
+          minLength: 1,
+          maxLength: 200,
+          pattern: "^\\S(.*\\S)?$"
+        },
+        name: { description: "Free-text name.", type: "string" },
+        structure: { $ref: "#/definitions/structureRef" },
+        stereo: {
+          type: "object",
+          required: ["form"],
+          additionalProperties: false,
+          properties: {
+            form: {
+              description: "The stereochemical form claimed for the registered substance.",
+              enum: [
+                "achiral",
+                "meso",
+                "single-enantiomer",
+                "enantioenriched",
+                "racemate",
+                "single-diastereomer",
+                "diastereomer-mixture",
+                "unknown"
+              ]
+            },
+            descriptors: {
+              description: "IUPAC stereodescriptors, e.g. (2R,3S) or rac-(1R,2S).",
+              type: "string"
+            },
+            ee: {
+              description: "Enantiomeric excess in percent.",
+              type: "number",
+              minimum: 0,
+              maximum: 100
+            },
+            ratio: {
+              description: "Component ratio in the order of components, e.g. 70:30.",
+              type: "string"
+            },
+            components: {
+              description: "The stereoisomers a mixture consists of (at most 50).",
+              type: "array",
+              maxItems: 50,
+              items: { $ref: "#/definitions/component" }
+            },
+            rotation: {
+              description: "Specific rotation as measured.",
+              type: "object",
+              required: ["value"],
+              additionalProperties: false,
+              properties: {
+                value: { description: "Degrees; the sign matters.", type: "number" },
+                wavelength_nm: { type: "number", exclusiveMinimum: 0 },
+                temperature_c: { type: "number", minimum: -273.15 },
+                solvent: { type: "string" },
+                concentration: { description: "g/100 mL.", type: "number", exclusiveMinimum: 0 }
+              }
+            },
+            evidence: {
+              description: "Analytical evidence for the claim, free text per item.",
+              type: "array",
+              items: { type: "string" }
+            }
+          }
+        },
+        origin: {
+          description: "How the compound was made: the inputs it came from and what, if anything, made the outcome stereoselective or changed the ee.",
+          type: "object",
+          required: ["from"],
+          additionalProperties: false,
+          properties: {
+            from: {
+              description: "Inputs: registered ids (e.g. LX-00012) or, for inputs not registered, SMILES.",
+              type: "array",
+              minItems: 1,
+              maxItems: 20,
+              items: { type: "string", minLength: 1, maxLength: 2e3 }
+            },
+            control: {
+              description: "What made the outcome stereoselective or changed the ee; 'none' when nothing chiral was present. Not given: unknown.",
+              enum: [
+                "none",
+                "chiral-catalyst",
+                "chiral-reagent",
+                "chiral-auxiliary",
+                "biocatalyst",
+                "resolution",
+                "chiral-separation",
+                "enrichment",
+                "unknown"
+              ]
+            }
+          }
+        },
+        waivers: {
+          description: "Findings the responsible chemist has accepted: each waiver names a check, and may narrow it to one message and/or one other record.",
+          type: "array",
+          items: {
+            type: "object",
+            required: ["check"],
+            additionalProperties: false,
+            properties: {
+              check: {
+                description: "Id of the check whose findings are accepted. Alone, the waiver accepts every finding of that check on this record.",
+                type: "string",
+                minLength: 1
+              },
+              message_id: {
+                description: "Accept only the findings with this message id of the check (e.g. enantiomer-registered).",
+                type: "string",
+                minLength: 1
+              },
+              other_record: {
+                description: "Accept only the findings about this other record: its id (e.g. LX-00123), or its file when it has no id.",
+                type: "string",
+                minLength: 1
+              },
+              reason: { type: "string" },
+              approved_by: { type: "string" }
+            }
+          }
+        }
+      },
+      definitions: {
+        structureRef: {
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            smiles: { type: "string", minLength: 1 },
+            molfile: {
+              description: "Path relative to the record file, inside the registry.",
+              type: "string",
+              minLength: 1
+            }
+          },
+          oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
+        },
+        component: {
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            smiles: { type: "string", minLength: 1 },
+            molfile: { type: "string", minLength: 1 },
+            descriptors: { type: "string" }
+          },
+          oneOf: [{ required: ["smiles"] }, { required: ["molfile"] }]
+        }
+      }
+    };
+  }
+});
+
+// src/registry/form-words.ts
+function formSynonym(word) {
+  const key3 = word.trim().toLowerCase().replace(/[\s_]+/g, "-");
+  return SYNONYMS[key3] ?? null;
+}
+var SYNONYMS;
+var init_form_words = __esm({
+  "src/registry/form-words.ts"() {
+    "use strict";
+    SYNONYMS = {
+      enantiopure: "single-enantiomer",
+      "enantiomerically-pure": "single-enantiomer",
+      "optically-pure": "single-enantiomer",
+      homochiral: "single-enantiomer",
+      "single-isomer": "single-enantiomer",
+      racemic: "racemate",
+      rac: "racemate",
+      "racemic-mixture": "racemate",
+      dl: "racemate",
+      "±": "racemate",
+      scalemic: "enantioenriched",
+      enriched: "enantioenriched",
+      "enantiomerically-enriched": "enantioenriched",
+      "partially-resolved": "enantioenriched",
+      diastereopure: "single-diastereomer",
+      "diastereomerically-pure": "single-diastereomer",
+      "diastereomeric-mixture": "diastereomer-mixture",
+      "mixture-of-diastereomers": "diastereomer-mixture",
+      "epimeric-mixture": "diastereomer-mixture",
+      "not-chiral": "achiral",
+      undefined: "unknown",
+      unspecified: "unknown",
+      "not-determined": "unknown"
+    };
+  }
+});
+
+// src/registry/schema.ts
+function validateRecordShape(value) {
+  recordValidator ??= ajv.compile(record_schema_default);
+  return recordValidator(value) ? [] : explain(recordValidator.errors ?? [], value, "record");
+}
+function pointerToPath(pointer) {
+  if (pointer === "") return "";
+  return pointer.slice(1).split("/").map((s) => s.replace(/~1/g, "/").replace(/~0/g, "~")).join(".");
+}
+function join2(path, key3) {
+  return path === "" ? key3 : `${path}.${key3}`;
+}
+function at(value, path) {
+  if (path === "") return value;
+  let cur = value;
+  for (const part of path.split(".")) {
+    if (cur === null || typeof cur !== "object") return void 0;
+    cur = cur[part];
+  }
+  return cur;
+}
+function kindOf(v) {
+  if (v === null) return "null";
+  if (Array.isArray(v)) return "a list";
+  if (typeof v === "object") return "a mapping";
+  if (typeof v === "string") return `the text ${quote(v)}`;
+  return `${typeof v} ${safeJson(v)}`;
+}
+function quote(v) {
+  const s = typeof v === "string" ? v : safeJson(v);
+  const short = s.length > 60 ? `${s.slice(0, 57)}...` : s;
+  return `'${short}'`;
+}
+function safeJson(v) {
+  try {
+    return JSON.stringify(v) ?? String(v);
+  } catch {
+    return Object.prototype.toString.call(v);
+  }
+}
+function allowedProperties(schemaNode) {
+  const props = schemaNode?.properties;
+  return props ? Object.keys(props) : [];
+}
+function explainOne(e, value, what) {
+  const path = pointerToPath(e.instancePath);
+  const label = path === "" ? `the ${what}` : path;
+  const got2 = at(value, path);
+  switch (e.keyword) {
+    case "required": {
+      const missing = String(e.params.missingProperty);
+      return {
+        path: join2(path, missing),
+        message: `${join2(path, missing)}: this field is required but missing`
+      };
+    }
+    case "additionalProperties": {
+      const extra = String(e.params.additionalProperty);
+      const allowed = allowedProperties(e.parentSchema);
+      const guess = closestWord(extra, allowed);
+      const hint = guess ? `; did you mean '${guess}'?` : allowed.length ? ` (allowed: ${allowed.join(", ")})` : "";
+      return {
+        path: join2(path, extra),
+        message: `${join2(path, extra)}: '${extra}' is not a field of ${path === "" ? `a ${what}` : path}${hint}`
+      };
+    }
+    case "enum": {
+      const allowed = (e.params.allowedValues ?? []).map(String);
+      const synonym = typeof got2 === "string" ? formSynonym(got2) : null;
+      const guess = synonym !== null && allowed.includes(synonym) ? synonym : typeof got2 === "string" ? closestWord(got2, allowed) : null;
+      const hint = guess ? `; did you mean '${guess}'?` : "";
+      return { path, message: `${label}: ${quote(got2)} is not one of ${allowed.join(", ")}${hint}` };
+    }
+    case "type": {
+      const want = String(e.params.type).split(",").map((t) => TYPE_WORDS[t] ?? t).join(" or ");
+      const props = allowedProperties(e.parentSchema);
+      const tip = want === "text" && (typeof got2 === "number" || typeof got2 === "boolean") ? " (put it in quotes)" : want === "a mapping of fields" && props.includes("smiles") && props.includes("molfile") ? " (write it as smiles: … or molfile: … on the next line, indented)" : "";
+      return { path, message: `${label}: must be ${want}, found ${kindOf(got2)}${tip}` };
+    }
+    case "minimum":
+    case "maximum":
+    case "exclusiveMinimum":
+    case "exclusiveMaximum": {
+      const limit = e.params.limit;
+      const words = {
+        minimum: "at least",
+        maximum: "at most",
+        exclusiveMinimum: "more than",
+        exclusiveMaximum: "less than"
+      };
+      return {
+        path,
+        message: `${label}: must be ${words[e.keyword]} ${limit}, found ${typeof got2 === "number" ? got2 : kindOf(got2)}`
+      };
+    }
+    case "minLength":
+      return { path, message: `${label}: must not be empty` };
+    case "maxLength":
+      return {
+        path,
+        message: `${label}: is too long (at most ${e.params.limit} characters)`
+      };
+    case "pattern":
+      return { path, message: `${label}: ${quote(got2)} must not start or end with spaces` };
+    case "maxItems": {
+      const n = Array.isArray(got2) ? got2.length : 0;
+      const limit = e.params.limit;
+      const advice = /components$/.test(path) ? "the record is not audited (split it into several records)" : "shorten the list";
+      return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
+    }
+    case "minItems":
+      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
+    case "oneOf": {
+      if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
+        return {
+          path,
+          message: `${label}: must be a mapping with smiles or molfile (e.g. smiles: CCO), found ${kindOf(got2)}`
+        };
+      }
+      const obj = got2;
+      const both = "smiles" in obj && "molfile" in obj;
+      return {
+        path,
+        message: `${label}: give exactly one of smiles or molfile (found ${both ? "both" : "neither"})`
+      };
+    }
+    default:
+      return { path, message: `${label}: ${e.message ?? "is not valid"}` };
+  }
+}
+function explain(errors, value, what) {
+  const oneOfPaths = errors.filter((e) => e.keyword === "oneOf").map((e) => e.schemaPath);
+  const wrongType = new Set(errors.filter((e) => e.keyword === "type").map((e) => e.instancePath));
+  const out = [];
+  const seen = /* @__PURE__ */ new Set();
+  for (const e of errors) {
+    if (oneOfPaths.some((p2) => e.schemaPath !== p2 && e.schemaPath.startsWith(`${p2}/`))) continue;
+    if (e.keyword === "oneOf" && wrongType.has(e.instancePath)) continue;
+    const p = explainOne(e, value, what);
+    if (!p || seen.has(p.message)) continue;
+    seen.add(p.message);
+    out.push({ ...p, code: PROBLEM_CODES[e.keyword] ?? "schema" });
+  }
+  return out;
+}
+var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, TYPE_WORDS;
+var init_schema = __esm({
+  "src/registry/schema.ts"() {
+    "use strict";
+    import_ajv = __toESM(require_ajv(), 1);
+    init_record_schema();
+    init_closest();
+    init_form_words();
+    PROBLEM_CODES = {
+      required: "missing-field",
+      additionalProperties: "unknown-field",
+      enum: "not-allowed-value",
+      type: "wrong-type",
+      minimum: "out-of-range",
+      maximum: "out-of-range",
+      exclusiveMinimum: "out-of-range",
+      exclusiveMaximum: "out-of-range",
+      minLength: "empty-value",
+      maxLength: "too-long",
+      pattern: "spaces-around",
+      minItems: "too-few-items",
+      maxItems: "too-many-items",
+      oneOf: "structure-choice"
+    };
+    AJV_OPTIONS = {
+      allErrors: true,
+      strict: true,
+      strictRequired: false,
+      allowUnionTypes: true,
+      verbose: true
+    };
+    ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
+    recordValidator = null;
+    TYPE_WORDS = {
+      string: "text",
+      number: "a number",
+      integer: "a whole number",
+      object: "a mapping of fields",
+      array: "a list",
+      boolean: "true or false"
+    };
+  }
+});
+
+// src/registry/parse.ts
+function parseDocumentText(raw2) {
+  const text = raw2.includes("\r") ? raw2.replace(/\r\n?/g, "\n") : raw2;
+  const quick = quickParse(text);
+  if (quick) return { value: quick.value, positions: quick.positions, problems: [] };
+  return parseFullText(text);
+}
+function parseFullText(text) {
+  const counter = new import_yaml2.LineCounter();
+  const doc = (0, import_yaml2.parseDocument)(text, {
+    lineCounter: counter,
+    prettyErrors: true,
+    uniqueKeys: true,
+    version: "1.2"
+  });
+  const positions2 = positionsOf(doc, counter);
+  const problems = [];
+  for (const err2 of doc.errors) {
+    const line = err2.linePos?.[0]?.line ?? counter.linePos(err2.pos[0]).line;
+    const first = err2.message.split("\n")[0] ?? err2.message;
+    problems.push({
+      path: "",
+      line,
+      code: "yaml-syntax",
+      message: `not valid YAML/JSON: ${first.replace(/ at line \d+, column \d+:?$/, "")}`
+    });
+  }
+  problems.push(...tagProblems(doc, counter));
+  if (problems.length > 0) return { value: null, positions: positions2, problems };
+  let value;
+  try {
+    value = doc.toJS({ maxAliasCount: 50 });
+  } catch (e) {
+    return {
+      value: null,
+      positions: positions2,
+      problems: [
+        { path: "", line: 1, code: "yaml-syntax", message: `cannot be read: ${e.message}` }
+      ]
+    };
+  }
+  return { value, positions: positions2, problems };
+}
+function tagProblems(doc, counter) {
+  const out = [];
+  const lineAt = (node) => counter.linePos(node?.range?.[0] ?? 0).line;
+  for (const w of doc.warnings) {
+    if (w.code !== "TAG_RESOLVE_FAILED" || !w.message.includes("tag:yaml.org,2002:")) continue;
+    const line = w.linePos?.[0]?.line ?? counter.linePos(w.pos[0]).line;
+    const first = (w.message.split("\n")[0] ?? w.message).replace("tag:yaml.org,2002:", "!!").replace(/ at line \d+, column \d+:?$/, "");
+    out.push({ path: "", line, code: "unknown-tag", message: `not plain YAML/JSON: ${first}` });
+  }
+  (0, import_yaml2.visit)(doc, {
+    Node(key3, node, path) {
+      const tag = node.tag;
+      if (tag !== void 0 && !PLAIN_TAGS.has(tag)) {
+        const parent = path[path.length - 1];
+        const at2 = key3 === "value" && (0, import_yaml2.isPair)(parent) && (0, import_yaml2.isNode)(parent.key) ? parent.key : node;
+        out.push({
+          path: "",
+          line: lineAt(at2),
+          code: "unknown-tag",
+          message: `the YAML tag ${tag.replace("tag:yaml.org,2002:", "!!")} is not allowed in a record (plain YAML/JSON values only)`
+        });
+      }
+    },
+    Pair(_key, pair) {
+      if (pair.key !== null && !(0, import_yaml2.isScalar)(pair.key)) {
+        out.push({
+          path: "",
+          line: lineAt(pair.key),
+          code: "yaml-syntax",
+          message: "not valid here: a field name must be a plain word, not a list or mapping"
+        });
+      }
+    }
+  });
+  return out;
+}
+function parseRecordText(text) {
+  const parsed = parseDocumentText(text);
+  const { value, positions: positions2 } = parsed;
+  if (parsed.problems.length > 0)
+    return { value, record: null, id: null, positions: positions2, problems: parsed.problems };
+  if (value === null || value === void 0) {
+    return {
+      value,
+      record: null,
+      id: null,
+      positions: positions2,
+      problems: [{ path: "", line: 1, code: "empty-file", message: "the file is empty" }]
+    };
+  }
+  const id = typeof value === "object" && !Array.isArray(value) && typeof value.id === "string" ? value.id.trim() || null : null;
+  const shape = validateRecordShape(value);
+  const problems = shape.map((p) => ({
+    path: p.path,
+    message: p.message,
+    line: lineOf(positions2, p.path),
+    code: p.code
+  }));
+  problems.sort((a, b) => (a.line ?? 0) - (b.line ?? 0));
+  return { value, record: problems.length === 0 ? value : null, id, positions: positions2, problems };
+}
+var import_yaml2, PLAIN_TAGS;
+var init_parse = __esm({
+  "src/registry/parse.ts"() {
+    "use strict";
+    import_yaml2 = __toESM(require_dist(), 1);
+    init_positions();
+    init_quick_yaml();
+    init_schema();
+    PLAIN_TAGS = new Set(
+      ["str", "int", "float", "bool", "null", "map", "seq"].map((t) => `tag:yaml.org,2002:${t}`)
+    );
+  }
+});
+
+// src/registry/load.ts
+import { dirname } from "node:path";
+function loadRecordFile(realRoot, abs) {
+  try {
+    return loadRecordFileOrThrow(realRoot, abs);
+  } catch (e) {
+    return {
+      file: relativeTo(realRoot, abs),
+      id: null,
+      record: null,
+      positions: NO_POSITIONS,
+      problems: [
+        {
+          path: "",
+          line: null,
+          code: "internal-error",
+          message: `the record file could not be read because of an internal error in stereogate (${e?.message ?? String(e)}); please report it with the file`
+        }
+      ],
+      origin: { kind: "file" }
+    };
+  }
+}
+function loadRecordFileOrThrow(realRoot, abs) {
+  const file = relativeTo(realRoot, abs);
+  const read = readTextFile(abs);
+  if (!read.ok) {
+    return {
+      file,
+      id: null,
+      record: null,
+      positions: NO_POSITIONS,
+      problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${read.error}` }],
+      origin: { kind: "file" }
+    };
+  }
+  const parsed = parseRecordText(read.text);
+  const loaded = {
+    file,
+    id: parsed.id,
+    record: parsed.record,
+    positions: parsed.positions,
+    problems: parsed.problems,
+    origin: { kind: "file" }
+  };
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  return loaded;
+}
+function asObject(v) {
+  return v !== null && typeof v === "object" && !Array.isArray(v) ? v : null;
+}
+function sourceOf(ref, field2, fetchMolfile) {
+  if (!ref) return null;
+  if (typeof ref.smiles === "string" && typeof ref.molfile !== "string") {
+    return { field: field2, format: "smiles", text: ref.smiles };
+  }
+  if (typeof ref.molfile === "string" && typeof ref.smiles !== "string") {
+    return { field: field2, format: "molfile", ...fetchMolfile(ref.molfile) };
+  }
+  return null;
+}
+function structureSources(realRoot, recordDir, value) {
+  const fetchMolfile = (path) => {
+    const where2 = resolveInside(realRoot, recordDir, path);
+    if (!where2.ok) return { text: null, error: `molfile ${where2.error}` };
+    const read = readTextFile(where2.abs);
+    if (!read.ok) return { text: null, file: where2.rel, error: `molfile '${path}' ${read.error}` };
+    return { text: read.text, file: where2.rel };
+  };
+  const top = asObject(value);
+  const main = sourceOf(asObject(top?.structure), "structure", fetchMolfile);
+  const comps = asObject(top?.stereo)?.components;
+  const components = [];
+  if (Array.isArray(comps)) {
+    comps.slice(0, MAX_COMPONENTS_READ).forEach((c, i) => {
+      const s = sourceOf(asObject(c), `stereo.components.${i}`, fetchMolfile);
+      components.push(
+        s ?? { field: `stereo.components.${i}`, format: "smiles", text: null, error: "no structure given" }
+      );
+    });
+  }
+  return { main, components };
+}
+var MAX_COMPONENTS_READ;
+var init_load = __esm({
+  "src/registry/load.ts"() {
+    "use strict";
+    init_files();
+    init_parse();
+    init_positions();
+    MAX_COMPONENTS_READ = 50;
+  }
+});
+
+// src/audit/caution.ts
+var CAUTION;
+var init_caution = __esm({
+  "src/audit/caution.ts"() {
+    "use strict";
+    CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
+  }
+});
+
+// src/audit/config.ts
+var DEFAULT_CONFIG, DEFAULT_SOURCES;
+var init_config = __esm({
+  "src/audit/config.ts"() {
+    "use strict";
+    init_files();
+    init_parse();
+    init_positions();
+    init_schema();
+    DEFAULT_CONFIG = Object.freeze({
+      recordDirs: ["compounds"],
+      severities: {},
+      ratioSumTolerance: 1,
+      racemateRatioTolerance: 2,
+      eeTolerance: 1,
+      singleEnantiomerMinEe: 98,
+      zeroRotationTolerance: 1,
+      axisOrthoMin: 3
+    });
+    DEFAULT_SOURCES = Object.freeze({
+      recordDirs: "the record format of this project (records live under compounds/ unless configured)",
+      severities: "none overridden: every check keeps the default severity its module declares. A level given for a check sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given for 'check-id/message-id' sets that one message's level, notes included",
+      ratioSumTolerance: "common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts",
+      racemateRatioTolerance: "common practice, no source: a racemate measured by chiral chromatography typically reads within about 2 points of 50:50 (integration error); more than that suggests an enantioenriched sample",
+      eeTolerance: "common practice, no source: ee and ratios are reported rounded to about 1 percent",
+      singleEnantiomerMinEe: "common practice, no source: many registries call a sample a single enantiomer from about 98 % ee (99:1 er); set your own SOP value",
+      zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))",
+      axisOrthoMin: "common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies"
+    });
+  }
+});
+
 // src/chem/read/valence.ts
 function atomicNumberOf(symbol) {
   return NUMBER_OF.get(symbol);
@@ -14399,8 +16043,8 @@ function valenceProblem(atomicNumber, charge, bondOrderSum, hCount, oxoBonds = 0
   }
   if (max === null || used <= max) return null;
   if (charge === 0 && oxoBonds > 0 && (atomicNumber === 17 || atomicNumber === 35 || atomicNumber === 53)) {
-    const sep = maxValence(atomicNumber, oxoBonds);
-    if (sep !== null && used - oxoBonds <= sep) return null;
+    const sep2 = maxValence(atomicNumber, oxoBonds);
+    if (sep2 !== null && used - oxoBonds <= sep2) return null;
   }
   const name = CHECKED[atomicNumber];
   const ch = charge === 0 ? "" : ` of charge ${charge > 0 ? "+" : ""}${charge}`;
@@ -14924,12 +16568,12 @@ function buildFresh(s) {
   const nbrs = new Array(n);
   const nbrBonds = new Array(n);
   const fill = new Int32Array(n);
-  let at = 0;
+  let at2 = 0;
   for (let i = 0; i < n; i++) {
-    nbrs[i] = flatNbrs.subarray(at, at + deg[i]);
-    nbrBonds[i] = flatBonds.subarray(at, at + deg[i]);
-    fill[i] = at;
-    at += deg[i];
+    nbrs[i] = flatNbrs.subarray(at2, at2 + deg[i]);
+    nbrBonds[i] = flatBonds.subarray(at2, at2 + deg[i]);
+    fill[i] = at2;
+    at2 += deg[i];
   }
   for (let k = 0; k < m; k++) {
     const { a, b } = s.bonds[k];
@@ -15705,13 +17349,13 @@ function refineOnce(g, p) {
   shared = r;
   return ok;
 }
-function swapTo(p, v, at) {
+function swapTo(p, v, at2) {
   const from = p.pos[v];
-  const w = p.lab[at];
+  const w = p.lab[at2];
   p.lab[from] = w;
   p.pos[w] = from;
-  p.lab[at] = v;
-  p.pos[v] = at;
+  p.lab[at2] = v;
+  p.pos[v] = at2;
 }
 var AROMATIC_CODE, WEIGHT, ascending, Refiner, shared, EMPTY;
 var init_refine = __esm({
@@ -16002,9 +17646,9 @@ function csrOfGraph(s, g, aromatic) {
   for (let i = 0; i < n; i++) {
     const nb = g.nbrs[i];
     const bb = g.nbrBonds[i];
-    const at = offs[i];
-    adj.set(nb, at);
-    for (let t = 0; t < bb.length; t++) code[at + t] = bondCode(s, bb[t], aromatic);
+    const at2 = offs[i];
+    adj.set(nb, at2);
+    for (let t = 0; t < bb.length; t++) code[at2 + t] = bondCode(s, bb[t], aromatic);
   }
   return { n, offs, adj, code };
 }
@@ -16668,6 +18312,86 @@ var init_molfile_geometry = __esm({
   }
 });
 
+// src/chem/read/stereo-2d-axes.ts
+function wedgeZ(s, centre, k, aromatic = false) {
+  const b = s.bonds[k];
+  if (b.a !== centre || b.order !== 1 && !(aromatic && b.aromatic)) return 0;
+  return b.wedge === "up" ? 1 : b.wedge === "down" ? -1 : 0;
+}
+function biarylAxesFrom2d(s, adj, ring, warn2) {
+  const out = [];
+  const xy = (i) => {
+    const c = s.atoms[i].coords;
+    return [c[0], c[1]];
+  };
+  for (const [k, oa, ob] of biarylCandidates(s, adj, ring)) {
+    const bond = s.bonds[k];
+    const za = orthoLift(bond.a, oa);
+    const zb = orthoLift(bond.b, ob);
+    if (za === null || zb === null) {
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
+        bond.a
+      );
+      continue;
+    }
+    if (za[0] === 0 && zb[0] === 0) continue;
+    const [ax, ay] = xy(bond.a);
+    const [bx, by] = xy(bond.b);
+    const len = Math.hypot(bx - ax, by - ay) || 1;
+    const pts = [];
+    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
+      ([o, z]) => {
+        const p = xy(o);
+        pts.push([p[0], p[1], z * len]);
+      }
+    );
+    const vol = signedVolume(pts);
+    if (Math.abs(vol) / (len * len * len) < 0.01) {
+      warn2(
+        "stereo-ambiguous-wedge",
+        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
+        bond.a
+      );
+      continue;
+    }
+    out.push({
+      kind: "axial",
+      subtype: "biaryl",
+      ends: [bond.a, bond.b],
+      ligands: [oa[0], oa[1], ob[0], ob[1]],
+      winding: windingOf(vol)
+    });
+  }
+  return out;
+  function orthoLift(end, orth) {
+    const z = orth.map((o) => {
+      let v = wedgeZ(s, end, adj.bnd[end][adj.nbr[end].indexOf(o)], true);
+      if (v === 0) {
+        for (let j = 0; j < adj.nbr[o].length; j++) {
+          const x = adj.nbr[o][j];
+          const bk = adj.bnd[o][j];
+          if (x === end || ring[bk]) continue;
+          const w = wedgeZ(s, o, bk);
+          if (w !== 0) v = w;
+        }
+      }
+      return v;
+    });
+    if (z[0] !== 0 && z[0] === z[1]) return null;
+    if (z[0] === 0 && z[1] !== 0) z[0] = -z[1];
+    else if (z[1] === 0 && z[0] !== 0) z[1] = -z[0];
+    return [z[0], z[1]];
+  }
+}
+var init_stereo_2d_axes = __esm({
+  "src/chem/read/stereo-2d-axes.ts"() {
+    "use strict";
+    init_molfile_geometry();
+  }
+});
+
 // src/chem/read/stereo-2d.ts
 function stereoFrom2d(s, adj, warnings, atomLines) {
   const out = objectList();
@@ -16688,11 +18412,6 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
   const xy = (i) => {
     const c = s.atoms[i].coords;
     return [c[0], c[1], 0];
-  };
-  const zFrom = (centre, k) => {
-    const b = s.bonds[k];
-    if (b.a !== centre || b.order !== 1) return 0;
-    return b.wedge === "up" ? 1 : b.wedge === "down" ? -1 : 0;
   };
   for (let c = 0; c < s.atoms.length; c++) {
     if (!wedgedFrom[c] || wavyAt[c]) continue;
@@ -16738,7 +18457,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
         return null;
       }
       flat.push(u);
-      zs.push(zFrom(c, adj.bnd[c][j]));
+      zs.push(wedgeZ(s, c, adj.bnd[c][j]));
     }
     const ligands = [...ns];
     if (fourth !== null) ligands.push(fourth);
@@ -16846,7 +18565,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     let lifted = false;
     for (const x of subs) {
       const k = adj.bnd[end][adj.nbr[end].indexOf(x)];
-      const z = zFrom(end, k);
+      const z = wedgeZ(s, end, k);
       if (z !== 0) lifted = true;
       const v = sub2(xy(x), pe);
       pts.push([pe[0] + v[0], pe[1] + v[1], z * Math.hypot(v[0], v[1])]);
@@ -16878,63 +18597,7 @@ function stereoFrom2d(s, adj, warnings, atomLines) {
     const ligands = [a.ligands[0], a.ligands[1], b.ligands[0], b.ligands[1]];
     return { kind: "axial", subtype: "allene", ends, ligands, winding: windingOf(vol) };
   }
-  for (const [k, oa, ob] of biarylCandidates(s, adj, ring)) {
-    const bond = s.bonds[k];
-    const za = orthoLift(bond.a, oa);
-    const zb = orthoLift(bond.b, ob);
-    if (za === null || zb === null) {
-      warn2(
-        "stereo-ambiguous-wedge",
-        `axis ${bond.a + 1}-${bond.b + 1}: both ortho atoms of one ring are marked the same way`,
-        bond.a
-      );
-      continue;
-    }
-    if (za[0] === 0 && zb[0] === 0) continue;
-    const len = Math.hypot(...sub2(xy(bond.b), xy(bond.a))) || 1;
-    const pts = [];
-    [...oa.map((o, i) => [o, za[i]]), ...ob.map((o, i) => [o, zb[i]])].forEach(
-      ([o, z]) => {
-        const p = xy(o);
-        pts.push([p[0], p[1], z * len]);
-      }
-    );
-    const vol = signedVolume(pts);
-    if (Math.abs(vol) / (len * len * len) < 0.01) {
-      warn2(
-        "stereo-ambiguous-wedge",
-        `axis ${bond.a + 1}-${bond.b + 1}: the wedges do not fix a configuration`,
-        bond.a
-      );
-      continue;
-    }
-    out.push({
-      kind: "axial",
-      subtype: "biaryl",
-      ends: [bond.a, bond.b],
-      ligands: [oa[0], oa[1], ob[0], ob[1]],
-      winding: windingOf(vol)
-    });
-  }
-  function orthoLift(end, orth) {
-    const z = orth.map((o) => {
-      let v = zFrom(end, adj.bnd[end][adj.nbr[end].indexOf(o)]);
-      if (v === 0) {
-        for (let j = 0; j < adj.nbr[o].length; j++) {
-          const x = adj.nbr[o][j];
-          const bk = adj.bnd[o][j];
-          if (x === end || ring[bk]) continue;
-          const w = zFrom(o, bk);
-          if (w !== 0) v = w;
-        }
-      }
-      return v;
-    });
-    if (z[0] !== 0 && z[0] === z[1]) return null;
-    if (z[0] === 0 && z[1] !== 0) z[0] = -z[1];
-    else if (z[1] === 0 && z[0] !== 0) z[1] = -z[0];
-    return [z[0], z[1]];
-  }
+  for (const axis of biarylAxesFrom2d(s, adj, ring, warn2)) out.push(axis);
   return out;
 }
 function sub2(a, b) {
@@ -16948,6 +18611,7 @@ var init_stereo_2d = __esm({
     init_types();
     init_graph();
     init_molfile_graph();
+    init_stereo_2d_axes();
     init_molfile_geometry();
     MIN_VOLUME = 0.01;
     MIN_STEREO_RING = 8;
@@ -17418,16 +19082,16 @@ function textTooLong(text, format, limits) {
   if (text.length <= max) return null;
   return {
     code: format === "smiles" ? "smiles-too-long" : "molfile-too-long",
-    message: `the ${format === "smiles" ? "SMILES" : "molfile"} is ${count(text.length)} characters long, over the limit of ${count(max)}; it was not read`,
+    message: `the ${format === "smiles" ? "SMILES" : "molfile"} is ${count2(text.length)} characters long, over the limit of ${count2(max)}; it was not read`,
     at: format === "smiles" ? { offset: max } : { line: 1 }
   };
 }
-function tooManyAtoms(atoms, limits, at) {
+function tooManyAtoms(atoms, limits, at2) {
   if (atoms <= limits.maxAtoms) return null;
   return {
     code: "too-many-atoms",
-    message: `the structure has ${count(atoms)} atoms, over the limit of ${count(limits.maxAtoms)}; it was not analysed`,
-    at
+    message: `the structure has ${count2(atoms)} atoms, over the limit of ${count2(limits.maxAtoms)}; it was not analysed`,
+    at: at2
   };
 }
 function structureTooLarge(s, limits) {
@@ -17437,7 +19101,7 @@ function structureTooLarge(s, limits) {
   if (parts <= limits.maxComponents) return null;
   return {
     code: "too-many-components",
-    message: `the structure has ${count(parts)} separate components (parts joined by '.'), over the limit of ${count(limits.maxComponents)}; it was not analysed`,
+    message: `the structure has ${count2(parts)} separate components (parts joined by '.'), over the limit of ${count2(limits.maxComponents)}; it was not analysed`,
     at: {}
   };
 }
@@ -17463,7 +19127,7 @@ function componentCount(s) {
   }
   return parts;
 }
-var READ_LIMITS, count;
+var READ_LIMITS, count2;
 var init_limits = __esm({
   "src/chem/read/limits.ts"() {
     "use strict";
@@ -17473,12 +19137,12 @@ var init_limits = __esm({
       maxAtoms: 2e3,
       maxComponents: 50
     });
-    count = (n) => n.toLocaleString("en-US");
+    count2 = (n) => n.toLocaleString("en-US");
   }
 });
 
 // src/chem/read/molfile-v3000.ts
-function fail(code, message, line) {
+function fail2(code, message, line) {
   return { ok: false, error: { code, message, at: { line } } };
 }
 function v30Tokens(s) {
@@ -17490,12 +19154,12 @@ function v30Tokens(s) {
     if (i >= n) break;
     const st = i;
     let depth = 0;
-    let quote = false;
+    let quote2 = false;
     for (; i < n; i++) {
       const c = s[i];
-      if (quote) {
-        if (c === '"') quote = false;
-      } else if (c === '"') quote = true;
+      if (quote2) {
+        if (c === '"') quote2 = false;
+      } else if (c === '"') quote2 = true;
       else if (c === "(" || c === "[") depth++;
       else if ((c === ")" || c === "]") && depth > 0) depth--;
       else if (c === " " && depth === 0) break;
@@ -17531,7 +19195,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       break;
     }
     if (!l.startsWith("M  V30")) {
-      return fail(
+      return fail2(
         "molfile-v3000-bad-line",
         `V3000 lines must start with "M  V30", found "${l.slice(0, 20)}"`,
         lineNo(i)
@@ -17542,7 +19206,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
     while (text.endsWith("-")) {
       i++;
       if (i >= end || !lines[i].startsWith("M  V30")) {
-        return fail(
+        return fail2(
           "molfile-v3000-bad-continuation",
           'a V3000 line ends with "-" but no "M  V30" continuation line follows',
           lineNo(i)
@@ -17553,7 +19217,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
     logical.push({ text: text.trim(), line: first });
   }
   if (endLine === -1)
-    return fail("molfile-missing-end", 'the V3000 molfile ends without its "M  END" line', lineNo(end));
+    return fail2("molfile-missing-end", 'the V3000 molfile ends without its "M  END" line', lineNo(end));
   const warnings = [];
   const atoms = objectList();
   const atomLines = [];
@@ -17584,7 +19248,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       const what = (t[1] ?? "").toUpperCase();
       if (what === "CTAB") {
         if (inCtab || ctabDone)
-          return fail(
+          return fail2(
             "molfile-v3000-unexpected",
             'a second "BEGIN CTAB" (only one connection table is read)',
             line
@@ -17592,9 +19256,9 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
         inCtab = true;
         blockLine = line;
       } else if (!inCtab) {
-        return fail("molfile-v3000-unexpected", `"BEGIN ${what}" outside the CTAB block`, line);
+        return fail2("molfile-v3000-unexpected", `"BEGIN ${what}" outside the CTAB block`, line);
       } else if (block !== null) {
-        return fail(
+        return fail2(
           "molfile-v3000-block-not-closed",
           `"BEGIN ${what}" inside the ${block} block opened at line ${blockLine}, which is not closed`,
           line
@@ -17612,7 +19276,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
         inCtab = false;
         ctabDone = true;
       } else {
-        return fail(
+        return fail2(
           "molfile-v3000-block-not-closed",
           `"END ${what}" while the ${block ?? (inCtab ? "CTAB" : "no")} block is open (opened at line ${blockLine})`,
           line
@@ -17625,7 +19289,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       expectAtoms = Number(t[1]);
       expectBonds = Number(t[2]);
       if (!Number.isInteger(expectAtoms) || !Number.isInteger(expectBonds) || expectAtoms < 0 || expectBonds < 0) {
-        return fail(
+        return fail2(
           "molfile-bad-counts-line",
           `the V3000 COUNTS line should start with atom and bond counts, found "${text.slice(0, 40)}"`,
           line
@@ -17646,7 +19310,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
     } else if (block === "BOND") {
       bondLines++;
       if (t.length < 4)
-        return fail(
+        return fail2(
           "molfile-bad-bond-line",
           `a V3000 bond line needs index, type and two atoms, found "${text.slice(0, 40)}"`,
           line
@@ -17655,14 +19319,14 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       const a = indexOf.get(Number(t[2]));
       const b = indexOf.get(Number(t[3]));
       if (a === void 0 || b === void 0) {
-        return fail(
+        return fail2(
           "molfile-bond-atom-missing",
           `bond ${t[0]} refers to atom ${a === void 0 ? t[2] : t[3]}, which is not in the ATOM block`,
           line
         );
       }
       if (!Number.isInteger(type))
-        return fail("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line);
+        return fail2("molfile-bad-bond-type", `bond ${t[0]} has type "${t[1]}"`, line);
       const cfg = Number(keyed(t, 4).get("CFG") ?? 0);
       const stereo = cfg === 1 ? 1 : cfg === 3 ? 6 : cfg === 2 ? type === 2 ? 3 : 4 : 0;
       const r = makeBond(a + 1, b + 1, type, stereo, atoms.length, bonds.length + 1, line, warnings);
@@ -17670,7 +19334,7 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       if (r.bond === null) continue;
       const key3 = Math.min(a, b) * 1000003 + Math.max(a, b);
       if (seenBonds.has(key3))
-        return fail(
+        return fail2(
           "molfile-duplicate-bond",
           `bond ${t[0]}: atoms ${t[2]} and ${t[3]} are already bonded`,
           line
@@ -17683,12 +19347,12 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
       if (m === null) continue;
       const list = parseList(keyed(t, 1).get("ATOMS") ?? "");
       if (list === null)
-        return fail("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
+        return fail2("molfile-bad-collection", `collection ${t[0]} needs ATOMS=(n a1 ... an)`, line);
       const members = [];
       for (const n of list) {
         const ai = indexOf.get(n);
         if (ai === void 0)
-          return fail(
+          return fail2(
             "molfile-bad-collection",
             `collection ${t[0]} names atom ${n}, which is not in the ATOM block`,
             line
@@ -17701,28 +19365,28 @@ function parseV3000(lines, idx, end, firstLine, title, limits = READ_LIMITS) {
     }
   }
   if (block !== null)
-    return fail(
+    return fail2(
       "molfile-v3000-block-not-closed",
       `the ${block} block opened at line ${blockLine} is not closed before "M  END"`,
       lineNo(endLine)
     );
   if (inCtab)
-    return fail(
+    return fail2(
       "molfile-v3000-block-not-closed",
       `the CTAB block opened at line ${blockLine} is not closed before "M  END"`,
       lineNo(endLine)
     );
   if (!ctabDone)
-    return fail("molfile-v3000-no-ctab", 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
+    return fail2("molfile-v3000-no-ctab", 'the V3000 molfile has no "BEGIN CTAB" block', lineNo(endLine));
   if (expectAtoms >= 0 && (expectAtoms !== atoms.length || expectBonds !== bondLines)) {
-    return fail(
+    return fail2(
       "molfile-counts-mismatch",
       `the COUNTS line says ${expectAtoms} atoms and ${expectBonds} bonds, but the ATOM and BOND blocks hold ${atoms.length} and ${bondLines}; lines were lost or added`,
       countsLine
     );
   }
   if (atoms.length === 0) {
-    return fail(
+    return fail2(
       "molfile-no-atoms",
       "the V3000 molfile has no atoms: there is no structure to check",
       countsLine >= 0 ? countsLine : lineNo(endLine)
@@ -17838,7 +19502,7 @@ function parseMolfile(text, opts) {
   const lines = splitLines(text);
   return parseMolfileLines(lines, 0, lines.length, opts?.firstLine ?? 1, opts?.limits);
 }
-function fail2(code, message, line) {
+function fail3(code, message, line) {
   return { ok: false, error: { code, message, at: { line } } };
 }
 function shortHeader(lines, start, end) {
@@ -17851,7 +19515,7 @@ function shortHeader(lines, start, end) {
 }
 function headerShort(early, start, lineNo) {
   const lost = 3 - (early - start);
-  return fail2(
+  return fail3(
     "molfile-header-short",
     `the counts line stands on line ${early - start + 1} of the molfile, not line 4: the header lost ${lost === 1 ? "a line" : `${lost} lines`} (a molfile starts with three header lines: name, program, comment; an unused one stays as an empty line)`,
     lineNo(early)
@@ -17860,7 +19524,7 @@ function headerShort(early, start, lineNo) {
 function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
   const lineNo = (idx2) => firstLine + (idx2 - start);
   if (end - start < 4) {
-    return fail2(
+    return fail3(
       "molfile-truncated",
       `the molfile ends after ${end - start} lines, before its counts line (line 4)`,
       lineNo(end)
@@ -17883,7 +19547,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
       if (early >= 0) {
         return headerShort(early, start, lineNo);
       }
-      return fail2(
+      return fail3(
         "molfile-bad-counts-line",
         `line 4 of the molfile should be the counts line (atoms, bonds, ..., V2000), found "${counts.slice(0, 40)}"`,
         lineNo(start + 3)
@@ -17904,7 +19568,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
   if (large !== null) return { ok: false, error: large };
   if (nAtoms === 0) {
     const early = shortHeader(lines, start, end);
-    return early >= 0 ? headerShort(early, start, lineNo) : fail2(
+    return early >= 0 ? headerShort(early, start, lineNo) : fail3(
       "molfile-no-atoms",
       "the counts line gives 0 atoms: there is no structure to check",
       lineNo(start + 3)
@@ -17916,7 +19580,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
   let idx = start + 4;
   for (let i = 0; i < nAtoms; i++, idx++) {
     if (idx >= end) {
-      return fail2(
+      return fail3(
         "molfile-truncated",
         `the molfile ends after ${i} of its ${nAtoms} atom lines`,
         lineNo(idx)
@@ -17935,13 +19599,13 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
       const fz = Number(free[2]);
       if (free.length < 4 || !Number.isFinite(fx) || !Number.isFinite(fy) || !Number.isFinite(fz)) {
         if (line.length < 32 && free.length < 4) {
-          return fail2(
+          return fail3(
             "molfile-atom-line-short",
             `atom line ${i + 1} is too short (${line.length} characters; coordinates and symbol need 34)`,
             lineNo(idx)
           );
         }
-        return fail2(
+        return fail3(
           "molfile-bad-coordinate",
           `atom line ${i + 1}: the coordinates are not numbers ("${line.slice(0, 30).trim()}")`,
           lineNo(idx)
@@ -17953,7 +19617,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
       sym = free[3];
     }
     if (!Number.isFinite(x) || !Number.isFinite(y) || !Number.isFinite(z)) {
-      return fail2(
+      return fail3(
         "molfile-bad-coordinate",
         `atom line ${i + 1}: the coordinates are not finite numbers`,
         lineNo(idx)
@@ -17961,7 +19625,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
     }
     const el = elementOf(sym);
     if (el === null) {
-      return fail2(
+      return fail3(
         "molfile-unknown-element",
         `atom line ${i + 1}: "${sym}" is not an element symbol or a known query/R-group symbol`,
         lineNo(idx)
@@ -18029,7 +19693,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
   const seen = /* @__PURE__ */ new Set();
   for (let i = 0; i < nBonds; i++, idx++) {
     if (idx >= end)
-      return fail2(
+      return fail3(
         "molfile-truncated",
         `the molfile ends after ${i} of its ${nBonds} bond lines`,
         lineNo(idx)
@@ -18046,7 +19710,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
       type = Number(t[2]);
       stereo = Number(t[3] ?? 0);
       if (t.length < 3 || !Number.isInteger(a) || !Number.isInteger(b) || !Number.isInteger(type)) {
-        return fail2(
+        return fail3(
           "molfile-bad-bond-line",
           `bond line ${i + 1} should hold two atom numbers and a bond type, found "${line.trim().slice(0, 30)}"`,
           lineNo(idx)
@@ -18059,7 +19723,7 @@ function parseMolfileLines(lines, start, end, firstLine, limits = READ_LIMITS) {
     if (r.bond === null) continue;
     const key3 = Math.min(r.bond.a, r.bond.b) * 1000003 + Math.max(r.bond.a, r.bond.b);
     if (seen.has(key3))
-      return fail2(
+      return fail3(
         "molfile-duplicate-bond",
         `bond line ${i + 1}: atoms ${a} and ${b} are already bonded`,
         lineNo(idx)
@@ -18179,30 +19843,162 @@ var init_molfile = __esm({
   }
 });
 
-// src/chem/read/cxsmiles.ts
+// src/chem/read/cxsmiles-drawing.ts
+function fail4(code, message, offset) {
+  return { ok: false, error: { code, message, at: { offset } } };
+}
 function isDigit(c) {
   return c >= 48 && c <= 57;
 }
-function fail3(code, message, offset) {
-  return { ok: false, error: { code, message, at: { offset } } };
+function readCoordinates(s, start, atomCount) {
+  const close2 = s.indexOf(")", start + 1);
+  if (close2 < 0) return fail4("cxsmiles-bad-coordinates", "coordinate block is not closed with ')'", start);
+  const body = s.slice(start + 1, close2);
+  const entries = body.split(";");
+  if (entries.length === atomCount + 1 && entries[atomCount] === "") entries.pop();
+  if (entries.length !== atomCount)
+    return fail4(
+      "cxsmiles-bad-coordinates",
+      `coordinate block lists ${entries.length} atoms; the SMILES has ${atomCount}`,
+      start
+    );
+  const coords = [];
+  let at2 = start + 1;
+  for (const entry of entries) {
+    const parts = entry.split(",");
+    if (parts.length > 3)
+      return fail4("cxsmiles-bad-coordinates", `coordinate '${entry}' has more than three numbers`, at2);
+    const xyz = [0, 0, 0];
+    for (let d = 0; d < parts.length; d++) {
+      const t = parts[d].trim();
+      const v = t === "" ? 0 : Number(t);
+      if (!Number.isFinite(v)) return fail4("cxsmiles-bad-coordinates", `'${t}' is not a number`, at2);
+      xyz[d] = v;
+    }
+    coords.push(xyz);
+    at2 += entry.length + 1;
+  }
+  return { ok: true, coords, end: close2 + 1 };
 }
-function readIndex(s, at, atomCount, code) {
+function wedgeFieldAt(s, i) {
+  if (s.charCodeAt(i) !== 119) return -1;
+  const c = s.charCodeAt(i + 1);
+  if (c === 58) return i + 2;
+  if ((c === 85 || c === 68) && s.charCodeAt(i + 2) === 58) return i + 3;
+  return -1;
+}
+function readWedges(s, i, atomCount, bondCount, out) {
+  const c = s.charCodeAt(i + 1);
+  const wedge = c === 85 ? "up" : c === 68 ? "down" : "either";
+  let j = wedgeFieldAt(s, i);
+  for (; ; ) {
+    const atom = readIndex(s, j, atomCount, "cxsmiles-bad-wedge");
+    if ("ok" in atom) return atom;
+    if (s.charCodeAt(atom.end) !== 46)
+      return fail4("cxsmiles-bad-wedge", "expected '.' and a bond index after the atom index", atom.end);
+    const bond = readIndex(s, atom.end + 1, bondCount, "cxsmiles-bad-wedge", "bond");
+    if ("ok" in bond) return bond;
+    out.push({ atom: atom.v, bond: bond.v, wedge, offset: j });
+    j = bond.end;
+    if (s.charCodeAt(j) === 44 && isDigit(s.charCodeAt(j + 1))) {
+      j++;
+      continue;
+    }
+    return { ok: true, end: j };
+  }
+}
+function readIndex(s, at2, count3, code, what = "atom") {
   let v = 0;
-  let j = at;
-  while (isDigit(s.charCodeAt(j)) && j - at < 9) v = v * 10 + s.charCodeAt(j++) - 48;
-  if (v >= atomCount)
-    return fail3(code, `atom index ${v} is out of range (the SMILES has ${atomCount} atoms)`, at);
+  let j = at2;
+  while (isDigit(s.charCodeAt(j)) && j - at2 < 9) v = v * 10 + s.charCodeAt(j++) - 48;
+  if (j === at2) return fail4(code, `expected ${what === "atom" ? "an atom" : "a bond"} index`, at2);
+  if (v >= count3)
+    return fail4(code, `${what} index ${v} is out of range (the SMILES has ${count3} ${what}s)`, at2);
   return { v, end: j };
 }
-function parseCxExtension(s, start, atomCount) {
+function applyDrawing(st, { coords, coordsAt, wedges }, atomOffset, warnings) {
+  const bonds = st.bonds.slice();
+  const wedged = new Uint8Array(bonds.length);
+  for (const w of wedges) {
+    const b = bonds[w.bond];
+    if (b.a !== w.atom && b.b !== w.atom)
+      return fail4("cxsmiles-bad-wedge", `atom ${w.atom} is not an end of bond ${w.bond}`, w.offset);
+    if (wedged[w.bond]) return fail4("cxsmiles-bad-wedge", `bond ${w.bond} is given two wedges`, w.offset);
+    wedged[w.bond] = 1;
+    bonds[w.bond] = newBond(w.atom, b.a === w.atom ? b.b : b.a, b.order, b.aromatic, w.wedge);
+  }
+  let dimension = 0;
+  let atoms = st.atoms;
+  if (coords !== null) {
+    if (coords.some((c) => c[2] !== 0)) {
+      warnings.push({
+        code: "cxsmiles-3d-coordinates",
+        message: "the CXSMILES gives 3D coordinates, which are not read; configurations come from the SMILES alone",
+        at: { offset: coordsAt }
+      });
+    } else if (coords.some((c) => c[0] !== coords[0][0] || c[1] !== coords[0][1])) {
+      dimension = 2;
+      atoms = st.atoms.map((a, i) => atomWith(a, { coords: coords[i] }));
+    }
+  }
+  const drawn = newStructure(
+    atoms,
+    bonds,
+    st.stereo,
+    st.groups,
+    st.chiralFlag,
+    st.title,
+    st.properties,
+    dimension
+  );
+  if (dimension === 2 && wedges.length > 0) {
+    const adj = adjacency(atoms.length, bonds);
+    const warn2 = (code, message, atom) => {
+      warnings.push({ code, message, at: { offset: atomOffset(atom) } });
+    };
+    const axes = biarylAxesFrom2d(drawn, adj, ringBonds(atoms.length, bonds, adj), warn2);
+    if (axes.length > 0) drawn.stereo = [...st.stereo, ...axes];
+  }
+  return drawn;
+}
+var init_cxsmiles_drawing = __esm({
+  "src/chem/read/cxsmiles-drawing.ts"() {
+    "use strict";
+    init_make();
+    init_molfile_graph();
+    init_stereo_2d_axes();
+  }
+});
+
+// src/chem/read/cxsmiles.ts
+function parseCxExtension(s, start, atomCount, bondCount) {
   const n = s.length;
   const groups = objectList();
   const radicals = /* @__PURE__ */ new Map();
+  let coords = null;
+  let coordsAt = -1;
+  const wedges = objectList();
   let i = start + 1;
   for (; ; ) {
-    if (i >= n) return fail3("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
+    if (i >= n) return fail4("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
     const c = s.charCodeAt(i);
-    if (c === 124) return { ok: true, groups, radicals, end: i + 1 };
+    if (c === 124) return { ok: true, groups, radicals, coords, coordsAt, wedges, end: i + 1 };
+    if (c === 40) {
+      const r = readCoordinates(s, i, atomCount);
+      if (!r.ok) return r;
+      if (coords === null) {
+        coords = r.coords;
+        coordsAt = i;
+      }
+      i = r.end;
+      continue;
+    }
+    if (wedgeFieldAt(s, i) >= 0) {
+      const r = readWedges(s, i, atomCount, bondCount, wedges);
+      if (!r.ok) return r;
+      i = r.end;
+      continue;
+    }
     if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
       const count3 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
       let j2 = i + 3;
@@ -18234,16 +20030,16 @@ function parseCxExtension(s, start, atomCount) {
         type = c === 111 ? "or" : "and";
         j++;
       } else if (c === 38) {
-        return fail3("cxsmiles-bad-group", "stereo group '&n' must be followed by ':'", j);
+        return fail4("cxsmiles-bad-group", "stereo group '&n' must be followed by ':'", j);
       }
     } else if (c === 38) {
-      return fail3("cxsmiles-bad-group", "stereo group '&' must be followed by a group number", i);
+      return fail4("cxsmiles-bad-group", "stereo group '&' must be followed by a group number", i);
     }
     if (type !== null) {
       const atoms = [];
       for (; ; ) {
         if (!isDigit(s.charCodeAt(j)))
-          return fail3("cxsmiles-bad-group", "expected an atom index in the stereo group", j);
+          return fail4("cxsmiles-bad-group", "expected an atom index in the stereo group", j);
         const r = readIndex(s, j, atomCount, "cxsmiles-bad-group");
         if ("ok" in r) return r;
         j = r.end;
@@ -18254,8 +20050,8 @@ function parseCxExtension(s, start, atomCount) {
           continue;
         }
         if (d === 44 || d === 124) break;
-        if (j >= n) return fail3("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
-        return fail3("cxsmiles-bad-group", `unexpected '${s[j] ?? "end of text"}' in the stereo group`, j);
+        if (j >= n) return fail4("cxsmiles-unclosed", "CXSMILES block is not closed with '|'", start);
+        return fail4("cxsmiles-bad-group", `unexpected '${s[j] ?? "end of text"}' in the stereo group`, j);
       }
       const same = groups.find((g) => g.type === type && g.id === id);
       if (same) {
@@ -18301,6 +20097,7 @@ var init_cxsmiles = __esm({
   "src/chem/read/cxsmiles.ts"() {
     "use strict";
     init_make();
+    init_cxsmiles_drawing();
   }
 });
 
@@ -18901,7 +20698,7 @@ function parseInto(s, start) {
       continue;
     }
     if (c >= 48 && c <= 57 || c === 37) {
-      const at = i;
+      const at2 = i;
       let num2;
       if (c === 37) {
         const d1 = s.charCodeAt(i + 1) - 48;
@@ -18924,7 +20721,7 @@ function parseInto(s, start) {
         num2 = c - 48;
         i++;
       }
-      if (prev < 0) return err("smiles-dangling-ring-bond", "ring-closure number with no atom before it", at);
+      if (prev < 0) return err("smiles-dangling-ring-bond", "ring-closure number with no atom before it", at2);
       const rec = num2 < 100 ? null : (big ??= /* @__PURE__ */ new Map()).get(num2);
       if (num2 < 100 ? RING_OPEN[num2] === 0 : rec === void 0) {
         const slot = entry(prev, -1, -1);
@@ -18935,8 +20732,8 @@ function parseInto(s, start) {
           RING_ORDER[num2] = pOrder;
           RING_AROM[num2] = pArom;
           RING_DIR[num2] = pDir;
-          RING_OFF[num2] = at;
-        } else big.set(num2, [prev, slot, pOrder, pArom, pDir, at]);
+          RING_OFF[num2] = at2;
+        } else big.set(num2, [prev, slot, pOrder, pArom, pDir, at2]);
         openRings++;
       } else {
         let a;
@@ -18961,24 +20758,24 @@ function parseInto(s, start) {
         }
         openRings--;
         if (a === prev)
-          return err("smiles-ring-bond-to-self", `ring closure ${num2} bonds an atom to itself`, at);
+          return err("smiles-ring-bond-to-self", `ring closure ${num2} bonds an atom to itself`, at2);
         for (let e = firstEv[prev]; e >= 0; e = evNext[e])
           if (evAtom[e] === a)
-            return err("smiles-duplicate-bond", `ring closure ${num2} repeats an existing bond`, at);
+            return err("smiles-duplicate-bond", `ring closure ${num2} repeats an existing bond`, at2);
         if (pOrder !== 0) {
           if (oOrder !== 0) {
             if (oOrder !== pOrder || oArom !== pArom) {
               return err(
                 "smiles-conflicting-ring-bond",
                 `ring closure ${num2} has different bond symbols at its two ends`,
-                at
+                at2
               );
             }
             if (oDir !== 0 && pDir !== 0 && oDir !== -pDir) {
               return err(
                 "smiles-conflicting-ring-bond",
                 `ring closure ${num2} has contradicting '/' '\\' marks`,
-                at
+                at2
               );
             }
             if (oDir === 0 && pDir !== 0) oDir = -pDir;
@@ -18988,7 +20785,7 @@ function parseInto(s, start) {
             oDir = -pDir;
           }
         }
-        const bi = addBond(a, prev, oOrder, oArom, oDir, at);
+        const bi = addBond(a, prev, oOrder, oArom, oDir, at2);
         evAtom[slot] = prev;
         evBond[slot] = bi;
         entry(prev, a, bi);
@@ -19137,12 +20934,12 @@ function ligandsOf(g, hCount, i) {
   const h = hCount[i];
   const from = g.nbrStart[i];
   const stop = g.nbrStart[i + 1];
-  const at = from + (g.preceded[i] === 1 && stop > from ? 1 : 0);
+  const at2 = from + (g.preceded[i] === 1 && stop > from ? 1 : 0);
   for (let e = from; e < stop; e++) {
-    if (e === at) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
+    if (e === at2) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
     list.push(g.nbrAtom[e]);
   }
-  if (at === stop) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
+  if (at2 === stop) for (let k = 0; k < h; k++) list.push(IMPLICIT_H);
   return list;
 }
 function degree(g, i) {
@@ -19368,11 +21165,13 @@ function parse(text) {
   while (i < text.length && isSpace2(text.charCodeAt(i))) i++;
   let groups = null;
   let cxRadicals = null;
+  let cxDrawing = null;
   if (i < text.length && text.charCodeAt(i) === 124) {
-    const cx = parseCxExtension(text, i, n);
+    const cx = parseCxExtension(text, i, n, m);
     if (!cx.ok) return cx;
     groups = cx.groups;
     if (cx.radicals.size > 0) cxRadicals = cx.radicals;
+    if (cx.coords !== null || cx.wedges.length > 0) cxDrawing = cx;
     i = cx.end;
   }
   const title = text.slice(i).trim();
@@ -19455,7 +21254,9 @@ function parse(text) {
     {},
     0
   );
-  return { ok: true, structure, warnings };
+  if (cxDrawing === null) return { ok: true, structure, warnings };
+  const drawn = applyDrawing(structure, cxDrawing, (a) => g.atoms[a].offset, warnings);
+  return "ok" in drawn ? drawn : { ok: true, structure: drawn, warnings };
 }
 function kekulizeGraph(g, order) {
   const n = g.atoms.length;
@@ -19574,6 +21375,7 @@ var init_smiles = __esm({
     "use strict";
     init_make();
     init_cxsmiles();
+    init_cxsmiles_drawing();
     init_kekulize();
     init_smiles_parse();
     init_smiles_stereo();
@@ -19593,19 +21395,60 @@ var init_smiles = __esm({
   }
 });
 
+// src/chem/read/sd-split.ts
+function lostSeparatorMessage(nextRecordLine) {
+  return `the record has no $$$$ line: the next record starts at line ${nextRecordLine} (its counts line follows this record's data); the two were read as separate records`;
+}
+function mergedRecordsMessage(secondEndLine) {
+  return `a second "M  END" at line ${secondEndLine} inside the record's data block: two records merged (a lost $$$$ line and header?); only the first structure was read`;
+}
+var COUNTS_LINE, SdBoundaries, SD_HEADER_LINES;
+var init_sd_split = __esm({
+  "src/chem/read/sd-split.ts"() {
+    "use strict";
+    COUNTS_LINE = /^[ \d]{3}[ \d]{3}.*V[23]000\s*$/;
+    SdBoundaries = class {
+      afterEnd = false;
+      inValue = false;
+      lines = 0;
+      /** Line of a second `M  END` in the record's data block (two records merged), 0 when none. */
+      secondEnd = 0;
+      /** The kind of the next line of the file (`lineNo` 1-based); call `start()` after a separator or a cut. */
+      next(raw2, lineNo) {
+        if (raw2.startsWith("$$$$")) return "separator";
+        if (this.afterEnd && !this.inValue) {
+          if (COUNTS_LINE.test(raw2) && this.lines >= 3) return "next-record";
+          if (raw2.startsWith("M  END") && this.secondEnd === 0) this.secondEnd = lineNo;
+        }
+        if (!this.afterEnd && raw2.startsWith("M  END")) this.afterEnd = true;
+        else if (this.afterEnd) {
+          if (raw2.startsWith(">")) this.inValue = true;
+          else if (raw2.trim() === "") this.inValue = false;
+        }
+        this.lines++;
+        return "line";
+      }
+      /**
+       * A new record: after a separator (`header` = 0), or after a cut at a counts line (`header` = the 3 lines
+       * already read, which belong to the new record). Call `next` for the counts line again afterwards.
+       */
+      start(header = 0) {
+        this.afterEnd = false;
+        this.inValue = false;
+        this.secondEnd = 0;
+        this.lines = header;
+      }
+    };
+    SD_HEADER_LINES = 3;
+  }
+});
+
 // src/chem/read/sdf.ts
 function* readSdRecords(text) {
+  const records = new SdRecordSplitter();
   const lines = splitLines(text);
-  let start = 0;
-  let record = 0;
-  for (let i = 0; i <= lines.length; i++) {
-    if (i < lines.length && !lines[i].startsWith("$$$$")) continue;
-    if (!allBlank(lines, start, i)) {
-      record++;
-      yield { record, line: start + 1, result: readRecord(lines, start, i, start + 1, record) };
-    }
-    start = i + 1;
-  }
+  for (let i = 0; i < lines.length; i++) yield* records.line(lines[i], i + 1);
+  yield* records.end();
 }
 function allBlank(lines, start, end) {
   for (let i = start; i < end; i++) if (lines[i].trim() !== "") return false;
@@ -19644,7 +21487,7 @@ function readRecord(lines, start, end, firstLine, record) {
       continue;
     }
     const name = fieldName(l);
-    const at = firstLine + (i - start);
+    const at2 = firstLine + (i - start);
     i++;
     const value = [];
     while (i < end && lines[i].trim() !== "") value.push(lines[i++]);
@@ -19653,7 +21496,7 @@ function readRecord(lines, start, end, firstLine, record) {
         tag({
           code: "sdf-field-without-name",
           message: "a data-field header without a <NAME>; its value is skipped",
-          at: { line: at }
+          at: { line: at2 }
         })
       );
       continue;
@@ -19663,7 +21506,7 @@ function readRecord(lines, start, end, firstLine, record) {
         tag({
           code: "sdf-duplicate-field",
           message: `data field <${name}> appears twice; the first value is kept`,
-          at: { line: at }
+          at: { line: at2 }
         })
       );
       continue;
@@ -19680,10 +21523,55 @@ function fieldName(l) {
   if (close2 === -1) return null;
   return l.slice(open + 1, close2);
 }
+var SdRecordSplitter;
 var init_sdf = __esm({
   "src/chem/read/sdf.ts"() {
     "use strict";
     init_molfile();
+    init_sd_split();
+    SdRecordSplitter = class {
+      buf = [];
+      first = 1;
+      record = 0;
+      bounds = new SdBoundaries();
+      *line(l, lineNo) {
+        const kind = this.bounds.next(l, lineNo);
+        if (kind === "separator") {
+          yield* this.flush(null);
+          this.buf = [];
+          this.first = lineNo + 1;
+          this.bounds.start();
+          return;
+        }
+        if (kind === "next-record") {
+          const header = this.buf.splice(this.buf.length - SD_HEADER_LINES, SD_HEADER_LINES);
+          const cutAt = lineNo - SD_HEADER_LINES;
+          yield* this.flush({
+            code: "sdf-missing-separator",
+            message: lostSeparatorMessage(cutAt),
+            at: { line: cutAt }
+          });
+          this.buf = header;
+          this.first = cutAt;
+          this.bounds.start(SD_HEADER_LINES);
+          this.bounds.next(l, lineNo);
+        }
+        this.buf.push(l);
+      }
+      *end() {
+        yield* this.flush(null);
+      }
+      *flush(cut) {
+        if (allBlank(this.buf, 0, this.buf.length)) return;
+        this.record++;
+        const record = this.record;
+        let result2 = readRecord(this.buf, 0, this.buf.length, this.first, record);
+        const merged = this.bounds.secondEnd;
+        const problem = cut ?? (merged > 0 ? { code: "sdf-merged-records", message: mergedRecordsMessage(merged), at: { line: merged } } : null);
+        if (problem) result2 = { ok: false, error: { ...problem, at: { ...problem.at, record } } };
+        yield { record, line: this.first, result: result2 };
+      }
+    };
   }
 });
 
@@ -20121,9 +22009,9 @@ function writeSmilesWithOrder(s, opts = {}) {
   const parts = [];
   const byCount = [[], []];
   for (let a = 0; a < s.atoms.length; a++) {
-    const at = s.atoms[a];
-    if (at.radical > 0 && impliedRadical(at, valence[a]) !== at.radical)
-      byCount[at.radical >= 2 ? 1 : 0].push(em.outIndex[a]);
+    const at2 = s.atoms[a];
+    if (at2.radical > 0 && impliedRadical(at2, valence[a]) !== at2.radical)
+      byCount[at2.radical >= 2 ? 1 : 0].push(em.outIndex[a]);
   }
   byCount.forEach((idx, k) => {
     if (idx.length > 0) parts.push(`^${k + 1}:${idx.sort((x, y) => x - y).join(",")}`);
@@ -20975,7 +22863,7 @@ function perceiveMancude(s, nbr, ord, mass) {
     let inRing = false;
     for (let i = 0; i < deg; i++) if (ring[base + i] === 1) inRing = true;
     if (!inRing) continue;
-    const at = s.atoms[a];
+    const at2 = s.atoms[a];
     if (piDouble[a] === 1) {
       let outside = false;
       for (let i = 0; i < deg; i++) if (oa[i] >= 2 && ring[base + i] !== 1) outside = true;
@@ -20984,9 +22872,9 @@ function perceiveMancude(s, nbr, ord, mass) {
       let multiple = false;
       for (let i = 0; i < deg; i++) if (oa[i] >= 2) multiple = true;
       if (!multiple) {
-        const z = at.atomicNumber;
-        const lonePair = (z === 7 || z === 8 || z === 15 || z === 16 || z === 34) && at.charge <= 0;
-        pi[a] = (lonePair || z === 6 && at.charge === -1) && deg + at.hCount <= 3 ? 1 : 0;
+        const z = at2.atomicNumber;
+        const lonePair = (z === 7 || z === 8 || z === 15 || z === 16 || z === 34) && at2.charge <= 0;
+        pi[a] = (lonePair || z === 6 && at2.charge === -1) && deg + at2.hCount <= 3 ? 1 : 0;
       }
     }
   }
@@ -21027,7 +22915,7 @@ function result(n, nbr, off, edge, dupZ, dupMass) {
       if (bond === null) {
         bond = new PairSet(n);
         for (let a = 0; a < n; a++)
-          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key(n, a, nbr[a][i]));
+          for (let i = 0; i < nbr[a].length; i++) if (edge[off[a] + i] === 1) bond.add(key2(n, a, nbr[a][i]));
       }
       return bond;
     },
@@ -21037,7 +22925,7 @@ function result(n, nbr, off, edge, dupZ, dupMass) {
     dupMass
   };
 }
-function key(n, a, b) {
+function key2(n, a, b) {
   return a * n + b;
 }
 function markPair(nbr, off, out, v, w) {
@@ -21265,11 +23153,11 @@ function fixedByRing(g, e) {
   return false;
 }
 function expandedValence(s, a, orders) {
-  const at = s.atoms[a];
-  const z = at.atomicNumber;
+  const at2 = s.atoms[a];
+  const z = at2.atomicNumber;
   if (z !== 15 && z !== 16 && z !== 17 && z !== 33 && z !== 34 && z !== 35 && z !== 52 && z !== 53)
     return false;
-  const v = orders.reduce((x, y) => x + y, 0) + at.hCount;
+  const v = orders.reduce((x, y) => x + y, 0) + at2.hCount;
   switch (z) {
     case 15:
     case 33:
@@ -21287,8 +23175,8 @@ function expandedValence(s, a, orders) {
   }
 }
 function invertibleNitrogen(g, centre, ligands) {
-  const at = g.s.atoms[centre];
-  if (at.atomicNumber !== 7 || at.charge !== 0 || !ligands.includes(-2)) return false;
+  const at2 = g.s.atoms[centre];
+  if (at2.atomicNumber !== 7 || at2.charge !== 0 || !ligands.includes(-2)) return false;
   const nb = g.nbr[centre];
   if (nb.some((b) => ringSizeThrough(g, centre, b, 3) === 3)) return false;
   if (nb.length !== 3) return true;
@@ -21578,7 +23466,7 @@ function descriptors(rk, x, fx) {
         const len = qDepth[i];
         const key3 = new Array(len + 1);
         key3[0] = len;
-        for (let k = i, at = len; at >= 1; k = qParent[k], at--) key3[at] = qPos[k];
+        for (let k = i, at2 = len; at2 >= 1; k = qParent[k], at2--) key3[at2] = qPos[k];
         out.push({ label: l, key: key3, group: 0 });
       }
     }
@@ -22031,7 +23919,7 @@ var init_compare = __esm({
       }
       sortAt(node, from, level2) {
         const base = this.sorted(node, from, level2 - 1);
-        if (!this.active[level2] || !anyTrue(base.tie)) return base;
+        if (!this.active[level2] || level2 === RULE_4B || !anyTrue(base.tie)) return base;
         const out = { nodes: base.nodes.slice(), tie: base.tie.slice(), pending: false };
         for (let i = 0; i < out.nodes.length; ) {
           let j = i + 1;
@@ -25671,7 +27559,7 @@ function ert(w) {
     t.a += e, t.b += A, t.c += n;
   }
   function Le(t, e) {
-    t.d[t.c] = at(t.d[t.c], e);
+    t.d[t.c] = at2(t.d[t.c], e);
   }
   function FN(t, e) {
     We(t.a, P3(e.c), new Rd());
@@ -29161,7 +31049,7 @@ function ert(w) {
     var A;
     return U0(t) && U0(e) && (A = t * e, N2 < A && A < UP) ? A : En(Da(U0(t) ? Se(t) : t, U0(e) ? Se(e) : e));
   }
-  function at(t, e) {
+  function at2(t, e) {
     var A;
     return U0(t) && U0(e) && (A = t + e, N2 < A && A < UP) ? A : En(vz(U0(t) ? Se(t) : t, U0(e) ? Se(e) : e));
   }
@@ -29386,7 +31274,7 @@ function ert(w) {
   }
   function YK(t, e, A) {
     var n, P;
-    for (n = V(A, g1), P = 0; O(n, 0) != 0 && P < e; P++) n = at(n, V(t[P], g1)), t[P] = Ot(n), n = G0(n, 32);
+    for (n = V(A, g1), P = 0; O(n, 0) != 0 && P < e; P++) n = at2(n, V(t[P], g1)), t[P] = Ot(n), n = G0(n, 32);
     return Ot(n);
   }
   function hn(t, e, A, n) {
@@ -29948,7 +31836,7 @@ function ert(w) {
   function ws(t, e, A, n) {
     Lr();
     var P, r;
-    for (P = 0, r = 0; r < A; r++) P = at(yn(V(e[r], g1), V(n, g1)), V(Ot(P), g1)), t[r] = Ot(P), P = b0(P, 32);
+    for (P = 0, r = 0; r < A; r++) P = at2(yn(V(e[r], g1), V(n, g1)), V(Ot(P), g1)), t[r] = Ot(P), P = b0(P, 32);
     return Ot(P);
   }
   function rP(t, e) {
@@ -30285,7 +32173,7 @@ function ert(w) {
   }
   function fY(t, e, A, n, P) {
     var r, i, f, D;
-    for (i = A, f = 0, D = i.length; f < D; ++f) r = i[f], P[t.d[r]] = at(P[t.d[r]], e[r] << t.b[r]), n[t.d[r]] = at(n[t.d[r]], Wt(Ec[t.a[r]], t.b[r]));
+    for (i = A, f = 0, D = i.length; f < D; ++f) r = i[f], P[t.d[r]] = at2(P[t.d[r]], e[r] << t.b[r]), n[t.d[r]] = at2(n[t.d[r]], Wt(Ec[t.a[r]], t.b[r]));
   }
   function DY(t) {
     var e = t.backingJsObject;
@@ -30670,7 +32558,7 @@ function ert(w) {
   }
   function HY(t) {
     var e, A, n;
-    return O(t, 0) >= 0 ? (A = In(t, Jf), n = n9(t, Jf)) : (e = b0(t, 1), A = In(e, 5e8), n = n9(e, 5e8), n = at(Wt(n, 1), V(t, 1))), z(Wt(n, 32), V(A, g1));
+    return O(t, 0) >= 0 ? (A = In(t, Jf), n = n9(t, Jf)) : (e = b0(t, 1), A = In(e, 5e8), n = n9(e, 5e8), n = at2(Wt(n, 1), V(t, 1))), z(Wt(n, 32), V(A, g1));
   }
   function VY(t, e) {
     Lr();
@@ -30707,8 +32595,8 @@ function ert(w) {
   }
   function IY(t, e, A, n, P) {
     var r, i;
-    for (r = 0, i = 0; i < P; i++) r = at(r, Y1(V(e[i], g1), V(n[i], g1))), t[i] = Ot(r), r = G0(r, 32);
-    for (; i < A; i++) r = at(r, V(e[i], g1)), t[i] = Ot(r), r = G0(r, 32);
+    for (r = 0, i = 0; i < P; i++) r = at2(r, Y1(V(e[i], g1), V(n[i], g1))), t[i] = Ot(r), r = G0(r, 32);
+    for (; i < A; i++) r = at2(r, V(e[i], g1)), t[i] = Ot(r), r = G0(r, 32);
   }
   function xY(t, e, A, n, P) {
     var r, i;
@@ -31967,7 +33855,7 @@ function ert(w) {
       return;
     }
     for (f = 0; f < n; f++) {
-      for (i = 0, r = t[f], D = 0; D < P; D++) i = at(at(yn(V(r, g1), V(e[D], g1)), V(A[f + D], g1)), V(Ot(i), g1)), A[f + D] = Ot(i), i = b0(i, 32);
+      for (i = 0, r = t[f], D = 0; D < P; D++) i = at2(at2(yn(V(r, g1), V(e[D], g1)), V(A[f + D], g1)), V(Ot(i), g1)), A[f + D] = Ot(i), i = b0(i, 32);
       A[f + P] = Ot(i);
     }
   }
@@ -32179,8 +34067,8 @@ function ert(w) {
   }
   function gZ(t, e, A) {
     var n, P, r, i, f, D, Q, o, L;
-    for (L = c(XA, Pe, 6, 1 + t.d[t.d.length - 1], 14, 1), n = 0, i = e, D = 0, o = i.length; D < o; ++D) P = i[D], L[t.d[n]] = at(L[t.d[n]], P << t.b[n]), ++n;
-    for (r = A, f = 0, Q = r.length; f < Q; ++f) P = r[f], L[t.d[n]] = at(L[t.d[n]], P << t.b[n]), ++n;
+    for (L = c(XA, Pe, 6, 1 + t.d[t.d.length - 1], 14, 1), n = 0, i = e, D = 0, o = i.length; D < o; ++D) P = i[D], L[t.d[n]] = at2(L[t.d[n]], P << t.b[n]), ++n;
+    for (r = A, f = 0, Q = r.length; f < Q; ++f) P = r[f], L[t.d[n]] = at2(L[t.d[n]], P << t.b[n]), ++n;
     return L;
   }
   function M5(t, e) {
@@ -32501,8 +34389,8 @@ function ert(w) {
   }
   function SZ(t, e, A, n, P) {
     var r, i, f;
-    for (r = 0, i = 0, f = 0; f < n; f++) r = (Lr(), at(yn(V(A[f], g1), V(P, g1)), V(Ot(r), g1))), i = at(Y1(V(t[e + f], g1), V(r, g1)), i), t[e + f] = Ot(i), i = G0(i, 32), r = b0(r, 32);
-    return i = at(Y1(V(t[e + n], g1), r), i), t[e + n] = Ot(i), Ot(G0(i, 32));
+    for (r = 0, i = 0, f = 0; f < n; f++) r = (Lr(), at2(yn(V(A[f], g1), V(P, g1)), V(Ot(r), g1))), i = at2(Y1(V(t[e + f], g1), V(r, g1)), i), t[e + f] = Ot(i), i = G0(i, 32), r = b0(r, 32);
+    return i = at2(Y1(V(t[e + n], g1), r), i), t[e + n] = Ot(i), Ot(G0(i, 32));
   }
   function IZ(t, e, A, n) {
     var P, r, i, f, D, Q;
@@ -33370,7 +35258,7 @@ function ert(w) {
   }
   function NW(t, e) {
     var A, n, P, r, i;
-    return n = V(e, g1), O(t, 0) >= 0 ? (r = In(t, n), i = n9(t, n)) : (A = b0(t, 1), P = e >>> 1, r = In(A, P), i = n9(A, P), i = at(Wt(i, 1), V(t, 1)), (e & 1) != 0 && (O(r, i) <= 0 ? i = Y1(i, r) : qg(Y1(r, i), n) ? (i = at(i, Y1(n, r)), r = Y1(r, 1)) : (i = at(i, Y1(Wt(n, 1), r)), r = Y1(r, 2)))), z(Wt(i, 32), V(r, g1));
+    return n = V(e, g1), O(t, 0) >= 0 ? (r = In(t, n), i = n9(t, n)) : (A = b0(t, 1), P = e >>> 1, r = In(A, P), i = n9(A, P), i = at2(Wt(i, 1), V(t, 1)), (e & 1) != 0 && (O(r, i) <= 0 ? i = Y1(i, r) : qg(Y1(r, i), n) ? (i = at2(i, Y1(n, r)), r = Y1(r, 1)) : (i = at2(i, Y1(Wt(n, 1), r)), r = Y1(r, 2)))), z(Wt(i, 32), V(r, g1));
   }
   function Xj(t, e) {
     var A, n, P;
@@ -34139,11 +36027,11 @@ function ert(w) {
   }
   function m_(t, e, A) {
     var n, P, r, i, f, D;
-    f = E1(vi[A]), i = Y1(E1(t.e), A), D = E1(t.f), r = In(D, f), P = n9(D, f), O(P, 0) != 0 && (n = Si(Wt(O(P, 0) < 0 ? V0(P) : P, 1), f) ? -1 : I1(Wt(O(P, 0) < 0 ? V0(P) : P, 1), f) ? 1 : 0, r = at(r, KQ(Ot(r) & 1, (O(P, 0) == 0 ? 0 : O(P, 0) < 0 ? -1 : 1) * (5 + n), e.b)), w.Math.log10($9(O(r, 0) < 0 ? V0(r) : r)) >= e.a && (r = In(r, 10), i = Y1(i, 1))), t.e = em($9(i)), t.d = e.a, t.f = $9(r), t.a = vT(r), t.c = null;
+    f = E1(vi[A]), i = Y1(E1(t.e), A), D = E1(t.f), r = In(D, f), P = n9(D, f), O(P, 0) != 0 && (n = Si(Wt(O(P, 0) < 0 ? V0(P) : P, 1), f) ? -1 : I1(Wt(O(P, 0) < 0 ? V0(P) : P, 1), f) ? 1 : 0, r = at2(r, KQ(Ot(r) & 1, (O(P, 0) == 0 ? 0 : O(P, 0) < 0 ? -1 : 1) * (5 + n), e.b)), w.Math.log10($9(O(r, 0) < 0 ? V0(r) : r)) >= e.a && (r = In(r, 10), i = Y1(i, 1))), t.e = em($9(i)), t.d = e.a, t.f = $9(r), t.a = vT(r), t.c = null;
   }
   function TR(t, e, A, n) {
     var P, r, i, f, D, Q, o;
-    for (Q = 0, r = V(n, g1), f = A - 1; f >= 0; f--) o = z(Wt(Q, 32), V(e[f], g1)), O(o, 0) >= 0 ? (D = In(o, r), Q = n9(o, r)) : (P = b0(o, 1), i = n >>> 1, D = In(P, i), Q = n9(P, i), Q = at(Wt(Q, 1), V(o, 1)), (n & 1) != 0 && (O(D, Q) <= 0 ? Q = Y1(Q, D) : qg(Y1(D, Q), r) ? (Q = at(Q, Y1(r, D)), D = Y1(D, 1)) : (Q = at(Q, Y1(Wt(r, 1), D)), D = Y1(D, 2)))), t[f] = Ot(V(D, g1));
+    for (Q = 0, r = V(n, g1), f = A - 1; f >= 0; f--) o = z(Wt(Q, 32), V(e[f], g1)), O(o, 0) >= 0 ? (D = In(o, r), Q = n9(o, r)) : (P = b0(o, 1), i = n >>> 1, D = In(P, i), Q = n9(P, i), Q = at2(Wt(Q, 1), V(o, 1)), (n & 1) != 0 && (O(D, Q) <= 0 ? Q = Y1(Q, D) : qg(Y1(D, Q), r) ? (Q = at2(Q, Y1(r, D)), D = Y1(D, 1)) : (Q = at2(Q, Y1(Wt(r, 1), D)), D = Y1(D, 2)))), t[f] = Ot(V(D, g1));
     return Ot(Q);
   }
   function b_(t) {
@@ -34174,10 +36062,10 @@ function ert(w) {
   function cR(t, e, A) {
     var n, P, r, i, f;
     for (r = 0; r < e; r++) {
-      for (n = 0, f = r + 1; f < e; f++) n = at(at(yn(V(t[r], g1), V(t[f], g1)), V(A[r + f], g1)), V(Ot(n), g1)), A[r + f] = Ot(n), n = b0(n, 32);
+      for (n = 0, f = r + 1; f < e; f++) n = at2(at2(yn(V(t[r], g1), V(t[f], g1)), V(A[r + f], g1)), V(Ot(n), g1)), A[r + f] = Ot(n), n = b0(n, 32);
       A[r + e] = Ot(n);
     }
-    for (YF(A, A, e << 1), n = 0, P = 0, i = 0; P < e; ++P, i++) n = at(at(yn(V(t[P], g1), V(t[P], g1)), V(A[i], g1)), V(Ot(n), g1)), A[i] = Ot(n), n = b0(n, 32), ++i, n = at(n, V(A[i], g1)), A[i] = Ot(n), n = b0(n, 32);
+    for (YF(A, A, e << 1), n = 0, P = 0, i = 0; P < e; ++P, i++) n = at2(at2(yn(V(t[P], g1), V(t[P], g1)), V(A[i], g1)), V(Ot(n), g1)), A[i] = Ot(n), n = b0(n, 32), ++i, n = at2(n, V(A[i], g1)), A[i] = Ot(n), n = b0(n, 32);
     return A;
   }
   function wR(t) {
@@ -34485,12 +36373,12 @@ function ert(w) {
   }
   function X_(t, e, A, n, P) {
     var r, i;
-    if (r = at(V(e[0], g1), V(n[0], g1)), t[0] = Ot(r), r = G0(r, 32), A >= P) {
-      for (i = 1; i < P; i++) r = at(r, at(V(e[i], g1), V(n[i], g1))), t[i] = Ot(r), r = G0(r, 32);
-      for (; i < A; i++) r = at(r, V(e[i], g1)), t[i] = Ot(r), r = G0(r, 32);
+    if (r = at2(V(e[0], g1), V(n[0], g1)), t[0] = Ot(r), r = G0(r, 32), A >= P) {
+      for (i = 1; i < P; i++) r = at2(r, at2(V(e[i], g1), V(n[i], g1))), t[i] = Ot(r), r = G0(r, 32);
+      for (; i < A; i++) r = at2(r, V(e[i], g1)), t[i] = Ot(r), r = G0(r, 32);
     } else {
-      for (i = 1; i < A; i++) r = at(r, at(V(e[i], g1), V(n[i], g1))), t[i] = Ot(r), r = G0(r, 32);
-      for (; i < P; i++) r = at(r, V(n[i], g1)), t[i] = Ot(r), r = G0(r, 32);
+      for (i = 1; i < A; i++) r = at2(r, at2(V(e[i], g1), V(n[i], g1))), t[i] = Ot(r), r = G0(r, 32);
+      for (; i < P; i++) r = at2(r, V(n[i], g1)), t[i] = Ot(r), r = G0(r, 32);
     }
     O(r, 0) != 0 && (t[i] = Ot(r));
   }
@@ -34746,7 +36634,7 @@ function ert(w) {
   }
   function D$(t) {
     var e, A, n, P, r, i, f, D, Q;
-    e = t.a, A = t.b, n = t.c, e = Y1(e, n), e = g0(e, (r = g0(Wt(n, 4), b0(n, 28)), r)), n = at(n, A), A = Y1(A, e), A = g0(A, (i = g0(Wt(e, 6), b0(e, 26)), i)), e = at(e, n), n = Y1(n, A), n = g0(n, (f = g0(Wt(A, 8), b0(A, 24)), f)), A = at(A, e), e = Y1(e, n), e = g0(e, (D = g0(Wt(n, 16), b0(n, 16)), D)), n = at(n, A), A = Y1(A, e), A = g0(A, (Q = g0(Wt(e, 19), b0(e, 13)), Q)), e = at(e, n), n = Y1(n, A), n = g0(n, (P = g0(Wt(A, 4), b0(A, 28)), P)), A = at(A, e), t.a = e, t.b = A, t.c = n;
+    e = t.a, A = t.b, n = t.c, e = Y1(e, n), e = g0(e, (r = g0(Wt(n, 4), b0(n, 28)), r)), n = at2(n, A), A = Y1(A, e), A = g0(A, (i = g0(Wt(e, 6), b0(e, 26)), i)), e = at2(e, n), n = Y1(n, A), n = g0(n, (f = g0(Wt(A, 8), b0(A, 24)), f)), A = at2(A, e), e = Y1(e, n), e = g0(e, (D = g0(Wt(n, 16), b0(n, 16)), D)), n = at2(n, A), A = Y1(A, e), A = g0(A, (Q = g0(Wt(e, 19), b0(e, 13)), Q)), e = at2(e, n), n = Y1(n, A), n = g0(n, (P = g0(Wt(A, 4), b0(A, 28)), P)), A = at2(A, e), t.a = e, t.b = A, t.c = n;
   }
   function d2(t, e, A, n) {
     var P, r, i, f, D, Q, o, L, s, y, l, h, T, g, v;
@@ -35671,7 +37559,7 @@ function ert(w) {
   function ta(t) {
     var e, A, n, P, r, i, f;
     for (t.L = true, n = o5(t), t.P && h2(t.P, t.f) && (n = o5(t)), U2(t, false) && g2(t), i = true; t.U < t.R.g && i; ) {
-      for (P = z$(t, n), e = 0; e < t.R.g; e++) AA(t.e[e], e), a1(t.e[e], t.c, t.f[e]), a1(t.e[e], 20, 0), !t.cb[e] && t.bb[e] != 0 && Le(t.e[e], at(t.bb[e] << 18, Wt(P[t.bb[e] == 1 ? 0 : 1][t.ab[e]], 8))), f = t.db[e], t.eb[e] && (f == 1 ? f = 2 : f == 2 && (f = 1)), Le(t.e[e], f << 4);
+      for (P = z$(t, n), e = 0; e < t.R.g; e++) AA(t.e[e], e), a1(t.e[e], t.c, t.f[e]), a1(t.e[e], 20, 0), !t.cb[e] && t.bb[e] != 0 && Le(t.e[e], at2(t.bb[e] << 18, Wt(P[t.bb[e] == 1 ? 0 : 1][t.ab[e]], 8))), f = t.db[e], t.eb[e] && (f == 1 ? f = 2 : f == 2 && (f = 1)), Le(t.e[e], f << 4);
       for (A = 0; A < t.R.i; A++) Le(t.e[q(t.R, 0, A)], t.o[A]), Le(t.e[q(t.R, 1, A)], t.o[A]);
       if (r = tP(t), t.U == r) break;
       t.U = r, i = false, t.P && h2(t.P, t.f) && (i = true, n = o5(t)), U2(t, false) && (i = true, g2(t));
@@ -36121,7 +38009,7 @@ function ert(w) {
     var A, n, P, r, i, f, D, Q, o, L, s, y, l;
     if (i = t.e, D = e.e, i == 0) return e;
     if (D == 0) return t;
-    if (r = t.d, f = e.d, r + f == 2) return A = V(t.a[0], g1), n = V(e.a[0], g1), i == D ? (o = at(A, n), l = Ot(o), y = Ot(b0(o, 32)), y == 0 ? new RA(i, l) : new ye(i, 2, m(k(B, 1), F, 6, 15, [l, y]))) : (Ce(), ku(i < 0 ? Y1(n, A) : Y1(A, n), 0) ? me(i < 0 ? Y1(n, A) : Y1(A, n)) : mP(me(V0(i < 0 ? Y1(n, A) : Y1(A, n)))));
+    if (r = t.d, f = e.d, r + f == 2) return A = V(t.a[0], g1), n = V(e.a[0], g1), i == D ? (o = at2(A, n), l = Ot(o), y = Ot(b0(o, 32)), y == 0 ? new RA(i, l) : new ye(i, 2, m(k(B, 1), F, 6, 15, [l, y]))) : (Ce(), ku(i < 0 ? Y1(n, A) : Y1(A, n), 0) ? me(i < 0 ? Y1(n, A) : Y1(A, n)) : mP(me(V0(i < 0 ? Y1(n, A) : Y1(A, n)))));
     if (i == D) s = i, L = r >= f ? VL(t.a, r, e.a, f) : VL(e.a, f, t.a, r);
     else {
       if (P = r != f ? r > f ? 1 : -1 : yQ(t.a, e.a, r), P == 0) return Ce(), vr;
@@ -36624,7 +38512,7 @@ function ert(w) {
   }
   function Ha(t, e, A) {
     var n, P, r, i, f, D, Q, o, L;
-    return r = fR(t, e), i = r[0], D = r[1], D.e == 0 ? new ID(i, 2) : (Q = t.e * e.e, IT(e) < 54 ? (f = (L = D.d > 1 ? Xr(D.a[0], D.a[1]) : Xr(D.a[0], 0), D.e > 0 ? L : V0(L)), P = (o = e.d > 1 ? Xr(e.a[0], e.a[1]) : Xr(e.a[0], 0), e.e > 0 ? o : V0(o)), n = Si(Wt(O(f, 0) < 0 ? V0(f) : f, 1), O(P, 0) < 0 ? V0(P) : P) ? -1 : I1(Wt(O(f, 0) < 0 ? V0(f) : f, 1), O(P, 0) < 0 ? V0(P) : P) ? 1 : 0, n = KQ(IQ(i, 0) ? 1 : 0, Q * (5 + n), A)) : (n = ys(_k(D.e < 0 ? D.e == 0 ? D : new ye(-D.e, D.d, D.a) : D), e.e < 0 ? e.e == 0 ? e : new ye(-e.e, e.d, e.a) : e), n = KQ(IQ(i, 0) ? 1 : 0, Q * (5 + n), A)), n != 0 ? IT(i) < 54 ? Pq((o = i.d > 1 ? Xr(i.a[0], i.a[1]) : Xr(i.a[0], 0), at(i.e > 0 ? o : V0(o), n))) : (i = v2(i, (Ce(), O(n, 0) >= 0 ? me(n) : mP(me(V0(n))))), new ID(i, 2)) : new ID(i, 2));
+    return r = fR(t, e), i = r[0], D = r[1], D.e == 0 ? new ID(i, 2) : (Q = t.e * e.e, IT(e) < 54 ? (f = (L = D.d > 1 ? Xr(D.a[0], D.a[1]) : Xr(D.a[0], 0), D.e > 0 ? L : V0(L)), P = (o = e.d > 1 ? Xr(e.a[0], e.a[1]) : Xr(e.a[0], 0), e.e > 0 ? o : V0(o)), n = Si(Wt(O(f, 0) < 0 ? V0(f) : f, 1), O(P, 0) < 0 ? V0(P) : P) ? -1 : I1(Wt(O(f, 0) < 0 ? V0(f) : f, 1), O(P, 0) < 0 ? V0(P) : P) ? 1 : 0, n = KQ(IQ(i, 0) ? 1 : 0, Q * (5 + n), A)) : (n = ys(_k(D.e < 0 ? D.e == 0 ? D : new ye(-D.e, D.d, D.a) : D), e.e < 0 ? e.e == 0 ? e : new ye(-e.e, e.d, e.a) : e), n = KQ(IQ(i, 0) ? 1 : 0, Q * (5 + n), A)), n != 0 ? IT(i) < 54 ? Pq((o = i.d > 1 ? Xr(i.a[0], i.a[1]) : Xr(i.a[0], 0), at2(i.e > 0 ? o : V0(o), n))) : (i = v2(i, (Ce(), O(n, 0) >= 0 ? me(n) : mP(me(V0(n))))), new ID(i, 2)) : new ID(i, 2));
   }
   function yp(t) {
     var e, A, n, P, r, i, f, D, Q;
@@ -37133,14 +39021,14 @@ function ert(w) {
     var i, f, D, Q, o, L, s, y, l, h, T, g, v, d, b, j, R, C;
     for (T = c(B, F, 6, n + 1, 15, 1), g = c(B, F, 6, r + 1, 15, 1), v = r, D = D9(P[r - 1]), D != 0 ? (i5(g, P, 0, D), i5(T, A, 0, D)) : (PA(A, 0, T, 0, n), PA(P, 0, g, 0, r)), Q = g[v - 1], L = e - 1, s = n; L >= 0; ) {
       if (o = 0, T[s] == Q) o = -1;
-      else if (d = at(Wt(V(T[s], g1), 32), V(T[s - 1], g1)), R = NW(d, Q), o = Ot(R), j = Ot(G0(R, 32)), o != 0) {
+      else if (d = at2(Wt(V(T[s], g1), 32), V(T[s - 1], g1)), R = NW(d, Q), o = Ot(R), j = Ot(G0(R, 32)), o != 0) {
         l = 0, C = 0, b = false, ++o;
         do {
           if (--o, b) break;
-          l = yn(V(o, g1), V(g[v - 2], g1)), C = at(Wt(j, 32), V(T[s - 2], g1)), h = at(V(j, g1), V(Q, g1)), D9(Ot(b0(h, 32))) < 32 ? b = true : j = Ot(h);
+          l = yn(V(o, g1), V(g[v - 2], g1)), C = at2(Wt(j, 32), V(T[s - 2], g1)), h = at2(V(j, g1), V(Q, g1)), D9(Ot(b0(h, 32))) < 32 ? b = true : j = Ot(h);
         } while (I1(g0(l, QE), g0(C, QE)));
       }
-      if (o != 0 && (i = SZ(T, s - v, g, v, o), i != 0)) for (--o, f = 0, y = 0; y < v; y++) f = at(f, at(V(T[s - v + y], g1), V(g[y], g1))), T[s - v + y] = Ot(f), f = b0(f, 32);
+      if (o != 0 && (i = SZ(T, s - v, g, v, o), i != 0)) for (--o, f = 0, y = 0; y < v; y++) f = at2(f, at2(V(T[s - v + y], g1), V(g[y], g1))), T[s - v + y] = Ot(f), f = b0(f, 32);
       t[L] = o, --s, --L;
     }
     return D != 0 ? (Sb(g, v, T, 0, D), g) : (PA(T, 0, g, 0, r), T);
@@ -37990,32 +39878,32 @@ function ert(w) {
   }
   function ktt(t, e) {
     var A, n, P, r, i;
-    for (i = e, A = n = P = at(at(-559038737, i), 13), p1.a = A, p1.b = n, p1.c = P, r = 0; i > 12; ) p1.a = at(p1.a, t[r]), p1.a = at(p1.a, Wt(t[r + 1], 8)), p1.a = at(p1.a, Wt(t[r + 2], 16)), p1.a = at(p1.a, Wt(t[r + 3], 24)), p1.b = at(p1.b, t[r + 4]), p1.b = at(p1.b, Wt(t[r + 5], 8)), p1.b = at(p1.b, Wt(t[r + 6], 16)), p1.b = at(p1.b, Wt(t[r + 7], 24)), p1.c = at(p1.c, t[r + 8]), p1.c = at(p1.c, Wt(t[r + 9], 8)), p1.c = at(p1.c, Wt(t[r + 10], 16)), p1.c = at(p1.c, Wt(t[r + 11], 24)), D$(p1), i -= 12, r += 12;
+    for (i = e, A = n = P = at2(at2(-559038737, i), 13), p1.a = A, p1.b = n, p1.c = P, r = 0; i > 12; ) p1.a = at2(p1.a, t[r]), p1.a = at2(p1.a, Wt(t[r + 1], 8)), p1.a = at2(p1.a, Wt(t[r + 2], 16)), p1.a = at2(p1.a, Wt(t[r + 3], 24)), p1.b = at2(p1.b, t[r + 4]), p1.b = at2(p1.b, Wt(t[r + 5], 8)), p1.b = at2(p1.b, Wt(t[r + 6], 16)), p1.b = at2(p1.b, Wt(t[r + 7], 24)), p1.c = at2(p1.c, t[r + 8]), p1.c = at2(p1.c, Wt(t[r + 9], 8)), p1.c = at2(p1.c, Wt(t[r + 10], 16)), p1.c = at2(p1.c, Wt(t[r + 11], 24)), D$(p1), i -= 12, r += 12;
     switch (i) {
       case 12:
-        p1.c = at(p1.c, Wt(t[r + 11], 24));
+        p1.c = at2(p1.c, Wt(t[r + 11], 24));
       case 11:
-        p1.c = at(p1.c, Wt(t[r + 10], 16));
+        p1.c = at2(p1.c, Wt(t[r + 10], 16));
       case 10:
-        p1.c = at(p1.c, Wt(t[r + 9], 8));
+        p1.c = at2(p1.c, Wt(t[r + 9], 8));
       case 9:
-        p1.c = at(p1.c, t[8]);
+        p1.c = at2(p1.c, t[8]);
       case 8:
-        p1.b = at(p1.b, Wt(t[r + 7], 24));
+        p1.b = at2(p1.b, Wt(t[r + 7], 24));
       case 7:
-        p1.b = at(p1.b, Wt(t[r + 6], 16));
+        p1.b = at2(p1.b, Wt(t[r + 6], 16));
       case 6:
-        p1.b = at(p1.b, Wt(t[r + 5], 8));
+        p1.b = at2(p1.b, Wt(t[r + 5], 8));
       case 5:
-        p1.b = at(p1.b, t[4]);
+        p1.b = at2(p1.b, t[4]);
       case 4:
-        p1.a = at(p1.a, Wt(t[r + 3], 24));
+        p1.a = at2(p1.a, Wt(t[r + 3], 24));
       case 3:
-        p1.a = at(p1.a, Wt(t[r + 2], 16));
+        p1.a = at2(p1.a, Wt(t[r + 2], 16));
       case 2:
-        p1.a = at(p1.a, Wt(t[r + 1], 8));
+        p1.a = at2(p1.a, Wt(t[r + 1], 8));
       case 1:
-        p1.a = at(p1.a, t[r]);
+        p1.a = at2(p1.a, t[r]);
         break;
       case 0:
         return Ot(p1.c);
@@ -38045,7 +39933,7 @@ function ert(w) {
     }
     o = 18, L = c(Fr, Pe, 6, o + 1, 15, 1), A = o, h = t;
     do
-      Q = h, h = In(h, 10), L[--A] = Ot(at(48, Y1(Q, yn(h, 10)))) & d1;
+      Q = h, h = In(h, 10), L[--A] = Ot(at2(48, Y1(Q, yn(h, 10)))) & d1;
     while (O(h, 0) != 0);
     if (P = Y1(Y1(Y1(o, A), e), 1), e == 0) return D && (L[--A] = 45), PP(L, A, o - A);
     if (e > 0 && O(P, -6) >= 0) {
@@ -38053,7 +39941,7 @@ function ert(w) {
         for (r = A + Ot(P), f = o - 1; f >= r; f--) L[f + 1] = L[f];
         return L[++r] = 46, D && (L[--A] = 45), PP(L, A, o - A + 1);
       }
-      for (i = 2; Si(i, at(V0(P), 1)); i++) L[--A] = 48;
+      for (i = 2; Si(i, at2(V0(P), 1)); i++) L[--A] = 48;
       return L[--A] = 46, L[--A] = 48, D && (L[--A] = 45), PP(L, A, o - A);
     }
     return l = A + 1, n = o, s = new Vr(), D && (s.a += "-"), n - l >= 1 ? (Ye(s, L[A]), s.a += ".", s.a += PP(L, A + 1, o - A - 1)) : s.a += PP(L, A, o - A), s.a += "E", O(P, 0) > 0 && (s.a += "+"), s.a += "" + ve(P), s.a;
@@ -38097,7 +39985,7 @@ function ert(w) {
   }
   function Ip(t, e, A) {
     var n, P, r, i, f, D, Q, o, L, s, y, l, h;
-    for (t.v = A0(t.w, 0) ? 0 : (z1(), at(E1(Date.now()), t.w)), MI(t.r, t.v), t.t = null, ut(e, 1), P = 0; P < e.g; P++) if (G1(e, P) > (h = Sn(e, P), h + An(e, P, h, e.D[P]))) return false;
+    for (t.v = A0(t.w, 0) ? 0 : (z1(), at2(E1(Date.now()), t.w)), MI(t.r, t.v), t.t = null, ut(e, 1), P = 0; P < e.g; P++) if (G1(e, P) > (h = Sn(e, P), h + An(e, P, h, e.D[P]))) return false;
     if (oW(e), e.T = true, i = null, o = null, f = null, L = null, (e.U & 8) != 0) {
       for (i = c(B, F, 6, e.g, 15, 1), f = c(Pt, it, 6, e.g, 16, 1), r = 0; r < e.g; r++) i[r] = e.v[r] & 3, f[r] = (e.v[r] & 4) != 0;
       for (o = c(B, F, 6, e.i, 15, 1), L = c(Pt, it, 6, e.i, 16, 1), Q = 0; Q < e.i; Q++) o[Q] = e.G[Q] & 3, L[Q] = (e.G[Q] & 4) != 0;
@@ -38751,10 +40639,10 @@ function ert(w) {
     for (ut(t, 7), y = c(XA, Pe, 6, t.k[e], 14, 1), s = 0, D = 0; D < t.k[e]; D++) if (P = t.j[e][D], t.D[P] != 1) {
       if (i = 0, (A & 32) != 0 && (r = t.o[e][D], A == 32190 ? O(r, 3) < 0 && Z8(t, t.n[e][D]) && t.p[e] == 1 && (r = 0) : O(r, 3) < 0 && eA(t, t.n[e][D]) && (r = 0), i = z(i, Wt(r, 4))), (A & 128) != 0) {
         if (po[t.D[P]] == -1) throw et(new H1(X6 + t.D[P]));
-        i = at(i, po[t.D[P]]);
+        i = at2(i, po[t.D[P]]);
       } else if ((A & 64) != 0) {
         if (K4[t.D[P]] == -1) throw et(new H1(X6 + t.D[P]));
-        i = at(i, K4[t.D[P]]);
+        i = at2(i, K4[t.D[P]]);
       }
       for ((A & 256) != 0 && (l = t.k[P] - 1, l > 3 && (l = 3), (A & 512) == 0 && l > 1 && (l = 1), i = z(i, l << 6)), (A & ue) != 0 && (t.v[P] & 8) != 0 && (i = z(i, 256)), (A & q1) != 0 && P < t.g && i0(t.q, P) && (i = z(i, 512)), (A & On) != 0 && (t.v[P] & be) != 0 && (i = z(i, ue)), o = 0; O(i, y[o]) < 0; ) ++o;
       for (L = D; L > o; L--) y[L] = y[L - 1];
@@ -38805,7 +40693,7 @@ function ert(w) {
     else {
       I = c(B, F, 6, l, 15, 1), H = l, PA(P, 0, I, 0, H);
       t: for (; ; ) {
-        for (C = 0, Q = H - 1; Q >= 0; Q--) a = at(Wt(C, 32), V(I[Q], g1)), g = HY(a), I[Q] = Ot(g), C = Ot(G0(g, 32));
+        for (C = 0, Q = H - 1; Q >= 0; Q--) a = at2(Wt(C, 32), V(I[Q], g1)), g = HY(a), I[Q] = Ot(g), C = Ot(G0(g, 32));
         v = Ot(C), T = A;
         do
           b[--A] = 48 + v % 10 & d1;
@@ -44067,7 +45955,7 @@ Actelion Java MolfileCreator 2.0
     return e === this ? true : Jt(e, 172) ? (A = e, this.c == A.c && this.d == A.d && this.b == A.b && this.a == A.a) : false;
   }, U.ob = function() {
     var e;
-    return e = vs(this.c), e = at(e, yn(vs(this.d), 37)), e = at(e, yn(vs(this.b), 43)), e = at(e, yn(vs(this.a), 47)), Ot(e) ^ Ot(G0(e, 32));
+    return e = vs(this.c), e = at2(e, yn(vs(this.d), 37)), e = at2(e, yn(vs(this.b), 43)), e = at2(e, yn(vs(this.a), 47)), Ot(e) ^ Ot(G0(e, 32));
   };
   var QDt = M(253);
   p(172, 253, { 253: 1, 172: 1 }, d3), U.a = 0, U.b = 0, U.c = 0, U.d = 0;
@@ -45851,12 +47739,12 @@ function foldable(s, degree2, order, h, x) {
   if (a.atomicNumber !== 1 || a.isotope !== null || a.charge !== 0 || a.radical !== 0) return false;
   return a.mapNumber === null && degree2[h] === 1 && order === 1 && s.atoms[x].atomicNumber !== 1;
 }
-function remapStereo(e, at, lig) {
+function remapStereo(e, at2, lig) {
   if (e.kind === "tetrahedral") {
     const l2 = e.ligands;
     return {
       kind: e.kind,
-      centre: at(e.centre),
+      centre: at2(e.centre),
       ligands: [lig(l2[0]), lig(l2[1]), lig(l2[2]), lig(l2[3])],
       winding: e.winding
     };
@@ -45864,7 +47752,7 @@ function remapStereo(e, at, lig) {
   if (e.kind === "double-bond") {
     return {
       kind: e.kind,
-      ends: [at(e.ends[0]), at(e.ends[1])],
+      ends: [at2(e.ends[0]), at2(e.ends[1])],
       refs: [lig(e.refs[0]), lig(e.refs[1])],
       relation: e.relation
     };
@@ -45873,7 +47761,7 @@ function remapStereo(e, at, lig) {
   return {
     kind: e.kind,
     subtype: e.subtype,
-    ends: [at(e.ends[0]), at(e.ends[1])],
+    ends: [at2(e.ends[0]), at2(e.ends[1])],
     ligands: [lig(l[0]), lig(l[1]), lig(l[2]), lig(l[3])],
     winding: e.winding
   };
@@ -45916,10 +47804,10 @@ function normalize(s) {
     if (foldInto[b.a] < 0 && foldInto[b.b] < 0)
       bonds.push(newBond(fromInput[b.a], fromInput[b.b], b.order, b.aromatic, b.wedge));
   }
-  const at = (x) => fromInput[x];
+  const at2 = (x) => fromInput[x];
   const lig = (x) => x < 0 ? x : foldInto[x] >= 0 ? IMPLICIT_H : fromInput[x];
   const stereo = objectList();
-  for (const e of s.stereo) stereo.push(remapStereo(e, at, lig));
+  for (const e of s.stereo) stereo.push(remapStereo(e, at2, lig));
   const groups = objectList();
   for (const g of s.groups) {
     const ga = [];
@@ -45932,7 +47820,7 @@ function extractAtoms(s, atoms) {
   const index = new Int32Array(s.atoms.length).fill(-1);
   atoms.forEach((a, k) => index[a] = k);
   const keep = (x) => x < 0 || index[x] >= 0;
-  const at = (x) => index[x];
+  const at2 = (x) => index[x];
   const lig = (x) => x < 0 ? x : index[x];
   const stereo = objectList();
   for (const e of s.stereo) {
@@ -45941,7 +47829,7 @@ function extractAtoms(s, atoms) {
     } else if (e.kind === "double-bond") {
       if (!e.ends.every(keep) || !e.refs.every(keep)) continue;
     } else if (!e.ends.every(keep) || !e.ligands.every(keep)) continue;
-    stereo.push(remapStereo(e, at, lig));
+    stereo.push(remapStereo(e, at2, lig));
   }
   const subAtoms = objectList();
   for (const a of atoms) subAtoms.push(s.atoms[a]);
@@ -45977,7 +47865,7 @@ function analyse(input, opts = {}) {
   for (let k = 0; k < m; k++) {
     if (!reported[k] && p.units[k].defined && p.units[k].kind !== "planar" && p.structure.dimension !== 3) {
       p.remarks.push(
-        `${unitName(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
+        `${unitName2(p, k)} is drawn with a configuration but is not stereogenic in this stereoisomer (its two equivalent branches are alike); not listed`
       );
     }
   }
@@ -46005,7 +47893,7 @@ function stereogenicSomewhere(g, x, defined, k) {
   }
   return !seenFeasible;
 }
-function unitName(p, k) {
+function unitName2(p, k) {
   const u = p.units[k];
   const s = p.structure;
   return u.atoms.length === 1 ? atomName(s, u.atoms[0]) : `the ${atomName(s, u.atoms[0])}–${atomName(s, u.atoms[1])} unit`;
@@ -46279,7 +48167,7 @@ function describe(input, opts = {}) {
   let stoppedLabels = 0;
   if (s.stereo.length > 0) {
     for (const r of labelUnits(s)) {
-      if (r.label) labels.set(unitKey(r.atoms), r.label);
+      if (r.label) labels.set(unitKey2(r.atoms), r.label);
       else if (r.stopped) stoppedLabels++;
     }
   }
@@ -46323,7 +48211,7 @@ function describe(input, opts = {}) {
     remarks: p.remarks.slice()
   };
   for (const u of unstatable) {
-    facts.remarks.push(unstatedRemark(u));
+    facts.remarks.push(unstatedRemark(u, s));
   }
   if (openAxes.length > 0) {
     facts.mirror = {
@@ -46378,7 +48266,7 @@ function unitFacts(a, labels) {
     if (!a.reported[k]) return;
     const ck = u.atoms.map((x) => p.classes[x]).sort((x, y) => x - y).join(",") + u.kind;
     if (!classIds.has(ck)) classIds.set(ck, classIds.size);
-    const label = !u.defined || u.kind === "planar" ? null : u.kind === "helix" ? u.bit === 0 ? "P" : "M" : labels.get(unitKey(u.atoms)) ?? null;
+    const label = !u.defined || u.kind === "planar" ? null : u.kind === "helix" ? u.bit === 0 ? "P" : "M" : labels.get(unitKey2(u.atoms)) ?? null;
     let pseudo = label !== null && label === label.toLowerCase();
     if (fullyDefined && u.mode === "parity" && !pseudo) {
       pseudo = group.perms.some((perm, h) => perm[k] === k && mirrorFixed(group, h, state));
@@ -46404,11 +48292,31 @@ function cannotState(kind, dimension) {
   if (kind === "planar") return dimension !== 3;
   return dimension === 0 && (kind === "biaryl" || kind === "helix");
 }
-function unstatedRemark(u) {
+function unstatedRemark(u, s) {
   const [x, y] = u.atoms;
   const what = u.kind === "biaryl" ? `the bond between atoms ${x} and ${y} is a potential stereogenic axis (ortho-substituted biaryl, found by a rule of thumb on ortho substitution: common practice, no source)` : u.kind === "helix" ? `the ortho-fused rings ending at atoms ${x} and ${y} form a helix` : `the trans double bond between atoms ${x} and ${y} lies in a ring of 8–11 atoms and is twisted (planar chiral, as (E)-cyclooctene)`;
-  const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
+  if (u.kind === "biaryl") {
+    const wedge = wedgeNearAxis(s, x, y);
+    if (wedge !== null)
+      return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
+  }
+  const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
   return `${what}; the input format cannot state its configuration: ${then}`;
+}
+function wedgeNearAxis(s, x, y) {
+  const near = /* @__PURE__ */ new Set();
+  for (const b of s.bonds) {
+    const na = s.atoms[b.a].inputNumber;
+    const nb = s.atoms[b.b].inputNumber;
+    if (na === x || na === y) near.add(b.b);
+    if (nb === x || nb === y) near.add(b.a);
+  }
+  for (const b of s.bonds) {
+    if (b.wedge !== "up" && b.wedge !== "down") continue;
+    const na = s.atoms[b.a].inputNumber;
+    if (na === x || na === y || near.has(b.a)) return [na, s.atoms[b.b].inputNumber];
+  }
+  return null;
 }
 function mirrorFixed(g, h, x) {
   const perm = g.perms[h];
@@ -46462,7 +48370,7 @@ function componentFacts(a, parent, copies, ofParent) {
     return f;
   });
 }
-var unitKey;
+var unitKey2;
 var init_describe = __esm({
   "src/chem/describe/describe.ts"() {
     "use strict";
@@ -46476,7 +48384,7 @@ var init_describe = __esm({
     init_mixture();
     init_evidence();
     init_isomer_list();
-    unitKey = (atoms) => [...atoms].sort((a, b) => a - b).join(",");
+    unitKey2 = (atoms) => [...atoms].sort((a, b) => a - b).join(",");
   }
 });
 
@@ -47032,482 +48940,167 @@ var init_chem = __esm({
   }
 });
 
-// src/chem/descriptors-compare.ts
-function key2(label, axialUnit) {
-  if (axialUnit && label === "R") return "M";
-  if (axialUnit && label === "S") return "P";
-  return label;
-}
-function mirrored(k) {
-  return MIRROR[k] ?? k;
-}
-function unitKey2(u) {
-  return u.label === null ? null : key2(u.label, AXIAL_KINDS.has(u.kind) && u.kind !== "cumulene");
-}
-function itemKey(it) {
-  return key2(it.label, it.axial === true);
-}
-function unitLocants(u) {
-  return u.locants.filter((l) => l !== null).sort((a, b) => a - b);
-}
-function count2(keys) {
-  const c = {};
-  for (const k of keys) c[k] = (c[k] ?? 0) + 1;
-  return c;
-}
-function sameCounts(a, b) {
-  const ks = /* @__PURE__ */ new Set([...Object.keys(a), ...Object.keys(b)]);
-  for (const k of ks) if ((a[k] ?? 0) !== (b[k] ?? 0)) return false;
-  return true;
-}
-function invertCounts(c) {
-  const o = {};
-  for (const [k, v] of Object.entries(c)) o[mirrored(k)] = (o[mirrored(k)] ?? 0) + v;
-  return o;
-}
-function compareDescriptors(parsed, units, options = {}) {
-  const defined = units.filter((u) => u.defined && u.label !== null);
-  const result2 = {
-    method: "none",
-    whyNotPerLocant: null,
-    countsDecide: false,
-    agrees: true,
-    matchedInverted: false,
-    mismatches: [],
-    notStereoUnits: [],
-    undefinedAt: [],
-    unlisted: [],
-    declaredCounts: count2(parsed.items.map(itemKey)),
-    computedCounts: count2(defined.map((u) => unitKey2(u)))
-  };
-  if (parsed.items.length === 0) {
-    result2.whyNotPerLocant = "the descriptor cites no configurations";
-    return result2;
-  }
-  const mayInvert = parsed.mode === "racemic" || parsed.mode === "relative" || options.achiral === true;
-  const mapped = units.some((u) => unitLocants(u).length > 0);
-  const numeric = parsed.items.every((it) => it.locant !== null && /^\d+$/.test(it.locant));
-  const single = mapped && numeric ? null : matchOnePerKind(parsed.items, units);
-  if (mapped && numeric || single) {
-    result2.method = single ? "per-unit" : "per-locant";
-    const byLocant = (n) => units.find((u) => unitLocants(u)[0] === n) ?? units.find((u) => unitLocants(u).includes(n));
-    const pairs = single ?? [];
-    if (!single) {
-      for (const it of parsed.items) {
-        const u = byLocant(Number(it.locant));
-        if (!u) result2.notStereoUnits.push(it.locant);
-        else if (!u.defined || u.label === null) result2.undefinedAt.push(it.locant);
-        else pairs.push({ it, u });
-      }
-    }
-    const mismatchesFor = (invert) => pairs.filter(({ it, u }) => (invert ? mirrored(unitKey2(u)) : unitKey2(u)) !== itemKey(it)).map(({ it, u }) => ({
-      locant: it.locant ?? "",
-      declared: it.pair ?? it.label + (it.axial ? "a" : ""),
-      computed: u.label,
-      atoms: u.atoms
-    }));
-    const direct2 = mismatchesFor(false);
-    const inverted2 = mayInvert ? mismatchesFor(true) : direct2;
-    result2.matchedInverted = mayInvert && inverted2.length < direct2.length;
-    result2.mismatches = result2.matchedInverted ? inverted2 : direct2;
-    const cited = new Set(pairs.map((p) => p.u));
-    for (const u of defined) {
-      if (!cited.has(u)) {
-        result2.unlisted.push({
-          locant: single ? null : unitLocants(u)[0]?.toString() ?? null,
-          label: u.label,
-          atoms: u.atoms
-        });
-      }
-    }
-    result2.agrees = result2.mismatches.length === 0 && result2.notStereoUnits.length === 0 && result2.undefinedAt.length === 0;
-    return result2;
-  }
-  result2.method = "counts";
-  result2.whyNotPerLocant = !mapped ? "the structure carries no atom-map numbers on its stereo units" : "not every descriptor has a plain numeric locant";
-  const direct = sameCounts(result2.declaredCounts, result2.computedCounts);
-  const inverted = mayInvert && sameCounts(invertCounts(result2.declaredCounts), result2.computedCounts);
-  result2.agrees = direct || inverted;
-  result2.matchedInverted = !direct && inverted;
-  result2.countsDecide = result2.agrees && countsDecide(parsed.items, units, mayInvert);
-  return result2;
-}
-function kindOfKey(k) {
-  if (k === "R" || k === "S") return "RS";
-  if (k === "r" || k === "s") return "rs";
-  if (k === "M" || k === "P") return "MP";
-  if (k === "m" || k === "p") return "mp";
-  if (k === "E" || k === "Z" || k === "e" || k === "z") return "EZ";
-  return "other";
-}
-function kindOfUnit(u) {
-  const k = unitKey2(u);
-  if (k !== null) return kindOfKey(k);
-  if (u.kind === "tetrahedral") return u.pseudoasymmetric ? "rs" : "RS";
-  if (u.kind === "double-bond") return "EZ";
-  if (u.kind === "allene" || u.kind === "biaryl") return "MP";
-  return "other";
-}
-function matchOnePerKind(items, units) {
-  if (units.some((u) => kindOfUnit(u) === "other")) return null;
-  const pairs = [];
-  for (const it of items) {
-    const kind = kindOfKey(itemKey(it));
-    const sameKindItems = items.filter((x) => kindOfKey(itemKey(x)) === kind);
-    const sameKindUnits = units.filter((u2) => kindOfUnit(u2) === kind);
-    if (kind === "other" || sameKindItems.length !== 1 || sameKindUnits.length !== 1) return null;
-    const u = sameKindUnits[0];
-    if (!u.defined || u.label === null) return null;
-    pairs.push({ it, u });
-  }
-  return pairs;
-}
-function countsDecide(items, units, mayInvert) {
-  const kinds = new Set(items.map((it) => kindOfKey(itemKey(it))));
-  let chiralUnits = 0;
-  let uniform = true;
-  for (const kind of kinds) {
-    const ofKind = units.filter((u) => kindOfUnit(u) === kind);
-    if (kind === "other" || ofKind.some((u) => !u.defined || u.label === null)) return false;
-    if (kind === "RS" || kind === "MP") chiralUnits += ofKind.length;
-    if (new Set(ofKind.map((u) => unitKey2(u))).size > 1) {
-      if (!(mayInvert && kind === "RS" && ofKind.length === 2)) return false;
-      uniform = false;
-    }
-  }
-  return uniform || chiralUnits === 2;
-}
-var MIRROR, AXIAL_KINDS;
-var init_descriptors_compare = __esm({
-  "src/chem/descriptors-compare.ts"() {
-    "use strict";
-    MIRROR = { R: "S", S: "R", M: "P", P: "M" };
-    AXIAL_KINDS = /* @__PURE__ */ new Set(["allene", "biaryl", "cumulene", "helix"]);
-  }
-});
-
-// src/chem/descriptors.ts
-function foldSigns(text) {
-  let out = "";
-  for (const ch of text) out += MINUS_LIKE.includes(ch) ? "-" : PLUS_LIKE.includes(ch) ? "+" : ch;
-  return out;
-}
-function parseDescriptors(input, options = {}) {
-  const context = options.context ?? "descriptor";
-  const out = {
-    mode: "none",
-    rotationSign: null,
-    items: [],
-    problems: [],
-    problemDetails: [],
-    remarks: [],
-    prefixes: [],
-    words: [],
-    fischer: null,
-    rest: "",
-    embeddedDescriptors: false
-  };
-  const problem = (offset, message) => {
-    out.problemDetails.push({ offset, message });
-    out.problems.push(`at character ${offset}: ${message}`);
-  };
-  const signs = [];
-  let i = skipSpace(input, 0);
-  for (; ; ) {
-    if (i >= input.length) break;
-    const ch = input[i];
-    let consumed = false;
-    if (ch === "(" || ch === "[") {
-      const close2 = ch === "(" ? ")" : "]";
-      const end = input.indexOf(close2, i + 1);
-      const inner = end < 0 ? "" : input.slice(i + 1, end);
-      if (end >= 0 && !/[([]/.test(inner)) {
-        const g = parseGroup(inner, i + 1, context, problem);
-        if (g.kind !== "not-stereo") {
-          consumed = true;
-          if (g.sign) signs.push({ sign: g.sign, offset: i });
-          out.items.push(...g.items);
-          for (const w of g.words) addWord(out, w);
-          if (g.legacyPair) {
-            out.legacyPair = true;
-            out.remarks.push(
-              `${g.legacyPair} without locants is the legacy way of naming a racemate and is read as (${g.items[0].pair}); IUPAC 2013 (P-93.1.3) writes (RS) or rac-`
-            );
-          }
-          i = end + 1;
-        }
-      } else if (end < 0 && context === "descriptor") {
-        problem(i, `'${ch}' is never closed`);
-        i = input.length;
-        break;
-      }
-    } else {
-      const m = WORD_PREFIX.exec(input.slice(i));
-      const word = m?.[1];
-      const next = m ? input[i + m[0].length] : void 0;
-      if (word && (context === "descriptor" || next !== void 0 && HYPHENS.includes(next))) {
-        consumed = true;
-        if (word === "rac" || word === "rel") out.prefixes.push(word);
-        else if (word === "D" || word === "L") out.fischer = word;
-        else if (word === "DL" || word === "D,L") out.fischer = "DL";
-        else if (word === "d") signs.push({ sign: "+", offset: i });
-        else if (word === "l") signs.push({ sign: "-", offset: i });
-        else if (word === "dl" || word === "d,l") signs.push({ sign: "±", offset: i });
-        else addWord(out, word);
-        if (word === "d" || word === "l" || word === "dl" || word === "d,l") {
-          out.remarks.push(
-            `'${word}' for the sign of rotation is obsolete; write (+), (−) or (±) (IUPAC 2013, P-93)`
-          );
-        }
-        i += word.length;
-      }
-    }
-    if (!consumed) break;
-    i = skipSpace(input, i);
-    if (i < input.length && HYPHENS.includes(input[i])) i = skipSpace(input, i + 1);
-  }
-  out.rest = input.slice(i).trim();
-  if (context === "descriptor" && out.rest !== "") {
-    problem(i, `'${out.rest.slice(0, 20)}' is not a stereodescriptor`);
-  }
-  out.embeddedDescriptors = /[([](?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?(?:,\s*(?:\d+[a-z]?['\u2032]*)?(?:RS|SR|R|S|E|Z)\*?)*[)\]]/.test(
-    out.rest
-  );
-  finish(out, signs, problem);
-  return out;
-}
-function skipSpace(s, i) {
-  while (i < s.length && /\s/.test(s[i])) i++;
-  return i;
-}
-function addWord(out, w) {
-  if (!out.words.includes(w)) out.words.push(w);
-}
-function parseGroup(inner, base, context, problem) {
-  const compact = inner.replace(/\s+/g, "");
-  const sign = SIGNS[foldSigns(compact)];
-  if (sign) return { kind: "sign", sign, items: [], words: [] };
-  const legacy = /^([RS])[,/]([RS])$/.exec(compact);
-  if (legacy && legacy[1] !== legacy[2]) {
-    const pair = legacy[1] === "R" ? "RS" : "SR";
-    return {
-      kind: "items",
-      items: [{ locant: null, label: pair[0], pair, offset: base + inner.indexOf(legacy[1]) }],
-      words: [],
-      legacyPair: `(${legacy[1]}${compact[1]}${legacy[2]})`
-    };
-  }
-  const parts = [];
-  let start = 0;
-  for (let k = 0; k <= inner.length; k++) {
-    if (k === inner.length || inner[k] === ",") {
-      const raw2 = inner.slice(start, k);
-      const lead = raw2.length - raw2.trimStart().length;
-      parts.push({ text: raw2.trim(), offset: base + start + lead });
-      start = k + 1;
-    }
-  }
-  const items = [];
-  const words = [];
-  const bad2 = [];
-  for (const p of parts) {
-    const m = ITEM.exec(p.text);
-    if (m) {
-      const [, loc, lab, ax, star] = m;
-      const item = { locant: loc ?? null, label: lab[0], offset: p.offset };
-      if (lab === "RS" || lab === "SR") item.pair = lab;
-      if (star) item.relativeStar = true;
-      if (ax) {
-        if (lab === "R" || lab === "S") item.axial = true;
-        else {
-          bad2.push(p);
-          continue;
-        }
-      }
-      items.push(item);
-    } else if (WORDS.includes(p.text.toLowerCase())) {
-      words.push(p.text.toLowerCase());
-    } else {
-      bad2.push(p);
-    }
-  }
-  if (items.length === 0 && words.length === 0) {
-    if (context === "name") return { kind: "not-stereo", items: [], words: [] };
-  }
-  for (const b of bad2) {
-    problem(
-      b.offset,
-      b.text === "" ? "empty stereodescriptor" : `'${b.text}' is not a stereodescriptor (P-93)`
-    );
-  }
-  return { kind: "items", items, words };
-}
-function finish(out, signs, problem) {
-  const distinct = [...new Set(signs.map((s) => s.sign))];
-  if (distinct.length > 1) {
-    problem(signs[1].offset, `conflicting signs of rotation: ${distinct.map((s) => `(${s})`).join(" and ")}`);
-  }
-  out.rotationSign = signs[0]?.sign ?? null;
-  const seen = /* @__PURE__ */ new Map();
-  for (const it of out.items) {
-    if (it.locant === null) continue;
-    if (seen.has(it.locant)) problem(it.offset, `locant ${it.locant} is given twice`);
-    seen.set(it.locant, it.offset);
-  }
-  const stars = out.items.filter((it) => it.relativeStar).length;
-  const pairs = out.items.filter((it) => it.pair).length;
-  const chiralItems = out.items.filter(
-    (it) => it.label === "R" || it.label === "S" || it.label === "M" || it.label === "P"
-  );
-  if (stars > 0 && stars < chiralItems.length) {
-    problem(
-      out.items.find((it) => !it.relativeStar && chiralItems.includes(it)).offset,
-      "some descriptors carry * and others do not"
-    );
-  }
-  if (pairs > 0 && pairs < chiralItems.length) {
-    out.remarks.push(
-      "RS/SR cited for some centres only: a mixture of epimers at those centres, not a racemate"
-    );
-  }
-  const racemic = out.prefixes.includes("rac") || pairs > 0 || out.rotationSign === "±" || out.fischer === "DL";
-  const relative = out.prefixes.includes("rel") || stars > 0;
-  if (racemic && relative) {
-    out.remarks.push(
-      "racemic (rac, RS/SR, ±) and relative (rel, *) notation are mixed, read as racemic; IUPAC 2013 (P-93.1.3) uses one of them"
-    );
-  }
-  if (out.prefixes.includes("rel") && pairs > 0)
-    problem(0, "'rel' with RS/SR descriptors: use rel-(…R,…S) or (…RS,…SR)");
-  if (out.prefixes.includes("rel") && out.items.length === 0) {
-    out.remarks.push("'rel-' without descriptors states no configuration");
-  }
-  if (out.rotationSign === "±" && chiralItems.length > 0 && !out.prefixes.includes("rac") && pairs === 0) {
-    out.remarks.push(
-      "(±) with descriptors of one enantiomer is read as rac-(…); IUPAC 2013 (P-93.1.3) writes rac-(…) or (…RS,…SR)"
-    );
-  }
-  if (racemic) out.mode = "racemic";
-  else if (relative) out.mode = "relative";
-  else if (out.items.length > 0) out.mode = "absolute";
-  else out.mode = "none";
-  if ((racemic || relative) && chiralItems.some((it) => it.locant !== null)) {
-    const first = [...chiralItems].sort((a, b) => locantOrder(a.locant) - locantOrder(b.locant))[0];
-    if (first.label === "S" || first.label === "P") {
-      out.remarks.push(
-        `P-93.1.3 cites the lowest-locant centre as R (R* or RS); ${first.locant ?? ""}${first.pair ?? first.label} comes first here`
-      );
-    }
-  }
-  const unlocated = out.items.filter((it) => it.locant === null);
-  if (unlocated.length > 1 && unlocated.some((it) => it.label === "R") && unlocated.some((it) => it.label === "S")) {
-    out.remarks.push("(R,S) without locants is ambiguous: for a racemate P-93.1.3 writes (RS)");
-  }
-}
-function locantOrder(locant) {
-  if (locant === null) return Number.MAX_SAFE_INTEGER;
-  const n = parseInt(locant, 10);
-  return Number.isNaN(n) ? Number.MAX_SAFE_INTEGER : n * 100 + locant.length;
-}
-var WORDS, MINUS_LIKE, HYPHENS, PLUS_LIKE, SIGNS, WORD_PREFIX, ITEM;
-var init_descriptors = __esm({
-  "src/chem/descriptors.ts"() {
-    "use strict";
-    init_descriptors_compare();
-    WORDS = ["meso", "cis", "trans", "erythro", "threo", "endo", "exo", "syn", "anti"];
-    MINUS_LIKE = "-‐‑‒–—−﹣－˗";
-    HYPHENS = MINUS_LIKE;
-    PLUS_LIKE = "+＋";
-    SIGNS = {
-      "+": "+",
-      "-": "-",
-      "±": "±",
-      "+/-": "±",
-      "+-": "±"
-    };
-    WORD_PREFIX = new RegExp(
-      `^(rac|rel|meso|cis|trans|erythro|threo|endo|exo|syn|anti|DL|D,L|dl|d,l|D|L|d|l)(?=[\\s(${MINUS_LIKE.replace("-", "\\-")}]|$)`
-    );
-    ITEM = /^(\d+[a-z]?(?:['\u2032\u2033\u2034]|'')*)?(RS|SR|R|S|r|s|E|Z|M|P|m|p)(a)?(\*)?$/;
-  }
-});
-
-// src/checks/words.ts
-function unitName2(u) {
-  const loc = (k) => u.locants[k] !== null && u.locants[k] !== void 0 ? String(u.locants[k]) : "";
-  if (u.kind === "tetrahedral") return `${u.element}${loc(0)} (atom ${u.atoms[0]})`;
-  const ends = u.atoms.join(", ");
-  const what = u.kind === "double-bond" ? "double bond" : u.kind === "biaryl" ? "biaryl axis" : u.kind === "helix" ? "helix" : `${u.kind} axis`;
-  const mapped = u.locants.every((l) => l !== null) ? ` C${u.locants.join("=C")}` : "";
-  return `${what}${mapped} (atoms ${ends})`;
-}
-function atomsInRecordTerms(text, s) {
-  if (!s) return text;
-  const byNumber = new Map(s.atoms.map((a) => [a.inputNumber, a]));
-  return text.replace(/\b([A-Z][a-z]?)(\d+)\b/g, (whole, el, num2) => {
-    const a = byNumber.get(Number(num2));
-    if (!a || a.element !== el) return whole;
-    return a.mapNumber !== null ? `${el}${a.mapNumber} (atom ${num2})` : `${el} (atom ${num2})`;
+// src/audit/engine.ts
+function heavyFormula(elements, wildcards) {
+  const counts = /* @__PURE__ */ new Map();
+  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
+  const order = [...counts.keys()].sort((x, y) => {
+    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
+    return x < y ? -1 : x > y ? 1 : 0;
   });
+  let out = "";
+  for (const e of order) {
+    const c = counts.get(e);
+    out += c === 1 ? e : `${e}${c}`;
+  }
+  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
+  return out;
 }
-function listUnits(units) {
-  return units.length === 0 ? "none" : units.map(unitName2).join(", ");
-}
-function unitSummary(units) {
-  const centres = units.filter((u) => u.kind === "tetrahedral").length;
-  const bonds = units.filter((u) => u.kind === "double-bond").length;
-  const axes = units.length - centres - bonds;
-  const parts = [];
-  if (centres) parts.push(`${centres} stereocentre${centres === 1 ? "" : "s"}`);
-  if (bonds) parts.push(`${bonds} stereogenic double bond${bonds === 1 ? "" : "s"}`);
-  if (axes) parts.push(`${axes} stereogenic ax${axes === 1 ? "is" : "es"}`);
-  return parts.length ? parts.join(" and ") : "no stereo units";
-}
-function definedUnits(f) {
-  return f.units.filter((u) => u.defined);
-}
-function undefinedUnits(f) {
-  return f.units.filter((u) => !u.defined);
-}
-function labelList(units) {
-  const l = units.filter((u) => u.defined).map((u) => `${unitName2(u)} ${u.label ?? "unranked"}`);
-  return l.length ? l.join(", ") : "none";
-}
-function declaredDescriptors(record) {
-  const d = record?.stereo.descriptors;
-  const n = record?.name;
+async function defaultEngine(settings = {}) {
+  const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
+  const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
+  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
   return {
-    field: d !== void 0 && d.trim() !== "" ? parseDescriptors(d) : null,
-    name: n !== void 0 && n.trim() !== "" ? parseDescriptors(n, { context: "name" }) : null
+    readStructure: (text, options) => chem.readStructure(text, options),
+    describe: settings.axisOrthoMin === void 0 ? (s) => chem.describe(s) : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
+    relate: (a, b) => chem.relate(a, b),
+    formula: (s) => graph.molecularFormula(s),
+    smilesHeavyAtoms: (smiles) => {
+      let start = 0;
+      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
+      let g;
+      try {
+        g = syntax.parseSmilesGraph(smiles, start);
+      } catch {
+        return null;
+      }
+      if ("error" in g) return null;
+      const heavy = [];
+      let wildcards = 0;
+      for (const a of g.atoms) {
+        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
+        else if (a.atomicNumber !== 1) heavy.push(a.element);
+      }
+      return heavyFormula(heavy, wildcards);
+    }
   };
 }
-function declaredSign(record) {
-  const { field: field2, name } = declaredDescriptors(record);
-  if (field2?.rotationSign) return { sign: field2.rotationSign, field: "stereo.descriptors" };
-  if (name?.rotationSign) return { sign: name.rotationSign, field: "name" };
-  return null;
-}
-function finding(messageId, field2, data, severity) {
-  const f = { messageId, field: field2, data };
-  if (severity) f.severity = severity;
-  return f;
-}
-function fmt(n) {
-  return Number.isInteger(n) ? String(n) : String(Math.round(n * 100) / 100);
-}
-var STEREO_CLAIM_FORMS;
-var init_words = __esm({
-  "src/checks/words.ts"() {
+var init_engine = __esm({
+  "src/audit/engine.ts"() {
     "use strict";
-    init_descriptors();
-    STEREO_CLAIM_FORMS = [
-      "meso",
-      "single-enantiomer",
-      "enantioenriched",
-      "racemate",
-      "single-diastereomer",
-      "diastereomer-mixture"
-    ];
+  }
+});
+
+// src/audit/findings.ts
+function resolveSeverity(base, own2, configured, configuredForMessage) {
+  if (configuredForMessage !== void 0) return configuredForMessage;
+  const level2 = own2 ?? base;
+  if (configured === void 0 || level2 === "note") return level2;
+  return configured;
+}
+function messageKey(checkId, messageId) {
+  return `${checkId}/${messageId}`;
+}
+function configuredSeverity(config, key3) {
+  return Object.prototype.hasOwnProperty.call(config.severities, key3) ? config.severities[key3] : void 0;
+}
+function lineFor(loaded, field2) {
+  if (field2 !== null) {
+    const line = lineOf(loaded.positions, field2);
+    if (line !== null) return line;
+  }
+  return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
+}
+function messageEnabled(config, checkId, messageId) {
+  return configuredSeverity(config, messageKey(checkId, messageId)) !== "off";
+}
+function toFinding(check, raw2, loaded, config) {
+  const configured = configuredSeverity(config, check.id);
+  const forMessage = configuredSeverity(config, messageKey(check.id, raw2.messageId));
+  const template = check.messages[raw2.messageId];
+  const message = template !== void 0 ? render(template, raw2.data ?? {}) : `${raw2.messageId}${Object.keys(raw2.data ?? {}).length ? ` (${JSON.stringify(raw2.data)})` : ""}`;
+  return {
+    check: check.id,
+    messageId: raw2.messageId,
+    severity: resolveSeverity(
+      check.defaultSeverity,
+      raw2.severity,
+      configured === "off" ? void 0 : configured,
+      forMessage === "off" ? void 0 : forMessage
+    ),
+    message,
+    data: raw2.data ?? {},
+    line: lineFor(loaded, raw2.field ?? null),
+    field: raw2.field ?? null,
+    waived: null,
+    ...raw2.fix === void 0 ? {} : { fix: raw2.fix }
+  };
+}
+function applyWaivers(findings, loaded) {
+  const waivers = loaded.record?.waivers ?? [];
+  if (waivers.length === 0) return;
+  for (const f of findings) {
+    if (f.check === INTERNAL_ERROR_ID) continue;
+    f.waived = acceptingWaiver(waivers, f);
+  }
+}
+function internalError(check, error, loaded) {
+  const text = error instanceof Error ? error.message : String(error);
+  return {
+    check: INTERNAL_ERROR_ID,
+    messageId: "check-failed",
+    severity: "error",
+    message: `The check ${check.id} failed with an internal error (${text}), so this record was not fully checked. This is a fault in stereogate, not in the record: please report it with the record attached.`,
+    data: { check: check.id, error: text },
+    line: loaded.origin.kind === "bulk" ? loaded.origin.line : null,
+    field: null,
+    waived: null
+  };
+}
+function budgetFinding(loaded, kind, limit) {
+  const what = kind === "time" ? `took longer than the ${limit / 1e3} s time limit` : `needed more than the ${limit} MB memory bound`;
+  return {
+    check: TIME_LIMIT_ID,
+    messageId: kind === "time" ? "time-limit-exceeded" : "memory-bound-exceeded",
+    severity: "error",
+    message: `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, leave out repeated salt or solvent parts).`,
+    data: { kind, limit },
+    line: loaded.origin.kind === "bulk" ? loaded.origin.line : lineOf(loaded.positions, "structure"),
+    field: null,
+    waived: null
+  };
+}
+function schemaFindings(loaded, config) {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  if (configured === "off") return [];
+  return loaded.problems.map((p) => ({
+    check: SCHEMA_CHECK_ID,
+    messageId: p.code ?? "record-problem",
+    severity: configured ?? "error",
+    message: p.message,
+    data: { path: p.path, problem: p.message },
+    line: p.line ?? (loaded.origin.kind === "bulk" ? loaded.origin.line : null),
+    field: p.path === "" ? null : p.path,
+    waived: null
+  }));
+}
+var SCHEMA_CHECK_ID, INTERNAL_ERROR_ID, TIME_LIMIT_ID;
+var init_findings = __esm({
+  "src/audit/findings.ts"() {
+    "use strict";
+    init_waivers();
+    init_words();
+    init_positions();
+    SCHEMA_CHECK_ID = "record-schema";
+    INTERNAL_ERROR_ID = "internal-error";
+    TIME_LIMIT_ID = "record-time-limit";
+  }
+});
+
+// src/audit/select.ts
+var init_select = __esm({
+  "src/audit/select.ts"() {
+    "use strict";
   }
 });
 
@@ -47525,9 +49118,9 @@ function relabelFix(field2, text, parsed, cmp) {
     const items = parsed.items.filter((it) => (it.locant ?? "") === m.locant && it.label === m.declared);
     if (items.length !== 1) return null;
     const item = items[0];
-    const at = item.offset + m.locant.length;
-    if (out[at] !== m.declared) return null;
-    out = out.slice(0, at) + m.computed + out.slice(at + 1);
+    const at2 = item.offset + m.locant.length;
+    if (out[at2] !== m.declared) return null;
+    out = out.slice(0, at2) + m.computed + out.slice(at2 + 1);
   }
   return out === text ? null : { field: field2, from: text, to: out };
 }
@@ -47569,13 +49162,13 @@ function conditions(r) {
 function isSodiumD(nm) {
   return nm === void 0 || Math.abs(nm - 589) <= 1;
 }
-function run(ctx) {
+function run2(ctx) {
   const record = ctx.record;
-  if (!record) return { findings: [], notApplicable: true };
+  if (!record) return { findings: [], notApplicable: "the record was not read" };
   const form = record.stereo.form;
   const rot2 = record.stereo.rotation;
   const sign = declaredSign(record);
-  if (!rot2) return { findings: [], notApplicable: true };
+  if (!rot2) return { findings: [], notApplicable: "no rotation given (stereo.rotation)" };
   const tol = ctx.config.zeroRotationTolerance;
   const out = [];
   const base = { form, value: rot2.value, conditions: conditions(rot2), tolerance: tol };
@@ -47613,13 +49206,13 @@ function run(ctx) {
     passed: `specific rotation ${fmt(rot2.value)}° (${conditions(rot2)}) fits ${form}${s}`
   };
 }
-var messages, WHY, rotationConsistent;
+var messages2, WHY, rotationConsistent;
 var init_rotation_consistent = __esm({
   "src/checks/rotation-consistent.ts"() {
     "use strict";
     init_words();
     init_fixes();
-    messages = {
+    messages2 = {
       "rotation-should-be-zero": "Declared {form}, but the specific rotation is {value}° ({conditions}); it should be zero within ±{tolerance}°, because {why}. Check the sample (an enantiomeric excess, an optically active impurity) or the form.",
       "sign-disagrees-with-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}). Correct the sign in the name or descriptors, or re-check the measurement.{wavelengthNote}",
       "sign-with-zero-rotation": "{field} states {sign}, but the measured specific rotation is {value}° ({conditions}), zero within ±{tolerance}°. A sign needs a measurable rotation: measure at higher concentration or another wavelength, or drop the sign.",
@@ -47635,8 +49228,8 @@ var init_rotation_consistent = __esm({
       defaultSeverity: "error",
       summary: "The specific rotation agrees with the declared form and with the (+)/(−) sign in the name.",
       explanation: "Optical activity needs chiral molecules in enantiomeric excess: an achiral or meso compound is optically inactive, and a racemate is optically inactive because its enantiomers rotate equally in opposite senses (IUPAC Gold Book: optical activity, racemate, meso). The prefixes (+) and (−) state the sign of rotation, normally at the sodium D line, 589 nm (IUPAC 2013, P-93). A single enantiomer with zero rotation is possible but rare and is only noted. What counts as zero is a registry setting (zeroRotationTolerance).",
-      messages,
-      run
+      messages: messages2,
+      run: run2
     };
   }
 });
@@ -47799,20 +49392,20 @@ function compareWithRegistry(me, matches, mode, config, underReview = () => fals
     }
   }
   const identical = pairs.filter((p) => p.relation === "identical").length;
-  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${identical} other record(s)` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${compared - identical} registered record(s)` : ""}; forms and rotations agree`;
+  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}; forms and rotations agree`;
   return { findings: out, passed, pairs };
 }
-function run2() {
-  return { findings: [], notApplicable: true };
+function run3() {
+  return { findings: [], notApplicable: "runs in the registry-wide phase" };
 }
-var messages2, ENANTIOPURE, consistentWithRegistry;
+var messages3, ENANTIOPURE, consistentWithRegistry;
 var init_consistent_with_registry = __esm({
   "src/checks/consistent-with-registry.ts"() {
     "use strict";
     init_rotation_consistent();
     init_solvents();
     init_words();
-    messages2 = {
+    messages3 = {
       "already-registered": "This structure is identical to {otherId} ({otherFile}{otherName}), already registered as {otherForm}. Register a new batch under {otherId} instead, or, if this is a different substance, correct the structure.",
       "same-structure-different-form": "This structure is identical to {otherId} ({otherFile}), but {otherId} is registered as {otherForm} and this record declares {form}. The same drawn structure cannot be both; decide which form is right and correct the other record.",
       "same-structure-other-purity": "This structure is identical to {otherId} ({otherFile}), registered as {otherForm}; this record declares {form}. The same enantiomer at another enantiomeric purity: register it as a batch of {otherId} if your SOP allows, or keep it separate on purpose.",
@@ -47828,11 +49421,776 @@ var init_consistent_with_registry = __esm({
       defaultSeverity: "error",
       summary: "A new record is not a duplicate of a registered compound, and agrees with its registered enantiomer.",
       explanation: "Every record contributes keys to a registry index: its constitution, and each stereo unit's canonical class with its CIP descriptor (IUPAC 2013, P-92.1), as drawn and as its mirror image (src/registry/keys.ts). Two records with equal keys are the same stereoisomer; one whose key equals the other's mirror key is its enantiomer (where the keys cannot tell, the engine relates the two structures). An identical structure is the same compound: register a batch, not a new number; under a different form one record is wrong. Enantiomers have identical physical properties except the sense of optical rotation: measured under the same conditions (wavelength, solvent, temperature) their specific rotations are equal in size and opposite in sign (IUPAC Gold Book, enantiomer, optical activity). A racemic drawing (AND group) is compared only with racemic drawings, a relative one (OR group) only with relative ones; a drawing with undefined stereo units is compared with none. Each finding is said once (common practice, no source): in a pull request on the record under review (on the one registered later when both are); in a full audit on the later record in the audit's order (file path order, numbers as numbers; input order for exports), and enantiomer pairs and duplicates are listed once in the summary. Registering both enantiomers is normal and is not a finding of a full audit.",
-      messages: messages2,
+      messages: messages3,
       requires: ["structure", "registry"],
       scope: "registry",
-      run: run2
+      run: run3
     };
+  }
+});
+
+// src/registry/keys.ts
+function drawingKind(f) {
+  const m = f.enhanced.meaning;
+  if (m === "racemic" || m === "mixture") return "racemic";
+  if (m === "relative") return "relative";
+  return "as-drawn";
+}
+function recordKeys(f, text) {
+  const kind = drawingKind(f);
+  const base = { constitution: f.constitutionKey, kind, chiral: f.chiral };
+  if (f.units.some((u) => !u.defined)) return { ...base, stereo: null, mirror: null, exact: false };
+  let exact = true;
+  const seen = /* @__PURE__ */ new Set();
+  const own2 = [];
+  const mirrored2 = [];
+  for (const u of f.units) {
+    if (seen.has(u.classKey) || u.label === null || u.label === "e" || u.label === "z") exact = false;
+    seen.add(u.classKey);
+    const label = u.label === null ? "?" : u.label === "e" || u.label === "z" ? "ez" : u.label;
+    own2.push(`${u.classKey}=${label}`);
+    mirrored2.push(`${u.classKey}=${(u.label && MIRRORED[u.label]) ?? label}`);
+  }
+  own2.sort();
+  mirrored2.sort();
+  const keys = {
+    ...base,
+    stereo: `${kind}|${own2.join(";")}`,
+    mirror: `${kind}|${mirrored2.join(";")}`,
+    exact
+  };
+  if (!exact && text) keys.text = text;
+  return keys;
+}
+var MIRRORED;
+var init_keys = __esm({
+  "src/registry/keys.ts"() {
+    "use strict";
+    MIRRORED = { R: "S", S: "R", M: "P", P: "M" };
+  }
+});
+
+// src/audit/structures.ts
+function failed(message, line = null, offset = null, code) {
+  return { structure: null, facts: null, error: { message, line, offset, ...code ? { code } : {} } };
+}
+function readOnly(source, engine) {
+  if (source === null) return { structure: null, failure: NOTHING };
+  if (source.text === null)
+    return { structure: null, failure: failed(source.error ?? "the structure could not be read") };
+  let read;
+  try {
+    read = engine.readStructure(source.text, { format: source.format });
+  } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
+    const what = source.format === "smiles" ? "SMILES" : "molfile";
+    return {
+      structure: null,
+      failure: failed(`internal error while reading the ${what}: ${e.message}`)
+    };
+  }
+  if (!read.ok) {
+    const what = source.format === "smiles" ? "SMILES" : source.file ? `molfile ${source.file}` : "molfile";
+    return {
+      structure: null,
+      failure: failed(
+        `${what}: ${read.error.message}`,
+        read.error.at.line ?? null,
+        read.error.at.offset ?? null,
+        read.error.code
+      )
+    };
+  }
+  return { structure: read.structure, failure: null };
+}
+function describeRead(read, engine) {
+  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
+  try {
+    return { structure: read.structure, facts: engine.describe(read.structure), error: null };
+  } catch (e) {
+    if (e instanceof BudgetExceeded) throw e;
+    return {
+      structure: read.structure,
+      facts: null,
+      error: {
+        message: `internal error while describing the structure: ${e.message}`,
+        line: null,
+        offset: null
+      }
+    };
+  }
+}
+function readSource(source, engine) {
+  return describeRead(readOnly(source, engine), engine);
+}
+function sourcesOf(loaded) {
+  if (loaded.sources) return loaded.sources;
+  const rec = loaded.record;
+  const one = (ref, field2) => {
+    if (!ref) return null;
+    if (typeof ref.smiles === "string") return { field: field2, format: "smiles", text: ref.smiles };
+    if (typeof ref.molfile === "string") {
+      return {
+        field: field2,
+        format: "molfile",
+        text: null,
+        error: `molfile '${ref.molfile}' was not fetched (no file context)`
+      };
+    }
+    return null;
+  };
+  const components = (rec?.stereo.components ?? []).map(
+    (c, i) => one(c, `stereo.components.${i}`) ?? {
+      field: `stereo.components.${i}`,
+      format: "smiles",
+      text: null,
+      error: "no structure given"
+    }
+  );
+  return { main: one(rec?.structure, "structure"), components };
+}
+var NOTHING, StructureCache;
+var init_structures = __esm({
+  "src/audit/structures.ts"() {
+    "use strict";
+    init_budget();
+    NOTHING = Object.freeze({
+      structure: null,
+      facts: null,
+      error: {
+        message: "the record gives no structure (structure.smiles or structure.molfile)",
+        line: null,
+        offset: null
+      }
+    });
+    StructureCache = class {
+      constructor(engine) {
+        this.engine = engine;
+      }
+      engine;
+      reads = /* @__PURE__ */ new WeakMap();
+      mains = /* @__PURE__ */ new WeakMap();
+      comps = /* @__PURE__ */ new WeakMap();
+      /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
+      read(loaded) {
+        let r = this.reads.get(loaded);
+        if (!r) {
+          r = readOnly(sourcesOf(loaded).main, this.engine);
+          this.reads.set(loaded, r);
+        }
+        return r;
+      }
+      main(loaded) {
+        let m = this.mains.get(loaded);
+        if (!m) {
+          m = describeRead(this.read(loaded), this.engine);
+          this.mains.set(loaded, m);
+        }
+        return m;
+      }
+      components(loaded) {
+        let c = this.comps.get(loaded);
+        if (!c) {
+          c = sourcesOf(loaded).components.map((s) => readSource(s, this.engine));
+          this.comps.set(loaded, c);
+        }
+        return c;
+      }
+      all(loaded) {
+        return { main: this.main(loaded), components: this.components(loaded) };
+      }
+    };
+  }
+});
+
+// src/audit/index-row.ts
+function indexRow(loaded, main, seq) {
+  const record = loaded.record;
+  let keys = null;
+  if (record !== null && main.facts) {
+    const src = sourcesOf(loaded).main;
+    keys = recordKeys(main.facts, src && src.text !== null ? { format: src.format, text: src.text } : null);
+  }
+  return {
+    seq,
+    id: loaded.id,
+    file: loaded.file,
+    name: record?.name ?? null,
+    form: record?.stereo.form ?? "unknown",
+    rotation: record?.stereo.rotation ?? null,
+    keys,
+    lines: {
+      id: lineFor(loaded, "id"),
+      structure: lineFor(loaded, "structure"),
+      rotation: lineFor(loaded, "stereo.rotation.value")
+    },
+    waivers: waiversOf(record, consistentWithRegistry.id)
+  };
+}
+var init_index_row = __esm({
+  "src/audit/index-row.ts"() {
+    "use strict";
+    init_consistent_with_registry();
+    init_waivers();
+    init_keys();
+    init_findings();
+    init_structures();
+  }
+});
+
+// src/registry/key-index.ts
+var RegistryIndex;
+var init_key_index = __esm({
+  "src/registry/key-index.ts"() {
+    "use strict";
+    RegistryIndex = class {
+      constructor(confirm = null) {
+        this.confirm = confirm;
+      }
+      confirm;
+      byKey = /* @__PURE__ */ new Map();
+      /** Rows filed (records with a stereo key). */
+      size = 0;
+      add(row) {
+        const k = row.keys;
+        if (k === null || k.stereo === null) return;
+        const key3 = `${k.constitution}#${k.stereo}`;
+        const classes = this.byKey.get(key3);
+        if (!classes) this.byKey.set(key3, [{ rows: [row] }]);
+        else {
+          const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
+          if (same) same.rows.push(row);
+          else classes.push({ rows: [row] });
+        }
+        this.size++;
+      }
+      /** Removes a row added before (a record file replaced by its new version). */
+      remove(row) {
+        const k = row.keys;
+        if (k === null || k.stereo === null) return;
+        const key3 = `${k.constitution}#${k.stereo}`;
+        const classes = this.byKey.get(key3);
+        if (!classes) return;
+        for (let ci = 0; ci < classes.length; ci++) {
+          const at2 = classes[ci].rows.indexOf(row);
+          if (at2 < 0) continue;
+          classes[ci].rows.splice(at2, 1);
+          if (classes[ci].rows.length === 0) classes.splice(ci, 1);
+          if (classes.length === 0) this.byKey.delete(key3);
+          this.size--;
+          return;
+        }
+      }
+      /**
+       * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
+       * were added; `me` itself left out.
+       */
+      matches(me) {
+        const k = me.keys;
+        if (k === null || k.stereo === null || k.mirror === null) return [];
+        const out = [];
+        const consider = (key3, expected) => {
+          for (const c of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
+            const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
+            if (!other) continue;
+            const relation = other.keys && this.relationOf(k, other.keys, expected);
+            if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
+          }
+        };
+        consider(k.stereo, "identical");
+        if (k.mirror !== k.stereo) consider(k.mirror, "enantiomers");
+        out.sort((a, b) => a.other.seq - b.other.seq);
+        return out;
+      }
+      relationOf(a, b, expected) {
+        if (a.exact && b.exact) return expected;
+        if (!a.text || !b.text || !this.confirm) return null;
+        const r = this.confirm(a, b);
+        return r === "identical" || r === "enantiomers" ? r : null;
+      }
+    };
+  }
+});
+
+// src/audit/registry-phase.ts
+function rowFinding(raw2, row, config) {
+  const lines = {
+    id: row.lines.id,
+    structure: row.lines.structure,
+    "stereo.rotation.value": row.lines.rotation ?? row.lines.structure
+  };
+  const positions2 = {
+    get: (path) => lines[path] != null ? { line: lines[path], column: 1 } : void 0
+  };
+  const loaded = {
+    file: row.file,
+    id: row.id,
+    record: null,
+    positions: positions2,
+    problems: [],
+    origin: { kind: "file" }
+  };
+  const f = toFinding(CHECK, raw2, loaded, config);
+  return { ...f, waived: acceptingWaiver(row.waivers ?? [], f) };
+}
+function duplicateId(row, first, config) {
+  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
+  const message = `id: '${row.id}' is also used by ${first}; every record needs its own id`;
+  return {
+    check: SCHEMA_CHECK_ID,
+    messageId: "duplicate-id",
+    severity: configured === "off" || configured === void 0 ? "error" : configured,
+    message,
+    data: { path: "id", problem: message },
+    line: row.lines.id,
+    field: "id",
+    waived: null
+  };
+}
+var CHECK, RegistryPhase;
+var init_registry_phase = __esm({
+  "src/audit/registry-phase.ts"() {
+    "use strict";
+    init_consistent_with_registry();
+    init_waivers();
+    init_key_index();
+    init_findings();
+    CHECK = consistentWithRegistry;
+    RegistryPhase = class {
+      constructor(options) {
+        this.options = options;
+        this.index = new RegistryIndex(options.confirm);
+        this.enabled = configuredSeverity(options.config, CHECK.id) !== "off";
+      }
+      options;
+      index;
+      pairs = [];
+      firstWithId = /* @__PURE__ */ new Map();
+      records = 0;
+      enabled;
+      underReview = /* @__PURE__ */ new Set();
+      /** Review mode: records of the registry filed, under review or not. */
+      registryRecords = 0;
+      /** The lookup keys of the records under review (review mode, set by `reviewing`): other keys are not filed. */
+      reach = null;
+      /**
+       * Review mode, before any `file`: the records that will be under review. A record of the registry whose keys
+       * none of them looks up is then not filed: the same findings, without forming classes no lookup visits (which
+       * may call `confirm`).
+       */
+      reviewing(rows) {
+        this.reach = /* @__PURE__ */ new Set();
+        for (const r of rows) {
+          const k = r.keys;
+          if (k === null || k.stereo === null || k.mirror === null) continue;
+          this.reach.add(`${k.constitution}#${k.stereo}`);
+          this.reach.add(`${k.constitution}#${k.mirror}`);
+        }
+      }
+      /** Review mode: a record of the registry, not under review (added before any `review`). */
+      file(row) {
+        this.registryRecords++;
+        const k = row.keys;
+        if (this.reach && k !== null && k.stereo !== null && !this.reach.has(`${k.constitution}#${k.stereo}`))
+          return;
+        this.index.add(row);
+      }
+      /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
+      fileUnderReview(row) {
+        this.registryRecords++;
+        this.underReview.add(row);
+        this.index.add(row);
+      }
+      /** Full mode: the next record in the audit's order. Review mode: a record under review (filed before). */
+      next(row) {
+        this.records++;
+        const findings = [];
+        if (this.options.duplicateIds && row.id !== null) {
+          const first = this.firstWithId.get(row.id);
+          if (first === void 0) this.firstWithId.set(row.id, row.file);
+          else if (configuredSeverity(this.options.config, SCHEMA_CHECK_ID) !== "off")
+            findings.push(duplicateId(row, first, this.options.config));
+        }
+        if (!this.enabled || row.keys === null) {
+          if (this.options.mode === "full") this.index.add(row);
+          return { findings, passed: null };
+        }
+        const full = this.options.mode === "full";
+        const matches = this.index.matches(row);
+        const c = compareWithRegistry(
+          row,
+          matches,
+          this.options.mode,
+          this.options.config,
+          (r) => this.underReview.has(r)
+        );
+        if (full) this.index.add(row);
+        this.pairs.push(...c.pairs);
+        for (const raw2 of c.findings)
+          if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
+            findings.push(rowFinding(raw2, row, this.options.config));
+        const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
+        return { findings, passed };
+      }
+      summary() {
+        const how = this.options.mode === "full" ? `every record with each record before it through an index of ${this.index.size} records' keys` : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
+        return {
+          status: this.enabled ? "run" : "not-run",
+          reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
+          records: this.records,
+          pairs: this.pairs
+        };
+      }
+    };
+  }
+});
+
+// package.json
+var package_default;
+var init_package = __esm({
+  "package.json"() {
+    package_default = {
+      name: "stereogate",
+      version: "0.1.0",
+      description: "Audits compound-registration records for stereochemical consistency: stereo perception, CIP labels, mirror-image and symmetry analysis, stereoisomer counts, structure relations.",
+      type: "module",
+      license: "MIT",
+      engines: {
+        node: ">=20"
+      },
+      bin: {
+        stereogate: "bin/stereogate.js"
+      },
+      scripts: {
+        build: "node scripts/bundle.mjs",
+        typecheck: "tsc -p tsconfig.json --noEmit",
+        demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
+        test: "vitest run",
+        bench: "node --import tsx bench/run.ts",
+        lint: "eslint .",
+        format: "prettier --write .",
+        bundle: "node scripts/bundle.mjs"
+      },
+      dependencies: {
+        "@actions/core": "^3.0.1",
+        "@actions/http-client": "^4.0.1",
+        ajv: "^8.20.0",
+        "cli-progress": "^3.12.0",
+        "csv-parse": "^7.0.3",
+        openchemlib: "^9.25.0",
+        tsx: "^4.23.15",
+        undici: "^6.29.1",
+        yaml: "^2.9.1"
+      },
+      devDependencies: {
+        "@eslint/js": "^9.39.5",
+        "@rdkit/rdkit": "^2026.9.1",
+        "@types/cli-progress": "^3.11.6",
+        "@types/node": "^20.19.43",
+        "@vitest/coverage-v8": "^4.1.12",
+        esbuild: "^0.28.2",
+        eslint: "^9.39.5",
+        "fast-check": "^4.11.0",
+        micromark: "^4.0.3",
+        "micromark-extension-gfm": "^3.0.0",
+        nock: "^14.0.9",
+        "playwright-core": "^1.65.1",
+        prettier: "^3.10.1",
+        typescript: "^5.9.3",
+        "typescript-eslint": "^8.74.0",
+        vitest: "^4.1.12"
+      }
+    };
+  }
+});
+
+// src/audit/version.ts
+var VERSION;
+var init_version = __esm({
+  "src/audit/version.ts"() {
+    "use strict";
+    init_package();
+    VERSION = package_default.version;
+  }
+});
+
+// src/audit/view.ts
+function entryOf(loaded, cache2, underReview) {
+  const record = loaded.record;
+  if (record === null) return null;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    record,
+    get main() {
+      return cache2.main(loaded);
+    },
+    underReview
+  };
+}
+function buildRegistryView(records, cache2, underReview) {
+  const entries = [];
+  for (const loaded of records) {
+    const e = entryOf(loaded, cache2, underReview(loaded));
+    if (e) entries.push(e);
+  }
+  return { entries };
+}
+function lazyRegistryView(own2, cache2, load, all, ids) {
+  const seen = /* @__PURE__ */ new Map();
+  let entries = null;
+  const view = {
+    get entries() {
+      entries ??= all().flatMap((l) => entryOf(l, cache2, l.file === own2.file) ?? []);
+      return entries;
+    },
+    byId(id) {
+      if (!seen.has(id)) {
+        const l = load(id);
+        seen.set(id, l ? entryOf(l, cache2, l.file === own2.file) ?? void 0 : void 0);
+      }
+      return seen.get(id);
+    }
+  };
+  if (ids) view.ids = ids;
+  return view;
+}
+var init_view = __esm({
+  "src/audit/view.ts"() {
+    "use strict";
+  }
+});
+
+// src/audit/run.ts
+function auditRecords(records, options) {
+  const config = options.config ?? { ...DEFAULT_CONFIG };
+  const cache2 = new StructureCache(options.engine);
+  const engineApi = { relate: options.engine.relate.bind(options.engine) };
+  const budget = options.budget ?? RECORD_BUDGET;
+  const audited = new Set(records);
+  const registry = options.view ?? buildRegistryView(options.registry ?? records, cache2, (r) => audited.has(r));
+  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
+  const results = records.map((loaded) => {
+    try {
+      return withBudget(
+        budget,
+        "the audit of this record",
+        () => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
+      );
+    } catch (e) {
+      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
+      return {
+        id: loaded.id,
+        file: loaded.file,
+        computed: null,
+        findings: [internalError({ id: "audit" }, e, loaded)],
+        passed: [],
+        declared: { form: null, descriptors: null }
+      };
+    }
+  });
+  const result2 = {
+    tool: { name: "stereogate", version: VERSION },
+    records: results,
+    summary: summarize(results),
+    caution: CAUTION
+  };
+  if (options.registryPhase !== false && !options.registryIncomplete && options.checks.some((c) => c.scope === "registry")) {
+    const review = options.registry !== void 0 || options.otherRows !== void 0;
+    const phase = new RegistryPhase({
+      mode: review ? "review" : "full",
+      config,
+      confirm: confirmWith(options.engine),
+      duplicateIds: false
+    });
+    const mainOf = (r) => {
+      try {
+        return withBudget(budget, "the structure of a registry record", () => cache2.main(r));
+      } catch {
+        return { structure: null, facts: null, error: null };
+      }
+    };
+    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
+    if (review) {
+      const audited2 = new Set(records);
+      phase.reviewing(rows);
+      let seq = records.length;
+      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      else for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
+      for (const row of rows) phase.fileUnderReview(row);
+    }
+    rows.forEach((row, i) => addPhaseResult(results[i], phase.next(row)));
+    result2.summary = summarize(results);
+    result2.registry = phase.summary();
+  }
+  return result2;
+}
+function confirmWith(engine) {
+  const read = (k) => k.text ? readOnly({ field: "structure", format: k.text.format, text: k.text.text }, engine).structure : null;
+  return (a, b) => {
+    const sa = read(a);
+    const sb = read(b);
+    if (!sa || !sb) return null;
+    try {
+      return engine.relate(sa, sb).relation;
+    } catch {
+      return null;
+    }
+  };
+}
+function addPhaseResult(r, p) {
+  if (p.findings.length > 0) {
+    r.findings = r.findings.filter((f) => stillMatchesNothing(f, p.findings));
+    r.findings.push(...p.findings);
+  }
+  if (p.passed) r.passed.push(p.passed);
+}
+function auditOne(loaded, checks, config, cache2, registry, engine) {
+  const { main, components } = cache2.all(loaded);
+  const findings = schemaFindings(loaded, config);
+  applyWaivers(findings, loaded);
+  const passed = [];
+  const notRun = [];
+  const notApplicable = [];
+  const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
+  for (const check of unparsed ? [] : checks) {
+    if (configuredSeverity(config, check.id) === "off") continue;
+    const ctx = {
+      loaded,
+      record: loaded.record,
+      main,
+      components,
+      registry,
+      config,
+      engine,
+      findings: [...findings]
+    };
+    const missing = missingInput(check, ctx);
+    if (missing !== null) {
+      notRun.push({ check: check.id, reason: missing });
+      continue;
+    }
+    if (check.scope === "registry") continue;
+    let produced;
+    let outcome;
+    try {
+      outcome = check.run(ctx);
+      if (!outcome || !Array.isArray(outcome.findings))
+        throw new Error("the check returned no findings list");
+      produced = outcome.findings.filter((raw2) => messageEnabled(config, check.id, raw2.messageId)).map((raw2) => toFinding(check, raw2, loaded, config));
+    } catch (e) {
+      if (e instanceof BudgetExceeded) throw e;
+      findings.push(internalError(check, e, loaded));
+      continue;
+    }
+    applyWaivers(produced, loaded);
+    findings.push(...produced);
+    if (outcome.notRun !== void 0 && produced.length === 0) {
+      notRun.push({ check: check.id, reason: outcome.notRun });
+    } else if (outcome.notApplicable !== void 0 && produced.length === 0) {
+      notApplicable.push({ check: check.id, reason: outcome.notApplicable });
+    } else if (produced.length === 0) {
+      passed.push({ check: check.id, evidence: outcome.passed ?? "" });
+    }
+  }
+  const record = loaded.record;
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: main.facts,
+    findings,
+    passed,
+    notRun,
+    notApplicable,
+    declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null }
+  };
+}
+function missingInput(check, ctx) {
+  const needs = check.requires ?? [];
+  if (needs.includes("structure")) {
+    if (ctx.record === null) return "the record does not follow the record schema (see record-schema)";
+    if (ctx.main.facts === null) {
+      return ctx.main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure";
+    }
+  }
+  if (needs.includes("registry") && ctx.registry.incomplete) return ctx.registry.incomplete;
+  return null;
+}
+function overBudget(loaded, e, checks) {
+  const reason = e.kind === "time" ? "the record was stopped at its time limit (see record-time-limit)" : "the record was stopped at its memory bound (see record-time-limit)";
+  return {
+    id: loaded.id,
+    file: loaded.file,
+    computed: null,
+    findings: [budgetFinding(loaded, e.kind, e.limit)],
+    passed: [],
+    notRun: checks.map((c) => ({ check: c.id, reason })),
+    declared: {
+      form: loaded.record?.stereo.form ?? null,
+      descriptors: loaded.record?.stereo.descriptors ?? null
+    }
+  };
+}
+function summarize(records) {
+  const s = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
+  for (const r of records) {
+    for (const f of r.findings) {
+      if (f.waived) s.waived++;
+      else if (f.severity === "error") s.errors++;
+      else if (f.severity === "warning") s.warnings++;
+      else s.notes++;
+    }
+  }
+  return s;
+}
+var RECORD_BUDGET;
+var init_run = __esm({
+  "src/audit/run.ts"() {
+    "use strict";
+    init_waivers();
+    init_closest();
+    init_load();
+    init_caution();
+    init_config();
+    init_engine();
+    init_findings();
+    init_select();
+    init_budget();
+    init_index_row();
+    init_registry_phase();
+    init_structures();
+    init_version();
+    init_view();
+    RECORD_BUDGET = Object.freeze({ timeMs: 2e4, memoryMb: 1024 });
+  }
+});
+
+// src/registry/types.ts
+var STEREO_FORMS, ORIGIN_CONTROLS;
+var init_types2 = __esm({
+  "src/registry/types.ts"() {
+    "use strict";
+    STEREO_FORMS = [
+      "achiral",
+      "meso",
+      "single-enantiomer",
+      "enantioenriched",
+      "racemate",
+      "single-diastereomer",
+      "diastereomer-mixture",
+      "unknown"
+    ];
+    ORIGIN_CONTROLS = [
+      "none",
+      "chiral-catalyst",
+      "chiral-reagent",
+      "chiral-auxiliary",
+      "biocatalyst",
+      "resolution",
+      "chiral-separation",
+      "enrichment",
+      "unknown"
+    ];
   }
 });
 
@@ -47854,10 +50212,12 @@ function statedDescriptors(ctx) {
   }
   return "";
 }
-function run3(ctx) {
+function run4(ctx) {
   const record = ctx.record;
   const f = ctx.main.facts;
-  if (!record || !f || f.invertibleNitrogens.length === 0) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
+  if (f.invertibleNitrogens.length === 0)
+    return { findings: [], notApplicable: "the structure has no amine nitrogen that inverts" };
   const form = record.stereo.form;
   const drawn = f.invertibleNitrogens.filter((n) => n.drawnWithStereo);
   const out = [];
@@ -47882,19 +50242,23 @@ function run3(ctx) {
     );
   }
   if (out.some((x) => x.severity !== "note")) return { findings: out };
-  if (out.length === 0 && drawn.length === 0) return { findings: [], notApplicable: true };
+  if (out.length === 0 && drawn.length === 0)
+    return {
+      findings: [],
+      notApplicable: "no stereo drawn at an amine nitrogen and no claim resting on one"
+    };
   return {
     findings: out,
-    passed: `the claim rests on ${others2.length} stereo unit(s) other than amine nitrogens`
+    passed: `the claim rests on ${plural(others2.length, "stereo unit")} other than amine nitrogens`
   };
 }
-var NITROGEN_CHECK_ID, messages3, nitrogenInversion;
+var NITROGEN_CHECK_ID, messages4, nitrogenInversion;
 var init_nitrogen_inversion = __esm({
   "src/checks/nitrogen-inversion.ts"() {
     "use strict";
     init_words();
     NITROGEN_CHECK_ID = "nitrogen-inversion";
-    messages3 = {
+    messages4 = {
       "claim-rests-on-invertible-nitrogen": "Declared {form}, but the only stereo drawn or implied is at nitrogen {atoms}, an ordinary amine nitrogen. Such a nitrogen inverts through a planar transition state many times a second at room temperature (barrier roughly 30–40 kJ/mol for simple trialkylamines, about 24 kJ/mol for ammonia — values from memory; a configuration that can be isolated at room temperature needs roughly 100 kJ/mol), so its two configurations interconvert and cannot be isolated: the structure has no stereocentre. Declare achiral{dropDescriptors}, or, if the nitrogen is locked (a bridgehead as in Tröger's base, an aziridine, a quaternary ammonium ion), draw that feature.",
       "stereo-drawn-on-invertible-nitrogen": "The structure draws a configuration on nitrogen {atoms}, an ordinary amine nitrogen that inverts rapidly at room temperature; that configuration means nothing. The claim rests on the other stereo units, which is fine; remove the wedge or @ mark at that nitrogen."
     };
@@ -47903,9 +50267,9 @@ var init_nitrogen_inversion = __esm({
       defaultSeverity: "error",
       summary: "A stereo claim does not rest only on an ordinary amine nitrogen, which inverts rapidly.",
       explanation: "A trivalent amine nitrogen with three different substituents is pyramidal, but it inverts through a planar transition state with a low barrier (from memory: about 24 kJ/mol for ammonia, roughly 30–40 kJ/mol for simple trialkylamines; invertomers that can be isolated at room temperature need a barrier of roughly 100 kJ/mol, also from memory), so its enantiomers interconvert rapidly at room temperature and cannot be separated; IUPAC Gold Book, pyramidal inversion. It is a stereocentre only when inversion is blocked: a bridgehead (Tröger's base), a small ring (aziridines, slowly), or four substituents (ammonium ions, N-oxides). The engine lists such ordinary nitrogens separately from the stereocentres. When the claim rests on nothing else, this check carries the error; the form, descriptor and reading checks report their side of the same root cause as notes.",
-      messages: messages3,
+      messages: messages4,
       requires: ["structure"],
-      run: run3
+      run: run4
     };
   }
 });
@@ -47931,7 +50295,7 @@ function escapingPath(recordFile, path) {
   const resolved = posix.normalize(posix.join(posix.dirname(recordFile), path.replace(/\\/g, "/")));
   return resolved === ".." || resolved.startsWith("../") ? resolved : null;
 }
-function run4(ctx) {
+function run5(ctx) {
   const findings = [];
   const add = (id, field3, data) => {
     findings.push(finding(id, field3, data));
@@ -48003,19 +50367,19 @@ function run4(ctx) {
   if (findings.some((f) => f.severity !== "note")) return { findings };
   const facts = ctx.main.facts;
   const atoms = ctx.main.structure?.atoms.length;
-  const what = [atoms !== void 0 ? `${atoms} atoms` : null, facts?.formula || null].filter(Boolean).join(", ");
-  const comps = ctx.components.length ? `; ${ctx.components.length} component structure(s) read` : "";
-  const nitrogen = leftToNitrogen ? `; ${leftToNitrogen} remark(s) on amine nitrogens left to nitrogen-inversion` : "";
+  const what = [atoms !== void 0 ? plural(atoms, "atom") : null, facts?.formula || null].filter(Boolean).join(", ");
+  const comps = ctx.components.length ? `; ${plural(ctx.components.length, "component structure")} read` : "";
+  const nitrogen = leftToNitrogen ? `; ${plural(leftToNitrogen, "remark")} on amine nitrogens left to nitrogen-inversion` : "";
   const copies = saltRemarks.length ? `; ${saltRemarks.join("; ")}` : "";
   return { findings, passed: `structure read${what ? ` (${what})` : ""}${comps}${copies}${nitrogen}` };
 }
-var messages4, OVER_LIMIT, structureReadable;
+var messages5, OVER_LIMIT, structureReadable;
 var init_structure_readable = __esm({
   "src/checks/structure-readable.ts"() {
     "use strict";
     init_words();
     init_nitrogen_inversion();
-    messages4 = {
+    messages5 = {
       "structure-unreadable": "The structure in {field} could not be read: {error}{where}. Nothing about its stereochemistry can be checked. Correct the SMILES or molfile (check ring-closure digits, brackets and the counts line) and resubmit.",
       "structure-over-limit": "The structure in {field} was not analysed: {error}. The size limits keep every record within the time limit; split a mixture into its records, or leave out repeated salt or solvent parts, and resubmit.",
       "component-unreadable": "Component {index} ({field}) could not be read: {error}{where}. The mixture cannot be checked against it. Correct that structure.",
@@ -48030,8 +50394,8 @@ var init_structure_readable = __esm({
       defaultSeverity: "error",
       summary: "The structure (SMILES or molfile) can be read, and a molfile path stays inside the registry.",
       explanation: "Every other check works on the structure, so a structure that cannot be read leaves the stereo claim unchecked. SMILES are read by the OpenSMILES specification, molfiles by the CTfile format specification (V2000 and V3000). A molfile is named by a path relative to the record file; a path that leaves the registry (.., an absolute path, or a symbolic link out) is refused, so that a pull request cannot make the audit read files elsewhere on the machine.",
-      messages: messages4,
-      run: run4
+      messages: messages5,
+      run: run5
     };
   }
 });
@@ -48075,16 +50439,16 @@ function mixtureFindings(ctx, parent) {
       if (!a || !b) continue;
       const rel = ctx.engine.relate(a, b);
       const data = { form, a: i + 1, b: j + 1, relation: rel.relation, explanation: rel.explanation };
-      const at = `stereo.components.${j}`;
+      const at2 = `stereo.components.${j}`;
       if (form === "racemate") {
         if (rel.relation !== "enantiomers")
-          out.push(finding("racemate-components-not-enantiomers", at, data));
+          out.push(finding("racemate-components-not-enantiomers", at2, data));
         continue;
       }
       if (rel.relation === "diastereomers") continue;
-      if (rel.relation === "identical") out.push(finding("mixture-components-identical", at, data));
-      else if (rel.relation === "enantiomers") out.push(finding("mixture-components-enantiomers", at, data));
-      else out.push(finding("mixture-components-unrelated", at, data));
+      if (rel.relation === "identical") out.push(finding("mixture-components-identical", at2, data));
+      else if (rel.relation === "enantiomers") out.push(finding("mixture-components-enantiomers", at2, data));
+      else out.push(finding("mixture-components-unrelated", at2, data));
     }
   }
   return out;
@@ -48095,13 +50459,13 @@ var init_form_mixtures = __esm({
     "use strict";
     init_words();
     mixtureMessages = {
-      "mixture-needs-components": "Declared diastereomer-mixture with {count} component(s) under stereo.components; a mixture needs two or more, each drawn with its configuration. List the components.",
+      "mixture-needs-components": "Declared diastereomer-mixture with {count:component|components} under stereo.components; a mixture needs two or more, each drawn with its configuration. List the components.",
       "mixture-components-identical": "Components {a} and {b} are the same stereoisomer ({explanation}). A diastereomer mixture lists each diastereomer once; remove the duplicate or correct its configuration.",
       "mixture-components-enantiomers": "Components {a} and {b} are enantiomers, not diastereomers ({explanation}). A mixture of two enantiomers is a racemate (1:1) or an enantioenriched sample; declare that form, or correct a configuration.",
       "mixture-components-unrelated": "Components {a} and {b} are {relation}, not diastereomers of each other ({explanation}). The components of a diastereomer mixture differ only in configuration, and each is fully defined.",
       "mixture-component-constitution": "Component {a} ({componentFormula}) does not have the constitution of the parent structure ({parentFormula}). Each component must be a stereoisomer of the registered structure.",
       "racemate-components-not-enantiomers": "The racemate lists components {a} and {b}, which are {relation}, not enantiomers ({explanation}). A racemate is a 1:1 mixture of two enantiomers; correct the components or the form.",
-      "racemate-components-count": "The racemate lists {count} component(s); a racemate consists of exactly two enantiomers. List both, or none."
+      "racemate-components-count": "The racemate lists {count:component|components}; a racemate consists of exactly two enantiomers. List both, or none."
     };
   }
 });
@@ -48143,10 +50507,10 @@ function achiralRemedy(f, labels, nitrogen) {
   }
   return `No stereoisomer of this constitution is chiral, so no configuration can make it so (drawn: ${labels}): declare achiral (single-diastereomer for one cis/trans isomer), or correct the structure.`;
 }
-function run5(ctx) {
+function run6(ctx) {
   const f = ctx.main.facts;
   const record = ctx.record;
-  if (!record || !f) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
   const form = record.stereo.form;
   const e = evidence(f, ctx.main.structure);
   const out = [];
@@ -48209,7 +50573,9 @@ function run5(ctx) {
         const a = f.stereoisomers.achiral;
         add(
           "racemate-which-diastereomer",
-          { achiralPart: a ? ` and ${a} achiral stereoisomer(s)` : "" },
+          {
+            achiralPart: a ? ` and ${a} achiral ${String(a) === "1" ? "stereoisomer" : "stereoisomers"}` : ""
+          },
           "warning"
         );
       }
@@ -48235,7 +50601,7 @@ function passedEvidence(form, f, e) {
   const why = f.chiral !== null && f.mirror.explanation ? ` — ${e.mirror}` : "";
   return `declared ${form}; structure is ${chir} (${e.allUnits})${why}`;
 }
-var messages5, formMatchesStructure;
+var messages6, formMatchesStructure;
 var init_form_matches_structure = __esm({
   "src/checks/form-matches-structure.ts"() {
     "use strict";
@@ -48243,20 +50609,20 @@ var init_form_matches_structure = __esm({
     init_words();
     init_form_mixtures();
     init_nitrogen_inversion();
-    messages5 = {
+    messages6 = {
       "achiral-but-chiral": "Declared achiral, but the structure is chiral: it has {allUnits} and its mirror image is a different molecule ({mirror}). Declare single-enantiomer, enantioenriched or racemate, or correct the structure.",
-      "achiral-but-open": "Declared achiral, but {undefinedCount} stereo unit(s) are left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
+      "achiral-but-open": "Declared achiral, but {undefinedCount:stereo unit is|stereo units are} left undefined ({undefinedUnits}), so whether the substance is chiral is open. Define those units in the structure, or declare the form unknown.",
       "achiral-is-meso": "Declared achiral. The structure is indeed achiral ({mirror}), but its constitution also has chiral stereoisomers ({chiralIsomers} of {totalIsomers}), which makes this one a meso compound. Declare meso.",
       "meso-but-chiral": "Declared meso, but the structure is chiral: it defines {units} and its mirror image is a different molecule ({mirror}). A meso compound is achiral. Check the configurations ({labels}) or declare single-enantiomer.",
-      "meso-but-no-chiral-isomers": "Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so the compound is simply achiral: meso applies only to an achiral member of a set that includes chiral members. Declare achiral.",
-      "meso-but-open": "Declared meso, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}); the drawing also covers chiral stereoisomers. Define every unit as in the meso form.",
+      "meso-but-no-chiral-isomers": "Declared meso, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, achiral|stereoisomers, all achiral}), so the compound is simply achiral: meso applies only to an achiral member of a set that includes chiral members. Declare achiral.",
+      "meso-but-open": "Declared meso, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}); the drawing also covers chiral stereoisomers. Define every unit as in the meso form.",
       "enantiomer-but-achiral": "Declared {form}, but the structure is identical to its mirror image ({mirror}), so it has no enantiomer and no enantiomeric excess. {remedy}",
-      "enantiomer-undefined-units": "Declared {form}, but {undefinedCount} stereo unit(s) are undefined: {undefinedUnits}. The structure then stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.",
+      "enantiomer-undefined-units": "Declared {form}, but {undefinedCount:stereo unit is|stereo units are} undefined: {undefinedUnits}. The structure then stands for {isomers} stereoisomers, not one enantiomer. Define every unit, or declare unknown.",
       "racemate-but-achiral": "Declared racemate, but the structure is identical to its mirror image ({mirror}), so it cannot form a racemate. {remedy}",
-      "racemate-no-chiral-isomers": "Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers} stereoisomer(s), all achiral), so there are no enantiomers to mix. Declare achiral.",
-      "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount} undefined stereo unit(s) ({undefinedUnits}). This constitution has {pairs} pair(s) of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
-      "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount} stereo unit(s) ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
-      "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount} stereo unit(s) are undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
+      "racemate-no-chiral-isomers": "Declared racemate, but no stereoisomer of this constitution is chiral ({totalIsomers:stereoisomer, achiral|stereoisomers, all achiral}), so there are no enantiomers to mix. Declare achiral.",
+      "racemate-which-diastereomer": "Declared racemate, drawn with {undefinedCount:undefined stereo unit|undefined stereo units} ({undefinedUnits}). This constitution has {pairs:pair|pairs} of enantiomers{achiralPart}, so the drawing does not say which diastereomer's racemate it is. Draw the relative configuration and mark it racemic (AND group, or rac-).",
+      "diastereomer-too-few-units": "Declared single-diastereomer, but the structure defines {definedCount:stereo unit|stereo units} ({units}); diastereomers need at least two stereogenic units, or a stereogenic double bond. Declare single-enantiomer, achiral or unknown, or define the missing units.",
+      "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
       "enantiomer-but-drawn-mixture": "Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows (racemate, enantioenriched, diastereomer-mixture).",
       "racemate-drawn-not-racemic": "Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.",
       "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the claim checked.",
@@ -48267,9 +50633,9 @@ var init_form_matches_structure = __esm({
       defaultSeverity: "error",
       summary: "The declared stereo form agrees with the chirality, meso character and defined units of the structure.",
       explanation: "IUPAC Gold Book definitions: a chiral molecule is not superimposable on its mirror image; enantiomers are mirror-image stereoisomers; a racemate is an equimolar mixture of a pair of enantiomers, so it needs a chiral structure; a meso compound is the achiral member of a set of diastereoisomers that also includes chiral members; diastereoisomers are stereoisomers that are not enantiomers (cis-trans isomers included). A single enantiomer therefore needs a chiral structure with every stereo unit defined, a single diastereomer two or more stereogenic units (or a stereogenic double bond), and a diastereomer mixture two or more components that are pairwise diastereomers with the constitution of the parent. The evidence is the engine's mirror-image analysis (the symmetry element that makes a structure achiral) and its stereoisomer count.",
-      messages: messages5,
+      messages: messages6,
       requires: ["structure"],
-      run: run5
+      run: run6
     };
   }
 });
@@ -48278,14 +50644,18 @@ var init_form_matches_structure = __esm({
 function atomList(atoms) {
   return atoms.length === 1 ? `atom ${atoms[0]}` : `atoms ${atoms.join(", ")}`;
 }
-function run6(ctx) {
+function run7(ctx) {
   const f = ctx.main.facts;
   const record = ctx.record;
-  if (!record || !f) return { findings: [], notApplicable: true };
+  if (!record || !f) return { findings: [], notApplicable: "the record or its structure was not read" };
   const form = record.stereo.form;
   const groups = f.enhanced.groups;
   const defined = definedUnits(f);
-  if (groups.length === 0 && defined.length === 0) return { findings: [], notApplicable: true };
+  if (groups.length === 0 && defined.length === 0)
+    return {
+      findings: [],
+      notApplicable: "the structure has no enhanced-stereo group and no defined stereo unit"
+    };
   const and = groups.filter((g) => g.type === "and");
   const or = groups.filter((g) => g.type === "or");
   const decl = declaredDescriptors(record);
@@ -48353,12 +50723,12 @@ function run6(ctx) {
     passed: `drawing means ${f.enhanced.meaning} (${groupText}); consistent with ${form}`
   };
 }
-var messages6, enhancedStereoMatchesForm;
+var messages7, enhancedStereoMatchesForm;
 var init_enhanced_stereo_matches_form = __esm({
   "src/checks/enhanced-stereo-matches-form.ts"() {
     "use strict";
     init_words();
-    messages6 = {
+    messages7 = {
       "and-group-with-single-enantiomer": 'Declared single-enantiomer, but the structure puts {atoms} in an AND group (&{group}), which means "this stereoisomer and its mirror image, together" — a racemic or enantiomer-mixture drawing. Remove the AND group (absolute stereo) or declare racemate / enantioenriched.',
       "or-group-with-racemate": 'Declared racemate, but the structure puts {atoms} in an OR group (or{group}), which means "this stereoisomer or its mirror image, unknown which" — one enantiomer, not a mixture. Use an AND group for a racemate, or declare single-enantiomer with relative descriptors (rel- or R*).',
       "racemate-drawn-absolute": "Declared racemate, but the structure is drawn as one enantiomer with absolute stereo ({labels}; no AND group{flag}). A racemate is drawn with its centres in an AND group (&1), or without stereo marks when it has one stereocentre. Add the AND group, or correct the form.",
@@ -48372,9 +50742,9 @@ var init_enhanced_stereo_matches_form = __esm({
       defaultSeverity: "error",
       summary: "Enhanced-stereo groups (ABS, AND, OR) agree with the declared form and descriptors.",
       explanation: "Enhanced stereo, as defined in the CTfile format specification (V3000 collection blocks MDLV30/STEABS, STERAC, STEREL) and CXSMILES, says what a drawn configuration stands for: ABS — this stereoisomer; AND (racemic group) — this stereoisomer and its mirror image, a mixture; OR (relative group) — this stereoisomer or its mirror image, unknown which. A single enantiomer cannot carry an AND group, a racemate cannot carry an OR group and should not be drawn as absolute, and absolute descriptors (R, S without rel or *) contradict an OR group (IUPAC 2013, P-93.1.3: relative configuration is written rel- or R*).",
-      messages: messages6,
+      messages: messages7,
       requires: ["structure"],
-      run: run6
+      run: run7
     };
   }
 });
@@ -48646,16 +51016,16 @@ function mapInText(text, structure, atoms) {
     const n = i + 1;
     if (!atoms.has(n)) continue;
     const raw2 = g.atoms[i];
-    const at = raw2.offset;
-    if (text[at] === "[") {
-      const close2 = text.indexOf("]", at);
+    const at2 = raw2.offset;
+    if (text[at2] === "[") {
+      const close2 = text.indexOf("]", at2);
       if (close2 < 0) return null;
-      const inner = text.slice(at + 1, close2).replace(/:\d+$/, "");
-      edits.push({ at, end: close2 + 1, text: `[${inner}:${n}]` });
+      const inner = text.slice(at2 + 1, close2).replace(/:\d+$/, "");
+      edits.push({ at: at2, end: close2 + 1, text: `[${inner}:${n}]` });
     } else {
-      const token = TWO_LETTER.has(text.slice(at, at + 2)) ? text.slice(at, at + 2) : text[at];
+      const token = TWO_LETTER.has(text.slice(at2, at2 + 2)) ? text.slice(at2, at2 + 2) : text[at2];
       const h = byNumber.get(n)?.hCount ?? 0;
-      edits.push({ at, end: at + token.length, text: `[${token}${h > 0 ? `H${h > 1 ? h : ""}` : ""}:${n}]` });
+      edits.push({ at: at2, end: at2 + token.length, text: `[${token}${h > 0 ? `H${h > 1 ? h : ""}` : ""}:${n}]` });
     }
   }
   let out = text;
@@ -48753,8 +51123,16 @@ function compareOne(field2, text, parsed, facts, out, form, evidence2, nitrogenN
       if (fix !== null) out[out.length - 1].fix = fix;
     }
     if (cmp.notStereoUnits.length)
-      add("descriptor-not-stereo-unit", { locants: cmp.notStereoUnits.join(", "), computed });
-    if (cmp.undefinedAt.length) add("descriptor-at-undefined-unit", { locants: cmp.undefinedAt.join(", ") });
+      add("descriptor-not-stereo-unit", {
+        locants: cmp.notStereoUnits.join(", "),
+        locantCount: cmp.notStereoUnits.length,
+        computed
+      });
+    if (cmp.undefinedAt.length)
+      add("descriptor-at-undefined-unit", {
+        locants: cmp.undefinedAt.join(", "),
+        locantCount: cmp.undefinedAt.length
+      });
     if (cmp.agrees && cmp.unlisted.length) {
       const missing = cmp.unlisted.map((u) => `${u.locant ?? `atom ${u.atoms.join("–")}`} (${u.label})`).join(", ");
       add("descriptors-incomplete", { missing, computed, method: cmp.method }, "warning");
@@ -48836,10 +51214,10 @@ function comparable(r, ctx) {
     repeats: ` (${words} of the structure and is counted once)`
   };
 }
-function run7(ctx) {
+function run8(ctx) {
   const record = ctx.record;
   const c0 = comparable(ctx.main, ctx);
-  if (!record || !c0) return { findings: [], notApplicable: true };
+  if (!record || !c0) return { findings: [], notApplicable: "the record or its structure was not read" };
   const f = c0.facts;
   const decl = declaredDescriptors(record);
   const out = [];
@@ -48933,12 +51311,16 @@ function run7(ctx) {
   out.push(...cisTransFindings(ctx, decl, f));
   const hasAny = decl.field !== null || decl.name !== null && (decl.name.items.length > 0 || decl.name.mode !== "none" || decl.name.words.length > 0 || decl.name.rotationSign !== null);
   const hasComponents = (record.stereo.components ?? []).some((c) => c.descriptors);
-  if (!hasAny && !hasComponents && out.length === 0) return { findings: [], notApplicable: true };
+  if (!hasAny && !hasComponents && out.length === 0)
+    return {
+      findings: [],
+      notApplicable: "no descriptors declared (stereo.descriptors, the name, the components)"
+    };
   if (out.some((x) => x.severity !== "note" || x.messageId === "descriptors-at-unstated-units"))
     return { findings: out };
   return { findings: out, passed: evidence2.join("; ") || "descriptor prefixes agree with the declared form" };
 }
-var messages7, HOW, descriptorsMatchStructure;
+var messages8, HOW, descriptorsMatchStructure;
 var init_descriptors_match_structure = __esm({
   "src/checks/descriptors-match-structure.ts"() {
     "use strict";
@@ -48952,13 +51334,13 @@ var init_descriptors_match_structure = __esm({
     init_descriptors_unverified();
     init_mapped_smiles();
     init_fixes();
-    messages7 = {
+    messages8 = {
       "descriptor-unreadable": "The descriptors in {field} ('{text}') could not be read: {problem}. Write them as IUPAC 2013 P-93 does, e.g. (2R,3S), rac-(1R,2S), (1R*,2S*), (2Z,4E).",
-      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count} unit(s): {mismatches} ({how}). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
-      "descriptor-not-stereo-unit": "{field} declares configurations at locant(s) {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
-      "descriptor-at-undefined-unit": "{field} declares configurations at locant(s) {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
+      "descriptor-label-mismatch": "{field} declares {text}, but the structure computes otherwise at {count:unit|units}: {mismatches} ({how}). Either the drawing or the descriptors are wrong: check the wedges / @ marks at those atoms, or correct the descriptors.",
+      "descriptor-not-stereo-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but no stereo unit of the structure carries those atom-map numbers (computed: {computed}). Check the atom-map numbers in the SMILES, or drop those descriptors.",
+      "descriptor-at-undefined-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
       "descriptor-counts-mismatch": "{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.",
-      "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount} configuration(s)), but the structure defines only {definedCount} stereo unit(s) and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
+      "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount:configuration|configurations}), but the structure defines only {definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
       "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
@@ -48978,9 +51360,9 @@ var init_descriptors_match_structure = __esm({
       defaultSeverity: "error",
       summary: "Stated IUPAC stereodescriptors agree with the computed CIP labels, and their prefixes with the form.",
       explanation: "Stereodescriptors follow the IUPAC 2013 recommendations, P-93: R/S for stereocentres (lower-case r/s for pseudoasymmetric ones), E/Z for double bonds, M/P or Ra/Sa for axes; RS/SR and rac- for racemates, R*/S* and rel- for relative configuration, which describe the drawn stereoisomer or its mirror image and are compared up to inversion. The labels are computed by the CIP sequence rules (P-92). When the SMILES carries atom-map numbers equal to the locants ([C@@H:2]) the comparison is per atom; without them a descriptor is still matched to its unit where the structure has one unit of each kind cited (one R/S centre, one E/Z double bond); otherwise only the numbers of R, S, E, Z … can be compared, and where that cannot tell (1R,2S) from (1S,2R) the claim is reported as consistent in count, not verified per atom (a note with the structure written with atom maps to paste), never as passed. (+)/(−) state the sign of optical rotation, (±) a racemate; D/L (Fischer) are not CIP descriptors and are not compared. cis/trans in a name is compared with the drawn geometry where it is unambiguous: one stereogenic double bond with one substituent other than hydrogen at each end, and no other stereo unit.",
-      messages: messages7,
+      messages: messages8,
       requires: ["structure"],
-      run: run7
+      run: run8
     };
   }
 });
@@ -49057,11 +51439,12 @@ function componentsAreDiastereomers(ctx) {
   }
   return true;
 }
-function run8(ctx) {
+function run9(ctx) {
   const record = ctx.record;
-  if (!record) return { findings: [], notApplicable: true };
+  if (!record) return { findings: [], notApplicable: "the record was not read" };
   const { form, ratio, ee, components } = record.stereo;
-  if (ratio === void 0 && ee === void 0) return { findings: [], notApplicable: true };
+  if (ratio === void 0 && ee === void 0)
+    return { findings: [], notApplicable: "no ratio or ee declared (stereo.ratio, stereo.ee)" };
   const cfg = ctx.config;
   const out = [];
   const add = (id, field2, data, severity) => {
@@ -49151,17 +51534,17 @@ function run8(ctx) {
     evidence2.push(`ratio ${ratio} sums to ${fmt(parts.reduce((a, b) => a + b, 0))}`);
   return { findings: out, passed: `${evidence2.join("; ")}; consistent with ${form}` };
 }
-var messages8, ratioAndEeConsistent;
+var messages9, ratioAndEeConsistent;
 var init_ratio_and_ee_consistent = __esm({
   "src/checks/ratio-and-ee-consistent.ts"() {
     "use strict";
     init_ratio();
     init_words();
-    messages8 = {
+    messages9 = {
       "ratio-unreadable": "The ratio '{ratio}' could not be read: {problem} (at character {offset}). Write it as parts separated by colons, e.g. 70:30 or 97.5:2.5.",
       "ratio-parts-not-100": "The ratio {ratio} reads as percentages but its parts sum to {sum}, not 100 (tolerance ±{tolerance}). Correct the parts; if relative amounts were meant, write them as small whole numbers (e.g. 2:1).",
-      "ratio-components-count": "The ratio {ratio} has {parts} part(s) but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
-      "enantiomer-ratio-parts": "The ratio {ratio} has {parts} parts, but a {form} consists of two enantiomers. Give the enantiomer ratio as two parts (e.g. 97:3).",
+      "ratio-components-count": "The ratio {ratio} has {parts:part|parts} but stereo.components lists {components}; the parts are read in the order of the components. Give one part per component.",
+      "enantiomer-ratio-parts": "The ratio {ratio} has {parts:part|parts}, but a {form} consists of two enantiomers. Give the enantiomer ratio as two parts (e.g. 97:3).",
       "racemate-ratio-not-even": "Declared racemate, but the ratio {ratio} is {deviation} points away from 50:50 (tolerance ±{tolerance}); that is an enantioenriched sample with ee {ee}%. Check the measurement, or declare enantioenriched with the ee.",
       "racemate-ee-not-zero": "Declared racemate, but the stated ee is {ee}% (a racemate has ee 0 within ±{tolerance}). Declare enantioenriched, or correct the ee.",
       "ee-disagrees-with-ratio": "The stated ee {ee}% does not agree with the ratio {ratio}, which gives ee = |a − b| / (a + b) · 100 = {computedEe}% (tolerance ±{tolerance}). Correct one of them.",
@@ -49175,8 +51558,8 @@ var init_ratio_and_ee_consistent = __esm({
       defaultSeverity: "error",
       summary: "Component ratio and enantiomeric excess agree with each other and with the declared form.",
       explanation: "Enantiomeric excess is |F(+) − F(−)| for mole fractions of the two enantiomers, in percent 100·|a − b|/(a + b) for a ratio a:b (IUPAC Gold Book, enantiomer excess). A racemate is an equimolar mixture of a pair of enantiomers (Gold Book, racemate), so 50:50 and ee 0. Diastereomers differ in energy and are normally formed in unequal amounts; enantiomers have equal energies, so achiral conditions give 50:50 — an exactly even diastereomer ratio deserves a question. Tolerances (ratio sum, racemate ratio, ee agreement) and the single-enantiomer ee threshold are registry settings (common practice, no source).",
-      messages: messages8,
-      run: run8
+      messages: messages9,
+      run: run9
     };
   }
 });
@@ -49594,14 +51977,14 @@ function classify2(product, inputs, asg) {
   inputs.forEach((side, k) => {
     const mine = asg.placements.map((pl, o) => ({ pl, o })).filter((x) => x.pl.input === k);
     const rel = mine.map((x) => perPlacement[x.o]).filter((r) => r !== "none");
-    const relative = rel.length === 0 ? "none" : rel.every((r) => r === "same") ? "same" : rel.every((r) => r === "mirror") ? "mirror" : "mixed";
+    const relative2 = rel.length === 0 ? "none" : rel.every((r) => r === "same") ? "same" : rel.every((r) => r === "mirror") ? "mirror" : "mixed";
     traces.push({
       input: k,
       copies: mine.length,
       heavyAtoms: side?.g.n ?? 0,
       atomsMapped: Math.max(0, ...mine.map((x) => x.pl.atoms)),
       bondsMapped: Math.max(0, ...mine.map((x) => x.pl.bonds)),
-      relative
+      relative: relative2
     });
   });
   return { units, inputs: traces };
@@ -49763,7 +52146,7 @@ function drawnStatus(facts, name) {
   if (facts.undefined > 0 || facts.chiral === null)
     return {
       status: "unknown",
-      why: `${name} is drawn without the configuration of ${facts.undefined} stereo unit(s), so it may be racemic or one enantiomer`
+      why: `${name} is drawn without the configuration of ${plural(facts.undefined, "stereo unit")}, so it may be racemic or one enantiomer`
     };
   if (facts.enhanced.meaning === "relative")
     return {
@@ -49854,6 +52237,7 @@ var init_origin_inputs = __esm({
     init_read();
     init_describe2();
     init_descriptors();
+    init_words();
     byId = /* @__PURE__ */ new WeakMap();
     ID_SHAPE = /^[A-Za-z]{1,10}[-_ ]?\d{1,12}$/;
     MAX_WALK = 1e4;
@@ -49864,7 +52248,7 @@ var init_origin_inputs = __esm({
 function productUnitName(facts, u) {
   const key3 = u.atoms.join(",");
   const f = facts.units.find((x) => x.atoms.join(",") === key3);
-  if (f) return unitName2(f);
+  if (f) return unitName(f);
   return u.atoms.length === 1 ? `atom ${u.atoms[0]}` : `the unit at atoms ${u.atoms.join(", ")}`;
 }
 function names(facts, units) {
@@ -49887,7 +52271,7 @@ function carriedConfigurations(facts, prov, inputs, add, component) {
     const who = inputName(input);
     const field2 = component === null ? "structure" : `stereo.components.${component}`;
     const racemic = input.status === "racemic";
-    const plural = inverted.length > 1;
+    const plural2 = inverted.length > 1;
     if (component !== null && (trace.relative === "mixed" || !racemic && trace.relative === "mirror")) {
       add("mixture-component-differs", field2, {
         component: component + 1,
@@ -49915,13 +52299,13 @@ function carriedConfigurations(facts, prov, inputs, add, component) {
         input: who,
         inverted: names(facts, inverted),
         kept: names(facts, kept),
-        verb: plural ? "are" : "is"
+        verb: plural2 ? "are" : "is"
       });
     } else if (trace.relative === "mirror") {
       add("carried-enantiomer", field2, {
         units: names(facts, inverted),
-        verb: plural ? "are" : "is",
-        pronoun: plural ? "them" : "it",
+        verb: plural2 ? "are" : "is",
+        pronoun: plural2 ? "them" : "it",
         input: who
       });
     } else {
@@ -49929,8 +52313,8 @@ function carriedConfigurations(facts, prov, inputs, add, component) {
         inverted: names(facts, inverted),
         kept: names(facts, kept),
         keepS: kept.length > 1 ? "" : "s",
-        verb: plural ? "are" : "is",
-        pronoun: plural ? "them" : "it",
+        verb: plural2 ? "are" : "is",
+        pronoun: plural2 ? "them" : "it",
         input: who
       });
     }
@@ -50160,7 +52544,7 @@ function inputProblems(ctx, from, add) {
     else if (r.problem === "no-structure")
       add("input-without-structure", field2, { entry: text, detail: r.detail }, "note");
     else if (r.problem === "not-found") {
-      const ids = ctx.registry.entries.flatMap((e) => e.id === null ? [] : [e.id]);
+      const ids = ctx.registry.ids?.() ?? ctx.registry.entries.flatMap((e) => e.id === null ? [] : [e.id]);
       const guess = ids.length <= 5e4 ? closestWord(text.trim(), ids) : null;
       add("input-not-found", field2, {
         entry: text,
@@ -50186,10 +52570,10 @@ function unmappedNote(facts, prov, add) {
     "note"
   );
 }
-function run9(ctx) {
+function run10(ctx) {
   const record = ctx.record;
   const origin = record?.origin;
-  if (!record || !origin) return { findings: [], notApplicable: true };
+  if (!record || !origin) return { findings: [], notApplicable: "no origin given (origin)" };
   const out = [];
   const add = makeAdd(out);
   const inputs = inputProblems(ctx, origin.from, add);
@@ -50199,7 +52583,10 @@ function run9(ctx) {
   }
   const main = ctx.main;
   if (out.length > 0 || !main.structure || !main.facts)
-    return out.length > 0 ? { findings: out } : { findings: [], notApplicable: true };
+    return out.length > 0 ? { findings: out } : {
+      findings: [],
+      notRun: main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure"
+    };
   const prov = traceProvenance(
     main.structure,
     inputs.map((i) => i.structure)
@@ -50245,87 +52632,6 @@ var init_origin_supports_claim = __esm({
       summary: "The stereo claim agrees with how the compound was made (origin): racemic from achiral or racemic inputs without chiral control, carried stereo units unchanged, diastereomers in unequal amounts.",
       explanation: "A reaction that can form either enantiomer of a product through mirror-image pathways, with nothing chiral present, runs both at the same rate: the two transition states are enantiomeric and equal in energy, so the product is a racemate; enantiotopic groups of a meso or other achiral input likewise react at equal rates. A new stereo unit formed in a molecule that already has a defined one gives diastereomers, whose transition states differ in energy, so they form in unequal amounts (e.g. Cram 1952 on additions to α-chiral aldehydes, from memory). A stereo unit at which no bond is made or broken keeps its spatial arrangement; it is compared through the mapped neighbours, not the CIP label, which can change when priorities change (IUPAC 2013 P-92.1). Inputs are placed on the structure by their largest common connected substructure (elements and bond orders kept), within a time bound; a unit that cannot be traced is left unchecked with a note.",
       messages: originMessages,
-      run: run9
-    };
-  }
-});
-
-// src/checks/waivers.ts
-function blank(s) {
-  return s === void 0 || s.trim() === "";
-}
-function reviewWaivers(record, findings, knownChecks) {
-  const waivers = record?.waivers ?? [];
-  const out = [];
-  const firstIndex = /* @__PURE__ */ new Map();
-  waivers.forEach((w, index) => {
-    const field2 = `waivers.${index}`;
-    const missing = [
-      blank(w.reason) ? "reason" : null,
-      blank(w.approved_by) ? "approver (approved_by)" : null
-    ].filter((x) => x !== null);
-    if (missing.length) {
-      out.push(
-        finding("waiver-incomplete", field2, {
-          waivedCheck: w.check,
-          index,
-          missing: missing.join(" and no ")
-        })
-      );
-    }
-    const seen = firstIndex.get(w.check);
-    if (seen !== void 0) {
-      out.push(finding("waiver-duplicate", field2, { waivedCheck: w.check, index, first: seen }, "note"));
-      return;
-    }
-    firstIndex.set(w.check, index);
-    if (w.check !== WAIVER_CHECK_ID && !findings.some((f) => f.check === w.check)) {
-      const unknown = knownChecks !== void 0 && !knownChecks.includes(w.check);
-      out.push(
-        finding(
-          "waiver-matches-nothing",
-          field2,
-          {
-            waivedCheck: w.check,
-            index,
-            knownCheck: !unknown,
-            known: unknown ? " (and no check has that id)" : ""
-          },
-          "note"
-        )
-      );
-    }
-  });
-  return out;
-}
-function run10(ctx) {
-  const waivers = ctx.record?.waivers ?? [];
-  if (waivers.length === 0) return { findings: [], notApplicable: true };
-  const findings = reviewWaivers(ctx.record, ctx.findings ?? []);
-  if (findings.some((f) => f.severity !== "note")) return { findings };
-  const accepted = waivers.filter((w) => (ctx.findings ?? []).some((f) => f.check === w.check)).length;
-  return {
-    findings,
-    passed: `${waivers.length} waiver(s) complete; ${accepted} accept findings of this record`
-  };
-}
-var WAIVER_CHECK_ID, messages9, waiverReview;
-var init_waivers = __esm({
-  "src/checks/waivers.ts"() {
-    "use strict";
-    init_words();
-    WAIVER_CHECK_ID = "waiver-review";
-    messages9 = {
-      "waiver-incomplete": "The waiver for {waivedCheck} (waivers[{index}]) has no {missing}. A waiver records a decision: say why the finding is acceptable (reason) and who decided (approved_by). Until then it accepts nothing.",
-      "waiver-matches-nothing": "The waiver for {waivedCheck} (waivers[{index}]) matches no finding on this record{known}. Remove it, or correct the check id, so that it does not silently accept a future finding.",
-      "waiver-duplicate": "waivers[{index}] repeats the waiver for {waivedCheck} given in waivers[{first}]. Keep one."
-    };
-    waiverReview = {
-      id: WAIVER_CHECK_ID,
-      defaultSeverity: "warning",
-      summary: "Waivers give a reason and an approver, and each accepts a finding of this record.",
-      explanation: "A waiver is the responsible chemist accepting a finding for this record; it is only as good as its reason and the name of who decided (common practice, no source: review decisions are recorded with their reason and approver). A waiver that accepts nothing is removed, so that it cannot hide a later, different problem.",
-      messages: messages9,
       run: run10
     };
   }
@@ -50368,861 +52674,12 @@ var init_checks = __esm({
   }
 });
 
-// src/audit/run.ts
-init_closest();
+// src/bulk/audit-item.ts
+init_run();
+init_index_row();
 
-// src/registry/files.ts
-import {
-  closeSync,
-  constants,
-  fstatSync,
-  lstatSync,
-  openSync,
-  readdirSync,
-  readSync,
-  realpathSync,
-  statSync
-} from "node:fs";
-var MAX_FILE_BYTES = 8 * 1024 * 1024;
-var UTF8 = new TextDecoder("utf-8", { fatal: true });
-var OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
-
-// src/registry/parse.ts
-var import_yaml2 = __toESM(require_dist(), 1);
-
-// src/registry/positions.ts
-var import_yaml = __toESM(require_dist(), 1);
-function lineOf(positions2, path) {
-  if (path === null) return null;
-  let p = path;
-  for (; ; ) {
-    const pos = positions2.get(p);
-    if (pos) return pos.line;
-    if (p === "") return null;
-    const cut = p.lastIndexOf(".");
-    p = cut < 0 ? "" : p.slice(0, cut);
-  }
-}
-
-// src/registry/schema.ts
-var import_ajv = __toESM(require_ajv(), 1);
-init_closest();
-var AJV_OPTIONS = {
-  allErrors: true,
-  strict: true,
-  strictRequired: false,
-  allowUnionTypes: true,
-  verbose: true
-};
-var ajv = new import_ajv.Ajv({ ...AJV_OPTIONS, validateSchema: false });
-
-// src/registry/parse.ts
-var PLAIN_TAGS = new Set(
-  ["str", "int", "float", "bool", "null", "map", "seq"].map((t) => `tag:yaml.org,2002:${t}`)
-);
-
-// src/audit/caution.ts
-var CAUTION = "Computed result: stereogate derives these findings from the drawn structure by algorithm. The responsible chemist must confirm every finding before registration; a computed result is no substitute for analytical evidence (chiral chromatography, optical rotation, X-ray, NMR), and your local SOPs decide.";
-
-// src/audit/config.ts
-var DEFAULT_CONFIG = Object.freeze({
-  recordDirs: ["compounds"],
-  severities: {},
-  ratioSumTolerance: 1,
-  racemateRatioTolerance: 2,
-  eeTolerance: 1,
-  singleEnantiomerMinEe: 98,
-  zeroRotationTolerance: 1,
-  axisOrthoMin: 3
-});
-var DEFAULT_SOURCES = Object.freeze({
-  recordDirs: "the record format of this project (records live under compounds/ unless configured)",
-  severities: "none overridden: every check keeps the default severity its module declares. A level given for a check sets the level of that check's failures (raised or lowered; note-level messages stay notes); a level given for 'check-id/message-id' sets that one message's level, notes included",
-  ratioSumTolerance: "common practice, no source: ratios are usually reported rounded to whole percent, so three rounded parts may miss 100 by up to 1.5 points; 1 point catches typing errors without flagging ordinary rounding of two parts",
-  racemateRatioTolerance: "common practice, no source: a racemate measured by chiral chromatography typically reads within about 2 points of 50:50 (integration error); more than that suggests an enantioenriched sample",
-  eeTolerance: "common practice, no source: ee and ratios are reported rounded to about 1 percent",
-  singleEnantiomerMinEe: "common practice, no source: many registries call a sample a single enantiomer from about 98 % ee (99:1 er); set your own SOP value",
-  zeroRotationTolerance: "from memory: polarimeters read the observed rotation to about ±0.01°, which at c = 1 g/100 mL in a 1 dm cell is ±1° of specific rotation ([α] = 100·α / (l·c))",
-  axisOrthoMin: "common practice, no source: biaryls with three or four ortho substituents usually rotate slowly enough for atropisomers to be isolated at room temperature, with two they usually do not; a fused ring at an ortho position counts twice (its peri C–H), so 1,1'-binaphthyl qualifies"
-});
-
-// src/audit/engine.ts
-function heavyFormula(elements, wildcards) {
-  const counts = /* @__PURE__ */ new Map();
-  for (const e of elements) counts.set(e, (counts.get(e) ?? 0) + 1);
-  const order = [...counts.keys()].sort((x, y) => {
-    if (x === "C" || y === "C") return x === "C" ? y === "C" ? 0 : -1 : 1;
-    return x < y ? -1 : x > y ? 1 : 0;
-  });
-  let out = "";
-  for (const e of order) {
-    const c = counts.get(e);
-    out += c === 1 ? e : `${e}${c}`;
-  }
-  if (wildcards > 0) out += wildcards === 1 ? "*" : `*${wildcards}`;
-  return out;
-}
-async function defaultEngine(settings = {}) {
-  const chem = await Promise.resolve().then(() => (init_chem(), chem_exports));
-  const graph = await Promise.resolve().then(() => (init_graph(), graph_exports));
-  const syntax = await Promise.resolve().then(() => (init_smiles_parse(), smiles_parse_exports));
-  return {
-    readStructure: (text, options) => chem.readStructure(text, options),
-    describe: settings.axisOrthoMin === void 0 ? (s) => chem.describe(s) : (s) => chem.describe(s, { axisOrthoMin: settings.axisOrthoMin }),
-    relate: (a, b) => chem.relate(a, b),
-    formula: (s) => graph.molecularFormula(s),
-    smilesHeavyAtoms: (smiles) => {
-      let start = 0;
-      while (start < smiles.length && " 	\n\r".includes(smiles[start])) start++;
-      let g;
-      try {
-        g = syntax.parseSmilesGraph(smiles, start);
-      } catch {
-        return null;
-      }
-      if ("error" in g) return null;
-      const heavy = [];
-      let wildcards = 0;
-      for (const a of g.atoms) {
-        if (a.atomicNumber === 0 || a.element === "*") wildcards++;
-        else if (a.atomicNumber !== 1) heavy.push(a.element);
-      }
-      return heavyFormula(heavy, wildcards);
-    }
-  };
-}
-
-// src/audit/findings.ts
-var SCHEMA_CHECK_ID = "record-schema";
-var INTERNAL_ERROR_ID = "internal-error";
-function fillTemplate(template, data) {
-  return template.replace(/\{([A-Za-z0-9_]+)\}/g, (whole, name) => {
-    if (!(name in data)) return whole;
-    const v = data[name];
-    return v === null ? "none" : String(v);
-  });
-}
-function resolveSeverity(base, own2, configured, configuredForMessage) {
-  if (configuredForMessage !== void 0) return configuredForMessage;
-  const level2 = own2 ?? base;
-  if (configured === void 0 || level2 === "note") return level2;
-  return configured;
-}
-function messageKey(checkId, messageId) {
-  return `${checkId}/${messageId}`;
-}
-function configuredSeverity(config, key3) {
-  return Object.prototype.hasOwnProperty.call(config.severities, key3) ? config.severities[key3] : void 0;
-}
-function lineFor(loaded, field2) {
-  if (field2 !== null) {
-    const line = lineOf(loaded.positions, field2);
-    if (line !== null) return line;
-  }
-  return loaded.origin.kind === "bulk" ? loaded.origin.line : null;
-}
-function messageEnabled(config, checkId, messageId) {
-  return configuredSeverity(config, messageKey(checkId, messageId)) !== "off";
-}
-function toFinding(check, raw2, loaded, config) {
-  const configured = configuredSeverity(config, check.id);
-  const forMessage = configuredSeverity(config, messageKey(check.id, raw2.messageId));
-  const template = check.messages[raw2.messageId];
-  const message = template !== void 0 ? fillTemplate(template, raw2.data ?? {}) : `${raw2.messageId}${Object.keys(raw2.data ?? {}).length ? ` (${JSON.stringify(raw2.data)})` : ""}`;
-  return {
-    check: check.id,
-    messageId: raw2.messageId,
-    severity: resolveSeverity(
-      check.defaultSeverity,
-      raw2.severity,
-      configured === "off" ? void 0 : configured,
-      forMessage === "off" ? void 0 : forMessage
-    ),
-    message,
-    data: raw2.data ?? {},
-    line: lineFor(loaded, raw2.field ?? null),
-    field: raw2.field ?? null,
-    waived: null,
-    ...raw2.fix === void 0 ? {} : { fix: raw2.fix }
-  };
-}
-function nonEmpty(s) {
-  return typeof s === "string" && s.trim() !== "";
-}
-function applyWaivers(findings, loaded) {
-  const waivers = loaded.record?.waivers ?? [];
-  for (const f of findings) {
-    if (f.check === INTERNAL_ERROR_ID) continue;
-    const w = waivers.find((x) => x.check === f.check && nonEmpty(x.reason) && nonEmpty(x.approved_by));
-    if (w) f.waived = { reason: w.reason.trim(), approvedBy: w.approved_by.trim() };
-  }
-}
-function internalError(check, error, loaded) {
-  const text = error instanceof Error ? error.message : String(error);
-  return {
-    check: INTERNAL_ERROR_ID,
-    messageId: "check-failed",
-    severity: "error",
-    message: `The check ${check.id} failed with an internal error (${text}), so this record was not fully checked. This is a fault in stereogate, not in the record: please report it with the record attached.`,
-    data: { check: check.id, error: text },
-    line: loaded.origin.kind === "bulk" ? loaded.origin.line : null,
-    field: null,
-    waived: null
-  };
-}
-var TIME_LIMIT_ID = "record-time-limit";
-function budgetFinding(loaded, kind, limit) {
-  const what = kind === "time" ? `took longer than the ${limit / 1e3} s time limit` : `needed more than the ${limit} MB memory bound`;
-  return {
-    check: TIME_LIMIT_ID,
-    messageId: kind === "time" ? "time-limit-exceeded" : "memory-bound-exceeded",
-    severity: "error",
-    message: `The audit of this record ${what}; it was stopped, nothing about it was checked, and the run went on. Audit it on its own with a higher limit (--record-timeout), or simplify the structure (split a mixture, leave out repeated salt or solvent parts).`,
-    data: { kind, limit },
-    line: loaded.origin.kind === "bulk" ? loaded.origin.line : lineOf(loaded.positions, "structure"),
-    field: null,
-    waived: null
-  };
-}
-function schemaFindings(loaded, config) {
-  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
-  if (configured === "off") return [];
-  return loaded.problems.map((p) => ({
-    check: SCHEMA_CHECK_ID,
-    messageId: p.code ?? "record-problem",
-    severity: configured ?? "error",
-    message: p.message,
-    data: { path: p.path, problem: p.message },
-    line: p.line ?? (loaded.origin.kind === "bulk" ? loaded.origin.line : null),
-    field: p.path === "" ? null : p.path,
-    waived: null
-  }));
-}
-
-// src/audit/run.ts
-init_budget();
-
-// src/registry/keys.ts
-function drawingKind(f) {
-  const m = f.enhanced.meaning;
-  if (m === "racemic" || m === "mixture") return "racemic";
-  if (m === "relative") return "relative";
-  return "as-drawn";
-}
-var MIRRORED = { R: "S", S: "R", M: "P", P: "M" };
-function recordKeys(f, text) {
-  const kind = drawingKind(f);
-  const base = { constitution: f.constitutionKey, kind, chiral: f.chiral };
-  if (f.units.some((u) => !u.defined)) return { ...base, stereo: null, mirror: null, exact: false };
-  let exact = true;
-  const seen = /* @__PURE__ */ new Set();
-  const own2 = [];
-  const mirrored2 = [];
-  for (const u of f.units) {
-    if (seen.has(u.classKey) || u.label === null || u.label === "e" || u.label === "z") exact = false;
-    seen.add(u.classKey);
-    const label = u.label === null ? "?" : u.label === "e" || u.label === "z" ? "ez" : u.label;
-    own2.push(`${u.classKey}=${label}`);
-    mirrored2.push(`${u.classKey}=${(u.label && MIRRORED[u.label]) ?? label}`);
-  }
-  own2.sort();
-  mirrored2.sort();
-  const keys = {
-    ...base,
-    stereo: `${kind}|${own2.join(";")}`,
-    mirror: `${kind}|${mirrored2.join(";")}`,
-    exact
-  };
-  if (!exact && text) keys.text = text;
-  return keys;
-}
-
-// src/audit/structures.ts
-init_budget();
-var NOTHING = Object.freeze({
-  structure: null,
-  facts: null,
-  error: {
-    message: "the record gives no structure (structure.smiles or structure.molfile)",
-    line: null,
-    offset: null
-  }
-});
-function failed(message, line = null, offset = null, code) {
-  return { structure: null, facts: null, error: { message, line, offset, ...code ? { code } : {} } };
-}
-function readOnly(source, engine) {
-  if (source === null) return { structure: null, failure: NOTHING };
-  if (source.text === null)
-    return { structure: null, failure: failed(source.error ?? "the structure could not be read") };
-  let read;
-  try {
-    read = engine.readStructure(source.text, { format: source.format });
-  } catch (e) {
-    if (e instanceof BudgetExceeded) throw e;
-    const what = source.format === "smiles" ? "SMILES" : "molfile";
-    return {
-      structure: null,
-      failure: failed(`internal error while reading the ${what}: ${e.message}`)
-    };
-  }
-  if (!read.ok) {
-    const what = source.format === "smiles" ? "SMILES" : source.file ? `molfile ${source.file}` : "molfile";
-    return {
-      structure: null,
-      failure: failed(
-        `${what}: ${read.error.message}`,
-        read.error.at.line ?? null,
-        read.error.at.offset ?? null,
-        read.error.code
-      )
-    };
-  }
-  return { structure: read.structure, failure: null };
-}
-function describeRead(read, engine) {
-  if (read.failure || read.structure === null) return read.failure ?? NOTHING;
-  try {
-    return { structure: read.structure, facts: engine.describe(read.structure), error: null };
-  } catch (e) {
-    if (e instanceof BudgetExceeded) throw e;
-    return {
-      structure: read.structure,
-      facts: null,
-      error: {
-        message: `internal error while describing the structure: ${e.message}`,
-        line: null,
-        offset: null
-      }
-    };
-  }
-}
-function readSource(source, engine) {
-  return describeRead(readOnly(source, engine), engine);
-}
-function sourcesOf(loaded) {
-  if (loaded.sources) return loaded.sources;
-  const rec = loaded.record;
-  const one = (ref, field2) => {
-    if (!ref) return null;
-    if (typeof ref.smiles === "string") return { field: field2, format: "smiles", text: ref.smiles };
-    if (typeof ref.molfile === "string") {
-      return {
-        field: field2,
-        format: "molfile",
-        text: null,
-        error: `molfile '${ref.molfile}' was not fetched (no file context)`
-      };
-    }
-    return null;
-  };
-  const components = (rec?.stereo.components ?? []).map(
-    (c, i) => one(c, `stereo.components.${i}`) ?? {
-      field: `stereo.components.${i}`,
-      format: "smiles",
-      text: null,
-      error: "no structure given"
-    }
-  );
-  return { main: one(rec?.structure, "structure"), components };
-}
-var StructureCache = class {
-  constructor(engine) {
-    this.engine = engine;
-  }
-  engine;
-  reads = /* @__PURE__ */ new WeakMap();
-  mains = /* @__PURE__ */ new WeakMap();
-  comps = /* @__PURE__ */ new WeakMap();
-  /** The main structure, read but not described (cheap; for pre-filtering the registry index). */
-  read(loaded) {
-    let r = this.reads.get(loaded);
-    if (!r) {
-      r = readOnly(sourcesOf(loaded).main, this.engine);
-      this.reads.set(loaded, r);
-    }
-    return r;
-  }
-  main(loaded) {
-    let m = this.mains.get(loaded);
-    if (!m) {
-      m = describeRead(this.read(loaded), this.engine);
-      this.mains.set(loaded, m);
-    }
-    return m;
-  }
-  components(loaded) {
-    let c = this.comps.get(loaded);
-    if (!c) {
-      c = sourcesOf(loaded).components.map((s) => readSource(s, this.engine));
-      this.comps.set(loaded, c);
-    }
-    return c;
-  }
-  all(loaded) {
-    return { main: this.main(loaded), components: this.components(loaded) };
-  }
-};
-
-// src/audit/index-row.ts
-var nonEmpty2 = (s) => typeof s === "string" && s.trim() !== "";
-function indexRow(loaded, main, seq) {
-  const record = loaded.record;
-  let keys = null;
-  if (record !== null && main.facts) {
-    const src = sourcesOf(loaded).main;
-    keys = recordKeys(main.facts, src && src.text !== null ? { format: src.format, text: src.text } : null);
-  }
-  const waiver = record?.waivers?.find(
-    (w) => w.check === "consistent-with-registry" && nonEmpty2(w.reason) && nonEmpty2(w.approved_by)
-  );
-  return {
-    seq,
-    id: loaded.id,
-    file: loaded.file,
-    name: record?.name ?? null,
-    form: record?.stereo.form ?? "unknown",
-    rotation: record?.stereo.rotation ?? null,
-    keys,
-    lines: {
-      id: lineFor(loaded, "id"),
-      structure: lineFor(loaded, "structure"),
-      rotation: lineFor(loaded, "stereo.rotation.value")
-    },
-    waiver: waiver ? { reason: waiver.reason.trim(), approvedBy: waiver.approved_by.trim() } : null
-  };
-}
-
-// src/audit/registry-phase.ts
-init_consistent_with_registry();
-
-// src/registry/key-index.ts
-var RegistryIndex = class {
-  constructor(confirm = null) {
-    this.confirm = confirm;
-  }
-  confirm;
-  byKey = /* @__PURE__ */ new Map();
-  /** Rows filed (records with a stereo key). */
-  size = 0;
-  add(row) {
-    const k = row.keys;
-    if (k === null || k.stereo === null) return;
-    const key3 = `${k.constitution}#${k.stereo}`;
-    const classes = this.byKey.get(key3);
-    if (!classes) this.byKey.set(key3, [{ rows: [row] }]);
-    else {
-      const same = classes.find((c) => this.relationOf(k, c.rows[0].keys, "identical") === "identical");
-      if (same) same.rows.push(row);
-      else classes.push({ rows: [row] });
-    }
-    this.size++;
-  }
-  /** Removes a row added before (a record file replaced by its new version). */
-  remove(row) {
-    const k = row.keys;
-    if (k === null || k.stereo === null) return;
-    const key3 = `${k.constitution}#${k.stereo}`;
-    const classes = this.byKey.get(key3);
-    if (!classes) return;
-    for (let ci = 0; ci < classes.length; ci++) {
-      const at = classes[ci].rows.indexOf(row);
-      if (at < 0) continue;
-      classes[ci].rows.splice(at, 1);
-      if (classes[ci].rows.length === 0) classes.splice(ci, 1);
-      if (classes.length === 0) this.byKey.delete(key3);
-      this.size--;
-      return;
-    }
-  }
-  /**
-   * Records identical to `me` or its enantiomers: the earliest record of each matching class, in the order they
-   * were added; `me` itself left out.
-   */
-  matches(me) {
-    const k = me.keys;
-    if (k === null || k.stereo === null || k.mirror === null) return [];
-    const out = [];
-    const consider = (key3, expected) => {
-      for (const c of this.byKey.get(`${k.constitution}#${key3}`) ?? []) {
-        const other = c.rows.find((o) => o !== me && !(o.file === me.file && o.seq === me.seq));
-        if (!other) continue;
-        const relation = other.keys && this.relationOf(k, other.keys, expected);
-        if (relation && !out.some((m) => m.other === other)) out.push({ other, relation });
-      }
-    };
-    consider(k.stereo, "identical");
-    if (k.mirror !== k.stereo) consider(k.mirror, "enantiomers");
-    out.sort((a, b) => a.other.seq - b.other.seq);
-    return out;
-  }
-  relationOf(a, b, expected) {
-    if (a.exact && b.exact) return expected;
-    if (!a.text || !b.text || !this.confirm) return null;
-    const r = this.confirm(a, b);
-    return r === "identical" || r === "enantiomers" ? r : null;
-  }
-};
-
-// src/audit/registry-phase.ts
-var CHECK = consistentWithRegistry;
-var RegistryPhase = class {
-  constructor(options) {
-    this.options = options;
-    this.index = new RegistryIndex(options.confirm);
-    this.enabled = configuredSeverity(options.config, CHECK.id) !== "off";
-  }
-  options;
-  index;
-  pairs = [];
-  firstWithId = /* @__PURE__ */ new Map();
-  records = 0;
-  enabled;
-  underReview = /* @__PURE__ */ new Set();
-  /** Review mode: a record of the registry, not under review (added before any `review`). */
-  file(row) {
-    this.index.add(row);
-  }
-  /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
-  fileUnderReview(row) {
-    this.underReview.add(row);
-    this.index.add(row);
-  }
-  /** Full mode: the next record in the audit's order. Review mode: a record under review (filed before). */
-  next(row) {
-    this.records++;
-    const findings = [];
-    if (this.options.duplicateIds && row.id !== null) {
-      const first = this.firstWithId.get(row.id);
-      if (first === void 0) this.firstWithId.set(row.id, row.file);
-      else if (configuredSeverity(this.options.config, SCHEMA_CHECK_ID) !== "off")
-        findings.push(duplicateId(row, first, this.options.config));
-    }
-    if (!this.enabled || row.keys === null) {
-      if (this.options.mode === "full") this.index.add(row);
-      return { findings, passed: null };
-    }
-    const full = this.options.mode === "full";
-    const matches = this.index.matches(row);
-    const c = compareWithRegistry(
-      row,
-      matches,
-      this.options.mode,
-      this.options.config,
-      (r) => this.underReview.has(r)
-    );
-    if (full) this.index.add(row);
-    this.pairs.push(...c.pairs);
-    for (const raw2 of c.findings)
-      if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
-        findings.push(rowFinding(raw2, row, this.options.config));
-    const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
-    return { findings, passed };
-  }
-  summary() {
-    const what = this.options.mode === "full" ? "every record with each record before it" : "each record under review with the whole registry";
-    return {
-      status: this.enabled ? "run" : "not-run",
-      reason: this.enabled ? `compared ${what} through an index of ${this.index.size} records' keys` : `${CHECK.id} is off in the configuration`,
-      records: this.records,
-      pairs: this.pairs
-    };
-  }
-};
-function rowFinding(raw2, row, config) {
-  const lines = {
-    id: row.lines.id,
-    structure: row.lines.structure,
-    "stereo.rotation.value": row.lines.rotation ?? row.lines.structure
-  };
-  const positions2 = {
-    get: (path) => lines[path] != null ? { line: lines[path], column: 1 } : void 0
-  };
-  const loaded = {
-    file: row.file,
-    id: row.id,
-    record: null,
-    positions: positions2,
-    problems: [],
-    origin: { kind: "file" }
-  };
-  return { ...toFinding(CHECK, raw2, loaded, config), waived: row.waiver };
-}
-function duplicateId(row, first, config) {
-  const configured = configuredSeverity(config, SCHEMA_CHECK_ID);
-  const message = `id: '${row.id}' is also used by ${first}; every record needs its own id`;
-  return {
-    check: SCHEMA_CHECK_ID,
-    messageId: "duplicate-id",
-    severity: configured === "off" || configured === void 0 ? "error" : configured,
-    message,
-    data: { path: "id", problem: message },
-    line: row.lines.id,
-    field: "id",
-    waived: null
-  };
-}
-
-// package.json
-var package_default = {
-  name: "stereogate",
-  version: "0.1.0",
-  description: "Audits compound-registration records for stereochemical consistency: stereo perception, CIP labels, mirror-image and symmetry analysis, stereoisomer counts, structure relations.",
-  type: "module",
-  license: "MIT",
-  engines: {
-    node: ">=20"
-  },
-  bin: {
-    stereogate: "bin/stereogate.js"
-  },
-  scripts: {
-    build: "node scripts/bundle.mjs",
-    typecheck: "tsc -p tsconfig.json --noEmit",
-    demo: "node --import tsx src/cli/main.ts audit --root fixtures/demo-registry --fail-on never",
-    test: "vitest run",
-    bench: "node --import tsx bench/run.ts",
-    lint: "eslint .",
-    format: "prettier --write .",
-    bundle: "node scripts/bundle.mjs"
-  },
-  dependencies: {
-    "@actions/core": "^3.0.1",
-    "@actions/http-client": "^4.0.1",
-    ajv: "^8.20.0",
-    "cli-progress": "^3.12.0",
-    "csv-parse": "^7.0.3",
-    openchemlib: "^9.25.0",
-    tsx: "^4.23.15",
-    undici: "^6.29.1",
-    yaml: "^2.9.1"
-  },
-  devDependencies: {
-    "@eslint/js": "^9.39.5",
-    "@rdkit/rdkit": "^2026.9.1",
-    "@types/cli-progress": "^3.11.6",
-    "@types/node": "^20.19.43",
-    "@vitest/coverage-v8": "^4.1.12",
-    esbuild: "^0.28.2",
-    eslint: "^9.39.5",
-    "fast-check": "^4.11.0",
-    micromark: "^4.0.3",
-    "micromark-extension-gfm": "^3.0.0",
-    nock: "^14.0.9",
-    "playwright-core": "^1.65.1",
-    prettier: "^3.10.1",
-    typescript: "^5.9.3",
-    "typescript-eslint": "^8.74.0",
-    vitest: "^4.1.12"
-  }
-};
-
-// src/audit/version.ts
-var VERSION = package_default.version;
-
-// src/audit/view.ts
-function entryOf(loaded, cache2, underReview) {
-  const record = loaded.record;
-  if (record === null) return null;
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    record,
-    get main() {
-      return cache2.main(loaded);
-    },
-    underReview
-  };
-}
-function buildRegistryView(records, cache2, underReview) {
-  const entries = [];
-  for (const loaded of records) {
-    const e = entryOf(loaded, cache2, underReview(loaded));
-    if (e) entries.push(e);
-  }
-  return { entries };
-}
-
-// src/audit/run.ts
-var RECORD_BUDGET = Object.freeze({ timeMs: 2e4, memoryMb: 1024 });
-function auditRecords(records, options) {
-  const config = options.config ?? { ...DEFAULT_CONFIG };
-  const cache2 = new StructureCache(options.engine);
-  const engineApi = { relate: options.engine.relate.bind(options.engine) };
-  const budget = options.budget ?? RECORD_BUDGET;
-  const audited = new Set(records);
-  const registry = options.view ?? buildRegistryView(options.registry ?? records, cache2, (r) => audited.has(r));
-  if (options.registryIncomplete) registry.incomplete = options.registryIncomplete;
-  const results = records.map((loaded) => {
-    try {
-      return withBudget(
-        budget,
-        "the audit of this record",
-        () => auditOne(loaded, options.checks, config, cache2, registry, engineApi)
-      );
-    } catch (e) {
-      if (e instanceof BudgetExceeded) return overBudget(loaded, e, options.checks);
-      return {
-        id: loaded.id,
-        file: loaded.file,
-        computed: null,
-        findings: [internalError({ id: "audit" }, e, loaded)],
-        passed: [],
-        declared: { form: null, descriptors: null }
-      };
-    }
-  });
-  const result2 = {
-    tool: { name: "stereogate", version: VERSION },
-    records: results,
-    summary: summarize(results),
-    caution: CAUTION
-  };
-  if (options.registryPhase !== false && !options.registryIncomplete && options.checks.some((c) => c.scope === "registry")) {
-    const review = options.registry !== void 0;
-    const phase = new RegistryPhase({
-      mode: review ? "review" : "full",
-      config,
-      confirm: confirmWith(options.engine),
-      duplicateIds: false
-    });
-    const mainOf = (r) => {
-      try {
-        return withBudget(budget, "the structure of a registry record", () => cache2.main(r));
-      } catch {
-        return { structure: null, facts: null, error: null };
-      }
-    };
-    const rows = records.map((r, i) => indexRow(r, mainOf(r), i + 1));
-    if (review) {
-      const audited2 = new Set(records);
-      let seq = records.length;
-      for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
-      for (const row of rows) phase.fileUnderReview(row);
-    }
-    rows.forEach((row, i) => addPhaseResult(results[i], phase.next(row)));
-    result2.summary = summarize(results);
-    result2.registry = phase.summary();
-  }
-  return result2;
-}
-function confirmWith(engine) {
-  const read = (k) => k.text ? readOnly({ field: "structure", format: k.text.format, text: k.text.text }, engine).structure : null;
-  return (a, b) => {
-    const sa = read(a);
-    const sb = read(b);
-    if (!sa || !sb) return null;
-    try {
-      return engine.relate(sa, sb).relation;
-    } catch {
-      return null;
-    }
-  };
-}
-function addPhaseResult(r, p) {
-  if (p.findings.length > 0) {
-    const checks = new Set(p.findings.map((f) => f.check));
-    r.findings = r.findings.filter(
-      (f) => !(f.messageId === "waiver-matches-nothing" && checks.has(String(f.data.waivedCheck)))
-    );
-    r.findings.push(...p.findings);
-  }
-  if (p.passed) r.passed.push(p.passed);
-}
-function auditOne(loaded, checks, config, cache2, registry, engine) {
-  const { main, components } = cache2.all(loaded);
-  const findings = schemaFindings(loaded, config);
-  applyWaivers(findings, loaded);
-  const passed = [];
-  const notRun = [];
-  const unparsed = loaded.record === null && loaded.sources === void 0 && loaded.problems.length > 0;
-  for (const check of unparsed ? [] : checks) {
-    if (configuredSeverity(config, check.id) === "off") continue;
-    const ctx = {
-      loaded,
-      record: loaded.record,
-      main,
-      components,
-      registry,
-      config,
-      engine,
-      findings: [...findings]
-    };
-    const missing = missingInput(check, ctx);
-    if (missing !== null) {
-      notRun.push({ check: check.id, reason: missing });
-      continue;
-    }
-    if (check.scope === "registry") continue;
-    let produced;
-    let outcome;
-    try {
-      outcome = check.run(ctx);
-      if (!outcome || !Array.isArray(outcome.findings))
-        throw new Error("the check returned no findings list");
-      produced = outcome.findings.filter((raw2) => messageEnabled(config, check.id, raw2.messageId)).map((raw2) => toFinding(check, raw2, loaded, config));
-    } catch (e) {
-      if (e instanceof BudgetExceeded) throw e;
-      findings.push(internalError(check, e, loaded));
-      continue;
-    }
-    applyWaivers(produced, loaded);
-    findings.push(...produced);
-    if (outcome.notRun !== void 0 && produced.length === 0) {
-      notRun.push({ check: check.id, reason: outcome.notRun });
-    } else if (produced.length === 0 && !outcome.notApplicable) {
-      passed.push({ check: check.id, evidence: outcome.passed ?? "" });
-    }
-  }
-  const record = loaded.record;
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    computed: main.facts,
-    findings,
-    passed,
-    notRun,
-    declared: { form: record?.stereo.form ?? null, descriptors: record?.stereo.descriptors ?? null }
-  };
-}
-function missingInput(check, ctx) {
-  const needs = check.requires ?? [];
-  if (needs.includes("structure")) {
-    if (ctx.record === null) return "the record does not follow the record schema (see record-schema)";
-    if (ctx.main.facts === null) {
-      return ctx.main.error ? "the structure could not be read (see structure-readable)" : "the record gives no structure";
-    }
-  }
-  if (needs.includes("registry") && ctx.registry.incomplete) return ctx.registry.incomplete;
-  return null;
-}
-function overBudget(loaded, e, checks) {
-  const reason = e.kind === "time" ? "the record was stopped at its time limit (see record-time-limit)" : "the record was stopped at its memory bound (see record-time-limit)";
-  return {
-    id: loaded.id,
-    file: loaded.file,
-    computed: null,
-    findings: [budgetFinding(loaded, e.kind, e.limit)],
-    passed: [],
-    notRun: checks.map((c) => ({ check: c.id, reason })),
-    declared: {
-      form: loaded.record?.stereo.form ?? null,
-      descriptors: loaded.record?.stereo.descriptors ?? null
-    }
-  };
-}
-function summarize(records) {
-  const s = { records: records.length, errors: 0, warnings: 0, notes: 0, waived: 0 };
-  for (const r of records) {
-    for (const f of r.findings) {
-      if (f.waived) s.waived++;
-      else if (f.severity === "error") s.errors++;
-      else if (f.severity === "warning") s.warnings++;
-      else s.notes++;
-    }
-  }
-  return s;
-}
+// src/bulk/sources.ts
+init_sd_split();
 
 // src/bulk/delimited.ts
 var DEFAULT_LIMITS = { maxLines: 1e4, maxChars: 16 * 2 ** 20 };
@@ -51238,30 +52695,8 @@ function formatOf(path) {
 }
 var SD_RECORD_LIMITS = { maxLines: 2e5, maxChars: 64 * 2 ** 20 };
 
-// src/registry/types.ts
-var STEREO_FORMS = [
-  "achiral",
-  "meso",
-  "single-enantiomer",
-  "enantioenriched",
-  "racemate",
-  "single-diastereomer",
-  "diastereomer-mixture",
-  "unknown"
-];
-var ORIGIN_CONTROLS = [
-  "none",
-  "chiral-catalyst",
-  "chiral-reagent",
-  "chiral-auxiliary",
-  "biocatalyst",
-  "resolution",
-  "chiral-separation",
-  "enrichment",
-  "unknown"
-];
-
 // src/bulk/mapping.ts
+init_types2();
 var DEFAULT_COLUMNS = {
   id: "id",
   structure: "smiles",
@@ -51325,6 +52760,7 @@ function makeVocabulary(extra = {}) {
 }
 
 // src/bulk/origins.ts
+init_types2();
 var MAX_ORIGIN_ENTRIES = 20;
 var MAX_CHAIN = 1e3;
 function splitOriginEntries(text) {
@@ -51571,6 +53007,7 @@ function auditItem(item, ctx) {
     budget: ctx.budget,
     registryPhase: false
   }).records[0];
+  delete result2.notApplicable;
   if (ctx.registryNotRun !== void 0 && result2.notRun) {
     const wide = new Set(ctx.checks.filter((c) => c.scope === "registry").map((c) => c.id));
     result2.notRun = result2.notRun.flatMap(
@@ -51591,7 +53028,11 @@ function auditItem(item, ctx) {
   return out;
 }
 
+// src/bulk/context.ts
+init_engine();
+
 // src/audit/builtin-rules.ts
+init_findings();
 var BUILTIN_RULES = [
   {
     id: SCHEMA_CHECK_ID,
@@ -51612,6 +53053,71 @@ var BUILTIN_RULES = [
     explanation: "Each record gets a time limit (20 s unless --record-timeout says otherwise) and a memory bound, so that one pathological structure cannot stall or exhaust a run. A record over either is reported instead of audited, and the run goes on. Audit it on its own with a higher limit, or simplify the structure."
   }
 ];
+
+// src/report/checklist.ts
+init_words();
+function unitName3(atoms, locants, element) {
+  const loc = locants?.[0];
+  return loc !== null && loc !== void 0 ? `${element}${loc}` : `${element} (atom ${atoms.join("/")})`;
+}
+function byLocant(a, b) {
+  const la = a.locants?.[0] ?? Infinity;
+  const lb = b.locants?.[0] ?? Infinity;
+  return la !== lb ? la - lb : a.atoms[0] - b.atoms[0];
+}
+function computedText(facts) {
+  if (!facts) return null;
+  const parts = [];
+  parts.push(
+    facts.chiral === true ? "chiral" : facts.chiral === false ? facts.meso ? "achiral (meso)" : "achiral" : "chirality open (undefined units)"
+  );
+  const units = facts.units ?? [];
+  if (units.length === 0) parts.push("no stereo units");
+  else {
+    const shown = [...units].sort(byLocant).slice(0, 8).map((u) => {
+      const name = unitName3(u.atoms, u.locants, u.element);
+      return `${name} ${u.defined ? u.label ?? "defined, no CIP label" : "undefined"}`;
+    });
+    const more = units.length > 8 ? `, … ${units.length - 8} more` : "";
+    parts.push(`${plural(units.length, "stereo unit")} (${shown.join(", ")}${more})`);
+  }
+  if (facts.stereoisomers)
+    parts.push(`${plural(facts.stereoisomers.total, "stereoisomer")} of this constitution`);
+  if (facts.enhanced && facts.enhanced.meaning !== "none" && facts.enhanced.meaning !== "absolute") {
+    parts.push(`enhanced stereo: ${facts.enhanced.meaning}`);
+  }
+  if (facts.formula) parts.push(facts.formula);
+  return parts.join("; ");
+}
+
+// src/report/not-run.ts
+var NOT_RUN_EXAMPLES = 10;
+var NotRunTally = class {
+  groups = /* @__PURE__ */ new Map();
+  add(record, notRun) {
+    for (const n of notRun ?? []) {
+      const key3 = `${n.check}\0${n.reason}`;
+      let g = this.groups.get(key3);
+      if (!g) this.groups.set(key3, g = { check: n.check, reason: n.reason, records: 0, examples: [] });
+      g.records++;
+      if (g.examples.length < NOT_RUN_EXAMPLES) g.examples.push(record);
+    }
+  }
+  /** The groups in the order first seen. */
+  list() {
+    return [...this.groups.values()];
+  }
+};
+function notRunGroups(records) {
+  const tally = new NotRunTally();
+  for (const r of records) tally.add({ id: r.id, file: r.file, line: null }, r.notRun);
+  return tally.list();
+}
+function notRunRecordsText(g) {
+  const names2 = g.examples.map((e) => e.id ?? e.file);
+  const more = g.records > names2.length ? `, and ${g.records - names2.length} more` : "";
+  return `${plural(g.records, "record")} (${names2.join(", ")}${more})`;
+}
 
 // src/report/sarif.ts
 var SARIF_SCHEMA = "https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json";
@@ -51636,6 +53142,33 @@ Caution: ${caution}` : ""}` },
 function encodeUri(path) {
   return path.split("/").map(encodeURIComponent).join("/");
 }
+function sarifResults(r, index, options = {}) {
+  const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
+  return r.findings.map((f) => {
+    const physical = {
+      artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
+    };
+    if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
+    const res = {
+      ruleId: f.check,
+      ruleIndex: index.get(f.check),
+      level: level(f.severity),
+      message: { text: f.message },
+      locations: [{ physicalLocation: physical }],
+      properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data }
+    };
+    if (f.waived) {
+      res.suppressions = [
+        {
+          kind: "inSource",
+          status: "accepted",
+          justification: `${f.waived.reason} (approved by ${f.waived.approvedBy}${f.waived.covers ? `; the waiver covers ${f.waived.covers}` : ""})`
+        }
+      ];
+    }
+    return res;
+  });
+}
 function sarifLog(result2, checks, options = {}) {
   const infos = [
     ...checks.map((c) => ({ info: c })),
@@ -51653,32 +53186,8 @@ function sarifLog(result2, checks, options = {}) {
   const rules = infos.map((x) => rule(x.info, result2.caution));
   const index = new Map(infos.map((x, i) => [x.info.id, i]));
   const prefix = options.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
-  const results = result2.records.flatMap(
-    (r) => r.findings.map((f) => {
-      const physical = {
-        artifactLocation: { uri: encodeUri(`${prefix}${r.file}`) }
-      };
-      if (f.line !== null && f.line >= 1) physical.region = { startLine: f.line };
-      const res = {
-        ruleId: f.check,
-        ruleIndex: index.get(f.check),
-        level: level(f.severity),
-        message: { text: f.message },
-        locations: [{ physicalLocation: physical }],
-        properties: { recordId: r.id, messageId: f.messageId, field: f.field, data: f.data }
-      };
-      if (f.waived) {
-        res.suppressions = [
-          {
-            kind: "inSource",
-            status: "accepted",
-            justification: `${f.waived.reason} (approved by ${f.waived.approvedBy})`
-          }
-        ];
-      }
-      return res;
-    })
-  );
+  const results = result2.records.flatMap((r) => sarifResults(r, index, options));
+  const invocations = sarifInvocations(notRunGroups(result2.records), index, prefix);
   return {
     $schema: SARIF_SCHEMA,
     version: "2.1.0",
@@ -51692,11 +53201,39 @@ function sarifLog(result2, checks, options = {}) {
             rules
           }
         },
+        ...invocations ? { invocations } : {},
         results,
         properties: { caution: result2.caution, summary: result2.summary }
       }
     ]
   };
+}
+function sarifInvocations(groups, ruleIndex, prefix = "") {
+  if (groups.length === 0) return null;
+  const notifications = groups.map((g) => {
+    const rule4 = { id: g.check };
+    const i = ruleIndex.get(g.check);
+    if (i !== void 0) rule4.index = i;
+    return {
+      level: "note",
+      message: { text: `${g.check} did not run on ${notRunRecordsText(g)}: ${g.reason}.` },
+      associatedRule: rule4,
+      locations: g.examples.map((e) => {
+        const physical = {
+          artifactLocation: { uri: encodeUri(`${prefix}${e.file}`) }
+        };
+        if (e.line !== null && e.line >= 1) physical.region = { startLine: e.line };
+        return { physicalLocation: physical };
+      }),
+      properties: {
+        notRun: true,
+        reason: g.reason,
+        records: g.records,
+        recordIds: g.examples.map((e) => e.id)
+      }
+    };
+  });
+  return [{ executionSuccessful: true, toolExecutionNotifications: notifications }];
 }
 
 // src/report/html/draw-script.ts
@@ -51899,7 +53436,7 @@ var PAGE_SCRIPT = `
       pic.appendChild(holder);
       pic.appendChild(el('figcaption', '', r.pic.o === 'd' ? 'as drawn in the record (its coordinates and wedges)' : 'layout computed from the structure'));
       if (observer) observer.observe(holder); else paint(holder);
-    } else pic.appendChild(el('div', 'nodepict', 'no depiction'));
+    } else pic.appendChild(el('div', 'nodepict', r.noPicture ? 'no depiction: ' + r.noPicture : 'no depiction'));
     box.appendChild(pic);
     var body = el('div', 'body');
     body.appendChild(el('h3', '', r.id));
@@ -51918,6 +53455,13 @@ var PAGE_SCRIPT = `
       li.appendChild(el('code', '', f.check));
       if (f.line) li.appendChild(el('span', 'line', ' line ' + f.line));
       li.appendChild(document.createTextNode(': ' + f.message + (f.waived ? ' [' + f.waived + ']' : '')));
+      ul.appendChild(li);
+    });
+    (r.notRun || []).forEach(function (n) {
+      var li = el('li', 'notrun');
+      li.appendChild(el('span', 'sev sev-notrun', 'not run'));
+      li.appendChild(el('code', '', n.check));
+      li.appendChild(document.createTextNode(': ' + n.reason));
       ul.appendChild(li);
     });
     body.appendChild(ul);
@@ -51966,7 +53510,7 @@ var PAGE_SCRIPT = `
 `;
 
 // src/report/html/render.ts
-function unitName3(u) {
+function unitName4(u) {
   return u.atoms.length === 1 ? `${u.element}${u.atoms[0]}` : `${u.atoms.join("=")}`;
 }
 function computedSummary(r) {
@@ -51979,8 +53523,8 @@ function computedSummary(r) {
   parts.push(
     `${c.stereoisomers.total} stereoisomers (${c.stereoisomers.chiral} chiral, ${c.stereoisomers.achiral} achiral)`
   );
-  const labels = c.units.filter((u) => u.label).map((u) => `${unitName3(u)} ${u.label}`).join(", ");
-  const undef = c.units.filter((u) => !u.defined).map(unitName3).join(", ");
+  const labels = c.units.filter((u) => u.label).map((u) => `${unitName4(u)} ${u.label}`).join(", ");
+  const undef = c.units.filter((u) => !u.defined).map(unitName4).join(", ");
   return { text: parts.join("; "), labels, undef };
 }
 var RANK = { error: 0, warning: 1, note: 2 };
@@ -52007,8 +53551,9 @@ function htmlRow(r) {
       severity: f.severity,
       message: f.message,
       line: f.line,
-      waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` : null
-    }))
+      waived: f.waived ? `accepted by ${f.waived.approvedBy}: ${f.waived.reason}` + (f.waived.covers ? `; the waiver covers ${f.waived.covers}` : "") : null
+    })),
+    notRun: (r.notRun ?? []).map((n) => ({ check: n.check, reason: n.reason }))
   };
 }
 
@@ -52058,6 +53603,8 @@ function makeRenderer(wants, checks) {
       }
     };
     if (wants.csv) out.csv = csvRow(r);
+    if ((wants.sarif || wants.html) && r.notRun?.length)
+      out.notRun = { ref: { id: r.id, file: r.file, line: r.origin.line }, checks: r.notRun };
     if (wants.sarif && r.findings.length > 0) {
       const log = sarifLog(
         { tool, records: [r], summary: none, caution: "" },
@@ -52117,6 +53664,86 @@ async function makeItemContext(setup) {
   };
 }
 
+// src/bulk/record-file-audit.ts
+init_engine();
+init_findings();
+init_index_row();
+init_run();
+init_structures();
+init_view();
+init_budget();
+import { join as join3 } from "node:path";
+init_load();
+init_positions();
+async function makeFolderContext(setup, checks) {
+  const [list, engine] = await Promise.all([
+    checks ?? Promise.resolve().then(() => (init_checks(), checks_exports)).then((m) => m.CHECKS),
+    defaultEngine({ axisOrthoMin: setup.config.axisOrthoMin })
+  ]);
+  return { setup, checks: list, engine };
+}
+function loadItem2(item, lookup) {
+  if (item.refused !== void 0) return refusedRecord(item.file, item.refused);
+  const loaded = loadRecordFile(lookup.root, join3(lookup.root, item.file));
+  const duplicate = lookup.duplicates.get(item.file);
+  if (duplicate) loaded.problems.push({ ...duplicate });
+  return loaded;
+}
+function refusedRecord(file, message) {
+  return {
+    file,
+    id: null,
+    record: null,
+    positions: NO_POSITIONS,
+    problems: [{ path: "", line: null, code: "unreadable-file", message: `the record file ${message}` }],
+    origin: { kind: "file" }
+  };
+}
+var idLists = /* @__PURE__ */ new WeakMap();
+function idsOf(lookup) {
+  let ids = idLists.get(lookup);
+  if (!ids) idLists.set(lookup, ids = [...lookup.byId.keys()]);
+  return ids;
+}
+function auditRecordFile(item, ctx) {
+  const { lookup, config, budget } = ctx.setup;
+  const loaded = loadItem2(item, lookup);
+  const cache2 = new StructureCache(ctx.engine);
+  const load = (id) => {
+    const file = lookup.byId.get(id);
+    if (file === void 0) return null;
+    return file === loaded.file ? loaded : loadItem2({ seq: 0, file }, lookup);
+  };
+  const all = () => [...lookup.byId.keys()].flatMap((id) => load(id) ?? []);
+  const view = lazyRegistryView(loaded, cache2, load, all, () => idsOf(lookup));
+  const result2 = auditRecords([loaded], {
+    checks: ctx.checks,
+    config,
+    engine: ctx.engine,
+    budget,
+    view,
+    registryPhase: false
+  }).records[0];
+  const facts = result2.computed;
+  const keysFrom = facts === null && result2.findings.some((f) => f.check === TIME_LIMIT_ID) ? mainWithin(loaded, new StructureCache(ctx.engine), budget) : { structure: null, facts, error: null };
+  const row = indexRow(loaded, keysFrom, item.seq);
+  result2.computed = null;
+  return {
+    seq: item.seq,
+    result: result2,
+    computedLine: computedText(facts),
+    computedJson: facts && ctx.setup.json ? JSON.stringify(facts, null, 2) : null,
+    row
+  };
+}
+function mainWithin(loaded, cache2, budget) {
+  try {
+    return withBudget(budget, "the structure of a registry record", () => cache2.main(loaded));
+  } catch {
+    return { structure: null, facts: null, error: null };
+  }
+}
+
 // src/bulk/worker-entry.ts
 import { parentPort, workerData } from "node:worker_threads";
 function serveWorker(handler) {
@@ -52142,7 +53769,12 @@ function serveWorker(handler) {
 
 // src/bulk/worker.ts
 var ready = null;
+var folder = null;
 serveWorker(async (item, data) => {
+  if (data.kind === "record-files") {
+    folder ??= makeFolderContext(data);
+    return auditRecordFile(item, await folder);
+  }
   ready ??= makeItemContext(data);
   const ctx = await ready;
   return ctx.render(auditItem(item, ctx));
