@@ -19,3 +19,4 @@ export {
   type SearchResult,
 } from './isomorphism.js';
 export { constitutionKey, molecularFormula } from './key.js';
+export { ParityUnion } from './parity-union.js';

@@ -1,15 +1,22 @@
 /**
- * Bridgehead coupling (and cis-only small ring fusion, see fusedPairs): in a small bridged ring system (norbornane, bicyclo[2.2.2]octane, camphor, Tröger's base,
- * adamantane) the two bridgeheads cannot be inverted independently — only one relative configuration closes the
- * rings. Two tetrahedral units a and b are coupled when three internally disjoint ring paths of 1 to 3 inner
- * atoms join them (larger bridges allow in/out isomers, so they are left free; common practice, no source).
+ * Coupled configurations of fused and bridged polycycles: in a small bridged ring system (norbornane, camphor,
+ * Tröger's base, adamantane, longifolene) bridgeheads cannot be inverted independently — only one relative
+ * configuration closes the rings — and a small ring fused cis-only ties its fusion atoms (fusedPairs). Every
+ * small bicycle inside a polycycle gives one constraint: two tetrahedral units a and b are coupled when three
+ * internally disjoint ring paths join them whose lengths force the out,out configuration (MAX_SHORT, MAX_LONG below); longer
+ * bridges allow in,out isomers, so those pairs stay free. Each constraint is linear, x_a ⊕ x_b = c, so the
+ * solutions are counted exactly (symmetry/ counts 2^classes per group element), never by enumeration.
  *
  * Geometry: with a and b on the axis and the bridges around it, the bridges appear in one rotational sense
  * looking from a's exterior ligand towards b, and in the opposite sense looking from b's exterior ligand towards
  * a. So the winding of [X_a, a1, a2, a3] is the opposite of that of [X_b, b1, b2, b3], bridge k entering at a_k
  * and leaving at b_k. Stated on the reference tokens that is a linear constraint x_a ⊕ x_b = c.
+ *
+ * Atom-order independence: a pair takes its constraint from its tightest bicycles only, and is left free when
+ * those disagree; constraints are added tier by tier (tightest first) and a tier that contradicts the tighter
+ * ones is dropped with all looser tiers. Tiers, path counts and limits are all properties of the constitution.
  */
-import type { Graph, RingInfo } from '../graph/index.js';
+import { ParityUnion, type Graph, type RingInfo } from '../graph/index.js';
 import type { Structure } from '../types.js';
 import { permutationParity, type PerceivedUnit } from './units.js';
 import { objectList } from '../read/make.js';
@@ -21,12 +28,23 @@ export interface Coupling {
   c: 0 | 1;
 }
 
-const MAX_INNER = 3;
-
 export function bridgeCouplings(s: Structure, g: Graph, rings: RingInfo, units: PerceivedUnit[]): Coupling[] {
+  const ranked: Ranked[] = fusedPairs(g, rings, units).map((c) => ({ a: c.a, b: c.b, c: c.c, rank: 0 }));
+  for (const c of bridgedPairs(s, g, rings, units)) ranked.push(c);
+  if (ranked.length === 0) return [];
+  // Tightest bicycles first; a looser tier that contradicts the tighter ones is dropped with every looser tier
+  // (the tiers are properties of the constitution, so what is kept does not depend on the atom order).
+  ranked.sort((x, y) => x.rank - y.rank);
+  const u = new ParityUnion(units.length);
   const out = objectList<Coupling>();
-  for (const c of bridgedPairs(s, g, rings, units)) out.push(c);
-  for (const c of fusedPairs(g, rings, units)) out.push(c);
+  for (let i = 0; i < ranked.length;) {
+    let j = i;
+    while (j < ranked.length && ranked[j].rank === ranked[i].rank) j++;
+    for (let k = i; k < j; k++) u.add(ranked[k].a, ranked[k].b, ranked[k].c);
+    if (!u.consistent) break;
+    for (let k = i; k < j; k++) out.push({ a: ranked[k].a, b: ranked[k].b, c: ranked[k].c });
+    i = j;
+  }
   return out;
 }
 
@@ -91,7 +109,27 @@ function ringNeighbour(ring: number[], a: number, b: number): number {
   return next === b ? ring[(i + L - 1) % L] : next;
 }
 
-function bridgedPairs(s: Structure, g: Graph, rings: RingInfo, units: PerceivedUnit[]): Coupling[] {
+/**
+ * A bicycle forces the out,out relative configuration of its bridgeheads when its two shorter bridges have at most
+ * MAX_SHORT inner atoms and its longest at most MAX_LONG; beyond that an in,out isomer (one bridgehead's exterior
+ * ligand turned into the cage) may exist. Basis: the MMFF94 strain of in,out- over out,out-1,(bridgehead)-
+ * dimethylbicyclo[L.m.n]alkanes, computed with RDKit 2022.09 (ETKDGv3 embedding, MMFF94 minimisation): with
+ * m, n <= 3 and L = 5 every in,out form either does not embed or lies at least 50 kcal/mol up; at L = 6 to 9 some
+ * fall to 30 or less (bicyclo[7.2.1] 30, [6.3.1] 30, [9.3.2] 27), and inside real polycycles such long paths do
+ * run in,out (strychnine and artemisinin as drawn in MoleculeNet), so they are left free. With m = 4 the in,out
+ * form is known (in,out-bicyclo[4.4.1]undecane, Winkler et al. 1991 — from memory) and [5.4.1] lies 24 up.
+ */
+const MAX_LONG = 5;
+const MAX_SHORT = 3;
+/** Ring paths from one bridgehead beyond which a shorter search is tried (the count does not depend on atom order). */
+const MAX_PATHS = 4000;
+
+interface Ranked extends Coupling {
+  /** Tightness of the bicycle that forces it (smaller = shorter bridges). */
+  rank: number;
+}
+
+function bridgedPairs(s: Structure, g: Graph, rings: RingInfo, units: PerceivedUnit[]): Ranked[] {
   let possible = 0;
   for (const u of units) {
     if (u.kind !== 'tetrahedral') continue;
@@ -115,62 +153,104 @@ function bridgedPairs(s: Structure, g: Graph, rings: RingInfo, units: PerceivedU
   if (cand.length < 2) return [];
   const system = new Int32Array(s.atoms.length).fill(-1);
   rings.ringSystems.forEach((atoms, k) => atoms.forEach((x) => (system[x] = k)));
-  const out: Coupling[] = [];
+  const candAt = new Int32Array(s.atoms.length).fill(-1);
+  cand.forEach((c, i) => (candAt[c.u.atoms[0]] = i));
+  const out: Ranked[] = [];
   for (let i = 0; i < cand.length; i++) {
-    for (let j = i + 1; j < cand.length; j++) {
-      const a = cand[i].u.atoms[0];
-      const b = cand[j].u.atoms[0];
-      if (system[a] < 0 || system[a] !== system[b]) continue;
-      const bridges = threeBridges(a, b, ringNbrs);
-      if (!bridges) continue;
-      const ua = cand[i].u;
-      const ub = cand[j].u;
-      const xa = ua.tokens.find((t) => !bridges.some((p) => p[0] === t));
-      const xb = ub.tokens.find((t) => !bridges.some((p) => p[p.length - 1] === t));
-      if (xa === undefined || xb === undefined) continue;
-      const la = [xa, ...bridges.map((p) => p[0])];
-      const lb = [xb, ...bridges.map((p) => p[p.length - 1])];
-      const pa = permutationParity(la, ua.tokens);
-      const pb = permutationParity(lb, ub.tokens);
-      if (pa < 0 || pb < 0) continue;
-      out.push({ a: cand[i].k, b: cand[j].k, c: (1 ^ pa ^ pb) as 0 | 1 });
+    const a = cand[i].u.atoms[0];
+    if (system[a] < 0) continue;
+    const isEnd = (y: number): boolean => candAt[y] > i && system[y] === system[a];
+    const byEnd = pathsFrom(a, ringNbrs, isEnd, MAX_LONG) ?? pathsFrom(a, ringNbrs, isEnd, MAX_SHORT);
+    if (byEnd === null) continue;
+    for (const [b, paths] of byEnd) {
+      const j = candAt[b];
+      const r = pairCoupling(cand[i].u, cand[j].u, paths);
+      if (r !== null) out.push({ a: cand[i].k, b: cand[j].k, c: r.c, rank: r.rank });
     }
   }
   return out;
 }
 
-/** Three internally disjoint paths a -> b (inner atoms only, 1..MAX_INNER each), or null. */
-function threeBridges(a: number, b: number, ringNbrs: (x: number) => number[]): number[][] | null {
-  const paths: number[][] = [];
+/** Every simple ring path from a (at most maxInner inner atoms) to each end atom; null beyond MAX_PATHS. */
+function pathsFrom(
+  a: number,
+  ringNbrs: (x: number) => number[],
+  isEnd: (y: number) => boolean,
+  maxInner: number,
+): Map<number, number[][]> | null {
+  const byEnd = new Map<number, number[][]>();
   const path: number[] = [];
   const onPath = new Set<number>([a]);
-  const walk = (x: number): void => {
-    if (paths.length > 200) return;
+  let found = 0;
+  const walk = (x: number): boolean => {
     for (const y of ringNbrs(x)) {
-      if (y === b) {
-        if (path.length >= 1) paths.push(path.slice());
-        continue;
+      if (onPath.has(y)) continue;
+      if (isEnd(y) && path.length >= 1) {
+        let list = byEnd.get(y);
+        if (list === undefined) byEnd.set(y, (list = []));
+        list.push(path.slice());
+        if (++found > MAX_PATHS) return false;
       }
-      if (onPath.has(y) || path.length >= MAX_INNER) continue;
+      if (path.length >= maxInner) continue;
       onPath.add(y);
       path.push(y);
-      walk(y);
+      const ok = walk(y);
       path.pop();
       onPath.delete(y);
+      if (!ok) return false;
     }
+    return true;
   };
-  walk(a);
+  return walk(a) ? byEnd : null;
+}
+
+/**
+ * The coupling of bridgeheads a and b, from the tightest bicycles (three internally disjoint paths, forced by
+ * MAX_SHORT / MAX_LONG) that join them; null when there is none or when the tightest ones disagree (then the pair is left free).
+ */
+function pairCoupling(
+  ua: PerceivedUnit,
+  ub: PerceivedUnit,
+  paths: number[][],
+): { c: 0 | 1; rank: number } | null {
   paths.sort((p, q) => p.length - q.length);
-  for (let i = 0; i < paths.length; i++) {
-    for (let j = i + 1; j < paths.length; j++) {
-      if (!disjoint(paths[i], paths[j])) continue;
-      for (let k = j + 1; k < paths.length; k++) {
-        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k]))
-          return [paths[i], paths[j], paths[k]];
+  let best = Infinity;
+  let c = -1;
+  for (let k = 2; k < paths.length; k++) {
+    const L = paths[k].length;
+    if (L * 100 > best) break; // every later triple is looser
+    for (let i = 0; i < k; i++) {
+      if (!disjoint(paths[i], paths[k])) continue;
+      for (let j = i + 1; j < k; j++) {
+        if (!disjoint(paths[j], paths[k]) || !disjoint(paths[i], paths[j])) continue;
+        const [s1, s2] = [paths[i].length, paths[j].length];
+        if (s2 > MAX_SHORT) continue;
+        const rank = L * 100 + s2 * 10 + s1;
+        if (rank > best) continue;
+        const x = tripleCoupling(ua, ub, [paths[i], paths[j], paths[k]]);
+        if (x < 0) continue;
+        if (rank < best) {
+          best = rank;
+          c = x;
+        } else if (x !== c) c = 2; // the tightest bicycles disagree
       }
     }
   }
-  return null;
+  return c === 0 || c === 1 ? { c, rank: best } : null;
+}
+
+/**
+ * x_a ⊕ x_b for the out,out configuration of the bicycle formed by three bridges (see file comment); -1 when the
+ * exterior ligand cannot be found.
+ */
+function tripleCoupling(ua: PerceivedUnit, ub: PerceivedUnit, bridges: number[][]): number {
+  const xa = ua.tokens.find((t) => !bridges.some((p) => p[0] === t));
+  const xb = ub.tokens.find((t) => !bridges.some((p) => p[p.length - 1] === t));
+  if (xa === undefined || xb === undefined) return -1;
+  const pa = permutationParity([xa, ...bridges.map((p) => p[0])], ua.tokens);
+  const pb = permutationParity([xb, ...bridges.map((p) => p[p.length - 1])], ub.tokens);
+  if (pa < 0 || pb < 0) return -1;
+  return 1 ^ pa ^ pb;
 }
 
 function disjoint(p: number[], q: number[]): boolean {

@@ -9,12 +9,11 @@
  * the group. A fully defined configuration x is achiral iff M(x) lies in the orbit of x (some σ with σ·x = M(x));
  * that σ·M⁻¹ is an improper symmetry, and the atoms it fixes are the evidence we print.
  */
-import { automorphisms } from '../graph/index.js';
+import { automorphisms, ParityUnion } from '../graph/index.js';
 import { mapToken, rebase, unitImage, type State } from '../perceive/index.js';
 import type { Perception } from '../perceive/index.js';
 import type { StereoElement, Structure } from '../types.js';
 import type { Coupling } from '../perceive/index.js';
-import { ParityUnion } from './solve.js';
 import { atomWith, coords3, newBond, restructure, withStereo } from '../read/make.js';
 
 export interface UnitGroup {

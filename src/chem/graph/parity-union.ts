@@ -1,7 +1,7 @@
 /**
  * Linear constraints x_i ⊕ x_j = c over GF(2), solved by union–find with parity. Used when bridgehead couplings
  * (perceive/bridges.ts) restrict the configurations, so that Burnside counting and the completion tests count
- * only configurations that can exist.
+ * only configurations that can exist, and by the coupling search itself to keep its constraints consistent.
  */
 export class ParityUnion {
   private parent: Int32Array;
