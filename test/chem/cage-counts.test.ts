@@ -1,7 +1,7 @@
 /**
  * Coupled configurations of rigid cages (perceive/bridges.ts): bridgeheads of every small bicycle inside a
  * polycycle, counted exactly and the same for any atom order, and checked against an independent oracle,
- * RDKit (Debian python3-rdkit 2022.09, test/support/stereo-oracle.py): every stereoisomer it enumerates, embedded
+ * RDKit (Debian python3-rdkit 2022.09, test/support/feasibility.py): every stereoisomer it enumerates, embedded
  * in 3D (ETKDGv3, fixed seeds) and minimised with MMFF94. An isomer embedded within 25 kcal/mol of the best is
  * "feasible" (the window is common practice, no source; the older rigid-polycycle test uses the same).
  *
@@ -40,7 +40,7 @@ const CAMPHOR = 'CC1(C)C2CCC1(C)C(=O)C2';
 
 suite('stereoisomer counts of rigid cages', () => {
   it.each([
-    // RDKit figures measured with test/support/stereo-oracle.py while writing this test (feasible / enumerated)
+    // RDKit figures measured with test/support/feasibility.py while writing this test (feasible / enumerated)
     ['longifolene: 2 (RDKit: 2 of 16 feasible; two more embed only 55 kcal/mol higher)', LONGIFOLENE, 2],
     ['valperinol, bbbp row 2035: 16 (RDKit: 16 of 128 embed)', VALPERINOL, 16],
     ['strychnine: 16 (RDKit: 16 of 64 embed)', STRYCHNINE, 16],
@@ -90,7 +90,7 @@ interface Oracle {
   isomers: Isomer[];
 }
 
-const ORACLE = readFileSync(fileURLToPath(new URL('../support/stereo-oracle.py', import.meta.url)), 'utf8');
+const ORACLE = readFileSync(fileURLToPath(new URL('../support/feasibility.py', import.meta.url)), 'utf8');
 const STRAIN = 25;
 
 function feasibleOf(o: Oracle): Isomer[] {
@@ -151,7 +151,7 @@ suite.skipIf(!havePythonRdkit())('cage counts against 3D feasibility (RDKit embe
     ];
     const res = runPython<Oracle[]>(
       ORACLE,
-      cases.map(([, s]) => s),
+      cases.map(([, s]) => ({ smiles: s, every: true })),
     );
     cases.forEach(([name, smi, by], k) => {
       const { ours, feasible } = checkAgainst(name, smi, res[k]);
@@ -167,7 +167,7 @@ suite.skipIf(!havePythonRdkit())('cage counts against 3D feasibility (RDKit embe
       expect(cases.length).toBe(6);
       const res = runPython<Oracle[]>(
         ORACLE,
-        cases.map(([, s]) => s),
+        cases.map(([, s]) => ({ smiles: s, every: true })),
       );
       cases.forEach(([name, smi], k) => {
         if (res[k].units !== describe(smiles(smi)).stereoisomers.units) {

@@ -3,21 +3,28 @@
 #   {"smiles": s, "all": true}  -> every stereoisomer RDKit enumerates: canonical SMILES, embedded?, MMFF energy
 # (ETKDG keeps the requested configuration: it enforces chirality while embedding)
 #   {"smiles": s}               -> this one structure: embedded?, MMFF energy, CIP labels (atom index -> label)
+#   {"smiles": s, "every": true} -> like "all" but over every unit RDKit can flip, drawn or not (unique by canonical
+#                                   isomeric SMILES, as EnumerateStereoisomers' unique=True), at most 3 embedding
+#                                   attempts per seed (bounded, for cages with many impossible isomers), and the
+#                                   number of units RDKit flips (to tell comparable cases apart)
+# Embedding is the step StereoEnumerationOptions(tryEmbedding=True) takes, made reproducible: fixed seeds.
 import json
 import sys
 
-from rdkit import Chem
+from rdkit import Chem, RDLogger
 from rdkit.Chem import AllChem
 from rdkit.Chem import rdCIPLabeler
 from rdkit.Chem.EnumerateStereoisomers import EnumerateStereoisomers, StereoEnumerationOptions
 
+RDLogger.DisableLog('rdApp.*')
 
-def embed(m):
+
+def embed(m, attempts=10):
     mh = Chem.AddHs(m)
     for seed in (1, 7, 42):
         p = AllChem.ETKDGv3()
         p.randomSeed = seed
-        p.maxIterations = 10
+        p.maxIterations = attempts
         if AllChem.EmbedMolecule(mh, p) == 0:
             props = AllChem.MMFFGetMoleculeProperties(mh)
             if props is None:
@@ -40,7 +47,16 @@ def labels(m):
 result = []
 for task in json.load(sys.stdin):
     m = Chem.MolFromSmiles(task['smiles'])
-    if task.get('all'):
+    if task.get('every'):
+        opts = StereoEnumerationOptions(unique=True, onlyUnassigned=False, maxIsomers=0)
+        isomers = {}
+        for iso in EnumerateStereoisomers(m, options=opts):
+            key = Chem.MolToSmiles(iso)
+            if key not in isomers:
+                ok, energy = embed(iso, 3)
+                isomers[key] = {'smiles': key, 'embedded': ok, 'energy': energy}
+        result.append({'units': len(Chem.FindPotentialStereo(m)), 'isomers': list(isomers.values())})
+    elif task.get('all'):
         opts = StereoEnumerationOptions(onlyUnassigned=True, unique=True)
         isomers = []
         for iso in EnumerateStereoisomers(m, options=opts):
