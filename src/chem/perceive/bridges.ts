@@ -3,9 +3,10 @@
  * Tröger's base, adamantane, longifolene) bridgeheads cannot be inverted independently — only one relative
  * configuration closes the rings — and a small ring fused cis-only ties its fusion atoms (fusedPairs). Every
  * small bicycle inside a polycycle gives one constraint: two tetrahedral units a and b are coupled when three
- * internally disjoint ring paths join them whose lengths force the out,out configuration (MAX_SHORT, MAX_LONG below); longer
- * bridges allow in,out isomers, so those pairs stay free. Each constraint is linear, x_a ⊕ x_b = c, so the
- * solutions are counted exactly (symmetry/ counts 2^classes per group element), never by enumeration.
+ * internally disjoint ring paths join them whose lengths force the out,out configuration (MAX_SHORT and MAX_LONG
+ * below); longer bridges allow in,out isomers, so those pairs stay free. Each constraint is linear,
+ * x_a ⊕ x_b = c, so the solutions are counted exactly (symmetry/ counts 2^classes per group element), never
+ * by enumeration.
  *
  * Geometry: with a and b on the axis and the bridges around it, the bridges appear in one rotational sense
  * looking from a's exterior ligand towards b, and in the opposite sense looking from b's exterior ligand towards
@@ -121,7 +122,7 @@ function ringNeighbour(ring: number[], a: number, b: number): number {
  */
 const MAX_LONG = 5;
 const MAX_SHORT = 3;
-/** Ring paths from one bridgehead beyond which a shorter search is tried (the count does not depend on atom order). */
+/** Ring paths from one bridgehead beyond which its ring system is searched to MAX_SHORT only. */
 const MAX_PATHS = 4000;
 
 interface Ranked extends Coupling {
@@ -155,23 +156,44 @@ function bridgedPairs(s: Structure, g: Graph, rings: RingInfo, units: PerceivedU
   rings.ringSystems.forEach((atoms, k) => atoms.forEach((x) => (system[x] = k)));
   const candAt = new Int32Array(s.atoms.length).fill(-1);
   cand.forEach((c, i) => (candAt[c.u.atoms[0]] = i));
-  const out: Ranked[] = [];
-  for (let i = 0; i < cand.length; i++) {
-    const a = cand[i].u.atoms[0];
-    if (system[a] < 0) continue;
-    const isEnd = (y: number): boolean => candAt[y] > i && system[y] === system[a];
-    const byEnd = pathsFrom(a, ringNbrs, isEnd, MAX_LONG) ?? pathsFrom(a, ringNbrs, isEnd, MAX_SHORT);
-    if (byEnd === null) continue;
-    for (const [b, paths] of byEnd) {
-      const j = candAt[b];
-      const r = pairCoupling(cand[i].u, cand[j].u, paths);
-      if (r !== null) out.push({ a: cand[i].k, b: cand[j].k, c: r.c, rank: r.rank });
+  const bySystem = new Map<number, number[]>();
+  cand.forEach((c, i) => {
+    const k = system[c.u.atoms[0]];
+    if (k < 0) return;
+    const members = bySystem.get(k);
+    if (members === undefined) bySystem.set(k, [i]);
+    else members.push(i);
+  });
+  // One search depth per ring system (the shorter one when any of its atoms has too many paths), so that no pair
+  // depends on which of its two ends comes first.
+  const searchSystem = (members: number[], maxInner: number): Ranked[] | null => {
+    const found: Ranked[] = [];
+    for (const i of members) {
+      const a = cand[i].u.atoms[0];
+      const isEnd = (y: number): boolean => candAt[y] > i && system[y] === system[a];
+      const byEnd = pathsFrom(a, ringNbrs, isEnd, maxInner);
+      if (byEnd === null) return null;
+      for (const [b, paths] of byEnd) {
+        const j = candAt[b];
+        const r = pairCoupling(cand[i].u, cand[j].u, paths);
+        if (r !== null) found.push({ a: cand[i].k, b: cand[j].k, c: r.c, rank: r.rank });
+      }
     }
+    return found;
+  };
+  const out: Ranked[] = [];
+  for (const members of bySystem.values()) {
+    if (members.length < 2) continue;
+    const found = searchSystem(members, MAX_LONG) ?? searchSystem(members, MAX_SHORT);
+    if (found !== null) for (const r of found) out.push(r);
   }
   return out;
 }
 
-/** Every simple ring path from a (at most maxInner inner atoms) to each end atom; null beyond MAX_PATHS. */
+/**
+ * Every simple ring path from a (at most maxInner inner atoms) to each end atom; null when more than MAX_PATHS
+ * paths leave a (all of them counted, whatever their end, so the limit does not depend on the atom order).
+ */
 function pathsFrom(
   a: number,
   ringNbrs: (x: number) => number[],
@@ -189,9 +211,9 @@ function pathsFrom(
         let list = byEnd.get(y);
         if (list === undefined) byEnd.set(y, (list = []));
         list.push(path.slice());
-        if (++found > MAX_PATHS) return false;
       }
       if (path.length >= maxInner) continue;
+      if (++found > MAX_PATHS) return false;
       onPath.add(y);
       path.push(y);
       const ok = walk(y);
@@ -206,7 +228,8 @@ function pathsFrom(
 
 /**
  * The coupling of bridgeheads a and b, from the tightest bicycles (three internally disjoint paths, forced by
- * MAX_SHORT / MAX_LONG) that join them; null when there is none or when the tightest ones disagree (then the pair is left free).
+ * MAX_SHORT / MAX_LONG) that join them; null when there is none or when the tightest ones disagree (then the
+ * pair is left free).
  */
 function pairCoupling(
   ua: PerceivedUnit,
