@@ -18140,9 +18140,63 @@ var init_key = __esm({
   }
 });
 
+// src/chem/graph/parity-union.ts
+var ParityUnion;
+var init_parity_union = __esm({
+  "src/chem/graph/parity-union.ts"() {
+    "use strict";
+    ParityUnion = class {
+      parent;
+      rel;
+      /** false once a contradictory constraint was added. */
+      consistent = true;
+      /** Number of independent classes (each has two assignments). */
+      classes;
+      constructor(n) {
+        this.parent = Int32Array.from({ length: n }, (_v, i) => i);
+        this.rel = new Uint8Array(n);
+        this.classes = n;
+      }
+      /** Root of x and the parity x ⊕ root. */
+      find(x) {
+        let p = 0;
+        let r = x;
+        while (this.parent[r] !== r) {
+          p ^= this.rel[r];
+          r = this.parent[r];
+        }
+        let y = x;
+        let q = p;
+        while (this.parent[y] !== y) {
+          const next = this.parent[y];
+          const step = this.rel[y];
+          this.parent[y] = r;
+          this.rel[y] = q;
+          q ^= step;
+          y = next;
+        }
+        return [r, p];
+      }
+      /** Adds x ⊕ y = c. */
+      add(x, y, c) {
+        const [rx, px] = this.find(x);
+        const [ry, py] = this.find(y);
+        if (rx === ry) {
+          if ((px ^ py) !== c) this.consistent = false;
+          return;
+        }
+        this.parent[rx] = ry;
+        this.rel[rx] = px ^ py ^ c;
+        this.classes--;
+      }
+    };
+  }
+});
+
 // src/chem/graph/index.ts
 var graph_exports = {};
 __export(graph_exports, {
+  ParityUnion: () => ParityUnion,
   aromaticBonds: () => aromaticBonds,
   atomInvariants: () => atomInvariants,
   automorphisms: () => automorphisms,
@@ -18168,6 +18222,7 @@ var init_graph = __esm({
     init_classes();
     init_isomorphism();
     init_key();
+    init_parity_union();
   }
 });
 
@@ -22494,9 +22549,20 @@ var init_rescue = __esm({
 
 // src/chem/perceive/bridges.ts
 function bridgeCouplings(s, g, rings, units) {
+  const ranked = fusedPairs(g, rings, units).map((c) => ({ a: c.a, b: c.b, c: c.c, rank: 0 }));
+  for (const c of bridgedPairs(s, g, rings, units)) ranked.push(c);
+  if (ranked.length === 0) return [];
+  ranked.sort((x, y) => x.rank - y.rank);
+  const u = new ParityUnion(units.length);
   const out = objectList();
-  for (const c of bridgedPairs(s, g, rings, units)) out.push(c);
-  for (const c of fusedPairs(g, rings, units)) out.push(c);
+  for (let i = 0; i < ranked.length; ) {
+    let j = i;
+    while (j < ranked.length && ranked[j].rank === ranked[i].rank) j++;
+    for (let k = i; k < j; k++) u.add(ranked[k].a, ranked[k].b, ranked[k].c);
+    if (!u.consistent) break;
+    for (let k = i; k < j; k++) out.push({ a: ranked[k].a, b: ranked[k].b, c: ranked[k].c });
+    i = j;
+  }
   return out;
 }
 function fusedPairs(g, rings, units) {
@@ -22571,72 +22637,114 @@ function bridgedPairs(s, g, rings, units) {
   if (cand.length < 2) return [];
   const system = new Int32Array(s.atoms.length).fill(-1);
   rings.ringSystems.forEach((atoms, k) => atoms.forEach((x) => system[x] = k));
-  const out = [];
-  for (let i = 0; i < cand.length; i++) {
-    for (let j = i + 1; j < cand.length; j++) {
+  const candAt = new Int32Array(s.atoms.length).fill(-1);
+  cand.forEach((c, i) => candAt[c.u.atoms[0]] = i);
+  const bySystem = /* @__PURE__ */ new Map();
+  cand.forEach((c, i) => {
+    const k = system[c.u.atoms[0]];
+    if (k < 0) return;
+    const members = bySystem.get(k);
+    if (members === void 0) bySystem.set(k, [i]);
+    else members.push(i);
+  });
+  const searchSystem = (members, maxInner) => {
+    const found = [];
+    for (const i of members) {
       const a = cand[i].u.atoms[0];
-      const b = cand[j].u.atoms[0];
-      if (system[a] < 0 || system[a] !== system[b]) continue;
-      const bridges2 = threeBridges(a, b, ringNbrs);
-      if (!bridges2) continue;
-      const ua = cand[i].u;
-      const ub = cand[j].u;
-      const xa = ua.tokens.find((t) => !bridges2.some((p) => p[0] === t));
-      const xb = ub.tokens.find((t) => !bridges2.some((p) => p[p.length - 1] === t));
-      if (xa === void 0 || xb === void 0) continue;
-      const la = [xa, ...bridges2.map((p) => p[0])];
-      const lb = [xb, ...bridges2.map((p) => p[p.length - 1])];
-      const pa = permutationParity2(la, ua.tokens);
-      const pb = permutationParity2(lb, ub.tokens);
-      if (pa < 0 || pb < 0) continue;
-      out.push({ a: cand[i].k, b: cand[j].k, c: 1 ^ pa ^ pb });
+      const isEnd = (y) => candAt[y] > i && system[y] === system[a];
+      const byEnd = pathsFrom(a, ringNbrs, isEnd, maxInner);
+      if (byEnd === null) return null;
+      for (const [b, paths] of byEnd) {
+        const j = candAt[b];
+        const r = pairCoupling(cand[i].u, cand[j].u, paths);
+        if (r !== null) found.push({ a: cand[i].k, b: cand[j].k, c: r.c, rank: r.rank });
+      }
     }
+    return found;
+  };
+  const out = [];
+  for (const members of bySystem.values()) {
+    if (members.length < 2) continue;
+    const found = searchSystem(members, MAX_LONG) ?? searchSystem(members, MAX_SHORT);
+    if (found !== null) for (const r of found) out.push(r);
   }
   return out;
 }
-function threeBridges(a, b, ringNbrs) {
-  const paths = [];
+function pathsFrom(a, ringNbrs, isEnd, maxInner) {
+  const byEnd = /* @__PURE__ */ new Map();
   const path = [];
   const onPath = /* @__PURE__ */ new Set([a]);
+  let found = 0;
   const walk = (x) => {
-    if (paths.length > 200) return;
     for (const y of ringNbrs(x)) {
-      if (y === b) {
-        if (path.length >= 1) paths.push(path.slice());
-        continue;
+      if (onPath.has(y)) continue;
+      if (isEnd(y) && path.length >= 1) {
+        let list = byEnd.get(y);
+        if (list === void 0) byEnd.set(y, list = []);
+        list.push(path.slice());
       }
-      if (onPath.has(y) || path.length >= MAX_INNER) continue;
+      if (path.length >= maxInner) continue;
+      if (++found > MAX_PATHS) return false;
       onPath.add(y);
       path.push(y);
-      walk(y);
+      const ok = walk(y);
       path.pop();
       onPath.delete(y);
+      if (!ok) return false;
     }
+    return true;
   };
-  walk(a);
+  return walk(a) ? byEnd : null;
+}
+function pairCoupling(ua, ub, paths) {
   paths.sort((p, q) => p.length - q.length);
-  for (let i = 0; i < paths.length; i++) {
-    for (let j = i + 1; j < paths.length; j++) {
-      if (!disjoint(paths[i], paths[j])) continue;
-      for (let k = j + 1; k < paths.length; k++) {
-        if (disjoint(paths[i], paths[k]) && disjoint(paths[j], paths[k]))
-          return [paths[i], paths[j], paths[k]];
+  let best = Infinity;
+  let c = -1;
+  for (let k = 2; k < paths.length; k++) {
+    const L = paths[k].length;
+    if (L * 100 > best) break;
+    for (let i = 0; i < k; i++) {
+      if (!disjoint(paths[i], paths[k])) continue;
+      for (let j = i + 1; j < k; j++) {
+        if (!disjoint(paths[j], paths[k]) || !disjoint(paths[i], paths[j])) continue;
+        const [s1, s2] = [paths[i].length, paths[j].length];
+        if (s2 > MAX_SHORT) continue;
+        const rank = L * 100 + s2 * 10 + s1;
+        if (rank > best) continue;
+        const x = tripleCoupling(ua, ub, [paths[i], paths[j], paths[k]]);
+        if (x < 0) continue;
+        if (rank < best) {
+          best = rank;
+          c = x;
+        } else if (x !== c) c = 2;
       }
     }
   }
-  return null;
+  return c === 0 || c === 1 ? { c, rank: best } : null;
+}
+function tripleCoupling(ua, ub, bridges2) {
+  const xa = ua.tokens.find((t) => !bridges2.some((p) => p[0] === t));
+  const xb = ub.tokens.find((t) => !bridges2.some((p) => p[p.length - 1] === t));
+  if (xa === void 0 || xb === void 0) return -1;
+  const pa = permutationParity2([xa, ...bridges2.map((p) => p[0])], ua.tokens);
+  const pb = permutationParity2([xb, ...bridges2.map((p) => p[p.length - 1])], ub.tokens);
+  if (pa < 0 || pb < 0) return -1;
+  return 1 ^ pa ^ pb;
 }
 function disjoint(p, q) {
   for (const x of p) if (q.includes(x)) return false;
   return true;
 }
-var MAX_INNER;
+var MAX_LONG, MAX_SHORT, MAX_PATHS;
 var init_bridges = __esm({
   "src/chem/perceive/bridges.ts"() {
     "use strict";
+    init_graph();
     init_units();
     init_make();
-    MAX_INNER = 3;
+    MAX_LONG = 5;
+    MAX_SHORT = 3;
+    MAX_PATHS = 4e3;
   }
 });
 
@@ -24899,59 +25007,6 @@ var init_perceive2 = __esm({
   }
 });
 
-// src/chem/symmetry/solve.ts
-var ParityUnion;
-var init_solve = __esm({
-  "src/chem/symmetry/solve.ts"() {
-    "use strict";
-    ParityUnion = class {
-      parent;
-      rel;
-      /** false once a contradictory constraint was added. */
-      consistent = true;
-      /** Number of independent classes (each has two assignments). */
-      classes;
-      constructor(n) {
-        this.parent = Int32Array.from({ length: n }, (_v, i) => i);
-        this.rel = new Uint8Array(n);
-        this.classes = n;
-      }
-      /** Root of x and the parity x ⊕ root. */
-      find(x) {
-        let p = 0;
-        let r = x;
-        while (this.parent[r] !== r) {
-          p ^= this.rel[r];
-          r = this.parent[r];
-        }
-        let y = x;
-        let q = p;
-        while (this.parent[y] !== y) {
-          const next = this.parent[y];
-          const step = this.rel[y];
-          this.parent[y] = r;
-          this.rel[y] = q;
-          q ^= step;
-          y = next;
-        }
-        return [r, p];
-      }
-      /** Adds x ⊕ y = c. */
-      add(x, y, c) {
-        const [rx, px] = this.find(x);
-        const [ry, py] = this.find(y);
-        if (rx === ry) {
-          if ((px ^ py) !== c) this.consistent = false;
-          return;
-        }
-        this.parent[rx] = ry;
-        this.rel[rx] = px ^ py ^ c;
-        this.classes--;
-      }
-    };
-  }
-});
-
 // src/chem/symmetry/group.ts
 function unitGroup(p) {
   const { units } = p;
@@ -25239,7 +25294,6 @@ var init_group = __esm({
     "use strict";
     init_graph();
     init_perceive2();
-    init_solve();
     init_make();
     MAX_GROUP = 2e4;
     MAX_GROUP_WORK = 2e6;
