@@ -239,7 +239,11 @@ function atomText(a: Atom, valence: number, chir: string): string {
     if (sym === '*') bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym)!, 0, valence) !== a.hCount;
+      // A neutral N with bond-order sum 4 in the organic subset would get 1 H (valence 5) by the OpenSMILES rule,
+      // but our readers refuse a neutral N with four bonds and no explicit H (valence.ts): write [NH] so that
+      // what was read (an [nH] given an extra double bond, say) reads back the same.
+      bracket =
+        implicitHydrogens(atomicNumberOf(sym)!, 0, valence) !== a.hCount || (sym === 'N' && valence === 4);
     }
   }
   if (!bracket) return sym;

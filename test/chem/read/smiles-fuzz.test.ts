@@ -14,6 +14,7 @@ const SEEDS = [
   'F/C=C/C=C\\Cl',
   'NC(Br)=[C@]=C(O)C',
   'c1ccc2[nH]ccc2c1.[Na+].[Cl-]',
+  'c1ccc2[nH]=cc2c1', // once written as C2=N=C=C2, which our reader refuses (neutral N, four bonds)
   'O=C1C[C@H]2CC[C@@H]1C2 |&1:3,6|',
   'C%10CC[C@]%11(F)CC%10.C%11',
   '[2H][13C@@H]([NH3+])C(=O)[O-] LX-00012',

@@ -38,6 +38,11 @@ describe('writeSmiles output syntax (OpenSMILES)', () => {
   it('writes organic-subset atoms bare and the rest in brackets', () => {
     expect(writeSmiles(read('CCO'))).toBe('CCO');
     expect(writeSmiles(read('[NH4+].[Cl-]'))).toBe('[NH4+].[Cl-]');
+    // a neutral N with bond-order sum 4 and one H (valence 5, allowed with a double bond): bare `N` would read
+    // back as a neutral N with four bonds, which the reader refuses; so it is written [NH] (OpenSMILES syntax)
+    const pentavalent = writeSmiles(read('C=[NH]=C'));
+    expect(pentavalent).toContain('[NH]');
+    expect(parseSmiles(pentavalent).ok).toBe(true);
     expect(writeSmiles(read('[13CH4]'))).toBe('[13CH4]');
     expect(writeSmiles(read('[CH3:7]C'))).toBe('[CH3:7]C');
     expect(writeSmiles(read('[Cu+2]'))).toBe('[Cu+2]');
