@@ -11,6 +11,7 @@ import type { Budget } from '../chem/budget.js';
 import { mapOrdered } from '../bulk/pool.js';
 import { BlobIds, gitBlobIds } from '../registry/blob-ids.js';
 import {
+  entryRow,
   readIndexCache,
   writeIndexCache,
   type CacheRead,
@@ -105,8 +106,9 @@ export class RecordIndex {
       else {
         // renamed (or copied) without change: the row is the file's content but for its path
         const moved = movedFrom(blob);
-        if (!moved) return toRead.push(i);
-        this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
+        const row = moved && entryRow(moved);
+        if (!moved || (moved.keyed && !row)) return toRead.push(i);
+        this.entries[i] = { ...moved, file, row: row ? { ...row, file } : null, line: null };
       }
       this.reused++;
     });
@@ -117,7 +119,8 @@ export class RecordIndex {
   async keyFully(wanted: (e: IndexEntry) => boolean): Promise<void> {
     const todo: number[] = [];
     this.entries.forEach((e, i) => {
-      if (!e.keyed && wanted(e)) todo.push(i);
+      // a cached row whose stored keys are damaged is read again
+      if (wanted(e) && (!e.keyed || entryRow(e) === null)) todo.push(i);
     });
     await this.readFiles(todo, true);
   }
@@ -165,7 +168,11 @@ export class RecordIndex {
         valid: result.valid,
         heavy: result.heavy,
         keyed: result.keyed,
+        id: result.row.id,
+        idLine: result.row.lines.id,
         row: result.row,
+        rest: null,
+        line: null,
       };
       this.unkept.delete(this.entries[i]!);
       if (!result.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);

@@ -11,7 +11,7 @@ import { withBudget, type Budget } from '../chem/budget.js';
 import type { AuditConfig, CheckModule, RegistryEntry, RegistryView } from '../checks/types.js';
 import { findRecordFiles, relativeTo } from '../registry/files.js';
 import { gitBlobIds } from '../registry/blob-ids.js';
-import type { IndexEntry } from '../registry/index-cache.js';
+import { entryRow, type IndexEntry, type IndexRowData } from '../registry/index-cache.js';
 import { loadRecordFile, markDuplicateIds, refusedRecord } from '../registry/load.js';
 import type { LoadedRecord } from '../registry/types.js';
 import { heavyAtomCandidates, type AuditEngine } from './engine.js';
@@ -42,6 +42,17 @@ export interface IndexReviewOptions {
 }
 
 const NO_STRUCTURE = { structure: null, facts: null, error: null };
+/** The row a record that is no partner of the records under review stands as: the phase only counts it. */
+const NO_PARTNER: IndexRowData = {
+  id: null,
+  file: '',
+  name: null,
+  form: 'unknown',
+  rotation: null,
+  keys: null,
+  lines: { id: null, structure: null, rotation: null },
+  waivers: [],
+};
 
 /** A record file as selection sees it: from the index, or refused (a link out of the registry). */
 type Stub = SelectableRecord & { at: number | null; refused: string | null };
@@ -104,9 +115,9 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
   const structures = new StructureCache(o.engine);
   // only a record with the heavy-atom formula of a record under review can be its duplicate or enantiomer
   const wanted = partnerFormulas(toAudit, structures, o.budget);
-  await index.keyFully(
-    (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy)),
-  );
+  const partner = (e: IndexEntry) =>
+    !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy));
+  await index.keyFully(partner);
   o.log?.(index.save());
   markDuplicateIdsAgainst(toAudit, entries, audited);
   const view = indexView(entries, audited, structures, (at) => loadRecordFile(o.realRoot, found.files[at]!));
@@ -116,12 +127,16 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
     engine: o.engine,
     budget: o.budget,
     view,
-    // a light row has no keys: its formula differs from every record under review, so no lookup reaches it
+    // a record that is no partner stands as a row without keys: its formula differs from every record under
+    // review, so no lookup reaches it (its row is neither parsed from the cache nor read)
     otherRows: function* () {
       for (const s of stubs) {
         if (audited.has(s.file)) continue;
-        if (s.at !== null) yield entries[s.at]!.row;
-        else yield indexRow(refusedRecord({ file: s.file, message: s.refused! }), NO_STRUCTURE, 0);
+        if (s.at === null) yield indexRow(refusedRecord({ file: s.file, message: s.refused! }), NO_STRUCTURE, 0);
+        else {
+          const e = entries[s.at]!;
+          yield (partner(e) && entryRow(e)) || NO_PARTNER;
+        }
       }
     },
   });
@@ -170,14 +185,14 @@ function markDuplicateIdsAgainst(
       if (own.id !== null && ids.has(own.id)) group.push(own);
       continue;
     }
-    const { id, lines } = e.row;
+    const { id, idLine } = e;
     if (id === null || !ids.has(id)) continue;
     group.push({
       file: e.file,
       id,
       record: null,
       positions: {
-        get: (p) => (p === 'id' && lines.id !== null ? { line: lines.id, column: 1 } : undefined),
+        get: (p) => (p === 'id' && idLine !== null ? { line: idLine, column: 1 } : undefined),
       },
       problems: [],
       origin: { kind: 'file' },
@@ -199,7 +214,7 @@ function indexView(
 ): RegistryView {
   const firstById = new Map<string, number>();
   entries.forEach((e, at) => {
-    if (e.valid && e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, at);
+    if (e.valid && e.id !== null && !firstById.has(e.id)) firstById.set(e.id, at);
   });
   const entryAt = (at: number): RegistryEntry | null => {
     const file = entries[at]!.file;
@@ -219,6 +234,6 @@ function indexView(
       }
       return seen.get(id);
     },
-    ids: () => entries.flatMap((e) => (e.valid && e.row.id !== null ? [e.row.id] : [])),
+    ids: () => entries.flatMap((e) => (e.valid && e.id !== null ? [e.id] : [])),
   };
 }

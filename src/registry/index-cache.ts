@@ -3,21 +3,25 @@
  * the file's blob id (blob-ids.ts) and the blob ids of the molfiles it uses. A later run reuses an entry whose
  * blob ids still match and reads only the other files.
  *
- * The file names the stereogate version and the settings that shape the keys; any difference, a file that does
- * not parse, or an entry of the wrong shape means that part is built again: a missing, stale or damaged cache
- * only costs time, never a finding. Written to a temporary file and renamed, so a run that stops half-way leaves
- * the previous cache whole.
+ * The file is text: a JSON header naming the stereogate version and the settings that shape the keys, one line
+ * per entry, and an end line with the count. An entry line holds tab-separated columns (file, blob id, schema,
+ * keyed, heavy-atom formula, id, line of the id, molfiles) and, for a keyed row only, the rest of the row as
+ * JSON. A warm run reads the columns and parses the rest of a row only when a review needs its keys, so it
+ * builds no object per row of the registry beyond its entry. Any difference in the header, a missing end line
+ * (a truncated file) means the whole cache is built again; a line of the wrong shape, that file alone. A
+ * missing, stale or damaged cache only costs time, never a finding. Written to a temporary file and renamed, so
+ * a run that stops half-way leaves the previous cache whole.
  */
 import { mkdirSync, readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname } from 'node:path';
-import type { IndexRow, RecordKeys } from './keys.js';
-import { STEREO_FORMS, type Rotation, type StereoForm } from './types.js';
+import { isString, restOf, rowFromRest } from './index-cache-shape.js';
+import type { IndexRow } from './keys.js';
 
 /** An index row without its place in one run's order. */
 export type IndexRowData = Omit<IndexRow, 'seq'>;
 
 export interface IndexEntry {
-  /** Path relative to the registry root, forward slashes (also `row.file`). */
+  /** Path relative to the registry root, forward slashes (also the row's file). */
   file: string;
   blob: string;
   /** The molfiles the record uses (main structure and components): path relative to the root, blob id. */
@@ -26,9 +30,17 @@ export interface IndexEntry {
   valid: boolean;
   /** Heavy-atom formula of the main structure from its SMILES syntax; null when unknown. */
   heavy: string | null;
-  /** `row.keys` is computed; false: a light row (keys null until a review needs them). */
+  /** The row's keys are computed; false: a light row (no keys until a review needs them). */
   keyed: boolean;
-  row: IndexRowData;
+  /** The record's id and the line of its id (the row's). */
+  id: string | null;
+  idLine: number | null;
+  /** The whole row: of a file read in this run, or of a cached keyed entry once `entryRow` parsed it. */
+  row: IndexRowData | null;
+  /** A cached keyed entry: the stored rest of its row, not yet parsed. */
+  rest: string | null;
+  /** A cached entry: its line as stored, written back unchanged. */
+  line: string | null;
 }
 
 /** What the keys depend on besides the files: a cache made under other settings is not used. */
@@ -39,27 +51,26 @@ export interface CacheSettings {
 }
 
 const FORMAT = 'stereogate registry index cache';
-const FORMAT_VERSION = 3;
-
-type Stored = [
-  file: string,
-  blob: string,
-  molfiles: [string, string][],
-  valid: 0 | 1,
-  heavy: string | null,
-  keyed: 0 | 1,
-  id: string | null,
-  name: string | null,
-  form: StereoForm,
-  rotation: Rotation | null,
-  keys: RecordKeys | null,
-  lines: [number | null, number | null, number | null],
-  waivers: IndexRowData['waivers'],
-];
+const FORMAT_VERSION = 4;
+const END = 'end\t';
 
 export type CacheRead =
   | { status: 'used'; entries: IndexEntry[] }
   | { status: 'missing' | 'unreadable' | 'stale'; entries: []; reason: string };
+
+/**
+ * The row of `e`: in memory, or parsed from the cache (then kept). Null for a cached light entry (its row is not
+ * stored: a review that needs it reads the file) and for a stored rest of the wrong shape.
+ */
+export function entryRow(e: IndexEntry): IndexRowData | null {
+  if (e.row === null && e.rest !== null) {
+    e.row = rowFromRest(e.rest, e.file, e.id, e.idLine);
+    // a damaged rest is not tried twice, nor written back
+    if (e.row === null) e.line = null;
+    e.rest = null;
+  }
+  return e.row;
+}
 
 /** Reads the cache at `path`. Never throws: a missing, damaged or stale file gives no entries and says why. */
 export function readIndexCache(path: string, settings: CacheSettings): CacheRead {
@@ -69,18 +80,19 @@ export function readIndexCache(path: string, settings: CacheSettings): CacheRead
   } catch {
     return { status: 'missing', entries: [], reason: 'no cache file yet' };
   }
-  let value: unknown;
+  const unreadable = (reason: string): CacheRead => ({ status: 'unreadable', entries: [], reason });
+  const headEnd = text.indexOf('\n');
+  let head: Record<string, unknown> | null = null;
   try {
-    value = JSON.parse(text);
+    head = JSON.parse(headEnd < 0 ? text : text.slice(0, headEnd)) as Record<string, unknown> | null;
   } catch {
-    return { status: 'unreadable', entries: [], reason: 'the cache file is not valid JSON' };
+    return unreadable('the cache file does not start with a valid header');
   }
-  const top = value as Record<string, unknown> | null;
-  if (!top || typeof top !== 'object' || top.format !== FORMAT || !Array.isArray(top.entries))
-    return { status: 'unreadable', entries: [], reason: 'the cache file is not a stereogate index cache' };
-  const was = top.settings as Partial<CacheSettings> | undefined;
+  if (!head || typeof head !== 'object' || head.format !== FORMAT)
+    return unreadable('the cache file is not a stereogate index cache');
+  const was = head.settings as Partial<CacheSettings> | undefined;
   if (
-    top.formatVersion !== FORMAT_VERSION ||
+    head.formatVersion !== FORMAT_VERSION ||
     !was ||
     was.version !== settings.version ||
     was.axisOrthoMin !== settings.axisOrthoMin
@@ -91,11 +103,21 @@ export function readIndexCache(path: string, settings: CacheSettings): CacheRead
       reason: 'the cache was made by another stereogate version or with other settings',
     };
   const entries: IndexEntry[] = [];
-  for (const raw of top.entries as unknown[]) {
-    const e = entryOf(raw);
+  let lines = 0;
+  for (let at = headEnd + 1; at > 0 && at < text.length; ) {
+    const end = text.indexOf('\n', at);
+    if (end < 0) break;
+    if (text.startsWith(END, at)) {
+      if (Number(text.slice(at + END.length, end)) === lines && end + 1 === text.length)
+        return { status: 'used', entries };
+      break;
+    }
+    lines++;
+    const e = entryOf(text, at, end);
     if (e) entries.push(e);
+    at = end + 1;
   }
-  return { status: 'used', entries };
+  return unreadable('the cache file is incomplete (no end line with its count of entries)');
 }
 
 /** Writes the cache (temporary file, then rename). Returns the error message, or null when written. */
@@ -107,12 +129,9 @@ export function writeIndexCache(
   const tmp = `${path}.${process.pid}.tmp`;
   try {
     mkdirSync(dirname(path), { recursive: true });
-    const stored = entries.map(storedOf);
-    writeFileSync(
-      tmp,
-      `{"format":${JSON.stringify(FORMAT)},"formatVersion":${FORMAT_VERSION},` +
-        `"settings":${JSON.stringify(settings)},"entries":[\n${stored.map((s) => JSON.stringify(s)).join(',\n')}\n]}\n`,
-    );
+    const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
+    const lines = entries.map(lineOf);
+    writeFileSync(tmp, `${head}\n${lines.join('')}${END}${lines.length}\n`);
     renameSync(tmp, path);
     return null;
   } catch (e) {
@@ -121,116 +140,94 @@ export function writeIndexCache(
   }
 }
 
-function storedOf(e: IndexEntry): Stored {
-  const r = e.row;
-  return [
-    e.file,
+/** A text column: tab, newline, carriage return and backslash escaped with a backslash. */
+function escape(s: string): string {
+  return /[\t\n\r\\]/.test(s)
+    ? s.replace(/[\t\n\r\\]/g, (c) => (c === '\t' ? '\\t' : c === '\n' ? '\\n' : c === '\r' ? '\\r' : '\\\\'))
+    : s;
+}
+
+function unescape(s: string): string {
+  if (!s.includes('\\')) return s;
+  return s.replace(/\\(.)/g, (_, c: string) => (c === 't' ? '\t' : c === 'n' ? '\n' : c === 'r' ? '\r' : c));
+}
+
+/** A column that may be null: empty for null, else "=" and the text. */
+const optional = (s: string | null) => (s === null ? '' : `=${escape(s)}`);
+
+function lineOf(e: IndexEntry): string {
+  if (e.line !== null) return e.line;
+  const row = e.keyed ? entryRow(e) : null;
+  const cols = [
+    escape(e.file),
     e.blob,
-    e.molfiles,
-    e.valid ? 1 : 0,
-    e.heavy,
-    e.keyed ? 1 : 0,
-    r.id,
-    r.name,
-    r.form,
-    r.rotation,
-    r.keys,
-    [r.lines.id, r.lines.structure, r.lines.rotation],
-    r.waivers,
+    e.valid ? '1' : '0',
+    row === null ? '0' : '1',
+    optional(e.heavy),
+    optional(e.id),
+    e.idLine === null ? '' : String(e.idLine),
+    e.molfiles.length === 0 ? '' : JSON.stringify(e.molfiles),
+    row === null ? '' : JSON.stringify(restOf(row)),
   ];
+  return `${cols.join('\t')}\n`;
 }
 
-const isString = (v: unknown): v is string => typeof v === 'string';
-const isLine = (v: unknown): v is number | null => v === null || (Number.isInteger(v) && (v as number) > 0);
-const isOptNumber = (v: unknown) => v === undefined || (typeof v === 'number' && Number.isFinite(v));
+const COLUMNS = 9;
 
-function isRotation(v: unknown): v is Rotation {
-  if (!v || typeof v !== 'object' || Array.isArray(v)) return false;
-  const r = v as Record<string, unknown>;
-  return (
-    typeof r.value === 'number' &&
-    Number.isFinite(r.value) &&
-    isOptNumber(r.wavelength_nm) &&
-    isOptNumber(r.temperature_c) &&
-    isOptNumber(r.concentration) &&
-    (r.solvent === undefined || isString(r.solvent))
-  );
-}
-
-const isOptString = (v: unknown) => v === undefined || isString(v);
-
-/** A waiver of the registry check as the row keeps it (keys.ts): the record's fields and its place in the list. */
-function isWaiver(v: unknown): boolean {
-  if (!v || typeof v !== 'object' || Array.isArray(v)) return false;
-  const w = v as Record<string, unknown>;
-  return (
-    isString(w.check) &&
-    Number.isInteger(w.index) &&
-    (w.index as number) >= 0 &&
-    isOptString(w.message_id) &&
-    isOptString(w.other_record) &&
-    isOptString(w.reason) &&
-    isOptString(w.approved_by)
-  );
-}
-
-function isKeys(v: unknown): v is RecordKeys {
-  if (!v || typeof v !== 'object' || Array.isArray(v)) return false;
-  const k = v as Record<string, unknown>;
-  const text = k.text as Record<string, unknown> | undefined;
-  return (
-    isString(k.constitution) &&
-    (k.kind === 'as-drawn' || k.kind === 'racemic' || k.kind === 'relative') &&
-    (k.stereo === null || isString(k.stereo)) &&
-    (k.mirror === null || isString(k.mirror)) &&
-    (k.stereo === null) === (k.mirror === null) &&
-    (k.chiral === null || typeof k.chiral === 'boolean') &&
-    typeof k.exact === 'boolean' &&
-    (text === undefined ||
-      (!!text &&
-        typeof text === 'object' &&
-        (text.format === 'smiles' || text.format === 'molfile') &&
-        isString(text.text)))
-  );
-}
-
-/** One stored entry back, or null when it is not of the stored shape (that file is then read again). */
-function entryOf(raw: unknown): IndexEntry | null {
-  if (!Array.isArray(raw) || raw.length !== 13) return null;
-  const [file, blob, molfiles, valid, heavy, keyed, id, name, form, rotation, keys, lines, waivers] =
-    raw as unknown[];
-  if (!isString(file) || file === '' || !isString(blob) || !/^[0-9a-f]{40}$/.test(blob)) return null;
-  if (
-    !Array.isArray(molfiles) ||
-    !molfiles.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1]))
-  )
-    return null;
-  if ((valid !== 0 && valid !== 1) || (id !== null && !isString(id)) || (name !== null && !isString(name)))
-    return null;
-  if ((heavy !== null && !isString(heavy)) || (keyed !== 0 && keyed !== 1) || (keyed === 0 && keys !== null))
-    return null;
-  if (!STEREO_FORMS.includes(form as StereoForm)) return null;
-  if (rotation !== null && !isRotation(rotation)) return null;
-  if (keys !== null && !isKeys(keys)) return null;
-  if (!Array.isArray(lines) || lines.length !== 3 || !lines.every(isLine)) return null;
-  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
-  const [idLine, structureLine, rotationLine] = lines as [number | null, number | null, number | null];
+/** The entry of the line text[from, to), or null when it is not of the stored shape (that file is read again). */
+function entryOf(text: string, from: number, to: number): IndexEntry | null {
+  const cols: string[] = [];
+  for (let at = from; cols.length < COLUMNS; ) {
+    const tab = text.indexOf('\t', at);
+    const stop = tab < 0 || tab > to ? to : tab;
+    cols.push(text.slice(at, stop));
+    if (stop === to) break;
+    at = stop + 1;
+  }
+  if (cols.length !== COLUMNS) return null;
+  const [file, blob, valid, keyed, heavy, id, idLine, molfiles, rest] = cols as [
+    string,
+    string,
+    string,
+    string,
+    string,
+    string,
+    string,
+    string,
+    string,
+  ];
+  // the blob id is only compared with git's: a wrong one only means the file is read again
+  if (file === '' || blob.length !== 40 || (valid !== '0' && valid !== '1')) return null;
+  if ((keyed === '1') !== (rest !== '') || (keyed !== '0' && keyed !== '1')) return null;
+  if ((heavy !== '' && heavy[0] !== '=') || (id !== '' && id[0] !== '=')) return null;
+  const line = idLine === '' ? null : Number(idLine);
+  if (line !== null && !(Number.isInteger(line) && line > 0)) return null;
+  const mols = molfiles === '' ? [] : molfilesOf(molfiles);
+  if (mols === null) return null;
   return {
-    file,
+    file: unescape(file),
     blob,
-    molfiles: molfiles as [string, string][],
-    valid: valid === 1,
-    heavy: heavy as string | null,
-    keyed: keyed === 1,
-    row: {
-      id: id as string | null,
-      file,
-      name: name as string | null,
-      form: form as StereoForm,
-      rotation: rotation as Rotation | null,
-      keys: keys as RecordKeys | null,
-      lines: { id: idLine, structure: structureLine, rotation: rotationLine },
-      waivers: waivers as IndexRowData['waivers'],
-    },
+    molfiles: mols,
+    valid: valid === '1',
+    heavy: heavy === '' ? null : unescape(heavy.slice(1)),
+    keyed: keyed === '1',
+    id: id === '' ? null : unescape(id.slice(1)),
+    idLine: line,
+    row: null,
+    rest: rest === '' ? null : rest,
+    line: text.slice(from, to + 1),
   };
+}
+
+function molfilesOf(text: string): [string, string][] | null {
+  let raw: unknown;
+  try {
+    raw = JSON.parse(text);
+  } catch {
+    return null;
+  }
+  return Array.isArray(raw) &&
+    raw.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1]))
+    ? (raw as [string, string][])
+    : null;
 }
