@@ -84,6 +84,11 @@ export class RegistryPhase {
     this.index.add(row);
   }
 
+  /** Review mode: a record of the registry without keys (what `file` does with it: count it). */
+  countKeyless(): void {
+    this.registryRecords++;
+  }
+
   /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
   fileUnderReview(row: IndexRow): void {
     this.registryRecords++;

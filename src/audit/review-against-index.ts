@@ -7,10 +7,11 @@
  * review over the loaded registry: the rows a lookup reaches are the same, in the same order, and so are the
  * duplicate-id problems and the lookups by id (test/audit/review-against-index.test.ts compares the two).
  */
+import { join } from 'node:path';
 import { withBudget, type Budget } from '../chem/budget.js';
 import type { AuditConfig, CheckModule, RegistryEntry, RegistryView } from '../checks/types.js';
 import { findRecordFiles, relativeTo } from '../registry/files.js';
-import { gitBlobIds } from '../registry/blob-ids.js';
+import { gitRecordFiles } from '../registry/git-files.js';
 import { entryRow, type IndexEntry, type IndexRowData } from '../registry/index-cache.js';
 import { loadRecordFile, markDuplicateIds, refusedRecord } from '../registry/load.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -62,12 +63,19 @@ type Stub = SelectableRecord & { at: number | null; refused: string | null };
  * missing (the loaded audit says so), or `paths` name every record (a full audit).
  */
 export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditResult | null> {
-  // git lists its blob ids while the folders are walked and the cache is read
-  const gitIds = gitBlobIds(o.realRoot, o.config.recordDirs);
-  const found = findRecordFiles(o.realRoot, o.config.recordDirs);
-  if (found.missingDirs.length > 0) return null;
+  // in a git work tree git lists the record files with their blob ids; else (or when git's listing cannot
+  // say what the walk would find) the folders are walked
+  const listed = await gitRecordFiles(o.realRoot, o.config.recordDirs);
+  const gitIds = Promise.resolve(listed.ids);
+  let found = listed.found;
+  if (found === null) {
+    const walked = findRecordFiles(o.realRoot, o.config.recordDirs);
+    if (walked.missingDirs.length > 0) return null;
+    found = { files: walked.files.map((abs) => relativeTo(o.realRoot, abs)), refused: walked.refused };
+  }
   const refused = found.refused.map((r): Stub => ({ file: r.file, at: null, refused: r.message }));
-  const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
+  const files = found.files;
+  const absOf = (at: number) => join(o.realRoot, files[at]!);
 
   const index = await RecordIndex.open({
     realRoot: o.realRoot,
@@ -108,7 +116,7 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
       s.file,
       s.refused !== null
         ? refusedRecord({ file: s.file, message: s.refused })
-        : loadRecordFile(o.realRoot, found.files[s.at!]!),
+        : loadRecordFile(o.realRoot, absOf(s.at!)),
     );
   }
   const toAudit = [...audited.values()];
@@ -120,7 +128,7 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
   await index.keyFully(partner);
   o.log?.(index.save());
   markDuplicateIdsAgainst(toAudit, entries, audited);
-  const view = indexView(entries, audited, structures, (at) => loadRecordFile(o.realRoot, found.files[at]!));
+  const view = indexView(entries, audited, structures, (at) => loadRecordFile(o.realRoot, absOf(at)));
   const result = auditRecords(toAudit, {
     checks: o.checks,
     config: o.config,
@@ -212,10 +220,18 @@ function indexView(
   cache: StructureCache,
   load: (at: number) => LoadedRecord,
 ): RegistryView {
-  const firstById = new Map<string, number>();
-  entries.forEach((e, at) => {
-    if (e.valid && e.id !== null && !firstById.has(e.id)) firstById.set(e.id, at);
-  });
+  // built at the first lookup by id (most reviews make none)
+  let firstById: Map<string, number> | null = null;
+  const firstAt = (id: string) => {
+    if (firstById === null) {
+      const map = new Map<string, number>();
+      entries.forEach((e, at) => {
+        if (e.valid && e.id !== null && !map.has(e.id)) map.set(e.id, at);
+      });
+      firstById = map;
+    }
+    return firstById.get(id);
+  };
   const entryAt = (at: number): RegistryEntry | null => {
     const file = entries[at]!.file;
     return entryOf(audited.get(file) ?? load(at), cache, audited.has(file));
@@ -229,7 +245,7 @@ function indexView(
     },
     byId(id: string): RegistryEntry | undefined {
       if (!seen.has(id)) {
-        const at = firstById.get(id);
+        const at = firstAt(id);
         seen.set(id, at === undefined ? undefined : (entryAt(at) ?? undefined));
       }
       return seen.get(id);

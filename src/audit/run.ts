@@ -126,7 +126,14 @@ export function auditRecords(records: readonly LoadedRecord[], options: AuditRec
       const audited = new Set(records);
       phase.reviewing(rows);
       let seq = records.length;
-      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      if (options.otherRows)
+        for (const row of options.otherRows()) {
+          // a row without keys is only counted: no copy of it
+          if (row.keys === null) {
+            seq++;
+            phase.countKeyless();
+          } else phase.file({ ...row, seq: ++seq });
+        }
       else for (const r of options.registry!) if (!audited.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
       for (const row of rows) phase.fileUnderReview(row);
     }

@@ -19,7 +19,7 @@ import { isAbsolute, join, relative, resolve, sep } from 'node:path';
 /** Record files larger than this are refused (a record is a few hundred bytes; molfiles a few hundred kB). */
 export const MAX_FILE_BYTES = 8 * 1024 * 1024;
 
-const RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
+export const RECORD_EXTENSIONS = /\.(ya?ml|json)$/i;
 
 export type TextResult = { ok: true; text: string } | { ok: false; error: string };
 
@@ -94,7 +94,8 @@ export function relativeTo(root: string, abs: string): string {
   return relative(root, abs).split(sep).join('/');
 }
 
-function escapes(root: string, abs: string): boolean {
+/** `abs` lies outside `root`. */
+export function escapes(root: string, abs: string): boolean {
   const rel = relative(root, abs);
   return rel === '..' || rel.startsWith(`..${sep}`) || isAbsolute(rel);
 }

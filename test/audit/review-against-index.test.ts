@@ -7,7 +7,7 @@
  * (test/checks/consistent-with-registry.test.ts).
  */
 import { afterEach, describe, expect, it } from 'vitest';
-import { mkdirSync, readFileSync, rmSync, unlinkSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, rmSync, symlinkSync, unlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { loadConfig } from '../../src/audit/config.js';
 import { defaultEngine } from '../../src/audit/engine.js';
@@ -208,6 +208,54 @@ describe('a review through the key index', () => {
     const byMolfile = await indexReview(demo.root, ['compounds/LX-00010.mol'], cache);
     expect(byMolfile.result.records.map((r) => r.file)).toEqual(['compounds/LX-00010.yml']);
     expect(byMolfile.seen).toBe(await loadedReview(demo.root, ['compounds/LX-00010.mol']));
+  });
+
+  it('a damaged stored row of a partner: that record is described again, the same findings', async () => {
+    demo = demoCopy(true);
+    const cache = join(demo.root, 'index-cache.json');
+    const paths = addRecords(demo);
+    await indexReview(demo.root, paths, cache);
+    const clean = await indexReview(demo.root, paths, cache);
+    const described = (log: string[]) => Number(/(\d+) described/.exec(log[0] ?? '')?.[1] ?? NaN);
+    const lines = readFileSync(cache, 'utf8').split('\n');
+    // LX-00005, (R)-butan-2-ol, is a partner of LX-00300: its keys are stored; damage them
+    const at = lines.findIndex((l) => l.startsWith('compounds/LX-00005.yml\t'));
+    expect(lines[at]).toContain('"constitution"');
+    lines[at] = lines[at]!.replace(/\t\[[^\t]*$/, '\t[1,2]');
+    writeFileSync(cache, lines.join('\n'));
+    const damaged = await indexReview(demo.root, paths, cache);
+    expect(described(damaged.log)).toBe(described(clean.log) + 1);
+    expect(damaged.seen).toBe(clean.seen);
+    expect(damaged.seen).toContain('identical to LX-00005');
+    expect(damaged.seen).toBe(await loadedReview(demo.root, paths));
+    // written back whole: the next run describes nothing more
+    expect(described((await indexReview(demo.root, paths, cache)).log)).toBe(described(clean.log));
+  });
+
+  it('a link out of the registry and a hidden folder: refused and skipped as the walk has them, git work tree or not', async () => {
+    for (const withGit of [true, false]) {
+      demo = demoCopy(withGit);
+      const cache = join(demo.root, 'index-cache.json');
+      const paths = addRecords(demo);
+      const away = join(demo.root, '..', `${demo.root.split('/').pop()}-outside.yml`);
+      writeFileSync(away, 'id: LX-00306\nstructure:\n  smiles: "CCO"\nstereo:\n  form: achiral\n');
+      symlinkSync(away, join(demo.root, 'compounds/LX-00306.yml'));
+      mkdirSync(join(demo.root, 'compounds/.drafts'));
+      writeFileSync(join(demo.root, 'compounds/.drafts/LX-00307.yml'), ADDED['compounds/LX-00300.yml']!);
+      const under = [...paths, 'compounds/LX-00306.yml'];
+      try {
+        const run = await indexReview(demo.root, under, cache);
+        expect(run.seen).toBe(await loadedReview(demo.root, under));
+        expect(run.seen).toContain('outside the registry folder');
+        expect(run.seen).not.toContain('LX-00307');
+        const warm = await indexReview(demo.root, under, cache);
+        expect(warm.seen).toBe(run.seen);
+      } finally {
+        rmSync(away, { force: true });
+        demo.remove();
+        demo = null;
+      }
+    }
   });
 
   it('a folder that is no git work tree: blob ids hashed from the bytes, the same cache and findings', async () => {
