@@ -140,7 +140,8 @@ export async function reviewAgainstIndex(o: IndexReviewOptions): Promise<AuditRe
     otherRows: function* () {
       for (const s of stubs) {
         if (audited.has(s.file)) continue;
-        if (s.at === null) yield indexRow(refusedRecord({ file: s.file, message: s.refused! }), NO_STRUCTURE, 0);
+        if (s.at === null)
+          yield indexRow(refusedRecord({ file: s.file, message: s.refused! }), NO_STRUCTURE, 0);
         else {
           const e = entries[s.at]!;
           yield (partner(e) && entryRow(e)) || NO_PARTNER;

@@ -57,7 +57,7 @@ export function eachStaged(
 ): void {
   const dirty = new Set(modified.split('\0'));
   // each entry: "H 100644 <40 hex> 0\t<path>\0", read at fixed offsets (no string per field)
-  for (let at = 0; at < staged.length; ) {
+  for (let at = 0; at < staged.length;) {
     const end = staged.indexOf('\0', at);
     const stop = end < 0 ? staged.length : end;
     const plain =

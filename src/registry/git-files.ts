@@ -10,14 +10,7 @@
  */
 import { lstatSync, realpathSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import {
-  blobIdsFromListing,
-  eachStaged,
-  git,
-  MODIFIED_ARGS,
-  pathspecOf,
-  STAGED_ARGS,
-} from './blob-ids.js';
+import { blobIdsFromListing, eachStaged, git, MODIFIED_ARGS, pathspecOf, STAGED_ARGS } from './blob-ids.js';
 import { escapes, RECORD_EXTENSIONS, relativeTo, resolveInside, type FoundFiles } from './files.js';
 
 /** The walk's depth limit (files.ts): folders more than this many below a record folder are not entered. */

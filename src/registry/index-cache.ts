@@ -104,7 +104,7 @@ export function readIndexCache(path: string, settings: CacheSettings): CacheRead
     };
   const entries: IndexEntry[] = [];
   let lines = 0;
-  for (let at = headEnd + 1; at > 0 && at < text.length; ) {
+  for (let at = headEnd + 1; at > 0 && at < text.length;) {
     const end = text.indexOf('\n', at);
     if (end < 0) break;
     if (text.startsWith(END, at)) {
@@ -177,7 +177,7 @@ const COLUMNS = 9;
 /** The entry of the line text[from, to), or null when it is not of the stored shape (that file is read again). */
 function entryOf(text: string, from: number, to: number): IndexEntry | null {
   const cols: string[] = [];
-  for (let at = from; cols.length < COLUMNS; ) {
+  for (let at = from; cols.length < COLUMNS;) {
     const tab = text.indexOf('\t', at);
     const stop = tab < 0 || tab > to ? to : tab;
     cols.push(text.slice(at, stop));

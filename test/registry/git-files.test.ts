@@ -30,7 +30,9 @@ function walked(root: string, dirs: string[]) {
 
 async function listed(root: string, dirs: string[]) {
   const { found } = await gitRecordFiles(root, dirs);
-  return found && { files: found.files, refused: [...found.refused].sort((a, b) => (a.file < b.file ? -1 : 1)) };
+  return (
+    found && { files: found.files, refused: [...found.refused].sort((a, b) => (a.file < b.file ? -1 : 1)) }
+  );
 }
 
 /** A registry with every kind of file the walk treats its own way, committed, then changed in the work tree. */
@@ -95,7 +97,9 @@ describe("record files from git's listing", () => {
     expect(await listed(r.dir, ['compounds', 'other'])).toEqual(walked(r.dir, ['compounds', 'other']));
     expect(await listed(r.dir, ['.'])).toEqual(walked(r.dir, ['.']));
     // a registry in a folder of the repository: paths relative to the registry root
-    expect(await listed(join(r.dir, 'compounds'), ['sub'])).toEqual(walked(join(r.dir, 'compounds'), ['sub']));
+    expect(await listed(join(r.dir, 'compounds'), ['sub'])).toEqual(
+      walked(join(r.dir, 'compounds'), ['sub']),
+    );
   });
 
   it('say "walk" where git cannot tell: a linked folder, a nested repository, a missing or linked record folder, no work tree', async () => {
