@@ -6201,7 +6201,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
     }
   }
   if (!bracket) return sym;
@@ -43816,7 +43816,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve6.call(this, root, ref);
+      let _sch = resolve7.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -43843,7 +43843,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve6(root, ref) {
+    function resolve7(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -44707,7 +44707,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve6(baseURI, relativeURI, options) {
+    function resolve7(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -45098,7 +45098,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES: SCHEMES2,
       normalize: normalize2,
-      resolve: resolve6,
+      resolve: resolve7,
       resolveComponent,
       equal,
       serialize,
@@ -50205,6 +50205,10 @@ var init_registry_phase = __esm({
           return;
         this.index.add(row);
       }
+      /** Review mode: a record of the registry without keys (what `file` does with it: count it). */
+      countKeyless() {
+        this.registryRecords++;
+      }
       /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
       fileUnderReview(row) {
         this.registryRecords++;
@@ -52872,38 +52876,58 @@ function git(cwd, args) {
   return new Promise((done) => {
     execFile(
       "git",
-      args,
+      // pathspecs are folder names from the config, never patterns
+      ["--literal-pathspecs", ...args],
       { cwd, encoding: "utf8", maxBuffer: 1 << 30, env: { ...process.env, GIT_OPTIONAL_LOCKS: "0" } },
       (error, stdout) => done(error ? null : stdout)
     );
   });
 }
-async function gitBlobIds(root, dirs) {
-  const ids = /* @__PURE__ */ new Map();
-  const pathspec = ["--", ...dirs.length > 0 ? dirs : ["."]];
-  const [staged, modified] = await Promise.all([
-    git(root, ["ls-files", "-s", "-v", "-z", ...pathspec]),
-    git(root, ["ls-files", "-m", "-z", ...pathspec])
-  ]);
-  if (staged === null || modified === null) return ids;
+function eachStaged(staged, modified, visit2) {
   const dirty = new Set(modified.split("\0"));
   for (let at2 = 0; at2 < staged.length; ) {
     const end = staged.indexOf("\0", at2);
     const stop = end < 0 ? staged.length : end;
     const plain = staged.startsWith("H 100644 ", at2) || staged.startsWith("H 100755 ", at2) ? staged.startsWith(" 0	", at2 + 49) : false;
+    const tab = staged.indexOf("	", at2);
     if (plain && stop > at2 + 52) {
       const path = staged.slice(at2 + 52, stop);
       const blob = staged.slice(at2 + 9, at2 + 49);
-      if (!dirty.has(path) && /^[0-9a-f]{40}$/.test(blob)) ids.set(path, blob);
-    }
+      visit2(path, !dirty.has(path) && isHex40(blob) ? blob : null);
+    } else if (tab >= 0 && tab < stop - 1) visit2(staged.slice(tab + 1, stop), null);
     at2 = stop + 1;
   }
+}
+function isHex40(s) {
+  if (s.length !== 40) return false;
+  for (let i = 0; i < 40; i++) {
+    const c = s.charCodeAt(i);
+    if (!(c >= 48 && c <= 57 || c >= 97 && c <= 102)) return false;
+  }
+  return true;
+}
+async function gitBlobIds(root, dirs) {
+  const pathspec = pathspecOf(dirs);
+  const [staged, modified] = await Promise.all([
+    git(root, [...STAGED_ARGS, ...pathspec]),
+    git(root, [...MODIFIED_ARGS, ...pathspec])
+  ]);
+  return staged === null || modified === null ? /* @__PURE__ */ new Map() : blobIdsFromListing(staged, modified);
+}
+function blobIdsFromListing(staged, modified) {
+  const ids = /* @__PURE__ */ new Map();
+  eachStaged(staged, modified, (path, blob) => {
+    if (blob !== null) ids.set(path, blob);
+  });
   return ids;
 }
-var BlobIds;
+var pathspecOf, STAGED_ARGS, MODIFIED_ARGS, BlobIds;
 var init_blob_ids = __esm({
   "src/registry/blob-ids.ts"() {
     "use strict";
+    pathspecOf = (dirs) => ["--", ...dirs.length > 0 ? dirs : ["."]];
+    STAGED_ARGS = ["ls-files", "-s", "-v", "-z"];
+    MODIFIED_ARGS = ["ls-files", "-m", "-z"];
     BlobIds = class {
       constructor(fromGit, absOf) {
         this.fromGit = fromGit;
@@ -52927,6 +52951,353 @@ var init_blob_ids = __esm({
         return this.hashed.size;
       }
     };
+  }
+});
+
+// src/registry/git-files.ts
+import { lstatSync as lstatSync2, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
+import { join as join4, resolve as resolve3 } from "node:path";
+async function gitRecordFiles(root, dirs) {
+  const pathspec = pathspecOf(dirs);
+  const [staged, modified, untracked] = await Promise.all([
+    git(root, [...STAGED_ARGS, ...pathspec]),
+    git(root, [...MODIFIED_ARGS, ...pathspec]),
+    git(root, ["ls-files", "-o", "-z", ...pathspec])
+  ]);
+  if (staged === null || modified === null || untracked === null) return { ids: /* @__PURE__ */ new Map(), found: null };
+  const prefixes = folderPrefixes(root, dirs);
+  if (prefixes === null) return { ids: blobIdsFromListing(staged, modified), found: null };
+  const named = (path) => {
+    let seen = "skipped";
+    for (const p of prefixes) {
+      if (p !== "" && !(path.startsWith(p) && path[p.length] === "/")) continue;
+      const rest = p === "" ? path : path.slice(p.length + 1);
+      if (hiddenBelow(rest)) continue;
+      if (RECORD_EXTENSIONS.test(rest)) return "record";
+      seen = "other";
+    }
+    return seen;
+  };
+  const files = [];
+  const refused = [];
+  let walk = false;
+  const look = (path) => {
+    const name = named(path);
+    if (name === "skipped") return;
+    if (depthOf(path) > MAX_DEPTH) {
+      walk = true;
+      return;
+    }
+    const abs = join4(root, path);
+    let st;
+    try {
+      st = lstatSync2(abs);
+    } catch {
+      return;
+    }
+    if (st.isDirectory()) walk = true;
+    else if (st.isFile()) {
+      if (name === "record") files.push(path);
+    } else if (st.isSymbolicLink()) {
+      let target;
+      try {
+        target = realpathSync3(abs);
+      } catch {
+        if (name === "record") refused.push({ file: path, message: "is a broken link" });
+        return;
+      }
+      if (escapes(root, target)) {
+        if (name === "record")
+          refused.push({ file: path, message: "is a link to a place outside the registry folder" });
+        return;
+      }
+      const to = statSync2(abs);
+      if (to.isDirectory()) walk = true;
+      else if (to.isFile() && name === "record") files.push(path);
+    }
+  };
+  const ids = /* @__PURE__ */ new Map();
+  eachStaged(staged, modified, (path, blob) => {
+    if (blob === null) return look(path);
+    ids.set(path, blob);
+    if (named(path) === "record") {
+      if (depthOf(path) > MAX_DEPTH) walk = true;
+      else files.push(path);
+    }
+  });
+  for (const path of untracked.split("\0")) {
+    if (path === "") continue;
+    if (path.endsWith("/")) walk = true;
+    else look(path);
+  }
+  if (walk) return { ids, found: null };
+  files.sort((a, b) => a < b ? -1 : a > b ? 1 : 0);
+  const unique = files.filter((f, i) => i === 0 || files[i - 1] !== f);
+  return { ids, found: { files: unique, refused } };
+}
+function depthOf(path) {
+  let n = 0;
+  for (let at2 = path.indexOf("/"); at2 >= 0; at2 = path.indexOf("/", at2 + 1)) n++;
+  return n;
+}
+function hiddenBelow(rest) {
+  if (rest.startsWith(".") || rest.includes("/.")) return true;
+  return rest.includes("node_modules") && rest.split("/").includes("node_modules");
+}
+function folderPrefixes(root, dirs) {
+  const prefixes = [];
+  for (const d of dirs) {
+    const r = resolveInside(root, root, d);
+    if (!r.ok || r.abs !== resolve3(root, d)) return null;
+    try {
+      if (!statSync2(r.abs).isDirectory()) return null;
+    } catch {
+      return null;
+    }
+    prefixes.push(r.abs === root ? "" : relativeTo(root, r.abs));
+  }
+  return prefixes;
+}
+var MAX_DEPTH;
+var init_git_files = __esm({
+  "src/registry/git-files.ts"() {
+    "use strict";
+    init_blob_ids();
+    init_files();
+    MAX_DEPTH = 32;
+  }
+});
+
+// src/registry/types.ts
+var STEREO_FORMS, ORIGIN_CONTROLS;
+var init_types2 = __esm({
+  "src/registry/types.ts"() {
+    "use strict";
+    STEREO_FORMS = [
+      "achiral",
+      "meso",
+      "single-enantiomer",
+      "enantioenriched",
+      "racemate",
+      "single-diastereomer",
+      "diastereomer-mixture",
+      "unknown"
+    ];
+    ORIGIN_CONTROLS = [
+      "none",
+      "chiral-catalyst",
+      "chiral-reagent",
+      "chiral-auxiliary",
+      "biocatalyst",
+      "resolution",
+      "chiral-separation",
+      "enrichment",
+      "unknown"
+    ];
+  }
+});
+
+// src/registry/index-cache-shape.ts
+function isRotation(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const r = v;
+  return typeof r.value === "number" && Number.isFinite(r.value) && isOptNumber(r.wavelength_nm) && isOptNumber(r.temperature_c) && isOptNumber(r.concentration) && (r.solvent === void 0 || isString(r.solvent));
+}
+function isWaiver(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const w = v;
+  return isString(w.check) && Number.isInteger(w.index) && w.index >= 0 && isOptString(w.message_id) && isOptString(w.other_record) && isOptString(w.reason) && isOptString(w.approved_by);
+}
+function isKeys(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const k = v;
+  const text = k.text;
+  return isString(k.constitution) && (k.kind === "as-drawn" || k.kind === "racemic" || k.kind === "relative") && (k.stereo === null || isString(k.stereo)) && (k.mirror === null || isString(k.mirror)) && k.stereo === null === (k.mirror === null) && (k.chiral === null || typeof k.chiral === "boolean") && typeof k.exact === "boolean" && (text === void 0 || !!text && typeof text === "object" && (text.format === "smiles" || text.format === "molfile") && isString(text.text));
+}
+function restOf(r) {
+  return [r.name, r.form, r.rotation, r.keys, r.lines.structure, r.lines.rotation, r.waivers];
+}
+function rowFromRest(text, file, id, idLine) {
+  let raw2;
+  try {
+    raw2 = JSON.parse(text);
+  } catch {
+    return null;
+  }
+  if (!Array.isArray(raw2) || raw2.length !== 7) return null;
+  const [name, form, rotation, keys, structureLine, rotationLine, waivers] = raw2;
+  if (name !== null && !isString(name)) return null;
+  if (!STEREO_FORMS.includes(form)) return null;
+  if (rotation !== null && !isRotation(rotation)) return null;
+  if (keys !== null && !isKeys(keys)) return null;
+  if (!isLine(structureLine) || !isLine(rotationLine)) return null;
+  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
+  return {
+    id,
+    file,
+    name,
+    form,
+    rotation,
+    keys,
+    lines: { id: idLine, structure: structureLine, rotation: rotationLine },
+    waivers
+  };
+}
+var isString, isLine, isOptNumber, isOptString;
+var init_index_cache_shape = __esm({
+  "src/registry/index-cache-shape.ts"() {
+    "use strict";
+    init_types2();
+    isString = (v) => typeof v === "string";
+    isLine = (v) => v === null || Number.isInteger(v) && v > 0;
+    isOptNumber = (v) => v === void 0 || typeof v === "number" && Number.isFinite(v);
+    isOptString = (v) => v === void 0 || isString(v);
+  }
+});
+
+// src/registry/index-cache.ts
+import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
+import { dirname as dirname2 } from "node:path";
+function entryRow(e) {
+  if (e.row === null && e.rest !== null) {
+    e.row = rowFromRest(e.rest, e.file, e.id, e.idLine);
+    if (e.row === null) e.line = null;
+    e.rest = null;
+  }
+  return e.row;
+}
+function readIndexCache(path, settings) {
+  let text;
+  try {
+    text = readFileSync2(path, "utf8");
+  } catch {
+    return { status: "missing", entries: [], reason: "no cache file yet" };
+  }
+  const unreadable = (reason) => ({ status: "unreadable", entries: [], reason });
+  const headEnd = text.indexOf("\n");
+  let head = null;
+  try {
+    head = JSON.parse(headEnd < 0 ? text : text.slice(0, headEnd));
+  } catch {
+    return unreadable("the cache file does not start with a valid header");
+  }
+  if (!head || typeof head !== "object" || head.format !== FORMAT)
+    return unreadable("the cache file is not a stereogate index cache");
+  const was = head.settings;
+  if (head.formatVersion !== FORMAT_VERSION || !was || was.version !== settings.version || was.axisOrthoMin !== settings.axisOrthoMin)
+    return {
+      status: "stale",
+      entries: [],
+      reason: "the cache was made by another stereogate version or with other settings"
+    };
+  const entries = [];
+  let lines2 = 0;
+  for (let at2 = headEnd + 1; at2 > 0 && at2 < text.length; ) {
+    const end = text.indexOf("\n", at2);
+    if (end < 0) break;
+    if (text.startsWith(END, at2)) {
+      if (Number(text.slice(at2 + END.length, end)) === lines2 && end + 1 === text.length)
+        return { status: "used", entries };
+      break;
+    }
+    lines2++;
+    const e = entryOf2(text, at2, end);
+    if (e) entries.push(e);
+    at2 = end + 1;
+  }
+  return unreadable("the cache file is incomplete (no end line with its count of entries)");
+}
+function writeIndexCache(path, settings, entries) {
+  const tmp = `${path}.${process.pid}.tmp`;
+  try {
+    mkdirSync(dirname2(path), { recursive: true });
+    const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
+    const lines2 = entries.map(lineOf2);
+    writeFileSync(tmp, `${head}
+${lines2.join("")}${END}${lines2.length}
+`);
+    renameSync(tmp, path);
+    return null;
+  } catch (e) {
+    rmSync(tmp, { force: true });
+    return e.message;
+  }
+}
+function escape2(s) {
+  return /[\t\n\r\\]/.test(s) ? s.replace(/[\t\n\r\\]/g, (c) => c === "	" ? "\\t" : c === "\n" ? "\\n" : c === "\r" ? "\\r" : "\\\\") : s;
+}
+function unescape(s) {
+  if (!s.includes("\\")) return s;
+  return s.replace(/\\(.)/g, (_, c) => c === "t" ? "	" : c === "n" ? "\n" : c === "r" ? "\r" : c);
+}
+function lineOf2(e) {
+  if (e.line !== null) return e.line;
+  const row = e.keyed ? entryRow(e) : null;
+  const cols = [
+    escape2(e.file),
+    e.blob,
+    e.valid ? "1" : "0",
+    row === null ? "0" : "1",
+    optional(e.heavy),
+    optional(e.id),
+    e.idLine === null ? "" : String(e.idLine),
+    e.molfiles.length === 0 ? "" : JSON.stringify(e.molfiles),
+    row === null ? "" : JSON.stringify(restOf(row))
+  ];
+  return `${cols.join("	")}
+`;
+}
+function entryOf2(text, from, to) {
+  const cols = [];
+  for (let at2 = from; cols.length < COLUMNS; ) {
+    const tab = text.indexOf("	", at2);
+    const stop = tab < 0 || tab > to ? to : tab;
+    cols.push(text.slice(at2, stop));
+    if (stop === to) break;
+    at2 = stop + 1;
+  }
+  if (cols.length !== COLUMNS) return null;
+  const [file, blob, valid, keyed2, heavy, id, idLine, molfiles, rest] = cols;
+  if (file === "" || blob.length !== 40 || valid !== "0" && valid !== "1") return null;
+  if (keyed2 === "1" !== (rest !== "") || keyed2 !== "0" && keyed2 !== "1") return null;
+  if (heavy !== "" && heavy[0] !== "=" || id !== "" && id[0] !== "=") return null;
+  const line2 = idLine === "" ? null : Number(idLine);
+  if (line2 !== null && !(Number.isInteger(line2) && line2 > 0)) return null;
+  const mols = molfiles === "" ? [] : molfilesOf(molfiles);
+  if (mols === null) return null;
+  return {
+    file: unescape(file),
+    blob,
+    molfiles: mols,
+    valid: valid === "1",
+    heavy: heavy === "" ? null : unescape(heavy.slice(1)),
+    keyed: keyed2 === "1",
+    id: id === "" ? null : unescape(id.slice(1)),
+    idLine: line2,
+    row: null,
+    rest: rest === "" ? null : rest,
+    line: text.slice(from, to + 1)
+  };
+}
+function molfilesOf(text) {
+  let raw2;
+  try {
+    raw2 = JSON.parse(text);
+  } catch {
+    return null;
+  }
+  return Array.isArray(raw2) && raw2.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])) ? raw2 : null;
+}
+var FORMAT, FORMAT_VERSION, END, optional, COLUMNS;
+var init_index_cache = __esm({
+  "src/registry/index-cache.ts"() {
+    "use strict";
+    init_index_cache_shape();
+    FORMAT = "stereogate registry index cache";
+    FORMAT_VERSION = 4;
+    END = "end	";
+    optional = (s) => s === null ? "" : `=${escape2(s)}`;
+    COLUMNS = 9;
   }
 });
 
@@ -53105,8 +53476,8 @@ async function* mapOrdered(items, opts) {
         yield value;
       }
       if (inputDone && nextOut >= nextIndex) break;
-      await new Promise((resolve6) => {
-        wake = resolve6;
+      await new Promise((resolve7) => {
+        wake = resolve7;
         if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
       });
     }
@@ -53135,170 +53506,6 @@ var init_pool = __esm({
   "src/bulk/pool.ts"() {
     "use strict";
     STARTUP_LIMIT_MS = 12e4;
-  }
-});
-
-// src/registry/types.ts
-var STEREO_FORMS, ORIGIN_CONTROLS;
-var init_types2 = __esm({
-  "src/registry/types.ts"() {
-    "use strict";
-    STEREO_FORMS = [
-      "achiral",
-      "meso",
-      "single-enantiomer",
-      "enantioenriched",
-      "racemate",
-      "single-diastereomer",
-      "diastereomer-mixture",
-      "unknown"
-    ];
-    ORIGIN_CONTROLS = [
-      "none",
-      "chiral-catalyst",
-      "chiral-reagent",
-      "chiral-auxiliary",
-      "biocatalyst",
-      "resolution",
-      "chiral-separation",
-      "enrichment",
-      "unknown"
-    ];
-  }
-});
-
-// src/registry/index-cache.ts
-import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
-import { dirname as dirname2 } from "node:path";
-function readIndexCache(path, settings) {
-  let text;
-  try {
-    text = readFileSync2(path, "utf8");
-  } catch {
-    return { status: "missing", entries: [], reason: "no cache file yet" };
-  }
-  let value;
-  try {
-    value = JSON.parse(text);
-  } catch {
-    return { status: "unreadable", entries: [], reason: "the cache file is not valid JSON" };
-  }
-  const top = value;
-  if (!top || typeof top !== "object" || top.format !== FORMAT || !Array.isArray(top.entries))
-    return { status: "unreadable", entries: [], reason: "the cache file is not a stereogate index cache" };
-  const was = top.settings;
-  if (top.formatVersion !== FORMAT_VERSION || !was || was.version !== settings.version || was.axisOrthoMin !== settings.axisOrthoMin)
-    return {
-      status: "stale",
-      entries: [],
-      reason: "the cache was made by another stereogate version or with other settings"
-    };
-  const entries = [];
-  for (const raw2 of top.entries) {
-    const e = entryOf2(raw2);
-    if (e) entries.push(e);
-  }
-  return { status: "used", entries };
-}
-function writeIndexCache(path, settings, entries) {
-  const tmp = `${path}.${process.pid}.tmp`;
-  try {
-    mkdirSync(dirname2(path), { recursive: true });
-    const stored = entries.map(storedOf);
-    writeFileSync(
-      tmp,
-      `{"format":${JSON.stringify(FORMAT)},"formatVersion":${FORMAT_VERSION},"settings":${JSON.stringify(settings)},"entries":[
-${stored.map((s) => JSON.stringify(s)).join(",\n")}
-]}
-`
-    );
-    renameSync(tmp, path);
-    return null;
-  } catch (e) {
-    rmSync(tmp, { force: true });
-    return e.message;
-  }
-}
-function storedOf(e) {
-  const r = e.row;
-  return [
-    e.file,
-    e.blob,
-    e.molfiles,
-    e.valid ? 1 : 0,
-    e.heavy,
-    e.keyed ? 1 : 0,
-    r.id,
-    r.name,
-    r.form,
-    r.rotation,
-    r.keys,
-    [r.lines.id, r.lines.structure, r.lines.rotation],
-    r.waivers
-  ];
-}
-function isRotation(v) {
-  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
-  const r = v;
-  return typeof r.value === "number" && Number.isFinite(r.value) && isOptNumber(r.wavelength_nm) && isOptNumber(r.temperature_c) && isOptNumber(r.concentration) && (r.solvent === void 0 || isString(r.solvent));
-}
-function isWaiver(v) {
-  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
-  const w = v;
-  return isString(w.check) && Number.isInteger(w.index) && w.index >= 0 && isOptString(w.message_id) && isOptString(w.other_record) && isOptString(w.reason) && isOptString(w.approved_by);
-}
-function isKeys(v) {
-  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
-  const k = v;
-  const text = k.text;
-  return isString(k.constitution) && (k.kind === "as-drawn" || k.kind === "racemic" || k.kind === "relative") && (k.stereo === null || isString(k.stereo)) && (k.mirror === null || isString(k.mirror)) && k.stereo === null === (k.mirror === null) && (k.chiral === null || typeof k.chiral === "boolean") && typeof k.exact === "boolean" && (text === void 0 || !!text && typeof text === "object" && (text.format === "smiles" || text.format === "molfile") && isString(text.text));
-}
-function entryOf2(raw2) {
-  if (!Array.isArray(raw2) || raw2.length !== 13) return null;
-  const [file, blob, molfiles, valid, heavy, keyed2, id, name, form, rotation, keys, lines2, waivers] = raw2;
-  if (!isString(file) || file === "" || !isString(blob) || !/^[0-9a-f]{40}$/.test(blob)) return null;
-  if (!Array.isArray(molfiles) || !molfiles.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])))
-    return null;
-  if (valid !== 0 && valid !== 1 || id !== null && !isString(id) || name !== null && !isString(name))
-    return null;
-  if (heavy !== null && !isString(heavy) || keyed2 !== 0 && keyed2 !== 1 || keyed2 === 0 && keys !== null)
-    return null;
-  if (!STEREO_FORMS.includes(form)) return null;
-  if (rotation !== null && !isRotation(rotation)) return null;
-  if (keys !== null && !isKeys(keys)) return null;
-  if (!Array.isArray(lines2) || lines2.length !== 3 || !lines2.every(isLine)) return null;
-  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
-  const [idLine, structureLine, rotationLine] = lines2;
-  return {
-    file,
-    blob,
-    molfiles,
-    valid: valid === 1,
-    heavy,
-    keyed: keyed2 === 1,
-    row: {
-      id,
-      file,
-      name,
-      form,
-      rotation,
-      keys,
-      lines: { id: idLine, structure: structureLine, rotation: rotationLine },
-      waivers
-    }
-  };
-}
-var FORMAT, FORMAT_VERSION, isString, isLine, isOptNumber, isOptString;
-var init_index_cache = __esm({
-  "src/registry/index-cache.ts"() {
-    "use strict";
-    init_types2();
-    FORMAT = "stereogate registry index cache";
-    FORMAT_VERSION = 3;
-    isString = (v) => typeof v === "string";
-    isLine = (v) => v === null || Number.isInteger(v) && v > 0;
-    isOptNumber = (v) => v === void 0 || typeof v === "number" && Number.isFinite(v);
-    isOptString = (v) => v === void 0 || isString(v);
   }
 });
 
@@ -53344,7 +53551,7 @@ var init_index_keys = __esm({
 
 // src/audit/index-build.ts
 import { availableParallelism } from "node:os";
-import { join as join4 } from "node:path";
+import { join as join5 } from "node:path";
 var MIN_FILES_FOR_WORKERS, RecordIndex;
 var init_index_build = __esm({
   "src/audit/index-build.ts"() {
@@ -53385,7 +53592,7 @@ var init_index_build = __esm({
       async fill() {
         const gitIds = this.opts.gitIds ?? gitBlobIds(this.opts.realRoot, this.opts.recordDirs);
         this.cache = this.useCache ? readIndexCache(this.opts.cachePath, this.settings) : null;
-        this.blobs = new BlobIds(await gitIds, (rel) => join4(this.opts.realRoot, rel));
+        this.blobs = new BlobIds(await gitIds, (rel) => join5(this.opts.realRoot, rel));
         let cached = this.cache?.entries ?? [];
         if (cached.some((e, i) => i > 0 && cached[i - 1].file >= e.file))
           cached = [...cached].sort((x, y) => x.file < y.file ? -1 : x.file > y.file ? 1 : 0);
@@ -53408,8 +53615,9 @@ var init_index_build = __esm({
           if (same && same.blob === blob && current(same)) this.entries[i] = same;
           else {
             const moved = movedFrom(blob);
-            if (!moved) return toRead.push(i);
-            this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
+            const row = moved && entryRow(moved);
+            if (!moved || moved.keyed && !row) return toRead.push(i);
+            this.entries[i] = { ...moved, file, row: row ? { ...row, file } : null, line: null };
           }
           this.reused++;
         });
@@ -53419,7 +53627,7 @@ var init_index_build = __esm({
       async keyFully(wanted) {
         const todo = [];
         this.entries.forEach((e, i) => {
-          if (!e.keyed && wanted(e)) todo.push(i);
+          if (wanted(e) && (!e.keyed || entryRow(e) === null)) todo.push(i);
         });
         await this.readFiles(todo, true);
       }
@@ -53436,7 +53644,7 @@ var init_index_build = __esm({
           axisOrthoMin: opts.axisOrthoMin
         };
         const results = mapOrdered(
-          at2.map((i) => ({ abs: join4(opts.realRoot, opts.files[i]), full })),
+          at2.map((i) => ({ abs: join5(opts.realRoot, opts.files[i]), full })),
           {
             workers,
             script: new URL(`./index-worker${ext}`, import.meta.url),
@@ -53462,7 +53670,11 @@ var init_index_build = __esm({
             valid: result2.valid,
             heavy: result2.heavy,
             keyed: result2.keyed,
-            row: result2.row
+            id: result2.row.id,
+            idLine: result2.row.lines.id,
+            row: result2.row,
+            rest: null,
+            line: null
           };
           this.unkept.delete(this.entries[i]);
           if (!result2.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
@@ -53498,12 +53710,19 @@ var review_against_index_exports = {};
 __export(review_against_index_exports, {
   reviewAgainstIndex: () => reviewAgainstIndex
 });
+import { join as join6 } from "node:path";
 async function reviewAgainstIndex(o) {
-  const gitIds = gitBlobIds(o.realRoot, o.config.recordDirs);
-  const found = findRecordFiles(o.realRoot, o.config.recordDirs);
-  if (found.missingDirs.length > 0) return null;
+  const listed = await gitRecordFiles(o.realRoot, o.config.recordDirs);
+  const gitIds = Promise.resolve(listed.ids);
+  let found = listed.found;
+  if (found === null) {
+    const walked = findRecordFiles(o.realRoot, o.config.recordDirs);
+    if (walked.missingDirs.length > 0) return null;
+    found = { files: walked.files.map((abs) => relativeTo(o.realRoot, abs)), refused: walked.refused };
+  }
   const refused = found.refused.map((r) => ({ file: r.file, at: null, refused: r.message }));
-  const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
+  const files = found.files;
+  const absOf = (at2) => join6(o.realRoot, files[at2]);
   const index = await RecordIndex.open({
     realRoot: o.realRoot,
     files,
@@ -53537,30 +53756,34 @@ async function reviewAgainstIndex(o) {
     if (!sel.selected.has(s)) continue;
     audited.set(
       s.file,
-      s.refused !== null ? refusedRecord({ file: s.file, message: s.refused }) : loadRecordFile(o.realRoot, found.files[s.at])
+      s.refused !== null ? refusedRecord({ file: s.file, message: s.refused }) : loadRecordFile(o.realRoot, absOf(s.at))
     );
   }
   const toAudit = [...audited.values()];
   const structures = new StructureCache(o.engine);
   const wanted = partnerFormulas(toAudit, structures, o.budget);
-  await index.keyFully(
-    (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy))
-  );
+  const partner = (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy));
+  await index.keyFully(partner);
   o.log?.(index.save());
   markDuplicateIdsAgainst(toAudit, entries, audited);
-  const view = indexView(entries, audited, structures, (at2) => loadRecordFile(o.realRoot, found.files[at2]));
+  const view = indexView(entries, audited, structures, (at2) => loadRecordFile(o.realRoot, absOf(at2)));
   const result2 = auditRecords(toAudit, {
     checks: o.checks,
     config: o.config,
     engine: o.engine,
     budget: o.budget,
     view,
-    // a light row has no keys: its formula differs from every record under review, so no lookup reaches it
+    // a record that is no partner stands as a row without keys: its formula differs from every record under
+    // review, so no lookup reaches it (its row is neither parsed from the cache nor read)
     otherRows: function* () {
       for (const s of stubs) {
         if (audited.has(s.file)) continue;
-        if (s.at !== null) yield entries[s.at].row;
-        else yield indexRow(refusedRecord({ file: s.file, message: s.refused }), NO_STRUCTURE2, 0);
+        if (s.at === null)
+          yield indexRow(refusedRecord({ file: s.file, message: s.refused }), NO_STRUCTURE2, 0);
+        else {
+          const e = entries[s.at];
+          yield partner(e) && entryRow(e) || NO_PARTNER;
+        }
       }
     }
   });
@@ -53591,14 +53814,14 @@ function markDuplicateIdsAgainst(toAudit, entries, audited) {
       if (own2.id !== null && ids.has(own2.id)) group.push(own2);
       continue;
     }
-    const { id, lines: lines2 } = e.row;
+    const { id, idLine } = e;
     if (id === null || !ids.has(id)) continue;
     group.push({
       file: e.file,
       id,
       record: null,
       positions: {
-        get: (p) => p === "id" && lines2.id !== null ? { line: lines2.id, column: 1 } : void 0
+        get: (p) => p === "id" && idLine !== null ? { line: idLine, column: 1 } : void 0
       },
       problems: [],
       origin: { kind: "file" }
@@ -53607,10 +53830,17 @@ function markDuplicateIdsAgainst(toAudit, entries, audited) {
   markDuplicateIds(group);
 }
 function indexView(entries, audited, cache2, load) {
-  const firstById = /* @__PURE__ */ new Map();
-  entries.forEach((e, at2) => {
-    if (e.valid && e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, at2);
-  });
+  let firstById = null;
+  const firstAt = (id) => {
+    if (firstById === null) {
+      const map = /* @__PURE__ */ new Map();
+      entries.forEach((e, at2) => {
+        if (e.valid && e.id !== null && !map.has(e.id)) map.set(e.id, at2);
+      });
+      firstById = map;
+    }
+    return firstById.get(id);
+  };
   const entryAt = (at2) => {
     const file = entries[at2].file;
     return entryOf(audited.get(file) ?? load(at2), cache2, audited.has(file));
@@ -53624,21 +53854,22 @@ function indexView(entries, audited, cache2, load) {
     },
     byId(id) {
       if (!seen.has(id)) {
-        const at2 = firstById.get(id);
+        const at2 = firstAt(id);
         seen.set(id, at2 === void 0 ? void 0 : entryAt(at2) ?? void 0);
       }
       return seen.get(id);
     },
-    ids: () => entries.flatMap((e) => e.valid && e.row.id !== null ? [e.row.id] : [])
+    ids: () => entries.flatMap((e) => e.valid && e.id !== null ? [e.id] : [])
   };
 }
-var NO_STRUCTURE2;
+var NO_STRUCTURE2, NO_PARTNER;
 var init_review_against_index = __esm({
   "src/audit/review-against-index.ts"() {
     "use strict";
     init_budget();
     init_files();
-    init_blob_ids();
+    init_git_files();
+    init_index_cache();
     init_load();
     init_engine();
     init_index_build();
@@ -53648,12 +53879,22 @@ var init_review_against_index = __esm({
     init_structures();
     init_view();
     NO_STRUCTURE2 = { structure: null, facts: null, error: null };
+    NO_PARTNER = {
+      id: null,
+      file: "",
+      name: null,
+      form: "unknown",
+      rotation: null,
+      keys: null,
+      lines: { id: null, structure: null, rotation: null },
+      waivers: []
+    };
   }
 });
 
 // src/audit/run.ts
-import { existsSync as existsSync2, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
-import { resolve as resolve3 } from "node:path";
+import { existsSync as existsSync2, realpathSync as realpathSync4, statSync as statSync3 } from "node:fs";
+import { resolve as resolve4 } from "node:path";
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache2 = new StructureCache(options.engine);
@@ -53707,7 +53948,13 @@ function auditRecords(records, options) {
       const audited2 = new Set(records);
       phase.reviewing(rows);
       let seq = records.length;
-      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      if (options.otherRows)
+        for (const row of options.otherRows()) {
+          if (row.keys === null) {
+            seq++;
+            phase.countKeyless();
+          } else phase.file({ ...row, seq: ++seq });
+        }
       else for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
       for (const row of rows) phase.fileUnderReview(row);
     }
@@ -53836,11 +54083,11 @@ function summarize(records) {
   return s;
 }
 async function openRegistry(options) {
-  const rootAbs = resolve3(options.root);
-  if (!existsSync2(rootAbs) || !statSync2(rootAbs).isDirectory()) {
+  const rootAbs = resolve4(options.root);
+  if (!existsSync2(rootAbs) || !statSync3(rootAbs).isDirectory()) {
     throw new ConfigError(`registry folder ${options.root} does not exist`);
   }
-  const root = realpathSync3(rootAbs);
+  const root = realpathSync4(rootAbs);
   const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
   const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
@@ -54788,7 +55035,7 @@ var require_cli_progress = __commonJS({
 });
 
 // src/cli/main.ts
-import { existsSync as existsSync5, readFileSync as readFileSync4, statSync as statSync4 } from "node:fs";
+import { existsSync as existsSync5, readFileSync as readFileSync4, statSync as statSync5 } from "node:fs";
 import { pathToFileURL } from "node:url";
 
 // src/cli/commands/compare.ts
@@ -55108,7 +55355,7 @@ ${CAUTION}`
 init_config();
 init_run();
 import { existsSync as existsSync4, writeFileSync as writeFileSync3 } from "node:fs";
-import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve5, sep as sep3 } from "node:path";
+import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve6, sep as sep3 } from "node:path";
 
 // src/report/json.ts
 function finding2(f) {
@@ -57050,7 +57297,7 @@ import {
   writeSync
 } from "node:fs";
 import { tmpdir } from "node:os";
-import { join as join5 } from "node:path";
+import { join as join7 } from "node:path";
 import { StringDecoder } from "node:string_decoder";
 function drainWrite(stream, text) {
   return stream.write(text) ? Promise.resolve() : new Promise((res) => stream.once("drain", () => res()));
@@ -57093,14 +57340,14 @@ function lineSink(out, piece = 1 << 16) {
   };
 }
 var SpillGroups = class {
-  dir = mkdtempSync(join5(tmpdir(), "stereogate-report-"));
+  dir = mkdtempSync(join7(tmpdir(), "stereogate-report-"));
   fds;
   held;
   /** Pieces added to each group. */
   counts;
   removed = false;
   constructor(groups) {
-    this.fds = Array.from({ length: groups }, (_, i) => openSync2(join5(this.dir, `${i}.txt`), "w+"));
+    this.fds = Array.from({ length: groups }, (_, i) => openSync2(join7(this.dir, `${i}.txt`), "w+"));
     this.held = Array.from({ length: groups }, () => "");
     this.counts = Array.from({ length: groups }, () => 0);
   }
@@ -57823,8 +58070,8 @@ function readKept(e) {
 init_findings();
 
 // src/cli/output-path.ts
-import { existsSync as existsSync3, statSync as statSync3 } from "node:fs";
-import { dirname as dirname3, resolve as resolve4 } from "node:path";
+import { existsSync as existsSync3, statSync as statSync4 } from "node:fs";
+import { dirname as dirname3, resolve as resolve5 } from "node:path";
 function writeFailureReason(e) {
   const code = e?.code;
   if (code === "ENOENT") return "its folder does not exist";
@@ -57837,10 +58084,10 @@ function writeFailure(path, e) {
   return `cannot write ${path}: ${writeFailureReason(e)}`;
 }
 function checkWritable(path, what) {
-  const dir = dirname3(resolve4(path));
-  if (!existsSync3(dir) || !statSync3(dir).isDirectory())
+  const dir = dirname3(resolve5(path));
+  if (!existsSync3(dir) || !statSync4(dir).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname3(path)} does not exist`);
-  if (existsSync3(path) && statSync3(path).isDirectory())
+  if (existsSync3(path) && statSync4(path).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: it is a folder`);
 }
 
@@ -58170,7 +58417,7 @@ init_run();
 init_structures();
 init_view();
 init_budget();
-import { join as join6 } from "node:path";
+import { join as join8 } from "node:path";
 init_load();
 init_positions();
 async function makeFolderContext(setup, checks) {
@@ -58182,7 +58429,7 @@ async function makeFolderContext(setup, checks) {
 }
 function loadItem2(item, lookup) {
   if (item.refused !== void 0) return refusedRecord2(item.file, item.refused);
-  const loaded = loadRecordFile(lookup.root, join6(lookup.root, item.file));
+  const loaded = loadRecordFile(lookup.root, join8(lookup.root, item.file));
   const duplicate = lookup.duplicates.get(item.file);
   if (duplicate) loaded.problems.push({ ...duplicate });
   return loaded;
@@ -58340,7 +58587,7 @@ init_load();
 init_files();
 init_parse();
 init_positions();
-import { join as join7 } from "node:path";
+import { join as join9 } from "node:path";
 function listRecordFiles(root, recordDirs) {
   const found = findRecordFiles(root, recordDirs);
   const files = found.files.map((abs) => ({ file: relativeTo(root, abs) }));
@@ -58354,7 +58601,7 @@ function readRecordFolder(root, list) {
   const byId2 = /* @__PURE__ */ new Map();
   const seen = [];
   for (const f of files) {
-    const read = f.refused === void 0 ? readTextFile(join7(root, f.file)) : null;
+    const read = f.refused === void 0 ? readTextFile(join9(root, f.file)) : null;
     const parsed = read?.ok ? parseRecordText(read.text) : null;
     const id = parsed?.id ?? null;
     itemIds.push(id);
@@ -58591,13 +58838,13 @@ function hasInternalErrors(result2) {
   return result2.records.some((r) => r.findings.some(isInternalError));
 }
 function toRootPaths(paths, root) {
-  const rootAbs = resolve5(root);
+  const rootAbs = resolve6(root);
   return paths.map((p) => {
-    const abs = resolve5(p);
+    const abs = resolve6(p);
     if (!existsSync4(abs)) return p;
     const rel = relative3(rootAbs, abs);
     if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
-      if (existsSync4(resolve5(rootAbs, p))) return p;
+      if (existsSync4(resolve6(rootAbs, p))) return p;
       throw new UsageError(`${p} is outside the registry root ${root}`);
     }
     return rel.split(sep3).join("/") || ".";
@@ -58677,7 +58924,7 @@ function makeAuditCommand(deps = {}) {
           checks: deps.checks,
           engine: deps.engine,
           budget,
-          ...indexCache === void 0 ? {} : { indexCache: resolve5(indexCache), log: (l) => io.err(`stereogate: ${l}`) }
+          ...indexCache === void 0 ? {} : { indexCache: resolve6(indexCache), log: (l) => io.err(`stereogate: ${l}`) }
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);
@@ -58746,7 +58993,7 @@ function respawnForBulk(argv) {
   if (!script) return Promise.resolve(null);
   const args = respawnArgs(argv, process.execArgv, script, process.env, availableParallelism4());
   if (!args) return Promise.resolve(null);
-  return new Promise((resolve6) => {
+  return new Promise((resolve7) => {
     const child = spawn(process.execPath, args, {
       stdio: "inherit",
       env: { ...process.env, [NO_RESPAWN_ENV]: "1" }
@@ -58756,11 +59003,11 @@ function respawnForBulk(argv) {
     const onTerm = forward("SIGTERM");
     process.on("SIGINT", onInt);
     process.on("SIGTERM", onTerm);
-    child.on("error", () => resolve6(null));
+    child.on("error", () => resolve7(null));
     child.on("exit", (code, signal) => {
       process.off("SIGINT", onInt);
       process.off("SIGTERM", onTerm);
-      resolve6(code ?? (signal ? 128 + (signal === "SIGINT" ? 2 : 15) : 1));
+      resolve7(code ?? (signal ? 128 + (signal === "SIGINT" ? 2 : 15) : 1));
     });
   });
 }
@@ -58772,7 +59019,7 @@ var nodeIo = {
   err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}
 `),
   readFile: (p) => readFileSync4(p, "utf8"),
-  isFile: (p) => p.length < 4096 && existsSync5(p) && statSync4(p).isFile(),
+  isFile: (p) => p.length < 4096 && existsSync5(p) && statSync5(p).isFile(),
   readStdin: () => readFileSync4(0, "utf8")
 };
 function overview() {

@@ -6192,7 +6192,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
     }
   }
   if (!bracket) return sym;

@@ -2173,9 +2173,9 @@ var require_dispatcher_base = __commonJS({
       }
       close(callback) {
         if (callback === void 0) {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             this.close((err2, data) => {
-              return err2 ? reject(err2) : resolve5(data);
+              return err2 ? reject(err2) : resolve6(data);
             });
           });
         }
@@ -2213,12 +2213,12 @@ var require_dispatcher_base = __commonJS({
           err2 = null;
         }
         if (callback === void 0) {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             this.destroy(err2, (err3, data) => {
               return err3 ? (
                 /* istanbul ignore next: should never error */
                 reject(err3)
-              ) : resolve5(data);
+              ) : resolve6(data);
             });
           });
         }
@@ -4485,8 +4485,8 @@ var require_util2 = __commonJS({
     function createDeferredPromise() {
       let res;
       let rej;
-      const promise = new Promise((resolve5, reject) => {
-        res = resolve5;
+      const promise = new Promise((resolve6, reject) => {
+        res = resolve6;
         rej = reject;
       });
       return { promise, resolve: res, reject: rej };
@@ -5513,7 +5513,7 @@ var require_body = __commonJS({
         const boundary = `----formdata-undici-0${`${random(1e11)}`.padStart(11, "0")}`;
         const prefix = `--${boundary}\r
 Content-Disposition: form-data`;
-        const escape2 = (str) => str.replace(/\n/g, "%0A").replace(/\r/g, "%0D").replace(/"/g, "%22");
+        const escape3 = (str) => str.replace(/\n/g, "%0A").replace(/\r/g, "%0D").replace(/"/g, "%22");
         const normalizeLinefeeds = (value) => value.replace(/\r?\n|\r/g, "\r\n");
         const blobParts = [];
         const rn = new Uint8Array([13, 10]);
@@ -5521,14 +5521,14 @@ Content-Disposition: form-data`;
         let hasUnknownSizeValue = false;
         for (const [name, value] of object) {
           if (typeof value === "string") {
-            const chunk2 = textEncoder.encode(prefix + `; name="${escape2(normalizeLinefeeds(name))}"\r
+            const chunk2 = textEncoder.encode(prefix + `; name="${escape3(normalizeLinefeeds(name))}"\r
 \r
 ${normalizeLinefeeds(value)}\r
 `);
             blobParts.push(chunk2);
             length += chunk2.byteLength;
           } else {
-            const chunk2 = textEncoder.encode(`${prefix}; name="${escape2(normalizeLinefeeds(name))}"` + (value.name ? `; filename="${escape2(value.name)}"` : "") + `\r
+            const chunk2 = textEncoder.encode(`${prefix}; name="${escape3(normalizeLinefeeds(name))}"` + (value.name ? `; filename="${escape3(value.name)}"` : "") + `\r
 Content-Type: ${value.type || "application/octet-stream"}\r
 \r
 `);
@@ -6737,12 +6737,12 @@ upgrade: ${upgrade}\r
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve5, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve5;
+          callback = resolve6;
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
@@ -7412,12 +7412,12 @@ var require_client_h2 = __commonJS({
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve5, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve5;
+          callback = resolve6;
         }
       });
       h2stream.on("close", onDrain).on("drain", onDrain);
@@ -7896,16 +7896,16 @@ var require_client = __commonJS({
         return this[kNeedDrain] < 2;
       }
       async [kClose]() {
-        return new Promise((resolve5) => {
+        return new Promise((resolve6) => {
           if (this[kSize]) {
-            this[kClosedResolve] = resolve5;
+            this[kClosedResolve] = resolve6;
           } else {
-            resolve5(null);
+            resolve6(null);
           }
         });
       }
       async [kDestroy](err2) {
-        return new Promise((resolve5) => {
+        return new Promise((resolve6) => {
           const requests = this[kQueue].splice(this[kPendingIdx]);
           for (let i = 0; i < requests.length; i++) {
             const request = requests[i];
@@ -7916,7 +7916,7 @@ var require_client = __commonJS({
               this[kClosedResolve]();
               this[kClosedResolve] = null;
             }
-            resolve5(null);
+            resolve6(null);
           };
           if (this[kHTTPContext]) {
             this[kHTTPContext].destroy(err2, callback);
@@ -7967,7 +7967,7 @@ var require_client = __commonJS({
         });
       }
       try {
-        const socket = await new Promise((resolve5, reject) => {
+        const socket = await new Promise((resolve6, reject) => {
           client[kConnector]({
             host,
             hostname,
@@ -7979,7 +7979,7 @@ var require_client = __commonJS({
             if (err2) {
               reject(err2);
             } else {
-              resolve5(socket2);
+              resolve6(socket2);
             }
           });
         });
@@ -8315,8 +8315,8 @@ var require_pool_base = __commonJS({
         if (this[kQueue].isEmpty()) {
           await Promise.all(this[kClients].map((c) => c.close()));
         } else {
-          await new Promise((resolve5) => {
-            this[kClosedResolve] = resolve5;
+          await new Promise((resolve6) => {
+            this[kClosedResolve] = resolve6;
           });
         }
       }
@@ -9585,7 +9585,7 @@ var require_readable = __commonJS({
         if (this._readableState.closeEmitted) {
           return null;
         }
-        return await new Promise((resolve5, reject) => {
+        return await new Promise((resolve6, reject) => {
           if (this[kContentLength] > limit) {
             this.destroy(new AbortError());
           }
@@ -9598,7 +9598,7 @@ var require_readable = __commonJS({
             if (signal?.aborted) {
               reject(signal.reason ?? new AbortError());
             } else {
-              resolve5(null);
+              resolve6(null);
             }
           }).on("error", noop).on("data", function(chunk) {
             limit -= chunk.length;
@@ -9617,7 +9617,7 @@ var require_readable = __commonJS({
     }
     async function consume(stream, type) {
       assert(!stream[kConsume]);
-      return new Promise((resolve5, reject) => {
+      return new Promise((resolve6, reject) => {
         if (isUnusable(stream)) {
           const rState = stream._readableState;
           if (rState.destroyed && rState.closeEmitted === false) {
@@ -9634,7 +9634,7 @@ var require_readable = __commonJS({
             stream[kConsume] = {
               type,
               stream,
-              resolve: resolve5,
+              resolve: resolve6,
               reject,
               length: 0,
               body: []
@@ -9704,18 +9704,18 @@ var require_readable = __commonJS({
       return buffer;
     }
     function consumeEnd(consume2) {
-      const { type, body, resolve: resolve5, stream, length } = consume2;
+      const { type, body, resolve: resolve6, stream, length } = consume2;
       try {
         if (type === "text") {
-          resolve5(chunksDecode(body, length));
+          resolve6(chunksDecode(body, length));
         } else if (type === "json") {
-          resolve5(JSON.parse(chunksDecode(body, length)));
+          resolve6(JSON.parse(chunksDecode(body, length)));
         } else if (type === "arrayBuffer") {
-          resolve5(chunksConcat(body, length).buffer);
+          resolve6(chunksConcat(body, length).buffer);
         } else if (type === "blob") {
-          resolve5(new Blob(body, { type: stream[kContentType] }));
+          resolve6(new Blob(body, { type: stream[kContentType] }));
         } else if (type === "bytes") {
-          resolve5(chunksConcat(body, length));
+          resolve6(chunksConcat(body, length));
         }
         consumeFinish(consume2);
       } catch (err2) {
@@ -9972,9 +9972,9 @@ var require_api_request = __commonJS({
     };
     function request(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           request.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10197,9 +10197,9 @@ var require_api_stream = __commonJS({
     };
     function stream(opts, factory, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           stream.call(this, opts, factory, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10484,9 +10484,9 @@ var require_api_upgrade = __commonJS({
     };
     function upgrade(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           upgrade.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10578,9 +10578,9 @@ var require_api_connect = __commonJS({
     };
     function connect(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           connect.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -14443,7 +14443,7 @@ var require_fetch = __commonJS({
       function dispatch({ body }) {
         const url = requestCurrentURL(request);
         const agent = fetchParams.controller.dispatcher;
-        return new Promise((resolve5, reject) => agent.dispatch(
+        return new Promise((resolve6, reject) => agent.dispatch(
           {
             path: url.pathname + url.search,
             origin: url.origin,
@@ -14519,7 +14519,7 @@ var require_fetch = __commonJS({
               }
               this.body = new Readable({ read: resume });
               const onError = this.onError.bind(this);
-              resolve5({
+              resolve6({
                 status,
                 statusText,
                 headersList,
@@ -14562,7 +14562,7 @@ var require_fetch = __commonJS({
               for (let i = 0; i < rawHeaders.length; i += 2) {
                 headersList.append(bufferToLowerCasedHeaderName(rawHeaders[i]), rawHeaders[i + 1].toString("latin1"), true);
               }
-              resolve5({
+              resolve6({
                 status,
                 statusText: STATUS_CODES[status],
                 headersList,
@@ -18303,8 +18303,8 @@ var require_util8 = __commonJS({
       return true;
     }
     function delay(ms) {
-      return new Promise((resolve5) => {
-        setTimeout(resolve5, ms).unref();
+      return new Promise((resolve6) => {
+        setTimeout(resolve6, ms).unref();
       });
     }
     module.exports = {
@@ -29899,7 +29899,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve5.call(this, root, ref);
+      let _sch = resolve6.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -29926,7 +29926,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve5(root, ref) {
+    function resolve6(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -30790,7 +30790,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve5(baseURI, relativeURI, options) {
+    function resolve6(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -31181,7 +31181,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES: SCHEMES2,
       normalize: normalize2,
-      resolve: resolve5,
+      resolve: resolve6,
       resolveComponent,
       equal,
       serialize,
@@ -41485,7 +41485,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
     }
   }
   if (!bracket) return sym;
@@ -69313,6 +69313,10 @@ var init_registry_phase = __esm({
           return;
         this.index.add(row);
       }
+      /** Review mode: a record of the registry without keys (what `file` does with it: count it). */
+      countKeyless() {
+        this.registryRecords++;
+      }
       /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
       fileUnderReview(row) {
         this.registryRecords++;
@@ -71961,38 +71965,58 @@ function git(cwd, args) {
   return new Promise((done) => {
     execFile(
       "git",
-      args,
+      // pathspecs are folder names from the config, never patterns
+      ["--literal-pathspecs", ...args],
       { cwd, encoding: "utf8", maxBuffer: 1 << 30, env: { ...process.env, GIT_OPTIONAL_LOCKS: "0" } },
       (error2, stdout) => done(error2 ? null : stdout)
     );
   });
 }
-async function gitBlobIds(root, dirs) {
-  const ids = /* @__PURE__ */ new Map();
-  const pathspec = ["--", ...dirs.length > 0 ? dirs : ["."]];
-  const [staged, modified] = await Promise.all([
-    git(root, ["ls-files", "-s", "-v", "-z", ...pathspec]),
-    git(root, ["ls-files", "-m", "-z", ...pathspec])
-  ]);
-  if (staged === null || modified === null) return ids;
+function eachStaged(staged, modified, visit2) {
   const dirty = new Set(modified.split("\0"));
   for (let at2 = 0; at2 < staged.length; ) {
     const end = staged.indexOf("\0", at2);
     const stop = end < 0 ? staged.length : end;
     const plain = staged.startsWith("H 100644 ", at2) || staged.startsWith("H 100755 ", at2) ? staged.startsWith(" 0	", at2 + 49) : false;
+    const tab = staged.indexOf("	", at2);
     if (plain && stop > at2 + 52) {
       const path = staged.slice(at2 + 52, stop);
       const blob = staged.slice(at2 + 9, at2 + 49);
-      if (!dirty.has(path) && /^[0-9a-f]{40}$/.test(blob)) ids.set(path, blob);
-    }
+      visit2(path, !dirty.has(path) && isHex40(blob) ? blob : null);
+    } else if (tab >= 0 && tab < stop - 1) visit2(staged.slice(tab + 1, stop), null);
     at2 = stop + 1;
   }
+}
+function isHex40(s) {
+  if (s.length !== 40) return false;
+  for (let i = 0; i < 40; i++) {
+    const c = s.charCodeAt(i);
+    if (!(c >= 48 && c <= 57 || c >= 97 && c <= 102)) return false;
+  }
+  return true;
+}
+async function gitBlobIds(root, dirs) {
+  const pathspec = pathspecOf(dirs);
+  const [staged, modified] = await Promise.all([
+    git(root, [...STAGED_ARGS, ...pathspec]),
+    git(root, [...MODIFIED_ARGS, ...pathspec])
+  ]);
+  return staged === null || modified === null ? /* @__PURE__ */ new Map() : blobIdsFromListing(staged, modified);
+}
+function blobIdsFromListing(staged, modified) {
+  const ids = /* @__PURE__ */ new Map();
+  eachStaged(staged, modified, (path, blob) => {
+    if (blob !== null) ids.set(path, blob);
+  });
   return ids;
 }
-var BlobIds;
+var pathspecOf, STAGED_ARGS, MODIFIED_ARGS, BlobIds;
 var init_blob_ids = __esm({
   "src/registry/blob-ids.ts"() {
     "use strict";
+    pathspecOf = (dirs) => ["--", ...dirs.length > 0 ? dirs : ["."]];
+    STAGED_ARGS = ["ls-files", "-s", "-v", "-z"];
+    MODIFIED_ARGS = ["ls-files", "-m", "-z"];
     BlobIds = class {
       constructor(fromGit, absOf) {
         this.fromGit = fromGit;
@@ -72016,6 +72040,342 @@ var init_blob_ids = __esm({
         return this.hashed.size;
       }
     };
+  }
+});
+
+// src/registry/git-files.ts
+import { lstatSync as lstatSync2, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
+import { join as join4, resolve as resolve3 } from "node:path";
+async function gitRecordFiles(root, dirs) {
+  const pathspec = pathspecOf(dirs);
+  const [staged, modified, untracked] = await Promise.all([
+    git(root, [...STAGED_ARGS, ...pathspec]),
+    git(root, [...MODIFIED_ARGS, ...pathspec]),
+    git(root, ["ls-files", "-o", "-z", ...pathspec])
+  ]);
+  if (staged === null || modified === null || untracked === null) return { ids: /* @__PURE__ */ new Map(), found: null };
+  const prefixes = folderPrefixes(root, dirs);
+  if (prefixes === null) return { ids: blobIdsFromListing(staged, modified), found: null };
+  const named = (path) => {
+    let seen = "skipped";
+    for (const p of prefixes) {
+      if (p !== "" && !(path.startsWith(p) && path[p.length] === "/")) continue;
+      const rest = p === "" ? path : path.slice(p.length + 1);
+      if (hiddenBelow(rest)) continue;
+      if (RECORD_EXTENSIONS.test(rest)) return "record";
+      seen = "other";
+    }
+    return seen;
+  };
+  const files = [];
+  const refused2 = [];
+  let walk = false;
+  const look = (path) => {
+    const name = named(path);
+    if (name === "skipped") return;
+    if (depthOf(path) > MAX_DEPTH) {
+      walk = true;
+      return;
+    }
+    const abs = join4(root, path);
+    let st;
+    try {
+      st = lstatSync2(abs);
+    } catch {
+      return;
+    }
+    if (st.isDirectory()) walk = true;
+    else if (st.isFile()) {
+      if (name === "record") files.push(path);
+    } else if (st.isSymbolicLink()) {
+      let target;
+      try {
+        target = realpathSync3(abs);
+      } catch {
+        if (name === "record") refused2.push({ file: path, message: "is a broken link" });
+        return;
+      }
+      if (escapes(root, target)) {
+        if (name === "record")
+          refused2.push({ file: path, message: "is a link to a place outside the registry folder" });
+        return;
+      }
+      const to = statSync2(abs);
+      if (to.isDirectory()) walk = true;
+      else if (to.isFile() && name === "record") files.push(path);
+    }
+  };
+  const ids = /* @__PURE__ */ new Map();
+  eachStaged(staged, modified, (path, blob) => {
+    if (blob === null) return look(path);
+    ids.set(path, blob);
+    if (named(path) === "record") {
+      if (depthOf(path) > MAX_DEPTH) walk = true;
+      else files.push(path);
+    }
+  });
+  for (const path of untracked.split("\0")) {
+    if (path === "") continue;
+    if (path.endsWith("/")) walk = true;
+    else look(path);
+  }
+  if (walk) return { ids, found: null };
+  files.sort((a, b) => a < b ? -1 : a > b ? 1 : 0);
+  const unique = files.filter((f, i) => i === 0 || files[i - 1] !== f);
+  return { ids, found: { files: unique, refused: refused2 } };
+}
+function depthOf(path) {
+  let n = 0;
+  for (let at2 = path.indexOf("/"); at2 >= 0; at2 = path.indexOf("/", at2 + 1)) n++;
+  return n;
+}
+function hiddenBelow(rest) {
+  if (rest.startsWith(".") || rest.includes("/.")) return true;
+  return rest.includes("node_modules") && rest.split("/").includes("node_modules");
+}
+function folderPrefixes(root, dirs) {
+  const prefixes = [];
+  for (const d of dirs) {
+    const r = resolveInside(root, root, d);
+    if (!r.ok || r.abs !== resolve3(root, d)) return null;
+    try {
+      if (!statSync2(r.abs).isDirectory()) return null;
+    } catch {
+      return null;
+    }
+    prefixes.push(r.abs === root ? "" : relativeTo(root, r.abs));
+  }
+  return prefixes;
+}
+var MAX_DEPTH;
+var init_git_files = __esm({
+  "src/registry/git-files.ts"() {
+    "use strict";
+    init_blob_ids();
+    init_files();
+    MAX_DEPTH = 32;
+  }
+});
+
+// src/registry/types.ts
+var STEREO_FORMS;
+var init_types2 = __esm({
+  "src/registry/types.ts"() {
+    "use strict";
+    STEREO_FORMS = [
+      "achiral",
+      "meso",
+      "single-enantiomer",
+      "enantioenriched",
+      "racemate",
+      "single-diastereomer",
+      "diastereomer-mixture",
+      "unknown"
+    ];
+  }
+});
+
+// src/registry/index-cache-shape.ts
+function isRotation(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const r = v;
+  return typeof r.value === "number" && Number.isFinite(r.value) && isOptNumber(r.wavelength_nm) && isOptNumber(r.temperature_c) && isOptNumber(r.concentration) && (r.solvent === void 0 || isString(r.solvent));
+}
+function isWaiver(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const w = v;
+  return isString(w.check) && Number.isInteger(w.index) && w.index >= 0 && isOptString(w.message_id) && isOptString(w.other_record) && isOptString(w.reason) && isOptString(w.approved_by);
+}
+function isKeys(v) {
+  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
+  const k = v;
+  const text = k.text;
+  return isString(k.constitution) && (k.kind === "as-drawn" || k.kind === "racemic" || k.kind === "relative") && (k.stereo === null || isString(k.stereo)) && (k.mirror === null || isString(k.mirror)) && k.stereo === null === (k.mirror === null) && (k.chiral === null || typeof k.chiral === "boolean") && typeof k.exact === "boolean" && (text === void 0 || !!text && typeof text === "object" && (text.format === "smiles" || text.format === "molfile") && isString(text.text));
+}
+function restOf(r) {
+  return [r.name, r.form, r.rotation, r.keys, r.lines.structure, r.lines.rotation, r.waivers];
+}
+function rowFromRest(text, file, id, idLine) {
+  let raw2;
+  try {
+    raw2 = JSON.parse(text);
+  } catch {
+    return null;
+  }
+  if (!Array.isArray(raw2) || raw2.length !== 7) return null;
+  const [name, form, rotation, keys, structureLine, rotationLine, waivers] = raw2;
+  if (name !== null && !isString(name)) return null;
+  if (!STEREO_FORMS.includes(form)) return null;
+  if (rotation !== null && !isRotation(rotation)) return null;
+  if (keys !== null && !isKeys(keys)) return null;
+  if (!isLine(structureLine) || !isLine(rotationLine)) return null;
+  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
+  return {
+    id,
+    file,
+    name,
+    form,
+    rotation,
+    keys,
+    lines: { id: idLine, structure: structureLine, rotation: rotationLine },
+    waivers
+  };
+}
+var isString, isLine, isOptNumber, isOptString;
+var init_index_cache_shape = __esm({
+  "src/registry/index-cache-shape.ts"() {
+    "use strict";
+    init_types2();
+    isString = (v) => typeof v === "string";
+    isLine = (v) => v === null || Number.isInteger(v) && v > 0;
+    isOptNumber = (v) => v === void 0 || typeof v === "number" && Number.isFinite(v);
+    isOptString = (v) => v === void 0 || isString(v);
+  }
+});
+
+// src/registry/index-cache.ts
+import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
+import { dirname as dirname2 } from "node:path";
+function entryRow(e) {
+  if (e.row === null && e.rest !== null) {
+    e.row = rowFromRest(e.rest, e.file, e.id, e.idLine);
+    if (e.row === null) e.line = null;
+    e.rest = null;
+  }
+  return e.row;
+}
+function readIndexCache(path, settings) {
+  let text;
+  try {
+    text = readFileSync2(path, "utf8");
+  } catch {
+    return { status: "missing", entries: [], reason: "no cache file yet" };
+  }
+  const unreadable = (reason) => ({ status: "unreadable", entries: [], reason });
+  const headEnd = text.indexOf("\n");
+  let head = null;
+  try {
+    head = JSON.parse(headEnd < 0 ? text : text.slice(0, headEnd));
+  } catch {
+    return unreadable("the cache file does not start with a valid header");
+  }
+  if (!head || typeof head !== "object" || head.format !== FORMAT)
+    return unreadable("the cache file is not a stereogate index cache");
+  const was = head.settings;
+  if (head.formatVersion !== FORMAT_VERSION || !was || was.version !== settings.version || was.axisOrthoMin !== settings.axisOrthoMin)
+    return {
+      status: "stale",
+      entries: [],
+      reason: "the cache was made by another stereogate version or with other settings"
+    };
+  const entries = [];
+  let lines = 0;
+  for (let at2 = headEnd + 1; at2 > 0 && at2 < text.length; ) {
+    const end = text.indexOf("\n", at2);
+    if (end < 0) break;
+    if (text.startsWith(END, at2)) {
+      if (Number(text.slice(at2 + END.length, end)) === lines && end + 1 === text.length)
+        return { status: "used", entries };
+      break;
+    }
+    lines++;
+    const e = entryOf2(text, at2, end);
+    if (e) entries.push(e);
+    at2 = end + 1;
+  }
+  return unreadable("the cache file is incomplete (no end line with its count of entries)");
+}
+function writeIndexCache(path, settings, entries) {
+  const tmp = `${path}.${process.pid}.tmp`;
+  try {
+    mkdirSync(dirname2(path), { recursive: true });
+    const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
+    const lines = entries.map(lineOf2);
+    writeFileSync(tmp, `${head}
+${lines.join("")}${END}${lines.length}
+`);
+    renameSync(tmp, path);
+    return null;
+  } catch (e) {
+    rmSync(tmp, { force: true });
+    return e.message;
+  }
+}
+function escape2(s) {
+  return /[\t\n\r\\]/.test(s) ? s.replace(/[\t\n\r\\]/g, (c) => c === "	" ? "\\t" : c === "\n" ? "\\n" : c === "\r" ? "\\r" : "\\\\") : s;
+}
+function unescape(s) {
+  if (!s.includes("\\")) return s;
+  return s.replace(/\\(.)/g, (_, c) => c === "t" ? "	" : c === "n" ? "\n" : c === "r" ? "\r" : c);
+}
+function lineOf2(e) {
+  if (e.line !== null) return e.line;
+  const row = e.keyed ? entryRow(e) : null;
+  const cols = [
+    escape2(e.file),
+    e.blob,
+    e.valid ? "1" : "0",
+    row === null ? "0" : "1",
+    optional(e.heavy),
+    optional(e.id),
+    e.idLine === null ? "" : String(e.idLine),
+    e.molfiles.length === 0 ? "" : JSON.stringify(e.molfiles),
+    row === null ? "" : JSON.stringify(restOf(row))
+  ];
+  return `${cols.join("	")}
+`;
+}
+function entryOf2(text, from, to) {
+  const cols = [];
+  for (let at2 = from; cols.length < COLUMNS; ) {
+    const tab = text.indexOf("	", at2);
+    const stop = tab < 0 || tab > to ? to : tab;
+    cols.push(text.slice(at2, stop));
+    if (stop === to) break;
+    at2 = stop + 1;
+  }
+  if (cols.length !== COLUMNS) return null;
+  const [file, blob, valid, keyed2, heavy, id, idLine, molfiles, rest] = cols;
+  if (file === "" || blob.length !== 40 || valid !== "0" && valid !== "1") return null;
+  if (keyed2 === "1" !== (rest !== "") || keyed2 !== "0" && keyed2 !== "1") return null;
+  if (heavy !== "" && heavy[0] !== "=" || id !== "" && id[0] !== "=") return null;
+  const line = idLine === "" ? null : Number(idLine);
+  if (line !== null && !(Number.isInteger(line) && line > 0)) return null;
+  const mols = molfiles === "" ? [] : molfilesOf(molfiles);
+  if (mols === null) return null;
+  return {
+    file: unescape(file),
+    blob,
+    molfiles: mols,
+    valid: valid === "1",
+    heavy: heavy === "" ? null : unescape(heavy.slice(1)),
+    keyed: keyed2 === "1",
+    id: id === "" ? null : unescape(id.slice(1)),
+    idLine: line,
+    row: null,
+    rest: rest === "" ? null : rest,
+    line: text.slice(from, to + 1)
+  };
+}
+function molfilesOf(text) {
+  let raw2;
+  try {
+    raw2 = JSON.parse(text);
+  } catch {
+    return null;
+  }
+  return Array.isArray(raw2) && raw2.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])) ? raw2 : null;
+}
+var FORMAT, FORMAT_VERSION, END, optional, COLUMNS;
+var init_index_cache = __esm({
+  "src/registry/index-cache.ts"() {
+    "use strict";
+    init_index_cache_shape();
+    FORMAT = "stereogate registry index cache";
+    FORMAT_VERSION = 4;
+    END = "end	";
+    optional = (s) => s === null ? "" : `=${escape2(s)}`;
+    COLUMNS = 9;
   }
 });
 
@@ -72194,8 +72554,8 @@ async function* mapOrdered(items, opts) {
         yield value;
       }
       if (inputDone && nextOut >= nextIndex) break;
-      await new Promise((resolve5) => {
-        wake = resolve5;
+      await new Promise((resolve6) => {
+        wake = resolve6;
         if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
       });
     }
@@ -72224,159 +72584,6 @@ var init_pool = __esm({
   "src/bulk/pool.ts"() {
     "use strict";
     STARTUP_LIMIT_MS = 12e4;
-  }
-});
-
-// src/registry/types.ts
-var STEREO_FORMS;
-var init_types2 = __esm({
-  "src/registry/types.ts"() {
-    "use strict";
-    STEREO_FORMS = [
-      "achiral",
-      "meso",
-      "single-enantiomer",
-      "enantioenriched",
-      "racemate",
-      "single-diastereomer",
-      "diastereomer-mixture",
-      "unknown"
-    ];
-  }
-});
-
-// src/registry/index-cache.ts
-import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
-import { dirname as dirname2 } from "node:path";
-function readIndexCache(path, settings) {
-  let text;
-  try {
-    text = readFileSync2(path, "utf8");
-  } catch {
-    return { status: "missing", entries: [], reason: "no cache file yet" };
-  }
-  let value;
-  try {
-    value = JSON.parse(text);
-  } catch {
-    return { status: "unreadable", entries: [], reason: "the cache file is not valid JSON" };
-  }
-  const top = value;
-  if (!top || typeof top !== "object" || top.format !== FORMAT || !Array.isArray(top.entries))
-    return { status: "unreadable", entries: [], reason: "the cache file is not a stereogate index cache" };
-  const was = top.settings;
-  if (top.formatVersion !== FORMAT_VERSION || !was || was.version !== settings.version || was.axisOrthoMin !== settings.axisOrthoMin)
-    return {
-      status: "stale",
-      entries: [],
-      reason: "the cache was made by another stereogate version or with other settings"
-    };
-  const entries = [];
-  for (const raw2 of top.entries) {
-    const e = entryOf2(raw2);
-    if (e) entries.push(e);
-  }
-  return { status: "used", entries };
-}
-function writeIndexCache(path, settings, entries) {
-  const tmp = `${path}.${process.pid}.tmp`;
-  try {
-    mkdirSync(dirname2(path), { recursive: true });
-    const stored = entries.map(storedOf);
-    writeFileSync(
-      tmp,
-      `{"format":${JSON.stringify(FORMAT)},"formatVersion":${FORMAT_VERSION},"settings":${JSON.stringify(settings)},"entries":[
-${stored.map((s) => JSON.stringify(s)).join(",\n")}
-]}
-`
-    );
-    renameSync(tmp, path);
-    return null;
-  } catch (e) {
-    rmSync(tmp, { force: true });
-    return e.message;
-  }
-}
-function storedOf(e) {
-  const r = e.row;
-  return [
-    e.file,
-    e.blob,
-    e.molfiles,
-    e.valid ? 1 : 0,
-    e.heavy,
-    e.keyed ? 1 : 0,
-    r.id,
-    r.name,
-    r.form,
-    r.rotation,
-    r.keys,
-    [r.lines.id, r.lines.structure, r.lines.rotation],
-    r.waivers
-  ];
-}
-function isRotation(v) {
-  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
-  const r = v;
-  return typeof r.value === "number" && Number.isFinite(r.value) && isOptNumber(r.wavelength_nm) && isOptNumber(r.temperature_c) && isOptNumber(r.concentration) && (r.solvent === void 0 || isString(r.solvent));
-}
-function isWaiver(v) {
-  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
-  const w = v;
-  return isString(w.check) && Number.isInteger(w.index) && w.index >= 0 && isOptString(w.message_id) && isOptString(w.other_record) && isOptString(w.reason) && isOptString(w.approved_by);
-}
-function isKeys(v) {
-  if (!v || typeof v !== "object" || Array.isArray(v)) return false;
-  const k = v;
-  const text = k.text;
-  return isString(k.constitution) && (k.kind === "as-drawn" || k.kind === "racemic" || k.kind === "relative") && (k.stereo === null || isString(k.stereo)) && (k.mirror === null || isString(k.mirror)) && k.stereo === null === (k.mirror === null) && (k.chiral === null || typeof k.chiral === "boolean") && typeof k.exact === "boolean" && (text === void 0 || !!text && typeof text === "object" && (text.format === "smiles" || text.format === "molfile") && isString(text.text));
-}
-function entryOf2(raw2) {
-  if (!Array.isArray(raw2) || raw2.length !== 13) return null;
-  const [file, blob, molfiles, valid, heavy, keyed2, id, name, form, rotation, keys, lines, waivers] = raw2;
-  if (!isString(file) || file === "" || !isString(blob) || !/^[0-9a-f]{40}$/.test(blob)) return null;
-  if (!Array.isArray(molfiles) || !molfiles.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])))
-    return null;
-  if (valid !== 0 && valid !== 1 || id !== null && !isString(id) || name !== null && !isString(name))
-    return null;
-  if (heavy !== null && !isString(heavy) || keyed2 !== 0 && keyed2 !== 1 || keyed2 === 0 && keys !== null)
-    return null;
-  if (!STEREO_FORMS.includes(form)) return null;
-  if (rotation !== null && !isRotation(rotation)) return null;
-  if (keys !== null && !isKeys(keys)) return null;
-  if (!Array.isArray(lines) || lines.length !== 3 || !lines.every(isLine)) return null;
-  if (!Array.isArray(waivers) || !waivers.every(isWaiver)) return null;
-  const [idLine, structureLine, rotationLine] = lines;
-  return {
-    file,
-    blob,
-    molfiles,
-    valid: valid === 1,
-    heavy,
-    keyed: keyed2 === 1,
-    row: {
-      id,
-      file,
-      name,
-      form,
-      rotation,
-      keys,
-      lines: { id: idLine, structure: structureLine, rotation: rotationLine },
-      waivers
-    }
-  };
-}
-var FORMAT, FORMAT_VERSION, isString, isLine, isOptNumber, isOptString;
-var init_index_cache = __esm({
-  "src/registry/index-cache.ts"() {
-    "use strict";
-    init_types2();
-    FORMAT = "stereogate registry index cache";
-    FORMAT_VERSION = 3;
-    isString = (v) => typeof v === "string";
-    isLine = (v) => v === null || Number.isInteger(v) && v > 0;
-    isOptNumber = (v) => v === void 0 || typeof v === "number" && Number.isFinite(v);
-    isOptString = (v) => v === void 0 || isString(v);
   }
 });
 
@@ -72422,7 +72629,7 @@ var init_index_keys = __esm({
 
 // src/audit/index-build.ts
 import { availableParallelism } from "node:os";
-import { join as join4 } from "node:path";
+import { join as join5 } from "node:path";
 var MIN_FILES_FOR_WORKERS, RecordIndex;
 var init_index_build = __esm({
   "src/audit/index-build.ts"() {
@@ -72463,7 +72670,7 @@ var init_index_build = __esm({
       async fill() {
         const gitIds = this.opts.gitIds ?? gitBlobIds(this.opts.realRoot, this.opts.recordDirs);
         this.cache = this.useCache ? readIndexCache(this.opts.cachePath, this.settings) : null;
-        this.blobs = new BlobIds(await gitIds, (rel) => join4(this.opts.realRoot, rel));
+        this.blobs = new BlobIds(await gitIds, (rel) => join5(this.opts.realRoot, rel));
         let cached = this.cache?.entries ?? [];
         if (cached.some((e, i) => i > 0 && cached[i - 1].file >= e.file))
           cached = [...cached].sort((x, y) => x.file < y.file ? -1 : x.file > y.file ? 1 : 0);
@@ -72486,8 +72693,9 @@ var init_index_build = __esm({
           if (same && same.blob === blob && current(same)) this.entries[i] = same;
           else {
             const moved = movedFrom(blob);
-            if (!moved) return toRead.push(i);
-            this.entries[i] = { ...moved, file, row: { ...moved.row, file } };
+            const row = moved && entryRow(moved);
+            if (!moved || moved.keyed && !row) return toRead.push(i);
+            this.entries[i] = { ...moved, file, row: row ? { ...row, file } : null, line: null };
           }
           this.reused++;
         });
@@ -72497,7 +72705,7 @@ var init_index_build = __esm({
       async keyFully(wanted) {
         const todo = [];
         this.entries.forEach((e, i) => {
-          if (!e.keyed && wanted(e)) todo.push(i);
+          if (wanted(e) && (!e.keyed || entryRow(e) === null)) todo.push(i);
         });
         await this.readFiles(todo, true);
       }
@@ -72514,7 +72722,7 @@ var init_index_build = __esm({
           axisOrthoMin: opts.axisOrthoMin
         };
         const results = mapOrdered(
-          at2.map((i) => ({ abs: join4(opts.realRoot, opts.files[i]), full })),
+          at2.map((i) => ({ abs: join5(opts.realRoot, opts.files[i]), full })),
           {
             workers,
             script: new URL(`./index-worker${ext}`, import.meta.url),
@@ -72540,7 +72748,11 @@ var init_index_build = __esm({
             valid: result2.valid,
             heavy: result2.heavy,
             keyed: result2.keyed,
-            row: result2.row
+            id: result2.row.id,
+            idLine: result2.row.lines.id,
+            row: result2.row,
+            rest: null,
+            line: null
           };
           this.unkept.delete(this.entries[i]);
           if (!result2.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
@@ -72576,12 +72788,19 @@ var review_against_index_exports = {};
 __export(review_against_index_exports, {
   reviewAgainstIndex: () => reviewAgainstIndex
 });
+import { join as join6 } from "node:path";
 async function reviewAgainstIndex(o) {
-  const gitIds = gitBlobIds(o.realRoot, o.config.recordDirs);
-  const found = findRecordFiles(o.realRoot, o.config.recordDirs);
-  if (found.missingDirs.length > 0) return null;
+  const listed = await gitRecordFiles(o.realRoot, o.config.recordDirs);
+  const gitIds = Promise.resolve(listed.ids);
+  let found = listed.found;
+  if (found === null) {
+    const walked = findRecordFiles(o.realRoot, o.config.recordDirs);
+    if (walked.missingDirs.length > 0) return null;
+    found = { files: walked.files.map((abs) => relativeTo(o.realRoot, abs)), refused: walked.refused };
+  }
   const refused2 = found.refused.map((r) => ({ file: r.file, at: null, refused: r.message }));
-  const files = found.files.map((abs) => relativeTo(o.realRoot, abs));
+  const files = found.files;
+  const absOf = (at2) => join6(o.realRoot, files[at2]);
   const index = await RecordIndex.open({
     realRoot: o.realRoot,
     files,
@@ -72615,30 +72834,34 @@ async function reviewAgainstIndex(o) {
     if (!sel.selected.has(s)) continue;
     audited.set(
       s.file,
-      s.refused !== null ? refusedRecord({ file: s.file, message: s.refused }) : loadRecordFile(o.realRoot, found.files[s.at])
+      s.refused !== null ? refusedRecord({ file: s.file, message: s.refused }) : loadRecordFile(o.realRoot, absOf(s.at))
     );
   }
   const toAudit = [...audited.values()];
   const structures = new StructureCache(o.engine);
   const wanted = partnerFormulas(toAudit, structures, o.budget);
-  await index.keyFully(
-    (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy))
-  );
+  const partner = (e) => !audited.has(e.file) && (wanted === null || e.heavy === null || wanted.has(e.heavy));
+  await index.keyFully(partner);
   o.log?.(index.save());
   markDuplicateIdsAgainst(toAudit, entries, audited);
-  const view = indexView(entries, audited, structures, (at2) => loadRecordFile(o.realRoot, found.files[at2]));
+  const view = indexView(entries, audited, structures, (at2) => loadRecordFile(o.realRoot, absOf(at2)));
   const result2 = auditRecords(toAudit, {
     checks: o.checks,
     config: o.config,
     engine: o.engine,
     budget: o.budget,
     view,
-    // a light row has no keys: its formula differs from every record under review, so no lookup reaches it
+    // a record that is no partner stands as a row without keys: its formula differs from every record under
+    // review, so no lookup reaches it (its row is neither parsed from the cache nor read)
     otherRows: function* () {
       for (const s of stubs) {
         if (audited.has(s.file)) continue;
-        if (s.at !== null) yield entries[s.at].row;
-        else yield indexRow(refusedRecord({ file: s.file, message: s.refused }), NO_STRUCTURE2, 0);
+        if (s.at === null)
+          yield indexRow(refusedRecord({ file: s.file, message: s.refused }), NO_STRUCTURE2, 0);
+        else {
+          const e = entries[s.at];
+          yield partner(e) && entryRow(e) || NO_PARTNER;
+        }
       }
     }
   });
@@ -72669,14 +72892,14 @@ function markDuplicateIdsAgainst(toAudit, entries, audited) {
       if (own2.id !== null && ids.has(own2.id)) group.push(own2);
       continue;
     }
-    const { id, lines } = e.row;
+    const { id, idLine } = e;
     if (id === null || !ids.has(id)) continue;
     group.push({
       file: e.file,
       id,
       record: null,
       positions: {
-        get: (p) => p === "id" && lines.id !== null ? { line: lines.id, column: 1 } : void 0
+        get: (p) => p === "id" && idLine !== null ? { line: idLine, column: 1 } : void 0
       },
       problems: [],
       origin: { kind: "file" }
@@ -72685,10 +72908,17 @@ function markDuplicateIdsAgainst(toAudit, entries, audited) {
   markDuplicateIds(group);
 }
 function indexView(entries, audited, cache2, load) {
-  const firstById = /* @__PURE__ */ new Map();
-  entries.forEach((e, at2) => {
-    if (e.valid && e.row.id !== null && !firstById.has(e.row.id)) firstById.set(e.row.id, at2);
-  });
+  let firstById = null;
+  const firstAt = (id) => {
+    if (firstById === null) {
+      const map = /* @__PURE__ */ new Map();
+      entries.forEach((e, at2) => {
+        if (e.valid && e.id !== null && !map.has(e.id)) map.set(e.id, at2);
+      });
+      firstById = map;
+    }
+    return firstById.get(id);
+  };
   const entryAt = (at2) => {
     const file = entries[at2].file;
     return entryOf(audited.get(file) ?? load(at2), cache2, audited.has(file));
@@ -72702,21 +72932,22 @@ function indexView(entries, audited, cache2, load) {
     },
     byId(id) {
       if (!seen.has(id)) {
-        const at2 = firstById.get(id);
+        const at2 = firstAt(id);
         seen.set(id, at2 === void 0 ? void 0 : entryAt(at2) ?? void 0);
       }
       return seen.get(id);
     },
-    ids: () => entries.flatMap((e) => e.valid && e.row.id !== null ? [e.row.id] : [])
+    ids: () => entries.flatMap((e) => e.valid && e.id !== null ? [e.id] : [])
   };
 }
-var NO_STRUCTURE2;
+var NO_STRUCTURE2, NO_PARTNER;
 var init_review_against_index = __esm({
   "src/audit/review-against-index.ts"() {
     "use strict";
     init_budget();
     init_files();
-    init_blob_ids();
+    init_git_files();
+    init_index_cache();
     init_load();
     init_engine();
     init_index_build();
@@ -72726,12 +72957,22 @@ var init_review_against_index = __esm({
     init_structures();
     init_view();
     NO_STRUCTURE2 = { structure: null, facts: null, error: null };
+    NO_PARTNER = {
+      id: null,
+      file: "",
+      name: null,
+      form: "unknown",
+      rotation: null,
+      keys: null,
+      lines: { id: null, structure: null, rotation: null },
+      waivers: []
+    };
   }
 });
 
 // src/audit/run.ts
-import { existsSync as existsSync3, realpathSync as realpathSync3, statSync as statSync2 } from "node:fs";
-import { resolve as resolve3 } from "node:path";
+import { existsSync as existsSync3, realpathSync as realpathSync4, statSync as statSync3 } from "node:fs";
+import { resolve as resolve4 } from "node:path";
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache2 = new StructureCache(options.engine);
@@ -72785,7 +73026,13 @@ function auditRecords(records, options) {
       const audited2 = new Set(records);
       phase.reviewing(rows);
       let seq = records.length;
-      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      if (options.otherRows)
+        for (const row of options.otherRows()) {
+          if (row.keys === null) {
+            seq++;
+            phase.countKeyless();
+          } else phase.file({ ...row, seq: ++seq });
+        }
       else for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
       for (const row of rows) phase.fileUnderReview(row);
     }
@@ -72914,11 +73161,11 @@ function summarize(records) {
   return s;
 }
 async function openRegistry(options) {
-  const rootAbs = resolve3(options.root);
-  if (!existsSync3(rootAbs) || !statSync2(rootAbs).isDirectory()) {
+  const rootAbs = resolve4(options.root);
+  if (!existsSync3(rootAbs) || !statSync3(rootAbs).isDirectory()) {
     throw new ConfigError(`registry folder ${options.root} does not exist`);
   }
-  const root = realpathSync3(rootAbs);
+  const root = realpathSync4(rootAbs);
   const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
   const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
@@ -73229,11 +73476,11 @@ import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve5) {
-      resolve5(value);
+    return value instanceof P ? value : new P(function(resolve6) {
+      resolve6(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve5, reject) {
+  return new (P || (P = Promise))(function(resolve6, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -73249,7 +73496,7 @@ var __awaiter = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result2) {
-      result2.done ? resolve5(result2.value) : adopt(result2.value).then(fulfilled, rejected);
+      result2.done ? resolve6(result2.value) : adopt(result2.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -74232,7 +74479,7 @@ var DEFAULT_TIMEOUT_MS = 3e4;
 function createClient(options) {
   const base = new URL(options.baseUrl.replace(/\/+$/, "") + "/");
   const policy = { ...DEFAULT_RETRY_POLICY, ...options.retry };
-  const sleep = options.sleep ?? ((ms) => new Promise((resolve5) => setTimeout(resolve5, ms)));
+  const sleep = options.sleep ?? ((ms) => new Promise((resolve6) => setTimeout(resolve6, ms)));
   const maxPages = options.maxPages ?? 100;
   const timeoutMs = options.timeoutMs ?? DEFAULT_TIMEOUT_MS;
   const transport = options.transport ?? transportFor(base);
@@ -74572,7 +74819,7 @@ function message(error2) {
 
 // src/action/post-review.ts
 import { readFile, stat as stat2 } from "node:fs/promises";
-import { join as join5 } from "node:path";
+import { join as join7 } from "node:path";
 
 // src/github/identity.ts
 var logins = /* @__PURE__ */ new WeakMap();
@@ -75029,7 +75276,7 @@ async function fixSources(settings, result2) {
   for (const record of result2.records) {
     if (!record.findings.some((f) => f.fix !== void 0 && f.waived === null && f.line !== null)) continue;
     try {
-      const path = join5(settings.registryRoot, record.file);
+      const path = join7(settings.registryRoot, record.file);
       if ((await stat2(path)).size > SOURCE_MAX_BYTES) continue;
       sources.set(toRepoPath(settings.registryDir, record.file), await readFile(path, "utf8"));
     } catch {
@@ -75160,19 +75407,19 @@ var coreRunner = {
 };
 
 // src/action/settings.ts
-import { existsSync as existsSync4, readFileSync as readFileSync3, realpathSync as realpathSync4 } from "node:fs";
-import { dirname as dirname5, isAbsolute as isAbsolute4, join as join6, relative as relative3, resolve as resolve4, sep as sep3 } from "node:path";
+import { existsSync as existsSync4, readFileSync as readFileSync3, realpathSync as realpathSync5 } from "node:fs";
+import { dirname as dirname5, isAbsolute as isAbsolute4, join as join8, relative as relative3, resolve as resolve5, sep as sep3 } from "node:path";
 var SettingsError = class extends Error {
   name = "SettingsError";
 };
 function readSettings(input, env) {
-  const workspace = realpathSync4(env.GITHUB_WORKSPACE || process.cwd());
-  const registryRoot = realpathSync4(insidePath(workspace, input("registry-path") || ".", "registry-path"));
+  const workspace = realpathSync5(env.GITHUB_WORKSPACE || process.cwd());
+  const registryRoot = realpathSync5(insidePath(workspace, input("registry-path") || ".", "registry-path"));
   const repoRoot = checkoutOf(registryRoot, workspace);
   const registryDir = relative3(repoRoot, registryRoot).split(sep3).join("/");
   const optionalPath = (name) => {
     const value = input(name).trim();
-    return value === "" ? null : resolve4(workspace, value);
+    return value === "" ? null : resolve5(workspace, value);
   };
   const configValue = input("config-file").trim();
   const repository = parseRepository(env.GITHUB_REPOSITORY);
@@ -75215,8 +75462,8 @@ function parseRecordChoice(raw2) {
 function parseIndexCache(raw2, workspace, runnerTemp) {
   const value = raw2.trim();
   if (value === "none") return null;
-  if (value === "") return runnerTemp ? join6(runnerTemp, "stereogate", "index-cache.json") : null;
-  return resolve4(workspace, value);
+  if (value === "") return runnerTemp ? join8(runnerTemp, "stereogate", "index-cache.json") : null;
+  return resolve5(workspace, value);
 }
 function parseFailOn(raw2) {
   const value = raw2.trim() || "error";
@@ -75249,7 +75496,7 @@ function parseRepository(raw2) {
   return match === null ? null : { owner: match[1], repo: match[2] };
 }
 function insidePath(workspace, value, name) {
-  const abs = resolve4(workspace, value);
+  const abs = resolve5(workspace, value);
   const rel = relative3(workspace, abs);
   if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
     throw new SettingsError(`${name} must be inside the workspace: '${value}'`);
@@ -75258,7 +75505,7 @@ function insidePath(workspace, value, name) {
 }
 function checkoutOf(dir, workspace) {
   for (let at2 = dir; ; at2 = dirname5(at2)) {
-    if (existsSync4(join6(at2, ".git"))) return at2;
+    if (existsSync4(join8(at2, ".git"))) return at2;
     if (at2 === workspace || dirname5(at2) === at2) return workspace;
   }
 }

@@ -22107,7 +22107,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
     }
   }
   if (!bracket) return sym;
@@ -49849,6 +49849,10 @@ var init_registry_phase = __esm({
           return;
         this.index.add(row);
       }
+      /** Review mode: a record of the registry without keys (what `file` does with it: count it). */
+      countKeyless() {
+        this.registryRecords++;
+      }
       /** Review mode: a record under review, filed before the reviews so that pairs of them are found. */
       fileUnderReview(row) {
         this.registryRecords++;
@@ -50069,7 +50073,13 @@ function auditRecords(records, options) {
       const audited2 = new Set(records);
       phase.reviewing(rows);
       let seq = records.length;
-      if (options.otherRows) for (const row of options.otherRows()) phase.file({ ...row, seq: ++seq });
+      if (options.otherRows)
+        for (const row of options.otherRows()) {
+          if (row.keys === null) {
+            seq++;
+            phase.countKeyless();
+          } else phase.file({ ...row, seq: ++seq });
+        }
       else for (const r of options.registry) if (!audited2.has(r)) phase.file(indexRow(r, mainOf(r), ++seq));
       for (const row of rows) phase.fileUnderReview(row);
     }
