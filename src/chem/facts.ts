@@ -39,6 +39,11 @@ export interface StereoUnitFact {
    * helix in SMILES): its configuration is open, not missing from the drawing.
    */
   formatCannotState?: true;
+  /**
+   * With `formatCannotState`: why, in a few words ("a SMILES cannot state its configuration", "a wedge without 2D
+   * coordinates fixes no configuration", "2D coordinates cannot state its configuration").
+   */
+  openBecause?: string;
 }
 
 /** An ordinary amine nitrogen drawn with a configuration: not a stereocentre (rapid pyramidal inversion). */

@@ -9,7 +9,7 @@ function unitLine(u: StereoUnitFact): string {
   const conf = u.defined
     ? (u.label ?? 'defined (no CIP label)')
     : u.formatCannotState
-      ? 'open (the input format cannot state it)'
+      ? `open (${u.openBecause ?? 'the input cannot state it'})`
       : 'undefined';
   const extra: string[] = [];
   if (u.pseudoasymmetric) extra.push('pseudoasymmetric');

@@ -112,7 +112,7 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
       chiral: null,
       fixedAtoms: [],
       fixedBonds: [],
-      explanation: 'open: the configuration of a stereogenic axis or helix is not stated by the input format',
+      explanation: 'open: the input does not state the configuration of a stereogenic axis',
     };
   }
   if (stoppedLabels > 0) {
@@ -191,7 +191,16 @@ function unitFacts(a: Analysis, labels: Map<string, CipLabel>): StereoUnitFact[]
       equivalenceClass: classIds.get(ck)!,
       classKey: ck,
       component: p.componentOfAtom[u.atoms[0]],
-      ...(!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true as const } : {}),
+      ...(!u.defined && cannotState(u.kind, s.dimension)
+        ? {
+            formatCannotState: true as const,
+            openBecause: unstatedReason(
+              u.kind,
+              u.atoms.map((x) => s.atoms[x].inputNumber),
+              s,
+            ),
+          }
+        : {}),
     });
   });
   return out;
@@ -201,6 +210,21 @@ function unitFacts(a: Analysis, labels: Map<string, CipLabel>): StereoUnitFact[]
 function cannotState(kind: StereoUnitFact['kind'], dimension: number): boolean {
   if (kind === 'planar') return dimension !== 3;
   return dimension === 0 && (kind === 'biaryl' || kind === 'helix');
+}
+
+/**
+ * Why the input leaves a unit it cannot state open, in a few words ("open (…)" in describe's text, and the remark):
+ * a SMILES has no notation for an axis, a helix or a planar twist; a wedge on an axis needs 2D coordinates; 2D
+ * coordinates cannot state a planar twist.
+ */
+function unstatedReason(kind: StereoUnitFact['kind'], atoms: number[], s: Structure): string {
+  if (kind === 'planar' && s.dimension === 2) return '2D coordinates cannot state its configuration';
+  if (kind === 'biaryl') {
+    if (wedgeNearAxis(s, atoms[0], atoms[1]) !== null)
+      return 'a wedge without 2D coordinates fixes no configuration';
+    return 'a SMILES without 2D coordinates and wedges cannot state its configuration';
+  }
+  return 'a SMILES cannot state its configuration';
 }
 
 function unstatedRemark(u: StereoUnitFact, s: Structure): string {
@@ -220,7 +244,7 @@ function unstatedRemark(u: StereoUnitFact, s: Structure): string {
     u.kind === 'biaryl'
       ? 'chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)'
       : 'which of its two enantiomeric forms is meant is open (3D coordinates state it)';
-  return `${what}; the input format cannot state its configuration: ${then}`;
+  return `${what}; ${u.openBecause ?? 'the input cannot state its configuration'}: ${then}`;
 }
 
 /**
