@@ -86,3 +86,23 @@ describe('pooled folder audit: awkward runs', () => {
     expect(r.err).toContain(`cannot write the report to ${folder}: it is a folder`);
   }, 60_000);
 });
+
+describe('audit options given where they do nothing', () => {
+  it('--workers and --progress with paths, --index-cache without: named on standard error, the audit runs', async () => {
+    reg = tmpRegistry({ 'compounds/a.yml': recordYaml('LX-00001', 'achiral', '', 'CCO') });
+    const withPaths = await cli(['--root', reg.root, 'compounds/a.yml', '--workers', '2']);
+    expect(withPaths.code).toBe(0);
+    expect(withPaths.out).toMatch(/1 record audited/);
+    expect(withPaths.err.split('\n')).toEqual([
+      'stereogate: --workers applies to the audit of every record (no paths): ignored with paths',
+      'stereogate: --progress applies to the audit of every record (no paths): ignored with paths',
+    ]);
+    const cache = join(reg.root, 'keys.json');
+    const whole = await cli(['--root', reg.root, '--index-cache', cache]);
+    expect(whole.code).toBe(0);
+    expect(whole.err).toBe('stereogate: --index-cache applies with paths only: ignored');
+    const quiet = memoryIo();
+    expect(await run(['audit', '--root', reg.root, 'compounds/a.yml'], quiet)).toBe(0);
+    expect(quiet.stderr).toEqual([]);
+  }, 60_000);
+});

@@ -134,6 +134,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       const workers = typeof values.workers === 'string' ? Number(values.workers) : undefined;
       if (workers !== undefined && (!Number.isInteger(workers) || workers < 0))
         throw new UsageError('--workers expects a whole number (0: this thread)');
+      for (const line of ignoredOptions(paths.length > 0, args)) io.err(`stereogate: ${line}`);
       const budget = { ...RECORD_BUDGET, timeMs: seconds * 1000 };
       const common = { root, configFile: values.config as string | undefined, checks: deps.checks };
       try {
@@ -211,3 +212,12 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
 }
 
 export const auditCommand: Command = makeAuditCommand();
+
+/** Options given where they do nothing (--workers and --progress with paths, --index-cache without), named. */
+function ignoredOptions(withPaths: boolean, args: readonly string[]): string[] {
+  const given = (name: string): boolean => args.some((a) => a === `--${name}` || a.startsWith(`--${name}=`));
+  if (!withPaths) return given('index-cache') ? ['--index-cache applies with paths only: ignored'] : [];
+  return ['workers', 'progress']
+    .filter(given)
+    .map((n) => `--${n} applies to the audit of every record (no paths): ignored with paths`);
+}
