@@ -8,6 +8,7 @@ import { gitChangedFiles } from '../github/git-diff.js';
 import type { Engine, Runner } from './ports.js';
 import { selectChanged } from './select-records.js';
 import type { ActionSettings } from './settings.js';
+import { plural } from '../checks/words.js';
 
 export interface Chosen {
   /** Record files and molfiles relative to the registry root; undefined: every record; []: none. */
@@ -55,9 +56,9 @@ export async function chooseRecords(
   const recordDirs = await engine.recordDirs(settings.registryRoot, settings.configFile);
   const selection = selectChanged(changed, { registryDir: settings.registryDir, recordDirs });
   runner.info(
-    `Pull request #${pr.number} changes ${changed.length} file(s): ${selection.records.length} record file(s)` +
+    `Pull request #${pr.number} changes ${plural(changed.length, 'file')}: ${plural(selection.records.length, 'record file')}` +
       (selection.molfiles.length > 0
-        ? ` and ${selection.molfiles.length} molfile(s), whose records are audited too.`
+        ? ` and ${plural(selection.molfiles.length, 'molfile')}, whose records are audited too.`
         : '.'),
   );
   return { paths: [...selection.records, ...selection.molfiles], changed, changedSource: source };

@@ -17,6 +17,7 @@ import { redactSecret } from '../github/redact.js';
 import { message, type Chosen } from './choose-records.js';
 import type { Engine, Runner } from './ports.js';
 import type { ActionSettings } from './settings.js';
+import { plural } from '../checks/words.js';
 
 /** GitHub refuses comment bodies over 65,536 characters; leave room. */
 export const COMMENT_MAX_CHARS = 60_000;
@@ -60,7 +61,7 @@ export async function postReview(
       if (done.action === 'none') say('No record changed and no earlier checklist comment: none posted.');
       else say(`Checklist comment ${done.action}${done.url === null ? '' : `: ${done.url}`}.`);
       if (done.removed > 0)
-        say(`${done.removed} duplicate checklist comment(s) of an overlapping run deleted.`);
+        say(`${plural(done.removed, 'duplicate checklist comment')} of an overlapping run deleted.`);
     } catch (error) {
       if (refused(error)) {
         say(READ_ONLY, true);
@@ -89,20 +90,20 @@ export async function postReview(
       if (plan.comments.length + plan.outsideDiff + plan.overLimit === 0) return said;
       const comments = plan.comments.map((c) => ({ ...c, body: redactSecret(c.body, settings.token) }));
       const done = await postInlineComments(client, pr, comments);
-      const parts = [`${done.posted.length} inline comment(s) posted`];
+      const parts = [`${plural(done.posted.length, 'inline comment')} posted`];
       if (done.alreadyThere.length > 0) parts.push(`${done.alreadyThere.length} already there`);
       if (done.rejected.length > 0)
         parts.push(`${done.rejected.length} refused by GitHub (kept in the checklist)`);
       if (plan.outsideDiff > 0)
-        parts.push(`${plan.outsideDiff} finding(s) on lines outside the diff (in the checklist)`);
+        parts.push(`${plural(plan.outsideDiff, 'finding')} on lines outside the diff (in the checklist)`);
       if (plan.overLimit > 0)
         parts.push(`${plan.overLimit} over the limit of ${settings.maxInlineComments} (in the checklist)`);
-      if (done.removed > 0) parts.push(`${done.removed} duplicate(s) of an overlapping run deleted`);
+      if (done.removed > 0) parts.push(`${plural(done.removed, 'duplicate')} of an overlapping run deleted`);
       say(parts.join('; ') + '.');
       if (done.notAllowed.length > 0) say(READ_ONLY, true);
       if (done.rateLimited !== null) {
         say(
-          `${done.rateLimited.comments.length} inline comment(s) not posted: ${rateLimitLine(done.rateLimited.error, settings)}`,
+          `${plural(done.rateLimited.comments.length, 'inline comment')} not posted: ${rateLimitLine(done.rateLimited.error, settings)}`,
           true,
         );
       }

@@ -16,6 +16,7 @@ import { chooseRecords, message } from './choose-records.js';
 import type { Engine, Runner } from './ports.js';
 import { postReview } from './post-review.js';
 import type { ActionSettings, FailOn } from './settings.js';
+import { plural } from '../checks/words.js';
 
 /** The job summary may hold 1 MiB (GitHub docs, "Adding a job summary"); leave room for the lines about posting. */
 export const SUMMARY_MAX_BYTES = 1_000_000;
@@ -44,7 +45,7 @@ export async function review(
   });
   const { errors, warnings, notes, waived } = result.summary;
   runner.info(
-    `Audited ${result.summary.records} record(s): ${errors} error(s), ${warnings} warning(s), ${notes} note(s)` +
+    `Audited ${plural(result.summary.records, 'record')}: ${plural(errors, 'error')}, ${plural(warnings, 'warning')}, ${plural(notes, 'note')}` +
       (waived > 0 ? `, ${waived} accepted by waivers.` : '.'),
   );
 
@@ -79,7 +80,7 @@ export async function review(
   for (const annotation of annotations) runner.annotate(annotation);
   if (omitted > 0)
     runner.info(
-      `${omitted} more finding(s) are not annotated (GitHub shows a limited number); see the summary.`,
+      `${plural(omitted, 'more finding is', 'more findings are')} not annotated (GitHub shows a limited number); see the summary.`,
     );
 
   runner.setOutput('errors', errors);
@@ -122,9 +123,10 @@ export async function review(
 export function judge(result: AuditResult, failOn: FailOn): string | null {
   const { errors, warnings } = result.summary;
   if (failOn === 'never') return null;
-  if (failOn === 'error' && errors > 0) return `stereogate found ${errors} error(s) (fail-on: error).`;
+  if (failOn === 'error' && errors > 0)
+    return `stereogate found ${plural(errors, 'error')} (fail-on: error).`;
   if (failOn === 'warning' && errors + warnings > 0) {
-    return `stereogate found ${errors} error(s) and ${warnings} warning(s) (fail-on: warning).`;
+    return `stereogate found ${plural(errors, 'error')} and ${plural(warnings, 'warning')} (fail-on: warning).`;
   }
   return null;
 }

@@ -22,6 +22,7 @@ import type { AuditEngine } from './engine.js';
 import { keyRecordFile, type KeyedFile } from './index-keys.js';
 import type { IndexWorkerItem, IndexWorkerSetup } from './index-worker.js';
 import { VERSION } from './version.js';
+import { plural } from '../checks/words.js';
 
 /** Fewer files than this to read: this thread reads them (starting workers costs about a second). */
 export const MIN_FILES_FOR_WORKERS = 2000;
@@ -185,12 +186,12 @@ export class RecordIndex {
   /** Writes the cache when anything changed; says in a sentence what was done (for the log). */
   save(): string {
     const parts = [
-      `${this.entries.length} record file(s)`,
+      plural(this.entries.length, 'record file'),
       `${this.reused} from the cache`,
       `${this.read} read`,
       `${this.described} described for their keys`,
     ];
-    if (this.usedWorkers > 0) parts.push(`${this.usedWorkers} worker(s)`);
+    if (this.usedWorkers > 0) parts.push(plural(this.usedWorkers, 'worker'));
     if (this.cache && this.cache.status !== 'used') parts.push(`cache not used: ${this.cache.reason}`);
     const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
     if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== 'used')) {

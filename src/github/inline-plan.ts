@@ -10,6 +10,7 @@ import { INLINE_MARKER, type InlineComment } from './inline-comments.js';
 import type { DiffLines } from './patch.js';
 import { toRepoPath } from './paths.js';
 import { suggestionBlock } from './suggestion.js';
+import { plural } from '../checks/words.js';
 
 export { INLINE_MARKER };
 
@@ -120,7 +121,7 @@ function commentBody(group: Located[], checklistUrl: string | null, source: stri
       (finding.field === null ? '' : ` on ${escapeMarkdown(finding.field)}`) +
       `: ${escapeMarkdown(text)}`;
     const rest = group.length - index;
-    const more = `\n- … ${rest} more finding(s) on this line: see the checklist.`;
+    const more = `\n- … ${plural(rest, 'more finding')} on this line: see the checklist.`;
     if (body.length + line.length + more.length + tail.length > INLINE_MAX_CHARS) {
       body += more;
       break;

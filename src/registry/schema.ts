@@ -207,7 +207,10 @@ function explainOne(e: ErrorObject, value: unknown, what: string): Omit<SchemaPr
       return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
     }
     case 'minItems':
-      return { path, message: `${label}: needs at least ${(e.params as { limit: number }).limit} item(s)` };
+      return {
+        path,
+        message: `${label}: needs at least ${itemCount((e.params as { limit: number }).limit)}`,
+      };
     case 'oneOf': {
       if (got === null || typeof got !== 'object' || Array.isArray(got)) {
         return {
@@ -244,3 +247,5 @@ function explain(errors: ErrorObject[], value: unknown, what: string): SchemaPro
   }
   return out;
 }
+
+const itemCount = (n: number): string => `${n} ${n === 1 ? 'item' : 'items'}`;

@@ -81,7 +81,7 @@ describe('review', () => {
     const outcome = await review(settings(), engine, client, runner);
 
     expect(engine.calls[0]!.paths).toEqual(['compounds/LX-00001.yaml', 'compounds/LX-00002.yaml']);
-    expect(outcome.failure).toBe('stereogate found 1 error(s) (fail-on: error).');
+    expect(outcome.failure).toBe('stereogate found 1 error (fail-on: error).');
     expect(runner.outputs).toEqual({
       errors: 1,
       warnings: 1,
@@ -103,8 +103,8 @@ describe('review', () => {
     expect(runner.summaries).toHaveLength(2);
     expect(runner.summaries[0]).toContain('<!-- stereogate-checklist -->');
     expect(runner.summaries[1]).toContain('Checklist comment created');
-    expect(runner.summaries[1]).toContain('1 inline comment(s) posted');
-    expect(runner.summaries[1]).toContain('1 finding(s) on lines outside the diff');
+    expect(runner.summaries[1]).toContain('1 inline comment posted');
+    expect(runner.summaries[1]).toContain('1 finding on lines outside the diff');
     expect(runner.warnings).toEqual([]);
   });
 

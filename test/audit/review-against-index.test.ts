@@ -291,7 +291,7 @@ describe('a review through the key index', () => {
       log: (l) => log.push(l),
       workers: 2,
     });
-    expect(log[0]).toContain('2 worker(s)');
+    expect(log[0]).toContain('2 workers');
     expect(seen(pooled!)).toBe(await loadedReview(demo.root, paths));
   });
 

@@ -117,7 +117,7 @@ export function describe(input: Structure, opts: DescribeOptions = {}): Structur
   }
   if (stoppedLabels > 0) {
     facts.remarks.push(
-      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`,
+      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels === 1 ? '1 drawn stereo unit was' : `${stoppedLabels} drawn stereo units were`} left without a descriptor (open, not a finding that none applies)`,
     );
   }
   if (mixture) {

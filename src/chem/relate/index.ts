@@ -104,7 +104,7 @@ function speciesMismatch(inA: Species[], inB: Species[]): string | null {
     const [nb, mb] = count(inB, key);
     const f = inA.find((x) => x.key === key)!.formula;
     if (na !== nb)
-      return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
+      return `same constitution, different mixtures: A holds ${na} ${na === 1 ? 'stereoisomer' : 'stereoisomers'} of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
     if (na > 1 && ma !== mb)
       return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
@@ -172,7 +172,10 @@ function formDiffs(
       const nb = copies(inB, key);
       if (na !== nb) {
         const f = inA.find((x) => x.key === key)!.formula;
-        out.push({ kind: 'ratio', explanation: `A holds ${na} molecule(s) of ${f}, B ${nb}` });
+        out.push({
+          kind: 'ratio',
+          explanation: `A holds ${na} ${na === 1 ? 'molecule' : 'molecules'} of ${f}, B ${nb}`,
+        });
       }
     }
   }
