@@ -33,7 +33,7 @@ import { VERSION } from '../../audit/version.js';
 export const BULK_USAGE = `Bulk audit of legacy registries (SD files, CSV/TSV exports):
 
   stereogate audit <file.sdf|file.csv|file.tsv>… [options]
-  stereogate merge <shard.jsonl>… [--config FILE] [output options]
+  stereogate merge <shard.jsonl>… [--config FILE | --root DIR] [output options]
 
 Field mapping (SD data field or CSV column; defaults in parentheses):
   --map-id NAME           registry id (id; SD files fall back to the title line)
@@ -56,6 +56,7 @@ Running:
   --record-timeout SECS   per-record time limit (default 20)
   --progress MODE         auto | bar | lines | none (default auto: a bar on a terminal, lines in CI)
   --config FILE           tolerances and severities (stereogate.config.yml format)
+  --root DIR              folder whose stereogate.config.yml applies when --config is not given (default .)
 
 Outputs (any combination; the run always prints a summary table):
   --jsonl FILE            one JSON record per line, then a summary line (input to merge)
