@@ -69,6 +69,8 @@ describe('bulk audit command line: usage errors', () => {
     [['--record-timeout', '0'], /--record-timeout expects a positive number/],
     [['--progress', 'loud'], /--progress must be/],
     [['--no-such-option'], /no-such-option/],
+    // --format is the record audit's; a bulk audit given it would print its table and ignore it
+    [['--format', 'json'], /--format is for record files; .*--jsonl, --json, --csv, --sarif or --html FILE/],
   ])('%j is a usage error', async (extra, message) => {
     expect(await usageMessage([csv, ...base, ...extra])).toMatch(message);
   });

@@ -270,6 +270,10 @@ async function bulkAuditRun(args: string[], io: Io): Promise<number> {
     format: { type: 'string' },
   });
   if (positionals.length === 0) throw new UsageError('no bulk input given');
+  if (values.format !== undefined)
+    throw new UsageError(
+      '--format is for record files; a bulk audit writes each report to its own file: --jsonl, --json, --csv, --sarif or --html FILE',
+    );
   const failOn = checkFailOn(values['fail-on']);
   const mapping: BulkMapping = typeof values.mapping === 'string' ? readMapping(values.mapping) : {};
   for (const k of FIELD_KEYS) {
