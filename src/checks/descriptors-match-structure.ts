@@ -45,9 +45,10 @@ const messages = {
     '{definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the ' +
     'configurations the descriptors state (for a racemate: one enantiomer with an AND group).',
   'descriptors-at-unstated-units':
-    '{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input ' +
-    'format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a ' +
-    'molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.',
+    '{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the ' +
+    'structure as given cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar ' +
+    'twist; 2D coordinates state no planar twist). Draw the unit to have the descriptors checked: an axis with ' +
+    'wedges in a molfile or a CXSMILES with 2D coordinates, a helix or a planar twist with 3D coordinates.',
   'descriptors-incomplete':
     '{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every ' +
     'stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.',

@@ -68,11 +68,12 @@ const messages = {
     'Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A ' +
     'racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.',
   'form-open-unstated-units':
-    'Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot ' +
-    'state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a ' +
-    'racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution ' +
-    '(common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) ' +
-    'to have the claim checked.',
+    'Declared {form}: not verified. The structure has {openUnits}, whose configuration the structure as given ' +
+    'cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar twist; 2D coordinates ' +
+    'state no planar twist), so whether it stands for one stereoisomer, a racemate or an achiral compound is ' +
+    'open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Draw the ' +
+    'unit to have the claim checked: an axis with wedges in a molfile or a CXSMILES with 2D coordinates, a helix ' +
+    'or a planar twist with 3D coordinates.',
   ...mixtureMessages,
 } as const;
 

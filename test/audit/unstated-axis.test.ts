@@ -9,6 +9,8 @@ import { runAudit } from '../../src/audit/run.js';
 import { tmpRegistry, type TmpRegistry } from '../registry/tmp-registry.js';
 
 let reg: TmpRegistry | null = null;
+const form = (r: { findings: { check: string; message: string }[] }) =>
+  r.findings.find((f) => f.check === 'form-matches-structure')!;
 afterEach(() => {
   reg?.remove();
   reg = null;
@@ -38,6 +40,12 @@ describe('BINOL from SMILES in an audit', () => {
     const named = result.records[0]!.findings.find((f) => f.check === 'descriptors-match-structure');
     expect(named?.messageId).toBe('descriptors-at-unstated-units');
     expect(result.records[0]!.passed.map((p) => p.check)).not.toContain('descriptors-match-structure');
+    // what the chemist can do: a CXSMILES with 2D coordinates and wedges states an axis too (ChemAxon's CXSMILES
+    // format description; test/chem/read/cxsmiles-axes.test.ts), so the advice names it beside the molfile
+    for (const f of [form(result.records[0]!), named!]) {
+      expect(f.message).toContain('an axis with wedges in a molfile or a CXSMILES with 2D coordinates');
+      expect(f.message).not.toMatch(/input format/);
+    }
   });
 
   it('axisOrthoMin from the config reaches the engine: 7 means no axis, so BINOL is achiral as drawn', async () => {
