@@ -17,6 +17,7 @@ import {
 } from '../checks/consistent-with-registry.js';
 import type { AuditConfig, RawFinding } from '../checks/types.js';
 import { acceptingWaiver } from '../checks/waivers.js';
+import { plural } from '../checks/words.js';
 import { RegistryIndex, type Confirm } from '../registry/key-index.js';
 import type { IndexRow } from '../registry/keys.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -130,8 +131,8 @@ export class RegistryPhase {
     // a review files only the keys its records look up, so it counts records, not keys
     const how =
       this.options.mode === 'full'
-        ? `every record with each record before it through an index of ${this.index.size} records' keys`
-        : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
+        ? `every record with each record before it through an index of the keys of ${plural(this.index.size, 'record')}`
+        : `each record under review with the whole registry (${plural(this.registryRecords, 'record')}) through its key index`;
     return {
       status: this.enabled ? 'run' : 'not-run',
       reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,

@@ -7,7 +7,10 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import ts from 'typescript';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
+import { run } from '../../src/cli/main.js';
+import { memoryIo } from '../cli/io.js';
+import { recordYaml, tmpRegistry, type TmpRegistry } from '../registry/tmp-registry.js';
 
 const PLURAL = /\b[A-Za-z]+\(s\)/g;
 const found = (text: string): string[] =>
@@ -53,5 +56,23 @@ describe('no "(s)" plurals', () => {
         .flatMap((l, i) => found(l).map((w) => `${f}:${i + 1}: ${w}`)),
     );
     expect(hits).toEqual([]);
+  });
+});
+
+describe('counts in words', () => {
+  let reg: TmpRegistry | null = null;
+  afterEach(() => {
+    reg?.remove();
+    reg = null;
+  });
+
+  it("a one-record registry: the registry-wide phase says 'the keys of 1 record', not '1 records'", async () => {
+    reg = tmpRegistry({ 'compounds/a.yml': recordYaml('LX-00001', 'achiral', '', 'CCO') });
+    const io = memoryIo();
+    expect(await run(['audit', '--root', reg.root, '--format', 'json'], io)).toBe(0);
+    const reason = (JSON.parse(io.stdout.join('')) as { registry: { reason: string } }).registry.reason;
+    expect(reason).toBe(
+      'compared every record with each record before it through an index of the keys of 1 record',
+    );
   });
 });
