@@ -176,13 +176,17 @@ export function compareWithRegistry(
     }
   }
   const identical = pairs.filter((p) => p.relation === 'identical').length;
+  // rotations that could not be compared are a note, never part of what passed
+  const rotations = out.some((f) => f.messageId === 'enantiomer-rotations-not-compared')
+    ? '; forms agree, rotations not compared (see the note)'
+    : '; forms and rotations agree';
   const passed =
     compared === 0
       ? 'no other registered record is this stereoisomer or its enantiomer'
       : `${identical > 0 ? `the same stereoisomer as ${plural(identical, 'other record')}` : ''}` +
         `${identical > 0 && compared > identical ? ', ' : ''}` +
         `${compared > identical ? `the enantiomer of ${plural(compared - identical, 'registered record')}` : ''}` +
-        '; forms and rotations agree';
+        rotations;
   return { findings: out, passed, pairs };
 }
 

@@ -151,6 +151,17 @@ describe('consistent-with-registry', () => {
       'review',
     );
     expect(ids(unlike.results[0]!)).toEqual(['enantiomer-registered', 'enantiomer-rotations-not-compared']);
+    // a check that could not compare the rotations never says they agree (house rule: unverified is not passed)
+    expect(unlike.results[0]!.passed?.evidence).toBe(
+      'the enantiomer of 1 registered record; forms agree, rotations not compared (see the note)',
+    );
+    const alike = phase(
+      [row(R_CARVONE, { rotation: rot(-61) }, 'LX-19'), row(S_CARVONE, { rotation: rot(61) }, 'LX-20')],
+      'review',
+    );
+    expect(alike.results[0]!.passed?.evidence).toBe(
+      'the enantiomer of 1 registered record; forms and rotations agree',
+    );
   });
   it('notes enantiomers of unequal rotation size; warns on enantiomers of different kinds of form', () => {
     const size = phase(
