@@ -4,7 +4,7 @@
  * report as the in-thread audit, and a usage-level exit (2) naming the file rather than a crash. Ordinary
  * structures (ethanol, L-alanine), invented claims.
  */
-import { mkdirSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { DEFAULT_CONFIG } from '../../src/audit/config.js';
@@ -104,5 +104,35 @@ describe('audit options given where they do nothing', () => {
     const quiet = memoryIo();
     expect(await run(['audit', '--root', reg.root, 'compounds/a.yml'], quiet)).toBe(0);
     expect(quiet.stderr).toEqual([]);
+  }, 60_000);
+});
+
+describe('audit --index-cache: a path that is not a cache', () => {
+  it('a folder, a device or a record file is refused (exit 2, named, the file untouched); a new path is written', async () => {
+    reg = tmpRegistry({
+      'compounds/a.yml': recordYaml('LX-00001', 'achiral', '', 'CCO'),
+      'compounds/b.yml': recordYaml('LX-00002', 'achiral', '', 'CCCO'),
+    });
+    const record = join(reg.root, 'compounds/b.yml');
+    const before = readFileSync(record, 'utf8');
+    const review = (cache: string) => cli(['--root', reg!.root, 'compounds/a.yml', '--index-cache', cache]);
+    const asRecord = await review(record);
+    expect(asRecord.code).toBe(2);
+    expect(asRecord.err).toContain(
+      `cannot keep the index cache in ${record}: the file there is not a stereogate index cache, and the run would replace it`,
+    );
+    expect(readFileSync(record, 'utf8')).toBe(before);
+    const folder = join(reg.root, 'compounds');
+    expect((await review(folder)).err).toContain(`cannot keep the index cache in ${folder}: it is a folder`);
+    // a device would be read without end (common practice, no source: /dev/zero is such a file on Linux)
+    if (existsSync('/dev/zero'))
+      expect((await review('/dev/zero')).err).toContain('/dev/zero: it is not a regular file');
+    const fresh = join(reg.root, 'cache', 'index.json');
+    const cold = await review(fresh);
+    expect(cold.code).toBe(0);
+    expect(cold.err).toContain(`cache written to ${fresh}`);
+    const warm = await review(fresh);
+    expect(warm.code).toBe(0);
+    expect(warm.err).toMatch(/[1-9]\d* from the cache/);
   }, 60_000);
 });

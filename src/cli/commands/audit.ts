@@ -20,6 +20,7 @@ import { isBulkInput } from '../../bulk/run.js';
 import { bulkAudit } from './bulk-audit.js';
 import { EXIT_CRASH, EXIT_FINDINGS, EXIT_OK, InputError, UsageError, type Command } from '../command.js';
 import { isInternalError } from '../../audit/findings.js';
+import { checkIndexCachePath } from '../index-cache-path.js';
 import { checkWritable, writeFailure } from '../output-path.js';
 import type { ProgressMode } from '../../bulk/progress.js';
 import { auditFolderPooled, pooledAudit, POOLED_FROM } from './audit-folder.js';
@@ -51,7 +52,8 @@ const USAGE = [
   '                       or none, on standard error',
   '  --index-cache FILE   with paths: keep the key index of the rest of the registry in FILE between runs, so',
   '                       that a later run reads only the record files whose content changed (default: no',
-  '                       cache; a missing, stale or damaged cache only costs time)',
+  '                       cache; a missing, stale or damaged cache only costs time; a folder, or a file',
+  '                       there that is not an index cache, is refused rather than replaced)',
   '',
   'Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error or a report',
   'file that cannot be written, 3 internal error (the report is still written; records it hit carry an',
@@ -131,6 +133,7 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       if (!(seconds > 0)) throw new UsageError('--record-timeout expects a positive number of seconds');
       const indexCache = values['index-cache'] as string | undefined;
       if (indexCache === '') throw new UsageError('--index-cache needs a file name');
+      if (indexCache !== undefined && positionals.length > 0) checkIndexCachePath(indexCache);
       const workers = typeof values.workers === 'string' ? Number(values.workers) : undefined;
       if (workers !== undefined && (!Number.isInteger(workers) || workers < 0))
         throw new UsageError('--workers expects a whole number (0: this thread)');
