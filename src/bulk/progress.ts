@@ -55,7 +55,7 @@ export function makeProgress(
     const left = total && rate > 0 && !final ? `, about ${Math.ceil((total - done) / rate)} s left` : '';
     stream.write(
       `stereogate: ${done.toLocaleString('en-US')}${total ? ' / ' + total.toLocaleString('en-US') : ''} records${pct}, ` +
-        `${rate.toFixed(0)} records/s${left}${final ? `, done in ${secs.toFixed(1)} s` : ''}\n`,
+        `${ratePerSecond(rate)} records/s${left}${final ? `, done in ${secs.toFixed(1)} s` : ''}\n`,
     );
   };
   return {
@@ -71,4 +71,9 @@ export function makeProgress(
       line(true);
     },
   };
+}
+
+/** A rate in words: whole numbers from 10 up, one decimal below (a slow or short run is not "0 records/s"). */
+export function ratePerSecond(rate: number): string {
+  return rate >= 10 || rate === 0 ? rate.toFixed(0) : rate.toFixed(1);
 }

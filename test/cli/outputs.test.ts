@@ -105,6 +105,12 @@ describe('bulk summary timing', () => {
       'stereogate bulk audit: 2500 records in 100.0 s (audit 20.0 s, 125 records/s; reports 80.0 s)',
     );
   });
+  it('a slow or short run: the rate with one decimal, never "0 records/s"', () => {
+    const short = { ...trailer, summary: { ...trailer.summary, records: 1 } };
+    expect(summaryTable(short, { seconds: 3.4, auditSeconds: 3.4 }).split('\n')[0]).toBe(
+      'stereogate bulk audit: 1 record in 3.4 s (audit 3.4 s, 0.3 records/s)',
+    );
+  });
 });
 
 describe('LICENSE', () => {

@@ -13,6 +13,7 @@ import type { BulkMapping } from '../../bulk/mapping.js';
 import { runBulkAudit } from '../../bulk/run.js';
 import { mergeShards, MergeError } from '../../bulk/merge.js';
 import { parseShard } from '../../bulk/sources.js';
+import { ratePerSecond } from '../../bulk/progress.js';
 import {
   csvWriter,
   jsonWriter,
@@ -176,7 +177,7 @@ function writersFor(
 /** Run time: the audit's rate on its own, and the time the reports took after it (drawing, writing). */
 function timing(records: number, time: { seconds: number; auditSeconds: number } | null): string {
   if (!time) return '';
-  const rate = (records / Math.max(time.auditSeconds, 0.001)).toFixed(0);
+  const rate = ratePerSecond(records / Math.max(time.auditSeconds, 0.001));
   const reports = Math.max(0, time.seconds - time.auditSeconds);
   return (
     ` in ${time.seconds.toFixed(1)} s (audit ${time.auditSeconds.toFixed(1)} s, ${rate} records/s` +
