@@ -59,7 +59,9 @@ export function poolLimitMs(budget: Budget): number {
 }
 
 export async function runFolderAudit(opts: FolderRunOptions): Promise<FolderRunResult> {
-  const workers = opts.workers ?? Math.max(1, availableParallelism());
+  // never more workers than record files: each costs a heap and a start-up (--workers 64 on 3 files starts 3)
+  const asked = opts.workers ?? Math.max(1, availableParallelism());
+  const workers = asked === 0 ? 0 : Math.min(asked, Math.max(1, opts.folder.items.length));
   const setup: FolderSetup = {
     kind: 'record-files',
     config: opts.config,

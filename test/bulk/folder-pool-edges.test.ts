@@ -77,6 +77,30 @@ describe('pooled folder audit: awkward runs', () => {
     expect(out[2]!.result.passed.length).toBeGreaterThan(0);
   }, 60_000);
 
+  it('--workers above the number of record files starts one worker per file, not more', async () => {
+    reg = tmpRegistry({
+      'compounds/a.yml': recordYaml('LX-00001', 'achiral', '', 'CCO'),
+      'compounds/b.yml': recordYaml('LX-00002', 'achiral', '', 'CCCO'),
+    });
+    const folder = readRecordFolder(reg.root, listRecordFiles(reg.root, ['compounds']));
+    let window = -1;
+    const result = await runFolderAudit({
+      folder,
+      config: { ...DEFAULT_CONFIG },
+      budget: { timeMs: 20_000, memoryMb: 1024 },
+      workers: 64,
+      json: false,
+      progress: 'none',
+      onRecord: () => undefined,
+      checks: CHECKS,
+      batchSize: 1,
+      onPoolStats: (s) => (window = s.window),
+    });
+    expect(result.summary.records).toBe(2);
+    // the pool's window is 4 batches per worker (src/bulk/pool.ts): 2 workers of batches of 1 give 8, 64 would 256
+    expect(window).toBe(8);
+  }, 60_000);
+
   it('a report path that is a folder: exit 2 naming it, before any record is audited', async () => {
     reg = tmpRegistry({ 'compounds/a.yml': recordYaml('LX-00001', 'achiral', '', 'CCO') });
     const folder = join(reg.root, 'out');
