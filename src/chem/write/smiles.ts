@@ -6,7 +6,7 @@
  * Syntax: OpenSMILES specification (bracket atoms, bonds, branches, ring closures).
  */
 import type { Atom, Structure } from '../types.js';
-import { implicitHydrogens, atomicNumberOf, defaultValences } from '../read/valence.js';
+import { implicitHydrogens, atomicNumberOf, defaultValences, isMetal } from '../read/valence.js';
 import { assignBondDirections } from './smiles-directions.js';
 import { chiralMarks, type Emission } from './smiles-stereo.js';
 
@@ -122,9 +122,16 @@ export function writeSmilesWithOrder(
   const chir = withStereo ? chiralMarks(s, em) : new Map<number, string>();
   const dir = withStereo ? assignBondDirections(s, em) : new Map<number, number>();
   const valence = new Int32Array(s.atoms.length);
+  // bonds to metals, which the readers do not count against a neutral N's three (read/valence.ts)
+  const toMetal = new Int32Array(s.atoms.length);
+  const metal = (i: number) => isMetal(atomicNumberOf(s.atoms[i]!.element) ?? 0);
   for (const b of s.bonds) {
     if (b.a >= 0 && b.a < valence.length) valence[b.a] += b.order;
     if (b.b >= 0 && b.b < valence.length && b.b !== b.a) valence[b.b] += b.order;
+    if (b.a >= 0 && b.a < valence.length && b.b >= 0 && b.b < valence.length && b.b !== b.a) {
+      if (metal(b.b)) toMetal[b.a] += b.order;
+      if (metal(b.a)) toMetal[b.b] += b.order;
+    }
   }
   const out: string[] = [];
   const freeDigits: number[] = [];
@@ -166,7 +173,7 @@ export function writeSmilesWithOrder(
         continue;
       }
       if (em.parentBond[u]! >= 0) out.push(bondText(em.parentBond[u]!));
-      out.push(atomText(s.atoms[u]!, valence[u]!, chir.get(u) ?? ''));
+      out.push(atomText(s.atoms[u]!, valence[u]!, chir.get(u) ?? '', toMetal[u]!));
       const release: number[] = [];
       for (const k of em.ringClose[u]!) {
         const d = digitOf.get(k)!;
@@ -225,7 +232,7 @@ function ringDigit(d: number): string {
   return d < 10 ? String(d) : d < 100 ? `%${d}` : `%(${d})`;
 }
 
-function atomText(a: Atom, valence: number, chir: string): string {
+function atomText(a: Atom, valence: number, chir: string, toMetal: number): string {
   let sym = a.element;
   let isotope = a.isotope;
   if (sym === 'D' || sym === 'T') {
@@ -240,10 +247,11 @@ function atomText(a: Atom, valence: number, chir: string): string {
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
       // A neutral N with bond-order sum 4 in the organic subset would get 1 H (valence 5) by the OpenSMILES rule,
-      // but our readers refuse a neutral N with four bonds and no explicit H (valence.ts): write [NH] so that
-      // what was read (an [nH] given an extra double bond, say) reads back the same.
+      // but our readers refuse a neutral N with four bonds, none of them to a metal, and no explicit H
+      // (valence.ts): write [NH] so that what was read (an [nH] given an extra double bond, say) reads back.
       bracket =
-        implicitHydrogens(atomicNumberOf(sym)!, 0, valence) !== a.hCount || (sym === 'N' && valence === 4);
+        implicitHydrogens(atomicNumberOf(sym)!, 0, valence) !== a.hCount ||
+        (sym === 'N' && valence === 4 && toMetal === 0);
     }
   }
   if (!bracket) return sym;
