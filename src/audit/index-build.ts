@@ -11,6 +11,7 @@ import type { Budget } from '../chem/budget.js';
 import { mapOrdered } from '../bulk/pool.js';
 import { BlobIds, gitBlobIds } from '../registry/blob-ids.js';
 import {
+  cachePathProblem,
   entryRow,
   readIndexCache,
   writeIndexCache,
@@ -59,8 +60,13 @@ export class RecordIndex {
   private usedWorkers = 0;
   private cache: CacheRead | null = null;
 
+  /** Why the cache path given cannot hold the cache (inside a record folder), or null. */
+  private readonly cacheRefused: string | null;
+
   private constructor(private readonly opts: IndexBuildOptions) {
     this.entries = new Array<IndexEntry>(opts.files.length);
+    this.cacheRefused =
+      opts.cachePath === null ? null : cachePathProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
   }
 
   /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */
@@ -75,7 +81,7 @@ export class RecordIndex {
   }
 
   private get useCache(): boolean {
-    return this.opts.cachePath !== null && this.opts.defaultEngine;
+    return this.opts.cachePath !== null && this.opts.defaultEngine && this.cacheRefused === null;
   }
 
   private async fill(): Promise<void> {
@@ -192,6 +198,7 @@ export class RecordIndex {
       `${this.described} described for their keys`,
     ];
     if (this.usedWorkers > 0) parts.push(plural(this.usedWorkers, 'worker'));
+    if (this.cacheRefused !== null) parts.push(`cache not used: ${this.cacheRefused}`);
     if (this.cache && this.cache.status !== 'used') parts.push(`cache not used: ${this.cache.reason}`);
     const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
     if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== 'used')) {

@@ -5,10 +5,9 @@
  * of a read that never ends or a file overwritten.
  */
 import { closeSync, openSync, readSync, statSync } from 'node:fs';
+import { INDEX_CACHE_FORMAT as CACHE_FORMAT } from '../registry/index-cache.js';
 import { InputError } from './command.js';
 
-/** The format name every cache file states near its start (src/registry/index-cache.ts writes it). */
-const CACHE_FORMAT = 'stereogate registry index cache';
 const HEAD_BYTES = 256;
 
 export function checkIndexCachePath(path: string): void {

@@ -12,8 +12,9 @@
  * missing, stale or damaged cache only costs time, never a finding. Written to a temporary file and renamed, so
  * a run that stops half-way leaves the previous cache whole.
  */
-import { mkdirSync, readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs';
-import { dirname } from 'node:path';
+import { mkdirSync, readFileSync, realpathSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { relativeTo } from './files.js';
 import { isString, restOf, rowFromRest } from './index-cache-shape.js';
 import type { IndexRow } from './keys.js';
 
@@ -50,7 +51,11 @@ export interface CacheSettings {
   axisOrthoMin: number;
 }
 
-const FORMAT = 'stereogate registry index cache';
+/** The format name every cache file's header states (the CLI looks for it before it lets a run replace a file). */
+export const INDEX_CACHE_FORMAT = 'stereogate registry index cache';
+const FORMAT = INDEX_CACHE_FORMAT;
+/** A cache larger than this is not read (200,000 records make about 19 MB). */
+const MAX_CACHE_BYTES = 1 << 30;
 const FORMAT_VERSION = 4;
 const END = 'end\t';
 
@@ -76,6 +81,10 @@ export function entryRow(e: IndexEntry): IndexRowData | null {
 export function readIndexCache(path: string, settings: CacheSettings): CacheRead {
   let text: string;
   try {
+    const stat = statSync(path);
+    if (!stat.isFile()) return { status: 'unreadable', entries: [], reason: `${path} is not a regular file` };
+    if (stat.size > MAX_CACHE_BYTES)
+      return { status: 'unreadable', entries: [], reason: `${path} is larger than 1 GiB` };
     text = readFileSync(path, 'utf8');
   } catch {
     return { status: 'missing', entries: [], reason: 'no cache file yet' };
@@ -128,6 +137,13 @@ export function writeIndexCache(
 ): string | null {
   const tmp = `${path}.${process.pid}.tmp`;
   try {
+    let stat = null;
+    try {
+      stat = statSync(path);
+    } catch {
+      // not there yet
+    }
+    if (stat && !stat.isFile()) return `${path} is not a regular file, so it is not replaced`;
     mkdirSync(dirname(path), { recursive: true });
     const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
     const lines = entries.map(lineOf);
@@ -230,4 +246,34 @@ function molfilesOf(text: string): [string, string][] | null {
     raw.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1]))
     ? (raw as [string, string][])
     : null;
+}
+
+/**
+ * Why `path` cannot hold the index cache of the registry at `realRoot`, or null. A path inside a record folder
+ * would be read as a record, or replace one: the cache is neither read nor written there.
+ */
+export function cachePathProblem(
+  path: string,
+  realRoot: string,
+  recordDirs: readonly string[],
+): string | null {
+  let abs = resolve(path);
+  try {
+    abs = realpathSync(abs);
+  } catch {
+    try {
+      abs = resolve(realpathSync(dirname(abs)), abs.slice(dirname(abs).length + 1));
+    } catch {
+      // its folder does not exist yet: the cache makes it, outside any existing record folder
+    }
+  }
+  const rel = relativeTo(realRoot, abs);
+  if (rel.startsWith('../') || rel === '..' || rel.startsWith('/')) return null;
+  const dirs = recordDirs.length > 0 ? recordDirs : ['.'];
+  for (const d of dirs) {
+    const dir = d.replace(/^\.\/?/, '').replace(/\/+$/, '');
+    if (dir === '' || rel === dir || rel.startsWith(`${dir}/`))
+      return `${path} is inside the record folder ${dir === '' ? '.' : dir}, where it would be taken for a record`;
+  }
+  return null;
 }

@@ -7,7 +7,7 @@
  * (test/checks/consistent-with-registry.test.ts).
  */
 import { afterEach, describe, expect, it } from 'vitest';
-import { mkdirSync, readFileSync, rmSync, symlinkSync, unlinkSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, rmSync, symlinkSync, unlinkSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { loadConfig } from '../../src/audit/config.js';
 import { defaultEngine } from '../../src/audit/engine.js';
@@ -331,5 +331,28 @@ describe('a review through the key index', () => {
     demo = demoCopy(true);
     const run = await indexReview(demo.root, ['compounds'], null);
     expect(run.result.registry?.reason).toContain('every record with each record before it');
+  });
+
+  it('a cache path that would read or replace a record, or that is a folder, is not used: same findings, nothing overwritten', async () => {
+    demo = demoCopy(true);
+    const paths = addRecords(demo);
+    const reference = await loadedReview(demo.root, paths);
+    const record = join(demo.root, 'compounds/LX-00005.yml');
+    const before = readFileSync(record, 'utf8');
+    // the action's input reaches the cache code without the CLI's check: the cache code itself refuses
+    const onRecord = await indexReview(demo.root, paths, record);
+    expect(onRecord.seen).toBe(reference);
+    expect(onRecord.log[0]).toMatch(/cache not used: .*inside the record folder compounds/);
+    expect(readFileSync(record, 'utf8')).toBe(before);
+    const inFolder = await indexReview(demo.root, paths, join(demo.root, 'compounds', 'cache.json'));
+    expect(inFolder.seen).toBe(reference);
+    expect(existsSync(join(demo.root, 'compounds', 'cache.json'))).toBe(false);
+    const folder = join(demo.root, 'a-folder');
+    mkdirSync(folder);
+    const onFolder = await indexReview(demo.root, paths, folder);
+    expect(onFolder.seen).toBe(reference);
+    expect(onFolder.log[0]).toMatch(
+      /cache not used: .*not a regular file.*cache not written: .*not a regular file/,
+    );
   });
 });
