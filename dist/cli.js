@@ -6091,9 +6091,15 @@ function writeSmilesWithOrder(s, opts = {}) {
   const chir = withStereo2 ? chiralMarks(s, em) : /* @__PURE__ */ new Map();
   const dir = withStereo2 ? assignBondDirections(s, em) : /* @__PURE__ */ new Map();
   const valence = new Int32Array(s.atoms.length);
+  const toMetal = new Int32Array(s.atoms.length);
+  const metal = (i) => isMetal(atomicNumberOf(s.atoms[i].element) ?? 0);
   for (const b of s.bonds) {
     if (b.a >= 0 && b.a < valence.length) valence[b.a] += b.order;
     if (b.b >= 0 && b.b < valence.length && b.b !== b.a) valence[b.b] += b.order;
+    if (b.a >= 0 && b.a < valence.length && b.b >= 0 && b.b < valence.length && b.b !== b.a) {
+      if (metal(b.b)) toMetal[b.a] += b.order;
+      if (metal(b.a)) toMetal[b.b] += b.order;
+    }
   }
   const out = [];
   const freeDigits = [];
@@ -6134,7 +6140,7 @@ function writeSmilesWithOrder(s, opts = {}) {
         continue;
       }
       if (em.parentBond[u] >= 0) out.push(bondText(em.parentBond[u]));
-      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? ""));
+      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? "", toMetal[u]));
       const release2 = [];
       for (const k of em.ringClose[u]) {
         const d = digitOf.get(k);
@@ -6187,7 +6193,7 @@ function impliedRadical(a, valence) {
 function ringDigit(d) {
   return d < 10 ? String(d) : d < 100 ? `%${d}` : `%(${d})`;
 }
-function atomText(a, valence, chir) {
+function atomText(a, valence, chir, toMetal) {
   let sym = a.element;
   let isotope = a.isotope;
   if (sym === "D" || sym === "T") {
@@ -6201,7 +6207,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4 && toMetal === 0;
     }
   }
   if (!bracket) return sym;
@@ -32366,12 +32372,12 @@ function describe(input, opts = {}) {
       chiral: null,
       fixedAtoms: [],
       fixedBonds: [],
-      explanation: "open: the configuration of a stereogenic axis or helix is not stated by the input format"
+      explanation: "open: the input does not state the configuration of a stereogenic axis"
     };
   }
   if (stoppedLabels > 0) {
     facts.remarks.push(
-      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`
+      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels === 1 ? "1 drawn stereo unit was" : `${stoppedLabels} drawn stereo units were`} left without a descriptor (open, not a finding that none applies)`
     );
   }
   if (mixture) {
@@ -32431,7 +32437,14 @@ function unitFacts(a, labels) {
       equivalenceClass: classIds.get(ck),
       classKey: ck,
       component: p.componentOfAtom[u.atoms[0]],
-      ...!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true } : {}
+      ...!u.defined && cannotState(u.kind, s.dimension) ? {
+        formatCannotState: true,
+        openBecause: unstatedReason(
+          u.kind,
+          u.atoms.map((x) => s.atoms[x].inputNumber),
+          s
+        )
+      } : {}
     });
   });
   return out;
@@ -32439,6 +32452,15 @@ function unitFacts(a, labels) {
 function cannotState(kind, dimension) {
   if (kind === "planar") return dimension !== 3;
   return dimension === 0 && (kind === "biaryl" || kind === "helix");
+}
+function unstatedReason(kind, atoms, s) {
+  if (kind === "planar" && s.dimension === 2) return "2D coordinates cannot state its configuration";
+  if (kind === "biaryl") {
+    if (wedgeNearAxis(s, atoms[0], atoms[1]) !== null)
+      return "a wedge without 2D coordinates fixes no configuration";
+    return "a SMILES without 2D coordinates and wedges cannot state its configuration";
+  }
+  return "a SMILES cannot state its configuration";
 }
 function unstatedRemark(u, s) {
   const [x, y] = u.atoms;
@@ -32449,7 +32471,7 @@ function unstatedRemark(u, s) {
       return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
   }
   const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
-  return `${what}; the input format cannot state its configuration: ${then}`;
+  return `${what}; ${u.openBecause ?? "the input cannot state its configuration"}: ${then}`;
 }
 function wedgeNearAxis(s, x, y) {
   const near = /* @__PURE__ */ new Set();
@@ -32970,7 +32992,7 @@ function speciesMismatch(inA, inB) {
     const [nb, mb] = count4(inB, key3);
     const f = inA.find((x) => x.key === key3).formula;
     if (na !== nb)
-      return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
+      return `same constitution, different mixtures: A holds ${na} ${na === 1 ? "stereoisomer" : "stereoisomers"} of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
     if (na > 1 && ma !== mb)
       return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
@@ -33020,7 +33042,10 @@ function formDiffs(A, B, inA, inB, others2) {
       const nb = copies(inB, key3);
       if (na !== nb) {
         const f = inA.find((x) => x.key === key3).formula;
-        out.push({ kind: "ratio", explanation: `A holds ${na} molecule(s) of ${f}, B ${nb}` });
+        out.push({
+          kind: "ratio",
+          explanation: `A holds ${na} ${na === 1 ? "molecule" : "molecules"} of ${f}, B ${nb}`
+        });
       }
     }
   }
@@ -43816,7 +43841,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve7.call(this, root, ref);
+      let _sch = resolve8.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -43843,7 +43868,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve7(root, ref) {
+    function resolve8(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -44707,7 +44732,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve7(baseURI, relativeURI, options) {
+    function resolve8(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -45098,7 +45123,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES: SCHEMES2,
       normalize: normalize2,
-      resolve: resolve7,
+      resolve: resolve8,
       resolveComponent,
       equal,
       serialize,
@@ -48187,7 +48212,10 @@ function explainOne(e, value, what) {
       return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
     }
     case "minItems":
-      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
+      return {
+        path,
+        message: `${label}: needs at least ${itemCount(e.params.limit)}`
+      };
     case "oneOf": {
       if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
         return {
@@ -48221,7 +48249,7 @@ function explain(errors, value, what) {
   }
   return out;
 }
-var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, configValidator, TYPE_WORDS;
+var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, configValidator, TYPE_WORDS, itemCount;
 var init_schema = __esm({
   "src/registry/schema.ts"() {
     "use strict";
@@ -48264,6 +48292,7 @@ var init_schema = __esm({
       array: "a list",
       boolean: "true or false"
     };
+    itemCount = (n) => `${n} ${n === 1 ? "item" : "items"}`;
   }
 });
 
@@ -49799,7 +49828,8 @@ function compareWithRegistry(me, matches, mode, config, underReview = () => fals
     }
   }
   const identical = pairs.filter((p) => p.relation === "identical").length;
-  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}; forms and rotations agree`;
+  const rotations = out.some((f) => f.messageId === "enantiomer-rotations-not-compared") ? "; forms agree, rotations not compared (see the note)" : "; forms and rotations agree";
+  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}` + rotations;
   return { findings: out, passed, pairs };
 }
 function run3() {
@@ -50163,6 +50193,7 @@ var init_registry_phase = __esm({
     "use strict";
     init_consistent_with_registry();
     init_waivers();
+    init_words();
     init_key_index();
     init_findings();
     CHECK = consistentWithRegistry;
@@ -50247,7 +50278,7 @@ var init_registry_phase = __esm({
         return { findings, passed };
       }
       summary() {
-        const how = this.options.mode === "full" ? `every record with each record before it through an index of ${this.index.size} records' keys` : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
+        const how = this.options.mode === "full" ? `every record with each record before it through an index of the keys of ${plural(this.index.size, "record")}` : `each record under review with the whole registry (${plural(this.registryRecords, "record")}) through its key index`;
         return {
           status: this.enabled ? "run" : "not-run",
           reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
@@ -50806,7 +50837,7 @@ var init_form_matches_structure = __esm({
       "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
       "enantiomer-but-drawn-mixture": "Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows (racemate, enantioenriched, diastereomer-mixture).",
       "racemate-drawn-not-racemic": "Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.",
-      "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the claim checked.",
+      "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the structure as given cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar twist; 2D coordinates state no planar twist), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Draw the unit to have the claim checked: an axis with wedges in a molfile or a CXSMILES with 2D coordinates, a helix or a planar twist with 3D coordinates.",
       ...mixtureMessages
     };
     formMatchesStructure = {
@@ -51522,7 +51553,7 @@ var init_descriptors_match_structure = __esm({
       "descriptor-at-undefined-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
       "descriptor-counts-mismatch": "{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.",
       "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount:configuration|configurations}), but the structure defines only {definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
-      "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.",
+      "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the structure as given cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar twist; 2D coordinates state no planar twist). Draw the unit to have the descriptors checked: an axis with wedges in a molfile or a CXSMILES with 2D coordinates, a helix or a planar twist with 3D coordinates.",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
       "descriptor-on-invertible-nitrogen": "{field} declares {text}, but the structure has no stereo unit: its only configuration is drawn at {atoms}, an ordinary amine nitrogen that inverts rapidly and is not a stereocentre, so the descriptors describe nothing that can be isolated. Drop them{seeAlso}.",
@@ -53156,8 +53187,8 @@ var init_index_cache_shape = __esm({
 });
 
 // src/registry/index-cache.ts
-import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
-import { dirname as dirname2 } from "node:path";
+import { mkdirSync, readFileSync as readFileSync2, realpathSync as realpathSync4, renameSync, rmSync, statSync as statSync3, writeFileSync } from "node:fs";
+import { dirname as dirname2, resolve as resolve4 } from "node:path";
 function entryRow(e) {
   if (e.row === null && e.rest !== null) {
     e.row = rowFromRest(e.rest, e.file, e.id, e.idLine);
@@ -53169,6 +53200,10 @@ function entryRow(e) {
 function readIndexCache(path, settings) {
   let text;
   try {
+    const stat = statSync3(path);
+    if (!stat.isFile()) return { status: "unreadable", entries: [], reason: `${path} is not a regular file` };
+    if (stat.size > MAX_CACHE_BYTES)
+      return { status: "unreadable", entries: [], reason: `${path} is larger than 1 GiB` };
     text = readFileSync2(path, "utf8");
   } catch {
     return { status: "missing", entries: [], reason: "no cache file yet" };
@@ -53210,6 +53245,12 @@ function readIndexCache(path, settings) {
 function writeIndexCache(path, settings, entries) {
   const tmp = `${path}.${process.pid}.tmp`;
   try {
+    let stat = null;
+    try {
+      stat = statSync3(path);
+    } catch {
+    }
+    if (stat && !stat.isFile()) return `${path} is not a regular file, so it is not replaced`;
     mkdirSync(dirname2(path), { recursive: true });
     const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
     const lines2 = entries.map(lineOf2);
@@ -53288,12 +53329,35 @@ function molfilesOf(text) {
   }
   return Array.isArray(raw2) && raw2.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])) ? raw2 : null;
 }
-var FORMAT, FORMAT_VERSION, END, optional, COLUMNS;
+function cachePathProblem(path, realRoot, recordDirs) {
+  let abs = resolve4(path);
+  try {
+    abs = realpathSync4(abs);
+  } catch {
+    try {
+      abs = resolve4(realpathSync4(dirname2(abs)), abs.slice(dirname2(abs).length + 1));
+    } catch {
+    }
+  }
+  const rel = relativeTo(realRoot, abs);
+  if (rel.startsWith("../") || rel === ".." || rel.startsWith("/")) return null;
+  const dirs = recordDirs.length > 0 ? recordDirs : ["."];
+  for (const d of dirs) {
+    const dir = d.replace(/^\.\/?/, "").replace(/\/+$/, "");
+    if (dir === "" || rel === dir || rel.startsWith(`${dir}/`))
+      return `${path} is inside the record folder ${dir === "" ? "." : dir}, where it would be taken for a record`;
+  }
+  return null;
+}
+var INDEX_CACHE_FORMAT, FORMAT, MAX_CACHE_BYTES, FORMAT_VERSION, END, optional, COLUMNS;
 var init_index_cache = __esm({
   "src/registry/index-cache.ts"() {
     "use strict";
+    init_files();
     init_index_cache_shape();
-    FORMAT = "stereogate registry index cache";
+    INDEX_CACHE_FORMAT = "stereogate registry index cache";
+    FORMAT = INDEX_CACHE_FORMAT;
+    MAX_CACHE_BYTES = 1 << 30;
     FORMAT_VERSION = 4;
     END = "end	";
     optional = (s) => s === null ? "" : `=${escape2(s)}`;
@@ -53476,8 +53540,8 @@ async function* mapOrdered(items, opts) {
         yield value;
       }
       if (inputDone && nextOut >= nextIndex) break;
-      await new Promise((resolve7) => {
-        wake = resolve7;
+      await new Promise((resolve8) => {
+        wake = resolve8;
         if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
       });
     }
@@ -53561,11 +53625,13 @@ var init_index_build = __esm({
     init_index_cache();
     init_index_keys();
     init_version();
+    init_words();
     MIN_FILES_FOR_WORKERS = 2e3;
     RecordIndex = class _RecordIndex {
       constructor(opts) {
         this.opts = opts;
         this.entries = new Array(opts.files.length);
+        this.cacheRefused = opts.cachePath === null ? null : cachePathProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
       }
       opts;
       /** One entry per file, in the order of the files. */
@@ -53577,6 +53643,8 @@ var init_index_build = __esm({
       reused = 0;
       usedWorkers = 0;
       cache = null;
+      /** Why the cache path given cannot hold the cache (inside a record folder), or null. */
+      cacheRefused;
       /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */
       static async open(opts) {
         const index = new _RecordIndex(opts);
@@ -53587,7 +53655,7 @@ var init_index_build = __esm({
         return { version: VERSION, axisOrthoMin: this.opts.axisOrthoMin };
       }
       get useCache() {
-        return this.opts.cachePath !== null && this.opts.defaultEngine;
+        return this.opts.cachePath !== null && this.opts.defaultEngine && this.cacheRefused === null;
       }
       async fill() {
         const gitIds = this.opts.gitIds ?? gitBlobIds(this.opts.realRoot, this.opts.recordDirs);
@@ -53686,12 +53754,13 @@ var init_index_build = __esm({
       /** Writes the cache when anything changed; says in a sentence what was done (for the log). */
       save() {
         const parts = [
-          `${this.entries.length} record file(s)`,
+          plural(this.entries.length, "record file"),
           `${this.reused} from the cache`,
           `${this.read} read`,
           `${this.described} described for their keys`
         ];
-        if (this.usedWorkers > 0) parts.push(`${this.usedWorkers} worker(s)`);
+        if (this.usedWorkers > 0) parts.push(plural(this.usedWorkers, "worker"));
+        if (this.cacheRefused !== null) parts.push(`cache not used: ${this.cacheRefused}`);
         if (this.cache && this.cache.status !== "used") parts.push(`cache not used: ${this.cache.reason}`);
         const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
         if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== "used")) {
@@ -53893,8 +53962,8 @@ var init_review_against_index = __esm({
 });
 
 // src/audit/run.ts
-import { existsSync as existsSync2, realpathSync as realpathSync4, statSync as statSync3 } from "node:fs";
-import { resolve as resolve4 } from "node:path";
+import { existsSync as existsSync2, realpathSync as realpathSync5, statSync as statSync4 } from "node:fs";
+import { resolve as resolve5 } from "node:path";
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache2 = new StructureCache(options.engine);
@@ -54083,11 +54152,11 @@ function summarize(records) {
   return s;
 }
 async function openRegistry(options) {
-  const rootAbs = resolve4(options.root);
-  if (!existsSync2(rootAbs) || !statSync3(rootAbs).isDirectory()) {
+  const rootAbs = resolve5(options.root);
+  if (!existsSync2(rootAbs) || !statSync4(rootAbs).isDirectory()) {
     throw new ConfigError(`registry folder ${options.root} does not exist`);
   }
-  const root = realpathSync4(rootAbs);
+  const root = realpathSync5(rootAbs);
   const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
   const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
@@ -55035,7 +55104,7 @@ var require_cli_progress = __commonJS({
 });
 
 // src/cli/main.ts
-import { existsSync as existsSync5, readFileSync as readFileSync4, statSync as statSync5 } from "node:fs";
+import { existsSync as existsSync5, readFileSync as readFileSync4, statSync as statSync7 } from "node:fs";
 import { pathToFileURL } from "node:url";
 
 // src/cli/commands/compare.ts
@@ -55225,7 +55294,7 @@ init_chem();
 var yesNo = (v, open = "open (undefined stereo)") => v === null ? open : v ? "yes" : "no";
 function unitLine(u) {
   const where2 = u.atoms.length === 1 ? `${u.element}${u.atoms[0]}` : `${u.kind} ${u.atoms.join("–")}`;
-  const conf = u.defined ? u.label ?? "defined (no CIP label)" : u.formatCannotState ? "open (the input format cannot state it)" : "undefined";
+  const conf = u.defined ? u.label ?? "defined (no CIP label)" : u.formatCannotState ? `open (${u.openBecause ?? "the input cannot state it"})` : "undefined";
   const extra = [];
   if (u.pseudoasymmetric) extra.push("pseudoasymmetric");
   if (u.group)
@@ -55355,7 +55424,7 @@ ${CAUTION}`
 init_config();
 init_run();
 import { existsSync as existsSync4, writeFileSync as writeFileSync3 } from "node:fs";
-import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve6, sep as sep3 } from "node:path";
+import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve7, sep as sep3 } from "node:path";
 
 // src/report/json.ts
 function finding2(f) {
@@ -57651,7 +57720,7 @@ function makeProgress(mode, total, stream = process.stderr, every = { ms: 1e4 })
     const pct = total ? ` (${Math.floor(100 * done / total)}%)` : "";
     const left = total && rate > 0 && !final ? `, about ${Math.ceil((total - done) / rate)} s left` : "";
     stream.write(
-      `stereogate: ${done.toLocaleString("en-US")}${total ? " / " + total.toLocaleString("en-US") : ""} records${pct}, ${rate.toFixed(0)} records/s${left}${final ? `, done in ${secs.toFixed(1)} s` : ""}
+      `stereogate: ${done.toLocaleString("en-US")}${total ? " / " + total.toLocaleString("en-US") : ""} records${pct}, ${ratePerSecond(rate)} records/s${left}${final ? `, done in ${secs.toFixed(1)} s` : ""}
 `
     );
   };
@@ -57668,6 +57737,9 @@ function makeProgress(mode, total, stream = process.stderr, every = { ms: 1e4 })
       line2(true);
     }
   };
+}
+function ratePerSecond(rate) {
+  return rate >= 10 || rate === 0 ? rate.toFixed(0) : rate.toFixed(1);
 }
 
 // src/bulk/run.ts
@@ -58070,8 +58142,8 @@ function readKept(e) {
 init_findings();
 
 // src/cli/output-path.ts
-import { existsSync as existsSync3, statSync as statSync4 } from "node:fs";
-import { dirname as dirname3, resolve as resolve5 } from "node:path";
+import { existsSync as existsSync3, statSync as statSync5 } from "node:fs";
+import { dirname as dirname3, resolve as resolve6 } from "node:path";
 function writeFailureReason(e) {
   const code = e?.code;
   if (code === "ENOENT") return "its folder does not exist";
@@ -58084,10 +58156,10 @@ function writeFailure(path, e) {
   return `cannot write ${path}: ${writeFailureReason(e)}`;
 }
 function checkWritable(path, what) {
-  const dir = dirname3(resolve5(path));
-  if (!existsSync3(dir) || !statSync4(dir).isDirectory())
+  const dir = dirname3(resolve6(path));
+  if (!existsSync3(dir) || !statSync5(dir).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname3(path)} does not exist`);
-  if (existsSync3(path) && statSync4(path).isDirectory())
+  if (existsSync3(path) && statSync5(path).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: it is a folder`);
 }
 
@@ -58097,7 +58169,7 @@ init_version();
 var BULK_USAGE = `Bulk audit of legacy registries (SD files, CSV/TSV exports):
 
   stereogate audit <file.sdf|file.csv|file.tsv>… [options]
-  stereogate merge <shard.jsonl>… [--config FILE] [output options]
+  stereogate merge <shard.jsonl>… [--config FILE | --root DIR] [output options]
 
 Field mapping (SD data field or CSV column; defaults in parentheses):
   --map-id NAME           registry id (id; SD files fall back to the title line)
@@ -58120,6 +58192,7 @@ Running:
   --record-timeout SECS   per-record time limit (default 20)
   --progress MODE         auto | bar | lines | none (default auto: a bar on a terminal, lines in CI)
   --config FILE           tolerances and severities (stereogate.config.yml format)
+  --root DIR              folder whose stereogate.config.yml applies when --config is not given (default .)
 
 Outputs (any combination; the run always prints a summary table):
   --jsonl FILE            one JSON record per line, then a summary line (input to merge)
@@ -58223,7 +58296,7 @@ function writersFor(values, checks) {
 }
 function timing(records, time) {
   if (!time) return "";
-  const rate = (records / Math.max(time.auditSeconds, 1e-3)).toFixed(0);
+  const rate = ratePerSecond(records / Math.max(time.auditSeconds, 1e-3));
   const reports = Math.max(0, time.seconds - time.auditSeconds);
   return ` in ${time.seconds.toFixed(1)} s (audit ${time.auditSeconds.toFixed(1)} s, ${rate} records/s${reports >= 0.05 ? `; reports ${reports.toFixed(1)} s` : ""})`;
 }
@@ -58308,6 +58381,10 @@ async function bulkAuditRun(args, io) {
     format: { type: "string" }
   });
   if (positionals.length === 0) throw new UsageError("no bulk input given");
+  if (values.format !== void 0)
+    throw new UsageError(
+      "--format is for record files; a bulk audit writes each report to its own file: --jsonl, --json, --csv, --sarif or --html FILE"
+    );
   const failOn = checkFailOn(values["fail-on"]);
   const mapping = typeof values.mapping === "string" ? readMapping(values.mapping) : {};
   for (const k of FIELD_KEYS) {
@@ -58395,6 +58472,37 @@ var mergeShardsCommand = {
 
 // src/cli/commands/audit.ts
 init_findings();
+
+// src/cli/index-cache-path.ts
+init_index_cache();
+import { closeSync as closeSync3, openSync as openSync3, readSync as readSync3, statSync as statSync6 } from "node:fs";
+var HEAD_BYTES = 256;
+function checkIndexCachePath(path) {
+  let stat;
+  try {
+    stat = statSync6(path);
+  } catch {
+    return;
+  }
+  const refuse = (why) => {
+    throw new InputError(`cannot keep the index cache in ${path}: ${why}`);
+  };
+  if (stat.isDirectory()) refuse("it is a folder");
+  if (!stat.isFile()) refuse("it is not a regular file");
+  if (stat.size === 0) return;
+  const head = Buffer.alloc(HEAD_BYTES);
+  let fd = null;
+  try {
+    fd = openSync3(path, "r");
+    readSync3(fd, head, 0, head.length, 0);
+  } catch {
+    return;
+  } finally {
+    if (fd !== null) closeSync3(fd);
+  }
+  if (!head.toString("utf8").includes(INDEX_CACHE_FORMAT))
+    refuse("the file there is not a stereogate index cache, and the run would replace it");
+}
 
 // src/cli/commands/audit-folder.ts
 init_caution();
@@ -58528,7 +58636,8 @@ function poolLimitMs(budget) {
   return Math.ceil(budget.timeMs * 1.25) + 2e3;
 }
 async function runFolderAudit(opts) {
-  const workers = opts.workers ?? Math.max(1, availableParallelism3());
+  const asked = opts.workers ?? Math.max(1, availableParallelism3());
+  const workers = asked === 0 ? 0 : Math.min(asked, Math.max(1, opts.folder.items.length));
   const setup = {
     kind: "record-files",
     config: opts.config,
@@ -58821,7 +58930,8 @@ var USAGE = [
   "                       or none, on standard error",
   "  --index-cache FILE   with paths: keep the key index of the rest of the registry in FILE between runs, so",
   "                       that a later run reads only the record files whose content changed (default: no",
-  "                       cache; a missing, stale or damaged cache only costs time)",
+  "                       cache; a missing, stale or damaged cache only costs time; a folder, or a file",
+  "                       there that is not an index cache, is refused rather than replaced)",
   "",
   "Exit codes: 0 no finding at the --fail-on level, 1 findings at that level, 2 usage error or a report",
   "file that cannot be written, 3 internal error (the report is still written; records it hit carry an",
@@ -58838,13 +58948,13 @@ function hasInternalErrors(result2) {
   return result2.records.some((r) => r.findings.some(isInternalError));
 }
 function toRootPaths(paths, root) {
-  const rootAbs = resolve6(root);
+  const rootAbs = resolve7(root);
   return paths.map((p) => {
-    const abs = resolve6(p);
+    const abs = resolve7(p);
     if (!existsSync4(abs)) return p;
     const rel = relative3(rootAbs, abs);
     if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
-      if (existsSync4(resolve6(rootAbs, p))) return p;
+      if (existsSync4(resolve7(rootAbs, p))) return p;
       throw new UsageError(`${p} is outside the registry root ${root}`);
     }
     return rel.split(sep3).join("/") || ".";
@@ -58885,9 +58995,11 @@ function makeAuditCommand(deps = {}) {
       if (!(seconds > 0)) throw new UsageError("--record-timeout expects a positive number of seconds");
       const indexCache = values["index-cache"];
       if (indexCache === "") throw new UsageError("--index-cache needs a file name");
+      if (indexCache !== void 0 && positionals.length > 0) checkIndexCachePath(indexCache);
       const workers = typeof values.workers === "string" ? Number(values.workers) : void 0;
       if (workers !== void 0 && (!Number.isInteger(workers) || workers < 0))
         throw new UsageError("--workers expects a whole number (0: this thread)");
+      for (const line2 of ignoredOptions(paths.length > 0, args)) io.err(`stereogate: ${line2}`);
       const budget = { ...RECORD_BUDGET, timeMs: seconds * 1e3 };
       const common = { root, configFile: values.config, checks: deps.checks };
       try {
@@ -58924,7 +59036,7 @@ function makeAuditCommand(deps = {}) {
           checks: deps.checks,
           engine: deps.engine,
           budget,
-          ...indexCache === void 0 ? {} : { indexCache: resolve6(indexCache), log: (l) => io.err(`stereogate: ${l}`) }
+          ...indexCache === void 0 ? {} : { indexCache: resolve7(indexCache), log: (l) => io.err(`stereogate: ${l}`) }
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);
@@ -58955,6 +59067,11 @@ function makeAuditCommand(deps = {}) {
   };
 }
 var auditCommand = makeAuditCommand();
+function ignoredOptions(withPaths, args) {
+  const given = (name) => args.some((a) => a === `--${name}` || a.startsWith(`--${name}=`));
+  if (!withPaths) return given("index-cache") ? ["--index-cache applies with paths only: ignored"] : [];
+  return ["workers", "progress"].filter(given).map((n) => `--${n} applies to the audit of every record (no paths): ignored with paths`);
+}
 
 // src/cli/commands/index.ts
 var commands = [describeCommand, compareCommand, auditCommand, mergeShardsCommand];
@@ -58993,7 +59110,7 @@ function respawnForBulk(argv) {
   if (!script) return Promise.resolve(null);
   const args = respawnArgs(argv, process.execArgv, script, process.env, availableParallelism4());
   if (!args) return Promise.resolve(null);
-  return new Promise((resolve7) => {
+  return new Promise((resolve8) => {
     const child = spawn(process.execPath, args, {
       stdio: "inherit",
       env: { ...process.env, [NO_RESPAWN_ENV]: "1" }
@@ -59003,11 +59120,11 @@ function respawnForBulk(argv) {
     const onTerm = forward("SIGTERM");
     process.on("SIGINT", onInt);
     process.on("SIGTERM", onTerm);
-    child.on("error", () => resolve7(null));
+    child.on("error", () => resolve8(null));
     child.on("exit", (code, signal) => {
       process.off("SIGINT", onInt);
       process.off("SIGTERM", onTerm);
-      resolve7(code ?? (signal ? 128 + (signal === "SIGINT" ? 2 : 15) : 1));
+      resolve8(code ?? (signal ? 128 + (signal === "SIGINT" ? 2 : 15) : 1));
     });
   });
 }
@@ -59019,7 +59136,7 @@ var nodeIo = {
   err: (t) => process.stderr.write(t.endsWith("\n") ? t : `${t}
 `),
   readFile: (p) => readFileSync4(p, "utf8"),
-  isFile: (p) => p.length < 4096 && existsSync5(p) && statSync5(p).isFile(),
+  isFile: (p) => p.length < 4096 && existsSync5(p) && statSync7(p).isFile(),
   readStdin: () => readFileSync4(0, "utf8")
 };
 function overview() {

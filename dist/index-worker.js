@@ -6082,9 +6082,15 @@ function writeSmilesWithOrder(s, opts = {}) {
   const chir = withStereo2 ? chiralMarks(s, em) : /* @__PURE__ */ new Map();
   const dir = withStereo2 ? assignBondDirections(s, em) : /* @__PURE__ */ new Map();
   const valence = new Int32Array(s.atoms.length);
+  const toMetal = new Int32Array(s.atoms.length);
+  const metal = (i) => isMetal(atomicNumberOf(s.atoms[i].element) ?? 0);
   for (const b of s.bonds) {
     if (b.a >= 0 && b.a < valence.length) valence[b.a] += b.order;
     if (b.b >= 0 && b.b < valence.length && b.b !== b.a) valence[b.b] += b.order;
+    if (b.a >= 0 && b.a < valence.length && b.b >= 0 && b.b < valence.length && b.b !== b.a) {
+      if (metal(b.b)) toMetal[b.a] += b.order;
+      if (metal(b.a)) toMetal[b.b] += b.order;
+    }
   }
   const out = [];
   const freeDigits = [];
@@ -6125,7 +6131,7 @@ function writeSmilesWithOrder(s, opts = {}) {
         continue;
       }
       if (em.parentBond[u] >= 0) out.push(bondText(em.parentBond[u]));
-      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? ""));
+      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? "", toMetal[u]));
       const release2 = [];
       for (const k of em.ringClose[u]) {
         const d = digitOf.get(k);
@@ -6178,7 +6184,7 @@ function impliedRadical(a, valence) {
 function ringDigit(d) {
   return d < 10 ? String(d) : d < 100 ? `%${d}` : `%(${d})`;
 }
-function atomText(a, valence, chir) {
+function atomText(a, valence, chir, toMetal) {
   let sym = a.element;
   let isotope = a.isotope;
   if (sym === "D" || sym === "T") {
@@ -6192,7 +6198,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4 && toMetal === 0;
     }
   }
   if (!bracket) return sym;
@@ -32357,12 +32363,12 @@ function describe(input, opts = {}) {
       chiral: null,
       fixedAtoms: [],
       fixedBonds: [],
-      explanation: "open: the configuration of a stereogenic axis or helix is not stated by the input format"
+      explanation: "open: the input does not state the configuration of a stereogenic axis"
     };
   }
   if (stoppedLabels > 0) {
     facts.remarks.push(
-      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`
+      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels === 1 ? "1 drawn stereo unit was" : `${stoppedLabels} drawn stereo units were`} left without a descriptor (open, not a finding that none applies)`
     );
   }
   if (mixture) {
@@ -32422,7 +32428,14 @@ function unitFacts(a, labels) {
       equivalenceClass: classIds.get(ck),
       classKey: ck,
       component: p.componentOfAtom[u.atoms[0]],
-      ...!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true } : {}
+      ...!u.defined && cannotState(u.kind, s.dimension) ? {
+        formatCannotState: true,
+        openBecause: unstatedReason(
+          u.kind,
+          u.atoms.map((x) => s.atoms[x].inputNumber),
+          s
+        )
+      } : {}
     });
   });
   return out;
@@ -32430,6 +32443,15 @@ function unitFacts(a, labels) {
 function cannotState(kind, dimension) {
   if (kind === "planar") return dimension !== 3;
   return dimension === 0 && (kind === "biaryl" || kind === "helix");
+}
+function unstatedReason(kind, atoms, s) {
+  if (kind === "planar" && s.dimension === 2) return "2D coordinates cannot state its configuration";
+  if (kind === "biaryl") {
+    if (wedgeNearAxis(s, atoms[0], atoms[1]) !== null)
+      return "a wedge without 2D coordinates fixes no configuration";
+    return "a SMILES without 2D coordinates and wedges cannot state its configuration";
+  }
+  return "a SMILES cannot state its configuration";
 }
 function unstatedRemark(u, s) {
   const [x, y] = u.atoms;
@@ -32440,7 +32462,7 @@ function unstatedRemark(u, s) {
       return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
   }
   const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
-  return `${what}; the input format cannot state its configuration: ${then}`;
+  return `${what}; ${u.openBecause ?? "the input cannot state its configuration"}: ${then}`;
 }
 function wedgeNearAxis(s, x, y) {
   const near = /* @__PURE__ */ new Set();
@@ -32961,7 +32983,7 @@ function speciesMismatch(inA, inB) {
     const [nb, mb] = count2(inB, key2);
     const f = inA.find((x) => x.key === key2).formula;
     if (na !== nb)
-      return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
+      return `same constitution, different mixtures: A holds ${na} ${na === 1 ? "stereoisomer" : "stereoisomers"} of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
     if (na > 1 && ma !== mb)
       return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
@@ -33011,7 +33033,10 @@ function formDiffs(A, B, inA, inB, others2) {
       const nb = copies(inB, key2);
       if (na !== nb) {
         const f = inA.find((x) => x.key === key2).formula;
-        out.push({ kind: "ratio", explanation: `A holds ${na} molecule(s) of ${f}, B ${nb}` });
+        out.push({
+          kind: "ratio",
+          explanation: `A holds ${na} ${na === 1 ? "molecule" : "molecules"} of ${f}, B ${nb}`
+        });
       }
     }
   }
@@ -48120,7 +48145,10 @@ function explainOne(e, value, what) {
       return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
     }
     case "minItems":
-      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
+      return {
+        path,
+        message: `${label}: needs at least ${itemCount(e.params.limit)}`
+      };
     case "oneOf": {
       if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
         return {
@@ -48154,6 +48182,7 @@ function explain(errors, value, what) {
   }
   return out;
 }
+var itemCount = (n) => `${n} ${n === 1 ? "item" : "items"}`;
 
 // src/registry/parse.ts
 function parseDocumentText(raw2) {

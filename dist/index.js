@@ -2173,9 +2173,9 @@ var require_dispatcher_base = __commonJS({
       }
       close(callback) {
         if (callback === void 0) {
-          return new Promise((resolve6, reject) => {
+          return new Promise((resolve7, reject) => {
             this.close((err2, data) => {
-              return err2 ? reject(err2) : resolve6(data);
+              return err2 ? reject(err2) : resolve7(data);
             });
           });
         }
@@ -2213,12 +2213,12 @@ var require_dispatcher_base = __commonJS({
           err2 = null;
         }
         if (callback === void 0) {
-          return new Promise((resolve6, reject) => {
+          return new Promise((resolve7, reject) => {
             this.destroy(err2, (err3, data) => {
               return err3 ? (
                 /* istanbul ignore next: should never error */
                 reject(err3)
-              ) : resolve6(data);
+              ) : resolve7(data);
             });
           });
         }
@@ -4485,8 +4485,8 @@ var require_util2 = __commonJS({
     function createDeferredPromise() {
       let res;
       let rej;
-      const promise = new Promise((resolve6, reject) => {
-        res = resolve6;
+      const promise = new Promise((resolve7, reject) => {
+        res = resolve7;
         rej = reject;
       });
       return { promise, resolve: res, reject: rej };
@@ -6737,12 +6737,12 @@ upgrade: ${upgrade}\r
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve6, reject) => {
+      const waitForDrain = () => new Promise((resolve7, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve6;
+          callback = resolve7;
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
@@ -7412,12 +7412,12 @@ var require_client_h2 = __commonJS({
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve6, reject) => {
+      const waitForDrain = () => new Promise((resolve7, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve6;
+          callback = resolve7;
         }
       });
       h2stream.on("close", onDrain).on("drain", onDrain);
@@ -7896,16 +7896,16 @@ var require_client = __commonJS({
         return this[kNeedDrain] < 2;
       }
       async [kClose]() {
-        return new Promise((resolve6) => {
+        return new Promise((resolve7) => {
           if (this[kSize]) {
-            this[kClosedResolve] = resolve6;
+            this[kClosedResolve] = resolve7;
           } else {
-            resolve6(null);
+            resolve7(null);
           }
         });
       }
       async [kDestroy](err2) {
-        return new Promise((resolve6) => {
+        return new Promise((resolve7) => {
           const requests = this[kQueue].splice(this[kPendingIdx]);
           for (let i = 0; i < requests.length; i++) {
             const request = requests[i];
@@ -7916,7 +7916,7 @@ var require_client = __commonJS({
               this[kClosedResolve]();
               this[kClosedResolve] = null;
             }
-            resolve6(null);
+            resolve7(null);
           };
           if (this[kHTTPContext]) {
             this[kHTTPContext].destroy(err2, callback);
@@ -7967,7 +7967,7 @@ var require_client = __commonJS({
         });
       }
       try {
-        const socket = await new Promise((resolve6, reject) => {
+        const socket = await new Promise((resolve7, reject) => {
           client[kConnector]({
             host,
             hostname,
@@ -7979,7 +7979,7 @@ var require_client = __commonJS({
             if (err2) {
               reject(err2);
             } else {
-              resolve6(socket2);
+              resolve7(socket2);
             }
           });
         });
@@ -8315,8 +8315,8 @@ var require_pool_base = __commonJS({
         if (this[kQueue].isEmpty()) {
           await Promise.all(this[kClients].map((c) => c.close()));
         } else {
-          await new Promise((resolve6) => {
-            this[kClosedResolve] = resolve6;
+          await new Promise((resolve7) => {
+            this[kClosedResolve] = resolve7;
           });
         }
       }
@@ -9585,7 +9585,7 @@ var require_readable = __commonJS({
         if (this._readableState.closeEmitted) {
           return null;
         }
-        return await new Promise((resolve6, reject) => {
+        return await new Promise((resolve7, reject) => {
           if (this[kContentLength] > limit) {
             this.destroy(new AbortError());
           }
@@ -9598,7 +9598,7 @@ var require_readable = __commonJS({
             if (signal?.aborted) {
               reject(signal.reason ?? new AbortError());
             } else {
-              resolve6(null);
+              resolve7(null);
             }
           }).on("error", noop).on("data", function(chunk) {
             limit -= chunk.length;
@@ -9617,7 +9617,7 @@ var require_readable = __commonJS({
     }
     async function consume(stream, type) {
       assert(!stream[kConsume]);
-      return new Promise((resolve6, reject) => {
+      return new Promise((resolve7, reject) => {
         if (isUnusable(stream)) {
           const rState = stream._readableState;
           if (rState.destroyed && rState.closeEmitted === false) {
@@ -9634,7 +9634,7 @@ var require_readable = __commonJS({
             stream[kConsume] = {
               type,
               stream,
-              resolve: resolve6,
+              resolve: resolve7,
               reject,
               length: 0,
               body: []
@@ -9704,18 +9704,18 @@ var require_readable = __commonJS({
       return buffer;
     }
     function consumeEnd(consume2) {
-      const { type, body, resolve: resolve6, stream, length } = consume2;
+      const { type, body, resolve: resolve7, stream, length } = consume2;
       try {
         if (type === "text") {
-          resolve6(chunksDecode(body, length));
+          resolve7(chunksDecode(body, length));
         } else if (type === "json") {
-          resolve6(JSON.parse(chunksDecode(body, length)));
+          resolve7(JSON.parse(chunksDecode(body, length)));
         } else if (type === "arrayBuffer") {
-          resolve6(chunksConcat(body, length).buffer);
+          resolve7(chunksConcat(body, length).buffer);
         } else if (type === "blob") {
-          resolve6(new Blob(body, { type: stream[kContentType] }));
+          resolve7(new Blob(body, { type: stream[kContentType] }));
         } else if (type === "bytes") {
-          resolve6(chunksConcat(body, length));
+          resolve7(chunksConcat(body, length));
         }
         consumeFinish(consume2);
       } catch (err2) {
@@ -9972,9 +9972,9 @@ var require_api_request = __commonJS({
     };
     function request(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve6, reject) => {
+        return new Promise((resolve7, reject) => {
           request.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve6(data);
+            return err2 ? reject(err2) : resolve7(data);
           });
         });
       }
@@ -10197,9 +10197,9 @@ var require_api_stream = __commonJS({
     };
     function stream(opts, factory, callback) {
       if (callback === void 0) {
-        return new Promise((resolve6, reject) => {
+        return new Promise((resolve7, reject) => {
           stream.call(this, opts, factory, (err2, data) => {
-            return err2 ? reject(err2) : resolve6(data);
+            return err2 ? reject(err2) : resolve7(data);
           });
         });
       }
@@ -10484,9 +10484,9 @@ var require_api_upgrade = __commonJS({
     };
     function upgrade(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve6, reject) => {
+        return new Promise((resolve7, reject) => {
           upgrade.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve6(data);
+            return err2 ? reject(err2) : resolve7(data);
           });
         });
       }
@@ -10578,9 +10578,9 @@ var require_api_connect = __commonJS({
     };
     function connect(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve6, reject) => {
+        return new Promise((resolve7, reject) => {
           connect.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve6(data);
+            return err2 ? reject(err2) : resolve7(data);
           });
         });
       }
@@ -14443,7 +14443,7 @@ var require_fetch = __commonJS({
       function dispatch({ body }) {
         const url = requestCurrentURL(request);
         const agent = fetchParams.controller.dispatcher;
-        return new Promise((resolve6, reject) => agent.dispatch(
+        return new Promise((resolve7, reject) => agent.dispatch(
           {
             path: url.pathname + url.search,
             origin: url.origin,
@@ -14519,7 +14519,7 @@ var require_fetch = __commonJS({
               }
               this.body = new Readable({ read: resume });
               const onError = this.onError.bind(this);
-              resolve6({
+              resolve7({
                 status,
                 statusText,
                 headersList,
@@ -14562,7 +14562,7 @@ var require_fetch = __commonJS({
               for (let i = 0; i < rawHeaders.length; i += 2) {
                 headersList.append(bufferToLowerCasedHeaderName(rawHeaders[i]), rawHeaders[i + 1].toString("latin1"), true);
               }
-              resolve6({
+              resolve7({
                 status,
                 statusText: STATUS_CODES[status],
                 headersList,
@@ -18303,8 +18303,8 @@ var require_util8 = __commonJS({
       return true;
     }
     function delay(ms) {
-      return new Promise((resolve6) => {
-        setTimeout(resolve6, ms).unref();
+      return new Promise((resolve7) => {
+        setTimeout(resolve7, ms).unref();
       });
     }
     module.exports = {
@@ -29899,7 +29899,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve6.call(this, root, ref);
+      let _sch = resolve7.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -29926,7 +29926,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve6(root, ref) {
+    function resolve7(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -30790,7 +30790,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve6(baseURI, relativeURI, options) {
+    function resolve7(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -31181,7 +31181,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES: SCHEMES2,
       normalize: normalize2,
-      resolve: resolve6,
+      resolve: resolve7,
       resolveComponent,
       equal,
       serialize,
@@ -34270,7 +34270,10 @@ function explainOne(e, value, what) {
       return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
     }
     case "minItems":
-      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
+      return {
+        path,
+        message: `${label}: needs at least ${itemCount(e.params.limit)}`
+      };
     case "oneOf": {
       if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
         return {
@@ -34304,7 +34307,7 @@ function explain(errors, value, what) {
   }
   return out;
 }
-var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, configValidator, TYPE_WORDS;
+var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, configValidator, TYPE_WORDS, itemCount;
 var init_schema = __esm({
   "src/registry/schema.ts"() {
     "use strict";
@@ -34347,6 +34350,7 @@ var init_schema = __esm({
       array: "a list",
       boolean: "true or false"
     };
+    itemCount = (n) => `${n} ${n === 1 ? "item" : "items"}`;
   }
 });
 
@@ -41375,9 +41379,15 @@ function writeSmilesWithOrder(s, opts = {}) {
   const chir = withStereo2 ? chiralMarks(s, em) : /* @__PURE__ */ new Map();
   const dir = withStereo2 ? assignBondDirections(s, em) : /* @__PURE__ */ new Map();
   const valence = new Int32Array(s.atoms.length);
+  const toMetal = new Int32Array(s.atoms.length);
+  const metal = (i) => isMetal(atomicNumberOf(s.atoms[i].element) ?? 0);
   for (const b of s.bonds) {
     if (b.a >= 0 && b.a < valence.length) valence[b.a] += b.order;
     if (b.b >= 0 && b.b < valence.length && b.b !== b.a) valence[b.b] += b.order;
+    if (b.a >= 0 && b.a < valence.length && b.b >= 0 && b.b < valence.length && b.b !== b.a) {
+      if (metal(b.b)) toMetal[b.a] += b.order;
+      if (metal(b.a)) toMetal[b.b] += b.order;
+    }
   }
   const out = [];
   const freeDigits = [];
@@ -41418,7 +41428,7 @@ function writeSmilesWithOrder(s, opts = {}) {
         continue;
       }
       if (em.parentBond[u] >= 0) out.push(bondText(em.parentBond[u]));
-      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? ""));
+      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? "", toMetal[u]));
       const release2 = [];
       for (const k of em.ringClose[u]) {
         const d = digitOf.get(k);
@@ -41471,7 +41481,7 @@ function impliedRadical(a, valence) {
 function ringDigit(d) {
   return d < 10 ? String(d) : d < 100 ? `%${d}` : `%(${d})`;
 }
-function atomText(a, valence, chir) {
+function atomText(a, valence, chir, toMetal) {
   let sym = a.element;
   let isotope = a.isotope;
   if (sym === "D" || sym === "T") {
@@ -41485,7 +41495,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4 && toMetal === 0;
     }
   }
   if (!bracket) return sym;
@@ -67650,12 +67660,12 @@ function describe(input, opts = {}) {
       chiral: null,
       fixedAtoms: [],
       fixedBonds: [],
-      explanation: "open: the configuration of a stereogenic axis or helix is not stated by the input format"
+      explanation: "open: the input does not state the configuration of a stereogenic axis"
     };
   }
   if (stoppedLabels > 0) {
     facts.remarks.push(
-      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`
+      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels === 1 ? "1 drawn stereo unit was" : `${stoppedLabels} drawn stereo units were`} left without a descriptor (open, not a finding that none applies)`
     );
   }
   if (mixture) {
@@ -67715,7 +67725,14 @@ function unitFacts(a, labels) {
       equivalenceClass: classIds.get(ck),
       classKey: ck,
       component: p.componentOfAtom[u.atoms[0]],
-      ...!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true } : {}
+      ...!u.defined && cannotState(u.kind, s.dimension) ? {
+        formatCannotState: true,
+        openBecause: unstatedReason(
+          u.kind,
+          u.atoms.map((x) => s.atoms[x].inputNumber),
+          s
+        )
+      } : {}
     });
   });
   return out;
@@ -67723,6 +67740,15 @@ function unitFacts(a, labels) {
 function cannotState(kind, dimension) {
   if (kind === "planar") return dimension !== 3;
   return dimension === 0 && (kind === "biaryl" || kind === "helix");
+}
+function unstatedReason(kind, atoms, s) {
+  if (kind === "planar" && s.dimension === 2) return "2D coordinates cannot state its configuration";
+  if (kind === "biaryl") {
+    if (wedgeNearAxis(s, atoms[0], atoms[1]) !== null)
+      return "a wedge without 2D coordinates fixes no configuration";
+    return "a SMILES without 2D coordinates and wedges cannot state its configuration";
+  }
+  return "a SMILES cannot state its configuration";
 }
 function unstatedRemark(u, s) {
   const [x, y] = u.atoms;
@@ -67733,7 +67759,7 @@ function unstatedRemark(u, s) {
       return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
   }
   const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
-  return `${what}; the input format cannot state its configuration: ${then}`;
+  return `${what}; ${u.openBecause ?? "the input cannot state its configuration"}: ${then}`;
 }
 function wedgeNearAxis(s, x, y) {
   const near = /* @__PURE__ */ new Set();
@@ -68254,7 +68280,7 @@ function speciesMismatch(inA, inB) {
     const [nb, mb] = count3(inB, key4);
     const f = inA.find((x) => x.key === key4).formula;
     if (na !== nb)
-      return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
+      return `same constitution, different mixtures: A holds ${na} ${na === 1 ? "stereoisomer" : "stereoisomers"} of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
     if (na > 1 && ma !== mb)
       return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
@@ -68304,7 +68330,10 @@ function formDiffs(A, B, inA, inB, others2) {
       const nb = copies(inB, key4);
       if (na !== nb) {
         const f = inA.find((x) => x.key === key4).formula;
-        out.push({ kind: "ratio", explanation: `A holds ${na} molecule(s) of ${f}, B ${nb}` });
+        out.push({
+          kind: "ratio",
+          explanation: `A holds ${na} ${na === 1 ? "molecule" : "molecules"} of ${f}, B ${nb}`
+        });
       }
     }
   }
@@ -68910,7 +68939,8 @@ function compareWithRegistry(me, matches, mode, config, underReview = () => fals
     }
   }
   const identical = pairs.filter((p) => p.relation === "identical").length;
-  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}; forms and rotations agree`;
+  const rotations = out.some((f) => f.messageId === "enantiomer-rotations-not-compared") ? "; forms agree, rotations not compared (see the note)" : "; forms and rotations agree";
+  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}` + rotations;
   return { findings: out, passed, pairs };
 }
 function run3() {
@@ -69271,6 +69301,7 @@ var init_registry_phase = __esm({
     "use strict";
     init_consistent_with_registry();
     init_waivers();
+    init_words();
     init_key_index();
     init_findings();
     CHECK = consistentWithRegistry;
@@ -69355,7 +69386,7 @@ var init_registry_phase = __esm({
         return { findings, passed };
       }
       summary() {
-        const how = this.options.mode === "full" ? `every record with each record before it through an index of ${this.index.size} records' keys` : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
+        const how = this.options.mode === "full" ? `every record with each record before it through an index of the keys of ${plural(this.index.size, "record")}` : `each record under review with the whole registry (${plural(this.registryRecords, "record")}) through its key index`;
         return {
           status: this.enabled ? "run" : "not-run",
           reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
@@ -69895,7 +69926,7 @@ var init_form_matches_structure = __esm({
       "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
       "enantiomer-but-drawn-mixture": "Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows (racemate, enantioenriched, diastereomer-mixture).",
       "racemate-drawn-not-racemic": "Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.",
-      "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the claim checked.",
+      "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the structure as given cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar twist; 2D coordinates state no planar twist), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Draw the unit to have the claim checked: an axis with wedges in a molfile or a CXSMILES with 2D coordinates, a helix or a planar twist with 3D coordinates.",
       ...mixtureMessages
     };
     formMatchesStructure = {
@@ -70611,7 +70642,7 @@ var init_descriptors_match_structure = __esm({
       "descriptor-at-undefined-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
       "descriptor-counts-mismatch": "{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.",
       "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount:configuration|configurations}), but the structure defines only {definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
-      "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.",
+      "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the structure as given cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar twist; 2D coordinates state no planar twist). Draw the unit to have the descriptors checked: an axis with wedges in a molfile or a CXSMILES with 2D coordinates, a helix or a planar twist with 3D coordinates.",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
       "descriptor-on-invertible-nitrogen": "{field} declares {text}, but the structure has no stereo unit: its only configuration is drawn at {atoms}, an ordinary amine nitrogen that inverts rapidly and is not a stereocentre, so the descriptors describe nothing that can be isolated. Drop them{seeAlso}.",
@@ -72234,8 +72265,8 @@ var init_index_cache_shape = __esm({
 });
 
 // src/registry/index-cache.ts
-import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, writeFileSync } from "node:fs";
-import { dirname as dirname2 } from "node:path";
+import { mkdirSync, readFileSync as readFileSync2, realpathSync as realpathSync4, renameSync, rmSync, statSync as statSync3, writeFileSync } from "node:fs";
+import { dirname as dirname2, resolve as resolve4 } from "node:path";
 function entryRow(e) {
   if (e.row === null && e.rest !== null) {
     e.row = rowFromRest(e.rest, e.file, e.id, e.idLine);
@@ -72247,6 +72278,10 @@ function entryRow(e) {
 function readIndexCache(path, settings) {
   let text;
   try {
+    const stat3 = statSync3(path);
+    if (!stat3.isFile()) return { status: "unreadable", entries: [], reason: `${path} is not a regular file` };
+    if (stat3.size > MAX_CACHE_BYTES)
+      return { status: "unreadable", entries: [], reason: `${path} is larger than 1 GiB` };
     text = readFileSync2(path, "utf8");
   } catch {
     return { status: "missing", entries: [], reason: "no cache file yet" };
@@ -72288,6 +72323,12 @@ function readIndexCache(path, settings) {
 function writeIndexCache(path, settings, entries) {
   const tmp = `${path}.${process.pid}.tmp`;
   try {
+    let stat3 = null;
+    try {
+      stat3 = statSync3(path);
+    } catch {
+    }
+    if (stat3 && !stat3.isFile()) return `${path} is not a regular file, so it is not replaced`;
     mkdirSync(dirname2(path), { recursive: true });
     const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
     const lines = entries.map(lineOf2);
@@ -72366,12 +72407,35 @@ function molfilesOf(text) {
   }
   return Array.isArray(raw2) && raw2.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])) ? raw2 : null;
 }
-var FORMAT, FORMAT_VERSION, END, optional, COLUMNS;
+function cachePathProblem(path, realRoot, recordDirs) {
+  let abs = resolve4(path);
+  try {
+    abs = realpathSync4(abs);
+  } catch {
+    try {
+      abs = resolve4(realpathSync4(dirname2(abs)), abs.slice(dirname2(abs).length + 1));
+    } catch {
+    }
+  }
+  const rel = relativeTo(realRoot, abs);
+  if (rel.startsWith("../") || rel === ".." || rel.startsWith("/")) return null;
+  const dirs = recordDirs.length > 0 ? recordDirs : ["."];
+  for (const d of dirs) {
+    const dir = d.replace(/^\.\/?/, "").replace(/\/+$/, "");
+    if (dir === "" || rel === dir || rel.startsWith(`${dir}/`))
+      return `${path} is inside the record folder ${dir === "" ? "." : dir}, where it would be taken for a record`;
+  }
+  return null;
+}
+var INDEX_CACHE_FORMAT, FORMAT, MAX_CACHE_BYTES, FORMAT_VERSION, END, optional, COLUMNS;
 var init_index_cache = __esm({
   "src/registry/index-cache.ts"() {
     "use strict";
+    init_files();
     init_index_cache_shape();
-    FORMAT = "stereogate registry index cache";
+    INDEX_CACHE_FORMAT = "stereogate registry index cache";
+    FORMAT = INDEX_CACHE_FORMAT;
+    MAX_CACHE_BYTES = 1 << 30;
     FORMAT_VERSION = 4;
     END = "end	";
     optional = (s) => s === null ? "" : `=${escape2(s)}`;
@@ -72554,8 +72618,8 @@ async function* mapOrdered(items, opts) {
         yield value;
       }
       if (inputDone && nextOut >= nextIndex) break;
-      await new Promise((resolve6) => {
-        wake = resolve6;
+      await new Promise((resolve7) => {
+        wake = resolve7;
         if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
       });
     }
@@ -72639,11 +72703,13 @@ var init_index_build = __esm({
     init_index_cache();
     init_index_keys();
     init_version();
+    init_words();
     MIN_FILES_FOR_WORKERS = 2e3;
     RecordIndex = class _RecordIndex {
       constructor(opts) {
         this.opts = opts;
         this.entries = new Array(opts.files.length);
+        this.cacheRefused = opts.cachePath === null ? null : cachePathProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
       }
       opts;
       /** One entry per file, in the order of the files. */
@@ -72655,6 +72721,8 @@ var init_index_build = __esm({
       reused = 0;
       usedWorkers = 0;
       cache = null;
+      /** Why the cache path given cannot hold the cache (inside a record folder), or null. */
+      cacheRefused;
       /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */
       static async open(opts) {
         const index = new _RecordIndex(opts);
@@ -72665,7 +72733,7 @@ var init_index_build = __esm({
         return { version: VERSION, axisOrthoMin: this.opts.axisOrthoMin };
       }
       get useCache() {
-        return this.opts.cachePath !== null && this.opts.defaultEngine;
+        return this.opts.cachePath !== null && this.opts.defaultEngine && this.cacheRefused === null;
       }
       async fill() {
         const gitIds = this.opts.gitIds ?? gitBlobIds(this.opts.realRoot, this.opts.recordDirs);
@@ -72764,12 +72832,13 @@ var init_index_build = __esm({
       /** Writes the cache when anything changed; says in a sentence what was done (for the log). */
       save() {
         const parts = [
-          `${this.entries.length} record file(s)`,
+          plural(this.entries.length, "record file"),
           `${this.reused} from the cache`,
           `${this.read} read`,
           `${this.described} described for their keys`
         ];
-        if (this.usedWorkers > 0) parts.push(`${this.usedWorkers} worker(s)`);
+        if (this.usedWorkers > 0) parts.push(plural(this.usedWorkers, "worker"));
+        if (this.cacheRefused !== null) parts.push(`cache not used: ${this.cacheRefused}`);
         if (this.cache && this.cache.status !== "used") parts.push(`cache not used: ${this.cache.reason}`);
         const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
         if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== "used")) {
@@ -72971,8 +73040,8 @@ var init_review_against_index = __esm({
 });
 
 // src/audit/run.ts
-import { existsSync as existsSync3, realpathSync as realpathSync4, statSync as statSync3 } from "node:fs";
-import { resolve as resolve4 } from "node:path";
+import { existsSync as existsSync3, realpathSync as realpathSync5, statSync as statSync4 } from "node:fs";
+import { resolve as resolve5 } from "node:path";
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache2 = new StructureCache(options.engine);
@@ -73161,11 +73230,11 @@ function summarize(records) {
   return s;
 }
 async function openRegistry(options) {
-  const rootAbs = resolve4(options.root);
-  if (!existsSync3(rootAbs) || !statSync3(rootAbs).isDirectory()) {
+  const rootAbs = resolve5(options.root);
+  if (!existsSync3(rootAbs) || !statSync4(rootAbs).isDirectory()) {
     throw new ConfigError(`registry folder ${options.root} does not exist`);
   }
-  const root = realpathSync4(rootAbs);
+  const root = realpathSync5(rootAbs);
   const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
   const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
@@ -73476,11 +73545,11 @@ import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve6) {
-      resolve6(value);
+    return value instanceof P ? value : new P(function(resolve7) {
+      resolve7(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve6, reject) {
+  return new (P || (P = Promise))(function(resolve7, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -73496,7 +73565,7 @@ var __awaiter = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result2) {
-      result2.done ? resolve6(result2.value) : adopt(result2.value).then(fulfilled, rejected);
+      result2.done ? resolve7(result2.value) : adopt(result2.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -74479,7 +74548,7 @@ var DEFAULT_TIMEOUT_MS = 3e4;
 function createClient(options) {
   const base = new URL(options.baseUrl.replace(/\/+$/, "") + "/");
   const policy = { ...DEFAULT_RETRY_POLICY, ...options.retry };
-  const sleep = options.sleep ?? ((ms) => new Promise((resolve6) => setTimeout(resolve6, ms)));
+  const sleep = options.sleep ?? ((ms) => new Promise((resolve7) => setTimeout(resolve7, ms)));
   const maxPages = options.maxPages ?? 100;
   const timeoutMs = options.timeoutMs ?? DEFAULT_TIMEOUT_MS;
   const transport = options.transport ?? transportFor(base);
@@ -74777,6 +74846,7 @@ function selectChanged(changed, options) {
 }
 
 // src/action/choose-records.ts
+init_words();
 async function chooseRecords(settings, engine2, client, runner) {
   const choice = settings.records;
   if (choice.kind === "all") return { paths: void 0, changed: null, changedSource: null };
@@ -74809,7 +74879,7 @@ async function chooseRecords(settings, engine2, client, runner) {
   const recordDirs = await engine2.recordDirs(settings.registryRoot, settings.configFile);
   const selection = selectChanged(changed, { registryDir: settings.registryDir, recordDirs });
   runner.info(
-    `Pull request #${pr.number} changes ${changed.length} file(s): ${selection.records.length} record file(s)` + (selection.molfiles.length > 0 ? ` and ${selection.molfiles.length} molfile(s), whose records are audited too.` : ".")
+    `Pull request #${pr.number} changes ${plural(changed.length, "file")}: ${plural(selection.records.length, "record file")}` + (selection.molfiles.length > 0 ? ` and ${plural(selection.molfiles.length, "molfile")}, whose records are audited too.` : ".")
   );
   return { paths: [...selection.records, ...selection.molfiles], changed, changedSource: source };
 }
@@ -75064,6 +75134,7 @@ function escapeRegExp(s) {
 }
 
 // src/github/inline-plan.ts
+init_words();
 var RANK2 = { error: 0, warning: 1, note: 2 };
 var LABEL = { error: "❌ error", warning: "⚠️ warning", note: "ℹ️ note" };
 function planInlineComments(result2, diffs, options) {
@@ -75125,7 +75196,7 @@ ${block}`;
 - **${LABEL[finding2.severity]}** \`${finding2.check}\`` + (finding2.field === null ? "" : ` on ${escapeMarkdown(finding2.field)}`) + `: ${escapeMarkdown(text)}`;
     const rest = group.length - index;
     const more = `
-- … ${rest} more finding(s) on this line: see the checklist.`;
+- … ${plural(rest, "more finding")} on this line: see the checklist.`;
     if (body.length + line.length + more.length + tail.length > INLINE_MAX_CHARS) {
       body += more;
       break;
@@ -75171,6 +75242,7 @@ function parsePatch(patch) {
 }
 
 // src/action/post-review.ts
+init_words();
 var COMMENT_MAX_CHARS = 6e4;
 var READ_ONLY = "The token may not write to this pull request (a pull request from a fork gets a read-only token); the checklist is in the job summary and the findings are annotations on the changed files.";
 async function postReview(settings, result2, chosen, engine2, client, runner) {
@@ -75199,7 +75271,7 @@ async function postReview(settings, result2, chosen, engine2, client, runner) {
       if (done.action === "none") say("No record changed and no earlier checklist comment: none posted.");
       else say(`Checklist comment ${done.action}${done.url === null ? "" : `: ${done.url}`}.`);
       if (done.removed > 0)
-        say(`${done.removed} duplicate checklist comment(s) of an overlapping run deleted.`);
+        say(`${plural(done.removed, "duplicate checklist comment")} of an overlapping run deleted.`);
     } catch (error2) {
       if (refused(error2)) {
         say(READ_ONLY, true);
@@ -75227,20 +75299,20 @@ async function postReview(settings, result2, chosen, engine2, client, runner) {
       if (plan.comments.length + plan.outsideDiff + plan.overLimit === 0) return said;
       const comments = plan.comments.map((c) => ({ ...c, body: redactSecret(c.body, settings.token) }));
       const done = await postInlineComments(client, pr, comments);
-      const parts = [`${done.posted.length} inline comment(s) posted`];
+      const parts = [`${plural(done.posted.length, "inline comment")} posted`];
       if (done.alreadyThere.length > 0) parts.push(`${done.alreadyThere.length} already there`);
       if (done.rejected.length > 0)
         parts.push(`${done.rejected.length} refused by GitHub (kept in the checklist)`);
       if (plan.outsideDiff > 0)
-        parts.push(`${plan.outsideDiff} finding(s) on lines outside the diff (in the checklist)`);
+        parts.push(`${plural(plan.outsideDiff, "finding")} on lines outside the diff (in the checklist)`);
       if (plan.overLimit > 0)
         parts.push(`${plan.overLimit} over the limit of ${settings.maxInlineComments} (in the checklist)`);
-      if (done.removed > 0) parts.push(`${done.removed} duplicate(s) of an overlapping run deleted`);
+      if (done.removed > 0) parts.push(`${plural(done.removed, "duplicate")} of an overlapping run deleted`);
       say(parts.join("; ") + ".");
       if (done.notAllowed.length > 0) say(READ_ONLY, true);
       if (done.rateLimited !== null) {
         say(
-          `${done.rateLimited.comments.length} inline comment(s) not posted: ${rateLimitLine(done.rateLimited.error, settings)}`,
+          `${plural(done.rateLimited.comments.length, "inline comment")} not posted: ${rateLimitLine(done.rateLimited.error, settings)}`,
           true
         );
       }
@@ -75299,6 +75371,7 @@ async function diffLines(settings, result2, changed, source) {
 }
 
 // src/action/review.ts
+init_words();
 var SUMMARY_MAX_BYTES = 1e6;
 var SUMMARY_SHORT_CHARS = 24e4;
 async function review(settings, engine2, client, runner) {
@@ -75312,7 +75385,7 @@ async function review(settings, engine2, client, runner) {
   });
   const { errors, warnings, notes, waived } = result2.summary;
   runner.info(
-    `Audited ${result2.summary.records} record(s): ${errors} error(s), ${warnings} warning(s), ${notes} note(s)` + (waived > 0 ? `, ${waived} accepted by waivers.` : ".")
+    `Audited ${plural(result2.summary.records, "record")}: ${plural(errors, "error")}, ${plural(warnings, "warning")}, ${plural(notes, "note")}` + (waived > 0 ? `, ${waived} accepted by waivers.` : ".")
   );
   const written = [];
   if (settings.sarifFile !== null) {
@@ -75344,7 +75417,7 @@ async function review(settings, engine2, client, runner) {
   for (const annotation of annotations) runner.annotate(annotation);
   if (omitted > 0)
     runner.info(
-      `${omitted} more finding(s) are not annotated (GitHub shows a limited number); see the summary.`
+      `${plural(omitted, "more finding is", "more findings are")} not annotated (GitHub shows a limited number); see the summary.`
     );
   runner.setOutput("errors", errors);
   runner.setOutput("warnings", warnings);
@@ -75379,9 +75452,10 @@ ${posted.map((line) => `- ${escapeMarkdown(line)}`).join("\n")}
 function judge(result2, failOn) {
   const { errors, warnings } = result2.summary;
   if (failOn === "never") return null;
-  if (failOn === "error" && errors > 0) return `stereogate found ${errors} error(s) (fail-on: error).`;
+  if (failOn === "error" && errors > 0)
+    return `stereogate found ${plural(errors, "error")} (fail-on: error).`;
   if (failOn === "warning" && errors + warnings > 0) {
-    return `stereogate found ${errors} error(s) and ${warnings} warning(s) (fail-on: warning).`;
+    return `stereogate found ${plural(errors, "error")} and ${plural(warnings, "warning")} (fail-on: warning).`;
   }
   return null;
 }
@@ -75407,19 +75481,19 @@ var coreRunner = {
 };
 
 // src/action/settings.ts
-import { existsSync as existsSync4, readFileSync as readFileSync3, realpathSync as realpathSync5 } from "node:fs";
-import { dirname as dirname5, isAbsolute as isAbsolute4, join as join8, relative as relative3, resolve as resolve5, sep as sep3 } from "node:path";
+import { existsSync as existsSync4, readFileSync as readFileSync3, realpathSync as realpathSync6 } from "node:fs";
+import { dirname as dirname5, isAbsolute as isAbsolute4, join as join8, relative as relative3, resolve as resolve6, sep as sep3 } from "node:path";
 var SettingsError = class extends Error {
   name = "SettingsError";
 };
 function readSettings(input, env) {
-  const workspace = realpathSync5(env.GITHUB_WORKSPACE || process.cwd());
-  const registryRoot = realpathSync5(insidePath(workspace, input("registry-path") || ".", "registry-path"));
+  const workspace = realpathSync6(env.GITHUB_WORKSPACE || process.cwd());
+  const registryRoot = realpathSync6(insidePath(workspace, input("registry-path") || ".", "registry-path"));
   const repoRoot = checkoutOf(registryRoot, workspace);
   const registryDir = relative3(repoRoot, registryRoot).split(sep3).join("/");
   const optionalPath = (name) => {
     const value = input(name).trim();
-    return value === "" ? null : resolve5(workspace, value);
+    return value === "" ? null : resolve6(workspace, value);
   };
   const configValue = input("config-file").trim();
   const repository = parseRepository(env.GITHUB_REPOSITORY);
@@ -75463,7 +75537,7 @@ function parseIndexCache(raw2, workspace, runnerTemp) {
   const value = raw2.trim();
   if (value === "none") return null;
   if (value === "") return runnerTemp ? join8(runnerTemp, "stereogate", "index-cache.json") : null;
-  return resolve5(workspace, value);
+  return resolve6(workspace, value);
 }
 function parseFailOn(raw2) {
   const value = raw2.trim() || "error";
@@ -75496,7 +75570,7 @@ function parseRepository(raw2) {
   return match === null ? null : { owner: match[1], repo: match[2] };
 }
 function insidePath(workspace, value, name) {
-  const abs = resolve5(workspace, value);
+  const abs = resolve6(workspace, value);
   const rel = relative3(workspace, abs);
   if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
     throw new SettingsError(`${name} must be inside the workspace: '${value}'`);

@@ -15632,7 +15632,10 @@ function explainOne(e, value, what) {
       return { path, message: `${label}: ${n} items, more than the limit of ${limit}; ${advice}` };
     }
     case "minItems":
-      return { path, message: `${label}: needs at least ${e.params.limit} item(s)` };
+      return {
+        path,
+        message: `${label}: needs at least ${itemCount(e.params.limit)}`
+      };
     case "oneOf": {
       if (got2 === null || typeof got2 !== "object" || Array.isArray(got2)) {
         return {
@@ -15666,7 +15669,7 @@ function explain(errors, value, what) {
   }
   return out;
 }
-var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, TYPE_WORDS;
+var import_ajv, PROBLEM_CODES, AJV_OPTIONS, ajv, recordValidator, TYPE_WORDS, itemCount;
 var init_schema = __esm({
   "src/registry/schema.ts"() {
     "use strict";
@@ -15707,6 +15710,7 @@ var init_schema = __esm({
       array: "a list",
       boolean: "true or false"
     };
+    itemCount = (n) => `${n} ${n === 1 ? "item" : "items"}`;
   }
 });
 
@@ -21997,9 +22001,15 @@ function writeSmilesWithOrder(s, opts = {}) {
   const chir = withStereo2 ? chiralMarks(s, em) : /* @__PURE__ */ new Map();
   const dir = withStereo2 ? assignBondDirections(s, em) : /* @__PURE__ */ new Map();
   const valence = new Int32Array(s.atoms.length);
+  const toMetal = new Int32Array(s.atoms.length);
+  const metal = (i) => isMetal(atomicNumberOf(s.atoms[i].element) ?? 0);
   for (const b of s.bonds) {
     if (b.a >= 0 && b.a < valence.length) valence[b.a] += b.order;
     if (b.b >= 0 && b.b < valence.length && b.b !== b.a) valence[b.b] += b.order;
+    if (b.a >= 0 && b.a < valence.length && b.b >= 0 && b.b < valence.length && b.b !== b.a) {
+      if (metal(b.b)) toMetal[b.a] += b.order;
+      if (metal(b.a)) toMetal[b.b] += b.order;
+    }
   }
   const out = [];
   const freeDigits = [];
@@ -22040,7 +22050,7 @@ function writeSmilesWithOrder(s, opts = {}) {
         continue;
       }
       if (em.parentBond[u] >= 0) out.push(bondText(em.parentBond[u]));
-      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? ""));
+      out.push(atomText(s.atoms[u], valence[u], chir.get(u) ?? "", toMetal[u]));
       const release2 = [];
       for (const k of em.ringClose[u]) {
         const d = digitOf.get(k);
@@ -22093,7 +22103,7 @@ function impliedRadical(a, valence) {
 function ringDigit(d) {
   return d < 10 ? String(d) : d < 100 ? `%${d}` : `%(${d})`;
 }
-function atomText(a, valence, chir) {
+function atomText(a, valence, chir, toMetal) {
   let sym = a.element;
   let isotope = a.isotope;
   if (sym === "D" || sym === "T") {
@@ -22107,7 +22117,7 @@ function atomText(a, valence, chir) {
     if (sym === "*") bracket = a.hCount !== 0;
     else if (!ORGANIC.has(sym)) bracket = true;
     else {
-      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4;
+      bracket = implicitHydrogens(atomicNumberOf(sym), 0, valence) !== a.hCount || sym === "N" && valence === 4 && toMetal === 0;
     }
   }
   if (!bracket) return sym;
@@ -48272,12 +48282,12 @@ function describe(input, opts = {}) {
       chiral: null,
       fixedAtoms: [],
       fixedBonds: [],
-      explanation: "open: the configuration of a stereogenic axis or helix is not stated by the input format"
+      explanation: "open: the input does not state the configuration of a stereogenic axis"
     };
   }
   if (stoppedLabels > 0) {
     facts.remarks.push(
-      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels} drawn stereo unit(s) were left without a descriptor (open, not a finding that none applies)`
+      `CIP labelling stopped at its work limit for one structure: ${stoppedLabels === 1 ? "1 drawn stereo unit was" : `${stoppedLabels} drawn stereo units were`} left without a descriptor (open, not a finding that none applies)`
     );
   }
   if (mixture) {
@@ -48337,7 +48347,14 @@ function unitFacts(a, labels) {
       equivalenceClass: classIds.get(ck),
       classKey: ck,
       component: p.componentOfAtom[u.atoms[0]],
-      ...!u.defined && cannotState(u.kind, s.dimension) ? { formatCannotState: true } : {}
+      ...!u.defined && cannotState(u.kind, s.dimension) ? {
+        formatCannotState: true,
+        openBecause: unstatedReason(
+          u.kind,
+          u.atoms.map((x) => s.atoms[x].inputNumber),
+          s
+        )
+      } : {}
     });
   });
   return out;
@@ -48345,6 +48362,15 @@ function unitFacts(a, labels) {
 function cannotState(kind, dimension) {
   if (kind === "planar") return dimension !== 3;
   return dimension === 0 && (kind === "biaryl" || kind === "helix");
+}
+function unstatedReason(kind, atoms, s) {
+  if (kind === "planar" && s.dimension === 2) return "2D coordinates cannot state its configuration";
+  if (kind === "biaryl") {
+    if (wedgeNearAxis(s, atoms[0], atoms[1]) !== null)
+      return "a wedge without 2D coordinates fixes no configuration";
+    return "a SMILES without 2D coordinates and wedges cannot state its configuration";
+  }
+  return "a SMILES cannot state its configuration";
 }
 function unstatedRemark(u, s) {
   const [x, y] = u.atoms;
@@ -48355,7 +48381,7 @@ function unstatedRemark(u, s) {
       return `${what}; a wedge is written on the bond from atom ${wedge[0]} to atom ${wedge[1]}, but without 2D coordinates a wedge fixes no configuration (the same SMILES and wedge drawn reflected in a line are the mirror image): chirality is left open (give the CXSMILES its coordinates block, or a molfile with wedges)`;
   }
   const then = u.kind === "biaryl" ? "chirality is left open (a molfile with wedges or 3D coordinates, or a CXSMILES with 2D coordinates and wedges, states it)" : "which of its two enantiomeric forms is meant is open (3D coordinates state it)";
-  return `${what}; the input format cannot state its configuration: ${then}`;
+  return `${what}; ${u.openBecause ?? "the input cannot state its configuration"}: ${then}`;
 }
 function wedgeNearAxis(s, x, y) {
   const near = /* @__PURE__ */ new Set();
@@ -48876,7 +48902,7 @@ function speciesMismatch(inA, inB) {
     const [nb, mb] = count3(inB, key3);
     const f = inA.find((x) => x.key === key3).formula;
     if (na !== nb)
-      return `same constitution, different mixtures: A holds ${na} stereoisomer(s) of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
+      return `same constitution, different mixtures: A holds ${na} ${na === 1 ? "stereoisomer" : "stereoisomers"} of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
     if (na > 1 && ma !== mb)
       return `same constitution, different mixtures: A holds ${ma} molecules of ${f} (${na} stereoisomers), B ${mb}`;
   }
@@ -48926,7 +48952,10 @@ function formDiffs(A, B, inA, inB, others2) {
       const nb = copies(inB, key3);
       if (na !== nb) {
         const f = inA.find((x) => x.key === key3).formula;
-        out.push({ kind: "ratio", explanation: `A holds ${na} molecule(s) of ${f}, B ${nb}` });
+        out.push({
+          kind: "ratio",
+          explanation: `A holds ${na} ${na === 1 ? "molecule" : "molecules"} of ${f}, B ${nb}`
+        });
       }
     }
   }
@@ -49446,7 +49475,8 @@ function compareWithRegistry(me, matches, mode, config, underReview = () => fals
     }
   }
   const identical = pairs.filter((p) => p.relation === "identical").length;
-  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}; forms and rotations agree`;
+  const rotations = out.some((f) => f.messageId === "enantiomer-rotations-not-compared") ? "; forms agree, rotations not compared (see the note)" : "; forms and rotations agree";
+  const passed = compared === 0 ? "no other registered record is this stereoisomer or its enantiomer" : `${identical > 0 ? `the same stereoisomer as ${plural(identical, "other record")}` : ""}${identical > 0 && compared > identical ? ", " : ""}${compared > identical ? `the enantiomer of ${plural(compared - identical, "registered record")}` : ""}` + rotations;
   return { findings: out, passed, pairs };
 }
 function run3() {
@@ -49807,6 +49837,7 @@ var init_registry_phase = __esm({
     "use strict";
     init_consistent_with_registry();
     init_waivers();
+    init_words();
     init_key_index();
     init_findings();
     CHECK = consistentWithRegistry;
@@ -49891,7 +49922,7 @@ var init_registry_phase = __esm({
         return { findings, passed };
       }
       summary() {
-        const how = this.options.mode === "full" ? `every record with each record before it through an index of ${this.index.size} records' keys` : `each record under review with the whole registry (${this.registryRecords} records) through its key index`;
+        const how = this.options.mode === "full" ? `every record with each record before it through an index of the keys of ${plural(this.index.size, "record")}` : `each record under review with the whole registry (${plural(this.registryRecords, "record")}) through its key index`;
         return {
           status: this.enabled ? "run" : "not-run",
           reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
@@ -50689,7 +50720,7 @@ var init_form_matches_structure = __esm({
       "diastereomer-undefined-units": "Declared single-diastereomer, but {undefinedCount:stereo unit is|stereo units are} undefined ({undefinedUnits}), so the drawing covers several diastereomers. Define them, or declare diastereomer-mixture.",
       "enantiomer-but-drawn-mixture": "Declared {form}, but the structure holds {mixtureCount} different stereoisomers of the parent as separate molecules ({mixtureText}). Draw the one stereoisomer alone, or declare the form the drawing shows (racemate, enantioenriched, diastereomer-mixture).",
       "racemate-drawn-not-racemic": "Declared racemate, but the molecules drawn are not two enantiomers in equal numbers ({mixtureText}). A racemate is a 1:1 mixture of a pair of enantiomers; correct the drawing or the form.",
-      "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the input format cannot state (SMILES has no notation for a stereogenic axis or helix), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the claim checked.",
+      "form-open-unstated-units": "Declared {form}: not verified. The structure has {openUnits}, whose configuration the structure as given cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar twist; 2D coordinates state no planar twist), so whether it stands for one stereoisomer, a racemate or an achiral compound is open. Biaryl axes are found by a rule of thumb on ortho substitution (common practice, no source). Draw the unit to have the claim checked: an axis with wedges in a molfile or a CXSMILES with 2D coordinates, a helix or a planar twist with 3D coordinates.",
       ...mixtureMessages
     };
     formMatchesStructure = {
@@ -51405,7 +51436,7 @@ var init_descriptors_match_structure = __esm({
       "descriptor-at-undefined-unit": "{field} declares configurations at {locantCount?locant|locants} {locants}, but the structure leaves those units undefined. Draw the configuration the descriptors state.",
       "descriptor-counts-mismatch": "{field} declares {text} ({declaredCounts}), but the defined units of the structure give {computedCounts} ({computed}). Compared as counts because {whyNotPerLocant}{invertNote}. Correct the drawing or the descriptors; atom-map numbers as locants ([C@@H:2]) allow a per-atom comparison.",
       "descriptors-cite-undefined-units": "{field} declares {text} ({declaredCount:configuration|configurations}), but the structure defines only {definedCount:stereo unit|stereo units} and leaves {undefinedCount} undefined, so the descriptors cannot be checked. Draw the configurations the descriptors state (for a racemate: one enantiomer with an AND group).",
-      "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the input format cannot state (SMILES has no notation for a stereogenic axis or helix). Give the structure as a molfile with the axis drawn (wedges or 3D coordinates) to have the descriptors checked.",
+      "descriptors-at-unstated-units": "{field} declares {text}: not verified. The configuration it states belongs to {openUnits}, which the structure as given cannot state (a SMILES has no notation for a stereogenic axis, a helix or a planar twist; 2D coordinates state no planar twist). Draw the unit to have the descriptors checked: an axis with wedges in a molfile or a CXSMILES with 2D coordinates, a helix or a planar twist with 3D coordinates.",
       "descriptors-incomplete": "{field} declares {text} but does not cite {missing} of the structure ({computed}). A full name cites every stereogenic unit (IUPAC 2013, P-93); add the missing descriptors.",
       "name-and-descriptors-disagree": "The name states {nameText} but stereo.descriptors states {fieldText}. Make them the same.",
       "descriptor-on-invertible-nitrogen": "{field} declares {text}, but the structure has no stereo unit: its only configuration is drawn at {atoms}, an ordinary amine nitrogen that inverts rapidly and is not a stereocentre, so the descriptors describe nothing that can be isolated. Drop them{seeAlso}.",
