@@ -16,7 +16,7 @@ import {
   type RegistryPair,
 } from '../checks/consistent-with-registry.js';
 import type { AuditConfig, RawFinding } from '../checks/types.js';
-import { acceptingWaiver } from '../checks/waivers.js';
+import { acceptingWaiver, type WaivableFinding } from '../checks/waivers.js';
 import { plural } from '../checks/words.js';
 import { RegistryIndex, type Confirm } from '../registry/key-index.js';
 import type { IndexRow } from '../registry/keys.js';
@@ -33,6 +33,11 @@ export interface PhaseResult {
    * rewrites anyway; its summary says once that the check ran over every record.
    */
   passed: PassedCheck | null;
+  /**
+   * Findings a review would make but a full audit only lists in its summary (an enantiomer registered before):
+   * not reported, but a waiver naming one is in use, not stale.
+   */
+  listed?: WaivableFinding[];
 }
 
 export interface PhaseOptions {
@@ -124,7 +129,17 @@ export class RegistryPhase {
     const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== 'note')
       ? { check: CHECK.id, evidence: c.passed }
       : null;
-    return { findings, passed };
+    // the summary lists an enantiomer pair once; a review says it on the later record (enantiomer-registered)
+    const listed: WaivableFinding[] = full
+      ? c.pairs
+          .filter((p) => p.relation === 'enantiomers')
+          .map((p) => ({
+            check: CHECK.id,
+            messageId: 'enantiomer-registered',
+            data: { otherId: p.first.id ?? p.first.file, otherFile: p.first.file },
+          }))
+      : [];
+    return listed.length > 0 ? { findings, passed, listed } : { findings, passed };
   }
 
   summary(): RegistrySummary {

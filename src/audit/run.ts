@@ -164,9 +164,10 @@ export function confirmWith(engine: AuditEngine): Confirm {
 
 /** Adds what the registry-wide phase found to a record audited before (checks in CHECKS order). */
 export function addPhaseResult(r: Pick<RecordResult, 'findings' | 'passed'>, p: PhaseResult): void {
-  if (p.findings.length > 0) {
+  if (p.findings.length > 0 || (p.listed?.length ?? 0) > 0) {
     // a waiver of the registry-wide check matched nothing per record; now it may match
-    r.findings = r.findings.filter((f) => stillMatchesNothing(f, p.findings));
+    const more = p.listed ? [...p.findings, ...p.listed] : p.findings;
+    r.findings = r.findings.filter((f) => stillMatchesNothing(f, more));
     r.findings.push(...p.findings);
   }
   if (p.passed) r.passed.push(p.passed);

@@ -119,4 +119,22 @@ describe('waivers that name what they accept', () => {
       'The waiver waivers[0], for consistent-with-registry (message enantiomer-form-conflict, about LX-00001), matches no finding',
     );
   });
+
+  it('a waiver for enantiomer-registered is in use in a full audit (which lists the pair) and accepts the review note', async () => {
+    const waiver =
+      'waivers:\n  - check: consistent-with-registry\n    message_id: enantiomer-registered\n' +
+      '    other_record: LX-00001\n    reason: both enantiomers on purpose\n    approved_by: J. Okafor\n';
+    reg = tmpRegistry({
+      'compounds/a.yml': record('LX-00001', R, ''),
+      'compounds/b.yml': record('LX-00002', S, '', waiver),
+    });
+    const text = await audit('text');
+    expect(text).toContain('LX-00001 — LX-00002');
+    expect(text).not.toContain('matches no finding');
+    const io = memoryIo();
+    await run(['audit', 'compounds/b.yml', '--root', reg.root, '--fail-on', 'never'], io);
+    const review = io.stdout.join('\n');
+    expect(review).toContain('1 record audited: 0 errors, 0 warnings, 0 notes, 1 accepted by waiver');
+    expect(review).not.toContain('matches no finding');
+  });
 });
