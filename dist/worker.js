@@ -49919,7 +49919,12 @@ var init_registry_phase = __esm({
           if (messageEnabled(this.options.config, CHECK.id, raw2.messageId))
             findings.push(rowFinding(raw2, row, this.options.config));
         const passed = !c.findings.some((f) => (f.severity ?? CHECK.defaultSeverity) !== "note") ? { check: CHECK.id, evidence: c.passed } : null;
-        return { findings, passed };
+        const listed = full ? c.pairs.filter((p) => p.relation === "enantiomers").map((p) => ({
+          check: CHECK.id,
+          messageId: "enantiomer-registered",
+          data: { otherId: p.first.id ?? p.first.file, otherFile: p.first.file }
+        })) : [];
+        return listed.length > 0 ? { findings, passed, listed } : { findings, passed };
       }
       summary() {
         const how = this.options.mode === "full" ? `every record with each record before it through an index of the keys of ${plural(this.index.size, "record")}` : `each record under review with the whole registry (${plural(this.registryRecords, "record")}) through its key index`;
@@ -50134,8 +50139,9 @@ function confirmWith(engine) {
   };
 }
 function addPhaseResult(r, p) {
-  if (p.findings.length > 0) {
-    r.findings = r.findings.filter((f) => stillMatchesNothing(f, p.findings));
+  if (p.findings.length > 0 || (p.listed?.length ?? 0) > 0) {
+    const more = p.listed ? [...p.findings, ...p.listed] : p.findings;
+    r.findings = r.findings.filter((f) => stillMatchesNothing(f, more));
     r.findings.push(...p.findings);
   }
   if (p.passed) r.passed.push(p.passed);
