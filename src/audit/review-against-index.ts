@@ -14,6 +14,7 @@ import { findRecordFiles, relativeTo } from '../registry/files.js';
 import { gitRecordFiles } from '../registry/git-files.js';
 import { entryRow, type IndexEntry, type IndexRowData } from '../registry/index-cache.js';
 import { loadRecordFile, markDuplicateIds, refusedRecord } from '../registry/load.js';
+import { bareRow } from '../registry/keys.js';
 import type { LoadedRecord } from '../registry/types.js';
 import { heavyAtomCandidates, type AuditEngine } from './engine.js';
 import { RecordIndex } from './index-build.js';
@@ -44,16 +45,7 @@ export interface IndexReviewOptions {
 
 const NO_STRUCTURE = { structure: null, facts: null, error: null };
 /** The row a record that is no partner of the records under review stands as: the phase only counts it. */
-const NO_PARTNER: IndexRowData = {
-  id: null,
-  file: '',
-  name: null,
-  form: 'unknown',
-  rotation: null,
-  keys: null,
-  lines: { id: null, structure: null, rotation: null },
-  waivers: [],
-};
+const NO_PARTNER: IndexRowData = bareRow('', null);
 
 /** A record file as selection sees it: from the index, or refused (a link out of the registry). */
 type Stub = SelectableRecord & { at: number | null; refused: string | null };

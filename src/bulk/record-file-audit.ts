@@ -16,7 +16,7 @@ import { lazyRegistryView } from '../audit/view.js';
 import type { AuditConfig, CheckModule } from '../checks/types.js';
 import { withBudget, type Budget } from '../chem/budget.js';
 import { computedText } from '../report/checklist.js';
-import type { IndexRow } from '../registry/keys.js';
+import { bareRow, type IndexRow } from '../registry/keys.js';
 import { loadRecordFile } from '../registry/load.js';
 import { NO_POSITIONS } from '../registry/positions.js';
 import type { LoadedRecord } from '../registry/types.js';
@@ -170,16 +170,6 @@ export function stoppedRecordFile(
     },
     computedLine: null,
     computedJson: null,
-    row: {
-      seq: item.seq,
-      id,
-      file: item.file,
-      name: null,
-      form: 'unknown',
-      rotation: null,
-      keys: null,
-      lines: { id: null, structure: null, rotation: null },
-      waivers: [],
-    },
+    row: { seq: item.seq, ...bareRow(item.file, id) },
   };
 }

@@ -52,6 +52,20 @@ export interface IndexRow {
   waivers: (Waiver & { index: number })[];
 }
 
+/** The row of a record known by its file and id only: no keys, form unknown (the phase counts it, no more). */
+export function bareRow(file: string, id: string | null): Omit<IndexRow, 'seq'> {
+  return {
+    id,
+    file,
+    name: null,
+    form: 'unknown',
+    rotation: null,
+    keys: null,
+    lines: { id: null, structure: null, rotation: null },
+    waivers: [],
+  };
+}
+
 /**
  * What the drawing stands for: one stereoisomer as drawn, the drawn one and its mirror image together (AND
  * groups), or one of the two, unknown which (OR groups / no chiral flag). Drawings of different kinds are
