@@ -49867,6 +49867,18 @@ var init_consistent_with_registry = __esm({
 });
 
 // src/registry/keys.ts
+function bareRow(file, id) {
+  return {
+    id,
+    file,
+    name: null,
+    form: "unknown",
+    rotation: null,
+    keys: null,
+    lines: { id: null, structure: null, rotation: null },
+    waivers: []
+  };
+}
 function drawingKind(f) {
   const m = f.enhanced.meaning;
   if (m === "racemic" || m === "mixture") return "racemic";
@@ -53945,6 +53957,7 @@ var init_review_against_index = __esm({
     init_git_files();
     init_index_cache();
     init_load();
+    init_keys();
     init_engine();
     init_index_build();
     init_index_row();
@@ -53953,16 +53966,7 @@ var init_review_against_index = __esm({
     init_structures();
     init_view();
     NO_STRUCTURE2 = { structure: null, facts: null, error: null };
-    NO_PARTNER = {
-      id: null,
-      file: "",
-      name: null,
-      form: "unknown",
-      rotation: null,
-      keys: null,
-      lines: { id: null, structure: null, rotation: null },
-      waivers: []
-    };
+    NO_PARTNER = bareRow("", null);
   }
 });
 
@@ -58532,6 +58536,7 @@ init_structures();
 init_view();
 init_budget();
 import { join as join8 } from "node:path";
+init_keys();
 init_load();
 init_positions();
 async function makeFolderContext(setup, checks) {
@@ -58623,17 +58628,7 @@ function stoppedRecordFile(item, id, limitMs, crashed) {
     },
     computedLine: null,
     computedJson: null,
-    row: {
-      seq: item.seq,
-      id,
-      file: item.file,
-      name: null,
-      form: "unknown",
-      rotation: null,
-      keys: null,
-      lines: { id: null, structure: null, rotation: null },
-      waivers: []
-    }
+    row: { seq: item.seq, ...bareRow(item.file, id) }
   };
 }
 

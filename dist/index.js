@@ -68978,6 +68978,18 @@ var init_consistent_with_registry = __esm({
 });
 
 // src/registry/keys.ts
+function bareRow(file, id) {
+  return {
+    id,
+    file,
+    name: null,
+    form: "unknown",
+    rotation: null,
+    keys: null,
+    lines: { id: null, structure: null, rotation: null },
+    waivers: []
+  };
+}
 function drawingKind(f) {
   const m = f.enhanced.meaning;
   if (m === "racemic" || m === "mixture") return "racemic";
@@ -73023,6 +73035,7 @@ var init_review_against_index = __esm({
     init_git_files();
     init_index_cache();
     init_load();
+    init_keys();
     init_engine();
     init_index_build();
     init_index_row();
@@ -73031,16 +73044,7 @@ var init_review_against_index = __esm({
     init_structures();
     init_view();
     NO_STRUCTURE2 = { structure: null, facts: null, error: null };
-    NO_PARTNER = {
-      id: null,
-      file: "",
-      name: null,
-      form: "unknown",
-      rotation: null,
-      keys: null,
-      lines: { id: null, structure: null, rotation: null },
-      waivers: []
-    };
+    NO_PARTNER = bareRow("", null);
   }
 });
 

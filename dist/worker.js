@@ -53774,6 +53774,7 @@ init_structures();
 init_view();
 init_budget();
 import { join as join3 } from "node:path";
+init_keys();
 init_load();
 init_positions();
 async function makeFolderContext(setup, checks) {
