@@ -2,8 +2,10 @@
  * Output files named on the command line: checked before the work starts, so a mistyped folder gives one clear
  * line (exit 2) instead of a raw ENOENT after a long run.
  */
-import { existsSync, statSync } from 'node:fs';
+import { existsSync, realpathSync, statSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
+import { loadConfig } from '../audit/config.js';
+import { cachePathProblem } from '../registry/index-cache.js';
 import { InputError } from './command.js';
 
 /** Why a file cannot be written, in words (not a bare error code). */
@@ -27,4 +29,20 @@ export function checkWritable(path: string, what: string): void {
     throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname(path)} does not exist`);
   if (existsSync(path) && statSync(path).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: it is a folder`);
+}
+
+/**
+ * Throws InputError when `path` lies in a record folder of the registry at `root`: a report written there
+ * would replace a record file, or be read as one by the next audit. A registry or config that cannot be read
+ * is left to the run, which reports it.
+ */
+export function checkOutsideRecords(path: string, what: string, root: string, configFile?: string): void {
+  let problem: string | null = null;
+  try {
+    const real = realpathSync(resolve(root));
+    problem = cachePathProblem(path, real, loadConfig(real, configFile).config.recordDirs);
+  } catch {
+    return;
+  }
+  if (problem !== null) throw new InputError(`cannot write ${what} to ${path}: ${problem}`);
 }

@@ -38,6 +38,22 @@ describe('--output that cannot be written', () => {
     expect(err).not.toMatch(/ENOENT|Usage:/);
     expect(io.stdout).toEqual([]);
   });
+  it('a report path inside a record folder is refused: a record file is never overwritten', async () => {
+    const { cpSync } = await import('node:fs');
+    const root = mkdtempSync(join(tmpdir(), 'sg-out-rec-'));
+    cpSync(demo, root, { recursive: true });
+    const record = join(root, 'compounds', 'LX-00006.yml');
+    const before = readFileSync(record, 'utf8');
+    const io = memoryIo();
+    expect(await run(['audit', '--root', root, '--output', record, '--fail-on', 'never'], io)).toBe(2);
+    expect(io.stderr.join('')).toMatch(/cannot write the report to .*inside the record folder compounds/);
+    expect(readFileSync(record, 'utf8')).toBe(before);
+    // outside the record folders (the registry root itself) a report is fine
+    const ok = memoryIo();
+    expect(
+      await run(['audit', '--root', root, '--output', join(root, 'report.txt'), '--fail-on', 'never'], ok),
+    ).toBe(0);
+  });
   it('a folder given as --output is said to be a folder', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'sg-out-'));
     const io = memoryIo();

@@ -21,7 +21,7 @@ import { bulkAudit } from './bulk-audit.js';
 import { EXIT_CRASH, EXIT_FINDINGS, EXIT_OK, InputError, UsageError, type Command } from '../command.js';
 import { isInternalError } from '../../audit/findings.js';
 import { checkIndexCachePath } from '../index-cache-path.js';
-import { checkWritable, writeFailure } from '../output-path.js';
+import { checkOutsideRecords, checkWritable, writeFailure } from '../output-path.js';
 import type { ProgressMode } from '../../bulk/progress.js';
 import { auditFolderPooled, pooledAudit, POOLED_FROM } from './audit-folder.js';
 
@@ -126,7 +126,10 @@ export function makeAuditCommand(deps: AuditCommandDeps = {}): Command {
       const failOn = values['fail-on'] as 'error' | 'warning' | 'never';
       const output = values.output as string | undefined;
       if (output === '') throw new UsageError('--output needs a file name');
-      if (output !== undefined) checkWritable(output, 'the report');
+      if (output !== undefined) {
+        checkWritable(output, 'the report');
+        checkOutsideRecords(output, 'the report', root, values.config as string | undefined);
+      }
       const paths = toRootPaths(positionals, root);
       const timeout = values['record-timeout'];
       const seconds = typeof timeout === 'string' ? Number(timeout) : RECORD_BUDGET.timeMs / 1000;
