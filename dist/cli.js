@@ -58152,7 +58152,9 @@ function readKept(e) {
 init_findings();
 
 // src/cli/output-path.ts
-import { existsSync as existsSync3, statSync as statSync5 } from "node:fs";
+init_config();
+init_index_cache();
+import { existsSync as existsSync3, realpathSync as realpathSync6, statSync as statSync5 } from "node:fs";
 import { dirname as dirname3, resolve as resolve6 } from "node:path";
 function writeFailureReason(e) {
   const code = e?.code;
@@ -58171,6 +58173,16 @@ function checkWritable(path, what) {
     throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname3(path)} does not exist`);
   if (existsSync3(path) && statSync5(path).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: it is a folder`);
+}
+function checkOutsideRecords(path, what, root, configFile) {
+  let problem = null;
+  try {
+    const real = realpathSync6(resolve6(root));
+    problem = cachePathProblem(path, real, loadConfig(real, configFile).config.recordDirs);
+  } catch {
+    return;
+  }
+  if (problem !== null) throw new InputError(`cannot write ${what} to ${path}: ${problem}`);
 }
 
 // src/cli/commands/bulk-audit.ts
@@ -58989,7 +59001,10 @@ function makeAuditCommand(deps = {}) {
       const failOn = values["fail-on"];
       const output = values.output;
       if (output === "") throw new UsageError("--output needs a file name");
-      if (output !== void 0) checkWritable(output, "the report");
+      if (output !== void 0) {
+        checkWritable(output, "the report");
+        checkOutsideRecords(output, "the report", root, values.config);
+      }
       const paths = toRootPaths(positionals, root);
       const timeout = values["record-timeout"];
       const seconds = typeof timeout === "string" ? Number(timeout) : RECORD_BUDGET.timeMs / 1e3;
