@@ -152,6 +152,7 @@ export class RegistryPhase {
       status: this.enabled ? 'run' : 'not-run',
       reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
       records: this.records,
+      ...(this.options.mode === 'full' ? {} : { comparedWith: this.registryRecords }),
       pairs: this.pairs,
     };
   }

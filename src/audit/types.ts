@@ -94,8 +94,10 @@ export interface RegistrySummary {
   status: 'run' | 'not-run';
   /** Why it did not run (one shard of a split run), or what it compared. */
   reason: string;
-  /** Records whose keys were in the index. */
+  /** Records whose keys were in the index (in a review: the records under review). */
   records: number;
+  /** In a review: the records of the registry those under review were compared with; absent in a full audit. */
+  comparedWith?: number;
   /** Identical records and enantiomer pairs, each once (earlier record first). */
   pairs: {
     relation: 'identical' | 'enantiomers';

@@ -4,6 +4,7 @@
  * here rather than as a note on every record.
  */
 import type { RegistrySummary } from '../audit/types.js';
+import { plural as count } from '../checks/words.js';
 
 /** How many pairs a text summary lists before it points at the JSON output. */
 export const PAIRS_SHOWN = 50;
@@ -17,8 +18,12 @@ export function registryLines(
   const name = (x: { id: string | null; file: string }) => safe(x.id ?? x.file);
   const enantiomers = r.pairs.filter((p) => p.relation === 'enantiomers');
   const identical = r.pairs.filter((p) => p.relation === 'identical');
+  const over =
+    r.comparedWith === undefined
+      ? `over ${count(r.records, 'record')}`
+      : `of ${count(r.records, 'record')} under review against the registry (${count(r.comparedWith, 'record')})`;
   const lines = [
-    `Registry-wide checks over ${count(r.records, 'record')}: ${count(enantiomers.length, 'enantiomer pair')}, ` +
+    `Registry-wide checks ${over}: ${count(enantiomers.length, 'enantiomer pair')}, ` +
       `${count(identical.length, 'pair')} of identical structures.`,
   ];
   const list = (title: string, pairs: RegistrySummary['pairs']) => {
@@ -31,9 +36,4 @@ export function registryLines(
   list('identical structures (findings on the later record)', identical);
   list('enantiomer pairs (both registered; fine when meant)', enantiomers);
   return lines;
-}
-
-/** "1 record", "2 records". */
-function count(n: number, word: string): string {
-  return `${n} ${word}${n === 1 ? '' : 's'}`;
 }

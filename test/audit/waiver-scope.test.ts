@@ -135,6 +135,10 @@ describe('waivers that name what they accept', () => {
     await run(['audit', 'compounds/b.yml', '--root', reg.root, '--fail-on', 'never'], io);
     const review = io.stdout.join('\n');
     expect(review).toContain('1 record audited: 0 errors, 0 warnings, 0 notes, 1 accepted by waiver');
+    // the summary of a review says what the record was compared with, not "over 1 record"
+    expect(review).toContain(
+      'Registry-wide checks of 1 record under review against the registry (2 records): 1 enantiomer pair',
+    );
     expect(review).not.toContain('matches no finding');
   });
 });
