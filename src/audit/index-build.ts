@@ -53,6 +53,8 @@ export class RecordIndex {
   /** One entry per file, in the order of the files. */
   readonly entries: IndexEntry[];
   private readonly unkept = new Set<IndexEntry>();
+  /** Entries read in this run that go into the cache: none, and the cache on disk is still whole. */
+  private newlyKept = 0;
   private blobs!: BlobIds;
   private read = 0;
   private described = 0;
@@ -183,6 +185,7 @@ export class RecordIndex {
       };
       this.unkept.delete(this.entries[i]!);
       if (!result.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
+      else this.newlyKept++;
       this.entries[i] = entry;
     }
     if (full) this.described += at.length;
@@ -201,7 +204,8 @@ export class RecordIndex {
     if (this.cacheRefused !== null) parts.push(`cache not used: ${this.cacheRefused}`);
     if (this.cache && this.cache.status !== 'used') parts.push(`cache not used: ${this.cache.reason}`);
     const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
-    if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== 'used')) {
+    // a file read again only because it is never cached (a molfile out of reach) changes nothing to write
+    if (this.useCache && (this.newlyKept > 0 || dropped || this.cache?.status !== 'used')) {
       const kept = this.entries.filter((e) => !this.unkept.has(e));
       const error = writeIndexCache(this.opts.cachePath!, this.settings, kept);
       parts.push(error === null ? `cache written to ${this.opts.cachePath}` : `cache not written: ${error}`);

@@ -101,12 +101,15 @@ describe('a review through the key index', () => {
       const warm = await indexReview(demo.root, paths, cache);
       expect(counts(warm.log)).toEqual({ cached: FILES - 1, read: 1 });
       expect(warm.seen).toBe(cold.seen);
+      // the one file read again is never cached (LX-00033's molfile lies outside the registry): nothing to write
+      expect(warm.log[0]).not.toContain('cache written');
       // the pull request changes LX-00005's rotation sign in the working tree (not committed): its blob id
       // differs from HEAD's, so it is read again, and the review sees the new sign
       const lx5 = join(demo.root, 'compounds/LX-00005.yml');
       writeFileSync(lx5, readFileSync(lx5, 'utf8').replace('value: -13.5', 'value: 13.5'));
       const changed = await indexReview(demo.root, paths, cache);
       expect(counts(changed.log)).toEqual({ cached: FILES - 2, read: 2 });
+      expect(changed.log[0]).toContain(`cache written to ${cache}`);
       expect(changed.seen).toBe(await loadedReview(demo.root, paths));
       expect(ids(changed.seen)).not.toContain('enantiomer-rotation-same-sign');
     } finally {
