@@ -10,8 +10,8 @@ import { join } from 'node:path';
 import type { Budget } from '../chem/budget.js';
 import { mapOrdered } from '../bulk/pool.js';
 import { BlobIds, gitBlobIds } from '../registry/blob-ids.js';
+import { recordFolderProblem } from '../registry/files.js';
 import {
-  cachePathProblem,
   entryRow,
   readIndexCache,
   writeIndexCache,
@@ -68,7 +68,7 @@ export class RecordIndex {
   private constructor(private readonly opts: IndexBuildOptions) {
     this.entries = new Array<IndexEntry>(opts.files.length);
     this.cacheRefused =
-      opts.cachePath === null ? null : cachePathProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
+      opts.cachePath === null ? null : recordFolderProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
   }
 
   /** The index of `opts.files`: cached rows where they still hold, light rows read for the rest. */

@@ -5,7 +5,7 @@
 import { existsSync, realpathSync, statSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
 import { loadConfig } from '../audit/config.js';
-import { cachePathProblem } from '../registry/index-cache.js';
+import { recordFolderProblem } from '../registry/files.js';
 import { InputError } from './command.js';
 
 /** Why a file cannot be written, in words (not a bare error code). */
@@ -40,7 +40,7 @@ export function checkOutsideRecords(path: string, what: string, root: string, co
   let problem: string | null = null;
   try {
     const real = realpathSync(resolve(root));
-    problem = cachePathProblem(path, real, loadConfig(real, configFile).config.recordDirs);
+    problem = recordFolderProblem(path, real, loadConfig(real, configFile).config.recordDirs);
   } catch {
     return;
   }

@@ -14,7 +14,7 @@ import {
   statSync,
   type Dirent,
 } from 'node:fs';
-import { isAbsolute, join, relative, resolve, sep } from 'node:path';
+import { dirname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 
 /** Record files larger than this are refused (a record is a few hundred bytes; molfiles a few hundred kB). */
 export const MAX_FILE_BYTES = 8 * 1024 * 1024;
@@ -203,4 +203,34 @@ export function findRecordFiles(root: string, recordDirs: readonly string[]): Fo
   }
   const files = [...found.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([, abs]) => abs);
   return { files, refused, missingDirs };
+}
+
+/**
+ * Why a file stereogate writes (its index cache, a report) cannot be at `path` in the registry at `realRoot`, or
+ * null: inside a record folder it would be read as a record by the next run, or replace one.
+ */
+export function recordFolderProblem(
+  path: string,
+  realRoot: string,
+  recordDirs: readonly string[],
+): string | null {
+  let abs = resolve(path);
+  try {
+    abs = realpathSync(abs);
+  } catch {
+    try {
+      abs = resolve(realpathSync(dirname(abs)), abs.slice(dirname(abs).length + 1));
+    } catch {
+      // its folder does not exist yet: the cache makes it, outside any existing record folder
+    }
+  }
+  const rel = relativeTo(realRoot, abs);
+  if (rel.startsWith('../') || rel === '..' || rel.startsWith('/')) return null;
+  const dirs = recordDirs.length > 0 ? recordDirs : ['.'];
+  for (const d of dirs) {
+    const dir = d.replace(/^\.\/?/, '').replace(/\/+$/, '');
+    if (dir === '' || rel === dir || rel.startsWith(`${dir}/`))
+      return `${path} is inside the record folder ${dir === '' ? '.' : dir}, where it would be taken for a record`;
+  }
+  return null;
 }

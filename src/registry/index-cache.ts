@@ -12,9 +12,8 @@
  * missing, stale or damaged cache only costs time, never a finding. Written to a temporary file and renamed, so
  * a run that stops half-way leaves the previous cache whole.
  */
-import { mkdirSync, readFileSync, realpathSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
-import { dirname, resolve } from 'node:path';
-import { relativeTo } from './files.js';
+import { mkdirSync, readFileSync, renameSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { dirname } from 'node:path';
 import { isString, restOf, rowFromRest } from './index-cache-shape.js';
 import type { IndexRow } from './keys.js';
 
@@ -246,34 +245,4 @@ function molfilesOf(text: string): [string, string][] | null {
     raw.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1]))
     ? (raw as [string, string][])
     : null;
-}
-
-/**
- * Why `path` cannot hold the index cache of the registry at `realRoot`, or null. A path inside a record folder
- * would be read as a record, or replace one: the cache is neither read nor written there.
- */
-export function cachePathProblem(
-  path: string,
-  realRoot: string,
-  recordDirs: readonly string[],
-): string | null {
-  let abs = resolve(path);
-  try {
-    abs = realpathSync(abs);
-  } catch {
-    try {
-      abs = resolve(realpathSync(dirname(abs)), abs.slice(dirname(abs).length + 1));
-    } catch {
-      // its folder does not exist yet: the cache makes it, outside any existing record folder
-    }
-  }
-  const rel = relativeTo(realRoot, abs);
-  if (rel.startsWith('../') || rel === '..' || rel.startsWith('/')) return null;
-  const dirs = recordDirs.length > 0 ? recordDirs : ['.'];
-  for (const d of dirs) {
-    const dir = d.replace(/^\.\/?/, '').replace(/\/+$/, '');
-    if (dir === '' || rel === dir || rel.startsWith(`${dir}/`))
-      return `${path} is inside the record folder ${dir === '' ? '.' : dir}, where it would be taken for a record`;
-  }
-  return null;
 }
