@@ -1517,7 +1517,7 @@ var init_refine = __esm({
       refine(p, splitters) {
         const { offs, adj, code } = this.g;
         const { lab, start, len } = p;
-        const { count: count4, touched, queue, inQueue, cellHits, cellBase, members } = this;
+        const { count: count3, touched, queue, inQueue, cellHits, cellBase, members } = this;
         const qsize = queue.length;
         this.head = 0;
         this.tail = 0;
@@ -1539,8 +1539,8 @@ var init_refine = __esm({
             this.work += offs[v + 1] - offs[v] + 1;
             for (let e = offs[v]; e < offs[v + 1]; e++) {
               const u = adj[e];
-              if (count4[u] === 0) touched[nt++] = u;
-              count4[u] += WEIGHT[code[e]];
+              if (count3[u] === 0) touched[nt++] = u;
+              count3[u] += WEIGHT[code[e]];
             }
           }
           const cells = this.cellsToSplit;
@@ -1568,7 +1568,7 @@ var init_refine = __esm({
             if (ok && this.splitCell(p, s, cellBase[s], cellHits[s]) < 0) ok = false;
             cellHits[s] = 0;
           }
-          for (let t = 0; t < nt; t++) count4[touched[t]] = 0;
+          for (let t = 0; t < nt; t++) count3[touched[t]] = 0;
         }
         this.drain();
         return ok;
@@ -1593,13 +1593,13 @@ var init_refine = __esm({
        */
       splitCell(p, s, from, k) {
         const { lab, start, len } = p;
-        const count4 = this.count;
+        const count3 = this.count;
         const L = len[s];
         if (k === L) {
-          const first = count4[lab[s]];
+          const first = count3[lab[s]];
           let uniform = true;
           for (let t = s + 1; t < s + L; t++) {
-            if (count4[lab[t]] !== first) {
+            if (count3[lab[t]] !== first) {
               uniform = false;
               break;
             }
@@ -1610,7 +1610,7 @@ var init_refine = __esm({
         for (let i = 0; i < k; i++) swapTo(p, this.members[from + i], --end);
         this.work += k;
         const buf = this.sortBuf;
-        for (let t = 0; t < k; t++) buf[t] = count4[lab[end + t]] * 4194304 + lab[end + t];
+        for (let t = 0; t < k; t++) buf[t] = count3[lab[end + t]] * 4194304 + lab[end + t];
         if (k > 16) buf.subarray(0, k).sort();
         else {
           for (let t = 1; t < k; t++) {
@@ -1640,7 +1640,7 @@ var init_refine = __esm({
         }
         let fragStart = end;
         for (let t = end; t <= s + L; t++) {
-          if (t === s + L || t > end && count4[lab[t]] !== count4[lab[t - 1]]) {
+          if (t === s + L || t > end && count3[lab[t]] !== count3[lab[t - 1]]) {
             const fl = t - fragStart;
             len[fragStart] = fl;
             for (let q = fragStart; q < t; q++) start[lab[q]] = fragStart;
@@ -4056,13 +4056,13 @@ function readWedges(s, i, atomCount, bondCount, out) {
     return { ok: true, end: j };
   }
 }
-function readIndex(s, at2, count4, code, what = "atom") {
+function readIndex(s, at2, count3, code, what = "atom") {
   let v = 0;
   let j = at2;
   while (isDigit(s.charCodeAt(j)) && j - at2 < 9) v = v * 10 + s.charCodeAt(j++) - 48;
   if (j === at2) return fail3(code, `expected ${what === "atom" ? "an atom" : "a bond"} index`, at2);
-  if (v >= count4)
-    return fail3(code, `${what} index ${v} is out of range (the SMILES has ${count4} ${what}s)`, at2);
+  if (v >= count3)
+    return fail3(code, `${what} index ${v} is out of range (the SMILES has ${count3} ${what}s)`, at2);
   return { v, end: j };
 }
 function applyDrawing(st, { coords, coordsAt, wedges }, atomOffset, warnings) {
@@ -4149,13 +4149,13 @@ function parseCxExtension(s, start, atomCount, bondCount) {
       continue;
     }
     if (c === 94 && s.charCodeAt(i + 1) >= 49 && s.charCodeAt(i + 1) <= 55 && s.charCodeAt(i + 2) === 58) {
-      const count4 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
+      const count3 = s.charCodeAt(i + 1) === 49 ? 1 : 2;
       let j2 = i + 3;
       while (isDigit(s.charCodeAt(j2))) {
         const r = readIndex(s, j2, atomCount, "cxsmiles-bad-radical");
         if ("ok" in r) return r;
         j2 = r.end;
-        radicals.set(r.v, count4);
+        radicals.set(r.v, count3);
         if (s.charCodeAt(j2) === 44 && isDigit(s.charCodeAt(j2 + 1))) j2++;
         else break;
       }
@@ -6437,8 +6437,8 @@ function tetrahedralCandidate(s, g, rings, aromaticBond, i) {
   }
 }
 function centreOf(nb, h, withLonePair, n, i) {
-  const count4 = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
-  if (count4 !== 4) return null;
+  const count3 = nb.length + (h === 1 ? 1 : 0) + (withLonePair ? 1 : 0);
+  if (count3 !== 4) return null;
   const t = [0, 0, 0, 0];
   let k = 0;
   for (; k < nb.length; k++) t[k] = nb[k];
@@ -6884,9 +6884,9 @@ function axisCandidates(s, g, rings, aromaticBond, orthoMin) {
     if (oa === null) continue;
     const ob = orthoOf(b.b, b.a);
     if (ob === null) continue;
-    const count4 = substituted(oa[0]) + substituted(oa[1]) + substituted(ob[0]) + substituted(ob[1]);
-    if (count4 < orthoMin) continue;
-    out.push({ ends: [b.a, b.b], tokens: [oa[0], oa[1], ob[0], ob[1]], orthoSubstituents: count4 });
+    const count3 = substituted(oa[0]) + substituted(oa[1]) + substituted(ob[0]) + substituted(ob[1]);
+    if (count3 < orthoMin) continue;
+    out.push({ ends: [b.a, b.b], tokens: [oa[0], oa[1], ob[0], ob[1]], orthoSubstituents: count3 });
   }
   return out;
 }
@@ -32983,13 +32983,13 @@ function relatedKeys(A, B, parentKey) {
   return keys;
 }
 function speciesMismatch(inA, inB) {
-  const count4 = (xs, key3) => {
+  const count3 = (xs, key3) => {
     const own2 = xs.filter((x) => x.key === key3);
     return [own2.length, own2.reduce((t, x) => t + x.copies, 0)];
   };
   for (const key3 of new Set(inA.map((x) => x.key))) {
-    const [na, ma] = count4(inA, key3);
-    const [nb, mb] = count4(inB, key3);
+    const [na, ma] = count3(inA, key3);
+    const [nb, mb] = count3(inB, key3);
     const f = inA.find((x) => x.key === key3).formula;
     if (na !== nb)
       return `same constitution, different mixtures: A holds ${na} ${na === 1 ? "stereoisomer" : "stereoisomers"} of ${f}, B ${nb}, so neither one stereoisomer nor a mirror image of the other`;
@@ -33125,7 +33125,7 @@ import {
   realpathSync,
   statSync
 } from "node:fs";
-import { isAbsolute, join, relative, resolve, sep } from "node:path";
+import { dirname, isAbsolute, join, relative, resolve, sep } from "node:path";
 function readRegularFile(abs) {
   const fd = openSync(abs, OPEN_FLAGS);
   try {
@@ -33275,6 +33275,26 @@ function findRecordFiles(root, recordDirs) {
   }
   const files = [...found.entries()].sort(([a], [b]) => a < b ? -1 : a > b ? 1 : 0).map(([, abs]) => abs);
   return { files, refused, missingDirs };
+}
+function recordFolderProblem(path, realRoot, recordDirs) {
+  let abs = resolve(path);
+  try {
+    abs = realpathSync(abs);
+  } catch {
+    try {
+      abs = resolve(realpathSync(dirname(abs)), abs.slice(dirname(abs).length + 1));
+    } catch {
+    }
+  }
+  const rel = relativeTo(realRoot, abs);
+  if (rel.startsWith("../") || rel === ".." || rel.startsWith("/")) return null;
+  const dirs = recordDirs.length > 0 ? recordDirs : ["."];
+  for (const d of dirs) {
+    const dir = d.replace(/^\.\/?/, "").replace(/\/+$/, "");
+    if (dir === "" || rel === dir || rel.startsWith(`${dir}/`))
+      return `${path} is inside the record folder ${dir === "" ? "." : dir}, where it would be taken for a record`;
+  }
+  return null;
 }
 var MAX_FILE_BYTES, RECORD_EXTENSIONS, UTF8, OPEN_FLAGS;
 var init_files = __esm({
@@ -33855,8 +33875,8 @@ var require_Node = __commonJS({
         };
         const res = toJS.toJS(this, "", ctx);
         if (typeof onAnchor === "function")
-          for (const { count: count4, res: res2 } of ctx.anchors.values())
-            onAnchor(res2, count4);
+          for (const { count: count3, res: res2 } of ctx.anchors.values())
+            onAnchor(res2, count3);
         return typeof reviver === "function" ? applyReviver.applyReviver(reviver, { "": res }, "", res) : res;
       }
     };
@@ -33964,13 +33984,13 @@ var require_Alias = __commonJS({
         const anchor = anchors2 && source && anchors2.get(source);
         return anchor ? anchor.count * anchor.aliasCount : 0;
       } else if (identity.isCollection(node)) {
-        let count4 = 0;
+        let count3 = 0;
         for (const item of node.items) {
           const c = getAliasCount(doc, item, anchors2);
-          if (c > count4)
-            count4 = c;
+          if (c > count3)
+            count3 = c;
         }
-        return count4;
+        return count3;
       } else if (identity.isPair(node)) {
         const kc = getAliasCount(doc, node.key, anchors2);
         const vc = getAliasCount(doc, node.value, anchors2);
@@ -36923,8 +36943,8 @@ var require_Document = __commonJS({
         };
         const res = toJS.toJS(this.contents, jsonArg ?? "", ctx);
         if (typeof onAnchor === "function")
-          for (const { count: count4, res: res2 } of ctx.anchors.values())
-            onAnchor(res2, count4);
+          for (const { count: count3, res: res2 } of ctx.anchors.values())
+            onAnchor(res2, count3);
         return typeof reviver === "function" ? applyReviver.applyReviver(reviver, { "": res }, "", res) : res;
       }
       /**
@@ -37001,12 +37021,12 @@ var require_errors = __commonJS({
         lineStr = prev + lineStr;
       }
       if (/[^ ]/.test(lineStr)) {
-        let count4 = 1;
+        let count3 = 1;
         const end = error.linePos[1];
         if (end?.line === line2 && end.col > col) {
-          count4 = Math.max(1, Math.min(end.col - col, 80 - ci));
+          count3 = Math.max(1, Math.min(end.col - col, 80 - ci));
         }
-        const pointer = " ".repeat(ci) + "^".repeat(count4);
+        const pointer = " ".repeat(ci) + "^".repeat(count3);
         error.message += `:
 
 ${lineStr}
@@ -43077,20 +43097,20 @@ var require_resolve = __commonJS({
       return false;
     }
     function countKeys(schema) {
-      let count4 = 0;
+      let count3 = 0;
       for (const key3 in schema) {
         if (key3 === "$ref")
           return Infinity;
-        count4++;
+        count3++;
         if (SIMPLE_INLINED.has(key3))
           continue;
         if (typeof schema[key3] == "object") {
-          (0, util_1.eachItem)(schema[key3], (sch) => count4 += countKeys(sch));
+          (0, util_1.eachItem)(schema[key3], (sch) => count3 += countKeys(sch));
         }
-        if (count4 === Infinity)
+        if (count3 === Infinity)
           return Infinity;
       }
-      return count4;
+      return count3;
     }
     function getFullPath(resolver, id = "", normalize2) {
       if (normalize2 !== false)
@@ -43841,7 +43861,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve8.call(this, root, ref);
+      let _sch = resolve7.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -43868,7 +43888,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve8(root, ref) {
+    function resolve7(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -44732,7 +44752,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve8(baseURI, relativeURI, options) {
+    function resolve7(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -45123,7 +45143,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES: SCHEMES2,
       normalize: normalize2,
-      resolve: resolve8,
+      resolve: resolve7,
       resolveComponent,
       equal,
       serialize,
@@ -46628,8 +46648,8 @@ var require_contains = __commonJS({
         cxt.result(valid, () => cxt.reset());
         function validateItemsWithCount() {
           const schValid = gen.name("_valid");
-          const count4 = gen.let("count", 0);
-          validateItems(schValid, () => gen.if(schValid, () => checkLimits(count4)));
+          const count3 = gen.let("count", 0);
+          validateItems(schValid, () => gen.if(schValid, () => checkLimits(count3)));
         }
         function validateItems(_valid, block2) {
           gen.forRange("i", 0, len, (i) => {
@@ -46642,16 +46662,16 @@ var require_contains = __commonJS({
             block2();
           });
         }
-        function checkLimits(count4) {
-          gen.code((0, codegen_1._)`${count4}++`);
+        function checkLimits(count3) {
+          gen.code((0, codegen_1._)`${count3}++`);
           if (max === void 0) {
-            gen.if((0, codegen_1._)`${count4} >= ${min}`, () => gen.assign(valid, true).break());
+            gen.if((0, codegen_1._)`${count3} >= ${min}`, () => gen.assign(valid, true).break());
           } else {
-            gen.if((0, codegen_1._)`${count4} > ${max}`, () => gen.assign(valid, false).break());
+            gen.if((0, codegen_1._)`${count3} > ${max}`, () => gen.assign(valid, false).break());
             if (min === 1)
               gen.assign(valid, true);
             else
-              gen.if((0, codegen_1._)`${count4} >= ${min}`, () => gen.assign(valid, true));
+              gen.if((0, codegen_1._)`${count3} >= ${min}`, () => gen.assign(valid, true));
           }
         }
       }
@@ -49141,7 +49161,7 @@ var init_waivers = __esm({
 
 // src/registry/load.ts
 import { realpathSync as realpathSync2 } from "node:fs";
-import { dirname } from "node:path";
+import { dirname as dirname2 } from "node:path";
 function loadRegistry(root, options) {
   const realRoot = realpathSync2(root);
   const found = findRecordFiles(realRoot, options.recordDirs);
@@ -49204,7 +49224,7 @@ function loadRecordFileOrThrow(realRoot, abs) {
     problems: parsed.problems,
     origin: { kind: "file" }
   };
-  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname2(abs), parsed.value);
   return loaded;
 }
 function asObject(v) {
@@ -49296,10 +49316,10 @@ function heavyAtomCandidates(formula) {
     const body = formula.slice(0, -1);
     const digits = /\d*$/.exec(body)[0];
     const prefix = body.slice(0, body.length - digits.length);
-    const count4 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
+    const count3 = (d) => d === "" || d[0] !== "0" && Number(d) >= 2;
     for (let i = 0; i <= digits.length; i++) {
       const own2 = digits.slice(0, i);
-      if (count4(own2) && count4(digits.slice(i))) bases.push(prefix + own2);
+      if (count3(own2) && count3(digits.slice(i))) bases.push(prefix + own2);
     }
   }
   return [...new Set(bases.map((b) => b.replace(/H(?![a-z])\d*/g, "")))];
@@ -50300,6 +50320,7 @@ var init_registry_phase = __esm({
           status: this.enabled ? "run" : "not-run",
           reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
           records: this.records,
+          ...this.options.mode === "full" ? {} : { comparedWith: this.registryRecords },
           pairs: this.pairs
         };
       }
@@ -53204,8 +53225,8 @@ var init_index_cache_shape = __esm({
 });
 
 // src/registry/index-cache.ts
-import { mkdirSync, readFileSync as readFileSync2, realpathSync as realpathSync4, renameSync, rmSync, statSync as statSync3, writeFileSync } from "node:fs";
-import { dirname as dirname2, resolve as resolve4 } from "node:path";
+import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, statSync as statSync3, writeFileSync } from "node:fs";
+import { dirname as dirname3 } from "node:path";
 function entryRow(e) {
   if (e.row === null && e.rest !== null) {
     e.row = rowFromRest(e.rest, e.file, e.id, e.idLine);
@@ -53268,7 +53289,7 @@ function writeIndexCache(path, settings, entries) {
     } catch {
     }
     if (stat && !stat.isFile()) return `${path} is not a regular file, so it is not replaced`;
-    mkdirSync(dirname2(path), { recursive: true });
+    mkdirSync(dirname3(path), { recursive: true });
     const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
     const lines2 = entries.map(lineOf2);
     writeFileSync(tmp, `${head}
@@ -53346,31 +53367,10 @@ function molfilesOf(text) {
   }
   return Array.isArray(raw2) && raw2.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])) ? raw2 : null;
 }
-function cachePathProblem(path, realRoot, recordDirs) {
-  let abs = resolve4(path);
-  try {
-    abs = realpathSync4(abs);
-  } catch {
-    try {
-      abs = resolve4(realpathSync4(dirname2(abs)), abs.slice(dirname2(abs).length + 1));
-    } catch {
-    }
-  }
-  const rel = relativeTo(realRoot, abs);
-  if (rel.startsWith("../") || rel === ".." || rel.startsWith("/")) return null;
-  const dirs = recordDirs.length > 0 ? recordDirs : ["."];
-  for (const d of dirs) {
-    const dir = d.replace(/^\.\/?/, "").replace(/\/+$/, "");
-    if (dir === "" || rel === dir || rel.startsWith(`${dir}/`))
-      return `${path} is inside the record folder ${dir === "" ? "." : dir}, where it would be taken for a record`;
-  }
-  return null;
-}
 var INDEX_CACHE_FORMAT, FORMAT, MAX_CACHE_BYTES, FORMAT_VERSION, END, optional, COLUMNS;
 var init_index_cache = __esm({
   "src/registry/index-cache.ts"() {
     "use strict";
-    init_files();
     init_index_cache_shape();
     INDEX_CACHE_FORMAT = "stereogate registry index cache";
     FORMAT = INDEX_CACHE_FORMAT;
@@ -53557,8 +53557,8 @@ async function* mapOrdered(items, opts) {
         yield value;
       }
       if (inputDone && nextOut >= nextIndex) break;
-      await new Promise((resolve8) => {
-        wake = resolve8;
+      await new Promise((resolve7) => {
+        wake = resolve7;
         if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
       });
     }
@@ -53639,6 +53639,7 @@ var init_index_build = __esm({
     "use strict";
     init_pool();
     init_blob_ids();
+    init_files();
     init_index_cache();
     init_index_keys();
     init_version();
@@ -53648,12 +53649,14 @@ var init_index_build = __esm({
       constructor(opts) {
         this.opts = opts;
         this.entries = new Array(opts.files.length);
-        this.cacheRefused = opts.cachePath === null ? null : cachePathProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
+        this.cacheRefused = opts.cachePath === null ? null : recordFolderProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
       }
       opts;
       /** One entry per file, in the order of the files. */
       entries;
       unkept = /* @__PURE__ */ new Set();
+      /** Entries read in this run that go into the cache: none, and the cache on disk is still whole. */
+      newlyKept = 0;
       blobs;
       read = 0;
       described = 0;
@@ -53763,6 +53766,7 @@ var init_index_build = __esm({
           };
           this.unkept.delete(this.entries[i]);
           if (!result2.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
+          else this.newlyKept++;
           this.entries[i] = entry;
         }
         if (full) this.described += at2.length;
@@ -53780,7 +53784,7 @@ var init_index_build = __esm({
         if (this.cacheRefused !== null) parts.push(`cache not used: ${this.cacheRefused}`);
         if (this.cache && this.cache.status !== "used") parts.push(`cache not used: ${this.cache.reason}`);
         const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
-        if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== "used")) {
+        if (this.useCache && (this.newlyKept > 0 || dropped || this.cache?.status !== "used")) {
           const kept = this.entries.filter((e) => !this.unkept.has(e));
           const error = writeIndexCache(this.opts.cachePath, this.settings, kept);
           parts.push(error === null ? `cache written to ${this.opts.cachePath}` : `cache not written: ${error}`);
@@ -53971,8 +53975,8 @@ var init_review_against_index = __esm({
 });
 
 // src/audit/run.ts
-import { existsSync as existsSync2, realpathSync as realpathSync5, statSync as statSync4 } from "node:fs";
-import { resolve as resolve5 } from "node:path";
+import { existsSync as existsSync2, realpathSync as realpathSync4, statSync as statSync4 } from "node:fs";
+import { resolve as resolve4 } from "node:path";
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache2 = new StructureCache(options.engine);
@@ -54162,11 +54166,11 @@ function summarize(records) {
   return s;
 }
 async function openRegistry(options) {
-  const rootAbs = resolve5(options.root);
+  const rootAbs = resolve4(options.root);
   if (!existsSync2(rootAbs) || !statSync4(rootAbs).isDirectory()) {
     throw new ConfigError(`registry folder ${options.root} does not exist`);
   }
-  const root = realpathSync5(rootAbs);
+  const root = realpathSync4(rootAbs);
   const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
   const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
@@ -55434,7 +55438,7 @@ ${CAUTION}`
 init_config();
 init_run();
 import { existsSync as existsSync4, writeFileSync as writeFileSync3 } from "node:fs";
-import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve7, sep as sep3 } from "node:path";
+import { isAbsolute as isAbsolute4, relative as relative3, resolve as resolve6, sep as sep3 } from "node:path";
 
 // src/report/json.ts
 function finding2(f) {
@@ -55774,8 +55778,8 @@ function markdownRecord(r, computed = computedText(r.computed)) {
   const group = worstOpen(r);
   return { group, text: group < 3 ? recordBlock(r, computed) : cleanLine(r, computed) };
 }
-function cleanHeading(count4) {
-  return `### ${plural(count4, "record")} without open findings`;
+function cleanHeading(count3) {
+  return `### ${plural(count3, "record")} without open findings`;
 }
 function recordsPart(result2) {
   const groups = [[], [], [], []];
@@ -56015,6 +56019,7 @@ function sarifInvocations(groups, ruleIndex, prefix = "") {
 }
 
 // src/report/registry-summary.ts
+init_words();
 var PAIRS_SHOWN = 50;
 function registryLines(r, safe = (s) => s) {
   if (!r) return [];
@@ -56022,8 +56027,9 @@ function registryLines(r, safe = (s) => s) {
   const name = (x) => safe(x.id ?? x.file);
   const enantiomers = r.pairs.filter((p) => p.relation === "enantiomers");
   const identical = r.pairs.filter((p) => p.relation === "identical");
+  const over = r.comparedWith === void 0 ? `over ${plural(r.records, "record")}` : `of ${plural(r.records, "record")} under review against the registry (${plural(r.comparedWith, "record")})`;
   const lines2 = [
-    `Registry-wide checks over ${count3(r.records, "record")}: ${count3(enantiomers.length, "enantiomer pair")}, ${count3(identical.length, "pair")} of identical structures.`
+    `Registry-wide checks ${over}: ${plural(enantiomers.length, "enantiomer pair")}, ${plural(identical.length, "pair")} of identical structures.`
   ];
   const list = (title, pairs) => {
     if (pairs.length === 0) return;
@@ -56035,9 +56041,6 @@ function registryLines(r, safe = (s) => s) {
   list("identical structures (findings on the later record)", identical);
   list("enantiomer pairs (both registered; fine when meant)", enantiomers);
   return lines2;
-}
-function count3(n, word) {
-  return `${n} ${word}${n === 1 ? "" : "s"}`;
 }
 
 // src/report/text.ts
@@ -56405,9 +56408,9 @@ function parseShard(text) {
   const m = /^(\d+)\/(\d+)$/.exec(text.trim());
   if (!m) return null;
   const index = Number(m[1]);
-  const count4 = Number(m[2]);
-  if (count4 < 1 || index < 1 || index > count4) return null;
-  return { index, count: count4 };
+  const count3 = Number(m[2]);
+  if (count3 < 1 || index < 1 || index > count3) return null;
+  return { index, count: count3 };
 }
 async function* shardFilter(items, shard) {
   let n = 0;
@@ -57292,7 +57295,7 @@ function csvCell(v) {
 function csvRow(r) {
   const open = r.findings.filter((f) => !f.waived);
   const c = r.computed;
-  const count4 = (s) => open.filter((f) => f.severity === s).length;
+  const count3 = (s) => open.filter((f) => f.severity === s).length;
   return [
     r.seq,
     r.origin.source,
@@ -57305,9 +57308,9 @@ function csvRow(r) {
     c ? c.meso === null ? "open" : String(c.meso) : null,
     c ? c.units.length : null,
     c ? c.undefined : null,
-    count4("error"),
-    count4("warning"),
-    count4("note"),
+    count3("error"),
+    count3("warning"),
+    count3("note"),
     r.findings.length - open.length,
     [...new Set(open.map((f) => f.check))].join(" ")
   ].map(csvCell).join(",");
@@ -57760,7 +57763,7 @@ function isBulkInput(path) {
 }
 async function countRecords(path) {
   const f = formatOf(path);
-  let count4 = 0;
+  let count3 = 0;
   let atLineStart = true;
   let lineHasText = false;
   let dollars = 0;
@@ -57768,7 +57771,7 @@ async function countRecords(path) {
     for (let i = 0; i < chunk.length; i++) {
       const c = chunk[i];
       if (c === 10) {
-        if (f !== "sd" && lineHasText) count4++;
+        if (f !== "sd" && lineHasText) count3++;
         atLineStart = true;
         lineHasText = false;
         dollars = 0;
@@ -57778,14 +57781,14 @@ async function countRecords(path) {
       if (f === "sd" && (atLineStart || dollars > 0)) {
         if (c === 36) {
           dollars++;
-          if (dollars === 4) count4++;
+          if (dollars === 4) count3++;
         } else dollars = 0;
       }
       atLineStart = false;
     }
   }
-  if (f !== "sd" && lineHasText) count4++;
-  return f === "sd" ? count4 : Math.max(0, count4 - 1);
+  if (f !== "sd" && lineHasText) count3++;
+  return f === "sd" ? count3 : Math.max(0, count3 - 1);
 }
 async function* allItems(inputs) {
   let seq = 0;
@@ -58153,9 +58156,9 @@ init_findings();
 
 // src/cli/output-path.ts
 init_config();
-init_index_cache();
-import { existsSync as existsSync3, realpathSync as realpathSync6, statSync as statSync5 } from "node:fs";
-import { dirname as dirname3, resolve as resolve6 } from "node:path";
+init_files();
+import { existsSync as existsSync3, realpathSync as realpathSync5, statSync as statSync5 } from "node:fs";
+import { dirname as dirname4, resolve as resolve5 } from "node:path";
 function writeFailureReason(e) {
   const code = e?.code;
   if (code === "ENOENT") return "its folder does not exist";
@@ -58168,17 +58171,17 @@ function writeFailure(path, e) {
   return `cannot write ${path}: ${writeFailureReason(e)}`;
 }
 function checkWritable(path, what) {
-  const dir = dirname3(resolve6(path));
+  const dir = dirname4(resolve5(path));
   if (!existsSync3(dir) || !statSync5(dir).isDirectory())
-    throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname3(path)} does not exist`);
+    throw new InputError(`cannot write ${what} to ${path}: the folder ${dirname4(path)} does not exist`);
   if (existsSync3(path) && statSync5(path).isDirectory())
     throw new InputError(`cannot write ${what} to ${path}: it is a folder`);
 }
 function checkOutsideRecords(path, what, root, configFile) {
   let problem = null;
   try {
-    const real = realpathSync6(resolve6(root));
-    problem = cachePathProblem(path, real, loadConfig(real, configFile).config.recordDirs);
+    const real = realpathSync5(resolve5(root));
+    problem = recordFolderProblem(path, real, loadConfig(real, configFile).config.recordDirs);
   } catch {
     return;
   }
@@ -58758,10 +58761,10 @@ function frame(doc, key3) {
   return [doc.slice(0, open), doc.slice(open + 1)];
 }
 function arrayWriter(sink, depth) {
-  let count4 = 0;
+  let count3 = 0;
   return {
-    add: (elementJson) => sink.write(`${count4++ === 0 ? "\n" : ",\n"}${nested(elementJson, depth)}`),
-    end: () => sink.write(count4 === 0 ? "]" : `
+    add: (elementJson) => sink.write(`${count3++ === 0 ? "\n" : ",\n"}${nested(elementJson, depth)}`),
+    end: () => sink.write(count3 === 0 ? "]" : `
 ${" ".repeat(2 * (depth - 1))}]`)
   };
 }
@@ -58806,12 +58809,12 @@ function sarifReport(sink, checks, known, options) {
   const prefix = options?.uriPrefix ? options.uriPrefix.replace(/\/?$/, "/") : "";
   const notRun = new NotRunTally();
   const results = new SpillGroups(1);
-  let count4 = 0;
+  let count3 = 0;
   return {
     async add(r) {
       notRun.add({ id: r.result.id, file: r.result.file, line: null }, r.result.notRun);
       for (const res of sarifResults(r.result, index, options))
-        results.add(0, `${count4++ === 0 ? "\n" : ",\n"}${nested(JSON.stringify(res, null, 2), 4)}`);
+        results.add(0, `${count3++ === 0 ? "\n" : ",\n"}${nested(JSON.stringify(res, null, 2), 4)}`);
     },
     async finish(totals) {
       try {
@@ -58823,7 +58826,7 @@ function sarifReport(sink, checks, known, options) {
 `, '"results"');
         await sink.write(head);
         await results.copy(0, sink);
-        await sink.write(count4 === 0 ? "]" : "\n      ]");
+        await sink.write(count3 === 0 ? "]" : "\n      ]");
         await sink.write(tail);
         await sink.close();
       } finally {
@@ -58961,13 +58964,13 @@ function hasInternalErrors(result2) {
   return result2.records.some((r) => r.findings.some(isInternalError));
 }
 function toRootPaths(paths, root) {
-  const rootAbs = resolve7(root);
+  const rootAbs = resolve6(root);
   return paths.map((p) => {
-    const abs = resolve7(p);
+    const abs = resolve6(p);
     if (!existsSync4(abs)) return p;
     const rel = relative3(rootAbs, abs);
     if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
-      if (existsSync4(resolve7(rootAbs, p))) return p;
+      if (existsSync4(resolve6(rootAbs, p))) return p;
       throw new UsageError(`${p} is outside the registry root ${root}`);
     }
     return rel.split(sep3).join("/") || ".";
@@ -59052,7 +59055,7 @@ function makeAuditCommand(deps = {}) {
           checks: deps.checks,
           engine: deps.engine,
           budget,
-          ...indexCache === void 0 ? {} : { indexCache: resolve7(indexCache), log: (l) => io.err(`stereogate: ${l}`) }
+          ...indexCache === void 0 ? {} : { indexCache: resolve6(indexCache), log: (l) => io.err(`stereogate: ${l}`) }
         });
       } catch (e) {
         if (e instanceof ConfigError) throw new UsageError(e.message);
@@ -59126,7 +59129,7 @@ function respawnForBulk(argv) {
   if (!script) return Promise.resolve(null);
   const args = respawnArgs(argv, process.execArgv, script, process.env, availableParallelism4());
   if (!args) return Promise.resolve(null);
-  return new Promise((resolve8) => {
+  return new Promise((resolve7) => {
     const child = spawn(process.execPath, args, {
       stdio: "inherit",
       env: { ...process.env, [NO_RESPAWN_ENV]: "1" }
@@ -59136,11 +59139,11 @@ function respawnForBulk(argv) {
     const onTerm = forward("SIGTERM");
     process.on("SIGINT", onInt);
     process.on("SIGTERM", onTerm);
-    child.on("error", () => resolve8(null));
+    child.on("error", () => resolve7(null));
     child.on("exit", (code, signal) => {
       process.off("SIGINT", onInt);
       process.off("SIGTERM", onTerm);
-      resolve8(code ?? (signal ? 128 + (signal === "SIGINT" ? 2 : 15) : 1));
+      resolve7(code ?? (signal ? 128 + (signal === "SIGINT" ? 2 : 15) : 1));
     });
   });
 }

@@ -47412,7 +47412,7 @@ async function defaultEngine(settings = {}) {
 init_budget();
 
 // src/registry/load.ts
-import { dirname } from "node:path";
+import { dirname as dirname2 } from "node:path";
 
 // src/registry/files.ts
 import {
@@ -47426,7 +47426,7 @@ import {
   realpathSync,
   statSync
 } from "node:fs";
-import { isAbsolute, join, relative, resolve, sep } from "node:path";
+import { dirname, isAbsolute, join, relative, resolve, sep } from "node:path";
 var MAX_FILE_BYTES = 8 * 1024 * 1024;
 var UTF8 = new TextDecoder("utf-8", { fatal: true });
 var OPEN_FLAGS = constants.O_RDONLY | (constants.O_NONBLOCK ?? 0);
@@ -48336,7 +48336,7 @@ function loadRecordFileOrThrow(realRoot, abs) {
     problems: parsed.problems,
     origin: { kind: "file" }
   };
-  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname2(abs), parsed.value);
   return loaded;
 }
 function asObject(v) {

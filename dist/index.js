@@ -2173,9 +2173,9 @@ var require_dispatcher_base = __commonJS({
       }
       close(callback) {
         if (callback === void 0) {
-          return new Promise((resolve7, reject) => {
+          return new Promise((resolve6, reject) => {
             this.close((err2, data) => {
-              return err2 ? reject(err2) : resolve7(data);
+              return err2 ? reject(err2) : resolve6(data);
             });
           });
         }
@@ -2213,12 +2213,12 @@ var require_dispatcher_base = __commonJS({
           err2 = null;
         }
         if (callback === void 0) {
-          return new Promise((resolve7, reject) => {
+          return new Promise((resolve6, reject) => {
             this.destroy(err2, (err3, data) => {
               return err3 ? (
                 /* istanbul ignore next: should never error */
                 reject(err3)
-              ) : resolve7(data);
+              ) : resolve6(data);
             });
           });
         }
@@ -4485,8 +4485,8 @@ var require_util2 = __commonJS({
     function createDeferredPromise() {
       let res;
       let rej;
-      const promise = new Promise((resolve7, reject) => {
-        res = resolve7;
+      const promise = new Promise((resolve6, reject) => {
+        res = resolve6;
         rej = reject;
       });
       return { promise, resolve: res, reject: rej };
@@ -6737,12 +6737,12 @@ upgrade: ${upgrade}\r
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve7, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve7;
+          callback = resolve6;
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
@@ -7412,12 +7412,12 @@ var require_client_h2 = __commonJS({
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve7, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve7;
+          callback = resolve6;
         }
       });
       h2stream.on("close", onDrain).on("drain", onDrain);
@@ -7896,16 +7896,16 @@ var require_client = __commonJS({
         return this[kNeedDrain] < 2;
       }
       async [kClose]() {
-        return new Promise((resolve7) => {
+        return new Promise((resolve6) => {
           if (this[kSize]) {
-            this[kClosedResolve] = resolve7;
+            this[kClosedResolve] = resolve6;
           } else {
-            resolve7(null);
+            resolve6(null);
           }
         });
       }
       async [kDestroy](err2) {
-        return new Promise((resolve7) => {
+        return new Promise((resolve6) => {
           const requests = this[kQueue].splice(this[kPendingIdx]);
           for (let i = 0; i < requests.length; i++) {
             const request = requests[i];
@@ -7916,7 +7916,7 @@ var require_client = __commonJS({
               this[kClosedResolve]();
               this[kClosedResolve] = null;
             }
-            resolve7(null);
+            resolve6(null);
           };
           if (this[kHTTPContext]) {
             this[kHTTPContext].destroy(err2, callback);
@@ -7967,7 +7967,7 @@ var require_client = __commonJS({
         });
       }
       try {
-        const socket = await new Promise((resolve7, reject) => {
+        const socket = await new Promise((resolve6, reject) => {
           client[kConnector]({
             host,
             hostname,
@@ -7979,7 +7979,7 @@ var require_client = __commonJS({
             if (err2) {
               reject(err2);
             } else {
-              resolve7(socket2);
+              resolve6(socket2);
             }
           });
         });
@@ -8315,8 +8315,8 @@ var require_pool_base = __commonJS({
         if (this[kQueue].isEmpty()) {
           await Promise.all(this[kClients].map((c) => c.close()));
         } else {
-          await new Promise((resolve7) => {
-            this[kClosedResolve] = resolve7;
+          await new Promise((resolve6) => {
+            this[kClosedResolve] = resolve6;
           });
         }
       }
@@ -9585,7 +9585,7 @@ var require_readable = __commonJS({
         if (this._readableState.closeEmitted) {
           return null;
         }
-        return await new Promise((resolve7, reject) => {
+        return await new Promise((resolve6, reject) => {
           if (this[kContentLength] > limit) {
             this.destroy(new AbortError());
           }
@@ -9598,7 +9598,7 @@ var require_readable = __commonJS({
             if (signal?.aborted) {
               reject(signal.reason ?? new AbortError());
             } else {
-              resolve7(null);
+              resolve6(null);
             }
           }).on("error", noop).on("data", function(chunk) {
             limit -= chunk.length;
@@ -9617,7 +9617,7 @@ var require_readable = __commonJS({
     }
     async function consume(stream, type) {
       assert(!stream[kConsume]);
-      return new Promise((resolve7, reject) => {
+      return new Promise((resolve6, reject) => {
         if (isUnusable(stream)) {
           const rState = stream._readableState;
           if (rState.destroyed && rState.closeEmitted === false) {
@@ -9634,7 +9634,7 @@ var require_readable = __commonJS({
             stream[kConsume] = {
               type,
               stream,
-              resolve: resolve7,
+              resolve: resolve6,
               reject,
               length: 0,
               body: []
@@ -9704,18 +9704,18 @@ var require_readable = __commonJS({
       return buffer;
     }
     function consumeEnd(consume2) {
-      const { type, body, resolve: resolve7, stream, length } = consume2;
+      const { type, body, resolve: resolve6, stream, length } = consume2;
       try {
         if (type === "text") {
-          resolve7(chunksDecode(body, length));
+          resolve6(chunksDecode(body, length));
         } else if (type === "json") {
-          resolve7(JSON.parse(chunksDecode(body, length)));
+          resolve6(JSON.parse(chunksDecode(body, length)));
         } else if (type === "arrayBuffer") {
-          resolve7(chunksConcat(body, length).buffer);
+          resolve6(chunksConcat(body, length).buffer);
         } else if (type === "blob") {
-          resolve7(new Blob(body, { type: stream[kContentType] }));
+          resolve6(new Blob(body, { type: stream[kContentType] }));
         } else if (type === "bytes") {
-          resolve7(chunksConcat(body, length));
+          resolve6(chunksConcat(body, length));
         }
         consumeFinish(consume2);
       } catch (err2) {
@@ -9972,9 +9972,9 @@ var require_api_request = __commonJS({
     };
     function request(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve7, reject) => {
+        return new Promise((resolve6, reject) => {
           request.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve7(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10197,9 +10197,9 @@ var require_api_stream = __commonJS({
     };
     function stream(opts, factory, callback) {
       if (callback === void 0) {
-        return new Promise((resolve7, reject) => {
+        return new Promise((resolve6, reject) => {
           stream.call(this, opts, factory, (err2, data) => {
-            return err2 ? reject(err2) : resolve7(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10484,9 +10484,9 @@ var require_api_upgrade = __commonJS({
     };
     function upgrade(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve7, reject) => {
+        return new Promise((resolve6, reject) => {
           upgrade.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve7(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10578,9 +10578,9 @@ var require_api_connect = __commonJS({
     };
     function connect(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve7, reject) => {
+        return new Promise((resolve6, reject) => {
           connect.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve7(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -14443,7 +14443,7 @@ var require_fetch = __commonJS({
       function dispatch({ body }) {
         const url = requestCurrentURL(request);
         const agent = fetchParams.controller.dispatcher;
-        return new Promise((resolve7, reject) => agent.dispatch(
+        return new Promise((resolve6, reject) => agent.dispatch(
           {
             path: url.pathname + url.search,
             origin: url.origin,
@@ -14519,7 +14519,7 @@ var require_fetch = __commonJS({
               }
               this.body = new Readable({ read: resume });
               const onError = this.onError.bind(this);
-              resolve7({
+              resolve6({
                 status,
                 statusText,
                 headersList,
@@ -14562,7 +14562,7 @@ var require_fetch = __commonJS({
               for (let i = 0; i < rawHeaders.length; i += 2) {
                 headersList.append(bufferToLowerCasedHeaderName(rawHeaders[i]), rawHeaders[i + 1].toString("latin1"), true);
               }
-              resolve7({
+              resolve6({
                 status,
                 statusText: STATUS_CODES[status],
                 headersList,
@@ -18303,8 +18303,8 @@ var require_util8 = __commonJS({
       return true;
     }
     function delay(ms) {
-      return new Promise((resolve7) => {
-        setTimeout(resolve7, ms).unref();
+      return new Promise((resolve6) => {
+        setTimeout(resolve6, ms).unref();
       });
     }
     module.exports = {
@@ -19183,7 +19183,7 @@ import {
   realpathSync,
   statSync
 } from "node:fs";
-import { isAbsolute, join, relative, resolve, sep } from "node:path";
+import { dirname, isAbsolute, join, relative, resolve, sep } from "node:path";
 function readRegularFile(abs) {
   const fd = openSync(abs, OPEN_FLAGS);
   try {
@@ -19333,6 +19333,26 @@ function findRecordFiles(root, recordDirs) {
   }
   const files = [...found.entries()].sort(([a], [b]) => a < b ? -1 : a > b ? 1 : 0).map(([, abs]) => abs);
   return { files, refused: refused2, missingDirs };
+}
+function recordFolderProblem(path, realRoot, recordDirs) {
+  let abs = resolve(path);
+  try {
+    abs = realpathSync(abs);
+  } catch {
+    try {
+      abs = resolve(realpathSync(dirname(abs)), abs.slice(dirname(abs).length + 1));
+    } catch {
+    }
+  }
+  const rel = relativeTo(realRoot, abs);
+  if (rel.startsWith("../") || rel === ".." || rel.startsWith("/")) return null;
+  const dirs = recordDirs.length > 0 ? recordDirs : ["."];
+  for (const d of dirs) {
+    const dir = d.replace(/^\.\/?/, "").replace(/\/+$/, "");
+    if (dir === "" || rel === dir || rel.startsWith(`${dir}/`))
+      return `${path} is inside the record folder ${dir === "" ? "." : dir}, where it would be taken for a record`;
+  }
+  return null;
 }
 var MAX_FILE_BYTES, RECORD_EXTENSIONS, UTF8, OPEN_FLAGS;
 var init_files = __esm({
@@ -29899,7 +29919,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve7.call(this, root, ref);
+      let _sch = resolve6.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -29926,7 +29946,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve7(root, ref) {
+    function resolve6(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -30790,7 +30810,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve7(baseURI, relativeURI, options) {
+    function resolve6(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -31181,7 +31201,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES: SCHEMES2,
       normalize: normalize2,
-      resolve: resolve7,
+      resolve: resolve6,
       resolveComponent,
       equal,
       serialize,
@@ -35199,7 +35219,7 @@ var init_waivers = __esm({
 
 // src/registry/load.ts
 import { realpathSync as realpathSync2 } from "node:fs";
-import { dirname } from "node:path";
+import { dirname as dirname2 } from "node:path";
 function loadRegistry(root, options) {
   const realRoot = realpathSync2(root);
   const found = findRecordFiles(realRoot, options.recordDirs);
@@ -35262,7 +35282,7 @@ function loadRecordFileOrThrow(realRoot, abs) {
     problems: parsed.problems,
     origin: { kind: "file" }
   };
-  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname2(abs), parsed.value);
   return loaded;
 }
 function asObject(v) {
@@ -69408,6 +69428,7 @@ var init_registry_phase = __esm({
           status: this.enabled ? "run" : "not-run",
           reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
           records: this.records,
+          ...this.options.mode === "full" ? {} : { comparedWith: this.registryRecords },
           pairs: this.pairs
         };
       }
@@ -72282,8 +72303,8 @@ var init_index_cache_shape = __esm({
 });
 
 // src/registry/index-cache.ts
-import { mkdirSync, readFileSync as readFileSync2, realpathSync as realpathSync4, renameSync, rmSync, statSync as statSync3, writeFileSync } from "node:fs";
-import { dirname as dirname2, resolve as resolve4 } from "node:path";
+import { mkdirSync, readFileSync as readFileSync2, renameSync, rmSync, statSync as statSync3, writeFileSync } from "node:fs";
+import { dirname as dirname3 } from "node:path";
 function entryRow(e) {
   if (e.row === null && e.rest !== null) {
     e.row = rowFromRest(e.rest, e.file, e.id, e.idLine);
@@ -72346,7 +72367,7 @@ function writeIndexCache(path, settings, entries) {
     } catch {
     }
     if (stat3 && !stat3.isFile()) return `${path} is not a regular file, so it is not replaced`;
-    mkdirSync(dirname2(path), { recursive: true });
+    mkdirSync(dirname3(path), { recursive: true });
     const head = JSON.stringify({ format: FORMAT, formatVersion: FORMAT_VERSION, settings });
     const lines = entries.map(lineOf2);
     writeFileSync(tmp, `${head}
@@ -72424,31 +72445,10 @@ function molfilesOf(text) {
   }
   return Array.isArray(raw2) && raw2.every((m) => Array.isArray(m) && m.length === 2 && isString(m[0]) && isString(m[1])) ? raw2 : null;
 }
-function cachePathProblem(path, realRoot, recordDirs) {
-  let abs = resolve4(path);
-  try {
-    abs = realpathSync4(abs);
-  } catch {
-    try {
-      abs = resolve4(realpathSync4(dirname2(abs)), abs.slice(dirname2(abs).length + 1));
-    } catch {
-    }
-  }
-  const rel = relativeTo(realRoot, abs);
-  if (rel.startsWith("../") || rel === ".." || rel.startsWith("/")) return null;
-  const dirs = recordDirs.length > 0 ? recordDirs : ["."];
-  for (const d of dirs) {
-    const dir = d.replace(/^\.\/?/, "").replace(/\/+$/, "");
-    if (dir === "" || rel === dir || rel.startsWith(`${dir}/`))
-      return `${path} is inside the record folder ${dir === "" ? "." : dir}, where it would be taken for a record`;
-  }
-  return null;
-}
 var INDEX_CACHE_FORMAT, FORMAT, MAX_CACHE_BYTES, FORMAT_VERSION, END, optional, COLUMNS;
 var init_index_cache = __esm({
   "src/registry/index-cache.ts"() {
     "use strict";
-    init_files();
     init_index_cache_shape();
     INDEX_CACHE_FORMAT = "stereogate registry index cache";
     FORMAT = INDEX_CACHE_FORMAT;
@@ -72635,8 +72635,8 @@ async function* mapOrdered(items, opts) {
         yield value;
       }
       if (inputDone && nextOut >= nextIndex) break;
-      await new Promise((resolve7) => {
-        wake = resolve7;
+      await new Promise((resolve6) => {
+        wake = resolve6;
         if (done.has(nextOut) || canRead() || pending.length > 0 && slots.some(hasRoom)) notify();
       });
     }
@@ -72717,6 +72717,7 @@ var init_index_build = __esm({
     "use strict";
     init_pool();
     init_blob_ids();
+    init_files();
     init_index_cache();
     init_index_keys();
     init_version();
@@ -72726,12 +72727,14 @@ var init_index_build = __esm({
       constructor(opts) {
         this.opts = opts;
         this.entries = new Array(opts.files.length);
-        this.cacheRefused = opts.cachePath === null ? null : cachePathProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
+        this.cacheRefused = opts.cachePath === null ? null : recordFolderProblem(opts.cachePath, opts.realRoot, opts.recordDirs);
       }
       opts;
       /** One entry per file, in the order of the files. */
       entries;
       unkept = /* @__PURE__ */ new Set();
+      /** Entries read in this run that go into the cache: none, and the cache on disk is still whole. */
+      newlyKept = 0;
       blobs;
       read = 0;
       described = 0;
@@ -72841,6 +72844,7 @@ var init_index_build = __esm({
           };
           this.unkept.delete(this.entries[i]);
           if (!result2.keep || blob === null || molfiles.some((m) => m[1] === null)) this.unkept.add(entry);
+          else this.newlyKept++;
           this.entries[i] = entry;
         }
         if (full) this.described += at2.length;
@@ -72858,7 +72862,7 @@ var init_index_build = __esm({
         if (this.cacheRefused !== null) parts.push(`cache not used: ${this.cacheRefused}`);
         if (this.cache && this.cache.status !== "used") parts.push(`cache not used: ${this.cache.reason}`);
         const dropped = (this.cache?.entries.length ?? 0) !== this.reused;
-        if (this.useCache && (this.read > 0 || this.described > 0 || dropped || this.cache?.status !== "used")) {
+        if (this.useCache && (this.newlyKept > 0 || dropped || this.cache?.status !== "used")) {
           const kept = this.entries.filter((e) => !this.unkept.has(e));
           const error2 = writeIndexCache(this.opts.cachePath, this.settings, kept);
           parts.push(error2 === null ? `cache written to ${this.opts.cachePath}` : `cache not written: ${error2}`);
@@ -73049,8 +73053,8 @@ var init_review_against_index = __esm({
 });
 
 // src/audit/run.ts
-import { existsSync as existsSync3, realpathSync as realpathSync5, statSync as statSync4 } from "node:fs";
-import { resolve as resolve5 } from "node:path";
+import { existsSync as existsSync3, realpathSync as realpathSync4, statSync as statSync4 } from "node:fs";
+import { resolve as resolve4 } from "node:path";
 function auditRecords(records, options) {
   const config = options.config ?? { ...DEFAULT_CONFIG };
   const cache2 = new StructureCache(options.engine);
@@ -73240,11 +73244,11 @@ function summarize(records) {
   return s;
 }
 async function openRegistry(options) {
-  const rootAbs = resolve5(options.root);
+  const rootAbs = resolve4(options.root);
   if (!existsSync3(rootAbs) || !statSync4(rootAbs).isDirectory()) {
     throw new ConfigError(`registry folder ${options.root} does not exist`);
   }
-  const root = realpathSync5(rootAbs);
+  const root = realpathSync4(rootAbs);
   const { config } = loadConfig(root, options.configFile, stripUndefined(options.config));
   const checks = options.checks ?? (await Promise.resolve().then(() => (init_checks(), checks_exports))).CHECKS;
   const ids = [SCHEMA_CHECK_ID, ...checks.map((c) => c.id)];
@@ -73555,11 +73559,11 @@ import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve7) {
-      resolve7(value);
+    return value instanceof P ? value : new P(function(resolve6) {
+      resolve6(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve7, reject) {
+  return new (P || (P = Promise))(function(resolve6, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -73575,7 +73579,7 @@ var __awaiter = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result2) {
-      result2.done ? resolve7(result2.value) : adopt(result2.value).then(fulfilled, rejected);
+      result2.done ? resolve6(result2.value) : adopt(result2.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -74558,7 +74562,7 @@ var DEFAULT_TIMEOUT_MS = 3e4;
 function createClient(options) {
   const base = new URL(options.baseUrl.replace(/\/+$/, "") + "/");
   const policy = { ...DEFAULT_RETRY_POLICY, ...options.retry };
-  const sleep = options.sleep ?? ((ms) => new Promise((resolve7) => setTimeout(resolve7, ms)));
+  const sleep = options.sleep ?? ((ms) => new Promise((resolve6) => setTimeout(resolve6, ms)));
   const maxPages = options.maxPages ?? 100;
   const timeoutMs = options.timeoutMs ?? DEFAULT_TIMEOUT_MS;
   const transport = options.transport ?? transportFor(base);
@@ -74692,7 +74696,7 @@ function clientFor(settings, runner) {
 
 // src/action/review.ts
 import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
-import { dirname as dirname4 } from "node:path";
+import { dirname as dirname5 } from "node:path";
 
 // src/github/paths.ts
 import { posix as posix2 } from "node:path";
@@ -74733,9 +74737,9 @@ function buildAnnotations(result2, registryDir, max = 50) {
 
 // src/github/sarif-file.ts
 import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
-import { dirname as dirname3 } from "node:path";
+import { dirname as dirname4 } from "node:path";
 async function writeSarifFile(path, sarif) {
-  await mkdir2(dirname3(path), { recursive: true });
+  await mkdir2(dirname4(path), { recursive: true });
   await writeFile2(path, JSON.stringify(sarif, null, 2) + "\n", "utf8");
 }
 
@@ -75408,7 +75412,7 @@ async function review(settings, engine2, client, runner) {
   }
   if (settings.reportFile !== null) {
     try {
-      await mkdir3(dirname4(settings.reportFile), { recursive: true });
+      await mkdir3(dirname5(settings.reportFile), { recursive: true });
       await writeFile3(
         settings.reportFile,
         redactSecret(engine2.renderMarkdown(result2, { maxChars: Number.POSITIVE_INFINITY }), settings.token),
@@ -75491,19 +75495,19 @@ var coreRunner = {
 };
 
 // src/action/settings.ts
-import { existsSync as existsSync4, readFileSync as readFileSync3, realpathSync as realpathSync6 } from "node:fs";
-import { dirname as dirname5, isAbsolute as isAbsolute4, join as join8, relative as relative3, resolve as resolve6, sep as sep3 } from "node:path";
+import { existsSync as existsSync4, readFileSync as readFileSync3, realpathSync as realpathSync5 } from "node:fs";
+import { dirname as dirname6, isAbsolute as isAbsolute4, join as join8, relative as relative3, resolve as resolve5, sep as sep3 } from "node:path";
 var SettingsError = class extends Error {
   name = "SettingsError";
 };
 function readSettings(input, env) {
-  const workspace = realpathSync6(env.GITHUB_WORKSPACE || process.cwd());
-  const registryRoot = realpathSync6(insidePath(workspace, input("registry-path") || ".", "registry-path"));
+  const workspace = realpathSync5(env.GITHUB_WORKSPACE || process.cwd());
+  const registryRoot = realpathSync5(insidePath(workspace, input("registry-path") || ".", "registry-path"));
   const repoRoot = checkoutOf(registryRoot, workspace);
   const registryDir = relative3(repoRoot, registryRoot).split(sep3).join("/");
   const optionalPath = (name) => {
     const value = input(name).trim();
-    return value === "" ? null : resolve6(workspace, value);
+    return value === "" ? null : resolve5(workspace, value);
   };
   const configValue = input("config-file").trim();
   const repository = parseRepository(env.GITHUB_REPOSITORY);
@@ -75547,7 +75551,7 @@ function parseIndexCache(raw2, workspace, runnerTemp) {
   const value = raw2.trim();
   if (value === "none") return null;
   if (value === "") return runnerTemp ? join8(runnerTemp, "stereogate", "index-cache.json") : null;
-  return resolve6(workspace, value);
+  return resolve5(workspace, value);
 }
 function parseFailOn(raw2) {
   const value = raw2.trim() || "error";
@@ -75580,7 +75584,7 @@ function parseRepository(raw2) {
   return match === null ? null : { owner: match[1], repo: match[2] };
 }
 function insidePath(workspace, value, name) {
-  const abs = resolve6(workspace, value);
+  const abs = resolve5(workspace, value);
   const rel = relative3(workspace, abs);
   if (rel === ".." || rel.startsWith(`..${sep3}`) || isAbsolute4(rel)) {
     throw new SettingsError(`${name} must be inside the workspace: '${value}'`);
@@ -75588,9 +75592,9 @@ function insidePath(workspace, value, name) {
   return abs;
 }
 function checkoutOf(dir, workspace) {
-  for (let at2 = dir; ; at2 = dirname5(at2)) {
+  for (let at2 = dir; ; at2 = dirname6(at2)) {
     if (existsSync4(join8(at2, ".git"))) return at2;
-    if (at2 === workspace || dirname5(at2) === at2) return workspace;
+    if (at2 === workspace || dirname6(at2) === at2) return workspace;
   }
 }
 function pullRequestOf(eventPath, repository) {

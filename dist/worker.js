@@ -718,7 +718,7 @@ import {
   realpathSync,
   statSync
 } from "node:fs";
-import { isAbsolute, join, relative, resolve, sep } from "node:path";
+import { dirname, isAbsolute, join, relative, resolve, sep } from "node:path";
 function readRegularFile(abs) {
   const fd = openSync(abs, OPEN_FLAGS);
   try {
@@ -15833,7 +15833,7 @@ var init_parse = __esm({
 });
 
 // src/registry/load.ts
-import { dirname } from "node:path";
+import { dirname as dirname2 } from "node:path";
 function loadRecordFile(realRoot, abs) {
   try {
     return loadRecordFileOrThrow(realRoot, abs);
@@ -15877,7 +15877,7 @@ function loadRecordFileOrThrow(realRoot, abs) {
     problems: parsed.problems,
     origin: { kind: "file" }
   };
-  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname(abs), parsed.value);
+  if (asObject(parsed.value)) loaded.sources = structureSources(realRoot, dirname2(abs), parsed.value);
   return loaded;
 }
 function asObject(v) {
@@ -49932,6 +49932,7 @@ var init_registry_phase = __esm({
           status: this.enabled ? "run" : "not-run",
           reason: this.enabled ? `compared ${how}` : `${CHECK.id} is off in the configuration`,
           records: this.records,
+          ...this.options.mode === "full" ? {} : { comparedWith: this.registryRecords },
           pairs: this.pairs
         };
       }
